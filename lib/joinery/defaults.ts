@@ -1,0 +1,61 @@
+import { inches, type Mm } from '@/lib/units/length';
+
+/**
+ * Editable defaults for drawer schedules. Conventions of the trade, not standards: every one can be changed per
+ * schedule. Sources as in DOMAIN.md: [CP] = common practice, no source; "from memory" where it is.
+ */
+export const DRAWER_DEFAULTS = {
+  frontThickness: inches(3 / 4), // ¾″ box front with ½″ sides is common [CP]
+  sideThickness: inches(1 / 2), // [CP]
+
+  // Side-mount ball-bearing slides: ½″ per side, box height ≤ opening − ½″ [CP].
+  sideMountSideClearance: inches(1 / 2),
+  sideMountHeightClearance: inches(1 / 2),
+  // Undermount: ≈ ⅝″ total width deduction with ½″ sides and a ½″ bottom recess [CP]; check the maker's spec.
+  undermountWidthDeduction: inches(5 / 8),
+  undermountHeightDeduction: inches(1), // [CP, from memory]
+  undermountBottomRecess: inches(1 / 2),
+  // Wooden runners: a small running clearance [CP, from memory].
+  runnerSideClearance: 1,
+  runnerHeightClearance: 3,
+  // Room behind the box in the carcass [CP, from memory].
+  backClearance: inches(1 / 2),
+
+  // Lock rabbet: a bit cutting ⅜″ into ½″ stock leaves ⅛″ of the front's face outside the side's tongue [CP].
+  lockRabbetFaceLeft: inches(1 / 8),
+  // Rabbet and dado: ¼″ × ¼″ dado in ½″ sides (Woodsmith tip).
+  dadoDepth: inches(1 / 4),
+  dadoWidth: inches(1 / 4),
+  // Loose tenons [CP, from memory].
+  tenonThickness: inches(1 / 4),
+  mortiseDepth: inches(5 / 16),
+  tenonsPerCorner: 2,
+  // Half-blind dovetail: 3/16″ lap on a ¾″ front (Fine Woodworking).
+  dovetailLap: inches(3 / 16),
+  boxJointFinger: inches(1 / 4), // [CP]
+
+  // Lipped box front: overhangs each side to cover the slide [CP].
+  frontLip: inches(1 / 2),
+  // Applied fronts: frameless reveal 1.5 mm per side, 3 mm between fronts [CP]; full overlay on 18 mm carcass
+  // sides therefore laps 18 − 1.5 = 16.5 mm past the opening [derived].
+  appliedFrontThickness: inches(3 / 4),
+  frontReveal: 1.5,
+  fullOverlayOn18mmCarcass: 18 - 1.5,
+
+  // Bottom captured in a ¼ × ¼″ groove, ½″ up, 1/16″ total clearance [CP]; ¼″ plywood bottom.
+  bottomThickness: inches(1 / 4),
+  grooveWidth: inches(1 / 4),
+  grooveDepth: inches(1 / 4),
+  grooveHeight: inches(1 / 2),
+  bottomClearance: inches(1 / 16),
+
+  boxMaterial: 'drawer-box stock',
+  bottomMaterial: 'plywood',
+  appliedFrontMaterial: 'drawer-front stock',
+} as const satisfies Record<string, Mm | string>;
+
+/** Standard ball-bearing slide lengths, 12–28″ in 2″ steps [CP]. */
+export const IMPERIAL_SLIDE_LENGTHS: readonly Mm[] = [12, 14, 16, 18, 20, 22, 24, 26, 28].map(inches);
+
+/** Metric slide lengths, 250–650 mm in 50 mm steps [CP, from memory]. */
+export const METRIC_SLIDE_LENGTHS: readonly Mm[] = [250, 300, 350, 400, 450, 500, 550, 600, 650];

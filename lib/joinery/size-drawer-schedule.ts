@@ -1,0 +1,227 @@
+import type { Mm } from '@/lib/units/length';
+import { drawerScheduleSchema, type DrawerSchedule } from '@/shared/schemas/drawer-schedule';
+import { boxFromOpening } from '@/lib/joinery/box-from-opening';
+import { DRAWER_DEFAULTS } from '@/lib/joinery/defaults';
+import { mmText } from '@/lib/joinery/format';
+import { JOINT_NAMES, jointCorners, jointErrors, jointMachining, type BoxThickness, type JointCorners } from '@/lib/joinery/joint-rules';
+import { requiredSetupCards } from '@/lib/joinery/setup-cards';
+import type { BoxSize, DrawerPart, FieldError, SetupCardKey, SizedBox } from '@/lib/joinery/types';
+
+export type SizeDrawerScheduleResult =
+  | { ok: true; parts: DrawerPart[]; box: SizedBox; setupCardKeys: SetupCardKey[]; notes: string[] }
+  | { ok: false; errors: FieldError[] };
+
+/**
+ * Turns a drawer schedule into every part of its boxes, sized exactly, or into one error per field that makes the
+ * box impossible. Input is untrusted: it is parsed here. Rules: lib/joinery/RULES.md.
+ */
+export function sizeDrawerSchedule(input: unknown): SizeDrawerScheduleResult {
+  const parsed = drawerScheduleSchema.safeParse(input);
+  if (!parsed.success) {
+    return {
+      ok: false,
+      errors: parsed.error.issues.map((issue) => ({ path: issue.path.join('.'), message: issue.message })),
+    };
+  }
+  return sizeParsedSchedule(parsed.data);
+}
+
+function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
+  const outside = boxFromOpening(s);
+  if (!outside.ok) return outside;
+  const { box: size, notes } = outside;
+
+  const t: BoxThickness = { front: s.thickness.frontMm, back: s.thickness.backMm ?? s.thickness.frontMm, side: s.thickness.sideMm };
+  const box: SizedBox = {
+    ...size,
+    insideWidthMm: size.widthMm - 2 * t.side,
+    insideDepthMm: size.depthMm - t.front - t.back,
+    wallHeightMm: size.heightMm - (s.bottom.mount === 'applied' ? s.bottom.thicknessMm : 0),
+  };
+  const corners = jointCorners(s.joint, t);
+  const lipMm = s.front.style === 'lipped' ? s.front.lipMm : 0;
+
+  const errors = [
+    ...boxErrors(box, t),
+    ...jointErrors(s.joint, t, box.wallHeightMm),
+    ...bottomErrors(s, box, t),
+    ...frontStyleErrors(s, corners, t),
+  ];
+  if (errors.length > 0) return { ok: false, errors };
+
+  const wallPart = (
+    role: 'front' | 'back' | 'side',
+    lengthMm: Mm,
+    endEngagementMm: Mm[],
+    thicknessMm: Mm,
+    material: string,
+    overhangMm = 0,
+  ): DrawerPart => ({
+    ...partBase(s, role, role === 'side' ? 2 : 1),
+    lengthMm,
+    widthMm: box.wallHeightMm,
+    thicknessMm,
+    material,
+    grain: 'along-length',
+    jointAllowanceMm: endEngagementMm[0] + endEngagementMm[1],
+    endEngagementMm,
+    overhangMm,
+    machining: [
+      ...(overhangMm > 0 ? [`Overhangs the box ${mmText(overhangMm)} at each end to cover the slides.`] : []),
+      ...jointMachining(s.joint, role, corners, t, lipMm),
+      ...grooveMachining(s, role),
+    ],
+  });
+
+  const frontMaterial = s.materials.front ?? s.materials.sides;
+  const parts: DrawerPart[] = [
+    wallPart('front', box.insideWidthMm + 2 * corners.front.panelEngagementMm + 2 * lipMm,
+      [corners.front.panelEngagementMm, corners.front.panelEngagementMm], t.front, frontMaterial, lipMm),
+    wallPart('back', box.insideWidthMm + 2 * corners.back.panelEngagementMm,
+      [corners.back.panelEngagementMm, corners.back.panelEngagementMm], t.back, s.materials.back ?? frontMaterial),
+    wallPart('side', box.insideDepthMm + corners.front.sideEngagementMm + corners.back.sideEngagementMm,
+      [corners.front.sideEngagementMm, corners.back.sideEngagementMm], t.side, s.materials.sides),
+    bottomPart(s, box, t),
+  ];
+  const applied = appliedFrontPart(s);
+  if (applied) parts.push(applied);
+
+  return { ok: true, parts, box, setupCardKeys: requiredSetupCards(s), notes: [...notes, ...scheduleNotes(s, t)] };
+}
+
+function partBase(s: DrawerSchedule, role: DrawerPart['role'], quantityPerBox: number) {
+  return { schedule: s.label, role, quantityPerBox, quantity: quantityPerBox * s.quantity };
+}
+
+function boxErrors(box: SizedBox, t: BoxThickness): FieldError[] {
+  const errors: FieldError[] = [];
+  if (box.insideWidthMm <= 0)
+    errors.push({ path: 'thickness.sideMm', message: `Two ${mmText(t.side)} sides fill the whole box width (${mmText(box.widthMm)})` });
+  if (box.insideDepthMm <= 0)
+    errors.push({ path: 'thickness.frontMm', message: `The front and back (${mmText(t.front + t.back)}) fill the whole box depth (${mmText(box.depthMm)})` });
+  if (box.wallHeightMm <= 0)
+    errors.push({ path: 'bottom.thicknessMm', message: `The applied bottom is as thick as the box is tall (${mmText(box.heightMm)})` });
+  return errors;
+}
+
+function bottomErrors(s: DrawerSchedule, box: SizedBox, t: BoxThickness): FieldError[] {
+  const errors: FieldError[] = [];
+  const { bottom, slide } = s;
+  if (bottom.mount === 'applied') {
+    if (slide.type === 'undermount')
+      errors.push({ path: 'bottom.mount', message: 'Undermount slides need the bottom recessed in a groove, not applied under the box' });
+    return errors;
+  }
+  const g = bottom.groove;
+  const thinnest = Math.min(t.side, t.front, t.back);
+  if (g.depthMm >= thinnest)
+    errors.push({ path: 'bottom.groove.depthMm', message: `The groove (${mmText(g.depthMm)} deep) must be shallower than the thinnest wall (${mmText(thinnest)})` });
+  if (bottom.thicknessMm > g.widthMm)
+    errors.push({ path: 'bottom.thicknessMm', message: `The bottom (${mmText(bottom.thicknessMm)}) is thicker than its groove is wide (${mmText(g.widthMm)})` });
+  if (g.heightMm + g.widthMm >= box.wallHeightMm)
+    errors.push({ path: 'bottom.groove.heightMm', message: `The groove (${mmText(g.heightMm)} up, ${mmText(g.widthMm)} wide) does not fit in a ${mmText(box.wallHeightMm)} tall box` });
+  if (g.clearanceMm >= 2 * g.depthMm)
+    errors.push({ path: 'bottom.groove.clearanceMm', message: `With ${mmText(g.clearanceMm)} of clearance the bottom would not reach into ${mmText(g.depthMm)} deep grooves` });
+  if (slide.type === 'undermount' && g.heightMm < slide.bottomRecessMm)
+    errors.push({ path: 'bottom.groove.heightMm', message: `Undermount slides need the bottom at least ${mmText(slide.bottomRecessMm)} up; the groove is ${mmText(g.heightMm)} up` });
+  return errors;
+}
+
+function frontStyleErrors(s: DrawerSchedule, corners: JointCorners, t: BoxThickness): FieldError[] {
+  const f = s.front;
+  if (f.style === 'lipped') {
+    // A lip extends the front past the side; only a joint that hides the side's end behind the front allows it.
+    const frontCoversSide = corners.front.panelEngagementMm >= t.side && corners.front.sideEngagementMm < t.front;
+    return frontCoversSide
+      ? []
+      : [{ path: 'front.style', message: `A ${JOINT_NAMES[s.joint.method]} shows the side's end on the front; a lipped front needs a joint that hides it (lock rabbet, half-blind dovetail, or a butt joint with the front full width), or use an applied front` }];
+  }
+  if (f.style === 'applied' && s.size.from === 'box') {
+    const missing: FieldError[] = [];
+    if (f.widthMm === undefined) missing.push({ path: 'front.widthMm', message: 'Give the applied front width, or size the schedule from its opening' });
+    if (f.heightMm === undefined) missing.push({ path: 'front.heightMm', message: 'Give the applied front height, or size the schedule from its opening' });
+    return missing;
+  }
+  if (f.style === 'applied' && f.fit === 'inset' && s.size.from === 'opening') {
+    const smaller = Math.min(s.size.widthMm, s.size.heightMm);
+    if (2 * f.revealMm >= smaller)
+      return [{ path: 'front.revealMm', message: `Reveals of ${mmText(f.revealMm)} leave no front in a ${mmText(smaller)} opening` }];
+  }
+  return [];
+}
+
+function grooveMachining(s: DrawerSchedule, role: 'front' | 'back' | 'side'): string[] {
+  if (s.bottom.mount !== 'groove') return [];
+  const g = s.bottom.groove;
+  const stopped = role === 'side' && s.joint.method !== 'lock-rabbet' && s.joint.method !== 'rabbet-and-dado';
+  return [
+    `Bottom groove ${mmText(g.widthMm)} wide × ${mmText(g.depthMm)} deep along the inside face, its lower edge ${mmText(g.heightMm)} above the bottom edge${stopped ? '; stop it or hide it in a joint where it would show at the ends' : ''}.`,
+  ];
+}
+
+function bottomPart(s: DrawerSchedule, box: SizedBox, t: BoxThickness): DrawerPart {
+  const base = { ...partBase(s, 'bottom', 1), thicknessMm: s.bottom.thicknessMm, material: s.bottom.material, grain: s.bottom.grain, endEngagementMm: [], overhangMm: 0 };
+  if (s.bottom.mount === 'applied') {
+    return {
+      ...base,
+      lengthMm: box.widthMm,
+      widthMm: box.depthMm,
+      jointAllowanceMm: 2 * t.side,
+      machining: ['Applied under the box, flush with its outside faces; glue and fasten.'],
+    };
+  }
+  const reach = 2 * s.bottom.groove.depthMm - s.bottom.groove.clearanceMm;
+  return {
+    ...base,
+    // Length runs side to side, so a solid-wood bottom moves front to back, where the grooves leave room.
+    lengthMm: box.insideWidthMm + reach,
+    widthMm: box.insideDepthMm + reach,
+    jointAllowanceMm: reach,
+    machining: [`Captured in the grooves on all four sides with ${mmText(s.bottom.groove.clearanceMm)} total play each way.`],
+  };
+}
+
+function appliedFrontPart(s: DrawerSchedule): DrawerPart | null {
+  const f = s.front;
+  if (f.style !== 'applied') return null;
+  const opening: BoxSize | null = s.size.from === 'opening' ? s.size : null;
+  const fromOpening = (o: BoxSize) =>
+    f.fit === 'overlay'
+      ? { w: o.widthMm + 2 * f.overlayMm.side, h: o.heightMm + f.overlayMm.top + f.overlayMm.bottom }
+      : { w: o.widthMm - 2 * f.revealMm, h: o.heightMm - 2 * f.revealMm };
+  const derived = opening ? fromOpening(opening) : null;
+  // frontStyleErrors has made sure an explicit size exists when there is no opening.
+  const lengthMm = f.widthMm ?? derived!.w;
+  const widthMm = f.heightMm ?? derived!.h;
+  return {
+    ...partBase(s, 'applied-front', 1),
+    lengthMm,
+    widthMm,
+    thicknessMm: f.thicknessMm,
+    material: f.material,
+    grain: 'along-length',
+    jointAllowanceMm: 0,
+    endEngagementMm: [],
+    overhangMm: 0,
+    machining: [
+      f.fit === 'overlay'
+        ? `Overlay front: laps the opening ${mmText(f.overlayMm.side)} each side, ${mmText(f.overlayMm.top)} top, ${mmText(f.overlayMm.bottom)} bottom; screwed on from inside the box.`
+        : `Inset front: ${mmText(f.revealMm)} reveal on each edge; screwed on from inside the box.`,
+    ],
+  };
+}
+
+function scheduleNotes(s: DrawerSchedule, t: BoxThickness): string[] {
+  const notes: string[] = [];
+  if (s.slide.type === 'undermount' && t.side > DRAWER_DEFAULTS.undermountWidthDeduction)
+    notes.push(`Undermount slides are usually specified for sides up to ${mmText(DRAWER_DEFAULTS.undermountWidthDeduction)}; check the maker's spec for ${mmText(t.side)} sides.`);
+  if (s.joint.method === 'butt-pocket-screw' && Math.min(t.side, t.front, t.back) < DRAWER_DEFAULTS.sideThickness)
+    notes.push('Pocket-screw jigs usually need stock at least 12.7 mm thick; check the jig.');
+  if (s.joint.method === 'butt-loose-tenon') {
+    const corners = 4 * s.joint.tenonsPerCorner * s.quantity;
+    notes.push(`${corners} loose tenons ${mmText(s.joint.tenonThicknessMm)} thick, each ${mmText(2 * s.joint.mortiseDepthMm)} long, cut from tenon stock.`);
+  }
+  if (s.front.style === 'applied' && s.size.from === 'opening' && s.front.fit === 'overlay')
+    notes.push('Fronts stacked in one carcass want 3 mm between them: lower the top or bottom overlay by half of that where two fronts meet.');
+  return notes;
+}

@@ -1,0 +1,205 @@
+import { z } from 'zod';
+import { DRAWER_DEFAULTS as D } from '@/lib/joinery/defaults';
+
+/**
+ * A drawer schedule: a set of identical drawer boxes. All lengths are mm. Most fields have trade defaults
+ * (lib/joinery/defaults.ts), so a shop fills the label, quantity and size and may change the rest.
+ */
+
+const positiveMm = (what: string) =>
+  z.number({ error: `${what} must be a length in mm` }).finite().positive({ error: `${what} must be more than 0 mm` });
+const nonNegativeMm = (what: string) =>
+  z.number({ error: `${what} must be a length in mm` }).finite().min(0, { error: `${what} cannot be negative` });
+
+export const JOINT_METHODS = [
+  'lock-rabbet',
+  'rabbet-and-dado',
+  'butt-pocket-screw',
+  'butt-loose-tenon',
+  'half-blind-dovetail',
+  'through-dovetail',
+  'box-joint',
+] as const;
+export const jointMethodSchema = z.enum(JOINT_METHODS);
+export type JointMethod = z.infer<typeof jointMethodSchema>;
+
+/** Which part runs through at a butt corner: the sides the full depth (A) or the front and back the full width (B). */
+export const buttLayoutSchema = z.enum(['sides-full-depth', 'front-back-full-width']);
+
+export const jointSchema = z.discriminatedUnion('method', [
+  z.object({
+    method: z.literal('lock-rabbet'),
+    /** Front/back thickness left outside the side's tongue (published articles call it the lip). */
+    faceLeftMm: nonNegativeMm('Face left outside the tongue').default(D.lockRabbetFaceLeft),
+  }),
+  z.object({
+    method: z.literal('rabbet-and-dado'),
+    dadoDepthMm: nonNegativeMm('Dado depth').default(D.dadoDepth),
+    dadoWidthMm: positiveMm('Dado width').default(D.dadoWidth),
+  }),
+  z.object({
+    method: z.literal('butt-pocket-screw'),
+    layout: buttLayoutSchema.default('sides-full-depth'),
+  }),
+  z.object({
+    method: z.literal('butt-loose-tenon'),
+    layout: buttLayoutSchema.default('sides-full-depth'),
+    tenonThicknessMm: positiveMm('Tenon thickness').default(D.tenonThickness),
+    mortiseDepthMm: positiveMm('Mortise depth').default(D.mortiseDepth),
+    tenonsPerCorner: z.int().min(1).max(6).default(D.tenonsPerCorner),
+  }),
+  z.object({
+    method: z.literal('half-blind-dovetail'),
+    lapMm: nonNegativeMm('Lap').default(D.dovetailLap),
+  }),
+  z.object({ method: z.literal('through-dovetail') }),
+  z.object({
+    method: z.literal('box-joint'),
+    fingerWidthMm: positiveMm('Finger width').default(D.boxJointFinger),
+  }),
+]);
+
+export const SLIDE_TYPES = ['side-mount', 'undermount', 'wooden-runners', 'none'] as const;
+
+export const slideSchema = z.discriminatedUnion('type', [
+  z.object({
+    type: z.literal('side-mount'),
+    sideClearanceMm: nonNegativeMm('Side clearance').default(D.sideMountSideClearance),
+    heightClearanceMm: nonNegativeMm('Height clearance').default(D.sideMountHeightClearance),
+  }),
+  z.object({
+    type: z.literal('undermount'),
+    widthDeductionMm: nonNegativeMm('Width deduction').default(D.undermountWidthDeduction),
+    heightDeductionMm: nonNegativeMm('Height deduction').default(D.undermountHeightDeduction),
+    bottomRecessMm: nonNegativeMm('Bottom recess').default(D.undermountBottomRecess),
+  }),
+  z.object({
+    type: z.literal('wooden-runners'),
+    sideClearanceMm: nonNegativeMm('Side clearance').default(D.runnerSideClearance),
+    heightClearanceMm: nonNegativeMm('Height clearance').default(D.runnerHeightClearance),
+  }),
+  z.object({
+    type: z.literal('none'),
+    sideClearanceMm: nonNegativeMm('Side clearance').default(0),
+    heightClearanceMm: nonNegativeMm('Height clearance').default(0),
+  }),
+]);
+
+/** How box depth follows from the opening. Left out: the longest standard slide for slides, else opening less clearance. */
+export const depthRuleSchema = z.discriminatedUnion('rule', [
+  z.object({
+    rule: z.literal('longest-standard-slide'),
+    series: z.enum(['imperial', 'metric']).default('imperial'),
+    backClearanceMm: nonNegativeMm('Back clearance').default(D.backClearance),
+  }),
+  z.object({ rule: z.literal('slide-length'), slideLengthMm: positiveMm('Slide length') }),
+  z.object({
+    rule: z.literal('opening-less-clearance'),
+    backClearanceMm: nonNegativeMm('Back clearance').default(D.backClearance),
+  }),
+]);
+
+export const drawerSizeSchema = z.discriminatedUnion('from', [
+  z.object({
+    from: z.literal('opening'),
+    widthMm: positiveMm('Opening width'),
+    heightMm: positiveMm('Opening height'),
+    depthMm: positiveMm('Opening depth'),
+    depthRule: depthRuleSchema.optional(),
+  }),
+  z.object({
+    from: z.literal('box'),
+    widthMm: positiveMm('Box width'),
+    heightMm: positiveMm('Box height'),
+    depthMm: positiveMm('Box depth'),
+  }),
+]);
+
+export const frontStyleSchema = z.discriminatedUnion('style', [
+  z.object({ style: z.literal('flush') }),
+  z.object({ style: z.literal('lipped'), lipMm: positiveMm('Lip').default(D.frontLip) }),
+  z.object({
+    style: z.literal('applied'),
+    fit: z.enum(['overlay', 'inset']).default('overlay'),
+    /** Overlay: how far the front laps past the opening on each edge. */
+    overlayMm: z
+      .object({
+        side: nonNegativeMm('Side overlay').default(D.fullOverlayOn18mmCarcass),
+        top: nonNegativeMm('Top overlay').default(D.fullOverlayOn18mmCarcass),
+        bottom: nonNegativeMm('Bottom overlay').default(D.fullOverlayOn18mmCarcass),
+      })
+      .prefault({}),
+    /** Inset: gap between the front and the opening on each edge. */
+    revealMm: nonNegativeMm('Reveal').default(D.frontReveal),
+    thicknessMm: positiveMm('Applied front thickness').default(D.appliedFrontThickness),
+    material: z.string().trim().min(1).max(120).default(D.appliedFrontMaterial),
+    /** Explicit size; wins over the opening (and is needed when the schedule gives the box size). */
+    widthMm: positiveMm('Applied front width').optional(),
+    heightMm: positiveMm('Applied front height').optional(),
+  }),
+]);
+
+export const grainRuleSchema = z.enum(['along-length', 'any']);
+
+export const bottomSchema = z.discriminatedUnion('mount', [
+  z.object({
+    mount: z.literal('groove'),
+    thicknessMm: positiveMm('Bottom thickness').default(D.bottomThickness),
+    material: z.string().trim().min(1).max(120).default(D.bottomMaterial),
+    grain: grainRuleSchema.default('any'),
+    groove: z
+      .object({
+        widthMm: positiveMm('Groove width').default(D.grooveWidth),
+        depthMm: positiveMm('Groove depth').default(D.grooveDepth),
+        /** From the box's bottom edge to the groove's lower edge. */
+        heightMm: nonNegativeMm('Groove height').default(D.grooveHeight),
+        /** Total play across the bottom, split between the two grooves it spans. */
+        clearanceMm: z
+          .number({ error: 'Bottom clearance must be a length in mm' })
+          .finite()
+          .min(0, { error: 'Bottom clearance cannot be negative: the bottom would be wider than its grooves allow' }).default(D.bottomClearance),
+      })
+      .prefault({}),
+  }),
+  z.object({
+    mount: z.literal('applied'),
+    thicknessMm: positiveMm('Bottom thickness').default(D.bottomThickness),
+    material: z.string().trim().min(1).max(120).default(D.bottomMaterial),
+    grain: grainRuleSchema.default('any'),
+  }),
+]);
+
+export const drawerScheduleSchema = z.object({
+  label: z.string().trim().min(1, { error: 'Give the schedule a label' }).max(80),
+  quantity: z.int({ error: 'Quantity must be a whole number' }).min(1, { error: 'Quantity must be at least 1' }).max(10_000),
+  size: drawerSizeSchema,
+  slide: slideSchema.prefault({ type: 'side-mount' }),
+  joint: jointSchema.prefault({ method: 'lock-rabbet' }),
+  thickness: z
+    .object({
+      frontMm: positiveMm('Front thickness').default(D.frontThickness),
+      /** Left out: same as the front. */
+      backMm: positiveMm('Back thickness').optional(),
+      sideMm: positiveMm('Side thickness').default(D.sideThickness),
+    })
+    .prefault({}),
+  front: frontStyleSchema.prefault({ style: 'flush' }),
+  bottom: bottomSchema.prefault({ mount: 'groove' }),
+  materials: z
+    .object({
+      sides: z.string().trim().min(1).max(120).default(D.boxMaterial),
+      /** Left out: same as the sides. */
+      front: z.string().trim().min(1).max(120).optional(),
+      /** Left out: same as the front. */
+      back: z.string().trim().min(1).max(120).optional(),
+    })
+    .prefault({}),
+});
+
+export type DrawerSchedule = z.output<typeof drawerScheduleSchema>;
+export type DrawerScheduleInput = z.input<typeof drawerScheduleSchema>;
+export type Joint = DrawerSchedule['joint'];
+export type Slide = DrawerSchedule['slide'];
+export type FrontStyle = DrawerSchedule['front'];
+export type Bottom = DrawerSchedule['bottom'];
+export type GrainRule = z.infer<typeof grainRuleSchema>;
