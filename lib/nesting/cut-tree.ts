@@ -1,0 +1,101 @@
+/** Cut-tree helpers: moving a packed tree onto its stock piece, adding the edge-trim cuts, checking a tree. */
+import type { Rect } from '@/lib/geometry/rect';
+import type { CutNode } from '@/lib/nesting/pack/types';
+import { EPS, slice, type Axis } from '@/lib/nesting/guillotine';
+
+export const lowEdge = (r: Rect, a: Axis) => (a === 'x' ? r.x : r.y);
+export const highEdge = (r: Rect, a: Axis) => (a === 'x' ? r.x + r.w : r.y + r.h);
+export const extent = (r: Rect, a: Axis) => (a === 'x' ? r.w : r.h);
+export const sameRect = (a: Rect, b: Rect, eps = EPS) =>
+  Math.abs(a.x - b.x) <= eps && Math.abs(a.y - b.y) <= eps && Math.abs(a.w - b.w) <= eps && Math.abs(a.h - b.h) <= eps;
+
+const shift = (r: Rect, dx: number, dy: number): Rect => ({ x: r.x + dx, y: r.y + dy, w: r.w, h: r.h });
+
+/** The tree moved by (dx, dy): from a bin's trimmed origin to stock coordinates. */
+export function translateTree(node: CutNode, dx: number, dy: number): CutNode {
+  const rect = shift(node.rect, dx, dy);
+  if (node.type !== 'cut') return { ...node, rect };
+  const children = node.children.map((c) => translateTree(c, dx, dy)) as [CutNode] | [CutNode, CutNode];
+  return { ...node, rect, pos: node.pos + (node.axis === 'x' ? dx : dy), children };
+}
+
+/** Trim cuts along `axis` around `inner`: low edge first, then the high edge; `full` is the piece before them. */
+function trimAlong(inner: CutNode, full: Rect, axis: Axis, trim: number, kerf: number): CutNode {
+  const o0 = lowEdge(full, axis);
+  const o1 = highEdge(full, axis);
+  const farWaste = o1 - trim + kerf;
+  const highCut: CutNode = {
+    type: 'cut',
+    rect: slice(full, axis, o0 + trim, o1),
+    axis,
+    pos: o1 - trim,
+    kerf,
+    children: o1 - farWaste > EPS ? [inner, { type: 'leftover', rect: slice(full, axis, farWaste, o1) }] : [inner],
+  };
+  return {
+    type: 'cut',
+    rect: full,
+    axis,
+    pos: o0 + trim - kerf,
+    kerf,
+    children: [{ type: 'leftover', rect: slice(full, axis, o0, Math.max(o0, o0 + trim - kerf)) }, highCut],
+  };
+}
+
+/**
+ * Wraps a tree of the trimmed area in the edge-trim cuts of the whole stock piece, so they come first in the saw
+ * order. Trim is per side, kerf included. The edges across the inner tree's first cuts are trimmed first, so the
+ * other two trim cuts join the inner tree's first stage (strips: rips off both long edges, then the strips).
+ */
+export function withTrimCuts(inner: CutNode, stock: Rect, trim: number, kerf: number): CutNode {
+  if (trim <= EPS) return inner;
+  const innerAxis: Axis = inner.type === 'cut' ? inner.axis : 'y';
+  const firstAxis: Axis = innerAxis === 'x' ? 'y' : 'x';
+  const afterFirst = slice(stock, firstAxis, lowEdge(stock, firstAxis) + trim, highEdge(stock, firstAxis) - trim);
+  return trimAlong(trimAlong(inner, afterFirst, innerAxis, trim, kerf), stock, firstAxis, trim, kerf);
+}
+
+export interface TreeProblem {
+  message: string;
+  itemId?: number;
+}
+
+/**
+ * Checks that a tree is well formed over `rect`: every cut's children are exactly the two sides of the blade,
+ * and its item leaves are exactly `items` (by index), each once.
+ */
+export function checkTree(tree: CutNode, rect: Rect, items: readonly Rect[]): TreeProblem[] {
+  const problems: TreeProblem[] = [];
+  const seen = new Array<number>(items.length).fill(0);
+  const walk = (node: CutNode, expected: Rect) => {
+    if (!sameRect(node.rect, expected)) {
+      problems.push({ message: `a ${node.type} node's rectangle does not match the piece it comes from` });
+      return;
+    }
+    if (node.type === 'leftover') return;
+    if (node.type === 'item') {
+      const item = items[node.itemId];
+      if (!item) problems.push({ message: `the tree names item ${node.itemId}, which is not on this piece`, itemId: node.itemId });
+      else {
+        seen[node.itemId]++;
+        if (!sameRect(item, node.rect)) problems.push({ message: `the tree's leaf for item ${node.itemId} is not where the part is`, itemId: node.itemId });
+      }
+      return;
+    }
+    const a0 = lowEdge(node.rect, node.axis);
+    const a1 = highEdge(node.rect, node.axis);
+    if (node.pos >= a1 - EPS || node.pos + node.kerf <= a0 + EPS) {
+      problems.push({ message: `a cut at ${node.axis} = ${node.pos} misses the piece it should cut` });
+      return;
+    }
+    walk(node.children[0], slice(node.rect, node.axis, a0, Math.max(a0, node.pos)));
+    const rest = a1 - (node.pos + node.kerf);
+    if (node.children[1]) walk(node.children[1], slice(node.rect, node.axis, node.pos + node.kerf, a1));
+    else if (rest > EPS) problems.push({ message: `a cut at ${node.axis} = ${node.pos} drops the material above it` });
+  };
+  walk(tree, rect);
+  seen.forEach((n, i) => {
+    if (n !== 1) problems.push({ message: n === 0 ? `item ${i} is missing from the cut tree` : `item ${i} appears ${n} times in the cut tree`, itemId: i });
+  });
+  return problems;
+}

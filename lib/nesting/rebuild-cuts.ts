@@ -1,0 +1,29 @@
+/** Rebuilds cut trees, saw orders, leftovers and figures of a plan from its bare placements (layout bench edits). */
+import { findGuillotineTree } from '@/lib/nesting/guillotine';
+import { assemblePiece, assemblePlan } from '@/lib/nesting/assemble-plan';
+import { trimFor, usableRect } from '@/lib/nesting/stock-rules';
+import { STRIP_STAGES } from '@/lib/nesting/validate-plan';
+import { nestRequestSchema, planSchema, type NestRequestInput, type Plan, type PlanInput } from '@/shared/schemas/nesting';
+
+/**
+ * The plan with every piece's tree, saw order, leftovers and figures made afresh from its placements. A piece that
+ * straight through-cuts cannot separate (or unknown stock) keeps its placements only; `validatePlan` says why.
+ * Throws a ZodError when the request or plan does not parse.
+ */
+export function rebuildCuts(requestInput: NestRequestInput, planInput: PlanInput): Plan {
+  const request = nestRequestSchema.parse(requestInput);
+  const plan = planSchema.parse(planInput);
+  const { kerf, style } = request.settings;
+  const pieces = plan.pieces.map((piece, i) => {
+    const stock = request.stock.find((s) => s.id === piece.stockId);
+    if (!stock) {
+      const { tree: _t, sawOrder: _s, offcuts: _o, waste: _w, figures: _f, ...bare } = piece;
+      return bare;
+    }
+    const usable = usableRect(stock, trimFor(stock, request.settings));
+    const strips = style === 'strips';
+    const tree = findGuillotineTree(usable, piece.placements, kerf, strips ? STRIP_STAGES : Infinity, strips ? 'y' : undefined);
+    return assemblePiece(stock, i, piece.placements, tree, request);
+  });
+  return assemblePlan(request, pieces, plan.unplaced, plan.cancelled);
+}

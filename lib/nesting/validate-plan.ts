@@ -1,0 +1,197 @@
+/**
+ * `validatePlan`: the one judge of a plan, whoever made it (the engine, the layout bench, a saved file).
+ *
+ * Rules it enforces, beyond the schema:
+ * - Parts lie inside the trimmed stock, at their own size (length along x unless rotated), on stock of their
+ *   material and thickness, and a part whose grain must run along its length is turned only on grainless stock.
+ * - Two parts on one piece need at least one kerf of clear space between them along x or along y. Touching edges
+ *   (or corners) count as an overlap when the kerf is above 0: the blade has to pass between them.
+ * - Straight through-cuts must separate the layout (rebuilt from the bare placements); `strips` allows 3 stages,
+ *   the first being rips. This check is skipped on a piece that already has overlaps or parts outside.
+ * - Every part instance 1..quantity is placed or listed as unplaced, exactly once; stock on hand is not overdrawn.
+ * - When present, the cut tree is well formed and the saw order, replayed from the whole stock piece, cuts every
+ *   part free exactly.
+ */
+import { contains } from '@/lib/geometry/rect';
+import { EPS, findGuillotineTree } from '@/lib/nesting/guillotine';
+import { checkTree, sameRect } from '@/lib/nesting/cut-tree';
+import { replaySawOrder, stockPieceName } from '@/lib/nesting/saw-order';
+import { rotationAllowed, sameStock, stockRect, trimFor, usableRect } from '@/lib/nesting/stock-rules';
+import {
+  nestRequestSchema,
+  planSchema,
+  type NestPart,
+  type NestRequest,
+  type NestRequestInput,
+  type Placement,
+  type PlanPiece,
+} from '@/shared/schemas/nesting';
+
+export type ViolationCode =
+  | 'invalid-request'
+  | 'invalid-plan'
+  | 'unknown-stock'
+  | 'stock-mismatch'
+  | 'unknown-part'
+  | 'extra-part'
+  | 'missing-part'
+  | 'duplicate-part'
+  | 'size-mismatch'
+  | 'material-mismatch'
+  | 'grain'
+  | 'outside-stock'
+  | 'overlap'
+  | 'not-guillotine'
+  | 'too-many-stages'
+  | 'stock-count'
+  | 'tree'
+  | 'saw-order';
+
+export interface Violation {
+  code: ViolationCode;
+  message: string;
+  /** Index of the stock piece in `plan.pieces`. */
+  piece?: number;
+  partId?: string;
+  instance?: number;
+  /** Saw-order step number. */
+  step?: number;
+}
+
+/** Stages allowed by the `strips` cutting style: rips, crosscuts, one trim rip. */
+export const STRIP_STAGES = 3;
+
+const name = (part: NestPart | undefined, p: { partId: string; instance: number }) => `"${part?.label || p.partId}" #${p.instance}`;
+
+function zodViolations(code: ViolationCode, issues: { path: PropertyKey[]; message: string }[]): Violation[] {
+  return issues.map((i) => ({ code, message: `${i.path.map(String).join('.') || '(root)'}: ${i.message}` }));
+}
+
+/** Clear space between two parts along x or y, or the largest of the two gaps (negative when they overlap). */
+function clearance(a: Placement, b: Placement): number {
+  const gx = Math.max(b.x - (a.x + a.w), a.x - (b.x + b.w));
+  const gy = Math.max(b.y - (a.y + a.h), a.y - (b.y + b.h));
+  return Math.max(gx, gy);
+}
+
+function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts: Map<string, NestPart>): Violation[] {
+  const out: Violation[] = [];
+  const { settings } = request;
+  const at = { piece: index };
+  const stock = request.stock.find((s) => s.id === piece.stockId);
+  if (!stock) out.push({ code: 'unknown-stock', message: `piece ${index + 1} uses stock "${piece.stockId}", which is not in the request`, ...at });
+  else {
+    const same =
+      stock.kind === piece.kind &&
+      Math.abs(stock.length - piece.length) <= EPS &&
+      Math.abs(stock.width - piece.width) <= EPS &&
+      sameStock(stock, piece) &&
+      Math.abs(trimFor(stock, settings) - piece.trim) <= EPS;
+    if (!same) out.push({ code: 'stock-mismatch', message: `piece ${index + 1} does not match stock "${stock.id}" (kind, size, material, thickness or trim)`, ...at });
+  }
+  const trim = stock ? trimFor(stock, settings) : piece.trim;
+  const usable = usableRect(piece, trim);
+  let geometryOk = true;
+  for (const p of piece.placements) {
+    const part = parts.get(p.partId);
+    const where = { ...at, partId: p.partId, instance: p.instance };
+    if (part) {
+      const [w, h] = p.rotated ? [part.width, part.length] : [part.length, part.width];
+      if (Math.abs(p.w - w) > EPS || Math.abs(p.h - h) > EPS) {
+        out.push({ code: 'size-mismatch', message: `${name(part, p)} is placed as ${p.w} × ${p.h} mm but is ${w} × ${h} mm${p.rotated ? ' turned' : ''}`, ...where });
+        geometryOk = false;
+      }
+      if (!sameStock(part, piece)) {
+        out.push({ code: 'material-mismatch', message: `${name(part, p)} is ${part.thickness} mm ${part.material}, placed on ${piece.thickness} mm ${piece.material}`, ...where });
+      }
+      if (p.rotated && !rotationAllowed(part, { grain: stock?.grain ?? 'along-length' })) {
+        out.push({ code: 'grain', message: `${name(part, p)} is turned across the grain, but its grain must run along its length`, ...where });
+      }
+    }
+    if (!contains(usable, p, EPS)) {
+      out.push({ code: 'outside-stock', message: `${name(part, p)} lies outside the usable area of piece ${index + 1} (after ${trim} mm trim)`, ...where });
+      geometryOk = false;
+    }
+  }
+  const byX = [...piece.placements].sort((a, b) => a.x - b.x);
+  for (let i = 0; i < byX.length; i++) {
+    for (let j = i + 1; j < byX.length && byX[j].x < byX[i].x + byX[i].w + settings.kerf - EPS; j++) {
+      const [a, b] = [byX[i], byX[j]];
+      const gap = clearance(a, b);
+      if (gap >= settings.kerf - EPS) continue;
+      const what = gap < -EPS ? 'overlap' : `are ${Math.max(0, gap).toFixed(2)} mm apart, closer than one kerf (${settings.kerf} mm)`;
+      out.push({ code: 'overlap', message: `${name(parts.get(a.partId), a)} and ${name(parts.get(b.partId), b)} ${what}`, ...at, partId: b.partId, instance: b.instance });
+      geometryOk = false;
+    }
+  }
+  if (geometryOk) {
+    const strips = settings.style === 'strips';
+    const tree = findGuillotineTree(usable, piece.placements, settings.kerf, strips ? STRIP_STAGES : Infinity, strips ? 'y' : undefined);
+    if (!tree) {
+      const anyTree = strips && findGuillotineTree(usable, piece.placements, settings.kerf);
+      out.push(
+        anyTree
+          ? { code: 'too-many-stages', message: `piece ${index + 1} needs more than ${STRIP_STAGES} stages (rips, crosscuts, trim rips) for strip cutting`, ...at }
+          : { code: 'not-guillotine', message: `piece ${index + 1} cannot be cut apart with straight through-cuts`, ...at },
+      );
+    }
+  }
+  const whole = stockRect(piece);
+  if (piece.tree) {
+    for (const t of checkTree(piece.tree, whole, piece.placements)) out.push({ code: 'tree', message: `piece ${index + 1}: ${t.message}`, ...at });
+  }
+  if (piece.sawOrder) {
+    const { pieces, problems } = replaySawOrder(piece.sawOrder, whole, stockPieceName(index), settings.kerf);
+    for (const pr of problems) out.push({ code: 'saw-order', message: `piece ${index + 1}: ${pr.message}`, ...at, step: pr.step });
+    const finals = [...pieces.values()];
+    for (const p of piece.placements) {
+      const hits = finals.filter((f) => sameRect(f, p)).length;
+      if (hits !== 1) {
+        out.push({ code: 'saw-order', message: `piece ${index + 1}: the saw order does not cut ${name(parts.get(p.partId), p)} free at its place`, ...at, partId: p.partId, instance: p.instance });
+      }
+    }
+  }
+  return out;
+}
+
+/**
+ * Every way `plan` breaks the rules for `request` (see the file comment); an empty list means the plan is valid.
+ * Tree and saw order are optional on each piece: an edited plan is checked on its placements alone.
+ */
+export function validatePlan(requestInput: NestRequestInput, planInput: unknown): Violation[] {
+  const req = nestRequestSchema.safeParse(requestInput);
+  if (!req.success) return zodViolations('invalid-request', req.error.issues);
+  const parsed = planSchema.safeParse(planInput);
+  if (!parsed.success) return zodViolations('invalid-plan', parsed.error.issues);
+  const request = req.data;
+  const plan = parsed.data;
+  const parts = new Map(request.parts.map((p) => [p.id, p]));
+  const out: Violation[] = plan.pieces.flatMap((piece, i) => checkPiece(piece, i, request, parts));
+
+  const seen = new Map<string, number>();
+  const tally = (p: { partId: string; instance: number }, pieceIndex?: number) => {
+    const part = parts.get(p.partId);
+    const where = { partId: p.partId, instance: p.instance, ...(pieceIndex === undefined ? {} : { piece: pieceIndex }) };
+    if (!part) out.push({ code: 'unknown-part', message: `part "${p.partId}" is not in the request`, ...where });
+    else if (p.instance > part.quantity) out.push({ code: 'extra-part', message: `${name(part, p)} is more than the ${part.quantity} asked for`, ...where });
+    else seen.set(`${p.partId}\u0000${p.instance}`, (seen.get(`${p.partId}\u0000${p.instance}`) ?? 0) + 1);
+  };
+  plan.pieces.forEach((piece, i) => piece.placements.forEach((p) => tally(p, i)));
+  plan.unplaced.forEach((u) => tally(u));
+  for (const part of request.parts) {
+    for (let k = 1; k <= part.quantity; k++) {
+      const n = seen.get(`${part.id}\u0000${k}`) ?? 0;
+      const where = { partId: part.id, instance: k };
+      if (n === 0) out.push({ code: 'missing-part', message: `${name(part, where)} is neither placed nor reported as unplaced`, ...where });
+      if (n > 1) out.push({ code: 'duplicate-part', message: `${name(part, where)} appears ${n} times`, ...where });
+    }
+  }
+
+  const used = new Map<string, number>();
+  for (const p of plan.pieces) used.set(p.stockId, (used.get(p.stockId) ?? 0) + 1);
+  for (const s of request.stock) {
+    const n = used.get(s.id) ?? 0;
+    if (s.count !== null && n > s.count) out.push({ code: 'stock-count', message: `the plan uses ${n} of stock "${s.id}" but only ${s.count} are on hand` });
+  }
+  return out;
+}
