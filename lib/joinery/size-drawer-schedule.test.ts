@@ -1,0 +1,261 @@
+import { describe, expect, test } from 'vitest';
+import { inches } from '@/lib/units/length';
+import type { DrawerScheduleInput } from '@/shared/schemas/drawer-schedule';
+import { sizeDrawerSchedule } from '@/lib/joinery/size-drawer-schedule';
+import type { DrawerPart, DrawerPartRole } from '@/lib/joinery/types';
+
+/** The DOMAIN.md worked-example box: W 14″ × H 6″ × D 22″, ¾″ front and back, ½″ sides. */
+const base = (over: Partial<DrawerScheduleInput> = {}): DrawerScheduleInput => ({
+  label: 'Test bank',
+  quantity: 1,
+  size: { from: 'box', widthMm: inches(14), heightMm: inches(6), depthMm: inches(22) },
+  thickness: { frontMm: inches(3 / 4), sideMm: inches(1 / 2) },
+  ...over,
+});
+
+function sized(input: DrawerScheduleInput) {
+  const result = sizeDrawerSchedule(input);
+  if (!result.ok) throw new Error(`expected a box, got ${JSON.stringify(result.errors)}`);
+  return result;
+}
+const part = (parts: DrawerPart[], role: DrawerPartRole): DrawerPart => {
+  const found = parts.find((p) => p.role === role);
+  if (!found) throw new Error(`no ${role}`);
+  return found;
+};
+const box = (widthIn: number, depthIn: number) =>
+  ({ from: 'box', widthMm: inches(widthIn), heightMm: inches(6), depthMm: inches(depthIn) }) as const;
+
+describe('part lengths follow each joint’s rule', () => {
+  test.each([
+    {
+      label: 'lock rabbet: a bit cutting ⅜″ into ½″ stock leaves ⅛″, so a 20″ deep box has 19-3/4″ sides (common practice, no source)',
+      input: base({ size: box(14, 20), thickness: { frontMm: inches(1 / 2), sideMm: inches(1 / 2) } }),
+      role: 'side',
+      inches: 19.75,
+    },
+    {
+      label: 'lock rabbet: ¾″ stock with a ¼″ lip, D 22″ → side 21½″ (Woodsmith, "Locking rabbet joint")',
+      input: base({ thickness: { frontMm: inches(3 / 4), sideMm: inches(3 / 4) }, joint: { method: 'lock-rabbet', faceLeftMm: inches(1 / 4) } }),
+      role: 'side',
+      inches: 21.5,
+    },
+    {
+      label: 'lock rabbet: D 12″, lip 1/16″ → side 11⅞″ (Popular Woodworking, "Lock rabbet drawer joinery")',
+      input: base({ size: box(14, 12), thickness: { frontMm: inches(1 / 2), sideMm: inches(1 / 2) }, joint: { method: 'lock-rabbet', faceLeftMm: inches(1 / 16) } }),
+      role: 'side',
+      inches: 11.875,
+    },
+    {
+      label: 'rabbet and dado: W 14″, ½″ sides, ¼″ dado → front/back 13½″ (Woodsmith tip)',
+      input: base({ joint: { method: 'rabbet-and-dado', dadoDepthMm: inches(1 / 4) } }),
+      role: 'front',
+      inches: 13.5,
+    },
+    {
+      label: 'rabbet and dado: the back is cut like the front, 13½″ (Woodsmith tip)',
+      input: base({ joint: { method: 'rabbet-and-dado', dadoDepthMm: inches(1 / 4) } }),
+      role: 'back',
+      inches: 13.5,
+    },
+    {
+      label: 'half-blind dovetail: 3/16″ lap on a ¾″ front, D 22″ → side 21-13/16″ (Fine Woodworking)',
+      input: base({ joint: { method: 'half-blind-dovetail', lapMm: inches(3 / 16) } }),
+      role: 'side',
+      inches: 21 + 13 / 16,
+    },
+    {
+      label: 'butt, sides full depth: front/back 13″ (DOMAIN.md worked example, common practice, no source)',
+      input: base({ joint: { method: 'butt-pocket-screw', layout: 'sides-full-depth' } }),
+      role: 'front',
+      inches: 13,
+    },
+    {
+      label: 'butt, front/back full width: sides 20½″ (DOMAIN.md worked example, common practice, no source)',
+      input: base({ joint: { method: 'butt-loose-tenon', layout: 'front-back-full-width' } }),
+      role: 'side',
+      inches: 20.5,
+    },
+    {
+      label: 'through dovetail: sides run the full 22″ (common practice, no source)',
+      input: base({ joint: { method: 'through-dovetail' } }),
+      role: 'side',
+      inches: 22,
+    },
+    {
+      label: 'box joint: front runs the full 14″ (common practice, no source)',
+      input: base({ joint: { method: 'box-joint' } }),
+      role: 'front',
+      inches: 14,
+    },
+  ] as const)('$label', ({ input, role, inches: expected }) => {
+    expect(part(sized(input).parts, role).lengthMm).toBeCloseTo(inches(expected), 9);
+  });
+});
+
+describe('lock rabbet (common practice, no source)', () => {
+  test('fronts and backs are cut to the full box width, with no subtraction', () => {
+    const { parts } = sized(base());
+    expect(part(parts, 'front').lengthMm).toBeCloseTo(inches(14), 9);
+    expect(part(parts, 'back').lengthMm).toBeCloseTo(inches(14), 9);
+  });
+
+  test('with a ¾″ front and ½″ sides the front is measured to the side thickness', () => {
+    const front = part(sized(base()).parts, 'front');
+    expect(front.thicknessMm).toBeCloseTo(inches(3 / 4), 9);
+    expect(front.endEngagementMm[0]).toBeCloseTo(inches(1 / 2), 9);
+    expect(front.endEngagementMm[1]).toBeCloseTo(inches(1 / 2), 9);
+    expect(front.machining.join(' ')).toContain('set 12.7 mm from the end');
+  });
+
+  test('a deeper front cut makes a front that overhangs each side to hide the slides', () => {
+    const flush = sized(base());
+    const lipped = sized(base({ front: { style: 'lipped', lipMm: inches(1 / 2) } }));
+    const front = part(lipped.parts, 'front');
+    expect(front.lengthMm).toBeCloseTo(inches(15), 9);
+    expect(front.overhangMm).toBeCloseTo(inches(1 / 2), 9);
+    expect(front.machining.join(' ')).toContain('set 25.4 mm from the end');
+    // The box behind the front does not change.
+    expect(part(lipped.parts, 'side').lengthMm).toBeCloseTo(part(flush.parts, 'side').lengthMm, 9);
+    expect(part(lipped.parts, 'back').lengthMm).toBeCloseTo(inches(14), 9);
+  });
+
+  test('the joint allowance is shown apart from the inside span it is added to', () => {
+    const result = sized(base({ size: box(14, 20), thickness: { frontMm: inches(1 / 2), sideMm: inches(1 / 2) } }));
+    const side = part(result.parts, 'side');
+    // Inside depth 19″; each tongue enters ⅜″ → 19 + ¾ = 19¾″ (common practice, no source).
+    expect(result.box.insideDepthMm).toBeCloseTo(inches(19), 9);
+    expect(side.jointAllowanceMm).toBeCloseTo(inches(3 / 4), 9);
+    expect(side.lengthMm).toBeCloseTo(result.box.insideDepthMm + side.jointAllowanceMm, 9);
+  });
+});
+
+describe('box size from the opening', () => {
+  test('side-mount slides leave ½″ per side: a 15″ opening takes a 14″ box, ½″ lower than the opening (common practice, no source)', () => {
+    const result = sized(base({ size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22.5) } }));
+    expect(result.box.widthMm).toBeCloseTo(inches(14), 9);
+    expect(result.box.heightMm).toBeCloseTo(inches(6.5), 9);
+  });
+
+  test('a 600 mm frameless carcass with 18 mm sides takes a 539 mm side-mount box and a 597 mm full-overlay front (DOMAIN.md, derived from common practice)', () => {
+    const result = sized(
+      base({
+        size: { from: 'opening', widthMm: 600 - 2 * 18, heightMm: 200, depthMm: 560 },
+        slide: { type: 'side-mount', sideClearanceMm: 12.5 },
+        front: { style: 'applied' },
+      }),
+    );
+    expect(result.box.widthMm).toBeCloseTo(539, 9);
+    expect(part(result.parts, 'applied-front').lengthMm).toBeCloseTo(597, 9);
+  });
+
+  test.each([
+    { label: 'a 22½″ deep opening with ½″ back clearance takes a 22″ slide (slide lengths 12–28″ by 2″, common practice, no source)', depthIn: 22.5, series: 'imperial', expectedMm: inches(22) },
+    { label: 'a 21.9″ deep opening takes a 20″ slide (common practice, no source)', depthIn: 21.9, series: 'imperial', expectedMm: inches(20) },
+    { label: 'a 560 mm deep opening takes a 500 mm metric slide (from memory)', depthIn: 560 / 25.4, series: 'metric', expectedMm: 500 },
+  ] as const)('$label', ({ depthIn, series, expectedMm }) => {
+    const result = sized(
+      base({ size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(depthIn), depthRule: { rule: 'longest-standard-slide', series } } }),
+    );
+    expect(result.box.depthMm).toBeCloseTo(expectedMm, 9);
+  });
+
+  test('undermount slides take the maker’s total width deduction, ⅝″ by default (common practice, no source)', () => {
+    const result = sized(base({ size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) }, slide: { type: 'undermount' } }));
+    expect(result.box.widthMm).toBeCloseTo(inches(15 - 5 / 8), 9);
+  });
+
+  test('wooden runners fill the opening less a back clearance', () => {
+    const result = sized(base({ size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 500, depthRule: { rule: 'opening-less-clearance', backClearanceMm: 10 } }, slide: { type: 'wooden-runners', sideClearanceMm: 1 } }));
+    expect(result.box.widthMm).toBeCloseTo(398, 9);
+    expect(result.box.depthMm).toBeCloseTo(490, 9);
+  });
+});
+
+describe('bottoms', () => {
+  test('a bottom in ¼ × ¼″ grooves is the inside plus 2 × ¼″ less 1/16″: 13-7/16 × 20-15/16″ (common practice, no source)', () => {
+    // Inside width 14 − 2 × ½ = 13″ between the sides; inside depth 22 − 2 × ¾ = 20½″ between front and back.
+    const result = sized(base());
+    const bottom = part(result.parts, 'bottom');
+    expect(result.box.insideWidthMm).toBeCloseTo(inches(13), 9);
+    expect(result.box.insideDepthMm).toBeCloseTo(inches(20.5), 9);
+    expect(bottom.lengthMm).toBeCloseTo(inches(13 + 7 / 16), 9);
+    expect(bottom.widthMm).toBeCloseTo(inches(20 + 15 / 16), 9);
+    expect(bottom.grain).toBe('any');
+  });
+
+  test('an applied bottom covers the outside W × D and the walls stand on it (common practice, no source)', () => {
+    const result = sized(base({ bottom: { mount: 'applied', thicknessMm: inches(1 / 2) } }));
+    const bottom = part(result.parts, 'bottom');
+    expect(bottom.lengthMm).toBeCloseTo(inches(14), 9);
+    expect(bottom.widthMm).toBeCloseTo(inches(22), 9);
+    expect(part(result.parts, 'side').widthMm).toBeCloseTo(inches(5.5), 9);
+  });
+});
+
+describe('parts, quantities and grain', () => {
+  test('every box gives one front, one back, two sides and one bottom, multiplied by the boxes in the schedule', () => {
+    const { parts } = sized(base({ quantity: 4 }));
+    expect(parts.map((p) => [p.role, p.quantityPerBox, p.quantity])).toEqual([
+      ['front', 1, 4],
+      ['back', 1, 4],
+      ['side', 2, 8],
+      ['bottom', 1, 4],
+    ]);
+    expect(parts.every((p) => p.schedule === 'Test bank')).toBe(true);
+    expect(parts.filter((p) => p.role !== 'bottom').every((p) => p.grain === 'along-length')).toBe(true);
+  });
+
+  test('an inset applied front is the opening less a reveal on each edge', () => {
+    const result = sized(base({ size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 560 }, front: { style: 'applied', fit: 'inset', revealMm: 1.5 } }));
+    const front = part(result.parts, 'applied-front');
+    expect(front.lengthMm).toBeCloseTo(397, 9);
+    expect(front.widthMm).toBeCloseTo(147, 9);
+  });
+
+  test('materials default from the sides to the front and from the front to the back', () => {
+    const { parts } = sized(base({ materials: { sides: 'Birch ply 12', front: 'Maple 19' } }));
+    expect(part(parts, 'side').material).toBe('Birch ply 12');
+    expect(part(parts, 'front').material).toBe('Maple 19');
+    expect(part(parts, 'back').material).toBe('Maple 19');
+  });
+
+  test('the schedule lists the setup cards its joint needs', () => {
+    expect(sized(base()).setupCardKeys).toEqual([
+      { joint: 'lock-rabbet', stockThicknessMm: inches(1 / 2) },
+      { joint: 'lock-rabbet', stockThicknessMm: inches(3 / 4) },
+    ]);
+  });
+});
+
+describe('a box that cannot be built gives an error on the field, never parts', () => {
+  test.each([
+    { label: 'lock rabbet engagement equal to the thickness (no face left)', over: { joint: { method: 'lock-rabbet', faceLeftMm: 0 } }, path: 'joint.faceLeftMm' },
+    { label: 'lock rabbet face left thicker than the front', over: { joint: { method: 'lock-rabbet', faceLeftMm: inches(1) } }, path: 'joint.faceLeftMm' },
+    { label: 'a dado as deep as the side is thick', over: { joint: { method: 'rabbet-and-dado', dadoDepthMm: inches(1 / 2) } }, path: 'joint.dadoDepthMm' },
+    { label: 'a half-blind lap as thick as the front', over: { joint: { method: 'half-blind-dovetail', lapMm: inches(3 / 4) } }, path: 'joint.lapMm' },
+    { label: 'a face mortise through the side', over: { joint: { method: 'butt-loose-tenon', mortiseDepthMm: inches(1 / 2) } }, path: 'joint.mortiseDepthMm' },
+    { label: 'a bottom thicker than its groove is wide', over: { bottom: { mount: 'groove', thicknessMm: 9 } }, path: 'bottom.thicknessMm' },
+    { label: 'a negative bottom clearance', over: { bottom: { mount: 'groove', groove: { clearanceMm: -1 } } }, path: 'bottom.groove.clearanceMm' },
+    { label: 'a groove through the side', over: { bottom: { mount: 'groove', groove: { depthMm: inches(1 / 2) } } }, path: 'bottom.groove.depthMm' },
+    { label: 'a box narrower than its two sides', over: { size: { from: 'box', widthMm: 20, heightMm: 100, depthMm: 400 } }, path: 'thickness.sideMm' },
+    { label: 'an opening narrower than the slides take', over: { size: { from: 'opening', widthMm: 20, heightMm: 100, depthMm: 500 } }, path: 'size.widthMm' },
+    { label: 'an opening too shallow for any standard slide', over: { size: { from: 'opening', widthMm: 400, heightMm: 100, depthMm: 200 } }, path: 'size.depthMm' },
+    { label: 'a negative slide clearance', over: { slide: { type: 'side-mount', sideClearanceMm: -2 } }, path: 'slide.sideClearanceMm' },
+    { label: 'a lip on a through-dovetailed front', over: { joint: { method: 'through-dovetail' }, front: { style: 'lipped' } }, path: 'front.style' },
+    { label: 'an applied bottom under undermount slides', over: { slide: { type: 'undermount' }, bottom: { mount: 'applied' } }, path: 'bottom.mount' },
+    { label: 'a bottom below the undermount recess', over: { slide: { type: 'undermount' }, bottom: { mount: 'groove', groove: { heightMm: 6 } } }, path: 'bottom.groove.heightMm' },
+    { label: 'an applied front with neither opening nor size', over: { front: { style: 'applied' } }, path: 'front.widthMm' },
+    { label: 'no boxes', over: { quantity: 0 }, path: 'quantity' },
+    { label: 'part of a box', over: { quantity: 1.5 }, path: 'quantity' },
+    { label: 'no label', over: { label: '  ' }, path: 'label' },
+    { label: 'an unknown joint', over: { joint: { method: 'nails' } }, path: 'joint.method' },
+  ])('$label → $path', ({ over, path }) => {
+    const result = sizeDrawerSchedule({ ...base(), ...over });
+    expect(result.ok).toBe(false);
+    expect(result).not.toHaveProperty('parts');
+    if (result.ok) return;
+    expect(result.errors.map((e) => e.path)).toContain(path);
+    expect(result.errors.every((e) => e.message.length > 10)).toBe(true);
+  });
+});
