@@ -1,0 +1,130 @@
+import type { BinFiller } from './filler';
+import { EPS } from './filler';
+import type { Rng } from './prng';
+import { randInt } from './prng';
+import type { Bin, Problem } from './solution';
+import { binFromFiller, fillBin } from './solution';
+
+/** Sort keys for item orders, all descending: the classic "decreasing" heuristics. */
+export const ORDER_KEYS = ['area', 'long-side', 'perimeter', 'width', 'height'] as const;
+export type OrderKey = (typeof ORDER_KEYS)[number];
+
+export function sortedOrder(p: Problem, items: ArrayLike<number>, key: OrderKey): Int32Array {
+  const order = Int32Array.from(items);
+  const k = new Float64Array(p.n);
+  for (const i of order) {
+    const w = p.w[i];
+    const h = p.h[i];
+    k[i] = key === 'area' ? w * h : key === 'long-side' ? Math.max(w, h) * 1e6 + Math.min(w, h) : key === 'perimeter' ? w + h : key === 'width' ? w * 1e6 + h : h * 1e6 + w;
+  }
+  // Ties by index keep the order stable and deterministic.
+  order.sort((a, b) => k[b] - k[a] || a - b);
+  return order;
+}
+
+/** Swaps random neighbours: keeps the order roughly decreasing while exploring near it. */
+export function perturb(rng: Rng, src: Int32Array, len: number, dst: Int32Array, swapRate: number) {
+  dst.set(src.subarray(0, len));
+  for (let j = 0; j + 1 < len; j++) {
+    if (rng() < swapRate) {
+      const t = dst[j];
+      dst[j] = dst[j + 1];
+      dst[j + 1] = t;
+      j++;
+    }
+  }
+}
+
+export interface PoolPacking {
+  bins: Bin[];
+  /** Items no bin with stock left could take. */
+  left: number[];
+}
+
+interface Candidate {
+  bin: Bin;
+  all: boolean;
+  cost: number;
+  priority: number;
+  area: number;
+}
+
+/**
+ * Packs `order` (already in the preferred order) bin by bin: for each new bin it tries every bin type with stock
+ * left (and, with `rng`, `attempts` perturbed orders and rules) and keeps the best fill. `avail` is decremented.
+ * With `closeFirst`, a bin type that takes everything left wins outright (the cheapest such); without it, bin
+ * types compete on the objective alone (e.g. cost per area placed), which can be cheaper over several bins.
+ */
+export function packPool(
+  p: Problem,
+  f: BinFiller,
+  order: Int32Array,
+  avail: number[],
+  rule: number,
+  rng: Rng | null,
+  attempts: number,
+  scratch: Int32Array,
+  mark: Uint8Array,
+  closeFirst = true,
+): PoolPacking {
+  let remaining = order.slice();
+  let len = remaining.length;
+  const bins: Bin[] = [];
+  const rules = p.filler.rules;
+  while (len > 0) {
+    let minArea = Infinity;
+    for (let j = 0; j < len; j++) if (p.area[remaining[j]] < minArea) minArea = p.area[remaining[j]];
+    let best: Candidate | null = null;
+    for (let t = 0; t < p.types.length; t++) {
+      if (avail[t] <= 0) continue;
+      const bt = p.types[t];
+      for (let a = 0; a < (rng ? attempts : 1); a++) {
+        let ord: Int32Array = remaining;
+        let r = rule;
+        if (rng && a > 0) {
+          perturb(rng, remaining, len, scratch, 0.1 + 0.4 * rng());
+          ord = scratch;
+          r = randInt(rng, rules);
+        }
+        fillBin(p, f, t, r, ord, len, minArea);
+        if (f.count === 0) break; // nothing fits this type: no order will change that
+        const c: Candidate = { bin: null as unknown as Bin, all: f.count === len, cost: bt.cost, priority: bt.priority, area: bt.w * bt.h };
+        if (!best || better(p, f.used, c, best)) {
+          c.bin = binFromFiller(f, t, r);
+          best = c;
+        }
+        if (c.all) break; // every remaining item fits: other orders cannot do better in this type
+      }
+    }
+    if (!best) break;
+    bins.push(best.bin);
+    avail[best.bin.type]--;
+    for (const i of best.bin.seq) mark[i] = 1;
+    let m = 0;
+    for (let j = 0; j < len; j++) {
+      const i = remaining[j];
+      if (mark[i]) mark[i] = 0;
+      else remaining[m++] = i;
+    }
+    len = m;
+    remaining = remaining.subarray(0, len);
+  }
+  return { bins, left: Array.from(remaining.subarray(0, len)) };
+
+  function better(p: Problem, used: number, c: Candidate, b: Candidate): boolean {
+    // Closing the job: the cheapest bin that takes everything left.
+    if (closeFirst && c.all !== b.all) return c.all;
+    if (c.all && b.all) return c.cost !== b.cost ? c.cost < b.cost : c.priority !== b.priority ? c.priority < b.priority : c.area < b.area - EPS;
+    const bu = b.bin.used;
+    if (p.objective === 'cost') {
+      // Cost per area of parts placed; free offcuts win outright.
+      const rc = c.cost * bu;
+      const rb = b.cost * used;
+      if (Math.abs(rc - rb) > 1e-9 * Math.max(1, rc, rb)) return rc < rb;
+      if (c.priority !== b.priority) return c.priority < b.priority;
+      return used > bu + EPS;
+    }
+    if (Math.abs(used - bu) > EPS) return used > bu;
+    return c.cost !== b.cost ? c.cost < b.cost : c.priority < b.priority;
+  }
+}

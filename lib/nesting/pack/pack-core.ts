@@ -1,0 +1,194 @@
+import { lowerBound } from '@/lib/nesting/bounds';
+import { ORDER_KEYS, packPool, sortedOrder } from './construct';
+import { EPS } from './filler';
+import type { BinFiller } from './filler';
+import { packInputSchema, PackInputError } from './pack-input';
+import { panelFiller } from './panel-filler';
+import { mulberry32, randInt } from './prng';
+import type { Problem, Solution } from './solution';
+import { compareScores, score, toResult } from './solution';
+import { stripFiller } from './strip-filler';
+import type { BinType, PackItem, PackOptions, PackResult } from './types';
+
+/** Work limits beyond the contract's options, so tests can run the search deterministically. */
+export interface PackLimits {
+  /** Stop the improvement phase after this many iterations instead of (or as well as) the time budget. */
+  maxIterations?: number;
+}
+
+/** Yield to the event loop at least this often so a worker can hear a cancel message. */
+const YIELD_EVERY_MS = 25;
+const PROGRESS_EVERY_MS = 200;
+/**
+ * The constructive phase tries every item order × rule on small jobs and fewer on large ones; the count depends
+ * only on the job size (never on the clock), so the first plan is the same under any load.
+ */
+const CONSTRUCT_WORK = 300_000;
+/** Orders tried for each new bin while re-packing in the improvement phase. */
+const ATTEMPTS_PER_BIN = 6;
+
+const now = () => performance.now();
+const pause = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
+
+export async function packWithLimits(items: PackItem[], bins: BinType[], options: PackOptions, limits: PackLimits = {}): Promise<PackResult> {
+  const { signal, onProgress, ...plain } = options;
+  const parsed = packInputSchema.safeParse({ items, bins, options: plain });
+  if (!parsed.success) throw new PackInputError(parsed.error.issues);
+  const t0 = now();
+
+  const { problem: p, prior } = buildProblem(items, bins, options);
+  if (p.n === 0 || p.types.length === 0) {
+    return { bins: [], unplaced: [...prior, ...Array.from(p.ids, (itemId) => ({ itemId, reason: 'no-stock-left' as const }))] };
+  }
+  const f = p.filler.create(p.n, p.kerf);
+  const stock = p.types.map((t) => (t.count === null ? Infinity : t.count));
+  const scratch = new Int32Array(p.n);
+  const mark = new Uint8Array(p.n);
+  const all = Int32Array.from({ length: p.n }, (_, i) => i);
+
+  let lastYield = now();
+  let lastProgress = lastYield;
+  let best: Solution | null = null;
+  let bestScore = null as ReturnType<typeof score> | null;
+  const offer = (s: Solution) => {
+    const sc = score(p, s);
+    if (!best || compareScores(p.objective, sc, bestScore!) < 0) {
+      best = s;
+      bestScore = sc;
+      return true;
+    }
+    return false;
+  };
+  const breathe = async () => {
+    const t = now();
+    if (t - lastYield < YIELD_EVERY_MS) return;
+    if (onProgress && best && t - lastProgress >= PROGRESS_EVERY_MS) {
+      lastProgress = t;
+      report(p, f, best, prior, onProgress, t - t0);
+    }
+    await pause();
+    lastYield = now();
+  };
+
+  // Constructive phase: every order × rule combination the job size allows, deterministic.
+  const orders = ORDER_KEYS.map((k) => sortedOrder(p, all, k));
+  // With several bin types, each combination runs with and without closing on the cheapest bin that takes all.
+  const policies = p.types.length > 1 ? 2 : 1;
+  const combos = ORDER_KEYS.length * p.filler.rules * policies;
+  const nCombos = Math.max(1, Math.min(combos, Math.floor(CONSTRUCT_WORK / (p.n * p.types.length))));
+  for (let c = 0; c < nCombos; c++) {
+    // Walk rules fastest within an order so a short list still mixes rules.
+    const order = orders[Math.floor(c / (p.filler.rules * policies)) % orders.length];
+    const rule = Math.floor(c / policies) % p.filler.rules;
+    const packing = packPool(p, f, order, stock.slice(), rule, null, 1, scratch, mark, c % policies === 0);
+    offer({ bins: packing.bins, noStock: packing.left });
+    if (signal?.aborted) break;
+    await breathe();
+  }
+
+  // Improvement phase: re-pack the items of the emptiest bin and a few others, keep what scores better.
+  const lb = binLowerBound(p);
+  const rng = mulberry32(options.seed);
+  let cur: Solution = best!;
+  let curScore = bestScore!;
+  const maxIter = limits.maxIterations ?? Infinity;
+  for (let iter = 0; iter < maxIter; iter++) {
+    if (signal?.aborted) break;
+    if (limits.maxIterations === undefined && now() - t0 >= options.timeBudgetMs) break;
+    const b: Solution = best!;
+    if (lb !== null && b.noStock.length === 0 && b.bins.length <= lb && p.objective !== 'cuts') break;
+    const nb = cur.bins.length;
+    if (nb === 0) break;
+
+    const ranked = cur.bins.map((bin, k) => k).sort((x, y) => fill(p, cur.bins[x]) - fill(p, cur.bins[y]) || x - y);
+    const chosen = new Set<number>([ranked[Math.floor(rng() ** 3 * Math.min(nb, 4))]]);
+    const extra = Math.min(nb - 1, 1 + randInt(rng, 3));
+    while (chosen.size < 1 + extra) chosen.add(randInt(rng, nb));
+
+    const avail = stock.slice();
+    const kept = [];
+    const pool: number[] = [...cur.noStock];
+    for (let k = 0; k < nb; k++) {
+      const bin = cur.bins[k];
+      if (chosen.has(k)) for (const i of bin.seq) pool.push(i);
+      else {
+        kept.push(bin);
+        avail[bin.type]--;
+      }
+    }
+    const key = rng() < 0.6 ? 'area' : ORDER_KEYS[randInt(rng, ORDER_KEYS.length)];
+    const packing = packPool(p, f, sortedOrder(p, pool, key), avail, randInt(rng, p.filler.rules), rng, ATTEMPTS_PER_BIN, scratch, mark, rng() < 0.5);
+    const cand: Solution = { bins: kept.concat(packing.bins), noStock: packing.left };
+    const candScore = score(p, cand);
+    if (compareScores(p.objective, candScore, curScore) < 0) {
+      cur = cand;
+      curScore = candScore;
+      offer(cand);
+    }
+    await breathe();
+  }
+
+  const result = toResult(p, best!, f, prior);
+  if (onProgress) onProgress(progressOf(p, result, best!, now() - t0));
+  return result;
+}
+
+const fill = (p: Problem, bin: Solution['bins'][number]) => bin.used / (p.types[bin.type].w * p.types[bin.type].h);
+
+function report(p: Problem, f: BinFiller, s: Solution, prior: PackResult['unplaced'], onProgress: NonNullable<PackOptions['onProgress']>, elapsed: number) {
+  onProgress(progressOf(p, toResult(p, s, f, prior), s, elapsed));
+}
+
+function progressOf(p: Problem, result: PackResult, s: Solution, elapsedMs: number) {
+  const sc = score(p, s);
+  let used = 0;
+  let binArea = 0;
+  for (const b of s.bins) {
+    used += b.used;
+    binArea += p.types[b.type].w * p.types[b.type].h;
+  }
+  return { elapsedMs, binsUsed: sc.bins, fill: binArea > 0 ? used / binArea : 0, cost: sc.cost, best: result };
+}
+
+/** Sorts out the items no bin type could ever take, and puts the rest in flat arrays. */
+function buildProblem(items: PackItem[], bins: BinType[], options: PackOptions) {
+  const prior: PackResult['unplaced'] = [];
+  const keep: PackItem[] = [];
+  for (const it of items) {
+    const straight = bins.some((b) => it.w <= b.w + EPS && it.h <= b.h + EPS);
+    const turned = bins.some((b) => it.h <= b.w + EPS && it.w <= b.h + EPS);
+    if (straight || (turned && it.canRotate)) keep.push(it);
+    else prior.push({ itemId: it.id, reason: turned ? 'grain' : 'too-large' });
+  }
+  const n = keep.length;
+  const p: Problem = {
+    n,
+    ids: Int32Array.from(keep, (it) => it.id),
+    w: Float64Array.from(keep, (it) => it.w),
+    h: Float64Array.from(keep, (it) => it.h),
+    canRotate: Uint8Array.from(keep, (it) => (it.canRotate ? 1 : 0)),
+    area: Float64Array.from(keep, (it) => it.w * it.h),
+    types: bins.filter((b) => b.count !== 0),
+    kerf: options.kerf,
+    objective: options.objective,
+    filler: options.style === 'strips' ? stripFiller : panelFiller,
+    minSide: keep.reduce((m, it) => Math.min(m, it.w, it.h), Infinity),
+  };
+  return { problem: p, prior };
+}
+
+/** A lower bound on the bins needed when there is one bin type (else null): stop searching once it is reached. */
+function binLowerBound(p: Problem): number | null {
+  if (p.types.length !== 1) return null;
+  const bin = { w: p.types[0].w, h: p.types[0].h };
+  const sizes = Array.from({ length: p.n }, (_, i) => ({ w: p.w[i], h: p.h[i] }));
+  let total = 0;
+  for (let i = 0; i < p.n; i++) total += p.area[i];
+  let lb = Math.ceil(total / (bin.w * bin.h) - 1e-9);
+  try {
+    lb = Math.max(lb, lowerBound(sizes, bin, p.canRotate.some((r) => r === 1)));
+  } catch {
+    // The shared bound refuses odd input (e.g. float sizes it cannot handle): the continuous bound still holds.
+  }
+  return lb;
+}

@@ -1,0 +1,260 @@
+import type { BinFiller, FillerKind } from './filler';
+import { EPS } from './filler';
+import { FlatTree } from './flat-tree';
+import type { PackedItem } from './types';
+
+/**
+ * Free-rectangle guillotine filler: every free rectangle is a leaf of the cut tree, and placing a part in one
+ * makes at most two through-cuts (one across, one along), leaving at most two new free rectangles. Kerf is taken
+ * by each cut; a part flush with a rectangle's far edge needs no cut there.
+ *
+ * A rule combines how to choose the free rectangle (placement) with which cut to make first (split).
+ */
+const enum Place {
+  BestShortSide = 0,
+  BestArea = 1,
+  BestLongSide = 2,
+  BottomLeft = 3,
+}
+const PLACE_RULES = 4;
+const enum Split {
+  ShorterLeftover = 0,
+  LongerLeftover = 1,
+  MaxBigPiece = 2,
+  ShorterAxis = 3,
+}
+const SPLIT_RULES = 4;
+
+class PanelFiller implements BinFiller {
+  used = 0;
+  cuts = 0;
+  count = 0;
+  readonly placed: Int32Array;
+  private readonly px: Float64Array;
+  private readonly py: Float64Array;
+  private readonly prot: Uint8Array;
+  private readonly pw: Float64Array;
+  private readonly ph: Float64Array;
+  // Free rectangles and the tree leaf each one is.
+  private fx: Float64Array;
+  private fy: Float64Array;
+  private fw: Float64Array;
+  private fh: Float64Array;
+  private fnode: Int32Array;
+  private nFree = 0;
+  private maxFreeArea = 0;
+  private maxFreeShort = 0;
+  private maxFreeLong = 0;
+  private readonly tree: FlatTree;
+  private place: Place = Place.BestShortSide;
+  private split: Split = Split.ShorterLeftover;
+  private minSide = 0;
+
+  constructor(
+    capacity: number,
+    private readonly kerf: number,
+  ) {
+    this.placed = new Int32Array(capacity);
+    this.px = new Float64Array(capacity);
+    this.py = new Float64Array(capacity);
+    this.pw = new Float64Array(capacity);
+    this.ph = new Float64Array(capacity);
+    this.prot = new Uint8Array(capacity);
+    this.fx = new Float64Array(capacity + 2);
+    this.fy = new Float64Array(capacity + 2);
+    this.fw = new Float64Array(capacity + 2);
+    this.fh = new Float64Array(capacity + 2);
+    this.fnode = new Int32Array(capacity + 2);
+    this.tree = new FlatTree(4 * capacity + 2);
+  }
+
+  reset(binW: number, binH: number, rule: number, minSide: number) {
+    this.used = 0;
+    this.cuts = 0;
+    this.count = 0;
+    this.place = (Math.floor(rule / SPLIT_RULES) % PLACE_RULES) as Place;
+    this.split = (rule % SPLIT_RULES) as Split;
+    this.minSide = minSide;
+    this.tree.clear();
+    const root = this.tree.leaf(0, 0, binW, binH);
+    this.nFree = 0;
+    this.addFree(root, 0, 0, binW, binH);
+    this.refreshMax();
+  }
+
+  mayFit(w: number, h: number, canRotate: boolean): boolean {
+    // Orientation does not matter here: a part fits a rectangle only if its short side fits the rectangle's short
+    // side and its long side the long side.
+    void canRotate;
+    if (w * h > this.maxFreeArea + EPS) return false;
+    return (w < h ? w : h) <= this.maxFreeShort + EPS && (w < h ? h : w) <= this.maxFreeLong + EPS;
+  }
+
+  tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean {
+    const { fx, fy, fw, fh } = this;
+    let best = -1;
+    let bestRot = false;
+    let s1 = Infinity;
+    let s2 = Infinity;
+    const place = this.place;
+    for (let r = 0; r < this.nFree; r++) {
+      const W = fw[r];
+      const H = fh[r];
+      for (let o = 0; o < (canRotate && w !== h ? 2 : 1); o++) {
+        const iw = o === 0 ? w : h;
+        const ih = o === 0 ? h : w;
+        if (iw > W + EPS || ih > H + EPS) continue;
+        const dw = W - iw;
+        const dh = H - ih;
+        let a: number;
+        let b: number;
+        if (place === Place.BestShortSide) {
+          a = dw < dh ? dw : dh;
+          b = dw < dh ? dh : dw;
+        } else if (place === Place.BestArea) {
+          a = W * H - iw * ih;
+          b = dw < dh ? dw : dh;
+        } else if (place === Place.BestLongSide) {
+          a = dw < dh ? dh : dw;
+          b = dw < dh ? dw : dh;
+        } else {
+          a = fy[r] + ih;
+          b = fx[r];
+        }
+        if (a < s1 - EPS || (a <= s1 + EPS && b < s2 - EPS)) {
+          s1 = a;
+          s2 = b;
+          best = r;
+          bestRot = o === 1;
+        }
+      }
+    }
+    if (best < 0) return false;
+    this.commit(i, best, bestRot ? h : w, bestRot ? w : h, bestRot);
+    return true;
+  }
+
+  private commit(i: number, r: number, iw: number, ih: number, rotated: boolean) {
+    const k = this.kerf;
+    const x = this.fx[r];
+    const y = this.fy[r];
+    const W = this.fw[r];
+    const H = this.fh[r];
+    const node = this.fnode[r];
+    this.removeFree(r);
+    let dw = W - iw;
+    let dh = H - ih;
+    if (dw < EPS) dw = 0;
+    if (dh < EPS) dh = 0;
+
+    let acrossFirst: boolean; // true: the y = const cut (along x, full width of the rect) comes first
+    switch (this.split) {
+      case Split.ShorterLeftover:
+        acrossFirst = dw <= dh;
+        break;
+      case Split.LongerLeftover:
+        acrossFirst = dw > dh;
+        break;
+      case Split.MaxBigPiece:
+        // y-first leaves W × dh and dw × ih; x-first leaves dw × H and iw × dh: keep the larger piece whole.
+        acrossFirst = Math.max(W * dh, dw * ih) >= Math.max(dw * H, iw * dh);
+        break;
+      default:
+        acrossFirst = W <= H;
+    }
+    const t = this.tree;
+    let itemNode = node;
+    if (acrossFirst) {
+      itemNode = this.cutOff(node, true, x, y, W, ih, dh, k);
+      itemNode = this.cutOff(itemNode, false, x, y, iw, ih, dw, k);
+    } else {
+      itemNode = this.cutOff(node, false, x, y, iw, H, dw, k);
+      itemNode = this.cutOff(itemNode, true, x, y, iw, ih, dh, k);
+    }
+    t.setItem(itemNode, i, rotated, iw, ih);
+    const c = this.count++;
+    this.placed[c] = i;
+    this.px[c] = x;
+    this.py[c] = y;
+    this.pw[c] = iw;
+    this.ph[c] = ih;
+    this.prot[c] = rotated ? 1 : 0;
+    this.used += iw * ih;
+    this.refreshMax();
+  }
+
+  /**
+   * Cuts leaf `node` so that a piece (x, y, keepW, keepH) remains below the cut; `rest` is how much lies beyond it.
+   * Returns the kept piece's leaf; the far piece (after kerf) becomes a free rectangle when big enough to use.
+   */
+  private cutOff(node: number, alongX: boolean, x: number, y: number, keepW: number, keepH: number, rest: number, k: number) {
+    if (rest <= 0) return node;
+    const t = this.tree;
+    const kept = t.leaf(x, y, keepW, keepH);
+    let far = -1;
+    const farSize = rest - k;
+    if (farSize > EPS) {
+      far = alongX ? t.leaf(x, y + keepH + k, keepW, farSize) : t.leaf(x + keepW + k, y, farSize, keepH);
+    }
+    t.cut(node, alongX, alongX ? y + keepH : x + keepW, kept, far);
+    this.cuts++;
+    if (far >= 0) {
+      const fw = alongX ? keepW : farSize;
+      const fh = alongX ? farSize : keepH;
+      if (fw >= this.minSide - EPS && fh >= this.minSide - EPS) this.addFree(far, alongX ? x : x + keepW + k, alongX ? y + keepH + k : y, fw, fh);
+    }
+    return kept;
+  }
+
+  private addFree(node: number, x: number, y: number, w: number, h: number) {
+    const n = this.nFree++;
+    this.fx[n] = x;
+    this.fy[n] = y;
+    this.fw[n] = w;
+    this.fh[n] = h;
+    this.fnode[n] = node;
+  }
+
+  private removeFree(r: number) {
+    // Keep the order (it breaks placement ties), so shift rather than swap.
+    const n = --this.nFree;
+    this.fx.copyWithin(r, r + 1, n + 1);
+    this.fy.copyWithin(r, r + 1, n + 1);
+    this.fw.copyWithin(r, r + 1, n + 1);
+    this.fh.copyWithin(r, r + 1, n + 1);
+    this.fnode.copyWithin(r, r + 1, n + 1);
+  }
+
+  private refreshMax() {
+    let a = 0;
+    let short = 0;
+    let long = 0;
+    for (let r = 0; r < this.nFree; r++) {
+      const w = this.fw[r];
+      const h = this.fh[r];
+      if (w * h > a) a = w * h;
+      if ((w < h ? w : h) > short) short = w < h ? w : h;
+      if ((w < h ? h : w) > long) long = w < h ? h : w;
+    }
+    this.maxFreeArea = a;
+    this.maxFreeShort = short;
+    this.maxFreeLong = long;
+  }
+
+  finish(ids: ArrayLike<number>) {
+    const items: PackedItem[] = [];
+    for (let c = 0; c < this.count; c++) {
+      items.push({
+        itemId: ids[this.placed[c]],
+        rect: { x: this.px[c], y: this.py[c], w: this.pw[c], h: this.ph[c] },
+        rotated: this.prot[c] === 1,
+      });
+    }
+    return { tree: this.tree.toCutNode(0, this.kerf, ids), items };
+  }
+}
+
+export const panelFiller: FillerKind = {
+  rules: PLACE_RULES * SPLIT_RULES,
+  create: (capacity, kerf) => new PanelFiller(capacity, kerf),
+};
