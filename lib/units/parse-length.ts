@@ -1,4 +1,4 @@
-import type { Mm } from './length';
+import { inches, type Mm } from './length';
 import { FRACTION_SLASH, SUBSCRIPT_DIGITS, SUPERSCRIPT_DIGITS, VULGAR_FRACTIONS } from './fraction-glyphs';
 
 /** The unit a bare number is read in: the shop's own. */
@@ -76,7 +76,7 @@ export function parseLength(text: string, { unit }: { unit: LengthUnit }): Parse
 /** A length given as a plain number in the shop's unit (a numeric form field or JSON body). */
 export function lengthFromNumber(value: number, unit: LengthUnit): ParsedLength {
   if (!Number.isFinite(value)) return { ok: false, error: 'The length must be a finite number.' };
-  return checkRange(unit === 'in' ? value * 25.4 : value);
+  return checkRange(unit === 'in' ? inches(value) : value);
 }
 
 function checkRange(mm: Mm): ParsedLength {
