@@ -1,0 +1,206 @@
+/**
+ * `optimize`: a nesting request in, a plan out. Parts are grouped by material and thickness; each group is packed
+ * on the stock of that material and thickness by the guillotine core (`lib/nesting/pack`), then translated back to
+ * stock coordinates and assembled into plan pieces (trim cuts, saw order, leftovers, figures).
+ */
+import { area } from '@/lib/geometry/rect';
+import { packGuillotine } from '@/lib/nesting/pack';
+import type { BinType, CutNode, PackFn, PackItem, PackResult } from '@/lib/nesting/pack/types';
+import { findGuillotineTree } from '@/lib/nesting/guillotine';
+import { checkTree, translateTree } from '@/lib/nesting/cut-tree';
+import { assemblePiece, assemblePlan } from '@/lib/nesting/assemble-plan';
+import { groupParts, rotationAllowed, sameStock, trimFor, usableRect } from '@/lib/nesting/stock-rules';
+import {
+  nestRequestSchema,
+  type NestPart,
+  type NestRequest,
+  type NestRequestInput,
+  type NestStock,
+  type Placement,
+  type Plan,
+  type PlanPiece,
+  type Unplaced,
+  type UnplacedReason,
+} from '@/shared/schemas/nesting';
+
+export interface OptimizeProgress {
+  elapsedMs: number;
+  /** Stock pieces in the best plan so far. */
+  piecesUsed: number;
+  /** Part area / stock area of the pieces used so far. */
+  yield: number;
+  cost: number;
+}
+
+export interface OptimizeOptions {
+  onProgress?: (progress: OptimizeProgress) => void;
+  /** Aborting stops the search: optimize resolves with the best plan so far (every part still placed or reported). */
+  signal?: AbortSignal;
+  /** Another packer with the same contract (benchmarks); defaults to Kerfwise's `packGuillotine`. */
+  pack?: PackFn;
+}
+
+/** Bin priorities (lower is used first when it costs no more). */
+const PRIORITY = { offcut: 0, onHand: 1, buy: 2 } as const;
+
+interface Instance {
+  part: NestPart;
+  instance: number;
+}
+
+const describeStock = (p: Pick<NestPart, 'thickness' | 'material'>) => `${p.thickness} mm ${p.material}`;
+
+function unplacedMessage(reason: UnplacedReason, inst: Instance, canRotate: boolean): string {
+  const { part } = inst;
+  const size = `${part.length} × ${part.width} mm`;
+  switch (reason) {
+    case 'too-large':
+      return `"${part.label || part.id}" (${size}) is larger than any ${describeStock(part)} stock${canRotate ? ', even turned' : ''}`;
+    case 'grain':
+      return `"${part.label || part.id}" (${size}) fits only turned across the grain, which its grain rule forbids`;
+    case 'no-stock-left':
+      return `not enough ${describeStock(part)}: the stock on hand is used up and no size that fits can be bought`;
+    case 'no-stock':
+      return `there is no ${describeStock(part)} in the stock room or to buy`;
+  }
+}
+
+const unplaced = (inst: Instance, reason: UnplacedReason, canRotate: boolean): Unplaced => ({
+  partId: inst.part.id,
+  instance: inst.instance,
+  label: inst.part.label,
+  reason,
+  message: unplacedMessage(reason, inst, canRotate),
+});
+
+/** Item leaves renumbered from pack item ids to placement indexes. */
+function renumber(node: CutNode, index: Map<number, number>): CutNode {
+  if (node.type === 'item') return { ...node, itemId: index.get(node.itemId) ?? -1 };
+  if (node.type === 'leftover') return node;
+  return { ...node, children: node.children.map((c) => renumber(c, index)) as [CutNode] | [CutNode, CutNode] };
+}
+
+interface Group {
+  instances: Instance[];
+  stocks: NestStock[];
+  items: PackItem[];
+  bins: BinType[];
+  canRotate: boolean[];
+}
+
+/** `used`: pieces of each stock id taken by earlier groups (a stock within 0.01 mm of two part thicknesses). */
+function prepareGroup(parts: NestPart[], request: NestRequest, used: Map<string, number>): Group {
+  const { settings } = request;
+  const left = (s: NestStock) => (s.count === null ? null : s.count - (used.get(s.id) ?? 0));
+  const stocks = request.stock.filter((s) => {
+    const u = usableRect(s, trimFor(s, settings));
+    return sameStock(s, parts[0]) && u.w > 0 && u.h > 0 && left(s) !== 0;
+  });
+  const instances = parts.flatMap((part) => Array.from({ length: part.quantity }, (_, k) => ({ part, instance: k + 1 })));
+  // One rotation flag per item: turned only when every stock of the group allows it (mixed grain is the rare case).
+  const canRotate = instances.map(({ part }) => stocks.length > 0 && stocks.every((s) => rotationAllowed(part, s)));
+  const items = instances.map(({ part }, id) => ({ id, w: part.length, h: part.width, canRotate: canRotate[id] }));
+  const bins = stocks.map((s, id) => {
+    const u = usableRect(s, trimFor(s, settings));
+    const priority = s.kind === 'offcut' && settings.preferOffcuts ? PRIORITY.offcut : s.count !== null ? PRIORITY.onHand : PRIORITY.buy;
+    return { id, w: u.w, h: u.h, count: left(s), cost: s.costEach, priority };
+  });
+  return { instances, stocks, items, bins, canRotate };
+}
+
+function piecesFromResult(group: Group, result: PackResult, request: NestRequest, firstIndex: number): PlanPiece[] {
+  const { settings } = request;
+  return result.bins.map((bin, b) => {
+    const stock = group.stocks[bin.binTypeId];
+    const t = trimFor(stock, settings);
+    const index = new Map(bin.items.map((it, i) => [it.itemId, i]));
+    const placements: Placement[] = bin.items.map((it) => {
+      const { part, instance } = group.instances[it.itemId];
+      return { partId: part.id, instance, label: part.label, x: it.rect.x + t, y: it.rect.y + t, w: it.rect.w, h: it.rect.h, rotated: it.rotated };
+    });
+    const usable = usableRect(stock, t);
+    const packed = translateTree(renumber(bin.tree, index), t, t);
+    // Trust but check: a malformed tree from the core is replaced by one rebuilt from the placements.
+    const tree = checkTree(packed, usable, placements).length === 0 ? packed : findGuillotineTree(usable, placements, settings.kerf);
+    return assemblePiece(stock, firstIndex + b, placements, tree, request);
+  });
+}
+
+/** Parts not in any bin and not reported by the core are reported here: none is ever dropped. */
+function unplacedFromResult(group: Group, result: PackResult): Unplaced[] {
+  const out = result.unplaced.map((u) => unplaced(group.instances[u.itemId], u.reason, group.canRotate[u.itemId]));
+  const accounted = new Set([...result.unplaced.map((u) => u.itemId), ...result.bins.flatMap((b) => b.items.map((i) => i.itemId))]);
+  group.instances.forEach((inst, id) => {
+    if (!accounted.has(id)) out.push(unplaced(inst, 'no-stock-left', group.canRotate[id]));
+  });
+  return out;
+}
+
+/** Stock area, part area and cost of packed bins, for progress. */
+function measure(group: Group, result: PackResult) {
+  let stockArea = 0;
+  let partArea = 0;
+  let cost = 0;
+  for (const bin of result.bins) {
+    const s = group.stocks[bin.binTypeId];
+    stockArea += s.length * s.width;
+    cost += s.costEach;
+    for (const it of bin.items) partArea += area(it.rect);
+  }
+  return { pieces: result.bins.length, stockArea, partArea, cost };
+}
+
+/**
+ * Nests the request's parts onto its stock. Resolves with a plan (`version: 1`) in which every part instance is
+ * placed or listed in `unplaced` with its reason. Throws a ZodError when the request does not parse.
+ */
+export async function optimize(requestInput: NestRequestInput, options: OptimizeOptions = {}): Promise<Plan> {
+  const request = nestRequestSchema.parse(requestInput);
+  const { settings } = request;
+  const pack = options.pack ?? packGuillotine;
+  const t0 = performance.now();
+  const totalItems = request.parts.reduce((n, p) => n + p.quantity, 0);
+  const used = new Map<string, number>();
+  const done = { pieces: 0, stockArea: 0, partArea: 0, cost: 0 };
+  const report = (extra = { pieces: 0, stockArea: 0, partArea: 0, cost: 0 }) => {
+    const stockArea = done.stockArea + extra.stockArea;
+    options.onProgress?.({
+      elapsedMs: performance.now() - t0,
+      piecesUsed: done.pieces + extra.pieces,
+      yield: stockArea > 0 ? (done.partArea + extra.partArea) / stockArea : 0,
+      cost: done.cost + extra.cost,
+    });
+  };
+
+  const pieces: PlanPiece[] = [];
+  const notPlaced: Unplaced[] = [];
+  for (const parts of groupParts(request.parts)) {
+    const group = prepareGroup(parts, request, used);
+    if (group.bins.length === 0) {
+      const any = request.stock.some((s) => sameStock(s, group.instances[0].part));
+      notPlaced.push(...group.instances.map((inst) => unplaced(inst, any ? 'no-stock-left' : 'no-stock', false)));
+      continue;
+    }
+    const budget = options.signal?.aborted ? 0 : Math.round((settings.timeBudgetMs * group.items.length) / totalItems);
+    const result = await pack(group.items, group.bins, {
+      kerf: settings.kerf,
+      style: settings.style,
+      objective: settings.objective,
+      timeBudgetMs: budget,
+      seed: settings.seed,
+      signal: options.signal,
+      onProgress: options.onProgress && ((p) => report(measure(group, p.best))),
+    });
+    const groupPieces = piecesFromResult(group, result, request, pieces.length);
+    for (const p of groupPieces) used.set(p.stockId, (used.get(p.stockId) ?? 0) + 1);
+    pieces.push(...groupPieces);
+    notPlaced.push(...unplacedFromResult(group, result));
+    const m = measure(group, result);
+    done.pieces += m.pieces;
+    done.stockArea += m.stockArea;
+    done.partArea += m.partArea;
+    done.cost += m.cost;
+    report();
+  }
+  return assemblePlan(request, pieces, notPlaced, options.signal?.aborted ?? false);
+}

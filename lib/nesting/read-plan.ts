@@ -1,0 +1,29 @@
+/** Reading a saved plan: migrated forward to the current version, never silently misread. */
+import { PLAN_VERSION, planSchema, type Plan } from '@/shared/schemas/nesting';
+
+export class PlanVersionError extends Error {
+  constructor(readonly found: unknown) {
+    super(
+      typeof found === 'number' && found > PLAN_VERSION
+        ? `this plan was saved by a newer Kerfwise (plan version ${found}; this one reads up to ${PLAN_VERSION})`
+        : `this is not a Kerfwise plan of a known version (version: ${JSON.stringify(found)})`,
+    );
+    this.name = 'PlanVersionError';
+  }
+}
+
+/**
+ * Migrations from version n to n + 1, applied in turn. Version 1 is the first: none yet. When the plan's shape
+ * changes, bump PLAN_VERSION and add the step from the previous version here.
+ */
+const MIGRATIONS: Record<number, (plan: Record<string, unknown>) => Record<string, unknown>> = {};
+
+/** A saved plan (parsed JSON) as a current `Plan`; throws PlanVersionError or a ZodError when it cannot be read. */
+export function readPlan(saved: unknown): Plan {
+  if (typeof saved !== 'object' || saved === null) throw new PlanVersionError(undefined);
+  let plan = saved as Record<string, unknown>;
+  const version = plan.version;
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1 || version > PLAN_VERSION) throw new PlanVersionError(version);
+  for (let v = version; v < PLAN_VERSION; v++) plan = { ...MIGRATIONS[v](plan), version: v + 1 };
+  return planSchema.parse(plan);
+}
