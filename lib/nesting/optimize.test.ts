@@ -1,0 +1,164 @@
+import { describe, expect, test } from 'vitest';
+import fc from 'fast-check';
+import { inches } from '@/lib/units/length';
+import { optimize } from '@/lib/nesting/optimize';
+import { validatePlan } from '@/lib/nesting/validate-plan';
+import { part, request, requestArb, sheet } from '@/lib/nesting/test-support';
+import type { NestRequestInput, Plan } from '@/shared/schemas/nesting';
+
+const placedCount = (plan: Plan) => plan.pieces.reduce((n, p) => n + p.placements.length, 0);
+
+describe('optimize on random requests (fast-check)', () => {
+  test('every plan passes validatePlan, accounts for every part instance and never yields more than the stock', async () => {
+    await fc.assert(
+      fc.asyncProperty(requestArb, async (req) => {
+        const plan = await optimize(req);
+        expect(validatePlan(req, plan)).toEqual([]);
+        const asked = req.parts.reduce((n, p) => n + p.quantity, 0);
+        expect(placedCount(plan) + plan.unplaced.length).toBe(asked);
+        for (const p of plan.pieces) expect(p.figures!.yield).toBeLessThanOrEqual(1 + 1e-9);
+        expect(plan.totals!.yield).toBeLessThanOrEqual(1 + 1e-9);
+        // Strip plans are checked strip-shaped (≤ 3 stages, rips first) by validatePlan; their saw orders start
+        // with rips once the trim crosscuts are done.
+        if (req.settings?.style === 'strips') {
+          for (const p of plan.pieces) {
+            const firstWork = p.sawOrder!.find((s) => !s.trim);
+            if (firstWork && p.sawOrder!.some((s) => !s.trim && s.kind === 'rip')) expect(firstWork.kind).toBe('rip');
+          }
+        }
+      }),
+      { numRuns: 40 },
+    );
+  });
+
+  test('the same seed gives the same plan', async () => {
+    await fc.assert(
+      fc.asyncProperty(requestArb, async (req) => {
+        expect(await optimize(req)).toEqual(await optimize(req));
+      }),
+      { numRuns: 10 },
+    );
+  });
+});
+
+describe('worked examples', () => {
+  // [derived]: four 610 × 1220 mm panels fill a 2440 × 1220 sheet exactly (4 × 610 = 2440); with a 3.2 mm kerf
+  // four need 4 × 610 + 3 × 3.2 = 2449.6 mm, so only three fit and the fourth goes on a second sheet.
+  const panels = (kerf: number): NestRequestInput => request([part('panel', 610, 1220, { quantity: 4 })], [sheet('S', 2440, 1220)], { kerf });
+
+  test('exact parts fill one sheet with zero kerf ([derived])', async () => {
+    const plan = await optimize(panels(0));
+    expect(plan.pieces).toHaveLength(1);
+    expect(plan.totals!.yield).toBeCloseTo(1, 12);
+    expect(plan.pieces[0].offcuts).toEqual([]);
+    expect(plan.pieces[0].sawOrder!.map((s) => s.fence)).toEqual([610, 610, 610]);
+  });
+
+  test('the same parts with a 3.2 mm kerf need a second sheet ([derived])', async () => {
+    const plan = await optimize(panels(3.2));
+    expect(plan.pieces.map((p) => p.placements.length).sort()).toEqual([1, 3]);
+    expect(plan.unplaced).toEqual([]);
+    expect(plan.stockToBuy).toEqual([expect.objectContaining({ stockId: 'S', count: 2, cost: 120 })]);
+  });
+
+  // DOMAIN.md "strip count": n = ⌊(L − trims + k) / (w + k)⌋ [derived]. Strips run the full length of the sheet
+  // and may not turn, so the count across the sheet is exactly n.
+  test.each([
+    { label: '48″ sheet, 11⅞″ strips, ⅛″ kerf → 4 (DOMAIN.md strip count, [derived])', across: inches(48), w: inches(11 + 7 / 8), k: inches(1 / 8), trim: 0, n: 4 },
+    { label: 'the same with ¼″ edge trim → 3 (DOMAIN.md strip count, [derived])', across: inches(48), w: inches(11 + 7 / 8), k: inches(1 / 8), trim: inches(1 / 4), n: 3 },
+  ])('$label', async ({ across, w, k, trim, n }) => {
+    const length = inches(96);
+    const req = request(
+      [part('strip', length - 2 * trim, w, { quantity: 6 })],
+      [sheet('S', length, across, { count: 1 })],
+      { kerf: k, trim, style: 'strips' },
+    );
+    const plan = await optimize(req);
+    expect(placedCount(plan)).toBe(n);
+    expect(plan.unplaced.every((u) => u.reason === 'no-stock-left')).toBe(true);
+    expect(validatePlan(req, plan)).toEqual([]);
+  });
+
+  test('2440 mm, 600 mm parts, 3.2 mm kerf, 10 mm trim each end → 4 parts, 10.4 mm left (DOMAIN.md strip count, [derived])', async () => {
+    const req = request(
+      [part('door', 600, 1200, { quantity: 6 })],
+      [sheet('S', 2440, 1220, { count: 1 })],
+      { kerf: 3.2, trim: 10, minOffcutLength: 1, minOffcutWidth: 1 },
+    );
+    const plan = await optimize(req);
+    const [piece] = plan.pieces;
+    expect(piece.placements).toHaveLength(4);
+    const end = Math.max(...piece.placements.map((p) => p.x + p.w));
+    expect(2440 - 10 - end).toBeCloseTo(10.4, 9);
+    expect(plan.unplaced).toHaveLength(2);
+  });
+});
+
+describe('parts that cannot be placed are reported, never dropped', () => {
+  test.each([
+    { label: 'larger than any stock even turned', p: part('big', 3000, 500, { grain: 'any' }), stock: [sheet('S', 2440, 1220)], reason: 'too-large' },
+    { label: 'fits only across the grain', p: part('long', 1000, 2000), stock: [sheet('S', 2440, 1220)], reason: 'grain' },
+    { label: 'stock on hand used up and none to buy', p: part('x', 2000, 1000, { quantity: 3 }), stock: [sheet('S', 2440, 1220, { count: 2 })], reason: 'no-stock-left' },
+    { label: 'no stock of that material at all', p: part('m', 500, 300, { material: 'walnut' }), stock: [sheet('S', 2440, 1220)], reason: 'no-stock' },
+    { label: 'no stock of that thickness', p: part('t', 500, 300, { thickness: 12 }), stock: [sheet('S', 2440, 1220)], reason: 'no-stock' },
+  ])('$label → $reason', async ({ p, stock, reason }) => {
+    const req = request([p], stock);
+    const plan = await optimize(req);
+    expect(plan.unplaced.length).toBeGreaterThan(0);
+    expect(plan.unplaced.every((u) => u.reason === reason && u.message.length > 0)).toBe(true);
+    expect(validatePlan(req, plan)).toEqual([]);
+  });
+});
+
+describe('stock', () => {
+  test('uses an offcut on the rack before a sheet of the same cost, and lists it to pull', async () => {
+    const offcut = { ...sheet('O', 800, 400, { count: 1 }), kind: 'offcut' as const };
+    const req = request([part('shelf', 700, 300)], [sheet('S', 2440, 1220, { count: 3 }), offcut]);
+    const plan = await optimize(req);
+    expect(plan.pieces.map((p) => p.stockId)).toEqual(['O']);
+    expect(plan.stockToPull).toEqual([expect.objectContaining({ stockId: 'O', count: 1 })]);
+    expect(plan.stockToBuy).toEqual([]);
+  });
+
+  test('lists sizes with no count as stock to buy, with their cost', async () => {
+    const req = request([part('side', 2000, 600, { quantity: 3 })], [sheet('S', 2440, 1220, { count: 1, costEach: 55 }), sheet('B', 2440, 1220, { costEach: 70 })]);
+    const plan = await optimize(req);
+    expect(validatePlan(req, plan)).toEqual([]);
+    expect(plan.stockToPull).toEqual([expect.objectContaining({ stockId: 'S', count: 1, cost: 55 })]);
+    expect(plan.stockToBuy).toEqual([expect.objectContaining({ stockId: 'B', count: 1, cost: 70 })]);
+    expect(plan.totals!.cost).toBe(125);
+  });
+
+  test('takes no trim from a sawn offcut but does from a sheet', async () => {
+    const req = request([part('p', 800, 400)], [{ ...sheet('O', 800, 400, { count: 1 }), kind: 'offcut' }], { trim: 10 });
+    const plan = await optimize(req);
+    expect(plan.unplaced).toEqual([]);
+    expect(plan.pieces[0].placements[0]).toMatchObject({ x: 0, y: 0 });
+  });
+});
+
+describe('progress and cancel', () => {
+  test('reports progress with pieces used, yield and cost', async () => {
+    const seen: { piecesUsed: number; yield: number; cost: number; elapsedMs: number }[] = [];
+    await optimize(request([part('p', 500, 400, { quantity: 10 })], [sheet('S', 2440, 1220)]), { onProgress: (p) => seen.push(p) });
+    const last = seen.at(-1)!;
+    expect(last.piecesUsed).toBe(1);
+    expect(last.cost).toBe(60);
+    expect(last.yield).toBeCloseTo((10 * 500 * 400) / (2440 * 1220), 9);
+    expect(last.elapsedMs).toBeGreaterThanOrEqual(0);
+  });
+
+  test('a cancelled run still returns a whole plan, marked cancelled', async () => {
+    const ctrl = new AbortController();
+    ctrl.abort();
+    const req = request([part('p', 500, 400, { quantity: 30 }), part('q', 300, 200, { quantity: 5, material: 'MDF' })], [sheet('S', 2440, 1220), sheet('M', 2440, 1220, { material: 'MDF' })], { timeBudgetMs: 5000 });
+    const plan = await optimize(req, { signal: ctrl.signal });
+    expect(plan.cancelled).toBe(true);
+    expect(validatePlan(req, plan)).toEqual([]);
+    expect(placedCount(plan)).toBe(35);
+  });
+
+  test('a request that does not parse is refused with the field named', async () => {
+    await expect(optimize(request([part('p', -5, 400)], [sheet('S', 2440, 1220)]))).rejects.toThrow(/length/);
+  });
+});
