@@ -134,7 +134,6 @@ export function jointMachining(
   lipMm: Mm,
 ): string[] {
   const panel = role === 'front' ? corners.front : corners.back;
-  const panelThickness = role === 'back' ? t.back : t.front;
   const setIn = panel.panelEngagementMm + (role === 'front' ? lipMm : 0);
   const lipText = role === 'front' && lipMm > 0 ? ` (${mmText(t.side)} side + ${mmText(lipMm)} lip: the deeper cut for the overhang)` : '';
   switch (joint.method) {
@@ -163,7 +162,7 @@ export function jointMachining(
       return [
         endGrain
           ? `${joint.tenonsPerCorner} mortise(s) ${mmText(joint.tenonThicknessMm)} wide in each end grain, ${mmText(joint.mortiseDepthMm)} deep.`
-          : `${joint.tenonsPerCorner} mortise(s) ${mmText(joint.tenonThicknessMm)} wide in the inside face at both ends, ${mmText(joint.mortiseDepthMm)} deep, centred ${mmText(panelThickness / 2)} from the end.`,
+          : `${joint.tenonsPerCorner} mortise(s) ${mmText(joint.tenonThicknessMm)} wide in the inside face at both ends, ${mmText(joint.mortiseDepthMm)} deep, centred on the mating part's thickness.`,
       ];
     }
     case 'half-blind-dovetail':

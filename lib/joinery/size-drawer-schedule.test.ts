@@ -259,3 +259,24 @@ describe('a box that cannot be built gives an error on the field, never parts', 
     expect(result.errors.every((e) => e.message.length > 10)).toBe(true);
   });
 });
+
+describe('machining notes and schedule notes', () => {
+  test('every wall is told its joint at both ends and where the bottom groove runs', () => {
+    const { parts } = sized(base({ joint: { method: 'rabbet-and-dado' } }));
+    const side = part(parts, 'side').machining.join(' ');
+    // ¾″ front with a ¼″ tongue: the dado's near edge is ½″ (12.7 mm) from the end, so the front's face is flush.
+    expect(side).toContain('Dado 6.4 mm wide × 6.4 mm deep across the inside face at both ends, its near edge 12.7 mm from the front end');
+    expect(side).toContain('its lower edge 12.7 mm above the bottom edge');
+    expect(part(parts, 'front').machining.join(' ')).toContain('Rabbet on the outside face of both ends');
+  });
+
+  test('loose tenons are counted for the whole schedule, since they are cut from their own stock', () => {
+    const result = sized(base({ quantity: 3, joint: { method: 'butt-loose-tenon', tenonsPerCorner: 2 } }));
+    expect(result.notes.join(' ')).toContain('24 loose tenons');
+  });
+
+  test('undermount slides with sides thicker than ⅝″ warn to check the maker’s spec', () => {
+    const result = sized(base({ slide: { type: 'undermount' }, thickness: { frontMm: 19, sideMm: 19 } }));
+    expect(result.notes.join(' ')).toContain("check the maker's spec for 19 mm sides");
+  });
+});

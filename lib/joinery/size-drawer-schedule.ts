@@ -1,7 +1,7 @@
 import type { Mm } from '@/lib/units/length';
 import { drawerScheduleSchema, type DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import { boxFromOpening } from '@/lib/joinery/box-from-opening';
-import { DRAWER_DEFAULTS } from '@/lib/joinery/defaults';
+import { POCKET_SCREW_MIN_STOCK, UNDERMOUNT_MAX_SIDE } from '@/lib/joinery/defaults';
 import { mmText } from '@/lib/joinery/format';
 import { JOINT_NAMES, jointCorners, jointErrors, jointMachining, type BoxThickness, type JointCorners } from '@/lib/joinery/joint-rules';
 import { requiredSetupCards } from '@/lib/joinery/setup-cards';
@@ -213,13 +213,13 @@ function appliedFrontPart(s: DrawerSchedule): DrawerPart | null {
 
 function scheduleNotes(s: DrawerSchedule, t: BoxThickness): string[] {
   const notes: string[] = [];
-  if (s.slide.type === 'undermount' && t.side > DRAWER_DEFAULTS.undermountWidthDeduction)
-    notes.push(`Undermount slides are usually specified for sides up to ${mmText(DRAWER_DEFAULTS.undermountWidthDeduction)}; check the maker's spec for ${mmText(t.side)} sides.`);
-  if (s.joint.method === 'butt-pocket-screw' && Math.min(t.side, t.front, t.back) < DRAWER_DEFAULTS.sideThickness)
-    notes.push('Pocket-screw jigs usually need stock at least 12.7 mm thick; check the jig.');
+  if (s.slide.type === 'undermount' && t.side > UNDERMOUNT_MAX_SIDE + 0.01)
+    notes.push(`Undermount slides are usually made for sides up to ${mmText(UNDERMOUNT_MAX_SIDE)}; check the maker's spec for ${mmText(t.side)} sides.`);
+  if (s.joint.method === 'butt-pocket-screw' && Math.min(t.side, t.front, t.back) < POCKET_SCREW_MIN_STOCK)
+    notes.push(`Pocket-screw jigs usually need stock at least ${mmText(POCKET_SCREW_MIN_STOCK)} thick; check the jig.`);
   if (s.joint.method === 'butt-loose-tenon') {
-    const corners = 4 * s.joint.tenonsPerCorner * s.quantity;
-    notes.push(`${corners} loose tenons ${mmText(s.joint.tenonThicknessMm)} thick, each ${mmText(2 * s.joint.mortiseDepthMm)} long, cut from tenon stock.`);
+    const tenons = 4 * s.joint.tenonsPerCorner * s.quantity;
+    notes.push(`${tenons} loose tenons ${mmText(s.joint.tenonThicknessMm)} thick, each ${mmText(2 * s.joint.mortiseDepthMm)} long, cut from tenon stock.`);
   }
   if (s.front.style === 'applied' && s.size.from === 'opening' && s.front.fit === 'overlay')
     notes.push('Fronts stacked in one carcass want 3 mm between them: lower the top or bottom overlay by half of that where two fronts meet.');

@@ -61,28 +61,24 @@ export const jointSchema = z.discriminatedUnion('method', [
 
 export const SLIDE_TYPES = ['side-mount', 'undermount', 'wooden-runners', 'none'] as const;
 
-export const slideSchema = z.discriminatedUnion('type', [
+/** Slides that need a running clearance on each side and above the box. */
+const clearanceSlide = <T extends 'side-mount' | 'wooden-runners' | 'none'>(type: T, sideMm: number, heightMm: number) =>
   z.object({
-    type: z.literal('side-mount'),
-    sideClearanceMm: nonNegativeMm('Side clearance').default(D.sideMountSideClearance),
-    heightClearanceMm: nonNegativeMm('Height clearance').default(D.sideMountHeightClearance),
-  }),
+    type: z.literal(type),
+    sideClearanceMm: nonNegativeMm('Side clearance').default(sideMm),
+    heightClearanceMm: nonNegativeMm('Height clearance').default(heightMm),
+  });
+
+export const slideSchema = z.discriminatedUnion('type', [
+  clearanceSlide('side-mount', D.sideMountSideClearance, D.sideMountHeightClearance),
   z.object({
     type: z.literal('undermount'),
     widthDeductionMm: nonNegativeMm('Width deduction').default(D.undermountWidthDeduction),
     heightDeductionMm: nonNegativeMm('Height deduction').default(D.undermountHeightDeduction),
     bottomRecessMm: nonNegativeMm('Bottom recess').default(D.undermountBottomRecess),
   }),
-  z.object({
-    type: z.literal('wooden-runners'),
-    sideClearanceMm: nonNegativeMm('Side clearance').default(D.runnerSideClearance),
-    heightClearanceMm: nonNegativeMm('Height clearance').default(D.runnerHeightClearance),
-  }),
-  z.object({
-    type: z.literal('none'),
-    sideClearanceMm: nonNegativeMm('Side clearance').default(0),
-    heightClearanceMm: nonNegativeMm('Height clearance').default(0),
-  }),
+  clearanceSlide('wooden-runners', D.runnerSideClearance, D.runnerHeightClearance),
+  clearanceSlide('none', 0, 0),
 ]);
 
 /** How box depth follows from the opening. Left out: the longest standard slide for slides, else opening less clearance. */
