@@ -2,10 +2,25 @@ import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
-  resolve: { alias: { '@': fileURLToPath(new URL('./', import.meta.url)) } },
+  resolve: {
+    alias: {
+      '@': fileURLToPath(new URL('./', import.meta.url)),
+      // The marker package throws outside React Server Components; node tests exercise server code directly.
+      'server-only': fileURLToPath(new URL('./tests/support/empty-module.ts', import.meta.url)),
+    },
+  },
   test: {
     // Explicit, so Playwright specs under tests/e2e are never collected here.
-    include: ['lib/**/*.test.ts', 'shared/**/*.test.ts', 'db/**/*.test.ts', 'components/**/*.test.ts', 'components/**/*.test.tsx', 'tests/integration/**/*.test.ts', 'app/**/*.test.ts', 'seeds/**/*.test.ts'],
+    include: [
+      'lib/**/*.test.ts',
+      'shared/**/*.test.ts',
+      'db/**/*.test.ts',
+      'components/**/*.test.{ts,tsx}',
+      'app/**/*.test.ts',
+      'seeds/**/*.test.ts',
+      'workers/**/*.test.ts',
+      'tests/integration/**/*.test.ts',
+    ],
     environment: 'node',
     testTimeout: 30_000,
     hookTimeout: 60_000,

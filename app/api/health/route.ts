@@ -1,0 +1,16 @@
+// GET /api/health – readiness probe: the database is open and migrated (public, says nothing about any shop)
+import { NextResponse } from 'next/server';
+import { sql } from 'drizzle-orm';
+import { getDb } from '@/db/client';
+
+export const dynamic = 'force-dynamic';
+
+export async function GET() {
+  try {
+    const db = await getDb();
+    await db.execute(sql`select 1`);
+    return NextResponse.json({ ok: true });
+  } catch {
+    return NextResponse.json({ ok: false }, { status: 503 });
+  }
+}

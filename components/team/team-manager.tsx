@@ -1,0 +1,118 @@
+'use client';
+
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useState, type FormEvent } from 'react';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { ROLE_LABELS, ROLES, type Role } from '@/lib/auth/permissions';
+import { api, ApiError } from '@/lib/client/api';
+import type { TeamMember } from '@/shared/schemas/user';
+
+export function TeamManager({ selfId }: { selfId: string }) {
+  const queryClient = useQueryClient();
+  const team = useQuery({ queryKey: ['team'], queryFn: () => api<TeamMember[]>('/api/team') });
+  const [fields, setFields] = useState<Record<string, string[]>>({});
+  const [rowError, setRowError] = useState<string | null>(null);
+
+  const add = useMutation({
+    mutationFn: (body: Record<string, unknown>) => api<TeamMember>('/api/team', { method: 'POST', body }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['team'] }),
+    onError: (e) => setFields(e instanceof ApiError ? e.fields : {}),
+  });
+  const change = useMutation({
+    mutationFn: ({ id, ...body }: { id: string; role?: Role; active?: boolean }) => api<TeamMember>(`/api/team/${id}`, { method: 'PATCH', body }),
+    onSuccess: () => {
+      setRowError(null);
+      queryClient.invalidateQueries({ queryKey: ['team'] });
+    },
+    onError: (e) => setRowError(e.message),
+  });
+
+  function onAdd(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const formEl = event.currentTarget;
+    const form = new FormData(formEl);
+    setFields({});
+    add.mutate(
+      { name: form.get('name'), email: form.get('email'), role: form.get('role'), password: form.get('password') },
+      { onSuccess: () => formEl.reset() },
+    );
+  }
+
+  return (
+    <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
+      <div>
+        {team.isPending && <p role="status" className="text-sm text-graphite-mute">Loading the team…</p>}
+        {team.isError && <p role="alert" className="text-sm text-brick">Could not load the team: {team.error.message}</p>}
+        {rowError && <p role="alert" className="mb-3 rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">{rowError}</p>}
+        {team.isSuccess && (
+          <div className="card overflow-hidden">
+            <table className="data-table" aria-label="Team">
+              <thead>
+                <tr>
+                  <th>Name</th>
+                  <th>E-mail</th>
+                  <th>Role</th>
+                  <th>Status</th>
+                  <th />
+                </tr>
+              </thead>
+              <tbody>
+                {team.data.map((m) => (
+                  <tr key={m.id} className={m.active ? '' : 'text-graphite-mute'}>
+                    <td className="font-medium">{m.name}{m.id === selfId && <span className="ml-1 text-xs text-graphite-mute">(you)</span>}</td>
+                    <td>{m.email}</td>
+                    <td>
+                      <select
+                        aria-label={`Role of ${m.name}`}
+                        className="field-input py-1"
+                        value={m.role}
+                        disabled={change.isPending}
+                        onChange={(e) => change.mutate({ id: m.id, role: e.target.value as Role })}
+                      >
+                        {ROLES.map((r) => (
+                          <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+                        ))}
+                      </select>
+                    </td>
+                    <td>{m.active ? <StatusBadge tone="good">Active</StatusBadge> : <StatusBadge tone="neutral">Deactivated</StatusBadge>}</td>
+                    <td className="text-right">
+                      <button
+                        type="button"
+                        className={m.active ? 'btn-danger py-1' : 'btn-quiet py-1'}
+                        disabled={change.isPending}
+                        onClick={() => change.mutate({ id: m.id, active: !m.active })}
+                      >
+                        {m.active ? 'Deactivate' : 'Reactivate'}
+                      </button>
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </div>
+      <form onSubmit={onAdd} className="card flex flex-col gap-3 p-5" aria-label="Add a person">
+        <h2>Add a person</h2>
+        {(['name', 'email', 'password'] as const).map((f) => (
+          <div key={f}>
+            <label htmlFor={`member-${f}`} className="field-label">{{ name: 'Name', email: 'E-mail', password: 'First password' }[f]}</label>
+            <input id={`member-${f}`} name={f} type={f === 'password' ? 'password' : f === 'email' ? 'email' : 'text'} className="field-input" autoComplete="off" />
+            {fields[f] && <p className="field-error">{fields[f][0]}</p>}
+          </div>
+        ))}
+        <div>
+          <label htmlFor="member-role" className="field-label">Role</label>
+          <select id="member-role" name="role" className="field-input" defaultValue="cutter">
+            {ROLES.map((r) => (
+              <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+            ))}
+          </select>
+        </div>
+        {add.isError && !Object.keys(fields).length && <p className="field-error">{add.error.message}</p>}
+        {add.isSuccess && <p role="status" className="text-sm text-sage">Added {add.data.name}.</p>}
+        <button type="submit" className="btn-accent" disabled={add.isPending}>{add.isPending ? 'Adding…' : 'Add to team'}</button>
+      </form>
+    </div>
+  );
+}

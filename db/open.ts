@@ -1,0 +1,86 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
+import * as schema from './schema';
+import { acquireDirectoryLock } from './lock';
+
+export type Schema = typeof schema;
+/** The one database type the app codes against: PGlite and node-postgres both satisfy it. */
+export type Db = PgDatabase<PgQueryResultHKT, Schema>;
+
+export interface DbHandle {
+  db: Db;
+  kind: 'pglite' | 'postgres';
+  close(): Promise<void>;
+}
+
+export interface OpenOptions {
+  /** `postgres://…` for a PostgreSQL server; otherwise the embedded database is used. */
+  url?: string;
+  /** Embedded database directory, or `memory://` for a throw-away in-memory database. */
+  dataDir?: string;
+  migrate?: boolean;
+}
+
+export const MIGRATIONS_FOLDER = path.resolve(process.cwd(), 'db/migrations');
+
+export async function openDatabase(options: OpenOptions = {}): Promise<DbHandle> {
+  const handle = options.url && /^postgres(ql)?:\/\//.test(options.url)
+    ? await openPostgres(options.url)
+    : await openPglite(options.dataDir ?? './data/pglite');
+  if (options.migrate !== false) {
+    try {
+      await runMigrations(handle);
+    } catch (error) {
+      await handle.close();
+      throw error;
+    }
+  }
+  return handle;
+}
+
+async function openPglite(dataDir: string): Promise<DbHandle> {
+  const { PGlite } = await import('@electric-sql/pglite');
+  const { drizzle } = await import('drizzle-orm/pglite');
+  if (dataDir === 'memory://') {
+    const client = new PGlite();
+    await client.waitReady;
+    return { db: drizzle({ client, schema }) as unknown as Db, kind: 'pglite', close: () => client.close() };
+  }
+  const dir = path.resolve(dataDir);
+  // PGlite creates only the last path segment.
+  fs.mkdirSync(path.dirname(dir), { recursive: true });
+  const release = acquireDirectoryLock(`${dir}.lock`);
+  try {
+    const client = new PGlite(dir);
+    await client.waitReady;
+    return {
+      db: drizzle({ client, schema }) as unknown as Db,
+      kind: 'pglite',
+      close: async () => {
+        await client.close();
+        release();
+      },
+    };
+  } catch (error) {
+    release();
+    throw error;
+  }
+}
+
+async function openPostgres(url: string): Promise<DbHandle> {
+  const { Pool } = await import('pg');
+  const { drizzle } = await import('drizzle-orm/node-postgres');
+  const pool = new Pool({ connectionString: url, max: 10 });
+  return { db: drizzle({ client: pool, schema }) as unknown as Db, kind: 'postgres', close: () => pool.end() };
+}
+
+async function runMigrations(handle: DbHandle) {
+  if (handle.kind === 'pglite') {
+    const { migrate } = await import('drizzle-orm/pglite/migrator');
+    await migrate(handle.db as never, { migrationsFolder: MIGRATIONS_FOLDER });
+  } else {
+    const { migrate } = await import('drizzle-orm/node-postgres/migrator');
+    await migrate(handle.db as never, { migrationsFolder: MIGRATIONS_FOLDER });
+  }
+}

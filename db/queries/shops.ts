@@ -1,0 +1,30 @@
+import { eq } from 'drizzle-orm';
+import type { Db } from '../open';
+import { shops } from '../schema';
+import type { ShopSettings } from '@/shared/schemas/shop';
+import { recordAudit } from './audit';
+
+export async function getShopSettings(db: Db, shopId: string): Promise<ShopSettings | null> {
+  const [row] = await db
+    .select({
+      name: shops.name,
+      units: shops.units,
+      currency: shops.currency,
+      kerfMm: shops.kerfMm,
+      edgeTrimMm: shops.edgeTrimMm,
+      minOffcutLengthMm: shops.minOffcutLengthMm,
+      minOffcutWidthMm: shops.minOffcutWidthMm,
+      wastePercent: shops.wastePercent,
+    })
+    .from(shops)
+    .where(eq(shops.id, shopId));
+  return (row as ShopSettings | undefined) ?? null;
+}
+
+export async function updateShopSettings(db: Db, shopId: string, userId: string, patch: Partial<ShopSettings>) {
+  await db.transaction(async (tx) => {
+    await tx.update(shops).set(patch).where(eq(shops.id, shopId));
+    await recordAudit(tx, { shopId, userId, action: 'update', entity: 'shop-settings', entityId: shopId, data: patch });
+  });
+  return getShopSettings(db, shopId);
+}

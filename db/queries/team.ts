@@ -1,0 +1,72 @@
+import bcrypt from 'bcryptjs';
+import { and, eq, ne, sql } from 'drizzle-orm';
+import type { Db } from '../open';
+import { users } from '../schema';
+import { conflict, HttpError, notFound } from '@/lib/api/errors';
+import type { TeamMember, TeamMemberInput, TeamMemberPatch } from '@/shared/schemas/user';
+import { recordAudit } from './audit';
+import { listTeam } from './users';
+
+export const BCRYPT_ROUNDS = 10;
+
+export async function teamOf(db: Db, shopId: string): Promise<TeamMember[]> {
+  return (await listTeam(db, shopId)).map((u) => ({ ...u, createdAt: u.createdAt.toISOString() }));
+}
+
+export async function addTeamMember(db: Db, shopId: string, actorId: string, input: TeamMemberInput): Promise<TeamMember> {
+  const passwordHash = await bcrypt.hash(input.password, BCRYPT_ROUNDS);
+  try {
+    return await db.transaction(async (tx) => {
+      const [row] = await tx
+        .insert(users)
+        .values({ shopId, name: input.name, email: input.email, role: input.role, passwordHash })
+        .returning();
+      await recordAudit(tx, { shopId, userId: actorId, action: 'create', entity: 'user', entityId: row.id, data: { email: row.email, role: row.role } });
+      return { id: row.id, name: row.name, email: row.email, role: row.role, active: row.active, createdAt: row.createdAt.toISOString() };
+    });
+  } catch (error) {
+    if (isUniqueViolation(error)) throw new HttpError(422, 'That e-mail is already in use.', { email: ['That e-mail is already in use.'] });
+    throw error;
+  }
+}
+
+/**
+ * Changes a person's role, name, password or status. Any change but the name bumps their token version so the
+ * change takes effect on their next request. The shop always keeps at least one active owner.
+ */
+export async function updateTeamMember(db: Db, shopId: string, actorId: string, id: string, patch: TeamMemberPatch) {
+  return db.transaction(async (tx) => {
+    const [current] = await tx.select().from(users).where(and(eq(users.shopId, shopId), eq(users.id, id))).for('update');
+    if (!current) throw notFound('That person');
+
+    const losesOwner = current.role === 'owner' && current.active && ((patch.role && patch.role !== 'owner') || patch.active === false);
+    if (losesOwner) {
+      const [{ others }] = await tx
+        .select({ others: sql<number>`count(*)::int` })
+        .from(users)
+        .where(and(eq(users.shopId, shopId), eq(users.role, 'owner'), eq(users.active, true), ne(users.id, id)));
+      if (Number(others) === 0) throw conflict('The shop needs at least one active owner. Make someone else owner first.');
+    }
+
+    const bumps = patch.role !== undefined || patch.active !== undefined || patch.password !== undefined;
+    const [row] = await tx
+      .update(users)
+      .set({
+        ...(patch.name !== undefined && { name: patch.name }),
+        ...(patch.role !== undefined && { role: patch.role }),
+        ...(patch.active !== undefined && { active: patch.active }),
+        ...(patch.password !== undefined && { passwordHash: await bcrypt.hash(patch.password, BCRYPT_ROUNDS) }),
+        ...(bumps && { tokenVersion: sql`${users.tokenVersion} + 1` }),
+      })
+      .where(and(eq(users.shopId, shopId), eq(users.id, id)))
+      .returning();
+    const { password: _secret, ...logged } = patch;
+    await recordAudit(tx, { shopId, userId: actorId, action: 'update', entity: 'user', entityId: id, data: { ...logged, passwordChanged: patch.password !== undefined } });
+    return { id: row.id, name: row.name, email: row.email, role: row.role, active: row.active, createdAt: row.createdAt.toISOString() } satisfies TeamMember;
+  });
+}
+
+function isUniqueViolation(error: unknown): boolean {
+  const e = error as { code?: string; cause?: { code?: string } };
+  return e?.code === '23505' || e?.cause?.code === '23505';
+}

@@ -1,0 +1,56 @@
+import { and, asc, eq, sql } from 'drizzle-orm';
+import type { Db } from '../open';
+import { users } from '../schema';
+import type { Role } from '@/lib/auth/permissions';
+
+export interface SessionUser {
+  id: string;
+  shopId: string;
+  role: Role;
+  name: string;
+  email: string;
+  tokenVersion: number;
+}
+
+export async function findActiveUserByEmail(db: Db, email: string) {
+  const [row] = await db
+    .select()
+    .from(users)
+    .where(and(sql`lower(${users.email}) = ${email.trim().toLowerCase()}`, eq(users.active, true)))
+    .limit(1);
+  return row ?? null;
+}
+
+/**
+ * The user a session claims to be, as the database has them now. A session minted before a change of role,
+ * password or status (older token version) or for another shop no longer counts.
+ */
+export async function loadSessionUser(
+  db: Db,
+  claims: { userId: string; shopId: string; tokenVersion: number },
+): Promise<SessionUser | null> {
+  const [row] = await db
+    .select({
+      id: users.id,
+      shopId: users.shopId,
+      role: users.role,
+      name: users.name,
+      email: users.email,
+      tokenVersion: users.tokenVersion,
+      active: users.active,
+    })
+    .from(users)
+    .where(and(eq(users.id, claims.userId), eq(users.shopId, claims.shopId)))
+    .limit(1);
+  if (!row || !row.active || row.tokenVersion !== claims.tokenVersion) return null;
+  const { active: _active, ...user } = row;
+  return user;
+}
+
+export async function listTeam(db: Db, shopId: string) {
+  return db
+    .select({ id: users.id, name: users.name, email: users.email, role: users.role, active: users.active, createdAt: users.createdAt })
+    .from(users)
+    .where(eq(users.shopId, shopId))
+    .orderBy(asc(users.name));
+}

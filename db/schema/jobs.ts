@@ -1,0 +1,23 @@
+import { date, index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { jobStatusEnum } from './enums';
+import { shops } from './shops';
+import { users } from './users';
+
+export const jobs = pgTable(
+  'jobs',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: uuid('shop_id')
+      .notNull()
+      .references(() => shops.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    customer: text('customer').notNull().default(''),
+    status: jobStatusEnum('status').notNull().default('quoting'),
+    dueDate: date('due_date'),
+    notes: text('notes').notNull().default(''),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('jobs_shop_idx').on(t.shopId)],
+);

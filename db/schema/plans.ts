@@ -1,0 +1,114 @@
+import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { planStatusEnum } from './enums';
+import { jobs } from './jobs';
+import { shops } from './shops';
+import { users } from './users';
+
+/** A nesting result for a job. The full plan document is kept with its schema version; pieces and steps are
+ * broken out so the shop floor can tick steps and the stock room can reserve exact pieces. */
+export const plans = pgTable(
+  'plans',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: uuid('shop_id')
+      .notNull()
+      .references(() => shops.id, { onDelete: 'cascade' }),
+    jobId: uuid('job_id')
+      .notNull()
+      .references(() => jobs.id, { onDelete: 'cascade' }),
+    name: text('name').notNull().default('Plan'),
+    status: planStatusEnum('status').notNull().default('draft'),
+    version: integer('version').notNull().default(1),
+    request: jsonb('request').notNull(),
+    document: jsonb('document').notNull(),
+    yieldRatio: doublePrecision('yield_ratio'),
+    costCents: integer('cost_cents'),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('plans_job_idx').on(t.shopId, t.jobId)],
+);
+
+export const planPieces = pgTable(
+  'plan_pieces',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: uuid('shop_id')
+      .notNull()
+      .references(() => shops.id, { onDelete: 'cascade' }),
+    planId: uuid('plan_id')
+      .notNull()
+      .references(() => plans.id, { onDelete: 'cascade' }),
+    index: integer('index').notNull(),
+    stockItemId: uuid('stock_item_id'),
+    offcutId: uuid('offcut_id'),
+    material: text('material').notNull(),
+    thicknessMm: doublePrecision('thickness_mm').notNull(),
+    lengthMm: doublePrecision('length_mm').notNull(),
+    widthMm: doublePrecision('width_mm').notNull(),
+    toBuy: boolean('to_buy').notNull().default(false),
+  },
+  (t) => [index('plan_pieces_plan_idx').on(t.planId)],
+);
+
+export const placements = pgTable(
+  'placements',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: uuid('shop_id')
+      .notNull()
+      .references(() => shops.id, { onDelete: 'cascade' }),
+    planPieceId: uuid('plan_piece_id')
+      .notNull()
+      .references(() => planPieces.id, { onDelete: 'cascade' }),
+    partId: uuid('part_id'),
+    instance: integer('instance').notNull(),
+    xMm: doublePrecision('x_mm').notNull(),
+    yMm: doublePrecision('y_mm').notNull(),
+    lengthMm: doublePrecision('length_mm').notNull(),
+    widthMm: doublePrecision('width_mm').notNull(),
+    rotated: boolean('rotated').notNull().default(false),
+    locked: boolean('locked').notNull().default(false),
+    damaged: boolean('damaged').notNull().default(false),
+  },
+  (t) => [index('placements_piece_idx').on(t.planPieceId)],
+);
+
+export const sawSteps = pgTable(
+  'saw_steps',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: uuid('shop_id')
+      .notNull()
+      .references(() => shops.id, { onDelete: 'cascade' }),
+    planPieceId: uuid('plan_piece_id')
+      .notNull()
+      .references(() => planPieces.id, { onDelete: 'cascade' }),
+    seq: integer('seq').notNull(),
+    kind: text('kind').notNull(),
+    positionMm: doublePrecision('position_mm').notNull(),
+    cutLengthMm: doublePrecision('cut_length_mm').notNull(),
+    description: text('description').notNull().default(''),
+    doneAt: timestamp('done_at', { withTimezone: true }),
+    doneBy: uuid('done_by').references(() => users.id, { onDelete: 'set null' }),
+  },
+  (t) => [index('saw_steps_piece_idx').on(t.planPieceId, t.seq)],
+);
+
+export const auditEvents = pgTable(
+  'audit_events',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: uuid('shop_id')
+      .notNull()
+      .references(() => shops.id, { onDelete: 'cascade' }),
+    userId: uuid('user_id').references(() => users.id, { onDelete: 'set null' }),
+    action: text('action').notNull(),
+    entity: text('entity').notNull(),
+    entityId: text('entity_id'),
+    data: jsonb('data'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('audit_events_shop_idx').on(t.shopId, t.createdAt)],
+);

@@ -1,0 +1,17 @@
+import type { ShopUnits } from '@/shared/schemas/units';
+import { doublePrecision, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+
+
+export const shops = pgTable('shops', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  name: text('name').notNull(),
+  units: jsonb('units').$type<ShopUnits>().notNull().default({ system: 'imperial', precision: 16, feet: false }),
+  currency: text('currency').notNull().default('USD'),
+  kerfMm: doublePrecision('kerf_mm').notNull().default(3.2),
+  edgeTrimMm: doublePrecision('edge_trim_mm').notNull().default(10),
+  minOffcutLengthMm: doublePrecision('min_offcut_length_mm').notNull().default(300),
+  minOffcutWidthMm: doublePrecision('min_offcut_width_mm').notNull().default(100),
+  /** Waste allowance used by takeoffs, in whole percent. */
+  wastePercent: integer('waste_percent').notNull().default(15),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+});

@@ -1,0 +1,52 @@
+/** Everything a person can be allowed to do in Kerfwise. Route handlers name exactly one of these. */
+export const PERMISSIONS = [
+  'jobs:read',
+  'jobs:write',
+  'cutlist:write',
+  'nest:run',
+  'plans:read',
+  'plans:write',
+  'plans:release',
+  'sawsteps:tick',
+  'stock:read',
+  'stock:write',
+  'offcuts:record',
+  'prices:read',
+  'yield:read',
+  'team:manage',
+  'settings:read',
+  'settings:write',
+] as const;
+
+export type Permission = (typeof PERMISSIONS)[number];
+
+export const ROLES = ['owner', 'estimator', 'cutter'] as const;
+export type Role = (typeof ROLES)[number];
+
+/** PRODUCT.md "Users and roles": the owner may do everything; the cutter never sees prices. */
+export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
+  owner: PERMISSIONS,
+  estimator: [
+    'jobs:read',
+    'jobs:write',
+    'cutlist:write',
+    'nest:run',
+    'plans:read',
+    'plans:write',
+    'plans:release',
+    'stock:read',
+    'prices:read',
+    'settings:read',
+  ],
+  cutter: ['jobs:read', 'plans:read', 'sawsteps:tick', 'stock:read', 'offcuts:record', 'settings:read'],
+};
+
+export function can(role: Role, permission: Permission): boolean {
+  return ROLE_PERMISSIONS[role].includes(permission);
+}
+
+export const ROLE_LABELS: Record<Role, string> = {
+  owner: 'Owner',
+  estimator: 'Estimator',
+  cutter: 'Cutter',
+};

@@ -1,0 +1,36 @@
+import 'server-only';
+import { getServerSession } from 'next-auth';
+import { getToken } from 'next-auth/jwt';
+import type { NextRequest } from 'next/server';
+import { redirect } from 'next/navigation';
+import { getDb } from '@/db/client';
+import { loadSessionUser, type SessionUser } from '@/db/queries/users';
+import type { Db } from '@/db/open';
+import { serverEnv } from '@/lib/env';
+import { claimsFromToken } from './claims';
+import { authOptions } from './options';
+import { can, type Permission } from './permissions';
+
+export type { SessionUser };
+
+/** The signed-in user of an API request, checked against the database, or null. */
+export async function userFromRequest(req: NextRequest, db: Db): Promise<SessionUser | null> {
+  const token = await getToken({ req, secret: serverEnv().NEXTAUTH_SECRET });
+  const claims = claimsFromToken(token);
+  return claims ? loadSessionUser(db, claims) : null;
+}
+
+/** The signed-in user of a page render, or null. */
+export async function currentUser(): Promise<SessionUser | null> {
+  const session = await getServerSession(authOptions());
+  const claims = claimsFromToken(session?.user);
+  return claims ? loadSessionUser(await getDb(), claims) : null;
+}
+
+/** For server components: signed in (else to sign-in) and allowed (else to the no-access page). */
+export async function requirePageUser(permission?: Permission): Promise<SessionUser> {
+  const user = await currentUser();
+  if (!user) redirect('/sign-in');
+  if (permission && !can(user.role, permission)) redirect(`/no-access?need=${encodeURIComponent(permission)}`);
+  return user;
+}

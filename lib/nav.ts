@@ -1,0 +1,27 @@
+import { can, type Permission, type Role } from '@/lib/auth/permissions';
+
+export interface NavItem {
+  href: string;
+  label: string;
+  permission: Permission;
+  hint: string;
+}
+
+/** The app's sections; each shows only to roles holding its permission. */
+export const NAV_ITEMS: readonly NavItem[] = [
+  { href: '/jobs', label: 'Jobs', permission: 'jobs:read', hint: 'Cut lists, drawer schedules, plans' },
+  { href: '/stock', label: 'Stock room', permission: 'stock:read', hint: 'Sheets, boards and offcuts' },
+  { href: '/yield', label: 'Yield ledger', permission: 'yield:read', hint: 'What the stock became' },
+  { href: '/shop-floor', label: 'Shop floor', permission: 'sawsteps:tick', hint: 'Saw orders to cut' },
+  { href: '/team', label: 'Team', permission: 'team:manage', hint: 'People and roles' },
+  { href: '/settings', label: 'Shop settings', permission: 'settings:write', hint: 'Units, kerf, trim' },
+];
+
+export function navFor(role: Role): NavItem[] {
+  return NAV_ITEMS.filter((item) => can(role, item.permission));
+}
+
+/** Where a role lands after signing in. */
+export function homeFor(role: Role): string {
+  return role === 'cutter' ? '/shop-floor' : '/jobs';
+}

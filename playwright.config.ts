@@ -1,0 +1,26 @@
+import { defineConfig } from '@playwright/test';
+import { E2E_URL } from './tests/e2e/support/server';
+
+// Debian's Chromium, headless, with background networking off: nothing is downloaded and nothing leaves the machine.
+export default defineConfig({
+  testDir: './tests/e2e',
+  testMatch: '**/*.spec.ts',
+  outputDir: './test-results/e2e',
+  workers: 1,
+  fullyParallel: false,
+  retries: 0,
+  timeout: 60_000,
+  reporter: [['list']],
+  globalSetup: './tests/e2e/support/global-setup.ts',
+  globalTeardown: './tests/e2e/support/global-teardown.ts',
+  use: {
+    baseURL: E2E_URL,
+    screenshot: 'only-on-failure',
+    trace: 'off',
+    viewport: { width: 1360, height: 860 },
+    launchOptions: {
+      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    },
+  },
+});

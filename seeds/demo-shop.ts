@@ -1,0 +1,84 @@
+import bcrypt from 'bcryptjs';
+import type { Db } from '@/db/open';
+import { jobs, offcuts, parts, shops, stockItems, users } from '@/db/schema';
+import { inches } from '@/lib/units/length';
+
+/**
+ * An invented shop for trying Kerfwise: Larkspur Cabinet Works, a four-person shop building kitchens, vanities
+ * and built-ins. Names, customers and stock are made up.
+ */
+export const DEMO_PASSWORD = 'larkspur-demo';
+
+export const DEMO_PEOPLE = [
+  { name: 'Maren Okafor', email: 'maren@larkspur.example', role: 'owner' },
+  { name: 'Teodor Vance', email: 'teo@larkspur.example', role: 'estimator' },
+  { name: 'Ines Halvorsen', email: 'ines@larkspur.example', role: 'cutter' },
+] as const;
+
+// A US shop buys 4 × 8 ft sheets; Baltic birch comes metric (1525 mm square) and shows as ≈60″.
+const SHEET = { l: inches(96), w: inches(48) };
+
+export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: string }> {
+  const existing = await db.select({ id: shops.id }).from(shops).limit(1);
+  if (existing.length) return { seeded: false, shopId: existing[0].id };
+
+  const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 10);
+  return db.transaction(async (tx) => {
+    const [shop] = await tx
+      .insert(shops)
+      .values({
+        name: 'Larkspur Cabinet Works',
+        units: { system: 'imperial', precision: 16, feet: false },
+        currency: 'USD',
+        kerfMm: inches(1 / 8),
+        edgeTrimMm: 6,
+        minOffcutLengthMm: inches(12),
+        minOffcutWidthMm: inches(4),
+        wastePercent: 15,
+      })
+      .returning({ id: shops.id });
+    const shopId = shop.id;
+
+    const people = await tx
+      .insert(users)
+      .values(DEMO_PEOPLE.map((p) => ({ ...p, shopId, passwordHash })))
+      .returning({ id: users.id, role: users.role });
+    const estimator = people.find((p) => p.role === 'estimator')!.id;
+
+    await tx.insert(stockItems).values([
+      { shopId, kind: 'sheet', material: 'Baltic birch', nominalThickness: '1/2"', thicknessMm: 12, lengthMm: 1525, widthMm: 1525, grain: 'along-length', onHand: 14, lowStockAt: 4, costCents: 6850, supplier: 'Cedar Run Plywood', location: 'Rack A2', buyable: true },
+      { shopId, kind: 'sheet', material: 'Baltic birch', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: 1525, widthMm: 1525, grain: 'along-length', onHand: 8, lowStockAt: 3, costCents: 8900, supplier: 'Cedar Run Plywood', location: 'Rack A3', buyable: true },
+      { shopId, kind: 'sheet', material: 'Maple ply', nominalThickness: '3/4"', thicknessMm: inches(23 / 32), lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'along-length', onHand: 22, lowStockAt: 6, costCents: 9400, supplier: 'Cedar Run Plywood', location: 'Rack B1', buyable: true },
+      { shopId, kind: 'sheet', material: 'Maple ply', nominalThickness: '1/4"', thicknessMm: 6, lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'along-length', onHand: 9, lowStockAt: 3, costCents: 4200, supplier: 'Cedar Run Plywood', location: 'Rack B4', buyable: true },
+      { shopId, kind: 'sheet', material: 'MDF', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'none', onHand: 5, lowStockAt: 2, costCents: 4600, supplier: 'Hollow Creek Supply', location: 'Rack C1', buyable: true },
+      { shopId, kind: 'board', material: 'White oak', nominalThickness: '4/4', thicknessMm: inches(13 / 16), lengthMm: inches(96), widthMm: inches(6.5), grain: 'along-length', surfacing: 'S2S', grade: 'FAS', onHand: 30, lowStockAt: 10, costCents: 925, supplier: 'Millbrook Hardwoods', location: 'Lumber rack 1', buyable: true },
+      { shopId, kind: 'board', material: 'Hard maple', nominalThickness: '4/4', thicknessMm: inches(13 / 16), lengthMm: inches(96), widthMm: inches(5.5), grain: 'along-length', surfacing: 'S2S', grade: '1 Common', onHand: 18, lowStockAt: 8, costCents: 640, supplier: 'Millbrook Hardwoods', location: 'Lumber rack 2', buyable: true },
+    ]);
+    await tx.insert(offcuts).values([
+      { shopId, material: 'Baltic birch', thicknessMm: 12, lengthMm: inches(30), widthMm: inches(16), location: 'Offcut bin 1', costCents: 900 },
+      { shopId, material: 'Maple ply', thicknessMm: inches(23 / 32), lengthMm: inches(46.5), widthMm: inches(15), location: 'Offcut bin 2', costCents: 1100 },
+      { shopId, material: 'Maple ply', thicknessMm: inches(23 / 32), lengthMm: inches(25.25), widthMm: inches(23.25), location: 'Offcut bin 2', costCents: 800 },
+    ]);
+
+    const [kitchen, vanity] = await tx
+      .insert(jobs)
+      .values([
+        { shopId, name: 'Hollis kitchen', customer: 'Priya & Sam Hollis', status: 'won', dueDate: '2027-01-22', notes: 'Maple ply carcasses, Baltic birch drawer boxes, full-extension side-mount slides.', createdBy: estimator },
+        { shopId, name: 'Pemberton vanity', customer: 'Gail Pemberton', status: 'quoting', dueDate: '2027-02-05', notes: 'Floating vanity, two drawers, white oak face frame.', createdBy: estimator },
+        { shopId, name: 'Arden Books wall units', customer: 'Arden Books', status: 'quoting', dueDate: null, notes: 'Six open bookcases, MDF painted.', createdBy: estimator },
+      ])
+      .returning({ id: jobs.id });
+
+    const ply = { material: 'Maple ply', thicknessMm: inches(23 / 32) };
+    await tx.insert(parts).values([
+      { shopId, jobId: kitchen.id, label: 'Base side', quantity: 8, lengthMm: inches(34.5), widthMm: inches(23), ...ply, grain: 'along-length', sort: 1 },
+      { shopId, jobId: kitchen.id, label: 'Base bottom', quantity: 4, lengthMm: inches(34), widthMm: inches(23), ...ply, grain: 'along-length', sort: 2 },
+      { shopId, jobId: kitchen.id, label: 'Stretcher', quantity: 8, lengthMm: inches(34), widthMm: inches(4), ...ply, grain: 'any', sort: 3 },
+      { shopId, jobId: kitchen.id, label: 'Back', quantity: 4, lengthMm: inches(34.5), widthMm: inches(34), material: 'Maple ply', thicknessMm: 6, grain: 'any', sort: 4 },
+      { shopId, jobId: vanity.id, label: 'Vanity side', quantity: 2, lengthMm: inches(21), widthMm: inches(18), ...ply, grain: 'along-length', sort: 1 },
+      { shopId, jobId: vanity.id, label: 'Face frame stile', quantity: 2, lengthMm: inches(21), widthMm: inches(1.5), material: 'White oak', thicknessMm: inches(13 / 16), grain: 'along-length', sort: 2 },
+      { shopId, jobId: vanity.id, label: 'Face frame rail', quantity: 3, lengthMm: inches(33), widthMm: inches(1.5), material: 'White oak', thicknessMm: inches(13 / 16), grain: 'along-length', sort: 3 },
+    ]);
+    return { seeded: true, shopId };
+  });
+}

@@ -1,0 +1,57 @@
+/**
+ * `npm run demo`: prepares ./data (secret, embedded database, migrations, demo shop), builds, and serves on :3000.
+ * The embedded database is closed before the server starts, so the lock passes to the server.
+ */
+import { spawn, spawnSync } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+import { openDatabase } from '@/db/open';
+import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoShop } from './demo-shop';
+
+const dataDir = path.resolve(process.env.KERFWISE_DATA_DIR ?? './data');
+const port = process.env.PORT ?? '3000';
+
+function demoSecret(): string {
+  const file = path.join(dataDir, 'demo-secret');
+  if (!fs.existsSync(file)) {
+    fs.mkdirSync(dataDir, { recursive: true });
+    fs.writeFileSync(file, randomBytes(32).toString('base64url'), { mode: 0o600 });
+  }
+  return fs.readFileSync(file, 'utf8').trim();
+}
+
+async function prepareDatabase() {
+  const handle = await openDatabase({ url: process.env.DATABASE_URL, dataDir: path.join(dataDir, 'pglite') });
+  try {
+    const { seeded } = await seedDemoShop(handle.db);
+    console.log(seeded ? 'Seeded the demo shop.' : 'The database already has a shop: left as it is.');
+  } finally {
+    await handle.close();
+  }
+}
+
+async function main() {
+  const env = {
+    ...process.env,
+    NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET || demoSecret(),
+    NEXTAUTH_URL: process.env.NEXTAUTH_URL || `http://localhost:${port}`,
+    KERFWISE_DATA_DIR: dataDir,
+    NEXT_TELEMETRY_DISABLED: '1',
+  };
+  await prepareDatabase();
+  if (!process.argv.includes('--no-build')) {
+    const build = spawnSync('npx', ['next', 'build'], { stdio: 'inherit', env });
+    if (build.status !== 0) process.exit(build.status ?? 1);
+  }
+  console.log(`\nKerfwise demo on http://localhost:${port} — sign in as:`);
+  for (const p of DEMO_PEOPLE) console.log(`  ${p.role.padEnd(9)} ${p.email}  /  ${DEMO_PASSWORD}`);
+  const server = spawn('npx', ['next', 'start', '-p', port], { stdio: 'inherit', env });
+  for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, () => server.kill(signal));
+  server.on('exit', (code) => process.exit(code ?? 0));
+}
+
+main().catch((error) => {
+  console.error(error instanceof Error ? error.message : error);
+  process.exit(1);
+});

@@ -1,0 +1,21 @@
+import { z } from 'zod';
+import { shopUnitsSchema } from './units';
+
+export { shopUnitsSchema, type ShopUnits } from './units';
+
+const positiveMm = (what: string, max: number) =>
+  z.number({ error: `${what} must be a number of millimetres.` }).min(0, `${what} cannot be negative.`).max(max, `${what} above ${max} mm looks like a typo.`);
+
+export const shopSettingsSchema = z.object({
+  name: z.string().trim().min(1, 'The shop needs a name.').max(120),
+  units: shopUnitsSchema,
+  currency: z.string().trim().regex(/^[A-Z]{3}$/, 'Use a three-letter currency code such as USD or EUR.'),
+  kerfMm: positiveMm('Kerf', 10).refine((v) => v > 0, 'Kerf must be more than zero.'),
+  edgeTrimMm: positiveMm('Edge trim', 50),
+  minOffcutLengthMm: positiveMm('Minimum offcut length', 3000),
+  minOffcutWidthMm: positiveMm('Minimum offcut width', 3000),
+  wastePercent: z.number().int('Use a whole percent.').min(0).max(90, 'Waste above 90 % looks like a typo.'),
+});
+export type ShopSettings = z.infer<typeof shopSettingsSchema>;
+
+export const shopSettingsPatchSchema = shopSettingsSchema.partial();

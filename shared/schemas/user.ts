@@ -1,0 +1,35 @@
+import { z } from 'zod';
+import { ROLES } from '@/lib/auth/permissions';
+
+const password = z
+  .string()
+  .min(10, 'Use at least 10 characters for the password.')
+  .max(200, 'Keep the password under 200 characters.');
+
+export const teamMemberInputSchema = z.object({
+  name: z.string().trim().min(1, 'Enter the person’s name.').max(120),
+  email: z.email('Enter a valid e-mail address.').trim().toLowerCase().max(320),
+  role: z.enum(ROLES, { error: 'Pick owner, estimator or cutter.' }),
+  password,
+});
+export type TeamMemberInput = z.infer<typeof teamMemberInputSchema>;
+
+export const teamMemberPatchSchema = z
+  .object({
+    name: z.string().trim().min(1).max(120),
+    role: z.enum(ROLES, { error: 'Pick owner, estimator or cutter.' }),
+    active: z.boolean(),
+    password,
+  })
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
+export type TeamMemberPatch = z.infer<typeof teamMemberPatchSchema>;
+
+export interface TeamMember {
+  id: string;
+  name: string;
+  email: string;
+  role: (typeof ROLES)[number];
+  active: boolean;
+  createdAt: string;
+}

@@ -1,0 +1,26 @@
+import type { Config } from 'tailwindcss';
+
+/**
+ * Kerfwise's palette: paper and graphite for calm, dense screens; one wood tone (honey oak) as the accent.
+ * Loaded from app/globals.css with `@config`; part colours for drawer schedules and materials live in
+ * lib/ui/part-colors.ts so the canvas can use them too.
+ */
+export default {
+  content: ['./app/**/*.{ts,tsx}', './components/**/*.{ts,tsx}'],
+  theme: {
+    extend: {
+      colors: {
+        paper: { DEFAULT: '#faf7f1', deep: '#f1ece2', edge: '#e3dccd' },
+        graphite: { DEFAULT: '#2a2a2d', soft: '#4a4a50', mute: '#7b7a80', faint: '#a9a7ab' },
+        oak: { DEFAULT: '#a86a2c', deep: '#7f4d1c', light: '#e9cfa8', wash: '#f6ead8' },
+        sage: { DEFAULT: '#4f7a5a', wash: '#e3efe4' },
+        brick: { DEFAULT: '#a8432f', wash: '#f7e2dc' },
+        amber: { DEFAULT: '#b5832a', wash: '#f8edd3' },
+      },
+      fontFamily: {
+        sans: ['var(--font-plex-sans)', 'system-ui', 'sans-serif'],
+        mono: ['var(--font-plex-mono)', 'ui-monospace', 'monospace'],
+      },
+    },
+  },
+} satisfies Config;

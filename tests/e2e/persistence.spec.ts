@@ -1,0 +1,37 @@
+import { expect, test } from '@playwright/test';
+import { startServer, stopServer } from './support/server';
+import { shot, signIn } from './support/session';
+
+test('a job created in the browser survives a server restart', async ({ page }) => {
+  test.setTimeout(120_000);
+  await signIn(page, 'estimator');
+  await page.goto('/jobs');
+  await page.getByRole('button', { name: 'New job' }).click();
+  const name = `Quarry Lane mudroom ${Date.now()}`;
+  await page.getByLabel('Job name').fill(name);
+  await page.getByLabel('Customer').fill('Okonkwo family');
+  await page.getByLabel('Due date').fill('2027-03-15');
+  await page.getByRole('button', { name: 'Create job' }).click();
+  await expect(page.getByRole('heading', { level: 1, name })).toBeVisible();
+  await shot(page, 'job-created');
+
+  await stopServer();
+  await startServer();
+
+  await page.goto('/jobs');
+  // The session cookie outlives the restart: the same signed token is still good.
+  await expect(page.getByRole('link', { name })).toBeVisible();
+  await page.getByLabel('Search').fill('quarry lane');
+  await expect(page.getByRole('table', { name: 'Jobs' }).getByRole('row')).toHaveCount(2);
+  await shot(page, 'jobs-after-restart');
+});
+
+test('an empty job name is refused on the field, and nothing is created', async ({ page }) => {
+  await signIn(page, 'estimator');
+  await page.goto('/jobs');
+  const before = (await (await page.request.get('/api/jobs')).json()).length;
+  await page.getByRole('button', { name: 'New job' }).click();
+  await page.getByRole('button', { name: 'Create job' }).click();
+  await expect(page.getByText('Give the job a name.')).toBeVisible();
+  expect((await (await page.request.get('/api/jobs')).json()).length).toBe(before);
+});
