@@ -7,6 +7,9 @@ import type { CutNode } from '@/lib/nesting/pack/types';
 
 export type Axis = 'x' | 'y';
 
+/** Stages allowed by the `strips` cutting style: rips, crosscuts, trim rips. */
+export const STRIP_STAGES = 3;
+
 /** Tolerance for comparing positions in mm (float sums such as 600 + 3.2). */
 export const EPS = 1e-6;
 

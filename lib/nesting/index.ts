@@ -1,9 +1,9 @@
 /** Kerfwise nesting: request in, plan out, and the one judge of any plan. Everything in mm. */
 export { optimize, type OptimizeOptions, type OptimizeProgress } from '@/lib/nesting/optimize';
-export { validatePlan, STRIP_STAGES, type Violation, type ViolationCode } from '@/lib/nesting/validate-plan';
+export { validatePlan, type Violation, type ViolationCode } from '@/lib/nesting/validate-plan';
 export { rebuildCuts } from '@/lib/nesting/rebuild-cuts';
 export { readPlan, PlanVersionError } from '@/lib/nesting/read-plan';
-export { findGuillotineTree, countStages } from '@/lib/nesting/guillotine';
+export { findGuillotineTree, countStages, STRIP_STAGES } from '@/lib/nesting/guillotine';
 export { replaySawOrder } from '@/lib/nesting/saw-order';
 export type {
   NestPart,

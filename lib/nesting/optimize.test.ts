@@ -31,6 +31,22 @@ describe('optimize on random requests (fast-check)', () => {
     );
   });
 
+  test('imperial sizes in sixteenths with a ⅛″ kerf and ¼″ trim still give valid plans (float positions)', async () => {
+    const sixteenths = (mm: number) => inches(Math.round((mm / 25.4) * 16) / 16);
+    const imperial = requestArb.map((r) => ({
+      ...r,
+      parts: r.parts.map((p) => ({ ...p, length: sixteenths(p.length), width: sixteenths(p.width) })),
+      stock: r.stock.map((s) => ({ ...s, length: sixteenths(s.length), width: sixteenths(s.width) })),
+      settings: { ...r.settings, kerf: inches(1 / 8), trim: r.settings?.trim ? inches(1 / 4) : 0 },
+    }));
+    await fc.assert(
+      fc.asyncProperty(imperial, async (req) => {
+        expect(validatePlan(req, await optimize(req))).toEqual([]);
+      }),
+      { numRuns: 20 },
+    );
+  });
+
   test('the same seed gives the same plan', async () => {
     await fc.assert(
       fc.asyncProperty(requestArb, async (req) => {

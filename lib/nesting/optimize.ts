@@ -6,10 +6,10 @@
 import { area } from '@/lib/geometry/rect';
 import { packGuillotine } from '@/lib/nesting/pack';
 import type { BinType, CutNode, PackFn, PackItem, PackResult } from '@/lib/nesting/pack/types';
-import { findGuillotineTree } from '@/lib/nesting/guillotine';
+import { countStages, findGuillotineTree, STRIP_STAGES } from '@/lib/nesting/guillotine';
 import { checkTree, translateTree } from '@/lib/nesting/cut-tree';
 import { assemblePiece, assemblePlan } from '@/lib/nesting/assemble-plan';
-import { groupParts, rotationAllowed, sameStock, trimFor, usableRect } from '@/lib/nesting/stock-rules';
+import { groupParts, mayTurnInGroup, sameStock, stockForPart, trimFor, usableRect } from '@/lib/nesting/stock-rules';
 import {
   nestRequestSchema,
   type NestPart,
@@ -91,14 +91,11 @@ interface Group {
 /** `used`: pieces of each stock id taken by earlier groups (a stock within 0.01 mm of two part thicknesses). */
 function prepareGroup(parts: NestPart[], request: NestRequest, used: Map<string, number>): Group {
   const { settings } = request;
-  const left = (s: NestStock) => (s.count === null ? null : s.count - (used.get(s.id) ?? 0));
-  const stocks = request.stock.filter((s) => {
-    const u = usableRect(s, trimFor(s, settings));
-    return sameStock(s, parts[0]) && u.w > 0 && u.h > 0 && left(s) !== 0;
-  });
+  // Stock with none left stays in, so a part that fits only used-up stock is reported `no-stock-left`.
+  const left = (s: NestStock) => (s.count === null ? null : Math.max(0, s.count - (used.get(s.id) ?? 0)));
+  const stocks = stockForPart(parts[0], request.stock, settings);
   const instances = parts.flatMap((part) => Array.from({ length: part.quantity }, (_, k) => ({ part, instance: k + 1 })));
-  // One rotation flag per item: turned only when every stock of the group allows it (mixed grain is the rare case).
-  const canRotate = instances.map(({ part }) => stocks.length > 0 && stocks.every((s) => rotationAllowed(part, s)));
+  const canRotate = instances.map(({ part }) => mayTurnInGroup(part, stocks));
   const items = instances.map(({ part }, id) => ({ id, w: part.length, h: part.width, canRotate: canRotate[id] }));
   const bins = stocks.map((s, id) => {
     const u = usableRect(s, trimFor(s, settings));
@@ -120,8 +117,11 @@ function piecesFromResult(group: Group, result: PackResult, request: NestRequest
     });
     const usable = usableRect(stock, t);
     const packed = translateTree(renumber(bin.tree, index), t, t);
-    // Trust but check: a malformed tree from the core is replaced by one rebuilt from the placements.
-    const tree = checkTree(packed, usable, placements).length === 0 ? packed : findGuillotineTree(usable, placements, settings.kerf);
+    // Trust but check: a malformed tree from the core (or one with too many stages for strips) is replaced by the
+    // canonical tree rebuilt from the placements.
+    const strips = settings.style === 'strips';
+    const sound = checkTree(packed, usable, placements).length === 0 && (!strips || countStages(packed, 'y') <= STRIP_STAGES);
+    const tree = sound ? packed : findGuillotineTree(usable, placements, settings.kerf, strips ? STRIP_STAGES : Infinity, strips ? 'y' : undefined);
     return assemblePiece(stock, firstIndex + b, placements, tree, request);
   });
 }
@@ -177,8 +177,9 @@ export async function optimize(requestInput: NestRequestInput, options: Optimize
   for (const parts of groupParts(request.parts)) {
     const group = prepareGroup(parts, request, used);
     if (group.bins.length === 0) {
+      // Stock of this material that trim leaves no room on is still stock: its parts are too large for it.
       const any = request.stock.some((s) => sameStock(s, group.instances[0].part));
-      notPlaced.push(...group.instances.map((inst) => unplaced(inst, any ? 'no-stock-left' : 'no-stock', false)));
+      notPlaced.push(...group.instances.map((inst) => unplaced(inst, any ? 'too-large' : 'no-stock', false)));
       continue;
     }
     const budget = options.signal?.aborted ? 0 : Math.round((settings.timeBudgetMs * group.items.length) / totalItems);

@@ -1,8 +1,7 @@
 /** Rebuilds cut trees, saw orders, leftovers and figures of a plan from its bare placements (layout bench edits). */
-import { findGuillotineTree } from '@/lib/nesting/guillotine';
+import { findGuillotineTree, STRIP_STAGES } from '@/lib/nesting/guillotine';
 import { assemblePiece, assemblePlan } from '@/lib/nesting/assemble-plan';
 import { trimFor, usableRect } from '@/lib/nesting/stock-rules';
-import { STRIP_STAGES } from '@/lib/nesting/validate-plan';
 import { nestRequestSchema, planSchema, type NestRequestInput, type Plan, type PlanInput } from '@/shared/schemas/nesting';
 
 /**

@@ -43,3 +43,24 @@ export function groupParts(parts: readonly NestPart[]): NestPart[][] {
 /** May this placement be turned a quarter on this stock? */
 export const rotationAllowed = (part: Pick<NestPart, 'grain'>, stock: Pick<NestStock, 'grain'>) =>
   part.grain === 'any' || stock.grain === 'none';
+
+/**
+ * May the part turn when packed on this group of stock? The packing core takes one flag per part, so a grain-locked
+ * part turns only when every stock of its group is grainless (a group mixing grains is rare).
+ */
+export const mayTurnInGroup = (part: Pick<NestPart, 'grain'>, stocks: readonly Pick<NestStock, 'grain'>[]) =>
+  stocks.length > 0 && stocks.every((s) => rotationAllowed(part, s));
+
+/** The stock a part may go on: same material and thickness, with usable area left after trim. */
+export const stockForPart = (part: Pick<NestPart, 'material' | 'thickness'>, stock: readonly NestStock[], settings: Pick<NestSettings, 'trim'>) =>
+  stock.filter((s) => {
+    const u = usableRect(s, trimFor(s, settings));
+    return sameStock(s, part) && u.w > 0 && u.h > 0;
+  });
+
+/** Does the part fit the stock's usable area unturned / turned? */
+export function fitsOn(part: Pick<NestPart, 'length' | 'width'>, stock: NestStock, settings: Pick<NestSettings, 'trim'>) {
+  const u = usableRect(stock, trimFor(stock, settings));
+  const eps = 1e-6;
+  return { straight: part.length <= u.w + eps && part.width <= u.h + eps, turned: part.width <= u.w + eps && part.length <= u.h + eps };
+}

@@ -158,7 +158,20 @@ describe('validatePlan', () => {
     expect(codes(validatePlan(req, two))).toEqual(['stock-count']);
     const unknown = clone(good);
     unknown.pieces[0].stockId = 'nope';
-    expect(codes(validatePlan(req, unknown))).toEqual(['unknown-stock']);
+    // With its piece on unknown stock, sheet S is unused again, so b #2 could have gone there too.
+    expect(codes(validatePlan(req, unknown))).toEqual(['unknown-stock', 'unplaced-reason']);
+  });
+
+  test.each([
+    { label: 'too large, though it fits the sheet', reason: 'too-large' as const, count: 1 },
+    { label: 'held off by grain, though it fits unturned', reason: 'grain' as const, count: 1 },
+    { label: 'out of stock, though the sheet can be bought', reason: 'no-stock-left' as const, count: null },
+    { label: 'without stock of its material, though there is some', reason: 'no-stock' as const, count: 1 },
+  ])('catches an unplaced part reported $label', ({ reason, count }) => {
+    const r = request(req.parts, [sheet('S', 1000, 500, { count })], { kerf: 3 });
+    const bad = clone(good);
+    bad.unplaced[0].reason = reason;
+    expect(validatePlan(r, bad)).toEqual([expect.objectContaining({ code: 'unplaced-reason', partId: 'b', instance: 2 })]);
   });
 
   test('reports a plan that does not parse instead of throwing', () => {

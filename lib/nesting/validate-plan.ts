@@ -8,15 +8,16 @@
  *   (or corners) count as an overlap when the kerf is above 0: the blade has to pass between them.
  * - Straight through-cuts must separate the layout (rebuilt from the bare placements); `strips` allows 3 stages,
  *   the first being rips. This check is skipped on a piece that already has overlaps or parts outside.
- * - Every part instance 1..quantity is placed or listed as unplaced, exactly once; stock on hand is not overdrawn.
+ * - Every part instance 1..quantity is placed or listed as unplaced, exactly once, and an unplaced part's reason
+ *   is true of the request's stock; stock on hand is not overdrawn.
  * - When present, the cut tree is well formed and the saw order, replayed from the whole stock piece, cuts every
  *   part free exactly.
  */
 import { contains } from '@/lib/geometry/rect';
-import { EPS, findGuillotineTree } from '@/lib/nesting/guillotine';
+import { EPS, findGuillotineTree, STRIP_STAGES } from '@/lib/nesting/guillotine';
 import { checkTree, sameRect } from '@/lib/nesting/cut-tree';
 import { replaySawOrder, stockPieceName } from '@/lib/nesting/saw-order';
-import { rotationAllowed, sameStock, stockRect, trimFor, usableRect } from '@/lib/nesting/stock-rules';
+import { fitsOn, mayTurnInGroup, rotationAllowed, sameStock, stockForPart, stockRect, trimFor, usableRect } from '@/lib/nesting/stock-rules';
 import {
   nestRequestSchema,
   planSchema,
@@ -25,6 +26,7 @@ import {
   type NestRequestInput,
   type Placement,
   type PlanPiece,
+  type Unplaced,
 } from '@/shared/schemas/nesting';
 
 export type ViolationCode =
@@ -44,6 +46,7 @@ export type ViolationCode =
   | 'not-guillotine'
   | 'too-many-stages'
   | 'stock-count'
+  | 'unplaced-reason'
   | 'tree'
   | 'saw-order';
 
@@ -58,8 +61,6 @@ export interface Violation {
   step?: number;
 }
 
-/** Stages allowed by the `strips` cutting style: rips, crosscuts, one trim rip. */
-export const STRIP_STAGES = 3;
 
 const name = (part: NestPart | undefined, p: { partId: string; instance: number }) => `"${part?.label || p.partId}" #${p.instance}`;
 
@@ -155,6 +156,34 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
 }
 
 /**
+ * Is the reason given for an unplaced part true? Judged on the request's stock (and, for `no-stock-left`, on what
+ * the plan has used of it), with the packing rule for turning (`mayTurnInGroup`).
+ */
+function unplacedReasonProblem(u: Unplaced, part: NestPart, request: NestRequest, used: Map<string, number>): string | null {
+  const { settings } = request;
+  const stocks = stockForPart(part, request.stock, settings);
+  const mayTurn = mayTurnInGroup(part, stocks);
+  const fits = stocks.map((s) => ({ s, ...fitsOn(part, s, settings) }));
+  const straight = fits.some((f) => f.straight);
+  const turned = fits.some((f) => f.turned);
+  const placeable = fits.filter((f) => f.straight || (mayTurn && f.turned));
+  const anyOfMaterial = request.stock.some((s) => sameStock(s, part));
+  switch (u.reason) {
+    case 'no-stock':
+      return anyOfMaterial ? `there is ${part.thickness} mm ${part.material} in the request` : null;
+    case 'too-large':
+      return straight || (mayTurn && turned) ? 'it fits some of the stock' : null;
+    case 'grain':
+      return straight || !turned || mayTurn ? 'turning is not what keeps it off the stock' : null;
+    case 'no-stock-left': {
+      if (placeable.length === 0) return 'no stock it fits on was ever available';
+      const left = placeable.find((f) => f.s.count === null || (used.get(f.s.id) ?? 0) < f.s.count);
+      return left ? `stock "${left.s.id}" it fits on is still available` : null;
+    }
+  }
+}
+
+/**
  * Every way `plan` breaks the rules for `request` (see the file comment); an empty list means the plan is valid.
  * Tree and saw order are optional on each piece: an edited plan is checked on its placements alone.
  */
@@ -178,6 +207,13 @@ export function validatePlan(requestInput: NestRequestInput, planInput: unknown)
   };
   plan.pieces.forEach((piece, i) => piece.placements.forEach((p) => tally(p, i)));
   plan.unplaced.forEach((u) => tally(u));
+  const used = new Map<string, number>();
+  for (const p of plan.pieces) used.set(p.stockId, (used.get(p.stockId) ?? 0) + 1);
+  for (const u of plan.unplaced) {
+    const part = parts.get(u.partId);
+    const problem = part && unplacedReasonProblem(u, part, request, used);
+    if (problem) out.push({ code: 'unplaced-reason', message: `${name(part, u)} is reported ${u.reason}, but ${problem}`, partId: u.partId, instance: u.instance });
+  }
   for (const part of request.parts) {
     for (let k = 1; k <= part.quantity; k++) {
       const n = seen.get(`${part.id}\u0000${k}`) ?? 0;
@@ -187,8 +223,6 @@ export function validatePlan(requestInput: NestRequestInput, planInput: unknown)
     }
   }
 
-  const used = new Map<string, number>();
-  for (const p of plan.pieces) used.set(p.stockId, (used.get(p.stockId) ?? 0) + 1);
   for (const s of request.stock) {
     const n = used.get(s.id) ?? 0;
     if (s.count !== null && n > s.count) out.push({ code: 'stock-count', message: `the plan uses ${n} of stock "${s.id}" but only ${s.count} are on hand` });
