@@ -178,3 +178,13 @@ describe('progress and cancel', () => {
     await expect(optimize(request([part('p', -5, 400)], [sheet('S', 2440, 1220)]))).rejects.toThrow(/length/);
   });
 });
+
+describe('request checks', () => {
+  test.each([
+    { label: 'duplicate part ids', req: request([part('p', 500, 400), part('p', 300, 200)], [sheet('S', 2440, 1220)]), message: /duplicate part id/ },
+    { label: 'an offcut without a count', req: request([part('p', 500, 400)], [{ ...sheet('O', 800, 400), kind: 'offcut' as const }]), message: /offcut/ },
+    { label: 'more part instances than one Nest takes', req: request([part('p', 50, 40, { quantity: 30_000 })], [sheet('S', 2440, 1220)]), message: /at most 20000/ },
+  ])('refuses $label with a clear message', async ({ req, message }) => {
+    await expect(optimize(req)).rejects.toThrow(message);
+  });
+});

@@ -81,6 +81,9 @@ function uniqueIds(list: { id: string }[], what: string, ctx: z.RefinementCtx, p
   });
 }
 
+/** More part instances than this in one request is surely a typing slip (or more than one Nest should carry). */
+export const MAX_PART_INSTANCES = 20_000;
+
 export const nestRequestSchema = z
   .object({
     parts: z.array(nestPartSchema).max(5000),
@@ -90,6 +93,10 @@ export const nestRequestSchema = z
   .superRefine((r, ctx) => {
     uniqueIds(r.parts, 'part', ctx, 'parts');
     uniqueIds(r.stock, 'stock', ctx, 'stock');
+    const instances = r.parts.reduce((n, p) => n + p.quantity, 0);
+    if (instances > MAX_PART_INSTANCES) {
+      ctx.addIssue({ code: 'custom', message: `${instances} parts in all; one Nest takes at most ${MAX_PART_INSTANCES}`, path: ['parts'] });
+    }
   });
 export type NestRequest = z.infer<typeof nestRequestSchema>;
 export type NestRequestInput = z.input<typeof nestRequestSchema>;
