@@ -159,7 +159,7 @@ export async function optimize(requestInput: NestRequestInput, options: Optimize
   const { settings } = request;
   const pack = options.pack ?? packGuillotine;
   const t0 = performance.now();
-  const totalItems = request.parts.reduce((n, p) => n + p.quantity, 0);
+  let itemsLeft = request.parts.reduce((n, p) => n + p.quantity, 0);
   const used = new Map<string, number>();
   const done = { pieces: 0, stockArea: 0, partArea: 0, cost: 0 };
   const report = (extra = { pieces: 0, stockArea: 0, partArea: 0, cost: 0 }) => {
@@ -177,12 +177,16 @@ export async function optimize(requestInput: NestRequestInput, options: Optimize
   for (const parts of groupParts(request.parts)) {
     const group = prepareGroup(parts, request, used);
     if (group.bins.length === 0) {
+      itemsLeft -= group.items.length;
       // Stock of this material that trim leaves no room on is still stock: its parts are too large for it.
       const any = request.stock.some((s) => sameStock(s, group.instances[0].part));
       notPlaced.push(...group.instances.map((inst) => unplaced(inst, any ? 'too-large' : 'no-stock', false)));
       continue;
     }
-    const budget = options.signal?.aborted ? 0 : Math.round((settings.timeBudgetMs * group.items.length) / totalItems);
+    // Each group gets its share of the time still left, so time a quick group did not need goes to the next.
+    const timeLeft = Math.max(0, settings.timeBudgetMs - (performance.now() - t0));
+    const budget = options.signal?.aborted ? 0 : Math.round((timeLeft * group.items.length) / itemsLeft);
+    itemsLeft -= group.items.length;
     const result = await pack(group.items, group.bins, {
       kerf: settings.kerf,
       style: settings.style,
