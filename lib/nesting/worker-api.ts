@@ -22,8 +22,14 @@ export interface NestingWorkerApi {
   cancel(): void;
 }
 
-/** Progress messages are sent at most this often (the packer reports about 5 times a second). */
+/** Progress messages are sent at most this often. */
 export const PROGRESS_INTERVAL_MS = 100;
+/**
+ * When the search has said nothing new for this long, the last progress is sent again with a fresh time, so the
+ * page hears at least 4 messages a second (the packer yields to the event loop every few tens of ms).
+ */
+export const HEARTBEAT_MS = 150;
+const HEARTBEAT_TICK_MS = 50;
 
 export function createNestingWorkerApi(): NestingWorkerApi {
   let running: AbortController | null = null;
@@ -40,21 +46,31 @@ export function createNestingWorkerApi(): NestingWorkerApi {
       running?.abort();
       const controller = new AbortController();
       running = controller;
-      let last = -Infinity;
-      const report = onProgress
-        ? (p: NestProgress) => {
-            if (p.elapsedMs - last < PROGRESS_INTERVAL_MS) return;
-            last = p.elapsedMs;
-            // Not awaited: a slow page must not hold the search up.
-            void Promise.resolve(onProgress(p)).catch(() => {});
-          }
+      const t0 = performance.now();
+      let latest: NestProgress = { elapsedMs: 0, piecesUsed: 0, yield: 0, cost: 0 };
+      let lastSent = t0;
+      const send = () => {
+        if (!onProgress) return;
+        lastSent = performance.now();
+        // Not awaited: a slow page must not hold the search up.
+        void Promise.resolve(onProgress({ ...latest, elapsedMs: lastSent - t0 })).catch(() => {});
+      };
+      const report = (p: NestProgress) => {
+        latest = p;
+        if (performance.now() - lastSent >= PROGRESS_INTERVAL_MS) send();
+      };
+      const heartbeat = onProgress
+        ? setInterval(() => {
+            if (performance.now() - lastSent >= HEARTBEAT_MS) send();
+          }, HEARTBEAT_TICK_MS)
         : undefined;
       try {
-        const plan = await optimize(parsed.data, { signal: controller.signal, onProgress: report });
+        const plan = await optimize(parsed.data, { signal: controller.signal, onProgress: onProgress && report });
         return { ok: true, plan };
       } catch (e) {
         return { ok: false, error: 'failed', message: e instanceof Error ? e.message : String(e) };
       } finally {
+        clearInterval(heartbeat);
         if (running === controller) running = null;
       }
     },
