@@ -2,7 +2,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
-import { continuousBound, lowerBound, martelloVigoL2, type Size } from './bounds';
+import { continuousBound, dellAmicoMartelloVigo, lowerBound, martelloVigoL2, rotationBound, type Size } from './bounds';
 import { maxRectsLayout } from './bounds/maxrects-reference';
 import { parseInstances, type BinPackingInstance } from './instances';
 
@@ -39,17 +39,24 @@ describe('the 500 standard instances (classes I–X, as listed in /work/shared/b
   });
 
   test('Martello & Vigo (Management Science 44(3), 1998) L2 with fixed orientation totals 7,064 with the published per-class split', () => {
-    const totals = totalsPerClass(instances, (i) => lowerBound(i.items, i.bin, false));
+    const totals = totalsPerClass(instances, (i) => martelloVigoL2(i.items, i.bin));
     expect(totals).toEqual([971, 124, 668, 119, 855, 108, 807, 820, 2108, 484]);
     expect(sum(totals)).toBe(7064);
   });
 
-  test('with rotation, every class is bounded at least as tightly as by Dell\'Amico, Martello & Vigo (Discrete Applied Mathematics 118, 2002; README totals 6,769)', () => {
-    // Our rotation bound is a different formula (see rotationBound); on this set it is never weaker per class.
-    const dmv2002 = [936, 124, 642, 119, 821, 108, 719, 721, 2103, 476];
-    const totals = totalsPerClass(instances, (i) => lowerBound(i.items, i.bin, true));
-    totals.forEach((t, k) => expect(t, `class ${CLASSES[k]}`).toBeGreaterThanOrEqual(dmv2002[k]));
-    expect(sum(totals)).toBeGreaterThanOrEqual(6769);
+  test('Dell\'Amico, Martello & Vigo (Discrete Applied Mathematics 118, 2002) with rotation totals 6,769 with the published per-class split', () => {
+    const totals = totalsPerClass(instances, (i) => dellAmicoMartelloVigo(i.items, i.bin));
+    expect(totals).toEqual([936, 124, 642, 119, 821, 108, 719, 721, 2103, 476]);
+    expect(sum(totals)).toBe(6769);
+  });
+
+  test('our whole-item rotation bound is never below Dell\'Amico, Martello & Vigo on any instance, and lowerBound takes the larger', () => {
+    for (const inst of instances) {
+      const dmv = dellAmicoMartelloVigo(inst.items, inst.bin);
+      expect(rotationBound(inst.items, inst.bin), inst.name).toBeGreaterThanOrEqual(dmv);
+      expect(lowerBound(inst.items, inst.bin, true)).toBe(Math.max(dmv, rotationBound(inst.items, inst.bin)));
+      expect(lowerBound(inst.items, inst.bin, false)).toBeGreaterThanOrEqual(martelloVigoL2(inst.items, inst.bin));
+    }
   });
 
   test('no bound exceeds the bins of a checked maxrects-packer layout on any of the 500 instances, fixed or turned', () => {
@@ -109,6 +116,20 @@ describe('worked examples', () => {
     expect(lowerBound(sizes, bin, rotation)).toBe(bound);
   });
 
+  test('[derived] a 6 × 6 and three 5 × 9 turned freely: the 6 × 6 fits beside none of them (6 + 5 > 10 both ways) and only two 5 × 9 share a bin, so 3 bins; cut into squares (Dell\'Amico, Martello & Vigo) the 5 × 9 keep only a 5 × 5 of side ≥ 5 and give 2', () => {
+    const sizes = [{ w: 6, h: 6 }, ...Array.from({ length: 3 }, () => ({ w: 5, h: 9 }))];
+    expect(continuousBound(sizes, bin)).toBe(2);
+    expect(dellAmicoMartelloVigo(sizes, bin)).toBe(2);
+    expect(rotationBound(sizes, bin)).toBe(3);
+    expect(lowerBound(sizes, bin, true)).toBe(3);
+  });
+
+  test('[derived] with fixed orientation a 6 × 6 and a 5 × 5 cannot share a 10 × 10 bin: L2 of Martello & Vigo gives 1, lowerBound 2 from the rotation argument, which holds a fortiori', () => {
+    const sizes = [{ w: 6, h: 6 }, { w: 5, h: 5 }];
+    expect(martelloVigoL2(sizes, bin)).toBe(1);
+    expect(lowerBound(sizes, bin, false)).toBe(2);
+  });
+
   test('Martello & Vigo L2 exceeds L0 when wide items waste the room beside them ([derived]: five 6 × 3 stack three to a bin → 2, area 90 → L0 1)', () => {
     const sizes = Array.from({ length: 5 }, () => ({ w: 6, h: 3 }));
     expect(continuousBound(sizes, bin)).toBe(1);
@@ -155,6 +176,17 @@ describe('properties', () => {
         expect(lowerBound(items, bin, rotation)).toBeLessThanOrEqual(binsUsedByMaxRects(items, bin, rotation));
       }),
       { numRuns: 200 },
+    );
+  });
+
+  test('on square bins the whole-item rotation bound is never below the squares bound of Dell\'Amico, Martello & Vigo', () => {
+    fc.assert(
+      fc.property(instance, ({ bin, items }) => {
+        const side = Math.min(bin.w, bin.h);
+        const square = { w: side, h: side };
+        const fitting = items.filter((it) => it.w <= side && it.h <= side);
+        expect(rotationBound(fitting, square)).toBeGreaterThanOrEqual(dellAmicoMartelloVigo(fitting, square));
+      }),
     );
   });
 
