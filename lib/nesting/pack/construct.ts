@@ -90,7 +90,7 @@ export function packPool(
         if (f.count === 0) break; // nothing fits this type: no order will change that
         const c: Candidate = { bin: null as unknown as Bin, all: f.count === len, cost: bt.cost, priority: bt.priority, area: bt.w * bt.h };
         if (!best || better(p, f.used, c, best)) {
-          c.bin = binFromFiller(f, t, r);
+          c.bin = binFromFiller(f, t);
           best = c;
         }
         if (c.all) break; // every remaining item fits: other orders cannot do better in this type

@@ -3,16 +3,24 @@ import type { CutNode, PackedItem } from './types';
 /** Tolerance for comparing float lengths (mm): far below any saw's precision. */
 export const EPS = 1e-7;
 
+/** The items of a problem in flat arrays: item `i` is w[i] × h[i]. */
+export interface ItemTable {
+  w: Float64Array;
+  h: Float64Array;
+  canRotate: Uint8Array;
+  area: Float64Array;
+}
+
 /**
- * Fills one bin with items offered one at a time. Deterministic: the same bin, rule, minimum side and sequence of
- * offers always gives the same layout, which is how the search stores a bin (its placed sequence) and rebuilds it.
+ * Fills one bin. Every placement is recorded as a decision, so a bin is stored as (placed items, decisions) and
+ * rebuilt exactly, cut tree included, by replaying them.
  */
 export interface BinFiller {
-  reset(binW: number, binH: number, rule: number, minSide: number): void;
-  /** Places item `i` (w × h unrotated) when it fits under the filler's rule; true when placed. */
-  tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean;
-  /** False when no free space could hold a part of this size: a quick reject before `tryPlace`. */
-  mayFit(w: number, h: number, canRotate: boolean): boolean;
+  reset(binW: number, binH: number, minSide: number): void;
+  /** Places what it can of the first `len` items of `order` under `rule` (0 … rules − 1). */
+  fill(items: ItemTable, order: ArrayLike<number>, len: number, rule: number, minArea: number): void;
+  /** Repeats a recorded placement of item `i`. */
+  replay(i: number, w: number, h: number, decision: number): void;
   /** Item area placed so far. */
   readonly used: number;
   /** Cuts in the bin's tree so far. */
@@ -20,12 +28,14 @@ export interface BinFiller {
   readonly count: number;
   /** Placed item indices, in placement order (first `count`). */
   readonly placed: Int32Array;
+  /** The decision behind each placement (first `count`). */
+  readonly decisions: Int32Array;
   /** The bin's cut tree and placements, item indices mapped to the caller's ids. */
   finish(ids: ArrayLike<number>): { tree: CutNode; items: PackedItem[] };
 }
 
-/** How many distinct rules a filler understands (rules are 0 … count − 1). */
 export interface FillerKind {
+  /** How many distinct rules the filler understands. */
   rules: number;
   create(capacity: number, kerf: number): BinFiller;
 }

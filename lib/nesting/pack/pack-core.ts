@@ -4,6 +4,7 @@ import { EPS } from './filler';
 import type { BinFiller } from './filler';
 import { packInputSchema, PackInputError } from './pack-input';
 import { panelFiller } from './panel-filler';
+import { PoolSearch } from './pool-search';
 import { mulberry32, randInt } from './prng';
 import type { Problem, Solution } from './solution';
 import { compareScores, score, toResult } from './solution';
@@ -92,11 +93,19 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
   let cur: Solution = best!;
   let curScore = bestScore!;
   const maxIter = limits.maxIterations ?? Infinity;
+  // One bin type with enough stock and a bin-count objective: eliminate bins; otherwise improve the mix.
+  const pooled = p.types.length === 1 && p.objective !== 'cuts' && best!.noStock.length === 0 && best!.bins.length > 1 ? new PoolSearch(p, best!) : null;
   for (let iter = 0; iter < maxIter; iter++) {
     if (signal?.aborted) break;
     if (limits.maxIterations === undefined && now() - t0 >= options.timeBudgetMs) break;
     const b: Solution = best!;
     if (lb !== null && b.noStock.length === 0 && b.bins.length <= lb && p.objective !== 'cuts') break;
+    if (pooled) {
+      const fewer = pooled.step(f, rng, ATTEMPTS_PER_BIN, scratch, mark);
+      if (fewer) offer(fewer);
+      await breathe();
+      continue;
+    }
     const nb = cur.bins.length;
     if (nb === 0) break;
 

@@ -1,4 +1,4 @@
-import type { BinFiller, FillerKind } from './filler';
+import type { BinFiller, FillerKind, ItemTable } from './filler';
 import { EPS } from './filler';
 import { FlatTree } from './flat-tree';
 import type { PackedItem } from './types';
@@ -8,7 +8,11 @@ import type { PackedItem } from './types';
  * makes at most two through-cuts (one across, one along), leaving at most two new free rectangles. Kerf is taken
  * by each cut; a part flush with a rectangle's far edge needs no cut there.
  *
- * A rule combines how to choose the free rectangle (placement) with which cut to make first (split).
+ * A rule combines which cut to make first (split) with one of two ways to fill:
+ * - item-driven: offer the parts in the given order, each to its best free rectangle (placement rule);
+ * - space-driven: take the smallest (or lowest) free rectangle and put in it the part that fills it best (largest,
+ *   or tightest on the short side), order breaking ties; a rectangle no part fits becomes waste. Slower
+ *   (parts × placements) but denser, so it is used up to `SPACE_DRIVEN_MAX` parts.
  */
 const enum Place {
   BestShortSide = 0,
@@ -24,12 +28,18 @@ const enum Split {
   ShorterAxis = 3,
 }
 const SPLIT_RULES = 4;
+const ITEM_RULES = PLACE_RULES * SPLIT_RULES;
+/** Space-driven variants: free rectangle by smallest area or lowest-left × part by largest area or tightest fit. */
+const SPACE_RULES = 4 * SPLIT_RULES;
+export const SPACE_DRIVEN_MAX = 2000;
 
 class PanelFiller implements BinFiller {
   used = 0;
   cuts = 0;
   count = 0;
   readonly placed: Int32Array;
+  readonly decisions: Int32Array;
+  private readonly taken: Uint8Array;
   private readonly px: Float64Array;
   private readonly py: Float64Array;
   private readonly prot: Uint8Array;
@@ -49,12 +59,15 @@ class PanelFiller implements BinFiller {
   private place: Place = Place.BestShortSide;
   private split: Split = Split.ShorterLeftover;
   private minSide = 0;
+  private binArea = 0;
 
   constructor(
     capacity: number,
     private readonly kerf: number,
   ) {
     this.placed = new Int32Array(capacity);
+    this.decisions = new Int32Array(capacity);
+    this.taken = new Uint8Array(capacity);
     this.px = new Float64Array(capacity);
     this.py = new Float64Array(capacity);
     this.pw = new Float64Array(capacity);
@@ -68,13 +81,12 @@ class PanelFiller implements BinFiller {
     this.tree = new FlatTree(4 * capacity + 2);
   }
 
-  reset(binW: number, binH: number, rule: number, minSide: number) {
+  reset(binW: number, binH: number, minSide: number) {
     this.used = 0;
     this.cuts = 0;
     this.count = 0;
-    this.place = (Math.floor(rule / SPLIT_RULES) % PLACE_RULES) as Place;
-    this.split = (rule % SPLIT_RULES) as Split;
     this.minSide = minSide;
+    this.binArea = binW * binH;
     this.tree.clear();
     const root = this.tree.leaf(0, 0, binW, binH);
     this.nFree = 0;
@@ -82,15 +94,95 @@ class PanelFiller implements BinFiller {
     this.refreshMax();
   }
 
-  mayFit(w: number, h: number, canRotate: boolean): boolean {
+  fill(items: ItemTable, order: ArrayLike<number>, len: number, rule: number, minArea: number) {
+    this.split = (rule % SPLIT_RULES) as Split;
+    const mode = Math.floor(rule / SPLIT_RULES);
+    if (rule >= ITEM_RULES && len <= SPACE_DRIVEN_MAX) return this.fillBySpace(items, order, len, mode - PLACE_RULES, minArea);
+    this.place = (mode % PLACE_RULES) as Place;
+    const binArea = this.binArea;
+    for (let j = 0; j < len; j++) {
+      // Free area never exceeds the unfilled area, so once that is below the smallest part nothing more fits.
+      if (binArea - this.used < minArea - EPS) break;
+      const i = order[j];
+      if (this.mayFit(items.w[i], items.h[i])) this.tryPlace(i, items.w[i], items.h[i], items.canRotate[i] === 1);
+    }
+  }
+
+  replay(i: number, w: number, h: number, decision: number) {
+    const rot = (decision & 1) === 1;
+    this.split = ((decision >> 1) & 3) as Split;
+    const node = decision >> 3;
+    let r = 0;
+    while (r < this.nFree && this.fnode[r] !== node) r++;
+    if (r === this.nFree) throw new Error(`internal: replayed placement of item ${i} names no free rectangle`);
+    this.commit(i, r, rot ? h : w, rot ? w : h, rot);
+  }
+
+  private fillBySpace(items: ItemTable, order: ArrayLike<number>, len: number, variant: number, minArea: number) {
+    const lowest = (variant & 1) === 1;
+    const tightest = (variant & 2) === 2;
+    const taken = this.taken;
+    for (let j = 0; j < len; j++) taken[j] = 0;
+    let left = len;
+    const { fx, fy, fw, fh } = this;
+    while (this.nFree > 0 && left > 0) {
+      // The free rectangle to fill next.
+      let r = 0;
+      for (let q = 1; q < this.nFree; q++) {
+        if (lowest ? fy[q] < fy[r] - EPS || (fy[q] <= fy[r] + EPS && fx[q] < fx[r]) : fw[q] * fh[q] < fw[r] * fh[r]) r = q;
+      }
+      const W = fw[r];
+      const H = fh[r];
+      if (W * H < minArea - EPS) {
+        this.removeFree(r);
+        continue;
+      }
+      let bestJ = -1;
+      let bestRot = false;
+      let s1 = Infinity;
+      let s2 = Infinity;
+      for (let j = 0; j < len; j++) {
+        if (taken[j]) continue;
+        const i = order[j];
+        const w = items.w[i];
+        const h = items.h[i];
+        const turns = items.canRotate[i] === 1 && w !== h ? 2 : 1;
+        for (let o = 0; o < turns; o++) {
+          const iw = o === 0 ? w : h;
+          const ih = o === 0 ? h : w;
+          if (iw > W + EPS || ih > H + EPS) continue;
+          const dw = W - iw;
+          const dh = H - ih;
+          const short = dw < dh ? dw : dh;
+          const a = tightest ? short : -(iw * ih);
+          const b = tightest ? -(iw * ih) : short;
+          if (a < s1 - EPS || (a <= s1 + EPS && b < s2 - EPS)) {
+            s1 = a;
+            s2 = b;
+            bestJ = j;
+            bestRot = o === 1;
+          }
+        }
+      }
+      if (bestJ < 0) {
+        this.removeFree(r); // no part fits: the rectangle stays a leftover leaf of the tree
+        continue;
+      }
+      taken[bestJ] = 1;
+      left--;
+      const i = order[bestJ];
+      this.commit(i, r, bestRot ? items.h[i] : items.w[i], bestRot ? items.w[i] : items.h[i], bestRot);
+    }
+  }
+
+  private mayFit(w: number, h: number): boolean {
     // Orientation does not matter here: a part fits a rectangle only if its short side fits the rectangle's short
     // side and its long side the long side.
-    void canRotate;
     if (w * h > this.maxFreeArea + EPS) return false;
     return (w < h ? w : h) <= this.maxFreeShort + EPS && (w < h ? h : w) <= this.maxFreeLong + EPS;
   }
 
-  tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean {
+  private tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean {
     const { fx, fy, fw, fh } = this;
     let best = -1;
     let bestRot = false;
@@ -141,6 +233,8 @@ class PanelFiller implements BinFiller {
     const W = this.fw[r];
     const H = this.fh[r];
     const node = this.fnode[r];
+    // The free rectangle is named by its tree leaf, which stays valid when unusable rectangles are dropped.
+    this.decisions[this.count] = (node << 3) | (this.split << 1) | (rotated ? 1 : 0);
     this.removeFree(r);
     let dw = W - iw;
     let dh = H - ih;
@@ -255,6 +349,6 @@ class PanelFiller implements BinFiller {
 }
 
 export const panelFiller: FillerKind = {
-  rules: PLACE_RULES * SPLIT_RULES,
+  rules: ITEM_RULES + SPACE_RULES,
   create: (capacity, kerf) => new PanelFiller(capacity, kerf),
 };

@@ -1,5 +1,4 @@
 import type { BinFiller, FillerKind } from './filler';
-import { EPS } from './filler';
 import type { BinType, Objective, PackResult } from './types';
 
 /** The packing problem in flat arrays: item `i` is w[i] × h[i]; `ids[i]` is the caller's id. */
@@ -18,14 +17,11 @@ export interface Problem {
   minSide: number;
 }
 
-/**
- * One bin of a solution, stored as the recipe that rebuilds it: the filler is deterministic, so replaying the
- * placed items in order under the same rule gives the same layout and cut tree.
- */
+/** One bin of a solution, stored as the recipe that rebuilds it: its items in placement order and the decisions. */
 export interface Bin {
   type: number;
-  rule: number;
   seq: Int32Array;
+  how: Int32Array;
   used: number;
   cuts: number;
 }
@@ -39,19 +35,12 @@ export interface Solution {
 /** Fills `f` with the first `len` items of `order` into a fresh bin of type `t`. */
 export function fillBin(p: Problem, f: BinFiller, t: number, rule: number, order: ArrayLike<number>, len: number, minArea: number) {
   const bt = p.types[t];
-  const binArea = bt.w * bt.h;
-  f.reset(bt.w, bt.h, rule, p.minSide);
-  for (let j = 0; j < len; j++) {
-    // Free area never exceeds the bin's unfilled area, so once that is below the smallest item nothing fits.
-    if (binArea - f.used < minArea - EPS) break;
-    const i = order[j];
-    const r = p.canRotate[i] === 1;
-    if (f.mayFit(p.w[i], p.h[i], r)) f.tryPlace(i, p.w[i], p.h[i], r);
-  }
+  f.reset(bt.w, bt.h, p.minSide);
+  f.fill(p, order, len, rule, minArea);
 }
 
-export function binFromFiller(f: BinFiller, t: number, rule: number): Bin {
-  return { type: t, rule, seq: f.placed.slice(0, f.count), used: f.used, cuts: f.cuts };
+export function binFromFiller(f: BinFiller, t: number): Bin {
+  return { type: t, seq: f.placed.slice(0, f.count), how: f.decisions.slice(0, f.count), used: f.used, cuts: f.cuts };
 }
 
 /** Everything the objective compares, in one place. */
@@ -103,10 +92,8 @@ export function compareScores(objective: Objective, a: Score, b: Score): number 
 export function toResult(p: Problem, s: Solution, f: BinFiller, prior: PackResult['unplaced']): PackResult {
   const bins = s.bins.map((b) => {
     const t = p.types[b.type];
-    f.reset(t.w, t.h, b.rule, p.minSide);
-    for (const i of b.seq) {
-      if (!f.tryPlace(i, p.w[i], p.h[i], p.canRotate[i] === 1)) throw new Error(`internal: replay of bin lost item ${p.ids[i]}`);
-    }
+    f.reset(t.w, t.h, p.minSide);
+    b.seq.forEach((i, k) => f.replay(i, p.w[i], p.h[i], b.how[k]));
     const { tree, items } = f.finish(p.ids);
     return { binTypeId: t.id, items, tree };
   });

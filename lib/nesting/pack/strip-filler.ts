@@ -1,4 +1,4 @@
-import type { BinFiller, FillerKind } from './filler';
+import type { BinFiller, FillerKind, ItemTable } from './filler';
 import { EPS } from './filler';
 import { FlatTree } from './flat-tree';
 import type { PackedItem } from './types';
@@ -13,6 +13,7 @@ class StripFiller implements BinFiller {
   cuts = 0;
   count = 0;
   readonly placed: Int32Array;
+  readonly decisions: Int32Array;
   private readonly px: Float64Array;
   private readonly py: Float64Array;
   private readonly pw: Float64Array;
@@ -35,6 +36,7 @@ class StripFiller implements BinFiller {
     private readonly kerf: number,
   ) {
     this.placed = new Int32Array(capacity);
+    this.decisions = new Int32Array(capacity);
     this.px = new Float64Array(capacity);
     this.py = new Float64Array(capacity);
     this.pw = new Float64Array(capacity);
@@ -48,7 +50,7 @@ class StripFiller implements BinFiller {
     this.tree = new FlatTree(6 * capacity + 2);
   }
 
-  reset(binW: number, binH: number, rule: number) {
+  reset(binW: number, binH: number) {
     this.used = 0;
     this.cuts = 0;
     this.count = 0;
@@ -56,17 +58,35 @@ class StripFiller implements BinFiller {
     this.nextY = 0;
     this.binW = binW;
     this.binH = binH;
-    this.standUp = rule % 2 === 1;
   }
 
-  mayFit(w: number, h: number): boolean {
+  fill(items: ItemTable, order: ArrayLike<number>, len: number, rule: number, minArea: number) {
+    this.standUp = rule % 2 === 1;
+    const binArea = this.binW * this.binH;
+    for (let j = 0; j < len; j++) {
+      if (binArea - this.used < minArea - EPS) break;
+      const i = order[j];
+      if (this.mayFit(items.w[i], items.h[i])) this.tryPlace(i, items.w[i], items.h[i], items.canRotate[i] === 1);
+    }
+  }
+
+  replay(i: number, w: number, h: number, decision: number) {
+    const rot = (decision & 1) === 1;
+    const s = decision >> 1;
+    const iw = rot ? h : w;
+    const ih = rot ? w : h;
+    if (s === this.nStrips) this.openStrip(i, iw, ih, rot);
+    else this.put(i, s, iw, ih, rot);
+  }
+
+  private mayFit(w: number, h: number): boolean {
     const short = w < h ? w : h;
     if (this.binH - this.nextY >= short - EPS) return true;
     for (let s = 0; s < this.nStrips; s++) if (this.binW - this.sx[s] >= short - EPS && this.sh[s] >= short - EPS) return true;
     return false;
   }
 
-  tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean {
+  private tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean {
     const W = this.binW;
     // Best fit into an open strip: the least height wasted, then the least length left.
     let best = -1;
@@ -101,20 +121,25 @@ class StripFiller implements BinFiller {
       const iw = rot ? h : w;
       const ih = rot ? w : h;
       if (iw > W + EPS || ih > roomH + EPS) continue;
-      const s = this.nStrips++;
-      this.sy[s] = this.nextY;
-      this.sh[s] = ih;
-      this.sx[s] = 0;
-      if (roomH - ih > EPS) this.cuts++; // the rip that frees the strip
-      this.nextY += ih + this.kerf;
-      this.put(i, s, iw, ih, rot);
+      this.openStrip(i, iw, ih, rot);
       return true;
     }
     return false;
   }
 
+  private openStrip(i: number, iw: number, ih: number, rot: boolean) {
+    const s = this.nStrips++;
+    this.sy[s] = this.nextY;
+    this.sh[s] = ih;
+    this.sx[s] = 0;
+    if (this.binH - this.nextY - ih > EPS) this.cuts++; // the rip that frees the strip
+    this.nextY += ih + this.kerf;
+    this.put(i, s, iw, ih, rot);
+  }
+
   private put(i: number, s: number, iw: number, ih: number, rotated: boolean) {
     const c = this.count++;
+    this.decisions[c] = (s << 1) | (rotated ? 1 : 0);
     const x = this.sx[s];
     this.placed[c] = i;
     this.px[c] = x;
