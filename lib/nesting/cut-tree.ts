@@ -1,13 +1,8 @@
 /** Cut-tree helpers: moving a packed tree onto its stock piece, adding the edge-trim cuts, checking a tree. */
 import type { Rect } from '@/lib/geometry/rect';
 import type { CutNode } from '@/lib/nesting/pack/types';
-import { EPS, slice, type Axis } from '@/lib/nesting/guillotine';
-
-export const lowEdge = (r: Rect, a: Axis) => (a === 'x' ? r.x : r.y);
-export const highEdge = (r: Rect, a: Axis) => (a === 'x' ? r.x + r.w : r.y + r.h);
-export const extent = (r: Rect, a: Axis) => (a === 'x' ? r.w : r.h);
-export const sameRect = (a: Rect, b: Rect, eps = EPS) =>
-  Math.abs(a.x - b.x) <= eps && Math.abs(a.y - b.y) <= eps && Math.abs(a.w - b.w) <= eps && Math.abs(a.h - b.h) <= eps;
+import { highEdge, lowEdge, sameRect, slice, type Axis } from '@/lib/geometry/axis';
+import { EPS } from '@/lib/nesting/guillotine';
 
 const shift = (r: Rect, dx: number, dy: number): Rect => ({ x: r.x + dx, y: r.y + dy, w: r.w, h: r.h });
 
@@ -68,7 +63,7 @@ export function checkTree(tree: CutNode, rect: Rect, items: readonly Rect[]): Tr
   const problems: TreeProblem[] = [];
   const seen = new Array<number>(items.length).fill(0);
   const walk = (node: CutNode, expected: Rect) => {
-    if (!sameRect(node.rect, expected)) {
+    if (!sameRect(node.rect, expected, EPS)) {
       problems.push({ message: `a ${node.type} node's rectangle does not match the piece it comes from` });
       return;
     }
@@ -78,7 +73,7 @@ export function checkTree(tree: CutNode, rect: Rect, items: readonly Rect[]): Tr
       if (!item) problems.push({ message: `the tree names item ${node.itemId}, which is not on this piece`, itemId: node.itemId });
       else {
         seen[node.itemId]++;
-        if (!sameRect(item, node.rect)) problems.push({ message: `the tree's leaf for item ${node.itemId} is not where the part is`, itemId: node.itemId });
+        if (!sameRect(item, node.rect, EPS)) problems.push({ message: `the tree's leaf for item ${node.itemId} is not where the part is`, itemId: node.itemId });
       }
       return;
     }

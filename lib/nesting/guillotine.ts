@@ -3,9 +3,10 @@
  * Used by `validatePlan`, `rebuildCuts` (layout bench edits) and the benchmarks (other packers' layouts).
  */
 import type { Rect } from '@/lib/geometry/rect';
+import { highEdge as hi, lowEdge as lo, otherAxis as other, sameRect, slice, type Axis } from '@/lib/geometry/axis';
 import type { CutNode } from '@/lib/nesting/pack/types';
 
-export type Axis = 'x' | 'y';
+export type { Axis };
 
 /** Stages allowed by the `strips` cutting style: rips, crosscuts, trim rips. */
 export const STRIP_STAGES = 3;
@@ -18,16 +19,6 @@ export interface GuillotineItem extends Rect {
   itemId?: number;
   rotated?: boolean;
 }
-
-const other = (a: Axis): Axis => (a === 'x' ? 'y' : 'x');
-const lo = (r: Rect, a: Axis) => (a === 'x' ? r.x : r.y);
-const hi = (r: Rect, a: Axis) => (a === 'x' ? r.x + r.w : r.y + r.h);
-/** `r` cut down to [from, to] along `a`. */
-export const slice = (r: Rect, a: Axis, from: number, to: number): Rect =>
-  a === 'x' ? { x: from, y: r.y, w: Math.max(0, to - from), h: r.h } : { x: r.x, y: from, w: r.w, h: Math.max(0, to - from) };
-
-const sameRect = (a: Rect, b: Rect) =>
-  Math.abs(a.x - b.x) <= EPS && Math.abs(a.y - b.y) <= EPS && Math.abs(a.w - b.w) <= EPS && Math.abs(a.h - b.h) <= EPS;
 
 interface Item extends Rect {
   itemId: number;
@@ -97,7 +88,7 @@ interface Level {
 
 function build(region: Rect, items: Item[], level: Level, parent: Level | null, skipped: boolean, kerf: number, maxStages: number): CutNode | null {
   if (items.length === 0) return { type: 'leftover', rect: region };
-  if (items.length === 1 && sameRect(items[0], region)) {
+  if (items.length === 1 && sameRect(items[0], region, EPS)) {
     return { type: 'item', rect: region, itemId: items[0].itemId, rotated: items[0].rotated };
   }
   const parts = split(region, items, level.axis, kerf);

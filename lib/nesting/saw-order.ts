@@ -9,8 +9,8 @@
  */
 import { contains, type Rect } from '@/lib/geometry/rect';
 import type { CutNode } from '@/lib/nesting/pack/types';
-import { EPS, slice, type Axis } from '@/lib/nesting/guillotine';
-import { extent, highEdge, lowEdge } from '@/lib/nesting/cut-tree';
+import { extent, highEdge, lowEdge, otherAxis as other, sameRect, slice, type Axis } from '@/lib/geometry/axis';
+import { EPS } from '@/lib/nesting/guillotine';
 import type { Placement, SawPiece, SawStep } from '@/shared/schemas/nesting';
 
 /** "A", "B", … "Z", "AA", "AB", … (bijective base 26). */
@@ -35,7 +35,6 @@ export interface SawContext {
 }
 
 const axisOf = (kind: SawStep['kind']): Axis => (kind === 'rip' ? 'y' : 'x');
-const other = (a: Axis): Axis => (a === 'x' ? 'y' : 'x');
 const nonEmpty = (r: Rect) => r.w > EPS && r.h > EPS;
 
 /** Keep-worthy when both sides reach the minimum offcut size (longer side vs length, shorter vs width). */
@@ -150,7 +149,7 @@ export function replaySawOrder(steps: readonly SawStep[], stock: Rect, rootName:
     const said = step.produces;
     const matches =
       said.length === sides.length &&
-      sides.every((s, j) => Math.abs(s.x - said[j].x) <= EPS && Math.abs(s.y - said[j].y) <= EPS && Math.abs(s.w - said[j].w) <= EPS && Math.abs(s.h - said[j].h) <= EPS);
+      sides.every((s, j) => sameRect(s, said[j], EPS));
     if (!matches) problems.push({ step: n, message: `step ${n}: the pieces it lists are not what this cut leaves` });
     pieces.delete(step.piece);
     sides.forEach((s, j) => {

@@ -15,7 +15,8 @@
  */
 import { contains } from '@/lib/geometry/rect';
 import { EPS, findGuillotineTree, STRIP_STAGES } from '@/lib/nesting/guillotine';
-import { checkTree, sameRect } from '@/lib/nesting/cut-tree';
+import { sameRect } from '@/lib/geometry/axis';
+import { checkTree } from '@/lib/nesting/cut-tree';
 import { replaySawOrder, stockPieceName } from '@/lib/nesting/saw-order';
 import { fitsOn, mayTurnInGroup, rotationAllowed, sameStock, stockForPart, stockRect, trimFor, usableRect } from '@/lib/nesting/stock-rules';
 import {
@@ -146,7 +147,7 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
     for (const pr of problems) out.push({ code: 'saw-order', message: `piece ${index + 1}: ${pr.message}`, ...at, step: pr.step });
     const finals = [...pieces.values()];
     for (const p of piece.placements) {
-      const hits = finals.filter((f) => sameRect(f, p)).length;
+      const hits = finals.filter((f) => sameRect(f, p, EPS)).length;
       if (hits !== 1) {
         out.push({ code: 'saw-order', message: `piece ${index + 1}: the saw order does not cut ${name(parts.get(p.partId), p)} free at its place`, ...at, partId: p.partId, instance: p.instance });
       }
