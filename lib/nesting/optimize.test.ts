@@ -153,6 +153,29 @@ describe('stock', () => {
   });
 });
 
+describe('totals', () => {
+  test('count pieces by material and thickness, and yield is all part area over all stock area ([derived])', async () => {
+    const req = request(
+      [part('a', 1000, 500, { quantity: 2 }), part('b', 600, 400, { material: 'MDF', grain: 'any' }), part('c', 800, 300, { thickness: 12 })],
+      [sheet('P18', 2440, 1220), sheet('M18', 2440, 1220, { material: 'MDF', grain: 'none', costEach: 30 }), sheet('P12', 2440, 1220, { thickness: 12, costEach: 45 })],
+    );
+    const plan = await optimize(req);
+    expect(validatePlan(req, plan)).toEqual([]);
+    const t = plan.totals!;
+    expect(t.byMaterial.map((m) => [m.material, m.thickness, m.pieces])).toEqual([
+      ['birch ply', 18, 1],
+      ['MDF', 18, 1],
+      ['birch ply', 12, 1],
+    ]);
+    const partArea = 2 * 1000 * 500 + 600 * 400 + 800 * 300;
+    expect(t.partArea).toBe(partArea);
+    expect(t.yield).toBeCloseTo(partArea / (3 * 2440 * 1220), 12);
+    expect(t.cost).toBe(60 + 30 + 45);
+    expect(t.cuts).toBe(plan.pieces.reduce((n, p) => n + p.sawOrder!.length, 0));
+    expect(t.offcutArea + t.wasteArea + t.partArea).toBeCloseTo(t.stockArea, 6);
+  });
+});
+
 describe('progress and cancel', () => {
   test('reports progress with pieces used, yield and cost', async () => {
     const seen: { piecesUsed: number; yield: number; cost: number; elapsedMs: number }[] = [];
