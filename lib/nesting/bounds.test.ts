@@ -136,6 +136,14 @@ describe('worked examples', () => {
     expect(martelloVigoL2(sizes, bin)).toBe(2);
   });
 
+  test.each([
+    { label: '[derived] two 1300 × 700 parts on a 2440 × 1220 sheet: 2600 > 2440 side by side, 1400 > 1220 stacked, and turned they do not fit → 2 sheets', items: [[1300, 700], [1300, 700]], rotation: true, bound: 2 },
+    { label: '[derived] the same two parts with grain locked → 2 sheets', items: [[1300, 700], [1300, 700]], rotation: false, bound: 2 },
+    { label: '[derived] two 1200 × 700 parts stand side by side (2400 ≤ 2440) → 1 sheet', items: [[1200, 700], [1200, 700]], rotation: true, bound: 1 },
+  ])('$label', ({ items, rotation, bound }) => {
+    expect(lowerBound(items.map(([w, h]) => ({ w, h })), { w: 2440, h: 1220 }, rotation)).toBe(bound);
+  });
+
   test('an empty list needs no bins', () => {
     expect(lowerBound([], bin, false)).toBe(0);
     expect(lowerBound([], bin, true)).toBe(0);

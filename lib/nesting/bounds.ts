@@ -83,7 +83,7 @@ export function continuousBound(items: readonly Size[], bin: Size): number {
  * J2 = {H − p ≥ h > H/2}, J3 = {H/2 ≥ h ≥ p};
  * L(p) = |J1 ∪ J2| + max(0, ⌈(Σ_J3 h − Σ_J2 (H − h)) / H⌉, ⌈(|J3| − Σ_J2 ⌊(H − h)/p⌋) / ⌊H/p⌋⌉), L1^W = max_p L(p).
  */
-export function martelloVigoL1W(items: readonly Size[], bin: Size): number {
+function martelloVigoL1W(items: readonly Size[], bin: Size): number {
   const { w: W, h: H } = bin;
   const tall: number[] = [];
   const short: number[] = [];
@@ -121,7 +121,7 @@ export function martelloVigoL1W(items: readonly Size[], bin: Size): number {
  * with K1 = {w > W − q}, K2 = {W − q ≥ w > W/2}, K3 = {W/2 ≥ w ≥ q}: nothing of width ≥ q fits beside an item of K1,
  * so each K1 item takes the bin's full width over its height. `l1` is a valid bound already known (L1 here).
  */
-export function martelloVigoL2W(items: readonly Size[], bin: Size, l1: number): number {
+function martelloVigoL2W(items: readonly Size[], bin: Size, l1: number): number {
   const { w: W, h: H } = bin;
   const order = [...items].sort((a, b) => a.w - b.w);
   const widths = Float64Array.from(order, (it) => it.w);
@@ -144,6 +144,11 @@ export function martelloVigoL2W(items: readonly Size[], bin: Size, l1: number): 
 
 /** Martello & Vigo (1998) L2 = max(L2^W, L2^H) for fixed orientation; it dominates L0 and L1. */
 export function martelloVigoL2(items: readonly Size[], bin: Size): number {
+  assertInput(items, bin, false);
+  return l2Fixed(items, bin);
+}
+
+function l2Fixed(items: readonly Size[], bin: Size): number {
   const turned = items.map(transpose);
   const l1 = Math.max(martelloVigoL1W(items, bin), martelloVigoL1W(turned, transpose(bin)));
   return Math.max(continuousBound(items, bin), martelloVigoL2W(items, bin, l1), martelloVigoL2W(turned, transpose(bin), l1));
@@ -212,12 +217,17 @@ function addSquares(w: number, h: number, smallest: number, counts: Map<number, 
 }
 
 /**
- * Dell'Amico, Martello & Vigo (2002), for items that may be turned: cut every item into squares (Euclid's
- * algorithm), which may lie either way, and bound the squares as in `incompatibilityBound`; at least L0.
- * On the 500 standard instances this gives the reference totals exactly (6,769; /work/shared/bench/README.md).
- * For bins that are not square the same argument is applied with q = min(t, W/2), p = min(t, H/2).
+ * Dell'Amico, Martello & Vigo (2002), for items that may be turned, as we reconstruct it: cut every item into squares
+ * (Euclid's algorithm) — squares lie the same either way — and bound the squares as in `incompatibilityBound`; at
+ * least L0. On the 500 standard instances this gives the reference totals exactly, class by class (6,769;
+ * /work/shared/bench/README.md). For bins that are not square the argument runs with q = min(t, W/2), p = min(t, H/2).
  */
 export function dellAmicoMartelloVigo(items: readonly Size[], bin: Size): number {
+  assertInput(items, bin, true);
+  return squaresBound(items, bin);
+}
+
+function squaresBound(items: readonly Size[], bin: Size): number {
   const { w: W, h: H } = bin;
   const l0 = continuousBound(items, bin);
   // No square can exceed half of both sides (a sheet twice as long as wide): then the squares' area is all it has.
@@ -241,6 +251,11 @@ export function dellAmicoMartelloVigo(items: readonly Size[], bin: Size): number
  * instances too, since letting every item turn only relaxes the problem.
  */
 export function rotationBound(items: readonly Size[], bin: Size): number {
+  assertInput(items, bin, true);
+  return wholeItemBound(items, bin);
+}
+
+function wholeItemBound(items: readonly Size[], bin: Size): number {
   const { w: W, h: H } = bin;
   const pieces: Piece[] = items.map((it) => {
     const asListed = it.w <= W && it.h <= H;
@@ -268,7 +283,7 @@ export function lowerBound(items: readonly Size[], bin: Size, rotation: boolean)
   assertInput(items, bin, rotation);
   if (items.length === 0) return 0;
   // On a square bin rotationBound is never below the squares bound (see its test), so the latter is skipped there.
-  const ours = rotationBound(items, bin);
-  const turned = bin.w === bin.h ? ours : Math.max(ours, dellAmicoMartelloVigo(items, bin));
-  return rotation ? turned : Math.max(martelloVigoL2(items, bin), turned);
+  const ours = wholeItemBound(items, bin);
+  const turned = bin.w === bin.h ? ours : Math.max(ours, squaresBound(items, bin));
+  return rotation ? turned : Math.max(l2Fixed(items, bin), turned);
 }
