@@ -1,5 +1,6 @@
 import { describe, expect, test } from 'vitest';
-import { createNestingWorkerApi, PROGRESS_INTERVAL_MS, type NestProgress } from '@/lib/nesting/worker-api';
+import { createNestingWorkerApi } from '@/lib/nesting/worker-handler';
+import { PROGRESS_INTERVAL_MS, type NestProgress } from '@/lib/nesting/worker-api';
 import { validatePlan } from '@/lib/nesting/validate-plan';
 import { part, request, sheet } from '@/lib/nesting/test-support';
 
