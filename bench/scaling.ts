@@ -5,6 +5,7 @@
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
 import { packGuillotine } from '@/lib/nesting/pack';
+import { mulberry32 } from '@/lib/nesting/pack/prng';
 import type { PackItem } from '@/lib/nesting/pack/types';
 
 export const SCALING_SIZES = [100, 1_000, 10_000] as const;
@@ -22,20 +23,8 @@ export interface ScalingResult {
   maxRssRiseMb: number;
 }
 
-/** Mulberry32: a small seeded generator, so every run packs the same parts. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 export function randomParts(n: number, seed = 42): PackItem[] {
-  const rnd = random(seed);
+  const rnd = mulberry32(seed);
   // Mostly carcass- and drawer-sized parts, a few long ones; whole millimetres.
   return Array.from({ length: n }, (_, id) => {
     const long = rnd() < 0.1;

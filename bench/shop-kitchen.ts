@@ -47,23 +47,14 @@ function baseUnit(tag: string, width: number, drawers: number[]): PartIn[] {
   return parts;
 }
 
-function wallUnit(tag: string, width: number): PartIn[] {
+/** Wall and tall units: two sides, top and bottom between them, shelves, a 6 mm back. */
+function carcass(tag: string, width: number, height: number, depth: number, shelves: number): PartIn[] {
   const inner = width - 2 * SIDE;
   return [
-    part(tag, 'side', 2, 720, 320, SIDE, 'along-length'),
-    part(tag, 'top-bottom', 2, inner, 320, SIDE, 'any'),
-    part(tag, 'shelf', 2, inner - 2, 300, SIDE, 'any'),
-    part(tag, 'back', 1, 716, width - 4, 6, 'any'),
-  ];
-}
-
-function tallUnit(tag: string, width: number): PartIn[] {
-  const inner = width - 2 * SIDE;
-  return [
-    part(tag, 'side', 2, 2100, 560, SIDE, 'along-length'),
-    part(tag, 'top-bottom', 2, inner, 560, SIDE, 'any'),
-    part(tag, 'shelf', 4, inner - 2, 520, SIDE, 'any'),
-    part(tag, 'back', 1, 2096, width - 4, 6, 'any'),
+    part(tag, 'side', 2, height, depth, SIDE, 'along-length'),
+    part(tag, 'top-bottom', 2, inner, depth, SIDE, 'any'),
+    part(tag, 'shelf', shelves, inner - 2, depth - 20, SIDE, 'any'),
+    part(tag, 'back', 1, height - 4, width - 4, 6, 'any'),
   ];
 }
 
@@ -79,8 +70,8 @@ export function kitchenParts(): PartIn[] {
   const tall = [600, 600, 450];
   return [
     ...base.flatMap(([w, drawers], k) => baseUnit(`B${k + 1}`, w, drawers)),
-    ...wall.flatMap((w, k) => wallUnit(`W${k + 1}`, w)),
-    ...tall.flatMap((w, k) => tallUnit(`T${k + 1}`, w)),
+    ...wall.flatMap((w, k) => carcass(`W${k + 1}`, w, 720, 320, 2)),
+    ...tall.flatMap((w, k) => carcass(`T${k + 1}`, w, 2100, 560, 4)),
     part('E', 'end-panel', 3, 870, 600, SIDE, 'along-length'),
     part('E', 'tall-end-panel', 1, 2150, 600, SIDE, 'along-length'),
     part('K', 'toe-kick', 4, 2400, 100, SIDE, 'along-length'),
