@@ -95,6 +95,25 @@ describe('worked examples', () => {
     expect(validatePlan(req, plan)).toEqual([]);
   });
 
+  test('full-length strips across any sheet number exactly ⌊(L − trims + k) / (w + k)⌋ (DOMAIN.md strip count, [derived])', async () => {
+    const arb = fc.record({
+      across: fc.integer({ min: 200, max: 1500 }),
+      w: fc.integer({ min: 40, max: 500 }),
+      k: fc.constantFrom(0, 2.4, 3.2),
+      trim: fc.constantFrom(0, 5, 10),
+      style: fc.constantFrom('panel' as const, 'strips' as const),
+    });
+    await fc.assert(
+      fc.asyncProperty(arb, async ({ across, w, k, trim, style }) => {
+        const n = Math.floor((across - 2 * trim + k) / (w + k) + 1e-9);
+        const req = request([part('strip', 1000 - 2 * trim, w, { quantity: n + 2 })], [sheet('S', 1000, across, { count: 1 })], { kerf: k, trim, style });
+        const plan = await optimize(req);
+        expect(placedCount(plan)).toBe(Math.max(0, n));
+      }),
+      { numRuns: 40 },
+    );
+  });
+
   test('2440 mm, 600 mm parts, 3.2 mm kerf, 10 mm trim each end → 4 parts, 10.4 mm left (DOMAIN.md strip count, [derived])', async () => {
     const req = request(
       [part('door', 600, 1200, { quantity: 6 })],
