@@ -6,8 +6,11 @@ import type { Bin, Problem } from './solution';
 import { binFromFiller, fillBin } from './solution';
 
 /** Sort keys for item orders, all descending: the classic "decreasing" heuristics. */
-export const ORDER_KEYS = ['area', 'long-side', 'perimeter', 'width', 'height'] as const;
+export const ORDER_KEYS = ['area', 'long-side', 'perimeter', 'width', 'height', 'strip-height'] as const;
 export type OrderKey = (typeof ORDER_KEYS)[number];
+/** Strips pack best tallest strip first (first-fit decreasing height); a part that may turn lies flat. */
+export const STRIP_ORDER_KEYS: readonly OrderKey[] = ['strip-height', 'area', 'height', 'long-side', 'perimeter', 'width'];
+export const PANEL_ORDER_KEYS: readonly OrderKey[] = ['area', 'long-side', 'perimeter', 'width', 'height'];
 
 export function sortedOrder(p: Problem, items: ArrayLike<number>, key: OrderKey): Int32Array {
   const order = Int32Array.from(items);
@@ -15,7 +18,19 @@ export function sortedOrder(p: Problem, items: ArrayLike<number>, key: OrderKey)
   for (const i of order) {
     const w = p.w[i];
     const h = p.h[i];
-    k[i] = key === 'area' ? w * h : key === 'long-side' ? Math.max(w, h) * 1e6 + Math.min(w, h) : key === 'perimeter' ? w + h : key === 'width' ? w * 1e6 + h : h * 1e6 + w;
+    const stripH = p.canRotate[i] ? Math.min(w, h) : h;
+    k[i] =
+      key === 'area'
+        ? w * h
+        : key === 'long-side'
+          ? Math.max(w, h) * 1e6 + Math.min(w, h)
+          : key === 'perimeter'
+            ? w + h
+            : key === 'width'
+              ? w * 1e6 + h
+              : key === 'height'
+                ? h * 1e6 + w
+                : stripH * 1e6 + w * h;
   }
   // Ties by index keep the order stable and deterministic.
   order.sort((a, b) => k[b] - k[a] || a - b);

@@ -1,5 +1,5 @@
 import { lowerBound } from '@/lib/nesting/bounds';
-import { ORDER_KEYS, packPool, sortedOrder } from './construct';
+import { PANEL_ORDER_KEYS, packPool, sortedOrder, STRIP_ORDER_KEYS } from './construct';
 import { EPS } from './filler';
 import type { BinFiller } from './filler';
 import { packInputSchema, PackInputError } from './pack-input';
@@ -21,10 +21,10 @@ export interface PackLimits {
 const YIELD_EVERY_MS = 25;
 const PROGRESS_EVERY_MS = 200;
 /**
- * The constructive phase tries every item order × rule on small jobs and fewer on large ones; the count depends
- * only on the job size (never on the clock), so the first plan is the same under any load.
+ * Parts × bin types × combinations of the deterministic constructive phase: all combinations up to ~20 parts,
+ * one from ~3,000 parts (the rest run, time permitting, in the improvement phase).
  */
-const CONSTRUCT_WORK = 300_000;
+const CONSTRUCT_WORK = 3_000;
 /** Orders tried for each new bin while re-packing in the improvement phase. */
 const ATTEMPTS_PER_BIN = 6;
 
@@ -71,35 +71,53 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
     lastYield = now();
   };
 
-  // Constructive phase: every order × rule combination the job size allows, deterministic.
-  const orders = ORDER_KEYS.map((k) => sortedOrder(p, all, k));
+  // Constructive phase: as many order × rule combinations as the job size allows (never the clock), so the first
+  // plan is the same under any load and comes fast even for thousands of parts.
+  const orderKeys = options.style === 'strips' ? STRIP_ORDER_KEYS : PANEL_ORDER_KEYS;
+  const orders = orderKeys.map((k) => sortedOrder(p, all, k));
   // With several bin types, each combination runs with and without closing on the cheapest bin that takes all.
   const policies = p.types.length > 1 ? 2 : 1;
-  const combos = ORDER_KEYS.length * p.filler.rules * policies;
-  const nCombos = Math.max(1, Math.min(combos, Math.floor(CONSTRUCT_WORK / (p.n * p.types.length))));
-  for (let c = 0; c < nCombos; c++) {
-    // Walk rules fastest within an order so a short list still mixes rules.
+  const combos = orderKeys.length * p.filler.rules * policies;
+  const construct = (c: number) => {
+    // Rules vary fastest, so a short run still mixes them; the classic area order comes first.
     const order = orders[Math.floor(c / (p.filler.rules * policies)) % orders.length];
     const rule = Math.floor(c / policies) % p.filler.rules;
     const packing = packPool(p, f, order, stock.slice(), rule, null, 1, scratch, mark, c % policies === 0);
     offer({ bins: packing.bins, noStock: packing.left });
+  };
+  let nextCombo = 0;
+  const firstCombos = Math.max(1, Math.min(combos, Math.floor(CONSTRUCT_WORK / (p.n * p.types.length))));
+  while (nextCombo < firstCombos) {
+    construct(nextCombo++);
     if (signal?.aborted) break;
     await breathe();
   }
+  if (onProgress) {
+    lastProgress = now();
+    report(p, f, best!, prior, onProgress, lastProgress - t0);
+  }
 
-  // Improvement phase: re-pack the items of the emptiest bin and a few others, keep what scores better.
+  // Improvement phase, on the clock: the remaining combinations, then re-packing.
   const lb = binLowerBound(p);
   const rng = mulberry32(options.seed);
   let cur: Solution = best!;
   let curScore = bestScore!;
   const maxIter = limits.maxIterations ?? Infinity;
-  // One bin type with enough stock and a bin-count objective: eliminate bins; otherwise improve the mix.
-  const pooled = p.types.length === 1 && p.objective !== 'cuts' && best!.noStock.length === 0 && best!.bins.length > 1 ? new PoolSearch(p, best!) : null;
+  let pooled: PoolSearch | null = null;
   for (let iter = 0; iter < maxIter; iter++) {
     if (signal?.aborted) break;
     if (limits.maxIterations === undefined && now() - t0 >= options.timeBudgetMs) break;
     const b: Solution = best!;
     if (lb !== null && b.noStock.length === 0 && b.bins.length <= lb && p.objective !== 'cuts') break;
+    if (nextCombo < combos) {
+      construct(nextCombo++);
+      cur = best!;
+      curScore = bestScore!;
+      await breathe();
+      continue;
+    }
+    // One bin type with enough stock and a bin-count objective: eliminate bins; otherwise improve the mix.
+    if (!pooled && p.types.length === 1 && p.objective !== 'cuts' && b.noStock.length === 0 && b.bins.length > 1) pooled = new PoolSearch(p, b, orderKeys);
     if (pooled) {
       const fewer = pooled.step(f, rng, ATTEMPTS_PER_BIN, scratch, mark);
       if (fewer) offer(fewer);
@@ -125,7 +143,7 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
         avail[bin.type]--;
       }
     }
-    const key = rng() < 0.6 ? 'area' : ORDER_KEYS[randInt(rng, ORDER_KEYS.length)];
+    const key = rng() < 0.6 ? orderKeys[0] : orderKeys[randInt(rng, orderKeys.length)];
     const packing = packPool(p, f, sortedOrder(p, pool, key), avail, randInt(rng, p.filler.rules), rng, ATTEMPTS_PER_BIN, scratch, mark, rng() < 0.5);
     const cand: Solution = { bins: kept.concat(packing.bins), noStock: packing.left };
     const candScore = score(p, cand);

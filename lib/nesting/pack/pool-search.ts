@@ -1,4 +1,5 @@
-import { ORDER_KEYS, packPool, sortedOrder } from './construct';
+import type { OrderKey } from './construct';
+import { packPool, sortedOrder } from './construct';
 import type { BinFiller } from './filler';
 import { EPS } from './filler';
 import type { Rng } from './prng';
@@ -19,6 +20,7 @@ export class PoolSearch {
   constructor(
     private readonly p: Problem,
     start: Solution,
+    private readonly orderKeys: readonly OrderKey[],
   ) {
     this.bins = start.bins.slice();
     this.dissolveEmptiest();
@@ -36,7 +38,8 @@ export class PoolSearch {
     const items = this.pool.slice();
     for (const i of this.bins[a].seq) items.push(i);
     if (b >= 0) for (const i of this.bins[b].seq) items.push(i);
-    const key = rng() < 0.6 ? 'area' : ORDER_KEYS[randInt(rng, ORDER_KEYS.length)];
+    const keys = this.orderKeys;
+    const key = rng() < 0.6 ? keys[0] : keys[randInt(rng, keys.length)];
     const packing = packPool(p, f, sortedOrder(p, items, key), [k], randInt(rng, p.filler.rules), rng, attempts, scratch, mark);
     let area = 0;
     for (const i of packing.left) area += p.area[i];
