@@ -166,7 +166,7 @@ export const sawStepSchema = z.object({
   length: positiveMm,
   /** Takes a factory edge off (edge trim). */
   trim: z.boolean().default(false),
-  /** The pieces it leaves, low side first (a side narrower than nothing — eaten by the blade — is absent). */
+  /** The pieces it leaves, low side first; a side the blade eats entirely is absent. */
   produces: z.array(sawPieceSchema).min(1).max(2),
 });
 export type SawStep = z.infer<typeof sawStepSchema>;
