@@ -70,7 +70,16 @@ interface Candidate {
  * With `closeFirst`, a bin type that takes everything left wins outright (the cheapest such); without it, bin
  * types compete on the objective alone (e.g. cost per area placed), which can be cheaper over several bins.
  */
-export function packPool(
+export function packPool(...args: Parameters<typeof packPoolSteps>): PoolPacking {
+  const steps = packPoolSteps(...args);
+  for (;;) {
+    const s = steps.next();
+    if (s.done) return s.value;
+  }
+}
+
+/** `packPool` one bin at a time: yields after each bin so a long job can pause for the event loop. */
+export function* packPoolSteps(
   p: Problem,
   f: BinFiller,
   order: Int32Array,
@@ -81,7 +90,7 @@ export function packPool(
   scratch: Int32Array,
   mark: Uint8Array,
   closeFirst = true,
-): PoolPacking {
+): Generator<void, PoolPacking, void> {
   let remaining = order.slice();
   let len = remaining.length;
   const bins: Bin[] = [];
@@ -123,6 +132,7 @@ export function packPool(
     }
     len = m;
     remaining = remaining.subarray(0, len);
+    yield;
   }
   return { bins, left: Array.from(remaining.subarray(0, len)) };
 

@@ -1,5 +1,5 @@
 import { lowerBound } from '@/lib/nesting/bounds';
-import { PANEL_ORDER_KEYS, packPool, sortedOrder, STRIP_ORDER_KEYS } from './construct';
+import { PANEL_ORDER_KEYS, packPool, packPoolSteps, sortedOrder, STRIP_ORDER_KEYS } from './construct';
 import { EPS } from './filler';
 import type { BinFiller } from './filler';
 import { packInputSchema, PackInputError } from './pack-input';
@@ -78,17 +78,23 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
   // With several bin types, each combination runs with and without closing on the cheapest bin that takes all.
   const policies = p.types.length > 1 ? 2 : 1;
   const combos = orderKeys.length * p.filler.rules * policies;
-  const construct = (c: number) => {
+  const construct = async (c: number) => {
     // Rules vary fastest, so a short run still mixes them; the classic area order comes first.
     const order = orders[Math.floor(c / (p.filler.rules * policies)) % orders.length];
     const rule = Math.floor(c / policies) % p.filler.rules;
-    const packing = packPool(p, f, order, stock.slice(), rule, null, 1, scratch, mark, c % policies === 0);
-    offer({ bins: packing.bins, noStock: packing.left });
+    const steps = packPoolSteps(p, f, order, stock.slice(), rule, null, 1, scratch, mark, c % policies === 0);
+    for (;;) {
+      const s = steps.next();
+      if (s.done) return void offer({ bins: s.value.bins, noStock: s.value.left });
+      await breathe();
+      // A cancel drops this construction unless it is the first (a plan must come back).
+      if (signal?.aborted && best) return;
+    }
   };
   let nextCombo = 0;
   const firstCombos = Math.max(1, Math.min(combos, Math.floor(CONSTRUCT_WORK / (p.n * p.types.length))));
   while (nextCombo < firstCombos) {
-    construct(nextCombo++);
+    await construct(nextCombo++);
     if (signal?.aborted) break;
     await breathe();
   }
@@ -110,7 +116,7 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
     const b: Solution = best!;
     if (lb !== null && b.noStock.length === 0 && b.bins.length <= lb && p.objective !== 'cuts') break;
     if (nextCombo < combos) {
-      construct(nextCombo++);
+      await construct(nextCombo++);
       cur = best!;
       curScore = bestScore!;
       await breathe();
