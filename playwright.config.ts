@@ -5,7 +5,7 @@ import { E2E_URL } from './tests/e2e/support/server';
 export default defineConfig({
   testDir: './tests/e2e',
   testMatch: '**/*.spec.ts',
-  outputDir: './test-results/e2e',
+  outputDir: `./test-results/e2e-${process.env.E2E_PORT ?? 'main'}`,
   workers: 1,
   fullyParallel: false,
   retries: 0,

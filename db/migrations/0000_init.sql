@@ -200,13 +200,10 @@ CREATE TABLE "plans" (
 CREATE TABLE "saw_steps" (
 	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
 	"shop_id" uuid NOT NULL,
-	"plan_piece_id" uuid NOT NULL,
+	"plan_id" uuid NOT NULL,
+	"piece_index" integer NOT NULL,
 	"seq" integer NOT NULL,
-	"kind" text NOT NULL,
-	"position_mm" double precision NOT NULL,
-	"cut_length_mm" double precision NOT NULL,
-	"description" text DEFAULT '' NOT NULL,
-	"done_at" timestamp with time zone,
+	"done_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"done_by" uuid
 );
 --> statement-breakpoint
@@ -235,7 +232,7 @@ ALTER TABLE "plans" ADD CONSTRAINT "plans_shop_id_shops_id_fk" FOREIGN KEY ("sho
 ALTER TABLE "plans" ADD CONSTRAINT "plans_job_id_jobs_id_fk" FOREIGN KEY ("job_id") REFERENCES "public"."jobs"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "plans" ADD CONSTRAINT "plans_created_by_users_id_fk" FOREIGN KEY ("created_by") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "saw_steps" ADD CONSTRAINT "saw_steps_shop_id_shops_id_fk" FOREIGN KEY ("shop_id") REFERENCES "public"."shops"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
-ALTER TABLE "saw_steps" ADD CONSTRAINT "saw_steps_plan_piece_id_plan_pieces_id_fk" FOREIGN KEY ("plan_piece_id") REFERENCES "public"."plan_pieces"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "saw_steps" ADD CONSTRAINT "saw_steps_plan_id_plans_id_fk" FOREIGN KEY ("plan_id") REFERENCES "public"."plans"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "saw_steps" ADD CONSTRAINT "saw_steps_done_by_users_id_fk" FOREIGN KEY ("done_by") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 CREATE UNIQUE INDEX "users_email_key" ON "users" USING btree (lower("email"));--> statement-breakpoint
 CREATE INDEX "users_shop_idx" ON "users" USING btree ("shop_id");--> statement-breakpoint
@@ -250,4 +247,4 @@ CREATE INDEX "audit_events_shop_idx" ON "audit_events" USING btree ("shop_id","c
 CREATE INDEX "placements_piece_idx" ON "placements" USING btree ("plan_piece_id");--> statement-breakpoint
 CREATE INDEX "plan_pieces_plan_idx" ON "plan_pieces" USING btree ("plan_id");--> statement-breakpoint
 CREATE INDEX "plans_job_idx" ON "plans" USING btree ("shop_id","job_id");--> statement-breakpoint
-CREATE INDEX "saw_steps_piece_idx" ON "saw_steps" USING btree ("plan_piece_id","seq");
+CREATE UNIQUE INDEX "saw_steps_step_key" ON "saw_steps" USING btree ("plan_id","piece_index","seq");

@@ -1,4 +1,4 @@
-import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { planStatusEnum } from './enums';
 import { jobs } from './jobs';
 import { shops } from './shops';
@@ -75,6 +75,7 @@ export const placements = pgTable(
   (t) => [index('placements_piece_idx').on(t.planPieceId)],
 );
 
+/** Ticks on a plan's saw order: one row per step done. The steps themselves live in the plan document. */
 export const sawSteps = pgTable(
   'saw_steps',
   {
@@ -82,18 +83,15 @@ export const sawSteps = pgTable(
     shopId: uuid('shop_id')
       .notNull()
       .references(() => shops.id, { onDelete: 'cascade' }),
-    planPieceId: uuid('plan_piece_id')
+    planId: uuid('plan_id')
       .notNull()
-      .references(() => planPieces.id, { onDelete: 'cascade' }),
+      .references(() => plans.id, { onDelete: 'cascade' }),
+    pieceIndex: integer('piece_index').notNull(),
     seq: integer('seq').notNull(),
-    kind: text('kind').notNull(),
-    positionMm: doublePrecision('position_mm').notNull(),
-    cutLengthMm: doublePrecision('cut_length_mm').notNull(),
-    description: text('description').notNull().default(''),
-    doneAt: timestamp('done_at', { withTimezone: true }),
+    doneAt: timestamp('done_at', { withTimezone: true }).notNull().defaultNow(),
     doneBy: uuid('done_by').references(() => users.id, { onDelete: 'set null' }),
   },
-  (t) => [index('saw_steps_piece_idx').on(t.planPieceId, t.seq)],
+  (t) => [uniqueIndex('saw_steps_step_key').on(t.planId, t.pieceIndex, t.seq)],
 );
 
 export const auditEvents = pgTable(

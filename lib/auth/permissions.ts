@@ -7,6 +7,8 @@ export const PERMISSIONS = [
   'plans:read',
   'plans:write',
   'plans:release',
+  /** Mark a plan done: consumes its stock and puts its offcuts on the rack. */
+  'plans:finish',
   'sawsteps:tick',
   'stock:read',
   'stock:write',
@@ -38,7 +40,7 @@ export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
     'prices:read',
     'settings:read',
   ],
-  cutter: ['jobs:read', 'plans:read', 'sawsteps:tick', 'stock:read', 'offcuts:record', 'settings:read'],
+  cutter: ['jobs:read', 'plans:read', 'plans:finish', 'sawsteps:tick', 'stock:read', 'offcuts:record', 'settings:read'],
 };
 
 export function can(role: Role, permission: Permission): boolean {

@@ -3,15 +3,17 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { useDatabase } from '@/db/client';
 import type { DbHandle } from '@/db/open';
-import { jobs, users } from '@/db/schema';
 import { createTestDatabase } from '../support/test-db';
 import { request, TEST_SECRET, twoShops, type TestUser } from '../support/fixtures';
-import { AUTHZ_TABLE, PUBLIC_ROUTES, type Actor } from './authz-table';
+import { PUBLIC_ROUTES, type Actor, type AuthzFixtures, type AuthzRow } from './authz/types';
 
 process.env.NEXTAUTH_SECRET = TEST_SECRET;
 
 const METHODS = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;
 const API_DIR = path.resolve('app/api');
+
+// Every feature's rows, from tests/integration/authz/*.ts.
+const TABLE: AuthzRow[] = Object.values(import.meta.glob<{ rows?: AuthzRow[] }>('./authz/*.ts', { eager: true })).flatMap((m) => m.rows ?? []);
 
 /** Every route.ts under app/api as its URL pattern. */
 function routeFiles(dir = API_DIR): string[] {
@@ -26,12 +28,12 @@ type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) 
 const loadRoute = (route: string) => import(/* @vite-ignore */ path.join(API_DIR, route.slice('/api'.length), 'route.ts')) as Promise<Record<string, Handler>>;
 
 let handle: DbHandle;
-let fx: Awaited<ReturnType<typeof twoShops>>;
+let fx: AuthzFixtures;
 
 beforeAll(async () => {
   handle = await createTestDatabase();
   useDatabase(handle);
-  fx = await twoShops(handle.db);
+  fx = { ...(await twoShops(handle.db)), db: handle.db };
 });
 afterAll(() => handle.close());
 
@@ -43,39 +45,25 @@ describe('the authorization matrix', () => {
       const mod = await loadRoute(route);
       for (const m of METHODS) if (typeof mod[m] === 'function') exported.push(`${m} ${route}`);
     }
-    const rows = AUTHZ_TABLE.map((r) => `${r.method} ${r.route}`);
+    const rows = TABLE.map((r) => `${r.method} ${r.route}`);
     expect(new Set(rows).size).toBe(rows.length);
     expect([...rows].sort()).toEqual([...exported].sort());
   });
 
-  const cases = AUTHZ_TABLE.flatMap((row) =>
-    (Object.keys(row.expect) as Actor[]).map((actor) => ({ ...row, actor, status: row.expect[actor] })),
-  );
+  test('names a fixture for every route with path parameters', () => {
+    for (const row of TABLE) expect(row.route.includes('[') ? typeof row.target : 'function', `${row.method} ${row.route}`).toBe('function');
+  });
 
-  test.each(cases)('$method $route as $actor → $status', async ({ route, method, body, actor, status }) => {
+  const cases = TABLE.flatMap((row) => (Object.keys(row.expect) as Actor[]).map((actor) => ({ ...row, actor, status: row.expect[actor] })));
+
+  test.each(cases)('$method $route as $actor → $status', async ({ route, method, body, target, actor, status }) => {
     const user: TestUser | undefined = { anonymous: undefined, owner: fx.owner, estimator: fx.estimator, cutter: fx.cutter, other: fx.otherOwner }[actor];
-    // Each call gets its own target in *my* shop, so deletions and role changes never affect later rows.
-    const params: Record<string, string> = {};
-    if (route.includes('[id]')) params.id = await freshTarget(route);
-    const url = route.replace('[id]', params.id ?? '');
+    // Each call gets its own target in the first shop, so deletions and role changes never affect later rows.
+    const params = target ? await target(fx) : {};
+    const url = Object.entries(params).reduce((u, [k, v]) => u.replace(`[${k}]`, v), route);
     const payload = body && JSON.parse(JSON.stringify(body).replace('EMAIL', `p${Math.random().toString(36).slice(2)}@example.com`));
     const handler = (await loadRoute(route))[method];
     const res = await handler(await request(url, { method, body: payload, user }), { params: Promise.resolve(params) });
     expect(res.status, await res.clone().text()).toBe(status);
   });
 });
-
-async function freshTarget(route: string): Promise<string> {
-  if (route.startsWith('/api/jobs/')) {
-    const [job] = await handle.db.insert(jobs).values({ shopId: fx.mine.id, name: 'Target job' }).returning();
-    return job.id;
-  }
-  if (route.startsWith('/api/team/')) {
-    const [u] = await handle.db
-      .insert(users)
-      .values({ shopId: fx.mine.id, name: 'Target person', email: `t${Math.random().toString(36).slice(2)}@example.com`, role: 'cutter', passwordHash: 'x' })
-      .returning();
-    return u.id;
-  }
-  throw new Error(`No fixture for ${route}: add one to freshTarget.`);
-}

@@ -10,7 +10,7 @@ import path from 'node:path';
 
 export const E2E_PORT = Number(process.env.E2E_PORT ?? 3107);
 export const E2E_URL = `http://127.0.0.1:${E2E_PORT}`;
-export const E2E_DIR = path.resolve('test-results/e2e-server');
+export const E2E_DIR = path.resolve(`test-results/e2e-server-${E2E_PORT}`);
 export const E2E_DATA = path.join(E2E_DIR, 'data');
 const PID_FILE = path.join(E2E_DIR, 'server.pid');
 const SECRET_FILE = path.join(E2E_DIR, 'secret');

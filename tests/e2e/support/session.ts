@@ -14,5 +14,5 @@ export async function signIn(page: Page, role: DemoRole, password = DEMO_PASSWOR
 }
 
 export async function shot(page: Page, name: string) {
-  await page.screenshot({ path: `test-results/screens/${name}.png`, fullPage: true });
+  await page.screenshot({ path: `test-results/screens${process.env.E2E_PORT ? '-' + process.env.E2E_PORT : ''}/${name}.png`, fullPage: true });
 }

@@ -1,17 +1,15 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
 import { getJob } from '@/db/queries/jobs';
 import { listParts } from '@/db/queries/parts';
 import { getShopSettings } from '@/db/queries/shops';
-import { JobStatusBadge } from '@/components/jobs/job-status';
 import { EmptyState } from '@/components/ui/empty-state';
 import { requirePageUser } from '@/lib/auth/session';
 import { formatLength } from '@/lib/units/format-length';
 
-export const metadata: Metadata = { title: 'Job' };
+export const metadata: Metadata = { title: 'Cut list' };
 
 export default async function JobPage({ params }: { params: Promise<{ id: string }> }) {
   const user = await requirePageUser('jobs:read');
@@ -25,17 +23,6 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
 
   return (
     <div>
-      <Link href="/jobs" className="text-sm text-graphite-mute">← Jobs</Link>
-      <header className="mb-6 mt-2 flex flex-wrap items-start justify-between gap-4">
-        <div>
-          <h1 className="flex items-center gap-3">{job.name} <JobStatusBadge status={job.status} /></h1>
-          <p className="mt-1 text-sm text-graphite-mute">
-            {job.customer || 'No customer yet'} · due {job.dueDate ?? 'not set'}
-          </p>
-          {job.notes && <p className="mt-2 max-w-2xl text-sm text-graphite-soft">{job.notes}</p>}
-        </div>
-      </header>
-
       <section aria-labelledby="cut-list" className="mb-8">
         <h2 id="cut-list" className="mb-3">Cut list</h2>
         {parts.length === 0 ? (
