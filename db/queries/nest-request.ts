@@ -1,0 +1,77 @@
+import { and, eq } from 'drizzle-orm';
+import type { Db } from '../open';
+import { offcuts, stockItems } from '../schema';
+import { boardFeet } from '@/lib/lumber/board-feet';
+import type { NestRequestInput, NestSettings, NestStock } from '@/shared/schemas/nesting';
+import { getShopSettings } from './shops';
+import { listParts } from './parts';
+
+/**
+ * Stock ids in a nesting request name where the piece comes from, so a plan can be traced back to the rack:
+ * `stock:<stock item id>` (on hand), `buy:<stock item id>` (more of that size, bought), `offcut:<offcut id>`.
+ */
+export const stockRef = {
+  onHand: (id: string) => `stock:${id}`,
+  buy: (id: string) => `buy:${id}`,
+  offcut: (id: string) => `offcut:${id}`,
+  parse(ref: string): { source: 'stock' | 'buy' | 'offcut'; id: string } | null {
+    const m = /^(stock|buy|offcut):([0-9a-f-]{36})$/.exec(ref);
+    return m ? { source: m[1] as 'stock' | 'buy' | 'offcut', id: m[2] } : null;
+  },
+};
+
+const QUARTERS = /^\s*(\d+)\s*\/\s*4\s*$/;
+
+/** Sheets cost each; boards are priced per board foot on their nominal thickness (4/4 = 1″). */
+export function costEachCents(item: typeof stockItems.$inferSelect): number {
+  if (item.kind === 'sheet') return item.costCents;
+  const q = QUARTERS.exec(item.nominalThickness);
+  const thickness = q ? { quarters: Number(q[1]) } : { mm: item.thicknessMm };
+  return Math.round(item.costCents * boardFeet({ thickness, widthMm: item.widthMm, lengthMm: item.lengthMm }));
+}
+
+/** The job's parts on everything the stock room can offer now (free counts only), with the shop's defaults. */
+export async function buildNestRequest(db: Db, shopId: string, jobId: string, settings: Partial<NestSettings> = {}): Promise<NestRequestInput> {
+  const [shop, parts, items, rack] = await Promise.all([
+    getShopSettings(db, shopId),
+    listParts(db, shopId, jobId),
+    db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
+    db.select().from(offcuts).where(and(eq(offcuts.shopId, shopId), eq(offcuts.status, 'available'))),
+  ]);
+  if (!shop) throw new Error('shop not found');
+
+  const stock: NestStock[] = [];
+  for (const item of items) {
+    const base = { kind: item.kind, length: item.lengthMm, width: item.widthMm, thickness: item.thicknessMm, material: item.material, grain: item.grain, costEach: costEachCents(item), source: item.location || undefined };
+    const free = item.onHand - item.reserved;
+    if (free > 0) stock.push({ ...base, id: stockRef.onHand(item.id), count: free });
+    if (item.buyable) stock.push({ ...base, id: stockRef.buy(item.id), count: null, source: item.supplier || undefined });
+  }
+  for (const o of rack) {
+    stock.push({ id: stockRef.offcut(o.id), kind: 'offcut', length: o.lengthMm, width: o.widthMm, thickness: o.thicknessMm, material: o.material, grain: o.grain, count: 1, costEach: o.costCents, trimmed: true, source: o.location || undefined });
+  }
+
+  return {
+    parts: parts.map((p) => ({
+      id: p.id,
+      label: p.label,
+      quantity: p.quantity,
+      length: p.lengthMm,
+      width: p.widthMm,
+      thickness: p.thicknessMm,
+      material: p.material,
+      grain: p.grain,
+      jointAllowance: p.jointAllowanceMm,
+      group: p.drawerScheduleId ?? undefined,
+      notes: p.notes || undefined,
+    })),
+    stock,
+    settings: {
+      kerf: shop.kerfMm,
+      trim: shop.edgeTrimMm,
+      minOffcutLength: shop.minOffcutLengthMm,
+      minOffcutWidth: shop.minOffcutWidthMm,
+      ...settings,
+    },
+  };
+}
