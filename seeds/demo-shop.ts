@@ -1,6 +1,10 @@
 import bcrypt from 'bcryptjs';
 import type { Db } from '@/db/open';
-import { jobs, offcuts, parts, shops, stockItems, users } from '@/db/schema';
+import { eq, sql } from 'drizzle-orm';
+import { buildNestRequest, stockRef } from '@/db/queries/nest-request';
+import { jobs, offcuts, parts, plans, shops, stockItems, stockMovements, users } from '@/db/schema';
+import { optimize } from '@/lib/nesting';
+import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { inches } from '@/lib/units/length';
 
 /**
@@ -23,7 +27,8 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
   if (existing.length) return { seeded: false, shopId: existing[0].id };
 
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 10);
-  return db.transaction(async (tx) => {
+  return db
+    .transaction(async (tx) => {
     const [shop] = await tx
       .insert(shops)
       .values({
@@ -79,6 +84,44 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
       { shopId, jobId: vanity.id, label: 'Face frame stile', quantity: 2, lengthMm: inches(21), widthMm: inches(1.5), material: 'White oak', thicknessMm: inches(13 / 16), grain: 'along-length', sort: 2 },
       { shopId, jobId: vanity.id, label: 'Face frame rail', quantity: 3, lengthMm: inches(33), widthMm: inches(1.5), material: 'White oak', thicknessMm: inches(13 / 16), grain: 'along-length', sort: 3 },
     ]);
-    return { seeded: true, shopId };
+    return { seeded: true, shopId, kitchenJobId: kitchen.id, estimatorId: estimator };
+  }).then(async (result) => {
+    if (result.seeded) await seedReleasedPlan(db, result.shopId, result.kitchenJobId, result.estimatorId);
+    return { seeded: true, shopId: result.shopId };
+  });
+}
+
+/**
+ * The kitchen's carcass plan, nested by the real engine (no time budget, so the same plan every time) and
+ * released: its sheets and offcuts are reserved so the shop floor has work to show.
+ */
+async function seedReleasedPlan(db: Db, shopId: string, jobId: string, userId: string) {
+  const request = nestRequestSchema.parse(await buildNestRequest(db, shopId, jobId, { timeBudgetMs: 0 }));
+  const plan = await optimize(request);
+  await db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(plans)
+      .values({
+        shopId,
+        jobId,
+        name: 'Carcasses and backs',
+        status: 'released',
+        request,
+        document: plan,
+        yieldRatio: plan.totals?.yield ?? null,
+        costCents: Math.round(plan.totals?.cost ?? 0),
+        createdBy: userId,
+      })
+      .returning({ id: plans.id });
+    for (const line of plan.stockToPull) {
+      const ref = stockRef.parse(line.stockId);
+      if (ref?.source === 'stock') {
+        await tx.update(stockItems).set({ reserved: sql`${stockItems.reserved} + ${line.count}` }).where(eq(stockItems.id, ref.id));
+        await tx.insert(stockMovements).values({ shopId, kind: 'reserved', stockItemId: ref.id, quantity: line.count, planId: row.id, userId, reason: 'Released plan' });
+      } else if (ref?.source === 'offcut') {
+        await tx.update(offcuts).set({ status: 'reserved' }).where(eq(offcuts.id, ref.id));
+        await tx.insert(stockMovements).values({ shopId, kind: 'reserved', offcutId: ref.id, quantity: 1, planId: row.id, userId, reason: 'Released plan' });
+      }
+    }
   });
 }

@@ -1,7 +1,9 @@
 import bcrypt from 'bcryptjs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
-import { jobs, shops, stockItems, users } from '@/db/schema';
+import { jobs, plans, shops, stockItems, users } from '@/db/schema';
+import { readPlan, validatePlan } from '@/lib/nesting';
+import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoShop } from '@/seeds/demo-shop';
 import { createTestDatabase } from '../support/test-db';
 
@@ -21,6 +23,18 @@ describe('the demo shop', () => {
     expect(people.map((p) => p.email).sort()).toEqual(DEMO_PEOPLE.map((p) => p.email).sort());
     expect((await handle.db.select().from(jobs)).length).toBeGreaterThan(0);
     expect((await handle.db.select().from(stockItems)).length).toBeGreaterThan(0);
+  });
+
+  test('has a released plan that passes validatePlan, with exactly its stock reserved', async () => {
+    const [plan] = await handle.db.select().from(plans);
+    expect(plan.status).toBe('released');
+    const request = nestRequestSchema.parse(plan.request);
+    const document = readPlan(plan.document);
+    expect(validatePlan(request, document)).toEqual([]);
+    const reservedSheets = (await handle.db.select().from(stockItems)).reduce((n, s) => n + s.reserved, 0);
+    const pulledSheets = document.stockToPull.filter((l) => l.stockId.startsWith('stock:')).reduce((n, l) => n + l.count, 0);
+    expect(reservedSheets).toBe(pulledSheets);
+    expect(pulledSheets).toBeGreaterThan(0);
   });
 
   test('is seeded only into an empty database', async () => {
