@@ -19,7 +19,7 @@ export interface PackLimits {
 
 /** Yield to the event loop at least this often so a worker can hear a cancel message. */
 const YIELD_EVERY_MS = 25;
-const PROGRESS_EVERY_MS = 200;
+const PROGRESS_EVERY_MS = 150;
 /**
  * Parts × bin types × combinations of the deterministic constructive phase: all combinations up to ~20 parts,
  * one from ~3,000 parts (the rest run, time permitting, in the improvement phase).
