@@ -23,6 +23,12 @@ export const plans = pgTable(
     document: jsonb('document').notNull(),
     yieldRatio: doublePrecision('yield_ratio'),
     costCents: integer('cost_cents'),
+    /** Recorded when the plan is done: share of the stock area that was neither part nor kept offcut. */
+    wasteRatio: doublePrecision('waste_ratio'),
+    releasedAt: timestamp('released_at', { withTimezone: true }),
+    releasedBy: uuid('released_by').references(() => users.id, { onDelete: 'set null' }),
+    finishedAt: timestamp('finished_at', { withTimezone: true }),
+    finishedBy: uuid('finished_by').references(() => users.id, { onDelete: 'set null' }),
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),

@@ -63,7 +63,11 @@ export const offcuts = pgTable(
     costCents: integer('cost_cents').notNull().default(0),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('offcuts_shop_idx').on(t.shopId, t.status)],
+  (t) => [
+    index('offcuts_shop_idx').on(t.shopId, t.status),
+    check('offcut_sizes_positive', sql`${t.lengthMm} > 0 and ${t.widthMm} > 0 and ${t.thicknessMm} > 0`),
+    check('offcut_cost_nonnegative', sql`${t.costCents} >= 0`),
+  ],
 );
 
 export const stockMovements = pgTable(
