@@ -4,7 +4,7 @@
  * maxrects-packer (general-purpose, free placement) on the same instances, with how many of its bins cannot be
  * separated by straight through-cuts.
  */
-import { lowerBound } from '@/lib/nesting/bounds';
+import { dellAmicoMartelloVigo, lowerBound, martelloVigoL2 } from '@/lib/nesting/bounds';
 import { maxRectsLayout } from '@/lib/nesting/bounds/maxrects-reference';
 import { findGuillotineTree } from '@/lib/nesting/guillotine';
 import type { BinPackingInstance } from '@/lib/nesting/instances';
@@ -18,7 +18,10 @@ export interface InstanceRun {
   name: string;
   cls: number;
   mode: Mode;
+  /** `lowerBound`: the strongest valid bound we have. */
   lowerBound: number;
+  /** The published bound: Martello & Vigo L2 (fixed) or Dell'Amico, Martello & Vigo (rotation). */
+  publishedBound: number;
   bins: number;
   ms: number;
   /** Problems `checkPackResult` found in our result (should be none). */
@@ -32,6 +35,7 @@ export interface ClassSummary {
   instances: number;
   bins: number;
   lowerBound: number;
+  publishedBound: number;
   solvedToBound: number;
   meanMs: number;
   maxMs: number;
@@ -50,11 +54,24 @@ export async function runInstance(inst: BinPackingInstance, mode: Mode, budgetMs
   const ms = performance.now() - t0;
   const problems = checkPackResult(items, bins, options, result);
   if (result.unplaced.length > 0) problems.push(`${result.unplaced.length} item(s) unplaced`);
+  // An independent look at our own layouts with the plan layer's checker, beside the packer's own tree.
+  const whole = { x: 0, y: 0, w: inst.bin.w, h: inst.bin.h };
+  result.bins.forEach((b, k) => {
+    if (findGuillotineTree(whole, b.items.map((p) => p.rect), 0) === null) problems.push(`bin ${k} is not guillotine-separable`);
+  });
 
-  const run: InstanceRun = { name: inst.name, cls: inst.cls ?? 0, mode, lowerBound: lowerBound(inst.items, inst.bin, rotation), bins: result.bins.length, ms, problems };
+  const run: InstanceRun = {
+    name: inst.name,
+    cls: inst.cls ?? 0,
+    mode,
+    lowerBound: lowerBound(inst.items, inst.bin, rotation),
+    publishedBound: rotation ? dellAmicoMartelloVigo(inst.items, inst.bin) : martelloVigoL2(inst.items, inst.bin),
+    bins: result.bins.length,
+    ms,
+    problems,
+  };
   if (withMaxrects) {
     const layout = maxRectsLayout(inst.items, inst.bin, rotation);
-    const whole = { x: 0, y: 0, w: inst.bin.w, h: inst.bin.h };
     const nonGuillotine = layout.filter((b) => findGuillotineTree(whole, b.rects, 0) === null).length;
     run.maxrects = { bins: layout.length, nonGuillotine };
   }
@@ -76,6 +93,7 @@ export function summarise(runs: InstanceRun[]): ClassSummary[] {
       instances: rs.length,
       bins: sum((r) => r.bins),
       lowerBound: sum((r) => r.lowerBound),
+      publishedBound: sum((r) => r.publishedBound),
       solvedToBound: rs.filter((r) => r.bins === r.lowerBound).length,
       meanMs: sum((r) => r.ms) / rs.length,
       maxMs: Math.max(...rs.map((r) => r.ms)),
