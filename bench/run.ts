@@ -146,7 +146,8 @@ async function main() {
 }
 
 main().catch((err: unknown) => {
-  const message = err instanceof ZodError ? err.issues.map((i) => `${i.path.join('.') || 'flags'}: ${i.message}`).join('\n') : String(err instanceof Error ? err.message : err);
+  const flag = (key: PropertyKey | undefined) => (key === undefined ? 'flags' : `--${String(key).replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`);
+  const message = err instanceof ZodError ? err.issues.map((i) => `${flag(i.path[0])}: ${i.message}`).join('\n') : String(err instanceof Error ? err.message : err);
   process.stderr.write(`bench: ${message}\n`);
   process.exit(1);
 });
