@@ -1,0 +1,46 @@
+import { describe, expect, test } from 'vitest';
+import { inches } from '@/lib/units/length';
+import { stockMatchWarning, type StockOffer } from './stock-match';
+import { cutListTotals } from './totals';
+
+const OFFERS: StockOffer[] = [
+  { material: 'White oak', kind: 'board', thicknessMm: inches(13 / 16), nominal: '4/4' },
+  { material: 'Maple ply', kind: 'sheet', thicknessMm: inches(23 / 32), nominal: '3/4"' },
+  { material: 'Maple ply', kind: 'offcut', thicknessMm: 6, nominal: '' },
+];
+const UNITS = { system: 'imperial', precision: 16, feet: false } as const;
+
+describe('cut list totals', () => {
+  test('a 1″ × 12″ × 12″ solid piece is one board foot (AHEC, "Measurement": 144 in³)', () => {
+    const t = cutListTotals([{ quantity: 1, lengthMm: inches(12), widthMm: inches(12), thicknessMm: inches(1), material: 'white oak' }], OFFERS);
+    expect(t.boardFeet).toBeCloseTo(1, 12);
+    expect(t.solidPieces).toBe(1);
+  });
+
+  test('pieces and area count every quantity; sheet parts add no board feet', () => {
+    const t = cutListTotals(
+      [
+        { quantity: 4, lengthMm: 1000, widthMm: 500, thicknessMm: 18, material: 'Maple ply' },
+        { quantity: 2, lengthMm: inches(24), widthMm: inches(6), thicknessMm: inches(1), material: 'White oak' },
+      ],
+      OFFERS,
+    );
+    expect(t).toMatchObject({ pieces: 6, rows: 2, solidPieces: 2 });
+    expect(t.areaMm2).toBeCloseTo(4 * 1000 * 500 + 2 * inches(24) * inches(6), 6);
+    expect(t.boardFeet).toBeCloseTo(2 * (1 * 6 * 2) / 12, 12); // T(in) × W(in) × L(ft) / 12 per piece
+  });
+});
+
+describe('matching a part to the stock room', () => {
+  test.each([
+    ['Maple ply', inches(23 / 32), null],
+    ['maple PLY', inches(3 / 4) - 0.4, null],
+    ['Maple ply', 6, null],
+    ['Maple ply', 12, 'The stock room has Maple ply in'],
+    ['Walnut', 19, 'Nothing in the stock room is “Walnut”'],
+  ] as const)('%s at %f mm → %s (thickness within 0.5 mm: common practice, no source)', (material, thicknessMm, warning) => {
+    const result = stockMatchWarning({ material, thicknessMm }, OFFERS, UNITS);
+    if (warning === null) expect(result).toBeNull();
+    else expect(result).toContain(warning);
+  });
+});

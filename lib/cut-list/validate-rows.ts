@@ -1,0 +1,104 @@
+import { parseLength, type LengthUnit } from '@/lib/units/parse-length';
+import { CUT_LIST_FIELD_LABELS, type CutListField, type CutListUpload } from '@/shared/schemas/cut-list-upload';
+import { partInputSchema, type PartInput } from '@/shared/schemas/part';
+import type { GrainRule } from '@/shared/schemas/drawer-schedule';
+import { UPLOAD_LIMITS } from './limits';
+
+export interface RowProblem {
+  field: CutListField | 'row';
+  message: string;
+}
+
+export type UploadRowResult = { line: number; ok: true; part: PartInput } | { line: number; ok: false; problems: RowProblem[] };
+
+export interface UploadReport {
+  rows: UploadRowResult[];
+  valid: { line: number; part: PartInput }[];
+  invalidCount: number;
+}
+
+/** Thinner than any sheet or board a shop cuts; a smaller value is nearly always inches read as mm. */
+export const MIN_PART_THICKNESS_MM = 1;
+
+const GRAIN_WORDS: Record<string, GrainRule> = {
+  '': 'along-length', along: 'along-length', 'along length': 'along-length', 'along-length': 'along-length', length: 'along-length',
+  lengthwise: 'along-length', yes: 'along-length', y: 'along-length', true: 'along-length', '1': 'along-length', grain: 'along-length',
+  l: 'along-length', fixed: 'along-length',
+  any: 'any', either: 'any', 'either way': 'any', none: 'any', no: 'any', n: 'any', false: 'any', '0': 'any', free: 'any', rotate: 'any', 'no grain': 'any',
+};
+
+// Control characters other than tab, newline and carriage return never belong in a cut list cell.
+const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
+
+/** Every row of an upload checked on its own: a part, or every reason it cannot be one. */
+export function validateUploadRows(upload: Pick<CutListUpload, 'columns' | 'rows' | 'unit'>): UploadReport {
+  const rows = upload.rows.map(({ line, cells }) => validateRow(line, upload.columns, cells, upload.unit));
+  const valid = rows.flatMap((r) => (r.ok ? [{ line: r.line, part: r.part }] : []));
+  return { rows, valid, invalidCount: rows.length - valid.length };
+}
+
+function validateRow(line: number, columns: readonly CutListField[], cells: readonly string[], unit: LengthUnit): UploadRowResult {
+  const problems: RowProblem[] = [];
+  const raw = {} as Partial<Record<CutListField, string>>;
+  columns.forEach((field, i) => {
+    const value = (cells[i] ?? '').trim();
+    const label = CUT_LIST_FIELD_LABELS[field];
+    if (value.length > UPLOAD_LIMITS.maxCellLength) problems.push({ field, message: `${label} is ${value.length} characters long; the limit is ${UPLOAD_LIMITS.maxCellLength}.` });
+    else if (CONTROL.test(value)) problems.push({ field, message: `${label} contains control characters.` });
+    else raw[field] = value;
+  });
+  const bad = new Set(problems.map((p) => p.field));
+  const need = (field: CutListField): string | undefined => {
+    if (bad.has(field)) return undefined;
+    const v = raw[field] ?? '';
+    if (!v) problems.push({ field, message: `${CUT_LIST_FIELD_LABELS[field]} is empty.` });
+    return v || undefined;
+  };
+  const length = (field: CutListField, text: string | undefined): number | undefined => {
+    if (text === undefined) return undefined;
+    const parsed = parseLength(text, { unit });
+    if (parsed.ok) return parsed.mm;
+    problems.push({ field, message: `${CUT_LIST_FIELD_LABELS[field]} “${text}”: ${parsed.error}` });
+    return undefined;
+  };
+
+  const label = need('label');
+  const quantityText = need('quantity');
+  let quantity: number | undefined;
+  if (quantityText !== undefined) {
+    if (/^\d+$/.test(quantityText)) quantity = Number(quantityText);
+    else problems.push({ field: 'quantity', message: `Quantity “${quantityText}” is not a whole number.` });
+  }
+  const lengthMm = length('length', need('length'));
+  const widthMm = length('width', need('width'));
+  const thicknessMm = length('thickness', need('thickness'));
+  if (thicknessMm !== undefined && thicknessMm < MIN_PART_THICKNESS_MM)
+    problems.push({ field: 'thickness', message: `Thickness “${raw.thickness}” reads as ${thicknessMm} mm — thinner than any stock. If it is inches, choose inches or write ${raw.thickness}″.` });
+  const material = need('material');
+
+  let grain: GrainRule = 'along-length';
+  if (!bad.has('grain') && raw.grain !== undefined) {
+    const word = GRAIN_WORDS[raw.grain.toLowerCase()];
+    if (word) grain = word;
+    else problems.push({ field: 'grain', message: `Grain “${raw.grain}” is not understood: write “along” (grain runs along the length) or “any”.` });
+  }
+  const jointAllowanceMm = raw.jointAllowance ? length('jointAllowance', raw.jointAllowance) : 0;
+  if (jointAllowanceMm !== undefined && lengthMm !== undefined && jointAllowanceMm >= lengthMm)
+    problems.push({ field: 'jointAllowance', message: 'Joint allowance is part of the length, so it must be shorter than the length.' });
+
+  if (problems.length) return { line, ok: false, problems };
+
+  // The same schema the editor and API use decides the rest (name length, quantity range, size range).
+  const parsed = partInputSchema.safeParse({ label, quantity, lengthMm, widthMm, thicknessMm, material, grain, jointAllowanceMm, notes: raw.notes ?? '' });
+  if (parsed.success) return { line, ok: true, part: parsed.data };
+  return {
+    line,
+    ok: false,
+    problems: parsed.error.issues.map((issue) => ({ field: schemaFieldToColumn(String(issue.path[0] ?? '')), message: issue.message })),
+  };
+}
+
+const COLUMN_OF: Record<string, CutListField> = {
+  label: 'label', quantity: 'quantity', lengthMm: 'length', widthMm: 'width', thicknessMm: 'thickness', material: 'material', grain: 'grain', jointAllowanceMm: 'jointAllowance', notes: 'notes',
+};
+const schemaFieldToColumn = (key: string): CutListField | 'row' => COLUMN_OF[key] ?? 'row';

@@ -1,0 +1,54 @@
+import { z } from 'zod';
+import { MAX_LENGTH_MM } from '@/lib/units/parse-length';
+import { grainRuleSchema } from './drawer-schedule';
+
+/** One cut-list row. Lengths are mm (the client parses what a person typed with `lib/units` first). */
+
+export const MAX_PART_QUANTITY = 10_000;
+export const MAX_PART_LABEL = 80;
+export const MAX_PART_MATERIAL = 200;
+export const MAX_PART_NOTES = 500;
+
+const sizeMm = (what: string) =>
+  z
+    .number({ error: `${what} must be a length.` })
+    .finite(`${what} must be a length.`)
+    .positive(`${what} must be more than 0.`)
+    .max(MAX_LENGTH_MM, `${what} above ${MAX_LENGTH_MM / 1000} m looks like a slipped unit.`);
+
+export const partInputSchema = z.object({
+  label: z.string().trim().min(1, 'Give the part a name.').max(MAX_PART_LABEL, `Keep the name under ${MAX_PART_LABEL} characters.`),
+  quantity: z
+    .int({ error: 'Quantity must be a whole number.' })
+    .min(1, 'Quantity must be at least 1.')
+    .max(MAX_PART_QUANTITY, `Quantity above ${MAX_PART_QUANTITY.toLocaleString('en-US')} looks like a typo.`),
+  /** Along the grain when `grain` is `along-length`; the joint allowance is part of it. */
+  lengthMm: sizeMm('Length'),
+  widthMm: sizeMm('Width'),
+  thicknessMm: sizeMm('Thickness'),
+  material: z.string().trim().min(1, 'Pick or type a material.').max(MAX_PART_MATERIAL, `Keep the material under ${MAX_PART_MATERIAL} characters.`),
+  grain: grainRuleSchema.default('along-length'),
+  /** Extra length the part's joints need; informational, already inside `lengthMm`. */
+  jointAllowanceMm: z.number().finite().min(0, 'Joint allowance cannot be negative.').max(MAX_LENGTH_MM).default(0),
+  notes: z.string().trim().max(MAX_PART_NOTES, `Keep notes under ${MAX_PART_NOTES} characters.`).default(''),
+});
+export type PartInput = z.output<typeof partInputSchema>;
+
+export const partPatchSchema = partInputSchema.partial();
+export type PartPatch = z.output<typeof partPatchSchema>;
+
+/** Fields a drawer schedule owns on its rows: change the schedule, not the row. */
+export const SCHEDULE_OWNED_FIELDS = ['label', 'quantity', 'lengthMm', 'widthMm', 'thicknessMm', 'material', 'grain', 'jointAllowanceMm'] as const;
+
+export const partParams = z.object({ id: z.uuid(), partId: z.uuid() });
+
+/** A cut-list row as the API returns it. */
+export interface Part extends PartInput {
+  id: string;
+  jobId: string;
+  drawerScheduleId: string | null;
+  /** For drawer-schedule rows: front, back, side, bottom, applied-front. */
+  role: string | null;
+  machining: string[];
+  sort: number;
+}
