@@ -1,0 +1,96 @@
+/**
+ * Re-nesting the unlocked parts around the locked ones. Chosen approach: each stock piece that holds locked parts
+ * keeps them where they are; the free rectangles left between them (the leftovers of a guillotine tree of the
+ * locked parts alone, so every one is freed by straight through-cuts) become offcut-like stock with sawn edges.
+ * Every unlocked part (and every unplaced one) is then nested by the engine onto those free rectangles first and the
+ * rest of the request's stock (on-hand counts less the pieces kept). The result is mapped back: placements on a free
+ * rectangle are shifted onto their piece. `validatePlan` remains the judge of the outcome.
+ */
+import { findGuillotineTree, STRIP_STAGES, treeLeaves } from '@/lib/nesting/guillotine';
+import { usableRect } from '@/lib/nesting/stock-rules';
+import type { NestRequest, NestStock, Plan, Unplaced } from '@/shared/schemas/nesting';
+import { placementKey, type BenchDoc, type BenchPiece, type BenchPlacement } from '@/lib/layout-bench/document';
+
+const FREE_PREFIX = 'free:';
+
+export interface RenestJob {
+  /** The request to hand the engine (worker). */
+  request: NestRequest;
+  /** The document with the engine's plan for the unlocked parts merged around the locked ones. */
+  merge(plan: Plan): BenchDoc;
+}
+
+export function prepareRenest(request: NestRequest, doc: BenchDoc): RenestJob {
+  const { settings } = request;
+  const all = Object.values(doc.placements);
+  const locked = all.filter((p) => p.locked);
+  const keptPieces = [...new Set(locked.map((p) => p.piece))].sort((a, b) => a - b);
+
+  // Free rectangles on each kept piece.
+  const freeStock: NestStock[] = [];
+  const freeAt = new Map<string, { piece: number; x: number; y: number }>();
+  keptPieces.forEach((pieceIndex, k) => {
+    const piece = doc.pieces[pieceIndex];
+    const mine = locked.filter((p) => p.piece === pieceIndex);
+    const strips = settings.style === 'strips';
+    const tree =
+      findGuillotineTree(usableRect(piece, piece.trim), mine, settings.kerf, strips ? STRIP_STAGES : Infinity, strips ? 'y' : undefined) ??
+      findGuillotineTree(usableRect(piece, piece.trim), mine, settings.kerf);
+    if (!tree) return; // locked parts that cannot be cut apart: nothing more goes on this piece
+    treeLeaves(tree).forEach((leaf, j) => {
+      if (leaf.type !== 'leftover' || leaf.rect.w <= 0 || leaf.rect.h <= 0) return;
+      const id = `${FREE_PREFIX}${k}:${j}`;
+      freeAt.set(id, { piece: pieceIndex, x: leaf.rect.x, y: leaf.rect.y });
+      freeStock.push({ id, kind: 'offcut', length: leaf.rect.w, width: leaf.rect.h, thickness: piece.thickness, material: piece.material, grain: piece.grain, count: 1, costEach: 0, trimmed: true });
+    });
+  });
+
+  // The request's stock, less the pieces kept.
+  const keptCount = new Map<string, number>();
+  for (const i of keptPieces) keptCount.set(doc.pieces[i].stockId, (keptCount.get(doc.pieces[i].stockId) ?? 0) + 1);
+  const stock = request.stock
+    .map((s) => (s.count === null ? s : { ...s, count: s.count - (keptCount.get(s.id) ?? 0) }))
+    .filter((s) => s.count === null || s.count > 0);
+
+  // Unlocked and unplaced instances, renumbered 1..n per part; `original` maps back.
+  const moving = new Map<string, number[]>();
+  const add = (partId: string, instance: number) => moving.set(partId, [...(moving.get(partId) ?? []), instance]);
+  for (const p of all) if (!p.locked) add(p.partId, p.instance);
+  for (const u of doc.unplaced) add(u.partId, u.instance);
+  for (const list of moving.values()) list.sort((a, b) => a - b);
+  const parts = request.parts.filter((p) => moving.has(p.id)).map((p) => ({ ...p, quantity: moving.get(p.id)!.length }));
+  const original = (partId: string, instance: number) => moving.get(partId)![instance - 1];
+
+  const sub: NestRequest = { parts, stock: [...freeStock, ...stock], settings: { ...settings, preferOffcuts: true } };
+
+  return {
+    request: sub,
+    merge(plan) {
+      const pieces: BenchPiece[] = keptPieces.map((i) => doc.pieces[i]);
+      const newIndex = new Map(keptPieces.map((old, i) => [old, i]));
+      const placements: Record<string, BenchPlacement> = {};
+      for (const p of locked) placements[placementKey(p)] = { ...p, piece: newIndex.get(p.piece)! };
+      for (const planPiece of plan.pieces) {
+        const free = freeAt.get(planPiece.stockId);
+        let target: number;
+        let dx = 0;
+        let dy = 0;
+        if (free) {
+          target = newIndex.get(free.piece)!;
+          dx = free.x;
+          dy = free.y;
+        } else {
+          const s = request.stock.find((st) => st.id === planPiece.stockId);
+          target = pieces.length;
+          pieces.push({ stockId: planPiece.stockId, kind: planPiece.kind, length: planPiece.length, width: planPiece.width, thickness: planPiece.thickness, material: planPiece.material, trim: planPiece.trim, grain: s?.grain ?? 'along-length' });
+        }
+        for (const pl of planPiece.placements) {
+          const instance = original(pl.partId, pl.instance);
+          placements[placementKey({ partId: pl.partId, instance })] = { partId: pl.partId, instance, label: pl.label, piece: target, x: pl.x + dx, y: pl.y + dy, w: pl.w, h: pl.h, rotated: pl.rotated, locked: false };
+        }
+      }
+      const unplaced: Unplaced[] = plan.unplaced.map((u) => ({ ...u, instance: original(u.partId, u.instance) }));
+      return { pieces, placements, unplaced };
+    },
+  };
+}
