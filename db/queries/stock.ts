@@ -1,15 +1,198 @@
-import { and, asc, eq, ne } from 'drizzle-orm';
+import { and, asc, desc, eq, ilike, inArray, ne, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
-import { offcuts, stockItems } from '../schema';
+import { offcuts, plans, stockItems, stockMovements, users } from '../schema';
+import type { StockFilter, StockItemValues } from '@/shared/schemas/stock';
+import type { stockItemPatchSchema, recordOffcutSchema } from '@/shared/schemas/stock';
+import type { z } from 'zod';
+import { isLowStock } from '@/lib/stock/low-stock';
+import { costEachCents } from './nest-request';
+import { recordAudit } from './audit';
+import { HttpError } from '@/lib/api/errors';
 
-export async function listStock(db: Db, shopId: string) {
-  return db.select().from(stockItems).where(eq(stockItems.shopId, shopId)).orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm));
+/** A stock-room request that cannot be done as asked (409), with a message safe to show. */
+export class StockConflict extends HttpError {
+  constructor(message: string) {
+    super(409, message);
+  }
 }
 
-export async function listOffcuts(db: Db, shopId: string) {
-  return db
+const like = (v: string) => `%${v.replace(/[%_\\]/g, (c) => `\\${c}`)}%`;
+
+export type StockItemRow = typeof stockItems.$inferSelect & { free: number; low: boolean; valueCents: number };
+
+export async function listStock(db: Db, shopId: string, filter: StockFilter = {}): Promise<StockItemRow[]> {
+  const where: SQL[] = [eq(stockItems.shopId, shopId)];
+  if (filter.kind) where.push(eq(stockItems.kind, filter.kind));
+  if (filter.material) where.push(ilike(stockItems.material, like(filter.material)));
+  if (filter.thickness) where.push(ilike(stockItems.nominalThickness, like(filter.thickness)));
+  if (filter.location) where.push(ilike(stockItems.location, like(filter.location)));
+  const rows = await db
     .select()
+    .from(stockItems)
+    .where(and(...where))
+    .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm), asc(stockItems.lengthMm));
+  return rows.map((r) => ({ ...r, free: r.onHand - r.reserved, low: isLowStock(r), valueCents: r.onHand * costEachCents(r) }));
+}
+
+/** The rack. Used offcuts are history (shown only when asked for by status). */
+export async function listOffcuts(db: Db, shopId: string, filter: StockFilter = {}) {
+  const where: SQL[] = [eq(offcuts.shopId, shopId)];
+  where.push(filter.status ? eq(offcuts.status, filter.status) : ne(offcuts.status, 'used'));
+  if (!filter.status) where.push(ne(offcuts.status, 'scrapped'));
+  if (filter.material) where.push(ilike(offcuts.material, like(filter.material)));
+  if (filter.location) where.push(ilike(offcuts.location, like(filter.location)));
+  return db
+    .select({ offcut: offcuts, planName: plans.name })
     .from(offcuts)
-    .where(and(eq(offcuts.shopId, shopId), ne(offcuts.status, 'used')))
-    .orderBy(asc(offcuts.material), asc(offcuts.thicknessMm));
+    .leftJoin(plans, eq(plans.id, offcuts.sourcePlanId))
+    .where(and(...where))
+    .orderBy(asc(offcuts.material), asc(offcuts.thicknessMm), desc(offcuts.lengthMm))
+    .then((rows) => rows.map((r) => ({ ...r.offcut, planName: r.planName })));
+}
+
+export async function getStockItem(db: Db, shopId: string, id: string) {
+  const [row] = await db.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id)));
+  return row ?? null;
+}
+
+/** A new size on the rack; its opening count is a receipt in the ledger. */
+export async function createStockItem(db: Db, shopId: string, userId: string, values: StockItemValues) {
+  return db.transaction(async (tx) => {
+    const [item] = await tx.insert(stockItems).values({ ...values, shopId }).returning();
+    if (item.onHand > 0) await tx.insert(stockMovements).values({ shopId, kind: 'received', stockItemId: item.id, quantity: item.onHand, userId, reason: 'Opening count' });
+    await recordAudit(tx, { shopId, userId, action: 'create', entity: 'stock-item', entityId: item.id });
+    return item;
+  });
+}
+
+export async function updateStockItem(db: Db, shopId: string, userId: string, id: string, patch: z.infer<typeof stockItemPatchSchema>) {
+  return db.transaction(async (tx) => {
+    const [item] = await tx.update(stockItems).set(patch).where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id))).returning();
+    if (item) await recordAudit(tx, { shopId, userId, action: 'update', entity: 'stock-item', entityId: id, data: patch });
+    return item ?? null;
+  });
+}
+
+export async function receiveStock(db: Db, shopId: string, userId: string, id: string, { quantity, reason }: { quantity: number; reason: string }) {
+  return db.transaction(async (tx) => {
+    const [item] = await tx
+      .update(stockItems)
+      .set({ onHand: sql`${stockItems.onHand} + ${quantity}` })
+      .where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id)))
+      .returning();
+    if (!item) return null;
+    await tx.insert(stockMovements).values({ shopId, kind: 'received', stockItemId: id, quantity, userId, reason: reason || 'Received' });
+    return item;
+  });
+}
+
+/**
+ * A counted figure replaces the book count. The row is locked while the difference is worked out, and the
+ * database refuses a count below what released plans hold.
+ */
+export async function adjustStock(db: Db, shopId: string, userId: string, id: string, { count, reason }: { count: number; reason: string }) {
+  return db.transaction(async (tx) => {
+    const [current] = await tx.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id))).for('update');
+    if (!current) return null;
+    if (count < current.reserved) {
+      throw new StockConflict(`${current.reserved} of these are reserved by released plans; a count of ${count} would leave them short. Cancel or re-nest those plans first.`);
+    }
+    const delta = count - current.onHand;
+    if (delta === 0) return current;
+    const [item] = await tx.update(stockItems).set({ onHand: count }).where(eq(stockItems.id, id)).returning();
+    await tx.insert(stockMovements).values({ shopId, kind: 'adjusted', stockItemId: id, quantity: delta, userId, reason });
+    return item;
+  });
+}
+
+export async function recordOffcut(db: Db, shopId: string, userId: string, values: z.infer<typeof recordOffcutSchema>) {
+  return db.transaction(async (tx) => {
+    const [o] = await tx.insert(offcuts).values({ ...values, shopId, status: 'available' }).returning();
+    await tx.insert(stockMovements).values({ shopId, kind: 'offcut-created', offcutId: o.id, quantity: 1, userId, reason: 'Recorded at the saw' });
+    return o;
+  });
+}
+
+/** Only an offcut on the rack (not one a released plan holds) can be scrapped. */
+export async function scrapOffcut(db: Db, shopId: string, userId: string, id: string, reason: string) {
+  return db.transaction(async (tx) => {
+    const [o] = await tx
+      .update(offcuts)
+      .set({ status: 'scrapped' })
+      .where(and(eq(offcuts.shopId, shopId), eq(offcuts.id, id), eq(offcuts.status, 'available')))
+      .returning();
+    if (!o) {
+      const [existing] = await tx.select({ status: offcuts.status }).from(offcuts).where(and(eq(offcuts.shopId, shopId), eq(offcuts.id, id)));
+      if (!existing) return null;
+      throw new StockConflict(`This offcut is ${existing.status}; only an available offcut can be scrapped.`);
+    }
+    await tx.insert(stockMovements).values({ shopId, kind: 'scrapped', offcutId: id, quantity: -1, userId, reason: reason || 'Scrapped' });
+    return o;
+  });
+}
+
+/** Imported rows are new sizes; all in one transaction, each with its opening receipt. */
+export async function importStock(db: Db, shopId: string, userId: string, items: StockItemValues[]) {
+  if (!items.length) return [];
+  return db.transaction(async (tx) => {
+    const rows = await tx.insert(stockItems).values(items.map((v) => ({ ...v, shopId }))).returning({ id: stockItems.id, onHand: stockItems.onHand });
+    const receipts = rows.filter((r) => r.onHand > 0).map((r) => ({ shopId, kind: 'received' as const, stockItemId: r.id, quantity: r.onHand, userId, reason: 'Imported from CSV' }));
+    if (receipts.length) await tx.insert(stockMovements).values(receipts);
+    await recordAudit(tx, { shopId, userId, action: 'import', entity: 'stock-item', data: { count: rows.length } });
+    return rows;
+  });
+}
+
+export async function listMovements(db: Db, shopId: string, { stockItemId, offcutId, limit = 200 }: { stockItemId?: string; offcutId?: string; limit?: number } = {}) {
+  const where: SQL[] = [eq(stockMovements.shopId, shopId)];
+  if (stockItemId) where.push(eq(stockMovements.stockItemId, stockItemId));
+  if (offcutId) where.push(eq(stockMovements.offcutId, offcutId));
+  return db
+    .select({
+      id: stockMovements.id,
+      kind: stockMovements.kind,
+      quantity: stockMovements.quantity,
+      reason: stockMovements.reason,
+      createdAt: stockMovements.createdAt,
+      stockItemId: stockMovements.stockItemId,
+      offcutId: stockMovements.offcutId,
+      planId: stockMovements.planId,
+      who: users.name,
+      item: sql<string | null>`coalesce(${stockItems.material} || ' ' || ${stockItems.nominalThickness}, ${offcuts.material} || ' offcut')`,
+    })
+    .from(stockMovements)
+    .leftJoin(users, eq(users.id, stockMovements.userId))
+    .leftJoin(stockItems, eq(stockItems.id, stockMovements.stockItemId))
+    .leftJoin(offcuts, eq(offcuts.id, stockMovements.offcutId))
+    .where(and(...where))
+    .orderBy(desc(stockMovements.createdAt), desc(stockMovements.id))
+    .limit(limit);
+}
+
+/**
+ * The ledger read back as counts: on hand = receipts + adjustments + consumption (+ scrapping), reserved =
+ * reservations − releases. Equal to the stored counts for every item when nothing bypassed the ledger.
+ */
+export async function ledgerCounts(db: Db, shopId: string) {
+  const rows = await db
+    .select({
+      stockItemId: stockMovements.stockItemId,
+      offcutId: stockMovements.offcutId,
+      onHand: sql<number>`coalesce(sum(${stockMovements.quantity}) filter (where ${stockMovements.kind} in ('received', 'adjusted', 'consumed', 'scrapped', 'offcut-created')), 0)`.mapWith(Number),
+      reserved: sql<number>`coalesce(sum(${stockMovements.quantity}) filter (where ${stockMovements.kind} in ('reserved', 'released')), 0)`.mapWith(Number),
+    })
+    .from(stockMovements)
+    .where(eq(stockMovements.shopId, shopId))
+    .groupBy(stockMovements.stockItemId, stockMovements.offcutId);
+  return rows;
+}
+
+/** Rack value at cost: sheets each, boards by their board feet, offcuts at their carried share. */
+export async function stockValue(db: Db, shopId: string) {
+  const [items, rack] = await Promise.all([
+    db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
+    db.select({ cents: sql<number>`coalesce(sum(${offcuts.costCents}), 0)`.mapWith(Number) }).from(offcuts).where(and(eq(offcuts.shopId, shopId), inArray(offcuts.status, ['available', 'reserved']))),
+  ]);
+  const stockCents = items.reduce((sum, i) => sum + i.onHand * costEachCents(i), 0);
+  return { stockCents, offcutCents: rack[0]?.cents ?? 0, totalCents: stockCents + (rack[0]?.cents ?? 0) };
 }

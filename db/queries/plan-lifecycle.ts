@@ -1,0 +1,361 @@
+import { and, eq, inArray, sql } from 'drizzle-orm';
+import type { Db } from '../open';
+import { offcuts, placements, planPieces, plans, stockItems, stockMovements } from '../schema';
+import { readPlan } from '@/lib/nesting';
+import { isKeepableOffcut, offcutCostCents, offcutSize } from '@/lib/stock/offcut-rules';
+import { nestRequestSchema, type Plan, type PlanPiece } from '@/shared/schemas/nesting';
+import type { finishPlanSchema } from '@/shared/schemas/stock';
+import type { z } from 'zod';
+import { stockRef } from './nest-request';
+import { recordAudit } from './audit';
+import { HttpError } from '@/lib/api/errors';
+
+/**
+ * A plan moves material: draft → released (its exact stock reserved) → cutting → done (stock consumed, offcuts on
+ * the rack, yield recorded), or cancelled (every reservation given back). Every change of a count is one
+ * conditional UPDATE (`… where on_hand - reserved >= n`), never a read followed by a write, so racing releases on
+ * PGlite or PostgreSQL cannot both take the last sheet; and every change writes a movement row.
+ *
+ * Stock to buy (`buy:<id>` pieces) is not reserved at release: the plan records it as to-buy (plan_pieces.to_buy).
+ * Receiving it is an ordinary stock receipt. At done, bought pieces are taken from that size's free count as far as
+ * it goes (they were received onto the rack); any not received are logged as received and consumed on the spot,
+ * so the ledger still sums to the counts.
+ */
+
+type Tx = Db;
+type PlanStatus = (typeof plans.$inferSelect)['status'];
+
+export interface MissingPiece {
+  stockId: string;
+  kind: 'sheet' | 'board' | 'offcut';
+  material: string;
+  thicknessMm: number;
+  lengthMm: number;
+  widthMm: number;
+  needed: number;
+  free: number;
+}
+
+/** Release refused: these pieces are no longer free. Nothing was reserved. */
+export class StockShortage extends HttpError {
+  constructor(
+    readonly jobId: string,
+    readonly missing: MissingPiece[],
+  ) {
+    super(409, `${missing.length} stock piece${missing.length === 1 ? ' is' : 's are'} no longer available. Nothing was reserved; nest the job again against what is left.`);
+  }
+}
+
+/** The plan is missing (or another shop's), or not in a state that allows the step. */
+export class PlanStateError extends HttpError {}
+
+interface PieceGroup {
+  ref: { source: 'stock' | 'buy' | 'offcut'; id: string };
+  stockId: string;
+  count: number;
+  piece: PlanPiece;
+}
+
+/** The plan's stock pieces grouped by where they come from, sorted by id so concurrent transactions lock rows in one order. */
+function groupPieces(plan: Plan): PieceGroup[] {
+  const groups = new Map<string, PieceGroup>();
+  for (const piece of plan.pieces) {
+    const ref = stockRef.parse(piece.stockId);
+    if (!ref) throw new PlanStateError(422, `The plan uses stock "${piece.stockId}" that is not from this stock room.`);
+    const g = groups.get(piece.stockId);
+    if (g) g.count += 1;
+    else groups.set(piece.stockId, { ref, stockId: piece.stockId, count: 1, piece });
+  }
+  return [...groups.values()].sort((a, b) => (a.ref.id < b.ref.id ? -1 : a.ref.id > b.ref.id ? 1 : 0));
+}
+
+async function moveStatus(tx: Tx, shopId: string, planId: string, from: PlanStatus[], set: Partial<typeof plans.$inferInsert>, verb: string) {
+  const [row] = await tx
+    .update(plans)
+    .set({ ...set, updatedAt: new Date() })
+    .where(and(eq(plans.shopId, shopId), eq(plans.id, planId), inArray(plans.status, from)))
+    .returning();
+  if (row) return row;
+  const [existing] = await tx.select({ status: plans.status }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
+  if (!existing) throw new PlanStateError(404, 'That plan was not found.');
+  throw new PlanStateError(409, `This plan is ${existing.status}; only a ${from.join(' or ')} plan can be ${verb}.`);
+}
+
+const missingFrom = (g: PieceGroup, free: number): MissingPiece => ({
+  stockId: g.stockId,
+  kind: g.piece.kind,
+  material: g.piece.material,
+  thicknessMm: g.piece.thickness,
+  lengthMm: g.piece.length,
+  widthMm: g.piece.width,
+  needed: g.count,
+  free,
+});
+
+/** plan_pieces and placements rows, written from the document (the single source of truth) once it is released. */
+async function writePieceRows(tx: Tx, shopId: string, planId: string, plan: Plan) {
+  const existing = await tx.select({ id: planPieces.id }).from(planPieces).where(eq(planPieces.planId, planId)).limit(1);
+  if (existing.length || !plan.pieces.length) return;
+  const rows = await tx
+    .insert(planPieces)
+    .values(
+      plan.pieces.map((p, index) => {
+        const ref = stockRef.parse(p.stockId);
+        return {
+          shopId,
+          planId,
+          index,
+          stockItemId: ref && ref.source !== 'offcut' ? ref.id : null,
+          offcutId: ref?.source === 'offcut' ? ref.id : null,
+          material: p.material,
+          thicknessMm: p.thickness,
+          lengthMm: p.length,
+          widthMm: p.width,
+          toBuy: ref?.source === 'buy',
+        };
+      }),
+    )
+    .returning({ id: planPieces.id, index: planPieces.index });
+  const values = rows.flatMap((r) =>
+    plan.pieces[r.index].placements.map((pl) => ({
+      shopId,
+      planPieceId: r.id,
+      partId: /^[0-9a-f-]{36}$/.test(pl.partId) ? pl.partId : null,
+      instance: pl.instance,
+      xMm: pl.x,
+      yMm: pl.y,
+      lengthMm: pl.w,
+      widthMm: pl.h,
+      rotated: pl.rotated,
+    })),
+  );
+  if (values.length) await tx.insert(placements).values(values);
+}
+
+export interface ReleaseResult {
+  planId: string;
+  reserved: { stockId: string; count: number }[];
+  toBuy: { stockId: string; count: number }[];
+}
+
+/** Reserves exactly the pieces the plan uses, all or nothing. Throws StockShortage naming every piece that is gone. */
+export async function releasePlan(db: Db, { shopId, userId, planId }: { shopId: string; userId: string; planId: string }): Promise<ReleaseResult> {
+  return db.transaction(async (tx) => {
+    const row = await moveStatus(tx, shopId, planId, ['draft'], { status: 'released', releasedAt: new Date(), releasedBy: userId }, 'released');
+    const plan = readPlan(row.document);
+    const groups = groupPieces(plan);
+    const missing: MissingPiece[] = [];
+    const reserved: ReleaseResult['reserved'] = [];
+    const toBuy: ReleaseResult['toBuy'] = [];
+
+    for (const g of groups) {
+      if (g.ref.source === 'buy') {
+        toBuy.push({ stockId: g.stockId, count: g.count });
+      } else if (g.ref.source === 'stock') {
+        const done = await tx
+          .update(stockItems)
+          .set({ reserved: sql`${stockItems.reserved} + ${g.count}` })
+          .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId), sql`${stockItems.onHand} - ${stockItems.reserved} >= ${g.count}`))
+          .returning({ id: stockItems.id });
+        if (done.length) reserved.push({ stockId: g.stockId, count: g.count });
+        else {
+          const [now] = await tx.select({ free: sql<number>`${stockItems.onHand} - ${stockItems.reserved}` }).from(stockItems).where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId)));
+          missing.push(missingFrom(g, Math.max(0, Number(now?.free ?? 0))));
+        }
+      } else {
+        const done = await tx
+          .update(offcuts)
+          .set({ status: 'reserved' })
+          .where(and(eq(offcuts.id, g.ref.id), eq(offcuts.shopId, shopId), eq(offcuts.status, 'available')))
+          .returning({ id: offcuts.id });
+        if (done.length) reserved.push({ stockId: g.stockId, count: 1 });
+        else missing.push(missingFrom(g, 0));
+      }
+    }
+    // Throwing rolls the whole transaction back: the status change and every reservation made above.
+    if (missing.length) throw new StockShortage(row.jobId, missing);
+
+    const reason = `Reserved for plan “${row.name}”`;
+    const moves = reserved.map((r) => {
+      const ref = stockRef.parse(r.stockId)!;
+      return { shopId, kind: 'reserved' as const, quantity: r.count, planId, userId, reason, ...(ref.source === 'offcut' ? { offcutId: ref.id } : { stockItemId: ref.id }) };
+    });
+    if (moves.length) await tx.insert(stockMovements).values(moves);
+    await writePieceRows(tx, shopId, planId, plan);
+    await recordAudit(tx, { shopId, userId, action: 'release', entity: 'plan', entityId: planId, data: { reserved, toBuy } });
+    return { planId, reserved, toBuy };
+  });
+}
+
+/** What the plan still holds: net reserved per stock item and per offcut, from its own movement rows. */
+async function heldBy(tx: Tx, shopId: string, planId: string) {
+  const rows = await tx
+    .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId, held: sql<number>`sum(${stockMovements.quantity})`.mapWith(Number) })
+    .from(stockMovements)
+    .where(and(eq(stockMovements.shopId, shopId), eq(stockMovements.planId, planId), inArray(stockMovements.kind, ['reserved', 'released'])))
+    .groupBy(stockMovements.stockItemId, stockMovements.offcutId);
+  return {
+    items: rows.filter((r) => r.stockItemId && r.held > 0).map((r) => ({ id: r.stockItemId!, count: r.held })).sort((a, b) => a.id.localeCompare(b.id)),
+    offcuts: rows.filter((r) => r.offcutId && r.held > 0).map((r) => r.offcutId!).sort(),
+  };
+}
+
+async function giveBack(tx: Tx, shopId: string, planId: string, userId: string, reason: string, then: 'available' | 'used') {
+  const held = await heldBy(tx, shopId, planId);
+  for (const item of held.items) {
+    const consume = then === 'used';
+    const done = await tx
+      .update(stockItems)
+      .set(consume ? { reserved: sql`${stockItems.reserved} - ${item.count}`, onHand: sql`${stockItems.onHand} - ${item.count}` } : { reserved: sql`${stockItems.reserved} - ${item.count}` })
+      .where(and(eq(stockItems.id, item.id), eq(stockItems.shopId, shopId), sql`${stockItems.reserved} >= ${item.count}`))
+      .returning({ id: stockItems.id });
+    // The CHECK constraints make this impossible unless the ledger and the counts disagree: refuse, change nothing.
+    if (!done.length) throw new Error(`Stock item ${item.id} holds fewer reservations than plan ${planId} recorded.`);
+    await tx.insert(stockMovements).values({ shopId, kind: 'released', stockItemId: item.id, quantity: -item.count, planId, userId, reason });
+    if (consume) await tx.insert(stockMovements).values({ shopId, kind: 'consumed', stockItemId: item.id, quantity: -item.count, planId, userId, reason });
+  }
+  for (const id of held.offcuts) {
+    await tx.update(offcuts).set({ status: then }).where(and(eq(offcuts.id, id), eq(offcuts.shopId, shopId), eq(offcuts.status, 'reserved')));
+    await tx.insert(stockMovements).values({ shopId, kind: 'released', offcutId: id, quantity: -1, planId, userId, reason });
+    if (then === 'used') await tx.insert(stockMovements).values({ shopId, kind: 'consumed', offcutId: id, quantity: -1, planId, userId, reason });
+  }
+  return held;
+}
+
+/** Gives back every reservation the plan holds; a draft plan simply closes. */
+export async function cancelPlan(db: Db, { shopId, userId, planId }: { shopId: string; userId: string; planId: string }) {
+  return db.transaction(async (tx) => {
+    const row = await moveStatus(tx, shopId, planId, ['draft', 'released', 'cutting'], { status: 'cancelled' }, 'cancelled');
+    const held = await giveBack(tx, shopId, planId, userId, `Plan “${row.name}” cancelled`, 'available');
+    await recordAudit(tx, { shopId, userId, action: 'cancel', entity: 'plan', entityId: planId, data: held });
+    return { planId, released: held };
+  });
+}
+
+export type FinishPlanBody = z.infer<typeof finishPlanSchema>;
+
+export interface FinishResult {
+  planId: string;
+  yieldRatio: number;
+  wasteRatio: number;
+  costCents: number;
+  offcuts: { id: string; lengthMm: number; widthMm: number; location: string }[];
+  damaged: number;
+}
+
+/**
+ * Done: consumes what the plan reserved, takes its bought pieces, puts its keepable offcuts on the rack (where the
+ * cutter says), marks damaged parts, and records yield, waste and cost computed here from the plan itself.
+ */
+export async function finishPlan(
+  db: Db,
+  { shopId, userId, planId, body }: { shopId: string; userId: string; planId: string; body: FinishPlanBody },
+): Promise<FinishResult> {
+  return db.transaction(async (tx) => {
+    const row = await moveStatus(tx, shopId, planId, ['released', 'cutting'], { status: 'done', finishedAt: new Date(), finishedBy: userId }, 'marked done');
+    const plan = readPlan(row.document);
+    const request = nestRequestSchema.safeParse(row.request);
+    const stockById = new Map((request.success ? request.data.stock : []).map((s) => [s.id, s]));
+    const settings = request.success ? request.data.settings : { minOffcutLength: 0, minOffcutWidth: 0 };
+    const reason = `Cut for plan “${row.name}”`;
+
+    await giveBack(tx, shopId, planId, userId, reason, 'used');
+
+    for (const g of groupPieces(plan).filter((g) => g.ref.source === 'buy')) {
+      const [item] = await tx
+        .select({ free: sql<number>`${stockItems.onHand} - ${stockItems.reserved}`.mapWith(Number) })
+        .from(stockItems)
+        .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId)))
+        .for('update');
+      if (!item) throw new PlanStateError(409, `A size this plan bought is no longer in the stock room (${g.piece.material}).`);
+      const fromRack = Math.min(g.count, Math.max(0, item.free));
+      const onArrival = g.count - fromRack;
+      if (fromRack) {
+        await tx.update(stockItems).set({ onHand: sql`${stockItems.onHand} - ${fromRack}` }).where(and(eq(stockItems.id, g.ref.id), sql`${stockItems.onHand} - ${stockItems.reserved} >= ${fromRack}`));
+        await tx.insert(stockMovements).values({ shopId, kind: 'consumed', stockItemId: g.ref.id, quantity: -fromRack, planId, userId, reason: `${reason} (bought, taken from the rack)` });
+      }
+      if (onArrival) {
+        await tx.insert(stockMovements).values([
+          { shopId, kind: 'received', stockItemId: g.ref.id, quantity: onArrival, planId, userId, reason: `Bought for plan “${row.name}”` },
+          { shopId, kind: 'consumed', stockItemId: g.ref.id, quantity: -onArrival, planId, userId, reason: `${reason} (bought, cut on arrival)` },
+        ]);
+      }
+    }
+
+    // Offcuts: every keepable one goes on the rack unless the cutter discards it.
+    const choices = new Map(body.offcuts.map((o) => [`${o.piece}:${o.index}`, o]));
+    for (const key of choices.keys()) {
+      const [p, i] = key.split(':').map(Number);
+      if (!plan.pieces[p]?.offcuts?.[i]) throw new PlanStateError(422, `Piece ${p + 1} has no offcut ${i + 1}.`);
+    }
+    const created: FinishResult['offcuts'] = [];
+    let keptArea = 0;
+    for (const [p, piece] of plan.pieces.entries()) {
+      const source = stockById.get(piece.stockId);
+      const grain = source?.grain ?? 'along-length';
+      for (const [i, rect] of (piece.offcuts ?? []).entries()) {
+        const choice = choices.get(`${p}:${i}`);
+        if (choice && !choice.keep) continue;
+        if (!isKeepableOffcut(rect, { minLength: settings.minOffcutLength, minWidth: settings.minOffcutWidth })) continue;
+        const size = offcutSize(rect, grain);
+        const location = choice?.location ?? '';
+        const [o] = await tx
+          .insert(offcuts)
+          .values({
+            shopId,
+            material: piece.material,
+            thicknessMm: piece.thickness,
+            ...size,
+            grain,
+            status: 'available',
+            location,
+            sourcePlanId: planId,
+            sourcePiece: String(p + 1),
+            costCents: offcutCostCents(rect, { w: piece.length, h: piece.width }, Math.round(source?.costEach ?? 0)),
+          })
+          .returning({ id: offcuts.id });
+        await tx.insert(stockMovements).values({ shopId, kind: 'offcut-created', offcutId: o.id, quantity: 1, planId, userId, reason: `From piece ${p + 1} of plan “${row.name}”` });
+        created.push({ id: o.id, ...size, location });
+        keptArea += rect.w * rect.h;
+      }
+    }
+
+    // Damaged parts: marked on their placement rows; their area counts as waste, not yield.
+    await writePieceRows(tx, shopId, planId, plan);
+    let damagedArea = 0;
+    for (const d of body.damaged) {
+      const placed = plan.pieces[d.piece]?.placements.find((pl) => pl.partId === d.partId && pl.instance === d.instance);
+      if (!placed) throw new PlanStateError(422, `Piece ${d.piece + 1} has no part ${d.partId} #${d.instance}.`);
+      damagedArea += placed.w * placed.h;
+      const [pieceRow] = await tx.select({ id: planPieces.id }).from(planPieces).where(and(eq(planPieces.planId, planId), eq(planPieces.index, d.piece)));
+      // A placement's position is unique on its piece, and needs no part row (a typed part id may not be a uuid).
+      if (pieceRow) {
+        await tx
+          .update(placements)
+          .set({ damaged: true })
+          .where(and(eq(placements.planPieceId, pieceRow.id), eq(placements.instance, d.instance), eq(placements.xMm, placed.x), eq(placements.yMm, placed.y)));
+      }
+    }
+
+    const figures = planFigures(plan);
+    const yieldRatio = figures.stockArea > 0 ? Math.max(0, figures.partArea - damagedArea) / figures.stockArea : 0;
+    const wasteRatio = figures.stockArea > 0 ? Math.max(0, figures.stockArea - (figures.partArea - damagedArea) - keptArea) / figures.stockArea : 0;
+    const costCents = Math.round(figures.cost);
+    await tx.update(plans).set({ yieldRatio, wasteRatio, costCents }).where(eq(plans.id, planId));
+    await recordAudit(tx, { shopId, userId, action: 'finish', entity: 'plan', entityId: planId, data: { offcuts: created.length, damaged: body.damaged.length } });
+    return { planId, yieldRatio, wasteRatio, costCents, offcuts: created, damaged: body.damaged.length };
+  });
+}
+
+/** Stock area, part area and cost of a plan, from its totals or, for an edited plan without totals, its pieces. */
+export function planFigures(plan: Plan): { stockArea: number; partArea: number; cost: number } {
+  if (plan.totals) return { stockArea: plan.totals.stockArea, partArea: plan.totals.partArea, cost: plan.totals.cost };
+  return plan.pieces.reduce(
+    (acc, p) => ({
+      stockArea: acc.stockArea + p.length * p.width,
+      partArea: acc.partArea + p.placements.reduce((a, pl) => a + pl.w * pl.h, 0),
+      cost: acc.cost + (p.figures?.cost ?? 0),
+    }),
+    { stockArea: 0, partArea: 0, cost: 0 },
+  );
+}

@@ -1,0 +1,154 @@
+import Papa from 'papaparse';
+import type { LengthUnit } from '@/lib/units/parse-length';
+import { lengthInput } from '@/shared/schemas/units';
+import { thicknessInput } from '@/shared/schemas/lumber';
+import { thicknessMm } from '@/lib/lumber/thickness';
+import { stockItemSchema, type StockItemValues } from '@/shared/schemas/stock';
+
+/**
+ * Reading a stock file: one sheet or board size per row. Every bad row is named with its line and reasons, and
+ * nothing is guessed: a row with any bad field is not imported. Header names are matched loosely (case, spaces,
+ * a few common words) so a supplier's export can be used as it is.
+ */
+export const STOCK_CSV_COLUMNS = ['kind', 'material', 'thickness', 'length', 'width', 'quantity', 'cost', 'actual thickness', 'grain', 'surfacing', 'grade', 'supplier', 'location', 'low stock at', 'buyable'] as const;
+type Column = (typeof STOCK_CSV_COLUMNS)[number];
+
+const ALIASES: Record<string, Column> = {
+  type: 'kind',
+  species: 'material',
+  thick: 'thickness',
+  nominal: 'thickness',
+  'nominal thickness': 'thickness',
+  qty: 'quantity',
+  count: 'quantity',
+  'on hand': 'quantity',
+  price: 'cost',
+  'cost each': 'cost',
+  'cost per bf': 'cost',
+  'actual': 'actual thickness',
+  'actual thickness mm': 'actual thickness',
+  rack: 'location',
+  'low stock': 'low stock at',
+  'reorder at': 'low stock at',
+  'can buy': 'buyable',
+};
+const REQUIRED: Column[] = ['kind', 'material', 'thickness', 'length', 'width', 'quantity'];
+
+export interface StockCsvRow {
+  /** 1-based line in the file, header included, as a spreadsheet shows it. */
+  line: number;
+  item: StockItemValues;
+}
+export interface StockCsvError {
+  line: number;
+  messages: string[];
+}
+export interface StockCsvResult {
+  rows: StockCsvRow[];
+  errors: StockCsvError[];
+  /** Problems with the file itself (missing columns); when present no row is read. */
+  fileErrors: string[];
+}
+
+const normalise = (h: string) => h.trim().toLowerCase().replace(/[_\-.]+/g, ' ').replace(/\s+/g, ' ').replace(/\s*\(.*\)$/, '');
+const column = (h: string): Column | undefined => {
+  const n = normalise(h);
+  return (STOCK_CSV_COLUMNS as readonly string[]).includes(n) ? (n as Column) : ALIASES[n];
+};
+
+const MONEY = /^\s*[$€£]?\s*(\d{1,9})(?:[.,](\d{1,2}))?\s*$/;
+/** "94", "94.5", "$94.50" → 9450 cents; anything else is refused rather than guessed. */
+export function parseMoneyCents(value: string): number | null {
+  const m = MONEY.exec(value);
+  if (!m) return null;
+  return Number(m[1]) * 100 + Number((m[2] ?? '0').padEnd(2, '0'));
+}
+
+const YES = new Set(['yes', 'y', 'true', '1']);
+const NO = new Set(['no', 'n', 'false', '0', '']);
+
+export function parseStockCsv(csv: string, unit: LengthUnit): StockCsvResult {
+  const parsed = Papa.parse<string[]>(csv.replace(/^\uFEFF/, ''), { skipEmptyLines: 'greedy' });
+  const [header = [], ...body] = parsed.data;
+  const columns = header.map(column);
+  const missing = REQUIRED.filter((c) => !columns.includes(c));
+  if (!body.length && !header.length) return { rows: [], errors: [], fileErrors: ['The file has no rows.'] };
+  if (missing.length) {
+    return { rows: [], errors: [], fileErrors: [`Missing column${missing.length > 1 ? 's' : ''}: ${missing.join(', ')}. Expected a header row naming ${REQUIRED.join(', ')}.`] };
+  }
+
+  const rows: StockCsvRow[] = [];
+  const errors: StockCsvError[] = [];
+  body.forEach((cells, i) => {
+    const line = i + 2;
+    const cell = (c: Column) => {
+      const at = columns.indexOf(c);
+      return at < 0 ? '' : (cells[at] ?? '').trim();
+    };
+    const messages: string[] = [];
+    const note = (field: string, msg: string) => messages.push(`${field}: ${msg}`);
+
+    const kindText = cell('kind').toLowerCase();
+    const kind = kindText.startsWith('sheet') ? 'sheet' : kindText.startsWith('board') || kindText === 'lumber' ? 'board' : null;
+    if (!kind) note('kind', `"${cell('kind')}" is not sheet or board`);
+
+    const thickness = thicknessInput(unit).safeParse(cell('thickness'));
+    if (!thickness.success) note('thickness', thickness.error.issues[0].message);
+    let actualMm = thickness.success ? thicknessMm(thickness.data) : NaN;
+    if (cell('actual thickness')) {
+      const actual = lengthInput(unit).safeParse(cell('actual thickness'));
+      if (actual.success) actualMm = actual.data;
+      else note('actual thickness', actual.error.issues[0].message);
+    }
+    const length = lengthInput(unit).safeParse(cell('length'));
+    if (!length.success) note('length', length.error.issues[0].message);
+    const width = lengthInput(unit).safeParse(cell('width'));
+    if (!width.success) note('width', width.error.issues[0].message);
+
+    const whole = (c: Column, fallback: number) => {
+      const v = cell(c);
+      if (!v) return fallback;
+      if (!/^\d+$/.test(v)) {
+        note(c, `"${v}" is not a whole number`);
+        return fallback;
+      }
+      return Number(v);
+    };
+    const onHand = whole('quantity', NaN);
+    if (!cell('quantity')) note('quantity', 'is empty');
+    const lowStockAt = whole('low stock at', 0);
+    const costText = cell('cost');
+    const costCents = costText ? parseMoneyCents(costText) : 0;
+    if (costCents === null) note('cost', `"${costText}" is not an amount of money`);
+    const grainText = cell('grain').toLowerCase();
+    const grain = !grainText ? (kind === 'board' ? 'along-length' : 'along-length') : ['none', 'no', 'any'].includes(grainText) ? 'none' : ['along-length', 'length', 'long', 'yes'].includes(grainText) ? 'along-length' : null;
+    if (!grain) note('grain', `"${cell('grain')}" is not along-length or none`);
+    const buyableText = cell('buyable').toLowerCase();
+    if (!YES.has(buyableText) && !NO.has(buyableText)) note('buyable', `"${cell('buyable')}" is not yes or no`);
+    const surfacingText = cell('surfacing');
+    const surfacing = ({ '': '', rough: 'rough', s2s: 'S2S', s4s: 'S4S' } as Record<string, string>)[surfacingText.toLowerCase()];
+    if (surfacing === undefined) note('surfacing', `"${surfacingText}" is not rough, S2S or S4S`);
+
+    if (messages.length) return void errors.push({ line, messages });
+    const item = stockItemSchema.safeParse({
+      kind,
+      material: cell('material'),
+      nominalThickness: cell('thickness'),
+      thicknessMm: actualMm,
+      lengthMm: length.data,
+      widthMm: width.data,
+      grain,
+      surfacing: kind === 'sheet' ? '' : surfacing,
+      grade: cell('grade'),
+      onHand,
+      lowStockAt,
+      costCents,
+      supplier: cell('supplier'),
+      location: cell('location'),
+      buyable: YES.has(buyableText),
+    });
+    if (!item.success) return void errors.push({ line, messages: item.error.issues.map((is) => `${String(is.path[0] ?? 'row')}: ${is.message}`) });
+    rows.push({ line, item: item.data });
+  });
+  return { rows, errors, fileErrors: [] };
+}
