@@ -1,0 +1,50 @@
+import { describe, expect, test } from 'vitest';
+import type { ShopUnits } from '@/shared/schemas/units';
+import { describeSawOrder, describeStep, partInstanceLabels, stockPieceTitle } from './describe-step';
+import { carcassRequest, nest, stripsRequest } from './test-plans';
+
+const sixteenths: ShopUnits = { system: 'imperial', precision: 16, feet: false };
+const mm: ShopUnits = { system: 'metric', precision: 1, feet: false };
+
+describe('saw-order step descriptions', () => {
+  test.each([
+    // DOMAIN.md strip count (derived): 11-7/8″ strips off a 48″ sheet with a 1/8″ kerf.
+    ['DOMAIN.md strips, imperial 1/16″', sixteenths, 'hyphen', '11-7/8″', 'Rip A, fence at 11-7/8″'],
+    ['DOMAIN.md strips, imperial ASCII for the PDF', sixteenths, 'ascii', '11-7/8"', 'Rip A, fence at 11-7/8"'],
+    ['DOMAIN.md strips, metric (11-7/8″ = 301.625 mm, NIST 25.4 mm/in)', mm, 'hyphen', '≈302 mm', 'Rip A, fence at ≈302 mm'],
+  ] as const)('%s: every fence reads the strip width', async (_label, units, style, fence, summary) => {
+    const { plan } = await nest(stripsRequest());
+    const steps = describeSawOrder(plan.pieces[0], units, style);
+    expect(steps.map((s) => s.fence)).toEqual([fence, fence, fence, fence]);
+    expect(steps[0].summary).toBe(`1. ${summary}`);
+    // Each rip frees one shelf, named by its label and instance.
+    expect(steps.flatMap((s) => s.frees).sort()).toEqual(['Shelf #1', 'Shelf #2', 'Shelf #3', 'Shelf #4']);
+  });
+
+  test('every part on a piece is freed by exactly one step, and trim cuts say so', async () => {
+    const { plan } = await nest(carcassRequest());
+    for (const piece of plan.pieces) {
+      const steps = describeSawOrder(piece, sixteenths);
+      const freed = steps.flatMap((s) => s.frees).sort();
+      expect(freed).toEqual([...partInstanceLabels(piece).values()].sort());
+      for (const [i, s] of steps.entries()) {
+        expect(s.trim).toBe(piece.sawOrder![i].trim);
+        if (s.trim) expect(s.summary).toMatch(/trim cut/);
+      }
+    }
+  });
+
+  test('a step shows the plan’s own numbers: length of cut and sizes of what it leaves', async () => {
+    const { plan } = await nest(stripsRequest());
+    const piece = plan.pieces[0];
+    const first = describeStep(piece.sawOrder![0], partInstanceLabels(piece), sixteenths);
+    expect(first.length).toBe('96″');
+    expect(first.produced[0]).toMatchObject({ role: 'part', size: '96″ × 11-7/8″' });
+  });
+
+  test('the stock piece title names the kind, material, thickness and size in the shop’s unit', async () => {
+    const { plan } = await nest(stripsRequest());
+    // 18 mm = 0.709″ (NIST 25.4 mm/in): the nearest 1/16″ is 11/16″, marked as rounded.
+    expect(stockPieceTitle(plan.pieces[0], 'A', sixteenths)).toEqual({ heading: 'Sheet A', detail: 'birch ply ≈11/16″ · 96″ × 48″' });
+  });
+});
