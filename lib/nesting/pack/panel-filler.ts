@@ -1,7 +1,6 @@
 import type { BinFiller, FillerKind, ItemTable } from './filler';
-import { EPS } from './filler';
+import { EPS, FillerBase } from './filler';
 import { FlatTree } from './flat-tree';
-import type { PackedItem } from './types';
 
 /**
  * Free-rectangle guillotine filler: every free rectangle is a leaf of the cut tree, and placing a part in one
@@ -33,18 +32,8 @@ const ITEM_RULES = PLACE_RULES * SPLIT_RULES;
 const SPACE_RULES = 4 * SPLIT_RULES;
 export const SPACE_DRIVEN_MAX = 2000;
 
-class PanelFiller implements BinFiller {
-  used = 0;
-  cuts = 0;
-  count = 0;
-  readonly placed: Int32Array;
-  readonly decisions: Int32Array;
+class PanelFiller extends FillerBase implements BinFiller {
   private readonly taken: Uint8Array;
-  private readonly px: Float64Array;
-  private readonly py: Float64Array;
-  private readonly prot: Uint8Array;
-  private readonly pw: Float64Array;
-  private readonly ph: Float64Array;
   // Free rectangles and the tree leaf each one is.
   private fx: Float64Array;
   private fy: Float64Array;
@@ -65,14 +54,8 @@ class PanelFiller implements BinFiller {
     capacity: number,
     private readonly kerf: number,
   ) {
-    this.placed = new Int32Array(capacity);
-    this.decisions = new Int32Array(capacity);
+    super(capacity);
     this.taken = new Uint8Array(capacity);
-    this.px = new Float64Array(capacity);
-    this.py = new Float64Array(capacity);
-    this.pw = new Float64Array(capacity);
-    this.ph = new Float64Array(capacity);
-    this.prot = new Uint8Array(capacity);
     this.fx = new Float64Array(capacity + 2);
     this.fy = new Float64Array(capacity + 2);
     this.fw = new Float64Array(capacity + 2);
@@ -82,9 +65,7 @@ class PanelFiller implements BinFiller {
   }
 
   reset(binW: number, binH: number, minSide: number) {
-    this.used = 0;
-    this.cuts = 0;
-    this.count = 0;
+    this.clearRecord();
     this.minSide = minSide;
     this.binArea = binW * binH;
     this.tree.clear();
@@ -99,13 +80,7 @@ class PanelFiller implements BinFiller {
     const mode = Math.floor(rule / SPLIT_RULES);
     if (rule >= ITEM_RULES && len <= SPACE_DRIVEN_MAX) return this.fillBySpace(items, order, len, mode - PLACE_RULES, minArea);
     this.place = (mode % PLACE_RULES) as Place;
-    const binArea = this.binArea;
-    for (let j = 0; j < len; j++) {
-      // Free area never exceeds the unfilled area, so once that is below the smallest part nothing more fits.
-      if (binArea - this.used < minArea - EPS) break;
-      const i = order[j];
-      if (this.mayFit(items.w[i], items.h[i])) this.tryPlace(i, items.w[i], items.h[i], items.canRotate[i] === 1);
-    }
+    this.fillInOrder(items, order, len, minArea, this.binArea);
   }
 
   replay(i: number, w: number, h: number, decision: number) {
@@ -175,14 +150,14 @@ class PanelFiller implements BinFiller {
     }
   }
 
-  private mayFit(w: number, h: number): boolean {
+  protected mayFit(w: number, h: number): boolean {
     // Orientation does not matter here: a part fits a rectangle only if its short side fits the rectangle's short
     // side and its long side the long side.
     if (w * h > this.maxFreeArea + EPS) return false;
     return (w < h ? w : h) <= this.maxFreeShort + EPS && (w < h ? h : w) <= this.maxFreeLong + EPS;
   }
 
-  private tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean {
+  protected tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean {
     const { fx, fy, fw, fh } = this;
     let best = -1;
     let bestRot = false;
@@ -234,7 +209,7 @@ class PanelFiller implements BinFiller {
     const H = this.fh[r];
     const node = this.fnode[r];
     // The free rectangle is named by its tree leaf, which stays valid when unusable rectangles are dropped.
-    this.decisions[this.count] = (node << 3) | (this.split << 1) | (rotated ? 1 : 0);
+    const decision = (node << 3) | (this.split << 1) | (rotated ? 1 : 0);
     this.removeFree(r);
     let dw = W - iw;
     let dh = H - ih;
@@ -266,14 +241,7 @@ class PanelFiller implements BinFiller {
       itemNode = this.cutOff(itemNode, true, x, y, iw, ih, dh, k);
     }
     t.setItem(itemNode, i, rotated, iw, ih);
-    const c = this.count++;
-    this.placed[c] = i;
-    this.px[c] = x;
-    this.py[c] = y;
-    this.pw[c] = iw;
-    this.ph[c] = ih;
-    this.prot[c] = rotated ? 1 : 0;
-    this.used += iw * ih;
+    this.record(i, x, y, iw, ih, rotated, decision);
     this.refreshMax();
   }
 
@@ -336,15 +304,7 @@ class PanelFiller implements BinFiller {
   }
 
   finish(ids: ArrayLike<number>) {
-    const items: PackedItem[] = [];
-    for (let c = 0; c < this.count; c++) {
-      items.push({
-        itemId: ids[this.placed[c]],
-        rect: { x: this.px[c], y: this.py[c], w: this.pw[c], h: this.ph[c] },
-        rotated: this.prot[c] === 1,
-      });
-    }
-    return { tree: this.tree.toCutNode(0, this.kerf, ids), items };
+    return { tree: this.tree.toCutNode(0, this.kerf, ids), items: this.placements(ids) };
   }
 }
 

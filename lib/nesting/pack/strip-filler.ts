@@ -1,24 +1,13 @@
 import type { BinFiller, FillerKind, ItemTable } from './filler';
-import { EPS } from './filler';
+import { EPS, FillerBase } from './filler';
 import { FlatTree } from './flat-tree';
-import type { PackedItem } from './types';
 
 /**
  * Three-stage strip filler: rips (y = const) make full-length strips, crosscuts (x = const) cut parts from a strip
  * left to right, and a part lower than its strip gets one trim rip. A strip's height is set by the part that opens
  * it. Rule 0 lays a part that opens a strip flat (lower strips), rule 1 stands it up (fewer, taller strips).
  */
-class StripFiller implements BinFiller {
-  used = 0;
-  cuts = 0;
-  count = 0;
-  readonly placed: Int32Array;
-  readonly decisions: Int32Array;
-  private readonly px: Float64Array;
-  private readonly py: Float64Array;
-  private readonly pw: Float64Array;
-  private readonly ph: Float64Array;
-  private readonly prot: Uint8Array;
+class StripFiller extends FillerBase implements BinFiller {
   private readonly pstrip: Int32Array;
   // Strips: bottom y, height, next free x.
   private readonly sy: Float64Array;
@@ -35,13 +24,7 @@ class StripFiller implements BinFiller {
     capacity: number,
     private readonly kerf: number,
   ) {
-    this.placed = new Int32Array(capacity);
-    this.decisions = new Int32Array(capacity);
-    this.px = new Float64Array(capacity);
-    this.py = new Float64Array(capacity);
-    this.pw = new Float64Array(capacity);
-    this.ph = new Float64Array(capacity);
-    this.prot = new Uint8Array(capacity);
+    super(capacity);
     this.pstrip = new Int32Array(capacity);
     this.sy = new Float64Array(capacity);
     this.sh = new Float64Array(capacity);
@@ -51,9 +34,7 @@ class StripFiller implements BinFiller {
   }
 
   reset(binW: number, binH: number) {
-    this.used = 0;
-    this.cuts = 0;
-    this.count = 0;
+    this.clearRecord();
     this.nStrips = 0;
     this.nextY = 0;
     this.binW = binW;
@@ -62,12 +43,7 @@ class StripFiller implements BinFiller {
 
   fill(items: ItemTable, order: ArrayLike<number>, len: number, rule: number, minArea: number) {
     this.standUp = rule % 2 === 1;
-    const binArea = this.binW * this.binH;
-    for (let j = 0; j < len; j++) {
-      if (binArea - this.used < minArea - EPS) break;
-      const i = order[j];
-      if (this.mayFit(items.w[i], items.h[i])) this.tryPlace(i, items.w[i], items.h[i], items.canRotate[i] === 1);
-    }
+    this.fillInOrder(items, order, len, minArea, this.binW * this.binH);
   }
 
   replay(i: number, w: number, h: number, decision: number) {
@@ -79,14 +55,14 @@ class StripFiller implements BinFiller {
     else this.put(i, s, iw, ih, rot);
   }
 
-  private mayFit(w: number, h: number): boolean {
+  protected mayFit(w: number, h: number): boolean {
     const short = w < h ? w : h;
     if (this.binH - this.nextY >= short - EPS) return true;
     for (let s = 0; s < this.nStrips; s++) if (this.binW - this.sx[s] >= short - EPS && this.sh[s] >= short - EPS) return true;
     return false;
   }
 
-  private tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean {
+  protected tryPlace(i: number, w: number, h: number, canRotate: boolean): boolean {
     const W = this.binW;
     // Best fit into an open strip: the least height wasted, then the least length left.
     let best = -1;
@@ -138,32 +114,16 @@ class StripFiller implements BinFiller {
   }
 
   private put(i: number, s: number, iw: number, ih: number, rotated: boolean) {
-    const c = this.count++;
-    this.decisions[c] = (s << 1) | (rotated ? 1 : 0);
     const x = this.sx[s];
-    this.placed[c] = i;
-    this.px[c] = x;
-    this.py[c] = this.sy[s];
-    this.pw[c] = iw;
-    this.ph[c] = ih;
-    this.prot[c] = rotated ? 1 : 0;
+    const c = this.record(i, x, this.sy[s], iw, ih, rotated, (s << 1) | (rotated ? 1 : 0));
     this.pstrip[c] = s;
-    this.used += iw * ih;
     if (this.binW - (x + iw) > EPS) this.cuts++; // crosscut after the part
     if (this.sh[s] - ih > EPS) this.cuts++; // trim rip
     this.sx[s] = x + iw + this.kerf;
   }
 
   finish(ids: ArrayLike<number>) {
-    const items: PackedItem[] = [];
-    for (let c = 0; c < this.count; c++) {
-      items.push({
-        itemId: ids[this.placed[c]],
-        rect: { x: this.px[c], y: this.py[c], w: this.pw[c], h: this.ph[c] },
-        rotated: this.prot[c] === 1,
-      });
-    }
-    return { tree: this.tree.toCutNode(this.buildTree(), this.kerf, ids), items };
+    return { tree: this.tree.toCutNode(this.buildTree(), this.kerf, ids), items: this.placements(ids) };
   }
 
   /** Writes the three-stage tree into the flat tree and returns the root. */
