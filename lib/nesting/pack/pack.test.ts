@@ -30,6 +30,7 @@ describe('worked examples', () => {
     { label: 'DOMAIN.md strip count [derived]: ¼″ edge trim on both sides leaves 47.5″ → 3', width: inches(47.5), strip: inches(11.875), kerf: inches(0.125), expected: 3 },
     { label: 'DOMAIN.md strip count [derived]: 2440 − 2 × 10 mm trim, 600 mm strips, 3.2 mm kerf → 4', width: 2420, strip: 600, kerf: 3.2, expected: 4 },
   ])('$label', async ({ width, strip, kerf, expected }) => {
+    expect(Math.floor((width + kerf) / (strip + kerf) + 1e-9)).toBe(expected);
     // One sheet whose width runs along y; full-length strips are parts as long as the sheet.
     const length = inches(96);
     const items = parts(6, length, strip, false);
@@ -89,11 +90,9 @@ describe('worked examples', () => {
   });
 });
 
-const itemArb = fc.record({
-  w: fc.integer({ min: 1, max: 120 }),
-  h: fc.integer({ min: 1, max: 120 }),
-  canRotate: fc.boolean(),
-});
+// Whole units, or sixteenths of an inch in mm, so float positions and kerf meet.
+const lengthArb = fc.oneof(fc.integer({ min: 1, max: 120 }), fc.integer({ min: 16, max: 16 * 4 }).map((n) => inches(n / 16)));
+const itemArb = fc.record({ w: lengthArb, h: lengthArb, canRotate: fc.boolean() });
 const binArb = fc.record({
   w: fc.integer({ min: 40, max: 200 }),
   h: fc.integer({ min: 40, max: 200 }),
@@ -155,6 +154,53 @@ describe('properties', () => {
         }
       }),
       { numRuns: 60 },
+    );
+  });
+});
+
+describe('strip count', () => {
+  test('full-length strips of width w from a usable width L with kerf k number ⌊(L + k)/(w + k)⌋ (DOMAIN.md [derived])', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.integer({ min: 100, max: 1500 }),
+        fc.integer({ min: 20, max: 400 }),
+        fc.constantFrom(0, 2.4, 3.2),
+        fc.constantFrom('panel' as const, 'strips' as const),
+        async (width, strip, kerf, style) => {
+          const expected = Math.floor((width + kerf) / (strip + kerf) + 1e-9);
+          const items = parts(expected + 2, 2440, strip, false);
+          const stock = [sheet(2440, width, { count: 1 })];
+          const r = await packWithLimits(items, stock, opts({ kerf, style }), { maxIterations: 5 });
+          expect(checkPackResult(items, stock, { kerf, style }, r)).toEqual([]);
+          expect(r.bins.flatMap((b) => b.items)).toHaveLength(expected);
+        },
+      ),
+      { numRuns: 40 },
+    );
+  });
+});
+
+describe('identical parts', () => {
+  const grid = (W: number, H: number, a: number, b: number, k: number) => Math.floor((W + k) / (a + k) + 1e-9) * Math.floor((H + k) / (b + k) + 1e-9);
+  test('fill at least the guillotine grid ⌊(W + k)/(a + k)⌋ · ⌊(H + k)/(b + k)⌋, either way round when they may turn [derived]', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.integer({ min: 100, max: 2440 }),
+        fc.integer({ min: 100, max: 1220 }),
+        fc.integer({ min: 20, max: 600 }),
+        fc.integer({ min: 20, max: 600 }),
+        fc.constantFrom(0, 3.2),
+        fc.boolean(),
+        fc.constantFrom('panel' as const, 'strips' as const),
+        async (W, H, a, b, k, canRotate, style) => {
+          const expected = Math.max(grid(W, H, a, b, k), canRotate ? grid(W, H, b, a, k) : 0);
+          fc.pre(expected > 0 && expected < 300);
+          const items = parts(expected + 1, a, b, canRotate);
+          const r = await packWithLimits(items, [sheet(W, H, { count: 1 })], opts({ kerf: k, style, objective: 'pieces' }), { maxIterations: 0 });
+          expect(r.bins[0].items.length).toBeGreaterThanOrEqual(expected);
+        },
+      ),
+      { numRuns: 80 },
     );
   });
 });
