@@ -121,7 +121,8 @@ export function parseStockCsv(csv: string, unit: LengthUnit): StockCsvResult {
     const costCents = costText ? parseMoneyCents(costText) : 0;
     if (costCents === null) note('cost', `"${costText}" is not an amount of money`);
     const grainText = cell('grain').toLowerCase();
-    const grain = !grainText ? (kind === 'board' ? 'along-length' : 'along-length') : ['none', 'no', 'any'].includes(grainText) ? 'none' : ['along-length', 'length', 'long', 'yes'].includes(grainText) ? 'along-length' : null;
+    // Safe default: grained, so a part is never turned across the grain unless the file says the stock has none.
+    const grain = !grainText || ['along-length', 'length', 'long', 'yes'].includes(grainText) ? 'along-length' : ['none', 'no', 'any'].includes(grainText) ? 'none' : null;
     if (!grain) note('grain', `"${cell('grain')}" is not along-length or none`);
     const buyableText = cell('buyable').toLowerCase();
     if (!YES.has(buyableText) && !NO.has(buyableText)) note('buyable', `"${cell('buyable')}" is not yes or no`);

@@ -1,0 +1,11 @@
+import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/lib/api/errors';
+import { receiveStock } from '@/db/queries/stock';
+import { receiveStockSchema } from '@/shared/schemas/stock';
+
+// POST /api/stock/:id/receive – add delivered pieces to the count, with a receipt in the ledger
+export const POST = route({ permission: 'stock:write', params: idParams, body: receiveStockSchema }, async ({ db, user, params, body }) => {
+  const item = await receiveStock(db, user.shopId, user.id, params.id, body);
+  if (!item) throw notFound('That stock item');
+  return item;
+});

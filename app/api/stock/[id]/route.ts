@@ -1,0 +1,11 @@
+import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/lib/api/errors';
+import { updateStockItem } from '@/db/queries/stock';
+import { stockItemPatchSchema } from '@/shared/schemas/stock';
+
+// PATCH /api/stock/:id – change a size's details (cost, supplier, location, low-stock mark); counts change by receipt or adjustment
+export const PATCH = route({ permission: 'stock:write', params: idParams, body: stockItemPatchSchema }, async ({ db, user, params, body }) => {
+  const item = await updateStockItem(db, user.shopId, user.id, params.id, body);
+  if (!item) throw notFound('That stock item');
+  return item;
+});

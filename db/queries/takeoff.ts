@@ -1,0 +1,83 @@
+import { and, desc, eq, inArray, ne, sql } from 'drizzle-orm';
+import type { Db } from '../open';
+import { offcuts, plans, stockItems, stockMovements } from '../schema';
+import { readPlan } from '@/lib/nesting';
+import { takeoffLines, type TakeoffSize } from '@/lib/stock/takeoff';
+import { costEachCents, stockRef } from './nest-request';
+import { getShopSettings } from './shops';
+
+/**
+ * The material check before a quote, for a job's latest plan (cancelled ones aside): what to pull, what to buy, board
+ * feet or area, cost with the shop's waste factor, whether the stock room covers it now, and any part not placed.
+ */
+export async function getTakeoff(db: Db, shopId: string, jobId: string) {
+  const [row] = await db
+    .select()
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), ne(plans.status, 'cancelled')))
+    .orderBy(desc(plans.createdAt))
+    .limit(1);
+  if (!row) return null;
+  const plan = readPlan(row.document);
+  const settings = await getShopSettings(db, shopId);
+  const waste = (settings?.wastePercent ?? 0) / 100;
+
+  const counts = new Map<string, number>();
+  for (const p of plan.pieces) counts.set(p.stockId, (counts.get(p.stockId) ?? 0) + 1);
+  const refs = [...counts.keys()].map((k) => ({ key: k, ref: stockRef.parse(k) }));
+  const itemIds = refs.flatMap((r) => (r.ref && r.ref.source !== 'offcut' ? [r.ref.id] : []));
+  const offcutIds = refs.flatMap((r) => (r.ref?.source === 'offcut' ? [r.ref.id] : []));
+  const [items, rack, held] = await Promise.all([
+    itemIds.length ? db.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), inArray(stockItems.id, itemIds))) : [],
+    offcutIds.length ? db.select().from(offcuts).where(and(eq(offcuts.shopId, shopId), inArray(offcuts.id, offcutIds))) : [],
+    // What this plan already holds counts as available to it.
+    db
+      .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId, n: sql<number>`sum(${stockMovements.quantity})`.mapWith(Number) })
+      .from(stockMovements)
+      .where(and(eq(stockMovements.planId, row.id), inArray(stockMovements.kind, ['reserved', 'released'])))
+      .groupBy(stockMovements.stockItemId, stockMovements.offcutId),
+  ]);
+  const heldFor = (id: string) => held.find((h) => h.stockItemId === id || h.offcutId === id)?.n ?? 0;
+
+  const sizes: TakeoffSize[] = [];
+  const missing: string[] = [];
+  for (const { key, ref } of refs) {
+    const count = counts.get(key)!;
+    const piece = plan.pieces.find((p) => p.stockId === key)!;
+    if (ref?.source === 'offcut') {
+      const o = rack.find((r) => r.id === ref.id);
+      const available = o ? (o.status === 'available' ? 1 : 0) + heldFor(o.id) : 0;
+      sizes.push({ stockId: key, source: 'offcut', kind: 'offcut', material: piece.material, nominalThickness: '', thicknessMm: piece.thickness, lengthMm: piece.length, widthMm: piece.width, count, costEachCents: o?.costCents ?? 0, availableNow: available });
+      continue;
+    }
+    const item = ref && items.find((i) => i.id === ref.id);
+    if (!item || !ref) {
+      missing.push(piece.material);
+      continue;
+    }
+    sizes.push({
+      stockId: key,
+      source: ref.source,
+      kind: item.kind,
+      material: item.material,
+      nominalThickness: item.nominalThickness,
+      thicknessMm: item.thicknessMm,
+      lengthMm: item.lengthMm,
+      widthMm: item.widthMm,
+      count,
+      costEachCents: costEachCents(item),
+      availableNow: item.onHand - item.reserved + heldFor(item.id),
+    });
+  }
+  const { lines, totals } = takeoffLines(sizes, waste);
+  return {
+    plan: { id: row.id, name: row.name, status: row.status, createdAt: row.createdAt },
+    wastePercent: settings?.wastePercent ?? 0,
+    pull: lines.filter((l) => l.source !== 'buy'),
+    buy: lines.filter((l) => l.source === 'buy'),
+    totals: { ...totals, covered: totals.covered && missing.length === 0 },
+    unplaced: plan.unplaced,
+    /** Sizes the plan names that are no longer in the stock room: re-nest. */
+    gone: missing,
+  };
+}
