@@ -1,0 +1,45 @@
+import { getPlan } from '@/db/queries/plan-document';
+import { judgePlan, updateDraftPlan, withoutPrices } from '@/db/queries/plan-drafts';
+import { conflict, HttpError, notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { can } from '@/lib/auth/permissions';
+import { rebuildCuts } from '@/lib/nesting';
+import { nestRequestSchema, planSchema } from '@/shared/schemas/nesting';
+import { planUpdateSchema } from '@/shared/schemas/plan-save';
+
+// GET /api/plans/:id – a plan with its request and document (drafts only for those who may edit; prices only for those allowed)
+export const GET = route({ permission: 'plans:read', params: idParams }, async ({ db, user, params }) => {
+  const plan = await getPlan(db, user.shopId, params.id);
+  if (!plan || (plan.status === 'draft' && !can(user.role, 'plans:write'))) throw notFound('That plan');
+  const body = {
+    id: plan.id,
+    jobId: plan.jobId,
+    name: plan.name,
+    status: plan.status,
+    yieldRatio: plan.yieldRatio,
+    costCents: plan.costCents,
+    createdAt: plan.createdAt.toISOString(),
+    updatedAt: plan.updatedAt.toISOString(),
+    request: plan.request,
+    document: plan.document,
+  };
+  return can(user.role, 'prices:read') ? body : withoutPrices(body);
+});
+
+// PUT /api/plans/:id – store an edited draft: judged with validatePlan, then its cuts rebuilt with rebuildCuts
+export const PUT = route({ permission: 'plans:write', params: idParams, body: planUpdateSchema }, async ({ db, user, params, body }) => {
+  const saved = await getPlan(db, user.shopId, params.id);
+  if (!saved) throw notFound('That plan');
+  if (saved.status !== 'draft') throw conflict(`This plan is ${saved.status}; only a draft can be edited.`);
+  const request = nestRequestSchema.parse(saved.request);
+  const judged = judgePlan(request, body.plan);
+  if (!judged.ok) throw new HttpError(422, 'The layout breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
+  // Tree, saw order, leftovers and figures are made afresh here, whatever the bench sent.
+  const plan = planSchema.parse(rebuildCuts(request, judged.plan));
+  const result = await updateDraftPlan(db, { shopId: user.shopId, planId: params.id, userId: user.id, plan, name: body.name, baseUpdatedAt: body.baseUpdatedAt });
+  if (!result.ok) {
+    if (result.reason === 'not-found') throw notFound('That plan');
+    throw conflict(result.reason === 'stale' ? 'Someone saved this plan after you opened it; reload to see their changes.' : 'Only a draft plan can be edited.');
+  }
+  return { id: params.id, updatedAt: result.updatedAt.toISOString(), yieldRatio: plan.totals?.yield ?? null, costCents: plan.totals ? Math.round(plan.totals.cost) : null };
+});

@@ -1,0 +1,100 @@
+import { and, desc, eq } from 'drizzle-orm';
+import type { Db } from '../open';
+import { plans } from '../schema';
+import type { NestRequest, Plan } from '@/shared/schemas/nesting';
+import { recordAudit } from './audit';
+import { validatePlan, type Violation } from '@/lib/nesting';
+import { planSchema } from '@/shared/schemas/nesting';
+
+/** Judges a plan against its request with `validatePlan` (the same code the bench runs): the plan, or why not. */
+export function judgePlan(request: NestRequest, plan: unknown): { ok: true; plan: Plan } | { ok: false; violations: Violation[] } {
+  const violations = validatePlan(request, plan);
+  return violations.length ? { ok: false, violations } : { ok: true, plan: planSchema.parse(plan) };
+}
+
+const PRICE_KEYS = new Set(['cost', 'costEach', 'costCents']);
+
+/** A copy without any price (for people who may not see prices: cutters). */
+export function withoutPrices<T>(value: T): T {
+  return JSON.parse(JSON.stringify(value, (k, v) => (PRICE_KEYS.has(k) ? undefined : v)));
+}
+
+/** What a list of a job's plans shows. */
+export interface JobPlanSummary {
+  id: string;
+  name: string;
+  status: (typeof plans.$inferSelect)['status'];
+  yieldRatio: number | null;
+  costCents: number | null;
+  pieces: number;
+  unplaced: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+// Millisecond times set here (not the database's microsecond now()) so `baseUpdatedAt` round-trips through JSON exactly.
+const stamp = () => {
+  const now = new Date();
+  return { createdAt: now, updatedAt: now };
+};
+
+const figures = (plan: Plan) => ({ yieldRatio: plan.totals?.yield ?? null, costCents: plan.totals ? Math.round(plan.totals.cost) : null });
+
+export async function listJobPlans(db: Db, shopId: string, jobId: string): Promise<JobPlanSummary[]> {
+  const rows = await db
+    .select()
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId)))
+    .orderBy(desc(plans.createdAt));
+  return rows.map((r) => {
+    const doc = r.document as Partial<Plan>;
+    return {
+      id: r.id,
+      name: r.name,
+      status: r.status,
+      yieldRatio: r.yieldRatio,
+      costCents: r.costCents,
+      pieces: doc.pieces?.length ?? 0,
+      unplaced: doc.unplaced?.length ?? 0,
+      createdAt: r.createdAt.toISOString(),
+      updatedAt: r.updatedAt.toISOString(),
+    };
+  });
+}
+
+/** A new draft plan with the request it was nested from (already judged valid by the caller). */
+export async function createDraftPlan(db: Db, input: { shopId: string; jobId: string; userId: string; name: string; request: NestRequest; plan: Plan }) {
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(plans)
+      .values({ shopId: input.shopId, jobId: input.jobId, name: input.name, status: 'draft', request: input.request, document: input.plan, ...figures(input.plan), createdBy: input.userId, ...stamp() })
+      .returning({ id: plans.id, updatedAt: plans.updatedAt });
+    await recordAudit(tx, { shopId: input.shopId, userId: input.userId, action: 'create', entity: 'plan', entityId: row.id, data: { jobId: input.jobId, name: input.name } });
+    return row;
+  });
+}
+
+export type DraftUpdateResult = { ok: true; updatedAt: Date } | { ok: false; reason: 'not-found' | 'not-draft' | 'stale' };
+
+/**
+ * Stores an edited document on a draft plan (already judged valid by the caller). Refused when the plan is no
+ * longer a draft, or when `baseUpdatedAt` is given and someone saved since.
+ */
+export async function updateDraftPlan(
+  db: Db,
+  input: { shopId: string; planId: string; userId: string; plan: Plan; name?: string; baseUpdatedAt?: string },
+): Promise<DraftUpdateResult> {
+  return db.transaction(async (tx) => {
+    const [row] = await tx.select({ status: plans.status, updatedAt: plans.updatedAt }).from(plans).where(and(eq(plans.shopId, input.shopId), eq(plans.id, input.planId)));
+    if (!row) return { ok: false, reason: 'not-found' } as const;
+    if (row.status !== 'draft') return { ok: false, reason: 'not-draft' } as const;
+    if (input.baseUpdatedAt && new Date(input.baseUpdatedAt).getTime() !== row.updatedAt.getTime()) return { ok: false, reason: 'stale' } as const;
+    const updatedAt = new Date();
+    await tx
+      .update(plans)
+      .set({ document: input.plan, ...figures(input.plan), ...(input.name ? { name: input.name } : {}), updatedAt })
+      .where(and(eq(plans.shopId, input.shopId), eq(plans.id, input.planId), eq(plans.status, 'draft')));
+    await recordAudit(tx, { shopId: input.shopId, userId: input.userId, action: 'update', entity: 'plan', entityId: input.planId, data: { edited: true } });
+    return { ok: true, updatedAt } as const;
+  });
+}
