@@ -1,0 +1,31 @@
+import { getSawOrder } from '@/db/queries/saw-steps';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { sawOrderPdf } from '@/lib/saw-order/saw-order-pdf';
+import { z } from 'zod';
+
+const pdfQuery = z.object({ page: z.enum(['letter', 'a4']).optional() });
+
+/** A file name any system accepts: letters, digits and dashes. */
+const fileName = (s: string) => s.normalize('NFKD').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'plan';
+
+// GET /api/plans/:id/saw-order-pdf?page=letter|a4 – the saw order as a PDF, one page per stock piece
+export const GET = route({ permission: 'plans:read', params: idParams, query: pdfQuery }, async ({ db, user, params, query }) => {
+  const order = await getSawOrder(db, user.shopId, params.id);
+  if (!order) throw notFound('That plan');
+  const bytes = await sawOrderPdf({
+    title: order.job.name,
+    subtitle: `${order.name} · ${order.document.pieces.length} stock piece${order.document.pieces.length === 1 ? '' : 's'}`,
+    units: order.units,
+    kerf: order.kerf,
+    pieces: order.document.pieces,
+    pageSize: query.page ?? (order.units.system === 'metric' ? 'a4' : 'letter'),
+  });
+  return new Response(Buffer.from(bytes), {
+    headers: {
+      'content-type': 'application/pdf',
+      'content-disposition': `attachment; filename="saw-order-${fileName(order.job.name)}.pdf"`,
+      'cache-control': 'private, no-store',
+    },
+  });
+});

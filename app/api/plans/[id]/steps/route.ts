@@ -1,0 +1,19 @@
+import { getStepTicks, tickStep, untickStep } from '@/db/queries/saw-steps';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { stepRefSchema } from '@/lib/saw-order/step-ref';
+
+// GET /api/plans/:id/steps – the plan's status and its ticked saw-order steps (who and when)
+export const GET = route({ permission: 'plans:read', params: idParams }, async ({ db, user, params }) => {
+  return (await getStepTicks(db, user.shopId, params.id)) ?? Promise.reject(notFound('That plan'));
+});
+
+// POST /api/plans/:id/steps – tick a step done (idempotent; the first tick moves a released plan to cutting)
+export const POST = route({ permission: 'sawsteps:tick', params: idParams, body: stepRefSchema }, async ({ db, user, params, body }) => {
+  return tickStep(db, user.shopId, user.id, params.id, body);
+});
+
+// DELETE /api/plans/:id/steps – take a tick back (body: which piece and step)
+export const DELETE = route({ permission: 'sawsteps:tick', params: idParams, body: stepRefSchema }, async ({ db, user, params, body }) => {
+  return untickStep(db, user.shopId, user.id, params.id, body);
+});
