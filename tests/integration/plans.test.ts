@@ -1,4 +1,5 @@
 import { eq } from 'drizzle-orm';
+import type { NextRequest } from 'next/server';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { useDatabase } from '@/db/client';
 import type { DbHandle } from '@/db/open';
@@ -20,7 +21,7 @@ let estimator: TestUser;
 let cutter: TestUser;
 let jobId: string;
 
-type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
+type Handler = (req: NextRequest, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 async function call(handler: Handler, url: string, id: string, user: TestUser, init: { method?: string; body?: unknown } = {}) {
   const res = await handler(await request(url, { ...init, user }), { params: Promise.resolve({ id }) });
   return { status: res.status, body: await res.json() };
