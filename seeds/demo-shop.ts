@@ -1,8 +1,9 @@
 import bcrypt from 'bcryptjs';
 import type { Db } from '@/db/open';
-import { eq, sql } from 'drizzle-orm';
-import { buildNestRequest, stockRef } from '@/db/queries/nest-request';
-import { jobs, offcuts, parts, plans, shops, stockItems, stockMovements, users } from '@/db/schema';
+import { buildNestRequest } from '@/db/queries/nest-request';
+import { releasePlan } from '@/db/queries/plan-lifecycle';
+import { recordOpeningCounts } from '@/db/queries/stock';
+import { jobs, offcuts, parts, plans, shops, stockItems, users } from '@/db/schema';
 import { optimize } from '@/lib/nesting';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { inches } from '@/lib/units/length';
@@ -93,35 +94,28 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
 
 /**
  * The kitchen's carcass plan, nested by the real engine (no time budget, so the same plan every time) and
- * released: its sheets and offcuts are reserved so the shop floor has work to show.
+ * released through the stock room's own release, so its sheets and offcuts are reserved exactly as a person's
+ * release would reserve them. The rack's opening counts go into the ledger first.
  */
 async function seedReleasedPlan(db: Db, shopId: string, jobId: string, userId: string) {
+  // A size running low, so the stock room has a marker to show.
+  await db.insert(stockItems).values({ shopId, kind: 'sheet', material: 'MDF', nominalThickness: '1/2"', thicknessMm: 12, lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'none', onHand: 2, lowStockAt: 3, costCents: 3400, supplier: 'Hollow Creek Supply', location: 'Rack C2', buyable: true });
+  await recordOpeningCounts(db, shopId, null);
   const request = nestRequestSchema.parse(await buildNestRequest(db, shopId, jobId, { timeBudgetMs: 0 }));
   const plan = await optimize(request);
-  await db.transaction(async (tx) => {
-    const [row] = await tx
-      .insert(plans)
-      .values({
-        shopId,
-        jobId,
-        name: 'Carcasses and backs',
-        status: 'released',
-        request,
-        document: plan,
-        yieldRatio: plan.totals?.yield ?? null,
-        costCents: Math.round(plan.totals?.cost ?? 0),
-        createdBy: userId,
-      })
-      .returning({ id: plans.id });
-    for (const line of plan.stockToPull) {
-      const ref = stockRef.parse(line.stockId);
-      if (ref?.source === 'stock') {
-        await tx.update(stockItems).set({ reserved: sql`${stockItems.reserved} + ${line.count}` }).where(eq(stockItems.id, ref.id));
-        await tx.insert(stockMovements).values({ shopId, kind: 'reserved', stockItemId: ref.id, quantity: line.count, planId: row.id, userId, reason: 'Released plan' });
-      } else if (ref?.source === 'offcut') {
-        await tx.update(offcuts).set({ status: 'reserved' }).where(eq(offcuts.id, ref.id));
-        await tx.insert(stockMovements).values({ shopId, kind: 'reserved', offcutId: ref.id, quantity: 1, planId: row.id, userId, reason: 'Released plan' });
-      }
-    }
-  });
+  const [row] = await db
+    .insert(plans)
+    .values({
+      shopId,
+      jobId,
+      name: 'Carcasses and backs',
+      status: 'draft',
+      request,
+      document: plan,
+      yieldRatio: plan.totals?.yield ?? null,
+      costCents: Math.round(plan.totals?.cost ?? 0),
+      createdBy: userId,
+    })
+    .returning({ id: plans.id });
+  await releasePlan(db, { shopId, userId, planId: row.id });
 }

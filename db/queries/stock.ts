@@ -196,3 +196,21 @@ export async function stockValue(db: Db, shopId: string) {
   const stockCents = items.reduce((sum, i) => sum + i.onHand * costEachCents(i), 0);
   return { stockCents, offcutCents: rack[0]?.cents ?? 0, totalCents: stockCents + (rack[0]?.cents ?? 0) };
 }
+
+/**
+ * Opening counts for stock that reached the database without a ledger row (a seeded or migrated rack): one receipt
+ * per size and one "offcut created" per offcut, so the ledger sums to the counts from then on.
+ */
+export async function recordOpeningCounts(db: Db, shopId: string, userId: string | null) {
+  await db.transaction(async (tx) => {
+    const booked = await tx.select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId }).from(stockMovements).where(eq(stockMovements.shopId, shopId));
+    const hasRow = new Set(booked.flatMap((b) => [b.stockItemId, b.offcutId]).filter(Boolean));
+    const items = await tx.select().from(stockItems).where(eq(stockItems.shopId, shopId));
+    const rack = await tx.select().from(offcuts).where(and(eq(offcuts.shopId, shopId), inArray(offcuts.status, ['available', 'reserved'])));
+    const moves = [
+      ...items.filter((i) => i.onHand > 0 && !hasRow.has(i.id)).map((i) => ({ shopId, kind: 'received' as const, stockItemId: i.id, quantity: i.onHand, userId, reason: 'Opening count' })),
+      ...rack.filter((o) => !hasRow.has(o.id)).map((o) => ({ shopId, kind: 'offcut-created' as const, offcutId: o.id, quantity: 1, userId, reason: 'Opening count' })),
+    ];
+    if (moves.length) await tx.insert(stockMovements).values(moves);
+  });
+}
