@@ -29,3 +29,18 @@ export function stockMatchWarning(part: { material: string; thicknessMm: number 
 
 /** Solid wood is what the stock room holds as boards (sold by the board foot). */
 export const isSolidWood = (material: string, offers: readonly StockOffer[]) => offersOf(offers, material).some((o) => o.kind === 'board');
+
+/** The stock room's sheets and boards (any count: a size the shop keeps can be bought) and its available offcuts. */
+export function toStockOffers(
+  items: readonly { material: string; kind: 'sheet' | 'board'; thicknessMm: number; nominalThickness: string }[],
+  offcuts: readonly { material: string; thicknessMm: number; status: string }[],
+): StockOffer[] {
+  const all: StockOffer[] = [
+    ...items.map((i) => ({ material: i.material, kind: i.kind, thicknessMm: i.thicknessMm, nominal: i.nominalThickness })),
+    ...offcuts.filter((o) => o.status === 'available').map((o) => ({ material: o.material, kind: 'offcut' as const, thicknessMm: o.thicknessMm, nominal: '' })),
+  ];
+  // One offer per material, kind and thickness: a picker lists each once.
+  const seen = new Map<string, StockOffer>();
+  for (const o of all) seen.set(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`, seen.get(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`) ?? o);
+  return [...seen.values()];
+}

@@ -16,7 +16,7 @@ const sizeMm = (what: string) =>
     .positive(`${what} must be more than 0.`)
     .max(MAX_LENGTH_MM, `${what} above ${MAX_LENGTH_MM / 1000} m looks like a slipped unit.`);
 
-export const partInputSchema = z.object({
+const partShape = {
   label: z.string().trim().min(1, 'Give the part a name.').max(MAX_PART_LABEL, `Keep the name under ${MAX_PART_LABEL} characters.`),
   quantity: z
     .int({ error: 'Quantity must be a whole number.' })
@@ -27,18 +27,38 @@ export const partInputSchema = z.object({
   widthMm: sizeMm('Width'),
   thicknessMm: sizeMm('Thickness'),
   material: z.string().trim().min(1, 'Pick or type a material.').max(MAX_PART_MATERIAL, `Keep the material under ${MAX_PART_MATERIAL} characters.`),
-  grain: grainRuleSchema.default('along-length'),
+  grain: grainRuleSchema,
   /** Extra length the part's joints need; informational, already inside `lengthMm`. */
-  jointAllowanceMm: z.number().finite().min(0, 'Joint allowance cannot be negative.').max(MAX_LENGTH_MM).default(0),
-  notes: z.string().trim().max(MAX_PART_NOTES, `Keep notes under ${MAX_PART_NOTES} characters.`).default(''),
+  jointAllowanceMm: z.number().finite().min(0, 'Joint allowance cannot be negative.').max(MAX_LENGTH_MM),
+  notes: z.string().trim().max(MAX_PART_NOTES, `Keep notes under ${MAX_PART_NOTES} characters.`),
+};
+
+export const partInputSchema = z.object({
+  ...partShape,
+  grain: partShape.grain.default('along-length'),
+  jointAllowanceMm: partShape.jointAllowanceMm.default(0),
+  notes: partShape.notes.default(''),
 });
 export type PartInput = z.output<typeof partInputSchema>;
 
-export const partPatchSchema = partInputSchema.partial();
+/** A change to some cells of a row: no defaults, so a field left out stays as it is. */
+export const partPatchSchema = z.object(partShape).partial();
 export type PartPatch = z.output<typeof partPatchSchema>;
 
 /** Fields a drawer schedule owns on its rows: change the schedule, not the row. */
 export const SCHEDULE_OWNED_FIELDS = ['label', 'quantity', 'lengthMm', 'widthMm', 'thicknessMm', 'material', 'grain', 'jointAllowanceMm'] as const;
+
+export const PART_FIELD_NAMES: Record<(typeof SCHEDULE_OWNED_FIELDS)[number] | 'notes', string> = {
+  label: 'name',
+  quantity: 'quantity',
+  lengthMm: 'length',
+  widthMm: 'width',
+  thicknessMm: 'thickness',
+  material: 'material',
+  grain: 'grain',
+  jointAllowanceMm: 'joint allowance',
+  notes: 'notes',
+};
 
 export const partParams = z.object({ id: z.uuid(), partId: z.uuid() });
 

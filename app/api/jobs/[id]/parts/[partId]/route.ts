@@ -1,0 +1,15 @@
+import { deletePart, updatePart } from '@/db/queries/parts';
+import { notFound } from '@/lib/api/errors';
+import { route } from '@/lib/api/route';
+import { partParams, partPatchSchema } from '@/shared/schemas/part';
+
+// PATCH /api/jobs/:id/parts/:partId – change cells of one row (a drawer schedule's row: notes only)
+export const PATCH = route({ permission: 'cutlist:write', params: partParams, body: partPatchSchema }, async ({ db, user, params, body }) => {
+  return (await updatePart(db, user.shopId, user.id, params.id, params.partId, body)) ?? Promise.reject(notFound('That part'));
+});
+
+// DELETE /api/jobs/:id/parts/:partId – delete a typed or uploaded row
+export const DELETE = route({ permission: 'cutlist:write', params: partParams }, async ({ db, user, params }) => {
+  if (!(await deletePart(db, user.shopId, user.id, params.id, params.partId))) throw notFound('That part');
+  return { ok: true };
+});
