@@ -88,6 +88,7 @@ export function parseStockCsv(csv: string, unit: LengthUnit): StockCsvResult {
     const messages: string[] = [];
     const note = (field: string, msg: string) => messages.push(`${field}: ${msg}`);
 
+    if (!cell('material')) note('material', 'is empty');
     const kindText = cell('kind').toLowerCase();
     const kind = kindText.startsWith('sheet') ? 'sheet' : kindText.startsWith('board') || kindText === 'lumber' ? 'board' : null;
     if (!kind) note('kind', `"${cell('kind')}" is not sheet or board`);

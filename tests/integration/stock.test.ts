@@ -1,0 +1,149 @@
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { and, eq } from 'drizzle-orm';
+import type { Db, DbHandle } from '@/db/open';
+import { useDatabase } from '@/db/client';
+import { offcuts, plans, stockItems } from '@/db/schema';
+import { adjustStock, createStockItem, ledgerCounts, listMovements, listOffcuts, listStock, receiveStock, recordOffcut, scrapOffcut, stockValue } from '@/db/queries/stock';
+import { finishPlan } from '@/db/queries/plan-lifecycle';
+import { getTakeoff } from '@/db/queries/takeoff';
+import { seedDemoShop } from '@/seeds/demo-shop';
+import { stockItemSchema } from '@/shared/schemas/stock';
+import { readPlan } from '@/lib/nesting';
+import { inches } from '@/lib/units/length';
+import { createTestDatabase } from '../support/test-db';
+import { request as httpRequest, TEST_SECRET, twoShops } from '../support/fixtures';
+import { POST as importRoute } from '@/app/api/stock/import/route';
+import { GET as stockRoute } from '@/app/api/stock/route';
+
+process.env.NEXTAUTH_SECRET = TEST_SECRET;
+
+let handle: DbHandle;
+let db: Db;
+let demoShop: string;
+let fx: Awaited<ReturnType<typeof twoShops>>;
+beforeAll(async () => {
+  handle = await createTestDatabase();
+  useDatabase(handle);
+  db = handle.db;
+  demoShop = (await seedDemoShop(db)).shopId;
+  fx = await twoShops(db);
+});
+afterAll(() => handle.close());
+
+async function expectLedgerMatches(shopId: string) {
+  const ledger = await ledgerCounts(db, shopId);
+  for (const item of await db.select().from(stockItems).where(eq(stockItems.shopId, shopId))) {
+    const row = ledger.find((l) => l.stockItemId === item.id);
+    expect({ onHand: row?.onHand ?? 0, reserved: row?.reserved ?? 0 }, `${item.material} ${item.nominalThickness}`).toEqual({ onHand: item.onHand, reserved: item.reserved });
+  }
+  for (const o of await db.select().from(offcuts).where(eq(offcuts.shopId, shopId))) {
+    const row = ledger.find((l) => l.offcutId === o.id);
+    const present = o.status === 'available' || o.status === 'reserved' ? 1 : 0;
+    expect({ onHand: row?.onHand ?? 0, reserved: row?.reserved ?? 0 }, `offcut ${o.material}`).toEqual({ onHand: present, reserved: o.status === 'reserved' ? 1 : 0 });
+  }
+}
+
+const newSheet = (over: Partial<Parameters<typeof stockItemSchema.parse>[0]> = {}) =>
+  createStockItem(db, fx.mine.id, fx.owner.id, stockItemSchema.parse({ kind: 'sheet', material: 'Test ply', nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand: 4, costCents: 5000, ...over }));
+
+describe('the demo shop ledger', () => {
+  test('sums to the counts after seeding and releasing the kitchen plan', async () => {
+    await expectLedgerMatches(demoShop);
+  });
+
+  test('still sums after the cutter finishes the kitchen plan, whose offcuts land on the rack', async () => {
+    const [plan] = await db.select().from(plans).where(and(eq(plans.shopId, demoShop), eq(plans.status, 'released')));
+    const document = readPlan(plan.document);
+    const result = await finishPlan(db, { shopId: demoShop, userId: plan.createdBy!, planId: plan.id, body: { offcuts: [], damaged: [] } });
+    expect(result.offcuts.length).toBe(document.pieces.reduce((n, p) => n + (p.offcuts?.length ?? 0), 0));
+    expect((await listOffcuts(db, demoShop)).filter((o) => o.sourcePlanId === plan.id)).toHaveLength(result.offcuts.length);
+    await expectLedgerMatches(demoShop);
+  });
+});
+
+describe('counts in the stock room', () => {
+  test('receiving adds to the count and books a receipt with who did it', async () => {
+    const item = await newSheet();
+    await receiveStock(db, fx.mine.id, fx.owner.id, item.id, { quantity: 6, reason: 'Delivery 1182' });
+    expect((await db.select().from(stockItems).where(eq(stockItems.id, item.id)))[0].onHand).toBe(10);
+    const [latest] = await listMovements(db, fx.mine.id, { stockItemId: item.id });
+    expect(latest).toMatchObject({ kind: 'received', quantity: 6, reason: 'Delivery 1182', who: 'Olu Birch' });
+    await expectLedgerMatches(fx.mine.id);
+  });
+
+  test('an adjustment sets the counted figure and records the difference with its reason', async () => {
+    const item = await newSheet({ onHand: 7 });
+    await adjustStock(db, fx.mine.id, fx.owner.id, item.id, { count: 5, reason: 'Counted: two water-damaged' });
+    const [latest] = await listMovements(db, fx.mine.id, { stockItemId: item.id });
+    expect(latest).toMatchObject({ kind: 'adjusted', quantity: -2, reason: 'Counted: two water-damaged' });
+    await expectLedgerMatches(fx.mine.id);
+  });
+
+  test('a count below what released plans hold is refused, and the database refuses it too', async () => {
+    const item = await newSheet({ onHand: 3 });
+    await db.update(stockItems).set({ reserved: 2 }).where(eq(stockItems.id, item.id));
+    await expect(adjustStock(db, fx.mine.id, fx.owner.id, item.id, { count: 1, reason: 'Counted' })).rejects.toMatchObject({ status: 409 });
+    await expect(db.update(stockItems).set({ onHand: 1 }).where(eq(stockItems.id, item.id))).rejects.toThrow();
+    await expect(db.update(stockItems).set({ onHand: -1, reserved: 0 }).where(eq(stockItems.id, item.id))).rejects.toThrow();
+    await db.update(stockItems).set({ reserved: 0 }).where(eq(stockItems.id, item.id));
+  });
+
+  test('an offcut recorded at the saw can be scrapped once, and by no other shop', async () => {
+    const o = await recordOffcut(db, fx.mine.id, fx.cutter.id, { material: 'Test ply', thicknessMm: 18, lengthMm: 700, widthMm: 300, grain: 'along-length', location: 'Bin 2' });
+    await scrapOffcut(db, fx.mine.id, fx.cutter.id, o.id, 'Delaminated');
+    await expect(scrapOffcut(db, fx.mine.id, fx.cutter.id, o.id, 'again')).rejects.toMatchObject({ status: 409 });
+    expect(await scrapOffcut(db, fx.theirs.id, fx.otherOwner.id, o.id, 'not theirs')).toBeNull();
+    await expectLedgerMatches(fx.mine.id);
+  });
+
+  test('stock value counts sheets each and boards by the board foot (AHEC: 4/4 × 6″ × 8′ = 4 BF, at $9.25/bf = $37.00)', async () => {
+    const { shopId } = { shopId: fx.theirs.id };
+    await createStockItem(db, shopId, fx.otherOwner.id, stockItemSchema.parse({ kind: 'board', material: 'White oak', nominalThickness: '4/4', thicknessMm: inches(13 / 16), lengthMm: inches(96), widthMm: inches(6), onHand: 10, costCents: 925 }));
+    await createStockItem(db, shopId, fx.otherOwner.id, stockItemSchema.parse({ kind: 'sheet', material: 'Maple ply', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: inches(96), widthMm: inches(48), onHand: 2, costCents: 9400 }));
+    expect((await stockValue(db, shopId)).stockCents).toBe(10 * 3700 + 2 * 9400);
+    expect((await listStock(db, fx.mine.id)).some((i) => i.material === 'White oak')).toBe(false);
+  });
+});
+
+describe('importing stock from CSV', () => {
+  const csv = 'kind,material,thickness,length,width,quantity,cost\nsheet,Import MDF,18 mm,2440 mm,1220 mm,3,46\nsheet,,18 mm,two metres,1220 mm,3,46\n';
+  const post = async (commit: string) => importRoute(await httpRequest('/api/stock/import', { method: 'POST', user: fx.owner, body: { csv, commit } }), { params: Promise.resolve({}) });
+
+  test('lists every bad row and writes nothing when asked for all rows', async () => {
+    const res = await post('all');
+    expect(res.status).toBe(422);
+    expect((await res.json()).fields.csv[0]).toMatch(/^Line 3: .*material: is empty.*length/);
+    expect(await listStock(db, fx.mine.id, { material: 'Import MDF' })).toEqual([]);
+  });
+
+  test('writes only the valid rows when the user chooses them, each with its opening receipt', async () => {
+    const res = await post('valid');
+    expect(res.status).toBe(200);
+    expect(await res.json()).toMatchObject({ imported: 1, valid: 1, errors: [{ line: 3 }] });
+    const [item] = await listStock(db, fx.mine.id, { material: 'Import MDF' });
+    expect(item).toMatchObject({ onHand: 3, costCents: 4600 });
+    await expectLedgerMatches(fx.mine.id);
+  });
+
+  test('a cutter sees the rack without a single price', async () => {
+    const res = await stockRoute(await httpRequest('/api/stock', { user: fx.cutter }), { params: Promise.resolve({}) });
+    const body = await res.json();
+    expect(body.items.length).toBeGreaterThan(0);
+    expect(JSON.stringify(body)).not.toMatch(/cost|value/i);
+  });
+});
+
+describe('the takeoff', () => {
+  test("for the demo kitchen: sheets to pull, their cost with the shop's 15 % waste, and whether the rack covers it", async () => {
+    const [kitchen] = await db.select().from(plans).where(eq(plans.shopId, demoShop));
+    const takeoff = (await getTakeoff(db, demoShop, kitchen.jobId))!;
+    expect(takeoff.wastePercent).toBe(15);
+    expect(takeoff.pull.length + takeoff.buy.length).toBeGreaterThan(0);
+    for (const line of [...takeoff.pull, ...takeoff.buy]) {
+      expect(line.costCents).toBe(line.costEachCents * line.count);
+      // DOMAIN.md [derived]: buy = need / (1 − waste), whole pieces
+      if (line.kind !== 'offcut') expect(line.withWaste).toBe(Math.ceil(line.count / 0.85 - 1e-9));
+    }
+    expect(await getTakeoff(db, fx.mine.id, kitchen.jobId)).toBeNull();
+  });
+});
