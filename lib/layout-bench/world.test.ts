@@ -39,3 +39,12 @@ describe('the bench world and hit-testing on the geometry model', () => {
     expect(placementsIn(doc, frames, { x: 0, y: 0, w: 2440 + PIECE_GAP + 200, h: frames[0].y + 200 }).sort()).toEqual(['a#1', 'b#1']);
   });
 });
+
+describe('part colours', () => {
+  test('parts of one drawer schedule share a tone, and a tone does not change between visits', async () => {
+    const { partTone, PART_TONES } = await import('@/lib/layout-bench/colors');
+    expect(partTone('schedule-1', 'Maple ply')).toBe(partTone('schedule-1', 'Baltic birch'));
+    expect(partTone(undefined, ' maple PLY ')).toBe(partTone(undefined, 'Maple ply'));
+    expect(PART_TONES).toContain(partTone('x', 'y'));
+  });
+});

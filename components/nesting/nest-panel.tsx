@@ -1,0 +1,201 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useRouter } from 'next/navigation';
+import { useMemo, useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { api, ApiError } from '@/lib/client/api';
+import { formatMoney } from '@/lib/money';
+import { formatLength } from '@/lib/units/format-length';
+import { cuttingStyleSchema, objectiveSchema, type NestRequestInput, type NestStock, type Plan } from '@/shared/schemas/nesting';
+import type { NestSettingsOverride } from '@/shared/schemas/plan-save';
+import type { ShopSettings } from '@/shared/schemas/shop';
+import { lengthInput, shopLengthUnit } from '@/shared/schemas/units';
+import { NestProgressBar } from './nest-progress';
+import { PlanSummary } from './plan-summary';
+import { useNestingWorker } from './use-nesting-worker';
+
+const settingsForm = (unit: 'in' | 'mm') =>
+  z.object({
+    kerf: lengthInput(unit),
+    trim: lengthInput(unit),
+    minOffcutLength: lengthInput(unit),
+    minOffcutWidth: lengthInput(unit),
+    style: cuttingStyleSchema,
+    objective: objectiveSchema,
+    timeBudgetSec: z.coerce.number({ error: 'Enter seconds.' }).min(0, 'At least 0 s.').max(120, 'At most 120 s.'),
+    preferOffcuts: z.boolean(),
+    stockIds: z.array(z.string()).min(1, 'Choose at least one kind of stock.'),
+  });
+
+const STOCK_KIND = { sheet: 'Sheets', board: 'Boards', offcut: 'Offcuts' } as const;
+
+interface NestResult {
+  plan: Plan;
+  stockIds: string[];
+  settings: NestSettingsOverride;
+}
+
+/** Choose stock and settings, nest in the worker with progress, look at the result and save it as a draft. */
+export function NestPanel({ jobId, shop, showPrices }: { jobId: string; shop: ShopSettings; showPrices: boolean }) {
+  const offered = useQuery({ queryKey: ['nest-request', jobId], queryFn: () => api<NestRequestInput>(`/api/jobs/${jobId}/nest-request`) });
+  if (offered.isPending) return <p className="text-sm text-graphite-mute">Loading the stock on offer…</p>;
+  if (offered.isError) return <p className="field-error" role="alert">Could not load the stock on offer: {offered.error.message}</p>;
+  return <NestForm jobId={jobId} shop={shop} showPrices={showPrices} offered={offered.data} />;
+}
+
+function NestForm({ jobId, shop, showPrices, offered }: { jobId: string; shop: ShopSettings; showPrices: boolean; offered: NestRequestInput }) {
+  const unit = shopLengthUnit(shop.units);
+  const schema = useMemo(() => settingsForm(unit), [unit]);
+  const len = (mm: number) => formatLength(mm, shop.units);
+  const s = offered.settings ?? {};
+  const form = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
+    resolver: zodResolver(schema),
+    defaultValues: {
+      kerf: len(s.kerf ?? shop.kerfMm),
+      trim: len(s.trim ?? shop.edgeTrimMm),
+      minOffcutLength: len(s.minOffcutLength ?? shop.minOffcutLengthMm),
+      minOffcutWidth: len(s.minOffcutWidth ?? shop.minOffcutWidthMm),
+      style: 'panel',
+      objective: 'cost',
+      timeBudgetSec: 3,
+      preferOffcuts: true,
+      stockIds: offered.stock.map((st) => st.id),
+    },
+  });
+  const { errors } = form.formState;
+  const worker = useNestingWorker();
+  const [result, setResult] = useState<NestResult | null>(null);
+  const [failure, setFailure] = useState<string | null>(null);
+  const [budgetMs, setBudgetMs] = useState(3000);
+  const partCount = offered.parts.reduce((n, p) => n + (p.quantity ?? 1), 0);
+
+  const nest = form.handleSubmit(async (v) => {
+    const settings: NestSettingsOverride = {
+      kerf: v.kerf, trim: v.trim, minOffcutLength: v.minOffcutLength, minOffcutWidth: v.minOffcutWidth,
+      style: v.style, objective: v.objective, timeBudgetMs: Math.round(v.timeBudgetSec * 1000), preferOffcuts: v.preferOffcuts,
+    };
+    const chosen = new Set(v.stockIds);
+    const request = { parts: offered.parts, stock: offered.stock.filter((st) => chosen.has(st.id)), settings: { ...offered.settings, ...settings } };
+    setResult(null);
+    setFailure(null);
+    setBudgetMs(settings.timeBudgetMs ?? 0);
+    const outcome = await worker.run(request);
+    if (outcome.ok) setResult({ plan: outcome.plan, stockIds: v.stockIds, settings });
+    else setFailure(outcome.error === 'invalid-request' ? outcome.issues.map((i) => `${i.path}: ${i.message}`).join('; ') : outcome.message);
+  });
+
+  const groups = (['sheet', 'board', 'offcut'] as const).map((kind) => ({ kind, stock: offered.stock.filter((st) => st.kind === kind) })).filter((g) => g.stock.length);
+
+  return (
+    <div className="space-y-5">
+      <form onSubmit={nest} className="space-y-4" aria-label="Nest settings" noValidate>
+        <fieldset className="card overflow-x-auto p-3">
+          <legend className="px-1 text-sm font-semibold">Stock to nest on</legend>
+          {offered.stock.length === 0 && <p className="text-sm text-graphite-mute">The stock room has nothing on offer yet.</p>}
+          {groups.map((g) => (
+            <table key={g.kind} className="data-table mb-2" aria-label={STOCK_KIND[g.kind]}>
+              <thead>
+                <tr><th className="w-8"></th><th>{STOCK_KIND[g.kind]}</th><th className="num">Size</th><th className="num">Available</th>{showPrices && <th className="num">Each</th>}<th>Where</th></tr>
+              </thead>
+              <tbody>
+                {g.stock.map((st) => (
+                  <tr key={st.id}>
+                    <td><input type="checkbox" value={st.id} aria-label={stockLabel(st, len)} {...form.register('stockIds')} /></td>
+                    <td>{len(st.thickness)} {st.material}{st.grain === 'none' ? ' (no grain)' : ''}</td>
+                    <td className="num">{len(st.length)} × {len(st.width)}</td>
+                    <td className="num">{st.count === null ? 'buy as needed' : `${st.count} on hand`}</td>
+                    {showPrices && <td className="num">{formatMoney(Math.round(st.costEach ?? 0), shop.currency)}</td>}
+                    <td className="text-graphite-mute">{st.source ?? ''}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          ))}
+          {errors.stockIds && <p className="field-error">{errors.stockIds.message}</p>}
+        </fieldset>
+
+        <fieldset className="card grid gap-3 p-3 sm:grid-cols-4">
+          <legend className="px-1 text-sm font-semibold">Settings</legend>
+          <Field id="kerf" label="Saw kerf" error={errors.kerf?.message}><input id="kerf" className="field-input" {...form.register('kerf')} /></Field>
+          <Field id="trim" label="Edge trim (each side)" error={errors.trim?.message}><input id="trim" className="field-input" {...form.register('trim')} /></Field>
+          <Field id="min-offcut-length" label="Keep offcuts this long" error={errors.minOffcutLength?.message}><input id="min-offcut-length" className="field-input" {...form.register('minOffcutLength')} /></Field>
+          <Field id="min-offcut-width" label="… and this wide" error={errors.minOffcutWidth?.message}><input id="min-offcut-width" className="field-input" {...form.register('minOffcutWidth')} /></Field>
+          <Field id="style" label="Cutting style">
+            <select id="style" className="field-input" {...form.register('style')}>
+              <option value="panel">Panel saw: any through-cuts</option>
+              <option value="strips">Table saw strips: rip, crosscut, trim</option>
+            </select>
+          </Field>
+          <Field id="objective" label="Aim for">
+            <select id="objective" className="field-input" {...form.register('objective')}>
+              <option value="cost">Lowest material cost</option>
+              <option value="pieces">Fewest stock pieces</option>
+              <option value="cuts">Fewest cuts</option>
+            </select>
+          </Field>
+          <Field id="time-budget" label="Search for (seconds)" error={errors.timeBudgetSec?.message}><input id="time-budget" type="number" min={0} max={120} step={1} className="field-input" {...form.register('timeBudgetSec')} /></Field>
+          <label className="flex items-center gap-2 self-end pb-2 text-sm"><input type="checkbox" {...form.register('preferOffcuts')} /> Use offcuts first</label>
+        </fieldset>
+
+        <div className="flex items-center gap-3">
+          <button type="submit" className="btn-accent" disabled={worker.running || partCount === 0}>Nest {partCount} part{partCount === 1 ? '' : 's'}</button>
+          {partCount === 0 && <span className="text-sm text-graphite-mute">Add parts to the cut list first.</span>}
+        </div>
+      </form>
+
+      {worker.running && <NestProgressBar progress={worker.progress} budgetMs={budgetMs} label="Nesting in the background — the page stays usable" onCancel={worker.cancel} />}
+      {failure && <p className="field-error" role="alert">The Nest could not run: {failure}</p>}
+      {result && <NestOutcome jobId={jobId} result={result} shop={shop} showPrices={showPrices} />}
+    </div>
+  );
+}
+
+function NestOutcome({ jobId, result, shop, showPrices }: { jobId: string; result: NestResult; shop: ShopSettings; showPrices: boolean }) {
+  const router = useRouter();
+  const queryClient = useQueryClient();
+  const [name, setName] = useState(`Plan ${new Date().toLocaleDateString()}`);
+  const save = useMutation({
+    mutationFn: () => api<{ id: string }>(`/api/jobs/${jobId}/plans`, { method: 'POST', body: { name, settings: result.settings, stockIds: result.stockIds, plan: result.plan } }),
+    onSuccess: ({ id }) => {
+      void queryClient.invalidateQueries({ queryKey: ['plans', jobId] });
+      router.push(`/jobs/${jobId}/plan/${id}`);
+    },
+  });
+  const problems = save.error instanceof ApiError ? Object.values(save.error.fields).flat() : [];
+  return (
+    <section aria-labelledby="nest-result" className="space-y-3">
+      <h3 id="nest-result" className="text-base font-semibold">Result</h3>
+      <PlanSummary plan={result.plan} units={shop.units} currency={shop.currency} showPrices={showPrices} />
+      <div className="flex flex-wrap items-end gap-3">
+        <div className="w-72">
+          <label htmlFor="plan-name" className="field-label">Plan name</label>
+          <input id="plan-name" className="field-input" value={name} onChange={(e) => setName(e.target.value)} maxLength={120} />
+        </div>
+        <button type="button" className="btn-primary" disabled={save.isPending || !name.trim()} onClick={() => save.mutate()}>
+          {save.isPending ? 'Saving…' : 'Save as draft plan'}
+        </button>
+      </div>
+      {save.error && (
+        <div className="field-error" role="alert">
+          {save.error.message}
+          {problems.length > 0 && <ul className="ml-5 list-disc">{problems.slice(0, 8).map((m) => <li key={m}>{m}</li>)}</ul>}
+        </div>
+      )}
+    </section>
+  );
+}
+
+function Field({ id, label, error, children }: { id: string; label: string; error?: string; children: React.ReactNode }) {
+  return (
+    <div>
+      <label htmlFor={id} className="field-label">{label}</label>
+      {children}
+      {error && <p className="field-error">{error}</p>}
+    </div>
+  );
+}
+
+const stockLabel = (st: NestStock | NestRequestInput['stock'][number], len: (mm: number) => string) => `${st.kind} ${len(st.thickness)} ${st.material} ${len(st.length)} × ${len(st.width)}${st.count === null ? ' to buy' : ''}`;
