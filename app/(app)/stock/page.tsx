@@ -1,99 +1,100 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { getDb } from '@/db/client';
 import { getShopSettings } from '@/db/queries/shops';
-import { listOffcuts, listStock } from '@/db/queries/stock';
+import { listMovements, listOffcuts, listStock, stockValue } from '@/db/queries/stock';
+import { MovementHistory } from '@/components/stock/movement-history';
+import { OffcutRack } from '@/components/stock/offcut-rack';
+import { StockFilters } from '@/components/stock/stock-filters';
+import { StockRoomActions } from '@/components/stock/stock-room-actions';
+import { StockTable } from '@/components/stock/stock-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
-import { StatusBadge } from '@/components/ui/status-badge';
 import { requirePageUser } from '@/lib/auth/session';
 import { can } from '@/lib/auth/permissions';
 import { formatLength } from '@/lib/units/format-length';
 import { formatMoney } from '@/lib/money';
+import { stockFilterSchema } from '@/shared/schemas/stock';
 
 export const metadata: Metadata = { title: 'Stock room' };
 
-export default async function StockPage() {
+const VIEWS = [
+  { id: 'stock', label: 'Sheets and boards' },
+  { id: 'rack', label: 'Offcut rack' },
+  { id: 'history', label: 'History' },
+] as const;
+
+export default async function StockPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser('stock:read');
+  const raw = await searchParams;
+  const view = VIEWS.find((v) => v.id === raw.view)?.id ?? 'stock';
+  const parsed = stockFilterSchema.safeParse(Object.fromEntries(Object.entries(raw).filter(([, v]) => typeof v === 'string' && v !== '')));
+  const filter = parsed.success ? parsed.data : {};
   const db = await getDb();
-  const [settings, stock, rack] = await Promise.all([getShopSettings(db, user.shopId), listStock(db, user.shopId), listOffcuts(db, user.shopId)]);
-  if (!settings) return null;
   const showPrices = can(user.role, 'prices:read');
+  const [settings, allItems, items, rack, movements, value] = await Promise.all([
+    getShopSettings(db, user.shopId),
+    listStock(db, user.shopId),
+    view === 'stock' ? listStock(db, user.shopId, filter) : [],
+    view === 'rack' ? listOffcuts(db, user.shopId, filter) : [],
+    view === 'history' ? listMovements(db, user.shopId) : [],
+    showPrices ? stockValue(db, user.shopId) : null,
+  ]);
+  if (!settings) return null;
   const len = (mm: number) => formatLength(mm, settings.units);
-  const money = (cents: number) => formatMoney(cents, settings.currency);
+  const money = showPrices ? (cents: number) => formatMoney(cents, settings.currency) : null;
+  const lowCount = allItems.filter((i) => i.low).length;
+  const materials = [...new Set(allItems.map((i) => i.material))].sort();
+  const locations = [...new Set(allItems.map((i) => i.location).filter(Boolean))].sort();
 
   return (
     <>
-      <PageHeader title="Stock room" lead="Sheets, boards and offcuts on the rack. Released plans reserve what they use." />
-      <section className="mb-8" aria-labelledby="stock-heading">
-        <h2 id="stock-heading" className="mb-3">Sheets and boards</h2>
-        {stock.length === 0 ? (
-          <EmptyState title="The rack is empty.">Receive stock to start.</EmptyState>
-        ) : (
-          <div className="card overflow-x-auto">
-            <table className="data-table" aria-label="Sheets and boards">
-              <thead>
-                <tr>
-                  <th>Material</th>
-                  <th>Kind</th>
-                  <th>Thickness</th>
-                  <th className="num">Length × width</th>
-                  <th className="num">On hand</th>
-                  <th className="num">Reserved</th>
-                  {showPrices && <th className="num">Cost</th>}
-                  <th>Location</th>
-                </tr>
-              </thead>
-              <tbody>
-                {stock.map((s) => (
-                  <tr key={s.id}>
-                    <td className="font-medium">{s.material}{s.grade && <span className="ml-1 text-xs text-graphite-mute">{s.grade}</span>}</td>
-                    <td>{s.kind === 'sheet' ? 'Sheet' : `Board ${s.surfacing}`.trim()}</td>
-                    <td>{s.nominalThickness}</td>
-                    <td className="num whitespace-nowrap">{len(s.lengthMm)} × {len(s.widthMm)}</td>
-                    <td className="num">
-                      {s.onHand} {s.onHand <= s.lowStockAt && <StatusBadge tone="warn">low</StatusBadge>}
-                    </td>
-                    <td className="num">{s.reserved}</td>
-                    {showPrices && <td className="num">{money(s.costCents)}{s.kind === 'board' ? ' /bf' : ' ea'}</td>}
-                    <td>{s.location}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
+      <PageHeader title="Stock room" lead="Sheets, boards and offcuts on the rack. Released plans reserve what they use; finished plans take it and rack their offcuts." />
+      <div className="mb-5 grid gap-3 sm:grid-cols-3">
+        {value && money && (
+          <div className="card p-4" data-testid="stock-value">
+            <div className="text-xs uppercase tracking-wide text-graphite-mute">Stock value at cost</div>
+            <div className="num text-left text-2xl font-semibold">{money(value.totalCents)}</div>
+            <div className="text-xs text-graphite-mute">{money(value.stockCents)} in sheets and boards · {money(value.offcutCents)} in offcuts</div>
           </div>
         )}
-      </section>
-      <section aria-labelledby="offcut-heading">
-        <h2 id="offcut-heading" className="mb-3">Offcut rack</h2>
-        {rack.length === 0 ? (
-          <EmptyState title="No offcuts kept.">Finished plans put their usable offcuts here.</EmptyState>
+        <div className="card p-4">
+          <div className="text-xs uppercase tracking-wide text-graphite-mute">Sizes running low</div>
+          <div className={`num text-left text-2xl font-semibold ${lowCount ? 'text-amber' : ''}`}>{lowCount}</div>
+          <div className="text-xs text-graphite-mute">free count at or below the size’s mark</div>
+        </div>
+      </div>
+
+      <StockRoomActions units={settings.units} canWrite={can(user.role, 'stock:write')} canRecord={can(user.role, 'offcuts:record')} />
+
+      <nav aria-label="Stock room views" className="mb-4 flex gap-1 border-b border-paper-edge">
+        {VIEWS.map((v) => (
+          <Link
+            key={v.id}
+            href={v.id === 'stock' ? '/stock' : `/stock?view=${v.id}`}
+            aria-current={v.id === view ? 'page' : undefined}
+            className={`-mb-px border-b-2 px-4 py-2 text-sm font-medium no-underline ${v.id === view ? 'border-oak text-graphite' : 'border-transparent text-graphite-mute hover:text-graphite'}`}
+          >
+            {v.label}
+          </Link>
+        ))}
+      </nav>
+
+      {view !== 'history' && <StockFilters key={view} showStatus={view === 'rack'} materials={materials} locations={locations} />}
+
+      {view === 'stock' &&
+        (items.length === 0 ? (
+          <EmptyState title={allItems.length ? 'Nothing matches these filters.' : 'The rack is empty.'}>{allItems.length ? 'Clear a filter to see more.' : 'Add a stock size or import a CSV to start.'}</EmptyState>
         ) : (
-          <div className="card overflow-x-auto">
-            <table className="data-table" aria-label="Offcuts">
-              <thead>
-                <tr>
-                  <th>Material</th>
-                  <th className="num">Thickness</th>
-                  <th className="num">Length × width</th>
-                  <th>Status</th>
-                  <th>Location</th>
-                </tr>
-              </thead>
-              <tbody>
-                {rack.map((o) => (
-                  <tr key={o.id}>
-                    <td className="font-medium">{o.material}</td>
-                    <td className="num">{len(o.thicknessMm)}</td>
-                    <td className="num whitespace-nowrap">{len(o.lengthMm)} × {len(o.widthMm)}</td>
-                    <td><StatusBadge tone={o.status === 'available' ? 'good' : 'neutral'}>{o.status}</StatusBadge></td>
-                    <td>{o.location}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-        )}
-      </section>
+          <StockTable items={items} len={len} money={money} canWrite={can(user.role, 'stock:write')} />
+        ))}
+      {view === 'rack' &&
+        (rack.length === 0 ? (
+          <EmptyState title="No offcuts here.">Finished plans put their usable offcuts on the rack; cutters can record others.</EmptyState>
+        ) : (
+          <OffcutRack rack={rack} len={len} money={money} canScrap={can(user.role, 'offcuts:record')} />
+        ))}
+      {view === 'history' && (movements.length === 0 ? <EmptyState title="No stock has moved yet." /> : <MovementHistory movements={movements} />)}
     </>
   );
 }

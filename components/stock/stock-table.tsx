@@ -1,0 +1,61 @@
+import { StatusBadge } from '@/components/ui/status-badge';
+import type { StockItemRow } from '@/db/queries/stock';
+import { StockRowActions } from './stock-row-actions';
+
+/** Sheets and boards with free, reserved and low-stock figures; prices and value only for those who may see them. */
+export function StockTable({ items, len, money, canWrite }: { items: StockItemRow[]; len: (mm: number) => string; money: ((cents: number) => string) | null; canWrite: boolean }) {
+  return (
+    <div className="card overflow-x-auto">
+      <table className="data-table" aria-label="Sheets and boards">
+        <thead>
+          <tr>
+            <th>Material</th>
+            <th>Kind</th>
+            <th>Thickness</th>
+            <th className="num">Length × width</th>
+            <th className="num">On hand</th>
+            <th className="num">Reserved</th>
+            <th className="num">Free</th>
+            {money && <th className="num">Cost</th>}
+            {money && <th className="num">Value</th>}
+            <th>Location</th>
+            {canWrite && <th className="sr-only">Actions</th>}
+          </tr>
+        </thead>
+        <tbody>
+          {items.map((s) => {
+            const label = `${s.material} ${s.nominalThickness} ${len(s.lengthMm)} × ${len(s.widthMm)}`;
+            return (
+              <tr key={s.id} data-testid="stock-row" data-material={s.material}>
+                <td className="font-medium">
+                  {s.material}
+                  {s.grade && <span className="ml-1 text-xs text-graphite-mute">{s.grade}</span>}
+                  {s.buyable && <span className="ml-1 text-xs text-graphite-mute" title={s.supplier}>· can buy</span>}
+                </td>
+                <td>{s.kind === 'sheet' ? 'Sheet' : `Board ${s.surfacing}`.trim()}</td>
+                <td>
+                  {s.nominalThickness}
+                  <span className="ml-1 text-xs text-graphite-mute">({len(s.thicknessMm)})</span>
+                </td>
+                <td className="num whitespace-nowrap">{len(s.lengthMm)} × {len(s.widthMm)}</td>
+                <td className="num" data-testid="on-hand">{s.onHand}</td>
+                <td className="num">{s.reserved}</td>
+                <td className="num whitespace-nowrap">
+                  {s.free} {s.low && <StatusBadge tone="warn">low</StatusBadge>}
+                </td>
+                {money && <td className="num whitespace-nowrap">{money(s.costCents)}{s.kind === 'board' ? ' /bf' : ' ea'}</td>}
+                {money && <td className="num">{money(s.valueCents)}</td>}
+                <td>{s.location}</td>
+                {canWrite && (
+                  <td className="text-right">
+                    <StockRowActions id={s.id} label={label} onHand={s.onHand} />
+                  </td>
+                )}
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}
