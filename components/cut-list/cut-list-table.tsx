@@ -1,0 +1,321 @@
+'use client';
+
+import Link from 'next/link';
+import { useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import { ApiError } from '@/lib/client/api';
+import { cutListTotals } from '@/lib/cut-list/totals';
+import { offersOf, stockMatchWarning, type StockOffer } from '@/lib/cut-list/stock-match';
+import { formatArea } from '@/lib/units/format-area';
+import { formatLength } from '@/lib/units/format-length';
+import type { ShopUnits } from '@/shared/schemas/units';
+import type { GrainRule } from '@/shared/schemas/drawer-schedule';
+import { SCHEDULE_OWNED_FIELDS, type PartInput } from '@/shared/schemas/part';
+import { cellText, COLUMN_TITLES, COLUMNS, isLengthColumn, parseCell, type Column, type TextColumn } from './cell-parsers';
+import { usePartMutations, type ListedPart } from './use-parts';
+
+type CellErrors = Record<string, string>;
+const errorKey = (rowId: string, column: Column) => `${rowId}:${column}`;
+const DRAFT = 'draft';
+
+type Draft = Record<TextColumn, string> & { grain: GrainRule };
+const emptyDraft = (carry?: Partial<Draft>): Draft => ({
+  label: '', quantity: '1', lengthMm: '', widthMm: '', thicknessMm: carry?.thicknessMm ?? '', material: carry?.material ?? '', grain: carry?.grain ?? 'along-length', jointAllowanceMm: '', notes: '',
+});
+
+/** A thickness as a picker offers it: the shop's unit when exact, else mm, so picking it matches the stock exactly. */
+function thicknessOption(mm: number, units: ShopUnits) {
+  const shown = formatLength(mm, units);
+  return shown.startsWith('≈') ? `${Math.round(mm * 100) / 100} mm` : shown;
+}
+
+/**
+ * The cut list as a spreadsheet: every cell is typed into and saved when left (Enter, Tab, arrows or a click
+ * elsewhere); arrows and Enter move like a spreadsheet; the last row adds a part. Drawer-schedule rows show their
+ * sizes read-only.
+ */
+export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId: string; parts: ListedPart[]; offers: StockOffer[]; units: ShopUnits; canWrite: boolean }) {
+  const { update, add, remove } = usePartMutations(jobId);
+  const [errors, setErrors] = useState<CellErrors>({});
+  const [draft, setDraft] = useState<Draft>(() => emptyDraft());
+  const tableRef = useRef<HTMLTableElement>(null);
+  const materials = useMemo(() => [...new Set(offers.map((o) => o.material))].sort(), [offers]);
+  const totals = useMemo(() => cutListTotals(parts, offers), [parts, offers]);
+  const draftRow = parts.length;
+
+  const setError = (key: string, message: string | null) =>
+    setErrors((e) => {
+      const next = { ...e };
+      if (message) next[key] = message;
+      else delete next[key];
+      return next;
+    });
+
+  function focusCell(row: number, col: number) {
+    const r = Math.max(0, Math.min(row, draftRow));
+    const c = Math.max(0, Math.min(col, COLUMNS.length - 1));
+    const el = tableRef.current?.querySelector<HTMLElement>(`[data-r="${r}"][data-c="${c}"]`);
+    el?.focus();
+  }
+
+  function commitCell(part: ListedPart, column: TextColumn, text: string) {
+    const key = errorKey(part.id, column);
+    if (text === cellText(part, column, units)) return setError(key, null);
+    const parsed = parseCell(column, text, units);
+    if (!parsed.ok) return setError(key, parsed.error);
+    setError(key, null);
+    update.mutate(
+      { id: part.id, patch: { [column]: parsed.value } },
+      { onError: (e) => setError(key, e instanceof ApiError ? (e.fields[column]?.[0] ?? e.message) : 'Not saved: the connection failed.') },
+    );
+  }
+
+  function commitDraft() {
+    const values: Partial<PartInput> = { grain: draft.grain };
+    let ok = true;
+    for (const column of COLUMNS) {
+      if (column === 'grain') continue;
+      const text = draft[column];
+      if ((column === 'notes' || column === 'jointAllowanceMm') && text.trim() === '') {
+        setError(errorKey(DRAFT, column), null);
+        continue;
+      }
+      const parsed = parseCell(column, text, units);
+      setError(errorKey(DRAFT, column), parsed.ok ? null : parsed.error);
+      if (parsed.ok) Object.assign(values, { [column]: parsed.value });
+      else ok = false;
+    }
+    if (!ok) return;
+    add.mutate(values as PartInput, {
+      onError: (e) => setError(errorKey(DRAFT, 'label'), e instanceof ApiError ? Object.values(e.fields).flat()[0] ?? e.message : 'Not saved: the connection failed.'),
+    });
+    // Material, thickness and grain carry over: rows of one material are usually typed together.
+    setDraft(emptyDraft(draft));
+    setTimeout(() => focusCell(draftRow + 1, 0), 0);
+  }
+
+  function onKeyDown(event: KeyboardEvent<HTMLTableElement>) {
+    const target = event.target as HTMLElement;
+    const r = Number(target.dataset.r);
+    const c = Number(target.dataset.c);
+    if (Number.isNaN(r) || Number.isNaN(c)) return;
+    const input = target instanceof HTMLInputElement ? target : null;
+    const whole = input ? input.selectionStart === 0 && input.selectionEnd === input.value.length : true;
+    switch (event.key) {
+      case 'ArrowUp':
+        event.preventDefault();
+        return focusCell(r - 1, c);
+      case 'ArrowDown':
+        event.preventDefault();
+        return focusCell(r + 1, c);
+      case 'ArrowLeft':
+        if (whole || (input?.selectionStart === 0 && input.selectionEnd === 0)) {
+          event.preventDefault();
+          focusCell(r, c - 1);
+        }
+        return;
+      case 'ArrowRight':
+        if (whole || (input && input.selectionStart === input.value.length)) {
+          event.preventDefault();
+          focusCell(r, c + 1);
+        }
+        return;
+      case 'Enter':
+        if (target instanceof HTMLButtonElement) return; // a button's Enter presses it
+        event.preventDefault();
+        if (r === draftRow) return commitDraft();
+        return focusCell(r + 1, c);
+    }
+  }
+
+  const scheduleOwned = (part: ListedPart, column: Column) => part.drawerScheduleId !== null && (SCHEDULE_OWNED_FIELDS as readonly string[]).includes(column);
+
+  return (
+    <div className="card overflow-x-auto">
+      <datalist id="cut-list-materials">
+        {materials.map((m) => (
+          <option key={m} value={m} />
+        ))}
+      </datalist>
+      {materials.map((m) => (
+        <datalist key={m} id={`cut-list-thickness-${slug(m)}`}>
+          {[...new Map(offersOf(offers, m).map((o) => [thicknessOption(o.thicknessMm, units), o])).entries()].map(([value, o]) => (
+            <option key={value} value={value} label={`${o.nominal || value} ${o.kind}`} />
+          ))}
+        </datalist>
+      ))}
+      <table ref={tableRef} className="data-table cut-list" aria-label="Cut list" onKeyDown={onKeyDown}>
+        <thead>
+          <tr>
+            <th className="w-8">#</th>
+            {COLUMNS.map((c) => (
+              <th key={c} className={isLengthColumn(c) || c === 'quantity' ? 'num' : undefined} scope="col">
+                {COLUMN_TITLES[c]}
+              </th>
+            ))}
+            {canWrite && <th className="sr-only">Row actions</th>}
+          </tr>
+        </thead>
+        <tbody>
+          {parts.map((part, r) => (
+            <tr key={part.id} className={part.drawerScheduleId ? 'bg-oak-wash/40' : undefined} data-testid="cut-list-row">
+              <td className="text-xs text-graphite-mute">
+                {r + 1}
+              </td>
+              {COLUMNS.map((column, c) => {
+                const readOnly = !canWrite || scheduleOwned(part, column) || part.id.startsWith('pending-');
+                const error = errors[errorKey(part.id, column)];
+                if (column === 'grain')
+                  return (
+                    <td key={column}>
+                      <GrainToggle value={part.grain} r={r} c={c} disabled={readOnly} onChange={(grain) => update.mutate({ id: part.id, patch: { grain } })} />
+                    </td>
+                  );
+                const warning = column === 'material' ? stockMatchWarning(part, offers, units) : null;
+                return (
+                  <td key={column} className={isLengthColumn(column) || column === 'quantity' ? 'num' : undefined}>
+                    {readOnly ? (
+                      <span tabIndex={0} data-r={r} data-c={c} className="block rounded px-1 py-0.5 focus:bg-paper-deep" title={part.drawerScheduleId && canWrite ? 'Set by the drawer schedule: edit the schedule to change it.' : undefined}>
+                        {cellText(part, column, units) || '—'}
+                        {column === 'label' && part.schedule && (
+                          <Link href={`/jobs/${jobId}/drawers#schedule-${part.drawerScheduleId}`} className="ml-2 whitespace-nowrap rounded-full bg-oak-wash px-2 text-xs font-medium text-oak-deep no-underline">
+                            drawer schedule
+                          </Link>
+                        )}
+                      </span>
+                    ) : (
+                      <EditCell
+                        key={`${part.id}:${cellText(part, column, units)}`}
+                        r={r}
+                        c={c}
+                        column={column}
+                        initial={cellText(part, column, units)}
+                        error={error}
+                        label={`${COLUMN_TITLES[column]}, row ${r + 1}`}
+                        list={column === 'material' ? 'cut-list-materials' : column === 'thicknessMm' ? `cut-list-thickness-${slug(part.material)}` : undefined}
+                        onCommit={(text) => commitCell(part, column, text)}
+                      />
+                    )}
+                    {warning && (
+                      <span className="mt-0.5 block text-xs text-amber" role="note" title={warning}>
+                        ⚠ not in stock
+                      </span>
+                    )}
+                  </td>
+                );
+              })}
+              {canWrite && (
+                <td className="whitespace-nowrap">
+                  <button type="button" className="px-1 text-xs text-graphite-mute hover:text-graphite" aria-label={`Duplicate row ${r + 1}`} onClick={() => add.mutate(duplicateOf(part))}>
+                    Duplicate
+                  </button>
+                  {part.drawerScheduleId ? null : (
+                    <button type="button" className="px-1 text-xs text-brick hover:underline" aria-label={`Delete row ${r + 1}`} onClick={() => remove.mutate(part.id)}>
+                      Delete
+                    </button>
+                  )}
+                </td>
+              )}
+            </tr>
+          ))}
+          {canWrite && (
+            <tr className="bg-paper/60" data-testid="cut-list-new-row">
+              <td className="text-xs text-oak" title="New row: type, then Enter">＋</td>
+              {COLUMNS.map((column, c) =>
+                column === 'grain' ? (
+                  <td key={column}>
+                    <GrainToggle value={draft.grain} r={draftRow} c={c} onChange={(grain) => setDraft((d) => ({ ...d, grain }))} />
+                  </td>
+                ) : (
+                  <td key={column} className={isLengthColumn(column) || column === 'quantity' ? 'num' : undefined}>
+                    <input
+                      data-r={draftRow}
+                      data-c={c}
+                      aria-label={`New part: ${COLUMN_TITLES[column]}`}
+                      aria-invalid={errors[errorKey(DRAFT, column)] ? true : undefined}
+                      className={cellInputClass(Boolean(errors[errorKey(DRAFT, column)]), isLengthColumn(column) || column === 'quantity')}
+                      value={draft[column]}
+                      placeholder={column === 'label' ? 'New part…' : ''}
+                      list={column === 'material' ? 'cut-list-materials' : column === 'thicknessMm' ? `cut-list-thickness-${slug(draft.material)}` : undefined}
+                      onFocus={(e) => e.currentTarget.select()}
+                      onChange={(e) => setDraft((d) => ({ ...d, [column]: e.target.value }))}
+                    />
+                    {errors[errorKey(DRAFT, column)] && <span className="mt-0.5 block text-xs text-brick" role="alert">{errors[errorKey(DRAFT, column)]}</span>}
+                  </td>
+                ),
+              )}
+              <td>
+                <button type="button" className="px-1 text-xs font-medium text-oak-deep" onClick={commitDraft}>
+                  Add
+                </button>
+              </td>
+            </tr>
+          )}
+        </tbody>
+        <tfoot>
+          <tr className="bg-paper-deep text-sm">
+            <td colSpan={COLUMNS.length + 2} className="px-3 py-2" data-testid="cut-list-totals">
+              <strong className="font-semibold">{totals.pieces.toLocaleString('en-US')}</strong> pieces in {totals.rows} rows · {formatArea(totals.areaMm2, units)} of faces
+              {totals.solidPieces > 0 && (
+                <>
+                  {' '}· <strong className="font-semibold">{totals.boardFeet.toFixed(2)} bf</strong> net of solid wood ({totals.solidPieces} pieces)
+                </>
+              )}
+            </td>
+          </tr>
+        </tfoot>
+      </table>
+    </div>
+  );
+}
+
+const slug = (s: string) => s.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-');
+
+const cellInputClass = (invalid: boolean, numeric: boolean) =>
+  `w-full min-w-16 rounded border bg-transparent px-1 py-0.5 text-sm outline-none focus:border-oak focus:bg-white focus:ring-1 focus:ring-oak-light ${numeric ? 'text-right font-mono' : ''} ${invalid ? 'border-brick bg-brick-wash' : 'border-transparent'}`;
+
+function duplicateOf(p: ListedPart): PartInput {
+  return { label: p.label, quantity: p.quantity, lengthMm: p.lengthMm, widthMm: p.widthMm, thicknessMm: p.thicknessMm, material: p.material, grain: p.grain, jointAllowanceMm: p.jointAllowanceMm, notes: p.notes };
+}
+
+function EditCell({ r, c, column, initial, error, label, list, onCommit }: { r: number; c: number; column: Column; initial: string; error?: string; label: string; list?: string; onCommit: (text: string) => void }) {
+  const [text, setText] = useState(initial);
+  const numeric = isLengthColumn(column) || column === 'quantity';
+  return (
+    <>
+      <input
+        data-r={r}
+        data-c={c}
+        aria-label={label}
+        aria-invalid={error ? true : undefined}
+        className={cellInputClass(Boolean(error), numeric)}
+        value={text}
+        list={list}
+        onFocus={(e) => e.currentTarget.select()}
+        onChange={(e) => setText(e.target.value)}
+        onBlur={() => onCommit(text)}
+        onKeyDown={(e) => {
+          if (e.key === 'Escape') setText(initial);
+        }}
+      />
+      {error && <span className="mt-0.5 block text-left text-xs font-sans text-brick" role="alert">{error}</span>}
+    </>
+  );
+}
+
+function GrainToggle({ value, r, c, disabled, onChange }: { value: GrainRule; r: number; c: number; disabled?: boolean; onChange: (g: GrainRule) => void }) {
+  const along = value === 'along-length';
+  return (
+    <button
+      type="button"
+      data-r={r}
+      data-c={c}
+      disabled={disabled}
+      aria-pressed={along}
+      aria-label={along ? 'Grain runs along the length (press to allow either way)' : 'Grain either way (press to run it along the length)'}
+      className={`whitespace-nowrap rounded px-1.5 py-0.5 text-xs font-medium ${along ? 'bg-oak-wash text-oak-deep' : 'bg-paper-deep text-graphite-mute'} disabled:cursor-default`}
+      onClick={() => onChange(along ? 'any' : 'along-length')}
+    >
+      {along ? '↔ along' : '⤡ either'}
+    </button>
+  );
+}

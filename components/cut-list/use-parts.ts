@@ -1,0 +1,69 @@
+'use client';
+
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/client/api';
+import type { StockOffer } from '@/lib/cut-list/stock-match';
+import type { Part, PartInput, PartPatch } from '@/shared/schemas/part';
+
+export type ListedPart = Part & { schedule: string | null };
+
+export const partsKey = (jobId: string) => ['parts', jobId] as const;
+
+export function useParts(jobId: string) {
+  return useQuery({ queryKey: partsKey(jobId), queryFn: () => api<ListedPart[]>(`/api/jobs/${jobId}/parts`) });
+}
+
+export function useMaterials() {
+  return useQuery({ queryKey: ['materials'], queryFn: () => api<StockOffer[]>('/api/materials'), staleTime: 60_000 });
+}
+
+/**
+ * Row changes go to the server at once and show at once: the list is updated optimistically and put back as it was
+ * when the server refuses (the caller shows the refusal on the cell).
+ */
+export function usePartMutations(jobId: string) {
+  const qc = useQueryClient();
+  const key = partsKey(jobId);
+  const snapshot = async () => {
+    await qc.cancelQueries({ queryKey: key });
+    return { previous: qc.getQueryData<ListedPart[]>(key) };
+  };
+  const rollback = (_e: unknown, _v: unknown, context: { previous?: ListedPart[] } | undefined) => qc.setQueryData(key, context?.previous);
+  const settle = () => qc.invalidateQueries({ queryKey: key });
+
+  const update = useMutation({
+    mutationFn: ({ id, patch }: { id: string; patch: PartPatch }) => api<Part>(`/api/jobs/${jobId}/parts/${id}`, { method: 'PATCH', body: patch }),
+    onMutate: async ({ id, patch }) => {
+      const context = await snapshot();
+      qc.setQueryData<ListedPart[]>(key, (list) => list?.map((p) => (p.id === id ? { ...p, ...patch } : p)));
+      return context;
+    },
+    onError: rollback,
+    onSettled: settle,
+  });
+
+  const add = useMutation({
+    mutationFn: (input: PartInput) => api<Part>(`/api/jobs/${jobId}/parts`, { method: 'POST', body: input }),
+    onMutate: async (input) => {
+      const context = await snapshot();
+      const temp: ListedPart = { ...input, id: `pending-${Math.random()}`, jobId, drawerScheduleId: null, role: null, machining: [], sort: Number.MAX_SAFE_INTEGER, schedule: null };
+      qc.setQueryData<ListedPart[]>(key, (list) => [...(list ?? []), temp]);
+      return context;
+    },
+    onError: rollback,
+    onSettled: settle,
+  });
+
+  const remove = useMutation({
+    mutationFn: (id: string) => api(`/api/jobs/${jobId}/parts/${id}`, { method: 'DELETE' }),
+    onMutate: async (id) => {
+      const context = await snapshot();
+      qc.setQueryData<ListedPart[]>(key, (list) => list?.filter((p) => p.id !== id));
+      return context;
+    },
+    onError: rollback,
+    onSettled: settle,
+  });
+
+  return { update, add, remove };
+}
