@@ -12,29 +12,43 @@ export type OrderKey = (typeof ORDER_KEYS)[number];
 export const STRIP_ORDER_KEYS: readonly OrderKey[] = ['strip-height', 'area', 'height', 'long-side', 'perimeter', 'width'];
 export const PANEL_ORDER_KEYS: readonly OrderKey[] = ['area', 'long-side', 'perimeter', 'width', 'height'];
 
-export function sortedOrder(p: Problem, items: ArrayLike<number>, key: OrderKey): Int32Array {
-  const order = Int32Array.from(items);
-  const k = new Float64Array(p.n);
-  for (const i of order) {
-    const w = p.w[i];
-    const h = p.h[i];
-    const stripH = p.canRotate[i] ? Math.min(w, h) : h;
-    k[i] =
-      key === 'area'
-        ? w * h
-        : key === 'long-side'
-          ? Math.max(w, h) * 1e6 + Math.min(w, h)
-          : key === 'perimeter'
-            ? w + h
-            : key === 'width'
-              ? w * 1e6 + h
-              : key === 'height'
-                ? h * 1e6 + w
-                : stripH * 1e6 + w * h;
+const keyCache = new WeakMap<Problem, Map<OrderKey, [Float64Array, Float64Array]>>();
+
+/** Primary and tie-break key of every item for one order, computed once per problem. */
+function keysOf(p: Problem, key: OrderKey): [Float64Array, Float64Array] {
+  let byKey = keyCache.get(p);
+  if (!byKey) keyCache.set(p, (byKey = new Map()));
+  let keys = byKey.get(key);
+  if (!keys) {
+    const k1 = new Float64Array(p.n);
+    const k2 = new Float64Array(p.n);
+    for (let i = 0; i < p.n; i++) {
+      const w = p.w[i];
+      const h = p.h[i];
+      const [a, b] =
+        key === 'area'
+          ? [w * h, Math.max(w, h)]
+          : key === 'long-side'
+            ? [Math.max(w, h), Math.min(w, h)]
+            : key === 'perimeter'
+              ? [w + h, w * h]
+              : key === 'width'
+                ? [w, h]
+                : key === 'height'
+                  ? [h, w]
+                  : [p.canRotate[i] ? Math.min(w, h) : h, w * h];
+      k1[i] = a;
+      k2[i] = b;
+    }
+    byKey.set(key, (keys = [k1, k2]));
   }
+  return keys;
+}
+
+export function sortedOrder(p: Problem, items: ArrayLike<number>, key: OrderKey): Int32Array {
+  const [k1, k2] = keysOf(p, key);
   // Ties by index keep the order stable and deterministic.
-  order.sort((a, b) => k[b] - k[a] || a - b);
-  return order;
+  return Int32Array.from(items).sort((a, b) => k1[b] - k1[a] || k2[b] - k2[a] || a - b);
 }
 
 /** Swaps random neighbours: keeps the order roughly decreasing while exploring near it. */

@@ -1,11 +1,12 @@
 /**
  * Quick local check of packing quality on a sample of the standard 2D bin packing instances (not the benchmark:
- * `npm run bench` is). Usage: `npx tsx lib/nesting/pack/dev-bench.ts <ms per instance> <every k-th> <rot|fixed> [style]`.
+ * `npm run bench` is). Usage: `npx tsx lib/nesting/pack/dev-bench.ts <ms per instance> <every k-th> <rot|fixed> [style]`;
+ * `PK_ITERS=n` counts iterations instead of time (repeatable), `PK_CLASSES=3,7` picks classes.
  */
 import { readFileSync } from 'node:fs';
 import { parseInstances } from '@/lib/nesting/instances';
 import { lowerBound } from '@/lib/nesting/bounds';
-import { packGuillotine } from './index';
+import { packWithLimits } from './index';
 
 const [ms = '100', every = '5', mode = 'rot', style = 'panel'] = process.argv.slice(2);
 const rotation = mode === 'rot';
@@ -21,7 +22,8 @@ for (let k = 0; k < instances.length; k += Number(every)) {
   const items = inst.items.map((it, id) => ({ id, w: it.w, h: it.h, canRotate: rotation }));
   const bin = { id: 0, w: inst.bin.w, h: inst.bin.h, count: null, cost: 1, priority: 1 };
   let first = -1;
-  const r = await packGuillotine(items, [bin], {
+  const iterations = process.env.PK_ITERS ? Number(process.env.PK_ITERS) : undefined;
+  const r = await packWithLimits(items, [bin], {
     kerf: 0,
     style: style as 'panel',
     objective: 'pieces',
@@ -30,7 +32,7 @@ for (let k = 0; k < instances.length; k += Number(every)) {
     onProgress: (p) => {
       if (first < 0) first = p.binsUsed;
     },
-  });
+  }, { maxIterations: iterations });
   const lb = lowerBound(inst.items, inst.bin, rotation);
   const c = perClass.get(inst.cls!) ?? { bins: 0, lb: 0, first: 0 };
   c.bins += r.bins.length;
