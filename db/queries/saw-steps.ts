@@ -107,11 +107,12 @@ export async function getStepTicks(db: Db, shopId: string, planId: string): Prom
 
 /**
  * Everything the saw-order pages, part tags, shop floor and PDF show for one plan: the document, its job, the kerf it
- * was nested with, its parts' grain rules, and the shop's units. Null when the shop has no such plan.
+ * was nested with, its parts' grain rules, and the shop's units. Null when the shop has no such plan, or when it is
+ * a draft and drafts are not to be shown (people who cannot edit plans see only released work).
  */
-export async function getSawOrder(db: Db, shopId: string, planId: string) {
+export async function getSawOrder(db: Db, shopId: string, planId: string, { drafts }: { drafts: boolean }) {
   const [plan, settings] = await Promise.all([getPlan(db, shopId, planId), getShopSettings(db, shopId)]);
-  if (!plan || !settings) return null;
+  if (!plan || !settings || (plan.status === 'draft' && !drafts)) return null;
   const [job] = await db.select({ id: jobs.id, name: jobs.name, customer: jobs.customer }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, plan.jobId)));
   const request = nestRequestSchema.safeParse(plan.request);
   const requestSettings = (plan.request as { settings?: unknown } | null)?.settings;

@@ -48,3 +48,16 @@ describe('saw-order step descriptions', () => {
     expect(stockPieceTitle(plan.pieces[0], 'A', sixteenths)).toEqual({ heading: 'Sheet A', detail: 'birch ply ≈11/16″ · 96″ × 48″' });
   });
 });
+
+describe('piece views', () => {
+  test('pair every step’s words with its geometry, piece by piece, named A, B, …', async () => {
+    const { pieceViews } = await import('./piece-views');
+    const { plan } = await nest(carcassRequest());
+    const views = pieceViews(plan.pieces, sixteenths, 3.175);
+    expect(views.map((v) => v.name)).toEqual(plan.pieces.map((_, i) => String.fromCharCode(65 + i)));
+    for (const [i, v] of views.entries()) {
+      expect(v.steps.map((s) => s.text.n)).toEqual(plan.pieces[i].sawOrder!.map((s) => s.n));
+      for (const s of v.steps) expect(s.geometry.step.n).toBe(s.text.n);
+    }
+  });
+});

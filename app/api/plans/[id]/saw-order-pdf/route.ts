@@ -1,6 +1,7 @@
 import { getSawOrder } from '@/db/queries/saw-steps';
 import { notFound } from '@/lib/api/errors';
 import { idParams, route } from '@/lib/api/route';
+import { can } from '@/lib/auth/permissions';
 import { sawOrderPdf } from '@/lib/saw-order/saw-order-pdf';
 import { z } from 'zod';
 
@@ -11,7 +12,7 @@ const fileName = (s: string) => s.normalize('NFKD').replace(/[^A-Za-z0-9]+/g, '-
 
 // GET /api/plans/:id/saw-order-pdf?page=letter|a4 – the saw order as a PDF, one page per stock piece
 export const GET = route({ permission: 'plans:read', params: idParams, query: pdfQuery }, async ({ db, user, params, query }) => {
-  const order = await getSawOrder(db, user.shopId, params.id);
+  const order = await getSawOrder(db, user.shopId, params.id, { drafts: can(user.role, 'plans:write') });
   if (!order) throw notFound('That plan');
   const bytes = await sawOrderPdf({
     title: order.job.name,

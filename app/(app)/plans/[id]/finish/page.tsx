@@ -1,0 +1,52 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { eq } from 'drizzle-orm';
+import { getDb } from '@/db/client';
+import { jobs } from '@/db/schema';
+import { getPlan } from '@/db/queries/plan-document';
+import { getShopSettings } from '@/db/queries/shops';
+import { FinishPlanForm, type FinishPiece } from '@/components/stock/finish-plan-form';
+import { EmptyState } from '@/components/ui/empty-state';
+import { PageHeader } from '@/components/ui/page-header';
+import { requirePageUser } from '@/lib/auth/session';
+import { isKeepableOffcut } from '@/lib/stock/offcut-rules';
+import { formatLength } from '@/lib/units/format-length';
+import { nestRequestSchema } from '@/shared/schemas/nesting';
+
+export const metadata: Metadata = { title: 'Finish plan' };
+
+export default async function FinishPlanPage({ params }: { params: Promise<{ id: string }> }) {
+  const user = await requirePageUser('plans:finish');
+  const id = z.uuid().safeParse((await params).id);
+  if (!id.success) notFound();
+  const db = await getDb();
+  const [plan, settings] = await Promise.all([getPlan(db, user.shopId, id.data), getShopSettings(db, user.shopId)]);
+  if (!plan || !settings) notFound();
+  const [job] = await db.select({ name: jobs.name }).from(jobs).where(eq(jobs.id, plan.jobId));
+  const len = (mm: number) => formatLength(mm, settings.units);
+  const request = nestRequestSchema.safeParse(plan.request);
+  const min = request.success ? { minLength: request.data.settings.minOffcutLength, minWidth: request.data.settings.minOffcutWidth } : { minLength: settings.minOffcutLengthMm, minWidth: settings.minOffcutWidthMm };
+  const labels = new Map((request.success ? request.data.parts : []).map((p) => [p.id, p.label || p.id]));
+
+  const pieces: FinishPiece[] = plan.document.pieces.map((p, index) => ({
+    index,
+    title: `Piece ${index + 1} · ${p.material} ${len(p.thickness)} · ${len(p.length)} × ${len(p.width)}${p.kind === 'offcut' ? ' (offcut)' : ''}`,
+    offcuts: (p.offcuts ?? []).map((r, i) => ({ index: i, w: r.w, h: r.h, keepable: isKeepableOffcut(r, min) })),
+    parts: p.placements.map((pl) => ({ partId: pl.partId, instance: pl.instance, label: pl.label || labels.get(pl.partId) || pl.partId, w: pl.w, h: pl.h })),
+  }));
+
+  const open = plan.status === 'released' || plan.status === 'cutting';
+  return (
+    <>
+      <Link href={`/plans/${plan.id}/saw-order`} className="text-sm text-graphite-mute">← Saw order</Link>
+      <PageHeader title={`Finish: ${plan.name}`} lead={`${job?.name ?? ''} · when the last cut is made, put the offcuts on the rack and record any damaged parts. The stock the plan reserved is taken off the count.`} />
+      {open ? (
+        <FinishPlanForm planId={plan.id} pieces={pieces} units={settings.units} defaultLocation="" />
+      ) : (
+        <EmptyState title={`This plan is ${plan.status}.`}>Only a released plan, or one being cut, can be finished.</EmptyState>
+      )}
+    </>
+  );
+}

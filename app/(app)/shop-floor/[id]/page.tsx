@@ -1,0 +1,50 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { getDb } from '@/db/client';
+import { getSawOrder, getStepTicks } from '@/db/queries/saw-steps';
+import { PlanStatusBadge } from '@/components/saw-order/plan-status-badge';
+import { SawCautions } from '@/components/saw-order/saw-cautions';
+import { CuttingView } from '@/components/shop-floor/cutting-view';
+import { can } from '@/lib/auth/permissions';
+import { requirePageUser } from '@/lib/auth/session';
+import { pieceViews } from '@/lib/saw-order/piece-views';
+
+export const metadata: Metadata = { title: 'Cutting' };
+
+export default async function CuttingPage({ params }: { params: Promise<{ id: string }> }) {
+  const user = await requirePageUser('sawsteps:tick');
+  const id = z.uuid().safeParse((await params).id);
+  if (!id.success) notFound();
+  const db = await getDb();
+  // The shop floor shows released work only, whoever is looking.
+  const [order, ticks] = await Promise.all([getSawOrder(db, user.shopId, id.data, { drafts: false }), getStepTicks(db, user.shopId, id.data)]);
+  if (!order || !ticks) notFound();
+  const atTheSaw = order.status === 'released' || order.status === 'cutting';
+
+  return (
+    <div>
+      <Link href="/shop-floor" className="text-sm text-graphite-mute">
+        ← Shop floor
+      </Link>
+      <header className="mb-4 mt-2 flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h1 className="flex items-center gap-3">
+            {order.job.name} <PlanStatusBadge status={ticks.status} />
+          </h1>
+          <p className="mt-1 text-sm text-graphite-mute">{order.name}</p>
+        </div>
+        <Link className="btn-quiet" href={`/plans/${order.id}/saw-order`}>
+          Printable saw order
+        </Link>
+      </header>
+      <SawCautions compact />
+      {atTheSaw ? (
+        <CuttingView planId={order.id} views={pieceViews(order.document.pieces, order.units, order.kerf)} initial={ticks} canFinish={can(user.role, 'plans:finish')} />
+      ) : (
+        <p className="card px-4 py-6">This plan is {order.status}: there is nothing left to cut on it.</p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,38 @@
+import { labelOrigin, paginate, type LabelSheet } from '@/lib/saw-order/label-sheets';
+import type { PartTag as Tag } from '@/lib/saw-order/part-tags';
+import type { QrPath } from '@/lib/saw-order/qr-path';
+import { PartTag } from './part-tag';
+
+export interface TagItem {
+  tag: Tag;
+  size: string;
+  url: string;
+  qr: QrPath;
+}
+
+/** Tags laid out on label sheets at their real size, a printed page per sheet. */
+export function TagSheets({ items, sheet, jobName }: { items: TagItem[]; sheet: LabelSheet; jobName: string }) {
+  const pages = paginate(items, sheet);
+  return (
+    <div className="flex flex-col items-start gap-6 print:block">
+      {pages.map((page, p) => (
+        <div
+          key={p}
+          className="relative shrink-0 bg-white shadow-md ring-1 ring-paper-edge print:shadow-none print:ring-0 [&:not(:first-child)]:print:break-before-page"
+          style={{ width: `${sheet.page.width}mm`, height: `${sheet.page.height}mm` }}
+          aria-label={`Label sheet ${p + 1} of ${pages.length}`}
+          data-testid="label-sheet"
+        >
+          {page.map((item, i) => {
+            const at = labelOrigin(sheet, i);
+            return (
+              <div key={`${item.tag.partId}#${item.tag.instance}`} className="absolute outline-1 outline-dashed outline-paper-edge print:outline-none" style={{ left: `${at.x}mm`, top: `${at.y}mm` }}>
+                <PartTag tag={item.tag} jobName={jobName} size={item.size} qr={item.qr} url={item.url} label={sheet.label} />
+              </div>
+            );
+          })}
+        </div>
+      ))}
+    </div>
+  );
+}

@@ -1,0 +1,223 @@
+'use client';
+
+import Link from 'next/link';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMemo, useState } from 'react';
+import { api, ApiError } from '@/lib/client/api';
+import type { PieceView } from '@/lib/saw-order/piece-views';
+import { sawProgress } from '@/lib/saw-order/progress';
+import type { PlanTicks } from '@/db/queries/saw-steps';
+import { StepDiagram } from '@/components/saw-order/step-diagram';
+import { StepKindBadge } from '@/components/saw-order/step-kind-badge';
+import { ProgressBar } from './progress-bar';
+
+interface Props {
+  planId: string;
+  views: PieceView[];
+  initial: PlanTicks;
+  canFinish: boolean;
+}
+
+type Toggle = { piece: number; step: number; done: boolean };
+
+const time = (iso: string) => new Date(iso).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
+
+/**
+ * The cutter's view of one plan: a stock piece at a time, its next cut big, every step a large tick target. Ticks are
+ * saved as they are made (optimistically, rolled back on refusal) and refreshed every few seconds, so several cutters
+ * on one plan see each other's work.
+ */
+export function CuttingView({ planId, views, initial, canFinish }: Props) {
+  const key = ['saw-steps', planId];
+  const client = useQueryClient();
+  const ticksQuery = useQuery({ queryKey: key, queryFn: () => api<PlanTicks>(`/api/plans/${planId}/steps`), initialData: initial, refetchInterval: 10_000 });
+  const data = ticksQuery.data;
+  const pieces = useMemo(() => views.map((v) => ({ sawOrder: v.steps.map((s) => s.geometry.step) })), [views]);
+  const progress = sawProgress(pieces, data.ticks);
+  const [pieceIndex, setPieceIndex] = useState(() => progress.pieces.find((p) => p.next !== null)?.piece ?? 0);
+  const [picked, setPicked] = useState<number | null>(null);
+
+  const toggle = useMutation({
+    mutationFn: ({ piece, step, done }: Toggle) => api<PlanTicks>(`/api/plans/${planId}/steps`, { method: done ? 'POST' : 'DELETE', body: { piece, step } }),
+    onMutate: async ({ piece, step, done }) => {
+      await client.cancelQueries({ queryKey: key });
+      const before = client.getQueryData<PlanTicks>(key);
+      client.setQueryData<PlanTicks>(key, (old) =>
+        old && {
+          ...old,
+          ticks: done
+            ? [...old.ticks.filter((t) => !(t.piece === piece && t.step === step)), { piece, step, doneAt: new Date().toISOString(), doneBy: 'You' }]
+            : old.ticks.filter((t) => !(t.piece === piece && t.step === step)),
+        },
+      );
+      return { before };
+    },
+    onError: (_e, _v, ctx) => ctx?.before && client.setQueryData(key, ctx.before),
+    onSuccess: (fresh) => client.setQueryData(key, fresh),
+  });
+
+  const view = views[pieceIndex];
+  const pieceProgress = progress.pieces[pieceIndex];
+  const currentN = picked ?? pieceProgress?.next ?? view?.steps.at(-1)?.text.n ?? null;
+  const current = view?.steps.find((s) => s.text.n === currentN) ?? null;
+  const tickOf = (piece: number, step: number) => data.ticks.find((t) => t.piece === piece && t.step === step);
+
+  const set = (step: number, done: boolean) => {
+    setPicked(null);
+    toggle.mutate({ piece: pieceIndex, step, done });
+  };
+
+  if (!view) return <p className="card px-4 py-6">This plan places no parts, so there is nothing to cut.</p>;
+
+  return (
+    <div className="space-y-5">
+      <ProgressBar done={progress.done} total={progress.total} label={`${progress.done} of ${progress.total} cuts done on this plan`} />
+
+      {toggle.isError && (
+        <p role="alert" className="rounded-md border border-brick/40 bg-brick-wash px-4 py-3 text-brick">
+          {toggle.error instanceof ApiError ? toggle.error.message : 'That tick was not saved.'} Nothing else changed; try again.
+        </p>
+      )}
+      {ticksQuery.isError && (
+        <p role="alert" className="rounded-md border border-amber/40 bg-amber-wash px-4 py-3 text-amber">
+          Could not refresh the ticks from the server; showing what this screen last saw.
+        </p>
+      )}
+
+      {progress.finished && (
+        <div className="flex flex-wrap items-center justify-between gap-4 rounded-lg border border-sage/40 bg-sage-wash px-5 py-4" role="status">
+          <div>
+            <p className="text-lg font-semibold text-sage">Every cut is done.</p>
+            <p className="text-sm text-graphite-soft">Finish the plan to take its stock off the rack and put its offcuts on it.</p>
+          </div>
+          {canFinish && (
+            <Link href={`/plans/${planId}/finish`} className="btn-accent min-h-14 px-6 text-base">
+              Finish the plan
+            </Link>
+          )}
+        </div>
+      )}
+
+      <nav aria-label="Stock pieces" className="flex gap-2 overflow-x-auto pb-1">
+        {views.map((v, i) => {
+          const p = progress.pieces[i];
+          const active = i === pieceIndex;
+          return (
+            <button
+              key={v.index}
+              type="button"
+              onClick={() => {
+                setPieceIndex(i);
+                setPicked(null);
+              }}
+              aria-current={active ? 'true' : undefined}
+              className={`min-h-14 min-w-32 shrink-0 rounded-lg border-2 px-4 py-2 text-left ${active ? 'border-oak bg-oak-wash' : 'border-paper-edge bg-white hover:bg-paper-deep'}`}
+            >
+              <span className="block font-semibold">{v.heading}</span>
+              <span className={`block font-mono text-sm ${p.next === null && p.total > 0 ? 'text-sage' : 'text-graphite-mute'}`}>
+                {p.done}/{p.total}
+                {p.next === null && p.total > 0 ? ' ✓' : ''}
+              </span>
+            </button>
+          );
+        })}
+      </nav>
+
+      <section className="card p-5" aria-labelledby="current-step">
+        <p className="mb-3 text-sm text-graphite-mute">
+          {view.heading} · {view.detail}
+        </p>
+        {current ? (
+          <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+            <StepDiagram geometry={current.geometry} stock={view.stock} className="h-auto max-h-[55vh] w-full" />
+            <div className="flex flex-col gap-4">
+              <div className="flex items-center gap-3">
+                <h2 id="current-step" className="font-mono text-4xl">
+                  {current.text.n}
+                </h2>
+                <StepKindBadge kind={current.text.kind} trim={current.text.trim} large />
+                <span className="text-graphite-mute">
+                  of {view.steps.length} · piece <strong className="text-graphite">{current.text.piece}</strong>
+                </span>
+              </div>
+              <div>
+                <div className="text-sm uppercase tracking-wide text-graphite-mute">Fence</div>
+                <div className="font-mono text-6xl font-semibold leading-none" data-testid="current-fence">
+                  {current.text.fence}
+                </div>
+                <div className="mt-1 text-sm text-graphite-mute">cut length {current.text.length}</div>
+              </div>
+              {current.text.frees.length > 0 && (
+                <div>
+                  <div className="text-sm text-graphite-mute">Frees</div>
+                  <div className="flex flex-wrap gap-2">
+                    {current.text.frees.map((f) => (
+                      <span key={f} className="rounded-md bg-sage-wash px-2.5 py-1 text-lg font-medium text-sage">
+                        {f}
+                      </span>
+                    ))}
+                  </div>
+                </div>
+              )}
+              {current.text.produced
+                .filter((p) => p.role === 'offcut')
+                .map((o) => (
+                  <p key={o.name} className="text-amber">
+                    Keep offcut {o.name} ({o.size}) for the rack.
+                  </p>
+                ))}
+              {tickOf(pieceIndex, current.text.n) ? (
+                <button type="button" className="btn-quiet min-h-16 text-lg" onClick={() => set(current.text.n, false)}>
+                  Cut {current.text.n} is ticked — undo
+                </button>
+              ) : (
+                <button type="button" className="btn-accent min-h-16 text-lg" onClick={() => set(current.text.n, true)}>
+                  Done — cut {current.text.n}
+                </button>
+              )}
+            </div>
+          </div>
+        ) : (
+          <p className="text-graphite-mute">No saw order for this piece yet.</p>
+        )}
+      </section>
+
+      <section aria-labelledby="all-steps">
+        <h2 id="all-steps" className="mb-2">
+          Every cut on {view.heading}
+        </h2>
+        <ol className="grid gap-2 md:grid-cols-2">
+          {view.steps.map(({ text }) => {
+            const tick = tickOf(pieceIndex, text.n);
+            const isCurrent = text.n === currentN;
+            return (
+              <li key={text.n} className={`flex items-stretch overflow-hidden rounded-lg border-2 bg-white ${isCurrent ? 'border-oak' : 'border-paper-edge'}`}>
+                <button
+                  type="button"
+                  role="checkbox"
+                  aria-checked={!!tick}
+                  aria-label={`Cut ${text.n} done`}
+                  onClick={() => set(text.n, !tick)}
+                  className={`flex min-h-16 w-16 shrink-0 items-center justify-center text-2xl font-bold ${tick ? 'bg-sage text-white' : 'bg-paper-deep text-graphite-faint hover:bg-paper-edge'}`}
+                >
+                  {tick ? '✓' : ''}
+                </button>
+                <button type="button" onClick={() => setPicked(text.n)} className="flex min-h-16 flex-1 flex-col justify-center px-3 text-left hover:bg-paper">
+                  <span className="flex flex-wrap items-center gap-2">
+                    <span className="font-mono text-lg font-semibold">{text.n}</span>
+                    <StepKindBadge kind={text.kind} trim={text.trim} />
+                    <span className="font-mono text-lg">{text.fence}</span>
+                    <span className="text-sm text-graphite-mute">piece {text.piece}</span>
+                  </span>
+                  <span className="text-xs text-graphite-mute">
+                    {tick ? `Ticked by ${tick.doneBy ?? 'someone'} at ${time(tick.doneAt)}` : text.frees.length ? `Frees ${text.frees.join(', ')}` : '\u00a0'}
+                  </span>
+                </button>
+              </li>
+            );
+          })}
+        </ol>
+      </section>
+    </div>
+  );
+}
