@@ -1,0 +1,114 @@
+import { z } from 'zod';
+import { DRAWER_DEFAULTS as D } from '@/lib/joinery/defaults';
+import { formatLength } from '@/lib/units/format-length';
+import type { LengthUnit } from '@/lib/units/parse-length';
+import { JOINT_METHODS, SLIDE_TYPES, type DrawerSchedule, type DrawerScheduleInput, type JointMethod } from '@/shared/schemas/drawer-schedule';
+import { lengthInput, type ShopUnits } from '@/shared/schemas/units';
+
+/**
+ * The drawer schedule form is flat, with lengths as typed text in the shop's unit; `toScheduleInput` builds the
+ * nested schedule `lib/joinery` sizes, and `FIELD_OF_PATH` puts the sizing errors back on the field that caused them.
+ */
+export const JOINT_PARAM: Partial<Record<JointMethod, { key: string; label: string; defaultMm: number }>> = {
+  'lock-rabbet': { key: 'faceLeftMm', label: 'Face left outside the tongue', defaultMm: D.lockRabbetFaceLeft },
+  'rabbet-and-dado': { key: 'dadoDepthMm', label: 'Dado depth', defaultMm: D.dadoDepth },
+  'half-blind-dovetail': { key: 'lapMm', label: 'Lap', defaultMm: D.dovetailLap },
+  'box-joint': { key: 'fingerWidthMm', label: 'Finger width', defaultMm: D.boxJointFinger },
+};
+
+const optionalLength = (unit: LengthUnit) => z.union([z.literal(''), lengthInput(unit)]).transform((v) => (v === '' ? undefined : v));
+const text = (max: number) => z.string().trim().max(max, `At most ${max} characters.`);
+
+export const scheduleFormSchema = (unit: LengthUnit) =>
+  z.object({
+    label: text(80).min(1, 'Give the schedule a label.'),
+    quantity: z.coerce.number({ error: 'Quantity must be a whole number.' }).int('Quantity must be a whole number.').min(1, 'Quantity must be at least 1.').max(10_000),
+    sizeFrom: z.enum(['opening', 'box']),
+    width: lengthInput(unit),
+    height: lengthInput(unit),
+    depth: lengthInput(unit),
+    slideType: z.enum(SLIDE_TYPES),
+    jointMethod: z.enum(JOINT_METHODS),
+    jointParam: optionalLength(unit),
+    frontThickness: lengthInput(unit),
+    sideThickness: lengthInput(unit),
+    backThickness: optionalLength(unit),
+    frontStyle: z.enum(['flush', 'lipped', 'applied']),
+    bottomMount: z.enum(['groove', 'applied']),
+    bottomThickness: lengthInput(unit),
+    bottomMaterial: text(120).min(1, 'Name the bottom’s material.'),
+    sidesMaterial: text(120).min(1, 'Name the box material.'),
+    frontMaterial: text(120),
+  });
+
+export type ScheduleFormText = z.input<ReturnType<typeof scheduleFormSchema>>;
+export type ScheduleFormValues = z.output<ReturnType<typeof scheduleFormSchema>>;
+
+export function toScheduleInput(v: ScheduleFormValues): DrawerScheduleInput {
+  const param = JOINT_PARAM[v.jointMethod];
+  return {
+    label: v.label,
+    quantity: v.quantity,
+    size: { from: v.sizeFrom, widthMm: v.width, heightMm: v.height, depthMm: v.depth },
+    slide: { type: v.slideType },
+    joint: { method: v.jointMethod, ...(param && v.jointParam !== undefined ? { [param.key]: v.jointParam } : {}) } as DrawerScheduleInput['joint'],
+    thickness: { frontMm: v.frontThickness, sideMm: v.sideThickness, ...(v.backThickness !== undefined ? { backMm: v.backThickness } : {}) },
+    front: { style: v.frontStyle },
+    bottom: { mount: v.bottomMount, thicknessMm: v.bottomThickness, material: v.bottomMaterial },
+    materials: { sides: v.sidesMaterial, ...(v.frontMaterial ? { front: v.frontMaterial } : {}) },
+  };
+}
+
+/** A saved schedule back into the form's text, in the shop's unit (exact: bare mm where the unit would round). */
+export function fromSchedule(s: DrawerSchedule, units: ShopUnits): ScheduleFormText {
+  const len = (mm: number | undefined) => {
+    if (mm === undefined) return '';
+    const shown = formatLength(mm, units);
+    return shown.startsWith('≈') ? `${Math.round(mm * 1000) / 1000} mm` : shown;
+  };
+  const param = JOINT_PARAM[s.joint.method];
+  return {
+    label: s.label,
+    quantity: String(s.quantity),
+    sizeFrom: s.size.from,
+    width: len(s.size.widthMm),
+    height: len(s.size.heightMm),
+    depth: len(s.size.depthMm),
+    slideType: s.slide.type,
+    jointMethod: s.joint.method,
+    jointParam: param ? len((s.joint as Record<string, unknown>)[param.key] as number | undefined) : '',
+    frontThickness: len(s.thickness.frontMm),
+    sideThickness: len(s.thickness.sideMm),
+    backThickness: len(s.thickness.backMm),
+    frontStyle: s.front.style,
+    bottomMount: s.bottom.mount,
+    bottomThickness: len(s.bottom.thicknessMm),
+    bottomMaterial: s.bottom.material,
+    sidesMaterial: s.materials.sides,
+    frontMaterial: s.materials.front ?? '',
+  };
+}
+
+export function emptySchedule(units: ShopUnits): ScheduleFormText {
+  const len = (mm: number) => formatLength(mm, units);
+  return {
+    label: '', quantity: '1', sizeFrom: 'opening', width: '', height: '', depth: '', slideType: 'side-mount', jointMethod: 'lock-rabbet', jointParam: '',
+    frontThickness: len(D.frontThickness), sideThickness: len(D.sideThickness), backThickness: '', frontStyle: 'flush', bottomMount: 'groove',
+    bottomThickness: len(D.bottomThickness), bottomMaterial: 'Baltic birch', sidesMaterial: 'Baltic birch', frontMaterial: '',
+  };
+}
+
+/** Where a sizing error's path (lib/joinery) shows in the flat form. */
+export function fieldOfPath(path: string): keyof ScheduleFormText {
+  const table: Record<string, keyof ScheduleFormText> = {
+    label: 'label', quantity: 'quantity', 'size.widthMm': 'width', 'size.heightMm': 'height', 'size.depthMm': 'depth', 'size.depthRule': 'depth',
+    'thickness.frontMm': 'frontThickness', 'thickness.sideMm': 'sideThickness', 'thickness.backMm': 'backThickness', 'front.style': 'frontStyle',
+    'bottom.mount': 'bottomMount', 'bottom.thicknessMm': 'bottomThickness', 'bottom.material': 'bottomMaterial', 'materials.sides': 'sidesMaterial', 'materials.front': 'frontMaterial',
+  };
+  if (table[path]) return table[path];
+  if (path.startsWith('joint.')) return 'jointParam';
+  if (path.startsWith('slide')) return 'slideType';
+  if (path.startsWith('bottom.groove')) return 'bottomThickness';
+  if (path.startsWith('size')) return 'width';
+  return 'label';
+}

@@ -1,0 +1,165 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMemo } from 'react';
+import { useForm, useWatch, type Path } from 'react-hook-form';
+import { api, ApiError } from '@/lib/client/api';
+import { DEFAULT_LOCK_RABBET_CARDS, findSetupCard, JOINT_NAMES, sizeDrawerSchedule } from '@/lib/joinery';
+import { formatLength } from '@/lib/units/format-length';
+import { drawerScheduleSchema, JOINT_METHODS, type DrawerSchedule } from '@/shared/schemas/drawer-schedule';
+import type { SetupCard } from '@/shared/schemas/setup-card';
+import { shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
+import { RouterCautions, SetupCardView } from '@/components/setup-cards/setup-card-view';
+import { partsKey } from '@/components/cut-list/use-parts';
+import { BoxPreview } from './box-preview';
+import { bottomMovementWarning } from './bottom-movement';
+import { emptySchedule, fieldOfPath, fromSchedule, JOINT_PARAM, scheduleFormSchema, toScheduleInput, type ScheduleFormText, type ScheduleFormValues } from './schedule-form-values';
+
+const SLIDE_LABELS = { 'side-mount': 'Side-mount slides', undermount: 'Undermount slides', 'wooden-runners': 'Wooden runners', none: 'No slides' } as const;
+const ROLE_NAMES = { front: 'Front', back: 'Back', side: 'Side', bottom: 'Bottom', 'applied-front': 'Applied front' } as const;
+
+/**
+ * A drawer schedule's form over lib/joinery: every change re-sizes the box at once (preview, parts, setup cards,
+ * warnings); saving replaces the schedule's rows in the cut list.
+ */
+export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: string; units: ShopUnits; cards: SetupCard[]; editing: { id: string; input: DrawerSchedule } | null; onDone: () => void }) {
+  const unit = shopLengthUnit(units);
+  const schema = useMemo(() => scheduleFormSchema(unit), [unit]);
+  const form = useForm<ScheduleFormText, unknown, ScheduleFormValues>({
+    resolver: zodResolver(schema),
+    defaultValues: editing ? fromSchedule(editing.input, units) : emptySchedule(units),
+    mode: 'onBlur',
+  });
+  const { register, handleSubmit, formState, setError, control } = form;
+  const values = useWatch({ control });
+  const qc = useQueryClient();
+
+  // Live sizing on whatever parses so far.
+  const live = useMemo(() => {
+    const parsed = schema.safeParse(values);
+    if (!parsed.success) return null;
+    const schedule = drawerScheduleSchema.safeParse(toScheduleInput(parsed.data));
+    if (!schedule.success) return null;
+    return { schedule: schedule.data, sized: sizeDrawerSchedule(schedule.data) };
+  }, [schema, values]);
+  const liveErrors = new Map<string, string>();
+  if (live && !live.sized.ok) for (const e of live.sized.errors) if (!liveErrors.has(fieldOfPath(e.path))) liveErrors.set(fieldOfPath(e.path), e.message);
+
+  const save = useMutation({
+    mutationFn: (v: ScheduleFormValues) =>
+      api(editing ? `/api/jobs/${jobId}/drawer-schedules/${editing.id}` : `/api/jobs/${jobId}/drawer-schedules`, { method: editing ? 'PUT' : 'POST', body: toScheduleInput(v) }),
+    onSuccess: () => {
+      qc.invalidateQueries({ queryKey: ['drawer-schedules', jobId] });
+      qc.invalidateQueries({ queryKey: partsKey(jobId) });
+      onDone();
+    },
+    onError: (e) => {
+      if (e instanceof ApiError) for (const [path, messages] of Object.entries(e.fields)) setError(fieldOfPath(path) as Path<ScheduleFormText>, { message: messages[0] });
+    },
+  });
+
+  const field = (name: keyof ScheduleFormText, label: string, opts: { placeholder?: string; hint?: string } = {}) => {
+    const message = formState.errors[name]?.message ?? liveErrors.get(name);
+    return (
+      <div>
+        <label htmlFor={`ds-${name}`} className="field-label">{label}</label>
+        <input id={`ds-${name}`} className="field-input" placeholder={opts.placeholder} aria-invalid={message ? true : undefined} {...register(name)} />
+        {message ? <p className="field-error">{message}</p> : opts.hint ? <p className="mt-1 text-xs text-graphite-mute">{opts.hint}</p> : null}
+      </div>
+    );
+  };
+  const select = (name: keyof ScheduleFormText, label: string, options: Record<string, string>) => (
+    <div>
+      <label htmlFor={`ds-${name}`} className="field-label">{label}</label>
+      <select id={`ds-${name}`} className="field-input" {...register(name)}>
+        {Object.entries(options).map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+      </select>
+      {(formState.errors[name]?.message ?? liveErrors.get(name)) && <p className="field-error">{formState.errors[name]?.message ?? liveErrors.get(name)}</p>}
+    </div>
+  );
+  const param = JOINT_PARAM[values.jointMethod ?? 'lock-rabbet'];
+  const len = (mm: number) => formatLength(mm, units);
+  const sized = live?.sized.ok ? live.sized : null;
+  const bottom = sized?.parts.find((p) => p.role === 'bottom');
+  const movement = live && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
+  const cardKeys = sized?.setupCardKeys ?? [];
+
+  return (
+    <form onSubmit={handleSubmit((v) => save.mutate(v))} aria-label={editing ? 'Edit drawer schedule' : 'New drawer schedule'} className="card mb-6 p-5">
+      <h3 className="mb-4 font-semibold">{editing ? `Edit “${editing.input.label}”` : 'New drawer schedule'}</h3>
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+        <div className="grid content-start gap-4 sm:grid-cols-2">
+          {field('label', 'Label', { placeholder: 'Kitchen base drawers' })}
+          {field('quantity', 'Boxes')}
+          {select('sizeFrom', 'Size given is', { opening: 'the opening in the carcass', box: 'the box itself' })}
+          {select('slideType', 'Slides', SLIDE_LABELS)}
+          {field('width', values.sizeFrom === 'box' ? 'Box width' : 'Opening width')}
+          {field('height', values.sizeFrom === 'box' ? 'Box height' : 'Opening height')}
+          {field('depth', values.sizeFrom === 'box' ? 'Box depth' : 'Opening depth', { hint: values.sizeFrom === 'opening' ? 'Box depth: the longest standard slide that fits.' : undefined })}
+          {select('jointMethod', 'Joint', Object.fromEntries(JOINT_METHODS.map((m) => [m, JOINT_NAMES[m]])))}
+          {param ? field('jointParam', param.label, { placeholder: len(param.defaultMm), hint: `Blank: ${len(param.defaultMm)}.` }) : <div />}
+          {select('frontStyle', 'Box front', { flush: 'Flush (the box front is the face)', lipped: 'Lipped', applied: 'Applied front (overlay)' })}
+          {field('frontThickness', 'Front and back thickness')}
+          {field('sideThickness', 'Side thickness')}
+          {field('backThickness', 'Back thickness', { placeholder: 'same as front' })}
+          {field('sidesMaterial', 'Box material')}
+          {field('frontMaterial', 'Front material', { placeholder: 'same as box' })}
+          {select('bottomMount', 'Bottom', { groove: 'In a groove', applied: 'Applied under the box' })}
+          {field('bottomThickness', 'Bottom thickness')}
+          {field('bottomMaterial', 'Bottom material', { hint: 'A species name (white oak, cherry…) means a solid bottom: its movement is checked.' })}
+        </div>
+
+        <div className="space-y-4" aria-live="polite">
+          {!live && <p className="text-sm text-graphite-mute">Fill in the size to see the box and its parts.</p>}
+          {live && !live.sized.ok && (
+            <div role="alert" className="rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">
+              <p className="font-medium">This box cannot be built as set:</p>
+              <ul className="list-disc pl-5">{live.sized.errors.map((e) => <li key={e.path + e.message}>{e.message}</li>)}</ul>
+            </div>
+          )}
+          {sized && live && (
+            <>
+              <BoxPreview box={sized.box} t={{ front: live.schedule.thickness.frontMm, back: live.schedule.thickness.backMm ?? live.schedule.thickness.frontMm, side: live.schedule.thickness.sideMm }} units={units} />
+              <table className="data-table" aria-label="Parts of this schedule">
+                <thead>
+                  <tr><th>Part</th><th className="num">Qty</th><th className="num">Length</th><th className="num">Width</th><th className="num">Thick</th><th>Material</th><th className="num">Joint allow.</th></tr>
+                </thead>
+                <tbody>
+                  {sized.parts.map((p) => (
+                    <tr key={p.role}>
+                      <td title={p.machining.join(' ')}>{ROLE_NAMES[p.role]}</td>
+                      <td className="num">{p.quantity}</td>
+                      <td className="num">{len(p.lengthMm)}</td>
+                      <td className="num">{len(p.widthMm)}</td>
+                      <td className="num">{len(p.thicknessMm)}</td>
+                      <td>{p.material}</td>
+                      <td className="num">{p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '—'}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+              {sized.notes.length > 0 && <ul className="list-disc pl-5 text-sm text-graphite-soft">{sized.notes.map((n) => <li key={n}>{n}</li>)}</ul>}
+              {movement && <p role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">Wood movement: {movement}</p>}
+              <div className="space-y-2">
+                <h4 className="text-sm font-semibold">Setup cards this schedule needs</h4>
+                {cardKeys.map((key) => {
+                  const saved = findSetupCard(cards, key);
+                  const fallback = findSetupCard(DEFAULT_LOCK_RABBET_CARDS, key);
+                  const card = saved ?? fallback ?? { ...key, fields: [], note: 'Save the settings for this joint on the Setup cards page.' };
+                  return <SetupCardView key={`${key.joint}-${key.stockThicknessMm}`} card={card} units={units} source={saved ? 'saved' : fallback ? 'default' : 'missing'} />;
+                })}
+                <RouterCautions />
+              </div>
+            </>
+          )}
+        </div>
+      </div>
+      {save.error && !(save.error instanceof ApiError && Object.keys(save.error.fields).length) && <p role="alert" className="field-error">{save.error.message}</p>}
+      <div className="mt-5 flex gap-2">
+        <button type="submit" className="btn-accent" disabled={save.isPending}>{save.isPending ? 'Saving…' : editing ? 'Save changes' : 'Add to the cut list'}</button>
+        <button type="button" className="btn-quiet" onClick={onDone}>Cancel</button>
+      </div>
+    </form>
+  );
+}
