@@ -6,6 +6,7 @@ import { offcuts, plans, stockItems } from '@/db/schema';
 import { adjustStock, createStockItem, ledgerCounts, listMovements, listOffcuts, listStock, receiveStock, recordOffcut, scrapOffcut, stockValue } from '@/db/queries/stock';
 import { finishPlan } from '@/db/queries/plan-lifecycle';
 import { getTakeoff } from '@/db/queries/takeoff';
+import { listYieldLedger } from '@/db/queries/stock-yield';
 import { seedDemoShop } from '@/seeds/demo-shop';
 import { stockItemSchema } from '@/shared/schemas/stock';
 import { readPlan } from '@/lib/nesting';
@@ -58,6 +59,11 @@ describe('the demo shop ledger', () => {
     expect(result.offcuts.length).toBe(document.pieces.reduce((n, p) => n + (p.offcuts?.length ?? 0), 0));
     expect((await listOffcuts(db, demoShop)).filter((o) => o.sourcePlanId === plan.id)).toHaveLength(result.offcuts.length);
     await expectLedgerMatches(demoShop);
+    const ledger = await listYieldLedger(db, demoShop);
+    expect(ledger.plans).toEqual([expect.objectContaining({ id: plan.id, offcutsRacked: result.offcuts.length, yieldRatio: expect.closeTo(document.totals!.yield, 9) })]);
+    // Yield + kept offcuts + waste account for the whole stock area.
+    const keptArea = result.offcuts.reduce((n, o) => n + o.lengthMm * o.widthMm, 0);
+    expect(result.yieldRatio + keptArea / document.totals!.stockArea + result.wasteRatio).toBeCloseTo(1, 9);
   });
 });
 

@@ -1,0 +1,91 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { getDb } from '@/db/client';
+import { getShopSettings } from '@/db/queries/shops';
+import { getTakeoff } from '@/db/queries/takeoff';
+import { ReleasePlanButton } from '@/components/stock/release-plan-button';
+import { TakeoffTable } from '@/components/takeoff/takeoff-table';
+import { EmptyState } from '@/components/ui/empty-state';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { can } from '@/lib/auth/permissions';
+import { requirePageUser } from '@/lib/auth/session';
+import { formatMoney } from '@/lib/money';
+import { formatArea } from '@/lib/units/format-area';
+import { formatLength } from '@/lib/units/format-length';
+
+export const metadata: Metadata = { title: 'Takeoff' };
+
+export default async function TakeoffPage({ params }: { params: Promise<{ id: string }> }) {
+  const user = await requirePageUser('prices:read');
+  const id = z.uuid().safeParse((await params).id);
+  if (!id.success) notFound();
+  const db = await getDb();
+  const [takeoff, settings] = await Promise.all([getTakeoff(db, user.shopId, id.data), getShopSettings(db, user.shopId)]);
+  if (!settings) notFound();
+  if (!takeoff) {
+    return (
+      <EmptyState title="No plan yet.">
+        Nest the job first: the takeoff reads the latest plan. <Link href={`/jobs/${id.data}/plan`}>Go to Plan</Link>
+      </EmptyState>
+    );
+  }
+  const len = (mm: number) => formatLength(mm, settings.units);
+  const area = (mm2: number) => formatArea(mm2, settings.units);
+  const money = (cents: number) => formatMoney(cents, settings.currency);
+  const describe = Object.fromEntries([...takeoff.pull, ...takeoff.buy].map((l) => [l.stockId, `${l.material} ${l.nominalThickness || len(l.thicknessMm)} ${len(l.lengthMm)} × ${len(l.widthMm)}`]));
+  const { totals } = takeoff;
+
+  return (
+    <div>
+      <div className="mb-5 flex flex-wrap items-start justify-between gap-4">
+        <div>
+          <h2 className="flex items-center gap-2">
+            Takeoff for “{takeoff.plan.name}” <StatusBadge tone={takeoff.plan.status === 'draft' ? 'neutral' : 'accent'}>{takeoff.plan.status}</StatusBadge>
+          </h2>
+          <p className="mt-1 max-w-2xl text-sm text-graphite-mute">
+            From the job’s latest plan: the stock it lays parts on, priced at cost. The waste allowance ({takeoff.wastePercent} %, shop settings) is what to have ready:
+            pieces ÷ (1 − waste), rounded up.
+          </p>
+        </div>
+        {takeoff.plan.status === 'draft' && can(user.role, 'plans:release') && <ReleasePlanButton planId={takeoff.plan.id} describe={describe} />}
+      </div>
+
+      <div className="mb-6 grid gap-3 sm:grid-cols-4">
+        <Figure label="Material cost" value={money(totals.costCents)} />
+        <Figure label={`With ${takeoff.wastePercent} % waste`} value={money(totals.costWithWasteCents)} testId="takeoff-total-waste" />
+        <Figure label="Sheet area · board feet" value={`${area(totals.areaMm2)} · ${totals.boardFeet.toFixed(2)} bf`} />
+        <div className="card p-4" data-testid="takeoff-covered">
+          <div className="text-xs uppercase tracking-wide text-graphite-mute">Stock room</div>
+          <div className={`text-lg font-semibold ${totals.covered ? 'text-sage' : 'text-brick'}`}>{totals.covered ? 'Can cover it now' : 'Cannot cover it now'}</div>
+        </div>
+      </div>
+
+      {takeoff.pull.length > 0 && <TakeoffTable title="Pull from stock" lines={takeoff.pull} len={len} area={area} money={money} wastePercent={takeoff.wastePercent} />}
+      {takeoff.buy.length > 0 && <TakeoffTable title="To buy" lines={takeoff.buy} len={len} area={area} money={money} wastePercent={takeoff.wastePercent} />}
+      {takeoff.gone.length > 0 && (
+        <p className="field-error mb-4" role="alert">
+          The plan uses stock no longer in the stock room ({takeoff.gone.join(', ')}). <Link href={`/jobs/${id.data}/plan`}>Nest again</Link>.
+        </p>
+      )}
+      {takeoff.unplaced.length > 0 && (
+        <section className="card border-brick/40 p-4" aria-label="Parts not placed">
+          <h2 className="mb-2 text-brick">Parts not placed ({takeoff.unplaced.length})</h2>
+          <ul className="ml-4 list-disc text-sm">
+            {takeoff.unplaced.map((u) => <li key={`${u.partId}:${u.instance}`}>{u.label || u.partId} #{u.instance}: {u.message}</li>)}
+          </ul>
+        </section>
+      )}
+    </div>
+  );
+}
+
+function Figure({ label, value, testId }: { label: string; value: string; testId?: string }) {
+  return (
+    <div className="card p-4" data-testid={testId}>
+      <div className="text-xs uppercase tracking-wide text-graphite-mute">{label}</div>
+      <div className="num text-left text-lg font-semibold">{value}</div>
+    </div>
+  );
+}

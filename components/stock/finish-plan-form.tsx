@@ -1,0 +1,128 @@
+'use client';
+
+import Link from 'next/link';
+import { useState } from 'react';
+import { formatLength } from '@/lib/units/format-length';
+import type { ShopUnits } from '@/shared/schemas/units';
+import { ActionError } from './field';
+import { useStockAction } from './use-stock-action';
+
+export interface FinishPiece {
+  index: number;
+  title: string;
+  offcuts: { index: number; w: number; h: number; keepable: boolean }[];
+  parts: { partId: string; instance: number; label: string; w: number; h: number }[];
+}
+
+interface FinishResult {
+  yieldRatio: number;
+  wasteRatio: number;
+  offcuts: { id: string; lengthMm: number; widthMm: number; location: string }[];
+  damaged: number;
+}
+
+const pct = (r: number) => `${(r * 100).toFixed(1)} %`;
+
+/**
+ * The cutter's last step: where each offcut goes on the rack (or that it was not kept), which parts came off the saw
+ * damaged, then Done. Costs are never asked for here: the server works them out from the plan.
+ */
+export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { planId: string; pieces: FinishPiece[]; units: ShopUnits; defaultLocation: string }) {
+  const len = (mm: number) => formatLength(mm, units);
+  const [locations, setLocations] = useState<Record<string, string>>({});
+  const [dropped, setDropped] = useState<Set<string>>(new Set());
+  const [damaged, setDamaged] = useState<Set<string>>(new Set());
+  const [allTo, setAllTo] = useState(defaultLocation);
+  const [result, setResult] = useState<FinishResult | null>(null);
+  const done = useStockAction<FinishResult>(`/api/plans/${planId}/done`, 'POST', setResult);
+  const toggle = (set: Set<string>, key: string, update: (s: Set<string>) => void) => {
+    const next = new Set(set);
+    if (next.has(key)) next.delete(key);
+    else next.add(key);
+    update(next);
+  };
+
+  if (result) {
+    return (
+      <div className="card space-y-2 p-5" role="status" data-testid="finish-result">
+        <p className="text-lg font-semibold">Plan done.</p>
+        <p className="text-sm">
+          Yield {pct(result.yieldRatio)} · waste {pct(result.wasteRatio)} · {result.offcuts.length} offcut{result.offcuts.length === 1 ? '' : 's'} on the rack
+          {result.damaged > 0 && ` · ${result.damaged} damaged part${result.damaged === 1 ? '' : 's'} recorded`}.
+        </p>
+        <ul className="text-sm text-graphite-soft">
+          {result.offcuts.map((o) => <li key={o.id}>{len(o.lengthMm)} × {len(o.widthMm)} → {o.location || 'no location'}</li>)}
+        </ul>
+        <Link href="/stock?view=rack" className="btn-accent">See the offcut rack</Link>
+      </div>
+    );
+  }
+
+  function submit() {
+    done.mutate({
+      offcuts: pieces.flatMap((p) =>
+        p.offcuts.filter((o) => o.keepable).map((o) => {
+          const key = `${p.index}:${o.index}`;
+          return { piece: p.index, index: o.index, keep: !dropped.has(key), location: (locations[key] ?? allTo).trim() };
+        }),
+      ),
+      damaged: pieces.flatMap((p) => p.parts.filter((pt) => damaged.has(`${p.index}:${pt.partId}:${pt.instance}`)).map((pt) => ({ piece: p.index, partId: pt.partId, instance: pt.instance }))),
+    });
+  }
+
+  const offcutCount = pieces.reduce((n, p) => n + p.offcuts.filter((o) => o.keepable).length, 0);
+  return (
+    <form className="space-y-5" aria-label="Finish the plan" onSubmit={(e) => { e.preventDefault(); submit(); }}>
+      <div className="card flex flex-wrap items-end gap-3 p-4">
+        <div className="w-64">
+          <label htmlFor="all-location" className="field-label">Rack location for offcuts</label>
+          <input id="all-location" className="field-input" value={allTo} onChange={(e) => setAllTo(e.target.value)} placeholder="Offcut bin 1" />
+        </div>
+        <p className="text-sm text-graphite-mute">{offcutCount} offcut{offcutCount === 1 ? '' : 's'} worth keeping. Set a different place per offcut below, or untick one that was not kept.</p>
+      </div>
+      {pieces.map((p) => (
+        <section key={p.index} className="card p-4" aria-label={p.title}>
+          <h2 className="mb-2 text-base">{p.title}</h2>
+          <div className="grid gap-4 md:grid-cols-2">
+            <div>
+              <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-graphite-mute">Offcuts</h3>
+              {p.offcuts.filter((o) => o.keepable).length === 0 && <p className="text-sm text-graphite-mute">None worth keeping.</p>}
+              <ul className="space-y-2">
+                {p.offcuts.filter((o) => o.keepable).map((o) => {
+                  const key = `${p.index}:${o.index}`;
+                  return (
+                    <li key={key} className="flex flex-wrap items-center gap-2 text-sm" data-testid="finish-offcut">
+                      <label className="flex min-h-11 items-center gap-2">
+                        <input type="checkbox" className="h-5 w-5" checked={!dropped.has(key)} onChange={() => toggle(dropped, key, setDropped)} />
+                        <span className="num">{len(o.w)} × {len(o.h)}</span>
+                      </label>
+                      <input className="field-input w-40 py-1" aria-label={`Location for offcut ${len(o.w)} × ${len(o.h)}`} placeholder={allTo || 'location'} value={locations[key] ?? ''} onChange={(e) => setLocations({ ...locations, [key]: e.target.value })} disabled={dropped.has(key)} />
+                    </li>
+                  );
+                })}
+              </ul>
+            </div>
+            <div>
+              <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-graphite-mute">Damaged at the saw</h3>
+              <ul className="grid gap-x-3 sm:grid-cols-2">
+                {p.parts.map((pt) => {
+                  const key = `${p.index}:${pt.partId}:${pt.instance}`;
+                  return (
+                    <li key={key}>
+                      <label className="flex min-h-11 items-center gap-2 text-sm">
+                        <input type="checkbox" className="h-5 w-5" checked={damaged.has(key)} onChange={() => toggle(damaged, key, setDamaged)} />
+                        {pt.label} #{pt.instance} <span className="text-xs text-graphite-mute">{len(pt.w)} × {len(pt.h)}</span>
+                      </label>
+                    </li>
+                  );
+                })}
+              </ul>
+            </div>
+          </div>
+        </section>
+      ))}
+      <ActionError error={done.error} />
+      <button type="submit" className="btn-accent px-6 py-3 text-base" disabled={done.isPending}>{done.isPending ? 'Recording…' : 'Mark the plan done'}</button>
+    </form>
+  );
+}

@@ -1,0 +1,58 @@
+'use client';
+
+import Link from 'next/link';
+import { useMutation } from '@tanstack/react-query';
+import { useRouter } from 'next/navigation';
+import { api, ApiError } from '@/lib/client/api';
+
+interface Missing {
+  stockId: string;
+  material: string;
+  thicknessMm: number;
+  lengthMm: number;
+  widthMm: number;
+  needed: number;
+  free: number;
+}
+
+/**
+ * Release a draft plan: its stock is reserved all at once. When a piece is gone, nothing is reserved and the
+ * refusal lists each piece with a way back to re-nest against what is left.
+ */
+export function ReleasePlanButton({ planId, describe }: { planId: string; describe?: Record<string, string> }) {
+  const router = useRouter();
+  const release = useMutation({
+    mutationFn: async () => {
+      const res = await fetch(`/api/plans/${planId}/release`, { method: 'POST' });
+      const body = await res.json().catch(() => ({}));
+      if (res.status === 409 && body.missing) return { refused: body as { error: string; missing: Missing[]; renest: string } };
+      if (!res.ok) throw new ApiError(res.status, body.error ?? `Release failed (${res.status}).`, body.fields);
+      return { refused: null };
+    },
+    onSuccess: (r) => {
+      if (!r.refused) router.refresh();
+    },
+  });
+  const refused = release.data?.refused;
+  return (
+    <div className="space-y-2">
+      <button type="button" className="btn-accent" disabled={release.isPending} onClick={() => release.mutate()}>
+        {release.isPending ? 'Reserving stock…' : 'Release plan to the saw'}
+      </button>
+      {release.isError && <p className="field-error" role="alert">{release.error.message}</p>}
+      {refused && (
+        <div className="rounded-md border border-brick/40 bg-brick-wash p-3 text-sm" role="alert">
+          <p className="font-medium text-brick">{refused.error}</p>
+          <ul className="my-2 ml-4 list-disc">
+            {refused.missing.map((m) => (
+              <li key={m.stockId}>
+                {describe?.[m.stockId] ?? m.material}: needs {m.needed}, {m.free} free
+              </li>
+            ))}
+          </ul>
+          <Link href={refused.renest} className="btn-quiet">Nest again against what is left</Link>
+        </div>
+      )}
+    </div>
+  );
+}

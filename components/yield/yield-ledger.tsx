@@ -1,0 +1,57 @@
+import Link from 'next/link';
+import type { listYieldLedger } from '@/db/queries/stock-yield';
+
+type Ledger = Awaited<ReturnType<typeof listYieldLedger>>;
+const pct = (r: number | null) => (r == null ? '—' : `${(r * 100).toFixed(1)} %`);
+
+/** Yield, waste and material cost of every finished plan, with the shop's figures weighted by stock area. */
+export function YieldLedger({ ledger, money, area }: { ledger: Ledger; money: (cents: number) => string; area: (mm2: number) => string }) {
+  const { totals } = ledger;
+  return (
+    <>
+      <div className="mb-5 grid gap-3 sm:grid-cols-4">
+        <Figure label="Yield (by stock area)" value={pct(totals.yieldRatio)} />
+        <Figure label="Waste" value={pct(totals.wasteRatio)} />
+        <Figure label="Material cost" value={money(totals.costCents)} />
+        <Figure label="Stock cut" value={area(totals.stockArea)} />
+      </div>
+      <div className="card overflow-x-auto">
+        <table className="data-table" aria-label="Finished plans">
+          <thead>
+            <tr>
+              <th>Job</th>
+              <th>Plan</th>
+              <th className="num">Yield</th>
+              <th className="num">Waste</th>
+              <th className="num">Offcuts racked</th>
+              <th className="num">Material cost</th>
+              <th>Finished</th>
+            </tr>
+          </thead>
+          <tbody>
+            {ledger.plans.map((p) => (
+              <tr key={p.id} data-testid="ledger-row">
+                <td className="font-medium"><Link href={`/jobs/${p.jobId}`}>{p.jobName}</Link></td>
+                <td>{p.name}</td>
+                <td className="num">{pct(p.yieldRatio)}</td>
+                <td className="num">{pct(p.wasteRatio)}</td>
+                <td className="num">{p.offcutsRacked}</td>
+                <td className="num">{p.costCents == null ? '—' : money(p.costCents)}</td>
+                <td className="whitespace-nowrap">{(p.finishedAt ?? p.updatedAt).toISOString().slice(0, 10)}{p.finishedBy && <span className="text-graphite-mute"> · {p.finishedBy}</span>}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </>
+  );
+}
+
+function Figure({ label, value }: { label: string; value: string }) {
+  return (
+    <div className="card p-4">
+      <div className="text-xs uppercase tracking-wide text-graphite-mute">{label}</div>
+      <div className="num text-left text-2xl font-semibold">{value}</div>
+    </div>
+  );
+}
