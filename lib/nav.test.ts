@@ -3,9 +3,9 @@ import { homeFor, navFor } from './nav';
 
 describe('navigation by role (PRODUCT.md, "Users and roles")', () => {
   test.each([
-    ['owner', ['Jobs', 'Stock room', 'Yield ledger', 'Shop floor', 'Team', 'Shop settings']],
-    ['estimator', ['Jobs', 'Stock room']],
-    ['cutter', ['Jobs', 'Stock room', 'Shop floor']],
+    ['owner', ['Jobs', 'Setup cards', 'Stock room', 'Yield ledger', 'Shop floor', 'Team', 'Shop settings']],
+    ['estimator', ['Jobs', 'Setup cards', 'Stock room']],
+    ['cutter', ['Jobs', 'Setup cards', 'Stock room', 'Shop floor']],
   ] as const)('the %s sees %j', (role, labels) => {
     expect(navFor(role).map((i) => i.label)).toEqual(labels);
   });
