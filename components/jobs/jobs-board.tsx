@@ -1,6 +1,16 @@
 'use client';
 
 import { useQuery } from '@tanstack/react-query';
+import {
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnDef,
+  type FilterFn,
+  type SortingState,
+} from '@tanstack/react-table';
 import Link from 'next/link';
 import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { useMemo, useState } from 'react';
@@ -10,51 +20,90 @@ import { JOB_STATUS_LABELS, JOB_STATUSES, type JobSummary } from '@/shared/schem
 import { JobStatusBadge } from './job-status';
 import { NewJobForm } from './new-job-form';
 
+const matchesSearch: FilterFn<JobSummary> = (row, _columnId, needle: string) =>
+  `${row.original.name} ${row.original.customer} ${row.original.materials.join(' ')}`.toLowerCase().includes(needle.trim().toLowerCase());
+
+const columns: ColumnDef<JobSummary>[] = [
+  { id: 'name', header: 'Job', accessorKey: 'name', cell: ({ row }) => <Link href={`/jobs/${row.original.id}`} className="font-medium text-graphite">{row.original.name}</Link> },
+  { id: 'customer', header: 'Customer', accessorKey: 'customer', filterFn: 'equalsString' },
+  {
+    id: 'status',
+    header: 'Status',
+    accessorKey: 'status',
+    filterFn: 'equalsString',
+    // Work order, not alphabetical: quoting → won → cutting → done → archived.
+    sortingFn: (a, b) => JOB_STATUSES.indexOf(a.original.status) - JOB_STATUSES.indexOf(b.original.status),
+    cell: ({ row }) => <JobStatusBadge status={row.original.status} />,
+  },
+  { id: 'due', header: 'Due', accessorFn: (j) => j.dueDate ?? undefined, sortUndefined: 'last', cell: ({ row }) => <span className="whitespace-nowrap">{row.original.dueDate ?? '—'}</span> },
+  { id: 'parts', header: 'Parts', accessorKey: 'partCount', meta: { numeric: true } },
+  { id: 'materials', header: 'Materials', accessorFn: (j) => j.materials.join(', '), enableSorting: false, cell: ({ getValue }) => <span className="text-graphite-soft">{(getValue() as string) || '—'}</span> },
+  { id: 'updated', header: 'Changed', accessorKey: 'updatedAt', cell: ({ row }) => <span className="whitespace-nowrap text-graphite-mute">{row.original.updatedAt.slice(0, 10)}</span> },
+];
+
+/** Jobs as a sortable, filterable table; search, filters and sort live in the URL so a view can be bookmarked. */
 export function JobsBoard({ canWrite }: { canWrite: boolean }) {
   const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();
   const search = params.get('q') ?? '';
   const status = params.get('status') ?? '';
+  const customer = params.get('customer') ?? '';
+  const sort = params.get('sort') ?? 'updated.desc';
   const [creating, setCreating] = useState(false);
   const jobs = useQuery({ queryKey: ['jobs'], queryFn: () => api<JobSummary[]>('/api/jobs') });
 
-  // Filters live in the URL so a filtered list can be bookmarked and shared.
-  function setFilter(key: string, value: string) {
+  function setParam(key: string, value: string) {
     const next = new URLSearchParams(params);
     if (value) next.set(key, value);
     else next.delete(key);
     router.replace(`${pathname}${next.size ? `?${next}` : ''}`);
   }
 
-  const shown = useMemo(() => {
-    const needle = search.trim().toLowerCase();
-    return (jobs.data ?? []).filter(
-      (j) =>
-        (!status || j.status === status) &&
-        (!needle || `${j.name} ${j.customer} ${j.materials.join(' ')}`.toLowerCase().includes(needle)),
-    );
-  }, [jobs.data, search, status]);
+  const sorting: SortingState = useMemo(() => {
+    const [id, dir] = sort.split('.');
+    return columns.some((c) => c.id === id) ? [{ id, desc: dir === 'desc' }] : [];
+  }, [sort]);
+  const columnFilters = useMemo(() => [...(status ? [{ id: 'status', value: status }] : []), ...(customer ? [{ id: 'customer', value: customer }] : [])], [status, customer]);
+  const customers = useMemo(() => [...new Set((jobs.data ?? []).map((j) => j.customer).filter(Boolean))].sort(), [jobs.data]);
+
+  const table = useReactTable({
+    data: jobs.data ?? [],
+    columns,
+    state: { sorting, columnFilters, globalFilter: search },
+    globalFilterFn: matchesSearch,
+    onSortingChange: (updater) => {
+      const next = typeof updater === 'function' ? updater(sorting) : updater;
+      setParam('sort', next[0] ? `${next[0].id}.${next[0].desc ? 'desc' : 'asc'}` : '');
+    },
+    getCoreRowModel: getCoreRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+  });
+  const rows = table.getRowModel().rows;
 
   return (
     <div>
       <div className="mb-4 flex flex-wrap items-end gap-3">
         <div className="w-72">
           <label htmlFor="job-search" className="field-label">Search</label>
-          <input id="job-search" className="field-input" placeholder="Job, customer or material" defaultValue={search} onChange={(e) => setFilter('q', e.target.value)} />
+          <input id="job-search" className="field-input" placeholder="Job, customer or material" defaultValue={search} onChange={(e) => setParam('q', e.target.value)} />
         </div>
         <div>
           <label htmlFor="job-status" className="field-label">Status</label>
-          <select id="job-status" className="field-input" value={status} onChange={(e) => setFilter('status', e.target.value)}>
+          <select id="job-status" className="field-input" value={status} onChange={(e) => setParam('status', e.target.value)}>
             <option value="">Any</option>
-            {JOB_STATUSES.map((s) => (
-              <option key={s} value={s}>{JOB_STATUS_LABELS[s]}</option>
-            ))}
+            {JOB_STATUSES.map((s) => <option key={s} value={s}>{JOB_STATUS_LABELS[s]}</option>)}
           </select>
         </div>
-        {canWrite && !creating && (
-          <button type="button" className="btn-accent ml-auto" onClick={() => setCreating(true)}>New job</button>
-        )}
+        <div>
+          <label htmlFor="job-customer" className="field-label">Customer</label>
+          <select id="job-customer" className="field-input" value={customer} onChange={(e) => setParam('customer', e.target.value)}>
+            <option value="">Any</option>
+            {customers.map((c) => <option key={c} value={c}>{c}</option>)}
+          </select>
+        </div>
+        {canWrite && !creating && <button type="button" className="btn-accent ml-auto" onClick={() => setCreating(true)}>New job</button>}
       </div>
       {creating && <NewJobForm onDone={() => setCreating(false)} />}
 
@@ -64,37 +113,49 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
           Could not load jobs: {jobs.error.message} <button className="underline" onClick={() => jobs.refetch()}>Try again</button>
         </p>
       )}
-      {jobs.isSuccess && shown.length === 0 && (
+      {jobs.isSuccess && rows.length === 0 && (
         <EmptyState title={jobs.data.length ? 'No job matches these filters.' : 'No jobs yet.'}>
-          {jobs.data.length ? 'Clear the search or pick another status.' : canWrite ? 'Create the first job to start its cut list.' : 'Jobs appear here once an estimator creates them.'}
+          {jobs.data.length ? 'Clear the search or pick another status or customer.' : canWrite ? 'Create the first job to start its cut list.' : 'Jobs appear here once an estimator creates them.'}
         </EmptyState>
       )}
-      {jobs.isSuccess && shown.length > 0 && (
+      {jobs.isSuccess && rows.length > 0 && (
         <div className="card overflow-hidden">
           <table className="data-table" aria-label="Jobs">
             <thead>
-              <tr>
-                <th>Job</th>
-                <th>Customer</th>
-                <th>Status</th>
-                <th>Due</th>
-                <th className="num">Parts</th>
-                <th>Materials</th>
-              </tr>
+              {table.getHeaderGroups().map((group) => (
+                <tr key={group.id}>
+                  {group.headers.map((header) => {
+                    const sorted = header.column.getIsSorted();
+                    const numeric = (header.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
+                    return (
+                      <th key={header.id} className={numeric ? 'num' : undefined} aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}>
+                        {header.column.getCanSort() ? (
+                          <button type="button" className="uppercase tracking-wide hover:text-graphite" onClick={header.column.getToggleSortingHandler()}>
+                            {flexRender(header.column.columnDef.header, header.getContext())}
+                            <span aria-hidden className="ml-1">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
+                          </button>
+                        ) : (
+                          flexRender(header.column.columnDef.header, header.getContext())
+                        )}
+                      </th>
+                    );
+                  })}
+                </tr>
+              ))}
             </thead>
             <tbody>
-              {shown.map((job) => (
-                <tr key={job.id} className="hover:bg-paper">
-                  <td><Link href={`/jobs/${job.id}`} className="font-medium text-graphite">{job.name}</Link></td>
-                  <td>{job.customer}</td>
-                  <td><JobStatusBadge status={job.status} /></td>
-                  <td className="whitespace-nowrap">{job.dueDate ?? '—'}</td>
-                  <td className="num">{job.partCount}</td>
-                  <td className="text-graphite-soft">{job.materials.join(', ') || '—'}</td>
+              {rows.map((row) => (
+                <tr key={row.id} className="hover:bg-paper">
+                  {row.getVisibleCells().map((cell) => (
+                    <td key={cell.id} className={(cell.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric ? 'num' : undefined}>
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </td>
+                  ))}
                 </tr>
               ))}
             </tbody>
           </table>
+          <p className="border-t border-paper-edge px-3 py-2 text-xs text-graphite-mute">{rows.length} of {jobs.data.length} jobs</p>
         </div>
       )}
     </div>
