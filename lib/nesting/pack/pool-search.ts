@@ -12,6 +12,8 @@ import type { Bin, Problem, Solution } from './solution';
  * Moves that leave it equal are kept too: they wander across the plateau, which is where the way out usually
  * lies. When the pool empties, the job fits one bin fewer, and the next emptiest bin is dissolved.
  */
+const EMPTIER_SHARE = 0.7;
+
 export class PoolSearch {
   private bins: Bin[];
   private pool: number[] = [];
@@ -32,8 +34,10 @@ export class PoolSearch {
     const nb = this.bins.length;
     if (nb === 0) return null;
     const k = Math.min(nb, 1 + randInt(rng, 3));
+    // Mostly bins drawn towards the emptiest: they have room for the pool's parts.
+    const ranked = rng() < EMPTIER_SHARE ? this.bins.map((_, j) => j).sort((x, y) => this.bins[x].used - this.bins[y].used || x - y) : null;
     const chosen = new Set<number>();
-    while (chosen.size < k) chosen.add(randInt(rng, nb));
+    while (chosen.size < k) chosen.add(ranked ? ranked[Math.floor(rng() ** 2 * nb)] : randInt(rng, nb));
     const items = this.pool.slice();
     for (const j of chosen) for (const i of this.bins[j].seq) items.push(i);
     const keys = this.orderKeys;
