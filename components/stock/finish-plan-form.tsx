@@ -1,11 +1,12 @@
 'use client';
 
 import Link from 'next/link';
+import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
+import { api } from '@/lib/client/api';
 import { formatLength } from '@/lib/units/format-length';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { ActionError } from './field';
-import { useStockAction } from './use-stock-action';
 
 export interface FinishPiece {
   index: number;
@@ -34,7 +35,8 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
   const [damaged, setDamaged] = useState<Set<string>>(new Set());
   const [allTo, setAllTo] = useState(defaultLocation);
   const [result, setResult] = useState<FinishResult | null>(null);
-  const done = useStockAction<FinishResult>(`/api/plans/${planId}/done`, 'POST', setResult);
+  // No page refresh on success: the page would re-render as a done plan and hide this summary.
+  const done = useMutation({ mutationFn: (body: unknown) => api<FinishResult>(`/api/plans/${planId}/done`, { method: 'POST', body }), onSuccess: setResult });
   const toggle = (set: Set<string>, key: string, update: (s: Set<string>) => void) => {
     const next = new Set(set);
     if (next.has(key)) next.delete(key);
