@@ -51,13 +51,19 @@ function NestForm({ jobId, shop, showPrices, offered }: { jobId: string; shop: S
   const schema = useMemo(() => settingsForm(unit), [unit]);
   const len = (mm: number) => formatLength(mm, shop.units);
   const s = offered.settings ?? {};
+  const shopDefaults = {
+    kerf: s.kerf ?? shop.kerfMm,
+    trim: s.trim ?? shop.edgeTrimMm,
+    minOffcutLength: s.minOffcutLength ?? shop.minOffcutLengthMm,
+    minOffcutWidth: s.minOffcutWidth ?? shop.minOffcutWidthMm,
+  };
   const form = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
     resolver: zodResolver(schema),
     defaultValues: {
-      kerf: len(s.kerf ?? shop.kerfMm),
-      trim: len(s.trim ?? shop.edgeTrimMm),
-      minOffcutLength: len(s.minOffcutLength ?? shop.minOffcutLengthMm),
-      minOffcutWidth: len(s.minOffcutWidth ?? shop.minOffcutWidthMm),
+      kerf: len(shopDefaults.kerf),
+      trim: len(shopDefaults.trim),
+      minOffcutLength: len(shopDefaults.minOffcutLength),
+      minOffcutWidth: len(shopDefaults.minOffcutWidth),
       style: 'panel',
       objective: 'cost',
       timeBudgetSec: 3,
@@ -73,8 +79,11 @@ function NestForm({ jobId, shop, showPrices, offered }: { jobId: string; shop: S
   const partCount = offered.parts.reduce((n, p) => n + (p.quantity ?? 1), 0);
 
   const nest = form.handleSubmit(async (v) => {
+    // A length left as shown keeps the shop's exact value (the field shows it rounded to the shop's precision).
+    const dirty = form.formState.dirtyFields;
+    const exact = (field: 'kerf' | 'trim' | 'minOffcutLength' | 'minOffcutWidth', typed: number) => (dirty[field] ? typed : shopDefaults[field]);
     const settings: NestSettingsOverride = {
-      kerf: v.kerf, trim: v.trim, minOffcutLength: v.minOffcutLength, minOffcutWidth: v.minOffcutWidth,
+      kerf: exact('kerf', v.kerf), trim: exact('trim', v.trim), minOffcutLength: exact('minOffcutLength', v.minOffcutLength), minOffcutWidth: exact('minOffcutWidth', v.minOffcutWidth),
       style: v.style, objective: v.objective, timeBudgetMs: Math.round(v.timeBudgetSec * 1000), preferOffcuts: v.preferOffcuts,
     };
     const chosen = new Set(v.stockIds);

@@ -28,7 +28,7 @@ export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan;
           {lines.map((l) => (
             <tr key={l.stockId}>
               <td>{KIND[l.kind]} · {len(l.thickness)} {l.material}</td>
-              <td className="num">{len(l.length)} × {len(l.width)}</td>
+              <td className="num whitespace-nowrap">{len(l.length)} × {len(l.width)}</td>
               <td className="num">{l.count}</td>
               {showPrices && <td className="num">{money(l.cost)}</td>}
               <td className="text-graphite-mute">{l.source ?? ''}</td>

@@ -23,5 +23,6 @@ function hash(text: string): number {
   return h >>> 0;
 }
 
-/** The fill for a part of this drawer schedule (`group`) or, without one, this material. */
-export const partTone = (group: string | undefined, material: string) => PART_TONES[hash(group ? `g:${group}` : `m:${material.trim().toLowerCase()}`) % PART_TONES.length];
+/** The fill for a part of this drawer schedule (`group`) or, without one, this material and thickness. */
+export const partTone = (group: string | undefined, material: string, thickness = 0) =>
+  PART_TONES[hash(group ? `g:${group}` : `m:${material.trim().toLowerCase()}:${thickness.toFixed(1)}`) % PART_TONES.length];

@@ -48,3 +48,19 @@ describe('part colours', () => {
     expect(PART_TONES).toContain(partTone('x', 'y'));
   });
 });
+
+describe('fitting the view', () => {
+  test('every piece lands inside the box, and a point maps to the screen through the view', async () => {
+    const { fitView, toScreen, layoutPieces } = await import('@/lib/layout-bench/world');
+    const frames = layoutPieces(doc.pieces);
+    const view = fitView(frames, 900, 560);
+    for (const f of frames) {
+      const far = toScreen(view, f, f.w, f.h);
+      expect(far.x).toBeLessThanOrEqual(900);
+      expect(far.y).toBeLessThanOrEqual(560);
+    }
+    // The first piece's caption (drawn above it) stays on screen.
+    expect(toScreen(view, frames[0], 0, 0).x).toBe(12);
+    expect(toScreen(view, frames[0], 0, 0).y).toBeCloseTo(12 + 22, 9);
+  });
+});

@@ -7,8 +7,9 @@ import type { BenchDoc, BenchPiece, BenchPlacement } from '@/lib/layout-bench/do
 
 /** Space between pieces on the bench, in mm of world. */
 export const PIECE_GAP = 250;
-/** Room above each piece for its caption, in mm of world. */
+/** Room above each piece for its caption, in mm of world; and on screen above the first row. */
 export const CAPTION_SPACE = 180;
+export const CAPTION_PX = 22;
 
 export interface PieceFrame extends Rect {
   piece: number;
@@ -70,3 +71,22 @@ export function worldRect(p: BenchPlacement, frames: readonly PieceFrame[]): Rec
   const f = frames[p.piece];
   return { x: f.x + p.x, y: f.y + p.y, w: p.w, h: p.h };
 }
+
+/** Screen px per world mm and the world origin's place on screen. */
+export interface View {
+  x: number;
+  y: number;
+  scale: number;
+}
+
+/** The view that shows every piece in a `width` × `height` px box, `margin` px from its top-left corner. */
+export function fitView(frames: readonly PieceFrame[], width: number, height: number, margin = 12): View {
+  const w = Math.max(1, ...frames.map((f) => f.x + f.w)) + PIECE_GAP;
+  const h = Math.max(1, ...frames.map((f) => f.y + f.h)) + PIECE_GAP;
+  // The first row's captions sit above the pieces: keep room for them on screen at any zoom.
+  const top = margin + CAPTION_PX;
+  return { x: margin, y: top - CAPTION_SPACE * Math.min((width - margin) / w, (height - top) / h), scale: Math.min((width - margin) / w, (height - top) / h) };
+}
+
+/** Screen position of a point given in a piece's own coordinates. */
+export const toScreen = (view: View, frame: Rect, x: number, y: number) => ({ x: view.x + (frame.x + x) * view.scale, y: view.y + (frame.y + y) * view.scale });

@@ -1,0 +1,41 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { getDb } from '@/db/client';
+import { getPlan } from '@/db/queries/plan-document';
+import { withoutPrices } from '@/db/queries/plan-drafts';
+import { getShopSettings } from '@/db/queries/shops';
+import { LayoutBench } from '@/components/layout-bench/layout-bench';
+import { PlanSummary } from '@/components/nesting/plan-summary';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { requirePageUser } from '@/lib/auth/session';
+import { can } from '@/lib/auth/permissions';
+
+export const metadata: Metadata = { title: 'Plan' };
+
+const params = z.object({ id: z.uuid(), planId: z.uuid() });
+
+/** One plan of the job: its figures and the Layout bench (editable while it is a draft). */
+export default async function PlanPage({ params: raw }: { params: Promise<{ id: string; planId: string }> }) {
+  const user = await requirePageUser('plans:read');
+  const parsed = params.safeParse(await raw);
+  if (!parsed.success) notFound();
+  const db = await getDb();
+  const [plan, shop] = await Promise.all([getPlan(db, user.shopId, parsed.data.planId), getShopSettings(db, user.shopId)]);
+  const mayEdit = can(user.role, 'plans:write');
+  if (!plan || !shop || plan.jobId !== parsed.data.id || (plan.status === 'draft' && !mayEdit)) notFound();
+  const showPrices = can(user.role, 'prices:read');
+  return (
+    <div className="space-y-6">
+      <div className="flex flex-wrap items-center gap-3">
+        <Link href={`/jobs/${plan.jobId}/plan`} className="text-sm text-graphite-mute">← Plans</Link>
+        <h2 className="flex items-center gap-2">{plan.name} <StatusBadge tone={plan.status === 'draft' ? 'neutral' : 'accent'}>{plan.status}</StatusBadge></h2>
+        {plan.status !== 'draft' && <Link href={`/plans/${plan.id}/saw-order`} className="btn-quiet ml-auto">Saw order</Link>}
+      </div>
+      {plan.status === 'draft' && mayEdit && <p className="text-sm text-graphite-mute">A draft: change the layout below, then save it. Once released the layout is fixed.</p>}
+      <PlanSummary plan={showPrices ? plan.document : withoutPrices(plan.document)} units={shop.units} currency={shop.currency} showPrices={showPrices} />
+      <LayoutBench planId={plan.id} editable={mayEdit && plan.status === 'draft'} units={shop.units} />
+    </div>
+  );
+}

@@ -1,0 +1,113 @@
+import { expect, test, type Page } from '@playwright/test';
+import { layoutPieces, fitView, toScreen, type PieceFrame } from '../../lib/layout-bench/world';
+import { shot, signIn } from './support/session';
+
+type Rect = { x: number; y: number; w: number; h: number };
+type Placement = Rect & { partId: string; instance: number };
+type Piece = { length: number; width: number; material: string; thickness: number; placements: Placement[]; offcuts?: Rect[] };
+
+async function savedPlan(page: Page, planId: string): Promise<{ pieces: Piece[] }> {
+  return (await (await page.request.get(`/api/plans/${planId}`)).json()).document;
+}
+
+/** A part that fits in the largest offcut of its own piece, and where that offcut is: moving it there stays cuttable. */
+function pickMove(pieces: Piece[]) {
+  let best: { piece: number; part: Placement; to: Rect } | null = null;
+  pieces.forEach((piece, i) => {
+    for (const o of piece.offcuts ?? []) {
+      const part = piece.placements.find((p) => p.w <= o.w && p.h <= o.h);
+      if (part && (!best || o.w * o.h > best.to.w * best.to.h)) best = { piece: i, part, to: o };
+    }
+  });
+  return best as { piece: number; part: Placement; to: Rect } | null;
+}
+
+async function canvasView(page: Page, pieces: Piece[]) {
+  const box = (await page.getByTestId('bench-canvas').locator('canvas').first().boundingBox())!;
+  const frames: PieceFrame[] = layoutPieces(pieces);
+  return { box, frames, view: fitView(frames, Math.floor(box.width), Math.floor(box.height)) };
+}
+
+test('an estimator nests a job with progress, saves a draft, drags a part on the bench, saves, and the change survives a reload', async ({ page }) => {
+  test.setTimeout(120_000);
+  await signIn(page, 'estimator');
+  await page.goto('/jobs');
+  await page.getByRole('link', { name: 'Hollis kitchen' }).click();
+  await page.getByRole('navigation', { name: 'Job sections' }).getByRole('link', { name: 'Plan' }).click();
+  await expect(page.getByRole('table', { name: 'Plans' })).toContainText('Released');
+  await expect(page.getByRole('table', { name: 'Sheets' })).toBeVisible();
+  await page.getByLabel('Search for (seconds)').fill('3');
+  await shot(page, 'plan-nest-settings');
+
+  await page.getByRole('button', { name: /^Nest \d+ parts?$/ }).click();
+  const progress = page.getByTestId('nest-progress');
+  await expect(progress).toBeVisible();
+  await expect(page.getByTestId('nest-best')).toContainText('Best so far', { timeout: 10_000 });
+  // The page stays responsive while the worker searches: typing into a field works mid-Nest.
+  await page.getByLabel('Saw kerf').focus();
+  await shot(page, 'plan-nest-progress');
+  await expect(page.getByTestId('plan-summary')).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByTestId('plan-summary')).toContainText('Yield');
+  await shot(page, 'plan-nest-result');
+
+  await page.getByLabel('Plan name').fill('Kitchen, bench edit');
+  await page.getByRole('button', { name: 'Save as draft plan' }).click();
+  await expect(page.getByRole('heading', { name: /Kitchen, bench edit/ })).toBeVisible();
+  await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
+  const planId = page.url().split('/').pop()!;
+  await shot(page, 'plan-bench-loaded');
+
+  const before = await savedPlan(page, planId);
+  const move = pickMove(before.pieces);
+  expect(move, 'the nested plan has an offcut a part fits in').not.toBeNull();
+  const { part, to, piece } = move!;
+  const { box, frames, view } = await canvasView(page, before.pieces);
+  const from = toScreen(view, frames[piece], part.x + part.w / 2, part.y + part.h / 2);
+  const dest = toScreen(view, frames[piece], to.x + part.w / 2, to.y + part.h / 2);
+  await page.mouse.move(box.x + from.x, box.y + from.y);
+  await page.mouse.down();
+  await page.mouse.move(box.x + dest.x, box.y + dest.y, { steps: 20 });
+  await page.mouse.up();
+  await expect(page.getByRole('button', { name: 'Undo' })).toBeEnabled();
+  await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
+  await shot(page, 'plan-bench-dragged');
+
+  await page.getByRole('button', { name: 'Save layout' }).click();
+  await expect(page.getByText('Saved. The saw order was rebuilt')).toBeVisible();
+  await page.reload();
+  await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
+  const after = await savedPlan(page, planId);
+  const moved = after.pieces.flatMap((p) => p.placements).find((p) => p.partId === part.partId && p.instance === part.instance)!;
+  expect(Math.abs(moved.x - to.x)).toBeLessThan(2);
+  expect(Math.abs(moved.y - to.y)).toBeLessThan(2);
+  await shot(page, 'plan-bench-after-reload');
+});
+
+test('an overlapping drop is shown on the bench and saving is refused until undone', async ({ page }) => {
+  test.setTimeout(90_000);
+  await signIn(page, 'estimator');
+  const jobs: { id: string; name: string }[] = await (await page.request.get('/api/jobs')).json();
+  const kitchen = jobs.find((j) => j.name === 'Hollis kitchen')!;
+  const plans: { id: string; status: string }[] = await (await page.request.get(`/api/jobs/${kitchen.id}/plans`)).json();
+  const draft = plans.find((p) => p.status === 'draft');
+  test.skip(!draft, 'needs the draft saved by the test above');
+  await page.goto(`/jobs/${kitchen.id}/plan/${draft!.id}`);
+  await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
+  const { pieces } = await savedPlan(page, draft!.id);
+  const i = pieces.findIndex((p) => p.placements.length >= 2);
+  const [a, b] = pieces[i].placements;
+  const { box, frames, view } = await canvasView(page, pieces);
+  const from = toScreen(view, frames[i], b.x + b.w / 2, b.y + b.h / 2);
+  const dest = toScreen(view, frames[i], a.x + b.w / 2 + 40, a.y + b.h / 2 + 40);
+  await page.mouse.move(box.x + from.x, box.y + from.y);
+  await page.mouse.down();
+  await page.mouse.move(box.x + dest.x, box.y + dest.y, { steps: 10 });
+  await page.mouse.up();
+  await expect(page.getByTestId('bench-status')).toContainText('saving is refused');
+  await expect(page.getByRole('list', { name: 'Problems' })).toContainText('overlap');
+  await expect(page.getByRole('button', { name: 'Save layout' })).toBeDisabled();
+  await shot(page, 'plan-bench-overlap');
+  await page.getByTestId('bench-canvas').focus();
+  await page.keyboard.press('Control+z');
+  await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
+});
