@@ -4,12 +4,12 @@ import Link from 'next/link';
 import { useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import { ApiError } from '@/lib/client/api';
 import { cutListTotals } from '@/lib/cut-list/totals';
-import { offersOf, stockMatchWarning, type StockOffer } from '@/lib/cut-list/stock-match';
+import { offersOf, snapThickness, stockMatchWarning, type StockOffer } from '@/lib/cut-list/stock-match';
 import { formatArea } from '@/lib/units/format-area';
 import { formatLength } from '@/lib/units/format-length';
 import type { ShopUnits } from '@/shared/schemas/units';
 import type { GrainRule } from '@/shared/schemas/drawer-schedule';
-import { SCHEDULE_OWNED_FIELDS, type PartInput } from '@/shared/schemas/part';
+import { SCHEDULE_OWNED_FIELDS, type PartInput, type PartPatch } from '@/shared/schemas/part';
 import { cellText, COLUMN_TITLES, COLUMNS, isLengthColumn, parseCell, type Column, type TextColumn } from './cell-parsers';
 import { usePartMutations, type ListedPart } from './use-parts';
 
@@ -63,8 +63,15 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
     const parsed = parseCell(column, text, units);
     if (!parsed.ok) return setError(key, parsed.error);
     setError(key, null);
+    // A nominal thickness ("3/4") becomes the stock's actual one, so the part nests on it.
+    const patch: PartPatch =
+      column === 'thicknessMm'
+        ? { thicknessMm: snapThickness(part.material, parsed.value as number, offers) }
+        : column === 'material'
+          ? { material: parsed.value as string, thicknessMm: snapThickness(parsed.value as string, part.thicknessMm, offers) }
+          : { [column]: parsed.value };
     update.mutate(
-      { id: part.id, patch: { [column]: parsed.value } },
+      { id: part.id, patch },
       { onError: (e) => setError(key, e instanceof ApiError ? (e.fields[column]?.[0] ?? e.message) : 'Not saved: the connection failed.') },
     );
   }
@@ -85,6 +92,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
       else ok = false;
     }
     if (!ok) return;
+    values.thicknessMm = snapThickness(values.material!, values.thicknessMm!, offers);
     add.mutate(values as PartInput, {
       onError: (e) => setError(errorKey(DRAFT, 'label'), e instanceof ApiError ? Object.values(e.fields).flat()[0] ?? e.message : 'Not saved: the connection failed.'),
     });
@@ -152,7 +160,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                 {COLUMN_TITLES[c]}
               </th>
             ))}
-            {canWrite && <th className="sr-only">Row actions</th>}
+            {canWrite && <th><span className="sr-only">Row actions</span></th>}
           </tr>
         </thead>
         <tbody>
@@ -219,7 +227,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
           ))}
           {canWrite && (
             <tr className="bg-paper/60" data-testid="cut-list-new-row">
-              <td className="text-xs text-oak" title="New row: type, then Enter">＋</td>
+              <td className="text-sm font-semibold text-oak" title="New row: type, then Enter">+</td>
               {COLUMNS.map((column, c) =>
                 column === 'grain' ? (
                   <td key={column}>

@@ -1,4 +1,6 @@
 import { formatLength } from '@/lib/units/format-length';
+import { parseLength } from '@/lib/units/parse-length';
+import type { UploadReport } from './validate-rows';
 import type { ShopUnits } from '@/shared/schemas/units';
 
 /** What the stock room offers in one material and thickness (sheets, boards or offcuts). */
@@ -10,13 +12,39 @@ export interface StockOffer {
   nominal: string;
 }
 
-/** Stock within this of a part's thickness is the same stock: sheet thickness varies this much between batches. */
-export const THICKNESS_MATCH_TOLERANCE_MM = 0.5;
+/** Thicknesses this close are the same stock, as the nesting engine matches them (lib/nesting/stock-rules.ts). */
+export const THICKNESS_MATCH_TOLERANCE_MM = 0.01;
+
+/**
+ * A typed thickness this close to a stock's actual or nominal thickness means that stock: "3/4" for a 23/32″ sheet
+ * sold as 3/4″, "18" for 18.3 mm (common practice, no source: nominal and actual sheet thickness differ by up to ~1 mm).
+ */
+export const THICKNESS_SNAP_MM = 1.1;
 
 const same = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
 
 /** Offers of one material, any thickness. */
 export const offersOf = (offers: readonly StockOffer[], material: string) => offers.filter((o) => same(o.material, material));
+
+const nominalMm = (nominal: string): number | null => {
+  if (!nominal.trim()) return null;
+  const parsed = parseLength(nominal, { unit: 'in' });
+  return parsed.ok ? parsed.mm : null;
+};
+
+/**
+ * The stock room's actual thickness for a part typed with the nominal or a near value, so the part nests on that
+ * stock; the typed thickness when no stock of the material is near it.
+ */
+export function snapThickness(material: string, thicknessMm: number, offers: readonly StockOffer[]): number {
+  let best: { mm: number; off: number } | null = null;
+  for (const o of offersOf(offers, material)) {
+    const nominal = nominalMm(o.nominal);
+    const off = Math.min(Math.abs(o.thicknessMm - thicknessMm), nominal === null ? Infinity : Math.abs(nominal - thicknessMm));
+    if (off <= THICKNESS_SNAP_MM && (!best || off < best.off)) best = { mm: o.thicknessMm, off };
+  }
+  return best ? best.mm : thicknessMm;
+}
 
 /** A warning when nothing in the stock room matches the part's material and thickness; null when something does. */
 export function stockMatchWarning(part: { material: string; thicknessMm: number }, offers: readonly StockOffer[], units: ShopUnits): string | null {
@@ -43,4 +71,10 @@ export function toStockOffers(
   const seen = new Map<string, StockOffer>();
   for (const o of all) seen.set(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`, seen.get(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`) ?? o);
   return [...seen.values()];
+}
+
+/** Uploaded thicknesses written as the nominal ("3/4") become the stock's actual thickness, as in the editor. */
+export function snapReport(report: UploadReport, offers: readonly StockOffer[]): UploadReport {
+  const snap = <T extends { part: { material: string; thicknessMm: number } }>(r: T): T => ({ ...r, part: { ...r.part, thicknessMm: snapThickness(r.part.material, r.part.thicknessMm, offers) } });
+  return { ...report, valid: report.valid.map(snap), rows: report.rows.map((r) => (r.ok ? snap(r) : r)) };
 }

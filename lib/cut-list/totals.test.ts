@@ -1,12 +1,13 @@
 import { describe, expect, test } from 'vitest';
 import { inches } from '@/lib/units/length';
-import { stockMatchWarning, type StockOffer } from './stock-match';
+import { snapThickness, stockMatchWarning, type StockOffer } from './stock-match';
 import { cutListTotals } from './totals';
 
 const OFFERS: StockOffer[] = [
   { material: 'White oak', kind: 'board', thicknessMm: inches(13 / 16), nominal: '4/4' },
   { material: 'Maple ply', kind: 'sheet', thicknessMm: inches(23 / 32), nominal: '3/4"' },
   { material: 'Maple ply', kind: 'offcut', thicknessMm: 6, nominal: '' },
+  { material: 'MDF', kind: 'sheet', thicknessMm: 18, nominal: '3/4"' },
 ];
 const UNITS = { system: 'imperial', precision: 16, feet: false } as const;
 
@@ -34,13 +35,27 @@ describe('cut list totals', () => {
 describe('matching a part to the stock room', () => {
   test.each([
     ['Maple ply', inches(23 / 32), null],
-    ['maple PLY', inches(3 / 4) - 0.4, null],
+    ['maple PLY', inches(23 / 32) + 0.005, null],
     ['Maple ply', 6, null],
+    ['Maple ply', inches(3 / 4), 'The stock room has Maple ply in'],
     ['Maple ply', 12, 'The stock room has Maple ply in'],
     ['Walnut', 19, 'Nothing in the stock room is “Walnut”'],
-  ] as const)('%s at %f mm → %s (thickness within 0.5 mm: common practice, no source)', (material, thicknessMm, warning) => {
+  ] as const)('%s at %f mm → %s (the nesting engine’s 0.01 mm match)', (material, thicknessMm, warning) => {
     const result = stockMatchWarning({ material, thicknessMm }, OFFERS, UNITS);
     if (warning === null) expect(result).toBeNull();
     else expect(result).toContain(warning);
+  });
+});
+
+describe('a typed thickness snaps to the stock it means', () => {
+  test.each([
+    ['3/4″ Maple ply is the 23/32″ sheet sold as 3/4″', 'Maple ply', inches(3 / 4), inches(23 / 32)],
+    ['3/4″ MDF is the 18 mm sheet sold as 3/4″', 'MDF', inches(3 / 4), 18],
+    ['18 mm Maple ply is the 23/32″ (18.26 mm) sheet', 'Maple ply', 18, inches(23 / 32)],
+    ['4/4 white oak is the 13/16″ surfaced board', 'White oak', inches(1), inches(13 / 16)],
+    ['1/2″ Maple ply has no near stock and stays', 'Maple ply', inches(1 / 2), inches(1 / 2)],
+    ['a material not in stock stays', 'Walnut', 19, 19],
+  ])('%s (common practice, no source)', (_what, material, typed, expected) => {
+    expect(snapThickness(material, typed, OFFERS)).toBeCloseTo(expected, 9);
   });
 });

@@ -204,3 +204,16 @@ describe('properties', () => {
     );
   });
 });
+
+describe('the downloadable templates', () => {
+  test.each([
+    ['cut-list-imperial.csv', 'in'],
+    ['cut-list-metric.csv', 'mm'],
+  ] as const)('%s reads back with every row valid and its unit detected as %s', async (name, unit) => {
+    const text = fs.readFileSync(path.resolve('public/templates', name));
+    const { report, guess } = await pipeline(name, text.buffer.slice(text.byteOffset, text.byteOffset + text.byteLength) as ArrayBuffer);
+    expect(guess.unit).toBe(unit);
+    expect(report.invalidCount).toBe(0);
+    expect(report.valid.length).toBe(3);
+  });
+});

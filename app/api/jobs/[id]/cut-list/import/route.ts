@@ -1,12 +1,14 @@
 import { addParts } from '@/db/queries/parts';
 import { validateUploadRows } from '@/lib/cut-list/validate-rows';
+import { snapReport } from '@/lib/cut-list/stock-match';
 import { HttpError, notFound } from '@/lib/api/errors';
 import { idParams, route } from '@/lib/api/route';
 import { CUT_LIST_FIELD_LABELS, cutListImportSchema } from '@/shared/schemas/cut-list-upload';
+import { stockOffers } from '@/app/api/materials/stock-offers';
 
 // POST /api/jobs/:id/cut-list/import – add an upload's rows in one transaction: all of them, or only the valid ones when asked
 export const POST = route({ permission: 'cutlist:write', params: idParams, body: cutListImportSchema, status: 201 }, async ({ db, user, params, body }) => {
-  const report = validateUploadRows(body);
+  const report = snapReport(validateUploadRows(body), await stockOffers(db, user.shopId));
   if (report.invalidCount > 0 && body.mode === 'all') {
     const fields: Record<string, string[]> = {};
     for (const row of report.rows) {

@@ -1,0 +1,122 @@
+import fs from 'node:fs';
+import { expect, test } from '@playwright/test';
+import { shot, signIn } from './support/session';
+
+const CSV = [
+  'Part,Qty,Length,Width,Thickness,Material,Grain,Notes',
+  'Vanity side,2,30,21,3/4,Maple ply,along,Edge band front',
+  'Shelf,two,29,20,3/4,Maple ply,any,',
+  'Stretcher,2,29-1/4,4,3/4,Maple ply,,',
+].join('\n');
+
+test('an estimator builds a cut list by keyboard, upload and drawer schedule, then exports it', async ({ page }) => {
+  test.setTimeout(120_000);
+  await signIn(page, 'estimator');
+  await page.goto('/jobs');
+  await shot(page, 'cut-list-01-jobs');
+  await page.getByRole('link', { name: 'Arden Books wall units' }).click();
+  await expect(page.getByRole('heading', { level: 2, name: 'Cut list' })).toBeVisible();
+  const table = page.getByRole('table', { name: 'Cut list' });
+  const rows = table.getByTestId('cut-list-row');
+  const before = await rows.count();
+
+  // Two rows typed with the keyboard only: Tab between cells, Enter adds the row.
+  await page.getByLabel('New part: Part').click();
+  await page.keyboard.type('Toe kick');
+  for (const value of ['1', '30 1/2', '4', '3/4', 'MDF']) {
+    await page.keyboard.press('Tab');
+    await page.keyboard.type(value);
+  }
+  await page.keyboard.press('Enter');
+  await expect(rows).toHaveCount(before + 1);
+  await expect(page.getByLabel('New part: Part')).toBeFocused();
+  await page.keyboard.type('Filler strip');
+  await page.keyboard.press('Tab');
+  await page.keyboard.type('2');
+  await page.keyboard.press('Tab');
+  await page.keyboard.type('30');
+  await page.keyboard.press('Tab');
+  await page.keyboard.type('3 1/2');
+  await page.keyboard.press('Enter'); // thickness and material carried over from the row before
+  await expect(rows).toHaveCount(before + 2);
+  await expect(rows.last().getByLabel(/^Length, row/)).toHaveValue('30″');
+  await expect(rows.last().getByLabel(/^Width, row/)).toHaveValue('3-1/2″');
+
+  // Arrows move like a spreadsheet: up to the row above, right to its quantity; Enter saves and moves down.
+  await page.getByLabel('New part: Part').focus();
+  await page.keyboard.press('ArrowUp');
+  await page.keyboard.press('ArrowRight');
+  await page.keyboard.type('3');
+  await page.keyboard.press('Enter');
+  await expect(rows.last().getByLabel(/^Qty, row/)).toHaveValue('3');
+  // A length the parser refuses shows on its cell and is not saved.
+  const width = rows.last().getByLabel(/^Width, row/);
+  await width.fill('three and a half');
+  await width.press('Enter');
+  await expect(width).toHaveAttribute('aria-invalid', 'true');
+  await expect(rows.last().getByRole('alert')).toBeVisible();
+  await shot(page, 'cut-list-02-typed-rows');
+  await width.fill('3 1/2');
+  await width.press('Enter');
+  await expect(width).not.toHaveAttribute('aria-invalid');
+
+  // Upload: the bad row is listed with its reason; nothing is written until the valid rows are imported.
+  await page.getByRole('button', { name: 'Upload CSV or Excel' }).click();
+  await page.getByLabel('File').setInputFiles({ name: 'vanity.csv', mimeType: 'text/csv', buffer: Buffer.from(CSV) });
+  const problems = page.getByRole('list', { name: 'Rows with problems' });
+  await expect(problems).toContainText('Row 3: Quantity “two” is not a whole number.');
+  await expect(page.getByLabel('Bare numbers are')).toHaveValue('in');
+  await expect(rows).toHaveCount(before + 2);
+  await shot(page, 'cut-list-03-upload-preview');
+  await page.getByRole('button', { name: 'Import only the 2 valid rows' }).click();
+  await expect(page.getByRole('status').filter({ hasText: 'Imported 2 rows' })).toContainText('Skipped 1 bad rows (file rows 3)');
+  await expect(rows).toHaveCount(before + 4);
+  await shot(page, 'cut-list-04-imported');
+
+  // A drawer schedule puts its parts in the cut list.
+  await page.getByRole('navigation', { name: 'Job sections' }).getByRole('link', { name: 'Drawer schedules' }).click();
+  await page.getByRole('button', { name: 'New drawer schedule' }).click();
+  await page.getByLabel('Label').fill('Desk drawers');
+  await page.getByLabel('Boxes').fill('2');
+  await page.getByLabel('Opening width').fill('15');
+  await page.getByLabel('Opening height').fill('5 1/2');
+  await page.getByLabel('Opening depth').fill('21');
+  await page.getByLabel('Opening depth').blur();
+  const preview = page.getByRole('table', { name: 'Parts of this schedule' });
+  await expect(preview.getByRole('row')).toHaveCount(5);
+  await expect(page.getByRole('complementary', { name: 'Router table cautions' })).toBeVisible();
+  await shot(page, 'cut-list-05-drawer-schedule-form');
+  await page.getByRole('button', { name: 'Add to the cut list' }).click();
+  await expect(page.getByText('4 rows in the cut list')).toBeVisible();
+  await shot(page, 'cut-list-06-drawer-schedules');
+
+  await page.getByRole('navigation', { name: 'Job sections' }).getByRole('link', { name: 'Cut list' }).click();
+  await expect(rows).toHaveCount(before + 8);
+  const side = rows.filter({ hasText: 'Desk drawers · side' });
+  await expect(side).toHaveCount(1);
+  await expect(side.getByText('drawer schedule')).toBeVisible();
+  await expect(side.getByRole('textbox', { name: /^Length/ })).toHaveCount(0); // sizes are the schedule's
+  await shot(page, 'cut-list-07-with-schedule');
+
+  // Export.
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export CSV' }).click()]);
+  expect(download.suggestedFilename()).toBe('arden-books-wall-units-cut-list.csv');
+  const csv = fs.readFileSync((await download.path())!, 'utf8');
+  expect(csv).toContain('Part,Quantity,Length (in),Width (in),Thickness (in),Material,Grain,Joint allowance (in),Notes,Drawer schedule');
+  expect(csv).toContain('Toe kick,1,30-1/2",4",3/4",MDF,along');
+  expect(csv).toContain('Desk drawers · side,4,');
+});
+
+test('a cutter sees the cut list read-only and can open the setup cards', async ({ page }) => {
+  await signIn(page, 'cutter');
+  await page.goto('/jobs');
+  await page.getByRole('link', { name: 'Hollis kitchen' }).click();
+  await expect(page.getByRole('table', { name: 'Cut list' })).toBeVisible();
+  await expect(page.getByLabel('New part: Part')).toHaveCount(0);
+  await expect(page.getByRole('button', { name: 'Upload CSV or Excel' })).toHaveCount(0);
+  await shot(page, 'cut-list-08-cutter');
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Setup cards/ }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Setup cards' })).toBeVisible();
+  await expect(page.getByRole('complementary', { name: 'Router table cautions' })).toBeVisible();
+  await shot(page, 'cut-list-09-setup-cards');
+});
