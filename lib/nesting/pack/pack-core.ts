@@ -105,7 +105,7 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
   }
 
   // Improvement phase, on the clock: the remaining combinations, then re-packing.
-  const lb = binLowerBound(p);
+  let lb: number | null | undefined; // computed on the first iteration: a zero budget never pays for it
   const rng = mulberry32(options.seed);
   let cur: Solution = best!;
   let curScore = bestScore!;
@@ -115,6 +115,7 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
     if (signal?.aborted) break;
     if (limits.maxIterations === undefined && now() - t0 >= options.timeBudgetMs) break;
     const b: Solution = best!;
+    if (lb === undefined) lb = binLowerBound(p);
     if (lb !== null && b.noStock.length === 0 && b.bins.length <= lb && p.objective !== 'cuts') break;
     if (nextCombo < combos) {
       await construct(nextCombo++);
