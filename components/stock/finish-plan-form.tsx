@@ -96,7 +96,7 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
                     <li key={key} className="flex flex-wrap items-center gap-2 text-sm" data-testid="finish-offcut">
                       <label className="flex min-h-11 items-center gap-2">
                         <input type="checkbox" className="h-5 w-5" checked={!dropped.has(key)} onChange={() => toggle(dropped, key, setDropped)} />
-                        <span className="num">{len(o.w)} × {len(o.h)}</span>
+                        <span className="num inline-block w-40 whitespace-nowrap text-left">{len(o.w)} × {len(o.h)}</span>
                       </label>
                       <input className="field-input w-40 py-1" aria-label={`Location for offcut ${len(o.w)} × ${len(o.h)}`} placeholder={allTo || 'location'} value={locations[key] ?? ''} onChange={(e) => setLocations({ ...locations, [key]: e.target.value })} disabled={dropped.has(key)} />
                     </li>

@@ -35,7 +35,7 @@ export function OffcutRack({ rack, len, money, canScrap }: { rack: Offcut[]; len
                       />
                     </div>
                     <div className="min-w-0 flex-1 text-sm">
-                      <div className="num text-left font-medium">{len(o.lengthMm)} × {len(o.widthMm)}</div>
+                      <div className="num whitespace-nowrap text-left font-medium">{len(o.lengthMm)} × {len(o.widthMm)}</div>
                       <div className="text-xs text-graphite-mute">
                         {o.location || 'no location'}
                         {o.planName && <> · from {o.planName}{o.sourcePiece ? `, piece ${o.sourcePiece}` : ''}</>}
@@ -43,7 +43,7 @@ export function OffcutRack({ rack, len, money, canScrap }: { rack: Offcut[]; len
                       </div>
                       <div className="mt-1"><StatusBadge tone={TONE[o.status]}>{o.status}</StatusBadge></div>
                     </div>
-                    {canScrap && o.status === 'available' && <ScrapOffcutButton id={o.id} label={label} />}
+                    {canScrap && o.status === 'available' && <div className="self-start"><ScrapOffcutButton id={o.id} label={label} /></div>}
                   </li>
                 );
               })}

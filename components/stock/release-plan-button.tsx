@@ -3,17 +3,8 @@
 import Link from 'next/link';
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
-import { api, ApiError } from '@/lib/client/api';
-
-interface Missing {
-  stockId: string;
-  material: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
-  needed: number;
-  free: number;
-}
+import { ApiError } from '@/lib/client/api';
+import type { MissingPiece as Missing } from '@/shared/schemas/stock';
 
 /**
  * Release a draft plan: its stock is reserved all at once. When a piece is gone, nothing is reserved and the

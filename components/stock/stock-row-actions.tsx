@@ -16,7 +16,7 @@ export function StockRowActions({ id, label, onHand }: { id: string; label: stri
   const [open, setOpen] = useState<'receive' | 'adjust' | null>(null);
   return (
     <div className="flex flex-col items-end gap-2">
-      <div className="flex gap-1">
+      <div className="flex flex-col gap-1">
         <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setOpen(open === 'receive' ? null : 'receive')} aria-label={`Receive ${label}`}>Receive</button>
         <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setOpen(open === 'adjust' ? null : 'adjust')} aria-label={`Adjust count of ${label}`}>Adjust</button>
       </div>

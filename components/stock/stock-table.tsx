@@ -10,7 +10,6 @@ export function StockTable({ items, len, money, canWrite }: { items: StockItemRo
         <thead>
           <tr>
             <th>Material</th>
-            <th>Kind</th>
             <th>Thickness</th>
             <th className="num">Length × width</th>
             <th className="num">On hand</th>
@@ -27,12 +26,12 @@ export function StockTable({ items, len, money, canWrite }: { items: StockItemRo
             const label = `${s.material} ${s.nominalThickness} ${len(s.lengthMm)} × ${len(s.widthMm)}`;
             return (
               <tr key={s.id} data-testid="stock-row" data-material={s.material}>
-                <td className="font-medium">
-                  {s.material}
-                  {s.grade && <span className="ml-1 text-xs text-graphite-mute">{s.grade}</span>}
-                  {s.buyable && <span className="ml-1 text-xs text-graphite-mute" title={s.supplier}>· can buy</span>}
+                <td>
+                  <div className="whitespace-nowrap font-medium">{s.material}</div>
+                  <div className="whitespace-nowrap text-xs text-graphite-mute">
+                    {[s.kind === 'sheet' ? 'sheet' : `board ${s.surfacing}`.trim(), s.grade, s.buyable ? 'can buy' : ''].filter(Boolean).join(' · ')}
+                  </div>
                 </td>
-                <td>{s.kind === 'sheet' ? 'Sheet' : `Board ${s.surfacing}`.trim()}</td>
                 <td>
                   {s.nominalThickness}
                   <span className="ml-1 text-xs text-graphite-mute">({len(s.thicknessMm)})</span>

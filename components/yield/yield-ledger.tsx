@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { FigureCard as Figure } from '@/components/ui/figure-card';
 import type { listYieldLedger } from '@/db/queries/stock-yield';
 
 type Ledger = Awaited<ReturnType<typeof listYieldLedger>>;
@@ -44,14 +45,5 @@ export function YieldLedger({ ledger, money, area }: { ledger: Ledger; money: (c
         </table>
       </div>
     </>
-  );
-}
-
-function Figure({ label, value }: { label: string; value: string }) {
-  return (
-    <div className="card p-4">
-      <div className="text-xs uppercase tracking-wide text-graphite-mute">{label}</div>
-      <div className="num text-left text-2xl font-semibold">{value}</div>
-    </div>
   );
 }

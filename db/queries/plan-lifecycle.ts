@@ -4,7 +4,7 @@ import { offcuts, placements, planPieces, plans, stockItems, stockMovements } fr
 import { readPlan } from '@/lib/nesting';
 import { isKeepableOffcut, offcutCostCents, offcutSize } from '@/lib/stock/offcut-rules';
 import { nestRequestSchema, type Plan, type PlanPiece } from '@/shared/schemas/nesting';
-import type { finishPlanSchema } from '@/shared/schemas/stock';
+import type { finishPlanSchema, MissingPiece } from '@/shared/schemas/stock';
 import type { z } from 'zod';
 import { stockRef } from './nest-request';
 import { recordAudit } from './audit';
@@ -25,16 +25,7 @@ import { HttpError } from '@/lib/api/errors';
 type Tx = Db;
 type PlanStatus = (typeof plans.$inferSelect)['status'];
 
-export interface MissingPiece {
-  stockId: string;
-  kind: 'sheet' | 'board' | 'offcut';
-  material: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
-  needed: number;
-  free: number;
-}
+export type { MissingPiece };
 
 /** Release refused: these pieces are no longer free. Nothing was reserved. */
 export class StockShortage extends HttpError {

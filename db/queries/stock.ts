@@ -214,3 +214,12 @@ export async function recordOpeningCounts(db: Db, shopId: string, userId: string
     if (moves.length) await tx.insert(stockMovements).values(moves);
   });
 }
+
+/**
+ * The catalogue is the stock sizes marked buyable (on hand or not): one row per size keeps a single price per size,
+ * and the nesting request already offers each as `buy:<id>`. Adding a size to buy is a new stock size with 0 on hand.
+ */
+export async function listCatalogue(db: Db, shopId: string) {
+  const rows = await db.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), eq(stockItems.buyable, true))).orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm));
+  return rows.map((r) => ({ id: r.id, kind: r.kind, material: r.material, nominalThickness: r.nominalThickness, thicknessMm: r.thicknessMm, lengthMm: r.lengthMm, widthMm: r.widthMm, grain: r.grain, supplier: r.supplier, costCents: r.costCents, costEachCents: costEachCents(r) }));
+}

@@ -98,3 +98,15 @@ export const finishPlanSchema = z.strictObject({
     .default([]),
 });
 export type FinishPlanInput = z.input<typeof finishPlanSchema>;
+
+/** A piece a release needed that is no longer free (the 409 answer lists each). */
+export interface MissingPiece {
+  stockId: string;
+  kind: 'sheet' | 'board' | 'offcut';
+  material: string;
+  thicknessMm: number;
+  lengthMm: number;
+  widthMm: number;
+  needed: number;
+  free: number;
+}

@@ -9,6 +9,7 @@ import { StockFilters } from '@/components/stock/stock-filters';
 import { StockRoomActions } from '@/components/stock/stock-room-actions';
 import { StockTable } from '@/components/stock/stock-table';
 import { EmptyState } from '@/components/ui/empty-state';
+import { FigureCard } from '@/components/ui/figure-card';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/session';
 import { can } from '@/lib/auth/permissions';
@@ -52,17 +53,9 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
       <PageHeader title="Stock room" lead="Sheets, boards and offcuts on the rack. Released plans reserve what they use; finished plans take it and rack their offcuts." />
       <div className="mb-5 grid gap-3 sm:grid-cols-3">
         {value && money && (
-          <div className="card p-4" data-testid="stock-value">
-            <div className="text-xs uppercase tracking-wide text-graphite-mute">Stock value at cost</div>
-            <div className="num text-left text-2xl font-semibold">{money(value.totalCents)}</div>
-            <div className="text-xs text-graphite-mute">{money(value.stockCents)} in sheets and boards · {money(value.offcutCents)} in offcuts</div>
-          </div>
+          <FigureCard label="Stock value at cost" value={money(value.totalCents)} detail={`${money(value.stockCents)} in sheets and boards · ${money(value.offcutCents)} in offcuts`} testId="stock-value" />
         )}
-        <div className="card p-4">
-          <div className="text-xs uppercase tracking-wide text-graphite-mute">Sizes running low</div>
-          <div className={`num text-left text-2xl font-semibold ${lowCount ? 'text-amber' : ''}`}>{lowCount}</div>
-          <div className="text-xs text-graphite-mute">free count at or below the size’s mark</div>
-        </div>
+        <FigureCard label="Sizes running low" value={lowCount} tone={lowCount ? 'text-amber' : ''} detail="free count at or below the size’s mark" />
       </div>
 
       <StockRoomActions units={settings.units} canWrite={can(user.role, 'stock:write')} canRecord={can(user.role, 'offcuts:record')} />

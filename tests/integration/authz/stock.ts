@@ -65,5 +65,6 @@ export const rows: AuthzRow[] = [
   { route: '/api/plans/[id]/release', method: 'POST', target: freshPlan('draft'), expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
   { route: '/api/plans/[id]/done', method: 'POST', target: freshPlan('released'), body: {}, expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 200, other: 404 } },
   { route: '/api/plans/[id]/cancel', method: 'POST', target: freshPlan('released'), expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
+  { route: '/api/catalogue', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 200 } },
   { route: '/api/jobs/[id]/takeoff', method: 'GET', target: jobWithPlan, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
 ];

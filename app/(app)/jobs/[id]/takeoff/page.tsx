@@ -8,6 +8,7 @@ import { getTakeoff } from '@/db/queries/takeoff';
 import { ReleasePlanButton } from '@/components/stock/release-plan-button';
 import { TakeoffTable } from '@/components/takeoff/takeoff-table';
 import { EmptyState } from '@/components/ui/empty-state';
+import { FigureCard as Figure } from '@/components/ui/figure-card';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { can } from '@/lib/auth/permissions';
 import { requirePageUser } from '@/lib/auth/session';
@@ -55,11 +56,11 @@ export default async function TakeoffPage({ params }: { params: Promise<{ id: st
       <div className="mb-6 grid gap-3 sm:grid-cols-4">
         <Figure label="Material cost" value={money(totals.costCents)} />
         <Figure label={`With ${takeoff.wastePercent} % waste`} value={money(totals.costWithWasteCents)} testId="takeoff-total-waste" />
-        <Figure label="Sheet area · board feet" value={`${area(totals.areaMm2)} · ${totals.boardFeet.toFixed(2)} bf`} />
-        <div className="card p-4" data-testid="takeoff-covered">
-          <div className="text-xs uppercase tracking-wide text-graphite-mute">Stock room</div>
-          <div className={`text-lg font-semibold ${totals.covered ? 'text-sage' : 'text-brick'}`}>{totals.covered ? 'Can cover it now' : 'Cannot cover it now'}</div>
-        </div>
+        <Figure
+          label={totals.boardFeet > 0 && totals.areaMm2 > 0 ? 'Sheet area · board feet' : totals.boardFeet > 0 ? 'Board feet' : 'Sheet area'}
+          value={[totals.areaMm2 > 0 ? area(totals.areaMm2) : '', totals.boardFeet > 0 ? `${totals.boardFeet.toFixed(2)} bf` : ''].filter(Boolean).join(' · ') || '—'}
+        />
+        <Figure label="Stock room" value={totals.covered ? 'Can cover it now' : 'Cannot cover it now'} tone={`font-sans text-lg ${totals.covered ? 'text-sage' : 'text-brick'}`} testId="takeoff-covered" />
       </div>
 
       {takeoff.pull.length > 0 && <TakeoffTable title="Pull from stock" lines={takeoff.pull} len={len} area={area} money={money} wastePercent={takeoff.wastePercent} />}
@@ -77,15 +78,6 @@ export default async function TakeoffPage({ params }: { params: Promise<{ id: st
           </ul>
         </section>
       )}
-    </div>
-  );
-}
-
-function Figure({ label, value, testId }: { label: string; value: string; testId?: string }) {
-  return (
-    <div className="card p-4" data-testid={testId}>
-      <div className="text-xs uppercase tracking-wide text-graphite-mute">{label}</div>
-      <div className="num text-left text-lg font-semibold">{value}</div>
     </div>
   );
 }
