@@ -6,7 +6,7 @@ import { ApiError } from '@/lib/client/api';
 import { cutListTotals } from '@/lib/cut-list/totals';
 import { offersOf, snapThickness, stockMatchWarning, type StockOffer } from '@/lib/cut-list/stock-match';
 import { formatArea } from '@/lib/units/format-area';
-import { formatLength } from '@/lib/units/format-length';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import type { ShopUnits } from '@/shared/schemas/units';
 import type { GrainRule } from '@/shared/schemas/drawer-schedule';
 import { SCHEDULE_OWNED_FIELDS, type PartInput, type PartPatch } from '@/shared/schemas/part';
@@ -22,11 +22,6 @@ const emptyDraft = (carry?: Partial<Draft>): Draft => ({
   label: '', quantity: '1', lengthMm: '', widthMm: '', thicknessMm: carry?.thicknessMm ?? '', material: carry?.material ?? '', grain: carry?.grain ?? 'along-length', jointAllowanceMm: '', notes: '',
 });
 
-/** A thickness as a picker offers it: the shop's unit when exact, else mm, so picking it matches the stock exactly. */
-function thicknessOption(mm: number, units: ShopUnits) {
-  const shown = formatLength(mm, units);
-  return shown.startsWith('≈') ? `${Math.round(mm * 100) / 100} mm` : shown;
-}
 
 /**
  * The cut list as a spreadsheet: every cell is typed into and saved when left (Enter, Tab, arrows or a click
@@ -146,7 +141,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
       </datalist>
       {materials.map((m) => (
         <datalist key={m} id={`cut-list-thickness-${slug(m)}`}>
-          {[...new Map(offersOf(offers, m).map((o) => [thicknessOption(o.thicknessMm, units), o])).entries()].map(([value, o]) => (
+          {[...new Map(offersOf(offers, m).map((o) => [exactLengthText(o.thicknessMm, units), o])).entries()].map(([value, o]) => (
             <option key={value} value={value} label={`${o.nominal || value} ${o.kind}`} />
           ))}
         </datalist>
@@ -182,7 +177,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                 return (
                   <td key={column} className={isLengthColumn(column) || column === 'quantity' ? 'num' : undefined}>
                     {readOnly ? (
-                      <span tabIndex={0} data-r={r} data-c={c} className="block rounded px-1 py-0.5 focus:bg-paper-deep" title={part.drawerScheduleId && canWrite ? 'Set by the drawer schedule: edit the schedule to change it.' : undefined}>
+                      <span tabIndex={0} data-r={r} data-c={c} className={`block rounded px-1 py-0.5 focus:bg-paper-deep ${isLengthColumn(column) || column === 'quantity' ? 'whitespace-nowrap' : ''}`} title={part.drawerScheduleId && canWrite ? 'Set by the drawer schedule: edit the schedule to change it.' : undefined}>
                         {cellText(part, column, units) || '—'}
                         {column === 'label' && part.schedule && (
                           <Link href={`/jobs/${jobId}/drawers#schedule-${part.drawerScheduleId}`} className="ml-2 whitespace-nowrap rounded-full bg-oak-wash px-2 text-xs font-medium text-oak-deep no-underline">
@@ -241,6 +236,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                       aria-label={`New part: ${COLUMN_TITLES[column]}`}
                       aria-invalid={errors[errorKey(DRAFT, column)] ? true : undefined}
                       className={cellInputClass(Boolean(errors[errorKey(DRAFT, column)]), isLengthColumn(column) || column === 'quantity')}
+                      style={{ minWidth: `${CELL_CH[column] + 2}ch` }}
                       value={draft[column]}
                       placeholder={column === 'label' ? 'New part…' : ''}
                       list={column === 'material' ? 'cut-list-materials' : column === 'thicknessMm' ? `cut-list-thickness-${slug(draft.material)}` : undefined}
@@ -278,8 +274,11 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
 
 const slug = (s: string) => s.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-');
 
+/** Cell widths in characters, so sizes like 1′ 7-3/4″ and names like "Baltic birch" show whole. */
+const CELL_CH: Record<Column, number> = { label: 16, quantity: 4, lengthMm: 9, widthMm: 9, thicknessMm: 8, material: 13, grain: 8, jointAllowanceMm: 7, notes: 16 };
+
 const cellInputClass = (invalid: boolean, numeric: boolean) =>
-  `w-full min-w-16 rounded border bg-transparent px-1 py-0.5 text-sm outline-none focus:border-oak focus:bg-white focus:ring-1 focus:ring-oak-light ${numeric ? 'text-right font-mono' : ''} ${invalid ? 'border-brick bg-brick-wash' : 'border-transparent'}`;
+  `w-full rounded border bg-transparent px-1 py-0.5 text-sm outline-none focus:border-oak focus:bg-white focus:ring-1 focus:ring-oak-light ${numeric ? 'text-right font-mono' : ''} ${invalid ? 'border-brick bg-brick-wash' : 'border-transparent'}`;
 
 function duplicateOf(p: ListedPart): PartInput {
   return { label: p.label, quantity: p.quantity, lengthMm: p.lengthMm, widthMm: p.widthMm, thicknessMm: p.thicknessMm, material: p.material, grain: p.grain, jointAllowanceMm: p.jointAllowanceMm, notes: p.notes };
@@ -296,6 +295,7 @@ function EditCell({ r, c, column, initial, error, label, list, onCommit }: { r: 
         aria-label={label}
         aria-invalid={error ? true : undefined}
         className={cellInputClass(Boolean(error), numeric)}
+        style={{ minWidth: `${CELL_CH[column] + 2}ch` }}
         value={text}
         list={list}
         onFocus={(e) => e.currentTarget.select()}

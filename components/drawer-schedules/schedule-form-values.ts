@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DRAWER_DEFAULTS as D } from '@/lib/joinery/defaults';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { formatLength } from '@/lib/units/format-length';
 import type { LengthUnit } from '@/lib/units/parse-length';
 import { JOINT_METHODS, SLIDE_TYPES, type DrawerSchedule, type DrawerScheduleInput, type JointMethod } from '@/shared/schemas/drawer-schedule';
@@ -61,11 +62,7 @@ export function toScheduleInput(v: ScheduleFormValues): DrawerScheduleInput {
 
 /** A saved schedule back into the form's text, in the shop's unit (exact: bare mm where the unit would round). */
 export function fromSchedule(s: DrawerSchedule, units: ShopUnits): ScheduleFormText {
-  const len = (mm: number | undefined) => {
-    if (mm === undefined) return '';
-    const shown = formatLength(mm, units);
-    return shown.startsWith('≈') ? `${Math.round(mm * 1000) / 1000} mm` : shown;
-  };
+  const len = (mm: number | undefined) => (mm === undefined ? '' : exactLengthText(mm, units));
   const param = JOINT_PARAM[s.joint.method];
   return {
     label: s.label,

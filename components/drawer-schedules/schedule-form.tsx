@@ -11,7 +11,8 @@ import { drawerScheduleSchema, JOINT_METHODS, type DrawerSchedule } from '@/shar
 import type { SetupCard } from '@/shared/schemas/setup-card';
 import { shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
 import { RouterCautions, SetupCardView } from '@/components/setup-cards/setup-card-view';
-import { partsKey } from '@/components/cut-list/use-parts';
+import { partsKey, useMaterials } from '@/components/cut-list/use-parts';
+import { stockMatchWarning } from '@/lib/cut-list/stock-match';
 import { BoxPreview } from './box-preview';
 import { bottomMovementWarning } from './bottom-movement';
 import { emptySchedule, fieldOfPath, fromSchedule, JOINT_PARAM, scheduleFormSchema, toScheduleInput, type ScheduleFormText, type ScheduleFormValues } from './schedule-form-values';
@@ -34,6 +35,7 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
   const { register, handleSubmit, formState, setError, control } = form;
   const values = useWatch({ control });
   const qc = useQueryClient();
+  const materials = useMaterials();
 
   // Live sizing on whatever parses so far.
   const live = useMemo(() => {
@@ -84,6 +86,9 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
   const bottom = sized?.parts.find((p) => p.role === 'bottom');
   const movement = live && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
   const cardKeys = sized?.setupCardKeys ?? [];
+  const offers = materials.data ?? [];
+  // Joints are sized on the thickness given: stock of another actual thickness would not fit them.
+  const stockWarnings = sized && offers.length ? [...new Set(sized.parts.flatMap((p) => stockMatchWarning(p, offers, units) ?? []))] : [];
 
   return (
     <form onSubmit={handleSubmit((v) => save.mutate(v))} aria-label={editing ? 'Edit drawer schedule' : 'New drawer schedule'} className="card mb-6 p-5">
@@ -130,9 +135,9 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
                     <tr key={p.role}>
                       <td title={p.machining.join(' ')}>{ROLE_NAMES[p.role]}</td>
                       <td className="num">{p.quantity}</td>
-                      <td className="num">{len(p.lengthMm)}</td>
-                      <td className="num">{len(p.widthMm)}</td>
-                      <td className="num">{len(p.thicknessMm)}</td>
+                      <td className="num whitespace-nowrap">{len(p.lengthMm)}</td>
+                      <td className="num whitespace-nowrap">{len(p.widthMm)}</td>
+                      <td className="num whitespace-nowrap">{len(p.thicknessMm)}</td>
                       <td>{p.material}</td>
                       <td className="num">{p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '—'}</td>
                     </tr>
@@ -140,6 +145,12 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
                 </tbody>
               </table>
               {sized.notes.length > 0 && <ul className="list-disc pl-5 text-sm text-graphite-soft">{sized.notes.map((n) => <li key={n}>{n}</li>)}</ul>}
+              {stockWarnings.length > 0 && (
+                <div role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">
+                  <p className="font-medium">Check the stock: the joints are sized on the thicknesses above.</p>
+                  <ul className="list-disc pl-5">{stockWarnings.map((w) => <li key={w}>{w}</li>)}</ul>
+                </div>
+              )}
               {movement && <p role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">Wood movement: {movement}</p>}
               <div className="space-y-2">
                 <h4 className="text-sm font-semibold">Setup cards this schedule needs</h4>

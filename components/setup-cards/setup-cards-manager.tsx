@@ -7,7 +7,7 @@ import { useFieldArray, useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { api, ApiError } from '@/lib/client/api';
 import { DEFAULT_LOCK_RABBET_CARDS, findSetupCard, JOINT_NAMES } from '@/lib/joinery';
-import { formatLength } from '@/lib/units/format-length';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { parseLength } from '@/lib/units/parse-length';
 import { JOINT_METHODS } from '@/shared/schemas/drawer-schedule';
 import type { SetupCard } from '@/shared/schemas/setup-card';
@@ -41,8 +41,8 @@ type FormValues = z.output<ReturnType<typeof cardForm>>;
 
 const toText = (card: SetupCard, units: ShopUnits): FormText => ({
   joint: card.joint,
-  stockThickness: formatLength(card.stockThicknessMm, units).replace(/^≈/, ''),
-  fields: card.fields.map((f) => ({ label: f.label, value: f.unit === 'mm' ? `${Math.round(f.value * 1000) / 1000} mm` : String(f.value), unit: f.unit })),
+  stockThickness: exactLengthText(card.stockThicknessMm, units),
+  fields: card.fields.map((f) => ({ label: f.label, value: f.unit === 'mm' ? exactLengthText(f.value, units) : String(f.value), unit: f.unit })),
   note: card.note,
 });
 

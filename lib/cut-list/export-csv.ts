@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
-import { formatLength } from '@/lib/units/format-length';
 import type { ShopUnits } from '@/shared/schemas/units';
 import type { GrainRule } from '@/shared/schemas/drawer-schedule';
+import { exactLengthText } from './exact-length';
 
 /**
  * Cells a spreadsheet would run as a formula: those starting with = + - @, tab or carriage return (OWASP,
@@ -27,7 +27,8 @@ export interface ExportPart {
 /** The cut list as CSV in the shop's unit, readable again by the upload (same header words), formula cells neutralised. */
 export function cutListCsv(parts: readonly ExportPart[], units: ShopUnits): string {
   const unit = units.system === 'imperial' ? 'in' : 'mm';
-  const len = (mm: number) => formatLength(mm, units, { style: 'ascii' });
+  // Exact values only, so a re-upload gives the same parts (a rounded "~11/16" would not).
+  const len = (mm: number) => exactLengthText(mm, units, 'ascii');
   const fields = ['Part', 'Quantity', `Length (${unit})`, `Width (${unit})`, `Thickness (${unit})`, 'Material', 'Grain', `Joint allowance (${unit})`, 'Notes', 'Drawer schedule'];
   const data = parts.map((p) => [
     p.label,

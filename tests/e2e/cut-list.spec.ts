@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import { expect, test } from '@playwright/test';
+import Papa from 'papaparse';
 import { shot, signIn } from './support/session';
 
 const CSV = [
@@ -101,10 +102,11 @@ test('an estimator builds a cut list by keyboard, upload and drawer schedule, th
   // Export.
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export CSV' }).click()]);
   expect(download.suggestedFilename()).toBe('arden-books-wall-units-cut-list.csv');
-  const csv = fs.readFileSync((await download.path())!, 'utf8');
-  expect(csv).toContain('Part,Quantity,Length (in),Width (in),Thickness (in),Material,Grain,Joint allowance (in),Notes,Drawer schedule');
-  expect(csv).toContain('Toe kick,1,30-1/2",4",3/4",MDF,along');
-  expect(csv).toContain('Desk drawers · side,4,');
+  const csv = Papa.parse<string[]>(fs.readFileSync((await download.path())!, 'utf8').replace(/^\uFEFF/, '').trim()).data;
+  expect(csv[0]).toEqual(['Part', 'Quantity', 'Length (in)', 'Width (in)', 'Thickness (in)', 'Material', 'Grain', 'Joint allowance (in)', 'Notes', 'Drawer schedule']);
+  // 3/4 MDF was typed; the shop's 3/4″ MDF is 18 mm, written exactly.
+  expect(csv.find((r) => r[0] === 'Toe kick')).toEqual(['Toe kick', '1', '30-1/2"', '4"', '18 mm', 'MDF', 'along', '', '', '']);
+  expect(csv.find((r) => r[0] === 'Desk drawers · side')?.slice(1, 3)).toEqual(['4', '19-3/4"']);
 });
 
 test('a cutter sees the cut list read-only and can open the setup cards', async ({ page }) => {
