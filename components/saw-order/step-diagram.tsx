@@ -1,4 +1,5 @@
 import type { StepGeometry } from '@/lib/saw-order/step-geometry';
+import type { Rect } from '@/lib/geometry/rect';
 import type { SawPiece } from '@/shared/schemas/nesting';
 
 const ROLE_CLASS: Record<SawPiece['role'], string> = {
@@ -13,7 +14,19 @@ const ROLE_CLASS: Record<SawPiece['role'], string> = {
  * what the cut leaves coloured by role (parts it frees in sage), the blade's path in brick and the fence edge as a
  * heavy bar with the fence dimension beside it. Lines keep their width at any size (non-scaling strokes).
  */
-export function StepDiagram({ geometry, stock, className = '', title }: { geometry: StepGeometry; stock: { length: number; width: number }; className?: string; title?: string }) {
+export function StepDiagram({
+  geometry,
+  stock,
+  parts = [],
+  className = '',
+  title,
+}: {
+  geometry: StepGeometry;
+  stock: { length: number; width: number };
+  parts?: readonly Rect[];
+  className?: string;
+  title?: string;
+}) {
   const pad = Math.max(stock.length, stock.width) * 0.03;
   const { piece, line, fenceEdge, fenceDimension, produces, before, step } = geometry;
   const vector = { vectorEffect: 'non-scaling-stroke' as const };
@@ -34,6 +47,9 @@ export function StepDiagram({ geometry, stock, className = '', title }: { geomet
       <rect x={piece.x} y={piece.y} width={piece.w} height={piece.h} className="fill-oak-wash stroke-oak" strokeWidth={1.5} style={vector} />
       {produces.map((p) => (
         <rect key={p.name} x={p.x} y={p.y} width={p.w} height={p.h} className={ROLE_CLASS[p.role]} strokeWidth={p.role === 'piece' ? 0.75 : 1.25} style={vector} fillOpacity={p.role === 'piece' ? 0.4 : 1} />
+      ))}
+      {parts.map((r, i) => (
+        <rect key={i} x={r.x} y={r.y} width={r.w} height={r.h} className="fill-none stroke-graphite-faint" strokeWidth={0.75} strokeDasharray="3 2" style={vector} />
       ))}
       <line {...fenceDimension} className="stroke-graphite-soft" strokeWidth={1} strokeDasharray="4 3" style={vector} />
       <line {...fenceEdge} className="stroke-graphite" strokeWidth={6} strokeLinecap="square" style={vector} data-role="fence" />

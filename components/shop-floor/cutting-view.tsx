@@ -129,7 +129,7 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
         </p>
         {current ? (
           <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-            <StepDiagram geometry={current.geometry} stock={view.stock} className="h-auto max-h-[55vh] w-full" />
+            <StepDiagram geometry={current.geometry} stock={view.stock} parts={view.parts} className="h-auto max-h-[55vh] w-full" />
             <div className="flex flex-col gap-4">
               <div className="flex items-center gap-3">
                 <h2 id="current-step" className="font-mono text-4xl">
@@ -198,9 +198,14 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                   aria-checked={!!tick}
                   aria-label={`Cut ${text.n} done`}
                   onClick={() => set(text.n, !tick)}
-                  className={`flex min-h-16 w-16 shrink-0 items-center justify-center text-2xl font-bold ${tick ? 'bg-sage text-white' : 'bg-paper-deep text-graphite-faint hover:bg-paper-edge'}`}
+                  className={`flex min-h-16 w-16 shrink-0 items-center justify-center ${tick ? 'bg-sage' : 'bg-paper-deep hover:bg-paper-edge'}`}
                 >
-                  {tick ? '✓' : ''}
+                  <span
+                    aria-hidden
+                    className={`flex h-8 w-8 items-center justify-center rounded-md border-2 text-xl font-bold ${tick ? 'border-white text-white' : 'border-graphite-faint bg-white'}`}
+                  >
+                    {tick ? '✓' : ''}
+                  </span>
                 </button>
                 <button type="button" onClick={() => setPicked(text.n)} className="flex min-h-16 flex-1 flex-col justify-center px-3 text-left hover:bg-paper">
                   <span className="flex flex-wrap items-center gap-2">

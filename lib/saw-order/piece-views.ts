@@ -11,6 +11,8 @@ export interface PieceView {
   heading: string;
   detail: string;
   stock: { length: number; width: number };
+  /** Where the parts lie, for faint outlines behind each step's diagram. */
+  parts: { x: number; y: number; w: number; h: number }[];
   steps: { text: StepText; geometry: StepGeometry }[];
 }
 
@@ -24,6 +26,7 @@ export function pieceViews(pieces: readonly PlanPiece[], units: ShopUnits, kerf:
       name,
       ...stockPieceTitle(piece, name, units),
       stock: { length: piece.length, width: piece.width },
+      parts: piece.placements.map(({ x, y, w, h }) => ({ x, y, w, h })),
       steps: texts.map((text, i) => ({ text, geometry: geometry[i] })),
     };
   });

@@ -61,7 +61,7 @@ export default async function SawOrderPage({ params }: { params: Promise<{ id: s
           )}
         </div>
       </header>
-      <SawCautions compact />
+      <SawCautions compact screenOnly />
       {views.length === 0 ? (
         <p className="card px-4 py-6 text-sm text-graphite-mute">This plan places no parts, so there is nothing to cut.</p>
       ) : (

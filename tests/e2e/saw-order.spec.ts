@@ -1,0 +1,112 @@
+import fs from 'node:fs';
+import { expect, test, type Page } from '@playwright/test';
+import { PDFDocument } from 'pdf-lib';
+import { shot, signIn } from './support/session';
+
+/** The demo shop's released kitchen plan, found the way any client would: through the API. */
+async function kitchenPlan(page: Page) {
+  const jobs: { id: string; name: string }[] = await (await page.request.get('/api/jobs')).json();
+  const kitchen = jobs.find((j) => j.name === 'Hollis kitchen')!;
+  const list = await (await page.request.get(`/api/jobs/${kitchen.id}/plans`)).json();
+  const plans: { id: string; status: string }[] = Array.isArray(list) ? list : list.plans;
+  const planId = plans.find((p) => p.status === 'released' || p.status === 'cutting')!.id;
+  const plan = await (await page.request.get(`/api/plans/${planId}`)).json();
+  const pieces: { placements: unknown[]; sawOrder?: unknown[] }[] = plan.document.pieces;
+  return { planId, pieces };
+}
+
+test('a cutter opens the shop floor, cuts the released kitchen plan step by step, and the ticks survive a reload', async ({ page }) => {
+  await signIn(page, 'cutter');
+  await page.goto('/shop-floor');
+  await expect(page.getByRole('complementary', { name: 'Saw safety' })).toContainText('manual');
+  const card = page.getByTestId('queue-plan').filter({ hasText: 'Hollis kitchen' });
+  await expect(card).toContainText('0 of');
+  await shot(page, 'shop-floor-queue');
+
+  await card.click();
+  await expect(page.getByRole('heading', { level: 1, name: /Hollis kitchen/ })).toBeVisible();
+  await expect(page.getByTestId('current-fence')).toBeVisible();
+  await expect(page.getByRole('complementary', { name: 'Saw safety' })).toBeVisible();
+  await shot(page, 'shop-floor-cutting');
+
+  const saved = () => page.waitForResponse((r) => r.url().includes('/steps') && r.request().method() !== 'GET' && r.status() === 200);
+  await Promise.all([saved(), page.getByRole('button', { name: 'Done — cut 1' }).click()]);
+  await expect(page.getByRole('checkbox', { name: 'Cut 1 done' })).toHaveAttribute('aria-checked', 'true');
+  // The next cut comes up on its own.
+  await expect(page.getByRole('button', { name: 'Done — cut 2' })).toBeVisible();
+  await Promise.all([saved(), page.getByRole('checkbox', { name: 'Cut 2 done' }).click()]);
+  await Promise.all([saved(), page.getByRole('checkbox', { name: 'Cut 3 done' }).click()]);
+  await Promise.all([saved(), page.getByRole('checkbox', { name: 'Cut 3 done' }).click()]);
+
+  await page.reload();
+  await expect(page.getByRole('checkbox', { name: 'Cut 1 done' })).toHaveAttribute('aria-checked', 'true');
+  await expect(page.getByRole('checkbox', { name: 'Cut 2 done' })).toHaveAttribute('aria-checked', 'true');
+  await expect(page.getByRole('checkbox', { name: 'Cut 3 done' })).toHaveAttribute('aria-checked', 'false');
+  await expect(page.getByText('Ticked by Ines Halvorsen').first()).toBeVisible();
+  await expect(page.getByRole('heading', { level: 1 })).toContainText('Cutting');
+  await expect(page.getByRole('button', { name: 'Done — cut 3' })).toBeVisible();
+  // Cutters never see prices.
+  await expect(page.locator('main')).not.toContainText('$');
+  await shot(page, 'shop-floor-ticked');
+});
+
+test('the estimator opens the saw order, prints it a piece per page, and downloads the PDF', async ({ page }) => {
+  await signIn(page, 'estimator');
+  const { planId, pieces } = await kitchenPlan(page);
+  await page.goto(`/plans/${planId}/saw-order`);
+  await expect(page.getByRole('heading', { level: 1, name: /Saw order/ })).toBeVisible();
+  await expect(page.getByTestId('saw-order-piece')).toHaveCount(pieces.length);
+  const steps = pieces.reduce((n, p) => n + (p.sawOrder?.length ?? 0), 0);
+  await expect(page.getByTestId('saw-step')).toHaveCount(steps);
+  await expect(page.getByRole('complementary', { name: 'Saw safety' })).toContainText('licensed practice');
+  await shot(page, 'saw-order');
+  await page.setViewportSize({ width: 816, height: 1056 }); // Letter at 96 px to the inch, for the print screenshot
+
+  await page.emulateMedia({ media: 'print' });
+  await expect(page.getByRole('navigation', { name: 'Main' })).toBeHidden();
+  await expect(page.getByRole('button', { name: 'Print' })).toBeHidden();
+  const breaks = await page.getByTestId('saw-order-piece').evaluateAll((els) => els.map((e) => getComputedStyle(e).breakBefore));
+  expect(breaks.slice(1).every((b) => b === 'page')).toBe(true);
+  await shot(page, 'saw-order-print');
+  // Printed by Chromium itself on Letter paper: each stock piece fills exactly one page.
+  const printed = await PDFDocument.load(await page.pdf({ format: 'Letter', preferCSSPageSize: true }));
+  expect(printed.getPageCount()).toBe(pieces.length);
+  // The cautions are on every printed piece.
+  await expect(page.getByTestId('saw-order-piece').filter({ hasText: 'licensed practice' })).toHaveCount(pieces.length);
+  await page.emulateMedia({ media: 'screen' });
+
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download PDF' }).click()]);
+  expect(download.suggestedFilename()).toBe('saw-order-Hollis-kitchen.pdf');
+  const bytes = fs.readFileSync(await download.path());
+  expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
+  const pdf = await PDFDocument.load(bytes);
+  expect(pdf.getPageCount()).toBe(pieces.length);
+});
+
+test('part tags print one per part on a chosen label sheet, and a tag leads to its part', async ({ page }) => {
+  await signIn(page, 'estimator');
+  const { planId, pieces } = await kitchenPlan(page);
+  await page.goto(`/plans/${planId}/saw-order`);
+  await page.getByRole('link', { name: 'Part tags' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Part tags' })).toBeVisible();
+  const placed = pieces.reduce((n, p) => n + p.placements.length, 0);
+  await expect(page.getByTestId('part-tag')).toHaveCount(placed);
+  await expect(page.getByTestId('label-sheet')).toHaveCount(Math.ceil(placed / 30));
+  await shot(page, 'part-tags-letter');
+
+  await page.getByRole('link', { name: /A4, 3 × 8/ }).click();
+  await expect(page).toHaveURL(/sheet=a4-24/);
+  await expect(page.getByTestId('label-sheet')).toHaveCount(Math.ceil(placed / 24));
+  await page.emulateMedia({ media: 'print' });
+  await expect(page.getByRole('button', { name: 'Print tags' })).toBeHidden();
+  await shot(page, 'part-tags-a4-print');
+  await page.emulateMedia({ media: 'screen' });
+
+  const qr = await page.getByRole('img', { name: /^QR code: / }).first().getAttribute('aria-label');
+  const url = new URL(qr!.replace('QR code: ', ''));
+  expect(url.pathname).toMatch(/^\/parts\/[0-9a-f-]{36}$/);
+  await page.goto(url.pathname + url.search);
+  await expect(page.getByRole('heading', { name: /cut from piece A/ })).toBeVisible();
+  await expect(page.getByRole('heading', { level: 1 })).toContainText('#1');
+  await shot(page, 'part-page');
+});
