@@ -17,8 +17,8 @@ export function StockRowActions({ id, label, onHand }: { id: string; label: stri
   return (
     <div className="flex flex-col items-end gap-2">
       <div className="flex flex-col gap-1">
-        <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setOpen(open === 'receive' ? null : 'receive')} aria-label={`Receive ${label}`}>Receive</button>
-        <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setOpen(open === 'adjust' ? null : 'adjust')} aria-label={`Adjust count of ${label}`}>Adjust</button>
+        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setOpen(open === 'receive' ? null : 'receive')} aria-label={`Receive ${label}`}>Receive</button>
+        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setOpen(open === 'adjust' ? null : 'adjust')} aria-label={`Adjust count of ${label}`}>Adjust</button>
       </div>
       {open === 'receive' && <ReceiveForm id={id} label={label} onDone={() => setOpen(null)} />}
       {open === 'adjust' && <AdjustForm id={id} label={label} onHand={onHand} onDone={() => setOpen(null)} />}

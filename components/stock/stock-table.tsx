@@ -6,7 +6,7 @@ import { StockRowActions } from './stock-row-actions';
 export function StockTable({ items, len, money, canWrite }: { items: StockItemRow[]; len: (mm: number) => string; money: ((cents: number) => string) | null; canWrite: boolean }) {
   return (
     <div className="card overflow-x-auto">
-      <table className="data-table" aria-label="Sheets and boards">
+      <table className="data-table [&_td]:px-2 [&_th]:px-2" aria-label="Sheets and boards">
         <thead>
           <tr>
             <th>Material</th>

@@ -210,6 +210,21 @@ describe('a plan from release to done', () => {
     await expectLedgerMatchesCounts();
   });
 
+  test('done and cancel racing on one plan: exactly one happens, and the counts match it', async () => {
+    const item = await sheet({ material: 'Both ply', onHand: 4 });
+    const plan = await draftPlan({ parts: [part('both', 2000, 1000, 2, 'Both ply')], stock: [asStock(item)] });
+    await releasePlan(db, { ...who(), planId: plan.id });
+    const used = plan.document.pieces.length;
+    const [done, cancelled] = await Promise.allSettled([
+      finishPlan(db, { shopId: fx.mine.id, userId: fx.cutter.id, planId: plan.id, body: { offcuts: [], damaged: [] } }),
+      cancelPlan(db, { ...who(), planId: plan.id }),
+    ]);
+    expect([done.status, cancelled.status].filter((s) => s === 'fulfilled')).toHaveLength(1);
+    const [after] = await db.select().from(stockItems).where(eq(stockItems.id, item.id));
+    expect(after).toEqual(expect.objectContaining(done.status === 'fulfilled' ? { onHand: 4 - used, reserved: 0 } : { onHand: 4, reserved: 0 }));
+    await expectLedgerMatchesCounts();
+  });
+
   test("another shop can neither release this shop's plan nor see its stock", async () => {
     const item = await sheet({ material: 'Private ply', onHand: 2 });
     const plan = await draftPlan({ parts: [part('p', 1000, 500, 1, 'Private ply')], stock: [asStock(item)] });
