@@ -1,4 +1,5 @@
 import { parseLength } from '@/lib/units/parse-length';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { formatLength } from '@/lib/units/format-length';
 import { shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
 import { partPatchSchema, type Part, type PartInput } from '@/shared/schemas/part';
@@ -27,6 +28,8 @@ export const isLengthColumn = (c: Column) => LENGTH_COLUMNS.has(c);
 export function cellText(part: Pick<Part, TextColumn>, column: TextColumn, units: ShopUnits): string {
   const value = part[column];
   if (column === 'jointAllowanceMm') return (value as number) > 0 ? formatLength(value as number, units) : '';
+  // Thickness comes from the stock room (18 mm, 23/32″): shown exactly, never as a rounded fraction.
+  if (column === 'thicknessMm') return exactLengthText(value as number, units);
   if (isLengthColumn(column)) return formatLength(value as number, units);
   return String(value);
 }

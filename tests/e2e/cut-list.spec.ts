@@ -14,6 +14,12 @@ test('an estimator builds a cut list by keyboard, upload and drawer schedule, th
   test.setTimeout(120_000);
   await signIn(page, 'estimator');
   await page.goto('/jobs');
+  const jobs = page.getByRole('table', { name: 'Jobs' });
+  await expect(jobs).toBeVisible();
+  // The jobs list sorts by any column, and the sort is kept in the URL.
+  await jobs.getByRole('button', { name: /^Due/ }).click();
+  await expect(page).toHaveURL(/sort=due\.asc/);
+  await expect(jobs.getByRole('row').nth(1)).toContainText('Hollis kitchen');
   await shot(page, 'cut-list-01-jobs');
   await page.getByRole('link', { name: 'Arden Books wall units' }).click();
   await expect(page.getByRole('heading', { level: 2, name: 'Cut list' })).toBeVisible();
