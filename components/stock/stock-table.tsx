@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { StockItemRow } from '@/db/queries/stock';
 import { StockRowActions } from './stock-row-actions';
@@ -18,7 +19,7 @@ export function StockTable({ items, len, money, canWrite }: { items: StockItemRo
             {money && <th className="num">Cost</th>}
             {money && <th className="num">Value</th>}
             <th>Location</th>
-            {canWrite && <th className="sr-only">Actions</th>}
+            {canWrite && <th><span className="sr-only">Actions</span></th>}
           </tr>
         </thead>
         <tbody>
@@ -27,7 +28,7 @@ export function StockTable({ items, len, money, canWrite }: { items: StockItemRo
             return (
               <tr key={s.id} data-testid="stock-row" data-material={s.material}>
                 <td>
-                  <div className="whitespace-nowrap font-medium">{s.material}</div>
+                  <Link href={`/stock?view=history&item=${s.id}`} className="whitespace-nowrap font-medium text-graphite no-underline hover:underline" title="History of this size">{s.material}</Link>
                   <div className="whitespace-nowrap text-xs text-graphite-mute">
                     {[s.kind === 'sheet' ? 'sheet' : `board ${s.surfacing}`.trim(), s.grade, s.buyable ? 'can buy' : ''].filter(Boolean).join(' · ')}
                   </div>

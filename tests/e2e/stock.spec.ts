@@ -27,6 +27,12 @@ test('the owner receives stock, adjusts a count with a reason, scraps an offcut,
   await expect(quarterPly(page).getByTestId('on-hand')).toHaveText('11');
   await shot(page, 'stock-owner-after-count');
 
+  // One size's own history, from its name.
+  await quarterPly(page).getByRole('link', { name: 'Maple ply' }).click();
+  await expect(page).toHaveURL(/view=history&item=/);
+  await expect(page.getByTestId('movement')).toHaveCount(4); // opening count, reserved by the demo plan, received, adjusted
+  await page.goto('/stock');
+
   // Filters live in the URL.
   await page.getByLabel('Material').fill('Baltic');
   await expect(page).toHaveURL(/material=Baltic/);

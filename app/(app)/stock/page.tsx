@@ -31,6 +31,8 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
   const view = VIEWS.find((v) => v.id === raw.view)?.id ?? 'stock';
   const parsed = stockFilterSchema.safeParse(Object.fromEntries(Object.entries(raw).filter(([, v]) => typeof v === 'string' && v !== '')));
   const filter = parsed.success ? parsed.data : {};
+  // One size's history: /stock?view=history&item=<id>
+  const historyItem = typeof raw.item === 'string' && /^[0-9a-f-]{36}$/.test(raw.item) ? raw.item : undefined;
   const db = await getDb();
   const showPrices = can(user.role, 'prices:read');
   const [settings, allItems, items, rack, movements, value] = await Promise.all([
@@ -38,7 +40,7 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
     listStock(db, user.shopId),
     view === 'stock' ? listStock(db, user.shopId, filter) : [],
     view === 'rack' ? listOffcuts(db, user.shopId, filter) : [],
-    view === 'history' ? listMovements(db, user.shopId) : [],
+    view === 'history' ? listMovements(db, user.shopId, { stockItemId: historyItem }) : [],
     showPrices ? stockValue(db, user.shopId) : null,
   ]);
   if (!settings) return null;
@@ -87,6 +89,11 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
         ) : (
           <OffcutRack rack={rack} len={len} money={money} canScrap={can(user.role, 'offcuts:record')} />
         ))}
+      {view === 'history' && historyItem && (
+        <p className="mb-3 text-sm">
+          History of one size. <Link href="/stock?view=history">Show every movement</Link>
+        </p>
+      )}
       {view === 'history' && (movements.length === 0 ? <EmptyState title="No stock has moved yet." /> : <MovementHistory movements={movements} />)}
     </>
   );

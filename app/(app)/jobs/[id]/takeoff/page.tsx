@@ -5,6 +5,7 @@ import { z } from 'zod';
 import { getDb } from '@/db/client';
 import { getShopSettings } from '@/db/queries/shops';
 import { getTakeoff } from '@/db/queries/takeoff';
+import { CancelPlanButton } from '@/components/stock/cancel-plan-button';
 import { ReleasePlanButton } from '@/components/stock/release-plan-button';
 import { TakeoffTable } from '@/components/takeoff/takeoff-table';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -51,6 +52,7 @@ export default async function TakeoffPage({ params }: { params: Promise<{ id: st
           </p>
         </div>
         {takeoff.plan.status === 'draft' && can(user.role, 'plans:release') && <ReleasePlanButton planId={takeoff.plan.id} describe={describe} />}
+        {(takeoff.plan.status === 'released' || takeoff.plan.status === 'cutting') && can(user.role, 'plans:release') && <CancelPlanButton planId={takeoff.plan.id} />}
       </div>
 
       <div className="mb-6 grid gap-3 sm:grid-cols-4">
