@@ -147,7 +147,7 @@ const PiecesLayer = memo(function PiecesLayer({ doc, frames, parts, check, selec
         const pieceProblems = check.byPiece.get(f.piece);
         return (
           <Group key={f.piece} x={f.x} y={f.y}>
-            <Text y={-18 * px} text={pieceCaption(f.piece)} fontSize={12 * px} fill={pieceProblems ? C.problem : C.text} fontStyle="bold" perfectDrawEnabled={false} />
+            <Text y={-18 * px} width={piece.length} wrap="none" ellipsis text={pieceCaption(f.piece)} fontSize={12 * px} fill={pieceProblems ? C.problem : C.text} fontStyle="bold" perfectDrawEnabled={false} />
             {/* Waste first (the whole piece), then offcuts to keep, then the parts on top. */}
             <Rect width={piece.length} height={piece.width} fill={C.waste} stroke={pieceProblems ? C.problem : C.partEdge} strokeWidth={(pieceProblems ? 3 : 1) * px} perfectDrawEnabled={false} />
             {left?.offcuts.map((o, i) => (

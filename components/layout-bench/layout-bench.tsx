@@ -50,7 +50,9 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   const selection = useStore(store, (s) => s.view.selection);
   const canUndo = useStore(store, (s) => s.past.length > 0);
   const canRedo = useStore(store, (s) => s.future.length > 0);
-  const dirty = useStore(store, (s) => s.past.length > 0);
+  const steps = useStore(store, (s) => s.past.length);
+  const [savedAtStep, setSavedAtStep] = useState(0);
+  const dirty = steps !== savedAtStep;
   const check = useMemo(() => checkDoc(request, doc), [request, doc]);
   const frames = useMemo(() => layoutPieces(doc.pieces), [doc.pieces]);
   const fmt = useCallback((mm: number) => formatLength(mm, units), [units]);
@@ -69,6 +71,14 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
     return () => ro.disconnect();
   }, []);
 
+  // Leaving with unsaved layout changes asks first.
+  useEffect(() => {
+    if (!dirty || !editable) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [dirty, editable]);
+
   const fit = useCallback(() => store.getState().setCamera(fitView(frames, size.width, size.height)), [frames, size, store]);
   const fitted = useRef(false);
   useEffect(() => {
@@ -82,6 +92,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
     mutationFn: () => api<{ updatedAt: string }>(`/api/plans/${data.id}`, { method: 'PUT', body: { plan: rebuildCuts(request, docToPlan(store.getState().doc)), baseUpdatedAt: base } }),
     onSuccess: (res) => {
       setBase(res.updatedAt);
+      setSavedAtStep(store.getState().past.length);
       setNotice('Saved. The saw order was rebuilt from this layout.');
       void queryClient.invalidateQueries({ queryKey: ['plans'] });
       router.refresh(); // the figures above the bench are read on the server
@@ -191,6 +202,11 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
         </div>
         <aside className="space-y-3 text-sm">
           <div className="card p-3" data-testid="bench-status">
+            {check.totals && (
+              <p className="mb-2 text-graphite-soft" data-testid="bench-figures">
+                As laid out: <strong>{check.totals.pieces}</strong> stock pieces, <strong>{(check.totals.yield * 100).toFixed(1)} %</strong> yield
+              </p>
+            )}
             {problems === 0 ? (
               <p className="font-medium text-sage">Every part can be cut free with straight through-cuts.</p>
             ) : (

@@ -14,6 +14,8 @@ describe('the live check on the bench', () => {
     expect(check.violations).toEqual([]);
     const left = check.leftovers.get(0)!;
     expect(left.offcuts.length + left.waste.length).toBeGreaterThan(0);
+    // Yield = part area / stock area (lib/nesting/RULES.md): 3 × 720 × 560 + 2 × 764 × 300 on one 2440 × 1220 sheet.
+    expect(check.totals?.yield).toBeCloseTo((3 * 720 * 560 + 2 * 764 * 300) / (2440 * 1220), 9);
   });
 
   test('two parts dropped on one spot are both marked where they are', async () => {

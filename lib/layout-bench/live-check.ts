@@ -5,7 +5,7 @@
  */
 import type { Rect } from '@/lib/geometry/rect';
 import { rebuildCuts, validatePlan, type Violation } from '@/lib/nesting';
-import type { NestRequest } from '@/shared/schemas/nesting';
+import type { NestRequest, Plan } from '@/shared/schemas/nesting';
 import { docToPlan, placementKey, planPieceIndices, type BenchDoc } from '@/lib/layout-bench/document';
 
 export interface LiveCheck {
@@ -18,6 +18,8 @@ export interface LiveCheck {
   general: string[];
   /** Offcuts and waste by document piece index (absent for a piece that cannot be cut apart). */
   leftovers: Map<number, { offcuts: Rect[]; waste: Rect[] }>;
+  /** Figures of the layout as it stands (absent when it cannot be rebuilt). */
+  totals?: Plan['totals'];
 }
 
 const push = <K>(map: Map<K, string[]>, key: K, message: string) => map.set(key, [...(map.get(key) ?? []), message]);
@@ -46,12 +48,15 @@ export function checkDoc(request: NestRequest, doc: BenchDoc): LiveCheck {
     }
   }
   const leftovers = new Map<number, { offcuts: Rect[]; waste: Rect[] }>();
+  let totals: Plan['totals'];
   try {
-    rebuildCuts(request, plan).pieces.forEach((p, i) => {
+    const rebuilt = rebuildCuts(request, plan);
+    rebuilt.pieces.forEach((p, i) => {
       if (p.offcuts || p.waste) leftovers.set(pieceOf[i], { offcuts: p.offcuts ?? [], waste: p.waste ?? [] });
     });
+    totals = rebuilt.totals;
   } catch {
     // A plan that does not parse is already reported by validatePlan.
   }
-  return { violations, byPlacement, byPiece, general, leftovers };
+  return { violations, byPlacement, byPiece, general, leftovers, totals };
 }

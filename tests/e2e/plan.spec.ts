@@ -110,4 +110,14 @@ test('an overlapping drop is shown on the bench and saving is refused until undo
   await page.getByTestId('bench-canvas').focus();
   await page.keyboard.press('Control+z');
   await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
+
+  // Lock one part and re-nest the rest around it in the worker.
+  await page.mouse.click(box.x + from.x, box.y + from.y);
+  await expect(page.getByRole('definition').filter({ hasText: `#${b.instance}` }).first()).toBeVisible();
+  await page.keyboard.press('l');
+  await expect(page.getByText('1 locked.')).toBeVisible();
+  await page.getByRole('button', { name: 'Re-nest unlocked' }).click();
+  await expect(page.getByText('Re-nested the unlocked parts around the locked ones')).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
+  await shot(page, 'plan-bench-renested');
 });
