@@ -208,12 +208,12 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
               })}
               {canWrite && (
                 <td className="whitespace-nowrap">
-                  <button type="button" className="px-1 text-xs text-graphite-mute hover:text-graphite" aria-label={`Duplicate row ${r + 1}`} onClick={() => add.mutate(duplicateOf(part))}>
-                    Duplicate
+                  <button type="button" className="px-1 text-xs text-graphite-mute hover:text-graphite" aria-label={`Duplicate row ${r + 1}`} title="Duplicate" onClick={() => add.mutate(duplicateOf(part))}>
+                    Copy
                   </button>
                   {part.drawerScheduleId ? null : (
-                    <button type="button" className="px-1 text-xs text-brick hover:underline" aria-label={`Delete row ${r + 1}`} onClick={() => remove.mutate(part.id)}>
-                      Delete
+                    <button type="button" className="px-1 text-base leading-none text-brick hover:underline" aria-label={`Delete row ${r + 1}`} title="Delete" onClick={() => remove.mutate(part.id)}>
+                      ×
                     </button>
                   )}
                 </td>
@@ -275,7 +275,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
 const slug = (s: string) => s.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-');
 
 /** Cell widths in characters, so sizes like 1′ 7-3/4″ and names like "Baltic birch" show whole. */
-const CELL_CH: Record<Column, number> = { label: 14, quantity: 3, lengthMm: 8, widthMm: 8, thicknessMm: 7, material: 11, grain: 8, jointAllowanceMm: 6, notes: 12 };
+const CELL_CH: Record<Column, number> = { label: 12, quantity: 3, lengthMm: 8, widthMm: 8, thicknessMm: 8, material: 11, grain: 8, jointAllowanceMm: 6, notes: 10 };
 
 const cellInputClass = (invalid: boolean, numeric: boolean) =>
   `w-full rounded border bg-transparent px-1 py-0.5 text-sm outline-none focus:border-oak focus:bg-white focus:ring-1 focus:ring-oak-light ${numeric ? 'text-right font-mono' : ''} ${invalid ? 'border-brick bg-brick-wash' : 'border-transparent'}`;
