@@ -223,3 +223,28 @@ export async function listCatalogue(db: Db, shopId: string) {
   const rows = await db.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), eq(stockItems.buyable, true))).orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm));
   return rows.map((r) => ({ id: r.id, kind: r.kind, material: r.material, nominalThickness: r.nominalThickness, thicknessMm: r.thicknessMm, lengthMm: r.lengthMm, widthMm: r.widthMm, grain: r.grain, supplier: r.supplier, costCents: r.costCents, costEachCents: costEachCents(r) }));
 }
+
+/**
+ * Every stock size and offcut whose stored counts differ from what its ledger rows add up to (empty when the ledger
+ * and the counts agree). An offcut on the rack counts 1 on hand, and 1 reserved while a released plan holds it.
+ */
+export async function ledgerMismatches(db: Db, shopId: string) {
+  const [ledger, items, rack] = await Promise.all([
+    ledgerCounts(db, shopId),
+    db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
+    db.select().from(offcuts).where(eq(offcuts.shopId, shopId)),
+  ]);
+  const booked = (pick: (l: (typeof ledger)[number]) => boolean) => ledger.find(pick) ?? { onHand: 0, reserved: 0 };
+  const stored = [
+    ...items.map((i) => ({ what: `${i.material} ${i.nominalThickness} (${i.id})`, onHand: i.onHand, reserved: i.reserved, ledger: booked((l) => l.stockItemId === i.id) })),
+    ...rack.map((o) => ({
+      what: `${o.material} offcut (${o.id})`,
+      onHand: o.status === 'available' || o.status === 'reserved' ? 1 : 0,
+      reserved: o.status === 'reserved' ? 1 : 0,
+      ledger: booked((l) => l.offcutId === o.id),
+    })),
+  ];
+  return stored
+    .filter((s) => s.onHand !== s.ledger.onHand || s.reserved !== s.ledger.reserved)
+    .map((s) => ({ what: s.what, stored: { onHand: s.onHand, reserved: s.reserved }, ledger: { onHand: s.ledger.onHand, reserved: s.ledger.reserved } }));
+}
