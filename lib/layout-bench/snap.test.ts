@@ -46,3 +46,12 @@ describe('snapping a dragged part', () => {
     );
   });
 });
+
+test('a snap never pulls a part onto a neighbour when a clear spot is within reach', () => {
+  // Nearest in line with B's top edge (10 mm away) would overlap A; one kerf below A (23.2 mm away) is clear.
+  const a = { x: 10, y: 10, w: 594, h: 300 };
+  const b = { x: 700, y: 280, w: 300, h: 300 };
+  const s = snapRect({ x: 20, y: 290, w: 594, h: 300 }, usable, [a, b], kerf, 40);
+  expect(s.x).toBe(10);
+  expect(s.y).toBeCloseTo(10 + 300 + kerf, 9);
+});
