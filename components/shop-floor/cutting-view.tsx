@@ -53,7 +53,11 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
       return { before };
     },
     onError: (_e, _v, ctx) => ctx?.before && client.setQueryData(key, ctx.before),
-    onSuccess: (fresh) => client.setQueryData(key, fresh),
+    onSuccess: async (fresh) => {
+      // A refresh that left before this tick was saved must not paint over it.
+      await client.cancelQueries({ queryKey: key });
+      client.setQueryData(key, fresh);
+    },
   });
 
   const view = views[pieceIndex];
@@ -214,7 +218,7 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                     <span className="font-mono text-lg">{text.fence}</span>
                     <span className="text-sm text-graphite-mute">piece {text.piece}</span>
                   </span>
-                  <span className="text-xs text-graphite-mute">
+                  <span className="text-xs text-graphite-mute" suppressHydrationWarning>
                     {tick ? `Ticked by ${tick.doneBy ?? 'someone'} at ${time(tick.doneAt)}` : text.frees.length ? `Frees ${text.frees.join(', ')}` : '\u00a0'}
                   </span>
                 </button>

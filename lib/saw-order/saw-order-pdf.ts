@@ -38,7 +38,9 @@ const mute = rgb(0.45, 0.45, 0.48);
 const faint = rgb(0.85, 0.83, 0.8);
 const oakWash = rgb(0.96, 0.92, 0.85);
 const blade = rgb(0.66, 0.26, 0.18);
-const partFill = rgb(0.89, 0.94, 0.89);
+const partFill = rgb(0.82, 0.91, 0.83);
+/** What a cut leaves, as on screen: the parts it frees in sage, offcuts amber, waste brick; pieces cut on stay plain. */
+const ROLE_FILL = { part: partFill, offcut: rgb(0.97, 0.9, 0.75), waste: rgb(0.97, 0.85, 0.82), piece: null } as const;
 
 export async function sawOrderPdf(input: SawOrderPdfInput): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
@@ -126,7 +128,11 @@ function drawDiagram(page: PDFPage, at: { x: number; y: number }, geo: StepGeome
   const pt = (x: number, y: number) => ({ x: ox + x * s, y: oy - y * s });
   page.drawRectangle({ ...box({ x: 0, y: 0, w: piece.length, h: piece.width }), borderColor: faint, borderWidth: 0.5 });
   page.drawRectangle({ ...box(geo.piece), color: oakWash, borderColor: mute, borderWidth: 0.6 });
-  for (const p of piece.placements) page.drawRectangle({ ...box(p), color: partFill, opacity: 0.9, borderColor: faint, borderWidth: 0.3 });
+  for (const p of piece.placements) page.drawRectangle({ ...box(p), borderColor: mute, borderWidth: 0.25, borderOpacity: 0.6 });
+  for (const p of geo.produces) {
+    const fill = ROLE_FILL[p.role];
+    if (fill) page.drawRectangle({ ...box(p), color: fill, borderColor: mute, borderWidth: 0.4 });
+  }
   page.drawLine({ start: pt(geo.fenceEdge.x1, geo.fenceEdge.y1), end: pt(geo.fenceEdge.x2, geo.fenceEdge.y2), thickness: 2.2, color: ink });
   page.drawLine({ start: pt(geo.line.x1, geo.line.y1), end: pt(geo.line.x2, geo.line.y2), thickness: 1.4, color: blade });
 }

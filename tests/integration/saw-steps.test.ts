@@ -107,6 +107,12 @@ describe('ticking saw-order steps', () => {
     expect(res.body.error).toMatch(status);
   });
 
+  test('a cutter cannot see a draft plan’s ticks (drafts are for people who edit plans)', async () => {
+    const { id } = await plan('draft');
+    expect((await read(id, fx.cutter)).status).toBe(404);
+    expect((await read(id, fx.estimator)).status).toBe(200);
+  });
+
   test('an estimator may read ticks but not tick', async () => {
     const { id } = await plan();
     expect((await tick(id, fx.estimator, { piece: 0, step: 1 })).status).toBe(403);

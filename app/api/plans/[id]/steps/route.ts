@@ -1,11 +1,15 @@
 import { getStepTicks, tickStep, untickStep } from '@/db/queries/saw-steps';
 import { notFound } from '@/lib/api/errors';
 import { idParams, route } from '@/lib/api/route';
+import { can } from '@/lib/auth/permissions';
 import { stepRefSchema } from '@/lib/saw-order/step-ref';
 
 // GET /api/plans/:id/steps – the plan's status and its ticked saw-order steps (who and when)
 export const GET = route({ permission: 'plans:read', params: idParams }, async ({ db, user, params }) => {
-  return (await getStepTicks(db, user.shopId, params.id)) ?? Promise.reject(notFound('That plan'));
+  const ticks = await getStepTicks(db, user.shopId, params.id);
+  // Drafts exist only for people who may edit plans, as everywhere else.
+  if (!ticks || (ticks.status === 'draft' && !can(user.role, 'plans:write'))) throw notFound('That plan');
+  return ticks;
 });
 
 // POST /api/plans/:id/steps – tick a step done (idempotent; the first tick moves a released plan to cutting)
