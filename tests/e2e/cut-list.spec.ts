@@ -128,3 +128,22 @@ test('a cutter sees the cut list read-only and can open the setup cards', async 
   await expect(page.getByRole('complementary', { name: 'Router table cautions' })).toBeVisible();
   await shot(page, 'cut-list-09-setup-cards');
 });
+
+test('an Excel workbook is read in the browser, its unit detected, and imported whole', async ({ page }) => {
+  await signIn(page, 'estimator');
+  await page.goto('/jobs');
+  await page.getByRole('link', { name: 'Pemberton vanity' }).click();
+  const rows = page.getByRole('table', { name: 'Cut list' }).getByTestId('cut-list-row');
+  const before = await rows.count();
+  await page.getByRole('button', { name: 'Upload CSV or Excel' }).click();
+  await page.getByLabel('File').setInputFiles('lib/cut-list/fixtures/vanity-metric.xlsx');
+  await expect(page.getByLabel('Bare numbers are')).toHaveValue('mm');
+  await expect(page.getByText('3 rows ready')).toBeVisible();
+  await shot(page, 'cut-list-10-xlsx-preview');
+  await page.getByRole('button', { name: 'Import 3 rows' }).click();
+  await expect(rows).toHaveCount(before + 3);
+  // The formula-looking note is kept as text.
+  await expect(rows.last().getByLabel(/^Part, row/)).toHaveValue('Top rail');
+  await expect(rows.last().getByLabel(/^Notes, row/)).toHaveValue('=1+1');
+  await shot(page, 'cut-list-11-xlsx-imported');
+});
