@@ -13,7 +13,8 @@ import { checkDoc } from '@/lib/layout-bench/live-check';
 import { prepareRenest } from '@/lib/layout-bench/renest';
 import { createBenchStore, mayRotate, type BenchStore } from '@/lib/layout-bench/store';
 import { fitView, layoutPieces } from '@/lib/layout-bench/world';
-import { readPlan, rebuildCuts } from '@/lib/nesting';
+import { rebuildCuts } from '@/lib/nesting';
+import { readBenchPlan } from '@/lib/layout-bench/read-bench-plan';
 import { formatLength } from '@/lib/units/format-length';
 import { nestRequestSchema, type NestRequest } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
@@ -45,7 +46,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   const router = useRouter();
   const request = useMemo(() => nestRequestSchema.parse(data.request), [data.request]);
   const parts = useMemo(() => new Map<string, PartInfo>(request.parts.map((p) => [p.id, p])), [request]);
-  const [store] = useState<BenchStore>(() => createBenchStore(planToDoc(readPlan(data.document), request), { parts, kerf: request.settings.kerf }));
+  const [store] = useState<BenchStore>(() => createBenchStore(planToDoc(readBenchPlan(data.document), request), { parts, kerf: request.settings.kerf }));
   const doc = useStore(store, (s) => s.doc);
   const selection = useStore(store, (s) => s.view.selection);
   const canUndo = useStore(store, (s) => s.past.length > 0);

@@ -98,7 +98,8 @@ test('an overlapping drop is shown on the bench and saving is refused until undo
   const [a, b] = pieces[i].placements;
   const { box, frames, view } = await canvasView(page, pieces);
   const from = toScreen(view, frames[i], b.x + b.w / 2, b.y + b.h / 2);
-  const dest = toScreen(view, frames[i], a.x + b.w / 2 + 40, a.y + b.h / 2 + 40);
+  // Right on top of its neighbour: no spot within snapping reach is clear, so the drop overlaps.
+  const dest = toScreen(view, frames[i], a.x + a.w / 2, a.y + a.h / 2);
   await page.mouse.move(box.x + from.x, box.y + from.y);
   await page.mouse.down();
   await page.mouse.move(box.x + dest.x, box.y + dest.y, { steps: 10 });
@@ -120,4 +121,21 @@ test('an overlapping drop is shown on the bench and saving is refused until undo
   await expect(page.getByText('Re-nested the unlocked parts around the locked ones')).toBeVisible({ timeout: 30_000 });
   await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
   await shot(page, 'plan-bench-renested');
+});
+
+test('a cutter sees the released plan on a read-only bench, without prices, drafts or the Nest', async ({ page }) => {
+  await signIn(page, 'cutter');
+  await page.goto('/jobs');
+  await page.getByRole('link', { name: 'Hollis kitchen' }).click();
+  await page.getByRole('navigation', { name: 'Job sections' }).getByRole('link', { name: 'Plan' }).click();
+  const plans = page.getByRole('table', { name: 'Plans' });
+  await expect(plans).toContainText('Released');
+  await expect(plans).not.toContainText('Draft');
+  await expect(plans).not.toContainText('$');
+  await expect(page.getByRole('heading', { name: 'Nest' })).toHaveCount(0);
+  await plans.getByRole('link', { name: 'Carcasses and backs' }).click();
+  await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
+  await expect(page.getByRole('button', { name: 'Save layout' })).toHaveCount(0);
+  await expect(page.getByTestId('plan-summary')).not.toContainText('$');
+  await shot(page, 'plan-cutter-readonly');
 });
