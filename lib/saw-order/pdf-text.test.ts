@@ -18,3 +18,14 @@ describe('text for the standard PDF fonts', () => {
     );
   });
 });
+
+describe('PDF file names', () => {
+  test.each([
+    ['spaces and marks become dashes', 'Hollis kitchen', 'Hollis-kitchen'],
+    ['accents are dropped, not the letter', 'Café Ödön', 'Cafe-Odon'],
+    ['nothing usable falls back to "plan"', '☃☃', 'plan'],
+  ])('%s', async (_label, input, output) => {
+    const { pdfFileName } = await import('./pdf-text');
+    expect(pdfFileName(input)).toBe(output);
+  });
+});

@@ -1,3 +1,5 @@
+import type { PDFFont } from 'pdf-lib';
+
 /**
  * Text for pdf-lib's standard fonts, which encode only WinAnsi: typographic marks become their plain forms and
  * anything else outside Latin-1 becomes "?" (rather than failing the whole download on one odd part label).
@@ -23,3 +25,20 @@ export function pdfText(s: string): string {
     .join('')
     .replace(/[^\x20-\x7E\xA0-\xFF]/g, '?');
 }
+
+/** Shortens text with "..." to fit `width` points. */
+export function fit(s: string, font: PDFFont, size: number, width: number): string {
+  const text = pdfText(s);
+  if (font.widthOfTextAtSize(text, size) <= width) return text;
+  let lo = 0;
+  let hi = text.length;
+  while (lo < hi) {
+    const mid = Math.ceil((lo + hi) / 2);
+    if (font.widthOfTextAtSize(text.slice(0, mid) + '...', size) <= width) lo = mid;
+    else hi = mid - 1;
+  }
+  return text.slice(0, lo) + '...';
+}
+
+/** A file name any system accepts: letters, digits and dashes. */
+export const pdfFileName = (s: string) => s.normalize('NFKD').replace(/\p{M}/gu, '').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'plan';

@@ -12,7 +12,7 @@ import type { ShopUnits } from '@/shared/schemas/units';
 import { formatLength } from '@/lib/units/format-length';
 import { describeSawOrder, stockPieceTitle, type StepText } from './describe-step';
 import { sawOrderGeometry, type StepGeometry } from './step-geometry';
-import { pdfText } from './pdf-text';
+import { fit, pdfText } from './pdf-text';
 
 export const PAGE_SIZES = { letter: [612, 792], a4: [595.28, 841.89] } as const;
 export type PdfPageSize = keyof typeof PAGE_SIZES;
@@ -135,18 +135,4 @@ function drawDiagram(page: PDFPage, at: { x: number; y: number }, geo: StepGeome
   }
   page.drawLine({ start: pt(geo.fenceEdge.x1, geo.fenceEdge.y1), end: pt(geo.fenceEdge.x2, geo.fenceEdge.y2), thickness: 2.2, color: ink });
   page.drawLine({ start: pt(geo.line.x1, geo.line.y1), end: pt(geo.line.x2, geo.line.y2), thickness: 1.4, color: blade });
-}
-
-/** Shortens text with "..." to fit `width` points. */
-function fit(s: string, font: PDFFont, size: number, width: number): string {
-  const text = pdfText(s);
-  if (font.widthOfTextAtSize(text, size) <= width) return text;
-  let lo = 0;
-  let hi = text.length;
-  while (lo < hi) {
-    const mid = Math.ceil((lo + hi) / 2);
-    if (font.widthOfTextAtSize(text.slice(0, mid) + '...', size) <= width) lo = mid;
-    else hi = mid - 1;
-  }
-  return text.slice(0, lo) + '...';
 }

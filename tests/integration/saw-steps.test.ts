@@ -6,6 +6,7 @@ import type { DbHandle } from '@/db/open';
 import { auditEvents, plans, sawSteps } from '@/db/schema';
 import * as steps from '@/app/api/plans/[id]/steps/route';
 import * as pdf from '@/app/api/plans/[id]/saw-order-pdf/route';
+import * as tagsPdf from '@/app/api/plans/[id]/tags-pdf/route';
 import { createTestDatabase } from '../support/test-db';
 import { request, TEST_SECRET, twoShops, type TestUser } from '../support/fixtures';
 import { releasedPlan } from './authz/saw-order';
@@ -129,5 +130,21 @@ describe('the saw-order PDF download', () => {
     expect(res.headers.get('content-disposition')).toMatch(/^attachment; filename="saw-order-Birchwood-pantry\.pdf"$/);
     const doc = await PDFDocument.load(new Uint8Array(await res.arrayBuffer()));
     expect(doc.getPageCount()).toBe(document.pieces.length);
+  });
+});
+
+describe('the part-tags PDF download', () => {
+  test('is application/pdf on the chosen sheet, and an unknown sheet is refused with 422', async () => {
+    const { id } = await plan();
+    const get = async (q: string) =>
+      (tagsPdf.GET as Handler)(await request(`/api/plans/${id}/tags-pdf${q}`, { user: fx.cutter }), { params: Promise.resolve({ id }) });
+    const res = await get('?sheet=a4-30');
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toBe('application/pdf');
+    const doc = await PDFDocument.load(new Uint8Array(await res.arrayBuffer()));
+    expect(doc.getPage(0).getSize().width).toBeCloseTo((210 / 25.4) * 72, 1); // A4 width, ISO 216
+    const bad = await get('?sheet=avery-9999');
+    expect(bad.status).toBe(422);
+    expect((await bad.json()).fields.sheet.length).toBeGreaterThan(0);
   });
 });

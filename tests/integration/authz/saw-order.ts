@@ -22,4 +22,5 @@ export const rows: AuthzRow[] = [
   { route: '/api/plans/[id]/steps', method: 'POST', target, body: { piece: 0, step: 1 }, expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 200, other: 404 } },
   { route: '/api/plans/[id]/steps', method: 'DELETE', target, body: { piece: 0, step: 1 }, expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 200, other: 404 } },
   { route: '/api/plans/[id]/saw-order-pdf', method: 'GET', target, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 404 } },
+  { route: '/api/plans/[id]/tags-pdf', method: 'GET', target, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 404 } },
 ];

@@ -12,17 +12,10 @@ import { requirePageUser } from '@/lib/auth/session';
 import { LABEL_SHEETS, labelSheet } from '@/lib/saw-order/label-sheets';
 import { partTagPath, partTags } from '@/lib/saw-order/part-tags';
 import { qrPath } from '@/lib/saw-order/qr-path';
+import { siteOrigin } from '@/lib/saw-order/site-origin';
 import { formatLength } from '@/lib/units/format-length';
 
 export const metadata: Metadata = { title: 'Part tags' };
-
-/** The address people reach this server at, for QR codes a phone can open: NEXTAUTH_URL when set, else this request's host. */
-async function siteOrigin() {
-  if (process.env.NEXTAUTH_URL) return new URL(process.env.NEXTAUTH_URL).origin;
-  const h = await headers();
-  const host = h.get('x-forwarded-host') ?? h.get('host') ?? 'localhost:3000';
-  return `${h.get('x-forwarded-proto') ?? 'http'}://${host}`;
-}
 
 export default async function PartTagsPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ sheet?: string }> }) {
   const user = await requirePageUser('plans:read');
@@ -31,7 +24,7 @@ export default async function PartTagsPage({ params, searchParams }: { params: P
   const order = await getSawOrder(await getDb(), user.shopId, id.data, { drafts: can(user.role, 'plans:write') });
   if (!order) notFound();
   const sheet = labelSheet((await searchParams).sheet);
-  const origin = await siteOrigin();
+  const origin = siteOrigin(await headers(), process.env.NEXTAUTH_URL);
   const len = (mm: number) => formatLength(mm, order.units);
   const items = partTags(order.document, order.parts).map((tag) => {
     const url = origin + partTagPath(order.id, tag);
@@ -54,7 +47,12 @@ export default async function PartTagsPage({ params, searchParams }: { params: P
               {unplaced > 0 && <span className="text-brick"> · {unplaced} part{unplaced === 1 ? '' : 's'} not placed get no tag</span>}
             </p>
           </div>
-          <PrintButton label="Print tags" />
+          <div className="flex gap-2">
+            <PrintButton label="Print tags" />
+            <a className="btn-quiet" href={`/api/plans/${order.id}/tags-pdf?sheet=${sheet.id}`} download>
+              Download PDF
+            </a>
+          </div>
         </header>
         <nav aria-label="Label sheet" className="mb-4 flex flex-wrap items-center gap-2">
           <span className="text-sm text-graphite-mute">Label sheet:</span>
@@ -70,7 +68,7 @@ export default async function PartTagsPage({ params, searchParams }: { params: P
           ))}
         </nav>
         <p className="mb-4 max-w-3xl text-xs text-graphite-mute">
-          Print at 100 % (no “fit to page”) so the tags land on the labels. Each QR code opens the part’s page: its job, plan and the piece it is cut from.
+          Print at 100 % (no “fit to page”) so the tags land on the labels, or download the PDF, which is made to the sheet’s exact size. Each QR code opens the part’s page: its job, plan and the piece it is cut from.
         </p>
       </div>
       {items.length === 0 ? (

@@ -2,13 +2,11 @@ import { getSawOrder } from '@/db/queries/saw-steps';
 import { notFound } from '@/lib/api/errors';
 import { idParams, route } from '@/lib/api/route';
 import { can } from '@/lib/auth/permissions';
+import { pdfFileName } from '@/lib/saw-order/pdf-text';
 import { sawOrderPdf } from '@/lib/saw-order/saw-order-pdf';
 import { z } from 'zod';
 
 const pdfQuery = z.object({ page: z.enum(['letter', 'a4']).optional() });
-
-/** A file name any system accepts: letters, digits and dashes. */
-const fileName = (s: string) => s.normalize('NFKD').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'plan';
 
 // GET /api/plans/:id/saw-order-pdf?page=letter|a4 – the saw order as a PDF, one page per stock piece
 export const GET = route({ permission: 'plans:read', params: idParams, query: pdfQuery }, async ({ db, user, params, query }) => {
@@ -25,7 +23,7 @@ export const GET = route({ permission: 'plans:read', params: idParams, query: pd
   return new Response(Buffer.from(bytes), {
     headers: {
       'content-type': 'application/pdf',
-      'content-disposition': `attachment; filename="saw-order-${fileName(order.job.name)}.pdf"`,
+      'content-disposition': `attachment; filename="saw-order-${pdfFileName(order.job.name)}.pdf"`,
       'cache-control': 'private, no-store',
     },
   });

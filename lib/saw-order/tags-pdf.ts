@@ -1,0 +1,75 @@
+/**
+ * Part tags as a PDF on a label sheet at its exact size, for printers whose print dialog would scale a web page.
+ * Same content as the tags page: job, part, size, grain arrow, QR code. Helvetica with ASCII lengths (see
+ * saw-order-pdf.ts for why).
+ */
+import { PDFDocument, StandardFonts, rgb, type PDFFont } from 'pdf-lib';
+import QRCode from 'qrcode';
+import { formatLength } from '@/lib/units/format-length';
+import type { ShopUnits } from '@/shared/schemas/units';
+import { labelOrigin, paginate, type LabelSheet } from './label-sheets';
+import type { PartTag } from './part-tags';
+import { fit, pdfText } from './pdf-text';
+import { QUIET_ZONE } from './qr-path';
+
+const PT_PER_MM = 72 / 25.4;
+const ink = rgb(0, 0, 0);
+const mute = rgb(0.4, 0.4, 0.42);
+
+export interface TagsPdfInput {
+  jobName: string;
+  tags: readonly PartTag[];
+  /** The address each tag's QR code leads to. */
+  url: (tag: PartTag) => string;
+  units: ShopUnits;
+  sheet: LabelSheet;
+}
+
+export async function tagsPdf(input: TagsPdfInput): Promise<Uint8Array> {
+  const doc = await PDFDocument.create();
+  doc.setTitle(pdfText(`Part tags - ${input.jobName}`));
+  doc.setCreator('Kerfwise');
+  const regular = await doc.embedFont(StandardFonts.Helvetica);
+  const bold = await doc.embedFont(StandardFonts.HelveticaBold);
+  const { sheet } = input;
+  const len = (mm: number) => formatLength(mm, input.units, { style: 'ascii' });
+  const pageH = sheet.page.height * PT_PER_MM;
+
+  for (const tags of paginate(input.tags, sheet)) {
+    const page = doc.addPage([sheet.page.width * PT_PER_MM, pageH]);
+    tags.forEach((tag, i) => {
+      const at = labelOrigin(sheet, i);
+      // Label box in points, with y measured up from the page's bottom as PDF does.
+      const x0 = (at.x + 2) * PT_PER_MM;
+      const top = pageH - at.y * PT_PER_MM;
+      const h = sheet.label.height * PT_PER_MM;
+      const qrSide = Math.min(sheet.label.height - 3, sheet.label.width * 0.38) * PT_PER_MM;
+      const { modules } = QRCode.create(input.url(tag), { errorCorrectionLevel: 'M' });
+      const cell = qrSide / (modules.size + 2 * QUIET_ZONE);
+      const qy = top - (h + qrSide) / 2;
+      for (let r = 0; r < modules.size; r++) {
+        for (let c = 0; c < modules.size; c++) {
+          if (modules.get(r, c)) page.drawRectangle({ x: x0 + (c + QUIET_ZONE) * cell, y: qy + qrSide - (r + QUIET_ZONE + 1) * cell, width: cell, height: cell, color: ink });
+        }
+      }
+      const tx = x0 + qrSide + 1.5 * PT_PER_MM;
+      const tw = (at.x + sheet.label.width - 2) * PT_PER_MM - tx;
+      const mid = top - h / 2;
+      const line = (text: string, y: number, font: PDFFont, size: number, color = ink) => page.drawText(fit(text, font, size, tw), { x: tx, y, size, font, color });
+      line(input.jobName, mid + 12, regular, 6, mute);
+      line(`${tag.label} #${tag.instance}`, mid + 3, bold, 9);
+      line(`${len(tag.length)} x ${len(tag.width)}`, mid - 7, bold, 8);
+      if (tag.grain) {
+        const y = mid - 14;
+        page.drawLine({ start: { x: tx, y }, end: { x: tx + 22, y }, thickness: 0.8, color: ink });
+        page.drawSvgPath('M 0 0 L -4 -2 L -4 2 Z', { x: tx + 24, y, color: ink });
+        page.drawText('grain', { x: tx + 27, y: y - 2, size: 6, font: regular, color: mute });
+      } else {
+        page.drawText('grain either way', { x: tx, y: mid - 16, size: 6, font: regular, color: mute });
+      }
+      const piece = `Piece ${tag.pieceName}`;
+      page.drawText(piece, { x: tx + tw - regular.widthOfTextAtSize(piece, 6), y: mid - 16, size: 6, font: regular, color: mute });
+    });
+  }
+  return doc.save();
+}
