@@ -101,6 +101,9 @@ test('part tags print one per part on a chosen label sheet, and a tag leads to i
   await expect(page.getByRole('button', { name: 'Print tags' })).toBeHidden();
   await shot(page, 'part-tags-a4-print');
   await page.emulateMedia({ media: 'screen' });
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download PDF' }).click()]);
+  const tagsPdf = await PDFDocument.load(fs.readFileSync(await download.path()));
+  expect(tagsPdf.getPageCount()).toBe(Math.ceil(placed / 24));
 
   const qr = await page.getByRole('img', { name: /^QR code: / }).first().getAttribute('aria-label');
   const url = new URL(qr!.replace('QR code: ', ''));
