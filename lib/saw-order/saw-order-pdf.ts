@@ -4,7 +4,7 @@
  * Helvetica (a standard PDF font, nothing to embed) with ASCII lengths (19-3/4"), because the app's web fonts are
  * WOFF2, which pdf-lib cannot embed.
  */
-import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
+import { rgb, type PDFFont, type PDFPage } from 'pdf-lib';
 import { SAW_CAUTIONS } from '@/lib/safety';
 import { stockPieceName } from '@/lib/nesting/saw-order';
 import type { PlanPiece } from '@/shared/schemas/nesting';
@@ -12,7 +12,7 @@ import type { ShopUnits } from '@/shared/schemas/units';
 import { formatLength } from '@/lib/units/format-length';
 import { describeSawOrder, stockPieceTitle, type StepText } from './describe-step';
 import { sawOrderGeometry, type StepGeometry } from './step-geometry';
-import { fit, pdfText } from './pdf-text';
+import { fit, newPdf, pdfText } from './pdf-text';
 
 export const PAGE_SIZES = { letter: [612, 792], a4: [595.28, 841.89] } as const;
 export type PdfPageSize = keyof typeof PAGE_SIZES;
@@ -43,11 +43,7 @@ const partFill = rgb(0.82, 0.91, 0.83);
 const ROLE_FILL = { part: partFill, offcut: rgb(0.97, 0.9, 0.75), waste: rgb(0.97, 0.85, 0.82), piece: null } as const;
 
 export async function sawOrderPdf(input: SawOrderPdfInput): Promise<Uint8Array> {
-  const doc = await PDFDocument.create();
-  doc.setTitle(pdfText(`Saw order - ${input.title}`));
-  doc.setCreator('Kerfwise');
-  const regular = await doc.embedFont(StandardFonts.Helvetica);
-  const bold = await doc.embedFont(StandardFonts.HelveticaBold);
+  const { doc, regular, bold } = await newPdf(`Saw order - ${input.title}`);
   const [pw, ph] = PAGE_SIZES[input.pageSize ?? 'letter'];
   const cautionLines = ['Safety: a saw order is a cutting plan, not a safety procedure.', ...SAW_CAUTIONS].map(pdfText);
   const footer = MARGIN + cautionLines.length * (CAUTION_SIZE + 2) + 8;

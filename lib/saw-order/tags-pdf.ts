@@ -3,13 +3,13 @@
  * Same content as the tags page: job, part, size, grain arrow, QR code. Helvetica with ASCII lengths (see
  * saw-order-pdf.ts for why).
  */
-import { PDFDocument, StandardFonts, rgb, type PDFFont } from 'pdf-lib';
+import { rgb, type PDFFont } from 'pdf-lib';
 import QRCode from 'qrcode';
 import { formatLength } from '@/lib/units/format-length';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { labelOrigin, paginate, type LabelSheet } from './label-sheets';
 import type { PartTag } from './part-tags';
-import { fit, pdfText } from './pdf-text';
+import { fit, newPdf } from './pdf-text';
 import { QUIET_ZONE } from './qr-path';
 
 const PT_PER_MM = 72 / 25.4;
@@ -26,11 +26,7 @@ export interface TagsPdfInput {
 }
 
 export async function tagsPdf(input: TagsPdfInput): Promise<Uint8Array> {
-  const doc = await PDFDocument.create();
-  doc.setTitle(pdfText(`Part tags - ${input.jobName}`));
-  doc.setCreator('Kerfwise');
-  const regular = await doc.embedFont(StandardFonts.Helvetica);
-  const bold = await doc.embedFont(StandardFonts.HelveticaBold);
+  const { doc, regular, bold } = await newPdf(`Part tags - ${input.jobName}`);
   const { sheet } = input;
   const len = (mm: number) => formatLength(mm, input.units, { style: 'ascii' });
   const pageH = sheet.page.height * PT_PER_MM;
