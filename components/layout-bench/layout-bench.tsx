@@ -233,7 +233,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
             )}
           </div>
           <p className="text-xs text-graphite-mute">
-            {lockedCount} locked. Parts snap to the trimmed edges and to neighbours one kerf ({fmt(request.settings.kerf)}) apart. Shaded: waste (trim, kerf, scraps); green dashes: offcuts to keep.
+            {editable ? `${lockedCount} locked. ` : 'Read only: only a draft plan can be changed. '}{editable && `Parts snap to the trimmed edges and to neighbours one kerf (${fmt(request.settings.kerf)}) apart. `}Shaded: waste (trim, kerf, scraps); green dashes: offcuts to keep.
           </p>
         </aside>
       </div>

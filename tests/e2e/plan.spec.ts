@@ -22,10 +22,18 @@ function pickMove(pieces: Piece[]) {
   return best as { piece: number; part: Placement; to: Rect } | null;
 }
 
-async function canvasView(page: Page, pieces: Piece[]) {
+/** Drags on the bench from the centre of `part` on piece `i` to where its corner would be at (x, y), in mm. */
+async function dragPart(page: Page, pieces: Piece[], i: number, part: Rect, x: number, y: number) {
   const box = (await page.getByTestId('bench-canvas').locator('canvas').first().boundingBox())!;
   const frames: PieceFrame[] = layoutPieces(pieces);
-  return { box, frames, view: fitView(frames, Math.floor(box.width), Math.floor(box.height)) };
+  const view = fitView(frames, Math.floor(box.width), Math.floor(box.height));
+  const from = toScreen(view, frames[i], part.x + part.w / 2, part.y + part.h / 2);
+  const dest = toScreen(view, frames[i], x + part.w / 2, y + part.h / 2);
+  await page.mouse.move(box.x + from.x, box.y + from.y);
+  await page.mouse.down();
+  await page.mouse.move(box.x + dest.x, box.y + dest.y, { steps: 15 });
+  await page.mouse.up();
+  return { x: box.x + from.x, y: box.y + from.y };
 }
 
 test('an estimator nests a job with progress, saves a draft, drags a part on the bench, saves, and the change survives a reload', async ({ page }) => {
@@ -61,13 +69,7 @@ test('an estimator nests a job with progress, saves a draft, drags a part on the
   const move = pickMove(before.pieces);
   expect(move, 'the nested plan has an offcut a part fits in').not.toBeNull();
   const { part, to, piece } = move!;
-  const { box, frames, view } = await canvasView(page, before.pieces);
-  const from = toScreen(view, frames[piece], part.x + part.w / 2, part.y + part.h / 2);
-  const dest = toScreen(view, frames[piece], to.x + part.w / 2, to.y + part.h / 2);
-  await page.mouse.move(box.x + from.x, box.y + from.y);
-  await page.mouse.down();
-  await page.mouse.move(box.x + dest.x, box.y + dest.y, { steps: 20 });
-  await page.mouse.up();
+  await dragPart(page, before.pieces, piece, part, to.x, to.y);
   await expect(page.getByRole('button', { name: 'Undo' })).toBeEnabled();
   await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
   await shot(page, 'plan-bench-dragged');
@@ -96,14 +98,8 @@ test('an overlapping drop is shown on the bench and saving is refused until undo
   const { pieces } = await savedPlan(page, draft!.id);
   const i = pieces.findIndex((p) => p.placements.length >= 2);
   const [a, b] = pieces[i].placements;
-  const { box, frames, view } = await canvasView(page, pieces);
-  const from = toScreen(view, frames[i], b.x + b.w / 2, b.y + b.h / 2);
   // Right on top of its neighbour: no spot within snapping reach is clear, so the drop overlaps.
-  const dest = toScreen(view, frames[i], a.x + a.w / 2, a.y + a.h / 2);
-  await page.mouse.move(box.x + from.x, box.y + from.y);
-  await page.mouse.down();
-  await page.mouse.move(box.x + dest.x, box.y + dest.y, { steps: 10 });
-  await page.mouse.up();
+  const grabbed = await dragPart(page, pieces, i, b, a.x + (a.w - b.w) / 2, a.y + (a.h - b.h) / 2);
   await expect(page.getByTestId('bench-status')).toContainText('saving is refused');
   await expect(page.getByRole('list', { name: 'Problems' })).toContainText('overlap');
   await expect(page.getByRole('button', { name: 'Save layout' })).toBeDisabled();
@@ -113,7 +109,7 @@ test('an overlapping drop is shown on the bench and saving is refused until undo
   await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
 
   // Lock one part and re-nest the rest around it in the worker.
-  await page.mouse.click(box.x + from.x, box.y + from.y);
+  await page.mouse.click(grabbed.x, grabbed.y);
   await expect(page.getByRole('definition').filter({ hasText: `#${b.instance}` }).first()).toBeVisible();
   await page.keyboard.press('l');
   await expect(page.getByText('1 locked.')).toBeVisible();
@@ -137,5 +133,6 @@ test('a cutter sees the released plan on a read-only bench, without prices, draf
   await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
   await expect(page.getByRole('button', { name: 'Save layout' })).toHaveCount(0);
   await expect(page.getByTestId('plan-summary')).not.toContainText('$');
+  await expect(page.getByTestId('bench-canvas').locator('canvas').first()).toBeVisible();
   await shot(page, 'plan-cutter-readonly');
 });
