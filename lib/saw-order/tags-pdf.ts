@@ -4,13 +4,12 @@
  * saw-order-pdf.ts for why).
  */
 import { rgb, type PDFFont } from 'pdf-lib';
-import QRCode from 'qrcode';
 import { formatLength } from '@/lib/units/format-length';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { labelOrigin, paginate, type LabelSheet } from './label-sheets';
 import type { PartTag } from './part-tags';
 import { fit, newPdf } from './pdf-text';
-import { QUIET_ZONE } from './qr-path';
+import { qrPath } from './qr-path';
 
 const PT_PER_MM = 72 / 25.4;
 const ink = rgb(0, 0, 0);
@@ -40,14 +39,9 @@ export async function tagsPdf(input: TagsPdfInput): Promise<Uint8Array> {
       const top = pageH - at.y * PT_PER_MM;
       const h = sheet.label.height * PT_PER_MM;
       const qrSide = Math.min(sheet.label.height - 3, sheet.label.width * 0.38) * PT_PER_MM;
-      const { modules } = QRCode.create(input.url(tag), { errorCorrectionLevel: 'M' });
-      const cell = qrSide / (modules.size + 2 * QUIET_ZONE);
-      const qy = top - (h + qrSide) / 2;
-      for (let r = 0; r < modules.size; r++) {
-        for (let c = 0; c < modules.size; c++) {
-          if (modules.get(r, c)) page.drawRectangle({ x: x0 + (c + QUIET_ZONE) * cell, y: qy + qrSide - (r + QUIET_ZONE + 1) * cell, width: cell, height: cell, color: ink });
-        }
-      }
+      // The whole symbol as one path (runs of dark modules), in QR modules scaled to points.
+      const qr = qrPath(input.url(tag));
+      page.drawSvgPath(qr.d, { x: x0, y: top - (h - qrSide) / 2, scale: qrSide / qr.size, color: ink, borderWidth: 0 });
       const tx = x0 + qrSide + 1.5 * PT_PER_MM;
       const tw = (at.x + sheet.label.width - 2) * PT_PER_MM - tx;
       const mid = top - h / 2;
