@@ -72,6 +72,9 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
     columns,
     state: { sorting, columnFilters, globalFilter: search },
     globalFilterFn: matchesSearch,
+    // Always ascending first: left to itself the table guesses from the first row's value, and a job with no due
+    // date at the top would flip the first click to descending.
+    sortDescFirst: false,
     onSortingChange: (updater) => {
       const next = typeof updater === 'function' ? updater(sorting) : updater;
       setParam('sort', next[0] ? `${next[0].id}.${next[0].desc ? 'desc' : 'asc'}` : '');
@@ -90,15 +93,15 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
           <input id="job-search" className="field-input" placeholder="Job, customer or material" defaultValue={search} onChange={(e) => setParam('q', e.target.value)} />
         </div>
         <div>
-          <label htmlFor="job-status" className="field-label">Status</label>
-          <select id="job-status" className="field-input" value={status} onChange={(e) => setParam('status', e.target.value)}>
+          <label htmlFor="job-filter-status" className="field-label">Status</label>
+          <select id="job-filter-status" className="field-input" value={status} onChange={(e) => setParam('status', e.target.value)}>
             <option value="">Any</option>
             {JOB_STATUSES.map((s) => <option key={s} value={s}>{JOB_STATUS_LABELS[s]}</option>)}
           </select>
         </div>
         <div>
-          <label htmlFor="job-customer" className="field-label">Customer</label>
-          <select id="job-customer" className="field-input" value={customer} onChange={(e) => setParam('customer', e.target.value)}>
+          <label htmlFor="job-filter-customer" className="field-label">Customer</label>
+          <select id="job-filter-customer" className="field-input" value={customer} onChange={(e) => setParam('customer', e.target.value)}>
             <option value="">Any</option>
             {customers.map((c) => <option key={c} value={c}>{c}</option>)}
           </select>

@@ -6,15 +6,25 @@ import { takeoffLines, type TakeoffSize } from '@/lib/stock/takeoff';
 import { costEachCents, stockRef } from './nest-request';
 import { getShopSettings } from './shops';
 
+/** The job's plans a takeoff can be read from (cancelled ones aside), newest first. */
+export async function takeoffPlans(db: Db, shopId: string, jobId: string) {
+  return db
+    .select({ id: plans.id, name: plans.name, status: plans.status })
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), ne(plans.status, 'cancelled')))
+    .orderBy(desc(plans.createdAt));
+}
+
 /**
- * The material check before a quote, for a job's latest plan (cancelled ones aside): what to pull, what to buy, board
- * feet or area, cost with the shop's waste factor, whether the stock room covers it now, and any part not placed.
+ * The material check before a quote, for one of a job's plans (the latest unless one is named; cancelled ones
+ * aside): what to pull, what to buy, board feet or area, cost with the shop's waste factor, whether the stock room
+ * covers it now, and any part not placed.
  */
-export async function getTakeoff(db: Db, shopId: string, jobId: string) {
+export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?: string) {
   const [row] = await db
     .select()
     .from(plans)
-    .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), ne(plans.status, 'cancelled')))
+    .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), ne(plans.status, 'cancelled'), planId ? eq(plans.id, planId) : undefined))
     .orderBy(desc(plans.createdAt))
     .limit(1);
   if (!row) return null;

@@ -37,6 +37,7 @@ test('the bench keeps drawing while a part is dragged among 340 parts', async ({
   expect(parts).toBe(340);
 
   const canvas = page.getByTestId('bench-canvas').locator('canvas').first();
+  await canvas.scrollIntoViewIfNeeded();
   const box = (await canvas.boundingBox())!;
   const frames = layoutPieces(document.pieces);
   const view = fitView(frames, Math.floor(box.width), Math.floor(box.height));

@@ -8,10 +8,11 @@ test('a job created in the browser survives a server restart', async ({ page }) 
   await page.goto('/jobs');
   await page.getByRole('button', { name: 'New job' }).click();
   const name = `Quarry Lane mudroom ${Date.now()}`;
-  await page.getByLabel('Job name').fill(name);
-  await page.getByLabel('Customer').fill('Okonkwo family');
-  await page.getByLabel('Due date').fill('2027-03-15');
-  await page.getByRole('button', { name: 'Create job' }).click();
+  const form = page.getByRole('form', { name: 'New job' });
+  await form.getByLabel('Job name').fill(name);
+  await form.getByLabel('Customer').fill('Okonkwo family');
+  await form.getByLabel('Due date').fill('2027-03-15');
+  await form.getByRole('button', { name: 'Create job' }).click();
   await expect(page.getByRole('heading', { level: 1, name })).toBeVisible();
   await shot(page, 'job-created');
 

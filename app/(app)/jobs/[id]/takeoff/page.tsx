@@ -4,7 +4,7 @@ import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
 import { getShopSettings } from '@/db/queries/shops';
-import { getTakeoff } from '@/db/queries/takeoff';
+import { getTakeoff, takeoffPlans } from '@/db/queries/takeoff';
 import { CancelPlanButton } from '@/components/stock/cancel-plan-button';
 import { ReleasePlanButton } from '@/components/stock/release-plan-button';
 import { TakeoffTable } from '@/components/takeoff/takeoff-table';
@@ -19,12 +19,17 @@ import { formatLength } from '@/lib/units/format-length';
 
 export const metadata: Metadata = { title: 'Takeoff' };
 
-export default async function TakeoffPage({ params }: { params: Promise<{ id: string }> }) {
+export default async function TakeoffPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ plan?: string }> }) {
   const user = await requirePageUser('prices:read');
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
+  const chosen = z.uuid().safeParse((await searchParams).plan);
   const db = await getDb();
-  const [takeoff, settings] = await Promise.all([getTakeoff(db, user.shopId, id.data), getShopSettings(db, user.shopId)]);
+  const [takeoff, settings, choices] = await Promise.all([
+    getTakeoff(db, user.shopId, id.data, chosen.success ? chosen.data : undefined),
+    getShopSettings(db, user.shopId),
+    takeoffPlans(db, user.shopId, id.data),
+  ]);
   if (!settings) notFound();
   if (!takeoff) {
     return (
@@ -41,13 +46,28 @@ export default async function TakeoffPage({ params }: { params: Promise<{ id: st
 
   return (
     <div>
+      {choices.length > 1 && (
+        <nav aria-label="Plans of this job" className="mb-4 flex flex-wrap items-center gap-2 text-sm">
+          <span className="text-graphite-mute">Plans:</span>
+          {choices.map((c) => (
+            <Link
+              key={c.id}
+              href={`?plan=${c.id}`}
+              aria-current={c.id === takeoff.plan.id ? 'page' : undefined}
+              className={`rounded-full border px-3 py-1 no-underline ${c.id === takeoff.plan.id ? 'border-graphite bg-graphite text-paper' : 'border-paper-edge bg-white text-graphite-soft hover:bg-paper-deep'}`}
+            >
+              {c.name} · {c.status}
+            </Link>
+          ))}
+        </nav>
+      )}
       <div className="mb-5 flex flex-wrap items-start justify-between gap-4">
         <div>
           <h2 className="flex items-center gap-2">
             Takeoff for “{takeoff.plan.name}” <StatusBadge tone={takeoff.plan.status === 'draft' ? 'neutral' : 'accent'}>{takeoff.plan.status}</StatusBadge>
           </h2>
           <p className="mt-1 max-w-2xl text-sm text-graphite-mute">
-            From the job’s latest plan: the stock it lays parts on, priced at cost. The waste allowance ({takeoff.wastePercent} %, shop settings) is what to have ready:
+            From the job’s latest plan (or the one picked above): the stock it lays parts on, priced at cost. The waste allowance ({takeoff.wastePercent} %, shop settings) is what to have ready:
             pieces ÷ (1 − waste), rounded up.
           </p>
         </div>

@@ -8,6 +8,7 @@ import { withoutPrices } from '@/db/queries/plan-drafts';
 import { getShopSettings } from '@/db/queries/shops';
 import { LayoutBench } from '@/components/layout-bench/layout-bench';
 import { PlanSummary } from '@/components/nesting/plan-summary';
+import { ReleasePlanButton } from '@/components/stock/release-plan-button';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { requirePageUser } from '@/lib/auth/session';
 import { can } from '@/lib/auth/permissions';
@@ -32,6 +33,11 @@ export default async function PlanPage({ params: raw }: { params: Promise<{ id: 
         <Link href={`/jobs/${plan.jobId}/plan`} className="text-sm text-graphite-mute">← Plans</Link>
         <h2 className="flex items-center gap-2">{plan.name} <StatusBadge tone={plan.status === 'draft' ? 'neutral' : 'accent'}>{plan.status}</StatusBadge></h2>
         {plan.status !== 'draft' && <Link href={`/plans/${plan.id}/saw-order`} className="btn-quiet ml-auto">Saw order</Link>}
+        {plan.status === 'draft' && can(user.role, 'plans:release') && (
+          <div className="ml-auto">
+            <ReleasePlanButton planId={plan.id} />
+          </div>
+        )}
       </div>
       {plan.status === 'draft' && mayEdit && <p className="text-sm text-graphite-mute">A draft: change the layout below, then save it. Once released the layout is fixed.</p>}
       <PlanSummary plan={showPrices ? plan.document : withoutPrices(plan.document)} units={shop.units} currency={shop.currency} showPrices={showPrices} />
