@@ -1,15 +1,13 @@
 import { date, index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { jobStatusEnum } from './enums';
-import { shops } from './shops';
+import { shopIdColumn } from './columns';
 import { users } from './users';
 
 export const jobs = pgTable(
   'jobs',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     name: text('name').notNull(),
     customer: text('customer').notNull().default(''),
     status: jobStatusEnum('status').notNull().default('quoting'),

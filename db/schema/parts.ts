@@ -2,15 +2,13 @@ import { check, doublePrecision, index, integer, jsonb, pgTable, text, timestamp
 import { sql } from 'drizzle-orm';
 import { grainRuleEnum } from './enums';
 import { jobs } from './jobs';
-import { shops } from './shops';
+import { shopIdColumn } from './columns';
 
 export const drawerSchedules = pgTable(
   'drawer_schedules',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     jobId: uuid('job_id')
       .notNull()
       .references(() => jobs.id, { onDelete: 'cascade' }),
@@ -27,9 +25,7 @@ export const parts = pgTable(
   'parts',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     jobId: uuid('job_id')
       .notNull()
       .references(() => jobs.id, { onDelete: 'cascade' }),
@@ -61,9 +57,7 @@ export const setupCards = pgTable(
   'setup_cards',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     joint: text('joint').notNull(),
     stockThicknessMm: doublePrecision('stock_thickness_mm').notNull(),
     fields: jsonb('fields').$type<Record<string, number | string>>().notNull(),

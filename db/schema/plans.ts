@@ -1,7 +1,7 @@
 import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { planStatusEnum } from './enums';
 import { jobs } from './jobs';
-import { shops } from './shops';
+import { shopIdColumn } from './columns';
 import { users } from './users';
 
 /** A nesting result for a job. The full plan document is kept with its schema version; pieces and steps are
@@ -10,9 +10,7 @@ export const plans = pgTable(
   'plans',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     jobId: uuid('job_id')
       .notNull()
       .references(() => jobs.id, { onDelete: 'cascade' }),
@@ -40,9 +38,7 @@ export const planPieces = pgTable(
   'plan_pieces',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     planId: uuid('plan_id')
       .notNull()
       .references(() => plans.id, { onDelete: 'cascade' }),
@@ -62,9 +58,7 @@ export const placements = pgTable(
   'placements',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     planPieceId: uuid('plan_piece_id')
       .notNull()
       .references(() => planPieces.id, { onDelete: 'cascade' }),
@@ -86,9 +80,7 @@ export const sawSteps = pgTable(
   'saw_steps',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     planId: uuid('plan_id')
       .notNull()
       .references(() => plans.id, { onDelete: 'cascade' }),
@@ -104,9 +96,7 @@ export const auditEvents = pgTable(
   'audit_events',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     userId: uuid('user_id').references(() => users.id, { onDelete: 'set null' }),
     action: text('action').notNull(),
     entity: text('entity').notNull(),

@@ -1,7 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { boolean, check, doublePrecision, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { movementKindEnum, offcutStatusEnum, stockGrainEnum, stockKindEnum } from './enums';
-import { shops } from './shops';
+import { shopIdColumn } from './columns';
 import { users } from './users';
 
 /** Sheets and boards on the rack. Counts are guarded by the database, not only by code. */
@@ -9,9 +9,7 @@ export const stockItems = pgTable(
   'stock_items',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     kind: stockKindEnum('kind').notNull(),
     /** Sheet material ("Baltic birch") or board species ("White oak"). */
     material: text('material').notNull(),
@@ -47,9 +45,7 @@ export const offcuts = pgTable(
   'offcuts',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     material: text('material').notNull(),
     thicknessMm: doublePrecision('thickness_mm').notNull(),
     lengthMm: doublePrecision('length_mm').notNull(),
@@ -74,9 +70,7 @@ export const stockMovements = pgTable(
   'stock_movements',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     kind: movementKindEnum('kind').notNull(),
     stockItemId: uuid('stock_item_id').references(() => stockItems.id, { onDelete: 'cascade' }),
     offcutId: uuid('offcut_id').references(() => offcuts.id, { onDelete: 'cascade' }),

@@ -1,15 +1,13 @@
 import { sql } from 'drizzle-orm';
 import { boolean, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { roleEnum } from './enums';
-import { shops } from './shops';
+import { shopIdColumn } from './columns';
 
 export const users = pgTable(
   'users',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    shopId: uuid('shop_id')
-      .notNull()
-      .references(() => shops.id, { onDelete: 'cascade' }),
+    shopId: shopIdColumn(),
     /** Stored lower-case; unique across all shops so sign-in needs no shop picker. */
     email: text('email').notNull(),
     name: text('name').notNull(),
