@@ -43,8 +43,8 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
     if (!parsed.success) return null;
     const schedule = drawerScheduleSchema.safeParse(toScheduleInput(parsed.data));
     if (!schedule.success) return null;
-    return { schedule: schedule.data, sized: sizeDrawerSchedule(schedule.data) };
-  }, [schema, values]);
+    return { schedule: schedule.data, sized: sizeDrawerSchedule(schedule.data, { lengthText: (mm) => formatLength(mm, units) }) };
+  }, [schema, values, units]);
   const liveErrors = new Map<string, string>();
   if (live && !live.sized.ok) for (const e of live.sized.errors) if (!liveErrors.has(fieldOfPath(e.path))) liveErrors.set(fieldOfPath(e.path), e.message);
 

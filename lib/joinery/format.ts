@@ -1,4 +1,23 @@
 import type { Mm } from '@/lib/units/length';
 
-/** Lengths inside machining notes and messages; the UI formats the structured numbers in the shop's unit. */
-export const mmText = (mm: Mm): string => `${Math.round(mm * 10) / 10} mm`;
+export type LengthText = (mm: Mm) => string;
+
+const millimetres: LengthText = (mm) => `${Math.round(mm * 10) / 10} mm`;
+let current: LengthText = millimetres;
+
+/**
+ * Runs `body` with lengths in notes and messages written by `lengthText` (the shop's unit, from the caller).
+ * Sizing is synchronous, so the writer cannot leak into another call.
+ */
+export function withLengthText<T>(lengthText: LengthText | undefined, body: () => T): T {
+  const previous = current;
+  current = lengthText ?? millimetres;
+  try {
+    return body();
+  } finally {
+    current = previous;
+  }
+}
+
+/** Lengths inside machining notes and messages; plain mm unless the caller of the sizing named the shop's unit. */
+export const mmText = (mm: Mm): string => current(mm);

@@ -1,3 +1,4 @@
+import { withLengthText, type LengthText } from '@/lib/joinery/format';
 import type { Mm } from '@/lib/units/length';
 import { drawerScheduleSchema, type DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import { boxFromOpening } from '@/lib/joinery/box-from-opening';
@@ -15,7 +16,15 @@ export type SizeDrawerScheduleResult =
  * Turns a drawer schedule into every part of its boxes, sized exactly, or into one error per field that makes the
  * box impossible. Input is untrusted: it is parsed here. Rules: lib/joinery/RULES.md.
  */
-export function sizeDrawerSchedule(input: unknown): SizeDrawerScheduleResult {
+/**
+ * Every part of a drawer schedule, or one error per field that makes the box impossible. `lengthText` writes the
+ * lengths inside notes and messages (default mm); the parts' numbers are always exact mm.
+ */
+export function sizeDrawerSchedule(input: unknown, { lengthText }: { lengthText?: LengthText } = {}): SizeDrawerScheduleResult {
+  return withLengthText(lengthText, () => sizeInput(input));
+}
+
+function sizeInput(input: unknown): SizeDrawerScheduleResult {
   const parsed = drawerScheduleSchema.safeParse(input);
   if (!parsed.success) {
     return {

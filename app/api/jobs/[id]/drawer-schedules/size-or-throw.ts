@@ -1,11 +1,18 @@
+import type { Db } from '@/db/open';
+import { getShopSettings } from '@/db/queries/shops';
 import { HttpError } from '@/lib/api/errors';
+import { formatLength } from '@/lib/units/format-length';
 import { sizeDrawerSchedule } from '@/lib/joinery';
 import type { DrawerPart } from '@/lib/joinery/types';
 import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 
-/** The schedule's parts, or 422 with one message per field that makes the box impossible. */
-export function sizeOrThrow(schedule: DrawerSchedule): DrawerPart[] {
-  const sized = sizeDrawerSchedule(schedule);
+/**
+ * The schedule's parts (machining notes in the shop's unit), or 422 with one message per field that makes the box
+ * impossible.
+ */
+export async function sizeOrThrow(db: Db, shopId: string, schedule: DrawerSchedule): Promise<DrawerPart[]> {
+  const shop = await getShopSettings(db, shopId);
+  const sized = sizeDrawerSchedule(schedule, { lengthText: shop ? (mm) => formatLength(mm, shop.units) : undefined });
   if (sized.ok) return sized.parts;
   const fields: Record<string, string[]> = {};
   for (const e of sized.errors) (fields[e.path || '_'] ??= []).push(e.message);

@@ -1,0 +1,31 @@
+import { describe, expect, test } from 'vitest';
+import { formatLength } from '@/lib/units/format-length';
+import { inches } from '@/lib/units/length';
+import { mmText } from './format';
+import { sizeDrawerSchedule } from './size-drawer-schedule';
+
+const schedule = {
+  label: 'Desk drawers',
+  quantity: 2,
+  size: { from: 'opening' as const, widthMm: inches(15), heightMm: inches(5.5), depthMm: inches(21) },
+  thickness: { frontMm: inches(3 / 4), sideMm: inches(1 / 2) },
+};
+const imperial = { system: 'imperial' as const, precision: 16 as const, feet: false };
+
+describe('lengths in drawer notes', () => {
+  test("are written in the shop's unit when the caller names it (15″ opening − ½″ a side → 14″ box, common practice, no source)", () => {
+    const result = sizeDrawerSchedule(schedule, { lengthText: (mm) => formatLength(mm, imperial) });
+    if (!result.ok) throw new Error(JSON.stringify(result.errors));
+    const notes = [...result.notes, ...result.parts.flatMap((p) => p.machining)].join(' ');
+    expect(notes).toContain('Box 14″ wide = opening 15″');
+    expect(notes).not.toMatch(/\d mm\b/);
+  });
+
+  test('are plain millimetres by default, and the writer does not outlive the call', () => {
+    sizeDrawerSchedule(schedule, { lengthText: () => 'X' });
+    const result = sizeDrawerSchedule(schedule);
+    if (!result.ok) throw new Error(JSON.stringify(result.errors));
+    expect(result.notes.join(' ')).toContain('Box 355.6 mm wide = opening 381 mm');
+    expect(mmText(25.4)).toBe('25.4 mm');
+  });
+});
