@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
-import { optimize, validatePlan } from '@/lib/nesting';
+import { optimize, rebuildCuts, validatePlan } from '@/lib/nesting';
 import { part, request, sheet } from '@/lib/nesting/test-support';
-import { nestRequestSchema } from '@/shared/schemas/nesting';
+import { nestRequestSchema, planSchema } from '@/shared/schemas/nesting';
 import { docToPlan, planToDoc } from '@/lib/layout-bench/document';
 import { prepareRenest } from '@/lib/layout-bench/renest';
 
@@ -20,6 +20,17 @@ describe('re-nesting the unlocked parts around the locked ones', () => {
     const back = docToPlan(planToDoc(plan, req));
     expect(back.pieces.map((p) => p.placements.length)).toEqual(plan.pieces.map((p) => p.placements.length));
     expect(validatePlan(req, back)).toEqual([]);
+  });
+
+  test('locks travel with the plan: saved through rebuildCuts and the plan schema, and read back locked', async () => {
+    const plan = await optimize(req);
+    const doc = planToDoc(plan, req);
+    const lockedKeys = Object.keys(doc.placements).filter((_, i) => i % 4 === 0);
+    for (const k of lockedKeys) doc.placements[k] = { ...doc.placements[k], locked: true };
+    const saved = planSchema.parse(rebuildCuts(req, docToPlan(doc)));
+    expect(validatePlan(req, saved)).toEqual([]);
+    const reread = planToDoc(saved, req);
+    expect(Object.keys(reread.placements).filter((k) => reread.placements[k].locked).sort()).toEqual([...lockedKeys].sort());
   });
 
   test('locked parts stay exactly where they were, every part is placed or reported once, and the plan is valid', async () => {

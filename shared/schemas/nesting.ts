@@ -118,6 +118,8 @@ export const placementSchema = z.object({
   /** Extent along y. */
   h: positiveMm,
   rotated: z.boolean(),
+  /** Pinned on the layout bench: a re-nest leaves it where it is. Optional, so earlier version-1 plans still read. */
+  locked: z.boolean().optional(),
 });
 export type Placement = z.infer<typeof placementSchema>;
 
