@@ -11,10 +11,11 @@ export function Field({ id, label, error, children, className = '' }: { id: stri
   );
 }
 
-export function ActionError({ error }: { error: Error | null }) {
+/** A failed request's message, with its field messages listed (except those the form shows on its own fields). */
+export function ActionError({ error, except = [] }: { error: Error | null; except?: readonly string[] }) {
   if (!error) return null;
   const fields = 'fields' in error ? (error.fields as Record<string, string[]>) : {};
-  const details = Object.entries(fields).flatMap(([k, v]) => v.map((m) => (k === '_' ? m : `${k}: ${m}`)));
+  const details = Object.entries(fields).filter(([k]) => !except.includes(k)).flatMap(([k, v]) => v.map((m) => (k === '_' ? m : `${k}: ${m}`)));
   return (
     <div className="field-error" role="alert">
       {error.message}

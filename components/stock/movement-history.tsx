@@ -1,4 +1,5 @@
-import type { listMovements } from '@/db/queries/stock';
+import type { DetailChange, listMovements } from '@/db/queries/stock';
+import { describeDetailChanges } from './describe-detail-changes';
 
 type Movement = Awaited<ReturnType<typeof listMovements>>[number];
 
@@ -12,9 +13,13 @@ const KIND_LABELS: Record<Movement['kind'], string> = {
   adjusted: 'Count adjusted',
 };
 
-/** The stock ledger: every change of a count, who made it and when, newest first. */
-export function MovementHistory({ movements, timeZone = 'UTC' }: { movements: Movement[]; timeZone?: string }) {
+/**
+ * The stock ledger: every change of a count, who made it and when, newest first; with it the changes to a size's
+ * details (cost, location…), which move no stock and so change no count.
+ */
+export function MovementHistory({ movements, changes = [], money = null, timeZone = 'UTC' }: { movements: Movement[]; changes?: DetailChange[]; money?: ((cents: number) => string) | null; timeZone?: string }) {
   const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short', timeZone });
+  const rows: { at: Date; movement?: Movement; change?: DetailChange }[] = [...movements.map((m) => ({ at: m.createdAt, movement: m })), ...changes.map((c) => ({ at: c.createdAt, change: c }))].sort((a, b) => b.at.getTime() - a.at.getTime());
   return (
     <div className="card overflow-x-auto">
       <table className="data-table" aria-label="Stock history">
@@ -29,16 +34,29 @@ export function MovementHistory({ movements, timeZone = 'UTC' }: { movements: Mo
           </tr>
         </thead>
         <tbody>
-          {movements.map((m) => (
-            <tr key={m.id} data-testid="movement" data-kind={m.kind}>
-              <td className="whitespace-nowrap">{when.format(m.createdAt)}</td>
-              <td>{KIND_LABELS[m.kind]}</td>
-              <td>{m.item ?? '—'}</td>
-              <td className="num">{m.quantity > 0 ? `+${m.quantity}` : m.quantity}</td>
-              <td>{m.who ?? 'Kerfwise'}</td>
-              <td className="text-graphite-soft">{m.reason}</td>
-            </tr>
-          ))}
+          {rows.map(({ movement: m, change: c }) =>
+            m ? (
+              <tr key={m.id} data-testid="movement" data-kind={m.kind}>
+                <td className="whitespace-nowrap">{when.format(m.createdAt)}</td>
+                <td>{KIND_LABELS[m.kind]}</td>
+                <td>{m.item ?? '—'}</td>
+                <td className="num">{m.quantity > 0 ? `+${m.quantity}` : m.quantity}</td>
+                <td>{m.who ?? 'Kerfwise'}</td>
+                <td className="text-graphite-soft">{m.reason}</td>
+              </tr>
+            ) : (
+              c && (
+                <tr key={c.id} data-testid="detail-change">
+                  <td className="whitespace-nowrap">{when.format(c.createdAt)}</td>
+                  <td>Details changed</td>
+                  <td>{c.item ?? '—'}</td>
+                  <td className="num text-graphite-mute">—</td>
+                  <td>{c.who ?? 'Kerfwise'}</td>
+                  <td className="text-graphite-soft">{describeDetailChanges(c.changes, money)}</td>
+                </tr>
+              )
+            ),
+          )}
         </tbody>
       </table>
     </div>

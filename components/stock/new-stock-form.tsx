@@ -4,30 +4,20 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useMemo } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { parseMoneyCents } from '@/lib/stock/stock-csv';
 import { stockItemSchema } from '@/shared/schemas/stock';
 import { lengthInput, shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
 import { ActionError, Field } from './field';
+import { moneyInput, wholeInput } from './form-fields';
 import { useStockAction } from './use-stock-action';
-
-const money = z.string().transform((v, ctx) => {
-  const cents = v.trim() ? parseMoneyCents(v) : 0;
-  if (cents === null) {
-    ctx.addIssue({ code: 'custom', message: 'Enter an amount such as 94.00.' });
-    return z.NEVER;
-  }
-  return cents;
-});
-const whole = (min: number) => z.coerce.number<string | number>({ error: 'Enter a whole number.' }).int('Enter a whole number.').min(min);
 
 const formSchema = (unit: 'in' | 'mm') =>
   stockItemSchema.extend({
     thicknessMm: lengthInput(unit),
     lengthMm: lengthInput(unit),
     widthMm: lengthInput(unit),
-    onHand: whole(0),
-    lowStockAt: whole(0),
-    costCents: money,
+    onHand: wholeInput(0),
+    lowStockAt: wholeInput(0),
+    costCents: moneyInput,
   });
 
 /** A new sheet or board size on the rack, or a size the shop can buy (the catalogue the nesting engine buys from). */

@@ -5,23 +5,27 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { adjustStockSchema, receiveStockSchema } from '@/shared/schemas/stock';
+import { EditStockDialog, type EditableStock } from './edit-stock-dialog';
 import { ActionError, Field } from './field';
 import { useStockAction } from './use-stock-action';
 
 const receiveForm = receiveStockSchema.extend({ quantity: z.coerce.number<string | number>().pipe(receiveStockSchema.shape.quantity) });
 const adjustForm = adjustStockSchema.extend({ count: z.coerce.number<string | number>().pipe(adjustStockSchema.shape.count) });
 
-/** Receive a delivery or set a counted figure for one size, inline in its row. Owners only. */
-export function StockRowActions({ id, label, onHand }: { id: string; label: string; onHand: number }) {
-  const [open, setOpen] = useState<'receive' | 'adjust' | null>(null);
+/** Receive a delivery, set a counted figure or change a size's details, from its row. Owners only. */
+export function StockRowActions({ item, label, onHand, currency }: { item: EditableStock; label: string; onHand: number; currency: string }) {
+  const [open, setOpen] = useState<'receive' | 'adjust' | 'edit' | null>(null);
+  const { id } = item;
   return (
     <div className="flex flex-col items-end gap-2">
       <div className="flex flex-col gap-1">
         <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setOpen(open === 'receive' ? null : 'receive')} aria-label={`Receive ${label}`}>Receive</button>
         <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setOpen(open === 'adjust' ? null : 'adjust')} aria-label={`Adjust count of ${label}`}>Adjust</button>
+        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setOpen('edit')} aria-label={`Edit ${label}`}>Edit</button>
       </div>
       {open === 'receive' && <ReceiveForm id={id} label={label} onDone={() => setOpen(null)} />}
       {open === 'adjust' && <AdjustForm id={id} label={label} onHand={onHand} onDone={() => setOpen(null)} />}
+      {open === 'edit' && <EditStockDialog item={item} label={label} currency={currency} onDone={() => setOpen(null)} />}
     </div>
   );
 }

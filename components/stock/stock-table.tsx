@@ -1,10 +1,27 @@
 import Link from 'next/link';
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { StockItemRow } from '@/db/queries/stock';
+import { surfacingSchema } from '@/shared/schemas/stock';
+import type { EditableStock } from './edit-stock-dialog';
 import { StockRowActions } from './stock-row-actions';
 
+/** Only the details the edit dialog shows reach the browser. */
+const editable = (s: StockItemRow): EditableStock => ({
+  id: s.id,
+  kind: s.kind,
+  material: s.material,
+  nominalThickness: s.nominalThickness,
+  surfacing: surfacingSchema.catch('').parse(s.surfacing),
+  grade: s.grade,
+  costCents: s.costCents,
+  supplier: s.supplier,
+  location: s.location,
+  lowStockAt: s.lowStockAt,
+  buyable: s.buyable,
+});
+
 /** Sheets and boards with free, reserved and low-stock figures; prices and value only for those who may see them. */
-export function StockTable({ items, len, money, canWrite }: { items: StockItemRow[]; len: (mm: number) => string; money: ((cents: number) => string) | null; canWrite: boolean }) {
+export function StockTable({ items, len, money, currency, canWrite }: { items: StockItemRow[]; len: (mm: number) => string; money: ((cents: number) => string) | null; currency: string; canWrite: boolean }) {
   return (
     <div className="card overflow-x-auto">
       <table className="data-table [&_td]:px-2 [&_th]:px-2" aria-label="Sheets and boards">
@@ -48,7 +65,7 @@ export function StockTable({ items, len, money, canWrite }: { items: StockItemRo
                 <td>{s.location}</td>
                 {canWrite && (
                   <td className="text-right">
-                    <StockRowActions id={s.id} label={label} onHand={s.onHand} />
+                    <StockRowActions item={editable(s)} label={label} onHand={s.onHand} currency={currency} />
                   </td>
                 )}
               </tr>

@@ -1,9 +1,8 @@
 import { and, asc, desc, eq, ilike, inArray, ne, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
-import { offcuts, plans, stockItems, stockMovements, users } from '../schema';
-import type { StockFilter, StockItemValues } from '@/shared/schemas/stock';
-import type { stockItemPatchSchema, recordOffcutSchema } from '@/shared/schemas/stock';
-import type { z } from 'zod';
+import { auditEvents, offcuts, plans, stockItems, stockMovements, users } from '../schema';
+import { STOCK_DETAIL_FIELDS, type recordOffcutSchema, type StockDetailField, type StockFilter, type StockItemPatch, type StockItemValues } from '@/shared/schemas/stock';
+import { z } from 'zod';
 import { isLowStock } from '@/lib/stock/low-stock';
 import { costEachCents } from './nest-request';
 import { recordAudit } from './audit';
@@ -65,11 +64,31 @@ export async function createStockItem(db: Db, shopId: string, userId: string, va
   });
 }
 
-export async function updateStockItem(db: Db, shopId: string, userId: string, id: string, patch: z.infer<typeof stockItemPatchSchema>) {
+/** One field's change as the audit log keeps it. */
+export type StockDetailChanges = Partial<Record<StockDetailField, { from: unknown; to: unknown }>>;
+
+/**
+ * Changes a size's details (never its counts or dimensions). Only fields whose value differs are written, and the
+ * audit log keeps each as from → to, so the history can say what changed; a patch that changes nothing writes nothing.
+ */
+export async function updateStockItem(db: Db, shopId: string, userId: string, id: string, patch: StockItemPatch) {
   return db.transaction(async (tx) => {
-    const [item] = await tx.update(stockItems).set(patch).where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id))).returning();
-    if (item) await recordAudit(tx, { shopId, userId, action: 'update', entity: 'stock-item', entityId: id, data: patch });
-    return item ?? null;
+    const [current] = await tx.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id))).for('update');
+    if (!current) return null;
+    const changes: StockDetailChanges = {};
+    for (const field of STOCK_DETAIL_FIELDS) {
+      const to = patch[field];
+      if (to !== undefined && to !== current[field]) changes[field] = { from: current[field], to };
+    }
+    const fields = Object.keys(changes) as StockDetailField[];
+    if (!fields.length) return current;
+    const [item] = await tx
+      .update(stockItems)
+      .set(Object.fromEntries(fields.map((f) => [f, changes[f]!.to])))
+      .where(eq(stockItems.id, id))
+      .returning();
+    await recordAudit(tx, { shopId, userId, action: 'update', entity: 'stock-item', entityId: id, data: { changes } });
+    return item;
   });
 }
 
@@ -168,6 +187,40 @@ export async function listMovements(db: Db, shopId: string, { stockItemId, offcu
     .orderBy(desc(stockMovements.createdAt), desc(stockMovements.id))
     .limit(limit);
 }
+
+const auditedChanges = z.object({ changes: z.record(z.string(), z.object({ from: z.unknown(), to: z.unknown() })) });
+
+/** An audit row's data as changes; rows written before from → to was kept hold only the new values. */
+function readDetailChanges(data: unknown): StockDetailChanges {
+  const kept = auditedChanges.safeParse(data);
+  const entries = kept.success
+    ? Object.entries(kept.data.changes)
+    : Object.entries(data && typeof data === 'object' ? data : {}).map(([field, to]) => [field, { from: undefined, to }] as const);
+  return Object.fromEntries(entries.filter(([field]) => (STOCK_DETAIL_FIELDS as readonly string[]).includes(field)));
+}
+
+/** Changes to sizes' details (no count moved), newest first, for the history beside the ledger. */
+export async function listDetailChanges(db: Db, shopId: string, { stockItemId, limit = 200 }: { stockItemId?: string; limit?: number } = {}) {
+  const where: SQL[] = [eq(auditEvents.shopId, shopId), eq(auditEvents.entity, 'stock-item'), eq(auditEvents.action, 'update')];
+  if (stockItemId) where.push(eq(auditEvents.entityId, stockItemId));
+  const rows = await db
+    .select({
+      id: auditEvents.id,
+      createdAt: auditEvents.createdAt,
+      stockItemId: auditEvents.entityId,
+      data: auditEvents.data,
+      who: users.name,
+      item: sql<string | null>`${stockItems.material} || ' ' || ${stockItems.nominalThickness}`,
+    })
+    .from(auditEvents)
+    .leftJoin(users, eq(users.id, auditEvents.userId))
+    .leftJoin(stockItems, and(eq(sql`${stockItems.id}::text`, auditEvents.entityId), eq(stockItems.shopId, shopId)))
+    .where(and(...where))
+    .orderBy(desc(auditEvents.createdAt), desc(auditEvents.id))
+    .limit(limit);
+  return rows.map(({ data, ...r }) => ({ ...r, changes: readDetailChanges(data) }));
+}
+export type DetailChange = Awaited<ReturnType<typeof listDetailChanges>>[number];
 
 /**
  * The ledger read back as counts: on hand = receipts + adjustments + consumption (+ scrapping), reserved =

@@ -38,8 +38,37 @@ export const stockItemSchema = z.object({
 export type StockItemInput = z.input<typeof stockItemSchema>;
 export type StockItemValues = z.infer<typeof stockItemSchema>;
 
-/** Details an owner may change later; counts change only through receive / adjust so the ledger stays whole. */
-export const stockItemPatchSchema = stockItemSchema.omit({ onHand: true, kind: true }).partial().strict();
+const fixed = (message: string) => z.never({ error: message }).optional();
+const sizeIsFixed = fixed('Length, width, thickness and grain define a stock size; add a new size for a different one.');
+const { shape } = stockItemSchema;
+
+/**
+ * Details an owner may change later: only the fields sent change (no defaults here, so a one-field change leaves the
+ * rest alone). Counts change only through receive / adjust so the ledger stays whole; the size itself (kind,
+ * length, width, thickness, grain) is what plans were nested on, so a different size is a new stock size.
+ */
+export const stockItemPatchSchema = z.strictObject({
+  material: shape.material.optional(),
+  nominalThickness: shape.nominalThickness.optional(),
+  surfacing: surfacingSchema.optional(),
+  grade: shape.grade.unwrap().optional(),
+  lowStockAt: shape.lowStockAt.unwrap().optional(),
+  /** Sheets: each. Boards: per board foot. */
+  costCents: cents.optional(),
+  supplier: shape.supplier.unwrap().optional(),
+  location: shape.location.unwrap().optional(),
+  buyable: z.boolean().optional(),
+  kind: fixed('A sheet stays a sheet and a board a board; add a new size instead.'),
+  onHand: fixed('Counts change by receiving or adjusting, so the history behind them stays whole.'),
+  thicknessMm: sizeIsFixed,
+  lengthMm: sizeIsFixed,
+  widthMm: sizeIsFixed,
+  grain: sizeIsFixed,
+});
+export type StockItemPatch = z.infer<typeof stockItemPatchSchema>;
+/** The fields a patch may change, in the order people read them. */
+export const STOCK_DETAIL_FIELDS = ['material', 'nominalThickness', 'surfacing', 'grade', 'costCents', 'supplier', 'location', 'lowStockAt', 'buyable'] as const;
+export type StockDetailField = (typeof STOCK_DETAIL_FIELDS)[number];
 
 export const receiveStockSchema = z.strictObject({
   quantity: count('Quantity').min(1, 'Receive at least one.').max(100_000),

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getDb } from '@/db/client';
 import { getShopSettings } from '@/db/queries/shops';
-import { listMovements, listOffcuts, listStock, stockValue } from '@/db/queries/stock';
+import { listDetailChanges, listMovements, listOffcuts, listStock, stockValue } from '@/db/queries/stock';
 import { MovementHistory } from '@/components/stock/movement-history';
 import { OffcutRack } from '@/components/stock/offcut-rack';
 import { StockFilters } from '@/components/stock/stock-filters';
@@ -35,12 +35,13 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
   const historyItem = typeof raw.item === 'string' && /^[0-9a-f-]{36}$/.test(raw.item) ? raw.item : undefined;
   const db = await getDb();
   const showPrices = can(user.role, 'prices:read');
-  const [settings, allItems, items, rack, movements, value] = await Promise.all([
+  const [settings, allItems, items, rack, movements, changes, value] = await Promise.all([
     getShopSettings(db, user.shopId),
     listStock(db, user.shopId),
     view === 'stock' ? listStock(db, user.shopId, filter) : [],
     view === 'rack' ? listOffcuts(db, user.shopId, filter) : [],
     view === 'history' ? listMovements(db, user.shopId, { stockItemId: historyItem }) : [],
+    view === 'history' ? listDetailChanges(db, user.shopId, { stockItemId: historyItem }) : [],
     showPrices ? stockValue(db, user.shopId) : null,
   ]);
   if (!settings) return null;
@@ -81,7 +82,7 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
         (items.length === 0 ? (
           <EmptyState title={allItems.length ? 'Nothing matches these filters.' : 'The rack is empty.'}>{allItems.length ? 'Clear a filter to see more.' : 'Add a stock size or import a CSV to start.'}</EmptyState>
         ) : (
-          <StockTable items={items} len={len} money={money} canWrite={can(user.role, 'stock:write')} />
+          <StockTable items={items} len={len} money={money} currency={settings.currency} canWrite={can(user.role, 'stock:write')} />
         ))}
       {view === 'rack' &&
         (rack.length === 0 ? (
@@ -94,7 +95,7 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
           History of one size. <Link href="/stock?view=history">Show every movement</Link>
         </p>
       )}
-      {view === 'history' && (movements.length === 0 ? <EmptyState title="No stock has moved yet." /> : <MovementHistory movements={movements} />)}
+      {view === 'history' && (movements.length + changes.length === 0 ? <EmptyState title="No stock has moved yet." /> : <MovementHistory movements={movements} changes={changes} money={money} />)}
     </>
   );
 }
