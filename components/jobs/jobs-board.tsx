@@ -41,6 +41,9 @@ const columns: ColumnDef<JobSummary>[] = [
   { id: 'updated', header: 'Changed', accessorKey: 'updatedAt', cell: ({ row }) => <span className="whitespace-nowrap text-graphite-mute">{row.original.updatedAt.slice(0, 10)}</span> },
 ];
 
+// One stable empty list while loading: a fresh `[]` each render makes the table recompute (and re-render) endlessly.
+const NO_JOBS: JobSummary[] = [];
+
 /** Jobs as a sortable, filterable table; search, filters and sort live in the URL so a view can be bookmarked. */
 export function JobsBoard({ canWrite }: { canWrite: boolean }) {
   const router = useRouter();
@@ -68,7 +71,7 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
   const customers = useMemo(() => [...new Set((jobs.data ?? []).map((j) => j.customer).filter(Boolean))].sort(), [jobs.data]);
 
   const table = useReactTable({
-    data: jobs.data ?? [],
+    data: jobs.data ?? NO_JOBS,
     columns,
     state: { sorting, columnFilters, globalFilter: search },
     globalFilterFn: matchesSearch,

@@ -6,6 +6,7 @@ test('a job created in the browser survives a server restart', async ({ page }) 
   test.setTimeout(120_000);
   await signIn(page, 'estimator');
   await page.goto('/jobs');
+  await expect(page.getByRole('table', { name: 'Jobs' })).toBeVisible();
   await page.getByRole('button', { name: 'New job' }).click();
   const name = `Quarry Lane mudroom ${Date.now()}`;
   const form = page.getByRole('form', { name: 'New job' });
