@@ -1,29 +1,21 @@
 import { eq } from 'drizzle-orm';
 import { NextRequest } from 'next/server';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { useDatabase } from '@/db/client';
+import { describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
 import { auditEvents, users } from '@/db/schema';
 import * as jobsRoute from '@/app/api/jobs/route';
 import * as jobRoute from '@/app/api/jobs/[id]/route';
 import * as teamMemberRoute from '@/app/api/team/[id]/route';
 import * as settingsRoute from '@/app/api/settings/route';
-import { createTestDatabase } from '../support/test-db';
-import { request, TEST_SECRET, twoShops } from '../support/fixtures';
-
-process.env.NEXTAUTH_SECRET = TEST_SECRET;
+import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
+import { request } from '../support/fixtures';
 
 let handle: DbHandle;
-let fx: Awaited<ReturnType<typeof twoShops>>;
+let fx: TwoShops;
 const noParams = { params: Promise.resolve({}) };
 const withId = (id: string) => ({ params: Promise.resolve({ id }) });
 
-beforeAll(async () => {
-  handle = await createTestDatabase();
-  useDatabase(handle);
-  fx = await twoShops(handle.db);
-});
-afterAll(() => handle.close());
+useTwoShopDatabase((app) => ({ handle, fx } = app));
 
 describe('every shop is a tenant', () => {
   test("a shop's job list never shows another shop's jobs", async () => {

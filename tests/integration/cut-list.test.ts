@@ -1,13 +1,12 @@
 import Papa from 'papaparse';
 import type { NextRequest } from 'next/server';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { useDatabase } from '@/db/client';
+import { beforeAll, describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
 import { parts, stockItems } from '@/db/schema';
 import { eq } from 'drizzle-orm';
 import { inches } from '@/lib/units/length';
-import { createTestDatabase } from '../support/test-db';
-import { request, TEST_SECRET, twoShops, type TestUser } from '../support/fixtures';
+import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
+import { request, type TestUser } from '../support/fixtures';
 import * as partsRoute from '@/app/api/jobs/[id]/parts/route';
 import * as partRoute from '@/app/api/jobs/[id]/parts/[partId]/route';
 import * as previewRoute from '@/app/api/jobs/[id]/cut-list/preview/route';
@@ -15,20 +14,15 @@ import * as importRoute from '@/app/api/jobs/[id]/cut-list/import/route';
 import * as exportRoute from '@/app/api/jobs/[id]/cut-list/export/route';
 import * as materialsRoute from '@/app/api/materials/route';
 
-process.env.NEXTAUTH_SECRET = TEST_SECRET;
-
 let handle: DbHandle;
-let fx: Awaited<ReturnType<typeof twoShops>>;
+let fx: TwoShops;
+useTwoShopDatabase((app) => ({ handle, fx } = app));
 beforeAll(async () => {
-  handle = await createTestDatabase();
-  useDatabase(handle);
-  fx = await twoShops(handle.db);
   await handle.db.insert(stockItems).values([
     { shopId: fx.mine.id, kind: 'sheet', material: 'MDF', nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand: 3 },
     { shopId: fx.theirs.id, kind: 'sheet', material: 'Secret walnut ply', nominalThickness: '3/4"', thicknessMm: 19, lengthMm: 2440, widthMm: 1220 },
   ]);
 });
-afterAll(() => handle.close());
 
 type Handler = (req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }) => Promise<Response>;
 async function call(handler: Handler, url: string, params: Record<string, string>, opts: { method?: string; body?: unknown; user?: TestUser } = {}) {

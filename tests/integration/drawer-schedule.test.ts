@@ -1,12 +1,11 @@
 import { eq } from 'drizzle-orm';
 import type { NextRequest } from 'next/server';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { useDatabase } from '@/db/client';
+import { describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
 import { drawerSchedules, parts } from '@/db/schema';
 import { inches } from '@/lib/units/length';
-import { createTestDatabase } from '../support/test-db';
-import { request, TEST_SECRET, twoShops, type TestUser } from '../support/fixtures';
+import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
+import { request, type TestUser } from '../support/fixtures';
 import * as schedulesRoute from '@/app/api/jobs/[id]/drawer-schedules/route';
 import * as scheduleRoute from '@/app/api/jobs/[id]/drawer-schedules/[scheduleId]/route';
 import * as partsRoute from '@/app/api/jobs/[id]/parts/route';
@@ -14,16 +13,9 @@ import * as partRoute from '@/app/api/jobs/[id]/parts/[partId]/route';
 import * as cardsRoute from '@/app/api/setup-cards/route';
 import * as cardRoute from '@/app/api/setup-cards/[id]/route';
 
-process.env.NEXTAUTH_SECRET = TEST_SECRET;
-
 let handle: DbHandle;
-let fx: Awaited<ReturnType<typeof twoShops>>;
-beforeAll(async () => {
-  handle = await createTestDatabase();
-  useDatabase(handle);
-  fx = await twoShops(handle.db);
-});
-afterAll(() => handle.close());
+let fx: TwoShops;
+useTwoShopDatabase((app) => ({ handle, fx } = app));
 
 type Handler = (req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }) => Promise<Response>;
 async function call(handler: Handler, params: Record<string, string>, opts: { method?: string; body?: unknown; user?: TestUser } = {}) {

@@ -1,7 +1,6 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import type { Db, DbHandle } from '@/db/open';
-import { useDatabase } from '@/db/client';
 import { offcuts, placements, planPieces, plans, stockItems, stockMovements } from '@/db/schema';
 import { cancelPlan, finishPlan, PlanStateError, releasePlan, StockShortage } from '@/db/queries/plan-lifecycle';
 import { stockRef } from '@/db/queries/nest-request';
@@ -9,23 +8,15 @@ import { ledgerMismatches, listOffcuts, listStock } from '@/db/queries/stock';
 import { optimize } from '@/lib/nesting';
 import { isKeepableOffcut } from '@/lib/stock/offcut-rules';
 import { nestRequestSchema, type NestRequestInput } from '@/shared/schemas/nesting';
-import { createTestDatabase } from '../support/test-db';
-import { request as httpRequest, TEST_SECRET, twoShops } from '../support/fixtures';
+import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
+import { request as httpRequest } from '../support/fixtures';
 import { POST as releaseRoute } from '@/app/api/plans/[id]/release/route';
 import { POST as doneRoute } from '@/app/api/plans/[id]/done/route';
 
-process.env.NEXTAUTH_SECRET = TEST_SECRET;
-
 let handle: DbHandle;
 let db: Db;
-let fx: Awaited<ReturnType<typeof twoShops>>;
-beforeAll(async () => {
-  handle = await createTestDatabase();
-  useDatabase(handle);
-  db = handle.db;
-  fx = await twoShops(db);
-});
-afterAll(() => handle.close());
+let fx: TwoShops;
+useTwoShopDatabase((app) => ({ handle, db, fx } = app));
 
 /** A draft plan nested by the real engine (no time budget: the same plan every run), stored as the Nest screen would. */
 async function draftPlan(request: NestRequestInput, name = 'Test plan') {

@@ -1,27 +1,19 @@
 import { PDFDocument } from 'pdf-lib';
 import { and, eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { useDatabase } from '@/db/client';
+import { describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
 import { auditEvents, plans, sawSteps } from '@/db/schema';
 import * as steps from '@/app/api/plans/[id]/steps/route';
 import * as pdf from '@/app/api/plans/[id]/saw-order-pdf/route';
 import * as tagsPdf from '@/app/api/plans/[id]/tags-pdf/route';
-import { createTestDatabase } from '../support/test-db';
-import { request, TEST_SECRET, twoShops, type TestUser } from '../support/fixtures';
+import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
+import { request, type TestUser } from '../support/fixtures';
 import { releasedPlan } from './authz/saw-order';
 
-process.env.NEXTAUTH_SECRET = TEST_SECRET;
-
 let handle: DbHandle;
-let fx: Awaited<ReturnType<typeof twoShops>>;
+let fx: TwoShops;
 
-beforeAll(async () => {
-  handle = await createTestDatabase();
-  useDatabase(handle);
-  fx = await twoShops(handle.db);
-});
-afterAll(() => handle.close());
+useTwoShopDatabase((app) => ({ handle, fx } = app));
 
 type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 async function call(handler: Handler, planId: string, user: TestUser, method: string, body?: unknown) {

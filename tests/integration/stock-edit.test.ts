@@ -1,26 +1,17 @@
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import type { Db, DbHandle } from '@/db/open';
-import { useDatabase } from '@/db/client';
 import { auditEvents, stockItems, stockMovements } from '@/db/schema';
 import { createStockItem, ledgerMismatches, listDetailChanges } from '@/db/queries/stock';
 import { stockItemSchema } from '@/shared/schemas/stock';
-import { createTestDatabase } from '../support/test-db';
-import { request, TEST_SECRET, twoShops, type TestUser } from '../support/fixtures';
+import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
+import { request, type TestUser } from '../support/fixtures';
 import { PATCH } from '@/app/api/stock/[id]/route';
-
-process.env.NEXTAUTH_SECRET = TEST_SECRET;
 
 let handle: DbHandle;
 let db: Db;
-let fx: Awaited<ReturnType<typeof twoShops>>;
-beforeAll(async () => {
-  handle = await createTestDatabase();
-  useDatabase(handle);
-  db = handle.db;
-  fx = await twoShops(db);
-});
-afterAll(() => handle.close());
+let fx: TwoShops;
+useTwoShopDatabase((app) => ({ handle, db, fx } = app));
 
 const newBoard = () =>
   createStockItem(
