@@ -19,3 +19,9 @@ export const jobs = pgTable(
   },
   (t) => [index('jobs_shop_idx').on(t.shopId)],
 );
+
+/** The column tying a row to its job; the row goes when the job is deleted. */
+export const jobIdColumn = () =>
+  uuid('job_id')
+    .notNull()
+    .references(() => jobs.id, { onDelete: 'cascade' });

@@ -1,7 +1,7 @@
 import { check, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { sql } from 'drizzle-orm';
 import { grainRuleEnum } from './enums';
-import { jobs } from './jobs';
+import { jobIdColumn } from './jobs';
 import { shopIdColumn } from './columns';
 
 export const drawerSchedules = pgTable(
@@ -9,9 +9,7 @@ export const drawerSchedules = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     shopId: shopIdColumn(),
-    jobId: uuid('job_id')
-      .notNull()
-      .references(() => jobs.id, { onDelete: 'cascade' }),
+    jobId: jobIdColumn(),
     label: text('label').notNull(),
     /** The schedule's full input, validated by shared/schemas/drawer-schedule.ts. */
     input: jsonb('input').notNull(),
@@ -26,9 +24,7 @@ export const parts = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     shopId: shopIdColumn(),
-    jobId: uuid('job_id')
-      .notNull()
-      .references(() => jobs.id, { onDelete: 'cascade' }),
+    jobId: jobIdColumn(),
     label: text('label').notNull(),
     quantity: integer('quantity').notNull(),
     /** Along the grain, joint allowance included. */

@@ -1,6 +1,6 @@
 import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { planStatusEnum } from './enums';
-import { jobs } from './jobs';
+import { jobIdColumn } from './jobs';
 import { shopIdColumn } from './columns';
 import { users } from './users';
 
@@ -11,9 +11,7 @@ export const plans = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     shopId: shopIdColumn(),
-    jobId: uuid('job_id')
-      .notNull()
-      .references(() => jobs.id, { onDelete: 'cascade' }),
+    jobId: jobIdColumn(),
     name: text('name').notNull().default('Plan'),
     status: planStatusEnum('status').notNull().default('draft'),
     version: integer('version').notNull().default(1),

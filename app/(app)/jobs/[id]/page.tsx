@@ -1,19 +1,11 @@
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
-import { z } from 'zod';
-import { getDb } from '@/db/client';
-import { getShopSettings } from '@/db/queries/shops';
 import { CutListSection } from '@/components/cut-list/cut-list-section';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { jobSection } from './job-section';
 
 export const metadata: Metadata = { title: 'Cut list' };
 
 export default async function JobPage({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser('jobs:read');
-  const id = z.uuid().safeParse((await params).id);
-  if (!id.success) notFound();
-  const settings = await getShopSettings(await getDb(), user.shopId);
-  if (!settings) notFound();
-  return <CutListSection jobId={id.data} units={settings.units} canWrite={can(user.role, 'cutlist:write')} />;
+  const { user, jobId, shop } = await jobSection(params, 'jobs:read');
+  return <CutListSection jobId={jobId} units={shop.units} canWrite={can(user.role, 'cutlist:write')} />;
 }

@@ -1,28 +1,20 @@
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
-import { z } from 'zod';
-import { getDb } from '@/db/client';
-import { getShopSettings } from '@/db/queries/shops';
 import { NestPanel } from '@/components/nesting/nest-panel';
 import { PlanList } from '@/components/nesting/plan-list';
-import { requirePageUser } from '@/lib/auth/session';
 import { can } from '@/lib/auth/permissions';
+import { jobSection } from '../job-section';
 
 export const metadata: Metadata = { title: 'Plan' };
 
 /** The job's Plan section: its plans, and (for those who may) a new Nest. */
 export default async function JobPlanPage({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser('plans:read');
-  const id = z.uuid().safeParse((await params).id);
-  if (!id.success) notFound();
-  const shop = await getShopSettings(await getDb(), user.shopId);
-  if (!shop) notFound();
+  const { user, jobId, shop } = await jobSection(params, 'plans:read');
   const showPrices = can(user.role, 'prices:read');
   return (
     <div className="space-y-8">
       <section aria-labelledby="plans">
         <h2 id="plans" className="mb-3">Plans</h2>
-        <PlanList jobId={id.data} currency={shop.currency} showPrices={showPrices} />
+        <PlanList jobId={jobId} currency={shop.currency} showPrices={showPrices} />
       </section>
       {can(user.role, 'nest:run') && (
         <section aria-labelledby="nest">
@@ -31,7 +23,7 @@ export default async function JobPlanPage({ params }: { params: Promise<{ id: st
             Lays the cut list onto the chosen stock with the saw kerf, edge trim and grain respected, using offcuts first when asked. It runs in the
             background: keep working, or stop it and keep the best plan found so far.
           </p>
-          <NestPanel jobId={id.data} shop={shop} showPrices={showPrices} />
+          <NestPanel jobId={jobId} shop={shop} showPrices={showPrices} />
         </section>
       )}
     </div>
