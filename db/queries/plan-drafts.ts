@@ -12,12 +12,6 @@ export function judgePlan(request: NestRequest, plan: unknown): { ok: true; plan
   return violations.length ? { ok: false, violations } : { ok: true, plan: planSchema.parse(plan) };
 }
 
-const PRICE_KEYS = new Set(['cost', 'costEach', 'costCents']);
-
-/** A copy without any price (for people who may not see prices: cutters). */
-export function withoutPrices<T>(value: T): T {
-  return JSON.parse(JSON.stringify(value, (k, v) => (PRICE_KEYS.has(k) ? undefined : v)));
-}
 
 /** What a list of a job's plans shows. */
 export interface JobPlanSummary {

@@ -49,11 +49,6 @@ export async function listOffcuts(db: Db, shopId: string, filter: StockFilter = 
     .then((rows) => rows.map((r) => ({ ...r.offcut, planName: r.planName })));
 }
 
-export async function getStockItem(db: Db, shopId: string, id: string) {
-  const [row] = await db.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id)));
-  return row ?? null;
-}
-
 /** A new size on the rack; its opening count is a receipt in the ledger. */
 export async function createStockItem(db: Db, shopId: string, userId: string, values: StockItemValues) {
   return db.transaction(async (tx) => {

@@ -1,5 +1,7 @@
-/** Cutters never see prices: strip every money field from a row before it leaves the server. */
-export function withoutPrices<T extends Record<string, unknown>>(row: T): Omit<T, 'costCents' | 'valueCents'> {
-  const { costCents: _c, valueCents: _v, ...rest } = row;
-  return rest;
+/** Every key that carries money, anywhere in a plan, a stock row or a finishing result. */
+const PRICE_KEYS = new Set(['cost', 'costEach', 'costCents', 'valueCents']);
+
+/** Cutters never see prices: a copy of anything leaving the server with every money field removed, at any depth. */
+export function withoutPrices<T>(value: T): T {
+  return JSON.parse(JSON.stringify(value, (key, v) => (PRICE_KEYS.has(key) ? undefined : v)));
 }

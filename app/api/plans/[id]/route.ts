@@ -1,5 +1,6 @@
 import { getPlan } from '@/db/queries/plan-document';
-import { judgePlan, updateDraftPlan, withoutPrices } from '@/db/queries/plan-drafts';
+import { judgePlan, updateDraftPlan } from '@/db/queries/plan-drafts';
+import { withoutPrices } from '@/lib/stock/without-prices';
 import { conflict, HttpError, notFound } from '@/lib/api/errors';
 import { idParams, route } from '@/lib/api/route';
 import { can } from '@/lib/auth/permissions';

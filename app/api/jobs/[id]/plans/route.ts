@@ -1,6 +1,7 @@
 import { getJob } from '@/db/queries/jobs';
 import { buildNestRequest } from '@/db/queries/nest-request';
-import { createDraftPlan, judgePlan, listJobPlans, withoutPrices } from '@/db/queries/plan-drafts';
+import { createDraftPlan, judgePlan, listJobPlans } from '@/db/queries/plan-drafts';
+import { withoutPrices } from '@/lib/stock/without-prices';
 import { HttpError, notFound } from '@/lib/api/errors';
 import { idParams, route } from '@/lib/api/route';
 import { can } from '@/lib/auth/permissions';

@@ -4,7 +4,7 @@ import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
 import { getPlan } from '@/db/queries/plan-document';
-import { withoutPrices } from '@/db/queries/plan-drafts';
+import { withoutPrices } from '@/lib/stock/without-prices';
 import { getShopSettings } from '@/db/queries/shops';
 import { LayoutBench } from '@/components/layout-bench/layout-bench';
 import { PlanSummary } from '@/components/nesting/plan-summary';
