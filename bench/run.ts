@@ -15,7 +15,7 @@ import { SCALING_SIZES, runScaling, warmUp, type ScalingResult } from './scaling
 import { runShop, type ShopResult } from './shop';
 import { runInstance, summarise, type InstanceRun, type Mode } from './standard';
 
-const INSTANCE_FILE = path.resolve(process.cwd(), '../shared/bench/2bp-classes-I-X.txt');
+const INSTANCE_FILE = path.resolve(import.meta.dirname, 'data/2bp-classes-I-X.txt');
 const RESULTS_DIR = path.resolve(process.cwd(), 'bench/results');
 
 /** Totals the packer should reach on all 500 instances at the default budget (issue 4). */

@@ -72,6 +72,9 @@ async function openPostgres(url: string): Promise<DbHandle> {
   const { Pool } = await import('pg');
   const { drizzle } = await import('drizzle-orm/node-postgres');
   const pool = new Pool({ connectionString: url, max: 10 });
+  // An idle connection the server ends (a restart, an administrator) is dropped from the pool, which opens a new
+  // one on the next query; unheard, the pool's 'error' event would take the whole process down.
+  pool.on('error', (error) => console.error(`PostgreSQL closed an idle connection (${error.message}); the next query opens a new one.`));
   return { db: drizzle({ client: pool, schema }) as unknown as Db, kind: 'postgres', close: () => pool.end() };
 }
 

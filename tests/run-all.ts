@@ -9,6 +9,7 @@
  */
 import { spawnSync, type SpawnSyncOptions } from 'node:child_process';
 import fs from 'node:fs';
+import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 
@@ -51,7 +52,9 @@ function postgresBin(): string | null {
 function addVitest(file: string) {
   const r = JSON.parse(fs.readFileSync(file, 'utf8'));
   totals.passed += r.numPassedTests;
-  totals.failed += r.numFailedTests;
+  // A file that fails before any test runs (a missing fixture, an import error) has no failed test to count.
+  const brokenFiles = (r.testResults as { status: string; assertionResults: unknown[] }[]).filter((f) => f.status === 'failed' && f.assertionResults.length === 0);
+  totals.failed += r.numFailedTests + brokenFiles.length;
   totals.skipped += r.numPendingTests + r.numTodoTests;
 }
 
@@ -69,11 +72,23 @@ function vitest(title: string, file: string, args: string[], env: Record<string,
   if (status !== 0) fail(`${title} failed.`);
 }
 
+/** A loopback port nobody listens on now, as the system hands it out. */
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = net.createServer();
+    server.on('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address() as net.AddressInfo;
+      server.close(() => resolve(port));
+    });
+  });
+}
+
 /** A throw-away PostgreSQL cluster on 127.0.0.1, owned by the postgres user when we are root. */
-function withPostgres(body: (url: string) => void) {
+async function withPostgres(body: (url: string) => void) {
   const bin = postgresBin()!;
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-pg-'));
-  const port = String(54_000 + Math.floor(Math.random() * 900));
+  const port = String(await freePort());
   const asPg = (cmd: string, args: string[]) =>
     isRoot ? spawnSync('runuser', ['-u', 'postgres', '--', path.join(bin, cmd), ...args], { stdio: 'inherit' }) : spawnSync(path.join(bin, cmd), args, { stdio: 'inherit' });
   if (isRoot) spawnSync('chown', ['postgres:postgres', dir]);
@@ -95,7 +110,7 @@ ensureDebianPackage('postgresql', () => postgresBin() !== null);
 
 if (run('type check', 'npx', ['tsc', '--noEmit', '-p', '.']) !== 0) fail('Type check failed.');
 vitest('unit, property and integration tests (embedded PGlite)', path.join(OUT, 'vitest.json'), []);
-withPostgres((url) =>
+await withPostgres((url) =>
   vitest('database integration tests on PostgreSQL', path.join(OUT, 'vitest-postgres.json'), ['tests/integration'], { TEST_DATABASE_URL: url }),
 );
 if (run('production build', 'npx', ['next', 'build'], { env: { NEXT_TELEMETRY_DISABLED: '1' } }) !== 0) fail('next build failed.');

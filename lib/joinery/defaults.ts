@@ -2,7 +2,7 @@ import { inches, type Mm } from '@/lib/units/length';
 
 /**
  * Editable defaults for drawer schedules. Conventions of the trade, not standards: every one can be changed per
- * schedule. Sources as in DOMAIN.md: [CP] = common practice, no source; "from memory" where it is.
+ * schedule. Sources as in RULES.md: [CP] = common practice, no source; "from memory" where it is.
  */
 export const DRAWER_DEFAULTS = {
   frontThickness: inches(3 / 4), // ¾″ box front with ½″ sides is common [CP]

@@ -4,7 +4,7 @@ import { ROUTER_TABLE_CAUTIONS, maxRouterSpeedRpm } from '@/lib/joinery/router-s
 
 describe('router bit speed by diameter', () => {
   test.each([
-    { label: '¾″ bit: up to 24,000 rpm (DOMAIN.md bit-speed table, common practice, no source)', diameterIn: 3 / 4, rpm: 24_000 },
+    { label: '¾″ bit: up to 24,000 rpm (router bit-speed table, common practice, no source)', diameterIn: 3 / 4, rpm: 24_000 },
     { label: '1″ bit: 24,000 rpm (common practice, no source)', diameterIn: 1, rpm: 24_000 },
     { label: '1½″ bit: 18,000 rpm (common practice, no source)', diameterIn: 1.5, rpm: 18_000 },
     { label: '2¼″ bit: 16,000 rpm (common practice, no source)', diameterIn: 2.25, rpm: 16_000 },

@@ -4,7 +4,7 @@ import type { DrawerScheduleInput } from '@/shared/schemas/drawer-schedule';
 import { sizeDrawerSchedule } from '@/lib/joinery/size-drawer-schedule';
 import type { DrawerPart, DrawerPartRole } from '@/lib/joinery/types';
 
-/** The DOMAIN.md worked-example box: W 14″ × H 6″ × D 22″, ¾″ front and back, ½″ sides. */
+/** The worked-example box of RULES.md: W 14″ × H 6″ × D 22″, ¾″ front and back, ½″ sides. */
 const base = (over: Partial<DrawerScheduleInput> = {}): DrawerScheduleInput => ({
   label: 'Test bank',
   quantity: 1,
@@ -65,13 +65,13 @@ describe('part lengths follow each joint’s rule', () => {
       inches: 21 + 13 / 16,
     },
     {
-      label: 'butt, sides full depth: front/back 13″ (DOMAIN.md worked example, common practice, no source)',
+      label: 'butt, sides full depth: front/back 13″ (worked example, common practice, no source)',
       input: base({ joint: { method: 'butt-pocket-screw', layout: 'sides-full-depth' } }),
       role: 'front',
       inches: 13,
     },
     {
-      label: 'butt, front/back full width: sides 20½″ (DOMAIN.md worked example, common practice, no source)',
+      label: 'butt, front/back full width: sides 20½″ (worked example, common practice, no source)',
       input: base({ joint: { method: 'butt-loose-tenon', layout: 'front-back-full-width' } }),
       role: 'side',
       inches: 20.5,
@@ -137,7 +137,7 @@ describe('box size from the opening', () => {
     expect(result.box.heightMm).toBeCloseTo(inches(6.5), 9);
   });
 
-  test('a 600 mm frameless carcass with 18 mm sides takes a 539 mm side-mount box and a 597 mm full-overlay front (DOMAIN.md, derived from common practice)', () => {
+  test('a 600 mm frameless carcass with 18 mm sides takes a 539 mm side-mount box and a 597 mm full-overlay front (derived from common practice: ½″ = 12.5 mm metric slide clearance, 1.5 mm frameless reveal)', () => {
     const result = sized(
       base({
         size: { from: 'opening', widthMm: 600 - 2 * 18, heightMm: 200, depthMm: 560 },

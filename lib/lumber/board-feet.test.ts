@@ -9,8 +9,8 @@ const ft = (n: number) => inches(12 * n);
 
 describe('board feet by exact volume', () => {
   test.each([
-    ['AHEC "Measurement" / DOMAIN.md [derived]: 4/4 × 6″ × 8′ = 4.0 BF', { quarters: 4 }, 6, 8, 4],
-    ['AHEC "Measurement" / DOMAIN.md [derived]: 8/4 × 7″ × 10′ = 11.667 BF', { quarters: 8 }, 7, 10, 11.667],
+    ['AHEC "Measurement", arithmetic from the definition: 4/4 × 6″ × 8′ = 4.0 BF', { quarters: 4 }, 6, 8, 4],
+    ['AHEC "Measurement", arithmetic from the definition: 8/4 × 7″ × 10′ = 11.667 BF', { quarters: 8 }, 7, 10, 11.667],
     ['AHEC "Measurement": 2″ × 6¼″ × 8′ is 8.33 BF by exact volume', { quarters: 8 }, 6.25, 8, 8.333],
     ['AHEC "Measurement": one board foot is 12″ × 12″ × 1″', { mm: inches(1) }, 12, 1, 1],
   ] as const)('%s', (_label, thickness: Thickness, widthIn, lengthFt, expected) => {
@@ -27,7 +27,7 @@ describe('board feet by exact volume', () => {
     expect(thicknessInches({ quarters })).toBe(expected);
   });
 
-  test('DOMAIN.md [derived]: one cubic metre is 423.776 board feet', () => {
+  test('derived from 25.4 mm exactly: one cubic metre is 423.776 board feet', () => {
     expect(MM3_PER_BOARD_FOOT).toBeCloseTo(2_359_737.216, 6);
     expect(BOARD_FEET_PER_CUBIC_METRE).toBeCloseTo(423.776, 3);
     expect(cubicMetresToBoardFeet(1)).toBeCloseTo(423.776, 3);

@@ -4,7 +4,7 @@ import { boardFootCost, pricePerBoardFootFromCubicMetre } from './board-cost';
 import { buyQuantity } from './buy-quantity';
 
 describe('how much to buy for a waste factor', () => {
-  test('DOMAIN.md [derived]: 100 needed at 30 % waste is 100 / 0.7 = 142.86, bought as 143', () => {
+  test('derived from buy = need / (1 − waste): 100 needed at 30 % waste is 100 / 0.7 = 142.86, bought as 143', () => {
     expect(buyQuantity(100, 0.3)).toEqual({ exact: expect.closeTo(142.857, 3), buy: 143 });
   });
 
@@ -37,7 +37,7 @@ describe('cost by the board foot', () => {
     expect(boardFootCost(143, 8.5)).toBeCloseTo(1215.5, 9);
   });
 
-  test('DOMAIN.md [derived]: a price per m³ divides by 423.776 BF', () => {
+  test('derived from 1 m³ = 423.776 BF: a price per m³ divides by 423.776 BF', () => {
     expect(pricePerBoardFootFromCubicMetre(1000)).toBeCloseTo(1000 / 423.776, 4);
   });
 

@@ -1,6 +1,6 @@
 /**
  * Shrinkage coefficients per 1 % change of moisture content, USDA FPL Wood Handbook (FPL-GTR-190, 2010),
- * table 13-5, as collected in DOMAIN.md: C_R across quartersawn width (radial), C_T across flatsawn width
+ * table 13-5 (check values in RULES.md): C_R across quartersawn width (radial), C_T across flatsawn width
  * (tangential). Only species whose handbook values were checked are listed; add others with their source.
  */
 export const SPECIES = {

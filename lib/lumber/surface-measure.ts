@@ -18,7 +18,7 @@ export interface Tally {
 const settle = (x: number) => Math.round(x * 1e6) / 1e6;
 
 /**
- * The NHLA-style tally a hardwood yard invoices by (AHEC "Measurement", as in DOMAIN.md): width to the
+ * The NHLA-style tally a hardwood yard invoices by (AHEC "Measurement"; see RULES.md): width to the
  * nearest inch, length rounded down to whole feet, surface measure rounded to a whole number, then times
  * the nominal thickness. It differs from the exact volume (`boardFeet`): 2″ × 6¼″ × 8′ tallies 8 BF
  * against 8.33 exact. Halves round up here; a yard tallying a whole pile alternates them up and down.

@@ -7,7 +7,7 @@ import { dimensionalChange, MOVEMENT_WARNING_THRESHOLD_MM, movementWarning } fro
 
 const FPL = 'USDA FPL Wood Handbook FPL-GTR-190 (2010), eq. 13-2, table 13-5';
 
-/** DOMAIN.md prints each check rounded: agree to within half a unit of its last printed digit. */
+/** The check values are printed rounded (RULES.md): agree to within half a unit of its last printed digit. */
 const expectAsPrinted = (value: number, printed: number, decimals: number) =>
   expect(Math.abs(value - printed)).toBeLessThanOrEqual(0.5 * 10 ** -decimals + 1e-12);
 

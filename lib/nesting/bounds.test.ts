@@ -6,7 +6,7 @@ import { continuousBound, dellAmicoMartelloVigo, lowerBound, martelloVigoL2, rot
 import { maxRectsLayout } from './bounds/maxrects-reference';
 import { parseInstances, type BinPackingInstance } from './instances';
 
-const INSTANCE_FILE = path.resolve(process.cwd(), '../shared/bench/2bp-classes-I-X.txt');
+const INSTANCE_FILE = path.resolve(import.meta.dirname, '../../bench/data/2bp-classes-I-X.txt');
 const CLASSES = ['I', 'II', 'III', 'IV', 'V', 'VI', 'VII', 'VIII', 'IX', 'X'];
 
 function loadStandardInstances(): BinPackingInstance[] {
@@ -26,7 +26,7 @@ const sum = (xs: number[]) => xs.reduce((a, b) => a + b, 0);
 /** Bins of a feasible layout from a general-purpose packer (checked inside `maxRectsLayout`). */
 const binsUsedByMaxRects = (items: Size[], bin: Size, rotation: boolean) => maxRectsLayout(items, bin, rotation).length;
 
-describe('the 500 standard instances (classes I–X, as listed in /work/shared/bench/README.md)', () => {
+describe('the 500 standard instances (classes I–X, bench/data/README.md)', () => {
   const instances = loadStandardInstances();
 
   test('the file holds 500 instances, 50 per class', () => {

@@ -220,7 +220,7 @@ function addSquares(w: number, h: number, smallest: number, counts: Map<number, 
  * Dell'Amico, Martello & Vigo (2002), for items that may be turned, as we reconstruct it: cut every item into squares
  * (Euclid's algorithm) — squares lie the same either way — and bound the squares as in `incompatibilityBound`; at
  * least L0. On the 500 standard instances this gives the reference totals exactly, class by class (6,769;
- * /work/shared/bench/README.md). For bins that are not square the argument runs with q = min(t, W/2), p = min(t, H/2).
+ * bench/data/README.md). For bins that are not square the argument runs with q = min(t, W/2), p = min(t, H/2).
  */
 export function dellAmicoMartelloVigo(items: readonly Size[], bin: Size): number {
   assertInput(items, bin, true);

@@ -1,7 +1,7 @@
 import { describe, expect, test } from 'vitest';
 import { InstanceParseError, parseInstanceLine, parseInstances } from './instances';
 
-describe('parsing the standard instance format (name;n;W;H;w,h[,count];…, /work/shared/bench/README.md)', () => {
+describe('parsing the standard instance format (name;n;W;H;w,h[,count];…, bench/data/README.md)', () => {
   test('reads the name, class, bin and every item in order', () => {
     const inst = parseInstanceLine('cl07_020_03;3;100;100;70,20;20,70;55,60');
     expect(inst).toEqual({ name: 'cl07_020_03', cls: 7, bin: { w: 100, h: 100 }, items: [{ w: 70, h: 20 }, { w: 20, h: 70 }, { w: 55, h: 60 }] });

@@ -77,11 +77,11 @@ describe('worked examples', () => {
     expect(plan.stockToBuy).toEqual([expect.objectContaining({ stockId: 'S', count: 2, cost: 120 })]);
   });
 
-  // DOMAIN.md "strip count": n = ⌊(L − trims + k) / (w + k)⌋ [derived]. Strips run the full length of the sheet
+  // Strip count (RULES.md): n = ⌊(L − trims + k) / (w + k)⌋ [derived]. Strips run the full length of the sheet
   // and may not turn, so the count across the sheet is exactly n.
   test.each([
-    { label: '48″ sheet, 11⅞″ strips, ⅛″ kerf → 4 (DOMAIN.md strip count, [derived])', across: inches(48), w: inches(11 + 7 / 8), k: inches(1 / 8), trim: 0, n: 4 },
-    { label: 'the same with ¼″ edge trim → 3 (DOMAIN.md strip count, [derived])', across: inches(48), w: inches(11 + 7 / 8), k: inches(1 / 8), trim: inches(1 / 4), n: 3 },
+    { label: '48″ sheet, 11⅞″ strips, ⅛″ kerf → 4 (strip count, derived)', across: inches(48), w: inches(11 + 7 / 8), k: inches(1 / 8), trim: 0, n: 4 },
+    { label: 'the same with ¼″ edge trim → 3 (strip count, derived)', across: inches(48), w: inches(11 + 7 / 8), k: inches(1 / 8), trim: inches(1 / 4), n: 3 },
   ])('$label', async ({ across, w, k, trim, n }) => {
     const length = inches(96);
     const req = request(
@@ -95,7 +95,7 @@ describe('worked examples', () => {
     expect(validatePlan(req, plan)).toEqual([]);
   });
 
-  test('full-length strips across any sheet number exactly ⌊(L − trims + k) / (w + k)⌋ (DOMAIN.md strip count, [derived])', async () => {
+  test('full-length strips across any sheet number exactly ⌊(L − trims + k) / (w + k)⌋ (strip count, derived)', async () => {
     const arb = fc.record({
       across: fc.integer({ min: 200, max: 1500 }),
       w: fc.integer({ min: 40, max: 500 }),
@@ -114,7 +114,7 @@ describe('worked examples', () => {
     );
   });
 
-  test('2440 mm, 600 mm parts, 3.2 mm kerf, 10 mm trim each end → 4 parts, 10.4 mm left (DOMAIN.md strip count, [derived])', async () => {
+  test('2440 mm, 600 mm parts, 3.2 mm kerf, 10 mm trim each end → 4 parts, 10.4 mm left (strip count, derived)', async () => {
     const req = request(
       [part('door', 600, 1200, { quantity: 6 })],
       [sheet('S', 2440, 1220, { count: 1 })],

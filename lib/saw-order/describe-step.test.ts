@@ -8,10 +8,10 @@ const mm: ShopUnits = { system: 'metric', precision: 1, feet: false };
 
 describe('saw-order step descriptions', () => {
   test.each([
-    // DOMAIN.md strip count (derived): 11-7/8″ strips off a 48″ sheet with a 1/8″ kerf.
-    ['DOMAIN.md strips, imperial 1/16″', sixteenths, 'hyphen', '11-7/8″', 'Rip A, fence at 11-7/8″'],
-    ['DOMAIN.md strips, imperial ASCII for the PDF', sixteenths, 'ascii', '11-7/8"', 'Rip A, fence at 11-7/8"'],
-    ['DOMAIN.md strips, metric (11-7/8″ = 301.625 mm, NIST 25.4 mm/in)', mm, 'hyphen', '≈302 mm', 'Rip A, fence at ≈302 mm'],
+    // Strip count (derived, lib/nesting/RULES.md): 11-7/8″ strips off a 48″ sheet with a 1/8″ kerf.
+    ['strip count (derived), imperial 1/16″', sixteenths, 'hyphen', '11-7/8″', 'Rip A, fence at 11-7/8″'],
+    ['strip count (derived), imperial ASCII for the PDF', sixteenths, 'ascii', '11-7/8"', 'Rip A, fence at 11-7/8"'],
+    ['strip count (derived), metric (11-7/8″ = 301.625 mm, NIST 25.4 mm/in)', mm, 'hyphen', '≈302 mm', 'Rip A, fence at ≈302 mm'],
   ] as const)('%s: every fence reads the strip width', async (_label, units, style, fence, summary) => {
     const { plan } = await nest(stripsRequest());
     const steps = describeSawOrder(plan.pieces[0], units, style);

@@ -39,7 +39,7 @@ function expectGeometryMatchesPlan(plan: Plan, kerf: number) {
 }
 
 describe('saw-order diagram geometry', () => {
-  test('strips of 11-7/8″ on a 48″ sheet with a 1/8″ kerf are four rips, each fence 11-7/8″ from the same edge (DOMAIN.md strip count, derived)', async () => {
+  test('strips of 11-7/8″ on a 48″ sheet with a 1/8″ kerf are four rips, each fence 11-7/8″ from the same edge (strip count, derived)', async () => {
     const { plan } = await nest(stripsRequest());
     const geometry = sawOrderGeometry(plan.pieces[0], 0, inches(1 / 8));
     expect(geometry.map((g) => g.step.kind)).toEqual(['rip', 'rip', 'rip', 'rip']);

@@ -9,7 +9,7 @@ export async function nest(input: NestRequestInput) {
   return { request: req, plan: await optimize(req) };
 }
 
-/** DOMAIN.md strip count (derived): a 48″ sheet, strips 11-7/8″ wide, 1/8″ kerf → 4 full-length strips. */
+/** Strip count (derived, lib/nesting/RULES.md): a 48″ sheet, strips 11-7/8″ wide, 1/8″ kerf → 4 full-length strips. */
 export const stripsRequest = () =>
   request([part('strip', inches(96), inches(11 + 7 / 8), { label: 'Shelf', quantity: 4 })], [sheet('s', inches(96), inches(48))], { kerf: inches(1 / 8) });
 

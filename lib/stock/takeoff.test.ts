@@ -21,7 +21,7 @@ const board = (over: Partial<TakeoffSize> = {}): TakeoffSize => ({
 describe('board feet of a stock board', () => {
   test.each([
     ['AHEC "Measurement": 4/4 × 6″ × 8′ = 4.0 BF (on the nominal inch, not the surfaced 13/16″)', board(), 4],
-    ['DOMAIN.md [derived]: 8/4 × 7″ × 10′ = 11.667 BF', board({ nominalThickness: '8/4', widthMm: inches(7), lengthMm: inches(120) }), 11.667],
+    ['AHEC "Measurement", arithmetic from the definition: 8/4 × 7″ × 10′ = 11.667 BF', board({ nominalThickness: '8/4', widthMm: inches(7), lengthMm: inches(120) }), 11.667],
     ['[derived]: a board given in mm is measured on its actual thickness: 25.4 × 152.4 × 2438.4 mm = 4.0 BF', board({ nominalThickness: '25.4 mm', thicknessMm: 25.4 }), 4],
   ])('%s', (_label, size, bf) => {
     expect(pieceBoardFeet(size)).toBeCloseTo(bf, 3);
@@ -34,7 +34,7 @@ describe('takeoff lines', () => {
     expect(lines[0]).toMatchObject({ boardFeet: expect.closeTo(40, 9), costCents: 37000, withWaste: 10, covered: true });
   });
 
-  test('DOMAIN.md [derived]: buy = need / (1 − waste): 100 boards at 30 % waste are 143 to have ready', () => {
+  test('derived: buy = need / (1 − waste): 100 boards at 30 % waste are 143 to have ready', () => {
     const { lines } = takeoffLines([board({ count: 100, costEachCents: 100, availableNow: 120 })], 0.3);
     expect(lines[0]).toMatchObject({ withWaste: 143, costWithWasteCents: 14300, covered: true, coveredWithWaste: false });
   });

@@ -6,7 +6,7 @@ const metric = { system: 'metric', precision: 1, feet: false } as const;
 
 describe('showing an area', () => {
   test.each([
-    ['NIST SP 811: a 4×8 ft panel (1219.2 × 2438.4 mm, DOMAIN.md) is exactly 32 ft²', 1219.2 * 2438.4, imperial, '32 ft²'],
+    ['NIST SP 811: a 4×8 ft panel (1219.2 × 2438.4 mm, derived from 25.4 mm exactly) is exactly 32 ft²', 1219.2 * 2438.4, imperial, '32 ft²'],
     ['SI: a metric 2440 × 1220 panel is 2.9768 m², shown to 0.01', 2440 * 1220, metric, '≈2.98 m²'],
     ['NIST SP 811: the metric panel in ft² is 32.04 (2.9768 / 0.09290304)', 2440 * 1220, imperial, '≈32.04 ft²'],
     ['SI: 1 m² exactly', 1_000_000, metric, '1 m²'],

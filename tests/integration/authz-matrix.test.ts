@@ -5,6 +5,7 @@ import { useDatabase } from '@/db/client';
 import type { DbHandle } from '@/db/open';
 import { createTestDatabase } from '../support/test-db';
 import { request, TEST_SECRET, twoShops, type TestUser } from '../support/fixtures';
+import { uniqueEmail } from '../support/unique';
 import { PUBLIC_ROUTES, type Actor, type AuthzFixtures, type AuthzRow } from './authz/types';
 
 process.env.NEXTAUTH_SECRET = TEST_SECRET;
@@ -61,7 +62,7 @@ describe('the authorization matrix', () => {
     // Each call gets its own target in the first shop, so deletions and role changes never affect later rows.
     const params = target ? await target(fx) : {};
     const url = Object.entries(params).reduce((u, [k, v]) => u.replace(`[${k}]`, v), route);
-    const payload = body && JSON.parse(JSON.stringify(body).replace('EMAIL', `p${Math.random().toString(36).slice(2)}@example.com`));
+    const payload = body && JSON.parse(JSON.stringify(body).replace('EMAIL', uniqueEmail('matrix')));
     const handler = (await loadRoute(route))[method];
     const res = await handler(await request(url, { method, body: payload, user }), { params: Promise.resolve(params) });
     expect(res.status, await res.clone().text()).toBe(status);

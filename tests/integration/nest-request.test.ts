@@ -30,7 +30,7 @@ describe('a nesting request built from the database', () => {
   test.each([
     // 4/4 × 6½″ × 8′ = 1 × 6.5 × 8 / 12 = 4.333 BF (AHEC "Measurement": BF = T × W × L(ft) / 12); at $9.25/bf → $40.08
     ['4/4', inches(6.5), 925, 4008],
-    // 8/4 × 7″ × 10′ = 11.667 BF (DOMAIN.md check, derived); at $10.00/bf → $116.67
+    // 8/4 × 7″ × 10′ = 11.667 BF (AHEC "Measurement", derived); at $10.00/bf → $116.67
     ['8/4', inches(7), 1000, 11667],
   ])('a %s board %f mm wide at %i¢/bf costs %i¢ each', async (nominal, width, perBf, expected) => {
     const length = nominal === '8/4' ? inches(120) : inches(96);

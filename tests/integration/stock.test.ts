@@ -146,7 +146,7 @@ describe('the takeoff', () => {
     expect(takeoff.pull.length + takeoff.buy.length).toBeGreaterThan(0);
     for (const line of [...takeoff.pull, ...takeoff.buy]) {
       expect(line.costCents).toBe(line.costEachCents * line.count);
-      // DOMAIN.md [derived]: buy = need / (1 − waste), whole pieces
+      // derived: buy = need / (1 − waste), whole pieces
       if (line.kind !== 'offcut') expect(line.withWaste).toBe(Math.ceil(line.count / 0.85 - 1e-9));
     }
     expect(await getTakeoff(db, fx.mine.id, kitchen.jobId)).toBeNull();

@@ -22,10 +22,12 @@ export async function createTestDatabase(): Promise<DbHandle> {
   return {
     ...handle,
     close: async () => {
+      // The pool has ended its connections; plain DROP DATABASE waits (up to 5 s) for their backends to exit,
+      // where WITH (FORCE) would terminate them mid-goodbye and the client would hear 57P01.
       await handle.close();
       const dropper = new Client({ connectionString: serverUrl });
       await dropper.connect();
-      await dropper.query(`drop database if exists ${name} with (force)`);
+      await dropper.query(`drop database if exists ${name}`);
       await dropper.end();
     },
   };

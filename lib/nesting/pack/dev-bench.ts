@@ -10,7 +10,7 @@ import { packWithLimits } from './index';
 
 const [ms = '100', every = '5', mode = 'rot', style = 'panel'] = process.argv.slice(2);
 const rotation = mode === 'rot';
-const instances = parseInstances(readFileSync('/work/shared/bench/2bp-classes-I-X.txt', 'utf8'));
+const instances = parseInstances(readFileSync(new URL('../../../bench/data/2bp-classes-I-X.txt', import.meta.url), 'utf8'));
 const perClass = new Map<number, { bins: number; lb: number; first: number }>();
 let total = 0;
 let totalLb = 0;

@@ -26,9 +26,9 @@ describe('worked examples', () => {
   });
 
   test.each([
-    { label: 'DOMAIN.md strip count [derived]: 48″ wide, 11⅞″ strips, ⅛″ kerf → ⌊(48 + ⅛)/(11⅞ + ⅛)⌋ = 4', width: inches(48), strip: inches(11.875), kerf: inches(0.125), expected: 4 },
-    { label: 'DOMAIN.md strip count [derived]: ¼″ edge trim on both sides leaves 47.5″ → 3', width: inches(47.5), strip: inches(11.875), kerf: inches(0.125), expected: 3 },
-    { label: 'DOMAIN.md strip count [derived]: 2440 − 2 × 10 mm trim, 600 mm strips, 3.2 mm kerf → 4', width: 2420, strip: 600, kerf: 3.2, expected: 4 },
+    { label: 'strip count, derived: 48″ wide, 11⅞″ strips, ⅛″ kerf → ⌊(48 + ⅛)/(11⅞ + ⅛)⌋ = 4', width: inches(48), strip: inches(11.875), kerf: inches(0.125), expected: 4 },
+    { label: 'strip count, derived: ¼″ edge trim on both sides leaves 47.5″ → 3', width: inches(47.5), strip: inches(11.875), kerf: inches(0.125), expected: 3 },
+    { label: 'strip count, derived: 2440 − 2 × 10 mm trim, 600 mm strips, 3.2 mm kerf → 4', width: 2420, strip: 600, kerf: 3.2, expected: 4 },
   ])('$label', async ({ width, strip, kerf, expected }) => {
     expect(Math.floor((width + kerf) / (strip + kerf) + 1e-9)).toBe(expected);
     // One sheet whose width runs along y; full-length strips are parts as long as the sheet.
@@ -159,7 +159,7 @@ describe('properties', () => {
 });
 
 describe('strip count', () => {
-  test('full-length strips of width w from a usable width L with kerf k number ⌊(L + k)/(w + k)⌋ (DOMAIN.md [derived])', async () => {
+  test('full-length strips of width w from a usable width L with kerf k number ⌊(L + k)/(w + k)⌋ (strip count, derived)', async () => {
     await fc.assert(
       fc.asyncProperty(
         fc.integer({ min: 100, max: 1500 }),

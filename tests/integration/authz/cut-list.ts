@@ -1,4 +1,5 @@
 import { drawerSchedules, jobs, parts, setupCards } from '@/db/schema';
+import { uniqueThicknessMm } from '../../support/unique';
 import type { AuthzFixtures, AuthzRow } from './types';
 
 const freshJob = async ({ db, mine }: AuthzFixtures) => {
@@ -24,13 +25,13 @@ const freshSchedule = async (fx: AuthzFixtures) => {
 };
 
 const freshCard = async ({ db, mine }: AuthzFixtures) => {
-  const [c] = await db.insert(setupCards).values({ shopId: mine.id, joint: 'box-joint', stockThicknessMm: 5 + Math.random() * 40, fields: {}, note: '' }).returning();
+  const [c] = await db.insert(setupCards).values({ shopId: mine.id, joint: 'box-joint', stockThicknessMm: uniqueThicknessMm(), fields: {}, note: '' }).returning();
   return { id: c.id };
 };
 
 const UPLOAD = { columns: ['label', 'quantity', 'length', 'width', 'thickness', 'material'], rows: [{ line: 2, cells: ['Shelf', '1', '600', '300', '18', 'MDF'] }], unit: 'mm' };
 const PART = { label: 'Shelf', quantity: 1, lengthMm: 600, widthMm: 300, thicknessMm: 18, material: 'MDF' };
-const CARD = () => ({ joint: 'rabbet-and-dado', stockThicknessMm: 5 + Math.random() * 40, fields: [{ key: 'dado-depth', label: 'Dado depth', value: 6.35, unit: 'mm' }], note: '' });
+const CARD = () => ({ joint: 'rabbet-and-dado', stockThicknessMm: uniqueThicknessMm(), fields: [{ key: 'dado-depth', label: 'Dado depth', value: 6.35, unit: 'mm' }], note: '' });
 
 const read = { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 404 };
 const write = { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 };

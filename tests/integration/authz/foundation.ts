@@ -1,4 +1,5 @@
 import { jobs, users } from '@/db/schema';
+import { uniqueEmail } from '../../support/unique';
 import type { AuthzFixtures, AuthzRow } from './types';
 
 const freshJob = async ({ db, mine }: AuthzFixtures) => {
@@ -9,7 +10,7 @@ const freshJob = async ({ db, mine }: AuthzFixtures) => {
 const freshPerson = async ({ db, mine }: AuthzFixtures) => {
   const [u] = await db
     .insert(users)
-    .values({ shopId: mine.id, name: 'Target person', email: `t${Math.random().toString(36).slice(2)}@example.com`, role: 'cutter', passwordHash: 'x' })
+    .values({ shopId: mine.id, name: 'Target person', email: uniqueEmail('target'), role: 'cutter', passwordHash: 'x' })
     .returning();
   return { id: u.id };
 };
