@@ -16,12 +16,12 @@ import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
 import { api } from '@/lib/client/api';
+import { jobMatchesSearch } from '@/lib/jobs/search';
 import { JOB_STATUS_LABELS, JOB_STATUSES, type JobSummary } from '@/shared/schemas/job';
 import { JobStatusBadge } from './job-status';
 import { NewJobForm } from './new-job-form';
 
-const matchesSearch: FilterFn<JobSummary> = (row, _columnId, needle: string) =>
-  `${row.original.name} ${row.original.customer} ${row.original.materials.join(' ')}`.toLowerCase().includes(needle.trim().toLowerCase());
+const matchesSearch: FilterFn<JobSummary> = (row, _columnId, needle: string) => jobMatchesSearch(row.original, needle);
 
 const columns: ColumnDef<JobSummary>[] = [
   { id: 'name', header: 'Job', accessorKey: 'name', cell: ({ row }) => <Link href={`/jobs/${row.original.id}`} className="font-medium text-graphite">{row.original.name}</Link> },

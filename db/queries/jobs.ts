@@ -4,20 +4,40 @@ import { jobs, parts } from '../schema';
 import type { JobInput, JobPatch, JobSummary } from '@/shared/schemas/job';
 import { recordAudit } from './audit';
 
-const summaryColumns = {
-  id: jobs.id,
-  name: jobs.name,
-  customer: jobs.customer,
-  status: jobs.status,
-  dueDate: jobs.dueDate,
-  notes: jobs.notes,
-  createdAt: jobs.createdAt,
-  updatedAt: jobs.updatedAt,
-  partCount: sql<number>`coalesce((select sum(${parts.quantity}) from ${parts} where ${parts.jobId} = ${jobs.id}), 0)::int`,
-  materials: sql<string[]>`coalesce((select array_agg(distinct ${parts.material}) from ${parts} where ${parts.jobId} = ${jobs.id}), '{}')`,
-};
+/** Per job: its pieces (quantities summed) and its materials, once each. */
+const partStats = (db: Db, shopId: string) =>
+  db
+    .select({
+      jobId: parts.jobId,
+      partCount: sql<number>`sum(${parts.quantity})::int`.as('part_count'),
+      materials: sql<string[]>`array_agg(distinct ${parts.material})`.as('materials'),
+    })
+    .from(parts)
+    .where(eq(parts.shopId, shopId))
+    .groupBy(parts.jobId)
+    .as('part_stats');
 
-type SummaryRow = { createdAt: Date; updatedAt: Date } & Omit<JobSummary, 'createdAt' | 'updatedAt'>;
+/** Job summaries of one shop; callers add their own filter on `jobs`. */
+function selectSummaries(db: Db, shopId: string) {
+  const stats = partStats(db, shopId);
+  return db
+    .select({
+      id: jobs.id,
+      name: jobs.name,
+      customer: jobs.customer,
+      status: jobs.status,
+      dueDate: jobs.dueDate,
+      notes: jobs.notes,
+      createdAt: jobs.createdAt,
+      updatedAt: jobs.updatedAt,
+      partCount: sql<number>`coalesce(${stats.partCount}, 0)`,
+      materials: sql<string[] | null>`${stats.materials}`,
+    })
+    .from(jobs)
+    .leftJoin(stats, eq(stats.jobId, jobs.id));
+}
+
+type SummaryRow = { createdAt: Date; updatedAt: Date; materials: string[] | null } & Omit<JobSummary, 'createdAt' | 'updatedAt' | 'materials'>;
 
 const toSummary = (row: SummaryRow): JobSummary => ({
   ...row,
@@ -28,12 +48,12 @@ const toSummary = (row: SummaryRow): JobSummary => ({
 });
 
 export async function listJobs(db: Db, shopId: string): Promise<JobSummary[]> {
-  const rows = await db.select(summaryColumns).from(jobs).where(eq(jobs.shopId, shopId)).orderBy(desc(jobs.updatedAt));
+  const rows = await selectSummaries(db, shopId).where(eq(jobs.shopId, shopId)).orderBy(desc(jobs.updatedAt));
   return rows.map(toSummary);
 }
 
 export async function getJob(db: Db, shopId: string, id: string): Promise<JobSummary | null> {
-  const [row] = await db.select(summaryColumns).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
+  const [row] = await selectSummaries(db, shopId).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
   return row ? toSummary(row) : null;
 }
 
