@@ -53,6 +53,7 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
 
     await tx.insert(stockItems).values([
       { shopId, kind: 'sheet', material: 'Baltic birch', nominalThickness: '1/2"', thicknessMm: 12, lengthMm: 1525, widthMm: 1525, grain: 'along-length', onHand: 14, lowStockAt: 4, costCents: 6850, supplier: 'Cedar Run Plywood', location: 'Rack A2', buyable: true },
+      { shopId, kind: 'sheet', material: 'Baltic birch', nominalThickness: '1/4"', thicknessMm: 6, lengthMm: 1525, widthMm: 1525, grain: 'along-length', onHand: 10, lowStockAt: 3, costCents: 3900, supplier: 'Cedar Run Plywood', location: 'Rack A1', buyable: true },
       { shopId, kind: 'sheet', material: 'Baltic birch', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: 1525, widthMm: 1525, grain: 'along-length', onHand: 8, lowStockAt: 3, costCents: 8900, supplier: 'Cedar Run Plywood', location: 'Rack A3', buyable: true },
       { shopId, kind: 'sheet', material: 'Maple ply', nominalThickness: '3/4"', thicknessMm: inches(23 / 32), lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'along-length', onHand: 22, lowStockAt: 6, costCents: 9400, supplier: 'Cedar Run Plywood', location: 'Rack B1', buyable: true },
       { shopId, kind: 'sheet', material: 'Maple ply', nominalThickness: '1/4"', thicknessMm: 6, lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'along-length', onHand: 9, lowStockAt: 3, costCents: 4200, supplier: 'Cedar Run Plywood', location: 'Rack B4', buyable: true },

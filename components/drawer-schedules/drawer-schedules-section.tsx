@@ -3,7 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
-import { partsKey } from '@/components/cut-list/use-parts';
+import { partsKey, useMaterials } from '@/components/cut-list/use-parts';
 import { api } from '@/lib/client/api';
 import { JOINT_NAMES } from '@/lib/joinery';
 import { formatLength } from '@/lib/units/format-length';
@@ -24,6 +24,7 @@ export function DrawerSchedulesSection({ jobId, units, canWrite }: { jobId: stri
   const qc = useQueryClient();
   const schedules = useQuery({ queryKey: ['drawer-schedules', jobId], queryFn: () => api<SavedSchedule[]>(`/api/jobs/${jobId}/drawer-schedules`) });
   const cards = useQuery({ queryKey: ['setup-cards'], queryFn: () => api<SetupCard[]>('/api/setup-cards') });
+  const materials = useMaterials();
   const [editing, setEditing] = useState<SavedSchedule | 'new' | null>(null);
   const remove = useMutation({
     mutationFn: (id: string) => api(`/api/jobs/${jobId}/drawer-schedules/${id}`, { method: 'DELETE' }),
@@ -43,12 +44,14 @@ export function DrawerSchedulesSection({ jobId, units, canWrite }: { jobId: stri
       <p className="mb-4 max-w-3xl text-sm text-graphite-mute">
         A schedule is a set of identical drawer boxes. Kerfwise sizes every part from the opening, slides, joint and stock, and keeps its rows in the cut list in step when the schedule changes.
       </p>
-      {editing !== null && (
+      {editing !== null && materials.isPending && <p role="status" className="text-sm text-graphite-mute">Reading the stock room…</p>}
+      {editing !== null && !materials.isPending && (
         <ScheduleForm
           key={editing === 'new' ? 'new' : editing.id}
           jobId={jobId}
           units={units}
           cards={cards.data ?? []}
+          offers={materials.data ?? []}
           editing={editing === 'new' ? null : { id: editing.id, input: editing.input }}
           onDone={() => setEditing(null)}
         />

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { DRAWER_DEFAULTS as D } from '@/lib/joinery/defaults';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
+import { snapThickness, type StockOffer } from '@/lib/cut-list/stock-match';
 import { formatLength } from '@/lib/units/format-length';
 import type { LengthUnit } from '@/lib/units/parse-length';
 import { JOINT_METHODS, SLIDE_TYPES, type DrawerSchedule, type DrawerScheduleInput, type JointMethod } from '@/shared/schemas/drawer-schedule';
@@ -86,12 +87,32 @@ export function fromSchedule(s: DrawerSchedule, units: ShopUnits): ScheduleFormT
   };
 }
 
-export function emptySchedule(units: ShopUnits): ScheduleFormText {
-  const len = (mm: number) => formatLength(mm, units);
+/** The form's thickness fields, each cut from one material's stock. */
+export const THICKNESS_FIELDS = ['frontThickness', 'sideThickness', 'backThickness', 'bottomThickness'] as const;
+export type ThicknessField = (typeof THICKNESS_FIELDS)[number];
+
+/** The material a thickness field's part is cut from (the front and back from the front material, else the box's). */
+export function thicknessMaterial(field: ThicknessField, v: Partial<ScheduleFormText>): string {
+  const box = v.sidesMaterial ?? '';
+  if (field === 'sideThickness') return box;
+  if (field === 'bottomThickness') return v.bottomMaterial ?? '';
+  return v.frontMaterial?.trim() ? v.frontMaterial : box;
+}
+
+/**
+ * A new schedule: ¾″ front and back, ½″ sides and a ¼″ bottom in Baltic birch, each thickness moved to the stock
+ * room's sheet of that nominal size (¾″ finds the 18 mm sheet), so the joints are sized on the stock that is cut.
+ */
+export function emptySchedule(units: ShopUnits, offers: readonly StockOffer[] = []): ScheduleFormText {
+  const material = 'Baltic birch';
+  const stock = (mm: number) => {
+    const snapped = snapThickness(material, mm, offers);
+    return snapped === mm ? formatLength(mm, units) : exactLengthText(snapped, units);
+  };
   return {
     label: '', quantity: '1', sizeFrom: 'opening', width: '', height: '', depth: '', slideType: 'side-mount', jointMethod: 'lock-rabbet', jointParam: '',
-    frontThickness: len(D.frontThickness), sideThickness: len(D.sideThickness), backThickness: '', frontStyle: 'flush', bottomMount: 'groove',
-    bottomThickness: len(D.bottomThickness), bottomMaterial: 'Baltic birch', sidesMaterial: 'Baltic birch', frontMaterial: '',
+    frontThickness: stock(D.frontThickness), sideThickness: stock(D.sideThickness), backThickness: '', frontStyle: 'flush', bottomMount: 'groove',
+    bottomThickness: stock(D.bottomThickness), bottomMaterial: material, sidesMaterial: material, frontMaterial: '',
   };
 }
 

@@ -2,20 +2,24 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { useMemo } from 'react';
+import Link from 'next/link';
+import { useEffect, useMemo, useRef } from 'react';
 import { useForm, useWatch, type Path } from 'react-hook-form';
 import { api, ApiError } from '@/lib/client/api';
-import { DEFAULT_LOCK_RABBET_CARDS, findSetupCard, JOINT_NAMES, sizeDrawerSchedule } from '@/lib/joinery';
+import { defaultSetupCard, findSetupCard, JOINT_NAMES, sizeDrawerSchedule } from '@/lib/joinery';
 import { formatLength } from '@/lib/units/format-length';
 import { drawerScheduleSchema, JOINT_METHODS, type DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import type { SetupCard } from '@/shared/schemas/setup-card';
 import { shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
 import { RouterCautions, SetupCardView } from '@/components/setup-cards/setup-card-view';
-import { partsKey, useMaterials } from '@/components/cut-list/use-parts';
-import { stockMatchWarning } from '@/lib/cut-list/stock-match';
+import { partsKey } from '@/components/cut-list/use-parts';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
+import { snapThickness, stockMatchWarning, thicknessChoices, type StockOffer } from '@/lib/cut-list/stock-match';
+import { parseLength } from '@/lib/units/parse-length';
+import { ThicknessPicker } from './thickness-picker';
 import { BoxPreview } from './box-preview';
 import { bottomMovementWarning } from './bottom-movement';
-import { emptySchedule, fieldOfPath, fromSchedule, JOINT_PARAM, scheduleFormSchema, toScheduleInput, type ScheduleFormText, type ScheduleFormValues } from './schedule-form-values';
+import { emptySchedule, fieldOfPath, fromSchedule, JOINT_PARAM, scheduleFormSchema, THICKNESS_FIELDS, thicknessMaterial, toScheduleInput, type ScheduleFormText, type ScheduleFormValues, type ThicknessField } from './schedule-form-values';
 
 const SLIDE_LABELS = { 'side-mount': 'Side-mount slides', undermount: 'Undermount slides', 'wooden-runners': 'Wooden runners', none: 'No slides' } as const;
 const ROLE_NAMES = { front: 'Front', back: 'Back', side: 'Side', bottom: 'Bottom', 'applied-front': 'Applied front' } as const;
@@ -24,18 +28,17 @@ const ROLE_NAMES = { front: 'Front', back: 'Back', side: 'Side', bottom: 'Bottom
  * A drawer schedule's form over lib/joinery: every change re-sizes the box at once (preview, parts, setup cards,
  * warnings); saving replaces the schedule's rows in the cut list.
  */
-export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: string; units: ShopUnits; cards: SetupCard[]; editing: { id: string; input: DrawerSchedule } | null; onDone: () => void }) {
+export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: { jobId: string; units: ShopUnits; cards: SetupCard[]; offers: StockOffer[]; editing: { id: string; input: DrawerSchedule } | null; onDone: () => void }) {
   const unit = shopLengthUnit(units);
   const schema = useMemo(() => scheduleFormSchema(unit), [unit]);
   const form = useForm<ScheduleFormText, unknown, ScheduleFormValues>({
     resolver: zodResolver(schema),
-    defaultValues: editing ? fromSchedule(editing.input, units) : emptySchedule(units),
+    defaultValues: editing ? fromSchedule(editing.input, units) : emptySchedule(units, offers),
     mode: 'onBlur',
   });
-  const { register, handleSubmit, formState, setError, control } = form;
+  const { register, handleSubmit, formState, setError, control, setValue } = form;
   const values = useWatch({ control });
   const qc = useQueryClient();
-  const materials = useMaterials();
 
   // Live sizing on whatever parses so far.
   const live = useMemo(() => {
@@ -61,12 +64,12 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
     },
   });
 
-  const field = (name: keyof ScheduleFormText, label: string, opts: { placeholder?: string; hint?: string } = {}) => {
+  const field = (name: keyof ScheduleFormText, label: string, opts: { placeholder?: string; hint?: string; list?: string } = {}) => {
     const message = formState.errors[name]?.message ?? liveErrors.get(name);
     return (
       <div>
         <label htmlFor={`ds-${name}`} className="field-label">{label}</label>
-        <input id={`ds-${name}`} className="field-input" placeholder={opts.placeholder} aria-invalid={message ? true : undefined} {...register(name)} />
+        <input id={`ds-${name}`} className="field-input" placeholder={opts.placeholder} list={opts.list} aria-invalid={message ? true : undefined} {...register(name)} />
         {message ? <p className="field-error">{message}</p> : opts.hint ? <p className="mt-1 text-xs text-graphite-mute">{opts.hint}</p> : null}
       </div>
     );
@@ -80,13 +83,46 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
       {(formState.errors[name]?.message ?? liveErrors.get(name)) && <p className="field-error">{formState.errors[name]?.message ?? liveErrors.get(name)}</p>}
     </div>
   );
+  // Each thickness is picked from the stock room's sheets and boards of its part's material, so the joints are sized
+  // on the stock that will be cut (12 mm Baltic birch, not ½″).
+  const materialOf = (name: ThicknessField, v: Partial<ScheduleFormText> = values) => thicknessMaterial(name, v);
+  const setText = (name: keyof ScheduleFormText, text: string) => setValue(name, text, { shouldValidate: true, shouldDirty: true });
+  const snapTyped = (name: ThicknessField, text: string) => {
+    const parsed = parseLength(text, { unit });
+    if (!parsed.ok) return;
+    const snapped = snapThickness(materialOf(name), parsed.mm, offers);
+    if (snapped !== parsed.mm) setText(name, exactLengthText(snapped, units));
+  };
+  const thickness = (name: ThicknessField, label: string, sameAs?: string) => (
+    <ThicknessPicker
+      id={`ds-${name}`}
+      label={label}
+      value={String(values[name] ?? '')}
+      onChange={(text) => setText(name, text)}
+      onTyped={(text) => snapTyped(name, text)}
+      choices={thicknessChoices(materialOf(name), offers, units)}
+      unit={unit}
+      sameAs={sameAs}
+      error={formState.errors[name]?.message ?? liveErrors.get(name)}
+    />
+  );
+  // A material changed: each thickness moves to that material's stock of the nearest size, when it has one.
+  const lastMaterials = useRef(THICKNESS_FIELDS.map((f) => materialOf(f)));
+  useEffect(() => {
+    const now = THICKNESS_FIELDS.map((f) => materialOf(f, values));
+    THICKNESS_FIELDS.forEach((f, i) => {
+      if (now[i].trim().toLowerCase() !== lastMaterials.current[i].trim().toLowerCase() && values[f]) snapTyped(f, String(values[f]));
+    });
+    lastMaterials.current = now;
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- runs when a material changes, not on every keystroke
+  }, [values.sidesMaterial, values.frontMaterial, values.bottomMaterial]);
+
   const param = JOINT_PARAM[values.jointMethod ?? 'lock-rabbet'];
   const len = (mm: number) => formatLength(mm, units);
   const sized = live?.sized.ok ? live.sized : null;
   const bottom = sized?.parts.find((p) => p.role === 'bottom');
   const movement = live && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
   const cardKeys = sized?.setupCardKeys ?? [];
-  const offers = materials.data ?? [];
   // Joints are sized on the thickness given: stock of another actual thickness would not fit them.
   const stockWarnings = sized && offers.length ? [...new Set(sized.parts.flatMap((p) => stockMatchWarning(p, offers, units) ?? []))] : [];
 
@@ -105,14 +141,15 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
           {select('jointMethod', 'Joint', Object.fromEntries(JOINT_METHODS.map((m) => [m, JOINT_NAMES[m]])))}
           {param ? field('jointParam', param.label, { placeholder: len(param.defaultMm), hint: `Blank: ${len(param.defaultMm)}.` }) : <div />}
           {select('frontStyle', 'Box front', { flush: 'Flush (the box front is the face)', lipped: 'Lipped', applied: 'Applied front (overlay)' })}
-          {field('frontThickness', 'Front and back thickness')}
-          {field('sideThickness', 'Side thickness')}
-          {field('backThickness', 'Back thickness', { placeholder: 'same as front' })}
-          {field('sidesMaterial', 'Box material')}
-          {field('frontMaterial', 'Front material', { placeholder: 'same as box' })}
+          {field('sidesMaterial', 'Box material', { list: 'ds-materials' })}
+          {field('frontMaterial', 'Front and back material', { placeholder: 'same as box', list: 'ds-materials' })}
+          {thickness('frontThickness', 'Front and back thickness')}
+          {thickness('sideThickness', 'Side thickness')}
+          {thickness('backThickness', 'Back thickness', 'Same as the front')}
           {select('bottomMount', 'Bottom', { groove: 'In a groove', applied: 'Applied under the box' })}
-          {field('bottomThickness', 'Bottom thickness')}
-          {field('bottomMaterial', 'Bottom material', { hint: 'A species name (white oak, cherry…) means a solid bottom: its movement is checked.' })}
+          {field('bottomMaterial', 'Bottom material', { list: 'ds-materials', hint: 'A species name (white oak, cherry…) means a solid bottom: its movement is checked.' })}
+          {thickness('bottomThickness', 'Bottom thickness')}
+          <datalist id="ds-materials">{[...new Set(offers.map((o) => o.material))].sort().map((m) => <option key={m} value={m} />)}</datalist>
         </div>
 
         <div className="space-y-4" aria-live="polite">
@@ -149,6 +186,7 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
                 <div role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">
                   <p className="font-medium">Check the stock: the joints are sized on the thicknesses above.</p>
                   <ul className="list-disc pl-5">{stockWarnings.map((w) => <li key={w}>{w}</li>)}</ul>
+                  <p className="mt-1"><Link href="/stock">Open the stock room</Link></p>
                 </div>
               )}
               {movement && <p role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">Wood movement: {movement}</p>}
@@ -156,7 +194,7 @@ export function ScheduleForm({ jobId, units, cards, editing, onDone }: { jobId: 
                 <h4 className="text-sm font-semibold">Setup cards this schedule needs</h4>
                 {cardKeys.map((key) => {
                   const saved = findSetupCard(cards, key);
-                  const fallback = findSetupCard(DEFAULT_LOCK_RABBET_CARDS, key);
+                  const fallback = defaultSetupCard(key);
                   const card = saved ?? fallback ?? { ...key, fields: [], note: 'Save the settings for this joint on the Setup cards page.' };
                   return <SetupCardView key={`${key.joint}-${key.stockThicknessMm}`} card={card} units={units} source={saved ? 'saved' : fallback ? 'default' : 'missing'} />;
                 })}

@@ -2,7 +2,7 @@ import { and, desc, eq, inArray, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { offcuts, plans, stockItems, stockMovements } from '../schema';
 import { readPlan } from '@/lib/nesting';
-import { takeoffLines, type TakeoffSize } from '@/lib/stock/takeoff';
+import { takeoff, type TakeoffSize } from '@/lib/stock/takeoff';
 import { costEachCents, stockRef } from './nest-request';
 import { getShopSettings } from './shops';
 
@@ -17,8 +17,8 @@ export async function takeoffPlans(db: Db, shopId: string, jobId: string) {
 
 /**
  * The material check before a quote, for one of a job's plans (the latest unless one is named; cancelled ones
- * aside): what to pull, what to buy, board feet or area, cost with the shop's waste factor, whether the stock room
- * covers it now, and any part not placed.
+ * aside): what to pull, what to buy, board feet or area, cost, the spoilage allowance once per material, whether
+ * the stock room covers it now, and any part not placed.
  */
 export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?: string) {
   const [row] = await db
@@ -30,7 +30,6 @@ export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?:
   if (!row) return null;
   const plan = readPlan(row.document);
   const settings = await getShopSettings(db, shopId);
-  const waste = (settings?.wastePercent ?? 0) / 100;
 
   const counts = new Map<string, number>();
   for (const p of plan.pieces) counts.set(p.stockId, (counts.get(p.stockId) ?? 0) + 1);
@@ -56,8 +55,8 @@ export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?:
     const piece = plan.pieces.find((p) => p.stockId === key)!;
     if (ref?.source === 'offcut') {
       const o = rack.find((r) => r.id === ref.id);
-      const available = o ? (o.status === 'available' ? 1 : 0) + heldFor(o.id) : 0;
-      sizes.push({ stockId: key, source: 'offcut', kind: 'offcut', material: piece.material, nominalThickness: '', thicknessMm: piece.thickness, lengthMm: piece.length, widthMm: piece.width, count, costEachCents: o?.costCents ?? 0, availableNow: available });
+      const free = o?.status === 'available' ? 1 : 0;
+      sizes.push({ stockId: key, source: 'offcut', kind: 'offcut', material: piece.material, nominalThickness: '', thicknessMm: piece.thickness, lengthMm: piece.length, widthMm: piece.width, count, costEachCents: o?.costCents ?? 0, free, heldByPlan: o ? heldFor(o.id) : 0 });
       continue;
     }
     const item = ref && items.find((i) => i.id === ref.id);
@@ -76,16 +75,18 @@ export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?:
       widthMm: item.widthMm,
       count,
       costEachCents: costEachCents(item),
-      availableNow: item.onHand - item.reserved + heldFor(item.id),
+      free: item.onHand - item.reserved,
+      heldByPlan: heldFor(item.id),
     });
   }
-  const { lines, totals } = takeoffLines(sizes, waste);
+  const { lines, allowances, totals } = takeoff(sizes, settings?.wastePercent ?? 0);
   return {
     plan: { id: row.id, name: row.name, status: row.status, createdAt: row.createdAt },
-    wastePercent: settings?.wastePercent ?? 0,
+    allowancePercent: settings?.wastePercent ?? 0,
+    allowances,
     pull: lines.filter((l) => l.source !== 'buy'),
     buy: lines.filter((l) => l.source === 'buy'),
-    totals: { ...totals, covered: totals.covered && missing.length === 0 },
+    totals: { ...totals, covered: totals.covered && missing.length === 0, coveredReady: totals.coveredReady && missing.length === 0 },
     unplaced: plan.unplaced,
     /** Sizes the plan names that are no longer in the stock room: re-nest. */
     gone: missing,

@@ -1,4 +1,4 @@
-import { formatLength } from '@/lib/units/format-length';
+import { exactLengthText } from './exact-length';
 import { parseLength } from '@/lib/units/parse-length';
 import type { UploadReport } from './validate-rows';
 import type { ShopUnits } from '@/shared/schemas/units';
@@ -46,13 +46,53 @@ export function snapThickness(material: string, thicknessMm: number, offers: rea
   return best ? best.mm : thicknessMm;
 }
 
-/** A warning when nothing in the stock room matches the part's material and thickness; null when something does. */
+/** One thickness the stock room has in a material, as a picker offers it. */
+export interface ThicknessChoice {
+  thicknessMm: number;
+  /** Text that reads back to exactly this thickness (for a length field). */
+  text: string;
+  /** "3/4″ sheet · 18 mm actual", "4/4 board · 13/16″ actual", "offcuts · 6 mm". */
+  label: string;
+}
+
+const KIND_NAMES = { sheet: 'sheet', board: 'board', offcut: 'offcuts' } as const;
+
+/** A nominal thickness as the stock room wrote it ("3/4\"", "4/4"), with typeset inch and foot marks. */
+export const typesetNominal = (nominal: string) => nominal.trim().replace(/"/g, '″').replace(/'/g, '′');
+
+/**
+ * Every thickness the stock room has in a material, thinnest first, each named as the shop buys it (its nominal
+ * thickness and kind) with the actual size it is sized and nested on. Offcuts name a thickness only when no sheet or
+ * board of it is kept.
+ */
+export function thicknessChoices(material: string, offers: readonly StockOffer[], units: ShopUnits): ThicknessChoice[] {
+  const byThickness = new Map<number, StockOffer[]>();
+  for (const o of offersOf(offers, material)) {
+    const key = [...byThickness.keys()].find((t) => Math.abs(t - o.thicknessMm) <= THICKNESS_MATCH_TOLERANCE_MM) ?? o.thicknessMm;
+    byThickness.set(key, [...(byThickness.get(key) ?? []), o]);
+  }
+  return [...byThickness.entries()]
+    .sort(([a], [b]) => a - b)
+    .map(([thicknessMm, group]) => {
+      const text = exactLengthText(thicknessMm, units);
+      const bought = group.filter((o) => o.kind !== 'offcut');
+      const names = [...new Set(bought.map((o) => (o.nominal.trim() ? `${typesetNominal(o.nominal)} ${KIND_NAMES[o.kind]}` : KIND_NAMES[o.kind])))];
+      const label = names.length ? `${names.join(', ')} · ${text} actual` : `offcuts · ${text}`;
+      return { thicknessMm, text, label };
+    });
+}
+
+/**
+ * A warning when nothing in the stock room matches the part's material and thickness, naming what it does have;
+ * null when something matches (the nesting engine's 0.01 mm).
+ */
 export function stockMatchWarning(part: { material: string; thicknessMm: number }, offers: readonly StockOffer[], units: ShopUnits): string | null {
-  const material = offersOf(offers, part.material);
-  if (material.length === 0) return `Nothing in the stock room is “${part.material.trim()}”: it will have to be bought or added to the stock room.`;
-  if (material.some((o) => Math.abs(o.thicknessMm - part.thicknessMm) <= THICKNESS_MATCH_TOLERANCE_MM)) return null;
-  const have = [...new Set(material.map((o) => formatLength(o.thicknessMm, units)))].join(', ');
-  return `The stock room has ${material[0].material} in ${have}, not ${formatLength(part.thicknessMm, units)}.`;
+  const name = part.material.trim();
+  const choices = thicknessChoices(name, offers, units);
+  if (choices.length === 0) return `The stock room has no ${name} at all: add it there before nesting, or pick a material it has.`;
+  if (choices.some((c) => Math.abs(c.thicknessMm - part.thicknessMm) <= THICKNESS_MATCH_TOLERANCE_MM)) return null;
+  const have = choices.map((c) => c.label).join('; ');
+  return `The stock room has no ${name} ${exactLengthText(part.thicknessMm, units)} thick. It has: ${have}. Pick one of those, or add this thickness to the stock room before nesting.`;
 }
 
 /** Solid wood is what the stock room holds as boards (sold by the board foot). */

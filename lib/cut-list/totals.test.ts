@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { inches } from '@/lib/units/length';
-import { snapThickness, stockMatchWarning, type StockOffer } from './stock-match';
+import { snapThickness, stockMatchWarning, thicknessChoices, type StockOffer } from './stock-match';
 import { cutListTotals } from './totals';
 
 const OFFERS: StockOffer[] = [
@@ -37,13 +37,42 @@ describe('matching a part to the stock room', () => {
     ['Maple ply', inches(23 / 32), null],
     ['maple PLY', inches(23 / 32) + 0.005, null],
     ['Maple ply', 6, null],
-    ['Maple ply', inches(3 / 4), 'The stock room has Maple ply in'],
-    ['Maple ply', 12, 'The stock room has Maple ply in'],
-    ['Walnut', 19, 'Nothing in the stock room is “Walnut”'],
+    ['Maple ply', inches(3 / 4), 'The stock room has no Maple ply 3/4″ thick. It has: offcuts · 6 mm; 3/4″ sheet · 23/32″ actual.'],
+    ['Maple ply', 12, 'The stock room has no Maple ply 12 mm thick. It has: offcuts · 6 mm; 3/4″ sheet · 23/32″ actual.'],
+    ['Walnut', 19, 'The stock room has no Walnut at all'],
   ] as const)('%s at %f mm → %s (the nesting engine’s 0.01 mm match)', (material, thicknessMm, warning) => {
     const result = stockMatchWarning({ material, thicknessMm }, OFFERS, UNITS);
     if (warning === null) expect(result).toBeNull();
     else expect(result).toContain(warning);
+  });
+
+  test('the warning never says the stock room has a thickness it says the part is not (a rounded ≈ size)', () => {
+    // Stock at 12 mm and a part at ½″ (12.7 mm): both would show as ≈1/2″ to the sixteenth.
+    const offers: StockOffer[] = [{ material: 'Baltic birch', kind: 'sheet', thicknessMm: 12, nominal: '1/2"' }];
+    const warning = stockMatchWarning({ material: 'Baltic birch', thicknessMm: inches(1 / 2) }, offers, UNITS)!;
+    expect(warning).toContain('no Baltic birch 1/2″ thick');
+    expect(warning).toContain('1/2″ sheet · 12 mm actual');
+    expect(warning).not.toContain('≈');
+  });
+});
+
+describe('the thicknesses a picker offers', () => {
+  test('one choice per actual thickness, thinnest first, named by nominal thickness and kind, with the actual size', () => {
+    const offers: StockOffer[] = [
+      { material: 'Baltic birch', kind: 'sheet', thicknessMm: 18, nominal: '3/4"' },
+      { material: 'Baltic birch', kind: 'sheet', thicknessMm: 12, nominal: '1/2"' },
+      { material: 'baltic birch', kind: 'offcut', thicknessMm: 12, nominal: '' },
+      { material: 'Baltic birch', kind: 'offcut', thicknessMm: 9, nominal: '' },
+      { material: 'Maple ply', kind: 'sheet', thicknessMm: 6, nominal: '1/4"' },
+    ];
+    expect(thicknessChoices('Baltic birch', offers, UNITS)).toEqual([
+      { thicknessMm: 9, text: '9 mm', label: 'offcuts · 9 mm' },
+      { thicknessMm: 12, text: '12 mm', label: '1/2″ sheet · 12 mm actual' },
+      { thicknessMm: 18, text: '18 mm', label: '3/4″ sheet · 18 mm actual' },
+    ]);
+    // 23/32″ is on the 1/32″ grid, so an imperial shop reads it as a fraction (common practice, no source).
+    expect(thicknessChoices('Maple ply', OFFERS, UNITS).map((c) => c.text)).toEqual(['6 mm', '23/32″']);
+    expect(thicknessChoices('Walnut', offers, UNITS)).toEqual([]);
   });
 });
 

@@ -2,7 +2,7 @@ import { describe, expect, test } from 'vitest';
 import { inches } from '@/lib/units/length';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { setupCardSchema } from '@/shared/schemas/setup-card';
-import { DEFAULT_LOCK_RABBET_CARDS, findSetupCard, requiredSetupCards } from '@/lib/joinery/setup-cards';
+import { DEFAULT_LOCK_RABBET_CARDS, defaultSetupCard, findSetupCard, requiredSetupCards } from '@/lib/joinery/setup-cards';
 
 const schedule = (over: object) =>
   drawerScheduleSchema.parse({ label: 'S', quantity: 1, size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, ...over });
@@ -50,6 +50,20 @@ describe('which setup cards a schedule needs', () => {
     expect(findSetupCard(cards, { joint: 'lock-rabbet', stockThicknessMm: 12.75 })?.stockThicknessMm).toBeCloseTo(inches(1 / 2), 9);
     expect(findSetupCard(cards, { joint: 'lock-rabbet', stockThicknessMm: 15 })).toBeUndefined();
     expect(findSetupCard(cards, { joint: 'box-joint', stockThicknessMm: inches(1 / 2) })).toBeUndefined();
+  });
+});
+
+describe('the default card for stock the shop has no card for', () => {
+  test('12 mm stock starts from the ½″ card and 18 mm from the ¾″ one, shown at the actual thickness (common practice, no source)', () => {
+    const twelve = defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 12 })!;
+    expect(twelve.stockThicknessMm).toBe(12);
+    expect(twelve.fields.find((f) => f.key === 'fence-setback')!.value).toBeCloseTo(inches(5 / 16), 9);
+    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 18 })!.fields.find((f) => f.key === 'fence-setback')!.value).toBeCloseTo(inches(7 / 16), 9);
+  });
+
+  test('stock far from every default, or another joint, has no default card', () => {
+    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 15.5 })).toBeUndefined();
+    expect(defaultSetupCard({ joint: 'box-joint', stockThicknessMm: 12 })).toBeUndefined();
   });
 });
 

@@ -35,3 +35,16 @@ export const DEFAULT_LOCK_RABBET_CARDS: readonly SetupCard[] = [
   lockRabbetCard(inches(1 / 2), inches(5 / 16)),
   lockRabbetCard(inches(3 / 4), inches(7 / 16)),
 ];
+
+/**
+ * A default card covers stock within this much of its thickness: metric 12 mm and ½″ (12.7 mm) stock, or 18 mm and
+ * ¾″, start from the same setup and are tuned with test cuts (common practice, no source).
+ */
+export const DEFAULT_CARD_REACH_MM = 1.1;
+
+/** The starting card for a key when the shop has saved none: the nearest default within reach, set to the key's stock. */
+export function defaultSetupCard(key: SetupCardKey): SetupCard | undefined {
+  const near = DEFAULT_LOCK_RABBET_CARDS.filter((c) => c.joint === key.joint && Math.abs(c.stockThicknessMm - key.stockThicknessMm) <= DEFAULT_CARD_REACH_MM);
+  const nearest = near.sort((a, b) => Math.abs(a.stockThicknessMm - key.stockThicknessMm) - Math.abs(b.stockThicknessMm - key.stockThicknessMm))[0];
+  return nearest && { ...nearest, stockThicknessMm: key.stockThicknessMm };
+}

@@ -1,5 +1,4 @@
 import { boardFeet } from '@/lib/lumber/board-feet';
-import { buyQuantity } from '@/lib/lumber/buy-quantity';
 
 /** One stock size a plan uses, as the estimator reads it before quoting. */
 export interface TakeoffSize {
@@ -14,8 +13,10 @@ export interface TakeoffSize {
   /** Pieces the plan lays parts on. */
   count: number;
   costEachCents: number;
-  /** Free now (on hand less other plans' reservations), counting what this plan already holds. */
-  availableNow: number;
+  /** Free in the stock room now: on hand less every reservation (the Stock room's "free"). */
+  free: number;
+  /** Pieces of this size this plan already holds (reserved by its release). */
+  heldByPlan: number;
 }
 
 export interface TakeoffLine extends TakeoffSize {
@@ -23,11 +24,39 @@ export interface TakeoffLine extends TakeoffSize {
   boardFeet: number | null;
   areaMm2: number;
   costCents: number;
-  /** Pieces to have ready with the shop's waste factor: count / (1 − waste), rounded up to whole pieces. */
-  withWaste: number;
-  costWithWasteCents: number;
+  /** The stock room can give the plan its pieces: free now plus what the plan already holds. */
   covered: boolean;
-  coveredWithWaste: boolean;
+}
+
+/**
+ * The spoilage allowance for one material and thickness: extra material for parts spoiled at the saw and for
+ * defects, taken once on the job's material (never per line), then rounded up to whole pieces to have ready.
+ */
+export interface MaterialAllowance {
+  material: string;
+  thicknessMm: number;
+  /** 'area' for sheet goods (mm²), 'boardFeet' for lumber. */
+  measure: 'area' | 'boardFeet';
+  /** The plan's material of this kind: stock pieces and offcuts. */
+  amount: number;
+  /** amount × the allowance fraction. */
+  allowance: number;
+  costCents: number;
+  /** costCents × the allowance fraction, to the cent. */
+  allowanceCents: number;
+  /** The size extra pieces would be cut from: the plan's most used stock size (null when it uses only offcuts). */
+  stockId: string | null;
+  /** Stock pieces of that size the plan uses, and how many to have ready with the allowance (whole pieces). */
+  pieces: number;
+  piecesReady: number;
+  /** The stock room has the pieces to have ready (free now plus what the plan holds). */
+  coveredReady: boolean;
+}
+
+export interface Takeoff {
+  lines: TakeoffLine[];
+  allowances: MaterialAllowance[];
+  totals: { costCents: number; allowanceCents: number; costWithAllowanceCents: number; boardFeet: number; areaMm2: number; covered: boolean; coveredReady: boolean };
 }
 
 const QUARTERS = /^\s*(\d+)\s*\/\s*4\s*$/;
@@ -38,33 +67,68 @@ export function pieceBoardFeet(size: Pick<TakeoffSize, 'nominalThickness' | 'thi
   return boardFeet({ thickness: q ? { quarters: Number(q[1]) } : { mm: size.thicknessMm }, widthMm: size.widthMm, lengthMm: size.lengthMm });
 }
 
+/** Whole pieces, with float crumbs (2.0000000001) not rounded up to another piece. */
+const wholePiecesUp = (pieces: number) => Math.ceil(pieces - 1e-9);
+
+function allowanceFor(group: TakeoffLine[], fraction: number): MaterialAllowance {
+  const measure = group.some((l) => l.kind === 'board') ? 'boardFeet' : 'area';
+  const amountOf = (l: TakeoffLine) => (measure === 'boardFeet' ? (l.boardFeet ?? pieceBoardFeet(l) * l.count) : l.areaMm2);
+  const amount = group.reduce((n, l) => n + amountOf(l), 0);
+  const costCents = group.reduce((n, l) => n + l.costCents, 0);
+  const main = group.filter((l) => l.kind !== 'offcut').sort((a, b) => b.count - a.count)[0];
+  const allowance = amount * fraction;
+  const perPiece = main ? amountOf(main) / main.count : 0;
+  const piecesReady = main ? main.count + wholePiecesUp(allowance / perPiece) : 0;
+  return {
+    material: group[0].material,
+    thicknessMm: group[0].thicknessMm,
+    measure,
+    amount,
+    allowance,
+    costCents,
+    allowanceCents: Math.round(costCents * fraction),
+    stockId: main?.stockId ?? null,
+    pieces: main?.count ?? 0,
+    piecesReady,
+    coveredReady: main ? main.free + main.heldByPlan >= piecesReady : true,
+  };
+}
+
 /**
- * Figures for each size: board feet or area, cost at the plan's count, and with the waste factor (a fraction of what
- * is bought: buy = need / (1 − waste), `lib/lumber` buyQuantity). Offcuts already on the rack are not re-bought, so
- * they carry no allowance. Covered = the stock room has that many free now; a bought size counts its free stock too.
+ * The takeoff of a plan: each size with board feet or area, cost and cover, then the spoilage allowance once per
+ * material and thickness. A nested plan already counts exactly the pieces its parts are laid on, so the allowance
+ * is only for spoiled parts and defects: `allowance` % of the material's area (sheets) or board feet (lumber), priced
+ * at the same share of its cost, and rounded up to whole pieces of its main size to have ready. With a 15 %
+ * allowance one sheet stays one sheet in cost ($100.00 → $115.00), and two sheets are ready.
  */
-export function takeoffLines(sizes: TakeoffSize[], waste: number): { lines: TakeoffLine[]; totals: { costCents: number; costWithWasteCents: number; boardFeet: number; areaMm2: number; covered: boolean } } {
-  const lines = sizes.map((s): TakeoffLine => {
-    const withWaste = s.kind === 'offcut' ? s.count : buyQuantity(s.count, waste).buy;
-    return {
-      ...s,
-      boardFeet: s.kind === 'board' ? pieceBoardFeet(s) * s.count : null,
-      areaMm2: s.lengthMm * s.widthMm * s.count,
-      costCents: s.costEachCents * s.count,
-      withWaste,
-      costWithWasteCents: s.costEachCents * withWaste,
-      covered: s.availableNow >= s.count,
-      coveredWithWaste: s.availableNow >= withWaste,
-    };
-  });
+export function takeoff(sizes: TakeoffSize[], allowancePercent: number): Takeoff {
+  const fraction = allowancePercent / 100;
+  const lines = sizes.map((s): TakeoffLine => ({
+    ...s,
+    boardFeet: s.kind === 'board' ? pieceBoardFeet(s) * s.count : null,
+    areaMm2: s.lengthMm * s.widthMm * s.count,
+    costCents: s.costEachCents * s.count,
+    covered: s.free + s.heldByPlan >= s.count,
+  }));
+  const groups = new Map<string, TakeoffLine[]>();
+  for (const l of lines) {
+    const key = `${l.material.trim().toLowerCase()}|${Math.round(l.thicknessMm * 100)}`;
+    groups.set(key, [...(groups.get(key) ?? []), l]);
+  }
+  const allowances = [...groups.values()].map((g) => allowanceFor(g, fraction));
+  const costCents = lines.reduce((n, l) => n + l.costCents, 0);
+  const allowanceCents = allowances.reduce((n, a) => n + a.allowanceCents, 0);
   return {
     lines,
+    allowances,
     totals: {
-      costCents: lines.reduce((n, l) => n + l.costCents, 0),
-      costWithWasteCents: lines.reduce((n, l) => n + l.costWithWasteCents, 0),
+      costCents,
+      allowanceCents,
+      costWithAllowanceCents: costCents + allowanceCents,
       boardFeet: lines.reduce((n, l) => n + (l.boardFeet ?? 0), 0),
       areaMm2: lines.reduce((n, l) => n + (l.kind === 'board' ? 0 : l.areaMm2), 0),
       covered: lines.every((l) => l.covered),
+      coveredReady: allowances.every((a) => a.coveredReady),
     },
   };
 }

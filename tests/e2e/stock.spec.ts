@@ -89,7 +89,7 @@ test('the estimator reads the takeoff for the kitchen; a cutter may not', async 
   if (await picker.count()) await picker.getByRole('link', { name: /^Carcasses and backs/ }).click();
   await expect(page.getByRole('heading', { name: /Takeoff for “Carcasses and backs”/ })).toBeVisible();
   await expect(page.getByRole('table', { name: 'Pull from stock' }).getByTestId('takeoff-line').first()).toContainText('Maple ply');
-  await expect(page.getByTestId('takeoff-total-waste')).toContainText('$');
+  await expect(page.getByTestId('takeoff-total-allowance')).toContainText('$');
   await expect(page.getByTestId('takeoff-covered')).toContainText(/cover it now/);
   await shot(page, 'takeoff-estimator');
 

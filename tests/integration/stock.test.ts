@@ -5,7 +5,6 @@ import { useDatabase } from '@/db/client';
 import { offcuts, plans, stockItems } from '@/db/schema';
 import { adjustStock, createStockItem, ledgerMismatches, listMovements, listOffcuts, listStock, receiveStock, recordOffcut, scrapOffcut, stockValue } from '@/db/queries/stock';
 import { finishPlan } from '@/db/queries/plan-lifecycle';
-import { getTakeoff } from '@/db/queries/takeoff';
 import { listYieldLedger } from '@/db/queries/stock-yield';
 import { seedDemoShop } from '@/seeds/demo-shop';
 import { stockItemSchema } from '@/shared/schemas/stock';
@@ -138,17 +137,3 @@ describe('importing stock from CSV', () => {
   });
 });
 
-describe('the takeoff', () => {
-  test("for the demo kitchen: sheets to pull, their cost with the shop's 15 % waste, and whether the rack covers it", async () => {
-    const [kitchen] = await db.select().from(plans).where(eq(plans.shopId, demoShop));
-    const takeoff = (await getTakeoff(db, demoShop, kitchen.jobId))!;
-    expect(takeoff.wastePercent).toBe(15);
-    expect(takeoff.pull.length + takeoff.buy.length).toBeGreaterThan(0);
-    for (const line of [...takeoff.pull, ...takeoff.buy]) {
-      expect(line.costCents).toBe(line.costEachCents * line.count);
-      // derived: buy = need / (1 − waste), whole pieces
-      if (line.kind !== 'offcut') expect(line.withWaste).toBe(Math.ceil(line.count / 0.85 - 1e-9));
-    }
-    expect(await getTakeoff(db, fx.mine.id, kitchen.jobId)).toBeNull();
-  });
-});

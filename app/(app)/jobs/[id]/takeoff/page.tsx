@@ -7,7 +7,7 @@ import { getShopSettings } from '@/db/queries/shops';
 import { getTakeoff, takeoffPlans } from '@/db/queries/takeoff';
 import { CancelPlanButton } from '@/components/stock/cancel-plan-button';
 import { ReleasePlanButton } from '@/components/stock/release-plan-button';
-import { TakeoffTable } from '@/components/takeoff/takeoff-table';
+import { AllowanceTable, TakeoffTable } from '@/components/takeoff/takeoff-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FigureCard as Figure } from '@/components/ui/figure-card';
 import { StatusBadge } from '@/components/ui/status-badge';
@@ -67,8 +67,9 @@ export default async function TakeoffPage({ params, searchParams }: { params: Pr
             Takeoff for “{takeoff.plan.name}” <StatusBadge tone={takeoff.plan.status === 'draft' ? 'neutral' : 'accent'}>{takeoff.plan.status}</StatusBadge>
           </h2>
           <p className="mt-1 max-w-2xl text-sm text-graphite-mute">
-            From the job’s latest plan (or the one picked above): the stock it lays parts on, priced at cost. The waste allowance ({takeoff.wastePercent} %, shop settings) is what to have ready:
-            pieces ÷ (1 − waste), rounded up.
+            From the job’s latest plan (or the one picked above): every sheet and board its parts are laid on, priced at cost. The spoilage allowance ({takeoff.allowancePercent} %, Shop settings)
+            covers parts spoiled at the saw and defects in the stock: it is taken once on each material’s area or board feet, priced at that share of its cost, and rounded up to whole pieces
+            to have ready.
           </p>
         </div>
         {takeoff.plan.status === 'draft' && can(user.role, 'plans:release') && <ReleasePlanButton planId={takeoff.plan.id} describe={describe} />}
@@ -77,16 +78,24 @@ export default async function TakeoffPage({ params, searchParams }: { params: Pr
 
       <div className="mb-6 grid gap-3 sm:grid-cols-4">
         <Figure label="Material cost" value={money(totals.costCents)} />
-        <Figure label={`With ${takeoff.wastePercent} % waste`} value={money(totals.costWithWasteCents)} testId="takeoff-total-waste" />
+        <Figure label={`With the ${takeoff.allowancePercent} % allowance`} value={money(totals.costWithAllowanceCents)} testId="takeoff-total-allowance" />
         <Figure
           label={totals.boardFeet > 0 && totals.areaMm2 > 0 ? 'Sheet area · board feet' : totals.boardFeet > 0 ? 'Board feet' : 'Sheet area'}
           value={[totals.areaMm2 > 0 ? area(totals.areaMm2) : '', totals.boardFeet > 0 ? `${totals.boardFeet.toFixed(2)} bf` : ''].filter(Boolean).join(' · ') || '—'}
         />
-        <Figure label="Stock room" value={totals.covered ? 'Can cover it now' : 'Cannot cover it now'} tone={`font-sans text-lg ${totals.covered ? 'text-sage' : 'text-brick'}`} testId="takeoff-covered" />
+        <Figure
+          label="Stock room"
+          value={!totals.covered ? 'Cannot cover it now' : totals.coveredReady || takeoff.allowancePercent === 0 ? 'Can cover it now' : 'Can cover it now, not the allowance'}
+          tone={`font-sans text-lg ${!totals.covered ? 'text-brick' : totals.coveredReady ? 'text-sage' : 'text-amber'}`}
+          testId="takeoff-covered"
+        />
       </div>
 
-      {takeoff.pull.length > 0 && <TakeoffTable title="Pull from stock" lines={takeoff.pull} len={len} area={area} money={money} wastePercent={takeoff.wastePercent} />}
-      {takeoff.buy.length > 0 && <TakeoffTable title="To buy" lines={takeoff.buy} len={len} area={area} money={money} wastePercent={takeoff.wastePercent} />}
+      {takeoff.pull.length > 0 && <TakeoffTable title="Pull from stock" lines={takeoff.pull} len={len} area={area} money={money} />}
+      {takeoff.buy.length > 0 && <TakeoffTable title="To buy" lines={takeoff.buy} len={len} area={area} money={money} />}
+      {takeoff.allowancePercent > 0 && takeoff.allowances.length > 0 && (
+        <AllowanceTable allowances={takeoff.allowances} lines={[...takeoff.pull, ...takeoff.buy]} percent={takeoff.allowancePercent} len={len} area={area} money={money} />
+      )}
       {takeoff.gone.length > 0 && (
         <p className="field-error mb-4" role="alert">
           The plan uses stock no longer in the stock room ({takeoff.gone.join(', ')}). <Link href={`/jobs/${id.data}/plan`}>Nest again</Link>.

@@ -1,0 +1,49 @@
+import { describe, expect, test } from 'vitest';
+import { sizeDrawerSchedule } from '@/lib/joinery';
+import { stockMatchWarning, type StockOffer } from '@/lib/cut-list/stock-match';
+import { inches } from '@/lib/units/length';
+import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
+import { emptySchedule, scheduleFormSchema, toScheduleInput } from './schedule-form-values';
+
+const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
+
+/** Baltic birch as it is sold: metric sheets named by the nearest inch size (common practice, no source). */
+const BALTIC_BIRCH: StockOffer[] = [
+  { material: 'Baltic birch', kind: 'sheet', thicknessMm: 18, nominal: '3/4"' },
+  { material: 'Baltic birch', kind: 'sheet', thicknessMm: 12, nominal: '1/2"' },
+  { material: 'Baltic birch', kind: 'sheet', thicknessMm: 6, nominal: '1/4"' },
+];
+
+function sizeDefaults(offers: StockOffer[]) {
+  const text = { ...emptySchedule(IMPERIAL, offers), label: 'Base drawers', width: '14', height: '6', depth: '22' };
+  const values = scheduleFormSchema('in').parse(text);
+  const sized = sizeDrawerSchedule(drawerScheduleSchema.parse(toScheduleInput(values)));
+  if (!sized.ok) throw new Error(sized.errors.map((e) => e.message).join('; '));
+  return { text, sized };
+}
+
+describe('a new drawer schedule with the form’s defaults', () => {
+  test('takes ¾″, ½″ and ¼″ Baltic birch as the stock room’s 18, 12 and 6 mm sheets, so every part has stock', () => {
+    const { text, sized } = sizeDefaults(BALTIC_BIRCH);
+    expect([text.frontThickness, text.sideThickness, text.bottomThickness]).toEqual(['18 mm', '12 mm', '6 mm']);
+    expect(new Set(sized.parts.map((p) => p.thicknessMm))).toEqual(new Set([18, 12, 6]));
+    for (const part of sized.parts) expect(stockMatchWarning(part, BALTIC_BIRCH, IMPERIAL)).toBeNull();
+  });
+
+  test('sizes the joints on the actual stock: lock-rabbet sides are D − 2 × ⅛″ whatever the stock, the bottom spans 12 mm sides', () => {
+    const { sized } = sizeDefaults(BALTIC_BIRCH);
+    const side = sized.parts.find((p) => p.role === 'side')!;
+    const bottom = sized.parts.find((p) => p.role === 'bottom')!;
+    // Opening 22″ deep → the longest standard slide that fits behind ½″ clearance is 20″ (RULES.md), and the lock
+    // rabbet leaves ⅛″ of each front's face: side = 20 − 2 × ⅛ = 19¾″ (common practice, no source).
+    expect(side.lengthMm).toBeCloseTo(inches(19.75), 9);
+    // Inside width = box width − 2 × 12 mm; the bottom is inside + 2 × ¼″ groove depth − 1/16″ (RULES.md, bottom).
+    const boxWidth = inches(14) - 2 * inches(1 / 2);
+    expect(bottom.lengthMm).toBeCloseTo(boxWidth - 2 * 12 + 2 * inches(1 / 4) - inches(1 / 16), 9);
+  });
+
+  test('keeps the nominal thicknesses when the stock room has none of the material', () => {
+    const { text } = sizeDefaults([]);
+    expect([text.frontThickness, text.sideThickness, text.bottomThickness]).toEqual(['3/4″', '1/2″', '1/4″']);
+  });
+});
