@@ -174,7 +174,7 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
                       <td className="num">{p.quantity}</td>
                       <td className="num whitespace-nowrap">{len(p.lengthMm)}</td>
                       <td className="num whitespace-nowrap">{len(p.widthMm)}</td>
-                      <td className="num whitespace-nowrap">{len(p.thicknessMm)}</td>
+                      <td className="num whitespace-nowrap">{exactLengthText(p.thicknessMm, units)}</td>
                       <td>{p.material}</td>
                       <td className="num">{p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '—'}</td>
                     </tr>

@@ -1,6 +1,7 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
@@ -50,6 +51,7 @@ function NestForm({ jobId, shop, showPrices, offered }: { jobId: string; shop: S
   const unit = shopLengthUnit(shop.units);
   const schema = useMemo(() => settingsForm(unit), [unit]);
   const len = (mm: number) => formatLength(mm, shop.units);
+  const thick = (mm: number) => exactLengthText(mm, shop.units);
   const s = offered.settings ?? {};
   const shopDefaults = {
     kerf: s.kerf ?? shop.kerfMm,
@@ -113,7 +115,7 @@ function NestForm({ jobId, shop, showPrices, offered }: { jobId: string; shop: S
                 {g.stock.map((st) => (
                   <tr key={st.id}>
                     <td><input type="checkbox" value={st.id} aria-label={stockLabel(st, len)} {...form.register('stockIds')} /></td>
-                    <td>{len(st.thickness)} {st.material}{st.grain === 'none' ? ' (no grain)' : ''}</td>
+                    <td>{thick(st.thickness)} {st.material}{st.grain === 'none' ? ' (no grain)' : ''}</td>
                     <td className="num">{len(st.length)} × {len(st.width)}</td>
                     <td className="num">{st.count === null ? 'buy as needed' : `${st.count} on hand`}</td>
                     {showPrices && <td className="num">{formatMoney(Math.round(st.costEach ?? 0), shop.currency)}</td>}

@@ -1,6 +1,7 @@
 'use client';
 
 import { formatMoney } from '@/lib/money';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { formatArea } from '@/lib/units/format-area';
 import { formatLength } from '@/lib/units/format-length';
 import type { Plan } from '@/shared/schemas/nesting';
@@ -15,6 +16,7 @@ type StockLine = Plan['stockToPull'][number];
 export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan; units: ShopUnits; currency: string; showPrices: boolean }) {
   const t = plan.totals;
   const len = (mm: number) => formatLength(mm, units);
+  const thick = (mm: number) => exactLengthText(mm, units);
   const money = (c: number) => formatMoney(Math.round(c), currency);
   const stockTable = (lines: StockLine[], label: string) =>
     lines.length === 0 ? (
@@ -27,7 +29,7 @@ export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan;
         <tbody>
           {lines.map((l) => (
             <tr key={l.stockId}>
-              <td>{KIND[l.kind]} · {len(l.thickness)} {l.material}</td>
+              <td>{KIND[l.kind]} · {thick(l.thickness)} {l.material}</td>
               <td className="num whitespace-nowrap">{len(l.length)} × {len(l.width)}</td>
               <td className="num">{l.count}</td>
               {showPrices && <td className="num">{money(l.cost)}</td>}
@@ -52,7 +54,7 @@ export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan;
       {plan.cancelled && <p className="text-sm text-amber">Stopped early: this is the best plan found by then.</p>}
       {t && t.byMaterial.length > 0 && (
         <p className="text-sm text-graphite-soft">
-          {t.byMaterial.map((m) => `${m.pieces} × ${KIND[m.kind].toLowerCase()} ${len(m.thickness)} ${m.material}`).join(' · ')}
+          {t.byMaterial.map((m) => `${m.pieces} × ${KIND[m.kind].toLowerCase()} ${thick(m.thickness)} ${m.material}`).join(' · ')}
         </p>
       )}
       <div className="grid gap-4 lg:grid-cols-2">

@@ -10,10 +10,10 @@ const TONE: Record<Offcut['status'], Tone> = { available: 'good', reserved: 'acc
  * The offcut rack: one shelf per material and thickness, each offcut drawn to scale against the largest on its shelf,
  * so a glance says what is worth pulling first.
  */
-export function OffcutRack({ rack, len, money, canScrap }: { rack: Offcut[]; len: (mm: number) => string; money: ((cents: number) => string) | null; canScrap: boolean }) {
+export function OffcutRack({ rack, len, thick, money, canScrap }: { rack: Offcut[]; len: (mm: number) => string; thick: (mm: number) => string; money: ((cents: number) => string) | null; canScrap: boolean }) {
   const shelves = new Map<string, Offcut[]>();
   for (const o of rack) {
-    const key = `${o.material} · ${len(o.thicknessMm)}`;
+    const key = `${o.material} · ${thick(o.thicknessMm)}`;
     shelves.set(key, [...(shelves.get(key) ?? []), o]);
   }
   return (

@@ -21,7 +21,7 @@ const editable = (s: StockItemRow): EditableStock => ({
 });
 
 /** Sheets and boards with free, reserved and low-stock figures; prices and value only for those who may see them. */
-export function StockTable({ items, len, money, currency, canWrite }: { items: StockItemRow[]; len: (mm: number) => string; money: ((cents: number) => string) | null; currency: string; canWrite: boolean }) {
+export function StockTable({ items, len, thick, money, currency, canWrite }: { items: StockItemRow[]; len: (mm: number) => string; thick: (mm: number) => string; money: ((cents: number) => string) | null; currency: string; canWrite: boolean }) {
   return (
     <div className="card overflow-x-auto">
       <table className="data-table [&_td]:px-2 [&_th]:px-2" aria-label="Sheets and boards">
@@ -52,7 +52,7 @@ export function StockTable({ items, len, money, currency, canWrite }: { items: S
                 </td>
                 <td>
                   {s.nominalThickness}
-                  <span className="ml-1 text-xs text-graphite-mute">({len(s.thicknessMm)})</span>
+                  <span className="ml-1 text-xs text-graphite-mute">({thick(s.thicknessMm)})</span>
                 </td>
                 <td className="num whitespace-nowrap">{len(s.lengthMm)} × {len(s.widthMm)}</td>
                 <td className="num" data-testid="on-hand">{s.onHand}</td>

@@ -1,4 +1,5 @@
 import { StatusBadge } from '@/components/ui/status-badge';
+import { typesetNominal } from '@/lib/cut-list/stock-match';
 import type { MaterialAllowance, TakeoffLine } from '@/lib/stock/takeoff';
 
 interface Formatters {
@@ -34,7 +35,7 @@ export function TakeoffTable({ title, lines, len, area, money }: { title: string
             {lines.map((l) => (
               <tr key={l.stockId} data-testid="takeoff-line">
                 <td className="font-medium">
-                  {l.material} {l.nominalThickness || len(l.thicknessMm)}
+                  {l.material} {l.nominalThickness ? typesetNominal(l.nominalThickness) : len(l.thicknessMm)}
                   <span className="ml-1 text-xs text-graphite-mute">{l.kind}</span>
                 </td>
                 <td className="num whitespace-nowrap">{len(l.lengthMm)} × {len(l.widthMm)}</td>
@@ -75,7 +76,7 @@ export function AllowanceTable({ allowances, lines, percent, len, area, money }:
               const unit = main?.kind === 'board' ? 'boards' : 'sheets';
               return (
                 <tr key={`${a.material}|${a.thicknessMm}`} data-testid="allowance-line">
-                  <td className="font-medium">{a.material} {main?.nominalThickness || len(a.thicknessMm)}</td>
+                  <td className="font-medium">{a.material} {main?.nominalThickness ? typesetNominal(main.nominalThickness) : len(a.thicknessMm)}</td>
                   <td className="num whitespace-nowrap">{amount(a, a.amount)}</td>
                   <td className="num whitespace-nowrap">{amount(a, a.allowance)}</td>
                   <td className="num">{money(a.allowanceCents)}</td>

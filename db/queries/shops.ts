@@ -22,6 +22,8 @@ export async function getShopSettings(db: Db, shopId: string): Promise<ShopSetti
 }
 
 export async function updateShopSettings(db: Db, shopId: string, userId: string, patch: Partial<ShopSettings>) {
+  // Saving an untouched form sends nothing: nothing to write, nothing to audit.
+  if (Object.keys(patch).length === 0) return getShopSettings(db, shopId);
   await db.transaction(async (tx) => {
     await tx.update(shops).set(patch).where(eq(shops.id, shopId));
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'shop-settings', entityId: shopId, data: patch });

@@ -59,6 +59,16 @@ describe('bad input', () => {
     expect((await res.json()).error).toMatch(/not valid JSON/);
   });
 
+  test('settings saved with nothing changed answer the settings as they are, and write no audit entry', async () => {
+    const before = await (await settingsRoute.GET(await request('/api/settings', { user: fx.owner }), noParams)).json();
+    const audits = async () => (await handle.db.select().from(auditEvents)).filter((e) => e.entity === 'shop-settings' && e.shopId === fx.mine.id).length;
+    const logged = await audits();
+    const res = await settingsRoute.PATCH(await request('/api/settings', { method: 'PATCH', body: {}, user: fx.owner }), noParams);
+    expect(res.status).toBe(200);
+    expect(await res.json()).toEqual(before);
+    expect(await audits()).toBe(logged);
+  });
+
   test('settings refuse a zero kerf with the reason', async () => {
     const res = await settingsRoute.PATCH(await request('/api/settings', { method: 'PATCH', body: { kerfMm: 0 }, user: fx.owner }), noParams);
     expect(res.status).toBe(422);

@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import Link from 'next/link';
 import { getDb } from '@/db/client';
 import { getShopSettings } from '@/db/queries/shops';
@@ -46,6 +47,7 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
   ]);
   if (!settings) return null;
   const len = (mm: number) => formatLength(mm, settings.units);
+  const thick = (mm: number) => exactLengthText(mm, settings.units);
   const money = showPrices ? (cents: number) => formatMoney(cents, settings.currency) : null;
   const lowCount = allItems.filter((i) => i.low).length;
   const materials = [...new Set(allItems.map((i) => i.material))].sort();
@@ -82,13 +84,13 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
         (items.length === 0 ? (
           <EmptyState title={allItems.length ? 'Nothing matches these filters.' : 'The rack is empty.'}>{allItems.length ? 'Clear a filter to see more.' : 'Add a stock size or import a CSV to start.'}</EmptyState>
         ) : (
-          <StockTable items={items} len={len} money={money} currency={settings.currency} canWrite={can(user.role, 'stock:write')} />
+          <StockTable items={items} len={len} thick={thick} money={money} currency={settings.currency} canWrite={can(user.role, 'stock:write')} />
         ))}
       {view === 'rack' &&
         (rack.length === 0 ? (
           <EmptyState title="No offcuts here.">Finished plans put their usable offcuts on the rack; cutters can record others.</EmptyState>
         ) : (
-          <OffcutRack rack={rack} len={len} money={money} canScrap={can(user.role, 'offcuts:record')} />
+          <OffcutRack rack={rack} len={len} thick={thick} money={money} canScrap={can(user.role, 'offcuts:record')} />
         ))}
       {view === 'history' && historyItem && (
         <p className="mb-3 text-sm">

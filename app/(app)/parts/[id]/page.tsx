@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
@@ -47,7 +48,7 @@ export default async function PartPage({ params, searchParams }: { params: Promi
       <dl className="card mb-6 grid grid-cols-2 gap-x-6 gap-y-3 p-5 sm:grid-cols-4">
         <Fact label="Length (along the grain)" value={len(part.lengthMm)} mono />
         <Fact label="Width" value={len(part.widthMm)} mono />
-        <Fact label="Thickness" value={len(part.thicknessMm)} mono />
+        <Fact label="Thickness" value={exactLengthText(part.thicknessMm, settings.units)} mono />
         <Fact label="Material" value={part.material} />
         <Fact label="Grain" value={part.grain === 'along-length' ? 'Along the length' : 'Either way'} />
         {part.jointAllowanceMm > 0 && <Fact label="Joint allowance (in the length)" value={len(part.jointAllowanceMm)} mono />}

@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
@@ -32,7 +33,7 @@ export default async function FinishPlanPage({ params }: { params: Promise<{ id:
 
   const pieces: FinishPiece[] = plan.document.pieces.map((p, index) => ({
     index,
-    title: `Piece ${index + 1} · ${p.material} ${len(p.thickness)} · ${len(p.length)} × ${len(p.width)}${p.kind === 'offcut' ? ' (offcut)' : ''}`,
+    title: `Piece ${index + 1} · ${p.material} ${exactLengthText(p.thickness, settings.units)} · ${len(p.length)} × ${len(p.width)}${p.kind === 'offcut' ? ' (offcut)' : ''}`,
     offcuts: (p.offcuts ?? []).map((r, i) => ({ index: i, w: r.w, h: r.h, keepable: isKeepableOffcut(r, min) })),
     parts: p.placements.map((pl) => ({ partId: pl.partId, instance: pl.instance, label: pl.label || labels.get(pl.partId) || pl.partId, w: pl.w, h: pl.h })),
   }));
