@@ -23,7 +23,7 @@ describe('a cut list cell reads what was typed in the shop’s unit', () => {
   test.each([
     ['quantity', '2.5', 'whole number'],
     ['quantity', '0', 'at least 1'],
-    ['lengthMm', 'three', 'Unknown unit'],
+    ['lengthMm', 'three', '"three" is not a length'],
     ['lengthMm', '0', 'greater than zero'],
     ['label', '   ', 'Give the part a name'],
   ] as const)('%s “%s” is refused on the cell: %s', (column, text, message) => {

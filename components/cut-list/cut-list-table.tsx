@@ -1,7 +1,7 @@
 'use client';
 
 import Link from 'next/link';
-import { useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import { useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import { ApiError } from '@/lib/client/api';
 import { cutListTotals } from '@/lib/cut-list/totals';
 import { offersOf, snapThickness, stockMatchWarning, type StockOffer } from '@/lib/cut-list/stock-match';
@@ -36,6 +36,36 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
   const materials = useMemo(() => [...new Set(offers.map((o) => o.material))].sort(), [offers]);
   const totals = useMemo(() => cutListTotals(parts, offers), [parts, offers]);
   const draftRow = parts.length;
+  // Deleted rows, newest last: Undo (or Ctrl/Cmd+Z outside a cell being typed in) puts the last one back in its place.
+  const [deleted, setDeleted] = useState<{ part: ListedPart; row: number }[]>([]);
+  const lastDeleted = deleted.at(-1);
+
+  function deleteRow(part: ListedPart, row: number) {
+    setDeleted((d) => [...d, { part, row }].slice(-UNDO_DEPTH));
+    remove.mutate(part.id, { onError: () => setDeleted((d) => d.filter((x) => x.part.id !== part.id)) });
+  }
+
+  function undoDelete() {
+    if (!lastDeleted) return;
+    setDeleted((d) => d.slice(0, -1));
+    add.mutate({ ...duplicateOf(lastDeleted.part), sort: lastDeleted.part.sort });
+  }
+
+  const undoRef = useRef(undoDelete);
+  undoRef.current = undoDelete;
+  useEffect(() => {
+    function onKey(event: globalThis.KeyboardEvent) {
+      if (!(event.ctrlKey || event.metaKey) || event.shiftKey || event.key.toLowerCase() !== 'z') return;
+      const target = event.target as HTMLElement;
+      // Text being typed in a field keeps the browser's own undo.
+      const typing = (target instanceof HTMLInputElement || target instanceof HTMLTextAreaElement) && target.dataset.pristine !== 'true';
+      if (typing) return;
+      event.preventDefault();
+      undoRef.current();
+    }
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
 
   const setError = (key: string, message: string | null) =>
     setErrors((e) => {
@@ -212,7 +242,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                     Copy
                   </button>
                   {part.drawerScheduleId ? null : (
-                    <button type="button" className="px-1 text-base leading-none text-brick hover:underline" aria-label={`Delete row ${r + 1}`} title="Delete" onClick={() => remove.mutate(part.id)}>
+                    <button type="button" className="px-1 text-base leading-none text-brick hover:underline" aria-label={`Delete row ${r + 1}`} title="Delete" onClick={() => deleteRow(part, r + 1)}>
                       ×
                     </button>
                   )}
@@ -268,9 +298,24 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
           </tr>
         </tfoot>
       </table>
+      {lastDeleted && (
+        <div role="status" className="flex flex-wrap items-center gap-3 border-t border-paper-edge bg-oak-wash px-3 py-2 text-sm" data-testid="cut-list-undo">
+          <span>
+            Deleted row {lastDeleted.row}, “{lastDeleted.part.label}”{deleted.length > 1 ? ` (${deleted.length} deletions to undo)` : ''}.
+          </span>
+          <button type="button" className="btn-quiet" onClick={undoDelete}>Undo</button>
+          <span className="text-graphite-mute">or press Ctrl+Z (⌘Z on a Mac)</span>
+          <button type="button" className="ml-auto text-graphite-mute hover:text-graphite" onClick={() => setDeleted([])} aria-label="Keep the deletions and hide this">
+            Dismiss
+          </button>
+        </div>
+      )}
     </div>
   );
 }
+
+/** How many deletions the cut list can take back. */
+const UNDO_DEPTH = 20;
 
 const slug = (s: string) => s.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-');
 
@@ -298,6 +343,7 @@ function EditCell({ r, c, column, initial, error, label, list, onCommit }: { r: 
         style={{ minWidth: `${CELL_CH[column] + 2}ch` }}
         value={text}
         list={list}
+        data-pristine={text === initial}
         onFocus={(e) => e.currentTarget.select()}
         onChange={(e) => setText(e.target.value)}
         onBlur={() => onCommit(text)}

@@ -7,7 +7,9 @@ import { guessMapping, looksLikeHeader, TEMPLATE_COLUMNS } from '@/lib/cut-list/
 import { detectUnit } from '@/lib/cut-list/detect-unit';
 import { UPLOAD_LIMITS } from '@/lib/cut-list/limits';
 import { readCutListFile } from '@/lib/cut-list/read-cut-list-file';
+import { importSummary } from '@/lib/cut-list/import-summary';
 import { toUploadRows } from '@/lib/cut-list/upload-rows';
+import { countOf } from '@/lib/plural';
 import type { UploadRowResult } from '@/lib/cut-list/validate-rows';
 import type { LengthUnit } from '@/lib/units/parse-length';
 import { CUT_LIST_FIELD_LABELS, CUT_LIST_FIELDS, type CutListField } from '@/shared/schemas/cut-list-upload';
@@ -76,7 +78,7 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
     mutationFn: (mode: 'all' | 'valid-only') => api<{ imported: number; skipped: number; skippedLines: number[] }>(`/api/jobs/${jobId}/cut-list/import`, { method: 'POST', body: { ...body, mode } }),
     onSuccess: (res) => {
       qc.invalidateQueries({ queryKey: partsKey(jobId) });
-      onImported(`Imported ${res.imported} rows from “${file?.name}”.${res.skipped ? ` Skipped ${res.skipped} bad rows (file rows ${res.skippedLines.join(', ')}).` : ''}`);
+      onImported(importSummary(res, file?.name ?? 'the file'));
     },
   });
 
@@ -142,7 +144,7 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
                 ))}
               </tbody>
             </table>
-            {file.grid.length > PREVIEW_ROWS_SHOWN + 1 && <p className="mt-1 text-xs text-graphite-mute">…and {file.grid.length - PREVIEW_ROWS_SHOWN - 1} more rows.</p>}
+            {file.grid.length > PREVIEW_ROWS_SHOWN + 1 && <p className="mt-1 text-xs text-graphite-mute">…and {countOf(file.grid.length - PREVIEW_ROWS_SHOWN - 1, 'more row')}.</p>}
           </div>
 
           <div aria-live="polite">
@@ -155,8 +157,8 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
             {preview.data && (
               <div className="space-y-3">
                 <p className="text-sm">
-                  <strong>{preview.data.validCount}</strong> rows ready · <strong className={preview.data.invalidCount ? 'text-brick' : ''}>{preview.data.invalidCount}</strong> with problems
-                  {upload.blankRows > 0 && <> · {upload.blankRows} blank rows left out</>}
+                  <strong>{countOf(preview.data.validCount, 'row')}</strong> ready · <strong className={preview.data.invalidCount ? 'text-brick' : ''}>{countOf(preview.data.invalidCount, 'row')}</strong> with problems
+                  {upload.blankRows > 0 && <> · {countOf(upload.blankRows, 'blank row')} left out</>}
                 </p>
                 {bad.length > 0 && (
                   <div className="rounded-md border border-brick/30 bg-brick-wash/50 p-3">
@@ -184,11 +186,11 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
                 <div className="flex flex-wrap gap-2">
                   {preview.data.invalidCount === 0 ? (
                     <button type="button" className="btn-accent" disabled={importRows.isPending} onClick={() => importRows.mutate('all')}>
-                      Import {preview.data.validCount} rows
+                      Import {countOf(preview.data.validCount, 'row')}
                     </button>
                   ) : (
                     <button type="button" className="btn-accent" disabled={importRows.isPending || preview.data.validCount === 0} onClick={() => importRows.mutate('valid-only')}>
-                      Import only the {preview.data.validCount} valid rows
+                      {preview.data.validCount === 1 ? 'Import only the valid row' : `Import only the ${preview.data.validCount} valid rows`}
                     </button>
                   )}
                   <button type="button" className="btn-quiet" onClick={onClose}>Cancel</button>

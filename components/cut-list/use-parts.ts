@@ -9,6 +9,9 @@ export type ListedPart = Part & { schedule: string | null };
 
 export const partsKey = (jobId: string) => ['parts', jobId] as const;
 
+/** Ids for rows shown before the server has answered. */
+let pendingRows = 0;
+
 export function useParts(jobId: string) {
   return useQuery({ queryKey: partsKey(jobId), queryFn: () => api<ListedPart[]>(`/api/jobs/${jobId}/parts`) });
 }
@@ -46,8 +49,9 @@ export function usePartMutations(jobId: string) {
     mutationFn: (input: PartInput) => api<Part>(`/api/jobs/${jobId}/parts`, { method: 'POST', body: input }),
     onMutate: async (input) => {
       const context = await snapshot();
-      const temp: ListedPart = { ...input, id: `pending-${Math.random()}`, jobId, drawerScheduleId: null, role: null, machining: [], sort: Number.MAX_SAFE_INTEGER, schedule: null };
-      qc.setQueryData<ListedPart[]>(key, (list) => [...(list ?? []), temp]);
+      const temp: ListedPart = { ...input, id: `pending-${++pendingRows}`, jobId, drawerScheduleId: null, role: null, machining: [], sort: input.sort ?? Number.MAX_SAFE_INTEGER, schedule: null };
+      // A row put back by undo shows at its old place at once; a new row at the end.
+      qc.setQueryData<ListedPart[]>(key, (list) => [...(list ?? []), temp].sort((a, b) => a.sort - b.sort));
       return context;
     },
     onError: rollback,

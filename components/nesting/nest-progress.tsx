@@ -1,6 +1,7 @@
 'use client';
 
 import type { NestProgress } from '@/lib/nesting/worker-api';
+import { countOf } from '@/lib/plural';
 
 /** The running Nest: time used of the budget, and the best plan found so far. */
 export function NestProgressBar({ progress, budgetMs, label, onCancel }: { progress: NestProgress | null; budgetMs: number; label: string; onCancel: () => void }) {
@@ -18,7 +19,7 @@ export function NestProgressBar({ progress, budgetMs, label, onCancel }: { progr
         </div>
         <p className="mt-1 text-sm text-graphite-soft" data-testid="nest-best">
           {progress && progress.piecesUsed > 0
-            ? <>Best so far: <strong>{progress.piecesUsed}</strong> pieces of stock, <strong>{(progress.yield * 100).toFixed(1)} %</strong> yield</>
+            ? <>Best plan so far, every material and offcut counted: <strong>{countOf(progress.piecesUsed, 'piece')}</strong> of stock, <strong>{(progress.yield * 100).toFixed(1)} %</strong> yield</>
             : 'Looking for a first plan…'}
         </p>
       </div>

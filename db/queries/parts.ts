@@ -61,7 +61,7 @@ export async function touchJob(db: Db, shopId: string, jobId: string) {
   await db.update(jobs).set({ updatedAt: new Date() }).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
 }
 
-/** Adds typed or uploaded rows at the end of the cut list, all or none. Null when the job is not this shop's. */
+/** Adds typed or uploaded rows at the end of the cut list (or at a given place: undo), all or none. Null when the job is not this shop's. */
 export async function addParts(db: Db, shopId: string, userId: string, jobId: string, inputs: readonly PartInput[], source: 'typed' | 'upload'): Promise<Part[] | null> {
   return db.transaction(async (tx) => {
     if (!(await jobInShop(tx, shopId, jobId))) return null;
@@ -69,7 +69,7 @@ export async function addParts(db: Db, shopId: string, userId: string, jobId: st
     const start = await nextSort(tx, shopId, jobId);
     const rows = await tx
       .insert(parts)
-      .values(inputs.map((p, i) => ({ ...p, shopId, jobId, sort: start + i })))
+      .values(inputs.map((p, i) => ({ ...p, shopId, jobId, sort: p.sort ?? start + i })))
       .returning();
     await touchJob(tx, shopId, jobId);
     await recordAudit(tx, { shopId, userId, action: source === 'upload' ? 'import' : 'create', entity: 'part', entityId: rows.length === 1 ? rows[0].id : undefined, data: { jobId, count: rows.length } });

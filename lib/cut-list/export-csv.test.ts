@@ -22,6 +22,21 @@ describe('exporting the cut list to CSV', () => {
     expect(rows[1]).toEqual(['Drawer side', '8', '19-3/4"', '5-1/2"', '1/2"', 'Baltic birch', 'along', '1/4"', '', 'Kitchen drawers']);
   });
 
+  test('every length is in its column’s unit: off the 1/32″ grid an inch shop gets decimal inches, not mm (355.41 mm = 13.9925″, NIST 25.4 mm/in)', () => {
+    const rows = cells(cutListCsv([part({ lengthMm: 355.41, widthMm: 18, thicknessMm: 12, jointAllowanceMm: 4.7625 })], IMPERIAL));
+    expect(rows[0].slice(2, 5)).toEqual(['Length (in)', 'Width (in)', 'Thickness (in)']);
+    expect(rows[1].slice(2, 5)).toEqual(['13.9925"', '0.7087"', '0.4724"']);
+    // 4.7625 mm is exactly 3/16″.
+    expect(rows[1][7]).toBe('3/16"');
+    for (const cell of [...rows[1].slice(2, 5), rows[1][7]]) expect(cell).not.toMatch(/mm/);
+  });
+
+  test('a metric shop’s columns hold millimetres', () => {
+    const rows = cells(cutListCsv([part({ lengthMm: 355.41, widthMm: inches(0.5) })], METRIC));
+    expect(rows[0][2]).toBe('Length (mm)');
+    expect(rows[1].slice(2, 4)).toEqual(['355.41 mm', '12.7 mm']);
+  });
+
   // OWASP, "CSV Injection": cells starting with = + - @ tab or carriage return are prefixed with a single quote.
   test.each([
     ['=HYPERLINK("http://example.invalid")'],

@@ -24,11 +24,24 @@ export interface ExportPart {
   schedule?: string | null;
 }
 
+/** Decimal inches precise to 0.0001″ (0.00254 mm), far finer than any saw. */
+const INCH_DECIMALS = 4;
+
+/**
+ * A length in the column's unit, exact enough that a re-upload gives the same part: an inch fraction when the length
+ * is on the 1/32″ grid, else decimal inches (355.41 mm → 13.9925"), never a rounded "~11/16" nor a length in mm under
+ * an inch header; millimetres in a metric shop.
+ */
+export function csvLength(mm: number, units: ShopUnits): string {
+  const text = exactLengthText(mm, units, 'ascii');
+  if (units.system === 'metric' || !text.endsWith(' mm')) return text;
+  return `${Number((mm / 25.4).toFixed(INCH_DECIMALS))}"`;
+}
+
 /** The cut list as CSV in the shop's unit, readable again by the upload (same header words), formula cells neutralised. */
 export function cutListCsv(parts: readonly ExportPart[], units: ShopUnits): string {
   const unit = units.system === 'imperial' ? 'in' : 'mm';
-  // Exact values only, so a re-upload gives the same parts (a rounded "~11/16" would not).
-  const len = (mm: number) => exactLengthText(mm, units, 'ascii');
+  const len = (mm: number) => csvLength(mm, units);
   const fields = ['Part', 'Quantity', `Length (${unit})`, `Width (${unit})`, `Thickness (${unit})`, 'Material', 'Grain', `Joint allowance (${unit})`, 'Notes', 'Drawer schedule'];
   const data = parts.map((p) => [
     p.label,

@@ -206,6 +206,25 @@ describe('progress and cancel', () => {
     expect(last.elapsedMs).toBeGreaterThanOrEqual(0);
   });
 
+  test('every report counts the whole plan (every material, offcuts too), and the last one is the plan returned', async () => {
+    const seen: { piecesUsed: number; yield: number; cost: number }[] = [];
+    // Three groups: maple ply on an offcut and a sheet, MDF on its own sheet, and 12 mm birch.
+    const req = request(
+      [part('a', 700, 500, { quantity: 7 }), part('m', 900, 400, { quantity: 3, material: 'MDF' }), part('b', 500, 300, { quantity: 4, material: 'Birch', thickness: 12 })],
+      [sheet('O', 800, 600, { kind: 'offcut', count: 1, costEach: 10 }), sheet('S', 2440, 1220), sheet('M', 2440, 1220, { material: 'MDF' }), sheet('B', 1525, 1525, { material: 'Birch', thickness: 12 })],
+      { timeBudgetMs: 300 },
+    );
+    const plan = await optimize(req, { onProgress: (p) => seen.push(p) });
+    expect(seen.length).toBeGreaterThan(0);
+    // Each of the three groups needs a piece of its own from the very first report.
+    for (const p of seen) expect(p.piecesUsed).toBeGreaterThanOrEqual(3);
+    const last = seen.at(-1)!;
+    expect(last.piecesUsed).toBe(plan.totals!.pieces);
+    expect(last.yield).toBeCloseTo(plan.totals!.yield, 12);
+    expect(last.cost).toBeCloseTo(plan.totals!.cost, 9);
+    expect(plan.pieces.some((p) => p.kind === 'offcut')).toBe(true);
+  });
+
   test('a cancelled run still returns a whole plan, marked cancelled', async () => {
     const ctrl = new AbortController();
     ctrl.abort();

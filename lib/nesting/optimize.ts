@@ -25,9 +25,9 @@ import {
 
 export interface OptimizeProgress {
   elapsedMs: number;
-  /** Stock pieces in the best plan so far. */
+  /** Stock pieces (offcuts included) of the whole plan as it stands: every material and thickness. */
   piecesUsed: number;
-  /** Part area / stock area of the pieces used so far. */
+  /** Part area / stock area of those pieces, as the plan's totals count it. */
   yield: number;
   cost: number;
 }
@@ -136,8 +136,18 @@ function unplacedFromResult(group: Group, result: PackResult): Unplaced[] {
   return out;
 }
 
+/** Stock pieces, their area, the part area on them and their cost: what progress reports. */
+interface Measure {
+  pieces: number;
+  stockArea: number;
+  partArea: number;
+  cost: number;
+}
+const NOTHING: Measure = { pieces: 0, stockArea: 0, partArea: 0, cost: 0 };
+const addMeasures = (a: Measure, b: Measure): Measure => ({ pieces: a.pieces + b.pieces, stockArea: a.stockArea + b.stockArea, partArea: a.partArea + b.partArea, cost: a.cost + b.cost });
+
 /** Stock area, part area and cost of packed bins, for progress. */
-function measure(group: Group, result: PackResult) {
+function measure(group: Group, result: PackResult): Measure {
   let stockArea = 0;
   let partArea = 0;
   let cost = 0;
@@ -161,20 +171,31 @@ export async function optimize(requestInput: NestRequestInput, options: Optimize
   const t0 = performance.now();
   let itemsLeft = request.parts.reduce((n, p) => n + p.quantity, 0);
   const used = new Map<string, number>();
-  const done = { pieces: 0, stockArea: 0, partArea: 0, cost: 0 };
-  const report = (extra = { pieces: 0, stockArea: 0, partArea: 0, cost: 0 }) => {
-    const stockArea = done.stockArea + extra.stockArea;
+  const groups = groupParts(request.parts);
+  const packOptions = { kerf: settings.kerf, style: settings.style, objective: settings.objective, seed: settings.seed };
+  // Progress speaks for the whole plan it will return: every group counts from the start, first by a quick first
+  // plan, then by its best as it is searched, then by its result.
+  const estimates: Measure[] = [];
+  if (options.onProgress) {
+    for (const parts of groups) {
+      const group = prepareGroup(parts, request, used);
+      estimates.push(group.bins.length ? measure(group, await pack(group.items, group.bins, { ...packOptions, timeBudgetMs: 0 })) : NOTHING);
+    }
+  }
+  const done = { ...NOTHING };
+  const report = (current: number, best: Measure = NOTHING) => {
+    const whole = [done, best, ...estimates.slice(current + 1)].reduce(addMeasures, NOTHING);
     options.onProgress?.({
       elapsedMs: performance.now() - t0,
-      piecesUsed: done.pieces + extra.pieces,
-      yield: stockArea > 0 ? (done.partArea + extra.partArea) / stockArea : 0,
-      cost: done.cost + extra.cost,
+      piecesUsed: whole.pieces,
+      yield: whole.stockArea > 0 ? whole.partArea / whole.stockArea : 0,
+      cost: whole.cost,
     });
   };
 
   const pieces: PlanPiece[] = [];
   const notPlaced: Unplaced[] = [];
-  for (const parts of groupParts(request.parts)) {
+  for (const [g, parts] of groups.entries()) {
     const group = prepareGroup(parts, request, used);
     if (group.bins.length === 0) {
       itemsLeft -= group.items.length;
@@ -188,24 +209,17 @@ export async function optimize(requestInput: NestRequestInput, options: Optimize
     const budget = options.signal?.aborted ? 0 : Math.round((timeLeft * group.items.length) / itemsLeft);
     itemsLeft -= group.items.length;
     const result = await pack(group.items, group.bins, {
-      kerf: settings.kerf,
-      style: settings.style,
-      objective: settings.objective,
+      ...packOptions,
       timeBudgetMs: budget,
-      seed: settings.seed,
       signal: options.signal,
-      onProgress: options.onProgress && ((p) => report(measure(group, p.best))),
+      onProgress: options.onProgress && ((p) => report(g, measure(group, p.best))),
     });
     const groupPieces = piecesFromResult(group, result, request, pieces.length);
     for (const p of groupPieces) used.set(p.stockId, (used.get(p.stockId) ?? 0) + 1);
     pieces.push(...groupPieces);
     notPlaced.push(...unplacedFromResult(group, result));
-    const m = measure(group, result);
-    done.pieces += m.pieces;
-    done.stockArea += m.stockArea;
-    done.partArea += m.partArea;
-    done.cost += m.cost;
-    report();
+    Object.assign(done, addMeasures(done, measure(group, result)));
+    report(g);
   }
   return assemblePlan(request, pieces, notPlaced, options.signal?.aborted ?? false);
 }

@@ -15,7 +15,7 @@ describe('the length field schema', () => {
   test('it carries the parser’s message as its own', () => {
     const result = lengthInput('in').safeParse('3/0');
     expect(result.success).toBe(false);
-    expect(result.error?.issues[0].message).toMatch(/denominator at position 3 is 0/);
+    expect(result.error?.issues[0].message).toMatch(/denominator at character 3 is 0/);
   });
 
   test('it refuses a non-positive or non-finite number and anything that is not text or a number', () => {

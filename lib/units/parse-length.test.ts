@@ -54,20 +54,21 @@ describe('reading the ways a shop writes a length', () => {
 describe('refusing what is not a length, saying where and why', () => {
   test.each([
     ['an empty field', '', /enter a length/i, undefined],
-    ['a zero denominator', '3/0', /denominator at position 3 is 0/, 3],
-    ['two fraction bars', '1/2/3', /only one fraction bar.*position 4/i, 4],
-    ['a second unit after mm', '5 mm"', /position 5.*already has its unit/, 5],
+    ['a zero denominator', '3/0', /denominator at character 3 is 0/, 3],
+    ['two fraction bars', '1/2/3', /only one fraction bar.*character 4/i, 4],
+    ['a second unit after mm', '5 mm"', /character 5.*already has its unit/, 5],
     ['a negative length', '-5', /greater than zero.*minus/, 1],
     ['zero', '0', /greater than zero/, undefined],
     ['a fraction of zero', '0/4″', /greater than zero/, undefined],
-    ['a stray number', '19 3', /"3" at position 4: expected a fraction/, 4],
+    ['a stray number', '19 3', /"3" at character 4: expected a fraction/, 4],
     ['a fraction after a decimal', '19.5 1/4', /only follow a whole number/, 1],
-    ['a dash with no fraction after it', '19-3', /position 4: expected a fraction/, 4],
+    ['a dash with no fraction after it', '19-3', /character 4: expected a fraction/, 4],
     ['a fraction of 1 or more in a mixed number', '19 5/4', /less than 1 \(got 5\/4\)/, 4],
     ['a decimal in a fraction', '3.5/4', /whole numbers above and below/, 1],
-    ['an unknown unit', '12 yd', /unknown unit "yd" at position 4/i, 4],
-    ['a multiplication sign', '19 3/4 × 12', /"×" at position 8/, 8],
-    ['a dangling decimal point', '19.', /digit after "\." at position 4/, 4],
+    ['an unknown unit', '12 yd', /"yd" is not a unit Kerfwise reads \(at character 4\)/, 4],
+    ['words, not a length', 'abc', /^"abc" is not a length: start with a number, like 19 3\/4/, 1],
+    ['a multiplication sign', '19 3/4 × 12', /"×" at character 8/, 8],
+    ['a dangling decimal point', '19.', /digit after "\." at character 4/, 4],
     ['an ambiguous thousands comma', '1,200 mm', /ambiguous.*1200 or 1\.2/, 2],
     ['a fraction bar with nothing after it', '3/', /ends too soon.*denominator/, 3],
     ['12 or more inches after feet', "1' 14\"", /less than 12/, undefined],
@@ -75,7 +76,7 @@ describe('refusing what is not a length, saying where and why', () => {
     ['millimetres after feet', "1' 20 mm", /only inches may follow.*"mm"/, 7],
     ['a fraction of a millimetre', '3/4 mm', /fractions are for inches.*decimal/i, undefined],
     ['a length past the sanity limit', '200 m', /longer than 100 m/, undefined],
-    ['a ≈ in the middle', '19 ≈ 3/4', /"≈" at position 4/, 4],
+    ['a ≈ in the middle', '19 ≈ 3/4', /"≈" at character 4/, 4],
   ])('%s: %s', (_label, text, message, position) => {
     const result = inShop(text);
     expect(result.ok).toBe(false);

@@ -104,14 +104,14 @@ function tokenize(chars: string[]): Token[] {
       if (sep === '.' || sep === ',') {
         if (!isDigit(chars[i + 1])) {
           // "in." style abbreviations never follow a bare number, so a dangling separator is a typo.
-          throw new LengthError(`Expected a digit after ${quote(sep)} at position ${i + 2}.`, i + 2);
+          throw new LengthError(`Expected a digit after ${quote(sep)} at character ${i + 2}.`, i + 2);
         }
         i++;
         while (isDigit(chars[i])) decimals += chars[i++];
         // "1,200" could be twelve hundred or 1.2; "0,502" and "1200,5" can only be decimals.
         if (sep === ',' && decimals.length === 3 && digits.length <= 3 && Number(digits) > 0) {
           throw new LengthError(
-            `The comma at position ${start + digits.length + 1} is ambiguous (thousands or decimals?): write ${digits}${decimals} or ${Number(`${digits}.${decimals}`)}.`,
+            `The comma at character ${start + digits.length + 1} is ambiguous (thousands or decimals?): write ${digits}${decimals} or ${Number(`${digits}.${decimals}`)}.`,
             start + digits.length + 1,
           );
         }
@@ -124,17 +124,25 @@ function tokenize(chars: string[]): Token[] {
     } else if (SUPERSCRIPT_DIGITS.includes(c)) {
       let num = '';
       while (i < chars.length && SUPERSCRIPT_DIGITS.includes(chars[i])) num += SUPERSCRIPT_DIGITS.indexOf(chars[i++]);
-      if (!SLASHES.has(chars[i] ?? '')) throw new LengthError(`Expected ${quote(FRACTION_SLASH)} after the raised numerator at position ${i + 1}.`, i + 1);
+      if (!SLASHES.has(chars[i] ?? '')) throw new LengthError(`Expected ${quote(FRACTION_SLASH)} after the raised numerator at character ${i + 1}.`, i + 1);
       i++;
       let den = '';
       while (i < chars.length && SUBSCRIPT_DIGITS.includes(chars[i])) den += SUBSCRIPT_DIGITS.indexOf(chars[i++]);
-      if (den === '') throw new LengthError(`Expected a lowered denominator (like ₁₆) at position ${i + 1}.`, i + 1);
+      if (den === '') throw new LengthError(`Expected a lowered denominator (like ₁₆) at character ${i + 1}.`, i + 1);
       tokens.push({ kind: 'glyph-fraction', start, end: i, value: { n: Number(num), d: Number(den) } });
     } else if (/[a-z]/i.test(c)) {
       let word = '';
       while (i < chars.length && /[a-z]/i.test(chars[i])) word += chars[i++];
       const unit = UNIT_WORDS[word.toLowerCase()];
-      if (!unit) throw new LengthError(`Unknown unit ${quote(word)} at position ${start + 1}: use ${UNIT_HINT}.`, start + 1);
+      if (!unit) {
+        const first = tokens.every((t) => t.kind === 'approx');
+        throw new LengthError(
+          first
+            ? `${quote(word)} is not a length: start with a number, like 19 3/4, 1′ 7-3/4″ or 502 mm.`
+            : `${quote(word)} is not a unit Kerfwise reads (at character ${start + 1}): use ${UNIT_HINT}.`,
+          start + 1,
+        );
+      }
       if (chars[i] === '.' && (unit === 'in' || unit === 'ft') && !isDigit(chars[i + 1])) i++; // "in." / "ft."
       tokens.push({ kind: 'unit', unit, start, end: i });
     } else if (FOOT_MARKS.has(c) && FOOT_MARKS.has(chars[i + 1] ?? '')) {
@@ -149,7 +157,7 @@ function tokenize(chars: string[]): Token[] {
     } else if (APPROX_MARKS.has(c)) {
       tokens.push({ kind: 'approx', start, end: ++i });
     } else {
-      throw new LengthError(`Unexpected ${quote(c)} at position ${i + 1}: a length has digits, fractions and a unit (${UNIT_HINT}).`, i + 1);
+      throw new LengthError(`Unexpected ${quote(c)} at character ${i + 1}: a length has digits, fractions and a unit (${UNIT_HINT}).`, i + 1);
     }
   }
   return tokens;
@@ -191,7 +199,7 @@ class Parser {
     if (this.peek()?.kind === 'dash') this.i++; // 1′-7″, the architects' way
     const inches = this.quantity();
     const mark = this.unit();
-    if (mark && mark.unit !== 'in') throw new LengthError(`After feet only inches may follow, not ${quote(this.text(mark))} (position ${mark.start + 1}).`, mark.start + 1);
+    if (mark && mark.unit !== 'in') throw new LengthError(`After feet only inches may follow, not ${quote(this.text(mark))} (character ${mark.start + 1}).`, mark.start + 1);
     this.expectEnd(mark ? 'the length is complete after the inches' : 'expected ″ or the end after the inches');
     if (feet.shape !== 'whole') throw new LengthError('Write whole feet before the inches (like 1′ 7-3/4″), or give it all in inches.');
     if (inches.n >= 12 * inches.d) throw new LengthError('The inches after the feet must be less than 12.');
@@ -209,7 +217,7 @@ class Parser {
       this.i++;
       const fraction = this.fractionFrom(t);
       const extra = this.peek();
-      if (extra?.kind === 'slash') throw new LengthError(`Only one fraction bar is allowed (a second at position ${extra.start + 1}).`, extra.start + 1);
+      if (extra?.kind === 'slash') throw new LengthError(`Only one fraction bar is allowed (a second at character ${extra.start + 1}).`, extra.start + 1);
       return fraction;
     }
     const startsFraction = (k: Token | undefined, n: Token | undefined) => k?.kind === 'glyph-fraction' || (k?.kind === 'number' && n?.kind === 'slash');
@@ -242,7 +250,7 @@ class Parser {
     const den = this.next('expected the denominator of the fraction');
     if (den.kind !== 'number') throw this.unexpected(den, 'expected the denominator of the fraction');
     if (!numerator.whole || !den.whole) throw new LengthError('A fraction needs whole numbers above and below the bar (like 3/4).', (numerator.whole ? den : numerator).start + 1);
-    if (den.value.n === 0) throw new LengthError(`Division by zero: the denominator at position ${den.start + 1} is 0.`, den.start + 1);
+    if (den.value.n === 0) throw new LengthError(`Division by zero: the denominator at character ${den.start + 1} is 0.`, den.start + 1);
     return { n: numerator.value.n, d: den.value.n, shape: 'fraction' };
   }
 
@@ -256,7 +264,7 @@ class Parser {
   private expectEnd(expected: string) {
     const t = this.peek();
     if (!t) return;
-    if (t.kind === 'unit') throw new LengthError(`Unexpected ${quote(this.text(t))} at position ${t.start + 1}: the length already has its unit.`, t.start + 1);
+    if (t.kind === 'unit') throw new LengthError(`Unexpected ${quote(this.text(t))} at character ${t.start + 1}: the length already has its unit.`, t.start + 1);
     throw this.unexpected(t, expected);
   }
 
@@ -266,7 +274,7 @@ class Parser {
 
   private next(expected: string): Token {
     const t = this.tokens[this.i++];
-    if (!t) throw new LengthError(`The length ends too soon: ${expected} at position ${this.chars.length + 1}.`, this.chars.length + 1);
+    if (!t) throw new LengthError(`The length ends too soon: ${expected} at character ${this.chars.length + 1}.`, this.chars.length + 1);
     return t;
   }
 
@@ -276,7 +284,7 @@ class Parser {
   }
 
   private unexpected(t: Token, expected: string): LengthError {
-    return new LengthError(`Unexpected ${quote(this.text(t))} at position ${t.start + 1}: ${expected}.`, t.start + 1);
+    return new LengthError(`Unexpected ${quote(this.text(t))} at character ${t.start + 1}: ${expected}.`, t.start + 1);
   }
 
   private text(t: Token): string {

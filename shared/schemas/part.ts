@@ -38,6 +38,8 @@ export const partInputSchema = z.object({
   grain: partShape.grain.default('along-length'),
   jointAllowanceMm: partShape.jointAllowanceMm.default(0),
   notes: partShape.notes.default(''),
+  /** The row's place in the list, to put a deleted row back where it was (undo); new rows go to the end. */
+  sort: z.int().min(0).max(1_000_000).optional(),
 });
 export type PartInput = z.output<typeof partInputSchema>;
 

@@ -16,7 +16,7 @@ test('an estimator nests a job with progress, saves a draft, drags a part on the
   await page.getByRole('button', { name: /^Nest \d+ parts?$/ }).click();
   const progress = page.getByTestId('nest-progress');
   await expect(progress).toBeVisible();
-  await expect(page.getByTestId('nest-best')).toContainText('Best so far', { timeout: 10_000 });
+  await expect(page.getByTestId('nest-best')).toContainText('Best plan so far', { timeout: 10_000 });
   // The page stays responsive while the worker searches: typing into a field works mid-Nest.
   await page.getByLabel('Saw kerf').focus();
   await shot(page, 'plan-nest-progress');

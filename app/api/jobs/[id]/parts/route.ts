@@ -9,7 +9,7 @@ export const GET = route({ permission: 'jobs:read', params: idParams }, async ({
   return listJobParts(db, user.shopId, params.id);
 });
 
-// POST /api/jobs/:id/parts – add one row at the end of the cut list
+// POST /api/jobs/:id/parts – add one row at the end of the cut list, or back at its place (undoing a delete)
 export const POST = route({ permission: 'cutlist:write', params: idParams, body: partInputSchema, status: 201 }, async ({ db, user, params, body }) => {
   const added = await addParts(db, user.shopId, user.id, params.id, [body], 'typed');
   if (!added) throw notFound('That job');
