@@ -11,7 +11,7 @@ import type { ShopUnits } from '@/shared/schemas/units';
 import type { GrainRule } from '@/shared/schemas/drawer-schedule';
 import { SCHEDULE_OWNED_FIELDS, type PartInput, type PartPatch } from '@/shared/schemas/part';
 import { cellText, COLUMN_TITLES, COLUMNS, isLengthColumn, parseCell, type Column, type TextColumn } from './cell-parsers';
-import { usePartMutations, type ListedPart } from './use-parts';
+import { PENDING_ROW, usePartMutations, type ListedPart } from './use-parts';
 
 type CellErrors = Record<string, string>;
 const errorKey = (rowId: string, column: Column) => `${rowId}:${column}`;
@@ -238,11 +238,11 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
               })}
               {canWrite && (
                 <td className="whitespace-nowrap">
-                  <button type="button" className="px-1 text-xs text-graphite-mute hover:text-graphite" aria-label={`Duplicate row ${r + 1}`} title="Duplicate" onClick={() => add.mutate(duplicateOf(part))}>
+                  <button type="button" className="px-1 text-xs text-graphite-mute hover:text-graphite" aria-label={`Duplicate row ${r + 1}`} title="Duplicate" disabled={isPending(part)} onClick={() => add.mutate(duplicateOf(part))}>
                     Copy
                   </button>
                   {part.drawerScheduleId ? null : (
-                    <button type="button" className="px-1 text-base leading-none text-brick hover:underline" aria-label={`Delete row ${r + 1}`} title="Delete" onClick={() => deleteRow(part, r + 1)}>
+                    <button type="button" className="px-1 text-base leading-none text-brick hover:underline" aria-label={`Delete row ${r + 1}`} title="Delete" disabled={isPending(part)} onClick={() => deleteRow(part, r + 1)}>
                       ×
                     </button>
                   )}
@@ -313,6 +313,9 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
     </div>
   );
 }
+
+/** A row shown before the server has saved it has no id to delete or copy by yet. */
+const isPending = (part: ListedPart) => part.id.startsWith(PENDING_ROW);
 
 /** How many deletions the cut list can take back. */
 const UNDO_DEPTH = 20;

@@ -110,8 +110,8 @@ test('an estimator builds a cut list by keyboard, upload and drawer schedule, th
   expect(download.suggestedFilename()).toBe('arden-books-wall-units-cut-list.csv');
   const csv = Papa.parse<string[]>(fs.readFileSync((await download.path())!, 'utf8').replace(/^\uFEFF/, '').trim()).data;
   expect(csv[0]).toEqual(['Part', 'Quantity', 'Length (in)', 'Width (in)', 'Thickness (in)', 'Material', 'Grain', 'Joint allowance (in)', 'Notes', 'Drawer schedule']);
-  // 3/4 MDF was typed; the shop's 3/4″ MDF is 18 mm, written exactly.
-  expect(csv.find((r) => r[0] === 'Toe kick')).toEqual(['Toe kick', '1', '30-1/2"', '4"', '18 mm', 'MDF', 'along', '', '', '']);
+  // 3/4 MDF was typed; the shop's 3/4″ MDF is 18 mm, written in the column's inches (18 / 25.4 = 0.7087″, NIST).
+  expect(csv.find((r) => r[0] === 'Toe kick')).toEqual(['Toe kick', '1', '30-1/2"', '4"', '0.7087"', 'MDF', 'along', '', '', '']);
   expect(csv.find((r) => r[0] === 'Desk drawers · side')?.slice(1, 3)).toEqual(['4', '19-3/4"']);
 });
 

@@ -42,7 +42,7 @@ test('the owner receives stock, adjusts a count with a reason, scraps an offcut,
   // Filters live in the URL.
   await page.getByLabel('Material').fill('Baltic');
   await expect(page).toHaveURL(/material=Baltic/);
-  await expect(page.getByTestId('stock-row')).toHaveCount(2);
+  await expect(page.getByTestId('stock-row')).toHaveCount(3); // ¼″, ½″ and ¾″ Baltic birch
 
   await page.goto('/stock?view=rack');
   const birch = page.getByTestId('offcut').filter({ hasText: 'Offcut bin 1' });
