@@ -1,4 +1,5 @@
 import { SAW_CAUTIONS } from '@/lib/safety';
+import { NARROW_HOW } from '@/lib/saw-order/describe-step';
 import type { PieceView } from '@/lib/saw-order/piece-views';
 import { StepDiagram } from './step-diagram';
 import { StepKindBadge } from './step-kind-badge';
@@ -30,7 +31,7 @@ export function SawOrderPiece({ view, first }: { view: PieceView; first: boolean
                 <span className="font-mono text-3xl font-semibold leading-none print:text-base" aria-label={`Cut ${text.n}`}>
                   {text.n}
                 </span>
-                <StepKindBadge kind={text.kind} trim={text.trim} />
+                <StepKindBadge kind={text.kind} trim={text.trim} narrow={text.narrow} />
               </div>
               <StepDiagram geometry={geometry} stock={view.stock} parts={view.parts} className="h-auto w-full" />
               <div className="print:flex print:flex-wrap print:items-baseline print:gap-x-1 print:leading-none">
@@ -41,6 +42,11 @@ export function SawOrderPiece({ view, first }: { view: PieceView; first: boolean
                   {text.fence}
                 </div>
                 <div className="text-xs text-graphite-mute print:text-[8px]">cut length {text.length}</div>
+                {text.narrow && (
+                  <p className="mt-1 text-xs font-medium text-brick print:text-[8px]" role="note">
+                    Cut it {NARROW_HOW}.
+                  </p>
+                )}
               </div>
               <ProducedList text={text} />
             </li>

@@ -1,7 +1,7 @@
 import type { SawStep } from '@/shared/schemas/nesting';
 
 /** Rip and crosscut told apart by word, arrow and colour, so a glance at the printout is enough. */
-export function StepKindBadge({ kind, trim, large = false }: { kind: SawStep['kind']; trim?: boolean; large?: boolean }) {
+export function StepKindBadge({ kind, trim, narrow, large = false }: { kind: SawStep['kind']; trim?: boolean; narrow?: boolean; large?: boolean }) {
   const size = large ? 'px-3 py-1 text-base' : 'px-2 py-0.5 text-xs';
   return (
     <span className="inline-flex flex-wrap items-center gap-1.5">
@@ -14,6 +14,7 @@ export function StepKindBadge({ kind, trim, large = false }: { kind: SawStep['ki
         {kind === 'rip' ? 'Rip' : 'Crosscut'}
       </span>
       {trim && <span className={`rounded border border-amber bg-amber-wash font-medium text-amber ${size}`}>Trim cut</span>}
+      {narrow && <span className={`rounded border border-brick bg-brick-wash font-medium text-brick ${size}`}>Sled, track saw or band saw</span>}
     </span>
   );
 }

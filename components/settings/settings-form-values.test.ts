@@ -12,6 +12,7 @@ const DEMO: ShopSettings = {
   edgeTrimMm: 6,
   minOffcutLengthMm: inches(12),
   minOffcutWidthMm: inches(4),
+  minFenceWidthMm: inches(1),
   wastePercent: 15,
 };
 

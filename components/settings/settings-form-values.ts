@@ -16,6 +16,7 @@ export const LENGTH_FIELDS = [
   ['edgeTrimMm', 'Edge trim', 'Taken off each factory edge of sheets and boards.'],
   ['minOffcutLengthMm', 'Keep offcuts at least this long', ''],
   ['minOffcutWidthMm', '… and at least this wide', ''],
+  ['minFenceWidthMm', 'Narrowest rip at the fence', 'A saw order never leaves a strip narrower than this between blade and fence: it turns the piece, or sends the cut to a sled, track saw or band saw. Your saw’s manual decides.'],
 ] as const;
 type LengthKey = (typeof LENGTH_FIELDS)[number][0];
 

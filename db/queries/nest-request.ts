@@ -71,6 +71,7 @@ export async function buildNestRequest(db: Db, shopId: string, jobId: string, se
       trim: shop.edgeTrimMm,
       minOffcutLength: shop.minOffcutLengthMm,
       minOffcutWidth: shop.minOffcutWidthMm,
+      minFenceWidth: shop.minFenceWidthMm,
       ...settings,
     },
   };

@@ -14,6 +14,7 @@ export async function getShopSettings(db: Db, shopId: string): Promise<ShopSetti
       edgeTrimMm: shops.edgeTrimMm,
       minOffcutLengthMm: shops.minOffcutLengthMm,
       minOffcutWidthMm: shops.minOffcutWidthMm,
+      minFenceWidthMm: shops.minFenceWidthMm,
       wastePercent: shops.wastePercent,
     })
     .from(shops)

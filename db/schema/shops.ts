@@ -11,6 +11,8 @@ export const shops = pgTable('shops', {
   edgeTrimMm: doublePrecision('edge_trim_mm').notNull().default(10),
   minOffcutLengthMm: doublePrecision('min_offcut_length_mm').notNull().default(300),
   minOffcutWidthMm: doublePrecision('min_offcut_width_mm').notNull().default(100),
+  /** The narrowest strip a rip may leave between blade and fence (1″ by default, common practice, no source). */
+  minFenceWidthMm: doublePrecision('min_fence_width_mm').notNull().default(25.4),
   /** Waste allowance used by takeoffs, in whole percent. */
   wastePercent: integer('waste_percent').notNull().default(15),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

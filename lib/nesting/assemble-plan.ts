@@ -41,6 +41,7 @@ export function assemblePiece(stock: NestStock, index: number, placements: Place
     placements,
     minOffcutLength: settings.minOffcutLength,
     minOffcutWidth: settings.minOffcutWidth,
+    minFenceWidth: settings.minFenceWidth,
   });
   const leftovers = treeLeaves(tree).flatMap((l) => (l.type === 'leftover' && l.rect.w > 0 && l.rect.h > 0 ? [l.rect] : []));
   const offcuts = leftovers.filter((r) => isKeepable(r, settings.minOffcutLength, settings.minOffcutWidth));

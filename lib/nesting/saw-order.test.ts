@@ -1,6 +1,10 @@
 import { describe, expect, test } from 'vitest';
 import { childName, letters, replaySawOrder } from '@/lib/nesting/saw-order';
-import { at, handPlan, part, request, sheet } from '@/lib/nesting/test-support';
+import fc from 'fast-check';
+import { optimize } from '@/lib/nesting/optimize';
+import { validatePlan } from '@/lib/nesting/validate-plan';
+import { at, handPlan, part, request, requestArb, sheet } from '@/lib/nesting/test-support';
+import { DEFAULT_MIN_FENCE_WIDTH } from '@/shared/schemas/nesting';
 
 const brief = (s: { n: number; kind: string; piece: string; reference: string; fence: number; length: number; trim: boolean; produces: { name: string; role: string }[] }) =>
   [s.n, s.kind, s.piece, s.reference, +s.fence.toFixed(6), s.length, s.trim, s.produces.map((p) => `${p.name}:${p.role}`).join(' ')];
@@ -73,6 +77,58 @@ describe('saw order from a layout', () => {
       [5, 'rip', 'A2', 'low', 277, 980, true, 'A2c:offcut A2d:waste'],
       [6, 'crosscut', 'A2b', 'low', 400, 200, false, 'A2b1:part A2b2:offcut'],
     ]);
+  });
+
+  test('a trim rip on a board never sets the fence to the trim strip: the sliver falls free (common practice, no source)', () => {
+    // A 150 mm board, 10 mm trim (kerf 3 inside it) and 1″ (25.4 mm) the least between blade and fence.
+    const board = request([part('p', 800, 130)], [sheet('B', 1000, 150, { kind: 'board' })], { kerf: 3, trim: 10, minOffcutLength: 300, minOffcutWidth: 100, minFenceWidth: 25.4 });
+    const steps = handPlan(board, 'B', [at('p', 10, 10, 800, 130)]).pieces[0].sawOrder!;
+    for (const step of steps.filter((st) => st.kind === 'rip')) {
+      expect(step.fence, `step ${step.n}`).toBeGreaterThanOrEqual(25.4);
+      expect(step.narrow).toBeUndefined();
+    }
+  });
+
+  test('a strip narrower than 1″ is ripped with it on the free side: the fence measures the wide side', () => {
+    // 1000 × 200 sheet, one 20 mm strip along the low edge, kerf 3: fence 200 − 20 − 3 = 177 mm from the high edge.
+    const strip = request([part('s', 1000, 20)], [sheet('S', 1000, 200)], { kerf: 3, minOffcutLength: 300, minOffcutWidth: 100, minFenceWidth: 25.4 });
+    const [first] = handPlan(strip, 'S', [at('s', 0, 0, 1000, 20)]).pieces[0].sawOrder!;
+    expect(brief(first)).toEqual([1, 'rip', 'A', 'high', 177, 1000, false, 'A1:part A2:offcut']);
+    // Without the rule (0) the strip itself sat between blade and fence.
+    const unsafe = request([part('s', 1000, 20)], [sheet('S', 1000, 200)], { kerf: 3, minOffcutLength: 300, minOffcutWidth: 100, minFenceWidth: 0 });
+    expect(handPlan(unsafe, 'S', [at('s', 0, 0, 1000, 20)]).pieces[0].sawOrder![0]).toMatchObject({ reference: 'low', fence: 20 });
+  });
+
+  test('validatePlan refuses a saw order with a strip under the safe minimum between blade and fence', () => {
+    const strip = request([part('s', 1000, 20)], [sheet('S', 1000, 200)], { kerf: 3, minOffcutLength: 300, minOffcutWidth: 100, minFenceWidth: 25.4 });
+    const plan = handPlan(strip, 'S', [at('s', 0, 0, 1000, 20)]);
+    expect(validatePlan(strip, plan)).toEqual([]);
+    const [first, ...rest] = plan.pieces[0].sawOrder!;
+    // The same cut measured from the strip's side: 20 mm at the fence.
+    const unsafe = { ...plan, pieces: [{ ...plan.pieces[0], sawOrder: [{ ...first, reference: 'low' as const, fence: 20 }, ...rest] }] };
+    expect(validatePlan(strip, unsafe).map((v) => v.code)).toEqual(['unsafe-fence']);
+  });
+
+  test('a rip with both sides under 1″ is marked for a sled, track saw or band saw, and still replays', () => {
+    // A 40 mm wide piece split into 18 and 19 mm with a 3 mm kerf: no fence setting leaves 25.4 mm at the fence.
+    const both = request([part('a', 1000, 18), part('b', 1000, 19)], [sheet('S', 1000, 40)], { kerf: 3, minOffcutLength: 300, minOffcutWidth: 100, minFenceWidth: 25.4 });
+    const steps = handPlan(both, 'S', [at('a', 0, 0, 1000, 18), at('b', 0, 21, 1000, 19)]).pieces[0].sawOrder!;
+    expect(steps).toHaveLength(1);
+    expect(steps[0]).toMatchObject({ kind: 'rip', narrow: true });
+    expect(replaySawOrder(steps, { x: 0, y: 0, w: 1000, h: 40 }, 'A', 3).problems).toEqual([]);
+  });
+
+  test('on any plan, every rip leaves at least 1″ between blade and fence, or is marked narrow because neither side can', async () => {
+    await fc.assert(
+      fc.asyncProperty(requestArb, async (req) => {
+        const plan = await optimize(req);
+        for (const step of plan.pieces.flatMap((p) => p.sawOrder ?? []).filter((st) => st.kind === 'rip')) {
+          if (step.narrow) for (const side of step.produces) expect(side.h).toBeLessThan(DEFAULT_MIN_FENCE_WIDTH);
+          else expect(step.fence).toBeGreaterThanOrEqual(DEFAULT_MIN_FENCE_WIDTH - 1e-6);
+        }
+      }),
+      { numRuns: 40, seed: 20261202 },
+    );
   });
 
   test('a trim thinner than the kerf is one cut that leaves no strip', () => {

@@ -32,6 +32,8 @@ export interface SawContext {
   placements: readonly Placement[];
   minOffcutLength: number;
   minOffcutWidth: number;
+  /** The narrowest piece a rip may leave between blade and fence (0: no limit). */
+  minFenceWidth: number;
 }
 
 const axisOf = (kind: SawStep['kind']): Axis => (kind === 'rip' ? 'y' : 'x');
@@ -91,16 +93,28 @@ export function sawOrderFromTree(tree: CutNode, rootName: string, ctx: SawContex
       if (highName) produces.push(describe(high, isLast ? highLeaf : null, ctx, highName));
       if (produces.length === 0) return; // a blade wider than the piece: nothing to do
       const lowIsWaste = lowName !== null && produces[0].role === 'waste';
-      const reference: SawStep['reference'] = !lowName || (lowIsWaste && highName) ? 'high' : 'low';
+      const fenceFor = (ref: SawStep['reference']) => (ref === 'low' ? pos - lowEdge(cur, axis) : a1 - (pos + ctx.kerf));
+      let reference: SawStep['reference'] = !lowName || (lowIsWaste && highName) ? 'high' : 'low';
+      let narrow = false;
+      // A rip never traps a strip narrower than the safe minimum between blade and fence: the piece is turned so
+      // the narrow side falls free (safety before the rule that waste does not ride the fence), or, when both sides
+      // are narrow, the step is one for a sled, a track saw or a band saw.
+      if (axis === 'y' && fenceFor(reference) < ctx.minFenceWidth - EPS) {
+        const turned: SawStep['reference'] = reference === 'low' ? 'high' : 'low';
+        const turnedExists = turned === 'low' ? lowName !== null : highName !== null;
+        if (turnedExists && fenceFor(turned) >= ctx.minFenceWidth - EPS) reference = turned;
+        else narrow = true;
+      }
       const trim = pos + ctx.kerf <= lowEdge(ctx.usable, axis) + EPS || pos >= highEdge(ctx.usable, axis) - EPS;
       steps.push({
         n: steps.length + 1,
         kind: axis === 'y' ? 'rip' : 'crosscut',
         piece: name,
         reference,
-        fence: reference === 'low' ? pos - lowEdge(cur, axis) : a1 - (pos + ctx.kerf),
+        fence: fenceFor(reference),
         length: extent(cur, other(axis)),
         trim,
+        ...(narrow ? { narrow } : {}),
         produces,
       });
       cur = high;

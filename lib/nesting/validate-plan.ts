@@ -49,7 +49,8 @@ export type ViolationCode =
   | 'stock-count'
   | 'unplaced-reason'
   | 'tree'
-  | 'saw-order';
+  | 'saw-order'
+  | 'unsafe-fence';
 
 export interface Violation {
   code: ViolationCode;
@@ -145,6 +146,11 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
   if (piece.sawOrder) {
     const { pieces, problems } = replaySawOrder(piece.sawOrder, whole, stockPieceName(index), settings.kerf);
     for (const pr of problems) out.push({ code: 'saw-order', message: `piece ${index + 1}: ${pr.message}`, ...at, step: pr.step });
+    for (const step of piece.sawOrder) {
+      if (step.kind === 'rip' && !step.narrow && step.fence < settings.minFenceWidth - EPS) {
+        out.push({ code: 'unsafe-fence', message: `piece ${index + 1}, step ${step.n}: a rip with ${step.fence} mm between blade and fence, under the ${settings.minFenceWidth} mm safe minimum`, ...at, step: step.n });
+      }
+    }
     const finals = [...pieces.values()];
     for (const p of piece.placements) {
       const hits = finals.filter((f) => sameRect(f, p, EPS)).length;

@@ -6,6 +6,9 @@ import { formatLength, type LengthStyle } from '@/lib/units/format-length';
 import type { PlanPiece, SawPiece, SawStep } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
 
+/** What a narrow rip asks for instead of the rip fence. */
+export const NARROW_HOW = 'on a sled, with a track saw or on the band saw: too narrow to rip between blade and fence';
+
 export const STEP_KIND_LABELS: Record<SawStep['kind'], string> = { rip: 'Rip', crosscut: 'Crosscut' };
 
 const instanceKey = (partId: string, instance: number) => `${partId}#${instance}`;
@@ -32,6 +35,8 @@ export interface StepText {
   fence: string;
   length: string;
   trim: boolean;
+  /** Both sides too narrow to ride the rip fence: a sled, track saw or band saw cut. */
+  narrow: boolean;
   /** One line the cutter reads aloud. */
   summary: string;
   /** Labels of the parts this cut frees, in order. */
@@ -51,6 +56,7 @@ export function describeStep(step: SawStep, labels: Map<string, string>, units: 
   const kindLabel = STEP_KIND_LABELS[step.kind];
   const fence = len(step.fence);
   const what = step.trim ? `${kindLabel} a trim cut off ${step.piece}` : `${kindLabel} ${step.piece}`;
+  const narrow = step.narrow === true;
   return {
     n: step.n,
     kind: step.kind,
@@ -59,7 +65,8 @@ export function describeStep(step: SawStep, labels: Map<string, string>, units: 
     fence,
     length: len(step.length),
     trim: step.trim,
-    summary: `${step.n}. ${what}, fence at ${fence}`,
+    narrow,
+    summary: narrow ? `${step.n}. ${what} ${fence} wide ${NARROW_HOW}` : `${step.n}. ${what}, fence at ${fence}`,
     frees: produced.filter((p) => p.role === 'part').map((p) => p.part),
     produced,
   };

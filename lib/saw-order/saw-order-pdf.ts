@@ -98,7 +98,7 @@ function drawStep(page: PDFPage, cell: { x: number; y: number; w: number }, text
   drawDiagram(page, { x: cell.x + 24, y: cell.y + 4 }, geo, piece);
   const tx = cell.x + 24 + DIAGRAM.w + 8;
   const tw = cell.x + cell.w - 8 - tx;
-  const head = `${text.kindLabel.toUpperCase()} ${text.piece}${text.trim ? '  - TRIM' : ''}`;
+  const head = `${text.kindLabel.toUpperCase()} ${text.piece}${text.trim ? '  - TRIM' : ''}${text.narrow ? '  - SLED / TRACK / BAND SAW' : ''}`;
   page.drawText(fit(head, bold, 9, tw), { x: tx, y: cell.y + CELL_H - 12, size: 9, font: bold, color: text.kind === 'rip' ? blade : ink });
   page.drawText(fit(`Fence ${text.fence}`, bold, 12, tw), { x: tx, y: cell.y + CELL_H - 26, size: 12, font: bold, color: ink });
   const frees = text.frees.length ? `Frees: ${text.frees.join(', ')}` : describeRest(text);

@@ -59,6 +59,9 @@ export type NestStock = z.infer<typeof nestStockSchema>;
 export const cuttingStyleSchema = z.enum(['panel', 'strips']);
 export const objectiveSchema = z.enum(['cost', 'pieces', 'cuts']);
 
+/** 1″ (25.4 mm) between blade and fence, the least a table-saw rip should leave there (common practice, no source). */
+export const DEFAULT_MIN_FENCE_WIDTH = 25.4;
+
 export const nestSettingsSchema = z.object({
   kerf: mm.min(0).max(20).default(3.2),
   /** Per side, kerf included, taken from factory edges (sheets, boards) only. */
@@ -70,6 +73,11 @@ export const nestSettingsSchema = z.object({
   timeBudgetMs: z.number().int().min(0).max(120_000).default(2000),
   seed: z.number().int().default(1),
   preferOffcuts: z.boolean().default(true),
+  /**
+   * The narrowest strip a rip may leave between blade and fence: 1″ on a table saw (common practice, no source; the
+   * saw's manual decides). 0 turns the rule off.
+   */
+  minFenceWidth: mm.min(0).max(300).default(DEFAULT_MIN_FENCE_WIDTH),
 });
 export type NestSettings = z.infer<typeof nestSettingsSchema>;
 
@@ -168,6 +176,11 @@ export const sawStepSchema = z.object({
   length: positiveMm,
   /** Takes a factory edge off (edge trim). */
   trim: z.boolean().default(false),
+  /**
+   * A rip whose pieces are both narrower than the safe minimum between blade and fence: not for the rip fence, but
+   * for a sled, a track saw or a band saw.
+   */
+  narrow: z.boolean().optional(),
   /** The pieces it leaves, low side first; a side the blade eats entirely is absent. */
   produces: z.array(sawPieceSchema).min(1).max(2),
 });

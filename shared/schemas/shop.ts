@@ -14,6 +14,7 @@ export const shopSettingsSchema = z.object({
   edgeTrimMm: positiveMm('Edge trim', 50),
   minOffcutLengthMm: positiveMm('Minimum offcut length', 3000),
   minOffcutWidthMm: positiveMm('Minimum offcut width', 3000),
+  minFenceWidthMm: positiveMm('The narrowest rip at the fence', 300),
   wastePercent: z.number().int('Use a whole percent.').min(0).max(90, 'Waste above 90 % looks like a typo.'),
 });
 export type ShopSettings = z.infer<typeof shopSettingsSchema>;

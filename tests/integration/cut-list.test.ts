@@ -95,7 +95,7 @@ describe('uploading a cut list', () => {
     expect(res.json.rows[1]).toEqual({ line: 3, ok: false, problems: [{ field: 'quantity', message: 'Quantity “two” is not a whole number.' }] });
     // 3/4″ MDF is the shop's 18 mm sheet (nominal and actual differ); another shop's stock is invisible.
     expect(res.json.rows[0].part.thicknessMm).toBe(18);
-    expect(res.json.warnings).toEqual([{ line: 4, message: expect.stringContaining('Nothing in the stock room is “Secret walnut ply”') }]);
+    expect(res.json.warnings).toEqual([{ line: 4, message: expect.stringContaining('The stock room has no Secret walnut ply at all') }]);
     expect(await countParts()).toBe(before);
   });
 

@@ -1,0 +1,1 @@
+ALTER TABLE "shops" ADD COLUMN "min_fence_width_mm" double precision DEFAULT 25.4 NOT NULL;
