@@ -2,6 +2,7 @@ import { movementWarning } from '@/lib/lumber/wood-movement';
 import { SPECIES, SPECIES_IDS, type SpeciesId } from '@/lib/lumber/species';
 import type { ShopUnits } from '@/shared/schemas/units';
 import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
+import type { SawnCut } from '@/shared/schemas/lumber';
 
 /**
  * Seasonal swing of indoor moisture content a drawer bottom lives through, percent (common practice, no source:
@@ -16,12 +17,12 @@ const UNIQUE_LAST_WORD = new Set(SPECIES_IDS.filter((id) => SPECIES_IDS.filter((
 const SHEET_WORDS = /ply|mdf|particle|hardboard|veneer|melamine|board stock|osb/i;
 
 /** A solid-wood species named in a material ("White oak", "quartersawn white oak"), or null for sheet goods. */
-export function speciesOf(material: string): { species: SpeciesId; cut: 'flatsawn' | 'quartersawn' } | null {
+export function speciesOf(material: string): { species: SpeciesId; cut: SawnCut } | null {
   if (SHEET_WORDS.test(material)) return null;
   const lower = material.toLowerCase();
   const species = SPECIES_IDS.find((id) => lower.includes(SPECIES[id].name)) ?? SPECIES_IDS.find((id) => UNIQUE_LAST_WORD.has(id) && new RegExp(`\\b${lastWord(id)}\\b`).test(lower));
   if (!species) return null;
-  return { species, cut: /quarter/.test(lower) ? 'quartersawn' : 'flatsawn' };
+  return { species, cut: /quarter/.test(lower) ? 'quartersawn' : /\brift/.test(lower) ? 'riftsawn' : 'flatsawn' };
 }
 
 /**

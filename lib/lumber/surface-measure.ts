@@ -4,11 +4,11 @@ import { thicknessInches } from './thickness';
 import { requirePositive } from './require-positive';
 
 export interface Tally {
-  /** Width as tallied: to the nearest inch. */
+  /** Width as measured, in inches (not rounded: the surface measure is). */
   widthIn: number;
   /** Length as tallied: rounded down to whole feet. */
   lengthFt: number;
-  /** SM = W(in) × L(ft) / 12, rounded to a whole number. */
+  /** SM = W(in) × L(ft) / 12, rounded to the nearest whole foot, half up. */
   surfaceMeasure: number;
   /** BF = SM × nominal thickness (in). */
   boardFeet: number;
@@ -18,14 +18,14 @@ export interface Tally {
 const settle = (x: number) => Math.round(x * 1e6) / 1e6;
 
 /**
- * The NHLA-style tally a hardwood yard invoices by (AHEC "Measurement"; see RULES.md): width to the
- * nearest inch, length rounded down to whole feet, surface measure rounded to a whole number, then times
- * the nominal thickness. It differs from the exact volume (`boardFeet`): 2″ × 6¼″ × 8′ tallies 8 BF
- * against 8.33 exact. Halves round up here; a yard tallying a whole pile alternates them up and down.
+ * The NHLA-style tally a hardwood yard invoices by (AHEC "Measurement"; see RULES.md): length rounded down to whole
+ * feet, surface measure SM = measured width (in) × length (ft) / 12 rounded to the nearest whole foot (half up),
+ * then times the nominal thickness. It differs from the exact volume (`boardFeet`): 2″ × 6¼″ × 8′ is SM 4.167 → 4,
+ * tallied 8 BF against 8.33 exact. Halves round up here; a yard tallying a whole pile alternates them up and down.
  */
 export function tally({ thickness, widthMm, lengthMm }: Board): Tally {
-  const widthIn = Math.round(settle(requirePositive('width', widthMm) / MM_PER_INCH));
+  const widthIn = settle(requirePositive('width', widthMm) / MM_PER_INCH);
   const lengthFt = Math.floor(settle(requirePositive('length', lengthMm) / (12 * MM_PER_INCH)));
-  const surfaceMeasure = Math.round((widthIn * lengthFt) / 12);
+  const surfaceMeasure = Math.floor(settle((widthIn * lengthFt) / 12) + 0.5);
   return { widthIn, lengthFt, surfaceMeasure, boardFeet: surfaceMeasure * thicknessInches(thickness) };
 }

@@ -1,7 +1,25 @@
 import type { Thickness } from '@/shared/schemas/lumber';
 import { type Mm, MM_PER_INCH } from '@/lib/units/length';
 
-/** Nominal thickness in inches: n/4 is n quarters of an inch (AHEC; hardwood trade practice). */
-export const thicknessInches = (t: Thickness): number => ('quarters' in t ? t.quarters / 4 : t.mm / MM_PER_INCH);
+import { requirePositive } from './require-positive';
 
-export const thicknessMm = (t: Thickness): Mm => ('quarters' in t ? (t.quarters / 4) * MM_PER_INCH : t.mm);
+/** Rough lumber comes in whole quarters of an inch, 1/4 to 48/4 (AHEC; hardwood trade practice). */
+function checked(t: Thickness): Thickness {
+  if ('quarters' in t) {
+    if (!Number.isInteger(t.quarters) || t.quarters < 1 || t.quarters > 48) throw new RangeError(`Quarters are whole numbers from 1 to 48, as 5 for 5/4 (got ${t.quarters}).`);
+    return t;
+  }
+  requirePositive('thickness', t.mm);
+  return t;
+}
+
+/** Nominal thickness in inches: n/4 is n quarters of an inch (AHEC; hardwood trade practice). */
+export const thicknessInches = (t: Thickness): number => {
+  const c = checked(t);
+  return 'quarters' in c ? c.quarters / 4 : c.mm / MM_PER_INCH;
+};
+
+export const thicknessMm = (t: Thickness): Mm => {
+  const c = checked(t);
+  return 'quarters' in c ? (c.quarters / 4) * MM_PER_INCH : c.mm;
+};

@@ -79,3 +79,48 @@ describe('warning about a fixed panel', () => {
     expect(movementWarning({ ...panel, mcFrom: 4 })).toMatch(/only an estimate.*6 % and 14 %/);
   });
 });
+
+describe('refusing what the handbook cannot answer', () => {
+  const ok = { species: 'red-oak' as SpeciesId, widthMm: 300, cut: 'flatsawn' as const, mcFrom: 6, mcTo: 10 };
+
+  test(`${FPL}: quartersawn and riftsawn use the radial coefficient, and say so (12″ red oak, 6→10 %: 0.076″)`, () => {
+    for (const cut of ['quartersawn', 'riftsawn'] as const) {
+      const change = dimensionalChange({ ...ok, widthMm: inches(12), cut });
+      expect(change.basis).toBe('radial');
+      expectAsPrinted(toInches(change.changeMm), 0.076, 3);
+    }
+    expect(movementWarning({ ...ok, widthMm: 800, cut: 'riftsawn', fixedAcrossWidth: true })).toContain('radial (quartersawn) coefficient');
+  });
+
+  test.each([
+    ['a cut spelled another way', { cut: 'Quartersawn' }],
+    ['no cut at all', { cut: undefined }],
+    ['a species that is an object key, not a wood', { species: '__proto__' }],
+    ['another object key', { species: 'toString' }],
+    ['a moisture content that is not a number', { mcTo: Number.NaN }],
+    ['a moisture content past fibre saturation', { mcTo: 200 }],
+    ['a negative moisture content', { mcFrom: -2 }],
+    ['an infinite width', { widthMm: Number.POSITIVE_INFINITY }],
+    ['a panel a kilometre wide', { widthMm: 1_000_000 }],
+  ])('refuses %s with a clear error', (_label, bad) => {
+    expect(() => dimensionalChange({ ...ok, ...(bad as object) } as never)).toThrow(RangeError);
+  });
+
+  test('the warning is a sentence or null, never NaN, for any input it accepts', () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...SPECIES_IDS),
+        fc.double({ min: 1, max: 3000, noNaN: true }),
+        fc.constantFrom('flatsawn' as const, 'quartersawn' as const, 'riftsawn' as const),
+        fc.double({ min: 0, max: 30, noNaN: true }),
+        fc.double({ min: 0, max: 30, noNaN: true }),
+        (species, widthMm, cut, mcFrom, mcTo) => {
+          const warning = movementWarning({ species, widthMm, cut, mcFrom, mcTo, fixedAcrossWidth: true });
+          if (warning !== null) expect(warning).not.toMatch(/NaN|Infinity/);
+          expect(Number.isFinite(dimensionalChange({ species, widthMm, cut, mcFrom, mcTo }).changeMm)).toBe(true);
+        },
+      ),
+      { seed: 20261202 },
+    );
+  });
+});

@@ -23,17 +23,35 @@ export interface DimensionalChange {
   withinValidRange: boolean;
 }
 
+/** Moisture contents a board can have and still move: 0 % to about 30 % (fibre saturation; FPL-GTR-190 ch. 13). */
+export const MOISTURE_LIMITS = { min: 0, max: 30 } as const;
+
+/** The widest panel movement is figured for: 3 m (a slipped unit beyond that). */
+const MAX_PANEL_WIDTH_MM = 3000;
+
+/** Which coefficient a cut moves by across its width: the radial one for quarter- and riftsawn, tangential for flatsawn. */
+export const COEFFICIENT_FOR_CUT: Record<SawnCut, 'radial' | 'tangential'> = { flatsawn: 'tangential', quartersawn: 'radial', riftsawn: 'radial' };
+
+function moisture(what: string, mc: number): number {
+  if (!Number.isFinite(mc) || mc < MOISTURE_LIMITS.min || mc > MOISTURE_LIMITS.max) {
+    throw new RangeError(`The ${what} moisture content must be between ${MOISTURE_LIMITS.min} % and ${MOISTURE_LIMITS.max} % (got ${mc}).`);
+  }
+  return mc;
+}
+
 /** ΔW = W × C × (MC_to − MC_from), USDA FPL Wood Handbook (FPL-GTR-190, 2010), ch. 13, eq. 13-2. */
-export function dimensionalChange({ species, widthMm, cut, mcFrom, mcTo }: { species: SpeciesId; widthMm: Mm; cut: SawnCut; mcFrom: number; mcTo: number }): DimensionalChange {
+export function dimensionalChange({ species, widthMm, cut, mcFrom, mcTo }: { species: SpeciesId; widthMm: Mm; cut: SawnCut; mcFrom: number; mcTo: number }): DimensionalChange & { basis: 'radial' | 'tangential' } {
+  if (!Object.hasOwn(SPECIES, species)) throw new RangeError(`Unknown species "${species}": use one of ${Object.keys(SPECIES).join(', ')}.`);
+  if (!Object.hasOwn(COEFFICIENT_FOR_CUT, cut)) throw new RangeError(`Unknown cut "${cut}": use flatsawn, quartersawn or riftsawn.`);
+  const width = requirePositive('width', widthMm);
+  if (width > MAX_PANEL_WIDTH_MM) throw new RangeError(`A panel ${width} mm wide is past ${MAX_PANEL_WIDTH_MM} mm: check the unit.`);
   const s = SPECIES[species];
-  if (!s) throw new RangeError(`Unknown species "${species}".`);
-  const coefficient = cut === 'quartersawn' ? s.radial : s.tangential;
+  const basis = COEFFICIENT_FOR_CUT[cut];
+  const coefficient = s[basis];
   const inRange = (mc: number) => mc >= MOVEMENT_VALID_MC.min && mc <= MOVEMENT_VALID_MC.max;
-  return {
-    changeMm: requirePositive('width', widthMm) * coefficient * (mcTo - mcFrom),
-    coefficient,
-    withinValidRange: inRange(mcFrom) && inRange(mcTo),
-  };
+  const from = moisture('starting', mcFrom);
+  const to = moisture('final', mcTo);
+  return { changeMm: width * coefficient * (to - from), coefficient, basis, withinValidRange: inRange(from) && inRange(to) };
 }
 
 const DEFAULT_UNITS: ShopUnits = { system: 'imperial', precision: 16, feet: false };
@@ -45,16 +63,17 @@ const DEFAULT_UNITS: ShopUnits = { system: 'imperial', precision: 16, feet: fals
 export function movementWarning(input: MovementInput, units: ShopUnits = DEFAULT_UNITS): string | null {
   const { species, widthMm, cut, mcFrom, mcTo, fixedAcrossWidth, thresholdMm = MOVEMENT_WARNING_THRESHOLD_MM } = input;
   if (!fixedAcrossWidth) return null;
-  const { changeMm, withinValidRange } = dimensionalChange({ species, widthMm, cut, mcFrom, mcTo });
+  const { changeMm, withinValidRange, basis } = dimensionalChange({ species, widthMm, cut, mcFrom, mcTo });
+  requirePositive('threshold', thresholdMm);
   const amount = Math.abs(changeMm);
   if (amount <= thresholdMm) return null;
 
   const moved =
     units.system === 'metric' ? `${amount.toFixed(1)} mm` : `${(amount / MM_PER_INCH).toFixed(3)}″ (${amount.toFixed(1)} mm)`;
   const remedy = cut === 'flatsawn' ? 'let it float in a groove or on slotted holes, or use quartersawn stock or plywood' : 'let it float in a groove or on slotted holes, or use plywood';
-  const caveat = withinValidRange
-    ? ''
-    : ` This is only an estimate: the handbook's coefficients hold between ${MOVEMENT_VALID_MC.min} % and ${MOVEMENT_VALID_MC.max} % moisture content.`;
+  const caveat =
+    (withinValidRange ? '' : ` This is only an estimate: the handbook's coefficients hold between ${MOVEMENT_VALID_MC.min} % and ${MOVEMENT_VALID_MC.max} % moisture content.`) +
+    (cut === 'riftsawn' ? ` Figured with the ${basis} (quartersawn) coefficient: rift moves a little more.` : '');
   return (
     `A ${formatLength(widthMm, units)} wide ${cut} ${SPECIES[species].name} panel fixed across its width will ` +
     `${changeMm > 0 ? 'swell' : 'shrink'} about ${moved} going from ${mcFrom} % to ${mcTo} % moisture content — more than the ` +

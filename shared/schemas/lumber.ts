@@ -59,8 +59,12 @@ export type BoardCostInput = z.infer<typeof boardCostInputSchema>;
 
 export const speciesIdSchema = z.enum(SPECIES_IDS, { error: `Species must be one of: ${SPECIES_IDS.join(', ')}.` });
 
-/** Flatsawn boards move by the tangential coefficient across their width, quartersawn by the radial one. */
-export const sawnCutSchema = z.enum(['flatsawn', 'quartersawn'], { error: 'The cut is "flatsawn" or "quartersawn".' });
+/**
+ * Flatsawn boards move by the tangential coefficient across their width; quartersawn and riftsawn by the radial one
+ * (the handbook gives none for rift, which moves a little more than quartersawn: a low estimate).
+ */
+export const SAWN_CUTS = ['flatsawn', 'quartersawn', 'riftsawn'] as const;
+export const sawnCutSchema = z.enum(SAWN_CUTS, { error: 'The cut is "flatsawn", "quartersawn" or "riftsawn".' });
 export type SawnCut = z.infer<typeof sawnCutSchema>;
 
 /** Percent moisture content; past roughly 30 % (fibre saturation) wood stops shrinking or swelling. */
