@@ -46,6 +46,9 @@ describe('reading the ways a shop writes a length', () => {
     ['a bare number in a metric shop is millimetres', 'mm', '502', 502],
     ['a bare decimal-comma number in a metric shop is millimetres', 'mm', '502,5', 502.5],
     ['a marked inch length is inches in a metric shop too', 'mm', '19-3/4"', 501.65],
+    ['three decimals of an inch are plain inches (1.125 × 25.4)', 'in', '1.125', 28.575],
+    ['three decimals of a metre are plain metres (1.250 m)', 'mm', '1.250 m', 1250],
+    ['a dot with two decimals is a decimal in mm', 'mm', '1.25', 1.25],
   ] as const)('%s', (_label, unit, text, mm) => {
     expect(parseLength(text, { unit })).toEqual({ ok: true, mm: expect.closeTo(mm, 9) });
   });
@@ -70,6 +73,8 @@ describe('refusing what is not a length, saying where and why', () => {
     ['a multiplication sign', '19 3/4 × 12', /"×" at character 8/, 8],
     ['a dangling decimal point', '19.', /digit after "\." at character 4/, 4],
     ['an ambiguous thousands comma', '1,200 mm', /ambiguous.*1200 or 1\.2/, 2],
+    ['an ambiguous thousands dot in millimetres', '1.200 mm', /^"1\.200" could be 1\.2 mm or 1200 mm: write 1\.2 or 1200\.$/, 1],
+    ['a length under half a millimetre', '0.3 mm', /under 0\.5 mm/, undefined],
     ['a fraction bar with nothing after it', '3/', /ends too soon.*denominator/, 3],
     ['12 or more inches after feet', "1' 14\"", /less than 12/, undefined],
     ['decimal feet followed by inches', '1.5′ 3″', /whole feet/, undefined],

@@ -9,6 +9,9 @@ export type ParsedLength = { ok: true; mm: Mm } | { ok: false; error: string; /*
 /** No part, board or sheet is longer; a bigger number almost always means a slipped unit (mm typed as m). */
 export const MAX_LENGTH_MM = 100_000;
 
+/** Nothing a shop cuts or sets is thinner: below half a millimetre is a typing slip (common practice, no source). */
+export const MIN_LENGTH_MM = 0.5;
+
 type Unit = 'in' | 'ft' | 'mm' | 'cm' | 'm';
 
 /** mm per unit as a fraction [numerator, denominator], so conversion stays exact until the last division. */
@@ -42,7 +45,7 @@ interface Ratio {
 }
 
 type Token = { start: number; end: number } & (
-  | { kind: 'number'; value: Ratio; whole: boolean }
+  | { kind: 'number'; value: Ratio; whole: boolean; thousandsDot: boolean }
   | { kind: 'glyph-fraction'; value: Ratio }
   | { kind: 'slash' | 'dash' | 'approx' }
   | { kind: 'unit'; unit: Unit }
@@ -81,6 +84,7 @@ export function lengthFromNumber(value: number, unit: LengthUnit): ParsedLength 
 
 function checkRange(mm: Mm): ParsedLength {
   if (!(mm > 0)) return { ok: false, error: 'A length must be greater than zero.' };
+  if (mm < MIN_LENGTH_MM) return { ok: false, error: `That is under ${MIN_LENGTH_MM} mm — almost always a typing slip: check the number and its unit.` };
   if (mm > MAX_LENGTH_MM) return { ok: false, error: `That is longer than ${MAX_LENGTH_MM / 1000} m — check the unit.` };
   return { ok: true, mm };
 }
@@ -117,7 +121,9 @@ function tokenize(chars: string[]): Token[] {
         }
       }
       const scale = 10 ** decimals.length;
-      tokens.push({ kind: 'number', start, end: i, whole: decimals === '', value: { n: Number(digits + decimals), d: scale } });
+      // "1.200" may be 1.2 or twelve hundred, written the European way; in millimetres it is refused as ambiguous.
+      const thousandsDot = sep === '.' && decimals.length === 3 && digits.length >= 1 && digits.length <= 3 && Number(digits) > 0;
+      tokens.push({ kind: 'number', start, end: i, whole: decimals === '', thousandsDot, value: { n: Number(digits + decimals), d: scale } });
     } else if (c in VULGAR_FRACTIONS) {
       const [n, d] = VULGAR_FRACTIONS[c];
       tokens.push({ kind: 'glyph-fraction', start, end: ++i, value: { n, d } });
@@ -163,7 +169,7 @@ function tokenize(chars: string[]): Token[] {
   return tokens;
 }
 
-type Quantity = Ratio & { shape: 'decimal' | 'whole' | 'fraction' };
+type Quantity = Ratio & { shape: 'decimal' | 'whole' | 'fraction'; thousandsDot?: string };
 
 class Parser {
   private i = 0;
@@ -191,6 +197,10 @@ class Parser {
           ? `Fractions are for inches and feet: write ${resolved} as a decimal (like 12.5 ${resolved}).`
           : `A fraction means inches, but this shop's bare numbers are mm: add ″ or "in", or write the length in mm.`,
       );
+    }
+    if (first.thousandsDot && resolved === 'mm') {
+      const [whole, part] = first.thousandsDot.split('.');
+      throw new LengthError(`${quote(first.thousandsDot)} could be ${Number(first.thousandsDot)} mm or ${whole}${part} mm: write ${Number(first.thousandsDot)} or ${whole}${part}.`, 1);
     }
     return toMm(first, resolved);
   }
@@ -230,7 +240,7 @@ class Parser {
       const part = this.properFraction();
       return { n: t.value.n * part.d + part.n, d: part.d, shape: 'fraction' };
     }
-    return { ...t.value, shape: t.whole ? 'whole' : 'decimal' };
+    return { ...t.value, shape: t.whole ? 'whole' : 'decimal', ...(t.thousandsDot ? { thousandsDot: this.text(t) } : {}) };
   }
 
   private properFraction(): Ratio {
