@@ -30,13 +30,13 @@ describe('a new drawer schedule with the form’s defaults', () => {
     for (const part of sized.parts) expect(stockMatchWarning(part, BALTIC_BIRCH, IMPERIAL)).toBeNull();
   });
 
-  test('sizes the joints on the actual stock: lock-rabbet sides are D − 2 × ⅛″ whatever the stock, the bottom spans 12 mm sides', () => {
+  test('sizes the joints on the actual stock: an 18 mm front keeps 18/2 − ⅛″ of face, the bottom spans 12 mm sides', () => {
     const { sized } = sizeDefaults(BALTIC_BIRCH);
     const side = sized.parts.find((p) => p.role === 'side')!;
     const bottom = sized.parts.find((p) => p.role === 'bottom')!;
     // Opening 22″ deep → the longest standard slide that fits behind ½″ clearance is 20″ (RULES.md), and the lock
-    // rabbet leaves ⅛″ of each front's face: side = 20 − 2 × ⅛ = 19¾″ (common practice, no source).
-    expect(side.lengthMm).toBeCloseTo(inches(19.75), 9);
+    // rabbet leaves face left = t/2 − ⅛″ of each 18 mm front (RULES.md; ⅛″ on ½″, ¼″ on ¾″ stock): side = 20″ − 2 × 5.825 mm.
+    expect(side.lengthMm).toBeCloseTo(inches(20) - 2 * (18 / 2 - inches(1 / 8)), 9);
     // Inside width = box width − 2 × 12 mm; the bottom is inside + 2 × ¼″ groove depth − 1/16″ (RULES.md, bottom).
     const boxWidth = inches(14) - 2 * inches(1 / 2);
     expect(bottom.lengthMm).toBeCloseTo(boxWidth - 2 * 12 + 2 * inches(1 / 4) - inches(1 / 16), 9);

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DRAWER_DEFAULTS as D } from '@/lib/joinery/defaults';
+import { DRAWER_DEFAULTS as D, lockRabbetFaceLeft } from '@/lib/joinery/defaults';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { snapThickness, type StockOffer } from '@/lib/cut-list/stock-match';
 import { formatLength } from '@/lib/units/format-length';
@@ -11,8 +11,8 @@ import { lengthInput, type ShopUnits } from '@/shared/schemas/units';
  * The drawer schedule form is flat, with lengths as typed text in the shop's unit; `toScheduleInput` builds the
  * nested schedule `lib/joinery` sizes, and `FIELD_OF_PATH` puts the sizing errors back on the field that caused them.
  */
-export const JOINT_PARAM: Partial<Record<JointMethod, { key: string; label: string; defaultMm: number }>> = {
-  'lock-rabbet': { key: 'faceLeftMm', label: 'Face left outside the tongue', defaultMm: D.lockRabbetFaceLeft },
+export const JOINT_PARAM: Partial<Record<JointMethod, { key: string; label: string; defaultMm: number; byFront?: { mm: (frontMm: number) => number; rule: string } }>> = {
+  'lock-rabbet': { key: 'faceLeftMm', label: 'Face left outside the tongue', defaultMm: D.lockRabbetFaceLeft, byFront: { mm: lockRabbetFaceLeft, rule: 'half the front’s thickness less ⅛″' } },
   'rabbet-and-dado': { key: 'dadoDepthMm', label: 'Dado depth', defaultMm: D.dadoDepth },
   'half-blind-dovetail': { key: 'lapMm', label: 'Lap', defaultMm: D.dovetailLap },
   'box-joint': { key: 'fingerWidthMm', label: 'Finger width', defaultMm: D.boxJointFinger },

@@ -117,8 +117,13 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
     // eslint-disable-next-line react-hooks/exhaustive-deps -- runs when a material changes, not on every keystroke
   }, [values.sidesMaterial, values.frontMaterial, values.bottomMaterial]);
 
-  const param = JOINT_PARAM[values.jointMethod ?? 'lock-rabbet'];
   const len = (mm: number) => formatLength(mm, units);
+  const param = JOINT_PARAM[values.jointMethod ?? 'lock-rabbet'];
+  const front = parseLength(String(values.frontThickness ?? ''), { unit });
+  const paramDefault = param?.byFront && front.ok ? param.byFront.mm(front.mm) : param?.defaultMm;
+  const paramHint = param && paramDefault !== undefined
+    ? `Blank: ${len(paramDefault)}${param.byFront && front.ok ? ` for a ${exactLengthText(front.mm, units)} front (${param.byFront.rule})` : ''}.`
+    : undefined;
   const sized = live?.sized.ok ? live.sized : null;
   const bottom = sized?.parts.find((p) => p.role === 'bottom');
   const movement = live && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
@@ -139,7 +144,7 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
           {field('height', values.sizeFrom === 'box' ? 'Box height' : 'Opening height')}
           {field('depth', values.sizeFrom === 'box' ? 'Box depth' : 'Opening depth', { hint: values.sizeFrom === 'opening' ? 'Box depth: the longest standard slide that fits.' : undefined })}
           {select('jointMethod', 'Joint', Object.fromEntries(JOINT_METHODS.map((m) => [m, JOINT_NAMES[m]])))}
-          {param ? field('jointParam', param.label, { placeholder: len(param.defaultMm), hint: `Blank: ${len(param.defaultMm)}.` }) : <div />}
+          {param ? field('jointParam', param.label, { placeholder: len(paramDefault ?? param.defaultMm), hint: paramHint }) : <div />}
           {select('frontStyle', 'Box front', { flush: 'Flush (the box front is the face)', lipped: 'Lipped', applied: 'Applied front (overlay)' })}
           {field('sidesMaterial', 'Box material', { list: 'ds-materials' })}
           {field('frontMaterial', 'Front and back material', { placeholder: 'same as box', list: 'ds-materials' })}

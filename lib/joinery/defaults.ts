@@ -21,7 +21,8 @@ export const DRAWER_DEFAULTS = {
   // Room behind the box in the carcass [CP, from memory].
   backClearance: inches(1 / 2),
 
-  // Lock rabbet: a bit cutting ⅜″ into ½″ stock leaves ⅛″ of the front's face outside the side's tongue [CP].
+  // Lock rabbet: a bit cutting ⅜″ into ½″ stock leaves ⅛″ of the front's face outside the side's tongue [CP]; other
+  // fronts follow `lockRabbetFaceLeft` below.
   lockRabbetFaceLeft: inches(1 / 8),
   // Rabbet and dado: ¼″ × ¼″ dado in ½″ sides (Woodsmith tip).
   dadoDepth: inches(1 / 4),
@@ -65,3 +66,15 @@ export const IMPERIAL_SLIDE_LENGTHS: readonly Mm[] = [12, 14, 16, 18, 20, 22, 24
 
 /** Metric slide lengths, 250–650 mm in 50 mm steps [CP, from memory]. */
 export const METRIC_SLIDE_LENGTHS: readonly Mm[] = [250, 300, 350, 400, 450, 500, 550, 600, 650];
+
+/**
+ * The lock rabbet's starting setup for a stock thickness t, with the bit height fixed at ⅜″: a ½″ front keeps ⅛″ of
+ * its face outside the side's tongue [CP] and a ¾″ front ¼″ (Woodsmith, "Locking rabbet joint"), and the fence sits
+ * 5/16″ and 7/16″ back [CP]. One straight line runs through both: face left = t/2 − ⅛″, fence setback = t/2 + 1/16″
+ * (so 12 mm stock gets 2.83 mm and 7.59 mm, 18 mm gets 5.83 and 10.59). Starting points, to check on scrap.
+ */
+export const lockRabbetFaceLeft = (frontMm: Mm): Mm => settle(frontMm / 2 - inches(1 / 8));
+export const lockRabbetFenceSetback = (stockMm: Mm): Mm => settle(stockMm / 2 + inches(1 / 16));
+
+/** Drops float crumbs (6.349999999999999 for 6.35) to a millionth of a millimetre. */
+const settle = (mm: number) => Math.round(mm * 1e6) / 1e6;

@@ -9,10 +9,24 @@ describe('a schedule filled with few fields takes the trade defaults', () => {
     expect(s.slide).toEqual({ type: 'side-mount', sideClearanceMm: inches(1 / 2), heightClearanceMm: inches(1 / 2) });
   });
 
-  test('a lock-rabbet box, ¾″ front with ½″ sides, front flush (common practice, no source)', () => {
-    expect(s.joint).toEqual({ method: 'lock-rabbet', faceLeftMm: inches(1 / 8) });
+  test('a lock-rabbet box, ¾″ front with ½″ sides, front flush; the ¾″ front keeps a ¼″ face (Woodsmith, "Locking rabbet joint")', () => {
+    expect(s.joint).toEqual({ method: 'lock-rabbet', faceLeftMm: inches(1 / 4) });
     expect(s.thickness).toEqual({ frontMm: inches(3 / 4), sideMm: inches(1 / 2) });
     expect(s.front).toEqual({ style: 'flush' });
+  });
+
+  test.each([
+    ['a ½″ front keeps ⅛″ (a ⅜″ cut into ½″ stock, common practice, no source)', inches(1 / 2), inches(1 / 8)],
+    ['a ¾″ front keeps ¼″ (Woodsmith, "Locking rabbet joint")', inches(3 / 4), inches(1 / 4)],
+    ['a ⅝″ front keeps 3/16″, on the line through both (derived)', inches(5 / 8), inches(3 / 16)],
+    ['an 18 mm front keeps 9 − 3.175 = 5.825 mm (derived)', 18, 5.825],
+  ])('the lock rabbet’s face left follows the front: %s', (_label, frontMm, faceLeftMm) => {
+    const joint = drawerScheduleSchema.parse({ label: 'L', quantity: 1, size: s.size, thickness: { frontMm, sideMm: inches(1 / 2) } }).joint;
+    expect(joint).toEqual({ method: 'lock-rabbet', faceLeftMm: expect.closeTo(faceLeftMm, 9) });
+  });
+
+  test('a face left given outright is kept whatever the front', () => {
+    expect(drawerScheduleSchema.parse({ label: 'L', quantity: 1, size: s.size, joint: { method: 'lock-rabbet', faceLeftMm: 2 } }).joint).toEqual({ method: 'lock-rabbet', faceLeftMm: 2 });
   });
 
   test('a ¼″ plywood bottom in a ¼ × ¼″ groove ½″ up with 1/16″ clearance, grain free (common practice, no source)', () => {

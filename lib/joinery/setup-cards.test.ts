@@ -2,7 +2,7 @@ import { describe, expect, test } from 'vitest';
 import { inches } from '@/lib/units/length';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { setupCardSchema } from '@/shared/schemas/setup-card';
-import { DEFAULT_LOCK_RABBET_CARDS, defaultSetupCard, findSetupCard, requiredSetupCards } from '@/lib/joinery/setup-cards';
+import { DEFAULT_LOCK_RABBET_CARDS, defaultSetupCard, findSetupCard, lockRabbetCard, requiredSetupCards } from '@/lib/joinery/setup-cards';
 
 const schedule = (over: object) =>
   drawerScheduleSchema.parse({ label: 'S', quantity: 1, size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, ...over });
@@ -46,7 +46,7 @@ describe('which setup cards a schedule needs', () => {
   });
 
   test('a saved card is found for stock within the tolerance, and not for another joint', () => {
-    const cards = [...DEFAULT_LOCK_RABBET_CARDS];
+    const cards = [lockRabbetCard(inches(1 / 2)), lockRabbetCard(inches(3 / 4))];
     expect(findSetupCard(cards, { joint: 'lock-rabbet', stockThicknessMm: 12.75 })?.stockThicknessMm).toBeCloseTo(inches(1 / 2), 9);
     expect(findSetupCard(cards, { joint: 'lock-rabbet', stockThicknessMm: 15 })).toBeUndefined();
     expect(findSetupCard(cards, { joint: 'box-joint', stockThicknessMm: inches(1 / 2) })).toBeUndefined();
@@ -54,16 +54,27 @@ describe('which setup cards a schedule needs', () => {
 });
 
 describe('the default card for stock the shop has no card for', () => {
-  test('12 mm stock starts from the ½″ card and 18 mm from the ¾″ one, shown at the actual thickness (common practice, no source)', () => {
-    const twelve = defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 12 })!;
-    expect(twelve.stockThicknessMm).toBe(12);
-    expect(twelve.fields.find((f) => f.key === 'fence-setback')!.value).toBeCloseTo(inches(5 / 16), 9);
-    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 18 })!.fields.find((f) => f.key === 'fence-setback')!.value).toBeCloseTo(inches(7 / 16), 9);
+  test.each([
+    ['½″ stock: 5/16″ back (common practice, no source)', inches(1 / 2), inches(5 / 16)],
+    ['¾″ stock: 7/16″ back (common practice, no source)', inches(3 / 4), inches(7 / 16)],
+    ['12 mm stock: 6 + 1.5875 = 7.5875 mm back, by the same rule (derived)', 12, 7.5875],
+    ['15 mm stock: 7.5 + 1.5875 = 9.0875 mm back (derived)', 15, 9.0875],
+  ])('the starting card for %s', (_label, stock, setback) => {
+    const card = defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: stock })!;
+    expect(card.stockThicknessMm).toBe(stock);
+    expect(card.fields.find((f) => f.key === 'fence-setback')!.value).toBeCloseTo(setback, 9);
+    expect(card.fields.find((f) => f.key === 'bit-height')!.value).toBeCloseTo(inches(3 / 8), 9);
+    expect(card.note).toMatch(/test cuts in scrap/);
   });
 
-  test('stock far from every default, or another joint, has no default card', () => {
-    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 15.5 })).toBeUndefined();
+  test('stock no lock rabbet is cut in, or another joint, has no starting card', () => {
+    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 6 })).toBeUndefined();
+    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 40 })).toBeUndefined();
     expect(defaultSetupCard({ joint: 'box-joint', stockThicknessMm: 12 })).toBeUndefined();
+  });
+
+  test('the seeded starting cards cover ½″, ⅝″, ¾″ and 12, 15, 18 mm, thinnest first', () => {
+    expect(DEFAULT_LOCK_RABBET_CARDS.map((c) => c.stockThicknessMm)).toEqual([12, inches(1 / 2), 15, inches(5 / 8), 18, inches(3 / 4)].sort((a, b) => a - b));
   });
 });
 

@@ -1,3 +1,4 @@
+import { lockRabbetFenceSetback } from '@/lib/joinery/defaults';
 import { inches, type Mm } from '@/lib/units/length';
 import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import type { SetupCard } from '@/shared/schemas/setup-card';
@@ -19,32 +20,30 @@ export function findSetupCard(cards: readonly SetupCard[], key: SetupCardKey): S
   return cards.find((c) => c.joint === key.joint && Math.abs(c.stockThicknessMm - key.stockThicknessMm) <= SETUP_CARD_TOLERANCE_MM);
 }
 
-const lockRabbetCard = (stock: Mm, fenceSetback: Mm): SetupCard => ({
+/** A lock-rabbet card for stock `t` by the starting rule (`lockRabbetFenceSetback`, RULES.md). */
+export const lockRabbetCard = (stock: Mm): SetupCard => ({
   joint: 'lock-rabbet',
   stockThicknessMm: stock,
   fields: [
     // The bit height stays the same for every stock thickness; the fence moves with it [CP].
     { key: 'bit-height', label: 'Bit height', value: inches(3 / 8), unit: 'mm' },
-    { key: 'fence-setback', label: 'Fence back from the cutter’s front', value: fenceSetback, unit: 'mm' },
+    { key: 'fence-setback', label: 'Fence back from the cutter’s front', value: lockRabbetFenceSetback(stock), unit: 'mm' },
   ],
-  note: 'Starting values: make test cuts in scrap of the same thickness and adjust before cutting parts.',
+  note: 'Starting values (fence back half the stock plus 1/16″): make test cuts in scrap of the same thickness and adjust before cutting parts.',
 });
 
-/** Starting lock-rabbet cards for ½″ and ¾″ stock [CP]; the shop edits and saves its own. */
-export const DEFAULT_LOCK_RABBET_CARDS: readonly SetupCard[] = [
-  lockRabbetCard(inches(1 / 2), inches(5 / 16)),
-  lockRabbetCard(inches(3 / 4), inches(7 / 16)),
-];
-
 /**
- * A default card covers stock within this much of its thickness: metric 12 mm and ½″ (12.7 mm) stock, or 18 mm and
- * ¾″, start from the same setup and are tuned with test cuts (common practice, no source).
+ * Starting lock-rabbet cards for the common drawer-stock thicknesses: ½″ and ¾″ [CP], ⅝″, and metric 12, 15 and
+ * 18 mm by the same rule. The shop edits and saves its own.
  */
-export const DEFAULT_CARD_REACH_MM = 1.1;
+export const DEFAULT_LOCK_RABBET_CARDS: readonly SetupCard[] = [12, inches(1 / 2), 15, inches(5 / 8), 18, inches(3 / 4)].map(lockRabbetCard);
 
-/** The starting card for a key when the shop has saved none: the nearest default within reach, set to the key's stock. */
+/** The thinnest and thickest stock the starting rule is offered for (a lock rabbet in stock under ⅜″ or over 1″ is no drawer joint). */
+const LOCK_RABBET_STOCK = { min: inches(3 / 8), max: inches(1) };
+
+/** The starting card for a key when the shop has saved none: the lock rabbet's rule at the key's very thickness. */
 export function defaultSetupCard(key: SetupCardKey): SetupCard | undefined {
-  const near = DEFAULT_LOCK_RABBET_CARDS.filter((c) => c.joint === key.joint && Math.abs(c.stockThicknessMm - key.stockThicknessMm) <= DEFAULT_CARD_REACH_MM);
-  const nearest = near.sort((a, b) => Math.abs(a.stockThicknessMm - key.stockThicknessMm) - Math.abs(b.stockThicknessMm - key.stockThicknessMm))[0];
-  return nearest && { ...nearest, stockThicknessMm: key.stockThicknessMm };
+  if (key.joint !== 'lock-rabbet') return undefined;
+  if (key.stockThicknessMm < LOCK_RABBET_STOCK.min || key.stockThicknessMm > LOCK_RABBET_STOCK.max) return undefined;
+  return lockRabbetCard(key.stockThicknessMm);
 }

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DRAWER_DEFAULTS as D } from '@/lib/joinery/defaults';
+import { DRAWER_DEFAULTS as D, lockRabbetFaceLeft } from '@/lib/joinery/defaults';
 
 /**
  * A drawer schedule: a set of identical drawer boxes. All lengths are mm. Most fields have trade defaults
@@ -29,8 +29,11 @@ export const buttLayoutSchema = z.enum(['sides-full-depth', 'front-back-full-wid
 export const jointSchema = z.discriminatedUnion('method', [
   z.object({
     method: z.literal('lock-rabbet'),
-    /** Front/back thickness left outside the side's tongue (published articles call it the lip). */
-    faceLeftMm: nonNegativeMm('Face left outside the tongue').default(D.lockRabbetFaceLeft),
+    /**
+     * Front/back thickness left outside the side's tongue (published articles call it the lip). Left out: it follows
+     * the front's thickness (`lockRabbetFaceLeft`: ⅛″ on a ½″ front, ¼″ on a ¾″ one).
+     */
+    faceLeftMm: nonNegativeMm('Face left outside the tongue').optional(),
   }),
   z.object({
     method: z.literal('rabbet-and-dado'),
@@ -165,7 +168,7 @@ export const bottomSchema = z.discriminatedUnion('mount', [
   }),
 ]);
 
-export const drawerScheduleSchema = z.object({
+const drawerScheduleShape = z.object({
   label: z.string().trim().min(1, { error: 'Give the schedule a label' }).max(80),
   quantity: z.int({ error: 'Quantity must be a whole number' }).min(1, { error: 'Quantity must be at least 1' }).max(10_000),
   size: drawerSizeSchema,
@@ -191,6 +194,17 @@ export const drawerScheduleSchema = z.object({
     })
     .prefault({}),
 });
+
+type ParsedShape = z.output<typeof drawerScheduleShape>;
+type Filled<J> = J extends { method: 'lock-rabbet' } ? J & { faceLeftMm: number } : J;
+
+/** Defaults that depend on another field: a lock rabbet's face left follows the front's thickness. */
+function fillDependentDefaults(s: ParsedShape) {
+  const joint = s.joint.method === 'lock-rabbet' && s.joint.faceLeftMm === undefined ? { ...s.joint, faceLeftMm: lockRabbetFaceLeft(s.thickness.frontMm) } : s.joint;
+  return { ...s, joint: joint as Filled<ParsedShape['joint']> };
+}
+
+export const drawerScheduleSchema = drawerScheduleShape.transform(fillDependentDefaults);
 
 export type DrawerSchedule = z.output<typeof drawerScheduleSchema>;
 export type DrawerScheduleInput = z.input<typeof drawerScheduleSchema>;
