@@ -70,7 +70,7 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
     const [kitchen, vanity] = await tx
       .insert(jobs)
       .values([
-        { shopId, name: 'Hollis kitchen', customer: 'Priya & Sam Hollis', status: 'won', dueDate: '2027-01-22', notes: 'Maple ply carcasses, Baltic birch drawer boxes, full-extension side-mount slides.', createdBy: estimator },
+        { shopId, name: 'Hollis kitchen', customer: 'Priya & Sam Hollis', status: 'won', wonAt: new Date('2026-11-02T15:00:00Z'), dueDate: '2027-01-22', notes: 'Maple ply carcasses, Baltic birch drawer boxes, full-extension side-mount slides.', createdBy: estimator },
         { shopId, name: 'Pemberton vanity', customer: 'Gail Pemberton', status: 'quoting', dueDate: '2027-02-05', notes: 'Floating vanity, two drawers, white oak face frame.', createdBy: estimator },
         { shopId, name: 'Arden Books wall units', customer: 'Arden Books', status: 'quoting', dueDate: null, notes: 'Six open bookcases, MDF painted.', createdBy: estimator },
       ])

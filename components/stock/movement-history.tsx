@@ -1,21 +1,13 @@
 import type { DetailChange, listMovements } from '@/db/queries/stock';
+import { describeMovement } from '@/lib/stock/describe-movement';
 import { describeDetailChanges } from './describe-detail-changes';
 
 type Movement = Awaited<ReturnType<typeof listMovements>>[number];
 
-const KIND_LABELS: Record<Movement['kind'], string> = {
-  received: 'Received',
-  reserved: 'Reserved',
-  released: 'Released',
-  consumed: 'Cut',
-  'offcut-created': 'Offcut racked',
-  scrapped: 'Scrapped',
-  adjusted: 'Count adjusted',
-};
-
 /**
- * The stock ledger: every change of a count, who made it and when, newest first; with it the changes to a size's
- * details (cost, location…), which move no stock and so change no count.
+ * The stock ledger: every change of a count, who made it and when, newest first, with the on-hand and reserved
+ * change of each row apart (a reservation moves only the reserved count; cutting reserved pieces moves both, in
+ * one row); with it the changes to a size's details (cost, location…), which move no stock and so change no count.
  */
 export function MovementHistory({ movements, changes = [], money = null, timeZone = 'UTC' }: { movements: Movement[]; changes?: DetailChange[]; money?: ((cents: number) => string) | null; timeZone?: string }) {
   const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short', timeZone });
@@ -28,35 +20,42 @@ export function MovementHistory({ movements, changes = [], money = null, timeZon
             <th>When</th>
             <th>What</th>
             <th>Stock</th>
-            <th className="num">Change</th>
+            <th className="num">On hand</th>
+            <th className="num">Reserved</th>
             <th>Who</th>
             <th>Reason</th>
           </tr>
         </thead>
         <tbody>
-          {rows.map(({ movement: m, change: c }) =>
-            m ? (
-              <tr key={m.id} data-testid="movement" data-kind={m.kind}>
-                <td className="whitespace-nowrap">{when.format(m.createdAt)}</td>
-                <td>{KIND_LABELS[m.kind]}</td>
-                <td>{m.item ?? '—'}</td>
-                <td className="num">{m.quantity > 0 ? `+${m.quantity}` : m.quantity}</td>
-                <td>{m.who ?? 'Kerfwise'}</td>
-                <td className="text-graphite-soft">{m.reason}</td>
-              </tr>
-            ) : (
+          {rows.map(({ movement: m, change: c }) => {
+            if (m) {
+              const words = describeMovement(m);
+              return (
+                <tr key={m.id} data-testid="movement" data-kind={m.kind} title={words.meaning}>
+                  <td className="whitespace-nowrap">{when.format(m.createdAt)}</td>
+                  <td className="whitespace-nowrap">{words.what}</td>
+                  <td>{m.item ?? '—'}</td>
+                  <td className="num" data-testid="movement-on-hand">{words.onHand}</td>
+                  <td className="num" data-testid="movement-reserved">{words.reserved}</td>
+                  <td>{m.who ?? 'Kerfwise'}</td>
+                  <td className="text-graphite-soft">{m.reason}</td>
+                </tr>
+              );
+            }
+            return (
               c && (
                 <tr key={c.id} data-testid="detail-change">
                   <td className="whitespace-nowrap">{when.format(c.createdAt)}</td>
                   <td>Details changed</td>
                   <td>{c.item ?? '—'}</td>
                   <td className="num text-graphite-mute">—</td>
+                  <td className="num text-graphite-mute">—</td>
                   <td>{c.who ?? 'Kerfwise'}</td>
                   <td className="text-graphite-soft">{describeDetailChanges(c.changes, money)}</td>
                 </tr>
               )
-            ),
-          )}
+            );
+          })}
         </tbody>
       </table>
     </div>

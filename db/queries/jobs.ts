@@ -1,8 +1,12 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../open';
-import { jobs, parts } from '../schema';
+import { jobs, parts, plans, stockMovements } from '../schema';
+import { HttpError } from '@/lib/api/errors';
+import type { Role } from '@/lib/auth/permissions';
+import { refuseManualStatus, wonAtAfter } from '@/lib/jobs/status';
 import type { JobInput, JobPatch, JobSummary } from '@/shared/schemas/job';
 import { recordAudit } from './audit';
+import { jobFacts } from './job-status';
 
 /** Per job: its pieces (quantities summed) and its materials, once each. */
 const partStats = (db: Db, shopId: string) =>
@@ -28,6 +32,7 @@ function selectSummaries(db: Db, shopId: string) {
       status: jobs.status,
       dueDate: jobs.dueDate,
       notes: jobs.notes,
+      wonAt: jobs.wonAt,
       createdAt: jobs.createdAt,
       updatedAt: jobs.updatedAt,
       partCount: sql<number>`coalesce(${stats.partCount}, 0)`,
@@ -37,10 +42,11 @@ function selectSummaries(db: Db, shopId: string) {
     .leftJoin(stats, eq(stats.jobId, jobs.id));
 }
 
-type SummaryRow = { createdAt: Date; updatedAt: Date; materials: string[] | null } & Omit<JobSummary, 'createdAt' | 'updatedAt' | 'materials'>;
+type SummaryRow = { createdAt: Date; updatedAt: Date; wonAt: Date | null; materials: string[] | null } & Omit<JobSummary, 'createdAt' | 'updatedAt' | 'wonAt' | 'materials'>;
 
 const toSummary = (row: SummaryRow): JobSummary => ({
   ...row,
+  wonAt: row.wonAt?.toISOString() ?? null,
   partCount: Number(row.partCount),
   materials: row.materials ?? [],
   createdAt: row.createdAt.toISOString(),
@@ -59,30 +65,72 @@ export async function getJob(db: Db, shopId: string, id: string): Promise<JobSum
 
 export async function createJob(db: Db, shopId: string, userId: string, input: JobInput): Promise<JobSummary> {
   const id = await db.transaction(async (tx) => {
-    const [row] = await tx.insert(jobs).values({ ...input, shopId, createdBy: userId }).returning({ id: jobs.id });
+    const [row] = await tx.insert(jobs).values({ ...input, wonAt: input.status === 'won' ? new Date() : null, shopId, createdBy: userId }).returning({ id: jobs.id });
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'job', entityId: row.id, data: { name: input.name } });
     return row.id;
   });
   return (await getJob(db, shopId, id))!;
 }
 
-export async function updateJob(db: Db, shopId: string, userId: string, id: string, patch: JobPatch) {
+/** Who is changing a job: the status rules depend on the role. */
+export interface JobEditor {
+  id: string;
+  role: Role;
+}
+
+/**
+ * Changes what the patch sends (only fields whose value differs are written; the audit keeps each as from → to). A
+ * status set by hand follows the rules of lib/jobs/status.ts for the person's role; marking a job won records when.
+ */
+export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: string, patch: JobPatch) {
   const updated = await db.transaction(async (tx) => {
-    const rows = await tx
-      .update(jobs)
-      .set({ ...patch, updatedAt: new Date() })
-      .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)))
-      .returning({ id: jobs.id });
-    if (rows.length) await recordAudit(tx, { shopId, userId, action: 'update', entity: 'job', entityId: id, data: patch });
-    return rows.length > 0;
+    const [job] = await tx.select().from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id))).for('update');
+    if (!job) return false;
+    const changes: Record<string, { from: unknown; to: unknown }> = {};
+    for (const [field, to] of Object.entries(patch) as [keyof JobPatch, unknown][]) {
+      if (to !== undefined && to !== job[field]) changes[field] = { from: job[field], to };
+    }
+    if (!Object.keys(changes).length) return true;
+    const set: Partial<typeof jobs.$inferInsert> = Object.fromEntries(Object.entries(changes).map(([f, c]) => [f, c.to]));
+    if (patch.status && changes.status) {
+      const refused = refuseManualStatus(editor.role, job.status, patch.status, await jobFacts(tx, shopId, id, job.wonAt));
+      if (refused) throw new HttpError(403, refused, { status: [refused] });
+      set.wonAt = wonAtAfter(patch.status, job.wonAt, new Date());
+    }
+    await tx.update(jobs).set({ ...set, updatedAt: new Date() }).where(eq(jobs.id, id));
+    await recordAudit(tx, { shopId, userId: editor.id, action: 'update', entity: 'job', entityId: id, data: { changes } });
+    return true;
   });
   return updated ? getJob(db, shopId, id) : null;
 }
 
+/** A job with history — a plan that was ever released, or stock moved for one of its plans — is archived, not deleted. */
+export class JobHasHistory extends HttpError {
+  constructor(name: string) {
+    super(409, `“${name}” has history (plans released to the saw, stock moved for them): archive it instead, so the stock and yield ledgers keep their plans. Archived jobs leave the jobs list until you filter for them.`);
+  }
+}
+
+/** Deletes a job with its cut list and draft plans; refuses one with history (JobHasHistory), in the same statement. */
 export async function deleteJob(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
-    const rows = await tx.delete(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id))).returning({ name: jobs.name });
-    if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'job', entityId: id, data: rows[0] });
-    return rows.length > 0;
+    const rows = await tx
+      .delete(jobs)
+      .where(
+        and(
+          eq(jobs.shopId, shopId),
+          eq(jobs.id, id),
+          sql`not exists (select 1 from ${plans} where ${plans.jobId} = ${id} and (${plans.releasedAt} is not null or ${plans.status} in ('released', 'cutting', 'done')))`,
+          sql`not exists (select 1 from ${stockMovements} m join ${plans} p on p.id = m.plan_id where p.job_id = ${id})`,
+        ),
+      )
+      .returning({ name: jobs.name });
+    if (rows.length) {
+      await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'job', entityId: id, data: rows[0] });
+      return true;
+    }
+    const [kept] = await tx.select({ name: jobs.name }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
+    if (kept) throw new JobHasHistory(kept.name);
+    return false;
   });
 }

@@ -2,9 +2,12 @@ import { and, eq } from 'drizzle-orm';
 import type { Db } from '../open';
 import { offcuts, stockItems } from '../schema';
 import { boardFeet } from '@/lib/lumber/board-feet';
-import type { NestRequestInput, NestSettings, NestStock } from '@/shared/schemas/nesting';
+import { recutNestParts } from '@/lib/recuts/recuts';
+import type { NestPart, NestRequestInput, NestSettings, NestStock } from '@/shared/schemas/nesting';
+import type { NestFor } from '@/shared/schemas/recut';
 import { getShopSettings } from './shops';
 import { listParts } from './parts';
+import { openRecuts } from './recuts';
 
 /**
  * Stock ids in a nesting request name where the piece comes from, so a plan can be traced back to the rack:
@@ -30,11 +33,14 @@ export function costEachCents(item: typeof stockItems.$inferSelect): number {
   return Math.round(item.costCents * boardFeet({ thickness, widthMm: item.widthMm, lengthMm: item.lengthMm }));
 }
 
-/** The job's parts on everything the stock room can offer now (free counts only), with the shop's defaults. */
-export async function buildNestRequest(db: Db, shopId: string, jobId: string, settings: Partial<NestSettings> = {}): Promise<NestRequestInput> {
+/**
+ * The job's parts on everything the stock room can offer now (free counts only), with the shop's defaults. With
+ * `for: 'recuts'` the parts are only the job's open re-cuts (each with its re-cut's id), nothing of the cut list.
+ */
+export async function buildNestRequest(db: Db, shopId: string, jobId: string, settings: Partial<NestSettings> = {}, nestFor: NestFor = 'cut-list'): Promise<NestRequestInput> {
   const [shop, parts, items, rack] = await Promise.all([
     getShopSettings(db, shopId),
-    listParts(db, shopId, jobId),
+    nestFor === 'recuts' ? openRecuts(db, shopId, jobId).then(recutNestParts) : listParts(db, shopId, jobId).then(cutListParts),
     db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
     db.select().from(offcuts).where(and(eq(offcuts.shopId, shopId), eq(offcuts.status, 'available'))),
   ]);
@@ -52,19 +58,7 @@ export async function buildNestRequest(db: Db, shopId: string, jobId: string, se
   }
 
   return {
-    parts: parts.map((p) => ({
-      id: p.id,
-      label: p.label,
-      quantity: p.quantity,
-      length: p.lengthMm,
-      width: p.widthMm,
-      thickness: p.thicknessMm,
-      material: p.material,
-      grain: p.grain,
-      jointAllowance: p.jointAllowanceMm,
-      group: p.drawerScheduleId ?? undefined,
-      notes: p.notes || undefined,
-    })),
+    parts,
     stock,
     settings: {
       kerf: shop.kerfMm,
@@ -76,3 +70,18 @@ export async function buildNestRequest(db: Db, shopId: string, jobId: string, se
     },
   };
 }
+
+const cutListParts = (parts: Awaited<ReturnType<typeof listParts>>): NestPart[] =>
+  parts.map((p) => ({
+    id: p.id,
+    label: p.label,
+    quantity: p.quantity,
+    length: p.lengthMm,
+    width: p.widthMm,
+    thickness: p.thicknessMm,
+    material: p.material,
+    grain: p.grain,
+    jointAllowance: p.jointAllowanceMm,
+    group: p.drawerScheduleId ?? undefined,
+    notes: p.notes || undefined,
+  }));

@@ -18,6 +18,8 @@ export interface JobPlanSummary {
   id: string;
   name: string;
   status: (typeof plans.$inferSelect)['status'];
+  /** Nested from the job's re-cuts. */
+  recutPlan: boolean;
   yieldRatio: number | null;
   costCents: number | null;
   pieces: number;
@@ -46,6 +48,7 @@ export async function listJobPlans(db: Db, shopId: string, jobId: string): Promi
       id: r.id,
       name: r.name,
       status: r.status,
+      recutPlan: r.recutPlan,
       yieldRatio: r.yieldRatio,
       costCents: r.costCents,
       pieces: doc.pieces?.length ?? 0,
@@ -57,13 +60,13 @@ export async function listJobPlans(db: Db, shopId: string, jobId: string): Promi
 }
 
 /** A new draft plan with the request it was nested from (already judged valid by the caller). */
-export async function createDraftPlan(db: Db, input: { shopId: string; jobId: string; userId: string; name: string; request: NestRequest; plan: Plan }) {
+export async function createDraftPlan(db: Db, input: { shopId: string; jobId: string; userId: string; name: string; request: NestRequest; plan: Plan; recutPlan?: boolean }) {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(plans)
-      .values({ shopId: input.shopId, jobId: input.jobId, name: input.name, status: 'draft', request: input.request, document: input.plan, ...figures(input.plan), createdBy: input.userId, ...stamp() })
+      .values({ shopId: input.shopId, jobId: input.jobId, name: input.name, status: 'draft', recutPlan: input.recutPlan ?? false, request: input.request, document: input.plan, ...figures(input.plan), createdBy: input.userId, ...stamp() })
       .returning({ id: plans.id, updatedAt: plans.updatedAt });
-    await recordAudit(tx, { shopId: input.shopId, userId: input.userId, action: 'create', entity: 'plan', entityId: row.id, data: { jobId: input.jobId, name: input.name } });
+    await recordAudit(tx, { shopId: input.shopId, userId: input.userId, action: 'create', entity: 'plan', entityId: row.id, data: { jobId: input.jobId, name: input.name, recutPlan: input.recutPlan ?? false } });
     return row;
   });
 }

@@ -4,17 +4,25 @@ import { offcuts, placements, planPieces, plans, stockItems, stockMovements } fr
 import { readPlan } from '@/lib/nesting';
 import { isKeepableOffcut, offcutCostCents, offcutSize } from '@/lib/stock/offcut-rules';
 import { nestRequestSchema, type Plan, type PlanPiece } from '@/shared/schemas/nesting';
-import type { finishPlanSchema, MissingPiece } from '@/shared/schemas/stock';
-import type { z } from 'zod';
+import { finishPlanSchema, type FinishPlanInput, type MissingPiece } from '@/shared/schemas/stock';
 import { stockRef } from './nest-request';
 import { recordAudit } from './audit';
+import { syncJobStatus } from './job-status';
+import { closeRecuts, holdRecutsForPlan, recordDamagedPieces, reopenRecuts } from './recuts';
 import { HttpError } from '@/lib/api/errors';
+import { finishFigures } from '@/lib/recuts/recuts';
+import type { JobStatus } from '@/shared/schemas/job';
 
 /**
  * A plan moves material: draft → released (its exact stock reserved) → cutting → done (stock consumed, offcuts on
  * the rack, yield recorded), or cancelled (every reservation given back). Every change of a count is one
  * conditional UPDATE (`… where on_hand - reserved >= n`), never a read followed by a write, so racing releases on
- * PGlite or PostgreSQL cannot both take the last sheet; and every change writes a movement row.
+ * PGlite or PostgreSQL cannot both take the last sheet; and every change writes one movement row per physical
+ * change, with both counts it moved: release +n reserved; cancel −n reserved; done −n on hand and −n reserved (the
+ * reserved pieces are cut, and their reservation ends with them: one row, not a release and a cut).
+ *
+ * Each step also moves the job's status along (db/queries/job-status.ts) and, for a re-cut plan, its re-cuts:
+ * release holds them, cancel puts them back on the list, done closes them. Damaged parts at done go on the list.
  *
  * Stock to buy (`buy:<id>` pieces) is not reserved at release: the plan records it as to-buy (plan_pieces.to_buy).
  * Receiving it is an ordinary stock receipt. At done, bought pieces are taken from that size's free count as far as
@@ -127,6 +135,7 @@ export interface ReleaseResult {
   planId: string;
   reserved: { stockId: string; count: number }[];
   toBuy: { stockId: string; count: number }[];
+  jobStatus: JobStatus | null;
 }
 
 /** Reserves exactly the pieces the plan uses, all or nothing. Throws StockShortage naming every piece that is gone. */
@@ -169,21 +178,23 @@ export async function releasePlan(db: Db, { shopId, userId, planId }: { shopId: 
     const reason = `Reserved for plan “${row.name}”`;
     const moves = reserved.map((r) => {
       const ref = stockRef.parse(r.stockId)!;
-      return { shopId, kind: 'reserved' as const, quantity: r.count, planId, userId, reason, ...(ref.source === 'offcut' ? { offcutId: ref.id } : { stockItemId: ref.id }) };
+      return { shopId, kind: 'reserved' as const, quantity: 0, reservedChange: r.count, planId, userId, reason, ...(ref.source === 'offcut' ? { offcutId: ref.id } : { stockItemId: ref.id }) };
     });
     if (moves.length) await tx.insert(stockMovements).values(moves);
+    if (row.recutPlan) await holdRecutsForPlan(tx, { shopId, planId, recutIds: plan.pieces.flatMap((p) => p.placements.map((pl) => pl.partId)) });
     await writePieceRows(tx, shopId, planId, plan);
     await recordAudit(tx, { shopId, userId, action: 'release', entity: 'plan', entityId: planId, data: { reserved, toBuy } });
-    return { planId, reserved, toBuy };
+    const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: `plan “${row.name}” released` });
+    return { planId, reserved, toBuy, jobStatus };
   });
 }
 
 /** What the plan still holds: net reserved per stock item and per offcut, from its own movement rows. */
-async function heldBy(tx: Tx, shopId: string, planId: string) {
+export async function heldBy(tx: Tx, shopId: string, planId: string) {
   const rows = await tx
-    .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId, held: sql<number>`sum(${stockMovements.quantity})`.mapWith(Number) })
+    .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId, held: sql<number>`sum(${stockMovements.reservedChange})`.mapWith(Number) })
     .from(stockMovements)
-    .where(and(eq(stockMovements.shopId, shopId), eq(stockMovements.planId, planId), inArray(stockMovements.kind, ['reserved', 'released'])))
+    .where(and(eq(stockMovements.shopId, shopId), eq(stockMovements.planId, planId)))
     .groupBy(stockMovements.stockItemId, stockMovements.offcutId);
   return {
     items: rows.filter((r) => r.stockItemId && r.held > 0).map((r) => ({ id: r.stockItemId!, count: r.held })).sort((a, b) => a.id.localeCompare(b.id)),
@@ -191,10 +202,15 @@ async function heldBy(tx: Tx, shopId: string, planId: string) {
   };
 }
 
+/**
+ * Ends every reservation the plan holds: given back to the rack (cancel: −n reserved, on hand unchanged) or cut
+ * (done: −n on hand and −n reserved in one `consumed` row, since the same pieces leave the rack).
+ */
 async function giveBack(tx: Tx, shopId: string, planId: string, userId: string, reason: string, then: 'available' | 'used') {
   const held = await heldBy(tx, shopId, planId);
+  const consume = then === 'used';
+  const kind = consume ? ('consumed' as const) : ('released' as const);
   for (const item of held.items) {
-    const consume = then === 'used';
     const done = await tx
       .update(stockItems)
       .set(consume ? { reserved: sql`${stockItems.reserved} - ${item.count}`, onHand: sql`${stockItems.onHand} - ${item.count}` } : { reserved: sql`${stockItems.reserved} - ${item.count}` })
@@ -202,13 +218,11 @@ async function giveBack(tx: Tx, shopId: string, planId: string, userId: string, 
       .returning({ id: stockItems.id });
     // The CHECK constraints make this impossible unless the ledger and the counts disagree: refuse, change nothing.
     if (!done.length) throw new Error(`Stock item ${item.id} holds fewer reservations than plan ${planId} recorded.`);
-    await tx.insert(stockMovements).values({ shopId, kind: 'released', stockItemId: item.id, quantity: -item.count, planId, userId, reason });
-    if (consume) await tx.insert(stockMovements).values({ shopId, kind: 'consumed', stockItemId: item.id, quantity: -item.count, planId, userId, reason });
+    await tx.insert(stockMovements).values({ shopId, kind, stockItemId: item.id, quantity: consume ? -item.count : 0, reservedChange: -item.count, planId, userId, reason });
   }
   for (const id of held.offcuts) {
     await tx.update(offcuts).set({ status: then }).where(and(eq(offcuts.id, id), eq(offcuts.shopId, shopId), eq(offcuts.status, 'reserved')));
-    await tx.insert(stockMovements).values({ shopId, kind: 'released', offcutId: id, quantity: -1, planId, userId, reason });
-    if (then === 'used') await tx.insert(stockMovements).values({ shopId, kind: 'consumed', offcutId: id, quantity: -1, planId, userId, reason });
+    await tx.insert(stockMovements).values({ shopId, kind, offcutId: id, quantity: consume ? -1 : 0, reservedChange: -1, planId, userId, reason });
   }
   return held;
 }
@@ -217,31 +231,45 @@ async function giveBack(tx: Tx, shopId: string, planId: string, userId: string, 
 export async function cancelPlan(db: Db, { shopId, userId, planId }: { shopId: string; userId: string; planId: string }) {
   return db.transaction(async (tx) => {
     const row = await moveStatus(tx, shopId, planId, ['draft', 'released', 'cutting'], { status: 'cancelled' }, 'cancelled');
-    const held = await giveBack(tx, shopId, planId, userId, `Plan “${row.name}” cancelled`, 'available');
+    const held = await giveBack(tx, shopId, planId, userId, `Plan “${row.name}” cancelled: reservation given back`, 'available');
+    if (row.recutPlan) await reopenRecuts(tx, { shopId, planId });
     await recordAudit(tx, { shopId, userId, action: 'cancel', entity: 'plan', entityId: planId, data: held });
-    return { planId, released: held };
+    const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: `plan “${row.name}” cancelled` });
+    return { planId, released: held, jobStatus };
   });
 }
 
-export type FinishPlanBody = z.infer<typeof finishPlanSchema>;
+/** What the cutter sends at done (parsed again here, so every caller gets the same defaults and checks). */
+export type FinishPlanBody = FinishPlanInput;
 
 export interface FinishResult {
   planId: string;
+  jobId: string;
   yieldRatio: number;
+  /** All waste, spoiled parts included. */
   wasteRatio: number;
+  /** Of which parts damaged at the saw. */
+  spoiledRatio: number;
   costCents: number;
   offcuts: { id: string; lengthMm: number; widthMm: number; location: string }[];
   damaged: number;
+  /** Re-cuts put on the job's list for the damaged parts. */
+  recutsAdded: number;
+  /** Re-cuts this (re-cut) plan cut. */
+  recutsClosed: number;
+  jobStatus: JobStatus | null;
 }
 
 /**
  * Done: consumes what the plan reserved, takes its bought pieces, puts its keepable offcuts on the rack (where the
- * cutter says), marks damaged parts, and records yield, waste and cost computed here from the plan itself.
+ * cutter says), marks damaged parts and puts them on the job's re-cut list, closes the re-cuts a re-cut plan cut,
+ * and records yield, waste (spoiled parts apart) and cost computed here from the plan itself.
  */
 export async function finishPlan(
   db: Db,
-  { shopId, userId, planId, body }: { shopId: string; userId: string; planId: string; body: FinishPlanBody },
+  { shopId, userId, planId, body: input }: { shopId: string; userId: string; planId: string; body: FinishPlanBody },
 ): Promise<FinishResult> {
+  const body = finishPlanSchema.parse(input);
   return db.transaction(async (tx) => {
     const row = await moveStatus(tx, shopId, planId, ['released', 'cutting'], { status: 'done', finishedAt: new Date(), finishedBy: userId }, 'marked done');
     const plan = readPlan(row.document);
@@ -313,8 +341,12 @@ export async function finishPlan(
 
     // Damaged parts: marked on their placement rows; their area counts as waste, not yield.
     await writePieceRows(tx, shopId, planId, plan);
+    const seen = new Set<string>();
     let damagedArea = 0;
     for (const d of body.damaged) {
+      const key = `${d.piece}:${d.partId}:${d.instance}`;
+      if (seen.has(key)) throw new PlanStateError(422, `Part ${d.partId} #${d.instance} on piece ${d.piece + 1} is listed as damaged twice.`);
+      seen.add(key);
       const placed = plan.pieces[d.piece]?.placements.find((pl) => pl.partId === d.partId && pl.instance === d.instance);
       if (!placed) throw new PlanStateError(422, `Piece ${d.piece + 1} has no part ${d.partId} #${d.instance}.`);
       damagedArea += placed.w * placed.h;
@@ -328,13 +360,16 @@ export async function finishPlan(
       }
     }
 
+    const added = await recordDamagedPieces(tx, { shopId, userId, plan: row, request: request.success ? request.data : null, damaged: body.damaged });
+    const closed = row.recutPlan ? await closeRecuts(tx, { shopId, planId, userId }) : [];
+
     const figures = planFigures(plan);
-    const yieldRatio = figures.stockArea > 0 ? Math.max(0, figures.partArea - damagedArea) / figures.stockArea : 0;
-    const wasteRatio = figures.stockArea > 0 ? Math.max(0, figures.stockArea - (figures.partArea - damagedArea) - keptArea) / figures.stockArea : 0;
+    const { yieldRatio, wasteRatio, spoiledRatio } = finishFigures({ stockArea: figures.stockArea, partArea: figures.partArea, keptOffcutArea: keptArea, spoiledArea: damagedArea });
     const costCents = Math.round(figures.cost);
-    await tx.update(plans).set({ yieldRatio, wasteRatio, costCents }).where(eq(plans.id, planId));
-    await recordAudit(tx, { shopId, userId, action: 'finish', entity: 'plan', entityId: planId, data: { offcuts: created.length, damaged: body.damaged.length } });
-    return { planId, yieldRatio, wasteRatio, costCents, offcuts: created, damaged: body.damaged.length };
+    await tx.update(plans).set({ yieldRatio, wasteRatio, spoiledRatio, costCents }).where(eq(plans.id, planId));
+    await recordAudit(tx, { shopId, userId, action: 'finish', entity: 'plan', entityId: planId, data: { offcuts: created.length, damaged: body.damaged.length, recutsClosed: closed.length } });
+    const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: `plan “${row.name}” finished` });
+    return { planId, jobId: row.jobId, yieldRatio, wasteRatio, spoiledRatio, costCents, offcuts: created, damaged: body.damaged.length, recutsAdded: added.length, recutsClosed: closed.length, jobStatus };
   });
 }
 

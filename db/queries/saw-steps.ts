@@ -5,6 +5,7 @@ import { HttpError, notFound } from '@/lib/api/errors';
 import { readPlan } from '@/lib/nesting';
 import { nestRequestSchema, nestSettingsSchema } from '@/shared/schemas/nesting';
 import { recordAudit } from './audit';
+import { syncJobStatus } from './job-status';
 import { getPlan } from './plan-document';
 import { getShopSettings } from './shops';
 
@@ -65,10 +66,13 @@ export async function tickStep(db: Db, shopId: string, userId: string, planId: s
       .values({ shopId, planId, pieceIndex: ref.piece, seq: ref.step, doneBy: userId })
       .onConflictDoNothing({ target: [sawSteps.planId, sawSteps.pieceIndex, sawSteps.seq] })
       .returning({ id: sawSteps.id });
-    await tx
+    const started = await tx
       .update(plans)
       .set({ status: 'cutting', updatedAt: sql`now()` })
-      .where(and(eq(plans.shopId, shopId), eq(plans.id, planId), eq(plans.status, 'released')));
+      .where(and(eq(plans.shopId, shopId), eq(plans.id, planId), eq(plans.status, 'released')))
+      .returning({ jobId: plans.jobId, name: plans.name });
+    // The first tick starts the saw on this plan: the job is being cut, whatever it said before.
+    if (started.length) await syncJobStatus(tx, { shopId, jobId: started[0].jobId, userId, cause: `first step of plan “${started[0].name}” ticked` });
     if (inserted.length) await recordAudit(tx, { shopId, userId, action: 'tick', entity: 'saw-step', entityId: planId, data: ref });
   });
   return (await getStepTicks(db, shopId, planId))!;

@@ -166,6 +166,7 @@ export async function listMovements(db: Db, shopId: string, { stockItemId, offcu
       id: stockMovements.id,
       kind: stockMovements.kind,
       quantity: stockMovements.quantity,
+      reservedChange: stockMovements.reservedChange,
       reason: stockMovements.reason,
       createdAt: stockMovements.createdAt,
       stockItemId: stockMovements.stockItemId,
@@ -218,16 +219,18 @@ export async function listDetailChanges(db: Db, shopId: string, { stockItemId, l
 export type DetailChange = Awaited<ReturnType<typeof listDetailChanges>>[number];
 
 /**
- * The ledger read back as counts: on hand = receipts + adjustments + consumption (+ scrapping), reserved =
- * reservations − releases. Equal to the stored counts for every item when nothing bypassed the ledger.
+ * The ledger read back as counts: on hand = the sum of every row's on-hand change (receipts, adjustments,
+ * consumption, scrapping), reserved = the sum of their reserved changes (reservations, releases, and the
+ * consumption at done that cut reserved pieces). Equal to the stored counts for every item when nothing bypassed
+ * the ledger.
  */
 export async function ledgerCounts(db: Db, shopId: string) {
   const rows = await db
     .select({
       stockItemId: stockMovements.stockItemId,
       offcutId: stockMovements.offcutId,
-      onHand: sql<number>`coalesce(sum(${stockMovements.quantity}) filter (where ${stockMovements.kind} in ('received', 'adjusted', 'consumed', 'scrapped', 'offcut-created')), 0)`.mapWith(Number),
-      reserved: sql<number>`coalesce(sum(${stockMovements.quantity}) filter (where ${stockMovements.kind} in ('reserved', 'released')), 0)`.mapWith(Number),
+      onHand: sql<number>`coalesce(sum(${stockMovements.quantity}), 0)`.mapWith(Number),
+      reserved: sql<number>`coalesce(sum(${stockMovements.reservedChange}), 0)`.mapWith(Number),
     })
     .from(stockMovements)
     .where(eq(stockMovements.shopId, shopId))

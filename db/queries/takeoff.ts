@@ -41,9 +41,9 @@ export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?:
     offcutIds.length ? db.select().from(offcuts).where(and(eq(offcuts.shopId, shopId), inArray(offcuts.id, offcutIds))) : [],
     // What this plan already holds counts as available to it.
     db
-      .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId, n: sql<number>`sum(${stockMovements.quantity})`.mapWith(Number) })
+      .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId, n: sql<number>`sum(${stockMovements.reservedChange})`.mapWith(Number) })
       .from(stockMovements)
-      .where(and(eq(stockMovements.planId, row.id), inArray(stockMovements.kind, ['reserved', 'released'])))
+      .where(and(eq(stockMovements.shopId, shopId), eq(stockMovements.planId, row.id)))
       .groupBy(stockMovements.stockItemId, stockMovements.offcutId),
   ]);
   const heldFor = (id: string) => held.find((h) => h.stockItemId === id || h.offcutId === id)?.n ?? 0;

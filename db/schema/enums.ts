@@ -16,3 +16,6 @@ export const movementKindEnum = pgEnum('movement_kind', [
   'scrapped',
   'adjusted',
 ]);
+/** A damaged part's re-cut: open (to nest) → planned (in a released re-cut plan) → cut (that plan finished), or
+ * spoiled (damaged again; a new re-cut replaces it), or cancelled by the estimator or owner with a reason. */
+export const recutStatusEnum = pgEnum('recut_status', ['open', 'planned', 'cut', 'spoiled', 'cancelled']);

@@ -5,3 +5,4 @@ export * from './jobs';
 export * from './parts';
 export * from './stock';
 export * from './plans';
+export * from './recuts';

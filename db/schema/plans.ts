@@ -19,8 +19,12 @@ export const plans = pgTable(
     document: jsonb('document').notNull(),
     yieldRatio: doublePrecision('yield_ratio'),
     costCents: integer('cost_cents'),
-    /** Recorded when the plan is done: share of the stock area that was neither part nor kept offcut. */
+    /** Recorded when the plan is done: share of the stock area that was neither part nor kept offcut (spoiled included). */
     wasteRatio: doublePrecision('waste_ratio'),
+    /** Recorded when the plan is done: share of the stock area in parts damaged at the saw (part of the waste). */
+    spoiledRatio: doublePrecision('spoiled_ratio'),
+    /** Nested from the job's open re-cuts rather than its cut list. */
+    recutPlan: boolean('recut_plan').notNull().default(false),
     releasedAt: timestamp('released_at', { withTimezone: true }),
     releasedBy: uuid('released_by').references(() => users.id, { onDelete: 'set null' }),
     finishedAt: timestamp('finished_at', { withTimezone: true }),

@@ -74,8 +74,14 @@ export const stockMovements = pgTable(
     kind: movementKindEnum('kind').notNull(),
     stockItemId: uuid('stock_item_id').references(() => stockItems.id, { onDelete: 'cascade' }),
     offcutId: uuid('offcut_id').references(() => offcuts.id, { onDelete: 'cascade' }),
-    /** Signed change of on-hand (or reserved, for reserve/release) count. */
+    /** Signed change of the on-hand count (0 for a reservation or its release). */
     quantity: integer('quantity').notNull(),
+    /**
+     * Signed change of the reserved count: + at release, − when a cancel gives it back, and − on the consumption at
+     * done that cuts reserved pieces (one row for one physical change: the pieces leave the rack and their
+     * reservation ends with them).
+     */
+    reservedChange: integer('reserved_change').notNull().default(0),
     planId: uuid('plan_id'),
     userId: uuid('user_id').references(() => users.id, { onDelete: 'set null' }),
     reason: text('reason').notNull().default(''),

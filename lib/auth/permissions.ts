@@ -13,6 +13,10 @@ export const PERMISSIONS = [
   'stock:read',
   'stock:write',
   'offcuts:record',
+  /** Read a job's re-cut list (damaged parts are recorded when finishing a plan: `plans:finish`). */
+  'recuts:read',
+  /** Take a re-cut off the list with a reason. */
+  'recuts:cancel',
   'prices:read',
   'yield:read',
   'team:manage',
@@ -37,10 +41,12 @@ export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
     'plans:write',
     'plans:release',
     'stock:read',
+    'recuts:read',
+    'recuts:cancel',
     'prices:read',
     'settings:read',
   ],
-  cutter: ['jobs:read', 'plans:read', 'plans:finish', 'sawsteps:tick', 'stock:read', 'offcuts:record', 'settings:read'],
+  cutter: ['jobs:read', 'plans:read', 'plans:finish', 'sawsteps:tick', 'stock:read', 'offcuts:record', 'recuts:read', 'settings:read'],
 };
 
 export function can(role: Role, permission: Permission): boolean {

@@ -11,16 +11,35 @@ export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
   archived: 'Archived',
 };
 
-export const jobInputSchema = z.object({
+const fields = {
   name: z.string().trim().min(1, 'Give the job a name.').max(120, 'Keep the name under 120 characters.'),
-  customer: z.string().trim().max(120, 'Keep the customer under 120 characters.').default(''),
-  status: z.enum(JOB_STATUSES).default('quoting'),
-  dueDate: z.iso.date({ error: 'Use a date like 2027-01-31.' }).nullable().default(null),
-  notes: z.string().max(4000, 'Keep notes under 4,000 characters.').default(''),
+  customer: z.string().trim().max(120, 'Keep the customer under 120 characters.'),
+  status: z.enum(JOB_STATUSES, { error: `Status is one of ${JOB_STATUSES.join(', ')}.` }),
+  dueDate: z.iso.date({ error: 'Use a date like 2027-01-31.' }).nullable(),
+  notes: z.string().max(4000, 'Keep notes under 4,000 characters.'),
+};
+
+/** A new job starts as a quote, or as won when the work is already agreed; cutting and done follow its plans. */
+export const jobInputSchema = z.object({
+  name: fields.name,
+  customer: fields.customer.default(''),
+  status: z.enum(['quoting', 'won'], { error: 'A new job is quoting or won; cutting and done follow its plans.' }).default('quoting'),
+  dueDate: fields.dueDate.default(null),
+  notes: fields.notes.default(''),
 });
 export type JobInput = z.infer<typeof jobInputSchema>;
 
-export const jobPatchSchema = jobInputSchema.partial();
+/**
+ * A change to a job: only the fields sent change (no defaults here, so changing the status leaves the notes alone).
+ * Which statuses a person may set by hand is decided with the job's plans (lib/jobs/status.ts).
+ */
+export const jobPatchSchema = z.strictObject({
+  name: fields.name.optional(),
+  customer: fields.customer.optional(),
+  status: fields.status.optional(),
+  dueDate: fields.dueDate.optional(),
+  notes: fields.notes.optional(),
+});
 export type JobPatch = z.infer<typeof jobPatchSchema>;
 
 export interface JobSummary {
@@ -30,6 +49,8 @@ export interface JobSummary {
   status: JobStatus;
   dueDate: string | null;
   notes: string;
+  /** ISO time the job was marked won, or null. */
+  wonAt: string | null;
   partCount: number;
   materials: string[];
   createdAt: string;

@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import { nestSettingsSchema } from './nesting';
+import { nestForSchema } from './recut';
 
 export const planNameSchema = z.string().trim().min(1, 'Give the plan a name.').max(120, 'Keep the name under 120 characters.');
 
@@ -31,6 +32,8 @@ export const planCreateSchema = z.object({
   settings: nestSettingsOverrideSchema.default({}),
   /** The stock the Nest was offered (ids from the job's nest request). */
   stockIds: z.array(z.string().min(1).max(100)).min(1, 'Choose at least one kind of stock.').max(1000),
+  /** What was nested: the cut list, or only the job's open re-cuts (the plan then records that it is a re-cut plan). */
+  for: nestForSchema.default('cut-list'),
   plan: z.unknown(),
 });
 export type PlanCreate = z.infer<typeof planCreateSchema>;

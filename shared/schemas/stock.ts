@@ -121,8 +121,9 @@ export const finishPlanSchema = z.strictObject({
     )
     .max(5000)
     .default([]),
+  /** Each damaged part goes on the job's re-cut list with its reason (a default one when none is given). */
   damaged: z
-    .array(z.strictObject({ piece: count('Piece').min(0), partId: text(100).min(1), instance: count('Instance').min(1) }))
+    .array(z.strictObject({ piece: count('Piece').min(0), partId: text(100).min(1), instance: count('Instance').min(1), reason: text(200).default('') }))
     .max(5000)
     .default([]),
 });

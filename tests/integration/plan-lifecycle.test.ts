@@ -64,7 +64,7 @@ describe('releasing plans that race for the same stock', () => {
     const last = await sheet({ material: 'Race ply', onHand: 3, reserved: 0 });
     // Two sheets already belong to someone else: one is free.
     await db.update(stockItems).set({ reserved: 2 }).where(eq(stockItems.id, last.id));
-    await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'reserved', stockItemId: last.id, quantity: 2, reason: 'Earlier plan' });
+    await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'reserved', stockItemId: last.id, quantity: 0, reservedChange: 2, reason: 'Earlier plan' });
     const drafts = [];
     for (let i = 0; i < 8; i++) drafts.push(await draftPlan({ parts: [part(`race-${i}`, 2000, 1000, 1, 'Race ply')], stock: [{ ...asStock(last), count: 1 }] }, `Race ${i}`));
 
@@ -149,8 +149,9 @@ describe('a plan from release to done', () => {
     expect(rack.every((o) => o.status === 'available' && o.location === 'Bin 7' && o.material === 'Done ply')).toBe(true);
     expect(rack.map((o) => o.lengthMm * o.widthMm).sort()).toEqual(expected.map(({ r }) => r.w * r.h).sort());
 
-    const kinds = (await db.select().from(stockMovements).where(eq(stockMovements.planId, plan.id))).map((m) => `${m.kind} ${m.quantity}`).sort();
-    expect(kinds).toEqual([`consumed -${pieces}`, ...expected.map(() => 'offcut-created 1'), `released -${pieces}`, `reserved ${pieces}`].sort());
+    // One row per physical change: the reservation, then the cut that ends it (no separate release).
+    const kinds = (await db.select().from(stockMovements).where(eq(stockMovements.planId, plan.id))).map((m) => `${m.kind} ${m.quantity}/${m.reservedChange}`).sort();
+    expect(kinds).toEqual([`consumed -${pieces}/-${pieces}`, ...expected.map(() => 'offcut-created 1/0'), `reserved 0/${pieces}`].sort());
 
     const totals = plan.document.totals!;
     const damagedArea = firstPlaced.w * firstPlaced.h;
@@ -225,7 +226,7 @@ describe('the plan routes', () => {
     const item = await sheet({ material: 'Gone ply', onHand: 1 });
     const plan = await draftPlan({ parts: [part('g', 2000, 1000, 1, 'Gone ply')], stock: [asStock(item)] });
     await db.update(stockItems).set({ reserved: 1 }).where(eq(stockItems.id, item.id));
-    await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'reserved', stockItemId: item.id, quantity: 1, reason: 'Elsewhere' });
+    await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'reserved', stockItemId: item.id, quantity: 0, reservedChange: 1, reason: 'Elsewhere' });
     const res = await call(releaseRoute, plan.id, fx.estimator);
     expect(res.status).toBe(409);
     const body = await res.json();

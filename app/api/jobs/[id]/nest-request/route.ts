@@ -2,9 +2,13 @@ import { buildNestRequest } from '@/db/queries/nest-request';
 import { getJob } from '@/db/queries/jobs';
 import { notFound } from '@/lib/api/errors';
 import { idParams, route } from '@/lib/api/route';
+import { nestForSchema } from '@/shared/schemas/recut';
+import { z } from 'zod';
 
-// GET /api/jobs/:id/nest-request – the job's parts and the stock on offer, with the shop's settings, for the worker
-export const GET = route({ permission: 'nest:run', params: idParams }, async ({ db, user, params }) => {
+const query = z.object({ for: nestForSchema.default('cut-list') });
+
+// GET /api/jobs/:id/nest-request – the job's parts (or, with ?for=recuts, only its open re-cuts) and the stock on offer, with the shop's settings, for the worker
+export const GET = route({ permission: 'nest:run', params: idParams, query }, async ({ db, user, params, query }) => {
   if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
-  return buildNestRequest(db, user.shopId, params.id);
+  return buildNestRequest(db, user.shopId, params.id, {}, query.for);
 });

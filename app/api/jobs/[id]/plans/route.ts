@@ -16,10 +16,10 @@ export const GET = route({ permission: 'plans:read', params: idParams }, async (
   return can(user.role, 'prices:read') ? shown : withoutPrices(shown);
 });
 
-// POST /api/jobs/:id/plans – save a Nest's plan as a draft, judged against the request rebuilt from the database
+// POST /api/jobs/:id/plans – save a Nest's plan (of the cut list or of the open re-cuts) as a draft, judged against the request rebuilt from the database
 export const POST = route({ permission: 'plans:write', params: idParams, body: planCreateSchema, status: 201 }, async ({ db, user, params, body }) => {
   if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
-  const offered = await buildNestRequest(db, user.shopId, params.id, body.settings);
+  const offered = await buildNestRequest(db, user.shopId, params.id, body.settings, body.for);
   const known = new Set(offered.stock.map((s) => s.id));
   const unknown = body.stockIds.filter((id) => !known.has(id));
   if (unknown.length) {
@@ -29,6 +29,7 @@ export const POST = route({ permission: 'plans:write', params: idParams, body: p
   const request = nestRequestSchema.parse({ ...offered, stock: offered.stock.filter((s) => chosen.has(s.id)) });
   const judged = judgePlan(request, body.plan);
   if (!judged.ok) throw new HttpError(422, 'The plan breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
-  const row = await createDraftPlan(db, { shopId: user.shopId, jobId: params.id, userId: user.id, name: body.name, request, plan: judged.plan });
+  if (body.for === 'recuts' && !request.parts.length) throw new HttpError(409, 'This job has no open re-cuts to nest; nothing was saved.');
+  const row = await createDraftPlan(db, { shopId: user.shopId, jobId: params.id, userId: user.id, name: body.name, request, plan: judged.plan, recutPlan: body.for === 'recuts' });
   return { id: row.id, updatedAt: row.updatedAt.toISOString() };
 });

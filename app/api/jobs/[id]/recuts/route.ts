@@ -1,0 +1,10 @@
+import { getJob } from '@/db/queries/jobs';
+import { listRecuts } from '@/db/queries/recuts';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+
+// GET /api/jobs/:id/recuts – the job's re-cut list: parts damaged at the saw, open ones first, then those cut or cancelled
+export const GET = route({ permission: 'recuts:read', params: idParams }, async ({ db, user, params }) => {
+  if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
+  return listRecuts(db, user.shopId, params.id);
+});

@@ -1,0 +1,37 @@
+import { and, eq, inArray, sql } from 'drizzle-orm';
+import type { Db } from '../open';
+import { jobs, plans, recuts } from '../schema';
+import { followPlans, type JobFacts } from '@/lib/jobs/status';
+import type { JobStatus } from '@/shared/schemas/job';
+import { recordAudit } from './audit';
+
+/** What a job's plans and re-cuts say about it, read inside the caller's transaction. */
+export async function jobFacts(tx: Db, shopId: string, jobId: string, wonAt: Date | null): Promise<JobFacts> {
+  const [counts] = await tx
+    .select({
+      activePlans: sql<number>`count(*) filter (where ${plans.status} in ('released', 'cutting'))`.mapWith(Number),
+      donePlans: sql<number>`count(*) filter (where ${plans.status} = 'done')`.mapWith(Number),
+    })
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId)));
+  const [open] = await tx
+    .select({ n: sql<number>`count(*)`.mapWith(Number) })
+    .from(recuts)
+    .where(and(eq(recuts.shopId, shopId), eq(recuts.jobId, jobId), inArray(recuts.status, ['open', 'planned'])));
+  return { activePlans: counts?.activePlans ?? 0, donePlans: counts?.donePlans ?? 0, openRecuts: open?.n ?? 0, won: wonAt !== null };
+}
+
+/**
+ * Moves the job to the status its plans say (an archived job stays archived), after a plan was released, ticked,
+ * cancelled or finished, or a re-cut cancelled. Call it inside that change's transaction, after the change. The
+ * job row is locked first so two plans finishing at once settle on one answer.
+ */
+export async function syncJobStatus(tx: Db, { shopId, jobId, userId, cause }: { shopId: string; jobId: string; userId: string | null; cause: string }): Promise<JobStatus | null> {
+  const [job] = await tx.select({ status: jobs.status, wonAt: jobs.wonAt }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId))).for('update');
+  if (!job) return null;
+  const next = followPlans(job.status, await jobFacts(tx, shopId, jobId, job.wonAt));
+  if (next === job.status) return next;
+  await tx.update(jobs).set({ status: next, updatedAt: new Date() }).where(eq(jobs.id, jobId));
+  await recordAudit(tx, { shopId, userId, action: 'status', entity: 'job', entityId: jobId, data: { from: job.status, to: next, cause } });
+  return next;
+}
