@@ -78,12 +78,13 @@ async function openPostgres(url: string): Promise<DbHandle> {
   return { db: drizzle({ client: pool, schema }) as unknown as Db, kind: 'postgres', close: () => pool.end() };
 }
 
-async function runMigrations(handle: DbHandle) {
+/** Applies the migrations of `folder` not yet applied (a test may point it at a copy holding only the first few). */
+export async function runMigrations(handle: DbHandle, folder = MIGRATIONS_FOLDER) {
   if (handle.kind === 'pglite') {
     const { migrate } = await import('drizzle-orm/pglite/migrator');
-    await migrate(handle.db as never, { migrationsFolder: MIGRATIONS_FOLDER });
+    await migrate(handle.db as never, { migrationsFolder: folder });
   } else {
     const { migrate } = await import('drizzle-orm/node-postgres/migrator');
-    await migrate(handle.db as never, { migrationsFolder: MIGRATIONS_FOLDER });
+    await migrate(handle.db as never, { migrationsFolder: folder });
   }
 }

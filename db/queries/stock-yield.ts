@@ -4,7 +4,10 @@ import { jobs, offcuts, plans, users } from '../schema';
 import { readPlan } from '@/lib/nesting';
 import { planFigures } from './plan-lifecycle';
 
-/** Finished plans for the yield ledger: yield, waste and cost recorded at done, with the stock area that weighs them. */
+/**
+ * Finished plans for the yield ledger: yield, waste and cost recorded at done, with the stock area that weighs them.
+ * Waste is split into the saw's (trim, kerf, pieces too small to keep) and parts spoiled at the saw (re-cuts).
+ */
 export async function listYieldLedger(db: Db, shopId: string) {
   const rows = await db
     .select({
@@ -14,6 +17,8 @@ export async function listYieldLedger(db: Db, shopId: string) {
       jobName: jobs.name,
       yieldRatio: plans.yieldRatio,
       wasteRatio: plans.wasteRatio,
+      spoiledRatio: plans.spoiledRatio,
+      recutPlan: plans.recutPlan,
       costCents: plans.costCents,
       finishedAt: plans.finishedAt,
       updatedAt: plans.updatedAt,
@@ -26,12 +31,24 @@ export async function listYieldLedger(db: Db, shopId: string) {
     .leftJoin(users, eq(users.id, plans.finishedBy))
     .where(and(eq(plans.shopId, shopId), eq(plans.status, 'done')))
     .orderBy(desc(plans.finishedAt), desc(plans.updatedAt));
-  const ledger = rows.map(({ document, ...r }) => ({ ...r, stockArea: planFigures(readPlan(document)).stockArea }));
+  const ledger = rows.map(({ document, ...r }) => ({
+    ...r,
+    spoiledRatio: r.spoiledRatio ?? 0,
+    sawWasteRatio: r.wasteRatio == null ? null : Math.max(0, r.wasteRatio - (r.spoiledRatio ?? 0)),
+    stockArea: planFigures(readPlan(document)).stockArea,
+  }));
   const area = ledger.reduce((n, r) => n + r.stockArea, 0);
   // Weighted by stock area: a plan of twenty sheets counts for more than an offcut job.
   const weighted = (pick: (r: (typeof ledger)[number]) => number | null) => (area > 0 ? ledger.reduce((n, r) => n + (pick(r) ?? 0) * r.stockArea, 0) / area : null);
   return {
     plans: ledger,
-    totals: { stockArea: area, yieldRatio: weighted((r) => r.yieldRatio), wasteRatio: weighted((r) => r.wasteRatio), costCents: ledger.reduce((n, r) => n + (r.costCents ?? 0), 0) },
+    totals: {
+      stockArea: area,
+      yieldRatio: weighted((r) => r.yieldRatio),
+      wasteRatio: weighted((r) => r.wasteRatio),
+      sawWasteRatio: weighted((r) => r.sawWasteRatio),
+      spoiledRatio: weighted((r) => r.spoiledRatio),
+      costCents: ledger.reduce((n, r) => n + (r.costCents ?? 0), 0),
+    },
   };
 }

@@ -5,9 +5,9 @@ import { openDatabase, type DbHandle } from '@/db/open';
  * A fresh, migrated database for one test file: in-memory PGlite by default, or a new database on the PostgreSQL
  * server named by TEST_DATABASE_URL (CI runs the integration suite both ways).
  */
-export async function createTestDatabase(): Promise<DbHandle> {
+export async function createTestDatabase({ migrate = true }: { migrate?: boolean } = {}): Promise<DbHandle> {
   const serverUrl = process.env.TEST_DATABASE_URL;
-  if (!serverUrl) return openDatabase({ dataDir: 'memory://' });
+  if (!serverUrl) return openDatabase({ dataDir: 'memory://', migrate });
 
   const { Client } = await import('pg');
   const name = `kerfwise_test_${randomBytes(6).toString('hex')}`;
@@ -18,7 +18,7 @@ export async function createTestDatabase(): Promise<DbHandle> {
 
   const url = new URL(serverUrl);
   url.pathname = `/${name}`;
-  const handle = await openDatabase({ url: url.toString() });
+  const handle = await openDatabase({ url: url.toString(), migrate });
   return {
     ...handle,
     close: async () => {
