@@ -17,11 +17,13 @@ import { useMemo, useState } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
 import { api } from '@/lib/client/api';
 import { jobMatchesSearch } from '@/lib/jobs/search';
-import { JOB_STATUS_LABELS, JOB_STATUSES, type JobSummary } from '@/shared/schemas/job';
+import { JOB_STATUS_FILTERS, jobInStatusFilter, readStatusFilter, type JobStatusFilter } from '@/lib/jobs/status-filter';
+import { JOB_STATUSES, type JobSummary } from '@/shared/schemas/job';
 import { JobStatusBadge } from './job-status';
 import { NewJobForm } from './new-job-form';
 
 const matchesSearch: FilterFn<JobSummary> = (row, _columnId, needle: string) => jobMatchesSearch(row.original, needle);
+const matchesStatus: FilterFn<JobSummary> = (row, _columnId, filter: JobStatusFilter) => jobInStatusFilter(row.original.status, filter);
 
 const columns: ColumnDef<JobSummary>[] = [
   { id: 'name', header: 'Job', accessorKey: 'name', cell: ({ row }) => <Link href={`/jobs/${row.original.id}`} className="font-medium text-graphite">{row.original.name}</Link> },
@@ -30,7 +32,7 @@ const columns: ColumnDef<JobSummary>[] = [
     id: 'status',
     header: 'Status',
     accessorKey: 'status',
-    filterFn: 'equalsString',
+    filterFn: matchesStatus,
     // Work order, not alphabetical: quoting → won → cutting → done → archived.
     sortingFn: (a, b) => JOB_STATUSES.indexOf(a.original.status) - JOB_STATUSES.indexOf(b.original.status),
     cell: ({ row }) => <JobStatusBadge status={row.original.status} />,
@@ -50,7 +52,7 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
   const pathname = usePathname();
   const params = useSearchParams();
   const search = params.get('q') ?? '';
-  const status = params.get('status') ?? '';
+  const status = readStatusFilter(params.get('status'));
   const customer = params.get('customer') ?? '';
   const sort = params.get('sort') ?? 'updated.desc';
   const [creating, setCreating] = useState(false);
@@ -67,7 +69,8 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
     const [id, dir] = sort.split('.');
     return columns.some((c) => c.id === id) ? [{ id, desc: dir === 'desc' }] : [];
   }, [sort]);
-  const columnFilters = useMemo(() => [...(status ? [{ id: 'status', value: status }] : []), ...(customer ? [{ id: 'customer', value: customer }] : [])], [status, customer]);
+  // The status filter always applies: by default it leaves archived jobs out.
+  const columnFilters = useMemo(() => [{ id: 'status', value: status }, ...(customer ? [{ id: 'customer', value: customer }] : [])], [status, customer]);
   const customers = useMemo(() => [...new Set((jobs.data ?? []).map((j) => j.customer).filter(Boolean))].sort(), [jobs.data]);
 
   const table = useReactTable({
@@ -87,6 +90,7 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
     getSortedRowModel: getSortedRowModel(),
   });
   const rows = table.getRowModel().rows;
+  const archivedCount = (jobs.data ?? NO_JOBS).filter((j) => j.status === 'archived').length;
 
   return (
     <div>
@@ -98,8 +102,7 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
         <div>
           <label htmlFor="job-filter-status" className="field-label">Status</label>
           <select id="job-filter-status" className="field-input" value={status} onChange={(e) => setParam('status', e.target.value)}>
-            <option value="">Any</option>
-            {JOB_STATUSES.map((s) => <option key={s} value={s}>{JOB_STATUS_LABELS[s]}</option>)}
+            {JOB_STATUS_FILTERS.map((f) => <option key={f.value} value={f.value}>{f.label}</option>)}
           </select>
         </div>
         <div>
@@ -161,7 +164,10 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
               ))}
             </tbody>
           </table>
-          <p className="border-t border-paper-edge px-3 py-2 text-xs text-graphite-mute">{rows.length} of {jobs.data.length} jobs</p>
+          <p className="border-t border-paper-edge px-3 py-2 text-xs text-graphite-mute">
+            {rows.length} of {jobs.data.length} jobs
+            {status === '' && archivedCount > 0 && ` · ${archivedCount} archived not shown (Status: Archived shows them)`}
+          </p>
         </div>
       )}
     </div>

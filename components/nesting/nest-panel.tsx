@@ -12,6 +12,7 @@ import { formatMoney } from '@/lib/money';
 import { formatLength } from '@/lib/units/format-length';
 import { cuttingStyleSchema, objectiveSchema, type NestRequestInput, type NestStock, type Plan } from '@/shared/schemas/nesting';
 import type { NestSettingsOverride } from '@/shared/schemas/plan-save';
+import type { NestFor } from '@/shared/schemas/recut';
 import type { ShopSettings } from '@/shared/schemas/shop';
 import { lengthInput, shopLengthUnit } from '@/shared/schemas/units';
 import { NestProgressBar } from './nest-progress';
@@ -39,15 +40,18 @@ interface NestResult {
   settings: NestSettingsOverride;
 }
 
-/** Choose stock and settings, nest in the worker with progress, look at the result and save it as a draft. */
-export function NestPanel({ jobId, shop, showPrices }: { jobId: string; shop: ShopSettings; showPrices: boolean }) {
-  const offered = useQuery({ queryKey: ['nest-request', jobId], queryFn: () => api<NestRequestInput>(`/api/jobs/${jobId}/nest-request`) });
+/**
+ * Choose stock and settings, nest in the worker with progress, look at the result and save it as a draft. With
+ * `nestFor: 'recuts'` the parts are the job's open re-cuts only, and the saved plan is a re-cut plan.
+ */
+export function NestPanel({ jobId, shop, showPrices, nestFor = 'cut-list' }: { jobId: string; shop: ShopSettings; showPrices: boolean; nestFor?: NestFor }) {
+  const offered = useQuery({ queryKey: ['nest-request', jobId, nestFor], queryFn: () => api<NestRequestInput>(`/api/jobs/${jobId}/nest-request?for=${nestFor}`) });
   if (offered.isPending) return <p className="text-sm text-graphite-mute">Loading the stock on offer…</p>;
   if (offered.isError) return <p className="field-error" role="alert">Could not load the stock on offer: {offered.error.message}</p>;
-  return <NestForm jobId={jobId} shop={shop} showPrices={showPrices} offered={offered.data} />;
+  return <NestForm jobId={jobId} shop={shop} showPrices={showPrices} offered={offered.data} nestFor={nestFor} />;
 }
 
-function NestForm({ jobId, shop, showPrices, offered }: { jobId: string; shop: ShopSettings; showPrices: boolean; offered: NestRequestInput }) {
+function NestForm({ jobId, shop, showPrices, offered, nestFor }: { jobId: string; shop: ShopSettings; showPrices: boolean; offered: NestRequestInput; nestFor: NestFor }) {
   const unit = shopLengthUnit(shop.units);
   const schema = useMemo(() => settingsForm(unit), [unit]);
   const len = (mm: number) => formatLength(mm, shop.units);
@@ -152,24 +156,26 @@ function NestForm({ jobId, shop, showPrices, offered }: { jobId: string; shop: S
         </fieldset>
 
         <div className="flex items-center gap-3">
-          <button type="submit" className="btn-accent" disabled={worker.running || partCount === 0}>Nest {partCount} part{partCount === 1 ? '' : 's'}</button>
-          {partCount === 0 && <span className="text-sm text-graphite-mute">Add parts to the cut list first.</span>}
+          <button type="submit" className="btn-accent" disabled={worker.running || partCount === 0}>
+            Nest {partCount} {nestFor === 'recuts' ? `re-cut${partCount === 1 ? '' : 's'}` : `part${partCount === 1 ? '' : 's'}`}
+          </button>
+          {partCount === 0 && <span className="text-sm text-graphite-mute">{nestFor === 'recuts' ? 'No re-cut is open: each is cut, cancelled or in a released plan.' : 'Add parts to the cut list first.'}</span>}
         </div>
       </form>
 
       {worker.running && <NestProgressBar progress={worker.progress} budgetMs={budgetMs} label="Nesting in the background — the page stays usable" onCancel={worker.cancel} />}
       {failure && <p className="field-error" role="alert">The Nest could not run: {failure}</p>}
-      {result && <NestOutcome jobId={jobId} result={result} shop={shop} showPrices={showPrices} />}
+      {result && <NestOutcome jobId={jobId} result={result} shop={shop} showPrices={showPrices} nestFor={nestFor} />}
     </div>
   );
 }
 
-function NestOutcome({ jobId, result, shop, showPrices }: { jobId: string; result: NestResult; shop: ShopSettings; showPrices: boolean }) {
+function NestOutcome({ jobId, result, shop, showPrices, nestFor }: { jobId: string; result: NestResult; shop: ShopSettings; showPrices: boolean; nestFor: NestFor }) {
   const router = useRouter();
   const queryClient = useQueryClient();
-  const [name, setName] = useState(`Plan ${new Date().toLocaleDateString()}`);
+  const [name, setName] = useState(`${nestFor === 'recuts' ? 'Re-cuts' : 'Plan'} ${new Date().toLocaleDateString()}`);
   const save = useMutation({
-    mutationFn: () => api<{ id: string }>(`/api/jobs/${jobId}/plans`, { method: 'POST', body: { name, settings: result.settings, stockIds: result.stockIds, plan: result.plan } }),
+    mutationFn: () => api<{ id: string }>(`/api/jobs/${jobId}/plans`, { method: 'POST', body: { name, settings: result.settings, stockIds: result.stockIds, for: nestFor, plan: result.plan } }),
     onSuccess: ({ id }) => {
       void queryClient.invalidateQueries({ queryKey: ['plans', jobId] });
       router.push(`/jobs/${jobId}/plan/${id}`);

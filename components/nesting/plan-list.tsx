@@ -26,7 +26,10 @@ export function PlanList({ jobId, currency, showPrices }: { jobId: string; curre
         <tbody>
           {plans.data.map((p) => (
             <tr key={p.id}>
-              <td className="font-medium"><Link href={`/jobs/${jobId}/plan/${p.id}`}>{p.name}</Link></td>
+              <td className="font-medium">
+                <Link href={`/jobs/${jobId}/plan/${p.id}`}>{p.name}</Link>
+                {p.recutPlan && <span className="ml-2"><StatusBadge tone="warn">Re-cuts</StatusBadge></span>}
+              </td>
               <td><StatusBadge tone={TONE[p.status]}>{LABEL[p.status]}</StatusBadge></td>
               <td className="num">{p.pieces}</td>
               <td className="num">{p.yieldRatio === null ? '—' : `${(p.yieldRatio * 100).toFixed(1)} %`}</td>

@@ -4,7 +4,9 @@ import Link from 'next/link';
 import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
 import { api } from '@/lib/client/api';
+import { RECUT_REASONS } from '@/lib/recuts/recuts';
 import { formatLength } from '@/lib/units/format-length';
+import { JOB_STATUS_LABELS, type JobStatus } from '@/shared/schemas/job';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { ActionError } from './field';
 
@@ -16,23 +18,30 @@ export interface FinishPiece {
 }
 
 interface FinishResult {
+  jobId: string;
   yieldRatio: number;
   wasteRatio: number;
+  spoiledRatio: number;
   offcuts: { id: string; lengthMm: number; widthMm: number; location: string }[];
   damaged: number;
+  recutsAdded: number;
+  recutsClosed: number;
+  jobStatus: JobStatus | null;
 }
 
 const pct = (r: number) => `${(r * 100).toFixed(1)} %`;
 
 /**
  * The cutter's last step: where each offcut goes on the rack (or that it was not kept), which parts came off the saw
- * damaged, then Done. Costs are never asked for here: the server works them out from the plan.
+ * damaged and why (each goes on the job's re-cut list), then Done. Costs are never asked for here: the server works
+ * them out from the plan.
  */
 export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { planId: string; pieces: FinishPiece[]; units: ShopUnits; defaultLocation: string }) {
   const len = (mm: number) => formatLength(mm, units);
   const [locations, setLocations] = useState<Record<string, string>>({});
   const [dropped, setDropped] = useState<Set<string>>(new Set());
   const [damaged, setDamaged] = useState<Set<string>>(new Set());
+  const [reasons, setReasons] = useState<Record<string, string>>({});
   const [allTo, setAllTo] = useState(defaultLocation);
   const [result, setResult] = useState<FinishResult | null>(null);
   // No page refresh on success: the page would re-render as a done plan and hide this summary.
@@ -49,13 +58,23 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
       <div className="card space-y-2 p-5" role="status" data-testid="finish-result">
         <p className="text-lg font-semibold">Plan done.</p>
         <p className="text-sm">
-          Yield {pct(result.yieldRatio)} · waste {pct(result.wasteRatio)} · {result.offcuts.length} offcut{result.offcuts.length === 1 ? '' : 's'} on the rack
-          {result.damaged > 0 && ` · ${result.damaged} damaged part${result.damaged === 1 ? '' : 's'} recorded`}.
+          Yield {pct(result.yieldRatio)} · waste {pct(result.wasteRatio)}
+          {result.spoiledRatio > 0 && ` (${pct(result.spoiledRatio)} in damaged parts)`} · {result.offcuts.length} offcut{result.offcuts.length === 1 ? '' : 's'} on the rack.
         </p>
+        {result.recutsAdded > 0 && (
+          <p className="text-sm font-medium" data-testid="finish-recuts">
+            {result.recutsAdded} damaged part{result.recutsAdded === 1 ? '' : 's'} on the job’s re-cut list.
+          </p>
+        )}
+        {result.recutsClosed > 0 && <p className="text-sm">{result.recutsClosed} re-cut{result.recutsClosed === 1 ? '' : 's'} cut and closed.</p>}
+        {result.jobStatus && <p className="text-sm text-graphite-soft">The job is now {JOB_STATUS_LABELS[result.jobStatus].toLowerCase()}.</p>}
         <ul className="text-sm text-graphite-soft">
           {result.offcuts.map((o) => <li key={o.id}>{len(o.lengthMm)} × {len(o.widthMm)} → {o.location || 'no location'}</li>)}
         </ul>
-        <Link href="/stock?view=rack" className="btn-accent">See the offcut rack</Link>
+        <div className="flex flex-wrap gap-2">
+          <Link href="/stock?view=rack" className="btn-accent">See the offcut rack</Link>
+          {result.recutsAdded > 0 && <Link href={`/jobs/${result.jobId}/plan#recuts`} className="btn-quiet">See the re-cut list</Link>}
+        </div>
       </div>
     );
   }
@@ -68,7 +87,11 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
           return { piece: p.index, index: o.index, keep: !dropped.has(key), location: (locations[key] ?? allTo).trim() };
         }),
       ),
-      damaged: pieces.flatMap((p) => p.parts.filter((pt) => damaged.has(`${p.index}:${pt.partId}:${pt.instance}`)).map((pt) => ({ piece: p.index, partId: pt.partId, instance: pt.instance }))),
+      damaged: pieces.flatMap((p) =>
+        p.parts
+          .filter((pt) => damaged.has(`${p.index}:${pt.partId}:${pt.instance}`))
+          .map((pt) => ({ piece: p.index, partId: pt.partId, instance: pt.instance, reason: (reasons[`${p.index}:${pt.partId}:${pt.instance}`] ?? '').trim() })),
+      ),
     });
   }
 
@@ -105,16 +128,20 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
               </ul>
             </div>
             <div>
-              <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-graphite-mute">Damaged at the saw</h3>
+              <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-graphite-mute">Damaged at the saw (goes on the re-cut list)</h3>
               <ul className="grid gap-x-3 sm:grid-cols-2">
                 {p.parts.map((pt) => {
                   const key = `${p.index}:${pt.partId}:${pt.instance}`;
+                  const name = `${pt.label} #${pt.instance}`;
                   return (
-                    <li key={key}>
+                    <li key={key} data-testid="finish-part">
                       <label className="flex min-h-11 items-center gap-2 text-sm">
                         <input type="checkbox" className="h-5 w-5" checked={damaged.has(key)} onChange={() => toggle(damaged, key, setDamaged)} />
-                        {pt.label} #{pt.instance} <span className="text-xs text-graphite-mute">{len(pt.w)} × {len(pt.h)}</span>
+                        {name} <span className="text-xs text-graphite-mute">{len(pt.w)} × {len(pt.h)}</span>
                       </label>
+                      {damaged.has(key) && (
+                        <input className="field-input mb-2 py-1" list="recut-reasons" aria-label={`What happened to ${name}`} placeholder="What happened (tear-out, chipped edge…)" value={reasons[key] ?? ''} onChange={(e) => setReasons({ ...reasons, [key]: e.target.value })} maxLength={200} />
+                      )}
                     </li>
                   );
                 })}
@@ -123,6 +150,7 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
           </div>
         </section>
       ))}
+      <datalist id="recut-reasons">{RECUT_REASONS.map((r) => <option key={r} value={r} />)}</datalist>
       <ActionError error={done.error} />
       <button type="submit" className="btn-accent px-6 py-3 text-base" disabled={done.isPending}>{done.isPending ? 'Recording…' : 'Mark the plan done'}</button>
     </form>

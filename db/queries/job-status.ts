@@ -1,7 +1,8 @@
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { jobs, plans, recuts } from '../schema';
-import { followPlans, type JobFacts } from '@/lib/jobs/status';
+import type { Role } from '@/lib/auth/permissions';
+import { followPlans, manualStatusChoices, type JobFacts } from '@/lib/jobs/status';
 import type { JobStatus } from '@/shared/schemas/job';
 import { recordAudit } from './audit';
 
@@ -34,4 +35,21 @@ export async function syncJobStatus(tx: Db, { shopId, jobId, userId, cause }: { 
   await tx.update(jobs).set({ status: next, updatedAt: new Date() }).where(eq(jobs.id, jobId));
   await recordAudit(tx, { shopId, userId, action: 'status', entity: 'job', entityId: jobId, data: { from: job.status, to: next, cause } });
   return next;
+}
+
+/**
+ * What the job's page needs to offer edits: the statuses this person may pick by hand, and whether the job has
+ * history (then it is archived, not deleted).
+ */
+export async function jobEditOptions(db: Db, shopId: string, jobId: string, role: Role) {
+  const [job] = await db.select({ status: jobs.status, wonAt: jobs.wonAt }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
+  if (!job) return null;
+  const [facts, [history]] = await Promise.all([
+    jobFacts(db, shopId, jobId, job.wonAt),
+    db
+      .select({ released: sql<number>`count(*) filter (where ${plans.releasedAt} is not null or ${plans.status} in ('released', 'cutting', 'done'))`.mapWith(Number) })
+      .from(plans)
+      .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId))),
+  ]);
+  return { statusChoices: manualStatusChoices(role, job.status, facts), hasHistory: (history?.released ?? 0) > 0, facts };
 }

@@ -94,7 +94,7 @@ export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: s
     const set: Partial<typeof jobs.$inferInsert> = Object.fromEntries(Object.entries(changes).map(([f, c]) => [f, c.to]));
     if (patch.status && changes.status) {
       const refused = refuseManualStatus(editor.role, job.status, patch.status, await jobFacts(tx, shopId, id, job.wonAt));
-      if (refused) throw new HttpError(403, refused, { status: [refused] });
+      if (refused) throw new HttpError(403, refused);
       set.wonAt = wonAtAfter(patch.status, job.wonAt, new Date());
     }
     await tx.update(jobs).set({ ...set, updatedAt: new Date() }).where(eq(jobs.id, id));

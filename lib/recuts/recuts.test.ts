@@ -7,7 +7,7 @@ const side: RecutPart = { id: '5d1f7b0e-4a8e-4f43-9d3f-0c6f3b1d2a11', label: 'Ba
 describe('re-cuts as parts of a Nest', () => {
   test('keep the re-cut id, the part label with "#n", the size, material, thickness and grain', () => {
     const [part] = recutNestParts([side]);
-    expect(part).toMatchObject({ id: side.id, label: 'Base side #3', quantity: 1, length: 876.3, width: 584.2, thickness: 18.26, material: 'Maple ply', grain: 'along-length', notes: 'Re-cut: Tear-out' });
+    expect(part).toMatchObject({ id: side.id, label: 'Base side #3 · re-cut', quantity: 1, length: 876.3, width: 584.2, thickness: 18.26, material: 'Maple ply', grain: 'along-length', notes: 'Re-cut: Tear-out' });
     expect(nestRequestSchema.safeParse({ parts: [part], stock: [] }).success).toBe(true);
   });
 

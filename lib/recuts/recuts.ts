@@ -27,12 +27,13 @@ export const recutLabel = (r: Pick<RecutPart, 'label' | 'instance'>) => `${r.lab
 
 /**
  * The re-cuts as the parts of a Nest: each keeps its re-cut's id (so finishing the plan closes exactly those), its
- * label with "#n", size, material, thickness and grain. A nest of re-cuts holds nothing else.
+ * label with "#n" and "re-cut" (the saw order and tags add their own count: "Side #3 · re-cut #1"), size, material,
+ * thickness and grain. A nest of re-cuts holds nothing else.
  */
 export function recutNestParts(recuts: RecutPart[]): NestPart[] {
   return recuts.map((r) => ({
     id: r.id,
-    label: recutLabel(r),
+    label: `${recutLabel(r)} · re-cut`,
     quantity: r.quantity,
     length: r.lengthMm,
     width: r.widthMm,

@@ -11,7 +11,8 @@ export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
   archived: 'Archived',
 };
 
-const fields = {
+/** Each field of a job, checked the same on the server and in the forms. */
+export const jobFields = {
   name: z.string().trim().min(1, 'Give the job a name.').max(120, 'Keep the name under 120 characters.'),
   customer: z.string().trim().max(120, 'Keep the customer under 120 characters.'),
   status: z.enum(JOB_STATUSES, { error: `Status is one of ${JOB_STATUSES.join(', ')}.` }),
@@ -21,11 +22,11 @@ const fields = {
 
 /** A new job starts as a quote, or as won when the work is already agreed; cutting and done follow its plans. */
 export const jobInputSchema = z.object({
-  name: fields.name,
-  customer: fields.customer.default(''),
+  name: jobFields.name,
+  customer: jobFields.customer.default(''),
   status: z.enum(['quoting', 'won'], { error: 'A new job is quoting or won; cutting and done follow its plans.' }).default('quoting'),
-  dueDate: fields.dueDate.default(null),
-  notes: fields.notes.default(''),
+  dueDate: jobFields.dueDate.default(null),
+  notes: jobFields.notes.default(''),
 });
 export type JobInput = z.infer<typeof jobInputSchema>;
 
@@ -34,11 +35,11 @@ export type JobInput = z.infer<typeof jobInputSchema>;
  * Which statuses a person may set by hand is decided with the job's plans (lib/jobs/status.ts).
  */
 export const jobPatchSchema = z.strictObject({
-  name: fields.name.optional(),
-  customer: fields.customer.optional(),
-  status: fields.status.optional(),
-  dueDate: fields.dueDate.optional(),
-  notes: fields.notes.optional(),
+  name: jobFields.name.optional(),
+  customer: jobFields.customer.optional(),
+  status: jobFields.status.optional(),
+  dueDate: jobFields.dueDate.optional(),
+  notes: jobFields.notes.optional(),
 });
 export type JobPatch = z.infer<typeof jobPatchSchema>;
 

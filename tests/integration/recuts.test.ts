@@ -6,6 +6,8 @@ import { listYieldLedger } from '@/db/queries/stock-yield';
 import * as jobPlans from '@/app/api/jobs/[id]/plans/route';
 import * as nestRequestRoute from '@/app/api/jobs/[id]/nest-request/route';
 import type { JobPlanSummary } from '@/db/queries/plan-drafts';
+import { getPartPage } from '@/app/(app)/parts/[id]/part-page-data';
+import { partTagPath } from '@/lib/saw-order/part-tags';
 import type { NestRequestInput } from '@/shared/schemas/nesting';
 import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 import { call, cancel, cancelRecut, counts, finish, firstPart, jobStatus, jobWithSheet, nestAndSave, recutList, release } from '../support/shop-day';
@@ -93,7 +95,7 @@ describe('nesting and cutting the re-cuts', () => {
     const { job, sheet, damaged, first } = await cutWithOneDamaged();
     const [recut] = (await recutList(fx.estimator, job.id)).body;
     const offered = await nestRequestFor(fx.estimator, job.id);
-    expect(offered.body.parts).toEqual([expect.objectContaining({ id: recut.id, label: `${recut.label} #${recut.instance}`, quantity: 1, length: recut.lengthMm, width: recut.widthMm, thickness: 18 })]);
+    expect(offered.body.parts).toEqual([expect.objectContaining({ id: recut.id, label: `${recut.label} #${recut.instance} · re-cut`, quantity: 1, length: recut.lengthMm, width: recut.widthMm, thickness: 18 })]);
     // The first plan put its offcuts on the rack; one of them takes a side.
     const rack = await db.select().from(offcuts).where(and(eq(offcuts.sourcePlanId, first.id), eq(offcuts.status, 'available')));
     expect(rack.some((o) => o.lengthMm >= damaged.w && o.widthMm >= damaged.h)).toBe(true);
@@ -117,6 +119,18 @@ describe('nesting and cutting the re-cuts', () => {
     expect(await jobStatus(fx.cutter, job.id)).toBe('done');
     // Cut from the offcut: no sheet moved.
     expect(await counts(db, sheet.id)).toEqual(sheetsBefore);
+  });
+
+  test('a part tag of the re-cut plan leads to the re-cut: its size, what it re-cuts, and where it is cut from', async () => {
+    const { job } = await cutWithOneDamaged();
+    const again = await nestAndSave(fx.estimator, job.id, { for: 'recuts' });
+    await release(fx.estimator, again.id);
+    const [recut] = (await recutList(fx.cutter, job.id)).body;
+    const placed = firstPart(again.plan);
+    expect(partTagPath(again.id, placed)).toBe(`/parts/${recut.id}?plan=${again.id}&instance=1`);
+    const page = await getPartPage(db, fx.mine.id, recut.id, { drafts: false });
+    expect(page).toMatchObject({ recutOf: `${recut.label} #${recut.instance}`, part: { lengthMm: recut.lengthMm, widthMm: recut.widthMm, material: recut.material } });
+    expect(page!.plans.find((p) => p.id === again.id)!.places).toEqual([expect.objectContaining({ pieceIndex: 0, instance: 1 })]);
   });
 
   test('with no offcut that fits, the re-cut is nested on a sheet', async () => {

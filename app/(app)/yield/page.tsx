@@ -18,7 +18,7 @@ export default async function YieldPage() {
   if (!settings) return null;
   return (
     <>
-      <PageHeader title="Yield ledger" lead="How much of the stock each finished plan turned into parts, what went back on the rack as offcuts, what was waste, and what the material cost." />
+      <PageHeader title="Yield ledger" lead="How much of the stock each finished plan turned into parts, what went back on the rack as offcuts, what the saw wasted (trim, kerf, scraps too small to keep), what was spoiled in parts damaged at the saw, and what the material cost." />
       {ledger.plans.length === 0 ? (
         <EmptyState title="No finished plans yet.">A plan’s yield, waste and material cost are recorded here when the cutter marks it done.</EmptyState>
       ) : (

@@ -4,8 +4,11 @@ import type { ReactNode } from 'react';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
 import { getJob } from '@/db/queries/jobs';
+import { jobEditOptions } from '@/db/queries/job-status';
+import { JobActions } from '@/components/jobs/job-actions';
 import { JobSectionLinks } from '@/components/jobs/job-section-links';
 import { JobStatusBadge } from '@/components/jobs/job-status';
+import { can } from '@/lib/auth/permissions';
 import { requirePageUser } from '@/lib/auth/session';
 
 /** A job's header and its sections: cut list, drawer schedules, plan, takeoff. Each section is its own route. */
@@ -13,19 +16,24 @@ export default async function JobLayout({ children, params }: { children: ReactN
   const user = await requirePageUser('jobs:read');
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const job = await getJob(await getDb(), user.shopId, id.data);
+  const db = await getDb();
+  const job = await getJob(db, user.shopId, id.data);
   if (!job) notFound();
+  const edit = can(user.role, 'jobs:write') ? await jobEditOptions(db, user.shopId, job.id, user.role) : null;
   return (
     <div>
       <Link href="/jobs" className="text-sm text-graphite-mute print:hidden">← Jobs</Link>
-      <header className="mb-4 mt-2">
-        <h1 className="flex items-center gap-3">
-          {job.name} <JobStatusBadge status={job.status} />
-        </h1>
-        <p className="mt-1 text-sm text-graphite-mute">
-          {job.customer || 'No customer yet'} · due {job.dueDate ?? 'not set'}
-        </p>
-        {job.notes && <p className="mt-2 max-w-3xl text-sm text-graphite-soft">{job.notes}</p>}
+      <header className="mb-4 mt-2 flex flex-wrap items-start justify-between gap-3">
+        <div className="min-w-0">
+          <h1 className="flex flex-wrap items-center gap-3">
+            {job.name} <span data-testid="job-status"><JobStatusBadge status={job.status} /></span>
+          </h1>
+          <p className="mt-1 text-sm text-graphite-mute">
+            {job.customer || 'No customer yet'} · due {job.dueDate ?? 'not set'}
+          </p>
+          {job.notes && <p className="mt-2 max-w-3xl whitespace-pre-line text-sm text-graphite-soft">{job.notes}</p>}
+        </div>
+        {edit && <JobActions job={job} statusChoices={edit.statusChoices} hasHistory={edit.hasHistory} followsPlans={user.role !== 'owner'} />}
       </header>
       <JobSectionLinks jobId={job.id} />
       {children}

@@ -41,7 +41,7 @@ export default async function PartPage({ params, searchParams }: { params: Promi
           {instance && <span className="ml-2 font-normal text-graphite-mute">#{instance}</span>}
         </h1>
         <p className="mt-1 text-sm text-graphite-soft">
-          {job ? `${job.name}${job.customer ? ` · ${job.customer}` : ''}` : 'Job'} · {part.quantity} in the cut list
+          {job ? `${job.name}${job.customer ? ` · ${job.customer}` : ''}` : 'Job'} · {data.recutOf ? `a re-cut of ${data.recutOf}, damaged at the saw` : `${part.quantity} in the cut list`}
         </p>
       </header>
 

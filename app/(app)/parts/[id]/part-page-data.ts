@@ -1,17 +1,49 @@
 import 'server-only';
 import { and, desc, eq, ne } from 'drizzle-orm';
 import type { Db } from '@/db/open';
-import { jobs, parts, plans } from '@/db/schema';
+import { jobs, parts, plans, recuts } from '@/db/schema';
 import { readPlan } from '@/lib/nesting';
+import { recutLabel } from '@/lib/recuts/recuts';
 import { stockPieceName } from '@/lib/nesting/saw-order';
 
 /**
  * A part as its tag's QR code shows it: the part, its job, and every plan of the job that places it, with the stock
- * piece each instance is cut from. Drafts only for people who may edit plans; cancelled plans are left out.
+ * piece each instance is cut from. Drafts only for people who may edit plans; cancelled plans are left out. A tag of
+ * a re-cut plan carries the re-cut's id: its page is the re-cut, sized as the damaged part was.
  */
 export async function getPartPage(db: Db, shopId: string, partId: string, { drafts }: { drafts: boolean }) {
   const [part] = await db.select().from(parts).where(and(eq(parts.shopId, shopId), eq(parts.id, partId)));
-  if (!part) return null;
+  const recut = part ? null : await recutAsPart(db, shopId, partId);
+  return part ? partPage(db, shopId, part, { drafts, recutOf: null }) : recut ? partPage(db, shopId, recut.part, { drafts, recutOf: recut.of }) : null;
+}
+
+async function recutAsPart(db: Db, shopId: string, id: string) {
+  const [r] = await db.select().from(recuts).where(and(eq(recuts.shopId, shopId), eq(recuts.id, id)));
+  if (!r) return null;
+  const part: typeof parts.$inferSelect = {
+    id: r.id,
+    shopId: r.shopId,
+    jobId: r.jobId,
+    label: `${recutLabel(r)} · re-cut`,
+    quantity: r.quantity,
+    lengthMm: r.lengthMm,
+    widthMm: r.widthMm,
+    thicknessMm: r.thicknessMm,
+    material: r.material,
+    grain: r.grain,
+    jointAllowanceMm: r.jointAllowanceMm,
+    notes: r.reason,
+    drawerScheduleId: null,
+    role: null,
+    machining: null,
+    sort: 0,
+    createdAt: r.createdAt,
+  };
+  return { part, of: recutLabel(r) };
+}
+
+async function partPage(db: Db, shopId: string, part: typeof parts.$inferSelect, { drafts, recutOf }: { drafts: boolean; recutOf: string | null }) {
+  const partId = part.id;
   const [job] = await db.select({ id: jobs.id, name: jobs.name, customer: jobs.customer }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, part.jobId)));
   const rows = await db
     .select({ id: plans.id, name: plans.name, status: plans.status, document: plans.document, updatedAt: plans.updatedAt })
@@ -28,5 +60,5 @@ export async function getPartPage(db: Db, shopId: string, partId: string, { draf
       const unplaced = doc.unplaced.filter((u) => u.partId === partId);
       return { id: r.id, name: r.name, status: r.status, places, unplaced };
     });
-  return { part, job, plans: placedIn };
+  return { part, job, plans: placedIn, recutOf };
 }

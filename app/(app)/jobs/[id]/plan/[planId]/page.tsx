@@ -31,7 +31,10 @@ export default async function PlanPage({ params: raw }: { params: Promise<{ id: 
     <div className="space-y-6">
       <div className="flex flex-wrap items-center gap-3">
         <Link href={`/jobs/${plan.jobId}/plan`} className="text-sm text-graphite-mute">← Plans</Link>
-        <h2 className="flex items-center gap-2">{plan.name} <StatusBadge tone={plan.status === 'draft' ? 'neutral' : 'accent'}>{plan.status}</StatusBadge></h2>
+        <h2 className="flex items-center gap-2">
+          {plan.name} <StatusBadge tone={plan.status === 'draft' ? 'neutral' : 'accent'}>{plan.status}</StatusBadge>
+          {plan.recutPlan && <StatusBadge tone="warn">Re-cuts</StatusBadge>}
+        </h2>
         {plan.status !== 'draft' && <Link href={`/plans/${plan.id}/saw-order`} className="btn-quiet ml-auto">Saw order</Link>}
         {plan.status === 'draft' && can(user.role, 'plans:release') && (
           <div className="ml-auto">
