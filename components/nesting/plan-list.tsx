@@ -28,7 +28,7 @@ export function PlanList({ jobId, currency, showPrices }: { jobId: string; curre
             <tr key={p.id}>
               <td className="font-medium">
                 <Link href={`/jobs/${jobId}/plan/${p.id}`}>{p.name}</Link>
-                {p.recutPlan && <span className="ml-2"><StatusBadge tone="warn">Re-cuts</StatusBadge></span>}
+                {p.recutPlan && <span className="ml-2 whitespace-nowrap"><StatusBadge tone="warn">Re-cuts</StatusBadge></span>}
               </td>
               <td><StatusBadge tone={TONE[p.status]}>{LABEL[p.status]}</StatusBadge></td>
               <td className="num">{p.pieces}</td>

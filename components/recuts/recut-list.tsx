@@ -45,8 +45,6 @@ export function RecutList({ jobId, units, canNest, canCancel }: { jobId: string;
               <th>Part</th>
               <th className="num">Qty</th>
               <th className="num">Length × width</th>
-              <th>Material</th>
-              <th>Grain</th>
               <th>Reason</th>
               <th>Status</th>
               {canCancel && <th><span className="sr-only">Actions</span></th>}
@@ -80,11 +78,15 @@ function RecutRow({ recut: r, jobId, len, canCancel }: { recut: RecutView; jobId
   const closed = r.status !== 'open' && r.status !== 'planned';
   return (
     <tr data-testid="recut" data-status={r.status} className={closed ? 'text-graphite-mute' : undefined}>
-      <td className="font-medium whitespace-nowrap">{recutLabel(r)}</td>
+      <td>
+        <span className="font-medium whitespace-nowrap">{recutLabel(r)}</span>
+        <span className="block text-xs text-graphite-mute">{len(r.thicknessMm)} {r.material}</span>
+      </td>
       <td className="num">{r.quantity}</td>
-      <td className="num whitespace-nowrap">{len(r.lengthMm)} × {len(r.widthMm)}</td>
-      <td>{len(r.thicknessMm)} {r.material}</td>
-      <td className="whitespace-nowrap">{r.grain === 'any' ? 'may turn' : 'along the length'}</td>
+      <td className="num">
+        <span className="whitespace-nowrap">{len(r.lengthMm)} × {len(r.widthMm)}</span>
+        <span className="block font-sans text-xs text-graphite-mute">{r.grain === 'any' ? 'may turn' : 'grain along the length'}</span>
+      </td>
       <td>
         {r.reason}
         <span className="block text-xs text-graphite-mute">
@@ -92,7 +94,7 @@ function RecutRow({ recut: r, jobId, len, canCancel }: { recut: RecutView; jobId
         </span>
       </td>
       <td>
-        <StatusBadge tone={TONE[r.status]}>{RECUT_STATUS_LABELS[r.status]}</StatusBadge>
+        <span className="whitespace-nowrap"><StatusBadge tone={TONE[r.status]}>{RECUT_STATUS_LABELS[r.status]}</StatusBadge></span>
         {r.recutPlan && (r.status === 'planned' || r.status === 'cut' || r.status === 'spoiled') && (
           <Link href={`/plans/${r.recutPlan.id}/saw-order`} className="block text-xs">{r.recutPlan.name}</Link>
         )}

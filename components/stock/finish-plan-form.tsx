@@ -129,12 +129,13 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
             </div>
             <div>
               <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-graphite-mute">Damaged at the saw (goes on the re-cut list)</h3>
-              <ul className="grid gap-x-3 sm:grid-cols-2">
+              <ul className="grid gap-x-3 lg:grid-cols-2">
                 {p.parts.map((pt) => {
                   const key = `${p.index}:${pt.partId}:${pt.instance}`;
                   const name = `${pt.label} #${pt.instance}`;
                   return (
-                    <li key={key} data-testid="finish-part">
+                    // A damaged part takes the whole row, so what happened to it has room to be typed.
+                    <li key={key} data-testid="finish-part" className={damaged.has(key) ? 'lg:col-span-2' : undefined}>
                       <label className="flex min-h-11 items-center gap-2 text-sm">
                         <input type="checkbox" className="h-5 w-5" checked={damaged.has(key)} onChange={() => toggle(damaged, key, setDamaged)} />
                         {name} <span className="text-xs text-graphite-mute">{len(pt.w)} × {len(pt.h)}</span>

@@ -38,10 +38,10 @@ export function YieldLedger({ ledger, money, area }: { ledger: Ledger; money: (c
             {ledger.plans.map((p) => (
               <tr key={p.id} data-testid="ledger-row">
                 <td className="font-medium"><Link href={`/jobs/${p.jobId}`}>{p.jobName}</Link></td>
-                <td>{p.name}{p.recutPlan && <span className="ml-1 text-xs text-graphite-mute">(re-cuts)</span>}</td>
-                <td className="num">{pct(p.yieldRatio)}</td>
-                <td className="num">{pct(p.sawWasteRatio)}</td>
-                <td className={`num ${p.spoiledRatio > 0 ? 'text-brick' : ''}`} data-testid="ledger-spoiled">{p.spoiledRatio > 0 ? pct(p.spoiledRatio) : '—'}</td>
+                <td>{p.name}{p.recutPlan && <span className="ml-1 whitespace-nowrap text-xs text-graphite-mute">(re-cuts)</span>}</td>
+                <td className="num whitespace-nowrap">{pct(p.yieldRatio)}</td>
+                <td className="num whitespace-nowrap">{pct(p.sawWasteRatio)}</td>
+                <td className={`num whitespace-nowrap ${p.spoiledRatio > 0 ? 'text-brick' : ''}`} data-testid="ledger-spoiled">{p.spoiledRatio > 0 ? pct(p.spoiledRatio) : '—'}</td>
                 <td className="num">{p.offcutsRacked}</td>
                 <td className="num">{p.costCents == null ? '—' : money(p.costCents)}</td>
                 <td className="whitespace-nowrap">{(p.finishedAt ?? p.updatedAt).toISOString().slice(0, 10)}{p.finishedBy && <span className="text-graphite-mute"> · {p.finishedBy}</span>}</td>
