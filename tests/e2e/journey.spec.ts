@@ -4,7 +4,7 @@
  * the PDF.
  */
 import fs from 'node:fs';
-import { expect, test } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import { PDFDocument } from 'pdf-lib';
 import { dragPart, pickMove, savedPlan } from './support/bench';
 import { shot, signIn } from './support/session';
@@ -15,6 +15,20 @@ const CSV = [
   'Bench side,2,18,16,3/4,Maple ply,along,',
   'Cubby divider,3,15,14,3/4,Maple ply,any,',
 ].join('\n');
+
+/** A thickness typed as the estimator writes it: the picker lists the stock room's thicknesses, or takes another typed. */
+async function typeThickness(page: Page, label: string, text: string) {
+  const field = page.getByLabel(label, { exact: true });
+  if ((await field.evaluate((el) => el.tagName)) === 'SELECT') {
+    await field.selectOption({ label: 'Another thickness…' });
+    const typed = page.getByLabel(`${label}, typed`);
+    await typed.fill(text);
+    await typed.blur();
+  } else {
+    await field.fill(text);
+    await field.blur();
+  }
+}
 
 test('an estimator takes a new job from drawer schedule and upload to a released plan and its saw order PDF', async ({ page }) => {
   test.setTimeout(180_000);
@@ -38,9 +52,9 @@ test('an estimator takes a new job from drawer schedule and upload to a released
   await page.getByLabel('Opening width').fill('15');
   await page.getByLabel('Opening height').fill('5 1/2');
   await page.getByLabel('Opening depth').fill('21');
-  await page.getByLabel('Front and back thickness').fill('18 mm');
-  await page.getByLabel('Side thickness').fill('12 mm');
-  await page.getByLabel('Bottom thickness').fill('6 mm');
+  await typeThickness(page, 'Front and back thickness', '18 mm');
+  await typeThickness(page, 'Side thickness', '12 mm');
+  await typeThickness(page, 'Bottom thickness', '6 mm');
   await page.getByLabel('Bottom material').fill('Maple ply');
   await page.getByLabel('Bottom material').blur();
   await expect(page.getByRole('table', { name: 'Parts of this schedule' }).getByRole('row')).toHaveCount(5);
