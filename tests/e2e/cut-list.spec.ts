@@ -112,7 +112,9 @@ test('an estimator builds a cut list by keyboard, upload and drawer schedule, th
   expect(csv[0]).toEqual(['Part', 'Quantity', 'Length (in)', 'Width (in)', 'Thickness (in)', 'Material', 'Grain', 'Joint allowance (in)', 'Notes', 'Drawer schedule']);
   // 3/4 MDF was typed; the shop's 3/4″ MDF is 18 mm, written in the column's inches (18 / 25.4 = 0.7087″, NIST).
   expect(csv.find((r) => r[0] === 'Toe kick')).toEqual(['Toe kick', '1', '30-1/2"', '4"', '0.7087"', 'MDF', 'along', '', '', '']);
-  expect(csv.find((r) => r[0] === 'Desk drawers · side')?.slice(1, 3)).toEqual(['4', '19-3/4"']);
+  // Lock rabbet on the default 18 mm front: face left = 9 mm − ⅛″ = 0.2293″, so a 20″ box's side is
+  // 20 − 2 × 0.2293 = 19.5413″ (off the 1/32″ grid, so written in decimal inches).
+  expect(csv.find((r) => r[0] === 'Desk drawers · side')?.slice(1, 3)).toEqual(['4', '19.5413"']);
 });
 
 test('a cutter sees the cut list read-only and can open the setup cards', async ({ page }) => {
