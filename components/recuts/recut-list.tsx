@@ -8,6 +8,7 @@ import { ActionError } from '@/components/stock/field';
 import { EmptyState } from '@/components/ui/empty-state';
 import { StatusBadge, type Tone } from '@/components/ui/status-badge';
 import { api } from '@/lib/client/api';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { recutLabel } from '@/lib/recuts/recuts';
 import { formatLength } from '@/lib/units/format-length';
 import { RECUT_STATUS_LABELS, type RecutStatus, type RecutView } from '@/shared/schemas/recut';
@@ -22,6 +23,8 @@ const TONE: Record<RecutStatus, Tone> = { open: 'warn', planned: 'accent', cut: 
 export function RecutList({ jobId, units, canNest, canCancel }: { jobId: string; units: ShopUnits; canNest: boolean; canCancel: boolean }) {
   const recuts = useQuery({ queryKey: ['recuts', jobId], queryFn: () => api<RecutView[]>(`/api/jobs/${jobId}/recuts`) });
   const len = (mm: number) => formatLength(mm, units);
+  // Stock is named by its exact thickness (18 mm, not ≈11/16″), as everywhere else.
+  const thick = (mm: number) => exactLengthText(mm, units);
   if (recuts.isPending) return <p className="text-sm text-graphite-mute">Loading re-cuts…</p>;
   if (recuts.isError) return <p className="field-error" role="alert">Could not load the re-cuts: {recuts.error.message}</p>;
   const open = recuts.data.filter((r) => r.status === 'open');
@@ -52,7 +55,7 @@ export function RecutList({ jobId, units, canNest, canCancel }: { jobId: string;
           </thead>
           <tbody>
             {recuts.data.map((r) => (
-              <RecutRow key={r.id} recut={r} jobId={jobId} len={len} canCancel={canCancel} />
+              <RecutRow key={r.id} recut={r} jobId={jobId} len={len} thick={thick} canCancel={canCancel} />
             ))}
           </tbody>
         </table>
@@ -61,7 +64,7 @@ export function RecutList({ jobId, units, canNest, canCancel }: { jobId: string;
   );
 }
 
-function RecutRow({ recut: r, jobId, len, canCancel }: { recut: RecutView; jobId: string; len: (mm: number) => string; canCancel: boolean }) {
+function RecutRow({ recut: r, jobId, len, thick, canCancel }: { recut: RecutView; jobId: string; len: (mm: number) => string; thick: (mm: number) => string; canCancel: boolean }) {
   const [cancelling, setCancelling] = useState(false);
   const [reason, setReason] = useState('');
   const queryClient = useQueryClient();
@@ -80,7 +83,7 @@ function RecutRow({ recut: r, jobId, len, canCancel }: { recut: RecutView; jobId
     <tr data-testid="recut" data-status={r.status} className={closed ? 'text-graphite-mute' : undefined}>
       <td>
         <span className="font-medium whitespace-nowrap">{recutLabel(r)}</span>
-        <span className="block text-xs text-graphite-mute">{len(r.thicknessMm)} {r.material}</span>
+        <span className="block text-xs text-graphite-mute">{thick(r.thicknessMm)} {r.material}</span>
       </td>
       <td className="num">{r.quantity}</td>
       <td className="num">

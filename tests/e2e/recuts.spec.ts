@@ -119,7 +119,7 @@ test('a damaged part goes on the re-cut list, is nested on an offcut and cut, an
   const recut = list.getByTestId('recut').first();
   await expect(recut).toContainText('Side #1');
   await expect(recut).toContainText('30″ × 22″');
-  await expect(recut).toContainText(material);
+  await expect(recut).toContainText(`18 mm ${material}`);
   await expect(recut).toContainText('Tear-out on the face');
   await expect(recut).toContainText('To re-cut');
   await expect(cutter.getByRole('link', { name: 'Nest the re-cuts' })).toHaveCount(0);
