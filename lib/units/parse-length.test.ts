@@ -103,10 +103,11 @@ describe('properties', () => {
     expect(mmShop('2.54 cm')).toEqual({ ok: true, mm: 25.4 });
   });
 
-  test('any whole number of sixty-fourths of an inch reads back exactly as the same mm', () => {
+  test('any whole number of sixty-fourths of an inch from 1/32″ up reads back exactly as the same mm (1/64″ is under the 0.5 mm floor)', () => {
+    expect(inShop('1/64"').ok).toBe(false);
     fc.assert(
       fc.property(fc.integer({ min: 0, max: 400 }), fc.integer({ min: 0, max: 63 }), (whole, n64) => {
-        fc.pre(whole > 0 || n64 > 0);
+        fc.pre(whole > 0 || n64 > 1);
         const text = n64 ? `${whole} ${n64}/64"` : `${whole}"`;
         const parsed = inShop(text);
         expect(parsed).toEqual({ ok: true, mm: expect.closeTo(inches(whole + n64 / 64), 9) });
