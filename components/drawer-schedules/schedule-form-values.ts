@@ -4,7 +4,7 @@ import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { snapThickness, type StockOffer } from '@/lib/cut-list/stock-match';
 import { formatLength } from '@/lib/units/format-length';
 import type { LengthUnit } from '@/lib/units/parse-length';
-import { JOINT_METHODS, SLIDE_TYPES, type DrawerSchedule, type DrawerScheduleInput, type JointMethod } from '@/shared/schemas/drawer-schedule';
+import { JOINT_METHODS, SLIDE_SERIES_IDS, SLIDE_TYPES, type DrawerSchedule, type DrawerScheduleInput, type JointMethod, type SlideSeries } from '@/shared/schemas/drawer-schedule';
 import { lengthInput, type ShopUnits } from '@/shared/schemas/units';
 
 /**
@@ -30,6 +30,7 @@ export const scheduleFormSchema = (unit: LengthUnit) =>
     height: lengthInput(unit),
     depth: lengthInput(unit),
     slideType: z.enum(SLIDE_TYPES),
+    slideSeries: z.enum(SLIDE_SERIES_IDS),
     jointMethod: z.enum(JOINT_METHODS),
     jointParam: optionalLength(unit),
     frontThickness: lengthInput(unit),
@@ -52,7 +53,7 @@ export function toScheduleInput(v: ScheduleFormValues): DrawerScheduleInput {
     label: v.label,
     quantity: v.quantity,
     size: { from: v.sizeFrom, widthMm: v.width, heightMm: v.height, depthMm: v.depth },
-    slide: { type: v.slideType },
+    slide: v.slideType === 'side-mount' ? { type: v.slideType, series: v.slideSeries } : { type: v.slideType },
     joint: { method: v.jointMethod, ...(param && v.jointParam !== undefined ? { [param.key]: v.jointParam } : {}) } as DrawerScheduleInput['joint'],
     thickness: { frontMm: v.frontThickness, sideMm: v.sideThickness, ...(v.backThickness !== undefined ? { backMm: v.backThickness } : {}) },
     front: { style: v.frontStyle },
@@ -73,6 +74,7 @@ export function fromSchedule(s: DrawerSchedule, units: ShopUnits): ScheduleFormT
     height: len(s.size.heightMm),
     depth: len(s.size.depthMm),
     slideType: s.slide.type,
+    slideSeries: s.slide.type === 'side-mount' ? s.slide.series : shopSlideSeries(units),
     jointMethod: s.joint.method,
     jointParam: param ? len((s.joint as Record<string, unknown>)[param.key] as number | undefined) : '',
     frontThickness: len(s.thickness.frontMm),
@@ -86,6 +88,9 @@ export function fromSchedule(s: DrawerSchedule, units: ShopUnits): ScheduleFormT
     frontMaterial: s.materials.front ?? '',
   };
 }
+
+/** A shop's slides are of its own unit system unless the schedule says otherwise. */
+export const shopSlideSeries = (units: ShopUnits): SlideSeries => (units.system === 'metric' ? 'metric' : 'imperial');
 
 /** The form's thickness fields, each cut from one material's stock. */
 export const THICKNESS_FIELDS = ['frontThickness', 'sideThickness', 'backThickness', 'bottomThickness'] as const;
@@ -110,7 +115,7 @@ export function emptySchedule(units: ShopUnits, offers: readonly StockOffer[] = 
     return snapped === mm ? formatLength(mm, units) : exactLengthText(snapped, units);
   };
   return {
-    label: '', quantity: '1', sizeFrom: 'opening', width: '', height: '', depth: '', slideType: 'side-mount', jointMethod: 'lock-rabbet', jointParam: '',
+    label: '', quantity: '1', sizeFrom: 'opening', width: '', height: '', depth: '', slideType: 'side-mount', slideSeries: shopSlideSeries(units), jointMethod: 'lock-rabbet', jointParam: '',
     frontThickness: stock(D.frontThickness), sideThickness: stock(D.sideThickness), backThickness: '', frontStyle: 'flush', bottomMount: 'groove',
     bottomThickness: stock(D.bottomThickness), bottomMaterial: material, sidesMaterial: material, frontMaterial: '',
   };
@@ -121,7 +126,7 @@ export function fieldOfPath(path: string): keyof ScheduleFormText {
   const table: Record<string, keyof ScheduleFormText> = {
     label: 'label', quantity: 'quantity', 'size.widthMm': 'width', 'size.heightMm': 'height', 'size.depthMm': 'depth', 'size.depthRule': 'depth',
     'thickness.frontMm': 'frontThickness', 'thickness.sideMm': 'sideThickness', 'thickness.backMm': 'backThickness', 'front.style': 'frontStyle',
-    'bottom.mount': 'bottomMount', 'bottom.thicknessMm': 'bottomThickness', 'bottom.material': 'bottomMaterial', 'materials.sides': 'sidesMaterial', 'materials.front': 'frontMaterial',
+    'slide.series': 'slideSeries', 'bottom.mount': 'bottomMount', 'bottom.thicknessMm': 'bottomThickness', 'bottom.material': 'bottomMaterial', 'materials.sides': 'sidesMaterial', 'materials.front': 'frontMaterial',
   };
   if (table[path]) return table[path];
   if (path.startsWith('joint.')) return 'jointParam';

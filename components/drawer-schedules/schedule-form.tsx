@@ -6,7 +6,7 @@ import Link from 'next/link';
 import { useEffect, useMemo, useRef } from 'react';
 import { useForm, useWatch, type Path } from 'react-hook-form';
 import { api, ApiError } from '@/lib/client/api';
-import { defaultSetupCard, findSetupCard, JOINT_NAMES, sizeDrawerSchedule } from '@/lib/joinery';
+import { defaultSetupCard, DRAWER_DEFAULTS, findSetupCard, JOINT_NAMES, sizeDrawerSchedule } from '@/lib/joinery';
 import { formatLength } from '@/lib/units/format-length';
 import { drawerScheduleSchema, JOINT_METHODS, type DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import type { SetupCard } from '@/shared/schemas/setup-card';
@@ -22,6 +22,7 @@ import { bottomMovementWarning } from './bottom-movement';
 import { emptySchedule, fieldOfPath, fromSchedule, JOINT_PARAM, scheduleFormSchema, THICKNESS_FIELDS, thicknessMaterial, toScheduleInput, type ScheduleFormText, type ScheduleFormValues, type ThicknessField } from './schedule-form-values';
 
 const SLIDE_LABELS = { 'side-mount': 'Side-mount slides', undermount: 'Undermount slides', 'wooden-runners': 'Wooden runners', none: 'No slides' } as const;
+const SERIES_LABELS = { metric: 'Metric: 250–650 mm long, 12.5 mm per side', imperial: 'Imperial: 12–28″ long, ½″ per side' } as const;
 const ROLE_NAMES = { front: 'Front', back: 'Back', side: 'Side', bottom: 'Bottom', 'applied-front': 'Applied front' } as const;
 
 /**
@@ -124,6 +125,9 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
   const paramHint = param && paramDefault !== undefined
     ? `Blank: ${len(paramDefault)}${param.byFront && front.ok ? ` for a ${exactLengthText(front.mm, units)} front (${param.byFront.rule})` : ''}.`
     : undefined;
+  const depthHint = values.slideType === 'side-mount'
+    ? `Box depth: the longest ${values.slideSeries ?? 'imperial'} slide that fits.`
+    : values.slideType === 'undermount' ? 'Box depth: the longest slide that fits.' : `Box depth: the opening less ${len(DRAWER_DEFAULTS.backClearance)} behind.`;
   const sized = live?.sized.ok ? live.sized : null;
   const bottom = sized?.parts.find((p) => p.role === 'bottom');
   const movement = live && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
@@ -140,9 +144,10 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
           {field('quantity', 'Boxes')}
           {select('sizeFrom', 'Size given is', { opening: 'the opening in the carcass', box: 'the box itself' })}
           {select('slideType', 'Slides', SLIDE_LABELS)}
+          {values.slideType === 'side-mount' && select('slideSeries', 'Slide series', SERIES_LABELS)}
           {field('width', values.sizeFrom === 'box' ? 'Box width' : 'Opening width')}
           {field('height', values.sizeFrom === 'box' ? 'Box height' : 'Opening height')}
-          {field('depth', values.sizeFrom === 'box' ? 'Box depth' : 'Opening depth', { hint: values.sizeFrom === 'opening' ? 'Box depth: the longest standard slide that fits.' : undefined })}
+          {field('depth', values.sizeFrom === 'box' ? 'Box depth' : 'Opening depth', { hint: values.sizeFrom === 'opening' ? depthHint : undefined })}
           {select('jointMethod', 'Joint', Object.fromEntries(JOINT_METHODS.map((m) => [m, JOINT_NAMES[m]])))}
           {param ? field('jointParam', param.label, { placeholder: len(paramDefault ?? param.defaultMm), hint: paramHint }) : <div />}
           {select('frontStyle', 'Box front', { flush: 'Flush (the box front is the face)', lipped: 'Lipped', applied: 'Applied front (overlay)' })}

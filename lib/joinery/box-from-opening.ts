@@ -1,6 +1,6 @@
 import type { Mm } from '@/lib/units/length';
 import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
-import { DRAWER_DEFAULTS, IMPERIAL_SLIDE_LENGTHS, METRIC_SLIDE_LENGTHS } from '@/lib/joinery/defaults';
+import { DRAWER_DEFAULTS, SLIDE_SERIES } from '@/lib/joinery/defaults';
 import { mmText } from '@/lib/joinery/format';
 import type { BoxSize, FieldError, Result } from '@/lib/joinery/types';
 
@@ -38,11 +38,12 @@ export function boxFromOpening(
     });
   }
 
+  const series = slide.type === 'side-mount' ? slide.series : 'imperial';
   const rule: DepthRule =
     size.depthRule ??
     (slide.type === 'side-mount' || slide.type === 'undermount'
-      ? depthRuleDefaults('longest-standard-slide')
-      : depthRuleDefaults('opening-less-clearance'));
+      ? { rule: 'longest-standard-slide', series, backClearanceMm: DRAWER_DEFAULTS.backClearance }
+      : { rule: 'opening-less-clearance', backClearanceMm: DRAWER_DEFAULTS.backClearance });
   const depth = boxDepth(size.depthMm, rule);
   if (!depth.ok) errors.push(...depth.errors);
   if (errors.length > 0 || !depth.ok) return { ok: false, errors };
@@ -50,16 +51,10 @@ export function boxFromOpening(
   notes.push(
     slide.type === 'undermount'
       ? `Box ${mmText(widthMm)} wide = opening ${mmText(size.widthMm)} − ${mmText(widthDeduction)} undermount deduction; check the slide maker's spec.`
-      : `Box ${mmText(widthMm)} wide = opening ${mmText(size.widthMm)} − 2 × ${mmText(widthDeduction / 2)} ${slide.type} clearance.`,
+      : `Box ${mmText(widthMm)} wide = opening ${mmText(size.widthMm)} − 2 × ${mmText(widthDeduction / 2)} ${slide.type === 'side-mount' ? `${slide.series} side-mount slide` : slide.type} clearance.`,
   );
   notes.push(...depth.notes);
   return { ok: true, box: { widthMm, heightMm, depthMm: depth.depthMm }, slideLengthMm: depth.slideLengthMm, notes };
-}
-
-/** Slides set the depth by their length; boxes on runners or without slides fill the opening less a back clearance. */
-function depthRuleDefaults(rule: 'longest-standard-slide' | 'opening-less-clearance'): DepthRule {
-  const backClearanceMm = DRAWER_DEFAULTS.backClearance;
-  return rule === 'longest-standard-slide' ? { rule, series: 'imperial', backClearanceMm } : { rule, backClearanceMm };
 }
 
 function boxDepth(
@@ -69,7 +64,7 @@ function boxDepth(
   switch (rule.rule) {
     case 'longest-standard-slide': {
       const room = openingDepth - rule.backClearanceMm;
-      const lengths = rule.series === 'metric' ? METRIC_SLIDE_LENGTHS : IMPERIAL_SLIDE_LENGTHS;
+      const lengths = SLIDE_SERIES[rule.series].lengthsMm;
       const fitting = lengths.filter((l) => l <= room + 1e-9);
       if (fitting.length === 0) {
         return {
@@ -87,7 +82,7 @@ function boxDepth(
         ok: true,
         depthMm: slideLengthMm,
         slideLengthMm,
-        notes: [`Box ${mmText(slideLengthMm)} deep to suit the longest standard slide that fits the opening.`],
+        notes: [`Box ${mmText(slideLengthMm)} deep to suit the longest standard ${rule.series} slide that fits the opening (${rangeText(lengths)}).`],
       };
     }
     case 'slide-length':
@@ -120,3 +115,5 @@ function boxDepth(
     }
   }
 }
+
+const rangeText = (lengths: readonly Mm[]) => `${mmText(lengths[0])}–${mmText(lengths[lengths.length - 1])}`;

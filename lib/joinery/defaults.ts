@@ -8,9 +8,7 @@ export const DRAWER_DEFAULTS = {
   frontThickness: inches(3 / 4), // ¾″ box front with ½″ sides is common [CP]
   sideThickness: inches(1 / 2), // [CP]
 
-  // Side-mount ball-bearing slides: ½″ per side, box height ≤ opening − ½″ [CP].
-  sideMountSideClearance: inches(1 / 2),
-  sideMountHeightClearance: inches(1 / 2),
+  // Side-mount ball-bearing slides: see SLIDE_SERIES below (½″ imperial, 12.5 mm metric, per side and above).
   // Undermount: ≈ ⅝″ total width deduction with ½″ sides and a ½″ bottom recess [CP]; check the maker's spec.
   undermountWidthDeduction: inches(5 / 8),
   undermountHeightDeduction: inches(1), // [CP, from memory]
@@ -66,6 +64,15 @@ export const IMPERIAL_SLIDE_LENGTHS: readonly Mm[] = [12, 14, 16, 18, 20, 22, 24
 
 /** Metric slide lengths, 250–650 mm in 50 mm steps [CP, from memory]. */
 export const METRIC_SLIDE_LENGTHS: readonly Mm[] = [250, 300, 350, 400, 450, 500, 550, 600, 650];
+
+/**
+ * Side-mount ball-bearing slides by series: imperial slides want ½″ (12.7 mm) per side and ½″ above the box, in
+ * lengths of 12–28″ [CP]; metric slides the metric half inch, 12.5 mm, in lengths of 250–650 mm [CP, from memory].
+ */
+export const SLIDE_SERIES = {
+  imperial: { name: 'imperial', sideClearanceMm: inches(1 / 2), heightClearanceMm: inches(1 / 2), lengthsMm: IMPERIAL_SLIDE_LENGTHS },
+  metric: { name: 'metric', sideClearanceMm: 12.5, heightClearanceMm: 12.5, lengthsMm: METRIC_SLIDE_LENGTHS },
+} as const satisfies Record<'imperial' | 'metric', { name: string; sideClearanceMm: Mm; heightClearanceMm: Mm; lengthsMm: readonly Mm[] }>;
 
 /**
  * The lock rabbet's starting setup for a stock thickness t, with the bit height fixed at ⅜″: a ½″ front keeps ⅛″ of

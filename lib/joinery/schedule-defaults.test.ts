@@ -5,8 +5,18 @@ import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 describe('a schedule filled with few fields takes the trade defaults', () => {
   const s = drawerScheduleSchema.parse({ label: 'Kitchen base', quantity: 3, size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 560 } });
 
-  test('side-mount slides with ½″ per side and ½″ in height (common practice, no source)', () => {
-    expect(s.slide).toEqual({ type: 'side-mount', sideClearanceMm: inches(1 / 2), heightClearanceMm: inches(1 / 2) });
+  test('side-mount slides of the imperial series, with ½″ per side and ½″ in height (common practice, no source)', () => {
+    expect(s.slide).toEqual({ type: 'side-mount', series: 'imperial', sideClearanceMm: inches(1 / 2), heightClearanceMm: inches(1 / 2) });
+  });
+
+  test('metric side-mount slides take 12.5 mm per side and above, the metric half inch (derived from common practice)', () => {
+    const m = drawerScheduleSchema.parse({ label: 'M', quantity: 1, size: s.size, slide: { type: 'side-mount', series: 'metric' } }).slide;
+    expect(m).toEqual({ type: 'side-mount', series: 'metric', sideClearanceMm: 12.5, heightClearanceMm: 12.5 });
+  });
+
+  test('a clearance given outright is kept whatever the series', () => {
+    const m = drawerScheduleSchema.parse({ label: 'M', quantity: 1, size: s.size, slide: { type: 'side-mount', series: 'metric', sideClearanceMm: 13 } }).slide;
+    expect(m).toMatchObject({ sideClearanceMm: 13, heightClearanceMm: 12.5 });
   });
 
   test('a lock-rabbet box, ¾″ front with ½″ sides, front flush; the ¾″ front keeps a ¼″ face (Woodsmith, "Locking rabbet joint")', () => {

@@ -149,6 +149,30 @@ describe('box size from the opening', () => {
     expect(part(result.parts, 'applied-front').lengthMm).toBeCloseTo(597, 9);
   });
 
+  test('metric side-mount slides leave 12.5 mm per side and come 250–650 mm long: a 564 × 200 × 560 mm opening takes a 539 × 187.5 mm box, 500 mm long (derived from common practice: 12.5 mm metric slide clearance; metric lengths from memory)', () => {
+    const result = sized(base({ size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', series: 'metric' } }));
+    expect(result.box.widthMm).toBeCloseTo(539, 9);
+    expect(result.box.heightMm).toBeCloseTo(187.5, 9);
+    expect(result.box.depthMm).toBeCloseTo(500, 9);
+    expect(result.notes.join(' ')).toContain('2 × 12.5 mm metric side-mount slide clearance');
+    expect(result.notes.join(' ')).toContain('longest standard metric slide');
+  });
+
+  test('the same opening with imperial slides takes ½″ per side and a 20″ slide (common practice, no source)', () => {
+    // 564 − 2 × 12.7 = 538.6 mm; 560 mm less ½″ behind is 547.3 mm ≈ 21.5″, so the longest 2″-step slide is 20″.
+    const result = sized(base({ size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', series: 'imperial' } }));
+    expect(result.box.widthMm).toBeCloseTo(538.6, 9);
+    expect(result.box.depthMm).toBeCloseTo(inches(20), 9);
+  });
+
+  test('a schedule saved before slides had a series still sizes as it did: ½″ clearances and imperial lengths', () => {
+    // As the form stored them: the schema's output with its defaults filled, no series, no depth rule.
+    const stored = { ...base(), size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', sideClearanceMm: 12.7, heightClearanceMm: 12.7 } };
+    const result = sized(stored as DrawerScheduleInput);
+    expect(result.box).toMatchObject({ widthMm: 538.6, heightMm: 187.3 });
+    expect(result.box.depthMm).toBeCloseTo(inches(20), 9);
+  });
+
   test.each([
     { label: 'a 22½″ deep opening with ½″ back clearance takes a 22″ slide (slide lengths 12–28″ by 2″, common practice, no source)', depthIn: 22.5, series: 'imperial', expectedMm: inches(22) },
     { label: 'a 21.9″ deep opening takes a 20″ slide (common practice, no source)', depthIn: 21.9, series: 'imperial', expectedMm: inches(20) },

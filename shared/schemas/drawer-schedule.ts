@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DRAWER_DEFAULTS as D, lockRabbetFaceLeft } from '@/lib/joinery/defaults';
+import { DRAWER_DEFAULTS as D, lockRabbetFaceLeft, SLIDE_SERIES } from '@/lib/joinery/defaults';
 
 /**
  * A drawer schedule: a set of identical drawer boxes. All lengths are mm. Most fields have trade defaults
@@ -64,8 +64,16 @@ export const jointSchema = z.discriminatedUnion('method', [
 
 export const SLIDE_TYPES = ['side-mount', 'undermount', 'wooden-runners', 'none'] as const;
 
+/**
+ * Ball-bearing side-mount slides come in two series: imperial (½″ per side, 12–28″ long) and metric (12.5 mm per
+ * side, 250–650 mm). Left out: imperial, which is what every schedule saved before the series existed meant.
+ */
+export const SLIDE_SERIES_IDS = ['imperial', 'metric'] as const;
+export const slideSeriesSchema = z.enum(SLIDE_SERIES_IDS, { error: 'The slide series is "imperial" or "metric".' });
+export type SlideSeries = z.infer<typeof slideSeriesSchema>;
+
 /** Slides that need a running clearance on each side and above the box. */
-const clearanceSlide = <T extends 'side-mount' | 'wooden-runners' | 'none'>(type: T, sideMm: number, heightMm: number) =>
+const clearanceSlide = <T extends 'wooden-runners' | 'none'>(type: T, sideMm: number, heightMm: number) =>
   z.object({
     type: z.literal(type),
     sideClearanceMm: nonNegativeMm('Side clearance').default(sideMm),
@@ -73,7 +81,13 @@ const clearanceSlide = <T extends 'side-mount' | 'wooden-runners' | 'none'>(type
   });
 
 export const slideSchema = z.discriminatedUnion('type', [
-  clearanceSlide('side-mount', D.sideMountSideClearance, D.sideMountHeightClearance),
+  z.object({
+    type: z.literal('side-mount'),
+    series: slideSeriesSchema.default('imperial'),
+    /** Left out: the series' clearance (½″ imperial, 12.5 mm metric). */
+    sideClearanceMm: nonNegativeMm('Side clearance').optional(),
+    heightClearanceMm: nonNegativeMm('Height clearance').optional(),
+  }),
   z.object({
     type: z.literal('undermount'),
     widthDeductionMm: nonNegativeMm('Width deduction').default(D.undermountWidthDeduction),
@@ -84,11 +98,15 @@ export const slideSchema = z.discriminatedUnion('type', [
   clearanceSlide('none', 0, 0),
 ]);
 
-/** How box depth follows from the opening. Left out: the longest standard slide for slides, else opening less clearance. */
+/**
+ * How box depth follows from the opening. Left out: the longest standard slide of the slide's series for slides,
+ * else the opening less a back clearance.
+ */
 export const depthRuleSchema = z.discriminatedUnion('rule', [
   z.object({
     rule: z.literal('longest-standard-slide'),
-    series: z.enum(['imperial', 'metric']).default('imperial'),
+    /** Left out: the side-mount slide's series (imperial for other slides). */
+    series: slideSeriesSchema.optional(),
     backClearanceMm: nonNegativeMm('Back clearance').default(D.backClearance),
   }),
   z.object({ rule: z.literal('slide-length'), slideLengthMm: positiveMm('Slide length') }),
@@ -197,11 +215,36 @@ const drawerScheduleShape = z.object({
 
 type ParsedShape = z.output<typeof drawerScheduleShape>;
 type Filled<J> = J extends { method: 'lock-rabbet' } ? J & { faceLeftMm: number } : J;
+type FilledSlide<S> = S extends { type: 'side-mount' } ? S & { sideClearanceMm: number; heightClearanceMm: number } : S;
+type FilledSize<Z> = Z extends { from: 'opening'; depthRule?: infer R }
+  ? Omit<Z, 'depthRule'> & { depthRule?: R extends { rule: 'longest-standard-slide' } ? R & { series: SlideSeries } : R }
+  : Z;
 
-/** Defaults that depend on another field: a lock rabbet's face left follows the front's thickness. */
+/**
+ * Defaults that depend on another field: a lock rabbet's face left follows the front's thickness; a side-mount
+ * slide's clearances and a standard-slide depth rule's series follow the slide's series.
+ */
 function fillDependentDefaults(s: ParsedShape) {
   const joint = s.joint.method === 'lock-rabbet' && s.joint.faceLeftMm === undefined ? { ...s.joint, faceLeftMm: lockRabbetFaceLeft(s.thickness.frontMm) } : s.joint;
-  return { ...s, joint: joint as Filled<ParsedShape['joint']> };
+  const slide =
+    s.slide.type === 'side-mount'
+      ? {
+          ...s.slide,
+          sideClearanceMm: s.slide.sideClearanceMm ?? SLIDE_SERIES[s.slide.series].sideClearanceMm,
+          heightClearanceMm: s.slide.heightClearanceMm ?? SLIDE_SERIES[s.slide.series].heightClearanceMm,
+        }
+      : s.slide;
+  const seriesOfSlide: SlideSeries = s.slide.type === 'side-mount' ? s.slide.series : 'imperial';
+  const size =
+    s.size.from === 'opening' && s.size.depthRule?.rule === 'longest-standard-slide' && s.size.depthRule.series === undefined
+      ? { ...s.size, depthRule: { ...s.size.depthRule, series: seriesOfSlide } }
+      : s.size;
+  return {
+    ...s,
+    joint: joint as Filled<ParsedShape['joint']>,
+    slide: slide as FilledSlide<ParsedShape['slide']>,
+    size: size as FilledSize<ParsedShape['size']>,
+  };
 }
 
 export const drawerScheduleSchema = drawerScheduleShape.transform(fillDependentDefaults);
