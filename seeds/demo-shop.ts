@@ -3,7 +3,8 @@ import type { Db } from '@/db/open';
 import { buildNestRequest } from '@/db/queries/nest-request';
 import { releasePlan } from '@/db/queries/plan-lifecycle';
 import { recordOpeningCounts } from '@/db/queries/stock';
-import { jobs, offcuts, parts, plans, shops, stockItems, users } from '@/db/schema';
+import { jobs, offcuts, parts, plans, shops, slideModels, stockItems, users } from '@/db/schema';
+import { slideModelSchema, type SlideModelInput } from '@/shared/schemas/slide-model';
 import { optimize } from '@/lib/nesting';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { inches } from '@/lib/units/length';
@@ -19,6 +20,36 @@ export const DEMO_PEOPLE = [
   { name: 'Teodor Vance', email: 'teo@larkspur.example', role: 'estimator' },
   { name: 'Ines Halvorsen', email: 'ines@larkspur.example', role: 'cutter' },
 ] as const;
+
+/**
+ * Two undermount slides the demo shop hangs drawers on. The makers, model names and figures are invented, written the
+ * two ways slide makers give them: an inside width (opening − 1-5/8″, for sides up to ⅝″) and an outside width
+ * (opening − 10 mm, for sides up to 16 mm).
+ */
+export const DEMO_SLIDE_MODELS: SlideModelInput[] = [
+  {
+    kind: 'undermount',
+    name: 'Tessel UM-58 full extension',
+    lengthsMm: [12, 15, 18, 21].map(inches),
+    widthRule: 'inside',
+    widthDeductionMm: inches(1 + 5 / 8),
+    maxSideThicknessMm: inches(5 / 8),
+    bottomRecessMm: inches(1 / 2),
+    heightClearanceMm: inches(3 / 4),
+    rearClearanceMm: inches(5 / 8),
+  },
+  {
+    kind: 'undermount',
+    name: 'Halbrook H-16 soft close',
+    lengthsMm: [250, 300, 350, 400, 450, 500, 550],
+    widthRule: 'outside',
+    widthDeductionMm: 10,
+    maxSideThicknessMm: 16,
+    bottomRecessMm: 13,
+    heightClearanceMm: 20,
+    rearClearanceMm: 10,
+  },
+];
 
 // A US shop buys 4 × 8 ft sheets; Baltic birch comes metric (1525 mm square) and shows as ≈60″.
 const SHEET = { l: inches(96), w: inches(48) };
@@ -66,6 +97,8 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
       { shopId, material: 'Maple ply', thicknessMm: inches(23 / 32), lengthMm: inches(46.5), widthMm: inches(15), location: 'Offcut bin 2', costCents: 1100 },
       { shopId, material: 'Maple ply', thicknessMm: inches(23 / 32), lengthMm: inches(25.25), widthMm: inches(23.25), location: 'Offcut bin 2', costCents: 800 },
     ]);
+
+    await tx.insert(slideModels).values(DEMO_SLIDE_MODELS.map((m) => ({ shopId, ...slideModelSchema.parse(m) })));
 
     const [kitchen, vanity] = await tx
       .insert(jobs)

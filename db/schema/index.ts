@@ -6,3 +6,4 @@ export * from './parts';
 export * from './stock';
 export * from './plans';
 export * from './recuts';
+export * from './slide-models';

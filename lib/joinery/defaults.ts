@@ -56,8 +56,8 @@ export const DRAWER_DEFAULTS = {
 /** Thinnest stock common pocket-screw jigs are set for [CP, from memory]. */
 export const POCKET_SCREW_MIN_STOCK: Mm = inches(1 / 2);
 
-/** Thickest sides undermount slides are usually made for, 16 mm / ⅝″ [CP, from memory]. */
-export const UNDERMOUNT_MAX_SIDE: Mm = inches(5 / 8);
+/** Thickest sides undermount slides are usually made for, 16 mm (⅝″ is 15.9) [CP, from memory]. */
+export const UNDERMOUNT_MAX_SIDE: Mm = 16;
 
 /** Standard ball-bearing slide lengths, 12–28″ in 2″ steps [CP]. */
 export const IMPERIAL_SLIDE_LENGTHS: readonly Mm[] = [12, 14, 16, 18, 20, 22, 24, 26, 28].map(inches);

@@ -6,6 +6,7 @@ import { POCKET_SCREW_MIN_STOCK, UNDERMOUNT_MAX_SIDE } from '@/lib/joinery/defau
 import { mmText } from '@/lib/joinery/format';
 import { JOINT_NAMES, jointCorners, jointErrors, jointMachining, type BoxThickness, type JointCorners } from '@/lib/joinery/joint-rules';
 import { requiredSetupCards } from '@/lib/joinery/setup-cards';
+import { SLIDE_SIDE_TOLERANCE_MM } from '@/shared/schemas/slide-model';
 import type { BoxSize, DrawerPart, FieldError, SetupCardKey, SizedBox } from '@/lib/joinery/types';
 
 export type SizeDrawerScheduleResult =
@@ -51,6 +52,7 @@ function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
   const lipMm = s.front.style === 'lipped' ? s.front.lipMm : 0;
 
   const errors = [
+    ...slideModelErrors(s, t),
     ...boxErrors(box, t),
     ...jointErrors(s.joint, t, box.wallHeightMm),
     ...bottomErrors(s, box, t),
@@ -102,6 +104,13 @@ function partBase(s: DrawerSchedule, role: DrawerPart['role'], quantityPerBox: n
   return { schedule: s.label, role, quantityPerBox, quantity: quantityPerBox * s.quantity };
 }
 
+/** Sides thicker than the chosen slide model is made for cannot be hung on it. */
+function slideModelErrors(s: DrawerSchedule, t: BoxThickness): FieldError[] {
+  const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
+  if (!model || model.maxSideThicknessMm === null || t.side <= model.maxSideThicknessMm + SLIDE_SIDE_TOLERANCE_MM) return [];
+  return [{ path: 'thickness.sideMm', message: `The ${model.name} takes sides up to ${mmText(model.maxSideThicknessMm)}; these are ${mmText(t.side)}: use thinner sides or another slide` }];
+}
+
 function boxErrors(box: SizedBox, t: BoxThickness): FieldError[] {
   const errors: FieldError[] = [];
   if (box.insideWidthMm <= 0)
@@ -131,8 +140,9 @@ function bottomErrors(s: DrawerSchedule, box: SizedBox, t: BoxThickness): FieldE
     errors.push({ path: 'bottom.groove.heightMm', message: `The groove (${mmText(g.heightMm)} up, ${mmText(g.widthMm)} wide) does not fit in a ${mmText(box.wallHeightMm)} tall box` });
   if (g.clearanceMm >= 2 * g.depthMm)
     errors.push({ path: 'bottom.groove.clearanceMm', message: `With ${mmText(g.clearanceMm)} of clearance the bottom would not reach into ${mmText(g.depthMm)} deep grooves` });
-  if (slide.type === 'undermount' && g.heightMm < slide.bottomRecessMm)
-    errors.push({ path: 'bottom.groove.heightMm', message: `Undermount slides need the bottom at least ${mmText(slide.bottomRecessMm)} up; the groove is ${mmText(g.heightMm)} up` });
+  const recess = slide.type === 'undermount' ? (slide.model?.bottomRecessMm ?? slide.bottomRecessMm) : 0;
+  if (slide.type === 'undermount' && g.heightMm < recess - 1e-9)
+    errors.push({ path: 'bottom.groove.heightMm', message: `${slide.model ? `The ${slide.model.name}` : 'Undermount slides'} need the bottom at least ${mmText(recess)} up; the groove is ${mmText(g.heightMm)} up` });
   return errors;
 }
 
@@ -222,8 +232,12 @@ function appliedFrontPart(s: DrawerSchedule): DrawerPart | null {
 
 function scheduleNotes(s: DrawerSchedule, t: BoxThickness): string[] {
   const notes: string[] = [];
-  if (s.slide.type === 'undermount' && t.side > UNDERMOUNT_MAX_SIDE + 0.01)
-    notes.push(`Undermount slides are usually made for sides up to ${mmText(UNDERMOUNT_MAX_SIDE)}; check the maker's spec for ${mmText(t.side)} sides.`);
+  const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
+  if (model && s.size.from === 'box' && !model.lengthsMm.some((l) => Math.abs(l - s.size.depthMm) < 0.5))
+    notes.push(`The box is ${mmText(s.size.depthMm)} long, and the ${model.name} comes ${model.lengthsMm.map(mmText).join(', ')} long: a box on it is usually as long as its slide.`);
+  // Without a model there is no maker's limit to hold the sides to, only the usual one.
+  if (s.slide.type === 'undermount' && !s.slide.model && t.side > UNDERMOUNT_MAX_SIDE + SLIDE_SIDE_TOLERANCE_MM)
+    notes.push(`Undermount slides are usually made for sides up to ${mmText(UNDERMOUNT_MAX_SIDE)}; check the maker's spec for ${mmText(t.side)} sides, or choose a slide model.`);
   if (s.joint.method === 'butt-pocket-screw' && Math.min(t.side, t.front, t.back) < POCKET_SCREW_MIN_STOCK)
     notes.push(`Pocket-screw jigs usually need stock at least ${mmText(POCKET_SCREW_MIN_STOCK)} thick; check the jig.`);
   if (s.joint.method === 'butt-loose-tenon') {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DRAWER_DEFAULTS as D, lockRabbetFaceLeft, SLIDE_SERIES } from '@/lib/joinery/defaults';
+import { slideModelRuleSchema } from './slide-model';
 
 /**
  * A drawer schedule: a set of identical drawer boxes. All lengths are mm. Most fields have trade defaults
@@ -87,9 +88,14 @@ export const slideSchema = z.discriminatedUnion('type', [
     /** Left out: the series' clearance (½″ imperial, 12.5 mm metric). */
     sideClearanceMm: nonNegativeMm('Side clearance').optional(),
     heightClearanceMm: nonNegativeMm('Height clearance').optional(),
+    /** A slide model from Shop settings: when given, its rule sizes the box instead of the series. */
+    model: slideModelRuleSchema.optional(),
   }),
   z.object({
     type: z.literal('undermount'),
+    /** A slide model from Shop settings, as the maker specifies it; when given, it sizes the box (the fields below do not). */
+    model: slideModelRuleSchema.optional(),
+    // Without a model (schedules saved before models existed): one deduction for every side thickness.
     widthDeductionMm: nonNegativeMm('Width deduction').default(D.undermountWidthDeduction),
     heightDeductionMm: nonNegativeMm('Height deduction').default(D.undermountHeightDeduction),
     bottomRecessMm: nonNegativeMm('Bottom recess').default(D.undermountBottomRecess),
@@ -168,8 +174,8 @@ export const bottomSchema = z.discriminatedUnion('mount', [
       .object({
         widthMm: positiveMm('Groove width').default(D.grooveWidth),
         depthMm: positiveMm('Groove depth').default(D.grooveDepth),
-        /** From the box's bottom edge to the groove's lower edge. */
-        heightMm: nonNegativeMm('Groove height').default(D.grooveHeight),
+        /** From the box's bottom edge to the groove's lower edge. Left out: ½″, or the undermount slide's bottom recess if more. */
+        heightMm: nonNegativeMm('Groove height').optional(),
         /** Total play across the bottom, split between the two grooves it spans. */
         clearanceMm: z
           .number({ error: 'Bottom clearance must be a length in mm' })
@@ -216,6 +222,7 @@ const drawerScheduleShape = z.object({
 type ParsedShape = z.output<typeof drawerScheduleShape>;
 type Filled<J> = J extends { method: 'lock-rabbet' } ? J & { faceLeftMm: number } : J;
 type FilledSlide<S> = S extends { type: 'side-mount' } ? S & { sideClearanceMm: number; heightClearanceMm: number } : S;
+type FilledBottom<B> = B extends { mount: 'groove'; groove: infer G } ? Omit<B, 'groove'> & { groove: G & { heightMm: number } } : B;
 type FilledSize<Z> = Z extends { from: 'opening'; depthRule?: infer R }
   ? Omit<Z, 'depthRule'> & { depthRule?: R extends { rule: 'longest-standard-slide' } ? R & { series: SlideSeries } : R }
   : Z;
@@ -239,15 +246,28 @@ function fillDependentDefaults(s: ParsedShape) {
     s.size.from === 'opening' && s.size.depthRule?.rule === 'longest-standard-slide' && s.size.depthRule.series === undefined
       ? { ...s.size, depthRule: { ...s.size.depthRule, series: seriesOfSlide } }
       : s.size;
+  // An undermount slide's fixings sit under the bottom: the groove goes at least as high as its bottom recess.
+  const recess = s.slide.type === 'undermount' ? (s.slide.model?.bottomRecessMm ?? s.slide.bottomRecessMm) : 0;
+  const bottom =
+    s.bottom.mount === 'groove' && s.bottom.groove.heightMm === undefined
+      ? { ...s.bottom, groove: { ...s.bottom.groove, heightMm: Math.max(D.grooveHeight, recess) } }
+      : s.bottom;
   return {
     ...s,
+    bottom: bottom as FilledBottom<ParsedShape['bottom']>,
     joint: joint as Filled<ParsedShape['joint']>,
     slide: slide as FilledSlide<ParsedShape['slide']>,
     size: size as FilledSize<ParsedShape['size']>,
   };
 }
 
-export const drawerScheduleSchema = drawerScheduleShape.transform(fillDependentDefaults);
+export const drawerScheduleSchema = drawerScheduleShape
+  .superRefine((s, ctx) => {
+    const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
+    if (model && model.kind !== s.slide.type)
+      ctx.addIssue({ code: 'custom', path: ['slide', 'model', 'kind'], message: `${model.name} is a ${model.kind} slide, not ${s.slide.type}: choose it with ${model.kind} slides.` });
+  })
+  .transform(fillDependentDefaults);
 
 export type DrawerSchedule = z.output<typeof drawerScheduleSchema>;
 export type DrawerScheduleInput = z.input<typeof drawerScheduleSchema>;

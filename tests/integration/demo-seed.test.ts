@@ -1,7 +1,7 @@
 import bcrypt from 'bcryptjs';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
-import { jobs, plans, shops, stockItems, users } from '@/db/schema';
+import { jobs, plans, shops, slideModels, stockItems, users } from '@/db/schema';
 import { readPlan, validatePlan } from '@/lib/nesting';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoShop } from '@/seeds/demo-shop';
@@ -11,6 +11,8 @@ import { emptySchedule, scheduleFormSchema, toScheduleInput } from '@/components
 import { stockMatchWarning } from '@/lib/cut-list/stock-match';
 import { sizeDrawerSchedule } from '@/lib/joinery';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
+import { listSlideModels } from '@/db/queries/slide-models';
+import { inches } from '@/lib/units/length';
 
 const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
 
@@ -52,6 +54,30 @@ describe('the demo shop', () => {
     expect(sized.ok).toBe(true);
     if (!sized.ok) return;
     expect(sized.parts.map((p) => [p.role, stockMatchWarning(p, offers, IMPERIAL)])).toEqual(sized.parts.map((p) => [p.role, null]));
+  });
+
+  test('keeps two invented undermount slide models, each sizing a box the way its rule says (worked by hand)', async () => {
+    const models = await listSlideModels(handle.db, first.shopId);
+    expect(models.map((m) => [m.name, m.widthRule])).toEqual([
+      ['Halbrook H-16 soft close', 'outside'],
+      ['Tessel UM-58 full extension', 'inside'],
+    ]);
+    expect((await handle.db.select().from(slideModels)).length).toBe(2);
+    const size = (name: string, opening: { widthMm: number; heightMm: number; depthMm: number }) => {
+      const { id, updatedAt, ...rule } = models.find((m) => m.name === name)!;
+      void updatedAt;
+      const sized = sizeDrawerSchedule({ label: 'Demo', quantity: 1, size: { from: 'opening', ...opening }, slide: { type: 'undermount', model: { ...rule, id } }, thickness: { frontMm: 12, sideMm: 12 } });
+      if (!sized.ok) throw new Error(JSON.stringify(sized.errors));
+      return sized.box;
+    };
+    // Inside rule: 15″ − 1-5/8″ = 13-3/8″ inside + 2 × 12 mm sides; 22″ − ⅝″ = 21-3/8″ of room takes the 21″ slide.
+    expect(size('Tessel UM-58 full extension', { widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) })).toMatchObject({
+      widthMm: expect.closeTo(inches(13 + 3 / 8) + 24, 9),
+      heightMm: expect.closeTo(inches(6.25), 9),
+      depthMm: expect.closeTo(inches(21), 9),
+    });
+    // Outside rule: 564 − 10 = 554 mm; 540 − 10 = 530 mm of room takes the 500 mm slide.
+    expect(size('Halbrook H-16 soft close', { widthMm: 564, heightMm: 180, depthMm: 540 })).toMatchObject({ widthMm: 554, heightMm: 160, depthMm: 500 });
   });
 
   test('is seeded only into an empty database', async () => {
