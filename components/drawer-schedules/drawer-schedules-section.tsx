@@ -11,6 +11,7 @@ import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import type { SetupCard } from '@/shared/schemas/setup-card';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { ScheduleForm } from './schedule-form';
+import type { SlideModelChoice } from './schedule-form-values';
 
 interface SavedSchedule {
   id: string;
@@ -25,6 +26,7 @@ export function DrawerSchedulesSection({ jobId, units, canWrite }: { jobId: stri
   const schedules = useQuery({ queryKey: ['drawer-schedules', jobId], queryFn: () => api<SavedSchedule[]>(`/api/jobs/${jobId}/drawer-schedules`) });
   const cards = useQuery({ queryKey: ['setup-cards'], queryFn: () => api<SetupCard[]>('/api/setup-cards') });
   const materials = useMaterials();
+  const slideModels = useQuery({ queryKey: ['slide-models'], queryFn: () => api<SlideModelChoice[]>('/api/slide-models') });
   const [editing, setEditing] = useState<SavedSchedule | 'new' | null>(null);
   const remove = useMutation({
     mutationFn: (id: string) => api(`/api/jobs/${jobId}/drawer-schedules/${id}`, { method: 'DELETE' }),
@@ -44,14 +46,15 @@ export function DrawerSchedulesSection({ jobId, units, canWrite }: { jobId: stri
       <p className="mb-4 max-w-3xl text-sm text-graphite-mute">
         A schedule is a set of identical drawer boxes. Kerfwise sizes every part from the opening, slides, joint and stock, and keeps its rows in the cut list in step when the schedule changes.
       </p>
-      {editing !== null && materials.isPending && <p role="status" className="text-sm text-graphite-mute">Reading the stock room…</p>}
-      {editing !== null && !materials.isPending && (
+      {editing !== null && (materials.isPending || slideModels.isPending) && <p role="status" className="text-sm text-graphite-mute">Reading the stock room and slide models…</p>}
+      {editing !== null && !materials.isPending && !slideModels.isPending && (
         <ScheduleForm
           key={editing === 'new' ? 'new' : editing.id}
           jobId={jobId}
           units={units}
           cards={cards.data ?? []}
           offers={materials.data ?? []}
+          slideModels={slideModels.data ?? []}
           editing={editing === 'new' ? null : { id: editing.id, input: editing.input }}
           onDone={() => setEditing(null)}
         />

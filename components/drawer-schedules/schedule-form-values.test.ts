@@ -3,7 +3,7 @@ import { sizeDrawerSchedule } from '@/lib/joinery';
 import { stockMatchWarning, type StockOffer } from '@/lib/cut-list/stock-match';
 import { inches } from '@/lib/units/length';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
-import { emptySchedule, scheduleFormSchema, toScheduleInput } from './schedule-form-values';
+import { emptySchedule, fromSchedule, scheduleFormSchema, slideModelChoices, toScheduleInput } from './schedule-form-values';
 
 const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
 const METRIC = { system: 'metric', precision: 1, feet: false } as const;
@@ -80,5 +80,69 @@ describe('one carcass sized in a metric shop and an imperial shop', () => {
     expect(input.slide).toEqual({ type: 'side-mount', series: 'metric' });
     const sized = sizeDrawerSchedule(drawerScheduleSchema.parse(input));
     expect(sized.ok && sized.box.depthMm).toBeCloseTo(500, 9);
+  });
+});
+
+describe('slide models in the schedule form', () => {
+  // An invented maker-style model: inside width = opening − 1-5/8″, sides up to ⅝″ (worked by hand below).
+  const MODEL = {
+    id: '7d0c4f1e-2a3b-4c5d-8e9f-0a1b2c3d4e5f',
+    kind: 'undermount' as const,
+    name: 'Tessel UM-58',
+    lengthsMm: [12, 15, 18, 21].map(inches),
+    widthRule: 'inside' as const,
+    widthDeductionMm: inches(1 + 5 / 8),
+    maxSideThicknessMm: inches(5 / 8),
+    bottomRecessMm: inches(1 / 2),
+    heightClearanceMm: inches(3 / 4),
+    rearClearanceMm: inches(5 / 8),
+  };
+  const text = { ...emptySchedule(IMPERIAL), label: 'Undermount bank', width: '15', height: '7', depth: '22', slideType: 'undermount' as const, sideThickness: '1/2' };
+
+  test('undermount slides need a model: without one the form says where models come from', () => {
+    const none = scheduleFormSchema('in', []).safeParse(text);
+    expect(none.success).toBe(false);
+    expect(none.error?.issues.map((i) => [i.path.join('.'), i.message])).toEqual([['slideModel', expect.stringContaining('the owner adds them in Shop settings')]]);
+    expect(scheduleFormSchema('in', [MODEL]).safeParse(text).error?.issues[0].message).toBe('Choose the slide model: its maker’s rule sizes the box.');
+  });
+
+  test('the chosen model’s rule goes into the schedule and sizes the box: 15″ − 1⅝″ = 13⅜″ inside, 14⅜″ outside, 21″ long (invented model, worked by hand)', () => {
+    const input = toScheduleInput(scheduleFormSchema('in', [MODEL]).parse({ ...text, slideModel: MODEL.id }), [{ ...MODEL, updatedAt: '2026-01-01' } as typeof MODEL]);
+    expect(input.slide).toEqual({ type: 'undermount', model: MODEL });
+    const sized = sizeDrawerSchedule(drawerScheduleSchema.parse(input));
+    if (!sized.ok) throw new Error(JSON.stringify(sized.errors));
+    expect(sized.box.widthMm).toBeCloseTo(inches(14 + 3 / 8), 9);
+    expect(sized.box.depthMm).toBeCloseTo(inches(21), 9);
+  });
+
+  test('a schedule whose model was deleted since still offers the rule it was saved with', () => {
+    const saved = drawerScheduleSchema.parse({ label: 'Old', quantity: 1, size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 560 }, slide: { type: 'undermount', model: MODEL } });
+    const choices = slideModelChoices([], saved);
+    expect(choices).toEqual([{ ...MODEL, retired: true }]);
+    expect(fromSchedule(saved, IMPERIAL).slideModel).toBe(MODEL.id);
+    const again = toScheduleInput(scheduleFormSchema('in', choices).parse(fromSchedule(saved, IMPERIAL)), choices);
+    expect(again.slide).toEqual({ type: 'undermount', model: MODEL });
+  });
+});
+
+describe('lipped fronts in the schedule form', () => {
+  test('a blank overlay takes the shop’s own default: ⅜″ in an inch shop, 10 mm in a metric one (common practice, no source)', () => {
+    const inch = toScheduleInput(scheduleFormSchema('in').parse({ ...emptySchedule(IMPERIAL), label: 'L', width: '15', height: '7', depth: '22', frontStyle: 'lipped' }), [], 'in');
+    expect(inch.front).toEqual({ style: 'lipped', fit: 'overlay', overlayMm: inches(3 / 8) });
+    const mm = toScheduleInput(scheduleFormSchema('mm').parse({ ...emptySchedule(METRIC), label: 'L', width: '564', height: '200', depth: '560', frontStyle: 'lipped' }), [], 'mm');
+    expect(mm.front).toEqual({ style: 'lipped', fit: 'overlay', overlayMm: 10 });
+  });
+
+  test('a reveal typed in is kept, and a saved lipped front reads back into the same fields', () => {
+    const text = { ...emptySchedule(IMPERIAL), label: 'L', width: '15', height: '7', depth: '22', frontStyle: 'lipped' as const, frontFit: 'reveal' as const, frontLipAmount: '1/8' };
+    const saved = drawerScheduleSchema.parse(toScheduleInput(scheduleFormSchema('in').parse(text), [], 'in'));
+    expect(saved.front).toEqual({ style: 'lipped', fit: 'reveal', revealMm: inches(1 / 8) });
+    expect(fromSchedule(saved, IMPERIAL)).toMatchObject({ frontStyle: 'lipped', frontFit: 'reveal', frontLipAmount: '1/8″' });
+  });
+
+  test('a lipped front saved before fits existed reads back as a lip past the box', () => {
+    const old = drawerScheduleSchema.parse({ label: 'Old', quantity: 1, size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) }, front: { style: 'lipped', lipMm: inches(1 / 2) } });
+    expect(old.front).toEqual({ style: 'lipped', fit: 'lip', lipMm: inches(1 / 2) });
+    expect(fromSchedule(old, IMPERIAL)).toMatchObject({ frontFit: 'lip', frontLipAmount: '1/2″' });
   });
 });

@@ -18,23 +18,28 @@ import { snapThickness, stockMatchWarning, thicknessChoices, type StockOffer } f
 import { parseLength } from '@/lib/units/parse-length';
 import { ThicknessPicker } from './thickness-picker';
 import { BoxPreview } from './box-preview';
+import { FacePreview } from './face-preview';
+import { widthRuleText } from '@/components/settings/slide-model-form-values';
 import { bottomMovementWarning } from './bottom-movement';
-import { emptySchedule, fieldOfPath, fromSchedule, JOINT_PARAM, scheduleFormSchema, THICKNESS_FIELDS, thicknessMaterial, toScheduleInput, type ScheduleFormText, type ScheduleFormValues, type ThicknessField } from './schedule-form-values';
+import { emptySchedule, fieldOfPath, fromSchedule, JOINT_PARAM, lipDefaultMm, scheduleFormSchema, slideModelChoices, THICKNESS_FIELDS, thicknessMaterial, toScheduleInput, type ScheduleFormText, type ScheduleFormValues, type SlideModelChoice, type ThicknessField } from './schedule-form-values';
 
 const SLIDE_LABELS = { 'side-mount': 'Side-mount slides', undermount: 'Undermount slides', 'wooden-runners': 'Wooden runners', none: 'No slides' } as const;
 const SERIES_LABELS = { metric: 'Metric: 250–650 mm long, 12.5 mm per side', imperial: 'Imperial: 12–28″ long, ½″ per side' } as const;
+const LIP_FIT_LABELS = { overlay: 'Overlay: laps past the opening', reveal: 'Reveal: stops inside the opening', lip: 'Lip past the box, given outright' } as const;
+const LIP_AMOUNT_LABELS = { overlay: 'Overlay each side', reveal: 'Reveal each side', lip: 'Lip past each side of the box' } as const;
 const ROLE_NAMES = { front: 'Front', back: 'Back', side: 'Side', bottom: 'Bottom', 'applied-front': 'Applied front' } as const;
 
 /**
  * A drawer schedule's form over lib/joinery: every change re-sizes the box at once (preview, parts, setup cards,
  * warnings); saving replaces the schedule's rows in the cut list.
  */
-export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: { jobId: string; units: ShopUnits; cards: SetupCard[]; offers: StockOffer[]; editing: { id: string; input: DrawerSchedule } | null; onDone: () => void }) {
+export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing, onDone }: { jobId: string; units: ShopUnits; cards: SetupCard[]; offers: StockOffer[]; slideModels: SlideModelChoice[]; editing: { id: string; input: DrawerSchedule } | null; onDone: () => void }) {
   const unit = shopLengthUnit(units);
-  const schema = useMemo(() => scheduleFormSchema(unit), [unit]);
+  const models = useMemo(() => slideModelChoices(slideModels, editing?.input), [slideModels, editing]);
+  const schema = useMemo(() => scheduleFormSchema(unit, models), [unit, models]);
   const form = useForm<ScheduleFormText, unknown, ScheduleFormValues>({
     resolver: zodResolver(schema),
-    defaultValues: editing ? fromSchedule(editing.input, units) : emptySchedule(units, offers),
+    defaultValues: editing ? fromSchedule(editing.input, units) : { ...emptySchedule(units, offers) },
     mode: 'onBlur',
   });
   const { register, handleSubmit, formState, setError, control, setValue } = form;
@@ -42,19 +47,27 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
   const qc = useQueryClient();
 
   // Live sizing on whatever parses so far.
+  const parsed = useMemo(() => schema.safeParse(values), [schema, values]);
+  const liveModelError = parsed.success ? undefined : parsed.error.issues.find((i) => i.path[0] === 'slideModel')?.message;
   const live = useMemo(() => {
-    const parsed = schema.safeParse(values);
     if (!parsed.success) return null;
-    const schedule = drawerScheduleSchema.safeParse(toScheduleInput(parsed.data));
+    const schedule = drawerScheduleSchema.safeParse(toScheduleInput(parsed.data, models, unit));
     if (!schedule.success) return null;
     return { schedule: schedule.data, sized: sizeDrawerSchedule(schedule.data, { lengthText: (mm) => formatLength(mm, units) }) };
-  }, [schema, values, units]);
+  }, [parsed, models, unit, units]);
+
+  // Undermount slides are sized by a model: switching to them picks the shop's first one, so the box shows at once.
+  useEffect(() => {
+    const ofKind = models.filter((m) => m.kind === values.slideType);
+    if (values.slideModel && !ofKind.some((m) => m.id === values.slideModel)) setValue('slideModel', '');
+    if (values.slideType === 'undermount' && !ofKind.some((m) => m.id === values.slideModel) && ofKind[0]) setValue('slideModel', ofKind[0].id);
+  }, [values.slideType, values.slideModel, models, setValue]);
   const liveErrors = new Map<string, string>();
   if (live && !live.sized.ok) for (const e of live.sized.errors) if (!liveErrors.has(fieldOfPath(e.path))) liveErrors.set(fieldOfPath(e.path), e.message);
 
   const save = useMutation({
     mutationFn: (v: ScheduleFormValues) =>
-      api(editing ? `/api/jobs/${jobId}/drawer-schedules/${editing.id}` : `/api/jobs/${jobId}/drawer-schedules`, { method: editing ? 'PUT' : 'POST', body: toScheduleInput(v) }),
+      api(editing ? `/api/jobs/${jobId}/drawer-schedules/${editing.id}` : `/api/jobs/${jobId}/drawer-schedules`, { method: editing ? 'PUT' : 'POST', body: toScheduleInput(v, models, unit) }),
     onSuccess: () => {
       qc.invalidateQueries({ queryKey: ['drawer-schedules', jobId] });
       qc.invalidateQueries({ queryKey: partsKey(jobId) });
@@ -119,15 +132,26 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
   }, [values.sidesMaterial, values.frontMaterial, values.bottomMaterial]);
 
   const len = (mm: number) => formatLength(mm, units);
+  const kindModels = models.filter((m) => m.kind === values.slideType);
+  const sideMountModels = models.filter((m) => m.kind === 'side-mount');
+  const chosenModel = kindModels.find((m) => m.id === values.slideModel);
+  const modelMessage = formState.errors.slideModel?.message ?? liveErrors.get('slideModel') ?? liveModelError;
   const param = JOINT_PARAM[values.jointMethod ?? 'lock-rabbet'];
   const front = parseLength(String(values.frontThickness ?? ''), { unit });
   const paramDefault = param?.byFront && front.ok ? param.byFront.mm(front.mm) : param?.defaultMm;
   const paramHint = param && paramDefault !== undefined
     ? `Blank: ${len(paramDefault)}${param.byFront && front.ok ? ` for a ${exactLengthText(front.mm, units)} front (${param.byFront.rule})` : ''}.`
     : undefined;
-  const depthHint = values.slideType === 'side-mount'
-    ? `Box depth: the longest ${values.slideSeries ?? 'imperial'} slide that fits.`
-    : values.slideType === 'undermount' ? 'Box depth: the longest slide that fits.' : `Box depth: the opening less ${len(DRAWER_DEFAULTS.backClearance)} behind.`;
+  const depthHint = chosenModel
+    ? `Box depth: the longest ${chosenModel.name} that fits ${len(chosenModel.rearClearanceMm)} from the back; the box is as long as its slide.`
+    : values.slideType === 'side-mount'
+      ? `Box depth: the longest ${values.slideSeries ?? 'imperial'} slide that fits.`
+      : values.slideType === 'undermount' ? 'Box depth: the longest slide of the model that fits.' : `Box depth: the opening less ${len(DRAWER_DEFAULTS.backClearance)} behind.`;
+  const fit = values.frontFit ?? 'overlay';
+  const lipPlaceholder = fit === 'lip' ? undefined : len(lipDefaultMm(fit, unit));
+  const lipHint = fit === 'overlay'
+    ? `Blank: ${len(lipDefaultMm('overlay', unit))} past the opening each side, as a classic lipped drawer laps its face frame.`
+    : fit === 'reveal' ? `Blank: ${len(lipDefaultMm('reveal', unit))} inside the opening each side, so the front clears it.` : 'For a box given by its size: how far the front runs past each side.';
   const sized = live?.sized.ok ? live.sized : null;
   const bottom = sized?.parts.find((p) => p.role === 'bottom');
   const movement = live && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
@@ -144,13 +168,31 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
           {field('quantity', 'Boxes')}
           {select('sizeFrom', 'Size given is', { opening: 'the opening in the carcass', box: 'the box itself' })}
           {select('slideType', 'Slides', SLIDE_LABELS)}
-          {values.slideType === 'side-mount' && select('slideSeries', 'Slide series', SERIES_LABELS)}
+          {(values.slideType === 'undermount' || (values.slideType === 'side-mount' && sideMountModels.length > 0)) && (
+            <div>
+              <label htmlFor="ds-slideModel" className="field-label">Slide model</label>
+              <select id="ds-slideModel" className="field-input" aria-invalid={modelMessage ? true : undefined} {...register('slideModel')}>
+                {values.slideType === 'side-mount' && <option value="">Standard slides of a series</option>}
+                {values.slideType === 'undermount' && kindModels.length === 0 && <option value="">No slide models yet</option>}
+                {kindModels.map((m) => <option key={m.id} value={m.id}>{m.retired ? `${m.name} (as saved; deleted from Shop settings)` : m.name}</option>)}
+              </select>
+              {modelMessage ? <p className="field-error">{modelMessage}</p> : chosenModel ? <p className="mt-1 text-xs text-graphite-mute">{widthRuleText(chosenModel, units)}; height − {len(chosenModel.heightClearanceMm)}; {chosenModel.maxSideThicknessMm === null ? 'any sides' : `sides up to ${exactLengthText(chosenModel.maxSideThicknessMm, units)}`}.</p> : null}
+              {values.slideType === 'undermount' && kindModels.length === 0 && <p className="mt-1 text-xs"><Link href="/settings#slide-models">Shop settings → Drawer slides</Link></p>}
+            </div>
+          )}
+          {values.slideType === 'side-mount' && !chosenModel && select('slideSeries', 'Slide series', SERIES_LABELS)}
           {field('width', values.sizeFrom === 'box' ? 'Box width' : 'Opening width')}
           {field('height', values.sizeFrom === 'box' ? 'Box height' : 'Opening height')}
           {field('depth', values.sizeFrom === 'box' ? 'Box depth' : 'Opening depth', { hint: values.sizeFrom === 'opening' ? depthHint : undefined })}
           {select('jointMethod', 'Joint', Object.fromEntries(JOINT_METHODS.map((m) => [m, JOINT_NAMES[m]])))}
           {param ? field('jointParam', param.label, { placeholder: len(paramDefault ?? param.defaultMm), hint: paramHint }) : <div />}
-          {select('frontStyle', 'Box front', { flush: 'Flush (the box front is the face)', lipped: 'Lipped', applied: 'Applied front (overlay)' })}
+          {select('frontStyle', 'Box front', { flush: 'Flush (the box front is the face)', lipped: 'Lipped (wider than the box, hides the slides)', applied: 'Applied front (overlay)' })}
+          {values.frontStyle === 'lipped' && (
+            <>
+              {select('frontFit', 'Lipped front meets the opening', LIP_FIT_LABELS)}
+              {field('frontLipAmount', LIP_AMOUNT_LABELS[values.frontFit ?? 'overlay'], { placeholder: lipPlaceholder, hint: lipHint })}
+            </>
+          )}
           {field('sidesMaterial', 'Box material', { list: 'ds-materials' })}
           {field('frontMaterial', 'Front and back material', { placeholder: 'same as box', list: 'ds-materials' })}
           {thickness('frontThickness', 'Front and back thickness')}
@@ -163,7 +205,7 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
         </div>
 
         <div className="space-y-4" aria-live="polite">
-          {!live && <p className="text-sm text-graphite-mute">Fill in the size to see the box and its parts.</p>}
+          {!live && <p className="text-sm text-graphite-mute">{liveModelError && values.width && values.height && values.depth ? 'Choose the slide model to see the box and its parts.' : 'Fill in the size to see the box and its parts.'}</p>}
           {live && !live.sized.ok && (
             <div role="alert" className="rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">
               <p className="font-medium">This box cannot be built as set:</p>
@@ -173,6 +215,7 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
           {sized && live && (
             <>
               <BoxPreview box={sized.box} t={{ front: live.schedule.thickness.frontMm, back: live.schedule.thickness.backMm ?? live.schedule.thickness.frontMm, side: live.schedule.thickness.sideMm }} units={units} />
+              {(sized.face.lipped || sized.face.role === 'applied-front') && <FacePreview face={sized.face} box={sized.box} units={units} />}
               <table className="data-table" aria-label="Parts of this schedule">
                 <thead>
                   <tr><th>Part</th><th className="num">Qty</th><th className="num">Length</th><th className="num">Width</th><th className="num">Thick</th><th>Material</th><th className="num">Joint allow.</th></tr>
@@ -191,6 +234,12 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
                   ))}
                 </tbody>
               </table>
+              {sized.warnings.length > 0 && (
+                <div role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">
+                  <p className="font-medium">Check the front’s fit:</p>
+                  <ul className="list-disc pl-5">{sized.warnings.map((w) => <li key={w}>{w}</li>)}</ul>
+                </div>
+              )}
               {sized.notes.length > 0 && <ul className="list-disc pl-5 text-sm text-graphite-soft">{sized.notes.map((n) => <li key={n}>{n}</li>)}</ul>}
               {stockWarnings.length > 0 && (
                 <div role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">

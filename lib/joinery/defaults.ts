@@ -33,8 +33,6 @@ export const DRAWER_DEFAULTS = {
   dovetailLap: inches(3 / 16),
   boxJointFinger: inches(1 / 4), // [CP]
 
-  // Lipped box front: overhangs each side to cover the slide [CP].
-  frontLip: inches(1 / 2),
   // Applied fronts: frameless reveal 1.5 mm per side, 3 mm between fronts [CP]; full overlay on 18 mm carcass
   // sides therefore laps 18 − 1.5 = 16.5 mm past the opening [derived].
   appliedFrontThickness: inches(3 / 4),
@@ -52,6 +50,15 @@ export const DRAWER_DEFAULTS = {
   bottomMaterial: 'plywood',
   appliedFrontMaterial: 'drawer-front stock',
 } as const satisfies Record<string, Mm | string>;
+
+/**
+ * A lipped box front's fit on the opening when none is given: an overlay of ⅜″ each side, as the classic lipped drawer
+ * laps its face frame [CP] (10 mm in a metric shop), or a reveal of 1/16″ (1.5 mm metric, the frameless reveal) [CP].
+ */
+export const LIPPED_FRONT_DEFAULTS = {
+  imperial: { overlayMm: inches(3 / 8), revealMm: inches(1 / 16) },
+  metric: { overlayMm: 10, revealMm: 1.5 },
+} as const satisfies Record<'imperial' | 'metric', { overlayMm: Mm; revealMm: Mm }>;
 
 /** Thinnest stock common pocket-screw jigs are set for [CP, from memory]. */
 export const POCKET_SCREW_MIN_STOCK: Mm = inches(1 / 2);

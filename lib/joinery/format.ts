@@ -2,7 +2,8 @@ import type { Mm } from '@/lib/units/length';
 
 export type LengthText = (mm: Mm) => string;
 
-const millimetres: LengthText = (mm) => `${Math.round(mm * 10) / 10} mm`;
+// To 0.1 mm, half up, after dropping float crumbs (31.75 is carried as 31.749999…, and must read 31.8).
+const millimetres: LengthText = (mm) => `${Math.round(Number((mm * 10).toPrecision(12))) / 10} mm`;
 let current: LengthText = millimetres;
 
 /**

@@ -7,11 +7,14 @@ import { mmText } from '@/lib/joinery/format';
 import { JOINT_NAMES, jointCorners, jointErrors, jointMachining, type BoxThickness, type JointCorners } from '@/lib/joinery/joint-rules';
 import { requiredSetupCards } from '@/lib/joinery/setup-cards';
 import { SLIDE_SIDE_TOLERANCE_MM } from '@/shared/schemas/slide-model';
-import type { BoxSize, DrawerPart, FieldError, SetupCardKey, SizedBox } from '@/lib/joinery/types';
+import type { BoxSize, DrawerFace, DrawerPart, FieldError, Result, SetupCardKey, SizedBox } from '@/lib/joinery/types';
 
 export type SizeDrawerScheduleResult =
-  | { ok: true; parts: DrawerPart[]; box: SizedBox; setupCardKeys: SetupCardKey[]; notes: string[] }
+  | { ok: true; parts: DrawerPart[]; box: SizedBox; face: DrawerFace; setupCardKeys: SetupCardKey[]; notes: string[]; warnings: string[] }
   | { ok: false; errors: FieldError[] };
+
+/** Below this gap on each side a front inside its opening rubs or binds: about 1.5 mm is usual [CP]. */
+export const MIN_FRONT_REVEAL_MM = 1;
 
 /**
  * Turns a drawer schedule into every part of its boxes, sized exactly, or into one error per field that makes the
@@ -49,9 +52,11 @@ function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
     wallHeightMm: size.heightMm - (s.bottom.mount === 'applied' ? s.bottom.thicknessMm : 0),
   };
   const corners = jointCorners(s.joint, t);
-  const lipMm = s.front.style === 'lipped' ? s.front.lipMm : 0;
+  const lip = lipPastBox(s, box);
+  const lipMm = lip.ok ? lip.lipMm : 0;
 
   const errors = [
+    ...(lip.ok ? [] : lip.errors),
     ...slideModelErrors(s, t),
     ...boxErrors(box, t),
     ...jointErrors(s.joint, t, box.wallHeightMm),
@@ -96,8 +101,46 @@ function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
   ];
   const applied = appliedFrontPart(s);
   if (applied) parts.push(applied);
+  const face = drawerFace(s, box, applied ?? parts[0]);
 
-  return { ok: true, parts, box, setupCardKeys: requiredSetupCards(s), notes: [...notes, ...scheduleNotes(s, t)] };
+  return { ok: true, parts, box, face, setupCardKeys: requiredSetupCards(s), notes: [...notes, ...scheduleNotes(s, t)], warnings: faceWarnings(face) };
+}
+
+/**
+ * How far a lipped front runs past each side of the box: what its overlay or reveal on the opening leaves after the
+ * slides' gap, or the lip given outright. Flush and applied fronts have none.
+ */
+function lipPastBox(s: DrawerSchedule, box: SizedBox): Result<{ lipMm: Mm }> {
+  const f = s.front;
+  if (f.style !== 'lipped') return { ok: true, lipMm: 0 };
+  if (f.fit === 'lip') return { ok: true, lipMm: f.lipMm! };
+  if (s.size.from !== 'opening')
+    return { ok: false, errors: [{ path: 'front.fit', message: 'A box given by its own size has no opening to lap or stop short of: give the lip past each side of the box' }] };
+  const frontWidth = f.fit === 'overlay' ? s.size.widthMm + 2 * f.overlayMm! : s.size.widthMm - 2 * f.revealMm!;
+  const lipMm = (frontWidth - box.widthMm) / 2;
+  if (lipMm <= 0)
+    return {
+      ok: false,
+      errors: [{ path: 'front.revealMm', message: `With ${mmText(f.revealMm!)} reveals the front (${mmText(frontWidth)}) is no wider than the box (${mmText(box.widthMm)}), so it hides no slide: use a smaller reveal, or a flush front` }],
+    };
+  return { ok: true, lipMm };
+}
+
+/** The drawer's face (its box front, or the applied front) against the opening it closes, when there is one. */
+function drawerFace(s: DrawerSchedule, box: SizedBox, facePart: DrawerPart): DrawerFace {
+  const opening = s.size.from === 'opening' ? { widthMm: s.size.widthMm, heightMm: s.size.heightMm } : null;
+  const face = { role: facePart.role as DrawerFace['role'], widthMm: facePart.lengthMm, heightMm: facePart.role === 'applied-front' ? facePart.widthMm : box.heightMm, opening };
+  return { ...face, sideMarginMm: opening ? (opening.widthMm - face.widthMm) / 2 : null, lipped: s.front.style === 'lipped' };
+}
+
+/** A front meant to sit inside its opening with less than a working gap each side will rub or bind. */
+function faceWarnings(face: DrawerFace): string[] {
+  if (!face.opening || face.sideMarginMm === null || face.sideMarginMm < -1e-9 || face.sideMarginMm >= MIN_FRONT_REVEAL_MM - 1e-9) return [];
+  if (!face.lipped && face.role === 'front') return [];
+  const gap = Math.max(0, face.sideMarginMm);
+  return [
+    `The ${face.role === 'applied-front' ? 'applied front' : 'lipped front'} (${mmText(face.widthMm)}) leaves ${gap === 0 ? 'no gap' : `only ${mmText(gap)}`} each side of the ${mmText(face.opening.widthMm)} opening: it will rub or bind. Fronts inside an opening want about 1.5 mm each side; or lap the opening with an overlay.`,
+  ];
 }
 
 function partBase(s: DrawerSchedule, role: DrawerPart['role'], quantityPerBox: number) {

@@ -57,3 +57,16 @@ export interface SetupCardKey {
   joint: JointMethod;
   stockThicknessMm: Mm;
 }
+
+/** The drawer's face against the opening it closes: what the preview draws and the fit warnings read. */
+export interface DrawerFace {
+  /** The box front when it is the face (flush or lipped), else the applied front. */
+  role: 'front' | 'applied-front';
+  widthMm: Mm;
+  heightMm: Mm;
+  /** Null when the schedule gives the box size instead of the opening. */
+  opening: { widthMm: Mm; heightMm: Mm } | null;
+  /** (opening − face) / 2: positive is a reveal inside the opening, negative an overlay past it. */
+  sideMarginMm: Mm | null;
+  lipped: boolean;
+}

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DRAWER_DEFAULTS as D, lockRabbetFaceLeft, SLIDE_SERIES } from '@/lib/joinery/defaults';
+import { DRAWER_DEFAULTS as D, LIPPED_FRONT_DEFAULTS, lockRabbetFaceLeft, SLIDE_SERIES } from '@/lib/joinery/defaults';
 import { slideModelRuleSchema } from './slide-model';
 
 /**
@@ -138,9 +138,24 @@ export const drawerSizeSchema = z.discriminatedUnion('from', [
   }),
 ]);
 
+export const LIP_FITS = ['overlay', 'reveal', 'lip'] as const;
+export type LipFit = (typeof LIP_FITS)[number];
+
 export const frontStyleSchema = z.discriminatedUnion('style', [
   z.object({ style: z.literal('flush') }),
-  z.object({ style: z.literal('lipped'), lipMm: positiveMm('Lip').default(D.frontLip) }),
+  z.object({
+    style: z.literal('lipped'),
+    /**
+     * How the lipped front meets the opening: `overlay` laps past it by `overlayMm` on each side (⅜″ by default, the
+     * classic lipped drawer), `reveal` stops `revealMm` inside it on each side (1/16″ by default); `lip` gives the lip past each side of
+     * the box outright (a box-size schedule, or one saved before fits existed). Left out: `lip` when `lipMm` is given,
+     * else `overlay`.
+     */
+    fit: z.enum(LIP_FITS).optional(),
+    overlayMm: nonNegativeMm('Overlay').optional(),
+    revealMm: nonNegativeMm('Reveal').optional(),
+    lipMm: positiveMm('Lip').optional(),
+  }),
   z.object({
     style: z.literal('applied'),
     fit: z.enum(['overlay', 'inset']).default('overlay'),
@@ -222,10 +237,19 @@ const drawerScheduleShape = z.object({
 type ParsedShape = z.output<typeof drawerScheduleShape>;
 type Filled<J> = J extends { method: 'lock-rabbet' } ? J & { faceLeftMm: number } : J;
 type FilledSlide<S> = S extends { type: 'side-mount' } ? S & { sideClearanceMm: number; heightClearanceMm: number } : S;
+type FilledFront<F> = F extends { style: 'lipped' } ? F & { fit: LipFit } : F;
 type FilledBottom<B> = B extends { mount: 'groove'; groove: infer G } ? Omit<B, 'groove'> & { groove: G & { heightMm: number } } : B;
 type FilledSize<Z> = Z extends { from: 'opening'; depthRule?: infer R }
   ? Omit<Z, 'depthRule'> & { depthRule?: R extends { rule: 'longest-standard-slide' } ? R & { series: SlideSeries } : R }
   : Z;
+
+/** A lipped front's fit, and the one amount it uses, filled. */
+function fillLip(f: Extract<ParsedShape['front'], { style: 'lipped' }>) {
+  const fit: LipFit = f.fit ?? (f.lipMm !== undefined ? 'lip' : 'overlay');
+  if (fit === 'overlay') return { ...f, fit, overlayMm: f.overlayMm ?? LIPPED_FRONT_DEFAULTS.imperial.overlayMm };
+  if (fit === 'reveal') return { ...f, fit, revealMm: f.revealMm ?? LIPPED_FRONT_DEFAULTS.imperial.revealMm };
+  return { ...f, fit };
+}
 
 /**
  * Defaults that depend on another field: a lock rabbet's face left follows the front's thickness; a side-mount
@@ -252,8 +276,10 @@ function fillDependentDefaults(s: ParsedShape) {
     s.bottom.mount === 'groove' && s.bottom.groove.heightMm === undefined
       ? { ...s.bottom, groove: { ...s.bottom.groove, heightMm: Math.max(D.grooveHeight, recess) } }
       : s.bottom;
+  const front = s.front.style === 'lipped' ? fillLip(s.front) : s.front;
   return {
     ...s,
+    front: front as FilledFront<ParsedShape['front']>,
     bottom: bottom as FilledBottom<ParsedShape['bottom']>,
     joint: joint as Filled<ParsedShape['joint']>,
     slide: slide as FilledSlide<ParsedShape['slide']>,
@@ -263,6 +289,8 @@ function fillDependentDefaults(s: ParsedShape) {
 
 export const drawerScheduleSchema = drawerScheduleShape
   .superRefine((s, ctx) => {
+    if (s.front.style === 'lipped' && (s.front.fit ?? (s.front.lipMm !== undefined ? 'lip' : 'overlay')) === 'lip' && s.front.lipMm === undefined)
+      ctx.addIssue({ code: 'custom', path: ['front', 'lipMm'], message: 'Give the lip past each side of the box, or choose an overlay or a reveal.' });
     const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
     if (model && model.kind !== s.slide.type)
       ctx.addIssue({ code: 'custom', path: ['slide', 'model', 'kind'], message: `${model.name} is a ${model.kind} slide, not ${s.slide.type}: choose it with ${model.kind} slides.` });

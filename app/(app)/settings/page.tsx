@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { SettingsForm } from '@/components/settings/settings-form';
+import { SlideModelsSection } from '@/components/settings/slide-models-section';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/session';
 
@@ -9,8 +10,9 @@ export default async function SettingsPage() {
   await requirePageUser('settings:write');
   return (
     <>
-      <PageHeader title="Shop settings" lead="Units everyone sees, and the cutting defaults every new nest starts from." />
+      <PageHeader title="Shop settings" lead="Units everyone sees, the cutting defaults every new nest starts from, and the drawer slides boxes are sized on." />
       <SettingsForm />
+      <SlideModelsSection />
     </>
   );
 }
