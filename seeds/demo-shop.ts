@@ -29,7 +29,7 @@ export const DEMO_PEOPLE = [
 export const DEMO_SLIDE_MODELS: SlideModelInput[] = [
   {
     kind: 'undermount',
-    name: 'Tessel UM-58 full extension',
+    name: 'Halbrook UM-58 full extension',
     lengthsMm: [12, 15, 18, 21].map(inches),
     widthRule: 'inside',
     widthDeductionMm: inches(1 + 5 / 8),
@@ -40,7 +40,7 @@ export const DEMO_SLIDE_MODELS: SlideModelInput[] = [
   },
   {
     kind: 'undermount',
-    name: 'Halbrook H-16 soft close',
+    name: 'Tessel T-16 soft close',
     lengthsMm: [250, 300, 350, 400, 450, 500, 550],
     widthRule: 'outside',
     widthDeductionMm: 10,

@@ -1,4 +1,5 @@
 import type { DrawerFace, SizedBox } from '@/lib/joinery/types';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { formatLength } from '@/lib/units/format-length';
 import type { ShopUnits } from '@/shared/schemas/units';
 
@@ -24,8 +25,8 @@ export function FacePreview({ face, box, units }: { face: DrawerFace; box: Sized
       : Math.abs(margin) < 1e-6
         ? 'Exactly the opening’s width: no gap either side.'
         : margin < 0
-          ? `Laps the opening ${len(-margin)} each side.`
-          : `Stops ${len(margin)} inside the opening each side.`;
+          ? `Laps the opening ${exactLengthText(-margin, units)} each side.`
+          : `Stops ${exactLengthText(margin, units)} inside the opening each side.`;
   const name = face.role === 'applied-front' ? 'Applied front' : face.lipped ? 'Lipped front' : 'Box front';
 
   return (

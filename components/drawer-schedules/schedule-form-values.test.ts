@@ -88,7 +88,7 @@ describe('slide models in the schedule form', () => {
   const MODEL = {
     id: '7d0c4f1e-2a3b-4c5d-8e9f-0a1b2c3d4e5f',
     kind: 'undermount' as const,
-    name: 'Tessel UM-58',
+    name: 'Halbrook UM-58',
     lengthsMm: [12, 15, 18, 21].map(inches),
     widthRule: 'inside' as const,
     widthDeductionMm: inches(1 + 5 / 8),

@@ -24,7 +24,8 @@ import { bottomMovementWarning } from './bottom-movement';
 import { emptySchedule, fieldOfPath, fromSchedule, JOINT_PARAM, lipDefaultMm, scheduleFormSchema, slideModelChoices, THICKNESS_FIELDS, thicknessMaterial, toScheduleInput, type ScheduleFormText, type ScheduleFormValues, type SlideModelChoice, type ThicknessField } from './schedule-form-values';
 
 const SLIDE_LABELS = { 'side-mount': 'Side-mount slides', undermount: 'Undermount slides', 'wooden-runners': 'Wooden runners', none: 'No slides' } as const;
-const SERIES_LABELS = { metric: 'Metric: 250–650 mm long, 12.5 mm per side', imperial: 'Imperial: 12–28″ long, ½″ per side' } as const;
+const SERIES_LABELS = { metric: 'Metric (250–650 mm)', imperial: 'Imperial (12–28″)' } as const;
+const SERIES_HINTS = { metric: '12.5 mm each side and above the box.', imperial: '½″ each side and above the box.' } as const;
 const LIP_FIT_LABELS = { overlay: 'Overlay: laps past the opening', reveal: 'Reveal: stops inside the opening', lip: 'Lip past the box, given outright' } as const;
 const LIP_AMOUNT_LABELS = { overlay: 'Overlay each side', reveal: 'Reveal each side', lip: 'Lip past each side of the box' } as const;
 const ROLE_NAMES = { front: 'Front', back: 'Back', side: 'Side', bottom: 'Bottom', 'applied-front': 'Applied front' } as const;
@@ -53,7 +54,7 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
     if (!parsed.success) return null;
     const schedule = drawerScheduleSchema.safeParse(toScheduleInput(parsed.data, models, unit));
     if (!schedule.success) return null;
-    return { schedule: schedule.data, sized: sizeDrawerSchedule(schedule.data, { lengthText: (mm) => formatLength(mm, units) }) };
+    return { schedule: schedule.data, sized: sizeDrawerSchedule(schedule.data, { lengthText: (mm) => formatLength(mm, units), exactText: (mm) => exactLengthText(mm, units) }) };
   }, [parsed, models, unit, units]);
 
   // Undermount slides are sized by a model: switching to them picks the shop's first one, so the box shows at once.
@@ -88,15 +89,18 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
       </div>
     );
   };
-  const select = (name: keyof ScheduleFormText, label: string, options: Record<string, string>) => (
-    <div>
-      <label htmlFor={`ds-${name}`} className="field-label">{label}</label>
-      <select id={`ds-${name}`} className="field-input" {...register(name)}>
-        {Object.entries(options).map(([v, l]) => <option key={v} value={v}>{l}</option>)}
-      </select>
-      {(formState.errors[name]?.message ?? liveErrors.get(name)) && <p className="field-error">{formState.errors[name]?.message ?? liveErrors.get(name)}</p>}
-    </div>
-  );
+  const select = (name: keyof ScheduleFormText, label: string, options: Record<string, string>, hint?: string) => {
+    const message = formState.errors[name]?.message ?? liveErrors.get(name);
+    return (
+      <div>
+        <label htmlFor={`ds-${name}`} className="field-label">{label}</label>
+        <select id={`ds-${name}`} className="field-input" {...register(name)}>
+          {Object.entries(options).map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+        </select>
+        {message ? <p className="field-error">{message}</p> : hint ? <p className="mt-1 text-xs text-graphite-mute">{hint}</p> : null}
+      </div>
+    );
+  };
   // Each thickness is picked from the stock room's sheets and boards of its part's material, so the joints are sized
   // on the stock that will be cut (12 mm Baltic birch, not ½″).
   const materialOf = (name: ThicknessField, v: Partial<ScheduleFormText> = values) => thicknessMaterial(name, v);
@@ -143,15 +147,16 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
     ? `Blank: ${len(paramDefault)}${param.byFront && front.ok ? ` for a ${exactLengthText(front.mm, units)} front (${param.byFront.rule})` : ''}.`
     : undefined;
   const depthHint = chosenModel
-    ? `Box depth: the longest ${chosenModel.name} that fits ${len(chosenModel.rearClearanceMm)} from the back; the box is as long as its slide.`
+    ? `Box depth: the longest ${chosenModel.name} that fits ${exactLengthText(chosenModel.rearClearanceMm, units)} from the back; the box is as long as its slide.`
     : values.slideType === 'side-mount'
       ? `Box depth: the longest ${values.slideSeries ?? 'imperial'} slide that fits.`
       : values.slideType === 'undermount' ? 'Box depth: the longest slide of the model that fits.' : `Box depth: the opening less ${len(DRAWER_DEFAULTS.backClearance)} behind.`;
   const fit = values.frontFit ?? 'overlay';
-  const lipPlaceholder = fit === 'lip' ? undefined : len(lipDefaultMm(fit, unit));
+  const exact = (mm: number) => exactLengthText(mm, units);
+  const lipPlaceholder = fit === 'lip' ? undefined : exact(lipDefaultMm(fit, unit));
   const lipHint = fit === 'overlay'
-    ? `Blank: ${len(lipDefaultMm('overlay', unit))} past the opening each side, as a classic lipped drawer laps its face frame.`
-    : fit === 'reveal' ? `Blank: ${len(lipDefaultMm('reveal', unit))} inside the opening each side, so the front clears it.` : 'For a box given by its size: how far the front runs past each side.';
+    ? `Blank: ${exact(lipDefaultMm('overlay', unit))} past the opening each side, as a classic lipped drawer laps its face frame.`
+    : fit === 'reveal' ? `Blank: ${exact(lipDefaultMm('reveal', unit))} inside the opening each side, so the front clears it.` : 'For a box given by its size: how far the front runs past each side.';
   const sized = live?.sized.ok ? live.sized : null;
   const bottom = sized?.parts.find((p) => p.role === 'bottom');
   const movement = live && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
@@ -176,17 +181,17 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
                 {values.slideType === 'undermount' && kindModels.length === 0 && <option value="">No slide models yet</option>}
                 {kindModels.map((m) => <option key={m.id} value={m.id}>{m.retired ? `${m.name} (as saved; deleted from Shop settings)` : m.name}</option>)}
               </select>
-              {modelMessage ? <p className="field-error">{modelMessage}</p> : chosenModel ? <p className="mt-1 text-xs text-graphite-mute">{widthRuleText(chosenModel, units)}; height − {len(chosenModel.heightClearanceMm)}; {chosenModel.maxSideThicknessMm === null ? 'any sides' : `sides up to ${exactLengthText(chosenModel.maxSideThicknessMm, units)}`}.</p> : null}
+              {modelMessage ? <p className="field-error">{modelMessage}</p> : chosenModel ? <p className="mt-1 text-xs text-graphite-mute">{widthRuleText(chosenModel, units, exact)}; height − {exact(chosenModel.heightClearanceMm)}; {chosenModel.maxSideThicknessMm === null ? 'any sides' : `sides up to ${exact(chosenModel.maxSideThicknessMm)}`}.</p> : null}
               {values.slideType === 'undermount' && kindModels.length === 0 && <p className="mt-1 text-xs"><Link href="/settings#slide-models">Shop settings → Drawer slides</Link></p>}
             </div>
           )}
-          {values.slideType === 'side-mount' && !chosenModel && select('slideSeries', 'Slide series', SERIES_LABELS)}
+          {values.slideType === 'side-mount' && !chosenModel && select('slideSeries', 'Slide series', SERIES_LABELS, SERIES_HINTS[values.slideSeries ?? 'imperial'])}
           {field('width', values.sizeFrom === 'box' ? 'Box width' : 'Opening width')}
           {field('height', values.sizeFrom === 'box' ? 'Box height' : 'Opening height')}
           {field('depth', values.sizeFrom === 'box' ? 'Box depth' : 'Opening depth', { hint: values.sizeFrom === 'opening' ? depthHint : undefined })}
           {select('jointMethod', 'Joint', Object.fromEntries(JOINT_METHODS.map((m) => [m, JOINT_NAMES[m]])))}
           {param ? field('jointParam', param.label, { placeholder: len(paramDefault ?? param.defaultMm), hint: paramHint }) : <div />}
-          {select('frontStyle', 'Box front', { flush: 'Flush (the box front is the face)', lipped: 'Lipped (wider than the box, hides the slides)', applied: 'Applied front (overlay)' })}
+          {select('frontStyle', 'Box front', { flush: 'Flush (the box front is the face)', lipped: 'Lipped (hides the slides)', applied: 'Applied front (overlay)' })}
           {values.frontStyle === 'lipped' && (
             <>
               {select('frontFit', 'Lipped front meets the opening', LIP_FIT_LABELS)}

@@ -5,7 +5,7 @@ import { blankSlideModelText, readSlideModelForm, slideModelText, widthRuleText 
 const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
 const METRIC = { system: 'metric', precision: 1, feet: false } as const;
 
-const text = { ...blankSlideModelText(), name: 'Tessel UM-58', lengths: '12, 15, 18, 21', widthDeduction: '1 5/8', maxSideThickness: '5/8', bottomRecess: '1/2', heightClearance: '3/4', rearClearance: '5/8' };
+const text = { ...blankSlideModelText(), name: 'Halbrook UM-58', lengths: '12, 15, 18, 21', widthDeduction: '1 5/8', maxSideThickness: '5/8', bottomRecess: '1/2', heightClearance: '3/4', rearClearance: '5/8' };
 
 describe('the slide model form', () => {
   test('reads an inch shop’s model: lengths in inches, shortest first, fractions exact', () => {

@@ -100,8 +100,8 @@ export function readSlideModelForm(text: SlideModelFormText, units: ShopUnits): 
 }
 
 /** The model's rule in one line, in the shop's unit: "Inside width = opening − 1-5/8″". */
-export function widthRuleText(m: Pick<SlideModel, 'widthRule' | 'widthDeductionMm'>, units: ShopUnits): string {
-  return `${m.widthRule === 'inside' ? 'Inside width' : 'Box width'} = opening − ${formatLength(m.widthDeductionMm, units)}`;
+export function widthRuleText(m: Pick<SlideModel, 'widthRule' | 'widthDeductionMm'>, units: ShopUnits, len: (mm: number) => string = (mm) => formatLength(mm, units)): string {
+  return `${m.widthRule === 'inside' ? 'Inside width' : 'Box width'} = opening − ${len(m.widthDeductionMm)}`;
 }
 
 export { SLIDE_MODEL_KINDS, SLIDE_WIDTH_RULES };

@@ -48,14 +48,12 @@ export function SlideModelsSection() {
         <ul className="grid gap-3" aria-label="Slide models">
           {models.data?.map((m) => (
             <li key={m.id} className="card p-4">
-              <div className="flex flex-wrap items-start gap-2">
-                <div className="mr-auto min-w-0">
-                  <p className="font-semibold">{m.name} <span className="text-xs font-normal text-graphite-mute">· {KIND_LABELS[m.kind]}</span></p>
-                  <ModelFacts model={m} units={units} />
-                </div>
+              <div className="flex items-start gap-2">
+                <p className="mr-auto min-w-0 font-semibold">{m.name} <span className="text-xs font-normal text-graphite-mute">· {KIND_LABELS[m.kind]}</span></p>
                 <button type="button" className="btn-quiet" onClick={() => setEditing(m)} aria-label={`Edit ${m.name}`}>Edit</button>
                 <button type="button" className="btn-danger" disabled={remove.isPending} aria-label={`Delete ${m.name}`} onClick={() => { if (window.confirm(`Delete the slide model “${m.name}”? Schedules already sized on it keep its rule.`)) remove.mutate(m.id); }}>Delete</button>
               </div>
+              <ModelFacts model={m} units={units} />
             </li>
           ))}
         </ul>
@@ -64,19 +62,19 @@ export function SlideModelsSection() {
   );
 }
 
-/** What a model does to a box, in the shop's unit. */
+/** What a model does to a box, in the shop's unit where that is exact, else as the maker gave it (250 mm in an inch shop). */
 export function ModelFacts({ model: m, units }: { model: SlideModel; units: ShopUnits }) {
-  const len = (mm: number) => formatLength(mm, units);
+  const len = (mm: number) => (mm === 0 ? formatLength(0, units) : exactLengthText(mm, units));
   return (
     <dl className="mt-1 grid grid-cols-[auto_minmax(0,1fr)] gap-x-4 gap-y-0.5 text-sm">
       <dt className="text-graphite-mute">Width</dt>
-      <dd>{widthRuleText(m, units)}</dd>
+      <dd>{widthRuleText(m, units, len)}</dd>
       <dt className="text-graphite-mute">Height</dt>
       <dd>Box = opening − {len(m.heightClearanceMm)}</dd>
       <dt className="text-graphite-mute">Lengths</dt>
       <dd>{m.lengthsMm.map(len).join(', ')} · {len(m.rearClearanceMm)} behind</dd>
       <dt className="text-graphite-mute">Sides</dt>
-      <dd>{m.maxSideThicknessMm === null ? 'any thickness' : `up to ${exactLengthText(m.maxSideThicknessMm, units)}`}{m.kind === 'undermount' ? ` · bottom at least ${len(m.bottomRecessMm)} up` : ''}</dd>
+      <dd>{m.maxSideThicknessMm === null ? 'any thickness' : `up to ${len(m.maxSideThicknessMm)}`}{m.kind === 'undermount' ? ` · bottom at least ${len(m.bottomRecessMm)} up` : ''}</dd>
     </dl>
   );
 }

@@ -32,7 +32,7 @@ export async function listSlideModels(db: Db, shopId: string): Promise<SavedSlid
   return rows.map(toModel);
 }
 
-/** One model per name in a shop, whatever the case: a second "Tessel UM-58" is refused (409). */
+/** One model per name in a shop, whatever the case: a second "Halbrook UM-58" is refused (409). */
 async function refuseDuplicate(db: Db, shopId: string, name: string, exceptId?: string) {
   const same = await db
     .select({ id: slideModels.id })

@@ -1,7 +1,7 @@
 import type { Mm } from '@/lib/units/length';
 import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import { DRAWER_DEFAULTS, SLIDE_SERIES } from '@/lib/joinery/defaults';
-import { mmText } from '@/lib/joinery/format';
+import { mmText, specText } from '@/lib/joinery/format';
 import type { BoxSize, FieldError, Result } from '@/lib/joinery/types';
 
 type Opening = Extract<DrawerSchedule['size'], { from: 'opening' }>;
@@ -51,7 +51,7 @@ export function boxFromOpening(
   if (errors.length > 0 || !depth.ok) return { ok: false, errors };
 
   const notes = [width.note(width.widthMm), ...depth.notes];
-  if (model) notes.push(`Box ${mmText(heightMm)} high = opening ${mmText(size.heightMm)} − ${mmText(heightDeduction)} for the ${model.name}.`);
+  if (model) notes.push(`Box ${mmText(heightMm)} high = opening ${mmText(size.heightMm)} − ${specText(heightDeduction)} for the ${model.name}.`);
   return { ok: true, box: { widthMm: width.widthMm, heightMm, depthMm: depth.depthMm }, slideLengthMm: depth.slideLengthMm, notes };
 }
 
@@ -61,11 +61,11 @@ type Model = NonNullable<Extract<DrawerSchedule['slide'], { type: 'undermount' }
 function clearanceWidth(slide: DrawerSchedule['slide'], openingWidth: Mm) {
   if (slide.type === 'undermount') {
     const widthMm = openingWidth - slide.widthDeductionMm;
-    return { widthMm, note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${mmText(slide.widthDeductionMm)} undermount deduction; check the slide maker's spec.` };
+    return { widthMm, note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(slide.widthDeductionMm)} undermount deduction; check the slide maker's spec.` };
   }
   const each = slide.sideClearanceMm;
   const name = slide.type === 'side-mount' ? `${slide.series} side-mount slide` : slide.type;
-  return { widthMm: openingWidth - 2 * each, note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − 2 × ${mmText(each)} ${name} clearance.` };
+  return { widthMm: openingWidth - 2 * each, note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − 2 × ${specText(each)} ${name} clearance.` };
 }
 
 /**
@@ -74,13 +74,13 @@ function clearanceWidth(slide: DrawerSchedule['slide'], openingWidth: Mm) {
  */
 function modelWidth(model: Model, openingWidth: Mm, sideMm: Mm | undefined) {
   if (model.widthRule === 'outside') {
-    return { widthMm: openingWidth - model.widthDeductionMm, note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${mmText(model.widthDeductionMm)}, the ${model.name}'s outside-width rule.` };
+    return { widthMm: openingWidth - model.widthDeductionMm, note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(model.widthDeductionMm)}, the ${model.name}'s outside-width rule.` };
   }
   const side = sideMm ?? DRAWER_DEFAULTS.sideThickness;
   const inside = openingWidth - model.widthDeductionMm;
   return {
     widthMm: inside + 2 * side,
-    note: (w: Mm) => `Box ${mmText(w)} wide: inside ${mmText(inside)} = opening ${mmText(openingWidth)} − ${mmText(model.widthDeductionMm)} (the ${model.name}'s inside-width rule), plus 2 × ${mmText(side)} sides.`,
+    note: (w: Mm) => `Box ${mmText(w)} wide: inside ${mmText(inside)} = opening ${mmText(openingWidth)} − ${specText(model.widthDeductionMm)} (the ${model.name}'s inside-width rule), plus 2 × ${specText(side)} sides.`,
   };
 }
 
@@ -94,7 +94,7 @@ function modelDepth(model: Model, openingDepth: Mm): Result<{ depthMm: Mm; slide
       errors: [
         {
           path: 'size.depthMm',
-          message: `No ${model.name} fits: ${mmText(room)} of depth after its ${mmText(model.rearClearanceMm)} rear clearance, and its shortest length is ${mmText(model.lengthsMm[0])}`,
+          message: `No ${model.name} fits: ${mmText(room)} of depth after its ${specText(model.rearClearanceMm)} rear clearance, and its shortest length is ${specText(model.lengthsMm[0])}`,
         },
       ],
     };
@@ -104,7 +104,7 @@ function modelDepth(model: Model, openingDepth: Mm): Result<{ depthMm: Mm; slide
     ok: true,
     depthMm: slideLengthMm,
     slideLengthMm,
-    notes: [`Box ${mmText(slideLengthMm)} long, as long as its slide: the longest ${model.name} that fits ${mmText(openingDepth)} less ${mmText(model.rearClearanceMm)} rear clearance.`],
+    notes: [`Box ${mmText(slideLengthMm)} long, as long as its slide: the longest ${model.name} that fits ${mmText(openingDepth)} less ${specText(model.rearClearanceMm)} rear clearance.`],
   };
 }
 
@@ -136,7 +136,7 @@ function boxDepth(
           errors: [
             {
               path: 'size.depthMm',
-              message: `No standard ${rule.series} slide fits: ${mmText(room)} of depth after the back clearance, the shortest slide is ${mmText(lengths[0])}`,
+              message: `No standard ${rule.series} slide fits: ${mmText(room)} of depth after the back clearance, the shortest slide is ${specText(lengths[0])}`,
             },
           ],
         };
@@ -180,4 +180,4 @@ function boxDepth(
   }
 }
 
-const rangeText = (lengths: readonly Mm[]) => `${mmText(lengths[0])}–${mmText(lengths[lengths.length - 1])}`;
+const rangeText = (lengths: readonly Mm[]) => `${specText(lengths[0])}–${specText(lengths[lengths.length - 1])}`;

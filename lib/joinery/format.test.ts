@@ -13,6 +13,17 @@ const schedule = {
 const imperial = { system: 'imperial' as const, precision: 16 as const, feet: false };
 
 describe('lengths in drawer notes', () => {
+  test('a rule’s own figures are written exactly: a metric shop to the whole mm still reads 12.5 mm a side, not ≈13 (derived from common practice)', () => {
+    const metric = { system: 'metric' as const, precision: 1 as const, feet: false };
+    const result = sizeDrawerSchedule(
+      { ...schedule, size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', series: 'metric' } },
+      { lengthText: (mm) => formatLength(mm, metric), exactText: (mm) => `${mm} mm` },
+    );
+    if (!result.ok) throw new Error(JSON.stringify(result.errors));
+    expect(result.notes[0]).toBe('Box 539 mm wide = opening 564 mm − 2 × 12.5 mm metric side-mount slide clearance.');
+    expect(result.notes[1]).toBe('Box 500 mm deep to suit the longest standard metric slide that fits the opening (250 mm–650 mm).');
+  });
+
   test("are written in the shop's unit when the caller names it (15″ opening − ½″ a side → 14″ box, common practice, no source)", () => {
     const result = sizeDrawerSchedule(schedule, { lengthText: (mm) => formatLength(mm, imperial) });
     if (!result.ok) throw new Error(JSON.stringify(result.errors));

@@ -3,7 +3,7 @@ import type { Mm } from '@/lib/units/length';
 import { drawerScheduleSchema, type DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import { boxFromOpening } from '@/lib/joinery/box-from-opening';
 import { POCKET_SCREW_MIN_STOCK, UNDERMOUNT_MAX_SIDE } from '@/lib/joinery/defaults';
-import { mmText } from '@/lib/joinery/format';
+import { mmText, specText } from '@/lib/joinery/format';
 import { JOINT_NAMES, jointCorners, jointErrors, jointMachining, type BoxThickness, type JointCorners } from '@/lib/joinery/joint-rules';
 import { requiredSetupCards } from '@/lib/joinery/setup-cards';
 import { SLIDE_SIDE_TOLERANCE_MM } from '@/shared/schemas/slide-model';
@@ -24,8 +24,8 @@ export const MIN_FRONT_REVEAL_MM = 1;
  * Every part of a drawer schedule, or one error per field that makes the box impossible. `lengthText` writes the
  * lengths inside notes and messages (default mm); the parts' numbers are always exact mm.
  */
-export function sizeDrawerSchedule(input: unknown, { lengthText }: { lengthText?: LengthText } = {}): SizeDrawerScheduleResult {
-  return withLengthText(lengthText, () => sizeInput(input));
+export function sizeDrawerSchedule(input: unknown, { lengthText, exactText }: { lengthText?: LengthText; exactText?: LengthText } = {}): SizeDrawerScheduleResult {
+  return withLengthText(lengthText, () => sizeInput(input), exactText);
 }
 
 function sizeInput(input: unknown): SizeDrawerScheduleResult {
@@ -121,7 +121,7 @@ function lipPastBox(s: DrawerSchedule, box: SizedBox): Result<{ lipMm: Mm }> {
   if (lipMm <= 0)
     return {
       ok: false,
-      errors: [{ path: 'front.revealMm', message: `With ${mmText(f.revealMm!)} reveals the front (${mmText(frontWidth)}) is no wider than the box (${mmText(box.widthMm)}), so it hides no slide: use a smaller reveal, or a flush front` }],
+      errors: [{ path: 'front.revealMm', message: `With ${specText(f.revealMm!)} reveals the front (${mmText(frontWidth)}) is no wider than the box (${mmText(box.widthMm)}), so it hides no slide: use a smaller reveal, or a flush front` }],
     };
   return { ok: true, lipMm };
 }
@@ -139,7 +139,7 @@ function faceWarnings(face: DrawerFace): string[] {
   if (!face.lipped && face.role === 'front') return [];
   const gap = Math.max(0, face.sideMarginMm);
   return [
-    `The ${face.role === 'applied-front' ? 'applied front' : 'lipped front'} (${mmText(face.widthMm)}) leaves ${gap === 0 ? 'no gap' : `only ${mmText(gap)}`} each side of the ${mmText(face.opening.widthMm)} opening: it will rub or bind. Fronts inside an opening want about 1.5 mm each side; or lap the opening with an overlay.`,
+    `The ${face.role === 'applied-front' ? 'applied front' : 'lipped front'} (${mmText(face.widthMm)}) leaves ${gap === 0 ? 'no gap' : `only ${specText(gap)}`} each side of the ${mmText(face.opening.widthMm)} opening: it will rub or bind. Fronts inside an opening want about 1.5 mm each side; or lap the opening with an overlay.`,
   ];
 }
 
@@ -151,7 +151,7 @@ function partBase(s: DrawerSchedule, role: DrawerPart['role'], quantityPerBox: n
 function slideModelErrors(s: DrawerSchedule, t: BoxThickness): FieldError[] {
   const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
   if (!model || model.maxSideThicknessMm === null || t.side <= model.maxSideThicknessMm + SLIDE_SIDE_TOLERANCE_MM) return [];
-  return [{ path: 'thickness.sideMm', message: `The ${model.name} takes sides up to ${mmText(model.maxSideThicknessMm)}; these are ${mmText(t.side)}: use thinner sides or another slide` }];
+  return [{ path: 'thickness.sideMm', message: `The ${model.name} takes sides up to ${specText(model.maxSideThicknessMm)}; these are ${specText(t.side)}: use thinner sides or another slide` }];
 }
 
 function boxErrors(box: SizedBox, t: BoxThickness): FieldError[] {
@@ -185,7 +185,7 @@ function bottomErrors(s: DrawerSchedule, box: SizedBox, t: BoxThickness): FieldE
     errors.push({ path: 'bottom.groove.clearanceMm', message: `With ${mmText(g.clearanceMm)} of clearance the bottom would not reach into ${mmText(g.depthMm)} deep grooves` });
   const recess = slide.type === 'undermount' ? (slide.model?.bottomRecessMm ?? slide.bottomRecessMm) : 0;
   if (slide.type === 'undermount' && g.heightMm < recess - 1e-9)
-    errors.push({ path: 'bottom.groove.heightMm', message: `${slide.model ? `The ${slide.model.name}` : 'Undermount slides'} need the bottom at least ${mmText(recess)} up; the groove is ${mmText(g.heightMm)} up` });
+    errors.push({ path: 'bottom.groove.heightMm', message: `${slide.model ? `The ${slide.model.name}` : 'Undermount slides'} need the bottom at least ${specText(recess)} up; the groove is ${specText(g.heightMm)} up` });
   return errors;
 }
 
@@ -277,10 +277,10 @@ function scheduleNotes(s: DrawerSchedule, t: BoxThickness): string[] {
   const notes: string[] = [];
   const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
   if (model && s.size.from === 'box' && !model.lengthsMm.some((l) => Math.abs(l - s.size.depthMm) < 0.5))
-    notes.push(`The box is ${mmText(s.size.depthMm)} long, and the ${model.name} comes ${model.lengthsMm.map(mmText).join(', ')} long: a box on it is usually as long as its slide.`);
+    notes.push(`The box is ${mmText(s.size.depthMm)} long, and the ${model.name} comes ${model.lengthsMm.map(specText).join(', ')} long: a box on it is usually as long as its slide.`);
   // Without a model there is no maker's limit to hold the sides to, only the usual one.
   if (s.slide.type === 'undermount' && !s.slide.model && t.side > UNDERMOUNT_MAX_SIDE + SLIDE_SIDE_TOLERANCE_MM)
-    notes.push(`Undermount slides are usually made for sides up to ${mmText(UNDERMOUNT_MAX_SIDE)}; check the maker's spec for ${mmText(t.side)} sides, or choose a slide model.`);
+    notes.push(`Undermount slides are usually made for sides up to ${specText(UNDERMOUNT_MAX_SIDE)}; check the maker's spec for ${specText(t.side)} sides, or choose a slide model.`);
   if (s.joint.method === 'butt-pocket-screw' && Math.min(t.side, t.front, t.back) < POCKET_SCREW_MIN_STOCK)
     notes.push(`Pocket-screw jigs usually need stock at least ${mmText(POCKET_SCREW_MIN_STOCK)} thick; check the jig.`);
   if (s.joint.method === 'butt-loose-tenon') {

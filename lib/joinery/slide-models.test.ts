@@ -10,7 +10,7 @@ import { sizeDrawerSchedule } from '@/lib/joinery/size-drawer-schedule';
  */
 const INSIDE_RULE: SlideModelInput = {
   kind: 'undermount',
-  name: 'Tessel UM-58',
+  name: 'Halbrook UM-58',
   lengthsMm: [12, 15, 18, 21].map(inches),
   widthRule: 'inside', // inside width = opening − 1-5/8″
   widthDeductionMm: inches(1 + 5 / 8),
@@ -21,7 +21,7 @@ const INSIDE_RULE: SlideModelInput = {
 };
 const OUTSIDE_RULE: SlideModelInput = {
   kind: 'undermount',
-  name: 'Halbrook H-16',
+  name: 'Tessel T-16',
   lengthsMm: [250, 300, 350, 400, 450, 500, 550],
   widthRule: 'outside', // box width = opening − 10 mm
   widthDeductionMm: 10,
@@ -72,7 +72,7 @@ describe('boxes sized from a slide model (invented maker-style models, worked by
     const result = sized(input);
     expect(result.parts.find((p) => p.role === 'side')!.machining.join(' ')).toContain('its lower edge 13 mm above the bottom edge');
     const low = sizeDrawerSchedule({ ...input, bottom: { mount: 'groove', groove: { heightMm: 12 } } });
-    expect(low).toMatchObject({ ok: false, errors: [{ path: 'bottom.groove.heightMm', message: expect.stringContaining('Halbrook H-16 need the bottom at least 13 mm up') }] });
+    expect(low).toMatchObject({ ok: false, errors: [{ path: 'bottom.groove.heightMm', message: expect.stringContaining('Tessel T-16 need the bottom at least 13 mm up') }] });
   });
 
   test('sides thicker than the model is made for are a field error (18 mm on a 16 mm slide)', () => {
@@ -87,7 +87,7 @@ describe('boxes sized from a slide model (invented maker-style models, worked by
 
   test('an opening too shallow for the shortest length the model is made in is refused on the depth', () => {
     const result = sizeDrawerSchedule(schedule(OUTSIDE_RULE, { widthMm: 564, heightMm: 180, depthMm: 255 }));
-    expect(result).toMatchObject({ ok: false, errors: [{ path: 'size.depthMm', message: expect.stringContaining('No Halbrook H-16 fits: 245 mm of depth') }] });
+    expect(result).toMatchObject({ ok: false, errors: [{ path: 'size.depthMm', message: expect.stringContaining('No Tessel T-16 fits: 245 mm of depth') }] });
   });
 
   test('the schedule carries the model’s whole rule, so it sizes the same whatever later happens to the model', () => {

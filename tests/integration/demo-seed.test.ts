@@ -59,8 +59,8 @@ describe('the demo shop', () => {
   test('keeps two invented undermount slide models, each sizing a box the way its rule says (worked by hand)', async () => {
     const models = await listSlideModels(handle.db, first.shopId);
     expect(models.map((m) => [m.name, m.widthRule])).toEqual([
-      ['Halbrook H-16 soft close', 'outside'],
-      ['Tessel UM-58 full extension', 'inside'],
+      ['Halbrook UM-58 full extension', 'inside'],
+      ['Tessel T-16 soft close', 'outside'],
     ]);
     expect((await handle.db.select().from(slideModels)).length).toBe(2);
     const size = (name: string, opening: { widthMm: number; heightMm: number; depthMm: number }) => {
@@ -71,13 +71,13 @@ describe('the demo shop', () => {
       return sized.box;
     };
     // Inside rule: 15″ − 1-5/8″ = 13-3/8″ inside + 2 × 12 mm sides; 22″ − ⅝″ = 21-3/8″ of room takes the 21″ slide.
-    expect(size('Tessel UM-58 full extension', { widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) })).toMatchObject({
+    expect(size('Halbrook UM-58 full extension', { widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) })).toMatchObject({
       widthMm: expect.closeTo(inches(13 + 3 / 8) + 24, 9),
       heightMm: expect.closeTo(inches(6.25), 9),
       depthMm: expect.closeTo(inches(21), 9),
     });
     // Outside rule: 564 − 10 = 554 mm; 540 − 10 = 530 mm of room takes the 500 mm slide.
-    expect(size('Halbrook H-16 soft close', { widthMm: 564, heightMm: 180, depthMm: 540 })).toMatchObject({ widthMm: 554, heightMm: 160, depthMm: 500 });
+    expect(size('Tessel T-16 soft close', { widthMm: 564, heightMm: 180, depthMm: 540 })).toMatchObject({ widthMm: 554, heightMm: 160, depthMm: 500 });
   });
 
   test('is seeded only into an empty database', async () => {

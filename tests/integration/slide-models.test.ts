@@ -22,7 +22,7 @@ async function call(handler: Handler, params: Record<string, string>, opts: { me
 // An invented maker-style model: box width = opening − 10 mm, sides up to 16 mm, 250–550 mm long (worked by hand below).
 const MODEL = {
   kind: 'undermount',
-  name: 'Halbrook H-16',
+  name: 'Tessel T-16',
   lengthsMm: [550, 250, 300, 350, 400, 450, 500],
   widthRule: 'outside',
   widthDeductionMm: 10,
@@ -36,7 +36,7 @@ describe('slide models in Shop settings', () => {
   test('the owner adds a model; everyone in the shop reads it, lengths shortest first; the other shop sees none', async () => {
     const created = await call(modelsRoute.POST, {}, { method: 'POST', body: MODEL });
     expect(created.status).toBe(201);
-    expect(created.json).toMatchObject({ name: 'Halbrook H-16', lengthsMm: [250, 300, 350, 400, 450, 500, 550], maxSideThicknessMm: 16 });
+    expect(created.json).toMatchObject({ name: 'Tessel T-16', lengthsMm: [250, 300, 350, 400, 450, 500, 550], maxSideThicknessMm: 16 });
     for (const user of [fx.estimator, fx.cutter]) {
       const list = await call(modelsRoute.GET, {}, { user });
       expect(list.json.map((m: { id: string }) => m.id)).toContain(created.json.id);
@@ -47,11 +47,11 @@ describe('slide models in Shop settings', () => {
   });
 
   test('a second model of the same name, in any case, is refused (409) and nothing is written', async () => {
-    await call(modelsRoute.POST, {}, { method: 'POST', body: { ...MODEL, name: 'Tessel UM-58' } });
-    const again = await call(modelsRoute.POST, {}, { method: 'POST', body: { ...MODEL, name: 'tessel um-58' } });
+    await call(modelsRoute.POST, {}, { method: 'POST', body: { ...MODEL, name: 'Halbrook UM-58' } });
+    const again = await call(modelsRoute.POST, {}, { method: 'POST', body: { ...MODEL, name: 'halbrook um-58' } });
     expect(again.status).toBe(409);
     const names = (await call(modelsRoute.GET, {})).json.map((m: { name: string }) => m.name.toLowerCase());
-    expect(names.filter((n: string) => n === 'tessel um-58')).toHaveLength(1);
+    expect(names.filter((n: string) => n === 'halbrook um-58')).toHaveLength(1);
   });
 
   test('bad values are refused per field (422): no lengths, a negative deduction, an unknown kind', async () => {
@@ -97,8 +97,8 @@ describe('slide models in Shop settings', () => {
       { method: 'POST', user: fx.estimator, body: { label: 'Too thick', quantity: 1, size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 }, slide: { type: 'undermount', model: { ...rule, id } }, thickness: { frontMm: 18, sideMm: 18 } } },
     );
     expect(res.status).toBe(422);
-    // Written in the shop's unit (this one is imperial): 16 mm is ≈⅝″, 18 mm ≈11/16″.
-    expect(res.json.fields['thickness.sideMm'][0]).toBe('The Thin sides only takes sides up to ≈5/8″; these are ≈11/16″: use thinner sides or another slide');
+    // A rule's figures are written exactly, even in an inch shop: 16 mm is no whole number of 32nds.
+    expect(res.json.fields['thickness.sideMm'][0]).toBe('The Thin sides only takes sides up to 16 mm; these are 18 mm: use thinner sides or another slide');
   });
 
   test('another shop’s model cannot be changed or deleted (404)', async () => {
