@@ -53,7 +53,8 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
   const live = useMemo(() => {
     if (!parsed.success) return null;
     const schedule = drawerScheduleSchema.safeParse(toScheduleInput(parsed.data, models, unit));
-    if (!schedule.success) return null;
+    // A schedule the schema refuses (a front too thin for the lock rabbet's rule) shows why, on its field.
+    if (!schedule.success) return { schedule: null, sized: { ok: false as const, errors: schedule.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })) } };
     return { schedule: schedule.data, sized: sizeDrawerSchedule(schedule.data, { lengthText: (mm) => formatLength(mm, units), exactText: (mm) => exactLengthText(mm, units) }) };
   }, [parsed, models, unit, units]);
 
@@ -142,9 +143,11 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
   const modelMessage = formState.errors.slideModel?.message ?? liveErrors.get('slideModel') ?? liveModelError;
   const param = JOINT_PARAM[values.jointMethod ?? 'lock-rabbet'];
   const front = parseLength(String(values.frontThickness ?? ''), { unit });
-  const paramDefault = param?.byFront && front.ok ? param.byFront.mm(front.mm) : param?.defaultMm;
+  // The rule refuses fronts it cannot figure (¼″ and thinner); the sizing then says so on the field.
+  const byFront = param?.byFront && front.ok ? (() => { try { return param.byFront!.mm(front.mm); } catch { return undefined; } })() : undefined;
+  const paramDefault = byFront ?? param?.defaultMm;
   const paramHint = param && paramDefault !== undefined
-    ? `Blank: ${len(paramDefault)}${param.byFront && front.ok ? ` for a ${exactLengthText(front.mm, units)} front (${param.byFront.rule})` : ''}.`
+    ? `Blank: ${len(paramDefault)}${byFront !== undefined && front.ok ? ` for a ${exactLengthText(front.mm, units)} front (${param.byFront!.rule})` : ''}.`
     : undefined;
   const depthHint = chosenModel
     ? `Box depth: the longest ${chosenModel.name} that fits ${exactLengthText(chosenModel.rearClearanceMm, units)} from the back; the box is as long as its slide.`
@@ -159,7 +162,7 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
     : fit === 'reveal' ? `Blank: ${exact(lipDefaultMm('reveal', unit))} inside the opening each side, so the front clears it.` : 'For a box given by its size: how far the front runs past each side.';
   const sized = live?.sized.ok ? live.sized : null;
   const bottom = sized?.parts.find((p) => p.role === 'bottom');
-  const movement = live && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
+  const movement = live?.schedule && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
   const cardKeys = sized?.setupCardKeys ?? [];
   // Joints are sized on the thickness given: stock of another actual thickness would not fit them.
   const stockWarnings = sized && offers.length ? [...new Set(sized.parts.flatMap((p) => stockMatchWarning(p, offers, units) ?? []))] : [];
@@ -217,7 +220,7 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
               <ul className="list-disc pl-5">{live.sized.errors.map((e) => <li key={e.path + e.message}>{e.message}</li>)}</ul>
             </div>
           )}
-          {sized && live && (
+          {sized && live?.schedule && (
             <>
               <BoxPreview box={sized.box} t={{ front: live.schedule.thickness.frontMm, back: live.schedule.thickness.backMm ?? live.schedule.thickness.frontMm, side: live.schedule.thickness.sideMm }} units={units} />
               {(sized.face.lipped || sized.face.role === 'applied-front') && <FacePreview face={sized.face} box={sized.box} units={units} />}

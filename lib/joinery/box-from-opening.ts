@@ -1,6 +1,6 @@
 import type { Mm } from '@/lib/units/length';
 import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
-import { DRAWER_DEFAULTS, SLIDE_SERIES } from '@/lib/joinery/defaults';
+import { DRAWER_DEFAULTS, MAX_SCHEDULE_LENGTH_MM, SLIDE_SERIES } from '@/lib/joinery/defaults';
 import { mmText, specText } from '@/lib/joinery/format';
 import type { BoxSize, FieldError, Result } from '@/lib/joinery/types';
 
@@ -16,7 +16,7 @@ export function boxFromOpening(
   schedule: Pick<DrawerSchedule, 'size' | 'slide'> & { thickness?: Pick<DrawerSchedule['thickness'], 'sideMm'> },
 ): Result<{ box: BoxSize; slideLengthMm: Mm | null; notes: string[] }> {
   const { size, slide } = schedule;
-  const unreadable = lengthErrors({ size, slide, thickness: schedule.thickness });
+  const unreadable = [...lengthErrors({ size, slide, thickness: schedule.thickness }), ...sizeErrors(size)];
   if (unreadable.length) return { ok: false, errors: unreadable };
   if (size.from === 'box') {
     return { ok: true, box: { widthMm: size.widthMm, heightMm: size.heightMm, depthMm: size.depthMm }, slideLengthMm: null, notes: [] };
@@ -108,14 +108,18 @@ function modelDepth(model: Model, openingDepth: Mm): Result<{ depthMm: Mm; slide
   };
 }
 
-/** The most any length of a drawer schedule may be: no drawer box is over 3 m, so more is a slipped unit. */
-export const MAX_SCHEDULE_LENGTH_MM = 3000;
+/** An opening or a box has a size: under half a millimetre is a typing slip. */
+function sizeErrors(size: DrawerSchedule['size']): FieldError[] {
+  return (['widthMm', 'heightMm', 'depthMm'] as const)
+    .filter((k) => Number.isFinite(size[k]) && size[k] < 0.5)
+    .map((k) => ({ path: `size.${k}`, message: `The ${size.from === 'box' ? 'box' : 'opening'} needs a size: ${size[k]} mm is under half a millimetre` }));
+}
 
 /** One error per number in the sizes and slide that is not a length from 0 to 3 m (NaN, ±Infinity, negatives, absurd). */
 function lengthErrors(value: unknown, path = ''): FieldError[] {
   if (typeof value === 'number') {
     if (Number.isFinite(value) && value >= 0 && value <= MAX_SCHEDULE_LENGTH_MM) return [];
-    return [{ path, message: `${Number.isFinite(value) ? `${value} mm` : String(value)} is not a length Kerfwise can size a drawer from (0 to ${MAX_SCHEDULE_LENGTH_MM / 1000} m)` }];
+    return [{ path, message: `${Number.isFinite(value) ? `${value} mm is` : 'That is'} not a length Kerfwise can size a drawer from (a finite number from 0 to ${MAX_SCHEDULE_LENGTH_MM / 1000} m)` }];
   }
   if (value && typeof value === 'object') return Object.entries(value).flatMap(([k, v]) => lengthErrors(v, path ? `${path}.${k}` : k));
   return [];

@@ -60,6 +60,9 @@ export const LIPPED_FRONT_DEFAULTS = {
   metric: { overlayMm: 10, revealMm: 1.5 },
 } as const satisfies Record<'imperial' | 'metric', { overlayMm: Mm; revealMm: Mm }>;
 
+/** The most any length of a drawer schedule may be: no drawer box is over 3 m, so more is a slipped unit. */
+export const MAX_SCHEDULE_LENGTH_MM = 3000;
+
 /** Thinnest stock common pocket-screw jigs are set for [CP, from memory]. */
 export const POCKET_SCREW_MIN_STOCK: Mm = inches(1 / 2);
 
@@ -87,8 +90,19 @@ export const SLIDE_SERIES = {
  * 5/16″ and 7/16″ back [CP]. One straight line runs through both: face left = t/2 − ⅛″, fence setback = t/2 + 1/16″
  * (so 12 mm stock gets 2.83 mm and 7.59 mm, 18 mm gets 5.83 and 10.59). Starting points, to check on scrap.
  */
-export const lockRabbetFaceLeft = (frontMm: Mm): Mm => settle(frontMm / 2 - inches(1 / 8));
-export const lockRabbetFenceSetback = (stockMm: Mm): Mm => settle(stockMm / 2 + inches(1 / 16));
+export function lockRabbetFaceLeft(frontMm: Mm): Mm {
+  requireStock('front', frontMm);
+  // ¼″ or thinner leaves no face at all: the ⅜″ cut would go through.
+  if (frontMm <= inches(1 / 4)) throw new RangeError(`A ${frontMm} mm front is too thin for a lock rabbet's starting rule (it needs more than ¼″, 6.35 mm): give the face left outright, or use thicker stock.`);
+  return settle(frontMm / 2 - inches(1 / 8));
+}
+export const lockRabbetFenceSetback = (stockMm: Mm): Mm => settle(requireStock('stock', stockMm) / 2 + inches(1 / 16));
+
+/** A stock thickness a rule can be figured for: finite, more than 0 and no more than 100 mm. */
+export function requireStock(what: string, mm: Mm): Mm {
+  if (typeof mm !== 'number' || !Number.isFinite(mm) || mm <= 0 || mm > 100) throw new RangeError(`The ${what} thickness must be a length from 0 to 100 mm (got ${String(mm)}).`);
+  return mm;
+}
 
 /** Drops float crumbs (6.349999999999999 for 6.35) to a millionth of a millimetre. */
 const settle = (mm: number) => Math.round(mm * 1e6) / 1e6;

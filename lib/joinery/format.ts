@@ -26,7 +26,13 @@ export function withLengthText<T>(lengthText: LengthText | undefined, body: () =
 }
 
 /** Lengths inside machining notes and messages; plain mm unless the caller of the sizing named the shop's unit. */
-export const mmText = (mm: Mm): string => current(mm);
+export const mmText = (mm: Mm): string => current(printable(mm));
 
 /** A rule's own figure (12.5 mm a side, 1-5/8″ off the opening), written exactly. */
-export const specText = (mm: Mm): string => currentExact(mm);
+export const specText = (mm: Mm): string => currentExact(printable(mm));
+
+/** A message never says "NaN mm": a length that is not finite is a bug to stop, not a number to print. */
+function printable(mm: Mm): Mm {
+  if (typeof mm !== 'number' || !Number.isFinite(mm)) throw new RangeError(`A drawer note was about to print ${String(mm)} as a length.`);
+  return mm;
+}

@@ -1,6 +1,7 @@
 import type { Mm } from '@/lib/units/length';
 import type { Joint, JointMethod } from '@/shared/schemas/drawer-schedule';
 import { mmText } from '@/lib/joinery/format';
+import { requireStock } from '@/lib/joinery/defaults';
 import type { FieldError } from '@/lib/joinery/types';
 
 /** The trade's name for each joint method, for messages and notes. */
@@ -46,8 +47,22 @@ const panelFullWidth = (sideThickness: Mm, sideEngagementMm: Mm): Corner => ({
   panelEngagementMm: sideThickness,
 });
 
+/**
+ * Refuses stock thicknesses and joint figures no joint is cut from (NaN, ±Infinity, negatives, over 100 mm): the
+ * corner arithmetic would carry them into every part. The schedule's schema refuses them first; this is the backstop.
+ */
+function checked(joint: Joint, t: BoxThickness) {
+  requireStock('front', t.front);
+  requireStock('back', t.back);
+  requireStock('side', t.side);
+  for (const [key, value] of Object.entries(joint)) {
+    if (typeof value === 'number' && (!Number.isFinite(value) || value < 0 || value > 100)) throw new RangeError(`The joint's ${key} must be a length from 0 to 100 mm (got ${value}).`);
+  }
+}
+
 /** The corner geometry each joint method makes (RULES.md explains each in words). */
 export function jointCorners(joint: Joint, t: BoxThickness): JointCorners {
+  checked(joint, t);
   switch (joint.method) {
     case 'lock-rabbet':
       // Layout B: front and back run the full width; the side's tongue stops `faceLeft` short of their outside face.
@@ -81,6 +96,8 @@ export function jointCorners(joint: Joint, t: BoxThickness): JointCorners {
 
 /** Why a joint's parameters cannot make a box from this stock, per field; empty when they can. */
 export function jointErrors(joint: Joint, t: BoxThickness, wallHeightMm: Mm): FieldError[] {
+  checked(joint, t);
+  if (!Number.isFinite(wallHeightMm) || wallHeightMm <= 0) throw new RangeError(`The wall height must be a positive length (got ${wallHeightMm}).`);
   const errors: FieldError[] = [];
   const thinnerPanel = Math.min(t.front, t.back);
   const push = (field: string, message: string) => errors.push({ path: `joint.${field}`, message });
@@ -133,6 +150,8 @@ export function jointMachining(
   t: BoxThickness,
   lipMm: Mm,
 ): string[] {
+  checked(joint, t);
+  if (!Number.isFinite(lipMm) || lipMm < 0) throw new RangeError(`The lip must be zero or a positive length (got ${lipMm}).`);
   const panel = role === 'front' ? corners.front : corners.back;
   const setIn = panel.panelEngagementMm + (role === 'front' ? lipMm : 0);
   const lipText = role === 'front' && lipMm > 0 ? ` (${mmText(t.side)} side + ${mmText(lipMm)} lip: the deeper cut for the overhang)` : '';

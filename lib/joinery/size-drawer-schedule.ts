@@ -33,10 +33,18 @@ function sizeInput(input: unknown): SizeDrawerScheduleResult {
   if (!parsed.success) {
     return {
       ok: false,
-      errors: parsed.error.issues.map((issue) => ({ path: issue.path.join('.'), message: issue.message })),
+      errors: parsed.error.issues.map((issue) => ({ path: issue.path.join('.'), message: readableIssue(issue) })),
     };
   }
   return sizeParsedSchedule(parsed.data);
+}
+
+/** zod's own wording for a missing or mistyped field ("expected string, received undefined") in the trade's words. */
+function readableIssue(issue: { code: string; path: PropertyKey[]; message: string; input?: unknown }): string {
+  // Fields with their own message keep it; only zod's generic "Invalid input: …" is reworded.
+  if ((issue.code !== 'invalid_type' && issue.code !== 'invalid_union') || !issue.message.startsWith('Invalid input')) return issue.message;
+  const field = issue.path.length ? String(issue.path[issue.path.length - 1]) : 'the schedule';
+  return issue.input === undefined ? `Give the ${field}: it is missing` : `The ${field} is not what a drawer schedule takes there: check it`;
 }
 
 function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {

@@ -49,12 +49,14 @@ describe('board feet by exact volume', () => {
 
   test('board feet and cubic metres convert both ways without loss, and scale with each dimension', () => {
     const dim = fc.double({ min: 1, max: 5000, noNaN: true });
+    const thick = fc.double({ min: 1, max: 1000, noNaN: true }); // past a metre a thickness is refused as a slipped unit
     fc.assert(
-      fc.property(dim, dim, dim, fc.integer({ min: 1, max: 5 }), (t, w, l, k) => {
+      fc.property(thick, dim, dim, fc.integer({ min: 1, max: 5 }), (t, w, l, k) => {
         const board = { thickness: { mm: t }, widthMm: w, lengthMm: l };
         expect(boardFeetToCubicMetres(boardFeet(board))).toBeCloseTo(cubicMetres(board), 9);
         expect(boardFeet({ ...board, lengthMm: l * k }) / boardFeet(board)).toBeCloseTo(k, 9);
       }),
+      { seed: 20261202 },
     );
   });
 });

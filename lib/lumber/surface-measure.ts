@@ -1,7 +1,7 @@
 import type { Board } from '@/shared/schemas/lumber';
 import { MM_PER_INCH } from '@/lib/units/length';
 import { thicknessInches } from './thickness';
-import { requirePositive } from './require-positive';
+import { boardSides } from './board-feet';
 
 export interface Tally {
   /** Width as measured, in inches (not rounded: the surface measure is). */
@@ -23,9 +23,12 @@ const settle = (x: number) => Math.round(x * 1e6) / 1e6;
  * then times the nominal thickness. It differs from the exact volume (`boardFeet`): 2″ × 6¼″ × 8′ is SM 4.167 → 4,
  * tallied 8 BF against 8.33 exact. Halves round up here; a yard tallying a whole pile alternates them up and down.
  */
-export function tally({ thickness, widthMm, lengthMm }: Board): Tally {
-  const widthIn = settle(requirePositive('width', widthMm) / MM_PER_INCH);
-  const lengthFt = Math.floor(settle(requirePositive('length', lengthMm) / (12 * MM_PER_INCH)));
+export function tally(board: Board): Tally {
+  if (!board || typeof board !== 'object') throw new RangeError('Give the board as { thickness, widthMm, lengthMm }.');
+  const { widthMm, lengthMm } = boardSides(board);
+  const { thickness } = board;
+  const widthIn = settle(widthMm / MM_PER_INCH);
+  const lengthFt = Math.floor(settle(lengthMm / (12 * MM_PER_INCH)));
   const surfaceMeasure = Math.floor(settle((widthIn * lengthFt) / 12) + 0.5);
   return { widthIn, lengthFt, surfaceMeasure, boardFeet: surfaceMeasure * thicknessInches(thickness) };
 }

@@ -2,6 +2,10 @@ import type { ShopUnits } from '@/shared/schemas/units';
 import { type Mm, MM_PER_INCH } from './length';
 import { gcd, typesetFraction } from './fraction-glyphs';
 import { roundToPrecision } from './round-to-precision';
+import { checkShopUnits } from './shop-units-check';
+
+/** Past this a length is not one a shop shows (a slipped unit or a broken sum): 1,000 km. */
+export const MAX_SHOWN_LENGTH_MM = 1e9;
 
 /**
  * `hyphen`: 19-3/4″ (the default, reads on any screen); `unicode`: 19¾″ and 3⁄16 as raised/lowered
@@ -10,13 +14,17 @@ import { roundToPrecision } from './round-to-precision';
 export type LengthStyle = 'hyphen' | 'unicode' | 'ascii';
 
 /** The smallest step a shop's lengths are shown in, in mm. */
-export const precisionStepMm = (units: ShopUnits): Mm => (units.system === 'imperial' ? MM_PER_INCH / units.precision : units.precision);
+export const precisionStepMm = (units: ShopUnits): Mm => (checkShopUnits(units).system === 'imperial' ? MM_PER_INCH / units.precision : units.precision);
 
 /**
  * Shows a length in the shop's unit and precision. A rounded value is marked "≈" so nobody saws to a
  * number that isn't the real one; a value already on the shop's grid is shown bare.
  */
 export function formatLength(mm: Mm, units: ShopUnits, { style = 'hyphen' }: { style?: LengthStyle } = {}): string {
+  if (typeof mm !== 'number' || !Number.isFinite(mm)) throw new RangeError(`Cannot show ${String(mm)} as a length.`);
+  if (Math.abs(mm) > MAX_SHOWN_LENGTH_MM) throw new RangeError(`${mm} mm is past ${MAX_SHOWN_LENGTH_MM / 1e6} km: not a length to show (a slipped unit?).`);
+  checkShopUnits(units);
+  if (style !== 'hyphen' && style !== 'unicode' && style !== 'ascii') throw new RangeError(`Unknown length style "${String(style)}": hyphen, unicode or ascii.`);
   const ascii = style === 'ascii';
   if (units.system === 'metric') {
     const { value, exact } = roundToPrecision(mm, units.precision);

@@ -18,6 +18,8 @@ const glyphFor = new Map(Object.entries(VULGAR_FRACTIONS).map(([glyph, [n, d]]) 
  * thirty-seconds have no single character.
  */
 export function typesetFraction(numerator: number, denominator: number): string {
+  if (!Number.isSafeInteger(numerator) || !Number.isSafeInteger(denominator) || numerator < 0 || denominator < 1)
+    throw new RangeError(`A fraction to typeset needs a whole numerator from 0 and a whole denominator from 1 (got ${numerator}/${denominator}).`);
   const glyph = glyphFor.get(`${numerator}/${denominator}`);
   if (glyph) return glyph;
   const sup = [...String(numerator)].map((c) => SUPERSCRIPT_DIGITS[Number(c)]).join('');
@@ -25,7 +27,9 @@ export function typesetFraction(numerator: number, denominator: number): string 
   return `${sup}${FRACTION_SLASH}${sub}`;
 }
 
+/** Greatest common divisor of two whole numbers (of either sign). */
 export function gcd(a: number, b: number): number {
+  if (!Number.isSafeInteger(a) || !Number.isSafeInteger(b)) throw new RangeError(`The greatest common divisor is of whole numbers (got ${a} and ${b}).`);
   let x = Math.abs(a);
   let y = Math.abs(b);
   while (y) [x, y] = [y, x % y];

@@ -1,4 +1,4 @@
-import { inches, type Mm } from './length';
+import { MM_PER_INCH, type Mm } from './length';
 import { FRACTION_SLASH, SUBSCRIPT_DIGITS, SUPERSCRIPT_DIGITS, VULGAR_FRACTIONS } from './fraction-glyphs';
 
 /** The unit a bare number is read in: the shop's own. */
@@ -67,6 +67,8 @@ class LengthError extends Error {
  * was expected; nothing is guessed.
  */
 export function parseLength(text: string, { unit }: { unit: LengthUnit }): ParsedLength {
+  checkUnit(unit);
+  if (typeof text !== 'string') return { ok: false, error: 'Enter a length.' };
   try {
     const chars = Array.from(text);
     return checkRange(new Parser(chars, tokenize(chars), unit).parse());
@@ -78,8 +80,14 @@ export function parseLength(text: string, { unit }: { unit: LengthUnit }): Parse
 
 /** A length given as a plain number in the shop's unit (a numeric form field or JSON body). */
 export function lengthFromNumber(value: number, unit: LengthUnit): ParsedLength {
-  if (!Number.isFinite(value)) return { ok: false, error: 'The length must be a finite number.' };
-  return checkRange(unit === 'in' ? inches(value) : value);
+  checkUnit(unit);
+  if (typeof value !== 'number' || !Number.isFinite(value)) return { ok: false, error: 'The length must be a finite number.' };
+  return checkRange(unit === 'in' ? value * MM_PER_INCH : value);
+}
+
+/** The shop's unit comes from its settings, never from what was typed: a wrong one is a bug, not input to refuse. */
+function checkUnit(unit: LengthUnit) {
+  if (unit !== 'in' && unit !== 'mm') throw new RangeError(`The unit for bare numbers is "in" or "mm" (got ${String(unit)}).`);
 }
 
 function checkRange(mm: Mm): ParsedLength {

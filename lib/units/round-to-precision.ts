@@ -17,6 +17,8 @@ export interface Rounded {
 export function roundToPrecision(value: number, step: number): Rounded {
   if (!(step > 0) || !Number.isFinite(step)) throw new RangeError(`The rounding step must be a positive number (got ${step}).`);
   if (!Number.isFinite(value)) throw new RangeError(`Cannot round ${value}.`);
+  // Beyond 2⁵³ steps the count itself is no longer exact (and a subnormal step overflows it to Infinity).
+  if (Math.abs(value) / step > Number.MAX_SAFE_INTEGER) throw new RangeError(`A step of ${step} is too fine to round ${value} to.`);
   const steps = Math.sign(value) * Math.round(Math.abs(value) / step);
   const rounded = steps * step;
   return { value: rounded === 0 ? 0 : rounded, exact: Math.abs(value - rounded) <= step * ON_GRID_TOLERANCE };

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DRAWER_DEFAULTS as D, LIPPED_FRONT_DEFAULTS, lockRabbetFaceLeft, SLIDE_SERIES } from '@/lib/joinery/defaults';
+import { DRAWER_DEFAULTS as D, LIPPED_FRONT_DEFAULTS, lockRabbetFaceLeft, MAX_SCHEDULE_LENGTH_MM, SLIDE_SERIES } from '@/lib/joinery/defaults';
 import { slideModelRuleSchema } from './slide-model';
 
 /**
@@ -7,10 +7,17 @@ import { slideModelRuleSchema } from './slide-model';
  * (lib/joinery/defaults.ts), so a shop fills the label, quantity and size and may change the rest.
  */
 
-const positiveMm = (what: string) =>
-  z.number({ error: `${what} must be a length in mm` }).finite().positive({ error: `${what} must be more than 0 mm` });
-const nonNegativeMm = (what: string) =>
-  z.number({ error: `${what} must be a length in mm` }).finite().min(0, { error: `${what} cannot be negative` });
+/**
+ * The most a length of each kind may be: past it a number is a slipped unit, never a drawer. No drawer box is over 3 m;
+ * no part of one is 100 mm thick; no slide takes 300 mm (so a lip of a kilometre, or of a metre, is refused).
+ */
+const MAX = { size: MAX_SCHEDULE_LENGTH_MM, clearance: 300, small: 100 } as const;
+const tooBig = (what: string, max: number) => ({ error: `${what} over ${max >= 1000 ? `${max / 1000} m` : `${max} mm`} looks like a slipped unit` });
+
+const positiveMm = (what: string, max: number = MAX.size) =>
+  z.number({ error: `${what} must be a length in mm` }).finite({ error: `${what} must be a finite length` }).positive({ error: `${what} must be more than 0 mm` }).max(max, tooBig(what, max));
+const nonNegativeMm = (what: string, max: number = MAX.size) =>
+  z.number({ error: `${what} must be a length in mm` }).finite({ error: `${what} must be a finite length` }).min(0, { error: `${what} cannot be negative` }).max(max, tooBig(what, max));
 
 export const JOINT_METHODS = [
   'lock-rabbet',
@@ -34,12 +41,12 @@ export const jointSchema = z.discriminatedUnion('method', [
      * Front/back thickness left outside the side's tongue (published articles call it the lip). Left out: it follows
      * the front's thickness (`lockRabbetFaceLeft`: ⅛″ on a ½″ front, ¼″ on a ¾″ one).
      */
-    faceLeftMm: nonNegativeMm('Face left outside the tongue').optional(),
+    faceLeftMm: nonNegativeMm('Face left outside the tongue', MAX.small).optional(),
   }),
   z.object({
     method: z.literal('rabbet-and-dado'),
-    dadoDepthMm: nonNegativeMm('Dado depth').default(D.dadoDepth),
-    dadoWidthMm: positiveMm('Dado width').default(D.dadoWidth),
+    dadoDepthMm: nonNegativeMm('Dado depth', MAX.small).default(D.dadoDepth),
+    dadoWidthMm: positiveMm('Dado width', MAX.small).default(D.dadoWidth),
   }),
   z.object({
     method: z.literal('butt-pocket-screw'),
@@ -48,18 +55,18 @@ export const jointSchema = z.discriminatedUnion('method', [
   z.object({
     method: z.literal('butt-loose-tenon'),
     layout: buttLayoutSchema.default('sides-full-depth'),
-    tenonThicknessMm: positiveMm('Tenon thickness').default(D.tenonThickness),
-    mortiseDepthMm: positiveMm('Mortise depth').default(D.mortiseDepth),
+    tenonThicknessMm: positiveMm('Tenon thickness', MAX.small).default(D.tenonThickness),
+    mortiseDepthMm: positiveMm('Mortise depth', MAX.small).default(D.mortiseDepth),
     tenonsPerCorner: z.int().min(1).max(6).default(D.tenonsPerCorner),
   }),
   z.object({
     method: z.literal('half-blind-dovetail'),
-    lapMm: nonNegativeMm('Lap').default(D.dovetailLap),
+    lapMm: nonNegativeMm('Lap', MAX.small).default(D.dovetailLap),
   }),
   z.object({ method: z.literal('through-dovetail') }),
   z.object({
     method: z.literal('box-joint'),
-    fingerWidthMm: positiveMm('Finger width').default(D.boxJointFinger),
+    fingerWidthMm: positiveMm('Finger width', MAX.small).default(D.boxJointFinger),
   }),
 ]);
 
@@ -77,8 +84,8 @@ export type SlideSeries = z.infer<typeof slideSeriesSchema>;
 const clearanceSlide = <T extends 'wooden-runners' | 'none'>(type: T, sideMm: number, heightMm: number) =>
   z.object({
     type: z.literal(type),
-    sideClearanceMm: nonNegativeMm('Side clearance').default(sideMm),
-    heightClearanceMm: nonNegativeMm('Height clearance').default(heightMm),
+    sideClearanceMm: nonNegativeMm('Side clearance', MAX.clearance).default(sideMm),
+    heightClearanceMm: nonNegativeMm('Height clearance', MAX.clearance).default(heightMm),
   });
 
 export const slideSchema = z.discriminatedUnion('type', [
@@ -86,8 +93,8 @@ export const slideSchema = z.discriminatedUnion('type', [
     type: z.literal('side-mount'),
     series: slideSeriesSchema.default('imperial'),
     /** Left out: the series' clearance (½″ imperial, 12.5 mm metric). */
-    sideClearanceMm: nonNegativeMm('Side clearance').optional(),
-    heightClearanceMm: nonNegativeMm('Height clearance').optional(),
+    sideClearanceMm: nonNegativeMm('Side clearance', MAX.clearance).optional(),
+    heightClearanceMm: nonNegativeMm('Height clearance', MAX.clearance).optional(),
     /** A slide model from Shop settings: when given, its rule sizes the box instead of the series. */
     model: slideModelRuleSchema.optional(),
   }),
@@ -96,9 +103,9 @@ export const slideSchema = z.discriminatedUnion('type', [
     /** A slide model from Shop settings, as the maker specifies it; when given, it sizes the box (the fields below do not). */
     model: slideModelRuleSchema.optional(),
     // Without a model (schedules saved before models existed): one deduction for every side thickness.
-    widthDeductionMm: nonNegativeMm('Width deduction').default(D.undermountWidthDeduction),
-    heightDeductionMm: nonNegativeMm('Height deduction').default(D.undermountHeightDeduction),
-    bottomRecessMm: nonNegativeMm('Bottom recess').default(D.undermountBottomRecess),
+    widthDeductionMm: nonNegativeMm('Width deduction', MAX.clearance).default(D.undermountWidthDeduction),
+    heightDeductionMm: nonNegativeMm('Height deduction', MAX.clearance).default(D.undermountHeightDeduction),
+    bottomRecessMm: nonNegativeMm('Bottom recess', MAX.clearance).default(D.undermountBottomRecess),
   }),
   clearanceSlide('wooden-runners', D.runnerSideClearance, D.runnerHeightClearance),
   clearanceSlide('none', 0, 0),
@@ -113,12 +120,12 @@ export const depthRuleSchema = z.discriminatedUnion('rule', [
     rule: z.literal('longest-standard-slide'),
     /** Left out: the side-mount slide's series (imperial for other slides). */
     series: slideSeriesSchema.optional(),
-    backClearanceMm: nonNegativeMm('Back clearance').default(D.backClearance),
+    backClearanceMm: nonNegativeMm('Back clearance', MAX.clearance).default(D.backClearance),
   }),
   z.object({ rule: z.literal('slide-length'), slideLengthMm: positiveMm('Slide length') }),
   z.object({
     rule: z.literal('opening-less-clearance'),
-    backClearanceMm: nonNegativeMm('Back clearance').default(D.backClearance),
+    backClearanceMm: nonNegativeMm('Back clearance', MAX.clearance).default(D.backClearance),
   }),
 ]);
 
@@ -152,9 +159,9 @@ export const frontStyleSchema = z.discriminatedUnion('style', [
      * else `overlay`.
      */
     fit: z.enum(LIP_FITS).optional(),
-    overlayMm: nonNegativeMm('Overlay').optional(),
-    revealMm: nonNegativeMm('Reveal').optional(),
-    lipMm: positiveMm('Lip').optional(),
+    overlayMm: nonNegativeMm('Overlay', MAX.small).optional(),
+    revealMm: nonNegativeMm('Reveal', MAX.small).optional(),
+    lipMm: positiveMm('Lip', MAX.small).optional(),
   }),
   z.object({
     style: z.literal('applied'),
@@ -162,14 +169,14 @@ export const frontStyleSchema = z.discriminatedUnion('style', [
     /** Overlay: how far the front laps past the opening on each edge. */
     overlayMm: z
       .object({
-        side: nonNegativeMm('Side overlay').default(D.fullOverlayOn18mmCarcass),
-        top: nonNegativeMm('Top overlay').default(D.fullOverlayOn18mmCarcass),
-        bottom: nonNegativeMm('Bottom overlay').default(D.fullOverlayOn18mmCarcass),
+        side: nonNegativeMm('Side overlay', MAX.small).default(D.fullOverlayOn18mmCarcass),
+        top: nonNegativeMm('Top overlay', MAX.small).default(D.fullOverlayOn18mmCarcass),
+        bottom: nonNegativeMm('Bottom overlay', MAX.small).default(D.fullOverlayOn18mmCarcass),
       })
       .prefault({}),
     /** Inset: gap between the front and the opening on each edge. */
-    revealMm: nonNegativeMm('Reveal').default(D.frontReveal),
-    thicknessMm: positiveMm('Applied front thickness').default(D.appliedFrontThickness),
+    revealMm: nonNegativeMm('Reveal', MAX.small).default(D.frontReveal),
+    thicknessMm: positiveMm('Applied front thickness', MAX.small).default(D.appliedFrontThickness),
     material: z.string().trim().min(1).max(120).default(D.appliedFrontMaterial),
     /** Explicit size; wins over the opening (and is needed when the schedule gives the box size). */
     widthMm: positiveMm('Applied front width').optional(),
@@ -182,26 +189,28 @@ export const grainRuleSchema = z.enum(['along-length', 'any']);
 export const bottomSchema = z.discriminatedUnion('mount', [
   z.object({
     mount: z.literal('groove'),
-    thicknessMm: positiveMm('Bottom thickness').default(D.bottomThickness),
+    thicknessMm: positiveMm('Bottom thickness', MAX.small).default(D.bottomThickness),
     material: z.string().trim().min(1).max(120).default(D.bottomMaterial),
     grain: grainRuleSchema.default('any'),
     groove: z
       .object({
-        widthMm: positiveMm('Groove width').default(D.grooveWidth),
-        depthMm: positiveMm('Groove depth').default(D.grooveDepth),
+        widthMm: positiveMm('Groove width', MAX.small).default(D.grooveWidth),
+        depthMm: positiveMm('Groove depth', MAX.small).default(D.grooveDepth),
         /** From the box's bottom edge to the groove's lower edge. Left out: ½″, or the undermount slide's bottom recess if more. */
-        heightMm: nonNegativeMm('Groove height').optional(),
+        heightMm: nonNegativeMm('Groove height', MAX.clearance).optional(),
         /** Total play across the bottom, split between the two grooves it spans. */
         clearanceMm: z
           .number({ error: 'Bottom clearance must be a length in mm' })
           .finite()
-          .min(0, { error: 'Bottom clearance cannot be negative: the bottom would be wider than its grooves allow' }).default(D.bottomClearance),
+          .min(0, { error: 'Bottom clearance cannot be negative: the bottom would be wider than its grooves allow' })
+          .max(MAX.small, tooBig('Bottom clearance', MAX.small))
+          .default(D.bottomClearance),
       })
       .prefault({}),
   }),
   z.object({
     mount: z.literal('applied'),
-    thicknessMm: positiveMm('Bottom thickness').default(D.bottomThickness),
+    thicknessMm: positiveMm('Bottom thickness', MAX.small).default(D.bottomThickness),
     material: z.string().trim().min(1).max(120).default(D.bottomMaterial),
     grain: grainRuleSchema.default('any'),
   }),
@@ -215,10 +224,10 @@ const drawerScheduleShape = z.object({
   joint: jointSchema.prefault({ method: 'lock-rabbet' }),
   thickness: z
     .object({
-      frontMm: positiveMm('Front thickness').default(D.frontThickness),
+      frontMm: positiveMm('Front thickness', MAX.small).default(D.frontThickness),
       /** Left out: same as the front. */
-      backMm: positiveMm('Back thickness').optional(),
-      sideMm: positiveMm('Side thickness').default(D.sideThickness),
+      backMm: positiveMm('Back thickness', MAX.small).optional(),
+      sideMm: positiveMm('Side thickness', MAX.small).default(D.sideThickness),
     })
     .prefault({}),
   front: frontStyleSchema.prefault({ style: 'flush' }),
@@ -255,8 +264,16 @@ function fillLip(f: Extract<ParsedShape['front'], { style: 'lipped' }>) {
  * Defaults that depend on another field: a lock rabbet's face left follows the front's thickness; a side-mount
  * slide's clearances and a standard-slide depth rule's series follow the slide's series.
  */
-function fillDependentDefaults(s: ParsedShape) {
-  const joint = s.joint.method === 'lock-rabbet' && s.joint.faceLeftMm === undefined ? { ...s.joint, faceLeftMm: lockRabbetFaceLeft(s.thickness.frontMm) } : s.joint;
+function fillDependentDefaults(s: ParsedShape, ctx: z.RefinementCtx) {
+  let joint = s.joint;
+  if (s.joint.method === 'lock-rabbet' && s.joint.faceLeftMm === undefined) {
+    try {
+      joint = { ...s.joint, faceLeftMm: lockRabbetFaceLeft(s.thickness.frontMm) };
+    } catch (e) {
+      ctx.addIssue({ code: 'custom', path: ['joint', 'faceLeftMm'], message: (e as Error).message });
+      return z.NEVER;
+    }
+  }
   const slide =
     s.slide.type === 'side-mount'
       ? {
