@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import { startServer, stopServer } from './support/server';
 import { shot, signIn } from './support/session';
 

@@ -1,5 +1,5 @@
 import fs from 'node:fs';
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './support/test';
 import { PDFDocument } from 'pdf-lib';
 import { shot, signIn } from './support/session';
 
