@@ -168,24 +168,29 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
           {sized && live && (
             <>
               <BoxPreview box={sized.box} t={{ front: live.schedule.thickness.frontMm, back: live.schedule.thickness.backMm ?? live.schedule.thickness.frontMm, side: live.schedule.thickness.sideMm }} units={units} />
-              <table className="data-table" aria-label="Parts of this schedule">
-                <thead>
-                  <tr><th>Part</th><th className="num">Qty</th><th className="num">Length</th><th className="num">Width</th><th className="num">Thick</th><th>Material</th><th className="num">Joint allow.</th></tr>
-                </thead>
-                <tbody>
-                  {sized.parts.map((p) => (
-                    <tr key={p.role}>
-                      <td title={p.machining.join(' ')}>{ROLE_NAMES[p.role]}</td>
-                      <td className="num">{p.quantity}</td>
-                      <td className="num whitespace-nowrap">{len(p.lengthMm)}</td>
-                      <td className="num whitespace-nowrap">{len(p.widthMm)}</td>
-                      <td className="num whitespace-nowrap">{exactLengthText(p.thicknessMm, units)}</td>
-                      <td>{p.material}</td>
-                      <td className="num">{p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '—'}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
+              <div className="relative overflow-x-auto">
+                <table className="data-table" aria-label="Parts of this schedule">
+                  <thead>
+                    <tr><th>Part</th><th className="num">Qty</th><th className="num">Length</th><th className="num">Width</th><th className="num">Thick</th><th>Material</th><th className="num">Joint allow.</th></tr>
+                  </thead>
+                  <tbody>
+                    {sized.parts.map((p) => (
+                      <tr key={p.role}>
+                        <td>
+                          {ROLE_NAMES[p.role]}
+                          {p.machining.length > 0 && <span className="block max-w-64 text-xs text-graphite-mute">{p.machining.join(' ')}</span>}
+                        </td>
+                        <td className="num">{p.quantity}</td>
+                        <td className="num whitespace-nowrap">{len(p.lengthMm)}</td>
+                        <td className="num whitespace-nowrap">{len(p.widthMm)}</td>
+                        <td className="num whitespace-nowrap">{exactLengthText(p.thicknessMm, units)}</td>
+                        <td>{p.material}</td>
+                        <td className="num">{p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '—'}</td>
+                      </tr>
+                    ))}
+                  </tbody>
+                </table>
+              </div>
               {sized.notes.length > 0 && <ul className="list-disc pl-5 text-sm text-graphite-soft">{sized.notes.map((n) => <li key={n}>{n}</li>)}</ul>}
               {stockWarnings.length > 0 && (
                 <div role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">
