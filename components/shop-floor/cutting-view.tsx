@@ -4,6 +4,7 @@ import Link from 'next/link';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { api, ApiError } from '@/lib/client/api';
+import { NARROW_HOW } from '@/lib/saw-order/describe-step';
 import type { PieceView } from '@/lib/saw-order/piece-views';
 import { sawProgress } from '@/lib/saw-order/progress';
 import type { PlanTicks } from '@/db/queries/saw-steps';
@@ -152,14 +153,14 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
           {view.heading} · {view.detail}
         </p>
         {current ? (
-          <div className="grid gap-3 lg:gap-y-4 [grid-template-areas:'info'_'diagram'_'act'] lg:grid-cols-2 lg:gap-x-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] lg:[grid-template-areas:'diagram_info'_'diagram_act']">
+          <div className="grid gap-3 lg:gap-y-4 [grid-template-areas:'info'_'diagram'_'act'_'more'] lg:grid-cols-2 lg:grid-rows-[auto_auto_1fr] lg:gap-x-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] lg:[grid-template-areas:'diagram_info'_'diagram_act'_'diagram_more']">
             <div className="@container flex min-w-0 flex-col gap-2 lg:gap-3 [grid-area:info]">
               <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
                 <h2 id="current-step" className="font-mono text-4xl leading-none">
                   <span className="sr-only">Cut </span>
                   {current.text.n}
                 </h2>
-                <StepKindBadge kind={current.text.kind} trim={current.text.trim} large />
+                <StepKindBadge kind={current.text.kind} trim={current.text.trim} narrow={current.text.narrow} large />
                 <span className="text-graphite-mute">
                   of {view.steps.length} · piece <strong className="text-graphite">{current.text.piece}</strong>
                 </span>
@@ -172,26 +173,12 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                 <div className="mt-1 text-base text-graphite-soft">
                   cut length <span className="whitespace-nowrap font-mono">{current.text.length}</span>
                 </div>
-              </div>
-              {current.text.frees.length > 0 && (
-                <div>
-                  <div className="text-sm text-graphite-mute">Frees</div>
-                  <div className="flex flex-wrap gap-2">
-                    {current.text.frees.map((f) => (
-                      <span key={f} className="rounded-md bg-sage-wash px-2.5 py-1 text-lg font-medium text-sage">
-                        {f}
-                      </span>
-                    ))}
-                  </div>
-                </div>
-              )}
-              {current.text.produced
-                .filter((p) => p.role === 'offcut')
-                .map((o) => (
-                  <p key={o.name} className="text-amber">
-                    Keep offcut {o.name} (<span className="whitespace-nowrap">{o.size}</span>) for the rack.
+                {current.text.narrow && (
+                  <p className="mt-2 rounded-md border border-brick/40 bg-brick-wash px-3 py-2 font-medium text-brick" role="note">
+                    Cut it {NARROW_HOW}.
                   </p>
-                ))}
+                )}
+              </div>
             </div>
             <StepDiagram
               geometry={current.geometry}
@@ -218,6 +205,29 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                 <WakeNote state={wake} />
               </p>
             </div>
+            {(current.text.frees.length > 0 || current.text.produced.some((p) => p.role === 'offcut')) && (
+              <div className="flex flex-col gap-2 [grid-area:more]">
+                {current.text.frees.length > 0 && (
+                  <div>
+                    <div className="text-sm text-graphite-mute">Frees</div>
+                    <div className="flex flex-wrap gap-2">
+                      {current.text.frees.map((f) => (
+                        <span key={f} className="rounded-md bg-sage-wash px-2.5 py-1 text-lg font-medium text-sage">
+                          {f}
+                        </span>
+                      ))}
+                    </div>
+                  </div>
+                )}
+                {current.text.produced
+                  .filter((p) => p.role === 'offcut')
+                  .map((o) => (
+                    <p key={o.name} className="text-amber">
+                      Keep offcut {o.name} (<span className="whitespace-nowrap">{o.size}</span>) for the rack.
+                    </p>
+                  ))}
+              </div>
+            )}
           </div>
         ) : (
           <p className="text-graphite-mute">No saw order for this piece yet.</p>
@@ -252,7 +262,7 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                 <button type="button" onClick={() => setPicked(text.n)} className="flex min-h-16 min-w-0 flex-1 flex-col justify-center px-3 py-1.5 text-left hover:bg-paper">
                   <span className="flex flex-wrap items-center gap-x-2 gap-y-1">
                     <span className="font-mono text-lg font-semibold">{text.n}</span>
-                    <StepKindBadge kind={text.kind} trim={text.trim} />
+                    <StepKindBadge kind={text.kind} trim={text.trim} narrow={text.narrow} />
                     <span className="whitespace-nowrap font-mono text-lg">{text.fence}</span>
                     <span className="text-sm text-graphite-mute">piece {text.piece}</span>
                   </span>
