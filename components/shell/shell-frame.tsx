@@ -50,7 +50,7 @@ export function ShellFrame({ brand, sidebar, children }: { brand: ReactNode; sid
         <div className="mb-6 hidden px-2 lg:block">{brand}</div>
         {sidebar}
       </aside>
-      <main className="min-w-0 flex-1 px-4 py-5 sm:px-6 lg:px-8 lg:py-6">{children}</main>
+      <main className="min-w-0 flex-1 px-4 py-5 sm:px-6 lg:px-8 lg:py-6 print:p-0">{children}</main>
     </div>
   );
 }

@@ -32,7 +32,6 @@ export default async function PartTagsPage({ params, searchParams }: { params: P
 
   return (
     <div>
-      <style>{`@media print { @page { size: ${sheet.page.css}; margin: 0; } main { padding: 0 !important; } }`}</style>
       <div className="print:hidden">
         <Link href={`/plans/${order.id}/saw-order`} className="text-sm text-graphite-mute">
           ← Saw order
