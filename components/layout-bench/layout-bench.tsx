@@ -230,7 +230,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
               <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1" aria-label="Selected part">
                 <dt className="text-graphite-mute">Part</dt><dd className="font-medium">{one.label || one.partId} #{one.instance}</dd>
                 <dt className="text-graphite-mute">Size</dt><dd className="num text-left">{fmt(parts.get(one.partId)?.length ?? one.w)} × {fmt(parts.get(one.partId)?.width ?? one.h)}</dd>
-                <dt className="text-graphite-mute">From corner</dt><dd className="num text-left">{fmt(one.x)} along, {fmt(one.y)} across</dd>
+                <dt className="text-graphite-mute">From corner</dt><dd className="num whitespace-normal text-left"><span className="whitespace-nowrap">{fmt(one.x)} along,</span> <span className="whitespace-nowrap">{fmt(one.y)} across</span></dd>
                 <dt className="text-graphite-mute">Grain</dt><dd>{parts.get(one.partId)?.grain === 'any' ? 'Either way' : 'Along its length'}{one.rotated ? ' · turned' : ''}</dd>
                 <dt className="text-graphite-mute">Locked</dt><dd>{one.locked ? 'Yes' : 'No'}</dd>
               </dl>

@@ -156,17 +156,17 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
           <div className="grid gap-3 lg:gap-y-4 [grid-template-areas:'info'_'diagram'_'act'_'more'] lg:grid-cols-2 lg:grid-rows-[auto_auto_1fr] lg:gap-x-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] lg:[grid-template-areas:'diagram_info'_'diagram_act'_'diagram_more']">
             <div className="@container flex min-w-0 flex-col gap-2 lg:gap-3 [grid-area:info]">
               <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
-                <h2 id="current-step" className="font-mono text-4xl leading-none">
+                <h2 id="current-step" className="flex items-baseline gap-1.5">
                   <span className="sr-only">Cut </span>
-                  {current.text.n}
+                  <span className="font-mono text-4xl leading-none">{current.text.n}</span>
+                  <span className="text-sm font-normal text-graphite-mute">of {view.steps.length}</span>
                 </h2>
                 <StepKindBadge kind={current.text.kind} trim={current.text.trim} narrow={current.text.narrow} large />
-                <span className="text-graphite-mute">
-                  of {view.steps.length} · piece <strong className="text-graphite">{current.text.piece}</strong>
-                </span>
               </div>
               <div>
-                <div className="text-sm uppercase tracking-wide text-graphite-mute">Fence</div>
+                <div className="text-sm text-graphite-mute">
+                  <span className="uppercase tracking-wide">Fence</span> · cutting piece <strong className="text-graphite">{current.text.piece}</strong>
+                </div>
                 <div className="whitespace-nowrap font-mono font-semibold leading-none" style={{ fontSize: fenceFontSize(current.text.fence) }} data-testid="current-fence">
                   {current.text.fence}
                 </div>
