@@ -178,7 +178,7 @@ export function ScheduleForm({ jobId, units, cards, offers, editing, onDone }: {
                       <tr key={p.role}>
                         <td>
                           {ROLE_NAMES[p.role]}
-                          {p.machining.length > 0 && <span className="block max-w-64 text-xs text-graphite-mute">{p.machining.join(' ')}</span>}
+                          {p.machining.length > 0 && <span className="block min-w-52 max-w-72 text-xs text-graphite-mute">{p.machining.join(' ')}</span>}
                         </td>
                         <td className="num">{p.quantity}</td>
                         <td className="num whitespace-nowrap">{len(p.lengthMm)}</td>

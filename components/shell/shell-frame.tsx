@@ -43,7 +43,7 @@ export function ShellFrame({ brand, sidebar, children }: { brand: ReactNode; sid
       {open && <div className="fixed inset-0 z-30 bg-graphite/30 lg:hidden" aria-hidden="true" onClick={() => setOpen(false)} />}
       <aside
         id="app-sidebar"
-        className={`fixed inset-y-0 left-0 z-40 flex w-72 max-w-[85vw] flex-col overflow-y-auto border-r border-paper-edge bg-paper-deep px-3 py-4 shadow-xl transition-transform
+        className={`fixed inset-y-0 left-0 z-40 flex w-72 max-w-[85vw] flex-col overflow-y-auto border-r border-paper-edge bg-paper-deep px-3 py-4 shadow-xl transition-transform motion-reduce:transition-none
           lg:sticky lg:top-0 lg:h-screen lg:w-60 lg:max-w-none lg:translate-x-0 lg:bg-paper-deep/60 lg:shadow-none lg:visible print:hidden
           ${open ? 'translate-x-0' : 'invisible -translate-x-full'}`}
       >

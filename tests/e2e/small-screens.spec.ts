@@ -107,6 +107,9 @@ test.describe('the menu on a phone', () => {
     expect(box.height).toBeGreaterThanOrEqual(44);
     await menu.click();
     await expect(nav).toBeVisible();
+    // The sidebar slides in from the left edge and stands over the page.
+    await expect.poll(async () => (await page.locator('#app-sidebar').boundingBox())?.x).toBe(0);
+    expect(await nav.getByRole('link', { name: /^Shop floor/ }).isVisible()).toBe(true);
     await shot(page, 'walk-390-cutter-menu-open');
     await page.keyboard.press('Escape');
     await expect(nav).toBeHidden();
