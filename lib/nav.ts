@@ -26,3 +26,23 @@ export function navFor(role: Role): NavItem[] {
 export function homeFor(role: Role): string {
   return role === 'cutter' ? '/shop-floor' : '/jobs';
 }
+
+export interface JobSection {
+  /** Path under /jobs/<id> ('' is the cut list). */
+  path: '' | '/drawers' | '/plan' | '/takeoff';
+  label: string;
+  /** What the section's page requires (requirePageUser / jobSection in app/(app)/jobs/[id]). */
+  permission: Permission;
+}
+
+/** A job's sections, each its own route; a role sees a link only to the sections it may open. */
+export const JOB_SECTIONS: readonly JobSection[] = [
+  { path: '', label: 'Cut list', permission: 'jobs:read' },
+  { path: '/drawers', label: 'Drawer schedules', permission: 'jobs:read' },
+  { path: '/plan', label: 'Plan', permission: 'plans:read' },
+  { path: '/takeoff', label: 'Takeoff', permission: 'prices:read' },
+];
+
+export function jobSectionsFor(role: Role): JobSection[] {
+  return JOB_SECTIONS.filter((s) => can(role, s.permission));
+}

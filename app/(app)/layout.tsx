@@ -7,6 +7,7 @@ import { ROLE_LABELS } from '@/lib/auth/permissions';
 import { navFor } from '@/lib/nav';
 import { Logo } from '@/components/shell/logo';
 import { NavLinks } from '@/components/shell/nav-links';
+import { ShellFrame } from '@/components/shell/shell-frame';
 import { SignOutButton } from '@/components/shell/sign-out-button';
 
 export const dynamic = 'force-dynamic';
@@ -14,24 +15,30 @@ export const dynamic = 'force-dynamic';
 export default async function AppLayout({ children }: { children: ReactNode }) {
   const user = await requirePageUser();
   const [shop] = await (await getDb()).select({ name: shops.name }).from(shops).where(eq(shops.id, user.shopId));
-  return (
-    <div className="flex min-h-screen">
-      <aside className="flex w-60 shrink-0 flex-col border-r border-paper-edge bg-paper-deep/60 px-3 py-4 print:hidden">
-        <div className="mb-6 flex items-center gap-2 px-2">
-          <Logo />
-          <div>
-            <div className="text-base font-semibold leading-tight">Kerfwise</div>
-            <div className="text-xs text-graphite-mute" data-testid="shop-name">{shop?.name}</div>
-          </div>
-        </div>
-        <NavLinks items={navFor(user.role)} />
-        <div className="mt-auto border-t border-paper-edge px-2 pt-3">
-          <div className="text-sm font-medium" data-testid="signed-in-as">{user.name}</div>
-          <div className="mb-2 text-xs text-graphite-mute" data-testid="signed-in-role">{ROLE_LABELS[user.role]}</div>
-          <SignOutButton />
-        </div>
-      </aside>
-      <main className="min-w-0 flex-1 px-8 py-6">{children}</main>
+  const brand = (
+    <div className="flex min-w-0 items-center gap-2">
+      <Logo />
+      <div className="min-w-0">
+        <div className="text-base font-semibold leading-tight">Kerfwise</div>
+        <div className="text-xs text-graphite-mute">{shop?.name}</div>
+      </div>
     </div>
+  );
+  return (
+    <ShellFrame
+      brand={brand}
+      sidebar={
+        <>
+          <NavLinks items={navFor(user.role)} />
+          <div className="mt-auto border-t border-paper-edge px-2 pt-3">
+            <div className="text-sm font-medium" data-testid="signed-in-as">{user.name}</div>
+            <div className="mb-2 text-xs text-graphite-mute" data-testid="signed-in-role">{ROLE_LABELS[user.role]}</div>
+            <SignOutButton />
+          </div>
+        </>
+      }
+    >
+      {children}
+    </ShellFrame>
   );
 }

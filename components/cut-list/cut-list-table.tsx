@@ -163,7 +163,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
   const scheduleOwned = (part: ListedPart, column: Column) => part.drawerScheduleId !== null && (SCHEDULE_OWNED_FIELDS as readonly string[]).includes(column);
 
   return (
-    <div className="card overflow-x-auto">
+    <div className="card relative overflow-x-auto">
       <datalist id="cut-list-materials">
         {materials.map((m) => (
           <option key={m} value={m} />
@@ -207,7 +207,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                 return (
                   <td key={column} className={isLengthColumn(column) || column === 'quantity' ? 'num' : undefined}>
                     {readOnly ? (
-                      <span tabIndex={0} data-r={r} data-c={c} className={`block rounded px-1 py-0.5 focus:bg-paper-deep ${isLengthColumn(column) || column === 'quantity' ? 'whitespace-nowrap' : ''}`} title={part.drawerScheduleId && canWrite ? 'Set by the drawer schedule: edit the schedule to change it.' : undefined}>
+                      <span tabIndex={0} data-r={r} data-c={c} className={`block rounded px-1 py-0.5 focus:bg-paper-deep ${isLengthColumn(column) || column === 'quantity' ? 'whitespace-nowrap' : ''}`}>
                         {cellText(part, column, units) || '—'}
                         {column === 'label' && part.schedule && (
                           <Link href={`/jobs/${jobId}/drawers#schedule-${part.drawerScheduleId}`} className="ml-2 whitespace-nowrap rounded-full bg-oak-wash px-2 text-xs font-medium text-oak-deep no-underline">
@@ -229,8 +229,8 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                       />
                     )}
                     {warning && (
-                      <span className="mt-0.5 block text-xs text-amber" role="note" title={warning}>
-                        ⚠ not in stock
+                      <span className="mt-0.5 block min-w-48 text-xs text-amber" role="note">
+                        ⚠ {warning}
                       </span>
                     )}
                   </td>
@@ -238,12 +238,12 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
               })}
               {canWrite && (
                 <td className="whitespace-nowrap">
-                  <button type="button" className="px-1 text-xs text-graphite-mute hover:text-graphite" aria-label={`Duplicate row ${r + 1}`} title="Duplicate" disabled={isPending(part)} onClick={() => add.mutate(duplicateOf(part))}>
+                  <button type="button" className="px-1 text-xs text-graphite-mute hover:text-graphite" aria-label={`Duplicate row ${r + 1}`} disabled={isPending(part)} onClick={() => add.mutate(duplicateOf(part))}>
                     Copy
                   </button>
                   {part.drawerScheduleId ? null : (
-                    <button type="button" className="px-1 text-base leading-none text-brick hover:underline" aria-label={`Delete row ${r + 1}`} title="Delete" disabled={isPending(part)} onClick={() => deleteRow(part, r + 1)}>
-                      ×
+                    <button type="button" className="px-1 text-xs text-brick hover:underline" aria-label={`Delete row ${r + 1}`} disabled={isPending(part)} onClick={() => deleteRow(part, r + 1)}>
+                      Delete
                     </button>
                   )}
                 </td>
@@ -252,7 +252,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
           ))}
           {canWrite && (
             <tr className="bg-paper/60" data-testid="cut-list-new-row">
-              <td className="text-sm font-semibold text-oak" title="New row: type, then Enter">+</td>
+              <td className="text-sm font-semibold text-oak">+</td>
               {COLUMNS.map((column, c) =>
                 column === 'grain' ? (
                   <td key={column}>
@@ -266,7 +266,7 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                       aria-label={`New part: ${COLUMN_TITLES[column]}`}
                       aria-invalid={errors[errorKey(DRAFT, column)] ? true : undefined}
                       className={cellInputClass(Boolean(errors[errorKey(DRAFT, column)]), isLengthColumn(column) || column === 'quantity')}
-                      style={{ minWidth: `${CELL_CH[column] + 2}ch` }}
+                      style={{ minWidth: cellWidth(column, draft[column]) }}
                       value={draft[column]}
                       placeholder={column === 'label' ? 'New part…' : ''}
                       list={column === 'material' ? 'cut-list-materials' : column === 'thicknessMm' ? `cut-list-thickness-${slug(draft.material)}` : undefined}
@@ -298,6 +298,11 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
           </tr>
         </tfoot>
       </table>
+      {parts.some((p) => p.drawerScheduleId) && (
+        <p className="border-t border-paper-edge px-3 py-2 text-xs text-graphite-mute" data-testid="cut-list-help">
+          Shaded rows come from a drawer schedule: edit the schedule to change their sizes.
+        </p>
+      )}
       {lastDeleted && (
         <div role="status" className="flex flex-wrap items-center gap-3 border-t border-paper-edge bg-oak-wash px-3 py-2 text-sm" data-testid="cut-list-undo">
           <span>
@@ -325,6 +330,16 @@ const slug = (s: string) => s.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-');
 /** Cell widths in characters, so sizes like 1′ 7-3/4″ and names like "Baltic birch" show whole. */
 const CELL_CH: Record<Column, number> = { label: 12, quantity: 3, lengthMm: 8, widthMm: 8, thicknessMm: 8, material: 11, grain: 8, jointAllowanceMm: 6, notes: 10 };
 
+/**
+ * A cell's box is as wide as its text (so a length keeps its ″ and a note shows whole), never narrower than the
+ * column's usual width. Lengths are monospaced (1ch a character); other text takes about 1.1ch a character.
+ */
+const cellWidth = (column: Column, text: string) => {
+  const numeric = isLengthColumn(column) || column === 'quantity';
+  const chars = Math.max(CELL_CH[column], Math.ceil([...text].length * (numeric ? 1 : 1.1)));
+  return `calc(${chars + 1}ch + 0.75rem)`;
+};
+
 const cellInputClass = (invalid: boolean, numeric: boolean) =>
   `w-full rounded border bg-transparent px-1 py-0.5 text-sm outline-none focus:border-oak focus:bg-white focus:ring-1 focus:ring-oak-light ${numeric ? 'text-right font-mono' : ''} ${invalid ? 'border-brick bg-brick-wash' : 'border-transparent'}`;
 
@@ -343,7 +358,7 @@ function EditCell({ r, c, column, initial, error, label, list, onCommit }: { r: 
         aria-label={label}
         aria-invalid={error ? true : undefined}
         className={cellInputClass(Boolean(error), numeric)}
-        style={{ minWidth: `${CELL_CH[column] + 2}ch` }}
+        style={{ minWidth: cellWidth(column, text) }}
         value={text}
         list={list}
         data-pristine={text === initial}

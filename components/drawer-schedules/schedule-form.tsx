@@ -224,24 +224,29 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
             <>
               <BoxPreview box={sized.box} t={{ front: live.schedule.thickness.frontMm, back: live.schedule.thickness.backMm ?? live.schedule.thickness.frontMm, side: live.schedule.thickness.sideMm }} units={units} />
               {(sized.face.lipped || sized.face.role === 'applied-front') && <FacePreview face={sized.face} box={sized.box} units={units} />}
-              <table className="data-table" aria-label="Parts of this schedule">
-                <thead>
-                  <tr><th>Part</th><th className="num">Qty</th><th className="num">Length</th><th className="num">Width</th><th className="num">Thick</th><th>Material</th><th className="num">Joint allow.</th></tr>
-                </thead>
-                <tbody>
-                  {sized.parts.map((p) => (
-                    <tr key={p.role}>
-                      <td title={p.machining.join(' ')}>{ROLE_NAMES[p.role]}</td>
-                      <td className="num">{p.quantity}</td>
-                      <td className="num whitespace-nowrap">{len(p.lengthMm)}</td>
-                      <td className="num whitespace-nowrap">{len(p.widthMm)}</td>
-                      <td className="num whitespace-nowrap">{exactLengthText(p.thicknessMm, units)}</td>
-                      <td>{p.material}</td>
-                      <td className="num">{p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '—'}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
+              <div className="relative overflow-x-auto">
+                <table className="data-table" aria-label="Parts of this schedule">
+                  <thead>
+                    <tr><th>Part</th><th className="num">Qty</th><th className="num">Length</th><th className="num">Width</th><th className="num">Thick</th><th>Material</th><th className="num">Joint allow.</th></tr>
+                  </thead>
+                  <tbody>
+                    {sized.parts.map((p) => (
+                      <tr key={p.role}>
+                        <td>
+                          {ROLE_NAMES[p.role]}
+                          {p.machining.length > 0 && <span className="block min-w-52 max-w-72 text-xs text-graphite-mute">{p.machining.join(' ')}</span>}
+                        </td>
+                        <td className="num">{p.quantity}</td>
+                        <td className="num whitespace-nowrap">{len(p.lengthMm)}</td>
+                        <td className="num whitespace-nowrap">{len(p.widthMm)}</td>
+                        <td className="num whitespace-nowrap">{exactLengthText(p.thicknessMm, units)}</td>
+                        <td>{p.material}</td>
+                        <td className="num">{p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '—'}</td>
+                      </tr>
+                    ))}
+                  </tbody>
+                </table>
+              </div>
               {sized.warnings.length > 0 && (
                 <div role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">
                   <p className="font-medium">Check the front’s fit:</p>

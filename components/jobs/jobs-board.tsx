@@ -128,7 +128,7 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
         </EmptyState>
       )}
       {jobs.isSuccess && rows.length > 0 && (
-        <div className="card overflow-hidden">
+        <div className="card overflow-x-auto">
           <table className="data-table" aria-label="Jobs">
             <thead>
               {table.getHeaderGroups().map((group) => (

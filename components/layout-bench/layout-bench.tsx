@@ -61,13 +61,13 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   const [base, setBase] = useState(data.updatedAt);
   const worker = useNestingWorker();
 
-  // Canvas size follows its box.
+  // Canvas size follows its box; until the box is measured, nothing is fitted (a phone's box is not 900 px wide).
   const box = useRef<HTMLDivElement>(null);
-  const [size, setSize] = useState({ width: 900, height: 560 });
+  const [size, setSize] = useState({ width: 900, height: 560, measured: false });
   useEffect(() => {
     const el = box.current;
     if (!el) return;
-    const ro = new ResizeObserver(([e]) => setSize({ width: Math.max(320, Math.floor(e.contentRect.width)), height: 560 }));
+    const ro = new ResizeObserver(([e]) => setSize({ width: Math.max(320, Math.floor(e.contentRect.width)), height: 560, measured: true }));
     ro.observe(el);
     return () => ro.disconnect();
   }, []);
@@ -83,11 +83,11 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   const fit = useCallback(() => store.getState().setCamera(fitView(frames, size.width, size.height)), [frames, size, store]);
   const fitted = useRef(false);
   useEffect(() => {
-    if (!fitted.current && size.width > 320) {
+    if (!fitted.current && size.measured) {
       fitted.current = true;
       fit();
     }
-  }, [fit, size.width]);
+  }, [fit, size.measured]);
 
   const save = useMutation({
     mutationFn: () => api<{ updatedAt: string }>(`/api/plans/${data.id}`, { method: 'PUT', body: { plan: rebuildCuts(request, docToPlan(store.getState().doc)), baseUpdatedAt: base } }),
@@ -165,20 +165,26 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
         <h2 id="bench" className="mr-auto">Layout bench</h2>
         {editable && (
           <>
-            <button type="button" className="btn-quiet" onClick={() => store.getState().undo()} disabled={!canUndo} title="Ctrl/Cmd+Z">Undo</button>
-            <button type="button" className="btn-quiet" onClick={() => store.getState().redo()} disabled={!canRedo} title="Ctrl/Cmd+Shift+Z">Redo</button>
-            <button type="button" className="btn-quiet" onClick={rotate} disabled={!selection.length || !selection.some((k) => mayRotate(doc, store.getState().context, k))} title="R">Turn</button>
-            <button type="button" className="btn-quiet" onClick={toggleLock} disabled={!selection.length} title="L">{selection.length && selection.every((k) => doc.placements[k]?.locked) ? 'Unlock' : 'Lock'}</button>
+            <button type="button" className="btn-quiet" onClick={() => store.getState().undo()} disabled={!canUndo}>Undo</button>
+            <button type="button" className="btn-quiet" onClick={() => store.getState().redo()} disabled={!canRedo}>Redo</button>
+            <button type="button" className="btn-quiet" onClick={rotate} disabled={!selection.length || !selection.some((k) => mayRotate(doc, store.getState().context, k))}>Turn</button>
+            <button type="button" className="btn-quiet" onClick={toggleLock} disabled={!selection.length}>{selection.length && selection.every((k) => doc.placements[k]?.locked) ? 'Unlock' : 'Lock'}</button>
             <button type="button" className="btn-quiet" onClick={renest} disabled={worker.running}>Re-nest unlocked</button>
           </>
         )}
         <button type="button" className="btn-quiet" onClick={fit}>Fit all</button>
         {editable && (
-          <button type="button" className="btn-accent" disabled={save.isPending || !dirty || problems > 0} onClick={() => save.mutate()} title={problems ? 'Fix the problems first' : undefined}>
+          <button type="button" className="btn-accent" disabled={save.isPending || !dirty || problems > 0} onClick={() => save.mutate()}>
             {save.isPending ? 'Saving…' : 'Save layout'}
           </button>
         )}
       </div>
+      {editable && (
+        <p className="text-xs text-graphite-mute" data-testid="bench-keys">
+          {problems > 0 && <strong className="mr-2 font-medium text-brick">Fix the problems below to save.</strong>}
+          On the bench: drag a part; arrows nudge it, <kbd>R</kbd> turns it, <kbd>L</kbd> locks it, <kbd>Ctrl/Cmd+Z</kbd> undoes, <kbd>Ctrl/Cmd+Shift+Z</kbd> redoes.
+        </p>
+      )}
 
       {worker.running && <NestProgressBar progress={worker.progress} budgetMs={request.settings.timeBudgetMs} label="Re-nesting the unlocked parts" onCancel={worker.cancel} />}
       {notice && <p className="text-sm text-sage" role="status">{notice}</p>}
@@ -189,7 +195,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
         </div>
       )}
 
-      <div className="grid gap-3 lg:grid-cols-[1fr_18rem]">
+      <div className="grid gap-3 lg:grid-cols-[minmax(0,1fr)_18rem]">
         <div
           ref={box}
           tabIndex={0}
@@ -224,7 +230,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
               <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1" aria-label="Selected part">
                 <dt className="text-graphite-mute">Part</dt><dd className="font-medium">{one.label || one.partId} #{one.instance}</dd>
                 <dt className="text-graphite-mute">Size</dt><dd className="num text-left">{fmt(parts.get(one.partId)?.length ?? one.w)} × {fmt(parts.get(one.partId)?.width ?? one.h)}</dd>
-                <dt className="text-graphite-mute">From corner</dt><dd className="num text-left">{fmt(one.x)} along, {fmt(one.y)} across</dd>
+                <dt className="text-graphite-mute">From corner</dt><dd className="num whitespace-normal text-left"><span className="whitespace-nowrap">{fmt(one.x)} along,</span> <span className="whitespace-nowrap">{fmt(one.y)} across</span></dd>
                 <dt className="text-graphite-mute">Grain</dt><dd>{parts.get(one.partId)?.grain === 'any' ? 'Either way' : 'Along its length'}{one.rotated ? ' · turned' : ''}</dd>
                 <dt className="text-graphite-mute">Locked</dt><dd>{one.locked ? 'Yes' : 'No'}</dd>
               </dl>

@@ -107,7 +107,7 @@ function NestForm({ jobId, shop, showPrices, offered, nestFor }: { jobId: string
   return (
     <div className="space-y-5">
       <form onSubmit={nest} className="space-y-4" aria-label="Nest settings" noValidate>
-        <fieldset className="card overflow-x-auto p-3">
+        <fieldset className="card min-w-0 overflow-x-auto p-3">
           <legend className="px-1 text-sm font-semibold">Stock to nest on</legend>
           {offered.stock.length === 0 && <p className="text-sm text-graphite-mute">The stock room has nothing on offer yet.</p>}
           {groups.map((g) => (

@@ -1,17 +1,22 @@
-import type { PartTag as Tag } from '@/lib/saw-order/part-tags';
+import type { PartTag as Tag, TagText } from '@/lib/saw-order/part-tags';
 import type { QrPath } from '@/lib/saw-order/qr-path';
 
 /** The grain runs along the part's length: the arrow points along the first size on the tag. */
 function GrainArrow() {
   return (
-    <svg viewBox="0 0 40 8" className="h-[2.2mm] w-[9mm]" role="img" aria-label="Grain runs along the length">
+    <svg viewBox="0 0 40 8" className="h-[2.2mm] w-[9mm] shrink-0" role="img" aria-label="Grain runs along the length">
       <path d="M1 4h34M30 1l6 3-6 3" className="fill-none stroke-graphite" strokeWidth={1.4} />
     </svg>
   );
 }
 
-/** One part tag: job, part, size in the shop's unit, grain arrow and a QR code to the part's page. Sized in mm for label sheets. */
-export function PartTag({ tag, jobName, size, qr, url, label }: { tag: Tag; jobName: string; size: string; qr: QrPath; url: string; label: { width: number; height: number } }) {
+/**
+ * One part tag, sized in mm for label sheets: job, part with its "#n", size, material and thickness, grain arrow,
+ * stock piece and a QR code to the part's page. Nothing that tells parts apart is cut off: a long name is abbreviated
+ * (marked `data-abbreviates`) but its "#n" stands apart and stays whole, the size shrinks to fit its line, and the
+ * thickness stays whole beside the material.
+ */
+export function PartTag({ tag, text, jobName, qr, url, label }: { tag: Tag; text: TagText; jobName: string; qr: QrPath; url: string; label: { width: number; height: number } }) {
   const qrSide = Math.min(label.height - 3, label.width * 0.38);
   return (
     <div
@@ -23,15 +28,30 @@ export function PartTag({ tag, jobName, size, qr, url, label }: { tag: Tag; jobN
         <rect width={qr.size} height={qr.size} fill="#fff" />
         <path d={qr.d} fill="#000" shapeRendering="crispEdges" />
       </svg>
-      <div className="min-w-0 flex-1 leading-tight">
-        <div className="truncate text-[6.5pt] text-graphite-mute">{jobName}</div>
-        <div className="truncate text-[9.5pt] font-semibold">
-          {tag.label} <span className="font-normal text-graphite-mute">#{tag.instance}</span>
+      <div className="@container min-w-0 flex-1 leading-[1.15]">
+        <div className="truncate text-[6pt] text-graphite-mute" data-abbreviates>
+          {jobName}
         </div>
-        <div className="flex items-center gap-[1mm] font-mono text-[8.5pt] font-medium">
-          <span className="truncate">{size}</span>
+        <div className="flex min-w-0 items-baseline gap-[1mm] text-[8.5pt] font-semibold">
+          <span className="min-w-0 truncate" data-abbreviates data-testid="tag-name">
+            {text.name}
+          </span>
+          <span className="shrink-0 font-normal text-graphite-mute" data-testid="tag-number">
+            {text.number}
+          </span>
         </div>
-        <div className="flex items-center gap-[1.5mm] text-[6.5pt] text-graphite-soft">
+        <div className="whitespace-nowrap font-mono font-medium" style={{ fontSize: `min(8pt, calc(100cqi / ${([...text.size].length * 0.62).toFixed(2)}))` }} data-testid="tag-size">
+          {text.size}
+        </div>
+        <div className="flex min-w-0 items-baseline gap-[1mm] text-[6.5pt]">
+          <span className="min-w-0 truncate" data-abbreviates>
+            {text.material}
+          </span>
+          <span className="shrink-0 whitespace-nowrap" data-testid="tag-thickness">
+            {text.thickness}
+          </span>
+        </div>
+        <div className="flex items-center gap-[1.5mm] text-[6pt] text-graphite-soft">
           {tag.grain ? (
             <>
               <GrainArrow /> grain
@@ -39,7 +59,7 @@ export function PartTag({ tag, jobName, size, qr, url, label }: { tag: Tag; jobN
           ) : (
             <span>grain either way</span>
           )}
-          <span className="ml-auto">Piece {tag.pieceName}</span>
+          <span className="ml-auto shrink-0">{text.piece}</span>
         </div>
       </div>
     </div>

@@ -2,14 +2,16 @@
 
 import Link from 'next/link';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { api, ApiError } from '@/lib/client/api';
+import { NARROW_HOW } from '@/lib/saw-order/describe-step';
 import type { PieceView } from '@/lib/saw-order/piece-views';
 import { sawProgress } from '@/lib/saw-order/progress';
 import type { PlanTicks } from '@/db/queries/saw-steps';
 import { StepDiagram } from '@/components/saw-order/step-diagram';
 import { StepKindBadge } from '@/components/saw-order/step-kind-badge';
 import { ProgressBar } from './progress-bar';
+import { useWakeLock, type WakeState } from './use-wake-lock';
 
 interface Props {
   planId: string;
@@ -36,6 +38,7 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
   const progress = sawProgress(pieces, data.ticks);
   const [pieceIndex, setPieceIndex] = useState(() => progress.pieces.find((p) => p.next !== null)?.piece ?? 0);
   const [picked, setPicked] = useState<number | null>(null);
+  const wake = useWakeLock(true);
 
   const toggle = useMutation({
     mutationFn: ({ piece, step, done }: Toggle) => api<PlanTicks>(`/api/plans/${planId}/steps`, { method: done ? 'POST' : 'DELETE', body: { piece, step } }),
@@ -71,10 +74,28 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
     toggle.mutate({ piece: pieceIndex, step, done });
   };
 
+  // One key ticks the cut on screen: Space, unless a field or a control of its own has the focus.
+  const doneRef = useRef<() => void>(() => undefined);
+  doneRef.current = () => {
+    if (current && !tickOf(pieceIndex, current.text.n)) set(current.text.n, true);
+  };
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (e.code !== 'Space' || e.repeat || e.altKey || e.ctrlKey || e.metaKey || e.shiftKey) return;
+      const target = e.target instanceof Element ? e.target : null;
+      if (target?.closest('input, textarea, select, button, a, [contenteditable], [role="checkbox"]')) return;
+      e.preventDefault();
+      doneRef.current();
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
+
   if (!view) return <p className="card px-4 py-6">This plan places no parts, so there is nothing to cut.</p>;
+  const currentTick = current ? tickOf(pieceIndex, current.text.n) : undefined;
 
   return (
-    <div className="space-y-5">
+    <div className="space-y-3 sm:space-y-5">
       <ProgressBar done={progress.done} total={progress.total} label={`${progress.done} of ${progress.total} cuts done on this plan`} />
 
       {toggle.isError && (
@@ -102,7 +123,7 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
         </div>
       )}
 
-      <nav aria-label="Stock pieces" className="flex gap-2 overflow-x-auto pb-1">
+      <nav aria-label="Stock pieces" className="-mx-1 flex gap-2 overflow-x-auto px-1 pb-1">
         {views.map((v, i) => {
           const p = progress.pieces[i];
           const active = i === pieceIndex;
@@ -115,71 +136,98 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                 setPicked(null);
               }}
               aria-current={active ? 'true' : undefined}
-              className={`min-h-14 min-w-32 shrink-0 rounded-lg border-2 px-4 py-2 text-left ${active ? 'border-oak bg-oak-wash' : 'border-paper-edge bg-white hover:bg-paper-deep'}`}
+              className={`min-h-14 min-w-28 shrink-0 rounded-lg border-2 px-4 py-2 text-left ${active ? 'border-oak bg-oak-wash' : 'border-paper-edge bg-white hover:bg-paper-deep'}`}
             >
-              <span className="block font-semibold">{v.heading}</span>
+              <span className="block whitespace-nowrap font-semibold">{v.heading}</span>
               <span className={`block font-mono text-sm ${p.next === null && p.total > 0 ? 'text-sage' : 'text-graphite-mute'}`}>
                 {p.done}/{p.total}
-                {p.next === null && p.total > 0 ? ' ✓' : ''}
+                {p.next === null && p.total > 0 ? ' ✓ all cut' : ''}
               </span>
             </button>
           );
         })}
       </nav>
 
-      <section className="card p-5" aria-labelledby="current-step">
-        <p className="mb-3 text-sm text-graphite-mute">
+      <section className="card p-4 sm:p-5" aria-labelledby="current-step" data-testid="current-cut">
+        <p className="mb-2 text-sm text-graphite-mute">
           {view.heading} · {view.detail}
         </p>
         {current ? (
-          <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-            <StepDiagram geometry={current.geometry} stock={view.stock} parts={view.parts} className="h-auto max-h-[55vh] w-full" />
-            <div className="flex flex-col gap-4">
-              <div className="flex items-center gap-3">
-                <h2 id="current-step" className="font-mono text-4xl">
-                  {current.text.n}
+          <div className="grid gap-3 lg:gap-y-4 [grid-template-areas:'info'_'diagram'_'act'_'more'] lg:grid-cols-2 lg:grid-rows-[auto_auto_1fr] lg:gap-x-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] lg:[grid-template-areas:'diagram_info'_'diagram_act'_'diagram_more']">
+            <div className="@container flex min-w-0 flex-col gap-2 lg:gap-3 [grid-area:info]">
+              <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
+                <h2 id="current-step" className="flex items-baseline gap-1.5">
+                  <span className="sr-only">Cut </span>
+                  <span className="font-mono text-4xl leading-none">{current.text.n}</span>
+                  <span className="text-sm font-normal text-graphite-mute">of {view.steps.length}</span>
                 </h2>
-                <StepKindBadge kind={current.text.kind} trim={current.text.trim} large />
-                <span className="text-graphite-mute">
-                  of {view.steps.length} · piece <strong className="text-graphite">{current.text.piece}</strong>
-                </span>
+                <StepKindBadge kind={current.text.kind} trim={current.text.trim} narrow={current.text.narrow} large />
               </div>
               <div>
-                <div className="text-sm uppercase tracking-wide text-graphite-mute">Fence</div>
-                <div className="font-mono text-6xl font-semibold leading-none" data-testid="current-fence">
+                <div className="text-sm text-graphite-mute">
+                  <span className="uppercase tracking-wide">Fence</span> · cutting piece <strong className="text-graphite">{current.text.piece}</strong>
+                </div>
+                <div className="whitespace-nowrap font-mono font-semibold leading-none" style={{ fontSize: fenceFontSize(current.text.fence) }} data-testid="current-fence">
                   {current.text.fence}
                 </div>
-                <div className="mt-1 text-sm text-graphite-mute">cut length {current.text.length}</div>
-              </div>
-              {current.text.frees.length > 0 && (
-                <div>
-                  <div className="text-sm text-graphite-mute">Frees</div>
-                  <div className="flex flex-wrap gap-2">
-                    {current.text.frees.map((f) => (
-                      <span key={f} className="rounded-md bg-sage-wash px-2.5 py-1 text-lg font-medium text-sage">
-                        {f}
-                      </span>
-                    ))}
-                  </div>
+                <div className="mt-1 text-base text-graphite-soft">
+                  cut length <span className="whitespace-nowrap font-mono">{current.text.length}</span>
                 </div>
-              )}
-              {current.text.produced
-                .filter((p) => p.role === 'offcut')
-                .map((o) => (
-                  <p key={o.name} className="text-amber">
-                    Keep offcut {o.name} ({o.size}) for the rack.
+                {current.text.narrow && (
+                  <p className="mt-2 rounded-md border border-brick/40 bg-brick-wash px-3 py-2 font-medium text-brick" role="note">
+                    Cut it {NARROW_HOW}.
                   </p>
-                ))}
-              {tickOf(pieceIndex, current.text.n) ? (
-                <button type="button" className="btn-quiet min-h-16 text-lg" onClick={() => set(current.text.n, false)}>
+                )}
+              </div>
+            </div>
+            <StepDiagram
+              geometry={current.geometry}
+              stock={view.stock}
+              parts={view.parts}
+              className="h-auto max-h-[32vh] w-full [grid-area:diagram] lg:max-h-[55vh]"
+            />
+            <div className="flex flex-col gap-2 [grid-area:act]">
+              {currentTick ? (
+                <button key={`undo-${current.text.n}`} type="button" className="btn-quiet min-h-20 w-full text-xl" onClick={() => set(current.text.n, false)}>
                   Cut {current.text.n} is ticked — undo
                 </button>
               ) : (
-                <button type="button" className="btn-accent min-h-16 text-lg" onClick={() => set(current.text.n, true)}>
+                <button key={`done-${current.text.n}`} type="button" className="btn-accent min-h-20 w-full text-2xl" onClick={() => set(current.text.n, true)}>
                   Done — cut {current.text.n}
                 </button>
               )}
+              <p className="text-sm text-graphite-mute" data-testid="cutting-hints">
+                {!currentTick && (
+                  <>
+                    Or press <kbd className="rounded border border-paper-edge bg-paper px-1.5 font-mono text-graphite">Space</kbd> for Done.{' '}
+                  </>
+                )}
+                <WakeNote state={wake} />
+              </p>
             </div>
+            {(current.text.frees.length > 0 || current.text.produced.some((p) => p.role === 'offcut')) && (
+              <div className="flex flex-col gap-2 [grid-area:more]">
+                {current.text.frees.length > 0 && (
+                  <div>
+                    <div className="text-sm text-graphite-mute">Frees</div>
+                    <div className="flex flex-wrap gap-2">
+                      {current.text.frees.map((f) => (
+                        <span key={f} className="rounded-md bg-sage-wash px-2.5 py-1 text-lg font-medium text-sage">
+                          {f}
+                        </span>
+                      ))}
+                    </div>
+                  </div>
+                )}
+                {current.text.produced
+                  .filter((p) => p.role === 'offcut')
+                  .map((o) => (
+                    <p key={o.name} className="text-amber">
+                      Keep offcut {o.name} (<span className="whitespace-nowrap">{o.size}</span>) for the rack.
+                    </p>
+                  ))}
+              </div>
+            )}
           </div>
         ) : (
           <p className="text-graphite-mute">No saw order for this piece yet.</p>
@@ -211,11 +259,11 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                     {tick ? '✓' : ''}
                   </span>
                 </button>
-                <button type="button" onClick={() => setPicked(text.n)} className="flex min-h-16 flex-1 flex-col justify-center px-3 text-left hover:bg-paper">
-                  <span className="flex flex-wrap items-center gap-2">
+                <button type="button" onClick={() => setPicked(text.n)} className="flex min-h-16 min-w-0 flex-1 flex-col justify-center px-3 py-1.5 text-left hover:bg-paper">
+                  <span className="flex flex-wrap items-center gap-x-2 gap-y-1">
                     <span className="font-mono text-lg font-semibold">{text.n}</span>
-                    <StepKindBadge kind={text.kind} trim={text.trim} />
-                    <span className="font-mono text-lg">{text.fence}</span>
+                    <StepKindBadge kind={text.kind} trim={text.trim} narrow={text.narrow} />
+                    <span className="whitespace-nowrap font-mono text-lg">{text.fence}</span>
                     <span className="text-sm text-graphite-mute">piece {text.piece}</span>
                   </span>
                   <span className="text-xs text-graphite-mute" suppressHydrationWarning>
@@ -229,4 +277,20 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
       </section>
     </div>
   );
+}
+
+/**
+ * The fence setting as large as fits on one line: IBM Plex Mono advances 0.6 em a character (a little more for
+ * the fallback ≈), so n characters fit the column at 100cqi / (0.64 n), up to 8 rem.
+ */
+export function fenceFontSize(text: string): string {
+  const chars = Math.max([...text].length, 4);
+  return `min(8rem, calc(100cqi / ${(chars * 0.64).toFixed(2)}))`;
+}
+
+function WakeNote({ state }: { state: WakeState }) {
+  if (state === 'on') return <span data-testid="wake-state">The screen stays on while this page is open.</span>;
+  if (state === 'off') return <span data-testid="wake-state">The screen may dim: this browser did not keep it awake (tap the page to try again).</span>;
+  if (state === 'unsupported') return <span data-testid="wake-state">This browser cannot keep the screen awake: set its screen timeout longer.</span>;
+  return null;
 }

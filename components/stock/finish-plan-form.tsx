@@ -99,7 +99,7 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
   return (
     <form className="space-y-5" aria-label="Finish the plan" onSubmit={(e) => { e.preventDefault(); submit(); }}>
       <div className="card flex flex-wrap items-end gap-3 p-4">
-        <div className="w-64">
+        <div className="w-64 max-w-full">
           <label htmlFor="all-location" className="field-label">Rack location for offcuts</label>
           <input id="all-location" className="field-input" value={allTo} onChange={(e) => setAllTo(e.target.value)} placeholder="Offcut bin 1" />
         </div>
@@ -119,9 +119,9 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
                     <li key={key} className="flex flex-wrap items-center gap-2 text-sm" data-testid="finish-offcut">
                       <label className="flex min-h-11 items-center gap-2">
                         <input type="checkbox" className="h-5 w-5" checked={!dropped.has(key)} onChange={() => toggle(dropped, key, setDropped)} />
-                        <span className="num inline-block w-40 whitespace-nowrap text-left">{len(o.w)} × {len(o.h)}</span>
+                        <span className="num min-w-40 whitespace-nowrap text-left" data-testid="finish-offcut-size">{len(o.w)} × {len(o.h)}</span>
                       </label>
-                      <input className="field-input w-40 py-1" aria-label={`Location for offcut ${len(o.w)} × ${len(o.h)}`} placeholder={allTo || 'location'} value={locations[key] ?? ''} onChange={(e) => setLocations({ ...locations, [key]: e.target.value })} disabled={dropped.has(key)} />
+                      <input className="field-input w-48 max-w-full py-1" aria-label={`Location for offcut ${len(o.w)} × ${len(o.h)}`} placeholder={allTo || 'location'} value={locations[key] ?? ''} onChange={(e) => setLocations({ ...locations, [key]: e.target.value })} disabled={dropped.has(key)} />
                     </li>
                   );
                 })}
@@ -138,7 +138,10 @@ export function FinishPlanForm({ planId, pieces, units, defaultLocation }: { pla
                     <li key={key} data-testid="finish-part" className={damaged.has(key) ? 'lg:col-span-2' : undefined}>
                       <label className="flex min-h-11 items-center gap-2 text-sm">
                         <input type="checkbox" className="h-5 w-5" checked={damaged.has(key)} onChange={() => toggle(damaged, key, setDamaged)} />
-                        {name} <span className="text-xs text-graphite-mute">{len(pt.w)} × {len(pt.h)}</span>
+                        <span>
+                          {pt.label} <span className="whitespace-nowrap">#{pt.instance}</span>{' '}
+                          <span className="whitespace-nowrap text-xs text-graphite-mute">{len(pt.w)} × {len(pt.h)}</span>
+                        </span>
                       </label>
                       {damaged.has(key) && (
                         <input className="field-input mb-2 py-1" list="recut-reasons" aria-label={`What happened to ${name}`} placeholder="What happened (tear-out, chipped edge…)" value={reasons[key] ?? ''} onChange={(e) => setReasons({ ...reasons, [key]: e.target.value })} maxLength={200} />

@@ -31,9 +31,12 @@ export function MovementHistory({ movements, changes = [], money = null, timeZon
             if (m) {
               const words = describeMovement(m);
               return (
-                <tr key={m.id} data-testid="movement" data-kind={m.kind} title={words.meaning}>
+                <tr key={m.id} data-testid="movement" data-kind={m.kind}>
                   <td className="whitespace-nowrap">{when.format(m.createdAt)}</td>
-                  <td className="whitespace-nowrap">{words.what}</td>
+                  <td>
+                    <span className="whitespace-nowrap">{words.what}</span>
+                    {words.meaning && <span className="block min-w-48 max-w-72 text-xs text-graphite-mute">{words.meaning}</span>}
+                  </td>
                   <td>{m.item ?? '—'}</td>
                   <td className="num" data-testid="movement-on-hand">{words.onHand}</td>
                   <td className="num" data-testid="movement-reserved">{words.reserved}</td>

@@ -23,8 +23,9 @@ const editable = (s: StockItemRow): EditableStock => ({
 /** Sheets and boards with free, reserved and low-stock figures; prices and value only for those who may see them. */
 export function StockTable({ items, len, thick, money, currency, canWrite }: { items: StockItemRow[]; len: (mm: number) => string; thick: (mm: number) => string; money: ((cents: number) => string) | null; currency: string; canWrite: boolean }) {
   return (
-    <div className="card overflow-x-auto">
+    <div className="card relative overflow-x-auto">
       <table className="data-table [&_td]:px-2 [&_th]:px-2" aria-label="Sheets and boards">
+        <caption className="caption-bottom border-t border-paper-edge px-2 py-2 text-left text-xs text-graphite-mute">Tap a material for the history of that size.</caption>
         <thead>
           <tr>
             <th>Material</th>
@@ -45,14 +46,14 @@ export function StockTable({ items, len, thick, money, currency, canWrite }: { i
             return (
               <tr key={s.id} data-testid="stock-row" data-material={s.material}>
                 <td>
-                  <Link href={`/stock?view=history&item=${s.id}`} className="whitespace-nowrap font-medium text-graphite no-underline hover:underline" title="History of this size">{s.material}</Link>
+                  <Link href={`/stock?view=history&item=${s.id}`} className="whitespace-nowrap font-medium text-graphite underline decoration-paper-edge hover:decoration-graphite">{s.material}</Link>
                   <div className="whitespace-nowrap text-xs text-graphite-mute">
                     {[s.kind === 'sheet' ? 'sheet' : `board ${s.surfacing}`.trim(), s.grade, s.buyable ? 'can buy' : ''].filter(Boolean).join(' · ')}
                   </div>
                 </td>
                 <td>
                   {s.nominalThickness}
-                  <span className="ml-1 text-xs text-graphite-mute">({thick(s.thicknessMm)})</span>
+                  <span className="ml-1 whitespace-nowrap text-xs text-graphite-mute">({thick(s.thicknessMm)})</span>
                 </td>
                 <td className="num whitespace-nowrap">{len(s.lengthMm)} × {len(s.widthMm)}</td>
                 <td className="num" data-testid="on-hand">{s.onHand}</td>

@@ -39,13 +39,13 @@ export function TeamManager({ selfId }: { selfId: string }) {
   }
 
   return (
-    <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
+    <div className="grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
       <div>
         {team.isPending && <p role="status" className="text-sm text-graphite-mute">Loading the team…</p>}
         {team.isError && <p role="alert" className="text-sm text-brick">Could not load the team: {team.error.message}</p>}
         {rowError && <p role="alert" className="mb-3 rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">{rowError}</p>}
         {team.isSuccess && (
-          <div className="card overflow-hidden">
+          <div className="card overflow-x-auto">
             <table className="data-table" aria-label="Team">
               <thead>
                 <tr>

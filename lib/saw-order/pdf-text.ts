@@ -1,4 +1,4 @@
-import { PDFDocument, StandardFonts, type PDFFont } from 'pdf-lib';
+import { PDFDocument, StandardFonts } from 'pdf-lib';
 
 /**
  * Text for pdf-lib's standard fonts, which encode only WinAnsi: typographic marks become their plain forms and
@@ -24,20 +24,6 @@ export function pdfText(s: string): string {
     .map((ch) => PLAIN[ch] ?? ch)
     .join('')
     .replace(/[^\x20-\x7E\xA0-\xFF]/g, '?');
-}
-
-/** Shortens text with "..." to fit `width` points. */
-export function fit(s: string, font: PDFFont, size: number, width: number): string {
-  const text = pdfText(s);
-  if (font.widthOfTextAtSize(text, size) <= width) return text;
-  let lo = 0;
-  let hi = text.length;
-  while (lo < hi) {
-    const mid = Math.ceil((lo + hi) / 2);
-    if (font.widthOfTextAtSize(text.slice(0, mid) + '...', size) <= width) lo = mid;
-    else hi = mid - 1;
-  }
-  return text.slice(0, lo) + '...';
 }
 
 /** A file name any system accepts: letters, digits and dashes. */

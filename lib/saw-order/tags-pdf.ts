@@ -1,14 +1,14 @@
 /**
  * Part tags as a PDF on a label sheet at its exact size, for printers whose print dialog would scale a web page.
- * Same content as the tags page: job, part, size, grain arrow, QR code. Helvetica with ASCII lengths (see
- * saw-order-pdf.ts for why).
+ * Same content as the tags page: job, part and its number, size, material and thickness, grain arrow, stock piece,
+ * QR code. Helvetica with ASCII lengths (see saw-order-pdf.ts for why).
  */
 import { rgb, type PDFFont } from 'pdf-lib';
-import { formatLength } from '@/lib/units/format-length';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { labelOrigin, paginate, type LabelSheet } from './label-sheets';
-import type { PartTag } from './part-tags';
-import { fit, newPdf } from './pdf-text';
+import { tagText, type PartTag } from './part-tags';
+import { fitNameWithSuffix, shrinkToFit } from './fit-text';
+import { newPdf, pdfText } from './pdf-text';
 import { qrPath } from './qr-path';
 
 const PT_PER_MM = 72 / 25.4;
@@ -27,7 +27,6 @@ export interface TagsPdfInput {
 export async function tagsPdf(input: TagsPdfInput): Promise<Uint8Array> {
   const { doc, regular, bold } = await newPdf(`Part tags - ${input.jobName}`);
   const { sheet } = input;
-  const len = (mm: number) => formatLength(mm, input.units, { style: 'ascii' });
   const pageH = sheet.page.height * PT_PER_MM;
 
   for (const tags of paginate(input.tags, sheet)) {
@@ -45,21 +44,54 @@ export async function tagsPdf(input: TagsPdfInput): Promise<Uint8Array> {
       const tx = x0 + qrSide + 1.5 * PT_PER_MM;
       const tw = (at.x + sheet.label.width - 2) * PT_PER_MM - tx;
       const mid = top - h / 2;
-      const line = (text: string, y: number, font: PDFFont, size: number, color = ink) => page.drawText(fit(text, font, size, tw), { x: tx, y, size, font, color });
-      line(input.jobName, mid + 12, regular, 6, mute);
-      line(`${tag.label} #${tag.instance}`, mid + 3, bold, 9);
-      line(`${len(tag.length)} x ${len(tag.width)}`, mid - 7, bold, 8);
+      for (const line of tagLines(tag, input, { regular, bold }, tw)) {
+        page.drawText(line.text, { x: tx + (line.right ? tw - line.font.widthOfTextAtSize(line.text, line.size) : (line.dx ?? 0)), y: mid + line.dy, size: line.size, font: line.font, color: line.mute ? mute : ink });
+      }
       if (tag.grain) {
-        const y = mid - 14;
+        const y = mid - 19;
         page.drawLine({ start: { x: tx, y }, end: { x: tx + 22, y }, thickness: 0.8, color: ink });
         page.drawSvgPath('M 0 0 L -4 -2 L -4 2 Z', { x: tx + 24, y, color: ink });
-        page.drawText('grain', { x: tx + 27, y: y - 2, size: 6, font: regular, color: mute });
-      } else {
-        page.drawText('grain either way', { x: tx, y: mid - 16, size: 6, font: regular, color: mute });
       }
-      const piece = `Piece ${tag.pieceName}`;
-      page.drawText(piece, { x: tx + tw - regular.widthOfTextAtSize(piece, 6), y: mid - 16, size: 6, font: regular, color: mute });
     });
   }
   return doc.save();
+}
+
+export interface TagLine {
+  text: string;
+  font: PDFFont;
+  size: number;
+  /** Baseline, points above the label's middle. */
+  dy: number;
+  mute?: boolean;
+  /** Points in from the column's left edge. */
+  dx?: number;
+  /** Set against the right edge of the text column. */
+  right?: boolean;
+}
+
+/**
+ * The lines of one tag in a text column `width` points wide: the job (abbreviated if it must be), the part with its
+ * "#n" (the name shrinks, then is abbreviated; the number never), the size (shrinks, never cut), the material with
+ * its thickness (the material abbreviated first), then grain and stock piece.
+ */
+export function tagLines(tag: PartTag, input: Pick<TagsPdfInput, 'jobName' | 'units'>, fonts: { regular: PDFFont; bold: PDFFont }, width: number): TagLine[] {
+  const { regular, bold } = fonts;
+  const text = tagText(tag, input.units, 'ascii');
+  const measure = (font: PDFFont) => (s: string, size: number) => font.widthOfTextAtSize(pdfText(s), size);
+  const job = fitNameWithSuffix(pdfText(input.jobName), '', measure(regular), 6, width, 5);
+  const name = fitNameWithSuffix(pdfText(text.name), ` ${text.number}`, measure(bold), 9, width, 6.5);
+  const size = shrinkToFit(pdfText(text.size), measure(bold), 8, width, 3);
+  const stock = fitNameWithSuffix(pdfText(text.material), ` ${pdfText(text.thickness)}`, measure(regular), 6.5, width, 5);
+  const piece = pdfText(text.piece);
+  const grain = tag.grain ? 'grain' : 'grain either way';
+  return [
+    { text: job.text, font: regular, size: job.size, dy: 14, mute: true },
+    { text: name.text, font: bold, size: name.size, dy: 5 },
+    { text: pdfText(text.size), font: bold, size, dy: -5 },
+    { text: stock.text, font: regular, size: stock.size, dy: -13 },
+    // With a grain arrow drawn first (0 to 24 pt), the word follows it.
+    { text: grain, font: regular, size: 6, dy: -21, mute: true, dx: tag.grain ? 27 : 0 },
+    { text: piece, font: regular, size: 6, dy: -21, mute: true, right: true },
+  ];
 }

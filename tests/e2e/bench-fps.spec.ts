@@ -4,7 +4,7 @@
  * benchmarks, never in timed tests).
  */
 import fs from 'node:fs';
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import { fitView, layoutPieces, toScreen } from '../../lib/layout-bench/world';
 import { shot, signIn } from './support/session';
 

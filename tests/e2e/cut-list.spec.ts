@@ -1,5 +1,5 @@
 import fs from 'node:fs';
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import Papa from 'papaparse';
 import { shot, signIn } from './support/session';
 

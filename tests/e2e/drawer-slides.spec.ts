@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './support/test';
 import { shot, signIn } from './support/session';
 
 /** A job of this spec's own, so the seeded jobs other specs count on stay as they were. */

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import { signIn } from './support/session';
 
 // Regression: while the list was still loading, the jobs table was handed a fresh empty array on every render and

@@ -4,7 +4,7 @@
  * the PDF.
  */
 import fs from 'node:fs';
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './support/test';
 import { PDFDocument } from 'pdf-lib';
 import { dragPart, pickMove, savedPlan } from './support/bench';
 import { shot, signIn } from './support/session';

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import { dragPart, pickMove, savedPlan } from './support/bench';
 import { shot, signIn } from './support/session';
 

@@ -4,7 +4,7 @@
  * (on the plan's own offcut) and releases → the cutter cuts the re-cut → the job is done. The job's status is read
  * from its page at each step.
  */
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './support/test';
 import { shot, signIn } from './support/session';
 
 const DESK = { width: 1440, height: 900 };

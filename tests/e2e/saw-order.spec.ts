@@ -1,5 +1,5 @@
 import fs from 'node:fs';
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './support/test';
 import { PDFDocument } from 'pdf-lib';
 import { shot, signIn } from './support/session';
 
@@ -100,6 +100,11 @@ test('part tags print one per part on a chosen label sheet, and a tag leads to i
   await page.emulateMedia({ media: 'print' });
   await expect(page.getByRole('button', { name: 'Print tags' })).toBeHidden();
   await shot(page, 'part-tags-a4-print');
+  // Printed by Chromium on the sheet's own page size (A4, 595.28 × 841.89 pt, ISO 216), a label sheet a page.
+  const printed = await PDFDocument.load(await page.pdf({ preferCSSPageSize: true }));
+  expect(printed.getPageCount()).toBe(Math.ceil(placed / 24));
+  expect(printed.getPage(0).getWidth()).toBeCloseTo(595.28, 0);
+  expect(printed.getPage(0).getHeight()).toBeCloseTo(841.89, 0);
   await page.emulateMedia({ media: 'screen' });
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download PDF' }).click()]);
   const tagsPdf = await PDFDocument.load(fs.readFileSync(await download.path()));

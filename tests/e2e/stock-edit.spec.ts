@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import { shot, signIn } from './support/session';
 
 test('the owner edits a size’s location and cost, sees them in the table and the change in its history; an estimator sees no Edit action', async ({ page, browser }) => {

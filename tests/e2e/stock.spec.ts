@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './support/test';
 import { shot, signIn } from './support/session';
 
 /** The seeded ¼″ maple ply sheets (nine on hand, none reserved by the demo plan). */

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import { shot, signIn } from './support/session';
 
 test('the owner adds a cutter, who can sign in; after deactivation their next request is refused', async ({ browser }) => {

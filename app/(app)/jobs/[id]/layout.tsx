@@ -10,6 +10,7 @@ import { JobSectionLinks } from '@/components/jobs/job-section-links';
 import { JobStatusBadge } from '@/components/jobs/job-status';
 import { can } from '@/lib/auth/permissions';
 import { requirePageUser } from '@/lib/auth/session';
+import { jobSectionsFor } from '@/lib/nav';
 
 /** A job's header and its sections: cut list, drawer schedules, plan, takeoff. Each section is its own route. */
 export default async function JobLayout({ children, params }: { children: ReactNode; params: Promise<{ id: string }> }) {
@@ -25,7 +26,7 @@ export default async function JobLayout({ children, params }: { children: ReactN
       <Link href="/jobs" className="text-sm text-graphite-mute print:hidden">← Jobs</Link>
       <header className="mb-4 mt-2 flex flex-wrap items-start justify-between gap-3">
         <div className="min-w-0">
-          <h1 className="flex flex-wrap items-center gap-3">
+          <h1 className="flex flex-wrap items-center gap-x-3 gap-y-1">
             {job.name} <span data-testid="job-status"><JobStatusBadge status={job.status} /></span>
           </h1>
           <p className="mt-1 text-sm text-graphite-mute">
@@ -35,7 +36,7 @@ export default async function JobLayout({ children, params }: { children: ReactN
         </div>
         {edit && <JobActions job={job} statusChoices={edit.statusChoices} hasHistory={edit.hasHistory} followsPlans={user.role !== 'owner'} />}
       </header>
-      <JobSectionLinks jobId={job.id} />
+      <JobSectionLinks jobId={job.id} sections={jobSectionsFor(user.role)} />
       {children}
     </div>
   );

@@ -25,26 +25,32 @@ export default async function CuttingPage({ params }: { params: Promise<{ id: st
 
   return (
     <div>
-      <Link href="/shop-floor" className="text-sm text-graphite-mute">
-        ← Shop floor
-      </Link>
-      <header className="mb-4 mt-2 flex flex-wrap items-end justify-between gap-3">
-        <div>
-          <h1 className="flex items-center gap-3">
-            {order.job.name} <PlanStatusBadge status={ticks.status} />
-          </h1>
-          <p className="mt-1 text-sm text-graphite-mute">{order.name}</p>
-        </div>
-        <Link className="btn-quiet" href={`/plans/${order.id}/saw-order`}>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <Link href="/shop-floor" className="text-sm text-graphite-mute">
+          ← Shop floor
+        </Link>
+        <Link className="btn-quiet px-3 py-1.5" href={`/plans/${order.id}/saw-order`}>
           Printable saw order
         </Link>
+      </div>
+      <header className="mb-3 mt-1">
+        <h1 className="flex flex-wrap items-center gap-x-3 gap-y-1">
+          {order.job.name} <PlanStatusBadge status={ticks.status} />
+        </h1>
+        <p className="text-sm text-graphite-mute">{order.name}</p>
       </header>
-      <SawCautions compact />
+      {/* A line of the cautions up top keeps the cut on screen; the whole list follows the cuts. */}
+      <p className="mb-3 rounded-md border border-amber/40 bg-amber-wash px-3 py-1.5 text-sm text-graphite-soft">
+        Guard on, push stick ready: <a href="#saw-safety">the cautions</a> are below.
+      </p>
       {atTheSaw ? (
         <CuttingView planId={order.id} views={pieceViews(order.document.pieces, order.units, order.kerf)} initial={ticks} canFinish={can(user.role, 'plans:finish')} />
       ) : (
         <p className="card px-4 py-6">This plan is {order.status}: there is nothing left to cut on it.</p>
       )}
+      <div id="saw-safety" className="mt-6">
+        <SawCautions compact />
+      </div>
     </div>
   );
 }

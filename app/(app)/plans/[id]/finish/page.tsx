@@ -11,6 +11,7 @@ import { getShopSettings } from '@/db/queries/shops';
 import { FinishPlanForm, type FinishPiece } from '@/components/stock/finish-plan-form';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
+import { can } from '@/lib/auth/permissions';
 import { requirePageUser } from '@/lib/auth/session';
 import { isKeepableOffcut } from '@/lib/stock/offcut-rules';
 import { formatLength } from '@/lib/units/format-length';
@@ -24,7 +25,8 @@ export default async function FinishPlanPage({ params }: { params: Promise<{ id:
   if (!id.success) notFound();
   const db = await getDb();
   const [plan, settings] = await Promise.all([getPlan(db, user.shopId, id.data), getShopSettings(db, user.shopId)]);
-  if (!plan || !settings) notFound();
+  // Drafts exist only for people who may edit plans, as in the API (GET /api/plans/:id).
+  if (!plan || !settings || (plan.status === 'draft' && !can(user.role, 'plans:write'))) notFound();
   const [job] = await db.select({ name: jobs.name }).from(jobs).where(eq(jobs.id, plan.jobId));
   const len = (mm: number) => formatLength(mm, settings.units);
   const request = nestRequestSchema.safeParse(plan.request);

@@ -27,8 +27,7 @@ export default async function SawOrderPage({ params }: { params: Promise<{ id: s
 
   return (
     <div className="saw-order">
-      {/* Printed: no app chrome (the shell's sidebar hides itself), a stock piece per page. */}
-      <style>{`@media print { @page { margin: 10mm; } main { padding: 0 !important; } }`}</style>
+      {/* Printed: no app chrome (the shell hides itself), a stock piece per page, 10 mm margins (app/globals.css). */}
       <Link href={`/jobs/${order.job.id}/plan`} className="text-sm text-graphite-mute print:hidden">
         ← {order.job.name}
       </Link>

@@ -10,10 +10,9 @@ import { TagSheets } from '@/components/part-tags/tag-sheets';
 import { can } from '@/lib/auth/permissions';
 import { requirePageUser } from '@/lib/auth/session';
 import { LABEL_SHEETS, labelSheet } from '@/lib/saw-order/label-sheets';
-import { partTagPath, partTags } from '@/lib/saw-order/part-tags';
+import { partTagPath, partTags, tagText } from '@/lib/saw-order/part-tags';
 import { qrPath } from '@/lib/saw-order/qr-path';
 import { siteOrigin } from '@/lib/saw-order/site-origin';
-import { formatLength } from '@/lib/units/format-length';
 
 export const metadata: Metadata = { title: 'Part tags' };
 
@@ -25,16 +24,14 @@ export default async function PartTagsPage({ params, searchParams }: { params: P
   if (!order) notFound();
   const sheet = labelSheet((await searchParams).sheet);
   const origin = siteOrigin(await headers(), process.env.NEXTAUTH_URL);
-  const len = (mm: number) => formatLength(mm, order.units);
   const items = partTags(order.document, order.parts).map((tag) => {
     const url = origin + partTagPath(order.id, tag);
-    return { tag, url, size: `${len(tag.length)} × ${len(tag.width)}`, qr: qrPath(url) };
+    return { tag, url, text: tagText(tag, order.units), qr: qrPath(url) };
   });
   const unplaced = order.document.unplaced.length;
 
   return (
     <div>
-      <style>{`@media print { @page { size: ${sheet.page.css}; margin: 0; } main { padding: 0 !important; } }`}</style>
       <div className="print:hidden">
         <Link href={`/plans/${order.id}/saw-order`} className="text-sm text-graphite-mute">
           ← Saw order
