@@ -170,7 +170,7 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
   return (
     <form onSubmit={handleSubmit((v) => save.mutate(v))} aria-label={editing ? 'Edit drawer schedule' : 'New drawer schedule'} className="card mb-6 p-5">
       <h3 className="mb-4 font-semibold">{editing ? `Edit “${editing.input.label}”` : 'New drawer schedule'}</h3>
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
         <div className="grid content-start gap-4 sm:grid-cols-2">
           {field('label', 'Label', { placeholder: 'Kitchen base drawers' })}
           {field('quantity', 'Boxes')}
@@ -232,10 +232,7 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
                   <tbody>
                     {sized.parts.map((p) => (
                       <tr key={p.role}>
-                        <td>
-                          {ROLE_NAMES[p.role]}
-                          {p.machining.length > 0 && <span className="block min-w-52 max-w-72 text-xs text-graphite-mute">{p.machining.join(' ')}</span>}
-                        </td>
+                        <td>{ROLE_NAMES[p.role]}</td>
                         <td className="num">{p.quantity}</td>
                         <td className="num whitespace-nowrap">{len(p.lengthMm)}</td>
                         <td className="num whitespace-nowrap">{len(p.widthMm)}</td>
@@ -247,6 +244,16 @@ export function ScheduleForm({ jobId, units, cards, offers, slideModels, editing
                   </tbody>
                 </table>
               </div>
+              {sized.parts.some((p) => p.machining.length > 0) && (
+                <dl className="space-y-1 text-xs text-graphite-soft" aria-label="Machining">
+                  {sized.parts.filter((p) => p.machining.length > 0).map((p) => (
+                    <div key={p.role}>
+                      <dt className="inline font-medium text-graphite">{ROLE_NAMES[p.role]}: </dt>
+                      <dd className="inline">{p.machining.join(' ')}</dd>
+                    </div>
+                  ))}
+                </dl>
+              )}
               {sized.warnings.length > 0 && (
                 <div role="note" className="rounded-md border border-amber/40 bg-amber-wash px-3 py-2 text-sm text-amber">
                   <p className="font-medium">Check the front’s fit:</p>

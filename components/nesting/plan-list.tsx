@@ -26,7 +26,7 @@ export function PlanList({ jobId, currency, showPrices }: { jobId: string; curre
         <tbody>
           {plans.data.map((p) => (
             <tr key={p.id}>
-              <td className="font-medium">
+              <td className="min-w-40 font-medium">
                 <Link href={`/jobs/${jobId}/plan/${p.id}`}>{p.name}</Link>
                 {p.recutPlan && <span className="ml-2 whitespace-nowrap"><StatusBadge tone="warn">Re-cuts</StatusBadge></span>}
               </td>

@@ -57,8 +57,9 @@ export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan;
           {t.byMaterial.map((m) => `${m.pieces} × ${KIND[m.kind].toLowerCase()} ${thick(m.thickness)} ${m.material}`).join(' · ')}
         </p>
       )}
-      <div className="grid gap-4 lg:grid-cols-2">
-        <section className="card overflow-x-auto p-3">
+      {/* Side by side when both have lines; otherwise the one with lines takes the room and the empty one stays small. */}
+      <div className={`grid gap-4 ${plan.stockToPull.length > 0 && plan.stockToBuy.length > 0 ? 'xl:grid-cols-2' : 'lg:grid-cols-[minmax(0,3fr)_minmax(0,1fr)]'}`}>
+        <section className={`card overflow-x-auto p-3 ${plan.stockToPull.length === 0 && plan.stockToBuy.length > 0 ? 'lg:order-2' : ''}`}>
           <h3 className="mb-2 text-sm font-semibold">Stock to pull from the rack</h3>
           {stockTable(plan.stockToPull, 'Stock to pull')}
         </section>

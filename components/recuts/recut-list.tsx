@@ -81,7 +81,7 @@ function RecutRow({ recut: r, jobId, len, thick, canCancel }: { recut: RecutView
   const closed = r.status !== 'open' && r.status !== 'planned';
   return (
     <tr data-testid="recut" data-status={r.status} className={closed ? 'text-graphite-mute' : undefined}>
-      <td>
+      <td className="min-w-36">
         <span className="font-medium whitespace-nowrap">{recutLabel(r)}</span>
         <span className="block text-xs text-graphite-mute">{thick(r.thicknessMm)} {r.material}</span>
       </td>
@@ -90,7 +90,7 @@ function RecutRow({ recut: r, jobId, len, thick, canCancel }: { recut: RecutView
         <span className="whitespace-nowrap">{len(r.lengthMm)} × {len(r.widthMm)}</span>
         <span className="block font-sans text-xs text-graphite-mute">{r.grain === 'any' ? 'may turn' : 'grain along the length'}</span>
       </td>
-      <td>
+      <td className="min-w-48">
         {r.reason}
         <span className="block text-xs text-graphite-mute">
           {r.sourcePlan ? `finishing “${r.sourcePlan.name}”` : 'at the saw'}{r.createdBy ? ` · ${r.createdBy}` : ''}
