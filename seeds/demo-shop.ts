@@ -8,6 +8,7 @@ import { slideModelSchema, type SlideModelInput } from '@/shared/schemas/slide-m
 import { optimize } from '@/lib/nesting';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { inches } from '@/lib/units/length';
+import { seedDemoHistory } from './demo-history';
 
 /**
  * An invented shop for trying Kerfwise: Larkspur Cabinet Works, a four-person shop building kitchens, vanities
@@ -72,6 +73,8 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
         minOffcutLengthMm: inches(12),
         minOffcutWidthMm: inches(4),
         wastePercent: 15,
+        timeZone: 'America/Chicago',
+        offcutAgeMonths: 3,
       })
       .returning({ id: shops.id });
     const shopId = shop.id;
@@ -119,9 +122,13 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
       { shopId, jobId: vanity.id, label: 'Face frame stile', quantity: 2, lengthMm: inches(21), widthMm: inches(1.5), material: 'White oak', thicknessMm: inches(13 / 16), grain: 'along-length', sort: 2 },
       { shopId, jobId: vanity.id, label: 'Face frame rail', quantity: 3, lengthMm: inches(33), widthMm: inches(1.5), material: 'White oak', thicknessMm: inches(13 / 16), grain: 'along-length', sort: 3 },
     ]);
-    return { seeded: true, shopId, kitchenJobId: kitchen.id, estimatorId: estimator };
+    const cutter = people.find((p) => p.role === 'cutter')!.id;
+    return { seeded: true, shopId, kitchenJobId: kitchen.id, estimatorId: estimator, cutterId: cutter };
   }).then(async (result) => {
-    if (result.seeded) await seedReleasedPlan(db, result.shopId, result.kitchenJobId, result.estimatorId);
+    if (result.seeded) {
+      await seedReleasedPlan(db, result.shopId, result.kitchenJobId, result.estimatorId);
+      await seedDemoHistory(db, { shopId: result.shopId, estimatorId: result.estimatorId, cutterId: result.cutterId });
+    }
     return { seeded: true, shopId: result.shopId };
   });
 }

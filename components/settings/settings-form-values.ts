@@ -20,8 +20,16 @@ export const LENGTH_FIELDS = [
 ] as const;
 type LengthKey = (typeof LENGTH_FIELDS)[number][0];
 
+/** Whole numbers, each with the message for text that is not one. */
+export const WHOLE_FIELDS = [
+  ['wastePercent', 'Enter the allowance as a whole percent, such as 10.'],
+  ['yieldTargetPercent', 'Enter the target as a whole percent, such as 75.'],
+  ['offcutAgeMonths', 'Enter a whole number of months, such as 6.'],
+] as const;
+type WholeKey = (typeof WHOLE_FIELDS)[number][0];
+
 /** The form's fields as text: what a person sees and may change. */
-export type SettingsFormText = { name: string; units: string; currency: string; wastePercent: string } & Record<LengthKey, string>;
+export type SettingsFormText = { name: string; units: string; currency: string; timeZone: string } & Record<LengthKey | WholeKey, string>;
 
 export const unitKey = (u: ShopUnits) => UNIT_CHOICES.find((c) => c.units.system === u.system && c.units.precision === u.precision && c.units.feet === u.feet)?.key ?? 'in16';
 
@@ -31,7 +39,8 @@ export const unitKey = (u: ShopUnits) => UNIT_CHOICES.find((c) => c.units.system
  */
 export function settingsFormText(current: ShopSettings): SettingsFormText {
   const lengths = Object.fromEntries(LENGTH_FIELDS.map(([key]) => [key, exactLengthText(current[key], current.units)])) as Record<LengthKey, string>;
-  return { name: current.name, units: unitKey(current.units), currency: current.currency, wastePercent: String(current.wastePercent), ...lengths };
+  const wholes = Object.fromEntries(WHOLE_FIELDS.map(([key]) => [key, String(current[key])])) as Record<WholeKey, string>;
+  return { name: current.name, units: unitKey(current.units), currency: current.currency, timeZone: current.timeZone, ...wholes, ...lengths };
 }
 
 /**
@@ -50,11 +59,14 @@ export function readSettingsForm(current: ShopSettings, text: SettingsFormText):
   }
   if (text.name.trim() !== current.name) patch.name = text.name.trim();
   if (text.currency.trim().toUpperCase() !== current.currency) patch.currency = text.currency.trim().toUpperCase();
-  if (text.wastePercent.trim() !== shown.wastePercent) {
-    const waste = Number(text.wastePercent);
-    if (text.wastePercent.trim() === '' || !Number.isFinite(waste)) errors.wastePercent = ['Enter the allowance as a whole percent, such as 10.'];
-    else patch.wastePercent = waste;
+  for (const [key, message] of WHOLE_FIELDS) {
+    const typed = text[key].trim();
+    if (typed === shown[key]) continue;
+    const n = Number(typed);
+    if (typed === '' || !Number.isFinite(n)) errors[key] = [message];
+    else patch[key] = n;
   }
+  if (text.timeZone.trim() !== current.timeZone) patch.timeZone = text.timeZone.trim();
   if (text.units !== shown.units) patch.units = UNIT_CHOICES.find((c) => c.key === text.units)?.units ?? current.units;
   return Object.keys(errors).length ? { ok: false, errors } : { ok: true, patch };
 }

@@ -4,6 +4,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { api, ApiError } from '@/lib/client/api';
 import type { ShopSettings } from '@/shared/schemas/shop';
+import { timeZoneChoices } from '@/lib/dates/shop-time';
 import { LENGTH_FIELDS, readSettingsForm, settingsFormText, UNIT_CHOICES, type SettingsFormText } from './settings-form-values';
 
 export function SettingsForm() {
@@ -63,6 +64,26 @@ export function SettingsForm() {
         <label htmlFor="s-waste" className="field-label">Spoilage allowance for takeoffs (%)</label>
         <input id="s-waste" name="wastePercent" type="number" min={0} max={90} className="field-input" defaultValue={shown.wastePercent} />
         {fields.wastePercent && <p className="field-error">{fields.wastePercent[0]}</p>}
+      </div>
+      <div>
+        <label htmlFor="s-zone" className="field-label">Time zone</label>
+        <select id="s-zone" name="timeZone" className="field-input" defaultValue={shown.timeZone}>
+          {timeZoneChoices().map((z) => <option key={z} value={z}>{z.replace(/_/g, ' ')}</option>)}
+        </select>
+        <p className="mt-1 text-xs text-graphite-mute">Reports group and show dates on the shop’s clock.</p>
+        {fields.timeZone && <p className="field-error">{fields.timeZone[0]}</p>}
+      </div>
+      <div>
+        <label htmlFor="s-target" className="field-label">Yield target (%)</label>
+        <input id="s-target" name="yieldTargetPercent" type="number" min={1} max={100} className="field-input" defaultValue={shown.yieldTargetPercent} />
+        <p className="mt-1 text-xs text-graphite-mute">Share of the stock area you aim to turn into parts: the line on the yield report.</p>
+        {fields.yieldTargetPercent && <p className="field-error">{fields.yieldTargetPercent[0]}</p>}
+      </div>
+      <div>
+        <label htmlFor="s-age" className="field-label">Offcuts old after (months)</label>
+        <input id="s-age" name="offcutAgeMonths" type="number" min={1} max={120} className="field-input" defaultValue={shown.offcutAgeMonths} />
+        <p className="mt-1 text-xs text-graphite-mute">Offcuts racked longer are listed on the offcut report, to use or scrap.</p>
+        {fields.offcutAgeMonths && <p className="field-error">{fields.offcutAgeMonths[0]}</p>}
       </div>
       <div className="flex items-center gap-3 md:col-span-2">
         <button type="submit" className="btn-accent" disabled={save.isPending}>{save.isPending ? 'Saving…' : 'Save settings'}</button>

@@ -16,6 +16,9 @@ export async function getShopSettings(db: Db, shopId: string): Promise<ShopSetti
       minOffcutWidthMm: shops.minOffcutWidthMm,
       minFenceWidthMm: shops.minFenceWidthMm,
       wastePercent: shops.wastePercent,
+      timeZone: shops.timeZone,
+      yieldTargetPercent: shops.yieldTargetPercent,
+      offcutAgeMonths: shops.offcutAgeMonths,
     })
     .from(shops)
     .where(eq(shops.id, shopId));

@@ -15,5 +15,11 @@ export const shops = pgTable('shops', {
   minFenceWidthMm: doublePrecision('min_fence_width_mm').notNull().default(25.4),
   /** Waste allowance used by takeoffs, in whole percent. */
   wastePercent: integer('waste_percent').notNull().default(15),
+  /** IANA time zone: every date shown, grouped and exported is in the shop's own zone. */
+  timeZone: text('time_zone').notNull().default('UTC'),
+  /** The yield the owner aims for, in whole percent of stock area (the target line on the yield report). */
+  yieldTargetPercent: integer('yield_target_percent').notNull().default(75),
+  /** Offcuts racked longer than this many months are listed to use or scrap. */
+  offcutAgeMonths: integer('offcut_age_months').notNull().default(6),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 });

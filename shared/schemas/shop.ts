@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isTimeZone } from '@/lib/dates/shop-time';
 import { shopUnitsSchema } from './units';
 
 export { shopUnitsSchema, type ShopUnits } from './units';
@@ -16,6 +17,9 @@ export const shopSettingsSchema = z.object({
   minOffcutWidthMm: positiveMm('Minimum offcut width', 3000),
   minFenceWidthMm: positiveMm('The narrowest rip at the fence', 300),
   wastePercent: z.number().int('Use a whole percent.').min(0).max(90, 'Waste above 90 % looks like a typo.'),
+  timeZone: z.string().trim().refine(isTimeZone, 'Pick the shop’s time zone from the list (a name such as America/Chicago).'),
+  yieldTargetPercent: z.number().int('Use a whole percent.').min(1, 'The yield target is at least 1 %.').max(100, 'The yield target is at most 100 %.'),
+  offcutAgeMonths: z.number().int('Use a whole number of months.').min(1, 'At least 1 month.').max(120, 'More than 10 years looks like a typo.'),
 });
 export type ShopSettings = z.infer<typeof shopSettingsSchema>;
 

@@ -50,7 +50,7 @@ test('the shop’s day with the defaults: job → drawer schedule → CSV → Ne
   await estimator.getByRole('button', { name: 'New job' }).click();
   const form = estimator.getByRole('form', { name: 'New job' });
   await form.getByLabel('Job name').fill(jobName);
-  await form.getByLabel('Customer').fill('Okafor household');
+  await form.getByLabel('Customer').fill('Ashby household');
   await form.getByRole('button', { name: 'Create job' }).click();
   await expect(estimator.getByRole('heading', { level: 1, name: jobName })).toBeVisible();
   const jobId = estimator.url().split('/').pop()!;
@@ -184,7 +184,7 @@ test('the shop’s day with the defaults: job → drawer schedule → CSV → Ne
   await cutter.getByRole('link', { name: 'Finish the plan' }).tap();
   await expect(cutter.getByRole('heading', { name: 'Finish: Entry cubbies and drawers' })).toBeVisible();
   await noSidewaysScroll(cutter, 'The finish form');
-  await cutter.getByLabel('Rack location for offcuts').fill('Offcut bin 4');
+  await cutter.getByLabel('Rack location for offcuts').fill('Offcut shelf 2');
   await cutter.getByRole('checkbox', { name: /^Cubby shelf #1\b/ }).check();
   await cutter.getByLabel('What happened to Cubby shelf #1').fill('Chipped the face on the crosscut');
   await shot(cutter, 'day-11-finish-phone');

@@ -1,7 +1,11 @@
 import bcrypt from 'bcryptjs';
+import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
-import { jobs, plans, shops, slideModels, stockItems, users } from '@/db/schema';
+import { jobs, offcuts, plans, shops, slideModels, stockItems, users } from '@/db/schema';
+import { offcutUse, oldOffcuts, yieldOverTime } from '@/db/queries/reports';
+import { ledgerMismatches } from '@/db/queries/stock';
+import { HISTORY_BIN } from '@/seeds/demo-history';
 import { readPlan, validatePlan } from '@/lib/nesting';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoShop } from '@/seeds/demo-shop';
@@ -36,8 +40,9 @@ describe('the demo shop', () => {
   });
 
   test('has a released plan that passes validatePlan, with exactly its stock reserved', async () => {
-    const [plan] = await handle.db.select().from(plans);
-    expect(plan.status).toBe('released');
+    const released = await handle.db.select().from(plans).where(eq(plans.status, 'released'));
+    expect(released).toHaveLength(1);
+    const [plan] = released;
     const request = nestRequestSchema.parse(plan.request);
     const document = readPlan(plan.document);
     expect(validatePlan(request, document)).toEqual([]);
@@ -84,5 +89,27 @@ describe('the demo shop', () => {
     const again = await seedDemoShop(handle.db);
     expect(again.seeded).toBe(false);
     expect((await handle.db.select().from(shops)).length).toBe(1);
+  });
+
+  test('has six months of past jobs for the reports: each plan valid and finished on its day, today’s rack untouched', async () => {
+    const db = handle.db;
+    const done = await db.select().from(plans).where(eq(plans.status, 'done'));
+    expect(done).toHaveLength(6);
+    for (const p of done) expect(validatePlan(nestRequestSchema.parse(p.request), readPlan(p.document)), p.name).toEqual([]);
+    // Bought for each job: the stock room's counts and its ledger agree, and nothing but the kitchen plan reserves.
+    expect(await ledgerMismatches(db, first.shopId)).toEqual([]);
+    const months = await yieldOverTime(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'month', from: '2026-06-01', to: '2026-11-30' });
+    expect([...new Set(months.map((r) => r.period))]).toEqual(['2026-06-01', '2026-07-01', '2026-08-01', '2026-09-01', '2026-10-01', '2026-11-01']);
+    // The last job ended at 23:30 on 19 November in Chicago (05:30 UTC on the 20th): the 19th's week, Monday the 16th.
+    const weeks = await yieldOverTime(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'week', from: '2026-11-01', to: '2026-11-30' });
+    expect([...new Set(weeks.map((r) => r.period))]).toEqual(['2026-11-16']);
+    expect(months.filter((r) => r.spoiledArea > 0).map((r) => r.period)).toEqual(['2026-08-01']);
+    for (const r of months) expect(r.partArea + r.spoiledArea + r.keptArea + r.sawWasteArea).toBeCloseTo(r.stockArea, 3);
+    const use = await offcutUse(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'month', from: '2026-06-01', to: '2026-11-30' });
+    expect(use.reduce((n, r) => n + r.racked, 0)).toBeGreaterThan(0);
+    const left = await db.select().from(offcuts).where(eq(offcuts.location, HISTORY_BIN));
+    expect(left.filter((o) => o.status === 'available')).toHaveLength(1);
+    const old = await oldOffcuts(db, { shopId: first.shopId, timeZone: 'America/Chicago', months: 1, now: new Date('2026-12-03T12:00:00Z') });
+    expect(old.map((o) => o.location)).toEqual([HISTORY_BIN]);
   });
 });

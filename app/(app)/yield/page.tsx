@@ -6,6 +6,7 @@ import { YieldLedger } from '@/components/yield/yield-ledger';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/session';
+import { shopDay } from '@/lib/dates/shop-time';
 import { formatMoney } from '@/lib/money';
 import { formatArea } from '@/lib/units/format-area';
 
@@ -18,11 +19,11 @@ export default async function YieldPage() {
   if (!settings) return null;
   return (
     <>
-      <PageHeader title="Yield ledger" lead="How much of the stock each finished plan turned into parts, what went back on the rack as offcuts, what the saw wasted (trim, kerf, scraps too small to keep), what was spoiled in parts damaged at the saw, and what the material cost." />
+      <PageHeader title="Yield ledger" lead={`How much of the stock each finished plan turned into parts, what went back on the rack as offcuts, what the saw wasted (trim, kerf, scraps too small to keep), what was spoiled in parts damaged at the saw, and what the material cost. Dates are on the shop’s clock (${settings.timeZone.replace(/_/g, ' ')}).`} />
       {ledger.plans.length === 0 ? (
         <EmptyState title="No finished plans yet.">A plan’s yield, waste and material cost are recorded here when the cutter marks it done.</EmptyState>
       ) : (
-        <YieldLedger ledger={ledger} money={(c) => formatMoney(c, settings.currency)} area={(a) => formatArea(a, settings.units)} />
+        <YieldLedger ledger={ledger} money={(c) => formatMoney(c, settings.currency)} area={(a) => formatArea(a, settings.units)} day={(at) => shopDay(at, settings.timeZone)} />
       )}
     </>
   );

@@ -1,0 +1,188 @@
+import type { Metadata } from 'next';
+import { getDb } from '@/db/client';
+import { offcutUse, oldOffcuts, reportMaterials, yieldOverTime } from '@/db/queries/reports';
+import { getShopSettings } from '@/db/queries/shops';
+import { OffcutUseChart, YieldChart } from '@/components/reports/charts';
+import { EmptyState } from '@/components/ui/empty-state';
+import { FigureCard as Figure } from '@/components/ui/figure-card';
+import { PageHeader } from '@/components/ui/page-header';
+import { requirePageUser } from '@/lib/auth/session';
+import { exactLengthText } from '@/lib/cut-list/exact-length';
+import { rackShare } from '@/lib/reports/offcut-report';
+import { overall, percentText, periodLabel, periodTotals, shares } from '@/lib/reports/yield-report';
+import { formatArea } from '@/lib/units/format-area';
+import { formatLength } from '@/lib/units/format-length';
+import { reportQuerySchema, reportRange } from '@/shared/schemas/report';
+
+export const metadata: Metadata = { title: 'Reports' };
+
+type Search = Record<string, string | string[] | undefined>;
+const first = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
+
+export default async function ReportsPage({ searchParams }: { searchParams: Promise<Search> }) {
+  const user = await requirePageUser('yield:read');
+  const db = await getDb();
+  const settings = await getShopSettings(db, user.shopId);
+  if (!settings) return null;
+  const raw = Object.fromEntries(Object.entries(await searchParams).map(([k, v]) => [k, first(v)]));
+  const parsed = reportQuerySchema.safeParse(raw);
+  const query = parsed.success ? parsed.data : reportQuerySchema.parse({});
+  const range = reportRange(query, settings.timeZone);
+  const problem = !parsed.success ? parsed.error.issues[0].message : 'error' in range ? range.error : null;
+  const shown = 'error' in range ? reportRange(reportQuerySchema.parse({}), settings.timeZone) : range;
+  if ('error' in shown) return null;
+  const filter = { shopId: user.shopId, timeZone: settings.timeZone, material: query.material, ...shown };
+
+  const [materials, yields, offcuts, old] = await Promise.all([
+    reportMaterials(db, user.shopId),
+    yieldOverTime(db, filter),
+    offcutUse(db, filter),
+    oldOffcuts(db, { shopId: user.shopId, timeZone: settings.timeZone, months: settings.offcutAgeMonths, material: query.material }),
+  ]);
+  const area = (mm2: number) => formatArea(mm2, settings.units);
+  const areaUnit = settings.units.system === 'metric' ? 'm²' : 'ft²';
+  const areaNumber = (mm2: number) => (settings.units.system === 'metric' ? mm2 / 1e6 : mm2 / (304.8 * 304.8));
+  const len = (mm: number) => formatLength(mm, settings.units);
+  const counted = (n: number, mm2: number) => (n === 0 ? '—' : `${n} · ${area(mm2)}`);
+  const totals = periodTotals(yields);
+  const all = overall(yields);
+  const query_ = new URLSearchParams({ from: shown.from, to: shown.to, by: shown.by, ...(query.material ? { material: query.material } : {}) }).toString();
+
+  return (
+    <>
+      <PageHeader title="Reports" lead={`What the stock became and how the rack is used, by ${shown.by} on the shop’s clock (${settings.timeZone.replace(/_/g, ' ')}).`} />
+
+      <form method="get" className="card mb-6 grid gap-4 p-4 sm:grid-cols-2 lg:grid-cols-5 lg:items-end" aria-label="Report filters">
+        <div>
+          <label htmlFor="r-from" className="field-label">From</label>
+          <input id="r-from" name="from" type="date" className="field-input" defaultValue={shown.from} />
+        </div>
+        <div>
+          <label htmlFor="r-to" className="field-label">To</label>
+          <input id="r-to" name="to" type="date" className="field-input" defaultValue={shown.to} />
+        </div>
+        <div>
+          <label htmlFor="r-by" className="field-label">Group by</label>
+          <select id="r-by" name="by" className="field-input" defaultValue={shown.by}>
+            <option value="month">Month</option>
+            <option value="week">Week</option>
+          </select>
+        </div>
+        <div>
+          <label htmlFor="r-material" className="field-label">Material</label>
+          <select id="r-material" name="material" className="field-input" defaultValue={query.material ?? ''}>
+            <option value="">Every material</option>
+            {materials.map((m) => <option key={m} value={m}>{m}</option>)}
+          </select>
+        </div>
+        <button type="submit" className="btn-accent">Show</button>
+        {problem && <p role="alert" className="field-error sm:col-span-2 lg:col-span-5">{problem} Showing the last twelve months instead.</p>}
+      </form>
+
+      <section className="mb-10" aria-labelledby="yield-head">
+        <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
+          <h2 id="yield-head">Yield over time</h2>
+          <a href={`/api/reports/yield?${query_}`} download className="text-sm">Download CSV</a>
+        </div>
+        {yields.length === 0 ? (
+          <EmptyState title="No finished plans in this range.">A plan counts here when the cutter marks it done.</EmptyState>
+        ) : (
+          <>
+            <div className="mb-4 grid grid-cols-2 gap-3 lg:grid-cols-4">
+              <Figure label="Yield (by stock area)" value={percentText(all.yield)} testId="report-yield" />
+              <Figure label={`Target`} value={`${settings.yieldTargetPercent} %`} />
+              <Figure label="Saw waste" value={percentText(all.sawWaste)} />
+              <Figure label="Spoiled at the saw" value={percentText(all.spoiled)} />
+            </div>
+            <div className="card mb-4 p-3">
+              <YieldChart target={settings.yieldTargetPercent} points={totals.map((t) => ({ label: periodLabel(t.period, shown.by), yield: t.yield === null ? null : t.yield * 100, sawWaste: t.sawWaste === null ? null : t.sawWaste * 100, spoiled: t.spoiled === null ? null : t.spoiled * 100 }))} />
+            </div>
+            <div className="card overflow-x-auto">
+              <table className="data-table" aria-label="Yield by period and material">
+                <thead>
+                  <tr><th>Period</th><th>Material</th><th className="num">Yield</th><th className="num">Saw waste</th><th className="num">Spoiled</th><th className="num">Kept offcuts</th><th className="num">Stock</th><th className="num">Plans</th></tr>
+                </thead>
+                <tbody>
+                  {yields.map((r) => {
+                    const s = shares(r);
+                    const low = s.yield !== null && s.yield * 100 < settings.yieldTargetPercent;
+                    return (
+                      <tr key={`${r.period}-${r.material}-${r.thicknessMm}`} data-testid="yield-row">
+                        <td className="whitespace-nowrap">{periodLabel(r.period, shown.by)}</td>
+                        <td className="min-w-36">{exactLengthText(r.thicknessMm, settings.units)} {r.material}</td>
+                        <td className={`num whitespace-nowrap ${low ? 'text-brick' : 'text-sage'}`}>{percentText(s.yield)}</td>
+                        <td className="num whitespace-nowrap">{percentText(s.sawWaste)}</td>
+                        <td className="num whitespace-nowrap">{s.spoiled ? percentText(s.spoiled) : '—'}</td>
+                        <td className="num whitespace-nowrap">{percentText(s.kept)}</td>
+                        <td className="num whitespace-nowrap">{area(r.stockArea)}</td>
+                        <td className="num">{r.plans}</td>
+                      </tr>
+                    );
+                  })}
+                </tbody>
+              </table>
+            </div>
+            <p className="mt-2 text-xs text-graphite-mute">Shares of the stock area cut. Yield below the target is in red. A period’s figure weighs each material by its stock area.</p>
+          </>
+        )}
+      </section>
+
+      <section className="mb-10" aria-labelledby="offcut-head">
+        <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
+          <h2 id="offcut-head">Offcut use</h2>
+          <a href={`/api/reports/offcut-use?${query_}`} download className="text-sm">Download CSV</a>
+        </div>
+        {offcuts.length === 0 ? (
+          <EmptyState title="Nothing cut or racked in this range." />
+        ) : (
+          <>
+            <div className="card mb-4 p-3">
+              <OffcutUseChart unit={areaUnit} points={offcuts.map((r) => ({ label: periodLabel(r.period, shown.by), fromRack: areaNumber(r.fromRackArea), fromNew: areaNumber(r.fromNewStockArea) }))} />
+            </div>
+            <div className="card overflow-x-auto">
+              <table className="data-table" aria-label="Offcut use by period">
+                <thead>
+                  <tr><th>Period</th><th className="num">Share from offcuts</th><th className="num">Cut from offcuts</th><th className="num">Cut from new stock</th><th className="num">Offcuts racked</th><th className="num">Used</th><th className="num">Scrapped</th></tr>
+                </thead>
+                <tbody>
+                  {offcuts.map((r) => (
+                    <tr key={r.period} data-testid="offcut-row">
+                      <td className="whitespace-nowrap">{periodLabel(r.period, shown.by)}</td>
+                      <td className="num whitespace-nowrap">{percentText(rackShare(r))}</td>
+                      <td className="num whitespace-nowrap">{r.fromRackArea > 0 ? area(r.fromRackArea) : '—'}</td>
+                      <td className="num whitespace-nowrap">{r.fromNewStockArea > 0 ? area(r.fromNewStockArea) : '—'}</td>
+                      <td className="num whitespace-nowrap">{counted(r.racked, r.rackedArea)}</td>
+                      <td className="num whitespace-nowrap">{counted(r.used, r.usedArea)}</td>
+                      <td className="num whitespace-nowrap">{counted(r.scrapped, r.scrappedArea)}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+          </>
+        )}
+        <h3 className="mb-2 mt-6 text-base font-semibold">On the rack more than {settings.offcutAgeMonths} month{settings.offcutAgeMonths === 1 ? '' : 's'}</h3>
+        {old.length === 0 ? (
+          <p className="text-sm text-graphite-mute">None: the rack turns over.</p>
+        ) : (
+          <div className="card overflow-x-auto">
+            <table className="data-table" aria-label="Old offcuts">
+              <thead><tr><th>Offcut</th><th className="num">Size</th><th>Where</th><th>Racked</th><th className="num">Age</th></tr></thead>
+              <tbody>
+                {old.map((o) => (
+                  <tr key={o.id} data-testid="old-offcut">
+                    <td className="min-w-36">{exactLengthText(o.thicknessMm, settings.units)} {o.material}</td>
+                    <td className="num whitespace-nowrap">{len(o.lengthMm)} × {len(o.widthMm)}</td>
+                    <td>{o.location || '—'}</td>
+                    <td className="whitespace-nowrap">{o.rackedOn}</td>
+                    <td className="num whitespace-nowrap">{o.ageDays} days</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </section>
+    </>
+  );
+}

@@ -1,0 +1,186 @@
+import { sql } from 'drizzle-orm';
+import type { Db } from '../open';
+import type { ReportPeriod } from '@/lib/dates/shop-time';
+
+/**
+ * The owner's reports, grouped in the database on the shop's own clock (`date_trunc` of the timestamp read in the
+ * shop's time zone), so no report loads a shop's rows into the server's memory: each query returns one row per
+ * period and material.
+ */
+
+export interface ReportFilter {
+  shopId: string;
+  /** IANA zone the shop's days are read in. */
+  timeZone: string;
+  by: ReportPeriod;
+  /** First and last shop days (`YYYY-MM-DD`), both included. */
+  from: string;
+  to: string;
+  /** Only this material, when given. */
+  material?: string;
+}
+
+/** One period's stock area for one material and thickness, and what became of it (mm²). */
+export interface YieldRow {
+  period: string;
+  material: string;
+  thicknessMm: number;
+  plans: number;
+  stockArea: number;
+  partArea: number;
+  /** Parts damaged at the saw (they go on the re-cut list). */
+  spoiledArea: number;
+  /** Offcuts put on the rack. */
+  keptArea: number;
+  /** Trim, kerf and scraps too small to keep: stock less parts, spoiled parts and kept offcuts. */
+  sawWasteArea: number;
+}
+
+const rowsOf = <T>(result: unknown): T[] => ((result as { rows?: T[] }).rows ?? (result as T[]));
+
+/** The instant a shop day starts, as a timestamptz, from a day read on the shop's clock. */
+const dayStart = (day: string, zone: string) => sql`(${day}::date::timestamp at time zone ${zone})`;
+const periodOf = (column: unknown, f: ReportFilter) => sql`to_char(date_trunc(${f.by}, ${column} at time zone ${f.timeZone}), 'YYYY-MM-DD')`;
+const inRange = (column: unknown, f: ReportFilter) => sql`${column} >= ${dayStart(f.from, f.timeZone)} and ${column} < ${dayStart(f.to, f.timeZone)} + interval '1 day'`;
+const materialIs = (column: unknown, f: ReportFilter) => (f.material ? sql`and ${column} = ${f.material}` : sql``);
+
+/**
+ * Yield over time: finished plans by the week or month they were finished in, per material and thickness. Yield is
+ * the parts' share of the stock area; the saw's waste and the spoiled parts are kept apart.
+ */
+export async function yieldOverTime(db: Db, f: ReportFilter): Promise<YieldRow[]> {
+  const finished = sql.raw('p.finished_at');
+  const [stock, placed, kept] = await Promise.all([
+    db.execute(sql`
+      select ${periodOf(finished, f)} as period, pp.material, pp.thickness_mm as thickness, count(distinct p.id)::int as plans,
+             sum(pp.length_mm * pp.width_mm)::float8 as area
+        from plans p join plan_pieces pp on pp.plan_id = p.id
+       where p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('pp.material'), f)}
+       group by 1, 2, 3`),
+    db.execute(sql`
+      select ${periodOf(finished, f)} as period, pp.material, pp.thickness_mm as thickness,
+             coalesce(sum(pl.length_mm * pl.width_mm) filter (where not pl.damaged), 0)::float8 as parts,
+             coalesce(sum(pl.length_mm * pl.width_mm) filter (where pl.damaged), 0)::float8 as spoiled
+        from plans p join plan_pieces pp on pp.plan_id = p.id join placements pl on pl.plan_piece_id = pp.id
+       where p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('pp.material'), f)}
+       group by 1, 2, 3`),
+    db.execute(sql`
+      select ${periodOf(finished, f)} as period, o.material, o.thickness_mm as thickness, sum(o.length_mm * o.width_mm)::float8 as area
+        from offcuts o join plans p on p.id = o.source_plan_id
+       where o.shop_id = ${f.shopId} and p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('o.material'), f)}
+       group by 1, 2, 3`),
+  ]);
+  const key = (r: { period: string; material: string; thickness: number }) => `${r.period}\u0000${r.material}\u0000${Number(r.thickness)}`;
+  const rows = new Map<string, YieldRow>();
+  for (const r of rowsOf<{ period: string; material: string; thickness: number; plans: number; area: number }>(stock)) {
+    rows.set(key(r), { period: r.period, material: r.material, thicknessMm: Number(r.thickness), plans: Number(r.plans), stockArea: Number(r.area), partArea: 0, spoiledArea: 0, keptArea: 0, sawWasteArea: 0 });
+  }
+  for (const r of rowsOf<{ period: string; material: string; thickness: number; parts: number; spoiled: number }>(placed)) {
+    const row = rows.get(key(r));
+    if (row) Object.assign(row, { partArea: Number(r.parts), spoiledArea: Number(r.spoiled) });
+  }
+  for (const r of rowsOf<{ period: string; material: string; thickness: number; area: number }>(kept)) {
+    const row = rows.get(key(r));
+    if (row) row.keptArea = Number(r.area);
+  }
+  for (const row of rows.values()) row.sawWasteArea = Math.max(0, row.stockArea - row.partArea - row.spoiledArea - row.keptArea);
+  return [...rows.values()].sort((a, b) => a.period.localeCompare(b.period) || a.material.localeCompare(b.material) || a.thicknessMm - b.thicknessMm);
+}
+
+/** One period of the rack: what plans took from offcuts against new stock, and what went on, off and out of it. */
+export interface OffcutUseRow {
+  period: string;
+  /** Stock area finished plans cut from offcuts, and from new sheets and boards (mm²). */
+  fromRackArea: number;
+  fromNewStockArea: number;
+  racked: number;
+  rackedArea: number;
+  used: number;
+  usedArea: number;
+  scrapped: number;
+  scrappedArea: number;
+}
+
+export async function offcutUse(db: Db, f: ReportFilter): Promise<OffcutUseRow[]> {
+  const finished = sql.raw('p.finished_at');
+  const created = sql.raw('o.created_at');
+  const moved = sql.raw('m.created_at');
+  const [cut, racked, out] = await Promise.all([
+    db.execute(sql`
+      select ${periodOf(finished, f)} as period,
+             coalesce(sum(pp.length_mm * pp.width_mm) filter (where pp.offcut_id is not null), 0)::float8 as rack,
+             coalesce(sum(pp.length_mm * pp.width_mm) filter (where pp.offcut_id is null), 0)::float8 as fresh
+        from plans p join plan_pieces pp on pp.plan_id = p.id
+       where p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('pp.material'), f)}
+       group by 1`),
+    db.execute(sql`
+      select ${periodOf(created, f)} as period, count(*)::int as n, sum(o.length_mm * o.width_mm)::float8 as area
+        from offcuts o
+       where o.shop_id = ${f.shopId} and ${inRange(created, f)} ${materialIs(sql.raw('o.material'), f)}
+       group by 1`),
+    // Leaving the rack: cut up in a finished plan (consumed) or thrown out (scrapped), one ledger row each.
+    db.execute(sql`
+      select ${periodOf(moved, f)} as period, m.kind, count(*)::int as n, sum(o.length_mm * o.width_mm)::float8 as area
+        from stock_movements m join offcuts o on o.id = m.offcut_id
+       where m.shop_id = ${f.shopId} and m.kind in ('consumed', 'scrapped') and ${inRange(moved, f)} ${materialIs(sql.raw('o.material'), f)}
+       group by 1, 2`),
+  ]);
+  const rows = new Map<string, OffcutUseRow>();
+  const at = (period: string) => {
+    let row = rows.get(period);
+    if (!row) rows.set(period, (row = { period, fromRackArea: 0, fromNewStockArea: 0, racked: 0, rackedArea: 0, used: 0, usedArea: 0, scrapped: 0, scrappedArea: 0 }));
+    return row;
+  };
+  for (const r of rowsOf<{ period: string; rack: number; fresh: number }>(cut)) Object.assign(at(r.period), { fromRackArea: Number(r.rack), fromNewStockArea: Number(r.fresh) });
+  for (const r of rowsOf<{ period: string; n: number; area: number }>(racked)) Object.assign(at(r.period), { racked: Number(r.n), rackedArea: Number(r.area) });
+  for (const r of rowsOf<{ period: string; kind: string; n: number; area: number }>(out)) {
+    if (r.kind === 'consumed') Object.assign(at(r.period), { used: Number(r.n), usedArea: Number(r.area) });
+    else Object.assign(at(r.period), { scrapped: Number(r.n), scrappedArea: Number(r.area) });
+  }
+  return [...rows.values()].sort((a, b) => a.period.localeCompare(b.period));
+}
+
+/** An offcut on the rack longer than the shop's age limit: to use or scrap. */
+export interface OldOffcut {
+  id: string;
+  material: string;
+  thicknessMm: number;
+  lengthMm: number;
+  widthMm: number;
+  location: string;
+  rackedOn: string;
+  ageDays: number;
+}
+
+export async function oldOffcuts(db: Db, { shopId, timeZone, months, now = new Date(), material }: { shopId: string; timeZone: string; months: number; now?: Date; material?: string }): Promise<OldOffcut[]> {
+  const result = await db.execute(sql`
+    select o.id, o.material, o.thickness_mm, o.length_mm, o.width_mm, o.location,
+           to_char(o.created_at at time zone ${timeZone}, 'YYYY-MM-DD') as racked_on,
+           floor(extract(epoch from (${now.toISOString()}::timestamptz - o.created_at)) / 86400)::int as age_days
+      from offcuts o
+     where o.shop_id = ${shopId} and o.status = 'available'
+       and o.created_at < ${now.toISOString()}::timestamptz - make_interval(months => ${months}::int)
+       ${material ? sql`and o.material = ${material}` : sql``}
+     order by o.created_at, o.id
+     limit 500`);
+  return rowsOf<{ id: string; material: string; thickness_mm: number; length_mm: number; width_mm: number; location: string; racked_on: string; age_days: number }>(result).map((r) => ({
+    id: r.id,
+    material: r.material,
+    thicknessMm: Number(r.thickness_mm),
+    lengthMm: Number(r.length_mm),
+    widthMm: Number(r.width_mm),
+    location: r.location,
+    rackedOn: r.racked_on,
+    ageDays: Number(r.age_days),
+  }));
+}
+
+/** The materials a shop has finished plans or offcuts in, for the report's filter. */
+export async function reportMaterials(db: Db, shopId: string): Promise<string[]> {
+  const result = await db.execute(sql`
+    select material from (
+      select distinct pp.material from plan_pieces pp where pp.shop_id = ${shopId}
+      union select distinct o.material from offcuts o where o.shop_id = ${shopId}
+    ) m order by 1`);
+  return rowsOf<{ material: string }>(result).map((r) => r.material);
+}

@@ -1,0 +1,84 @@
+/**
+ * Six months of the demo shop's past work, so the reports have something to show: six invented jobs, each nested
+ * by the real engine, released and finished through the stock room's own functions, then dated back to the day it
+ * was cut. Their sheets are bought for the job (not pulled from today's rack, whose counts stay as seeded), their
+ * offcuts go on the rack and are used by the next job or thrown out, and one part was damaged at the saw.
+ */
+import { and, eq, inArray } from 'drizzle-orm';
+import type { Db } from '@/db/open';
+import { buildNestRequest, stockRef } from '@/db/queries/nest-request';
+import { finishPlan, releasePlan } from '@/db/queries/plan-lifecycle';
+import { jobs, offcuts, parts, plans, recuts, stockMovements } from '@/db/schema';
+import { optimize } from '@/lib/nesting';
+import { inches } from '@/lib/units/length';
+import { nestRequestSchema } from '@/shared/schemas/nesting';
+
+const MAPLE = { material: 'Maple ply', thicknessMm: inches(23 / 32) };
+const BIRCH_12 = { material: 'Baltic birch', thicknessMm: 12 };
+const BIRCH_6 = { material: 'Baltic birch', thicknessMm: 6 };
+const part = (label: string, quantity: number, l: number, w: number, stock: { material: string; thicknessMm: number }, grain: 'along-length' | 'any' = 'along-length') => ({
+  label,
+  quantity,
+  lengthMm: inches(l),
+  widthMm: inches(w),
+  ...stock,
+  grain,
+});
+
+/** When each was finished (UTC) and who it was for. The last one ends at 23:30 on a Thursday evening in Chicago. */
+const PAST_JOBS = [
+  { name: 'Marsh Creek pantry', customer: 'Dana Marsh', finishedAt: '2026-06-18T21:40:00Z', parts: [part('Pantry side', 4, 84, 23.25, MAPLE), part('Shelf', 10, 22.5, 22, MAPLE, 'any'), part('Top and bottom', 4, 22.5, 23.25, MAPLE)] },
+  { name: 'Quill & Co. coffee counter', customer: 'Quill & Co.', finishedAt: '2026-07-23T19:15:00Z', parts: [part('Counter side', 3, 34.5, 24, MAPLE), part('Bottom', 2, 46, 24, MAPLE), part('Drawer side', 8, 22, 5.5, BIRCH_12), part('Drawer bottom', 4, 21.5, 14.5, BIRCH_6, 'any')] },
+  { name: 'Ostrander bath vanity', customer: 'Lena Ostrander', finishedAt: '2026-08-27T22:05:00Z', parts: [part('Vanity side', 2, 30, 21, MAPLE), part('Vanity bottom', 1, 46.5, 21, MAPLE), part('Stretcher', 3, 46.5, 4, MAPLE, 'any')], damaged: 'Vanity side' },
+  { name: 'Bellweather mudroom lockers', customer: 'Ruth Bellweather', finishedAt: '2026-09-24T20:30:00Z', parts: [part('Locker side', 5, 72, 16, MAPLE), part('Locker shelf', 8, 18, 16, MAPLE, 'any'), part('Bench top', 1, 72, 16, MAPLE)] },
+  { name: 'Tamsin office built-ins', customer: 'Tamsin Reyes', finishedAt: '2026-10-29T18:45:00Z', parts: [part('Bookcase side', 6, 84, 12, MAPLE), part('Bookcase shelf', 12, 34.5, 11.5, MAPLE, 'any'), part('Desk top', 1, 60, 24, MAPLE)] },
+  { name: 'Ferncliff drawer bank', customer: 'Omar Ferncliff', finishedAt: '2026-11-20T05:30:00Z', parts: [part('Drawer side', 16, 20, 6, BIRCH_12), part('Drawer front and back', 16, 14, 6, BIRCH_12), part('Drawer bottom', 8, 19.5, 13.5, BIRCH_6, 'any')] },
+] as const;
+
+/** The rack location where the past jobs' offcuts were put. */
+export const HISTORY_BIN = 'Offcut bin 6';
+
+export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }: { shopId: string; estimatorId: string; cutterId: string }) {
+  const racked: string[] = [];
+  for (const past of PAST_JOBS) {
+    const at = new Date(past.finishedAt);
+    const wonAt = new Date(at.getTime() - 12 * 86_400_000);
+    const [job] = await db.insert(jobs).values({ shopId, name: past.name, customer: past.customer, status: 'won', wonAt, createdBy: estimatorId, createdAt: wonAt }).returning({ id: jobs.id });
+    await db.insert(parts).values(past.parts.map((p, sort) => ({ shopId, jobId: job.id, sort: sort + 1, ...p })));
+
+    // Bought for the job, or cut from what earlier past jobs racked: today's rack and counts are not touched.
+    const built = nestRequestSchema.parse(await buildNestRequest(db, shopId, job.id, { timeBudgetMs: 0 }));
+    const request = { ...built, stock: built.stock.filter((s) => s.count === null || racked.some((id) => s.id === stockRef.offcut(id))) };
+    const document = await optimize(request);
+    const [plan] = await db
+      .insert(plans)
+      .values({ shopId, jobId: job.id, name: 'Whole cut list', status: 'draft', request, document, yieldRatio: document.totals?.yield ?? null, costCents: Math.round(document.totals?.cost ?? 0), createdBy: estimatorId, createdAt: wonAt })
+      .returning({ id: plans.id });
+    await releasePlan(db, { shopId, userId: estimatorId, planId: plan.id });
+
+    const damagedLabel = 'damaged' in past ? past.damaged : undefined;
+    const damaged = damagedLabel
+      ? document.pieces.flatMap((piece, index) => piece.placements.filter((pl) => pl.label.startsWith(damagedLabel)).map((pl) => ({ piece: index, partId: pl.partId, instance: pl.instance, reason: 'Chipped the veneer on the crosscut' }))).slice(0, 1)
+      : [];
+    await finishPlan(db, { shopId, userId: cutterId, planId: plan.id, body: { damaged } });
+
+    // Dated back to the day it was cut.
+    await db.update(plans).set({ releasedAt: new Date(at.getTime() - 2 * 86_400_000), finishedAt: at, updatedAt: at }).where(eq(plans.id, plan.id));
+    await db.update(stockMovements).set({ createdAt: at }).where(eq(stockMovements.planId, plan.id));
+    const kept = await db.update(offcuts).set({ createdAt: at, location: HISTORY_BIN }).where(eq(offcuts.sourcePlanId, plan.id)).returning({ id: offcuts.id });
+    racked.push(...kept.map((o) => o.id));
+    // The damaged part was re-cut by hand from the job's spare the same day.
+    await db.update(recuts).set({ status: 'cancelled', cancelReason: 'Cut again from the spare by hand the same day' }).where(and(eq(recuts.shopId, shopId), eq(recuts.jobId, job.id)));
+    await db.update(jobs).set({ status: 'done', updatedAt: at }).where(eq(jobs.id, job.id));
+  }
+
+  // What is left of the past jobs' offcuts was thrown out at the end of November, but for one the rack still holds.
+  const left = await db.select({ id: offcuts.id, createdAt: offcuts.createdAt }).from(offcuts).where(and(eq(offcuts.shopId, shopId), eq(offcuts.status, 'available'), eq(offcuts.location, HISTORY_BIN)));
+  const [oldest, ...rest] = [...left].sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime() || a.id.localeCompare(b.id));
+  if (rest.length) {
+    const at = new Date('2026-11-27T22:00:00Z');
+    await db.update(offcuts).set({ status: 'scrapped' }).where(inArray(offcuts.id, rest.map((o) => o.id)));
+    await db.insert(stockMovements).values(rest.map((o) => ({ shopId, kind: 'scrapped' as const, offcutId: o.id, quantity: -1, userId: cutterId, reason: 'Rack clear-out', createdAt: at })));
+  }
+  return { jobs: PAST_JOBS.length, oldOffcut: oldest?.id ?? null };
+}
