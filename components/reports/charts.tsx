@@ -63,3 +63,29 @@ export function OffcutUseChart({ points, unit }: { points: OffcutPoint[]; unit: 
     </div>
   );
 }
+
+export interface ValuePoint {
+  label: string;
+  onHand: number;
+  reserved: number;
+}
+
+/** Stock value on hand and reserved at each period's close, in the shop's currency. */
+export function StockValueChart({ points, currency }: { points: ValuePoint[]; currency: string }) {
+  const money = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? new Intl.NumberFormat('en-US', { style: 'currency', currency, maximumFractionDigits: 0 }).format(v) : '—');
+  return (
+    <div className="h-64 w-full" role="img" aria-label={`Stock value at each period’s close: ${points.map((p) => `${p.label} ${money(p.onHand)} on hand, ${money(p.reserved)} reserved`).join('; ')}`}>
+      <ResponsiveContainer width="100%" height="100%">
+        <LineChart data={points} margin={{ top: 12, right: 16, bottom: 4, left: 8 }}>
+          <CartesianGrid stroke={INK.edge} vertical={false} />
+          <XAxis dataKey="label" {...axis} />
+          <YAxis tickFormatter={(v) => money(v)} width={76} {...axis} />
+          <Tooltip formatter={(v) => money(v)} />
+          <Legend wrapperStyle={{ fontSize: 12 }} />
+          <Line type="stepAfter" dataKey="onHand" name="On hand" stroke={INK.oak} strokeWidth={2.5} dot={{ r: 3 }} isAnimationActive={false} />
+          <Line type="stepAfter" dataKey="reserved" name="Reserved for released plans" stroke={INK.graphite} strokeWidth={1.5} dot={{ r: 2 }} isAnimationActive={false} />
+        </LineChart>
+      </ResponsiveContainer>
+    </div>
+  );
+}

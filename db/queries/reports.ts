@@ -1,6 +1,9 @@
-import { sql } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import type { Db } from '../open';
-import type { ReportPeriod } from '@/lib/dates/shop-time';
+import { offcuts, stockItems } from '../schema';
+import { periodsBetween, type ReportPeriod } from '@/lib/dates/shop-time';
+import { stockValueOverTime } from '@/lib/reports/stock-value';
+import { costEachCents } from './nest-request';
 
 /**
  * The owner's reports, grouped in the database on the shop's own clock (`date_trunc` of the timestamp read in the
@@ -183,4 +186,43 @@ export async function reportMaterials(db: Db, shopId: string): Promise<string[]>
       union select distinct o.material from offcuts o where o.shop_id = ${shopId}
     ) m order by 1`);
   return rowsOf<{ material: string }>(result).map((r) => r.material);
+}
+
+/**
+ * Stock value over time: the ledger's net changes per period and piece up to the range's end (a few rows per piece
+ * and period, never the movements themselves), valued in `lib/reports/stock-value` at each piece's cost today.
+ */
+export async function stockValueReport(db: Db, f: ReportFilter) {
+  const moved = sql.raw('m.created_at');
+  const [changes, items, racked] = await Promise.all([
+    // Everything before the range in one opening balance per piece (no date arithmetic per row), then the range by period.
+    db.execute(sql`
+      select null as period, coalesce(m.stock_item_id, m.offcut_id) as piece, sum(m.quantity)::int as on_hand, sum(m.reserved_change)::int as reserved
+        from stock_movements m
+       where m.shop_id = ${f.shopId} and m.created_at < ${dayStart(f.from, f.timeZone)}
+       group by 2
+      union all
+      select ${periodOf(moved, f)}, coalesce(m.stock_item_id, m.offcut_id), sum(m.quantity)::int, sum(m.reserved_change)::int
+        from stock_movements m
+       where m.shop_id = ${f.shopId} and ${inRange(moved, f)}
+       group by 1, 2`),
+    db.select().from(stockItems).where(eq(stockItems.shopId, f.shopId)),
+    db.select({ id: offcuts.id, material: offcuts.material, costCents: offcuts.costCents }).from(offcuts).where(eq(offcuts.shopId, f.shopId)),
+  ]);
+  const pieces = [
+    ...items.map((i) => ({ id: i.id, material: i.material, costEach: costEachCents(i) })),
+    ...racked.map((o) => ({ id: o.id, material: o.material, costEach: o.costCents })),
+  ].filter((p) => !f.material || p.material === f.material);
+  const wanted = new Set(pieces.map((p) => p.id));
+  const periods = periodsBetween(f.from, f.to, f.by);
+  const ledger = rowsOf<{ period: string | null; piece: string; on_hand: number; reserved: number }>(changes)
+    .filter((r) => wanted.has(r.piece))
+    .map((r) => ({ period: r.period ?? periods[0], pieceId: r.piece, onHand: Number(r.on_hand), reserved: Number(r.reserved) }));
+  const { points, unknownPieces } = stockValueOverTime(periods, ledger, pieces);
+  // Low on the rack now: free count at or under the size's low mark.
+  const low = items
+    .filter((i) => (!f.material || i.material === f.material) && i.lowStockAt > 0 && i.onHand - i.reserved <= i.lowStockAt)
+    .map((i) => ({ id: i.id, material: i.material, nominalThickness: i.nominalThickness, thicknessMm: i.thicknessMm, lengthMm: i.lengthMm, widthMm: i.widthMm, kind: i.kind, free: i.onHand - i.reserved, lowStockAt: i.lowStockAt }))
+    .sort((a, b) => a.material.localeCompare(b.material) || a.thicknessMm - b.thicknessMm);
+  return { points, unknownPieces, low };
 }

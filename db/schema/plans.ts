@@ -33,7 +33,11 @@ export const plans = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('plans_job_idx').on(t.shopId, t.jobId)],
+  (t) => [
+    index('plans_job_idx').on(t.shopId, t.jobId),
+    // The reports read finished plans by the time they were finished.
+    index('plans_finished_idx').on(t.shopId, t.status, t.finishedAt),
+  ],
 );
 
 export const planPieces = pgTable(

@@ -32,3 +32,10 @@ describe('dates on the shop’s clock', () => {
     expect(() => periodStart('2026-13', 'week')).toThrow(RangeError);
   });
 });
+
+test('the periods of a range: months from the first month to the last, weeks from Monday to Monday', async () => {
+  const { periodsBetween } = await import('./shop-time');
+  expect(periodsBetween('2026-11-15', '2027-01-02', 'month')).toEqual(['2026-11-01', '2026-12-01', '2027-01-01']);
+  expect(periodsBetween('2026-11-29', '2026-12-08', 'week')).toEqual(['2026-11-23', '2026-11-30', '2026-12-07']);
+  expect(periodsBetween('2026-11-01', '2026-11-01', 'month')).toEqual(['2026-11-01']);
+});

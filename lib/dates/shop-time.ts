@@ -46,3 +46,18 @@ export function periodStart(day: string, by: ReportPeriod): string {
   d.setUTCDate(d.getUTCDate() - back);
   return d.toISOString().slice(0, 10);
 }
+
+/** Every period start (`YYYY-MM-DD`) from the one holding `from` to the one holding `to`, in order. */
+export function periodsBetween(from: string, to: string, by: ReportPeriod): string[] {
+  const out: string[] = [];
+  const end = periodStart(to, by);
+  let at = periodStart(from, by);
+  while (at <= end && out.length < 1000) {
+    out.push(at);
+    const d = new Date(`${at}T00:00:00Z`);
+    if (by === 'month') d.setUTCMonth(d.getUTCMonth() + 1, 1);
+    else d.setUTCDate(d.getUTCDate() + 7);
+    at = d.toISOString().slice(0, 10);
+  }
+  return out;
+}

@@ -4,8 +4,8 @@
  */
 import { beforeAll, describe, expect, test } from 'vitest';
 import type { Db } from '@/db/open';
-import { offcuts, placements, planPieces, plans, stockMovements } from '@/db/schema';
-import { offcutUse, oldOffcuts, reportMaterials, yieldOverTime, type ReportFilter } from '@/db/queries/reports';
+import { offcuts, placements, planPieces, plans, stockItems, stockMovements } from '@/db/schema';
+import { offcutUse, oldOffcuts, reportMaterials, stockValueReport, yieldOverTime, type ReportFilter } from '@/db/queries/reports';
 import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 
 let db: Db;
@@ -109,5 +109,41 @@ describe('offcut use', () => {
     const old = await oldOffcuts(db, { shopId: fx.mine.id, timeZone: ZONE, months: 6, now: new Date('2026-12-03T12:00:00Z') });
     expect(old).toEqual([expect.objectContaining({ material: 'Birch ply', lengthMm: 700, widthMm: 300, location: 'Bin 3', rackedOn: '2026-03-15', ageDays: 262 })]);
     expect(await oldOffcuts(db, { shopId: fx.mine.id, timeZone: ZONE, months: 9, now: new Date('2026-12-03T12:00:00Z') })).toEqual([]);
+  });
+});
+
+describe('stock value over time, rebuilt from the ledger', () => {
+  test('a rack of $68.50 birch sheets and an $11 offcut, month by month in Chicago and in UTC (worked by hand)', async () => {
+    // The other shop's rack, so the offcut rows above (which carry no opening count) are not in it.
+    const shopId = fx.theirs.id;
+    const [sheet] = await db.insert(stockItems).values({ shopId, kind: 'sheet', material: 'Baltic birch', nominalThickness: '1/2"', thicknessMm: 12, lengthMm: 1525, widthMm: 1525, onHand: 7, lowStockAt: 8, costCents: 6850 }).returning();
+    const [piece] = await db.insert(offcuts).values({ shopId, material: 'Baltic birch', thicknessMm: 12, lengthMm: 600, widthMm: 400, costCents: 1100, createdAt: new Date('2026-11-20T16:00:00Z') }).returning();
+    await db.insert(stockMovements).values([
+      { shopId, kind: 'received', stockItemId: sheet.id, quantity: 10, createdAt: new Date('2026-10-15T15:00:00Z') },
+      { shopId, kind: 'reserved', stockItemId: sheet.id, quantity: 0, reservedChange: 3, createdAt: new Date('2026-11-10T15:00:00Z') },
+      { shopId, kind: 'offcut-created', offcutId: piece.id, quantity: 1, createdAt: new Date('2026-11-20T16:00:00Z') },
+      // Cut at 23:30 on 30 November in Chicago: 05:30 UTC on 1 December.
+      { shopId, kind: 'consumed', stockItemId: sheet.id, quantity: -3, reservedChange: -3, createdAt: new Date('2026-12-01T05:30:00Z') },
+    ]);
+    const chicago = await stockValueReport(db, { shopId, timeZone: ZONE, by: 'month', from: '2026-10-01', to: '2026-12-31' });
+    expect(chicago.points.map((p) => [p.period, p.onHandCents, p.reservedCents])).toEqual([
+      ['2026-10-01', 10 * 6850, 0],
+      ['2026-11-01', 7 * 6850 + 1100, 0],
+      ['2026-12-01', 7 * 6850 + 1100, 0],
+    ]);
+    const utc = await stockValueReport(db, { shopId, timeZone: 'UTC', by: 'month', from: '2026-10-01', to: '2026-12-31' });
+    expect(utc.points.map((p) => [p.period, p.onHandCents, p.reservedCents])).toEqual([
+      ['2026-10-01', 68_500, 0],
+      ['2026-11-01', 68_500 + 1100, 3 * 6850],
+      ['2026-12-01', 47_950 + 1100, 0],
+    ]);
+    // A range that starts after the receipt opens on it.
+    const late = await stockValueReport(db, { shopId, timeZone: ZONE, by: 'month', from: '2026-12-01', to: '2026-12-31' });
+    expect(late.points).toEqual([{ period: '2026-12-01', onHandCents: 49_050, reservedCents: 0, byMaterial: { 'Baltic birch': 49_050 } }]);
+    expect(chicago.unknownPieces).toEqual([]);
+    // 7 free against a low mark of 8.
+    expect(chicago.low).toEqual([expect.objectContaining({ id: sheet.id, free: 7, lowStockAt: 8 })]);
+    // Another material filtered out.
+    expect((await stockValueReport(db, { shopId, timeZone: ZONE, by: 'month', from: '2026-10-01', to: '2026-10-31', material: 'MDF' })).points[0].onHandCents).toBe(0);
   });
 });

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
 import { getDb } from '@/db/client';
-import { offcutUse, oldOffcuts, reportMaterials, yieldOverTime } from '@/db/queries/reports';
+import { offcutUse, oldOffcuts, reportMaterials, stockValueReport, yieldOverTime } from '@/db/queries/reports';
 import { getShopSettings } from '@/db/queries/shops';
-import { OffcutUseChart, YieldChart } from '@/components/reports/charts';
+import { OffcutUseChart, StockValueChart, YieldChart } from '@/components/reports/charts';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FigureCard as Figure } from '@/components/ui/figure-card';
 import { PageHeader } from '@/components/ui/page-header';
@@ -10,6 +10,7 @@ import { requirePageUser } from '@/lib/auth/session';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { rackShare } from '@/lib/reports/offcut-report';
 import { overall, percentText, periodLabel, periodTotals, shares } from '@/lib/reports/yield-report';
+import { formatMoney } from '@/lib/money';
 import { formatArea } from '@/lib/units/format-area';
 import { formatLength } from '@/lib/units/format-length';
 import { reportQuerySchema, reportRange } from '@/shared/schemas/report';
@@ -33,12 +34,15 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
   if ('error' in shown) return null;
   const filter = { shopId: user.shopId, timeZone: settings.timeZone, material: query.material, ...shown };
 
-  const [materials, yields, offcuts, old] = await Promise.all([
+  const [materials, yields, offcuts, old, value] = await Promise.all([
     reportMaterials(db, user.shopId),
     yieldOverTime(db, filter),
     offcutUse(db, filter),
     oldOffcuts(db, { shopId: user.shopId, timeZone: settings.timeZone, months: settings.offcutAgeMonths, material: query.material }),
+    stockValueReport(db, filter),
   ]);
+  const money = (cents: number) => formatMoney(cents, settings.currency);
+  const valueMaterials = [...new Set(value.points.flatMap((p) => Object.keys(p.byMaterial)))].sort();
   const area = (mm2: number) => formatArea(mm2, settings.units);
   const areaUnit = settings.units.system === 'metric' ? 'm²' : 'ft²';
   const areaNumber = (mm2: number) => (settings.units.system === 'metric' ? mm2 / 1e6 : mm2 / (304.8 * 304.8));
@@ -176,6 +180,55 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
                     <td>{o.location || '—'}</td>
                     <td className="whitespace-nowrap">{o.rackedOn}</td>
                     <td className="num whitespace-nowrap">{o.ageDays} days</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </section>
+
+      <section className="mb-10" aria-labelledby="value-head">
+        <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
+          <h2 id="value-head">Stock value</h2>
+          <a href={`/api/reports/stock-value?${query_}`} download className="text-sm">Download CSV</a>
+        </div>
+        <p className="mb-3 max-w-3xl text-sm text-graphite-mute">Rebuilt from the stock history at each period’s close: every sheet, board and offcut counted from its movements, valued at its cost today.</p>
+        <div className="card mb-4 p-3">
+          <StockValueChart currency={settings.currency} points={value.points.map((p) => ({ label: periodLabel(p.period, shown.by), onHand: p.onHandCents / 100, reserved: p.reservedCents / 100 }))} />
+        </div>
+        <div className="card overflow-x-auto">
+          <table className="data-table" aria-label="Stock value by period">
+            <thead>
+              <tr><th>Period</th><th className="num">On hand</th><th className="num">Reserved</th>{valueMaterials.map((m) => <th key={m} className="num">{m}</th>)}</tr>
+            </thead>
+            <tbody>
+              {value.points.map((p) => (
+                <tr key={p.period} data-testid="value-row">
+                  <td className="whitespace-nowrap">{periodLabel(p.period, shown.by)}</td>
+                  <td className="num whitespace-nowrap">{money(p.onHandCents)}</td>
+                  <td className="num whitespace-nowrap">{money(p.reservedCents)}</td>
+                  {valueMaterials.map((m) => <td key={m} className="num whitespace-nowrap">{money(p.byMaterial[m] ?? 0)}</td>)}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+        {value.unknownPieces.length > 0 && <p role="alert" className="field-error mt-2">{value.unknownPieces.length} piece{value.unknownPieces.length === 1 ? '' : 's'} in the stock history no longer in the stock room: not valued.</p>}
+        <h3 className="mb-2 mt-6 text-base font-semibold">Low on the rack now</h3>
+        {value.low.length === 0 ? (
+          <p className="text-sm text-graphite-mute">Every size is above its low mark.</p>
+        ) : (
+          <div className="card overflow-x-auto">
+            <table className="data-table" aria-label="Low stock">
+              <thead><tr><th>Stock</th><th className="num">Size</th><th className="num">Free</th><th className="num">Low mark</th></tr></thead>
+              <tbody>
+                {value.low.map((l) => (
+                  <tr key={l.id} data-testid="low-stock">
+                    <td className="min-w-36 font-medium">{l.material} {l.nominalThickness} <span className="text-xs font-normal text-graphite-mute">{l.kind}</span></td>
+                    <td className="num whitespace-nowrap">{len(l.lengthMm)} × {len(l.widthMm)}</td>
+                    <td className="num text-brick">{l.free}</td>
+                    <td className="num">{l.lowStockAt}</td>
                   </tr>
                 ))}
               </tbody>

@@ -7,4 +7,5 @@ const ownerOnly = { anonymous: 401, owner: 200, estimator: 403, cutter: 403, oth
 export const rows: AuthzRow[] = [
   { route: '/api/reports/yield', method: 'GET', expect: ownerOnly },
   { route: '/api/reports/offcut-use', method: 'GET', expect: ownerOnly },
+  { route: '/api/reports/stock-value', method: 'GET', expect: ownerOnly },
 ];
