@@ -21,6 +21,7 @@ import { JOB_STATUS_FILTERS, jobInStatusFilter, readStatusFilter, type JobStatus
 import { JOB_STATUSES, type JobSummary } from '@/shared/schemas/job';
 import { JobStatusBadge } from './job-status';
 import { NewJobForm } from './new-job-form';
+import { shopDay } from '@/lib/dates/shop-time';
 
 const matchesSearch: FilterFn<JobSummary> = (row, _columnId, needle: string) => jobMatchesSearch(row.original, needle);
 const matchesStatus: FilterFn<JobSummary> = (row, _columnId, filter: JobStatusFilter) => jobInStatusFilter(row.original.status, filter);
@@ -40,14 +41,15 @@ const columns: ColumnDef<JobSummary>[] = [
   { id: 'due', header: 'Due', accessorFn: (j) => j.dueDate ?? undefined, sortUndefined: 'last', cell: ({ row }) => <span className="whitespace-nowrap">{row.original.dueDate ?? '—'}</span> },
   { id: 'parts', header: 'Parts', accessorKey: 'partCount', meta: { numeric: true } },
   { id: 'materials', header: 'Materials', accessorFn: (j) => j.materials.join(', '), enableSorting: false, cell: ({ getValue }) => <span className="text-graphite-soft">{(getValue() as string) || '—'}</span> },
-  { id: 'updated', header: 'Changed', accessorKey: 'updatedAt', cell: ({ row }) => <span className="whitespace-nowrap text-graphite-mute">{row.original.updatedAt.slice(0, 10)}</span> },
+  // The day on the shop's clock (a US shop's evening is not tomorrow).
+  { id: 'updated', header: 'Changed', accessorKey: 'updatedAt', cell: ({ row, table }) => <span className="whitespace-nowrap text-graphite-mute">{shopDay(new Date(row.original.updatedAt), (table.options.meta as { timeZone: string }).timeZone)}</span> },
 ];
 
 // One stable empty list while loading: a fresh `[]` each render makes the table recompute (and re-render) endlessly.
 const NO_JOBS: JobSummary[] = [];
 
 /** Jobs as a sortable, filterable table; search, filters and sort live in the URL so a view can be bookmarked. */
-export function JobsBoard({ canWrite }: { canWrite: boolean }) {
+export function JobsBoard({ canWrite, timeZone }: { canWrite: boolean; timeZone: string }) {
   const router = useRouter();
   const pathname = usePathname();
   const params = useSearchParams();
@@ -76,6 +78,7 @@ export function JobsBoard({ canWrite }: { canWrite: boolean }) {
   const table = useReactTable({
     data: jobs.data ?? NO_JOBS,
     columns,
+    meta: { timeZone },
     state: { sorting, columnFilters, globalFilter: search },
     globalFilterFn: matchesSearch,
     // Always ascending first: left to itself the table guesses from the first row's value, and a job with no due

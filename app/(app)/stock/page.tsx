@@ -97,7 +97,7 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
           History of one size. <Link href="/stock?view=history">Show every movement</Link>
         </p>
       )}
-      {view === 'history' && (movements.length + changes.length === 0 ? <EmptyState title="No stock has moved yet." /> : <MovementHistory movements={movements} changes={changes} money={money} />)}
+      {view === 'history' && (movements.length + changes.length === 0 ? <EmptyState title="No stock has moved yet." /> : <MovementHistory movements={movements} changes={changes} money={money} timeZone={settings.timeZone} />)}
     </>
   );
 }
