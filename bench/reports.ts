@@ -34,6 +34,12 @@ async function main() {
     insert into placements (shop_id, plan_piece_id, instance, x_mm, y_mm, length_mm, width_mm, damaged)
     select pp.shop_id, pp.id, n, 0, 0, 700 + n * 10, 300 + n * 5, n = 8 and pp.index = 0 and length(pp.plan_id::text) % 7 = 0
       from plan_pieces pp cross join generate_series(1, 8) n where pp.shop_id = ${shop.id}`);
+  // As finishing a plan writes them.
+  await db.execute(sql`
+    update plan_pieces pp set
+      part_area_mm2 = coalesce((select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and not pl.damaged), 0),
+      spoiled_area_mm2 = coalesce((select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and pl.damaged), 0)
+     where pp.shop_id = ${shop.id}`);
   await db.execute(sql`
     insert into offcuts (shop_id, material, thickness_mm, length_mm, width_mm, status, source_plan_id, created_at)
     select p.shop_id, 'Maple ply', 18, 800, 400, (array['available','used','scrapped']::offcut_status[])[1 + (row_number() over (order by p.id))::int % 3], p.id, p.finished_at

@@ -360,6 +360,13 @@ export async function finishPlan(
       }
     }
 
+    // Each piece's part and damaged area, kept for the reports (so they need not read every placement).
+    await tx.execute(sql`
+      update plan_pieces pp set
+        part_area_mm2 = coalesce((select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and not pl.damaged), 0),
+        spoiled_area_mm2 = coalesce((select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and pl.damaged), 0)
+       where pp.plan_id = ${planId}`);
+
     const added = await recordDamagedPieces(tx, { shopId, userId, plan: row, request: request.success ? request.data : null, damaged: body.damaged });
     const closed = row.recutPlan ? await closeRecuts(tx, { shopId, planId, userId }) : [];
 

@@ -53,18 +53,15 @@ const materialIs = (column: unknown, f: ReportFilter) => (f.material ? sql`and $
  */
 export async function yieldOverTime(db: Db, f: ReportFilter): Promise<YieldRow[]> {
   const finished = sql.raw('p.finished_at');
-  const [stock, placed, kept] = await Promise.all([
+  // A piece's part and damaged areas are written when its plan is finished; read from its placements otherwise.
+  const partsOf = (damaged: boolean) => sql.raw(`(select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and ${damaged ? '' : 'not '}pl.damaged)`);
+  const [stock, kept] = await Promise.all([
     db.execute(sql`
       select ${periodOf(finished, f)} as period, pp.material, pp.thickness_mm as thickness, count(distinct p.id)::int as plans,
-             sum(pp.length_mm * pp.width_mm)::float8 as area
+             sum(pp.length_mm * pp.width_mm)::float8 as area,
+             coalesce(sum(coalesce(pp.part_area_mm2, ${partsOf(false)})), 0)::float8 as parts,
+             coalesce(sum(coalesce(pp.spoiled_area_mm2, ${partsOf(true)})), 0)::float8 as spoiled
         from plans p join plan_pieces pp on pp.plan_id = p.id
-       where p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('pp.material'), f)}
-       group by 1, 2, 3`),
-    db.execute(sql`
-      select ${periodOf(finished, f)} as period, pp.material, pp.thickness_mm as thickness,
-             coalesce(sum(pl.length_mm * pl.width_mm) filter (where not pl.damaged), 0)::float8 as parts,
-             coalesce(sum(pl.length_mm * pl.width_mm) filter (where pl.damaged), 0)::float8 as spoiled
-        from plans p join plan_pieces pp on pp.plan_id = p.id join placements pl on pl.plan_piece_id = pp.id
        where p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('pp.material'), f)}
        group by 1, 2, 3`),
     db.execute(sql`
@@ -75,12 +72,8 @@ export async function yieldOverTime(db: Db, f: ReportFilter): Promise<YieldRow[]
   ]);
   const key = (r: { period: string; material: string; thickness: number }) => `${r.period}\u0000${r.material}\u0000${Number(r.thickness)}`;
   const rows = new Map<string, YieldRow>();
-  for (const r of rowsOf<{ period: string; material: string; thickness: number; plans: number; area: number }>(stock)) {
-    rows.set(key(r), { period: r.period, material: r.material, thicknessMm: Number(r.thickness), plans: Number(r.plans), stockArea: Number(r.area), partArea: 0, spoiledArea: 0, keptArea: 0, sawWasteArea: 0 });
-  }
-  for (const r of rowsOf<{ period: string; material: string; thickness: number; parts: number; spoiled: number }>(placed)) {
-    const row = rows.get(key(r));
-    if (row) Object.assign(row, { partArea: Number(r.parts), spoiledArea: Number(r.spoiled) });
+  for (const r of rowsOf<{ period: string; material: string; thickness: number; plans: number; area: number; parts: number; spoiled: number }>(stock)) {
+    rows.set(key(r), { period: r.period, material: r.material, thicknessMm: Number(r.thickness), plans: Number(r.plans), stockArea: Number(r.area), partArea: Number(r.parts), spoiledArea: Number(r.spoiled), keptArea: 0, sawWasteArea: 0 });
   }
   for (const r of rowsOf<{ period: string; material: string; thickness: number; area: number }>(kept)) {
     const row = rows.get(key(r));

@@ -56,6 +56,9 @@ export const planPieces = pgTable(
     lengthMm: doublePrecision('length_mm').notNull(),
     widthMm: doublePrecision('width_mm').notNull(),
     toBuy: boolean('to_buy').notNull().default(false),
+    /** Written when the plan is finished: the area of the parts cut whole, and of those damaged (for the reports). */
+    partAreaMm2: doublePrecision('part_area_mm2'),
+    spoiledAreaMm2: doublePrecision('spoiled_area_mm2'),
   },
   (t) => [index('plan_pieces_plan_idx').on(t.planId)],
 );

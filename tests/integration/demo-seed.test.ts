@@ -1,8 +1,8 @@
 import bcrypt from 'bcryptjs';
-import { eq } from 'drizzle-orm';
+import { eq, inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
-import { jobs, offcuts, plans, shops, slideModels, stockItems, users } from '@/db/schema';
+import { jobs, offcuts, placements, planPieces, plans, shops, slideModels, stockItems, users } from '@/db/schema';
 import { offcutUse, oldOffcuts, yieldOverTime } from '@/db/queries/reports';
 import { ledgerMismatches } from '@/db/queries/stock';
 import { HISTORY_BIN } from '@/seeds/demo-history';
@@ -105,6 +105,14 @@ describe('the demo shop', () => {
     expect([...new Set(weeks.map((r) => r.period))]).toEqual(['2026-11-16']);
     expect(months.filter((r) => r.spoiledArea > 0).map((r) => r.period)).toEqual(['2026-08-01']);
     for (const r of months) expect(r.partArea + r.spoiledArea + r.keptArea + r.sawWasteArea).toBeCloseTo(r.stockArea, 3);
+    // Finishing wrote each piece's part and damaged area, equal to its placements' (what the reports read).
+    const pieces = await db.select().from(planPieces).where(inArray(planPieces.planId, done.map((p) => p.id)));
+    for (const piece of pieces) {
+      const on = await db.select().from(placements).where(eq(placements.planPieceId, piece.id));
+      expect(piece.partAreaMm2).toBeCloseTo(on.filter((p) => !p.damaged).reduce((n, p) => n + p.lengthMm * p.widthMm, 0), 6);
+      expect(piece.spoiledAreaMm2).toBeCloseTo(on.filter((p) => p.damaged).reduce((n, p) => n + p.lengthMm * p.widthMm, 0), 6);
+    }
+    expect(pieces.some((p) => (p.spoiledAreaMm2 ?? 0) > 0)).toBe(true);
     const use = await offcutUse(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'month', from: '2026-06-01', to: '2026-11-30' });
     expect(use.reduce((n, r) => n + r.racked, 0)).toBeGreaterThan(0);
     const left = await db.select().from(offcuts).where(eq(offcuts.location, HISTORY_BIN));
