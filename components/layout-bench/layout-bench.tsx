@@ -9,7 +9,6 @@ import { NestProgressBar } from '@/components/nesting/nest-progress';
 import { useNestingWorker } from '@/components/nesting/use-nesting-worker';
 import { api, ApiError } from '@/lib/client/api';
 import { docToPlan, planToDoc, type PartInfo } from '@/lib/layout-bench/document';
-import { checkDoc } from '@/lib/layout-bench/live-check';
 import { prepareRenest } from '@/lib/layout-bench/renest';
 import { createBenchStore, mayRotate, type BenchStore } from '@/lib/layout-bench/store';
 import { fitView, layoutPieces } from '@/lib/layout-bench/world';
@@ -18,6 +17,7 @@ import { readBenchPlan } from '@/lib/layout-bench/read-bench-plan';
 import { formatLength } from '@/lib/units/format-length';
 import { nestRequestSchema, type NestRequest } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
+import { useLiveCheck } from './use-live-check';
 
 const BenchCanvas = dynamic(() => import('./bench-canvas'), { ssr: false, loading: () => <p className="p-4 text-sm text-graphite-mute">Setting out the bench…</p> });
 
@@ -54,7 +54,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   const steps = useStore(store, (s) => s.past.length);
   const [savedAtStep, setSavedAtStep] = useState(0);
   const dirty = steps !== savedAtStep;
-  const check = useMemo(() => checkDoc(request, doc), [request, doc]);
+  const { check, pending } = useLiveCheck(request, doc);
   const frames = useMemo(() => layoutPieces(doc.pieces), [doc.pieces]);
   const fmt = useCallback((mm: number) => formatLength(mm, units), [units]);
   const [notice, setNotice] = useState<string | null>(null);
@@ -174,7 +174,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
         )}
         <button type="button" className="btn-quiet" onClick={fit}>Fit all</button>
         {editable && (
-          <button type="button" className="btn-accent" disabled={save.isPending || !dirty || problems > 0} onClick={() => save.mutate()}>
+          <button type="button" className="btn-accent" disabled={save.isPending || !dirty || pending || problems > 0} onClick={() => save.mutate()}>
             {save.isPending ? 'Saving…' : 'Save layout'}
           </button>
         )}
@@ -208,17 +208,19 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
           <BenchCanvas store={store} frames={frames} parts={parts} check={check} editable={editable} width={size.width} height={size.height} fmt={fmt} pieceCaption={pieceCaption} />
         </div>
         <aside className="space-y-3 text-sm">
-          <div className="card p-3" data-testid="bench-status">
+          <div className="card p-3" data-testid="bench-status" data-pending={pending} aria-busy={pending}>
             {check.totals && (
               <p className="mb-2 text-graphite-soft" data-testid="bench-figures">
                 As laid out: <strong>{check.totals.pieces}</strong> stock pieces, <strong>{(check.totals.yield * 100).toFixed(1)} %</strong> yield
               </p>
             )}
-            {problems === 0 ? (
+            {pending && problems === 0 ? (
+              <p className="font-medium text-graphite-mute" role="status">Checking the layout…</p>
+            ) : problems === 0 ? (
               <p className="font-medium text-sage">Every part can be cut free with straight through-cuts.</p>
             ) : (
               <>
-                <p className="font-medium text-brick">{problems} problem{problems === 1 ? '' : 's'}: saving is refused until they are fixed.</p>
+                <p className="font-medium text-brick">{problems} problem{problems === 1 ? '' : 's'}: saving is refused until they are fixed.{pending && <span className="font-normal text-graphite-mute"> Checking the change…</span>}</p>
                 <ul className="mt-2 max-h-48 list-disc space-y-1 overflow-y-auto pl-5 text-brick" aria-label="Problems">
                   {check.violations.slice(0, 30).map((v, i) => <li key={i}>{v.message}</li>)}
                 </ul>

@@ -1,7 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import type { Db } from '../open';
 import { offcuts, stockItems } from '../schema';
-import { boardFeet } from '@/lib/lumber/board-feet';
+import { costEachCents as priceEach } from '@/lib/stock/pricing';
 import { recutNestParts } from '@/lib/recuts/recuts';
 import type { NestPart, NestRequestInput, NestSettings, NestStock } from '@/shared/schemas/nesting';
 import type { NestFor } from '@/shared/schemas/recut';
@@ -23,15 +23,8 @@ export const stockRef = {
   },
 };
 
-const QUARTERS = /^\s*(\d+)\s*\/\s*4\s*$/;
-
-/** Sheets cost each; boards are priced per board foot on their nominal thickness (4/4 = 1″). */
-export function costEachCents(item: typeof stockItems.$inferSelect): number {
-  if (item.kind === 'sheet') return item.costCents;
-  const q = QUARTERS.exec(item.nominalThickness);
-  const thickness = q ? { quarters: Number(q[1]) } : { mm: item.thicknessMm };
-  return Math.round(item.costCents * boardFeet({ thickness, widthMm: item.widthMm, lengthMm: item.lengthMm }));
-}
+/** Sheets cost each; boards by the board foot (lib/stock/pricing). Kept here for the queries that import it. */
+export const costEachCents = (item: typeof stockItems.$inferSelect): number => priceEach(item);
 
 /**
  * The job's parts on everything the stock room can offer now (free counts only), with the shop's defaults. With

@@ -1,4 +1,6 @@
-import { boardFeet } from '@/lib/lumber/board-feet';
+import { pieceBoardFeet } from './pricing';
+
+export { pieceBoardFeet };
 
 /** One stock size a plan uses, as the estimator reads it before quoting. */
 export interface TakeoffSize {
@@ -59,13 +61,6 @@ export interface Takeoff {
   totals: { costCents: number; allowanceCents: number; costWithAllowanceCents: number; boardFeet: number; areaMm2: number; covered: boolean; coveredReady: boolean };
 }
 
-const QUARTERS = /^\s*(\d+)\s*\/\s*4\s*$/;
-
-/** Board feet of one board: quartered stock ("4/4") on its nominal thickness, anything else on its actual one (AHEC). */
-export function pieceBoardFeet(size: Pick<TakeoffSize, 'nominalThickness' | 'thicknessMm' | 'lengthMm' | 'widthMm'>): number {
-  const q = QUARTERS.exec(size.nominalThickness);
-  return boardFeet({ thickness: q ? { quarters: Number(q[1]) } : { mm: size.thicknessMm }, widthMm: size.widthMm, lengthMm: size.lengthMm });
-}
 
 /** Whole pieces, with float crumbs (2.0000000001) not rounded up to another piece. */
 const wholePiecesUp = (pieces: number) => Math.ceil(pieces - 1e-9);
