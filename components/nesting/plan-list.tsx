@@ -7,12 +7,13 @@ import { StatusBadge, type Tone } from '@/components/ui/status-badge';
 import { api } from '@/lib/client/api';
 import { formatMoney } from '@/lib/money';
 import type { JobPlanSummary } from '@/db/queries/plan-drafts';
+import { formatShopDateTime } from '@/lib/dates/shop-time';
 
 const TONE: Record<JobPlanSummary['status'], Tone> = { draft: 'neutral', released: 'accent', cutting: 'warn', done: 'good', cancelled: 'bad' };
 const LABEL: Record<JobPlanSummary['status'], string> = { draft: 'Draft', released: 'Released', cutting: 'Cutting', done: 'Done', cancelled: 'Cancelled' };
 
 /** The job's plans, newest first, with status, yield and (for those allowed) cost. */
-export function PlanList({ jobId, currency, showPrices }: { jobId: string; currency: string; showPrices: boolean }) {
+export function PlanList({ jobId, currency, showPrices, timeZone }: { jobId: string; currency: string; showPrices: boolean; timeZone: string }) {
   const plans = useQuery({ queryKey: ['plans', jobId], queryFn: () => api<JobPlanSummary[]>(`/api/jobs/${jobId}/plans`) });
   if (plans.isPending) return <p className="text-sm text-graphite-mute">Loading plans…</p>;
   if (plans.isError) return <p className="field-error" role="alert">Could not load the plans: {plans.error.message}</p>;
@@ -35,7 +36,7 @@ export function PlanList({ jobId, currency, showPrices }: { jobId: string; curre
               <td className="num">{p.yieldRatio === null ? '—' : `${(p.yieldRatio * 100).toFixed(1)} %`}</td>
               {showPrices && <td className="num">{p.costCents === null ? '—' : formatMoney(p.costCents, currency)}</td>}
               <td className={`num ${p.unplaced ? 'text-brick' : ''}`}>{p.unplaced}</td>
-              <td className="text-graphite-mute">{new Date(p.updatedAt).toLocaleString()}</td>
+              <td className="whitespace-nowrap text-graphite-mute">{formatShopDateTime(new Date(p.updatedAt), timeZone)}</td>
               <td>{p.status !== 'draft' && <Link href={`/plans/${p.id}/saw-order`}>Saw order</Link>}</td>
             </tr>
           ))}

@@ -17,7 +17,7 @@ export default async function JobPlanPage({ params, searchParams }: { params: Pr
     <div className="space-y-8">
       <section aria-labelledby="plans">
         <h2 id="plans" className="mb-3">Plans</h2>
-        <PlanList jobId={jobId} currency={shop.currency} showPrices={showPrices} />
+        <PlanList jobId={jobId} currency={shop.currency} showPrices={showPrices} timeZone={shop.timeZone} />
       </section>
       {can(user.role, 'recuts:read') && (
         <section id="recuts" aria-labelledby="recuts-heading">
