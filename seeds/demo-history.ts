@@ -27,12 +27,12 @@ const part = (label: string, quantity: number, l: number, w: number, stock: { ma
 
 /** When each was finished (UTC) and who it was for. The last one ends at 23:30 on a Thursday evening in Chicago. */
 const PAST_JOBS = [
-  { name: 'Marsh Creek pantry', customer: 'Dana Marsh', finishedAt: '2026-06-18T21:40:00Z', parts: [part('Pantry side', 4, 84, 23.25, MAPLE), part('Shelf', 10, 22.5, 22, MAPLE, 'any'), part('Top and bottom', 4, 22.5, 23.25, MAPLE)] },
-  { name: 'Quill & Co. coffee counter', customer: 'Quill & Co.', finishedAt: '2026-07-23T19:15:00Z', parts: [part('Counter side', 3, 34.5, 24, MAPLE), part('Bottom', 2, 46, 24, MAPLE), part('Drawer side', 8, 22, 5.5, BIRCH_12), part('Drawer bottom', 4, 21.5, 14.5, BIRCH_6, 'any')] },
-  { name: 'Ostrander bath vanity', customer: 'Lena Ostrander', finishedAt: '2026-08-27T22:05:00Z', parts: [part('Vanity side', 2, 30, 21, MAPLE), part('Vanity bottom', 1, 46.5, 21, MAPLE), part('Stretcher', 3, 46.5, 4, MAPLE, 'any')], damaged: 'Vanity side' },
-  { name: 'Bellweather mudroom lockers', customer: 'Ruth Bellweather', finishedAt: '2026-09-24T20:30:00Z', parts: [part('Locker side', 5, 72, 16, MAPLE), part('Locker shelf', 8, 18, 16, MAPLE, 'any'), part('Bench top', 1, 72, 16, MAPLE)] },
-  { name: 'Tamsin office built-ins', customer: 'Tamsin Reyes', finishedAt: '2026-10-29T18:45:00Z', parts: [part('Bookcase side', 6, 84, 12, MAPLE), part('Bookcase shelf', 12, 34.5, 11.5, MAPLE, 'any'), part('Desk top', 1, 60, 24, MAPLE)] },
-  { name: 'Ferncliff drawer bank', customer: 'Omar Ferncliff', finishedAt: '2026-11-20T05:30:00Z', parts: [part('Drawer side', 16, 20, 6, BIRCH_12), part('Drawer front and back', 16, 14, 6, BIRCH_12), part('Drawer bottom', 8, 19.5, 13.5, BIRCH_6, 'any')] },
+  { name: 'Marsh Creek pantry', plan: 'Pantry carcasses and shelves', customer: 'Dana Marsh', finishedAt: '2026-06-18T21:40:00Z', parts: [part('Pantry side', 4, 84, 23.25, MAPLE), part('Shelf', 10, 22.5, 22, MAPLE, 'any'), part('Top and bottom', 4, 22.5, 23.25, MAPLE)] },
+  { name: 'Quill & Co. coffee counter', plan: 'Counter and drawers', customer: 'Quill & Co.', finishedAt: '2026-07-23T19:15:00Z', parts: [part('Counter side', 3, 34.5, 24, MAPLE), part('Bottom', 2, 46, 24, MAPLE), part('Drawer side', 8, 22, 5.5, BIRCH_12), part('Drawer bottom', 4, 21.5, 14.5, BIRCH_6, 'any')] },
+  { name: 'Ostrander bath vanity', plan: 'Vanity carcass', customer: 'Lena Ostrander', finishedAt: '2026-08-27T22:05:00Z', parts: [part('Vanity side', 2, 30, 21, MAPLE), part('Vanity bottom', 1, 46.5, 21, MAPLE), part('Stretcher', 3, 46.5, 4, MAPLE, 'any')], damaged: 'Vanity side' },
+  { name: 'Bellweather mudroom lockers', plan: 'Lockers and bench', customer: 'Ruth Bellweather', finishedAt: '2026-09-24T20:30:00Z', parts: [part('Locker side', 5, 72, 16, MAPLE), part('Locker shelf', 8, 18, 16, MAPLE, 'any'), part('Bench top', 1, 72, 16, MAPLE)] },
+  { name: 'Tamsin office built-ins', plan: 'Bookcases and desk top', customer: 'Tamsin Reyes', finishedAt: '2026-10-29T18:45:00Z', parts: [part('Bookcase side', 6, 84, 12, MAPLE), part('Bookcase shelf', 12, 34.5, 11.5, MAPLE, 'any'), part('Desk top', 1, 60, 24, MAPLE)] },
+  { name: 'Ferncliff drawer bank', plan: 'Drawer boxes', customer: 'Omar Ferncliff', finishedAt: '2026-11-20T05:30:00Z', parts: [part('Drawer side', 16, 20, 6, BIRCH_12), part('Drawer front and back', 16, 14, 6, BIRCH_12), part('Drawer bottom', 8, 19.5, 13.5, BIRCH_6, 'any')] },
 ] as const;
 
 /** The rack location where the past jobs' offcuts were put. */
@@ -47,12 +47,13 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
     await db.insert(parts).values(past.parts.map((p, sort) => ({ shopId, jobId: job.id, sort: sort + 1, ...p })));
 
     // Bought for the job, or cut from what earlier past jobs racked: today's rack and counts are not touched.
-    const built = nestRequestSchema.parse(await buildNestRequest(db, shopId, job.id, { timeBudgetMs: 0 }));
+    // Only offcuts of a good size were kept in those days (at least 24″ × 12″), so the rack did not fill with scraps.
+    const built = nestRequestSchema.parse(await buildNestRequest(db, shopId, job.id, { timeBudgetMs: 0, minOffcutLength: inches(24), minOffcutWidth: inches(12) }));
     const request = { ...built, stock: built.stock.filter((s) => s.count === null || racked.some((id) => s.id === stockRef.offcut(id))) };
     const document = await optimize(request);
     const [plan] = await db
       .insert(plans)
-      .values({ shopId, jobId: job.id, name: 'Whole cut list', status: 'draft', request, document, yieldRatio: document.totals?.yield ?? null, costCents: Math.round(document.totals?.cost ?? 0), createdBy: estimatorId, createdAt: wonAt })
+      .values({ shopId, jobId: job.id, name: past.plan, status: 'draft', request, document, yieldRatio: document.totals?.yield ?? null, costCents: Math.round(document.totals?.cost ?? 0), createdBy: estimatorId, createdAt: wonAt })
       .returning({ id: plans.id });
     await releasePlan(db, { shopId, userId: estimatorId, planId: plan.id });
 

@@ -13,7 +13,7 @@ export function YieldLedger({ ledger, money, area, day }: { ledger: Ledger; mone
   const { totals } = ledger;
   return (
     <>
-      <div className="mb-5 grid gap-3 sm:grid-cols-3 lg:grid-cols-5">
+      <div className="mb-5 grid grid-cols-2 gap-3 sm:grid-cols-3 xl:grid-cols-5">
         <Figure label="Yield (by stock area)" value={pct(totals.yieldRatio)} />
         <Figure label="Saw waste" value={pct(totals.sawWasteRatio)} />
         <Figure label="Spoiled at the saw" value={pct(totals.spoiledRatio)} />

@@ -45,6 +45,7 @@ const PAGES: { slug: string; path: (ids: Ids) => string; permission: Permission;
   { slug: 'stock-rack', path: () => '/stock?view=rack', permission: 'stock:read', heading: /^Stock room$/ },
   { slug: 'stock-history', path: () => '/stock?view=history', permission: 'stock:read', heading: /^Stock room$/ },
   { slug: 'yield', path: () => '/yield', permission: 'yield:read', heading: /^Yield ledger$/ },
+  { slug: 'reports', path: () => '/reports?from=2026-06-01&to=2026-11-30', permission: 'yield:read', heading: /^Reports$/ },
   { slug: 'shop-floor', path: () => '/shop-floor', permission: 'sawsteps:tick', heading: /^Shop floor$/ },
   { slug: 'cutting', path: (i) => `/shop-floor/${i.planId}`, permission: 'sawsteps:tick', heading: /Hollis kitchen/ },
   { slug: 'saw-order', path: (i) => `/plans/${i.planId}/saw-order`, permission: 'plans:read', heading: /Saw order/ },

@@ -57,7 +57,8 @@ test('the owner receives stock, adjusts a count with a reason, scraps an offcut,
   const history = page.getByTestId('movement');
   await expect(history.filter({ hasText: 'Count adjusted' }).filter({ hasText: 'Maren Okafor' })).toContainText('crushed corner');
   await expect(history.filter({ hasText: 'Received' }).filter({ hasText: 'delivery 4471' })).toContainText('+3');
-  await expect(history.filter({ hasText: 'Scrapped' })).toContainText('Delaminated face');
+  // The demo's past jobs scrapped offcuts too: this one is the offcut scrapped here, with its reason.
+  await expect(history.filter({ hasText: 'Scrapped' }).filter({ hasText: 'Delaminated face' })).toHaveCount(1);
   await shot(page, 'stock-owner-history');
 });
 
