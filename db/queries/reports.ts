@@ -41,6 +41,9 @@ export interface YieldRow {
 
 const rowsOf = <T>(result: unknown): T[] => ((result as { rows?: T[] }).rows ?? (result as T[]));
 
+/** The day after a `YYYY-MM-DD` day. */
+const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
+
 /** The instant a shop day starts, as a timestamptz, from a day read on the shop's clock. */
 const dayStart = (day: string, zone: string) => sql`(${day}::date::timestamp at time zone ${zone})`;
 const periodOf = (column: unknown, f: ReportFilter) => sql`to_char(date_trunc(${f.by}, ${column} at time zone ${f.timeZone}), 'YYYY-MM-DD')`;
@@ -186,18 +189,18 @@ export async function reportMaterials(db: Db, shopId: string): Promise<string[]>
  * and period, never the movements themselves), valued in `lib/reports/stock-value` at each piece's cost today.
  */
 export async function stockValueReport(db: Db, f: ReportFilter) {
-  const moved = sql.raw('m.created_at');
+  const periods = periodsBetween(f.from, f.to, f.by);
+  // The instants the periods start, in the shop's zone, and the first day after the range.
+  const starts = [...periods.map((p) => (p < f.from ? f.from : p)), nextDay(f.to)];
+  const bounds = sql`array[${sql.join(starts.map((d) => dayStart(d, f.timeZone)), sql`, `)}]`;
   const [changes, items, racked] = await Promise.all([
-    // Everything before the range in one opening balance per piece (no date arithmetic per row), then the range by period.
+    // Each movement put in its period by comparing its time with the periods' starts on the shop's clock
+    // (width_bucket: 0 before the range, the opening balance; k for the k-th period), not by converting every row.
     db.execute(sql`
-      select null as period, coalesce(m.stock_item_id, m.offcut_id) as piece, sum(m.quantity)::int as on_hand, sum(m.reserved_change)::int as reserved
+      select width_bucket(m.created_at, ${bounds}) as bucket, coalesce(m.stock_item_id, m.offcut_id) as piece,
+             sum(m.quantity)::int as on_hand, sum(m.reserved_change)::int as reserved
         from stock_movements m
-       where m.shop_id = ${f.shopId} and m.created_at < ${dayStart(f.from, f.timeZone)}
-       group by 2
-      union all
-      select ${periodOf(moved, f)}, coalesce(m.stock_item_id, m.offcut_id), sum(m.quantity)::int, sum(m.reserved_change)::int
-        from stock_movements m
-       where m.shop_id = ${f.shopId} and ${inRange(moved, f)}
+       where m.shop_id = ${f.shopId} and m.created_at < ${dayStart(f.to, f.timeZone)} + interval '1 day'
        group by 1, 2`),
     db.select().from(stockItems).where(eq(stockItems.shopId, f.shopId)),
     db.select({ id: offcuts.id, material: offcuts.material, costCents: offcuts.costCents }).from(offcuts).where(eq(offcuts.shopId, f.shopId)),
@@ -207,10 +210,9 @@ export async function stockValueReport(db: Db, f: ReportFilter) {
     ...racked.map((o) => ({ id: o.id, material: o.material, costEach: o.costCents })),
   ].filter((p) => !f.material || p.material === f.material);
   const wanted = new Set(pieces.map((p) => p.id));
-  const periods = periodsBetween(f.from, f.to, f.by);
-  const ledger = rowsOf<{ period: string | null; piece: string; on_hand: number; reserved: number }>(changes)
+  const ledger = rowsOf<{ bucket: number; piece: string; on_hand: number; reserved: number }>(changes)
     .filter((r) => wanted.has(r.piece))
-    .map((r) => ({ period: r.period ?? periods[0], pieceId: r.piece, onHand: Number(r.on_hand), reserved: Number(r.reserved) }));
+    .map((r) => ({ period: periods[Math.max(0, Number(r.bucket) - 1)], pieceId: r.piece, onHand: Number(r.on_hand), reserved: Number(r.reserved) }));
   const { points, unknownPieces } = stockValueOverTime(periods, ledger, pieces);
   // Low on the rack now: free count at or under the size's low mark.
   const low = items
