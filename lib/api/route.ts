@@ -5,7 +5,8 @@ import { getDb } from '@/db/client';
 import type { Db } from '@/db/open';
 import { userFromRequest, type SessionUser } from '@/lib/auth/session';
 import { can, type Permission } from '@/lib/auth/permissions';
-import { forbidden, HttpError, notFound, toErrorResponse, unauthorized } from './errors';
+import { forbidden, notFound, toErrorResponse, unauthorized } from './errors';
+import { checkJsonBody, checkSameOrigin, readJsonBody } from './request-guard';
 
 export interface RouteContext<P, B, Q> {
   req: NextRequest;
@@ -28,11 +29,10 @@ interface RouteSpec<P, B, Q> {
 
 type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
 
-const MAX_BODY_BYTES = 2_000_000;
-
 /**
  * Every API route handler is built with this: authenticate → check the permission → parse params, query and body
- * with zod → act → respond. The proxy only redirects pages; this is where access is decided.
+ * with zod → act → respond. The proxy only redirects pages; this is where access is decided. Before anything
+ * else, a state-changing request must come from the app's own pages (403) and carry JSON if it has a body (415).
  */
 export function route<P = undefined, B = undefined, Q = undefined>(
   spec: RouteSpec<P, B, Q>,
@@ -40,6 +40,8 @@ export function route<P = undefined, B = undefined, Q = undefined>(
 ) {
   return async (req: NextRequest, context: NextRouteContext): Promise<Response> => {
     try {
+      checkSameOrigin(req);
+      checkJsonBody(req);
       const db = await getDb();
       const user = await userFromRequest(req, db);
       if (!user) throw unauthorized();
@@ -52,29 +54,16 @@ export function route<P = undefined, B = undefined, Q = undefined>(
         params = parsed.data;
       }
       const query = (spec.query ? spec.query.parse(Object.fromEntries(req.nextUrl.searchParams)) : undefined) as Q;
-      const body = (spec.body ? spec.body.parse(await readJson(req)) : undefined) as B;
+      const body = (spec.body ? spec.body.parse(await readJsonBody(req)) : undefined) as B;
 
       const result = await handler({ req, db, user, params, body, query });
       if (result instanceof Response) return result;
       return NextResponse.json(result ?? { ok: true }, { status: spec.status ?? 200 });
     } catch (error) {
-      const { status, body } = toErrorResponse(error);
-      return NextResponse.json(body, { status });
+      const { status, body, headers } = toErrorResponse(error);
+      return NextResponse.json(body, { status, headers });
     }
   };
-}
-
-async function readJson(req: NextRequest): Promise<unknown> {
-  const length = Number(req.headers.get('content-length') ?? 0);
-  if (length > MAX_BODY_BYTES) throw new HttpError(413, 'That request is too large.');
-  const text = await req.text();
-  if (text.length > MAX_BODY_BYTES) throw new HttpError(413, 'That request is too large.');
-  if (!text) return {};
-  try {
-    return JSON.parse(text);
-  } catch {
-    throw new HttpError(422, 'The request body is not valid JSON.');
-  }
 }
 
 export const idParams = z.object({ id: z.uuid() });
