@@ -42,17 +42,22 @@ function isOwnOrigin(origin: string, req: Request, publicUrl: string | undefined
   return host !== '' && url.host.toLowerCase() === host;
 }
 
-/** True when the request carries a body (a length above zero, or chunked). */
-function hasBody(req: Request): boolean {
+/** True when the request says it carries a body (a length above zero, or chunked). */
+function declaresBody(req: Request): boolean {
   const length = req.headers.get('content-length');
   if (length !== null) return Number(length) > 0;
-  return req.headers.has('transfer-encoding') || req.body !== null;
+  return req.headers.has('transfer-encoding');
 }
 
-/** A body on a state-changing request must be JSON: a form or text/plain body (what a cross-site form sends) is a 415. */
+/**
+ * A body on a state-changing request must be JSON: a form or text/plain body (what a cross-site form can send
+ * without asking) is a 415, as is a body with no type at all.
+ */
 export function checkJsonBody(req: Request): void {
-  if (SAFE_METHODS.has(req.method.toUpperCase()) || !hasBody(req)) return;
-  const type = (req.headers.get('content-type') ?? '').split(';')[0].trim().toLowerCase();
+  if (SAFE_METHODS.has(req.method.toUpperCase())) return;
+  const header = req.headers.get('content-type');
+  if (header === null && !declaresBody(req)) return;
+  const type = (header ?? '').split(';')[0].trim().toLowerCase();
   if (type !== 'application/json') throw new HttpError(415, 'Send the request body as JSON (Content-Type: application/json).');
 }
 

@@ -65,8 +65,8 @@ test.describe('a huge chunked body', () => {
         { host: '127.0.0.1', port: E2E_PORT, path: '/api/offcuts', method: 'POST', headers: { cookie, origin: E2E_URL, 'content-type': 'application/json', 'transfer-encoding': 'chunked' } },
         (res) => {
           answered = true;
+          resolve(res.statusCode ?? 0);
           res.resume();
-          res.on('end', () => resolve(res.statusCode ?? 0));
           req.destroy();
         },
       );
@@ -88,5 +88,64 @@ test.describe('a huge chunked body', () => {
     expect(peak - before, `RSS ${Math.round(before / 1e6)} MB → peak ${Math.round(peak / 1e6)} MB`).toBeLessThan(80 * 1024 * 1024);
     console.log(`server RSS before ${Math.round(before / 1e6)} MB, peak during the 300 MB body ${Math.round(peak / 1e6)} MB`);
     expect((await page.request.get('/api/health')).status()).toBe(200);
+  });
+});
+
+test.describe('sign-in throttle', () => {
+  /** Posts the credentials as next-auth's client does, from a client address of the test's own. */
+  async function attempt(request: APIRequestContext, email: string, password: string, address: string) {
+    const { csrfToken } = await (await request.get('/api/auth/csrf')).json();
+    return request.post('/api/auth/callback/credentials', { form: { email, password, csrfToken, json: 'true' }, headers: { 'x-forwarded-for': address } });
+  }
+
+  test('ten wrong passwords, then the right one is refused (429, Retry-After), the same for an unknown e-mail; the form says so', async ({ page, browser, consoleErrors }) => {
+    test.setTimeout(120_000);
+    await signIn(page, 'owner');
+    const email = `throttled.${Date.now()}@larkspur.example`;
+    const password = 'a-long-enough-password';
+    expect((await page.request.post('/api/team', { data: { name: 'Tomas Reyes', email, role: 'estimator', password } })).status()).toBe(201);
+
+    const guest = await browser.newContext({ baseURL: E2E_URL, extraHTTPHeaders: { origin: E2E_URL } });
+    const answers = async (who: string, address: string) => {
+      const out: string[] = [];
+      for (let i = 0; i < 10; i++) out.push(String((await attempt(guest.request, who, `wrong-${i}`, address)).status()));
+      const last = await attempt(guest.request, who, password, address);
+      out.push(`${last.status()} ${(await last.json()).error} ${last.headers()['retry-after'] ? 'Retry-After' : ''}`);
+      return { out, retryAfter: Number(last.headers()['retry-after']) };
+    };
+    const known = await answers(email, '203.0.113.10');
+    const unknown = await answers(`nobody.${Date.now()}@larkspur.example`, '203.0.113.11');
+    expect(known.out.slice(0, 10)).toEqual(Array(10).fill('401'));
+    expect(known.out[10]).toBe('429 Too many sign-in attempts. Try again in 15 minutes. Retry-After');
+    expect(known.retryAfter).toBeGreaterThan(800);
+    expect(unknown.out).toEqual(known.out);
+
+    // The sign-in form tells the person to wait (the browser logs the refused request).
+    consoleErrors.allow(/status of 429/);
+    const form = await guest.newPage();
+    await form.goto('/sign-in');
+    await form.getByLabel('E-mail').fill(email);
+    await form.getByLabel('Password').fill(password);
+    await form.getByRole('button', { name: 'Sign in' }).click();
+    await expect(form.getByRole('alert').filter({ hasText: /\S/ })).toHaveText('Too many sign-in attempts. Try again in 15 minutes.');
+    await guest.close();
+  });
+});
+
+test.describe('sign-out', () => {
+  test('revokes the session: a saved copy of the cookie is refused after signing out', async ({ page, browser }) => {
+    await signIn(page, 'estimator');
+    const saved = await page.context().cookies();
+    expect((await page.request.get('/api/jobs')).status()).toBe(200);
+    await page.getByRole('button', { name: 'Sign out' }).first().click();
+    await expect(page).toHaveURL(/\/sign-in/);
+
+    const replay = await browser.newContext({ baseURL: E2E_URL, extraHTTPHeaders: { origin: E2E_URL } });
+    await replay.addCookies(saved);
+    expect((await replay.request.get('/api/jobs')).status()).toBe(401);
+    const again = await replay.newPage();
+    await again.goto('/jobs');
+    await expect(again).toHaveURL(/\/sign-in/);
+    await replay.close();
   });
 });
