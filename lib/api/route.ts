@@ -7,6 +7,7 @@ import { userFromRequest, type SessionUser } from '@/lib/auth/session';
 import { can, type Permission } from '@/lib/auth/permissions';
 import { forbidden, notFound, toErrorResponse, unauthorized } from './errors';
 import { checkJsonBody, checkSameOrigin, readJsonBody } from './request-guard';
+import { withoutPrices } from '@/lib/stock/without-prices';
 
 export interface RouteContext<P, B, Q> {
   req: NextRequest;
@@ -58,7 +59,9 @@ export function route<P = undefined, B = undefined, Q = undefined>(
 
       const result = await handler({ req, db, user, params, body, query });
       if (result instanceof Response) return result;
-      return NextResponse.json(result ?? { ok: true }, { status: spec.status ?? 200 });
+      // A role that may not see prices gets none, whatever the handler returned (a write's echo included).
+      const shown = can(user.role, 'prices:read') ? result : withoutPrices(result);
+      return NextResponse.json(shown ?? { ok: true }, { status: spec.status ?? 200 });
     } catch (error) {
       const { status, body, headers } = toErrorResponse(error);
       return NextResponse.json(body, { status, headers });
