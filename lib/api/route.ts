@@ -5,9 +5,11 @@ import { getDb } from '@/db/client';
 import type { Db } from '@/db/open';
 import { userFromRequest, type SessionUser } from '@/lib/auth/session';
 import { can, type Permission } from '@/lib/auth/permissions';
-import { forbidden, notFound, toErrorResponse, unauthorized } from './errors';
+import { forbidden, notFound, setErrorReporter, toErrorResponse, unauthorized } from './errors';
 import { checkJsonBody, checkSameOrigin, readJsonBody } from './request-guard';
 import { withoutPrices } from '@/lib/stock/without-prices';
+import { isHttps, securityHeaders } from '@/lib/security-headers';
+import { log, requestIdOf, routeOf } from '@/lib/log';
 
 export interface RouteContext<P, B, Q> {
   req: NextRequest;
@@ -28,6 +30,8 @@ interface RouteSpec<P, B, Q> {
   status?: number;
 }
 
+setErrorReporter((error, requestId) => log().error({ err: error, requestId }, 'unexpected error'));
+
 type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
 
 /**
@@ -40,12 +44,36 @@ export function route<P = undefined, B = undefined, Q = undefined>(
   handler: (ctx: RouteContext<P, B, Q>) => Promise<unknown>,
 ) {
   return async (req: NextRequest, context: NextRouteContext): Promise<Response> => {
+    const started = performance.now();
+    const requestId = requestIdOf(req.headers);
+    const who: { user?: SessionUser } = {};
+    const res = await handle(req, context, who, requestId);
+    for (const [k, v] of Object.entries(securityHeaders(isHttps(req)))) if (!res.headers.has(k)) res.headers.set(k, v);
+    res.headers.set('X-Request-Id', requestId);
+    // One line per request: who and what, never a body, a header or a cookie.
+    log().info(
+      {
+        requestId,
+        method: req.method,
+        route: routeOf(req.nextUrl.pathname),
+        status: res.status,
+        ms: Math.round((performance.now() - started) * 10) / 10,
+        shopId: who.user?.shopId ?? null,
+        userId: who.user?.id ?? null,
+      },
+      'api request',
+    );
+    return res;
+  };
+
+  async function handle(req: NextRequest, context: NextRouteContext, who: { user?: SessionUser }, requestId: string): Promise<Response> {
     try {
       checkSameOrigin(req);
       checkJsonBody(req);
       const db = await getDb();
       const user = await userFromRequest(req, db);
       if (!user) throw unauthorized();
+      who.user = user;
       if (!can(user.role, spec.permission)) throw forbidden();
 
       let params = undefined as P;
@@ -63,10 +91,10 @@ export function route<P = undefined, B = undefined, Q = undefined>(
       const shown = can(user.role, 'prices:read') ? result : withoutPrices(result);
       return NextResponse.json(shown ?? { ok: true }, { status: spec.status ?? 200 });
     } catch (error) {
-      const { status, body, headers } = toErrorResponse(error);
+      const { status, body, headers } = toErrorResponse(error, requestId);
       return NextResponse.json(body, { status, headers });
     }
-  };
+  }
 }
 
 export const idParams = z.object({ id: z.uuid() });

@@ -16,10 +16,17 @@ const credentialsSchema = z.object({
 // Compared against when the e-mail is unknown, so a wrong address costs as long as a wrong password.
 export const DUMMY_HASH = '$2b$10$CwTycUXWue0Thq9StjUM0uJ8.vY9t7zAUMiAOFY9zCMY4Ko8J7sBu';
 
+/** True when the app's public address (NEXTAUTH_URL) is https. */
+export function secureCookies(url = process.env.NEXTAUTH_URL): boolean {
+  return (url ?? '').trim().toLowerCase().startsWith('https://');
+}
+
 export function authOptions(): NextAuthOptions {
   return {
     secret: serverEnv().NEXTAUTH_SECRET,
     session: { strategy: 'jwt', maxAge: 12 * 60 * 60 },
+    // Secure (and __Secure-/__Host- prefixed) cookies whenever people reach the app over https.
+    useSecureCookies: secureCookies(),
     pages: { signIn: '/sign-in', error: '/sign-in' },
     providers: [
       CredentialsProvider({
