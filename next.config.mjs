@@ -1,12 +1,26 @@
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // PGlite ships its own wasm and data files; bundling would copy ~15 MB into static media.
-  serverExternalPackages: ['@electric-sql/pglite', 'pg'],
+  serverExternalPackages: ['@electric-sql/pglite', 'pg', 'pino', 'pino-pretty'],
   poweredByHeader: false,
   // Several builds can live side by side (one per developer working in the same tree); the default is .next.
   distDir: process.env.KERFWISE_DIST_DIR || '.next',
   // `npm test` type-checks the whole project with `tsc --noEmit`; the build does not repeat it.
   typescript: { ignoreBuildErrors: true },
+  // Static files and anything else the proxy and the route wrapper do not answer (lib/security-headers.ts sets
+  // these, with the page's CSP and HSTS over https, on pages and API answers).
+  async headers() {
+    return [
+      {
+        source: '/:path*',
+        headers: [
+          { key: 'X-Content-Type-Options', value: 'nosniff' },
+          { key: 'Referrer-Policy', value: 'strict-origin-when-cross-origin' },
+          { key: 'X-Frame-Options', value: 'DENY' },
+        ],
+      },
+    ];
+  },
 };
 
 export default nextConfig;

@@ -22,6 +22,8 @@ export default defineConfig({
       'tests/integration/**/*.test.ts',
     ],
     environment: 'node',
+    // Request log lines (lib/log.ts) would bury the test output; tests that read them send them to a stream.
+    env: { LOG_LEVEL: 'silent' },
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import type { ReactNode } from 'react';
+import { connection } from 'next/server';
 import { Providers } from '@/components/providers';
 import { plexMono, plexSans } from './fonts';
 import './globals.css';
@@ -9,7 +10,9 @@ export const metadata: Metadata = {
   description: 'Cut lists, nesting, saw orders and stock for small cabinet and furniture shops.',
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Every page is rendered per request, so Next.js can put the request's CSP nonce (proxy.ts) on its scripts.
+  await connection();
   return (
     <html lang="en" className={`${plexSans.variable} ${plexMono.variable}`}>
       <body className="min-h-screen font-sans">

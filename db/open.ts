@@ -11,6 +11,8 @@ export type Db = PgDatabase<PgQueryResultHKT, Schema>;
 export interface DbHandle {
   db: Db;
   kind: 'pglite' | 'postgres';
+  /** The PostgreSQL server's address, for a handle on one (tests open other clients on it). */
+  url?: string;
   close(): Promise<void>;
 }
 
@@ -75,7 +77,7 @@ async function openPostgres(url: string): Promise<DbHandle> {
   // An idle connection the server ends (a restart, an administrator) is dropped from the pool, which opens a new
   // one on the next query; unheard, the pool's 'error' event would take the whole process down.
   pool.on('error', (error) => console.error(`PostgreSQL closed an idle connection (${error.message}); the next query opens a new one.`));
-  return { db: drizzle({ client: pool, schema }) as unknown as Db, kind: 'postgres', close: () => pool.end() };
+  return { db: drizzle({ client: pool, schema }) as unknown as Db, kind: 'postgres', url, close: () => pool.end() };
 }
 
 /** Applies the migrations of `folder` not yet applied (a test may point it at a copy holding only the first few). */

@@ -17,6 +17,14 @@ export function SignInForm() {
       password: String(form.get('password') ?? ''),
       redirect: false,
     });
+    if (result?.status === 429) {
+      // Throttled: too many wrong attempts for this e-mail or from this address (known account or not).
+      const seconds = Number(/^TooManyAttempts:(\d+)$/.exec(result.error ?? '')?.[1]) || 60;
+      const minutes = Math.max(1, Math.ceil(seconds / 60));
+      setError(`Too many sign-in attempts. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`);
+      setPending(false);
+      return;
+    }
     if (!result || result.error) {
       // One message for every failure: it must not tell which of the two was wrong.
       setError('That e-mail and password do not match an active account.');

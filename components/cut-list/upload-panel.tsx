@@ -6,7 +6,7 @@ import { api, ApiError } from '@/lib/client/api';
 import { guessMapping, looksLikeHeader, TEMPLATE_COLUMNS } from '@/lib/cut-list/column-mapping';
 import { detectUnit } from '@/lib/cut-list/detect-unit';
 import { UPLOAD_LIMITS } from '@/lib/cut-list/limits';
-import { readCutListFile } from '@/lib/cut-list/read-cut-list-file';
+import { readCutListFileInWorker } from '@/lib/client/spreadsheet-worker';
 import { importSummary } from '@/lib/cut-list/import-summary';
 import { toUploadRows } from '@/lib/cut-list/upload-rows';
 import { countOf } from '@/lib/plural';
@@ -46,7 +46,7 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
       setFileError(`“${f.name}” is ${Math.round(f.size / 1024)} KB; the limit is ${UPLOAD_LIMITS.maxFileBytes / 1024} KB. Split it into smaller files.`);
       return;
     }
-    const read = await readCutListFile({ name: f.name, bytes: await f.arrayBuffer() });
+    const read = await readCutListFileInWorker({ name: f.name, bytes: await f.arrayBuffer() });
     if (!read.ok) return setFileError(read.error);
     const header = looksLikeHeader(read.grid[0]);
     const map = header ? guessMapping(read.grid[0]) : read.grid[0].map((_, i) => TEMPLATE_COLUMNS[i] ?? null);

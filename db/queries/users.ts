@@ -47,6 +47,17 @@ export async function loadSessionUser(
   return user;
 }
 
+/**
+ * Ends every session the user holds (sign-out): the session version moves on, so a saved copy of the signed-out
+ * cookie is refused on its next request, on every app server (each request reads the version from the database).
+ */
+export async function revokeSessions(db: Db, claims: { userId: string; shopId: string }): Promise<void> {
+  await db
+    .update(users)
+    .set({ tokenVersion: sql`${users.tokenVersion} + 1` })
+    .where(and(eq(users.id, claims.userId), eq(users.shopId, claims.shopId)));
+}
+
 export async function listTeam(db: Db, shopId: string) {
   return db
     .select({ id: users.id, name: users.name, email: users.email, role: users.role, active: users.active, createdAt: users.createdAt })

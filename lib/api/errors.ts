@@ -3,9 +3,11 @@ import { ZodError } from 'zod';
 /** An error that maps to one HTTP status and a message safe to show. */
 export class HttpError extends Error {
   constructor(
-    readonly status: 401 | 403 | 404 | 409 | 413 | 422,
+    readonly status: 401 | 403 | 404 | 409 | 413 | 415 | 422 | 429,
     message: string,
     readonly fields?: Record<string, string[]>,
+    /** Extra response headers (Retry-After on a 429). */
+    readonly headers?: Record<string, string>,
   ) {
     super(message);
   }
@@ -23,15 +25,23 @@ export interface ErrorBody {
 }
 
 /** The one error mapper: zod → 422 with field messages, HttpError → its status, anything else → 500. */
-export function toErrorResponse(error: unknown): { status: number; body: ErrorBody } {
+export function toErrorResponse(error: unknown, requestId?: string): { status: number; body: ErrorBody; headers?: Record<string, string> } {
   if (error instanceof HttpError) {
-    return { status: error.status, body: { error: error.message, ...(error.fields ? { fields: error.fields } : {}) } };
+    return { status: error.status, body: { error: error.message, ...(error.fields ? { fields: error.fields } : {}) }, headers: error.headers };
   }
   if (error instanceof ZodError) {
     return { status: 422, body: { error: 'Some values are not valid.', fields: zodFieldErrors(error) } };
   }
-  console.error(error);
+  // With its stack, and the request id the answer carries so the two can be matched.
+  reportError(error, requestId);
   return { status: 500, body: { error: 'Something went wrong on our side. Nothing was saved.' } };
+}
+
+let reportError: (error: unknown, requestId?: string) => void = (error) => console.error(error);
+
+/** Where unexpected errors go (the route wrapper sends them to the structured log). */
+export function setErrorReporter(report: (error: unknown, requestId?: string) => void): void {
+  reportError = report;
 }
 
 export function zodFieldErrors(error: ZodError): Record<string, string[]> {

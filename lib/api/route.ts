@@ -5,7 +5,11 @@ import { getDb } from '@/db/client';
 import type { Db } from '@/db/open';
 import { userFromRequest, type SessionUser } from '@/lib/auth/session';
 import { can, type Permission } from '@/lib/auth/permissions';
-import { forbidden, HttpError, notFound, toErrorResponse, unauthorized } from './errors';
+import { forbidden, notFound, setErrorReporter, toErrorResponse, unauthorized } from './errors';
+import { checkJsonBody, checkSameOrigin, readJsonBody } from './request-guard';
+import { withoutPrices } from '@/lib/stock/without-prices';
+import { isHttps, securityHeaders } from '@/lib/security-headers';
+import { log, requestIdOf, routeOf } from '@/lib/log';
 
 export interface RouteContext<P, B, Q> {
   req: NextRequest;
@@ -26,23 +30,50 @@ interface RouteSpec<P, B, Q> {
   status?: number;
 }
 
-type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
+setErrorReporter((error, requestId) => log().error({ err: error, requestId }, 'unexpected error'));
 
-const MAX_BODY_BYTES = 2_000_000;
+type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
 
 /**
  * Every API route handler is built with this: authenticate → check the permission → parse params, query and body
- * with zod → act → respond. The proxy only redirects pages; this is where access is decided.
+ * with zod → act → respond. The proxy only redirects pages; this is where access is decided. Before anything
+ * else, a state-changing request must come from the app's own pages (403) and carry JSON if it has a body (415).
  */
 export function route<P = undefined, B = undefined, Q = undefined>(
   spec: RouteSpec<P, B, Q>,
   handler: (ctx: RouteContext<P, B, Q>) => Promise<unknown>,
 ) {
   return async (req: NextRequest, context: NextRouteContext): Promise<Response> => {
+    const started = performance.now();
+    const requestId = requestIdOf(req.headers);
+    const who: { user?: SessionUser } = {};
+    const res = await handle(req, context, who, requestId);
+    for (const [k, v] of Object.entries(securityHeaders(isHttps(req)))) if (!res.headers.has(k)) res.headers.set(k, v);
+    res.headers.set('X-Request-Id', requestId);
+    // One line per request: who and what, never a body, a header or a cookie.
+    log().info(
+      {
+        requestId,
+        method: req.method,
+        route: routeOf(req.nextUrl.pathname),
+        status: res.status,
+        ms: Math.round((performance.now() - started) * 10) / 10,
+        shopId: who.user?.shopId ?? null,
+        userId: who.user?.id ?? null,
+      },
+      'api request',
+    );
+    return res;
+  };
+
+  async function handle(req: NextRequest, context: NextRouteContext, who: { user?: SessionUser }, requestId: string): Promise<Response> {
     try {
+      checkSameOrigin(req);
+      checkJsonBody(req);
       const db = await getDb();
       const user = await userFromRequest(req, db);
       if (!user) throw unauthorized();
+      who.user = user;
       if (!can(user.role, spec.permission)) throw forbidden();
 
       let params = undefined as P;
@@ -52,28 +83,17 @@ export function route<P = undefined, B = undefined, Q = undefined>(
         params = parsed.data;
       }
       const query = (spec.query ? spec.query.parse(Object.fromEntries(req.nextUrl.searchParams)) : undefined) as Q;
-      const body = (spec.body ? spec.body.parse(await readJson(req)) : undefined) as B;
+      const body = (spec.body ? spec.body.parse(await readJsonBody(req)) : undefined) as B;
 
       const result = await handler({ req, db, user, params, body, query });
       if (result instanceof Response) return result;
-      return NextResponse.json(result ?? { ok: true }, { status: spec.status ?? 200 });
+      // A role that may not see prices gets none, whatever the handler returned (a write's echo included).
+      const shown = can(user.role, 'prices:read') ? result : withoutPrices(result);
+      return NextResponse.json(shown ?? { ok: true }, { status: spec.status ?? 200 });
     } catch (error) {
-      const { status, body } = toErrorResponse(error);
-      return NextResponse.json(body, { status });
+      const { status, body, headers } = toErrorResponse(error, requestId);
+      return NextResponse.json(body, { status, headers });
     }
-  };
-}
-
-async function readJson(req: NextRequest): Promise<unknown> {
-  const length = Number(req.headers.get('content-length') ?? 0);
-  if (length > MAX_BODY_BYTES) throw new HttpError(413, 'That request is too large.');
-  const text = await req.text();
-  if (text.length > MAX_BODY_BYTES) throw new HttpError(413, 'That request is too large.');
-  if (!text) return {};
-  try {
-    return JSON.parse(text);
-  } catch {
-    throw new HttpError(422, 'The request body is not valid JSON.');
   }
 }
 

@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { inches } from '@/lib/units/length';
-import { parseMoneyCents, parseStockCsv } from './stock-csv';
+import { checkStockCsv, parseMoneyCents, parseStockCsv } from './stock-csv';
 
 const HEADER = 'Kind,Material,Thickness,Length,Width,Quantity,Cost,Actual thickness,Supplier,Location,Surfacing\n';
 
@@ -41,5 +41,26 @@ describe('reading a stock file', () => {
     ['-3', null],
   ])('money "%s" reads as %s cents', (text, cents) => {
     expect(parseMoneyCents(text)).toBe(cents);
+  });
+});
+
+describe('checking a big stock file for a request', () => {
+  test('gives the same rows and errors as the all-at-once check, and hands the event loop back as it goes', async () => {
+    const good = 'sheet,MDF,18 mm,2440 mm,1220 mm,5,46,,,,\n';
+    const bad = 'plank,,3/4,abc,48,-2,free,,,,\n';
+    const csv = HEADER + Array.from({ length: 3000 }, (_, i) => (i % 7 === 0 ? bad : good)).join('');
+    let ticks = 0;
+    let running = true;
+    const tick = () => {
+      ticks++;
+      if (running) setImmediate(tick);
+    };
+    setImmediate(tick);
+    const slow = await checkStockCsv(csv, 'mm');
+    running = false;
+    expect(slow).toEqual(parseStockCsv(csv, 'mm'));
+    expect(slow.rows).toHaveLength(3000 - Math.ceil(3000 / 7));
+    // Another task ran between slices: at least once per 25 rows.
+    expect(ticks).toBeGreaterThanOrEqual(3000 / 25);
   });
 });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { DRAWER_DEFAULTS as D, LIPPED_FRONT_DEFAULTS, lockRabbetFaceLeft, MAX_SCHEDULE_LENGTH_MM, SLIDE_SERIES } from '@/lib/joinery/defaults';
 import { slideModelRuleSchema } from './slide-model';
 
@@ -177,7 +178,7 @@ export const frontStyleSchema = z.discriminatedUnion('style', [
     /** Inset: gap between the front and the opening on each edge. */
     revealMm: nonNegativeMm('Reveal', MAX.small).default(D.frontReveal),
     thicknessMm: positiveMm('Applied front thickness', MAX.small).default(D.appliedFrontThickness),
-    material: z.string().trim().min(1).max(120).default(D.appliedFrontMaterial),
+    material: text().min(1).max(120).default(D.appliedFrontMaterial),
     /** Explicit size; wins over the opening (and is needed when the schedule gives the box size). */
     widthMm: positiveMm('Applied front width').optional(),
     heightMm: positiveMm('Applied front height').optional(),
@@ -190,7 +191,7 @@ export const bottomSchema = z.discriminatedUnion('mount', [
   z.object({
     mount: z.literal('groove'),
     thicknessMm: positiveMm('Bottom thickness', MAX.small).default(D.bottomThickness),
-    material: z.string().trim().min(1).max(120).default(D.bottomMaterial),
+    material: text().min(1).max(120).default(D.bottomMaterial),
     grain: grainRuleSchema.default('any'),
     groove: z
       .object({
@@ -211,13 +212,13 @@ export const bottomSchema = z.discriminatedUnion('mount', [
   z.object({
     mount: z.literal('applied'),
     thicknessMm: positiveMm('Bottom thickness', MAX.small).default(D.bottomThickness),
-    material: z.string().trim().min(1).max(120).default(D.bottomMaterial),
+    material: text().min(1).max(120).default(D.bottomMaterial),
     grain: grainRuleSchema.default('any'),
   }),
 ]);
 
 const drawerScheduleShape = z.object({
-  label: z.string().trim().min(1, { error: 'Give the schedule a label' }).max(80),
+  label: text().min(1, { error: 'Give the schedule a label' }).max(80),
   quantity: z.int({ error: 'Quantity must be a whole number' }).min(1, { error: 'Quantity must be at least 1' }).max(10_000),
   size: drawerSizeSchema,
   slide: slideSchema.prefault({ type: 'side-mount' }),
@@ -234,11 +235,11 @@ const drawerScheduleShape = z.object({
   bottom: bottomSchema.prefault({ mount: 'groove' }),
   materials: z
     .object({
-      sides: z.string().trim().min(1).max(120).default(D.boxMaterial),
+      sides: text().min(1).max(120).default(D.boxMaterial),
       /** Left out: same as the sides. */
-      front: z.string().trim().min(1).max(120).optional(),
+      front: text().min(1).max(120).optional(),
       /** Left out: same as the front. */
-      back: z.string().trim().min(1).max(120).optional(),
+      back: text().min(1).max(120).optional(),
     })
     .prefault({}),
 });

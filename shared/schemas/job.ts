@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 
 export const JOB_STATUSES = ['quoting', 'won', 'cutting', 'done', 'archived'] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
@@ -13,11 +14,11 @@ export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
 
 /** Each field of a job, checked the same on the server and in the forms. */
 export const jobFields = {
-  name: z.string().trim().min(1, 'Give the job a name.').max(120, 'Keep the name under 120 characters.'),
-  customer: z.string().trim().max(120, 'Keep the customer under 120 characters.'),
+  name: text().min(1, 'Give the job a name.').max(120, 'Keep the name under 120 characters.'),
+  customer: text().max(120, 'Keep the customer under 120 characters.'),
   status: z.enum(JOB_STATUSES, { error: `Status is one of ${JOB_STATUSES.join(', ')}.` }),
   dueDate: z.iso.date({ error: 'Use a date like 2027-01-31.' }).nullable(),
-  notes: z.string().max(4000, 'Keep notes under 4,000 characters.'),
+  notes: text({ multiline: true }).max(4000, 'Keep notes under 4,000 characters.'),
 };
 
 /** A new job starts as a quote, or as won when the work is already agreed; cutting and done follow its plans. */

@@ -3,10 +3,11 @@
  * Every length is in mm (see `lib/units/length.ts`). Worker messages, route handlers and saved plans reuse these.
  */
 import { z } from 'zod';
+import { text } from './text';
 
 const mm = z.number().finite();
 const positiveMm = mm.positive();
-const id = z.string().trim().min(1, 'an id is required').max(100);
+const id = text().min(1, 'an id is required').max(100);
 
 /** `along-length`: the part's length must run with the stock's grain; `any`: it may turn. */
 export const grainRuleSchema = z.enum(['along-length', 'any']);
@@ -14,20 +15,20 @@ export type GrainRule = z.infer<typeof grainRuleSchema>;
 
 export const nestPartSchema = z.object({
   id,
-  label: z.string().trim().max(200).default(''),
+  label: text().max(200).default(''),
   quantity: z.number().int('quantity must be a whole number').min(1, 'quantity must be at least 1').max(100_000),
   /** Along the grain, joint allowance included. */
   length: positiveMm,
   width: positiveMm,
   thickness: positiveMm,
-  material: z.string().trim().min(1, 'material is required').max(200),
+  material: text().min(1, 'material is required').max(200),
   // Safe default: a grained part is never turned unless someone says it may be.
   grain: grainRuleSchema.default('along-length'),
   /** Already included in `length`; carried for display. */
   jointAllowance: mm.min(0).default(0),
   /** Drawer schedule id or colour key. */
-  group: z.string().max(100).optional(),
-  notes: z.string().max(2000).optional(),
+  group: text().max(100).optional(),
+  notes: text({ multiline: true }).max(2000).optional(),
 });
 export type NestPart = z.infer<typeof nestPartSchema>;
 
@@ -41,14 +42,14 @@ export const nestStockSchema = z
     length: positiveMm,
     width: positiveMm,
     thickness: positiveMm,
-    material: z.string().trim().min(1, 'material is required').max(200),
+    material: text().min(1, 'material is required').max(200),
     grain: z.enum(['along-length', 'none']).default('along-length'),
     /** On hand; `null` = a size the shop can buy as many of as needed. */
     count: z.number().int('count must be a whole number').min(0).nullable(),
     costEach: mm.min(0).default(0),
     /** Offcuts only: edges already sawn, so no trim is taken (default true for offcuts). */
     trimmed: z.boolean().optional(),
-    source: z.string().max(200).optional(),
+    source: text().max(200).optional(),
   })
   .refine((s) => s.kind !== 'offcut' || s.count !== null, {
     message: 'an offcut is a piece on the rack: give its count (it cannot be bought)',
@@ -118,7 +119,7 @@ export const placementSchema = z.object({
   partId: id,
   /** 1-based: instance k of the part's quantity. */
   instance: z.number().int().min(1),
-  label: z.string().default(''),
+  label: text().default(''),
   x: mm,
   y: mm,
   /** Extent along x (the stock's length): the part's length unless rotated. */
@@ -153,7 +154,7 @@ export const cutNodeSchema: z.ZodType<PlanCutNode> = z.lazy(() =>
 );
 
 export const sawPieceSchema = rectSchema.extend({
-  name: z.string().min(1),
+  name: text().min(1),
   /** `part`: exactly one part; `piece`: cut further later; `offcut`: keep it; `waste`: too small to keep. */
   role: z.enum(['part', 'piece', 'offcut', 'waste']),
   /** Part instances inside this piece (the one it becomes when role is `part`). */
@@ -167,7 +168,7 @@ export const sawStepSchema = z.object({
   /** `rip`: along the stock's length (a line y = const); `crosscut`: across it (x = const). */
   kind: z.enum(['rip', 'crosscut']),
   /** Name of the piece being cut ("A" is the first stock piece, "A1" its first strip, "A1a" …). */
-  piece: z.string().min(1),
+  piece: text().min(1),
   /** Which edge of the piece rides the fence: `low` = its edge nearer the stock's origin (y or x), `high` = the other. */
   reference: z.enum(['low', 'high']),
   /** Fence setting: width of the piece between blade and fence, in mm. */
@@ -206,7 +207,7 @@ export const planPieceSchema = z.object({
   length: positiveMm,
   width: positiveMm,
   thickness: positiveMm,
-  material: z.string().min(1),
+  material: text().min(1),
   /** Trim taken from each edge (0 for sawn offcuts). */
   trim: mm.min(0),
   placements: z.array(placementSchema),
@@ -225,15 +226,15 @@ export type UnplacedReason = z.infer<typeof unplacedReasonSchema>;
 export const unplacedSchema = z.object({
   partId: id,
   instance: z.number().int().min(1),
-  label: z.string().default(''),
+  label: text().default(''),
   reason: unplacedReasonSchema,
-  message: z.string(),
+  message: text({ multiline: true }),
 });
 export type Unplaced = z.infer<typeof unplacedSchema>;
 
 export const planTotalsSchema = z.object({
   byMaterial: z.array(
-    z.object({ material: z.string(), thickness: mm, kind: stockKindSchema, pieces: z.number().int().min(0) }),
+    z.object({ material: text(), thickness: mm, kind: stockKindSchema, pieces: z.number().int().min(0) }),
   ),
   pieces: z.number().int().min(0),
   stockArea: mm.min(0),
@@ -250,14 +251,14 @@ export type PlanTotals = z.infer<typeof planTotalsSchema>;
 export const stockLineSchema = z.object({
   stockId: id,
   kind: stockKindSchema,
-  material: z.string(),
+  material: text(),
   thickness: mm,
   length: mm,
   width: mm,
   count: z.number().int().min(1),
   costEach: mm.min(0),
   cost: mm.min(0),
-  source: z.string().optional(),
+  source: text().optional(),
 });
 export type StockLine = z.infer<typeof stockLineSchema>;
 

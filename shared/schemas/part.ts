@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { MAX_LENGTH_MM } from '@/lib/units/parse-length';
 import { grainRuleSchema } from './drawer-schedule';
 
@@ -9,15 +10,18 @@ export const MAX_PART_LABEL = 80;
 export const MAX_PART_MATERIAL = 200;
 export const MAX_PART_NOTES = 500;
 
+/** The smallest part size taken: half a millimetre (thinner than any veneer a saw cuts; 5e-324 mm was accepted). */
+export const MIN_PART_SIZE_MM = 0.5;
+
 const sizeMm = (what: string) =>
   z
     .number({ error: `${what} must be a length.` })
     .finite(`${what} must be a length.`)
-    .positive(`${what} must be more than 0.`)
+    .min(MIN_PART_SIZE_MM, `${what} must be at least ${MIN_PART_SIZE_MM} mm.`)
     .max(MAX_LENGTH_MM, `${what} above ${MAX_LENGTH_MM / 1000} m looks like a slipped unit.`);
 
 const partShape = {
-  label: z.string().trim().min(1, 'Give the part a name.').max(MAX_PART_LABEL, `Keep the name under ${MAX_PART_LABEL} characters.`),
+  label: text().min(1, 'Give the part a name.').max(MAX_PART_LABEL, `Keep the name under ${MAX_PART_LABEL} characters.`),
   quantity: z
     .int({ error: 'Quantity must be a whole number.' })
     .min(1, 'Quantity must be at least 1.')
@@ -26,11 +30,11 @@ const partShape = {
   lengthMm: sizeMm('Length'),
   widthMm: sizeMm('Width'),
   thicknessMm: sizeMm('Thickness'),
-  material: z.string().trim().min(1, 'Pick or type a material.').max(MAX_PART_MATERIAL, `Keep the material under ${MAX_PART_MATERIAL} characters.`),
+  material: text().min(1, 'Pick or type a material.').max(MAX_PART_MATERIAL, `Keep the material under ${MAX_PART_MATERIAL} characters.`),
   grain: grainRuleSchema,
   /** Extra length the part's joints need; informational, already inside `lengthMm`. */
   jointAllowanceMm: z.number().finite().min(0, 'Joint allowance cannot be negative.').max(MAX_LENGTH_MM),
-  notes: z.string().trim().max(MAX_PART_NOTES, `Keep notes under ${MAX_PART_NOTES} characters.`),
+  notes: text({ multiline: true }).max(MAX_PART_NOTES, `Keep notes under ${MAX_PART_NOTES} characters.`),
 };
 
 export const partInputSchema = z.object({

@@ -4,10 +4,11 @@
  * The plan itself is taken as it comes and judged by `validatePlan`, so a bad one is refused with its violations.
  */
 import { z } from 'zod';
+import { text } from './text';
 import { nestSettingsSchema } from './nesting';
 import { nestForSchema } from './recut';
 
-export const planNameSchema = z.string().trim().min(1, 'Give the plan a name.').max(120, 'Keep the name under 120 characters.');
+export const planNameSchema = text().min(1, 'Give the plan a name.').max(120, 'Keep the name under 120 characters.');
 
 const s = nestSettingsSchema.shape;
 /**
@@ -31,7 +32,7 @@ export const planCreateSchema = z.object({
   name: planNameSchema.default('Plan'),
   settings: nestSettingsOverrideSchema.default({}),
   /** The stock the Nest was offered (ids from the job's nest request). */
-  stockIds: z.array(z.string().min(1).max(100)).min(1, 'Choose at least one kind of stock.').max(1000),
+  stockIds: z.array(text().min(1).max(100)).min(1, 'Choose at least one kind of stock.').max(1000),
   /** What was nested: the cut list, or only the job's open re-cuts (the plan then records that it is a re-cut plan). */
   for: nestForSchema.default('cut-list'),
   plan: z.unknown(),

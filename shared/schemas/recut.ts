@@ -1,5 +1,6 @@
 /** Re-cuts: parts damaged at the saw, on their job's list until they are cut again or cancelled. */
 import { z } from 'zod';
+import { text } from './text';
 
 export const RECUT_STATUSES = ['open', 'planned', 'cut', 'spoiled', 'cancelled'] as const;
 export type RecutStatus = (typeof RECUT_STATUSES)[number];
@@ -13,7 +14,7 @@ export const RECUT_STATUS_LABELS: Record<RecutStatus, string> = {
 };
 
 export const cancelRecutSchema = z.strictObject({
-  reason: z.string().trim().min(1, 'Say why this re-cut is not needed (made from scrap, customer changed it…).').max(500, 'At most 500 characters.'),
+  reason: text({ multiline: true }).min(1, 'Say why this re-cut is not needed (made from scrap, customer changed it…).').max(500, 'At most 500 characters.'),
 });
 
 /** Which parts a Nest takes: the job's cut list, or only its open re-cuts. */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isTimeZone } from '@/lib/dates/shop-time';
+import { text } from './text';
 import { shopUnitsSchema } from './units';
 
 export { shopUnitsSchema, type ShopUnits } from './units';
@@ -8,7 +9,7 @@ const positiveMm = (what: string, max: number) =>
   z.number({ error: `${what} must be a number of millimetres.` }).min(0, `${what} cannot be negative.`).max(max, `${what} above ${max} mm looks like a typo.`);
 
 export const shopSettingsSchema = z.object({
-  name: z.string().trim().min(1, 'The shop needs a name.').max(120),
+  name: text().min(1, 'The shop needs a name.').max(120),
   units: shopUnitsSchema,
   currency: z.string().trim().regex(/^[A-Z]{3}$/, 'Use a three-letter currency code such as USD or EUR.'),
   kerfMm: positiveMm('Kerf', 10).refine((v) => v > 0, 'Kerf must be more than zero.'),

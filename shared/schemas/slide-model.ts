@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 
 /**
  * A drawer slide as its maker specifies it, kept per shop in Shop settings. Boxes on the slide are sized from it:
@@ -27,7 +28,7 @@ const mm = (what: string, min: number, max: number) =>
 
 export const slideModelSchema = z.object({
   kind: z.enum(SLIDE_MODEL_KINDS, { error: 'The kind is "undermount" or "side-mount".' }),
-  name: z.string().trim().min(1, 'Name the slide model.').max(80, 'At most 80 characters.'),
+  name: text().min(1, 'Name the slide model.').max(80, 'At most 80 characters.'),
   /** The lengths the slide is made in; a box on it is as long as its slide. */
   lengthsMm: z
     .array(mm('A slide length', 100, 1500))

@@ -3,8 +3,9 @@
  * API are millimetres (forms parse what people type with `lengthInput` first); money is integer cents.
  */
 import { z } from 'zod';
+import { text as freeText } from './text';
 
-const text = (max: number) => z.string().trim().max(max, `At most ${max} characters.`);
+const text = (max: number) => freeText({ max });
 const mm = (what: string) =>
   z.number({ error: `${what} must be a number of mm.` }).finite().positive(`${what} must be greater than zero.`).max(100_000, `${what} above 100 m looks like a typo.`);
 const count = (what: string) => z.number({ error: `${what} must be a number.` }).int(`${what} must be a whole number.`);

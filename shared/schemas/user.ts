@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { ROLES } from '@/lib/auth/permissions';
 
 const password = z
@@ -7,8 +8,9 @@ const password = z
   .max(200, 'Keep the password under 200 characters.');
 
 export const teamMemberInputSchema = z.object({
-  name: z.string().trim().min(1, 'Enter the person’s name.').max(120),
-  email: z.email('Enter a valid e-mail address.').trim().toLowerCase().max(320),
+  name: text().min(1, 'Enter the person’s name.').max(120),
+  // Trimmed and lower-cased before it is checked: a pasted address with spaces around it is fine.
+  email: z.string({ error: 'Enter a valid e-mail address.' }).trim().toLowerCase().max(320, 'Keep the e-mail under 320 characters.').pipe(z.email('Enter a valid e-mail address.')),
   role: z.enum(ROLES, { error: 'Pick owner, estimator or cutter.' }),
   password,
 });
@@ -16,7 +18,7 @@ export type TeamMemberInput = z.infer<typeof teamMemberInputSchema>;
 
 export const teamMemberPatchSchema = z
   .object({
-    name: z.string().trim().min(1).max(120),
+    name: text().min(1).max(120),
     role: z.enum(ROLES, { error: 'Pick owner, estimator or cutter.' }),
     active: z.boolean(),
     password,

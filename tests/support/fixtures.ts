@@ -56,16 +56,33 @@ export async function sessionCookie(user: TestUser): Promise<string> {
   return `next-auth.session-token=${token}`;
 }
 
+/** The headers a browser sends with a same-origin fetch from one of the app's pages. */
+export const BROWSER_HEADERS = { origin: 'http://localhost', 'sec-fetch-site': 'same-origin' } as const;
+
+/**
+ * A request as the app's own pages send it (Origin and Sec-Fetch-Site of the app, JSON body). `headers` adds or
+ * replaces headers (null removes one); `rawBody` sends text as it is.
+ */
 export async function request(
   url: string,
-  { method = 'GET', body, user }: { method?: string; body?: unknown; user?: TestUser } = {},
+  {
+    method = 'GET',
+    body,
+    rawBody,
+    user,
+    headers: extra = {},
+  }: { method?: string; body?: unknown; rawBody?: string; user?: TestUser; headers?: Record<string, string | null> } = {},
 ): Promise<NextRequest> {
-  const headers = new Headers();
+  const headers = new Headers(BROWSER_HEADERS);
   if (user) headers.set('cookie', await sessionCookie(user));
-  if (body !== undefined) headers.set('content-type', 'application/json');
+  if (body !== undefined || rawBody !== undefined) headers.set('content-type', 'application/json');
+  for (const [k, v] of Object.entries(extra)) {
+    if (v === null) headers.delete(k);
+    else headers.set(k, v);
+  }
   return new NextRequest(new URL(url, 'http://localhost'), {
     method,
     headers,
-    body: body === undefined ? undefined : JSON.stringify(body),
+    body: rawBody ?? (body === undefined ? undefined : JSON.stringify(body)),
   });
 }

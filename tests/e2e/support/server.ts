@@ -60,6 +60,25 @@ export async function stopServer(): Promise<void> {
   });
 }
 
+/** The resident memory of the server's whole process group (next start and next-server), in bytes. */
+export function serverRssBytes(): number {
+  const pgid = Number(fs.readFileSync(PID_FILE, 'utf8'));
+  let total = 0;
+  for (const entry of fs.readdirSync('/proc')) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      const stat = fs.readFileSync(`/proc/${entry}/stat`, 'utf8');
+      // Fields after the command name (which may hold spaces): state ppid pgrp …; rss is field 24 (pages).
+      const rest = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+      if (Number(rest[2]) !== pgid) continue;
+      total += Number(rest[21]) * 4096;
+    } catch {
+      // the process ended while we looked
+    }
+  }
+  return total;
+}
+
 async function health(): Promise<number> {
   try {
     return (await fetch(`${E2E_URL}/api/health`)).status;

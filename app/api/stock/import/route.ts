@@ -2,14 +2,14 @@ import { route } from '@/lib/api/route';
 import { HttpError } from '@/lib/api/errors';
 import { getShopSettings } from '@/db/queries/shops';
 import { importStock } from '@/db/queries/stock';
-import { parseStockCsv } from '@/lib/stock/stock-csv';
+import { checkStockCsv } from '@/lib/stock/stock-csv';
 import { importStockSchema } from '@/shared/schemas/stock';
 import { shopLengthUnit } from '@/shared/schemas/units';
 
 // POST /api/stock/import – check a stock CSV row by row; write all rows (only if every one is valid) or only the valid ones
 export const POST = route({ permission: 'stock:write', body: importStockSchema }, async ({ db, user, body }) => {
   const settings = await getShopSettings(db, user.shopId);
-  const result = parseStockCsv(body.csv, settings ? shopLengthUnit(settings.units) : 'mm');
+  const result = await checkStockCsv(body.csv, settings ? shopLengthUnit(settings.units) : 'mm');
   if (result.fileErrors.length) throw new HttpError(422, result.fileErrors.join(' '), { csv: result.fileErrors });
   const summary = { valid: result.rows.length, errors: result.errors, rows: result.rows };
   if (body.commit === 'none') return { ...summary, imported: 0 };
