@@ -7,3 +7,4 @@ export * from './stock';
 export * from './plans';
 export * from './recuts';
 export * from './slide-models';
+export * from './mail';

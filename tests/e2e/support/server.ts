@@ -14,6 +14,10 @@ export const E2E_DIR = path.resolve(`test-results/e2e-server-${E2E_PORT}`);
 export const E2E_DATA = path.join(E2E_DIR, 'data');
 const PID_FILE = path.join(E2E_DIR, 'server.pid');
 const SECRET_FILE = path.join(E2E_DIR, 'secret');
+/** The mail catcher global setup started (its URL), so a restarted server sends to the same one. */
+export const MAIL_CATCHER_FILE = path.join(E2E_DIR, 'mail-catcher-url');
+/** Where the catcher stores the `.eml` files (the data directory's `mail/`, as in the demo). */
+export const E2E_MAIL = path.join(E2E_DATA, 'mail');
 
 function secret(): string {
   if (!fs.existsSync(SECRET_FILE)) fs.writeFileSync(SECRET_FILE, randomBytes(32).toString('base64url'));
@@ -33,6 +37,9 @@ export async function startServer(): Promise<void> {
       NEXTAUTH_URL: E2E_URL,
       KERFWISE_DATA_DIR: E2E_DATA,
       DATABASE_URL: '',
+      SMTP_URL: '',
+      KERFWISE_MAIL_CATCHER_URL: fs.existsSync(MAIL_CATCHER_FILE) ? fs.readFileSync(MAIL_CATCHER_FILE, 'utf8') : '',
+      KERFWISE_MAIL_POLL_MS: '500',
       NEXT_TELEMETRY_DISABLED: '1',
     },
   });
