@@ -15,6 +15,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/yield', label: 'Yield ledger', permission: 'yield:read', hint: 'What the stock became' },
   { href: '/shop-floor', label: 'Shop floor', permission: 'sawsteps:tick', hint: 'Saw orders to cut' },
   { href: '/team', label: 'Team', permission: 'team:manage', hint: 'People and roles' },
+  { href: '/outbox', label: 'Outbox', permission: 'mail:manage', hint: 'Mail sent and failed' },
   { href: '/settings', label: 'Shop settings', permission: 'settings:write', hint: 'Units, kerf, trim' },
 ];
 
