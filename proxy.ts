@@ -5,5 +5,6 @@ import { withAuth } from 'next-auth/middleware';
 export default withAuth({ pages: { signIn: '/sign-in' } });
 
 export const config = {
-  matcher: ['/((?!api|_next/static|_next/image|favicon.ico|sign-in).*)'],
+  // The sign-in page and the pages single-use links open (invite, password reset) are for the signed-out.
+  matcher: ['/((?!api|_next/static|_next/image|favicon.ico|sign-in|welcome/|reset-password/|forgot-password).*)'],
 };

@@ -4,6 +4,7 @@ import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
+import { hasPassword } from '@/db/queries/user-links';
 import { findActiveUserByEmail } from '@/db/queries/users';
 import { serverEnv } from '@/lib/env';
 
@@ -28,8 +29,10 @@ export function authOptions(): NextAuthOptions {
           const parsed = credentialsSchema.safeParse(raw);
           if (!parsed.success) return null;
           const user = await findActiveUserByEmail(await getDb(), parsed.data.email);
-          const ok = await bcrypt.compare(parsed.data.password, user?.passwordHash ?? DUMMY_HASH);
-          if (!user || !ok) return null;
+          // Someone invited who has not chosen a password yet has none to match.
+          const usable = user && hasPassword(user.passwordHash) ? user.passwordHash : null;
+          const ok = await bcrypt.compare(parsed.data.password, usable ?? DUMMY_HASH);
+          if (!user || !usable || !ok) return null;
           return { id: user.id, name: user.name, email: user.email, shopId: user.shopId, role: user.role, tokenVersion: user.tokenVersion };
         },
       }),
