@@ -75,7 +75,7 @@ export function TeamManager({ selfId }: { selfId: string }) {
                     <td>
                       <select
                         aria-label={`Role of ${m.name}`}
-                        className="field-input py-1"
+                        className="field-input min-w-[7.5rem] py-1"
                         value={m.role}
                         disabled={change.isPending}
                         onChange={(e) => change.mutate({ id: m.id, role: e.target.value as Role })}
@@ -89,17 +89,24 @@ export function TeamManager({ selfId }: { selfId: string }) {
                       {!m.active ? (
                         <StatusBadge tone="neutral">Deactivated</StatusBadge>
                       ) : m.invited ? (
-                        <StatusBadge tone="warn">Invited</StatusBadge>
+                        <>
+                          <StatusBadge tone="warn">Invited</StatusBadge>
+                          <button
+                            type="button"
+                            className="mt-1 block text-xs text-graphite-soft underline hover:text-graphite"
+                            disabled={resend.isPending}
+                            onClick={() => resend.mutate(m.id)}
+                            aria-label={`Resend the invite to ${m.name}`}
+                          >
+                            Resend invite
+                          </button>
+                        </>
                       ) : (
                         <StatusBadge tone="good">Active</StatusBadge>
                       )}
                     </td>
-                    <td className="whitespace-nowrap text-right">
-                      {m.active && m.invited && (
-                        <button type="button" className="btn-quiet mr-2 py-1" disabled={resend.isPending} onClick={() => resend.mutate(m.id)} aria-label={`Resend the invite to ${m.name}`}>
-                          Resend invite
-                        </button>
-                      )}
+                    <td className="text-right">
+
                       <button
                         type="button"
                         className={m.active ? 'btn-danger py-1' : 'btn-quiet py-1'}
@@ -136,7 +143,7 @@ export function TeamManager({ selfId }: { selfId: string }) {
         </div>
         <label className="flex items-start gap-2 text-sm">
           <input type="checkbox" className="mt-1" checked={withPassword} onChange={(e) => setWithPassword(e.target.checked)} />
-          <span>Set a first password myself instead (hand it over in person; no e-mail is sent)</span>
+          <span>Set a first password myself instead (hand it over in person; no invite is sent)</span>
         </label>
         {withPassword && (
           <div>

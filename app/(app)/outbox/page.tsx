@@ -33,41 +33,31 @@ export default async function OutboxPage() {
       {entries.length === 0 ? (
         <EmptyState title="No mail yet.">Invites and password resets appear here as soon as they are sent.</EmptyState>
       ) : (
-        <div className="card overflow-x-auto">
-          <table className="data-table" aria-label="Outbox">
-            <thead>
-              <tr>
-                <th>Queued</th>
-                <th>To</th>
-                <th>Subject</th>
-                <th>Status</th>
-                <th />
-              </tr>
-            </thead>
-            <tbody>
-              {entries.map((e) => (
-                <tr key={e.id}>
-                  <td className="num whitespace-nowrap text-graphite-mute">{when(e.createdAt)}</td>
-                  <td className="break-all">{e.to}</td>
-                  <td>
-                    <span className="font-medium">{e.subject}</span>
-                    <span className="block text-xs text-graphite-mute">{MAIL_KIND_LABELS[e.kind] ?? e.kind}</span>
-                    {e.status !== 'sent' && e.lastError && (
-                      <span className={`mt-1 block text-xs ${e.status === 'failed' ? 'text-brick' : 'text-graphite-mute'}`}>
-                        {e.status === 'pending' ? `Attempt ${e.attempts} did not go through (${e.lastError}); next try ${when(e.nextAttemptAt)}.` : e.lastError}
-                      </span>
-                    )}
-                  </td>
-                  <td>
-                    <OutboxStatusBadge status={e.status} />
-                    {e.sentAt && <span className="num block text-xs text-graphite-mute">{when(e.sentAt)}</span>}
-                  </td>
-                  <td className="text-right">{e.status === 'failed' && <RetryMailButton id={e.id} subject={e.subject} />}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <ul aria-label="Outbox" className="card divide-y divide-paper-edge">
+          {entries.map((e) => (
+            <li key={e.id} aria-label={`${e.subject} to ${e.to}`} className="flex flex-wrap items-start gap-x-6 gap-y-2 px-4 py-3 text-sm">
+              <div className="min-w-0 flex-1 basis-72">
+                <p className="font-medium">{e.subject}</p>
+                <p className="break-all text-graphite-soft">To {e.to}</p>
+                <p className="text-xs text-graphite-mute">
+                  {MAIL_KIND_LABELS[e.kind] ?? e.kind} · queued <span className="whitespace-nowrap tabular-nums">{when(e.createdAt)}</span>
+                </p>
+                {e.status !== 'sent' && e.lastError && (
+                  <p className={`mt-1 text-xs ${e.status === 'failed' ? 'text-brick' : 'text-graphite-mute'}`}>
+                    {e.status === 'pending' ? `Attempt ${e.attempts} did not go through (${e.lastError}); next try ${when(e.nextAttemptAt)}.` : e.lastError}
+                  </p>
+                )}
+              </div>
+              <div className="flex items-center gap-3">
+                <div>
+                  <OutboxStatusBadge status={e.status} />
+                  {e.sentAt && <span className="block whitespace-nowrap text-xs tabular-nums text-graphite-mute">{when(e.sentAt)}</span>}
+                </div>
+                {e.status === 'failed' && <RetryMailButton id={e.id} subject={e.subject} />}
+              </div>
+            </li>
+          ))}
+        </ul>
       )}
     </>
   );

@@ -52,7 +52,7 @@ export default async function SentMailPage({ searchParams }: { searchParams: Pro
                   >
                     <span className="block font-medium">{mail.subject || '(no subject)'}</span>
                     <span className="block break-all text-xs text-graphite-mute">{mail.to.join(', ')}</span>
-                    <span className="num block text-xs text-graphite-mute">{when(mail.date)}</span>
+                    <span className="block text-xs text-graphite-mute">{when(mail.date)}</span>
                   </Link>
                 </li>
               ))}
@@ -67,7 +67,7 @@ export default async function SentMailPage({ searchParams }: { searchParams: Pro
                 <dt className="text-graphite-mute">To</dt>
                 <dd className="break-all">{open.to.join(', ')}</dd>
                 <dt className="text-graphite-mute">Date</dt>
-                <dd className="num">{when(open.date)}</dd>
+                <dd>{when(open.date)}</dd>
                 <dt className="text-graphite-mute">Message-ID</dt>
                 <dd className="break-all font-mono text-xs">{open.messageId}</dd>
                 {open.attachments.length > 0 && (
