@@ -93,7 +93,7 @@ export function TeamManager({ selfId }: { selfId: string }) {
                           <StatusBadge tone="warn">Invited</StatusBadge>
                           <button
                             type="button"
-                            className="mt-1 block text-xs text-graphite-soft underline hover:text-graphite"
+                            className="mt-1 block whitespace-nowrap text-xs text-graphite-soft underline hover:text-graphite"
                             disabled={resend.isPending}
                             onClick={() => resend.mutate(m.id)}
                             aria-label={`Resend the invite to ${m.name}`}

@@ -53,6 +53,9 @@ test('the owner invites a new cutter; the link in the e-mail lets them choose a 
   await page.setViewportSize({ width: 390, height: 844 });
   await expect(article.frameLocator('iframe').getByText('Hello Juno Ashby,')).toBeVisible();
   await shot(page, 'sent-mail-390');
+  // A full-page capture leaves a frame blank in headless Chromium; the mail's HTML as a phone shows it:
+  await article.locator('iframe').scrollIntoViewIfNeeded();
+  await article.locator('iframe').screenshot({ path: `test-results/screens${process.env.E2E_PORT ? '-' + process.env.E2E_PORT : ''}/sent-mail-html-390.png` });
   await page.goto('/outbox');
   await expect(page.getByRole('listitem').filter({ hasText: email }).getByText('Sent', { exact: true })).toBeVisible();
   await shot(page, 'outbox-390');
