@@ -28,6 +28,8 @@ export interface CatcherOptions {
   dir: string;
   /** 0 (the default) takes a free port; a restart can ask for the port it had. */
   port?: number;
+  /** Tests: runs once a message is stored, before the sender hears it was accepted. */
+  onStored?: (file: string) => void;
 }
 
 /** One stored message per file, named so that a plain sort is the order they arrived in. */
@@ -35,7 +37,7 @@ function fileName(): string {
   return `${new Date().toISOString().replace(/[:.]/g, '-')}-${randomBytes(4).toString('hex')}.eml`;
 }
 
-export async function startMailCatcher({ dir, port = 0 }: CatcherOptions): Promise<MailCatcher> {
+export async function startMailCatcher({ dir, port = 0, onStored }: CatcherOptions): Promise<MailCatcher> {
   const folder = path.resolve(dir);
   fs.mkdirSync(folder, { recursive: true });
   let refusal: { code: number; message: string } | null = null;
@@ -62,6 +64,7 @@ export async function startMailCatcher({ dir, port = 0 }: CatcherOptions): Promi
           const tmp = path.join(folder, `.${name}.part`);
           fs.writeFileSync(tmp, Buffer.concat(chunks));
           fs.renameSync(tmp, path.join(folder, name));
+          onStored?.(path.join(folder, name));
           callback();
         } catch (error) {
           callback(Object.assign(error as Error, { responseCode: 451 }));

@@ -23,7 +23,9 @@ export async function startMailService(db: Db): Promise<void> {
     url = catcher.url;
     console.log(`Mail: no SMTP_URL, so mail goes to a local catcher (${url}) and is stored in ${config.dir}`);
   }
-  const sender = createMailSender({ db, transport: url, from: config.from });
+  // KERFWISE_MAIL_CLAIM_MS: how long a claim lasts before another sender takes over (the e2e crash test shortens it).
+  const claimMs = Number(process.env.KERFWISE_MAIL_CLAIM_MS) || undefined;
+  const sender = createMailSender({ db, transport: url, from: config.from, claimMs });
   sender.start(Number(process.env.KERFWISE_MAIL_POLL_MS) || 1_500);
   holder.__kerfwiseMail = { sender, catcher };
 }

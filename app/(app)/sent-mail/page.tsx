@@ -86,7 +86,7 @@ export default async function SentMailPage({ searchParams }: { searchParams: Pro
               <h3 className="mb-2 text-xs font-semibold uppercase tracking-wide text-graphite-mute">HTML</h3>
               {open.html ? (
                 // Sandboxed without scripts, forms or same-origin access: the mail's HTML can only be looked at.
-                <iframe title={`HTML part of “${open.subject}”`} sandbox="" srcDoc={open.html} className="h-[32rem] w-full rounded border border-paper-edge bg-white" />
+                <iframe aria-label={`HTML part of “${open.subject}”`} sandbox="" srcDoc={open.html} className="h-[32rem] w-full rounded border border-paper-edge bg-white" />
               ) : (
                 <p className="text-sm text-graphite-mute">This mail has no HTML part.</p>
               )}

@@ -24,7 +24,7 @@ function secret(): string {
   return fs.readFileSync(SECRET_FILE, 'utf8');
 }
 
-export async function startServer(): Promise<void> {
+export async function startServer(extraEnv: Record<string, string> = {}): Promise<void> {
   fs.mkdirSync(E2E_DIR, { recursive: true });
   const log = fs.openSync(path.join(E2E_DIR, 'server.log'), 'a');
   const child = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', String(E2E_PORT), '-H', '127.0.0.1'], {
@@ -41,6 +41,7 @@ export async function startServer(): Promise<void> {
       KERFWISE_MAIL_CATCHER_URL: fs.existsSync(MAIL_CATCHER_FILE) ? fs.readFileSync(MAIL_CATCHER_FILE, 'utf8') : '',
       KERFWISE_MAIL_POLL_MS: '500',
       NEXT_TELEMETRY_DISABLED: '1',
+      ...extraEnv,
     },
   });
   child.unref();
@@ -65,6 +66,19 @@ export async function stopServer(): Promise<void> {
       // gone
     }
   });
+}
+
+/** kill -9 of the whole server group, at once: no shutdown handler runs. */
+export async function killServer(): Promise<void> {
+  if (!fs.existsSync(PID_FILE)) return;
+  const pid = Number(fs.readFileSync(PID_FILE, 'utf8'));
+  fs.rmSync(PID_FILE);
+  try {
+    process.kill(-pid, 'SIGKILL');
+  } catch {
+    return;
+  }
+  await waitFor(async () => !groupAlive(pid), 10_000, 'the killed server to be gone');
 }
 
 async function health(): Promise<number> {
