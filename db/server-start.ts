@@ -1,17 +1,24 @@
 import { serverEnv } from '@/lib/env';
+import { mailConfig } from '@/lib/mail/config';
+import { startMailService, stopMailService } from '@/lib/mail/service';
 import { closeDb, getDbHandle } from './client';
 
-/** Refuses to start without a sound environment and database; closes the database (and its lock) on shutdown. */
+/** Refuses to start without a sound environment and database; starts the mail sender; closes both on shutdown. */
 export async function startServer() {
   try {
     serverEnv();
-    await getDbHandle();
+    mailConfig();
+    const handle = await getDbHandle();
+    await startMailService(handle.db);
   } catch (error) {
     console.error((error as Error).message);
     process.exit(1);
   }
   const shutdown = () => {
-    closeDb().finally(() => process.exit(0));
+    stopMailService()
+      .catch(() => undefined)
+      .then(() => closeDb())
+      .finally(() => process.exit(0));
   };
   process.once('SIGTERM', shutdown);
   process.once('SIGINT', shutdown);

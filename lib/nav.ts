@@ -16,6 +16,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/reports', label: 'Reports', permission: 'yield:read', hint: 'Yield and the rack over time' },
   { href: '/shop-floor', label: 'Shop floor', permission: 'sawsteps:tick', hint: 'Saw orders to cut' },
   { href: '/team', label: 'Team', permission: 'team:manage', hint: 'People and roles' },
+  { href: '/outbox', label: 'Outbox', permission: 'mail:manage', hint: 'Mail sent and failed' },
   { href: '/settings', label: 'Shop settings', permission: 'settings:write', hint: 'Units, kerf, trim' },
 ];
 

@@ -1,12 +1,15 @@
 /**
  * `npm run demo`: prepares ./data (secret, embedded database, migrations, demo shop), builds, and serves on :3000.
- * The embedded database is closed before the server starts, so the lock passes to the server.
+ * The embedded database is closed before the server starts, so the lock passes to the server. With no SMTP_URL,
+ * a local mail catcher on 127.0.0.1 stores every mail the app sends in ./data/mail (the owner reads them on the
+ * Sent mail page); nothing leaves the machine.
  */
 import { spawn, spawnSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { openDatabase } from '@/db/open';
+import { startMailCatcher } from '@/lib/mail/catcher';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoShop } from './demo-shop';
 
 const dataDir = path.resolve(process.env.KERFWISE_DATA_DIR ?? './data');
@@ -40,6 +43,11 @@ async function main() {
     NEXT_TELEMETRY_DISABLED: '1',
   };
   await prepareDatabase();
+  if (!process.env.SMTP_URL) {
+    const catcher = await startMailCatcher({ dir: path.join(dataDir, 'mail') });
+    Object.assign(env, { KERFWISE_MAIL_CATCHER_URL: catcher.url });
+    console.log(`Mail: no SMTP_URL, so every mail is caught at ${catcher.url} and stored in ${catcher.dir} (Sent mail page).`);
+  }
   if (!process.argv.includes('--no-build')) {
     const build = spawnSync('npx', ['next', 'build'], { stdio: 'inherit', env });
     if (build.status !== 0) process.exit(build.status ?? 1);

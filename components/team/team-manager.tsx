@@ -18,6 +18,16 @@ export function TeamManager({ selfId }: { selfId: string }) {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['team'] }),
     onError: (e) => setFields(e instanceof ApiError ? e.fields : {}),
   });
+  const [withPassword, setWithPassword] = useState(false);
+  const resend = useMutation({
+    mutationFn: (id: string) => api<TeamMember>(`/api/team/${id}/invite`, { method: 'POST' }),
+    onSuccess: (m) => {
+      setRowError(null);
+      setNotice(`A new invite is on its way to ${m.email}; the earlier link no longer works.`);
+    },
+    onError: (e) => setRowError(e.message),
+  });
+  const [notice, setNotice] = useState<string | null>(null);
   const change = useMutation({
     mutationFn: ({ id, ...body }: { id: string; role?: Role; active?: boolean }) => api<TeamMember>(`/api/team/${id}`, { method: 'PATCH', body }),
     onSuccess: () => {
@@ -33,7 +43,7 @@ export function TeamManager({ selfId }: { selfId: string }) {
     const form = new FormData(formEl);
     setFields({});
     add.mutate(
-      { name: form.get('name'), email: form.get('email'), role: form.get('role'), password: form.get('password') },
+      { name: form.get('name'), email: form.get('email'), role: form.get('role'), ...(withPassword ? { password: form.get('password') } : {}) },
       { onSuccess: () => formEl.reset() },
     );
   }
@@ -44,6 +54,7 @@ export function TeamManager({ selfId }: { selfId: string }) {
         {team.isPending && <p role="status" className="text-sm text-graphite-mute">Loading the team…</p>}
         {team.isError && <p role="alert" className="text-sm text-brick">Could not load the team: {team.error.message}</p>}
         {rowError && <p role="alert" className="mb-3 rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">{rowError}</p>}
+        {notice && !rowError && <p role="status" className="mb-3 rounded-md bg-sage-wash px-3 py-2 text-sm text-sage">{notice}</p>}
         {team.isSuccess && (
           <div className="card overflow-x-auto">
             <table className="data-table" aria-label="Team">
@@ -64,7 +75,7 @@ export function TeamManager({ selfId }: { selfId: string }) {
                     <td>
                       <select
                         aria-label={`Role of ${m.name}`}
-                        className="field-input py-1"
+                        className="field-input min-w-[7.5rem] py-1"
                         value={m.role}
                         disabled={change.isPending}
                         onChange={(e) => change.mutate({ id: m.id, role: e.target.value as Role })}
@@ -74,8 +85,28 @@ export function TeamManager({ selfId }: { selfId: string }) {
                         ))}
                       </select>
                     </td>
-                    <td>{m.active ? <StatusBadge tone="good">Active</StatusBadge> : <StatusBadge tone="neutral">Deactivated</StatusBadge>}</td>
+                    <td>
+                      {!m.active ? (
+                        <StatusBadge tone="neutral">Deactivated</StatusBadge>
+                      ) : m.invited ? (
+                        <>
+                          <StatusBadge tone="warn">Invited</StatusBadge>
+                          <button
+                            type="button"
+                            className="mt-1 block whitespace-nowrap text-xs text-graphite-soft underline hover:text-graphite"
+                            disabled={resend.isPending}
+                            onClick={() => resend.mutate(m.id)}
+                            aria-label={`Resend the invite to ${m.name}`}
+                          >
+                            Resend invite
+                          </button>
+                        </>
+                      ) : (
+                        <StatusBadge tone="good">Active</StatusBadge>
+                      )}
+                    </td>
                     <td className="text-right">
+
                       <button
                         type="button"
                         className={m.active ? 'btn-danger py-1' : 'btn-quiet py-1'}
@@ -94,10 +125,11 @@ export function TeamManager({ selfId }: { selfId: string }) {
       </div>
       <form onSubmit={onAdd} className="card flex flex-col gap-3 p-5" aria-label="Add a person">
         <h2>Add a person</h2>
-        {(['name', 'email', 'password'] as const).map((f) => (
+        <p className="text-sm text-graphite-mute">They get an e-mail with a link to choose their own password. The link works once, for 7 days.</p>
+        {(['name', 'email'] as const).map((f) => (
           <div key={f}>
-            <label htmlFor={`member-${f}`} className="field-label">{{ name: 'Name', email: 'E-mail', password: 'First password' }[f]}</label>
-            <input id={`member-${f}`} name={f} type={f === 'password' ? 'password' : f === 'email' ? 'email' : 'text'} className="field-input" autoComplete="off" />
+            <label htmlFor={`member-${f}`} className="field-label">{{ name: 'Name', email: 'E-mail' }[f]}</label>
+            <input id={`member-${f}`} name={f} type={f === 'email' ? 'email' : 'text'} className="field-input" autoComplete="off" />
             {fields[f] && <p className="field-error">{fields[f][0]}</p>}
           </div>
         ))}
@@ -109,9 +141,26 @@ export function TeamManager({ selfId }: { selfId: string }) {
             ))}
           </select>
         </div>
+        <label className="flex items-start gap-2 text-sm">
+          <input type="checkbox" className="mt-1" checked={withPassword} onChange={(e) => setWithPassword(e.target.checked)} />
+          <span>Set a first password myself instead (hand it over in person; no invite is sent)</span>
+        </label>
+        {withPassword && (
+          <div>
+            <label htmlFor="member-password" className="field-label">First password</label>
+            <input id="member-password" name="password" type="password" className="field-input" autoComplete="new-password" />
+            {fields.password && <p className="field-error">{fields.password[0]}</p>}
+          </div>
+        )}
         {add.isError && !Object.keys(fields).length && <p className="field-error">{add.error.message}</p>}
-        {add.isSuccess && <p role="status" className="text-sm text-sage">Added {add.data.name}.</p>}
-        <button type="submit" className="btn-accent" disabled={add.isPending}>{add.isPending ? 'Adding…' : 'Add to team'}</button>
+        {add.isSuccess && (
+          <p role="status" className="text-sm text-sage">
+            {add.data.invited ? `Invited ${add.data.name}: the e-mail is on its way to ${add.data.email}.` : `Added ${add.data.name}.`}
+          </p>
+        )}
+        <button type="submit" className="btn-accent" disabled={add.isPending}>
+          {add.isPending ? 'Adding…' : withPassword ? 'Add to team' : 'Send invite'}
+        </button>
       </form>
     </div>
   );

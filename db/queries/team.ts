@@ -5,24 +5,40 @@ import { users } from '../schema';
 import { conflict, HttpError, notFound } from '@/lib/api/errors';
 import type { TeamMember, TeamMemberInput, TeamMemberPatch } from '@/shared/schemas/user';
 import { recordAudit } from './audit';
+import { hasPassword, NO_PASSWORD_YET, queueInvite } from './user-links';
 import { listTeam } from './users';
+
+const member = (u: { id: string; name: string; email: string; role: TeamMember['role']; active: boolean; passwordHash: string; createdAt: Date }): TeamMember => ({
+  id: u.id,
+  name: u.name,
+  email: u.email,
+  role: u.role,
+  active: u.active,
+  invited: !hasPassword(u.passwordHash),
+  createdAt: u.createdAt.toISOString(),
+});
 
 export const BCRYPT_ROUNDS = 10;
 
 export async function teamOf(db: Db, shopId: string): Promise<TeamMember[]> {
-  return (await listTeam(db, shopId)).map((u) => ({ ...u, createdAt: u.createdAt.toISOString() }));
+  return (await listTeam(db, shopId)).map(member);
 }
 
+/**
+ * Adds a person. Without a password they are invited: a single-use link to choose one is mailed to them, queued in
+ * the same transaction as their row.
+ */
 export async function addTeamMember(db: Db, shopId: string, actorId: string, input: TeamMemberInput): Promise<TeamMember> {
-  const passwordHash = await bcrypt.hash(input.password, BCRYPT_ROUNDS);
+  const passwordHash = input.password === undefined ? NO_PASSWORD_YET : await bcrypt.hash(input.password, BCRYPT_ROUNDS);
   try {
     return await db.transaction(async (tx) => {
       const [row] = await tx
         .insert(users)
         .values({ shopId, name: input.name, email: input.email, role: input.role, passwordHash })
         .returning();
-      await recordAudit(tx, { shopId, userId: actorId, action: 'create', entity: 'user', entityId: row.id, data: { email: row.email, role: row.role } });
-      return { id: row.id, name: row.name, email: row.email, role: row.role, active: row.active, createdAt: row.createdAt.toISOString() };
+      await recordAudit(tx, { shopId, userId: actorId, action: 'create', entity: 'user', entityId: row.id, data: { email: row.email, role: row.role, invited: input.password === undefined } });
+      if (input.password === undefined) await queueInvite(tx, row, await actorName(tx, actorId));
+      return member(row);
     });
   } catch (error) {
     if (isUniqueViolation(error)) throw new HttpError(422, 'That e-mail is already in use.', { email: ['That e-mail is already in use.'] });
@@ -62,8 +78,26 @@ export async function updateTeamMember(db: Db, shopId: string, actorId: string, 
       .returning();
     const { password: _secret, ...logged } = patch;
     await recordAudit(tx, { shopId, userId: actorId, action: 'update', entity: 'user', entityId: id, data: { ...logged, passwordChanged: patch.password !== undefined } });
-    return { id: row.id, name: row.name, email: row.email, role: row.role, active: row.active, createdAt: row.createdAt.toISOString() } satisfies TeamMember;
+    return member(row);
   });
+}
+
+/** Sends a fresh invite (voiding the earlier link) to someone who has not chosen a password yet. */
+export async function resendInvite(db: Db, shopId: string, actorId: string, id: string): Promise<TeamMember> {
+  return db.transaction(async (tx) => {
+    const [row] = await tx.select().from(users).where(and(eq(users.shopId, shopId), eq(users.id, id))).for('update');
+    if (!row) throw notFound('That person');
+    if (!row.active) throw conflict(`${row.name} is deactivated: reactivate them first.`);
+    if (hasPassword(row.passwordHash)) throw conflict(`${row.name} has already chosen a password. They can reset it from the sign-in page.`);
+    await queueInvite(tx, row, await actorName(tx, actorId));
+    await recordAudit(tx, { shopId, userId: actorId, action: 'update', entity: 'user', entityId: id, data: { inviteResent: true } });
+    return member(row);
+  });
+}
+
+async function actorName(tx: Db, actorId: string) {
+  const [actor] = await tx.select({ name: users.name }).from(users).where(eq(users.id, actorId));
+  return actor?.name ?? 'The shop';
 }
 
 function isUniqueViolation(error: unknown): boolean {

@@ -8,3 +8,4 @@ export * from './plans';
 export * from './recuts';
 export * from './slide-models';
 export * from './rate-limits';
+export * from './mail';

@@ -11,17 +11,21 @@ import { withoutPrices } from '@/lib/stock/without-prices';
 import { isHttps, securityHeaders } from '@/lib/security-headers';
 import { log, requestIdOf, routeOf } from '@/lib/log';
 
-export interface RouteContext<P, B, Q> {
+export interface RouteContext<P, B, Q, U = SessionUser> {
   req: NextRequest;
   db: Db;
-  user: SessionUser;
+  user: U;
   params: P;
   body: B;
   query: Q;
 }
 
+/** Routes for people who cannot sign in yet (accepting an invite, resetting a forgotten password). */
+export const ANYONE = 'anyone';
+
 interface RouteSpec<P, B, Q> {
-  permission: Permission;
+  /** What the caller must be allowed; `ANYONE` for the few public routes (signed in or not: `user` may be null). */
+  permission: Permission | typeof ANYONE;
   /** Path parameters; a value that does not parse (say, not a uuid) is a 404, not a 422. */
   params?: ZodType<P>;
   body?: ZodType<B>;
@@ -40,8 +44,16 @@ type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
  * else, a state-changing request must come from the app's own pages (403) and carry JSON if it has a body (415).
  */
 export function route<P = undefined, B = undefined, Q = undefined>(
-  spec: RouteSpec<P, B, Q>,
+  spec: RouteSpec<P, B, Q> & { permission: typeof ANYONE },
+  handler: (ctx: RouteContext<P, B, Q, SessionUser | null>) => Promise<unknown>,
+): (req: NextRequest, context: NextRouteContext) => Promise<Response>;
+export function route<P = undefined, B = undefined, Q = undefined>(
+  spec: RouteSpec<P, B, Q> & { permission: Permission },
   handler: (ctx: RouteContext<P, B, Q>) => Promise<unknown>,
+): (req: NextRequest, context: NextRouteContext) => Promise<Response>;
+export function route<P = undefined, B = undefined, Q = undefined>(
+  spec: RouteSpec<P, B, Q>,
+  handler: (ctx: RouteContext<P, B, Q, never>) => Promise<unknown>,
 ) {
   return async (req: NextRequest, context: NextRouteContext): Promise<Response> => {
     const started = performance.now();
@@ -72,9 +84,11 @@ export function route<P = undefined, B = undefined, Q = undefined>(
       checkJsonBody(req);
       const db = await getDb();
       const user = await userFromRequest(req, db);
-      if (!user) throw unauthorized();
-      who.user = user;
-      if (!can(user.role, spec.permission)) throw forbidden();
+      if (spec.permission !== ANYONE) {
+        if (!user) throw unauthorized();
+        if (!can(user.role, spec.permission)) throw forbidden();
+      }
+      if (user) who.user = user;
 
       let params = undefined as P;
       if (spec.params) {
@@ -85,10 +99,10 @@ export function route<P = undefined, B = undefined, Q = undefined>(
       const query = (spec.query ? spec.query.parse(Object.fromEntries(req.nextUrl.searchParams)) : undefined) as Q;
       const body = (spec.body ? spec.body.parse(await readJsonBody(req)) : undefined) as B;
 
-      const result = await handler({ req, db, user, params, body, query });
+      const result = await handler({ req, db, user: user as never, params, body, query });
       if (result instanceof Response) return result;
       // A role that may not see prices gets none, whatever the handler returned (a write's echo included).
-      const shown = can(user.role, 'prices:read') ? result : withoutPrices(result);
+      const shown = user && !can(user.role, 'prices:read') ? withoutPrices(result) : result;
       return NextResponse.json(shown ?? { ok: true }, { status: spec.status ?? 200 });
     } catch (error) {
       const { status, body, headers } = toErrorResponse(error, requestId);

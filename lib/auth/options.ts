@@ -4,6 +4,7 @@ import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
+import { hasPassword } from '@/db/queries/user-links';
 import { findActiveUserByEmail, revokeSessions } from '@/db/queries/users';
 import { claimsFromToken } from './claims';
 import { serverEnv } from '@/lib/env';
@@ -37,8 +38,10 @@ export function authOptions(): NextAuthOptions {
           // time taken does not tell a known address from an unknown one.
           const parsed = credentialsSchema.safeParse(raw);
           const user = parsed.success ? await findActiveUserByEmail(await getDb(), parsed.data.email) : null;
-          const ok = await bcrypt.compare(parsed.success ? parsed.data.password : '', user?.passwordHash ?? DUMMY_HASH);
-          if (!parsed.success || !user || !ok) return null;
+          // Someone invited who has not chosen a password yet has none to match.
+          const usable = user && hasPassword(user.passwordHash) ? user.passwordHash : null;
+          const ok = await bcrypt.compare(parsed.success ? parsed.data.password : '', usable ?? DUMMY_HASH);
+          if (!parsed.success || !user || !usable || !ok) return null;
           return { id: user.id, name: user.name, email: user.email, shopId: user.shopId, role: user.role, tokenVersion: user.tokenVersion };
         },
       }),

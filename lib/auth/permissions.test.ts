@@ -8,6 +8,8 @@ describe('the role table (PRODUCT.md, "Users and roles")', () => {
 
   test.each([
     ['estimator', 'team:manage', false],
+    ['estimator', 'mail:manage', false],
+    ['cutter', 'mail:manage', false],
     ['estimator', 'stock:write', false],
     ['estimator', 'stock:read', true],
     ['estimator', 'nest:run', true],

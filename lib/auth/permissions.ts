@@ -20,6 +20,8 @@ export const PERMISSIONS = [
   'prices:read',
   'yield:read',
   'team:manage',
+  /** The outbox (what mail went out, what failed, try again) and, in the demo, the Sent mail page. */
+  'mail:manage',
   'settings:read',
   'settings:write',
 ] as const;

@@ -7,12 +7,13 @@ const password = z
   .min(10, 'Use at least 10 characters for the password.')
   .max(200, 'Keep the password under 200 characters.');
 
+/** A new person: with a first password the owner hands over, or (no password) an invite by mail to choose one. */
 export const teamMemberInputSchema = z.object({
   name: text().min(1, 'Enter the person’s name.').max(120),
   // Trimmed and lower-cased before it is checked: a pasted address with spaces around it is fine.
   email: z.string({ error: 'Enter a valid e-mail address.' }).trim().toLowerCase().max(320, 'Keep the e-mail under 320 characters.').pipe(z.email('Enter a valid e-mail address.')),
   role: z.enum(ROLES, { error: 'Pick owner, estimator or cutter.' }),
-  password,
+  password: password.optional(),
 });
 export type TeamMemberInput = z.infer<typeof teamMemberInputSchema>;
 
@@ -33,5 +34,10 @@ export interface TeamMember {
   email: string;
   role: (typeof ROLES)[number];
   active: boolean;
+  /** Invited and has not chosen a password yet. */
+  invited: boolean;
   createdAt: string;
 }
+
+export const newPasswordSchema = z.object({ password });
+export const passwordResetRequestSchema = z.object({ email: z.email('Enter a valid e-mail address.').trim().toLowerCase().max(320) });

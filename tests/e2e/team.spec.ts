@@ -1,7 +1,7 @@
 import { expect, test } from './support/test';
 import { shot, signIn } from './support/session';
 
-test('the owner adds a cutter, who can sign in; after deactivation their next request is refused', async ({ browser }) => {
+test('the owner adds a cutter with a first password of their own, who can sign in; after deactivation their next request is refused', async ({ browser }) => {
   const ownerCtx = await browser.newContext();
   const owner = await ownerCtx.newPage();
   await signIn(owner, 'owner');
@@ -10,7 +10,8 @@ test('the owner adds a cutter, who can sign in; after deactivation their next re
   const form = owner.getByRole('form', { name: 'Add a person' });
   await form.getByLabel('Name').fill('Wren Adeyemi');
   await form.getByLabel('E-mail').fill(email);
-  await form.getByLabel('First password').fill('saw-dust-2027');
+  await form.getByLabel('Set a first password myself instead').check();
+  await form.getByLabel('First password', { exact: true }).fill('saw-dust-2027');
   await form.getByLabel('Role').selectOption('cutter');
   await form.getByRole('button', { name: 'Add to team' }).click();
   await expect(owner.getByRole('cell', { name: email })).toBeVisible();

@@ -1,11 +1,14 @@
 import { addTeamMember, teamOf } from '@/db/queries/team';
 import { route } from '@/lib/api/route';
+import { wakeMailSender } from '@/lib/mail/service';
 import { teamMemberInputSchema } from '@/shared/schemas/user';
 
 // GET /api/team – everyone in the shop with role and status
 export const GET = route({ permission: 'team:manage' }, async ({ db, user }) => teamOf(db, user.shopId));
 
-// POST /api/team – add a person with a role and a first password
-export const POST = route({ permission: 'team:manage', body: teamMemberInputSchema, status: 201 }, async ({ db, user, body }) =>
-  addTeamMember(db, user.shopId, user.id, body),
-);
+// POST /api/team – add a person with a role: invited by mail to choose a password, or given a first password
+export const POST = route({ permission: 'team:manage', body: teamMemberInputSchema, status: 201 }, async ({ db, user, body }) => {
+  const member = await addTeamMember(db, user.shopId, user.id, body);
+  if (member.invited) wakeMailSender();
+  return member;
+});

@@ -2,9 +2,13 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { openDatabase } from '../../../db/open';
 import { seedDemoShop } from '../../../seeds/demo-shop';
-import { E2E_DATA, E2E_DIR, startServer, stopServer } from './server';
+import { startMailCatcher } from '../../../lib/mail/catcher';
+import { E2E_DATA, E2E_DIR, E2E_MAIL, MAIL_CATCHER_FILE, startServer, stopServer } from './server';
 
-/** A fresh data directory with the demo shop, and the built app serving it. */
+/**
+ * A fresh data directory with the demo shop, a local mail catcher storing into its `mail/` (it lives in the
+ * Playwright runner, so it outlasts a server restart), and the built app serving it.
+ */
 export default async function globalSetup() {
   await stopServer();
   fs.rmSync(E2E_DIR, { recursive: true, force: true });
@@ -15,5 +19,8 @@ export default async function globalSetup() {
   } finally {
     await db.close();
   }
+  const catcher = await startMailCatcher({ dir: E2E_MAIL });
+  fs.writeFileSync(MAIL_CATCHER_FILE, catcher.url);
   await startServer();
+  return () => catcher.close();
 }

@@ -14,13 +14,17 @@ export const E2E_DIR = path.resolve(`test-results/e2e-server-${E2E_PORT}`);
 export const E2E_DATA = path.join(E2E_DIR, 'data');
 const PID_FILE = path.join(E2E_DIR, 'server.pid');
 const SECRET_FILE = path.join(E2E_DIR, 'secret');
+/** The mail catcher global setup started (its URL), so a restarted server sends to the same one. */
+export const MAIL_CATCHER_FILE = path.join(E2E_DIR, 'mail-catcher-url');
+/** Where the catcher stores the `.eml` files (the data directory's `mail/`, as in the demo). */
+export const E2E_MAIL = path.join(E2E_DATA, 'mail');
 
 function secret(): string {
   if (!fs.existsSync(SECRET_FILE)) fs.writeFileSync(SECRET_FILE, randomBytes(32).toString('base64url'));
   return fs.readFileSync(SECRET_FILE, 'utf8');
 }
 
-export async function startServer(): Promise<void> {
+export async function startServer(extraEnv: Record<string, string> = {}): Promise<void> {
   fs.mkdirSync(E2E_DIR, { recursive: true });
   const log = fs.openSync(path.join(E2E_DIR, 'server.log'), 'a');
   const child = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', String(E2E_PORT), '-H', '127.0.0.1'], {
@@ -33,7 +37,11 @@ export async function startServer(): Promise<void> {
       NEXTAUTH_URL: E2E_URL,
       KERFWISE_DATA_DIR: E2E_DATA,
       DATABASE_URL: '',
+      SMTP_URL: '',
+      KERFWISE_MAIL_CATCHER_URL: fs.existsSync(MAIL_CATCHER_FILE) ? fs.readFileSync(MAIL_CATCHER_FILE, 'utf8') : '',
+      KERFWISE_MAIL_POLL_MS: '500',
       NEXT_TELEMETRY_DISABLED: '1',
+      ...extraEnv,
     },
   });
   child.unref();
@@ -77,6 +85,19 @@ export function serverRssBytes(): number {
     }
   }
   return total;
+}
+
+/** kill -9 of the whole server group, at once: no shutdown handler runs. */
+export async function killServer(): Promise<void> {
+  if (!fs.existsSync(PID_FILE)) return;
+  const pid = Number(fs.readFileSync(PID_FILE, 'utf8'));
+  fs.rmSync(PID_FILE);
+  try {
+    process.kill(-pid, 'SIGKILL');
+  } catch {
+    return;
+  }
+  await waitFor(async () => !groupAlive(pid), 10_000, 'the killed server to be gone');
 }
 
 async function health(): Promise<number> {

@@ -1,0 +1,97 @@
+/**
+ * The team mails, each as a plain-text part complete on its own and a simple HTML part: inline styles, no images,
+ * no remote content, no tracking of any kind. Every value put into the HTML is escaped.
+ */
+import { ROLE_LABELS, type Role } from '@/lib/auth/permissions';
+
+export interface RenderedMail {
+  subject: string;
+  text: string;
+  html: string;
+}
+
+export function escapeHtml(s: string): string {
+  return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+}
+
+const dateTime = (d: Date) => d.toLocaleString('en-GB', { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
+
+function layout(shopName: string, paragraphs: string[], button: { label: string; href: string }, after: string[]): string {
+  const p = (html: string) => `<p style="margin:0 0 16px;font-size:15px;line-height:1.5;color:#2b2a27">${html}</p>`;
+  return `<!doctype html>
+<html lang="en">
+<head><meta charset="utf-8"><meta name="viewport" content="width=device-width"><title>${escapeHtml(shopName)}</title></head>
+<body style="margin:0;padding:0;background:#f4f1ea">
+<div style="max-width:560px;margin:0 auto;padding:24px 16px;font-family:-apple-system,'Segoe UI',Helvetica,Arial,sans-serif">
+<div style="background:#ffffff;border:1px solid #e2ddd2;border-radius:8px;padding:24px">
+<p style="margin:0 0 20px;font-size:13px;letter-spacing:.04em;text-transform:uppercase;color:#7a766c">${escapeHtml(shopName)}</p>
+${paragraphs.map(p).join('\n')}
+<p style="margin:24px 0"><a href="${escapeHtml(button.href)}" style="display:inline-block;background:#2b2a27;color:#ffffff;text-decoration:none;padding:12px 20px;border-radius:6px;font-size:15px;font-weight:600">${escapeHtml(button.label)}</a></p>
+<p style="margin:0 0 16px;font-size:13px;line-height:1.5;color:#7a766c">If the button does not work, copy this address into your browser:<br><span style="word-break:break-all;color:#2b2a27">${escapeHtml(button.href)}</span></p>
+${after.map((a) => `<p style="margin:0 0 12px;font-size:13px;line-height:1.5;color:#7a766c">${a}</p>`).join('\n')}
+</div>
+<p style="margin:16px 0 0;font-size:12px;color:#7a766c;text-align:center">Sent by Kerfwise for ${escapeHtml(shopName)}.</p>
+</div>
+</body>
+</html>`;
+}
+
+export function inviteMail(input: { shopName: string; inviterName: string; personName: string; role: Role; link: string; expiresAt: Date }): RenderedMail {
+  const role = ROLE_LABELS[input.role].toLowerCase();
+  const article = /^[aeiou]/.test(role) ? 'an' : 'a';
+  const subject = `${input.inviterName} invited you to ${input.shopName} on Kerfwise`;
+  const text = [
+    `Hello ${input.personName},`,
+    '',
+    `${input.inviterName} has added you to ${input.shopName} on Kerfwise as ${article} ${role}.`,
+    'Open this link to choose your password and sign in:',
+    '',
+    input.link,
+    '',
+    `The link works once and until ${dateTime(input.expiresAt)}. If it has expired, ask ${input.inviterName} to send a new invite.`,
+    'If you were not expecting this, you can ignore this mail: nothing happens until the link is used.',
+    '',
+    `— Kerfwise, for ${input.shopName}`,
+    '',
+  ].join('\n');
+  const html = layout(
+    input.shopName,
+    [
+      `Hello ${escapeHtml(input.personName)},`,
+      `${escapeHtml(input.inviterName)} has added you to <strong>${escapeHtml(input.shopName)}</strong> on Kerfwise as ${article} ${escapeHtml(role)}. Choose your password to sign in.`,
+    ],
+    { label: 'Choose your password', href: input.link },
+    [
+      `The link works once and until ${escapeHtml(dateTime(input.expiresAt))}. If it has expired, ask ${escapeHtml(input.inviterName)} to send a new invite.`,
+      'If you were not expecting this, you can ignore this mail: nothing happens until the link is used.',
+    ],
+  );
+  return { subject, text, html };
+}
+
+export function passwordResetMail(input: { shopName: string; personName: string; link: string; expiresAt: Date }): RenderedMail {
+  const subject = `Reset your Kerfwise password for ${input.shopName}`;
+  const text = [
+    `Hello ${input.personName},`,
+    '',
+    'Someone — hopefully you — asked to reset your Kerfwise password. Open this link to choose a new one:',
+    '',
+    input.link,
+    '',
+    `The link works once and until ${dateTime(input.expiresAt)}. Your current password keeps working until you choose a new one.`,
+    'If you did not ask for this, ignore this mail: your password stays as it is.',
+    '',
+    `— Kerfwise, for ${input.shopName}`,
+    '',
+  ].join('\n');
+  const html = layout(
+    input.shopName,
+    [`Hello ${escapeHtml(input.personName)},`, 'Someone — hopefully you — asked to reset your Kerfwise password. Choose a new one here:'],
+    { label: 'Choose a new password', href: input.link },
+    [
+      `The link works once and until ${escapeHtml(dateTime(input.expiresAt))}. Your current password keeps working until you choose a new one.`,
+      'If you did not ask for this, ignore this mail: your password stays as it is.',
+    ],
+  );
+  return { subject, text, html };
+}
