@@ -10,6 +10,7 @@ export interface NavItem {
 /** The app's sections; each shows only to roles holding its permission. */
 export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/jobs', label: 'Jobs', permission: 'jobs:read', hint: 'Cut lists, drawer schedules, plans' },
+  { href: '/customers', label: 'Customers', permission: 'customers:read', hint: 'People and firms, their jobs and quotes' },
   { href: '/setup-cards', label: 'Setup cards', permission: 'jobs:read', hint: 'Router settings per joint and thickness' },
   { href: '/stock', label: 'Stock room', permission: 'stock:read', hint: 'Sheets, boards and offcuts' },
   { href: '/yield', label: 'Yield ledger', permission: 'yield:read', hint: 'What the stock became' },

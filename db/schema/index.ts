@@ -1,6 +1,7 @@
 export * from './enums';
 export * from './shops';
 export * from './users';
+export * from './customers';
 export * from './jobs';
 export * from './parts';
 export * from './stock';

@@ -1,4 +1,5 @@
 import type { ShopUnits } from '@/shared/schemas/units';
+import { DEFAULT_PRICING, type PricingSettings } from '@/shared/schemas/pricing';
 import { doublePrecision, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 
 
@@ -15,5 +16,7 @@ export const shops = pgTable('shops', {
   minFenceWidthMm: doublePrecision('min_fence_width_mm').notNull().default(25.4),
   /** Waste allowance used by takeoffs, in whole percent. */
   wastePercent: integer('waste_percent').notNull().default(15),
+  /** Rates, labour minutes, markups, tax, deposit, validity and terms every new quote starts from. */
+  pricing: jsonb('pricing').$type<PricingSettings>().notNull().default(DEFAULT_PRICING),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 });
