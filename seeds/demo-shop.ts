@@ -3,7 +3,7 @@ import type { Db } from '@/db/open';
 import { buildNestRequest } from '@/db/queries/nest-request';
 import { releasePlan } from '@/db/queries/plan-lifecycle';
 import { recordOpeningCounts } from '@/db/queries/stock';
-import { customers, jobs, offcuts, parts, plans, shops, slideModels, stockItems, users } from '@/db/schema';
+import { customers, hardwareItems, jobs, offcuts, parts, plans, shops, slideModels, stockItems, users } from '@/db/schema';
 import { slideModelSchema, type SlideModelInput } from '@/shared/schemas/slide-model';
 import { optimize } from '@/lib/nesting';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
@@ -96,6 +96,15 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
       { shopId, material: 'Baltic birch', thicknessMm: 12, lengthMm: inches(30), widthMm: inches(16), location: 'Offcut bin 1', costCents: 900 },
       { shopId, material: 'Maple ply', thicknessMm: inches(23 / 32), lengthMm: inches(46.5), widthMm: inches(15), location: 'Offcut bin 2', costCents: 1100 },
       { shopId, material: 'Maple ply', thicknessMm: inches(23 / 32), lengthMm: inches(25.25), widthMm: inches(23.25), location: 'Offcut bin 2', costCents: 800 },
+    ]);
+
+    await tx.insert(hardwareItems).values([
+      { shopId, name: 'Side-mount slides, 18″, full extension', unit: 'pair', priceMinor: 1495 },
+      { shopId, name: 'Side-mount slides, 20″, full extension', unit: 'pair', priceMinor: 1650 },
+      { shopId, name: 'Side-mount slides, 22″, full extension', unit: 'pair', priceMinor: 1795 },
+      { shopId, name: 'Hinge, 110° soft-close', unit: 'each', priceMinor: 475 },
+      { shopId, name: 'Pull, 128 mm, brushed steel', unit: 'each', priceMinor: 385 },
+      { shopId, name: 'Confirmat screws, box of 100', unit: 'box', priceMinor: 1290 },
     ]);
 
     await tx.insert(slideModels).values(DEMO_SLIDE_MODELS.map((m) => ({ shopId, ...slideModelSchema.parse(m) })));
