@@ -8,3 +8,4 @@ export * from './stock';
 export * from './plans';
 export * from './recuts';
 export * from './slide-models';
+export * from './quotes';

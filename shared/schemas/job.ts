@@ -1,10 +1,11 @@
 import { z } from 'zod';
 
-export const JOB_STATUSES = ['quoting', 'won', 'cutting', 'done', 'archived'] as const;
+export const JOB_STATUSES = ['quoting', 'quoted', 'won', 'cutting', 'done', 'archived'] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 
 export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
   quoting: 'Quoting',
+  quoted: 'Quoted',
   won: 'Won',
   cutting: 'Cutting',
   done: 'Done',
