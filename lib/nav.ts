@@ -30,7 +30,7 @@ export function homeFor(role: Role): string {
 
 export interface JobSection {
   /** Path under /jobs/<id> ('' is the cut list). */
-  path: '' | '/drawers' | '/plan' | '/takeoff';
+  path: '' | '/drawers' | '/plan' | '/takeoff' | '/quotes';
   label: string;
   /** What the section's page requires (requirePageUser / jobSection in app/(app)/jobs/[id]). */
   permission: Permission;
@@ -42,6 +42,7 @@ export const JOB_SECTIONS: readonly JobSection[] = [
   { path: '/drawers', label: 'Drawer schedules', permission: 'jobs:read' },
   { path: '/plan', label: 'Plan', permission: 'plans:read' },
   { path: '/takeoff', label: 'Takeoff', permission: 'prices:read' },
+  { path: '/quotes', label: 'Quotes', permission: 'quotes:read' },
 ];
 
 export function jobSectionsFor(role: Role): JobSection[] {

@@ -9,6 +9,7 @@ import { planTotals } from '@/lib/nesting/figures';
 import { readPlan } from '@/lib/nesting';
 import { buildQuoteLines, type SlideNeed } from '@/lib/quotes/build-lines';
 import { formatLength } from '@/lib/units/format-length';
+import { typesetNominal } from '@/lib/cut-list/stock-match';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { quoteNumberText, revisionLetter, type QuoteRevisionPatch } from '@/shared/schemas/quote';
 import { recordAudit } from './audit';
@@ -184,7 +185,7 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
     counts: { cuts, piecesHandled, setupCards: drawers.setupCards, jointCorners: drawers.jointCorners, drawerBoxes: drawers.drawerBoxes, faceAreaMm2: faces?.mm2 ?? 0 },
     pricing,
     hardware,
-    describeSize: (t) => `${t.material} ${t.nominalThickness || describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
+    describeSize: (t) => `${t.material} ${t.nominalThickness ? typesetNominal(t.nominalThickness) : describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
   });
 
   const id = await db.transaction(async (tx) => {

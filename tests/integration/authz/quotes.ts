@@ -24,6 +24,7 @@ export const rows: AuthzRow[] = [
   { route: '/api/jobs/[id]/quotes', method: 'POST', target: freshJob, body: { planId: null }, expect: office(201) },
   { route: '/api/quotes/[id]', method: 'GET', target: freshDraft, expect: office(200) },
   { route: '/api/quotes/[id]', method: 'PATCH', target: freshDraft, body: { taxPercent: 8.25 }, expect: office(200) },
+  { route: '/api/quotes/[id]/pdf', method: 'GET', target: freshDraft, expect: office(200) },
   { route: '/api/quotes/[id]/send', method: 'POST', target: freshDraft, expect: office(200) },
   { route: '/api/quotes/[id]/revisions', method: 'POST', target: freshSent, expect: office(201) },
 ];

@@ -4,6 +4,9 @@ import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
 import { getCustomer } from '@/db/queries/customers';
+import { listCustomerQuotes } from '@/db/queries/quotes';
+import { QuoteStatusBadge } from '@/components/quotes/quote-status';
+import { formatMoney } from '@/lib/costing/money';
 import { CustomerFormToggle } from '@/components/customers/customer-form';
 import { JobStatusBadge } from '@/components/jobs/job-status';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -16,8 +19,10 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
   const user = await requirePageUser('customers:read');
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const customer = await getCustomer(await getDb(), user.shopId, id.data);
+  const db = await getDb();
+  const customer = await getCustomer(db, user.shopId, id.data);
   if (!customer) notFound();
+  const quotes = can(user.role, 'quotes:read') ? await listCustomerQuotes(db, user.shopId, customer.id) : [];
   const { jobs, ...details } = customer;
   const lines: [string, string][] = [
     ['Company', customer.company],
@@ -55,6 +60,26 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
                   <td><Link href={`/jobs/${j.id}`} className="font-medium underline-offset-2 hover:underline">{j.name}</Link></td>
                   <td><JobStatusBadge status={j.status} /></td>
                   <td className="whitespace-nowrap">{j.dueDate ?? 'not set'}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+      <h2 className="mb-2 mt-6">Quotes</h2>
+      {quotes.length === 0 ? (
+        <EmptyState title="No quotes for this customer yet.">Build one on a job’s Quotes section.</EmptyState>
+      ) : (
+        <div className="card overflow-x-auto">
+          <table className="data-table" aria-label="The customer’s quotes">
+            <thead><tr><th>Quote</th><th>Job</th><th>Status</th><th className="num">Total</th></tr></thead>
+            <tbody>
+              {quotes.map((q) => (
+                <tr key={q.id} className="hover:bg-paper">
+                  <td><Link href={`/jobs/${q.jobId}/quotes/${q.id}`} className="font-medium underline-offset-2 hover:underline">{q.title}</Link></td>
+                  <td>{q.jobName}</td>
+                  <td><QuoteStatusBadge status={q.status} /></td>
+                  <td className="num">{formatMoney(q.totals.totalMinor, q.currency)}</td>
                 </tr>
               ))}
             </tbody>
