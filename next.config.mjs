@@ -1,7 +1,8 @@
 /** @type {import('next').NextConfig} */
 const nextConfig = {
-  // PGlite ships its own wasm and data files; bundling would copy ~15 MB into static media.
-  serverExternalPackages: ['@electric-sql/pglite', 'pg'],
+  // PGlite ships its own wasm and data files; bundling would copy ~15 MB into static media. The PDF renderer loads
+  // its layout engine and fonts at run time in node.
+  serverExternalPackages: ['@electric-sql/pglite', 'pg', '@react-pdf/renderer'],
   poweredByHeader: false,
   // Several builds can live side by side (one per developer working in the same tree); the default is .next.
   distDir: process.env.KERFWISE_DIST_DIR || '.next',
