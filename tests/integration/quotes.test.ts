@@ -90,3 +90,41 @@ describe('a quote built from a job and its plan', () => {
     expect((await call(quoteRoute.GET, `/api/quotes/${q.id}`, q.id, fx.cutter)).status).toBe(403);
   });
 });
+
+describe('hardware and labour from the drawer schedules', () => {
+  test('slides as pairs by length (two banks of one length make one line), boxes, corners and setup cards counted', async () => {
+    const schedulesRoute = await import('@/app/api/jobs/[id]/drawer-schedules/route');
+    const hardwareRoute = await import('@/app/api/settings/hardware/route');
+    const { inches } = await import('@/lib/units/length');
+    const { job } = await jobWithSheet(handle.db, fx.mine.id, { parts: PARTS });
+    const bank = (label: string, quantity: number, from: 'opening' | 'box') => ({
+      label,
+      quantity,
+      size: { from, widthMm: inches(15), heightMm: inches(6), depthMm: inches(22.5) },
+      slide: { type: 'side-mount', series: 'imperial' },
+      joint: { method: 'lock-rabbet' },
+      thickness: { frontMm: inches(0.5), sideMm: inches(0.5) },
+    });
+    for (const [label, n, from] of [['Kitchen bank', 3, 'opening'], ['Island bank', 2, 'opening'], ['Loose box', 1, 'box']] as const) {
+      const res = await call(schedulesRoute.POST, `/api/jobs/${job.id}/drawer-schedules`, job.id, fx.estimator, { method: 'POST', body: bank(label, n, from) });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+    }
+    const made = await call(jobQuotes.POST, `/api/jobs/${job.id}/quotes`, job.id, fx.estimator, { method: 'POST', body: { planId: null } });
+    const lines: QuoteLine[] = made.body.lines;
+    const slides = lines.filter((l) => l.kind === 'hardware');
+    // The two banks from an opening ride one slide length; the box-sized one names no slide.
+    expect(slides).toHaveLength(1);
+    expect(slides[0]).toMatchObject({ quantity: 5, unit: 'pair' });
+    expect(slides[0].description).toMatch(/^Side-mount slides, \d+″$/);
+    // By hand with the default minutes: 6 boxes × 12 min = 72 min = 1.20 h; one setup card (½″ stock throughout)
+    // × 20 min + 6 × 4 corners × 1.5 min = 56 min → 0.93 h.
+    expect(lines.find((l) => l.description.startsWith('Assembly'))).toMatchObject({ description: 'Assembly: 6 drawer boxes', quantity: 1.2 });
+    expect(lines.find((l) => l.description.startsWith('Machining'))).toMatchObject({ description: 'Machining: 1 setup, 24 joint corners', quantity: 0.93 });
+
+    // With the slide on the price list, a new quote prices it from there.
+    const name = `Side-mount slides, ${slides[0].description.split(', ')[1]}, zinc`;
+    expect((await call(hardwareRoute.POST, '/api/settings/hardware', '', fx.owner, { method: 'POST', body: { name, unit: 'pair', priceMinor: 1595 } })).status).toBe(201);
+    const again = (await call(jobQuotes.POST, `/api/jobs/${job.id}/quotes`, job.id, fx.estimator, { method: 'POST', body: { planId: null } })).body;
+    expect(again.lines.find((l: QuoteLine) => l.kind === 'hardware')).toMatchObject({ description: name, unitCostMinor: 1595, quantity: 5 });
+  });
+});
