@@ -11,7 +11,7 @@ export const jobs = pgTable(
     shopId: shopIdColumn(),
     name: text('name').notNull(),
     /** Who the job is for; null for a job without a customer yet (or the shop's own work). */
-    customerId: uuid('customer_id').references(() => customers.id, { onDelete: 'restrict' }),
+    customerId: uuid('customer_id').references(() => customers.id, { onDelete: 'no action' }),
     status: jobStatusEnum('status').notNull().default('quoting'),
     dueDate: date('due_date'),
     notes: text('notes').notNull().default(''),

@@ -60,5 +60,10 @@ describe('the customers migration on jobs with free-text customers', () => {
     expect(jobs.get(other)).toBe(named(b, 'Priya Hollis'));
     const columns = await rows<{ column_name: string }>(sql`select column_name from information_schema.columns where table_name = 'jobs'`);
     expect(columns.map((c) => c.column_name)).not.toContain('customer');
+
+    // A shop that goes takes its customers and their jobs with it (the job's link is checked at the statement's end).
+    await handle.db.execute(sql`delete from shops where id = ${a}`);
+    expect(await rows(sql`select id from customers where shop_id = ${a}`)).toEqual([]);
+    expect(await rows(sql`select id from jobs where shop_id = ${a}`)).toEqual([]);
   });
 });
