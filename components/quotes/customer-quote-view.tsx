@@ -33,13 +33,14 @@ export function CustomerQuoteView(q: CustomerQuoteProps) {
       </header>
       <div className="overflow-x-auto">
         <table className="data-table" aria-label="Quote lines">
-          <thead><tr><th>Item</th><th className="num">Qty</th><th className="num">Unit price</th><th className="num">Amount</th></tr></thead>
+          <thead><tr><th>Item</th><th className="num">Qty</th><th>Unit</th><th className="num">Unit price</th><th className="num">Amount</th></tr></thead>
           <tbody>
             {q.lines.map((l, i) => (
               <tr key={l.id}>
                 <td>{l.description}</td>
                 {/* Labour is shown as a sum: hours and rates are the shop's own business. */}
-                <td className="num whitespace-nowrap">{l.kind === 'labour' ? '' : `${l.quantity} ${l.unit}`}</td>
+                <td className="num">{l.kind === 'labour' ? '' : l.quantity}</td>
+                <td>{l.kind === 'labour' ? '' : l.unit}</td>
                 <td className="num">{l.kind === 'labour' ? '' : money(t.lines[i].unitPriceMinor)}</td>
                 <td className="num">{money(t.lines[i].priceMinor)}</td>
               </tr>

@@ -59,7 +59,8 @@ const s = StyleSheet.create({
   row: { flexDirection: 'row', borderBottomWidth: 0.5, borderBottomColor: rule, paddingVertical: 4 },
   th: { fontWeight: 600, color: mute, fontSize: 8.5 },
   item: { flex: 1, paddingRight: 8 },
-  qty: { width: 70, textAlign: 'right' },
+  qty: { width: 40, textAlign: 'right' },
+  per: { width: 48, paddingLeft: 6 },
   unit: { width: 75, textAlign: 'right' },
   amount: { width: 80, textAlign: 'right' },
   totals: { marginTop: 10, marginLeft: 'auto', width: 240 },
@@ -107,6 +108,7 @@ function QuoteDocument({ q, qr }: { q: QuotePdfInput; qr: string | null }) {
         <View style={[s.row, { borderBottomColor: ink }]} fixed>
           <Text style={[s.item, s.th]}>ITEM</Text>
           <Text style={[s.qty, s.th]}>QTY</Text>
+          <Text style={[s.per, s.th]}>UNIT</Text>
           <Text style={[s.unit, s.th]}>UNIT PRICE</Text>
           <Text style={[s.amount, s.th]}>AMOUNT</Text>
         </View>
@@ -114,7 +116,8 @@ function QuoteDocument({ q, qr }: { q: QuotePdfInput; qr: string | null }) {
           <View key={l.id} style={s.row} wrap={false}>
             <Text style={s.item}>{l.description}</Text>
             {/* Labour as a sum: hours and rates are the shop's own. */}
-            <Text style={s.qty}>{l.kind === 'labour' ? '' : `${l.quantity} ${l.unit}`}</Text>
+            <Text style={s.qty}>{l.kind === 'labour' ? '' : String(l.quantity)}</Text>
+            <Text style={s.per}>{l.kind === 'labour' ? '' : l.unit}</Text>
             <Text style={s.unit}>{l.kind === 'labour' ? '' : money(t.lines[i].unitPriceMinor)}</Text>
             <Text style={s.amount}>{money(t.lines[i].priceMinor)}</Text>
           </View>
