@@ -151,7 +151,7 @@ export function QuoteEditor({ revision, hardware, customer }: { revision: Editor
                   <tr key={r.id} data-testid="quote-line">
                     <td className="text-xs text-graphite-mute">{KIND_LABEL[r.kind]}</td>
                     <td className="min-w-[18rem]">
-                      <input aria-label={`Line ${i + 1} description`} className="field-input" value={r.description} disabled={!editable} onChange={(e) => update(i, { description: e.target.value })} />
+                      <textarea aria-label={`Line ${i + 1} description`} rows={2} className="field-input resize-y" value={r.description} disabled={!editable} onChange={(e) => update(i, { description: e.target.value })} />
                       {r.note && <p className="mt-1 text-xs text-graphite-mute">{r.note}</p>}
                     </td>
                     <td className="num"><input aria-label={`Line ${i + 1} quantity`} inputMode="decimal" className="field-input w-20 text-right font-mono" value={r.qtyText} disabled={!editable} onChange={(e) => update(i, { qtyText: e.target.value })} /></td>
@@ -205,7 +205,7 @@ export function QuoteEditor({ revision, hardware, customer }: { revision: Editor
               {t ? (
                 <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 text-sm">
                   <dt>Subtotal</dt><dd className="num">{money(t.subtotalMinor)}</dd>
-                  <dt>Discount</dt><dd className="num">−{money(t.discountMinor)}</dd>
+                  <dt>Discount</dt><dd className="num">{t.discountMinor > 0 ? `−${money(t.discountMinor)}` : '—'}</dd>
                   <dt>Tax on {money(t.taxableMinor)}</dt><dd className="num">{money(t.taxMinor)}</dd>
                   <dt className="font-semibold">Total</dt><dd className="num font-semibold" data-testid="editor-total">{money(t.totalMinor)}</dd>
                   <dt>Deposit</dt><dd className="num">{money(t.depositMinor)}</dd>

@@ -8,8 +8,7 @@ import { requiredSetupCards, SETUP_CARD_TOLERANCE_MM } from '@/lib/joinery/setup
 import { planTotals } from '@/lib/nesting/figures';
 import { readPlan } from '@/lib/nesting';
 import { buildQuoteLines, type SlideNeed } from '@/lib/quotes/build-lines';
-import { formatLength } from '@/lib/units/format-length';
-import { typesetNominal } from '@/lib/cut-list/stock-match';
+import { quoteLength, quoteNominal } from '@/lib/quotes/quote-text';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { quoteNumberText, revisionLetter, type QuoteRevisionPatch } from '@/shared/schemas/quote';
 import { recordAudit } from './audit';
@@ -164,7 +163,7 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
   const [settings, priced, hardware] = await Promise.all([getShopSettings(db, shopId), getPricing(db, shopId), listHardware(db, shopId)]);
   if (!settings || !priced) throw notFound('The shop');
   const { pricing, currency } = priced;
-  const describe = (mm: number) => formatLength(mm, settings.units, { style: 'unicode' }).replace(/^≈/, '');
+  const describe = (mm: number) => quoteLength(mm, settings.units);
   const [takeoff, drawers, [faces]] = await Promise.all([
     planId ? getTakeoff(db, shopId, jobId, planId) : null,
     drawerFacts(db, shopId, jobId, describe),
@@ -185,7 +184,7 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
     counts: { cuts, piecesHandled, setupCards: drawers.setupCards, jointCorners: drawers.jointCorners, drawerBoxes: drawers.drawerBoxes, faceAreaMm2: faces?.mm2 ?? 0 },
     pricing,
     hardware,
-    describeSize: (t) => `${t.material} ${t.nominalThickness ? typesetNominal(t.nominalThickness) : describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
+    describeSize: (t) => `${t.material} ${t.nominalThickness ? quoteNominal(t.nominalThickness) : describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
   });
 
   const id = await db.transaction(async (tx) => {

@@ -20,10 +20,12 @@ test('the estimator builds a quote from the demo kitchen’s nested plan with th
   await expect(page.getByRole('heading', { level: 2, name: /^Q-\d{4} rev A/ })).toBeVisible();
 
   const lines = page.getByTestId('quote-line');
-  // The demo plan's sheets at cost, the spoilage allowance once, and saw time with its hours.
-  await expect(lines.filter({ hasText: 'Maple ply' }).first()).toBeVisible();
-  await expect(lines.filter({ hasText: 'Spoilage allowance' })).toHaveCount(1);
-  await expect(lines.filter({ hasText: /Saw time: \d+ cuts/ })).toHaveCount(1);
+  const descriptions = () => lines.getByLabel(/description$/).evaluateAll((els) => els.map((e) => (e as HTMLTextAreaElement).value));
+  // The demo plan's sheets at cost (¾″ as on screen), the spoilage allowance once, and saw time with its hours.
+  await expect(lines.first().getByLabel(/description$/)).toHaveValue(/^Maple ply ¾″, 96″ × 48″ \(from stock\)$/);
+  const described = await descriptions();
+  expect(described.filter((d) => d.startsWith('Spoilage allowance'))).toHaveLength(1);
+  expect(described.filter((d) => /^Saw time: \d+ cuts, \d+ stock pieces? handled$/.test(d))).toHaveLength(1);
   await expect(page.getByRole('region', { name: 'Totals' })).toContainText('Margin');
   await expect(page.getByRole('region', { name: 'Totals' })).toContainText('Labour hours');
   for (const width of WIDTHS) {
@@ -45,6 +47,7 @@ test('the estimator builds a quote from the demo kitchen’s nested plan with th
   await page.getByRole('button', { name: 'Customer’s copy' }).click();
   const copy = page.getByRole('article', { name: 'The customer’s copy' });
   await expect(copy).toContainText('Delivery and install');
+  await expect(copy).toContainText('Maple ply ¾″');
   await expect(copy).toContainText('Deposit on acceptance (50 %)');
   await expect(copy).not.toContainText('Margin');
   await expect(copy).not.toContainText('Cost');
