@@ -41,7 +41,7 @@ export default async function CustomersPage({ searchParams }: { searchParams: Pr
                 <tr key={c.id} className="hover:bg-paper">
                   <td><Link href={`/customers/${c.id}`} className="font-medium underline-offset-2 hover:underline">{c.name}</Link></td>
                   <td>{c.company}</td>
-                  <td className="break-all">{c.email}</td>
+                  <td className="whitespace-nowrap">{c.email}</td>
                   <td className="whitespace-nowrap">{c.phone}</td>
                   <td className="num">{c.jobCount}</td>
                 </tr>
