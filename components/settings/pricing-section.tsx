@@ -67,9 +67,10 @@ export function PricingSection() {
         <div className="md:col-span-2">
           <label htmlFor="p-offcutValuation" className="field-label">Offcuts a plan uses are priced</label>
           <select id="p-offcutValuation" name="offcutValuation" className="field-input" defaultValue={shown.offcutValuation}>
-            <option value="area-cost">At area cost (their share of the stock they came from)</option>
-            <option value="free">Free (already paid for by an earlier job)</option>
+            <option value="area-cost">At area cost</option>
+            <option value="free">Free</option>
           </select>
+          <p className="mt-1 text-xs text-graphite-mute">At area cost: their share of the sheet or board they came from. Free: an earlier job paid for them.</p>
         </div>
         <div className="md:col-span-2">
           <label htmlFor="p-terms" className="field-label">Quote terms</label>
