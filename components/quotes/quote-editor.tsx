@@ -141,7 +141,8 @@ export function QuoteEditor({ revision, hardware, customer }: { revision: Editor
 
       {view === 'estimator' && (
         <>
-          <div className="card mb-4 overflow-x-auto">
+          {/* relative: the header's sr-only label stays inside the scroller (it pushed the page sideways at 820 px). */}
+          <div className="card relative mb-4 overflow-x-auto">
             <table className="data-table min-w-[56rem]" aria-label="Quote lines">
               <thead>
                 <tr><th>Kind</th><th>Description</th><th className="num">Qty</th><th>Unit</th><th className="num">Unit cost</th><th className="num">Cost</th><th className="num">Price</th><th>Tax</th><th><span className="sr-only">Remove</span></th></tr>

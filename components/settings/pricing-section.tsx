@@ -108,7 +108,7 @@ function HardwareList({ currency }: { currency: string }) {
       {remove.isError && <p role="alert" className="field-error">{remove.error.message}</p>}
       {items.isSuccess && items.data.length === 0 && editing === null && <EmptyState title="No hardware priced yet.">Add the slides, hinges, pulls and fasteners you sell; quotes offer them as lines.</EmptyState>}
       {items.isSuccess && items.data.length > 0 && (
-        <div className="card overflow-x-auto">
+        <div className="card relative overflow-x-auto">
           <table className="data-table" aria-label="Hardware price list">
             <thead><tr><th>Item</th><th>Unit</th><th className="num">Price</th><th><span className="sr-only">Actions</span></th></tr></thead>
             <tbody>
