@@ -1,8 +1,9 @@
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // PGlite ships its own wasm and data files; bundling would copy ~15 MB into static media. The mail packages use
-  // Node built-ins (net, tls, streams) and run only on the server.
-  serverExternalPackages: ['@electric-sql/pglite', 'pg', 'pino', 'pino-pretty', 'nodemailer', 'smtp-server', 'postal-mime'],
+  // Node built-ins (net, tls, streams) and run only on the server; the PDF renderer loads its layout engine and fonts
+  // at run time in node.
+  serverExternalPackages: ['@electric-sql/pglite', 'pg', 'pino', 'pino-pretty', 'nodemailer', 'smtp-server', 'postal-mime', '@react-pdf/renderer'],
   poweredByHeader: false,
   // Several builds can live side by side (one per developer working in the same tree); the default is .next.
   distDir: process.env.KERFWISE_DIST_DIR || '.next',

@@ -10,6 +10,7 @@ export interface NavItem {
 /** The app's sections; each shows only to roles holding its permission. */
 export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/jobs', label: 'Jobs', permission: 'jobs:read', hint: 'Cut lists, drawer schedules, plans' },
+  { href: '/customers', label: 'Customers', permission: 'customers:read', hint: 'People and firms, their jobs and quotes' },
   { href: '/setup-cards', label: 'Setup cards', permission: 'jobs:read', hint: 'Router settings per joint and thickness' },
   { href: '/stock', label: 'Stock room', permission: 'stock:read', hint: 'Sheets, boards and offcuts' },
   { href: '/yield', label: 'Yield ledger', permission: 'yield:read', hint: 'What the stock became' },
@@ -31,7 +32,7 @@ export function homeFor(role: Role): string {
 
 export interface JobSection {
   /** Path under /jobs/<id> ('' is the cut list). */
-  path: '' | '/drawers' | '/plan' | '/takeoff';
+  path: '' | '/drawers' | '/plan' | '/takeoff' | '/quotes';
   label: string;
   /** What the section's page requires (requirePageUser / jobSection in app/(app)/jobs/[id]). */
   permission: Permission;
@@ -43,6 +44,7 @@ export const JOB_SECTIONS: readonly JobSection[] = [
   { path: '/drawers', label: 'Drawer schedules', permission: 'jobs:read' },
   { path: '/plan', label: 'Plan', permission: 'plans:read' },
   { path: '/takeoff', label: 'Takeoff', permission: 'prices:read' },
+  { path: '/quotes', label: 'Quotes', permission: 'quotes:read' },
 ];
 
 export function jobSectionsFor(role: Role): JobSection[] {

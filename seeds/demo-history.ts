@@ -8,7 +8,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import type { Db } from '@/db/open';
 import { buildNestRequest, stockRef } from '@/db/queries/nest-request';
 import { finishPlan, releasePlan } from '@/db/queries/plan-lifecycle';
-import { jobs, offcuts, parts, plans, recuts, stockMovements } from '@/db/schema';
+import { customers, jobs, offcuts, parts, plans, recuts, stockMovements } from '@/db/schema';
 import { optimize } from '@/lib/nesting';
 import { inches } from '@/lib/units/length';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
@@ -43,7 +43,8 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
   for (const past of PAST_JOBS) {
     const at = new Date(past.finishedAt);
     const wonAt = new Date(at.getTime() - 12 * 86_400_000);
-    const [job] = await db.insert(jobs).values({ shopId, name: past.name, customer: past.customer, status: 'won', wonAt, createdBy: estimatorId, createdAt: wonAt }).returning({ id: jobs.id });
+    const [customer] = await db.insert(customers).values({ shopId, name: past.customer, createdAt: wonAt, updatedAt: wonAt }).returning({ id: customers.id });
+    const [job] = await db.insert(jobs).values({ shopId, name: past.name, customerId: customer.id, status: 'won', wonAt, createdBy: estimatorId, createdAt: wonAt }).returning({ id: jobs.id });
     await db.insert(parts).values(past.parts.map((p, sort) => ({ shopId, jobId: job.id, sort: sort + 1, ...p })));
 
     // Bought for the job, or cut from what earlier past jobs racked: today's rack and counts are not touched.

@@ -3,7 +3,7 @@ import type { Db } from '@/db/open';
 import { buildNestRequest } from '@/db/queries/nest-request';
 import { releasePlan } from '@/db/queries/plan-lifecycle';
 import { recordOpeningCounts } from '@/db/queries/stock';
-import { jobs, offcuts, parts, plans, shops, slideModels, stockItems, users } from '@/db/schema';
+import { customers, hardwareItems, jobs, offcuts, parts, plans, shops, slideModels, stockItems, users } from '@/db/schema';
 import { slideModelSchema, type SlideModelInput } from '@/shared/schemas/slide-model';
 import { optimize } from '@/lib/nesting';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
@@ -101,14 +101,32 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
       { shopId, material: 'Maple ply', thicknessMm: inches(23 / 32), lengthMm: inches(25.25), widthMm: inches(23.25), location: 'Offcut bin 2', costCents: 800 },
     ]);
 
+    await tx.insert(hardwareItems).values([
+      { shopId, name: 'Side-mount slides, 18″, full extension', unit: 'pair', priceMinor: 1495 },
+      { shopId, name: 'Side-mount slides, 20″, full extension', unit: 'pair', priceMinor: 1650 },
+      { shopId, name: 'Side-mount slides, 22″, full extension', unit: 'pair', priceMinor: 1795 },
+      { shopId, name: 'Hinge, 110° soft-close', unit: 'each', priceMinor: 475 },
+      { shopId, name: 'Pull, 128 mm, brushed steel', unit: 'each', priceMinor: 385 },
+      { shopId, name: 'Confirmat screws, box of 100', unit: 'box', priceMinor: 1290 },
+    ]);
+
     await tx.insert(slideModels).values(DEMO_SLIDE_MODELS.map((m) => ({ shopId, ...slideModelSchema.parse(m) })));
+
+    const [hollis, pemberton, arden] = await tx
+      .insert(customers)
+      .values([
+        { shopId, name: 'Priya & Sam Hollis', email: 'hollis.family@example.com', phone: '(555) 014-2231', billingAddress: '18 Larch Row, Millbrook', siteAddress: '18 Larch Row, Millbrook' },
+        { shopId, name: 'Gail Pemberton', email: 'gail.pemberton@example.com', phone: '(555) 014-8870', billingAddress: '4 Quarry Lane, Millbrook', siteAddress: '4 Quarry Lane, Millbrook' },
+        { shopId, name: 'Arden Books', company: 'Arden Books Ltd', email: 'shop@arden-books.example.com', phone: '(555) 014-5090', billingAddress: '221 High Street, Millbrook', siteAddress: '221 High Street, Millbrook', notes: 'Deliveries before 10 am, by the back door.' },
+      ])
+      .returning({ id: customers.id });
 
     const [kitchen, vanity] = await tx
       .insert(jobs)
       .values([
-        { shopId, name: 'Hollis kitchen', customer: 'Priya & Sam Hollis', status: 'won', wonAt: new Date('2026-11-02T15:00:00Z'), dueDate: '2027-01-22', notes: 'Maple ply carcasses, Baltic birch drawer boxes, full-extension side-mount slides.', createdBy: estimator },
-        { shopId, name: 'Pemberton vanity', customer: 'Gail Pemberton', status: 'quoting', dueDate: '2027-02-05', notes: 'Floating vanity, two drawers, white oak face frame.', createdBy: estimator },
-        { shopId, name: 'Arden Books wall units', customer: 'Arden Books', status: 'quoting', dueDate: null, notes: 'Six open bookcases, MDF painted.', createdBy: estimator },
+        { shopId, name: 'Hollis kitchen', customerId: hollis.id, status: 'won', wonAt: new Date('2026-11-02T15:00:00Z'), dueDate: '2027-01-22', notes: 'Maple ply carcasses, Baltic birch drawer boxes, full-extension side-mount slides.', createdBy: estimator },
+        { shopId, name: 'Pemberton vanity', customerId: pemberton.id, status: 'quoting', dueDate: '2027-02-05', notes: 'Floating vanity, two drawers, white oak face frame.', createdBy: estimator },
+        { shopId, name: 'Arden Books wall units', customerId: arden.id, status: 'quoting', dueDate: null, notes: 'Six open bookcases, MDF painted.', createdBy: estimator },
       ])
       .returning({ id: jobs.id });
 

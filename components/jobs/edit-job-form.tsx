@@ -8,13 +8,15 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { ActionError, Field } from '@/components/stock/field';
 import { api, ApiError } from '@/lib/client/api';
+import { CUSTOMER_FIELD_HINT, CustomerChoices } from '@/components/customers/customer-choices';
 import { JOB_STATUS_LABELS, jobFields, type JobPatch, type JobStatus, type JobSummary } from '@/shared/schemas/job';
 
 const FIELDS = ['name', 'customer', 'dueDate', 'notes', 'status'] as const;
 
 const formSchema = z.object({
   name: jobFields.name,
-  customer: jobFields.customer,
+  // The customer's name as typed: the server picks the customer of that name or adds one ('' for none).
+  customer: z.string().trim().max(120, 'Keep the customer’s name under 120 characters.'),
   // A date input gives '' when cleared: no due date.
   dueDate: z.string().transform((v) => v || null).pipe(jobFields.dueDate),
   notes: jobFields.notes,
@@ -71,7 +73,7 @@ export function EditJobForm({ job, statusChoices, followsPlans, onDone }: { job:
       <form onSubmit={submit} className="grid gap-3 p-5 sm:grid-cols-2" noValidate>
         <h2 className="sm:col-span-2">Edit job</h2>
         <Field id="edit-job-name" label="Job name" error={e.name?.message}><input id="edit-job-name" className="field-input" autoFocus {...form.register('name')} /></Field>
-        <Field id="edit-job-customer" label="Customer" error={e.customer?.message}><input id="edit-job-customer" className="field-input" {...form.register('customer')} /></Field>
+        <Field id="edit-job-customer" label="Customer" error={e.customer?.message}><input id="edit-job-customer" className="field-input" list="edit-job-customer-choices" autoComplete="off" {...form.register('customer')} /><CustomerChoices id="edit-job-customer-choices" /><p className="mt-1 text-xs text-graphite-mute">{CUSTOMER_FIELD_HINT}</p></Field>
         <Field id="edit-job-due" label="Due date" error={e.dueDate?.message}><input id="edit-job-due" type="date" className="field-input" {...form.register('dueDate')} /></Field>
         <Field id="edit-job-status" label="Status" error={e.status?.message}>
           <select id="edit-job-status" className="field-input" {...form.register('status')}>

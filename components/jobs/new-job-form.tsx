@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { api, ApiError } from '@/lib/client/api';
 import type { JobSummary } from '@/shared/schemas/job';
+import { CUSTOMER_FIELD_HINT, CustomerChoices } from '@/components/customers/customer-choices';
 
 export function NewJobForm({ onDone }: { onDone: () => void }) {
   const queryClient = useQueryClient();
@@ -14,6 +15,7 @@ export function NewJobForm({ onDone }: { onDone: () => void }) {
     mutationFn: (body: Record<string, unknown>) => api<JobSummary>('/api/jobs', { method: 'POST', body }),
     onSuccess: (job) => {
       queryClient.invalidateQueries({ queryKey: ['jobs'] });
+      queryClient.invalidateQueries({ queryKey: ['customers'] });
       onDone();
       router.push(`/jobs/${job.id}`);
     },
@@ -41,7 +43,9 @@ export function NewJobForm({ onDone }: { onDone: () => void }) {
       </div>
       <div>
         <label htmlFor="job-customer" className="field-label">Customer</label>
-        <input id="job-customer" name="customer" className="field-input" />
+        <input id="job-customer" name="customer" className="field-input" list="job-customer-choices" autoComplete="off" />
+        <CustomerChoices id="job-customer-choices" />
+        <p className="mt-1 text-xs text-graphite-mute">{CUSTOMER_FIELD_HINT}</p>
         {fields.customer && <p className="field-error">{fields.customer[0]}</p>}
       </div>
       <div>

@@ -1,6 +1,6 @@
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
-import { jobs, plans, recuts } from '../schema';
+import { jobs, plans, quoteRevisions, recuts } from '../schema';
 import type { Role } from '@/lib/auth/permissions';
 import { followPlans, manualStatusChoices, type JobFacts } from '@/lib/jobs/status';
 import type { JobStatus } from '@/shared/schemas/job';
@@ -19,7 +19,11 @@ export async function jobFacts(tx: Db, shopId: string, jobId: string, wonAt: Dat
     .select({ n: sql<number>`count(*)`.mapWith(Number) })
     .from(recuts)
     .where(and(eq(recuts.shopId, shopId), eq(recuts.jobId, jobId), inArray(recuts.status, ['open', 'planned'])));
-  return { activePlans: counts?.activePlans ?? 0, donePlans: counts?.donePlans ?? 0, openRecuts: open?.n ?? 0, won: wonAt !== null };
+  const [sent] = await tx
+    .select({ n: sql<number>`count(*)`.mapWith(Number) })
+    .from(quoteRevisions)
+    .where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.jobId, jobId), eq(quoteRevisions.status, 'sent')));
+  return { activePlans: counts?.activePlans ?? 0, donePlans: counts?.donePlans ?? 0, openRecuts: open?.n ?? 0, won: wonAt !== null, quoted: (sent?.n ?? 0) > 0 };
 }
 
 /**

@@ -1,11 +1,12 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../open';
-import { jobs, parts, plans, stockMovements } from '../schema';
+import { customers, jobs, parts, plans, stockMovements } from '../schema';
 import { HttpError } from '@/lib/api/errors';
 import type { Role } from '@/lib/auth/permissions';
 import { refuseManualStatus, wonAtAfter } from '@/lib/jobs/status';
 import type { JobInput, JobPatch, JobSummary } from '@/shared/schemas/job';
 import { recordAudit } from './audit';
+import { resolveCustomer } from './customers';
 import { jobFacts } from './job-status';
 
 /** Per job: its pieces (quantities summed) and its materials, once each. */
@@ -28,7 +29,8 @@ function selectSummaries(db: Db, shopId: string) {
     .select({
       id: jobs.id,
       name: jobs.name,
-      customer: jobs.customer,
+      customer: sql<string>`coalesce(${customers.name}, '')`,
+      customerId: jobs.customerId,
       status: jobs.status,
       dueDate: jobs.dueDate,
       notes: jobs.notes,
@@ -39,6 +41,7 @@ function selectSummaries(db: Db, shopId: string) {
       materials: sql<string[] | null>`${stats.materials}`,
     })
     .from(jobs)
+    .leftJoin(customers, eq(customers.id, jobs.customerId))
     .leftJoin(stats, eq(stats.jobId, jobs.id));
 }
 
@@ -65,7 +68,9 @@ export async function getJob(db: Db, shopId: string, id: string): Promise<JobSum
 
 export async function createJob(db: Db, shopId: string, userId: string, input: JobInput): Promise<JobSummary> {
   const id = await db.transaction(async (tx) => {
-    const [row] = await tx.insert(jobs).values({ ...input, wonAt: input.status === 'won' ? new Date() : null, shopId, createdBy: userId }).returning({ id: jobs.id });
+    const { customer, ...fields } = input;
+    const customerId = await resolveCustomer(tx, shopId, userId, customer);
+    const [row] = await tx.insert(jobs).values({ ...fields, customerId, wonAt: input.status === 'won' ? new Date() : null, shopId, createdBy: userId }).returning({ id: jobs.id });
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'job', entityId: row.id, data: { name: input.name } });
     return row.id;
   });
@@ -87,8 +92,13 @@ export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: s
     const [job] = await tx.select().from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id))).for('update');
     if (!job) return false;
     const changes: Record<string, { from: unknown; to: unknown }> = {};
-    for (const [field, to] of Object.entries(patch) as [keyof JobPatch, unknown][]) {
+    const { customer, ...fields } = patch;
+    for (const [field, to] of Object.entries(fields) as [Exclude<keyof JobPatch, 'customer'>, unknown][]) {
       if (to !== undefined && to !== job[field]) changes[field] = { from: job[field], to };
+    }
+    if (customer !== undefined) {
+      const customerId = await resolveCustomer(tx, shopId, editor.id, customer);
+      if (customerId !== job.customerId) changes.customerId = { from: job.customerId, to: customerId };
     }
     if (!Object.keys(changes).length) return true;
     const set: Partial<typeof jobs.$inferInsert> = Object.fromEntries(Object.entries(changes).map(([f, c]) => [f, c.to]));

@@ -1,6 +1,6 @@
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
-import { jobs, plans, sawSteps, users } from '../schema';
+import { customers, jobs, plans, sawSteps, users } from '../schema';
 import { HttpError, notFound } from '@/lib/api/errors';
 import { readPlan } from '@/lib/nesting';
 import { nestRequestSchema, nestSettingsSchema } from '@/shared/schemas/nesting';
@@ -117,7 +117,7 @@ export async function getStepTicks(db: Db, shopId: string, planId: string): Prom
 export async function getSawOrder(db: Db, shopId: string, planId: string, { drafts }: { drafts: boolean }) {
   const [plan, settings] = await Promise.all([getPlan(db, shopId, planId), getShopSettings(db, shopId)]);
   if (!plan || !settings || (plan.status === 'draft' && !drafts)) return null;
-  const [job] = await db.select({ id: jobs.id, name: jobs.name, customer: jobs.customer }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, plan.jobId)));
+  const [job] = await db.select({ id: jobs.id, name: jobs.name, customer: sql<string>`coalesce(${customers.name}, '')` }).from(jobs).leftJoin(customers, eq(customers.id, jobs.customerId)).where(and(eq(jobs.shopId, shopId), eq(jobs.id, plan.jobId)));
   const request = nestRequestSchema.safeParse(plan.request);
   const requestSettings = (plan.request as { settings?: unknown } | null)?.settings;
   const kerf = request.success ? request.data.settings.kerf : (nestSettingsSchema.safeParse(requestSettings ?? {}).data?.kerf ?? settings.kerfMm);

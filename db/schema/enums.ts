@@ -1,7 +1,7 @@
 import { pgEnum } from 'drizzle-orm/pg-core';
 
 export const roleEnum = pgEnum('role', ['owner', 'estimator', 'cutter']);
-export const jobStatusEnum = pgEnum('job_status', ['quoting', 'won', 'cutting', 'done', 'archived']);
+export const jobStatusEnum = pgEnum('job_status', ['quoting', 'quoted', 'won', 'cutting', 'done', 'archived']);
 export const grainRuleEnum = pgEnum('grain_rule', ['along-length', 'any']);
 export const stockGrainEnum = pgEnum('stock_grain', ['along-length', 'none']);
 export const stockKindEnum = pgEnum('stock_kind', ['sheet', 'board']);
@@ -18,4 +18,6 @@ export const movementKindEnum = pgEnum('movement_kind', [
 ]);
 /** A damaged part's re-cut: open (to nest) → planned (in a released re-cut plan) → cut (that plan finished), or
  * spoiled (damaged again; a new re-cut replaces it), or cancelled by the estimator or owner with a reason. */
+/** A quote revision: a draft being priced, sent to the customer, or replaced by a newer revision that was sent. */
+export const quoteRevisionStatusEnum = pgEnum('quote_revision_status', ['draft', 'sent', 'replaced']);
 export const recutStatusEnum = pgEnum('recut_status', ['open', 'planned', 'cut', 'spoiled', 'cancelled']);

@@ -1,6 +1,7 @@
 export * from './enums';
 export * from './shops';
 export * from './users';
+export * from './customers';
 export * from './jobs';
 export * from './parts';
 export * from './stock';
@@ -9,3 +10,4 @@ export * from './recuts';
 export * from './slide-models';
 export * from './rate-limits';
 export * from './mail';
+export * from './quotes';

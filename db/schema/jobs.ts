@@ -2,6 +2,7 @@ import { date, index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core
 import { jobStatusEnum } from './enums';
 import { shopIdColumn } from './columns';
 import { users } from './users';
+import { customers } from './customers';
 
 export const jobs = pgTable(
   'jobs',
@@ -9,7 +10,8 @@ export const jobs = pgTable(
     id: uuid('id').primaryKey().defaultRandom(),
     shopId: shopIdColumn(),
     name: text('name').notNull(),
-    customer: text('customer').notNull().default(''),
+    /** Who the job is for; null for a job without a customer yet (or the shop's own work). */
+    customerId: uuid('customer_id').references(() => customers.id, { onDelete: 'no action' }),
     status: jobStatusEnum('status').notNull().default('quoting'),
     dueDate: date('due_date'),
     notes: text('notes').notNull().default(''),
@@ -19,7 +21,7 @@ export const jobs = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('jobs_shop_idx').on(t.shopId)],
+  (t) => [index('jobs_shop_idx').on(t.shopId), index('jobs_customer_idx').on(t.customerId)],
 );
 
 /** The column tying a row to its job; the row goes when the job is deleted. */

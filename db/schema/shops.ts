@@ -1,4 +1,5 @@
 import type { ShopUnits } from '@/shared/schemas/units';
+import { DEFAULT_PRICING, type PricingSettings } from '@/shared/schemas/pricing';
 import { doublePrecision, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 
 
@@ -21,5 +22,7 @@ export const shops = pgTable('shops', {
   yieldTargetPercent: integer('yield_target_percent').notNull().default(75),
   /** Offcuts racked longer than this many months are listed to use or scrap. */
   offcutAgeMonths: integer('offcut_age_months').notNull().default(6),
+  /** Rates, labour minutes, markups, tax, deposit, validity and terms every new quote starts from. */
+  pricing: jsonb('pricing').$type<PricingSettings>().notNull().default(DEFAULT_PRICING),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 });

@@ -18,6 +18,12 @@ export const PERMISSIONS = [
   /** Take a re-cut off the list with a reason. */
   'recuts:cancel',
   'prices:read',
+  /** The shop's customers: contact details, their jobs and quotes (never the cutter's). */
+  'customers:read',
+  'customers:write',
+  /** Build, edit and send quotes; read cost, margin and hours. */
+  'quotes:read',
+  'quotes:write',
   'yield:read',
   'team:manage',
   /** The outbox (what mail went out, what failed, try again) and, in the demo, the Sent mail page. */
@@ -46,6 +52,10 @@ export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
     'recuts:read',
     'recuts:cancel',
     'prices:read',
+    'customers:read',
+    'customers:write',
+    'quotes:read',
+    'quotes:write',
     'settings:read',
   ],
   cutter: ['jobs:read', 'plans:read', 'plans:finish', 'sawsteps:tick', 'stock:read', 'offcuts:record', 'recuts:read', 'settings:read'],

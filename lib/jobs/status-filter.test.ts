@@ -5,7 +5,7 @@ import { jobInStatusFilter, readStatusFilter } from './status-filter';
 // Filed-away work leaves the day's list but can be found again (common practice, no source).
 describe('the jobs list status filter', () => {
   test('by default shows every job but the archived ones', () => {
-    expect(JOB_STATUSES.filter((s) => jobInStatusFilter(s, ''))).toEqual(['quoting', 'won', 'cutting', 'done']);
+    expect(JOB_STATUSES.filter((s) => jobInStatusFilter(s, ''))).toEqual(['quoting', 'quoted', 'won', 'cutting', 'done']);
   });
 
   test('"archived" shows only those, one status only that one, "all" every job', () => {

@@ -4,11 +4,14 @@ import { JOB_STATUSES, type JobStatus } from '@/shared/schemas/job';
 import { followPlans, manualStatusChoices, refuseManualStatus, statusFromPlans, wonAtAfter, type JobFacts } from './status';
 
 // How a cabinet shop runs a job (common practice, no source): quoted, won, cut, done, then filed away.
-const facts = (f: Partial<JobFacts> = {}): JobFacts => ({ activePlans: 0, donePlans: 0, openRecuts: 0, won: false, ...f });
+const facts = (f: Partial<JobFacts> = {}): JobFacts => ({ activePlans: 0, donePlans: 0, openRecuts: 0, won: false, quoted: false, ...f });
 
 describe('a job follows its plans', () => {
   test.each([
     ['nothing released, not won: quoting', facts(), 'quoting'],
+    ['nothing released, a quote sent: quoted', facts({ quoted: true }), 'quoted'],
+    ['a quoted job whose only released plan was cancelled: back to quoted', facts({ quoted: true }), 'quoted'],
+    ['won after a quote was sent: won', facts({ quoted: true, won: true }), 'won'],
     ['nothing released, won: won', facts({ won: true }), 'won'],
     ['a plan released or being cut: cutting', facts({ activePlans: 1, won: true }), 'cutting'],
     ['a quote released to the saw before anyone said won: cutting', facts({ activePlans: 1 }), 'cutting'],
@@ -38,6 +41,9 @@ describe('statuses set by hand', () => {
 
   test.each([
     ['quoting', 'won', facts(), true],
+    ['quoted', 'won', facts({ quoted: true }), true],
+    ['quoted', 'quoting', facts({ quoted: true }), true],
+    ['quoting', 'quoted', facts(), false],
     ['won', 'quoting', facts({ won: true }), true],
     ['quoting', 'archived', facts(), true],
     ['won', 'archived', facts({ won: true }), true],

@@ -1,11 +1,12 @@
 import { z } from 'zod';
 import { text } from './text';
 
-export const JOB_STATUSES = ['quoting', 'won', 'cutting', 'done', 'archived'] as const;
+export const JOB_STATUSES = ['quoting', 'quoted', 'won', 'cutting', 'done', 'archived'] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 
 export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
   quoting: 'Quoting',
+  quoted: 'Quoted',
   won: 'Won',
   cutting: 'Cutting',
   done: 'Done',
@@ -15,7 +16,21 @@ export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
 /** Each field of a job, checked the same on the server and in the forms. */
 export const jobFields = {
   name: text().min(1, 'Give the job a name.').max(120, 'Keep the name under 120 characters.'),
-  customer: text().max(120, 'Keep the customer under 120 characters.'),
+  /**
+   * Who the job is for: one of the shop's customers by id, or a name (the shop's customer of that name, or a new one;
+   * a plain string is read as a name), or null / an empty name for none.
+   */
+  customer: z
+    .union([
+      z.object({ id: z.uuid({ error: 'Pick one of the shop’s customers.' }) }),
+      z.object({ name: text().max(120, 'Keep the customer’s name under 120 characters.') }),
+      text().max(120, 'Keep the customer’s name under 120 characters.'),
+      z.null(),
+    ], { error: 'Pick a customer or type a new one’s name.' })
+    .transform((v): { id: string } | { name: string } | null => {
+      const named = typeof v === 'string' ? { name: v } : v;
+      return named && 'name' in named && !named.name ? null : named;
+    }),
   status: z.enum(JOB_STATUSES, { error: `Status is one of ${JOB_STATUSES.join(', ')}.` }),
   dueDate: z.iso.date({ error: 'Use a date like 2027-01-31.' }).nullable(),
   notes: text({ multiline: true }).max(4000, 'Keep notes under 4,000 characters.'),
@@ -24,7 +39,7 @@ export const jobFields = {
 /** A new job starts as a quote, or as won when the work is already agreed; cutting and done follow its plans. */
 export const jobInputSchema = z.object({
   name: jobFields.name,
-  customer: jobFields.customer.default(''),
+  customer: jobFields.customer.default(null),
   status: z.enum(['quoting', 'won'], { error: 'A new job is quoting or won; cutting and done follow its plans.' }).default('quoting'),
   dueDate: jobFields.dueDate.default(null),
   notes: jobFields.notes.default(''),
@@ -47,7 +62,9 @@ export type JobPatch = z.infer<typeof jobPatchSchema>;
 export interface JobSummary {
   id: string;
   name: string;
+  /** The customer's name ('' for none), and who it is. */
   customer: string;
+  customerId: string | null;
   status: JobStatus;
   dueDate: string | null;
   notes: string;

@@ -40,6 +40,7 @@ const PAGES: { slug: string; path: (ids: Ids) => string; permission: Permission;
   { slug: 'plans', path: (i) => `/jobs/${i.jobId}/plan`, permission: 'plans:read', heading: /Hollis kitchen/ },
   { slug: 'bench', path: (i) => `/jobs/${i.jobId}/plan/${i.planId}`, permission: 'plans:read', heading: /Hollis kitchen/ },
   { slug: 'takeoff', path: (i) => `/jobs/${i.jobId}/takeoff`, permission: 'prices:read', heading: /Hollis kitchen/ },
+  { slug: 'customers', path: () => '/customers', permission: 'customers:read', heading: /^Customers$/ },
   { slug: 'setup-cards', path: () => '/setup-cards', permission: 'jobs:read', heading: /^Setup cards$/ },
   { slug: 'stock', path: () => '/stock', permission: 'stock:read', heading: /^Stock room$/ },
   { slug: 'stock-rack', path: () => '/stock?view=rack', permission: 'stock:read', heading: /^Stock room$/ },

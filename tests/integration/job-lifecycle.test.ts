@@ -1,7 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
 import type { Db } from '@/db/open';
-import { auditEvents, jobs, parts, plans } from '@/db/schema';
+import { auditEvents, customers, jobs, parts, plans } from '@/db/schema';
 import * as jobsRoute from '@/app/api/jobs/route';
 import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 import { cancel, call, deleteJob, editJob, finish, jobStatus, jobWithSheet, nestAndSave, release, tick } from '../support/shop-day';
@@ -102,7 +102,8 @@ describe('a job’s status follows its plans', () => {
 
 describe('editing a job by hand', () => {
   test('the estimator changes name, customer, due date and notes; only the fields sent change, each audited from → to', async () => {
-    const [j] = await db.insert(jobs).values({ shopId: fx.mine.id, name: 'Ashby pantry', customer: 'R. Ashby', dueDate: '2027-03-01', notes: 'Paint grade' }).returning();
+    const [ashby] = await db.insert(customers).values({ shopId: fx.mine.id, name: 'R. Ashby' }).returning();
+    const [j] = await db.insert(jobs).values({ shopId: fx.mine.id, name: 'Ashby pantry', customerId: ashby.id, dueDate: '2027-03-01', notes: 'Paint grade' }).returning();
     const renamed = await editJob(fx.estimator, j.id, { name: 'Ashby pantry and mudroom', dueDate: '2027-03-15' });
     expect(renamed.status).toBe(200);
     expect(renamed.body).toMatchObject({ name: 'Ashby pantry and mudroom', customer: 'R. Ashby', dueDate: '2027-03-15', notes: 'Paint grade', status: 'quoting' });

@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
-import { jobs, parts } from '@/db/schema';
+import { customers, jobs, parts } from '@/db/schema';
 import * as jobsRoute from '@/app/api/jobs/route';
 import * as jobRoute from '@/app/api/jobs/[id]/route';
 import type { JobSummary } from '@/shared/schemas/job';
@@ -16,11 +16,12 @@ const noParams = { params: Promise.resolve({}) };
 
 /** A job of our own with rows in two materials, and one with none. */
 async function seedJobs() {
+  const [ada, bo] = await handle.db.insert(customers).values([{ shopId: fx.mine.id, name: 'Ada Ash' }, { shopId: fx.mine.id, name: 'Bo Birch' }]).returning();
   const [withParts, empty] = await handle.db
     .insert(jobs)
     .values([
-      { shopId: fx.mine.id, name: 'Counted pantry', customer: 'Ada Ash' },
-      { shopId: fx.mine.id, name: 'Empty closet', customer: 'Bo Birch' },
+      { shopId: fx.mine.id, name: 'Counted pantry', customerId: ada.id },
+      { shopId: fx.mine.id, name: 'Empty closet', customerId: bo.id },
     ])
     .returning();
   await handle.db.insert(parts).values([

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { SettingsForm } from '@/components/settings/settings-form';
+import { PricingSection } from '@/components/settings/pricing-section';
 import { SlideModelsSection } from '@/components/settings/slide-models-section';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/session';
@@ -10,9 +11,10 @@ export default async function SettingsPage() {
   await requirePageUser('settings:write');
   return (
     <>
-      <PageHeader title="Shop settings" lead="Units everyone sees, the cutting defaults every new nest starts from, and the drawer slides boxes are sized on." />
+      <PageHeader title="Shop settings" lead="Units everyone sees, the cutting defaults every new nest starts from, the drawer slides boxes are sized on, and the pricing quotes start from." />
       <SettingsForm />
       <SlideModelsSection />
+      <PricingSection />
     </>
   );
 }

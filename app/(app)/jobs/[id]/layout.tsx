@@ -30,7 +30,7 @@ export default async function JobLayout({ children, params }: { children: ReactN
             {job.name} <span data-testid="job-status"><JobStatusBadge status={job.status} /></span>
           </h1>
           <p className="mt-1 text-sm text-graphite-mute">
-            {job.customer || 'No customer yet'} · due {job.dueDate ?? 'not set'}
+            {job.customerId && can(user.role, 'customers:read') ? <Link href={`/customers/${job.customerId}`} className="underline-offset-2 hover:underline">{job.customer}</Link> : job.customer || 'No customer yet'} · due {job.dueDate ?? 'not set'}
           </p>
           {job.notes && <p className="mt-2 max-w-3xl whitespace-pre-line text-sm text-graphite-soft">{job.notes}</p>}
         </div>

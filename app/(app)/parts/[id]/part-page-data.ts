@@ -1,7 +1,7 @@
 import 'server-only';
-import { and, desc, eq, ne } from 'drizzle-orm';
+import { and, desc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '@/db/open';
-import { jobs, parts, plans, recuts } from '@/db/schema';
+import { customers, jobs, parts, plans, recuts } from '@/db/schema';
 import { readPlan } from '@/lib/nesting';
 import { recutLabel } from '@/lib/recuts/recuts';
 import { stockPieceName } from '@/lib/nesting/saw-order';
@@ -44,7 +44,7 @@ async function recutAsPart(db: Db, shopId: string, id: string) {
 
 async function partPage(db: Db, shopId: string, part: typeof parts.$inferSelect, { drafts, recutOf }: { drafts: boolean; recutOf: string | null }) {
   const partId = part.id;
-  const [job] = await db.select({ id: jobs.id, name: jobs.name, customer: jobs.customer }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, part.jobId)));
+  const [job] = await db.select({ id: jobs.id, name: jobs.name, customer: sql<string>`coalesce(${customers.name}, '')` }).from(jobs).leftJoin(customers, eq(customers.id, jobs.customerId)).where(and(eq(jobs.shopId, shopId), eq(jobs.id, part.jobId)));
   const rows = await db
     .select({ id: plans.id, name: plans.name, status: plans.status, document: plans.document, updatedAt: plans.updatedAt })
     .from(plans)

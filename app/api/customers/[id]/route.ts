@@ -1,0 +1,20 @@
+import { deleteCustomer, getCustomer, updateCustomer } from '@/db/queries/customers';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { customerPatchSchema } from '@/shared/schemas/customer';
+
+// GET /api/customers/:id – one customer with their jobs
+export const GET = route({ permission: 'customers:read', params: idParams }, async ({ db, user, params }) => {
+  return (await getCustomer(db, user.shopId, params.id)) ?? Promise.reject(notFound('That customer'));
+});
+
+// PATCH /api/customers/:id – change a customer's details (only the fields sent)
+export const PATCH = route({ permission: 'customers:write', params: idParams, body: customerPatchSchema }, async ({ db, user, params, body }) => {
+  return (await updateCustomer(db, user.shopId, user.id, params.id, body)) ?? Promise.reject(notFound('That customer'));
+});
+
+// DELETE /api/customers/:id – delete a customer no job belongs to (409 while jobs do)
+export const DELETE = route({ permission: 'customers:write', params: idParams }, async ({ db, user, params }) => {
+  if (!(await deleteCustomer(db, user.shopId, user.id, params.id))) throw notFound('That customer');
+  return { ok: true };
+});

@@ -1,0 +1,16 @@
+import { getJob } from '@/db/queries/jobs';
+import { createQuote, listJobQuotes } from '@/db/queries/quotes';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { newQuoteSchema } from '@/shared/schemas/quote';
+
+// GET /api/jobs/:id/quotes – every revision of the job's quotes, with totals, cost and margin (estimator's view)
+export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ db, user, params }) => {
+  if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
+  return listJobQuotes(db, user.shopId, params.id);
+});
+
+// POST /api/jobs/:id/quotes – a new quote (next number, rev A) built from the job and one of its plans
+export const POST = route({ permission: 'quotes:write', params: idParams, body: newQuoteSchema, status: 201 }, async ({ db, user, params, body }) =>
+  createQuote(db, user.shopId, user.id, params.id, body.planId),
+);

@@ -1,0 +1,43 @@
+import { eq } from 'drizzle-orm';
+import { customers } from '@/db/schema';
+import { getJob } from '@/db/queries/jobs';
+import { getRevision } from '@/db/queries/quotes';
+import { getShopSettings } from '@/db/queries/shops';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { quotePdf } from '@/lib/quotes/quote-pdf';
+import { pdfFileName } from '@/lib/saw-order/pdf-text';
+
+// GET /api/quotes/:id/pdf – the customer's copy of a quote revision as a PDF (prices only: no cost, margin or hours)
+export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ db, user, params }) => {
+  const revision = await getRevision(db, user.shopId, params.id);
+  if (!revision) throw notFound('That quote');
+  const [job, shop] = await Promise.all([getJob(db, user.shopId, revision.jobId), getShopSettings(db, user.shopId)]);
+  if (!job || !shop) throw notFound('That quote');
+  const [customer] = job.customerId ? await db.select().from(customers).where(eq(customers.id, job.customerId)) : [];
+  const bytes = await quotePdf({
+    shop: { name: shop.name },
+    title: revision.title,
+    issued: (revision.sentAt ?? revision.createdAt).slice(0, 10),
+    validUntil: revision.validUntil,
+    validityDays: revision.validityDays,
+    customer: customer ?? null,
+    jobName: job.name,
+    currency: revision.currency,
+    lines: revision.lines,
+    totals: revision.totals,
+    taxPercent: revision.taxPercent,
+    depositPercent: revision.depositPercent,
+    terms: revision.terms,
+    // The customer's page comes with sending by link (not built yet): no link, no QR code.
+    customerLink: null,
+    pageSize: shop.units.system === 'metric' ? 'A4' : 'LETTER',
+  });
+  return new Response(new Uint8Array(bytes), {
+    headers: {
+      'content-type': 'application/pdf',
+      'content-disposition': `attachment; filename="${pdfFileName(`${revision.title} ${job.name}`)}.pdf"`,
+      'cache-control': 'private, no-store',
+    },
+  });
+});

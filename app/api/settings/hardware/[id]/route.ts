@@ -1,0 +1,15 @@
+import { deleteHardware, updateHardware } from '@/db/queries/pricing';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { hardwareItemSchema } from '@/shared/schemas/pricing';
+
+// PUT /api/settings/hardware/:id – change an item of the price list (owner)
+export const PUT = route({ permission: 'settings:write', params: idParams, body: hardwareItemSchema }, async ({ db, user, params, body }) => {
+  return (await updateHardware(db, user.shopId, user.id, params.id, body)) ?? Promise.reject(notFound('That item'));
+});
+
+// DELETE /api/settings/hardware/:id – take an item off the price list (owner); quotes keep their copied lines
+export const DELETE = route({ permission: 'settings:write', params: idParams }, async ({ db, user, params }) => {
+  if (!(await deleteHardware(db, user.shopId, user.id, params.id))) throw notFound('That item');
+  return { ok: true };
+});

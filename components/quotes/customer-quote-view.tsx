@@ -1,0 +1,62 @@
+import { formatMoney } from '@/lib/costing/money';
+import type { QuoteTotals } from '@/lib/costing/quote-totals';
+import type { QuoteLine } from '@/shared/schemas/quote';
+
+export interface CustomerQuoteProps {
+  shopName: string;
+  title: string;
+  customer: string;
+  jobName: string;
+  currency: string;
+  lines: QuoteLine[];
+  totals: QuoteTotals;
+  taxPercent: number;
+  depositPercent: number;
+  validityDays: number;
+  validUntil: string | null;
+  terms: string;
+}
+
+/** The quote as the customer reads it: prices only, never cost, markup, margin or hours. */
+export function CustomerQuoteView(q: CustomerQuoteProps) {
+  const money = (m: number) => formatMoney(m, q.currency);
+  const t = q.totals;
+  return (
+    <article className="card p-5" aria-label="The customer’s copy">
+      <header className="mb-4 flex flex-wrap justify-between gap-2">
+        <div>
+          <p className="text-xs uppercase tracking-wide text-graphite-mute">{q.shopName}</p>
+          <h3 className="text-lg font-semibold">{q.title}</h3>
+          <p className="text-sm text-graphite-soft">{q.jobName}{q.customer ? ` · for ${q.customer}` : ''}</p>
+        </div>
+        <p className="text-sm text-graphite-mute">{q.validUntil ? `Valid until ${q.validUntil}` : `Valid ${q.validityDays} days from sending`}</p>
+      </header>
+      <div className="overflow-x-auto">
+        <table className="data-table" aria-label="Quote lines">
+          <thead><tr><th>Item</th><th className="num">Qty</th><th>Unit</th><th className="num">Unit price</th><th className="num">Amount</th></tr></thead>
+          <tbody>
+            {q.lines.map((l, i) => (
+              <tr key={l.id}>
+                <td>{l.description}</td>
+                {/* Labour is shown as a sum: hours and rates are the shop's own business. */}
+                <td className="num">{l.kind === 'labour' ? '' : l.quantity}</td>
+                <td>{l.kind === 'labour' ? '' : l.unit}</td>
+                <td className="num">{l.kind === 'labour' ? '' : money(t.lines[i].unitPriceMinor)}</td>
+                <td className="num">{money(t.lines[i].priceMinor)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <dl className="ml-auto mt-4 grid max-w-sm grid-cols-[1fr_auto] gap-x-6 gap-y-1 text-sm">
+        <dt>Subtotal</dt><dd className="num">{money(t.subtotalMinor)}</dd>
+        {t.discountMinor > 0 && (<><dt>Discount</dt><dd className="num">−{money(t.discountMinor)}</dd></>)}
+        {q.taxPercent > 0 && (<><dt>Sales tax ({q.taxPercent} %)</dt><dd className="num">{money(t.taxMinor)}</dd></>)}
+        <dt className="font-semibold">Total</dt><dd className="num font-semibold" data-testid="quote-total">{money(t.totalMinor)}</dd>
+        <dt>Deposit on acceptance ({q.depositPercent} %)</dt><dd className="num" data-testid="quote-deposit">{money(t.depositMinor)}</dd>
+        <dt>Balance</dt><dd className="num">{money(t.balanceMinor)}</dd>
+      </dl>
+      {q.terms && <p className="mt-4 whitespace-pre-line text-xs text-graphite-soft">{q.terms}</p>}
+    </article>
+  );
+}

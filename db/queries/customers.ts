@@ -1,0 +1,117 @@
+import { and, asc, desc, eq, ilike, or, sql } from 'drizzle-orm';
+import type { Db } from '../open';
+import { customers, jobs } from '../schema';
+import { HttpError } from '@/lib/api/errors';
+import type { Customer, CustomerInput, CustomerPatch } from '@/shared/schemas/customer';
+import type { JobStatus } from '@/shared/schemas/job';
+import { recordAudit } from './audit';
+
+type CustomerRow = typeof customers.$inferSelect;
+
+const toCustomer = (row: CustomerRow, jobCount: number): Customer => ({
+  id: row.id,
+  name: row.name,
+  company: row.company,
+  email: row.email,
+  phone: row.phone,
+  billingAddress: row.billingAddress,
+  siteAddress: row.siteAddress,
+  notes: row.notes,
+  jobCount,
+  createdAt: row.createdAt.toISOString(),
+  updatedAt: row.updatedAt.toISOString(),
+});
+
+// Written out in full: inside the subquery an unqualified "id" would be the job's.
+const jobCount = sql<number>`(select count(*)::int from "jobs" as j where j."customer_id" = "customers"."id")`;
+
+/** Escapes LIKE's wildcards, so a search for "50%" finds "50%" and not everything. */
+const likeText = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+
+/** The shop's customers by name; a search matches name, company, e-mail or phone (any case). */
+export async function listCustomers(db: Db, shopId: string, search = ''): Promise<Customer[]> {
+  const text = search.trim();
+  const match = text ? or(...[customers.name, customers.company, customers.email, customers.phone].map((c) => ilike(c, likeText(text)))) : undefined;
+  const rows = await db.select({ row: customers, jobCount }).from(customers).where(and(eq(customers.shopId, shopId), match)).orderBy(asc(sql`lower(${customers.name})`), asc(customers.id));
+  return rows.map((r) => toCustomer(r.row, Number(r.jobCount)));
+}
+
+export interface CustomerJob {
+  id: string;
+  name: string;
+  status: JobStatus;
+  dueDate: string | null;
+  updatedAt: string;
+}
+
+export async function getCustomer(db: Db, shopId: string, id: string): Promise<(Customer & { jobs: CustomerJob[] }) | null> {
+  const [found] = await db.select({ row: customers, jobCount }).from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, id)));
+  if (!found) return null;
+  const jobRows = await db
+    .select({ id: jobs.id, name: jobs.name, status: jobs.status, dueDate: jobs.dueDate, updatedAt: jobs.updatedAt })
+    .from(jobs)
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.customerId, id)))
+    .orderBy(desc(jobs.updatedAt), asc(jobs.id));
+  return { ...toCustomer(found.row, Number(found.jobCount)), jobs: jobRows.map((j) => ({ ...j, updatedAt: j.updatedAt.toISOString() })) };
+}
+
+export async function createCustomer(db: Db, shopId: string, userId: string, input: CustomerInput): Promise<Customer> {
+  const row = await db.transaction(async (tx) => {
+    const [created] = await tx.insert(customers).values({ ...input, shopId }).returning();
+    await recordAudit(tx, { shopId, userId, action: 'create', entity: 'customer', entityId: created.id, data: { name: input.name } });
+    return created;
+  });
+  return toCustomer(row, 0);
+}
+
+export async function updateCustomer(db: Db, shopId: string, userId: string, id: string, patch: CustomerPatch): Promise<Customer | null> {
+  const done = await db.transaction(async (tx) => {
+    const [current] = await tx.select().from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, id))).for('update');
+    if (!current) return false;
+    const changes = Object.fromEntries(Object.entries(patch).filter(([k, v]) => v !== undefined && v !== current[k as keyof CustomerRow]).map(([k, v]) => [k, { from: current[k as keyof CustomerRow], to: v }]));
+    if (!Object.keys(changes).length) return true;
+    await tx.update(customers).set({ ...Object.fromEntries(Object.entries(changes).map(([k, c]) => [k, c.to])), updatedAt: new Date() }).where(eq(customers.id, id));
+    await recordAudit(tx, { shopId, userId, action: 'update', entity: 'customer', entityId: id, data: { changes } });
+    return true;
+  });
+  if (!done) return null;
+  const found = await getCustomer(db, shopId, id);
+  if (!found) return null;
+  const { jobs: _jobs, ...customer } = found;
+  return customer;
+}
+
+/** Deletes a customer no job belongs to; one with jobs is kept (409), so no job loses who it is for. */
+export async function deleteCustomer(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
+  return db.transaction(async (tx) => {
+    const [current] = await tx.select().from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, id))).for('update');
+    if (!current) return false;
+    const [{ n }] = await tx.select({ n: sql<number>`count(*)::int` }).from(jobs).where(eq(jobs.customerId, id));
+    if (Number(n) > 0) throw new HttpError(409, `${current.name} has ${n} job${Number(n) === 1 ? '' : 's'}: move them to another customer first.`);
+    await tx.delete(customers).where(eq(customers.id, id));
+    await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'customer', entityId: id, data: { name: current.name } });
+    return true;
+  });
+}
+
+/** Name spelled the way the migration compares them: trimmed, runs of spaces made one. */
+export const tidyName = (name: string) => name.trim().replace(/\s+/g, ' ');
+
+/**
+ * The customer a job form picked: an existing one by id (of this shop, or 422), or by name — the shop's customer of
+ * that name (letter case ignored) or a new one. Runs inside the job's transaction.
+ */
+export async function resolveCustomer(tx: Db, shopId: string, userId: string, choice: { id: string } | { name: string } | null): Promise<string | null> {
+  if (choice === null) return null;
+  if ('id' in choice) {
+    const [found] = await tx.select({ id: customers.id }).from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, choice.id)));
+    if (!found) throw new HttpError(422, 'That customer was not found.', { customer: ['Pick one of the shop’s customers.'] });
+    return found.id;
+  }
+  const name = tidyName(choice.name);
+  const [found] = await tx.select({ id: customers.id }).from(customers).where(and(eq(customers.shopId, shopId), sql`lower(${customers.name}) = lower(${name})`)).orderBy(asc(customers.createdAt)).limit(1);
+  if (found) return found.id;
+  const [created] = await tx.insert(customers).values({ shopId, name }).returning({ id: customers.id });
+  await recordAudit(tx, { shopId, userId, action: 'create', entity: 'customer', entityId: created.id, data: { name } });
+  return created.id;
+}

@@ -1,0 +1,280 @@
+import { and, desc, eq, ne, sql } from 'drizzle-orm';
+import type { Db } from '../open';
+import { jobs, parts, plans, quoteRevisions, quotes, shops } from '../schema';
+import { conflict, HttpError, notFound } from '@/lib/api/errors';
+import { quoteTotals, type QuoteTotals } from '@/lib/costing/quote-totals';
+import { boxFromOpening } from '@/lib/joinery/box-from-opening';
+import { requiredSetupCards, SETUP_CARD_TOLERANCE_MM } from '@/lib/joinery/setup-cards';
+import { planTotals } from '@/lib/nesting/figures';
+import { readPlan } from '@/lib/nesting';
+import { buildQuoteLines, type SlideNeed } from '@/lib/quotes/build-lines';
+import { quoteLength, quoteNominal } from '@/lib/quotes/quote-text';
+import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
+import { quoteNumberText, revisionLetter, type QuoteRevisionPatch } from '@/shared/schemas/quote';
+import { recordAudit } from './audit';
+import { listDrawerSchedules } from './drawer-schedules';
+import { syncJobStatus } from './job-status';
+import { getPricing, listHardware } from './pricing';
+import { getShopSettings } from './shops';
+import { getTakeoff } from './takeoff';
+
+type RevisionRow = typeof quoteRevisions.$inferSelect;
+
+export interface QuoteRevisionView {
+  id: string;
+  quoteId: string;
+  jobId: string;
+  /** Q-0007 rev B */
+  title: string;
+  number: string;
+  revision: string;
+  status: RevisionRow['status'];
+  latest: boolean;
+  planId: string | null;
+  currency: string;
+  lines: RevisionRow['lines'];
+  markupMaterialPercent: number;
+  markupHardwarePercent: number;
+  discount: RevisionRow['discount'];
+  taxPercent: number;
+  depositPercent: number;
+  validityDays: number;
+  terms: string;
+  sentAt: string | null;
+  /** The last day the quote holds (sent date + validity), once sent. */
+  validUntil: string | null;
+  createdAt: string;
+  totals: QuoteTotals;
+}
+
+/** A revision's totals, by the rules of lib/costing/RULES.md. */
+export function revisionTotals(r: Pick<RevisionRow, 'currency' | 'lines' | 'markupMaterialPercent' | 'markupHardwarePercent' | 'discount' | 'taxPercent' | 'depositPercent'>): QuoteTotals {
+  return quoteTotals({
+    currency: r.currency,
+    lines: r.lines,
+    markupPercent: { material: r.markupMaterialPercent, hardware: r.markupHardwarePercent },
+    discount: r.discount,
+    taxPercent: r.taxPercent,
+    depositPercent: r.depositPercent,
+  });
+}
+
+const addDays = (d: Date, days: number) => new Date(d.getTime() + days * 86_400_000).toISOString().slice(0, 10);
+
+function toView(r: RevisionRow, number: number, latestRevision: number): QuoteRevisionView {
+  return {
+    id: r.id,
+    quoteId: r.quoteId,
+    jobId: r.jobId,
+    title: `${quoteNumberText(number)} rev ${revisionLetter(r.revision)}`,
+    number: quoteNumberText(number),
+    revision: revisionLetter(r.revision),
+    status: r.status,
+    latest: r.revision === latestRevision,
+    planId: r.planId,
+    currency: r.currency,
+    lines: r.lines,
+    markupMaterialPercent: r.markupMaterialPercent,
+    markupHardwarePercent: r.markupHardwarePercent,
+    discount: r.discount,
+    taxPercent: r.taxPercent,
+    depositPercent: r.depositPercent,
+    validityDays: r.validityDays,
+    terms: r.terms,
+    sentAt: r.sentAt?.toISOString() ?? null,
+    validUntil: r.sentAt ? addDays(r.sentAt, r.validityDays) : null,
+    createdAt: r.createdAt.toISOString(),
+    totals: revisionTotals(r),
+  };
+}
+
+const latestOf = (tx: Db, quoteId: string) =>
+  tx.select({ n: sql<number>`max(${quoteRevisions.revision})`.mapWith(Number) }).from(quoteRevisions).where(eq(quoteRevisions.quoteId, quoteId));
+
+export async function getRevision(db: Db, shopId: string, revisionId: string): Promise<QuoteRevisionView | null> {
+  const [row] = await db
+    .select({ r: quoteRevisions, number: quotes.number })
+    .from(quoteRevisions)
+    .innerJoin(quotes, eq(quotes.id, quoteRevisions.quoteId))
+    .where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.id, revisionId)));
+  if (!row) return null;
+  const [latest] = await latestOf(db, row.r.quoteId);
+  return toView(row.r, row.number, latest.n);
+}
+
+/** Every revision of a job's quotes, newest quote first and its latest revision first. */
+export async function listJobQuotes(db: Db, shopId: string, jobId: string): Promise<QuoteRevisionView[]> {
+  const rows = await db
+    .select({ r: quoteRevisions, number: quotes.number })
+    .from(quoteRevisions)
+    .innerJoin(quotes, eq(quotes.id, quoteRevisions.quoteId))
+    .where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.jobId, jobId)))
+    .orderBy(desc(quotes.number), desc(quoteRevisions.revision));
+  const latest = new Map<string, number>();
+  for (const { r } of rows) latest.set(r.quoteId, Math.max(latest.get(r.quoteId) ?? 0, r.revision));
+  return rows.map(({ r, number }) => toView(r, number, latest.get(r.quoteId)!));
+}
+
+/** The customer's quotes: the latest revision of each quote on any of their jobs. */
+export async function listCustomerQuotes(db: Db, shopId: string, customerId: string) {
+  const rows = await db
+    .select({ r: quoteRevisions, number: quotes.number, jobName: jobs.name })
+    .from(quoteRevisions)
+    .innerJoin(quotes, eq(quotes.id, quoteRevisions.quoteId))
+    .innerJoin(jobs, eq(jobs.id, quoteRevisions.jobId))
+    .where(and(eq(quoteRevisions.shopId, shopId), eq(jobs.customerId, customerId), sql`${quoteRevisions.revision} = (select max(r2.revision) from "quote_revisions" r2 where r2.quote_id = ${quoteRevisions.quoteId})`))
+    .orderBy(desc(quotes.number));
+  return rows.map(({ r, number, jobName }) => ({ ...toView(r, number, r.revision), jobName }));
+}
+
+/** Pairs of slides by kind and length, setup cards, boxes and joint corners from the job's drawer schedules. */
+async function drawerFacts(db: Db, shopId: string, jobId: string, describe: (mm: number) => string) {
+  const schedules = await listDrawerSchedules(db, shopId, jobId);
+  const slides = new Map<string, SlideNeed>();
+  const cards: { joint: string; stockThicknessMm: number }[] = [];
+  let boxes = 0;
+  for (const saved of schedules) {
+    const s = drawerScheduleSchema.safeParse(saved.input);
+    if (!s.success) continue;
+    boxes += s.data.quantity;
+    for (const key of requiredSetupCards(s.data)) {
+      if (!cards.some((c) => c.joint === key.joint && Math.abs(c.stockThicknessMm - key.stockThicknessMm) <= SETUP_CARD_TOLERANCE_MM)) cards.push(key);
+    }
+    const box = boxFromOpening(s.data);
+    if (!box.ok || box.slideLengthMm === null || s.data.slide.type === 'none' || s.data.slide.type === 'wooden-runners') continue;
+    const kind = s.data.slide.model?.name ?? (s.data.slide.type === 'side-mount' ? 'Side-mount slides' : 'Undermount slides');
+    const key = `${kind}|${box.slideLengthMm}`;
+    const need = slides.get(key) ?? { kind, lengthMm: box.slideLengthMm, lengthText: describe(box.slideLengthMm), pairs: 0 };
+    need.pairs += s.data.quantity;
+    slides.set(key, need);
+  }
+  // A drawer box has four corners (two at the front, two at the back): common practice, no source.
+  return { slides: [...slides.values()], setupCards: cards.length, drawerBoxes: boxes, jointCorners: boxes * 4 };
+}
+
+/** Makes a job's new quote (the shop's next number, rev A) with lines built from the job and, if named, one of its plans. */
+export async function createQuote(db: Db, shopId: string, userId: string, jobId: string, planId: string | null): Promise<QuoteRevisionView> {
+  const [job] = await db.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
+  if (!job) throw notFound('That job');
+  if (planId) {
+    const [plan] = await db.select({ id: plans.id }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), eq(plans.id, planId), ne(plans.status, 'cancelled')));
+    if (!plan) throw new HttpError(422, 'That plan is not one of this job’s (or it was cancelled).', { planId: ['Pick one of the job’s plans.'] });
+  }
+  const [settings, priced, hardware] = await Promise.all([getShopSettings(db, shopId), getPricing(db, shopId), listHardware(db, shopId)]);
+  if (!settings || !priced) throw notFound('The shop');
+  const { pricing, currency } = priced;
+  const describe = (mm: number) => quoteLength(mm, settings.units);
+  const [takeoff, drawers, [faces]] = await Promise.all([
+    planId ? getTakeoff(db, shopId, jobId, planId) : null,
+    drawerFacts(db, shopId, jobId, describe),
+    db.select({ mm2: sql<number>`coalesce(sum(2 * ${parts.lengthMm} * ${parts.widthMm} * ${parts.quantity}), 0)`.mapWith(Number) }).from(parts).where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId))),
+  ]);
+  let cuts = 0;
+  let piecesHandled = 0;
+  if (planId) {
+    const [row] = await db.select({ document: plans.document }).from(plans).where(eq(plans.id, planId));
+    const totals = planTotals(readPlan(row.document).pieces);
+    cuts = totals.cuts;
+    piecesHandled = totals.pieces;
+  }
+  const lines = buildQuoteLines({
+    takeoff: takeoff ? { lines: [...takeoff.pull, ...takeoff.buy], allowancePercent: takeoff.allowancePercent, allowanceCents: takeoff.totals.allowanceCents } : null,
+    slides: drawers.slides,
+    // Both faces of every part in the cut list.
+    counts: { cuts, piecesHandled, setupCards: drawers.setupCards, jointCorners: drawers.jointCorners, drawerBoxes: drawers.drawerBoxes, faceAreaMm2: faces?.mm2 ?? 0 },
+    pricing,
+    hardware,
+    describeSize: (t) => `${t.material} ${t.nominalThickness ? quoteNominal(t.nominalThickness) : describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
+  });
+
+  const id = await db.transaction(async (tx) => {
+    // The shop row is locked so two quotes made at once never take one number.
+    await tx.select({ id: shops.id }).from(shops).where(eq(shops.id, shopId)).for('update');
+    const [{ next }] = await tx.select({ next: sql<number>`coalesce(max(${quotes.number}), 0) + 1`.mapWith(Number) }).from(quotes).where(eq(quotes.shopId, shopId));
+    const [quote] = await tx.insert(quotes).values({ shopId, jobId, number: next }).returning();
+    const [rev] = await tx
+      .insert(quoteRevisions)
+      .values({
+        shopId,
+        quoteId: quote.id,
+        jobId,
+        revision: 0,
+        planId,
+        currency,
+        lines,
+        markupMaterialPercent: pricing.markupPercent.material,
+        markupHardwarePercent: pricing.markupPercent.hardware,
+        discount: { kind: 'percent', percent: 0 },
+        taxPercent: pricing.taxPercent,
+        depositPercent: pricing.depositPercent,
+        validityDays: pricing.validityDays,
+        terms: pricing.terms,
+        createdBy: userId,
+      })
+      .returning({ id: quoteRevisions.id });
+    await recordAudit(tx, { shopId, userId, action: 'create', entity: 'quote', entityId: quote.id, data: { number: next, jobId, planId, lines: lines.length } });
+    return rev.id;
+  });
+  return (await getRevision(db, shopId, id))!;
+}
+
+/** Locks a revision of this shop for a change. */
+async function lockRevision(tx: Db, shopId: string, revisionId: string) {
+  const [row] = await tx.select().from(quoteRevisions).where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.id, revisionId))).for('update');
+  if (!row) throw notFound('That quote');
+  return row;
+}
+
+/** Changes a draft's lines and figures; a sent or replaced revision is kept as it was sent (409: make a new revision). */
+export async function updateRevision(db: Db, shopId: string, userId: string, revisionId: string, patch: QuoteRevisionPatch): Promise<QuoteRevisionView> {
+  await db.transaction(async (tx) => {
+    const row = await lockRevision(tx, shopId, revisionId);
+    if (row.status !== 'draft') throw conflict('This revision was sent and stays as the customer has it: make a new revision to change it.');
+    const next = { ...row, ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)) } as RevisionRow;
+    if (new Set(next.lines.map((l) => l.id)).size !== next.lines.length) throw new HttpError(422, 'Two lines share an id.', { lines: ['Each line needs its own id.'] });
+    try {
+      revisionTotals(next);
+    } catch (e) {
+      if (e instanceof RangeError) throw new HttpError(422, e.message, { _: [e.message] });
+      throw e;
+    }
+    await tx.update(quoteRevisions).set({ ...patch, updatedAt: new Date() }).where(eq(quoteRevisions.id, revisionId));
+    await recordAudit(tx, { shopId, userId, action: 'update', entity: 'quote-revision', entityId: revisionId, data: { fields: Object.keys(patch) } });
+  });
+  return (await getRevision(db, shopId, revisionId))!;
+}
+
+/** A new revision (B after A…) copied from the latest one, as a draft; refused while the latest is still a draft. */
+export async function newRevision(db: Db, shopId: string, userId: string, quoteId: string): Promise<QuoteRevisionView> {
+  const id = await db.transaction(async (tx) => {
+    const [quote] = await tx.select().from(quotes).where(and(eq(quotes.shopId, shopId), eq(quotes.id, quoteId))).for('update');
+    if (!quote) throw notFound('That quote');
+    const [latest] = await tx.select().from(quoteRevisions).where(eq(quoteRevisions.quoteId, quoteId)).orderBy(desc(quoteRevisions.revision)).limit(1);
+    if (latest.status === 'draft') throw conflict(`Rev ${revisionLetter(latest.revision)} is still a draft: change it instead of making another.`);
+    const { id: _id, createdAt: _c, updatedAt: _u, sentAt: _s, status: _st, ...copy } = latest;
+    const [rev] = await tx.insert(quoteRevisions).values({ ...copy, revision: latest.revision + 1, status: 'draft', createdBy: userId }).returning({ id: quoteRevisions.id });
+    await recordAudit(tx, { shopId, userId, action: 'create', entity: 'quote-revision', entityId: rev.id, data: { quoteId, revision: revisionLetter(latest.revision + 1) } });
+    return rev.id;
+  });
+  return (await getRevision(db, shopId, id))!;
+}
+
+/**
+ * Marks the latest revision sent (the e-mail is wired in later): an earlier sent revision is replaced, and a job
+ * still quoting becomes quoted. Only the latest revision can be sent, and only once.
+ */
+export async function sendRevision(db: Db, shopId: string, userId: string, revisionId: string): Promise<QuoteRevisionView> {
+  await db.transaction(async (tx) => {
+    const row = await lockRevision(tx, shopId, revisionId);
+    const [latest] = await latestOf(tx, row.quoteId);
+    if (row.revision !== latest.n) throw conflict(`Only the latest revision can be sent: this is rev ${revisionLetter(row.revision)}, the latest is rev ${revisionLetter(latest.n)}.`);
+    if (row.status !== 'draft') throw conflict('This revision was already sent.');
+    if (row.lines.length === 0) throw new HttpError(422, 'A quote with no lines cannot be sent.');
+    await tx.update(quoteRevisions).set({ status: 'replaced', updatedAt: new Date() }).where(and(eq(quoteRevisions.quoteId, row.quoteId), eq(quoteRevisions.status, 'sent')));
+    await tx.update(quoteRevisions).set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() }).where(eq(quoteRevisions.id, revisionId));
+    await recordAudit(tx, { shopId, userId, action: 'send', entity: 'quote-revision', entityId: revisionId, data: { total: revisionTotals(row).totalMinor } });
+    await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: 'quote sent' });
+  });
+  return (await getRevision(db, shopId, revisionId))!;
+}
+

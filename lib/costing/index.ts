@@ -1,0 +1,3 @@
+export * from './money';
+export * from './quote-totals';
+export * from './labour';
