@@ -1,14 +1,37 @@
 import 'server-only';
 import type { NextRequest } from 'next/server';
+import { HttpError } from './errors';
+import { clientAddress, limit, spend, tooManyAttempts } from './limit';
 
 /** The public routes that may be hammered from outside: asking for a reset link, and using a link's token. */
 export type ThrottledAction = 'password-reset-request' | 'link-use';
 
 /**
- * THE place where throttling of the public (signed-out) routes plugs in: every such route calls this first, with
- * the request and what it is about to do. It lets everything through for now; the shop's rate limiter (from the
- * web-edge work) goes here, throwing `new HttpError(429, …)` when a caller has asked too often.
+ * Where the public (signed-out) routes meet the shop's rate limiter (lib/api/limit.ts; counts shared by every app
+ * server on PostgreSQL). Each such route calls this first:
+ * - a reset link may be asked for an address 5 times an hour (every request counts; the answer is the same whether
+ *   the address has an account or not, so the limit does not tell either);
+ * - a client address may try links that do not work (unknown, used, expired) 10 times in 15 minutes: a person with a
+ *   good link never meets the limit, a guesser does (`countFailedLinkUse` counts the failures).
  */
-export async function throttlePublicRequest(_req: NextRequest, _action: ThrottledAction, _key?: string): Promise<void> {
-  // No limiter yet: see above.
+export async function throttlePublicRequest(req: NextRequest, action: ThrottledAction, key?: string): Promise<void> {
+  if (action === 'password-reset-request') {
+    const email = `email:${(key ?? '').trim().toLowerCase()}`;
+    const state = await limit('password-reset', email);
+    if (state.blocked) throw tooManyAttempts(state, 'reset requests for this address');
+    await spend('password-reset', email);
+    return;
+  }
+  const state = await limit('invite-accept', `address:${clientAddress(req.headers)}`);
+  if (state.blocked) throw tooManyAttempts(state, 'tries with links that do not work');
+}
+
+/** Runs a link's use, counting it against the client's address when the link does not work (404 or 410). */
+export async function countingFailedLinks<T>(req: NextRequest, use: () => Promise<T>): Promise<T> {
+  try {
+    return await use();
+  } catch (error) {
+    if (error instanceof HttpError && (error.status === 404 || error.status === 410)) await spend('invite-accept', `address:${clientAddress(req.headers)}`);
+    throw error;
+  }
 }

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { LINK_TOKEN, useLink } from '@/db/queries/user-links';
 import { ANYONE, route } from '@/lib/api/route';
-import { throttlePublicRequest } from '@/lib/api/throttle';
+import { countingFailedLinks, throttlePublicRequest } from '@/lib/api/throttle';
 import { newPasswordSchema } from '@/shared/schemas/user';
 
 // POST /api/invites/:token – public: accept a team invite by choosing a password (the link works once)
@@ -9,6 +9,6 @@ export const POST = route(
   { permission: ANYONE, params: z.object({ token: z.string().regex(LINK_TOKEN) }), body: newPasswordSchema },
   async ({ req, db, params, body }) => {
     await throttlePublicRequest(req, 'link-use');
-    return useLink(db, 'invite', params.token, body.password);
+    return countingFailedLinks(req, () => useLink(db, 'invite', params.token, body.password));
   },
 );
