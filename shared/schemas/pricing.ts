@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 
 /** How a quote values the offcuts a plan uses: at the area share of their stock's cost, or free (already paid for). */
 export const OFFCUT_VALUATIONS = ['area-cost', 'free'] as const;
@@ -40,7 +41,7 @@ export const pricingSettingsSchema = z.object({
   taxable: z.object({ material: z.boolean(), hardware: z.boolean(), labour: z.boolean() }),
   depositPercent: percent('The deposit', 100),
   validityDays: z.number({ error: 'Validity is a number of days.' }).int('Validity is whole days.').min(1, 'A quote is valid at least a day.').max(365, 'Validity over a year looks like a typo.'),
-  terms: z.string().max(4000, 'Keep the terms under 4,000 characters.'),
+  terms: text({ multiline: true }).max(4000, 'Keep the terms under 4,000 characters.'),
   offcutValuation: z.enum(OFFCUT_VALUATIONS, { error: 'Offcuts are valued at area cost or free.' }),
 });
 export type PricingSettings = z.infer<typeof pricingSettingsSchema>;
@@ -68,8 +69,8 @@ export const DEFAULT_PRICING: PricingSettings = {
 
 /** One item of the shop's hardware price list (slides, hinges, pulls, fasteners). */
 export const hardwareItemSchema = z.object({
-  name: z.string().trim().min(1, 'Name the item.').max(120, 'Keep the name under 120 characters.'),
-  unit: z.string().trim().min(1, 'Give the unit (each, pair, box of 100…).').max(30, 'Keep the unit under 30 characters.'),
+  name: text().min(1, 'Name the item.').max(120, 'Keep the name under 120 characters.'),
+  unit: text().min(1, 'Give the unit (each, pair, box of 100…).').max(30, 'Keep the unit under 30 characters.'),
   priceMinor: minorAmount('The price'),
 });
 export type HardwareItemInput = z.infer<typeof hardwareItemSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { text } from './text';
 import { LINE_KINDS } from '@/lib/costing/quote-totals';
 import { minorAmount } from './pricing';
 
@@ -8,14 +9,14 @@ const decimals = (places: number) => (v: number) => Math.abs(Math.round(v * 10 *
 export const quoteLineSchema = z.object({
   id: z.string().min(1).max(40),
   kind: z.enum(LINE_KINDS, { error: 'A line is material, hardware, labour or other.' }),
-  description: z.string().trim().min(1, 'Describe the line.').max(200, 'Keep the description under 200 characters.'),
+  description: text().min(1, 'Describe the line.').max(200, 'Keep the description under 200 characters.'),
   quantity: z.number({ error: 'The quantity is a number.' }).min(0, 'The quantity cannot be negative.').max(1_000_000, 'That quantity looks like a typo.').refine(decimals(3), 'The quantity takes at most three decimals.'),
-  unit: z.string().trim().max(20, 'Keep the unit under 20 characters.'),
+  unit: text().max(20, 'Keep the unit under 20 characters.'),
   /** Cost of one unit in minor units (labour: the hourly rate). */
   unitCostMinor: minorAmount('The unit cost'),
   taxable: z.boolean(),
   /** Where the line came from or what to check, for the estimator only (never on the customer's copy). */
-  note: z.string().max(300).default(''),
+  note: text({ multiline: true }).max(300).default(''),
 });
 export type QuoteLine = z.infer<typeof quoteLineSchema>;
 
@@ -36,7 +37,7 @@ export const quoteRevisionPatchSchema = z.strictObject({
   taxPercent: percent('Sales tax', 30).optional(),
   depositPercent: percent('The deposit', 100).optional(),
   validityDays: z.number().int('Whole days.').min(1, 'At least a day.').max(365, 'Over a year looks like a typo.').optional(),
-  terms: z.string().max(4000, 'Keep the terms under 4,000 characters.').optional(),
+  terms: text({ multiline: true }).max(4000, 'Keep the terms under 4,000 characters.').optional(),
 });
 export type QuoteRevisionPatch = z.infer<typeof quoteRevisionPatchSchema>;
 

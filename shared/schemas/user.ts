@@ -5,7 +5,9 @@ import { ROLES } from '@/lib/auth/permissions';
 const password = z
   .string()
   .min(10, 'Use at least 10 characters for the password.')
-  .max(200, 'Keep the password under 200 characters.');
+  .max(200, 'Keep the password under 200 characters.')
+  // Spaces and any printable character are welcome; invisible control characters (NUL…) are a slip, never typed.
+  .refine((s) => !/[\u0000-\u001F\u007F-\u009F]/.test(s), 'A password cannot hold control characters (such as NUL).');
 
 /** A new person: with a first password the owner hands over, or (no password) an invite by mail to choose one. */
 export const teamMemberInputSchema = z.object({
