@@ -194,26 +194,37 @@ export async function stockValueReport(db: Db, f: ReportFilter) {
   const starts = [...periods.map((p) => (p < f.from ? f.from : p)), nextDay(f.to)];
   // A sub-select, so the array is built once for the query rather than for every row.
   const bounds = sql`(select array[${sql.join(starts.map((d) => dayStart(d, f.timeZone)), sql`, `)}])`;
-  const [changes, items, racked] = await Promise.all([
+  const [changes, items] = await Promise.all([
     // Each movement put in its period by comparing its time with the periods' starts on the shop's clock
     // (width_bucket: 0 before the range, the opening balance; k for the k-th period), not by converting every row.
+    // Sheets and boards by piece (their cost each is worked out below); offcuts, each with a cost of its own, valued
+    // here and summed by material, so the shop's whole rack history is never read into memory.
     db.execute(sql`
-      select width_bucket(m.created_at, ${bounds}) as bucket, coalesce(m.stock_item_id, m.offcut_id) as piece,
-             sum(m.quantity)::int as on_hand, sum(m.reserved_change)::int as reserved
-        from stock_movements m
+      select width_bucket(m.created_at, ${bounds}) as bucket, m.stock_item_id as item, o.material as offcut_material,
+             sum(m.quantity)::int as on_hand, sum(m.reserved_change)::int as reserved,
+             coalesce(sum(m.quantity * o.cost_cents), 0)::float8 as offcut_value, coalesce(sum(m.reserved_change * o.cost_cents), 0)::float8 as offcut_reserved
+        from stock_movements m left join offcuts o on o.id = m.offcut_id
        where m.shop_id = ${f.shopId} and m.created_at < ${dayStart(f.to, f.timeZone)} + interval '1 day'
-       group by 1, 2`),
+       group by 1, 2, 3`),
     db.select().from(stockItems).where(eq(stockItems.shopId, f.shopId)),
-    db.select({ id: offcuts.id, material: offcuts.material, costCents: offcuts.costCents }).from(offcuts).where(eq(offcuts.shopId, f.shopId)),
   ]);
+  const rows = rowsOf<{ bucket: number; item: string | null; offcut_material: string | null; on_hand: number; reserved: number; offcut_value: number; offcut_reserved: number }>(changes);
+  // Offcuts enter the ledger as one piece per material whose "count" is already in minor units (cost each 1).
+  const offcutKey = (material: string) => `offcuts\u0000${material}`;
+  const offcutMaterials = [...new Set(rows.flatMap((r) => (r.offcut_material === null ? [] : [r.offcut_material])))];
   const pieces = [
     ...items.map((i) => ({ id: i.id, material: i.material, costEach: costEachCents(i) })),
-    ...racked.map((o) => ({ id: o.id, material: o.material, costEach: o.costCents })),
+    ...offcutMaterials.map((m) => ({ id: offcutKey(m), material: m, costEach: 1 })),
   ].filter((p) => !f.material || p.material === f.material);
   const wanted = new Set(pieces.map((p) => p.id));
-  const ledger = rowsOf<{ bucket: number; piece: string; on_hand: number; reserved: number }>(changes)
-    .filter((r) => wanted.has(r.piece))
-    .map((r) => ({ period: periods[Math.max(0, Number(r.bucket) - 1)], pieceId: r.piece, onHand: Number(r.on_hand), reserved: Number(r.reserved) }));
+  const ledger = rows
+    .map((r) => {
+      const period = periods[Math.max(0, Number(r.bucket) - 1)];
+      return r.item !== null
+        ? { period, pieceId: r.item, onHand: Number(r.on_hand), reserved: Number(r.reserved) }
+        : { period, pieceId: offcutKey(r.offcut_material ?? ''), onHand: Number(r.offcut_value), reserved: Number(r.offcut_reserved) };
+    })
+    .filter((r) => wanted.has(r.pieceId));
   const { points, unknownPieces } = stockValueOverTime(periods, ledger, pieces);
   // Low on the rack now: free count at or under the size's low mark.
   const low = items
