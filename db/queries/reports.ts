@@ -2,6 +2,7 @@ import { eq, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { offcuts, stockItems } from '../schema';
 import { periodsBetween, type ReportPeriod } from '@/lib/dates/shop-time';
+import type { OffcutUseFigures } from '@/lib/reports/offcut-report';
 import { stockValueOverTime } from '@/lib/reports/stock-value';
 import { costEachCents } from './nest-request';
 
@@ -87,18 +88,7 @@ export async function yieldOverTime(db: Db, f: ReportFilter): Promise<YieldRow[]
 }
 
 /** One period of the rack: what plans took from offcuts against new stock, and what went on, off and out of it. */
-export interface OffcutUseRow {
-  period: string;
-  /** Stock area finished plans cut from offcuts, and from new sheets and boards (mm²). */
-  fromRackArea: number;
-  fromNewStockArea: number;
-  racked: number;
-  rackedArea: number;
-  used: number;
-  usedArea: number;
-  scrapped: number;
-  scrappedArea: number;
-}
+export type OffcutUseRow = OffcutUseFigures;
 
 export async function offcutUse(db: Db, f: ReportFilter): Promise<OffcutUseRow[]> {
   const finished = sql.raw('p.finished_at');

@@ -96,7 +96,7 @@ export function buildQuoteLines(src: QuoteSources): QuoteLine[] {
       unit: 'h',
       unitCostMinor: pricing.hourlyRateMinor[l.kind],
       taxable: pricing.taxable.labour,
-      note: `${(l.centiMinutes / 100).toLocaleString('en-US')} min → ${l.hours.toFixed(2)} h (lib/costing/RULES.md, step L1).`,
+      note: `${(l.centiMinutes / 100).toLocaleString('en-US')} min → ${l.hours.toFixed(2)} h (to the nearest 0.01 h, halves up).`,
     });
   }
   return lines;

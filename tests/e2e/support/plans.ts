@@ -1,6 +1,6 @@
 import type { Page } from '@playwright/test';
-import { optimize } from '../../../lib/nesting';
-import { nestRequestSchema } from '../../../shared/schemas/nesting';
+import { optimize } from '@/lib/nesting';
+import { nestRequestSchema } from '@/shared/schemas/nesting';
 
 export async function jobId(page: Page, name: string): Promise<string> {
   const jobs: { id: string; name: string }[] = await (await page.request.get('/api/jobs')).json();
