@@ -22,8 +22,9 @@ function withHeaders(req: NextRequest): NextResponse {
 
 const signedIn = withAuth((req: NextRequestWithAuth) => withHeaders(req), { pages: { signIn: '/sign-in' } });
 
-// The sign-in page and the pages single-use links open (invite, password reset) are for the signed-out.
-const PUBLIC_PAGES = ['/sign-in', '/welcome', '/reset-password', '/forgot-password'];
+// The sign-in page, the pages single-use links open (invite, password reset) and a customer's quote page (/q/<token>)
+// are for the signed-out.
+const PUBLIC_PAGES = ['/sign-in', '/welcome', '/reset-password', '/forgot-password', '/q'];
 
 export default async function proxy(req: NextRequest, event: NextFetchEvent) {
   if (PUBLIC_PAGES.some((p) => req.nextUrl.pathname === p || req.nextUrl.pathname.startsWith(`${p}/`))) return withHeaders(req);

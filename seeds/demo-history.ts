@@ -42,9 +42,9 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
   const racked: string[] = [];
   for (const past of PAST_JOBS) {
     const at = new Date(past.finishedAt);
-    const wonAt = new Date(at.getTime() - 12 * 86_400_000);
-    const [customer] = await db.insert(customers).values({ shopId, name: past.customer, createdAt: wonAt, updatedAt: wonAt }).returning({ id: customers.id });
-    const [job] = await db.insert(jobs).values({ shopId, name: past.name, customerId: customer.id, status: 'won', wonAt, createdBy: estimatorId, createdAt: wonAt }).returning({ id: jobs.id });
+    const acceptedAt = new Date(at.getTime() - 12 * 86_400_000);
+    const [customer] = await db.insert(customers).values({ shopId, name: past.customer, createdAt: acceptedAt, updatedAt: acceptedAt }).returning({ id: customers.id });
+    const [job] = await db.insert(jobs).values({ shopId, name: past.name, customerId: customer.id, status: 'accepted', acceptedAt, createdBy: estimatorId, createdAt: acceptedAt }).returning({ id: jobs.id });
     await db.insert(parts).values(past.parts.map((p, sort) => ({ shopId, jobId: job.id, sort: sort + 1, ...p })));
 
     // Bought for the job, or cut from what earlier past jobs racked: today's rack and counts are not touched.
@@ -54,7 +54,7 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
     const document = await optimize(request);
     const [plan] = await db
       .insert(plans)
-      .values({ shopId, jobId: job.id, name: past.plan, status: 'draft', request, document, yieldRatio: document.totals?.yield ?? null, costCents: Math.round(document.totals?.cost ?? 0), createdBy: estimatorId, createdAt: wonAt })
+      .values({ shopId, jobId: job.id, name: past.plan, status: 'draft', request, document, yieldRatio: document.totals?.yield ?? null, costCents: Math.round(document.totals?.cost ?? 0), createdBy: estimatorId, createdAt: acceptedAt })
       .returning({ id: plans.id });
     await releasePlan(db, { shopId, userId: estimatorId, planId: plan.id });
 

@@ -124,7 +124,7 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
     const [kitchen, vanity] = await tx
       .insert(jobs)
       .values([
-        { shopId, name: 'Hollis kitchen', customerId: hollis.id, status: 'won', wonAt: new Date('2026-11-02T15:00:00Z'), dueDate: '2027-01-22', notes: 'Maple ply carcasses, Baltic birch drawer boxes, full-extension side-mount slides.', createdBy: estimator },
+        { shopId, name: 'Hollis kitchen', customerId: hollis.id, status: 'accepted', acceptedAt: new Date('2026-11-02T15:00:00Z'), dueDate: '2027-01-22', notes: 'Maple ply carcasses, Baltic birch drawer boxes, full-extension side-mount slides.', createdBy: estimator },
         { shopId, name: 'Pemberton vanity', customerId: pemberton.id, status: 'quoting', dueDate: '2027-02-05', notes: 'Floating vanity, two drawers, white oak face frame.', createdBy: estimator },
         { shopId, name: 'Arden Books wall units', customerId: arden.id, status: 'quoting', dueDate: null, notes: 'Six open bookcases, MDF painted.', createdBy: estimator },
       ])

@@ -2,7 +2,8 @@
  * `npm run demo`: prepares ./data (secret, embedded database, migrations, demo shop), builds, and serves on :3000.
  * The embedded database is closed before the server starts, so the lock passes to the server. With no SMTP_URL,
  * a local mail catcher on 127.0.0.1 stores every mail the app sends in ./data/mail (the owner reads them on the
- * Sent mail page); nothing leaves the machine.
+ * Sent mail page), and with no STRIPE_SECRET_KEY a local payments fake takes deposits on a test checkout page;
+ * nothing leaves the machine.
  */
 import { spawn, spawnSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
@@ -10,6 +11,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { openDatabase } from '@/db/open';
 import { startMailCatcher } from '@/lib/mail/catcher';
+import { newWebhookSecret } from '@/lib/payments/config';
+import { startPaymentsFake } from '@/lib/payments/fake';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoShop } from './demo-shop';
 
 const dataDir = path.resolve(process.env.KERFWISE_DATA_DIR ?? './data');
@@ -47,6 +50,12 @@ async function main() {
     const catcher = await startMailCatcher({ dir: path.join(dataDir, 'mail') });
     Object.assign(env, { KERFWISE_MAIL_CATCHER_URL: catcher.url });
     console.log(`Mail: no SMTP_URL, so every mail is caught at ${catcher.url} and stored in ${catcher.dir} (Sent mail page).`);
+  }
+  if (!process.env.STRIPE_SECRET_KEY) {
+    const webhookSecret = newWebhookSecret();
+    const fake = await startPaymentsFake({ webhookUrl: `${env.NEXTAUTH_URL}/api/payments/webhook`, webhookSecret });
+    Object.assign(env, { KERFWISE_PAYMENTS_URL: fake.url, KERFWISE_PAYMENTS_WEBHOOK_SECRET: webhookSecret });
+    console.log(`Payments: no STRIPE_SECRET_KEY, so deposits are paid on a local test checkout at ${fake.url} (test card 4242 4242 4242 4242; nothing is charged).`);
   }
   if (!process.argv.includes('--no-build')) {
     const build = spawnSync('npx', ['next', 'build'], { stdio: 'inherit', env });

@@ -34,7 +34,7 @@ const columns: ColumnDef<JobSummary>[] = [
     header: 'Status',
     accessorKey: 'status',
     filterFn: matchesStatus,
-    // Work order, not alphabetical: quoting → quoted → won → cutting → done → archived.
+    // Work order, not alphabetical: quoting → quoted → accepted → cutting → done → archived.
     sortingFn: (a, b) => JOB_STATUSES.indexOf(a.original.status) - JOB_STATUSES.indexOf(b.original.status),
     cell: ({ row }) => <JobStatusBadge status={row.original.status} />,
   },

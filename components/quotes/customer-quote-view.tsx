@@ -1,6 +1,5 @@
 import { formatMoney } from '@/lib/costing/money';
-import type { QuoteTotals } from '@/lib/costing/quote-totals';
-import type { QuoteLine } from '@/shared/schemas/quote';
+import type { CustomerLine, CustomerTotals } from '@/lib/quotes/customer-copy';
 
 export interface CustomerQuoteProps {
   shopName: string;
@@ -8,8 +7,9 @@ export interface CustomerQuoteProps {
   customer: string;
   jobName: string;
   currency: string;
-  lines: QuoteLine[];
-  totals: QuoteTotals;
+  /** The customer's copy (lib/quotes/customer-copy.ts): prices only. */
+  lines: CustomerLine[];
+  totals: CustomerTotals;
   taxPercent: number;
   depositPercent: number;
   validityDays: number;
@@ -35,14 +35,14 @@ export function CustomerQuoteView(q: CustomerQuoteProps) {
         <table className="data-table" aria-label="Quote lines">
           <thead><tr><th>Item</th><th className="num">Qty</th><th>Unit</th><th className="num">Unit price</th><th className="num">Amount</th></tr></thead>
           <tbody>
-            {q.lines.map((l, i) => (
+            {q.lines.map((l) => (
               <tr key={l.id}>
                 <td>{l.description}</td>
                 {/* Labour is shown as a sum: hours and rates are the shop's own business. */}
-                <td className="num">{l.kind === 'labour' ? '' : l.quantity}</td>
-                <td>{l.kind === 'labour' ? '' : l.unit}</td>
-                <td className="num">{l.kind === 'labour' ? '' : money(t.lines[i].unitPriceMinor)}</td>
-                <td className="num">{money(t.lines[i].priceMinor)}</td>
+                <td className="num">{l.quantity ?? ''}</td>
+                <td>{l.unit}</td>
+                <td className="num">{l.unitPriceMinor === null ? '' : money(l.unitPriceMinor)}</td>
+                <td className="num">{money(l.priceMinor)}</td>
               </tr>
             ))}
           </tbody>

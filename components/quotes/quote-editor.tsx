@@ -8,13 +8,14 @@ import { formatMoney, toMinorUnits } from '@/lib/costing/money';
 import { quoteTotals, type QuoteTotals } from '@/lib/costing/quote-totals';
 import { moneyText } from '@/components/settings/pricing-form-values';
 import type { HardwareItem } from '@/shared/schemas/pricing';
-import type { QuoteDiscount, QuoteLine } from '@/shared/schemas/quote';
+import type { QuoteDiscount, QuoteLine, QuoteRevisionStatus } from '@/shared/schemas/quote';
+import { customerCopy } from '@/lib/quotes/customer-copy';
 import { CustomerQuoteView, type CustomerQuoteProps } from './customer-quote-view';
 
 export interface EditorRevision {
   id: string;
   title: string;
-  status: 'draft' | 'sent' | 'replaced';
+  status: QuoteRevisionStatus;
   latest: boolean;
   currency: string;
   lines: QuoteLine[];
@@ -40,7 +41,18 @@ const minorOrNaN = (text: string, currency: string) => {
 const num = (text: string) => (/^\d+(\.\d+)?$/.test(text.trim().replace(',', '.')) ? Number(text.trim().replace(',', '.')) : Number.NaN);
 
 /** The estimator's quote: every line editable, live totals, cost, margin and hours, and the customer's copy beside it. */
-export function QuoteEditor({ revision, hardware, customer }: { revision: EditorRevision; hardware: HardwareItem[]; customer: Omit<CustomerQuoteProps, 'lines' | 'totals' | 'currency' | 'taxPercent' | 'depositPercent' | 'validityDays' | 'terms' | 'validUntil' | 'title'> }) {
+export function QuoteEditor({
+  revision,
+  hardware,
+  customer,
+  sendTo,
+}: {
+  revision: EditorRevision;
+  hardware: HardwareItem[];
+  customer: Omit<CustomerQuoteProps, 'lines' | 'totals' | 'currency' | 'taxPercent' | 'depositPercent' | 'validityDays' | 'terms' | 'validUntil' | 'title'>;
+  /** The job's customer the quote is e-mailed to (null when the job has none). */
+  sendTo: { id: string; name: string; email: string } | null;
+}) {
   const router = useRouter();
   const { currency } = revision;
   const editable = revision.status === 'draft';
@@ -136,7 +148,7 @@ export function QuoteEditor({ revision, hardware, customer }: { revision: Editor
       </div>
 
       {view === 'customer' && t && (
-        <CustomerQuoteView {...customer} title={revision.title} currency={currency} lines={read.patch.lines} totals={t} taxPercent={read.patch.taxPercent} depositPercent={read.patch.depositPercent} validityDays={read.patch.validityDays} validUntil={revision.validUntil} terms={terms} />
+        <CustomerQuoteView {...customer} title={revision.title} currency={currency} {...customerCopy(read.patch.lines, t)} taxPercent={read.patch.taxPercent} depositPercent={read.patch.depositPercent} validityDays={read.patch.validityDays} validUntil={revision.validUntil} terms={terms} />
       )}
 
       {view === 'estimator' && (
@@ -227,12 +239,24 @@ export function QuoteEditor({ revision, hardware, customer }: { revision: Editor
       {serverError && <p role="alert" className="field-error mt-3">{serverError}</p>}
       <div className="mt-4 flex flex-wrap items-center gap-2">
         {editable && <button type="button" className="btn-quiet" disabled={!t || save.isPending} onClick={() => save.mutate()}>{save.isPending ? 'Saving…' : 'Save draft'}</button>}
-        {editable && revision.latest && (
-          <button type="button" className="btn-accent" disabled={!t || send.isPending || rows.length === 0} onClick={() => { if (window.confirm(`Mark ${revision.title} as sent to the customer? It can no longer be changed; a new revision can.`)) send.mutate(); }}>
-            {send.isPending ? 'Marking sent…' : 'Mark as sent'}
+        {editable && revision.latest && sendTo?.email && (
+          <button
+            type="button"
+            className="btn-accent"
+            disabled={!t || send.isPending || rows.length === 0}
+            onClick={() => {
+              if (window.confirm(`E-mail ${revision.title} to ${sendTo.name} <${sendTo.email}>, with the PDF and a link to accept it and pay the deposit online? The revision can no longer be changed once sent; a new revision can.`)) send.mutate();
+            }}
+          >
+            {send.isPending ? 'Sending…' : `Send to ${sendTo.name}`}
           </button>
         )}
-        {!editable && revision.latest && <button type="button" className="btn-accent" disabled={revise.isPending} onClick={() => revise.mutate()}>New revision</button>}
+        {editable && revision.latest && !sendTo?.email && (
+          <p className="text-sm text-graphite-mute">
+            {sendTo ? <>To send it, add an e-mail address for <a href={`/customers/${sendTo.id}`}>{sendTo.name}</a>.</> : 'To send it, give the job a customer with an e-mail address.'}
+          </p>
+        )}
+        {!editable && revision.latest && revision.status !== 'accepted' && <button type="button" className="btn-accent" disabled={revise.isPending} onClick={() => revise.mutate()}>New revision</button>}
         {save.isSuccess && <span role="status" className="text-sm text-sage">Saved.</span>}
       </div>
     </div>

@@ -3,7 +3,7 @@ import type { Db } from '../open';
 import { customers, jobs, parts, plans, stockMovements } from '../schema';
 import { HttpError } from '@/lib/api/errors';
 import type { Role } from '@/lib/auth/permissions';
-import { refuseManualStatus, wonAtAfter } from '@/lib/jobs/status';
+import { refuseManualStatus, acceptedAtAfter } from '@/lib/jobs/status';
 import type { JobInput, JobPatch, JobSummary } from '@/shared/schemas/job';
 import { recordAudit } from './audit';
 import { resolveCustomer } from './customers';
@@ -34,7 +34,7 @@ function selectSummaries(db: Db, shopId: string) {
       status: jobs.status,
       dueDate: jobs.dueDate,
       notes: jobs.notes,
-      wonAt: jobs.wonAt,
+      acceptedAt: jobs.acceptedAt,
       createdAt: jobs.createdAt,
       updatedAt: jobs.updatedAt,
       partCount: sql<number>`coalesce(${stats.partCount}, 0)`,
@@ -45,11 +45,11 @@ function selectSummaries(db: Db, shopId: string) {
     .leftJoin(stats, eq(stats.jobId, jobs.id));
 }
 
-type SummaryRow = { createdAt: Date; updatedAt: Date; wonAt: Date | null; materials: string[] | null } & Omit<JobSummary, 'createdAt' | 'updatedAt' | 'wonAt' | 'materials'>;
+type SummaryRow = { createdAt: Date; updatedAt: Date; acceptedAt: Date | null; materials: string[] | null } & Omit<JobSummary, 'createdAt' | 'updatedAt' | 'acceptedAt' | 'materials'>;
 
 const toSummary = (row: SummaryRow): JobSummary => ({
   ...row,
-  wonAt: row.wonAt?.toISOString() ?? null,
+  acceptedAt: row.acceptedAt?.toISOString() ?? null,
   partCount: Number(row.partCount),
   materials: row.materials ?? [],
   createdAt: row.createdAt.toISOString(),
@@ -70,7 +70,7 @@ export async function createJob(db: Db, shopId: string, userId: string, input: J
   const id = await db.transaction(async (tx) => {
     const { customer, ...fields } = input;
     const customerId = await resolveCustomer(tx, shopId, userId, customer);
-    const [row] = await tx.insert(jobs).values({ ...fields, customerId, wonAt: input.status === 'won' ? new Date() : null, shopId, createdBy: userId }).returning({ id: jobs.id });
+    const [row] = await tx.insert(jobs).values({ ...fields, customerId, acceptedAt: input.status === 'accepted' ? new Date() : null, shopId, createdBy: userId }).returning({ id: jobs.id });
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'job', entityId: row.id, data: { name: input.name } });
     return row.id;
   });
@@ -85,7 +85,7 @@ export interface JobEditor {
 
 /**
  * Changes what the patch sends (only fields whose value differs are written; the audit keeps each as from → to). A
- * status set by hand follows the rules of lib/jobs/status.ts for the person's role; marking a job won records when.
+ * status set by hand follows the rules of lib/jobs/status.ts for the person's role; marking a job accepted records when.
  */
 export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: string, patch: JobPatch) {
   const updated = await db.transaction(async (tx) => {
@@ -103,9 +103,9 @@ export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: s
     if (!Object.keys(changes).length) return true;
     const set: Partial<typeof jobs.$inferInsert> = Object.fromEntries(Object.entries(changes).map(([f, c]) => [f, c.to]));
     if (patch.status && changes.status) {
-      const refused = refuseManualStatus(editor.role, job.status, patch.status, await jobFacts(tx, shopId, id, job.wonAt));
+      const refused = refuseManualStatus(editor.role, job.status, patch.status, await jobFacts(tx, shopId, id, job.acceptedAt));
       if (refused) throw new HttpError(403, refused);
-      set.wonAt = wonAtAfter(patch.status, job.wonAt, new Date());
+      set.acceptedAt = acceptedAtAfter(patch.status, job.acceptedAt, new Date());
     }
     await tx.update(jobs).set({ ...set, updatedAt: new Date() }).where(eq(jobs.id, id));
     await recordAudit(tx, { shopId, userId: editor.id, action: 'update', entity: 'job', entityId: id, data: { changes } });

@@ -1,6 +1,6 @@
 import { and, desc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
-import { jobs, parts, plans, quoteRevisions, quotes, shops } from '../schema';
+import { customers, jobs, parts, plans, quoteRevisions, quotes, shops } from '../schema';
 import { conflict, HttpError, notFound } from '@/lib/api/errors';
 import { quoteTotals, type QuoteTotals } from '@/lib/costing/quote-totals';
 import { boxFromOpening } from '@/lib/joinery/box-from-opening';
@@ -11,7 +11,16 @@ import { buildQuoteLines, type SlideNeed } from '@/lib/quotes/build-lines';
 import { quoteLength, quoteNominal } from '@/lib/quotes/quote-text';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { quoteNumberText, revisionLetter, type QuoteRevisionPatch } from '@/shared/schemas/quote';
+import { formatMoney } from '@/lib/costing/money';
+import { shopDay } from '@/lib/dates/shop-time';
+import { enqueueMail } from '@/lib/mail/outbox';
+import { quoteMail } from '@/lib/mail/templates';
+import { lastValidDay } from '@/lib/quotes/answer';
+import { quotePdf, type QuotePdfInput } from '@/lib/quotes/quote-pdf';
+import { pdfFileName } from '@/lib/saw-order/pdf-text';
 import { recordAudit } from './audit';
+import { getJob } from './jobs';
+import { newQuoteLink, refuseNewRevisionAfter } from './quote-answers';
 import { listDrawerSchedules } from './drawer-schedules';
 import { syncJobStatus } from './job-status';
 import { getPricing, listHardware } from './pricing';
@@ -41,9 +50,17 @@ export interface QuoteRevisionView {
   validityDays: number;
   terms: string;
   sentAt: string | null;
-  /** The last day the quote holds (sent date + validity), once sent. */
+  /** The last day the quote holds (the sending day in the shop's zone + validity), once sent. */
   validUntil: string | null;
   createdAt: string;
+  /** The revision's state as its row was read (so an edit can be refused if it changed meanwhile). */
+  updatedAt: string;
+  /** The customer's answer on their page: when, and the name typed to accept or the reason given to decline. */
+  answeredAt: string | null;
+  acceptedName: string | null;
+  declineReason: string | null;
+  /** When the deposit was paid (null while unpaid, or refunded). */
+  depositPaidAt: string | null;
   totals: QuoteTotals;
 }
 
@@ -59,9 +76,7 @@ export function revisionTotals(r: Pick<RevisionRow, 'currency' | 'lines' | 'mark
   });
 }
 
-const addDays = (d: Date, days: number) => new Date(d.getTime() + days * 86_400_000).toISOString().slice(0, 10);
-
-function toView(r: RevisionRow, number: number, latestRevision: number): QuoteRevisionView {
+function toView(r: RevisionRow, number: number, latestRevision: number, depositPaidAt: Date | null = null): QuoteRevisionView {
   return {
     id: r.id,
     quoteId: r.quoteId,
@@ -82,49 +97,57 @@ function toView(r: RevisionRow, number: number, latestRevision: number): QuoteRe
     validityDays: r.validityDays,
     terms: r.terms,
     sentAt: r.sentAt?.toISOString() ?? null,
-    validUntil: r.sentAt ? addDays(r.sentAt, r.validityDays) : null,
+    validUntil: r.validUntil,
     createdAt: r.createdAt.toISOString(),
+    updatedAt: r.updatedAt.toISOString(),
+    answeredAt: r.answeredAt?.toISOString() ?? null,
+    acceptedName: r.acceptedName,
+    declineReason: r.declineReason,
+    depositPaidAt: depositPaidAt?.toISOString() ?? null,
     totals: revisionTotals(r),
   };
 }
+
+/** When the revision's deposit was paid (a paid, not refunded, payment), or null. */
+const depositPaidAt = sql<Date | null>`(select max(p.paid_at) from "quote_payments" p where p.revision_id = ${quoteRevisions.id} and p.status = 'paid')`.mapWith((v) => (v ? new Date(v) : null));
 
 const latestOf = (tx: Db, quoteId: string) =>
   tx.select({ n: sql<number>`max(${quoteRevisions.revision})`.mapWith(Number) }).from(quoteRevisions).where(eq(quoteRevisions.quoteId, quoteId));
 
 export async function getRevision(db: Db, shopId: string, revisionId: string): Promise<QuoteRevisionView | null> {
   const [row] = await db
-    .select({ r: quoteRevisions, number: quotes.number })
+    .select({ r: quoteRevisions, number: quotes.number, paidAt: depositPaidAt })
     .from(quoteRevisions)
     .innerJoin(quotes, eq(quotes.id, quoteRevisions.quoteId))
     .where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.id, revisionId)));
   if (!row) return null;
   const [latest] = await latestOf(db, row.r.quoteId);
-  return toView(row.r, row.number, latest.n);
+  return toView(row.r, row.number, latest.n, row.paidAt);
 }
 
 /** Every revision of a job's quotes, newest quote first and its latest revision first. */
 export async function listJobQuotes(db: Db, shopId: string, jobId: string): Promise<QuoteRevisionView[]> {
   const rows = await db
-    .select({ r: quoteRevisions, number: quotes.number })
+    .select({ r: quoteRevisions, number: quotes.number, paidAt: depositPaidAt })
     .from(quoteRevisions)
     .innerJoin(quotes, eq(quotes.id, quoteRevisions.quoteId))
     .where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.jobId, jobId)))
     .orderBy(desc(quotes.number), desc(quoteRevisions.revision));
   const latest = new Map<string, number>();
   for (const { r } of rows) latest.set(r.quoteId, Math.max(latest.get(r.quoteId) ?? 0, r.revision));
-  return rows.map(({ r, number }) => toView(r, number, latest.get(r.quoteId)!));
+  return rows.map(({ r, number, paidAt }) => toView(r, number, latest.get(r.quoteId)!, paidAt));
 }
 
 /** The customer's quotes: the latest revision of each quote on any of their jobs. */
 export async function listCustomerQuotes(db: Db, shopId: string, customerId: string) {
   const rows = await db
-    .select({ r: quoteRevisions, number: quotes.number, jobName: jobs.name })
+    .select({ r: quoteRevisions, number: quotes.number, jobName: jobs.name, paidAt: depositPaidAt })
     .from(quoteRevisions)
     .innerJoin(quotes, eq(quotes.id, quoteRevisions.quoteId))
     .innerJoin(jobs, eq(jobs.id, quoteRevisions.jobId))
     .where(and(eq(quoteRevisions.shopId, shopId), eq(jobs.customerId, customerId), sql`${quoteRevisions.revision} = (select max(r2.revision) from "quote_revisions" r2 where r2.quote_id = ${quoteRevisions.quoteId})`))
     .orderBy(desc(quotes.number));
-  return rows.map(({ r, number, jobName }) => ({ ...toView(r, number, r.revision), jobName }));
+  return rows.map(({ r, number, jobName, paidAt }) => ({ ...toView(r, number, r.revision, paidAt), jobName }));
 }
 
 /** Pairs of slides by kind and length, setup cards, boxes and joint corners from the job's drawer schedules. */
@@ -251,7 +274,8 @@ export async function newRevision(db: Db, shopId: string, userId: string, quoteI
     if (!quote) throw notFound('That quote');
     const [latest] = await tx.select().from(quoteRevisions).where(eq(quoteRevisions.quoteId, quoteId)).orderBy(desc(quoteRevisions.revision)).limit(1);
     if (latest.status === 'draft') throw conflict(`Rev ${revisionLetter(latest.revision)} is still a draft: change it instead of making another.`);
-    const { id: _id, createdAt: _c, updatedAt: _u, sentAt: _s, status: _st, ...copy } = latest;
+    refuseNewRevisionAfter(latest.status, latest.revision);
+    const { id: _id, createdAt: _c, updatedAt: _u, sentAt: _s, status: _st, linkTokenHash: _l, validUntil: _v, answeredAt: _a, acceptedName: _n, answeredFrom: _f, declineReason: _d, ...copy } = latest;
     const [rev] = await tx.insert(quoteRevisions).values({ ...copy, revision: latest.revision + 1, status: 'draft', createdBy: userId }).returning({ id: quoteRevisions.id });
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'quote-revision', entityId: rev.id, data: { quoteId, revision: revisionLetter(latest.revision + 1) } });
     return rev.id;
@@ -260,21 +284,86 @@ export async function newRevision(db: Db, shopId: string, userId: string, quoteI
 }
 
 /**
- * Marks the latest revision sent (the e-mail is wired in later): an earlier sent revision is replaced, and a job
- * still quoting becomes quoted. Only the latest revision can be sent, and only once.
+ * Sends the latest revision to the job's customer: the quote mail (the PDF attached, and the link to their page) is
+ * queued in the same transaction that marks it sent; an earlier sent revision is replaced (its link then says so),
+ * and a job still quoting becomes quoted. Only the latest revision can be sent, only once, and only to a customer
+ * with an e-mail address. The caller wakes the mail sender.
  */
-export async function sendRevision(db: Db, shopId: string, userId: string, revisionId: string): Promise<QuoteRevisionView> {
+export async function sendRevision(db: Db, shopId: string, userId: string, revisionId: string, now = new Date()): Promise<QuoteRevisionView> {
+  const revision = await getRevision(db, shopId, revisionId);
+  if (!revision) throw notFound('That quote');
+  const [job, settings] = await Promise.all([getJob(db, shopId, revision.jobId), getShopSettings(db, shopId)]);
+  if (!job || !settings) throw notFound('That quote');
+  const [customer] = job.customerId ? await db.select().from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, job.customerId))) : [];
+  if (!customer) throw new HttpError(422, 'The job has no customer to send the quote to: pick one on the job first.', { customer: ['Pick the customer this quote is for.'] });
+  if (!customer.email) throw new HttpError(422, `${customer.name} has no e-mail address: add it on their customer page, then send.`, { email: [`Add ${customer.name}’s e-mail address.`] });
+  const link = newQuoteLink();
+  const sentDay = shopDay(now, settings.timeZone);
+  const validUntil = lastValidDay(sentDay, revision.validityDays);
+  const pdf = await quotePdf({ ...quotePdfInput(revision, job, customer, settings), issued: sentDay, validUntil, customerLink: link.link });
+
   await db.transaction(async (tx) => {
     const row = await lockRevision(tx, shopId, revisionId);
     const [latest] = await latestOf(tx, row.quoteId);
     if (row.revision !== latest.n) throw conflict(`Only the latest revision can be sent: this is rev ${revisionLetter(row.revision)}, the latest is rev ${revisionLetter(latest.n)}.`);
     if (row.status !== 'draft') throw conflict('This revision was already sent.');
+    if (row.updatedAt.toISOString() !== revision.updatedAt) throw conflict('This revision changed while it was being sent: look it over and send it again.');
     if (row.lines.length === 0) throw new HttpError(422, 'A quote with no lines cannot be sent.');
-    await tx.update(quoteRevisions).set({ status: 'replaced', updatedAt: new Date() }).where(and(eq(quoteRevisions.quoteId, row.quoteId), eq(quoteRevisions.status, 'sent')));
-    await tx.update(quoteRevisions).set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() }).where(eq(quoteRevisions.id, revisionId));
-    await recordAudit(tx, { shopId, userId, action: 'send', entity: 'quote-revision', entityId: revisionId, data: { total: revisionTotals(row).totalMinor } });
+    const replaced = await tx
+      .update(quoteRevisions)
+      .set({ status: 'replaced', updatedAt: now })
+      .where(and(eq(quoteRevisions.quoteId, row.quoteId), eq(quoteRevisions.status, 'sent')))
+      .returning({ revision: quoteRevisions.revision });
+    await tx.update(quoteRevisions).set({ status: 'sent', sentAt: now, validUntil, linkTokenHash: link.hash, updatedAt: now }).where(eq(quoteRevisions.id, revisionId));
+    const t = revision.totals;
+    const mail = quoteMail({
+      shopName: settings.name,
+      customerName: customer.name,
+      title: revision.title,
+      jobName: job.name,
+      total: formatMoney(t.totalMinor, revision.currency),
+      deposit: formatMoney(t.depositMinor, revision.currency),
+      noDeposit: t.depositMinor === 0,
+      validUntil,
+      link: link.link,
+      replaces: replaced.length ? replaced.map((r) => `rev ${revisionLetter(r.revision)}`).join(', ') : null,
+    });
+    await enqueueMail(tx, {
+      shopId,
+      kind: 'quote',
+      to: customer.email,
+      ...mail,
+      attachments: [{ filename: `${pdfFileName(`${revision.title} ${job.name}`)}.pdf`, contentType: 'application/pdf', content: pdf.toString('base64') }],
+    });
+    await recordAudit(tx, { shopId, userId, action: 'send', entity: 'quote-revision', entityId: revisionId, data: { total: t.totalMinor, to: customer.email, validUntil } });
     await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: 'quote sent' });
   });
   return (await getRevision(db, shopId, revisionId))!;
 }
 
+/** What the quote PDF prints for a revision (the customer's copy: prices only). */
+export function quotePdfInput(
+  revision: QuoteRevisionView,
+  job: { name: string },
+  customer: QuotePdfInput['customer'],
+  shop: { name: string; units: { system: string } },
+): QuotePdfInput {
+  return {
+    shop: { name: shop.name },
+    title: revision.title,
+    issued: (revision.sentAt ?? revision.createdAt).slice(0, 10),
+    validUntil: revision.validUntil,
+    validityDays: revision.validityDays,
+    customer,
+    jobName: job.name,
+    currency: revision.currency,
+    lines: revision.lines,
+    totals: revision.totals,
+    taxPercent: revision.taxPercent,
+    depositPercent: revision.depositPercent,
+    terms: revision.terms,
+    // The customer's link lives only in the mail sent to them (the database keeps its hash): a copy printed later has none.
+    customerLink: null,
+    pageSize: shop.units.system === 'metric' ? 'A4' : 'LETTER',
+  };
+}

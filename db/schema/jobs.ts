@@ -15,8 +15,8 @@ export const jobs = pgTable(
     status: jobStatusEnum('status').notNull().default('quoting'),
     dueDate: date('due_date'),
     notes: text('notes').notNull().default(''),
-    /** When a person (later: a paid deposit) marked the job won; a job whose plans are all cancelled goes back to won. */
-    wonAt: timestamp('won_at', { withTimezone: true }),
+    /** When a person (later: a paid deposit) marked the job accepted; a job whose plans are all cancelled goes back to accepted. */
+    acceptedAt: timestamp('accepted_at', { withTimezone: true }),
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),

@@ -3,7 +3,7 @@ import { ZodError } from 'zod';
 /** An error that maps to one HTTP status and a message safe to show. */
 export class HttpError extends Error {
   constructor(
-    readonly status: 401 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 429,
+    readonly status: 400 | 401 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 429 | 502,
     message: string,
     readonly fields?: Record<string, string[]>,
     /** Extra response headers (Retry-After on a 429). */

@@ -64,13 +64,13 @@ export function checkJsonBody(req: Request): void {
 const tooLarge = () => new HttpError(413, `That request is too large (the limit is ${MAX_BODY_BYTES / 1_000_000} MB).`);
 
 /**
- * The body as JSON, read as it streams in: the byte count stops the read at the limit, so a huge (or chunked,
- * length-less) body never sits in memory whole. An empty body is `{}`.
+ * The body as text, read as it streams in: the byte count stops the read at the limit, so a huge (or chunked,
+ * length-less) body never sits in memory whole.
  */
-export async function readJsonBody(req: Request, limit = MAX_BODY_BYTES): Promise<unknown> {
+export async function readTextBody(req: Request, limit = MAX_BODY_BYTES): Promise<string> {
   const declared = req.headers.get('content-length');
   if (declared !== null && Number(declared) > limit) throw tooLarge();
-  if (!req.body) return {};
+  if (!req.body) return '';
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
   let total = 0;
@@ -84,19 +84,22 @@ export async function readJsonBody(req: Request, limit = MAX_BODY_BYTES): Promis
     }
     chunks.push(value);
   }
-  if (total === 0) return {};
   const bytes = new Uint8Array(total);
   let at = 0;
   for (const c of chunks) {
     bytes.set(c, at);
     at += c.byteLength;
   }
-  let text: string;
   try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+    return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
   } catch {
     throw new HttpError(422, 'The request body is not valid UTF-8 text.');
   }
+}
+
+/** The body as JSON (read as `readTextBody` reads it); an empty body is `{}`. */
+export async function readJsonBody(req: Request, limit = MAX_BODY_BYTES): Promise<unknown> {
+  const text = await readTextBody(req, limit);
   if (!text.trim()) return {};
   try {
     return JSON.parse(text);

@@ -6,13 +6,15 @@ import type { Db } from '@/db/open';
 import { userFromRequest, type SessionUser } from '@/lib/auth/session';
 import { can, type Permission } from '@/lib/auth/permissions';
 import { forbidden, notFound, setErrorReporter, toErrorResponse, unauthorized } from './errors';
-import { checkJsonBody, checkSameOrigin, readJsonBody } from './request-guard';
+import { checkJsonBody, checkSameOrigin, readJsonBody, readTextBody } from './request-guard';
 import { withoutPrices } from '@/lib/stock/without-prices';
 import { isHttps, securityHeaders } from '@/lib/security-headers';
 import { log, requestIdOf, routeOf } from '@/lib/log';
 
 export interface RouteContext<P, B, Q, U = SessionUser> {
   req: NextRequest;
+  /** The body as text, read within the size limit: only for `signedByService` routes (the signature covers the bytes). */
+  rawBody: string;
   db: Db;
   user: U;
   params: P;
@@ -32,6 +34,11 @@ interface RouteSpec<P, B, Q> {
   query?: ZodType<Q>;
   /** Status of a successful response (201 for creations). */
   status?: number;
+  /**
+   * A call from another service that signs what it sends (the payments webhook): it comes from no browser, so the
+   * same-origin and JSON-type checks do not apply; the handler must check the signature on `rawBody` first.
+   */
+  signedByService?: true;
 }
 
 setErrorReporter((error, requestId) => log().error({ err: error, requestId }, 'unexpected error'));
@@ -80,8 +87,10 @@ export function route<P = undefined, B = undefined, Q = undefined>(
 
   async function handle(req: NextRequest, context: NextRouteContext, who: { user?: SessionUser }, requestId: string): Promise<Response> {
     try {
-      checkSameOrigin(req);
-      checkJsonBody(req);
+      if (!spec.signedByService) {
+        checkSameOrigin(req);
+        checkJsonBody(req);
+      }
       const db = await getDb();
       const user = await userFromRequest(req, db);
       if (spec.permission !== ANYONE) {
@@ -97,9 +106,10 @@ export function route<P = undefined, B = undefined, Q = undefined>(
         params = parsed.data;
       }
       const query = (spec.query ? spec.query.parse(Object.fromEntries(req.nextUrl.searchParams)) : undefined) as Q;
+      const rawBody = spec.signedByService ? await readTextBody(req) : '';
       const body = (spec.body ? spec.body.parse(await readJsonBody(req)) : undefined) as B;
 
-      const result = await handler({ req, db, user: user as never, params, body, query });
+      const result = await handler({ req, rawBody, db, user: user as never, params, body, query });
       if (result instanceof Response) return result;
       // A role that may not see prices gets none, whatever the handler returned (a write's echo included).
       const shown = user && !can(user.role, 'prices:read') ? withoutPrices(result) : result;

@@ -1,30 +1,37 @@
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
 import { JOB_STATUSES, type JobStatus } from '@/shared/schemas/job';
-import { followPlans, manualStatusChoices, refuseManualStatus, statusFromPlans, wonAtAfter, type JobFacts } from './status';
+import { followPlans, manualStatusChoices, refuseManualStatus, statusFromPlans, acceptedAtAfter, type JobFacts } from './status';
 
-// How a cabinet shop runs a job (common practice, no source): quoted, won, cut, done, then filed away.
-const facts = (f: Partial<JobFacts> = {}): JobFacts => ({ activePlans: 0, donePlans: 0, openRecuts: 0, won: false, quoted: false, ...f });
+// How a cabinet shop runs a job (common practice, no source): quoted, accepted, cut, done, then filed away.
+const facts = (f: Partial<JobFacts> = {}): JobFacts => ({ activePlans: 0, donePlans: 0, openRecuts: 0, accepted: false, quoted: false, ...f });
 
 describe('a job follows its plans', () => {
   test.each([
-    ['nothing released, not won: quoting', facts(), 'quoting'],
+    ['nothing released, not accepted: quoting', facts(), 'quoting'],
     ['nothing released, a quote sent: quoted', facts({ quoted: true }), 'quoted'],
     ['a quoted job whose only released plan was cancelled: back to quoted', facts({ quoted: true }), 'quoted'],
-    ['won after a quote was sent: won', facts({ quoted: true, won: true }), 'won'],
-    ['nothing released, won: won', facts({ won: true }), 'won'],
-    ['a plan released or being cut: cutting', facts({ activePlans: 1, won: true }), 'cutting'],
-    ['a quote released to the saw before anyone said won: cutting', facts({ activePlans: 1 }), 'cutting'],
-    ['one plan done, another still at the saw: cutting', facts({ activePlans: 1, donePlans: 1, won: true }), 'cutting'],
-    ['every released plan done, no re-cut open: done', facts({ donePlans: 2, won: true }), 'done'],
-    ['every plan done but a re-cut open: still cutting', facts({ donePlans: 1, openRecuts: 1, won: true }), 'cutting'],
-    ['the only released plan cancelled on a won job: back to won', facts({ won: true }), 'won'],
+    ['accepted after a quote was sent: accepted', facts({ quoted: true, accepted: true }), 'accepted'],
+    ['nothing released, accepted: accepted', facts({ accepted: true }), 'accepted'],
+    ['a plan released or being cut: cutting', facts({ activePlans: 1, accepted: true }), 'cutting'],
+    ['a quote released to the saw before anyone said accepted: cutting', facts({ activePlans: 1 }), 'cutting'],
+    ['one plan done, another still at the saw: cutting', facts({ activePlans: 1, donePlans: 1, accepted: true }), 'cutting'],
+    ['every released plan done, no re-cut open: done', facts({ donePlans: 2, accepted: true }), 'done'],
+    ['every plan done but a re-cut open: still cutting', facts({ donePlans: 1, openRecuts: 1, accepted: true }), 'cutting'],
+    ['the only released plan cancelled on an accepted job: back to accepted', facts({ accepted: true }), 'accepted'],
+    ['the deposit paid, nothing released: deposit paid', facts({ quoted: false, accepted: true, depositPaid: true }), 'deposit-paid'],
+    ['a plan released after the deposit: cutting', facts({ accepted: true, depositPaid: true, activePlans: 1 }), 'cutting'],
+    ['the deposit refunded (no longer paid): back to accepted', facts({ accepted: true, depositPaid: false }), 'accepted'],
+    ['the only quote declined: declined', facts({ lastQuote: 'declined' }), 'declined'],
+    ['the only quote ran past its validity: expired', facts({ lastQuote: 'expired' }), 'expired'],
+    ['one quote declined, a newer one out: quoted', facts({ quoted: true, lastQuote: 'declined' }), 'quoted'],
+    ['marked accepted by hand after a decline: accepted', facts({ accepted: true, lastQuote: 'declined' }), 'accepted'],
   ] as const)('%s', (_label, f, expected) => {
     expect(statusFromPlans(f)).toBe(expected);
   });
 
   test('an archived job stays archived whatever its plans do; any other status follows them', () => {
-    const anyFacts = fc.record({ activePlans: fc.nat(3), donePlans: fc.nat(3), openRecuts: fc.nat(3), won: fc.boolean() });
+    const anyFacts = fc.record({ activePlans: fc.nat(3), donePlans: fc.nat(3), openRecuts: fc.nat(3), accepted: fc.boolean(), quoted: fc.boolean(), depositPaid: fc.boolean(), lastQuote: fc.constantFrom('declined' as const, 'expired' as const, null) });
     fc.assert(
       fc.property(fc.constantFrom(...JOB_STATUSES), anyFacts, (current, f) => {
         expect(followPlans(current, f)).toBe(current === 'archived' ? 'archived' : statusFromPlans(f));
@@ -40,22 +47,27 @@ describe('statuses set by hand', () => {
   });
 
   test.each([
-    ['quoting', 'won', facts(), true],
-    ['quoted', 'won', facts({ quoted: true }), true],
+    ['quoting', 'accepted', facts(), true],
+    ['quoted', 'accepted', facts({ quoted: true }), true],
     ['quoted', 'quoting', facts({ quoted: true }), true],
     ['quoting', 'quoted', facts(), false],
-    ['won', 'quoting', facts({ won: true }), true],
+    ['accepted', 'quoting', facts({ accepted: true }), true],
     ['quoting', 'archived', facts(), true],
-    ['won', 'archived', facts({ won: true }), true],
+    ['accepted', 'archived', facts({ accepted: true }), true],
     ['done', 'archived', facts({ donePlans: 1 }), true],
     ['quoting', 'cutting', facts(), false],
-    ['won', 'done', facts({ won: true }), false],
-    ['cutting', 'won', facts({ activePlans: 1 }), false],
+    ['accepted', 'done', facts({ accepted: true }), false],
+    ['cutting', 'accepted', facts({ activePlans: 1 }), false],
     ['cutting', 'archived', facts({ activePlans: 1 }), false],
     ['done', 'quoting', facts({ donePlans: 1 }), false],
     ['archived', 'done', facts({ donePlans: 1 }), true],
-    ['archived', 'won', facts({ donePlans: 1 }), false],
+    ['archived', 'accepted', facts({ donePlans: 1 }), false],
     ['archived', 'quoting', facts(), true],
+    ['declined', 'accepted', facts({ lastQuote: 'declined' }), true],
+    ['expired', 'quoting', facts({ lastQuote: 'expired' }), true],
+    ['deposit-paid', 'quoting', facts({ accepted: true, depositPaid: true }), false],
+    ['quoting', 'deposit-paid', facts(), false],
+    ['quoted', 'declined', facts({ quoted: true }), false],
   ] as [JobStatus, JobStatus, JobFacts, boolean][])('an estimator setting %s → %s: allowed %s', (from, to, f, allowed) => {
     const refused = refuseManualStatus('estimator', from, to, f);
     if (allowed) expect(refused).toBeNull();
@@ -63,22 +75,24 @@ describe('statuses set by hand', () => {
   });
 
   test('an estimator restores an archived job to what its plans say, and is told so otherwise', () => {
-    expect(manualStatusChoices('estimator', 'archived', facts({ won: true }))).toEqual(['won', 'archived']);
-    expect(refuseManualStatus('estimator', 'archived', 'cutting', facts({ won: true }))).toBe(
-      'An archived job is restored to Won, what its plans say; only the owner can set another status by hand.',
+    expect(manualStatusChoices('estimator', 'archived', facts({ accepted: true }))).toEqual(['accepted', 'archived']);
+    expect(refuseManualStatus('estimator', 'archived', 'cutting', facts({ accepted: true }))).toBe(
+      'An archived job is restored to Accepted, what its plans say; only the owner can set another status by hand.',
     );
-    expect(refuseManualStatus('estimator', 'won', 'cutting', facts({ won: true }))).toBe(
-      'A won job cannot be set to Cutting by hand: cutting starts when a plan is released or a saw-order step is ticked. Only the owner can override that.',
+    expect(refuseManualStatus('estimator', 'accepted', 'cutting', facts({ accepted: true }))).toBe(
+      'An accepted job cannot be set to Cutting by hand: cutting starts when a plan is released or a saw-order step is ticked. Only the owner can override that.',
     );
   });
 
-  test('marking a job won records when, once; setting it back to quoting clears it; other statuses keep it', () => {
+  test('marking a job accepted records when, once; setting it back to quoting clears it; other statuses keep it', () => {
     const then = new Date('2026-11-02T15:00:00Z');
     const now = new Date('2026-12-01T09:00:00Z');
-    expect(wonAtAfter('won', null, now)).toBe(now);
-    expect(wonAtAfter('won', then, now)).toBe(then);
-    expect(wonAtAfter('quoting', then, now)).toBeNull();
-    expect(wonAtAfter('archived', then, now)).toBe(then);
-    expect(wonAtAfter('done', null, now)).toBeNull();
+    expect(acceptedAtAfter('accepted', null, now)).toBe(now);
+    expect(acceptedAtAfter('accepted', then, now)).toBe(then);
+    expect(acceptedAtAfter('quoting', then, now)).toBeNull();
+    expect(acceptedAtAfter('archived', then, now)).toBe(then);
+    expect(acceptedAtAfter('done', null, now)).toBeNull();
+    expect(acceptedAtAfter('declined', then, now)).toBeNull();
+    expect(acceptedAtAfter('deposit-paid', then, now)).toBe(then);
   });
 });

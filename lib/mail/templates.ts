@@ -16,7 +16,7 @@ export function escapeHtml(s: string): string {
 
 const dateTime = (d: Date) => d.toLocaleString('en-GB', { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
 
-function layout(shopName: string, paragraphs: string[], button: { label: string; href: string }, after: string[]): string {
+function layout(shopName: string, paragraphs: string[], button: { label: string; href: string } | null, after: string[]): string {
   const p = (html: string) => `<p style="margin:0 0 16px;font-size:15px;line-height:1.5;color:#2b2a27">${html}</p>`;
   return `<!doctype html>
 <html lang="en">
@@ -26,9 +26,9 @@ function layout(shopName: string, paragraphs: string[], button: { label: string;
 <div style="background:#ffffff;border:1px solid #e2ddd2;border-radius:8px;padding:24px">
 <p style="margin:0 0 20px;font-size:13px;letter-spacing:.04em;text-transform:uppercase;color:#7a766c">${escapeHtml(shopName)}</p>
 ${paragraphs.map(p).join('\n')}
-<p style="margin:24px 0"><a href="${escapeHtml(button.href)}" style="display:inline-block;background:#2b2a27;color:#ffffff;text-decoration:none;padding:12px 20px;border-radius:6px;font-size:15px;font-weight:600">${escapeHtml(button.label)}</a></p>
+${button ? `<p style="margin:24px 0"><a href="${escapeHtml(button.href)}" style="display:inline-block;background:#2b2a27;color:#ffffff;text-decoration:none;padding:12px 20px;border-radius:6px;font-size:15px;font-weight:600">${escapeHtml(button.label)}</a></p>
 <p style="margin:0 0 16px;font-size:13px;line-height:1.5;color:#7a766c">If the button does not work, copy this address into your browser:<br><span style="word-break:break-all;color:#2b2a27">${escapeHtml(button.href)}</span></p>
-${after.map((a) => `<p style="margin:0 0 12px;font-size:13px;line-height:1.5;color:#7a766c">${a}</p>`).join('\n')}
+` : ''}${after.map((a) => `<p style="margin:0 0 12px;font-size:13px;line-height:1.5;color:#7a766c">${a}</p>`).join('\n')}
 </div>
 <p style="margin:16px 0 0;font-size:12px;color:#7a766c;text-align:center">Sent by Kerfwise for ${escapeHtml(shopName)}.</p>
 </div>
@@ -92,6 +92,108 @@ export function passwordResetMail(input: { shopName: string; personName: string;
       `The link works once and until ${escapeHtml(dateTime(input.expiresAt))}. Your current password keeps working until you choose a new one.`,
       'If you did not ask for this, ignore this mail: your password stays as it is.',
     ],
+  );
+  return { subject, text, html };
+}
+
+/** What the customer's mails say about the quote (prices only: never cost, margin or hours). */
+export interface QuoteMailFacts {
+  shopName: string;
+  customerName: string;
+  /** Q-0007 rev B */
+  title: string;
+  jobName: string;
+  total: string;
+  deposit: string;
+  /** The deposit asked for is zero. */
+  noDeposit: boolean;
+  validUntil: string;
+  link: string;
+}
+
+export function quoteMail(q: QuoteMailFacts & { replaces: string | null }): RenderedMail {
+  const subject = `${q.shopName}: your quote ${q.title} for ${q.jobName}`;
+  const deposit = q.noDeposit ? 'No deposit is asked for.' : `A deposit of ${q.deposit} is paid online once you accept.`;
+  const replaces = q.replaces ? `This quote replaces ${q.replaces}; its link no longer works.` : null;
+  const text = [
+    `Hello ${q.customerName},`,
+    '',
+    `Here is ${q.shopName}'s quote ${q.title} for ${q.jobName}: ${q.total} in all. The PDF is attached.`,
+    ...(replaces ? [replaces] : []),
+    '',
+    'Read it, then accept or decline it on its page:',
+    '',
+    q.link,
+    '',
+    `${deposit} The quote holds until ${q.validUntil}.`,
+    'Questions? Reply to the shop directly: this address is not read.',
+    '',
+    `— ${q.shopName}`,
+    '',
+  ].join('\n');
+  const html = layout(
+    q.shopName,
+    [
+      `Hello ${escapeHtml(q.customerName)},`,
+      `Here is ${escapeHtml(q.shopName)}’s quote <strong>${escapeHtml(q.title)}</strong> for ${escapeHtml(q.jobName)}: <strong>${escapeHtml(q.total)}</strong> in all. The PDF is attached.`,
+      ...(replaces ? [escapeHtml(replaces)] : []),
+      `${escapeHtml(deposit)} The quote holds until ${escapeHtml(q.validUntil)}.`,
+    ],
+    { label: 'Read and answer the quote', href: q.link },
+    ['Questions? Reply to the shop directly: this address is not read.'],
+  );
+  return { subject, text, html };
+}
+
+export function quoteAcceptedMail(q: QuoteMailFacts & { acceptedName: string; acceptedAt: string }): RenderedMail {
+  const subject = `${q.shopName}: you accepted quote ${q.title}`;
+  const next = q.noDeposit ? 'No deposit is needed: the shop will be in touch about the next steps.' : `The next step is the deposit of ${q.deposit}, paid online on the quote's page.`;
+  const text = [
+    `Hello ${q.customerName},`,
+    '',
+    `Thank you: quote ${q.title} for ${q.jobName} (${q.total}) was accepted by ${q.acceptedName} on ${q.acceptedAt}.`,
+    next,
+    '',
+    q.link,
+    '',
+    `— ${q.shopName}`,
+    '',
+  ].join('\n');
+  const html = layout(
+    q.shopName,
+    [
+      `Hello ${escapeHtml(q.customerName)},`,
+      `Thank you: quote <strong>${escapeHtml(q.title)}</strong> for ${escapeHtml(q.jobName)} (${escapeHtml(q.total)}) was accepted by ${escapeHtml(q.acceptedName)} on ${escapeHtml(q.acceptedAt)}.`,
+      escapeHtml(next),
+    ],
+    { label: q.noDeposit ? 'See the quote' : 'Pay the deposit', href: q.link },
+    [],
+  );
+  return { subject, text, html };
+}
+
+export function depositReceiptMail(q: Omit<QuoteMailFacts, 'link' | 'validUntil'> & { paid: string; paidAt: string; balance: string; reference: string }): RenderedMail {
+  const subject = `${q.shopName}: deposit received for ${q.title}`;
+  const text = [
+    `Hello ${q.customerName},`,
+    '',
+    `We received your deposit of ${q.paid} for quote ${q.title} (${q.jobName}) on ${q.paidAt}. Thank you.`,
+    `Quote total ${q.total}; balance still to pay ${q.balance}.`,
+    `Payment reference: ${q.reference}`,
+    '',
+    `— ${q.shopName}`,
+    '',
+  ].join('\n');
+  const html = layout(
+    q.shopName,
+    [
+      `Hello ${escapeHtml(q.customerName)},`,
+      `We received your deposit of <strong>${escapeHtml(q.paid)}</strong> for quote ${escapeHtml(q.title)} (${escapeHtml(q.jobName)}) on ${escapeHtml(q.paidAt)}. Thank you.`,
+      `Quote total ${escapeHtml(q.total)}; balance still to pay ${escapeHtml(q.balance)}.`,
+      `Payment reference: ${escapeHtml(q.reference)}`,
+    ],
+    null,
+    ['Keep this mail as your receipt.'],
   );
   return { subject, text, html };
 }

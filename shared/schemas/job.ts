@@ -1,15 +1,18 @@
 import { z } from 'zod';
 import { text } from './text';
 
-export const JOB_STATUSES = ['quoting', 'quoted', 'won', 'cutting', 'done', 'archived'] as const;
+export const JOB_STATUSES = ['quoting', 'quoted', 'accepted', 'deposit-paid', 'cutting', 'done', 'declined', 'expired', 'archived'] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 
 export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
   quoting: 'Quoting',
   quoted: 'Quoted',
-  won: 'Won',
+  accepted: 'Accepted',
+  'deposit-paid': 'Deposit paid',
   cutting: 'Cutting',
   done: 'Done',
+  declined: 'Declined',
+  expired: 'Expired',
   archived: 'Archived',
 };
 
@@ -36,11 +39,11 @@ export const jobFields = {
   notes: text({ multiline: true }).max(4000, 'Keep notes under 4,000 characters.'),
 };
 
-/** A new job starts as a quote, or as won when the work is already agreed; cutting and done follow its plans. */
+/** A new job starts as a quote, or as accepted when the work is already agreed; cutting and done follow its plans. */
 export const jobInputSchema = z.object({
   name: jobFields.name,
   customer: jobFields.customer.default(null),
-  status: z.enum(['quoting', 'won'], { error: 'A new job is quoting or won; cutting and done follow its plans.' }).default('quoting'),
+  status: z.enum(['quoting', 'accepted'], { error: 'A new job is quoting or accepted; cutting and done follow its plans.' }).default('quoting'),
   dueDate: jobFields.dueDate.default(null),
   notes: jobFields.notes.default(''),
 });
@@ -68,8 +71,8 @@ export interface JobSummary {
   status: JobStatus;
   dueDate: string | null;
   notes: string;
-  /** ISO time the job was marked won, or null. */
-  wonAt: string | null;
+  /** ISO time the job was marked accepted, or null. */
+  acceptedAt: string | null;
   partCount: number;
   materials: string[];
   createdAt: string;

@@ -3,6 +3,10 @@ import { text } from './text';
 import { LINE_KINDS } from '@/lib/costing/quote-totals';
 import { minorAmount } from './pricing';
 
+/** A revision's status (db/schema/enums.ts): draft → sent → accepted / declined / expired, or replaced by a newer one sent. */
+export const QUOTE_REVISION_STATUSES = ['draft', 'sent', 'replaced', 'accepted', 'declined', 'expired'] as const;
+export type QuoteRevisionStatus = (typeof QUOTE_REVISION_STATUSES)[number];
+
 const decimals = (places: number) => (v: number) => Math.abs(Math.round(v * 10 ** places) - v * 10 ** places) < 1e-6;
 
 /** One line of a quote, as stored and as the estimator edits it. */

@@ -46,7 +46,7 @@ test('a damaged part goes on the re-cut list, is nested on an offcut and cut, an
   expect(stock.status()).toBe(201);
   const sheetId = (await stock.json()).id as string;
 
-  // The estimator creates the job and its cut list, and marks it won in the job's own edit form.
+  // The estimator creates the job and its cut list, and marks it accepted in the job's own edit form.
   const estimator = await browser.newPage({ viewport: DESK });
   await signIn(estimator, 'estimator');
   await estimator.goto('/jobs');
@@ -70,12 +70,12 @@ test('a damaged part goes on the re-cut list, is nested on an offcut and cut, an
   await edit.getByLabel('Customer').fill('Dana Calloway');
   await edit.getByLabel('Due date').fill('2027-04-16');
   await edit.getByLabel('Notes').fill('Rift-sawn face, grain runs up the sides.');
-  await expect(edit.getByLabel('Status').locator('option')).toHaveText(['Quoting', 'Won', 'Archived']);
-  await edit.getByLabel('Status').selectOption('won');
+  await expect(edit.getByLabel('Status').locator('option')).toHaveText(['Quoting', 'Accepted', 'Archived']);
+  await edit.getByLabel('Status').selectOption('accepted');
   await shot(estimator, 'recuts-1-edit-job');
   await edit.getByRole('button', { name: 'Save changes' }).click();
   await expect(edit).toBeHidden();
-  await expect(statusOf(estimator)).toHaveText('Won');
+  await expect(statusOf(estimator)).toHaveText('Accepted');
   await expect(estimator.getByText('Dana Calloway · due 2027-04-16')).toBeVisible();
 
   // Nest, save and release: the job is being cut.

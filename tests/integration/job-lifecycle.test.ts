@@ -10,7 +10,7 @@ let db: Db;
 let fx: TwoShops;
 useTwoShopDatabase((app) => ({ db, fx } = app));
 
-// A shop's job, as the trade runs it (common practice, no source): quoted, won, cut, done, filed away.
+// A shop's job, as the trade runs it (common practice, no source): quoted, accepted, cut, done, filed away.
 const cabinet = [
   { label: 'Side', quantity: 2, lengthMm: 720, widthMm: 560 },
   { label: 'Shelf', quantity: 2, lengthMm: 560, widthMm: 300, grain: 'any' as const },
@@ -19,13 +19,13 @@ const cabinet = [
 const job = (values: Parameters<typeof jobWithSheet>[2] = { parts: cabinet }) => jobWithSheet(db, fx.mine.id, values);
 
 describe('a job’s status follows its plans', () => {
-  test('quoting → won by the estimator → cutting at release → done when its plan is finished → archived', async () => {
+  test('quoting → marked accepted by the estimator → cutting at release → done when its plan is finished → archived', async () => {
     const { job: j } = await job();
     expect(await jobStatus(fx.estimator, j.id)).toBe('quoting');
-    expect((await editJob(fx.estimator, j.id, { status: 'won' })).body).toMatchObject({ status: 'won', wonAt: expect.any(String) });
+    expect((await editJob(fx.estimator, j.id, { status: 'accepted' })).body).toMatchObject({ status: 'accepted', acceptedAt: expect.any(String) });
 
     const { id: planId } = await nestAndSave(fx.estimator, j.id);
-    expect(await jobStatus(fx.estimator, j.id)).toBe('won');
+    expect(await jobStatus(fx.estimator, j.id)).toBe('accepted');
     expect((await release(fx.estimator, planId)).body.jobStatus).toBe('cutting');
     expect(await jobStatus(fx.cutter, j.id)).toBe('cutting');
 
@@ -36,24 +36,24 @@ describe('a job’s status follows its plans', () => {
 
     const moves = await db.select().from(auditEvents).where(and(eq(auditEvents.entityId, j.id), eq(auditEvents.action, 'status')));
     expect(moves.map((m) => m.data)).toEqual(
-      expect.arrayContaining([expect.objectContaining({ from: 'won', to: 'cutting' }), expect.objectContaining({ from: 'cutting', to: 'done' })]),
+      expect.arrayContaining([expect.objectContaining({ from: 'accepted', to: 'cutting' }), expect.objectContaining({ from: 'cutting', to: 'done' })]),
     );
   });
 
-  test('the first saw-order step ticked moves a job to cutting, even one the owner set back to won', async () => {
-    const { job: j } = await job({ parts: cabinet, status: 'won', wonAt: new Date() });
+  test('the first saw-order step ticked moves a job to cutting, even one the owner set back to accepted', async () => {
+    const { job: j } = await job({ parts: cabinet, status: 'accepted', acceptedAt: new Date() });
     const { id: planId, plan } = await nestAndSave(fx.estimator, j.id);
     await release(fx.estimator, planId);
-    expect((await editJob(fx.owner, j.id, { status: 'won' })).status).toBe(200);
+    expect((await editJob(fx.owner, j.id, { status: 'accepted' })).status).toBe(200);
     const ticked = await tick(fx.cutter, planId, { piece: 0, step: plan.pieces[0].sawOrder![0].n });
     expect(ticked.body.status).toBe('cutting');
     expect(await jobStatus(fx.cutter, j.id)).toBe('cutting');
   });
 
-  test('a cancelled plan does not leave the job in cutting: a won job goes back to won, a quote back to quoting', async () => {
-    const won = (await job({ parts: cabinet, status: 'won', wonAt: new Date() })).job;
+  test('a cancelled plan does not leave the job in cutting: a accepted job goes back to accepted, a quote back to quoting', async () => {
+    const accepted = (await job({ parts: cabinet, status: 'accepted', acceptedAt: new Date() })).job;
     const quote = (await job()).job;
-    for (const [j, before] of [[won, 'won'], [quote, 'quoting']] as const) {
+    for (const [j, before] of [[accepted, 'accepted'], [quote, 'quoting']] as const) {
       const { id: planId } = await nestAndSave(fx.estimator, j.id);
       await release(fx.estimator, planId);
       expect(await jobStatus(fx.estimator, j.id)).toBe('cutting');
@@ -63,7 +63,7 @@ describe('a job’s status follows its plans', () => {
   });
 
   test('with two released plans the job is done only when both are finished; a cancelled one does not hold it back', async () => {
-    const { job: j } = await job({ parts: cabinet, onHand: 8, status: 'won', wonAt: new Date() });
+    const { job: j } = await job({ parts: cabinet, onHand: 8, status: 'accepted', acceptedAt: new Date() });
     const first = await nestAndSave(fx.estimator, j.id, { name: 'First' });
     await release(fx.estimator, first.id);
     const second = await nestAndSave(fx.estimator, j.id, { name: 'Second' });
@@ -79,7 +79,7 @@ describe('a job’s status follows its plans', () => {
   });
 
   test('two plans of one job finished at the same moment leave the job done, not cutting', async () => {
-    const { job: j } = await job({ parts: cabinet, onHand: 8, status: 'won', wonAt: new Date() });
+    const { job: j } = await job({ parts: cabinet, onHand: 8, status: 'accepted', acceptedAt: new Date() });
     const a = await nestAndSave(fx.estimator, j.id, { name: 'A' });
     await release(fx.estimator, a.id);
     const b = await nestAndSave(fx.estimator, j.id, { name: 'B' });
@@ -90,7 +90,7 @@ describe('a job’s status follows its plans', () => {
   });
 
   test('an archived job stays archived when one of its plans is released or cancelled', async () => {
-    const { job: j } = await job({ parts: cabinet, status: 'won', wonAt: new Date() });
+    const { job: j } = await job({ parts: cabinet, status: 'accepted', acceptedAt: new Date() });
     const { id: planId } = await nestAndSave(fx.estimator, j.id);
     expect((await editJob(fx.estimator, j.id, { status: 'archived' })).status).toBe(200);
     await release(fx.estimator, planId);
@@ -108,11 +108,11 @@ describe('editing a job by hand', () => {
     expect(renamed.status).toBe(200);
     expect(renamed.body).toMatchObject({ name: 'Ashby pantry and mudroom', customer: 'R. Ashby', dueDate: '2027-03-15', notes: 'Paint grade', status: 'quoting' });
     // Changing the status alone leaves the rest as it was.
-    expect((await editJob(fx.estimator, j.id, { status: 'won' })).body).toMatchObject({ customer: 'R. Ashby', dueDate: '2027-03-15', notes: 'Paint grade', status: 'won' });
+    expect((await editJob(fx.estimator, j.id, { status: 'accepted' })).body).toMatchObject({ customer: 'R. Ashby', dueDate: '2027-03-15', notes: 'Paint grade', status: 'accepted' });
     const edits = await db.select().from(auditEvents).where(and(eq(auditEvents.entityId, j.id), eq(auditEvents.action, 'update')));
     expect(edits.map((e) => e.data)).toEqual([
       { changes: { name: { from: 'Ashby pantry', to: 'Ashby pantry and mudroom' }, dueDate: { from: '2027-03-01', to: '2027-03-15' } } },
-      { changes: { status: { from: 'quoting', to: 'won' } } },
+      { changes: { status: { from: 'quoting', to: 'accepted' } } },
     ]);
   });
 
@@ -133,39 +133,39 @@ describe('editing a job by hand', () => {
     expect(refused.body.error).toBe('A quoting job cannot be set to Cutting by hand: cutting starts when a plan is released or a saw-order step is ticked. Only the owner can override that.');
     expect((await editJob(fx.estimator, j.id, { status: 'done' })).status).toBe(403);
     expect(await jobStatus(fx.estimator, j.id)).toBe('quoting');
-    for (const status of ['cutting', 'done', 'quoting', 'archived', 'won'] as const) {
+    for (const status of ['cutting', 'done', 'quoting', 'archived', 'accepted'] as const) {
       expect((await editJob(fx.owner, j.id, { status })).body.status).toBe(status);
     }
   });
 
-  test('the estimator cannot move a job that is being cut back to won or archive it; the owner can', async () => {
-    const { job: j } = await job({ parts: cabinet, status: 'won', wonAt: new Date() });
+  test('the estimator cannot move a job that is being cut back to accepted or archive it; the owner can', async () => {
+    const { job: j } = await job({ parts: cabinet, status: 'accepted', acceptedAt: new Date() });
     const { id: planId } = await nestAndSave(fx.estimator, j.id);
     await release(fx.estimator, planId);
-    expect((await editJob(fx.estimator, j.id, { status: 'won' })).status).toBe(403);
+    expect((await editJob(fx.estimator, j.id, { status: 'accepted' })).status).toBe(403);
     expect((await editJob(fx.estimator, j.id, { status: 'archived' })).status).toBe(403);
     expect((await editJob(fx.owner, j.id, { status: 'archived' })).status).toBe(200);
   });
 
   test('an estimator restores an archived job to what its plans say', async () => {
-    const { job: j } = await job({ parts: cabinet, status: 'won', wonAt: new Date() });
+    const { job: j } = await job({ parts: cabinet, status: 'accepted', acceptedAt: new Date() });
     const { id: planId } = await nestAndSave(fx.estimator, j.id);
     await release(fx.estimator, planId);
     await finish(fx.cutter, planId);
     await editJob(fx.estimator, j.id, { status: 'archived' });
-    expect((await editJob(fx.estimator, j.id, { status: 'won' })).status).toBe(403);
+    expect((await editJob(fx.estimator, j.id, { status: 'accepted' })).status).toBe(403);
     expect((await editJob(fx.estimator, j.id, { status: 'done' })).body.status).toBe('done');
   });
 
-  test('a new job is a quote or already won, never cutting: that follows its plans', async () => {
+  test('a new job is a quote or already accepted, never cutting: that follows its plans', async () => {
     const noParams = { params: Promise.resolve({}) };
     const { request } = await import('../support/fixtures');
-    const won = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', user: fx.estimator, body: { name: 'Agreed job', status: 'won' } }), noParams);
-    expect(won.status).toBe(201);
-    expect(await won.json()).toMatchObject({ status: 'won', wonAt: expect.any(String) });
+    const accepted = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', user: fx.estimator, body: { name: 'Agreed job', status: 'accepted' } }), noParams);
+    expect(accepted.status).toBe(201);
+    expect(await accepted.json()).toMatchObject({ status: 'accepted', acceptedAt: expect.any(String) });
     const cutting = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', user: fx.estimator, body: { name: 'Early job', status: 'cutting' } }), noParams);
     expect(cutting.status).toBe(422);
-    expect((await cutting.json()).fields.status).toEqual(['A new job is quoting or won; cutting and done follow its plans.']);
+    expect((await cutting.json()).fields.status).toEqual(['A new job is quoting or accepted; cutting and done follow its plans.']);
   });
 });
 
@@ -180,7 +180,7 @@ describe('deleting or archiving a job', () => {
   });
 
   test('a job with a plan released (even one cancelled since) is refused with a 409 that says to archive it, and kept whole', async () => {
-    const { job: j } = await job({ parts: cabinet, status: 'won', wonAt: new Date() });
+    const { job: j } = await job({ parts: cabinet, status: 'accepted', acceptedAt: new Date() });
     const { id: planId } = await nestAndSave(fx.estimator, j.id);
     await release(fx.estimator, planId);
     for (const step of ['released', 'cancelled']) {

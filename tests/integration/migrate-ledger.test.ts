@@ -67,8 +67,8 @@ describe('the ledger migration on a ledger written the old way', () => {
     ]);
     expect(await ledgerMismatches(db, shop.id)).toEqual([]);
 
-    const jobs = await rows<{ name: string; status: string; won_at: Date | null }>(sql`select name, status, won_at from jobs where shop_id = ${shop.id} order by name`);
-    expect(jobs.map((j) => [j.name, j.status, j.won_at !== null])).toEqual([
+    const jobs = await rows<{ name: string; status: string; accepted_at: Date | null }>(sql`select name, status, accepted_at from jobs where shop_id = ${shop.id} order by name`);
+    expect(jobs.map((j) => [j.name, j.status, j.accepted_at !== null])).toEqual([
       ['Finished job', 'done', false],
       ['Plain quote', 'quoting', false],
       ['Released job', 'cutting', true],

@@ -53,7 +53,7 @@ describe('a quote built from a job and its plan', () => {
   });
 
   test('numbers run per shop; a draft is edited; sending marks the job quoted; rev B replaces rev A when sent; only the latest is sent', async () => {
-    const { job } = await jobWithSheet(handle.db, fx.mine.id, { parts: PARTS });
+    const { job } = await jobWithSheet(handle.db, fx.mine.id, { parts: PARTS, customerEmail: 'ashby@example.com' });
     const first = (await call(jobQuotes.POST, `/api/jobs/${job.id}/quotes`, job.id, fx.estimator, { method: 'POST', body: { planId: null } })).body;
     const second = (await call(jobQuotes.POST, `/api/jobs/${job.id}/quotes`, job.id, fx.estimator, { method: 'POST', body: { planId: null } })).body;
     expect(Number(second.number.slice(2))).toBe(Number(first.number.slice(2)) + 1);

@@ -22,9 +22,9 @@ const carcass = [
   { label: 'Shelf', quantity: 3, lengthMm: 560, widthMm: 300, grain: 'any' as const },
 ];
 
-/** A won job whose first plan was cut with one part damaged: the plan, the damaged part, the job and its sheet. */
+/** A accepted job whose first plan was cut with one part damaged: the plan, the damaged part, the job and its sheet. */
 async function cutWithOneDamaged(reason = 'Tear-out') {
-  const { job, sheet, material } = await jobWithSheet(db, fx.mine.id, { parts: carcass, onHand: 4, status: 'won', wonAt: new Date() });
+  const { job, sheet, material } = await jobWithSheet(db, fx.mine.id, { parts: carcass, onHand: 4, status: 'accepted', acceptedAt: new Date() });
   const first = await nestAndSave(fx.estimator, job.id, { name: 'Carcass' });
   await release(fx.estimator, first.id);
   const damaged = firstPart(first.plan);
@@ -79,7 +79,7 @@ describe('a part damaged at the saw', () => {
   });
 
   test('the same part named twice as damaged is refused and nothing is recorded', async () => {
-    const { job } = await jobWithSheet(db, fx.mine.id, { parts: carcass, status: 'won', wonAt: new Date() });
+    const { job } = await jobWithSheet(db, fx.mine.id, { parts: carcass, status: 'accepted', acceptedAt: new Date() });
     const p = await nestAndSave(fx.estimator, job.id);
     await release(fx.estimator, p.id);
     const d = firstPart(p.plan);

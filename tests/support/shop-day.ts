@@ -6,7 +6,7 @@
 import { eq } from 'drizzle-orm';
 import type { NextRequest } from 'next/server';
 import type { Db } from '@/db/open';
-import { jobs, parts, stockItems, stockMovements } from '@/db/schema';
+import { customers, jobs, parts, stockItems, stockMovements } from '@/db/schema';
 import * as jobRoute from '@/app/api/jobs/[id]/route';
 import * as jobPlans from '@/app/api/jobs/[id]/plans/route';
 import * as nestRequestRoute from '@/app/api/jobs/[id]/nest-request/route';
@@ -49,9 +49,14 @@ export interface PartRow {
  * A job of its own in `shopId` with these parts, in a material no other test uses, and a sheet size of it on the
  * rack (its opening count in the ledger).
  */
-export async function jobWithSheet(db: Db, shopId: string, { parts: rows, onHand = 4, status = 'quoting' as JobStatus, wonAt = null as Date | null }: { parts: PartRow[]; onHand?: number; status?: JobStatus; wonAt?: Date | null }) {
+export async function jobWithSheet(
+  db: Db,
+  shopId: string,
+  { parts: rows, onHand = 4, status = 'quoting' as JobStatus, acceptedAt = null as Date | null, customerEmail = null as string | null }: { parts: PartRow[]; onHand?: number; status?: JobStatus; acceptedAt?: Date | null; customerEmail?: string | null },
+) {
   const material = `Day ply ${nextNumber()}`;
-  const [job] = await db.insert(jobs).values({ shopId, name: `Job in ${material}`, status, wonAt }).returning();
+  const [customer] = customerEmail ? await db.insert(customers).values({ shopId, name: `Customer for ${material}`, email: customerEmail }).returning() : [];
+  const [job] = await db.insert(jobs).values({ shopId, name: `Job in ${material}`, status, acceptedAt, customerId: customer?.id ?? null }).returning();
   await db.insert(parts).values(rows.map((p, i) => ({ shopId, jobId: job.id, label: p.label, quantity: p.quantity, lengthMm: p.lengthMm, widthMm: p.widthMm, thicknessMm: 18, material, grain: p.grain ?? 'along-length', sort: i })));
   const [sheet] = await db
     .insert(stockItems)

@@ -18,6 +18,13 @@ const SECRET_FILE = path.join(E2E_DIR, 'secret');
 export const MAIL_CATCHER_FILE = path.join(E2E_DIR, 'mail-catcher-url');
 /** Where the catcher stores the `.eml` files (the data directory's `mail/`, as in the demo). */
 export const E2E_MAIL = path.join(E2E_DATA, 'mail');
+/** The payments fake global setup started (its URL and webhook secret, JSON). */
+export const PAYMENTS_FILE = path.join(E2E_DIR, 'payments-fake.json');
+
+function paymentsEnv(): Record<string, string> {
+  const fake = fs.existsSync(PAYMENTS_FILE) ? (JSON.parse(fs.readFileSync(PAYMENTS_FILE, 'utf8')) as { url: string; webhookSecret: string }) : null;
+  return { STRIPE_SECRET_KEY: '', STRIPE_WEBHOOK_SECRET: '', KERFWISE_PAYMENTS_URL: fake?.url ?? '', KERFWISE_PAYMENTS_WEBHOOK_SECRET: fake?.webhookSecret ?? '' };
+}
 
 function secret(): string {
   if (!fs.existsSync(SECRET_FILE)) fs.writeFileSync(SECRET_FILE, randomBytes(32).toString('base64url'));
@@ -40,6 +47,7 @@ export async function startServer(extraEnv: Record<string, string> = {}): Promis
       SMTP_URL: '',
       KERFWISE_MAIL_CATCHER_URL: fs.existsSync(MAIL_CATCHER_FILE) ? fs.readFileSync(MAIL_CATCHER_FILE, 'utf8') : '',
       KERFWISE_MAIL_POLL_MS: '500',
+      ...paymentsEnv(),
       NEXT_TELEMETRY_DISABLED: '1',
       ...extraEnv,
     },

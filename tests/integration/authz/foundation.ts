@@ -19,7 +19,7 @@ export const rows: AuthzRow[] = [
   { route: '/api/jobs', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 200 } },
   { route: '/api/jobs', method: 'POST', body: { name: 'Matrix test job' }, expect: { anonymous: 401, owner: 201, estimator: 201, cutter: 403, other: 201 } },
   { route: '/api/jobs/[id]', method: 'GET', target: freshJob, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 404 } },
-  { route: '/api/jobs/[id]', method: 'PATCH', target: freshJob, body: { status: 'won' }, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
+  { route: '/api/jobs/[id]', method: 'PATCH', target: freshJob, body: { status: 'accepted' }, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
   { route: '/api/jobs/[id]', method: 'DELETE', target: freshJob, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
   { route: '/api/team', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 403, other: 200 } },
   {

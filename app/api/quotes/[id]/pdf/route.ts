@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { customers } from '@/db/schema';
 import { getJob } from '@/db/queries/jobs';
-import { getRevision } from '@/db/queries/quotes';
+import { getRevision, quotePdfInput } from '@/db/queries/quotes';
 import { getShopSettings } from '@/db/queries/shops';
 import { notFound } from '@/lib/api/errors';
 import { idParams, route } from '@/lib/api/route';
@@ -15,24 +15,7 @@ export const GET = route({ permission: 'quotes:read', params: idParams }, async 
   const [job, shop] = await Promise.all([getJob(db, user.shopId, revision.jobId), getShopSettings(db, user.shopId)]);
   if (!job || !shop) throw notFound('That quote');
   const [customer] = job.customerId ? await db.select().from(customers).where(eq(customers.id, job.customerId)) : [];
-  const bytes = await quotePdf({
-    shop: { name: shop.name },
-    title: revision.title,
-    issued: (revision.sentAt ?? revision.createdAt).slice(0, 10),
-    validUntil: revision.validUntil,
-    validityDays: revision.validityDays,
-    customer: customer ?? null,
-    jobName: job.name,
-    currency: revision.currency,
-    lines: revision.lines,
-    totals: revision.totals,
-    taxPercent: revision.taxPercent,
-    depositPercent: revision.depositPercent,
-    terms: revision.terms,
-    // The customer's page comes with sending by link (not built yet): no link, no QR code.
-    customerLink: null,
-    pageSize: shop.units.system === 'metric' ? 'A4' : 'LETTER',
-  });
+  const bytes = await quotePdf(quotePdfInput(revision, job, customer ?? null, shop));
   return new Response(new Uint8Array(bytes), {
     headers: {
       'content-type': 'application/pdf',

@@ -1,5 +1,11 @@
 import { sendRevision } from '@/db/queries/quotes';
 import { idParams, route } from '@/lib/api/route';
+import { wakeMailSender } from '@/lib/mail/service';
 
-// POST /api/quotes/:id/send – mark the latest revision sent (replacing an earlier sent one); the job becomes quoted
-export const POST = route({ permission: 'quotes:write', params: idParams }, async ({ db, user, params }) => sendRevision(db, user.shopId, user.id, params.id));
+// POST /api/quotes/:id/send – e-mail the latest revision to the job's customer (PDF and link to their page), replacing
+// an earlier sent one; the job becomes quoted
+export const POST = route({ permission: 'quotes:write', params: idParams }, async ({ db, user, params }) => {
+  const sent = await sendRevision(db, user.shopId, user.id, params.id);
+  wakeMailSender();
+  return sent;
+});
