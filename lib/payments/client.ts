@@ -18,7 +18,7 @@ export function fakeClient(url: string): Stripe {
 async function connect(config: PaymentsConfig, webhookUrl: string) {
   if (config.mode === 'hosted') return { stripe: new Stripe(config.secretKey, { maxNetworkRetries: 2 }), webhookSecret: config.webhookSecret, fake: null };
   if (config.url) return { stripe: fakeClient(config.url), webhookSecret: config.webhookSecret, fake: null };
-  const fake = await startPaymentsFake({ webhookUrl, webhookSecret: config.webhookSecret });
+  const fake = await startPaymentsFake({ webhookUrl, webhookSecret: config.webhookSecret, unref: true });
   console.log(`Payments: no STRIPE_SECRET_KEY, so deposits are paid on a local test checkout (${fake.url}); no card is charged.`);
   return { stripe: fakeClient(fake.url), webhookSecret: config.webhookSecret, fake };
 }

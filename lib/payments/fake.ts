@@ -116,7 +116,8 @@ ${message ? `<p class="msg" role="alert">${escape(message.text)}</p>` : ''}
 </div></main></body></html>`;
 }
 
-export async function startPaymentsFake(options: { webhookUrl: string; webhookSecret: string; port?: number }): Promise<PaymentsFake> {
+/** `unref`: the fake does not keep the process alive by itself (when a server process starts its own). */
+export async function startPaymentsFake(options: { webhookUrl: string; webhookSecret: string; port?: number; unref?: boolean }): Promise<PaymentsFake> {
   const sessions = new Map<string, FakeSession>();
   const deliveries: FakeDelivery[] = [];
   const signer = new Stripe(FAKE_SECRET_KEY);
@@ -196,9 +197,9 @@ export async function startPaymentsFake(options: { webhookUrl: string; webhookSe
       if (s.status !== 'open') return apiError(res, 400, 'Only an open session can be expired.');
       s.status = 'expired';
       s.url = null;
-      json(res, publicSession(s));
+      // The event goes before the answer (the hosted service sends it on its own time), so a test sees it applied.
       await deliver('checkout.session.expired', publicSession(s));
-      return;
+      return json(res, publicSession(s));
     }
     if (req.method === 'POST' && path === '/v1/refunds') {
       const f = await readBody(req);
@@ -207,10 +208,9 @@ export async function startPaymentsFake(options: { webhookUrl: string; webhookSe
       if (!s) return apiError(res, 404, `No such payment_intent: '${intent}'`);
       const amount = f.has('amount') ? Number(f.get('amount')) : s.amount_total;
       const refund = { id: id('re'), object: 'refund', amount, currency: s.currency, payment_intent: intent, status: 'succeeded' };
-      json(res, refund);
       const charge = { id: id('ch'), object: 'charge', amount: s.amount_total, amount_refunded: amount, currency: s.currency, payment_intent: intent, refunded: amount >= s.amount_total };
       await deliver('charge.refunded', charge);
-      return;
+      return json(res, refund);
     }
     apiError(res, 404, `Unrecognized request URL (${req.method}: ${path}).`);
   }
@@ -251,6 +251,7 @@ export async function startPaymentsFake(options: { webhookUrl: string; webhookSe
     });
   });
   await new Promise<void>((resolve) => server.listen(options.port ?? 0, '127.0.0.1', resolve));
+  if (options.unref) server.unref();
   base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   return {
     url: base,
