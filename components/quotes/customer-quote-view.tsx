@@ -31,7 +31,19 @@ export function CustomerQuoteView(q: CustomerQuoteProps) {
         </div>
         <p className="text-sm text-graphite-mute">{q.validUntil ? `Valid until ${q.validUntil}` : `Valid ${q.validityDays} days from sending`}</p>
       </header>
-      <div className="overflow-x-auto">
+      {/* A phone shows each line as a short block (the amount always in view); wider screens a table. */}
+      <ul className="divide-y divide-paper-edge border-y border-paper-edge sm:hidden" aria-label="Quote lines">
+        {q.lines.map((l) => (
+          <li key={l.id} className="flex items-start justify-between gap-3 py-2 text-sm">
+            <div className="min-w-0">
+              <p>{l.description}</p>
+              {l.quantity !== null && l.unitPriceMinor !== null && <p className="text-xs text-graphite-mute">{l.quantity} {l.unit} × {money(l.unitPriceMinor)}</p>}
+            </div>
+            <span className="num shrink-0">{money(l.priceMinor)}</span>
+          </li>
+        ))}
+      </ul>
+      <div className="hidden overflow-x-auto sm:block">
         <table className="data-table" aria-label="Quote lines">
           <thead><tr><th>Item</th><th className="num">Qty</th><th>Unit</th><th className="num">Unit price</th><th className="num">Amount</th></tr></thead>
           <tbody>

@@ -118,7 +118,7 @@ export function quoteMail(q: QuoteMailFacts & { replaces: string | null }): Rend
   const text = [
     `Hello ${q.customerName},`,
     '',
-    `Here is ${q.shopName}'s quote ${q.title} for ${q.jobName}: ${q.total} in all. The PDF is attached.`,
+    `Here is your quote ${q.title} from ${q.shopName} for ${q.jobName}: ${q.total} in all. The PDF is attached.`,
     ...(replaces ? [replaces] : []),
     '',
     'Read it, then accept or decline it on its page:',
@@ -135,7 +135,7 @@ export function quoteMail(q: QuoteMailFacts & { replaces: string | null }): Rend
     q.shopName,
     [
       `Hello ${escapeHtml(q.customerName)},`,
-      `Here is ${escapeHtml(q.shopName)}’s quote <strong>${escapeHtml(q.title)}</strong> for ${escapeHtml(q.jobName)}: <strong>${escapeHtml(q.total)}</strong> in all. The PDF is attached.`,
+      `Here is your quote <strong>${escapeHtml(q.title)}</strong> from ${escapeHtml(q.shopName)} for ${escapeHtml(q.jobName)}: <strong>${escapeHtml(q.total)}</strong> in all. The PDF is attached.`,
       ...(replaces ? [escapeHtml(replaces)] : []),
       `${escapeHtml(deposit)} The quote holds until ${escapeHtml(q.validUntil)}.`,
     ],

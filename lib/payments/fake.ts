@@ -228,8 +228,8 @@ export async function startPaymentsFake(options: { webhookUrl: string; webhookSe
     if (req.method !== 'POST') return page(200, null);
     if (s.status !== 'open') return page(409, { text: 'This checkout is no longer open.', tone: 'bad' });
     const card = ((await readBody(req)).get('card') ?? '').replace(/[\s-]/g, '');
-    if (card === TEST_CARD_DECLINED) return page(402, { text: 'Your card was declined. Nothing was charged; try another card.', tone: 'bad' });
-    if (card !== TEST_CARD_PAYS) return page(400, { text: 'This is a test checkout: use the test card 4242 4242 4242 4242.', tone: 'bad' });
+    if (card === TEST_CARD_DECLINED) return page(200, { text: 'Your card was declined. Nothing was charged; try another card.', tone: 'bad' });
+    if (card !== TEST_CARD_PAYS) return page(200, { text: 'This is a test checkout: use the test card 4242 4242 4242 4242.', tone: 'bad' });
     s.status = 'complete';
     s.payment_status = 'paid';
     s.payment_intent = id('pi');
@@ -243,6 +243,10 @@ export async function startPaymentsFake(options: { webhookUrl: string; webhookSe
 
   const server = http.createServer((req, res) => {
     const path = new URL(req.url ?? '/', 'http://fake').pathname;
+    if (path === '/favicon.ico') {
+      res.writeHead(204);
+      return res.end();
+    }
     const page = /^\/checkout\/([\w-]+)$/.exec(path);
     const work = page ? checkout(req, res, page[1]) : path.startsWith('/v1/') ? api(req, res, path) : Promise.resolve(apiError(res, 404, 'Not found.'));
     work.catch((error: unknown) => {

@@ -67,7 +67,7 @@ test('the estimator builds a quote from the demo kitchen’s nested plan with th
   fs.copyFileSync(file, `test-results/pdf/quote-${process.env.E2E_PORT ?? 'e2e'}.pdf`);
 
   page.once('dialog', (d) => d.accept());
-  await page.getByRole('button', { name: 'Mark as sent' }).click();
+  await page.getByRole('button', { name: 'Send to Priya & Sam Hollis' }).click();
   await expect(page.getByRole('heading', { level: 2, name: /rev A/ })).toContainText('Sent');
   await expect(page.getByRole('button', { name: 'New revision' })).toBeVisible();
   await shot(page, 'quotes-03-sent-1440');
