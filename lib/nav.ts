@@ -14,7 +14,8 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/setup-cards', label: 'Setup cards', permission: 'jobs:read', hint: 'Router settings per joint and thickness' },
   { href: '/stock', label: 'Stock room', permission: 'stock:read', hint: 'Sheets, boards and offcuts' },
   { href: '/yield', label: 'Yield ledger', permission: 'yield:read', hint: 'What the stock became' },
-  { href: '/reports', label: 'Reports', permission: 'yield:read', hint: 'Yield and the rack over time' },
+  // The estimator sees the quoting report only; the owner every report (the page decides per section).
+  { href: '/reports', label: 'Reports', permission: 'quotes:read', hint: 'Yield, the rack and quotes over time' },
   { href: '/shop-floor', label: 'Shop floor', permission: 'sawsteps:tick', hint: 'Saw orders to cut' },
   { href: '/team', label: 'Team', permission: 'team:manage', hint: 'People and roles' },
   { href: '/outbox', label: 'Outbox', permission: 'mail:manage', hint: 'Mail sent and failed' },

@@ -89,3 +89,32 @@ export function StockValueChart({ points, currency }: { points: ValuePoint[]; cu
     </div>
   );
 }
+
+export interface QuotingPoint {
+  label: string;
+  sent: number;
+  accepted: number;
+  declined: number;
+  expired: number;
+}
+
+/** Quote revisions sent, and what their customers did with them, per period. */
+export function QuotingChart({ points }: { points: QuotingPoint[] }) {
+  return (
+    <div className="h-64 w-full" role="img" aria-label={`Quotes per period: ${points.map((p) => `${p.label} ${p.sent} sent, ${p.accepted} accepted, ${p.declined} declined, ${p.expired} expired`).join('; ')}`}>
+      <ResponsiveContainer width="100%" height="100%">
+        <BarChart data={points} margin={{ top: 12, right: 16, bottom: 4, left: 0 }}>
+          <CartesianGrid stroke={INK.edge} vertical={false} />
+          <XAxis dataKey="label" {...axis} />
+          <YAxis allowDecimals={false} width={40} {...axis} />
+          <Tooltip />
+          <Legend wrapperStyle={{ fontSize: 12 }} />
+          <Bar dataKey="sent" name="Sent" fill={INK.graphite} isAnimationActive={false} />
+          <Bar dataKey="accepted" name="Accepted" fill={INK.sage} isAnimationActive={false} />
+          <Bar dataKey="declined" name="Declined" fill={INK.brick} isAnimationActive={false} />
+          <Bar dataKey="expired" name="Expired" fill={INK.faint} isAnimationActive={false} />
+        </BarChart>
+      </ResponsiveContainer>
+    </div>
+  );
+}

@@ -40,15 +40,15 @@ export interface YieldRow {
   sawWasteArea: number;
 }
 
-const rowsOf = <T>(result: unknown): T[] => ((result as { rows?: T[] }).rows ?? (result as T[]));
+export const rowsOf = <T>(result: unknown): T[] => ((result as { rows?: T[] }).rows ?? (result as T[]));
 
 /** The day after a `YYYY-MM-DD` day. */
 const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
 
 /** The instant a shop day starts, as a timestamptz, from a day read on the shop's clock. */
-const dayStart = (day: string, zone: string) => sql`(${day}::date::timestamp at time zone ${zone})`;
-const periodOf = (column: unknown, f: ReportFilter) => sql`to_char(date_trunc(${f.by}, ${column} at time zone ${f.timeZone}), 'YYYY-MM-DD')`;
-const inRange = (column: unknown, f: ReportFilter) => sql`${column} >= ${dayStart(f.from, f.timeZone)} and ${column} < ${dayStart(f.to, f.timeZone)} + interval '1 day'`;
+export const dayStart = (day: string, zone: string) => sql`(${day}::date::timestamp at time zone ${zone})`;
+export const periodOf = (column: unknown, f: ReportFilter) => sql`to_char(date_trunc(${f.by}, ${column} at time zone ${f.timeZone}), 'YYYY-MM-DD')`;
+export const inRange = (column: unknown, f: ReportFilter) => sql`${column} >= ${dayStart(f.from, f.timeZone)} and ${column} < ${dayStart(f.to, f.timeZone)} + interval '1 day'`;
 const materialIs = (column: unknown, f: ReportFilter) => (f.material ? sql`and ${column} = ${f.material}` : sql``);
 
 /**

@@ -8,4 +8,6 @@ export const rows: AuthzRow[] = [
   { route: '/api/reports/yield', method: 'GET', expect: ownerOnly },
   { route: '/api/reports/offcut-use', method: 'GET', expect: ownerOnly },
   { route: '/api/reports/stock-value', method: 'GET', expect: ownerOnly },
+  // Quoting is the estimator's work too.
+  { route: '/api/reports/quoting', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 200 } },
 ];
