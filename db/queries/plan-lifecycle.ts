@@ -2,15 +2,15 @@ import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { offcuts, placements, planPieces, plans, stockItems, stockMovements } from '../schema';
 import { readPlan } from '@/lib/nesting';
-import { isKeepableOffcut, offcutCostCents, offcutSize } from '@/lib/stock/offcut-rules';
+import { FinishChoiceError, finishOutcome, minOffcutFor, type FinishOutcome } from '@/lib/stock/finish-plan';
 import { nestRequestSchema, type Plan, type PlanPiece } from '@/shared/schemas/nesting';
 import { finishPlanSchema, type FinishPlanInput, type MissingPiece } from '@/shared/schemas/stock';
 import { stockRef } from './nest-request';
 import { recordAudit } from './audit';
 import { syncJobStatus } from './job-status';
+import { getShopSettings } from './shops';
 import { closeRecuts, holdRecutsForPlan, recordDamagedPieces, reopenRecuts } from './recuts';
 import { HttpError } from '@/lib/api/errors';
-import { finishFigures } from '@/lib/recuts/recuts';
 import type { JobStatus } from '@/shared/schemas/job';
 
 /**
@@ -273,9 +273,17 @@ export async function finishPlan(
   return db.transaction(async (tx) => {
     const row = await moveStatus(tx, shopId, planId, ['released', 'cutting'], { status: 'done', finishedAt: new Date(), finishedBy: userId }, 'marked done');
     const plan = readPlan(row.document);
-    const request = nestRequestSchema.safeParse(row.request);
-    const stockById = new Map((request.success ? request.data.stock : []).map((s) => [s.id, s]));
-    const settings = request.success ? request.data.settings : { minOffcutLength: 0, minOffcutWidth: 0 };
+    const parsed = nestRequestSchema.safeParse(row.request);
+    const request = parsed.success ? parsed.data : null;
+    const shop = await getShopSettings(tx, shopId);
+    if (!shop) throw new PlanStateError(404, 'The shop was not found.');
+    let outcome: FinishOutcome;
+    try {
+      outcome = finishOutcome(plan, request, minOffcutFor(request, shop), body);
+    } catch (error) {
+      if (error instanceof FinishChoiceError) throw new PlanStateError(422, error.message);
+      throw error;
+    }
     const reason = `Cut for plan “${row.name}”`;
 
     await giveBack(tx, shopId, planId, userId, reason, 'used');
@@ -301,62 +309,27 @@ export async function finishPlan(
       }
     }
 
-    // Offcuts: every keepable one goes on the rack unless the cutter discards it.
-    const choices = new Map(body.offcuts.map((o) => [`${o.piece}:${o.index}`, o]));
-    for (const key of choices.keys()) {
-      const [p, i] = key.split(':').map(Number);
-      if (!plan.pieces[p]?.offcuts?.[i]) throw new PlanStateError(422, `Piece ${p + 1} has no offcut ${i + 1}.`);
-    }
+    // Offcuts on the rack, each with its movement.
     const created: FinishResult['offcuts'] = [];
-    let keptArea = 0;
-    for (const [p, piece] of plan.pieces.entries()) {
-      const source = stockById.get(piece.stockId);
-      const grain = source?.grain ?? 'along-length';
-      for (const [i, rect] of (piece.offcuts ?? []).entries()) {
-        const choice = choices.get(`${p}:${i}`);
-        if (choice && !choice.keep) continue;
-        if (!isKeepableOffcut(rect, { minLength: settings.minOffcutLength, minWidth: settings.minOffcutWidth })) continue;
-        const size = offcutSize(rect, grain);
-        const location = choice?.location ?? '';
-        const [o] = await tx
-          .insert(offcuts)
-          .values({
-            shopId,
-            material: piece.material,
-            thicknessMm: piece.thickness,
-            ...size,
-            grain,
-            status: 'available',
-            location,
-            sourcePlanId: planId,
-            sourcePiece: String(p + 1),
-            costCents: offcutCostCents(rect, { w: piece.length, h: piece.width }, Math.round(source?.costEach ?? 0)),
-          })
-          .returning({ id: offcuts.id });
-        await tx.insert(stockMovements).values({ shopId, kind: 'offcut-created', offcutId: o.id, quantity: 1, planId, userId, reason: `From piece ${p + 1} of plan “${row.name}”` });
-        created.push({ id: o.id, ...size, location });
-        keptArea += rect.w * rect.h;
-      }
+    for (const o of outcome.rack) {
+      const [row_] = await tx
+        .insert(offcuts)
+        .values({ shopId, material: o.material, thicknessMm: o.thicknessMm, lengthMm: o.lengthMm, widthMm: o.widthMm, grain: o.grain, status: 'available', location: o.location, sourcePlanId: planId, sourcePiece: String(o.piece + 1), costCents: o.costCents })
+        .returning({ id: offcuts.id });
+      await tx.insert(stockMovements).values({ shopId, kind: 'offcut-created', offcutId: row_.id, quantity: 1, planId, userId, reason: `From piece ${o.piece + 1} of plan “${row.name}”` });
+      created.push({ id: row_.id, lengthMm: o.lengthMm, widthMm: o.widthMm, location: o.location });
     }
 
-    // Damaged parts: marked on their placement rows; their area counts as waste, not yield.
+    // Damaged parts: marked on their placement rows; their area counts as spoiled, not yield.
     await writePieceRows(tx, shopId, planId, plan);
-    const seen = new Set<string>();
-    let damagedArea = 0;
-    for (const d of body.damaged) {
-      const key = `${d.piece}:${d.partId}:${d.instance}`;
-      if (seen.has(key)) throw new PlanStateError(422, `Part ${d.partId} #${d.instance} on piece ${d.piece + 1} is listed as damaged twice.`);
-      seen.add(key);
-      const placed = plan.pieces[d.piece]?.placements.find((pl) => pl.partId === d.partId && pl.instance === d.instance);
-      if (!placed) throw new PlanStateError(422, `Piece ${d.piece + 1} has no part ${d.partId} #${d.instance}.`);
-      damagedArea += placed.w * placed.h;
+    for (const d of outcome.damaged) {
       const [pieceRow] = await tx.select({ id: planPieces.id }).from(planPieces).where(and(eq(planPieces.planId, planId), eq(planPieces.index, d.piece)));
       // A placement's position is unique on its piece, and needs no part row (a typed part id may not be a uuid).
       if (pieceRow) {
         await tx
           .update(placements)
           .set({ damaged: true })
-          .where(and(eq(placements.planPieceId, pieceRow.id), eq(placements.instance, d.instance), eq(placements.xMm, placed.x), eq(placements.yMm, placed.y)));
+          .where(and(eq(placements.planPieceId, pieceRow.id), eq(placements.instance, d.instance), eq(placements.xMm, d.x), eq(placements.yMm, d.y)));
       }
     }
 
@@ -367,12 +340,10 @@ export async function finishPlan(
         spoiled_area_mm2 = coalesce((select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and pl.damaged), 0)
        where pp.plan_id = ${planId}`);
 
-    const added = await recordDamagedPieces(tx, { shopId, userId, plan: row, request: request.success ? request.data : null, damaged: body.damaged });
+    const added = await recordDamagedPieces(tx, { shopId, userId, plan: row, request, damaged: body.damaged });
     const closed = row.recutPlan ? await closeRecuts(tx, { shopId, planId, userId }) : [];
 
-    const figures = planFigures(plan);
-    const { yieldRatio, wasteRatio, spoiledRatio } = finishFigures({ stockArea: figures.stockArea, partArea: figures.partArea, keptOffcutArea: keptArea, spoiledArea: damagedArea });
-    const costCents = Math.round(figures.cost);
+    const { yieldRatio, wasteRatio, spoiledRatio, costCents } = outcome;
     await tx.update(plans).set({ yieldRatio, wasteRatio, spoiledRatio, costCents }).where(eq(plans.id, planId));
     await recordAudit(tx, { shopId, userId, action: 'finish', entity: 'plan', entityId: planId, data: { offcuts: created.length, damaged: body.damaged.length, recutsClosed: closed.length } });
     const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: `plan “${row.name}” finished` });
@@ -380,15 +351,3 @@ export async function finishPlan(
   });
 }
 
-/** Stock area, part area and cost of a plan, from its totals or, for an edited plan without totals, its pieces. */
-export function planFigures(plan: Plan): { stockArea: number; partArea: number; cost: number } {
-  if (plan.totals) return { stockArea: plan.totals.stockArea, partArea: plan.totals.partArea, cost: plan.totals.cost };
-  return plan.pieces.reduce(
-    (acc, p) => ({
-      stockArea: acc.stockArea + p.length * p.width,
-      partArea: acc.partArea + p.placements.reduce((a, pl) => a + pl.w * pl.h, 0),
-      cost: acc.cost + (p.figures?.cost ?? 0),
-    }),
-    { stockArea: 0, partArea: 0, cost: 0 },
-  );
-}

@@ -2,7 +2,7 @@ import { and, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { jobs, offcuts, plans, users } from '../schema';
 import { readPlan } from '@/lib/nesting';
-import { planFigures } from './plan-lifecycle';
+import { planFigures } from '@/lib/stock/finish-plan';
 
 /**
  * Finished plans for the yield ledger: yield, waste and cost recorded at done, with the stock area that weighs them.

@@ -129,6 +129,7 @@ export const finishPlanSchema = z.strictObject({
     .default([]),
 });
 export type FinishPlanInput = z.input<typeof finishPlanSchema>;
+export type FinishPlanChoices = z.output<typeof finishPlanSchema>;
 
 /** A piece a release needed that is no longer free (the 409 answer lists each). */
 export interface MissingPiece {

@@ -13,6 +13,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { can } from '@/lib/auth/permissions';
 import { requirePageUser } from '@/lib/auth/session';
+import { minOffcutFor } from '@/lib/stock/finish-plan';
 import { isKeepableOffcut } from '@/lib/stock/offcut-rules';
 import { formatLength } from '@/lib/units/format-length';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
@@ -30,7 +31,7 @@ export default async function FinishPlanPage({ params }: { params: Promise<{ id:
   const [job] = await db.select({ name: jobs.name }).from(jobs).where(eq(jobs.id, plan.jobId));
   const len = (mm: number) => formatLength(mm, settings.units);
   const request = nestRequestSchema.safeParse(plan.request);
-  const min = request.success ? { minLength: request.data.settings.minOffcutLength, minWidth: request.data.settings.minOffcutWidth } : { minLength: settings.minOffcutLengthMm, minWidth: settings.minOffcutWidthMm };
+  const min = minOffcutFor(request.success ? request.data : null, settings);
   const labels = new Map((request.success ? request.data.parts : []).map((p) => [p.id, p.label || p.id]));
 
   const pieces: FinishPiece[] = plan.document.pieces.map((p, index) => ({
