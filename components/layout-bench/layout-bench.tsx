@@ -10,7 +10,7 @@ import { useNestingWorker } from '@/components/nesting/use-nesting-worker';
 import { api, ApiError } from '@/lib/client/api';
 import { docToPlan, planToDoc, type PartInfo } from '@/lib/layout-bench/document';
 import { prepareRenest } from '@/lib/layout-bench/renest';
-import { createBenchStore, mayRotate, type BenchStore } from '@/lib/layout-bench/store';
+import { createBenchStore, hasUnsavedChanges, mayRotate, type BenchStore } from '@/lib/layout-bench/store';
 import { fitView, layoutPieces } from '@/lib/layout-bench/world';
 import { rebuildCuts } from '@/lib/nesting';
 import { readBenchPlan } from '@/lib/layout-bench/read-bench-plan';
@@ -51,9 +51,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   const selection = useStore(store, (s) => s.view.selection);
   const canUndo = useStore(store, (s) => s.past.length > 0);
   const canRedo = useStore(store, (s) => s.future.length > 0);
-  const steps = useStore(store, (s) => s.past.length);
-  const [savedAtStep, setSavedAtStep] = useState(0);
-  const dirty = steps !== savedAtStep;
+  const dirty = useStore(store, hasUnsavedChanges);
   const { check, pending } = useLiveCheck(request, doc);
   const frames = useMemo(() => layoutPieces(doc.pieces), [doc.pieces]);
   const fmt = useCallback((mm: number) => formatLength(mm, units), [units]);
@@ -93,7 +91,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
     mutationFn: () => api<{ updatedAt: string }>(`/api/plans/${data.id}`, { method: 'PUT', body: { plan: rebuildCuts(request, docToPlan(store.getState().doc)), baseUpdatedAt: base } }),
     onSuccess: (res) => {
       setBase(res.updatedAt);
-      setSavedAtStep(store.getState().past.length);
+      store.getState().markSaved();
       setNotice('Saved. The saw order was rebuilt from this layout.');
       void queryClient.invalidateQueries({ queryKey: ['plans'] });
       router.refresh(); // the figures above the bench are read on the server

@@ -47,6 +47,8 @@ export interface BenchState {
   doc: BenchDoc;
   past: Step[];
   future: Step[];
+  /** The undo step the saved plan ends with (null: the plan as loaded): see `hasUnsavedChanges`. */
+  savedAt: Step | null;
   view: BenchView;
   context: BenchContext;
   move(key: string, piece: number, x: number, y: number): void;
@@ -58,6 +60,8 @@ export interface BenchState {
   replaceDoc(next: BenchDoc): void;
   undo(): void;
   redo(): void;
+  /** The document as it stands now is the saved plan. */
+  markSaved(): void;
   select(keys: readonly string[]): void;
   setCamera(camera: Camera): void;
   beginDrag(key: string): boolean;
@@ -90,6 +94,12 @@ export function mayRotate(doc: BenchDoc, context: BenchContext, key: string): bo
 
 export type BenchStore = StoreApi<BenchState>;
 
+/**
+ * Whether the document differs from the saved plan: the last undo step is not the one it was saved at. (Counting
+ * steps is not enough: save, undo, then one new edit is as many steps as at the save, but a different document.)
+ */
+export const hasUnsavedChanges = (s: Pick<BenchState, 'past' | 'savedAt'>) => (s.past.at(-1) ?? null) !== s.savedAt;
+
 export function createBenchStore(doc: BenchDoc, context: BenchContext, camera: Camera = { x: 24, y: 24, scale: 0.1 }): BenchStore {
   return createStore<BenchState>()((set, get) => {
     /** Records and applies the changes `edit` makes to some placements (unchanged ones are not recorded). */
@@ -106,6 +116,7 @@ export function createBenchStore(doc: BenchDoc, context: BenchContext, camera: C
       doc,
       past: [],
       future: [],
+      savedAt: null,
       view: { selection: [], camera, drag: null },
       context,
       move(key, piece, x, y) {
@@ -139,6 +150,9 @@ export function createBenchStore(doc: BenchDoc, context: BenchContext, camera: C
           unplaced: { before: doc.unplaced, after: next.unplaced },
         };
         set({ doc: apply(doc, step, 'after'), past: [...get().past, step], future: [], view: { ...get().view, selection: [] } });
+      },
+      markSaved() {
+        set({ savedAt: get().past.at(-1) ?? null });
       },
       undo() {
         const { past, future, doc } = get();
