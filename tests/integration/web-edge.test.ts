@@ -17,7 +17,7 @@ import { MAX_BODY_BYTES } from '@/lib/api/request-guard';
 import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 import { request, sessionCookie } from '../support/fixtures';
 import { uniqueEmail } from '../support/unique';
-import type { AuthzRow } from './authz/types';
+import { SIGNED_BY_SERVICE, type AuthzRow } from './authz/types';
 
 let handle: DbHandle;
 let fx: TwoShops;
@@ -90,7 +90,7 @@ describe('requests from another site are refused before anything happens', () =>
 
   // Every state-changing handler in the authorization table, so a new route cannot forget it.
   const TABLE: AuthzRow[] = Object.values(import.meta.glob<{ rows?: AuthzRow[] }>('./authz/*.ts', { eager: true })).flatMap((m) => m.rows ?? []);
-  const writes = TABLE.filter((r) => r.method !== 'GET');
+  const writes = TABLE.filter((r) => r.method !== 'GET' && !SIGNED_BY_SERVICE.includes(r.route));
   test.each(writes)('$method $route from another site → 403, with a plain-text body → 415', async ({ route, method, body, target }) => {
     const params = target ? await target({ ...fx, db: handle.db }) : {};
     const url = Object.entries(params).reduce((u, [k, v]) => u.replace(`[${k}]`, v), route);
@@ -100,6 +100,13 @@ describe('requests from another site are refused before anything happens', () =>
     expect(cross.status).toBe(403);
     const plain = await mod[method](await request(url, { method, rawBody: payload, user: fx.owner, headers: { 'content-type': 'text/plain;charset=UTF-8' } }), { params: Promise.resolve(params) } as never);
     expect(plain.status).toBe(415);
+  });
+
+  test.each(SIGNED_BY_SERVICE)('%s comes from a service, not a browser: with a browser’s cookie and another site’s headers, it still wants the signature (400)', async (route) => {
+    const mod = (await import(/* @vite-ignore */ path.resolve('app/api', route.slice('/api/'.length), 'route.ts'))) as Record<string, typeof jobsRoute.POST>;
+    const res = await mod.POST(await request(route, { method: 'POST', rawBody: '{"id":"evt_forged","type":"checkout.session.completed"}', user: fx.owner, headers: EVIL }), noParams);
+    expect(res.status).toBe(400);
+    expect((await res.json()).error).toMatch(/signed by the payments service/);
   });
 });
 

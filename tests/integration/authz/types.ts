@@ -25,3 +25,6 @@ export interface AuthzRow {
 
 /** Routes anyone may call (they reveal nothing about any shop). */
 export const PUBLIC_ROUTES = ['/api/auth/[...nextauth]', '/api/health'];
+
+/** Routes called by another service, not a browser: judged by the signature on the body, not by Origin or type. */
+export const SIGNED_BY_SERVICE = ['/api/payments/webhook'];

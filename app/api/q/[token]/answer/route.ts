@@ -13,6 +13,7 @@ export const POST = route(
     await throttlePublicRequest(req, 'quote-page');
     const quote = await countingFailedLinks(req, () => answerQuote(db, params.token, body, clientAddress(req.headers)));
     wakeMailSender();
-    return quote;
+    // What changed, not the quote again: the page reloads to show it.
+    return { state: quote.state, answeredAt: quote.answeredAt, acceptedName: quote.revision.acceptedName, declineReason: quote.revision.declineReason, paymentClosed: quote.paymentClosed };
   },
 );
