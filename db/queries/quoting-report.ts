@@ -9,20 +9,12 @@ import { sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { quoteNumberText, revisionLetter } from '@/shared/schemas/quote';
 import type { QuoteLine } from '@/shared/schemas/quote';
+import type { QuotingFigures } from '@/lib/reports/quoting-report';
 import { revisionTotals } from './quotes';
 import { inRange, periodOf, rowsOf, type ReportFilter } from './reports';
 
-export interface QuotingPeriod {
-  period: string;
-  sent: number;
-  accepted: number;
-  declined: number;
-  expired: number;
-  /** Totals of the revisions accepted in the period (minor units). */
-  wonMinor: number;
-  /** Deposits paid in the period, less refunds of them (minor units). */
-  depositsMinor: number;
-}
+/** One period's quotes and money (lib/reports/quoting-report.ts has the CSV of it). */
+export type QuotingPeriod = QuotingFigures;
 
 export interface QuotedAgainstUsed {
   jobId: string;

@@ -96,6 +96,28 @@ export function passwordResetMail(input: { shopName: string; personName: string;
   return { subject, text, html };
 }
 
+/**
+ * A customer's mail said once and rendered twice: a paragraph is a list of runs, plain text or `{ strong }`; the
+ * plain-text part prints them as they are (with the link on a line of its own), the HTML part escapes them.
+ */
+type Run = string | { strong: string };
+interface CustomerMail {
+  shopName: string;
+  subject: string;
+  paragraphs: Run[][];
+  button: { label: string; href: string; lead: string } | null;
+  after: string[];
+}
+
+function renderCustomerMail(m: CustomerMail): RenderedMail {
+  const plain = (p: Run[]) => p.map((r) => (typeof r === 'string' ? r : r.strong)).join('');
+  const html = (p: Run[]) => p.map((r) => (typeof r === 'string' ? escapeHtml(r) : `<strong>${escapeHtml(r.strong)}</strong>`)).join('');
+  const [greeting, ...body] = m.paragraphs;
+  const blocks = [[plain(greeting)], ...body.map((p) => [plain(p)]), ...(m.button ? [[m.button.lead, '', m.button.href]] : []), ...m.after.map((a) => [a]), [`— ${m.shopName}`]];
+  const text = `${blocks.map((b) => b.join('\n')).join('\n\n')}\n`;
+  return { subject: m.subject, text, html: layout(m.shopName, m.paragraphs.map(html), m.button, m.after.map(escapeHtml)) };
+}
+
 /** What the customer's mails say about the quote (prices only: never cost, margin or hours). */
 export interface QuoteMailFacts {
   shopName: string;
@@ -112,88 +134,47 @@ export interface QuoteMailFacts {
 }
 
 export function quoteMail(q: QuoteMailFacts & { replaces: string | null }): RenderedMail {
-  const subject = `${q.shopName}: your quote ${q.title} for ${q.jobName}`;
   const deposit = q.noDeposit ? 'No deposit is asked for.' : `A deposit of ${q.deposit} is paid online once you accept.`;
-  const replaces = q.replaces ? `This quote replaces ${q.replaces}; its link no longer works.` : null;
-  const text = [
-    `Hello ${q.customerName},`,
-    '',
-    `Here is your quote ${q.title} from ${q.shopName} for ${q.jobName}: ${q.total} in all. The PDF is attached.`,
-    ...(replaces ? [replaces] : []),
-    '',
-    'Read it, then accept or decline it on its page:',
-    '',
-    q.link,
-    '',
-    `${deposit} The quote holds until ${q.validUntil}.`,
-    'Questions? Reply to the shop directly: this address is not read.',
-    '',
-    `— ${q.shopName}`,
-    '',
-  ].join('\n');
-  const html = layout(
-    q.shopName,
-    [
-      `Hello ${escapeHtml(q.customerName)},`,
-      `Here is your quote <strong>${escapeHtml(q.title)}</strong> from ${escapeHtml(q.shopName)} for ${escapeHtml(q.jobName)}: <strong>${escapeHtml(q.total)}</strong> in all. The PDF is attached.`,
-      ...(replaces ? [escapeHtml(replaces)] : []),
-      `${escapeHtml(deposit)} The quote holds until ${escapeHtml(q.validUntil)}.`,
+  return renderCustomerMail({
+    shopName: q.shopName,
+    subject: `${q.shopName}: your quote ${q.title} for ${q.jobName}`,
+    paragraphs: [
+      [`Hello ${q.customerName},`],
+      ['Here is your quote ', { strong: q.title }, ` from ${q.shopName} for ${q.jobName}: `, { strong: q.total }, ' in all. The PDF is attached.'],
+      ...(q.replaces ? [[`This quote replaces ${q.replaces}; its link no longer works.`]] : []),
+      [`${deposit} The quote holds until ${q.validUntil}.`],
     ],
-    { label: 'Read and answer the quote', href: q.link },
-    ['Questions? Reply to the shop directly: this address is not read.'],
-  );
-  return { subject, text, html };
+    button: { label: 'Read and answer the quote', href: q.link, lead: 'Read it, then accept or decline it on its page:' },
+    after: ['Questions? Reply to the shop directly: this address is not read.'],
+  });
 }
 
 export function quoteAcceptedMail(q: QuoteMailFacts & { acceptedName: string; acceptedAt: string }): RenderedMail {
-  const subject = `${q.shopName}: you accepted quote ${q.title}`;
   const next = q.noDeposit ? 'No deposit is needed: the shop will be in touch about the next steps.' : `The next step is the deposit of ${q.deposit}, paid online on the quote's page.`;
-  const text = [
-    `Hello ${q.customerName},`,
-    '',
-    `Thank you: quote ${q.title} for ${q.jobName} (${q.total}) was accepted by ${q.acceptedName} on ${q.acceptedAt}.`,
-    next,
-    '',
-    q.link,
-    '',
-    `— ${q.shopName}`,
-    '',
-  ].join('\n');
-  const html = layout(
-    q.shopName,
-    [
-      `Hello ${escapeHtml(q.customerName)},`,
-      `Thank you: quote <strong>${escapeHtml(q.title)}</strong> for ${escapeHtml(q.jobName)} (${escapeHtml(q.total)}) was accepted by ${escapeHtml(q.acceptedName)} on ${escapeHtml(q.acceptedAt)}.`,
-      escapeHtml(next),
+  return renderCustomerMail({
+    shopName: q.shopName,
+    subject: `${q.shopName}: you accepted quote ${q.title}`,
+    paragraphs: [
+      [`Hello ${q.customerName},`],
+      ['Thank you: quote ', { strong: q.title }, ` for ${q.jobName} (${q.total}) was accepted by ${q.acceptedName} on ${q.acceptedAt}.`],
+      [next],
     ],
-    { label: q.noDeposit ? 'See the quote' : 'Pay the deposit', href: q.link },
-    [],
-  );
-  return { subject, text, html };
+    button: { label: q.noDeposit ? 'See the quote' : 'Pay the deposit', href: q.link, lead: q.noDeposit ? 'The quote:' : 'Pay it here:' },
+    after: [],
+  });
 }
 
 export function depositReceiptMail(q: Omit<QuoteMailFacts, 'link' | 'validUntil'> & { paid: string; paidAt: string; balance: string; reference: string }): RenderedMail {
-  const subject = `${q.shopName}: deposit received for ${q.title}`;
-  const text = [
-    `Hello ${q.customerName},`,
-    '',
-    `We received your deposit of ${q.paid} for quote ${q.title} (${q.jobName}) on ${q.paidAt}. Thank you.`,
-    `Quote total ${q.total}; balance still to pay ${q.balance}.`,
-    `Payment reference: ${q.reference}`,
-    '',
-    `— ${q.shopName}`,
-    '',
-  ].join('\n');
-  const html = layout(
-    q.shopName,
-    [
-      `Hello ${escapeHtml(q.customerName)},`,
-      `We received your deposit of <strong>${escapeHtml(q.paid)}</strong> for quote ${escapeHtml(q.title)} (${escapeHtml(q.jobName)}) on ${escapeHtml(q.paidAt)}. Thank you.`,
-      `Quote total ${escapeHtml(q.total)}; balance still to pay ${escapeHtml(q.balance)}.`,
-      `Payment reference: ${escapeHtml(q.reference)}`,
+  return renderCustomerMail({
+    shopName: q.shopName,
+    subject: `${q.shopName}: deposit received for ${q.title}`,
+    paragraphs: [
+      [`Hello ${q.customerName},`],
+      ['We received your deposit of ', { strong: q.paid }, ` for quote ${q.title} (${q.jobName}) on ${q.paidAt}. Thank you.`],
+      [`Quote total ${q.total}; balance still to pay ${q.balance}.`],
+      [`Payment reference: ${q.reference}`],
     ],
-    null,
-    ['Keep this mail as your receipt.'],
-  );
-  return { subject, text, html };
+    button: null,
+    after: ['Keep this mail as your receipt.'],
+  });
 }
