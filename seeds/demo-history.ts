@@ -2,13 +2,15 @@
  * Six months of the demo shop's past work, so the reports have something to show: six invented jobs, each nested
  * by the real engine, released and finished through the stock room's own functions, then dated back to the day it
  * was cut. Their sheets are bought for the job (not pulled from today's rack, whose counts stay as seeded), their
- * offcuts go on the rack and are used by the next job or thrown out, and one part was damaged at the saw.
+ * offcuts go on the rack and are used by the next job or thrown out, and one part was damaged at the saw. Each was won
+ * by a quote its customer accepted online (the deposit paid); two other quotes were declined or ran out.
  */
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Db } from '@/db/open';
 import { buildNestRequest, stockRef } from '@/db/queries/nest-request';
 import { finishPlan, releasePlan } from '@/db/queries/plan-lifecycle';
-import { customers, jobs, offcuts, parts, plans, recuts, stockMovements } from '@/db/schema';
+import { createQuote, revisionTotals } from '@/db/queries/quotes';
+import { customers, jobs, offcuts, parts, plans, quotePayments, quoteRevisions, quotes, recuts, stockMovements } from '@/db/schema';
 import { optimize } from '@/lib/nesting';
 import { inches } from '@/lib/units/length';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
@@ -56,6 +58,9 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
       .insert(plans)
       .values({ shopId, jobId: job.id, name: past.plan, status: 'draft', request, document, yieldRatio: document.totals?.yield ?? null, costCents: Math.round(document.totals?.cost ?? 0), createdBy: estimatorId, createdAt: acceptedAt })
       .returning({ id: plans.id });
+    // The quote that won the job, priced from this plan: sent four days before the customer accepted it online, the
+    // deposit paid the next day.
+    await pastQuote(db, { shopId, userId: estimatorId, jobId: job.id, planId: plan.id, sentAt: new Date(acceptedAt.getTime() - 4 * 86_400_000), answer: { status: 'accepted', at: acceptedAt, by: past.customer } });
     await releasePlan(db, { shopId, userId: estimatorId, planId: plan.id });
 
     const damagedLabel = 'damaged' in past ? past.damaged : undefined;
@@ -82,5 +87,61 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
     await db.update(offcuts).set({ status: 'scrapped' }).where(inArray(offcuts.id, rest.map((o) => o.id)));
     await db.insert(stockMovements).values(rest.map((o) => ({ shopId, kind: 'scrapped' as const, offcutId: o.id, quantity: -1, userId: cutterId, reason: 'Rack clear-out', createdAt: at })));
   }
+
+  // Two quotes that did not win: one declined, one left to run out.
+  for (const lost of LOST_QUOTES) {
+    const sentAt = new Date(lost.sentAt);
+    const [customer] = await db.insert(customers).values({ shopId, name: lost.customer, createdAt: sentAt, updatedAt: sentAt }).returning({ id: customers.id });
+    const [job] = await db.insert(jobs).values({ shopId, name: lost.name, customerId: customer.id, status: lost.status, createdBy: estimatorId, createdAt: sentAt, updatedAt: sentAt }).returning({ id: jobs.id });
+    const answer = lost.status === 'declined' ? { status: 'declined' as const, at: new Date(lost.answeredAt!), reason: lost.reason } : { status: 'expired' as const };
+    await pastQuote(db, { shopId, userId: estimatorId, jobId: job.id, planId: null, sentAt, answer, line: lost.line });
+  }
   return { jobs: PAST_JOBS.length, oldOffcut: oldest?.id ?? null };
+}
+
+const LOST_QUOTES = [
+  { name: 'Harrow porch bench', customer: 'Nell Harrow', status: 'declined', sentAt: '2026-09-02T16:00:00Z', answeredAt: '2026-09-09T01:20:00Z', reason: 'We found one ready-made.', line: { description: 'Porch bench, white oak, oiled', unitCostMinor: 118_000 } },
+  { name: 'Linden wine rack', customer: 'Cyril Linden', status: 'expired', sentAt: '2026-10-01T15:30:00Z', line: { description: 'Wine rack, 48 bottles, walnut', unitCostMinor: 96_000 } },
+] as const;
+
+/**
+ * A quote of the past, made as the estimator makes one (from the job's plan, if it has one) and then answered as its
+ * customer did; an accepted one has its deposit paid the next day.
+ */
+async function pastQuote(
+  db: Db,
+  q: {
+    shopId: string;
+    userId: string;
+    jobId: string;
+    planId: string | null;
+    sentAt: Date;
+    answer: { status: 'accepted'; at: Date; by: string } | { status: 'declined'; at: Date; reason: string } | { status: 'expired' };
+    line?: { description: string; unitCostMinor: number };
+  },
+) {
+  const made = await createQuote(db, q.shopId, q.userId, q.jobId, q.planId);
+  const lines = q.line ? [{ id: 'o-1', kind: 'other' as const, description: q.line.description, quantity: 1, unit: 'each', unitCostMinor: q.line.unitCostMinor, taxable: true, note: '' }] : made.lines;
+  const validUntil = new Date(q.sentAt.getTime() + made.validityDays * 86_400_000).toISOString().slice(0, 10);
+  const answeredAt = q.answer.status === 'expired' ? null : q.answer.at;
+  const [revision] = await db
+    .update(quoteRevisions)
+    .set({
+      lines,
+      status: q.answer.status,
+      sentAt: q.sentAt,
+      validUntil,
+      answeredAt,
+      acceptedName: q.answer.status === 'accepted' ? q.answer.by : null,
+      declineReason: q.answer.status === 'declined' ? q.answer.reason : null,
+      createdAt: q.sentAt,
+      updatedAt: answeredAt ?? q.sentAt,
+    })
+    .where(eq(quoteRevisions.id, made.id))
+    .returning();
+  await db.update(quotes).set({ createdAt: q.sentAt }).where(eq(quotes.id, revision.quoteId));
+  if (q.answer.status !== 'accepted') return;
+  const deposit = revisionTotals(revision).depositMinor;
+  const paidAt = new Date(q.answer.at.getTime() + 86_400_000);
+  await db.insert(quotePayments).values({ shopId: q.shopId, revisionId: revision.id, jobId: q.jobId, checkoutSessionId: `cs_demo_${revision.id}`, paymentIntentId: `pi_demo_${revision.id}`, amountMinor: deposit, currency: revision.currency, status: 'paid', createdAt: paidAt, paidAt });
 }

@@ -1,8 +1,8 @@
 /**
  * The owner's reports over the demo shop's six months of past jobs: the chart and its table show the same periods,
  * the filters live in the URL, the CSV holds the table's rows, dates are on the shop's clock (the last past job
- * ended at 23:30 on 19 November in Chicago, so its week is the 16th's, not the 20th's), and estimators and
- * cutters are not shown the page.
+ * ended at 23:30 on 19 November in Chicago, so its week is the 16th's, not the 20th's); estimators see the quoting
+ * report only, cutters no report.
  */
 import Papa from 'papaparse';
 import { expect, test } from './support/test';
@@ -70,14 +70,48 @@ test('the owner reads yield and offcut use by month, then by week for one materi
   }
 });
 
-test('estimators and cutters are not shown the reports, and the CSV refuses them', async ({ browser }) => {
-  for (const role of ['estimator', 'cutter'] as const) {
-    const page = await browser.newPage();
-    await signIn(page, role);
-    await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Reports/ })).toHaveCount(0);
-    await page.goto('/reports');
-    await expect(page.getByRole('heading', { name: 'Not open to your role' })).toBeVisible();
-    expect((await page.request.get('/api/reports/yield')).status()).toBe(403);
-    await page.close();
+test('the estimator sees only the quoting report; the cutter no report; the CSVs refuse them alike', async ({ browser }) => {
+  const estimator = await browser.newPage();
+  await signIn(estimator, 'estimator');
+  await estimator.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Reports/ }).click();
+  await expect(estimator.getByRole('heading', { level: 2, name: 'Quoting' })).toBeVisible();
+  await expect(estimator.getByRole('heading', { level: 2, name: 'Yield over time' })).toHaveCount(0);
+  await expect(estimator.getByRole('heading', { level: 2, name: 'Stock value' })).toHaveCount(0);
+  expect((await estimator.request.get('/api/reports/yield')).status()).toBe(403);
+  expect((await estimator.request.get('/api/reports/quoting')).status()).toBe(200);
+  await estimator.close();
+
+  const cutter = await browser.newPage();
+  await signIn(cutter, 'cutter');
+  await expect(cutter.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Reports/ })).toHaveCount(0);
+  await cutter.goto('/reports');
+  await expect(cutter.getByRole('heading', { name: 'Not open to your role' })).toBeVisible();
+  for (const report of ['yield', 'quoting']) expect((await cutter.request.get(`/api/reports/${report}`)).status()).toBe(403);
+  await cutter.close();
+});
+
+test('the owner reads the quoting report of the demo’s past quotes: counts by month, value won, deposits, and material quoted against used', async ({ page }) => {
+  await page.setViewportSize({ width: 1440, height: 900 });
+  await signIn(page, 'owner');
+  await page.goto(`/reports${RANGE}`);
+  const rows = page.getByRole('table', { name: 'Quotes by period' }).getByTestId('quoting-row');
+  await expect(rows.first()).toBeVisible();
+  // Each past job's quote was accepted and its deposit paid; one more was declined and one ran out (seeds/demo-history.ts).
+  const cells = await rows.evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent?.trim() ?? '')));
+  const sum = (col: number) => cells.reduce((n, r) => n + Number(r[col]), 0);
+  expect([sum(1), sum(2), sum(3), sum(4)]).toEqual([8, 6, 1, 1]);
+  await expect(page.getByTestId('report-win-rate')).toHaveText('75.0 %');
+  await expect(page.getByRole('table', { name: 'Material quoted against used, per job' }).getByTestId('quoted-vs-used')).toHaveCount(6);
+  const described = (await page.getByRole('img', { name: /^Quotes per period/ }).getAttribute('aria-label')) ?? '';
+  expect(described).not.toContain('NaN');
+  const href = await page.getByRole('link', { name: 'Download CSV' }).last().getAttribute('href');
+  expect(href).toMatch(/^\/api\/reports\/quoting\?/);
+  const csv = Papa.parse<string[]>((await (await page.request.get(href!)).text()).replace(/^\uFEFF/, '').trim()).data;
+  expect(csv.length - 1).toBe(cells.length);
+  for (const width of [1440, 390]) {
+    await page.setViewportSize({ width, height: 900 });
+    await page.getByRole('heading', { level: 2, name: 'Quoting' }).scrollIntoViewIfNeeded();
+    expect(await pageOverflow(page), `the reports scroll sideways at ${width} px`).toBeNull();
+    await shot(page, `reports-4-quoting-${width}`);
   }
 });
