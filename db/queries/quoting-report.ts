@@ -11,7 +11,7 @@ import { quoteNumberText, revisionLetter } from '@/shared/schemas/quote';
 import type { QuoteLine } from '@/shared/schemas/quote';
 import type { QuotingFigures } from '@/lib/reports/quoting-report';
 import { revisionTotals } from './quotes';
-import { inRange, periodOf, rowsOf, type ReportFilter } from './reports';
+import { inRange, jobIs, periodOf, rowsOf, type ReportFilter } from './reports';
 
 /** One period's quotes and money (lib/reports/quoting-report.ts has the CSV of it). */
 export type QuotingPeriod = QuotingFigures;
@@ -36,21 +36,21 @@ export async function quotingReport(db: Db, f: ReportFilter): Promise<{ periods:
     db.execute(sql`
       select ${periodOf(at, f)} as period, e.kind, count(*)::int as n
         from (
-          select r.sent_at as at, 'sent' as kind from quote_revisions r where r.shop_id = ${f.shopId} and r.sent_at is not null
+          select r.sent_at as at, 'sent' as kind from quote_revisions r where r.shop_id = ${f.shopId} and r.sent_at is not null ${jobIs(sql.raw('r.job_id'), f)}
           union all
-          select r.answered_at, r.status::text from quote_revisions r where r.shop_id = ${f.shopId} and r.status in ('accepted', 'declined')
+          select r.answered_at, r.status::text from quote_revisions r where r.shop_id = ${f.shopId} and r.status in ('accepted', 'declined') ${jobIs(sql.raw('r.job_id'), f)}
           union all
           -- A quote expires at the start of the day after its last valid day, on the shop's clock.
-          select ((r.valid_until + 1)::timestamp at time zone ${f.timeZone}), 'expired' from quote_revisions r where r.shop_id = ${f.shopId} and r.status = 'expired'
+          select ((r.valid_until + 1)::timestamp at time zone ${f.timeZone}), 'expired' from quote_revisions r where r.shop_id = ${f.shopId} and r.status = 'expired' ${jobIs(sql.raw('r.job_id'), f)}
         ) e
        where ${inRange(at, f)}
        group by 1, 2`),
     db.execute(sql`
       select ${periodOf(at, f)} as period, sum(e.amount)::bigint as minor
         from (
-          select p.paid_at as at, p.amount_minor as amount from quote_payments p where p.shop_id = ${f.shopId} and p.paid_at is not null
+          select p.paid_at as at, p.amount_minor as amount from quote_payments p where p.shop_id = ${f.shopId} and p.paid_at is not null ${jobIs(sql.raw('p.job_id'), f)}
           union all
-          select p.refunded_at, -p.amount_minor from quote_payments p where p.shop_id = ${f.shopId} and p.refunded_at is not null
+          select p.refunded_at, -p.amount_minor from quote_payments p where p.shop_id = ${f.shopId} and p.refunded_at is not null ${jobIs(sql.raw('p.job_id'), f)}
         ) e
        where ${inRange(at, f)}
        group by 1`),
@@ -61,7 +61,7 @@ export async function quotingReport(db: Db, f: ReportFilter): Promise<{ periods:
              (select sum(p.cost_cents) from plans p where p.job_id = j.id and p.status = 'done')::bigint as used,
              (select count(*) from plans p where p.job_id = j.id and p.status = 'done')::int as finished
         from quote_revisions r join quotes q on q.id = r.quote_id join jobs j on j.id = r.job_id
-       where r.shop_id = ${f.shopId} and r.status = 'accepted' and ${inRange(sql.raw('r.answered_at'), f)}
+       where r.shop_id = ${f.shopId} and r.status = 'accepted' and ${inRange(sql.raw('r.answered_at'), f)} ${jobIs(sql.raw('r.job_id'), f)}
        order by r.answered_at`),
   ]);
 

@@ -22,6 +22,9 @@ export interface ReportFilter {
   to: string;
   /** Only this material, when given. */
   material?: string;
+  /** Only the work of this customer's jobs, or of this job (yield, offcut use and quoting; stock value is the shop's). */
+  customerId?: string;
+  jobId?: string;
 }
 
 /** One period's stock area for one material and thickness, and what became of it (mm²). */
@@ -50,6 +53,13 @@ export const dayStart = (day: string, zone: string) => sql`(${day}::date::timest
 export const periodOf = (column: unknown, f: ReportFilter) => sql`to_char(date_trunc(${f.by}, ${column} at time zone ${f.timeZone}), 'YYYY-MM-DD')`;
 export const inRange = (column: unknown, f: ReportFilter) => sql`${column} >= ${dayStart(f.from, f.timeZone)} and ${column} < ${dayStart(f.to, f.timeZone)} + interval '1 day'`;
 const materialIs = (column: unknown, f: ReportFilter) => (f.material ? sql`and ${column} = ${f.material}` : sql``);
+/** `and <job column> is one of the filter's jobs`, when the filter names a customer or a job (a null job matches none). */
+export const jobIs = (column: unknown, f: ReportFilter) => {
+  if (!f.customerId && !f.jobId) return sql``;
+  const customer = f.customerId ? sql`and j.customer_id = ${f.customerId}` : sql``;
+  const job = f.jobId ? sql`and j.id = ${f.jobId}` : sql``;
+  return sql`and ${column} in (select j.id from jobs j where j.shop_id = ${f.shopId} ${customer} ${job})`;
+};
 
 /**
  * Yield over time: finished plans by the week or month they were finished in, per material and thickness. Yield is
@@ -66,12 +76,12 @@ export async function yieldOverTime(db: Db, f: ReportFilter): Promise<YieldRow[]
              coalesce(sum(coalesce(pp.part_area_mm2, ${partsOf(false)})), 0)::float8 as parts,
              coalesce(sum(coalesce(pp.spoiled_area_mm2, ${partsOf(true)})), 0)::float8 as spoiled
         from plans p join plan_pieces pp on pp.plan_id = p.id
-       where p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('pp.material'), f)}
+       where p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('pp.material'), f)} ${jobIs(sql.raw('p.job_id'), f)}
        group by 1, 2, 3`),
     db.execute(sql`
       select ${periodOf(finished, f)} as period, o.material, o.thickness_mm as thickness, sum(o.length_mm * o.width_mm)::float8 as area
         from offcuts o join plans p on p.id = o.source_plan_id
-       where o.shop_id = ${f.shopId} and p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('o.material'), f)}
+       where o.shop_id = ${f.shopId} and p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('o.material'), f)} ${jobIs(sql.raw('p.job_id'), f)}
        group by 1, 2, 3`),
   ]);
   const key = (r: { period: string; material: string; thickness: number }) => `${r.period}\u0000${r.material}\u0000${Number(r.thickness)}`;
@@ -100,18 +110,18 @@ export async function offcutUse(db: Db, f: ReportFilter): Promise<OffcutUseRow[]
              coalesce(sum(pp.length_mm * pp.width_mm) filter (where pp.offcut_id is not null), 0)::float8 as rack,
              coalesce(sum(pp.length_mm * pp.width_mm) filter (where pp.offcut_id is null), 0)::float8 as fresh
         from plans p join plan_pieces pp on pp.plan_id = p.id
-       where p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('pp.material'), f)}
+       where p.shop_id = ${f.shopId} and p.status = 'done' and ${inRange(finished, f)} ${materialIs(sql.raw('pp.material'), f)} ${jobIs(sql.raw('p.job_id'), f)}
        group by 1`),
     db.execute(sql`
       select ${periodOf(created, f)} as period, count(*)::int as n, sum(o.length_mm * o.width_mm)::float8 as area
         from offcuts o
-       where o.shop_id = ${f.shopId} and ${inRange(created, f)} ${materialIs(sql.raw('o.material'), f)}
+       where o.shop_id = ${f.shopId} and ${inRange(created, f)} ${materialIs(sql.raw('o.material'), f)} ${jobIs(sql.raw('(select sp.job_id from plans sp where sp.id = o.source_plan_id)'), f)}
        group by 1`),
     // Leaving the rack: cut up in a finished plan (consumed) or thrown out (scrapped), one ledger row each.
     db.execute(sql`
       select ${periodOf(moved, f)} as period, m.kind, count(*)::int as n, sum(o.length_mm * o.width_mm)::float8 as area
         from stock_movements m join offcuts o on o.id = m.offcut_id
-       where m.shop_id = ${f.shopId} and m.kind in ('consumed', 'scrapped') and ${inRange(moved, f)} ${materialIs(sql.raw('o.material'), f)}
+       where m.shop_id = ${f.shopId} and m.kind in ('consumed', 'scrapped') and ${inRange(moved, f)} ${materialIs(sql.raw('o.material'), f)} ${jobIs(sql.raw('(select mp.job_id from plans mp where mp.id = m.plan_id)'), f)}
        group by 1, 2`),
   ]);
   const rows = new Map<string, OffcutUseRow>();
@@ -162,6 +172,19 @@ export async function oldOffcuts(db: Db, { shopId, timeZone, months, now = new D
     rackedOn: r.racked_on,
     ageDays: Number(r.age_days),
   }));
+}
+
+/** The customers and jobs the filters offer: those with a finished plan or a quote sent (at most 300 jobs, newest first). */
+export async function reportSubjects(db: Db, shopId: string): Promise<{ customers: { id: string; name: string }[]; jobs: { id: string; name: string }[] }> {
+  const [c, j] = await Promise.all([
+    db.execute(sql`select c.id, c.name from customers c where c.shop_id = ${shopId} order by lower(c.name), c.id`),
+    db.execute(sql`
+      select j.id, j.name from jobs j
+       where j.shop_id = ${shopId}
+         and (exists (select 1 from plans p where p.job_id = j.id and p.status = 'done') or exists (select 1 from quote_revisions r where r.job_id = j.id and r.sent_at is not null))
+       order by j.created_at desc, j.id limit 300`),
+  ]);
+  return { customers: rowsOf<{ id: string; name: string }>(c), jobs: rowsOf<{ id: string; name: string }>(j) };
 }
 
 /** The materials a shop has finished plans or offcuts in, for the report's filter. */

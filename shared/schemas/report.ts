@@ -13,6 +13,9 @@ export const reportQuerySchema = z.object({
   to: day.optional().or(z.literal('').transform(() => undefined)),
   by: z.enum(REPORT_PERIODS, { error: 'Group by week or month.' }).default('month'),
   material: z.string().trim().max(200).optional().transform((m) => m || undefined),
+  /** One customer's work, or one job's (by id). */
+  customer: z.uuid({ error: 'Pick a customer from the list.' }).optional().or(z.literal('').transform(() => undefined)),
+  job: z.uuid({ error: 'Pick a job from the list.' }).optional().or(z.literal('').transform(() => undefined)),
 });
 export type ReportQuery = z.infer<typeof reportQuerySchema>;
 

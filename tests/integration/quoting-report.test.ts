@@ -53,6 +53,14 @@ describe('the quoting report', () => {
       { jobId: won.job.id, jobName: won.job.name, title: expect.stringMatching(/^Q-\d+ rev A$/), acceptedOn: '2026-11-02', quotedMaterialMinor: 4000, usedMaterialMinor: 5000, finishedPlans: 1 },
     ]);
 
+    // One customer's work only: the won job's quote, sent in October, accepted and paid in November.
+    const theirs = await quotingReport(handle.db, { shopId: shop, timeZone: 'UTC', by: 'month', from: '2026-10-01', to: '2026-11-30', customerId: won.customer.id });
+    expect(theirs.periods).toEqual([
+      { period: '2026-10-01', sent: 1, accepted: 0, declined: 0, expired: 0, wonMinor: 0, depositsMinor: 0 },
+      { period: '2026-11-01', sent: 0, accepted: 1, declined: 0, expired: 0, wonMinor: 12700, depositsMinor: 6350 },
+    ]);
+    expect((await quotingReport(handle.db, { shopId: shop, timeZone: 'UTC', by: 'month', from: '2026-10-01', to: '2026-11-30', jobId: fx.myJob.id })).periods).toEqual([]);
+
     // The CSV carries the same figures, won as a share of those answered or run out (1 of 2 = 50 % in November: one accepted, one expired).
     const res = await quotingRoute.GET(await request('/api/reports/quoting?from=2026-10-01&to=2026-11-30', { user: fx.estimator }), { params: Promise.resolve({}) });
     const csv = (await res.text()).replace(/^\uFEFF/, '').trim().split('\r\n');

@@ -4,7 +4,7 @@
  */
 import { beforeAll, describe, expect, test } from 'vitest';
 import type { Db } from '@/db/open';
-import { offcuts, placements, planPieces, plans, stockItems, stockMovements } from '@/db/schema';
+import { customers, offcuts, placements, planPieces, plans, stockItems, stockMovements } from '@/db/schema';
 import { offcutUse, oldOffcuts, reportMaterials, stockValueReport, yieldOverTime, type ReportFilter } from '@/db/queries/reports';
 import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 
@@ -86,6 +86,16 @@ describe('yield over time', () => {
     expect(rows.map((r) => r.material)).toEqual(['Birch ply', 'MDF']);
     expect(rows.every((r) => r.period === '2026-12-01')).toBe(true);
     expect(await yieldOverTime(db, filter({ from: '2026-11-29', to: '2026-11-29' }))).toHaveLength(1);
+  });
+
+  test('narrowed to a job, or to a customer with no jobs, the yield counts only that work', async () => {
+    // Both finished plans are fx.myJob's (the pantry has no customer).
+    expect((await yieldOverTime(db, filter({ jobId: fx.myJob.id }))).map((r) => r.stockArea)).toEqual([2_000_000, 500_000, 1_000_000]);
+    expect(await yieldOverTime(db, filter({ jobId: fx.theirJob.id }))).toEqual([]);
+    const [nobody] = await db.insert(customers).values({ shopId: fx.mine.id, name: 'No jobs yet' }).returning();
+    expect(await yieldOverTime(db, filter({ customerId: nobody.id }))).toEqual([]);
+    // The rack: plan A's offcut and its movements follow its job; the scrap thrown out by hand belongs to no job.
+    expect((await offcutUse(db, filter({ jobId: fx.myJob.id }))).map((r) => [r.period, r.racked, r.used, r.scrapped])).toEqual([['2026-11-01', 1, 0, 0], ['2026-12-01', 0, 1, 0]]);
   });
 
   test('another shop’s plans never show, and the materials filter lists only this shop’s', async () => {

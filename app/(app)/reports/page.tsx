@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { getDb } from '@/db/client';
-import { offcutUse, oldOffcuts, reportMaterials, stockValueReport, yieldOverTime } from '@/db/queries/reports';
+import { offcutUse, oldOffcuts, reportMaterials, reportSubjects, stockValueReport, yieldOverTime } from '@/db/queries/reports';
 import { getShopSettings } from '@/db/queries/shops';
 import { OffcutUseChart, QuotingChart, StockValueChart, YieldChart } from '@/components/reports/charts';
 import { quotingReport } from '@/db/queries/quoting-report';
@@ -37,10 +37,11 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
   const problem = !parsed.success ? parsed.error.issues[0].message : 'error' in range ? range.error : null;
   const shown = 'error' in range ? reportRange(reportQuerySchema.parse({}), settings.timeZone) : range;
   if ('error' in shown) return null;
-  const filter = { shopId: user.shopId, timeZone: settings.timeZone, material: query.material, ...shown };
+  const filter = { shopId: user.shopId, timeZone: settings.timeZone, material: query.material, customerId: query.customer, jobId: query.job, ...shown };
 
   const none = Promise.resolve([] as never[]);
-  const [materials, yields, offcuts, old, value, quoting] = await Promise.all([
+  const [subjects, materials, yields, offcuts, old, value, quoting] = await Promise.all([
+    reportSubjects(db, user.shopId),
     seesStock ? reportMaterials(db, user.shopId) : none,
     seesStock ? yieldOverTime(db, filter) : none,
     seesStock ? offcutUse(db, filter) : none,
@@ -58,7 +59,8 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
   const totals = periodTotals(yields);
   const all = overall(yields);
   const quotingSum = quoting.periods.reduce((t, p) => ({ ...t, sent: t.sent + p.sent, accepted: t.accepted + p.accepted, declined: t.declined + p.declined, expired: t.expired + p.expired, wonMinor: t.wonMinor + p.wonMinor, depositsMinor: t.depositsMinor + p.depositsMinor }), { period: '', sent: 0, accepted: 0, declined: 0, expired: 0, wonMinor: 0, depositsMinor: 0 });
-  const query_ = new URLSearchParams({ from: shown.from, to: shown.to, by: shown.by, ...(query.material ? { material: query.material } : {}) }).toString();
+  const query_ = new URLSearchParams({ from: shown.from, to: shown.to, by: shown.by, ...(query.material ? { material: query.material } : {}), ...(query.customer ? { customer: query.customer } : {}), ...(query.job ? { job: query.job } : {}) }).toString();
+  const narrowed = Boolean(query.customer || query.job);
 
   return (
     <>
@@ -67,7 +69,7 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
         lead={`${seesStock ? 'What the stock became, how the rack is used, and how quotes fare' : 'How quotes fare'}, by ${shown.by} on the shop’s clock (${settings.timeZone.replace(/_/g, ' ')}).`}
       />
 
-      <form method="get" className="card mb-6 grid gap-4 p-4 sm:grid-cols-2 lg:grid-cols-5 lg:items-end" aria-label="Report filters">
+      <form method="get" className="card mb-6 grid gap-4 p-4 sm:grid-cols-2 lg:grid-cols-4 lg:items-end" aria-label="Report filters">
         <div>
           <label htmlFor="r-from" className="field-label">From</label>
           <input id="r-from" name="from" type="date" className="field-input" defaultValue={shown.from} />
@@ -92,8 +94,22 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
             </select>
           </div>
         )}
+        <div>
+          <label htmlFor="r-customer" className="field-label">Customer</label>
+          <select id="r-customer" name="customer" className="field-input" defaultValue={query.customer ?? ''}>
+            <option value="">Every customer</option>
+            {subjects.customers.map((c) => <option key={c.id} value={c.id}>{c.name}</option>)}
+          </select>
+        </div>
+        <div>
+          <label htmlFor="r-job" className="field-label">Job</label>
+          <select id="r-job" name="job" className="field-input" defaultValue={query.job ?? ''}>
+            <option value="">Every job</option>
+            {subjects.jobs.map((j) => <option key={j.id} value={j.id}>{j.name}</option>)}
+          </select>
+        </div>
         <button type="submit" className="btn-accent">Show</button>
-        {problem && <p role="alert" className="field-error sm:col-span-2 lg:col-span-5">{problem} Showing the last twelve months instead.</p>}
+        {problem && <p role="alert" className="field-error sm:col-span-2 lg:col-span-4">{problem} Showing the last twelve months instead.</p>}
       </form>
 
       {seesStock && (
@@ -208,7 +224,7 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
               <h2 id="value-head">Stock value</h2>
               <a href={`/api/reports/stock-value?${query_}`} download className="text-sm">Download CSV</a>
             </div>
-            <p className="mb-3 max-w-3xl text-sm text-graphite-mute">Rebuilt from the stock history at each period’s close: every sheet, board and offcut counted from its movements, valued at its cost today.</p>
+            <p className="mb-3 max-w-3xl text-sm text-graphite-mute">Rebuilt from the stock history at each period’s close: every sheet, board and offcut counted from its movements, valued at its cost today.{narrowed ? ' The stock room is the whole shop’s: this one is not narrowed to a customer or job.' : ''}</p>
             <div className="card mb-4 p-3">
               <StockValueChart currency={settings.currency} points={value.points.map((p) => ({ label: periodLabel(p.period, shown.by), onHand: p.onHandCents / 100, reserved: p.reservedCents / 100 }))} />
             </div>
