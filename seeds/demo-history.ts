@@ -1,7 +1,8 @@
 /**
  * Six months of the demo shop's past work, so the reports have something to show: six invented jobs, each nested
  * by the real engine, released and finished through the stock room's own functions, then dated back to the day it
- * was cut. Their sheets are bought for the job (not pulled from today's rack, whose counts stay as seeded), their
+ * was cut. Their sheets come from the rack as far as its free count goes (its opening counts are dated before them)
+ * and are bought for the rest; their
  * offcuts go on the rack and are used by the next job or thrown out, and one part was damaged at the saw. Each was won
  * by a quote its customer accepted online (the deposit paid); two other quotes were declined or ran out.
  */
@@ -40,7 +41,12 @@ const PAST_JOBS = [
 /** The rack location where the past jobs' offcuts were put. */
 export const HISTORY_BIN = 'Offcut bin 6';
 
+/** When the rack's opening counts were taken: before the first past job, so the stock history never runs below zero. */
+const OPENING_COUNT_AT = new Date('2026-05-29T14:00:00Z');
+
 export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }: { shopId: string; estimatorId: string; cutterId: string }) {
+  // The past jobs cut sheets from the rack as they found it; the counts they found were taken before them.
+  await db.update(stockMovements).set({ createdAt: OPENING_COUNT_AT }).where(and(eq(stockMovements.shopId, shopId), eq(stockMovements.reason, 'Opening count')));
   const racked: string[] = [];
   for (const past of PAST_JOBS) {
     const at = new Date(past.finishedAt);

@@ -3,7 +3,8 @@ import { eq, inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
 import { jobs, offcuts, placements, planPieces, plans, shops, slideModels, stockItems, users } from '@/db/schema';
-import { offcutUse, oldOffcuts, yieldOverTime } from '@/db/queries/reports';
+import { offcutUse, oldOffcuts, stockValueReport, yieldOverTime } from '@/db/queries/reports';
+import { quotingReport } from '@/db/queries/quoting-report';
 import { ledgerMismatches } from '@/db/queries/stock';
 import { HISTORY_BIN } from '@/seeds/demo-history';
 import { readPlan, validatePlan } from '@/lib/nesting';
@@ -91,12 +92,12 @@ describe('the demo shop', () => {
     expect((await handle.db.select().from(shops)).length).toBe(1);
   });
 
-  test('has six months of past jobs for the reports: each plan valid and finished on its day, today’s rack untouched', async () => {
+  test('has six months of past jobs for the reports: each plan valid and finished on its day, the ledger matching the counts', async () => {
     const db = handle.db;
     const done = await db.select().from(plans).where(eq(plans.status, 'done'));
     expect(done).toHaveLength(6);
     for (const p of done) expect(validatePlan(nestRequestSchema.parse(p.request), readPlan(p.document)), p.name).toEqual([]);
-    // Bought for each job: the stock room's counts and its ledger agree, and nothing but the kitchen plan reserves.
+    // Cut from the rack or bought for each job: the stock room's counts and its ledger agree.
     expect(await ledgerMismatches(db, first.shopId)).toEqual([]);
     const months = await yieldOverTime(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'month', from: '2026-06-01', to: '2026-11-30' });
     expect([...new Set(months.map((r) => r.period))]).toEqual(['2026-06-01', '2026-07-01', '2026-08-01', '2026-09-01', '2026-10-01', '2026-11-01']);
@@ -119,5 +120,15 @@ describe('the demo shop', () => {
     expect(left.filter((o) => o.status === 'available')).toHaveLength(1);
     const old = await oldOffcuts(db, { shopId: first.shopId, timeZone: 'America/Chicago', months: 1, now: new Date('2026-12-03T12:00:00Z') });
     expect(old.map((o) => o.location)).toEqual([HISTORY_BIN]);
+    // The rack's opening counts came before the past jobs, so its value never runs below zero in their months.
+    const value = await stockValueReport(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'month', from: '2026-06-01', to: '2026-11-30' });
+    expect(value.points).toHaveLength(6);
+    for (const p of value.points) expect(p.onHandCents, p.period).toBeGreaterThan(0);
+    // Each past job was won by a quote accepted online with its deposit paid; one more was declined and one ran out.
+    const quoting = await quotingReport(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'month', from: '2026-06-01', to: '2026-11-30' });
+    const sum = (k: 'sent' | 'accepted' | 'declined' | 'expired') => quoting.periods.reduce((n, q) => n + q[k], 0);
+    expect([sum('sent'), sum('accepted'), sum('declined'), sum('expired')]).toEqual([8, 6, 1, 1]);
+    expect(quoting.jobs).toHaveLength(6);
+    for (const j of quoting.jobs) expect(j.usedMaterialMinor, j.jobName).not.toBeNull();
   });
 });
