@@ -1,10 +1,11 @@
-import { and, desc, eq, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, parts, plans, stockMovements } from '../schema';
 import { HttpError } from '@/lib/api/errors';
 import type { Role } from '@/lib/auth/permissions';
 import { refuseManualStatus, wonAtAfter } from '@/lib/jobs/status';
-import type { JobInput, JobPatch, JobSummary } from '@/shared/schemas/job';
+import { JOB_STATUSES, type JobInput, type JobPatch, type JobSummary } from '@/shared/schemas/job';
+import type { JobListPage, JobListQuery, JobSortColumn } from '@/shared/schemas/job-list';
 import { recordAudit } from './audit';
 import { resolveCustomer } from './customers';
 import { jobFacts } from './job-status';
@@ -56,9 +57,101 @@ const toSummary = (row: SummaryRow): JobSummary => ({
   updatedAt: row.updatedAt.toISOString(),
 });
 
-export async function listJobs(db: Db, shopId: string): Promise<JobSummary[]> {
-  const rows = await selectSummaries(db, shopId).where(eq(jobs.shopId, shopId)).orderBy(desc(jobs.updatedAt));
-  return rows.map(toSummary);
+/** `%text%` for ILIKE, the pattern's own characters (`%`, `_`, `\\`) matched as typed. */
+const containing = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+
+/** A job's pieces (quantities summed), for sorting by them. */
+const piecesOf = sql<number>`(select coalesce(sum(${parts.quantity}), 0) from ${parts} where ${parts.shopId} = ${jobs.shopId} and ${parts.jobId} = ${jobs.id})`;
+
+/** What each sortable column sorts by: names ignoring case, status in work order, jobs without a due date last. */
+const SORT_KEYS: Record<JobSortColumn, SQL> = {
+  name: sql`lower(${jobs.name})`,
+  customer: sql`lower(${customers.name})`,
+  status: sql`array_position(array[${sql.raw(JOB_STATUSES.map((s) => `'${s}'`).join(', '))}]::job_status[], ${jobs.status})`,
+  due: sql`${jobs.dueDate}`,
+  parts: piecesOf,
+  updated: sql`${jobs.updatedAt}`,
+};
+
+/**
+ * One page of a shop's jobs as the jobs list shows them: filtered by status (archived left out unless asked for) and
+ * customer, searched in the job's name, its customer's name and its parts' materials (any case), sorted on the
+ * server (ties by id, so pages never overlap), with the counts the list's controls need. Three queries whatever
+ * the shop's size: the page's rows, their parts' figures, and the counts.
+ */
+export async function listJobsPage(db: Db, shopId: string, q: JobListQuery): Promise<JobListPage> {
+  const filters: SQL[] = [eq(jobs.shopId, shopId)];
+  if (q.status === '') filters.push(sql`${jobs.status} <> 'archived'`);
+  else if (q.status !== 'all') filters.push(eq(jobs.status, q.status));
+  if (q.customer) filters.push(sql`lower(${customers.name}) = lower(${q.customer})`);
+  if (q.q) {
+    const like = containing(q.q);
+    filters.push(
+      sql`(${jobs.name} ilike ${like} or ${customers.name} ilike ${like} or exists (select 1 from ${parts} where ${parts.shopId} = ${jobs.shopId} and ${parts.jobId} = ${jobs.id} and ${parts.material} ilike ${like}))`,
+    );
+  }
+  const where = and(...filters)!;
+  const [column, dir] = q.sort.split('.') as [JobSortColumn, 'asc' | 'desc'];
+  const key = SORT_KEYS[column];
+  // Empty values (no customer, no due date) go last either way round.
+  const order = dir === 'asc' ? sql`${key} asc nulls last` : sql`${key} desc nulls last`;
+
+  const rows = await db
+    .select({
+      id: jobs.id,
+      name: jobs.name,
+      customer: sql<string>`coalesce(${customers.name}, '')`,
+      customerId: jobs.customerId,
+      status: jobs.status,
+      dueDate: jobs.dueDate,
+      notes: jobs.notes,
+      wonAt: jobs.wonAt,
+      createdAt: jobs.createdAt,
+      updatedAt: jobs.updatedAt,
+    })
+    .from(jobs)
+    .leftJoin(customers, eq(customers.id, jobs.customerId))
+    .where(where)
+    .orderBy(order, asc(jobs.id))
+    .limit(q.size)
+    .offset((q.page - 1) * q.size);
+
+  const ids = rows.map((r) => r.id);
+  const stats = ids.length
+    ? await db
+        .select({ jobId: parts.jobId, partCount: sql<number>`sum(${parts.quantity})::int`, materials: sql<string[]>`array_agg(distinct ${parts.material})` })
+        .from(parts)
+        .where(and(eq(parts.shopId, shopId), inArray(parts.jobId, ids)))
+        .groupBy(parts.jobId)
+    : [];
+  const statsOf = new Map(stats.map((s) => [s.jobId, s]));
+
+  const [counts] = await db
+    .select({
+      total: sql<number>`count(*) filter (where ${where})::int`,
+      shopJobs: sql<number>`count(*)::int`,
+      archived: sql<number>`count(*) filter (where ${jobs.status} = 'archived')::int`,
+      customers: sql<string[] | null>`array_agg(distinct ${customers.name}) filter (where ${customers.name} is not null)`,
+    })
+    .from(jobs)
+    .leftJoin(customers, eq(customers.id, jobs.customerId))
+    .where(eq(jobs.shopId, shopId));
+
+  const total = Number(counts?.total ?? 0);
+  return {
+    jobs: rows.map((row) => {
+      const s = statsOf.get(row.id);
+      return toSummary({ ...row, partCount: s?.partCount ?? 0, materials: s?.materials ?? null });
+    }),
+    total,
+    page: q.page,
+    pageSize: q.size,
+    pageCount: Math.max(1, Math.ceil(total / q.size)),
+    sort: q.sort,
+    shopJobs: Number(counts?.shopJobs ?? 0),
+    archived: Number(counts?.archived ?? 0),
+    customers: (counts?.customers ?? []).sort((a, b) => a.localeCompare(b, 'en', { sensitivity: 'base' })),
+  };
 }
 
 export async function getJob(db: Db, shopId: string, id: string): Promise<JobSummary | null> {
