@@ -76,8 +76,9 @@ const SORT_KEYS: Record<JobSortColumn, SQL> = {
 /**
  * One page of a shop's jobs as the jobs list shows them: filtered by status (archived left out unless asked for) and
  * customer, searched in the job's name, its customer's name and its parts' materials (any case), sorted on the
- * server (ties by id, so pages never overlap), with the counts the list's controls need. Three queries whatever
- * the shop's size: the page's rows, their parts' figures, and the counts.
+ * server (ties by id, so pages never overlap), with the counts the list's controls need. Three queries whatever the
+ * shop's size: the page's ids (narrow rows, so sorting a big shop stays cheap; the default order reads
+ * jobs_shop_updated_idx and stops after the page), those jobs with their parts' figures, and the counts.
  */
 export async function listJobsPage(db: Db, shopId: string, q: JobListQuery): Promise<JobListPage> {
   const filters: SQL[] = [eq(jobs.shopId, shopId)];
@@ -91,57 +92,77 @@ export async function listJobsPage(db: Db, shopId: string, q: JobListQuery): Pro
     );
   }
   const where = and(...filters)!;
+  const needsCustomer = Boolean(q.customer || q.q) || q.sort.startsWith('customer.');
   const [column, dir] = q.sort.split('.') as [JobSortColumn, 'asc' | 'desc'];
   const key = SORT_KEYS[column];
-  // Empty values (no customer, no due date) go last either way round.
-  const order = dir === 'asc' ? sql`${key} asc nulls last` : sql`${key} desc nulls last`;
+  // Empty values (no customer, no due date) go last either way round; ties by id the same way round.
+  const order =
+    column === 'updated' // never empty: plain, so the index serves it
+      ? dir === 'asc' ? [asc(jobs.updatedAt), asc(jobs.id)] : [desc(jobs.updatedAt), desc(jobs.id)]
+      : dir === 'asc' ? [sql`${key} asc nulls last`, asc(jobs.id)] : [sql`${key} desc nulls last`, desc(jobs.id)];
 
-  const rows = await db
-    .select({
-      id: jobs.id,
-      name: jobs.name,
-      customer: sql<string>`coalesce(${customers.name}, '')`,
-      customerId: jobs.customerId,
-      status: jobs.status,
-      dueDate: jobs.dueDate,
-      notes: jobs.notes,
-      wonAt: jobs.wonAt,
-      createdAt: jobs.createdAt,
-      updatedAt: jobs.updatedAt,
-    })
-    .from(jobs)
-    .leftJoin(customers, eq(customers.id, jobs.customerId))
+  const idsQuery = db.select({ id: jobs.id }).from(jobs);
+  const pageIds = (await (needsCustomer ? idsQuery.leftJoin(customers, eq(customers.id, jobs.customerId)) : idsQuery)
     .where(where)
-    .orderBy(order, asc(jobs.id))
+    .orderBy(...order)
     .limit(q.size)
-    .offset((q.page - 1) * q.size);
+    .offset((q.page - 1) * q.size)).map((r) => r.id);
 
-  const ids = rows.map((r) => r.id);
-  const stats = ids.length
+  // Per job: its pieces and materials, grouped by material first (hashing; array_agg(distinct) sorted every job's
+  // parts and cost ten times as much in the embedded database).
+  const byMaterial = db
+    .select({ material: parts.material, pieces: sql<number>`sum(${parts.quantity})`.as('pieces') })
+    .from(parts)
+    .where(and(eq(parts.shopId, jobs.shopId), eq(parts.jobId, jobs.id)))
+    .groupBy(parts.material)
+    .as('by_material');
+  const stats = db
+    .select({
+      partCount: sql<number>`coalesce(sum(${byMaterial.pieces}), 0)::int`.as('part_count'),
+      materials: sql<string[] | null>`array_agg(${byMaterial.material})`.as('materials'),
+    })
+    .from(byMaterial)
+    .as('stats');
+  const rows = pageIds.length
     ? await db
-        .select({ jobId: parts.jobId, partCount: sql<number>`sum(${parts.quantity})::int`, materials: sql<string[]>`array_agg(distinct ${parts.material})` })
-        .from(parts)
-        .where(and(eq(parts.shopId, shopId), inArray(parts.jobId, ids)))
-        .groupBy(parts.jobId)
+        .select({
+          id: jobs.id,
+          name: jobs.name,
+          customer: sql<string>`coalesce(${customers.name}, '')`,
+          customerId: jobs.customerId,
+          status: jobs.status,
+          dueDate: jobs.dueDate,
+          notes: jobs.notes,
+          wonAt: jobs.wonAt,
+          createdAt: jobs.createdAt,
+          updatedAt: jobs.updatedAt,
+          partCount: stats.partCount,
+          materials: stats.materials,
+        })
+        .from(jobs)
+        .leftJoin(customers, eq(customers.id, jobs.customerId))
+        .leftJoinLateral(stats, sql`true`)
+        .where(and(eq(jobs.shopId, shopId), inArray(jobs.id, pageIds)))
     : [];
-  const statsOf = new Map(stats.map((s) => [s.jobId, s]));
+  const byId = new Map(rows.map((r) => [r.id, r]));
 
   const [counts] = await db
     .select({
       total: sql<number>`count(*) filter (where ${where})::int`,
       shopJobs: sql<number>`count(*)::int`,
       archived: sql<number>`count(*) filter (where ${jobs.status} = 'archived')::int`,
-      customers: sql<string[] | null>`array_agg(distinct ${customers.name}) filter (where ${customers.name} is not null)`,
+      // Once for the query (an uncorrelated sub-select): the shop's customers that have a job.
+      customers: sql<string[] | null>`(select array_agg(c.name) from ${customers} c where c.shop_id = ${shopId} and exists (select 1 from ${jobs} j where j.customer_id = c.id))`,
     })
     .from(jobs)
-    .leftJoin(customers, eq(customers.id, jobs.customerId))
+    .leftJoin(customers, needsCustomer ? eq(customers.id, jobs.customerId) : sql`false`)
     .where(eq(jobs.shopId, shopId));
 
   const total = Number(counts?.total ?? 0);
   return {
-    jobs: rows.map((row) => {
-      const s = statsOf.get(row.id);
-      return toSummary({ ...row, partCount: s?.partCount ?? 0, materials: s?.materials ?? null });
+    jobs: pageIds.flatMap((id) => {
+      const row = byId.get(id);
+      return row ? [toSummary({ ...row, materials: row.materials?.sort() ?? null })] : [];
     }),
     total,
     page: q.page,
