@@ -1,21 +1,31 @@
 import { serverEnv } from '@/lib/env';
 import { mailConfig } from '@/lib/mail/config';
 import { startMailService, stopMailService } from '@/lib/mail/service';
+import path from 'node:path';
 import { closeDb, getDbHandle } from './client';
+import { serveLiveBackups, type LiveBackupServer } from './live-backup';
 
 /** Refuses to start without a sound environment and database; starts the mail sender; closes both on shutdown. */
 export async function startServer() {
+  let backups: LiveBackupServer | undefined;
   try {
     serverEnv();
     mailConfig();
     const handle = await getDbHandle();
     await startMailService(handle.db);
+    // The embedded database answers `npm run backup` while the server runs (without it, the server still serves).
+    if (handle.dump) {
+      const served = await serveLiveBackups(path.resolve(serverEnv().KERFWISE_DATA_DIR, 'pglite'), handle.dump).catch((error: Error) => ({ error: `Backups while the server runs are off: ${error.message}` }));
+      if ('error' in served) console.error(served.error);
+      else backups = served;
+    }
   } catch (error) {
     console.error((error as Error).message);
     process.exit(1);
   }
   const shutdown = () => {
-    stopMailService()
+    (backups?.close() ?? Promise.resolve())
+      .then(() => stopMailService())
       .catch(() => undefined)
       .then(() => closeDb())
       .finally(() => process.exit(0));
