@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, parts, plans, stockMovements } from '../schema';
 import { HttpError } from '@/lib/api/errors';
