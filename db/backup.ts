@@ -1,28 +1,51 @@
 /**
  * Backups that restore: one file per backup. The embedded database is dumped with PGlite's own data-directory dump
  * (a gzipped tar of the directory); a PostgreSQL server with `pg_dump` in its custom format, put back with
- * `pg_restore`. The embedded directory can be backed up and restored only while no server holds it (its lock says
- * so): PGlite is one process's database.
+ * `pg_restore`. The embedded directory is backed up by the server that holds it while it runs (db/live-backup.ts),
+ * or directly when none does; it is restored only while no server holds it (its lock says so): PGlite is one
+ * process's database.
  */
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
 import { acquireDirectoryLock } from './lock';
+import { backupSocketPath, requestLiveDump } from './live-backup';
 
-export async function backupEmbedded(dataDir: string, file: string): Promise<void> {
+/**
+ * Writes a backup of the embedded database in `dataDir` to `file`: dumped here when no process holds the directory,
+ * or by the running server that holds it, asked over its local socket (db/live-backup.ts). The file appears whole or
+ * not at all. Says which it was.
+ */
+export async function backupEmbedded(dataDir: string, file: string): Promise<{ live: boolean }> {
   const dir = path.resolve(dataDir);
   if (!fs.existsSync(dir)) throw new Error(`There is no embedded database at ${dir}.`);
-  const release = lockOrExplain(dir, 'back it up');
+  let release: () => void;
+  try {
+    release = acquireDirectoryLock(`${dir}.lock`);
+  } catch (error) {
+    const live = await requestLiveDump(dir);
+    if (!live) throw new Error(`${(error as Error).message}\nIt does not answer backup requests on ${backupSocketPath(dir)} (not a Kerfwise server, or an older one). Stop the server, then back it up.`);
+    writeWhole(file, live);
+    return { live: true };
+  }
   try {
     const { PGlite } = await import('@electric-sql/pglite');
     const client = new PGlite(dir);
     await client.waitReady;
     const dump = await client.dumpDataDir('gzip');
     await client.close();
-    fs.writeFileSync(file, Buffer.from(await dump.arrayBuffer()));
+    writeWhole(file, Buffer.from(await dump.arrayBuffer()));
+    return { live: false };
   } finally {
     release();
   }
+}
+
+/** Written beside the target and renamed into place: a backup cut short leaves no file that looks like one. */
+function writeWhole(file: string, bytes: Buffer) {
+  const partial = `${file}.partial`;
+  fs.writeFileSync(partial, bytes, { mode: 0o600 });
+  fs.renameSync(partial, file);
 }
 
 /** Puts a backup back; the directory it replaces is kept beside it (`<dir>.before-restore-<time>`). */

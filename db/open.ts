@@ -14,6 +14,8 @@ export interface DbHandle {
   /** The PostgreSQL server's address, for a handle on one (tests open other clients on it). */
   url?: string;
   close(): Promise<void>;
+  /** An embedded database on disk: a gzipped tar of its directory, made between queries (db/live-backup.ts). */
+  dump?: () => Promise<Blob>;
 }
 
 export interface OpenOptions {
@@ -62,6 +64,11 @@ async function openPglite(dataDir: string): Promise<DbHandle> {
       close: async () => {
         await client.close();
         release();
+      },
+      dump: async () => {
+        // Data pages written out first, so the copy starts without replaying the log.
+        await client.exec('CHECKPOINT');
+        return client.dumpDataDir('gzip');
       },
     };
   } catch (error) {

@@ -3,13 +3,16 @@ import { mailConfig } from '@/lib/mail/config';
 import { startMailService, stopMailService } from '@/lib/mail/service';
 import { paymentsConfig } from '@/lib/payments/config';
 import { startQuoteExpiry, stopQuoteExpiry } from '@/lib/quotes/expiry';
+import path from 'node:path';
 import { closeDb, getDbHandle } from './client';
+import { serveLiveBackups, type LiveBackupServer } from './live-backup';
 
 /**
  * Refuses to start without a sound environment and database; starts the mail sender and the quote expiry round;
  * closes them on shutdown.
  */
 export async function startServer() {
+  let backups: LiveBackupServer | undefined;
   try {
     serverEnv();
     mailConfig();
@@ -17,13 +20,20 @@ export async function startServer() {
     const handle = await getDbHandle();
     await startMailService(handle.db);
     startQuoteExpiry(handle.db);
+    // The embedded database answers `npm run backup` while the server runs (without it, the server still serves).
+    if (handle.dump) {
+      const served = await serveLiveBackups(path.resolve(serverEnv().KERFWISE_DATA_DIR, 'pglite'), handle.dump).catch((error: Error) => ({ error: `Backups while the server runs are off: ${error.message}` }));
+      if ('error' in served) console.error(served.error);
+      else backups = served;
+    }
   } catch (error) {
     console.error((error as Error).message);
     process.exit(1);
   }
   const shutdown = () => {
     stopQuoteExpiry();
-    stopMailService()
+    (backups?.close() ?? Promise.resolve())
+      .then(() => stopMailService())
       .catch(() => undefined)
       .then(() => closeDb())
       .finally(() => process.exit(0));

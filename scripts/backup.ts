@@ -1,7 +1,8 @@
 /**
  * `npm run backup [FILE]` writes one backup file; `npm run restore FILE` puts one back. DATABASE_URL picks
- * PostgreSQL (pg_dump / pg_restore); otherwise the embedded database in KERFWISE_DATA_DIR (default ./data), which
- * must not be held by a running server.
+ * PostgreSQL (pg_dump / pg_restore); otherwise the embedded database in KERFWISE_DATA_DIR (default ./data): a backup
+ * is made by the running server that holds it (over its local socket) or directly when none runs; a restore needs
+ * the server stopped.
  */
 import path from 'node:path';
 import { backupEmbedded, backupPostgres, restoreEmbedded, restorePostgres } from '../db/backup';
@@ -15,7 +16,10 @@ async function main() {
   if (command === 'backup') {
     const file = fileArg ?? `kerfwise-backup-${stamp}.${url ? 'pgdump' : 'tar.gz'}`;
     if (url) backupPostgres(url, file);
-    else await backupEmbedded(dataDir, file);
+    else {
+      const { live } = await backupEmbedded(dataDir, file);
+      if (live) console.log('The running server made the backup (committed transactions up to now, each whole).');
+    }
     console.log(`Backed up to ${file}`);
   } else if (command === 'restore') {
     if (!fileArg) throw new Error('Name the backup file: npm run restore FILE');

@@ -1,118 +1,110 @@
 'use client';
 
-import { useQuery } from '@tanstack/react-query';
-import {
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type ColumnDef,
-  type FilterFn,
-  type SortingState,
-} from '@tanstack/react-table';
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
-import { usePathname, useRouter, useSearchParams } from 'next/navigation';
-import { useMemo, useState } from 'react';
+import { usePathname, useSearchParams } from 'next/navigation';
+import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
 import { api } from '@/lib/client/api';
-import { jobMatchesSearch } from '@/lib/jobs/search';
-import { JOB_STATUS_FILTERS, jobInStatusFilter, readStatusFilter, type JobStatusFilter } from '@/lib/jobs/status-filter';
-import { JOB_STATUSES, type JobSummary } from '@/shared/schemas/job';
+import { JOB_STATUS_FILTERS } from '@/lib/jobs/status-filter';
+import type { JobSummary } from '@/shared/schemas/job';
+import { JOB_PAGE_SIZES, jobListQuerySchema, jobListSearch, type JobListPage, type JobListQuery, type JobSortColumn } from '@/shared/schemas/job-list';
 import { JobStatusBadge } from './job-status';
 import { NewJobForm } from './new-job-form';
 import { shopDay } from '@/lib/dates/shop-time';
 
-const matchesSearch: FilterFn<JobSummary> = (row, _columnId, needle: string) => jobMatchesSearch(row.original, needle);
-const matchesStatus: FilterFn<JobSummary> = (row, _columnId, filter: JobStatusFilter) => jobInStatusFilter(row.original.status, filter);
+interface Column {
+  id: string;
+  header: string;
+  /** The server's sort key; none for a column that does not sort. */
+  sort?: JobSortColumn;
+  numeric?: boolean;
+  cell: (job: JobSummary, timeZone: string) => ReactNode;
+}
 
-const columns: ColumnDef<JobSummary>[] = [
-  { id: 'name', header: 'Job', accessorKey: 'name', cell: ({ row }) => <Link href={`/jobs/${row.original.id}`} className="font-medium text-graphite">{row.original.name}</Link> },
-  { id: 'customer', header: 'Customer', accessorKey: 'customer', filterFn: 'equalsString' },
-  {
-    id: 'status',
-    header: 'Status',
-    accessorKey: 'status',
-    filterFn: matchesStatus,
-    // Work order, not alphabetical: quoting → quoted → accepted → cutting → done → archived.
-    sortingFn: (a, b) => JOB_STATUSES.indexOf(a.original.status) - JOB_STATUSES.indexOf(b.original.status),
-    cell: ({ row }) => <JobStatusBadge status={row.original.status} />,
-  },
-  { id: 'due', header: 'Due', accessorFn: (j) => j.dueDate ?? undefined, sortUndefined: 'last', cell: ({ row }) => <span className="whitespace-nowrap">{row.original.dueDate ?? '—'}</span> },
-  { id: 'parts', header: 'Parts', accessorKey: 'partCount', meta: { numeric: true } },
-  { id: 'materials', header: 'Materials', accessorFn: (j) => j.materials.join(', '), enableSorting: false, cell: ({ getValue }) => <span className="text-graphite-soft">{(getValue() as string) || '—'}</span> },
+const COLUMNS: Column[] = [
+  { id: 'name', header: 'Job', sort: 'name', cell: (j) => <Link href={`/jobs/${j.id}`} className="font-medium text-graphite">{j.name}</Link> },
+  { id: 'customer', header: 'Customer', sort: 'customer', cell: (j) => j.customer },
+  // Work order, not alphabetical: quoting → quoted → accepted → deposit paid → cutting → done → declined → expired → archived.
+  { id: 'status', header: 'Status', sort: 'status', cell: (j) => <JobStatusBadge status={j.status} /> },
+  { id: 'due', header: 'Due', sort: 'due', cell: (j) => <span className="whitespace-nowrap">{j.dueDate ?? '—'}</span> },
+  { id: 'parts', header: 'Parts', sort: 'parts', numeric: true, cell: (j) => j.partCount },
+  { id: 'materials', header: 'Materials', cell: (j) => <span className="text-graphite-soft">{j.materials.join(', ') || '—'}</span> },
   // The day on the shop's clock (a US shop's evening is not tomorrow).
-  { id: 'updated', header: 'Changed', accessorKey: 'updatedAt', cell: ({ row, table }) => <span className="whitespace-nowrap text-graphite-mute">{shopDay(new Date(row.original.updatedAt), (table.options.meta as { timeZone: string }).timeZone)}</span> },
+  { id: 'updated', header: 'Changed', sort: 'updated', cell: (j, timeZone) => <span className="whitespace-nowrap text-graphite-mute">{shopDay(new Date(j.updatedAt), timeZone)}</span> },
 ];
 
-// One stable empty list while loading: a fresh `[]` each render makes the table recompute (and re-render) endlessly.
-const NO_JOBS: JobSummary[] = [];
+const apiUrl = (search: string) => `/api/jobs${search ? `?${search}` : ''}`;
 
-/** Jobs as a sortable, filterable table; search, filters and sort live in the URL so a view can be bookmarked. */
-export function JobsBoard({ canWrite, timeZone }: { canWrite: boolean; timeZone: string }) {
-  const router = useRouter();
+/**
+ * Jobs as a table, one page at a time: search, filters, sort, page and page size live in the URL (so a link keeps the
+ * view) and are applied on the server. The server renders the first view; later ones come from the API.
+ */
+export function JobsBoard({ canWrite, timeZone, initial, initialQuery }: { canWrite: boolean; timeZone: string; initial: JobListPage; initialQuery: JobListQuery }) {
   const pathname = usePathname();
   const params = useSearchParams();
-  const search = params.get('q') ?? '';
-  const status = readStatusFilter(params.get('status'));
-  const customer = params.get('customer') ?? '';
-  const sort = params.get('sort') ?? 'updated.desc';
+  const query = useMemo(() => {
+    const parsed = jobListQuerySchema.safeParse(Object.fromEntries(params));
+    return parsed.success ? parsed.data : initialQuery;
+  }, [params, initialQuery]);
+  const search = jobListSearch(query);
+  const initialSearch = jobListSearch(initialQuery);
   const [creating, setCreating] = useState(false);
-  const jobs = useQuery({ queryKey: ['jobs'], queryFn: () => api<JobSummary[]>('/api/jobs') });
+  const jobs = useQuery({
+    queryKey: ['jobs', search],
+    queryFn: () => api<JobListPage>(apiUrl(search)),
+    initialData: search === initialSearch ? initial : undefined,
+    // The page stays on screen while the next one loads.
+    placeholderData: keepPreviousData,
+  });
 
-  function setParam(key: string, value: string) {
-    const next = new URLSearchParams(params);
-    if (value) next.set(key, value);
-    else next.delete(key);
-    router.replace(`${pathname}${next.size ? `?${next}` : ''}`);
+  /** A new view in the URL without a round trip for the page itself (Next's router follows replaceState). */
+  function setView(change: Partial<JobListQuery>) {
+    // Any change but the page itself starts again from the first page.
+    const next = { ...query, page: 1, ...change };
+    const qs = jobListSearch(next);
+    window.history.replaceState(null, '', `${pathname}${qs ? `?${qs}` : ''}`);
   }
 
-  const sorting: SortingState = useMemo(() => {
-    const [id, dir] = sort.split('.');
-    return columns.some((c) => c.id === id) ? [{ id, desc: dir === 'desc' }] : [];
-  }, [sort]);
-  // The status filter always applies: by default it leaves archived jobs out.
-  const columnFilters = useMemo(() => [{ id: 'status', value: status }, ...(customer ? [{ id: 'customer', value: customer }] : [])], [status, customer]);
-  const customers = useMemo(() => [...new Set((jobs.data ?? []).map((j) => j.customer).filter(Boolean))].sort(), [jobs.data]);
+  // Typing searches once the typist pauses, not at every key.
+  const [typed, setTyped] = useState(query.q);
+  const typing = useRef<ReturnType<typeof setTimeout>>(undefined);
+  useEffect(() => () => clearTimeout(typing.current), []);
+  function onSearch(value: string) {
+    setTyped(value);
+    clearTimeout(typing.current);
+    typing.current = setTimeout(() => setView({ q: value.trim() }), 250);
+  }
 
-  const table = useReactTable({
-    data: jobs.data ?? NO_JOBS,
-    columns,
-    meta: { timeZone },
-    state: { sorting, columnFilters, globalFilter: search },
-    globalFilterFn: matchesSearch,
-    // Always ascending first: left to itself the table guesses from the first row's value, and a job with no due
-    // date at the top would flip the first click to descending.
-    sortDescFirst: false,
-    onSortingChange: (updater) => {
-      const next = typeof updater === 'function' ? updater(sorting) : updater;
-      setParam('sort', next[0] ? `${next[0].id}.${next[0].desc ? 'desc' : 'asc'}` : '');
-    },
-    getCoreRowModel: getCoreRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-  });
-  const rows = table.getRowModel().rows;
-  const archivedCount = (jobs.data ?? NO_JOBS).filter((j) => j.status === 'archived').length;
+  function toggleSort(column: JobSortColumn) {
+    const [current, dir] = query.sort.split('.');
+    // Always ascending first, then back and forth.
+    setView({ sort: current === column && dir === 'asc' ? `${column}.desc` : `${column}.asc` });
+  }
+
+  const data = jobs.data;
+  const rows = data?.jobs ?? [];
+  const [sortColumn, sortDir] = query.sort.split('.');
 
   return (
     <div>
       <div className="mb-4 flex flex-wrap items-end gap-3">
-        <div className="w-72">
+        <div className="w-72 max-w-full">
           <label htmlFor="job-search" className="field-label">Search</label>
-          <input id="job-search" className="field-input" placeholder="Job, customer or material" defaultValue={search} onChange={(e) => setParam('q', e.target.value)} />
+          <input id="job-search" className="field-input" placeholder="Job, customer or material" value={typed} onChange={(e) => onSearch(e.target.value)} />
         </div>
         <div>
           <label htmlFor="job-filter-status" className="field-label">Status</label>
-          <select id="job-filter-status" className="field-input" value={status} onChange={(e) => setParam('status', e.target.value)}>
+          <select id="job-filter-status" className="field-input" value={query.status} onChange={(e) => setView({ status: e.target.value as JobListQuery['status'] })}>
             {JOB_STATUS_FILTERS.map((f) => <option key={f.value} value={f.value}>{f.label}</option>)}
           </select>
         </div>
         <div>
           <label htmlFor="job-filter-customer" className="field-label">Customer</label>
-          <select id="job-filter-customer" className="field-input" value={customer} onChange={(e) => setParam('customer', e.target.value)}>
+          <select id="job-filter-customer" className="field-input max-w-[14rem]" value={query.customer} onChange={(e) => setView({ customer: e.target.value })}>
             <option value="">Any</option>
-            {customers.map((c) => <option key={c} value={c}>{c}</option>)}
+            {query.customer && !data?.customers.includes(query.customer) && <option value={query.customer}>{query.customer}</option>}
+            {(data?.customers ?? []).map((c) => <option key={c} value={c}>{c}</option>)}
           </select>
         </div>
         {canWrite && !creating && <button type="button" className="btn-accent ml-auto" onClick={() => setCreating(true)}>New job</button>}
@@ -125,54 +117,89 @@ export function JobsBoard({ canWrite, timeZone }: { canWrite: boolean; timeZone:
           Could not load jobs: {jobs.error.message} <button className="underline" onClick={() => jobs.refetch()}>Try again</button>
         </p>
       )}
-      {jobs.isSuccess && rows.length === 0 && (
-        <EmptyState title={jobs.data.length ? 'No job matches these filters.' : 'No jobs yet.'}>
-          {jobs.data.length ? 'Clear the search or pick another status or customer.' : canWrite ? 'Create the first job to start its cut list.' : 'Jobs appear here once an estimator creates them.'}
+      {data && data.total === 0 && (
+        <EmptyState title={data.shopJobs ? 'No job matches these filters.' : 'No jobs yet.'}>
+          {data.shopJobs ? 'Clear the search or pick another status or customer.' : canWrite ? 'Create the first job to start its cut list.' : 'Jobs appear here once an estimator creates them.'}
         </EmptyState>
       )}
-      {jobs.isSuccess && rows.length > 0 && (
+      {data && data.total > 0 && rows.length === 0 && (
+        <EmptyState title={`Page ${data.page} is past the last page.`}>
+          <a href={`${pathname}?${jobListSearch({ ...query, page: data.pageCount })}`} onClick={(e) => { e.preventDefault(); setView({ page: data.pageCount }); }} className="underline">
+            Go to page {data.pageCount}
+          </a>
+        </EmptyState>
+      )}
+      {data && rows.length > 0 && (
         <div className="card overflow-x-auto">
-          <table className="data-table" aria-label="Jobs">
+          <table className="data-table" aria-label="Jobs" aria-busy={jobs.isPlaceholderData || undefined}>
             <thead>
-              {table.getHeaderGroups().map((group) => (
-                <tr key={group.id}>
-                  {group.headers.map((header) => {
-                    const sorted = header.column.getIsSorted();
-                    const numeric = (header.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
-                    return (
-                      <th key={header.id} className={numeric ? 'num' : undefined} aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}>
-                        {header.column.getCanSort() ? (
-                          <button type="button" className="uppercase tracking-wide hover:text-graphite" onClick={header.column.getToggleSortingHandler()}>
-                            {flexRender(header.column.columnDef.header, header.getContext())}
-                            <span aria-hidden className="ml-1">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
-                          </button>
-                        ) : (
-                          flexRender(header.column.columnDef.header, header.getContext())
-                        )}
-                      </th>
-                    );
-                  })}
-                </tr>
-              ))}
+              <tr>
+                {COLUMNS.map((c) => {
+                  const sorted = c.sort && sortColumn === c.sort ? sortDir : undefined;
+                  return (
+                    <th key={c.id} className={c.numeric ? 'num' : undefined} aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}>
+                      {c.sort ? (
+                        <button type="button" className="uppercase tracking-wide hover:text-graphite" onClick={() => toggleSort(c.sort!)}>
+                          {c.header}
+                          <span aria-hidden className="ml-1">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
+                        </button>
+                      ) : (
+                        c.header
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
             </thead>
             <tbody>
-              {rows.map((row) => (
-                <tr key={row.id} className="hover:bg-paper">
-                  {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className={(cell.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric ? 'num' : undefined}>
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </td>
+              {rows.map((job) => (
+                <tr key={job.id} className="hover:bg-paper">
+                  {COLUMNS.map((c) => (
+                    <td key={c.id} className={c.numeric ? 'num' : undefined}>{c.cell(job, timeZone)}</td>
                   ))}
                 </tr>
               ))}
             </tbody>
           </table>
-          <p className="border-t border-paper-edge px-3 py-2 text-xs text-graphite-mute">
-            {rows.length} of {jobs.data.length} jobs
-            {status === '' && archivedCount > 0 && ` · ${archivedCount} archived not shown (Status: Archived shows them)`}
-          </p>
+          <Pager page={data} query={query} pathname={pathname} setView={setView} />
+          {query.status === '' && data.archived > 0 && (
+            <p className="border-t border-paper-edge px-3 py-2 text-xs text-graphite-mute">
+              {data.archived} archived not shown (Status: Archived shows them)
+            </p>
+          )}
         </div>
       )}
     </div>
+  );
+}
+
+/** Where the page is, the way to the next and previous ones (real links, so they open in a new tab too), and the page size. */
+function Pager({ page, query, pathname, setView }: { page: JobListPage; query: JobListQuery; pathname: string; setView: (change: Partial<JobListQuery>) => void }) {
+  const first = (page.page - 1) * page.pageSize + 1;
+  const last = Math.min(page.total, page.page * page.pageSize);
+  const link = (to: number, label: string, rel: 'prev' | 'next') => {
+    const disabled = to < 1 || to > page.pageCount;
+    if (disabled) return <span className="btn-quiet pointer-events-none opacity-40" aria-disabled="true">{label}</span>;
+    const qs = jobListSearch({ ...query, page: to });
+    return (
+      <a href={`${pathname}${qs ? `?${qs}` : ''}`} rel={rel} className="btn-quiet" onClick={(e) => { e.preventDefault(); setView({ page: to }); }}>
+        {label}
+      </a>
+    );
+  };
+  return (
+    <nav aria-label="Pages" className="flex flex-wrap items-center gap-x-4 gap-y-2 border-t border-paper-edge px-3 py-2 text-xs text-graphite-mute">
+      <p data-testid="jobs-range">
+        {first}–{last} of {page.total} {page.total === 1 ? 'job' : 'jobs'} · page {page.page} of {page.pageCount}
+      </p>
+      <div className="ml-auto flex items-center gap-2">
+        {link(page.page - 1, '‹ Previous', 'prev')}
+        {link(page.page + 1, 'Next ›', 'next')}
+        <label htmlFor="job-page-size" className="ml-2">Per page</label>
+        <select id="job-page-size" className="field-input w-auto py-1 text-xs" value={page.pageSize} onChange={(e) => setView({ size: Number(e.target.value) })}>
+          {JOB_PAGE_SIZES.map((n) => <option key={n} value={n}>{n}</option>)}
+        </select>
+      </div>
+    </nav>
   );
 }

@@ -1,10 +1,11 @@
-import { and, desc, eq, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, parts, plans, stockMovements } from '../schema';
 import { HttpError } from '@/lib/api/errors';
 import type { Role } from '@/lib/auth/permissions';
 import { refuseManualStatus, acceptedAtAfter } from '@/lib/jobs/status';
-import type { JobInput, JobPatch, JobSummary } from '@/shared/schemas/job';
+import { JOB_STATUSES, type JobInput, type JobPatch, type JobSummary } from '@/shared/schemas/job';
+import type { JobListPage, JobListQuery, JobSortColumn } from '@/shared/schemas/job-list';
 import { recordAudit } from './audit';
 import { resolveCustomer } from './customers';
 import { jobFacts } from './job-status';
@@ -56,9 +57,110 @@ const toSummary = (row: SummaryRow): JobSummary => ({
   updatedAt: row.updatedAt.toISOString(),
 });
 
-export async function listJobs(db: Db, shopId: string): Promise<JobSummary[]> {
-  const rows = await selectSummaries(db, shopId).where(eq(jobs.shopId, shopId)).orderBy(desc(jobs.updatedAt));
-  return rows.map(toSummary);
+/** `%text%` for ILIKE, the pattern's own characters (`%`, `_`, `\\`) matched as typed. */
+const containing = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+
+/** A job's pieces (quantities summed), for sorting by them. */
+const piecesOf = sql<number>`(select coalesce(sum(${parts.quantity}), 0) from ${parts} where ${parts.shopId} = ${jobs.shopId} and ${parts.jobId} = ${jobs.id})`;
+
+/** What each sortable column sorts by: names ignoring case, status in work order, jobs without a due date last. */
+const SORT_KEYS: Record<JobSortColumn, SQL> = {
+  name: sql`lower(${jobs.name})`,
+  customer: sql`lower(${customers.name})`,
+  status: sql`array_position(array[${sql.raw(JOB_STATUSES.map((s) => `'${s}'`).join(', '))}]::job_status[], ${jobs.status})`,
+  due: sql`${jobs.dueDate}`,
+  parts: piecesOf,
+  updated: sql`${jobs.updatedAt}`,
+};
+
+/**
+ * One page of a shop's jobs as the jobs list shows them: filtered by status (archived left out unless asked for) and
+ * customer, searched in the job's name, its customer's name and its parts' materials (any case), sorted on the
+ * server (ties by id, so pages never overlap), with the counts the list's controls need, in one statement.
+ */
+export async function listJobsPage(db: Db, shopId: string, q: JobListQuery): Promise<JobListPage> {
+  const filters: SQL[] = [eq(jobs.shopId, shopId)];
+  if (q.status === '') filters.push(sql`${jobs.status} <> 'archived'`);
+  else if (q.status !== 'all') filters.push(eq(jobs.status, q.status));
+  if (q.customer) filters.push(sql`lower(${customers.name}) = lower(${q.customer})`);
+  if (q.q) {
+    const like = containing(q.q);
+    filters.push(
+      sql`(${jobs.name} ilike ${like} or ${customers.name} ilike ${like} or exists (select 1 from ${parts} where ${parts.shopId} = ${jobs.shopId} and ${parts.jobId} = ${jobs.id} and ${parts.material} ilike ${like}))`,
+    );
+  }
+  const where = and(...filters)!;
+  const needsCustomer = Boolean(q.customer || q.q) || q.sort.startsWith('customer.');
+  const [column, dir] = q.sort.split('.') as [JobSortColumn, 'asc' | 'desc'];
+  const key = SORT_KEYS[column];
+  // Empty values (no customer, no due date) go last either way round; ties by id the same way round.
+  const order =
+    column === 'updated' // never empty: plain, so the index serves it
+      ? dir === 'asc' ? [asc(jobs.updatedAt), asc(jobs.id)] : [desc(jobs.updatedAt), desc(jobs.id)]
+      : dir === 'asc' ? [sql`${key} asc nulls last`, asc(jobs.id)] : [sql`${key} desc nulls last`, desc(jobs.id)];
+
+  const customerJoin = needsCustomer ? sql`left join ${customers} on ${customers.id} = ${jobs.customerId}` : sql``;
+  const orderBy = sql.join(order, sql`, `);
+
+  // One statement (each round trip to the embedded database costs about as much as the work itself): the page's
+  // ids in order (narrow rows, so sorting a big shop stays cheap; the default order reads jobs_shop_updated_idx and
+  // stops after the page), those jobs with their customer and their parts' figures, and the counts. Each job's
+  // materials come back as its parts have them and are made distinct here: sorting or grouping text in the
+  // embedded database (array_agg(distinct), group by material) cost ten times the rest of the statement.
+  const result = (await db.execute(sql`
+    with page_ids as (
+      select ${jobs.id} as id, row_number() over (order by ${orderBy}) as ord
+        from ${jobs} ${customerJoin}
+       where ${where}
+       order by ${orderBy}
+       limit ${q.size} offset ${(q.page - 1) * q.size}
+    ),
+    page_rows as (
+      select page_ids.ord, ${jobs.id} as "id", ${jobs.name} as "name", coalesce(${customers.name}, '') as "customer",
+             ${jobs.customerId} as "customerId", ${jobs.status} as "status", ${jobs.dueDate} as "dueDate", ${jobs.notes} as "notes",
+             ${jobs.acceptedAt} as "acceptedAt", ${jobs.createdAt} as "createdAt", ${jobs.updatedAt} as "updatedAt",
+             coalesce(stats.pieces, 0)::int as "partCount", coalesce(stats.materials, '{}') as "materials"
+        from page_ids
+        join ${jobs} on ${jobs.id} = page_ids.id
+        left join ${customers} on ${customers.id} = ${jobs.customerId}
+        left join lateral (
+          select sum(${parts.quantity}) as pieces, array_agg(${parts.material}) as materials
+            from ${parts} where ${parts.shopId} = ${jobs.shopId} and ${parts.jobId} = ${jobs.id}
+        ) stats on true
+    ),
+    counts as (
+      select count(*) filter (where ${where})::int as total, count(*)::int as shop_jobs,
+             count(*) filter (where ${jobs.status} = 'archived')::int as archived
+        from ${jobs} ${customerJoin}
+       where ${jobs.shopId} = ${shopId}
+    )
+    select (select coalesce(json_agg(page_rows order by ord), '[]'::json) from page_rows) as jobs,
+           counts.total, counts.shop_jobs, counts.archived,
+           (select coalesce(array_agg(c.name), '{}') from ${customers} c where c.shop_id = ${shopId} and exists (select 1 from ${jobs} j where j.customer_id = c.id)) as customers
+      from counts`)) as unknown as { rows: { jobs: (Record<string, unknown> & { ord: number })[] | string; total: number; shop_jobs: number; archived: number; customers: string[] }[] };
+  const [row] = result.rows;
+  // JSON from the database: timestamps as text, to the app's ISO form.
+  const rows = (typeof row.jobs === 'string' ? JSON.parse(row.jobs) : row.jobs) as Record<string, unknown>[];
+  const iso = (v: unknown) => (v == null ? null : new Date(String(v)).toISOString());
+  const total = Number(row.total);
+  return {
+    jobs: rows.map(({ ord: _ord, ...j }) => ({
+      ...(j as unknown as JobSummary),
+      partCount: Number(j.partCount),
+      materials: [...new Set(j.materials as string[])].sort(),
+      acceptedAt: iso(j.acceptedAt),
+      createdAt: iso(j.createdAt)!,
+      updatedAt: iso(j.updatedAt)!,
+    })),
+    total,
+    page: q.page,
+    pageSize: q.size,
+    pageCount: Math.max(1, Math.ceil(total / q.size)),
+    sort: q.sort,
+    shopJobs: Number(row.shop_jobs),
+    archived: Number(row.archived),
+    customers: [...row.customers].sort((a, b) => a.localeCompare(b, 'en', { sensitivity: 'base' })),
+  };
 }
 
 export async function getJob(db: Db, shopId: string, id: string): Promise<JobSummary | null> {

@@ -21,7 +21,12 @@ export const jobs = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('jobs_shop_idx').on(t.shopId), index('jobs_customer_idx').on(t.customerId)],
+  (t) => [
+    index('jobs_shop_idx').on(t.shopId),
+    index('jobs_customer_idx').on(t.customerId),
+    // The jobs list's default order (latest change first, ties by id): a page is read off the index.
+    index('jobs_shop_updated_idx').on(t.shopId, t.updatedAt, t.id),
+  ],
 );
 
 /** The column tying a row to its job; the row goes when the job is deleted. */

@@ -3,6 +3,7 @@ import { getServerSession } from 'next-auth';
 import { getToken } from 'next-auth/jwt';
 import type { NextRequest } from 'next/server';
 import { redirect } from 'next/navigation';
+import { cache } from 'react';
 import { getDb } from '@/db/client';
 import { loadSessionUser, type SessionUser } from '@/db/queries/users';
 import type { Db } from '@/db/open';
@@ -20,12 +21,15 @@ export async function userFromRequest(req: NextRequest, db: Db): Promise<Session
   return claims ? loadSessionUser(db, claims) : null;
 }
 
-/** The signed-in user of a page render, or null. */
-export async function currentUser(): Promise<SessionUser | null> {
+/**
+ * The signed-in user of a page render, or null. Once per render (React's cache): the layout and the page ask for it
+ * both, and each ask was a cookie decryption and a database read.
+ */
+export const currentUser = cache(async (): Promise<SessionUser | null> => {
   const session = await getServerSession(authOptions());
   const claims = claimsFromToken(session?.user);
   return claims ? loadSessionUser(await getDb(), claims) : null;
-}
+});
 
 /** For server components: signed in (else to sign-in) and allowed (else to the no-access page). */
 export async function requirePageUser(permission?: Permission): Promise<SessionUser> {

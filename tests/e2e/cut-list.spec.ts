@@ -119,7 +119,7 @@ test('an estimator builds a cut list by keyboard, upload and drawer schedule, th
 
 test('a cutter sees the cut list read-only and can open the setup cards', async ({ page }) => {
   await signIn(page, 'cutter');
-  await page.goto('/jobs');
+  await page.goto('/jobs?q=Hollis%20kitchen');
   await page.getByRole('link', { name: 'Hollis kitchen' }).click();
   await expect(page.getByRole('table', { name: 'Cut list' })).toBeVisible();
   await expect(page.getByLabel('New part: Part')).toHaveCount(0);
@@ -133,7 +133,7 @@ test('a cutter sees the cut list read-only and can open the setup cards', async 
 
 test('an Excel workbook is read in the browser, its unit detected, and imported whole', async ({ page }) => {
   await signIn(page, 'estimator');
-  await page.goto('/jobs');
+  await page.goto('/jobs?q=Pemberton%20vanity');
   await page.getByRole('link', { name: 'Pemberton vanity' }).click();
   const rows = page.getByRole('table', { name: 'Cut list' }).getByTestId('cut-list-row');
   const before = await rows.count();

@@ -1,11 +1,12 @@
 import { expect, test } from './support/test';
 import { dragPart, pickMove, savedPlan } from './support/bench';
 import { shot, signIn } from './support/session';
+import { jobId } from './support/plans';
 
 test('an estimator nests a job with progress, saves a draft, drags a part on the bench, saves, and the change survives a reload', async ({ page }) => {
   test.setTimeout(120_000);
   await signIn(page, 'estimator');
-  await page.goto('/jobs');
+  await page.goto('/jobs?q=Hollis%20kitchen');
   await page.getByRole('link', { name: 'Hollis kitchen' }).click();
   await page.getByRole('navigation', { name: 'Job sections' }).getByRole('link', { name: 'Plan' }).click();
   await expect(page.getByRole('table', { name: 'Plans' })).toContainText('Released');
@@ -54,12 +55,11 @@ test('an estimator nests a job with progress, saves a draft, drags a part on the
 test('an overlapping drop is shown on the bench and saving is refused until undone', async ({ page }) => {
   test.setTimeout(90_000);
   await signIn(page, 'estimator');
-  const jobs: { id: string; name: string }[] = await (await page.request.get('/api/jobs')).json();
-  const kitchen = jobs.find((j) => j.name === 'Hollis kitchen')!;
-  const plans: { id: string; status: string }[] = await (await page.request.get(`/api/jobs/${kitchen.id}/plans`)).json();
+  const kitchenId = await jobId(page, 'Hollis kitchen');
+  const plans: { id: string; status: string }[] = await (await page.request.get(`/api/jobs/${kitchenId}/plans`)).json();
   const draft = plans.find((p) => p.status === 'draft');
   test.skip(!draft, 'needs the draft saved by the test above');
-  await page.goto(`/jobs/${kitchen.id}/plan/${draft!.id}`);
+  await page.goto(`/jobs/${kitchenId}/plan/${draft!.id}`);
   await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
   const { pieces } = await savedPlan(page, draft!.id);
   const i = pieces.findIndex((p) => p.placements.length >= 2);
@@ -87,7 +87,7 @@ test('an overlapping drop is shown on the bench and saving is refused until undo
 
 test('a cutter sees the released plan on a read-only bench, without prices, drafts or the Nest', async ({ page }) => {
   await signIn(page, 'cutter');
-  await page.goto('/jobs');
+  await page.goto('/jobs?q=Hollis%20kitchen');
   await page.getByRole('link', { name: 'Hollis kitchen' }).click();
   await page.getByRole('navigation', { name: 'Job sections' }).getByRole('link', { name: 'Plan' }).click();
   const plans = page.getByRole('table', { name: 'Plans' });

@@ -2,12 +2,12 @@ import fs from 'node:fs';
 import { expect, test, type Page } from './support/test';
 import { pageOverflow } from './support/layout-checks';
 import { shot, signIn } from './support/session';
+import { jobId as jobIdByName } from './support/plans';
 
 const WIDTHS = [1440, 820, 390] as const;
 
 async function kitchenId(page: Page) {
-  const jobs: { id: string; name: string }[] = await (await page.request.get('/api/jobs')).json();
-  return jobs.find((j) => j.name === 'Hollis kitchen')!.id;
+  return jobIdByName(page, 'Hollis kitchen');
 }
 
 test('the estimator builds a quote from the demo kitchen’s nested plan with the defaults, reads the customer’s copy, downloads the PDF and marks it sent', async ({ page }) => {

@@ -2,12 +2,11 @@ import fs from 'node:fs';
 import { expect, test, type Page } from './support/test';
 import { PDFDocument } from 'pdf-lib';
 import { shot, signIn } from './support/session';
+import { jobId } from './support/plans';
 
 /** The demo shop's released kitchen plan, found the way any client would: through the API. */
 async function kitchenPlan(page: Page) {
-  const jobs: { id: string; name: string }[] = await (await page.request.get('/api/jobs')).json();
-  const kitchen = jobs.find((j) => j.name === 'Hollis kitchen')!;
-  const list = await (await page.request.get(`/api/jobs/${kitchen.id}/plans`)).json();
+  const list = await (await page.request.get(`/api/jobs/${await jobId(page, 'Hollis kitchen')}/plans`)).json();
   const plans: { id: string; status: string }[] = Array.isArray(list) ? list : list.plans;
   const planId = plans.find((p) => p.status === 'released' || p.status === 'cutting')!.id;
   const plan = await (await page.request.get(`/api/plans/${planId}`)).json();

@@ -8,6 +8,7 @@ import { can, type Permission } from '../../lib/auth/permissions';
 import { expect, test, type Page } from './support/test';
 import { clippedText, pageOverflow } from './support/layout-checks';
 import { shot, signIn, type DemoRole } from './support/session';
+import { jobId as jobIdByName } from './support/plans';
 
 const VIEWPORTS = [
   { name: 'phone', width: 390, height: 844 },
@@ -23,8 +24,7 @@ interface Ids {
 
 /** The demo kitchen, its released plan and one of its parts, found through the API as any client would. */
 async function demoIds(page: Page): Promise<Ids> {
-  const jobs: { id: string; name: string }[] = await (await page.request.get('/api/jobs')).json();
-  const jobId = jobs.find((j) => j.name === 'Hollis kitchen')!.id;
+  const jobId = await jobIdByName(page, 'Hollis kitchen');
   const list = await (await page.request.get(`/api/jobs/${jobId}/plans`)).json();
   const plans: { id: string; status: string }[] = Array.isArray(list) ? list : list.plans;
   const planId = plans.find((p) => p.status === 'released' || p.status === 'cutting')!.id;

@@ -80,7 +80,7 @@ test('the owner imports a stock CSV: bad rows are named, and only the valid rows
 
 test('the estimator reads the takeoff for the kitchen; a cutter may not', async ({ page, browser }) => {
   await signIn(page, 'estimator');
-  await page.goto('/jobs');
+  await page.goto('/jobs?q=Hollis%20kitchen');
   await page.getByRole('link', { name: 'Hollis kitchen' }).first().click();
   await expect(page).toHaveURL(/\/jobs\/[0-9a-f-]{36}$/);
   const jobUrl = page.url();

@@ -193,9 +193,11 @@ describe('deleting or archiving a job', () => {
     expect((await editJob(fx.owner, j.id, { status: 'archived' })).body.status).toBe('archived');
   });
 
-  test('archived jobs are still listed by the API, marked archived, for the jobs list to filter', async () => {
+  test('archived jobs leave the default jobs list, and the Archived and Any filters list them, marked archived', async () => {
     const [j] = await db.insert(jobs).values({ shopId: fx.mine.id, name: 'Filed away', status: 'archived' }).returning();
-    const list = await call(jobsRoute.GET, '/api/jobs', '', fx.estimator);
-    expect(list.body.find((x: { id: string }) => x.id === j.id)).toMatchObject({ status: 'archived' });
+    const listed = async (status: string) => (await call(jobsRoute.GET, `/api/jobs?q=Filed+away${status}`, '', fx.estimator)).body.jobs.find((x: { id: string }) => x.id === j.id);
+    expect(await listed('')).toBeUndefined();
+    expect(await listed('&status=archived')).toMatchObject({ status: 'archived' });
+    expect(await listed('&status=all')).toMatchObject({ status: 'archived' });
   });
 });

@@ -1,9 +1,10 @@
-import { createJob, listJobs } from '@/db/queries/jobs';
+import { createJob, listJobsPage } from '@/db/queries/jobs';
 import { route } from '@/lib/api/route';
 import { jobInputSchema } from '@/shared/schemas/job';
+import { jobListQuerySchema } from '@/shared/schemas/job-list';
 
-// GET /api/jobs – the shop's jobs with part counts and materials
-export const GET = route({ permission: 'jobs:read' }, async ({ db, user }) => listJobs(db, user.shopId));
+// GET /api/jobs – one page of the shop's jobs (page, size, sort, q, status, customer) with part counts and materials
+export const GET = route({ permission: 'jobs:read', query: jobListQuerySchema }, async ({ db, user, query }) => listJobsPage(db, user.shopId, query));
 
 // POST /api/jobs – create a job
 export const POST = route({ permission: 'jobs:write', body: jobInputSchema, status: 201 }, async ({ db, user, body }) =>

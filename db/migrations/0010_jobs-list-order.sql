@@ -1,0 +1,1 @@
+CREATE INDEX "jobs_shop_updated_idx" ON "jobs" USING btree ("shop_id","updated_at","id");
