@@ -13,6 +13,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/customers', label: 'Customers', permission: 'customers:read', hint: 'People and firms, their jobs and quotes' },
   { href: '/setup-cards', label: 'Setup cards', permission: 'jobs:read', hint: 'Router settings per joint and thickness' },
   { href: '/stock', label: 'Stock room', permission: 'stock:read', hint: 'Sheets, boards and offcuts' },
+  { href: '/purchase-orders', label: 'Purchase orders', permission: 'purchasing:read', hint: 'What the shop orders from its suppliers' },
   { href: '/yield', label: 'Yield ledger', permission: 'yield:read', hint: 'What the stock became' },
   { href: '/reports', label: 'Reports', permission: 'yield:read', hint: 'Yield and the rack over time' },
   { href: '/shop-floor', label: 'Shop floor', permission: 'sawsteps:tick', hint: 'Saw orders to cut' },

@@ -21,3 +21,5 @@ export const movementKindEnum = pgEnum('movement_kind', [
 /** A quote revision: a draft being priced, sent to the customer, or replaced by a newer revision that was sent. */
 export const quoteRevisionStatusEnum = pgEnum('quote_revision_status', ['draft', 'sent', 'replaced']);
 export const recutStatusEnum = pgEnum('recut_status', ['open', 'planned', 'cut', 'spoiled', 'cancelled']);
+/** A purchase order: draft (lines editable) → sent → part-received → received, or cancelled. */
+export const purchaseOrderStatusEnum = pgEnum('purchase_order_status', ['draft', 'sent', 'part-received', 'received', 'cancelled']);
