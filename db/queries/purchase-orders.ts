@@ -290,9 +290,10 @@ export async function cancelPurchaseOrder(db: Db, shopId: string, userId: string
  * Receives pieces against a sent order, all in one transaction: each line's count goes onto its stock size with a
  * 'received' movement naming the order, the line keeps what arrived, and the order becomes part received or
  * received. Receiving more than a line still waits for is refused (409, naming the line); so is receiving nothing.
+ * `all` receives everything each line still waits for.
  * With `updateCosts`, each received size's cost in the stock room becomes this order's unit cost.
  */
-export async function receivePurchaseOrder(db: Db, shopId: string, userId: string, id: string, input: ReceivePurchaseOrder): Promise<PurchaseOrderView> {
+export async function receivePurchaseOrder(db: Db, shopId: string, userId: string, id: string, input: Pick<ReceivePurchaseOrder, 'lines' | 'updateCosts'> & Partial<Pick<ReceivePurchaseOrder, 'all' | 'note'>>): Promise<PurchaseOrderView> {
   await db.transaction(async (tx) => {
     const row = await lockOrder(tx, shopId, id);
     const title = poNumber(row.number);
@@ -304,7 +305,7 @@ export async function receivePurchaseOrder(db: Db, shopId: string, userId: strin
       .innerJoin(stockItems, eq(stockItems.id, purchaseOrderLines.stockItemId))
       .where(eq(purchaseOrderLines.purchaseOrderId, id))
       .for('update');
-    const wanted = input.lines.filter((l) => l.quantity > 0);
+    const wanted = input.all ? lines.filter((l) => l.line.quantity > l.line.received).map((l) => ({ lineId: l.line.id, quantity: l.line.quantity - l.line.received })) : input.lines.filter((l) => l.quantity > 0);
     if (!wanted.length) throw new HttpError(422, 'Say how many pieces came on at least one line.');
     for (const w of input.lines) if (!lines.some((l) => l.line.id === w.lineId)) throw new HttpError(422, `A line named is not on ${title}.`);
     for (const w of wanted) {

@@ -36,17 +36,24 @@ export type PurchaseOrderPatch = z.infer<typeof purchaseOrderPatchSchema>;
 
 export const sendPurchaseOrderSchema = z.object({ supplierEmail: email.optional() });
 
-/** What arrived: pieces per line (0 or missing for a line where nothing came), and whether to take the PO's prices. */
-export const receivePurchaseOrderSchema = z.object({
-  lines: z
-    .array(z.object({ lineId: z.uuid(), quantity: count('Pieces received') }))
-    .min(1, 'Say how many pieces came on at least one line.')
-    .max(200)
-    .refine((lines) => new Set(lines.map((l) => l.lineId)).size === lines.length, 'A line is named twice.'),
-  /** Set each received size's cost in the stock room to this order's unit cost (the owner says so per receipt). */
-  updateCosts: z.boolean().default(false),
-  note: text({ max: 300 }).default(''),
-});
+/**
+ * What arrived: pieces per line (0 or missing for a line where nothing came), or `all` for everything still to come;
+ * and whether to take the order's prices into the stock room.
+ */
+export const receivePurchaseOrderSchema = z
+  .object({
+    lines: z
+      .array(z.object({ lineId: z.uuid(), quantity: count('Pieces received') }))
+      .max(200)
+      .refine((lines) => new Set(lines.map((l) => l.lineId)).size === lines.length, 'A line is named twice.')
+      .default([]),
+    /** Everything each line still waits for. */
+    all: z.boolean().default(false),
+    /** Set each received size's cost in the stock room to this order's unit cost (the owner says so per receipt). */
+    updateCosts: z.boolean().default(false),
+    note: text({ max: 300 }).default(''),
+  })
+  .refine((r) => r.all || r.lines.some((l) => l.quantity > 0), { message: 'Say how many pieces came on at least one line.', path: ['lines'] });
 export type ReceivePurchaseOrder = z.infer<typeof receivePurchaseOrderSchema>;
 
 export const buyingSettingsSchema = z.object({
