@@ -5,6 +5,7 @@ import { conflict, HttpError, notFound } from '@/lib/api/errors';
 import { groupBySupplier, lowStockOrders, piecesToBuy, type SupplierOrder } from '@/lib/buying/order-lines';
 import { poNumber, type PoStatus } from '@/lib/buying/describe';
 import { costEachCents } from '@/lib/stock/pricing';
+import { quoteNominal } from '@/lib/quotes/quote-text';
 import { isLowStock } from '@/lib/stock/low-stock';
 import type { PurchaseOrderPatch, ReceivePurchaseOrder } from '@/shared/schemas/purchase-order';
 import { recordAudit } from './audit';
@@ -312,7 +313,7 @@ export async function receivePurchaseOrder(db: Db, shopId: string, userId: strin
       const { line, item } = lines.find((l) => l.line.id === w.lineId)!;
       const open = line.quantity - line.received;
       if (w.quantity > open) {
-        throw conflict(`${item.material} ${item.nominalThickness}: ${line.quantity} ordered and ${line.received} already received, so ${open} more can come in, not ${w.quantity}. Record extra pieces as a receipt in the stock room.`);
+        throw conflict(`${item.material} ${quoteNominal(item.nominalThickness)}: ${line.quantity} ordered and ${line.received} already received, so ${open} more can come in, not ${w.quantity}. Record extra pieces as a receipt in the stock room.`);
       }
     }
     const reason = `Received on ${title}${input.note ? ` — ${input.note}` : ''}`;
