@@ -39,7 +39,7 @@ export function purchaseOrderMail(input: { shopName: string; shopDetails: string
     `Total: ${input.total}`,
     ...(input.note ? ['', input.note] : []),
     '',
-    `Please quote ${input.title} on the delivery note and the invoice, and reply to confirm.`,
+    `Please quote ${input.title} on the delivery note and the invoice.`,
     '',
     `— ${input.shopName}`,
     ...(input.shopDetails ? [input.shopDetails] : []),
@@ -56,7 +56,7 @@ export function purchaseOrderMail(input: { shopName: string; shopDetails: string
       `<table style="border-collapse:collapse;margin:0 0 16px">${rows}</table>`,
       p(`Total: <strong>${escapeHtml(input.total)}</strong>`),
       input.note ? p(escapeHtml(input.note).replace(/\n/g, '<br>')) : '',
-      p(`Please quote ${escapeHtml(input.title)} on the delivery note and the invoice, and reply to confirm.`),
+      p(`Please quote ${escapeHtml(input.title)} on the delivery note and the invoice.`),
       p(`— ${escapeHtml(input.shopName)}${input.shopDetails ? `<br><span style="color:#7a766c;font-size:13px">${escapeHtml(input.shopDetails).replace(/\n/g, '<br>')}</span>` : ''}`),
     ].join('\n'),
   );
