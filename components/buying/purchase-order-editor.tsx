@@ -122,12 +122,12 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
         </div>
         <div>
           <label htmlFor="po-email" className="field-label">Supplier’s e-mail</label>
-          <input id="po-email" type="email" className="field-input" value={email} onChange={(e) => setEmail(e.target.value)} placeholder="orders@supplier.example" />
+          <input id="po-email" type="email" className="field-input" value={email} onChange={(e) => setEmail(e.target.value)} placeholder={editable ? 'orders@supplier.example' : ''} />
           {fields.supplierEmail && <p className="field-error">{fields.supplierEmail[0]}</p>}
         </div>
         <div className="sm:col-span-2">
           <label htmlFor="po-note" className="field-label">Note for the supplier</label>
-          <textarea id="po-note" rows={2} className="field-input" value={note} onChange={(e) => setNote(e.target.value)} placeholder="Delivery by Friday, please" />
+          <textarea id="po-note" rows={2} className="field-input" value={note} onChange={(e) => setNote(e.target.value)} placeholder={editable ? 'Delivery by Friday, please' : ''} />
         </div>
       </fieldset>
 
