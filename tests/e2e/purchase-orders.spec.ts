@@ -1,5 +1,6 @@
 import { listCaughtMail, type CaughtMail } from '../../lib/mail/caught';
 import { E2E_MAIL } from './support/server';
+import { saveDraftPlan } from './support/plans';
 import { shot, signIn } from './support/session';
 import { expect, test, type Page } from './support/test';
 
@@ -118,4 +119,38 @@ test('the owner orders the demo’s low stock, sends the order to the supplier, 
     await noSideScroll(page);
     await shot(page, `po-received-${width}`);
   }
+});
+
+test('the estimator makes the purchase order for what a plan must buy from its takeoff, and may cancel it', async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.setViewportSize({ width: 1440, height: 900 });
+  await signIn(page, 'estimator');
+  // Ten near-full sheets of ¾″ MDF: more than the rack holds, so the plan buys the rest.
+  const job = await (await page.request.post('/api/jobs', { data: { name: `Buying check ${Date.now()}` } })).json();
+  const part = await page.request.post(`/api/jobs/${job.id}/parts`, { data: { label: 'Panel', quantity: 10, lengthMm: 2300, widthMm: 1150, thicknessMm: 18, material: 'MDF', grain: 'any' } });
+  expect(part.status(), await part.text()).toBe(201);
+  const planId = await saveDraftPlan(page, job.name, 'Panels to buy');
+  const { document } = await (await page.request.get(`/api/plans/${planId}`)).json();
+  const stock: { id: string; material: string; nominalThickness: string; onHand: number; reserved: number }[] = await (await page.request.get('/api/stock')).json();
+  const mdf = stock.find((s) => s.material === 'MDF' && s.nominalThickness === '3/4"')!;
+  const ids: string[] = document.pieces.map((p: { stockId: string }) => p.stockId);
+  const bought = ids.filter((id) => id === `buy:${mdf.id}`).length;
+  const pulled = ids.filter((id) => id === `stock:${mdf.id}`).length;
+  // What to order: every piece bought, and what the rack is short of for the pieces pulled.
+  const expected = bought + Math.max(0, pulled - (mdf.onHand - mdf.reserved));
+  expect(expected).toBeGreaterThan(0);
+
+  await page.goto(`/jobs/${job.id}/takeoff?plan=${planId}`);
+  await page.getByRole('button', { name: 'Make purchase orders for this' }).click();
+  await expect(page.getByRole('heading', { level: 1 })).toHaveText(/PO-\d{4}.*Hollow Creek Supply/);
+  await expect(page.getByText('from plan “Panels to buy”')).toBeVisible();
+  const line = page.getByRole('table', { name: 'Order lines' }).getByRole('row').filter({ hasText: 'MDF ¾″, 96″ × 48″' });
+  await expect(line.getByLabel(/quantity/)).toHaveValue(String(expected));
+  await shot(page, 'po-from-plan-1440');
+
+  page.once('dialog', (d) => void d.accept());
+  await page.getByRole('button', { name: 'Cancel this order' }).click();
+  await expect(page.getByText('Cancelled', { exact: true })).toBeVisible();
+  // The estimator sees no receiving (that is the owner's, as a receipt in the stock room is).
+  await expect(page.getByRole('form', { name: 'Receive against this order' })).toHaveCount(0);
 });
