@@ -131,7 +131,7 @@ test('the estimator makes the purchase order for what a plan must buy from its t
   expect(part.status(), await part.text()).toBe(201);
   const planId = await saveDraftPlan(page, job.name, 'Panels to buy');
   const { document } = await (await page.request.get(`/api/plans/${planId}`)).json();
-  const stock: { id: string; material: string; nominalThickness: string; onHand: number; reserved: number }[] = await (await page.request.get('/api/stock')).json();
+  const { items: stock }: { items: { id: string; material: string; nominalThickness: string; onHand: number; reserved: number }[] } = await (await page.request.get('/api/stock')).json();
   const mdf = stock.find((s) => s.material === 'MDF' && s.nominalThickness === '3/4"')!;
   const ids: string[] = document.pieces.map((p: { stockId: string }) => p.stockId);
   const bought = ids.filter((id) => id === `buy:${mdf.id}`).length;
