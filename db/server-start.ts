@@ -4,12 +4,13 @@ import { startMailService, stopMailService } from '@/lib/mail/service';
 import { paymentsConfig } from '@/lib/payments/config';
 import { startQuoteExpiry, stopQuoteExpiry } from '@/lib/quotes/expiry';
 import path from 'node:path';
+import { startDigestScheduler, stopDigestScheduler } from '@/lib/buying/digest-service';
 import { closeDb, getDbHandle } from './client';
 import { serveLiveBackups, type LiveBackupServer } from './live-backup';
 
 /**
- * Refuses to start without a sound environment and database; starts the mail sender and the quote expiry round;
- * closes them on shutdown.
+ * Refuses to start without a sound environment and database; starts the mail sender, the quote expiry round and
+ * the low-stock digest; closes them on shutdown.
  */
 export async function startServer() {
   let backups: LiveBackupServer | undefined;
@@ -26,13 +27,15 @@ export async function startServer() {
       if ('error' in served) console.error(served.error);
       else backups = served;
     }
+    startDigestScheduler(handle.db);
   } catch (error) {
     console.error((error as Error).message);
     process.exit(1);
   }
   const shutdown = () => {
     stopQuoteExpiry();
-    (backups?.close() ?? Promise.resolve())
+    stopDigestScheduler()
+      .then(() => backups?.close())
       .then(() => stopMailService())
       .catch(() => undefined)
       .then(() => closeDb())

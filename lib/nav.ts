@@ -13,6 +13,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: '/customers', label: 'Customers', permission: 'customers:read', hint: 'People and firms, their jobs and quotes' },
   { href: '/setup-cards', label: 'Setup cards', permission: 'jobs:read', hint: 'Router settings per joint and thickness' },
   { href: '/stock', label: 'Stock room', permission: 'stock:read', hint: 'Sheets, boards and offcuts' },
+  { href: '/purchase-orders', label: 'Purchase orders', permission: 'purchasing:read', hint: 'What the shop orders from its suppliers' },
   { href: '/yield', label: 'Yield ledger', permission: 'yield:read', hint: 'What the stock became' },
   // The estimator sees the quoting report only; the owner every report (the page decides per section).
   { href: '/reports', label: 'Reports', permission: 'quotes:read', hint: 'Yield, the rack and quotes over time' },

@@ -3,7 +3,7 @@ import type { Db } from '@/db/open';
 import { buildNestRequest } from '@/db/queries/nest-request';
 import { releasePlan } from '@/db/queries/plan-lifecycle';
 import { recordOpeningCounts } from '@/db/queries/stock';
-import { customers, hardwareItems, jobs, offcuts, parts, plans, shops, slideModels, stockItems, users } from '@/db/schema';
+import { customers, hardwareItems, jobs, offcuts, parts, plans, shops, slideModels, stockItems, suppliers, users } from '@/db/schema';
 import { slideModelSchema, type SlideModelInput } from '@/shared/schemas/slide-model';
 import { optimize } from '@/lib/nesting';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
@@ -75,6 +75,7 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
         wastePercent: 15,
         timeZone: 'America/Chicago',
         offcutAgeMonths: 3,
+        purchaseOrderDetails: '412 Foundry Lane, Larkspur\nDeliveries to the back dock, 7 am to 3 pm',
       })
       .returning({ id: shops.id });
     const shopId = shop.id;
@@ -94,6 +95,12 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
       { shopId, kind: 'sheet', material: 'MDF', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'none', onHand: 5, lowStockAt: 2, costCents: 4600, supplier: 'Hollow Creek Supply', location: 'Rack C1', buyable: true },
       { shopId, kind: 'board', material: 'White oak', nominalThickness: '4/4', thicknessMm: inches(13 / 16), lengthMm: inches(96), widthMm: inches(6.5), grain: 'along-length', surfacing: 'S2S', grade: 'FAS', onHand: 30, lowStockAt: 10, costCents: 925, supplier: 'Millbrook Hardwoods', location: 'Lumber rack 1', buyable: true },
       { shopId, kind: 'board', material: 'Hard maple', nominalThickness: '4/4', thicknessMm: inches(13 / 16), lengthMm: inches(96), widthMm: inches(5.5), grain: 'along-length', surfacing: 'S2S', grade: '1 Common', onHand: 18, lowStockAt: 8, costCents: 640, supplier: 'Millbrook Hardwoods', location: 'Lumber rack 2', buyable: true },
+    ]);
+    // The suppliers' order desks (invented addresses), so a purchase order knows where to go; Hollow Creek has none
+    // on file yet, and its first order asks for one.
+    await tx.insert(suppliers).values([
+      { shopId, name: 'Cedar Run Plywood', email: 'orders@cedarrun.example' },
+      { shopId, name: 'Millbrook Hardwoods', email: 'sales@millbrook.example' },
     ]);
     await tx.insert(offcuts).values([
       { shopId, material: 'Baltic birch', thicknessMm: 12, lengthMm: inches(30), widthMm: inches(16), location: 'Offcut bin 1', costCents: 900 },

@@ -14,4 +14,6 @@ export const MAIL_KIND_LABELS: Record<string, string> = {
   quote: 'Quote',
   'quote-accepted': 'Acceptance',
   'deposit-receipt': 'Deposit receipt',
+  'purchase-order': 'Purchase order',
+  'low-stock-digest': 'Low-stock digest',
 };

@@ -26,3 +26,5 @@ export const paymentStatusEnum = pgEnum('payment_status', ['open', 'paid', 'expi
 /** A damaged part's re-cut: open (to nest) → planned (in a released re-cut plan) → cut (that plan finished), or
  * spoiled (damaged again; a new re-cut replaces it), or cancelled by the estimator or owner with a reason. */
 export const recutStatusEnum = pgEnum('recut_status', ['open', 'planned', 'cut', 'spoiled', 'cancelled']);
+/** A purchase order: draft (lines editable) → sent → part-received → received, or cancelled. */
+export const purchaseOrderStatusEnum = pgEnum('purchase_order_status', ['draft', 'sent', 'part-received', 'received', 'cancelled']);

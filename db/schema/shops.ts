@@ -24,5 +24,9 @@ export const shops = pgTable('shops', {
   offcutAgeMonths: integer('offcut_age_months').notNull().default(6),
   /** Rates, labour minutes, markups, tax, deposit, validity and terms every new quote starts from. */
   pricing: jsonb('pricing').$type<PricingSettings>().notNull().default(DEFAULT_PRICING),
+  /** Address, phone and anything else printed under the shop's name on its purchase orders. */
+  purchaseOrderDetails: text('purchase_order_details').notNull().default(''),
+  /** The shop's local time (HH:MM) the low-stock digest goes to the owners; '' sends none. */
+  lowStockDigestTime: text('low_stock_digest_time').notNull().default('07:00'),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
 });

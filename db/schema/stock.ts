@@ -83,6 +83,8 @@ export const stockMovements = pgTable(
      */
     reservedChange: integer('reserved_change').notNull().default(0),
     planId: uuid('plan_id'),
+    /** The purchase order a receipt was received against (null for any other movement). */
+    purchaseOrderId: uuid('purchase_order_id'),
     userId: uuid('user_id').references(() => users.id, { onDelete: 'set null' }),
     reason: text('reason').notNull().default(''),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

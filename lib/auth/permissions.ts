@@ -25,6 +25,9 @@ export const PERMISSIONS = [
   'quotes:read',
   'quotes:write',
   'yield:read',
+  /** Purchase orders: read them (with their prices), make, edit, send and cancel them. Receiving is `stock:write`. */
+  'purchasing:read',
+  'purchasing:write',
   'team:manage',
   /** The outbox (what mail went out, what failed, try again) and, in the demo, the Sent mail page. */
   'mail:manage',
@@ -56,6 +59,8 @@ export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
     'customers:write',
     'quotes:read',
     'quotes:write',
+    'purchasing:read',
+    'purchasing:write',
     'settings:read',
   ],
   cutter: ['jobs:read', 'plans:read', 'plans:finish', 'sawsteps:tick', 'stock:read', 'offcuts:record', 'recuts:read', 'settings:read'],

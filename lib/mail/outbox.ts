@@ -16,7 +16,7 @@ import { mailOutbox } from '@/db/schema';
 import { mailConfig } from './config';
 
 /** What a mail is about. Add a kind here when a feature starts sending a new one. */
-export const MAIL_KINDS = ['invite', 'password-reset', 'quote', 'quote-accepted', 'deposit-receipt'] as const;
+export const MAIL_KINDS = ['invite', 'password-reset', 'quote', 'quote-accepted', 'deposit-receipt', 'purchase-order', 'low-stock-digest'] as const;
 export type MailKind = (typeof MAIL_KINDS)[number];
 
 const MAX_ATTACHMENT_BYTES = 15 * 1024 * 1024;

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { OrderFromPlanButton } from '@/components/buying/make-orders';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
@@ -93,6 +94,7 @@ export default async function TakeoffPage({ params, searchParams }: { params: Pr
 
       {takeoff.pull.length > 0 && <TakeoffTable title="Pull from stock" lines={takeoff.pull} len={len} area={area} money={money} />}
       {takeoff.buy.length > 0 && <TakeoffTable title="To buy" lines={takeoff.buy} len={len} area={area} money={money} />}
+      {(takeoff.buy.length > 0 || !totals.covered) && takeoff.plan.status !== 'done' && can(user.role, 'purchasing:write') && <OrderFromPlanButton planId={takeoff.plan.id} />}
       {takeoff.allowancePercent > 0 && takeoff.allowances.length > 0 && (
         <AllowanceTable allowances={takeoff.allowances} lines={[...takeoff.pull, ...takeoff.buy]} percent={takeoff.allowancePercent} len={len} area={area} money={money} />
       )}

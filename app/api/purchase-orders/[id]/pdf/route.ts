@@ -1,0 +1,14 @@
+import { getPurchaseOrder } from '@/db/queries/purchase-orders';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { renderPurchaseOrder } from '@/lib/buying/send';
+
+// GET /api/purchase-orders/:id/pdf – the purchase order as the supplier gets it, as a PDF
+export const GET = route({ permission: 'purchasing:read', params: idParams }, async ({ db, user, params }) => {
+  const po = await getPurchaseOrder(db, user.shopId, params.id);
+  if (!po) throw notFound('That purchase order');
+  const { bytes, filename } = await renderPurchaseOrder(db, user.shopId, po);
+  return new Response(new Uint8Array(bytes), {
+    headers: { 'content-type': 'application/pdf', 'content-disposition': `attachment; filename="${filename}"`, 'cache-control': 'private, no-store' },
+  });
+});

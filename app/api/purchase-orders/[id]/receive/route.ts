@@ -1,0 +1,8 @@
+import { receivePurchaseOrder } from '@/db/queries/purchase-orders';
+import { idParams, route } from '@/lib/api/route';
+import { receivePurchaseOrderSchema } from '@/shared/schemas/purchase-order';
+
+// POST /api/purchase-orders/:id/receive – pieces that arrived go into the stock room (movements name the order); optionally take its prices
+export const POST = route({ permission: 'stock:write', params: idParams, body: receivePurchaseOrderSchema }, async ({ db, user, params, body }) =>
+  receivePurchaseOrder(db, user.shopId, user.id, params.id, body),
+);

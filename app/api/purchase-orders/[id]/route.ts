@@ -1,0 +1,14 @@
+import { getPurchaseOrder, updateDraft } from '@/db/queries/purchase-orders';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { purchaseOrderPatchSchema } from '@/shared/schemas/purchase-order';
+
+// GET /api/purchase-orders/:id – one purchase order with its lines, what has arrived and its total
+export const GET = route({ permission: 'purchasing:read', params: idParams }, async ({ db, user, params }) => {
+  return (await getPurchaseOrder(db, user.shopId, params.id)) ?? Promise.reject(notFound('That purchase order'));
+});
+
+// PATCH /api/purchase-orders/:id – change a draft: supplier, its e-mail address, the note, the lines
+export const PATCH = route({ permission: 'purchasing:write', params: idParams, body: purchaseOrderPatchSchema }, async ({ db, user, params, body }) =>
+  updateDraft(db, user.shopId, user.id, params.id, body),
+);

@@ -1,0 +1,18 @@
+import { createFromLowStock, createFromPlan, createManual, getPurchaseOrder, listPurchaseOrders } from '@/db/queries/purchase-orders';
+import { route } from '@/lib/api/route';
+import { createPurchaseOrdersSchema } from '@/shared/schemas/purchase-order';
+
+// GET /api/purchase-orders – the shop's purchase orders, newest first, with their lines and totals
+export const GET = route({ permission: 'purchasing:read' }, async ({ db, user }) => listPurchaseOrders(db, user.shopId));
+
+// POST /api/purchase-orders – drafts from a plan's stock to buy or from the sizes running low (one per supplier), or an empty one
+export const POST = route({ permission: 'purchasing:write', body: createPurchaseOrdersSchema, status: 201 }, async ({ db, user, body }) => {
+  const ids =
+    body.from === 'plan'
+      ? await createFromPlan(db, user.shopId, user.id, body.planId)
+      : body.from === 'low-stock'
+        ? await createFromLowStock(db, user.shopId, user.id)
+        : await createManual(db, user.shopId, user.id, body.supplier);
+  const orders = await Promise.all(ids.map((id) => getPurchaseOrder(db, user.shopId, id)));
+  return { orders };
+});

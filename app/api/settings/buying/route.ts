@@ -1,0 +1,12 @@
+import { getBuyingSettings, updateBuyingSettings } from '@/db/queries/purchase-orders';
+import { notFound } from '@/lib/api/errors';
+import { route } from '@/lib/api/route';
+import { buyingSettingsPatchSchema } from '@/shared/schemas/purchase-order';
+
+// GET /api/settings/buying – the details printed on purchase orders and the low-stock digest's time of day
+export const GET = route({ permission: 'purchasing:read' }, async ({ db, user }) => {
+  return (await getBuyingSettings(db, user.shopId)) ?? Promise.reject(notFound('The shop'));
+});
+
+// PATCH /api/settings/buying – change them (the digest's time is on the shop's clock; '' sends none)
+export const PATCH = route({ permission: 'settings:write', body: buyingSettingsPatchSchema }, async ({ db, user, body }) => updateBuyingSettings(db, user.shopId, user.id, body));

@@ -1,0 +1,33 @@
+import { quoteLength, quoteNominal } from '@/lib/quotes/quote-text';
+import type { ShopUnits } from '@/shared/schemas/units';
+
+export interface DescribedSize {
+  kind: 'sheet' | 'board';
+  material: string;
+  nominalThickness: string;
+  thicknessMm: number;
+  lengthMm: number;
+  widthMm: number;
+  surfacing: string;
+  grade: string;
+}
+
+/**
+ * A stock size as a purchase order writes it, in the shop's unit with quarters as glyphs (the screen and the PDF's
+ * font both carry them): "Baltic birch ¾″, 60″ × 60″", "White oak 4/4 S2S FAS, 96″ × 6½″", "MDF 18 mm, 2440 mm × 1220 mm".
+ */
+export function describeSize(s: DescribedSize, units: ShopUnits): string {
+  const len = (mm: number) => quoteLength(mm, units);
+  const thick = s.nominalThickness ? quoteNominal(s.nominalThickness) : len(s.thicknessMm);
+  const board = s.kind === 'board' ? [s.surfacing, s.grade].filter(Boolean).join(' ') : '';
+  return `${s.material} ${thick}${board ? ` ${board}` : ''}, ${len(s.lengthMm)} × ${len(s.widthMm)}`;
+}
+
+/** The unit a line's cost is per: each sheet or board, or per board foot for boards. */
+export const costUnit = (kind: 'sheet' | 'board') => (kind === 'board' ? 'bd ft' : 'sheet');
+
+/** PO-0007. */
+export const poNumber = (n: number) => `PO-${String(n).padStart(4, '0')}`;
+
+export const PO_STATUS_LABELS = { draft: 'Draft', sent: 'Sent', 'part-received': 'Part received', received: 'Received', cancelled: 'Cancelled' } as const;
+export type PoStatus = keyof typeof PO_STATUS_LABELS;
