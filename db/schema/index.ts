@@ -11,3 +11,4 @@ export * from './slide-models';
 export * from './rate-limits';
 export * from './mail';
 export * from './quotes';
+export * from './saws';

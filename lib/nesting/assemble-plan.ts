@@ -1,4 +1,5 @@
 /** Builds plan pieces from placements and a cut tree: trim cuts, saw order, leftovers, figures; then the plan. */
+import { requestSaws } from '@/lib/nesting/saw-profile';
 import type { CutNode } from '@/lib/nesting/pack/types';
 import { treeLeaves } from '@/lib/nesting/guillotine';
 import { withTrimCuts } from '@/lib/nesting/cut-tree';
@@ -42,6 +43,7 @@ export function assemblePiece(stock: NestStock, index: number, placements: Place
     minOffcutLength: settings.minOffcutLength,
     minOffcutWidth: settings.minOffcutWidth,
     minFenceWidth: settings.minFenceWidth,
+    saws: requestSaws(settings),
   });
   const leftovers = treeLeaves(tree).flatMap((l) => (l.type === 'leftover' && l.rect.w > 0 && l.rect.h > 0 ? [l.rect] : []));
   const offcuts = leftovers.filter((r) => isKeepable(r, settings.minOffcutLength, settings.minOffcutWidth));
