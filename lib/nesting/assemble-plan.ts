@@ -52,19 +52,17 @@ export function assemblePiece(stock: NestStock, index: number, placements: Place
     });
   let tree = withTrimCuts(innerTree, stockRect(stock), trim, settings.kerf);
   let sawOrder = order(tree);
-  // A saw that cannot crosscut the whole piece trims the ends of each strip instead (same stages: they are trim).
-  // One that cannot take the edge off the whole piece either rips the strips with the factory edges on the outer
-  // ones and trims each strip on its own.
+  // A saw that cannot crosscut the whole piece trims the ends of each strip instead (same stages: they are trim);
+  // one that cannot take the edge off the whole piece either rips the strips with the factory edges on the outer
+  // ones and trims each strip on its own. The arrangement whose trim cuts ask least beyond the saws wins.
   const beyond = (steps: SawStep[]) => trimStepsBeyond(steps, stockRect(stock), stockPieceName(index), settings.kerf, saws);
-  if (saws.length && beyond(sawOrder)) {
-    for (const arrange of [withStripEndTrims, withTrimsOnStrips]) {
-      const alt = arrange(innerTree, stockRect(stock), trim, settings.kerf);
-      const altOrder = alt && order(alt);
-      if (alt && altOrder && !beyond(altOrder)) {
-        [tree, sawOrder] = [alt, altOrder];
-        break;
-      }
-    }
+  let worst = saws.length ? beyond(sawOrder) : 0;
+  for (const arrange of [withStripEndTrims, withTrimsOnStrips]) {
+    if (worst === 0) break;
+    const alt = arrange(innerTree, stockRect(stock), trim, settings.kerf);
+    const altOrder = alt && order(alt);
+    const n = altOrder ? beyond(altOrder) : Infinity;
+    if (alt && altOrder && n < worst) [tree, sawOrder, worst] = [alt, altOrder, n];
   }
   const leftovers = treeLeaves(tree).flatMap((l) => (l.type === 'leftover' && l.rect.w > 0 && l.rect.h > 0 ? [l.rect] : []));
   const offcuts = leftovers.filter((r) => isKeepable(r, settings.minOffcutLength, settings.minOffcutWidth));
@@ -73,14 +71,14 @@ export function assemblePiece(stock: NestStock, index: number, placements: Place
   return { ...piece, figures: pieceFigures(piece, offcuts, stock.costEach) };
 }
 
-/** Does a trim step ask more of its saw than it can do? */
-function trimStepsBeyond(steps: SawStep[], whole: Rect, rootName: string, kerf: number, saws: NestSaw[]): boolean {
+/** How many trim steps ask more of their saw than it can do? */
+function trimStepsBeyond(steps: SawStep[], whole: Rect, rootName: string, kerf: number, saws: NestSaw[]): number {
   const { cutFrom } = replaySawOrder(steps, whole, rootName, kerf);
-  return steps.some((s, i) => {
+  return steps.filter((s, i) => {
     const saw = saws.find((w) => w.name === s.saw);
     const from = cutFrom[i];
     return s.trim && !!saw && !!from && cutProblems(saw, s, from).length > 0;
-  });
+  }).length;
 }
 
 /** The plan around its pieces: totals, stock to pull and to buy. */
