@@ -8,6 +8,7 @@ import { packGuillotine } from '@/lib/nesting/pack';
 import type { BinType, CutNode, PackFn, PackItem, PackResult } from '@/lib/nesting/pack/types';
 import { countStages, findGuillotineTree } from '@/lib/nesting/guillotine';
 import { stageRule, type StageRule } from '@/lib/nesting/saw-profile';
+import { packTwoStage } from '@/lib/nesting/two-stage';
 import type { CuttingStyle } from '@/lib/nesting/pack/types';
 import { checkTree, translateTree } from '@/lib/nesting/cut-tree';
 import { assemblePiece, assemblePlan } from '@/lib/nesting/assemble-plan';
@@ -164,8 +165,7 @@ function measure(group: Group, result: PackResult): Measure {
 
 /**
  * The packing core's style for a stage rule: any number of stages is `panel`; a limit is kept with the core's strips
- * (3 stages, the first along y), which keeps within 3 or 4 stages; a limit of 2 is checked on each piece after
- * packing (`piecesFromResult` falls back to the canonical tree).
+ * (3 stages, the first along y), which keeps within 3 or 4 stages; a limit of 2 packs with `packTwoStage`.
  */
 const packStyle = (rule: StageRule): CuttingStyle => (rule.maxStages === Infinity ? 'panel' : 'strips');
 
@@ -208,7 +208,8 @@ export async function optimize(requestInput: NestRequestInput, options: Optimize
   const groups = groupParts(request.parts);
   const rule = stageRule(settings);
   const packOptions = { kerf: settings.kerf, style: packStyle(rule), objective: settings.objective, seed: settings.seed };
-  const pack = ruledPack(options.pack ?? packGuillotine, rule);
+  // Two stages: exact-width strips (the core's strips allow a third, trim stage).
+  const pack = ruledPack(rule.maxStages === 2 ? packTwoStage : (options.pack ?? packGuillotine), rule);
   // Progress speaks for the whole plan it will return: every group counts from the start, first by a quick first
   // plan, then by its best as it is searched, then by its result.
   const estimates: Measure[] = [];

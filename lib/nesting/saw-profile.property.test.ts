@@ -13,13 +13,13 @@ const base = {
 } as const;
 
 /**
- * A second saw: any stage limit the engine packs to (3, 4 or any), either first direction, any safe minimum. Alone,
+ * A second saw: any stage limit (2, 3, 4 or any), either first direction, any safe minimum. Alone,
  * it takes the whole stock (the arbitrary's largest sheet is 2440 × 1220); beside a breakdown track saw whose track is
  * longer than any stock, its capacities may be anything, since the track saw makes what it cannot.
  */
 const secondSaw = (alone: boolean): fc.Arbitrary<NestSaw> =>
   fc.record({
-    maxStages: fc.constantFrom(3 as const, 4 as const, null),
+    maxStages: fc.constantFrom(2 as const, 3 as const, 4 as const, null),
     firstStage: fc.constantFrom('rip' as const, 'crosscut' as const),
     minFenceWidthMm: fc.constantFrom(0, 25.4),
     rip: alone ? fc.constant(null) : fc.option(fc.integer({ min: 100, max: 1300 }), { nil: null }),

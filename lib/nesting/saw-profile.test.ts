@@ -145,3 +145,19 @@ describe('validatePlan checks the saw (worked by hand)', () => {
     expect(codes(validatePlan(r, plan))).toEqual(['unknown-saw']);
   });
 });
+
+describe('the engine on a saw used with 2 stages (worked by hand)', () => {
+  test('strips as wide as their parts: 2 × 400 × 200 in a 200 mm strip, the 300 × 150 in a 150 mm strip above it', async () => {
+    const { optimize } = await import('@/lib/nesting/optimize');
+    const r = request([part('a', 400, 200, { quantity: 2 }), part('b', 300, 150)], [S()], { saw: saw({ maxStages: 2 }) });
+    const plan = await optimize(r);
+    expect(validatePlan(r, plan)).toEqual([]);
+    expect(plan.pieces).toHaveLength(1);
+    const at = (id: string, k = 1) => plan.pieces[0].placements.find((p) => p.partId === id && p.instance === k)!;
+    // Strip 1: y 0–200, parts at x = 0 and 400 + 3 = 403. Strip 2 starts one kerf above: y = 203.
+    expect([at('a', 1), at('a', 2)].map((p) => [p.x, p.y]).sort((u, v) => u[0] - v[0])).toEqual([[0, 0], [403, 0]]);
+    expect([at('b').x, at('b').y]).toEqual([0, 203]);
+    const steps = plan.pieces[0].sawOrder!;
+    expect(Math.max(...stepStages(steps, 'A', [saw({ maxStages: 2 })]))).toBe(2);
+  });
+});
