@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { blankSawText, readSawForm, sawText } from './saw-form-values';
+import { blankSawText, readSawForm, sawFacts, sawText } from './saw-form-values';
 
 const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
 
@@ -11,6 +11,17 @@ describe('the saw form', () => {
       saw: expect.objectContaining({ kerfMm: 3.175, ripCapacityMm: 762, crosscutCapacityMm: 609.6, maxPieceLengthMm: null, maxPieceWidthMm: null, maxStages: 3, firstStage: 'rip', minFenceWidthMm: 25.4 }),
     });
     if (read.ok) expect(readSawForm(sawText(read.saw, IMPERIAL), IMPERIAL)).toEqual(read);
+  });
+
+  test('shows a 3/32″ track-saw kerf exactly, not rounded to the shop’s sixteenths (3/32″ = 2.38125 mm)', () => {
+    const read = readSawForm({ ...blankSawText(), kind: 'track-saw', name: 'Track saw', kerf: '3/32', crosscutCapacity: '110', maxStages: 'any', minFenceWidth: '0' }, IMPERIAL);
+    expect(read.ok).toBe(true);
+    if (!read.ok) return;
+    expect(read.saw.kerfMm).toBeCloseTo(2.38125, 9);
+    const facts = Object.fromEntries(sawFacts(read.saw, IMPERIAL).map((f) => [f.label, f.value]));
+    expect(facts.Kerf).toBe('3/32″');
+    expect(facts['Track length']).toBe('110″');
+    expect(facts['Rip capacity']).toBe('no fence');
   });
 
   test('says what is wrong per field: no name, a kerf that is not a length, the shop’s own kind with no name', () => {

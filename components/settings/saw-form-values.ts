@@ -1,5 +1,4 @@
 import { exactLengthText } from '@/lib/cut-list/exact-length';
-import { formatLength } from '@/lib/units/format-length';
 import { parseLength } from '@/lib/units/parse-length';
 import { sawKindText, sawSchema, SAW_KINDS, SAW_KIND_LABELS, type Saw } from '@/shared/schemas/saw';
 import { shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
@@ -87,7 +86,8 @@ export function readSawForm(text: SawFormText, units: ShopUnits): { ok: true; sa
 
 /** What the saw takes, in the shop's units, one fact a line. */
 export function sawFacts(s: Saw, units: ShopUnits): { label: string; value: string }[] {
-  const len = (mm: number) => formatLength(mm, units);
+  // Exact where the shop's precision would round (a 3/32″ kerf in sixteenths), as the maker gives it.
+  const len = (mm: number) => exactLengthText(mm, units);
   const limit = (mm: number | null, none: string) => (mm === null ? none : len(mm));
   return [
     { label: 'Kerf', value: len(s.kerfMm) },
