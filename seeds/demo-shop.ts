@@ -3,7 +3,8 @@ import type { Db } from '@/db/open';
 import { buildNestRequest } from '@/db/queries/nest-request';
 import { releasePlan } from '@/db/queries/plan-lifecycle';
 import { recordOpeningCounts } from '@/db/queries/stock';
-import { customers, hardwareItems, jobs, offcuts, parts, plans, shops, slideModels, stockItems, suppliers, users } from '@/db/schema';
+import { customers, hardwareItems, jobs, offcuts, parts, plans, saws, shops, slideModels, stockItems, suppliers, users } from '@/db/schema';
+import { sawSchema, type SawInput } from '@/shared/schemas/saw';
 import { slideModelSchema, type SlideModelInput } from '@/shared/schemas/slide-model';
 import { optimize } from '@/lib/nesting';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
@@ -21,6 +22,33 @@ export const DEMO_PEOPLE = [
   { name: 'Teodor Vance', email: 'teo@larkspur.example', role: 'estimator' },
   { name: 'Ines Halvorsen', email: 'ines@larkspur.example', role: 'cutter' },
 ] as const;
+
+/**
+ * The demo shop's saws: a 10″ cabinet saw with a 30″ (762 mm) rip capacity and a 24″ crosscut sled, used for 3 stages
+ * of cuts rips first, and a track saw on a 110″ rail for breaking full sheets down. Figures are invented, in the
+ * range such saws have (common practice, no source); a real shop copies its own from the saw's manual.
+ */
+export const DEMO_SAWS: SawInput[] = [
+  {
+    kind: 'table-saw',
+    name: 'Cabinet saw',
+    kerfMm: inches(1 / 8),
+    ripCapacityMm: inches(30),
+    crosscutCapacityMm: inches(24),
+    maxStages: 3,
+    firstStage: 'rip',
+    minFenceWidthMm: inches(1),
+  },
+  {
+    kind: 'track-saw',
+    name: 'Track saw',
+    kerfMm: inches(3 / 32),
+    crosscutCapacityMm: inches(110),
+    maxStages: null,
+    firstStage: 'rip',
+    minFenceWidthMm: 0,
+  },
+];
 
 /**
  * Two undermount slides the demo shop hangs drawers on. The makers, model names and figures are invented, written the
@@ -118,6 +146,7 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
     ]);
 
     await tx.insert(slideModels).values(DEMO_SLIDE_MODELS.map((m) => ({ shopId, ...slideModelSchema.parse(m) })));
+    await tx.insert(saws).values(DEMO_SAWS.map((m, position) => ({ shopId, ...sawSchema.parse(m), position })));
 
     const [hollis, pemberton, arden] = await tx
       .insert(customers)

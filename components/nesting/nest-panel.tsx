@@ -14,6 +14,8 @@ import { cuttingStyleSchema, objectiveSchema, type NestRequestInput, type NestSt
 import type { NestSettingsOverride } from '@/shared/schemas/plan-save';
 import type { NestFor } from '@/shared/schemas/recut';
 import type { ShopSettings } from '@/shared/schemas/shop';
+import { sawKindText, type NestSaw } from '@/shared/schemas/saw';
+import type { SavedSaw } from '@/components/settings/saws-section';
 import { lengthInput, shopLengthUnit } from '@/shared/schemas/units';
 import { NestProgressBar } from './nest-progress';
 import { PlanSummary } from './plan-summary';
@@ -29,6 +31,8 @@ const settingsForm = (unit: 'in' | 'mm') =>
     objective: objectiveSchema,
     timeBudgetSec: z.coerce.number({ error: 'Enter seconds.' }).min(0, 'At least 0 s.').max(120, 'At most 120 s.'),
     preferOffcuts: z.boolean(),
+    sawId: z.string(),
+    breakdownSawId: z.string(),
     stockIds: z.array(z.string()).min(1, 'Choose at least one kind of stock.'),
   });
 
@@ -46,12 +50,28 @@ interface NestResult {
  */
 export function NestPanel({ jobId, shop, showPrices, nestFor = 'cut-list' }: { jobId: string; shop: ShopSettings; showPrices: boolean; nestFor?: NestFor }) {
   const offered = useQuery({ queryKey: ['nest-request', jobId, nestFor], queryFn: () => api<NestRequestInput>(`/api/jobs/${jobId}/nest-request?for=${nestFor}`) });
-  if (offered.isPending) return <p className="text-sm text-graphite-mute">Loading the stock on offer…</p>;
+  const saws = useQuery({ queryKey: ['saws'], queryFn: () => api<SavedSaw[]>('/api/saws') });
+  if (offered.isPending || saws.isPending) return <p className="text-sm text-graphite-mute">Loading the stock on offer…</p>;
   if (offered.isError) return <p className="field-error" role="alert">Could not load the stock on offer: {offered.error.message}</p>;
-  return <NestForm jobId={jobId} shop={shop} showPrices={showPrices} offered={offered.data} nestFor={nestFor} />;
+  if (saws.isError) return <p className="field-error" role="alert">Could not load the shop’s saws: {saws.error.message}</p>;
+  return <NestForm jobId={jobId} shop={shop} showPrices={showPrices} offered={offered.data} saws={saws.data} nestFor={nestFor} />;
 }
 
-function NestForm({ jobId, shop, showPrices, offered, nestFor }: { jobId: string; shop: ShopSettings; showPrices: boolean; offered: NestRequestInput; nestFor: NestFor }) {
+/** The saw a nest starts with: the shop's first saw, or with a track saw beside another, the track saw breaking down. */
+export function defaultSaws(saws: readonly SavedSaw[]): { sawId: string; breakdownSawId: string } {
+  const track = saws.find((s) => s.kind === 'track-saw');
+  const other = saws.find((s) => s.kind !== 'track-saw');
+  if (track && other) return { sawId: other.id, breakdownSawId: track.id };
+  return { sawId: saws[0]?.id ?? '', breakdownSawId: '' };
+}
+
+/** The profile a request carries: the same the server builds from Shop settings (db/queries/nest-request.ts). */
+const profile = (s: SavedSaw & { updatedAt?: string }): NestSaw => {
+  const { updatedAt: _u, ...rest } = s;
+  return rest;
+};
+
+function NestForm({ jobId, shop, showPrices, offered, saws, nestFor }: { jobId: string; shop: ShopSettings; showPrices: boolean; offered: NestRequestInput; saws: SavedSaw[]; nestFor: NestFor }) {
   const unit = shopLengthUnit(shop.units);
   const schema = useMemo(() => settingsForm(unit), [unit]);
   const len = (mm: number) => formatLength(mm, shop.units);
@@ -74,9 +94,11 @@ function NestForm({ jobId, shop, showPrices, offered, nestFor }: { jobId: string
       objective: 'cost',
       timeBudgetSec: 3,
       preferOffcuts: true,
+      ...defaultSaws(saws),
       stockIds: offered.stock.map((st) => st.id),
     },
   });
+  const chosenSawId = form.watch('sawId');
   const { errors } = form.formState;
   const worker = useNestingWorker();
   const [result, setResult] = useState<NestResult | null>(null);
@@ -88,12 +110,28 @@ function NestForm({ jobId, shop, showPrices, offered, nestFor }: { jobId: string
     // A length left as shown keeps the shop's exact value (the field shows it rounded to the shop's precision).
     const dirty = form.formState.dirtyFields;
     const exact = (field: 'kerf' | 'trim' | 'minOffcutLength' | 'minOffcutWidth', typed: number) => (dirty[field] ? typed : shopDefaults[field]);
+    const saw = saws.find((sw) => sw.id === v.sawId);
+    const breakdown = saw ? saws.find((sw) => sw.id === v.breakdownSawId && sw.id !== saw.id) : undefined;
     const settings: NestSettingsOverride = {
       kerf: exact('kerf', v.kerf), trim: exact('trim', v.trim), minOffcutLength: exact('minOffcutLength', v.minOffcutLength), minOffcutWidth: exact('minOffcutWidth', v.minOffcutWidth),
       style: v.style, objective: v.objective, timeBudgetMs: Math.round(v.timeBudgetSec * 1000), preferOffcuts: v.preferOffcuts,
+      ...(saw ? { sawId: saw.id } : {}),
+      ...(breakdown ? { breakdownSawId: breakdown.id } : {}),
     };
     const chosen = new Set(v.stockIds);
-    const request = { parts: offered.parts, stock: offered.stock.filter((st) => chosen.has(st.id)), settings: { ...offered.settings, ...settings } };
+    // Each cut is allowed the widest kerf of the saws chosen (the server does the same).
+    const sawKerf = Math.max(0, ...[saw, breakdown].map((sw) => sw?.kerfMm ?? 0));
+    const { sawId: _s, breakdownSawId: _b, ...engineSettings } = settings;
+    const request = {
+      parts: offered.parts,
+      stock: offered.stock.filter((st) => chosen.has(st.id)),
+      settings: {
+        ...offered.settings,
+        ...engineSettings,
+        ...(saw ? { saw: profile(saw), kerf: Math.max(settings.kerf ?? 0, sawKerf) } : {}),
+        ...(breakdown ? { breakdownSaw: profile(breakdown) } : {}),
+      },
+    };
     setResult(null);
     setFailure(null);
     setBudgetMs(settings.timeBudgetMs ?? 0);
@@ -138,12 +176,27 @@ function NestForm({ jobId, shop, showPrices, offered, nestFor }: { jobId: string
           <Field id="trim" label="Edge trim (each side)" error={errors.trim?.message}><input id="trim" className="field-input" {...form.register('trim')} /></Field>
           <Field id="min-offcut-length" label="Keep offcuts this long" error={errors.minOffcutLength?.message}><input id="min-offcut-length" className="field-input" {...form.register('minOffcutLength')} /></Field>
           <Field id="min-offcut-width" label="… and this wide" error={errors.minOffcutWidth?.message}><input id="min-offcut-width" className="field-input" {...form.register('minOffcutWidth')} /></Field>
-          <Field id="style" label="Cutting style">
-            <select id="style" className="field-input" {...form.register('style')}>
-              <option value="panel">Panel saw: any through-cuts</option>
-              <option value="strips">Table saw strips: rip, crosscut, trim</option>
+          <Field id="saw" label="Cut on">
+            <select id="saw" className="field-input" {...form.register('sawId')}>
+              {saws.map((sw) => <option key={sw.id} value={sw.id}>{sw.name} ({sawKindText(sw).toLowerCase()})</option>)}
+              <option value="">No saw: choose a cutting style</option>
             </select>
           </Field>
+          {chosenSawId ? (
+            <Field id="breakdown-saw" label="Break sheets down on">
+              <select id="breakdown-saw" className="field-input" {...form.register('breakdownSawId')}>
+                <option value="">No breakdown: the whole sheet on the saw</option>
+                {saws.filter((sw) => sw.id !== chosenSawId).map((sw) => <option key={sw.id} value={sw.id}>{sw.name} ({sawKindText(sw).toLowerCase()})</option>)}
+              </select>
+            </Field>
+          ) : (
+            <Field id="style" label="Cutting style">
+              <select id="style" className="field-input" {...form.register('style')}>
+                <option value="panel">Panel saw: any through-cuts</option>
+                <option value="strips">Table saw strips: rip, crosscut, trim</option>
+              </select>
+            </Field>
+          )}
           <Field id="objective" label="Aim for">
             <select id="objective" className="field-input" {...form.register('objective')}>
               <option value="cost">Lowest material cost</option>

@@ -19,6 +19,7 @@ export function SawOrderPiece({ view, first }: { view: PieceView; first: boolean
         </h2>
         <p className="text-sm text-graphite-soft">
           {view.detail} · {view.steps.length} cut{view.steps.length === 1 ? '' : 's'}
+          {sawsUsed(view).length > 0 && <> · on {sawsUsed(view).join(', then ')}</>}
         </p>
       </header>
       {view.steps.length === 0 ? (
@@ -33,6 +34,11 @@ export function SawOrderPiece({ view, first }: { view: PieceView; first: boolean
                 </span>
                 <StepKindBadge kind={text.kind} trim={text.trim} narrow={text.narrow} />
               </div>
+              {text.saw && (
+                <p className="text-sm font-semibold text-graphite print:text-[8px]" data-testid="step-saw">
+                  <span className="font-normal text-graphite-mute">Saw:</span> {text.saw}
+                </p>
+              )}
               <StepDiagram geometry={geometry} stock={view.stock} parts={view.parts} className="h-auto w-full" />
               <div className="print:flex print:flex-wrap print:items-baseline print:gap-x-1 print:leading-none">
                 <div className="text-xs text-graphite-mute print:text-[8px]">
@@ -60,6 +66,9 @@ export function SawOrderPiece({ view, first }: { view: PieceView; first: boolean
     </section>
   );
 }
+
+/** The saws the piece's cuts are made on, in the order they first come up. */
+const sawsUsed = (view: PieceView) => [...new Set(view.steps.flatMap((s) => (s.text.saw ? [s.text.saw] : [])))];
 
 function ProducedList({ text }: { text: PieceView['steps'][number]['text'] }) {
   const offcuts = text.produced.filter((p) => p.role === 'offcut');

@@ -162,6 +162,11 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                   <span className="text-sm font-normal text-graphite-mute">of {view.steps.length}</span>
                 </h2>
                 <StepKindBadge kind={current.text.kind} trim={current.text.trim} narrow={current.text.narrow} large />
+                {current.text.saw && (
+                  <span className="text-base font-semibold text-graphite" data-testid="current-saw">
+                    <span className="font-normal text-graphite-mute">Saw:</span> {current.text.saw}
+                  </span>
+                )}
               </div>
               <div>
                 <div className="text-sm text-graphite-mute">

@@ -8,6 +8,9 @@ import type { NestFor } from '@/shared/schemas/recut';
 import { getShopSettings } from './shops';
 import { listParts } from './parts';
 import { openRecuts } from './recuts';
+import { listSaws } from './saws';
+import { HttpError } from '@/lib/api/errors';
+import type { NestSaw } from '@/shared/schemas/saw';
 
 /**
  * Stock ids in a nesting request name where the piece comes from, so a plan can be traced back to the rack:
@@ -30,14 +33,35 @@ export const costEachCents = (item: typeof stockItems.$inferSelect): number => p
  * The job's parts on everything the stock room can offer now (free counts only), with the shop's defaults. With
  * `for: 'recuts'` the parts are only the job's open re-cuts (each with its re-cut's id), nothing of the cut list.
  */
-export async function buildNestRequest(db: Db, shopId: string, jobId: string, settings: Partial<NestSettings> = {}, nestFor: NestFor = 'cut-list'): Promise<NestRequestInput> {
-  const [shop, parts, items, rack] = await Promise.all([
+export async function buildNestRequest(
+  db: Db,
+  shopId: string,
+  jobId: string,
+  choice: Partial<NestSettings> & { sawId?: string; breakdownSawId?: string } = {},
+  nestFor: NestFor = 'cut-list',
+): Promise<NestRequestInput> {
+  const { sawId, breakdownSawId, ...settings } = choice;
+  const [shop, parts, items, rack, shopSaws] = await Promise.all([
     getShopSettings(db, shopId),
     nestFor === 'recuts' ? openRecuts(db, shopId, jobId).then(recutNestParts) : listParts(db, shopId, jobId).then(cutListParts),
     db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
     db.select().from(offcuts).where(and(eq(offcuts.shopId, shopId), eq(offcuts.status, 'available'))),
+    sawId || breakdownSawId ? listSaws(db, shopId) : Promise.resolve([]),
   ]);
   if (!shop) throw new Error('shop not found');
+  // The chosen saws' whole profiles go into the request (a saved plan keeps them), and the plan allows each cut the
+  // widest of their kerfs.
+  const sawFor = (id: string | undefined, field: string): NestSaw | undefined => {
+    if (!id) return undefined;
+    const found = shopSaws.find((s) => s.id === id);
+    if (!found) throw new HttpError(422, 'That saw is not in Shop settings any more; choose another.', { [field]: ['not a saw of this shop'] });
+    const { updatedAt: _u, ...profile } = found;
+    return profile;
+  };
+  const saw = sawFor(sawId, 'sawId');
+  const breakdownSaw = sawFor(breakdownSawId, 'breakdownSawId');
+  if (breakdownSaw && !saw) throw new HttpError(422, 'A breakdown saw needs a second saw for the rest of the cuts.', { breakdownSawId: ['choose the second saw too'] });
+  const sawKerf = Math.max(0, ...[saw, breakdownSaw].map((s) => s?.kerfMm ?? 0));
 
   const stock: NestStock[] = [];
   for (const item of items) {
@@ -60,6 +84,8 @@ export async function buildNestRequest(db: Db, shopId: string, jobId: string, se
       minOffcutWidth: shop.minOffcutWidthMm,
       minFenceWidth: shop.minFenceWidthMm,
       ...settings,
+      ...(saw ? { saw, kerf: Math.max(settings.kerf ?? shop.kerfMm, sawKerf) } : {}),
+      ...(breakdownSaw ? { breakdownSaw } : {}),
     },
   };
 }

@@ -12,3 +12,4 @@ export * from './rate-limits';
 export * from './mail';
 export * from './quotes';
 export * from './buying';
+export * from './saws';

@@ -6,7 +6,8 @@
  * rest of the request's stock (on-hand counts less the pieces kept). The result is mapped back: placements on a free
  * rectangle are shifted onto their piece. `validatePlan` remains the judge of the outcome.
  */
-import { findGuillotineTree, STRIP_STAGES, treeLeaves } from '@/lib/nesting/guillotine';
+import { findGuillotineTree, treeLeaves } from '@/lib/nesting/guillotine';
+import { stageRule } from '@/lib/nesting/saw-profile';
 import { usableRect } from '@/lib/nesting/stock-rules';
 import type { NestRequest, NestStock, Plan, Unplaced } from '@/shared/schemas/nesting';
 import { placementKey, type BenchDoc, type BenchPiece, type BenchPlacement } from '@/lib/layout-bench/document';
@@ -32,9 +33,9 @@ export function prepareRenest(request: NestRequest, doc: BenchDoc): RenestJob {
   keptPieces.forEach((pieceIndex, k) => {
     const piece = doc.pieces[pieceIndex];
     const mine = locked.filter((p) => p.piece === pieceIndex);
-    const strips = settings.style === 'strips';
+    const rule = stageRule(settings);
     const tree =
-      findGuillotineTree(usableRect(piece, piece.trim), mine, settings.kerf, strips ? STRIP_STAGES : Infinity, strips ? 'y' : undefined) ??
+      findGuillotineTree(usableRect(piece, piece.trim), mine, settings.kerf, rule.maxStages, rule.firstAxis) ??
       findGuillotineTree(usableRect(piece, piece.trim), mine, settings.kerf);
     if (!tree) return; // locked parts that cannot be cut apart: nothing more goes on this piece
     treeLeaves(tree).forEach((leaf, j) => {

@@ -50,6 +50,76 @@ export function withTrimCuts(inner: CutNode, stock: Rect, trim: number, kerf: nu
   return trimAlong(trimAlong(inner, afterFirst, innerAxis, trim, kerf), stock, firstAxis, trim, kerf);
 }
 
+/**
+ * Trim cuts for a saw that cannot crosscut the whole stock piece (a table saw's sled): the long edges are trimmed
+ * first, then the first-stage rips run the stock's whole length, and each strip's ends are trimmed on the strip (a
+ * cut as long as the strip is wide). Only for an inner tree whose first cuts are rips across the whole trimmed
+ * length; null otherwise (use `withTrimCuts`).
+ */
+export function withStripEndTrims(inner: CutNode, stock: Rect, trim: number, kerf: number): CutNode | null {
+  if (trim <= EPS || inner.type !== 'cut' || inner.axis !== 'y') return null;
+  const x0 = lowEdge(stock, 'x');
+  const x1 = highEdge(stock, 'x');
+  const full = (r: Rect): Rect => ({ ...r, x: x0, w: x1 - x0 });
+  const spansUsable = (r: Rect) => Math.abs(r.x - (x0 + trim)) <= EPS && Math.abs(r.x + r.w - (x1 - trim)) <= EPS;
+  let ok = true;
+  const extend = (node: CutNode): CutNode => {
+    if (!spansUsable(node.rect)) ok = false;
+    if (node.type === 'leftover') return { ...node, rect: full(node.rect) };
+    if (node.type === 'cut' && node.axis === 'y') {
+      return { ...node, rect: full(node.rect), children: node.children.map(extend) as [CutNode] | [CutNode, CutNode] };
+    }
+    return trimAlong(node, full(node.rect), 'x', trim, kerf);
+  };
+  const extended = extend(inner);
+  return ok ? trimAlong(extended, stock, 'y', trim, kerf) : null;
+}
+
+/**
+ * Trim cuts for a saw that can neither crosscut nor rip the edge off the whole stock piece (a table saw whose rip
+ * capacity is less than the sheet's width): the first-stage rips run across the whole piece, the factory edges riding
+ * on the outer strips, and each strip is trimmed on its own — its ends by crosscuts as long as it is wide, then its
+ * edge by a rip with the strip against the fence. Only for an inner tree whose first cuts are rips across the whole
+ * trimmed length; null otherwise.
+ */
+export function withTrimsOnStrips(inner: CutNode, stock: Rect, trim: number, kerf: number): CutNode | null {
+  if (trim <= EPS || inner.type !== 'cut' || inner.axis !== 'y') return null;
+  const x0 = lowEdge(stock, 'x');
+  const x1 = highEdge(stock, 'x');
+  const y0 = lowEdge(stock, 'y');
+  const y1 = highEdge(stock, 'y');
+  const spansUsable = (r: Rect) => Math.abs(r.x - (x0 + trim)) <= EPS && Math.abs(r.x + r.w - (x1 - trim)) <= EPS;
+  let ok = true;
+  const band = (from: number, to: number): Rect => ({ x: x0, y: from, w: x1 - x0, h: to - from });
+  const strip = (node: CutNode, lowEdgeOn: boolean, highEdgeOn: boolean): CutNode => {
+    if (!spansUsable(node.rect)) ok = false;
+    const a = lowEdge(node.rect, 'y');
+    const b = highEdge(node.rect, 'y');
+    const from = lowEdgeOn ? y0 : a;
+    const to = highEdgeOn ? y1 : b;
+    if (node.type === 'leftover') return { ...node, rect: band(from, to) };
+    // The ends first (crosscuts as long as the strip is wide), then the edge: a rip not run together with the
+    // first-stage rips, so the saw order makes it on the strip.
+    const inner = (f: number, t: number): Rect => ({ x: x0 + trim, y: f, w: x1 - x0 - 2 * trim, h: t - f });
+    let t: CutNode = node;
+    if (highEdgeOn) t = { type: 'cut', rect: inner(a, to), axis: 'y', pos: b, kerf, children: to - (b + kerf) > EPS ? [t, { type: 'leftover', rect: inner(b + kerf, to) }] : [t] };
+    if (lowEdgeOn) t = { type: 'cut', rect: inner(from, to), axis: 'y', pos: a - kerf, kerf, children: [{ type: 'leftover', rect: inner(from, Math.max(from, a - kerf)) }, t] };
+    return trimAlong(t, band(from, to), 'x', trim, kerf);
+  };
+  const run = (node: Extract<CutNode, { type: 'cut' }>, first: boolean): CutNode => {
+    if (!spansUsable(node.rect)) ok = false;
+    const [low, rest] = node.children;
+    const top: CutNode = !rest
+      ? { type: 'leftover', rect: band(Math.min(y1, node.pos + kerf), y1) }
+      : rest.type === 'cut' && rest.axis === 'y'
+        ? run(rest, false)
+        : strip(rest, false, true);
+    return { ...node, rect: band(first ? y0 : lowEdge(node.rect, 'y'), y1), children: [strip(low, first, false), top] };
+  };
+  const tree = run(inner, true);
+  return ok ? tree : null;
+}
+
 export interface TreeProblem {
   message: string;
   itemId?: number;

@@ -6,7 +6,10 @@
 import { area } from '@/lib/geometry/rect';
 import { packGuillotine } from '@/lib/nesting/pack';
 import type { BinType, CutNode, PackFn, PackItem, PackResult } from '@/lib/nesting/pack/types';
-import { countStages, findGuillotineTree, STRIP_STAGES } from '@/lib/nesting/guillotine';
+import { countStages, findGuillotineTree } from '@/lib/nesting/guillotine';
+import { stageRule, type StageRule } from '@/lib/nesting/saw-profile';
+import { packTwoStage } from '@/lib/nesting/two-stage';
+import type { CuttingStyle } from '@/lib/nesting/pack/types';
 import { checkTree, translateTree } from '@/lib/nesting/cut-tree';
 import { assemblePiece, assemblePlan } from '@/lib/nesting/assemble-plan';
 import { groupParts, mayTurnInGroup, sameStock, stockForPart, trimFor, usableRect } from '@/lib/nesting/stock-rules';
@@ -119,9 +122,9 @@ function piecesFromResult(group: Group, result: PackResult, request: NestRequest
     const packed = translateTree(renumber(bin.tree, index), t, t);
     // Trust but check: a malformed tree from the core (or one with too many stages for strips) is replaced by the
     // canonical tree rebuilt from the placements.
-    const strips = settings.style === 'strips';
-    const sound = checkTree(packed, usable, placements).length === 0 && (!strips || countStages(packed, 'y') <= STRIP_STAGES);
-    const tree = sound ? packed : findGuillotineTree(usable, placements, settings.kerf, strips ? STRIP_STAGES : Infinity, strips ? 'y' : undefined);
+    const rule = stageRule(settings);
+    const sound = checkTree(packed, usable, placements).length === 0 && countStages(packed, rule.firstAxis) <= rule.maxStages;
+    const tree = sound ? packed : findGuillotineTree(usable, placements, settings.kerf, rule.maxStages, rule.firstAxis);
     return assemblePiece(stock, firstIndex + b, placements, tree, request);
   });
 }
@@ -161,18 +164,52 @@ function measure(group: Group, result: PackResult): Measure {
 }
 
 /**
+ * The packing core's style for a stage rule: any number of stages is `panel`; a limit is kept with the core's strips
+ * (3 stages, the first along y), which keeps within 3 or 4 stages; a limit of 2 packs with `packTwoStage`.
+ */
+const packStyle = (rule: StageRule): CuttingStyle => (rule.maxStages === Infinity ? 'panel' : 'strips');
+
+const transposeRect = <R extends { x: number; y: number; w: number; h: number }>(r: R): R => ({ ...r, x: r.y, y: r.x, w: r.h, h: r.w });
+function transposeTree(node: CutNode): CutNode {
+  if (node.type !== 'cut') return { ...node, rect: transposeRect(node.rect) };
+  return { ...node, rect: transposeRect(node.rect), axis: node.axis === 'x' ? 'y' : 'x', children: node.children.map(transposeTree) as [CutNode] | [CutNode, CutNode] };
+}
+
+/**
+ * A packer that keeps the stage rule's first direction: crosscuts first is the core's strips packing of the mirrored
+ * problem (x and y swapped: the core's rips become crosscuts), mirrored back. A part's turn is the same either way.
+ */
+function ruledPack(pack: PackFn, rule: StageRule): PackFn {
+  if (rule.maxStages === Infinity || rule.firstAxis !== 'x') return pack;
+  return async (items, bins, options) => {
+    const mirrored = await pack(
+      items.map((it) => ({ ...it, w: it.h, h: it.w })),
+      bins.map((b) => ({ ...b, w: b.h, h: b.w })),
+      { ...options, onProgress: options.onProgress && ((p) => options.onProgress!({ ...p, best: mirrorResult(p.best) })) },
+    );
+    return mirrorResult(mirrored);
+  };
+}
+const mirrorResult = (r: PackResult): PackResult => ({
+  ...r,
+  bins: r.bins.map((b) => ({ ...b, items: b.items.map((it) => ({ ...it, rect: transposeRect(it.rect) })), tree: transposeTree(b.tree) })),
+});
+
+/**
  * Nests the request's parts onto its stock. Resolves with a plan (`version: 1`) in which every part instance is
  * placed or listed in `unplaced` with its reason. Throws a ZodError when the request does not parse.
  */
 export async function optimize(requestInput: NestRequestInput, options: OptimizeOptions = {}): Promise<Plan> {
   const request = nestRequestSchema.parse(requestInput);
   const { settings } = request;
-  const pack = options.pack ?? packGuillotine;
   const t0 = performance.now();
   let itemsLeft = request.parts.reduce((n, p) => n + p.quantity, 0);
   const used = new Map<string, number>();
   const groups = groupParts(request.parts);
-  const packOptions = { kerf: settings.kerf, style: settings.style, objective: settings.objective, seed: settings.seed };
+  const rule = stageRule(settings);
+  const packOptions = { kerf: settings.kerf, style: packStyle(rule), objective: settings.objective, seed: settings.seed };
+  // Two stages: exact-width strips (the core's strips allow a third, trim stage).
+  const pack = ruledPack(rule.maxStages === 2 ? packTwoStage : (options.pack ?? packGuillotine), rule);
   // Progress speaks for the whole plan it will return: every group counts from the start, first by a quick first
   // plan, then by its best as it is searched, then by its result.
   const estimates: Measure[] = [];

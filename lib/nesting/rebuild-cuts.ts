@@ -1,5 +1,6 @@
 /** Rebuilds cut trees, saw orders, leftovers and figures of a plan from its bare placements (layout bench edits). */
-import { findGuillotineTree, STRIP_STAGES } from '@/lib/nesting/guillotine';
+import { findGuillotineTree } from '@/lib/nesting/guillotine';
+import { stageRule } from '@/lib/nesting/saw-profile';
 import { assemblePiece, assemblePlan } from '@/lib/nesting/assemble-plan';
 import { trimFor, usableRect } from '@/lib/nesting/stock-rules';
 import { nestRequestSchema, planSchema, type NestRequestInput, type Plan, type PlanInput } from '@/shared/schemas/nesting';
@@ -12,7 +13,8 @@ import { nestRequestSchema, planSchema, type NestRequestInput, type Plan, type P
 export function rebuildCuts(requestInput: NestRequestInput, planInput: PlanInput): Plan {
   const request = nestRequestSchema.parse(requestInput);
   const plan = planSchema.parse(planInput);
-  const { kerf, style } = request.settings;
+  const { kerf } = request.settings;
+  const rule = stageRule(request.settings);
   const pieces = plan.pieces.map((piece, i) => {
     const stock = request.stock.find((s) => s.id === piece.stockId);
     if (!stock) {
@@ -20,8 +22,7 @@ export function rebuildCuts(requestInput: NestRequestInput, planInput: PlanInput
       return bare;
     }
     const usable = usableRect(stock, trimFor(stock, request.settings));
-    const strips = style === 'strips';
-    const tree = findGuillotineTree(usable, piece.placements, kerf, strips ? STRIP_STAGES : Infinity, strips ? 'y' : undefined);
+    const tree = findGuillotineTree(usable, piece.placements, kerf, rule.maxStages, rule.firstAxis);
     return assemblePiece(stock, i, piece.placements, tree, request);
   });
   return assemblePlan(request, pieces, plan.unplaced, plan.cancelled);

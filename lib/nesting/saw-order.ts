@@ -11,7 +11,9 @@ import { contains, type Rect } from '@/lib/geometry/rect';
 import type { CutNode } from '@/lib/nesting/pack/types';
 import { extent, highEdge, lowEdge, otherAxis as other, sameRect, slice, type Axis } from '@/lib/geometry/axis';
 import { EPS } from '@/lib/nesting/guillotine';
+import { cutProblems } from '@/lib/nesting/saw-profile';
 import type { Placement, SawPiece, SawStep } from '@/shared/schemas/nesting';
+import type { NestSaw } from '@/shared/schemas/saw';
 
 /** "A", "B", … "Z", "AA", "AB", … (bijective base 26). */
 export function letters(n: number, upper = true): string {
@@ -32,8 +34,10 @@ export interface SawContext {
   placements: readonly Placement[];
   minOffcutLength: number;
   minOffcutWidth: number;
-  /** The narrowest piece a rip may leave between blade and fence (0: no limit). */
+  /** The narrowest piece a rip may leave between blade and fence (0: no limit); with saws, each saw's own. */
   minFenceWidth: number;
+  /** The request's saws, the one preferred for each cut first (`requestSaws`): each step names the saw it is made on. */
+  saws?: readonly NestSaw[];
 }
 
 const axisOf = (kind: SawStep['kind']): Axis => (kind === 'rip' ? 'y' : 'x');
@@ -94,27 +98,51 @@ export function sawOrderFromTree(tree: CutNode, rootName: string, ctx: SawContex
       if (produces.length === 0) return; // a blade wider than the piece: nothing to do
       const lowIsWaste = lowName !== null && produces[0].role === 'waste';
       const fenceFor = (ref: SawStep['reference']) => (ref === 'low' ? pos - lowEdge(cur, axis) : a1 - (pos + ctx.kerf));
-      let reference: SawStep['reference'] = !lowName || (lowIsWaste && highName) ? 'high' : 'low';
-      let narrow = false;
+      const preferred: SawStep['reference'] = !lowName || (lowIsWaste && highName) ? 'high' : 'low';
+      const turned: SawStep['reference'] = preferred === 'low' ? 'high' : 'low';
+      const turnedExists = turned === 'low' ? lowName !== null : highName !== null;
+      const kind: SawStep['kind'] = axis === 'y' ? 'rip' : 'crosscut';
+      const length = extent(cur, other(axis));
       // A rip never traps a strip narrower than the safe minimum between blade and fence: the piece is turned so
       // the narrow side falls free (safety before the rule that waste does not ride the fence), or, when both sides
       // are narrow, the step is one for a sled, a track saw or a band saw.
-      if (axis === 'y' && fenceFor(reference) < ctx.minFenceWidth - EPS) {
-        const turned: SawStep['reference'] = reference === 'low' ? 'high' : 'low';
-        const turnedExists = turned === 'low' ? lowName !== null : highName !== null;
-        if (turnedExists && fenceFor(turned) >= ctx.minFenceWidth - EPS) reference = turned;
-        else narrow = true;
+      const choose = (minFence: number) => {
+        let reference = preferred;
+        let narrow = false;
+        if (axis === 'y' && fenceFor(reference) < minFence - EPS) {
+          if (turnedExists && fenceFor(turned) >= minFence - EPS) reference = turned;
+          else narrow = true;
+        }
+        return { reference, narrow };
+      };
+      let { reference, narrow } = choose(ctx.minFenceWidth);
+      let saw: string | undefined;
+      if (ctx.saws?.length) {
+        // The first saw (and way round) that can make the cut: the second saw before the breakdown saw, the
+        // preferred edge on the fence before the other. When none can, the first saw's choice stands (validatePlan
+        // reports it).
+        const exists = (r: SawStep['reference']) => (r === 'low' ? lowName !== null : highName !== null);
+        const tries = ctx.saws.flatMap((sw) => {
+          const safe = (r: SawStep['reference']) => exists(r) && fenceFor(r) >= sw.minFenceWidthMm - EPS;
+          const noSafeSide = axis === 'y' && !safe('low') && !safe('high');
+          const first = choose(sw.minFenceWidthMm).reference;
+          return [...new Set<SawStep['reference']>([first, preferred, turned])].filter(exists).map((r) => ({ sw, reference: r, narrow: noSafeSide }));
+        });
+        const ok = tries.find((t) => cutProblems(t.sw, { kind, fence: fenceFor(t.reference), length, narrow: t.narrow }, cur).length === 0) ?? tries[0];
+        if (ok) ({ reference, narrow } = ok);
+        saw = (ok?.sw ?? ctx.saws[0]).name;
       }
       const trim = pos + ctx.kerf <= lowEdge(ctx.usable, axis) + EPS || pos >= highEdge(ctx.usable, axis) - EPS;
       steps.push({
         n: steps.length + 1,
-        kind: axis === 'y' ? 'rip' : 'crosscut',
+        kind,
         piece: name,
         reference,
         fence: fenceFor(reference),
-        length: extent(cur, other(axis)),
+        length,
         trim,
         ...(narrow ? { narrow } : {}),
+        ...(saw ? { saw } : {}),
         produces,
       });
       cur = high;
@@ -140,10 +168,13 @@ export interface ReplayProblem {
 export function replaySawOrder(steps: readonly SawStep[], stock: Rect, rootName: string, kerf: number) {
   const pieces = new Map<string, Rect>([[rootName, stock]]);
   const problems: ReplayProblem[] = [];
+  /** The piece each step cuts, as it is when the step begins (undefined when it does not exist). */
+  const cutFrom: (Rect | undefined)[] = [];
   steps.forEach((step, i) => {
     const n = i + 1;
     if (step.n !== n) problems.push({ step: n, message: `step ${n} is numbered ${step.n}` });
     const cur = pieces.get(step.piece);
+    cutFrom.push(cur);
     if (!cur) {
       problems.push({ step: n, message: `step ${n} cuts piece "${step.piece}", which does not exist at that point` });
       return;
@@ -172,5 +203,5 @@ export function replaySawOrder(steps: readonly SawStep[], stock: Rect, rootName:
       pieces.set(name, s);
     });
   });
-  return { pieces, problems };
+  return { pieces, problems, cutFrom };
 }

@@ -119,7 +119,8 @@ describe('validatePlan', () => {
     const panel = request(parts, [sheet('S', 1000, 500)], { kerf: 3, style: 'panel' });
     expect(validatePlan(panel, handPlan(panel, 'S', layout))).toEqual([]);
     const strips = request(parts, [sheet('S', 1000, 500)], { kerf: 3, style: 'strips' });
-    expect(codes(validatePlan(strips, handPlan(strips, 'S', layout)))).toEqual(['too-many-stages']);
+    // Worked by hand: a crosscut at x = 300 first (then a rip under p, then a crosscut between q and r) takes 3 stages.
+    expect(codes(validatePlan(strips, handPlan(strips, 'S', layout)))).toEqual(['first-stage']);
   });
 
   test('catches a saw order with one cut moved', () => {

@@ -14,7 +14,8 @@
  *   part free exactly.
  */
 import { contains } from '@/lib/geometry/rect';
-import { EPS, findGuillotineTree, STRIP_STAGES } from '@/lib/nesting/guillotine';
+import { EPS, findGuillotineTree } from '@/lib/nesting/guillotine';
+import { cutProblems, requestSaws, sawStageRule, stageRule, stepStages } from '@/lib/nesting/saw-profile';
 import { sameRect } from '@/lib/geometry/axis';
 import { checkTree } from '@/lib/nesting/cut-tree';
 import { replaySawOrder, stockPieceName } from '@/lib/nesting/saw-order';
@@ -50,7 +51,13 @@ export type ViolationCode =
   | 'unplaced-reason'
   | 'tree'
   | 'saw-order'
-  | 'unsafe-fence';
+  | 'unsafe-fence'
+  | 'first-stage'
+  | 'rip-capacity'
+  | 'crosscut-capacity'
+  | 'saw-piece-too-large'
+  | 'saw-kerf'
+  | 'unknown-saw';
 
 export interface Violation {
   code: ViolationCode;
@@ -127,15 +134,23 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
       geometryOk = false;
     }
   }
+  const saws = requestSaws(settings);
   if (geometryOk) {
-    const strips = settings.style === 'strips';
-    const tree = findGuillotineTree(usable, piece.placements, settings.kerf, strips ? STRIP_STAGES : Infinity, strips ? 'y' : undefined);
+    // With a breakdown saw the stages are judged on the saw order (each saw's own, from the piece it is handed);
+    // with one saw or none, on the canonical tree of the bare placements.
+    const rule = settings.breakdownSaw ? { maxStages: Infinity } : stageRule(settings);
+    const tree = findGuillotineTree(usable, piece.placements, settings.kerf, rule.maxStages, rule.firstAxis);
     if (!tree) {
-      const anyTree = strips && findGuillotineTree(usable, piece.placements, settings.kerf);
+      const anyTree = rule.maxStages !== Infinity && findGuillotineTree(usable, piece.placements, settings.kerf);
+      const otherWay = anyTree && rule.firstAxis && findGuillotineTree(usable, piece.placements, settings.kerf, rule.maxStages, rule.firstAxis === 'y' ? 'x' : 'y');
+      const who = settings.saw ? settings.saw.name : 'strip cutting';
+      const first = rule.firstAxis === 'y' ? 'rips' : 'crosscuts';
       out.push(
-        anyTree
-          ? { code: 'too-many-stages', message: `piece ${index + 1} needs more than ${STRIP_STAGES} stages (rips, crosscuts, trim rips) for strip cutting`, ...at }
-          : { code: 'not-guillotine', message: `piece ${index + 1} cannot be cut apart with straight through-cuts`, ...at },
+        otherWay
+          ? { code: 'first-stage', message: `piece ${index + 1} can be cut in ${rule.maxStages} stages only with ${first === 'rips' ? 'crosscuts' : 'rips'} first, but ${who} starts with ${first}`, ...at }
+          : anyTree
+            ? { code: 'too-many-stages', message: `piece ${index + 1} needs more than ${rule.maxStages} stages of cuts (${first} first) for ${who}`, ...at }
+            : { code: 'not-guillotine', message: `piece ${index + 1} cannot be cut apart with straight through-cuts`, ...at },
       );
     }
   }
@@ -144,13 +159,29 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
     for (const t of checkTree(piece.tree, whole, piece.placements)) out.push({ code: 'tree', message: `piece ${index + 1}: ${t.message}`, ...at });
   }
   if (piece.sawOrder) {
-    const { pieces, problems } = replaySawOrder(piece.sawOrder, whole, stockPieceName(index), settings.kerf);
+    const { pieces, problems, cutFrom } = replaySawOrder(piece.sawOrder, whole, stockPieceName(index), settings.kerf);
     for (const pr of problems) out.push({ code: 'saw-order', message: `piece ${index + 1}: ${pr.message}`, ...at, step: pr.step });
-    for (const step of piece.sawOrder) {
-      if (step.kind === 'rip' && !step.narrow && step.fence < settings.minFenceWidth - EPS) {
-        out.push({ code: 'unsafe-fence', message: `piece ${index + 1}, step ${step.n}: a rip with ${step.fence} mm between blade and fence, under the ${settings.minFenceWidth} mm safe minimum`, ...at, step: step.n });
+    const stages = saws.length ? stepStages(piece.sawOrder, stockPieceName(index), saws) : [];
+    piece.sawOrder.forEach((step, i) => {
+      const where = { ...at, step: step.n };
+      if (!saws.length) {
+        if (step.kind === 'rip' && !step.narrow && step.fence < settings.minFenceWidth - EPS) {
+          out.push({ code: 'unsafe-fence', message: `piece ${index + 1}, step ${step.n}: a rip with ${step.fence} mm between blade and fence, under the ${settings.minFenceWidth} mm safe minimum`, ...where });
+        }
+        return;
       }
-    }
+      const saw = saws.find((s) => s.name === step.saw);
+      if (!saw) {
+        out.push({ code: 'unknown-saw', message: `piece ${index + 1}, step ${step.n}: ${step.saw ? `“${step.saw}” is not a saw of this nest` : 'the step does not say which saw makes it'}`, ...where });
+        return;
+      }
+      const from = cutFrom[i];
+      if (from) for (const pr of cutProblems(saw, step, from)) out.push({ code: pr.code, message: `piece ${index + 1}, step ${step.n}: ${pr.message}`, ...where });
+      const limit = sawStageRule(saw).maxStages;
+      if (stages[i] > limit) {
+        out.push({ code: 'too-many-stages', message: `piece ${index + 1}, step ${step.n}: stage ${stages[i]} of cuts on ${saw.name}, which is used with at most ${limit}`, ...where });
+      }
+    });
     const finals = [...pieces.values()];
     for (const p of piece.placements) {
       const hits = finals.filter((f) => sameRect(f, p, EPS)).length;
@@ -230,6 +261,11 @@ export function validatePlan(requestInput: NestRequestInput, planInput: unknown)
     }
   }
 
+  for (const saw of requestSaws(request.settings)) {
+    if (request.settings.kerf < saw.kerfMm - EPS) {
+      out.push({ code: 'saw-kerf', message: `the plan allows ${request.settings.kerf} mm per cut, but ${saw.name}’s kerf is ${saw.kerfMm} mm` });
+    }
+  }
   for (const s of request.stock) {
     const n = used.get(s.id) ?? 0;
     if (s.count !== null && n > s.count) out.push({ code: 'stock-count', message: `the plan uses ${n} of stock "${s.id}" but only ${s.count} are on hand` });

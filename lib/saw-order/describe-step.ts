@@ -39,6 +39,8 @@ export interface StepText {
   narrow: boolean;
   /** One line the cutter reads aloud. */
   summary: string;
+  /** The saw the cut is made on, when the plan names saws. */
+  saw?: string;
   /** Labels of the parts this cut frees, in order. */
   frees: string[];
   produced: ProducedText[];
@@ -66,7 +68,8 @@ export function describeStep(step: SawStep, labels: Map<string, string>, units: 
     length: len(step.length),
     trim: step.trim,
     narrow,
-    summary: narrow ? `${step.n}. ${what} ${fence} wide ${NARROW_HOW}` : `${step.n}. ${what}, fence at ${fence}`,
+    ...(step.saw ? { saw: step.saw } : {}),
+    summary: (narrow ? `${step.n}. ${what} ${fence} wide ${NARROW_HOW}` : `${step.n}. ${what}, fence at ${fence}`) + (step.saw ? ` (on ${step.saw})` : ''),
     frees: produced.filter((p) => p.role === 'part').map((p) => p.part),
     produced,
   };

@@ -157,7 +157,7 @@ export function stepLines(text: StepText, cellW: number, fonts: Fonts): { lines:
   const { regular, bold } = fonts;
   const tx = 24 + DIAGRAM.w + 8;
   const tw = cellW - 8 - tx;
-  const head = `${text.kindLabel.toUpperCase()} ${text.piece}${text.trim ? '  - TRIM' : ''}${text.narrow ? '  - SLED / TRACK / BAND SAW' : ''}`;
+  const head = `${text.kindLabel.toUpperCase()} ${text.piece}${text.trim ? '  - TRIM' : ''}${text.narrow ? '  - SLED / TRACK / BAND SAW' : ''}${text.saw ? `  - ON ${text.saw.toUpperCase()}` : ''}`;
   const fence = pdfText(`Fence ${text.fence}`);
   // Top down: the kind (wrapped, it may name the sled), the fence, then what the cut frees or leaves.
   const heading = block(head, bold, 9, tw, tx, -12, 10, text.kind === 'rip' ? blade : ink, 2, 6);

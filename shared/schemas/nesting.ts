@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { text } from './text';
+import { nestSawSchema } from './saw';
 
 const mm = z.number().finite();
 const positiveMm = mm.positive();
@@ -63,7 +64,8 @@ export const objectiveSchema = z.enum(['cost', 'pieces', 'cuts']);
 /** 1″ (25.4 mm) between blade and fence, the least a table-saw rip should leave there (common practice, no source). */
 export const DEFAULT_MIN_FENCE_WIDTH = 25.4;
 
-export const nestSettingsSchema = z.object({
+/** The settings' fields (without the rules across them: `nestSettingsSchema`). */
+export const nestSettingsObjectSchema = z.object({
   kerf: mm.min(0).max(20).default(3.2),
   /** Per side, kerf included, taken from factory edges (sheets, boards) only. */
   trim: mm.min(0).max(100).default(0),
@@ -79,6 +81,20 @@ export const nestSettingsSchema = z.object({
    * saw's manual decides). 0 turns the rule off.
    */
   minFenceWidth: mm.min(0).max(300).default(DEFAULT_MIN_FENCE_WIDTH),
+  /**
+   * The saw the plan is cut on (lib/nesting/saw-profile.ts): its stages and first direction bound the cut tree, and
+   * every saw-order step keeps within its capacities and safe minimum. Without one, `style` decides the stages.
+   */
+  saw: nestSawSchema.optional(),
+  /** A saw that breaks the stock down first (a track saw): the cuts `saw` cannot make are made on it. */
+  breakdownSaw: nestSawSchema.optional(),
+});
+
+export const nestSettingsSchema = nestSettingsObjectSchema.superRefine((s, ctx) => {
+  if (s.breakdownSaw && !s.saw) ctx.addIssue({ code: 'custom', message: 'a breakdown saw needs a second saw for the rest of the cuts', path: ['breakdownSaw'] });
+  if (s.breakdownSaw && s.saw && s.breakdownSaw.name.toLowerCase() === s.saw.name.toLowerCase()) {
+    ctx.addIssue({ code: 'custom', message: 'the breakdown saw and the second saw need different names (the saw order names them)', path: ['breakdownSaw', 'name'] });
+  }
 });
 export type NestSettings = z.infer<typeof nestSettingsSchema>;
 
@@ -182,6 +198,8 @@ export const sawStepSchema = z.object({
    * for a sled, a track saw or a band saw.
    */
   narrow: z.boolean().optional(),
+  /** The name of the saw the cut is made on, when the request names saws. */
+  saw: text().max(80).optional(),
   /** The pieces it leaves, low side first; a side the blade eats entirely is absent. */
   produces: z.array(sawPieceSchema).min(1).max(2),
 });

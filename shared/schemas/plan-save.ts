@@ -5,12 +5,12 @@
  */
 import { z } from 'zod';
 import { text } from './text';
-import { nestSettingsSchema } from './nesting';
+import { nestSettingsObjectSchema } from './nesting';
 import { nestForSchema } from './recut';
 
 export const planNameSchema = text().min(1, 'Give the plan a name.').max(120, 'Keep the name under 120 characters.');
 
-const s = nestSettingsSchema.shape;
+const s = nestSettingsObjectSchema.shape;
 /**
  * Settings a Nest may override; the rest come from the shop. Built without the defaults of `nestSettingsSchema`
  * (a `.partial()` would still fill them in and overrule the shop's kerf and trim).
@@ -25,6 +25,10 @@ export const nestSettingsOverrideSchema = z.object({
   timeBudgetMs: s.timeBudgetMs.unwrap().optional(),
   seed: s.seed.unwrap().optional(),
   preferOffcuts: s.preferOffcuts.unwrap().optional(),
+  /** The shop's saw to cut on (its id in Shop settings); the request carries its whole profile. */
+  sawId: z.uuid().optional(),
+  /** A saw that breaks the stock down first (a track saw); needs `sawId`. */
+  breakdownSawId: z.uuid().optional(),
 });
 export type NestSettingsOverride = z.infer<typeof nestSettingsOverrideSchema>;
 

@@ -62,8 +62,9 @@ test('an overlapping drop is shown on the bench and saving is refused until undo
   await page.goto(`/jobs/${kitchenId}/plan/${draft!.id}`);
   await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
   const { pieces } = await savedPlan(page, draft!.id);
-  const i = pieces.findIndex((p) => p.placements.length >= 2);
-  const [a, b] = pieces[i].placements;
+  // On the largest piece with two parts (a small offcut is drawn too small to aim at): the smaller part onto the larger.
+  const i = pieces.reduce((best, p, k) => (p.placements.length >= 2 && (best < 0 || p.length * p.width > pieces[best].length * pieces[best].width) ? k : best), -1);
+  const [a, b] = [...pieces[i].placements].sort((p, q) => q.w * q.h - p.w * p.h);
   // Right on top of its neighbour: no spot within snapping reach is clear, so the drop overlaps.
   const grabbed = await dragPart(page, pieces, i, b, a.x + (a.w - b.w) / 2, a.y + (a.h - b.h) / 2);
   await expect(page.getByTestId('bench-status')).toContainText('saving is refused');

@@ -117,3 +117,75 @@ test('part tags print one per part on a chosen label sheet, and a tag leads to i
   await expect(page.getByRole('heading', { level: 1 })).toContainText('#1');
   await shot(page, 'part-page');
 });
+
+test('the estimator nests the kitchen on the shop’s saws (track saw breaking down, cabinet saw after) and the saw order names the saw of every cut', async ({ page }) => {
+  test.setTimeout(120_000);
+  await signIn(page, 'estimator');
+  const jobs: { id: string; name: string }[] = await (await page.request.get('/api/jobs')).json();
+  const kitchen = jobs.find((j) => j.name === 'Hollis kitchen')!;
+  await page.goto(`/jobs/${kitchen.id}/plan`);
+  // The defaults: the cabinet saw, with the track saw breaking the sheets down.
+  await expect(page.getByLabel('Cut on')).toHaveValue(/.+/);
+  await expect(page.getByLabel('Cut on').locator('option:checked')).toHaveText(/Cabinet saw/);
+  await expect(page.getByLabel('Break sheets down on').locator('option:checked')).toHaveText(/Track saw/);
+  await page.getByLabel('Search for (seconds)').fill('1');
+  await page.getByRole('button', { name: /^Nest \d+ parts?$/ }).click();
+  await expect(page.getByTestId('plan-summary')).toBeVisible({ timeout: 30_000 });
+  await page.getByLabel('Plan name').fill('Kitchen on the saws');
+  await page.getByRole('button', { name: 'Save as draft plan' }).click();
+  await expect(page.getByRole('heading', { name: /Kitchen on the saws/ })).toBeVisible();
+  const planId = page.url().split('/').pop()!;
+
+  const plan = await (await page.request.get(`/api/plans/${planId}`)).json();
+  // The stored plan keeps the saws it was nested for, and every step names one of them.
+  expect(plan.request.settings.saw.name).toBe('Cabinet saw');
+  expect(plan.request.settings.breakdownSaw.name).toBe('Track saw');
+  const steps: { saw?: string }[] = plan.document.pieces.flatMap((p: { sawOrder?: { saw?: string }[] }) => p.sawOrder ?? []);
+  expect(steps.length).toBeGreaterThan(0);
+  for (const s of steps) expect(['Cabinet saw', 'Track saw']).toContain(s.saw);
+
+  await page.goto(`/plans/${planId}/saw-order`);
+  await expect(page.getByTestId('saw-step')).toHaveCount(steps.length);
+  await expect(page.getByTestId('step-saw')).toHaveCount(steps.length);
+  await expect(page.getByTestId('step-saw').filter({ hasText: 'Track saw' }).first()).toBeVisible();
+  await expect(page.getByTestId('step-saw').filter({ hasText: 'Cabinet saw' }).first()).toBeVisible();
+  await expect(page.getByTestId('saw-order-piece').first()).toContainText('on ');
+  await shot(page, 'saw-order-saws');
+  await page.getByTestId('saw-order-piece').nth(1).screenshot({ path: `test-results/screens-${process.env.E2E_PORT ?? 'main'}/saw-order-saws-piece.png` });
+  await page.setViewportSize({ width: 390, height: 844 });
+  await expect(page.getByTestId('step-saw').first()).toBeVisible();
+  // Nothing of a step card runs off a phone's screen.
+  const overflow = await page.getByTestId('saw-step').first().evaluate((el) => el.scrollWidth - el.clientWidth);
+  expect(overflow).toBeLessThanOrEqual(0);
+  await shot(page, 'saw-order-saws-390');
+  await page.getByTestId('saw-step').nth(1).screenshot({ path: `test-results/screens-${process.env.E2E_PORT ?? 'main'}/saw-order-saws-390-step.png` });
+});
+
+test('the owner keeps the shop’s saws in Shop settings: the demo’s two, a new one in inches, and the caution at the fence minimum', async ({ page }) => {
+  await signIn(page, 'owner');
+  await page.goto('/settings');
+  const section = page.getByRole('region', { name: 'Saws' });
+  const list = section.getByRole('list', { name: 'Saws' });
+  await expect(list.getByRole('listitem')).toHaveCount(2);
+  await expect(list.getByRole('listitem').first()).toContainText('Cabinet saw');
+  await expect(list.getByRole('listitem').first()).toContainText('30″');
+  await expect(list.getByRole('listitem').first()).toContainText('at most 3, rips first');
+  await section.getByRole('button', { name: 'Add a saw' }).click();
+  const form = page.getByRole('form', { name: 'New saw' });
+  await expect(form.getByRole('note')).toContainText('saw’s manual');
+  await form.getByLabel('Name').fill('Slider');
+  await form.getByLabel('Kind').selectOption('sliding-table-saw');
+  await form.getByLabel('Kerf').fill('1/8');
+  await form.getByLabel('Rip capacity').fill('50');
+  await form.getByLabel('Crosscut capacity').fill('100');
+  await form.getByLabel('Stages of cuts').selectOption('any');
+  await form.getByLabel('Narrowest strip between blade and fence').fill('1');
+  for (const width of [1440, 820, 390]) {
+    await page.setViewportSize({ width, height: 900 });
+    await section.screenshot({ path: `test-results/screens-${process.env.E2E_PORT ?? 'main'}/settings-saws-${width}.png` });
+  }
+  await form.getByRole('button', { name: 'Add the saw' }).click();
+  await expect(list.getByRole('listitem')).toHaveCount(3);
+  await expect(list.getByRole('listitem').nth(2)).toContainText('Sliding table saw');
+  await expect(list.getByRole('listitem').nth(2)).toContainText('any number, rips first');
+});

@@ -17,6 +17,9 @@ import { stockMatchWarning } from '@/lib/cut-list/stock-match';
 import { sizeDrawerSchedule } from '@/lib/joinery';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { listSlideModels } from '@/db/queries/slide-models';
+import { listSaws } from '@/db/queries/saws';
+import { buildNestRequest } from '@/db/queries/nest-request';
+import { optimize } from '@/lib/nesting';
 import { inches } from '@/lib/units/length';
 
 const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
@@ -60,6 +63,28 @@ describe('the demo shop', () => {
     expect(sized.ok).toBe(true);
     if (!sized.ok) return;
     expect(sized.parts.map((p) => [p.role, stockMatchWarning(p, offers, IMPERIAL)])).toEqual(sized.parts.map((p) => [p.role, null]));
+  });
+
+  test('keeps a table saw (3 stages rip first, 30″ = 762 mm rip capacity, ⅛″ kerf) and a track saw, and nests the kitchen within both', async () => {
+    const list = await listSaws(handle.db, first.shopId);
+    // 30″ × 25.4 = 762 mm and ⅛″ = 3.175 mm (1 in = 25.4 mm exactly).
+    expect(list.map((s) => [s.kind, s.ripCapacityMm, s.maxStages, s.firstStage, s.kerfMm])).toEqual([
+      ['table-saw', 762, 3, 'rip', 3.175],
+      ['track-saw', null, null, 'rip', inches(3 / 32)],
+    ]);
+    const [kitchen] = await handle.db.select().from(jobs).where(eq(jobs.name, 'Hollis kitchen'));
+    const [table, track] = list;
+    const request = nestRequestSchema.parse(await buildNestRequest(handle.db, first.shopId, kitchen.id, { timeBudgetMs: 0, sawId: table.id, breakdownSawId: track.id }));
+    expect(request.settings.saw?.name).toBe('Cabinet saw');
+    const plan = await optimize(request);
+    expect(plan.pieces.length).toBeGreaterThan(0);
+    expect(validatePlan(request, plan)).toEqual([]);
+    const used = new Set(plan.pieces.flatMap((p) => p.sawOrder!.map((s) => s.saw)));
+    expect([...used].sort()).toEqual(['Cabinet saw', 'Track saw']);
+    // The table saw alone cannot crosscut the 34″ (863.6 mm) wide parts' strips on its 24″ sled: validatePlan says so.
+    const alone = nestRequestSchema.parse(await buildNestRequest(handle.db, first.shopId, kitchen.id, { timeBudgetMs: 0, sawId: table.id }));
+    const problems = validatePlan(alone, await optimize(alone));
+    expect(problems.some((p) => p.code === 'crosscut-capacity' && p.message.includes('863.6 mm crosscut'))).toBe(true);
   });
 
   test('keeps two invented undermount slide models, each sizing a box the way its rule says (worked by hand)', async () => {

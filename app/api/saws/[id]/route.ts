@@ -1,0 +1,15 @@
+import { deleteSaw, updateSaw } from '@/db/queries/saws';
+import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/lib/api/route';
+import { sawSchema } from '@/shared/schemas/saw';
+
+// PUT /api/saws/:id – change a saw (owner); saved plans keep the profile they were nested with
+export const PUT = route({ permission: 'settings:write', params: idParams, body: sawSchema }, async ({ db, user, params, body }) => {
+  return (await updateSaw(db, user.shopId, user.id, params.id, body)) ?? Promise.reject(notFound('That saw'));
+});
+
+// DELETE /api/saws/:id – delete a saw (owner); saved plans keep its profile
+export const DELETE = route({ permission: 'settings:write', params: idParams }, async ({ db, user, params }) => {
+  if (!(await deleteSaw(db, user.shopId, user.id, params.id))) throw notFound('That saw');
+  return { ok: true };
+});

@@ -1,0 +1,91 @@
+import { and, asc, eq, ne, sql } from 'drizzle-orm';
+import type { Db } from '../open';
+import { saws } from '../schema';
+import { conflict } from '@/lib/api/errors';
+import type { Saw, SawKind } from '@/shared/schemas/saw';
+import { recordAudit } from './audit';
+
+export interface SavedSaw extends Saw {
+  id: string;
+  updatedAt: string;
+}
+
+type Row = typeof saws.$inferSelect;
+
+const toSaw = (r: Row): SavedSaw => ({
+  id: r.id,
+  kind: r.kind as SawKind,
+  kindName: r.kindName,
+  name: r.name,
+  kerfMm: r.kerfMm,
+  ripCapacityMm: r.ripCapacityMm,
+  crosscutCapacityMm: r.crosscutCapacityMm,
+  maxPieceLengthMm: r.maxPieceLengthMm,
+  maxPieceWidthMm: r.maxPieceWidthMm,
+  maxStages: r.maxStages as Saw['maxStages'],
+  firstStage: r.firstStage as Saw['firstStage'],
+  minFenceWidthMm: r.minFenceWidthMm,
+  updatedAt: r.updatedAt.toISOString(),
+});
+
+/** The shop's saws in the order they were added: the first is the nest's default. */
+export async function listSaws(db: Db, shopId: string): Promise<SavedSaw[]> {
+  const rows = await db.select().from(saws).where(eq(saws.shopId, shopId)).orderBy(asc(saws.position), asc(saws.createdAt), asc(saws.id));
+  return rows.map(toSaw);
+}
+
+/** One saw per name in a shop, whatever the case (409). */
+async function refuseDuplicate(db: Db, shopId: string, name: string, exceptId?: string) {
+  const same = await db
+    .select({ id: saws.id })
+    .from(saws)
+    .where(and(eq(saws.shopId, shopId), sql`lower(${saws.name}) = lower(${name})`, exceptId ? ne(saws.id, exceptId) : undefined));
+  if (same.length) throw conflict(`The shop already has a saw named “${name}”: edit that one, or give this one another name.`);
+}
+
+const columns = (s: Saw) => ({
+  kind: s.kind,
+  kindName: s.kind === 'other' ? s.kindName : null,
+  name: s.name,
+  kerfMm: s.kerfMm,
+  ripCapacityMm: s.ripCapacityMm,
+  crosscutCapacityMm: s.crosscutCapacityMm,
+  maxPieceLengthMm: s.maxPieceLengthMm,
+  maxPieceWidthMm: s.maxPieceWidthMm,
+  maxStages: s.maxStages,
+  firstStage: s.firstStage,
+  minFenceWidthMm: s.minFenceWidthMm,
+});
+
+export async function createSaw(db: Db, shopId: string, userId: string | null, saw: Saw): Promise<SavedSaw> {
+  return db.transaction(async (tx) => {
+    await refuseDuplicate(tx, shopId, saw.name);
+    const [{ next }] = await tx.select({ next: sql<number>`coalesce(max(${saws.position}) + 1, 0)::int` }).from(saws).where(eq(saws.shopId, shopId));
+    const [row] = await tx.insert(saws).values({ shopId, ...columns(saw), position: next }).returning();
+    await recordAudit(tx, { shopId, userId, action: 'create', entity: 'saw', entityId: row.id, data: saw });
+    return toSaw(row);
+  });
+}
+
+/** Null when the saw is not this shop's. Saved plans keep the profile they were nested with. */
+export async function updateSaw(db: Db, shopId: string, userId: string, id: string, saw: Saw): Promise<SavedSaw | null> {
+  return db.transaction(async (tx) => {
+    await refuseDuplicate(tx, shopId, saw.name, id);
+    const [row] = await tx
+      .update(saws)
+      .set({ ...columns(saw), updatedAt: new Date() })
+      .where(and(eq(saws.shopId, shopId), eq(saws.id, id)))
+      .returning();
+    if (!row) return null;
+    await recordAudit(tx, { shopId, userId, action: 'update', entity: 'saw', entityId: id, data: saw });
+    return toSaw(row);
+  });
+}
+
+export async function deleteSaw(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
+  return db.transaction(async (tx) => {
+    const rows = await tx.delete(saws).where(and(eq(saws.shopId, shopId), eq(saws.id, id))).returning({ name: saws.name });
+    if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'saw', entityId: id, data: rows[0] });
+    return rows.length > 0;
+  });
+}
