@@ -75,7 +75,7 @@ async function seed(dataDir: string) {
         insert into jobs (shop_id, name, customer_id, status, due_date, notes, created_at, updated_at)
         select ${shopId}, 'Bench job ' || lpad(i::text, 3, '0') || ' ' || (array['kitchen','vanity','wardrobe','bookcase','mudroom bench'])[1 + i % 5],
                (select id from customers c where c.shop_id = ${shopId} order by c.name offset (i % (select count(*) from customers where shop_id = ${shopId})) limit 1),
-               (array['quoting','quoted','won','cutting','done','archived']::job_status[])[1 + i % 6],
+               (array['quoting','quoted','accepted','deposit-paid','cutting','done','declined','expired','archived']::job_status[])[1 + i % 9],
                case when i % 4 = 0 then null else date '2027-01-01' + (i % 120) end, '',
                timestamptz '2025-12-01T12:00:00Z' + i * interval '17 hours', timestamptz '2025-12-01T12:00:00Z' + i * interval '17 hours'
           from generate_series(1, ${addJobs}) i`);
