@@ -1,4 +1,4 @@
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import type { NextRequest } from 'next/server';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { useDatabase } from '@/db/client';
@@ -37,7 +37,8 @@ beforeAll(async () => {
     return { id: u.id, shopId, role: u.role, tokenVersion: u.tokenVersion };
   };
   [estimator, cutter] = [as('estimator'), as('cutter')];
-  [{ id: jobId }] = await handle.db.select({ id: jobs.id }).from(jobs).where(eq(jobs.shopId, shopId)).limit(1);
+  // The demo kitchen by name (not the first row the database happens to return).
+  [{ id: jobId }] = await handle.db.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.name, 'Hollis kitchen')));
 });
 afterAll(() => handle.close());
 
