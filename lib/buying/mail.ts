@@ -3,23 +3,9 @@
  * plain-text part complete on its own and a simple HTML part: inline styles, no images or remote content, every
  * value escaped.
  */
-import { escapeHtml, type RenderedMail } from '@/lib/mail/templates';
+import { escapeHtml, mailFrame, type RenderedMail } from '@/lib/mail/templates';
 
-function layout(shopName: string, body: string): string {
-  return `<!doctype html>
-<html lang="en">
-<head><meta charset="utf-8"><meta name="viewport" content="width=device-width"><title>${escapeHtml(shopName)}</title></head>
-<body style="margin:0;padding:0;background:#f4f1ea">
-<div style="max-width:600px;margin:0 auto;padding:24px 16px;font-family:-apple-system,'Segoe UI',Helvetica,Arial,sans-serif">
-<div style="background:#ffffff;border:1px solid #e2ddd2;border-radius:8px;padding:24px">
-<p style="margin:0 0 20px;font-size:13px;letter-spacing:.04em;text-transform:uppercase;color:#7a766c">${escapeHtml(shopName)}</p>
-${body}
-</div>
-<p style="margin:16px 0 0;font-size:12px;color:#7a766c;text-align:center">Sent by Kerfwise for ${escapeHtml(shopName)}.</p>
-</div>
-</body>
-</html>`;
-}
+const layout = (shopName: string, body: string) => mailFrame(shopName, body, 600);
 const p = (html: string) => `<p style="margin:0 0 16px;font-size:15px;line-height:1.5;color:#2b2a27">${html}</p>`;
 
 export interface PoMailLine {

@@ -1,26 +1,10 @@
 /**
- * A purchase order as a PDF, made with @react-pdf/renderer in the font the app ships (IBM Plex Sans, the quote PDF embeds), so sizes print as on screen (¾″, 18 mm): the shop and its details, the supplier, the
- * lines at their unit costs and the total.
+ * A purchase order as a PDF, made with @react-pdf/renderer in the font the app ships (lib/pdf/fonts.ts), so sizes
+ * print as on screen (¾″, 18 mm): the shop and its details, the supplier, the lines at their unit costs and the total.
  */
-import path from 'node:path';
-import { Document, Font, Page, StyleSheet, Text, View, renderToBuffer } from '@react-pdf/renderer';
+import { Document, Page, StyleSheet, Text, View, renderToBuffer } from '@react-pdf/renderer';
 import { formatMoney } from '@/lib/costing/money';
-
-// The same IBM Plex Sans faces the quote PDF embeds (WOFF files kept beside it in lib/quotes/fonts).
-const FONT_DIR = path.join(process.cwd(), 'lib', 'quotes', 'fonts');
-let registered = false;
-function registerPdfFonts() {
-  if (registered) return;
-  Font.register({
-    family: 'Plex Sans PO',
-    fonts: [
-      { src: path.join(FONT_DIR, 'ibm-plex-sans-latin-400-normal.woff'), fontWeight: 400 },
-      { src: path.join(FONT_DIR, 'ibm-plex-sans-latin-600-normal.woff'), fontWeight: 600 },
-    ],
-  });
-  Font.registerHyphenationCallback((word) => [word]);
-  registered = true;
-}
+import { PDF_FONT_FAMILY, registerPdfFonts } from '@/lib/pdf/fonts';
 
 export interface PoPdfLine {
   description: string;
@@ -49,7 +33,7 @@ const ink = '#2b2a27';
 const mute = '#6b6862';
 const rule = '#d9d4c7';
 const s = StyleSheet.create({
-  page: { fontFamily: 'Plex Sans PO', fontSize: 9.5, color: ink, padding: 40, paddingBottom: 56 },
+  page: { fontFamily: PDF_FONT_FAMILY, fontSize: 9.5, color: ink, padding: 40, paddingBottom: 56 },
   head: { flexDirection: 'row', justifyContent: 'space-between', marginBottom: 18 },
   shop: { fontSize: 16, fontWeight: 600 },
   title: { fontSize: 13, fontWeight: 600, textAlign: 'right' },

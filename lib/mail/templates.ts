@@ -16,24 +16,32 @@ export function escapeHtml(s: string): string {
 
 const dateTime = (d: Date) => d.toLocaleString('en-GB', { dateStyle: 'long', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
 
-function layout(shopName: string, paragraphs: string[], button: { label: string; href: string } | null, after: string[]): string {
-  const p = (html: string) => `<p style="margin:0 0 16px;font-size:15px;line-height:1.5;color:#2b2a27">${html}</p>`;
+/** The frame every mail's HTML part sits in: the shop's name above, a white card, who sent it below. */
+export function mailFrame(shopName: string, bodyHtml: string, maxWidth = 560): string {
   return `<!doctype html>
 <html lang="en">
 <head><meta charset="utf-8"><meta name="viewport" content="width=device-width"><title>${escapeHtml(shopName)}</title></head>
 <body style="margin:0;padding:0;background:#f4f1ea">
-<div style="max-width:560px;margin:0 auto;padding:24px 16px;font-family:-apple-system,'Segoe UI',Helvetica,Arial,sans-serif">
+<div style="max-width:${maxWidth}px;margin:0 auto;padding:24px 16px;font-family:-apple-system,'Segoe UI',Helvetica,Arial,sans-serif">
 <div style="background:#ffffff;border:1px solid #e2ddd2;border-radius:8px;padding:24px">
 <p style="margin:0 0 20px;font-size:13px;letter-spacing:.04em;text-transform:uppercase;color:#7a766c">${escapeHtml(shopName)}</p>
-${paragraphs.map(p).join('\n')}
-${button ? `<p style="margin:24px 0"><a href="${escapeHtml(button.href)}" style="display:inline-block;background:#2b2a27;color:#ffffff;text-decoration:none;padding:12px 20px;border-radius:6px;font-size:15px;font-weight:600">${escapeHtml(button.label)}</a></p>
-<p style="margin:0 0 16px;font-size:13px;line-height:1.5;color:#7a766c">If the button does not work, copy this address into your browser:<br><span style="word-break:break-all;color:#2b2a27">${escapeHtml(button.href)}</span></p>
-` : ''}${after.map((a) => `<p style="margin:0 0 12px;font-size:13px;line-height:1.5;color:#7a766c">${a}</p>`).join('\n')}
+${bodyHtml}
 </div>
 <p style="margin:16px 0 0;font-size:12px;color:#7a766c;text-align:center">Sent by Kerfwise for ${escapeHtml(shopName)}.</p>
 </div>
 </body>
 </html>`;
+}
+
+function layout(shopName: string, paragraphs: string[], button: { label: string; href: string } | null, after: string[]): string {
+  const p = (html: string) => `<p style="margin:0 0 16px;font-size:15px;line-height:1.5;color:#2b2a27">${html}</p>`;
+  return mailFrame(
+    shopName,
+    `${paragraphs.map(p).join('\n')}
+${button ? `<p style="margin:24px 0"><a href="${escapeHtml(button.href)}" style="display:inline-block;background:#2b2a27;color:#ffffff;text-decoration:none;padding:12px 20px;border-radius:6px;font-size:15px;font-weight:600">${escapeHtml(button.label)}</a></p>
+<p style="margin:0 0 16px;font-size:13px;line-height:1.5;color:#7a766c">If the button does not work, copy this address into your browser:<br><span style="word-break:break-all;color:#2b2a27">${escapeHtml(button.href)}</span></p>
+` : ''}${after.map((a) => `<p style="margin:0 0 12px;font-size:13px;line-height:1.5;color:#7a766c">${a}</p>`).join('\n')}`,
+  );
 }
 
 export function inviteMail(input: { shopName: string; inviterName: string; personName: string; role: Role; link: string; expiresAt: Date }): RenderedMail {

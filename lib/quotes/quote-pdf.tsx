@@ -3,30 +3,13 @@
  * fractions print as on screen (19¾″). The customer's copy: shop, customer, lines at their prices, totals, deposit,
  * validity, terms and, once the quote has a customer's page, a QR code and link to it. Never cost, margin or hours.
  */
-import path from 'node:path';
-import { Document, Font, Image, Page, StyleSheet, Text, View, renderToBuffer } from '@react-pdf/renderer';
+import { Document, Image, Page, StyleSheet, Text, View, renderToBuffer } from '@react-pdf/renderer';
 import QRCode from 'qrcode';
 import { formatMoney } from '@/lib/costing/money';
+import { PDF_FONT_FAMILY, registerPdfFonts } from '@/lib/pdf/fonts';
 import type { QuoteTotals } from '@/lib/costing/quote-totals';
 import type { QuoteLine } from '@/shared/schemas/quote';
 
-// The app's IBM Plex Sans (app/fonts holds its WOFF2 for the browser); the PDF embeds the same faces from their WOFF
-// files (fontkit reads WOFF reliably; the WOFF2 subset fails to parse), copied from @fontsource/ibm-plex-sans.
-const FONT_DIR = path.join(process.cwd(), 'lib', 'quotes', 'fonts');
-let registered = false;
-function registerFonts() {
-  if (registered) return;
-  Font.register({
-    family: 'Plex Sans',
-    fonts: [
-      { src: path.join(FONT_DIR, 'ibm-plex-sans-latin-400-normal.woff'), fontWeight: 400 },
-      { src: path.join(FONT_DIR, 'ibm-plex-sans-latin-600-normal.woff'), fontWeight: 600 },
-    ],
-  });
-  // Words are never broken with hyphens the customer did not write.
-  Font.registerHyphenationCallback((word) => [word]);
-  registered = true;
-}
 
 export interface QuotePdfInput {
   shop: { name: string };
@@ -51,7 +34,7 @@ const ink = '#2b2a27';
 const mute = '#6b6862';
 const rule = '#d9d4c7';
 const s = StyleSheet.create({
-  page: { fontFamily: 'Plex Sans', fontSize: 9.5, color: ink, padding: 40, paddingBottom: 56 },
+  page: { fontFamily: PDF_FONT_FAMILY, fontSize: 9.5, color: ink, padding: 40, paddingBottom: 56 },
   head: { flexDirection: 'row', justifyContent: 'space-between', marginBottom: 18 },
   shop: { fontSize: 16, fontWeight: 600 },
   title: { fontSize: 13, fontWeight: 600, textAlign: 'right' },
@@ -155,7 +138,7 @@ function QuoteDocument({ q, qr }: { q: QuotePdfInput; qr: string | null }) {
 }
 
 export async function quotePdf(q: QuotePdfInput): Promise<Buffer> {
-  registerFonts();
+  registerPdfFonts();
   const qr = q.customerLink ? await QRCode.toDataURL(q.customerLink, { margin: 1, width: 240, errorCorrectionLevel: 'M' }) : null;
   return renderToBuffer(<QuoteDocument q={q} qr={qr} />);
 }

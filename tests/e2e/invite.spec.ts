@@ -1,19 +1,6 @@
-import { listCaughtMail, type CaughtMail } from '../../lib/mail/caught';
-import { E2E_MAIL } from './support/server';
 import { shot, signIn } from './support/session';
 import { expect, test } from './support/test';
-
-/** The mail the catcher stored for this address, once it has arrived. */
-async function mailFor(to: string): Promise<CaughtMail> {
-  let found: CaughtMail | undefined;
-  await expect
-    .poll(async () => {
-      found = (await listCaughtMail(E2E_MAIL)).find((m) => m.to.includes(to));
-      return Boolean(found);
-    }, { message: `an invite mail to ${to} in ${E2E_MAIL}`, timeout: 20_000 })
-    .toBe(true);
-  return found!;
-}
+import { mailFor } from './support/mail';
 
 test('the owner invites a new cutter; the link in the e-mail lets them choose a password, sign in, and see the shop floor', async ({ page, browser }) => {
   await page.setViewportSize({ width: 1440, height: 900 });

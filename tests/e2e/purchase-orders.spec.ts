@@ -1,20 +1,7 @@
-import { listCaughtMail, type CaughtMail } from '../../lib/mail/caught';
-import { E2E_MAIL } from './support/server';
 import { saveDraftPlan } from './support/plans';
 import { shot, signIn } from './support/session';
 import { expect, test, type Page } from './support/test';
-
-/** The mail the catcher stored for this address and subject, once it has arrived. */
-async function mailFor(to: string, subject: RegExp): Promise<CaughtMail> {
-  let found: CaughtMail | undefined;
-  await expect
-    .poll(async () => {
-      found = (await listCaughtMail(E2E_MAIL)).find((m) => m.to.includes(to) && subject.test(m.subject));
-      return Boolean(found);
-    }, { message: `a mail to ${to} in ${E2E_MAIL}`, timeout: 20_000 })
-    .toBe(true);
-  return found!;
-}
+import { mailFor } from './support/mail';
 
 const noSideScroll = async (page: Page) => expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
 

@@ -1,23 +1,10 @@
-import { listCaughtMail, type CaughtMail } from '../../lib/mail/caught';
 import { pageOverflow } from './support/layout-checks';
 import { saveDraftPlan } from './support/plans';
-import { E2E_MAIL } from './support/server';
 import { shot, signIn } from './support/session';
 import { expect, test, type Page } from './support/test';
+import { mailFor } from './support/mail';
 
 const WIDTHS = [1440, 820, 390] as const;
-
-/** The mail the catcher stored for this address with this subject, once it has arrived. */
-async function mailFor(to: string, subject: RegExp): Promise<CaughtMail> {
-  let found: CaughtMail | undefined;
-  await expect
-    .poll(async () => {
-      found = (await listCaughtMail(E2E_MAIL)).find((m) => m.to.includes(to) && subject.test(m.subject));
-      return Boolean(found);
-    }, { message: `a mail to ${to} matching ${subject}`, timeout: 20_000 })
-    .toBe(true);
-  return found!;
-}
 
 /** A job of its own for a new customer with an e-mail address, with a small cut list in the demo's ¾″ Baltic birch. */
 async function jobForNewCustomer(page: Page, name: string, email: string) {
