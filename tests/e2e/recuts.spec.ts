@@ -81,6 +81,9 @@ test('a damaged part goes on the re-cut list, is nested on an offcut and cut, an
   // Nest, save and release: the job is being cut.
   await estimator.getByRole('navigation', { name: 'Job sections' }).getByRole('link', { name: 'Plan' }).click();
   await expect(estimator.getByRole('table', { name: 'Re-cuts' })).toHaveCount(0);
+  // This spec is about re-cuts: nested with no saw profile, in the panel style, so the offcuts are the ones the parts
+  // leave on a whole sheet (the saws' own plans are in saw-order.spec.ts).
+  await estimator.getByLabel('Cut on').selectOption('');
   await estimator.getByLabel('Search for (seconds)').fill('1');
   await estimator.getByRole('button', { name: 'Nest 5 parts' }).click();
   await expect(estimator.getByTestId('plan-summary')).toBeVisible({ timeout: 30_000 });
@@ -140,6 +143,7 @@ test('a damaged part goes on the re-cut list, is nested on an offcut and cut, an
   await estimator.setViewportSize(DESK);
   await estimator.getByRole('link', { name: 'Nest the re-cuts' }).click();
   await expect(estimator.getByRole('heading', { name: 'Nest the re-cuts' })).toBeVisible();
+  await estimator.getByLabel('Cut on').selectOption('');
   await estimator.getByLabel('Search for (seconds)').fill('1');
   await estimator.getByRole('button', { name: 'Nest 1 re-cut' }).click();
   const summary = estimator.getByTestId('plan-summary');

@@ -121,9 +121,7 @@ test('part tags print one per part on a chosen label sheet, and a tag leads to i
 test('the estimator nests the kitchen on the shop’s saws (track saw breaking down, cabinet saw after) and the saw order names the saw of every cut', async ({ page }) => {
   test.setTimeout(120_000);
   await signIn(page, 'estimator');
-  const jobs: { id: string; name: string }[] = await (await page.request.get('/api/jobs')).json();
-  const kitchen = jobs.find((j) => j.name === 'Hollis kitchen')!;
-  await page.goto(`/jobs/${kitchen.id}/plan`);
+  await page.goto(`/jobs/${await jobId(page, 'Hollis kitchen')}/plan`);
   // The defaults: the cabinet saw, with the track saw breaking the sheets down.
   await expect(page.getByLabel('Cut on')).toHaveValue(/.+/);
   await expect(page.getByLabel('Cut on').locator('option:checked')).toHaveText(/Cabinet saw/);
