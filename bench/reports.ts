@@ -1,6 +1,7 @@
 /**
  * `npm run bench:reports` — the owner's reports on a large shop: 10,000 finished plans over two years (three stock
- * pieces and eight parts a plan, an offcut racked by each) and 200,000 stock movements, in the embedded database
+ * pieces and eight parts a plan, an offcut racked by each), 200,000 stock movements and 5,000 quotes (a quarter each
+ * accepted with the deposit paid, declined, expired, and still out), in the embedded database
  * (or the PostgreSQL server in BENCH_DATABASE_URL). Prints the median of five runs of each report for a year by
  * month and a quarter by week. Target (issue 15): every report under 300 ms.
  */
@@ -8,10 +9,12 @@ import { loadavg } from 'node:os';
 import { sql } from 'drizzle-orm';
 import { openDatabase } from '@/db/open';
 import { offcutUse, oldOffcuts, stockValueReport, yieldOverTime, type ReportFilter } from '@/db/queries/reports';
-import { jobs, shops } from '@/db/schema';
+import { quotingReport } from '@/db/queries/quoting-report';
+import { customers, jobs, shops } from '@/db/schema';
 
 const PLANS = 10_000;
 const MOVEMENTS = 200_000;
+const QUOTES = 5_000;
 const TARGET_MS = 300;
 const log = (s = '') => process.stdout.write(`${s}\n`);
 
@@ -19,7 +22,8 @@ async function main() {
   const handle = await openDatabase(process.env.BENCH_DATABASE_URL ? { url: process.env.BENCH_DATABASE_URL, migrate: true } : { dataDir: 'memory://', migrate: true });
   const { db } = handle;
   const [shop] = await db.insert(shops).values({ name: 'Bench shop', timeZone: 'America/Chicago' }).returning();
-  const [job] = await db.insert(jobs).values({ shopId: shop.id, name: 'Bench job' }).returning();
+  const [customer] = await db.insert(customers).values({ shopId: shop.id, name: 'Bench customer' }).returning();
+  const [job] = await db.insert(jobs).values({ shopId: shop.id, name: 'Bench job', customerId: customer.id }).returning();
   const started = performance.now();
   // Deterministic spreads (no randomness): plan i finished i × 6,307 s after 2025-01-01, materials round-robin.
   await db.execute(sql`
@@ -55,8 +59,26 @@ async function main() {
            timestamptz '2025-01-01T12:00:00Z' + (j * 315) * interval '1 second'
       from generate_series(1, ${MOVEMENTS}) j
       join lateral (select id from stock_items where shop_id = ${shop.id} order by id offset (j % 40) limit 1) s on true`);
+  // Quote i sent i × 12,614 s after 2025-01-01 (two years), answered three days later, the deposit paid the day after.
+  const lines = JSON.stringify([
+    { id: 'm-1', kind: 'material', description: 'Maple ply ¾″, 96″ × 48″ (from stock)', quantity: 3, unit: 'sheet', unitCostMinor: 9400, taxable: true, note: '' },
+    { id: 'm-2', kind: 'material', description: 'Spoilage allowance (15 % of material, once)', quantity: 1, unit: 'lot', unitCostMinor: 4230, taxable: true, note: '' },
+    { id: 'l-1', kind: 'labour', description: 'Saw time', quantity: 0.96, unit: 'h', unitCostMinor: 6500, taxable: false, note: '' },
+  ]);
+  await db.execute(sql`
+    insert into quotes (shop_id, job_id, number, created_at)
+    select ${shop.id}, ${job.id}, i, timestamptz '2025-01-01T12:00:00Z' + (i * 12614) * interval '1 second' from generate_series(1, ${QUOTES}) i`);
+  await db.execute(sql`
+    insert into quote_revisions (shop_id, quote_id, job_id, revision, status, currency, lines, markup_material_percent, markup_hardware_percent, discount, tax_percent, deposit_percent, validity_days, terms, sent_at, valid_until, answered_at, accepted_name)
+    select q.shop_id, q.id, q.job_id, 0, (array['sent','accepted','declined','expired']::quote_revision_status[])[1 + q.number % 4], 'USD', ${lines}::jsonb, 30, 20, '{"kind":"percent","percent":0}'::jsonb, 8.25, 50, 30, 'Terms.',
+           q.created_at, (q.created_at + interval '30 days')::date, case when q.number % 4 in (1, 2) then q.created_at + interval '3 days' end, case when q.number % 4 = 1 then 'Bench customer' end
+      from quotes q where q.shop_id = ${shop.id}`);
+  await db.execute(sql`
+    insert into quote_payments (shop_id, revision_id, job_id, checkout_session_id, amount_minor, currency, status, paid_at)
+    select r.shop_id, r.id, r.job_id, 'cs_bench_' || r.id, 25000, 'USD', 'paid', r.answered_at + interval '1 day'
+      from quote_revisions r where r.shop_id = ${shop.id} and r.status = 'accepted'`);
   await db.execute(sql`analyze`);
-  log(`Seeded ${PLANS.toLocaleString('en-US')} finished plans, ${(PLANS * 3).toLocaleString('en-US')} pieces, ${(PLANS * 24).toLocaleString('en-US')} placements, ${PLANS.toLocaleString('en-US')} offcuts and ${MOVEMENTS.toLocaleString('en-US')} movements in ${((performance.now() - started) / 1000).toFixed(1)} s (${process.env.BENCH_DATABASE_URL ? 'PostgreSQL' : 'embedded PGlite'}).`);
+  log(`Seeded ${PLANS.toLocaleString('en-US')} finished plans, ${(PLANS * 3).toLocaleString('en-US')} pieces, ${(PLANS * 24).toLocaleString('en-US')} placements, ${PLANS.toLocaleString('en-US')} offcuts and ${MOVEMENTS.toLocaleString('en-US')} movements and ${QUOTES.toLocaleString('en-US')} quotes in ${((performance.now() - started) / 1000).toFixed(1)} s (${process.env.BENCH_DATABASE_URL ? 'PostgreSQL' : 'embedded PGlite'}).`);
 
   const year: ReportFilter = { shopId: shop.id, timeZone: 'America/Chicago', by: 'month', from: '2026-01-01', to: '2026-12-31' };
   const quarter: ReportFilter = { ...year, by: 'week', from: '2026-07-01', to: '2026-09-30', material: 'Maple ply' };
@@ -66,6 +88,8 @@ async function main() {
     ['Offcut use, a year by month', () => offcutUse(db, year)],
     ['Stock value, a year by month', () => stockValueReport(db, year)],
     ['Stock value, a quarter by week, one material', () => stockValueReport(db, quarter)],
+    ['Quoting, a year by month', () => quotingReport(db, year)],
+    ['Yield over time, a year by month, one customer', () => yieldOverTime(db, { ...year, customerId: customer.id })],
     ['Old offcuts (6 months)', () => oldOffcuts(db, { shopId: shop.id, timeZone: 'America/Chicago', months: 6, now: new Date('2026-12-03T12:00:00Z') })],
   ];
   log('');

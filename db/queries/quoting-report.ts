@@ -54,15 +54,24 @@ export async function quotingReport(db: Db, f: ReportFilter): Promise<{ periods:
         ) e
        where ${inRange(at, f)}
        group by 1`),
+    // Each job's finished plans summed once (a job may have many plans and several accepted quotes).
     db.execute(sql`
-      select ${periodOf(sql.raw('r.answered_at'), f)} as period, j.id as job_id, j.name as job_name, q.number, r.revision,
-             to_char(r.answered_at at time zone ${f.timeZone}, 'YYYY-MM-DD') as accepted_on, r.currency, r.lines,
-             r.markup_material_percent, r.markup_hardware_percent, r.discount, r.tax_percent, r.deposit_percent,
-             (select sum(p.cost_cents) from plans p where p.job_id = j.id and p.status = 'done')::bigint as used,
-             (select count(*) from plans p where p.job_id = j.id and p.status = 'done')::int as finished
-        from quote_revisions r join quotes q on q.id = r.quote_id join jobs j on j.id = r.job_id
-       where r.shop_id = ${f.shopId} and r.status = 'accepted' and ${inRange(sql.raw('r.answered_at'), f)} ${jobIs(sql.raw('r.job_id'), f)}
-       order by r.answered_at`),
+      with accepted as (
+        select ${periodOf(sql.raw('r.answered_at'), f)} as period, j.id as job_id, j.name as job_name, q.number, r.revision, r.answered_at,
+               to_char(r.answered_at at time zone ${f.timeZone}, 'YYYY-MM-DD') as accepted_on, r.currency, r.lines,
+               r.markup_material_percent, r.markup_hardware_percent, r.discount, r.tax_percent, r.deposit_percent
+          from quote_revisions r join quotes q on q.id = r.quote_id join jobs j on j.id = r.job_id
+         where r.shop_id = ${f.shopId} and r.status = 'accepted' and ${inRange(sql.raw('r.answered_at'), f)} ${jobIs(sql.raw('r.job_id'), f)}
+      ),
+      used as (
+        select p.job_id, sum(p.cost_cents)::bigint as used, count(*)::int as finished
+          from plans p
+         where p.shop_id = ${f.shopId} and p.status = 'done' and p.job_id in (select job_id from accepted)
+         group by p.job_id
+      )
+      select a.*, u.used, coalesce(u.finished, 0) as finished
+        from accepted a left join used u on u.job_id = a.job_id
+       order by a.answered_at`),
   ]);
 
   const periods = new Map<string, QuotingPeriod>();
