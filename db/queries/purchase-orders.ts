@@ -3,7 +3,7 @@ import type { Db } from '../open';
 import { plans, purchaseOrderLines, purchaseOrders, shops, stockItems, stockMovements, suppliers } from '../schema';
 import { conflict, HttpError, notFound } from '@/lib/api/errors';
 import { groupBySupplier, lowStockOrders, piecesToBuy, type SupplierOrder } from '@/lib/buying/order-lines';
-import { poNumber, type PoStatus } from '@/lib/buying/describe';
+import { poNumber, type DescribedSize, type PoStatus } from '@/lib/buying/describe';
 import { costEachCents } from '@/lib/stock/pricing';
 import { quoteNominal } from '@/lib/quotes/quote-text';
 import { isLowStock } from '@/lib/stock/low-stock';
@@ -14,17 +14,10 @@ import { getTakeoff } from './takeoff';
 /** Statuses of an order still to come in: its sizes are "on order". */
 export const OPEN_STATUSES = ['draft', 'sent', 'part-received'] as const satisfies readonly PoStatus[];
 
-export interface PurchaseOrderLineView {
+/** A line of an order: the stock size it is for (as `describeSize` reads it) and its figures. */
+export interface PurchaseOrderLineView extends DescribedSize {
   id: string;
   stockItemId: string;
-  kind: 'sheet' | 'board';
-  material: string;
-  nominalThickness: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
-  surfacing: string;
-  grade: string;
   /** The stock room's cost now (each, or per board foot), to compare with the order's. */
   stockCostCents: number;
   onHand: number;

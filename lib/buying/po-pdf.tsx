@@ -4,7 +4,8 @@
  */
 import { Document, Page, StyleSheet, Text, View, renderToBuffer } from '@react-pdf/renderer';
 import { formatMoney } from '@/lib/costing/money';
-import { PDF_FONT_FAMILY, registerPdfFonts } from '@/lib/pdf/fonts';
+import { registerPdfFonts } from '@/lib/pdf/fonts';
+import { PDF_BASE_STYLES, PDF_INK } from '@/lib/pdf/styles';
 
 export interface PoPdfLine {
   description: string;
@@ -29,24 +30,10 @@ export interface PoPdfInput {
   pageSize: 'LETTER' | 'A4';
 }
 
-const ink = '#2b2a27';
-const mute = '#6b6862';
-const rule = '#d9d4c7';
+const ink = PDF_INK;
 const s = StyleSheet.create({
-  page: { fontFamily: PDF_FONT_FAMILY, fontSize: 9.5, color: ink, padding: 40, paddingBottom: 56 },
-  head: { flexDirection: 'row', justifyContent: 'space-between', marginBottom: 18 },
-  shop: { fontSize: 16, fontWeight: 600 },
-  title: { fontSize: 13, fontWeight: 600, textAlign: 'right' },
-  muted: { color: mute },
-  row: { flexDirection: 'row', borderBottomWidth: 0.5, borderBottomColor: rule, paddingVertical: 4 },
-  th: { fontWeight: 600, color: mute, fontSize: 8.5 },
-  item: { flex: 1, paddingRight: 8 },
-  qty: { width: 40, textAlign: 'right' },
+  ...PDF_BASE_STYLES,
   unit: { width: 95, textAlign: 'right' },
-  amount: { width: 80, textAlign: 'right' },
-  strong: { fontWeight: 600 },
-  block: { marginTop: 16 },
-  footer: { position: 'absolute', bottom: 24, left: 40, right: 40, fontSize: 8, color: mute, flexDirection: 'row', justifyContent: 'space-between' },
 });
 
 const bf = (n: number) => (Math.round(n * 100) / 100).toLocaleString('en-US', { maximumFractionDigits: 2 });
