@@ -19,7 +19,7 @@ export default defineConfig({
     trace: 'off',
     viewport: { width: 1360, height: 860 },
     // What a browser sends with its own pages' requests; API calls made with page.request carry it too, so the
-    // server's same-origin check (lib/api/request-guard.ts) sees them as the app's own. A spec that plays another
+    // server's same-origin check (server/api/request-guard.ts) sees them as the app's own. A spec that plays another
     // site overrides it per request.
     extraHTTPHeaders: { origin: E2E_URL },
     launchOptions: {

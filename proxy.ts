@@ -37,7 +37,7 @@ export default async function proxy(req: NextRequest, event: NextFetchEvent) {
 }
 
 export const config = {
-  // Pages only: API routes set their own headers (lib/api/route.ts) and must not pass through a proxy that would
+  // Pages only: API routes set their own headers (server/api/route.ts) and must not pass through a proxy that would
   // buffer their bodies. Prefetches of a page need no policy of their own.
   matcher: [
     {

@@ -13,6 +13,9 @@ export default defineConfig({
     // Explicit, so Playwright specs under tests/e2e are never collected here.
     include: [
       'lib/**/*.test.ts',
+      'server/**/*.test.ts',
+      'client/**/*.test.ts',
+      'bench/**/*.test.ts',
       'shared/**/*.test.ts',
       'db/**/*.test.ts',
       'components/**/*.test.{ts,tsx}',
@@ -22,7 +25,7 @@ export default defineConfig({
       'tests/integration/**/*.test.ts',
     ],
     environment: 'node',
-    // Request log lines (lib/log.ts) would bury the test output; tests that read them send them to a stream.
+    // Request log lines (server/log.ts) would bury the test output; tests that read them send them to a stream.
     env: { LOG_LEVEL: 'silent' },
     testTimeout: 30_000,
     hookTimeout: 60_000,

@@ -8,7 +8,7 @@ import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg } from 'node:os';
 import path from 'node:path';
 import { ZodError } from 'zod';
-import { parseInstances } from '@/lib/nesting/instances';
+import { parseInstances } from '@/bench/instances';
 import { CLASS_NAMES, DEFAULT_BUDGET_MS, parseBenchArgs, type BenchArgs } from './args';
 import { fixed, table, thousands } from './format';
 import { SCALING_SIZES, runScaling, warmUp, type ScalingResult } from './scaling';

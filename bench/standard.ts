@@ -5,9 +5,9 @@
  * separated by straight through-cuts.
  */
 import { dellAmicoMartelloVigo, lowerBound, martelloVigoL2 } from '@/lib/nesting/bounds';
-import { maxRectsLayout } from '@/lib/nesting/bounds/maxrects-reference';
+import { maxRectsLayout } from '@/bench/bounds/maxrects-reference';
 import { findGuillotineTree } from '@/lib/nesting/guillotine';
-import type { BinPackingInstance } from '@/lib/nesting/instances';
+import type { BinPackingInstance } from '@/bench/instances';
 import { packGuillotine } from '@/lib/nesting/pack';
 import { checkPackResult } from '@/lib/nesting/pack/result-check';
 import type { BinType, PackItem, PackOptions } from '@/lib/nesting/pack/types';

@@ -1,10 +1,10 @@
 import { serverEnv } from '@/lib/env';
 import { mailConfig } from '@/lib/mail/config';
-import { startMailService, stopMailService } from '@/lib/mail/service';
+import { startMailService, stopMailService } from '@/server/mail/service';
 import { paymentsConfig } from '@/lib/payments/config';
-import { startQuoteExpiry, stopQuoteExpiry } from '@/lib/quotes/expiry';
+import { startQuoteExpiry, stopQuoteExpiry } from '@/server/quotes/expiry';
 import path from 'node:path';
-import { startDigestScheduler, stopDigestScheduler } from '@/lib/buying/digest-service';
+import { startDigestScheduler, stopDigestScheduler } from '@/server/buying/digest-service';
 import { closeDb, getDbHandle } from './client';
 import { serveLiveBackups, type LiveBackupServer } from './live-backup';
 

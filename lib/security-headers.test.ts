@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { contentSecurityPolicy, isHttps, newNonce, securityHeaders } from './security-headers';
-import { secureCookies } from './auth/options';
+import { secureCookies } from '../server/auth/options';
 
 // Directive names and values as the W3C's Content Security Policy Level 3 defines them; header names and values
 // from MDN's HTTP headers reference (X-Content-Type-Options, Referrer-Policy, Permissions-Policy,

@@ -10,9 +10,9 @@ import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { openDatabase } from '@/db/open';
-import { startMailCatcher } from '@/lib/mail/catcher';
+import { startMailCatcher } from '@/server/mail/catcher';
 import { newWebhookSecret } from '@/lib/payments/config';
-import { startPaymentsFake } from '@/lib/payments/fake';
+import { startPaymentsFake } from '@/server/payments/fake';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoShop } from './demo-shop';
 
 const dataDir = path.resolve(process.env.KERFWISE_DATA_DIR ?? './data');

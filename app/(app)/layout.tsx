@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { eq } from 'drizzle-orm';
 import { getDb } from '@/db/client';
 import { shops } from '@/db/schema';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { ROLE_LABELS } from '@/lib/auth/permissions';
 import { navFor } from '@/lib/nav';
 import { Logo } from '@/components/shell/logo';

@@ -1,5 +1,5 @@
 import { redirect } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { homeFor } from '@/lib/nav';
 
 export default async function Home() {

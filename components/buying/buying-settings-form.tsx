@@ -3,7 +3,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 
 export function BuyingSettingsForm({ initial, timeZone }: { initial: { purchaseOrderDetails: string; lowStockDigestTime: string }; timeZone: string }) {
   const router = useRouter();

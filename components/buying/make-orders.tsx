@@ -3,7 +3,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 
 interface Made {
   orders: { id: string; title: string; supplier: string }[];

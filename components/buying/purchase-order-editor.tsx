@@ -3,7 +3,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import { formatMoney, toMinorUnits, minorPerMajor } from '@/lib/costing/money';
 
 export interface EditorSize {

@@ -1,7 +1,7 @@
 'use client';
 
 import { useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 import type { Customer } from '@/shared/schemas/customer';
 
 /**

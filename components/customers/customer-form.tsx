@@ -3,7 +3,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import type { Customer } from '@/shared/schemas/customer';
 
 const FIELDS = [

@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import { useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
-import { ApiError } from '@/lib/client/api';
+import { ApiError } from '@/client/api';
 import { cutListTotals } from '@/lib/cut-list/totals';
 import { offersOf, snapThickness, stockMatchWarning, type StockOffer } from '@/lib/cut-list/stock-match';
 import { formatArea } from '@/lib/units/format-area';

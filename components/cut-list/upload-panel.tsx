@@ -2,11 +2,11 @@
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import { guessMapping, looksLikeHeader, TEMPLATE_COLUMNS } from '@/lib/cut-list/column-mapping';
 import { detectUnit } from '@/lib/cut-list/detect-unit';
 import { UPLOAD_LIMITS } from '@/lib/cut-list/limits';
-import { readCutListFileInWorker } from '@/lib/client/spreadsheet-worker';
+import { readCutListFileInWorker } from '@/client/spreadsheet-worker';
 import { importSummary } from '@/lib/cut-list/import-summary';
 import { toUploadRows } from '@/lib/cut-list/upload-rows';
 import { countOf } from '@/lib/plural';

@@ -1,7 +1,7 @@
 'use client';
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 import type { StockOffer } from '@/lib/cut-list/stock-match';
 import type { Part, PartInput, PartPatch } from '@/shared/schemas/part';
 

@@ -4,7 +4,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
 import { partsKey, useMaterials } from '@/components/cut-list/use-parts';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 import { JOINT_NAMES } from '@/lib/joinery';
 import { formatLength } from '@/lib/units/format-length';
 import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';

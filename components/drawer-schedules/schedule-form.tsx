@@ -5,7 +5,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import Link from 'next/link';
 import { useEffect, useMemo, useRef } from 'react';
 import { useForm, useWatch, type Path } from 'react-hook-form';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import { defaultSetupCard, DRAWER_DEFAULTS, findSetupCard, JOINT_NAMES, sizeDrawerSchedule } from '@/lib/joinery';
 import { formatLength } from '@/lib/units/format-length';
 import { drawerScheduleSchema, JOINT_METHODS, type DrawerSchedule } from '@/shared/schemas/drawer-schedule';

@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { usePathname, useSearchParams } from 'next/navigation';
 import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 import { JOB_STATUS_FILTERS } from '@/lib/jobs/status-filter';
 import type { JobSummary } from '@/shared/schemas/job';
 import { JOB_PAGE_SIZES, jobListQuerySchema, jobListSearch, type JobListPage, type JobListQuery, type JobSortColumn } from '@/shared/schemas/job-list';

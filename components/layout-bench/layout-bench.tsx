@@ -7,7 +7,7 @@ import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent }
 import { useStore } from 'zustand';
 import { NestProgressBar } from '@/components/nesting/nest-progress';
 import { useNestingWorker } from '@/components/nesting/use-nesting-worker';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import { docToPlan, planToDoc, type PartInfo } from '@/lib/layout-bench/document';
 import { prepareRenest } from '@/lib/layout-bench/renest';
 import { createBenchStore, hasUnsavedChanges, mayRotate, type BenchStore } from '@/lib/layout-bench/store';

@@ -1,7 +1,7 @@
 'use client';
 
 import { useEffect, useRef, useState } from 'react';
-import { startBenchCheckWorker, type BenchCheckWorker } from '@/lib/client/bench-check-worker';
+import { startBenchCheckWorker, type BenchCheckWorker } from '@/client/bench-check-worker';
 import type { BenchDoc } from '@/lib/layout-bench/document';
 import { checkDoc, type LiveCheck } from '@/lib/layout-bench/live-check';
 import type { NestRequest } from '@/shared/schemas/nesting';

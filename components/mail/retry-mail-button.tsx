@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 
 export function RetryMailButton({ id, subject }: { id: string; subject: string }) {
   const router = useRouter();

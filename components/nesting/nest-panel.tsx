@@ -7,7 +7,7 @@ import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import { formatMoney } from '@/lib/money';
 import { formatLength } from '@/lib/units/format-length';
 import { cuttingStyleSchema, objectiveSchema, type NestRequestInput, type NestStock, type Plan } from '@/shared/schemas/nesting';

@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { EmptyState } from '@/components/ui/empty-state';
 import { StatusBadge, type Tone } from '@/components/ui/status-badge';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 import { formatMoney } from '@/lib/money';
 import type { JobPlanSummary } from '@/db/queries/plan-drafts';
 import { formatShopDateTime } from '@/lib/dates/shop-time';

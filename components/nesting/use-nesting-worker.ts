@@ -1,7 +1,7 @@
 'use client';
 
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { startNestingWorker, type NestingWorker } from '@/lib/client/nesting-worker';
+import { startNestingWorker, type NestingWorker } from '@/client/nesting-worker';
 import type { NestOutcome, NestProgress } from '@/lib/nesting/worker-api';
 
 /** One nesting worker for the component's life: run, progress (best plan so far), cancel. */

@@ -3,7 +3,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 
 /** Makes a new quote from one of the job's plans (material and saw time) or from none. */
 export function NewQuoteForm({ jobId, plans }: { jobId: string; plans: { id: string; name: string; status: string }[] }) {

@@ -3,7 +3,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import { formatMoney, toMinorUnits } from '@/lib/costing/money';
 import { quoteTotals, type QuoteTotals } from '@/lib/costing/quote-totals';
 import { moneyText } from '@/components/settings/pricing-form-values';

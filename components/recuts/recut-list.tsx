@@ -7,7 +7,7 @@ import { useState } from 'react';
 import { ActionError } from '@/components/stock/field';
 import { EmptyState } from '@/components/ui/empty-state';
 import { StatusBadge, type Tone } from '@/components/ui/status-badge';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { recutLabel } from '@/lib/recuts/recuts';
 import { formatLength } from '@/lib/units/format-length';

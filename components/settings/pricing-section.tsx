@@ -3,7 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import { formatMoney, toMinorUnits } from '@/lib/costing/money';
 import type { HardwareItem, PricingSettings } from '@/shared/schemas/pricing';
 import { moneyText, PRICING_FIELDS, pricingFormText, readPricingForm, type PricingFormText } from './pricing-form-values';

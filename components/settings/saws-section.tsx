@@ -3,7 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import type { ShopSettings } from '@/shared/schemas/shop';
 import type { Saw } from '@/shared/schemas/saw';
 import type { ShopUnits } from '@/shared/schemas/units';

@@ -2,7 +2,7 @@
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import type { ShopSettings } from '@/shared/schemas/shop';
 import { timeZoneChoices } from '@/lib/dates/shop-time';
 import { LENGTH_FIELDS, readSettingsForm, settingsFormText, UNIT_CHOICES, type SettingsFormText } from './settings-form-values';

@@ -5,7 +5,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import { DEFAULT_LOCK_RABBET_CARDS, findSetupCard, JOINT_NAMES } from '@/lib/joinery';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { parseLength } from '@/lib/units/parse-length';

@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef, useState } from 'react';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import { NARROW_HOW } from '@/lib/saw-order/describe-step';
 import type { PieceView } from '@/lib/saw-order/piece-views';
 import { sawProgress } from '@/lib/saw-order/progress';

@@ -4,7 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useRef } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { ApiError } from '@/lib/client/api';
+import { ApiError } from '@/client/api';
 import { STOCK_DETAIL_FIELDS, stockItemPatchSchema, type StockDetailField, type StockItemPatch } from '@/shared/schemas/stock';
 import { ActionError, Field } from './field';
 import { centsForInput, moneyInput, wholeInput } from './form-fields';

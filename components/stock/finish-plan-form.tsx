@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
-import { api } from '@/lib/client/api';
+import { api } from '@/client/api';
 import { RECUT_REASONS } from '@/lib/recuts/recuts';
 import { formatLength } from '@/lib/units/format-length';
 import { JOB_STATUS_LABELS, type JobStatus } from '@/shared/schemas/job';

@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
-import { ApiError } from '@/lib/client/api';
+import { ApiError } from '@/client/api';
 import type { MissingPiece as Missing } from '@/shared/schemas/stock';
 
 /**

@@ -4,7 +4,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/auth/permissions';
-import { api, ApiError } from '@/lib/client/api';
+import { api, ApiError } from '@/client/api';
 import type { TeamMember } from '@/shared/schemas/user';
 
 export function TeamManager({ selfId }: { selfId: string }) {

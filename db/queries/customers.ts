@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, ilike, or, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs } from '../schema';
-import { HttpError } from '@/lib/api/errors';
+import { HttpError } from '@/server/api/errors';
 import type { Customer, CustomerInput, CustomerPatch } from '@/shared/schemas/customer';
 import type { JobStatus } from '@/shared/schemas/job';
 import { recordAudit } from './audit';

@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, parts, plans, stockMovements } from '../schema';
-import { HttpError } from '@/lib/api/errors';
+import { HttpError } from '@/server/api/errors';
 import type { Role } from '@/lib/auth/permissions';
 import { refuseManualStatus, acceptedAtAfter } from '@/lib/jobs/status';
 import { JOB_STATUSES, type JobInput, type JobPatch, type JobSummary } from '@/shared/schemas/job';

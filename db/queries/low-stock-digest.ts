@@ -5,7 +5,7 @@ import { digestDue, digestSizes } from '@/lib/buying/digest';
 import { describeSize } from '@/lib/buying/describe';
 import { lowStockDigestMail } from '@/lib/buying/mail';
 import { appBaseUrl } from '@/lib/mail/config';
-import { enqueueMail } from '@/lib/mail/outbox';
+import { enqueueMail } from '@/server/mail/outbox';
 import { OPEN_STATUSES } from './purchase-orders';
 
 export interface DigestOutcome {

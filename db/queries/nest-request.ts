@@ -9,7 +9,7 @@ import { getShopSettings } from './shops';
 import { listParts } from './parts';
 import { openRecuts } from './recuts';
 import { listSaws } from './saws';
-import { HttpError } from '@/lib/api/errors';
+import { HttpError } from '@/server/api/errors';
 import type { NestSaw } from '@/shared/schemas/saw';
 
 /**

@@ -10,7 +10,7 @@ import { recordAudit } from './audit';
 import { syncJobStatus } from './job-status';
 import { getShopSettings } from './shops';
 import { closeRecuts, holdRecutsForPlan, recordDamagedPieces, reopenRecuts } from './recuts';
-import { HttpError } from '@/lib/api/errors';
+import { HttpError } from '@/server/api/errors';
 import type { JobStatus } from '@/shared/schemas/job';
 
 /**

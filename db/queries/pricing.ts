@@ -1,7 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { Db } from '../open';
 import { hardwareItems, shops } from '../schema';
-import { conflict } from '@/lib/api/errors';
+import { conflict } from '@/server/api/errors';
 import { DEFAULT_PRICING, pricingSettingsSchema, type HardwareItem, type HardwareItemInput, type PricingSettings } from '@/shared/schemas/pricing';
 import { recordAudit } from './audit';
 

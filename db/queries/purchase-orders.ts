@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { plans, purchaseOrderLines, purchaseOrders, shops, stockItems, stockMovements, suppliers } from '../schema';
-import { conflict, HttpError, notFound } from '@/lib/api/errors';
+import { conflict, HttpError, notFound } from '@/server/api/errors';
 import { groupBySupplier, lowStockOrders, piecesToBuy, type SupplierOrder } from '@/lib/buying/order-lines';
 import { poNumber, type DescribedSize, type PoStatus } from '@/lib/buying/describe';
 import { costEachCents } from '@/lib/stock/pricing';

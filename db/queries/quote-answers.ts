@@ -4,18 +4,18 @@
  *
  * The link's token is 32 random bytes (base64url) and exists only in the mail; the database keeps its SHA-256.
  * Every change here is one transaction that also moves the job's status (db/queries/job-status.ts) and queues the
- * mail it causes (lib/mail/outbox.ts); the caller wakes the mail sender after it returns.
+ * mail it causes (server/mail/outbox.ts); the caller wakes the mail sender after it returns.
  */
 import { createHash, randomBytes } from 'node:crypto';
 import { and, eq, inArray, lt, sql } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { Db } from '../open';
 import { customers, jobs, paymentEvents, quotePayments, quoteRevisions, quotes, shops } from '../schema';
-import { conflict, HttpError, notFound } from '@/lib/api/errors';
+import { conflict, HttpError, notFound } from '@/server/api/errors';
 import { formatMoney } from '@/lib/costing/money';
 import { formatShopDateTime, shopDay } from '@/lib/dates/shop-time';
 import { appBaseUrl } from '@/lib/mail/config';
-import { enqueueMail } from '@/lib/mail/outbox';
+import { enqueueMail } from '@/server/mail/outbox';
 import { depositReceiptMail, quoteAcceptedMail, type QuoteMailFacts } from '@/lib/mail/templates';
 import { customerQuoteState, refuseAnswer, refusePayment, type CustomerQuoteState } from '@/lib/quotes/answer';
 import { customerCopy, type CustomerLine, type CustomerTotals } from '@/lib/quotes/customer-copy';
@@ -303,7 +303,7 @@ export async function reconcileCheckout(db: Db, stripe: Stripe, token: string, s
 
 /**
  * Quotes sent and left unanswered past their last valid day (in each shop's time zone) become expired, and their
- * jobs follow. Run now and then by the server (lib/quotes/expiry.ts); the customer's page reads a quote past its
+ * jobs follow. Run now and then by the server (server/quotes/expiry.ts); the customer's page reads a quote past its
  * day as expired even before that.
  */
 export async function expireQuotes(db: Db, now = new Date()): Promise<number> {

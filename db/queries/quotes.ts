@@ -1,7 +1,7 @@
 import { and, desc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, parts, plans, quoteRevisions, quotes, shops } from '../schema';
-import { conflict, HttpError, notFound } from '@/lib/api/errors';
+import { conflict, HttpError, notFound } from '@/server/api/errors';
 import { quoteTotals, type QuoteTotals } from '@/lib/costing/quote-totals';
 import { boxFromOpening } from '@/lib/joinery/box-from-opening';
 import { requiredSetupCards, SETUP_CARD_TOLERANCE_MM } from '@/lib/joinery/setup-cards';
@@ -13,7 +13,7 @@ import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { quoteNumberText, revisionLetter, type QuoteRevisionPatch } from '@/shared/schemas/quote';
 import { formatMoney } from '@/lib/costing/money';
 import { shopDay } from '@/lib/dates/shop-time';
-import { enqueueMail } from '@/lib/mail/outbox';
+import { enqueueMail } from '@/server/mail/outbox';
 import { quoteMail } from '@/lib/mail/templates';
 import { lastValidDay } from '@/lib/quotes/answer';
 import { quotePdf, type QuotePdfInput } from '@/lib/quotes/quote-pdf';

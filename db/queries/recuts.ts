@@ -1,7 +1,7 @@
 import { aliasedTable, and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { parts, plans, recuts, users } from '../schema';
-import { HttpError, notFound } from '@/lib/api/errors';
+import { HttpError, notFound } from '@/server/api/errors';
 import { DEFAULT_RECUT_REASON, recutLabel, type RecutPart } from '@/lib/recuts/recuts';
 import type { NestRequest } from '@/shared/schemas/nesting';
 import type { RecutView } from '@/shared/schemas/recut';

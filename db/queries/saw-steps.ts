@@ -1,7 +1,7 @@
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, plans, sawSteps, users } from '../schema';
-import { HttpError, notFound } from '@/lib/api/errors';
+import { HttpError, notFound } from '@/server/api/errors';
 import { readPlan } from '@/lib/nesting';
 import { nestRequestSchema, nestSettingsSchema } from '@/shared/schemas/nesting';
 import { recordAudit } from './audit';

@@ -1,7 +1,7 @@
 import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { saws } from '../schema';
-import { conflict } from '@/lib/api/errors';
+import { conflict } from '@/server/api/errors';
 import type { Saw, SawKind } from '@/shared/schemas/saw';
 import { recordAudit } from './audit';
 

@@ -1,7 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { Db } from '../open';
 import { setupCards } from '../schema';
-import { conflict } from '@/lib/api/errors';
+import { conflict } from '@/server/api/errors';
 import { SETUP_CARD_TOLERANCE_MM } from '@/lib/joinery/setup-cards';
 import type { SetupCard, SetupCardField } from '@/shared/schemas/setup-card';
 import { recordAudit } from './audit';

@@ -1,7 +1,7 @@
 import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { slideModels } from '../schema';
-import { conflict } from '@/lib/api/errors';
+import { conflict } from '@/server/api/errors';
 import type { SlideModel, SlideModelKind, SlideWidthRule } from '@/shared/schemas/slide-model';
 import { recordAudit } from './audit';
 

@@ -6,7 +6,7 @@ import { z } from 'zod';
 import { isLowStock } from '@/lib/stock/low-stock';
 import { costEachCents } from './nest-request';
 import { recordAudit } from './audit';
-import { HttpError } from '@/lib/api/errors';
+import { HttpError } from '@/server/api/errors';
 
 /** A stock-room request that cannot be done as asked (409), with a message safe to show. */
 export class StockConflict extends HttpError {

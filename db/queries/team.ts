@@ -2,7 +2,7 @@ import bcrypt from 'bcryptjs';
 import { and, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { users } from '../schema';
-import { conflict, HttpError, notFound } from '@/lib/api/errors';
+import { conflict, HttpError, notFound } from '@/server/api/errors';
 import type { TeamMember, TeamMemberInput, TeamMemberPatch } from '@/shared/schemas/user';
 import { recordAudit } from './audit';
 import { hasPassword, NO_PASSWORD_YET, queueInvite } from './user-links';

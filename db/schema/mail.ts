@@ -12,7 +12,7 @@ export interface OutboxAttachment {
 
 /**
  * Mail waiting to go out, written in the same transaction as the change that causes it (an invite, a reset link, a
- * quote sent…) and delivered by the sender in the server process (lib/mail/sender.ts):
+ * quote sent…) and delivered by the sender in the server process (server/mail/sender.ts):
  * pending → sending (claimed until `claimed_until`) → sent, or back to pending with a later `next_attempt_at` after a
  * temporary failure, or failed (a permanent refusal, too many attempts, or delivery left uncertain twice).
  * The Message-ID is fixed here, so a resend after a crash carries the same one.
@@ -22,7 +22,7 @@ export const mailOutbox = pgTable(
   {
     id: uuid('id').primaryKey().defaultRandom(),
     shopId: shopIdColumn(),
-    /** What the mail is about ('invite', 'password-reset', 'quote'…): lib/mail/outbox.ts MAIL_KINDS. */
+    /** What the mail is about ('invite', 'password-reset', 'quote'…): server/mail/outbox.ts MAIL_KINDS. */
     kind: text('kind').notNull(),
     toAddress: text('to_address').notNull(),
     subject: text('subject').notNull(),

@@ -1,5 +1,5 @@
 /**
- * When the low-stock digest is due, on the shop's clock. Pure: the scheduler (lib/buying/digest-service.ts) asks
+ * When the low-stock digest is due, on the shop's clock. Pure: the scheduler (server/buying/digest-service.ts) asks
  * every minute or so; the database's one row per shop per local day (low_stock_digests) makes "once a day" hold
  * across app servers.
  */

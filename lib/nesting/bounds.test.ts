@@ -3,8 +3,8 @@ import path from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
 import { continuousBound, dellAmicoMartelloVigo, lowerBound, martelloVigoL2, rotationBound, type Size } from './bounds';
-import { maxRectsLayout } from './bounds/maxrects-reference';
-import { parseInstances, type BinPackingInstance } from './instances';
+import { maxRectsLayout } from '../../bench/bounds/maxrects-reference';
+import { parseInstances, type BinPackingInstance } from '../../bench/instances';
 
 const INSTANCE_FILE = path.resolve(import.meta.dirname, '../../bench/data/2bp-classes-I-X.txt');
 const CLASSES = ['I', 'II', 'III', 'IV', 'V', 'VI', 'VII', 'VIII', 'IX', 'X'];

@@ -1,7 +1,7 @@
 /**
  * Where deposits are paid, from the environment:
  * - `STRIPE_SECRET_KEY` and `STRIPE_WEBHOOK_SECRET`: the hosted payments service, through its Node SDK;
- * - otherwise the local payments fake (lib/payments/fake.ts): `KERFWISE_PAYMENTS_URL` names one the demo or the test
+ * - otherwise the local payments fake (server/payments/fake.ts): `KERFWISE_PAYMENTS_URL` names one the demo or the test
  *   harness started, with `KERFWISE_PAYMENTS_WEBHOOK_SECRET` the secret it signs its webhooks with; with neither set,
  *   the server starts its own (`npm run dev`). No account anywhere, and no card is ever charged.
  */

@@ -1,6 +1,6 @@
 import fs from 'node:fs';
-import { startMailCatcher } from '../../lib/mail/catcher';
-import { listCaughtMail } from '../../lib/mail/caught';
+import { startMailCatcher } from '../../server/mail/catcher';
+import { listCaughtMail } from '../../server/mail/caught';
 import { E2E_MAIL, killServer, MAIL_CATCHER_FILE, startServer, stopServer } from './support/server';
 import { signIn } from './support/session';
 import { expect, test } from './support/test';

@@ -5,10 +5,10 @@ import { eq } from 'drizzle-orm';
 import { afterEach, beforeEach, describe, expect, test } from 'vitest';
 import type { Db, DbHandle } from '@/db/open';
 import { mailOutbox } from '@/db/schema';
-import { listCaughtMail } from '@/lib/mail/caught';
-import { startMailCatcher, type MailCatcher } from '@/lib/mail/catcher';
-import { enqueueMail, shopOutbox } from '@/lib/mail/outbox';
-import { createMailSender, type SenderOptions } from '@/lib/mail/sender';
+import { listCaughtMail } from '@/server/mail/caught';
+import { startMailCatcher, type MailCatcher } from '@/server/mail/catcher';
+import { enqueueMail, shopOutbox } from '@/server/mail/outbox';
+import { createMailSender, type SenderOptions } from '@/server/mail/sender';
 import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 import { nextNumber, uniqueEmail } from '../support/unique';
 

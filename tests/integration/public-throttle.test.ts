@@ -7,7 +7,7 @@ import { describe, expect, test } from 'vitest';
 import * as inviteRoute from '@/app/api/invites/[token]/route';
 import * as resetsRoute from '@/app/api/password-resets/route';
 import * as resetRoute from '@/app/api/password-resets/[token]/route';
-import { LIMITS } from '@/lib/api/limit';
+import { LIMITS } from '@/server/api/limit';
 import { useTwoShopDatabase } from '../support/two-shop-database';
 import { request } from '../support/fixtures';
 import { uniqueEmail } from '../support/unique';

@@ -5,7 +5,7 @@ import type { Db } from '@/db/open';
 import { auditEvents, mailOutbox, plans, purchaseOrderLines, purchaseOrders, shops, stockItems, stockMovements, users } from '@/db/schema';
 import { cancelPurchaseOrder, createFromLowStock, createFromPlan, getPurchaseOrder, onOrderQuantities, receivePurchaseOrder, updateDraft } from '@/db/queries/purchase-orders';
 import { ledgerMismatches } from '@/db/queries/stock';
-import { sendPurchaseOrder } from '@/lib/buying/send';
+import { sendPurchaseOrder } from '@/server/buying/send';
 import { readPlan } from '@/lib/nesting';
 import * as listRoute from '@/app/api/purchase-orders/route';
 import * as orderRoute from '@/app/api/purchase-orders/[id]/route';

@@ -19,9 +19,9 @@ import * as sendRoute from '@/app/api/quotes/[id]/send/route';
 import * as revisionsRoute from '@/app/api/quotes/[id]/revisions/route';
 import { customerQuote, expireQuotes } from '@/db/queries/quote-answers';
 import { sendRevision } from '@/db/queries/quotes';
-import { fakeClient } from '@/lib/payments/client';
+import { fakeClient } from '@/server/payments/client';
 import { FAKE_SECRET_KEY, newWebhookSecret } from '@/lib/payments/config';
-import { startPaymentsFake, TEST_CARD_DECLINED, TEST_CARD_PAYS, type PaymentsFake } from '@/lib/payments/fake';
+import { startPaymentsFake, TEST_CARD_DECLINED, TEST_CARD_PAYS, type PaymentsFake } from '@/server/payments/fake';
 import { BROWSER_HEADERS } from '../support/fixtures';
 import { call } from '../support/shop-day';
 import { jobWithDraftQuote } from '../support/quote-fixture';
@@ -162,7 +162,7 @@ describe('the customer’s page', () => {
     const address = '203.0.113.77';
     const statuses: number[] = [];
     for (let i = 0; i < 12; i++) statuses.push((await asCustomer(answerRoute.POST, bad, 'answer', { answer: 'decline', reason: '' }, address)).status);
-    // Ten failed tries in 15 minutes are allowed (lib/api/limit.ts), the rest refused.
+    // Ten failed tries in 15 minutes are allowed (server/api/limit.ts), the rest refused.
     expect(statuses.slice(0, 10)).toEqual(Array(10).fill(404));
     expect(statuses.slice(10)).toEqual([429, 429]);
   });

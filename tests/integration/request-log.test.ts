@@ -3,7 +3,7 @@ import { Writable } from 'node:stream';
 import { describe, expect, test } from 'vitest';
 import * as teamRoute from '@/app/api/team/route';
 import * as jobsRoute from '@/app/api/jobs/route';
-import { logTo } from '@/lib/log';
+import { logTo } from '@/server/log';
 import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 import { request, sessionCookie } from '../support/fixtures';
 import { uniqueEmail } from '../support/unique';
@@ -46,13 +46,13 @@ describe('request log', () => {
     const res = await jobsRoute.GET(await request('/api/jobs', { headers: { 'x-request-id': 'edge-proxy-0001' } }), noParams);
     expect(res.status).toBe(401);
     expect(JSON.parse(lines[0])).toMatchObject({ route: '/api/jobs', status: 401, userId: null, shopId: null, requestId: 'edge-proxy-0001' });
-    const { routeOf } = await import('@/lib/log');
+    const { routeOf } = await import('@/server/log');
     expect(routeOf('/api/jobs/3f1c2a9e-8d7b-4c6a-9e5f-1a2b3c4d5e6f/parts/0a1b2c3d-4e5f-4a6b-8c7d-9e0f1a2b3c4d')).toBe('/api/jobs/:id/parts/:id');
   });
 
   test('anything that tries to log a password, a token or a cookie is redacted', async () => {
     const lines = captureLog();
-    const { log } = await import('@/lib/log');
+    const { log } = await import('@/server/log');
     log().info({ user: { password: 'hunter2-hunter2', token: 'tok-123' }, headers: { cookie: 'next-auth.session-token=abc' } }, 'careless');
     expect(lines[0]).not.toMatch(/hunter2|tok-123|session-token/);
     expect(lines[0]).toContain('[redacted]');

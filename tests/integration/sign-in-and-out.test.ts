@@ -10,9 +10,9 @@ import { describe, expect, test, vi } from 'vitest';
 import { NextRequest } from 'next/server';
 import type { DbHandle } from '@/db/open';
 import { BCRYPT_ROUNDS } from '@/db/queries/team';
-import { authOptions, DUMMY_HASH } from '@/lib/auth/options';
-import { throttledSignIn } from '@/lib/auth/sign-in-throttle';
-import { createLimiters, forgive, limit, LIMITS, spend } from '@/lib/api/limit';
+import { authOptions, DUMMY_HASH } from '@/server/auth/options';
+import { throttledSignIn } from '@/server/auth/sign-in-throttle';
+import { createLimiters, forgive, limit, LIMITS, spend } from '@/server/api/limit';
 import { useTwoShopDatabase } from '../support/two-shop-database';
 import { TEST_PASSWORD, TEST_SECRET } from '../support/fixtures';
 

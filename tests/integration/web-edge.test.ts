@@ -13,7 +13,7 @@ import * as teamRoute from '@/app/api/team/route';
 import * as teamMemberRoute from '@/app/api/team/[id]/route';
 import * as jobRoute from '@/app/api/jobs/[id]/route';
 import * as jobsRoute from '@/app/api/jobs/route';
-import { MAX_BODY_BYTES } from '@/lib/api/request-guard';
+import { MAX_BODY_BYTES } from '@/server/api/request-guard';
 import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 import { request, sessionCookie } from '../support/fixtures';
 import { uniqueEmail } from '../support/unique';

@@ -6,7 +6,7 @@ import { CustomerFormToggle } from '@/components/customers/customer-form';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 
 export const metadata: Metadata = { title: 'Customers' };
 

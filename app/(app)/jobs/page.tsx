@@ -3,13 +3,13 @@ import Link from 'next/link';
 import { Suspense } from 'react';
 import { JobsBoard } from '@/components/jobs/jobs-board';
 import { PageHeader } from '@/components/ui/page-header';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { can } from '@/lib/auth/permissions';
 import { getDb } from '@/db/client';
 import { listJobsPage } from '@/db/queries/jobs';
 import { getShopSettings } from '@/db/queries/shops';
 import { jobListQuerySchema } from '@/shared/schemas/job-list';
-import { zodFieldErrors } from '@/lib/api/errors';
+import { zodFieldErrors } from '@/server/api/errors';
 
 export const metadata: Metadata = { title: 'Jobs' };
 

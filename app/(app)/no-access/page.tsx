@@ -1,5 +1,5 @@
 import Link from 'next/link';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { ROLE_LABELS } from '@/lib/auth/permissions';
 import { homeFor } from '@/lib/nav';
 

@@ -5,9 +5,9 @@ import { MAIL_KIND_LABELS, OutboxStatusBadge } from '@/components/mail/outbox-st
 import { RetryMailButton } from '@/components/mail/retry-mail-button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { mailConfig } from '@/lib/mail/config';
-import { shopOutbox } from '@/lib/mail/outbox';
+import { shopOutbox } from '@/server/mail/outbox';
 
 export const metadata: Metadata = { title: 'Outbox' };
 

@@ -9,7 +9,7 @@ import { PoStatusBadge } from '@/components/buying/po-status';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { describeSize } from '@/lib/buying/describe';
 import { reorderQuantity } from '@/lib/buying/order-lines';
 import { formatMoney } from '@/lib/costing/money';

@@ -9,7 +9,7 @@ import { winRate } from '@/lib/reports/quoting-report';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FigureCard as Figure } from '@/components/ui/figure-card';
 import { PageHeader } from '@/components/ui/page-header';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { rackShare } from '@/lib/reports/offcut-report';
 import { overall, percentText, periodLabel, periodTotals, shares } from '@/lib/reports/yield-report';

@@ -6,8 +6,8 @@ import { getDb } from '@/db/client';
 import { mailOutbox } from '@/db/schema';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
-import { requirePageUser } from '@/lib/auth/session';
-import { listCaughtMail } from '@/lib/mail/caught';
+import { requirePageUser } from '@/server/auth/session';
+import { listCaughtMail } from '@/server/mail/caught';
 import { mailConfig } from '@/lib/mail/config';
 
 export const metadata: Metadata = { title: 'Sent mail' };

@@ -4,7 +4,7 @@ import { PricingSection } from '@/components/settings/pricing-section';
 import { SlideModelsSection } from '@/components/settings/slide-models-section';
 import { SawsSection } from '@/components/settings/saws-section';
 import { PageHeader } from '@/components/ui/page-header';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 
 export const metadata: Metadata = { title: 'Shop settings' };
 

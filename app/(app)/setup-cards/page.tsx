@@ -5,7 +5,7 @@ import { getShopSettings } from '@/db/queries/shops';
 import { SetupCardsManager } from '@/components/setup-cards/setup-cards-manager';
 import { PageHeader } from '@/components/ui/page-header';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 
 export const metadata: Metadata = { title: 'Setup cards' };
 

@@ -9,7 +9,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { PlanStatusBadge } from '@/components/saw-order/plan-status-badge';
 import { SawCautions } from '@/components/saw-order/saw-cautions';
 import { ProgressBar } from '@/components/shop-floor/progress-bar';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 
 export const metadata: Metadata = { title: 'Shop floor' };
 

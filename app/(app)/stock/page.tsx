@@ -12,7 +12,7 @@ import { StockTable } from '@/components/stock/stock-table';
 import { EmptyState } from '@/components/ui/empty-state';
 import { FigureCard } from '@/components/ui/figure-card';
 import { PageHeader } from '@/components/ui/page-header';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { can } from '@/lib/auth/permissions';
 import { formatLength } from '@/lib/units/format-length';
 import { formatMoney } from '@/lib/money';

@@ -2,9 +2,9 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getDb } from '@/db/client';
 import { TeamManager } from '@/components/team/team-manager';
-import { shopOutbox } from '@/lib/mail/outbox';
+import { shopOutbox } from '@/server/mail/outbox';
 import { PageHeader } from '@/components/ui/page-header';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 
 export const metadata: Metadata = { title: 'Team' };
 

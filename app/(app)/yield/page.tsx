@@ -5,7 +5,7 @@ import { listYieldLedger } from '@/db/queries/stock-yield';
 import { YieldLedger } from '@/components/yield/yield-ledger';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { shopDay } from '@/lib/dates/shop-time';
 import { formatMoney } from '@/lib/money';
 import { formatArea } from '@/lib/units/format-area';

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { createCustomer, listCustomers } from '@/db/queries/customers';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { customerInputSchema } from '@/shared/schemas/customer';
 
 // GET /api/customers – the shop's customers by name; ?q= searches name, company, e-mail and phone

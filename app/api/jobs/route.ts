@@ -1,5 +1,5 @@
 import { createJob, listJobsPage } from '@/db/queries/jobs';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { jobInputSchema } from '@/shared/schemas/job';
 import { jobListQuerySchema } from '@/shared/schemas/job-list';
 

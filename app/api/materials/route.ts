@@ -1,4 +1,4 @@
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { stockOffers } from './stock-offers';
 
 // GET /api/materials – the materials and thicknesses the stock room offers (sheets, boards, available offcuts), for pickers; no prices

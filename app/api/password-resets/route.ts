@@ -1,7 +1,7 @@
 import { requestPasswordReset } from '@/db/queries/user-links';
-import { ANYONE, route } from '@/lib/api/route';
-import { throttlePublicRequest } from '@/lib/api/throttle';
-import { wakeMailSender } from '@/lib/mail/service';
+import { ANYONE, route } from '@/server/api/route';
+import { throttlePublicRequest } from '@/server/api/throttle';
+import { wakeMailSender } from '@/server/mail/service';
 import { passwordResetRequestSchema } from '@/shared/schemas/user';
 
 // POST /api/password-resets – public: mail a reset link to this address if it has an account (the answer is the same either way)

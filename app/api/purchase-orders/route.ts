@@ -1,5 +1,5 @@
 import { createFromLowStock, createFromPlan, createManual, getPurchaseOrder, listPurchaseOrders } from '@/db/queries/purchase-orders';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { createPurchaseOrdersSchema } from '@/shared/schemas/purchase-order';
 
 // GET /api/purchase-orders – the shop's purchase orders, newest first, with their lines and totals

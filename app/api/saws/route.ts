@@ -1,5 +1,5 @@
 import { createSaw, listSaws } from '@/db/queries/saws';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { sawSchema } from '@/shared/schemas/saw';
 
 // GET /api/saws – the shop's saws (the profiles a nest keeps to), the nest's default first

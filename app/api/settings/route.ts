@@ -1,6 +1,6 @@
 import { getShopSettings, updateShopSettings } from '@/db/queries/shops';
-import { notFound } from '@/lib/api/errors';
-import { route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { route } from '@/server/api/route';
 import { shopSettingsPatchSchema } from '@/shared/schemas/shop';
 
 // GET /api/settings – the shop's units and cutting defaults

@@ -1,5 +1,5 @@
 import { createSetupCard, listSetupCards } from '@/db/queries/setup-cards';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { setupCardSchema } from '@/shared/schemas/setup-card';
 
 // GET /api/setup-cards – the shop's saved machine setups per joint and stock thickness

@@ -1,5 +1,5 @@
 import { createSlideModel, listSlideModels } from '@/db/queries/slide-models';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { slideModelSchema } from '@/shared/schemas/slide-model';
 
 // GET /api/slide-models – the shop's drawer slide models, as their makers specify them

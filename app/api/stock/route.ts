@@ -1,4 +1,4 @@
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { createStockItem, listStock, stockValue } from '@/db/queries/stock';
 import { withoutPrices } from '@/lib/stock/without-prices';

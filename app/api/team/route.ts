@@ -1,6 +1,6 @@
 import { addTeamMember, teamOf } from '@/db/queries/team';
-import { route } from '@/lib/api/route';
-import { wakeMailSender } from '@/lib/mail/service';
+import { route } from '@/server/api/route';
+import { wakeMailSender } from '@/server/mail/service';
 import { teamMemberInputSchema } from '@/shared/schemas/user';
 
 // GET /api/team – everyone in the shop with role and status

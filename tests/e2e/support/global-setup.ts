@@ -2,9 +2,9 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { openDatabase } from '../../../db/open';
 import { seedDemoShop } from '../../../seeds/demo-shop';
-import { startMailCatcher } from '../../../lib/mail/catcher';
+import { startMailCatcher } from '../../../server/mail/catcher';
 import { newWebhookSecret } from '../../../lib/payments/config';
-import { startPaymentsFake } from '../../../lib/payments/fake';
+import { startPaymentsFake } from '../../../server/payments/fake';
 import { E2E_DATA, E2E_DIR, E2E_MAIL, E2E_URL, MAIL_CATCHER_FILE, PAYMENTS_FILE, startServer, stopServer } from './server';
 
 /**

@@ -1,5 +1,5 @@
 import { expect } from '@playwright/test';
-import { listCaughtMail, type CaughtMail } from '@/lib/mail/caught';
+import { listCaughtMail, type CaughtMail } from '@/server/mail/caught';
 import { E2E_MAIL } from './server';
 
 /** The mail the catcher stored for this address (and, if given, with a subject like this), once it has arrived. */

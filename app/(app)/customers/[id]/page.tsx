@@ -11,7 +11,7 @@ import { CustomerFormToggle } from '@/components/customers/customer-form';
 import { JobStatusBadge } from '@/components/jobs/job-status';
 import { EmptyState } from '@/components/ui/empty-state';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 
 export const metadata: Metadata = { title: 'Customer' };
 

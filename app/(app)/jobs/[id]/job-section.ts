@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { getDb } from '@/db/client';
 import { getShopSettings } from '@/db/queries/shops';
 import type { Permission } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 
 /**
  * What every section page of a job starts from: the signed-in user (with the section's permission), the job id from

@@ -9,7 +9,7 @@ import { JobActions } from '@/components/jobs/job-actions';
 import { JobSectionLinks } from '@/components/jobs/job-section-links';
 import { JobStatusBadge } from '@/components/jobs/job-status';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { jobSectionsFor } from '@/lib/nav';
 
 /** A job's header and its sections: cut list, drawer schedules, plan, takeoff. Each section is its own route. */

@@ -8,7 +8,7 @@ import { getShopSettings } from '@/db/queries/shops';
 import { PieceMap } from '@/components/part-tags/piece-map';
 import { PlanStatusBadge } from '@/components/saw-order/plan-status-badge';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { formatLength } from '@/lib/units/format-length';
 import { getPartPage } from './part-page-data';
 

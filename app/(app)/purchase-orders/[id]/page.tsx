@@ -10,7 +10,7 @@ import { getShopSettings } from '@/db/queries/shops';
 import { PurchaseOrderEditor } from '@/components/buying/purchase-order-editor';
 import { PoStatusBadge } from '@/components/buying/po-status';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { describeSize } from '@/lib/buying/describe';
 import { formatShopDateTime } from '@/lib/dates/shop-time';
 import { pieceBoardFeet } from '@/lib/stock/pricing';

@@ -8,7 +8,7 @@ import { PlanStatusBadge } from '@/components/saw-order/plan-status-badge';
 import { SawCautions } from '@/components/saw-order/saw-cautions';
 import { CuttingView } from '@/components/shop-floor/cutting-view';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { pieceViews } from '@/lib/saw-order/piece-views';
 
 export const metadata: Metadata = { title: 'Cutting' };

@@ -2,10 +2,10 @@ import type { Metadata } from 'next';
 import { headers } from 'next/headers';
 import { getDb } from '@/db/client';
 import { customerQuote, QUOTE_TOKEN, reconcileCheckout, type CustomerQuote } from '@/db/queries/quote-answers';
-import { HttpError } from '@/lib/api/errors';
-import { countingFailedLinks, throttlePublicRequest } from '@/lib/api/throttle';
+import { HttpError } from '@/server/api/errors';
+import { countingFailedLinks, throttlePublicRequest } from '@/server/api/throttle';
 import { formatMoney } from '@/lib/costing/money';
-import { appPayments } from '@/lib/payments/client';
+import { appPayments } from '@/server/payments/client';
 import { CustomerQuoteView } from '@/components/quotes/customer-quote-view';
 import { QuoteAnswerForms, PayDepositButton } from '@/components/quotes/quote-answer-forms';
 

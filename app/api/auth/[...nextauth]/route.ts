@@ -1,8 +1,8 @@
 // GET|POST /api/auth/* – next-auth's own sign-in, sign-out, session and CSRF endpoints (public by nature);
-// the credentials sign-in is throttled by account and by address (lib/auth/sign-in-throttle.ts)
+// the credentials sign-in is throttled by account and by address (server/auth/sign-in-throttle.ts)
 import NextAuth from 'next-auth';
-import { authOptions } from '@/lib/auth/options';
-import { throttledSignIn } from '@/lib/auth/sign-in-throttle';
+import { authOptions } from '@/server/auth/options';
+import { throttledSignIn } from '@/server/auth/sign-in-throttle';
 
 type Handler = (req: Request, ctx: { params: Promise<{ nextauth: string[] }> }) => Promise<Response>;
 

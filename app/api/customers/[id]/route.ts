@@ -1,6 +1,6 @@
 import { deleteCustomer, getCustomer, updateCustomer } from '@/db/queries/customers';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { customerPatchSchema } from '@/shared/schemas/customer';
 
 // GET /api/customers/:id – one customer with their jobs

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { LINK_TOKEN, useLink } from '@/db/queries/user-links';
-import { ANYONE, route } from '@/lib/api/route';
-import { countingFailedLinks, throttlePublicRequest } from '@/lib/api/throttle';
+import { ANYONE, route } from '@/server/api/route';
+import { countingFailedLinks, throttlePublicRequest } from '@/server/api/throttle';
 import { newPasswordSchema } from '@/shared/schemas/user';
 
 // POST /api/invites/:token – public: accept a team invite by choosing a password (the link works once)

@@ -1,6 +1,6 @@
 import { deleteJob, getJob, updateJob } from '@/db/queries/jobs';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { jobPatchSchema } from '@/shared/schemas/job';
 
 // GET /api/jobs/:id – one job

@@ -1,8 +1,8 @@
 import { applyPaymentEvent } from '@/db/queries/quote-answers';
-import { HttpError } from '@/lib/api/errors';
-import { ANYONE, route } from '@/lib/api/route';
-import { wakeMailSender } from '@/lib/mail/service';
-import { appPayments } from '@/lib/payments/client';
+import { HttpError } from '@/server/api/errors';
+import { ANYONE, route } from '@/server/api/route';
+import { wakeMailSender } from '@/server/mail/service';
+import { appPayments } from '@/server/payments/client';
 
 // POST /api/payments/webhook – public, for the payments service only: events it signed with the webhook secret
 // (checked by its SDK, within its 5-minute tolerance); each event is applied once, a replay changes nothing.

@@ -1,8 +1,8 @@
 import { getPlan } from '@/db/queries/plan-document';
 import { judgePlan, updateDraftPlan } from '@/db/queries/plan-drafts';
 import { withoutPrices } from '@/lib/stock/without-prices';
-import { conflict, HttpError, notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { conflict, HttpError, notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { rebuildCuts } from '@/lib/nesting';
 import { nestRequestSchema, planSchema } from '@/shared/schemas/nesting';

@@ -1,6 +1,6 @@
 import { getPurchaseOrder, updateDraft } from '@/db/queries/purchase-orders';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { purchaseOrderPatchSchema } from '@/shared/schemas/purchase-order';
 
 // GET /api/purchase-orders/:id – one purchase order with its lines, what has arrived and its total

@@ -1,6 +1,6 @@
 import { getRevision, updateRevision } from '@/db/queries/quotes';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { quoteRevisionPatchSchema } from '@/shared/schemas/quote';
 
 // GET /api/quotes/:id – one quote revision with its lines and totals (estimator's view: cost, margin, hours)

@@ -1,7 +1,7 @@
 import { offcutUse } from '@/db/queries/reports';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { offcutUseCsv } from '@/lib/reports/offcut-report';
-import { csvResponse, reportFilterFor } from '@/lib/reports/report-request';
+import { csvResponse, reportFilterFor } from '@/server/reports/report-request';
 import { reportQuerySchema } from '@/shared/schemas/report';
 
 // GET /api/reports/offcut-use – offcut use over time as CSV, one line per period (the report's filters)

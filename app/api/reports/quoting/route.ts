@@ -1,7 +1,7 @@
 import { quotingReport } from '@/db/queries/quoting-report';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { quotingCsv } from '@/lib/reports/quoting-report';
-import { csvResponse, reportFilterFor } from '@/lib/reports/report-request';
+import { csvResponse, reportFilterFor } from '@/server/reports/report-request';
 import { reportQuerySchema } from '@/shared/schemas/report';
 
 // GET /api/reports/quoting – quotes sent, accepted, declined and expired, value won and deposits per period, as CSV

@@ -1,8 +1,8 @@
 import Papa from 'papaparse';
 import { stockValueReport } from '@/db/queries/reports';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { FORMULA_START } from '@/lib/cut-list/export-csv';
-import { csvResponse, reportFilterFor } from '@/lib/reports/report-request';
+import { csvResponse, reportFilterFor } from '@/server/reports/report-request';
 import { stockValueCsv } from '@/lib/reports/stock-value';
 import { reportQuerySchema } from '@/shared/schemas/report';
 

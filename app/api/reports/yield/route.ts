@@ -1,6 +1,6 @@
 import { yieldOverTime } from '@/db/queries/reports';
-import { route } from '@/lib/api/route';
-import { csvResponse, reportFilterFor } from '@/lib/reports/report-request';
+import { route } from '@/server/api/route';
+import { csvResponse, reportFilterFor } from '@/server/reports/report-request';
 import { yieldCsv } from '@/lib/reports/yield-report';
 import { reportQuerySchema } from '@/shared/schemas/report';
 

@@ -1,6 +1,6 @@
 import { deleteSaw, updateSaw } from '@/db/queries/saws';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { sawSchema } from '@/shared/schemas/saw';
 
 // PUT /api/saws/:id – change a saw (owner); saved plans keep the profile they were nested with

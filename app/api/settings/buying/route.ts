@@ -1,6 +1,6 @@
 import { getBuyingSettings, updateBuyingSettings } from '@/db/queries/purchase-orders';
-import { notFound } from '@/lib/api/errors';
-import { route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { route } from '@/server/api/route';
 import { buyingSettingsPatchSchema } from '@/shared/schemas/purchase-order';
 
 // GET /api/settings/buying – the details printed on purchase orders and the low-stock digest's time of day

@@ -1,5 +1,5 @@
 import { createHardware, listHardware } from '@/db/queries/pricing';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { hardwareItemSchema } from '@/shared/schemas/pricing';
 
 // GET /api/settings/hardware – the shop's hardware price list (prices: never the cutter)

@@ -1,6 +1,6 @@
 import { getPricing, setPricing } from '@/db/queries/pricing';
-import { notFound } from '@/lib/api/errors';
-import { route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { route } from '@/server/api/route';
 import { pricingSettingsSchema } from '@/shared/schemas/pricing';
 
 // GET /api/settings/pricing – hourly rates, labour minutes, markups, tax, deposit, validity, terms, offcut valuation (prices: never the cutter)

@@ -1,6 +1,6 @@
 import { deleteSetupCard, updateSetupCard } from '@/db/queries/setup-cards';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { setupCardSchema } from '@/shared/schemas/setup-card';
 
 // PUT /api/setup-cards/:id – change a setup card's joint, thickness, settings or note

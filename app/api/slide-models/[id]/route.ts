@@ -1,6 +1,6 @@
 import { deleteSlideModel, updateSlideModel } from '@/db/queries/slide-models';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { slideModelSchema } from '@/shared/schemas/slide-model';
 
 // PUT /api/slide-models/:id – change a slide model (owner); saved drawer schedules keep the rule they were sized by

@@ -1,5 +1,5 @@
-import { route } from '@/lib/api/route';
-import { HttpError } from '@/lib/api/errors';
+import { route } from '@/server/api/route';
+import { HttpError } from '@/server/api/errors';
 import { getShopSettings } from '@/db/queries/shops';
 import { importStock } from '@/db/queries/stock';
 import { checkStockCsv } from '@/lib/stock/stock-csv';

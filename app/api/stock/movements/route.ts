@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { route } from '@/lib/api/route';
+import { route } from '@/server/api/route';
 import { listMovements } from '@/db/queries/stock';
 
 const query = z.object({ stockItemId: z.uuid().optional(), offcutId: z.uuid().optional() });

@@ -1,5 +1,5 @@
 import { updateTeamMember } from '@/db/queries/team';
-import { idParams, route } from '@/lib/api/route';
+import { idParams, route } from '@/server/api/route';
 import { teamMemberPatchSchema } from '@/shared/schemas/user';
 
 // PATCH /api/team/:id – change a person's role, name, password, or deactivate/reactivate them

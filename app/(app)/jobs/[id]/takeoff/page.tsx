@@ -13,7 +13,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { FigureCard as Figure } from '@/components/ui/figure-card';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { formatMoney } from '@/lib/money';
 import { formatArea } from '@/lib/units/format-area';
 import { formatLength } from '@/lib/units/format-length';

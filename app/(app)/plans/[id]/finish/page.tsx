@@ -12,7 +12,7 @@ import { FinishPlanForm, type FinishPiece } from '@/components/stock/finish-plan
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { minOffcutFor } from '@/lib/stock/finish-plan';
 import { isKeepableOffcut } from '@/lib/stock/offcut-rules';
 import { formatLength } from '@/lib/units/format-length';

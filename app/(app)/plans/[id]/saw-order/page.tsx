@@ -9,7 +9,7 @@ import { SawCautions } from '@/components/saw-order/saw-cautions';
 import { SawOrderPiece } from '@/components/saw-order/saw-order-piece';
 import { PlanStatusBadge } from '@/components/saw-order/plan-status-badge';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { formatLength } from '@/lib/units/format-length';
 import { pieceViews } from '@/lib/saw-order/piece-views';
 

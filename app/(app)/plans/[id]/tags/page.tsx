@@ -8,7 +8,7 @@ import { getSawOrder } from '@/db/queries/saw-steps';
 import { PrintButton } from '@/components/saw-order/print-button';
 import { TagSheets } from '@/components/part-tags/tag-sheets';
 import { can } from '@/lib/auth/permissions';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { LABEL_SHEETS, labelSheet } from '@/lib/saw-order/label-sheets';
 import { partTagPath, partTags, tagText } from '@/lib/saw-order/part-tags';
 import { qrPath } from '@/lib/saw-order/qr-path';

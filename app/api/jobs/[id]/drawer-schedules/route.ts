@@ -1,7 +1,7 @@
 import { listDrawerSchedules, saveDrawerSchedule } from '@/db/queries/drawer-schedules';
 import { jobInShop } from '@/db/queries/parts';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { sizeOrThrow } from './size-or-throw';
 

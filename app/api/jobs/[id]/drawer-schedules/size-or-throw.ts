@@ -1,6 +1,6 @@
 import type { Db } from '@/db/open';
 import { getShopSettings } from '@/db/queries/shops';
-import { HttpError } from '@/lib/api/errors';
+import { HttpError } from '@/server/api/errors';
 import { formatLength } from '@/lib/units/format-length';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { sizeDrawerSchedule } from '@/lib/joinery';

@@ -1,7 +1,7 @@
 import { buildNestRequest } from '@/db/queries/nest-request';
 import { getJob } from '@/db/queries/jobs';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { nestForSchema } from '@/shared/schemas/recut';
 import { z } from 'zod';
 

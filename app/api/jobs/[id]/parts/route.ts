@@ -1,6 +1,6 @@
 import { addParts, jobInShop, listJobParts } from '@/db/queries/parts';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { partInputSchema } from '@/shared/schemas/part';
 
 // GET /api/jobs/:id/parts – the job's cut list, in order

@@ -1,7 +1,7 @@
 import { getJob } from '@/db/queries/jobs';
 import { createQuote, listJobQuotes } from '@/db/queries/quotes';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { newQuoteSchema } from '@/shared/schemas/quote';
 
 // GET /api/jobs/:id/quotes – every revision of the job's quotes, with totals, cost and margin (estimator's view)

@@ -1,5 +1,5 @@
-import { idParams, route } from '@/lib/api/route';
-import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/server/api/route';
+import { notFound } from '@/server/api/errors';
 import { getTakeoff } from '@/db/queries/takeoff';
 
 // GET /api/jobs/:id/takeoff – the material check for the job's latest plan: pull, buy, board feet or area, cost with waste, covered now

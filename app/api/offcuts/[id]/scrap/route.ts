@@ -1,5 +1,5 @@
-import { idParams, route } from '@/lib/api/route';
-import { notFound } from '@/lib/api/errors';
+import { idParams, route } from '@/server/api/route';
+import { notFound } from '@/server/api/errors';
 import { scrapOffcut } from '@/db/queries/stock';
 import { scrapOffcutSchema } from '@/shared/schemas/stock';
 

@@ -1,4 +1,4 @@
-import { idParams, route } from '@/lib/api/route';
+import { idParams, route } from '@/server/api/route';
 import { cancelPlan } from '@/db/queries/plan-lifecycle';
 
 // POST /api/plans/:id/cancel – close the plan and give back every reservation it holds

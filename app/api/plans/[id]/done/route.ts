@@ -1,4 +1,4 @@
-import { idParams, route } from '@/lib/api/route';
+import { idParams, route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { finishPlan } from '@/db/queries/plan-lifecycle';
 import { withoutPrices } from '@/lib/stock/without-prices';

@@ -1,5 +1,5 @@
 import { NextResponse } from 'next/server';
-import { idParams, route } from '@/lib/api/route';
+import { idParams, route } from '@/server/api/route';
 import { releasePlan, StockShortage } from '@/db/queries/plan-lifecycle';
 
 // POST /api/plans/:id/release – reserve exactly the stock the plan uses, all or nothing

@@ -1,6 +1,6 @@
 import { getSawOrder } from '@/db/queries/saw-steps';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { pdfFileName } from '@/lib/saw-order/pdf-text';
 import { sawOrderPdf } from '@/lib/saw-order/saw-order-pdf';

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { getSawOrder } from '@/db/queries/saw-steps';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { LABEL_SHEETS, labelSheet } from '@/lib/saw-order/label-sheets';
 import { partTagPath, partTags } from '@/lib/saw-order/part-tags';

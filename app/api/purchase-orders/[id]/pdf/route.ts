@@ -1,7 +1,7 @@
 import { getPurchaseOrder } from '@/db/queries/purchase-orders';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
-import { renderPurchaseOrder } from '@/lib/buying/send';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
+import { renderPurchaseOrder } from '@/server/buying/send';
 
 // GET /api/purchase-orders/:id/pdf – the purchase order as the supplier gets it, as a PDF
 export const GET = route({ permission: 'purchasing:read', params: idParams }, async ({ db, user, params }) => {

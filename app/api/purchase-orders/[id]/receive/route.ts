@@ -1,5 +1,5 @@
 import { receivePurchaseOrder } from '@/db/queries/purchase-orders';
-import { idParams, route } from '@/lib/api/route';
+import { idParams, route } from '@/server/api/route';
 import { receivePurchaseOrderSchema } from '@/shared/schemas/purchase-order';
 
 // POST /api/purchase-orders/:id/receive – pieces that arrived go into the stock room (movements name the order); optionally take its prices

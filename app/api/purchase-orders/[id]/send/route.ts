@@ -1,5 +1,5 @@
-import { idParams, route } from '@/lib/api/route';
-import { sendPurchaseOrder } from '@/lib/buying/send';
+import { idParams, route } from '@/server/api/route';
+import { sendPurchaseOrder } from '@/server/buying/send';
 import { sendPurchaseOrderSchema } from '@/shared/schemas/purchase-order';
 
 // POST /api/purchase-orders/:id/send – e-mail a draft to its supplier with the PDF attached, and mark it sent

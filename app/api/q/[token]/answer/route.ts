@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import { answerQuote, QUOTE_TOKEN } from '@/db/queries/quote-answers';
-import { clientAddress } from '@/lib/api/limit';
-import { ANYONE, route } from '@/lib/api/route';
-import { countingFailedLinks, throttlePublicRequest } from '@/lib/api/throttle';
-import { wakeMailSender } from '@/lib/mail/service';
+import { clientAddress } from '@/server/api/limit';
+import { ANYONE, route } from '@/server/api/route';
+import { countingFailedLinks, throttlePublicRequest } from '@/server/api/throttle';
+import { wakeMailSender } from '@/server/mail/service';
 import { quoteAnswerSchema } from '@/shared/schemas/quote-answer';
 
 // POST /api/q/:token/answer – public (the customer's link): accept with a typed full name, or decline with a reason

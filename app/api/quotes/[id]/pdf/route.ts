@@ -3,8 +3,8 @@ import { customers } from '@/db/schema';
 import { getJob } from '@/db/queries/jobs';
 import { getRevision, quotePdfInput } from '@/db/queries/quotes';
 import { getShopSettings } from '@/db/queries/shops';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { quotePdf } from '@/lib/quotes/quote-pdf';
 import { pdfFileName } from '@/lib/saw-order/pdf-text';
 

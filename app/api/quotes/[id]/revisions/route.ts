@@ -1,6 +1,6 @@
 import { getRevision, newRevision } from '@/db/queries/quotes';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 
 // POST /api/quotes/:id/revisions – a new draft revision of this revision's quote, copied from its latest (409 while that is a draft)
 export const POST = route({ permission: 'quotes:write', params: idParams, status: 201 }, async ({ db, user, params }) => {

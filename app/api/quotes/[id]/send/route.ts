@@ -1,6 +1,6 @@
 import { sendRevision } from '@/db/queries/quotes';
-import { idParams, route } from '@/lib/api/route';
-import { wakeMailSender } from '@/lib/mail/service';
+import { idParams, route } from '@/server/api/route';
+import { wakeMailSender } from '@/server/mail/service';
 
 // POST /api/quotes/:id/send – e-mail the latest revision to the job's customer (PDF and link to their page), replacing
 // an earlier sent one; the job becomes quoted

@@ -1,5 +1,5 @@
 import { cancelRecut } from '@/db/queries/recuts';
-import { idParams, route } from '@/lib/api/route';
+import { idParams, route } from '@/server/api/route';
 import { cancelRecutSchema } from '@/shared/schemas/recut';
 
 // POST /api/recuts/:id/cancel – take an open re-cut off its job's list, with the reason (409 for one in a released plan or already closed)

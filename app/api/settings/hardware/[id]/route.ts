@@ -1,6 +1,6 @@
 import { deleteHardware, updateHardware } from '@/db/queries/pricing';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { hardwareItemSchema } from '@/shared/schemas/pricing';
 
 // PUT /api/settings/hardware/:id – change an item of the price list (owner)

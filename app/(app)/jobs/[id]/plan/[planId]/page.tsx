@@ -10,7 +10,7 @@ import { LayoutBench } from '@/components/layout-bench/layout-bench';
 import { PlanSummary } from '@/components/nesting/plan-summary';
 import { ReleasePlanButton } from '@/components/stock/release-plan-button';
 import { StatusBadge } from '@/components/ui/status-badge';
-import { requirePageUser } from '@/lib/auth/session';
+import { requirePageUser } from '@/server/auth/session';
 import { can } from '@/lib/auth/permissions';
 
 export const metadata: Metadata = { title: 'Plan' };

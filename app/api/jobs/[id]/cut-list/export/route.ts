@@ -2,8 +2,8 @@ import { getJob } from '@/db/queries/jobs';
 import { listJobParts } from '@/db/queries/parts';
 import { getShopSettings } from '@/db/queries/shops';
 import { cutListCsv } from '@/lib/cut-list/export-csv';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 
 /** A file name from the job's name: letters, digits and dashes only. */
 const fileName = (job: string) => `${job.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'job'}-cut-list.csv`;

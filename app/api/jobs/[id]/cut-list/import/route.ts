@@ -1,8 +1,8 @@
 import { addParts } from '@/db/queries/parts';
 import { validateUploadRows } from '@/lib/cut-list/validate-rows';
 import { snapReport } from '@/lib/cut-list/stock-match';
-import { HttpError, notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { HttpError, notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { CUT_LIST_FIELD_LABELS, cutListImportSchema } from '@/shared/schemas/cut-list-upload';
 import { stockOffers } from '@/app/api/materials/stock-offers';
 

@@ -2,8 +2,8 @@ import { jobInShop } from '@/db/queries/parts';
 import { getShopSettings } from '@/db/queries/shops';
 import { snapReport, stockMatchWarning } from '@/lib/cut-list/stock-match';
 import { validateUploadRows } from '@/lib/cut-list/validate-rows';
-import { notFound } from '@/lib/api/errors';
-import { idParams, route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { idParams, route } from '@/server/api/route';
 import { cutListUploadSchema } from '@/shared/schemas/cut-list-upload';
 import { stockOffers } from '@/app/api/materials/stock-offers';
 

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { deleteDrawerSchedule, saveDrawerSchedule } from '@/db/queries/drawer-schedules';
-import { notFound } from '@/lib/api/errors';
-import { route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { route } from '@/server/api/route';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { sizeOrThrow } from '../size-or-throw';
 

@@ -1,6 +1,6 @@
 import { deletePart, updatePart } from '@/db/queries/parts';
-import { notFound } from '@/lib/api/errors';
-import { route } from '@/lib/api/route';
+import { notFound } from '@/server/api/errors';
+import { route } from '@/server/api/route';
 import { partParams, partPatchSchema } from '@/shared/schemas/part';
 
 // PATCH /api/jobs/:id/parts/:partId – change cells of one row (a drawer schedule's row: notes only)

@@ -3,13 +3,13 @@ import { NextResponse, type NextRequest } from 'next/server';
 import { z, type ZodType } from 'zod';
 import { getDb } from '@/db/client';
 import type { Db } from '@/db/open';
-import { userFromRequest, type SessionUser } from '@/lib/auth/session';
+import { userFromRequest, type SessionUser } from '@/server/auth/session';
 import { can, type Permission } from '@/lib/auth/permissions';
 import { forbidden, notFound, setErrorReporter, toErrorResponse, unauthorized } from './errors';
 import { checkJsonBody, checkSameOrigin, readJsonBody, readTextBody } from './request-guard';
 import { withoutPrices } from '@/lib/stock/without-prices';
 import { isHttps, securityHeaders } from '@/lib/security-headers';
-import { log, requestIdOf, routeOf } from '@/lib/log';
+import { log, requestIdOf, routeOf } from '@/server/log';
 
 export interface RouteContext<P, B, Q, U = SessionUser> {
   req: NextRequest;

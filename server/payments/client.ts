@@ -3,7 +3,7 @@
  * (the SDK pointed at it with its host, port and protocol options). See lib/payments/config.ts.
  */
 import Stripe from 'stripe';
-import { FAKE_SECRET_KEY, paymentsConfig, type PaymentsConfig } from './config';
+import { FAKE_SECRET_KEY, paymentsConfig, type PaymentsConfig } from '@/lib/payments/config';
 import { startPaymentsFake, type PaymentsFake } from './fake';
 import { appBaseUrl } from '@/lib/mail/config';
 

@@ -7,7 +7,7 @@ import { clientAddress, limit, spend, tooManyAttempts } from './limit';
 export type ThrottledAction = 'password-reset-request' | 'link-use' | 'quote-page';
 
 /**
- * Where the public (signed-out) routes meet the shop's rate limiter (lib/api/limit.ts; counts shared by every app
+ * Where the public (signed-out) routes meet the shop's rate limiter (server/api/limit.ts; counts shared by every app
  * server on PostgreSQL). Each such route calls this first:
  * - a reset link may be asked for an address 5 times an hour (every request counts; the answer is the same whether
  *   the address has an account or not, so the limit does not tell either);

@@ -2,16 +2,16 @@ import 'server-only';
 import type { Db } from '@/db/open';
 import { getShopSettings } from '@/db/queries/shops';
 import { getBuyingSettings, getPurchaseOrder, markSent, updateDraft, type PurchaseOrderView } from '@/db/queries/purchase-orders';
-import { notFound } from '@/lib/api/errors';
+import { notFound } from '@/server/api/errors';
 import { formatMoney } from '@/lib/costing/money';
-import { enqueueMail } from '@/lib/mail/outbox';
-import { wakeMailSender } from '@/lib/mail/service';
+import { enqueueMail } from '@/server/mail/outbox';
+import { wakeMailSender } from '@/server/mail/service';
 import { pdfFileName } from '@/lib/saw-order/pdf-text';
 import { pieceBoardFeet } from '@/lib/stock/pricing';
 import { shopDay } from '@/lib/dates/shop-time';
-import { costUnit, describeSize } from './describe';
-import { purchaseOrderMail } from './mail';
-import { purchaseOrderPdf } from './po-pdf';
+import { costUnit, describeSize } from '@/lib/buying/describe';
+import { purchaseOrderMail } from '@/lib/buying/mail';
+import { purchaseOrderPdf } from '@/lib/buying/po-pdf';
 
 /** The order's PDF as the supplier gets it, and its file name. */
 export async function renderPurchaseOrder(db: Db, shopId: string, po: PurchaseOrderView) {

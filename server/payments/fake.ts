@@ -12,7 +12,7 @@ import { randomBytes } from 'node:crypto';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import Stripe from 'stripe';
-import { FAKE_SECRET_KEY } from './config';
+import { FAKE_SECRET_KEY } from '@/lib/payments/config';
 
 export const TEST_CARD_PAYS = '4242424242424242';
 export const TEST_CARD_DECLINED = '4000000000000002';

@@ -1,7 +1,7 @@
 /**
  * The outbox: how any feature sends mail. Call `enqueueMail(tx, message)` inside the transaction that makes the
  * change the mail reports (an invite, a reset link, a quote sent), so the mail exists exactly when the change does;
- * the sender in the server process (lib/mail/sender.ts) delivers it, retrying temporary failures.
+ * the sender in the server process (server/mail/sender.ts) delivers it, retrying temporary failures.
  *
  *   await db.transaction(async (tx) => {
  *     const quote = await …;
@@ -13,7 +13,7 @@ import { and, desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import type { Db } from '@/db/open';
 import { mailOutbox } from '@/db/schema';
-import { mailConfig } from './config';
+import { mailConfig } from '@/lib/mail/config';
 
 /** What a mail is about. Add a kind here when a feature starts sending a new one. */
 export const MAIL_KINDS = ['invite', 'password-reset', 'quote', 'quote-accepted', 'deposit-receipt', 'purchase-order', 'low-stock-digest'] as const;

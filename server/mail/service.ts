@@ -4,7 +4,7 @@
  */
 import type { Db } from '@/db/open';
 import { startMailCatcher, type MailCatcher } from './catcher';
-import { mailConfig } from './config';
+import { mailConfig } from '@/lib/mail/config';
 import { createMailSender, type MailSender } from './sender';
 
 const holder = globalThis as typeof globalThis & { __kerfwiseMail?: { sender: MailSender; catcher: MailCatcher | null } };

@@ -1,16 +1,16 @@
 /**
  * Quick local check of packing quality on a sample of the standard 2D bin packing instances (not the benchmark:
- * `npm run bench` is). Usage: `npx tsx lib/nesting/pack/dev-bench.ts <ms per instance> <every k-th> <rot|fixed> [style]`;
+ * `npm run bench` is). Usage: `npx tsx bench/dev-bench.ts <ms per instance> <every k-th> <rot|fixed> [style]`;
  * `PK_ITERS=n` counts iterations instead of time (repeatable), `PK_CLASSES=3,7` picks classes.
  */
 import { readFileSync } from 'node:fs';
-import { parseInstances } from '@/lib/nesting/instances';
+import { parseInstances } from '@/bench/instances';
 import { lowerBound } from '@/lib/nesting/bounds';
-import { packWithLimits } from './index';
+import { packWithLimits } from '@/lib/nesting/pack';
 
 const [ms = '100', every = '5', mode = 'rot', style = 'panel'] = process.argv.slice(2);
 const rotation = mode === 'rot';
-const instances = parseInstances(readFileSync(new URL('../../../bench/data/2bp-classes-I-X.txt', import.meta.url), 'utf8'));
+const instances = parseInstances(readFileSync(new URL('./data/2bp-classes-I-X.txt', import.meta.url), 'utf8'));
 const perClass = new Map<number, { bins: number; lb: number; first: number }>();
 let total = 0;
 let totalLb = 0;

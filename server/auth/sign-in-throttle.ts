@@ -1,5 +1,5 @@
 import 'server-only';
-import { clientAddress, forgive, limit, spend, tooManyAttempts, type LimitState } from '@/lib/api/limit';
+import { clientAddress, forgive, limit, spend, tooManyAttempts, type LimitState } from '@/server/api/limit';
 
 /** The account key of a sign-in: the e-mail as the user list compares it (trimmed, lower-case). */
 export function accountKey(email: unknown): string {
@@ -28,7 +28,7 @@ function refused(req: Request, state: LimitState): Response {
  * Sign-in with a throttle around it: refused (429, Retry-After) while the e-mail address or the client address has
  * used up its wrong attempts, known account or not, before any password is compared; a wrong attempt counts for
  * both, a right one clears the account's count. The answer and the work done are the same for an unknown e-mail
- * as for a known one (lib/auth/options.ts compares against a dummy hash).
+ * as for a known one (server/auth/options.ts compares against a dummy hash).
  */
 export async function throttledSignIn(req: Request, signIn: (req: Request) => Promise<Response>): Promise<Response> {
   const account = await emailOf(req);

@@ -8,9 +8,9 @@ import { getDb } from '@/db/client';
 import { loadSessionUser, type SessionUser } from '@/db/queries/users';
 import type { Db } from '@/db/open';
 import { serverEnv } from '@/lib/env';
-import { claimsFromToken } from './claims';
+import { claimsFromToken } from '@/lib/auth/claims';
 import { authOptions } from './options';
-import { can, type Permission } from './permissions';
+import { can, type Permission } from '@/lib/auth/permissions';
 
 export type { SessionUser };
 

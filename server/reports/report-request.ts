@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Db } from '@/db/open';
 import { getShopSettings } from '@/db/queries/shops';
-import { HttpError, notFound } from '@/lib/api/errors';
+import { HttpError, notFound } from '@/server/api/errors';
 import { reportRange, type ReportQuery } from '@/shared/schemas/report';
 
 /** A report's filter for the signed-in person's shop: its time zone and units, the range with defaults filled in. */

@@ -5,8 +5,8 @@
  */
 import type { Db } from '@/db/open';
 import { runLowStockDigests } from '@/db/queries/low-stock-digest';
-import { log } from '@/lib/log';
-import { wakeMailSender } from '@/lib/mail/service';
+import { log } from '@/server/log';
+import { wakeMailSender } from '@/server/mail/service';
 
 const holder = globalThis as typeof globalThis & { __kerfwiseDigest?: { timer: NodeJS.Timeout; running: Promise<void> | null } };
 

@@ -6,7 +6,7 @@ import { z } from 'zod';
 import { getDb } from '@/db/client';
 import { hasPassword } from '@/db/queries/user-links';
 import { findActiveUserByEmail, revokeSessions } from '@/db/queries/users';
-import { claimsFromToken } from './claims';
+import { claimsFromToken } from '@/lib/auth/claims';
 import { serverEnv } from '@/lib/env';
 
 const credentialsSchema = z.object({
@@ -65,7 +65,7 @@ export function authOptions(): NextAuthOptions {
         return token;
       },
       async session({ session, token }) {
-        // The page side re-checks these claims against the database on every render (lib/auth/session.ts).
+        // The page side re-checks these claims against the database on every render (server/auth/session.ts).
         return {
           ...session,
           user: { ...session.user, userId: token.userId, shopId: token.shopId, role: token.role, tokenVersion: token.tokenVersion },
