@@ -23,6 +23,7 @@ export default defineConfig({
       'seeds/**/*.test.ts',
       'workers/**/*.test.ts',
       'tests/integration/**/*.test.ts',
+      'tests/house-rules/**/*.test.ts',
     ],
     environment: 'node',
     // Request log lines (server/log.ts) would bury the test output; tests that read them send them to a stream.

@@ -8,7 +8,7 @@ import { BENCH_COLORS as C, partTone } from '@/lib/layout-bench/colors';
 import type { BenchDoc, PartInfo } from '@/lib/layout-bench/document';
 import { fitLabel } from '@/lib/layout-bench/labels';
 import type { LiveCheck } from '@/lib/layout-bench/live-check';
-import type { BenchStore, Camera } from '@/lib/layout-bench/store';
+import type { BenchStore, Camera } from '@/components/layout-bench/store';
 import { pieceAt, placementAt, type PieceFrame } from '@/lib/layout-bench/world';
 
 /** Snap reach on screen: a part within this many pixels of an edge or a neighbour's kerf line lands on it. */

@@ -10,7 +10,7 @@ import { useNestingWorker } from '@/components/nesting/use-nesting-worker';
 import { api, ApiError } from '@/client/api';
 import { docToPlan, planToDoc, type PartInfo } from '@/lib/layout-bench/document';
 import { prepareRenest } from '@/lib/layout-bench/renest';
-import { createBenchStore, hasUnsavedChanges, mayRotate, type BenchStore } from '@/lib/layout-bench/store';
+import { createBenchStore, hasUnsavedChanges, mayRotate, type BenchStore } from '@/components/layout-bench/store';
 import { fitView, layoutPieces } from '@/lib/layout-bench/world';
 import { rebuildCuts } from '@/lib/nesting';
 import { readBenchPlan } from '@/lib/layout-bench/read-bench-plan';

@@ -1,5 +1,5 @@
 import { StatusBadge, type Tone } from '@/components/ui/status-badge';
-import type { OutboxStatus } from '@/server/mail/outbox';
+import type { OutboxStatus } from '@/shared/wire/mail';
 
 const LABEL: Record<OutboxStatus, string> = { pending: 'Waiting', sending: 'Sending', sent: 'Sent', failed: 'Failed' };
 const TONE: Record<OutboxStatus, Tone> = { pending: 'warn', sending: 'accent', sent: 'good', failed: 'bad' };

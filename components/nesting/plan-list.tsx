@@ -6,7 +6,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { StatusBadge, type Tone } from '@/components/ui/status-badge';
 import { api } from '@/client/api';
 import { formatMoney } from '@/lib/money';
-import type { JobPlanSummary } from '@/db/queries/plan-drafts';
+import type { JobPlanSummary } from '@/shared/wire/plans';
 import { formatShopDateTime } from '@/lib/dates/shop-time';
 
 const TONE: Record<JobPlanSummary['status'], Tone> = { draft: 'neutral', released: 'accent', cutting: 'warn', done: 'good', cancelled: 'bad' };

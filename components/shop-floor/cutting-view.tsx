@@ -7,7 +7,7 @@ import { api, ApiError } from '@/client/api';
 import { NARROW_HOW } from '@/lib/saw-order/describe-step';
 import type { PieceView } from '@/lib/saw-order/piece-views';
 import { sawProgress } from '@/lib/saw-order/progress';
-import type { PlanTicks } from '@/db/queries/saw-steps';
+import type { PlanTicks } from '@/shared/wire/plans';
 import { StepDiagram } from '@/components/saw-order/step-diagram';
 import { StepKindBadge } from '@/components/saw-order/step-kind-badge';
 import { ProgressBar } from './progress-bar';

@@ -1,4 +1,4 @@
-import type { StockDetailChanges } from '@/db/queries/stock';
+import type { StockDetailChanges } from '@/shared/wire/stock';
 import { STOCK_DETAIL_FIELDS, type StockDetailField } from '@/shared/schemas/stock';
 
 const LABELS: Record<StockDetailField, string> = {

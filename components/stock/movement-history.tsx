@@ -1,8 +1,8 @@
-import type { DetailChange, listMovements } from '@/db/queries/stock';
+import type { DetailChange, MovementRow } from '@/shared/wire/stock';
 import { describeMovement } from '@/lib/stock/describe-movement';
 import { describeDetailChanges } from './describe-detail-changes';
 
-type Movement = Awaited<ReturnType<typeof listMovements>>[number];
+type Movement = MovementRow;
 
 /**
  * The stock ledger: every change of a count, who made it and when, newest first, with the on-hand and reserved

@@ -1,9 +1,9 @@
 import Link from 'next/link';
 import { StatusBadge, type Tone } from '@/components/ui/status-badge';
-import type { listOffcuts } from '@/db/queries/stock';
+import type { OffcutRow } from '@/shared/wire/stock';
 import { ScrapOffcutButton } from './scrap-offcut-button';
 
-type Offcut = Awaited<ReturnType<typeof listOffcuts>>[number];
+type Offcut = OffcutRow;
 const TONE: Record<Offcut['status'], Tone> = { available: 'good', reserved: 'accent', used: 'neutral', scrapped: 'bad' };
 
 /**

@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import { StatusBadge } from '@/components/ui/status-badge';
-import type { StockItemRow } from '@/db/queries/stock';
+import type { StockItemRow } from '@/shared/wire/stock';
 import { surfacingSchema } from '@/shared/schemas/stock';
 import type { EditableStock } from './edit-stock-dialog';
 import { StockRowActions } from './stock-row-actions';

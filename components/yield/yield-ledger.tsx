@@ -1,8 +1,8 @@
 import Link from 'next/link';
 import { FigureCard as Figure } from '@/components/ui/figure-card';
-import type { listYieldLedger } from '@/db/queries/stock-yield';
+import type { YieldLedger } from '@/shared/wire/plans';
 
-type Ledger = Awaited<ReturnType<typeof listYieldLedger>>;
+type Ledger = YieldLedger;
 const pct = (r: number | null) => (r == null ? '—' : `${(r * 100).toFixed(1)} %`);
 
 /**

@@ -1,10 +1,10 @@
 import { and, asc, desc, eq, ilike, or, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs } from '../schema';
-import { HttpError } from '@/server/api/errors';
 import type { Customer, CustomerInput, CustomerPatch } from '@/shared/schemas/customer';
 import type { JobStatus } from '@/shared/schemas/job';
 import { recordAudit } from './audit';
+import { invalid, conflict } from '@/lib/errors';
 
 type CustomerRow = typeof customers.$inferSelect;
 
@@ -87,7 +87,7 @@ export async function deleteCustomer(db: Db, shopId: string, userId: string, id:
     const [current] = await tx.select().from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, id))).for('update');
     if (!current) return false;
     const [{ n }] = await tx.select({ n: sql<number>`count(*)::int` }).from(jobs).where(eq(jobs.customerId, id));
-    if (Number(n) > 0) throw new HttpError(409, `${current.name} has ${n} job${Number(n) === 1 ? '' : 's'}: move them to another customer first.`);
+    if (Number(n) > 0) throw conflict(`${current.name} has ${n} job${Number(n) === 1 ? '' : 's'}: move them to another customer first.`);
     await tx.delete(customers).where(eq(customers.id, id));
     await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'customer', entityId: id, data: { name: current.name } });
     return true;
@@ -105,7 +105,7 @@ export async function resolveCustomer(tx: Db, shopId: string, userId: string, ch
   if (choice === null) return null;
   if ('id' in choice) {
     const [found] = await tx.select({ id: customers.id }).from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, choice.id)));
-    if (!found) throw new HttpError(422, 'That customer was not found.', { customer: ['Pick one of the shop’s customers.'] });
+    if (!found) throw invalid('That customer was not found.', { customer: ['Pick one of the shop’s customers.'] });
     return found.id;
   }
   const name = tidyName(choice.name);

@@ -1,7 +1,6 @@
 import { and, asc, desc, eq, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, parts, plans, stockMovements } from '../schema';
-import { HttpError } from '@/server/api/errors';
 import type { Role } from '@/lib/auth/permissions';
 import { refuseManualStatus, acceptedAtAfter } from '@/lib/jobs/status';
 import { JOB_STATUSES, type JobInput, type JobPatch, type JobSummary } from '@/shared/schemas/job';
@@ -9,6 +8,7 @@ import type { JobListPage, JobListQuery, JobSortColumn } from '@/shared/schemas/
 import { recordAudit } from './audit';
 import { resolveCustomer } from './customers';
 import { jobFacts } from './job-status';
+import { DomainError, forbidden } from '@/lib/errors';
 
 /** Per job: its pieces (quantities summed) and its materials, once each. */
 const partStats = (db: Db, shopId: string) =>
@@ -206,7 +206,7 @@ export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: s
     const set: Partial<typeof jobs.$inferInsert> = Object.fromEntries(Object.entries(changes).map(([f, c]) => [f, c.to]));
     if (patch.status && changes.status) {
       const refused = refuseManualStatus(editor.role, job.status, patch.status, await jobFacts(tx, shopId, id, job.acceptedAt));
-      if (refused) throw new HttpError(403, refused);
+      if (refused) throw forbidden(refused);
       set.acceptedAt = acceptedAtAfter(patch.status, job.acceptedAt, new Date());
     }
     await tx.update(jobs).set({ ...set, updatedAt: new Date() }).where(eq(jobs.id, id));
@@ -217,9 +217,9 @@ export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: s
 }
 
 /** A job with history — a plan that was ever released, or stock moved for one of its plans — is archived, not deleted. */
-export class JobHasHistory extends HttpError {
+export class JobHasHistory extends DomainError {
   constructor(name: string) {
-    super(409, `“${name}” has history (plans released to the saw, stock moved for them): archive it instead, so the stock and yield ledgers keep their plans. Archived jobs leave the jobs list until you filter for them.`);
+    super('conflict', `“${name}” has history (plans released to the saw, stock moved for them): archive it instead, so the stock and yield ledgers keep their plans. Archived jobs leave the jobs list until you filter for them.`);
   }
 }
 

@@ -9,8 +9,8 @@ import { getShopSettings } from './shops';
 import { listParts } from './parts';
 import { openRecuts } from './recuts';
 import { listSaws } from './saws';
-import { HttpError } from '@/server/api/errors';
 import type { NestSaw } from '@/shared/schemas/saw';
+import { invalid } from '@/lib/errors';
 
 /**
  * Stock ids in a nesting request name where the piece comes from, so a plan can be traced back to the rack:
@@ -54,13 +54,13 @@ export async function buildNestRequest(
   const sawFor = (id: string | undefined, field: string): NestSaw | undefined => {
     if (!id) return undefined;
     const found = shopSaws.find((s) => s.id === id);
-    if (!found) throw new HttpError(422, 'That saw is not in Shop settings any more; choose another.', { [field]: ['not a saw of this shop'] });
+    if (!found) throw invalid('That saw is not in Shop settings any more; choose another.', { [field]: ['not a saw of this shop'] });
     const { updatedAt: _u, ...profile } = found;
     return profile;
   };
   const saw = sawFor(sawId, 'sawId');
   const breakdownSaw = sawFor(breakdownSawId, 'breakdownSawId');
-  if (breakdownSaw && !saw) throw new HttpError(422, 'A breakdown saw needs a second saw for the rest of the cuts.', { breakdownSawId: ['choose the second saw too'] });
+  if (breakdownSaw && !saw) throw invalid('A breakdown saw needs a second saw for the rest of the cuts.', { breakdownSawId: ['choose the second saw too'] });
   const sawKerf = Math.max(0, ...[saw, breakdownSaw].map((s) => s?.kerfMm ?? 0));
 
   const stock: NestStock[] = [];

@@ -1,9 +1,9 @@
 import { and, asc, eq, max } from 'drizzle-orm';
 import type { Db } from '../open';
 import { drawerSchedules, jobs, parts } from '../schema';
-import { conflict } from '@/server/api/errors';
 import { PART_FIELD_NAMES, SCHEDULE_OWNED_FIELDS, type Part, type PartInput, type PartPatch } from '@/shared/schemas/part';
 import { recordAudit } from './audit';
+import { conflict } from '@/lib/errors';
 
 type PartRow = typeof parts.$inferSelect;
 

@@ -5,6 +5,7 @@ import type { NestRequest, Plan } from '@/shared/schemas/nesting';
 import { recordAudit } from './audit';
 import { validatePlan, type Violation } from '@/lib/nesting';
 import { planSchema } from '@/shared/schemas/nesting';
+import type { JobPlanSummary } from '@/shared/wire/plans';
 
 /** Judges a plan against its request with `validatePlan` (the same code the bench runs): the plan, or why not. */
 export function judgePlan(request: NestRequest, plan: unknown): { ok: true; plan: Plan } | { ok: false; violations: Violation[] } {
@@ -14,19 +15,7 @@ export function judgePlan(request: NestRequest, plan: unknown): { ok: true; plan
 
 
 /** What a list of a job's plans shows. */
-export interface JobPlanSummary {
-  id: string;
-  name: string;
-  status: (typeof plans.$inferSelect)['status'];
-  /** Nested from the job's re-cuts. */
-  recutPlan: boolean;
-  yieldRatio: number | null;
-  costCents: number | null;
-  pieces: number;
-  unplaced: number;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { JobPlanSummary } from '@/shared/wire/plans';
 
 // Millisecond times set here (not the database's microsecond now()) so `baseUpdatedAt` round-trips through JSON exactly.
 const stamp = () => {

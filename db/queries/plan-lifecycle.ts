@@ -10,8 +10,8 @@ import { recordAudit } from './audit';
 import { syncJobStatus } from './job-status';
 import { getShopSettings } from './shops';
 import { closeRecuts, holdRecutsForPlan, recordDamagedPieces, reopenRecuts } from './recuts';
-import { HttpError } from '@/server/api/errors';
 import type { JobStatus } from '@/shared/schemas/job';
+import { DomainError, invalid, notFoundBecause, conflict } from '@/lib/errors';
 
 /**
  * A plan moves material: draft → released (its exact stock reserved) → cutting → done (stock consumed, offcuts on
@@ -36,17 +36,16 @@ type PlanStatus = (typeof plans.$inferSelect)['status'];
 export type { MissingPiece };
 
 /** Release refused: these pieces are no longer free. Nothing was reserved. */
-export class StockShortage extends HttpError {
+export class StockShortage extends DomainError {
   constructor(
     readonly jobId: string,
     readonly missing: MissingPiece[],
   ) {
-    super(409, `${missing.length} stock piece${missing.length === 1 ? ' is' : 's are'} no longer available. Nothing was reserved; nest the job again against what is left.`);
+    const message = `${missing.length} stock piece${missing.length === 1 ? ' is' : 's are'} no longer available. Nothing was reserved; nest the job again against what is left.`;
+    // Every piece that is gone, and the Nest screen to re-nest from.
+    super('conflict', message, undefined, { missing, renest: `/jobs/${jobId}/plan` });
   }
 }
-
-/** The plan is missing (or another shop's), or not in a state that allows the step. */
-export class PlanStateError extends HttpError {}
 
 interface PieceGroup {
   ref: { source: 'stock' | 'buy' | 'offcut'; id: string };
@@ -60,7 +59,7 @@ function groupPieces(plan: Plan): PieceGroup[] {
   const groups = new Map<string, PieceGroup>();
   for (const piece of plan.pieces) {
     const ref = stockRef.parse(piece.stockId);
-    if (!ref) throw new PlanStateError(422, `The plan uses stock "${piece.stockId}" that is not from this stock room.`);
+    if (!ref) throw invalid(`The plan uses stock "${piece.stockId}" that is not from this stock room.`);
     const g = groups.get(piece.stockId);
     if (g) g.count += 1;
     else groups.set(piece.stockId, { ref, stockId: piece.stockId, count: 1, piece });
@@ -76,8 +75,8 @@ async function moveStatus(tx: Tx, shopId: string, planId: string, from: PlanStat
     .returning();
   if (row) return row;
   const [existing] = await tx.select({ status: plans.status }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
-  if (!existing) throw new PlanStateError(404, 'That plan was not found.');
-  throw new PlanStateError(409, `This plan is ${existing.status}; only a ${from.join(' or ')} plan can be ${verb}.`);
+  if (!existing) throw notFoundBecause('That plan was not found.');
+  throw conflict(`This plan is ${existing.status}; only a ${from.join(' or ')} plan can be ${verb}.`);
 }
 
 const missingFrom = (g: PieceGroup, free: number): MissingPiece => ({
@@ -276,12 +275,12 @@ export async function finishPlan(
     const parsed = nestRequestSchema.safeParse(row.request);
     const request = parsed.success ? parsed.data : null;
     const shop = await getShopSettings(tx, shopId);
-    if (!shop) throw new PlanStateError(404, 'The shop was not found.');
+    if (!shop) throw notFoundBecause('The shop was not found.');
     let outcome: FinishOutcome;
     try {
       outcome = finishOutcome(plan, request, minOffcutFor(request, shop), body);
     } catch (error) {
-      if (error instanceof FinishChoiceError) throw new PlanStateError(422, error.message);
+      if (error instanceof FinishChoiceError) throw invalid(error.message);
       throw error;
     }
     const reason = `Cut for plan “${row.name}”`;
@@ -294,7 +293,7 @@ export async function finishPlan(
         .from(stockItems)
         .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId)))
         .for('update');
-      if (!item) throw new PlanStateError(409, `A size this plan bought is no longer in the stock room (${g.piece.material}).`);
+      if (!item) throw conflict(`A size this plan bought is no longer in the stock room (${g.piece.material}).`);
       const fromRack = Math.min(g.count, Math.max(0, item.free));
       const onArrival = g.count - fromRack;
       if (fromRack) {

@@ -1,9 +1,9 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { Db } from '../open';
 import { hardwareItems, shops } from '../schema';
-import { conflict } from '@/server/api/errors';
 import { DEFAULT_PRICING, pricingSettingsSchema, type HardwareItem, type HardwareItemInput, type PricingSettings } from '@/shared/schemas/pricing';
 import { recordAudit } from './audit';
+import { conflict } from '@/lib/errors';
 
 export interface PricingView {
   currency: string;

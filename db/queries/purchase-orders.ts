@@ -1,7 +1,6 @@
 import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { plans, purchaseOrderLines, purchaseOrders, shops, stockItems, stockMovements, suppliers } from '../schema';
-import { conflict, HttpError, notFound } from '@/server/api/errors';
 import { groupBySupplier, lowStockOrders, piecesToBuy, type SupplierOrder } from '@/lib/buying/order-lines';
 import { poNumber, type DescribedSize, type PoStatus } from '@/lib/buying/describe';
 import { costEachCents } from '@/lib/stock/pricing';
@@ -10,6 +9,7 @@ import { isLowStock } from '@/lib/stock/low-stock';
 import type { PurchaseOrderPatch, ReceivePurchaseOrder } from '@/shared/schemas/purchase-order';
 import { recordAudit } from './audit';
 import { getTakeoff } from './takeoff';
+import { invalid, notFound, conflict } from '@/lib/errors';
 
 /** Statuses of an order still to come in: its sizes are "on order". */
 export const OPEN_STATUSES = ['draft', 'sent', 'part-received'] as const satisfies readonly PoStatus[];
@@ -234,7 +234,7 @@ export async function updateDraft(db: Db, shopId: string, userId: string, id: st
       const ids = patch.lines.map((l) => l.stockItemId);
       const found = ids.length ? await tx.select({ id: stockItems.id }).from(stockItems).where(and(eq(stockItems.shopId, shopId), inArray(stockItems.id, ids))) : [];
       const missing = patch.lines.findIndex((l) => !found.some((f) => f.id === l.stockItemId));
-      if (missing >= 0) throw new HttpError(422, `Line ${missing + 1} names a stock size this shop does not have.`, { [`lines.${missing}.stockItemId`]: ['Pick one of the stock room’s sizes.'] });
+      if (missing >= 0) throw invalid(`Line ${missing + 1} names a stock size this shop does not have.`, { [`lines.${missing}.stockItemId`]: ['Pick one of the stock room’s sizes.'] });
       await tx.delete(purchaseOrderLines).where(eq(purchaseOrderLines.purchaseOrderId, id));
       if (patch.lines.length) await tx.insert(purchaseOrderLines).values(patch.lines.map((l, position) => ({ ...l, shopId, purchaseOrderId: id, position })));
     }
@@ -260,8 +260,8 @@ export async function markSent(db: Db, shopId: string, userId: string, id: strin
     if (row.status !== 'draft') throw conflict(`${poNumber(row.number)} was already sent.`);
     if (row.updatedAt.toISOString() !== seenUpdatedAt) throw conflict(`${poNumber(row.number)} changed while it was being sent: look it over and send it again.`);
     const [{ n }] = await tx.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(purchaseOrderLines).where(eq(purchaseOrderLines.purchaseOrderId, id));
-    if (n === 0) throw new HttpError(422, 'An order with no lines cannot be sent: add what to buy.');
-    if (!row.supplierEmail) throw new HttpError(422, 'Add the supplier’s e-mail address to send the order.', { supplierEmail: ['Type the supplier’s e-mail address.'] });
+    if (n === 0) throw invalid('An order with no lines cannot be sent: add what to buy.');
+    if (!row.supplierEmail) throw invalid('Add the supplier’s e-mail address to send the order.', { supplierEmail: ['Type the supplier’s e-mail address.'] });
     const mail = await enqueue(tx);
     await tx.update(purchaseOrders).set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() }).where(eq(purchaseOrders.id, id));
     await rememberSupplierEmail(tx, shopId, row.supplier, row.supplierEmail);
@@ -300,8 +300,8 @@ export async function receivePurchaseOrder(db: Db, shopId: string, userId: strin
       .where(eq(purchaseOrderLines.purchaseOrderId, id))
       .for('update');
     const wanted = input.all ? lines.filter((l) => l.line.quantity > l.line.received).map((l) => ({ lineId: l.line.id, quantity: l.line.quantity - l.line.received })) : input.lines.filter((l) => l.quantity > 0);
-    if (!wanted.length) throw new HttpError(422, 'Say how many pieces came on at least one line.');
-    for (const w of input.lines) if (!lines.some((l) => l.line.id === w.lineId)) throw new HttpError(422, `A line named is not on ${title}.`);
+    if (!wanted.length) throw invalid('Say how many pieces came on at least one line.');
+    for (const w of input.lines) if (!lines.some((l) => l.line.id === w.lineId)) throw invalid(`A line named is not on ${title}.`);
     for (const w of wanted) {
       const { line, item } = lines.find((l) => l.line.id === w.lineId)!;
       const open = line.quantity - line.received;

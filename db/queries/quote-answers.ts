@@ -11,7 +11,6 @@ import { and, eq, inArray, lt, sql } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { Db } from '../open';
 import { customers, jobs, paymentEvents, quotePayments, quoteRevisions, quotes, shops } from '../schema';
-import { conflict, HttpError, notFound } from '@/server/api/errors';
 import { formatMoney } from '@/lib/costing/money';
 import { formatShopDateTime, shopDay } from '@/lib/dates/shop-time';
 import { appBaseUrl } from '@/lib/mail/config';
@@ -24,6 +23,7 @@ import { quoteNumberText, revisionLetter } from '@/shared/schemas/quote';
 import { recordAudit } from './audit';
 import { syncJobStatus } from './job-status';
 import { revisionTotals } from './quotes';
+import { invalid, notFoundBecause, conflict, gone, unavailable } from '@/lib/errors';
 
 export const QUOTE_TOKEN = /^[A-Za-z0-9_-]{43}$/;
 export const hashQuoteToken = (token: string) => createHash('sha256').update(token, 'utf8').digest('hex');
@@ -48,7 +48,7 @@ async function findByToken(tx: Db, token: string, { lock = false } = {}) {
     .where(eq(quoteRevisions.linkTokenHash, hashQuoteToken(token)));
   const [row] = lock ? await q.for('update', { of: quoteRevisions }) : await q;
   // An unknown token and a malformed one read the same: the link does not work (the caller counts the failure).
-  if (!row) throw new HttpError(404, 'This quote link does not work. Check that the whole address was copied, or ask the shop to send it again.');
+  if (!row) throw notFoundBecause('This quote link does not work. Check that the whole address was copied, or ask the shop to send it again.');
   const [customer] = row.job.customerId ? await tx.select().from(customers).where(eq(customers.id, row.job.customerId)) : [];
   const [paid] = await tx
     .select({ n: sql<number>`count(*)`.mapWith(Number), paidAt: sql<Date | null>`max(${quotePayments.paidAt})`.mapWith((v) => (v ? new Date(v) : null)) })
@@ -134,7 +134,7 @@ export async function answerQuote(db: Db, token: string, answer: QuoteAnswer, fr
     const f = await findByToken(tx, token, { lock: true });
     const state = stateOf(f, now);
     const refused = refuseAnswer(state);
-    if (refused) throw new HttpError(state === 'expired' ? 410 : 409, refused);
+    if (refused) throw (state === 'expired' ? gone(refused) : conflict(refused));
     const accepted = answer.answer === 'accept';
     await tx
       .update(quoteRevisions)
@@ -174,7 +174,7 @@ export async function startDepositCheckout(db: Db, stripe: Stripe, token: string
   const state = stateOf(f, now);
   const totals = revisionTotals(f.r);
   const refused = refusePayment(state, totals.depositMinor);
-  if (refused) throw new HttpError(state === 'expired' ? 410 : 409, refused);
+  if (refused) throw (state === 'expired' ? gone(refused) : conflict(refused));
   const back = appBaseUrl() + quoteLinkPath(token);
   const title = `${quoteNumberText(f.number)} rev ${revisionLetter(f.r.revision)}`;
   const session = await stripe.checkout.sessions.create({
@@ -186,7 +186,7 @@ export async function startDepositCheckout(db: Db, stripe: Stripe, token: string
     success_url: `${back}?checkout={CHECKOUT_SESSION_ID}`,
     cancel_url: `${back}?checkout=cancelled`,
   });
-  if (!session.url) throw new HttpError(502, 'The payments service did not give a checkout address. Try again in a moment.');
+  if (!session.url) throw unavailable('The payments service did not give a checkout address. Try again in a moment.');
   await db.insert(quotePayments).values({ shopId: f.shop.id, revisionId: f.r.id, jobId: f.job.id, checkoutSessionId: session.id, amountMinor: totals.depositMinor, currency: f.r.currency });
   return { url: session.url };
 }
@@ -215,7 +215,7 @@ async function recordPaid(tx: Db, session: SessionFacts, now: Date): Promise<{ o
   const [revision] = await tx.select().from(quoteRevisions).where(eq(quoteRevisions.id, payment.revisionId));
   const deposit = revisionTotals(revision).depositMinor;
   if (session.amount_total !== payment.amountMinor || session.amount_total !== deposit || (session.currency ?? '').toLowerCase() !== payment.currency.toLowerCase()) {
-    throw new HttpError(422, `The payment (${session.amount_total ?? '?'} ${session.currency ?? '?'}) does not match the quote's deposit (${deposit} ${payment.currency.toLowerCase()}), so it was not recorded.`);
+    throw invalid(`The payment (${session.amount_total ?? '?'} ${session.currency ?? '?'}) does not match the quote's deposit (${deposit} ${payment.currency.toLowerCase()}), so it was not recorded.`);
   }
   const intent = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
   await tx.update(quotePayments).set({ status: 'paid', paidAt: now, paymentIntentId: intent }).where(eq(quotePayments.id, payment.id));

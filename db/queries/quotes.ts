@@ -1,7 +1,6 @@
 import { and, desc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, parts, plans, quoteRevisions, quotes, shops } from '../schema';
-import { conflict, HttpError, notFound } from '@/server/api/errors';
 import { quoteTotals, type QuoteTotals } from '@/lib/costing/quote-totals';
 import { boxFromOpening } from '@/lib/joinery/box-from-opening';
 import { requiredSetupCards, SETUP_CARD_TOLERANCE_MM } from '@/lib/joinery/setup-cards';
@@ -26,6 +25,7 @@ import { syncJobStatus } from './job-status';
 import { getPricing, listHardware } from './pricing';
 import { getShopSettings } from './shops';
 import { getTakeoff } from './takeoff';
+import { invalid, notFound, conflict } from '@/lib/errors';
 
 type RevisionRow = typeof quoteRevisions.$inferSelect;
 
@@ -181,7 +181,7 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
   if (!job) throw notFound('That job');
   if (planId) {
     const [plan] = await db.select({ id: plans.id }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), eq(plans.id, planId), ne(plans.status, 'cancelled')));
-    if (!plan) throw new HttpError(422, 'That plan is not one of this job’s (or it was cancelled).', { planId: ['Pick one of the job’s plans.'] });
+    if (!plan) throw invalid('That plan is not one of this job’s (or it was cancelled).', { planId: ['Pick one of the job’s plans.'] });
   }
   const [settings, priced, hardware] = await Promise.all([getShopSettings(db, shopId), getPricing(db, shopId), listHardware(db, shopId)]);
   if (!settings || !priced) throw notFound('The shop');
@@ -254,11 +254,11 @@ export async function updateRevision(db: Db, shopId: string, userId: string, rev
     const row = await lockRevision(tx, shopId, revisionId);
     if (row.status !== 'draft') throw conflict('This revision was sent and stays as the customer has it: make a new revision to change it.');
     const next = { ...row, ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)) } as RevisionRow;
-    if (new Set(next.lines.map((l) => l.id)).size !== next.lines.length) throw new HttpError(422, 'Two lines share an id.', { lines: ['Each line needs its own id.'] });
+    if (new Set(next.lines.map((l) => l.id)).size !== next.lines.length) throw invalid('Two lines share an id.', { lines: ['Each line needs its own id.'] });
     try {
       revisionTotals(next);
     } catch (e) {
-      if (e instanceof RangeError) throw new HttpError(422, e.message, { _: [e.message] });
+      if (e instanceof RangeError) throw invalid(e.message, { _: [e.message] });
       throw e;
     }
     await tx.update(quoteRevisions).set({ ...patch, updatedAt: new Date() }).where(eq(quoteRevisions.id, revisionId));
@@ -295,8 +295,8 @@ export async function sendRevision(db: Db, shopId: string, userId: string, revis
   const [job, settings] = await Promise.all([getJob(db, shopId, revision.jobId), getShopSettings(db, shopId)]);
   if (!job || !settings) throw notFound('That quote');
   const [customer] = job.customerId ? await db.select().from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, job.customerId))) : [];
-  if (!customer) throw new HttpError(422, 'The job has no customer to send the quote to: pick one on the job first.', { customer: ['Pick the customer this quote is for.'] });
-  if (!customer.email) throw new HttpError(422, `${customer.name} has no e-mail address: add it on their customer page, then send.`, { email: [`Add ${customer.name}’s e-mail address.`] });
+  if (!customer) throw invalid('The job has no customer to send the quote to: pick one on the job first.', { customer: ['Pick the customer this quote is for.'] });
+  if (!customer.email) throw invalid(`${customer.name} has no e-mail address: add it on their customer page, then send.`, { email: [`Add ${customer.name}’s e-mail address.`] });
   const link = newQuoteLink();
   const sentDay = shopDay(now, settings.timeZone);
   const validUntil = lastValidDay(sentDay, revision.validityDays);
@@ -308,7 +308,7 @@ export async function sendRevision(db: Db, shopId: string, userId: string, revis
     if (row.revision !== latest.n) throw conflict(`Only the latest revision can be sent: this is rev ${revisionLetter(row.revision)}, the latest is rev ${revisionLetter(latest.n)}.`);
     if (row.status !== 'draft') throw conflict('This revision was already sent.');
     if (row.updatedAt.toISOString() !== revision.updatedAt) throw conflict('This revision changed while it was being sent: look it over and send it again.');
-    if (row.lines.length === 0) throw new HttpError(422, 'A quote with no lines cannot be sent.');
+    if (row.lines.length === 0) throw invalid('A quote with no lines cannot be sent.');
     const replaced = await tx
       .update(quoteRevisions)
       .set({ status: 'replaced', updatedAt: now })

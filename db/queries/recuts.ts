@@ -1,12 +1,12 @@
 import { aliasedTable, and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { parts, plans, recuts, users } from '../schema';
-import { HttpError, notFound } from '@/server/api/errors';
 import { DEFAULT_RECUT_REASON, recutLabel, type RecutPart } from '@/lib/recuts/recuts';
 import type { NestRequest } from '@/shared/schemas/nesting';
 import type { RecutView } from '@/shared/schemas/recut';
 import { recordAudit } from './audit';
 import { syncJobStatus } from './job-status';
+import { invalid, notFound, conflict } from '@/lib/errors';
 
 const sourcePlans = aliasedTable(plans, 'source_plans');
 const recutPlans = aliasedTable(plans, 'recut_plans');
@@ -110,7 +110,7 @@ export async function recordDamagedPieces(tx: Db, { shopId, userId, plan, reques
       continue;
     }
     const part = request?.parts.find((p) => p.id === d.partId);
-    if (!part) throw new HttpError(422, `The plan has no part ${d.partId}: nothing was recorded.`);
+    if (!part) throw invalid(`The plan has no part ${d.partId}: nothing was recorded.`);
     rows.push({
       ...base,
       partId: jobParts.has(part.id) ? part.id : null,
@@ -148,7 +148,7 @@ export async function holdRecutsForPlan(tx: Db, { shopId, planId, recutIds }: { 
   if (held.length === ids.length) return;
   const gone = await tx.select({ label: recuts.label, instance: recuts.instance, status: recuts.status }).from(recuts).where(and(eq(recuts.shopId, shopId), inArray(recuts.id, ids.filter((id) => !held.some((h) => h.id === id)))));
   const names = gone.map((g) => `${recutLabel(g)} (${g.status === 'planned' ? 'in another released plan' : g.status})`);
-  throw new HttpError(409, `${names.length ? names.join(', ') : 'A re-cut of this plan'} ${names.length === 1 ? 'is' : 'are'} no longer open. Nothing was released; nest the re-cuts again.`);
+  throw conflict(`${names.length ? names.join(', ') : 'A re-cut of this plan'} ${names.length === 1 ? 'is' : 'are'} no longer open. Nothing was released; nest the re-cuts again.`);
 }
 
 /** At cancel of a re-cut plan: what it held goes back on the list to nest again. */
@@ -176,8 +176,8 @@ export async function cancelRecut(db: Db, { shopId, userId, id, reason }: { shop
     if (!row) {
       const [existing] = await tx.select({ status: recuts.status, planName: plans.name }).from(recuts).leftJoin(plans, eq(plans.id, recuts.recutPlanId)).where(and(eq(recuts.shopId, shopId), eq(recuts.id, id)));
       if (!existing) throw notFound('That re-cut');
-      if (existing.status === 'planned') throw new HttpError(409, `This re-cut is in the released plan “${existing.planName ?? ''}”: cancel that plan first, or finish it.`);
-      throw new HttpError(409, `This re-cut is already ${existing.status}.`);
+      if (existing.status === 'planned') throw conflict(`This re-cut is in the released plan “${existing.planName ?? ''}”: cancel that plan first, or finish it.`);
+      throw conflict(`This re-cut is already ${existing.status}.`);
     }
     await recordAudit(tx, { shopId, userId, action: 'cancel', entity: 'recut', entityId: id, data: { label: recutLabel(row), reason } });
     const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: 're-cut cancelled' });

@@ -1,31 +1,15 @@
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, plans, sawSteps, users } from '../schema';
-import { HttpError, notFound } from '@/server/api/errors';
 import { readPlan } from '@/lib/nesting';
 import { nestRequestSchema, nestSettingsSchema } from '@/shared/schemas/nesting';
 import { recordAudit } from './audit';
 import { syncJobStatus } from './job-status';
 import { getPlan } from './plan-document';
 import { getShopSettings } from './shops';
+import { invalid, notFound, conflict } from '@/lib/errors';
+import type { PlanTicks, StepRef, StepTick } from '@/shared/wire/plans';
 
-/** A saw-order step ticked done: which piece (0-based, as in the plan document), which step (its `n`), who and when. */
-export interface StepTick {
-  piece: number;
-  step: number;
-  doneAt: string;
-  doneBy: string | null;
-}
-
-export interface PlanTicks {
-  status: (typeof plans.$inferSelect)['status'];
-  ticks: StepTick[];
-}
-
-export interface StepRef {
-  piece: number;
-  step: number;
-}
 
 /** Plans the saw works on; ticks are refused on drafts, finished and cancelled plans. */
 const CUTTABLE = ['released', 'cutting'] as const;
@@ -45,12 +29,12 @@ async function checkStep(db: Db, shopId: string, planId: string, ref: StepRef) {
   const [row] = await db.select({ status: plans.status, document: plans.document }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!row) throw notFound('That plan');
   if (!(CUTTABLE as readonly string[]).includes(row.status)) {
-    throw new HttpError(409, `This plan is ${row.status}: steps are ticked only on a released plan or one being cut.`);
+    throw conflict(`This plan is ${row.status}: steps are ticked only on a released plan or one being cut.`);
   }
   const piece = readPlan(row.document).pieces[ref.piece];
-  if (!piece) throw new HttpError(422, `The plan has no stock piece ${ref.piece + 1}.`, { piece: ['No such stock piece in this plan.'] });
+  if (!piece) throw invalid(`The plan has no stock piece ${ref.piece + 1}.`, { piece: ['No such stock piece in this plan.'] });
   if (!(piece.sawOrder ?? []).some((s) => s.n === ref.step)) {
-    throw new HttpError(422, `That stock piece has no step ${ref.step}.`, { step: ['No such step on this stock piece.'] });
+    throw invalid(`That stock piece has no step ${ref.step}.`, { step: ['No such step on this stock piece.'] });
   }
 }
 

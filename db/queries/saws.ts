@@ -1,9 +1,9 @@
 import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { saws } from '../schema';
-import { conflict } from '@/server/api/errors';
 import type { Saw, SawKind } from '@/shared/schemas/saw';
 import { recordAudit } from './audit';
+import { conflict } from '@/lib/errors';
 
 export interface SavedSaw extends Saw {
   id: string;

@@ -1,10 +1,10 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { Db } from '../open';
 import { setupCards } from '../schema';
-import { conflict } from '@/server/api/errors';
 import { SETUP_CARD_TOLERANCE_MM } from '@/lib/joinery/setup-cards';
 import type { SetupCard, SetupCardField } from '@/shared/schemas/setup-card';
 import { recordAudit } from './audit';
+import { conflict } from '@/lib/errors';
 
 export interface SavedSetupCard extends SetupCard {
   id: string;

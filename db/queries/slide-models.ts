@@ -1,9 +1,9 @@
 import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { slideModels } from '../schema';
-import { conflict } from '@/server/api/errors';
 import type { SlideModel, SlideModelKind, SlideWidthRule } from '@/shared/schemas/slide-model';
 import { recordAudit } from './audit';
+import { conflict } from '@/lib/errors';
 
 export interface SavedSlideModel extends SlideModel {
   id: string;

@@ -3,12 +3,13 @@ import type { Db } from '../open';
 import { jobs, offcuts, plans, users } from '../schema';
 import { readPlan } from '@/lib/nesting';
 import { planFigures } from '@/lib/stock/finish-plan';
+import type { YieldLedger } from '@/shared/wire/plans';
 
 /**
  * Finished plans for the yield ledger: yield, waste and cost recorded at done, with the stock area that weighs them.
  * Waste is split into the saw's (trim, kerf, pieces too small to keep) and parts spoiled at the saw (re-cuts).
  */
-export async function listYieldLedger(db: Db, shopId: string) {
+export async function listYieldLedger(db: Db, shopId: string): Promise<YieldLedger> {
   const rows = await db
     .select({
       id: plans.id,

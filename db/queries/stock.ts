@@ -6,18 +6,19 @@ import { z } from 'zod';
 import { isLowStock } from '@/lib/stock/low-stock';
 import { costEachCents } from './nest-request';
 import { recordAudit } from './audit';
-import { HttpError } from '@/server/api/errors';
+import { DomainError } from '@/lib/errors';
+import type { DetailChange, MovementRow, OffcutRow, StockDetailChanges, StockItemRow } from '@/shared/wire/stock';
 
-/** A stock-room request that cannot be done as asked (409), with a message safe to show. */
-export class StockConflict extends HttpError {
+/** A stock-room request that cannot be done as asked (a conflict), with a message safe to show. */
+export class StockConflict extends DomainError {
   constructor(message: string) {
-    super(409, message);
+    super('conflict', message);
   }
 }
 
 const like = (v: string) => `%${v.replace(/[%_\\]/g, (c) => `\\${c}`)}%`;
 
-export type StockItemRow = typeof stockItems.$inferSelect & { free: number; low: boolean; valueCents: number };
+export type { DetailChange, MovementRow, OffcutRow, StockDetailChanges, StockItemRow } from '@/shared/wire/stock';
 
 export async function listStock(db: Db, shopId: string, filter: StockFilter = {}): Promise<StockItemRow[]> {
   const where: SQL[] = [eq(stockItems.shopId, shopId)];
@@ -34,7 +35,7 @@ export async function listStock(db: Db, shopId: string, filter: StockFilter = {}
 }
 
 /** The rack. Used offcuts are history (shown only when asked for by status). */
-export async function listOffcuts(db: Db, shopId: string, filter: StockFilter = {}) {
+export async function listOffcuts(db: Db, shopId: string, filter: StockFilter = {}): Promise<OffcutRow[]> {
   const where: SQL[] = [eq(offcuts.shopId, shopId)];
   where.push(filter.status ? eq(offcuts.status, filter.status) : ne(offcuts.status, 'used'));
   if (!filter.status) where.push(ne(offcuts.status, 'scrapped'));
@@ -60,7 +61,6 @@ export async function createStockItem(db: Db, shopId: string, userId: string, va
 }
 
 /** One field's change as the audit log keeps it. */
-export type StockDetailChanges = Partial<Record<StockDetailField, { from: unknown; to: unknown }>>;
 
 /**
  * Changes a size's details (never its counts or dimensions). Only fields whose value differs are written, and the
@@ -157,7 +157,7 @@ export async function importStock(db: Db, shopId: string, userId: string, items:
   });
 }
 
-export async function listMovements(db: Db, shopId: string, { stockItemId, offcutId, limit = 200 }: { stockItemId?: string; offcutId?: string; limit?: number } = {}) {
+export async function listMovements(db: Db, shopId: string, { stockItemId, offcutId, limit = 200 }: { stockItemId?: string; offcutId?: string; limit?: number } = {}): Promise<MovementRow[]> {
   const where: SQL[] = [eq(stockMovements.shopId, shopId)];
   if (stockItemId) where.push(eq(stockMovements.stockItemId, stockItemId));
   if (offcutId) where.push(eq(stockMovements.offcutId, offcutId));
@@ -196,7 +196,7 @@ function readDetailChanges(data: unknown): StockDetailChanges {
 }
 
 /** Changes to sizes' details (no count moved), newest first, for the history beside the ledger. */
-export async function listDetailChanges(db: Db, shopId: string, { stockItemId, limit = 200 }: { stockItemId?: string; limit?: number } = {}) {
+export async function listDetailChanges(db: Db, shopId: string, { stockItemId, limit = 200 }: { stockItemId?: string; limit?: number } = {}): Promise<DetailChange[]> {
   const where: SQL[] = [eq(auditEvents.shopId, shopId), eq(auditEvents.entity, 'stock-item'), eq(auditEvents.action, 'update')];
   if (stockItemId) where.push(eq(auditEvents.entityId, stockItemId));
   const rows = await db
@@ -216,7 +216,6 @@ export async function listDetailChanges(db: Db, shopId: string, { stockItemId, l
     .limit(limit);
   return rows.map(({ data, ...r }) => ({ ...r, changes: readDetailChanges(data) }));
 }
-export type DetailChange = Awaited<ReturnType<typeof listDetailChanges>>[number];
 
 /**
  * The ledger read back as counts: on hand = the sum of every row's on-hand change (receipts, adjustments,

@@ -2,11 +2,11 @@ import bcrypt from 'bcryptjs';
 import { and, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { users } from '../schema';
-import { conflict, HttpError, notFound } from '@/server/api/errors';
 import type { TeamMember, TeamMemberInput, TeamMemberPatch } from '@/shared/schemas/user';
 import { recordAudit } from './audit';
 import { hasPassword, NO_PASSWORD_YET, queueInvite } from './user-links';
 import { listTeam } from './users';
+import { invalid, notFound, conflict } from '@/lib/errors';
 
 const member = (u: { id: string; name: string; email: string; role: TeamMember['role']; active: boolean; passwordHash: string; createdAt: Date }): TeamMember => ({
   id: u.id,
@@ -41,7 +41,7 @@ export async function addTeamMember(db: Db, shopId: string, actorId: string, inp
       return member(row);
     });
   } catch (error) {
-    if (isUniqueViolation(error)) throw new HttpError(422, 'That e-mail is already in use.', { email: ['That e-mail is already in use.'] });
+    if (isUniqueViolation(error)) throw invalid('That e-mail is already in use.', { email: ['That e-mail is already in use.'] });
     throw error;
   }
 }

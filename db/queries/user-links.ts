@@ -8,12 +8,12 @@ import bcrypt from 'bcryptjs';
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { shops, userTokens, users } from '../schema';
-import { HttpError } from '@/server/api/errors';
 import { appBaseUrl } from '@/lib/mail/config';
 import { enqueueMail } from '@/server/mail/outbox';
 import { inviteMail, passwordResetMail } from '@/lib/mail/templates';
 import type { Role } from '@/lib/auth/permissions';
 import { recordAudit } from './audit';
+import { notFoundBecause, gone } from '@/lib/errors';
 
 export type LinkPurpose = 'invite' | 'password-reset';
 
@@ -109,7 +109,7 @@ export const LINK_REFUSALS: Record<'unknown' | 'used' | 'expired', string> = {
  * of theirs — all in one transaction, with the token row locked so two tabs cannot both use it.
  */
 export async function useLink(db: Db, purpose: LinkPurpose, token: string, password: string, now = new Date()): Promise<{ email: string }> {
-  if (!LINK_TOKEN.test(token)) throw new HttpError(404, LINK_REFUSALS.unknown);
+  if (!LINK_TOKEN.test(token)) throw notFoundBecause(LINK_REFUSALS.unknown);
   const passwordHash = await bcrypt.hash(password, 10);
   return db.transaction(async (tx) => {
     const [link] = await tx
@@ -117,15 +117,15 @@ export async function useLink(db: Db, purpose: LinkPurpose, token: string, passw
       .from(userTokens)
       .where(and(eq(userTokens.tokenHash, hashToken(token)), eq(userTokens.purpose, purpose)))
       .for('update');
-    if (!link) throw new HttpError(404, LINK_REFUSALS.unknown);
-    if (link.usedAt) throw new HttpError(410, LINK_REFUSALS.used);
-    if (link.expiresAt <= now) throw new HttpError(410, LINK_REFUSALS.expired);
+    if (!link) throw notFoundBecause(LINK_REFUSALS.unknown);
+    if (link.usedAt) throw gone(LINK_REFUSALS.used);
+    if (link.expiresAt <= now) throw gone(LINK_REFUSALS.expired);
     const [person] = await tx
       .update(users)
       .set({ passwordHash, tokenVersion: sql`${users.tokenVersion} + 1` })
       .where(and(eq(users.id, link.userId), eq(users.active, true)))
       .returning();
-    if (!person) throw new HttpError(404, LINK_REFUSALS.unknown);
+    if (!person) throw notFoundBecause(LINK_REFUSALS.unknown);
     await tx.update(userTokens).set({ usedAt: now }).where(and(eq(userTokens.userId, person.id), isNull(userTokens.usedAt)));
     await recordAudit(tx, { shopId: person.shopId, userId: person.id, action: 'update', entity: 'user', entityId: person.id, data: { passwordSetBy: purpose } });
     return { email: person.email };

@@ -1,10 +1,7 @@
 /** How far the saw has got: per stock piece, which steps are ticked and which comes next. */
 import type { PlanPiece } from '@/shared/schemas/nesting';
+import type { StepRef } from '@/shared/wire/plans';
 
-export interface Tick {
-  piece: number;
-  step: number;
-}
 
 export interface PieceProgress {
   piece: number;
@@ -15,7 +12,7 @@ export interface PieceProgress {
   ticked: Set<number>;
 }
 
-export function sawProgress(pieces: readonly Pick<PlanPiece, 'sawOrder'>[], ticks: readonly Tick[]) {
+export function sawProgress(pieces: readonly Pick<PlanPiece, 'sawOrder'>[], ticks: readonly StepRef[]) {
   const byPiece: PieceProgress[] = pieces.map((p, piece) => {
     const steps = (p.sawOrder ?? []).map((s) => s.n);
     const ticked = new Set(ticks.filter((t) => t.piece === piece && steps.includes(t.step)).map((t) => t.step));

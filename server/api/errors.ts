@@ -1,6 +1,19 @@
 import { ZodError } from 'zod';
+import { DomainError, type DomainErrorKind, type FieldMessages } from '@/lib/errors';
 
-/** An error that maps to one HTTP status and a message safe to show. */
+export { conflict, forbidden, gone, invalid, notFound, notFoundBecause } from '@/lib/errors';
+
+/** How each kind of refusal of the shop's rules (lib/errors.ts) answers over HTTP. */
+export const STATUS_OF_KIND: Record<DomainErrorKind, 403 | 404 | 409 | 410 | 422 | 502> = {
+  invalid: 422,
+  forbidden: 403,
+  'not-found': 404,
+  conflict: 409,
+  gone: 410,
+  unavailable: 502,
+};
+
+/** An error of the web edge itself (not signed in, a body too large or not JSON, too many attempts), with its status. */
 export class HttpError extends Error {
   constructor(
     readonly status: 400 | 401 | 403 | 404 | 409 | 410 | 413 | 415 | 422 | 429 | 502,
@@ -14,18 +27,35 @@ export class HttpError extends Error {
 }
 
 export const unauthorized = () => new HttpError(401, 'Sign in to continue.');
-export const forbidden = () => new HttpError(403, 'Your role does not allow this.');
-/** Missing and "another shop's" look the same from outside. */
-export const notFound = (what = 'That') => new HttpError(404, `${what} was not found.`);
-export const conflict = (message: string) => new HttpError(409, message);
+
+/** The status an error answers with, when it is one of ours (a refusal of the rules or an error of the edge). */
+export function statusOf(error: unknown): number | undefined {
+  if (error instanceof DomainError) return STATUS_OF_KIND[error.kind];
+  if (error instanceof HttpError) return error.status;
+  return undefined;
+}
+
+/** A refusal the person can read (rules or edge), as opposed to a fault of ours. */
+export const isShownError = (error: unknown): error is DomainError | HttpError => statusOf(error) !== undefined;
 
 export interface ErrorBody {
   error: string;
-  fields?: Record<string, string[]>;
+  fields?: FieldMessages;
+  /** A refusal's details sit beside the message (a stock shortage's `missing` pieces and `renest` address). */
+  [detail: string]: unknown;
 }
 
-/** The one error mapper: zod → 422 with field messages, HttpError → its status, anything else → 500. */
+/**
+ * The one error mapper: a refusal of the shop's rules → its kind's status with fields and details, zod → 422 with
+ * field messages, HttpError → its status, anything else → 500.
+ */
 export function toErrorResponse(error: unknown, requestId?: string): { status: number; body: ErrorBody; headers?: Record<string, string> } {
+  if (error instanceof DomainError) {
+    return {
+      status: STATUS_OF_KIND[error.kind],
+      body: { ...error.details, error: error.message, ...(error.fields ? { fields: error.fields } : {}) },
+    };
+  }
   if (error instanceof HttpError) {
     return { status: error.status, body: { error: error.message, ...(error.fields ? { fields: error.fields } : {}) }, headers: error.headers };
   }
@@ -44,8 +74,8 @@ export function setErrorReporter(report: (error: unknown, requestId?: string) =>
   reportError = report;
 }
 
-export function zodFieldErrors(error: ZodError): Record<string, string[]> {
-  const fields: Record<string, string[]> = {};
+export function zodFieldErrors(error: ZodError): FieldMessages {
+  const fields: FieldMessages = {};
   for (const issue of error.issues) {
     const key = issue.path.length ? issue.path.join('.') : '_';
     (fields[key] ??= []).push(issue.message);

@@ -1,6 +1,6 @@
 import 'server-only';
 import type { NextRequest } from 'next/server';
-import { HttpError } from './errors';
+import { HttpError, statusOf } from './errors';
 import { clientAddress, limit, spend, tooManyAttempts } from './limit';
 
 /** The public routes that may be hammered from outside: asking for a reset link, and using a link's token. */
@@ -37,7 +37,7 @@ export async function countingFailedLinks<T>(req: Pick<NextRequest, 'headers'>, 
   try {
     return await use();
   } catch (error) {
-    if (error instanceof HttpError && (error.status === 404 || error.status === 410)) await spend('invite-accept', `address:${clientAddress(req.headers)}`);
+    if (statusOf(error) === 404 || statusOf(error) === 410) await spend('invite-accept', `address:${clientAddress(req.headers)}`);
     throw error;
   }
 }

@@ -69,7 +69,9 @@ export async function enqueueMail(tx: Db, message: OutboxMessage): Promise<Queue
   return { id: row.id, messageId };
 }
 
-export type OutboxStatus = 'pending' | 'sending' | 'sent' | 'failed';
+import type { OutboxStatus } from '@/shared/wire/mail';
+
+export type { OutboxStatus };
 
 export interface OutboxEntry {
   id: string;

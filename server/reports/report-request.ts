@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Db } from '@/db/open';
 import { getShopSettings } from '@/db/queries/shops';
-import { HttpError, notFound } from '@/server/api/errors';
+import { invalid, notFound } from '@/server/api/errors';
 import { reportRange, type ReportQuery } from '@/shared/schemas/report';
 
 /** A report's filter for the signed-in person's shop: its time zone and units, the range with defaults filled in. */
@@ -9,7 +9,7 @@ export async function reportFilterFor(db: Db, shopId: string, query: ReportQuery
   const settings = await getShopSettings(db, shopId);
   if (!settings) throw notFound('The shop');
   const range = reportRange(query, settings.timeZone, now);
-  if ('error' in range) throw new HttpError(422, range.error, { from: [range.error] });
+  if ('error' in range) throw invalid(range.error, { from: [range.error] });
   return { settings, filter: { shopId, timeZone: settings.timeZone, material: query.material, customerId: query.customer, jobId: query.job, ...range } };
 }
 

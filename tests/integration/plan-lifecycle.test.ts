@@ -2,7 +2,8 @@ import { describe, expect, test } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import type { Db, DbHandle } from '@/db/open';
 import { offcuts, placements, planPieces, plans, stockItems, stockMovements } from '@/db/schema';
-import { cancelPlan, finishPlan, PlanStateError, releasePlan, StockShortage } from '@/db/queries/plan-lifecycle';
+import { DomainError } from '@/lib/errors';
+import { cancelPlan, finishPlan, releasePlan, StockShortage } from '@/db/queries/plan-lifecycle';
 import { stockRef } from '@/db/queries/nest-request';
 import { ledgerMismatches, listOffcuts, listStock } from '@/db/queries/stock';
 import { optimize } from '@/lib/nesting';
@@ -104,7 +105,7 @@ describe('releasing plans that race for the same stock', () => {
     const plan = await draftPlan({ parts: [part('twice', 1000, 500, 2, 'Twice ply')], stock: [asStock(item)] });
     const results = await Promise.allSettled(Array.from({ length: 5 }, () => releasePlan(db, { ...who(), planId: plan.id })));
     expect(results.filter((r) => r.status === 'fulfilled')).toHaveLength(1);
-    for (const r of results) if (r.status === 'rejected') expect(r.reason).toMatchObject({ status: 409, message: expect.stringMatching(/released/) });
+    for (const r of results) if (r.status === 'rejected') expect(r.reason).toMatchObject({ kind: 'conflict', message: expect.stringMatching(/released/) });
     const [after] = await db.select().from(stockItems).where(eq(stockItems.id, item.id));
     expect(after.reserved).toBe(plan.document.pieces.length);
   });
@@ -190,7 +191,7 @@ describe('a plan from release to done', () => {
     await cancelPlan(db, { ...who(), planId: plan.id });
     expect(await listStock(db, fx.mine.id, { material: 'Cancel ply' })).toEqual(before);
     expect((await db.select().from(offcuts).where(eq(offcuts.id, o.id)))[0].status).toBe('available');
-    await expect(finishPlan(db, { shopId: fx.mine.id, userId: fx.cutter.id, planId: plan.id, body: { offcuts: [], damaged: [] } })).rejects.toMatchObject({ status: 409 });
+    await expect(finishPlan(db, { shopId: fx.mine.id, userId: fx.cutter.id, planId: plan.id, body: { offcuts: [], damaged: [] } })).rejects.toMatchObject({ kind: 'conflict' });
     await expectLedgerMatchesCounts();
   });
 
@@ -212,7 +213,7 @@ describe('a plan from release to done', () => {
   test("another shop can neither release this shop's plan nor see its stock", async () => {
     const item = await sheet({ material: 'Private ply', onHand: 2 });
     const plan = await draftPlan({ parts: [part('p', 1000, 500, 1, 'Private ply')], stock: [asStock(item)] });
-    await expect(releasePlan(db, { shopId: fx.theirs.id, userId: fx.otherOwner.id, planId: plan.id })).rejects.toSatisfy((e) => e instanceof PlanStateError && e.status === 404);
+    await expect(releasePlan(db, { shopId: fx.theirs.id, userId: fx.otherOwner.id, planId: plan.id })).rejects.toSatisfy((e) => e instanceof DomainError && e.kind === 'not-found');
     expect(await listStock(db, fx.theirs.id)).toEqual([]);
     expect(await listOffcuts(db, fx.theirs.id)).toEqual([]);
   });

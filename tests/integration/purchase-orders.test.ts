@@ -56,7 +56,7 @@ describe('purchase orders from the low stock', () => {
     expect(orders[1]!.totalCents).toBe(13600);
     // Now both are on order: nothing more to order, and the stock room says what is coming.
     expect(Object.fromEntries(await onOrderQuantities(db, shop.id))).toEqual({ [mdf.id]: 4, [birch.id]: 4 });
-    await expect(createFromLowStock(db, shop.id, owner.id)).rejects.toMatchObject({ status: 409 });
+    await expect(createFromLowStock(db, shop.id, owner.id)).rejects.toMatchObject({ kind: 'conflict' });
   });
 
   test('numbers are per shop: another shop’s first order is PO-0001 too, and never holds this shop’s sizes', async () => {
@@ -101,7 +101,7 @@ describe('purchase orders from a plan’s stock to buy', () => {
     expect(po!.lines.map((l) => [l.stockItemId, l.quantity, l.unitCostCents])).toEqual([[sheet.id, bought + Math.max(0, pulled - 1), 6000]]);
     expect([po!.supplier, po!.source, po!.planId, po!.planName]).toEqual(['Cedar Run Plywood', 'plan', planId, 'Plan']);
     // Another shop cannot order from this plan.
-    await expect(createFromPlan(db, fx.theirs.id, fx.otherOwner.id, planId)).rejects.toMatchObject({ status: 404 });
+    await expect(createFromPlan(db, fx.theirs.id, fx.otherOwner.id, planId)).rejects.toMatchObject({ kind: 'not-found' });
   });
 });
 
@@ -123,9 +123,9 @@ describe('a draft, sent, received', () => {
     // A size of another shop is refused, naming the line.
     const { shop: other } = await freshShop();
     const foreign = await size(other.id, {});
-    await expect(updateDraft(db, shop.id, owner.id, id, { lines: [{ stockItemId: foreign.id, quantity: 1, unitCostCents: 1 }] })).rejects.toMatchObject({ status: 422 });
+    await expect(updateDraft(db, shop.id, owner.id, id, { lines: [{ stockItemId: foreign.id, quantity: 1, unitCostCents: 1 }] })).rejects.toMatchObject({ kind: 'invalid' });
     await sendPurchaseOrder(db, shop.id, owner.id, id);
-    await expect(updateDraft(db, shop.id, owner.id, id, { note: 'Changed' })).rejects.toMatchObject({ status: 409 });
+    await expect(updateDraft(db, shop.id, owner.id, id, { note: 'Changed' })).rejects.toMatchObject({ kind: 'conflict' });
   });
 
   test('sending queues the mail with the PDF and marks it sent in one transaction; a bad address sends nothing and keeps the draft', async () => {
@@ -145,7 +145,7 @@ describe('a draft, sent, received', () => {
     expect(mail.attachments).toEqual([expect.objectContaining({ filename: 'PO-0001-Cedar-Run-Plywood.pdf', contentType: 'application/pdf' })]);
     expect(Buffer.from(mail.attachments[0].content, 'base64').subarray(0, 5).toString()).toBe('%PDF-');
     // Sent once only; the address is kept for the supplier's next order.
-    await expect(sendPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ status: 409 });
+    await expect(sendPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ kind: 'conflict' });
     const [again] = await createFromLowStock(db, shop.id, owner.id).catch(() => [null]);
     expect(again).toBeNull(); // nothing more to order: the sheet is on this order
   });
@@ -154,7 +154,7 @@ describe('a draft, sent, received', () => {
     const { shop, owner, sheet, id } = await draftFor();
     await updateDraft(db, shop.id, owner.id, id, { supplierEmail: 'orders@cedarrun.example' });
     // A draft is not received against.
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({ status: 409 });
+    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({ kind: 'conflict' });
     const sent = await sendPurchaseOrder(db, shop.id, owner.id, id);
     const line = sent.lines[0];
     expect(line.quantity).toBe(5); // 2 × 3 − 1
@@ -163,10 +163,10 @@ describe('a draft, sent, received', () => {
     expect(part.lines[0].received).toBe(2);
     expect((await count(sheet.id)).onHand).toBe(3);
     // More than is still to come is refused, with the figures; nothing is written.
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: line.id, quantity: 4 }], updateCosts: false })).rejects.toMatchObject({ status: 409, message: expect.stringContaining('5 ordered and 2 already received, so 3 more can come in, not 4') });
+    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: line.id, quantity: 4 }], updateCosts: false })).rejects.toMatchObject({ kind: 'conflict', message: expect.stringContaining('5 ordered and 2 already received, so 3 more can come in, not 4') });
     expect((await count(sheet.id)).onHand).toBe(3);
     // A part-received order is not cancelled.
-    await expect(cancelPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ status: 409 });
+    await expect(cancelPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ kind: 'conflict' });
     const done = await receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false });
     expect(done.status).toBe('received');
     expect(done.receivedAt).not.toBeNull();
@@ -177,7 +177,7 @@ describe('a draft, sent, received', () => {
       ['received', 3, 'Received on PO-0001'],
     ]);
     expect(await ledgerMismatches(db, shop.id)).toEqual([]);
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({ status: 409 });
+    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({ kind: 'conflict' });
   });
 
   test('all or nothing: a receipt with one line too many writes no line, count or movement', async () => {
@@ -185,7 +185,7 @@ describe('a draft, sent, received', () => {
     await updateDraft(db, shop.id, owner.id, id, { supplierEmail: 'o@cedarrun.example', lines: [{ stockItemId: sheet.id, quantity: 5, unitCostCents: 8900 }, { stockItemId: board.id, quantity: 2, unitCostCents: 925 }] });
     const sent = await sendPurchaseOrder(db, shop.id, owner.id, id);
     const [l1, l2] = sent.lines;
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: l1.id, quantity: 5 }, { lineId: l2.id, quantity: 3 }], updateCosts: true })).rejects.toMatchObject({ status: 409 });
+    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: l1.id, quantity: 5 }, { lineId: l2.id, quantity: 3 }], updateCosts: true })).rejects.toMatchObject({ kind: 'conflict' });
     expect((await count(sheet.id)).onHand).toBe(1);
     expect((await db.select().from(purchaseOrderLines).where(eq(purchaseOrderLines.purchaseOrderId, id))).map((l) => l.received)).toEqual([0, 0]);
     expect(await db.select().from(stockMovements).where(eq(stockMovements.purchaseOrderId, id))).toEqual([]);
@@ -210,7 +210,7 @@ describe('a draft, sent, received', () => {
     const cancelled = await cancelPurchaseOrder(db, shop.id, owner.id, id);
     expect(cancelled.status).toBe('cancelled');
     expect((await onOrderQuantities(db, shop.id)).get(sheet.id)).toBeUndefined();
-    await expect(cancelPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ status: 409 });
+    await expect(cancelPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ kind: 'conflict' });
   });
 
   test('through the routes: the estimator may not receive (stock:write); another shop’s owner gets 404; bad input is 422', async () => {

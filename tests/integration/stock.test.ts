@@ -88,7 +88,7 @@ describe('counts in the stock room', () => {
   test('a count below what released plans hold is refused, and the database refuses it too', async () => {
     const item = await newSheet({ onHand: 3 });
     await db.update(stockItems).set({ reserved: 2 }).where(eq(stockItems.id, item.id));
-    await expect(adjustStock(db, fx.mine.id, fx.owner.id, item.id, { count: 1, reason: 'Counted' })).rejects.toMatchObject({ status: 409 });
+    await expect(adjustStock(db, fx.mine.id, fx.owner.id, item.id, { count: 1, reason: 'Counted' })).rejects.toMatchObject({ kind: 'conflict' });
     await expect(db.update(stockItems).set({ onHand: 1 }).where(eq(stockItems.id, item.id))).rejects.toThrow();
     await expect(db.update(stockItems).set({ onHand: -1, reserved: 0 }).where(eq(stockItems.id, item.id))).rejects.toThrow();
     await db.update(stockItems).set({ reserved: 0 }).where(eq(stockItems.id, item.id));
@@ -97,7 +97,7 @@ describe('counts in the stock room', () => {
   test('an offcut recorded at the saw can be scrapped once, and by no other shop', async () => {
     const o = await recordOffcut(db, fx.mine.id, fx.cutter.id, { material: 'Test ply', thicknessMm: 18, lengthMm: 700, widthMm: 300, grain: 'along-length', location: 'Bin 2' });
     await scrapOffcut(db, fx.mine.id, fx.cutter.id, o.id, 'Delaminated');
-    await expect(scrapOffcut(db, fx.mine.id, fx.cutter.id, o.id, 'again')).rejects.toMatchObject({ status: 409 });
+    await expect(scrapOffcut(db, fx.mine.id, fx.cutter.id, o.id, 'again')).rejects.toMatchObject({ kind: 'conflict' });
     expect(await scrapOffcut(db, fx.theirs.id, fx.otherOwner.id, o.id, 'not theirs')).toBeNull();
     await expectLedgerMatches(fx.mine.id);
   });

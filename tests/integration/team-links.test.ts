@@ -77,7 +77,7 @@ describe('team invites by link', () => {
     const { token } = await invite();
     const later = new Date(Date.now() + 8 * 24 * 3600_000);
     expect(await lookUpLink(db, 'invite', token, later)).toEqual({ ok: false, reason: 'expired' });
-    await expect(useLink(db, 'invite', token, 'long-enough-password', later)).rejects.toMatchObject({ status: 410 });
+    await expect(useLink(db, 'invite', token, 'long-enough-password', later)).rejects.toMatchObject({ kind: 'gone' });
     expect((await call(inviteRoute.POST, { token: 'x'.repeat(43) }, { body: { password: 'long-enough-password' } })).status).toBe(404);
     expect((await call(inviteRoute.POST, { token: 'short' }, { body: { password: 'long-enough-password' } })).status).toBe(404);
     // An invite link is not a reset link.

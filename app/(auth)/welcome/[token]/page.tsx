@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { LinkPage } from '@/components/auth/link-page';
+import { LinkPage } from '../../link-page';
 
 export const metadata: Metadata = { title: 'Accept your invite', referrer: 'no-referrer' };
 

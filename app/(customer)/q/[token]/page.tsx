@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { headers } from 'next/headers';
 import { getDb } from '@/db/client';
 import { customerQuote, QUOTE_TOKEN, reconcileCheckout, type CustomerQuote } from '@/db/queries/quote-answers';
-import { HttpError } from '@/server/api/errors';
+import { isShownError, notFoundBecause } from '@/server/api/errors';
 import { countingFailedLinks, throttlePublicRequest } from '@/server/api/throttle';
 import { formatMoney } from '@/lib/costing/money';
 import { appPayments } from '@/server/payments/client';
@@ -19,13 +19,13 @@ export default async function CustomerQuotePage({ params, searchParams }: { para
   let quote: CustomerQuote;
   try {
     await throttlePublicRequest(request, 'quote-page');
-    if (!QUOTE_TOKEN.test(token)) throw new HttpError(404, 'This quote link does not work. Check that the whole address was copied, or ask the shop to send it again.');
+    if (!QUOTE_TOKEN.test(token)) throw notFoundBecause('This quote link does not work. Check that the whole address was copied, or ask the shop to send it again.');
     const db = await getDb();
     // Back from the checkout: record the payment now if the payments service says it is paid (its webhook may be late).
     if (checkout && checkout.startsWith('cs_')) await reconcileCheckout(db, (await appPayments()).stripe, token, checkout).catch(() => undefined);
     quote = await countingFailedLinks(request, () => customerQuote(db, token));
   } catch (error) {
-    if (!(error instanceof HttpError)) throw error;
+    if (!isShownError(error)) throw error;
     return (
       <div className="card p-6">
         <h1 className="mb-2 text-xl">This quote cannot be shown</h1>

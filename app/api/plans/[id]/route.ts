@@ -1,7 +1,7 @@
 import { getPlan } from '@/db/queries/plan-document';
 import { judgePlan, updateDraftPlan } from '@/db/queries/plan-drafts';
 import { withoutPrices } from '@/lib/stock/without-prices';
-import { conflict, HttpError, notFound } from '@/server/api/errors';
+import { conflict, invalid, notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { rebuildCuts } from '@/lib/nesting';
@@ -34,7 +34,7 @@ export const PUT = route({ permission: 'plans:write', params: idParams, body: pl
   if (saved.status !== 'draft') throw conflict(`This plan is ${saved.status}; only a draft can be edited.`);
   const request = nestRequestSchema.parse(saved.request);
   const judged = judgePlan(request, body.plan);
-  if (!judged.ok) throw new HttpError(422, 'The layout breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
+  if (!judged.ok) throw invalid('The layout breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
   // Tree, saw order, leftovers and figures are made afresh here, whatever the bench sent.
   const plan = planSchema.parse(rebuildCuts(request, judged.plan));
   const result = await updateDraftPlan(db, { shopId: user.shopId, planId: params.id, userId: user.id, plan, name: body.name, baseUpdatedAt: body.baseUpdatedAt });

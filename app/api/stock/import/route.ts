@@ -1,5 +1,5 @@
 import { route } from '@/server/api/route';
-import { HttpError } from '@/server/api/errors';
+import { invalid } from '@/server/api/errors';
 import { getShopSettings } from '@/db/queries/shops';
 import { importStock } from '@/db/queries/stock';
 import { checkStockCsv } from '@/lib/stock/stock-csv';
@@ -10,11 +10,11 @@ import { shopLengthUnit } from '@/shared/schemas/units';
 export const POST = route({ permission: 'stock:write', body: importStockSchema }, async ({ db, user, body }) => {
   const settings = await getShopSettings(db, user.shopId);
   const result = await checkStockCsv(body.csv, settings ? shopLengthUnit(settings.units) : 'mm');
-  if (result.fileErrors.length) throw new HttpError(422, result.fileErrors.join(' '), { csv: result.fileErrors });
+  if (result.fileErrors.length) throw invalid(result.fileErrors.join(' '), { csv: result.fileErrors });
   const summary = { valid: result.rows.length, errors: result.errors, rows: result.rows };
   if (body.commit === 'none') return { ...summary, imported: 0 };
   if (body.commit === 'all' && result.errors.length) {
-    throw new HttpError(422, `${result.errors.length} row${result.errors.length === 1 ? ' has' : 's have'} problems; nothing was imported. Fix them, or import only the valid rows.`, {
+    throw invalid(`${result.errors.length} row${result.errors.length === 1 ? ' has' : 's have'} problems; nothing was imported. Fix them, or import only the valid rows.`, {
       csv: result.errors.map((e) => `Line ${e.line}: ${e.messages.join('; ')}`),
     });
   }

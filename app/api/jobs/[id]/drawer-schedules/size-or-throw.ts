@@ -1,6 +1,6 @@
 import type { Db } from '@/db/open';
 import { getShopSettings } from '@/db/queries/shops';
-import { HttpError } from '@/server/api/errors';
+import { invalid } from '@/server/api/errors';
 import { formatLength } from '@/lib/units/format-length';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { sizeDrawerSchedule } from '@/lib/joinery';
@@ -17,5 +17,5 @@ export async function sizeOrThrow(db: Db, shopId: string, schedule: DrawerSchedu
   if (sized.ok) return sized.parts;
   const fields: Record<string, string[]> = {};
   for (const e of sized.errors) (fields[e.path || '_'] ??= []).push(e.message);
-  throw new HttpError(422, 'This box cannot be built as set: see the marked fields.', fields);
+  throw invalid('This box cannot be built as set: see the marked fields.', fields);
 }

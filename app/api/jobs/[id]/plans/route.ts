@@ -2,7 +2,7 @@ import { getJob } from '@/db/queries/jobs';
 import { buildNestRequest } from '@/db/queries/nest-request';
 import { createDraftPlan, judgePlan, listJobPlans } from '@/db/queries/plan-drafts';
 import { withoutPrices } from '@/lib/stock/without-prices';
-import { HttpError, notFound } from '@/server/api/errors';
+import { conflict, invalid, notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
@@ -23,13 +23,13 @@ export const POST = route({ permission: 'plans:write', params: idParams, body: p
   const known = new Set(offered.stock.map((s) => s.id));
   const unknown = body.stockIds.filter((id) => !known.has(id));
   if (unknown.length) {
-    throw new HttpError(422, 'Some of the chosen stock is no longer on offer; nest again.', { stockIds: unknown.map((id) => `"${id}" is not on offer`) });
+    throw invalid('Some of the chosen stock is no longer on offer; nest again.', { stockIds: unknown.map((id) => `"${id}" is not on offer`) });
   }
   const chosen = new Set(body.stockIds);
   const request = nestRequestSchema.parse({ ...offered, stock: offered.stock.filter((s) => chosen.has(s.id)) });
   const judged = judgePlan(request, body.plan);
-  if (!judged.ok) throw new HttpError(422, 'The plan breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
-  if (body.for === 'recuts' && !request.parts.length) throw new HttpError(409, 'This job has no open re-cuts to nest; nothing was saved.');
+  if (!judged.ok) throw invalid('The plan breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
+  if (body.for === 'recuts' && !request.parts.length) throw conflict('This job has no open re-cuts to nest; nothing was saved.');
   const row = await createDraftPlan(db, { shopId: user.shopId, jobId: params.id, userId: user.id, name: body.name, request, plan: judged.plan, recutPlan: body.for === 'recuts' });
   return { id: row.id, updatedAt: row.updatedAt.toISOString() };
 });

@@ -1,7 +1,7 @@
 import { addParts } from '@/db/queries/parts';
 import { validateUploadRows } from '@/lib/cut-list/validate-rows';
 import { snapReport } from '@/lib/cut-list/stock-match';
-import { HttpError, notFound } from '@/server/api/errors';
+import { invalid, notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { CUT_LIST_FIELD_LABELS, cutListImportSchema } from '@/shared/schemas/cut-list-upload';
 import { stockOffers } from '@/app/api/materials/stock-offers';
@@ -14,7 +14,7 @@ export const POST = route({ permission: 'cutlist:write', params: idParams, body:
     for (const row of report.rows) {
       if (!row.ok) fields[`rows.${row.line}`] = row.problems.map((p) => (p.field === 'row' ? p.message : `${CUT_LIST_FIELD_LABELS[p.field]}: ${p.message}`));
     }
-    throw new HttpError(422, `${report.invalidCount} of ${report.rows.length} rows have problems, so nothing was imported. Fix them, or import only the valid rows.`, fields);
+    throw invalid(`${report.invalidCount} of ${report.rows.length} rows have problems, so nothing was imported. Fix them, or import only the valid rows.`, fields);
   }
   const added = await addParts(db, user.shopId, user.id, params.id, report.valid.map((v) => v.part), 'upload');
   if (!added) throw notFound('That job');

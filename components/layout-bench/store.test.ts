@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import fc from 'fast-check';
-import { createBenchStore, hasUnsavedChanges, type BenchStore } from '@/lib/layout-bench/store';
+import { createBenchStore, hasUnsavedChanges, type BenchStore } from '@/components/layout-bench/store';
 import type { BenchDoc, PartInfo } from '@/lib/layout-bench/document';
 
 const piece = (grain: 'along-length' | 'none') => ({ stockId: `s-${grain}`, kind: 'sheet' as const, length: 2440, width: 1220, thickness: 18, material: 'ply', trim: 0, grain });

@@ -1,7 +1,7 @@
 import Link from 'next/link';
 import { getDb } from '@/db/client';
 import { LINK_REFUSALS, lookUpLink, type LinkPurpose } from '@/db/queries/user-links';
-import { SetPasswordForm } from './set-password-form';
+import { SetPasswordForm } from '@/components/auth/set-password-form';
 
 /** The page a single-use link opens: the form to choose a password, or why the link no longer works. */
 export async function LinkPage({ purpose, token }: { purpose: LinkPurpose; token: string }) {

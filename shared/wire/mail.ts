@@ -1,0 +1,2 @@
+/** Where a message in the outbox stands. */
+export type OutboxStatus = 'pending' | 'sending' | 'sent' | 'failed';
