@@ -7,8 +7,6 @@ const nextConfig = {
   poweredByHeader: false,
   // Several builds can live side by side (one per developer working in the same tree); the default is .next.
   distDir: process.env.KERFWISE_DIST_DIR || '.next',
-  // `npm test` type-checks the whole project with `tsc --noEmit`; the build does not repeat it.
-  typescript: { ignoreBuildErrors: true },
   // Static files and anything else the proxy and the route wrapper do not answer (lib/security-headers.ts sets
   // these, with the page's CSP and HSTS over https, on pages and API answers).
   async headers() {

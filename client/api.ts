@@ -17,6 +17,8 @@ export async function api<T>(url: string, init: { method?: string; body?: unknow
   });
   const data = await res.json().catch(() => ({}));
   if (!res.ok) {
+    // The session is gone: a whole new page load, so nothing of the signed-in state stays in memory.
+    // eslint-disable-next-line @next/next/no-location-assign-relative-destination
     if (res.status === 401) window.location.assign('/sign-in');
     throw new ApiError(res.status, data.error ?? `Request failed (${res.status}).`, data.fields);
   }

@@ -23,7 +23,7 @@ export async function getDb(): Promise<Db> {
 }
 
 /** Hands the process an already-open database (integration tests use an in-memory one). */
-export function useDatabase(handle: DbHandle) {
+export function provideDatabase(handle: DbHandle) {
   holder.__kerfwiseDb = Promise.resolve(handle);
 }
 

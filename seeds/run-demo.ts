@@ -4,6 +4,10 @@
  * a local mail catcher on 127.0.0.1 stores every mail the app sends in ./data/mail (the owner reads them on the
  * Sent mail page), and with no STRIPE_SECRET_KEY a local payments fake takes deposits on a test checkout page;
  * nothing leaves the machine.
+ *
+ * `npm run demo:reset` (`--reset`) starts the demo over: the embedded database and the caught mail are deleted and
+ * the demo shop seeded afresh. It refuses while a server holds the database, and with DATABASE_URL set (a real
+ * PostgreSQL server is never wiped from here).
  */
 import { spawn, spawnSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
@@ -27,6 +31,20 @@ function demoSecret(): string {
   return fs.readFileSync(file, 'utf8').trim();
 }
 
+/** Deletes the embedded database and the caught mail, after checking no server holds the database. */
+async function resetDemo() {
+  if (process.env.DATABASE_URL) throw new Error('demo:reset works on the embedded database only; DATABASE_URL is set, so nothing was deleted.');
+  const pglite = path.join(dataDir, 'pglite');
+  if (fs.existsSync(pglite)) {
+    // Opening takes the database's lock: a running server makes this fail before anything is deleted.
+    const handle = await openDatabase({ dataDir: pglite });
+    await handle.close();
+  }
+  fs.rmSync(pglite, { recursive: true, force: true });
+  fs.rmSync(path.join(dataDir, 'mail'), { recursive: true, force: true });
+  console.log(`Deleted the demo database and mail in ${dataDir}; seeding the demo shop again.`);
+}
+
 async function prepareDatabase() {
   const handle = await openDatabase({ url: process.env.DATABASE_URL, dataDir: path.join(dataDir, 'pglite') });
   try {
@@ -45,6 +63,7 @@ async function main() {
     KERFWISE_DATA_DIR: dataDir,
     NEXT_TELEMETRY_DISABLED: '1',
   };
+  if (process.argv.includes('--reset')) await resetDemo();
   await prepareDatabase();
   if (!process.env.SMTP_URL) {
     const catcher = await startMailCatcher({ dir: path.join(dataDir, 'mail') });
@@ -55,7 +74,9 @@ async function main() {
     const webhookSecret = newWebhookSecret();
     const fake = await startPaymentsFake({ webhookUrl: `${env.NEXTAUTH_URL}/api/payments/webhook`, webhookSecret });
     Object.assign(env, { KERFWISE_PAYMENTS_URL: fake.url, KERFWISE_PAYMENTS_WEBHOOK_SECRET: webhookSecret });
-    console.log(`Payments: no STRIPE_SECRET_KEY, so deposits are paid on a local test checkout at ${fake.url} (test card 4242 4242 4242 4242; nothing is charged).`);
+    console.log(
+      `Payments: no STRIPE_SECRET_KEY, so deposits are paid on a local test checkout at ${fake.url} (test card 4242 4242 4242 4242; nothing is charged).`,
+    );
   }
   if (!process.argv.includes('--no-build')) {
     const build = spawnSync('npx', ['next', 'build'], { stdio: 'inherit', env });

@@ -31,17 +31,23 @@ export function SignInForm() {
       setPending(false);
       return;
     }
+    // A whole page load, so every server component renders with the new session.
+    // eslint-disable-next-line @next/next/no-location-assign-relative-destination
     window.location.assign('/');
   }
 
   return (
     <form onSubmit={onSubmit} className="flex flex-col gap-4" noValidate>
       <div>
-        <label htmlFor="email" className="field-label">E-mail</label>
+        <label htmlFor="email" className="field-label">
+          E-mail
+        </label>
         <input id="email" name="email" type="email" autoComplete="username" required className="field-input" />
       </div>
       <div>
-        <label htmlFor="password" className="field-label">Password</label>
+        <label htmlFor="password" className="field-label">
+          Password
+        </label>
         <input id="password" name="password" type="password" autoComplete="current-password" required className="field-input" />
       </div>
       {error && (

@@ -17,7 +17,8 @@ describe('a cut list cell reads what was typed in the shop’s unit', () => {
   ] as const)('%s “%s” → %s (25.4 mm to the inch, NIST SP 811)', (column, text, units, value) => {
     const parsed = parseCell(column, text, units);
     expect(parsed.ok).toBe(true);
-    if (parsed.ok) typeof value === 'number' ? expect(parsed.value as number).toBeCloseTo(value, 9) : expect(parsed.value).toBe(value);
+    if (parsed.ok && typeof value === 'number') expect(parsed.value as number).toBeCloseTo(value, 9);
+    else if (parsed.ok) expect(parsed.value).toBe(value);
   });
 
   test.each([

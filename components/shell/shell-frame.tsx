@@ -9,12 +9,14 @@ import { useEffect, useState, type ReactNode } from 'react';
  * Escape, and on a tap beside it.
  */
 export function ShellFrame({ brand, sidebar, children }: { brand: ReactNode; sidebar: ReactNode; children: ReactNode }) {
-  const [open, setOpen] = useState(false);
+  // Open on the page it was opened on: following a link to another page closes it.
   const pathname = usePathname();
-  useEffect(() => setOpen(false), [pathname]);
+  const [openOn, setOpenOn] = useState<string | null>(null);
+  const open = openOn === pathname;
+  const setOpen = (value: boolean) => setOpenOn(value ? pathname : null);
   useEffect(() => {
     if (!open) return;
-    const onKey = (e: KeyboardEvent) => e.key === 'Escape' && setOpen(false);
+    const onKey = (e: KeyboardEvent) => e.key === 'Escape' && setOpenOn(null);
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
   }, [open]);
@@ -23,13 +25,7 @@ export function ShellFrame({ brand, sidebar, children }: { brand: ReactNode; sid
     <div className="min-h-screen lg:flex">
       <header className="sticky top-0 z-30 flex items-center justify-between gap-3 border-b border-paper-edge bg-paper-deep/95 px-4 py-1.5 backdrop-blur lg:hidden print:hidden">
         {brand}
-        <button
-          type="button"
-          className="btn-quiet min-h-11 px-4"
-          aria-expanded={open}
-          aria-controls="app-sidebar"
-          onClick={() => setOpen((o) => !o)}
-        >
+        <button type="button" className="btn-quiet min-h-11 px-4" aria-expanded={open} aria-controls="app-sidebar" onClick={() => setOpen(!open)}>
           <svg viewBox="0 0 20 20" className="h-5 w-5" aria-hidden="true">
             {open ? (
               <path d="M5 5l10 10M15 5L5 15" stroke="currentColor" strokeWidth="2" strokeLinecap="round" />

@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useState } from 'react';
+import { useEffect, useState, useSyncExternalStore } from 'react';
 
 /** `on`: the screen stays awake; `off`: the browser refused or let it go (battery saver, tab hidden); `unsupported`: no Screen Wake Lock API. */
 export type WakeState = 'pending' | 'on' | 'off' | 'unsupported';
@@ -12,13 +12,11 @@ export type WakeState = 'pending' | 'on' | 'off' | 'unsupported';
  */
 export function useWakeLock(active: boolean): WakeState {
   const [state, setState] = useState<WakeState>('pending');
+  // Known only in the browser: the server's render (and hydration) assume the API is there.
+  const supported = useSyncExternalStore(neverChanges, hasWakeLock, () => true);
 
   useEffect(() => {
-    if (!active) return;
-    if (typeof navigator === 'undefined' || !('wakeLock' in navigator) || !navigator.wakeLock) {
-      setState('unsupported');
-      return;
-    }
+    if (!active || !supported) return;
     let sentinel: WakeLockSentinel | null = null;
     let asking = false;
     let gone = false;
@@ -60,7 +58,10 @@ export function useWakeLock(active: boolean): WakeState {
       sentinel = null;
       if (held && !held.released) void held.release().catch(() => undefined);
     };
-  }, [active]);
+  }, [active, supported]);
 
-  return state;
+  return supported ? state : 'unsupported';
 }
+
+const neverChanges = () => () => undefined;
+const hasWakeLock = () => 'wakeLock' in navigator && !!navigator.wakeLock;

@@ -2,7 +2,6 @@
 import type { PlanPiece } from '@/shared/schemas/nesting';
 import type { StepRef } from '@/shared/wire/plans';
 
-
 export interface PieceProgress {
   piece: number;
   total: number;

@@ -1,6 +1,6 @@
 import 'server-only';
 import type { NextRequest } from 'next/server';
-import { HttpError, statusOf } from './errors';
+import { statusOf } from './errors';
 import { clientAddress, limit, spend, tooManyAttempts } from './limit';
 
 /** The public routes that may be hammered from outside: asking for a reset link, and using a link's token. */
@@ -33,9 +33,9 @@ export async function throttlePublicRequest(req: Pick<NextRequest, 'headers'>, a
 }
 
 /** Runs a link's use, counting it against the client's address when the link does not work (404 or 410). */
-export async function countingFailedLinks<T>(req: Pick<NextRequest, 'headers'>, use: () => Promise<T>): Promise<T> {
+export async function countingFailedLinks<T>(req: Pick<NextRequest, 'headers'>, attempt: () => Promise<T>): Promise<T> {
   try {
-    return await use();
+    return await attempt();
   } catch (error) {
     if (statusOf(error) === 404 || statusOf(error) === 410) await spend('invite-accept', `address:${clientAddress(req.headers)}`);
     throw error;

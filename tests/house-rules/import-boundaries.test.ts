@@ -14,8 +14,32 @@ const LAYERS = ['app', 'bench', 'client', 'components', 'db', 'lib', 'seeds', 's
 type Layer = (typeof LAYERS)[number];
 
 /** Packages that tie code to a server, a database, a browser or React: none of them belongs in the pure layers. */
-const FRAMEWORK = ['next', 'next-auth', 'react', 'react-dom', 'server-only', 'react-konva', 'konva', 'zustand', '@tanstack/react-query', '@tanstack/react-table', 'react-hook-form', 'recharts'];
-const INFRASTRUCTURE = ['pg', '@electric-sql/pglite', 'drizzle-orm', 'nodemailer', 'smtp-server', 'stripe', 'pino', 'pino-pretty', 'rate-limiter-flexible', 'bcryptjs'];
+const FRAMEWORK = [
+  'next',
+  'next-auth',
+  'react',
+  'react-dom',
+  'server-only',
+  'react-konva',
+  'konva',
+  'zustand',
+  '@tanstack/react-query',
+  '@tanstack/react-table',
+  'react-hook-form',
+  'recharts',
+];
+const INFRASTRUCTURE = [
+  'pg',
+  '@electric-sql/pglite',
+  'drizzle-orm',
+  'nodemailer',
+  'smtp-server',
+  'stripe',
+  'pino',
+  'pino-pretty',
+  'rate-limiter-flexible',
+  'bcryptjs',
+];
 
 interface Rule {
   layer: Layer;
@@ -157,7 +181,10 @@ describe('import boundaries (docs/ARCHITECTURE.md)', () => {
   test('shared/ reaches into lib/ only for vocabulary: units, dates and tables of constants, never the engine or a renderer', () => {
     // The lib modules the schemas load, followed through their own imports: all of them go to the browser and the workers.
     const reached = new Set<string>();
-    const queue = (layerFiles.get('shared') ?? []).flatMap((f) => importsOf(f)).filter((i) => i.layer === 'lib').map((i) => i.target);
+    const queue = (layerFiles.get('shared') ?? [])
+      .flatMap((f) => importsOf(f))
+      .filter((i) => i.layer === 'lib')
+      .map((i) => i.target);
     while (queue.length) {
       const target = queue.pop()!;
       if (reached.has(target)) continue;

@@ -8,11 +8,11 @@ import * as inviteRoute from '@/app/api/invites/[token]/route';
 import * as resetsRoute from '@/app/api/password-resets/route';
 import * as resetRoute from '@/app/api/password-resets/[token]/route';
 import { LIMITS } from '@/server/api/limit';
-import { useTwoShopDatabase } from '../support/two-shop-database';
+import { setUpTwoShopDatabase } from '../support/two-shop-database';
 import { request } from '../support/fixtures';
 import { uniqueEmail } from '../support/unique';
 
-useTwoShopDatabase(() => {});
+setUpTwoShopDatabase(() => {});
 
 type Handler = (req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }) => Promise<Response>;
 const post = async (handler: Handler, params: Record<string, string>, body: unknown, address: string) =>

@@ -6,14 +6,14 @@ import { auditEvents, plans, sawSteps } from '@/db/schema';
 import * as steps from '@/app/api/plans/[id]/steps/route';
 import * as pdf from '@/app/api/plans/[id]/saw-order-pdf/route';
 import * as tagsPdf from '@/app/api/plans/[id]/tags-pdf/route';
-import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
+import { setUpTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 import { request, type TestUser } from '../support/fixtures';
 import { releasedPlan } from './authz/saw-order';
 
 let handle: DbHandle;
 let fx: TwoShops;
 
-useTwoShopDatabase((app) => ({ handle, fx } = app));
+setUpTwoShopDatabase((app) => ({ handle, fx } = app));
 
 type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 async function call(handler: Handler, planId: string, user: TestUser, method: string, body?: unknown) {
@@ -37,7 +37,10 @@ describe('ticking saw-order steps', () => {
     expect(Date.parse(res.body.ticks[0].doneAt)).toBeGreaterThanOrEqual(before - 5000);
     const [row] = await handle.db.select({ status: plans.status }).from(plans).where(eq(plans.id, id));
     expect(row.status).toBe('cutting');
-    const audit = await handle.db.select().from(auditEvents).where(and(eq(auditEvents.entityId, id), eq(auditEvents.action, 'tick')));
+    const audit = await handle.db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.entityId, id), eq(auditEvents.action, 'tick')));
     expect(audit).toHaveLength(1);
   });
 

@@ -4,12 +4,12 @@ import type { Db } from '@/db/open';
 import { offcuts, stockMovements } from '@/db/schema';
 import { ledgerMismatches, listMovements } from '@/db/queries/stock';
 import { describeMovement } from '@/lib/stock/describe-movement';
-import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
+import { setUpTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 import { cancel, counts, finish, jobWithSheet, nestAndSave, release } from '../support/shop-day';
 
 let db: Db;
 let fx: TwoShops;
-useTwoShopDatabase((app) => ({ db, fx } = app));
+setUpTwoShopDatabase((app) => ({ db, fx } = app));
 
 /** A part as large as one 2440 × 1220 sheet allows after trim: one part takes one sheet. */
 const oneSheetEach = (quantity: number) => [{ label: 'Panel', quantity, lengthMm: 2000, widthMm: 1000 }];
@@ -69,7 +69,10 @@ describe('the stock history of a plan: one row per physical change, saying reser
     const rows = await db.select().from(stockMovements).where(eq(stockMovements.planId, id));
     // One reservation and one cut for the sheets; one row per offcut racked.
     expect(rows.filter((r) => r.stockItemId === sheet.id).map((r) => [r.kind, r.quantity, r.reservedChange])).toEqual(
-      expect.arrayContaining([['reserved', 0, used], ['consumed', -used, -used]]),
+      expect.arrayContaining([
+        ['reserved', 0, used],
+        ['consumed', -used, -used],
+      ]),
     );
     expect(rows.filter((r) => r.stockItemId === sheet.id)).toHaveLength(2);
     expect(rows.filter((r) => r.kind === 'offcut-created')).toHaveLength(racked.length);

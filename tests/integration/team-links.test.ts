@@ -10,13 +10,13 @@ import * as resendRoute from '@/app/api/team/[id]/invite/route';
 import * as inviteRoute from '@/app/api/invites/[token]/route';
 import * as resetsRoute from '@/app/api/password-resets/route';
 import * as resetRoute from '@/app/api/password-resets/[token]/route';
-import { useTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
+import { setUpTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
 import { request, type TestUser } from '../support/fixtures';
 import { uniqueEmail } from '../support/unique';
 
 let db: Db;
 let fx: TwoShops;
-useTwoShopDatabase((app) => ({ db, fx } = app));
+setUpTwoShopDatabase((app) => ({ db, fx } = app));
 
 type Handler = (req: NextRequest, ctx: { params: Promise<Record<string, string | string[]>> }) => Promise<Response>;
 async function call(handler: Handler, params: Record<string, string>, opts: { method?: string; body?: unknown; user?: TestUser } = {}) {
@@ -100,7 +100,11 @@ describe('team invites by link', () => {
 
   test('the owner may still hand over a first password: no invite, no mail', async () => {
     const email = uniqueEmail('handed');
-    const res = await call(teamRoute.POST, {}, { user: fx.owner, body: { name: 'Hal Handed', email, role: 'estimator', password: 'given-in-person-123' } });
+    const res = await call(
+      teamRoute.POST,
+      {},
+      { user: fx.owner, body: { name: 'Hal Handed', email, role: 'estimator', password: 'given-in-person-123' } },
+    );
     expect(res.status).toBe(201);
     expect(res.json.invited).toBe(false);
     expect(await mailsTo(email)).toEqual([]);

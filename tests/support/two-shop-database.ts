@@ -1,5 +1,5 @@
 import { afterAll, beforeAll } from 'vitest';
-import { useDatabase } from '@/db/client';
+import { provideDatabase } from '@/db/client';
 import type { Db, DbHandle } from '@/db/open';
 import { TEST_SECRET, twoShops } from './fixtures';
 import { createTestDatabase } from './test-db';
@@ -16,12 +16,12 @@ export interface TwoShopDatabase {
  * as the process's database, so route handlers called directly use it, with the two-shop fixtures and the test
  * session secret. `ready` receives them before the file's first test; the database closes after its last.
  */
-export function useTwoShopDatabase(ready: (app: TwoShopDatabase) => void) {
+export function setUpTwoShopDatabase(ready: (app: TwoShopDatabase) => void) {
   process.env.NEXTAUTH_SECRET = TEST_SECRET;
   let handle: DbHandle | undefined;
   beforeAll(async () => {
     handle = await createTestDatabase();
-    useDatabase(handle);
+    provideDatabase(handle);
     ready({ handle, db: handle.db, fx: await twoShops(handle.db) });
   });
   afterAll(() => handle?.close());
