@@ -13,7 +13,7 @@ export interface BenchCheckWorker {
 }
 
 export function startBenchCheckWorker(): BenchCheckWorker {
-  const worker = new Worker(new URL('../../workers/bench-check.worker.ts', import.meta.url), { type: 'module', name: 'kerfwise-bench-check' });
+  const worker = new Worker(new URL('../workers/bench-check.worker.ts', import.meta.url), { type: 'module', name: 'kerfwise-bench-check' });
   const remote = Comlink.wrap<{ check(request: NestRequest, doc: BenchDoc): LiveCheck }>(worker);
   return {
     check: (request, doc) => remote.check(request, doc),

@@ -14,7 +14,7 @@ export interface NestingWorker {
 }
 
 export function startNestingWorker(): NestingWorker {
-  const worker = new Worker(new URL('../../workers/nesting.worker.ts', import.meta.url), { type: 'module', name: 'kerfwise-nesting' });
+  const worker = new Worker(new URL('../workers/nesting.worker.ts', import.meta.url), { type: 'module', name: 'kerfwise-nesting' });
   const remote = Comlink.wrap<NestingWorkerApi>(worker);
   return {
     optimize: (request, onProgress) => remote.optimize(request, onProgress ? Comlink.proxy(onProgress) : undefined),

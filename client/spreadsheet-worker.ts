@@ -8,7 +8,7 @@ import type { ReadFileResult } from '@/lib/cut-list/read-cut-list-file';
 type SpreadsheetWorkerApi = { readCutListFile(file: { name: string; bytes: ArrayBuffer }): Promise<ReadFileResult> };
 
 export async function readCutListFileInWorker(file: { name: string; bytes: ArrayBuffer }, timeoutMs = 20_000): Promise<ReadFileResult> {
-  const worker = new Worker(new URL('../../workers/spreadsheet.worker.ts', import.meta.url), { type: 'module', name: 'kerfwise-spreadsheet' });
+  const worker = new Worker(new URL('../workers/spreadsheet.worker.ts', import.meta.url), { type: 'module', name: 'kerfwise-spreadsheet' });
   const remote = Comlink.wrap<SpreadsheetWorkerApi>(worker);
   let timer: ReturnType<typeof setTimeout> | undefined;
   const timeout = new Promise<ReadFileResult>((resolve) => {

@@ -200,19 +200,17 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
           rest.map((o) => o.id),
         ),
       );
-    await db
-      .insert(stockMovements)
-      .values(
-        rest.map((o) => ({
-          shopId,
-          kind: 'scrapped' as const,
-          offcutId: o.id,
-          quantity: -1,
-          userId: cutterId,
-          reason: 'Rack clear-out',
-          createdAt: at,
-        })),
-      );
+    await db.insert(stockMovements).values(
+      rest.map((o) => ({
+        shopId,
+        kind: 'scrapped' as const,
+        offcutId: o.id,
+        quantity: -1,
+        userId: cutterId,
+        reason: 'Rack clear-out',
+        createdAt: at,
+      })),
+    );
   }
 
   // Two quotes that did not win: one declined, one left to run out.
@@ -306,18 +304,16 @@ async function pastQuote(
   if (q.answer.status !== 'accepted') return;
   const deposit = revisionTotals(revision).depositMinor;
   const paidAt = new Date(q.answer.at.getTime() + 86_400_000);
-  await db
-    .insert(quotePayments)
-    .values({
-      shopId: q.shopId,
-      revisionId: revision.id,
-      jobId: q.jobId,
-      checkoutSessionId: `cs_demo_${revision.id}`,
-      paymentIntentId: `pi_demo_${revision.id}`,
-      amountMinor: deposit,
-      currency: revision.currency,
-      status: 'paid',
-      createdAt: paidAt,
-      paidAt,
-    });
+  await db.insert(quotePayments).values({
+    shopId: q.shopId,
+    revisionId: revision.id,
+    jobId: q.jobId,
+    checkoutSessionId: `cs_demo_${revision.id}`,
+    paymentIntentId: `pi_demo_${revision.id}`,
+    amountMinor: deposit,
+    currency: revision.currency,
+    status: 'paid',
+    createdAt: paidAt,
+    paidAt,
+  });
 }

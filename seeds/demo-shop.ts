@@ -446,24 +446,22 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
  */
 async function seedReleasedPlan(db: Db, shopId: string, jobId: string, userId: string) {
   // A size running low, so the stock room has a marker to show.
-  await db
-    .insert(stockItems)
-    .values({
-      shopId,
-      kind: 'sheet',
-      material: 'MDF',
-      nominalThickness: '1/2"',
-      thicknessMm: 12,
-      lengthMm: SHEET.l,
-      widthMm: SHEET.w,
-      grain: 'none',
-      onHand: 2,
-      lowStockAt: 3,
-      costCents: 3400,
-      supplier: 'Hollow Creek Supply',
-      location: 'Rack C2',
-      buyable: true,
-    });
+  await db.insert(stockItems).values({
+    shopId,
+    kind: 'sheet',
+    material: 'MDF',
+    nominalThickness: '1/2"',
+    thicknessMm: 12,
+    lengthMm: SHEET.l,
+    widthMm: SHEET.w,
+    grain: 'none',
+    onHand: 2,
+    lowStockAt: 3,
+    costCents: 3400,
+    supplier: 'Hollow Creek Supply',
+    location: 'Rack C2',
+    buyable: true,
+  });
   await recordOpeningCounts(db, shopId, null);
   const request = nestRequestSchema.parse(await buildNestRequest(db, shopId, jobId, { timeBudgetMs: 0 }));
   const plan = await optimize(request);

@@ -6,7 +6,7 @@ import { useRouter } from 'next/navigation';
 import { useEffect, useRef, type FormEvent } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { ActionError, Field } from '@/components/stock/field';
+import { ActionError, Field } from '@/components/ui/field';
 import { api, ApiError } from '@/client/api';
 import { CUSTOMER_FIELD_HINT, CustomerChoices } from '@/components/customers/customer-choices';
 import { JOB_STATUS_LABELS, jobFields, type JobPatch, type JobStatus, type JobSummary } from '@/shared/schemas/job';

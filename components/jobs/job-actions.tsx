@@ -3,7 +3,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { ActionError } from '@/components/stock/field';
+import { ActionError } from '@/components/ui/field';
 import { api } from '@/client/api';
 import type { JobStatus, JobSummary } from '@/shared/schemas/job';
 import { EditJobForm } from './edit-job-form';

@@ -20,6 +20,7 @@ import { lengthInput, shopLengthUnit } from '@/shared/schemas/units';
 import { NestProgressBar } from './nest-progress';
 import { PlanSummary } from './plan-summary';
 import { useNestingWorker } from './use-nesting-worker';
+import { Field } from '@/components/ui/field';
 
 const settingsForm = (unit: 'in' | 'mm') =>
   z.object({
@@ -377,18 +378,6 @@ function NestOutcome({
         </div>
       )}
     </section>
-  );
-}
-
-function Field({ id, label, error, children }: { id: string; label: string; error?: string; children: React.ReactNode }) {
-  return (
-    <div>
-      <label htmlFor={id} className="field-label">
-        {label}
-      </label>
-      {children}
-      {error && <p className="field-error">{error}</p>}
-    </div>
   );
 }
 

@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import { ActionError } from './field';
+import { ActionError } from '@/components/ui/field';
 import { useStockAction } from './use-stock-action';
 
 /** Cancel a released plan after a second click: every sheet, board and offcut it reserved goes back to free stock. */

@@ -6,7 +6,7 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { ApiError } from '@/client/api';
 import { STOCK_DETAIL_FIELDS, stockItemPatchSchema, type StockDetailField, type StockItemPatch } from '@/shared/schemas/stock';
-import { ActionError, Field } from './field';
+import { ActionError, Field } from '@/components/ui/field';
 import { centsForInput, moneyInput, wholeInput } from './form-fields';
 import { useStockAction } from './use-stock-action';
 

@@ -8,7 +8,7 @@ import { RECUT_REASONS } from '@/lib/recuts/recuts';
 import { formatLength } from '@/lib/units/format-length';
 import { JOB_STATUS_LABELS, type JobStatus } from '@/shared/schemas/job';
 import type { ShopUnits } from '@/shared/schemas/units';
-import { ActionError } from './field';
+import { ActionError } from '@/components/ui/field';
 
 export interface FinishPiece {
   index: number;

@@ -2,7 +2,7 @@
 
 import { useState } from 'react';
 import { STOCK_CSV_COLUMNS, type StockCsvError } from '@/lib/stock/stock-csv';
-import { ActionError } from './field';
+import { ActionError } from '@/components/ui/field';
 import { useStockAction } from './use-stock-action';
 
 interface ImportResult {

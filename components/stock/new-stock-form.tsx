@@ -6,7 +6,7 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { stockItemSchema } from '@/shared/schemas/stock';
 import { lengthInput, shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
-import { ActionError, Field } from './field';
+import { ActionError, Field } from '@/components/ui/field';
 import { moneyInput, wholeInput } from './form-fields';
 import { useStockAction } from './use-stock-action';
 

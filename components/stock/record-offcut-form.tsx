@@ -6,7 +6,7 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { recordOffcutSchema } from '@/shared/schemas/stock';
 import { lengthInput, shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
-import { ActionError, Field } from './field';
+import { ActionError, Field } from '@/components/ui/field';
 import { useStockAction } from './use-stock-action';
 
 const formSchema = (unit: 'in' | 'mm') =>

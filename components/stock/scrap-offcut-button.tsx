@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import { ActionError } from './field';
+import { ActionError } from '@/components/ui/field';
 import { useStockAction } from './use-stock-action';
 
 /** Takes an available offcut off the rack for good, with a reason, after a second click. */

@@ -6,7 +6,7 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { adjustStockSchema, receiveStockSchema } from '@/shared/schemas/stock';
 import { EditStockDialog, type EditableStock } from './edit-stock-dialog';
-import { ActionError, Field } from './field';
+import { ActionError, Field } from '@/components/ui/field';
 import { useStockAction } from './use-stock-action';
 
 const receiveForm = receiveStockSchema.extend({ quantity: z.coerce.number<string | number>().pipe(receiveStockSchema.shape.quantity) });

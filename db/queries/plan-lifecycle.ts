@@ -3,8 +3,8 @@ import type { Db } from '../open';
 import { offcuts, placements, planPieces, plans, stockItems, stockMovements } from '../schema';
 import { readPlan } from '@/lib/nesting';
 import { FinishChoiceError, finishOutcome, minOffcutFor, type FinishOutcome } from '@/lib/stock/finish-plan';
-import { nestRequestSchema, type Plan, type PlanPiece } from '@/shared/schemas/nesting';
-import { finishPlanSchema, type FinishPlanInput, type MissingPiece } from '@/shared/schemas/stock';
+import { nestRequestSchema, type NestRequest, type Plan, type PlanPiece } from '@/shared/schemas/nesting';
+import { finishPlanSchema, type FinishPlanChoices, type FinishPlanInput, type MissingPiece } from '@/shared/schemas/stock';
 import { stockRef } from './nest-request';
 import { recordAudit } from './audit';
 import { syncJobStatus } from './job-status';
@@ -315,109 +315,13 @@ export async function finishPlan(
     const plan = readPlan(row.document);
     const parsed = nestRequestSchema.safeParse(row.request);
     const request = parsed.success ? parsed.data : null;
-    const shop = await getShopSettings(tx, shopId);
-    if (!shop) throw notFoundBecause('The shop was not found.');
-    let outcome: FinishOutcome;
-    try {
-      outcome = finishOutcome(plan, request, minOffcutFor(request, shop), body);
-    } catch (error) {
-      if (error instanceof FinishChoiceError) throw invalid(error.message);
-      throw error;
-    }
+    const outcome = await decideFinish(tx, shopId, plan, request, body);
     const reason = `Cut for plan “${row.name}”`;
 
     await giveBack(tx, shopId, planId, userId, reason, 'used');
-
-    for (const g of groupPieces(plan).filter((g) => g.ref.source === 'buy')) {
-      const [item] = await tx
-        .select({ free: sql<number>`${stockItems.onHand} - ${stockItems.reserved}`.mapWith(Number) })
-        .from(stockItems)
-        .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId)))
-        .for('update');
-      if (!item) throw conflict(`A size this plan bought is no longer in the stock room (${g.piece.material}).`);
-      const fromRack = Math.min(g.count, Math.max(0, item.free));
-      const onArrival = g.count - fromRack;
-      if (fromRack) {
-        await tx
-          .update(stockItems)
-          .set({ onHand: sql`${stockItems.onHand} - ${fromRack}` })
-          .where(and(eq(stockItems.id, g.ref.id), sql`${stockItems.onHand} - ${stockItems.reserved} >= ${fromRack}`));
-        await tx
-          .insert(stockMovements)
-          .values({
-            shopId,
-            kind: 'consumed',
-            stockItemId: g.ref.id,
-            quantity: -fromRack,
-            planId,
-            userId,
-            reason: `${reason} (bought, taken from the rack)`,
-          });
-      }
-      if (onArrival) {
-        await tx.insert(stockMovements).values([
-          { shopId, kind: 'received', stockItemId: g.ref.id, quantity: onArrival, planId, userId, reason: `Bought for plan “${row.name}”` },
-          { shopId, kind: 'consumed', stockItemId: g.ref.id, quantity: -onArrival, planId, userId, reason: `${reason} (bought, cut on arrival)` },
-        ]);
-      }
-    }
-
-    // Offcuts on the rack, each with its movement.
-    const created: FinishResult['offcuts'] = [];
-    for (const o of outcome.rack) {
-      const [row_] = await tx
-        .insert(offcuts)
-        .values({
-          shopId,
-          material: o.material,
-          thicknessMm: o.thicknessMm,
-          lengthMm: o.lengthMm,
-          widthMm: o.widthMm,
-          grain: o.grain,
-          status: 'available',
-          location: o.location,
-          sourcePlanId: planId,
-          sourcePiece: String(o.piece + 1),
-          costCents: o.costCents,
-        })
-        .returning({ id: offcuts.id });
-      await tx
-        .insert(stockMovements)
-        .values({
-          shopId,
-          kind: 'offcut-created',
-          offcutId: row_.id,
-          quantity: 1,
-          planId,
-          userId,
-          reason: `From piece ${o.piece + 1} of plan “${row.name}”`,
-        });
-      created.push({ id: row_.id, lengthMm: o.lengthMm, widthMm: o.widthMm, location: o.location });
-    }
-
-    // Damaged parts: marked on their placement rows; their area counts as spoiled, not yield.
-    await writePieceRows(tx, shopId, planId, plan);
-    for (const d of outcome.damaged) {
-      const [pieceRow] = await tx
-        .select({ id: planPieces.id })
-        .from(planPieces)
-        .where(and(eq(planPieces.planId, planId), eq(planPieces.index, d.piece)));
-      // A placement's position is unique on its piece, and needs no part row (a typed part id may not be a uuid).
-      if (pieceRow) {
-        await tx
-          .update(placements)
-          .set({ damaged: true })
-          .where(and(eq(placements.planPieceId, pieceRow.id), eq(placements.instance, d.instance), eq(placements.xMm, d.x), eq(placements.yMm, d.y)));
-      }
-    }
-
-    // Each piece's part and damaged area, kept for the reports (so they need not read every placement).
-    await tx.execute(sql`
-      update plan_pieces pp set
-        part_area_mm2 = coalesce((select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and not pl.damaged), 0),
-        spoiled_area_mm2 = coalesce((select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and pl.damaged), 0)
-       where pp.plan_id = ${planId}`);
-
+    await consumeBoughtPieces(tx, { shopId, planId, userId, planName: row.name, reason }, plan);
+    const created = await rackOffcuts(tx, { shopId, planId, userId, planName: row.name }, outcome.rack);
+    await markDamagedPlacements(tx, shopId, planId, plan, outcome.damaged);
     const added = await recordDamagedPieces(tx, { shopId, userId, plan: row, request, damaged: body.damaged });
     const closed = row.recutPlan ? await closeRecuts(tx, { shopId, planId, userId }) : [];
 
@@ -446,4 +350,123 @@ export async function finishPlan(
       jobStatus,
     };
   });
+}
+
+interface FinishScope {
+  shopId: string;
+  planId: string;
+  userId: string;
+  planName: string;
+}
+
+/** The shop's rules decide what is racked, what is spoiled and the figures (lib/stock/finish-plan.ts). */
+async function decideFinish(tx: Tx, shopId: string, plan: Plan, request: NestRequest | null, body: FinishPlanChoices): Promise<FinishOutcome> {
+  const shop = await getShopSettings(tx, shopId);
+  if (!shop) throw notFoundBecause('The shop was not found.');
+  try {
+    return finishOutcome(plan, request, minOffcutFor(request, shop), body);
+  } catch (error) {
+    if (error instanceof FinishChoiceError) throw invalid(error.message);
+    throw error;
+  }
+}
+
+/**
+ * Pieces the plan bought are taken from the rack when they came in meanwhile; the rest were cut on arrival (received
+ * and consumed at once), so the ledger still sums to the counts.
+ */
+async function consumeBoughtPieces(tx: Tx, scope: FinishScope & { reason: string }, plan: Plan): Promise<void> {
+  const { shopId, planId, userId, planName, reason } = scope;
+  for (const g of groupPieces(plan).filter((g) => g.ref.source === 'buy')) {
+    const [item] = await tx
+      .select({ free: sql<number>`${stockItems.onHand} - ${stockItems.reserved}`.mapWith(Number) })
+      .from(stockItems)
+      .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId)))
+      .for('update');
+    if (!item) throw conflict(`A size this plan bought is no longer in the stock room (${g.piece.material}).`);
+    const fromRack = Math.min(g.count, Math.max(0, item.free));
+    const onArrival = g.count - fromRack;
+    if (fromRack) {
+      await tx
+        .update(stockItems)
+        .set({ onHand: sql`${stockItems.onHand} - ${fromRack}` })
+        .where(and(eq(stockItems.id, g.ref.id), sql`${stockItems.onHand} - ${stockItems.reserved} >= ${fromRack}`));
+      await tx.insert(stockMovements).values({
+        shopId,
+        kind: 'consumed',
+        stockItemId: g.ref.id,
+        quantity: -fromRack,
+        planId,
+        userId,
+        reason: `${reason} (bought, taken from the rack)`,
+      });
+    }
+    if (onArrival) {
+      await tx.insert(stockMovements).values([
+        { shopId, kind: 'received', stockItemId: g.ref.id, quantity: onArrival, planId, userId, reason: `Bought for plan “${planName}”` },
+        { shopId, kind: 'consumed', stockItemId: g.ref.id, quantity: -onArrival, planId, userId, reason: `${reason} (bought, cut on arrival)` },
+      ]);
+    }
+  }
+}
+
+/** Offcuts on the rack where the cutter put them, each with its movement. */
+async function rackOffcuts(tx: Tx, scope: FinishScope, rack: FinishOutcome['rack']): Promise<FinishResult['offcuts']> {
+  const { shopId, planId, userId, planName } = scope;
+  const created: FinishResult['offcuts'] = [];
+  for (const o of rack) {
+    const [row] = await tx
+      .insert(offcuts)
+      .values({
+        shopId,
+        material: o.material,
+        thicknessMm: o.thicknessMm,
+        lengthMm: o.lengthMm,
+        widthMm: o.widthMm,
+        grain: o.grain,
+        status: 'available',
+        location: o.location,
+        sourcePlanId: planId,
+        sourcePiece: String(o.piece + 1),
+        costCents: o.costCents,
+      })
+      .returning({ id: offcuts.id });
+    await tx.insert(stockMovements).values({
+      shopId,
+      kind: 'offcut-created',
+      offcutId: row.id,
+      quantity: 1,
+      planId,
+      userId,
+      reason: `From piece ${o.piece + 1} of plan “${planName}”`,
+    });
+    created.push({ id: row.id, lengthMm: o.lengthMm, widthMm: o.widthMm, location: o.location });
+  }
+  return created;
+}
+
+/**
+ * Damaged parts marked on their placement rows (their area counts as spoiled, not yield), then each piece's part and
+ * spoiled area kept for the reports, so they need not read every placement.
+ */
+async function markDamagedPlacements(tx: Tx, shopId: string, planId: string, plan: Plan, damaged: FinishOutcome['damaged']): Promise<void> {
+  await writePieceRows(tx, shopId, planId, plan);
+  for (const d of damaged) {
+    const [pieceRow] = await tx
+      .select({ id: planPieces.id })
+      .from(planPieces)
+      .where(and(eq(planPieces.planId, planId), eq(planPieces.index, d.piece)));
+    // A placement's position is unique on its piece, and needs no part row (a typed part id may not be a uuid).
+    if (pieceRow) {
+      await tx
+        .update(placements)
+        .set({ damaged: true })
+        .where(and(eq(placements.planPieceId, pieceRow.id), eq(placements.instance, d.instance), eq(placements.xMm, d.x), eq(placements.yMm, d.y)));
+    }
+  }
+  await tx.execute(sql`
+    update plan_pieces pp set
+      part_area_mm2 = coalesce((select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and not pl.damaged), 0),
+      spoiled_area_mm2 = coalesce((select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and pl.damaged), 0)
+     where pp.plan_id = ${planId}`);
 }

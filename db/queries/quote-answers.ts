@@ -221,16 +221,14 @@ export async function startDepositCheckout(db: Db, stripe: Stripe, token: string
     cancel_url: `${back}?checkout=cancelled`,
   });
   if (!session.url) throw unavailable('The payments service did not give a checkout address. Try again in a moment.');
-  await db
-    .insert(quotePayments)
-    .values({
-      shopId: f.shop.id,
-      revisionId: f.r.id,
-      jobId: f.job.id,
-      checkoutSessionId: session.id,
-      amountMinor: totals.depositMinor,
-      currency: f.r.currency,
-    });
+  await db.insert(quotePayments).values({
+    shopId: f.shop.id,
+    revisionId: f.r.id,
+    jobId: f.job.id,
+    checkoutSessionId: session.id,
+    amountMinor: totals.depositMinor,
+    currency: f.r.currency,
+  });
   return { url: session.url };
 }
 

@@ -4,66 +4,17 @@
  * be clipped, and the console stays clean (the shared fixture fails the test on any console or page error).
  * Screenshots of every page land in test-results/screens*.
  */
-import { can, type Permission } from '../../lib/auth/permissions';
-import { expect, test, type Page } from './support/test';
+import { can } from '../../lib/auth/permissions';
+import { expect, test } from './support/test';
 import { clippedText, pageOverflow } from './support/layout-checks';
-import { shot, signIn, type DemoRole } from './support/session';
-import { jobId as jobIdByName } from './support/plans';
+import { shot, signIn } from './support/session';
+import { demoIds, PAGES, ROLES, settle } from './support/pages';
 
 const VIEWPORTS = [
   { name: 'phone', width: 390, height: 844 },
   { name: 'tablet', width: 820, height: 1180 },
   { name: 'small-desk', width: 1024, height: 768 },
 ] as const;
-
-interface Ids {
-  jobId: string;
-  planId: string;
-  partId: string;
-}
-
-/** The demo kitchen, its released plan and one of its parts, found through the API as any client would. */
-async function demoIds(page: Page): Promise<Ids> {
-  const jobId = await jobIdByName(page, 'Hollis kitchen');
-  const list = await (await page.request.get(`/api/jobs/${jobId}/plans`)).json();
-  const plans: { id: string; status: string }[] = Array.isArray(list) ? list : list.plans;
-  const planId = plans.find((p) => p.status === 'released' || p.status === 'cutting')!.id;
-  const partsBody = await (await page.request.get(`/api/jobs/${jobId}/parts`)).json();
-  const parts: { id: string }[] = Array.isArray(partsBody) ? partsBody : partsBody.parts;
-  return { jobId, planId, partId: parts[0].id };
-}
-
-const PAGES: { slug: string; path: (ids: Ids) => string; permission: Permission; heading: RegExp }[] = [
-  { slug: 'jobs', path: () => '/jobs', permission: 'jobs:read', heading: /^Jobs$/ },
-  { slug: 'cut-list', path: (i) => `/jobs/${i.jobId}`, permission: 'jobs:read', heading: /Hollis kitchen/ },
-  { slug: 'drawers', path: (i) => `/jobs/${i.jobId}/drawers`, permission: 'jobs:read', heading: /Hollis kitchen/ },
-  { slug: 'plans', path: (i) => `/jobs/${i.jobId}/plan`, permission: 'plans:read', heading: /Hollis kitchen/ },
-  { slug: 'bench', path: (i) => `/jobs/${i.jobId}/plan/${i.planId}`, permission: 'plans:read', heading: /Hollis kitchen/ },
-  { slug: 'takeoff', path: (i) => `/jobs/${i.jobId}/takeoff`, permission: 'prices:read', heading: /Hollis kitchen/ },
-  { slug: 'customers', path: () => '/customers', permission: 'customers:read', heading: /^Customers$/ },
-  { slug: 'setup-cards', path: () => '/setup-cards', permission: 'jobs:read', heading: /^Setup cards$/ },
-  { slug: 'stock', path: () => '/stock', permission: 'stock:read', heading: /^Stock room$/ },
-  { slug: 'stock-rack', path: () => '/stock?view=rack', permission: 'stock:read', heading: /^Stock room$/ },
-  { slug: 'stock-history', path: () => '/stock?view=history', permission: 'stock:read', heading: /^Stock room$/ },
-  { slug: 'yield', path: () => '/yield', permission: 'yield:read', heading: /^Yield ledger$/ },
-  { slug: 'reports', path: () => '/reports?from=2026-06-01&to=2026-11-30', permission: 'yield:read', heading: /^Reports$/ },
-  { slug: 'shop-floor', path: () => '/shop-floor', permission: 'sawsteps:tick', heading: /^Shop floor$/ },
-  { slug: 'cutting', path: (i) => `/shop-floor/${i.planId}`, permission: 'sawsteps:tick', heading: /Hollis kitchen/ },
-  { slug: 'saw-order', path: (i) => `/plans/${i.planId}/saw-order`, permission: 'plans:read', heading: /Saw order/ },
-  { slug: 'tags', path: (i) => `/plans/${i.planId}/tags`, permission: 'plans:read', heading: /^Part tags$/ },
-  { slug: 'finish', path: (i) => `/plans/${i.planId}/finish`, permission: 'plans:finish', heading: /^Finish/ },
-  { slug: 'part', path: (i) => `/parts/${i.partId}`, permission: 'jobs:read', heading: /Base side/ },
-  { slug: 'team', path: () => '/team', permission: 'team:manage', heading: /^Team$/ },
-  { slug: 'settings', path: () => '/settings', permission: 'settings:write', heading: /^Shop settings$/ },
-];
-
-const ROLES: DemoRole[] = ['owner', 'estimator', 'cutter'];
-
-async function settle(page: Page, heading: RegExp) {
-  await expect(page.getByRole('heading', { level: 1, name: heading })).toBeVisible();
-  await expect(page.getByRole('status').filter({ hasText: /Loading/ })).toHaveCount(0);
-  await page.waitForLoadState('networkidle');
-}
 
 for (const vp of VIEWPORTS) {
   test.describe(`${vp.name} ${vp.width} × ${vp.height}`, () => {

@@ -201,6 +201,21 @@ describe('import boundaries (docs/ARCHITECTURE.md)', () => {
   });
 });
 
+describe('files named by address', () => {
+  test('every `new URL(…, import.meta.url)` (worker entry points, data files) names a file that exists', () => {
+    const named = LAYERS.flatMap((layer) =>
+      (layerFiles.get(layer) ?? []).flatMap((file) =>
+        [...readFileSync(file, 'utf8').matchAll(/new URL\(\s*'(\.{1,2}\/[^']+)',\s*import\.meta\.url\s*\)/g)].map((m) => ({ file, target: m[1] })),
+      ),
+    );
+    expect(named.length, 'the worker handles name their entry points this way').toBeGreaterThan(2);
+    const missing = named
+      .filter(({ file, target }) => !statSafe(path.resolve(path.dirname(file), target)))
+      .map(({ file, target }) => `${path.relative(ROOT, file)} → ${target}`);
+    expect(missing).toEqual([]);
+  });
+});
+
 /** What the schemas may use from lib/: the units and their parsing, the shop's clock, and constant tables. */
 const VOCABULARY = [
   'lib/units',

@@ -51,30 +51,26 @@ describe('the quoting report', () => {
       answeredAt: at('2026-11-03T09:00:00'),
     });
     // By hand: material 2 × 20.00 = 40.00, +30 % = 52.00; delivery 75.00; total 127.00; deposit 50 % = 63.50.
-    await handle.db
-      .insert(quotePayments)
-      .values({
-        shopId: shop,
-        revisionId: won.revision.id,
-        jobId: won.job.id,
-        checkoutSessionId: `cs_test_report_${won.revision.id}`,
-        amountMinor: 6350,
-        currency: 'USD',
-        status: 'paid',
-        paidAt: at('2026-11-03T12:00:00'),
-      });
-    await handle.db
-      .insert(plans)
-      .values({
-        shopId: shop,
-        jobId: won.job.id,
-        name: 'Cut',
-        status: 'done',
-        request: {},
-        document: {},
-        costCents: 5000,
-        finishedAt: at('2026-11-20T15:00:00'),
-      } as typeof plans.$inferInsert);
+    await handle.db.insert(quotePayments).values({
+      shopId: shop,
+      revisionId: won.revision.id,
+      jobId: won.job.id,
+      checkoutSessionId: `cs_test_report_${won.revision.id}`,
+      amountMinor: 6350,
+      currency: 'USD',
+      status: 'paid',
+      paidAt: at('2026-11-03T12:00:00'),
+    });
+    await handle.db.insert(plans).values({
+      shopId: shop,
+      jobId: won.job.id,
+      name: 'Cut',
+      status: 'done',
+      request: {},
+      document: {},
+      costCents: 5000,
+      finishedAt: at('2026-11-20T15:00:00'),
+    } as typeof plans.$inferInsert);
 
     const report = await quotingReport(handle.db, { shopId: shop, timeZone: 'UTC', by: 'month', from: '2026-10-01', to: '2026-11-30' });
     expect(report.periods).toEqual([

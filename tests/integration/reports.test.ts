@@ -40,20 +40,18 @@ async function plan(
       })
       .returning();
     if (piece.parts.length) {
-      await db
-        .insert(placements)
-        .values(
-          piece.parts.map((part, i) => ({
-            shopId,
-            planPieceId: row.id,
-            instance: i + 1,
-            xMm: 0,
-            yMm: 0,
-            lengthMm: part.l,
-            widthMm: part.w,
-            damaged: part.damaged ?? false,
-          })),
-        );
+      await db.insert(placements).values(
+        piece.parts.map((part, i) => ({
+          shopId,
+          planPieceId: row.id,
+          instance: i + 1,
+          xMm: 0,
+          yMm: 0,
+          lengthMm: part.l,
+          widthMm: part.w,
+          damaged: part.damaged ?? false,
+        })),
+      );
     }
   }
   return p;

@@ -82,22 +82,20 @@ export async function jobWithSheet(
     .insert(jobs)
     .values({ shopId, name: `Job in ${material}`, status, acceptedAt, customerId: customer?.id ?? null })
     .returning();
-  await db
-    .insert(parts)
-    .values(
-      rows.map((p, i) => ({
-        shopId,
-        jobId: job.id,
-        label: p.label,
-        quantity: p.quantity,
-        lengthMm: p.lengthMm,
-        widthMm: p.widthMm,
-        thicknessMm: 18,
-        material,
-        grain: p.grain ?? 'along-length',
-        sort: i,
-      })),
-    );
+  await db.insert(parts).values(
+    rows.map((p, i) => ({
+      shopId,
+      jobId: job.id,
+      label: p.label,
+      quantity: p.quantity,
+      lengthMm: p.lengthMm,
+      widthMm: p.widthMm,
+      thicknessMm: 18,
+      material,
+      grain: p.grain ?? 'along-length',
+      sort: i,
+    })),
+  );
   const [sheet] = await db
     .insert(stockItems)
     .values({ shopId, kind: 'sheet', material, nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand, costCents: 6000 })

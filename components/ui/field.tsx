@@ -1,6 +1,12 @@
-import type { ReactNode } from 'react';
+import { cloneElement, isValidElement, type ReactNode } from 'react';
 
-/** A labelled form field with its error underneath. */
+/** The id of a field's error message, for its input's `aria-describedby`. */
+export const errorIdFor = (id: string) => `${id}-error`;
+
+/**
+ * A labelled form field with its error underneath. The error is tied to the input (the child with the field's id):
+ * `aria-invalid` and `aria-describedby` are set on it, so a screen reader reads the message with the field.
+ */
 export function Field({
   id,
   label,
@@ -14,14 +20,18 @@ export function Field({
   children: ReactNode;
   className?: string;
 }) {
+  const input =
+    error && isValidElement<{ 'aria-invalid'?: boolean; 'aria-describedby'?: string }>(children)
+      ? cloneElement(children, { 'aria-invalid': true, 'aria-describedby': errorIdFor(id) })
+      : children;
   return (
     <div className={className}>
       <label htmlFor={id} className="field-label">
         {label}
       </label>
-      {children}
+      {input}
       {error && (
-        <p className="field-error" role="alert">
+        <p id={errorIdFor(id)} className="field-error" role="alert">
           {error}
         </p>
       )}
