@@ -1,5 +1,5 @@
 import { lowerBound } from '@/lib/nesting/bounds';
-import { PANEL_ORDER_KEYS, packPool, packPoolSteps, sortedOrder, STRIP_ORDER_KEYS } from './construct';
+import { PANEL_ORDER_KEYS, packPool, packPoolSteps, sortedOrder, STRIP_ORDER_KEYS, type OrderKey } from './construct';
 import { EPS } from './filler';
 import type { BinFiller } from './filler';
 import { packInputSchema, PackInputError } from './pack-input';
@@ -48,29 +48,8 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
   const mark = new Uint8Array(p.n);
   const all = Int32Array.from({ length: p.n }, (_, i) => i);
 
-  let lastYield = now();
-  let lastProgress = lastYield;
-  let best: Solution | null = null;
-  let bestScore = null as ReturnType<typeof score> | null;
-  const offer = (s: Solution) => {
-    const sc = score(p, s);
-    if (!best || compareScores(p.objective, sc, bestScore!) < 0) {
-      best = s;
-      bestScore = sc;
-      return true;
-    }
-    return false;
-  };
-  const breathe = async () => {
-    const t = now();
-    if (t - lastYield < YIELD_EVERY_MS) return;
-    if (onProgress && best && t - lastProgress >= PROGRESS_EVERY_MS) {
-      lastProgress = t;
-      report(p, f, best, prior, onProgress, t - t0);
-    }
-    await pause();
-    lastYield = now();
-  };
+  const keeper = bestKeeper(p, f, prior, onProgress, t0);
+  const { offer, breathe } = keeper;
 
   // Constructive phase: as many order × rule combinations as the job size allows (never the clock), so the first
   // plan is the same under any load and comes fast even for thousands of parts.
@@ -89,7 +68,7 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
       if (s.done) return void offer({ bins: s.value.bins, noStock: s.value.left });
       await breathe();
       // A cancel drops this construction unless it is the first (a plan must come back).
-      if (signal?.aborted && best) return;
+      if (signal?.aborted && keeper.best) return;
     }
   };
   let nextCombo = 0;
@@ -99,28 +78,25 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
     if (signal?.aborted) break;
     await breathe();
   }
-  if (onProgress) {
-    lastProgress = now();
-    report(p, f, best!, prior, onProgress, lastProgress - t0);
-  }
+  keeper.reportNow();
 
   // Improvement phase, on the clock: the remaining combinations, then re-packing.
   let lb: number | null | undefined; // computed on the first iteration: a zero budget never pays for it
   const rng = mulberry32(options.seed);
-  let cur: Solution = best!;
-  let curScore = bestScore!;
+  let cur: Solution = keeper.best!;
+  let curScore = keeper.bestScore!;
   const maxIter = limits.maxIterations ?? Infinity;
   let pooled: PoolSearch | null = null;
   for (let iter = 0; iter < maxIter; iter++) {
     if (signal?.aborted) break;
     if (limits.maxIterations === undefined && now() - t0 >= options.timeBudgetMs) break;
-    const b: Solution = best!;
+    const b: Solution = keeper.best!;
     if (lb === undefined) lb = binLowerBound(p);
     if (lb !== null && b.noStock.length === 0 && b.bins.length <= lb && p.objective !== 'cuts') break;
     if (nextCombo < combos) {
       await construct(nextCombo++);
-      cur = best!;
-      curScore = bestScore!;
+      cur = keeper.best!;
+      curScore = keeper.bestScore!;
       await breathe();
       continue;
     }
@@ -133,28 +109,8 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
       await breathe();
       continue;
     }
-    const nb = cur.bins.length;
-    if (nb === 0) break;
-
-    const ranked = cur.bins.map((bin, k) => k).sort((x, y) => fill(p, cur.bins[x]) - fill(p, cur.bins[y]) || x - y);
-    const chosen = new Set<number>([ranked[Math.floor(rng() ** 3 * Math.min(nb, 4))]]);
-    const extra = Math.min(nb - 1, 1 + randInt(rng, 3));
-    while (chosen.size < 1 + extra) chosen.add(randInt(rng, nb));
-
-    const avail = stock.slice();
-    const kept = [];
-    const pool: number[] = [...cur.noStock];
-    for (let k = 0; k < nb; k++) {
-      const bin = cur.bins[k];
-      if (chosen.has(k)) for (const i of bin.seq) pool.push(i);
-      else {
-        kept.push(bin);
-        avail[bin.type]--;
-      }
-    }
-    const key = rng() < 0.6 ? orderKeys[0] : orderKeys[randInt(rng, orderKeys.length)];
-    const packing = packPool(p, f, sortedOrder(p, pool, key), avail, randInt(rng, p.filler.rules), rng, ATTEMPTS_PER_BIN, scratch, mark, rng() < 0.5);
-    const cand: Solution = { bins: kept.concat(packing.bins), noStock: packing.left };
+    if (cur.bins.length === 0) break;
+    const cand = repackSome(p, f, cur, stock, orderKeys, rng, scratch, mark);
     const candScore = score(p, cand);
     if (compareScores(p.objective, candScore, curScore) < 0) {
       cur = cand;
@@ -164,9 +120,84 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
     await breathe();
   }
 
-  const result = toResult(p, best!, f, prior);
-  if (onProgress) onProgress(progressOf(p, result, best!, now() - t0));
+  const result = toResult(p, keeper.best!, f, prior);
+  if (onProgress) onProgress(progressOf(p, result, keeper.best!, now() - t0));
   return result;
+}
+
+/**
+ * Keeps the best solution seen, and lets the search breathe: it yields to the event loop every few milliseconds (so
+ * a worker hears a cancel) and reports progress on the best so far.
+ */
+function bestKeeper(p: Problem, f: BinFiller, prior: PackResult['unplaced'], onProgress: PackOptions['onProgress'], t0: number) {
+  let lastYield = now();
+  let lastProgress = lastYield;
+  const keeper = {
+    best: null as Solution | null,
+    bestScore: null as ReturnType<typeof score> | null,
+    /** Takes `s` if it beats the best; says whether it did. */
+    offer(s: Solution): boolean {
+      const sc = score(p, s);
+      if (!keeper.best || compareScores(p.objective, sc, keeper.bestScore!) < 0) {
+        keeper.best = s;
+        keeper.bestScore = sc;
+        return true;
+      }
+      return false;
+    },
+    async breathe(): Promise<void> {
+      const t = now();
+      if (t - lastYield < YIELD_EVERY_MS) return;
+      if (onProgress && keeper.best && t - lastProgress >= PROGRESS_EVERY_MS) {
+        lastProgress = t;
+        report(p, f, keeper.best, prior, onProgress, t - t0);
+      }
+      await pause();
+      lastYield = now();
+    },
+    reportNow(): void {
+      if (!onProgress) return;
+      lastProgress = now();
+      report(p, f, keeper.best!, prior, onProgress, lastProgress - t0);
+    },
+  };
+  return keeper;
+}
+
+/**
+ * One move of the improvement phase: empty a few bins (one of the emptiest most often, plus one to three at random)
+ * and pack their parts, with those no stock took, again into what stock is left.
+ */
+function repackSome(
+  p: Problem,
+  f: BinFiller,
+  cur: Solution,
+  stock: number[],
+  orderKeys: readonly OrderKey[],
+  rng: () => number,
+  scratch: Int32Array,
+  mark: Uint8Array,
+): Solution {
+  const nb = cur.bins.length;
+  const ranked = cur.bins.map((bin, k) => k).sort((x, y) => fill(p, cur.bins[x]) - fill(p, cur.bins[y]) || x - y);
+  const chosen = new Set<number>([ranked[Math.floor(rng() ** 3 * Math.min(nb, 4))]]);
+  const extra = Math.min(nb - 1, 1 + randInt(rng, 3));
+  while (chosen.size < 1 + extra) chosen.add(randInt(rng, nb));
+
+  const avail = stock.slice();
+  const kept = [];
+  const pool: number[] = [...cur.noStock];
+  for (let k = 0; k < nb; k++) {
+    const bin = cur.bins[k];
+    if (chosen.has(k)) for (const i of bin.seq) pool.push(i);
+    else {
+      kept.push(bin);
+      avail[bin.type]--;
+    }
+  }
+  const key = rng() < 0.6 ? orderKeys[0] : orderKeys[randInt(rng, orderKeys.length)];
+  const packing = packPool(p, f, sortedOrder(p, pool, key), avail, randInt(rng, p.filler.rules), rng, ATTEMPTS_PER_BIN, scratch, mark, rng() < 0.5);
+  return { bins: kept.concat(packing.bins), noStock: packing.left };
 }
 
 const fill = (p: Problem, bin: Solution['bins'][number]) => bin.used / (p.types[bin.type].w * p.types[bin.type].h);
