@@ -18,6 +18,7 @@ import { formatLength } from '@/lib/units/format-length';
 import { nestRequestSchema, type NestRequest } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { useLiveCheck } from './use-live-check';
+import { PIECE_KIND_LABELS } from '@/shared/schemas/nesting';
 
 const BenchCanvas = dynamic(() => import('./bench-canvas'), {
   ssr: false,
@@ -32,7 +33,6 @@ interface PlanResponse {
   document: unknown;
 }
 
-const KIND = { sheet: 'Sheet', board: 'Board', offcut: 'Offcut' } as const;
 const NUDGE_MM = 1;
 const BIG_NUDGE_MM = 10;
 
@@ -169,7 +169,7 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   const pieceCaption = useCallback(
     (i: number) => {
       const p = doc.pieces[i];
-      return `${String.fromCharCode(65 + (i % 26))}${i >= 26 ? Math.floor(i / 26) : ''} · ${KIND[p.kind]} ${fmt(p.length)} × ${fmt(p.width)} · ${fmt(p.thickness)} ${p.material}`;
+      return `${String.fromCharCode(65 + (i % 26))}${i >= 26 ? Math.floor(i / 26) : ''} · ${PIECE_KIND_LABELS[p.kind]} ${fmt(p.length)} × ${fmt(p.width)} · ${fmt(p.thickness)} ${p.material}`;
     },
     [doc.pieces, fmt],
   );

@@ -21,6 +21,7 @@ import { NestProgressBar } from './nest-progress';
 import { PlanSummary } from './plan-summary';
 import { useNestingWorker } from './use-nesting-worker';
 import { Field } from '@/components/ui/field';
+import { requestForChoice } from '@/lib/nesting/request-for-choice';
 
 const settingsForm = (unit: 'in' | 'mm') =>
   z.object({
@@ -162,20 +163,14 @@ function NestForm({
       ...(saw ? { sawId: saw.id } : {}),
       ...(breakdown ? { breakdownSawId: breakdown.id } : {}),
     };
-    const chosen = new Set(v.stockIds);
-    // Each cut is allowed the widest kerf of the saws chosen (the server does the same).
-    const sawKerf = Math.max(0, ...[saw, breakdown].map((sw) => sw?.kerfMm ?? 0));
+    // The same rule the server judges the saved plan by (lib/nesting/request-for-choice.ts).
     const { sawId: _s, breakdownSawId: _b, ...engineSettings } = settings;
-    const request = {
-      parts: offered.parts,
-      stock: offered.stock.filter((st) => chosen.has(st.id)),
-      settings: {
-        ...offered.settings,
-        ...engineSettings,
-        ...(saw ? { saw: profile(saw), kerf: Math.max(settings.kerf ?? 0, sawKerf) } : {}),
-        ...(breakdown ? { breakdownSaw: profile(breakdown) } : {}),
-      },
-    };
+    const request = requestForChoice(offered, {
+      stockIds: v.stockIds,
+      settings: engineSettings,
+      saw: saw ? profile(saw) : undefined,
+      breakdownSaw: breakdown ? profile(breakdown) : undefined,
+    });
     setResult(null);
     setFailure(null);
     setBudgetMs(settings.timeBudgetMs ?? 0);

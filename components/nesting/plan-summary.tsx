@@ -6,8 +6,8 @@ import { formatArea } from '@/lib/units/format-area';
 import { formatLength } from '@/lib/units/format-length';
 import type { Plan } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
+import { PIECE_KIND_LABELS } from '@/shared/schemas/nesting';
 
-const KIND = { sheet: 'Sheet', board: 'Board', offcut: 'Offcut' } as const;
 const REASON = {
   'too-large': 'Larger than any stock',
   grain: 'Fits only turned; grain forbids',
@@ -41,7 +41,7 @@ export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan;
           {lines.map((l) => (
             <tr key={l.stockId}>
               <td>
-                {KIND[l.kind]} · {thick(l.thickness)} {l.material}
+                {PIECE_KIND_LABELS[l.kind]} · {thick(l.thickness)} {l.material}
               </td>
               <td className="num whitespace-nowrap">
                 {len(l.length)} × {len(l.width)}
@@ -69,7 +69,7 @@ export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan;
       {plan.cancelled && <p className="text-sm text-amber">Stopped early: this is the best plan found by then.</p>}
       {t && t.byMaterial.length > 0 && (
         <p className="text-sm text-graphite-soft">
-          {t.byMaterial.map((m) => `${m.pieces} × ${KIND[m.kind].toLowerCase()} ${thick(m.thickness)} ${m.material}`).join(' · ')}
+          {t.byMaterial.map((m) => `${m.pieces} × ${PIECE_KIND_LABELS[m.kind].toLowerCase()} ${thick(m.thickness)} ${m.material}`).join(' · ')}
         </p>
       )}
       {/* Side by side when both have lines; otherwise the one with lines takes the room and the empty one stays small. */}

@@ -15,6 +15,9 @@ export function TagSheets({ items, sheet, jobName }: { items: TagItem[]; sheet: 
   const pages = paginate(items, sheet);
   return (
     <div
+      tabIndex={0}
+      role="region"
+      aria-label="Label sheets"
       className="-mx-4 flex flex-col items-start gap-6 overflow-x-auto px-4 pb-2 sm:mx-0 sm:px-0 print:mx-0 print:block print:overflow-visible print:p-0"
       data-testid="label-sheets"
       data-print-page={sheet.page.css === 'A4' ? 'part-tags-a4' : 'part-tags-letter'}

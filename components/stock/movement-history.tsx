@@ -26,7 +26,7 @@ export function MovementHistory({
     ...changes.map((c) => ({ at: c.createdAt, change: c })),
   ].sort((a, b) => b.at.getTime() - a.at.getTime());
   return (
-    <div className="card overflow-x-auto">
+    <div className="card overflow-x-auto" tabIndex={0} role="region" aria-label="Stock history">
       <table className="data-table" aria-label="Stock history">
         <thead>
           <tr>

@@ -11,6 +11,7 @@ import { openRecuts } from './recuts';
 import { listSaws } from './saws';
 import type { NestSaw } from '@/shared/schemas/saw';
 import { invalid } from '@/lib/errors';
+import { requestForChoice } from '@/lib/nesting/request-for-choice';
 
 /**
  * Stock ids in a nesting request name where the piece comes from, so a plan can be traced back to the rack:
@@ -63,9 +64,6 @@ export async function buildNestRequest(
   };
   const saw = sawFor(sawId, 'sawId');
   const breakdownSaw = sawFor(breakdownSawId, 'breakdownSawId');
-  if (breakdownSaw && !saw)
-    throw invalid('A breakdown saw needs a second saw for the rest of the cuts.', { breakdownSawId: ['choose the second saw too'] });
-  const sawKerf = Math.max(0, ...[saw, breakdownSaw].map((s) => s?.kerfMm ?? 0));
 
   const stock: NestStock[] = [];
   for (const item of items) {
@@ -99,7 +97,7 @@ export async function buildNestRequest(
     });
   }
 
-  return {
+  const offered: NestRequestInput = {
     parts,
     stock,
     settings: {
@@ -108,11 +106,9 @@ export async function buildNestRequest(
       minOffcutLength: shop.minOffcutLengthMm,
       minOffcutWidth: shop.minOffcutWidthMm,
       minFenceWidth: shop.minFenceWidthMm,
-      ...settings,
-      ...(saw ? { saw, kerf: Math.max(settings.kerf ?? shop.kerfMm, sawKerf) } : {}),
-      ...(breakdownSaw ? { breakdownSaw } : {}),
     },
   };
+  return requestForChoice(offered, { stockIds: stock.map((s) => s.id), settings, saw, breakdownSaw });
 }
 
 const cutListParts = (parts: Awaited<ReturnType<typeof listParts>>): NestPart[] =>

@@ -3,15 +3,7 @@ import type { Db } from '../open';
 import { plans } from '../schema';
 import type { NestRequest, Plan } from '@/shared/schemas/nesting';
 import { recordAudit } from './audit';
-import { validatePlan, type Violation } from '@/lib/nesting';
-import { planSchema } from '@/shared/schemas/nesting';
 import type { JobPlanSummary } from '@/shared/wire/plans';
-
-/** Judges a plan against its request with `validatePlan` (the same code the bench runs): the plan, or why not. */
-export function judgePlan(request: NestRequest, plan: unknown): { ok: true; plan: Plan } | { ok: false; violations: Violation[] } {
-  const violations = validatePlan(request, plan);
-  return violations.length ? { ok: false, violations } : { ok: true, plan: planSchema.parse(plan) };
-}
 
 /** What a list of a job's plans shows. */
 export type { JobPlanSummary } from '@/shared/wire/plans';

@@ -5,6 +5,7 @@
 import { formatLength, type LengthStyle } from '@/lib/units/format-length';
 import type { PlanPiece, SawPiece, SawStep } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
+import { PIECE_KIND_LABELS } from '@/shared/schemas/nesting';
 
 /** What a narrow rip asks for instead of the rip fence. */
 export const NARROW_HOW = 'on a sled, with a track saw or on the band saw: too narrow to rip between blade and fence';
@@ -87,7 +88,7 @@ export const ROLE_LABELS: Record<SawPiece['role'], string> = { part: 'Part', pie
 /** "Sheet A", "Board B", "Offcut C" with its material, thickness and size. */
 export function stockPieceTitle(piece: PlanPiece, name: string, units: ShopUnits, style: LengthStyle = 'hyphen') {
   const len = (mm: number) => formatLength(mm, units, { style });
-  const kind = { sheet: 'Sheet', board: 'Board', offcut: 'Offcut' }[piece.kind];
+  const kind = PIECE_KIND_LABELS[piece.kind];
   const times = style === 'ascii' ? ' x ' : ' × ';
   return { heading: `${kind} ${name}`, detail: `${piece.material} ${len(piece.thickness)} · ${len(piece.length)}${times}${len(piece.width)}` };
 }

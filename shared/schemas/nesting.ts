@@ -34,6 +34,9 @@ export const nestPartSchema = z.object({
 export type NestPart = z.infer<typeof nestPartSchema>;
 
 export const stockKindSchema = z.enum(['sheet', 'board', 'offcut']);
+
+/** A stock piece's kind as screens and printouts name it. */
+export const PIECE_KIND_LABELS: Record<z.infer<typeof stockKindSchema>, string> = { sheet: 'Sheet', board: 'Board', offcut: 'Offcut' };
 export type StockKind = z.infer<typeof stockKindSchema>;
 
 export const nestStockSchema = z

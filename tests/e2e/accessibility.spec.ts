@@ -21,13 +21,10 @@ async function violations(page: Page): Promise<string[]> {
   const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
   return result.violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
-    .map(
-      (v) =>
-        `${v.id} (${v.impact}): ${v.help} — ${v.nodes
-          .map((n) => n.target.join(' '))
-          .slice(0, 4)
-          .join('; ')}`,
-    );
+    .map((v) => {
+      const where = v.nodes.map((n) => `${n.target.join(' ')}${n.any[0]?.message ? ` (${n.any[0].message})` : ''}`);
+      return `${v.id} (${v.impact}): ${v.help} — ${where.slice(0, 4).join('; ')}`;
+    });
 }
 
 for (const who of WHO) {

@@ -1,5 +1,6 @@
 import { getPlan } from '@/db/queries/plan-document';
-import { judgePlan, updateDraftPlan } from '@/db/queries/plan-drafts';
+import { updateDraftPlan } from '@/db/queries/plan-drafts';
+import { judgePlan } from '@/lib/nesting/judge-plan';
 import { withoutPrices } from '@/lib/stock/without-prices';
 import { conflict, invalid, notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';

@@ -1,12 +1,14 @@
 import { getJob } from '@/db/queries/jobs';
 import { buildNestRequest } from '@/db/queries/nest-request';
-import { createDraftPlan, judgePlan, listJobPlans } from '@/db/queries/plan-drafts';
+import { createDraftPlan, listJobPlans } from '@/db/queries/plan-drafts';
+import { judgePlan } from '@/lib/nesting/judge-plan';
 import { withoutPrices } from '@/lib/stock/without-prices';
 import { conflict, invalid, notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { planCreateSchema } from '@/shared/schemas/plan-save';
+import { requestForChoice } from '@/lib/nesting/request-for-choice';
 
 // GET /api/jobs/:id/plans – the job's plans with status, yield and cost (drafts and prices only for those allowed)
 export const GET = route({ permission: 'plans:read', params: idParams }, async ({ db, user, params }) => {
@@ -22,13 +24,7 @@ export const POST = route(
   async ({ db, user, params, body }) => {
     if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
     const offered = await buildNestRequest(db, user.shopId, params.id, body.settings, body.for);
-    const known = new Set(offered.stock.map((s) => s.id));
-    const unknown = body.stockIds.filter((id) => !known.has(id));
-    if (unknown.length) {
-      throw invalid('Some of the chosen stock is no longer on offer; nest again.', { stockIds: unknown.map((id) => `"${id}" is not on offer`) });
-    }
-    const chosen = new Set(body.stockIds);
-    const request = nestRequestSchema.parse({ ...offered, stock: offered.stock.filter((s) => chosen.has(s.id)) });
+    const request = nestRequestSchema.parse(requestForChoice(offered, { stockIds: body.stockIds }));
     const judged = judgePlan(request, body.plan);
     if (!judged.ok) throw invalid('The plan breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
     if (body.for === 'recuts' && !request.parts.length) throw conflict('This job has no open re-cuts to nest; nothing was saved.');
