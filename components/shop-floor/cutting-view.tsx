@@ -1,9 +1,8 @@
 'use client';
 
 import Link from 'next/link';
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useEffectEvent, useMemo, useState } from 'react';
-import { api, ApiError } from '@/client/api';
+import { ApiError } from '@/client/api';
 import { NARROW_HOW } from '@/lib/saw-order/describe-step';
 import type { PieceView } from '@/lib/saw-order/piece-views';
 import { sawProgress } from '@/lib/saw-order/progress';
@@ -11,6 +10,7 @@ import type { PlanTicks } from '@/shared/wire/plans';
 import { StepDiagram } from '@/components/saw-order/step-diagram';
 import { StepKindBadge } from '@/components/saw-order/step-kind-badge';
 import { ProgressBar } from './progress-bar';
+import { usePlanTicks } from './use-plan-ticks';
 import { useWakeLock, type WakeState } from './use-wake-lock';
 
 interface Props {
@@ -20,8 +20,6 @@ interface Props {
   canFinish: boolean;
 }
 
-type Toggle = { piece: number; step: number; done: boolean };
-
 const time = (iso: string) => new Date(iso).toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
 
 /**
@@ -30,49 +28,12 @@ const time = (iso: string) => new Date(iso).toLocaleTimeString([], { hour: '2-di
  * on one plan see each other's work.
  */
 export function CuttingView({ planId, views, initial, canFinish }: Props) {
-  const key = ['saw-steps', planId];
-  const client = useQueryClient();
-  const ticksQuery = useQuery({
-    queryKey: key,
-    queryFn: () => api<PlanTicks>(`/api/plans/${planId}/steps`),
-    initialData: initial,
-    refetchInterval: 10_000,
-  });
-  const data = ticksQuery.data;
+  const { ticks: data, refreshFailed, toggle } = usePlanTicks(planId, initial);
   const pieces = useMemo(() => views.map((v) => ({ sawOrder: v.steps.map((s) => s.geometry.step) })), [views]);
   const progress = sawProgress(pieces, data.ticks);
   const [pieceIndex, setPieceIndex] = useState(() => progress.pieces.find((p) => p.next !== null)?.piece ?? 0);
   const [picked, setPicked] = useState<number | null>(null);
   const wake = useWakeLock(true);
-
-  const toggle = useMutation({
-    mutationFn: ({ piece, step, done }: Toggle) =>
-      api<PlanTicks>(`/api/plans/${planId}/steps`, { method: done ? 'POST' : 'DELETE', body: { piece, step } }),
-    onMutate: async ({ piece, step, done }) => {
-      await client.cancelQueries({ queryKey: key });
-      const before = client.getQueryData<PlanTicks>(key);
-      client.setQueryData<PlanTicks>(
-        key,
-        (old) =>
-          old && {
-            ...old,
-            ticks: done
-              ? [
-                  ...old.ticks.filter((t) => !(t.piece === piece && t.step === step)),
-                  { piece, step, doneAt: new Date().toISOString(), doneBy: 'You' },
-                ]
-              : old.ticks.filter((t) => !(t.piece === piece && t.step === step)),
-          },
-      );
-      return { before };
-    },
-    onError: (_e, _v, ctx) => ctx?.before && client.setQueryData(key, ctx.before),
-    onSuccess: async (fresh) => {
-      // A refresh that left before this tick was saved must not paint over it.
-      await client.cancelQueries({ queryKey: key });
-      client.setQueryData(key, fresh);
-    },
-  });
 
   const view = views[pieceIndex];
   const pieceProgress = progress.pieces[pieceIndex];
@@ -113,7 +74,7 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
           {toggle.error instanceof ApiError ? toggle.error.message : 'That tick was not saved.'} Nothing else changed; try again.
         </p>
       )}
-      {ticksQuery.isError && (
+      {refreshFailed && (
         <p role="alert" className="rounded-md border border-amber/40 bg-amber-wash px-4 py-3 text-amber">
           Could not refresh the ticks from the server; showing what this screen last saw.
         </p>
