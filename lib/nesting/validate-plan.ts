@@ -68,6 +68,8 @@ export interface Violation {
   instance?: number;
   /** Saw-order step number. */
   step?: number;
+  /** The other part of a pair (an overlap names both: `partId`/`instance` is the second, this the first). */
+  other?: { partId: string; instance: number };
 }
 
 
@@ -130,7 +132,7 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
       const gap = clearance(a, b);
       if (gap >= settings.kerf - EPS) continue;
       const what = gap < -EPS ? 'overlap' : `are ${Math.max(0, gap).toFixed(2)} mm apart, closer than one kerf (${settings.kerf} mm)`;
-      out.push({ code: 'overlap', message: `${name(parts.get(a.partId), a)} and ${name(parts.get(b.partId), b)} ${what}`, ...at, partId: b.partId, instance: b.instance });
+      out.push({ code: 'overlap', message: `${name(parts.get(a.partId), a)} and ${name(parts.get(b.partId), b)} ${what}`, ...at, partId: b.partId, instance: b.instance, other: { partId: a.partId, instance: a.instance } });
       geometryOk = false;
     }
   }
