@@ -143,45 +143,62 @@ const PiecesLayer = memo(function PiecesLayer({ doc, frames, parts, check, selec
               <Rect key={`o${i}`} x={o.x} y={o.y} width={o.w} height={o.h} fill={C.offcut} stroke={C.offcutEdge} strokeWidth={px} dash={[4 * px, 3 * px]} perfectDrawEnabled={false} />
             ))}
             {!left && piece.trim > 0 && <Rect x={piece.trim} y={piece.trim} width={piece.length - 2 * piece.trim} height={piece.width - 2 * piece.trim} fill={C.stock} perfectDrawEnabled={false} />}
-            {byPiece[f.piece].map(([key, p]) => {
-              const info = parts.get(p.partId);
-              const problem = check.byPlacement.has(key);
-              const isSelected = selected.has(key);
-              const label = fitLabel(p.label || info?.label || p.partId, info ? `${fmt(info.length)} × ${fmt(info.width)}` : '', p.w * scale, p.h * scale);
-              const grainArrow = info?.grain === 'along-length' && piece.grain !== 'none' && Math.min(p.w, p.h) * scale > 14;
-              return (
-                <Group key={key} x={p.x} y={p.y} opacity={key === dragKey ? 0.35 : 1}>
-                  <Rect
-                    width={p.w}
-                    height={p.h}
-                    fill={info ? partTone(info.group, info.material, info.thickness) : C.stock}
-                    stroke={problem ? C.problem : isSelected ? C.selected : p.locked ? C.locked : C.partEdge}
-                    strokeWidth={(problem || isSelected ? 3 : p.locked ? 2 : 0.75) * px}
-                    dash={p.locked ? [6 * px, 3 * px] : undefined}
-                    perfectDrawEnabled={false}
-                  />
-                  {grainArrow && <GrainArrow w={p.w} h={p.h} alongX={!p.rotated} px={px} />}
-                  {label && (
-                    <Text
-                      x={4 * px}
-                      y={3 * px}
-                      width={Math.max(0, p.w - 8 * px)}
-                      text={(p.locked ? '▪ ' : '') + label.lines.join('\n')}
-                      fontSize={label.fontPx * px}
-                      lineHeight={1.2}
-                      fill={problem ? C.problem : C.text}
-                      wrap="none"
-                      ellipsis
-                      perfectDrawEnabled={false}
-                    />
-                  )}
-                </Group>
-              );
-            })}
+            {byPiece[f.piece].map(([key, p]) => (
+              <PartNode key={key} p={p} info={parts.get(p.partId)} pieceGrain={piece.grain} problem={check.byPlacement.has(key)} selected={selected.has(key)} dragged={key === dragKey} scale={scale} fmt={fmt} />
+            ))}
           </Group>
         );
       })}
     </Layer>
+  );
+});
+
+interface PartNodeProps {
+  p: BenchDoc['placements'][string];
+  info: PartInfo | undefined;
+  pieceGrain: BenchDoc['pieces'][number]['grain'];
+  problem: boolean;
+  selected: boolean;
+  dragged: boolean;
+  scale: number;
+  fmt: (mm: number) => string;
+}
+
+/**
+ * One part on its piece. Memoised on its own placement and marks, so a drop or a check's answer re-renders only the
+ * parts it changed, not all of them (a drop among hundreds stays within a frame).
+ */
+const PartNode = memo(function PartNode({ p, info, pieceGrain, problem, selected, dragged, scale, fmt }: PartNodeProps) {
+  const px = 1 / scale;
+  const label = fitLabel(p.label || info?.label || p.partId, info ? `${fmt(info.length)} × ${fmt(info.width)}` : '', p.w * scale, p.h * scale);
+  const grainArrow = info?.grain === 'along-length' && pieceGrain !== 'none' && Math.min(p.w, p.h) * scale > 14;
+  return (
+    <Group x={p.x} y={p.y} opacity={dragged ? 0.35 : 1}>
+      <Rect
+        width={p.w}
+        height={p.h}
+        fill={info ? partTone(info.group, info.material, info.thickness) : C.stock}
+        stroke={problem ? C.problem : selected ? C.selected : p.locked ? C.locked : C.partEdge}
+        strokeWidth={(problem || selected ? 3 : p.locked ? 2 : 0.75) * px}
+        dash={p.locked ? [6 * px, 3 * px] : undefined}
+        perfectDrawEnabled={false}
+      />
+      {grainArrow && <GrainArrow w={p.w} h={p.h} alongX={!p.rotated} px={px} />}
+      {label && (
+        <Text
+          x={4 * px}
+          y={3 * px}
+          width={Math.max(0, p.w - 8 * px)}
+          text={(p.locked ? '▪ ' : '') + label.lines.join('\n')}
+          fontSize={label.fontPx * px}
+          lineHeight={1.2}
+          fill={problem ? C.problem : C.text}
+          wrap="none"
+          ellipsis
+          perfectDrawEnabled={false}
+        />
+      )}
+    </Group>
   );
 });
 
