@@ -42,7 +42,12 @@ type Mode = (typeof MODES)[number];
 
 const args = z
   .object({
-    port: z.coerce.number().int().min(1024).max(65535).default(Number(process.env.PORT) || 3460),
+    port: z.coerce
+      .number()
+      .int()
+      .min(1024)
+      .max(65535)
+      .default(Number(process.env.PORT) || 3460),
     drops: z.coerce.number().int().min(2).max(50).default(6),
     modes: z
       .string()
@@ -71,7 +76,10 @@ const distDir = process.env.KERFWISE_DIST_DIR || '.next';
 function buildIfNeeded() {
   if (fs.existsSync(path.join(distDir, 'BUILD_ID'))) return;
   log(`No build in ${distDir}: building…`);
-  const build = spawnSync(process.execPath, ['node_modules/next/dist/bin/next', 'build'], { stdio: 'inherit', env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' } });
+  const build = spawnSync(process.execPath, ['node_modules/next/dist/bin/next', 'build'], {
+    stdio: 'inherit',
+    env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' },
+  });
   if (build.status !== 0) throw new Error('next build failed');
 }
 
@@ -131,7 +139,10 @@ async function makePlan(page: Page, url: string): Promise<{ planId: string; plan
   const headers = { origin: url };
   const job = await (await page.request.post(`${url}/api/jobs`, { headers, data: { name: `Frame-rate drawer run ${Date.now()}` } })).json();
   for (const row of ROWS) {
-    const res = await page.request.post(`${url}/api/jobs/${job.id}/parts`, { headers, data: { ...row, thicknessMm: MAPLE_23_32, material: 'Maple ply', grain: 'any' } });
+    const res = await page.request.post(`${url}/api/jobs/${job.id}/parts`, {
+      headers,
+      data: { ...row, thicknessMm: MAPLE_23_32, material: 'Maple ply', grain: 'any' },
+    });
     if (res.status() !== 201) throw new Error(`adding parts failed: ${res.status()} ${await res.text()}`);
   }
   await page.goto(`${url}/jobs/${job.id}/plan`);
@@ -228,20 +239,26 @@ async function measureDrop(page: Page, url: string, planId: string): Promise<Dro
   await page.mouse.up();
   await page.waitForFunction(SETTLED, null, { timeout: 30_000, polling: 10 });
   await page.waitForTimeout(300);
-  const { times, loaf, pending } = (await page.evaluate('(() => { window.__stop = true; return { times: window.__frames, loaf: window.__loaf, pending: window.__pending }; })()')) as {
+  const { times, loaf, pending } = (await page.evaluate(
+    '(() => { window.__stop = true; return { times: window.__frames, loaf: window.__loaf, pending: window.__pending }; })()',
+  )) as {
     times: number[];
     loaf: number[];
     pending: [number, string][];
   };
   const said = await page.getByTestId('bench-status').textContent();
-  if (said?.includes('overlap') || said?.includes('outside')) throw new Error(`the drop was meant to land clear of the other parts, but the bench says: ${said}`);
+  if (said?.includes('overlap') || said?.includes('outside'))
+    throw new Error(`the drop was meant to land clear of the other parts, but the bench says: ${said}`);
   // A build whose bench never says it is checking (the check ran inside the render, before the worker) has no answer time.
   const answeredAt = pending.find(([t, v]) => t >= upAt && v === 'false')?.[0] ?? Number.NaN;
   const drag = times.filter((t) => t < upAt);
   const after = times.filter((t) => t >= upAt);
   // The first frame after the drop counts from the last frame before it.
   const dropGaps = [after[0] - drag.at(-1)!, ...after.slice(1).map((t, i) => t - after[i])];
-  const gaps = drag.slice(1).map((t, i) => t - drag[i]).sort((x, y) => x - y);
+  const gaps = drag
+    .slice(1)
+    .map((t, i) => t - drag[i])
+    .sort((x, y) => x - y);
   // Put the part back for the next drop (one undo step) and wait for that check too.
   await page.getByRole('button', { name: 'Undo' }).click();
   await page.waitForFunction(SETTLED, null, { timeout: 30_000 });
@@ -294,7 +311,9 @@ function summary(mode: Mode, drops: DropFigures[]) {
     fps: `${Math.min(...fps)}–${Math.max(...fps)}`,
     dragMaxFrame: `${Math.max(...drops.map((d) => d.dragFrameMs.max))} ms`,
     dropLongest: `${drop[0]} ms first, ${Math.min(...drop.slice(1))}–${Math.max(...drop.slice(1))} ms after`,
-    answer: drops.every((d) => d.answerMs !== null) ? `${Math.min(...drops.map((d) => d.answerMs!))}–${Math.max(...drops.map((d) => d.answerMs!))} ms` : '—',
+    answer: drops.every((d) => d.answerMs !== null)
+      ? `${Math.min(...drops.map((d) => d.answerMs!))}–${Math.max(...drops.map((d) => d.answerMs!))} ms`
+      : '—',
     loaf: `${Math.max(...drops.map((d) => d.longestLoafMs))} ms`,
     target: ok ? '✓' : '✗',
   };
@@ -303,7 +322,12 @@ function summary(mode: Mode, drops: DropFigures[]) {
 async function main() {
   buildIfNeeded();
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-bench-layout-'));
-  log(`Layout bench frames, ${os.cpus().length} cores, load average ${os.loadavg().map((n) => n.toFixed(1)).join(' ')}; data in ${dataDir}`);
+  log(
+    `Layout bench frames, ${os.cpus().length} cores, load average ${os
+      .loadavg()
+      .map((n) => n.toFixed(1))
+      .join(' ')}; data in ${dataDir}`,
+  );
   await seed(dataDir);
   const { child, url } = startServer(dataDir, args.port);
   let browser: Browser | null = null;
@@ -312,7 +336,15 @@ async function main() {
     browser = await chromium.launch({
       executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
       headless: true,
-      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
     });
     const setup = await browser.newContext({ viewport: { width: 1440, height: 900 } });
     const page = await setup.newPage();
@@ -326,17 +358,40 @@ async function main() {
       results[mode] = await runMode(browser, url, plan, mode, storage);
     }
     log('');
-    log(`| live check | drag fps (≥ ${TARGET.fps}) | longest frame in the drag | longest frame on the drop (≤ ${TARGET.dropFrameMs} ms) | drop → answer | longest animation frame | target |`);
+    log(
+      `| live check | drag fps (≥ ${TARGET.fps}) | longest frame in the drag | longest frame on the drop (≤ ${TARGET.dropFrameMs} ms) | drop → answer | longest animation frame | target |`,
+    );
     log('|---|---|---|---|---|---|---|');
     for (const mode of args.modes) {
       const s = summary(mode, results[mode]);
-      log(`| ${mode === 'worker' ? 'in its worker' : 'on the main thread'} | ${s.fps} | ${s.dragMaxFrame} | ${s.dropLongest} | ${s.answer} | ${s.loaf} | ${s.target} |`);
+      log(
+        `| ${mode === 'worker' ? 'in its worker' : 'on the main thread'} | ${s.fps} | ${s.dragMaxFrame} | ${s.dropLongest} | ${s.answer} | ${s.loaf} | ${s.target} |`,
+      );
     }
-    log(`\nLoad average after: ${os.loadavg().map((n) => n.toFixed(1)).join(' ')}`);
+    log(
+      `\nLoad average after: ${os
+        .loadavg()
+        .map((n) => n.toFixed(1))
+        .join(' ')}`,
+    );
     if (args.write) {
       fs.mkdirSync('bench/results', { recursive: true });
       const file = `bench/results/layout-${new Date().toISOString().replace(/[:.]/g, '-')}.json`;
-      fs.writeFileSync(file, JSON.stringify({ measuredAt: new Date().toISOString(), browser: 'Chromium headless, --disable-gpu', parts: 340, moves: MOVES, loadavg: os.loadavg(), results }, null, 2));
+      fs.writeFileSync(
+        file,
+        JSON.stringify(
+          {
+            measuredAt: new Date().toISOString(),
+            browser: 'Chromium headless, --disable-gpu',
+            parts: 340,
+            moves: MOVES,
+            loadavg: os.loadavg(),
+            results,
+          },
+          null,
+          2,
+        ),
+      );
       log(`Written to ${file}`);
     }
   } finally {

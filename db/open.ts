@@ -29,9 +29,8 @@ export interface OpenOptions {
 export const MIGRATIONS_FOLDER = path.resolve(process.cwd(), 'db/migrations');
 
 export async function openDatabase(options: OpenOptions = {}): Promise<DbHandle> {
-  const handle = options.url && /^postgres(ql)?:\/\//.test(options.url)
-    ? await openPostgres(options.url)
-    : await openPglite(options.dataDir ?? './data/pglite');
+  const handle =
+    options.url && /^postgres(ql)?:\/\//.test(options.url) ? await openPostgres(options.url) : await openPglite(options.dataDir ?? './data/pglite');
   if (options.migrate !== false) {
     try {
       await runMigrations(handle);

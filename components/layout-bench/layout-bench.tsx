@@ -21,7 +21,10 @@ import { nestRequestSchema, type NestRequest } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { useLiveCheck } from './use-live-check';
 
-const BenchCanvas = dynamic(() => import('./bench-canvas'), { ssr: false, loading: () => <p className="p-4 text-sm text-graphite-mute">Setting out the bench…</p> });
+const BenchCanvas = dynamic(() => import('./bench-canvas'), {
+  ssr: false,
+  loading: () => <p className="p-4 text-sm text-graphite-mute">Setting out the bench…</p>,
+});
 
 interface PlanResponse {
   id: string;
@@ -37,7 +40,12 @@ const KIND = { sheet: 'Sheet', board: 'Board', offcut: 'Offcut' } as const;
 export function LayoutBench({ planId, editable, units }: { planId: string; editable: boolean; units: ShopUnits }) {
   const plan = useQuery({ queryKey: ['plan', planId], queryFn: () => api<PlanResponse>(`/api/plans/${planId}`) });
   if (plan.isPending) return <p className="text-sm text-graphite-mute">Loading the plan…</p>;
-  if (plan.isError) return <p className="field-error" role="alert">Could not load the plan: {plan.error.message}</p>;
+  if (plan.isError)
+    return (
+      <p className="field-error" role="alert">
+        Could not load the plan: {plan.error.message}
+      </p>
+    );
   return <BenchEditor key={plan.data.updatedAt} data={plan.data} editable={editable && plan.data.status === 'draft'} units={units} />;
 }
 
@@ -46,7 +54,9 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   const router = useRouter();
   const request = useMemo(() => nestRequestSchema.parse(data.request), [data.request]);
   const parts = useMemo(() => new Map<string, PartInfo>(request.parts.map((p) => [p.id, p])), [request]);
-  const [store] = useState<BenchStore>(() => createBenchStore(planToDoc(readBenchPlan(data.document), request), { parts, kerf: request.settings.kerf }));
+  const [store] = useState<BenchStore>(() =>
+    createBenchStore(planToDoc(readBenchPlan(data.document), request), { parts, kerf: request.settings.kerf }),
+  );
   const doc = useStore(store, (s) => s.doc);
   const selection = useStore(store, (s) => s.view.selection);
   // The commands read the store when drawn: subscribe to what their labels and enabled states follow.
@@ -89,7 +99,11 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   }, [fit, size.measured]);
 
   const save = useMutation({
-    mutationFn: () => api<{ updatedAt: string }>(`/api/plans/${data.id}`, { method: 'PUT', body: { plan: rebuildCuts(request, docToPlan(store.getState().doc)), baseUpdatedAt: base } }),
+    mutationFn: () =>
+      api<{ updatedAt: string }>(`/api/plans/${data.id}`, {
+        method: 'PUT',
+        body: { plan: rebuildCuts(request, docToPlan(store.getState().doc)), baseUpdatedAt: base },
+      }),
     onSuccess: (res) => {
       setBase(res.updatedAt);
       store.getState().markSaved();
@@ -103,7 +117,8 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
     const job = prepareRenest(request as NestRequest, store.getState().doc);
     setNotice(null);
     const outcome = await worker.run(job.request);
-    if (!outcome.ok) return setNotice(`Re-nest failed: ${outcome.error === 'failed' ? outcome.message : outcome.issues.map((i) => i.message).join('; ')}`);
+    if (!outcome.ok)
+      return setNotice(`Re-nest failed: ${outcome.error === 'failed' ? outcome.message : outcome.issues.map((i) => i.message).join('; ')}`);
     store.getState().replaceDoc(job.merge(outcome.plan));
     setNotice('Re-nested the unlocked parts around the locked ones. Undo puts the old layout back.');
   };
@@ -147,11 +162,20 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   return (
     <section aria-labelledby="bench" className="space-y-3">
       <div className="flex flex-wrap items-center gap-2">
-        <h2 id="bench" className="mr-auto">Layout bench</h2>
+        <h2 id="bench" className="mr-auto">
+          Layout bench
+        </h2>
         {commands
           .filter((c) => c.button)
           .map((c) => (
-            <button key={c.id} type="button" className={c.button === 'accent' ? 'btn-accent' : 'btn-quiet'} onClick={() => c.run(host)} disabled={!c.enabled(host)} aria-keyshortcuts={ariaKeys(c)}>
+            <button
+              key={c.id}
+              type="button"
+              className={c.button === 'accent' ? 'btn-accent' : 'btn-quiet'}
+              onClick={() => c.run(host)}
+              disabled={!c.enabled(host)}
+              aria-keyshortcuts={ariaKeys(c)}
+            >
               {c.label(host)}
             </button>
           ))}
@@ -169,12 +193,32 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
         </p>
       )}
 
-      {worker.running && <NestProgressBar progress={worker.progress} budgetMs={request.settings.timeBudgetMs} label="Re-nesting the unlocked parts" onCancel={worker.cancel} />}
-      {notice && <p className="text-sm text-sage" role="status">{notice}</p>}
+      {worker.running && (
+        <NestProgressBar
+          progress={worker.progress}
+          budgetMs={request.settings.timeBudgetMs}
+          label="Re-nesting the unlocked parts"
+          onCancel={worker.cancel}
+        />
+      )}
+      {notice && (
+        <p className="text-sm text-sage" role="status">
+          {notice}
+        </p>
+      )}
       {save.error && (
         <div className="field-error" role="alert">
           {save.error.message}
-          {save.error instanceof ApiError && <ul className="ml-5 list-disc">{Object.values(save.error.fields).flat().slice(0, 8).map((m) => <li key={m}>{m}</li>)}</ul>}
+          {save.error instanceof ApiError && (
+            <ul className="ml-5 list-disc">
+              {Object.values(save.error.fields)
+                .flat()
+                .slice(0, 8)
+                .map((m) => (
+                  <li key={m}>{m}</li>
+                ))}
+            </ul>
+          )}
         </div>
       )}
 
@@ -188,7 +232,18 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
           data-testid="bench-canvas"
           role="application"
         >
-          <BenchCanvas gesture={gesture} store={store} frames={frames} parts={parts} check={check} editable={editable} width={size.width} height={size.height} fmt={fmt} pieceCaption={pieceCaption} />
+          <BenchCanvas
+            gesture={gesture}
+            store={store}
+            frames={frames}
+            parts={parts}
+            check={check}
+            editable={editable}
+            width={size.width}
+            height={size.height}
+            fmt={fmt}
+            pieceCaption={pieceCaption}
+          />
         </div>
         <aside className="space-y-3 text-sm">
           <div className="card p-3" data-testid="bench-status" data-pending={pending} aria-busy={pending}>
@@ -198,14 +253,21 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
               </p>
             )}
             {pending && problems === 0 ? (
-              <p className="font-medium text-graphite-mute" role="status">Checking the layout…</p>
+              <p className="font-medium text-graphite-mute" role="status">
+                Checking the layout…
+              </p>
             ) : problems === 0 ? (
               <p className="font-medium text-sage">Every part can be cut free with straight through-cuts.</p>
             ) : (
               <>
-                <p className="font-medium text-brick">{problems} problem{problems === 1 ? '' : 's'}: saving is refused until they are fixed.{pending && <span className="font-normal text-graphite-mute"> Checking the change…</span>}</p>
+                <p className="font-medium text-brick">
+                  {problems} problem{problems === 1 ? '' : 's'}: saving is refused until they are fixed.
+                  {pending && <span className="font-normal text-graphite-mute"> Checking the change…</span>}
+                </p>
                 <ul className="mt-2 max-h-48 list-disc space-y-1 overflow-y-auto pl-5 text-brick" aria-label="Problems">
-                  {check.violations.slice(0, 30).map((v, i) => <li key={i}>{v.message}</li>)}
+                  {check.violations.slice(0, 30).map((v, i) => (
+                    <li key={i}>{v.message}</li>
+                  ))}
                 </ul>
               </>
             )}
@@ -213,18 +275,38 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
           <div className="card p-3">
             {one ? (
               <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1" aria-label="Selected part">
-                <dt className="text-graphite-mute">Part</dt><dd className="font-medium">{one.label || one.partId} #{one.instance}</dd>
-                <dt className="text-graphite-mute">Size</dt><dd className="num text-left">{fmt(parts.get(one.partId)?.length ?? one.w)} × {fmt(parts.get(one.partId)?.width ?? one.h)}</dd>
-                <dt className="text-graphite-mute">From corner</dt><dd className="num whitespace-normal text-left"><span className="whitespace-nowrap">{fmt(one.x)} along,</span> <span className="whitespace-nowrap">{fmt(one.y)} across</span></dd>
-                <dt className="text-graphite-mute">Grain</dt><dd>{parts.get(one.partId)?.grain === 'any' ? 'Either way' : 'Along its length'}{one.rotated ? ' · turned' : ''}</dd>
-                <dt className="text-graphite-mute">Locked</dt><dd>{one.locked ? 'Yes' : 'No'}</dd>
+                <dt className="text-graphite-mute">Part</dt>
+                <dd className="font-medium">
+                  {one.label || one.partId} #{one.instance}
+                </dd>
+                <dt className="text-graphite-mute">Size</dt>
+                <dd className="num text-left">
+                  {fmt(parts.get(one.partId)?.length ?? one.w)} × {fmt(parts.get(one.partId)?.width ?? one.h)}
+                </dd>
+                <dt className="text-graphite-mute">From corner</dt>
+                <dd className="num whitespace-normal text-left">
+                  <span className="whitespace-nowrap">{fmt(one.x)} along,</span> <span className="whitespace-nowrap">{fmt(one.y)} across</span>
+                </dd>
+                <dt className="text-graphite-mute">Grain</dt>
+                <dd>
+                  {parts.get(one.partId)?.grain === 'any' ? 'Either way' : 'Along its length'}
+                  {one.rotated ? ' · turned' : ''}
+                </dd>
+                <dt className="text-graphite-mute">Locked</dt>
+                <dd>{one.locked ? 'Yes' : 'No'}</dd>
               </dl>
             ) : (
-              <p className="text-graphite-mute">{selection.length ? `${selection.length} parts selected.` : 'Click a part to select it; shift-click adds. Drag empty space to pan, scroll to zoom.'}</p>
+              <p className="text-graphite-mute">
+                {selection.length
+                  ? `${selection.length} parts selected.`
+                  : 'Click a part to select it; shift-click adds. Drag empty space to pan, scroll to zoom.'}
+              </p>
             )}
           </div>
           <p className="text-xs text-graphite-mute">
-            {editable ? `${lockedCount} locked. ` : 'Read only: only a draft plan can be changed. '}{editable && `Parts snap to the trimmed edges and to neighbours one kerf (${fmt(request.settings.kerf)}) apart. `}Shaded: waste (trim, kerf, scraps); green dashes: offcuts to keep.
+            {editable ? `${lockedCount} locked. ` : 'Read only: only a draft plan can be changed. '}
+            {editable && `Parts snap to the trimmed edges and to neighbours one kerf (${fmt(request.settings.kerf)}) apart. `}Shaded: waste (trim,
+            kerf, scraps); green dashes: offcuts to keep.
           </p>
         </aside>
       </div>

@@ -25,10 +25,7 @@ export async function findActiveUserByEmail(db: Db, email: string) {
  * The user a session claims to be, as the database has them now. A session minted before a change of role,
  * password or status (older token version) or for another shop no longer counts.
  */
-export async function loadSessionUser(
-  db: Db,
-  claims: { userId: string; shopId: string; tokenVersion: number },
-): Promise<SessionUser | null> {
+export async function loadSessionUser(db: Db, claims: { userId: string; shopId: string; tokenVersion: number }): Promise<SessionUser | null> {
   const [row] = await db
     .select({
       id: users.id,
@@ -60,7 +57,15 @@ export async function revokeSessions(db: Db, claims: { userId: string; shopId: s
 
 export async function listTeam(db: Db, shopId: string) {
   return db
-    .select({ id: users.id, name: users.name, email: users.email, role: users.role, active: users.active, passwordHash: users.passwordHash, createdAt: users.createdAt })
+    .select({
+      id: users.id,
+      name: users.name,
+      email: users.email,
+      role: users.role,
+      active: users.active,
+      passwordHash: users.passwordHash,
+      createdAt: users.createdAt,
+    })
     .from(users)
     .where(eq(users.shopId, shopId))
     .orderBy(asc(users.name));

@@ -31,7 +31,10 @@ export function startBenchCheckWorker(): BenchCheckWorker {
       if (broken) return Promise.reject(broken);
       return new Promise((resolve, reject) => {
         waiting.add(reject);
-        remote.check(revision, request, doc).then(resolve, reject).finally(() => waiting.delete(reject));
+        remote
+          .check(revision, request, doc)
+          .then(resolve, reject)
+          .finally(() => waiting.delete(reject));
       });
     },
     terminate() {

@@ -67,7 +67,11 @@ describe('live-check answers follow the edits, by revision', () => {
     const { run, calls } = handCheck();
     const errors: unknown[] = [];
     const states: ChannelState<string, string>[] = [];
-    const channel = createCheckChannel(run, (s) => states.push(s), (e) => errors.push(e));
+    const channel = createCheckChannel(
+      run,
+      (s) => states.push(s),
+      (e) => errors.push(e),
+    );
     channel.submit('a');
     channel.submit('b');
     calls[0].fail();

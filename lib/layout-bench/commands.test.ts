@@ -1,10 +1,37 @@
 import { describe, expect, test } from 'vitest';
-import { BENCH_COMMANDS, ariaKeys, commandForKey, commandsFor, formatChord, keyHints, pressKey, type CommandHost, type KeyPress } from '@/lib/layout-bench/commands';
+import {
+  BENCH_COMMANDS,
+  ariaKeys,
+  commandForKey,
+  commandsFor,
+  formatChord,
+  keyHints,
+  pressKey,
+  type CommandHost,
+  type KeyPress,
+} from '@/lib/layout-bench/commands';
 import type { BenchDoc, PartInfo } from '@/lib/layout-bench/document';
 import { createBenchStore } from '@/lib/layout-bench/store';
 
-const piece = { stockId: 's', kind: 'sheet' as const, length: 2440, width: 1220, thickness: 18, material: 'ply', trim: 0, grain: 'along-length' as const };
-const info = (id: string, grain: 'along-length' | 'any'): PartInfo => ({ id, label: id, length: 600, width: 300, grain, material: 'ply', thickness: 18 });
+const piece = {
+  stockId: 's',
+  kind: 'sheet' as const,
+  length: 2440,
+  width: 1220,
+  thickness: 18,
+  material: 'ply',
+  trim: 0,
+  grain: 'along-length' as const,
+};
+const info = (id: string, grain: 'along-length' | 'any'): PartInfo => ({
+  id,
+  label: id,
+  length: 600,
+  width: 300,
+  grain,
+  material: 'ply',
+  thickness: 18,
+});
 const doc = (): BenchDoc => ({
   pieces: [piece],
   placements: {
@@ -15,7 +42,13 @@ const doc = (): BenchDoc => ({
 });
 
 function bench(more: Partial<CommandHost> = {}) {
-  const store = createBenchStore(doc(), { kerf: 3.2, parts: new Map([['side', info('side', 'along-length')], ['shelf', info('shelf', 'any')]]) });
+  const store = createBenchStore(doc(), {
+    kerf: 3.2,
+    parts: new Map([
+      ['side', info('side', 'along-length')],
+      ['shelf', info('shelf', 'any')],
+    ]),
+  });
   const calls: string[] = [];
   const host: CommandHost = {
     store,
@@ -33,13 +66,22 @@ function bench(more: Partial<CommandHost> = {}) {
   };
   return { store, host, calls };
 }
-const key = (k: string, mods: Partial<KeyPress> = {}): KeyPress => ({ key: k, ctrlKey: false, metaKey: false, shiftKey: false, altKey: false, ...mods });
+const key = (k: string, mods: Partial<KeyPress> = {}): KeyPress => ({
+  key: k,
+  ctrlKey: false,
+  metaKey: false,
+  shiftKey: false,
+  altKey: false,
+  ...mods,
+});
 const byId = (id: string) => BENCH_COMMANDS.find((c) => c.id === id)!;
 
 describe('the bench commands table', () => {
   test('every command has its own id, and no key is claimed by two commands', () => {
     expect(new Set(BENCH_COMMANDS.map((c) => c.id)).size).toBe(BENCH_COMMANDS.length);
-    const chords = BENCH_COMMANDS.flatMap((c) => c.keys.map((k) => `${k.mod ? 'mod+' : ''}${k.shift === undefined ? '*' : k.shift ? 'shift+' : ''}${k.key.toLowerCase()}`));
+    const chords = BENCH_COMMANDS.flatMap((c) =>
+      c.keys.map((k) => `${k.mod ? 'mod+' : ''}${k.shift === undefined ? '*' : k.shift ? 'shift+' : ''}${k.key.toLowerCase()}`),
+    );
     expect(new Set(chords).size).toBe(chords.length);
   });
 
@@ -132,7 +174,11 @@ describe('the bench commands table', () => {
     const readOnly = commandsFor(false);
     expect(readOnly.filter((c) => c.button).map((c) => c.id)).toEqual(['fit']);
     expect(commandForKey(readOnly, key('z', { ctrlKey: true }))).toBeUndefined();
-    expect(commandsFor(true).filter((c) => c.button).map((c) => byId(c.id).label(bench().host))).toEqual(['Undo', 'Redo', 'Turn', 'Lock', 'Re-nest unlocked', 'Fit all', 'Save layout']);
+    expect(
+      commandsFor(true)
+        .filter((c) => c.button)
+        .map((c) => byId(c.id).label(bench().host)),
+    ).toEqual(['Undo', 'Redo', 'Turn', 'Lock', 'Re-nest unlocked', 'Fit all', 'Save layout']);
   });
 
   test('the key line and the buttons’ shortcuts are written from the same keys', () => {

@@ -60,7 +60,11 @@ export interface BenchCommand {
 
 const selection = (h: CommandHost) => h.store.getState().view.selection;
 const allLocked = (h: CommandHost) => selection(h).length > 0 && selection(h).every((k) => h.store.getState().doc.placements[k]?.locked);
-const movable = (h: CommandHost) => selection(h).some((k) => { const p = h.store.getState().doc.placements[k]; return !!p && !p.locked; });
+const movable = (h: CommandHost) =>
+  selection(h).some((k) => {
+    const p = h.store.getState().doc.placements[k];
+    return !!p && !p.locked;
+  });
 
 const NUDGES = [
   ['left', 'ArrowLeft', -1, 0],
@@ -71,15 +75,30 @@ const NUDGES = [
 
 function turn(h: CommandHost) {
   const refused = h.store.getState().rotate(selection(h));
-  if (refused.length) h.notify(`${refused.length} part${refused.length === 1 ? '' : 's'} not turned: locked, or the grain must run along the part's length on this stock.`);
+  if (refused.length)
+    h.notify(
+      `${refused.length} part${refused.length === 1 ? '' : 's'} not turned: locked, or the grain must run along the part's length on this stock.`,
+    );
 }
 
 export const BENCH_COMMANDS: readonly BenchCommand[] = [
-  { id: 'undo', label: () => 'Undo', keys: [{ key: 'z', mod: true, shift: false }], hint: 'undoes', button: 'quiet', edits: true, enabled: (h) => h.store.getState().past.length > 0, run: (h) => h.store.getState().undo() },
+  {
+    id: 'undo',
+    label: () => 'Undo',
+    keys: [{ key: 'z', mod: true, shift: false }],
+    hint: 'undoes',
+    button: 'quiet',
+    edits: true,
+    enabled: (h) => h.store.getState().past.length > 0,
+    run: (h) => h.store.getState().undo(),
+  },
   {
     id: 'redo',
     label: () => 'Redo',
-    keys: [{ key: 'z', mod: true, shift: true }, { key: 'y', mod: true }],
+    keys: [
+      { key: 'z', mod: true, shift: true },
+      { key: 'y', mod: true },
+    ],
     hint: 'redoes',
     button: 'quiet',
     edits: true,
@@ -93,7 +112,10 @@ export const BENCH_COMMANDS: readonly BenchCommand[] = [
     hint: 'turns it',
     button: 'quiet',
     edits: true,
-    enabled: (h) => { const s = h.store.getState(); return s.view.selection.some((k) => mayRotate(s.doc, s.context, k)); },
+    enabled: (h) => {
+      const s = h.store.getState();
+      return s.view.selection.some((k) => mayRotate(s.doc, s.context, k));
+    },
     run: turn,
   },
   {
@@ -107,7 +129,16 @@ export const BENCH_COMMANDS: readonly BenchCommand[] = [
     run: (h) => h.store.getState().setLocked(selection(h), !allLocked(h)),
   },
   { id: 'renest', label: () => 'Re-nest unlocked', keys: [], button: 'quiet', edits: true, enabled: (h) => !h.renesting, run: (h) => h.renest() },
-  { id: 'fit', label: () => 'Fit all', keys: [{ key: 'f' }], hint: 'fits every piece in view', button: 'quiet', edits: false, enabled: () => true, run: (h) => h.fit() },
+  {
+    id: 'fit',
+    label: () => 'Fit all',
+    keys: [{ key: 'f' }],
+    hint: 'fits every piece in view',
+    button: 'quiet',
+    edits: false,
+    enabled: () => true,
+    run: (h) => h.fit(),
+  },
   {
     id: 'save',
     label: (h) => (h.saving ? 'Saving…' : 'Save layout'),
@@ -124,7 +155,9 @@ export const BENCH_COMMANDS: readonly BenchCommand[] = [
     keys: [{ key: 'Escape' }],
     edits: false,
     enabled: () => true,
-    run: (h) => { if (!h.cancelGesture()) h.store.getState().select([]); },
+    run: (h) => {
+      if (!h.cancelGesture()) h.store.getState().select([]);
+    },
   },
   ...NUDGES.flatMap(([dir, key, dx, dy]) =>
     ([false, true] as const).map((far): BenchCommand => {
@@ -155,7 +188,9 @@ export interface KeyPress {
 const sameKey = (a: string, b: string) => (a.length === 1 ? a.toLowerCase() === b.toLowerCase() : a === b);
 
 export function matches(chord: KeyChord, e: KeyPress): boolean {
-  return !e.altKey && sameKey(chord.key, e.key) && !!chord.mod === (e.ctrlKey || e.metaKey) && (chord.shift === undefined || chord.shift === e.shiftKey);
+  return (
+    !e.altKey && sameKey(chord.key, e.key) && !!chord.mod === (e.ctrlKey || e.metaKey) && (chord.shift === undefined || chord.shift === e.shiftKey)
+  );
 }
 
 /** The command a key press asks for, or undefined. */

@@ -4,7 +4,10 @@ import { DRAG_SLOP_PX, IDLE, step, type Gesture, type GestureEvent, type PressTa
 
 const camera = { x: 24, y: 24, scale: 0.5 };
 // World = (screen − camera offset) / scale, as on the canvas.
-const at = (sx: number, sy: number) => ({ screen: { x: sx, y: sy }, world: { x: (sx - camera.x) / camera.scale, y: (sy - camera.y) / camera.scale } });
+const at = (sx: number, sy: number) => ({
+  screen: { x: sx, y: sy },
+  world: { x: (sx - camera.x) / camera.scale, y: (sy - camera.y) / camera.scale },
+});
 const part = (draggable = true): PressTarget => ({ key: 'side#1', draggable, corner: { x: 100, y: 50 } });
 const down = (sx: number, sy: number, target: PressTarget | null, more: Partial<Extract<GestureEvent, { type: 'down' }>> = {}): GestureEvent => ({
   type: 'down',
@@ -86,7 +89,13 @@ describe('the bench pointer gesture', () => {
 
   test('any sequence of events: a drag begins only past the slop, every drag that begins ends exactly once, and release always returns to idle', () => {
     const event = fc.oneof(
-      fc.record({ kind: fc.constant('down' as const), x: fc.integer({ min: 0, max: 800 }), y: fc.integer({ min: 0, max: 600 }), hit: fc.constantFrom('part', 'locked', 'none'), additive: fc.boolean() }),
+      fc.record({
+        kind: fc.constant('down' as const),
+        x: fc.integer({ min: 0, max: 800 }),
+        y: fc.integer({ min: 0, max: 600 }),
+        hit: fc.constantFrom('part', 'locked', 'none'),
+        additive: fc.boolean(),
+      }),
       fc.record({ kind: fc.constant('move' as const), x: fc.integer({ min: 0, max: 800 }), y: fc.integer({ min: 0, max: 600 }) }),
       fc.constantFrom({ kind: 'up' as const }, { kind: 'cancel' as const }),
     );
@@ -96,13 +105,18 @@ describe('the bench pointer gesture', () => {
         let open = 0;
         for (const e of events) {
           const ev: GestureEvent =
-            e.kind === 'down' ? down(e.x, e.y, e.hit === 'none' ? null : part(e.hit === 'part'), { additive: e.additive }) : e.kind === 'move' ? move(e.x, e.y) : { type: e.kind };
+            e.kind === 'down'
+              ? down(e.x, e.y, e.hit === 'none' ? null : part(e.hit === 'part'), { additive: e.additive })
+              : e.kind === 'move'
+                ? move(e.x, e.y)
+                : { type: e.kind };
           const before: Gesture = state;
           const out = step(state, ev);
           for (const fx of out.effects) {
             if (fx.type === 'begin-drag') {
               expect(before.kind).toBe('pointing');
-              if (before.kind === 'pointing' && ev.type === 'move') expect(Math.hypot(ev.screen.x - before.screen.x, ev.screen.y - before.screen.y)).toBeGreaterThanOrEqual(DRAG_SLOP_PX);
+              if (before.kind === 'pointing' && ev.type === 'move')
+                expect(Math.hypot(ev.screen.x - before.screen.x, ev.screen.y - before.screen.y)).toBeGreaterThanOrEqual(DRAG_SLOP_PX);
               open++;
             }
             if (fx.type === 'end-drag' || fx.type === 'cancel-drag') open--;

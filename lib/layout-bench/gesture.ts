@@ -77,13 +77,20 @@ export function step(state: Gesture, event: GestureEvent): { state: Gesture; eff
           const grab = { x: state.world.x - state.target.corner.x, y: state.world.y - state.target.corner.y };
           return {
             state: { kind: 'dragging', key: state.target.key, grab },
-            effects: [{ type: 'begin-drag', key: state.target.key }, { type: 'drag-to', corner: { x: event.world.x - grab.x, y: event.world.y - grab.y }, pointer: event.world }],
+            effects: [
+              { type: 'begin-drag', key: state.target.key },
+              { type: 'drag-to', corner: { x: event.world.x - grab.x, y: event.world.y - grab.y }, pointer: event.world },
+            ],
           };
         }
         const panning: Gesture = { kind: 'panning', screen: state.screen, camera: state.camera };
         return { state: panning, effects: [panTo(panning, event.screen)] };
       }
-      if (state.kind === 'dragging') return { state, effects: [{ type: 'drag-to', corner: { x: event.world.x - state.grab.x, y: event.world.y - state.grab.y }, pointer: event.world }] };
+      if (state.kind === 'dragging')
+        return {
+          state,
+          effects: [{ type: 'drag-to', corner: { x: event.world.x - state.grab.x, y: event.world.y - state.grab.y }, pointer: event.world }],
+        };
       if (state.kind === 'panning') return { state, effects: [panTo(state, event.screen)] };
       return { state, effects: [] };
     }
@@ -95,7 +102,10 @@ export function step(state: Gesture, event: GestureEvent): { state: Gesture; eff
 }
 
 function panTo(state: { screen: Point; camera: Camera }, screen: Point): GestureEffect {
-  return { type: 'camera', camera: { ...state.camera, x: state.camera.x + screen.x - state.screen.x, y: state.camera.y + screen.y - state.screen.y } };
+  return {
+    type: 'camera',
+    camera: { ...state.camera, x: state.camera.x + screen.x - state.screen.x, y: state.camera.y + screen.y - state.screen.y },
+  };
 }
 
 /**

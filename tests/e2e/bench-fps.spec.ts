@@ -21,7 +21,9 @@ test('a part dragged among 340 parts is checked in the worker when dropped, and 
   await signIn(page, 'estimator');
   const job = await (await page.request.post('/api/jobs', { data: { name: `Frame-rate drawer run ${Date.now()}` } })).json();
   for (const row of ROWS) {
-    const res = await page.request.post(`/api/jobs/${job.id}/parts`, { data: { ...row, thicknessMm: MAPLE_23_32, material: 'Maple ply', grain: 'any' } });
+    const res = await page.request.post(`/api/jobs/${job.id}/parts`, {
+      data: { ...row, thicknessMm: MAPLE_23_32, material: 'Maple ply', grain: 'any' },
+    });
     expect(res.status(), await res.text()).toBe(201);
   }
 
