@@ -1,15 +1,16 @@
 'use client';
 
 import type Konva from 'konva';
-import { memo, useMemo, useRef } from 'react';
+import { memo, useMemo, type MutableRefObject } from 'react';
 import { Arrow, Group, Layer, Line, Rect, Stage, Text } from 'react-konva';
 import { useStore } from 'zustand';
 import { BENCH_COLORS as C, partTone } from '@/lib/layout-bench/colors';
 import type { BenchDoc, PartInfo } from '@/lib/layout-bench/document';
 import { fitLabel } from '@/lib/layout-bench/labels';
 import type { LiveCheck } from '@/lib/layout-bench/live-check';
-import type { BenchStore, Camera } from '@/components/layout-bench/store';
-import { pieceAt, placementAt, type PieceFrame } from '@/lib/layout-bench/world';
+import { applyGestureEffects, step, type Gesture, type GestureEvent } from '@/components/layout-bench/gesture';
+import type { BenchStore } from '@/components/layout-bench/store';
+import { placementAt, type PieceFrame } from '@/lib/layout-bench/world';
 
 /** Snap reach on screen: a part within this many pixels of an edge or a neighbour's kerf line lands on it. */
 const SNAP_PX = 10;
@@ -26,6 +27,8 @@ export interface BenchCanvasProps {
   height: number;
   fmt: (mm: number) => string;
   pieceCaption: (piece: number) => string;
+  /** The pointer gesture's state, kept by the bench editor so Escape can cancel a drag. */
+  gesture: MutableRefObject<Gesture>;
 }
 
 /**
@@ -34,12 +37,11 @@ export interface BenchCanvasProps {
  * selection, zoom or live check change; during a drag only the small drag layer does.
  */
 export default function BenchCanvas(props: BenchCanvasProps) {
-  const { store, frames, editable, width, height } = props;
+  const { store, frames, editable, width, height, gesture } = props;
   const camera = useStore(store, (s) => s.view.camera);
   const doc = useStore(store, (s) => s.doc);
   const selection = useStore(store, (s) => s.view.selection);
   const dragKey = useStore(store, (s) => s.view.drag?.key ?? null);
-  const gesture = useRef<{ kind: 'drag'; dx: number; dy: number } | { kind: 'pan'; sx: number; sy: number; camera: Camera } | null>(null);
   // Labels are laid out for the zoom in steps, so a smooth zoom does not re-lay every label each frame.
   const labelScale = Math.pow(2, Math.round(Math.log2(camera.scale) * 4) / 4);
 
@@ -49,45 +51,42 @@ export default function BenchCanvas(props: BenchCanvasProps) {
     return { sx: p.x, sy: p.y, wx: (p.x - cam.x) / cam.scale, wy: (p.y - cam.y) / cam.scale };
   };
 
+  // Pointer input goes through the gesture machine (components/layout-bench/gesture.ts); its effects go to the store.
+  const feed = (event: GestureEvent) => {
+    const out = step(gesture.current, event);
+    // The gesture is a box the bench shares with the canvas, written in pointer handlers only (never in render).
+    // eslint-disable-next-line react-hooks/immutability
+    gesture.current = out.state;
+    applyGestureEffects(store, frames, out.effects, SNAP_PX);
+  };
+
   const onDown = (e: Konva.KonvaEventObject<MouseEvent | TouchEvent>) => {
     const stage = e.target.getStage();
     if (!stage) return;
     const { sx, sy, wx, wy } = toWorld(stage);
     const s = store.getState();
     const key = placementAt(s.doc, frames, wx, wy);
-    const additive = 'shiftKey' in e.evt && e.evt.shiftKey;
-    if (key) {
-      s.select(additive ? (s.view.selection.includes(key) ? s.view.selection.filter((k) => k !== key) : [...s.view.selection, key]) : [key]);
-      const p = s.doc.placements[key];
-      if (editable && !additive && s.beginDrag(key)) {
-        const f = frames[p.piece];
-        gesture.current = { kind: 'drag', dx: wx - (f.x + p.x), dy: wy - (f.y + p.y) };
-        return;
-      }
-    } else if (!additive) s.select([]);
-    gesture.current = { kind: 'pan', sx, sy, camera: s.view.camera };
+    const p = key ? s.doc.placements[key] : undefined;
+    const target = key && p ? { key, draggable: editable && !p.locked, corner: { x: frames[p.piece].x + p.x, y: frames[p.piece].y + p.y } } : null;
+    feed({
+      type: 'down',
+      screen: { x: sx, y: sy },
+      world: { x: wx, y: wy },
+      camera: s.view.camera,
+      target,
+      additive: 'shiftKey' in e.evt && e.evt.shiftKey,
+      selection: s.view.selection,
+    });
   };
 
   const onMove = (e: Konva.KonvaEventObject<MouseEvent | TouchEvent>) => {
-    const g = gesture.current;
     const stage = e.target.getStage();
-    if (!g || !stage) return;
+    if (gesture.current.kind === 'idle' || !stage) return;
     const { sx, sy, wx, wy } = toWorld(stage);
-    const s = store.getState();
-    if (g.kind === 'pan') {
-      s.setCamera({ ...g.camera, x: g.camera.x + sx - g.sx, y: g.camera.y + sy - g.sy });
-      return;
-    }
-    const drag = s.view.drag;
-    if (!drag) return;
-    const frame = pieceAt(frames, wx, wy) ?? frames[drag.piece];
-    s.dragTo(frame.piece, wx - g.dx - frame.x, wy - g.dy - frame.y, SNAP_PX / s.view.camera.scale);
+    feed({ type: 'move', screen: { x: sx, y: sy }, world: { x: wx, y: wy } });
   };
 
-  const onUp = () => {
-    if (gesture.current?.kind === 'drag') store.getState().endDrag();
-    gesture.current = null;
-  };
+  const onUp = () => feed({ type: 'up' });
 
   const onWheel = (e: Konva.KonvaEventObject<WheelEvent>) => {
     e.evt.preventDefault();
@@ -191,50 +190,72 @@ const PiecesLayer = memo(function PiecesLayer({ doc, frames, parts, check, selec
                 perfectDrawEnabled={false}
               />
             )}
-            {byPiece[f.piece].map(([key, p]) => {
-              const info = parts.get(p.partId);
-              const problem = check.byPlacement.has(key);
-              const isSelected = selected.has(key);
-              const label = fitLabel(
-                p.label || info?.label || p.partId,
-                info ? `${fmt(info.length)} × ${fmt(info.width)}` : '',
-                p.w * scale,
-                p.h * scale,
-              );
-              const grainArrow = info?.grain === 'along-length' && piece.grain !== 'none' && Math.min(p.w, p.h) * scale > 14;
-              return (
-                <Group key={key} x={p.x} y={p.y} opacity={key === dragKey ? 0.35 : 1}>
-                  <Rect
-                    width={p.w}
-                    height={p.h}
-                    fill={info ? partTone(info.group, info.material, info.thickness) : C.stock}
-                    stroke={problem ? C.problem : isSelected ? C.selected : p.locked ? C.locked : C.partEdge}
-                    strokeWidth={(problem || isSelected ? 3 : p.locked ? 2 : 0.75) * px}
-                    dash={p.locked ? [6 * px, 3 * px] : undefined}
-                    perfectDrawEnabled={false}
-                  />
-                  {grainArrow && <GrainArrow w={p.w} h={p.h} alongX={!p.rotated} px={px} />}
-                  {label && (
-                    <Text
-                      x={4 * px}
-                      y={3 * px}
-                      width={Math.max(0, p.w - 8 * px)}
-                      text={(p.locked ? '▪ ' : '') + label.lines.join('\n')}
-                      fontSize={label.fontPx * px}
-                      lineHeight={1.2}
-                      fill={problem ? C.problem : C.text}
-                      wrap="none"
-                      ellipsis
-                      perfectDrawEnabled={false}
-                    />
-                  )}
-                </Group>
-              );
-            })}
+            {byPiece[f.piece].map(([key, p]) => (
+              <PartNode
+                key={key}
+                p={p}
+                info={parts.get(p.partId)}
+                pieceGrain={piece.grain}
+                problem={check.byPlacement.has(key)}
+                selected={selected.has(key)}
+                dragged={key === dragKey}
+                scale={scale}
+                fmt={fmt}
+              />
+            ))}
           </Group>
         );
       })}
     </Layer>
+  );
+});
+
+interface PartNodeProps {
+  p: BenchDoc['placements'][string];
+  info: PartInfo | undefined;
+  pieceGrain: BenchDoc['pieces'][number]['grain'];
+  problem: boolean;
+  selected: boolean;
+  dragged: boolean;
+  scale: number;
+  fmt: (mm: number) => string;
+}
+
+/**
+ * One part on its piece. Memoised on its own placement and marks, so a drop or a check's answer re-renders only the
+ * parts it changed, not all of them (a drop among hundreds stays within a frame).
+ */
+const PartNode = memo(function PartNode({ p, info, pieceGrain, problem, selected, dragged, scale, fmt }: PartNodeProps) {
+  const px = 1 / scale;
+  const label = fitLabel(p.label || info?.label || p.partId, info ? `${fmt(info.length)} × ${fmt(info.width)}` : '', p.w * scale, p.h * scale);
+  const grainArrow = info?.grain === 'along-length' && pieceGrain !== 'none' && Math.min(p.w, p.h) * scale > 14;
+  return (
+    <Group x={p.x} y={p.y} opacity={dragged ? 0.35 : 1}>
+      <Rect
+        width={p.w}
+        height={p.h}
+        fill={info ? partTone(info.group, info.material, info.thickness) : C.stock}
+        stroke={problem ? C.problem : selected ? C.selected : p.locked ? C.locked : C.partEdge}
+        strokeWidth={(problem || selected ? 3 : p.locked ? 2 : 0.75) * px}
+        dash={p.locked ? [6 * px, 3 * px] : undefined}
+        perfectDrawEnabled={false}
+      />
+      {grainArrow && <GrainArrow w={p.w} h={p.h} alongX={!p.rotated} px={px} />}
+      {label && (
+        <Text
+          x={4 * px}
+          y={3 * px}
+          width={Math.max(0, p.w - 8 * px)}
+          text={(p.locked ? '▪ ' : '') + label.lines.join('\n')}
+          fontSize={label.fontPx * px}
+          lineHeight={1.2}
+          fill={problem ? C.problem : C.text}
+          wrap="none"
+          ellipsis
+          perfectDrawEnabled={false}
+        />
+      )}
+    </Group>
   );
 });
 

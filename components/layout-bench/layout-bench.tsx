@@ -10,7 +10,9 @@ import { useNestingWorker } from '@/components/nesting/use-nesting-worker';
 import { api, ApiError } from '@/client/api';
 import { docToPlan, planToDoc, type PartInfo } from '@/lib/layout-bench/document';
 import { prepareRenest } from '@/lib/layout-bench/renest';
-import { createBenchStore, hasUnsavedChanges, mayRotate, type BenchStore } from '@/components/layout-bench/store';
+import { ariaKeys, commandsFor, keyHints, pressKey, type CommandHost } from '@/components/layout-bench/commands';
+import { IDLE, applyGestureEffects, step, type Gesture } from '@/components/layout-bench/gesture';
+import { createBenchStore, hasUnsavedChanges, type BenchStore } from '@/components/layout-bench/store';
 import { fitView, layoutPieces } from '@/lib/layout-bench/world';
 import { rebuildCuts } from '@/lib/nesting';
 import { readBenchPlan } from '@/lib/layout-bench/read-bench-plan';
@@ -32,9 +34,6 @@ interface PlanResponse {
   request: unknown;
   document: unknown;
 }
-
-const NUDGE_MM = 1;
-const BIG_NUDGE_MM = 10;
 
 /** The Layout bench for a saved plan: every Sheet map and Board map at once, editable while the plan is a draft. */
 export function LayoutBench({ planId, editable, units }: { planId: string; editable: boolean; units: ShopUnits }) {
@@ -59,8 +58,9 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   );
   const doc = useStore(store, (s) => s.doc);
   const selection = useStore(store, (s) => s.view.selection);
-  const canUndo = useStore(store, (s) => s.past.length > 0);
-  const canRedo = useStore(store, (s) => s.future.length > 0);
+  // The commands read the store when drawn: subscribe to what their labels and enabled states follow.
+  useStore(store, (s) => s.past.length);
+  useStore(store, (s) => s.future.length);
   const dirty = useStore(store, hasUnsavedChanges);
   const { check, pending } = useLiveCheck(request, doc);
   const frames = useMemo(() => layoutPieces(doc.pieces), [doc.pieces]);
@@ -122,49 +122,35 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
     setNotice('Re-nested the unlocked parts around the locked ones. Undo puts the old layout back.');
   };
 
-  const rotate = () => {
-    const refused = store.getState().rotate(store.getState().view.selection);
-    if (refused.length)
-      setNotice(
-        `${refused.length} part${refused.length === 1 ? '' : 's'} not turned: locked, or the grain must run along the part's length on this stock.`,
-      );
-  };
-  const toggleLock = () => {
-    const s = store.getState();
-    const keys = s.view.selection;
-    s.setLocked(keys, !keys.every((k) => s.doc.placements[k]?.locked));
-  };
-
-  const onKeyDown = (e: KeyboardEvent<HTMLDivElement>) => {
-    const s = store.getState();
-    const mod = e.ctrlKey || e.metaKey;
-    if (mod && e.key.toLowerCase() === 'z') {
-      e.preventDefault();
-      if (e.shiftKey) s.redo();
-      else s.undo();
-      return;
-    }
-    if (mod && e.key.toLowerCase() === 'y') {
-      e.preventDefault();
-      s.redo();
-      return;
-    }
-    if (e.key === 'Escape') {
-      if (s.view.drag) s.cancelDrag();
-      else s.select([]);
-      return;
-    }
-    if (!editable) return;
-    const step = e.shiftKey ? BIG_NUDGE_MM : NUDGE_MM;
-    const arrows: Record<string, [number, number]> = { ArrowLeft: [-step, 0], ArrowRight: [step, 0], ArrowUp: [0, -step], ArrowDown: [0, step] };
-    if (arrows[e.key] && s.view.selection.length) {
-      e.preventDefault();
-      s.nudge(s.view.selection, ...arrows[e.key]);
-    } else if (e.key.toLowerCase() === 'r' && !mod) rotate();
-    else if (e.key.toLowerCase() === 'l' && !mod) toggleLock();
-  };
-
   const problems = check.violations.length;
+  // The commands (components/layout-bench/commands.ts): the toolbar and the keyboard both run them from this one table.
+  const gesture = useRef<Gesture>(IDLE);
+  const commands = useMemo(() => commandsFor(editable), [editable]);
+  const host: CommandHost = {
+    store,
+    editable,
+    renesting: worker.running,
+    saving: save.isPending,
+    checkPending: pending,
+    problems,
+    notify: setNotice,
+    save: () => save.mutate(),
+    renest: () => void renest(),
+    fit,
+    cancelGesture() {
+      const out = step(gesture.current, { type: 'cancel' });
+      gesture.current = out.state;
+      applyGestureEffects(store, frames, out.effects, 0);
+      return out.effects.length > 0;
+    },
+  };
+  const onKeyDown = (e: KeyboardEvent<HTMLDivElement>) => {
+    if (pressKey(commands, host, e)) e.preventDefault();
+  };
+  const hints = keyHints(commands);
+  // The host's cancelGesture touches the gesture ref on Escape only; labels and enabled states read the store.
+  // eslint-disable-next-line react-hooks/refs
+  const buttons = commands.filter((c) => c.button).map((command) => ({ command, enabled: command.enabled(host), label: command.label(host) }));
   const lockedCount = Object.values(doc.placements).filter((p) => p.locked).length;
   const pieceCaption = useCallback(
     (i: number) => {
@@ -181,44 +167,29 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
         <h2 id="bench" className="mr-auto">
           Layout bench
         </h2>
-        {editable && (
-          <>
-            <button type="button" className="btn-quiet" onClick={() => store.getState().undo()} disabled={!canUndo}>
-              Undo
-            </button>
-            <button type="button" className="btn-quiet" onClick={() => store.getState().redo()} disabled={!canRedo}>
-              Redo
-            </button>
-            <button
-              type="button"
-              className="btn-quiet"
-              onClick={rotate}
-              disabled={!selection.length || !selection.some((k) => mayRotate(doc, store.getState().context, k))}
-            >
-              Turn
-            </button>
-            <button type="button" className="btn-quiet" onClick={toggleLock} disabled={!selection.length}>
-              {selection.length && selection.every((k) => doc.placements[k]?.locked) ? 'Unlock' : 'Lock'}
-            </button>
-            <button type="button" className="btn-quiet" onClick={renest} disabled={worker.running}>
-              Re-nest unlocked
-            </button>
-          </>
-        )}
-        <button type="button" className="btn-quiet" onClick={fit}>
-          Fit all
-        </button>
-        {editable && (
-          <button type="button" className="btn-accent" disabled={save.isPending || !dirty || pending || problems > 0} onClick={() => save.mutate()}>
-            {save.isPending ? 'Saving…' : 'Save layout'}
+        {buttons.map(({ command: c, enabled, label }) => (
+          <button
+            key={c.id}
+            type="button"
+            className={c.button === 'accent' ? 'btn-accent' : 'btn-quiet'}
+            onClick={() => c.run(host)}
+            disabled={!enabled}
+            aria-keyshortcuts={ariaKeys(c)}
+          >
+            {label}
           </button>
-        )}
+        ))}
       </div>
       {editable && (
         <p className="text-xs text-graphite-mute" data-testid="bench-keys">
           {problems > 0 && <strong className="mr-2 font-medium text-brick">Fix the problems below to save.</strong>}
-          On the bench: drag a part; arrows nudge it, <kbd>R</kbd> turns it, <kbd>L</kbd> locks it, <kbd>Ctrl/Cmd+Z</kbd> undoes,{' '}
-          <kbd>Ctrl/Cmd+Shift+Z</kbd> redoes.
+          On the bench: drag a part;{' '}
+          {hints.map((h, i) => (
+            <span key={h.keys}>
+              <kbd>{h.keys}</kbd> {h.does}
+              {i < hints.length - 1 ? ', ' : '.'}
+            </span>
+          ))}
         </p>
       )}
 
@@ -257,11 +228,12 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
           tabIndex={0}
           onKeyDown={onKeyDown}
           className="card relative overflow-hidden bg-paper-deep/40 focus-visible:outline-2"
-          aria-label="Layout bench canvas: drag parts, arrows nudge, R turns, L locks, Ctrl+Z undoes"
+          aria-label={`Layout bench canvas: drag parts${hints.length ? '; ' : ''}${hints.map((h) => `${h.keys} ${h.does}`).join(', ')}`}
           data-testid="bench-canvas"
           role="application"
         >
           <BenchCanvas
+            gesture={gesture}
             store={store}
             frames={frames}
             parts={parts}

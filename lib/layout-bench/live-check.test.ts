@@ -30,6 +30,49 @@ describe('the live check on the bench', () => {
     expect(check.byPlacement.get(b)?.[0]).toMatch(/overlap/);
   });
 
+  test('an overlap marks both parts by their ids, even when two parts share a label', () => {
+    // Three cut-list rows all called "Side" (one per cabinet): the pair is told apart by id, never by the message
+    // text, so the third "Side" #1, clear of both, is not marked.
+    const side = (id: string) => part(id, 600, 300, { label: 'Side', grain: 'any' });
+    const twin = nestRequestSchema.parse(request([side('side-a'), side('side-b'), side('side-c')], [sheet('s', 2440, 1220)], { kerf: 3, trim: 0 }));
+    const place = (partId: string, x: number, y: number) => ({
+      partId,
+      instance: 1,
+      label: 'Side',
+      piece: 0,
+      x,
+      y,
+      w: 600,
+      h: 300,
+      rotated: false,
+      locked: false,
+    });
+    const doc = {
+      pieces: [
+        {
+          stockId: 's',
+          kind: 'sheet' as const,
+          length: 2440,
+          width: 1220,
+          thickness: 18,
+          material: 'birch ply',
+          trim: 0,
+          grain: 'along-length' as const,
+        },
+      ],
+      placements: { 'side-a#1': place('side-a', 0, 0), 'side-b#1': place('side-b', 300, 0), 'side-c#1': place('side-c', 0, 600) },
+      unplaced: [],
+    };
+    const check = checkDoc(twin, doc);
+    expect(check.violations.map((v) => v.code)).toEqual(['overlap']);
+    expect(check.byPlacement.get('side-a#1')).toEqual([check.violations[0].message]);
+    expect(check.byPlacement.get('side-b#1')).toEqual([check.violations[0].message]);
+    expect(check.byPlacement.has('side-c#1')).toBe(false);
+    // Moved apart by more than the kerf, neither is marked.
+    doc.placements['side-b#1'] = place('side-b', 700, 0);
+    expect(checkDoc(twin, doc).byPlacement.size).toBe(0);
+  });
+
   test('a part pushed past the trimmed edge is marked outside the stock', async () => {
     const doc = planToDoc(await optimize(req), req);
     const [a] = Object.keys(doc.placements);

@@ -37,16 +37,10 @@ export function checkDoc(request: NestRequest, doc: BenchDoc): LiveCheck {
     } else if (v.piece !== undefined && pieceOf[v.piece] !== undefined) push(byPiece, pieceOf[v.piece], v.message);
     else general.push(v.message);
   }
-  // Overlaps name the second part only; mark the first one as well, so both show where they are.
+  // A pair (an overlap) is marked on both of its parts: the violation carries the other one's id.
   for (const v of violations) {
-    if (v.code !== 'overlap') continue;
-    const m = /^"(.*)" #(\d+) and /.exec(v.message);
-    const piece = v.piece !== undefined ? pieceOf[v.piece] : undefined;
-    if (!m || piece === undefined) continue;
-    for (const [key, p] of Object.entries(doc.placements)) {
-      if (p.piece === piece && p.instance === Number(m[2]) && (p.label || p.partId) === m[1] && !byPlacement.get(key)?.includes(v.message))
-        push(byPlacement, key, v.message);
-    }
+    const key = v.other && placementKey(v.other);
+    if (key && doc.placements[key] && !byPlacement.get(key)?.includes(v.message)) push(byPlacement, key, v.message);
   }
   const leftovers = new Map<number, { offcuts: Rect[]; waste: Rect[] }>();
   let totals: Plan['totals'];
@@ -60,4 +54,9 @@ export function checkDoc(request: NestRequest, doc: BenchDoc): LiveCheck {
     // A plan that does not parse is already reported by validatePlan.
   }
   return { violations, byPlacement, byPiece, general, leftovers, totals };
+}
+
+/** One live check tagged with the revision of the edit it judges (see `check-channel.ts`): what the worker answers. */
+export function checkRevision(revision: number, request: NestRequest, doc: BenchDoc): { revision: number; check: LiveCheck } {
+  return { revision, check: checkDoc(request, doc) };
 }

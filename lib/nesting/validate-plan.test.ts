@@ -22,7 +22,8 @@ describe('validatePlan', () => {
     bad.pieces[0].placements[1].x = 500;
     const v = validatePlan(req, bad);
     expect(codes(v)).toContain('overlap');
-    expect(v.find((x) => x.code === 'overlap')).toMatchObject({ piece: 0, partId: 'b', instance: 1 });
+    // Both parts of the pair by id: "b" #1 now lies on "a" #1.
+    expect(v.find((x) => x.code === 'overlap')).toMatchObject({ piece: 0, partId: 'b', instance: 1, other: { partId: 'a', instance: 1 } });
   });
 
   test('catches parts touching with no room for the kerf', () => {

@@ -68,6 +68,8 @@ export interface Violation {
   instance?: number;
   /** Saw-order step number. */
   step?: number;
+  /** The other part of a pair (an overlap names both: `partId`/`instance` is the second, this the first). */
+  other?: { partId: string; instance: number };
 }
 
 const name = (part: NestPart | undefined, p: { partId: string; instance: number }) => `"${part?.label || p.partId}" #${p.instance}`;
@@ -152,6 +154,7 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
         ...at,
         partId: b.partId,
         instance: b.instance,
+        other: { partId: a.partId, instance: a.instance },
       });
       geometryOk = false;
     }

@@ -1,9 +1,9 @@
 /**
- * Frames per second on the Layout bench with 300+ parts on screen, during a scripted drag in Chromium. The figure
- * goes to test-results/bench-fps.json; the test asserts only that the drag worked (performance targets live in
- * benchmarks, never in timed tests).
+ * A drag among 340 parts on the Layout bench, as a person would make it: the drop is checked in the live-check
+ * worker (under the app's CSP) and the status comes back answered; undo puts the part back. What it does not do is
+ * time anything: the frame figures are measured by `npm run bench:layout` (bench/layout-fps.ts), since performance
+ * targets live in benchmarks, never in timed tests.
  */
-import fs from 'node:fs';
 import { expect, test } from './support/test';
 import { fitView, layoutPieces, toScreen } from '../../lib/layout-bench/world';
 import { shot, signIn } from './support/session';
@@ -16,7 +16,7 @@ const ROWS = [
 ];
 const MOVES = 120;
 
-test('the bench keeps drawing while a part is dragged among 340 parts', async ({ page }) => {
+test('a part dragged among 340 parts is checked in the worker when dropped, and undone', async ({ page }) => {
   test.setTimeout(180_000);
   await signIn(page, 'estimator');
   const job = await (await page.request.post('/api/jobs', { data: { name: `Frame-rate drawer run ${Date.now()}` } })).json();
@@ -47,63 +47,26 @@ test('the bench keeps drawing while a part is dragged among 340 parts', async ({
   const start = toScreen(view, frames[0], target.x + target.w / 2, target.y + target.h / 2);
   const piece = frames[0];
 
-  // Count animation frames while the pointer sweeps across the first sheet.
-  await page.evaluate(() => {
-    const w = window as unknown as { __frames: number[]; __stop: boolean };
-    w.__frames = [];
-    w.__stop = false;
-    const tick = (t: number) => {
-      w.__frames.push(t);
-      if (!w.__stop) requestAnimationFrame(tick);
-    };
-    requestAnimationFrame(tick);
-  });
   await page.mouse.move(box.x + start.x, box.y + start.y);
   await page.mouse.down();
-  const t0 = Date.now();
   for (let i = 1; i <= MOVES; i++) {
     const a = (i / MOVES) * Math.PI * 2;
     const to = toScreen(view, piece, piece.w / 2 + Math.cos(a) * piece.w * 0.35, piece.h / 2 + Math.sin(a) * piece.h * 0.35);
     await page.mouse.move(box.x + to.x, box.y + to.y);
     await page.waitForTimeout(16);
   }
-  const wallMs = Date.now() - t0;
-  // The drop: the live check of the moved layout runs in its worker, so frames keep coming while it answers.
-  const upAt: number = await page.evaluate(() => performance.now());
+  // The drop: the moved layout is checked in the bench's own worker (none other runs on this page now).
   await page.mouse.up();
   await expect(page.getByTestId('bench-status')).toHaveAttribute('data-pending', 'false');
-  await page.waitForTimeout(300);
-  const times: number[] = await page.evaluate(() => {
-    const w = window as unknown as { __frames: number[]; __stop: boolean };
-    w.__stop = true;
-    return w.__frames;
-  });
-  const afterDrop = times.filter((t) => t >= upAt);
-  const dropGaps = afterDrop.slice(1).map((t, i) => t - afterDrop[i]);
+  await expect(page.getByTestId('bench-status')).toContainText(/straight through-cuts|problem/);
+  const names = await Promise.all(page.workers().map((w) => w.evaluate(() => self.name)));
+  expect(names, 'the live check runs in its own worker').toContain('kerfwise-bench-check');
   await expect(page.getByRole('button', { name: 'Undo' })).toBeEnabled();
   await shot(page, 'bench-fps-after-drag');
-
-  const dragTimes = times.filter((t) => t < upAt);
-  const gaps = dragTimes
-    .slice(1)
-    .map((t, i) => t - dragTimes[i])
-    .sort((x, y) => x - y);
-  const spanMs = dragTimes.at(-1)! - dragTimes[0];
-  expect(afterDrop.length, 'frames kept coming after the drop').toBeGreaterThan(5);
-  const result = {
-    measuredAt: new Date().toISOString(),
-    browser: 'Chromium headless, --disable-gpu (software raster)',
-    partsOnScreen: parts,
-    stockPieces: document.pieces.length,
-    canvas: { width: Math.floor(box.width), height: Math.floor(box.height) },
-    pointerMoves: MOVES,
-    dragWallMs: wallMs,
-    frames: dragTimes.length,
-    fps: Math.round(((dragTimes.length - 1) / spanMs) * 1000 * 10) / 10,
-    frameMs: { median: gaps[Math.floor(gaps.length / 2)], p95: gaps[Math.floor(gaps.length * 0.95)], max: gaps.at(-1) },
-    afterDrop: { frames: afterDrop.length, longestFrameMs: Math.max(...dropGaps) },
-  };
-  fs.mkdirSync('test-results', { recursive: true });
-  fs.writeFileSync('test-results/bench-fps.json', JSON.stringify(result, null, 2));
-  console.log('bench fps', JSON.stringify(result));
+  await page.getByRole('button', { name: 'Undo' }).click();
+  await expect(page.getByTestId('bench-status')).toHaveAttribute('data-pending', 'false');
+  await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
+  // Back to the saved layout: nothing to save.
+  await expect(page.getByRole('button', { name: 'Save layout' })).toBeDisabled();
+  await expect(page.getByRole('button', { name: 'Undo' })).toBeDisabled();
 });
