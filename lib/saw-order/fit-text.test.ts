@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { beforeAll, describe, expect, test } from 'vitest';
 import { pdfFonts } from '@/lib/pdf/measure';
-import { fitLines, fitNameWithSuffix, shrinkToFit, wrapToFit, wrapWords, type Measure } from './fit-text';
+import { fitLines, shrinkToFit, wrapToFit, wrapWords, type Measure } from './fit-text';
 
 // Widths from the shipped PDF font's own metrics (IBM Plex Sans SemiBold, read by fontkit as the PDF renderer reads it).
 let measure: Measure;
@@ -46,28 +46,14 @@ describe('fitting text into a width', () => {
     for (const l of lines) expect(measure(l, size)).toBeLessThanOrEqual(138);
   });
 
-  test('a long name is abbreviated before its "#n", which always stays whole', () => {
-    fc.assert(
-      fc.property(printable, fc.integer({ min: 1, max: 99 }), fc.integer({ min: 40, max: 160 }), (name, n, width) => {
-        const suffix = ` #${n}`;
-        const fitted = fitNameWithSuffix(name, suffix, measure, 9, width, 7);
-        expect(fitted.text.endsWith(`#${n}`)).toBe(true);
-        expect(measure(fitted.text, fitted.size)).toBeLessThanOrEqual(width);
-        expect(fitted.size).toBeLessThanOrEqual(9);
-      }),
-      { seed },
-    );
-  });
-
-  test('four fronts keep their numbers: "Drawer front, upper left #1" … "#4" in 90 pt', () => {
-    const texts = [1, 2, 3, 4].map((n) => fitNameWithSuffix('Drawer front, upper left bank', ` #${n}`, measure, 9, 90, 7).text);
+  test('four fronts keep their numbers: "Drawer front, upper left…" "#1" … "#4" on one line of 90 pt', () => {
+    const texts = [1, 2, 3, 4].map((n) => fitLines('Drawer front, upper left bank', ` #${n}`, measure, 9, 90, 1, 7).lines.join(' '));
     expect(texts.map((t) => t.slice(-2))).toEqual(['#1', '#2', '#3', '#4']);
     expect(new Set(texts).size).toBe(4);
     expect(texts[0]).toMatch(/^Drawer front.*… #1$/);
   });
 
   test('a name that fits is left as it is', () => {
-    expect(fitNameWithSuffix('Side', ' #2', measure, 9, 200, 7)).toEqual({ text: 'Side #2', size: 9 });
     expect(fitLines('Side', ' #2', measure, 9, 200, 2, 6)).toEqual({ lines: ['Side #2'], size: 9, abbreviated: false });
   });
 });

@@ -51,27 +51,6 @@ export function wrapToFit(text: string, measure: Measure, size: number, width: n
 }
 
 /**
- * A name with a suffix that must stay whole (" #3", or a thickness): first the font shrinks, down to `min`; if the
- * whole still does not fit, the name is abbreviated with "…" before the suffix. The suffix is never touched.
- */
-export function fitNameWithSuffix(name: string, suffix: string, measure: Measure, size: number, width: number, min: number): { text: string; size: number } {
-  const whole = `${name}${suffix}`;
-  const s = shrinkToFit(whole, measure, size, width, min);
-  if (measure(whole, s) <= width) return { text: whole, size: s };
-  // Abbreviate the name: the longest start of it that fits with "…" and the suffix.
-  let lo = 0;
-  let hi = name.length;
-  while (lo < hi) {
-    const mid = Math.ceil((lo + hi) / 2);
-    if (measure(`${name.slice(0, mid).trimEnd()}${ELLIPSIS}${suffix}`, s) <= width) lo = mid;
-    else hi = mid - 1;
-  }
-  const text = `${name.slice(0, lo).trimEnd()}${ELLIPSIS}${suffix}`;
-  // Even "…#3" too wide: keep the suffix whole and let it shrink further.
-  return measure(text, s) <= width ? { text, size: s } : { text: suffix.trimStart(), size: shrinkToFit(suffix.trimStart(), measure, s, width, 1) };
-}
-
-/**
  * A name and the suffix that must stay whole (" #3"), on at most `maxLines` lines of `width`: the text wraps and
  * shrinks from `size` towards `min` until every line fits (the suffix stays on the last word's line). Only if even
  * that fails is the name abbreviated with "…" before the suffix, so the cut shows; the suffix is never touched.

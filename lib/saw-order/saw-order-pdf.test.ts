@@ -82,9 +82,11 @@ describe('the saw-order PDF’s text', () => {
     expect(drawn).not.toContain('…');
     // Lengths as the screen shows them (formatLength's default style): 34-1/2″, with × between the sides.
     expect(drawn).toContain('34-1/2″');
+    const lineTexts = lines.map((l) => plain(l.text));
     for (const piece of plan.pieces) {
       for (const step of describeSawOrder(piece, units)) {
-        expect(drawn).toContain(printed(`Fence ${step.fence}`));
+        // The fence setting on a line of its own, whole (it shrinks rather than wrap).
+        expect(lineTexts).toContain(printed(`Fence ${step.fence}`));
         for (const p of step.produced) {
           if (p.role === 'offcut') expect(drawn).toMatch(new RegExp(`[Kk]eep offcut ${escape(printed(p.size))}`));
           if (p.role === 'waste' && step.frees.length === 0) expect(drawn).toContain('waste falls off');

@@ -117,8 +117,12 @@ export function sawOrderView(input: SawOrderPdfInput, fonts: PdfFonts): SawOrder
           return {
             n: String(text.n),
             nSize: shrinkToFit(String(text.n), fonts.measure[600], 16, NUMBER_W - 2, 8),
+            // Each mark held together on its line when the heading wraps ("ON CABINET SAW", never "ON CABINET" / "SAW").
             heading: t(
-              `${text.kindLabel.toUpperCase()} ${text.piece}${text.trim ? ' · TRIM' : ''}${text.narrow ? ' · SLED / TRACK / BAND SAW' : ''}${text.saw ? ` · ON ${text.saw.toUpperCase()}` : ''}`,
+              [`${text.kindLabel.toUpperCase()} ${text.piece}`, text.trim && 'TRIM', text.narrow && 'SLED / TRACK / BAND SAW', text.saw && `ON ${text.saw.toUpperCase()}`]
+                .filter(Boolean)
+                .map((mark) => whole(mark as string))
+                .join(' · '),
             ),
             rip: text.kind === 'rip',
             fence,
