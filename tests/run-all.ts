@@ -115,7 +115,7 @@ async function withPostgres(body: (url: string) => void) {
 fs.mkdirSync(OUT, { recursive: true });
 ensureDebianPackage('chromium', () => fs.existsSync(process.env.CHROMIUM_PATH ?? '/usr/bin/chromium'));
 ensureDebianPackage('postgresql', () => postgresBin() !== null);
-// The quote PDF's test reads the PDF back with poppler's pdftotext.
+// The PDF tests (quotes, purchase orders, saw orders, part tags) read PDFs back with poppler (pdfinfo, pdftotext, pdftoppm).
 ensureDebianPackage('poppler-utils', () => fs.existsSync('/usr/bin/pdftotext'));
 
 if (run('type check', 'npx', ['tsc', '--noEmit', '-p', '.']) !== 0) fail('Type check failed.');

@@ -1,5 +1,5 @@
 /**
- * The one font of every PDF the app makes with @react-pdf/renderer (quotes, purchase orders): IBM Plex Sans, the
+ * The one font of every PDF the app makes with @react-pdf/renderer (quotes, purchase orders, saw orders, part tags): IBM Plex Sans, the
  * face the app ships for the browser (app/fonts holds its WOFF2). The PDFs embed its WOFF files (fontkit reads WOFF
  * reliably; the WOFF2 subset fails to parse), copied from @fontsource/ibm-plex-sans into lib/quotes/fonts, so
  * fractions print as on screen (19¾″).

@@ -1,4 +1,4 @@
-/** The house style every react-pdf document shares (quotes, purchase orders): ink, rules, the page and its table. */
+/** The house style every react-pdf document shares (quotes, purchase orders, saw orders, part tags): ink, rules, the page and its table. */
 import { PDF_FONT_FAMILY } from './fonts';
 
 export const PDF_INK = '#2b2a27';

@@ -1,13 +1,13 @@
 /**
  * Fitting text into a fixed width (PDF cells, part tags) without losing what matters: lengths are never cut short
  * (they shrink or wrap whole), a name may be abbreviated but keeps the "#n" that tells its copies apart. Pure: the
- * caller passes how wide a text is at a size (pdf-lib's `font.widthOfTextAtSize`, or an estimate for the screen).
+ * caller passes how wide a text is at a size (the shipped PDF font's widths, lib/pdf/measure.ts).
  */
 
 /** Width of `text` at font `size`, in the same unit as the widths it is fitted to. */
 export type Measure = (text: string, size: number) => number;
 
-const ELLIPSIS = '...';
+export const ELLIPSIS = '…';
 
 /** The largest size from `size` down (in steps of 0.25) at which `text` fits `width`; never below `min`, never shorter text. */
 export function shrinkToFit(text: string, measure: Measure, size: number, width: number, min = 4): number {
@@ -51,29 +51,37 @@ export function wrapToFit(text: string, measure: Measure, size: number, width: n
 }
 
 /**
- * A name with a suffix that must stay whole (" #3", or a thickness): first the font shrinks, down to `min`; if the
- * whole still does not fit, the name is abbreviated with "..." before the suffix. The suffix is never touched.
+ * A name and the suffix that must stay whole (" #3"), on at most `maxLines` lines of `width`: the text wraps and
+ * shrinks from `size` towards `min` until every line fits (the suffix stays on the last word's line). Only if even
+ * that fails is the name abbreviated with "…" before the suffix, so the cut shows; the suffix is never touched.
+ * Every line returned fits `width` at the size returned.
  */
-export function fitNameWithSuffix(
+export function fitLines(
   name: string,
   suffix: string,
   measure: Measure,
   size: number,
   width: number,
+  maxLines: number,
   min: number,
-): { text: string; size: number } {
-  const whole = `${name}${suffix}`;
-  const s = shrinkToFit(whole, measure, size, width, min);
-  if (measure(whole, s) <= width) return { text: whole, size: s };
-  // Abbreviate the name: the longest start of it that fits with "..." and the suffix.
+): { lines: string[]; size: number; abbreviated: boolean } {
+  const glue = (n: string) => (suffix ? `${n.trimEnd()}${suffix.replace(/^ /, '\u00a0')}` : n);
+  const fits = (r: { lines: string[]; size: number }) => r.lines.length <= maxLines && r.lines.every((l) => measure(l, r.size) <= width);
+  const nbsp = (r: { lines: string[]; size: number }) => ({ lines: r.lines.map((l) => l.replace(/\u00a0/g, ' ')), size: r.size });
+  const whole = wrapToFit(glue(name), measure, size, width, maxLines, min);
+  if (fits(whole)) return { ...nbsp(whole), abbreviated: false };
+  // The longest start of the name that, with "…" and the suffix, fits the lines at `min`.
+  const at = (n: number) => wrapToFit(glue(`${name.slice(0, n).trimEnd()}${ELLIPSIS}`), measure, min, width, maxLines, min);
   let lo = 0;
   let hi = name.length;
   while (lo < hi) {
     const mid = Math.ceil((lo + hi) / 2);
-    if (measure(`${name.slice(0, mid).trimEnd()}${ELLIPSIS}${suffix}`, s) <= width) lo = mid;
+    if (fits(at(mid))) lo = mid;
     else hi = mid - 1;
   }
-  const text = `${name.slice(0, lo).trimEnd()}${ELLIPSIS}${suffix}`;
-  // Even "...#3" too wide: keep the suffix whole and let it shrink further.
-  return measure(text, s) <= width ? { text, size: s } : { text: suffix.trimStart(), size: shrinkToFit(suffix.trimStart(), measure, s, width, 1) };
+  const short = at(lo);
+  if (fits(short)) return { ...nbsp(short), abbreviated: true };
+  // Even "…#3" too wide: the suffix alone, shrunk as far as it must.
+  const alone = suffix.trimStart();
+  return { lines: [alone], size: shrinkToFit(alone, measure, min, width, 1), abbreviated: true };
 }

@@ -1,20 +1,30 @@
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
+import { beforeAll } from 'vitest';
+import { pdfFonts } from '@/lib/pdf/measure';
 import { pdfText } from './pdf-text';
 
-describe('text for the standard PDF fonts', () => {
-  test.each([
-    ['inch and foot marks become straight quotes (common practice, no source)', '1′ 7-3/4″', `1' 7-3/4"`],
-    ['the rounding mark becomes a tilde, as formatLength’s ascii style writes it', '≈302 mm', '~302 mm'],
-    ['Latin-1 letters stay', 'Tür × 2', 'Tür × 2'],
-    ['anything else becomes a question mark', '抽屉', '??'],
-  ])('%s', (_label, input, output) => expect(pdfText(input)).toBe(output));
+let has: (ch: string) => boolean;
+beforeAll(async () => {
+  has = (await pdfFonts()).has;
+});
 
-  test('never leaves a character outside Latin-1', () => {
+describe('text for the shipped PDF font', () => {
+  test.each([
+    ['inch and foot marks print as on screen', '1′ 7-3/4″', '1′ 7-3/4″'],
+    ['the times sign, ¾ and dashes print as typed', 'Tür × 2 — ¾', 'Tür × 2 — ¾'],
+    ['the rounding mark, which the font lacks, becomes a tilde, as formatLength’s ascii style writes it', '≈302 mm', '~302 mm'],
+    ['eighths the font lacks are written out, as the screen writes them', '5⅞″ and ⅜″', '5-7/8″ and 3/8″'],
+    ['anything else it cannot draw becomes a question mark', '抽屉 ☃', '?? ?'],
+    ['line breaks typed into a label become spaces', 'Side\npanel', 'Side panel'],
+  ])('%s', (_label, input, output) => expect(pdfText(input, has)).toBe(output));
+
+  test('leaves only characters the font draws (or spaces)', () => {
     fc.assert(
       fc.property(fc.string({ unit: 'grapheme' }), (s) => {
-        expect(pdfText(s)).toMatch(/^[\x20-\x7E\xA0-\xFF]*$/);
+        for (const ch of pdfText(s, has)) expect(ch === ' ' || ch === '\u00a0' || has(ch), JSON.stringify(ch)).toBe(true);
       }),
+      { seed: 20261203 },
     );
   });
 });

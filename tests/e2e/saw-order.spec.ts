@@ -1,8 +1,11 @@
 import fs from 'node:fs';
 import { expect, test, type Page } from './support/test';
-import { PDFDocument } from 'pdf-lib';
 import { shot, signIn } from './support/session';
 import { jobId } from './support/plans';
+import { pdfInfo, pdfLayoutText } from '../support/pdf-read';
+
+/** Where the screenshots go; the downloaded PDFs are kept beside them to look at. */
+const SCREENS = `test-results/screens${process.env.E2E_PORT ? '-' + process.env.E2E_PORT : ''}`;
 
 /** The demo shop's released kitchen plan, found the way any client would: through the API. */
 async function kitchenPlan(page: Page) {
@@ -68,8 +71,8 @@ test('the estimator opens the saw order, prints it a piece per page, and downloa
   expect(breaks.slice(1).every((b) => b === 'page')).toBe(true);
   await shot(page, 'saw-order-print');
   // Printed by Chromium itself on Letter paper: each stock piece fills exactly one page.
-  const printed = await PDFDocument.load(await page.pdf({ format: 'Letter', preferCSSPageSize: true }));
-  expect(printed.getPageCount()).toBe(pieces.length);
+  const printed = pdfInfo(await page.pdf({ format: 'Letter', preferCSSPageSize: true }));
+  expect(printed.pages).toHaveLength(pieces.length);
   // The cautions are on every printed piece.
   await expect(page.getByTestId('saw-order-piece').filter({ hasText: 'licensed practice' })).toHaveCount(pieces.length);
   await page.emulateMedia({ media: 'screen' });
@@ -78,8 +81,14 @@ test('the estimator opens the saw order, prints it a piece per page, and downloa
   expect(download.suggestedFilename()).toBe('saw-order-Hollis-kitchen.pdf');
   const bytes = fs.readFileSync(await download.path());
   expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
-  const pdf = await PDFDocument.load(bytes);
-  expect(pdf.getPageCount()).toBe(pieces.length);
+  const pdf = pdfInfo(bytes);
+  expect(pdf.pages).toHaveLength(pieces.length);
+  // The job, the first cut's fence as the page shows it (the shipped font prints ″), and the cautions.
+  const text = pdfLayoutText(bytes);
+  expect(text).toContain('Hollis kitchen');
+  expect(text).toMatch(/Fence [~\d][\d\-/]*″/);
+  expect(text).toContain('licensed practice');
+  fs.copyFileSync(await download.path(), `${SCREENS}/saw-order.pdf`);
 });
 
 test('part tags print one per part on a chosen label sheet, and a tag leads to its part', async ({ page }) => {
@@ -100,14 +109,18 @@ test('part tags print one per part on a chosen label sheet, and a tag leads to i
   await expect(page.getByRole('button', { name: 'Print tags' })).toBeHidden();
   await shot(page, 'part-tags-a4-print');
   // Printed by Chromium on the sheet's own page size (A4, 595.28 × 841.89 pt, ISO 216), a label sheet a page.
-  const printed = await PDFDocument.load(await page.pdf({ preferCSSPageSize: true }));
-  expect(printed.getPageCount()).toBe(Math.ceil(placed / 24));
-  expect(printed.getPage(0).getWidth()).toBeCloseTo(595.28, 0);
-  expect(printed.getPage(0).getHeight()).toBeCloseTo(841.89, 0);
+  const printed = pdfInfo(await page.pdf({ preferCSSPageSize: true }));
+  expect(printed.pages).toHaveLength(Math.ceil(placed / 24));
+  expect(printed.pages[0].width).toBeCloseTo(595.28, 0);
+  expect(printed.pages[0].height).toBeCloseTo(841.89, 0);
   await page.emulateMedia({ media: 'screen' });
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download PDF' }).click()]);
-  const tagsPdf = await PDFDocument.load(fs.readFileSync(await download.path()));
-  expect(tagsPdf.getPageCount()).toBe(Math.ceil(placed / 24));
+  const tagsBytes = fs.readFileSync(await download.path());
+  const tagsPdf = pdfInfo(tagsBytes);
+  expect(tagsPdf.pages).toHaveLength(Math.ceil(placed / 24));
+  // Each placed part's tag, with its number, as the tags page shows it.
+  expect(pdfLayoutText(tagsBytes).match(/#\d+/g)).toHaveLength(placed);
+  fs.copyFileSync(await download.path(), `${SCREENS}/part-tags-a4-24.pdf`);
 
   const qr = await page
     .getByRole('img', { name: /^QR code: / })
