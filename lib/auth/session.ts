@@ -4,9 +4,10 @@ import { getToken } from 'next-auth/jwt';
 import type { NextRequest } from 'next/server';
 import { redirect } from 'next/navigation';
 import { cache } from 'react';
-import { getDb } from '@/db/client';
+import { getDbHandle } from '@/db/client';
 import { loadSessionUser, type SessionUser } from '@/db/queries/users';
-import type { Db } from '@/db/open';
+import { readShopSettings } from '@/db/queries/shops';
+import type { DbHandle } from '@/db/open';
 import { serverEnv } from '@/lib/env';
 import { claimsFromToken } from './claims';
 import { authOptions } from './options';
@@ -15,10 +16,10 @@ import { can, type Permission } from './permissions';
 export type { SessionUser };
 
 /** The signed-in user of an API request, checked against the database, or null. */
-export async function userFromRequest(req: NextRequest, db: Db): Promise<SessionUser | null> {
+export async function userFromRequest(req: NextRequest, handle: Pick<DbHandle, 'db' | 'changes'>): Promise<SessionUser | null> {
   const token = await getToken({ req, secret: serverEnv().NEXTAUTH_SECRET });
   const claims = claimsFromToken(token);
-  return claims ? loadSessionUser(db, claims) : null;
+  return claims ? loadSessionUser(handle, claims) : null;
 }
 
 /**
@@ -28,7 +29,7 @@ export async function userFromRequest(req: NextRequest, db: Db): Promise<Session
 export const currentUser = cache(async (): Promise<SessionUser | null> => {
   const session = await getServerSession(authOptions());
   const claims = claimsFromToken(session?.user);
-  return claims ? loadSessionUser(await getDb(), claims) : null;
+  return claims ? loadSessionUser(await getDbHandle(), claims) : null;
 });
 
 /** For server components: signed in (else to sign-in) and allowed (else to the no-access page). */
@@ -38,3 +39,9 @@ export async function requirePageUser(permission?: Permission): Promise<SessionU
   if (permission && !can(user.role, permission)) redirect(`/no-access?need=${encodeURIComponent(permission)}`);
   return user;
 }
+
+/**
+ * The signed-in shop's settings for a page render, once per render (React's cache): the shell shows the shop's name,
+ * pages its clock and units.
+ */
+export const currentShopSettings = cache(async (shopId: string) => readShopSettings(await getDbHandle(), shopId));
