@@ -7,22 +7,20 @@ export const CLASS_NAMES = ['I', 'II', 'III', 'IV', 'V', 'VI', 'VII', 'VIII', 'I
 export const DEFAULT_BUDGET_MS = 2000;
 
 /** "I,III,10" or "1-4" → class numbers 1–10. */
-const classList = z
-  .string()
-  .transform((text, ctx) => {
-    const out = new Set<number>();
-    for (const raw of text.split(',').map((s) => s.trim().toUpperCase())) {
-      const range = /^(\d+)-(\d+)$/.exec(raw);
-      const one = (s: string) => {
-        const n = /^\d+$/.test(s) ? Number(s) : CLASS_NAMES.indexOf(s as (typeof CLASS_NAMES)[number]) + 1;
-        if (!(n >= 1 && n <= 10)) ctx.addIssue({ code: 'custom', message: `unknown class "${s}" (use I–X or 1–10)` });
-        return n;
-      };
-      if (range) for (let n = one(range[1]); n <= one(range[2]); n++) out.add(n);
-      else out.add(one(raw));
-    }
-    return [...out].sort((a, b) => a - b);
-  });
+const classList = z.string().transform((text, ctx) => {
+  const out = new Set<number>();
+  for (const raw of text.split(',').map((s) => s.trim().toUpperCase())) {
+    const range = /^(\d+)-(\d+)$/.exec(raw);
+    const one = (s: string) => {
+      const n = /^\d+$/.test(s) ? Number(s) : CLASS_NAMES.indexOf(s as (typeof CLASS_NAMES)[number]) + 1;
+      if (!(n >= 1 && n <= 10)) ctx.addIssue({ code: 'custom', message: `unknown class "${s}" (use I–X or 1–10)` });
+      return n;
+    };
+    if (range) for (let n = one(range[1]); n <= one(range[2]); n++) out.add(n);
+    else out.add(one(raw));
+  }
+  return [...out].sort((a, b) => a - b);
+});
 
 export const benchArgsSchema = z.object({
   budgetMs: z.coerce.number().int('--budget-ms must be a whole number').min(0).max(120_000).default(DEFAULT_BUDGET_MS),

@@ -19,7 +19,9 @@ const TARGET_MS = 300;
 const log = (s = '') => process.stdout.write(`${s}\n`);
 
 async function main() {
-  const handle = await openDatabase(process.env.BENCH_DATABASE_URL ? { url: process.env.BENCH_DATABASE_URL, migrate: true } : { dataDir: 'memory://', migrate: true });
+  const handle = await openDatabase(
+    process.env.BENCH_DATABASE_URL ? { url: process.env.BENCH_DATABASE_URL, migrate: true } : { dataDir: 'memory://', migrate: true },
+  );
   const { db } = handle;
   const [shop] = await db.insert(shops).values({ name: 'Bench shop', timeZone: 'America/Chicago' }).returning();
   const [customer] = await db.insert(customers).values({ shopId: shop.id, name: 'Bench customer' }).returning();
@@ -61,8 +63,26 @@ async function main() {
       join lateral (select id from stock_items where shop_id = ${shop.id} order by id offset (j % 40) limit 1) s on true`);
   // Quote i sent i × 12,614 s after 2025-01-01 (two years), answered three days later, the deposit paid the day after.
   const lines = JSON.stringify([
-    { id: 'm-1', kind: 'material', description: 'Maple ply ¾″, 96″ × 48″ (from stock)', quantity: 3, unit: 'sheet', unitCostMinor: 9400, taxable: true, note: '' },
-    { id: 'm-2', kind: 'material', description: 'Spoilage allowance (15 % of material, once)', quantity: 1, unit: 'lot', unitCostMinor: 4230, taxable: true, note: '' },
+    {
+      id: 'm-1',
+      kind: 'material',
+      description: 'Maple ply ¾″, 96″ × 48″ (from stock)',
+      quantity: 3,
+      unit: 'sheet',
+      unitCostMinor: 9400,
+      taxable: true,
+      note: '',
+    },
+    {
+      id: 'm-2',
+      kind: 'material',
+      description: 'Spoilage allowance (15 % of material, once)',
+      quantity: 1,
+      unit: 'lot',
+      unitCostMinor: 4230,
+      taxable: true,
+      note: '',
+    },
     { id: 'l-1', kind: 'labour', description: 'Saw time', quantity: 0.96, unit: 'h', unitCostMinor: 6500, taxable: false, note: '' },
   ]);
   await db.execute(sql`
@@ -78,7 +98,9 @@ async function main() {
     select r.shop_id, r.id, r.job_id, 'cs_bench_' || r.id, 25000, 'USD', 'paid', r.answered_at + interval '1 day'
       from quote_revisions r where r.shop_id = ${shop.id} and r.status = 'accepted'`);
   await db.execute(sql`analyze`);
-  log(`Seeded ${PLANS.toLocaleString('en-US')} finished plans, ${(PLANS * 3).toLocaleString('en-US')} pieces, ${(PLANS * 24).toLocaleString('en-US')} placements, ${PLANS.toLocaleString('en-US')} offcuts and ${MOVEMENTS.toLocaleString('en-US')} movements and ${QUOTES.toLocaleString('en-US')} quotes in ${((performance.now() - started) / 1000).toFixed(1)} s (${process.env.BENCH_DATABASE_URL ? 'PostgreSQL' : 'embedded PGlite'}).`);
+  log(
+    `Seeded ${PLANS.toLocaleString('en-US')} finished plans, ${(PLANS * 3).toLocaleString('en-US')} pieces, ${(PLANS * 24).toLocaleString('en-US')} placements, ${PLANS.toLocaleString('en-US')} offcuts and ${MOVEMENTS.toLocaleString('en-US')} movements and ${QUOTES.toLocaleString('en-US')} quotes in ${((performance.now() - started) / 1000).toFixed(1)} s (${process.env.BENCH_DATABASE_URL ? 'PostgreSQL' : 'embedded PGlite'}).`,
+  );
 
   const year: ReportFilter = { shopId: shop.id, timeZone: 'America/Chicago', by: 'month', from: '2026-01-01', to: '2026-12-31' };
   const quarter: ReportFilter = { ...year, by: 'week', from: '2026-07-01', to: '2026-09-30', material: 'Maple ply' };
@@ -90,7 +112,10 @@ async function main() {
     ['Stock value, a quarter by week, one material', () => stockValueReport(db, quarter)],
     ['Quoting, a year by month', () => quotingReport(db, year)],
     ['Yield over time, a year by month, one customer', () => yieldOverTime(db, { ...year, customerId: customer.id })],
-    ['Old offcuts (6 months)', () => oldOffcuts(db, { shopId: shop.id, timeZone: 'America/Chicago', months: 6, now: new Date('2026-12-03T12:00:00Z') })],
+    [
+      'Old offcuts (6 months)',
+      () => oldOffcuts(db, { shopId: shop.id, timeZone: 'America/Chicago', months: 6, now: new Date('2026-12-03T12:00:00Z') }),
+    ],
   ];
   log('');
   log('| report | median of 5 | slowest | target |');
@@ -109,7 +134,11 @@ async function main() {
     log(`| ${name} | ${times[2].toFixed(0)} ms | ${times[4].toFixed(0)} ms | < ${TARGET_MS} ms ${times[2] < TARGET_MS ? '✓' : '✗'} |`);
   }
   log('');
-  log(`Load average ${loadavg().map((l) => l.toFixed(2)).join(' / ')}.`);
+  log(
+    `Load average ${loadavg()
+      .map((l) => l.toFixed(2))
+      .join(' / ')}.`,
+  );
   await handle.close();
   if (missed) process.exitCode = 1;
 }

@@ -37,7 +37,8 @@ async function standardSection(args: BenchArgs) {
     const t0 = performance.now();
     for (const [k, inst] of selected.entries()) {
       runs.push(await runInstance(inst, mode, args.budgetMs, args.maxrects));
-      if (process.stderr.isTTY && ((k + 1) % 10 === 0 || k + 1 === selected.length)) process.stderr.write(`\r${mode}: ${k + 1}/${selected.length} instances`);
+      if (process.stderr.isTTY && ((k + 1) % 10 === 0 || k + 1 === selected.length))
+        process.stderr.write(`\r${mode}: ${k + 1}/${selected.length} instances`);
     }
     if (process.stderr.isTTY) process.stderr.write('\n');
     const summaries = summarise(runs.filter((r) => r.mode === mode));
@@ -57,7 +58,9 @@ async function standardSection(args: BenchArgs) {
       wallSeconds: (performance.now() - t0) / 1000,
     };
 
-    log(`\nStandard instances, ${mode === 'rotation' ? 'rotation allowed' : 'fixed orientation'} — guillotine, kerf 0, budget ${args.budgetMs} ms each`);
+    log(
+      `\nStandard instances, ${mode === 'rotation' ? 'rotation allowed' : 'fixed orientation'} — guillotine, kerf 0, budget ${args.budgetMs} ms each`,
+    );
     type Row = Omit<typeof totals, 'wallSeconds'>;
     const row = (name: string, s: Row) => [
       name,
@@ -95,13 +98,22 @@ async function standardSection(args: BenchArgs) {
 
 function printShop(r: ShopResult) {
   log(`\nShop workload — invented kitchen, ${r.parts} parts, 2440 × 1220 sheets, kerf 3.2, trim 10, via optimize`);
-  log(table(['thickness', 'parts', 'sheets', 'lower bound'], r.byThickness.map((t) => [`${t.thickness} mm`, t.parts, t.sheets, t.lowerBound])));
-  log(`sheets ${r.sheets}, yield ${fixed(100 * r.yield, 1)}%, material cost ${fixed(r.cost, 2)}, time ${fixed(r.ms, 0)} ms, unplaced ${r.unplaced}, plan violations ${r.violations.length}`);
+  log(
+    table(
+      ['thickness', 'parts', 'sheets', 'lower bound'],
+      r.byThickness.map((t) => [`${t.thickness} mm`, t.parts, t.sheets, t.lowerBound]),
+    ),
+  );
+  log(
+    `sheets ${r.sheets}, yield ${fixed(100 * r.yield, 1)}%, material cost ${fixed(r.cost, 2)}, time ${fixed(r.ms, 0)} ms, unplaced ${r.unplaced}, plan violations ${r.violations.length}`,
+  );
   for (const v of r.violations.slice(0, 5)) log(`  ${v}`);
 }
 
 function printScaling(rs: ScalingResult[]) {
-  log('\nScaling — first plan (budget 0) of the packing core after a warm-up, median of 3 runs (1 at 10,000), random cabinet-sized parts, half grain-locked');
+  log(
+    '\nScaling — first plan (budget 0) of the packing core after a warm-up, median of 3 runs (1 at 10,000), random cabinet-sized parts, half grain-locked',
+  );
   log(
     table(
       ['parts', 'ms', 'first progress ms', 'sheets', 'unplaced', 'heap rise MB', 'rss rise MB', 'peak rss rise MB', 'target'],
@@ -109,7 +121,17 @@ function printScaling(rs: ScalingResult[]) {
         const t = SCALING_TARGETS[r.parts];
         const ok = t && r.ms < t.ms && (t.mb === undefined || Math.max(r.rssMb, r.heapMb) < t.mb);
         const target = t ? `< ${t.ms} ms${t.mb ? `, < ${t.mb} MB` : ''}: ${ok ? 'met' : 'MISSED'}` : '–';
-        return [thousands(r.parts), fixed(r.ms, 1), r.firstProgressMs === null ? '–' : fixed(r.firstProgressMs, 1), r.sheets, r.unplaced, fixed(r.heapMb, 1), fixed(r.rssMb, 1), fixed(r.maxRssRiseMb, 1), target];
+        return [
+          thousands(r.parts),
+          fixed(r.ms, 1),
+          r.firstProgressMs === null ? '–' : fixed(r.firstProgressMs, 1),
+          r.sheets,
+          r.unplaced,
+          fixed(r.heapMb, 1),
+          fixed(r.rssMb, 1),
+          fixed(r.maxRssRiseMb, 1),
+          target,
+        ];
       }),
     ),
   );
@@ -118,8 +140,18 @@ function printScaling(rs: ScalingResult[]) {
 async function main() {
   const args = parseBenchArgs(process.argv.slice(2));
   const startedAt = new Date();
-  log(`Kerfwise bench — ${startedAt.toISOString()}, node ${process.version}, ${cpus().length} cores, load ${loadavg().map((l) => l.toFixed(2)).join(' ')}`);
-  const results: Record<string, unknown> = { startedAt: startedAt.toISOString(), args, node: process.version, cores: cpus().length, loadAtStart: loadavg() };
+  log(
+    `Kerfwise bench — ${startedAt.toISOString()}, node ${process.version}, ${cpus().length} cores, load ${loadavg()
+      .map((l) => l.toFixed(2))
+      .join(' ')}`,
+  );
+  const results: Record<string, unknown> = {
+    startedAt: startedAt.toISOString(),
+    args,
+    node: process.version,
+    cores: cpus().length,
+    loadAtStart: loadavg(),
+  };
 
   // Scaling first: its memory figures are cleanest in a fresh process.
   if (args.sections.includes('scaling')) {
@@ -147,7 +179,8 @@ async function main() {
 
 main().catch((err: unknown) => {
   const flag = (key: PropertyKey | undefined) => (key === undefined ? 'flags' : `--${String(key).replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}`);
-  const message = err instanceof ZodError ? err.issues.map((i) => `${flag(i.path[0])}: ${i.message}`).join('\n') : String(err instanceof Error ? err.message : err);
+  const message =
+    err instanceof ZodError ? err.issues.map((i) => `${flag(i.path[0])}: ${i.message}`).join('\n') : String(err instanceof Error ? err.message : err);
   process.stderr.write(`bench: ${message}\n`);
   process.exit(1);
 });

@@ -14,7 +14,15 @@ const DRAWER_SIDE = 12;
 
 type PartIn = Pick<NestPart, 'id' | 'label' | 'quantity' | 'length' | 'width' | 'thickness' | 'material' | 'grain'> & { group?: string };
 
-const part = (group: string, name: string, quantity: number, length: number, width: number, thickness: number, grain: 'along-length' | 'any'): PartIn => ({
+const part = (
+  group: string,
+  name: string,
+  quantity: number,
+  length: number,
+  width: number,
+  thickness: number,
+  grain: 'along-length' | 'any',
+): PartIn => ({
   id: `${group}-${name}`,
   label: `${group} ${name}`,
   quantity,
@@ -63,8 +71,24 @@ const FOUR = [110, 140, 170, 200];
 
 export function kitchenParts(): PartIn[] {
   const base: [number, number[]][] = [
-    [300, []], [400, []], [450, THREE], [500, []], [600, THREE], [600, []], [600, FOUR], [800, THREE], [900, []],
-    [900, FOUR], [1000, []], [600, []], [450, []], [400, FOUR], [600, THREE], [800, []], [500, THREE], [300, []],
+    [300, []],
+    [400, []],
+    [450, THREE],
+    [500, []],
+    [600, THREE],
+    [600, []],
+    [600, FOUR],
+    [800, THREE],
+    [900, []],
+    [900, FOUR],
+    [1000, []],
+    [600, []],
+    [450, []],
+    [400, FOUR],
+    [600, THREE],
+    [800, []],
+    [500, THREE],
+    [300, []],
   ];
   const wall = [300, 400, 500, 600, 600, 800, 900, 600, 500, 400, 450, 600, 800, 300, 600, 500];
   const tall = [600, 600, 450];

@@ -57,7 +57,14 @@ export async function runInstance(inst: BinPackingInstance, mode: Mode, budgetMs
   // An independent look at our own layouts with the plan layer's checker, beside the packer's own tree.
   const whole = { x: 0, y: 0, w: inst.bin.w, h: inst.bin.h };
   result.bins.forEach((b, k) => {
-    if (findGuillotineTree(whole, b.items.map((p) => p.rect), 0) === null) problems.push(`bin ${k} is not guillotine-separable`);
+    if (
+      findGuillotineTree(
+        whole,
+        b.items.map((p) => p.rect),
+        0,
+      ) === null
+    )
+      problems.push(`bin ${k} is not guillotine-separable`);
   });
 
   const run: InstanceRun = {

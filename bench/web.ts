@@ -30,7 +30,12 @@ const log = (s = '') => process.stdout.write(`${s}\n`);
 const args = z
   .object({
     duration: z.coerce.number().int('--duration is whole seconds').min(1).max(120).default(10),
-    port: z.coerce.number().int().min(1024).max(65535).default(Number(process.env.PORT) || 3411),
+    port: z.coerce
+      .number()
+      .int()
+      .min(1024)
+      .max(65535)
+      .default(Number(process.env.PORT) || 3411),
     keep: z.boolean().default(false),
   })
   .parse(parseFlags(process.argv.slice(2)));
@@ -51,7 +56,10 @@ const distDir = process.env.KERFWISE_DIST_DIR || '.next';
 function buildIfNeeded() {
   if (fs.existsSync(path.join(distDir, 'BUILD_ID'))) return;
   log(`No build in ${distDir}: building…`);
-  const build = spawnSync(process.execPath, ['node_modules/next/dist/bin/next', 'build'], { stdio: 'inherit', env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' } });
+  const build = spawnSync(process.execPath, ['node_modules/next/dist/bin/next', 'build'], {
+    stdio: 'inherit',
+    env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' },
+  });
   if (build.status !== 0) throw new Error('next build failed');
 }
 
@@ -66,8 +74,14 @@ async function seed(dataDir: string) {
   try {
     const { db } = handle;
     const { shopId } = await seedDemoShop(db);
-    const [{ n: haveJobs }] = await db.select({ n: sql<number>`count(*)::int` }).from(jobs).where(eq(jobs.shopId, shopId));
-    const [{ n: haveParts }] = await db.select({ n: sql<number>`count(*)::int` }).from(parts).where(eq(parts.shopId, shopId));
+    const [{ n: haveJobs }] = await db
+      .select({ n: sql<number>`count(*)::int` })
+      .from(jobs)
+      .where(eq(jobs.shopId, shopId));
+    const [{ n: haveParts }] = await db
+      .select({ n: sql<number>`count(*)::int` })
+      .from(parts)
+      .where(eq(parts.shopId, shopId));
     const addJobs = JOBS - haveJobs;
     const addParts = PARTS - haveParts;
     await db.transaction(async (tx) => {
@@ -89,16 +103,28 @@ async function seed(dataDir: string) {
          where j.r * ${Math.ceil(addParts / addJobs)} + k < ${addParts}`);
     });
     await db.execute(sql`analyze`);
-    const [{ n: jobCount }] = await db.select({ n: sql<number>`count(*)::int` }).from(jobs).where(eq(jobs.shopId, shopId));
-    const [{ n: partCount }] = await db.select({ n: sql<number>`count(*)::int` }).from(parts).where(eq(parts.shopId, shopId));
-    const [owner] = await db.select({ email: users.email }).from(users).where(and(eq(users.shopId, shopId), eq(users.role, 'owner'))).limit(1);
+    const [{ n: jobCount }] = await db
+      .select({ n: sql<number>`count(*)::int` })
+      .from(jobs)
+      .where(eq(jobs.shopId, shopId));
+    const [{ n: partCount }] = await db
+      .select({ n: sql<number>`count(*)::int` })
+      .from(parts)
+      .where(eq(parts.shopId, shopId));
+    const [owner] = await db
+      .select({ email: users.email })
+      .from(users)
+      .where(and(eq(users.shopId, shopId), eq(users.role, 'owner')))
+      .limit(1);
     const [plan] = await db
       .select({ id: plans.id, name: plans.name, bytes: sql<number>`length(${plans.document}::text)` })
       .from(plans)
       .where(and(eq(plans.shopId, shopId), sql`${plans.status} in ('released', 'cutting')`))
       .orderBy(sql`length(${plans.document}::text) desc`)
       .limit(1);
-    log(`Seeded ${jobCount} jobs and ${partCount.toLocaleString('en-US')} parts in ${((performance.now() - started) / 1000).toFixed(1)} s (embedded PGlite, ${dataDir}).`);
+    log(
+      `Seeded ${jobCount} jobs and ${partCount.toLocaleString('en-US')} parts in ${((performance.now() - started) / 1000).toFixed(1)} s (embedded PGlite, ${dataDir}).`,
+    );
     return { owner: owner.email, plan };
   } finally {
     await handle.close();
@@ -149,7 +175,10 @@ async function signIn(url: string, email: string): Promise<string> {
     headers: { 'content-type': 'application/x-www-form-urlencoded', origin: url, cookie: jar.join('; ') },
     body: new URLSearchParams({ email, password: DEMO_PASSWORD, csrfToken, json: 'true' }),
   });
-  const session = res.headers.getSetCookie().map((c) => c.split(';')[0]).find((c) => c.startsWith('next-auth.session-token='));
+  const session = res.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .find((c) => c.startsWith('next-auth.session-token='));
   if (!session) throw new Error(`sign-in as ${email} failed (${res.status})`);
   return session;
 }
@@ -213,7 +242,8 @@ function table(rows: Row[]) {
 async function main() {
   buildIfNeeded();
   const dataDir = process.env.BENCH_DATA_DIR ? path.resolve(process.env.BENCH_DATA_DIR) : fs.mkdtempSync(path.join(os.tmpdir(), 'kw-bench-web-'));
-  if (fs.existsSync(path.join(dataDir, 'pglite'))) throw new Error(`${dataDir} already holds a database: the benchmark seeds a fresh one (remove it or pick another BENCH_DATA_DIR)`);
+  if (fs.existsSync(path.join(dataDir, 'pglite')))
+    throw new Error(`${dataDir} already holds a database: the benchmark seeds a fresh one (remove it or pick another BENCH_DATA_DIR)`);
   fs.mkdirSync(dataDir, { recursive: true });
   const { owner, plan } = await seed(dataDir);
   const { child, url } = startServer(dataDir, args.port);
@@ -234,7 +264,11 @@ async function main() {
     const targets: Target[] = [
       { name: 'GET /api/health', path: '/api/health' },
       { name: 'GET /api/jobs (first page)', path: '/api/jobs', goal: { rps: 300, p99: 100 } },
-      { name: `GET /api/plans/:id (${plan.name}, ${(plan.bytes / 1024).toFixed(0)} kB)`, path: `/api/plans/${plan.id}`, goal: { rps: 300, p99: 100 } },
+      {
+        name: `GET /api/plans/:id (${plan.name}, ${(plan.bytes / 1024).toFixed(0)} kB)`,
+        path: `/api/plans/${plan.id}`,
+        goal: { rps: 300, p99: 100 },
+      },
       { name: 'GET /jobs (page HTML)', path: '/jobs', goal: { rps: 150, p99: 250 } },
     ];
     for (const t of targets) {
@@ -243,7 +277,12 @@ async function main() {
     }
     const first = (await (await fetch(`${url}/api/jobs`, { headers: { cookie } })).json()) as { jobs: unknown[]; total: number };
     log(`Signed in as ${owner}; the jobs list's first page holds ${first.jobs.length} of ${first.total} open jobs.`);
-    log(`${os.cpus().length} cores, load average before: ${os.loadavg().map((l) => l.toFixed(2)).join(' ')}; ${args.duration} s a run after a 2 s warm-up.\n`);
+    log(
+      `${os.cpus().length} cores, load average before: ${os
+        .loadavg()
+        .map((l) => l.toFixed(2))
+        .join(' ')}; ${args.duration} s a run after a 2 s warm-up.\n`,
+    );
     const rows: Row[] = [];
     for (const target of targets) {
       // Warm-up: compile paths, fill caches; not counted.
@@ -254,7 +293,12 @@ async function main() {
       }
     }
     table(rows);
-    log(`\nLoad average after: ${os.loadavg().map((l) => l.toFixed(2)).join(' ')} (1, 5, 15 min). Server log: ${path.join(dataDir, 'server.log')}`);
+    log(
+      `\nLoad average after: ${os
+        .loadavg()
+        .map((l) => l.toFixed(2))
+        .join(' ')} (1, 5, 15 min). Server log: ${path.join(dataDir, 'server.log')}`,
+    );
   } finally {
     stop();
     await new Promise((r) => setTimeout(r, 1000));

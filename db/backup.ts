@@ -24,7 +24,10 @@ export async function backupEmbedded(dataDir: string, file: string): Promise<{ l
     release = acquireDirectoryLock(`${dir}.lock`);
   } catch (error) {
     const live = await requestLiveDump(dir);
-    if (!live) throw new Error(`${(error as Error).message}\nIt does not answer backup requests on ${backupSocketPath(dir)} (not a Kerfwise server, or an older one). Stop the server, then back it up.`);
+    if (!live)
+      throw new Error(
+        `${(error as Error).message}\nIt does not answer backup requests on ${backupSocketPath(dir)} (not a Kerfwise server, or an older one). Stop the server, then back it up.`,
+      );
     writeWhole(file, live);
     return { live: true };
   }
@@ -82,7 +85,10 @@ function lockOrExplain(dir: string, what: string): () => void {
 export function postgresTool(name: 'pg_dump' | 'pg_restore'): string {
   const root = '/usr/lib/postgresql';
   if (fs.existsSync(root)) {
-    const versions = fs.readdirSync(root).filter((v) => fs.existsSync(path.join(root, v, 'bin', name))).sort((a, b) => Number(b) - Number(a));
+    const versions = fs
+      .readdirSync(root)
+      .filter((v) => fs.existsSync(path.join(root, v, 'bin', name)))
+      .sort((a, b) => Number(b) - Number(a));
     if (versions.length) return path.join(root, versions[0], 'bin', name);
   }
   return name;
@@ -94,6 +100,8 @@ export function backupPostgres(url: string, file: string): void {
 }
 
 export function restorePostgres(url: string, file: string): void {
-  const res = spawnSync(postgresTool('pg_restore'), ['--clean', '--if-exists', '--no-owner', '--single-transaction', '--dbname', url, file], { encoding: 'utf8' });
+  const res = spawnSync(postgresTool('pg_restore'), ['--clean', '--if-exists', '--no-owner', '--single-transaction', '--dbname', url, file], {
+    encoding: 'utf8',
+  });
   if (res.status !== 0) throw new Error(`pg_restore failed: ${res.stderr || res.error?.message}`);
 }

@@ -32,7 +32,9 @@ export interface LiveBackupServer {
 export async function serveLiveBackups(dataDir: string, dump: () => Promise<Blob>): Promise<LiveBackupServer | { error: string }> {
   const socketPath = backupSocketPath(dataDir);
   if (Buffer.byteLength(socketPath) > MAX_SOCKET_PATH) {
-    return { error: `Backups while the server runs are off: the socket path ${socketPath} is longer than ${MAX_SOCKET_PATH} bytes (use a shorter KERFWISE_DATA_DIR).` };
+    return {
+      error: `Backups while the server runs are off: the socket path ${socketPath} is longer than ${MAX_SOCKET_PATH} bytes (use a shorter KERFWISE_DATA_DIR).`,
+    };
   }
   fs.rmSync(socketPath, { force: true });
   const server = net.createServer((socket) => {
@@ -112,7 +114,8 @@ export async function requestLiveDump(dataDir: string, timeoutMs = 120_000): Pro
       const ok = /^ok (\d+)$/.exec(head);
       if (!ok) return reject(new Error(`The server could not make the backup: ${head.replace(/^error /, '') || 'no answer'}`));
       const body = all.subarray(eol + 1);
-      if (body.length !== Number(ok[1])) return reject(new Error(`The backup was cut short (${body.length} of ${ok[1]} bytes): nothing was written.`));
+      if (body.length !== Number(ok[1]))
+        return reject(new Error(`The backup was cut short (${body.length} of ${ok[1]} bytes): nothing was written.`));
       resolve(body);
     });
   });

@@ -66,7 +66,11 @@ export function readHolder(lockPath: string): LockHolder | null {
   try {
     const v = JSON.parse(text) as Partial<LockHolder>;
     if (!Number.isInteger(v.pid) || (v.pid as number) <= 0) return null;
-    return { pid: v.pid as number, startTime: typeof v.startTime === 'string' ? v.startTime : null, bootId: typeof v.bootId === 'string' ? v.bootId : null };
+    return {
+      pid: v.pid as number,
+      startTime: typeof v.startTime === 'string' ? v.startTime : null,
+      bootId: typeof v.bootId === 'string' ? v.bootId : null,
+    };
   } catch {
     return null;
   }

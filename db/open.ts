@@ -38,9 +38,8 @@ export interface OpenOptions {
 export const MIGRATIONS_FOLDER = path.resolve(process.cwd(), 'db/migrations');
 
 export async function openDatabase(options: OpenOptions = {}): Promise<DbHandle> {
-  const handle = options.url && /^postgres(ql)?:\/\//.test(options.url)
-    ? await openPostgres(options.url)
-    : await openPglite(options.dataDir ?? './data/pglite');
+  const handle =
+    options.url && /^postgres(ql)?:\/\//.test(options.url) ? await openPostgres(options.url) : await openPglite(options.dataDir ?? './data/pglite');
   if (options.migrate !== false) {
     try {
       await runMigrations(handle);
@@ -60,7 +59,9 @@ export async function openDatabase(options: OpenOptions = {}): Promise<DbHandle>
 export async function startChangeFeed(handle: DbHandle): Promise<void> {
   if (handle.changes || !handle.listen) return;
   const names = WATCHED_TABLES.map((t) => `kerfwise_changes_${t}`);
-  const found = (await handle.db.execute(sql`select count(*)::int as n from pg_trigger where tgname in ${names}`)) as unknown as { rows: { n: number }[] };
+  const found = (await handle.db.execute(sql`select count(*)::int as n from pg_trigger where tgname in ${names}`)) as unknown as {
+    rows: { n: number }[];
+  };
   if (Number(found.rows[0].n) !== names.length) return;
   const feed = new ChangeFeed();
   await handle.listen(CHANGES_CHANNEL, (table) => feed.changed(table));
@@ -73,7 +74,12 @@ async function openPglite(dataDir: string): Promise<DbHandle> {
   if (dataDir === 'memory://') {
     const client = new PGlite();
     await client.waitReady;
-    return { db: drizzle({ client, schema }) as unknown as Db, kind: 'pglite', close: () => client.close(), listen: (channel, onNotice) => client.listen(channel, onNotice) };
+    return {
+      db: drizzle({ client, schema }) as unknown as Db,
+      kind: 'pglite',
+      close: () => client.close(),
+      listen: (channel, onNotice) => client.listen(channel, onNotice),
+    };
   }
   const dir = path.resolve(dataDir);
   // PGlite creates only the last path segment.

@@ -23,7 +23,9 @@ export async function startServer() {
     startQuoteExpiry(handle.db);
     // The embedded database answers `npm run backup` while the server runs (without it, the server still serves).
     if (handle.dump) {
-      const served = await serveLiveBackups(path.resolve(serverEnv().KERFWISE_DATA_DIR, 'pglite'), handle.dump).catch((error: Error) => ({ error: `Backups while the server runs are off: ${error.message}` }));
+      const served = await serveLiveBackups(path.resolve(serverEnv().KERFWISE_DATA_DIR, 'pglite'), handle.dump).catch((error: Error) => ({
+        error: `Backups while the server runs are off: ${error.message}`,
+      }));
       if ('error' in served) console.error(served.error);
       else backups = served;
     }

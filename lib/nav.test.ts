@@ -5,7 +5,22 @@ import { homeFor, JOB_SECTIONS, jobSectionsFor, NAV_ITEMS, navFor } from './nav'
 
 describe('navigation by role (PRODUCT.md, "Users and roles")', () => {
   test.each([
-    ['owner', ['Jobs', 'Customers', 'Setup cards', 'Stock room', 'Purchase orders', 'Yield ledger', 'Reports', 'Shop floor', 'Team', 'Outbox', 'Shop settings']],
+    [
+      'owner',
+      [
+        'Jobs',
+        'Customers',
+        'Setup cards',
+        'Stock room',
+        'Purchase orders',
+        'Yield ledger',
+        'Reports',
+        'Shop floor',
+        'Team',
+        'Outbox',
+        'Shop settings',
+      ],
+    ],
     ['estimator', ['Jobs', 'Customers', 'Setup cards', 'Stock room', 'Purchase orders', 'Reports']],
     ['cutter', ['Jobs', 'Setup cards', 'Stock room', 'Shop floor']],
   ] as const)('the %s sees %j', (role, labels) => {

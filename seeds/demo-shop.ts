@@ -90,101 +90,353 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 10);
   return db
     .transaction(async (tx) => {
-    const [shop] = await tx
-      .insert(shops)
-      .values({
-        name: 'Larkspur Cabinet Works',
-        units: { system: 'imperial', precision: 16, feet: false },
-        currency: 'USD',
-        kerfMm: inches(1 / 8),
-        edgeTrimMm: 6,
-        minOffcutLengthMm: inches(12),
-        minOffcutWidthMm: inches(4),
-        wastePercent: 15,
-        timeZone: 'America/Chicago',
-        offcutAgeMonths: 3,
-        purchaseOrderDetails: '412 Foundry Lane, Larkspur\nDeliveries to the back dock, 7 am to 3 pm',
-      })
-      .returning({ id: shops.id });
-    const shopId = shop.id;
+      const [shop] = await tx
+        .insert(shops)
+        .values({
+          name: 'Larkspur Cabinet Works',
+          units: { system: 'imperial', precision: 16, feet: false },
+          currency: 'USD',
+          kerfMm: inches(1 / 8),
+          edgeTrimMm: 6,
+          minOffcutLengthMm: inches(12),
+          minOffcutWidthMm: inches(4),
+          wastePercent: 15,
+          timeZone: 'America/Chicago',
+          offcutAgeMonths: 3,
+          purchaseOrderDetails: '412 Foundry Lane, Larkspur\nDeliveries to the back dock, 7 am to 3 pm',
+        })
+        .returning({ id: shops.id });
+      const shopId = shop.id;
 
-    const people = await tx
-      .insert(users)
-      .values(DEMO_PEOPLE.map((p) => ({ ...p, shopId, passwordHash })))
-      .returning({ id: users.id, role: users.role });
-    const estimator = people.find((p) => p.role === 'estimator')!.id;
+      const people = await tx
+        .insert(users)
+        .values(DEMO_PEOPLE.map((p) => ({ ...p, shopId, passwordHash })))
+        .returning({ id: users.id, role: users.role });
+      const estimator = people.find((p) => p.role === 'estimator')!.id;
 
-    await tx.insert(stockItems).values([
-      { shopId, kind: 'sheet', material: 'Baltic birch', nominalThickness: '1/2"', thicknessMm: 12, lengthMm: 1525, widthMm: 1525, grain: 'along-length', onHand: 14, lowStockAt: 4, costCents: 6850, supplier: 'Cedar Run Plywood', location: 'Rack A2', buyable: true },
-      { shopId, kind: 'sheet', material: 'Baltic birch', nominalThickness: '1/4"', thicknessMm: 6, lengthMm: 1525, widthMm: 1525, grain: 'along-length', onHand: 10, lowStockAt: 3, costCents: 3900, supplier: 'Cedar Run Plywood', location: 'Rack A1', buyable: true },
-      { shopId, kind: 'sheet', material: 'Baltic birch', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: 1525, widthMm: 1525, grain: 'along-length', onHand: 8, lowStockAt: 3, costCents: 8900, supplier: 'Cedar Run Plywood', location: 'Rack A3', buyable: true },
-      { shopId, kind: 'sheet', material: 'Maple ply', nominalThickness: '3/4"', thicknessMm: inches(23 / 32), lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'along-length', onHand: 22, lowStockAt: 6, costCents: 9400, supplier: 'Cedar Run Plywood', location: 'Rack B1', buyable: true },
-      { shopId, kind: 'sheet', material: 'Maple ply', nominalThickness: '1/4"', thicknessMm: 6, lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'along-length', onHand: 9, lowStockAt: 3, costCents: 4200, supplier: 'Cedar Run Plywood', location: 'Rack B4', buyable: true },
-      { shopId, kind: 'sheet', material: 'MDF', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'none', onHand: 5, lowStockAt: 2, costCents: 4600, supplier: 'Hollow Creek Supply', location: 'Rack C1', buyable: true },
-      { shopId, kind: 'board', material: 'White oak', nominalThickness: '4/4', thicknessMm: inches(13 / 16), lengthMm: inches(96), widthMm: inches(6.5), grain: 'along-length', surfacing: 'S2S', grade: 'FAS', onHand: 30, lowStockAt: 10, costCents: 925, supplier: 'Millbrook Hardwoods', location: 'Lumber rack 1', buyable: true },
-      { shopId, kind: 'board', material: 'Hard maple', nominalThickness: '4/4', thicknessMm: inches(13 / 16), lengthMm: inches(96), widthMm: inches(5.5), grain: 'along-length', surfacing: 'S2S', grade: '1 Common', onHand: 18, lowStockAt: 8, costCents: 640, supplier: 'Millbrook Hardwoods', location: 'Lumber rack 2', buyable: true },
-    ]);
-    // The suppliers' order desks (invented addresses), so a purchase order knows where to go; Hollow Creek has none
-    // on file yet, and its first order asks for one.
-    await tx.insert(suppliers).values([
-      { shopId, name: 'Cedar Run Plywood', email: 'orders@cedarrun.example' },
-      { shopId, name: 'Millbrook Hardwoods', email: 'sales@millbrook.example' },
-    ]);
-    await tx.insert(offcuts).values([
-      { shopId, material: 'Baltic birch', thicknessMm: 12, lengthMm: inches(30), widthMm: inches(16), location: 'Offcut bin 1', costCents: 900 },
-      { shopId, material: 'Maple ply', thicknessMm: inches(23 / 32), lengthMm: inches(46.5), widthMm: inches(15), location: 'Offcut bin 2', costCents: 1100 },
-      { shopId, material: 'Maple ply', thicknessMm: inches(23 / 32), lengthMm: inches(25.25), widthMm: inches(23.25), location: 'Offcut bin 2', costCents: 800 },
-    ]);
+      await tx.insert(stockItems).values([
+        {
+          shopId,
+          kind: 'sheet',
+          material: 'Baltic birch',
+          nominalThickness: '1/2"',
+          thicknessMm: 12,
+          lengthMm: 1525,
+          widthMm: 1525,
+          grain: 'along-length',
+          onHand: 14,
+          lowStockAt: 4,
+          costCents: 6850,
+          supplier: 'Cedar Run Plywood',
+          location: 'Rack A2',
+          buyable: true,
+        },
+        {
+          shopId,
+          kind: 'sheet',
+          material: 'Baltic birch',
+          nominalThickness: '1/4"',
+          thicknessMm: 6,
+          lengthMm: 1525,
+          widthMm: 1525,
+          grain: 'along-length',
+          onHand: 10,
+          lowStockAt: 3,
+          costCents: 3900,
+          supplier: 'Cedar Run Plywood',
+          location: 'Rack A1',
+          buyable: true,
+        },
+        {
+          shopId,
+          kind: 'sheet',
+          material: 'Baltic birch',
+          nominalThickness: '3/4"',
+          thicknessMm: 18,
+          lengthMm: 1525,
+          widthMm: 1525,
+          grain: 'along-length',
+          onHand: 8,
+          lowStockAt: 3,
+          costCents: 8900,
+          supplier: 'Cedar Run Plywood',
+          location: 'Rack A3',
+          buyable: true,
+        },
+        {
+          shopId,
+          kind: 'sheet',
+          material: 'Maple ply',
+          nominalThickness: '3/4"',
+          thicknessMm: inches(23 / 32),
+          lengthMm: SHEET.l,
+          widthMm: SHEET.w,
+          grain: 'along-length',
+          onHand: 22,
+          lowStockAt: 6,
+          costCents: 9400,
+          supplier: 'Cedar Run Plywood',
+          location: 'Rack B1',
+          buyable: true,
+        },
+        {
+          shopId,
+          kind: 'sheet',
+          material: 'Maple ply',
+          nominalThickness: '1/4"',
+          thicknessMm: 6,
+          lengthMm: SHEET.l,
+          widthMm: SHEET.w,
+          grain: 'along-length',
+          onHand: 9,
+          lowStockAt: 3,
+          costCents: 4200,
+          supplier: 'Cedar Run Plywood',
+          location: 'Rack B4',
+          buyable: true,
+        },
+        {
+          shopId,
+          kind: 'sheet',
+          material: 'MDF',
+          nominalThickness: '3/4"',
+          thicknessMm: 18,
+          lengthMm: SHEET.l,
+          widthMm: SHEET.w,
+          grain: 'none',
+          onHand: 5,
+          lowStockAt: 2,
+          costCents: 4600,
+          supplier: 'Hollow Creek Supply',
+          location: 'Rack C1',
+          buyable: true,
+        },
+        {
+          shopId,
+          kind: 'board',
+          material: 'White oak',
+          nominalThickness: '4/4',
+          thicknessMm: inches(13 / 16),
+          lengthMm: inches(96),
+          widthMm: inches(6.5),
+          grain: 'along-length',
+          surfacing: 'S2S',
+          grade: 'FAS',
+          onHand: 30,
+          lowStockAt: 10,
+          costCents: 925,
+          supplier: 'Millbrook Hardwoods',
+          location: 'Lumber rack 1',
+          buyable: true,
+        },
+        {
+          shopId,
+          kind: 'board',
+          material: 'Hard maple',
+          nominalThickness: '4/4',
+          thicknessMm: inches(13 / 16),
+          lengthMm: inches(96),
+          widthMm: inches(5.5),
+          grain: 'along-length',
+          surfacing: 'S2S',
+          grade: '1 Common',
+          onHand: 18,
+          lowStockAt: 8,
+          costCents: 640,
+          supplier: 'Millbrook Hardwoods',
+          location: 'Lumber rack 2',
+          buyable: true,
+        },
+      ]);
+      // The suppliers' order desks (invented addresses), so a purchase order knows where to go; Hollow Creek has none
+      // on file yet, and its first order asks for one.
+      await tx.insert(suppliers).values([
+        { shopId, name: 'Cedar Run Plywood', email: 'orders@cedarrun.example' },
+        { shopId, name: 'Millbrook Hardwoods', email: 'sales@millbrook.example' },
+      ]);
+      await tx.insert(offcuts).values([
+        { shopId, material: 'Baltic birch', thicknessMm: 12, lengthMm: inches(30), widthMm: inches(16), location: 'Offcut bin 1', costCents: 900 },
+        {
+          shopId,
+          material: 'Maple ply',
+          thicknessMm: inches(23 / 32),
+          lengthMm: inches(46.5),
+          widthMm: inches(15),
+          location: 'Offcut bin 2',
+          costCents: 1100,
+        },
+        {
+          shopId,
+          material: 'Maple ply',
+          thicknessMm: inches(23 / 32),
+          lengthMm: inches(25.25),
+          widthMm: inches(23.25),
+          location: 'Offcut bin 2',
+          costCents: 800,
+        },
+      ]);
 
-    await tx.insert(hardwareItems).values([
-      { shopId, name: 'Side-mount slides, 18″, full extension', unit: 'pair', priceMinor: 1495 },
-      { shopId, name: 'Side-mount slides, 20″, full extension', unit: 'pair', priceMinor: 1650 },
-      { shopId, name: 'Side-mount slides, 22″, full extension', unit: 'pair', priceMinor: 1795 },
-      { shopId, name: 'Hinge, 110° soft-close', unit: 'each', priceMinor: 475 },
-      { shopId, name: 'Pull, 128 mm, brushed steel', unit: 'each', priceMinor: 385 },
-      { shopId, name: 'Confirmat screws, box of 100', unit: 'box', priceMinor: 1290 },
-    ]);
+      await tx.insert(hardwareItems).values([
+        { shopId, name: 'Side-mount slides, 18″, full extension', unit: 'pair', priceMinor: 1495 },
+        { shopId, name: 'Side-mount slides, 20″, full extension', unit: 'pair', priceMinor: 1650 },
+        { shopId, name: 'Side-mount slides, 22″, full extension', unit: 'pair', priceMinor: 1795 },
+        { shopId, name: 'Hinge, 110° soft-close', unit: 'each', priceMinor: 475 },
+        { shopId, name: 'Pull, 128 mm, brushed steel', unit: 'each', priceMinor: 385 },
+        { shopId, name: 'Confirmat screws, box of 100', unit: 'box', priceMinor: 1290 },
+      ]);
 
-    await tx.insert(slideModels).values(DEMO_SLIDE_MODELS.map((m) => ({ shopId, ...slideModelSchema.parse(m) })));
-    await tx.insert(saws).values(DEMO_SAWS.map((m, position) => ({ shopId, ...sawSchema.parse(m), position })));
+      await tx.insert(slideModels).values(DEMO_SLIDE_MODELS.map((m) => ({ shopId, ...slideModelSchema.parse(m) })));
+      await tx.insert(saws).values(DEMO_SAWS.map((m, position) => ({ shopId, ...sawSchema.parse(m), position })));
 
-    const [hollis, pemberton, arden] = await tx
-      .insert(customers)
-      .values([
-        { shopId, name: 'Priya & Sam Hollis', email: 'hollis.family@example.com', phone: '(555) 014-2231', billingAddress: '18 Larch Row, Millbrook', siteAddress: '18 Larch Row, Millbrook' },
-        { shopId, name: 'Gail Pemberton', email: 'gail.pemberton@example.com', phone: '(555) 014-8870', billingAddress: '4 Quarry Lane, Millbrook', siteAddress: '4 Quarry Lane, Millbrook' },
-        { shopId, name: 'Arden Books', company: 'Arden Books Ltd', email: 'shop@arden-books.example.com', phone: '(555) 014-5090', billingAddress: '221 High Street, Millbrook', siteAddress: '221 High Street, Millbrook', notes: 'Deliveries before 10 am, by the back door.' },
-      ])
-      .returning({ id: customers.id });
+      const [hollis, pemberton, arden] = await tx
+        .insert(customers)
+        .values([
+          {
+            shopId,
+            name: 'Priya & Sam Hollis',
+            email: 'hollis.family@example.com',
+            phone: '(555) 014-2231',
+            billingAddress: '18 Larch Row, Millbrook',
+            siteAddress: '18 Larch Row, Millbrook',
+          },
+          {
+            shopId,
+            name: 'Gail Pemberton',
+            email: 'gail.pemberton@example.com',
+            phone: '(555) 014-8870',
+            billingAddress: '4 Quarry Lane, Millbrook',
+            siteAddress: '4 Quarry Lane, Millbrook',
+          },
+          {
+            shopId,
+            name: 'Arden Books',
+            company: 'Arden Books Ltd',
+            email: 'shop@arden-books.example.com',
+            phone: '(555) 014-5090',
+            billingAddress: '221 High Street, Millbrook',
+            siteAddress: '221 High Street, Millbrook',
+            notes: 'Deliveries before 10 am, by the back door.',
+          },
+        ])
+        .returning({ id: customers.id });
 
-    const [kitchen, vanity] = await tx
-      .insert(jobs)
-      .values([
-        { shopId, name: 'Hollis kitchen', customerId: hollis.id, status: 'accepted', acceptedAt: new Date('2026-11-02T15:00:00Z'), dueDate: '2027-01-22', notes: 'Maple ply carcasses, Baltic birch drawer boxes, full-extension side-mount slides.', createdBy: estimator },
-        { shopId, name: 'Pemberton vanity', customerId: pemberton.id, status: 'quoting', dueDate: '2027-02-05', notes: 'Floating vanity, two drawers, white oak face frame.', createdBy: estimator },
-        { shopId, name: 'Arden Books wall units', customerId: arden.id, status: 'quoting', dueDate: null, notes: 'Six open bookcases, MDF painted.', createdBy: estimator },
-      ])
-      .returning({ id: jobs.id });
+      const [kitchen, vanity] = await tx
+        .insert(jobs)
+        .values([
+          {
+            shopId,
+            name: 'Hollis kitchen',
+            customerId: hollis.id,
+            status: 'accepted',
+            acceptedAt: new Date('2026-11-02T15:00:00Z'),
+            dueDate: '2027-01-22',
+            notes: 'Maple ply carcasses, Baltic birch drawer boxes, full-extension side-mount slides.',
+            createdBy: estimator,
+          },
+          {
+            shopId,
+            name: 'Pemberton vanity',
+            customerId: pemberton.id,
+            status: 'quoting',
+            dueDate: '2027-02-05',
+            notes: 'Floating vanity, two drawers, white oak face frame.',
+            createdBy: estimator,
+          },
+          {
+            shopId,
+            name: 'Arden Books wall units',
+            customerId: arden.id,
+            status: 'quoting',
+            dueDate: null,
+            notes: 'Six open bookcases, MDF painted.',
+            createdBy: estimator,
+          },
+        ])
+        .returning({ id: jobs.id });
 
-    const ply = { material: 'Maple ply', thicknessMm: inches(23 / 32) };
-    await tx.insert(parts).values([
-      { shopId, jobId: kitchen.id, label: 'Base side', quantity: 8, lengthMm: inches(34.5), widthMm: inches(23), ...ply, grain: 'along-length', sort: 1 },
-      { shopId, jobId: kitchen.id, label: 'Base bottom', quantity: 4, lengthMm: inches(34), widthMm: inches(23), ...ply, grain: 'along-length', sort: 2 },
-      { shopId, jobId: kitchen.id, label: 'Stretcher', quantity: 8, lengthMm: inches(34), widthMm: inches(4), ...ply, grain: 'any', sort: 3 },
-      { shopId, jobId: kitchen.id, label: 'Back', quantity: 4, lengthMm: inches(34.5), widthMm: inches(34), material: 'Maple ply', thicknessMm: 6, grain: 'any', sort: 4 },
-      { shopId, jobId: vanity.id, label: 'Vanity side', quantity: 2, lengthMm: inches(21), widthMm: inches(18), ...ply, grain: 'along-length', sort: 1 },
-      { shopId, jobId: vanity.id, label: 'Face frame stile', quantity: 2, lengthMm: inches(21), widthMm: inches(1.5), material: 'White oak', thicknessMm: inches(13 / 16), grain: 'along-length', sort: 2 },
-      { shopId, jobId: vanity.id, label: 'Face frame rail', quantity: 3, lengthMm: inches(33), widthMm: inches(1.5), material: 'White oak', thicknessMm: inches(13 / 16), grain: 'along-length', sort: 3 },
-    ]);
-    const cutter = people.find((p) => p.role === 'cutter')!.id;
-    return { seeded: true, shopId, kitchenJobId: kitchen.id, estimatorId: estimator, cutterId: cutter };
-  }).then(async (result) => {
-    if (result.seeded) {
-      await seedReleasedPlan(db, result.shopId, result.kitchenJobId, result.estimatorId);
-      await seedDemoHistory(db, { shopId: result.shopId, estimatorId: result.estimatorId, cutterId: result.cutterId });
-    }
-    return { seeded: true, shopId: result.shopId };
-  });
+      const ply = { material: 'Maple ply', thicknessMm: inches(23 / 32) };
+      await tx.insert(parts).values([
+        {
+          shopId,
+          jobId: kitchen.id,
+          label: 'Base side',
+          quantity: 8,
+          lengthMm: inches(34.5),
+          widthMm: inches(23),
+          ...ply,
+          grain: 'along-length',
+          sort: 1,
+        },
+        {
+          shopId,
+          jobId: kitchen.id,
+          label: 'Base bottom',
+          quantity: 4,
+          lengthMm: inches(34),
+          widthMm: inches(23),
+          ...ply,
+          grain: 'along-length',
+          sort: 2,
+        },
+        { shopId, jobId: kitchen.id, label: 'Stretcher', quantity: 8, lengthMm: inches(34), widthMm: inches(4), ...ply, grain: 'any', sort: 3 },
+        {
+          shopId,
+          jobId: kitchen.id,
+          label: 'Back',
+          quantity: 4,
+          lengthMm: inches(34.5),
+          widthMm: inches(34),
+          material: 'Maple ply',
+          thicknessMm: 6,
+          grain: 'any',
+          sort: 4,
+        },
+        {
+          shopId,
+          jobId: vanity.id,
+          label: 'Vanity side',
+          quantity: 2,
+          lengthMm: inches(21),
+          widthMm: inches(18),
+          ...ply,
+          grain: 'along-length',
+          sort: 1,
+        },
+        {
+          shopId,
+          jobId: vanity.id,
+          label: 'Face frame stile',
+          quantity: 2,
+          lengthMm: inches(21),
+          widthMm: inches(1.5),
+          material: 'White oak',
+          thicknessMm: inches(13 / 16),
+          grain: 'along-length',
+          sort: 2,
+        },
+        {
+          shopId,
+          jobId: vanity.id,
+          label: 'Face frame rail',
+          quantity: 3,
+          lengthMm: inches(33),
+          widthMm: inches(1.5),
+          material: 'White oak',
+          thicknessMm: inches(13 / 16),
+          grain: 'along-length',
+          sort: 3,
+        },
+      ]);
+      const cutter = people.find((p) => p.role === 'cutter')!.id;
+      return { seeded: true, shopId, kitchenJobId: kitchen.id, estimatorId: estimator, cutterId: cutter };
+    })
+    .then(async (result) => {
+      if (result.seeded) {
+        await seedReleasedPlan(db, result.shopId, result.kitchenJobId, result.estimatorId);
+        await seedDemoHistory(db, { shopId: result.shopId, estimatorId: result.estimatorId, cutterId: result.cutterId });
+      }
+      return { seeded: true, shopId: result.shopId };
+    });
 }
 
 /**
@@ -194,7 +446,24 @@ export async function seedDemoShop(db: Db): Promise<{ seeded: boolean; shopId: s
  */
 async function seedReleasedPlan(db: Db, shopId: string, jobId: string, userId: string) {
   // A size running low, so the stock room has a marker to show.
-  await db.insert(stockItems).values({ shopId, kind: 'sheet', material: 'MDF', nominalThickness: '1/2"', thicknessMm: 12, lengthMm: SHEET.l, widthMm: SHEET.w, grain: 'none', onHand: 2, lowStockAt: 3, costCents: 3400, supplier: 'Hollow Creek Supply', location: 'Rack C2', buyable: true });
+  await db
+    .insert(stockItems)
+    .values({
+      shopId,
+      kind: 'sheet',
+      material: 'MDF',
+      nominalThickness: '1/2"',
+      thicknessMm: 12,
+      lengthMm: SHEET.l,
+      widthMm: SHEET.w,
+      grain: 'none',
+      onHand: 2,
+      lowStockAt: 3,
+      costCents: 3400,
+      supplier: 'Hollow Creek Supply',
+      location: 'Rack C2',
+      buyable: true,
+    });
   await recordOpeningCounts(db, shopId, null);
   const request = nestRequestSchema.parse(await buildNestRequest(db, shopId, jobId, { timeBudgetMs: 0 }));
   const plan = await optimize(request);

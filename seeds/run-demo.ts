@@ -55,7 +55,9 @@ async function main() {
     const webhookSecret = newWebhookSecret();
     const fake = await startPaymentsFake({ webhookUrl: `${env.NEXTAUTH_URL}/api/payments/webhook`, webhookSecret });
     Object.assign(env, { KERFWISE_PAYMENTS_URL: fake.url, KERFWISE_PAYMENTS_WEBHOOK_SECRET: webhookSecret });
-    console.log(`Payments: no STRIPE_SECRET_KEY, so deposits are paid on a local test checkout at ${fake.url} (test card 4242 4242 4242 4242; nothing is charged).`);
+    console.log(
+      `Payments: no STRIPE_SECRET_KEY, so deposits are paid on a local test checkout at ${fake.url} (test card 4242 4242 4242 4242; nothing is charged).`,
+    );
   }
   if (!process.argv.includes('--no-build')) {
     const build = spawnSync('npx', ['next', 'build'], { stdio: 'inherit', env });

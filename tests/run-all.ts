@@ -45,7 +45,10 @@ function ensureDebianPackage(pkg: string, present: () => boolean) {
 function postgresBin(): string | null {
   const root = '/usr/lib/postgresql';
   if (!fs.existsSync(root)) return null;
-  const versions = fs.readdirSync(root).filter((v) => fs.existsSync(path.join(root, v, 'bin/pg_ctl'))).sort((a, b) => Number(b) - Number(a));
+  const versions = fs
+    .readdirSync(root)
+    .filter((v) => fs.existsSync(path.join(root, v, 'bin/pg_ctl')))
+    .sort((a, b) => Number(b) - Number(a));
   return versions.length ? path.join(root, versions[0], 'bin') : null;
 }
 
@@ -53,7 +56,9 @@ function addVitest(file: string) {
   const r = JSON.parse(fs.readFileSync(file, 'utf8'));
   totals.passed += r.numPassedTests;
   // A file that fails before any test runs (a missing fixture, an import error) has no failed test to count.
-  const brokenFiles = (r.testResults as { status: string; assertionResults: unknown[] }[]).filter((f) => f.status === 'failed' && f.assertionResults.length === 0);
+  const brokenFiles = (r.testResults as { status: string; assertionResults: unknown[] }[]).filter(
+    (f) => f.status === 'failed' && f.assertionResults.length === 0,
+  );
   totals.failed += r.numFailedTests + brokenFiles.length;
   totals.skipped += r.numPendingTests + r.numTodoTests;
 }
@@ -90,7 +95,9 @@ async function withPostgres(body: (url: string) => void) {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-pg-'));
   const port = String(await freePort());
   const asPg = (cmd: string, args: string[]) =>
-    isRoot ? spawnSync('runuser', ['-u', 'postgres', '--', path.join(bin, cmd), ...args], { stdio: 'inherit' }) : spawnSync(path.join(bin, cmd), args, { stdio: 'inherit' });
+    isRoot
+      ? spawnSync('runuser', ['-u', 'postgres', '--', path.join(bin, cmd), ...args], { stdio: 'inherit' })
+      : spawnSync(path.join(bin, cmd), args, { stdio: 'inherit' });
   if (isRoot) spawnSync('chown', ['postgres:postgres', dir]);
   const data = path.join(dir, 'data');
   if (asPg('initdb', ['-D', data, '-U', 'postgres', '--auth=trust', '--no-sync', '-E', 'UTF8']).status !== 0) fail('initdb failed.');
@@ -119,7 +126,9 @@ if (run('production build', 'npx', ['next', 'build'], { env: { NEXT_TELEMETRY_DI
 
 const e2eJson = path.join(OUT, 'playwright.json');
 fs.rmSync(e2eJson, { force: true });
-const e2e = run('end-to-end tests in Chromium', 'npx', ['playwright', 'test', '--reporter=list,json'], { env: { PLAYWRIGHT_JSON_OUTPUT_NAME: e2eJson } });
+const e2e = run('end-to-end tests in Chromium', 'npx', ['playwright', 'test', '--reporter=list,json'], {
+  env: { PLAYWRIGHT_JSON_OUTPUT_NAME: e2eJson },
+});
 if (fs.existsSync(e2eJson)) addPlaywright(e2eJson);
 if (e2e !== 0) fail('End-to-end tests failed (screenshots in test-results/).');
 

@@ -28,8 +28,12 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
         <>
           <NavLinks items={navFor(user.role)} />
           <div className="mt-auto border-t border-paper-edge px-2 pt-3">
-            <div className="text-sm font-medium" data-testid="signed-in-as">{user.name}</div>
-            <div className="mb-2 text-xs text-graphite-mute" data-testid="signed-in-role">{ROLE_LABELS[user.role]}</div>
+            <div className="text-sm font-medium" data-testid="signed-in-as">
+              {user.name}
+            </div>
+            <div className="mb-2 text-xs text-graphite-mute" data-testid="signed-in-role">
+              {ROLE_LABELS[user.role]}
+            </div>
             <SignOutButton />
           </div>
         </>

@@ -11,10 +11,16 @@ export async function LinkPage({ purpose, token }: { purpose: LinkPurpose; token
     return (
       <div className="card p-6 shadow-sm">
         <h1 className="mb-2 text-xl">{invite ? 'This invite cannot be used' : 'This reset link cannot be used'}</h1>
-        <p role="alert" className="mb-5 text-sm text-graphite-soft">{LINK_REFUSALS[state.reason]}</p>
+        <p role="alert" className="mb-5 text-sm text-graphite-soft">
+          {LINK_REFUSALS[state.reason]}
+        </p>
         <div className="flex flex-wrap gap-3 text-sm">
-          <Link href="/sign-in" className="btn-quiet">Sign in</Link>
-          <Link href="/forgot-password" className="btn-quiet">Get a new link</Link>
+          <Link href="/sign-in" className="btn-quiet">
+            Sign in
+          </Link>
+          <Link href="/forgot-password" className="btn-quiet">
+            Get a new link
+          </Link>
         </div>
       </div>
     );

@@ -33,12 +33,27 @@ export function SetPasswordForm({ endpoint, email, submitLabel }: { endpoint: st
     <form onSubmit={onSubmit} className="flex flex-col gap-4" noValidate>
       <input type="email" name="username" autoComplete="username" value={email} readOnly hidden />
       <div>
-        <label htmlFor="password" className="field-label">New password</label>
-        <input id="password" name="password" type="password" autoComplete="new-password" required minLength={10} className="field-input" aria-describedby="password-hint" />
-        <p id="password-hint" className="mt-1 text-xs text-graphite-mute">At least 10 characters. A few unrelated words are easy to remember and hard to guess.</p>
+        <label htmlFor="password" className="field-label">
+          New password
+        </label>
+        <input
+          id="password"
+          name="password"
+          type="password"
+          autoComplete="new-password"
+          required
+          minLength={10}
+          className="field-input"
+          aria-describedby="password-hint"
+        />
+        <p id="password-hint" className="mt-1 text-xs text-graphite-mute">
+          At least 10 characters. A few unrelated words are easy to remember and hard to guess.
+        </p>
       </div>
       <div>
-        <label htmlFor="confirm" className="field-label">The same again</label>
+        <label htmlFor="confirm" className="field-label">
+          The same again
+        </label>
         <input id="confirm" name="confirm" type="password" autoComplete="new-password" required className="field-input" />
       </div>
       {error && (

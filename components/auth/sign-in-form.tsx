@@ -37,11 +37,15 @@ export function SignInForm() {
   return (
     <form onSubmit={onSubmit} className="flex flex-col gap-4" noValidate>
       <div>
-        <label htmlFor="email" className="field-label">E-mail</label>
+        <label htmlFor="email" className="field-label">
+          E-mail
+        </label>
         <input id="email" name="email" type="email" autoComplete="username" required className="field-input" />
       </div>
       <div>
-        <label htmlFor="password" className="field-label">Password</label>
+        <label htmlFor="password" className="field-label">
+          Password
+        </label>
         <input id="password" name="password" type="password" autoComplete="current-password" required className="field-input" />
       </div>
       {error && (

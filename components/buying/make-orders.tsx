@@ -28,8 +28,16 @@ export function OrderLowStockButton({ disabled }: { disabled: boolean }) {
       <button type="button" className="btn-accent" disabled={disabled || make.isPending} onClick={() => make.mutate({ from: 'low-stock' })}>
         {make.isPending ? 'Making orders…' : 'Order the low stock'}
       </button>
-      {make.error && <p role="alert" className="field-error mt-1">{make.error.message}</p>}
-      {make.data && make.data.orders.length > 1 && <p role="status" className="mt-1 text-sm text-sage">{make.data.orders.length} drafts made, one per supplier: {make.data.orders.map((o) => o.title).join(', ')}.</p>}
+      {make.error && (
+        <p role="alert" className="field-error mt-1">
+          {make.error.message}
+        </p>
+      )}
+      {make.data && make.data.orders.length > 1 && (
+        <p role="status" className="mt-1 text-sm text-sage">
+          {make.data.orders.length} drafts made, one per supplier: {make.data.orders.map((o) => o.title).join(', ')}.
+        </p>
+      )}
     </div>
   );
 }
@@ -41,10 +49,15 @@ export function OrderFromPlanButton({ planId }: { planId: string }) {
       <button type="button" className="btn-quiet" disabled={make.isPending} onClick={() => make.mutate({ from: 'plan', planId })}>
         {make.isPending ? 'Making orders…' : 'Make purchase orders for this'}
       </button>
-      {make.error && <p role="alert" className="field-error mt-1">{make.error.message}</p>}
+      {make.error && (
+        <p role="alert" className="field-error mt-1">
+          {make.error.message}
+        </p>
+      )}
       {make.data && make.data.orders.length > 1 && (
         <p role="status" className="mt-1 text-sm text-sage">
-          {make.data.orders.length} drafts made, one per supplier: {make.data.orders.map((o) => o.title).join(', ')}. <a href="/purchase-orders">Open purchase orders</a>
+          {make.data.orders.length} drafts made, one per supplier: {make.data.orders.map((o) => o.title).join(', ')}.{' '}
+          <a href="/purchase-orders">Open purchase orders</a>
         </p>
       )}
     </div>
@@ -63,12 +76,31 @@ export function NewOrderForm({ suppliers }: { suppliers: string[] }) {
       }}
     >
       <div>
-        <label htmlFor="new-po-supplier" className="field-label">New order for a supplier</label>
-        <input id="new-po-supplier" className="field-input w-64 max-w-full" list="po-suppliers" value={supplier} onChange={(e) => setSupplier(e.target.value)} placeholder="Supplier’s name" />
-        <datalist id="po-suppliers">{suppliers.map((s) => <option key={s} value={s} />)}</datalist>
+        <label htmlFor="new-po-supplier" className="field-label">
+          New order for a supplier
+        </label>
+        <input
+          id="new-po-supplier"
+          className="field-input w-64 max-w-full"
+          list="po-suppliers"
+          value={supplier}
+          onChange={(e) => setSupplier(e.target.value)}
+          placeholder="Supplier’s name"
+        />
+        <datalist id="po-suppliers">
+          {suppliers.map((s) => (
+            <option key={s} value={s} />
+          ))}
+        </datalist>
       </div>
-      <button type="submit" className="btn-quiet" disabled={make.isPending}>Make a draft</button>
-      {make.error && <p role="alert" className="field-error w-full">{make.error.message}</p>}
+      <button type="submit" className="btn-quiet" disabled={make.isPending}>
+        Make a draft
+      </button>
+      {make.error && (
+        <p role="alert" className="field-error w-full">
+          {make.error.message}
+        </p>
+      )}
     </form>
   );
 }

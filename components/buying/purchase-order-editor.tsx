@@ -43,10 +43,21 @@ interface Row {
   costText: string;
 }
 
-const each = (size: EditorSize | undefined, unitCents: number) => (size && size.kind === 'board' && size.boardFeetEach !== null ? Math.round(unitCents * size.boardFeetEach) : unitCents);
+const each = (size: EditorSize | undefined, unitCents: number) =>
+  size && size.kind === 'board' && size.boardFeetEach !== null ? Math.round(unitCents * size.boardFeetEach) : unitCents;
 
 /** A purchase order: its lines editable while a draft, then sent, received against, or cancelled. */
-export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { order: EditorOrder; sizes: EditorSize[]; canWrite: boolean; canReceive: boolean }) {
+export function PurchaseOrderEditor({
+  order,
+  sizes,
+  canWrite,
+  canReceive,
+}: {
+  order: EditorOrder;
+  sizes: EditorSize[];
+  canWrite: boolean;
+  canReceive: boolean;
+}) {
   const router = useRouter();
   const money = (m: number) => formatMoney(m, order.currency);
   const major = (m: number) => (m / minorPerMajor(order.currency)).toFixed(Math.log10(minorPerMajor(order.currency)));
@@ -55,7 +66,9 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
   const [supplier, setSupplier] = useState(order.supplier);
   const [email, setEmail] = useState(order.supplierEmail);
   const [note, setNote] = useState(order.note);
-  const [rows, setRows] = useState<Row[]>(order.lines.map((l) => ({ stockItemId: l.stockItemId, qtyText: String(l.quantity), costText: major(l.unitCostCents) })));
+  const [rows, setRows] = useState<Row[]>(
+    order.lines.map((l) => ({ stockItemId: l.stockItemId, qtyText: String(l.quantity), costText: major(l.unitCostCents) })),
+  );
   const [receiving, setReceiving] = useState<Record<string, string>>({});
   const [updateCosts, setUpdateCosts] = useState(false);
 
@@ -77,10 +90,19 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
     supplier !== order.supplier ||
     email !== order.supplierEmail ||
     note !== order.note ||
-    JSON.stringify(parsed.map((p) => [p.stockItemId, p.quantity, p.unitCostCents])) !== JSON.stringify(order.lines.map((l) => [l.stockItemId, l.quantity, l.unitCostCents]));
+    JSON.stringify(parsed.map((p) => [p.stockItemId, p.quantity, p.unitCostCents])) !==
+      JSON.stringify(order.lines.map((l) => [l.stockItemId, l.quantity, l.unitCostCents]));
 
-  const patchBody = () => ({ supplier, supplierEmail: email.trim(), note, lines: parsed.map((p) => ({ stockItemId: p.stockItemId, quantity: p.quantity, unitCostCents: p.unitCostCents })) });
-  const save = useMutation({ mutationFn: () => api(`/api/purchase-orders/${order.id}`, { method: 'PATCH', body: patchBody() }), onSuccess: () => router.refresh() });
+  const patchBody = () => ({
+    supplier,
+    supplierEmail: email.trim(),
+    note,
+    lines: parsed.map((p) => ({ stockItemId: p.stockItemId, quantity: p.quantity, unitCostCents: p.unitCostCents })),
+  });
+  const save = useMutation({
+    mutationFn: () => api(`/api/purchase-orders/${order.id}`, { method: 'PATCH', body: patchBody() }),
+    onSuccess: () => router.refresh(),
+  });
   const send = useMutation({
     mutationFn: async () => {
       if (dirty) await api(`/api/purchase-orders/${order.id}`, { method: 'PATCH', body: patchBody() });
@@ -88,12 +110,18 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
     },
     onSuccess: () => router.refresh(),
   });
-  const cancel = useMutation({ mutationFn: () => api(`/api/purchase-orders/${order.id}/cancel`, { method: 'POST' }), onSuccess: () => router.refresh() });
+  const cancel = useMutation({
+    mutationFn: () => api(`/api/purchase-orders/${order.id}/cancel`, { method: 'POST' }),
+    onSuccess: () => router.refresh(),
+  });
   const receive = useMutation({
     mutationFn: () =>
       api(`/api/purchase-orders/${order.id}/receive`, {
         method: 'POST',
-        body: { updateCosts, lines: order.lines.filter((l) => (receiving[l.id] ?? '').trim() !== '').map((l) => ({ lineId: l.id, quantity: Number(receiving[l.id]) })) },
+        body: {
+          updateCosts,
+          lines: order.lines.filter((l) => (receiving[l.id] ?? '').trim() !== '').map((l) => ({ lineId: l.id, quantity: Number(receiving[l.id]) })),
+        },
       }),
     onSuccess: () => {
       setReceiving({});
@@ -116,18 +144,38 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
       <fieldset className="card grid gap-3 p-4 sm:grid-cols-2" disabled={!editable}>
         <legend className="sr-only">Supplier</legend>
         <div>
-          <label htmlFor="po-supplier" className="field-label">Supplier</label>
+          <label htmlFor="po-supplier" className="field-label">
+            Supplier
+          </label>
           <input id="po-supplier" className="field-input" value={supplier} onChange={(e) => setSupplier(e.target.value)} />
           {fields.supplier && <p className="field-error">{fields.supplier[0]}</p>}
         </div>
         <div>
-          <label htmlFor="po-email" className="field-label">Supplier’s e-mail</label>
-          <input id="po-email" type="email" className="field-input" value={email} onChange={(e) => setEmail(e.target.value)} placeholder={editable ? 'orders@supplier.example' : ''} />
+          <label htmlFor="po-email" className="field-label">
+            Supplier’s e-mail
+          </label>
+          <input
+            id="po-email"
+            type="email"
+            className="field-input"
+            value={email}
+            onChange={(e) => setEmail(e.target.value)}
+            placeholder={editable ? 'orders@supplier.example' : ''}
+          />
           {fields.supplierEmail && <p className="field-error">{fields.supplierEmail[0]}</p>}
         </div>
         <div className="sm:col-span-2">
-          <label htmlFor="po-note" className="field-label">Note for the supplier</label>
-          <textarea id="po-note" rows={2} className="field-input" value={note} onChange={(e) => setNote(e.target.value)} placeholder={editable ? 'Delivery by Friday, please' : ''} />
+          <label htmlFor="po-note" className="field-label">
+            Note for the supplier
+          </label>
+          <textarea
+            id="po-note"
+            rows={2}
+            className="field-input"
+            value={note}
+            onChange={(e) => setNote(e.target.value)}
+            placeholder={editable ? 'Delivery by Friday, please' : ''}
+          />
         </div>
       </fieldset>
 
@@ -141,7 +189,11 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
               <th className="num">Amount</th>
               {order.status !== 'draft' && <th className="num">Received</th>}
               {receivable && <th className="num">Receiving now</th>}
-              {editable && <th><span className="sr-only">Remove</span></th>}
+              {editable && (
+                <th>
+                  <span className="sr-only">Remove</span>
+                </th>
+              )}
             </tr>
           </thead>
           <tbody>
@@ -152,22 +204,43 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
                     <tr key={r.stockItemId}>
                       <td className="min-w-[16rem]">
                         {s?.description ?? 'A size no longer in the stock room'}
-                        {s && s.supplier.trim().toLowerCase() !== supplier.trim().toLowerCase() && <span className="block text-xs text-graphite-mute">Usually from {s.supplier || 'no supplier named'}</span>}
+                        {s && s.supplier.trim().toLowerCase() !== supplier.trim().toLowerCase() && (
+                          <span className="block text-xs text-graphite-mute">Usually from {s.supplier || 'no supplier named'}</span>
+                        )}
                       </td>
                       <td className="num">
-                        <input aria-label={`Line ${i + 1} quantity`} inputMode="numeric" className="field-input w-20 text-right font-mono" value={r.qtyText} onChange={(e) => update(i, { qtyText: e.target.value })} />
+                        <input
+                          aria-label={`Line ${i + 1} quantity`}
+                          inputMode="numeric"
+                          className="field-input w-20 text-right font-mono"
+                          value={r.qtyText}
+                          onChange={(e) => update(i, { qtyText: e.target.value })}
+                        />
                         {r.quantity === null && <span className="field-error block text-left">A whole number, 1 or more</span>}
                       </td>
                       <td className="num">
                         <span className="inline-flex items-center gap-1">
-                          <input aria-label={`Line ${i + 1} unit cost`} inputMode="decimal" className="field-input w-24 text-right font-mono" value={r.costText} onChange={(e) => update(i, { costText: e.target.value })} />
+                          <input
+                            aria-label={`Line ${i + 1} unit cost`}
+                            inputMode="decimal"
+                            className="field-input w-24 text-right font-mono"
+                            value={r.costText}
+                            onChange={(e) => update(i, { costText: e.target.value })}
+                          />
                           <span className="text-xs text-graphite-mute">/ {s?.kind === 'board' ? 'bd ft' : 'sheet'}</span>
                         </span>
                         {r.unitCostCents === null && <span className="field-error block text-left">An amount such as 68.50</span>}
                       </td>
                       <td className="num">{r.quantity !== null && r.unitCostCents !== null ? money(r.quantity * each(s, r.unitCostCents)) : '—'}</td>
                       <td>
-                        <button type="button" className="btn-quiet" aria-label={`Remove line ${i + 1}`} onClick={() => setRows((rs) => rs.filter((_, j) => j !== i))}>Remove</button>
+                        <button
+                          type="button"
+                          className="btn-quiet"
+                          aria-label={`Remove line ${i + 1}`}
+                          onClick={() => setRows((rs) => rs.filter((_, j) => j !== i))}
+                        >
+                          Remove
+                        </button>
                       </td>
                     </tr>
                   );
@@ -179,13 +252,26 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
                     <tr key={l.id}>
                       <td className="min-w-[16rem]">{s?.description}</td>
                       <td className="num">{l.quantity}</td>
-                      <td className="num">{money(l.unitCostCents)} <span className="text-xs text-graphite-mute">/ {s?.kind === 'board' ? 'bd ft' : 'sheet'}</span></td>
+                      <td className="num">
+                        {money(l.unitCostCents)} <span className="text-xs text-graphite-mute">/ {s?.kind === 'board' ? 'bd ft' : 'sheet'}</span>
+                      </td>
                       <td className="num">{money(l.totalCents)}</td>
-                      {order.status !== 'draft' && <td className="num">{l.received} of {l.quantity}</td>}
+                      {order.status !== 'draft' && (
+                        <td className="num">
+                          {l.received} of {l.quantity}
+                        </td>
+                      )}
                       {receivable && (
                         <td className="num">
                           {open > 0 ? (
-                            <input aria-label={`Line ${i + 1} pieces received now`} inputMode="numeric" className="field-input w-20 text-right font-mono" placeholder="0" value={receiving[l.id] ?? ''} onChange={(e) => setReceiving((r) => ({ ...r, [l.id]: e.target.value }))} />
+                            <input
+                              aria-label={`Line ${i + 1} pieces received now`}
+                              inputMode="numeric"
+                              className="field-input w-20 text-right font-mono"
+                              placeholder="0"
+                              value={receiving[l.id] ?? ''}
+                              onChange={(e) => setReceiving((r) => ({ ...r, [l.id]: e.target.value }))}
+                            />
                           ) : (
                             <span className="text-xs text-sage">All in</span>
                           )}
@@ -196,7 +282,9 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
                 })}
             {(editable ? parsed.length : order.lines.length) === 0 && (
               <tr>
-                <td colSpan={6} className="text-sm text-graphite-mute">No lines yet: add the sizes to order below.</td>
+                <td colSpan={6} className="text-sm text-graphite-mute">
+                  No lines yet: add the sizes to order below.
+                </td>
               </tr>
             )}
           </tbody>
@@ -205,13 +293,17 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
               <td className="font-medium">Total</td>
               <td />
               <td />
-              <td className="num font-semibold" data-testid="po-total">{money(editable ? draftTotal : order.totalCents)}</td>
+              <td className="num font-semibold" data-testid="po-total">
+                {money(editable ? draftTotal : order.totalCents)}
+              </td>
             </tr>
           </tfoot>
         </table>
         {editable && (
           <div className="flex flex-wrap items-center gap-2 border-t border-paper-edge px-3 py-2">
-            <label htmlFor="po-add-line" className="text-sm text-graphite-mute">Add a size</label>
+            <label htmlFor="po-add-line" className="text-sm text-graphite-mute">
+              Add a size
+            </label>
             <select
               id="po-add-line"
               className="field-input w-auto max-w-full"
@@ -222,23 +314,55 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
               }}
             >
               <option value="">Choose a stock size…</option>
-              {sameSupplier.length > 0 && <optgroup label={`From ${supplier || 'this supplier'}`}>{sameSupplier.map((s) => <option key={s.id} value={s.id}>{s.description}</option>)}</optgroup>}
-              {others.length > 0 && <optgroup label="Other sizes">{others.map((s) => <option key={s.id} value={s.id}>{s.description}{s.supplier ? ` (${s.supplier})` : ''}</option>)}</optgroup>}
+              {sameSupplier.length > 0 && (
+                <optgroup label={`From ${supplier || 'this supplier'}`}>
+                  {sameSupplier.map((s) => (
+                    <option key={s.id} value={s.id}>
+                      {s.description}
+                    </option>
+                  ))}
+                </optgroup>
+              )}
+              {others.length > 0 && (
+                <optgroup label="Other sizes">
+                  {others.map((s) => (
+                    <option key={s.id} value={s.id}>
+                      {s.description}
+                      {s.supplier ? ` (${s.supplier})` : ''}
+                    </option>
+                  ))}
+                </optgroup>
+              )}
             </select>
           </div>
         )}
       </div>
 
-      {error && <p role="alert" className="field-error">{error.message}</p>}
+      {error && (
+        <p role="alert" className="field-error">
+          {error.message}
+        </p>
+      )}
 
       {editable && (
         <div className="flex flex-wrap items-center gap-2">
-          <button type="button" className="btn-quiet" disabled={!dirty || !rowsOk || save.isPending} onClick={() => save.mutate()}>{save.isPending ? 'Saving…' : 'Save draft'}</button>
-          <button type="button" className="btn-accent" disabled={!rowsOk || rows.length === 0 || !email.trim() || send.isPending} onClick={() => send.mutate()}>
+          <button type="button" className="btn-quiet" disabled={!dirty || !rowsOk || save.isPending} onClick={() => save.mutate()}>
+            {save.isPending ? 'Saving…' : 'Save draft'}
+          </button>
+          <button
+            type="button"
+            className="btn-accent"
+            disabled={!rowsOk || rows.length === 0 || !email.trim() || send.isPending}
+            onClick={() => send.mutate()}
+          >
             {send.isPending ? 'Sending…' : 'Send to supplier'}
           </button>
           {!email.trim() && <span className="text-sm text-graphite-mute">Add the supplier’s e-mail to send it.</span>}
-          {save.isSuccess && !dirty && <span role="status" className="text-sm text-sage">Saved.</span>}
+          {save.isSuccess && !dirty && (
+            <span role="status" className="text-sm text-sage">
+              Saved.
+            </span>
+          )}
         </div>
       )}
 
@@ -252,9 +376,19 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
           }}
         >
           <h2 className="text-base">Receive a delivery</h2>
-          <p className="text-sm text-graphite-mute">Type how many pieces of each line came in (above). They go onto the stock room’s counts with a receipt naming {order.title}.</p>
+          <p className="text-sm text-graphite-mute">
+            Type how many pieces of each line came in (above). They go onto the stock room’s counts with a receipt naming {order.title}.
+          </p>
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="btn-quiet" onClick={() => setReceiving(Object.fromEntries(order.lines.filter((l) => l.quantity > l.received).map((l) => [l.id, String(l.quantity - l.received)])))}>
+            <button
+              type="button"
+              className="btn-quiet"
+              onClick={() =>
+                setReceiving(
+                  Object.fromEntries(order.lines.filter((l) => l.quantity > l.received).map((l) => [l.id, String(l.quantity - l.received)])),
+                )
+              }
+            >
               Everything still to come
             </button>
           </div>
@@ -263,14 +397,23 @@ export function PurchaseOrderEditor({ order, sizes, canWrite, canReceive }: { or
             <span>Update each received size’s cost in the stock room to this order’s price</span>
           </label>
           <div>
-            <button type="submit" className="btn-accent" disabled={!receiveOk || receive.isPending}>{receive.isPending ? 'Receiving…' : 'Receive'}</button>
+            <button type="submit" className="btn-accent" disabled={!receiveOk || receive.isPending}>
+              {receive.isPending ? 'Receiving…' : 'Receive'}
+            </button>
           </div>
         </form>
       )}
 
       {canWrite && (order.status === 'draft' || order.status === 'sent') && (
         <div>
-          <button type="button" className="btn-danger" disabled={cancel.isPending} onClick={() => { if (window.confirm(`Cancel ${order.title}? It stays in the list as cancelled.`)) cancel.mutate(); }}>
+          <button
+            type="button"
+            className="btn-danger"
+            disabled={cancel.isPending}
+            onClick={() => {
+              if (window.confirm(`Cancel ${order.title}? It stays in the list as cancelled.`)) cancel.mutate();
+            }}
+          >
             Cancel this order
           </button>
         </div>

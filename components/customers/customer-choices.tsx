@@ -13,7 +13,9 @@ export function CustomerChoices({ id }: { id: string }) {
   return (
     <datalist id={id}>
       {(customers.data ?? []).map((c) => (
-        <option key={c.id} value={c.name}>{c.company || c.email || undefined}</option>
+        <option key={c.id} value={c.name}>
+          {c.company || c.email || undefined}
+        </option>
       ))}
     </datalist>
   );

@@ -24,7 +24,9 @@ export function CustomerForm({ customer, onDone }: { customer?: Customer; onDone
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const save = useMutation({
     mutationFn: (body: Partial<Record<Key, string>>) =>
-      customer ? api<Customer>(`/api/customers/${customer.id}`, { method: 'PATCH', body }) : api<Customer>('/api/customers', { method: 'POST', body }),
+      customer
+        ? api<Customer>(`/api/customers/${customer.id}`, { method: 'PATCH', body })
+        : api<Customer>('/api/customers', { method: 'POST', body }),
     onSuccess: (saved) => {
       void queryClient.invalidateQueries({ queryKey: ['customers'] });
       setFields({});
@@ -49,19 +51,48 @@ export function CustomerForm({ customer, onDone }: { customer?: Customer; onDone
     <form onSubmit={onSubmit} className="card grid gap-4 p-5 md:grid-cols-2" aria-label={customer ? 'Edit customer' : 'New customer'} noValidate>
       {FIELDS.map(([key, label, kind]) => (
         <div key={key} className={kind === 'textarea' && key === 'notes' ? 'md:col-span-2' : undefined}>
-          <label htmlFor={`${prefix}-${key}`} className="field-label">{label}</label>
+          <label htmlFor={`${prefix}-${key}`} className="field-label">
+            {label}
+          </label>
           {kind === 'textarea' ? (
-            <textarea id={`${prefix}-${key}`} name={key} rows={key === 'notes' ? 3 : 2} className="field-input" defaultValue={customer?.[key] ?? ''} />
+            <textarea
+              id={`${prefix}-${key}`}
+              name={key}
+              rows={key === 'notes' ? 3 : 2}
+              className="field-input"
+              defaultValue={customer?.[key] ?? ''}
+            />
           ) : (
-            <input id={`${prefix}-${key}`} name={key} type={key === 'email' ? 'email' : key === 'phone' ? 'tel' : 'text'} className="field-input" defaultValue={customer?.[key] ?? ''} autoFocus={key === 'name' && !customer} />
+            <input
+              id={`${prefix}-${key}`}
+              name={key}
+              type={key === 'email' ? 'email' : key === 'phone' ? 'tel' : 'text'}
+              className="field-input"
+              defaultValue={customer?.[key] ?? ''}
+              autoFocus={key === 'name' && !customer}
+            />
           )}
-          {fields[key] && <p className="field-error" role="alert">{fields[key][0]}</p>}
+          {fields[key] && (
+            <p className="field-error" role="alert">
+              {fields[key][0]}
+            </p>
+          )}
         </div>
       ))}
-      {save.isError && !Object.keys(fields).length && <p className="field-error md:col-span-2" role="alert">{save.error.message}</p>}
+      {save.isError && !Object.keys(fields).length && (
+        <p className="field-error md:col-span-2" role="alert">
+          {save.error.message}
+        </p>
+      )}
       <div className="flex gap-2 md:col-span-2">
-        <button type="submit" className="btn-accent" disabled={save.isPending}>{save.isPending ? 'Saving…' : customer ? 'Save customer' : 'Add customer'}</button>
-        {onDone && <button type="button" className="btn-quiet" onClick={onDone}>Cancel</button>}
+        <button type="submit" className="btn-accent" disabled={save.isPending}>
+          {save.isPending ? 'Saving…' : customer ? 'Save customer' : 'Add customer'}
+        </button>
+        {onDone && (
+          <button type="button" className="btn-quiet" onClick={onDone}>
+            Cancel
+          </button>
+        )}
       </div>
     </form>
   );
@@ -70,7 +101,12 @@ export function CustomerForm({ customer, onDone }: { customer?: Customer; onDone
 /** A button that opens the form in place. */
 export function CustomerFormToggle({ customer, label }: { customer?: Customer; label: string }) {
   const [open, setOpen] = useState(false);
-  if (!open) return <button type="button" className={customer ? 'btn-quiet' : 'btn-accent'} onClick={() => setOpen(true)}>{label}</button>;
+  if (!open)
+    return (
+      <button type="button" className={customer ? 'btn-quiet' : 'btn-accent'} onClick={() => setOpen(true)}>
+        {label}
+      </button>
+    );
   return (
     <div className="mb-6 w-full">
       <CustomerForm customer={customer} onDone={() => setOpen(false)} />

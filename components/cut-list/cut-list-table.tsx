@@ -19,16 +19,35 @@ const DRAFT = 'draft';
 
 type Draft = Record<TextColumn, string> & { grain: GrainRule };
 const emptyDraft = (carry?: Partial<Draft>): Draft => ({
-  label: '', quantity: '1', lengthMm: '', widthMm: '', thicknessMm: carry?.thicknessMm ?? '', material: carry?.material ?? '', grain: carry?.grain ?? 'along-length', jointAllowanceMm: '', notes: '',
+  label: '',
+  quantity: '1',
+  lengthMm: '',
+  widthMm: '',
+  thicknessMm: carry?.thicknessMm ?? '',
+  material: carry?.material ?? '',
+  grain: carry?.grain ?? 'along-length',
+  jointAllowanceMm: '',
+  notes: '',
 });
-
 
 /**
  * The cut list as a spreadsheet: every cell is typed into and saved when left (Enter, Tab, arrows or a click
  * elsewhere); arrows and Enter move like a spreadsheet; the last row adds a part. Drawer-schedule rows show their
  * sizes read-only.
  */
-export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId: string; parts: ListedPart[]; offers: StockOffer[]; units: ShopUnits; canWrite: boolean }) {
+export function CutListTable({
+  jobId,
+  parts,
+  offers,
+  units,
+  canWrite,
+}: {
+  jobId: string;
+  parts: ListedPart[];
+  offers: StockOffer[];
+  units: ShopUnits;
+  canWrite: boolean;
+}) {
   const { update, add, remove } = usePartMutations(jobId);
   const [errors, setErrors] = useState<CellErrors>({});
   const [draft, setDraft] = useState<Draft>(() => emptyDraft());
@@ -119,7 +138,11 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
     if (!ok) return;
     values.thicknessMm = snapThickness(values.material!, values.thicknessMm!, offers);
     add.mutate(values as PartInput, {
-      onError: (e) => setError(errorKey(DRAFT, 'label'), e instanceof ApiError ? Object.values(e.fields).flat()[0] ?? e.message : 'Not saved: the connection failed.'),
+      onError: (e) =>
+        setError(
+          errorKey(DRAFT, 'label'),
+          e instanceof ApiError ? (Object.values(e.fields).flat()[0] ?? e.message) : 'Not saved: the connection failed.',
+        ),
     });
     // Material, thickness and grain carry over: rows of one material are usually typed together.
     setDraft(emptyDraft(draft));
@@ -160,7 +183,8 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
     }
   }
 
-  const scheduleOwned = (part: ListedPart, column: Column) => part.drawerScheduleId !== null && (SCHEDULE_OWNED_FIELDS as readonly string[]).includes(column);
+  const scheduleOwned = (part: ListedPart, column: Column) =>
+    part.drawerScheduleId !== null && (SCHEDULE_OWNED_FIELDS as readonly string[]).includes(column);
 
   return (
     <div className="card relative overflow-x-auto">
@@ -185,32 +209,48 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                 {COLUMN_TITLES[c]}
               </th>
             ))}
-            {canWrite && <th><span className="sr-only">Row actions</span></th>}
+            {canWrite && (
+              <th>
+                <span className="sr-only">Row actions</span>
+              </th>
+            )}
           </tr>
         </thead>
         <tbody>
           {parts.map((part, r) => (
             <tr key={part.id} className={part.drawerScheduleId ? 'bg-oak-wash/40' : undefined} data-testid="cut-list-row">
-              <td className="text-xs text-graphite-mute">
-                {r + 1}
-              </td>
+              <td className="text-xs text-graphite-mute">{r + 1}</td>
               {COLUMNS.map((column, c) => {
                 const readOnly = !canWrite || scheduleOwned(part, column) || part.id.startsWith('pending-');
                 const error = errors[errorKey(part.id, column)];
                 if (column === 'grain')
                   return (
                     <td key={column}>
-                      <GrainToggle value={part.grain} r={r} c={c} disabled={readOnly} onChange={(grain) => update.mutate({ id: part.id, patch: { grain } })} />
+                      <GrainToggle
+                        value={part.grain}
+                        r={r}
+                        c={c}
+                        disabled={readOnly}
+                        onChange={(grain) => update.mutate({ id: part.id, patch: { grain } })}
+                      />
                     </td>
                   );
                 const warning = column === 'material' ? stockMatchWarning(part, offers, units) : null;
                 return (
                   <td key={column} className={isLengthColumn(column) || column === 'quantity' ? 'num' : undefined}>
                     {readOnly ? (
-                      <span tabIndex={0} data-r={r} data-c={c} className={`block rounded px-1 py-0.5 focus:bg-paper-deep ${isLengthColumn(column) || column === 'quantity' ? 'whitespace-nowrap' : ''}`}>
+                      <span
+                        tabIndex={0}
+                        data-r={r}
+                        data-c={c}
+                        className={`block rounded px-1 py-0.5 focus:bg-paper-deep ${isLengthColumn(column) || column === 'quantity' ? 'whitespace-nowrap' : ''}`}
+                      >
                         {cellText(part, column, units) || '—'}
                         {column === 'label' && part.schedule && (
-                          <Link href={`/jobs/${jobId}/drawers#schedule-${part.drawerScheduleId}`} className="ml-2 whitespace-nowrap rounded-full bg-oak-wash px-2 text-xs font-medium text-oak-deep no-underline">
+                          <Link
+                            href={`/jobs/${jobId}/drawers#schedule-${part.drawerScheduleId}`}
+                            className="ml-2 whitespace-nowrap rounded-full bg-oak-wash px-2 text-xs font-medium text-oak-deep no-underline"
+                          >
                             drawer schedule
                           </Link>
                         )}
@@ -224,7 +264,13 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                         initial={cellText(part, column, units)}
                         error={error}
                         label={`${COLUMN_TITLES[column]}, row ${r + 1}`}
-                        list={column === 'material' ? 'cut-list-materials' : column === 'thicknessMm' ? `cut-list-thickness-${slug(part.material)}` : undefined}
+                        list={
+                          column === 'material'
+                            ? 'cut-list-materials'
+                            : column === 'thicknessMm'
+                              ? `cut-list-thickness-${slug(part.material)}`
+                              : undefined
+                        }
                         onCommit={(text) => commitCell(part, column, text)}
                       />
                     )}
@@ -238,11 +284,23 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
               })}
               {canWrite && (
                 <td className="whitespace-nowrap">
-                  <button type="button" className="px-1 text-xs text-graphite-mute hover:text-graphite" aria-label={`Duplicate row ${r + 1}`} disabled={isPending(part)} onClick={() => add.mutate(duplicateOf(part))}>
+                  <button
+                    type="button"
+                    className="px-1 text-xs text-graphite-mute hover:text-graphite"
+                    aria-label={`Duplicate row ${r + 1}`}
+                    disabled={isPending(part)}
+                    onClick={() => add.mutate(duplicateOf(part))}
+                  >
                     Copy
                   </button>
                   {part.drawerScheduleId ? null : (
-                    <button type="button" className="px-1 text-xs text-brick hover:underline" aria-label={`Delete row ${r + 1}`} disabled={isPending(part)} onClick={() => deleteRow(part, r + 1)}>
+                    <button
+                      type="button"
+                      className="px-1 text-xs text-brick hover:underline"
+                      aria-label={`Delete row ${r + 1}`}
+                      disabled={isPending(part)}
+                      onClick={() => deleteRow(part, r + 1)}
+                    >
                       Delete
                     </button>
                   )}
@@ -269,11 +327,21 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
                       style={{ minWidth: cellWidth(column, draft[column]) }}
                       value={draft[column]}
                       placeholder={column === 'label' ? 'New part…' : ''}
-                      list={column === 'material' ? 'cut-list-materials' : column === 'thicknessMm' ? `cut-list-thickness-${slug(draft.material)}` : undefined}
+                      list={
+                        column === 'material'
+                          ? 'cut-list-materials'
+                          : column === 'thicknessMm'
+                            ? `cut-list-thickness-${slug(draft.material)}`
+                            : undefined
+                      }
                       onFocus={(e) => e.currentTarget.select()}
                       onChange={(e) => setDraft((d) => ({ ...d, [column]: e.target.value }))}
                     />
-                    {errors[errorKey(DRAFT, column)] && <span className="mt-0.5 block text-xs text-brick" role="alert">{errors[errorKey(DRAFT, column)]}</span>}
+                    {errors[errorKey(DRAFT, column)] && (
+                      <span className="mt-0.5 block text-xs text-brick" role="alert">
+                        {errors[errorKey(DRAFT, column)]}
+                      </span>
+                    )}
                   </td>
                 ),
               )}
@@ -288,10 +356,12 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
         <tfoot>
           <tr className="bg-paper-deep text-sm">
             <td colSpan={COLUMNS.length + 2} className="px-3 py-2" data-testid="cut-list-totals">
-              <strong className="font-semibold">{totals.pieces.toLocaleString('en-US')}</strong> pieces in {totals.rows} rows · {formatArea(totals.areaMm2, units)} of faces
+              <strong className="font-semibold">{totals.pieces.toLocaleString('en-US')}</strong> pieces in {totals.rows} rows ·{' '}
+              {formatArea(totals.areaMm2, units)} of faces
               {totals.solidPieces > 0 && (
                 <>
-                  {' '}· <strong className="font-semibold">{totals.boardFeet.toFixed(2)} bf</strong> net of solid wood ({totals.solidPieces} pieces)
+                  {' '}
+                  · <strong className="font-semibold">{totals.boardFeet.toFixed(2)} bf</strong> net of solid wood ({totals.solidPieces} pieces)
                 </>
               )}
             </td>
@@ -304,13 +374,24 @@ export function CutListTable({ jobId, parts, offers, units, canWrite }: { jobId:
         </p>
       )}
       {lastDeleted && (
-        <div role="status" className="flex flex-wrap items-center gap-3 border-t border-paper-edge bg-oak-wash px-3 py-2 text-sm" data-testid="cut-list-undo">
+        <div
+          role="status"
+          className="flex flex-wrap items-center gap-3 border-t border-paper-edge bg-oak-wash px-3 py-2 text-sm"
+          data-testid="cut-list-undo"
+        >
           <span>
             Deleted row {lastDeleted.row}, “{lastDeleted.part.label}”{deleted.length > 1 ? ` (${deleted.length} deletions to undo)` : ''}.
           </span>
-          <button type="button" className="btn-quiet" onClick={undoDelete}>Undo</button>
+          <button type="button" className="btn-quiet" onClick={undoDelete}>
+            Undo
+          </button>
           <span className="text-graphite-mute">or press Ctrl+Z (⌘Z on a Mac)</span>
-          <button type="button" className="ml-auto text-graphite-mute hover:text-graphite" onClick={() => setDeleted([])} aria-label="Keep the deletions and hide this">
+          <button
+            type="button"
+            className="ml-auto text-graphite-mute hover:text-graphite"
+            onClick={() => setDeleted([])}
+            aria-label="Keep the deletions and hide this"
+          >
             Dismiss
           </button>
         </div>
@@ -325,10 +406,24 @@ const isPending = (part: ListedPart) => part.id.startsWith(PENDING_ROW);
 /** How many deletions the cut list can take back. */
 const UNDO_DEPTH = 20;
 
-const slug = (s: string) => s.trim().toLowerCase().replace(/[^a-z0-9]+/g, '-');
+const slug = (s: string) =>
+  s
+    .trim()
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-');
 
 /** Cell widths in characters, so sizes like 1′ 7-3/4″ and names like "Baltic birch" show whole. */
-const CELL_CH: Record<Column, number> = { label: 12, quantity: 3, lengthMm: 8, widthMm: 8, thicknessMm: 8, material: 11, grain: 8, jointAllowanceMm: 6, notes: 10 };
+const CELL_CH: Record<Column, number> = {
+  label: 12,
+  quantity: 3,
+  lengthMm: 8,
+  widthMm: 8,
+  thicknessMm: 8,
+  material: 11,
+  grain: 8,
+  jointAllowanceMm: 6,
+  notes: 10,
+};
 
 /**
  * A cell's box is as wide as its text (so a length keeps its ″ and a note shows whole), never narrower than the
@@ -344,10 +439,38 @@ const cellInputClass = (invalid: boolean, numeric: boolean) =>
   `w-full rounded border bg-transparent px-1 py-0.5 text-sm outline-none focus:border-oak focus:bg-white focus:ring-1 focus:ring-oak-light ${numeric ? 'text-right font-mono' : ''} ${invalid ? 'border-brick bg-brick-wash' : 'border-transparent'}`;
 
 function duplicateOf(p: ListedPart): PartInput {
-  return { label: p.label, quantity: p.quantity, lengthMm: p.lengthMm, widthMm: p.widthMm, thicknessMm: p.thicknessMm, material: p.material, grain: p.grain, jointAllowanceMm: p.jointAllowanceMm, notes: p.notes };
+  return {
+    label: p.label,
+    quantity: p.quantity,
+    lengthMm: p.lengthMm,
+    widthMm: p.widthMm,
+    thicknessMm: p.thicknessMm,
+    material: p.material,
+    grain: p.grain,
+    jointAllowanceMm: p.jointAllowanceMm,
+    notes: p.notes,
+  };
 }
 
-function EditCell({ r, c, column, initial, error, label, list, onCommit }: { r: number; c: number; column: Column; initial: string; error?: string; label: string; list?: string; onCommit: (text: string) => void }) {
+function EditCell({
+  r,
+  c,
+  column,
+  initial,
+  error,
+  label,
+  list,
+  onCommit,
+}: {
+  r: number;
+  c: number;
+  column: Column;
+  initial: string;
+  error?: string;
+  label: string;
+  list?: string;
+  onCommit: (text: string) => void;
+}) {
   const [text, setText] = useState(initial);
   const numeric = isLengthColumn(column) || column === 'quantity';
   return (
@@ -369,12 +492,28 @@ function EditCell({ r, c, column, initial, error, label, list, onCommit }: { r: 
           if (e.key === 'Escape') setText(initial);
         }}
       />
-      {error && <span className="mt-0.5 block text-left text-xs font-sans text-brick" role="alert">{error}</span>}
+      {error && (
+        <span className="mt-0.5 block text-left text-xs font-sans text-brick" role="alert">
+          {error}
+        </span>
+      )}
     </>
   );
 }
 
-function GrainToggle({ value, r, c, disabled, onChange }: { value: GrainRule; r: number; c: number; disabled?: boolean; onChange: (g: GrainRule) => void }) {
+function GrainToggle({
+  value,
+  r,
+  c,
+  disabled,
+  onChange,
+}: {
+  value: GrainRule;
+  r: number;
+  c: number;
+  disabled?: boolean;
+  onChange: (g: GrainRule) => void;
+}) {
   const along = value === 'along-length';
   return (
     <button

@@ -29,7 +29,17 @@ const PREVIEW_ROWS_SHOWN = 8;
  * detected or chosen; the server checks every row and nothing is written until the person imports — all rows when
  * all are valid, or explicitly only the valid ones.
  */
-export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: string; shopUnit: LengthUnit; onClose: () => void; onImported: (message: string) => void }) {
+export function UploadPanel({
+  jobId,
+  shopUnit,
+  onClose,
+  onImported,
+}: {
+  jobId: string;
+  shopUnit: LengthUnit;
+  onClose: () => void;
+  onImported: (message: string) => void;
+}) {
   const qc = useQueryClient();
   const [fileError, setFileError] = useState<string | null>(null);
   const [file, setFile] = useState<{ name: string; grid: string[][] } | null>(null);
@@ -43,7 +53,9 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
     setFileError(null);
     if (!f) return;
     if (f.size > UPLOAD_LIMITS.maxFileBytes) {
-      setFileError(`“${f.name}” is ${Math.round(f.size / 1024)} KB; the limit is ${UPLOAD_LIMITS.maxFileBytes / 1024} KB. Split it into smaller files.`);
+      setFileError(
+        `“${f.name}” is ${Math.round(f.size / 1024)} KB; the limit is ${UPLOAD_LIMITS.maxFileBytes / 1024} KB. Split it into smaller files.`,
+      );
       return;
     }
     const read = await readCutListFileInWorker({ name: f.name, bytes: await f.arrayBuffer() });
@@ -75,7 +87,11 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
   });
 
   const importRows = useMutation({
-    mutationFn: (mode: 'all' | 'valid-only') => api<{ imported: number; skipped: number; skippedLines: number[] }>(`/api/jobs/${jobId}/cut-list/import`, { method: 'POST', body: { ...body, mode } }),
+    mutationFn: (mode: 'all' | 'valid-only') =>
+      api<{ imported: number; skipped: number; skippedLines: number[] }>(`/api/jobs/${jobId}/cut-list/import`, {
+        method: 'POST',
+        body: { ...body, mode },
+      }),
     onSuccess: (res) => {
       qc.invalidateQueries({ queryKey: partsKey(jobId) });
       onImported(importSummary(res, file?.name ?? 'the file'));
@@ -83,22 +99,47 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
   });
 
   const bad = preview.data?.rows.filter((r): r is Extract<UploadRowResult, { ok: false }> => !r.ok) ?? [];
-  const previewError = preview.error instanceof ApiError ? [preview.error.message, ...Object.values(preview.error.fields).flat()] : preview.error ? [preview.error.message] : [];
+  const previewError =
+    preview.error instanceof ApiError
+      ? [preview.error.message, ...Object.values(preview.error.fields).flat()]
+      : preview.error
+        ? [preview.error.message]
+        : [];
   const widest = file ? Math.max(...file.grid.map((r) => r.length)) : 0;
 
   return (
     <section aria-labelledby="upload-title" className="card mb-4 p-5">
       <div className="mb-3 flex items-center justify-between">
-        <h3 id="upload-title" className="font-semibold">Upload a cut list</h3>
-        <button type="button" className="btn-quiet" onClick={onClose}>Close</button>
+        <h3 id="upload-title" className="font-semibold">
+          Upload a cut list
+        </h3>
+        <button type="button" className="btn-quiet" onClick={onClose}>
+          Close
+        </button>
       </div>
       <p className="mb-3 text-sm text-graphite-mute">
-        CSV or Excel (.xlsx), up to {UPLOAD_LIMITS.maxFileBytes / 1024} KB, {UPLOAD_LIMITS.maxRows.toLocaleString('en-US')} rows and {UPLOAD_LIMITS.maxCellLength} characters a cell. Nothing is added until you import.{' '}
-        <a href={`/templates/cut-list-${shopUnit === 'in' ? 'imperial' : 'metric'}.csv`} download>Download the template</a>.
+        CSV or Excel (.xlsx), up to {UPLOAD_LIMITS.maxFileBytes / 1024} KB, {UPLOAD_LIMITS.maxRows.toLocaleString('en-US')} rows and{' '}
+        {UPLOAD_LIMITS.maxCellLength} characters a cell. Nothing is added until you import.{' '}
+        <a href={`/templates/cut-list-${shopUnit === 'in' ? 'imperial' : 'metric'}.csv`} download>
+          Download the template
+        </a>
+        .
       </p>
-      <label className="field-label" htmlFor="cut-list-file">File</label>
-      <input id="cut-list-file" type="file" accept=".csv,.txt,.xlsx,text/csv,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet" onChange={(e) => choose(e.target.files?.[0])} className="text-sm" />
-      {fileError && <p role="alert" className="field-error">{fileError}</p>}
+      <label className="field-label" htmlFor="cut-list-file">
+        File
+      </label>
+      <input
+        id="cut-list-file"
+        type="file"
+        accept=".csv,.txt,.xlsx,text/csv,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet"
+        onChange={(e) => choose(e.target.files?.[0])}
+        className="text-sm"
+      />
+      {fileError && (
+        <p role="alert" className="field-error">
+          {fileError}
+        </p>
+      )}
 
       {file && upload && (
         <div className="mt-4 space-y-4">
@@ -107,7 +148,9 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
               <input type="checkbox" checked={hasHeader} onChange={(e) => setHasHeader(e.target.checked)} /> First row is a header
             </label>
             <div>
-              <label htmlFor="upload-unit" className="field-label">Bare numbers are</label>
+              <label htmlFor="upload-unit" className="field-label">
+                Bare numbers are
+              </label>
               <select id="upload-unit" className="field-input" value={unit} onChange={(e) => setUnit(e.target.value as LengthUnit)}>
                 <option value="in">inches</option>
                 <option value="mm">millimetres</option>
@@ -123,10 +166,17 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
                   <th>Row</th>
                   {Array.from({ length: widest }, (_, i) => (
                     <th key={i}>
-                      <select aria-label={`Column ${i + 1} holds`} className="rounded border border-paper-edge bg-white px-1 py-0.5 text-xs normal-case" value={mapping[i] ?? ''} onChange={(e) => setMapping((m) => setColumn(m, i, (e.target.value || null) as CutListField | null, widest))}>
+                      <select
+                        aria-label={`Column ${i + 1} holds`}
+                        className="rounded border border-paper-edge bg-white px-1 py-0.5 text-xs normal-case"
+                        value={mapping[i] ?? ''}
+                        onChange={(e) => setMapping((m) => setColumn(m, i, (e.target.value || null) as CutListField | null, widest))}
+                      >
                         <option value="">(skip)</option>
                         {CUT_LIST_FIELDS.map((f) => (
-                          <option key={f} value={f}>{CUT_LIST_FIELD_LABELS[f]}</option>
+                          <option key={f} value={f}>
+                            {CUT_LIST_FIELD_LABELS[f]}
+                          </option>
                         ))}
                       </select>
                     </th>
@@ -138,26 +188,37 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
                   <tr key={r} className={hasHeader && r === 0 ? 'text-graphite-mute italic' : undefined}>
                     <td className="text-xs text-graphite-mute">{r + 1}</td>
                     {Array.from({ length: widest }, (_, i) => (
-                      <td key={i} className={mapping[i] ? '' : 'text-graphite-faint'}>{row[i] ?? ''}</td>
+                      <td key={i} className={mapping[i] ? '' : 'text-graphite-faint'}>
+                        {row[i] ?? ''}
+                      </td>
                     ))}
                   </tr>
                 ))}
               </tbody>
             </table>
-            {file.grid.length > PREVIEW_ROWS_SHOWN + 1 && <p className="mt-1 text-xs text-graphite-mute">…and {countOf(file.grid.length - PREVIEW_ROWS_SHOWN - 1, 'more row')}.</p>}
+            {file.grid.length > PREVIEW_ROWS_SHOWN + 1 && (
+              <p className="mt-1 text-xs text-graphite-mute">…and {countOf(file.grid.length - PREVIEW_ROWS_SHOWN - 1, 'more row')}.</p>
+            )}
           </div>
 
           <div aria-live="polite">
-            {preview.isFetching && <p role="status" className="text-sm text-graphite-mute">Checking every row…</p>}
+            {preview.isFetching && (
+              <p role="status" className="text-sm text-graphite-mute">
+                Checking every row…
+              </p>
+            )}
             {previewError.length > 0 && (
               <ul role="alert" className="rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">
-                {previewError.map((m) => <li key={m}>{m}</li>)}
+                {previewError.map((m) => (
+                  <li key={m}>{m}</li>
+                ))}
               </ul>
             )}
             {preview.data && (
               <div className="space-y-3">
                 <p className="text-sm">
-                  <strong>{countOf(preview.data.validCount, 'row')}</strong> ready · <strong className={preview.data.invalidCount ? 'text-brick' : ''}>{countOf(preview.data.invalidCount, 'row')}</strong> with problems
+                  <strong>{countOf(preview.data.validCount, 'row')}</strong> ready ·{' '}
+                  <strong className={preview.data.invalidCount ? 'text-brick' : ''}>{countOf(preview.data.invalidCount, 'row')}</strong> with problems
                   {upload.blankRows > 0 && <> · {countOf(upload.blankRows, 'blank row')} left out</>}
                 </p>
                 {bad.length > 0 && (
@@ -177,23 +238,36 @@ export function UploadPanel({ jobId, shopUnit, onClose, onImported }: { jobId: s
                     <h4 className="mb-1 text-sm font-semibold text-amber">Not in the stock room (imported all the same)</h4>
                     <ul className="space-y-1 text-sm">
                       {preview.data.warnings.map((w) => (
-                        <li key={w.line}><span className="font-medium">Row {w.line}:</span> {w.message}</li>
+                        <li key={w.line}>
+                          <span className="font-medium">Row {w.line}:</span> {w.message}
+                        </li>
                       ))}
                     </ul>
                   </div>
                 )}
-                {importRows.error && <p role="alert" className="field-error">{importRows.error.message}</p>}
+                {importRows.error && (
+                  <p role="alert" className="field-error">
+                    {importRows.error.message}
+                  </p>
+                )}
                 <div className="flex flex-wrap gap-2">
                   {preview.data.invalidCount === 0 ? (
                     <button type="button" className="btn-accent" disabled={importRows.isPending} onClick={() => importRows.mutate('all')}>
                       Import {countOf(preview.data.validCount, 'row')}
                     </button>
                   ) : (
-                    <button type="button" className="btn-accent" disabled={importRows.isPending || preview.data.validCount === 0} onClick={() => importRows.mutate('valid-only')}>
+                    <button
+                      type="button"
+                      className="btn-accent"
+                      disabled={importRows.isPending || preview.data.validCount === 0}
+                      onClick={() => importRows.mutate('valid-only')}
+                    >
                       {preview.data.validCount === 1 ? 'Import only the valid row' : `Import only the ${preview.data.validCount} valid rows`}
                     </button>
                   )}
-                  <button type="button" className="btn-quiet" onClick={onClose}>Cancel</button>
+                  <button type="button" className="btn-quiet" onClick={onClose}>
+                    Cancel
+                  </button>
                 </div>
               </div>
             )}

@@ -50,7 +50,16 @@ export function usePartMutations(jobId: string) {
     mutationFn: (input: PartInput) => api<Part>(`/api/jobs/${jobId}/parts`, { method: 'POST', body: input }),
     onMutate: async (input) => {
       const context = await snapshot();
-      const temp: ListedPart = { ...input, id: `${PENDING_ROW}${++pendingRows}`, jobId, drawerScheduleId: null, role: null, machining: [], sort: input.sort ?? Number.MAX_SAFE_INTEGER, schedule: null };
+      const temp: ListedPart = {
+        ...input,
+        id: `${PENDING_ROW}${++pendingRows}`,
+        jobId,
+        drawerScheduleId: null,
+        role: null,
+        machining: [],
+        sort: input.sort ?? Number.MAX_SAFE_INTEGER,
+        schedule: null,
+      };
       // A row put back by undo shows at its old place at once; a new row at the end.
       qc.setQueryData<ListedPart[]>(key, (list) => [...(list ?? []), temp].sort((a, b) => a.sort - b.sort));
       return context;

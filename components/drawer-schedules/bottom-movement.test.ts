@@ -5,7 +5,12 @@ import { bottomMovementWarning, speciesOf } from './bottom-movement';
 
 const UNITS = { system: 'imperial', precision: 16, feet: false } as const;
 const schedule = (bottom: object) =>
-  drawerScheduleSchema.parse({ label: 'Test', quantity: 1, size: { from: 'box', widthMm: inches(14), heightMm: inches(5), depthMm: inches(20) }, bottom });
+  drawerScheduleSchema.parse({
+    label: 'Test',
+    quantity: 1,
+    size: { from: 'box', widthMm: inches(14), heightMm: inches(5), depthMm: inches(20) },
+    bottom,
+  });
 
 describe('solid-wood drawer bottoms', () => {
   test.each([

@@ -20,7 +20,9 @@ const SHEET_WORDS = /ply|mdf|particle|hardboard|veneer|melamine|board stock|osb/
 export function speciesOf(material: string): { species: SpeciesId; cut: SawnCut } | null {
   if (SHEET_WORDS.test(material)) return null;
   const lower = material.toLowerCase();
-  const species = SPECIES_IDS.find((id) => lower.includes(SPECIES[id].name)) ?? SPECIES_IDS.find((id) => UNIQUE_LAST_WORD.has(id) && new RegExp(`\\b${lastWord(id)}\\b`).test(lower));
+  const species =
+    SPECIES_IDS.find((id) => lower.includes(SPECIES[id].name)) ??
+    SPECIES_IDS.find((id) => UNIQUE_LAST_WORD.has(id) && new RegExp(`\\b${lastWord(id)}\\b`).test(lower));
   if (!species) return null;
   return { species, cut: /quarter/.test(lower) ? 'quartersawn' : /\brift/.test(lower) ? 'riftsawn' : 'flatsawn' };
 }
@@ -35,7 +37,15 @@ export function bottomMovementWarning(schedule: DrawerSchedule, bottomWidthMm: n
   if (!solid) return null;
   const play = schedule.bottom.mount === 'groove' ? schedule.bottom.groove.clearanceMm : 0;
   return movementWarning(
-    { species: solid.species, cut: solid.cut, widthMm: bottomWidthMm, mcFrom: INDOOR_MC.from, mcTo: INDOOR_MC.to, fixedAcrossWidth: true, ...(play > 0 ? { thresholdMm: play } : {}) },
+    {
+      species: solid.species,
+      cut: solid.cut,
+      widthMm: bottomWidthMm,
+      mcFrom: INDOOR_MC.from,
+      mcTo: INDOOR_MC.to,
+      fixedAcrossWidth: true,
+      ...(play > 0 ? { thresholdMm: play } : {}),
+    },
     units,
   );
 }

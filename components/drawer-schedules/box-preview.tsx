@@ -28,21 +28,50 @@ export function BoxPreview({ box, t, units }: { box: SizedBox; t: { front: numbe
   const viewW = frontX + W + right;
   const viewH = Math.max(D, H) + pad + LABEL + 16;
   return (
-    <svg role="img" aria-label={`Box ${width} wide, ${height} high, ${depth} deep`} viewBox={`0 0 ${viewW} ${viewH}`} className="h-auto w-full max-w-xl" data-testid="box-preview">
+    <svg
+      role="img"
+      aria-label={`Box ${width} wide, ${height} high, ${depth} deep`}
+      viewBox={`0 0 ${viewW} ${viewH}`}
+      className="h-auto w-full max-w-xl"
+      data-testid="box-preview"
+    >
       <g transform={`translate(${pad + side},${pad})`}>
-        <text x={0} y={-10} className="fill-graphite-mute" fontSize={LABEL}>Plan</text>
+        <text x={0} y={-10} className="fill-graphite-mute" fontSize={LABEL}>
+          Plan
+        </text>
         <rect width={W} height={D} className="fill-oak-wash stroke-oak-deep" strokeWidth={1} />
-        <rect x={t.side * scale} y={t.back * scale} width={W - 2 * t.side * scale} height={D - (t.front + t.back) * scale} className="fill-white stroke-oak" strokeWidth={0.75} />
-        <text x={W / 2} y={D + LABEL + 4} textAnchor="middle" className="fill-graphite font-mono" fontSize={LABEL}>{width}</text>
-        <text x={W + 8} y={D / 2} className="fill-graphite font-mono" fontSize={LABEL} dominantBaseline="middle">{depth}</text>
-        {D > LABEL + 4 && <text x={W / 2} y={D - 4} textAnchor="middle" className="fill-graphite-mute" fontSize={LABEL * 0.8}>front</text>}
+        <rect
+          x={t.side * scale}
+          y={t.back * scale}
+          width={W - 2 * t.side * scale}
+          height={D - (t.front + t.back) * scale}
+          className="fill-white stroke-oak"
+          strokeWidth={0.75}
+        />
+        <text x={W / 2} y={D + LABEL + 4} textAnchor="middle" className="fill-graphite font-mono" fontSize={LABEL}>
+          {width}
+        </text>
+        <text x={W + 8} y={D / 2} className="fill-graphite font-mono" fontSize={LABEL} dominantBaseline="middle">
+          {depth}
+        </text>
+        {D > LABEL + 4 && (
+          <text x={W / 2} y={D - 4} textAnchor="middle" className="fill-graphite-mute" fontSize={LABEL * 0.8}>
+            front
+          </text>
+        )}
       </g>
       <g transform={`translate(${frontX},${pad})`}>
-        <text x={0} y={-10} className="fill-graphite-mute" fontSize={LABEL}>Front</text>
+        <text x={0} y={-10} className="fill-graphite-mute" fontSize={LABEL}>
+          Front
+        </text>
         <rect width={W} height={H} className="fill-oak-wash stroke-oak-deep" strokeWidth={1} />
         {wall > 0 && <rect y={H - wall * scale} width={W} height={wall * scale} className="fill-oak-light stroke-oak-deep" strokeWidth={0.5} />}
-        <text x={W / 2} y={H + LABEL + 4} textAnchor="middle" className="fill-graphite font-mono" fontSize={LABEL}>{width}</text>
-        <text x={W + 8} y={H / 2} className="fill-graphite font-mono" fontSize={LABEL} dominantBaseline="middle">{height}</text>
+        <text x={W / 2} y={H + LABEL + 4} textAnchor="middle" className="fill-graphite font-mono" fontSize={LABEL}>
+          {width}
+        </text>
+        <text x={W + 8} y={H / 2} className="fill-graphite font-mono" fontSize={LABEL} dominantBaseline="middle">
+          {height}
+        </text>
       </g>
     </svg>
   );

@@ -40,13 +40,24 @@ export function DrawerSchedulesSection({ jobId, units, canWrite }: { jobId: stri
   return (
     <section aria-labelledby="drawer-schedules">
       <div className="mb-3 flex items-center">
-        <h2 id="drawer-schedules" className="mr-auto">Drawer schedules</h2>
-        {canWrite && editing === null && <button type="button" className="btn-accent" onClick={() => setEditing('new')}>New drawer schedule</button>}
+        <h2 id="drawer-schedules" className="mr-auto">
+          Drawer schedules
+        </h2>
+        {canWrite && editing === null && (
+          <button type="button" className="btn-accent" onClick={() => setEditing('new')}>
+            New drawer schedule
+          </button>
+        )}
       </div>
       <p className="mb-4 max-w-3xl text-sm text-graphite-mute">
-        A schedule is a set of identical drawer boxes. Kerfwise sizes every part from the opening, slides, joint and stock, and keeps its rows in the cut list in step when the schedule changes.
+        A schedule is a set of identical drawer boxes. Kerfwise sizes every part from the opening, slides, joint and stock, and keeps its rows in the
+        cut list in step when the schedule changes.
       </p>
-      {editing !== null && (materials.isPending || slideModels.isPending) && <p role="status" className="text-sm text-graphite-mute">Reading the stock room and slide models…</p>}
+      {editing !== null && (materials.isPending || slideModels.isPending) && (
+        <p role="status" className="text-sm text-graphite-mute">
+          Reading the stock room and slide models…
+        </p>
+      )}
       {editing !== null && !materials.isPending && !slideModels.isPending && (
         <ScheduleForm
           key={editing === 'new' ? 'new' : editing.id}
@@ -59,11 +70,25 @@ export function DrawerSchedulesSection({ jobId, units, canWrite }: { jobId: stri
           onDone={() => setEditing(null)}
         />
       )}
-      {schedules.isPending && <p role="status" className="text-sm text-graphite-mute">Loading drawer schedules…</p>}
-      {schedules.isError && <p role="alert" className="rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">Could not load drawer schedules: {schedules.error.message}</p>}
-      {remove.isError && <p role="alert" className="field-error">{remove.error.message}</p>}
+      {schedules.isPending && (
+        <p role="status" className="text-sm text-graphite-mute">
+          Loading drawer schedules…
+        </p>
+      )}
+      {schedules.isError && (
+        <p role="alert" className="rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">
+          Could not load drawer schedules: {schedules.error.message}
+        </p>
+      )}
+      {remove.isError && (
+        <p role="alert" className="field-error">
+          {remove.error.message}
+        </p>
+      )}
       {schedules.isSuccess && schedules.data.length === 0 && editing === null && (
-        <EmptyState title="No drawer schedules yet.">{canWrite ? 'Add one to size a set of drawer boxes and put their parts in the cut list.' : 'An estimator adds them.'}</EmptyState>
+        <EmptyState title="No drawer schedules yet.">
+          {canWrite ? 'Add one to size a set of drawer boxes and put their parts in the cut list.' : 'An estimator adds them.'}
+        </EmptyState>
       )}
       <ul className="grid gap-3 md:grid-cols-2">
         {schedules.data?.map((s) => (
@@ -72,13 +97,26 @@ export function DrawerSchedulesSection({ jobId, units, canWrite }: { jobId: stri
               <div className="mr-auto">
                 <p className="font-semibold">{s.label}</p>
                 <p className="text-sm text-graphite-mute">
-                  {s.input.quantity} × {s.input.size.from === 'opening' ? 'opening' : 'box'} {len(s.input.size.widthMm)} × {len(s.input.size.heightMm)} × {len(s.input.size.depthMm)} · {JOINT_NAMES[s.input.joint.method]} · {s.partRows} rows in the cut list
+                  {s.input.quantity} × {s.input.size.from === 'opening' ? 'opening' : 'box'} {len(s.input.size.widthMm)} ×{' '}
+                  {len(s.input.size.heightMm)} × {len(s.input.size.depthMm)} · {JOINT_NAMES[s.input.joint.method]} · {s.partRows} rows in the cut list
                 </p>
               </div>
               {canWrite && (
                 <>
-                  <button type="button" className="btn-quiet" onClick={() => setEditing(s)} aria-label={`Edit ${s.label}`}>Edit</button>
-                  <button type="button" className="btn-danger" disabled={remove.isPending} onClick={() => { if (window.confirm(`Delete “${s.label}” and its ${s.partRows} cut-list rows?`)) remove.mutate(s.id); }} aria-label={`Delete ${s.label}`}>Delete</button>
+                  <button type="button" className="btn-quiet" onClick={() => setEditing(s)} aria-label={`Edit ${s.label}`}>
+                    Edit
+                  </button>
+                  <button
+                    type="button"
+                    className="btn-danger"
+                    disabled={remove.isPending}
+                    onClick={() => {
+                      if (window.confirm(`Delete “${s.label}” and its ${s.partRows} cut-list rows?`)) remove.mutate(s.id);
+                    }}
+                    aria-label={`Delete ${s.label}`}
+                  >
+                    Delete
+                  </button>
                 </>
               )}
             </div>

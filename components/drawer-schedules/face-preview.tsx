@@ -17,7 +17,12 @@ export function FacePreview({ face, box, units }: { face: DrawerFace; box: Sized
   const w = widest * scale + 2 * pad;
   const h = tallest * scale + 2 * pad;
   // Every rectangle centred on the same point: the sketch shows widths and margins, not where the slides put the box.
-  const rect = (widthMm: number, heightMm: number) => ({ x: (w - widthMm * scale) / 2, y: (h - heightMm * scale) / 2, width: widthMm * scale, height: heightMm * scale });
+  const rect = (widthMm: number, heightMm: number) => ({
+    x: (w - widthMm * scale) / 2,
+    y: (h - heightMm * scale) / 2,
+    width: widthMm * scale,
+    height: heightMm * scale,
+  });
   const margin = face.sideMarginMm;
   const fit =
     margin === null
@@ -31,19 +36,30 @@ export function FacePreview({ face, box, units }: { face: DrawerFace; box: Sized
 
   return (
     <figure className="rounded-md border border-paper-edge bg-paper p-3" aria-label="The drawer’s front against its opening">
-      <svg role="img" aria-label={`${name} ${len(face.widthMm)} wide${opening ? ` in a ${len(opening.widthMm)} opening` : ''}`} viewBox={`0 0 ${w} ${h}`} className="h-auto w-full max-w-xs">
-        {opening && <rect {...rect(opening.widthMm, opening.heightMm)} className="fill-none stroke-graphite-mute" strokeWidth={1} strokeDasharray="5 3" />}
+      <svg
+        role="img"
+        aria-label={`${name} ${len(face.widthMm)} wide${opening ? ` in a ${len(opening.widthMm)} opening` : ''}`}
+        viewBox={`0 0 ${w} ${h}`}
+        className="h-auto w-full max-w-xs"
+      >
+        {opening && (
+          <rect {...rect(opening.widthMm, opening.heightMm)} className="fill-none stroke-graphite-mute" strokeWidth={1} strokeDasharray="5 3" />
+        )}
         <rect {...rect(box.widthMm, box.heightMm)} className="fill-none stroke-oak" strokeWidth={0.75} strokeDasharray="1.5 2" />
         <rect {...rect(face.widthMm, face.heightMm)} className="fill-oak-wash stroke-oak-deep" strokeWidth={1} fillOpacity={0.85} />
       </svg>
       <figcaption className="mt-2 text-sm">
         <dl className="grid grid-cols-[auto_minmax(0,1fr)] gap-x-3">
           <dt className="text-graphite-mute">{name}</dt>
-          <dd className="num text-left">{len(face.widthMm)} × {len(face.heightMm)}</dd>
+          <dd className="num text-left">
+            {len(face.widthMm)} × {len(face.heightMm)}
+          </dd>
           {opening && (
             <>
               <dt className="text-graphite-mute">Opening</dt>
-              <dd className="num text-left">{len(opening.widthMm)} × {len(opening.heightMm)}</dd>
+              <dd className="num text-left">
+                {len(opening.widthMm)} × {len(opening.heightMm)}
+              </dd>
             </>
           )}
           <dt className="text-graphite-mute">Fit</dt>

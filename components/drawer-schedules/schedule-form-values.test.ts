@@ -75,7 +75,14 @@ describe('one carcass sized in a metric shop and an imperial shop', () => {
   });
 
   test('a metric slide can be chosen in an imperial shop, and the choice is what is saved', () => {
-    const text = { ...emptySchedule(IMPERIAL), label: 'Euro slides', width: '564 mm', height: '200 mm', depth: '560 mm', slideSeries: 'metric' as const };
+    const text = {
+      ...emptySchedule(IMPERIAL),
+      label: 'Euro slides',
+      width: '564 mm',
+      height: '200 mm',
+      depth: '560 mm',
+      slideSeries: 'metric' as const,
+    };
     const input = toScheduleInput(scheduleFormSchema('in').parse(text));
     expect(input.slide).toEqual({ type: 'side-mount', series: 'metric' });
     const sized = sizeDrawerSchedule(drawerScheduleSchema.parse(input));
@@ -97,17 +104,31 @@ describe('slide models in the schedule form', () => {
     heightClearanceMm: inches(3 / 4),
     rearClearanceMm: inches(5 / 8),
   };
-  const text = { ...emptySchedule(IMPERIAL), label: 'Undermount bank', width: '15', height: '7', depth: '22', slideType: 'undermount' as const, sideThickness: '1/2' };
+  const text = {
+    ...emptySchedule(IMPERIAL),
+    label: 'Undermount bank',
+    width: '15',
+    height: '7',
+    depth: '22',
+    slideType: 'undermount' as const,
+    sideThickness: '1/2',
+  };
 
   test('undermount slides need a model: without one the form says where models come from', () => {
     const none = scheduleFormSchema('in', []).safeParse(text);
     expect(none.success).toBe(false);
-    expect(none.error?.issues.map((i) => [i.path.join('.'), i.message])).toEqual([['slideModel', expect.stringContaining('the owner adds them in Shop settings')]]);
-    expect(scheduleFormSchema('in', [MODEL]).safeParse(text).error?.issues[0].message).toBe('Choose the slide model: its maker’s rule sizes the box.');
+    expect(none.error?.issues.map((i) => [i.path.join('.'), i.message])).toEqual([
+      ['slideModel', expect.stringContaining('the owner adds them in Shop settings')],
+    ]);
+    expect(scheduleFormSchema('in', [MODEL]).safeParse(text).error?.issues[0].message).toBe(
+      'Choose the slide model: its maker’s rule sizes the box.',
+    );
   });
 
   test('the chosen model’s rule goes into the schedule and sizes the box: 15″ − 1⅝″ = 13⅜″ inside, 14⅜″ outside, 21″ long (invented model, worked by hand)', () => {
-    const input = toScheduleInput(scheduleFormSchema('in', [MODEL]).parse({ ...text, slideModel: MODEL.id }), [{ ...MODEL, updatedAt: '2026-01-01' } as typeof MODEL]);
+    const input = toScheduleInput(scheduleFormSchema('in', [MODEL]).parse({ ...text, slideModel: MODEL.id }), [
+      { ...MODEL, updatedAt: '2026-01-01' } as typeof MODEL,
+    ]);
     expect(input.slide).toEqual({ type: 'undermount', model: MODEL });
     const sized = sizeDrawerSchedule(drawerScheduleSchema.parse(input));
     if (!sized.ok) throw new Error(JSON.stringify(sized.errors));
@@ -116,7 +137,12 @@ describe('slide models in the schedule form', () => {
   });
 
   test('a schedule whose model was deleted since still offers the rule it was saved with', () => {
-    const saved = drawerScheduleSchema.parse({ label: 'Old', quantity: 1, size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 560 }, slide: { type: 'undermount', model: MODEL } });
+    const saved = drawerScheduleSchema.parse({
+      label: 'Old',
+      quantity: 1,
+      size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 560 },
+      slide: { type: 'undermount', model: MODEL },
+    });
     const choices = slideModelChoices([], saved);
     expect(choices).toEqual([{ ...MODEL, retired: true }]);
     expect(fromSchedule(saved, IMPERIAL).slideModel).toBe(MODEL.id);
@@ -127,21 +153,43 @@ describe('slide models in the schedule form', () => {
 
 describe('lipped fronts in the schedule form', () => {
   test('a blank overlay takes the shop’s own default: ⅜″ in an inch shop, 10 mm in a metric one (common practice, no source)', () => {
-    const inch = toScheduleInput(scheduleFormSchema('in').parse({ ...emptySchedule(IMPERIAL), label: 'L', width: '15', height: '7', depth: '22', frontStyle: 'lipped' }), [], 'in');
+    const inch = toScheduleInput(
+      scheduleFormSchema('in').parse({ ...emptySchedule(IMPERIAL), label: 'L', width: '15', height: '7', depth: '22', frontStyle: 'lipped' }),
+      [],
+      'in',
+    );
     expect(inch.front).toEqual({ style: 'lipped', fit: 'overlay', overlayMm: inches(3 / 8) });
-    const mm = toScheduleInput(scheduleFormSchema('mm').parse({ ...emptySchedule(METRIC), label: 'L', width: '564', height: '200', depth: '560', frontStyle: 'lipped' }), [], 'mm');
+    const mm = toScheduleInput(
+      scheduleFormSchema('mm').parse({ ...emptySchedule(METRIC), label: 'L', width: '564', height: '200', depth: '560', frontStyle: 'lipped' }),
+      [],
+      'mm',
+    );
     expect(mm.front).toEqual({ style: 'lipped', fit: 'overlay', overlayMm: 10 });
   });
 
   test('a reveal typed in is kept, and a saved lipped front reads back into the same fields', () => {
-    const text = { ...emptySchedule(IMPERIAL), label: 'L', width: '15', height: '7', depth: '22', frontStyle: 'lipped' as const, frontFit: 'reveal' as const, frontLipAmount: '1/8' };
+    const text = {
+      ...emptySchedule(IMPERIAL),
+      label: 'L',
+      width: '15',
+      height: '7',
+      depth: '22',
+      frontStyle: 'lipped' as const,
+      frontFit: 'reveal' as const,
+      frontLipAmount: '1/8',
+    };
     const saved = drawerScheduleSchema.parse(toScheduleInput(scheduleFormSchema('in').parse(text), [], 'in'));
     expect(saved.front).toEqual({ style: 'lipped', fit: 'reveal', revealMm: inches(1 / 8) });
     expect(fromSchedule(saved, IMPERIAL)).toMatchObject({ frontStyle: 'lipped', frontFit: 'reveal', frontLipAmount: '1/8″' });
   });
 
   test('a lipped front saved before fits existed reads back as a lip past the box', () => {
-    const old = drawerScheduleSchema.parse({ label: 'Old', quantity: 1, size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) }, front: { style: 'lipped', lipMm: inches(1 / 2) } });
+    const old = drawerScheduleSchema.parse({
+      label: 'Old',
+      quantity: 1,
+      size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) },
+      front: { style: 'lipped', lipMm: inches(1 / 2) },
+    });
     expect(old.front).toEqual({ style: 'lipped', fit: 'lip', lipMm: inches(1 / 2) });
     expect(fromSchedule(old, IMPERIAL)).toMatchObject({ frontFit: 'lip', frontLipAmount: '1/2″' });
   });

@@ -4,7 +4,16 @@ import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { snapThickness, type StockOffer } from '@/lib/cut-list/stock-match';
 import { formatLength } from '@/lib/units/format-length';
 import type { LengthUnit } from '@/lib/units/parse-length';
-import { JOINT_METHODS, LIP_FITS, SLIDE_SERIES_IDS, SLIDE_TYPES, type DrawerSchedule, type DrawerScheduleInput, type JointMethod, type SlideSeries } from '@/shared/schemas/drawer-schedule';
+import {
+  JOINT_METHODS,
+  LIP_FITS,
+  SLIDE_SERIES_IDS,
+  SLIDE_TYPES,
+  type DrawerSchedule,
+  type DrawerScheduleInput,
+  type JointMethod,
+  type SlideSeries,
+} from '@/shared/schemas/drawer-schedule';
 import type { SlideModelRule } from '@/shared/schemas/slide-model';
 import { lengthInput, type ShopUnits } from '@/shared/schemas/units';
 
@@ -12,8 +21,15 @@ import { lengthInput, type ShopUnits } from '@/shared/schemas/units';
  * The drawer schedule form is flat, with lengths as typed text in the shop's unit; `toScheduleInput` builds the
  * nested schedule `lib/joinery` sizes, and `FIELD_OF_PATH` puts the sizing errors back on the field that caused them.
  */
-export const JOINT_PARAM: Partial<Record<JointMethod, { key: string; label: string; defaultMm: number; byFront?: { mm: (frontMm: number) => number; rule: string } }>> = {
-  'lock-rabbet': { key: 'faceLeftMm', label: 'Face left outside the tongue', defaultMm: D.lockRabbetFaceLeft, byFront: { mm: lockRabbetFaceLeft, rule: 'half the front’s thickness less ⅛″' } },
+export const JOINT_PARAM: Partial<
+  Record<JointMethod, { key: string; label: string; defaultMm: number; byFront?: { mm: (frontMm: number) => number; rule: string } }>
+> = {
+  'lock-rabbet': {
+    key: 'faceLeftMm',
+    label: 'Face left outside the tongue',
+    defaultMm: D.lockRabbetFaceLeft,
+    byFront: { mm: lockRabbetFaceLeft, rule: 'half the front’s thickness less ⅛″' },
+  },
   'rabbet-and-dado': { key: 'dadoDepthMm', label: 'Dado depth', defaultMm: D.dadoDepth },
   'half-blind-dovetail': { key: 'lapMm', label: 'Lap', defaultMm: D.dovetailLap },
   'box-joint': { key: 'fingerWidthMm', label: 'Finger width', defaultMm: D.boxJointFinger },
@@ -32,32 +48,36 @@ export type SlideModelChoice = SlideModelRule & { id: string; /** Deleted from S
 export const scheduleFormSchema = (unit: LengthUnit, models: readonly SlideModelChoice[] = []) =>
   z
     .object({
-    label: text(80).min(1, 'Give the schedule a label.'),
-    quantity: z.coerce.number({ error: 'Quantity must be a whole number.' }).int('Quantity must be a whole number.').min(1, 'Quantity must be at least 1.').max(10_000),
-    sizeFrom: z.enum(['opening', 'box']),
-    width: lengthInput(unit),
-    height: lengthInput(unit),
-    depth: lengthInput(unit),
-    slideType: z.enum(SLIDE_TYPES),
-    slideSeries: z.enum(SLIDE_SERIES_IDS),
-    /** A slide model's id, or '' for none (side-mount: the standard series). */
-    slideModel: z.string(),
-    jointMethod: z.enum(JOINT_METHODS),
-    jointParam: optionalLength(unit),
-    frontThickness: lengthInput(unit),
-    sideThickness: lengthInput(unit),
-    backThickness: optionalLength(unit),
-    frontStyle: z.enum(['flush', 'lipped', 'applied']),
-    /** Lipped fronts: overlay past the opening, reveal inside it, or a lip past the box given outright. */
-    frontFit: z.enum(LIP_FITS),
-    /** The overlay, reveal or lip; blank takes the default for the fit in the shop's unit. */
-    frontLipAmount: optionalLength(unit),
-    bottomMount: z.enum(['groove', 'applied']),
-    bottomThickness: lengthInput(unit),
-    bottomMaterial: text(120).min(1, 'Name the bottom’s material.'),
-    sidesMaterial: text(120).min(1, 'Name the box material.'),
-    frontMaterial: text(120),
-  })
+      label: text(80).min(1, 'Give the schedule a label.'),
+      quantity: z.coerce
+        .number({ error: 'Quantity must be a whole number.' })
+        .int('Quantity must be a whole number.')
+        .min(1, 'Quantity must be at least 1.')
+        .max(10_000),
+      sizeFrom: z.enum(['opening', 'box']),
+      width: lengthInput(unit),
+      height: lengthInput(unit),
+      depth: lengthInput(unit),
+      slideType: z.enum(SLIDE_TYPES),
+      slideSeries: z.enum(SLIDE_SERIES_IDS),
+      /** A slide model's id, or '' for none (side-mount: the standard series). */
+      slideModel: z.string(),
+      jointMethod: z.enum(JOINT_METHODS),
+      jointParam: optionalLength(unit),
+      frontThickness: lengthInput(unit),
+      sideThickness: lengthInput(unit),
+      backThickness: optionalLength(unit),
+      frontStyle: z.enum(['flush', 'lipped', 'applied']),
+      /** Lipped fronts: overlay past the opening, reveal inside it, or a lip past the box given outright. */
+      frontFit: z.enum(LIP_FITS),
+      /** The overlay, reveal or lip; blank takes the default for the fit in the shop's unit. */
+      frontLipAmount: optionalLength(unit),
+      bottomMount: z.enum(['groove', 'applied']),
+      bottomThickness: lengthInput(unit),
+      bottomMaterial: text(120).min(1, 'Name the bottom’s material.'),
+      sidesMaterial: text(120).min(1, 'Name the box material.'),
+      frontMaterial: text(120),
+    })
     .superRefine((v, ctx) => {
       const model = models.find((m) => m.id === v.slideModel);
       if (v.slideType === 'undermount' && !model)
@@ -68,7 +88,8 @@ export const scheduleFormSchema = (unit: LengthUnit, models: readonly SlideModel
             ? 'Choose the slide model: its maker’s rule sizes the box.'
             : 'The shop has no undermount slide models yet: the owner adds them in Shop settings, from the maker’s sheet.',
         });
-      else if (model && model.kind !== v.slideType) ctx.addIssue({ code: 'custom', path: ['slideModel'], message: `${model.name} is a ${model.kind} slide.` });
+      else if (model && model.kind !== v.slideType)
+        ctx.addIssue({ code: 'custom', path: ['slideModel'], message: `${model.name} is a ${model.kind} slide.` });
     });
 
 export type ScheduleFormText = z.input<ReturnType<typeof scheduleFormSchema>>;
@@ -89,7 +110,8 @@ function slideInput(v: ScheduleFormValues, models: readonly SlideModelChoice[]):
 }
 
 /** A lipped front's default overlay or reveal, in the shop's own system (⅜″ / 10 mm overlay, 1/16″ / 1.5 mm reveal). */
-export const lipDefaultMm = (fit: 'overlay' | 'reveal', unit: LengthUnit) => LIPPED_FRONT_DEFAULTS[unit === 'mm' ? 'metric' : 'imperial'][fit === 'overlay' ? 'overlayMm' : 'revealMm'];
+export const lipDefaultMm = (fit: 'overlay' | 'reveal', unit: LengthUnit) =>
+  LIPPED_FRONT_DEFAULTS[unit === 'mm' ? 'metric' : 'imperial'][fit === 'overlay' ? 'overlayMm' : 'revealMm'];
 
 function lippedInput(v: ScheduleFormValues, unit: LengthUnit): DrawerScheduleInput['front'] {
   if (v.frontFit === 'lip') return { style: 'lipped', fit: 'lip', ...(v.frontLipAmount !== undefined ? { lipMm: v.frontLipAmount } : {}) };
@@ -133,7 +155,10 @@ export function fromSchedule(s: DrawerSchedule, units: ShopUnits): ScheduleFormT
     backThickness: len(s.thickness.backMm),
     frontStyle: s.front.style,
     frontFit: s.front.style === 'lipped' ? s.front.fit : 'overlay',
-    frontLipAmount: s.front.style === 'lipped' ? len(s.front.fit === 'overlay' ? s.front.overlayMm : s.front.fit === 'reveal' ? s.front.revealMm : s.front.lipMm) : '',
+    frontLipAmount:
+      s.front.style === 'lipped'
+        ? len(s.front.fit === 'overlay' ? s.front.overlayMm : s.front.fit === 'reveal' ? s.front.revealMm : s.front.lipMm)
+        : '',
     bottomMount: s.bottom.mount,
     bottomThickness: len(s.bottom.thicknessMm),
     bottomMaterial: s.bottom.material,
@@ -178,18 +203,55 @@ export function emptySchedule(units: ShopUnits, offers: readonly StockOffer[] = 
     return snapped === mm ? formatLength(mm, units) : exactLengthText(snapped, units);
   };
   return {
-    label: '', quantity: '1', sizeFrom: 'opening', width: '', height: '', depth: '', slideType: 'side-mount', slideSeries: shopSlideSeries(units), slideModel: '', jointMethod: 'lock-rabbet', jointParam: '',
-    frontThickness: stock(D.frontThickness), sideThickness: stock(D.sideThickness), backThickness: '', frontStyle: 'flush', frontFit: 'overlay', frontLipAmount: '', bottomMount: 'groove',
-    bottomThickness: stock(D.bottomThickness), bottomMaterial: material, sidesMaterial: material, frontMaterial: '',
+    label: '',
+    quantity: '1',
+    sizeFrom: 'opening',
+    width: '',
+    height: '',
+    depth: '',
+    slideType: 'side-mount',
+    slideSeries: shopSlideSeries(units),
+    slideModel: '',
+    jointMethod: 'lock-rabbet',
+    jointParam: '',
+    frontThickness: stock(D.frontThickness),
+    sideThickness: stock(D.sideThickness),
+    backThickness: '',
+    frontStyle: 'flush',
+    frontFit: 'overlay',
+    frontLipAmount: '',
+    bottomMount: 'groove',
+    bottomThickness: stock(D.bottomThickness),
+    bottomMaterial: material,
+    sidesMaterial: material,
+    frontMaterial: '',
   };
 }
 
 /** Where a sizing error's path (lib/joinery) shows in the flat form. */
 export function fieldOfPath(path: string): keyof ScheduleFormText {
   const table: Record<string, keyof ScheduleFormText> = {
-    label: 'label', quantity: 'quantity', 'size.widthMm': 'width', 'size.heightMm': 'height', 'size.depthMm': 'depth', 'size.depthRule': 'depth',
-    'thickness.frontMm': 'frontThickness', 'thickness.sideMm': 'sideThickness', 'thickness.backMm': 'backThickness', 'front.style': 'frontStyle', 'front.fit': 'frontFit', 'front.overlayMm': 'frontLipAmount', 'front.revealMm': 'frontLipAmount', 'front.lipMm': 'frontLipAmount',
-    'slide.series': 'slideSeries', 'slide.model': 'slideModel', 'bottom.mount': 'bottomMount', 'bottom.thicknessMm': 'bottomThickness', 'bottom.material': 'bottomMaterial', 'materials.sides': 'sidesMaterial', 'materials.front': 'frontMaterial',
+    label: 'label',
+    quantity: 'quantity',
+    'size.widthMm': 'width',
+    'size.heightMm': 'height',
+    'size.depthMm': 'depth',
+    'size.depthRule': 'depth',
+    'thickness.frontMm': 'frontThickness',
+    'thickness.sideMm': 'sideThickness',
+    'thickness.backMm': 'backThickness',
+    'front.style': 'frontStyle',
+    'front.fit': 'frontFit',
+    'front.overlayMm': 'frontLipAmount',
+    'front.revealMm': 'frontLipAmount',
+    'front.lipMm': 'frontLipAmount',
+    'slide.series': 'slideSeries',
+    'slide.model': 'slideModel',
+    'bottom.mount': 'bottomMount',
+    'bottom.thicknessMm': 'bottomThickness',
+    'bottom.material': 'bottomMaterial',
+    'materials.sides': 'sidesMaterial',
+    'materials.front': 'frontMaterial',
   };
   if (table[path]) return table[path];
   if (path.startsWith('joint.')) return 'jointParam';

@@ -42,7 +42,9 @@ export function ThicknessPicker({
 
   return (
     <div>
-      <label htmlFor={showInput && choices.length === 0 ? id : `${id}-choice`} className="field-label">{label}</label>
+      <label htmlFor={showInput && choices.length === 0 ? id : `${id}-choice`} className="field-label">
+        {label}
+      </label>
       {choices.length > 0 && (
         <select
           id={`${id}-choice`}
@@ -57,7 +59,11 @@ export function ThicknessPicker({
           }}
         >
           {sameAs && <option value={SAME}>{sameAs}</option>}
-          {choices.map((c) => <option key={c.text} value={c.text}>{c.label}</option>)}
+          {choices.map((c) => (
+            <option key={c.text} value={c.text}>
+              {c.label}
+            </option>
+          ))}
           <option value={OTHER}>Another thickness…</option>
         </select>
       )}

@@ -18,7 +18,10 @@ const formSchema = z.object({
   // The customer's name as typed: the server picks the customer of that name or adds one ('' for none).
   customer: z.string().trim().max(120, 'Keep the customer’s name under 120 characters.'),
   // A date input gives '' when cleared: no due date.
-  dueDate: z.string().transform((v) => v || null).pipe(jobFields.dueDate),
+  dueDate: z
+    .string()
+    .transform((v) => v || null)
+    .pipe(jobFields.dueDate),
   notes: jobFields.notes,
   status: jobFields.status,
 });
@@ -34,7 +37,17 @@ function changed(job: JobSummary, values: FormOutput): JobPatch {
  * Edit a job in a dialog: name, customer, due date, notes and status. The statuses offered are the ones this person
  * may set by hand (cutting and done follow the plans; the owner may set any).
  */
-export function EditJobForm({ job, statusChoices, followsPlans, onDone }: { job: JobSummary; statusChoices: JobStatus[]; followsPlans: boolean; onDone: () => void }) {
+export function EditJobForm({
+  job,
+  statusChoices,
+  followsPlans,
+  onDone,
+}: {
+  job: JobSummary;
+  statusChoices: JobStatus[];
+  followsPlans: boolean;
+  onDone: () => void;
+}) {
   const dialog = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const d = dialog.current;
@@ -69,23 +82,52 @@ export function EditJobForm({ job, statusChoices, followsPlans, onDone }: { job:
   });
 
   return (
-    <dialog ref={dialog} onClose={onDone} aria-label="Edit job" className="m-auto w-[min(40rem,calc(100vw-2rem))] rounded-lg border border-paper-edge bg-white p-0 text-left text-graphite shadow-xl backdrop:bg-graphite/40">
+    <dialog
+      ref={dialog}
+      onClose={onDone}
+      aria-label="Edit job"
+      className="m-auto w-[min(40rem,calc(100vw-2rem))] rounded-lg border border-paper-edge bg-white p-0 text-left text-graphite shadow-xl backdrop:bg-graphite/40"
+    >
       <form onSubmit={submit} className="grid gap-3 p-5 sm:grid-cols-2" noValidate>
         <h2 className="sm:col-span-2">Edit job</h2>
-        <Field id="edit-job-name" label="Job name" error={e.name?.message}><input id="edit-job-name" className="field-input" autoFocus {...form.register('name')} /></Field>
-        <Field id="edit-job-customer" label="Customer" error={e.customer?.message}><input id="edit-job-customer" className="field-input" list="edit-job-customer-choices" autoComplete="off" {...form.register('customer')} /><CustomerChoices id="edit-job-customer-choices" /><p className="mt-1 text-xs text-graphite-mute">{CUSTOMER_FIELD_HINT}</p></Field>
-        <Field id="edit-job-due" label="Due date" error={e.dueDate?.message}><input id="edit-job-due" type="date" className="field-input" {...form.register('dueDate')} /></Field>
+        <Field id="edit-job-name" label="Job name" error={e.name?.message}>
+          <input id="edit-job-name" className="field-input" autoFocus {...form.register('name')} />
+        </Field>
+        <Field id="edit-job-customer" label="Customer" error={e.customer?.message}>
+          <input id="edit-job-customer" className="field-input" list="edit-job-customer-choices" autoComplete="off" {...form.register('customer')} />
+          <CustomerChoices id="edit-job-customer-choices" />
+          <p className="mt-1 text-xs text-graphite-mute">{CUSTOMER_FIELD_HINT}</p>
+        </Field>
+        <Field id="edit-job-due" label="Due date" error={e.dueDate?.message}>
+          <input id="edit-job-due" type="date" className="field-input" {...form.register('dueDate')} />
+        </Field>
         <Field id="edit-job-status" label="Status" error={e.status?.message}>
           <select id="edit-job-status" className="field-input" {...form.register('status')}>
-            {statusChoices.map((s) => <option key={s} value={s}>{JOB_STATUS_LABELS[s]}</option>)}
+            {statusChoices.map((s) => (
+              <option key={s} value={s}>
+                {JOB_STATUS_LABELS[s]}
+              </option>
+            ))}
           </select>
-          {followsPlans && <p className="mt-1 text-xs text-graphite-mute">Cutting and done follow the plans: releasing a plan starts cutting, finishing the last one (with no re-cut open) makes the job done.</p>}
+          {followsPlans && (
+            <p className="mt-1 text-xs text-graphite-mute">
+              Cutting and done follow the plans: releasing a plan starts cutting, finishing the last one (with no re-cut open) makes the job done.
+            </p>
+          )}
         </Field>
-        <Field id="edit-job-notes" label="Notes" error={e.notes?.message} className="sm:col-span-2"><textarea id="edit-job-notes" rows={4} className="field-input" {...form.register('notes')} /></Field>
-        <div className="sm:col-span-2"><ActionError error={save.error} except={FIELDS} /></div>
+        <Field id="edit-job-notes" label="Notes" error={e.notes?.message} className="sm:col-span-2">
+          <textarea id="edit-job-notes" rows={4} className="field-input" {...form.register('notes')} />
+        </Field>
+        <div className="sm:col-span-2">
+          <ActionError error={save.error} except={FIELDS} />
+        </div>
         <div className="flex gap-2 sm:col-span-2">
-          <button type="submit" className="btn-accent" disabled={save.isPending}>{save.isPending ? 'Saving…' : 'Save changes'}</button>
-          <button type="button" className="btn-quiet" onClick={() => dialog.current?.close()}>Cancel</button>
+          <button type="submit" className="btn-accent" disabled={save.isPending}>
+            {save.isPending ? 'Saving…' : 'Save changes'}
+          </button>
+          <button type="button" className="btn-quiet" onClick={() => dialog.current?.close()}>
+            Cancel
+          </button>
         </div>
       </form>
     </dialog>

@@ -12,7 +12,17 @@ import { EditJobForm } from './edit-job-form';
  * A job's own actions beside its name: edit it, archive it, or delete it while it has no history (a job whose
  * plans reached the saw is archived instead, so the ledgers keep their plans).
  */
-export function JobActions({ job, statusChoices, hasHistory, followsPlans }: { job: JobSummary; statusChoices: JobStatus[]; hasHistory: boolean; followsPlans: boolean }) {
+export function JobActions({
+  job,
+  statusChoices,
+  hasHistory,
+  followsPlans,
+}: {
+  job: JobSummary;
+  statusChoices: JobStatus[];
+  hasHistory: boolean;
+  followsPlans: boolean;
+}) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [editing, setEditing] = useState(false);
@@ -33,17 +43,27 @@ export function JobActions({ job, statusChoices, hasHistory, followsPlans }: { j
 
   return (
     <div className="flex flex-wrap items-center gap-2 print:hidden">
-      <button type="button" className="btn-quiet" onClick={() => setEditing(true)}>Edit job</button>
+      <button type="button" className="btn-quiet" onClick={() => setEditing(true)}>
+        Edit job
+      </button>
       {mayArchive && (
         <button type="button" className="btn-quiet" disabled={archive.isPending} onClick={() => archive.mutate()}>
           {archive.isPending ? 'Archiving…' : 'Archive'}
         </button>
       )}
-      {!hasHistory && !confirmDelete && <button type="button" className="btn-quiet" onClick={() => setConfirmDelete(true)}>Delete…</button>}
+      {!hasHistory && !confirmDelete && (
+        <button type="button" className="btn-quiet" onClick={() => setConfirmDelete(true)}>
+          Delete…
+        </button>
+      )}
       {confirmDelete && (
         <>
-          <button type="button" className="btn-danger" disabled={remove.isPending} onClick={() => remove.mutate()}>Delete the job and its cut list</button>
-          <button type="button" className="btn-quiet" onClick={() => setConfirmDelete(false)}>Keep it</button>
+          <button type="button" className="btn-danger" disabled={remove.isPending} onClick={() => remove.mutate()}>
+            Delete the job and its cut list
+          </button>
+          <button type="button" className="btn-quiet" onClick={() => setConfirmDelete(false)}>
+            Keep it
+          </button>
         </>
       )}
       <ActionError error={archive.error ?? remove.error} />

@@ -147,18 +147,60 @@ const PiecesLayer = memo(function PiecesLayer({ doc, frames, parts, check, selec
         const pieceProblems = check.byPiece.get(f.piece);
         return (
           <Group key={f.piece} x={f.x} y={f.y}>
-            <Text y={-18 * px} width={piece.length} wrap="none" ellipsis text={pieceCaption(f.piece)} fontSize={12 * px} fill={pieceProblems ? C.problem : C.text} fontStyle="bold" perfectDrawEnabled={false} />
+            <Text
+              y={-18 * px}
+              width={piece.length}
+              wrap="none"
+              ellipsis
+              text={pieceCaption(f.piece)}
+              fontSize={12 * px}
+              fill={pieceProblems ? C.problem : C.text}
+              fontStyle="bold"
+              perfectDrawEnabled={false}
+            />
             {/* Waste first (the whole piece), then offcuts to keep, then the parts on top. */}
-            <Rect width={piece.length} height={piece.width} fill={C.waste} stroke={pieceProblems ? C.problem : C.partEdge} strokeWidth={(pieceProblems ? 3 : 1) * px} perfectDrawEnabled={false} />
+            <Rect
+              width={piece.length}
+              height={piece.width}
+              fill={C.waste}
+              stroke={pieceProblems ? C.problem : C.partEdge}
+              strokeWidth={(pieceProblems ? 3 : 1) * px}
+              perfectDrawEnabled={false}
+            />
             {left?.offcuts.map((o, i) => (
-              <Rect key={`o${i}`} x={o.x} y={o.y} width={o.w} height={o.h} fill={C.offcut} stroke={C.offcutEdge} strokeWidth={px} dash={[4 * px, 3 * px]} perfectDrawEnabled={false} />
+              <Rect
+                key={`o${i}`}
+                x={o.x}
+                y={o.y}
+                width={o.w}
+                height={o.h}
+                fill={C.offcut}
+                stroke={C.offcutEdge}
+                strokeWidth={px}
+                dash={[4 * px, 3 * px]}
+                perfectDrawEnabled={false}
+              />
             ))}
-            {!left && piece.trim > 0 && <Rect x={piece.trim} y={piece.trim} width={piece.length - 2 * piece.trim} height={piece.width - 2 * piece.trim} fill={C.stock} perfectDrawEnabled={false} />}
+            {!left && piece.trim > 0 && (
+              <Rect
+                x={piece.trim}
+                y={piece.trim}
+                width={piece.length - 2 * piece.trim}
+                height={piece.width - 2 * piece.trim}
+                fill={C.stock}
+                perfectDrawEnabled={false}
+              />
+            )}
             {byPiece[f.piece].map(([key, p]) => {
               const info = parts.get(p.partId);
               const problem = check.byPlacement.has(key);
               const isSelected = selected.has(key);
-              const label = fitLabel(p.label || info?.label || p.partId, info ? `${fmt(info.length)} × ${fmt(info.width)}` : '', p.w * scale, p.h * scale);
+              const label = fitLabel(
+                p.label || info?.label || p.partId,
+                info ? `${fmt(info.length)} × ${fmt(info.width)}` : '',
+                p.w * scale,
+                p.h * scale,
+              );
               const grainArrow = info?.grain === 'along-length' && piece.grain !== 'none' && Math.min(p.w, p.h) * scale > 14;
               return (
                 <Group key={key} x={p.x} y={p.y} opacity={key === dragKey ? 0.35 : 1}>
@@ -202,7 +244,17 @@ function GrainArrow({ w, h, alongX, px }: { w: number; h: number; alongX: boolea
   const cx = w / 2;
   const cy = alongX ? h - 9 * px : h / 2;
   const pts = alongX ? [cx - len / 2, cy, cx + len / 2, cy] : [w - 9 * px, cy - len / 2, w - 9 * px, cy + len / 2];
-  return <Arrow points={pts} stroke={C.mute} fill={C.mute} strokeWidth={1.25 * px} pointerLength={5 * px} pointerWidth={5 * px} perfectDrawEnabled={false} />;
+  return (
+    <Arrow
+      points={pts}
+      stroke={C.mute}
+      fill={C.mute}
+      strokeWidth={1.25 * px}
+      pointerLength={5 * px}
+      pointerWidth={5 * px}
+      perfectDrawEnabled={false}
+    />
+  );
 }
 
 /** The dragged part where it would land, with the edge it snapped to. */
@@ -215,9 +267,22 @@ function DragLayer({ store, frames, scale }: { store: BenchStore; frames: PieceF
   return (
     <Layer listening={false}>
       <Group x={f.x} y={f.y}>
-        <Rect x={drag.x} y={drag.y} width={placement.w} height={placement.h} fill={C.selected} opacity={0.45} stroke={C.selected} strokeWidth={2 * px} />
-        {drag.snappedX !== null && <Line points={[drag.snappedX, 0, drag.snappedX, f.h]} stroke={C.selected} strokeWidth={px} dash={[5 * px, 4 * px]} />}
-        {drag.snappedY !== null && <Line points={[0, drag.snappedY, f.w, drag.snappedY]} stroke={C.selected} strokeWidth={px} dash={[5 * px, 4 * px]} />}
+        <Rect
+          x={drag.x}
+          y={drag.y}
+          width={placement.w}
+          height={placement.h}
+          fill={C.selected}
+          opacity={0.45}
+          stroke={C.selected}
+          strokeWidth={2 * px}
+        />
+        {drag.snappedX !== null && (
+          <Line points={[drag.snappedX, 0, drag.snappedX, f.h]} stroke={C.selected} strokeWidth={px} dash={[5 * px, 4 * px]} />
+        )}
+        {drag.snappedY !== null && (
+          <Line points={[0, drag.snappedY, f.w, drag.snappedY]} stroke={C.selected} strokeWidth={px} dash={[5 * px, 4 * px]} />
+        )}
       </Group>
     </Layer>
   );

@@ -19,7 +19,10 @@ import { nestRequestSchema, type NestRequest } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { useLiveCheck } from './use-live-check';
 
-const BenchCanvas = dynamic(() => import('./bench-canvas'), { ssr: false, loading: () => <p className="p-4 text-sm text-graphite-mute">Setting out the bench…</p> });
+const BenchCanvas = dynamic(() => import('./bench-canvas'), {
+  ssr: false,
+  loading: () => <p className="p-4 text-sm text-graphite-mute">Setting out the bench…</p>,
+});
 
 interface PlanResponse {
   id: string;
@@ -37,7 +40,12 @@ const BIG_NUDGE_MM = 10;
 export function LayoutBench({ planId, editable, units }: { planId: string; editable: boolean; units: ShopUnits }) {
   const plan = useQuery({ queryKey: ['plan', planId], queryFn: () => api<PlanResponse>(`/api/plans/${planId}`) });
   if (plan.isPending) return <p className="text-sm text-graphite-mute">Loading the plan…</p>;
-  if (plan.isError) return <p className="field-error" role="alert">Could not load the plan: {plan.error.message}</p>;
+  if (plan.isError)
+    return (
+      <p className="field-error" role="alert">
+        Could not load the plan: {plan.error.message}
+      </p>
+    );
   return <BenchEditor key={plan.data.updatedAt} data={plan.data} editable={editable && plan.data.status === 'draft'} units={units} />;
 }
 
@@ -46,7 +54,9 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   const router = useRouter();
   const request = useMemo(() => nestRequestSchema.parse(data.request), [data.request]);
   const parts = useMemo(() => new Map<string, PartInfo>(request.parts.map((p) => [p.id, p])), [request]);
-  const [store] = useState<BenchStore>(() => createBenchStore(planToDoc(readBenchPlan(data.document), request), { parts, kerf: request.settings.kerf }));
+  const [store] = useState<BenchStore>(() =>
+    createBenchStore(planToDoc(readBenchPlan(data.document), request), { parts, kerf: request.settings.kerf }),
+  );
   const doc = useStore(store, (s) => s.doc);
   const selection = useStore(store, (s) => s.view.selection);
   const canUndo = useStore(store, (s) => s.past.length > 0);
@@ -88,7 +98,11 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   }, [fit, size.measured]);
 
   const save = useMutation({
-    mutationFn: () => api<{ updatedAt: string }>(`/api/plans/${data.id}`, { method: 'PUT', body: { plan: rebuildCuts(request, docToPlan(store.getState().doc)), baseUpdatedAt: base } }),
+    mutationFn: () =>
+      api<{ updatedAt: string }>(`/api/plans/${data.id}`, {
+        method: 'PUT',
+        body: { plan: rebuildCuts(request, docToPlan(store.getState().doc)), baseUpdatedAt: base },
+      }),
     onSuccess: (res) => {
       setBase(res.updatedAt);
       store.getState().markSaved();
@@ -102,14 +116,18 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
     const job = prepareRenest(request as NestRequest, store.getState().doc);
     setNotice(null);
     const outcome = await worker.run(job.request);
-    if (!outcome.ok) return setNotice(`Re-nest failed: ${outcome.error === 'failed' ? outcome.message : outcome.issues.map((i) => i.message).join('; ')}`);
+    if (!outcome.ok)
+      return setNotice(`Re-nest failed: ${outcome.error === 'failed' ? outcome.message : outcome.issues.map((i) => i.message).join('; ')}`);
     store.getState().replaceDoc(job.merge(outcome.plan));
     setNotice('Re-nested the unlocked parts around the locked ones. Undo puts the old layout back.');
   };
 
   const rotate = () => {
     const refused = store.getState().rotate(store.getState().view.selection);
-    if (refused.length) setNotice(`${refused.length} part${refused.length === 1 ? '' : 's'} not turned: locked, or the grain must run along the part's length on this stock.`);
+    if (refused.length)
+      setNotice(
+        `${refused.length} part${refused.length === 1 ? '' : 's'} not turned: locked, or the grain must run along the part's length on this stock.`,
+      );
   };
   const toggleLock = () => {
     const s = store.getState();
@@ -160,17 +178,36 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
   return (
     <section aria-labelledby="bench" className="space-y-3">
       <div className="flex flex-wrap items-center gap-2">
-        <h2 id="bench" className="mr-auto">Layout bench</h2>
+        <h2 id="bench" className="mr-auto">
+          Layout bench
+        </h2>
         {editable && (
           <>
-            <button type="button" className="btn-quiet" onClick={() => store.getState().undo()} disabled={!canUndo}>Undo</button>
-            <button type="button" className="btn-quiet" onClick={() => store.getState().redo()} disabled={!canRedo}>Redo</button>
-            <button type="button" className="btn-quiet" onClick={rotate} disabled={!selection.length || !selection.some((k) => mayRotate(doc, store.getState().context, k))}>Turn</button>
-            <button type="button" className="btn-quiet" onClick={toggleLock} disabled={!selection.length}>{selection.length && selection.every((k) => doc.placements[k]?.locked) ? 'Unlock' : 'Lock'}</button>
-            <button type="button" className="btn-quiet" onClick={renest} disabled={worker.running}>Re-nest unlocked</button>
+            <button type="button" className="btn-quiet" onClick={() => store.getState().undo()} disabled={!canUndo}>
+              Undo
+            </button>
+            <button type="button" className="btn-quiet" onClick={() => store.getState().redo()} disabled={!canRedo}>
+              Redo
+            </button>
+            <button
+              type="button"
+              className="btn-quiet"
+              onClick={rotate}
+              disabled={!selection.length || !selection.some((k) => mayRotate(doc, store.getState().context, k))}
+            >
+              Turn
+            </button>
+            <button type="button" className="btn-quiet" onClick={toggleLock} disabled={!selection.length}>
+              {selection.length && selection.every((k) => doc.placements[k]?.locked) ? 'Unlock' : 'Lock'}
+            </button>
+            <button type="button" className="btn-quiet" onClick={renest} disabled={worker.running}>
+              Re-nest unlocked
+            </button>
           </>
         )}
-        <button type="button" className="btn-quiet" onClick={fit}>Fit all</button>
+        <button type="button" className="btn-quiet" onClick={fit}>
+          Fit all
+        </button>
         {editable && (
           <button type="button" className="btn-accent" disabled={save.isPending || !dirty || pending || problems > 0} onClick={() => save.mutate()}>
             {save.isPending ? 'Saving…' : 'Save layout'}
@@ -180,16 +217,37 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
       {editable && (
         <p className="text-xs text-graphite-mute" data-testid="bench-keys">
           {problems > 0 && <strong className="mr-2 font-medium text-brick">Fix the problems below to save.</strong>}
-          On the bench: drag a part; arrows nudge it, <kbd>R</kbd> turns it, <kbd>L</kbd> locks it, <kbd>Ctrl/Cmd+Z</kbd> undoes, <kbd>Ctrl/Cmd+Shift+Z</kbd> redoes.
+          On the bench: drag a part; arrows nudge it, <kbd>R</kbd> turns it, <kbd>L</kbd> locks it, <kbd>Ctrl/Cmd+Z</kbd> undoes,{' '}
+          <kbd>Ctrl/Cmd+Shift+Z</kbd> redoes.
         </p>
       )}
 
-      {worker.running && <NestProgressBar progress={worker.progress} budgetMs={request.settings.timeBudgetMs} label="Re-nesting the unlocked parts" onCancel={worker.cancel} />}
-      {notice && <p className="text-sm text-sage" role="status">{notice}</p>}
+      {worker.running && (
+        <NestProgressBar
+          progress={worker.progress}
+          budgetMs={request.settings.timeBudgetMs}
+          label="Re-nesting the unlocked parts"
+          onCancel={worker.cancel}
+        />
+      )}
+      {notice && (
+        <p className="text-sm text-sage" role="status">
+          {notice}
+        </p>
+      )}
       {save.error && (
         <div className="field-error" role="alert">
           {save.error.message}
-          {save.error instanceof ApiError && <ul className="ml-5 list-disc">{Object.values(save.error.fields).flat().slice(0, 8).map((m) => <li key={m}>{m}</li>)}</ul>}
+          {save.error instanceof ApiError && (
+            <ul className="ml-5 list-disc">
+              {Object.values(save.error.fields)
+                .flat()
+                .slice(0, 8)
+                .map((m) => (
+                  <li key={m}>{m}</li>
+                ))}
+            </ul>
+          )}
         </div>
       )}
 
@@ -203,7 +261,17 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
           data-testid="bench-canvas"
           role="application"
         >
-          <BenchCanvas store={store} frames={frames} parts={parts} check={check} editable={editable} width={size.width} height={size.height} fmt={fmt} pieceCaption={pieceCaption} />
+          <BenchCanvas
+            store={store}
+            frames={frames}
+            parts={parts}
+            check={check}
+            editable={editable}
+            width={size.width}
+            height={size.height}
+            fmt={fmt}
+            pieceCaption={pieceCaption}
+          />
         </div>
         <aside className="space-y-3 text-sm">
           <div className="card p-3" data-testid="bench-status" data-pending={pending} aria-busy={pending}>
@@ -213,14 +281,21 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
               </p>
             )}
             {pending && problems === 0 ? (
-              <p className="font-medium text-graphite-mute" role="status">Checking the layout…</p>
+              <p className="font-medium text-graphite-mute" role="status">
+                Checking the layout…
+              </p>
             ) : problems === 0 ? (
               <p className="font-medium text-sage">Every part can be cut free with straight through-cuts.</p>
             ) : (
               <>
-                <p className="font-medium text-brick">{problems} problem{problems === 1 ? '' : 's'}: saving is refused until they are fixed.{pending && <span className="font-normal text-graphite-mute"> Checking the change…</span>}</p>
+                <p className="font-medium text-brick">
+                  {problems} problem{problems === 1 ? '' : 's'}: saving is refused until they are fixed.
+                  {pending && <span className="font-normal text-graphite-mute"> Checking the change…</span>}
+                </p>
                 <ul className="mt-2 max-h-48 list-disc space-y-1 overflow-y-auto pl-5 text-brick" aria-label="Problems">
-                  {check.violations.slice(0, 30).map((v, i) => <li key={i}>{v.message}</li>)}
+                  {check.violations.slice(0, 30).map((v, i) => (
+                    <li key={i}>{v.message}</li>
+                  ))}
                 </ul>
               </>
             )}
@@ -228,18 +303,38 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
           <div className="card p-3">
             {one ? (
               <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1" aria-label="Selected part">
-                <dt className="text-graphite-mute">Part</dt><dd className="font-medium">{one.label || one.partId} #{one.instance}</dd>
-                <dt className="text-graphite-mute">Size</dt><dd className="num text-left">{fmt(parts.get(one.partId)?.length ?? one.w)} × {fmt(parts.get(one.partId)?.width ?? one.h)}</dd>
-                <dt className="text-graphite-mute">From corner</dt><dd className="num whitespace-normal text-left"><span className="whitespace-nowrap">{fmt(one.x)} along,</span> <span className="whitespace-nowrap">{fmt(one.y)} across</span></dd>
-                <dt className="text-graphite-mute">Grain</dt><dd>{parts.get(one.partId)?.grain === 'any' ? 'Either way' : 'Along its length'}{one.rotated ? ' · turned' : ''}</dd>
-                <dt className="text-graphite-mute">Locked</dt><dd>{one.locked ? 'Yes' : 'No'}</dd>
+                <dt className="text-graphite-mute">Part</dt>
+                <dd className="font-medium">
+                  {one.label || one.partId} #{one.instance}
+                </dd>
+                <dt className="text-graphite-mute">Size</dt>
+                <dd className="num text-left">
+                  {fmt(parts.get(one.partId)?.length ?? one.w)} × {fmt(parts.get(one.partId)?.width ?? one.h)}
+                </dd>
+                <dt className="text-graphite-mute">From corner</dt>
+                <dd className="num whitespace-normal text-left">
+                  <span className="whitespace-nowrap">{fmt(one.x)} along,</span> <span className="whitespace-nowrap">{fmt(one.y)} across</span>
+                </dd>
+                <dt className="text-graphite-mute">Grain</dt>
+                <dd>
+                  {parts.get(one.partId)?.grain === 'any' ? 'Either way' : 'Along its length'}
+                  {one.rotated ? ' · turned' : ''}
+                </dd>
+                <dt className="text-graphite-mute">Locked</dt>
+                <dd>{one.locked ? 'Yes' : 'No'}</dd>
               </dl>
             ) : (
-              <p className="text-graphite-mute">{selection.length ? `${selection.length} parts selected.` : 'Click a part to select it; shift-click adds. Drag empty space to pan, scroll to zoom.'}</p>
+              <p className="text-graphite-mute">
+                {selection.length
+                  ? `${selection.length} parts selected.`
+                  : 'Click a part to select it; shift-click adds. Drag empty space to pan, scroll to zoom.'}
+              </p>
             )}
           </div>
           <p className="text-xs text-graphite-mute">
-            {editable ? `${lockedCount} locked. ` : 'Read only: only a draft plan can be changed. '}{editable && `Parts snap to the trimmed edges and to neighbours one kerf (${fmt(request.settings.kerf)}) apart. `}Shaded: waste (trim, kerf, scraps); green dashes: offcuts to keep.
+            {editable ? `${lockedCount} locked. ` : 'Read only: only a draft plan can be changed. '}
+            {editable && `Parts snap to the trimmed edges and to neighbours one kerf (${fmt(request.settings.kerf)}) apart. `}Shaded: waste (trim,
+            kerf, scraps); green dashes: offcuts to keep.
           </p>
         </aside>
       </div>

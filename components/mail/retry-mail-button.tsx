@@ -30,7 +30,11 @@ export function RetryMailButton({ id, subject }: { id: string; subject: string }
       >
         {pending ? 'Queuing…' : 'Try again'}
       </button>
-      {error && <p role="alert" className="field-error">{error}</p>}
+      {error && (
+        <p role="alert" className="field-error">
+          {error}
+        </p>
+      )}
     </>
   );
 }

@@ -48,12 +48,35 @@ interface NestResult {
  * Choose stock and settings, nest in the worker with progress, look at the result and save it as a draft. With
  * `nestFor: 'recuts'` the parts are the job's open re-cuts only, and the saved plan is a re-cut plan.
  */
-export function NestPanel({ jobId, shop, showPrices, nestFor = 'cut-list' }: { jobId: string; shop: ShopSettings; showPrices: boolean; nestFor?: NestFor }) {
-  const offered = useQuery({ queryKey: ['nest-request', jobId, nestFor], queryFn: () => api<NestRequestInput>(`/api/jobs/${jobId}/nest-request?for=${nestFor}`) });
+export function NestPanel({
+  jobId,
+  shop,
+  showPrices,
+  nestFor = 'cut-list',
+}: {
+  jobId: string;
+  shop: ShopSettings;
+  showPrices: boolean;
+  nestFor?: NestFor;
+}) {
+  const offered = useQuery({
+    queryKey: ['nest-request', jobId, nestFor],
+    queryFn: () => api<NestRequestInput>(`/api/jobs/${jobId}/nest-request?for=${nestFor}`),
+  });
   const saws = useQuery({ queryKey: ['saws'], queryFn: () => api<SavedSaw[]>('/api/saws') });
   if (offered.isPending || saws.isPending) return <p className="text-sm text-graphite-mute">Loading the stock on offer…</p>;
-  if (offered.isError) return <p className="field-error" role="alert">Could not load the stock on offer: {offered.error.message}</p>;
-  if (saws.isError) return <p className="field-error" role="alert">Could not load the shop’s saws: {saws.error.message}</p>;
+  if (offered.isError)
+    return (
+      <p className="field-error" role="alert">
+        Could not load the stock on offer: {offered.error.message}
+      </p>
+    );
+  if (saws.isError)
+    return (
+      <p className="field-error" role="alert">
+        Could not load the shop’s saws: {saws.error.message}
+      </p>
+    );
   return <NestForm jobId={jobId} shop={shop} showPrices={showPrices} offered={offered.data} saws={saws.data} nestFor={nestFor} />;
 }
 
@@ -71,7 +94,21 @@ const profile = (s: SavedSaw & { updatedAt?: string }): NestSaw => {
   return rest;
 };
 
-function NestForm({ jobId, shop, showPrices, offered, saws, nestFor }: { jobId: string; shop: ShopSettings; showPrices: boolean; offered: NestRequestInput; saws: SavedSaw[]; nestFor: NestFor }) {
+function NestForm({
+  jobId,
+  shop,
+  showPrices,
+  offered,
+  saws,
+  nestFor,
+}: {
+  jobId: string;
+  shop: ShopSettings;
+  showPrices: boolean;
+  offered: NestRequestInput;
+  saws: SavedSaw[];
+  nestFor: NestFor;
+}) {
   const unit = shopLengthUnit(shop.units);
   const schema = useMemo(() => settingsForm(unit), [unit]);
   const len = (mm: number) => formatLength(mm, shop.units);
@@ -113,8 +150,14 @@ function NestForm({ jobId, shop, showPrices, offered, saws, nestFor }: { jobId: 
     const saw = saws.find((sw) => sw.id === v.sawId);
     const breakdown = saw ? saws.find((sw) => sw.id === v.breakdownSawId && sw.id !== saw.id) : undefined;
     const settings: NestSettingsOverride = {
-      kerf: exact('kerf', v.kerf), trim: exact('trim', v.trim), minOffcutLength: exact('minOffcutLength', v.minOffcutLength), minOffcutWidth: exact('minOffcutWidth', v.minOffcutWidth),
-      style: v.style, objective: v.objective, timeBudgetMs: Math.round(v.timeBudgetSec * 1000), preferOffcuts: v.preferOffcuts,
+      kerf: exact('kerf', v.kerf),
+      trim: exact('trim', v.trim),
+      minOffcutLength: exact('minOffcutLength', v.minOffcutLength),
+      minOffcutWidth: exact('minOffcutWidth', v.minOffcutWidth),
+      style: v.style,
+      objective: v.objective,
+      timeBudgetMs: Math.round(v.timeBudgetSec * 1000),
+      preferOffcuts: v.preferOffcuts,
       ...(saw ? { sawId: saw.id } : {}),
       ...(breakdown ? { breakdownSawId: breakdown.id } : {}),
     };
@@ -140,7 +183,9 @@ function NestForm({ jobId, shop, showPrices, offered, saws, nestFor }: { jobId: 
     else setFailure(outcome.error === 'invalid-request' ? outcome.issues.map((i) => `${i.path}: ${i.message}`).join('; ') : outcome.message);
   });
 
-  const groups = (['sheet', 'board', 'offcut'] as const).map((kind) => ({ kind, stock: offered.stock.filter((st) => st.kind === kind) })).filter((g) => g.stock.length);
+  const groups = (['sheet', 'board', 'offcut'] as const)
+    .map((kind) => ({ kind, stock: offered.stock.filter((st) => st.kind === kind) }))
+    .filter((g) => g.stock.length);
 
   return (
     <div className="space-y-5">
@@ -151,14 +196,28 @@ function NestForm({ jobId, shop, showPrices, offered, saws, nestFor }: { jobId: 
           {groups.map((g) => (
             <table key={g.kind} className="data-table mb-2" aria-label={STOCK_KIND[g.kind]}>
               <thead>
-                <tr><th className="w-8"></th><th>{STOCK_KIND[g.kind]}</th><th className="num">Size</th><th className="num">Available</th>{showPrices && <th className="num">Each</th>}<th>Where</th></tr>
+                <tr>
+                  <th className="w-8"></th>
+                  <th>{STOCK_KIND[g.kind]}</th>
+                  <th className="num">Size</th>
+                  <th className="num">Available</th>
+                  {showPrices && <th className="num">Each</th>}
+                  <th>Where</th>
+                </tr>
               </thead>
               <tbody>
                 {g.stock.map((st) => (
                   <tr key={st.id}>
-                    <td><input type="checkbox" value={st.id} aria-label={stockLabel(st, len)} {...form.register('stockIds')} /></td>
-                    <td>{thick(st.thickness)} {st.material}{st.grain === 'none' ? ' (no grain)' : ''}</td>
-                    <td className="num">{len(st.length)} × {len(st.width)}</td>
+                    <td>
+                      <input type="checkbox" value={st.id} aria-label={stockLabel(st, len)} {...form.register('stockIds')} />
+                    </td>
+                    <td>
+                      {thick(st.thickness)} {st.material}
+                      {st.grain === 'none' ? ' (no grain)' : ''}
+                    </td>
+                    <td className="num">
+                      {len(st.length)} × {len(st.width)}
+                    </td>
                     <td className="num">{st.count === null ? 'buy as needed' : `${st.count} on hand`}</td>
                     {showPrices && <td className="num">{formatMoney(Math.round(st.costEach ?? 0), shop.currency)}</td>}
                     <td className="text-graphite-mute">{st.source ?? ''}</td>
@@ -172,13 +231,25 @@ function NestForm({ jobId, shop, showPrices, offered, saws, nestFor }: { jobId: 
 
         <fieldset className="card grid gap-3 p-3 sm:grid-cols-4">
           <legend className="px-1 text-sm font-semibold">Settings</legend>
-          <Field id="kerf" label="Saw kerf" error={errors.kerf?.message}><input id="kerf" className="field-input" {...form.register('kerf')} /></Field>
-          <Field id="trim" label="Edge trim (each side)" error={errors.trim?.message}><input id="trim" className="field-input" {...form.register('trim')} /></Field>
-          <Field id="min-offcut-length" label="Keep offcuts this long" error={errors.minOffcutLength?.message}><input id="min-offcut-length" className="field-input" {...form.register('minOffcutLength')} /></Field>
-          <Field id="min-offcut-width" label="… and this wide" error={errors.minOffcutWidth?.message}><input id="min-offcut-width" className="field-input" {...form.register('minOffcutWidth')} /></Field>
+          <Field id="kerf" label="Saw kerf" error={errors.kerf?.message}>
+            <input id="kerf" className="field-input" {...form.register('kerf')} />
+          </Field>
+          <Field id="trim" label="Edge trim (each side)" error={errors.trim?.message}>
+            <input id="trim" className="field-input" {...form.register('trim')} />
+          </Field>
+          <Field id="min-offcut-length" label="Keep offcuts this long" error={errors.minOffcutLength?.message}>
+            <input id="min-offcut-length" className="field-input" {...form.register('minOffcutLength')} />
+          </Field>
+          <Field id="min-offcut-width" label="… and this wide" error={errors.minOffcutWidth?.message}>
+            <input id="min-offcut-width" className="field-input" {...form.register('minOffcutWidth')} />
+          </Field>
           <Field id="saw" label="Cut on">
             <select id="saw" className="field-input" {...form.register('sawId')}>
-              {saws.map((sw) => <option key={sw.id} value={sw.id}>{sw.name} ({sawKindText(sw).toLowerCase()})</option>)}
+              {saws.map((sw) => (
+                <option key={sw.id} value={sw.id}>
+                  {sw.name} ({sawKindText(sw).toLowerCase()})
+                </option>
+              ))}
               <option value="">No saw: choose a cutting style</option>
             </select>
           </Field>
@@ -186,7 +257,13 @@ function NestForm({ jobId, shop, showPrices, offered, saws, nestFor }: { jobId: 
             <Field id="breakdown-saw" label="Break sheets down on">
               <select id="breakdown-saw" className="field-input" {...form.register('breakdownSawId')}>
                 <option value="">No breakdown: the whole sheet on the saw</option>
-                {saws.filter((sw) => sw.id !== chosenSawId).map((sw) => <option key={sw.id} value={sw.id}>{sw.name} ({sawKindText(sw).toLowerCase()})</option>)}
+                {saws
+                  .filter((sw) => sw.id !== chosenSawId)
+                  .map((sw) => (
+                    <option key={sw.id} value={sw.id}>
+                      {sw.name} ({sawKindText(sw).toLowerCase()})
+                    </option>
+                  ))}
               </select>
             </Field>
           ) : (
@@ -204,31 +281,66 @@ function NestForm({ jobId, shop, showPrices, offered, saws, nestFor }: { jobId: 
               <option value="cuts">Fewest cuts</option>
             </select>
           </Field>
-          <Field id="time-budget" label="Search for (seconds)" error={errors.timeBudgetSec?.message}><input id="time-budget" type="number" min={0} max={120} step={1} className="field-input" {...form.register('timeBudgetSec')} /></Field>
-          <label className="flex items-center gap-2 self-end pb-2 text-sm"><input type="checkbox" {...form.register('preferOffcuts')} /> Use offcuts first</label>
+          <Field id="time-budget" label="Search for (seconds)" error={errors.timeBudgetSec?.message}>
+            <input id="time-budget" type="number" min={0} max={120} step={1} className="field-input" {...form.register('timeBudgetSec')} />
+          </Field>
+          <label className="flex items-center gap-2 self-end pb-2 text-sm">
+            <input type="checkbox" {...form.register('preferOffcuts')} /> Use offcuts first
+          </label>
         </fieldset>
 
         <div className="flex items-center gap-3">
           <button type="submit" className="btn-accent" disabled={worker.running || partCount === 0}>
             Nest {partCount} {nestFor === 'recuts' ? `re-cut${partCount === 1 ? '' : 's'}` : `part${partCount === 1 ? '' : 's'}`}
           </button>
-          {partCount === 0 && <span className="text-sm text-graphite-mute">{nestFor === 'recuts' ? 'No re-cut is open: each is cut, cancelled or in a released plan.' : 'Add parts to the cut list first.'}</span>}
+          {partCount === 0 && (
+            <span className="text-sm text-graphite-mute">
+              {nestFor === 'recuts' ? 'No re-cut is open: each is cut, cancelled or in a released plan.' : 'Add parts to the cut list first.'}
+            </span>
+          )}
         </div>
       </form>
 
-      {worker.running && <NestProgressBar progress={worker.progress} budgetMs={budgetMs} label="Nesting in the background — the page stays usable" onCancel={worker.cancel} />}
-      {failure && <p className="field-error" role="alert">The Nest could not run: {failure}</p>}
+      {worker.running && (
+        <NestProgressBar
+          progress={worker.progress}
+          budgetMs={budgetMs}
+          label="Nesting in the background — the page stays usable"
+          onCancel={worker.cancel}
+        />
+      )}
+      {failure && (
+        <p className="field-error" role="alert">
+          The Nest could not run: {failure}
+        </p>
+      )}
       {result && <NestOutcome jobId={jobId} result={result} shop={shop} showPrices={showPrices} nestFor={nestFor} />}
     </div>
   );
 }
 
-function NestOutcome({ jobId, result, shop, showPrices, nestFor }: { jobId: string; result: NestResult; shop: ShopSettings; showPrices: boolean; nestFor: NestFor }) {
+function NestOutcome({
+  jobId,
+  result,
+  shop,
+  showPrices,
+  nestFor,
+}: {
+  jobId: string;
+  result: NestResult;
+  shop: ShopSettings;
+  showPrices: boolean;
+  nestFor: NestFor;
+}) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [name, setName] = useState(`${nestFor === 'recuts' ? 'Re-cuts' : 'Plan'} ${new Date().toLocaleDateString()}`);
   const save = useMutation({
-    mutationFn: () => api<{ id: string }>(`/api/jobs/${jobId}/plans`, { method: 'POST', body: { name, settings: result.settings, stockIds: result.stockIds, for: nestFor, plan: result.plan } }),
+    mutationFn: () =>
+      api<{ id: string }>(`/api/jobs/${jobId}/plans`, {
+        method: 'POST',
+        body: { name, settings: result.settings, stockIds: result.stockIds, for: nestFor, plan: result.plan },
+      }),
     onSuccess: ({ id }) => {
       void queryClient.invalidateQueries({ queryKey: ['plans', jobId] });
       router.push(`/jobs/${jobId}/plan/${id}`);
@@ -237,11 +349,15 @@ function NestOutcome({ jobId, result, shop, showPrices, nestFor }: { jobId: stri
   const problems = save.error instanceof ApiError ? Object.values(save.error.fields).flat() : [];
   return (
     <section aria-labelledby="nest-result" className="space-y-3">
-      <h3 id="nest-result" className="text-base font-semibold">Result</h3>
+      <h3 id="nest-result" className="text-base font-semibold">
+        Result
+      </h3>
       <PlanSummary plan={result.plan} units={shop.units} currency={shop.currency} showPrices={showPrices} />
       <div className="flex flex-wrap items-end gap-3">
         <div className="w-72">
-          <label htmlFor="plan-name" className="field-label">Plan name</label>
+          <label htmlFor="plan-name" className="field-label">
+            Plan name
+          </label>
           <input id="plan-name" className="field-input" value={name} onChange={(e) => setName(e.target.value)} maxLength={120} />
         </div>
         <button type="button" className="btn-primary" disabled={save.isPending || !name.trim()} onClick={() => save.mutate()}>
@@ -251,7 +367,13 @@ function NestOutcome({ jobId, result, shop, showPrices, nestFor }: { jobId: stri
       {save.error && (
         <div className="field-error" role="alert">
           {save.error.message}
-          {problems.length > 0 && <ul className="ml-5 list-disc">{problems.slice(0, 8).map((m) => <li key={m}>{m}</li>)}</ul>}
+          {problems.length > 0 && (
+            <ul className="ml-5 list-disc">
+              {problems.slice(0, 8).map((m) => (
+                <li key={m}>{m}</li>
+              ))}
+            </ul>
+          )}
         </div>
       )}
     </section>
@@ -261,11 +383,14 @@ function NestOutcome({ jobId, result, shop, showPrices, nestFor }: { jobId: stri
 function Field({ id, label, error, children }: { id: string; label: string; error?: string; children: React.ReactNode }) {
   return (
     <div>
-      <label htmlFor={id} className="field-label">{label}</label>
+      <label htmlFor={id} className="field-label">
+        {label}
+      </label>
       {children}
       {error && <p className="field-error">{error}</p>}
     </div>
   );
 }
 
-const stockLabel = (st: NestStock | NestRequestInput['stock'][number], len: (mm: number) => string) => `${st.kind} ${len(st.thickness)} ${st.material} ${len(st.length)} × ${len(st.width)}${st.count === null ? ' to buy' : ''}`;
+const stockLabel = (st: NestStock | NestRequestInput['stock'][number], len: (mm: number) => string) =>
+  `${st.kind} ${len(st.thickness)} ${st.material} ${len(st.length)} × ${len(st.width)}${st.count === null ? ' to buy' : ''}`;

@@ -8,7 +8,12 @@ import type { Plan } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
 
 const KIND = { sheet: 'Sheet', board: 'Board', offcut: 'Offcut' } as const;
-const REASON = { 'too-large': 'Larger than any stock', grain: 'Fits only turned; grain forbids', 'no-stock-left': 'Stock used up', 'no-stock': 'No stock of this material' } as const;
+const REASON = {
+  'too-large': 'Larger than any stock',
+  grain: 'Fits only turned; grain forbids',
+  'no-stock-left': 'Stock used up',
+  'no-stock': 'No stock of this material',
+} as const;
 
 type StockLine = Plan['stockToPull'][number];
 
@@ -24,13 +29,23 @@ export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan;
     ) : (
       <table className="data-table" aria-label={label}>
         <thead>
-          <tr><th>Stock</th><th>Size</th><th className="num">Count</th>{showPrices && <th className="num">Cost</th>}<th>From</th></tr>
+          <tr>
+            <th>Stock</th>
+            <th>Size</th>
+            <th className="num">Count</th>
+            {showPrices && <th className="num">Cost</th>}
+            <th>From</th>
+          </tr>
         </thead>
         <tbody>
           {lines.map((l) => (
             <tr key={l.stockId}>
-              <td>{KIND[l.kind]} · {thick(l.thickness)} {l.material}</td>
-              <td className="num whitespace-nowrap">{len(l.length)} × {len(l.width)}</td>
+              <td>
+                {KIND[l.kind]} · {thick(l.thickness)} {l.material}
+              </td>
+              <td className="num whitespace-nowrap">
+                {len(l.length)} × {len(l.width)}
+              </td>
               <td className="num">{l.count}</td>
               {showPrices && <td className="num">{money(l.cost)}</td>}
               <td className="text-graphite-mute">{l.source ?? ''}</td>
@@ -58,7 +73,9 @@ export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan;
         </p>
       )}
       {/* Side by side when both have lines; otherwise the one with lines takes the room and the empty one stays small. */}
-      <div className={`grid gap-4 ${plan.stockToPull.length > 0 && plan.stockToBuy.length > 0 ? 'xl:grid-cols-2' : 'lg:grid-cols-[minmax(0,3fr)_minmax(0,1fr)]'}`}>
+      <div
+        className={`grid gap-4 ${plan.stockToPull.length > 0 && plan.stockToBuy.length > 0 ? 'xl:grid-cols-2' : 'lg:grid-cols-[minmax(0,3fr)_minmax(0,1fr)]'}`}
+      >
         <section className={`card overflow-x-auto p-3 ${plan.stockToPull.length === 0 && plan.stockToBuy.length > 0 ? 'lg:order-2' : ''}`}>
           <h3 className="mb-2 text-sm font-semibold">Stock to pull from the rack</h3>
           {stockTable(plan.stockToPull, 'Stock to pull')}
@@ -70,12 +87,26 @@ export function PlanSummary({ plan, units, currency, showPrices }: { plan: Plan;
       </div>
       {plan.unplaced.length > 0 && (
         <section className="card overflow-x-auto border-brick/40 p-3">
-          <h3 className="mb-2 text-sm font-semibold text-brick">{plan.unplaced.length} part{plan.unplaced.length === 1 ? '' : 's'} not placed</h3>
+          <h3 className="mb-2 text-sm font-semibold text-brick">
+            {plan.unplaced.length} part{plan.unplaced.length === 1 ? '' : 's'} not placed
+          </h3>
           <table className="data-table" aria-label="Parts not placed">
-            <thead><tr><th>Part</th><th>Why</th><th>Detail</th></tr></thead>
+            <thead>
+              <tr>
+                <th>Part</th>
+                <th>Why</th>
+                <th>Detail</th>
+              </tr>
+            </thead>
             <tbody>
               {plan.unplaced.map((u) => (
-                <tr key={`${u.partId}#${u.instance}`}><td>{u.label || u.partId} #{u.instance}</td><td>{REASON[u.reason]}</td><td className="text-graphite-mute">{u.message}</td></tr>
+                <tr key={`${u.partId}#${u.instance}`}>
+                  <td>
+                    {u.label || u.partId} #{u.instance}
+                  </td>
+                  <td>{REASON[u.reason]}</td>
+                  <td className="text-graphite-mute">{u.message}</td>
+                </tr>
               ))}
             </tbody>
           </table>

@@ -16,7 +16,21 @@ function GrainArrow() {
  * (marked `data-abbreviates`) but its "#n" stands apart and stays whole, the size shrinks to fit its line, and the
  * thickness stays whole beside the material.
  */
-export function PartTag({ tag, text, jobName, qr, url, label }: { tag: Tag; text: TagText; jobName: string; qr: QrPath; url: string; label: { width: number; height: number } }) {
+export function PartTag({
+  tag,
+  text,
+  jobName,
+  qr,
+  url,
+  label,
+}: {
+  tag: Tag;
+  text: TagText;
+  jobName: string;
+  qr: QrPath;
+  url: string;
+  label: { width: number; height: number };
+}) {
   const qrSide = Math.min(label.height - 3, label.width * 0.38);
   return (
     <div
@@ -24,7 +38,13 @@ export function PartTag({ tag, text, jobName, qr, url, label }: { tag: Tag; text
       style={{ width: `${label.width}mm`, height: `${label.height}mm` }}
       data-testid="part-tag"
     >
-      <svg viewBox={`0 0 ${qr.size} ${qr.size}`} style={{ width: `${qrSide}mm`, height: `${qrSide}mm` }} className="shrink-0" role="img" aria-label={`QR code: ${url}`}>
+      <svg
+        viewBox={`0 0 ${qr.size} ${qr.size}`}
+        style={{ width: `${qrSide}mm`, height: `${qrSide}mm` }}
+        className="shrink-0"
+        role="img"
+        aria-label={`QR code: ${url}`}
+      >
         <rect width={qr.size} height={qr.size} fill="#fff" />
         <path d={qr.d} fill="#000" shapeRendering="crispEdges" />
       </svg>
@@ -40,7 +60,11 @@ export function PartTag({ tag, text, jobName, qr, url, label }: { tag: Tag; text
             {text.number}
           </span>
         </div>
-        <div className="whitespace-nowrap font-mono font-medium" style={{ fontSize: `min(8pt, calc(100cqi / ${([...text.size].length * 0.62).toFixed(2)}))` }} data-testid="tag-size">
+        <div
+          className="whitespace-nowrap font-mono font-medium"
+          style={{ fontSize: `min(8pt, calc(100cqi / ${([...text.size].length * 0.62).toFixed(2)}))` }}
+          data-testid="tag-size"
+        >
           {text.size}
         </div>
         <div className="flex min-w-0 items-baseline gap-[1mm] text-[6.5pt]">

@@ -5,8 +5,19 @@ export function PieceMap({ piece, partId, instance, className = '' }: { piece: P
   const pad = Math.max(piece.length, piece.width) * 0.02;
   const mine = (p: PlanPiece['placements'][number]) => p.partId === partId && (instance === undefined || p.instance === instance);
   return (
-    <svg viewBox={`${-pad} ${-pad} ${piece.length + 2 * pad} ${piece.width + 2 * pad}`} className={className} role="img" aria-label="Where the part lies on its stock piece">
-      <rect width={piece.length} height={piece.width} className="fill-paper-deep stroke-graphite-faint" strokeWidth={1} style={{ vectorEffect: 'non-scaling-stroke' }} />
+    <svg
+      viewBox={`${-pad} ${-pad} ${piece.length + 2 * pad} ${piece.width + 2 * pad}`}
+      className={className}
+      role="img"
+      aria-label="Where the part lies on its stock piece"
+    >
+      <rect
+        width={piece.length}
+        height={piece.width}
+        className="fill-paper-deep stroke-graphite-faint"
+        strokeWidth={1}
+        style={{ vectorEffect: 'non-scaling-stroke' }}
+      />
       {piece.placements.map((p) => (
         <rect
           key={`${p.partId}#${p.instance}`}

@@ -14,7 +14,11 @@ export interface TagItem {
 export function TagSheets({ items, sheet, jobName }: { items: TagItem[]; sheet: LabelSheet; jobName: string }) {
   const pages = paginate(items, sheet);
   return (
-    <div className="-mx-4 flex flex-col items-start gap-6 overflow-x-auto px-4 pb-2 sm:mx-0 sm:px-0 print:mx-0 print:block print:overflow-visible print:p-0" data-testid="label-sheets" data-print-page={sheet.page.css === 'A4' ? 'part-tags-a4' : 'part-tags-letter'}>
+    <div
+      className="-mx-4 flex flex-col items-start gap-6 overflow-x-auto px-4 pb-2 sm:mx-0 sm:px-0 print:mx-0 print:block print:overflow-visible print:p-0"
+      data-testid="label-sheets"
+      data-print-page={sheet.page.css === 'A4' ? 'part-tags-a4' : 'part-tags-letter'}
+    >
       {pages.map((page, p) => (
         <div
           key={p}
@@ -26,7 +30,11 @@ export function TagSheets({ items, sheet, jobName }: { items: TagItem[]; sheet: 
           {page.map((item, i) => {
             const at = labelOrigin(sheet, i);
             return (
-              <div key={`${item.tag.partId}#${item.tag.instance}`} className="absolute outline-1 outline-dashed outline-paper-edge print:outline-none" style={{ left: `${at.x}mm`, top: `${at.y}mm` }}>
+              <div
+                key={`${item.tag.partId}#${item.tag.instance}`}
+                className="absolute outline-1 outline-dashed outline-paper-edge print:outline-none"
+                style={{ left: `${at.x}mm`, top: `${at.y}mm` }}
+              >
                 <PartTag tag={item.tag} text={item.text} jobName={jobName} qr={item.qr} url={item.url} label={sheet.label} />
               </div>
             );

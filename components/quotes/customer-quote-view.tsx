@@ -27,7 +27,10 @@ export function CustomerQuoteView(q: CustomerQuoteProps) {
         <div>
           <p className="text-xs uppercase tracking-wide text-graphite-mute">{q.shopName}</p>
           <h3 className="text-lg font-semibold">{q.title}</h3>
-          <p className="text-sm text-graphite-soft">{q.jobName}{q.customer ? ` · for ${q.customer}` : ''}</p>
+          <p className="text-sm text-graphite-soft">
+            {q.jobName}
+            {q.customer ? ` · for ${q.customer}` : ''}
+          </p>
         </div>
         <p className="text-sm text-graphite-mute">{q.validUntil ? `Valid until ${q.validUntil}` : `Valid ${q.validityDays} days from sending`}</p>
       </header>
@@ -37,7 +40,11 @@ export function CustomerQuoteView(q: CustomerQuoteProps) {
           <li key={l.id} className="flex items-start justify-between gap-3 py-2 text-sm">
             <div className="min-w-0">
               <p>{l.description}</p>
-              {l.quantity !== null && l.unitPriceMinor !== null && <p className="text-xs text-graphite-mute">{l.quantity} {l.unit} × {money(l.unitPriceMinor)}</p>}
+              {l.quantity !== null && l.unitPriceMinor !== null && (
+                <p className="text-xs text-graphite-mute">
+                  {l.quantity} {l.unit} × {money(l.unitPriceMinor)}
+                </p>
+              )}
             </div>
             <span className="num shrink-0">{money(l.priceMinor)}</span>
           </li>
@@ -45,7 +52,15 @@ export function CustomerQuoteView(q: CustomerQuoteProps) {
       </ul>
       <div className="hidden overflow-x-auto sm:block">
         <table className="data-table" aria-label="Quote lines">
-          <thead><tr><th>Item</th><th className="num">Qty</th><th>Unit</th><th className="num">Unit price</th><th className="num">Amount</th></tr></thead>
+          <thead>
+            <tr>
+              <th>Item</th>
+              <th className="num">Qty</th>
+              <th>Unit</th>
+              <th className="num">Unit price</th>
+              <th className="num">Amount</th>
+            </tr>
+          </thead>
           <tbody>
             {q.lines.map((l) => (
               <tr key={l.id}>
@@ -61,12 +76,30 @@ export function CustomerQuoteView(q: CustomerQuoteProps) {
         </table>
       </div>
       <dl className="ml-auto mt-4 grid max-w-sm grid-cols-[1fr_auto] gap-x-6 gap-y-1 text-sm">
-        <dt>Subtotal</dt><dd className="num">{money(t.subtotalMinor)}</dd>
-        {t.discountMinor > 0 && (<><dt>Discount</dt><dd className="num">−{money(t.discountMinor)}</dd></>)}
-        {q.taxPercent > 0 && (<><dt>Sales tax ({q.taxPercent} %)</dt><dd className="num">{money(t.taxMinor)}</dd></>)}
-        <dt className="font-semibold">Total</dt><dd className="num font-semibold" data-testid="quote-total">{money(t.totalMinor)}</dd>
-        <dt>Deposit on acceptance ({q.depositPercent} %)</dt><dd className="num" data-testid="quote-deposit">{money(t.depositMinor)}</dd>
-        <dt>Balance</dt><dd className="num">{money(t.balanceMinor)}</dd>
+        <dt>Subtotal</dt>
+        <dd className="num">{money(t.subtotalMinor)}</dd>
+        {t.discountMinor > 0 && (
+          <>
+            <dt>Discount</dt>
+            <dd className="num">−{money(t.discountMinor)}</dd>
+          </>
+        )}
+        {q.taxPercent > 0 && (
+          <>
+            <dt>Sales tax ({q.taxPercent} %)</dt>
+            <dd className="num">{money(t.taxMinor)}</dd>
+          </>
+        )}
+        <dt className="font-semibold">Total</dt>
+        <dd className="num font-semibold" data-testid="quote-total">
+          {money(t.totalMinor)}
+        </dd>
+        <dt>Deposit on acceptance ({q.depositPercent} %)</dt>
+        <dd className="num" data-testid="quote-deposit">
+          {money(t.depositMinor)}
+        </dd>
+        <dt>Balance</dt>
+        <dd className="num">{money(t.balanceMinor)}</dd>
       </dl>
       {q.terms && <p className="mt-4 whitespace-pre-line text-xs text-graphite-soft">{q.terms}</p>}
     </article>

@@ -13,7 +13,11 @@ async function post(url: string, body: unknown): Promise<{ ok: true; data: Recor
 }
 
 function Alert({ error }: { error: string | null }) {
-  return error ? <p role="alert" className="rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">{error}</p> : null;
+  return error ? (
+    <p role="alert" className="rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">
+      {error}
+    </p>
+  ) : null;
 }
 
 /** Accept (typed full name, the terms agreed to) or decline (a reason, if they care to give one). */
@@ -50,7 +54,9 @@ export function QuoteAnswerForms({ token, shopName, deposit }: { token: string; 
       <form onSubmit={accept} className="flex flex-col gap-3" noValidate>
         <h2 className="text-lg">Accept the quote</h2>
         <div>
-          <label htmlFor="fullName" className="field-label">Your full name</label>
+          <label htmlFor="fullName" className="field-label">
+            Your full name
+          </label>
           <input id="fullName" name="fullName" autoComplete="name" required minLength={2} maxLength={120} className="field-input" />
         </div>
         <label className="flex items-start gap-2 text-sm">
@@ -59,7 +65,9 @@ export function QuoteAnswerForms({ token, shopName, deposit }: { token: string; 
         </label>
         <Alert error={error} />
         <div className="flex flex-wrap items-center gap-3">
-          <button type="submit" className="btn-primary" disabled={pending !== null}>{pending === 'accept' ? 'Accepting…' : 'Accept the quote'}</button>
+          <button type="submit" className="btn-primary" disabled={pending !== null}>
+            {pending === 'accept' ? 'Accepting…' : 'Accept the quote'}
+          </button>
           {deposit && <span className="text-sm text-graphite-mute">Then pay the deposit of {deposit} online.</span>}
         </div>
       </form>
@@ -67,11 +75,17 @@ export function QuoteAnswerForms({ token, shopName, deposit }: { token: string; 
         <summary className="cursor-pointer text-sm font-medium">Decline the quote</summary>
         <form onSubmit={decline} className="mt-3 flex flex-col gap-3" noValidate>
           <div>
-            <label htmlFor="reason" className="field-label">Why, if you would like to say (optional)</label>
+            <label htmlFor="reason" className="field-label">
+              Why, if you would like to say (optional)
+            </label>
             <textarea id="reason" name="reason" rows={3} maxLength={1000} className="field-input" />
           </div>
           <Alert error={declineError} />
-          <div><button type="submit" className="btn-quiet" disabled={pending !== null}>{pending === 'decline' ? 'Declining…' : 'Decline the quote'}</button></div>
+          <div>
+            <button type="submit" className="btn-quiet" disabled={pending !== null}>
+              {pending === 'decline' ? 'Declining…' : 'Decline the quote'}
+            </button>
+          </div>
         </form>
       </details>
     </section>
@@ -94,7 +108,11 @@ export function PayDepositButton({ token, deposit }: { token: string; deposit: s
   }
   return (
     <div className="flex flex-col gap-2">
-      <div><button type="button" className="btn-accent" onClick={() => void pay()} disabled={pending}>{pending ? 'Opening the checkout…' : `Pay the deposit (${deposit})`}</button></div>
+      <div>
+        <button type="button" className="btn-accent" onClick={() => void pay()} disabled={pending}>
+          {pending ? 'Opening the checkout…' : `Pay the deposit (${deposit})`}
+        </button>
+      </div>
       <Alert error={error} />
     </div>
   );

@@ -9,7 +9,14 @@ const LABEL: Record<QuoteRevisionStatus, string> = {
   declined: 'Declined',
   expired: 'Expired',
 };
-const TONE: Record<QuoteRevisionStatus, Tone> = { draft: 'neutral', sent: 'accent', replaced: 'neutral', accepted: 'good', declined: 'neutral', expired: 'neutral' };
+const TONE: Record<QuoteRevisionStatus, Tone> = {
+  draft: 'neutral',
+  sent: 'accent',
+  replaced: 'neutral',
+  accepted: 'good',
+  declined: 'neutral',
+  expired: 'neutral',
+};
 
 export function QuoteStatusBadge({ status, depositPaid = false }: { status: QuoteRevisionStatus; depositPaid?: boolean }) {
   if (status === 'accepted' && depositPaid) return <StatusBadge tone="good">Accepted · deposit paid</StatusBadge>;

@@ -20,7 +20,11 @@ export interface YieldPoint {
 /** Yield, the saw's waste and spoiled parts as percentages of the stock area per period, with the shop's target. */
 export function YieldChart({ points, target }: { points: YieldPoint[]; target: number }) {
   return (
-    <div className="h-72 w-full" role="img" aria-label={`Yield over time: ${points.map((p) => `${p.label} ${pct(p.yield)}`).join(', ')}; target ${target} %`}>
+    <div
+      className="h-72 w-full"
+      role="img"
+      aria-label={`Yield over time: ${points.map((p) => `${p.label} ${pct(p.yield)}`).join(', ')}; target ${target} %`}
+    >
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={points} margin={{ top: 12, right: 16, bottom: 4, left: 0 }}>
           <CartesianGrid stroke={INK.edge} vertical={false} />
@@ -28,10 +32,42 @@ export function YieldChart({ points, target }: { points: YieldPoint[]; target: n
           <YAxis domain={[0, 100]} unit=" %" width={52} {...axis} />
           <Tooltip formatter={(v) => pct(v)} />
           <Legend wrapperStyle={{ fontSize: 12 }} />
-          <ReferenceLine y={target} stroke={INK.oak} strokeDasharray="6 4" label={{ value: `Target ${target} %`, position: 'insideTopRight', fill: INK.oak, fontSize: 12 }} />
-          <Line type="monotone" dataKey="yield" name="Yield" stroke={INK.sage} strokeWidth={2.5} dot={{ r: 3 }} connectNulls isAnimationActive={false} />
-          <Line type="monotone" dataKey="sawWaste" name="Saw waste" stroke={INK.graphite} strokeWidth={1.5} dot={{ r: 2 }} connectNulls isAnimationActive={false} />
-          <Line type="monotone" dataKey="spoiled" name="Spoiled at the saw" stroke={INK.brick} strokeWidth={1.5} dot={{ r: 2 }} connectNulls isAnimationActive={false} />
+          <ReferenceLine
+            y={target}
+            stroke={INK.oak}
+            strokeDasharray="6 4"
+            label={{ value: `Target ${target} %`, position: 'insideTopRight', fill: INK.oak, fontSize: 12 }}
+          />
+          <Line
+            type="monotone"
+            dataKey="yield"
+            name="Yield"
+            stroke={INK.sage}
+            strokeWidth={2.5}
+            dot={{ r: 3 }}
+            connectNulls
+            isAnimationActive={false}
+          />
+          <Line
+            type="monotone"
+            dataKey="sawWaste"
+            name="Saw waste"
+            stroke={INK.graphite}
+            strokeWidth={1.5}
+            dot={{ r: 2 }}
+            connectNulls
+            isAnimationActive={false}
+          />
+          <Line
+            type="monotone"
+            dataKey="spoiled"
+            name="Spoiled at the saw"
+            stroke={INK.brick}
+            strokeWidth={1.5}
+            dot={{ r: 2 }}
+            connectNulls
+            isAnimationActive={false}
+          />
         </LineChart>
       </ResponsiveContainer>
     </div>
@@ -48,7 +84,11 @@ export interface OffcutPoint {
 export function OffcutUseChart({ points, unit }: { points: OffcutPoint[]; unit: string }) {
   const area = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? `${v.toFixed(1)} ${unit}` : '—');
   return (
-    <div className="h-64 w-full" role="img" aria-label={`Stock cut per period: ${points.map((p) => `${p.label} ${area(p.fromRack)} from offcuts, ${area(p.fromNew)} new`).join('; ')}`}>
+    <div
+      className="h-64 w-full"
+      role="img"
+      aria-label={`Stock cut per period: ${points.map((p) => `${p.label} ${area(p.fromRack)} from offcuts, ${area(p.fromNew)} new`).join('; ')}`}
+    >
       <ResponsiveContainer width="100%" height="100%">
         <BarChart data={points} margin={{ top: 12, right: 16, bottom: 4, left: 0 }}>
           <CartesianGrid stroke={INK.edge} vertical={false} />
@@ -72,9 +112,16 @@ export interface ValuePoint {
 
 /** Stock value on hand and reserved at each period's close, in the shop's currency. */
 export function StockValueChart({ points, currency }: { points: ValuePoint[]; currency: string }) {
-  const money = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? new Intl.NumberFormat('en-US', { style: 'currency', currency, maximumFractionDigits: 0 }).format(v) : '—');
+  const money = (v: unknown) =>
+    typeof v === 'number' && Number.isFinite(v)
+      ? new Intl.NumberFormat('en-US', { style: 'currency', currency, maximumFractionDigits: 0 }).format(v)
+      : '—';
   return (
-    <div className="h-64 w-full" role="img" aria-label={`Stock value at each period’s close: ${points.map((p) => `${p.label} ${money(p.onHand)} on hand, ${money(p.reserved)} reserved`).join('; ')}`}>
+    <div
+      className="h-64 w-full"
+      role="img"
+      aria-label={`Stock value at each period’s close: ${points.map((p) => `${p.label} ${money(p.onHand)} on hand, ${money(p.reserved)} reserved`).join('; ')}`}
+    >
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={points} margin={{ top: 12, right: 16, bottom: 4, left: 8 }}>
           <CartesianGrid stroke={INK.edge} vertical={false} />
@@ -83,7 +130,15 @@ export function StockValueChart({ points, currency }: { points: ValuePoint[]; cu
           <Tooltip formatter={(v) => money(v)} />
           <Legend wrapperStyle={{ fontSize: 12 }} />
           <Line type="stepAfter" dataKey="onHand" name="On hand" stroke={INK.oak} strokeWidth={2.5} dot={{ r: 3 }} isAnimationActive={false} />
-          <Line type="stepAfter" dataKey="reserved" name="Reserved for released plans" stroke={INK.graphite} strokeWidth={1.5} dot={{ r: 2 }} isAnimationActive={false} />
+          <Line
+            type="stepAfter"
+            dataKey="reserved"
+            name="Reserved for released plans"
+            stroke={INK.graphite}
+            strokeWidth={1.5}
+            dot={{ r: 2 }}
+            isAnimationActive={false}
+          />
         </LineChart>
       </ResponsiveContainer>
     </div>
@@ -101,7 +156,11 @@ export interface QuotingPoint {
 /** Quote revisions sent, and what their customers did with them, per period. */
 export function QuotingChart({ points }: { points: QuotingPoint[] }) {
   return (
-    <div className="h-64 w-full" role="img" aria-label={`Quotes per period: ${points.map((p) => `${p.label} ${p.sent} sent, ${p.accepted} accepted, ${p.declined} declined, ${p.expired} expired`).join('; ')}`}>
+    <div
+      className="h-64 w-full"
+      role="img"
+      aria-label={`Quotes per period: ${points.map((p) => `${p.label} ${p.sent} sent, ${p.accepted} accepted, ${p.declined} declined, ${p.expired} expired`).join('; ')}`}
+    >
       <ResponsiveContainer width="100%" height="100%">
         <BarChart data={points} margin={{ top: 12, right: 16, bottom: 4, left: 0 }}>
           <CartesianGrid stroke={INK.edge} vertical={false} />

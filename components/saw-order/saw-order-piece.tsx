@@ -23,11 +23,17 @@ export function SawOrderPiece({ view, first }: { view: PieceView; first: boolean
         </p>
       </header>
       {view.steps.length === 0 ? (
-        <p className="card px-4 py-6 text-sm text-graphite-mute">No saw order for this piece yet: it is rebuilt when the plan is saved on the Layout bench.</p>
+        <p className="card px-4 py-6 text-sm text-graphite-mute">
+          No saw order for this piece yet: it is rebuilt when the plan is saved on the Layout bench.
+        </p>
       ) : (
         <ol className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3 print:grid-cols-5 print:gap-1" aria-label={`Cuts on ${view.heading}`}>
           {view.steps.map(({ text, geometry }) => (
-            <li key={text.n} className="card flex flex-col gap-2 p-3 print:break-inside-avoid print:gap-1 print:rounded-none print:p-1.5" data-testid="saw-step">
+            <li
+              key={text.n}
+              className="card flex flex-col gap-2 p-3 print:break-inside-avoid print:gap-1 print:rounded-none print:p-1.5"
+              data-testid="saw-step"
+            >
               <div className="flex items-start justify-between gap-2">
                 <span className="font-mono text-3xl font-semibold leading-none print:text-base" aria-label={`Cut ${text.n}`}>
                   {text.n}
@@ -78,7 +84,10 @@ function ProducedList({ text }: { text: PieceView['steps'][number]['text'] }) {
         <div>
           <span className="text-graphite-mute">Frees </span>
           {text.frees.map((f) => (
-            <span key={f} className="mr-1 inline-block rounded bg-sage-wash px-1.5 font-medium text-sage print:bg-white print:px-0 print:text-graphite">
+            <span
+              key={f}
+              className="mr-1 inline-block rounded bg-sage-wash px-1.5 font-medium text-sage print:bg-white print:px-0 print:text-graphite"
+            >
               {f}
             </span>
           ))}

@@ -42,14 +42,43 @@ export function StepDiagram({
       {before
         .filter((b) => b.name !== step.piece)
         .map((b) => (
-          <rect key={b.name} x={b.rect.x} y={b.rect.y} width={b.rect.w} height={b.rect.h} className="fill-paper stroke-graphite-faint" strokeWidth={0.75} style={vector} />
+          <rect
+            key={b.name}
+            x={b.rect.x}
+            y={b.rect.y}
+            width={b.rect.w}
+            height={b.rect.h}
+            className="fill-paper stroke-graphite-faint"
+            strokeWidth={0.75}
+            style={vector}
+          />
         ))}
       <rect x={piece.x} y={piece.y} width={piece.w} height={piece.h} className="fill-oak-wash stroke-oak" strokeWidth={1.5} style={vector} />
       {produces.map((p) => (
-        <rect key={p.name} x={p.x} y={p.y} width={p.w} height={p.h} className={ROLE_CLASS[p.role]} strokeWidth={p.role === 'piece' ? 0.75 : 1.25} style={vector} fillOpacity={p.role === 'piece' ? 0.4 : 1} />
+        <rect
+          key={p.name}
+          x={p.x}
+          y={p.y}
+          width={p.w}
+          height={p.h}
+          className={ROLE_CLASS[p.role]}
+          strokeWidth={p.role === 'piece' ? 0.75 : 1.25}
+          style={vector}
+          fillOpacity={p.role === 'piece' ? 0.4 : 1}
+        />
       ))}
       {parts.map((r, i) => (
-        <rect key={i} x={r.x} y={r.y} width={r.w} height={r.h} className="fill-none stroke-graphite-faint" strokeWidth={0.75} strokeDasharray="3 2" style={vector} />
+        <rect
+          key={i}
+          x={r.x}
+          y={r.y}
+          width={r.w}
+          height={r.h}
+          className="fill-none stroke-graphite-faint"
+          strokeWidth={0.75}
+          strokeDasharray="3 2"
+          style={vector}
+        />
       ))}
       <line {...fenceDimension} className="stroke-graphite-soft" strokeWidth={1} strokeDasharray="4 3" style={vector} />
       <line {...fenceEdge} className="stroke-graphite" strokeWidth={6} strokeLinecap="square" style={vector} data-role="fence" />

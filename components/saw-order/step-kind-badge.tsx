@@ -7,7 +7,9 @@ export function StepKindBadge({ kind, trim, narrow, large = false }: { kind: Saw
     <span className="inline-flex flex-wrap items-center gap-1.5">
       <span
         className={`inline-flex items-center gap-1 rounded font-semibold uppercase tracking-wide ${size} ${
-          kind === 'rip' ? 'bg-oak text-white print:border print:border-oak print:bg-white print:text-oak-deep' : 'bg-graphite text-paper print:border print:border-graphite print:bg-white print:text-graphite'
+          kind === 'rip'
+            ? 'bg-oak text-white print:border print:border-oak print:bg-white print:text-oak-deep'
+            : 'bg-graphite text-paper print:border print:border-graphite print:bg-white print:text-graphite'
         }`}
       >
         <span aria-hidden>{kind === 'rip' ? '⟷' : '↕'}</span>

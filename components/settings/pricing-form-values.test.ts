@@ -20,7 +20,14 @@ describe('the pricing form', () => {
   });
 
   test('each bad field gets its own message', () => {
-    const text = { ...pricingFormText(DEFAULT_PRICING, 'USD'), rateSaw: '65.005', markupMaterial: '-5', taxPercent: '45', validityDays: '', minutesPerCut: 'two' };
+    const text = {
+      ...pricingFormText(DEFAULT_PRICING, 'USD'),
+      rateSaw: '65.005',
+      markupMaterial: '-5',
+      taxPercent: '45',
+      validityDays: '',
+      minutesPerCut: 'two',
+    };
     const read = readPricingForm(text, 'USD');
     expect(read.ok).toBe(false);
     if (read.ok) return;

@@ -20,7 +20,13 @@ export const PRICING_FIELDS = [
   ['validityDays', 'Quotes valid for (days)', 'number', ''],
 ] as const;
 type Key = (typeof PRICING_FIELDS)[number][0];
-export type PricingFormText = Record<Key, string> & { terms: string; offcutValuation: string; taxMaterial: boolean; taxHardware: boolean; taxLabour: boolean };
+export type PricingFormText = Record<Key, string> & {
+  terms: string;
+  offcutValuation: string;
+  taxMaterial: boolean;
+  taxHardware: boolean;
+  taxLabour: boolean;
+};
 
 const RATE_KEYS = { rateSaw: 'saw', rateMachining: 'machining', rateAssembly: 'assembly', rateFinishing: 'finishing' } as const;
 
@@ -60,7 +66,10 @@ function readNumber(text: string): number | null | 'bad' {
 }
 
 /** Reads the whole form into pricing settings, or field messages (keys as the form names them). */
-export function readPricingForm(text: PricingFormText, currency: string): { ok: true; value: PricingSettings } | { ok: false; errors: Record<string, string[]> } {
+export function readPricingForm(
+  text: PricingFormText,
+  currency: string,
+): { ok: true; value: PricingSettings } | { ok: false; errors: Record<string, string[]> } {
   const errors: Record<string, string[]> = {};
   const numbers = {} as Record<Key, number | null>;
   for (const [key, label, kind] of PRICING_FIELDS) {
@@ -97,7 +106,10 @@ export function readPricingForm(text: PricingFormText, currency: string): { ok: 
   };
   const parsed = pricingSettingsSchema.safeParse(candidate);
   if (parsed.success) return { ok: true, value: parsed.data };
-  const back: Record<string, Key | 'terms' | 'offcutValuation'> = { 'markupPercent.material': 'markupMaterial', 'markupPercent.hardware': 'markupHardware' };
+  const back: Record<string, Key | 'terms' | 'offcutValuation'> = {
+    'markupPercent.material': 'markupMaterial',
+    'markupPercent.hardware': 'markupHardware',
+  };
   for (const issue of parsed.error.issues) {
     const path = issue.path.join('.');
     const key = back[path] ?? path;

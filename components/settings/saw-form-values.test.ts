@@ -5,16 +5,31 @@ const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
 
 describe('the saw form', () => {
   test('reads inches into mm: 30″ rip = 762 mm, ⅛″ kerf = 3.175 mm, 1″ = 25.4 mm (1 in = 25.4 mm exactly); blanks are no limit', () => {
-    const read = readSawForm({ ...blankSawText(), name: 'Cabinet saw', kerf: '1/8', ripCapacity: '30', crosscutCapacity: '24', minFenceWidth: '1' }, IMPERIAL);
+    const read = readSawForm(
+      { ...blankSawText(), name: 'Cabinet saw', kerf: '1/8', ripCapacity: '30', crosscutCapacity: '24', minFenceWidth: '1' },
+      IMPERIAL,
+    );
     expect(read).toEqual({
       ok: true,
-      saw: expect.objectContaining({ kerfMm: 3.175, ripCapacityMm: 762, crosscutCapacityMm: 609.6, maxPieceLengthMm: null, maxPieceWidthMm: null, maxStages: 3, firstStage: 'rip', minFenceWidthMm: 25.4 }),
+      saw: expect.objectContaining({
+        kerfMm: 3.175,
+        ripCapacityMm: 762,
+        crosscutCapacityMm: 609.6,
+        maxPieceLengthMm: null,
+        maxPieceWidthMm: null,
+        maxStages: 3,
+        firstStage: 'rip',
+        minFenceWidthMm: 25.4,
+      }),
     });
     if (read.ok) expect(readSawForm(sawText(read.saw, IMPERIAL), IMPERIAL)).toEqual(read);
   });
 
   test('shows a 3/32″ track-saw kerf exactly, not rounded to the shop’s sixteenths (3/32″ = 2.38125 mm)', () => {
-    const read = readSawForm({ ...blankSawText(), kind: 'track-saw', name: 'Track saw', kerf: '3/32', crosscutCapacity: '110', maxStages: 'any', minFenceWidth: '0' }, IMPERIAL);
+    const read = readSawForm(
+      { ...blankSawText(), kind: 'track-saw', name: 'Track saw', kerf: '3/32', crosscutCapacity: '110', maxStages: 'any', minFenceWidth: '0' },
+      IMPERIAL,
+    );
     expect(read.ok).toBe(true);
     if (!read.ok) return;
     expect(read.saw.kerfMm).toBeCloseTo(2.38125, 9);

@@ -21,7 +21,17 @@ export interface SawFormText {
 const ZERO = /^\s*0+(\.0*)?\s*(mm|in|″|")?\s*$/i;
 
 export const blankSawText = (): SawFormText => ({
-  kind: 'table-saw', kindName: '', name: '', kerf: '', ripCapacity: '', crosscutCapacity: '', maxPieceLength: '', maxPieceWidth: '', maxStages: '3', firstStage: 'rip', minFenceWidth: '',
+  kind: 'table-saw',
+  kindName: '',
+  name: '',
+  kerf: '',
+  ripCapacity: '',
+  crosscutCapacity: '',
+  maxPieceLength: '',
+  maxPieceWidth: '',
+  maxStages: '3',
+  firstStage: 'rip',
+  minFenceWidth: '',
 });
 
 export function sawText(s: Saw, units: ShopUnits): SawFormText {
@@ -42,8 +52,17 @@ export function sawText(s: Saw, units: ShopUnits): SawFormText {
 }
 
 const FIELD: Record<string, keyof SawFormText> = {
-  kind: 'kind', kindName: 'kindName', name: 'name', kerfMm: 'kerf', ripCapacityMm: 'ripCapacity', crosscutCapacityMm: 'crosscutCapacity',
-  maxPieceLengthMm: 'maxPieceLength', maxPieceWidthMm: 'maxPieceWidth', maxStages: 'maxStages', firstStage: 'firstStage', minFenceWidthMm: 'minFenceWidth',
+  kind: 'kind',
+  kindName: 'kindName',
+  name: 'name',
+  kerfMm: 'kerf',
+  ripCapacityMm: 'ripCapacity',
+  crosscutCapacityMm: 'crosscutCapacity',
+  maxPieceLengthMm: 'maxPieceLength',
+  maxPieceWidthMm: 'maxPieceWidth',
+  maxStages: 'maxStages',
+  firstStage: 'firstStage',
+  minFenceWidthMm: 'minFenceWidth',
 };
 /** The form field an API field message belongs to. */
 export const sawFormField = (apiField: string): keyof SawFormText => FIELD[apiField] ?? 'name';
@@ -93,8 +112,17 @@ export function sawFacts(s: Saw, units: ShopUnits): { label: string; value: stri
     { label: 'Kerf', value: len(s.kerfMm) },
     { label: 'Rip capacity', value: limit(s.ripCapacityMm, s.kind === 'track-saw' ? 'no fence' : 'no limit') },
     { label: s.kind === 'track-saw' ? 'Track length' : 'Crosscut capacity', value: limit(s.crosscutCapacityMm, 'no limit') },
-    { label: 'Largest piece', value: s.maxPieceLengthMm === null && s.maxPieceWidthMm === null ? 'any' : `${limit(s.maxPieceLengthMm, 'any length')} × ${limit(s.maxPieceWidthMm, 'any width')}` },
-    { label: 'Stages', value: `${s.maxStages === null ? 'any number' : `at most ${s.maxStages}`}, ${s.firstStage === 'rip' ? 'rips' : 'crosscuts'} first` },
+    {
+      label: 'Largest piece',
+      value:
+        s.maxPieceLengthMm === null && s.maxPieceWidthMm === null
+          ? 'any'
+          : `${limit(s.maxPieceLengthMm, 'any length')} × ${limit(s.maxPieceWidthMm, 'any width')}`,
+    },
+    {
+      label: 'Stages',
+      value: `${s.maxStages === null ? 'any number' : `at most ${s.maxStages}`}, ${s.firstStage === 'rip' ? 'rips' : 'crosscuts'} first`,
+    },
     { label: 'Narrowest rip at the fence', value: s.minFenceWidthMm === 0 ? 'no minimum set' : len(s.minFenceWidthMm) },
   ];
 }

@@ -33,7 +33,11 @@ describe('the Shop settings form', () => {
         fc.constantFrom(...UNIT_CHOICES.map((c) => c.units)),
         fc.record(Object.fromEntries(LENGTH_FIELDS.map(([key]) => [key, length])) as Record<(typeof LENGTH_FIELDS)[number][0], typeof length>),
         fc.integer({ min: 0, max: 90 }),
-        fc.record({ yieldTargetPercent: fc.integer({ min: 1, max: 100 }), offcutAgeMonths: fc.integer({ min: 1, max: 120 }), timeZone: fc.constantFrom('UTC', 'America/Chicago', 'Europe/Berlin', 'Asia/Kolkata') }),
+        fc.record({
+          yieldTargetPercent: fc.integer({ min: 1, max: 100 }),
+          offcutAgeMonths: fc.integer({ min: 1, max: 120 }),
+          timeZone: fc.constantFrom('UTC', 'America/Chicago', 'Europe/Berlin', 'Asia/Kolkata'),
+        }),
         (units, lengths, wastePercent, others) => {
           const current = { ...DEMO, units, wastePercent, ...others, ...lengths };
           const read = readSettingsForm(current, settingsFormText(current));
@@ -60,8 +64,14 @@ describe('the Shop settings form', () => {
   });
 
   test('the time zone, yield target and offcut age are sent only when changed, and a non-number is named', () => {
-    expect(readSettingsForm(DEMO, { ...settingsFormText(DEMO), timeZone: 'America/Denver', yieldTargetPercent: '80' })).toEqual({ ok: true, patch: { timeZone: 'America/Denver', yieldTargetPercent: 80 } });
-    expect(readSettingsForm(DEMO, { ...settingsFormText(DEMO), offcutAgeMonths: 'six' })).toEqual({ ok: false, errors: { offcutAgeMonths: ['Enter a whole number of months, such as 6.'] } });
+    expect(readSettingsForm(DEMO, { ...settingsFormText(DEMO), timeZone: 'America/Denver', yieldTargetPercent: '80' })).toEqual({
+      ok: true,
+      patch: { timeZone: 'America/Denver', yieldTargetPercent: 80 },
+    });
+    expect(readSettingsForm(DEMO, { ...settingsFormText(DEMO), offcutAgeMonths: 'six' })).toEqual({
+      ok: false,
+      errors: { offcutAgeMonths: ['Enter a whole number of months, such as 6.'] },
+    });
   });
 
   test('sends what a person changed, read in the shop’s unit (3/32″ kerf → 2.38125 mm, NIST 25.4 mm/in)', () => {

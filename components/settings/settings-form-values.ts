@@ -16,7 +16,11 @@ export const LENGTH_FIELDS = [
   ['edgeTrimMm', 'Edge trim', 'Taken off each factory edge of sheets and boards.'],
   ['minOffcutLengthMm', 'Keep offcuts at least this long', ''],
   ['minOffcutWidthMm', '… and at least this wide', ''],
-  ['minFenceWidthMm', 'Narrowest rip at the fence', 'A saw order never leaves a strip narrower than this between blade and fence: it turns the piece, or sends the cut to a sled, track saw or band saw. Your saw’s manual decides.'],
+  [
+    'minFenceWidthMm',
+    'Narrowest rip at the fence',
+    'A saw order never leaves a strip narrower than this between blade and fence: it turns the piece, or sends the cut to a sled, track saw or band saw. Your saw’s manual decides.',
+  ],
 ] as const;
 type LengthKey = (typeof LENGTH_FIELDS)[number][0];
 
@@ -31,7 +35,8 @@ type WholeKey = (typeof WHOLE_FIELDS)[number][0];
 /** The form's fields as text: what a person sees and may change. */
 export type SettingsFormText = { name: string; units: string; currency: string; timeZone: string } & Record<LengthKey | WholeKey, string>;
 
-export const unitKey = (u: ShopUnits) => UNIT_CHOICES.find((c) => c.units.system === u.system && c.units.precision === u.precision && c.units.feet === u.feet)?.key ?? 'in16';
+export const unitKey = (u: ShopUnits) =>
+  UNIT_CHOICES.find((c) => c.units.system === u.system && c.units.precision === u.precision && c.units.feet === u.feet)?.key ?? 'in16';
 
 /**
  * The stored settings as the form shows them. Lengths are written so they read back exactly (6 mm stays "6 mm" in
@@ -47,7 +52,10 @@ export function settingsFormText(current: ShopSettings): SettingsFormText {
  * What to send: only the fields a person changed, so saving an untouched form changes nothing. Lengths are read in
  * the unit the form showed them in; a field left as shown keeps its stored value to the last digit.
  */
-export function readSettingsForm(current: ShopSettings, text: SettingsFormText): { ok: true; patch: Partial<ShopSettings> } | { ok: false; errors: Record<string, string[]> } {
+export function readSettingsForm(
+  current: ShopSettings,
+  text: SettingsFormText,
+): { ok: true; patch: Partial<ShopSettings> } | { ok: false; errors: Record<string, string[]> } {
   const shown = settingsFormText(current);
   const errors: Record<string, string[]> = {};
   const patch: Partial<ShopSettings> = {};

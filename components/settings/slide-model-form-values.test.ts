@@ -5,20 +5,47 @@ import { blankSlideModelText, readSlideModelForm, slideModelText, widthRuleText 
 const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
 const METRIC = { system: 'metric', precision: 1, feet: false } as const;
 
-const text = { ...blankSlideModelText(), name: 'Halbrook UM-58', lengths: '12, 15, 18, 21', widthDeduction: '1 5/8', maxSideThickness: '5/8', bottomRecess: '1/2', heightClearance: '3/4', rearClearance: '5/8' };
+const text = {
+  ...blankSlideModelText(),
+  name: 'Halbrook UM-58',
+  lengths: '12, 15, 18, 21',
+  widthDeduction: '1 5/8',
+  maxSideThickness: '5/8',
+  bottomRecess: '1/2',
+  heightClearance: '3/4',
+  rearClearance: '5/8',
+};
 
 describe('the slide model form', () => {
   test('reads an inch shop’s model: lengths in inches, shortest first, fractions exact', () => {
     const read = readSlideModelForm({ ...text, lengths: '21, 12; 18, 15' }, IMPERIAL);
     expect(read).toMatchObject({
       ok: true,
-      model: { lengthsMm: [12, 15, 18, 21].map((l) => expect.closeTo(inches(l), 9)), widthDeductionMm: expect.closeTo(inches(1.625), 9), maxSideThicknessMm: expect.closeTo(inches(5 / 8), 9) },
+      model: {
+        lengthsMm: [12, 15, 18, 21].map((l) => expect.closeTo(inches(l), 9)),
+        widthDeductionMm: expect.closeTo(inches(1.625), 9),
+        maxSideThicknessMm: expect.closeTo(inches(5 / 8), 9),
+      },
     });
   });
 
   test('reads a metric shop’s lengths with decimal commas, and a blank thickest side as none', () => {
-    const read = readSlideModelForm({ ...text, lengths: '250, 300,5; 350', widthDeduction: '10', maxSideThickness: '', bottomRecess: '0', heightClearance: '20', rearClearance: '0' }, METRIC);
-    expect(read).toMatchObject({ ok: true, model: { lengthsMm: [250, 300.5, 350], maxSideThicknessMm: null, bottomRecessMm: 0, rearClearanceMm: 0 } });
+    const read = readSlideModelForm(
+      {
+        ...text,
+        lengths: '250, 300,5; 350',
+        widthDeduction: '10',
+        maxSideThickness: '',
+        bottomRecess: '0',
+        heightClearance: '20',
+        rearClearance: '0',
+      },
+      METRIC,
+    );
+    expect(read).toMatchObject({
+      ok: true,
+      model: { lengthsMm: [250, 300.5, 350], maxSideThicknessMm: null, bottomRecessMm: 0, rearClearanceMm: 0 },
+    });
   });
 
   test('names the length it cannot read, and how to separate them', () => {

@@ -29,7 +29,15 @@ const LIST_SEPARATOR = /\s*;\s*|\s*\n\s*|,\s+/;
 const ZERO = /^\s*0+(\.0*)?\s*(mm|in|″|")?\s*$/i;
 
 export const blankSlideModelText = (): SlideModelFormText => ({
-  kind: 'undermount', name: '', lengths: '', widthRule: 'inside', widthDeduction: '', maxSideThickness: '', bottomRecess: '', heightClearance: '', rearClearance: '',
+  kind: 'undermount',
+  name: '',
+  lengths: '',
+  widthRule: 'inside',
+  widthDeduction: '',
+  maxSideThickness: '',
+  bottomRecess: '',
+  heightClearance: '',
+  rearClearance: '',
 });
 
 export function slideModelText(m: SlideModel, units: ShopUnits): SlideModelFormText {
@@ -48,10 +56,17 @@ export function slideModelText(m: SlideModel, units: ShopUnits): SlideModelFormT
 }
 
 /** The form's text as a slide model, or one message per field (keys are the form's field names). */
-export function readSlideModelForm(text: SlideModelFormText, units: ShopUnits): { ok: true; model: SlideModel } | { ok: false; errors: Record<string, string> } {
+export function readSlideModelForm(
+  text: SlideModelFormText,
+  units: ShopUnits,
+): { ok: true; model: SlideModel } | { ok: false; errors: Record<string, string> } {
   const unit = shopLengthUnit(units);
   const errors: Record<string, string> = {};
-  const length = (field: keyof SlideModelFormText, value: string, opts: { zero?: boolean; blank?: 'zero' | 'null' } = {}): number | null | undefined => {
+  const length = (
+    field: keyof SlideModelFormText,
+    value: string,
+    opts: { zero?: boolean; blank?: 'zero' | 'null' } = {},
+  ): number | null | undefined => {
     if (value.trim() === '') {
       if (opts.blank === 'zero') return 0;
       if (opts.blank === 'null') return null;
@@ -65,7 +80,10 @@ export function readSlideModelForm(text: SlideModelFormText, units: ShopUnits): 
     return undefined;
   };
 
-  const pieces = text.lengths.split(LIST_SEPARATOR).map((p) => p.trim()).filter(Boolean);
+  const pieces = text.lengths
+    .split(LIST_SEPARATOR)
+    .map((p) => p.trim())
+    .filter(Boolean);
   const lengthsMm: number[] = [];
   for (const piece of pieces) {
     const parsed = parseLength(piece, { unit });
@@ -88,8 +106,15 @@ export function readSlideModelForm(text: SlideModelFormText, units: ShopUnits): 
   const parsed = slideModelSchema.safeParse(candidate);
   if (!parsed.success) {
     const field: Record<string, keyof SlideModelFormText> = {
-      kind: 'kind', name: 'name', lengthsMm: 'lengths', widthRule: 'widthRule', widthDeductionMm: 'widthDeduction', maxSideThicknessMm: 'maxSideThickness',
-      bottomRecessMm: 'bottomRecess', heightClearanceMm: 'heightClearance', rearClearanceMm: 'rearClearance',
+      kind: 'kind',
+      name: 'name',
+      lengthsMm: 'lengths',
+      widthRule: 'widthRule',
+      widthDeductionMm: 'widthDeduction',
+      maxSideThicknessMm: 'maxSideThickness',
+      bottomRecessMm: 'bottomRecess',
+      heightClearanceMm: 'heightClearance',
+      rearClearanceMm: 'rearClearance',
     };
     for (const issue of parsed.error.issues) {
       const key = field[String(issue.path[0])] ?? 'name';
@@ -100,7 +125,11 @@ export function readSlideModelForm(text: SlideModelFormText, units: ShopUnits): 
 }
 
 /** The model's rule in one line, in the shop's unit: "Inside width = opening − 1-5/8″". */
-export function widthRuleText(m: Pick<SlideModel, 'widthRule' | 'widthDeductionMm'>, units: ShopUnits, len: (mm: number) => string = (mm) => formatLength(mm, units)): string {
+export function widthRuleText(
+  m: Pick<SlideModel, 'widthRule' | 'widthDeductionMm'>,
+  units: ShopUnits,
+  len: (mm: number) => string = (mm) => formatLength(mm, units),
+): string {
   return `${m.widthRule === 'inside' ? 'Inside width' : 'Box width'} = opening − ${len(m.widthDeductionMm)}`;
 }
 

@@ -39,7 +39,9 @@ export function RouterCautions() {
     <aside aria-label="Router table cautions" className="rounded-md border border-amber/40 bg-amber-wash/60 p-3 text-sm">
       <p className="mb-1 font-semibold text-amber">Router table cautions</p>
       <ul className="list-disc space-y-0.5 pl-5 text-graphite-soft">
-        {ROUTER_TABLE_CAUTIONS.map((c) => <li key={c}>{c}</li>)}
+        {ROUTER_TABLE_CAUTIONS.map((c) => (
+          <li key={c}>{c}</li>
+        ))}
       </ul>
     </aside>
   );

@@ -23,13 +23,7 @@ export function ShellFrame({ brand, sidebar, children }: { brand: ReactNode; sid
     <div className="min-h-screen lg:flex">
       <header className="sticky top-0 z-30 flex items-center justify-between gap-3 border-b border-paper-edge bg-paper-deep/95 px-4 py-1.5 backdrop-blur lg:hidden print:hidden">
         {brand}
-        <button
-          type="button"
-          className="btn-quiet min-h-11 px-4"
-          aria-expanded={open}
-          aria-controls="app-sidebar"
-          onClick={() => setOpen((o) => !o)}
-        >
+        <button type="button" className="btn-quiet min-h-11 px-4" aria-expanded={open} aria-controls="app-sidebar" onClick={() => setOpen((o) => !o)}>
           <svg viewBox="0 0 20 20" className="h-5 w-5" aria-hidden="true">
             {open ? (
               <path d="M5 5l10 10M15 5L5 15" stroke="currentColor" strokeWidth="2" strokeLinecap="round" />

@@ -32,7 +32,12 @@ const time = (iso: string) => new Date(iso).toLocaleTimeString([], { hour: '2-di
 export function CuttingView({ planId, views, initial, canFinish }: Props) {
   const key = ['saw-steps', planId];
   const client = useQueryClient();
-  const ticksQuery = useQuery({ queryKey: key, queryFn: () => api<PlanTicks>(`/api/plans/${planId}/steps`), initialData: initial, refetchInterval: 10_000 });
+  const ticksQuery = useQuery({
+    queryKey: key,
+    queryFn: () => api<PlanTicks>(`/api/plans/${planId}/steps`),
+    initialData: initial,
+    refetchInterval: 10_000,
+  });
   const data = ticksQuery.data;
   const pieces = useMemo(() => views.map((v) => ({ sawOrder: v.steps.map((s) => s.geometry.step) })), [views]);
   const progress = sawProgress(pieces, data.ticks);
@@ -41,17 +46,23 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
   const wake = useWakeLock(true);
 
   const toggle = useMutation({
-    mutationFn: ({ piece, step, done }: Toggle) => api<PlanTicks>(`/api/plans/${planId}/steps`, { method: done ? 'POST' : 'DELETE', body: { piece, step } }),
+    mutationFn: ({ piece, step, done }: Toggle) =>
+      api<PlanTicks>(`/api/plans/${planId}/steps`, { method: done ? 'POST' : 'DELETE', body: { piece, step } }),
     onMutate: async ({ piece, step, done }) => {
       await client.cancelQueries({ queryKey: key });
       const before = client.getQueryData<PlanTicks>(key);
-      client.setQueryData<PlanTicks>(key, (old) =>
-        old && {
-          ...old,
-          ticks: done
-            ? [...old.ticks.filter((t) => !(t.piece === piece && t.step === step)), { piece, step, doneAt: new Date().toISOString(), doneBy: 'You' }]
-            : old.ticks.filter((t) => !(t.piece === piece && t.step === step)),
-        },
+      client.setQueryData<PlanTicks>(
+        key,
+        (old) =>
+          old && {
+            ...old,
+            ticks: done
+              ? [
+                  ...old.ticks.filter((t) => !(t.piece === piece && t.step === step)),
+                  { piece, step, doneAt: new Date().toISOString(), doneBy: 'You' },
+                ]
+              : old.ticks.filter((t) => !(t.piece === piece && t.step === step)),
+          },
       );
       return { before };
     },
@@ -170,9 +181,14 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
               </div>
               <div>
                 <div className="text-sm text-graphite-mute">
-                  <span className="uppercase tracking-wide">Fence</span> · cutting piece <strong className="text-graphite">{current.text.piece}</strong>
+                  <span className="uppercase tracking-wide">Fence</span> · cutting piece{' '}
+                  <strong className="text-graphite">{current.text.piece}</strong>
                 </div>
-                <div className="whitespace-nowrap font-mono font-semibold leading-none" style={{ fontSize: fenceFontSize(current.text.fence) }} data-testid="current-fence">
+                <div
+                  className="whitespace-nowrap font-mono font-semibold leading-none"
+                  style={{ fontSize: fenceFontSize(current.text.fence) }}
+                  data-testid="current-fence"
+                >
                   {current.text.fence}
                 </div>
                 <div className="mt-1 text-base text-graphite-soft">
@@ -193,11 +209,21 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
             />
             <div className="flex flex-col gap-2 [grid-area:act]">
               {currentTick ? (
-                <button key={`undo-${current.text.n}`} type="button" className="btn-quiet min-h-20 w-full text-xl" onClick={() => set(current.text.n, false)}>
+                <button
+                  key={`undo-${current.text.n}`}
+                  type="button"
+                  className="btn-quiet min-h-20 w-full text-xl"
+                  onClick={() => set(current.text.n, false)}
+                >
                   Cut {current.text.n} is ticked — undo
                 </button>
               ) : (
-                <button key={`done-${current.text.n}`} type="button" className="btn-accent min-h-20 w-full text-2xl" onClick={() => set(current.text.n, true)}>
+                <button
+                  key={`done-${current.text.n}`}
+                  type="button"
+                  className="btn-accent min-h-20 w-full text-2xl"
+                  onClick={() => set(current.text.n, true)}
+                >
                   Done — cut {current.text.n}
                 </button>
               )}
@@ -248,7 +274,10 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
             const tick = tickOf(pieceIndex, text.n);
             const isCurrent = text.n === currentN;
             return (
-              <li key={text.n} className={`flex items-stretch overflow-hidden rounded-lg border-2 bg-white ${isCurrent ? 'border-oak' : 'border-paper-edge'}`}>
+              <li
+                key={text.n}
+                className={`flex items-stretch overflow-hidden rounded-lg border-2 bg-white ${isCurrent ? 'border-oak' : 'border-paper-edge'}`}
+              >
                 <button
                   type="button"
                   role="checkbox"
@@ -264,7 +293,11 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                     {tick ? '✓' : ''}
                   </span>
                 </button>
-                <button type="button" onClick={() => setPicked(text.n)} className="flex min-h-16 min-w-0 flex-1 flex-col justify-center px-3 py-1.5 text-left hover:bg-paper">
+                <button
+                  type="button"
+                  onClick={() => setPicked(text.n)}
+                  className="flex min-h-16 min-w-0 flex-1 flex-col justify-center px-3 py-1.5 text-left hover:bg-paper"
+                >
                   <span className="flex flex-wrap items-center gap-x-2 gap-y-1">
                     <span className="font-mono text-lg font-semibold">{text.n}</span>
                     <StepKindBadge kind={text.kind} trim={text.trim} narrow={text.narrow} />
@@ -272,7 +305,11 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                     <span className="text-sm text-graphite-mute">piece {text.piece}</span>
                   </span>
                   <span className="text-xs text-graphite-mute" suppressHydrationWarning>
-                    {tick ? `Ticked by ${tick.doneBy ?? 'someone'} at ${time(tick.doneAt)}` : text.frees.length ? `Frees ${text.frees.join(', ')}` : '\u00a0'}
+                    {tick
+                      ? `Ticked by ${tick.doneBy ?? 'someone'} at ${time(tick.doneAt)}`
+                      : text.frees.length
+                        ? `Frees ${text.frees.join(', ')}`
+                        : '\u00a0'}
                   </span>
                 </button>
               </li>
@@ -295,7 +332,8 @@ export function fenceFontSize(text: string): string {
 
 function WakeNote({ state }: { state: WakeState }) {
   if (state === 'on') return <span data-testid="wake-state">The screen stays on while this page is open.</span>;
-  if (state === 'off') return <span data-testid="wake-state">The screen may dim: this browser did not keep it awake (tap the page to try again).</span>;
+  if (state === 'off')
+    return <span data-testid="wake-state">The screen may dim: this browser did not keep it awake (tap the page to try again).</span>;
   if (state === 'unsupported') return <span data-testid="wake-state">This browser cannot keep the screen awake: set its screen timeout longer.</span>;
   return null;
 }

@@ -12,11 +12,17 @@ export function CancelPlanButton({ planId }: { planId: string }) {
     <div className="space-y-2">
       {confirming ? (
         <div className="flex gap-2">
-          <button type="button" className="btn-danger" disabled={cancel.isPending} onClick={() => cancel.mutate({})}>Cancel the plan and free its stock</button>
-          <button type="button" className="btn-quiet" onClick={() => setConfirming(false)}>Keep it</button>
+          <button type="button" className="btn-danger" disabled={cancel.isPending} onClick={() => cancel.mutate({})}>
+            Cancel the plan and free its stock
+          </button>
+          <button type="button" className="btn-quiet" onClick={() => setConfirming(false)}>
+            Keep it
+          </button>
         </div>
       ) : (
-        <button type="button" className="btn-quiet" onClick={() => setConfirming(true)}>Cancel plan…</button>
+        <button type="button" className="btn-quiet" onClick={() => setConfirming(true)}>
+          Cancel plan…
+        </button>
       )}
       <ActionError error={cancel.error} />
     </div>

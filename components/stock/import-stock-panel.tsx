@@ -36,11 +36,13 @@ export function ImportStockPanel({ onDone }: { onDone: () => void }) {
   return (
     <section className="card mb-4 space-y-3 p-4" aria-label="Import stock from CSV">
       <div>
-        <label htmlFor="import-file" className="field-label">Stock file (CSV)</label>
+        <label htmlFor="import-file" className="field-label">
+          Stock file (CSV)
+        </label>
         <input id="import-file" type="file" accept=".csv,text/csv" className="text-sm" onChange={(e) => choose(e.target.files?.[0])} />
         <p className="mt-1 text-xs text-graphite-mute">
-          One size per row. Needs a header naming kind, material, thickness, length, width, quantity; may also give {STOCK_CSV_COLUMNS.slice(6).join(', ')}. Lengths in any form
-          (96, 8′, 2440 mm); thickness 3/4&quot; or 4/4.
+          One size per row. Needs a header naming kind, material, thickness, length, width, quantity; may also give{' '}
+          {STOCK_CSV_COLUMNS.slice(6).join(', ')}. Lengths in any form (96, 8′, 2440 mm); thickness 3/4&quot; or 4/4.
         </p>
       </div>
       {checking.isPending && <p className="text-sm text-graphite-mute">Checking {fileName}…</p>}
@@ -52,26 +54,48 @@ export function ImportStockPanel({ onDone }: { onDone: () => void }) {
           </p>
           {check.errors.length > 0 && (
             <table className="data-table" aria-label="Rows with problems">
-              <thead><tr><th className="num">Line</th><th>Problems</th></tr></thead>
+              <thead>
+                <tr>
+                  <th className="num">Line</th>
+                  <th>Problems</th>
+                </tr>
+              </thead>
               <tbody>
                 {check.errors.map((e) => (
-                  <tr key={e.line}><td className="num">{e.line}</td><td>{e.messages.join('; ')}</td></tr>
+                  <tr key={e.line}>
+                    <td className="num">{e.line}</td>
+                    <td>{e.messages.join('; ')}</td>
+                  </tr>
                 ))}
               </tbody>
             </table>
           )}
           <div className="flex gap-2">
-            <button type="button" className="btn-accent" disabled={!csv || check.errors.length > 0 || check.valid === 0 || writing.isPending} onClick={() => writing.mutate({ csv, commit: 'all' })}>Import all rows</button>
+            <button
+              type="button"
+              className="btn-accent"
+              disabled={!csv || check.errors.length > 0 || check.valid === 0 || writing.isPending}
+              onClick={() => writing.mutate({ csv, commit: 'all' })}
+            >
+              Import all rows
+            </button>
             {check.errors.length > 0 && check.valid > 0 && (
-              <button type="button" className="btn-quiet" disabled={writing.isPending} onClick={() => writing.mutate({ csv, commit: 'valid' })}>Import only the {check.valid} valid row{check.valid === 1 ? '' : 's'}</button>
+              <button type="button" className="btn-quiet" disabled={writing.isPending} onClick={() => writing.mutate({ csv, commit: 'valid' })}>
+                Import only the {check.valid} valid row{check.valid === 1 ? '' : 's'}
+              </button>
             )}
-            <button type="button" className="btn-quiet" onClick={onDone}>Close</button>
+            <button type="button" className="btn-quiet" onClick={onDone}>
+              Close
+            </button>
           </div>
         </div>
       )}
       {done !== null && (
         <p className="text-sm text-sage" role="status">
-          Imported {done} size{done === 1 ? '' : 's'}. <button type="button" className="underline" onClick={onDone}>Close</button>
+          Imported {done} size{done === 1 ? '' : 's'}.{' '}
+          <button type="button" className="underline" onClick={onDone}>
+            Close
+          </button>
         </p>
       )}
     </section>

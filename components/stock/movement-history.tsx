@@ -9,9 +9,22 @@ type Movement = Awaited<ReturnType<typeof listMovements>>[number];
  * change of each row apart (a reservation moves only the reserved count; cutting reserved pieces moves both, in
  * one row); with it the changes to a size's details (cost, location…), which move no stock and so change no count.
  */
-export function MovementHistory({ movements, changes = [], money = null, timeZone = 'UTC' }: { movements: Movement[]; changes?: DetailChange[]; money?: ((cents: number) => string) | null; timeZone?: string }) {
+export function MovementHistory({
+  movements,
+  changes = [],
+  money = null,
+  timeZone = 'UTC',
+}: {
+  movements: Movement[];
+  changes?: DetailChange[];
+  money?: ((cents: number) => string) | null;
+  timeZone?: string;
+}) {
   const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short', timeZone });
-  const rows: { at: Date; movement?: Movement; change?: DetailChange }[] = [...movements.map((m) => ({ at: m.createdAt, movement: m })), ...changes.map((c) => ({ at: c.createdAt, change: c }))].sort((a, b) => b.at.getTime() - a.at.getTime());
+  const rows: { at: Date; movement?: Movement; change?: DetailChange }[] = [
+    ...movements.map((m) => ({ at: m.createdAt, movement: m })),
+    ...changes.map((c) => ({ at: c.createdAt, change: c })),
+  ].sort((a, b) => b.at.getTime() - a.at.getTime());
   return (
     <div className="card overflow-x-auto">
       <table className="data-table" aria-label="Stock history">
@@ -38,8 +51,12 @@ export function MovementHistory({ movements, changes = [], money = null, timeZon
                     {words.meaning && <span className="block min-w-48 max-w-72 text-xs text-graphite-mute">{words.meaning}</span>}
                   </td>
                   <td>{m.item ?? '—'}</td>
-                  <td className="num" data-testid="movement-on-hand">{words.onHand}</td>
-                  <td className="num" data-testid="movement-reserved">{words.reserved}</td>
+                  <td className="num" data-testid="movement-on-hand">
+                    {words.onHand}
+                  </td>
+                  <td className="num" data-testid="movement-reserved">
+                    {words.reserved}
+                  </td>
                   <td>{m.who ?? 'Kerfwise'}</td>
                   <td className="text-graphite-soft">{m.reason}</td>
                 </tr>

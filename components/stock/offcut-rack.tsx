@@ -10,7 +10,19 @@ const TONE: Record<Offcut['status'], Tone> = { available: 'good', reserved: 'acc
  * The offcut rack: one shelf per material and thickness, each offcut drawn to scale against the largest on its shelf,
  * so a glance says what is worth pulling first.
  */
-export function OffcutRack({ rack, len, thick, money, canScrap }: { rack: Offcut[]; len: (mm: number) => string; thick: (mm: number) => string; money: ((cents: number) => string) | null; canScrap: boolean }) {
+export function OffcutRack({
+  rack,
+  len,
+  thick,
+  money,
+  canScrap,
+}: {
+  rack: Offcut[];
+  len: (mm: number) => string;
+  thick: (mm: number) => string;
+  money: ((cents: number) => string) | null;
+  canScrap: boolean;
+}) {
   const shelves = new Map<string, Offcut[]>();
   for (const o of rack) {
     const key = `${o.material} · ${thick(o.thicknessMm)}`;
@@ -22,7 +34,9 @@ export function OffcutRack({ rack, len, thick, money, canScrap }: { rack: Offcut
         const longest = Math.max(...pieces.map((p) => p.lengthMm));
         return (
           <section key={shelf} aria-label={`Shelf ${shelf}`}>
-            <h3 className="mb-2 text-sm font-semibold text-graphite-soft">{shelf} <span className="font-normal text-graphite-mute">({pieces.length})</span></h3>
+            <h3 className="mb-2 text-sm font-semibold text-graphite-soft">
+              {shelf} <span className="font-normal text-graphite-mute">({pieces.length})</span>
+            </h3>
             <ul className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3">
               {pieces.map((o) => {
                 const label = `${o.material} offcut ${len(o.lengthMm)} × ${len(o.widthMm)}`;
@@ -35,15 +49,29 @@ export function OffcutRack({ rack, len, thick, money, canScrap }: { rack: Offcut
                       />
                     </div>
                     <div className="min-w-0 flex-1 text-sm">
-                      <div className="num whitespace-nowrap text-left font-medium">{len(o.lengthMm)} × {len(o.widthMm)}</div>
+                      <div className="num whitespace-nowrap text-left font-medium">
+                        {len(o.lengthMm)} × {len(o.widthMm)}
+                      </div>
                       <div className="text-xs text-graphite-mute">
                         {o.location || 'no location'}
-                        {o.planName && <> · from {o.planName}{o.sourcePiece ? `, piece ${o.sourcePiece}` : ''}</>}
+                        {o.planName && (
+                          <>
+                            {' '}
+                            · from {o.planName}
+                            {o.sourcePiece ? `, piece ${o.sourcePiece}` : ''}
+                          </>
+                        )}
                         {money && o.costCents > 0 && <> · {money(o.costCents)}</>}
                       </div>
-                      <div className="mt-1"><StatusBadge tone={TONE[o.status]}>{o.status}</StatusBadge></div>
+                      <div className="mt-1">
+                        <StatusBadge tone={TONE[o.status]}>{o.status}</StatusBadge>
+                      </div>
                     </div>
-                    {canScrap && o.status === 'available' && <div className="self-start"><ScrapOffcutButton id={o.id} label={label} /></div>}
+                    {canScrap && o.status === 'available' && (
+                      <div className="self-start">
+                        <ScrapOffcutButton id={o.id} label={label} />
+                      </div>
+                    )}
                   </li>
                 );
               })}
@@ -51,7 +79,11 @@ export function OffcutRack({ rack, len, thick, money, canScrap }: { rack: Offcut
           </section>
         );
       })}
-      {rack.length > 0 && <p className="text-xs text-graphite-mute">Reserved offcuts belong to released plans; <Link href="/shop-floor">the shop floor</Link> shows which.</p>}
+      {rack.length > 0 && (
+        <p className="text-xs text-graphite-mute">
+          Reserved offcuts belong to released plans; <Link href="/shop-floor">the shop floor</Link> shows which.
+        </p>
+      )}
     </div>
   );
 }

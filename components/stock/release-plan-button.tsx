@@ -30,7 +30,11 @@ export function ReleasePlanButton({ planId, describe }: { planId: string; descri
       <button type="button" className="btn-accent" disabled={release.isPending} onClick={() => release.mutate()}>
         {release.isPending ? 'Reserving stock…' : 'Release plan to the saw'}
       </button>
-      {release.isError && <p className="field-error" role="alert">{release.error.message}</p>}
+      {release.isError && (
+        <p className="field-error" role="alert">
+          {release.error.message}
+        </p>
+      )}
       {refused && (
         <div className="rounded-md border border-brick/40 bg-brick-wash p-3 text-sm" role="alert">
           <p className="font-medium text-brick">{refused.error}</p>
@@ -41,7 +45,9 @@ export function ReleasePlanButton({ planId, describe }: { planId: string; descri
               </li>
             ))}
           </ul>
-          <Link href={refused.renest} className="btn-quiet">Nest again against what is left</Link>
+          <Link href={refused.renest} className="btn-quiet">
+            Nest again against what is left
+          </Link>
         </div>
       )}
     </div>

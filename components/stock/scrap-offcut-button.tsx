@@ -10,14 +10,36 @@ export function ScrapOffcutButton({ id, label }: { id: string; label: string }) 
   const [reason, setReason] = useState('');
   const action = useStockAction(`/api/offcuts/${id}/scrap`, 'POST', () => setConfirming(false));
   if (!confirming) {
-    return <button type="button" className="btn-danger px-2 py-1 text-xs" onClick={() => setConfirming(true)} aria-label={`Scrap ${label}`}>Scrap</button>;
+    return (
+      <button type="button" className="btn-danger px-2 py-1 text-xs" onClick={() => setConfirming(true)} aria-label={`Scrap ${label}`}>
+        Scrap
+      </button>
+    );
   }
   return (
-    <form className="flex flex-col items-end gap-1" onSubmit={(e) => { e.preventDefault(); action.mutate({ reason }); }} aria-label={`Scrap ${label}`}>
-      <input className="field-input w-44 py-1 text-xs" placeholder="Why (split, warped…)" value={reason} onChange={(e) => setReason(e.target.value)} aria-label="Reason for scrapping" autoFocus />
+    <form
+      className="flex flex-col items-end gap-1"
+      onSubmit={(e) => {
+        e.preventDefault();
+        action.mutate({ reason });
+      }}
+      aria-label={`Scrap ${label}`}
+    >
+      <input
+        className="field-input w-44 py-1 text-xs"
+        placeholder="Why (split, warped…)"
+        value={reason}
+        onChange={(e) => setReason(e.target.value)}
+        aria-label="Reason for scrapping"
+        autoFocus
+      />
       <div className="flex gap-1">
-        <button type="submit" className="btn-danger px-2 py-1 text-xs" disabled={action.isPending}>Scrap it</button>
-        <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setConfirming(false)}>Keep</button>
+        <button type="submit" className="btn-danger px-2 py-1 text-xs" disabled={action.isPending}>
+          Scrap it
+        </button>
+        <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setConfirming(false)}>
+          Keep
+        </button>
       </div>
       <ActionError error={action.error} />
     </form>

@@ -16,9 +16,21 @@ export function StockRoomActions({ units, canWrite, canRecord }: { units: ShopUn
   return (
     <div className="mb-2">
       <div className="mb-3 flex flex-wrap gap-2">
-        {canWrite && <button type="button" className="btn-accent" onClick={() => toggle('new')}>New stock size</button>}
-        {canWrite && <button type="button" className="btn-quiet" onClick={() => toggle('import')}>Import CSV</button>}
-        {canRecord && <button type="button" className="btn-quiet" onClick={() => toggle('offcut')}>Record an offcut</button>}
+        {canWrite && (
+          <button type="button" className="btn-accent" onClick={() => toggle('new')}>
+            New stock size
+          </button>
+        )}
+        {canWrite && (
+          <button type="button" className="btn-quiet" onClick={() => toggle('import')}>
+            Import CSV
+          </button>
+        )}
+        {canRecord && (
+          <button type="button" className="btn-quiet" onClick={() => toggle('offcut')}>
+            Record an offcut
+          </button>
+        )}
       </div>
       {open === 'new' && <NewStockForm units={units} onDone={() => setOpen(null)} />}
       {open === 'import' && <ImportStockPanel onDone={() => setOpen(null)} />}

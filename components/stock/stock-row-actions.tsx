@@ -19,9 +19,25 @@ export function StockRowActions({ item, label, onHand, currency }: { item: Edita
   return (
     <div className="flex flex-col items-end gap-2">
       <div className="flex flex-col gap-1">
-        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setOpen(open === 'receive' ? null : 'receive')} aria-label={`Receive ${label}`}>Receive</button>
-        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setOpen(open === 'adjust' ? null : 'adjust')} aria-label={`Adjust count of ${label}`}>Adjust</button>
-        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setOpen('edit')} aria-label={`Edit ${label}`}>Edit</button>
+        <button
+          type="button"
+          className="btn-quiet px-2 py-0.5 text-xs"
+          onClick={() => setOpen(open === 'receive' ? null : 'receive')}
+          aria-label={`Receive ${label}`}
+        >
+          Receive
+        </button>
+        <button
+          type="button"
+          className="btn-quiet px-2 py-0.5 text-xs"
+          onClick={() => setOpen(open === 'adjust' ? null : 'adjust')}
+          aria-label={`Adjust count of ${label}`}
+        >
+          Adjust
+        </button>
+        <button type="button" className="btn-quiet px-2 py-0.5 text-xs" onClick={() => setOpen('edit')} aria-label={`Edit ${label}`}>
+          Edit
+        </button>
       </div>
       {open === 'receive' && <ReceiveForm id={id} label={label} onDone={() => setOpen(null)} />}
       {open === 'adjust' && <AdjustForm id={id} label={label} onHand={onHand} onDone={() => setOpen(null)} />}
@@ -31,11 +47,19 @@ export function StockRowActions({ item, label, onHand, currency }: { item: Edita
 }
 
 function ReceiveForm({ id, label, onDone }: { id: string; label: string; onDone: () => void }) {
-  const form = useForm<z.input<typeof receiveForm>, unknown, z.output<typeof receiveForm>>({ resolver: zodResolver(receiveForm), defaultValues: { quantity: '', reason: '' } });
+  const form = useForm<z.input<typeof receiveForm>, unknown, z.output<typeof receiveForm>>({
+    resolver: zodResolver(receiveForm),
+    defaultValues: { quantity: '', reason: '' },
+  });
   const action = useStockAction(`/api/stock/${id}/receive`, 'POST', onDone);
   const e = form.formState.errors;
   return (
-    <form onSubmit={form.handleSubmit((v) => action.mutate(v))} className="card w-72 space-y-2 p-3 text-left" aria-label={`Receive ${label}`} noValidate>
+    <form
+      onSubmit={form.handleSubmit((v) => action.mutate(v))}
+      className="card w-72 space-y-2 p-3 text-left"
+      aria-label={`Receive ${label}`}
+      noValidate
+    >
       <Field id={`rq-${id}`} label="Pieces received" error={e.quantity?.message}>
         <input id={`rq-${id}`} className="field-input" inputMode="numeric" autoFocus {...form.register('quantity')} />
       </Field>
@@ -43,17 +67,27 @@ function ReceiveForm({ id, label, onDone }: { id: string; label: string; onDone:
         <input id={`rr-${id}`} className="field-input" {...form.register('reason')} />
       </Field>
       <ActionError error={action.error} />
-      <button type="submit" className="btn-accent w-full" disabled={action.isPending}>{action.isPending ? 'Saving…' : 'Receive'}</button>
+      <button type="submit" className="btn-accent w-full" disabled={action.isPending}>
+        {action.isPending ? 'Saving…' : 'Receive'}
+      </button>
     </form>
   );
 }
 
 function AdjustForm({ id, label, onHand, onDone }: { id: string; label: string; onHand: number; onDone: () => void }) {
-  const form = useForm<z.input<typeof adjustForm>, unknown, z.output<typeof adjustForm>>({ resolver: zodResolver(adjustForm), defaultValues: { count: String(onHand), reason: '' } });
+  const form = useForm<z.input<typeof adjustForm>, unknown, z.output<typeof adjustForm>>({
+    resolver: zodResolver(adjustForm),
+    defaultValues: { count: String(onHand), reason: '' },
+  });
   const action = useStockAction(`/api/stock/${id}/adjust`, 'POST', onDone);
   const e = form.formState.errors;
   return (
-    <form onSubmit={form.handleSubmit((v) => action.mutate(v))} className="card w-72 space-y-2 p-3 text-left" aria-label={`Adjust count of ${label}`} noValidate>
+    <form
+      onSubmit={form.handleSubmit((v) => action.mutate(v))}
+      className="card w-72 space-y-2 p-3 text-left"
+      aria-label={`Adjust count of ${label}`}
+      noValidate
+    >
       <Field id={`ac-${id}`} label={`Counted on the rack (book: ${onHand})`} error={e.count?.message}>
         <input id={`ac-${id}`} className="field-input" inputMode="numeric" autoFocus {...form.register('count')} />
       </Field>
@@ -61,7 +95,9 @@ function AdjustForm({ id, label, onHand, onDone }: { id: string; label: string; 
         <input id={`ar-${id}`} className="field-input" placeholder="Counted, damaged, found…" {...form.register('reason')} />
       </Field>
       <ActionError error={action.error} />
-      <button type="submit" className="btn-accent w-full" disabled={action.isPending}>{action.isPending ? 'Saving…' : 'Save count'}</button>
+      <button type="submit" className="btn-accent w-full" disabled={action.isPending}>
+        {action.isPending ? 'Saving…' : 'Save count'}
+      </button>
     </form>
   );
 }

@@ -11,7 +11,15 @@ interface Formatters {
 /** What the stock room has for a size: its free count, as the Stock room shows it, and what this plan already holds. */
 function Cover({ covered, free, held, need }: { covered: boolean; free: number; held: number; need: number }) {
   const holds = held > 0 ? `, this plan holds ${held}` : '';
-  return covered ? <StatusBadge tone="good">covered · {free} free{holds}</StatusBadge> : <StatusBadge tone="bad">short · {free} free{holds}, needs {need}</StatusBadge>;
+  return covered ? (
+    <StatusBadge tone="good">
+      covered · {free} free{holds}
+    </StatusBadge>
+  ) : (
+    <StatusBadge tone="bad">
+      short · {free} free{holds}, needs {need}
+    </StatusBadge>
+  );
 }
 
 /** One takeoff list (to pull, or to buy): size, count, board feet or area, cost, and whether the rack covers it. */
@@ -38,11 +46,15 @@ export function TakeoffTable({ title, lines, len, area, money }: { title: string
                   {l.material} {l.nominalThickness ? typesetNominal(l.nominalThickness) : len(l.thicknessMm)}
                   <span className="ml-1 text-xs text-graphite-mute">{l.kind}</span>
                 </td>
-                <td className="num whitespace-nowrap">{len(l.lengthMm)} × {len(l.widthMm)}</td>
+                <td className="num whitespace-nowrap">
+                  {len(l.lengthMm)} × {len(l.widthMm)}
+                </td>
                 <td className="num">{l.count}</td>
                 <td className="num whitespace-nowrap">{l.boardFeet !== null ? `${l.boardFeet.toFixed(2)} bf` : area(l.areaMm2)}</td>
                 <td className="num">{money(l.costCents)}</td>
-                <td><Cover covered={l.covered} free={l.free} held={l.heldByPlan} need={l.count} /></td>
+                <td>
+                  <Cover covered={l.covered} free={l.free} held={l.heldByPlan} need={l.count} />
+                </td>
               </tr>
             ))}
           </tbody>
@@ -53,7 +65,14 @@ export function TakeoffTable({ title, lines, len, area, money }: { title: string
 }
 
 /** The spoilage allowance, once per material: how much material, its price, and the whole pieces to have ready. */
-export function AllowanceTable({ allowances, lines, percent, len, area, money }: { allowances: MaterialAllowance[]; lines: TakeoffLine[]; percent: number } & Formatters) {
+export function AllowanceTable({
+  allowances,
+  lines,
+  percent,
+  len,
+  area,
+  money,
+}: { allowances: MaterialAllowance[]; lines: TakeoffLine[]; percent: number } & Formatters) {
   const amount = (a: MaterialAllowance, value: number) => (a.measure === 'boardFeet' ? `${value.toFixed(2)} bf` : area(value));
   return (
     <section className="mb-6" aria-label="Spoilage allowance">
@@ -76,7 +95,9 @@ export function AllowanceTable({ allowances, lines, percent, len, area, money }:
               const unit = main?.kind === 'board' ? 'boards' : 'sheets';
               return (
                 <tr key={`${a.material}|${a.thicknessMm}`} data-testid="allowance-line">
-                  <td className="font-medium">{a.material} {main?.nominalThickness ? typesetNominal(main.nominalThickness) : len(a.thicknessMm)}</td>
+                  <td className="font-medium">
+                    {a.material} {main?.nominalThickness ? typesetNominal(main.nominalThickness) : len(a.thicknessMm)}
+                  </td>
                   <td className="num whitespace-nowrap">{amount(a, a.amount)}</td>
                   <td className="num whitespace-nowrap">{amount(a, a.allowance)}</td>
                   <td className="num">{money(a.allowanceCents)}</td>

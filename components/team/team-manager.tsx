@@ -51,10 +51,26 @@ export function TeamManager({ selfId }: { selfId: string }) {
   return (
     <div className="grid grid-cols-1 gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
       <div>
-        {team.isPending && <p role="status" className="text-sm text-graphite-mute">Loading the team…</p>}
-        {team.isError && <p role="alert" className="text-sm text-brick">Could not load the team: {team.error.message}</p>}
-        {rowError && <p role="alert" className="mb-3 rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">{rowError}</p>}
-        {notice && !rowError && <p role="status" className="mb-3 rounded-md bg-sage-wash px-3 py-2 text-sm text-sage">{notice}</p>}
+        {team.isPending && (
+          <p role="status" className="text-sm text-graphite-mute">
+            Loading the team…
+          </p>
+        )}
+        {team.isError && (
+          <p role="alert" className="text-sm text-brick">
+            Could not load the team: {team.error.message}
+          </p>
+        )}
+        {rowError && (
+          <p role="alert" className="mb-3 rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">
+            {rowError}
+          </p>
+        )}
+        {notice && !rowError && (
+          <p role="status" className="mb-3 rounded-md bg-sage-wash px-3 py-2 text-sm text-sage">
+            {notice}
+          </p>
+        )}
         {team.isSuccess && (
           <div className="card overflow-x-auto">
             <table className="data-table" aria-label="Team">
@@ -70,7 +86,10 @@ export function TeamManager({ selfId }: { selfId: string }) {
               <tbody>
                 {team.data.map((m) => (
                   <tr key={m.id} className={m.active ? '' : 'text-graphite-mute'}>
-                    <td className="font-medium">{m.name}{m.id === selfId && <span className="ml-1 text-xs text-graphite-mute">(you)</span>}</td>
+                    <td className="font-medium">
+                      {m.name}
+                      {m.id === selfId && <span className="ml-1 text-xs text-graphite-mute">(you)</span>}
+                    </td>
                     <td>{m.email}</td>
                     <td>
                       <select
@@ -81,7 +100,9 @@ export function TeamManager({ selfId }: { selfId: string }) {
                         onChange={(e) => change.mutate({ id: m.id, role: e.target.value as Role })}
                       >
                         {ROLES.map((r) => (
-                          <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+                          <option key={r} value={r}>
+                            {ROLE_LABELS[r]}
+                          </option>
                         ))}
                       </select>
                     </td>
@@ -106,7 +127,6 @@ export function TeamManager({ selfId }: { selfId: string }) {
                       )}
                     </td>
                     <td className="text-right">
-
                       <button
                         type="button"
                         className={m.active ? 'btn-danger py-1' : 'btn-quiet py-1'}
@@ -128,16 +148,22 @@ export function TeamManager({ selfId }: { selfId: string }) {
         <p className="text-sm text-graphite-mute">They get an e-mail with a link to choose their own password. The link works once, for 7 days.</p>
         {(['name', 'email'] as const).map((f) => (
           <div key={f}>
-            <label htmlFor={`member-${f}`} className="field-label">{{ name: 'Name', email: 'E-mail' }[f]}</label>
+            <label htmlFor={`member-${f}`} className="field-label">
+              {{ name: 'Name', email: 'E-mail' }[f]}
+            </label>
             <input id={`member-${f}`} name={f} type={f === 'email' ? 'email' : 'text'} className="field-input" autoComplete="off" />
             {fields[f] && <p className="field-error">{fields[f][0]}</p>}
           </div>
         ))}
         <div>
-          <label htmlFor="member-role" className="field-label">Role</label>
+          <label htmlFor="member-role" className="field-label">
+            Role
+          </label>
           <select id="member-role" name="role" className="field-input" defaultValue="cutter">
             {ROLES.map((r) => (
-              <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+              <option key={r} value={r}>
+                {ROLE_LABELS[r]}
+              </option>
             ))}
           </select>
         </div>
@@ -147,7 +173,9 @@ export function TeamManager({ selfId }: { selfId: string }) {
         </label>
         {withPassword && (
           <div>
-            <label htmlFor="member-password" className="field-label">First password</label>
+            <label htmlFor="member-password" className="field-label">
+              First password
+            </label>
             <input id="member-password" name="password" type="password" className="field-input" autoComplete="new-password" />
             {fields.password && <p className="field-error">{fields.password[0]}</p>}
           </div>

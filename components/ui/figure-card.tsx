@@ -1,7 +1,19 @@
 import type { ReactNode } from 'react';
 
 /** One headline figure (value, cost, yield) with its label and an optional line of detail. */
-export function FigureCard({ label, value, detail, tone = '', testId }: { label: string; value: ReactNode; detail?: ReactNode; tone?: string; testId?: string }) {
+export function FigureCard({
+  label,
+  value,
+  detail,
+  tone = '',
+  testId,
+}: {
+  label: string;
+  value: ReactNode;
+  detail?: ReactNode;
+  tone?: string;
+  testId?: string;
+}) {
   return (
     <div className="card p-4" data-testid={testId}>
       <div className="text-xs uppercase tracking-wide text-graphite-mute">{label}</div>

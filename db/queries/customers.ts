@@ -32,7 +32,11 @@ const likeText = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}
 export async function listCustomers(db: Db, shopId: string, search = ''): Promise<Customer[]> {
   const text = search.trim();
   const match = text ? or(...[customers.name, customers.company, customers.email, customers.phone].map((c) => ilike(c, likeText(text)))) : undefined;
-  const rows = await db.select({ row: customers, jobCount }).from(customers).where(and(eq(customers.shopId, shopId), match)).orderBy(asc(sql`lower(${customers.name})`), asc(customers.id));
+  const rows = await db
+    .select({ row: customers, jobCount })
+    .from(customers)
+    .where(and(eq(customers.shopId, shopId), match))
+    .orderBy(asc(sql`lower(${customers.name})`), asc(customers.id));
   return rows.map((r) => toCustomer(r.row, Number(r.jobCount)));
 }
 
@@ -45,7 +49,10 @@ export interface CustomerJob {
 }
 
 export async function getCustomer(db: Db, shopId: string, id: string): Promise<(Customer & { jobs: CustomerJob[] }) | null> {
-  const [found] = await db.select({ row: customers, jobCount }).from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, id)));
+  const [found] = await db
+    .select({ row: customers, jobCount })
+    .from(customers)
+    .where(and(eq(customers.shopId, shopId), eq(customers.id, id)));
   if (!found) return null;
   const jobRows = await db
     .select({ id: jobs.id, name: jobs.name, status: jobs.status, dueDate: jobs.dueDate, updatedAt: jobs.updatedAt })
@@ -57,7 +64,10 @@ export async function getCustomer(db: Db, shopId: string, id: string): Promise<(
 
 export async function createCustomer(db: Db, shopId: string, userId: string, input: CustomerInput): Promise<Customer> {
   const row = await db.transaction(async (tx) => {
-    const [created] = await tx.insert(customers).values({ ...input, shopId }).returning();
+    const [created] = await tx
+      .insert(customers)
+      .values({ ...input, shopId })
+      .returning();
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'customer', entityId: created.id, data: { name: input.name } });
     return created;
   });
@@ -66,11 +76,22 @@ export async function createCustomer(db: Db, shopId: string, userId: string, inp
 
 export async function updateCustomer(db: Db, shopId: string, userId: string, id: string, patch: CustomerPatch): Promise<Customer | null> {
   const done = await db.transaction(async (tx) => {
-    const [current] = await tx.select().from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, id))).for('update');
+    const [current] = await tx
+      .select()
+      .from(customers)
+      .where(and(eq(customers.shopId, shopId), eq(customers.id, id)))
+      .for('update');
     if (!current) return false;
-    const changes = Object.fromEntries(Object.entries(patch).filter(([k, v]) => v !== undefined && v !== current[k as keyof CustomerRow]).map(([k, v]) => [k, { from: current[k as keyof CustomerRow], to: v }]));
+    const changes = Object.fromEntries(
+      Object.entries(patch)
+        .filter(([k, v]) => v !== undefined && v !== current[k as keyof CustomerRow])
+        .map(([k, v]) => [k, { from: current[k as keyof CustomerRow], to: v }]),
+    );
     if (!Object.keys(changes).length) return true;
-    await tx.update(customers).set({ ...Object.fromEntries(Object.entries(changes).map(([k, c]) => [k, c.to])), updatedAt: new Date() }).where(eq(customers.id, id));
+    await tx
+      .update(customers)
+      .set({ ...Object.fromEntries(Object.entries(changes).map(([k, c]) => [k, c.to])), updatedAt: new Date() })
+      .where(eq(customers.id, id));
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'customer', entityId: id, data: { changes } });
     return true;
   });
@@ -84,9 +105,16 @@ export async function updateCustomer(db: Db, shopId: string, userId: string, id:
 /** Deletes a customer no job belongs to; one with jobs is kept (409), so no job loses who it is for. */
 export async function deleteCustomer(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, id))).for('update');
+    const [current] = await tx
+      .select()
+      .from(customers)
+      .where(and(eq(customers.shopId, shopId), eq(customers.id, id)))
+      .for('update');
     if (!current) return false;
-    const [{ n }] = await tx.select({ n: sql<number>`count(*)::int` }).from(jobs).where(eq(jobs.customerId, id));
+    const [{ n }] = await tx
+      .select({ n: sql<number>`count(*)::int` })
+      .from(jobs)
+      .where(eq(jobs.customerId, id));
     if (Number(n) > 0) throw new HttpError(409, `${current.name} has ${n} job${Number(n) === 1 ? '' : 's'}: move them to another customer first.`);
     await tx.delete(customers).where(eq(customers.id, id));
     await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'customer', entityId: id, data: { name: current.name } });
@@ -101,15 +129,28 @@ export const tidyName = (name: string) => name.trim().replace(/\s+/g, ' ');
  * The customer a job form picked: an existing one by id (of this shop, or 422), or by name — the shop's customer of
  * that name (letter case ignored) or a new one. Runs inside the job's transaction.
  */
-export async function resolveCustomer(tx: Db, shopId: string, userId: string, choice: { id: string } | { name: string } | null): Promise<string | null> {
+export async function resolveCustomer(
+  tx: Db,
+  shopId: string,
+  userId: string,
+  choice: { id: string } | { name: string } | null,
+): Promise<string | null> {
   if (choice === null) return null;
   if ('id' in choice) {
-    const [found] = await tx.select({ id: customers.id }).from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, choice.id)));
+    const [found] = await tx
+      .select({ id: customers.id })
+      .from(customers)
+      .where(and(eq(customers.shopId, shopId), eq(customers.id, choice.id)));
     if (!found) throw new HttpError(422, 'That customer was not found.', { customer: ['Pick one of the shop’s customers.'] });
     return found.id;
   }
   const name = tidyName(choice.name);
-  const [found] = await tx.select({ id: customers.id }).from(customers).where(and(eq(customers.shopId, shopId), sql`lower(${customers.name}) = lower(${name})`)).orderBy(asc(customers.createdAt)).limit(1);
+  const [found] = await tx
+    .select({ id: customers.id })
+    .from(customers)
+    .where(and(eq(customers.shopId, shopId), sql`lower(${customers.name}) = lower(${name})`))
+    .orderBy(asc(customers.createdAt))
+    .limit(1);
   if (found) return found.id;
   const [created] = await tx.insert(customers).values({ shopId, name }).returning({ id: customers.id });
   await recordAudit(tx, { shopId, userId, action: 'create', entity: 'customer', entityId: created.id, data: { name } });

@@ -83,7 +83,10 @@ export async function saveDrawerSchedule(
         .where(and(eq(drawerSchedules.shopId, shopId), eq(drawerSchedules.jobId, jobId), eq(drawerSchedules.id, id)))
         .returning({ id: drawerSchedules.id });
       if (!updated.length) return null;
-      const [first] = await tx.select({ sort: min(parts.sort) }).from(parts).where(eq(parts.drawerScheduleId, id));
+      const [first] = await tx
+        .select({ sort: min(parts.sort) })
+        .from(parts)
+        .where(eq(parts.drawerScheduleId, id));
       sort = first?.sort ?? (await nextSort(tx, shopId, jobId));
       await tx.delete(parts).where(and(eq(parts.shopId, shopId), eq(parts.drawerScheduleId, id)));
     } else {
@@ -92,10 +95,21 @@ export async function saveDrawerSchedule(
       sort = await nextSort(tx, shopId, jobId);
     }
     // Rows after the schedule's place make room when it now has more parts than before.
-    if (scheduleId) await tx.update(parts).set({ sort: sql`${parts.sort} + ${sized.length}` }).where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId), sql`${parts.sort} >= ${sort}`));
+    if (scheduleId)
+      await tx
+        .update(parts)
+        .set({ sort: sql`${parts.sort} + ${sized.length}` })
+        .where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId), sql`${parts.sort} >= ${sort}`));
     await tx.insert(parts).values(sized.map((p, i) => ({ ...drawerPartRow(p), shopId, jobId, drawerScheduleId: id, sort: sort + i })));
     await touchJob(tx, shopId, jobId);
-    await recordAudit(tx, { shopId, userId, action: scheduleId ? 'update' : 'create', entity: 'drawer-schedule', entityId: id, data: { label: input.label, parts: sized.length } });
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: scheduleId ? 'update' : 'create',
+      entity: 'drawer-schedule',
+      entityId: id,
+      data: { label: input.label, parts: sized.length },
+    });
     return id;
   });
   if (!id) return null;

@@ -23,7 +23,9 @@ export async function jobFacts(tx: Db, shopId: string, jobId: string, acceptedAt
     .select({
       out: sql<number>`count(*) filter (where ${quoteRevisions.status} = 'sent')`.mapWith(Number),
       // The last quote the customer declined or let run out (by when that happened).
-      lastAnswer: sql<'declined' | 'expired' | null>`(array_agg(${quoteRevisions.status}::text order by ${quoteRevisions.updatedAt} desc) filter (where ${quoteRevisions.status} in ('declined', 'expired')))[1]`,
+      lastAnswer: sql<
+        'declined' | 'expired' | null
+      >`(array_agg(${quoteRevisions.status}::text order by ${quoteRevisions.updatedAt} desc) filter (where ${quoteRevisions.status} in ('declined', 'expired')))[1]`,
     })
     .from(quoteRevisions)
     .where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.jobId, jobId)));
@@ -47,8 +49,15 @@ export async function jobFacts(tx: Db, shopId: string, jobId: string, acceptedAt
  * released, ticked, cancelled or finished, a re-cut cancelled, a quote sent, answered or expired, or a deposit paid. Call it inside that change's transaction, after the change. The
  * job row is locked first so two plans finishing at once settle on one answer.
  */
-export async function syncJobStatus(tx: Db, { shopId, jobId, userId, cause }: { shopId: string; jobId: string; userId: string | null; cause: string }): Promise<JobStatus | null> {
-  const [job] = await tx.select({ status: jobs.status, acceptedAt: jobs.acceptedAt }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId))).for('update');
+export async function syncJobStatus(
+  tx: Db,
+  { shopId, jobId, userId, cause }: { shopId: string; jobId: string; userId: string | null; cause: string },
+): Promise<JobStatus | null> {
+  const [job] = await tx
+    .select({ status: jobs.status, acceptedAt: jobs.acceptedAt })
+    .from(jobs)
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)))
+    .for('update');
   if (!job) return null;
   const next = followPlans(job.status, await jobFacts(tx, shopId, jobId, job.acceptedAt));
   if (next === job.status) return next;
@@ -62,12 +71,19 @@ export async function syncJobStatus(tx: Db, { shopId, jobId, userId, cause }: { 
  * history (then it is archived, not deleted).
  */
 export async function jobEditOptions(db: Db, shopId: string, jobId: string, role: Role) {
-  const [job] = await db.select({ status: jobs.status, acceptedAt: jobs.acceptedAt }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
+  const [job] = await db
+    .select({ status: jobs.status, acceptedAt: jobs.acceptedAt })
+    .from(jobs)
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
   if (!job) return null;
   const [facts, [history]] = await Promise.all([
     jobFacts(db, shopId, jobId, job.acceptedAt),
     db
-      .select({ released: sql<number>`count(*) filter (where ${plans.releasedAt} is not null or ${plans.status} in ('released', 'cutting', 'done'))`.mapWith(Number) })
+      .select({
+        released: sql<number>`count(*) filter (where ${plans.releasedAt} is not null or ${plans.status} in ('released', 'cutting', 'done'))`.mapWith(
+          Number,
+        ),
+      })
       .from(plans)
       .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId))),
   ]);

@@ -46,7 +46,10 @@ function selectSummaries(db: Db, shopId: string) {
     .leftJoin(stats, eq(stats.jobId, jobs.id));
 }
 
-type SummaryRow = { createdAt: Date; updatedAt: Date; acceptedAt: Date | null; materials: string[] | null } & Omit<JobSummary, 'createdAt' | 'updatedAt' | 'acceptedAt' | 'materials'>;
+type SummaryRow = { createdAt: Date; updatedAt: Date; acceptedAt: Date | null; materials: string[] | null } & Omit<
+  JobSummary,
+  'createdAt' | 'updatedAt' | 'acceptedAt' | 'materials'
+>;
 
 const toSummary = (row: SummaryRow): JobSummary => ({
   ...row,
@@ -59,7 +62,6 @@ const toSummary = (row: SummaryRow): JobSummary => ({
 
 /** `%text%` for ILIKE, the pattern's own characters (`%`, `_`, `\\`) matched as typed. */
 const containing = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-
 
 /** What each sortable column sorts by: names ignoring case, status in work order, jobs without a due date last. */
 const SORT_KEYS: Record<JobSortColumn, SQL> = {
@@ -94,8 +96,12 @@ export async function listJobsPage(db: Db, shopId: string, q: JobListQuery): Pro
   // Empty values (no customer, no due date) go last either way round; ties by id the same way round.
   const order =
     column === 'updated' // never empty: plain, so the index serves it
-      ? dir === 'asc' ? [asc(jobs.updatedAt), asc(jobs.id)] : [desc(jobs.updatedAt), desc(jobs.id)]
-      : dir === 'asc' ? [sql`${key} asc nulls last`, asc(jobs.id)] : [sql`${key} desc nulls last`, desc(jobs.id)];
+      ? dir === 'asc'
+        ? [asc(jobs.updatedAt), asc(jobs.id)]
+        : [desc(jobs.updatedAt), desc(jobs.id)]
+      : dir === 'asc'
+        ? [sql`${key} asc nulls last`, asc(jobs.id)]
+        : [sql`${key} desc nulls last`, desc(jobs.id)];
 
   const customerJoin = needsCustomer ? sql`left join ${customers} on ${customers.id} = ${jobs.customerId}` : sql``;
   const orderBy = sql.join(order, sql`, `);
@@ -130,7 +136,9 @@ export async function listJobsPage(db: Db, shopId: string, q: JobListQuery): Pro
     select (select coalesce(json_agg(page_rows order by ord), '[]'::json) from page_rows) as jobs,
            counts.total, counts.shop_jobs, counts.archived,
            (select coalesce(array_agg(c.name), '{}') from ${customers} c where c.shop_id = ${shopId} and exists (select 1 from ${jobs} j where j.customer_id = c.id)) as customers
-      from counts`)) as unknown as { rows: { jobs: (Record<string, unknown> & { ord: number })[] | string; total: number; shop_jobs: number; archived: number; customers: string[] }[] };
+      from counts`)) as unknown as {
+    rows: { jobs: (Record<string, unknown> & { ord: number })[] | string; total: number; shop_jobs: number; archived: number; customers: string[] }[];
+  };
   const [row] = result.rows;
   // JSON from the database: timestamps as text, to the app's ISO form.
   const rows = (typeof row.jobs === 'string' ? JSON.parse(row.jobs) : row.jobs) as Record<string, unknown>[];
@@ -165,7 +173,10 @@ export async function createJob(db: Db, shopId: string, userId: string, input: J
   const id = await db.transaction(async (tx) => {
     const { customer, ...fields } = input;
     const customerId = await resolveCustomer(tx, shopId, userId, customer);
-    const [row] = await tx.insert(jobs).values({ ...fields, customerId, acceptedAt: input.status === 'accepted' ? new Date() : null, shopId, createdBy: userId }).returning({ id: jobs.id });
+    const [row] = await tx
+      .insert(jobs)
+      .values({ ...fields, customerId, acceptedAt: input.status === 'accepted' ? new Date() : null, shopId, createdBy: userId })
+      .returning({ id: jobs.id });
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'job', entityId: row.id, data: { name: input.name } });
     return row.id;
   });
@@ -184,7 +195,11 @@ export interface JobEditor {
  */
 export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: string, patch: JobPatch) {
   const updated = await db.transaction(async (tx) => {
-    const [job] = await tx.select().from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id))).for('update');
+    const [job] = await tx
+      .select()
+      .from(jobs)
+      .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)))
+      .for('update');
     if (!job) return false;
     const changes: Record<string, { from: unknown; to: unknown }> = {};
     const { customer, ...fields } = patch;
@@ -202,7 +217,10 @@ export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: s
       if (refused) throw new HttpError(403, refused);
       set.acceptedAt = acceptedAtAfter(patch.status, job.acceptedAt, new Date());
     }
-    await tx.update(jobs).set({ ...set, updatedAt: new Date() }).where(eq(jobs.id, id));
+    await tx
+      .update(jobs)
+      .set({ ...set, updatedAt: new Date() })
+      .where(eq(jobs.id, id));
     await recordAudit(tx, { shopId, userId: editor.id, action: 'update', entity: 'job', entityId: id, data: { changes } });
     return true;
   });
@@ -212,7 +230,10 @@ export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: s
 /** A job with history — a plan that was ever released, or stock moved for one of its plans — is archived, not deleted. */
 export class JobHasHistory extends HttpError {
   constructor(name: string) {
-    super(409, `“${name}” has history (plans released to the saw, stock moved for them): archive it instead, so the stock and yield ledgers keep their plans. Archived jobs leave the jobs list until you filter for them.`);
+    super(
+      409,
+      `“${name}” has history (plans released to the saw, stock moved for them): archive it instead, so the stock and yield ledgers keep their plans. Archived jobs leave the jobs list until you filter for them.`,
+    );
   }
 }
 
@@ -234,7 +255,10 @@ export async function deleteJob(db: Db, shopId: string, userId: string, id: stri
       await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'job', entityId: id, data: rows[0] });
       return true;
     }
-    const [kept] = await tx.select({ name: jobs.name }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
+    const [kept] = await tx
+      .select({ name: jobs.name })
+      .from(jobs)
+      .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
     if (kept) throw new JobHasHistory(kept.name);
     return false;
   });

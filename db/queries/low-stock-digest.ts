@@ -24,7 +24,14 @@ export interface DigestOutcome {
  */
 export async function runLowStockDigests(db: Db, now: Date = new Date()): Promise<DigestOutcome[]> {
   const candidates = await db
-    .select({ id: shops.id, name: shops.name, zone: shops.timeZone, at: shops.lowStockDigestTime, units: shops.units, lastDay: sql<string | null>`(select max(${lowStockDigests.day}) from ${lowStockDigests} where ${lowStockDigests.shopId} = ${shops.id})` })
+    .select({
+      id: shops.id,
+      name: shops.name,
+      zone: shops.timeZone,
+      at: shops.lowStockDigestTime,
+      units: shops.units,
+      lastDay: sql<string | null>`(select max(${lowStockDigests.day}) from ${lowStockDigests} where ${lowStockDigests.shopId} = ${shops.id})`,
+    })
     .from(shops)
     .where(sql`${shops.lowStockDigestTime} <> ''`);
   const done: DigestOutcome[] = [];
@@ -32,28 +39,61 @@ export async function runLowStockDigests(db: Db, now: Date = new Date()): Promis
     const { due, day } = digestDue({ now, zone: shop.zone, at: shop.at, lastDay: shop.lastDay });
     if (!due) continue;
     const outcome = await db.transaction(async (tx) => {
-      const claimed = await tx.insert(lowStockDigests).values({ shopId: shop.id, day, sizes: 0 }).onConflictDoNothing().returning({ day: lowStockDigests.day });
+      const claimed = await tx
+        .insert(lowStockDigests)
+        .values({ shopId: shop.id, day, sizes: 0 })
+        .onConflictDoNothing()
+        .returning({ day: lowStockDigests.day });
       if (!claimed.length) return null;
       const [items, ordered, owners] = await Promise.all([
-        tx.select().from(stockItems).where(eq(stockItems.shopId, shop.id)).orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
+        tx
+          .select()
+          .from(stockItems)
+          .where(eq(stockItems.shopId, shop.id))
+          .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
         tx
           .selectDistinct({ stockItemId: purchaseOrderLines.stockItemId })
           .from(purchaseOrderLines)
           .innerJoin(purchaseOrders, eq(purchaseOrders.id, purchaseOrderLines.purchaseOrderId))
-          .where(and(eq(purchaseOrderLines.shopId, shop.id), inArray(purchaseOrders.status, [...OPEN_STATUSES]), sql`${purchaseOrderLines.received} < ${purchaseOrderLines.quantity}`)),
-        tx.select({ name: users.name, email: users.email }).from(users).where(and(eq(users.shopId, shop.id), eq(users.role, 'owner'), eq(users.active, true))).orderBy(desc(users.createdAt)),
+          .where(
+            and(
+              eq(purchaseOrderLines.shopId, shop.id),
+              inArray(purchaseOrders.status, [...OPEN_STATUSES]),
+              sql`${purchaseOrderLines.received} < ${purchaseOrderLines.quantity}`,
+            ),
+          ),
+        tx
+          .select({ name: users.name, email: users.email })
+          .from(users)
+          .where(and(eq(users.shopId, shop.id), eq(users.role, 'owner'), eq(users.active, true)))
+          .orderBy(desc(users.createdAt)),
       ]);
       const low = digestSizes(items, new Set(ordered.map((o) => o.stockItemId)));
       let mailId: string | null = null;
       if (low.length) {
-        const lines = low.map((i) => ({ description: describeSize(i, shop.units), free: i.onHand - i.reserved, mark: i.lowStockAt, supplier: i.supplier }));
+        const lines = low.map((i) => ({
+          description: describeSize(i, shop.units),
+          free: i.onHand - i.reserved,
+          mark: i.lowStockAt,
+          supplier: i.supplier,
+        }));
         for (const owner of owners) {
           const mail = lowStockDigestMail({ shopName: shop.name, personName: owner.name, day, lines, link: `${appBaseUrl()}/purchase-orders` });
-          const queued = await enqueueMail(tx, { shopId: shop.id, kind: 'low-stock-digest', to: owner.email, subject: mail.subject, text: mail.text, html: mail.html });
+          const queued = await enqueueMail(tx, {
+            shopId: shop.id,
+            kind: 'low-stock-digest',
+            to: owner.email,
+            subject: mail.subject,
+            text: mail.text,
+            html: mail.html,
+          });
           mailId ??= queued.id;
         }
       }
-      await tx.update(lowStockDigests).set({ sizes: low.length, mailId }).where(and(eq(lowStockDigests.shopId, shop.id), eq(lowStockDigests.day, day)));
+      await tx
+        .update(lowStockDigests)
+        .set({ sizes: low.length, mailId })
+        .where(and(eq(lowStockDigests.shopId, shop.id), eq(lowStockDigests.day, day)));
       return { shopId: shop.id, day, sizes: low.length, mails: low.length ? owners.length : 0 };
     });
     if (outcome) done.push(outcome);

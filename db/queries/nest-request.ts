@@ -45,7 +45,10 @@ export async function buildNestRequest(
     getShopSettings(db, shopId),
     nestFor === 'recuts' ? openRecuts(db, shopId, jobId).then(recutNestParts) : listParts(db, shopId, jobId).then(cutListParts),
     db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
-    db.select().from(offcuts).where(and(eq(offcuts.shopId, shopId), eq(offcuts.status, 'available'))),
+    db
+      .select()
+      .from(offcuts)
+      .where(and(eq(offcuts.shopId, shopId), eq(offcuts.status, 'available'))),
     sawId || breakdownSawId ? listSaws(db, shopId) : Promise.resolve([]),
   ]);
   if (!shop) throw new Error('shop not found');
@@ -60,18 +63,40 @@ export async function buildNestRequest(
   };
   const saw = sawFor(sawId, 'sawId');
   const breakdownSaw = sawFor(breakdownSawId, 'breakdownSawId');
-  if (breakdownSaw && !saw) throw new HttpError(422, 'A breakdown saw needs a second saw for the rest of the cuts.', { breakdownSawId: ['choose the second saw too'] });
+  if (breakdownSaw && !saw)
+    throw new HttpError(422, 'A breakdown saw needs a second saw for the rest of the cuts.', { breakdownSawId: ['choose the second saw too'] });
   const sawKerf = Math.max(0, ...[saw, breakdownSaw].map((s) => s?.kerfMm ?? 0));
 
   const stock: NestStock[] = [];
   for (const item of items) {
-    const base = { kind: item.kind, length: item.lengthMm, width: item.widthMm, thickness: item.thicknessMm, material: item.material, grain: item.grain, costEach: costEachCents(item), source: item.location || undefined };
+    const base = {
+      kind: item.kind,
+      length: item.lengthMm,
+      width: item.widthMm,
+      thickness: item.thicknessMm,
+      material: item.material,
+      grain: item.grain,
+      costEach: costEachCents(item),
+      source: item.location || undefined,
+    };
     const free = item.onHand - item.reserved;
     if (free > 0) stock.push({ ...base, id: stockRef.onHand(item.id), count: free });
     if (item.buyable) stock.push({ ...base, id: stockRef.buy(item.id), count: null, source: item.supplier || undefined });
   }
   for (const o of rack) {
-    stock.push({ id: stockRef.offcut(o.id), kind: 'offcut', length: o.lengthMm, width: o.widthMm, thickness: o.thicknessMm, material: o.material, grain: o.grain, count: 1, costEach: o.costCents, trimmed: true, source: o.location || undefined });
+    stock.push({
+      id: stockRef.offcut(o.id),
+      kind: 'offcut',
+      length: o.lengthMm,
+      width: o.widthMm,
+      thickness: o.thicknessMm,
+      material: o.material,
+      grain: o.grain,
+      count: 1,
+      costEach: o.costCents,
+      trimmed: true,
+      source: o.location || undefined,
+    });
   }
 
   return {

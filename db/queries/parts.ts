@@ -46,23 +46,39 @@ export async function listJobParts(db: Db, shopId: string, jobId: string): Promi
 
 /** True when the job exists in this shop (another shop's job does not, from here). */
 export async function jobInShop(db: Db, shopId: string, jobId: string): Promise<boolean> {
-  const [row] = await db.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
+  const [row] = await db
+    .select({ id: jobs.id })
+    .from(jobs)
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
   return Boolean(row);
 }
 
 /** The next free sort position at the end of a job's cut list. */
 export async function nextSort(db: Db, shopId: string, jobId: string): Promise<number> {
-  const [row] = await db.select({ last: max(parts.sort) }).from(parts).where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId)));
+  const [row] = await db
+    .select({ last: max(parts.sort) })
+    .from(parts)
+    .where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId)));
   return (row?.last ?? -1) + 1;
 }
 
 /** Marks the job as changed, so the jobs list shows what was worked on last. */
 export async function touchJob(db: Db, shopId: string, jobId: string) {
-  await db.update(jobs).set({ updatedAt: new Date() }).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
+  await db
+    .update(jobs)
+    .set({ updatedAt: new Date() })
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
 }
 
 /** Adds typed or uploaded rows at the end of the cut list (or at a given place: undo), all or none. Null when the job is not this shop's. */
-export async function addParts(db: Db, shopId: string, userId: string, jobId: string, inputs: readonly PartInput[], source: 'typed' | 'upload'): Promise<Part[] | null> {
+export async function addParts(
+  db: Db,
+  shopId: string,
+  userId: string,
+  jobId: string,
+  inputs: readonly PartInput[],
+  source: 'typed' | 'upload',
+): Promise<Part[] | null> {
   return db.transaction(async (tx) => {
     if (!(await jobInShop(tx, shopId, jobId))) return null;
     if (inputs.length === 0) return [];
@@ -72,13 +88,23 @@ export async function addParts(db: Db, shopId: string, userId: string, jobId: st
       .values(inputs.map((p, i) => ({ ...p, shopId, jobId, sort: p.sort ?? start + i })))
       .returning();
     await touchJob(tx, shopId, jobId);
-    await recordAudit(tx, { shopId, userId, action: source === 'upload' ? 'import' : 'create', entity: 'part', entityId: rows.length === 1 ? rows[0].id : undefined, data: { jobId, count: rows.length } });
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: source === 'upload' ? 'import' : 'create',
+      entity: 'part',
+      entityId: rows.length === 1 ? rows[0].id : undefined,
+      data: { jobId, count: rows.length },
+    });
     return rows.map(toPart);
   });
 }
 
 async function findPart(db: Db, shopId: string, jobId: string, partId: string) {
-  const [row] = await db.select().from(parts).where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId), eq(parts.id, partId)));
+  const [row] = await db
+    .select()
+    .from(parts)
+    .where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId), eq(parts.id, partId)));
   return row;
 }
 
@@ -92,7 +118,10 @@ export async function updatePart(db: Db, shopId: string, userId: string, jobId: 
     if (!row) return null;
     if (row.drawerScheduleId) {
       const owned = SCHEDULE_OWNED_FIELDS.filter((f) => patch[f] !== undefined && patch[f] !== row[f]);
-      if (owned.length) throw conflict(`This row comes from a drawer schedule: change its ${owned.map((f) => PART_FIELD_NAMES[f]).join(', ')} in the schedule instead.`);
+      if (owned.length)
+        throw conflict(
+          `This row comes from a drawer schedule: change its ${owned.map((f) => PART_FIELD_NAMES[f]).join(', ')} in the schedule instead.`,
+        );
     }
     const [updated] = await tx.update(parts).set(patch).where(eq(parts.id, partId)).returning();
     await touchJob(tx, shopId, jobId);
@@ -113,4 +142,3 @@ export async function deletePart(db: Db, shopId: string, userId: string, jobId: 
     return true;
   });
 }
-

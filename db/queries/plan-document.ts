@@ -10,7 +10,10 @@ import { PLAN_VERSION } from '@/shared/schemas/nesting';
  * plan_pieces / placements / saw_steps rows are written from it when a plan is released.
  */
 export async function getPlan(db: Db, shopId: string, planId: string) {
-  const [row] = await db.select().from(plans).where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
+  const [row] = await db
+    .select()
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!row) return null;
   return { ...row, document: readPlan(row.document) };
 }

@@ -12,7 +12,6 @@ export function judgePlan(request: NestRequest, plan: unknown): { ok: true; plan
   return violations.length ? { ok: false, violations } : { ok: true, plan: planSchema.parse(plan) };
 }
 
-
 /** What a list of a job's plans shows. */
 export interface JobPlanSummary {
   id: string;
@@ -60,13 +59,34 @@ export async function listJobPlans(db: Db, shopId: string, jobId: string): Promi
 }
 
 /** A new draft plan with the request it was nested from (already judged valid by the caller). */
-export async function createDraftPlan(db: Db, input: { shopId: string; jobId: string; userId: string; name: string; request: NestRequest; plan: Plan; recutPlan?: boolean }) {
+export async function createDraftPlan(
+  db: Db,
+  input: { shopId: string; jobId: string; userId: string; name: string; request: NestRequest; plan: Plan; recutPlan?: boolean },
+) {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(plans)
-      .values({ shopId: input.shopId, jobId: input.jobId, name: input.name, status: 'draft', recutPlan: input.recutPlan ?? false, request: input.request, document: input.plan, ...figures(input.plan), createdBy: input.userId, ...stamp() })
+      .values({
+        shopId: input.shopId,
+        jobId: input.jobId,
+        name: input.name,
+        status: 'draft',
+        recutPlan: input.recutPlan ?? false,
+        request: input.request,
+        document: input.plan,
+        ...figures(input.plan),
+        createdBy: input.userId,
+        ...stamp(),
+      })
       .returning({ id: plans.id, updatedAt: plans.updatedAt });
-    await recordAudit(tx, { shopId: input.shopId, userId: input.userId, action: 'create', entity: 'plan', entityId: row.id, data: { jobId: input.jobId, name: input.name, recutPlan: input.recutPlan ?? false } });
+    await recordAudit(tx, {
+      shopId: input.shopId,
+      userId: input.userId,
+      action: 'create',
+      entity: 'plan',
+      entityId: row.id,
+      data: { jobId: input.jobId, name: input.name, recutPlan: input.recutPlan ?? false },
+    });
     return row;
   });
 }
@@ -82,7 +102,10 @@ export async function updateDraftPlan(
   input: { shopId: string; planId: string; userId: string; plan: Plan; name?: string; baseUpdatedAt?: string },
 ): Promise<DraftUpdateResult> {
   return db.transaction(async (tx) => {
-    const [row] = await tx.select({ status: plans.status, updatedAt: plans.updatedAt }).from(plans).where(and(eq(plans.shopId, input.shopId), eq(plans.id, input.planId)));
+    const [row] = await tx
+      .select({ status: plans.status, updatedAt: plans.updatedAt })
+      .from(plans)
+      .where(and(eq(plans.shopId, input.shopId), eq(plans.id, input.planId)));
     if (!row) return { ok: false, reason: 'not-found' } as const;
     if (row.status !== 'draft') return { ok: false, reason: 'not-draft' } as const;
     if (input.baseUpdatedAt && new Date(input.baseUpdatedAt).getTime() !== row.updatedAt.getTime()) return { ok: false, reason: 'stale' } as const;
@@ -91,7 +114,14 @@ export async function updateDraftPlan(
       .update(plans)
       .set({ document: input.plan, ...figures(input.plan), ...(input.name ? { name: input.name } : {}), updatedAt })
       .where(and(eq(plans.shopId, input.shopId), eq(plans.id, input.planId), eq(plans.status, 'draft')));
-    await recordAudit(tx, { shopId: input.shopId, userId: input.userId, action: 'update', entity: 'plan', entityId: input.planId, data: { edited: true } });
+    await recordAudit(tx, {
+      shopId: input.shopId,
+      userId: input.userId,
+      action: 'update',
+      entity: 'plan',
+      entityId: input.planId,
+      data: { edited: true },
+    });
     return { ok: true, updatedAt } as const;
   });
 }

@@ -41,7 +41,10 @@ export class StockShortage extends HttpError {
     readonly jobId: string,
     readonly missing: MissingPiece[],
   ) {
-    super(409, `${missing.length} stock piece${missing.length === 1 ? ' is' : 's are'} no longer available. Nothing was reserved; nest the job again against what is left.`);
+    super(
+      409,
+      `${missing.length} stock piece${missing.length === 1 ? ' is' : 's are'} no longer available. Nothing was reserved; nest the job again against what is left.`,
+    );
   }
 }
 
@@ -75,7 +78,10 @@ async function moveStatus(tx: Tx, shopId: string, planId: string, from: PlanStat
     .where(and(eq(plans.shopId, shopId), eq(plans.id, planId), inArray(plans.status, from)))
     .returning();
   if (row) return row;
-  const [existing] = await tx.select({ status: plans.status }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
+  const [existing] = await tx
+    .select({ status: plans.status })
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!existing) throw new PlanStateError(404, 'That plan was not found.');
   throw new PlanStateError(409, `This plan is ${existing.status}; only a ${from.join(' or ')} plan can be ${verb}.`);
 }
@@ -159,7 +165,10 @@ export async function releasePlan(db: Db, { shopId, userId, planId }: { shopId: 
           .returning({ id: stockItems.id });
         if (done.length) reserved.push({ stockId: g.stockId, count: g.count });
         else {
-          const [now] = await tx.select({ free: sql<number>`${stockItems.onHand} - ${stockItems.reserved}` }).from(stockItems).where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId)));
+          const [now] = await tx
+            .select({ free: sql<number>`${stockItems.onHand} - ${stockItems.reserved}` })
+            .from(stockItems)
+            .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId)));
           missing.push(missingFrom(g, Math.max(0, Number(now?.free ?? 0))));
         }
       } else {
@@ -178,7 +187,16 @@ export async function releasePlan(db: Db, { shopId, userId, planId }: { shopId: 
     const reason = `Reserved for plan “${row.name}”`;
     const moves = reserved.map((r) => {
       const ref = stockRef.parse(r.stockId)!;
-      return { shopId, kind: 'reserved' as const, quantity: 0, reservedChange: r.count, planId, userId, reason, ...(ref.source === 'offcut' ? { offcutId: ref.id } : { stockItemId: ref.id }) };
+      return {
+        shopId,
+        kind: 'reserved' as const,
+        quantity: 0,
+        reservedChange: r.count,
+        planId,
+        userId,
+        reason,
+        ...(ref.source === 'offcut' ? { offcutId: ref.id } : { stockItemId: ref.id }),
+      };
     });
     if (moves.length) await tx.insert(stockMovements).values(moves);
     if (row.recutPlan) await holdRecutsForPlan(tx, { shopId, planId, recutIds: plan.pieces.flatMap((p) => p.placements.map((pl) => pl.partId)) });
@@ -192,13 +210,23 @@ export async function releasePlan(db: Db, { shopId, userId, planId }: { shopId: 
 /** What the plan still holds: net reserved per stock item and per offcut, from its own movement rows. */
 export async function heldBy(tx: Tx, shopId: string, planId: string) {
   const rows = await tx
-    .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId, held: sql<number>`sum(${stockMovements.reservedChange})`.mapWith(Number) })
+    .select({
+      stockItemId: stockMovements.stockItemId,
+      offcutId: stockMovements.offcutId,
+      held: sql<number>`sum(${stockMovements.reservedChange})`.mapWith(Number),
+    })
     .from(stockMovements)
     .where(and(eq(stockMovements.shopId, shopId), eq(stockMovements.planId, planId)))
     .groupBy(stockMovements.stockItemId, stockMovements.offcutId);
   return {
-    items: rows.filter((r) => r.stockItemId && r.held > 0).map((r) => ({ id: r.stockItemId!, count: r.held })).sort((a, b) => a.id.localeCompare(b.id)),
-    offcuts: rows.filter((r) => r.offcutId && r.held > 0).map((r) => r.offcutId!).sort(),
+    items: rows
+      .filter((r) => r.stockItemId && r.held > 0)
+      .map((r) => ({ id: r.stockItemId!, count: r.held }))
+      .sort((a, b) => a.id.localeCompare(b.id)),
+    offcuts: rows
+      .filter((r) => r.offcutId && r.held > 0)
+      .map((r) => r.offcutId!)
+      .sort(),
   };
 }
 
@@ -213,15 +241,24 @@ async function giveBack(tx: Tx, shopId: string, planId: string, userId: string, 
   for (const item of held.items) {
     const done = await tx
       .update(stockItems)
-      .set(consume ? { reserved: sql`${stockItems.reserved} - ${item.count}`, onHand: sql`${stockItems.onHand} - ${item.count}` } : { reserved: sql`${stockItems.reserved} - ${item.count}` })
+      .set(
+        consume
+          ? { reserved: sql`${stockItems.reserved} - ${item.count}`, onHand: sql`${stockItems.onHand} - ${item.count}` }
+          : { reserved: sql`${stockItems.reserved} - ${item.count}` },
+      )
       .where(and(eq(stockItems.id, item.id), eq(stockItems.shopId, shopId), sql`${stockItems.reserved} >= ${item.count}`))
       .returning({ id: stockItems.id });
     // The CHECK constraints make this impossible unless the ledger and the counts disagree: refuse, change nothing.
     if (!done.length) throw new Error(`Stock item ${item.id} holds fewer reservations than plan ${planId} recorded.`);
-    await tx.insert(stockMovements).values({ shopId, kind, stockItemId: item.id, quantity: consume ? -item.count : 0, reservedChange: -item.count, planId, userId, reason });
+    await tx
+      .insert(stockMovements)
+      .values({ shopId, kind, stockItemId: item.id, quantity: consume ? -item.count : 0, reservedChange: -item.count, planId, userId, reason });
   }
   for (const id of held.offcuts) {
-    await tx.update(offcuts).set({ status: then }).where(and(eq(offcuts.id, id), eq(offcuts.shopId, shopId), eq(offcuts.status, 'reserved')));
+    await tx
+      .update(offcuts)
+      .set({ status: then })
+      .where(and(eq(offcuts.id, id), eq(offcuts.shopId, shopId), eq(offcuts.status, 'reserved')));
     await tx.insert(stockMovements).values({ shopId, kind, offcutId: id, quantity: consume ? -1 : 0, reservedChange: -1, planId, userId, reason });
   }
   return held;
@@ -271,7 +308,14 @@ export async function finishPlan(
 ): Promise<FinishResult> {
   const body = finishPlanSchema.parse(input);
   return db.transaction(async (tx) => {
-    const row = await moveStatus(tx, shopId, planId, ['released', 'cutting'], { status: 'done', finishedAt: new Date(), finishedBy: userId }, 'marked done');
+    const row = await moveStatus(
+      tx,
+      shopId,
+      planId,
+      ['released', 'cutting'],
+      { status: 'done', finishedAt: new Date(), finishedBy: userId },
+      'marked done',
+    );
     const plan = readPlan(row.document);
     const parsed = nestRequestSchema.safeParse(row.request);
     const request = parsed.success ? parsed.data : null;
@@ -298,8 +342,21 @@ export async function finishPlan(
       const fromRack = Math.min(g.count, Math.max(0, item.free));
       const onArrival = g.count - fromRack;
       if (fromRack) {
-        await tx.update(stockItems).set({ onHand: sql`${stockItems.onHand} - ${fromRack}` }).where(and(eq(stockItems.id, g.ref.id), sql`${stockItems.onHand} - ${stockItems.reserved} >= ${fromRack}`));
-        await tx.insert(stockMovements).values({ shopId, kind: 'consumed', stockItemId: g.ref.id, quantity: -fromRack, planId, userId, reason: `${reason} (bought, taken from the rack)` });
+        await tx
+          .update(stockItems)
+          .set({ onHand: sql`${stockItems.onHand} - ${fromRack}` })
+          .where(and(eq(stockItems.id, g.ref.id), sql`${stockItems.onHand} - ${stockItems.reserved} >= ${fromRack}`));
+        await tx
+          .insert(stockMovements)
+          .values({
+            shopId,
+            kind: 'consumed',
+            stockItemId: g.ref.id,
+            quantity: -fromRack,
+            planId,
+            userId,
+            reason: `${reason} (bought, taken from the rack)`,
+          });
       }
       if (onArrival) {
         await tx.insert(stockMovements).values([
@@ -314,16 +371,41 @@ export async function finishPlan(
     for (const o of outcome.rack) {
       const [row_] = await tx
         .insert(offcuts)
-        .values({ shopId, material: o.material, thicknessMm: o.thicknessMm, lengthMm: o.lengthMm, widthMm: o.widthMm, grain: o.grain, status: 'available', location: o.location, sourcePlanId: planId, sourcePiece: String(o.piece + 1), costCents: o.costCents })
+        .values({
+          shopId,
+          material: o.material,
+          thicknessMm: o.thicknessMm,
+          lengthMm: o.lengthMm,
+          widthMm: o.widthMm,
+          grain: o.grain,
+          status: 'available',
+          location: o.location,
+          sourcePlanId: planId,
+          sourcePiece: String(o.piece + 1),
+          costCents: o.costCents,
+        })
         .returning({ id: offcuts.id });
-      await tx.insert(stockMovements).values({ shopId, kind: 'offcut-created', offcutId: row_.id, quantity: 1, planId, userId, reason: `From piece ${o.piece + 1} of plan “${row.name}”` });
+      await tx
+        .insert(stockMovements)
+        .values({
+          shopId,
+          kind: 'offcut-created',
+          offcutId: row_.id,
+          quantity: 1,
+          planId,
+          userId,
+          reason: `From piece ${o.piece + 1} of plan “${row.name}”`,
+        });
       created.push({ id: row_.id, lengthMm: o.lengthMm, widthMm: o.widthMm, location: o.location });
     }
 
     // Damaged parts: marked on their placement rows; their area counts as spoiled, not yield.
     await writePieceRows(tx, shopId, planId, plan);
     for (const d of outcome.damaged) {
-      const [pieceRow] = await tx.select({ id: planPieces.id }).from(planPieces).where(and(eq(planPieces.planId, planId), eq(planPieces.index, d.piece)));
+      const [pieceRow] = await tx
+        .select({ id: planPieces.id })
+        .from(planPieces)
+        .where(and(eq(planPieces.planId, planId), eq(planPieces.index, d.piece)));
       // A placement's position is unique on its piece, and needs no part row (a typed part id may not be a uuid).
       if (pieceRow) {
         await tx
@@ -345,9 +427,27 @@ export async function finishPlan(
 
     const { yieldRatio, wasteRatio, spoiledRatio, costCents } = outcome;
     await tx.update(plans).set({ yieldRatio, wasteRatio, spoiledRatio, costCents }).where(eq(plans.id, planId));
-    await recordAudit(tx, { shopId, userId, action: 'finish', entity: 'plan', entityId: planId, data: { offcuts: created.length, damaged: body.damaged.length, recutsClosed: closed.length } });
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: 'finish',
+      entity: 'plan',
+      entityId: planId,
+      data: { offcuts: created.length, damaged: body.damaged.length, recutsClosed: closed.length },
+    });
     const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: `plan “${row.name}” finished` });
-    return { planId, jobId: row.jobId, yieldRatio, wasteRatio, spoiledRatio, costCents, offcuts: created, damaged: body.damaged.length, recutsAdded: added.length, recutsClosed: closed.length, jobStatus };
+    return {
+      planId,
+      jobId: row.jobId,
+      yieldRatio,
+      wasteRatio,
+      spoiledRatio,
+      costCents,
+      offcuts: created,
+      damaged: body.damaged.length,
+      recutsAdded: added.length,
+      recutsClosed: closed.length,
+      jobStatus,
+    };
   });
 }
-

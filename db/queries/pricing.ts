@@ -33,12 +33,16 @@ export async function listHardware(db: Db, shopId: string): Promise<HardwareItem
 }
 
 const sameName = (name: string) => conflict(`The price list already has “${name}”: change that one, or give this another name.`);
-const isUniqueViolation = (e: unknown) => (e as { code?: string; cause?: { code?: string } })?.code === '23505' || (e as { cause?: { code?: string } })?.cause?.code === '23505';
+const isUniqueViolation = (e: unknown) =>
+  (e as { code?: string; cause?: { code?: string } })?.code === '23505' || (e as { cause?: { code?: string } })?.cause?.code === '23505';
 
 export async function createHardware(db: Db, shopId: string, userId: string, input: HardwareItemInput): Promise<HardwareItem> {
   try {
     return await db.transaction(async (tx) => {
-      const [row] = await tx.insert(hardwareItems).values({ ...input, shopId }).returning();
+      const [row] = await tx
+        .insert(hardwareItems)
+        .values({ ...input, shopId })
+        .returning();
       await recordAudit(tx, { shopId, userId, action: 'create', entity: 'hardware-item', entityId: row.id, data: input });
       return toItem(row);
     });
@@ -51,7 +55,11 @@ export async function createHardware(db: Db, shopId: string, userId: string, inp
 export async function updateHardware(db: Db, shopId: string, userId: string, id: string, input: HardwareItemInput): Promise<HardwareItem | null> {
   try {
     return await db.transaction(async (tx) => {
-      const [row] = await tx.update(hardwareItems).set(input).where(and(eq(hardwareItems.shopId, shopId), eq(hardwareItems.id, id))).returning();
+      const [row] = await tx
+        .update(hardwareItems)
+        .set(input)
+        .where(and(eq(hardwareItems.shopId, shopId), eq(hardwareItems.id, id)))
+        .returning();
       if (!row) return null;
       await recordAudit(tx, { shopId, userId, action: 'update', entity: 'hardware-item', entityId: id, data: input });
       return toItem(row);
@@ -64,7 +72,10 @@ export async function updateHardware(db: Db, shopId: string, userId: string, id:
 
 export async function deleteHardware(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
-    const rows = await tx.delete(hardwareItems).where(and(eq(hardwareItems.shopId, shopId), eq(hardwareItems.id, id))).returning({ name: hardwareItems.name });
+    const rows = await tx
+      .delete(hardwareItems)
+      .where(and(eq(hardwareItems.shopId, shopId), eq(hardwareItems.id, id)))
+      .returning({ name: hardwareItems.name });
     if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'hardware-item', entityId: id, data: rows[0] });
     return rows.length > 0;
   });

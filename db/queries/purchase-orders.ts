@@ -126,7 +126,11 @@ export async function listPurchaseOrders(db: Db, shopId: string): Promise<Purcha
     .leftJoin(plans, eq(plans.id, purchaseOrders.planId))
     .where(eq(purchaseOrders.shopId, shopId))
     .orderBy(desc(purchaseOrders.number));
-  const lines = await linesOf(db, shopId, rows.map((r) => r.order.id));
+  const lines = await linesOf(
+    db,
+    shopId,
+    rows.map((r) => r.order.id),
+  );
   return rows.map((r) => toView({ ...r.order, planName: r.planName, jobId: r.jobId }, lines.get(r.order.id) ?? []));
 }
 
@@ -144,7 +148,10 @@ export async function getPurchaseOrder(db: Db, shopId: string, id: string): Prom
 /** Pieces per stock size still to come in on open orders (ordered less received). */
 export async function onOrderQuantities(db: Db, shopId: string): Promise<Map<string, number>> {
   const rows = await db
-    .select({ stockItemId: purchaseOrderLines.stockItemId, n: sql<number>`sum(${purchaseOrderLines.quantity} - ${purchaseOrderLines.received})`.mapWith(Number) })
+    .select({
+      stockItemId: purchaseOrderLines.stockItemId,
+      n: sql<number>`sum(${purchaseOrderLines.quantity} - ${purchaseOrderLines.received})`.mapWith(Number),
+    })
     .from(purchaseOrderLines)
     .innerJoin(purchaseOrders, eq(purchaseOrders.id, purchaseOrderLines.purchaseOrderId))
     .where(and(eq(purchaseOrderLines.shopId, shopId), inArray(purchaseOrders.status, [...OPEN_STATUSES])))
@@ -154,7 +161,14 @@ export async function onOrderQuantities(db: Db, shopId: string): Promise<Map<str
 
 /** The stock sizes running low, each with what open orders bring of it. */
 export async function lowStockWithOrders(db: Db, shopId: string) {
-  const [items, onOrder] = await Promise.all([db.select().from(stockItems).where(eq(stockItems.shopId, shopId)).orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)), onOrderQuantities(db, shopId)]);
+  const [items, onOrder] = await Promise.all([
+    db
+      .select()
+      .from(stockItems)
+      .where(eq(stockItems.shopId, shopId))
+      .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
+    onOrderQuantities(db, shopId),
+  ]);
   return items.filter(isLowStock).map((i) => ({ ...i, free: i.onHand - i.reserved, onOrder: onOrder.get(i.id) ?? 0 }));
 }
 
@@ -168,24 +182,53 @@ async function supplierEmails(db: Db, shopId: string): Promise<Map<string, strin
 async function rememberSupplierEmail(tx: Db, shopId: string, name: string, email: string) {
   if (!name.trim() || !email) return;
   // The unique index is on lower(name): the conflict target names the same expression.
-  await tx.execute(sql`insert into ${suppliers} (shop_id, name, email) values (${shopId}, ${name.trim()}, ${email}) on conflict (shop_id, lower(name)) do update set email = excluded.email`);
+  await tx.execute(
+    sql`insert into ${suppliers} (shop_id, name, email) values (${shopId}, ${name.trim()}, ${email}) on conflict (shop_id, lower(name)) do update set email = excluded.email`,
+  );
 }
 
-async function insertOrders(db: Db, shopId: string, userId: string, orders: SupplierOrder[], source: 'plan' | 'low-stock' | 'manual', planId: string | null): Promise<string[]> {
+async function insertOrders(
+  db: Db,
+  shopId: string,
+  userId: string,
+  orders: SupplierOrder[],
+  source: 'plan' | 'low-stock' | 'manual',
+  planId: string | null,
+): Promise<string[]> {
   const emails = await supplierEmails(db, shopId);
   return db.transaction(async (tx) => {
     // The shop row is locked so two orders made at once never take one number.
     const [shop] = await tx.select({ currency: shops.currency }).from(shops).where(eq(shops.id, shopId)).for('update');
-    const [{ last }] = await tx.select({ last: sql<number>`coalesce(max(${purchaseOrders.number}), 0)`.mapWith(Number) }).from(purchaseOrders).where(eq(purchaseOrders.shopId, shopId));
+    const [{ last }] = await tx
+      .select({ last: sql<number>`coalesce(max(${purchaseOrders.number}), 0)`.mapWith(Number) })
+      .from(purchaseOrders)
+      .where(eq(purchaseOrders.shopId, shopId));
     const ids: string[] = [];
     for (const [i, o] of orders.entries()) {
       const supplier = o.supplier || 'Supplier to choose';
       const [row] = await tx
         .insert(purchaseOrders)
-        .values({ shopId, number: last + 1 + i, supplier, supplierEmail: emails.get(o.supplier.toLowerCase()) ?? '', source, planId, currency: shop.currency, createdBy: userId })
+        .values({
+          shopId,
+          number: last + 1 + i,
+          supplier,
+          supplierEmail: emails.get(o.supplier.toLowerCase()) ?? '',
+          source,
+          planId,
+          currency: shop.currency,
+          createdBy: userId,
+        })
         .returning({ id: purchaseOrders.id, number: purchaseOrders.number });
-      if (o.lines.length) await tx.insert(purchaseOrderLines).values(o.lines.map((l, position) => ({ ...l, shopId, purchaseOrderId: row.id, position })));
-      await recordAudit(tx, { shopId, userId, action: 'create', entity: 'purchase-order', entityId: row.id, data: { number: row.number, source, planId, lines: o.lines.length } });
+      if (o.lines.length)
+        await tx.insert(purchaseOrderLines).values(o.lines.map((l, position) => ({ ...l, shopId, purchaseOrderId: row.id, position })));
+      await recordAudit(tx, {
+        shopId,
+        userId,
+        action: 'create',
+        entity: 'purchase-order',
+        entityId: row.id,
+        data: { number: row.number, source, planId, lines: o.lines.length },
+      });
       ids.push(row.id);
     }
     return ids;
@@ -194,7 +237,14 @@ async function insertOrders(db: Db, shopId: string, userId: string, orders: Supp
 
 /** One draft per supplier for the sizes running low (up to twice their mark, less what open orders bring). */
 export async function createFromLowStock(db: Db, shopId: string, userId: string): Promise<string[]> {
-  const [items, onOrder] = await Promise.all([db.select().from(stockItems).where(eq(stockItems.shopId, shopId)).orderBy(asc(stockItems.material), asc(stockItems.thicknessMm), asc(stockItems.lengthMm)), onOrderQuantities(db, shopId)]);
+  const [items, onOrder] = await Promise.all([
+    db
+      .select()
+      .from(stockItems)
+      .where(eq(stockItems.shopId, shopId))
+      .orderBy(asc(stockItems.material), asc(stockItems.thicknessMm), asc(stockItems.lengthMm)),
+    onOrderQuantities(db, shopId),
+  ]);
   const orders = lowStockOrders(items, onOrder);
   if (!orders.length) throw conflict('Nothing is running low that open orders do not already bring: no order to make.');
   return insertOrders(db, shopId, userId, orders, 'low-stock', null);
@@ -202,15 +252,28 @@ export async function createFromLowStock(db: Db, shopId: string, userId: string)
 
 /** One draft per supplier for a plan's stock to buy (sizes it buys, and what the rack is short of for the rest). */
 export async function createFromPlan(db: Db, shopId: string, userId: string, planId: string): Promise<string[]> {
-  const [plan] = await db.select({ jobId: plans.jobId, status: plans.status }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
+  const [plan] = await db
+    .select({ jobId: plans.jobId, status: plans.status })
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!plan) throw notFound('That plan');
   if (plan.status === 'cancelled') throw conflict('That plan was cancelled: nothing to buy for it.');
   const takeoff = await getTakeoff(db, shopId, plan.jobId, planId);
   if (!takeoff) throw notFound('That plan');
-  const lines = [...takeoff.pull, ...takeoff.buy].map((l) => ({ source: l.source, stockItemId: l.stockId.replace(/^(buy|stock):/, ''), count: l.count, free: l.free, heldByPlan: l.heldByPlan }));
+  const lines = [...takeoff.pull, ...takeoff.buy].map((l) => ({
+    source: l.source,
+    stockItemId: l.stockId.replace(/^(buy|stock):/, ''),
+    count: l.count,
+    free: l.free,
+    heldByPlan: l.heldByPlan,
+  }));
   const wanted = piecesToBuy(lines);
   if (!wanted.size) throw conflict('The stock room covers this plan: nothing to buy.');
-  const items = await db.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), inArray(stockItems.id, [...wanted.keys()]))).orderBy(asc(stockItems.material), asc(stockItems.thicknessMm));
+  const items = await db
+    .select()
+    .from(stockItems)
+    .where(and(eq(stockItems.shopId, shopId), inArray(stockItems.id, [...wanted.keys()])))
+    .orderBy(asc(stockItems.material), asc(stockItems.thicknessMm));
   return insertOrders(db, shopId, userId, groupBySupplier(wanted, items), 'plan', planId);
 }
 
@@ -220,7 +283,11 @@ export async function createManual(db: Db, shopId: string, userId: string, suppl
 }
 
 async function lockOrder(tx: Db, shopId: string, id: string) {
-  const [row] = await tx.select().from(purchaseOrders).where(and(eq(purchaseOrders.shopId, shopId), eq(purchaseOrders.id, id))).for('update');
+  const [row] = await tx
+    .select()
+    .from(purchaseOrders)
+    .where(and(eq(purchaseOrders.shopId, shopId), eq(purchaseOrders.id, id)))
+    .for('update');
   if (!row) throw notFound('That purchase order');
   return row;
 }
@@ -232,11 +299,20 @@ export async function updateDraft(db: Db, shopId: string, userId: string, id: st
     if (row.status !== 'draft') throw conflict(`${poNumber(row.number)} was sent and stays as the supplier has it; only a draft can be changed.`);
     if (patch.lines) {
       const ids = patch.lines.map((l) => l.stockItemId);
-      const found = ids.length ? await tx.select({ id: stockItems.id }).from(stockItems).where(and(eq(stockItems.shopId, shopId), inArray(stockItems.id, ids))) : [];
+      const found = ids.length
+        ? await tx
+            .select({ id: stockItems.id })
+            .from(stockItems)
+            .where(and(eq(stockItems.shopId, shopId), inArray(stockItems.id, ids)))
+        : [];
       const missing = patch.lines.findIndex((l) => !found.some((f) => f.id === l.stockItemId));
-      if (missing >= 0) throw new HttpError(422, `Line ${missing + 1} names a stock size this shop does not have.`, { [`lines.${missing}.stockItemId`]: ['Pick one of the stock room’s sizes.'] });
+      if (missing >= 0)
+        throw new HttpError(422, `Line ${missing + 1} names a stock size this shop does not have.`, {
+          [`lines.${missing}.stockItemId`]: ['Pick one of the stock room’s sizes.'],
+        });
       await tx.delete(purchaseOrderLines).where(eq(purchaseOrderLines.purchaseOrderId, id));
-      if (patch.lines.length) await tx.insert(purchaseOrderLines).values(patch.lines.map((l, position) => ({ ...l, shopId, purchaseOrderId: id, position })));
+      if (patch.lines.length)
+        await tx.insert(purchaseOrderLines).values(patch.lines.map((l, position) => ({ ...l, shopId, purchaseOrderId: id, position })));
     }
     const set: Partial<typeof purchaseOrders.$inferInsert> = { updatedAt: new Date() };
     if (patch.supplier !== undefined) set.supplier = patch.supplier;
@@ -244,7 +320,14 @@ export async function updateDraft(db: Db, shopId: string, userId: string, id: st
     if (patch.note !== undefined) set.note = patch.note;
     await tx.update(purchaseOrders).set(set).where(eq(purchaseOrders.id, id));
     if (patch.supplierEmail) await rememberSupplierEmail(tx, shopId, patch.supplier ?? row.supplier, patch.supplierEmail);
-    await recordAudit(tx, { shopId, userId, action: 'update', entity: 'purchase-order', entityId: id, data: { fields: Object.keys(patch), lines: patch.lines?.length } });
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: 'update',
+      entity: 'purchase-order',
+      entityId: id,
+      data: { fields: Object.keys(patch), lines: patch.lines?.length },
+    });
   });
   return (await getPurchaseOrder(db, shopId, id))!;
 }
@@ -254,18 +337,37 @@ export async function updateDraft(db: Db, shopId: string, userId: string, id: st
  * is no longer a draft, has no lines or no address, or changed since the caller read it (`seenUpdatedAt`): the PDF
  * attached must be the order as sent.
  */
-export async function markSent(db: Db, shopId: string, userId: string, id: string, seenUpdatedAt: string, enqueue: (tx: Db) => Promise<{ id: string }>) {
+export async function markSent(
+  db: Db,
+  shopId: string,
+  userId: string,
+  id: string,
+  seenUpdatedAt: string,
+  enqueue: (tx: Db) => Promise<{ id: string }>,
+) {
   return db.transaction(async (tx) => {
     const row = await lockOrder(tx, shopId, id);
     if (row.status !== 'draft') throw conflict(`${poNumber(row.number)} was already sent.`);
-    if (row.updatedAt.toISOString() !== seenUpdatedAt) throw conflict(`${poNumber(row.number)} changed while it was being sent: look it over and send it again.`);
-    const [{ n }] = await tx.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(purchaseOrderLines).where(eq(purchaseOrderLines.purchaseOrderId, id));
+    if (row.updatedAt.toISOString() !== seenUpdatedAt)
+      throw conflict(`${poNumber(row.number)} changed while it was being sent: look it over and send it again.`);
+    const [{ n }] = await tx
+      .select({ n: sql<number>`count(*)`.mapWith(Number) })
+      .from(purchaseOrderLines)
+      .where(eq(purchaseOrderLines.purchaseOrderId, id));
     if (n === 0) throw new HttpError(422, 'An order with no lines cannot be sent: add what to buy.');
-    if (!row.supplierEmail) throw new HttpError(422, 'Add the supplier’s e-mail address to send the order.', { supplierEmail: ['Type the supplier’s e-mail address.'] });
+    if (!row.supplierEmail)
+      throw new HttpError(422, 'Add the supplier’s e-mail address to send the order.', { supplierEmail: ['Type the supplier’s e-mail address.'] });
     const mail = await enqueue(tx);
     await tx.update(purchaseOrders).set({ status: 'sent', sentAt: new Date(), updatedAt: new Date() }).where(eq(purchaseOrders.id, id));
     await rememberSupplierEmail(tx, shopId, row.supplier, row.supplierEmail);
-    await recordAudit(tx, { shopId, userId, action: 'send', entity: 'purchase-order', entityId: id, data: { to: row.supplierEmail, mailId: mail.id } });
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: 'send',
+      entity: 'purchase-order',
+      entityId: id,
+      data: { to: row.supplierEmail, mailId: mail.id },
+    });
   });
 }
 
@@ -273,7 +375,10 @@ export async function markSent(db: Db, shopId: string, userId: string, id: strin
 export async function cancelPurchaseOrder(db: Db, shopId: string, userId: string, id: string): Promise<PurchaseOrderView> {
   await db.transaction(async (tx) => {
     const row = await lockOrder(tx, shopId, id);
-    if (row.status !== 'draft' && row.status !== 'sent') throw conflict(`${poNumber(row.number)} is ${row.status === 'cancelled' ? 'already cancelled' : row.status.replace('-', ' ')}: only a draft or a sent order with nothing received can be cancelled.`);
+    if (row.status !== 'draft' && row.status !== 'sent')
+      throw conflict(
+        `${poNumber(row.number)} is ${row.status === 'cancelled' ? 'already cancelled' : row.status.replace('-', ' ')}: only a draft or a sent order with nothing received can be cancelled.`,
+      );
     await tx.update(purchaseOrders).set({ status: 'cancelled', cancelledAt: new Date(), updatedAt: new Date() }).where(eq(purchaseOrders.id, id));
     await recordAudit(tx, { shopId, userId, action: 'cancel', entity: 'purchase-order', entityId: id });
   });
@@ -287,7 +392,13 @@ export async function cancelPurchaseOrder(db: Db, shopId: string, userId: string
  * `all` receives everything each line still waits for.
  * With `updateCosts`, each received size's cost in the stock room becomes this order's unit cost.
  */
-export async function receivePurchaseOrder(db: Db, shopId: string, userId: string, id: string, input: Pick<ReceivePurchaseOrder, 'lines' | 'updateCosts'> & Partial<Pick<ReceivePurchaseOrder, 'all' | 'note'>>): Promise<PurchaseOrderView> {
+export async function receivePurchaseOrder(
+  db: Db,
+  shopId: string,
+  userId: string,
+  id: string,
+  input: Pick<ReceivePurchaseOrder, 'lines' | 'updateCosts'> & Partial<Pick<ReceivePurchaseOrder, 'all' | 'note'>>,
+): Promise<PurchaseOrderView> {
   await db.transaction(async (tx) => {
     const row = await lockOrder(tx, shopId, id);
     const title = poNumber(row.number);
@@ -299,26 +410,45 @@ export async function receivePurchaseOrder(db: Db, shopId: string, userId: strin
       .innerJoin(stockItems, eq(stockItems.id, purchaseOrderLines.stockItemId))
       .where(eq(purchaseOrderLines.purchaseOrderId, id))
       .for('update');
-    const wanted = input.all ? lines.filter((l) => l.line.quantity > l.line.received).map((l) => ({ lineId: l.line.id, quantity: l.line.quantity - l.line.received })) : input.lines.filter((l) => l.quantity > 0);
+    const wanted = input.all
+      ? lines.filter((l) => l.line.quantity > l.line.received).map((l) => ({ lineId: l.line.id, quantity: l.line.quantity - l.line.received }))
+      : input.lines.filter((l) => l.quantity > 0);
     if (!wanted.length) throw new HttpError(422, 'Say how many pieces came on at least one line.');
     for (const w of input.lines) if (!lines.some((l) => l.line.id === w.lineId)) throw new HttpError(422, `A line named is not on ${title}.`);
     for (const w of wanted) {
       const { line, item } = lines.find((l) => l.line.id === w.lineId)!;
       const open = line.quantity - line.received;
       if (w.quantity > open) {
-        throw conflict(`${item.material} ${quoteNominal(item.nominalThickness)}: ${line.quantity} ordered and ${line.received} already received, so ${open} more can come in, not ${w.quantity}. Record extra pieces as a receipt in the stock room.`);
+        throw conflict(
+          `${item.material} ${quoteNominal(item.nominalThickness)}: ${line.quantity} ordered and ${line.received} already received, so ${open} more can come in, not ${w.quantity}. Record extra pieces as a receipt in the stock room.`,
+        );
       }
     }
     const reason = `Received on ${title}${input.note ? ` — ${input.note}` : ''}`;
     for (const w of wanted) {
       const { line, item } = lines.find((l) => l.line.id === w.lineId)!;
-      await tx.update(purchaseOrderLines).set({ received: line.received + w.quantity }).where(eq(purchaseOrderLines.id, line.id));
+      await tx
+        .update(purchaseOrderLines)
+        .set({ received: line.received + w.quantity })
+        .where(eq(purchaseOrderLines.id, line.id));
       const set: Partial<typeof stockItems.$inferInsert> = { onHand: sql`${stockItems.onHand} + ${w.quantity}` as never };
       if (input.updateCosts && line.unitCostCents !== item.costCents) set.costCents = line.unitCostCents;
-      await tx.update(stockItems).set(set).where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, item.id)));
-      await tx.insert(stockMovements).values({ shopId, kind: 'received', stockItemId: item.id, quantity: w.quantity, userId, reason, purchaseOrderId: id });
+      await tx
+        .update(stockItems)
+        .set(set)
+        .where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, item.id)));
+      await tx
+        .insert(stockMovements)
+        .values({ shopId, kind: 'received', stockItemId: item.id, quantity: w.quantity, userId, reason, purchaseOrderId: id });
       if (set.costCents !== undefined) {
-        await recordAudit(tx, { shopId, userId, action: 'update', entity: 'stock-item', entityId: item.id, data: { changes: { costCents: { from: item.costCents, to: line.unitCostCents } }, purchaseOrderId: id } });
+        await recordAudit(tx, {
+          shopId,
+          userId,
+          action: 'update',
+          entity: 'stock-item',
+          entityId: item.id,
+          data: { changes: { costCents: { from: item.costCents, to: line.unitCostCents } }, purchaseOrderId: id },
+        });
       }
     }
     const after = lines.map(({ line }) => line.received + (wanted.find((w) => w.lineId === line.id)?.quantity ?? 0) >= line.quantity);
@@ -327,18 +457,33 @@ export async function receivePurchaseOrder(db: Db, shopId: string, userId: strin
       .update(purchaseOrders)
       .set({ status: done ? 'received' : 'part-received', receivedAt: done ? new Date() : null, updatedAt: new Date() })
       .where(eq(purchaseOrders.id, id));
-    await recordAudit(tx, { shopId, userId, action: 'receive', entity: 'purchase-order', entityId: id, data: { lines: wanted, updateCosts: input.updateCosts } });
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: 'receive',
+      entity: 'purchase-order',
+      entityId: id,
+      data: { lines: wanted, updateCosts: input.updateCosts },
+    });
   });
   return (await getPurchaseOrder(db, shopId, id))!;
 }
 
 /** The buying settings kept on the shop. */
 export async function getBuyingSettings(db: Db, shopId: string) {
-  const [row] = await db.select({ purchaseOrderDetails: shops.purchaseOrderDetails, lowStockDigestTime: shops.lowStockDigestTime }).from(shops).where(eq(shops.id, shopId));
+  const [row] = await db
+    .select({ purchaseOrderDetails: shops.purchaseOrderDetails, lowStockDigestTime: shops.lowStockDigestTime })
+    .from(shops)
+    .where(eq(shops.id, shopId));
   return row ?? null;
 }
 
-export async function updateBuyingSettings(db: Db, shopId: string, userId: string, patch: { purchaseOrderDetails?: string; lowStockDigestTime?: string }) {
+export async function updateBuyingSettings(
+  db: Db,
+  shopId: string,
+  userId: string,
+  patch: { purchaseOrderDetails?: string; lowStockDigestTime?: string },
+) {
   if (Object.keys(patch).length) {
     await db.transaction(async (tx) => {
       await tx.update(shops).set(patch).where(eq(shops.id, shopId));

@@ -40,7 +40,12 @@ type RevisionRow = typeof quoteRevisions.$inferSelect;
 /** Everything the customer's page and its actions read, by the link's token. */
 async function findByToken(tx: Db, token: string, { lock = false } = {}) {
   const q = tx
-    .select({ r: quoteRevisions, number: quotes.number, job: { id: jobs.id, name: jobs.name, customerId: jobs.customerId }, shop: { id: shops.id, name: shops.name, timeZone: shops.timeZone } })
+    .select({
+      r: quoteRevisions,
+      number: quotes.number,
+      job: { id: jobs.id, name: jobs.name, customerId: jobs.customerId },
+      shop: { id: shops.id, name: shops.name, timeZone: shops.timeZone },
+    })
     .from(quoteRevisions)
     .innerJoin(quotes, eq(quotes.id, quoteRevisions.quoteId))
     .innerJoin(jobs, eq(jobs.id, quoteRevisions.jobId))
@@ -51,7 +56,10 @@ async function findByToken(tx: Db, token: string, { lock = false } = {}) {
   if (!row) throw new HttpError(404, 'This quote link does not work. Check that the whole address was copied, or ask the shop to send it again.');
   const [customer] = row.job.customerId ? await tx.select().from(customers).where(eq(customers.id, row.job.customerId)) : [];
   const [paid] = await tx
-    .select({ n: sql<number>`count(*)`.mapWith(Number), paidAt: sql<Date | null>`max(${quotePayments.paidAt})`.mapWith((v) => (v ? new Date(v) : null)) })
+    .select({
+      n: sql<number>`count(*)`.mapWith(Number),
+      paidAt: sql<Date | null>`max(${quotePayments.paidAt})`.mapWith((v) => (v ? new Date(v) : null)),
+    })
     .from(quotePayments)
     .where(and(eq(quotePayments.revisionId, row.r.id), eq(quotePayments.status, 'paid')));
   const depositPaid = (paid?.n ?? 0) > 0;
@@ -60,7 +68,8 @@ async function findByToken(tx: Db, token: string, { lock = false } = {}) {
 
 type Found = Awaited<ReturnType<typeof findByToken>>;
 
-const stateOf = (f: Found, now: Date): CustomerQuoteState => customerQuoteState({ status: f.r.status, validUntil: f.r.validUntil, depositPaid: f.depositPaid }, shopDay(now, f.shop.timeZone));
+const stateOf = (f: Found, now: Date): CustomerQuoteState =>
+  customerQuoteState({ status: f.r.status, validUntil: f.r.validUntil, depositPaid: f.depositPaid }, shopDay(now, f.shop.timeZone));
 
 function mailFacts(f: Found, link: string): QuoteMailFacts {
   const t = revisionTotals(f.r);
@@ -88,7 +97,10 @@ export interface CustomerQuote {
   answerClosed: string | null;
   /** Why paying the deposit is closed; null while they may pay. */
   paymentClosed: string | null;
-  revision: Pick<RevisionRow, 'currency' | 'taxPercent' | 'depositPercent' | 'validityDays' | 'terms' | 'validUntil' | 'acceptedName' | 'declineReason'>;
+  revision: Pick<
+    RevisionRow,
+    'currency' | 'taxPercent' | 'depositPercent' | 'validityDays' | 'terms' | 'validUntil' | 'acceptedName' | 'declineReason'
+  >;
   lines: CustomerLine[];
   totals: CustomerTotals;
   answeredAt: string | null;
@@ -147,7 +159,11 @@ export async function answerQuote(db: Db, token: string, answer: QuoteAnswer, fr
         updatedAt: now,
       })
       .where(eq(quoteRevisions.id, f.r.id));
-    if (accepted) await tx.update(jobs).set({ acceptedAt: sql`coalesce(${jobs.acceptedAt}, ${now.toISOString()}::timestamptz)` }).where(eq(jobs.id, f.job.id));
+    if (accepted)
+      await tx
+        .update(jobs)
+        .set({ acceptedAt: sql`coalesce(${jobs.acceptedAt}, ${now.toISOString()}::timestamptz)` })
+        .where(eq(jobs.id, f.job.id));
     await recordAudit(tx, {
       shopId: f.shop.id,
       userId: null,
@@ -156,9 +172,18 @@ export async function answerQuote(db: Db, token: string, answer: QuoteAnswer, fr
       entityId: f.r.id,
       data: accepted ? { by: answer.fullName, from } : { reason: answer.reason, from },
     });
-    await syncJobStatus(tx, { shopId: f.shop.id, jobId: f.job.id, userId: null, cause: accepted ? 'quote accepted by the customer' : 'quote declined by the customer' });
+    await syncJobStatus(tx, {
+      shopId: f.shop.id,
+      jobId: f.job.id,
+      userId: null,
+      cause: accepted ? 'quote accepted by the customer' : 'quote declined by the customer',
+    });
     if (accepted && f.customer?.email) {
-      const mail = quoteAcceptedMail({ ...mailFacts(f, appBaseUrl() + quoteLinkPath(token)), acceptedName: answer.fullName, acceptedAt: formatShopDateTime(now, f.shop.timeZone) });
+      const mail = quoteAcceptedMail({
+        ...mailFacts(f, appBaseUrl() + quoteLinkPath(token)),
+        acceptedName: answer.fullName,
+        acceptedAt: formatShopDateTime(now, f.shop.timeZone),
+      });
       await enqueueMail(tx, { shopId: f.shop.id, kind: 'quote-accepted', to: f.customer.email, ...mail });
     }
   });
@@ -179,7 +204,16 @@ export async function startDepositCheckout(db: Db, stripe: Stripe, token: string
   const title = `${quoteNumberText(f.number)} rev ${revisionLetter(f.r.revision)}`;
   const session = await stripe.checkout.sessions.create({
     mode: 'payment',
-    line_items: [{ quantity: 1, price_data: { currency: f.r.currency.toLowerCase(), unit_amount: totals.depositMinor, product_data: { name: `${f.shop.name}: deposit for ${title}, ${f.job.name}` } } }],
+    line_items: [
+      {
+        quantity: 1,
+        price_data: {
+          currency: f.r.currency.toLowerCase(),
+          unit_amount: totals.depositMinor,
+          product_data: { name: `${f.shop.name}: deposit for ${title}, ${f.job.name}` },
+        },
+      },
+    ],
     client_reference_id: f.r.id,
     ...(f.customer?.email ? { customer_email: f.customer.email } : {}),
     metadata: { shopId: f.shop.id, revisionId: f.r.id },
@@ -187,7 +221,16 @@ export async function startDepositCheckout(db: Db, stripe: Stripe, token: string
     cancel_url: `${back}?checkout=cancelled`,
   });
   if (!session.url) throw new HttpError(502, 'The payments service did not give a checkout address. Try again in a moment.');
-  await db.insert(quotePayments).values({ shopId: f.shop.id, revisionId: f.r.id, jobId: f.job.id, checkoutSessionId: session.id, amountMinor: totals.depositMinor, currency: f.r.currency });
+  await db
+    .insert(quotePayments)
+    .values({
+      shopId: f.shop.id,
+      revisionId: f.r.id,
+      jobId: f.job.id,
+      checkoutSessionId: session.id,
+      amountMinor: totals.depositMinor,
+      currency: f.r.currency,
+    });
   return { url: session.url };
 }
 
@@ -214,12 +257,26 @@ async function recordPaid(tx: Db, session: SessionFacts, now: Date): Promise<{ o
   if (session.payment_status !== 'paid') return { outcome: 'ignored', paymentId: payment.id };
   const [revision] = await tx.select().from(quoteRevisions).where(eq(quoteRevisions.id, payment.revisionId));
   const deposit = revisionTotals(revision).depositMinor;
-  if (session.amount_total !== payment.amountMinor || session.amount_total !== deposit || (session.currency ?? '').toLowerCase() !== payment.currency.toLowerCase()) {
-    throw new HttpError(422, `The payment (${session.amount_total ?? '?'} ${session.currency ?? '?'}) does not match the quote's deposit (${deposit} ${payment.currency.toLowerCase()}), so it was not recorded.`);
+  if (
+    session.amount_total !== payment.amountMinor ||
+    session.amount_total !== deposit ||
+    (session.currency ?? '').toLowerCase() !== payment.currency.toLowerCase()
+  ) {
+    throw new HttpError(
+      422,
+      `The payment (${session.amount_total ?? '?'} ${session.currency ?? '?'}) does not match the quote's deposit (${deposit} ${payment.currency.toLowerCase()}), so it was not recorded.`,
+    );
   }
   const intent = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
   await tx.update(quotePayments).set({ status: 'paid', paidAt: now, paymentIntentId: intent }).where(eq(quotePayments.id, payment.id));
-  await recordAudit(tx, { shopId: payment.shopId, userId: null, action: 'deposit-paid', entity: 'quote-revision', entityId: revision.id, data: { amountMinor: payment.amountMinor, currency: payment.currency, session: session.id } });
+  await recordAudit(tx, {
+    shopId: payment.shopId,
+    userId: null,
+    action: 'deposit-paid',
+    entity: 'quote-revision',
+    entityId: revision.id,
+    data: { amountMinor: payment.amountMinor, currency: payment.currency, session: session.id },
+  });
   await syncJobStatus(tx, { shopId: payment.shopId, jobId: payment.jobId, userId: null, cause: 'deposit paid' });
   await queueReceipt(tx, payment, revision, now);
   return { outcome: 'paid', paymentId: payment.id };
@@ -274,12 +331,26 @@ export async function applyPaymentEvent(db: Db, event: Stripe.Event, now = new D
       if (!payment) result = { outcome: 'unknown-session', paymentId: null };
       else if (charge.amount_refunded >= payment.amountMinor) {
         await tx.update(quotePayments).set({ status: 'refunded', refundedAt: now }).where(eq(quotePayments.id, payment.id));
-        await recordAudit(tx, { shopId: payment.shopId, userId: null, action: 'deposit-refunded', entity: 'quote-revision', entityId: payment.revisionId, data: { amountMinor: charge.amount_refunded } });
+        await recordAudit(tx, {
+          shopId: payment.shopId,
+          userId: null,
+          action: 'deposit-refunded',
+          entity: 'quote-revision',
+          entityId: payment.revisionId,
+          data: { amountMinor: charge.amount_refunded },
+        });
         await syncJobStatus(tx, { shopId: payment.shopId, jobId: payment.jobId, userId: null, cause: 'deposit refunded' });
         result = { outcome: 'refunded', paymentId: payment.id };
       } else {
         // Part of the deposit went back: the job keeps its deposit; the audit keeps the refund.
-        await recordAudit(tx, { shopId: payment.shopId, userId: null, action: 'deposit-part-refunded', entity: 'quote-revision', entityId: payment.revisionId, data: { amountMinor: charge.amount_refunded } });
+        await recordAudit(tx, {
+          shopId: payment.shopId,
+          userId: null,
+          action: 'deposit-part-refunded',
+          entity: 'quote-revision',
+          entityId: payment.revisionId,
+          data: { amountMinor: charge.amount_refunded },
+        });
         result = { outcome: 'partly-refunded', paymentId: payment.id };
       }
     }
@@ -294,7 +365,10 @@ export async function applyPaymentEvent(db: Db, event: Stripe.Event, now = new D
  */
 export async function reconcileCheckout(db: Db, stripe: Stripe, token: string, sessionId: string, now = new Date()): Promise<void> {
   const f = await findByToken(db, token);
-  const [payment] = await db.select().from(quotePayments).where(and(eq(quotePayments.checkoutSessionId, sessionId), eq(quotePayments.revisionId, f.r.id)));
+  const [payment] = await db
+    .select()
+    .from(quotePayments)
+    .where(and(eq(quotePayments.checkoutSessionId, sessionId), eq(quotePayments.revisionId, f.r.id)));
   if (!payment || payment.status !== 'open') return;
   const session = await stripe.checkout.sessions.retrieve(sessionId);
   if (session.payment_status !== 'paid') return;
@@ -309,14 +383,41 @@ export async function reconcileCheckout(db: Db, stripe: Stripe, token: string, s
 export async function expireQuotes(db: Db, now = new Date()): Promise<number> {
   return db.transaction(async (tx) => {
     const due = await tx
-      .select({ id: quoteRevisions.id, shopId: quoteRevisions.shopId, jobId: quoteRevisions.jobId, validUntil: quoteRevisions.validUntil, timeZone: shops.timeZone })
+      .select({
+        id: quoteRevisions.id,
+        shopId: quoteRevisions.shopId,
+        jobId: quoteRevisions.jobId,
+        validUntil: quoteRevisions.validUntil,
+        timeZone: shops.timeZone,
+      })
       .from(quoteRevisions)
       .innerJoin(shops, eq(shops.id, quoteRevisions.shopId))
-      .where(and(eq(quoteRevisions.status, 'sent'), lt(quoteRevisions.validUntil, sql`(${now.toISOString()}::timestamptz at time zone ${shops.timeZone})::date`)))
+      .where(
+        and(
+          eq(quoteRevisions.status, 'sent'),
+          lt(quoteRevisions.validUntil, sql`(${now.toISOString()}::timestamptz at time zone ${shops.timeZone})::date`),
+        ),
+      )
       .for('update', { of: quoteRevisions });
     if (due.length === 0) return 0;
-    await tx.update(quoteRevisions).set({ status: 'expired', updatedAt: now }).where(inArray(quoteRevisions.id, due.map((d) => d.id)));
-    for (const d of due) await recordAudit(tx, { shopId: d.shopId, userId: null, action: 'expire', entity: 'quote-revision', entityId: d.id, data: { validUntil: d.validUntil } });
+    await tx
+      .update(quoteRevisions)
+      .set({ status: 'expired', updatedAt: now })
+      .where(
+        inArray(
+          quoteRevisions.id,
+          due.map((d) => d.id),
+        ),
+      );
+    for (const d of due)
+      await recordAudit(tx, {
+        shopId: d.shopId,
+        userId: null,
+        action: 'expire',
+        entity: 'quote-revision',
+        entityId: d.id,
+        data: { validUntil: d.validUntil },
+      });
     for (const jobId of new Set(due.map((d) => d.jobId))) {
       const shopId = due.find((d) => d.jobId === jobId)!.shopId;
       await syncJobStatus(tx, { shopId, jobId, userId: null, cause: 'quote expired' });
@@ -327,5 +428,8 @@ export async function expireQuotes(db: Db, now = new Date()): Promise<number> {
 
 /** A revision the customer answered may not be replaced by a newer one sent: the shop makes a new quote instead. */
 export function refuseNewRevisionAfter(status: RevisionRow['status'], revision: number) {
-  if (status === 'accepted') throw conflict(`Rev ${revisionLetter(revision)} was accepted by the customer: make a new quote for any change, so what they agreed to stays as it was.`);
+  if (status === 'accepted')
+    throw conflict(
+      `Rev ${revisionLetter(revision)} was accepted by the customer: make a new quote for any change, so what they agreed to stays as it was.`,
+    );
 }

@@ -65,7 +65,9 @@ export interface QuoteRevisionView {
 }
 
 /** A revision's totals, by the rules of lib/costing/RULES.md. */
-export function revisionTotals(r: Pick<RevisionRow, 'currency' | 'lines' | 'markupMaterialPercent' | 'markupHardwarePercent' | 'discount' | 'taxPercent' | 'depositPercent'>): QuoteTotals {
+export function revisionTotals(
+  r: Pick<RevisionRow, 'currency' | 'lines' | 'markupMaterialPercent' | 'markupHardwarePercent' | 'discount' | 'taxPercent' | 'depositPercent'>,
+): QuoteTotals {
   return quoteTotals({
     currency: r.currency,
     lines: r.lines,
@@ -109,10 +111,16 @@ function toView(r: RevisionRow, number: number, latestRevision: number, depositP
 }
 
 /** When the revision's deposit was paid (a paid, not refunded, payment), or null. */
-const depositPaidAt = sql<Date | null>`(select max(p.paid_at) from "quote_payments" p where p.revision_id = ${quoteRevisions.id} and p.status = 'paid')`.mapWith((v) => (v ? new Date(v) : null));
+const depositPaidAt =
+  sql<Date | null>`(select max(p.paid_at) from "quote_payments" p where p.revision_id = ${quoteRevisions.id} and p.status = 'paid')`.mapWith((v) =>
+    v ? new Date(v) : null,
+  );
 
 const latestOf = (tx: Db, quoteId: string) =>
-  tx.select({ n: sql<number>`max(${quoteRevisions.revision})`.mapWith(Number) }).from(quoteRevisions).where(eq(quoteRevisions.quoteId, quoteId));
+  tx
+    .select({ n: sql<number>`max(${quoteRevisions.revision})`.mapWith(Number) })
+    .from(quoteRevisions)
+    .where(eq(quoteRevisions.quoteId, quoteId));
 
 export async function getRevision(db: Db, shopId: string, revisionId: string): Promise<QuoteRevisionView | null> {
   const [row] = await db
@@ -145,7 +153,13 @@ export async function listCustomerQuotes(db: Db, shopId: string, customerId: str
     .from(quoteRevisions)
     .innerJoin(quotes, eq(quotes.id, quoteRevisions.quoteId))
     .innerJoin(jobs, eq(jobs.id, quoteRevisions.jobId))
-    .where(and(eq(quoteRevisions.shopId, shopId), eq(jobs.customerId, customerId), sql`${quoteRevisions.revision} = (select max(r2.revision) from "quote_revisions" r2 where r2.quote_id = ${quoteRevisions.quoteId})`))
+    .where(
+      and(
+        eq(quoteRevisions.shopId, shopId),
+        eq(jobs.customerId, customerId),
+        sql`${quoteRevisions.revision} = (select max(r2.revision) from "quote_revisions" r2 where r2.quote_id = ${quoteRevisions.quoteId})`,
+      ),
+    )
     .orderBy(desc(quotes.number));
   return rows.map(({ r, number, jobName, paidAt }) => ({ ...toView(r, number, r.revision, paidAt), jobName }));
 }
@@ -161,7 +175,8 @@ async function drawerFacts(db: Db, shopId: string, jobId: string, describe: (mm:
     if (!s.success) continue;
     boxes += s.data.quantity;
     for (const key of requiredSetupCards(s.data)) {
-      if (!cards.some((c) => c.joint === key.joint && Math.abs(c.stockThicknessMm - key.stockThicknessMm) <= SETUP_CARD_TOLERANCE_MM)) cards.push(key);
+      if (!cards.some((c) => c.joint === key.joint && Math.abs(c.stockThicknessMm - key.stockThicknessMm) <= SETUP_CARD_TOLERANCE_MM))
+        cards.push(key);
     }
     const box = boxFromOpening(s.data);
     if (!box.ok || box.slideLengthMm === null || s.data.slide.type === 'none' || s.data.slide.type === 'wooden-runners') continue;
@@ -177,10 +192,16 @@ async function drawerFacts(db: Db, shopId: string, jobId: string, describe: (mm:
 
 /** Makes a job's new quote (the shop's next number, rev A) with lines built from the job and, if named, one of its plans. */
 export async function createQuote(db: Db, shopId: string, userId: string, jobId: string, planId: string | null): Promise<QuoteRevisionView> {
-  const [job] = await db.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
+  const [job] = await db
+    .select({ id: jobs.id })
+    .from(jobs)
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
   if (!job) throw notFound('That job');
   if (planId) {
-    const [plan] = await db.select({ id: plans.id }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), eq(plans.id, planId), ne(plans.status, 'cancelled')));
+    const [plan] = await db
+      .select({ id: plans.id })
+      .from(plans)
+      .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), eq(plans.id, planId), ne(plans.status, 'cancelled')));
     if (!plan) throw new HttpError(422, 'That plan is not one of this job’s (or it was cancelled).', { planId: ['Pick one of the job’s plans.'] });
   }
   const [settings, priced, hardware] = await Promise.all([getShopSettings(db, shopId), getPricing(db, shopId), listHardware(db, shopId)]);
@@ -190,7 +211,10 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
   const [takeoff, drawers, [faces]] = await Promise.all([
     planId ? getTakeoff(db, shopId, jobId, planId) : null,
     drawerFacts(db, shopId, jobId, describe),
-    db.select({ mm2: sql<number>`coalesce(sum(2 * ${parts.lengthMm} * ${parts.widthMm} * ${parts.quantity}), 0)`.mapWith(Number) }).from(parts).where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId))),
+    db
+      .select({ mm2: sql<number>`coalesce(sum(2 * ${parts.lengthMm} * ${parts.widthMm} * ${parts.quantity}), 0)`.mapWith(Number) })
+      .from(parts)
+      .where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId))),
   ]);
   let cuts = 0;
   let piecesHandled = 0;
@@ -201,19 +225,32 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
     piecesHandled = totals.pieces;
   }
   const lines = buildQuoteLines({
-    takeoff: takeoff ? { lines: [...takeoff.pull, ...takeoff.buy], allowancePercent: takeoff.allowancePercent, allowanceCents: takeoff.totals.allowanceCents } : null,
+    takeoff: takeoff
+      ? { lines: [...takeoff.pull, ...takeoff.buy], allowancePercent: takeoff.allowancePercent, allowanceCents: takeoff.totals.allowanceCents }
+      : null,
     slides: drawers.slides,
     // Both faces of every part in the cut list.
-    counts: { cuts, piecesHandled, setupCards: drawers.setupCards, jointCorners: drawers.jointCorners, drawerBoxes: drawers.drawerBoxes, faceAreaMm2: faces?.mm2 ?? 0 },
+    counts: {
+      cuts,
+      piecesHandled,
+      setupCards: drawers.setupCards,
+      jointCorners: drawers.jointCorners,
+      drawerBoxes: drawers.drawerBoxes,
+      faceAreaMm2: faces?.mm2 ?? 0,
+    },
     pricing,
     hardware,
-    describeSize: (t) => `${t.material} ${t.nominalThickness ? quoteNominal(t.nominalThickness) : describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
+    describeSize: (t) =>
+      `${t.material} ${t.nominalThickness ? quoteNominal(t.nominalThickness) : describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
   });
 
   const id = await db.transaction(async (tx) => {
     // The shop row is locked so two quotes made at once never take one number.
     await tx.select({ id: shops.id }).from(shops).where(eq(shops.id, shopId)).for('update');
-    const [{ next }] = await tx.select({ next: sql<number>`coalesce(max(${quotes.number}), 0) + 1`.mapWith(Number) }).from(quotes).where(eq(quotes.shopId, shopId));
+    const [{ next }] = await tx
+      .select({ next: sql<number>`coalesce(max(${quotes.number}), 0) + 1`.mapWith(Number) })
+      .from(quotes)
+      .where(eq(quotes.shopId, shopId));
     const [quote] = await tx.insert(quotes).values({ shopId, jobId, number: next }).returning();
     const [rev] = await tx
       .insert(quoteRevisions)
@@ -235,7 +272,14 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
         createdBy: userId,
       })
       .returning({ id: quoteRevisions.id });
-    await recordAudit(tx, { shopId, userId, action: 'create', entity: 'quote', entityId: quote.id, data: { number: next, jobId, planId, lines: lines.length } });
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: 'create',
+      entity: 'quote',
+      entityId: quote.id,
+      data: { number: next, jobId, planId, lines: lines.length },
+    });
     return rev.id;
   });
   return (await getRevision(db, shopId, id))!;
@@ -243,25 +287,39 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
 
 /** Locks a revision of this shop for a change. */
 async function lockRevision(tx: Db, shopId: string, revisionId: string) {
-  const [row] = await tx.select().from(quoteRevisions).where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.id, revisionId))).for('update');
+  const [row] = await tx
+    .select()
+    .from(quoteRevisions)
+    .where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.id, revisionId)))
+    .for('update');
   if (!row) throw notFound('That quote');
   return row;
 }
 
 /** Changes a draft's lines and figures; a sent or replaced revision is kept as it was sent (409: make a new revision). */
-export async function updateRevision(db: Db, shopId: string, userId: string, revisionId: string, patch: QuoteRevisionPatch): Promise<QuoteRevisionView> {
+export async function updateRevision(
+  db: Db,
+  shopId: string,
+  userId: string,
+  revisionId: string,
+  patch: QuoteRevisionPatch,
+): Promise<QuoteRevisionView> {
   await db.transaction(async (tx) => {
     const row = await lockRevision(tx, shopId, revisionId);
     if (row.status !== 'draft') throw conflict('This revision was sent and stays as the customer has it: make a new revision to change it.');
     const next = { ...row, ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)) } as RevisionRow;
-    if (new Set(next.lines.map((l) => l.id)).size !== next.lines.length) throw new HttpError(422, 'Two lines share an id.', { lines: ['Each line needs its own id.'] });
+    if (new Set(next.lines.map((l) => l.id)).size !== next.lines.length)
+      throw new HttpError(422, 'Two lines share an id.', { lines: ['Each line needs its own id.'] });
     try {
       revisionTotals(next);
     } catch (e) {
       if (e instanceof RangeError) throw new HttpError(422, e.message, { _: [e.message] });
       throw e;
     }
-    await tx.update(quoteRevisions).set({ ...patch, updatedAt: new Date() }).where(eq(quoteRevisions.id, revisionId));
+    await tx
+      .update(quoteRevisions)
+      .set({ ...patch, updatedAt: new Date() })
+      .where(eq(quoteRevisions.id, revisionId));
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'quote-revision', entityId: revisionId, data: { fields: Object.keys(patch) } });
   });
   return (await getRevision(db, shopId, revisionId))!;
@@ -270,14 +328,46 @@ export async function updateRevision(db: Db, shopId: string, userId: string, rev
 /** A new revision (B after A…) copied from the latest one, as a draft; refused while the latest is still a draft. */
 export async function newRevision(db: Db, shopId: string, userId: string, quoteId: string): Promise<QuoteRevisionView> {
   const id = await db.transaction(async (tx) => {
-    const [quote] = await tx.select().from(quotes).where(and(eq(quotes.shopId, shopId), eq(quotes.id, quoteId))).for('update');
+    const [quote] = await tx
+      .select()
+      .from(quotes)
+      .where(and(eq(quotes.shopId, shopId), eq(quotes.id, quoteId)))
+      .for('update');
     if (!quote) throw notFound('That quote');
-    const [latest] = await tx.select().from(quoteRevisions).where(eq(quoteRevisions.quoteId, quoteId)).orderBy(desc(quoteRevisions.revision)).limit(1);
+    const [latest] = await tx
+      .select()
+      .from(quoteRevisions)
+      .where(eq(quoteRevisions.quoteId, quoteId))
+      .orderBy(desc(quoteRevisions.revision))
+      .limit(1);
     if (latest.status === 'draft') throw conflict(`Rev ${revisionLetter(latest.revision)} is still a draft: change it instead of making another.`);
     refuseNewRevisionAfter(latest.status, latest.revision);
-    const { id: _id, createdAt: _c, updatedAt: _u, sentAt: _s, status: _st, linkTokenHash: _l, validUntil: _v, answeredAt: _a, acceptedName: _n, answeredFrom: _f, declineReason: _d, ...copy } = latest;
-    const [rev] = await tx.insert(quoteRevisions).values({ ...copy, revision: latest.revision + 1, status: 'draft', createdBy: userId }).returning({ id: quoteRevisions.id });
-    await recordAudit(tx, { shopId, userId, action: 'create', entity: 'quote-revision', entityId: rev.id, data: { quoteId, revision: revisionLetter(latest.revision + 1) } });
+    const {
+      id: _id,
+      createdAt: _c,
+      updatedAt: _u,
+      sentAt: _s,
+      status: _st,
+      linkTokenHash: _l,
+      validUntil: _v,
+      answeredAt: _a,
+      acceptedName: _n,
+      answeredFrom: _f,
+      declineReason: _d,
+      ...copy
+    } = latest;
+    const [rev] = await tx
+      .insert(quoteRevisions)
+      .values({ ...copy, revision: latest.revision + 1, status: 'draft', createdBy: userId })
+      .returning({ id: quoteRevisions.id });
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: 'create',
+      entity: 'quote-revision',
+      entityId: rev.id,
+      data: { quoteId, revision: revisionLetter(latest.revision + 1) },
+    });
     return rev.id;
   });
   return (await getRevision(db, shopId, id))!;
@@ -294,9 +384,20 @@ export async function sendRevision(db: Db, shopId: string, userId: string, revis
   if (!revision) throw notFound('That quote');
   const [job, settings] = await Promise.all([getJob(db, shopId, revision.jobId), getShopSettings(db, shopId)]);
   if (!job || !settings) throw notFound('That quote');
-  const [customer] = job.customerId ? await db.select().from(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, job.customerId))) : [];
-  if (!customer) throw new HttpError(422, 'The job has no customer to send the quote to: pick one on the job first.', { customer: ['Pick the customer this quote is for.'] });
-  if (!customer.email) throw new HttpError(422, `${customer.name} has no e-mail address: add it on their customer page, then send.`, { email: [`Add ${customer.name}’s e-mail address.`] });
+  const [customer] = job.customerId
+    ? await db
+        .select()
+        .from(customers)
+        .where(and(eq(customers.shopId, shopId), eq(customers.id, job.customerId)))
+    : [];
+  if (!customer)
+    throw new HttpError(422, 'The job has no customer to send the quote to: pick one on the job first.', {
+      customer: ['Pick the customer this quote is for.'],
+    });
+  if (!customer.email)
+    throw new HttpError(422, `${customer.name} has no e-mail address: add it on their customer page, then send.`, {
+      email: [`Add ${customer.name}’s e-mail address.`],
+    });
   const link = newQuoteLink();
   const sentDay = shopDay(now, settings.timeZone);
   const validUntil = lastValidDay(sentDay, revision.validityDays);
@@ -305,16 +406,23 @@ export async function sendRevision(db: Db, shopId: string, userId: string, revis
   await db.transaction(async (tx) => {
     const row = await lockRevision(tx, shopId, revisionId);
     const [latest] = await latestOf(tx, row.quoteId);
-    if (row.revision !== latest.n) throw conflict(`Only the latest revision can be sent: this is rev ${revisionLetter(row.revision)}, the latest is rev ${revisionLetter(latest.n)}.`);
+    if (row.revision !== latest.n)
+      throw conflict(
+        `Only the latest revision can be sent: this is rev ${revisionLetter(row.revision)}, the latest is rev ${revisionLetter(latest.n)}.`,
+      );
     if (row.status !== 'draft') throw conflict('This revision was already sent.');
-    if (row.updatedAt.toISOString() !== revision.updatedAt) throw conflict('This revision changed while it was being sent: look it over and send it again.');
+    if (row.updatedAt.toISOString() !== revision.updatedAt)
+      throw conflict('This revision changed while it was being sent: look it over and send it again.');
     if (row.lines.length === 0) throw new HttpError(422, 'A quote with no lines cannot be sent.');
     const replaced = await tx
       .update(quoteRevisions)
       .set({ status: 'replaced', updatedAt: now })
       .where(and(eq(quoteRevisions.quoteId, row.quoteId), eq(quoteRevisions.status, 'sent')))
       .returning({ revision: quoteRevisions.revision });
-    await tx.update(quoteRevisions).set({ status: 'sent', sentAt: now, validUntil, linkTokenHash: link.hash, updatedAt: now }).where(eq(quoteRevisions.id, revisionId));
+    await tx
+      .update(quoteRevisions)
+      .set({ status: 'sent', sentAt: now, validUntil, linkTokenHash: link.hash, updatedAt: now })
+      .where(eq(quoteRevisions.id, revisionId));
     const t = revision.totals;
     const mail = quoteMail({
       shopName: settings.name,
@@ -333,9 +441,18 @@ export async function sendRevision(db: Db, shopId: string, userId: string, revis
       kind: 'quote',
       to: customer.email,
       ...mail,
-      attachments: [{ filename: `${pdfFileName(`${revision.title} ${job.name}`)}.pdf`, contentType: 'application/pdf', content: pdf.toString('base64') }],
+      attachments: [
+        { filename: `${pdfFileName(`${revision.title} ${job.name}`)}.pdf`, contentType: 'application/pdf', content: pdf.toString('base64') },
+      ],
     });
-    await recordAudit(tx, { shopId, userId, action: 'send', entity: 'quote-revision', entityId: revisionId, data: { total: t.totalMinor, to: customer.email, validUntil } });
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: 'send',
+      entity: 'quote-revision',
+      entityId: revisionId,
+      data: { total: t.totalMinor, to: customer.email, validUntil },
+    });
     await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: 'quote sent' });
   });
   return (await getRevision(db, shopId, revisionId))!;

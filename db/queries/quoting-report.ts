@@ -28,7 +28,23 @@ export interface QuotedAgainstUsed {
   finishedPlans: number;
 }
 
-type AcceptedRow = { period: string; job_id: string; job_name: string; number: number; revision: number; accepted_on: string; currency: string; lines: QuoteLine[]; markup_material_percent: number; markup_hardware_percent: number; discount: { kind: 'percent'; percent: number } | { kind: 'amount'; minor: number }; tax_percent: number; deposit_percent: number; used: number | null; finished: number };
+type AcceptedRow = {
+  period: string;
+  job_id: string;
+  job_name: string;
+  number: number;
+  revision: number;
+  accepted_on: string;
+  currency: string;
+  lines: QuoteLine[];
+  markup_material_percent: number;
+  markup_hardware_percent: number;
+  discount: { kind: 'percent'; percent: number } | { kind: 'amount'; minor: number };
+  tax_percent: number;
+  deposit_percent: number;
+  used: number | null;
+  finished: number;
+};
 
 export async function quotingReport(db: Db, f: ReportFilter): Promise<{ periods: QuotingPeriod[]; jobs: QuotedAgainstUsed[] }> {
   const at = sql.raw('e.at');
@@ -75,12 +91,22 @@ export async function quotingReport(db: Db, f: ReportFilter): Promise<{ periods:
   ]);
 
   const periods = new Map<string, QuotingPeriod>();
-  const period = (p: string) => periods.get(p) ?? periods.set(p, { period: p, sent: 0, accepted: 0, declined: 0, expired: 0, wonMinor: 0, depositsMinor: 0 }).get(p)!;
-  for (const r of rowsOf<{ period: string; kind: 'sent' | 'accepted' | 'declined' | 'expired'; n: number }>(events)) period(r.period)[r.kind] += Number(r.n);
+  const period = (p: string) =>
+    periods.get(p) ?? periods.set(p, { period: p, sent: 0, accepted: 0, declined: 0, expired: 0, wonMinor: 0, depositsMinor: 0 }).get(p)!;
+  for (const r of rowsOf<{ period: string; kind: 'sent' | 'accepted' | 'declined' | 'expired'; n: number }>(events))
+    period(r.period)[r.kind] += Number(r.n);
   for (const r of rowsOf<{ period: string; minor: string | number }>(deposits)) period(r.period).depositsMinor += Number(r.minor);
   const jobs: QuotedAgainstUsed[] = [];
   for (const r of rowsOf<AcceptedRow>(accepted)) {
-    const totals = revisionTotals({ currency: r.currency, lines: r.lines, markupMaterialPercent: Number(r.markup_material_percent), markupHardwarePercent: Number(r.markup_hardware_percent), discount: r.discount, taxPercent: Number(r.tax_percent), depositPercent: Number(r.deposit_percent) });
+    const totals = revisionTotals({
+      currency: r.currency,
+      lines: r.lines,
+      markupMaterialPercent: Number(r.markup_material_percent),
+      markupHardwarePercent: Number(r.markup_hardware_percent),
+      discount: r.discount,
+      taxPercent: Number(r.tax_percent),
+      depositPercent: Number(r.deposit_percent),
+    });
     period(r.period).wonMinor += totals.totalMinor;
     jobs.push({
       jobId: r.job_id,

@@ -28,7 +28,12 @@ export async function listRecuts(db: Db, shopId: string, jobId: string): Promise
     .leftJoin(users, eq(users.id, recuts.createdBy))
     .leftJoin(closers, eq(closers.id, recuts.closedBy))
     .where(and(eq(recuts.shopId, shopId), eq(recuts.jobId, jobId)))
-    .orderBy(sql`case when ${recuts.status} in ('open', 'planned') then 0 else 1 end`, asc(recuts.createdAt), asc(recuts.label), asc(recuts.instance));
+    .orderBy(
+      sql`case when ${recuts.status} in ('open', 'planned') then 0 else 1 end`,
+      asc(recuts.createdAt),
+      asc(recuts.label),
+      asc(recuts.instance),
+    );
   const open = rows.filter((x) => x.r.status === 'open' || x.r.status === 'planned');
   const closed = rows.filter((x) => !open.includes(x)).sort((a, b) => (b.r.closedAt?.getTime() ?? 0) - (a.r.closedAt?.getTime() ?? 0));
   return [...open, ...closed].map(({ r, sourceName, recutName, createdBy, closedBy }) => ({
@@ -87,15 +92,29 @@ type PlanRow = typeof plans.$inferSelect;
  * (its size copied from there); on a re-cut plan it is one of the re-cuts the plan held, which is marked spoiled
  * and replaced by a new open one. Returns the new re-cuts' ids.
  */
-export async function recordDamagedPieces(tx: Db, { shopId, userId, plan, request, damaged }: { shopId: string; userId: string; plan: PlanRow; request: NestRequest | null; damaged: DamagedPiece[] }): Promise<string[]> {
+export async function recordDamagedPieces(
+  tx: Db,
+  { shopId, userId, plan, request, damaged }: { shopId: string; userId: string; plan: PlanRow; request: NestRequest | null; damaged: DamagedPiece[] },
+): Promise<string[]> {
   if (!damaged.length) return [];
   const heldRecuts = plan.recutPlan
-    ? await tx.select().from(recuts).where(and(eq(recuts.shopId, shopId), eq(recuts.recutPlanId, plan.id), inArray(recuts.id, damaged.map((d) => d.partId).filter(isUuid))))
+    ? await tx
+        .select()
+        .from(recuts)
+        .where(and(eq(recuts.shopId, shopId), eq(recuts.recutPlanId, plan.id), inArray(recuts.id, damaged.map((d) => d.partId).filter(isUuid))))
     : [];
   const partIds = damaged.map((d) => d.partId).filter(isUuid);
-  const jobParts = !plan.recutPlan && partIds.length
-    ? new Set((await tx.select({ id: parts.id }).from(parts).where(and(eq(parts.shopId, shopId), eq(parts.jobId, plan.jobId), inArray(parts.id, partIds)))).map((p) => p.id))
-    : new Set<string>();
+  const jobParts =
+    !plan.recutPlan && partIds.length
+      ? new Set(
+          (
+            await tx
+              .select({ id: parts.id })
+              .from(parts)
+              .where(and(eq(parts.shopId, shopId), eq(parts.jobId, plan.jobId), inArray(parts.id, partIds)))
+          ).map((p) => p.id),
+        )
+      : new Set<string>();
 
   const rows: (typeof recuts.$inferInsert)[] = [];
   const spoiled: string[] = [];
@@ -126,10 +145,20 @@ export async function recordDamagedPieces(tx: Db, { shopId, userId, plan, reques
     });
   }
   if (spoiled.length) {
-    await tx.update(recuts).set({ status: 'spoiled', closedAt: new Date(), closedBy: userId }).where(and(eq(recuts.shopId, shopId), inArray(recuts.id, spoiled)));
+    await tx
+      .update(recuts)
+      .set({ status: 'spoiled', closedAt: new Date(), closedBy: userId })
+      .where(and(eq(recuts.shopId, shopId), inArray(recuts.id, spoiled)));
   }
   const created = await tx.insert(recuts).values(rows).returning({ id: recuts.id, label: recuts.label, instance: recuts.instance });
-  await recordAudit(tx, { shopId, userId, action: 'damaged', entity: 'plan', entityId: plan.id, data: { recuts: created.map((r) => recutLabel(r)) } });
+  await recordAudit(tx, {
+    shopId,
+    userId,
+    action: 'damaged',
+    entity: 'plan',
+    entityId: plan.id,
+    data: { recuts: created.map((r) => recutLabel(r)) },
+  });
   return created.map((r) => r.id);
 }
 
@@ -146,14 +175,31 @@ export async function holdRecutsForPlan(tx: Db, { shopId, planId, recutIds }: { 
     .where(and(eq(recuts.shopId, shopId), inArray(recuts.id, ids), eq(recuts.status, 'open')))
     .returning({ id: recuts.id });
   if (held.length === ids.length) return;
-  const gone = await tx.select({ label: recuts.label, instance: recuts.instance, status: recuts.status }).from(recuts).where(and(eq(recuts.shopId, shopId), inArray(recuts.id, ids.filter((id) => !held.some((h) => h.id === id)))));
+  const gone = await tx
+    .select({ label: recuts.label, instance: recuts.instance, status: recuts.status })
+    .from(recuts)
+    .where(
+      and(
+        eq(recuts.shopId, shopId),
+        inArray(
+          recuts.id,
+          ids.filter((id) => !held.some((h) => h.id === id)),
+        ),
+      ),
+    );
   const names = gone.map((g) => `${recutLabel(g)} (${g.status === 'planned' ? 'in another released plan' : g.status})`);
-  throw new HttpError(409, `${names.length ? names.join(', ') : 'A re-cut of this plan'} ${names.length === 1 ? 'is' : 'are'} no longer open. Nothing was released; nest the re-cuts again.`);
+  throw new HttpError(
+    409,
+    `${names.length ? names.join(', ') : 'A re-cut of this plan'} ${names.length === 1 ? 'is' : 'are'} no longer open. Nothing was released; nest the re-cuts again.`,
+  );
 }
 
 /** At cancel of a re-cut plan: what it held goes back on the list to nest again. */
 export async function reopenRecuts(tx: Db, { shopId, planId }: { shopId: string; planId: string }) {
-  await tx.update(recuts).set({ status: 'open', recutPlanId: null }).where(and(eq(recuts.shopId, shopId), eq(recuts.recutPlanId, planId), eq(recuts.status, 'planned')));
+  await tx
+    .update(recuts)
+    .set({ status: 'open', recutPlanId: null })
+    .where(and(eq(recuts.shopId, shopId), eq(recuts.recutPlanId, planId), eq(recuts.status, 'planned')));
 }
 
 /** At done of a re-cut plan: what it held (and was not damaged again) is cut. */
@@ -174,9 +220,14 @@ export async function cancelRecut(db: Db, { shopId, userId, id, reason }: { shop
       .where(and(eq(recuts.shopId, shopId), eq(recuts.id, id), eq(recuts.status, 'open')))
       .returning();
     if (!row) {
-      const [existing] = await tx.select({ status: recuts.status, planName: plans.name }).from(recuts).leftJoin(plans, eq(plans.id, recuts.recutPlanId)).where(and(eq(recuts.shopId, shopId), eq(recuts.id, id)));
+      const [existing] = await tx
+        .select({ status: recuts.status, planName: plans.name })
+        .from(recuts)
+        .leftJoin(plans, eq(plans.id, recuts.recutPlanId))
+        .where(and(eq(recuts.shopId, shopId), eq(recuts.id, id)));
       if (!existing) throw notFound('That re-cut');
-      if (existing.status === 'planned') throw new HttpError(409, `This re-cut is in the released plan “${existing.planName ?? ''}”: cancel that plan first, or finish it.`);
+      if (existing.status === 'planned')
+        throw new HttpError(409, `This re-cut is in the released plan “${existing.planName ?? ''}”: cancel that plan first, or finish it.`);
       throw new HttpError(409, `This re-cut is already ${existing.status}.`);
     }
     await recordAudit(tx, { shopId, userId, action: 'cancel', entity: 'recut', entityId: id, data: { label: recutLabel(row), reason } });

@@ -43,7 +43,7 @@ export interface YieldRow {
   sawWasteArea: number;
 }
 
-export const rowsOf = <T>(result: unknown): T[] => ((result as { rows?: T[] }).rows ?? (result as T[]));
+export const rowsOf = <T>(result: unknown): T[] => (result as { rows?: T[] }).rows ?? (result as T[]);
 
 /** The day after a `YYYY-MM-DD` day. */
 const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
@@ -51,7 +51,8 @@ const nextDay = (day: string) => new Date(Date.parse(`${day}T00:00:00Z`) + 86_40
 /** The instant a shop day starts, as a timestamptz, from a day read on the shop's clock. */
 export const dayStart = (day: string, zone: string) => sql`(${day}::date::timestamp at time zone ${zone})`;
 export const periodOf = (column: unknown, f: ReportFilter) => sql`to_char(date_trunc(${f.by}, ${column} at time zone ${f.timeZone}), 'YYYY-MM-DD')`;
-export const inRange = (column: unknown, f: ReportFilter) => sql`${column} >= ${dayStart(f.from, f.timeZone)} and ${column} < ${dayStart(f.to, f.timeZone)} + interval '1 day'`;
+export const inRange = (column: unknown, f: ReportFilter) =>
+  sql`${column} >= ${dayStart(f.from, f.timeZone)} and ${column} < ${dayStart(f.to, f.timeZone)} + interval '1 day'`;
 const materialIs = (column: unknown, f: ReportFilter) => (f.material ? sql`and ${column} = ${f.material}` : sql``);
 /** `and <job column> is one of the filter's jobs`, when the filter names a customer or a job (a null job matches none). */
 export const jobIs = (column: unknown, f: ReportFilter) => {
@@ -68,7 +69,8 @@ export const jobIs = (column: unknown, f: ReportFilter) => {
 export async function yieldOverTime(db: Db, f: ReportFilter): Promise<YieldRow[]> {
   const finished = sql.raw('p.finished_at');
   // A piece's part and damaged areas are written when its plan is finished; read from its placements otherwise.
-  const partsOf = (damaged: boolean) => sql.raw(`(select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and ${damaged ? '' : 'not '}pl.damaged)`);
+  const partsOf = (damaged: boolean) =>
+    sql.raw(`(select sum(pl.length_mm * pl.width_mm) from placements pl where pl.plan_piece_id = pp.id and ${damaged ? '' : 'not '}pl.damaged)`);
   const [stock, kept] = await Promise.all([
     db.execute(sql`
       select ${periodOf(finished, f)} as period, pp.material, pp.thickness_mm as thickness, count(distinct p.id)::int as plans,
@@ -86,8 +88,20 @@ export async function yieldOverTime(db: Db, f: ReportFilter): Promise<YieldRow[]
   ]);
   const key = (r: { period: string; material: string; thickness: number }) => `${r.period}\u0000${r.material}\u0000${Number(r.thickness)}`;
   const rows = new Map<string, YieldRow>();
-  for (const r of rowsOf<{ period: string; material: string; thickness: number; plans: number; area: number; parts: number; spoiled: number }>(stock)) {
-    rows.set(key(r), { period: r.period, material: r.material, thicknessMm: Number(r.thickness), plans: Number(r.plans), stockArea: Number(r.area), partArea: Number(r.parts), spoiledArea: Number(r.spoiled), keptArea: 0, sawWasteArea: 0 });
+  for (const r of rowsOf<{ period: string; material: string; thickness: number; plans: number; area: number; parts: number; spoiled: number }>(
+    stock,
+  )) {
+    rows.set(key(r), {
+      period: r.period,
+      material: r.material,
+      thicknessMm: Number(r.thickness),
+      plans: Number(r.plans),
+      stockArea: Number(r.area),
+      partArea: Number(r.parts),
+      spoiledArea: Number(r.spoiled),
+      keptArea: 0,
+      sawWasteArea: 0,
+    });
   }
   for (const r of rowsOf<{ period: string; material: string; thickness: number; area: number }>(kept)) {
     const row = rows.get(key(r));
@@ -127,11 +141,17 @@ export async function offcutUse(db: Db, f: ReportFilter): Promise<OffcutUseRow[]
   const rows = new Map<string, OffcutUseRow>();
   const at = (period: string) => {
     let row = rows.get(period);
-    if (!row) rows.set(period, (row = { period, fromRackArea: 0, fromNewStockArea: 0, racked: 0, rackedArea: 0, used: 0, usedArea: 0, scrapped: 0, scrappedArea: 0 }));
+    if (!row)
+      rows.set(
+        period,
+        (row = { period, fromRackArea: 0, fromNewStockArea: 0, racked: 0, rackedArea: 0, used: 0, usedArea: 0, scrapped: 0, scrappedArea: 0 }),
+      );
     return row;
   };
-  for (const r of rowsOf<{ period: string; rack: number; fresh: number }>(cut)) Object.assign(at(r.period), { fromRackArea: Number(r.rack), fromNewStockArea: Number(r.fresh) });
-  for (const r of rowsOf<{ period: string; n: number; area: number }>(racked)) Object.assign(at(r.period), { racked: Number(r.n), rackedArea: Number(r.area) });
+  for (const r of rowsOf<{ period: string; rack: number; fresh: number }>(cut))
+    Object.assign(at(r.period), { fromRackArea: Number(r.rack), fromNewStockArea: Number(r.fresh) });
+  for (const r of rowsOf<{ period: string; n: number; area: number }>(racked))
+    Object.assign(at(r.period), { racked: Number(r.n), rackedArea: Number(r.area) });
   for (const r of rowsOf<{ period: string; kind: string; n: number; area: number }>(out)) {
     if (r.kind === 'consumed') Object.assign(at(r.period), { used: Number(r.n), usedArea: Number(r.area) });
     else Object.assign(at(r.period), { scrapped: Number(r.n), scrappedArea: Number(r.area) });
@@ -151,7 +171,10 @@ export interface OldOffcut {
   ageDays: number;
 }
 
-export async function oldOffcuts(db: Db, { shopId, timeZone, months, now = new Date(), material }: { shopId: string; timeZone: string; months: number; now?: Date; material?: string }): Promise<OldOffcut[]> {
+export async function oldOffcuts(
+  db: Db,
+  { shopId, timeZone, months, now = new Date(), material }: { shopId: string; timeZone: string; months: number; now?: Date; material?: string },
+): Promise<OldOffcut[]> {
   const result = await db.execute(sql`
     select o.id, o.material, o.thickness_mm, o.length_mm, o.width_mm, o.location,
            to_char(o.created_at at time zone ${timeZone}, 'YYYY-MM-DD') as racked_on,
@@ -162,7 +185,16 @@ export async function oldOffcuts(db: Db, { shopId, timeZone, months, now = new D
        ${material ? sql`and o.material = ${material}` : sql``}
      order by o.created_at, o.id
      limit 500`);
-  return rowsOf<{ id: string; material: string; thickness_mm: number; length_mm: number; width_mm: number; location: string; racked_on: string; age_days: number }>(result).map((r) => ({
+  return rowsOf<{
+    id: string;
+    material: string;
+    thickness_mm: number;
+    length_mm: number;
+    width_mm: number;
+    location: string;
+    racked_on: string;
+    age_days: number;
+  }>(result).map((r) => ({
     id: r.id,
     material: r.material,
     thicknessMm: Number(r.thickness_mm),
@@ -175,7 +207,10 @@ export async function oldOffcuts(db: Db, { shopId, timeZone, months, now = new D
 }
 
 /** The customers and jobs the filters offer: those with a finished plan or a quote sent (at most 300 jobs, newest first). */
-export async function reportSubjects(db: Db, shopId: string): Promise<{ customers: { id: string; name: string }[]; jobs: { id: string; name: string }[] }> {
+export async function reportSubjects(
+  db: Db,
+  shopId: string,
+): Promise<{ customers: { id: string; name: string }[]; jobs: { id: string; name: string }[] }> {
   const [c, j] = await Promise.all([
     db.execute(sql`select c.id, c.name from customers c where c.shop_id = ${shopId} order by lower(c.name), c.id`),
     db.execute(sql`
@@ -206,7 +241,10 @@ export async function stockValueReport(db: Db, f: ReportFilter) {
   // The instants the periods start, in the shop's zone, and the first day after the range.
   const starts = [...periods.map((p) => (p < f.from ? f.from : p)), nextDay(f.to)];
   // A sub-select, so the array is built once for the query rather than for every row.
-  const bounds = sql`(select array[${sql.join(starts.map((d) => dayStart(d, f.timeZone)), sql`, `)}])`;
+  const bounds = sql`(select array[${sql.join(
+    starts.map((d) => dayStart(d, f.timeZone)),
+    sql`, `,
+  )}])`;
   const [changes, items] = await Promise.all([
     // Each movement put in its period by comparing its time with the periods' starts on the shop's clock
     // (width_bucket: 0 before the range, the opening balance; k for the k-th period), not by converting every row.
@@ -221,7 +259,15 @@ export async function stockValueReport(db: Db, f: ReportFilter) {
        group by 1, 2, 3`),
     db.select().from(stockItems).where(eq(stockItems.shopId, f.shopId)),
   ]);
-  const rows = rowsOf<{ bucket: number; item: string | null; offcut_material: string | null; on_hand: number; reserved: number; offcut_value: number; offcut_reserved: number }>(changes);
+  const rows = rowsOf<{
+    bucket: number;
+    item: string | null;
+    offcut_material: string | null;
+    on_hand: number;
+    reserved: number;
+    offcut_value: number;
+    offcut_reserved: number;
+  }>(changes);
   // Offcuts enter the ledger as one piece per material whose "count" is already in minor units (cost each 1).
   const offcutKey = (material: string) => `offcuts\u0000${material}`;
   const offcutMaterials = [...new Set(rows.flatMap((r) => (r.offcut_material === null ? [] : [r.offcut_material])))];
@@ -242,7 +288,17 @@ export async function stockValueReport(db: Db, f: ReportFilter) {
   // Low on the rack now: free count at or under the size's low mark.
   const low = items
     .filter((i) => (!f.material || i.material === f.material) && i.lowStockAt > 0 && i.onHand - i.reserved <= i.lowStockAt)
-    .map((i) => ({ id: i.id, material: i.material, nominalThickness: i.nominalThickness, thicknessMm: i.thicknessMm, lengthMm: i.lengthMm, widthMm: i.widthMm, kind: i.kind, free: i.onHand - i.reserved, lowStockAt: i.lowStockAt }))
+    .map((i) => ({
+      id: i.id,
+      material: i.material,
+      nominalThickness: i.nominalThickness,
+      thicknessMm: i.thicknessMm,
+      lengthMm: i.lengthMm,
+      widthMm: i.widthMm,
+      kind: i.kind,
+      free: i.onHand - i.reserved,
+      lowStockAt: i.lowStockAt,
+    }))
     .sort((a, b) => a.material.localeCompare(b.material) || a.thicknessMm - b.thicknessMm);
   return { points, unknownPieces, low };
 }

@@ -42,7 +42,10 @@ export async function listStepTicks(db: Db, shopId: string, planId: string): Pro
 
 /** The plan's status, refusing a plan of another shop (404) or one not at the saw (409), and a step it lacks (422). */
 async function checkStep(db: Db, shopId: string, planId: string, ref: StepRef) {
-  const [row] = await db.select({ status: plans.status, document: plans.document }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
+  const [row] = await db
+    .select({ status: plans.status, document: plans.document })
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!row) throw notFound('That plan');
   if (!(CUTTABLE as readonly string[]).includes(row.status)) {
     throw new HttpError(409, `This plan is ${row.status}: steps are ticked only on a released plan or one being cut.`);
@@ -104,7 +107,10 @@ export async function countStepTicks(db: Db, shopId: string, planIds: string[]):
 
 /** A plan's status and ticks together, or null when the shop has no such plan. */
 export async function getStepTicks(db: Db, shopId: string, planId: string): Promise<PlanTicks | null> {
-  const [row] = await db.select({ status: plans.status }).from(plans).where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
+  const [row] = await db
+    .select({ status: plans.status })
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!row) return null;
   return { status: row.status, ticks: await listStepTicks(db, shopId, planId) };
 }
@@ -117,7 +123,11 @@ export async function getStepTicks(db: Db, shopId: string, planId: string): Prom
 export async function getSawOrder(db: Db, shopId: string, planId: string, { drafts }: { drafts: boolean }) {
   const [plan, settings] = await Promise.all([getPlan(db, shopId, planId), getShopSettings(db, shopId)]);
   if (!plan || !settings || (plan.status === 'draft' && !drafts)) return null;
-  const [job] = await db.select({ id: jobs.id, name: jobs.name, customer: sql<string>`coalesce(${customers.name}, '')` }).from(jobs).leftJoin(customers, eq(customers.id, jobs.customerId)).where(and(eq(jobs.shopId, shopId), eq(jobs.id, plan.jobId)));
+  const [job] = await db
+    .select({ id: jobs.id, name: jobs.name, customer: sql<string>`coalesce(${customers.name}, '')` })
+    .from(jobs)
+    .leftJoin(customers, eq(customers.id, jobs.customerId))
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.id, plan.jobId)));
   const request = nestRequestSchema.safeParse(plan.request);
   const requestSettings = (plan.request as { settings?: unknown } | null)?.settings;
   const kerf = request.success ? request.data.settings.kerf : (nestSettingsSchema.safeParse(requestSettings ?? {}).data?.kerf ?? settings.kerfMm);

@@ -60,8 +60,14 @@ const columns = (s: Saw) => ({
 export async function createSaw(db: Db, shopId: string, userId: string | null, saw: Saw): Promise<SavedSaw> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, saw.name);
-    const [{ next }] = await tx.select({ next: sql<number>`coalesce(max(${saws.position}) + 1, 0)::int` }).from(saws).where(eq(saws.shopId, shopId));
-    const [row] = await tx.insert(saws).values({ shopId, ...columns(saw), position: next }).returning();
+    const [{ next }] = await tx
+      .select({ next: sql<number>`coalesce(max(${saws.position}) + 1, 0)::int` })
+      .from(saws)
+      .where(eq(saws.shopId, shopId));
+    const [row] = await tx
+      .insert(saws)
+      .values({ shopId, ...columns(saw), position: next })
+      .returning();
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'saw', entityId: row.id, data: saw });
     return toSaw(row);
   });
@@ -84,7 +90,10 @@ export async function updateSaw(db: Db, shopId: string, userId: string, id: stri
 
 export async function deleteSaw(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
-    const rows = await tx.delete(saws).where(and(eq(saws.shopId, shopId), eq(saws.id, id))).returning({ name: saws.name });
+    const rows = await tx
+      .delete(saws)
+      .where(and(eq(saws.shopId, shopId), eq(saws.id, id)))
+      .returning({ name: saws.name });
     if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'saw', entityId: id, data: rows[0] });
     return rows.length > 0;
   });

@@ -25,7 +25,11 @@ const toCard = (r: Row): SavedSetupCard => ({
 const fieldsColumn = (fields: SetupCardField[]) => fields as unknown as Row['fields'];
 
 export async function listSetupCards(db: Db, shopId: string): Promise<SavedSetupCard[]> {
-  const rows = await db.select().from(setupCards).where(eq(setupCards.shopId, shopId)).orderBy(asc(setupCards.joint), asc(setupCards.stockThicknessMm));
+  const rows = await db
+    .select()
+    .from(setupCards)
+    .where(eq(setupCards.shopId, shopId))
+    .orderBy(asc(setupCards.joint), asc(setupCards.stockThicknessMm));
   return rows.map(toCard);
 }
 
@@ -40,7 +44,10 @@ async function refuseDuplicate(db: Db, shopId: string, card: SetupCard, exceptId
 export async function createSetupCard(db: Db, shopId: string, userId: string, card: SetupCard): Promise<SavedSetupCard> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, card);
-    const [row] = await tx.insert(setupCards).values({ shopId, joint: card.joint, stockThicknessMm: card.stockThicknessMm, fields: fieldsColumn(card.fields), note: card.note }).returning();
+    const [row] = await tx
+      .insert(setupCards)
+      .values({ shopId, joint: card.joint, stockThicknessMm: card.stockThicknessMm, fields: fieldsColumn(card.fields), note: card.note })
+      .returning();
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'setup-card', entityId: row.id, data: card });
     return toCard(row);
   });
@@ -62,7 +69,10 @@ export async function updateSetupCard(db: Db, shopId: string, userId: string, id
 
 export async function deleteSetupCard(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
-    const rows = await tx.delete(setupCards).where(and(eq(setupCards.shopId, shopId), eq(setupCards.id, id))).returning({ joint: setupCards.joint });
+    const rows = await tx
+      .delete(setupCards)
+      .where(and(eq(setupCards.shopId, shopId), eq(setupCards.id, id)))
+      .returning({ joint: setupCards.joint });
     if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'setup-card', entityId: id, data: rows[0] });
     return rows.length > 0;
   });

@@ -28,7 +28,11 @@ const toModel = (r: Row): SavedSlideModel => ({
 
 /** The shop's slide models, undermount first, by name. */
 export async function listSlideModels(db: Db, shopId: string): Promise<SavedSlideModel[]> {
-  const rows = await db.select().from(slideModels).where(eq(slideModels.shopId, shopId)).orderBy(sql`${slideModels.kind} = 'side-mount'`, asc(slideModels.name));
+  const rows = await db
+    .select()
+    .from(slideModels)
+    .where(eq(slideModels.shopId, shopId))
+    .orderBy(sql`${slideModels.kind} = 'side-mount'`, asc(slideModels.name));
   return rows.map(toModel);
 }
 
@@ -37,7 +41,9 @@ async function refuseDuplicate(db: Db, shopId: string, name: string, exceptId?: 
   const same = await db
     .select({ id: slideModels.id })
     .from(slideModels)
-    .where(and(eq(slideModels.shopId, shopId), sql`lower(${slideModels.name}) = lower(${name})`, exceptId ? ne(slideModels.id, exceptId) : undefined));
+    .where(
+      and(eq(slideModels.shopId, shopId), sql`lower(${slideModels.name}) = lower(${name})`, exceptId ? ne(slideModels.id, exceptId) : undefined),
+    );
   if (same.length) throw conflict(`The shop already has a slide model named “${name}”: edit that one, or give this one another name.`);
 }
 
@@ -56,7 +62,10 @@ const columns = (m: SlideModel) => ({
 export async function createSlideModel(db: Db, shopId: string, userId: string | null, model: SlideModel): Promise<SavedSlideModel> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, model.name);
-    const [row] = await tx.insert(slideModels).values({ shopId, ...columns(model) }).returning();
+    const [row] = await tx
+      .insert(slideModels)
+      .values({ shopId, ...columns(model) })
+      .returning();
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'slide-model', entityId: row.id, data: model });
     return toModel(row);
   });
@@ -79,7 +88,10 @@ export async function updateSlideModel(db: Db, shopId: string, userId: string, i
 
 export async function deleteSlideModel(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
-    const rows = await tx.delete(slideModels).where(and(eq(slideModels.shopId, shopId), eq(slideModels.id, id))).returning({ name: slideModels.name });
+    const rows = await tx
+      .delete(slideModels)
+      .where(and(eq(slideModels.shopId, shopId), eq(slideModels.id, id)))
+      .returning({ name: slideModels.name });
     if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'slide-model', entityId: id, data: rows[0] });
     return rows.length > 0;
   });

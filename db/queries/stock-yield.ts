@@ -39,7 +39,8 @@ export async function listYieldLedger(db: Db, shopId: string) {
   }));
   const area = ledger.reduce((n, r) => n + r.stockArea, 0);
   // Weighted by stock area: a plan of twenty sheets counts for more than an offcut job.
-  const weighted = (pick: (r: (typeof ledger)[number]) => number | null) => (area > 0 ? ledger.reduce((n, r) => n + (pick(r) ?? 0) * r.stockArea, 0) / area : null);
+  const weighted = (pick: (r: (typeof ledger)[number]) => number | null) =>
+    area > 0 ? ledger.reduce((n, r) => n + (pick(r) ?? 0) * r.stockArea, 0) / area : null;
   return {
     plans: ledger,
     totals: {

@@ -1,7 +1,14 @@
 import { and, asc, desc, eq, ilike, inArray, ne, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
 import { auditEvents, offcuts, plans, stockItems, stockMovements, users } from '../schema';
-import { STOCK_DETAIL_FIELDS, type recordOffcutSchema, type StockDetailField, type StockFilter, type StockItemPatch, type StockItemValues } from '@/shared/schemas/stock';
+import {
+  STOCK_DETAIL_FIELDS,
+  type recordOffcutSchema,
+  type StockDetailField,
+  type StockFilter,
+  type StockItemPatch,
+  type StockItemValues,
+} from '@/shared/schemas/stock';
 import { z } from 'zod';
 import { isLowStock } from '@/lib/stock/low-stock';
 import { costEachCents } from './nest-request';
@@ -52,8 +59,14 @@ export async function listOffcuts(db: Db, shopId: string, filter: StockFilter = 
 /** A new size on the rack; its opening count is a receipt in the ledger. */
 export async function createStockItem(db: Db, shopId: string, userId: string, values: StockItemValues) {
   return db.transaction(async (tx) => {
-    const [item] = await tx.insert(stockItems).values({ ...values, shopId }).returning();
-    if (item.onHand > 0) await tx.insert(stockMovements).values({ shopId, kind: 'received', stockItemId: item.id, quantity: item.onHand, userId, reason: 'Opening count' });
+    const [item] = await tx
+      .insert(stockItems)
+      .values({ ...values, shopId })
+      .returning();
+    if (item.onHand > 0)
+      await tx
+        .insert(stockMovements)
+        .values({ shopId, kind: 'received', stockItemId: item.id, quantity: item.onHand, userId, reason: 'Opening count' });
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'stock-item', entityId: item.id });
     return item;
   });
@@ -68,7 +81,11 @@ export type StockDetailChanges = Partial<Record<StockDetailField, { from: unknow
  */
 export async function updateStockItem(db: Db, shopId: string, userId: string, id: string, patch: StockItemPatch) {
   return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id))).for('update');
+    const [current] = await tx
+      .select()
+      .from(stockItems)
+      .where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id)))
+      .for('update');
     if (!current) return null;
     const changes: StockDetailChanges = {};
     for (const field of STOCK_DETAIL_FIELDS) {
@@ -106,10 +123,16 @@ export async function receiveStock(db: Db, shopId: string, userId: string, id: s
  */
 export async function adjustStock(db: Db, shopId: string, userId: string, id: string, { count, reason }: { count: number; reason: string }) {
   return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id))).for('update');
+    const [current] = await tx
+      .select()
+      .from(stockItems)
+      .where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id)))
+      .for('update');
     if (!current) return null;
     if (count < current.reserved) {
-      throw new StockConflict(`${current.reserved} of these are reserved by released plans; a count of ${count} would leave them short. Cancel or re-nest those plans first.`);
+      throw new StockConflict(
+        `${current.reserved} of these are reserved by released plans; a count of ${count} would leave them short. Cancel or re-nest those plans first.`,
+      );
     }
     const delta = count - current.onHand;
     if (delta === 0) return current;
@@ -121,7 +144,10 @@ export async function adjustStock(db: Db, shopId: string, userId: string, id: st
 
 export async function recordOffcut(db: Db, shopId: string, userId: string, values: z.infer<typeof recordOffcutSchema>) {
   return db.transaction(async (tx) => {
-    const [o] = await tx.insert(offcuts).values({ ...values, shopId, status: 'available' }).returning();
+    const [o] = await tx
+      .insert(offcuts)
+      .values({ ...values, shopId, status: 'available' })
+      .returning();
     await tx.insert(stockMovements).values({ shopId, kind: 'offcut-created', offcutId: o.id, quantity: 1, userId, reason: 'Recorded at the saw' });
     return o;
   });
@@ -136,7 +162,10 @@ export async function scrapOffcut(db: Db, shopId: string, userId: string, id: st
       .where(and(eq(offcuts.shopId, shopId), eq(offcuts.id, id), eq(offcuts.status, 'available')))
       .returning();
     if (!o) {
-      const [existing] = await tx.select({ status: offcuts.status }).from(offcuts).where(and(eq(offcuts.shopId, shopId), eq(offcuts.id, id)));
+      const [existing] = await tx
+        .select({ status: offcuts.status })
+        .from(offcuts)
+        .where(and(eq(offcuts.shopId, shopId), eq(offcuts.id, id)));
       if (!existing) return null;
       throw new StockConflict(`This offcut is ${existing.status}; only an available offcut can be scrapped.`);
     }
@@ -149,15 +178,24 @@ export async function scrapOffcut(db: Db, shopId: string, userId: string, id: st
 export async function importStock(db: Db, shopId: string, userId: string, items: StockItemValues[]) {
   if (!items.length) return [];
   return db.transaction(async (tx) => {
-    const rows = await tx.insert(stockItems).values(items.map((v) => ({ ...v, shopId }))).returning({ id: stockItems.id, onHand: stockItems.onHand });
-    const receipts = rows.filter((r) => r.onHand > 0).map((r) => ({ shopId, kind: 'received' as const, stockItemId: r.id, quantity: r.onHand, userId, reason: 'Imported from CSV' }));
+    const rows = await tx
+      .insert(stockItems)
+      .values(items.map((v) => ({ ...v, shopId })))
+      .returning({ id: stockItems.id, onHand: stockItems.onHand });
+    const receipts = rows
+      .filter((r) => r.onHand > 0)
+      .map((r) => ({ shopId, kind: 'received' as const, stockItemId: r.id, quantity: r.onHand, userId, reason: 'Imported from CSV' }));
     if (receipts.length) await tx.insert(stockMovements).values(receipts);
     await recordAudit(tx, { shopId, userId, action: 'import', entity: 'stock-item', data: { count: rows.length } });
     return rows;
   });
 }
 
-export async function listMovements(db: Db, shopId: string, { stockItemId, offcutId, limit = 200 }: { stockItemId?: string; offcutId?: string; limit?: number } = {}) {
+export async function listMovements(
+  db: Db,
+  shopId: string,
+  { stockItemId, offcutId, limit = 200 }: { stockItemId?: string; offcutId?: string; limit?: number } = {},
+) {
   const where: SQL[] = [eq(stockMovements.shopId, shopId)];
   if (stockItemId) where.push(eq(stockMovements.stockItemId, stockItemId));
   if (offcutId) where.push(eq(stockMovements.offcutId, offcutId));
@@ -242,7 +280,10 @@ export async function ledgerCounts(db: Db, shopId: string) {
 export async function stockValue(db: Db, shopId: string) {
   const [items, rack] = await Promise.all([
     db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
-    db.select({ cents: sql<number>`coalesce(sum(${offcuts.costCents}), 0)`.mapWith(Number) }).from(offcuts).where(and(eq(offcuts.shopId, shopId), inArray(offcuts.status, ['available', 'reserved']))),
+    db
+      .select({ cents: sql<number>`coalesce(sum(${offcuts.costCents}), 0)`.mapWith(Number) })
+      .from(offcuts)
+      .where(and(eq(offcuts.shopId, shopId), inArray(offcuts.status, ['available', 'reserved']))),
   ]);
   const stockCents = items.reduce((sum, i) => sum + i.onHand * costEachCents(i), 0);
   return { stockCents, offcutCents: rack[0]?.cents ?? 0, totalCents: stockCents + (rack[0]?.cents ?? 0) };
@@ -254,13 +295,23 @@ export async function stockValue(db: Db, shopId: string) {
  */
 export async function recordOpeningCounts(db: Db, shopId: string, userId: string | null) {
   await db.transaction(async (tx) => {
-    const booked = await tx.select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId }).from(stockMovements).where(eq(stockMovements.shopId, shopId));
+    const booked = await tx
+      .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId })
+      .from(stockMovements)
+      .where(eq(stockMovements.shopId, shopId));
     const hasRow = new Set(booked.flatMap((b) => [b.stockItemId, b.offcutId]).filter(Boolean));
     const items = await tx.select().from(stockItems).where(eq(stockItems.shopId, shopId));
-    const rack = await tx.select().from(offcuts).where(and(eq(offcuts.shopId, shopId), inArray(offcuts.status, ['available', 'reserved'])));
+    const rack = await tx
+      .select()
+      .from(offcuts)
+      .where(and(eq(offcuts.shopId, shopId), inArray(offcuts.status, ['available', 'reserved'])));
     const moves = [
-      ...items.filter((i) => i.onHand > 0 && !hasRow.has(i.id)).map((i) => ({ shopId, kind: 'received' as const, stockItemId: i.id, quantity: i.onHand, userId, reason: 'Opening count' })),
-      ...rack.filter((o) => !hasRow.has(o.id)).map((o) => ({ shopId, kind: 'offcut-created' as const, offcutId: o.id, quantity: 1, userId, reason: 'Opening count' })),
+      ...items
+        .filter((i) => i.onHand > 0 && !hasRow.has(i.id))
+        .map((i) => ({ shopId, kind: 'received' as const, stockItemId: i.id, quantity: i.onHand, userId, reason: 'Opening count' })),
+      ...rack
+        .filter((o) => !hasRow.has(o.id))
+        .map((o) => ({ shopId, kind: 'offcut-created' as const, offcutId: o.id, quantity: 1, userId, reason: 'Opening count' })),
     ];
     if (moves.length) await tx.insert(stockMovements).values(moves);
   });
@@ -271,8 +322,24 @@ export async function recordOpeningCounts(db: Db, shopId: string, userId: string
  * and the nesting request already offers each as `buy:<id>`. Adding a size to buy is a new stock size with 0 on hand.
  */
 export async function listCatalogue(db: Db, shopId: string) {
-  const rows = await db.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), eq(stockItems.buyable, true))).orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm));
-  return rows.map((r) => ({ id: r.id, kind: r.kind, material: r.material, nominalThickness: r.nominalThickness, thicknessMm: r.thicknessMm, lengthMm: r.lengthMm, widthMm: r.widthMm, grain: r.grain, supplier: r.supplier, costCents: r.costCents, costEachCents: costEachCents(r) }));
+  const rows = await db
+    .select()
+    .from(stockItems)
+    .where(and(eq(stockItems.shopId, shopId), eq(stockItems.buyable, true)))
+    .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm));
+  return rows.map((r) => ({
+    id: r.id,
+    kind: r.kind,
+    material: r.material,
+    nominalThickness: r.nominalThickness,
+    thicknessMm: r.thicknessMm,
+    lengthMm: r.lengthMm,
+    widthMm: r.widthMm,
+    grain: r.grain,
+    supplier: r.supplier,
+    costCents: r.costCents,
+    costEachCents: costEachCents(r),
+  }));
 }
 
 /**
@@ -287,7 +354,12 @@ export async function ledgerMismatches(db: Db, shopId: string) {
   ]);
   const booked = (pick: (l: (typeof ledger)[number]) => boolean) => ledger.find(pick) ?? { onHand: 0, reserved: 0 };
   const stored = [
-    ...items.map((i) => ({ what: `${i.material} ${i.nominalThickness} (${i.id})`, onHand: i.onHand, reserved: i.reserved, ledger: booked((l) => l.stockItemId === i.id) })),
+    ...items.map((i) => ({
+      what: `${i.material} ${i.nominalThickness} (${i.id})`,
+      onHand: i.onHand,
+      reserved: i.reserved,
+      ledger: booked((l) => l.stockItemId === i.id),
+    })),
     ...rack.map((o) => ({
       what: `${o.material} offcut (${o.id})`,
       onHand: o.status === 'available' || o.status === 'reserved' ? 1 : 0,
@@ -297,5 +369,9 @@ export async function ledgerMismatches(db: Db, shopId: string) {
   ];
   return stored
     .filter((s) => s.onHand !== s.ledger.onHand || s.reserved !== s.ledger.reserved)
-    .map((s) => ({ what: s.what, stored: { onHand: s.onHand, reserved: s.reserved }, ledger: { onHand: s.ledger.onHand, reserved: s.ledger.reserved } }));
+    .map((s) => ({
+      what: s.what,
+      stored: { onHand: s.onHand, reserved: s.reserved },
+      ledger: { onHand: s.ledger.onHand, reserved: s.ledger.reserved },
+    }));
 }

@@ -37,11 +37,25 @@ export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?:
   const itemIds = refs.flatMap((r) => (r.ref && r.ref.source !== 'offcut' ? [r.ref.id] : []));
   const offcutIds = refs.flatMap((r) => (r.ref?.source === 'offcut' ? [r.ref.id] : []));
   const [items, rack, held] = await Promise.all([
-    itemIds.length ? db.select().from(stockItems).where(and(eq(stockItems.shopId, shopId), inArray(stockItems.id, itemIds))) : [],
-    offcutIds.length ? db.select().from(offcuts).where(and(eq(offcuts.shopId, shopId), inArray(offcuts.id, offcutIds))) : [],
+    itemIds.length
+      ? db
+          .select()
+          .from(stockItems)
+          .where(and(eq(stockItems.shopId, shopId), inArray(stockItems.id, itemIds)))
+      : [],
+    offcutIds.length
+      ? db
+          .select()
+          .from(offcuts)
+          .where(and(eq(offcuts.shopId, shopId), inArray(offcuts.id, offcutIds)))
+      : [],
     // What this plan already holds counts as available to it.
     db
-      .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId, n: sql<number>`sum(${stockMovements.reservedChange})`.mapWith(Number) })
+      .select({
+        stockItemId: stockMovements.stockItemId,
+        offcutId: stockMovements.offcutId,
+        n: sql<number>`sum(${stockMovements.reservedChange})`.mapWith(Number),
+      })
       .from(stockMovements)
       .where(and(eq(stockMovements.shopId, shopId), eq(stockMovements.planId, row.id)))
       .groupBy(stockMovements.stockItemId, stockMovements.offcutId),
@@ -56,7 +70,20 @@ export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?:
     if (ref?.source === 'offcut') {
       const o = rack.find((r) => r.id === ref.id);
       const free = o?.status === 'available' ? 1 : 0;
-      sizes.push({ stockId: key, source: 'offcut', kind: 'offcut', material: piece.material, nominalThickness: '', thicknessMm: piece.thickness, lengthMm: piece.length, widthMm: piece.width, count, costEachCents: o?.costCents ?? 0, free, heldByPlan: o ? heldFor(o.id) : 0 });
+      sizes.push({
+        stockId: key,
+        source: 'offcut',
+        kind: 'offcut',
+        material: piece.material,
+        nominalThickness: '',
+        thicknessMm: piece.thickness,
+        lengthMm: piece.length,
+        widthMm: piece.width,
+        count,
+        costEachCents: o?.costCents ?? 0,
+        free,
+        heldByPlan: o ? heldFor(o.id) : 0,
+      });
       continue;
     }
     const item = ref && items.find((i) => i.id === ref.id);

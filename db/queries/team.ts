@@ -8,7 +8,15 @@ import { recordAudit } from './audit';
 import { hasPassword, NO_PASSWORD_YET, queueInvite } from './user-links';
 import { listTeam } from './users';
 
-const member = (u: { id: string; name: string; email: string; role: TeamMember['role']; active: boolean; passwordHash: string; createdAt: Date }): TeamMember => ({
+const member = (u: {
+  id: string;
+  name: string;
+  email: string;
+  role: TeamMember['role'];
+  active: boolean;
+  passwordHash: string;
+  createdAt: Date;
+}): TeamMember => ({
   id: u.id,
   name: u.name,
   email: u.email,
@@ -32,11 +40,15 @@ export async function addTeamMember(db: Db, shopId: string, actorId: string, inp
   const passwordHash = input.password === undefined ? NO_PASSWORD_YET : await bcrypt.hash(input.password, BCRYPT_ROUNDS);
   try {
     return await db.transaction(async (tx) => {
-      const [row] = await tx
-        .insert(users)
-        .values({ shopId, name: input.name, email: input.email, role: input.role, passwordHash })
-        .returning();
-      await recordAudit(tx, { shopId, userId: actorId, action: 'create', entity: 'user', entityId: row.id, data: { email: row.email, role: row.role, invited: input.password === undefined } });
+      const [row] = await tx.insert(users).values({ shopId, name: input.name, email: input.email, role: input.role, passwordHash }).returning();
+      await recordAudit(tx, {
+        shopId,
+        userId: actorId,
+        action: 'create',
+        entity: 'user',
+        entityId: row.id,
+        data: { email: row.email, role: row.role, invited: input.password === undefined },
+      });
       if (input.password === undefined) await queueInvite(tx, row, await actorName(tx, actorId));
       return member(row);
     });
@@ -52,7 +64,11 @@ export async function addTeamMember(db: Db, shopId: string, actorId: string, inp
  */
 export async function updateTeamMember(db: Db, shopId: string, actorId: string, id: string, patch: TeamMemberPatch) {
   return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(users).where(and(eq(users.shopId, shopId), eq(users.id, id))).for('update');
+    const [current] = await tx
+      .select()
+      .from(users)
+      .where(and(eq(users.shopId, shopId), eq(users.id, id)))
+      .for('update');
     if (!current) throw notFound('That person');
 
     const losesOwner = current.role === 'owner' && current.active && ((patch.role && patch.role !== 'owner') || patch.active === false);
@@ -77,7 +93,14 @@ export async function updateTeamMember(db: Db, shopId: string, actorId: string, 
       .where(and(eq(users.shopId, shopId), eq(users.id, id)))
       .returning();
     const { password: _secret, ...logged } = patch;
-    await recordAudit(tx, { shopId, userId: actorId, action: 'update', entity: 'user', entityId: id, data: { ...logged, passwordChanged: patch.password !== undefined } });
+    await recordAudit(tx, {
+      shopId,
+      userId: actorId,
+      action: 'update',
+      entity: 'user',
+      entityId: id,
+      data: { ...logged, passwordChanged: patch.password !== undefined },
+    });
     return member(row);
   });
 }
@@ -85,7 +108,11 @@ export async function updateTeamMember(db: Db, shopId: string, actorId: string, 
 /** Sends a fresh invite (voiding the earlier link) to someone who has not chosen a password yet. */
 export async function resendInvite(db: Db, shopId: string, actorId: string, id: string): Promise<TeamMember> {
   return db.transaction(async (tx) => {
-    const [row] = await tx.select().from(users).where(and(eq(users.shopId, shopId), eq(users.id, id))).for('update');
+    const [row] = await tx
+      .select()
+      .from(users)
+      .where(and(eq(users.shopId, shopId), eq(users.id, id)))
+      .for('update');
     if (!row) throw notFound('That person');
     if (!row.active) throw conflict(`${row.name} is deactivated: reactivate them first.`);
     if (hasPassword(row.passwordHash)) throw conflict(`${row.name} has already chosen a password. They can reset it from the sign-in page.`);

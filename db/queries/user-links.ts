@@ -87,7 +87,14 @@ export type LinkState =
 export async function lookUpLink(db: Db, purpose: LinkPurpose, token: string, now = new Date()): Promise<LinkState> {
   if (!LINK_TOKEN.test(token)) return { ok: false, reason: 'unknown' };
   const [row] = await db
-    .select({ usedAt: userTokens.usedAt, expiresAt: userTokens.expiresAt, name: users.name, email: users.email, active: users.active, shopName: shops.name })
+    .select({
+      usedAt: userTokens.usedAt,
+      expiresAt: userTokens.expiresAt,
+      name: users.name,
+      email: users.email,
+      active: users.active,
+      shopName: shops.name,
+    })
     .from(userTokens)
     .innerJoin(users, eq(users.id, userTokens.userId))
     .innerJoin(shops, eq(shops.id, userTokens.shopId))
@@ -126,8 +133,18 @@ export async function useLink(db: Db, purpose: LinkPurpose, token: string, passw
       .where(and(eq(users.id, link.userId), eq(users.active, true)))
       .returning();
     if (!person) throw new HttpError(404, LINK_REFUSALS.unknown);
-    await tx.update(userTokens).set({ usedAt: now }).where(and(eq(userTokens.userId, person.id), isNull(userTokens.usedAt)));
-    await recordAudit(tx, { shopId: person.shopId, userId: person.id, action: 'update', entity: 'user', entityId: person.id, data: { passwordSetBy: purpose } });
+    await tx
+      .update(userTokens)
+      .set({ usedAt: now })
+      .where(and(eq(userTokens.userId, person.id), isNull(userTokens.usedAt)));
+    await recordAudit(tx, {
+      shopId: person.shopId,
+      userId: person.id,
+      action: 'update',
+      entity: 'user',
+      entityId: person.id,
+      data: { passwordSetBy: purpose },
+    });
     return { email: person.email };
   });
 }

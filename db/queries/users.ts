@@ -71,7 +71,15 @@ export async function revokeSessions(db: Db, claims: { userId: string; shopId: s
 
 export async function listTeam(db: Db, shopId: string) {
   return db
-    .select({ id: users.id, name: users.name, email: users.email, role: users.role, active: users.active, passwordHash: users.passwordHash, createdAt: users.createdAt })
+    .select({
+      id: users.id,
+      name: users.name,
+      email: users.email,
+      role: users.role,
+      active: users.active,
+      passwordHash: users.passwordHash,
+      createdAt: users.createdAt,
+    })
     .from(users)
     .where(eq(users.shopId, shopId))
     .orderBy(asc(users.name));

@@ -1,21 +1,23 @@
 import { pgEnum } from 'drizzle-orm/pg-core';
 
 export const roleEnum = pgEnum('role', ['owner', 'estimator', 'cutter']);
-export const jobStatusEnum = pgEnum('job_status', ['quoting', 'quoted', 'accepted', 'deposit-paid', 'cutting', 'done', 'declined', 'expired', 'archived']);
+export const jobStatusEnum = pgEnum('job_status', [
+  'quoting',
+  'quoted',
+  'accepted',
+  'deposit-paid',
+  'cutting',
+  'done',
+  'declined',
+  'expired',
+  'archived',
+]);
 export const grainRuleEnum = pgEnum('grain_rule', ['along-length', 'any']);
 export const stockGrainEnum = pgEnum('stock_grain', ['along-length', 'none']);
 export const stockKindEnum = pgEnum('stock_kind', ['sheet', 'board']);
 export const offcutStatusEnum = pgEnum('offcut_status', ['available', 'reserved', 'used', 'scrapped']);
 export const planStatusEnum = pgEnum('plan_status', ['draft', 'released', 'cutting', 'done', 'cancelled']);
-export const movementKindEnum = pgEnum('movement_kind', [
-  'received',
-  'reserved',
-  'released',
-  'consumed',
-  'offcut-created',
-  'scrapped',
-  'adjusted',
-]);
+export const movementKindEnum = pgEnum('movement_kind', ['received', 'reserved', 'released', 'consumed', 'offcut-created', 'scrapped', 'adjusted']);
 /**
  * A quote revision: a draft being priced, sent to the customer, replaced by a newer revision that was sent, or
  * answered by the customer (accepted or declined), or expired unanswered past its validity.

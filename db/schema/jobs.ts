@@ -27,7 +27,10 @@ export const jobs = pgTable(
      * them off the job instead of adding up its parts on every request. Never written by the app.
      */
     partPieces: integer('part_pieces').notNull().default(0),
-    partMaterials: text('part_materials').array().notNull().default(sql`'{}'::text[]`),
+    partMaterials: text('part_materials')
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
   },
   (t) => [
     index('jobs_shop_idx').on(t.shopId),

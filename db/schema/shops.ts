@@ -2,7 +2,6 @@ import type { ShopUnits } from '@/shared/schemas/units';
 import { DEFAULT_PRICING, type PricingSettings } from '@/shared/schemas/pricing';
 import { doublePrecision, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 
-
 export const shops = pgTable('shops', {
   id: uuid('id').primaryKey().defaultRandom(),
   name: text('name').notNull(),

@@ -45,7 +45,14 @@ export function createLimiters(store: LimiterStore): Limiters {
     map.set(
       kind,
       store.pool
-        ? new RateLimiterPostgres({ ...common, storeClient: store.pool, storeType: 'pool', tableName: 'rate_limits', tableCreated: true, clearExpiredByTimeout: true })
+        ? new RateLimiterPostgres({
+            ...common,
+            storeClient: store.pool,
+            storeType: 'pool',
+            tableName: 'rate_limits',
+            tableCreated: true,
+            clearExpiredByTimeout: true,
+          })
         : new RateLimiterMemory(common),
     );
   }
@@ -109,6 +116,10 @@ export function tooManyAttempts(state: LimitState, what = 'attempts'): HttpError
  */
 export function clientAddress(headers: Pick<Headers, 'get'>): string {
   const forwarded = headers.get('x-forwarded-for');
-  const last = forwarded?.split(',').map((s) => s.trim()).filter(Boolean).pop();
+  const last = forwarded
+    ?.split(',')
+    .map((s) => s.trim())
+    .filter(Boolean)
+    .pop();
   return (last ?? headers.get('x-real-ip') ?? 'unknown').toLowerCase();
 }

@@ -37,7 +37,8 @@ export async function countingFailedLinks<T>(req: Pick<NextRequest, 'headers'>, 
   try {
     return await use();
   } catch (error) {
-    if (error instanceof HttpError && (error.status === 404 || error.status === 410)) await spend('invite-accept', `address:${clientAddress(req.headers)}`);
+    if (error instanceof HttpError && (error.status === 404 || error.status === 410))
+      await spend('invite-accept', `address:${clientAddress(req.headers)}`);
     throw error;
   }
 }

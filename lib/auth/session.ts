@@ -30,7 +30,11 @@ export async function userFromRequest(req: NextRequest, handle: Pick<DbHandle, '
  */
 export const currentUser = cache(async (): Promise<SessionUser | null> => {
   const [cookieStore, headerList] = await Promise.all([cookies(), headers()]);
-  const token = await getToken({ req: { cookies: cookieStore, headers: headerList } as unknown as NextRequest, secret: serverEnv().NEXTAUTH_SECRET, secureCookie: secureCookies() });
+  const token = await getToken({
+    req: { cookies: cookieStore, headers: headerList } as unknown as NextRequest,
+    secret: serverEnv().NEXTAUTH_SECRET,
+    secureCookie: secureCookies(),
+  });
   const claims = claimsFromToken(token);
   return claims ? loadSessionUser(await getDbHandle(), claims) : null;
 });

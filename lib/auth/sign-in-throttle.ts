@@ -52,7 +52,10 @@ async function failed(res: Response): Promise<boolean> {
   const location = res.headers.get('location');
   if (location) return /[?&]error=/.test(location);
   if ((res.headers.get('content-type') ?? '').includes('application/json')) {
-    const body = (await res.clone().json().catch(() => ({}))) as { url?: string };
+    const body = (await res
+      .clone()
+      .json()
+      .catch(() => ({}))) as { url?: string };
     return typeof body.url === 'string' && /[?&]error=/.test(body.url);
   }
   return false;

@@ -29,5 +29,11 @@ export const costUnit = (kind: 'sheet' | 'board') => (kind === 'board' ? 'bd ft'
 /** PO-0007. */
 export const poNumber = (n: number) => `PO-${String(n).padStart(4, '0')}`;
 
-export const PO_STATUS_LABELS = { draft: 'Draft', sent: 'Sent', 'part-received': 'Part received', received: 'Received', cancelled: 'Cancelled' } as const;
+export const PO_STATUS_LABELS = {
+  draft: 'Draft',
+  sent: 'Sent',
+  'part-received': 'Part received',
+  received: 'Received',
+  cancelled: 'Cancelled',
+} as const;
 export type PoStatus = keyof typeof PO_STATUS_LABELS;

@@ -17,7 +17,8 @@ describe('the shop’s clock', () => {
 });
 
 describe('when the low-stock digest is due (07:00 in America/Chicago)', () => {
-  const chicago = (iso: string, lastDay: string | null = null, time = '07:00') => digestDue({ now: at(iso), zone: 'America/Chicago', at: time, lastDay });
+  const chicago = (iso: string, lastDay: string | null = null, time = '07:00') =>
+    digestDue({ now: at(iso), zone: 'America/Chicago', at: time, lastDay });
 
   test('the day before the clocks change (CST): not at 06:59 local (12:59Z), due at 07:00 (13:00Z)', () => {
     expect(chicago('2026-03-07T12:59:00Z')).toEqual({ due: false, day: '2026-03-07' });
@@ -47,7 +48,7 @@ describe('when the low-stock digest is due (07:00 in America/Chicago)', () => {
     expect(chicago('2026-12-04T05:30:00Z', '2026-12-03').due).toBe(false);
   });
 
-  test('a shop that sends none (time \'\') is never due', () => {
+  test("a shop that sends none (time '') is never due", () => {
     expect(chicago('2026-03-08T20:00:00Z', null, '').due).toBe(false);
   });
 });

@@ -11,7 +11,15 @@ export const DIGEST_TIME = /^([01]\d|2[0-3]):[0-5]\d$/;
 /** The shop's local day (YYYY-MM-DD) and time (HH:MM) at `now`. */
 export function shopClock(now: Date, zone: string): { day: string; time: string } {
   const parts = Object.fromEntries(
-    new Intl.DateTimeFormat('en-CA', { timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' })
+    new Intl.DateTimeFormat('en-CA', {
+      timeZone: zone,
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+      hourCycle: 'h23',
+    })
       .formatToParts(now)
       .map((p) => [p.type, p.value]),
   );
@@ -23,7 +31,10 @@ export function shopClock(now: Date, zone: string): { day: string; time: string 
  * today, and today's digest was not already made (`lastDay`, the latest local day one was made). On a day the
  * clocks skip the hour the digest time falls in, it goes at the first minute after the gap.
  */
-export function digestDue({ now, zone, at, lastDay }: { now: Date; zone: string; at: string; lastDay: string | null }): { due: boolean; day: string } {
+export function digestDue({ now, zone, at, lastDay }: { now: Date; zone: string; at: string; lastDay: string | null }): {
+  due: boolean;
+  day: string;
+} {
   const { day, time } = shopClock(now, zone);
   if (!DIGEST_TIME.test(at)) return { due: false, day };
   return { due: time >= at && (lastDay === null || lastDay < day), day };

@@ -13,7 +13,15 @@ export interface PoMailLine {
   quantity: number;
 }
 
-export function purchaseOrderMail(input: { shopName: string; shopDetails: string; title: string; supplier: string; lines: PoMailLine[]; total: string; note: string }): RenderedMail {
+export function purchaseOrderMail(input: {
+  shopName: string;
+  shopDetails: string;
+  title: string;
+  supplier: string;
+  lines: PoMailLine[];
+  total: string;
+  note: string;
+}): RenderedMail {
   const subject = `Purchase order ${input.title} from ${input.shopName}`;
   const text = [
     `Hello ${input.supplier},`,
@@ -32,7 +40,10 @@ export function purchaseOrderMail(input: { shopName: string; shopDetails: string
     '',
   ].join('\n');
   const rows = input.lines
-    .map((l) => `<tr><td style="padding:4px 12px 4px 0;font-size:14px;color:#2b2a27;text-align:right;white-space:nowrap">${l.quantity} ×</td><td style="padding:4px 0;font-size:14px;color:#2b2a27">${escapeHtml(l.description)}</td></tr>`)
+    .map(
+      (l) =>
+        `<tr><td style="padding:4px 12px 4px 0;font-size:14px;color:#2b2a27;text-align:right;white-space:nowrap">${l.quantity} ×</td><td style="padding:4px 0;font-size:14px;color:#2b2a27">${escapeHtml(l.description)}</td></tr>`,
+    )
     .join('\n');
   const html = layout(
     input.shopName,
@@ -43,7 +54,9 @@ export function purchaseOrderMail(input: { shopName: string; shopDetails: string
       p(`Total: <strong>${escapeHtml(input.total)}</strong>`),
       input.note ? p(escapeHtml(input.note).replace(/\n/g, '<br>')) : '',
       p(`Please quote ${escapeHtml(input.title)} on the delivery note and the invoice.`),
-      p(`— ${escapeHtml(input.shopName)}${input.shopDetails ? `<br><span style="color:#7a766c;font-size:13px">${escapeHtml(input.shopDetails).replace(/\n/g, '<br>')}</span>` : ''}`),
+      p(
+        `— ${escapeHtml(input.shopName)}${input.shopDetails ? `<br><span style="color:#7a766c;font-size:13px">${escapeHtml(input.shopDetails).replace(/\n/g, '<br>')}</span>` : ''}`,
+      ),
     ].join('\n'),
   );
   return { subject, text, html };

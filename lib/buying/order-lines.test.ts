@@ -1,7 +1,15 @@
 import { describe, expect, test } from 'vitest';
 import { groupBySupplier, lowStockOrders, piecesToBuy, reorderQuantity, type BuyableSize } from './order-lines';
 
-const size = (id: string, supplier: string, over: Partial<BuyableSize> = {}): BuyableSize => ({ id, supplier, onHand: 10, reserved: 0, lowStockAt: 0, costCents: 5000, ...over });
+const size = (id: string, supplier: string, over: Partial<BuyableSize> = {}): BuyableSize => ({
+  id,
+  supplier,
+  onHand: 10,
+  reserved: 0,
+  lowStockAt: 0,
+  costCents: 5000,
+  ...over,
+});
 
 describe('pieces a plan still needs bought (hand-worked figures)', () => {
   test('every piece of a size it buys; of a size it pulls, only what the rack is short of', () => {
@@ -48,10 +56,29 @@ describe('reorder quantities: up to twice the low mark (min/max rule: common pra
 
 describe('one order per supplier', () => {
   test('lines group by supplier (case and spaces aside), suppliers in name order, each line at the size’s cost', () => {
-    const sizes = [size('a', 'Millbrook Hardwoods', { costCents: 925 }), size('b', 'Cedar Run Plywood', { costCents: 8900 }), size('c', ' cedar run plywood ', { costCents: 6850 }), size('d', 'Cedar Run Plywood')];
-    const orders = groupBySupplier(new Map([['a', 2], ['b', 1], ['c', 4], ['d', 0]]), sizes);
+    const sizes = [
+      size('a', 'Millbrook Hardwoods', { costCents: 925 }),
+      size('b', 'Cedar Run Plywood', { costCents: 8900 }),
+      size('c', ' cedar run plywood ', { costCents: 6850 }),
+      size('d', 'Cedar Run Plywood'),
+    ];
+    const orders = groupBySupplier(
+      new Map([
+        ['a', 2],
+        ['b', 1],
+        ['c', 4],
+        ['d', 0],
+      ]),
+      sizes,
+    );
     expect(orders).toEqual([
-      { supplier: 'Cedar Run Plywood', lines: [{ stockItemId: 'b', quantity: 1, unitCostCents: 8900 }, { stockItemId: 'c', quantity: 4, unitCostCents: 6850 }] },
+      {
+        supplier: 'Cedar Run Plywood',
+        lines: [
+          { stockItemId: 'b', quantity: 1, unitCostCents: 8900 },
+          { stockItemId: 'c', quantity: 4, unitCostCents: 6850 },
+        ],
+      },
       { supplier: 'Millbrook Hardwoods', lines: [{ stockItemId: 'a', quantity: 2, unitCostCents: 925 }] },
     ]);
   });

@@ -26,8 +26,26 @@ const metric = { system: 'metric', precision: 1, feet: false } as const;
 // Needs Debian's poppler-utils (`npm test` installs it).
 describe('the purchase order PDF (read back with pdftotext)', () => {
   test('shop and its details, supplier, sizes as on screen (¾″, 6½″), unit costs, board feet and the total', async () => {
-    const birch = { kind: 'sheet' as const, material: 'Baltic birch', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: inches(60), widthMm: inches(60), surfacing: '', grade: '' };
-    const oak = { kind: 'board' as const, material: 'White oak', nominalThickness: '4/4', thicknessMm: inches(13 / 16), lengthMm: inches(96), widthMm: inches(6.5), surfacing: 'S2S', grade: 'FAS' };
+    const birch = {
+      kind: 'sheet' as const,
+      material: 'Baltic birch',
+      nominalThickness: '3/4"',
+      thicknessMm: 18,
+      lengthMm: inches(60),
+      widthMm: inches(60),
+      surfacing: '',
+      grade: '',
+    };
+    const oak = {
+      kind: 'board' as const,
+      material: 'White oak',
+      nominalThickness: '4/4',
+      thicknessMm: inches(13 / 16),
+      lengthMm: inches(96),
+      widthMm: inches(6.5),
+      surfacing: 'S2S',
+      grade: 'FAS',
+    };
     // By hand: a 4/4 board 96″ × 6½″ is 1 × 6.5 × 8 / 12 = 4.33 bd ft (AHEC, "Measurement"); at $9.25 a board foot
     // one board is $40.08, and 10 boards $400.80. Three sheets at $89.00 are $267.00. Total $667.80.
     expect(pieceBoardFeet(oak)).toBeCloseTo(4.3333, 4);
@@ -39,7 +57,14 @@ describe('the purchase order PDF (read back with pdftotext)', () => {
       currency: 'USD',
       lines: [
         { description: describeSize(birch, imperial), quantity: 3, costUnit: 'sheet', unitCostCents: 8900, boardFeetEach: null, totalCents: 26700 },
-        { description: describeSize(oak, imperial), quantity: 10, costUnit: 'bd ft', unitCostCents: 925, boardFeetEach: pieceBoardFeet(oak), totalCents: 40080 },
+        {
+          description: describeSize(oak, imperial),
+          quantity: 10,
+          costUnit: 'bd ft',
+          unitCostCents: 925,
+          boardFeetEach: pieceBoardFeet(oak),
+          totalCents: 40080,
+        },
       ],
       totalCents: 66780,
       note: 'Deliver to the back door, please.',
@@ -48,14 +73,35 @@ describe('the purchase order PDF (read back with pdftotext)', () => {
     expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
     if (process.env.KW_PDF_OUT) fs.writeFileSync(process.env.KW_PDF_OUT, bytes);
     const text = pdfText(bytes);
-    for (const s of ['Alder & Finch Joinery', '18 Larch Row, Pinecrest', '(555) 010-4477', 'Purchase order PO-0012', 'Issued 2026-12-03', 'Cedar Run Plywood', 'orders@cedarrun.example', 'Baltic birch ¾″, 60″ × 60″', 'White oak 4/4 S2S FAS, 96″ × 6½″', '4.33 bd ft each, 43.33 bd ft in all', 'Deliver to the back door, please.']) {
+    for (const s of [
+      'Alder & Finch Joinery',
+      '18 Larch Row, Pinecrest',
+      '(555) 010-4477',
+      'Purchase order PO-0012',
+      'Issued 2026-12-03',
+      'Cedar Run Plywood',
+      'orders@cedarrun.example',
+      'Baltic birch ¾″, 60″ × 60″',
+      'White oak 4/4 S2S FAS, 96″ × 6½″',
+      '4.33 bd ft each, 43.33 bd ft in all',
+      'Deliver to the back door, please.',
+    ]) {
       expect(text).toContain(s);
     }
     for (const s of ['$89.00 / sheet', '$9.25 / bd ft', '$267.00', '$400.80', '$667.80']) expect(text).toContain(s);
   }, 30_000);
 
   test('a metric shop’s sizes print in millimetres, on A4', async () => {
-    const mdf = { kind: 'sheet' as const, material: 'MDF', nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, surfacing: '', grade: '' };
+    const mdf = {
+      kind: 'sheet' as const,
+      material: 'MDF',
+      nominalThickness: '18 mm',
+      thicknessMm: 18,
+      lengthMm: 2440,
+      widthMm: 1220,
+      surfacing: '',
+      grade: '',
+    };
     const bytes = await purchaseOrderPdf({
       shop: { name: 'Tischlerei Amsel', details: '' },
       title: 'PO-0001',

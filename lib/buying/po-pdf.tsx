@@ -68,10 +68,16 @@ function PoDocument({ po }: { po: PoPdfInput }) {
           <View key={i} style={s.row} wrap={false}>
             <View style={s.item}>
               <Text>{l.description}</Text>
-              {l.boardFeetEach !== null ? <Text style={s.muted}>{bf(l.boardFeetEach)} bd ft each, {bf(l.boardFeetEach * l.quantity)} bd ft in all</Text> : null}
+              {l.boardFeetEach !== null ? (
+                <Text style={s.muted}>
+                  {bf(l.boardFeetEach)} bd ft each, {bf(l.boardFeetEach * l.quantity)} bd ft in all
+                </Text>
+              ) : null}
             </View>
             <Text style={s.qty}>{String(l.quantity)}</Text>
-            <Text style={s.unit}>{money(l.unitCostCents)} / {l.costUnit}</Text>
+            <Text style={s.unit}>
+              {money(l.unitCostCents)} / {l.costUnit}
+            </Text>
             <Text style={s.amount}>{money(l.totalCents)}</Text>
           </View>
         ))}
@@ -89,7 +95,9 @@ function PoDocument({ po }: { po: PoPdfInput }) {
           <Text style={s.muted}>Please quote {po.title} on the delivery note and the invoice.</Text>
         </View>
         <View style={s.footer} fixed>
-          <Text>{po.shop.name} · {po.title}</Text>
+          <Text>
+            {po.shop.name} · {po.title}
+          </Text>
           <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
         </View>
       </Page>

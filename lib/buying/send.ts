@@ -59,7 +59,15 @@ export async function sendPurchaseOrder(db: Db, shopId: string, userId: string, 
   });
   const to = po.supplierEmail;
   await markSent(db, shopId, userId, id, po.updatedAt, (tx) =>
-    enqueueMail(tx, { shopId, kind: 'purchase-order', to, subject: mail.subject, text: mail.text, html: mail.html, attachments: [{ filename, contentType: 'application/pdf', content: bytes.toString('base64') }] }),
+    enqueueMail(tx, {
+      shopId,
+      kind: 'purchase-order',
+      to,
+      subject: mail.subject,
+      text: mail.text,
+      html: mail.html,
+      attachments: [{ filename, contentType: 'application/pdf', content: bytes.toString('base64') }],
+    }),
   );
   wakeMailSender();
   return (await getPurchaseOrder(db, shopId, id))!;

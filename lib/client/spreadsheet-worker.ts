@@ -13,7 +13,11 @@ export async function readCutListFileInWorker(file: { name: string; bytes: Array
   let timer: ReturnType<typeof setTimeout> | undefined;
   const timeout = new Promise<ReadFileResult>((resolve) => {
     timer = setTimeout(
-      () => resolve({ ok: false, error: `“${file.name}” took too long to read (over ${Math.round(timeoutMs / 1000)} s). Save it as CSV, or split it, and try again.` }),
+      () =>
+        resolve({
+          ok: false,
+          error: `“${file.name}” took too long to read (over ${Math.round(timeoutMs / 1000)} s). Save it as CSV, or split it, and try again.`,
+        }),
       timeoutMs,
     );
   });

@@ -60,17 +60,24 @@ export function labourLines(counts: LabourCounts, rates: LabourRates): LabourLin
     if (!Number.isSafeInteger(centiMinutes)) throw new RangeError(`The ${kind} time is too large to work out exactly.`);
     return { kind, centiMinutes, hours: hoursFromCentiMinutes(centiMinutes), ...extra };
   };
-  const saw = count(counts.cuts, 'Cuts') * minutes(rates.minutesPerCut, 'Minutes per cut') + count(counts.piecesHandled, 'Pieces handled') * minutes(rates.minutesPerPiece, 'Minutes per piece');
-  const machining = count(counts.setupCards, 'Setup cards') * minutes(rates.setupMinutesPerCard, 'Setup minutes per card') + count(counts.jointCorners, 'Joint corners') * minutes(rates.minutesPerJointCorner, 'Minutes per joint corner');
+  const saw =
+    count(counts.cuts, 'Cuts') * minutes(rates.minutesPerCut, 'Minutes per cut') +
+    count(counts.piecesHandled, 'Pieces handled') * minutes(rates.minutesPerPiece, 'Minutes per piece');
+  const machining =
+    count(counts.setupCards, 'Setup cards') * minutes(rates.setupMinutesPerCard, 'Setup minutes per card') +
+    count(counts.jointCorners, 'Joint corners') * minutes(rates.minutesPerJointCorner, 'Minutes per joint corner');
   const assembly = count(counts.drawerBoxes, 'Drawer boxes') * minutes(rates.assemblyMinutesPerBox, 'Assembly minutes per box');
   const lines = [line('saw', saw), line('machining', machining), line('assembly', assembly)];
   if (rates.finishingMinutesPerM2 !== null && rates.finishingMinutesPerM2 !== undefined) {
     const area = counts.faceAreaMm2;
-    if (typeof area !== 'number' || !Number.isFinite(area) || area < 0) throw new RangeError(`A face area must be a finite area, not negative; got ${String(area)}.`);
+    if (typeof area !== 'number' || !Number.isFinite(area) || area < 0)
+      throw new RangeError(`A face area must be a finite area, not negative; got ${String(area)}.`);
     if (area > MAX_FACE_AREA_MM2) throw new RangeError(`A face area over 10,000 m² looks like a slipped unit.`);
     // Step L0: the area in hundredths of a m² (1 m² = 10⁶ mm²), rounded half up.
     const centiM2 = Math.round(area / 10_000);
-    lines.push(line('finishing', divideRounded(centiM2 * minutes(rates.finishingMinutesPerM2, 'Finishing minutes per m²'), 100), { areaM2: centiM2 / 100 }));
+    lines.push(
+      line('finishing', divideRounded(centiM2 * minutes(rates.finishingMinutesPerM2, 'Finishing minutes per m²'), 100), { areaM2: centiM2 / 100 }),
+    );
   }
   return lines;
 }

@@ -11,7 +11,8 @@ const digitsCache = new Map<string, number>();
 
 /** Decimals of a currency (USD 2, JPY 0, KWD 3), from Intl.NumberFormat; an unknown code is a RangeError. */
 export function currencyDigits(currency: string): number {
-  if (typeof currency !== 'string' || !/^[A-Za-z]{3}$/.test(currency)) throw new RangeError(`A currency is a three-letter ISO 4217 code such as USD; got ${JSON.stringify(String(currency)).slice(0, 20)}.`);
+  if (typeof currency !== 'string' || !/^[A-Za-z]{3}$/.test(currency))
+    throw new RangeError(`A currency is a three-letter ISO 4217 code such as USD; got ${JSON.stringify(String(currency)).slice(0, 20)}.`);
   const code = currency.toUpperCase();
   const known = digitsCache.get(code);
   if (known !== undefined) return known;
@@ -31,7 +32,8 @@ export function assertMinor(value: number, what: string, currency: string, { neg
   if (typeof value !== 'number' || !Number.isFinite(value)) throw new RangeError(`${what} must be a finite amount; got ${String(value)}.`);
   if (!Number.isInteger(value)) throw new RangeError(`${what} is counted in whole minor units (cents); got ${value}.`);
   if (value < 0 && !negative) throw new RangeError(`${what} cannot be negative; got ${value}.`);
-  if (Math.abs(value) > maxMinor(currency)) throw new RangeError(`${what} is over ${MAX_MAJOR_UNITS.toLocaleString('en-US')} ${currency.toUpperCase()}: that looks like a slipped digit.`);
+  if (Math.abs(value) > maxMinor(currency))
+    throw new RangeError(`${what} is over ${MAX_MAJOR_UNITS.toLocaleString('en-US')} ${currency.toUpperCase()}: that looks like a slipped digit.`);
   return value;
 }
 
@@ -75,5 +77,10 @@ export function toMinorUnits(major: number, currency: string): number {
 export function formatMoney(minor: number, currency: string, locale = 'en-US'): string {
   assertMinor(minor, 'An amount', currency, { negative: true });
   const digits = currencyDigits(currency);
-  return new Intl.NumberFormat(locale, { style: 'currency', currency: currency.toUpperCase(), minimumFractionDigits: digits, maximumFractionDigits: digits }).format(minor / 10 ** digits);
+  return new Intl.NumberFormat(locale, {
+    style: 'currency',
+    currency: currency.toUpperCase(),
+    minimumFractionDigits: digits,
+    maximumFractionDigits: digits,
+  }).format(minor / 10 ** digits);
 }

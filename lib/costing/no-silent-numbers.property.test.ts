@@ -1,10 +1,26 @@
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
 import { expectSane, expectSaneOrRefused } from '@/tests/support/sane';
-import { currencyDigits, depositAndBalance, divideRounded, formatMoney, labourLines, lineCost, markupOn, percentOf, quoteTotals, toMinorUnits, type QuoteLineInput } from './index';
+import {
+  currencyDigits,
+  depositAndBalance,
+  divideRounded,
+  formatMoney,
+  labourLines,
+  lineCost,
+  markupOn,
+  percentOf,
+  quoteTotals,
+  toMinorUnits,
+  type QuoteLineInput,
+} from './index';
 
 const SEED = 20261203;
-const anyNumber = fc.oneof(fc.double(), fc.integer({ min: -5000, max: 5000 }), fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, -1, 0, 0.005, 1e6, 1e12, 1e308, 5e-324));
+const anyNumber = fc.oneof(
+  fc.double(),
+  fc.integer({ min: -5000, max: 5000 }),
+  fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, -1, 0, 0.005, 1e6, 1e12, 1e308, 5e-324),
+);
 const currency = fc.constantFrom('USD', 'JPY', 'KWD', 'EUR', 'GBP');
 
 /** A sensible line: up to 50 of a thing (3 decimals) at up to 200,000 minor units, so 30 lines stay under the cap. */
@@ -19,7 +35,10 @@ const quote = fc.record({
   currency,
   lines: fc.array(line, { maxLength: 30 }),
   markupPercent: fc.record({ material: percent(200), hardware: percent(200) }),
-  discount: fc.oneof(fc.record({ kind: fc.constant('percent' as const), percent: percent(100) }), fc.record({ kind: fc.constant('amount' as const), minor: fc.constant(0) })),
+  discount: fc.oneof(
+    fc.record({ kind: fc.constant('percent' as const), percent: percent(100) }),
+    fc.record({ kind: fc.constant('amount' as const), minor: fc.constant(0) }),
+  ),
   taxPercent: percent(30),
   depositPercent: percent(100),
 });
@@ -61,13 +80,31 @@ describe('no public function of lib/costing returns a silent wrong number (seede
   test('money helpers: finite whole minor units or a RangeError, for any number', () => {
     fc.assert(
       fc.property(anyNumber, anyNumber, currency, (a, b, c) => {
-        expectSaneOrRefused(() => toMinorUnits(a, c), (v) => expect(Number.isInteger(v) && v >= 0).toBe(true));
+        expectSaneOrRefused(
+          () => toMinorUnits(a, c),
+          (v) => expect(Number.isInteger(v) && v >= 0).toBe(true),
+        );
         expectSaneOrRefused(() => formatMoney(a, c));
-        expectSaneOrRefused(() => divideRounded(a, b), (v) => expect(Number.isInteger(v)).toBe(true));
-        expectSaneOrRefused(() => lineCost(a, b, c), (v) => expect(Number.isInteger(v) && v >= 0).toBe(true));
-        expectSaneOrRefused(() => markupOn(a, b, c), (v) => expect(Number.isInteger(v) && v >= 0).toBe(true));
-        expectSaneOrRefused(() => percentOf(a, b, 'A tax', c), (v) => expect(Number.isInteger(v) && v >= 0).toBe(true));
-        expectSaneOrRefused(() => depositAndBalance(a, b, c), (v) => expect(v.depositMinor + v.balanceMinor).toBe(a));
+        expectSaneOrRefused(
+          () => divideRounded(a, b),
+          (v) => expect(Number.isInteger(v)).toBe(true),
+        );
+        expectSaneOrRefused(
+          () => lineCost(a, b, c),
+          (v) => expect(Number.isInteger(v) && v >= 0).toBe(true),
+        );
+        expectSaneOrRefused(
+          () => markupOn(a, b, c),
+          (v) => expect(Number.isInteger(v) && v >= 0).toBe(true),
+        );
+        expectSaneOrRefused(
+          () => percentOf(a, b, 'A tax', c),
+          (v) => expect(Number.isInteger(v) && v >= 0).toBe(true),
+        );
+        expectSaneOrRefused(
+          () => depositAndBalance(a, b, c),
+          (v) => expect(v.depositMinor + v.balanceMinor).toBe(a),
+        );
       }),
       { seed: SEED, numRuns: 2000 },
     );
@@ -76,7 +113,10 @@ describe('no public function of lib/costing returns a silent wrong number (seede
   test('currency codes: digits or a RangeError, for any text', () => {
     fc.assert(
       fc.property(fc.oneof(fc.string({ maxLength: 5 }), fc.constantFrom('XYZ', 'usd', '', 'US', 'ZZZZ')), (code) => {
-        expectSaneOrRefused(() => currencyDigits(code), (d) => expect([0, 2, 3, 4]).toContain(d));
+        expectSaneOrRefused(
+          () => currencyDigits(code),
+          (d) => expect([0, 2, 3, 4]).toContain(d),
+        );
       }),
       { seed: SEED, numRuns: 500 },
     );
@@ -84,7 +124,14 @@ describe('no public function of lib/costing returns a silent wrong number (seede
 
   test('labour: finite hours or a RangeError, for any number in any count or rate', () => {
     const counts = { cuts: 46, piecesHandled: 9, setupCards: 2, jointCorners: 16, drawerBoxes: 4, faceAreaMm2: 6_437_000 };
-    const rates = { minutesPerCut: 0.75, minutesPerPiece: 2.5, setupMinutesPerCard: 20, minutesPerJointCorner: 1.5, assemblyMinutesPerBox: 12, finishingMinutesPerM2: 9 as number | null };
+    const rates = {
+      minutesPerCut: 0.75,
+      minutesPerPiece: 2.5,
+      setupMinutesPerCard: 20,
+      minutesPerJointCorner: 1.5,
+      assemblyMinutesPerBox: 12,
+      finishingMinutesPerM2: 9 as number | null,
+    };
     fc.assert(
       fc.property(fc.constantFrom(...Object.keys(counts)), fc.constantFrom(...Object.keys(rates)), anyNumber, anyNumber, (ck, rk, a, b) => {
         expectSaneOrRefused(
@@ -99,8 +146,27 @@ describe('no public function of lib/costing returns a silent wrong number (seede
   });
 
   test('quote totals: a total or a RangeError, with any number anywhere', () => {
-    const base = { currency: 'USD', lines: [{ kind: 'material', quantity: 3, unitCostMinor: 6840, taxable: true }, { kind: 'labour', quantity: 0.95, unitCostMinor: 6500, taxable: false }], markupPercent: { material: 30, hardware: 20 }, discount: { kind: 'percent', percent: 5 }, taxPercent: 8.25, depositPercent: 50 };
-    const paths: string[][] = [['lines', '0', 'quantity'], ['lines', '0', 'unitCostMinor'], ['lines', '1', 'quantity'], ['markupPercent', 'material'], ['markupPercent', 'hardware'], ['discount', 'percent'], ['taxPercent'], ['depositPercent']];
+    const base = {
+      currency: 'USD',
+      lines: [
+        { kind: 'material', quantity: 3, unitCostMinor: 6840, taxable: true },
+        { kind: 'labour', quantity: 0.95, unitCostMinor: 6500, taxable: false },
+      ],
+      markupPercent: { material: 30, hardware: 20 },
+      discount: { kind: 'percent', percent: 5 },
+      taxPercent: 8.25,
+      depositPercent: 50,
+    };
+    const paths: string[][] = [
+      ['lines', '0', 'quantity'],
+      ['lines', '0', 'unitCostMinor'],
+      ['lines', '1', 'quantity'],
+      ['markupPercent', 'material'],
+      ['markupPercent', 'hardware'],
+      ['discount', 'percent'],
+      ['taxPercent'],
+      ['depositPercent'],
+    ];
     fc.assert(
       fc.property(fc.array(fc.tuple(fc.constantFrom(...paths), anyNumber), { minLength: 1, maxLength: 3 }), (changes) => {
         const q = structuredClone(base) as Record<string, unknown>;
@@ -109,7 +175,10 @@ describe('no public function of lib/costing returns a silent wrong number (seede
           for (const k of path.slice(0, -1)) node = node[k] as Record<string, unknown>;
           node[path[path.length - 1]] = value;
         }
-        expectSaneOrRefused(() => quoteTotals(q as never), (t) => expect(t.depositMinor + t.balanceMinor).toBe(t.totalMinor));
+        expectSaneOrRefused(
+          () => quoteTotals(q as never),
+          (t) => expect(t.depositMinor + t.balanceMinor).toBe(t.totalMinor),
+        );
       }),
       { seed: SEED, numRuns: 1500 },
     );
@@ -122,8 +191,35 @@ describe('no public function of lib/costing returns a silent wrong number (seede
     ['a tax over 100 %', () => percentOf(100, 150, 'A sales tax', 'USD'), /over 100/],
     ['a percent with three decimals', () => percentOf(100, 33.333, 'A deposit', 'USD'), /at most 2 decimals/],
     ['an amount of a trillion dollars', () => formatMoney(1e14, 'USD'), /slipped digit/],
-    ['half a cut', () => labourLines({ cuts: 0.5, piecesHandled: 0, setupCards: 0, jointCorners: 0, drawerBoxes: 0, faceAreaMm2: 0 }, { minutesPerCut: 1, minutesPerPiece: 1, setupMinutesPerCard: 1, minutesPerJointCorner: 1, assemblyMinutesPerBox: 1, finishingMinutesPerM2: null }), /whole number/],
-    ['a discount above the subtotal', () => quoteTotals({ currency: 'USD', lines: [{ kind: 'other', quantity: 1, unitCostMinor: 100, taxable: false }], markupPercent: { material: 0, hardware: 0 }, discount: { kind: 'amount', minor: 101 }, taxPercent: 0, depositPercent: 50 }), /more than the subtotal/],
+    [
+      'half a cut',
+      () =>
+        labourLines(
+          { cuts: 0.5, piecesHandled: 0, setupCards: 0, jointCorners: 0, drawerBoxes: 0, faceAreaMm2: 0 },
+          {
+            minutesPerCut: 1,
+            minutesPerPiece: 1,
+            setupMinutesPerCard: 1,
+            minutesPerJointCorner: 1,
+            assemblyMinutesPerBox: 1,
+            finishingMinutesPerM2: null,
+          },
+        ),
+      /whole number/,
+    ],
+    [
+      'a discount above the subtotal',
+      () =>
+        quoteTotals({
+          currency: 'USD',
+          lines: [{ kind: 'other', quantity: 1, unitCostMinor: 100, taxable: false }],
+          markupPercent: { material: 0, hardware: 0 },
+          discount: { kind: 'amount', minor: 101 },
+          taxPercent: 0,
+          depositPercent: 50,
+        }),
+      /more than the subtotal/,
+    ],
     ['an unknown currency', () => formatMoney(100, 'XX1'), /three-letter/],
   ])('%s is refused, saying why', (_label, f, message) => {
     expect(f).toThrow(RangeError);

@@ -109,7 +109,8 @@ export function quoteTotals(input: QuoteTotalsInput): QuoteTotals {
   if (input.lines.length > 500) throw new RangeError(`A quote of ${input.lines.length} lines is over 500: split the job.`);
   const markups = input.markupPercent ?? ({} as never);
   const lines = input.lines.map((line, i): PricedLine => {
-    if (!line || !(LINE_KINDS as readonly string[]).includes(line.kind)) throw new RangeError(`Line ${i + 1} has no kind (material, hardware, labour or other).`);
+    if (!line || !(LINE_KINDS as readonly string[]).includes(line.kind))
+      throw new RangeError(`Line ${i + 1} has no kind (material, hardware, labour or other).`);
     const costMinor = lineCost(line.quantity, line.unitCostMinor, currency);
     const percent = line.kind === 'material' ? markups.material : line.kind === 'hardware' ? markups.hardware : 0;
     const markupMinor = markupOn(costMinor, percent, currency);
@@ -117,7 +118,11 @@ export function quoteTotals(input: QuoteTotalsInput): QuoteTotals {
     const q = quantityToThousandths(line.quantity);
     return { costMinor, markupMinor, priceMinor, unitPriceMinor: q === 0 ? 0 : divideRounded(priceMinor * 1000, q) };
   });
-  const subtotalMinor = assertMinor(lines.reduce((n, l) => n + l.priceMinor, 0), 'The subtotal', currency);
+  const subtotalMinor = assertMinor(
+    lines.reduce((n, l) => n + l.priceMinor, 0),
+    'The subtotal',
+    currency,
+  );
   const costMinor = lines.reduce((n, l) => n + l.costMinor, 0);
 
   const discount = input.discount ?? { kind: 'amount', minor: 0 };
@@ -138,5 +143,17 @@ export function quoteTotals(input: QuoteTotalsInput): QuoteTotals {
   const marginMinor = beforeTax - costMinor;
   const marginPercent = beforeTax === 0 ? null : divideRounded(marginMinor * 1000, beforeTax) / 10;
   if (!Number.isFinite(maxMinor(currency))) throw new RangeError('Unknown currency.');
-  return { lines, subtotalMinor, discountMinor, taxableMinor, taxMinor, totalMinor, depositMinor, balanceMinor, costMinor, marginMinor, marginPercent };
+  return {
+    lines,
+    subtotalMinor,
+    discountMinor,
+    taxableMinor,
+    taxMinor,
+    totalMinor,
+    depositMinor,
+    balanceMinor,
+    costMinor,
+    marginMinor,
+    marginPercent,
+  };
 }

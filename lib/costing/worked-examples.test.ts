@@ -2,7 +2,14 @@ import { describe, expect, test } from 'vitest';
 import { currencyDigits, depositAndBalance, formatMoney, labourLines, quoteTotals, toMinorUnits, type QuoteLineInput } from './index';
 
 // The shops below are invented; each table's arithmetic was checked by hand (lib/costing/RULES.md).
-const ALDER_RATES = { minutesPerCut: 0.75, minutesPerPiece: 2.5, setupMinutesPerCard: 20, minutesPerJointCorner: 1.5, assemblyMinutesPerBox: 12, finishingMinutesPerM2: 9 };
+const ALDER_RATES = {
+  minutesPerCut: 0.75,
+  minutesPerPiece: 2.5,
+  setupMinutesPerCard: 20,
+  minutesPerJointCorner: 1.5,
+  assemblyMinutesPerBox: 12,
+  finishingMinutesPerM2: 9,
+};
 const ALDER_JOB = { cuts: 46, piecesHandled: 9, setupCards: 2, jointCorners: 16, drawerBoxes: 4, faceAreaMm2: 6_437_000 };
 
 describe('RULES.md worked example 1 — Alder & Finch Joinery (invented), arithmetic checked by hand', () => {
@@ -33,7 +40,14 @@ describe('RULES.md worked example 1 — Alder & Finch Joinery (invented), arithm
       { kind: 'labour', quantity: 0.8, unitCostMinor: 5500, taxable: false },
       { kind: 'labour', quantity: 0.97, unitCostMinor: 4800, taxable: false },
     ];
-    const t = quoteTotals({ currency: 'USD', lines, markupPercent: { material: 30, hardware: 20 }, discount: { kind: 'percent', percent: 5 }, taxPercent: 8.25, depositPercent: 50 });
+    const t = quoteTotals({
+      currency: 'USD',
+      lines,
+      markupPercent: { material: 30, hardware: 20 },
+      discount: { kind: 'percent', percent: 5 },
+      taxPercent: 8.25,
+      depositPercent: 50,
+    });
     expect(t.lines.map((l) => [l.costMinor, l.markupMinor, l.priceMinor])).toEqual([
       [20520, 6156, 26676],
       [937, 281, 1218],
@@ -46,7 +60,18 @@ describe('RULES.md worked example 1 — Alder & Finch Joinery (invented), arithm
       [4656, 0, 4656],
     ]);
     expect(t.lines[0].unitPriceMinor).toBe(8892);
-    expect(t).toMatchObject({ subtotalMinor: 64038, discountMinor: 3202, taxableMinor: 39048, taxMinor: 3221, totalMinor: 64057, depositMinor: 32029, balanceMinor: 32028, costMinor: 55131, marginMinor: 5705, marginPercent: 9.4 });
+    expect(t).toMatchObject({
+      subtotalMinor: 64038,
+      discountMinor: 3202,
+      taxableMinor: 39048,
+      taxMinor: 3221,
+      totalMinor: 64057,
+      depositMinor: 32029,
+      balanceMinor: 32028,
+      costMinor: 55131,
+      marginMinor: 5705,
+      marginPercent: 9.4,
+    });
     expect(formatMoney(t.totalMinor, 'USD')).toBe('$640.57');
   });
 });
@@ -71,7 +96,15 @@ describe('RULES.md worked example 2 — Kōbō Hinoki (invented), JPY without ce
       taxPercent: 10,
       depositPercent: 30,
     });
-    expect(t).toMatchObject({ subtotalMinor: 30610, discountMinor: 610, taxableMinor: 30000, taxMinor: 3000, totalMinor: 33000, depositMinor: 9900, balanceMinor: 23100 });
+    expect(t).toMatchObject({
+      subtotalMinor: 30610,
+      discountMinor: 610,
+      taxableMinor: 30000,
+      taxMinor: 3000,
+      totalMinor: 33000,
+      depositMinor: 9900,
+      balanceMinor: 23100,
+    });
     expect(formatMoney(t.totalMinor, 'JPY')).toBe('¥33,000');
   });
 });

@@ -46,4 +46,14 @@ export function looksLikeHeader(row: readonly string[]): boolean {
 }
 
 /** The mapping a file without a header most likely has: the template's column order. */
-export const TEMPLATE_COLUMNS: readonly CutListField[] = ['label', 'quantity', 'length', 'width', 'thickness', 'material', 'grain', 'jointAllowance', 'notes'];
+export const TEMPLATE_COLUMNS: readonly CutListField[] = [
+  'label',
+  'quantity',
+  'length',
+  'width',
+  'thickness',
+  'material',
+  'grain',
+  'jointAllowance',
+  'notes',
+];

@@ -11,14 +11,34 @@ import { validateUploadRows } from './validate-rows';
 const IMPERIAL: ShopUnits = { system: 'imperial', precision: 16, feet: false };
 const METRIC: ShopUnits = { system: 'metric', precision: 1, feet: false };
 const part = (over: Partial<ExportPart> = {}): ExportPart => ({
-  label: 'Drawer side', quantity: 8, lengthMm: inches(19.75), widthMm: inches(5.5), thicknessMm: inches(0.5), material: 'Baltic birch', grain: 'along-length', jointAllowanceMm: 0, notes: '', ...over,
+  label: 'Drawer side',
+  quantity: 8,
+  lengthMm: inches(19.75),
+  widthMm: inches(5.5),
+  thicknessMm: inches(0.5),
+  material: 'Baltic birch',
+  grain: 'along-length',
+  jointAllowanceMm: 0,
+  notes: '',
+  ...over,
 });
 const cells = (csv: string) => Papa.parse<string[]>(csv.trim()).data;
 
 describe('exporting the cut list to CSV', () => {
   test('lengths are in the shop’s unit with plain quotes, one row per part, with the header words the upload reads', () => {
     const rows = cells(cutListCsv([part({ schedule: 'Kitchen drawers', jointAllowanceMm: inches(0.25) })], IMPERIAL));
-    expect(rows[0]).toEqual(['Part', 'Quantity', 'Length (in)', 'Width (in)', 'Thickness (in)', 'Material', 'Grain', 'Joint allowance (in)', 'Notes', 'Drawer schedule']);
+    expect(rows[0]).toEqual([
+      'Part',
+      'Quantity',
+      'Length (in)',
+      'Width (in)',
+      'Thickness (in)',
+      'Material',
+      'Grain',
+      'Joint allowance (in)',
+      'Notes',
+      'Drawer schedule',
+    ]);
     expect(rows[1]).toEqual(['Drawer side', '8', '19-3/4"', '5-1/2"', '1/2"', 'Baltic birch', 'along', '1/4"', '', 'Kitchen drawers']);
   });
 
@@ -38,18 +58,13 @@ describe('exporting the cut list to CSV', () => {
   });
 
   // OWASP, "CSV Injection": cells starting with = + - @ tab or carriage return are prefixed with a single quote.
-  test.each([
-    ['=HYPERLINK("http://example.invalid")'],
-    ['+1+1'],
-    ['-2+3'],
-    ['@SUM(A1:A2)'],
-    ['\t=1+1'],
-    ['\r=1+1'],
-    ['=1+1\nsecond line'],
-  ])('a cell %j is neutralised with a leading quote (OWASP CSV Injection)', (evil) => {
-    const rows = cells(cutListCsv([part({ label: evil, notes: evil, material: evil })], METRIC));
-    for (const value of [rows[1][0], rows[1][5], rows[1][8]]) expect(value).toBe(`'${evil}`);
-  });
+  test.each([['=HYPERLINK("http://example.invalid")'], ['+1+1'], ['-2+3'], ['@SUM(A1:A2)'], ['\t=1+1'], ['\r=1+1'], ['=1+1\nsecond line']])(
+    'a cell %j is neutralised with a leading quote (OWASP CSV Injection)',
+    (evil) => {
+      const rows = cells(cutListCsv([part({ label: evil, notes: evil, material: evil })], METRIC));
+      for (const value of [rows[1][0], rows[1][5], rows[1][8]]) expect(value).toBe(`'${evil}`);
+    },
+  );
 
   test('harmless text that merely contains = or - is left alone', () => {
     const rows = cells(cutListCsv([part({ label: 'Side A-B', notes: 'x=2' })], METRIC));
@@ -62,7 +77,9 @@ describe('exporting the cut list to CSV', () => {
       fc.property(
         fc.array(
           fc.record({
-            label: fc.string({ minLength: 1, maxLength: 20 }).filter((s) => s.trim() === s && s.length > 0 && !/^[=+\-@\t\r]/.test(s) && !/[\u0000-\u001F\u007F]/.test(s)),
+            label: fc
+              .string({ minLength: 1, maxLength: 20 })
+              .filter((s) => s.trim() === s && s.length > 0 && !/^[=+\-@\t\r]/.test(s) && !/[\u0000-\u001F\u007F]/.test(s)),
             quantity: fc.integer({ min: 1, max: 50 }),
             lengthMm: fc.integer({ min: 20, max: 2400 }),
             widthMm: fc.integer({ min: 20, max: 1200 }),
@@ -72,7 +89,10 @@ describe('exporting the cut list to CSV', () => {
           { minLength: 1, maxLength: 8 },
         ),
         (parts) => {
-          const csv = cutListCsv(parts.map((p) => part({ ...p, material: 'MDF' })), METRIC);
+          const csv = cutListCsv(
+            parts.map((p) => part({ ...p, material: 'MDF' })),
+            METRIC,
+          );
           const grid = cells(csv);
           const upload = toUploadRows(grid, guessMapping(grid[0]), { hasHeader: true });
           const report = validateUploadRows({ ...upload, unit: 'mm' });

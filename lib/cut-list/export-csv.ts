@@ -42,7 +42,18 @@ export function csvLength(mm: number, units: ShopUnits): string {
 export function cutListCsv(parts: readonly ExportPart[], units: ShopUnits): string {
   const unit = units.system === 'imperial' ? 'in' : 'mm';
   const len = (mm: number) => csvLength(mm, units);
-  const fields = ['Part', 'Quantity', `Length (${unit})`, `Width (${unit})`, `Thickness (${unit})`, 'Material', 'Grain', `Joint allowance (${unit})`, 'Notes', 'Drawer schedule'];
+  const fields = [
+    'Part',
+    'Quantity',
+    `Length (${unit})`,
+    `Width (${unit})`,
+    `Thickness (${unit})`,
+    'Material',
+    'Grain',
+    `Joint allowance (${unit})`,
+    'Notes',
+    'Drawer schedule',
+  ];
   const data = parts.map((p) => [
     p.label,
     p.quantity,

@@ -14,7 +14,12 @@ describe('what an import says', () => {
   });
 
   test('counts and lists read as a person writes them', () => {
-    expect([countOf(1, 'size'), countOf(0, 'size'), countOf(1200, 'row'), countOf(2, 'box', 'boxes')]).toEqual(['1 size', '0 sizes', '1,200 rows', '2 boxes']);
+    expect([countOf(1, 'size'), countOf(0, 'size'), countOf(1200, 'row'), countOf(2, 'box', 'boxes')]).toEqual([
+      '1 size',
+      '0 sizes',
+      '1,200 rows',
+      '2 boxes',
+    ]);
     expect([listed([]), listed([3]), listed([3, 4]), listed(['a', 'b', 'c'])]).toEqual(['', '3', '3 and 4', 'a, b and c']);
   });
 });

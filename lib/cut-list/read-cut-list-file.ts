@@ -16,7 +16,10 @@ export async function readCutListFile(file: { name: string; bytes: ArrayBuffer }
   const ext = UPLOAD_EXTENSIONS.find((e) => name.endsWith(e));
   if (!ext) return { ok: false, error: `“${file.name}” is not a CSV or Excel (.xlsx) file. Save the sheet as CSV or .xlsx and try again.` };
   if (file.bytes.byteLength > UPLOAD_LIMITS.maxFileBytes)
-    return { ok: false, error: `“${file.name}” is ${kib(file.bytes.byteLength)}; the limit is ${kib(UPLOAD_LIMITS.maxFileBytes)}. Split it into smaller files.` };
+    return {
+      ok: false,
+      error: `“${file.name}” is ${kib(file.bytes.byteLength)}; the limit is ${kib(UPLOAD_LIMITS.maxFileBytes)}. Split it into smaller files.`,
+    };
   if (file.bytes.byteLength === 0) return { ok: false, error: `“${file.name}” is empty.` };
 
   const read = ext === '.xlsx' ? await readXlsx(file.bytes) : readText(file.bytes);
@@ -24,10 +27,16 @@ export async function readCutListFile(file: { name: string; bytes: ArrayBuffer }
   const { grid } = read;
   if (grid.length === 0) return { ok: false, error: `“${file.name}” has no rows.` };
   if (grid.length > UPLOAD_LIMITS.maxRows + 1)
-    return { ok: false, error: `“${file.name}” has ${grid.length.toLocaleString('en-US')} rows; the limit is ${UPLOAD_LIMITS.maxRows.toLocaleString('en-US')} rows (plus a header). Split it into smaller files.` };
+    return {
+      ok: false,
+      error: `“${file.name}” has ${grid.length.toLocaleString('en-US')} rows; the limit is ${UPLOAD_LIMITS.maxRows.toLocaleString('en-US')} rows (plus a header). Split it into smaller files.`,
+    };
   const widest = Math.max(...grid.map((r) => r.length));
   if (widest > UPLOAD_LIMITS.maxColumns)
-    return { ok: false, error: `“${file.name}” has ${widest} columns; the limit is ${UPLOAD_LIMITS.maxColumns}. Remove the columns the cut list does not need.` };
+    return {
+      ok: false,
+      error: `“${file.name}” has ${widest} columns; the limit is ${UPLOAD_LIMITS.maxColumns}. Remove the columns the cut list does not need.`,
+    };
   return { ok: true, grid };
 }
 

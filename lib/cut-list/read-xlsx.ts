@@ -8,7 +8,9 @@ export async function readXlsx(bytes: ArrayBuffer): Promise<{ ok: true; grid: st
   if (!guard.ok) return { ok: false, error: guard.error };
   try {
     const rows = await readSheet(bytes);
-    const grid = rows.map((row) => row.map((cell) => (cell === null || cell === undefined ? '' : cell instanceof Date ? cell.toISOString().slice(0, 10) : String(cell))));
+    const grid = rows.map((row) =>
+      row.map((cell) => (cell === null || cell === undefined ? '' : cell instanceof Date ? cell.toISOString().slice(0, 10) : String(cell))),
+    );
     while (grid.length && grid[grid.length - 1].every((c) => c.trim() === '')) grid.pop();
     return { ok: true, grid };
   } catch (e) {

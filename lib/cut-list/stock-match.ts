@@ -105,16 +105,22 @@ export function toStockOffers(
 ): StockOffer[] {
   const all: StockOffer[] = [
     ...items.map((i) => ({ material: i.material, kind: i.kind, thicknessMm: i.thicknessMm, nominal: i.nominalThickness })),
-    ...offcuts.filter((o) => o.status === 'available').map((o) => ({ material: o.material, kind: 'offcut' as const, thicknessMm: o.thicknessMm, nominal: '' })),
+    ...offcuts
+      .filter((o) => o.status === 'available')
+      .map((o) => ({ material: o.material, kind: 'offcut' as const, thicknessMm: o.thicknessMm, nominal: '' })),
   ];
   // One offer per material, kind and thickness: a picker lists each once.
   const seen = new Map<string, StockOffer>();
-  for (const o of all) seen.set(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`, seen.get(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`) ?? o);
+  for (const o of all)
+    seen.set(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`, seen.get(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`) ?? o);
   return [...seen.values()];
 }
 
 /** Uploaded thicknesses written as the nominal ("3/4") become the stock's actual thickness, as in the editor. */
 export function snapReport(report: UploadReport, offers: readonly StockOffer[]): UploadReport {
-  const snap = <T extends { part: { material: string; thicknessMm: number } }>(r: T): T => ({ ...r, part: { ...r.part, thicknessMm: snapThickness(r.part.material, r.part.thicknessMm, offers) } });
+  const snap = <T extends { part: { material: string; thicknessMm: number } }>(r: T): T => ({
+    ...r,
+    part: { ...r.part, thicknessMm: snapThickness(r.part.material, r.part.thicknessMm, offers) },
+  });
   return { ...report, valid: report.valid.map(snap), rows: report.rows.map((r) => (r.ok ? snap(r) : r)) };
 }

@@ -28,7 +28,7 @@ describe('cut list totals', () => {
     );
     expect(t).toMatchObject({ pieces: 6, rows: 2, solidPieces: 2 });
     expect(t.areaMm2).toBeCloseTo(4 * 1000 * 500 + 2 * inches(24) * inches(6), 6);
-    expect(t.boardFeet).toBeCloseTo(2 * (1 * 6 * 2) / 12, 12); // T(in) × W(in) × L(ft) / 12 per piece
+    expect(t.boardFeet).toBeCloseTo((2 * (1 * 6 * 2)) / 12, 12); // T(in) × W(in) × L(ft) / 12 per piece
   });
 });
 

@@ -60,7 +60,9 @@ describe('reading a good file', () => {
     const { report, guess } = await pipeline('vanity.xlsx', fixture('vanity-metric.xlsx'));
     expect(guess.unit).toBe('mm');
     expect(report.invalidCount).toBe(0);
-    expect(report.valid.map((v) => [v.line, v.part.label, v.part.quantity, v.part.lengthMm, v.part.widthMm, v.part.thicknessMm, v.part.grain])).toEqual([
+    expect(
+      report.valid.map((v) => [v.line, v.part.label, v.part.quantity, v.part.lengthMm, v.part.widthMm, v.part.thicknessMm, v.part.grain]),
+    ).toEqual([
       [2, 'Side', 2, 720, 560, 18, 'along-length'],
       [3, 'Shelf', 1, 764, 540, 18, 'any'],
       [4, 'Top rail', 1, 764, 100, 18, 'along-length'],
@@ -78,7 +80,10 @@ describe('reading a good file', () => {
   });
 
   test('blank rows are skipped and counted, and line numbers still point at the file', async () => {
-    const { upload } = await pipeline('gaps.csv', bytes('Part,Qty,Length,Width,Thickness,Material\n\nShelf,1,600,300,18,MDF\n,,,,,\nTop,1,600,300,18,MDF\n'));
+    const { upload } = await pipeline(
+      'gaps.csv',
+      bytes('Part,Qty,Length,Width,Thickness,Material\n\nShelf,1,600,300,18,MDF\n,,,,,\nTop,1,600,300,18,MDF\n'),
+    );
     expect(upload.blankRows).toBe(2);
     expect(upload.rows.map((r) => r.line)).toEqual([3, 5]);
   });
@@ -99,7 +104,12 @@ describe('every kind of bad row is listed with its reason, and good rows still r
     ['a missing material', 'Shelf,1,600,300,18,,,', 'material', 'Material is empty.'],
     ['an unknown grain word', 'Shelf,1,600,300,18,MDF,sideways,', 'grain', 'Grain “sideways” is not understood'],
     ['a joint allowance longer than the part', 'Shelf,1,600,300,18,MDF,,700', 'jointAllowance', 'must be shorter than the length'],
-    ['a cell over the length limit', `${'x'.repeat(UPLOAD_LIMITS.maxCellLength + 1)},1,600,300,18,MDF,,`, 'label', `the limit is ${UPLOAD_LIMITS.maxCellLength}`],
+    [
+      'a cell over the length limit',
+      `${'x'.repeat(UPLOAD_LIMITS.maxCellLength + 1)},1,600,300,18,MDF,,`,
+      'label',
+      `the limit is ${UPLOAD_LIMITS.maxCellLength}`,
+    ],
     ['a control character', 'Shel\u0007f,1,600,300,18,MDF,,', 'label', 'control characters'],
     ['a size slipped by a unit (600 m)', 'Shelf,1,600 m,300,18,MDF,,', 'length', 'Length “600 m”:'],
   ])('%s (common practice, no source)', async (_what, row, field, message) => {
@@ -133,7 +143,11 @@ describe('malicious cells', () => {
       ['=HYPERLINK("http://example.invalid","x")', '1', '600', '300', '18', '@SUM(A1)', '<script>alert(1)</script>'],
     ]);
     const { report } = await pipeline('evil.csv', bytes(csv), 'mm');
-    expect(report.valid[0].part).toMatchObject({ label: '=HYPERLINK("http://example.invalid","x")', material: '@SUM(A1)', notes: '<script>alert(1)</script>' });
+    expect(report.valid[0].part).toMatchObject({
+      label: '=HYPERLINK("http://example.invalid","x")',
+      material: '@SUM(A1)',
+      notes: '<script>alert(1)</script>',
+    });
   });
 });
 
@@ -157,7 +171,12 @@ describe('refused files', () => {
     ['binary posing as CSV', 'sneaky.csv', new Uint8Array([80, 0, 1, 2]).buffer as ArrayBuffer, 'binary data'],
     ['invalid UTF-8', 'latin1.csv', new Uint8Array([0x50, 0xe9, 0x0a]).buffer as ArrayBuffer, 'not UTF-8'],
     ['a CSV named .xlsx', 'fake.xlsx', bytes('Part,Qty\n'), 'could not be read as an Excel workbook'],
-    ['too many columns', 'wide.csv', bytes(Array.from({ length: UPLOAD_LIMITS.maxColumns + 1 }, (_, i) => `c${i}`).join(',')), 'columns; the limit is'],
+    [
+      'too many columns',
+      'wide.csv',
+      bytes(Array.from({ length: UPLOAD_LIMITS.maxColumns + 1 }, (_, i) => `c${i}`).join(',')),
+      'columns; the limit is',
+    ],
   ])('%s is refused with a clear reason', async (_what, name, data, message) => {
     const read = await readCutListFile({ name, bytes: data });
     expect(read.ok).toBe(false);
@@ -167,9 +186,18 @@ describe('refused files', () => {
 
 describe('column mapping and unit detection', () => {
   test.each([
-    [['Part name', 'QTY', 'Length (in)', 'Width (in)', 'Thk', 'Species', 'Grain direction', 'Comments'], ['label', 'quantity', 'length', 'width', 'thickness', 'material', 'grain', 'notes']],
-    [['Description', 'Pcs', 'L', 'W', 'T', 'Stock', 'Colour'], ['label', 'quantity', 'length', 'width', 'thickness', 'material', null]],
-    [['Name', 'Name', 'Qty'], ['label', null, 'quantity']],
+    [
+      ['Part name', 'QTY', 'Length (in)', 'Width (in)', 'Thk', 'Species', 'Grain direction', 'Comments'],
+      ['label', 'quantity', 'length', 'width', 'thickness', 'material', 'grain', 'notes'],
+    ],
+    [
+      ['Description', 'Pcs', 'L', 'W', 'T', 'Stock', 'Colour'],
+      ['label', 'quantity', 'length', 'width', 'thickness', 'material', null],
+    ],
+    [
+      ['Name', 'Name', 'Qty'],
+      ['label', null, 'quantity'],
+    ],
   ])('headers %j map to %j (common practice, no source)', (header, expected) => {
     expect(guessMapping(header)).toEqual(expected);
   });
@@ -194,13 +222,17 @@ describe('properties', () => {
   test('no row is ever lost: every uploaded row comes back either as a part or with at least one problem', () => {
     const cellArb = fc.oneof(fc.string({ maxLength: 12 }), fc.constantFrom('600', '3/4', '18', 'MDF', '1', '', '=1+1', '19-3/4"'));
     fc.assert(
-      fc.property(fc.array(fc.array(cellArb, { minLength: 6, maxLength: 6 }), { minLength: 1, maxLength: 30 }), fc.constantFrom('in', 'mm'), (cells, unit) => {
-        const rows = cells.map((c, i) => ({ line: i + 2, cells: c }));
-        const report = validateUploadRows({ columns: ['label', 'quantity', 'length', 'width', 'thickness', 'material'], rows, unit });
-        expect(report.rows.map((r) => r.line)).toEqual(rows.map((r) => r.line));
-        for (const r of report.rows) if (!r.ok) expect(r.problems.length).toBeGreaterThan(0);
-        expect(report.valid.length + report.invalidCount).toBe(rows.length);
-      }),
+      fc.property(
+        fc.array(fc.array(cellArb, { minLength: 6, maxLength: 6 }), { minLength: 1, maxLength: 30 }),
+        fc.constantFrom('in', 'mm'),
+        (cells, unit) => {
+          const rows = cells.map((c, i) => ({ line: i + 2, cells: c }));
+          const report = validateUploadRows({ columns: ['label', 'quantity', 'length', 'width', 'thickness', 'material'], rows, unit });
+          expect(report.rows.map((r) => r.line)).toEqual(rows.map((r) => r.line));
+          for (const r of report.rows) if (!r.ok) expect(r.problems.length).toBeGreaterThan(0);
+          expect(report.valid.length + report.invalidCount).toBe(rows.length);
+        },
+      ),
     );
   });
 });

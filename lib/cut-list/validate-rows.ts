@@ -21,10 +21,30 @@ export interface UploadReport {
 export const MIN_PART_THICKNESS_MM = 1;
 
 const GRAIN_WORDS: Record<string, GrainRule> = {
-  '': 'along-length', along: 'along-length', 'along length': 'along-length', 'along-length': 'along-length', length: 'along-length',
-  lengthwise: 'along-length', yes: 'along-length', y: 'along-length', true: 'along-length', '1': 'along-length', grain: 'along-length',
-  l: 'along-length', fixed: 'along-length',
-  any: 'any', either: 'any', 'either way': 'any', none: 'any', no: 'any', n: 'any', false: 'any', '0': 'any', free: 'any', rotate: 'any', 'no grain': 'any',
+  '': 'along-length',
+  along: 'along-length',
+  'along length': 'along-length',
+  'along-length': 'along-length',
+  length: 'along-length',
+  lengthwise: 'along-length',
+  yes: 'along-length',
+  y: 'along-length',
+  true: 'along-length',
+  '1': 'along-length',
+  grain: 'along-length',
+  l: 'along-length',
+  fixed: 'along-length',
+  any: 'any',
+  either: 'any',
+  'either way': 'any',
+  none: 'any',
+  no: 'any',
+  n: 'any',
+  false: 'any',
+  '0': 'any',
+  free: 'any',
+  rotate: 'any',
+  'no grain': 'any',
 };
 
 // Control characters other than tab, newline and carriage return never belong in a cut list cell.
@@ -43,7 +63,8 @@ function validateRow(line: number, columns: readonly CutListField[], cells: read
   columns.forEach((field, i) => {
     const value = (cells[i] ?? '').trim();
     const label = CUT_LIST_FIELD_LABELS[field];
-    if (value.length > UPLOAD_LIMITS.maxCellLength) problems.push({ field, message: `${label} is ${value.length} characters long; the limit is ${UPLOAD_LIMITS.maxCellLength}.` });
+    if (value.length > UPLOAD_LIMITS.maxCellLength)
+      problems.push({ field, message: `${label} is ${value.length} characters long; the limit is ${UPLOAD_LIMITS.maxCellLength}.` });
     else if (CONTROL.test(value)) problems.push({ field, message: `${label} contains control characters.` });
     else raw[field] = value;
   });
@@ -73,7 +94,10 @@ function validateRow(line: number, columns: readonly CutListField[], cells: read
   const widthMm = length('width', need('width'));
   const thicknessMm = length('thickness', need('thickness'));
   if (thicknessMm !== undefined && thicknessMm < MIN_PART_THICKNESS_MM)
-    problems.push({ field: 'thickness', message: `Thickness “${raw.thickness}” reads as ${thicknessMm} mm — thinner than any stock. If it is inches, choose inches or write ${raw.thickness}″.` });
+    problems.push({
+      field: 'thickness',
+      message: `Thickness “${raw.thickness}” reads as ${thicknessMm} mm — thinner than any stock. If it is inches, choose inches or write ${raw.thickness}″.`,
+    });
   const material = need('material');
 
   let grain: GrainRule = 'along-length';
@@ -89,7 +113,17 @@ function validateRow(line: number, columns: readonly CutListField[], cells: read
   if (problems.length) return { line, ok: false, problems };
 
   // The same schema the editor and API use decides the rest (name length, quantity range, size range).
-  const parsed = partInputSchema.safeParse({ label, quantity, lengthMm, widthMm, thicknessMm, material, grain, jointAllowanceMm, notes: raw.notes ?? '' });
+  const parsed = partInputSchema.safeParse({
+    label,
+    quantity,
+    lengthMm,
+    widthMm,
+    thicknessMm,
+    material,
+    grain,
+    jointAllowanceMm,
+    notes: raw.notes ?? '',
+  });
   if (parsed.success) return { line, ok: true, part: parsed.data };
   return {
     line,
@@ -99,6 +133,14 @@ function validateRow(line: number, columns: readonly CutListField[], cells: read
 }
 
 const COLUMN_OF: Record<string, CutListField> = {
-  label: 'label', quantity: 'quantity', lengthMm: 'length', widthMm: 'width', thicknessMm: 'thickness', material: 'material', grain: 'grain', jointAllowanceMm: 'jointAllowance', notes: 'notes',
+  label: 'label',
+  quantity: 'quantity',
+  lengthMm: 'length',
+  widthMm: 'width',
+  thicknessMm: 'thickness',
+  material: 'material',
+  grain: 'grain',
+  jointAllowanceMm: 'jointAllowance',
+  notes: 'notes',
 };
 const schemaFieldToColumn = (key: string): CutListField | 'row' => COLUMN_OF[key] ?? 'row';

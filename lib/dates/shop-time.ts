@@ -31,7 +31,9 @@ function formatter(locale: string, zone: string, style: 'day' | 'date-time'): In
   if (!f) {
     // en-CA writes dates as YYYY-MM-DD.
     const options: Intl.DateTimeFormatOptions =
-      style === 'day' ? { timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit' } : { timeZone: zone, dateStyle: 'medium', timeStyle: 'short' };
+      style === 'day'
+        ? { timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit' }
+        : { timeZone: zone, dateStyle: 'medium', timeStyle: 'short' };
     f = new Intl.DateTimeFormat(locale, options);
     // Only formatters that were made (a zone the runtime knows) are kept; a few hundred zones at most.
     if (formatters.size >= 500) formatters.clear();

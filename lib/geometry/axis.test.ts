@@ -20,13 +20,18 @@ describe('axis views of a rect', () => {
 
   test('a rect sliced at any point into two spans keeps its extent minus the gap', () => {
     fc.assert(
-      fc.property(fc.constantFrom('x' as const, 'y' as const), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 5, noNaN: true }), (a, f, gap) => {
-        const cut = lowEdge(r, a) + f * extent(r, a);
-        const low = slice(r, a, lowEdge(r, a), cut);
-        const high = slice(r, a, Math.min(highEdge(r, a), cut + gap), highEdge(r, a));
-        expect(extent(low, a) + extent(high, a) + Math.min(gap, highEdge(r, a) - cut)).toBeCloseTo(extent(r, a), 9);
-        expect(extent(low, otherAxis(a))).toBe(extent(r, otherAxis(a)));
-      }),
+      fc.property(
+        fc.constantFrom('x' as const, 'y' as const),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.double({ min: 0, max: 5, noNaN: true }),
+        (a, f, gap) => {
+          const cut = lowEdge(r, a) + f * extent(r, a);
+          const low = slice(r, a, lowEdge(r, a), cut);
+          const high = slice(r, a, Math.min(highEdge(r, a), cut + gap), highEdge(r, a));
+          expect(extent(low, a) + extent(high, a) + Math.min(gap, highEdge(r, a) - cut)).toBeCloseTo(extent(r, a), 9);
+          expect(extent(low, otherAxis(a))).toBe(extent(r, otherAxis(a)));
+        },
+      ),
     );
   });
 

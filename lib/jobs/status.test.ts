@@ -31,7 +31,15 @@ describe('a job follows its plans', () => {
   });
 
   test('an archived job stays archived whatever its plans do; any other status follows them', () => {
-    const anyFacts = fc.record({ activePlans: fc.nat(3), donePlans: fc.nat(3), openRecuts: fc.nat(3), accepted: fc.boolean(), quoted: fc.boolean(), depositPaid: fc.boolean(), lastQuote: fc.constantFrom('declined' as const, 'expired' as const, null) });
+    const anyFacts = fc.record({
+      activePlans: fc.nat(3),
+      donePlans: fc.nat(3),
+      openRecuts: fc.nat(3),
+      accepted: fc.boolean(),
+      quoted: fc.boolean(),
+      depositPaid: fc.boolean(),
+      lastQuote: fc.constantFrom('declined' as const, 'expired' as const, null),
+    });
     fc.assert(
       fc.property(fc.constantFrom(...JOB_STATUSES), anyFacts, (current, f) => {
         expect(followPlans(current, f)).toBe(current === 'archived' ? 'archived' : statusFromPlans(f));

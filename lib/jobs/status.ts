@@ -80,7 +80,8 @@ export function manualStatusChoices(role: Role, current: JobStatus, facts: JobFa
 /** Null when the person may set `to` by hand; otherwise the reason, as a sentence. */
 export function refuseManualStatus(role: Role, current: JobStatus, to: JobStatus, facts: JobFacts): string | null {
   if (manualStatusChoices(role, current, facts).includes(to)) return null;
-  if (current === 'archived') return `An archived job is restored to ${JOB_STATUS_LABELS[statusFromPlans(facts)]}, what its plans say; only the owner can set another status by hand.`;
+  if (current === 'archived')
+    return `An archived job is restored to ${JOB_STATUS_LABELS[statusFromPlans(facts)]}, what its plans say; only the owner can set another status by hand.`;
   const label = JOB_STATUS_LABELS[current].toLowerCase();
   return `${/^[aeiou]/.test(label) ? 'An' : 'A'} ${label} job cannot be set to ${JOB_STATUS_LABELS[to]} by hand: ${WHY[to]}. Only the owner can override that.`;
 }

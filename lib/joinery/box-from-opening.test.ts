@@ -27,7 +27,10 @@ describe('box from the opening', () => {
 
   test('undermount slides take the maker’s height deduction', () => {
     const result = boxFromOpening(
-      parse({ size: { from: 'opening', widthMm: 500, heightMm: 200, depthMm: 560 }, slide: { type: 'undermount', heightDeductionMm: 25, widthDeductionMm: 16 } }),
+      parse({
+        size: { from: 'opening', widthMm: 500, heightMm: 200, depthMm: 560 },
+        slide: { type: 'undermount', heightDeductionMm: 25, widthDeductionMm: 16 },
+      }),
     );
     expect(result).toMatchObject({ ok: true, box: { widthMm: 484, heightMm: 175 } });
   });

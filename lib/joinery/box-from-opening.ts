@@ -61,11 +61,18 @@ type Model = NonNullable<Extract<DrawerSchedule['slide'], { type: 'undermount' }
 function clearanceWidth(slide: DrawerSchedule['slide'], openingWidth: Mm) {
   if (slide.type === 'undermount') {
     const widthMm = openingWidth - slide.widthDeductionMm;
-    return { widthMm, note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(slide.widthDeductionMm)} undermount deduction; check the slide maker's spec.` };
+    return {
+      widthMm,
+      note: (w: Mm) =>
+        `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(slide.widthDeductionMm)} undermount deduction; check the slide maker's spec.`,
+    };
   }
   const each = slide.sideClearanceMm;
   const name = slide.type === 'side-mount' ? `${slide.series} side-mount slide` : slide.type;
-  return { widthMm: openingWidth - 2 * each, note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − 2 × ${specText(each)} ${name} clearance.` };
+  return {
+    widthMm: openingWidth - 2 * each,
+    note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − 2 × ${specText(each)} ${name} clearance.`,
+  };
 }
 
 /**
@@ -74,13 +81,18 @@ function clearanceWidth(slide: DrawerSchedule['slide'], openingWidth: Mm) {
  */
 function modelWidth(model: Model, openingWidth: Mm, sideMm: Mm | undefined) {
   if (model.widthRule === 'outside') {
-    return { widthMm: openingWidth - model.widthDeductionMm, note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(model.widthDeductionMm)}, the ${model.name}'s outside-width rule.` };
+    return {
+      widthMm: openingWidth - model.widthDeductionMm,
+      note: (w: Mm) =>
+        `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(model.widthDeductionMm)}, the ${model.name}'s outside-width rule.`,
+    };
   }
   const side = sideMm ?? DRAWER_DEFAULTS.sideThickness;
   const inside = openingWidth - model.widthDeductionMm;
   return {
     widthMm: inside + 2 * side,
-    note: (w: Mm) => `Box ${mmText(w)} wide: inside ${mmText(inside)} = opening ${mmText(openingWidth)} − ${specText(model.widthDeductionMm)} (the ${model.name}'s inside-width rule), plus 2 × ${specText(side)} sides.`,
+    note: (w: Mm) =>
+      `Box ${mmText(w)} wide: inside ${mmText(inside)} = opening ${mmText(openingWidth)} − ${specText(model.widthDeductionMm)} (the ${model.name}'s inside-width rule), plus 2 × ${specText(side)} sides.`,
   };
 }
 
@@ -104,7 +116,9 @@ function modelDepth(model: Model, openingDepth: Mm): Result<{ depthMm: Mm; slide
     ok: true,
     depthMm: slideLengthMm,
     slideLengthMm,
-    notes: [`Box ${mmText(slideLengthMm)} long, as long as its slide: the longest ${model.name} that fits ${mmText(openingDepth)} less ${specText(model.rearClearanceMm)} rear clearance.`],
+    notes: [
+      `Box ${mmText(slideLengthMm)} long, as long as its slide: the longest ${model.name} that fits ${mmText(openingDepth)} less ${specText(model.rearClearanceMm)} rear clearance.`,
+    ],
   };
 }
 
@@ -112,23 +126,28 @@ function modelDepth(model: Model, openingDepth: Mm): Result<{ depthMm: Mm; slide
 function sizeErrors(size: DrawerSchedule['size']): FieldError[] {
   return (['widthMm', 'heightMm', 'depthMm'] as const)
     .filter((k) => Number.isFinite(size[k]) && size[k] < 0.5)
-    .map((k) => ({ path: `size.${k}`, message: `The ${size.from === 'box' ? 'box' : 'opening'} needs a size: ${size[k]} mm is under half a millimetre` }));
+    .map((k) => ({
+      path: `size.${k}`,
+      message: `The ${size.from === 'box' ? 'box' : 'opening'} needs a size: ${size[k]} mm is under half a millimetre`,
+    }));
 }
 
 /** One error per number in the sizes and slide that is not a length from 0 to 3 m (NaN, ±Infinity, negatives, absurd). */
 function lengthErrors(value: unknown, path = ''): FieldError[] {
   if (typeof value === 'number') {
     if (Number.isFinite(value) && value >= 0 && value <= MAX_SCHEDULE_LENGTH_MM) return [];
-    return [{ path, message: `${Number.isFinite(value) ? `${value} mm is` : 'That is'} not a length Kerfwise can size a drawer from (a finite number from 0 to ${MAX_SCHEDULE_LENGTH_MM / 1000} m)` }];
+    return [
+      {
+        path,
+        message: `${Number.isFinite(value) ? `${value} mm is` : 'That is'} not a length Kerfwise can size a drawer from (a finite number from 0 to ${MAX_SCHEDULE_LENGTH_MM / 1000} m)`,
+      },
+    ];
   }
   if (value && typeof value === 'object') return Object.entries(value).flatMap(([k, v]) => lengthErrors(v, path ? `${path}.${k}` : k));
   return [];
 }
 
-function boxDepth(
-  openingDepth: Mm,
-  rule: DepthRule,
-): Result<{ depthMm: Mm; slideLengthMm: Mm | null; notes: string[] }> {
+function boxDepth(openingDepth: Mm, rule: DepthRule): Result<{ depthMm: Mm; slideLengthMm: Mm | null; notes: string[] }> {
   switch (rule.rule) {
     case 'longest-standard-slide': {
       const room = openingDepth - rule.backClearanceMm;

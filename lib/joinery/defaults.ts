@@ -93,14 +93,18 @@ export const SLIDE_SERIES = {
 export function lockRabbetFaceLeft(frontMm: Mm): Mm {
   requireStock('front', frontMm);
   // ¼″ or thinner leaves no face at all: the ⅜″ cut would go through.
-  if (frontMm <= inches(1 / 4)) throw new RangeError(`A ${frontMm} mm front is too thin for a lock rabbet's starting rule (it needs more than ¼″, 6.35 mm): give the face left outright, or use thicker stock.`);
+  if (frontMm <= inches(1 / 4))
+    throw new RangeError(
+      `A ${frontMm} mm front is too thin for a lock rabbet's starting rule (it needs more than ¼″, 6.35 mm): give the face left outright, or use thicker stock.`,
+    );
   return settle(frontMm / 2 - inches(1 / 8));
 }
 export const lockRabbetFenceSetback = (stockMm: Mm): Mm => settle(requireStock('stock', stockMm) / 2 + inches(1 / 16));
 
 /** A stock thickness a rule can be figured for: finite, more than 0 and no more than 100 mm. */
 export function requireStock(what: string, mm: Mm): Mm {
-  if (typeof mm !== 'number' || !Number.isFinite(mm) || mm <= 0 || mm > 100) throw new RangeError(`The ${what} thickness must be a length from 0 to 100 mm (got ${String(mm)}).`);
+  if (typeof mm !== 'number' || !Number.isFinite(mm) || mm <= 0 || mm > 100)
+    throw new RangeError(`The ${what} thickness must be a length from 0 to 100 mm (got ${String(mm)}).`);
   return mm;
 }
 

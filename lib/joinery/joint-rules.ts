@@ -56,7 +56,8 @@ function checked(joint: Joint, t: BoxThickness) {
   requireStock('back', t.back);
   requireStock('side', t.side);
   for (const [key, value] of Object.entries(joint)) {
-    if (typeof value === 'number' && (!Number.isFinite(value) || value < 0 || value > 100)) throw new RangeError(`The joint's ${key} must be a length from 0 to 100 mm (got ${value}).`);
+    if (typeof value === 'number' && (!Number.isFinite(value) || value < 0 || value > 100))
+      throw new RangeError(`The joint's ${key} must be a length from 0 to 100 mm (got ${value}).`);
   }
 }
 
@@ -105,7 +106,10 @@ export function jointErrors(joint: Joint, t: BoxThickness, wallHeightMm: Mm): Fi
     case 'lock-rabbet':
       if (joint.faceLeftMm <= 0) push('faceLeftMm', 'The face left outside the tongue must be more than 0 mm, or the cut goes through the front');
       else if (joint.faceLeftMm >= thinnerPanel)
-        push('faceLeftMm', `The face left (${mmText(joint.faceLeftMm)}) must be less than the front/back thickness (${mmText(thinnerPanel)}), or the side's tongue has nothing to enter`);
+        push(
+          'faceLeftMm',
+          `The face left (${mmText(joint.faceLeftMm)}) must be less than the front/back thickness (${mmText(thinnerPanel)}), or the side's tongue has nothing to enter`,
+        );
       break;
     case 'rabbet-and-dado':
       if (joint.dadoDepthMm <= 0) push('dadoDepthMm', 'The dado depth must be more than 0 mm (for none, choose a butt joint)');
@@ -117,7 +121,10 @@ export function jointErrors(joint: Joint, t: BoxThickness, wallHeightMm: Mm): Fi
     case 'butt-loose-tenon': {
       const faceThickness = joint.layout === 'sides-full-depth' ? t.side : thinnerPanel;
       if (joint.mortiseDepthMm >= faceThickness)
-        push('mortiseDepthMm', `The mortise in the face (${mmText(joint.mortiseDepthMm)} deep) must be shallower than that part is thick (${mmText(faceThickness)})`);
+        push(
+          'mortiseDepthMm',
+          `The mortise in the face (${mmText(joint.mortiseDepthMm)} deep) must be shallower than that part is thick (${mmText(faceThickness)})`,
+        );
       const thinnest = Math.min(t.side, thinnerPanel);
       if (joint.tenonThicknessMm >= thinnest)
         push('tenonThicknessMm', `The tenon (${mmText(joint.tenonThicknessMm)}) must be thinner than the thinnest part (${mmText(thinnest)})`);
@@ -125,8 +132,7 @@ export function jointErrors(joint: Joint, t: BoxThickness, wallHeightMm: Mm): Fi
     }
     case 'half-blind-dovetail':
       if (joint.lapMm <= 0) push('lapMm', 'The lap must be more than 0 mm (for none, choose through dovetails)');
-      else if (joint.lapMm >= t.front)
-        push('lapMm', `The lap (${mmText(joint.lapMm)}) must be less than the front thickness (${mmText(t.front)})`);
+      else if (joint.lapMm >= t.front) push('lapMm', `The lap (${mmText(joint.lapMm)}) must be less than the front thickness (${mmText(t.front)})`);
       break;
     case 'box-joint':
       if (joint.fingerWidthMm > wallHeightMm)
@@ -143,13 +149,7 @@ export function jointErrors(joint: Joint, t: BoxThickness, wallHeightMm: Mm): Fi
  * What the saw or router must cut at the ends of a front, back or side for this joint. `setInMm` on the front
  * and back is how far the joint sits from the end (the side engagement plus any lip).
  */
-export function jointMachining(
-  joint: Joint,
-  role: 'front' | 'back' | 'side',
-  corners: JointCorners,
-  t: BoxThickness,
-  lipMm: Mm,
-): string[] {
+export function jointMachining(joint: Joint, role: 'front' | 'back' | 'side', corners: JointCorners, t: BoxThickness, lipMm: Mm): string[] {
   checked(joint, t);
   if (!Number.isFinite(lipMm) || lipMm < 0) throw new RangeError(`The lip must be zero or a positive length (got ${lipMm}).`);
   const panel = role === 'front' ? corners.front : corners.back;
@@ -161,9 +161,7 @@ export function jointMachining(
         ? [
             `Lock-rabbet tongue on both ends: enters the front ${mmText(corners.front.sideEngagementMm)} and the back ${mmText(corners.back.sideEngagementMm)}, leaving ${mmText(joint.faceLeftMm)} of their face outside.`,
           ]
-        : [
-            `Lock-rabbet groove in the inside face at both ends, set ${mmText(setIn)} from the end${lipText}; measured to the side thickness.`,
-          ];
+        : [`Lock-rabbet groove in the inside face at both ends, set ${mmText(setIn)} from the end${lipText}; measured to the side thickness.`];
     case 'rabbet-and-dado':
       return role === 'side'
         ? [
@@ -174,7 +172,9 @@ export function jointMachining(
           ];
     case 'butt-pocket-screw': {
       const drilled = joint.layout === 'sides-full-depth' ? role !== 'side' : role === 'side';
-      return drilled ? ['Pocket holes in the inside face at both ends; check the jig’s setting for this thickness.'] : ['Square ends; takes the pocket screws.'];
+      return drilled
+        ? ['Pocket holes in the inside face at both ends; check the jig’s setting for this thickness.']
+        : ['Square ends; takes the pocket screws.'];
     }
     case 'butt-loose-tenon': {
       const endGrain = joint.layout === 'sides-full-depth' ? role !== 'side' : role === 'side';
@@ -186,11 +186,11 @@ export function jointMachining(
     }
     case 'half-blind-dovetail':
       if (role === 'front')
-        return [`Half-blind dovetail sockets at both ends, ${mmText(t.side)} deep, set ${mmText(setIn)} from the end${lipText}, leaving a ${mmText(joint.lapMm)} lap.`];
+        return [
+          `Half-blind dovetail sockets at both ends, ${mmText(t.side)} deep, set ${mmText(setIn)} from the end${lipText}, leaving a ${mmText(joint.lapMm)} lap.`,
+        ];
       if (role === 'back') return [`Through-dovetail pins at both ends, ${mmText(t.side)} long.`];
-      return [
-        `Front end: half-blind tails ${mmText(corners.front.sideEngagementMm)} long. Back end: through tails ${mmText(t.back)} long.`,
-      ];
+      return [`Front end: half-blind tails ${mmText(corners.front.sideEngagementMm)} long. Back end: through tails ${mmText(t.back)} long.`];
     case 'through-dovetail':
       return role === 'side'
         ? [`Through tails at both ends: ${mmText(t.front)} long at the front, ${mmText(t.back)} at the back.`]

@@ -56,7 +56,10 @@ describe('lipped box fronts meet the opening with an overlay or a reveal', () =>
   });
 
   test('a box given by its size has no opening to lap: the lip must be given outright', () => {
-    const input = { ...onOpening({ style: 'lipped' }), size: { from: 'box', widthMm: inches(14), heightMm: inches(6), depthMm: inches(22) } } as const;
+    const input = {
+      ...onOpening({ style: 'lipped' }),
+      size: { from: 'box', widthMm: inches(14), heightMm: inches(6), depthMm: inches(22) },
+    } as const;
     expect(sizeDrawerSchedule(input)).toMatchObject({ ok: false, errors: [{ path: 'front.fit' }] });
     const lip = sized({ ...input, front: { style: 'lipped', fit: 'lip', lipMm: inches(1 / 2) } });
     expect(lip.face).toMatchObject({ opening: null, sideMarginMm: null });

@@ -11,21 +11,66 @@ import { sizeDrawerSchedule } from './size-drawer-schedule';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 
 const SEED = 20261202;
-const anyNumber = fc.oneof(fc.double(), fc.integer({ min: -5000, max: 5000 }), fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, -1, 0, 1e6, 1e308, 5e-324));
+const anyNumber = fc.oneof(
+  fc.double(),
+  fc.integer({ min: -5000, max: 5000 }),
+  fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, -1, 0, 1e6, 1e308, 5e-324),
+);
 
 /** An invented maker-style model (outside width = opening − 10 mm), so model schedules are in the mix. */
-const MODEL = { kind: 'undermount', name: 'Tessel T-16', lengthsMm: [250, 300, 400, 500], widthRule: 'outside', widthDeductionMm: 10, maxSideThicknessMm: 16, bottomRecessMm: 13, heightClearanceMm: 20, rearClearanceMm: 10 };
+const MODEL = {
+  kind: 'undermount',
+  name: 'Tessel T-16',
+  lengthsMm: [250, 300, 400, 500],
+  widthRule: 'outside',
+  widthDeductionMm: 10,
+  maxSideThicknessMm: 16,
+  bottomRecessMm: 13,
+  heightClearanceMm: 20,
+  rearClearanceMm: 10,
+};
 
 /** Schedules of every shape the form makes, each valid as written. */
 const TEMPLATES = [
-  { label: 'Metric bank', quantity: 3, size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 }, slide: { type: 'side-mount', series: 'metric' }, thickness: { frontMm: 18, sideMm: 12 }, front: { style: 'lipped', fit: 'reveal', revealMm: 1.5 } },
-  { label: 'Model bank', quantity: 2, size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 }, slide: { type: 'undermount', model: MODEL }, thickness: { frontMm: 16, sideMm: 16 }, front: { style: 'applied', fit: 'inset', revealMm: 1.5 } },
-  { label: 'Inch bank', quantity: 1, size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) }, thickness: { frontMm: inches(3 / 4), sideMm: inches(1 / 2) }, front: { style: 'lipped' }, joint: { method: 'half-blind-dovetail', lapMm: inches(3 / 16) } },
-  { label: 'Box size', quantity: 4, size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, joint: { method: 'rabbet-and-dado' }, bottom: { mount: 'applied', thicknessMm: 6 } },
+  {
+    label: 'Metric bank',
+    quantity: 3,
+    size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 },
+    slide: { type: 'side-mount', series: 'metric' },
+    thickness: { frontMm: 18, sideMm: 12 },
+    front: { style: 'lipped', fit: 'reveal', revealMm: 1.5 },
+  },
+  {
+    label: 'Model bank',
+    quantity: 2,
+    size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 },
+    slide: { type: 'undermount', model: MODEL },
+    thickness: { frontMm: 16, sideMm: 16 },
+    front: { style: 'applied', fit: 'inset', revealMm: 1.5 },
+  },
+  {
+    label: 'Inch bank',
+    quantity: 1,
+    size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) },
+    thickness: { frontMm: inches(3 / 4), sideMm: inches(1 / 2) },
+    front: { style: 'lipped' },
+    joint: { method: 'half-blind-dovetail', lapMm: inches(3 / 16) },
+  },
+  {
+    label: 'Box size',
+    quantity: 4,
+    size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 },
+    joint: { method: 'rabbet-and-dado' },
+    bottom: { mount: 'applied', thicknessMm: 6 },
+  },
 ];
 /** Every number in a template, by its path. */
 const numericPaths = (value: unknown, path: string[] = []): string[][] =>
-  typeof value === 'number' ? [path] : value && typeof value === 'object' ? Object.entries(value).flatMap(([k, v]) => numericPaths(v, [...path, k])) : [];
+  typeof value === 'number'
+    ? [path]
+    : value && typeof value === 'object'
+      ? Object.entries(value).flatMap(([k, v]) => numericPaths(v, [...path, k]))
+      : [];
 const withValue = (template: object, path: string[], value: unknown) => {
   const copy = structuredClone(template) as Record<string, unknown>;
   let node = copy;
@@ -73,13 +118,24 @@ describe('no public function of lib/joinery returns a silent wrong number (seede
   test('the rules and setup cards: finite values or a RangeError, for any thickness', () => {
     fc.assert(
       fc.property(anyNumber, anyNumber, anyNumber, (a, b, c) => {
-        expectSaneOrRefused(() => lockRabbetFaceLeft(a), (v) => expect(v).toBeGreaterThan(0));
-        expectSaneOrRefused(() => lockRabbetFenceSetback(a), (v) => expect(v).toBeGreaterThan(0));
+        expectSaneOrRefused(
+          () => lockRabbetFaceLeft(a),
+          (v) => expect(v).toBeGreaterThan(0),
+        );
+        expectSaneOrRefused(
+          () => lockRabbetFenceSetback(a),
+          (v) => expect(v).toBeGreaterThan(0),
+        );
         expectSaneOrRefused(() => lockRabbetCard(a));
         expectSaneOrRefused(() => defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: a }));
         expectSaneOrRefused(() => findSetupCard([], { joint: 'lock-rabbet', stockThicknessMm: a }));
-        expectSaneOrRefused(() => maxRouterSpeedRpm(a), (rpm) => expect(rpm === null || rpm >= 12_000).toBe(true));
-        expectSaneOrRefused(() => requiredSetupCards({ joint: { method: 'box-joint', fingerWidthMm: 6 }, thickness: { frontMm: a, backMm: b, sideMm: c } }));
+        expectSaneOrRefused(
+          () => maxRouterSpeedRpm(a),
+          (rpm) => expect(rpm === null || rpm >= 12_000).toBe(true),
+        );
+        expectSaneOrRefused(() =>
+          requiredSetupCards({ joint: { method: 'box-joint', fingerWidthMm: 6 }, thickness: { frontMm: a, backMm: b, sideMm: c } }),
+        );
         expectSaneOrRefused(() => jointCorners({ method: 'lock-rabbet', faceLeftMm: c }, { front: a, back: b, side: 12 }));
       }),
       { seed: SEED, numRuns: 1000 },
@@ -89,12 +145,42 @@ describe('no public function of lib/joinery returns a silent wrong number (seede
 
 describe('refusals named in the issue, each on its field', () => {
   test.each([
-    ['a drawer box over 3 m', { size: { from: 'box', widthMm: 3500, heightMm: 150, depthMm: 500 } }, 'size.widthMm', /over 3 m looks like a slipped unit/],
-    ['a lip of a kilometre', { size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, front: { style: 'lipped', fit: 'lip', lipMm: 1_000_000 } }, 'front.lipMm', /over 100 mm looks like a slipped unit/],
-    ['an infinite opening', { size: { from: 'opening', widthMm: Number.POSITIVE_INFINITY, heightMm: 150, depthMm: 500 } }, 'size.widthMm', /Opening width/],
-    ['a NaN side thickness', { size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, thickness: { sideMm: Number.NaN } }, 'thickness.sideMm', /Side thickness/],
-    ['a negative reveal', { size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 500 }, front: { style: 'lipped', fit: 'reveal', revealMm: -1 } }, 'front.revealMm', /cannot be negative/],
-    ['a lock-rabbet front too thin for the starting rule', { size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, thickness: { frontMm: 6, sideMm: 6 } }, 'joint.faceLeftMm', /too thin for a lock rabbet/],
+    [
+      'a drawer box over 3 m',
+      { size: { from: 'box', widthMm: 3500, heightMm: 150, depthMm: 500 } },
+      'size.widthMm',
+      /over 3 m looks like a slipped unit/,
+    ],
+    [
+      'a lip of a kilometre',
+      { size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, front: { style: 'lipped', fit: 'lip', lipMm: 1_000_000 } },
+      'front.lipMm',
+      /over 100 mm looks like a slipped unit/,
+    ],
+    [
+      'an infinite opening',
+      { size: { from: 'opening', widthMm: Number.POSITIVE_INFINITY, heightMm: 150, depthMm: 500 } },
+      'size.widthMm',
+      /Opening width/,
+    ],
+    [
+      'a NaN side thickness',
+      { size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, thickness: { sideMm: Number.NaN } },
+      'thickness.sideMm',
+      /Side thickness/,
+    ],
+    [
+      'a negative reveal',
+      { size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 500 }, front: { style: 'lipped', fit: 'reveal', revealMm: -1 } },
+      'front.revealMm',
+      /cannot be negative/,
+    ],
+    [
+      'a lock-rabbet front too thin for the starting rule',
+      { size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, thickness: { frontMm: 6, sideMm: 6 } },
+      'joint.faceLeftMm',
+      /too thin for a lock rabbet/,
+    ],
   ])('%s', (_label, over, path, message) => {
     const result = sizeDrawerSchedule({ label: 'Refused', quantity: 1, ...over });
     expect(result.ok).toBe(false);

@@ -15,7 +15,8 @@ export const ROUTER_TABLE_CAUTIONS: readonly string[] = [
 /** Highest speed for a router bit of this diameter [CP]; null above 3½″, where the bit maker must say. */
 export function maxRouterSpeedRpm(bitDiameterMm: Mm): number | null {
   // NaN would fall through every row and read as "past 3½″"; a negative diameter as the fastest speed.
-  if (typeof bitDiameterMm !== 'number' || !Number.isFinite(bitDiameterMm) || bitDiameterMm <= 0) throw new RangeError(`A bit diameter must be a positive length (got ${String(bitDiameterMm)}).`);
+  if (typeof bitDiameterMm !== 'number' || !Number.isFinite(bitDiameterMm) || bitDiameterMm <= 0)
+    throw new RangeError(`A bit diameter must be a positive length (got ${String(bitDiameterMm)}).`);
   const row = ROUTER_BIT_SPEEDS.find((r) => bitDiameterMm <= r.upToDiameterMm + 1e-9);
   return row ? row.maxRpm : null;
 }

@@ -15,7 +15,12 @@ describe('a schedule filled with few fields takes the trade defaults', () => {
   });
 
   test('a clearance given outright is kept whatever the series', () => {
-    const m = drawerScheduleSchema.parse({ label: 'M', quantity: 1, size: s.size, slide: { type: 'side-mount', series: 'metric', sideClearanceMm: 13 } }).slide;
+    const m = drawerScheduleSchema.parse({
+      label: 'M',
+      quantity: 1,
+      size: s.size,
+      slide: { type: 'side-mount', series: 'metric', sideClearanceMm: 13 },
+    }).slide;
     expect(m).toMatchObject({ sideClearanceMm: 13, heightClearanceMm: 12.5 });
   });
 
@@ -36,7 +41,10 @@ describe('a schedule filled with few fields takes the trade defaults', () => {
   });
 
   test('a face left given outright is kept whatever the front', () => {
-    expect(drawerScheduleSchema.parse({ label: 'L', quantity: 1, size: s.size, joint: { method: 'lock-rabbet', faceLeftMm: 2 } }).joint).toEqual({ method: 'lock-rabbet', faceLeftMm: 2 });
+    expect(drawerScheduleSchema.parse({ label: 'L', quantity: 1, size: s.size, joint: { method: 'lock-rabbet', faceLeftMm: 2 } }).joint).toEqual({
+      method: 'lock-rabbet',
+      faceLeftMm: 2,
+    });
   });
 
   test('a ¼″ plywood bottom in a ¼ × ¼″ groove ½″ up with 1/16″ clearance, grain free (common practice, no source)', () => {

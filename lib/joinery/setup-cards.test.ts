@@ -74,7 +74,9 @@ describe('the default card for stock the shop has no card for', () => {
   });
 
   test('the seeded starting cards cover ½″, ⅝″, ¾″ and 12, 15, 18 mm, thinnest first', () => {
-    expect(DEFAULT_LOCK_RABBET_CARDS.map((c) => c.stockThicknessMm)).toEqual([12, inches(1 / 2), 15, inches(5 / 8), 18, inches(3 / 4)].sort((a, b) => a - b));
+    expect(DEFAULT_LOCK_RABBET_CARDS.map((c) => c.stockThicknessMm)).toEqual(
+      [12, inches(1 / 2), 15, inches(5 / 8), 18, inches(3 / 4)].sort((a, b) => a - b),
+    );
   });
 });
 

@@ -13,7 +13,9 @@ export const SETUP_CARD_TOLERANCE_MM = 0.1;
 /** One card per joint and distinct stock thickness the schedule's joints are cut in, thinnest first. */
 export function requiredSetupCards(schedule: Pick<DrawerSchedule, 'joint' | 'thickness'>): SetupCardKey[] {
   const { frontMm, sideMm } = schedule.thickness;
-  const thicknesses = [requireStock('front', frontMm), requireStock('back', schedule.thickness.backMm ?? frontMm), requireStock('side', sideMm)].sort((a, b) => a - b);
+  const thicknesses = [requireStock('front', frontMm), requireStock('back', schedule.thickness.backMm ?? frontMm), requireStock('side', sideMm)].sort(
+    (a, b) => a - b,
+  );
   const distinct = thicknesses.filter((t, i) => i === 0 || t - thicknesses[i - 1] > SETUP_CARD_TOLERANCE_MM);
   return distinct.map((stockThicknessMm) => ({ joint: schedule.joint.method, stockThicknessMm }));
 }

@@ -19,7 +19,10 @@ const jointFor = (t: Thickness) => {
   return fc.oneof(
     len(0.5, panel - 0.5).map((faceLeftMm) => ({ method: 'lock-rabbet' as const, faceLeftMm })),
     fc.record({ method: fc.constant('rabbet-and-dado' as const), dadoDepthMm: len(0.5, t.side - 0.5), dadoWidthMm: len(1, panel - 0.5) }),
-    fc.record({ method: fc.constant('butt-pocket-screw' as const), layout: fc.constantFrom('sides-full-depth' as const, 'front-back-full-width' as const) }),
+    fc.record({
+      method: fc.constant('butt-pocket-screw' as const),
+      layout: fc.constantFrom('sides-full-depth' as const, 'front-back-full-width' as const),
+    }),
     fc.record({
       method: fc.constant('butt-loose-tenon' as const),
       layout: fc.constantFrom('sides-full-depth' as const, 'front-back-full-width' as const),
@@ -56,7 +59,9 @@ function tradeEngagement(joint: GenJoint, t: Thickness, end: 'front' | 'back'): 
 }
 
 const allowsLip = (j: GenJoint) =>
-  j.method === 'lock-rabbet' || j.method === 'half-blind-dovetail' || ((j.method === 'butt-pocket-screw' || j.method === 'butt-loose-tenon') && j.layout === 'front-back-full-width');
+  j.method === 'lock-rabbet' ||
+  j.method === 'half-blind-dovetail' ||
+  ((j.method === 'butt-pocket-screw' || j.method === 'butt-loose-tenon') && j.layout === 'front-back-full-width');
 
 const scheduleArb = fc
   .record({ front: len(9, 32), back: len(9, 32), side: len(6, 25) })
@@ -69,7 +74,13 @@ const scheduleArb = fc
       lip: fc.option(len(1, 30), { nil: undefined }),
       bottom: fc.oneof(
         fc
-          .record({ widthMm: len(3, 12), depthMm: len(1, Math.min(t.front, t.back, t.side) - 0.5), heightMm: len(0, 30), clearanceFraction: fc.double({ min: 0, max: 0.95, noNaN: true }), bottomFraction: fc.double({ min: 0.3, max: 1, noNaN: true }) })
+          .record({
+            widthMm: len(3, 12),
+            depthMm: len(1, Math.min(t.front, t.back, t.side) - 0.5),
+            heightMm: len(0, 30),
+            clearanceFraction: fc.double({ min: 0, max: 0.95, noNaN: true }),
+            bottomFraction: fc.double({ min: 0.3, max: 1, noNaN: true }),
+          })
           .map((g) => ({
             mount: 'groove' as const,
             thicknessMm: g.widthMm * g.bottomFraction,

@@ -23,8 +23,7 @@ const part = (parts: DrawerPart[], role: DrawerPartRole): DrawerPart => {
   if (!found) throw new Error(`no ${role}`);
   return found;
 };
-const box = (widthIn: number, depthIn: number) =>
-  ({ from: 'box', widthMm: inches(widthIn), heightMm: inches(6), depthMm: inches(depthIn) }) as const;
+const box = (widthIn: number, depthIn: number) => ({ from: 'box', widthMm: inches(widthIn), heightMm: inches(6), depthMm: inches(depthIn) }) as const;
 
 describe('part lengths follow each joint’s rule', () => {
   test.each([
@@ -42,7 +41,11 @@ describe('part lengths follow each joint’s rule', () => {
     },
     {
       label: 'lock rabbet: D 12″, lip 1/16″ → side 11⅞″ (Popular Woodworking, "Lock rabbet drawer joinery")',
-      input: base({ size: box(14, 12), thickness: { frontMm: inches(1 / 2), sideMm: inches(1 / 2) }, joint: { method: 'lock-rabbet', faceLeftMm: inches(1 / 16) } }),
+      input: base({
+        size: box(14, 12),
+        thickness: { frontMm: inches(1 / 2), sideMm: inches(1 / 2) },
+        joint: { method: 'lock-rabbet', faceLeftMm: inches(1 / 16) },
+      }),
       role: 'side',
       inches: 11.875,
     },
@@ -150,7 +153,9 @@ describe('box size from the opening', () => {
   });
 
   test('metric side-mount slides leave 12.5 mm per side and come 250–650 mm long: a 564 × 200 × 560 mm opening takes a 539 × 187.5 mm box, 500 mm long (derived from common practice: 12.5 mm metric slide clearance; metric lengths from memory)', () => {
-    const result = sized(base({ size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', series: 'metric' } }));
+    const result = sized(
+      base({ size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', series: 'metric' } }),
+    );
     expect(result.box.widthMm).toBeCloseTo(539, 9);
     expect(result.box.heightMm).toBeCloseTo(187.5, 9);
     expect(result.box.depthMm).toBeCloseTo(500, 9);
@@ -160,37 +165,63 @@ describe('box size from the opening', () => {
 
   test('the same opening with imperial slides takes ½″ per side and a 20″ slide (common practice, no source)', () => {
     // 564 − 2 × 12.7 = 538.6 mm; 560 mm less ½″ behind is 547.3 mm ≈ 21.5″, so the longest 2″-step slide is 20″.
-    const result = sized(base({ size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', series: 'imperial' } }));
+    const result = sized(
+      base({ size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', series: 'imperial' } }),
+    );
     expect(result.box.widthMm).toBeCloseTo(538.6, 9);
     expect(result.box.depthMm).toBeCloseTo(inches(20), 9);
   });
 
   test('a schedule saved before slides had a series still sizes as it did: ½″ clearances and imperial lengths', () => {
     // As the form stored them: the schema's output with its defaults filled, no series, no depth rule.
-    const stored = { ...base(), size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', sideClearanceMm: 12.7, heightClearanceMm: 12.7 } };
+    const stored = {
+      ...base(),
+      size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 },
+      slide: { type: 'side-mount', sideClearanceMm: 12.7, heightClearanceMm: 12.7 },
+    };
     const result = sized(stored as DrawerScheduleInput);
     expect(result.box).toMatchObject({ widthMm: 538.6, heightMm: 187.3 });
     expect(result.box.depthMm).toBeCloseTo(inches(20), 9);
   });
 
   test.each([
-    { label: 'a 22½″ deep opening with ½″ back clearance takes a 22″ slide (slide lengths 12–28″ by 2″, common practice, no source)', depthIn: 22.5, series: 'imperial', expectedMm: inches(22) },
+    {
+      label: 'a 22½″ deep opening with ½″ back clearance takes a 22″ slide (slide lengths 12–28″ by 2″, common practice, no source)',
+      depthIn: 22.5,
+      series: 'imperial',
+      expectedMm: inches(22),
+    },
     { label: 'a 21.9″ deep opening takes a 20″ slide (common practice, no source)', depthIn: 21.9, series: 'imperial', expectedMm: inches(20) },
     { label: 'a 560 mm deep opening takes a 500 mm metric slide (from memory)', depthIn: 560 / 25.4, series: 'metric', expectedMm: 500 },
   ] as const)('$label', ({ depthIn, series, expectedMm }) => {
     const result = sized(
-      base({ size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(depthIn), depthRule: { rule: 'longest-standard-slide', series } } }),
+      base({
+        size: {
+          from: 'opening',
+          widthMm: inches(15),
+          heightMm: inches(7),
+          depthMm: inches(depthIn),
+          depthRule: { rule: 'longest-standard-slide', series },
+        },
+      }),
     );
     expect(result.box.depthMm).toBeCloseTo(expectedMm, 9);
   });
 
   test('undermount slides take the maker’s total width deduction, ⅝″ by default (common practice, no source)', () => {
-    const result = sized(base({ size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) }, slide: { type: 'undermount' } }));
+    const result = sized(
+      base({ size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) }, slide: { type: 'undermount' } }),
+    );
     expect(result.box.widthMm).toBeCloseTo(inches(15 - 5 / 8), 9);
   });
 
   test('wooden runners fill the opening less a back clearance', () => {
-    const result = sized(base({ size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 500, depthRule: { rule: 'opening-less-clearance', backClearanceMm: 10 } }, slide: { type: 'wooden-runners', sideClearanceMm: 1 } }));
+    const result = sized(
+      base({
+        size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 500, depthRule: { rule: 'opening-less-clearance', backClearanceMm: 10 } },
+        slide: { type: 'wooden-runners', sideClearanceMm: 1 },
+      }),
+    );
     expect(result.box.widthMm).toBeCloseTo(398, 9);
     expect(result.box.depthMm).toBeCloseTo(490, 9);
   });
@@ -231,7 +262,9 @@ describe('parts, quantities and grain', () => {
   });
 
   test('an inset applied front is the opening less a reveal on each edge', () => {
-    const result = sized(base({ size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 560 }, front: { style: 'applied', fit: 'inset', revealMm: 1.5 } }));
+    const result = sized(
+      base({ size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 560 }, front: { style: 'applied', fit: 'inset', revealMm: 1.5 } }),
+    );
     const front = part(result.parts, 'applied-front');
     expect(front.lengthMm).toBeCloseTo(397, 9);
     expect(front.widthMm).toBeCloseTo(147, 9);
@@ -254,21 +287,65 @@ describe('parts, quantities and grain', () => {
 
 describe('a box that cannot be built gives an error on the field, never parts', () => {
   test.each([
-    { label: 'lock rabbet engagement equal to the thickness (no face left)', over: { joint: { method: 'lock-rabbet', faceLeftMm: 0 } }, path: 'joint.faceLeftMm' },
-    { label: 'lock rabbet face left thicker than the front', over: { joint: { method: 'lock-rabbet', faceLeftMm: inches(1) } }, path: 'joint.faceLeftMm' },
-    { label: 'a dado as deep as the side is thick', over: { joint: { method: 'rabbet-and-dado', dadoDepthMm: inches(1 / 2) } }, path: 'joint.dadoDepthMm' },
-    { label: 'a half-blind lap as thick as the front', over: { joint: { method: 'half-blind-dovetail', lapMm: inches(3 / 4) } }, path: 'joint.lapMm' },
-    { label: 'a face mortise through the side', over: { joint: { method: 'butt-loose-tenon', mortiseDepthMm: inches(1 / 2) } }, path: 'joint.mortiseDepthMm' },
+    {
+      label: 'lock rabbet engagement equal to the thickness (no face left)',
+      over: { joint: { method: 'lock-rabbet', faceLeftMm: 0 } },
+      path: 'joint.faceLeftMm',
+    },
+    {
+      label: 'lock rabbet face left thicker than the front',
+      over: { joint: { method: 'lock-rabbet', faceLeftMm: inches(1) } },
+      path: 'joint.faceLeftMm',
+    },
+    {
+      label: 'a dado as deep as the side is thick',
+      over: { joint: { method: 'rabbet-and-dado', dadoDepthMm: inches(1 / 2) } },
+      path: 'joint.dadoDepthMm',
+    },
+    {
+      label: 'a half-blind lap as thick as the front',
+      over: { joint: { method: 'half-blind-dovetail', lapMm: inches(3 / 4) } },
+      path: 'joint.lapMm',
+    },
+    {
+      label: 'a face mortise through the side',
+      over: { joint: { method: 'butt-loose-tenon', mortiseDepthMm: inches(1 / 2) } },
+      path: 'joint.mortiseDepthMm',
+    },
     { label: 'a bottom thicker than its groove is wide', over: { bottom: { mount: 'groove', thicknessMm: 9 } }, path: 'bottom.thicknessMm' },
     { label: 'a negative bottom clearance', over: { bottom: { mount: 'groove', groove: { clearanceMm: -1 } } }, path: 'bottom.groove.clearanceMm' },
     { label: 'a groove through the side', over: { bottom: { mount: 'groove', groove: { depthMm: inches(1 / 2) } } }, path: 'bottom.groove.depthMm' },
-    { label: 'a box narrower than its two sides', over: { size: { from: 'box', widthMm: 20, heightMm: 100, depthMm: 400 } }, path: 'thickness.sideMm' },
-    { label: 'an opening narrower than the slides take', over: { size: { from: 'opening', widthMm: 20, heightMm: 100, depthMm: 500 } }, path: 'size.widthMm' },
-    { label: 'an opening too shallow for any standard slide', over: { size: { from: 'opening', widthMm: 400, heightMm: 100, depthMm: 200 } }, path: 'size.depthMm' },
+    {
+      label: 'a box narrower than its two sides',
+      over: { size: { from: 'box', widthMm: 20, heightMm: 100, depthMm: 400 } },
+      path: 'thickness.sideMm',
+    },
+    {
+      label: 'an opening narrower than the slides take',
+      over: { size: { from: 'opening', widthMm: 20, heightMm: 100, depthMm: 500 } },
+      path: 'size.widthMm',
+    },
+    {
+      label: 'an opening too shallow for any standard slide',
+      over: { size: { from: 'opening', widthMm: 400, heightMm: 100, depthMm: 200 } },
+      path: 'size.depthMm',
+    },
     { label: 'a negative slide clearance', over: { slide: { type: 'side-mount', sideClearanceMm: -2 } }, path: 'slide.sideClearanceMm' },
-    { label: 'a lip on a through-dovetailed front', over: { joint: { method: 'through-dovetail' }, front: { style: 'lipped' } }, path: 'front.style' },
-    { label: 'an applied bottom under undermount slides', over: { slide: { type: 'undermount' }, bottom: { mount: 'applied' } }, path: 'bottom.mount' },
-    { label: 'a bottom below the undermount recess', over: { slide: { type: 'undermount' }, bottom: { mount: 'groove', groove: { heightMm: 6 } } }, path: 'bottom.groove.heightMm' },
+    {
+      label: 'a lip on a through-dovetailed front',
+      over: { joint: { method: 'through-dovetail' }, front: { style: 'lipped' } },
+      path: 'front.style',
+    },
+    {
+      label: 'an applied bottom under undermount slides',
+      over: { slide: { type: 'undermount' }, bottom: { mount: 'applied' } },
+      path: 'bottom.mount',
+    },
+    {
+      label: 'a bottom below the undermount recess',
+      over: { slide: { type: 'undermount' }, bottom: { mount: 'groove', groove: { heightMm: 6 } } },
+      path: 'bottom.groove.heightMm',
+    },
     { label: 'an applied front with neither opening nor size', over: { front: { style: 'applied' } }, path: 'front.widthMm' },
     { label: 'no boxes', over: { quantity: 0 }, path: 'quantity' },
     { label: 'part of a box', over: { quantity: 1.5 }, path: 'quantity' },

@@ -24,7 +24,10 @@ export const MIN_FRONT_REVEAL_MM = 1;
  * Every part of a drawer schedule, or one error per field that makes the box impossible. `lengthText` writes the
  * lengths inside notes and messages (default mm); the parts' numbers are always exact mm.
  */
-export function sizeDrawerSchedule(input: unknown, { lengthText, exactText }: { lengthText?: LengthText; exactText?: LengthText } = {}): SizeDrawerScheduleResult {
+export function sizeDrawerSchedule(
+  input: unknown,
+  { lengthText, exactText }: { lengthText?: LengthText; exactText?: LengthText } = {},
+): SizeDrawerScheduleResult {
   return withLengthText(lengthText, () => sizeInput(input), exactText);
 }
 
@@ -99,19 +102,43 @@ function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
 
   const frontMaterial = s.materials.front ?? s.materials.sides;
   const parts: DrawerPart[] = [
-    wallPart('front', box.insideWidthMm + 2 * corners.front.panelEngagementMm + 2 * lipMm,
-      [corners.front.panelEngagementMm, corners.front.panelEngagementMm], t.front, frontMaterial, lipMm),
-    wallPart('back', box.insideWidthMm + 2 * corners.back.panelEngagementMm,
-      [corners.back.panelEngagementMm, corners.back.panelEngagementMm], t.back, s.materials.back ?? frontMaterial),
-    wallPart('side', box.insideDepthMm + corners.front.sideEngagementMm + corners.back.sideEngagementMm,
-      [corners.front.sideEngagementMm, corners.back.sideEngagementMm], t.side, s.materials.sides),
+    wallPart(
+      'front',
+      box.insideWidthMm + 2 * corners.front.panelEngagementMm + 2 * lipMm,
+      [corners.front.panelEngagementMm, corners.front.panelEngagementMm],
+      t.front,
+      frontMaterial,
+      lipMm,
+    ),
+    wallPart(
+      'back',
+      box.insideWidthMm + 2 * corners.back.panelEngagementMm,
+      [corners.back.panelEngagementMm, corners.back.panelEngagementMm],
+      t.back,
+      s.materials.back ?? frontMaterial,
+    ),
+    wallPart(
+      'side',
+      box.insideDepthMm + corners.front.sideEngagementMm + corners.back.sideEngagementMm,
+      [corners.front.sideEngagementMm, corners.back.sideEngagementMm],
+      t.side,
+      s.materials.sides,
+    ),
     bottomPart(s, box, t),
   ];
   const applied = appliedFrontPart(s);
   if (applied) parts.push(applied);
   const face = drawerFace(s, box, applied ?? parts[0]);
 
-  return { ok: true, parts, box, face, setupCardKeys: requiredSetupCards(s), notes: [...notes, ...scheduleNotes(s, t)], warnings: faceWarnings(face) };
+  return {
+    ok: true,
+    parts,
+    box,
+    face,
+    setupCardKeys: requiredSetupCards(s),
+    notes: [...notes, ...scheduleNotes(s, t)],
+    warnings: faceWarnings(face),
+  };
 }
 
 /**
@@ -123,13 +150,23 @@ function lipPastBox(s: DrawerSchedule, box: SizedBox): Result<{ lipMm: Mm }> {
   if (f.style !== 'lipped') return { ok: true, lipMm: 0 };
   if (f.fit === 'lip') return { ok: true, lipMm: f.lipMm! };
   if (s.size.from !== 'opening')
-    return { ok: false, errors: [{ path: 'front.fit', message: 'A box given by its own size has no opening to lap or stop short of: give the lip past each side of the box' }] };
+    return {
+      ok: false,
+      errors: [
+        { path: 'front.fit', message: 'A box given by its own size has no opening to lap or stop short of: give the lip past each side of the box' },
+      ],
+    };
   const frontWidth = f.fit === 'overlay' ? s.size.widthMm + 2 * f.overlayMm! : s.size.widthMm - 2 * f.revealMm!;
   const lipMm = (frontWidth - box.widthMm) / 2;
   if (lipMm <= 0)
     return {
       ok: false,
-      errors: [{ path: 'front.revealMm', message: `With ${specText(f.revealMm!)} reveals the front (${mmText(frontWidth)}) is no wider than the box (${mmText(box.widthMm)}), so it hides no slide: use a smaller reveal, or a flush front` }],
+      errors: [
+        {
+          path: 'front.revealMm',
+          message: `With ${specText(f.revealMm!)} reveals the front (${mmText(frontWidth)}) is no wider than the box (${mmText(box.widthMm)}), so it hides no slide: use a smaller reveal, or a flush front`,
+        },
+      ],
     };
   return { ok: true, lipMm };
 }
@@ -137,7 +174,12 @@ function lipPastBox(s: DrawerSchedule, box: SizedBox): Result<{ lipMm: Mm }> {
 /** The drawer's face (its box front, or the applied front) against the opening it closes, when there is one. */
 function drawerFace(s: DrawerSchedule, box: SizedBox, facePart: DrawerPart): DrawerFace {
   const opening = s.size.from === 'opening' ? { widthMm: s.size.widthMm, heightMm: s.size.heightMm } : null;
-  const face = { role: facePart.role as DrawerFace['role'], widthMm: facePart.lengthMm, heightMm: facePart.role === 'applied-front' ? facePart.widthMm : box.heightMm, opening };
+  const face = {
+    role: facePart.role as DrawerFace['role'],
+    widthMm: facePart.lengthMm,
+    heightMm: facePart.role === 'applied-front' ? facePart.widthMm : box.heightMm,
+    opening,
+  };
   return { ...face, sideMarginMm: opening ? (opening.widthMm - face.widthMm) / 2 : null, lipped: s.front.style === 'lipped' };
 }
 
@@ -159,7 +201,12 @@ function partBase(s: DrawerSchedule, role: DrawerPart['role'], quantityPerBox: n
 function slideModelErrors(s: DrawerSchedule, t: BoxThickness): FieldError[] {
   const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
   if (!model || model.maxSideThicknessMm === null || t.side <= model.maxSideThicknessMm + SLIDE_SIDE_TOLERANCE_MM) return [];
-  return [{ path: 'thickness.sideMm', message: `The ${model.name} takes sides up to ${specText(model.maxSideThicknessMm)}; these are ${specText(t.side)}: use thinner sides or another slide` }];
+  return [
+    {
+      path: 'thickness.sideMm',
+      message: `The ${model.name} takes sides up to ${specText(model.maxSideThicknessMm)}; these are ${specText(t.side)}: use thinner sides or another slide`,
+    },
+  ];
 }
 
 function boxErrors(box: SizedBox, t: BoxThickness): FieldError[] {
@@ -167,7 +214,10 @@ function boxErrors(box: SizedBox, t: BoxThickness): FieldError[] {
   if (box.insideWidthMm <= 0)
     errors.push({ path: 'thickness.sideMm', message: `Two ${mmText(t.side)} sides fill the whole box width (${mmText(box.widthMm)})` });
   if (box.insideDepthMm <= 0)
-    errors.push({ path: 'thickness.frontMm', message: `The front and back (${mmText(t.front + t.back)}) fill the whole box depth (${mmText(box.depthMm)})` });
+    errors.push({
+      path: 'thickness.frontMm',
+      message: `The front and back (${mmText(t.front + t.back)}) fill the whole box depth (${mmText(box.depthMm)})`,
+    });
   if (box.wallHeightMm <= 0)
     errors.push({ path: 'bottom.thicknessMm', message: `The applied bottom is as thick as the box is tall (${mmText(box.heightMm)})` });
   return errors;
@@ -184,16 +234,31 @@ function bottomErrors(s: DrawerSchedule, box: SizedBox, t: BoxThickness): FieldE
   const g = bottom.groove;
   const thinnest = Math.min(t.side, t.front, t.back);
   if (g.depthMm >= thinnest)
-    errors.push({ path: 'bottom.groove.depthMm', message: `The groove (${mmText(g.depthMm)} deep) must be shallower than the thinnest wall (${mmText(thinnest)})` });
+    errors.push({
+      path: 'bottom.groove.depthMm',
+      message: `The groove (${mmText(g.depthMm)} deep) must be shallower than the thinnest wall (${mmText(thinnest)})`,
+    });
   if (bottom.thicknessMm > g.widthMm)
-    errors.push({ path: 'bottom.thicknessMm', message: `The bottom (${mmText(bottom.thicknessMm)}) is thicker than its groove is wide (${mmText(g.widthMm)})` });
+    errors.push({
+      path: 'bottom.thicknessMm',
+      message: `The bottom (${mmText(bottom.thicknessMm)}) is thicker than its groove is wide (${mmText(g.widthMm)})`,
+    });
   if (g.heightMm + g.widthMm >= box.wallHeightMm)
-    errors.push({ path: 'bottom.groove.heightMm', message: `The groove (${mmText(g.heightMm)} up, ${mmText(g.widthMm)} wide) does not fit in a ${mmText(box.wallHeightMm)} tall box` });
+    errors.push({
+      path: 'bottom.groove.heightMm',
+      message: `The groove (${mmText(g.heightMm)} up, ${mmText(g.widthMm)} wide) does not fit in a ${mmText(box.wallHeightMm)} tall box`,
+    });
   if (g.clearanceMm >= 2 * g.depthMm)
-    errors.push({ path: 'bottom.groove.clearanceMm', message: `With ${mmText(g.clearanceMm)} of clearance the bottom would not reach into ${mmText(g.depthMm)} deep grooves` });
+    errors.push({
+      path: 'bottom.groove.clearanceMm',
+      message: `With ${mmText(g.clearanceMm)} of clearance the bottom would not reach into ${mmText(g.depthMm)} deep grooves`,
+    });
   const recess = slide.type === 'undermount' ? (slide.model?.bottomRecessMm ?? slide.bottomRecessMm) : 0;
   if (slide.type === 'undermount' && g.heightMm < recess - 1e-9)
-    errors.push({ path: 'bottom.groove.heightMm', message: `${slide.model ? `The ${slide.model.name}` : 'Undermount slides'} need the bottom at least ${specText(recess)} up; the groove is ${specText(g.heightMm)} up` });
+    errors.push({
+      path: 'bottom.groove.heightMm',
+      message: `${slide.model ? `The ${slide.model.name}` : 'Undermount slides'} need the bottom at least ${specText(recess)} up; the groove is ${specText(g.heightMm)} up`,
+    });
   return errors;
 }
 
@@ -204,12 +269,19 @@ function frontStyleErrors(s: DrawerSchedule, corners: JointCorners, t: BoxThickn
     const frontCoversSide = corners.front.panelEngagementMm >= t.side && corners.front.sideEngagementMm < t.front;
     return frontCoversSide
       ? []
-      : [{ path: 'front.style', message: `A ${JOINT_NAMES[s.joint.method]} shows the side's end on the front; a lipped front needs a joint that hides it (lock rabbet, half-blind dovetail, or a butt joint with the front full width), or use an applied front` }];
+      : [
+          {
+            path: 'front.style',
+            message: `A ${JOINT_NAMES[s.joint.method]} shows the side's end on the front; a lipped front needs a joint that hides it (lock rabbet, half-blind dovetail, or a butt joint with the front full width), or use an applied front`,
+          },
+        ];
   }
   if (f.style === 'applied' && s.size.from === 'box') {
     const missing: FieldError[] = [];
-    if (f.widthMm === undefined) missing.push({ path: 'front.widthMm', message: 'Give the applied front width, or size the schedule from its opening' });
-    if (f.heightMm === undefined) missing.push({ path: 'front.heightMm', message: 'Give the applied front height, or size the schedule from its opening' });
+    if (f.widthMm === undefined)
+      missing.push({ path: 'front.widthMm', message: 'Give the applied front width, or size the schedule from its opening' });
+    if (f.heightMm === undefined)
+      missing.push({ path: 'front.heightMm', message: 'Give the applied front height, or size the schedule from its opening' });
     return missing;
   }
   if (f.style === 'applied' && f.fit === 'inset' && s.size.from === 'opening') {
@@ -230,7 +302,14 @@ function grooveMachining(s: DrawerSchedule, role: 'front' | 'back' | 'side'): st
 }
 
 function bottomPart(s: DrawerSchedule, box: SizedBox, t: BoxThickness): DrawerPart {
-  const base = { ...partBase(s, 'bottom', 1), thicknessMm: s.bottom.thicknessMm, material: s.bottom.material, grain: s.bottom.grain, endEngagementMm: [], overhangMm: 0 };
+  const base = {
+    ...partBase(s, 'bottom', 1),
+    thicknessMm: s.bottom.thicknessMm,
+    material: s.bottom.material,
+    grain: s.bottom.grain,
+    endEngagementMm: [],
+    overhangMm: 0,
+  };
   if (s.bottom.mount === 'applied') {
     return {
       ...base,
@@ -285,15 +364,21 @@ function scheduleNotes(s: DrawerSchedule, t: BoxThickness): string[] {
   const notes: string[] = [];
   const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
   if (model && s.size.from === 'box' && !model.lengthsMm.some((l) => Math.abs(l - s.size.depthMm) < 0.5))
-    notes.push(`The box is ${mmText(s.size.depthMm)} long, and the ${model.name} comes ${model.lengthsMm.map(specText).join(', ')} long: a box on it is usually as long as its slide.`);
+    notes.push(
+      `The box is ${mmText(s.size.depthMm)} long, and the ${model.name} comes ${model.lengthsMm.map(specText).join(', ')} long: a box on it is usually as long as its slide.`,
+    );
   // Without a model there is no maker's limit to hold the sides to, only the usual one.
   if (s.slide.type === 'undermount' && !s.slide.model && t.side > UNDERMOUNT_MAX_SIDE + SLIDE_SIDE_TOLERANCE_MM)
-    notes.push(`Undermount slides are usually made for sides up to ${specText(UNDERMOUNT_MAX_SIDE)}; check the maker's spec for ${specText(t.side)} sides, or choose a slide model.`);
+    notes.push(
+      `Undermount slides are usually made for sides up to ${specText(UNDERMOUNT_MAX_SIDE)}; check the maker's spec for ${specText(t.side)} sides, or choose a slide model.`,
+    );
   if (s.joint.method === 'butt-pocket-screw' && Math.min(t.side, t.front, t.back) < POCKET_SCREW_MIN_STOCK)
     notes.push(`Pocket-screw jigs usually need stock at least ${mmText(POCKET_SCREW_MIN_STOCK)} thick; check the jig.`);
   if (s.joint.method === 'butt-loose-tenon') {
     const tenons = 4 * s.joint.tenonsPerCorner * s.quantity;
-    notes.push(`${tenons} loose tenons ${mmText(s.joint.tenonThicknessMm)} thick, each ${mmText(2 * s.joint.mortiseDepthMm)} long, cut from tenon stock.`);
+    notes.push(
+      `${tenons} loose tenons ${mmText(s.joint.tenonThicknessMm)} thick, each ${mmText(2 * s.joint.mortiseDepthMm)} long, cut from tenon stock.`,
+    );
   }
   if (s.front.style === 'applied' && s.size.from === 'opening' && s.front.fit === 'overlay')
     notes.push('Fronts stacked in one carcass want 3 mm between them: lower the top or bottom overlay by half of that where two fronts meet.');

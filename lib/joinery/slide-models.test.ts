@@ -31,7 +31,11 @@ const OUTSIDE_RULE: SlideModelInput = {
   rearClearanceMm: 10,
 };
 
-const schedule = (model: SlideModelInput, opening: { widthMm: number; heightMm: number; depthMm: number }, over: Partial<DrawerScheduleInput> = {}): DrawerScheduleInput => ({
+const schedule = (
+  model: SlideModelInput,
+  opening: { widthMm: number; heightMm: number; depthMm: number },
+  over: Partial<DrawerScheduleInput> = {},
+): DrawerScheduleInput => ({
   label: 'On model slides',
   quantity: 2,
   size: { from: 'opening', ...opening },
@@ -55,7 +59,13 @@ describe('boxes sized from a slide model (invented maker-style models, worked by
   });
 
   test('inside-width rule: thicker sides make a wider box with the same inside (⅝″ sides → 13⅜ + 1¼ = 14⅝″)', () => {
-    const result = sized(schedule(INSIDE_RULE, { widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) }, { thickness: { frontMm: inches(3 / 4), sideMm: inches(5 / 8) } }));
+    const result = sized(
+      schedule(
+        INSIDE_RULE,
+        { widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) },
+        { thickness: { frontMm: inches(3 / 4), sideMm: inches(5 / 8) } },
+      ),
+    );
     expect(result.box.insideWidthMm).toBeCloseTo(inches(13 + 3 / 8), 9);
     expect(result.box.widthMm).toBeCloseTo(inches(14 + 5 / 8), 9);
   });
@@ -72,22 +82,35 @@ describe('boxes sized from a slide model (invented maker-style models, worked by
     const result = sized(input);
     expect(result.parts.find((p) => p.role === 'side')!.machining.join(' ')).toContain('its lower edge 13 mm above the bottom edge');
     const low = sizeDrawerSchedule({ ...input, bottom: { mount: 'groove', groove: { heightMm: 12 } } });
-    expect(low).toMatchObject({ ok: false, errors: [{ path: 'bottom.groove.heightMm', message: expect.stringContaining('Tessel T-16 need the bottom at least 13 mm up') }] });
+    expect(low).toMatchObject({
+      ok: false,
+      errors: [{ path: 'bottom.groove.heightMm', message: expect.stringContaining('Tessel T-16 need the bottom at least 13 mm up') }],
+    });
   });
 
   test('sides thicker than the model is made for are a field error (18 mm on a 16 mm slide)', () => {
-    const result = sizeDrawerSchedule(schedule(OUTSIDE_RULE, { widthMm: 564, heightMm: 180, depthMm: 540 }, { thickness: { frontMm: 18, sideMm: 18 } }));
-    expect(result).toMatchObject({ ok: false, errors: [{ path: 'thickness.sideMm', message: expect.stringContaining('takes sides up to 16 mm; these are 18 mm') }] });
+    const result = sizeDrawerSchedule(
+      schedule(OUTSIDE_RULE, { widthMm: 564, heightMm: 180, depthMm: 540 }, { thickness: { frontMm: 18, sideMm: 18 } }),
+    );
+    expect(result).toMatchObject({
+      ok: false,
+      errors: [{ path: 'thickness.sideMm', message: expect.stringContaining('takes sides up to 16 mm; these are 18 mm') }],
+    });
   });
 
   test('16 mm sides on a ⅝″ (15.9 mm) slide are within tolerance and raise no note', () => {
-    const result = sized(schedule(INSIDE_RULE, { widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) }, { thickness: { frontMm: 16, sideMm: 16 } }));
+    const result = sized(
+      schedule(INSIDE_RULE, { widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) }, { thickness: { frontMm: 16, sideMm: 16 } }),
+    );
     expect(result.notes.join(' ')).not.toMatch(/sides up to|over/);
   });
 
   test('an opening too shallow for the shortest length the model is made in is refused on the depth', () => {
     const result = sizeDrawerSchedule(schedule(OUTSIDE_RULE, { widthMm: 564, heightMm: 180, depthMm: 255 }));
-    expect(result).toMatchObject({ ok: false, errors: [{ path: 'size.depthMm', message: expect.stringContaining('No Tessel T-16 fits: 245 mm of depth') }] });
+    expect(result).toMatchObject({
+      ok: false,
+      errors: [{ path: 'size.depthMm', message: expect.stringContaining('No Tessel T-16 fits: 245 mm of depth') }],
+    });
   });
 
   test('the schedule carries the model’s whole rule, so it sizes the same whatever later happens to the model', () => {
@@ -105,12 +128,20 @@ describe('boxes sized from a slide model (invented maker-style models, worked by
 
 describe('undermount slides without a model (schedules saved before models)', () => {
   test('16 mm sides raise no “sides over ⅝″” note: 16 mm is what undermount slides are made for (from memory)', () => {
-    const result = sized({ ...schedule(INSIDE_RULE, { widthMm: 500, heightMm: 200, depthMm: 560 }), slide: { type: 'undermount' }, thickness: { frontMm: 16, sideMm: 16 } });
+    const result = sized({
+      ...schedule(INSIDE_RULE, { widthMm: 500, heightMm: 200, depthMm: 560 }),
+      slide: { type: 'undermount' },
+      thickness: { frontMm: 16, sideMm: 16 },
+    });
     expect(result.notes.join(' ')).not.toContain('sides up to');
   });
 
   test('19 mm sides still ask to check the maker’s spec', () => {
-    const result = sized({ ...schedule(INSIDE_RULE, { widthMm: 500, heightMm: 200, depthMm: 560 }), slide: { type: 'undermount' }, thickness: { frontMm: 19, sideMm: 19 } });
+    const result = sized({
+      ...schedule(INSIDE_RULE, { widthMm: 500, heightMm: 200, depthMm: 560 }),
+      slide: { type: 'undermount' },
+      thickness: { frontMm: 19, sideMm: 19 },
+    });
     expect(result.notes.join(' ')).toContain("check the maker's spec for 19 mm sides");
   });
 });

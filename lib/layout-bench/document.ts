@@ -47,9 +47,29 @@ export function planToDoc(plan: Plan, request: Pick<NestRequest, 'stock'>, locke
   const pieces = plan.pieces.map((p, piece) => {
     for (const pl of p.placements) {
       const key = placementKey(pl);
-      placements[key] = { partId: pl.partId, instance: pl.instance, label: pl.label, piece, x: pl.x, y: pl.y, w: pl.w, h: pl.h, rotated: pl.rotated, locked: pl.locked === true || locked.has(key) };
+      placements[key] = {
+        partId: pl.partId,
+        instance: pl.instance,
+        label: pl.label,
+        piece,
+        x: pl.x,
+        y: pl.y,
+        w: pl.w,
+        h: pl.h,
+        rotated: pl.rotated,
+        locked: pl.locked === true || locked.has(key),
+      };
     }
-    return { stockId: p.stockId, kind: p.kind, length: p.length, width: p.width, thickness: p.thickness, material: p.material, trim: p.trim, grain: grainOf.get(p.stockId) ?? 'along-length' };
+    return {
+      stockId: p.stockId,
+      kind: p.kind,
+      length: p.length,
+      width: p.width,
+      thickness: p.thickness,
+      material: p.material,
+      trim: p.trim,
+      grain: grainOf.get(p.stockId) ?? 'along-length',
+    };
   });
   return { pieces, placements, unplaced: plan.unplaced };
 }
@@ -75,7 +95,17 @@ export function docToPlan(doc: BenchDoc): PlanInput {
         thickness: piece.thickness,
         material: piece.material,
         trim: piece.trim,
-        placements: byPiece[i].map(({ partId, instance, label, x, y, w, h, rotated, locked }) => ({ partId, instance, label, x, y, w, h, rotated, ...(locked && { locked }) })),
+        placements: byPiece[i].map(({ partId, instance, label, x, y, w, h, rotated, locked }) => ({
+          partId,
+          instance,
+          label,
+          x,
+          y,
+          w,
+          h,
+          rotated,
+          ...(locked && { locked }),
+        })),
       }))
       .filter((p) => p.placements.length > 0),
     unplaced: doc.unplaced,

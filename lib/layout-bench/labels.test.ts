@@ -13,9 +13,10 @@ describe('part labels at any zoom', () => {
   });
 
   test('text never gets smaller than 8 px, so what is shown can be read', () => {
-    for (let w = 1; w < 300; w += 7) for (let h = 1; h < 80; h += 5) {
-      const fit = fitLabel('Stretcher', '34" × 4"', w, h);
-      if (fit) expect(fit.fontPx).toBeGreaterThanOrEqual(8);
-    }
+    for (let w = 1; w < 300; w += 7)
+      for (let h = 1; h < 80; h += 5) {
+        const fit = fitLabel('Stretcher', '34" × 4"', w, h);
+        if (fit) expect(fit.fontPx).toBeGreaterThanOrEqual(8);
+      }
   });
 });

@@ -5,7 +5,9 @@ import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { planToDoc } from '@/lib/layout-bench/document';
 import { checkDoc } from '@/lib/layout-bench/live-check';
 
-const req = nestRequestSchema.parse(request([part('side', 720, 560, { quantity: 3 }), part('shelf', 764, 300, { quantity: 2 })], [sheet('ply', 2440, 1220)], { kerf: 3.2, trim: 5 }));
+const req = nestRequestSchema.parse(
+  request([part('side', 720, 560, { quantity: 3 }), part('shelf', 764, 300, { quantity: 2 })], [sheet('ply', 2440, 1220)], { kerf: 3.2, trim: 5 }),
+);
 
 describe('the live check on the bench', () => {
   test('an engine plan has no problems, and its leftovers are shaded on its piece', async () => {
@@ -37,10 +39,37 @@ describe('the live check on the bench', () => {
 
   test('a layout straight through-cuts cannot separate is marked on its piece', () => {
     // The pinwheel: four parts around a centre square, the classic non-guillotine layout (common practice, no source).
-    const pin = nestRequestSchema.parse(request([part('p', 600, 200, { quantity: 4, grain: 'any' }), part('c', 200, 200, { grain: 'any' })], [sheet('s', 2440, 1220)], { kerf: 0, trim: 0 }));
-    const place = (instance: number, x: number, y: number, w: number, h: number, rotated = false) => ({ partId: 'p', instance, label: 'p', piece: 0, x, y, w, h, rotated, locked: false });
+    const pin = nestRequestSchema.parse(
+      request([part('p', 600, 200, { quantity: 4, grain: 'any' }), part('c', 200, 200, { grain: 'any' })], [sheet('s', 2440, 1220)], {
+        kerf: 0,
+        trim: 0,
+      }),
+    );
+    const place = (instance: number, x: number, y: number, w: number, h: number, rotated = false) => ({
+      partId: 'p',
+      instance,
+      label: 'p',
+      piece: 0,
+      x,
+      y,
+      w,
+      h,
+      rotated,
+      locked: false,
+    });
     const doc = {
-      pieces: [{ stockId: 's', kind: 'sheet' as const, length: 2440, width: 1220, thickness: 18, material: 'birch ply', trim: 0, grain: 'along-length' as const }],
+      pieces: [
+        {
+          stockId: 's',
+          kind: 'sheet' as const,
+          length: 2440,
+          width: 1220,
+          thickness: 18,
+          material: 'birch ply',
+          trim: 0,
+          grain: 'along-length' as const,
+        },
+      ],
       placements: {
         'p#1': place(1, 0, 0, 600, 200),
         'p#2': place(2, 600, 0, 200, 600, true),

@@ -44,7 +44,8 @@ export function checkDoc(request: NestRequest, doc: BenchDoc): LiveCheck {
     const piece = v.piece !== undefined ? pieceOf[v.piece] : undefined;
     if (!m || piece === undefined) continue;
     for (const [key, p] of Object.entries(doc.placements)) {
-      if (p.piece === piece && p.instance === Number(m[2]) && (p.label || p.partId) === m[1] && !byPlacement.get(key)?.includes(v.message)) push(byPlacement, key, v.message);
+      if (p.piece === piece && p.instance === Number(m[2]) && (p.label || p.partId) === m[1] && !byPlacement.get(key)?.includes(v.message))
+        push(byPlacement, key, v.message);
     }
   }
   const leftovers = new Map<number, { offcuts: Rect[]; waste: Rect[] }>();

@@ -11,7 +11,9 @@ const lines = (v: unknown) => (Array.isArray(v) ? v.map((l) => (isObject(l) ? { 
 
 export function readBenchPlan(document: unknown): Plan {
   if (!isObject(document)) return readPlan(document);
-  const pieces = Array.isArray(document.pieces) ? document.pieces.map((p) => (isObject(p) && isObject(p.figures) ? { ...p, figures: withCost(p.figures) } : p)) : document.pieces;
+  const pieces = Array.isArray(document.pieces)
+    ? document.pieces.map((p) => (isObject(p) && isObject(p.figures) ? { ...p, figures: withCost(p.figures) } : p))
+    : document.pieces;
   const filled: Loose = { ...document, pieces, stockToPull: lines(document.stockToPull), stockToBuy: lines(document.stockToBuy) };
   if (document.totals !== undefined) filled.totals = withCost(document.totals);
   return readPlan(filled);

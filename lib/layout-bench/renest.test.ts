@@ -30,7 +30,11 @@ describe('re-nesting the unlocked parts around the locked ones', () => {
     const saved = planSchema.parse(rebuildCuts(req, docToPlan(doc)));
     expect(validatePlan(req, saved)).toEqual([]);
     const reread = planToDoc(saved, req);
-    expect(Object.keys(reread.placements).filter((k) => reread.placements[k].locked).sort()).toEqual([...lockedKeys].sort());
+    expect(
+      Object.keys(reread.placements)
+        .filter((k) => reread.placements[k].locked)
+        .sort(),
+    ).toEqual([...lockedKeys].sort());
   });
 
   test('locked parts stay exactly where they were, every part is placed or reported once, and the plan is valid', async () => {
@@ -43,7 +47,13 @@ describe('re-nesting the unlocked parts around the locked ones', () => {
     const merged = job.merge(await optimize(job.request));
     for (const k of lockedKeys) {
       const [was, now] = [doc.placements[k], merged.placements[k]];
-      expect({ x: now.x, y: now.y, w: now.w, h: now.h, stock: merged.pieces[now.piece].stockId }).toEqual({ x: was.x, y: was.y, w: was.w, h: was.h, stock: doc.pieces[was.piece].stockId });
+      expect({ x: now.x, y: now.y, w: now.w, h: now.h, stock: merged.pieces[now.piece].stockId }).toEqual({
+        x: was.x,
+        y: was.y,
+        w: was.w,
+        h: was.h,
+        stock: doc.pieces[was.piece].stockId,
+      });
     }
     expect(Object.keys(merged.placements).length + merged.unplaced.length).toBe(12);
     expect(validatePlan(req, docToPlan(merged))).toEqual([]);

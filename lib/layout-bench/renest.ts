@@ -42,7 +42,18 @@ export function prepareRenest(request: NestRequest, doc: BenchDoc): RenestJob {
       if (leaf.type !== 'leftover' || leaf.rect.w <= 0 || leaf.rect.h <= 0) return;
       const id = `${FREE_PREFIX}${k}:${j}`;
       freeAt.set(id, { piece: pieceIndex, x: leaf.rect.x, y: leaf.rect.y });
-      freeStock.push({ id, kind: 'offcut', length: leaf.rect.w, width: leaf.rect.h, thickness: piece.thickness, material: piece.material, grain: piece.grain, count: 1, costEach: 0, trimmed: true });
+      freeStock.push({
+        id,
+        kind: 'offcut',
+        length: leaf.rect.w,
+        width: leaf.rect.h,
+        thickness: piece.thickness,
+        material: piece.material,
+        grain: piece.grain,
+        count: 1,
+        costEach: 0,
+        trimmed: true,
+      });
     });
   });
 
@@ -83,11 +94,31 @@ export function prepareRenest(request: NestRequest, doc: BenchDoc): RenestJob {
         } else {
           const s = request.stock.find((st) => st.id === planPiece.stockId);
           target = pieces.length;
-          pieces.push({ stockId: planPiece.stockId, kind: planPiece.kind, length: planPiece.length, width: planPiece.width, thickness: planPiece.thickness, material: planPiece.material, trim: planPiece.trim, grain: s?.grain ?? 'along-length' });
+          pieces.push({
+            stockId: planPiece.stockId,
+            kind: planPiece.kind,
+            length: planPiece.length,
+            width: planPiece.width,
+            thickness: planPiece.thickness,
+            material: planPiece.material,
+            trim: planPiece.trim,
+            grain: s?.grain ?? 'along-length',
+          });
         }
         for (const pl of planPiece.placements) {
           const instance = original(pl.partId, pl.instance);
-          placements[placementKey({ partId: pl.partId, instance })] = { partId: pl.partId, instance, label: pl.label, piece: target, x: pl.x + dx, y: pl.y + dy, w: pl.w, h: pl.h, rotated: pl.rotated, locked: false };
+          placements[placementKey({ partId: pl.partId, instance })] = {
+            partId: pl.partId,
+            instance,
+            label: pl.label,
+            piece: target,
+            x: pl.x + dx,
+            y: pl.y + dy,
+            w: pl.w,
+            h: pl.h,
+            rotated: pl.rotated,
+            locked: false,
+          };
         }
       }
       const unplaced: Unplaced[] = plan.unplaced.map((u) => ({ ...u, instance: original(u.partId, u.instance) }));

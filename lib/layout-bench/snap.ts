@@ -52,7 +52,11 @@ export function snapRect(moving: Rect, usable: Rect, others: readonly Rect[], ke
   for (const sx of cx) {
     for (const sy of cy) {
       const r = { x: sx ?? moving.x, y: sy ?? moving.y, w: moving.w, h: moving.h };
-      const key = [clear(r, others, kerf) ? 0 : 1, (sx === null ? 1 : 0) + (sy === null ? 1 : 0), Math.abs(r.x - moving.x) + Math.abs(r.y - moving.y)];
+      const key = [
+        clear(r, others, kerf) ? 0 : 1,
+        (sx === null ? 1 : 0) + (sy === null ? 1 : 0),
+        Math.abs(r.x - moving.x) + Math.abs(r.y - moving.y),
+      ];
       if (!best || before(key, best.key)) best = { sx, sy, key };
     }
   }

@@ -3,18 +3,52 @@ import fc from 'fast-check';
 import { createBenchStore, hasUnsavedChanges, type BenchStore } from '@/lib/layout-bench/store';
 import type { BenchDoc, PartInfo } from '@/lib/layout-bench/document';
 
-const piece = (grain: 'along-length' | 'none') => ({ stockId: `s-${grain}`, kind: 'sheet' as const, length: 2440, width: 1220, thickness: 18, material: 'ply', trim: 0, grain });
-const partInfo = (id: string, grain: 'along-length' | 'any'): PartInfo => ({ id, label: id, length: 600, width: 300, grain, material: 'ply', thickness: 18 });
+const piece = (grain: 'along-length' | 'none') => ({
+  stockId: `s-${grain}`,
+  kind: 'sheet' as const,
+  length: 2440,
+  width: 1220,
+  thickness: 18,
+  material: 'ply',
+  trim: 0,
+  grain,
+});
+const partInfo = (id: string, grain: 'along-length' | 'any'): PartInfo => ({
+  id,
+  label: id,
+  length: 600,
+  width: 300,
+  grain,
+  material: 'ply',
+  thickness: 18,
+});
 
 function startDoc(): BenchDoc {
   const placements: BenchDoc['placements'] = {};
   for (let i = 0; i < 6; i++) {
     const partId = i % 2 ? 'side' : 'shelf';
-    placements[`${partId}#${i + 1}`] = { partId, instance: i + 1, label: partId, piece: i % 2, x: (i % 3) * 610, y: 0, w: 600, h: 300, rotated: false, locked: false };
+    placements[`${partId}#${i + 1}`] = {
+      partId,
+      instance: i + 1,
+      label: partId,
+      piece: i % 2,
+      x: (i % 3) * 610,
+      y: 0,
+      w: 600,
+      h: 300,
+      rotated: false,
+      locked: false,
+    };
   }
   return { pieces: [piece('along-length'), piece('none')], placements, unplaced: [] };
 }
-const context = { kerf: 3.2, parts: new Map([['side', partInfo('side', 'along-length')], ['shelf', partInfo('shelf', 'any')]]) };
+const context = {
+  kerf: 3.2,
+  parts: new Map([
+    ['side', partInfo('side', 'along-length')],
+    ['shelf', partInfo('shelf', 'any')],
+  ]),
+};
 const KEYS = Object.keys(startDoc().placements);
 
 type Cmd =
@@ -27,11 +61,23 @@ type Cmd =
   | { t: 'redo' };
 
 const cmd: fc.Arbitrary<Cmd> = fc.oneof(
-  fc.record({ t: fc.constant('move' as const), k: fc.nat(5), piece: fc.nat(1), x: fc.integer({ min: 0, max: 1800 }), y: fc.integer({ min: 0, max: 900 }) }),
+  fc.record({
+    t: fc.constant('move' as const),
+    k: fc.nat(5),
+    piece: fc.nat(1),
+    x: fc.integer({ min: 0, max: 1800 }),
+    y: fc.integer({ min: 0, max: 900 }),
+  }),
   fc.record({ t: fc.constant('nudge' as const), k: fc.nat(5), dx: fc.constantFrom(-1, 0, 1, 10), dy: fc.constantFrom(-1, 0, 1, 10) }),
   fc.record({ t: fc.constant('rotate' as const), k: fc.nat(5) }),
   fc.record({ t: fc.constant('lock' as const), k: fc.nat(5), on: fc.boolean() }),
-  fc.record({ t: fc.constant('drag' as const), k: fc.nat(5), x: fc.integer({ min: 0, max: 1800 }), y: fc.integer({ min: 0, max: 900 }), cancel: fc.boolean() }),
+  fc.record({
+    t: fc.constant('drag' as const),
+    k: fc.nat(5),
+    x: fc.integer({ min: 0, max: 1800 }),
+    y: fc.integer({ min: 0, max: 900 }),
+    cancel: fc.boolean(),
+  }),
   fc.constant({ t: 'undo' as const }),
   fc.constant({ t: 'redo' as const }),
 );
@@ -40,16 +86,22 @@ function run(store: BenchStore, c: Cmd) {
   const s = store.getState();
   const key = 'k' in c ? KEYS[c.k] : '';
   switch (c.t) {
-    case 'move': return s.move(key, c.piece, c.x, c.y);
-    case 'nudge': return s.nudge([key], c.dx, c.dy);
-    case 'rotate': return void s.rotate([key]);
-    case 'lock': return s.setLocked([key], c.on);
+    case 'move':
+      return s.move(key, c.piece, c.x, c.y);
+    case 'nudge':
+      return s.nudge([key], c.dx, c.dy);
+    case 'rotate':
+      return void s.rotate([key]);
+    case 'lock':
+      return s.setLocked([key], c.on);
     case 'drag':
       if (!s.beginDrag(key)) return;
       store.getState().dragTo(store.getState().doc.placements[key].piece, c.x, c.y, 20);
       return c.cancel ? store.getState().cancelDrag() : store.getState().endDrag();
-    case 'undo': return s.undo();
-    case 'redo': return s.redo();
+    case 'undo':
+      return s.undo();
+    case 'redo':
+      return s.redo();
   }
 }
 

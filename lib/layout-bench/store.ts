@@ -72,7 +72,8 @@ export interface BenchState {
 }
 
 const same = (a: BenchPlacement | undefined, b: BenchPlacement | undefined) =>
-  a === b || (!!a && !!b && a.piece === b.piece && a.x === b.x && a.y === b.y && a.w === b.w && a.h === b.h && a.rotated === b.rotated && a.locked === b.locked);
+  a === b ||
+  (!!a && !!b && a.piece === b.piece && a.x === b.x && a.y === b.y && a.w === b.w && a.h === b.h && a.rotated === b.rotated && a.locked === b.locked);
 
 function apply(doc: BenchDoc, step: Step, dir: 'before' | 'after'): BenchDoc {
   const placements = { ...doc.placements };
@@ -130,12 +131,22 @@ export function createBenchStore(doc: BenchDoc, context: BenchContext, camera: C
         commit([[key, { ...p, piece, x, y }]]);
       },
       nudge(keys, dx, dy) {
-        commit(movable(keys).map((k) => { const p = get().doc.placements[k]; return [k, { ...p, x: p.x + dx, y: p.y + dy }]; }));
+        commit(
+          movable(keys).map((k) => {
+            const p = get().doc.placements[k];
+            return [k, { ...p, x: p.x + dx, y: p.y + dy }];
+          }),
+        );
       },
       rotate(keys) {
         const { doc, context } = get();
         const ok = keys.filter((k) => mayRotate(doc, context, k));
-        commit(ok.map((k) => { const p = doc.placements[k]; return [k, { ...p, w: p.h, h: p.w, rotated: !p.rotated }]; }));
+        commit(
+          ok.map((k) => {
+            const p = doc.placements[k];
+            return [k, { ...p, w: p.h, h: p.w, rotated: !p.rotated }];
+          }),
+        );
         return keys.filter((k) => !ok.includes(k));
       },
       setLocked(keys, locked) {
@@ -145,7 +156,9 @@ export function createBenchStore(doc: BenchDoc, context: BenchContext, camera: C
         const { doc } = get();
         const keys = new Set([...Object.keys(doc.placements), ...Object.keys(next.placements)]);
         const step: Step = {
-          placements: [...keys].map((key) => ({ key, before: doc.placements[key], after: next.placements[key] })).filter((c) => !same(c.before, c.after)),
+          placements: [...keys]
+            .map((key) => ({ key, before: doc.placements[key], after: next.placements[key] }))
+            .filter((c) => !same(c.before, c.after)),
           pieces: { before: doc.pieces, after: next.pieces },
           unplaced: { before: doc.unplaced, after: next.unplaced },
         };
@@ -184,9 +197,13 @@ export function createBenchStore(doc: BenchDoc, context: BenchContext, camera: C
         const p = drag && doc.placements[drag.key];
         const target = doc.pieces[piece];
         if (!drag || !p || !target) return;
-        const others = Object.entries(doc.placements).filter(([k, o]) => k !== drag.key && o.piece === piece).map(([, o]) => o);
+        const others = Object.entries(doc.placements)
+          .filter(([k, o]) => k !== drag.key && o.piece === piece)
+          .map(([, o]) => o);
         const snapped = snapRect({ x, y, w: p.w, h: p.h }, usableRect(target, target.trim), others, context.kerf, threshold);
-        set({ view: { ...view, drag: { key: drag.key, piece, x: snapped.x, y: snapped.y, snappedX: snapped.snappedX, snappedY: snapped.snappedY } } });
+        set({
+          view: { ...view, drag: { key: drag.key, piece, x: snapped.x, y: snapped.y, snappedX: snapped.snappedX, snappedY: snapped.snappedY } },
+        });
       },
       endDrag() {
         const drag = get().view.drag;

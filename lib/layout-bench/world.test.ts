@@ -2,8 +2,28 @@ import { describe, expect, test } from 'vitest';
 import { layoutPieces, pieceAt, placementAt, placementsIn, PIECE_GAP } from '@/lib/layout-bench/world';
 import type { BenchDoc } from '@/lib/layout-bench/document';
 
-const piece = (length: number, width: number) => ({ stockId: 's', kind: 'sheet' as const, length, width, thickness: 18, material: 'ply', trim: 0, grain: 'along-length' as const });
-const place = (partId: string, piece: number, x: number, y: number, w: number, h: number) => ({ partId, instance: 1, label: partId, piece, x, y, w, h, rotated: false, locked: false });
+const piece = (length: number, width: number) => ({
+  stockId: 's',
+  kind: 'sheet' as const,
+  length,
+  width,
+  thickness: 18,
+  material: 'ply',
+  trim: 0,
+  grain: 'along-length' as const,
+});
+const place = (partId: string, piece: number, x: number, y: number, w: number, h: number) => ({
+  partId,
+  instance: 1,
+  label: partId,
+  piece,
+  x,
+  y,
+  w,
+  h,
+  rotated: false,
+  locked: false,
+});
 
 const doc: BenchDoc = {
   pieces: [piece(2440, 1220), piece(2440, 1220), piece(2440, 1220)],

@@ -85,8 +85,15 @@ export function fitView(frames: readonly PieceFrame[], width: number, height: nu
   const h = Math.max(1, ...frames.map((f) => f.y + f.h)) + PIECE_GAP;
   // The first row's captions sit above the pieces: keep room for them on screen at any zoom.
   const top = margin + CAPTION_PX;
-  return { x: margin, y: top - CAPTION_SPACE * Math.min((width - margin) / w, (height - top) / h), scale: Math.min((width - margin) / w, (height - top) / h) };
+  return {
+    x: margin,
+    y: top - CAPTION_SPACE * Math.min((width - margin) / w, (height - top) / h),
+    scale: Math.min((width - margin) / w, (height - top) / h),
+  };
 }
 
 /** Screen position of a point given in a piece's own coordinates. */
-export const toScreen = (view: View, frame: Rect, x: number, y: number) => ({ x: view.x + (frame.x + x) * view.scale, y: view.y + (frame.y + y) * view.scale });
+export const toScreen = (view: View, frame: Rect, x: number, y: number) => ({
+  x: view.x + (frame.x + x) * view.scale,
+  y: view.y + (frame.y + y) * view.scale,
+});

@@ -39,9 +39,12 @@ describe('board feet by exact volume', () => {
     expect(boardFeet(block)).toBeCloseTo(423.776, 3);
   });
 
-  test.each([[{ quarters: 1.5 }], [{ quarters: -4 }], [{ quarters: 0 }], [{ mm: -3 }], [{ mm: Number.NaN }]])('refuses the thickness %j', (thickness) => {
-    expect(() => boardFeet({ thickness, widthMm: inches(6), lengthMm: ft(8) })).toThrow(RangeError);
-  });
+  test.each([[{ quarters: 1.5 }], [{ quarters: -4 }], [{ quarters: 0 }], [{ mm: -3 }], [{ mm: Number.NaN }]])(
+    'refuses the thickness %j',
+    (thickness) => {
+      expect(() => boardFeet({ thickness, widthMm: inches(6), lengthMm: ft(8) })).toThrow(RangeError);
+    },
+  );
 
   test('a board with no width is refused rather than counted as nothing', () => {
     expect(() => boardFeet({ thickness: { quarters: 4 }, widthMm: 0, lengthMm: 100 })).toThrow(/width must be a positive/);

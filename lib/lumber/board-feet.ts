@@ -12,7 +12,8 @@ export const BOARD_FEET_PER_CUBIC_METRE = MM3_PER_CUBIC_METRE / MM3_PER_BOARD_FO
 
 /** A board's width and length, each from 0.5 mm (below, a typing slip) to the 100 m past which a length is a slipped unit. */
 export function boardSides({ widthMm, lengthMm }: Pick<Board, 'widthMm' | 'lengthMm'>): { widthMm: number; lengthMm: number } {
-  const side = (what: string, mm: number) => requireAtMost(what, requireAtLeast(what, requirePositive(what, mm), MIN_LENGTH_MM, 'mm'), MAX_LENGTH_MM, 'mm');
+  const side = (what: string, mm: number) =>
+    requireAtMost(what, requireAtLeast(what, requirePositive(what, mm), MIN_LENGTH_MM, 'mm'), MAX_LENGTH_MM, 'mm');
   return { widthMm: side('width', widthMm), lengthMm: side('length', lengthMm) };
 }
 
@@ -31,6 +32,7 @@ export const cubicMetres = (board: Board): number => volumeMm3(board) / MM3_PER_
 /** Past a million board feet a number is a slipped unit (a large yard stocks a few hundred thousand). */
 const MAX_BOARD_FEET = 1e9;
 
-export const boardFeetToCubicMetres = (bf: number): number => requireAtMost('board feet', requireNonNegative('board feet', bf), MAX_BOARD_FEET, 'BF') / BOARD_FEET_PER_CUBIC_METRE;
+export const boardFeetToCubicMetres = (bf: number): number =>
+  requireAtMost('board feet', requireNonNegative('board feet', bf), MAX_BOARD_FEET, 'BF') / BOARD_FEET_PER_CUBIC_METRE;
 export const cubicMetresToBoardFeet = (m3: number): number =>
   requireAtMost('volume', requireNonNegative('volume', m3), MAX_BOARD_FEET / BOARD_FEET_PER_CUBIC_METRE, 'm³') * BOARD_FEET_PER_CUBIC_METRE;

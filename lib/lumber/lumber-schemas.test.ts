@@ -23,7 +23,9 @@ describe('lumber input schemas', () => {
 
   test('a board needs positive width and length', () => {
     expect(boardSchema.safeParse({ thickness: { quarters: 4 }, widthMm: 150, lengthMm: 2400 }).success).toBe(true);
-    expect(boardSchema.safeParse({ thickness: { quarters: 4 }, widthMm: -1, lengthMm: 2400 }).error?.issues[0].message).toMatch(/width must be greater than zero/);
+    expect(boardSchema.safeParse({ thickness: { quarters: 4 }, widthMm: -1, lengthMm: 2400 }).error?.issues[0].message).toMatch(
+      /width must be greater than zero/,
+    );
   });
 
   test('a waste factor is a fraction below 1', () => {

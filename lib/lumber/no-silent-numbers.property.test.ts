@@ -10,7 +10,11 @@ import { thicknessInches, thicknessMm } from './thickness';
 import { dimensionalChange, movementWarning } from './wood-movement';
 
 const SEED = 20261202;
-const anyNumber = fc.oneof(fc.double(), fc.integer(), fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, -1, 0, 1e308, 5e-324));
+const anyNumber = fc.oneof(
+  fc.double(),
+  fc.integer(),
+  fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, -1, 0, 1e308, 5e-324),
+);
 /** Mostly plausible sizes (so the arithmetic is exercised), with any number mixed in. */
 const size = fc.oneof(fc.double({ min: 1, max: 6000, noNaN: true }), anyNumber);
 const thickness = fc.oneof(fc.record({ quarters: fc.oneof(fc.integer({ min: -4, max: 60 }), anyNumber) }), fc.record({ mm: size }));
@@ -23,7 +27,10 @@ describe('no public function of lib/lumber returns a silent wrong number (seeded
         const positive = (v: number) => expect(v).toBeGreaterThan(0);
         expectSaneOrRefused(() => boardFeet(b), positive);
         expectSaneOrRefused(() => cubicMetres(b), positive);
-        expectSaneOrRefused(() => tally(b), (t) => expect(t.boardFeet >= 0 && Number.isInteger(t.surfaceMeasure) && Number.isInteger(t.lengthFt)).toBe(true));
+        expectSaneOrRefused(
+          () => tally(b),
+          (t) => expect(t.boardFeet >= 0 && Number.isInteger(t.surfaceMeasure) && Number.isInteger(t.lengthFt)).toBe(true),
+        );
         expectSaneOrRefused(() => thicknessInches(b.thickness), positive);
         expectSaneOrRefused(() => thicknessMm(b.thickness), positive);
       }),
@@ -46,12 +53,20 @@ describe('no public function of lib/lumber returns a silent wrong number (seeded
 
   test('buyQuantity: never less than the need, whole steps, finite — or refused (an infinite step included)', () => {
     fc.assert(
-      fc.property(fc.oneof(fc.double({ min: 0, max: 1e6, noNaN: true }), anyNumber), fc.oneof(fc.double({ min: 0, max: 0.95, noNaN: true }), anyNumber), fc.oneof(fc.constantFrom(1, 0.5, 10), anyNumber), (need, waste, step) => {
-        expectSaneOrRefused(() => buyQuantity(need, waste, { step }), (q) => {
-          expect(q.buy).toBeGreaterThanOrEqual(need - 1e-9);
-          expect(q.exact).toBeGreaterThanOrEqual(need - 1e-9);
-        });
-      }),
+      fc.property(
+        fc.oneof(fc.double({ min: 0, max: 1e6, noNaN: true }), anyNumber),
+        fc.oneof(fc.double({ min: 0, max: 0.95, noNaN: true }), anyNumber),
+        fc.oneof(fc.constantFrom(1, 0.5, 10), anyNumber),
+        (need, waste, step) => {
+          expectSaneOrRefused(
+            () => buyQuantity(need, waste, { step }),
+            (q) => {
+              expect(q.buy).toBeGreaterThanOrEqual(need - 1e-9);
+              expect(q.exact).toBeGreaterThanOrEqual(need - 1e-9);
+            },
+          );
+        },
+      ),
       { seed: SEED, numRuns: 1000 },
     );
     expect(() => buyQuantity(10, 0.1, { step: Number.POSITIVE_INFINITY })).toThrow(RangeError);
@@ -59,11 +74,18 @@ describe('no public function of lib/lumber returns a silent wrong number (seeded
 
   test('wood movement: a finite change and a warning without NaN, or refused', () => {
     fc.assert(
-      fc.property(fc.oneof(fc.constantFrom(...SPECIES_IDS), fc.constantFrom('__proto__', 'toString', 'balsa')), size, fc.constantFrom('flatsawn', 'quartersawn', 'riftsawn', 'Quartersawn'), fc.oneof(fc.double({ min: 0, max: 30, noNaN: true }), anyNumber), fc.oneof(fc.double({ min: 0, max: 30, noNaN: true }), anyNumber), (species, widthMm, cut, mcFrom, mcTo) => {
-        const input = { species, widthMm, cut, mcFrom, mcTo } as never;
-        expectSaneOrRefused(() => dimensionalChange(input));
-        expectSaneOrRefused(() => movementWarning({ ...(input as object), fixedAcrossWidth: true } as never));
-      }),
+      fc.property(
+        fc.oneof(fc.constantFrom(...SPECIES_IDS), fc.constantFrom('__proto__', 'toString', 'balsa')),
+        size,
+        fc.constantFrom('flatsawn', 'quartersawn', 'riftsawn', 'Quartersawn'),
+        fc.oneof(fc.double({ min: 0, max: 30, noNaN: true }), anyNumber),
+        fc.oneof(fc.double({ min: 0, max: 30, noNaN: true }), anyNumber),
+        (species, widthMm, cut, mcFrom, mcTo) => {
+          const input = { species, widthMm, cut, mcFrom, mcTo } as never;
+          expectSaneOrRefused(() => dimensionalChange(input));
+          expectSaneOrRefused(() => movementWarning({ ...(input as object), fixedAcrossWidth: true } as never));
+        },
+      ),
       { seed: SEED, numRuns: 1000 },
     );
   });

@@ -1,12 +1,14 @@
 /** Domain functions trust their zod-checked inputs but still refuse nonsense rather than return it. */
 export function requirePositive(what: string, value: number): number {
-  if (typeof value !== 'number' || !(value > 0) || !Number.isFinite(value)) throw new RangeError(`The ${what} must be a positive number (got ${String(value)}).`);
+  if (typeof value !== 'number' || !(value > 0) || !Number.isFinite(value))
+    throw new RangeError(`The ${what} must be a positive number (got ${String(value)}).`);
   return value;
 }
 
 /** Zero or more, and finite: a quantity, a price, a volume. */
 export function requireNonNegative(what: string, value: number): number {
-  if (typeof value !== 'number' || !(value >= 0) || !Number.isFinite(value)) throw new RangeError(`The ${what} must be zero or more (got ${String(value)}).`);
+  if (typeof value !== 'number' || !(value >= 0) || !Number.isFinite(value))
+    throw new RangeError(`The ${what} must be zero or more (got ${String(value)}).`);
   return value;
 }
 

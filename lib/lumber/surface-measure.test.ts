@@ -7,7 +7,12 @@ const ft = (n: number) => inches(12 * n);
 
 describe('the NHLA-style tally (AHEC "Measurement")', () => {
   test('AHEC: 2″ × 6¼″ × 8′ tallies SM 4 and 8 BF, against 8.33 BF exact', () => {
-    expect(tally({ thickness: { quarters: 8 }, widthMm: inches(6.25), lengthMm: ft(8) })).toEqual({ widthIn: 6.25, lengthFt: 8, surfaceMeasure: 4, boardFeet: 8 });
+    expect(tally({ thickness: { quarters: 8 }, widthMm: inches(6.25), lengthMm: ft(8) })).toEqual({
+      widthIn: 6.25,
+      lengthFt: 8,
+      surfaceMeasure: 4,
+      boardFeet: 8,
+    });
   });
 
   test('AHEC: 10″ × 13′ has surface measure 10.83, tallied as 11', () => {

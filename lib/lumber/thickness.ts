@@ -11,7 +11,8 @@ export const MAX_BOARD_THICKNESS_MM = 1000;
 function checked(t: Thickness): Thickness {
   if (!t || typeof t !== 'object') throw new RangeError('Give the thickness as { quarters } (5 for 5/4) or { mm }.');
   if ('quarters' in t) {
-    if (!Number.isInteger(t.quarters) || t.quarters < 1 || t.quarters > 48) throw new RangeError(`Quarters are whole numbers from 1 to 48, as 5 for 5/4 (got ${t.quarters}).`);
+    if (!Number.isInteger(t.quarters) || t.quarters < 1 || t.quarters > 48)
+      throw new RangeError(`Quarters are whole numbers from 1 to 48, as 5 for 5/4 (got ${t.quarters}).`);
     return t;
   }
   requireAtMost('thickness', requireAtLeast('thickness', requirePositive('thickness', t.mm), MIN_LENGTH_MM, 'mm'), MAX_BOARD_THICKNESS_MM, 'mm');

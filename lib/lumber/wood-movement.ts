@@ -40,7 +40,19 @@ function moisture(what: string, mc: number): number {
 }
 
 /** ΔW = W × C × (MC_to − MC_from), USDA FPL Wood Handbook (FPL-GTR-190, 2010), ch. 13, eq. 13-2. */
-export function dimensionalChange({ species, widthMm, cut, mcFrom, mcTo }: { species: SpeciesId; widthMm: Mm; cut: SawnCut; mcFrom: number; mcTo: number }): DimensionalChange & { basis: 'radial' | 'tangential' } {
+export function dimensionalChange({
+  species,
+  widthMm,
+  cut,
+  mcFrom,
+  mcTo,
+}: {
+  species: SpeciesId;
+  widthMm: Mm;
+  cut: SawnCut;
+  mcFrom: number;
+  mcTo: number;
+}): DimensionalChange & { basis: 'radial' | 'tangential' } {
   if (!Object.hasOwn(SPECIES, species)) throw new RangeError(`Unknown species "${species}": use one of ${Object.keys(SPECIES).join(', ')}.`);
   if (!Object.hasOwn(COEFFICIENT_FOR_CUT, cut)) throw new RangeError(`Unknown cut "${cut}": use flatsawn, quartersawn or riftsawn.`);
   const width = requirePositive('width', widthMm);
@@ -68,11 +80,15 @@ export function movementWarning(input: MovementInput, units: ShopUnits = DEFAULT
   const amount = Math.abs(changeMm);
   if (amount <= thresholdMm) return null;
 
-  const moved =
-    units.system === 'metric' ? `${amount.toFixed(1)} mm` : `${(amount / MM_PER_INCH).toFixed(3)}″ (${amount.toFixed(1)} mm)`;
-  const remedy = cut === 'flatsawn' ? 'let it float in a groove or on slotted holes, or use quartersawn stock or plywood' : 'let it float in a groove or on slotted holes, or use plywood';
+  const moved = units.system === 'metric' ? `${amount.toFixed(1)} mm` : `${(amount / MM_PER_INCH).toFixed(3)}″ (${amount.toFixed(1)} mm)`;
+  const remedy =
+    cut === 'flatsawn'
+      ? 'let it float in a groove or on slotted holes, or use quartersawn stock or plywood'
+      : 'let it float in a groove or on slotted holes, or use plywood';
   const caveat =
-    (withinValidRange ? '' : ` This is only an estimate: the handbook's coefficients hold between ${MOVEMENT_VALID_MC.min} % and ${MOVEMENT_VALID_MC.max} % moisture content.`) +
+    (withinValidRange
+      ? ''
+      : ` This is only an estimate: the handbook's coefficients hold between ${MOVEMENT_VALID_MC.min} % and ${MOVEMENT_VALID_MC.max} % moisture content.`) +
     (cut === 'riftsawn' ? ` Figured with the ${basis} (quartersawn) coefficient: rift moves a little more.` : '');
   return (
     `A ${formatLength(widthMm, units)} wide ${cut} ${SPECIES[species].name} panel fixed across its width will ` +

@@ -4,7 +4,12 @@ import { appBaseUrl, mailConfig } from './config';
 describe('where mail goes (lib/mail/config)', () => {
   test('a real SMTP_URL: real delivery, and no demo catcher (the Sent mail page is refused)', () => {
     const c = mailConfig({ SMTP_URL: 'smtp://user:pw@mail.example.com:587', MAIL_FROM: 'Larkspur <office@larkspur.example>' });
-    expect(c).toEqual({ mode: 'smtp', url: 'smtp://user:pw@mail.example.com:587', from: 'Larkspur <office@larkspur.example>', domain: 'larkspur.example' });
+    expect(c).toEqual({
+      mode: 'smtp',
+      url: 'smtp://user:pw@mail.example.com:587',
+      from: 'Larkspur <office@larkspur.example>',
+      domain: 'larkspur.example',
+    });
   });
 
   test('no SMTP_URL: the local catcher, storing into the data directory’s mail folder', () => {

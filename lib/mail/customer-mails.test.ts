@@ -1,7 +1,17 @@
 import { describe, expect, test } from 'vitest';
 import { depositReceiptMail, quoteAcceptedMail, quoteMail } from './templates';
 
-const facts = { shopName: 'Larkspur Cabinet Works', customerName: 'Priya & Sam Hollis', title: 'Q-0004 rev B', jobName: 'Hollis <kitchen>', total: '$609.57', deposit: '$304.79', noDeposit: false, validUntil: '2027-01-02', link: 'http://localhost:3000/q/AbC_123' };
+const facts = {
+  shopName: 'Larkspur Cabinet Works',
+  customerName: 'Priya & Sam Hollis',
+  title: 'Q-0004 rev B',
+  jobName: 'Hollis <kitchen>',
+  total: '$609.57',
+  deposit: '$304.79',
+  noDeposit: false,
+  validUntil: '2027-01-02',
+  link: 'http://localhost:3000/q/AbC_123',
+};
 
 describe('the customer’s mails', () => {
   test('the quote: the link on a line of its own in the text part, the same link as the button, every value escaped in the HTML', () => {
@@ -18,7 +28,9 @@ describe('the customer’s mails', () => {
 
   test('no deposit asked: the mails say so instead of a sum', () => {
     expect(quoteMail({ ...facts, noDeposit: true, replaces: null }).text).toContain('No deposit is asked for.');
-    expect(quoteAcceptedMail({ ...facts, noDeposit: true, acceptedName: 'Priya Hollis', acceptedAt: 'Dec 3, 2026' }).text).toContain('No deposit is needed');
+    expect(quoteAcceptedMail({ ...facts, noDeposit: true, acceptedName: 'Priya Hollis', acceptedAt: 'Dec 3, 2026' }).text).toContain(
+      'No deposit is needed',
+    );
   });
 
   test('the receipt: what was paid, the balance, the reference, and no button (nothing more to do)', () => {

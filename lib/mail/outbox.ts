@@ -25,7 +25,12 @@ export const outboxMessageSchema = z.object({
   shopId: z.uuid(),
   kind: z.enum(MAIL_KINDS),
   to: z.email('The recipient’s e-mail address is not valid.').max(320),
-  subject: z.string().trim().min(1, 'A mail needs a subject.').max(300).refine((s) => !/[\r\n]/.test(s), 'A subject is one line.'),
+  subject: z
+    .string()
+    .trim()
+    .min(1, 'A mail needs a subject.')
+    .max(300)
+    .refine((s) => !/[\r\n]/.test(s), 'A subject is one line.'),
   /** The plain-text part: always there, and complete on its own. */
   text: z.string().min(1, 'A mail needs a plain-text part.').max(200_000),
   /** The HTML part (no remote images, no tracking). */
@@ -33,7 +38,12 @@ export const outboxMessageSchema = z.object({
   attachments: z
     .array(
       z.object({
-        filename: z.string().trim().min(1).max(200).refine((s) => !/[\r\n/\\]/.test(s), 'An attachment name has no slashes or line breaks.'),
+        filename: z
+          .string()
+          .trim()
+          .min(1)
+          .max(200)
+          .refine((s) => !/[\r\n/\\]/.test(s), 'An attachment name has no slashes or line breaks.'),
         contentType: z.string().regex(/^[\w.+-]+\/[\w.+-]+$/, 'A content type looks like application/pdf.'),
         content: z.base64('Attachment content must be base64.'),
       }),

@@ -95,7 +95,12 @@ export function createMailSender(options: SenderOptions) {
             claimedUntil: null,
             lastError: 'Sending stopped twice before this could be marked sent; it may have arrived. Check with the recipient before trying again.',
           })
-          .where(inArray(mailOutbox.id, uncertain.map((r) => r.id)));
+          .where(
+            inArray(
+              mailOutbox.id,
+              uncertain.map((r) => r.id),
+            ),
+          );
       }
       const taken = due.filter((r) => !uncertain.includes(r));
       const claimed: OutboxRow[] = [];
@@ -136,7 +141,11 @@ export function createMailSender(options: SenderOptions) {
         .update(mailOutbox)
         .set(
           giveUp
-            ? { status: 'failed', claimedUntil: null, lastError: permanent ? `Refused by the mail server: ${why}` : `Gave up after ${row.attempts} attempts: ${why}` }
+            ? {
+                status: 'failed',
+                claimedUntil: null,
+                lastError: permanent ? `Refused by the mail server: ${why}` : `Gave up after ${row.attempts} attempts: ${why}`,
+              }
             : { status: 'pending', claimedUntil: null, lastError: why, nextAttemptAt: new Date(now().getTime() + backoffMs(row.attempts)) },
         )
         .where(and(eq(mailOutbox.id, row.id), eq(mailOutbox.status, 'sending')));

@@ -38,13 +38,24 @@ function layout(shopName: string, paragraphs: string[], button: { label: string;
   return mailFrame(
     shopName,
     `${paragraphs.map(p).join('\n')}
-${button ? `<p style="margin:24px 0"><a href="${escapeHtml(button.href)}" style="display:inline-block;background:#2b2a27;color:#ffffff;text-decoration:none;padding:12px 20px;border-radius:6px;font-size:15px;font-weight:600">${escapeHtml(button.label)}</a></p>
+${
+  button
+    ? `<p style="margin:24px 0"><a href="${escapeHtml(button.href)}" style="display:inline-block;background:#2b2a27;color:#ffffff;text-decoration:none;padding:12px 20px;border-radius:6px;font-size:15px;font-weight:600">${escapeHtml(button.label)}</a></p>
 <p style="margin:0 0 16px;font-size:13px;line-height:1.5;color:#7a766c">If the button does not work, copy this address into your browser:<br><span style="word-break:break-all;color:#2b2a27">${escapeHtml(button.href)}</span></p>
-` : ''}${after.map((a) => `<p style="margin:0 0 12px;font-size:13px;line-height:1.5;color:#7a766c">${a}</p>`).join('\n')}`,
+`
+    : ''
+}${after.map((a) => `<p style="margin:0 0 12px;font-size:13px;line-height:1.5;color:#7a766c">${a}</p>`).join('\n')}`,
   );
 }
 
-export function inviteMail(input: { shopName: string; inviterName: string; personName: string; role: Role; link: string; expiresAt: Date }): RenderedMail {
+export function inviteMail(input: {
+  shopName: string;
+  inviterName: string;
+  personName: string;
+  role: Role;
+  link: string;
+  expiresAt: Date;
+}): RenderedMail {
   const role = ROLE_LABELS[input.role].toLowerCase();
   const article = /^[aeiou]/.test(role) ? 'an' : 'a';
   const subject = `${input.inviterName} invited you to ${input.shopName} on Kerfwise`;
@@ -121,7 +132,13 @@ function renderCustomerMail(m: CustomerMail): RenderedMail {
   const plain = (p: Run[]) => p.map((r) => (typeof r === 'string' ? r : r.strong)).join('');
   const html = (p: Run[]) => p.map((r) => (typeof r === 'string' ? escapeHtml(r) : `<strong>${escapeHtml(r.strong)}</strong>`)).join('');
   const [greeting, ...body] = m.paragraphs;
-  const blocks = [[plain(greeting)], ...body.map((p) => [plain(p)]), ...(m.button ? [[m.button.lead, '', m.button.href]] : []), ...m.after.map((a) => [a]), [`— ${m.shopName}`]];
+  const blocks = [
+    [plain(greeting)],
+    ...body.map((p) => [plain(p)]),
+    ...(m.button ? [[m.button.lead, '', m.button.href]] : []),
+    ...m.after.map((a) => [a]),
+    [`— ${m.shopName}`],
+  ];
   const text = `${blocks.map((b) => b.join('\n')).join('\n\n')}\n`;
   return { subject: m.subject, text, html: layout(m.shopName, m.paragraphs.map(html), m.button, m.after.map(escapeHtml)) };
 }
@@ -158,7 +175,9 @@ export function quoteMail(q: QuoteMailFacts & { replaces: string | null }): Rend
 }
 
 export function quoteAcceptedMail(q: QuoteMailFacts & { acceptedName: string; acceptedAt: string }): RenderedMail {
-  const next = q.noDeposit ? 'No deposit is needed: the shop will be in touch about the next steps.' : `The next step is the deposit of ${q.deposit}, paid online on the quote's page.`;
+  const next = q.noDeposit
+    ? 'No deposit is needed: the shop will be in touch about the next steps.'
+    : `The next step is the deposit of ${q.deposit}, paid online on the quote's page.`;
   return renderCustomerMail({
     shopName: q.shopName,
     subject: `${q.shopName}: you accepted quote ${q.title}`,
@@ -172,7 +191,9 @@ export function quoteAcceptedMail(q: QuoteMailFacts & { acceptedName: string; ac
   });
 }
 
-export function depositReceiptMail(q: Omit<QuoteMailFacts, 'link' | 'validUntil'> & { paid: string; paidAt: string; balance: string; reference: string }): RenderedMail {
+export function depositReceiptMail(
+  q: Omit<QuoteMailFacts, 'link' | 'validUntil'> & { paid: string; paidAt: string; balance: string; reference: string },
+): RenderedMail {
   return renderCustomerMail({
     shopName: q.shopName,
     subject: `${q.shopName}: deposit received for ${q.title}`,

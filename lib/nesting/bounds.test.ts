@@ -44,13 +44,13 @@ describe('the 500 standard instances (classes I–X, bench/data/README.md)', () 
     expect(sum(totals)).toBe(7064);
   });
 
-  test('Dell\'Amico, Martello & Vigo (Discrete Applied Mathematics 118, 2002) with rotation totals 6,769 with the published per-class split', () => {
+  test("Dell'Amico, Martello & Vigo (Discrete Applied Mathematics 118, 2002) with rotation totals 6,769 with the published per-class split", () => {
     const totals = totalsPerClass(instances, (i) => dellAmicoMartelloVigo(i.items, i.bin));
     expect(totals).toEqual([936, 124, 642, 119, 821, 108, 719, 721, 2103, 476]);
     expect(sum(totals)).toBe(6769);
   });
 
-  test('our whole-item rotation bound is never below Dell\'Amico, Martello & Vigo on any instance, and lowerBound takes the larger', () => {
+  test("our whole-item rotation bound is never below Dell'Amico, Martello & Vigo on any instance, and lowerBound takes the larger", () => {
     for (const inst of instances) {
       const dmv = dellAmicoMartelloVigo(inst.items, inst.bin);
       expect(rotationBound(inst.items, inst.bin), inst.name).toBeGreaterThanOrEqual(dmv);
@@ -73,39 +73,79 @@ describe('the 500 standard instances (classes I–X, bench/data/README.md)', () 
 describe('worked examples', () => {
   const bin = { w: 10, h: 10 };
   test.each([
-    { label: '[derived] L0: 3 × (6 × 6) = 108 of a 100-unit bin → 2', items: [[6, 6], [6, 6], [6, 6]], rotation: false, l0: 2, bound: 3 },
-    { label: '[derived] items wider and taller than half the bin never share one, turned or not → 3', items: [[6, 6], [6, 6], [6, 6]], rotation: true, l0: 2, bound: 3 },
+    {
+      label: '[derived] L0: 3 × (6 × 6) = 108 of a 100-unit bin → 2',
+      items: [
+        [6, 6],
+        [6, 6],
+        [6, 6],
+      ],
+      rotation: false,
+      l0: 2,
+      bound: 3,
+    },
+    {
+      label: '[derived] items wider and taller than half the bin never share one, turned or not → 3',
+      items: [
+        [6, 6],
+        [6, 6],
+        [6, 6],
+      ],
+      rotation: true,
+      l0: 2,
+      bound: 3,
+    },
     {
       label: '[derived] four 6 × 4 fixed: only two stack in 10 (4 + 4 ≤ 10 < 12), none side by side (6 + 6 > 10) → 2',
-      items: [[6, 4], [6, 4], [6, 4], [6, 4]],
+      items: [
+        [6, 4],
+        [6, 4],
+        [6, 4],
+        [6, 4],
+      ],
       rotation: false,
       l0: 1,
       bound: 2,
     },
     {
       label: '[derived] the same four 6 × 4 turned freely fit one bin as a pinwheel round a 2 × 2 hole, so the bound must stay 1',
-      items: [[6, 4], [6, 4], [6, 4], [6, 4]],
+      items: [
+        [6, 4],
+        [6, 4],
+        [6, 4],
+        [6, 4],
+      ],
       rotation: true,
       l0: 1,
       bound: 1,
     },
     {
       label: '[derived] a 9 × 9 item leaves only 1-wide strips, so a 2 × 2 cannot join it (area 85 → L0 1) → 2',
-      items: [[9, 9], [2, 2]],
+      items: [
+        [9, 9],
+        [2, 2],
+      ],
       rotation: true,
       l0: 1,
       bound: 2,
     },
     {
       label: '[derived] a 6 × 6 and a 5 × 5 (area 61 → L0 1) cannot share a bin either way round: 6 + 5 > 10 across and along → 2',
-      items: [[6, 6], [5, 5]],
+      items: [
+        [6, 6],
+        [5, 5],
+      ],
       rotation: true,
       l0: 1,
       bound: 2,
     },
     {
       label: '[derived] two 9 × 9 and one 5 × 5 (area 187 → L0 2): the 5 × 5 fits beside neither → 3',
-      items: [[9, 9], [9, 9], [5, 5]],
+      items: [
+        [9, 9],
+        [9, 9],
+        [5, 5],
+      ],
       rotation: true,
       l0: 2,
       bound: 3,
@@ -116,7 +156,7 @@ describe('worked examples', () => {
     expect(lowerBound(sizes, bin, rotation)).toBe(bound);
   });
 
-  test('[derived] a 6 × 6 and three 5 × 9 turned freely: the 6 × 6 fits beside none of them (6 + 5 > 10 both ways) and only two 5 × 9 share a bin, so 3 bins; cut into squares (Dell\'Amico, Martello & Vigo) the 5 × 9 keep only a 5 × 5 of side ≥ 5 and give 2', () => {
+  test("[derived] a 6 × 6 and three 5 × 9 turned freely: the 6 × 6 fits beside none of them (6 + 5 > 10 both ways) and only two 5 × 9 share a bin, so 3 bins; cut into squares (Dell'Amico, Martello & Vigo) the 5 × 9 keep only a 5 × 5 of side ≥ 5 and give 2", () => {
     const sizes = [{ w: 6, h: 6 }, ...Array.from({ length: 3 }, () => ({ w: 5, h: 9 }))];
     expect(continuousBound(sizes, bin)).toBe(2);
     expect(dellAmicoMartelloVigo(sizes, bin)).toBe(2);
@@ -125,7 +165,10 @@ describe('worked examples', () => {
   });
 
   test('[derived] with fixed orientation a 6 × 6 and a 5 × 5 cannot share a 10 × 10 bin: L2 of Martello & Vigo gives 1, lowerBound 2 from the rotation argument, which holds a fortiori', () => {
-    const sizes = [{ w: 6, h: 6 }, { w: 5, h: 5 }];
+    const sizes = [
+      { w: 6, h: 6 },
+      { w: 5, h: 5 },
+    ];
     expect(martelloVigoL2(sizes, bin)).toBe(1);
     expect(lowerBound(sizes, bin, false)).toBe(2);
   });
@@ -137,11 +180,42 @@ describe('worked examples', () => {
   });
 
   test.each([
-    { label: '[derived] two 1300 × 700 parts on a 2440 × 1220 sheet: 2600 > 2440 side by side, 1400 > 1220 stacked, and turned they do not fit → 2 sheets', items: [[1300, 700], [1300, 700]], rotation: true, bound: 2 },
-    { label: '[derived] the same two parts with grain locked → 2 sheets', items: [[1300, 700], [1300, 700]], rotation: false, bound: 2 },
-    { label: '[derived] two 1200 × 700 parts stand side by side (2400 ≤ 2440) → 1 sheet', items: [[1200, 700], [1200, 700]], rotation: true, bound: 1 },
+    {
+      label:
+        '[derived] two 1300 × 700 parts on a 2440 × 1220 sheet: 2600 > 2440 side by side, 1400 > 1220 stacked, and turned they do not fit → 2 sheets',
+      items: [
+        [1300, 700],
+        [1300, 700],
+      ],
+      rotation: true,
+      bound: 2,
+    },
+    {
+      label: '[derived] the same two parts with grain locked → 2 sheets',
+      items: [
+        [1300, 700],
+        [1300, 700],
+      ],
+      rotation: false,
+      bound: 2,
+    },
+    {
+      label: '[derived] two 1200 × 700 parts stand side by side (2400 ≤ 2440) → 1 sheet',
+      items: [
+        [1200, 700],
+        [1200, 700],
+      ],
+      rotation: true,
+      bound: 1,
+    },
   ])('$label', ({ items, rotation, bound }) => {
-    expect(lowerBound(items.map(([w, h]) => ({ w, h })), { w: 2440, h: 1220 }, rotation)).toBe(bound);
+    expect(
+      lowerBound(
+        items.map(([w, h]) => ({ w, h })),
+        { w: 2440, h: 1220 },
+        rotation,
+      ),
+    ).toBe(bound);
   });
 
   test('an empty list needs no bins', () => {
@@ -154,9 +228,30 @@ describe('bad input is refused with a clear error', () => {
   const square = { w: 10, h: 10 };
   const long = { w: 10, h: 20 };
   test.each([
-    { label: 'an item longer than the bin', items: [{ w: 11, h: 2 }], bin: square, rotation: false, message: /item 0 \(11 × 2\) does not fit the 10 × 10 bin/ },
-    { label: 'an item that fits only turned, when turning is not allowed', items: [{ w: 12, h: 4 }], bin: long, rotation: false, message: /does not fit the 10 × 20 bin$/ },
-    { label: 'an item too big either way round', items: [{ w: 1, h: 1 }, { w: 21, h: 4 }], bin: long, rotation: true, message: /item 1 \(21 × 4\) does not fit the 10 × 20 bin either way round/ },
+    {
+      label: 'an item longer than the bin',
+      items: [{ w: 11, h: 2 }],
+      bin: square,
+      rotation: false,
+      message: /item 0 \(11 × 2\) does not fit the 10 × 10 bin/,
+    },
+    {
+      label: 'an item that fits only turned, when turning is not allowed',
+      items: [{ w: 12, h: 4 }],
+      bin: long,
+      rotation: false,
+      message: /does not fit the 10 × 20 bin$/,
+    },
+    {
+      label: 'an item too big either way round',
+      items: [
+        { w: 1, h: 1 },
+        { w: 21, h: 4 },
+      ],
+      bin: long,
+      rotation: true,
+      message: /item 1 \(21 × 4\) does not fit the 10 × 20 bin either way round/,
+    },
     { label: 'a zero size', items: [{ w: 0, h: 2 }], bin: square, rotation: true, message: /item 0 size must be positive/ },
     { label: 'a NaN size', items: [{ w: Number.NaN, h: 2 }], bin: square, rotation: true, message: /item 0 size must be positive/ },
   ])('$label', ({ items, bin, rotation, message }) => {
@@ -187,7 +282,7 @@ describe('properties', () => {
     );
   });
 
-  test('on square bins the whole-item rotation bound is never below the squares bound of Dell\'Amico, Martello & Vigo', () => {
+  test("on square bins the whole-item rotation bound is never below the squares bound of Dell'Amico, Martello & Vigo", () => {
     fc.assert(
       fc.property(instance, ({ bin, items }) => {
         const side = Math.min(bin.w, bin.h);

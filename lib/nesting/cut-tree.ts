@@ -102,8 +102,24 @@ export function withTrimsOnStrips(inner: CutNode, stock: Rect, trim: number, ker
     // first-stage rips, so the saw order makes it on the strip.
     const inner = (f: number, t: number): Rect => ({ x: x0 + trim, y: f, w: x1 - x0 - 2 * trim, h: t - f });
     let t: CutNode = node;
-    if (highEdgeOn) t = { type: 'cut', rect: inner(a, to), axis: 'y', pos: b, kerf, children: to - (b + kerf) > EPS ? [t, { type: 'leftover', rect: inner(b + kerf, to) }] : [t] };
-    if (lowEdgeOn) t = { type: 'cut', rect: inner(from, to), axis: 'y', pos: a - kerf, kerf, children: [{ type: 'leftover', rect: inner(from, Math.max(from, a - kerf)) }, t] };
+    if (highEdgeOn)
+      t = {
+        type: 'cut',
+        rect: inner(a, to),
+        axis: 'y',
+        pos: b,
+        kerf,
+        children: to - (b + kerf) > EPS ? [t, { type: 'leftover', rect: inner(b + kerf, to) }] : [t],
+      };
+    if (lowEdgeOn)
+      t = {
+        type: 'cut',
+        rect: inner(from, to),
+        axis: 'y',
+        pos: a - kerf,
+        kerf,
+        children: [{ type: 'leftover', rect: inner(from, Math.max(from, a - kerf)) }, t],
+      };
     return trimAlong(t, band(from, to), 'x', trim, kerf);
   };
   const run = (node: Extract<CutNode, { type: 'cut' }>, first: boolean): CutNode => {
@@ -143,7 +159,8 @@ export function checkTree(tree: CutNode, rect: Rect, items: readonly Rect[]): Tr
       if (!item) problems.push({ message: `the tree names item ${node.itemId}, which is not on this piece`, itemId: node.itemId });
       else {
         seen[node.itemId]++;
-        if (!sameRect(item, node.rect, EPS)) problems.push({ message: `the tree's leaf for item ${node.itemId} is not where the part is`, itemId: node.itemId });
+        if (!sameRect(item, node.rect, EPS))
+          problems.push({ message: `the tree's leaf for item ${node.itemId} is not where the part is`, itemId: node.itemId });
       }
       return;
     }
@@ -160,7 +177,8 @@ export function checkTree(tree: CutNode, rect: Rect, items: readonly Rect[]): Tr
   };
   walk(tree, rect);
   seen.forEach((n, i) => {
-    if (n !== 1) problems.push({ message: n === 0 ? `item ${i} is missing from the cut tree` : `item ${i} appears ${n} times in the cut tree`, itemId: i });
+    if (n !== 1)
+      problems.push({ message: n === 0 ? `item ${i} is missing from the cut tree` : `item ${i} appears ${n} times in the cut tree`, itemId: i });
   });
   return problems;
 }

@@ -5,7 +5,11 @@ import type { NestStock, PieceFigures, PlanPiece, PlanTotals, StockLine } from '
 const sum = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0);
 
 /** Yield = part area / stock area of the whole piece (trim and kerf count as waste). */
-export function pieceFigures(piece: Pick<PlanPiece, 'length' | 'width' | 'placements' | 'sawOrder'>, offcuts: readonly Rect[], costEach: number): PieceFigures {
+export function pieceFigures(
+  piece: Pick<PlanPiece, 'length' | 'width' | 'placements' | 'sawOrder'>,
+  offcuts: readonly Rect[],
+  costEach: number,
+): PieceFigures {
   const stockArea = piece.length * piece.width;
   const partArea = sum(piece.placements.map(area));
   const offcutArea = sum(offcuts.map(area));

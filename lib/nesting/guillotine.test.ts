@@ -68,7 +68,16 @@ describe('findGuillotineTree', () => {
   });
 
   test('finds no tree for overlapping parts', () => {
-    expect(findGuillotineTree(board, [{ x: 0, y: 0, w: 400, h: 300 }, { x: 300, y: 200, w: 400, h: 300 }], 0)).toBeNull();
+    expect(
+      findGuillotineTree(
+        board,
+        [
+          { x: 0, y: 0, w: 400, h: 300 },
+          { x: 300, y: 200, w: 400, h: 300 },
+        ],
+        0,
+      ),
+    ).toBeNull();
   });
 
   test('counts strip stages from the rips: a layout needing a fourth stage fails a 3-stage limit', () => {

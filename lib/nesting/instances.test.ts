@@ -4,11 +4,25 @@ import { InstanceParseError, parseInstanceLine, parseInstances } from './instanc
 describe('parsing the standard instance format (name;n;W;H;w,h[,count];…, bench/data/README.md)', () => {
   test('reads the name, class, bin and every item in order', () => {
     const inst = parseInstanceLine('cl07_020_03;3;100;100;70,20;20,70;55,60');
-    expect(inst).toEqual({ name: 'cl07_020_03', cls: 7, bin: { w: 100, h: 100 }, items: [{ w: 70, h: 20 }, { w: 20, h: 70 }, { w: 55, h: 60 }] });
+    expect(inst).toEqual({
+      name: 'cl07_020_03',
+      cls: 7,
+      bin: { w: 100, h: 100 },
+      items: [
+        { w: 70, h: 20 },
+        { w: 20, h: 70 },
+        { w: 55, h: 60 },
+      ],
+    });
   });
 
   test('expands an item count into that many items', () => {
-    expect(parseInstanceLine('x;4;10;10;2,3,3;5,5').items).toEqual([{ w: 2, h: 3 }, { w: 2, h: 3 }, { w: 2, h: 3 }, { w: 5, h: 5 }]);
+    expect(parseInstanceLine('x;4;10;10;2,3,3;5,5').items).toEqual([
+      { w: 2, h: 3 },
+      { w: 2, h: 3 },
+      { w: 2, h: 3 },
+      { w: 5, h: 5 },
+    ]);
   });
 
   test('a name outside the class pattern has no class, and a trailing ";" is allowed', () => {

@@ -80,15 +80,29 @@ describe('worked examples', () => {
   // Strip count (RULES.md): n = ⌊(L − trims + k) / (w + k)⌋ [derived]. Strips run the full length of the sheet
   // and may not turn, so the count across the sheet is exactly n.
   test.each([
-    { label: '48″ sheet, 11⅞″ strips, ⅛″ kerf → 4 (strip count, derived)', across: inches(48), w: inches(11 + 7 / 8), k: inches(1 / 8), trim: 0, n: 4 },
-    { label: 'the same with ¼″ edge trim → 3 (strip count, derived)', across: inches(48), w: inches(11 + 7 / 8), k: inches(1 / 8), trim: inches(1 / 4), n: 3 },
+    {
+      label: '48″ sheet, 11⅞″ strips, ⅛″ kerf → 4 (strip count, derived)',
+      across: inches(48),
+      w: inches(11 + 7 / 8),
+      k: inches(1 / 8),
+      trim: 0,
+      n: 4,
+    },
+    {
+      label: 'the same with ¼″ edge trim → 3 (strip count, derived)',
+      across: inches(48),
+      w: inches(11 + 7 / 8),
+      k: inches(1 / 8),
+      trim: inches(1 / 4),
+      n: 3,
+    },
   ])('$label', async ({ across, w, k, trim, n }) => {
     const length = inches(96);
-    const req = request(
-      [part('strip', length - 2 * trim, w, { quantity: 6 })],
-      [sheet('S', length, across, { count: 1 })],
-      { kerf: k, trim, style: 'strips' },
-    );
+    const req = request([part('strip', length - 2 * trim, w, { quantity: 6 })], [sheet('S', length, across, { count: 1 })], {
+      kerf: k,
+      trim,
+      style: 'strips',
+    });
     const plan = await optimize(req);
     expect(placedCount(plan)).toBe(n);
     expect(plan.unplaced.every((u) => u.reason === 'no-stock-left')).toBe(true);
@@ -106,7 +120,11 @@ describe('worked examples', () => {
     await fc.assert(
       fc.asyncProperty(arb, async ({ across, w, k, trim, style }) => {
         const n = Math.floor((across - 2 * trim + k) / (w + k) + 1e-9);
-        const req = request([part('strip', 1000 - 2 * trim, w, { quantity: n + 2 })], [sheet('S', 1000, across, { count: 1 })], { kerf: k, trim, style });
+        const req = request([part('strip', 1000 - 2 * trim, w, { quantity: n + 2 })], [sheet('S', 1000, across, { count: 1 })], {
+          kerf: k,
+          trim,
+          style,
+        });
         const plan = await optimize(req);
         expect(placedCount(plan)).toBe(Math.max(0, n));
       }),
@@ -115,11 +133,12 @@ describe('worked examples', () => {
   });
 
   test('2440 mm, 600 mm parts, 3.2 mm kerf, 10 mm trim each end → 4 parts, 10.4 mm left (strip count, derived)', async () => {
-    const req = request(
-      [part('door', 600, 1200, { quantity: 6 })],
-      [sheet('S', 2440, 1220, { count: 1 })],
-      { kerf: 3.2, trim: 10, minOffcutLength: 1, minOffcutWidth: 1 },
-    );
+    const req = request([part('door', 600, 1200, { quantity: 6 })], [sheet('S', 2440, 1220, { count: 1 })], {
+      kerf: 3.2,
+      trim: 10,
+      minOffcutLength: 1,
+      minOffcutWidth: 1,
+    });
     const plan = await optimize(req);
     const [piece] = plan.pieces;
     expect(piece.placements).toHaveLength(4);
@@ -133,8 +152,18 @@ describe('parts that cannot be placed are reported, never dropped', () => {
   test.each([
     { label: 'larger than any stock even turned', p: part('big', 3000, 500, { grain: 'any' }), stock: [sheet('S', 2440, 1220)], reason: 'too-large' },
     { label: 'fits only across the grain', p: part('long', 1000, 2000), stock: [sheet('S', 2440, 1220)], reason: 'grain' },
-    { label: 'stock on hand used up and none to buy', p: part('x', 2000, 1000, { quantity: 3 }), stock: [sheet('S', 2440, 1220, { count: 2 })], reason: 'no-stock-left' },
-    { label: 'no stock of that material at all', p: part('m', 500, 300, { material: 'walnut' }), stock: [sheet('S', 2440, 1220)], reason: 'no-stock' },
+    {
+      label: 'stock on hand used up and none to buy',
+      p: part('x', 2000, 1000, { quantity: 3 }),
+      stock: [sheet('S', 2440, 1220, { count: 2 })],
+      reason: 'no-stock-left',
+    },
+    {
+      label: 'no stock of that material at all',
+      p: part('m', 500, 300, { material: 'walnut' }),
+      stock: [sheet('S', 2440, 1220)],
+      reason: 'no-stock',
+    },
     { label: 'no stock of that thickness', p: part('t', 500, 300, { thickness: 12 }), stock: [sheet('S', 2440, 1220)], reason: 'no-stock' },
   ])('$label → $reason', async ({ p, stock, reason }) => {
     const req = request([p], stock);
@@ -156,7 +185,10 @@ describe('stock', () => {
   });
 
   test('lists sizes with no count as stock to buy, with their cost', async () => {
-    const req = request([part('side', 2000, 600, { quantity: 3 })], [sheet('S', 2440, 1220, { count: 1, costEach: 55 }), sheet('B', 2440, 1220, { costEach: 70 })]);
+    const req = request(
+      [part('side', 2000, 600, { quantity: 3 })],
+      [sheet('S', 2440, 1220, { count: 1, costEach: 55 }), sheet('B', 2440, 1220, { costEach: 70 })],
+    );
     const plan = await optimize(req);
     expect(validatePlan(req, plan)).toEqual([]);
     expect(plan.stockToPull).toEqual([expect.objectContaining({ stockId: 'S', count: 1, cost: 55 })]);
@@ -176,7 +208,11 @@ describe('totals', () => {
   test('count pieces by material and thickness, and yield is all part area over all stock area ([derived])', async () => {
     const req = request(
       [part('a', 1000, 500, { quantity: 2 }), part('b', 600, 400, { material: 'MDF', grain: 'any' }), part('c', 800, 300, { thickness: 12 })],
-      [sheet('P18', 2440, 1220), sheet('M18', 2440, 1220, { material: 'MDF', grain: 'none', costEach: 30 }), sheet('P12', 2440, 1220, { thickness: 12, costEach: 45 })],
+      [
+        sheet('P18', 2440, 1220),
+        sheet('M18', 2440, 1220, { material: 'MDF', grain: 'none', costEach: 30 }),
+        sheet('P12', 2440, 1220, { thickness: 12, costEach: 45 }),
+      ],
     );
     const plan = await optimize(req);
     expect(validatePlan(req, plan)).toEqual([]);
@@ -210,8 +246,17 @@ describe('progress and cancel', () => {
     const seen: { piecesUsed: number; yield: number; cost: number }[] = [];
     // Three groups: maple ply on an offcut and a sheet, MDF on its own sheet, and 12 mm birch.
     const req = request(
-      [part('a', 700, 500, { quantity: 7 }), part('m', 900, 400, { quantity: 3, material: 'MDF' }), part('b', 500, 300, { quantity: 4, material: 'Birch', thickness: 12 })],
-      [sheet('O', 800, 600, { kind: 'offcut', count: 1, costEach: 10 }), sheet('S', 2440, 1220), sheet('M', 2440, 1220, { material: 'MDF' }), sheet('B', 1525, 1525, { material: 'Birch', thickness: 12 })],
+      [
+        part('a', 700, 500, { quantity: 7 }),
+        part('m', 900, 400, { quantity: 3, material: 'MDF' }),
+        part('b', 500, 300, { quantity: 4, material: 'Birch', thickness: 12 }),
+      ],
+      [
+        sheet('O', 800, 600, { kind: 'offcut', count: 1, costEach: 10 }),
+        sheet('S', 2440, 1220),
+        sheet('M', 2440, 1220, { material: 'MDF' }),
+        sheet('B', 1525, 1525, { material: 'Birch', thickness: 12 }),
+      ],
       { timeBudgetMs: 300 },
     );
     const plan = await optimize(req, { onProgress: (p) => seen.push(p) });
@@ -228,7 +273,11 @@ describe('progress and cancel', () => {
   test('a cancelled run still returns a whole plan, marked cancelled', async () => {
     const ctrl = new AbortController();
     ctrl.abort();
-    const req = request([part('p', 500, 400, { quantity: 30 }), part('q', 300, 200, { quantity: 5, material: 'MDF' })], [sheet('S', 2440, 1220), sheet('M', 2440, 1220, { material: 'MDF' })], { timeBudgetMs: 5000 });
+    const req = request(
+      [part('p', 500, 400, { quantity: 30 }), part('q', 300, 200, { quantity: 5, material: 'MDF' })],
+      [sheet('S', 2440, 1220), sheet('M', 2440, 1220, { material: 'MDF' })],
+      { timeBudgetMs: 5000 },
+    );
     const plan = await optimize(req, { signal: ctrl.signal });
     expect(plan.cancelled).toBe(true);
     expect(validatePlan(req, plan)).toEqual([]);
@@ -243,8 +292,16 @@ describe('progress and cancel', () => {
 describe('request checks', () => {
   test.each([
     { label: 'duplicate part ids', req: request([part('p', 500, 400), part('p', 300, 200)], [sheet('S', 2440, 1220)]), message: /duplicate part id/ },
-    { label: 'an offcut without a count', req: request([part('p', 500, 400)], [{ ...sheet('O', 800, 400), kind: 'offcut' as const }]), message: /offcut/ },
-    { label: 'more part instances than one Nest takes', req: request([part('p', 50, 40, { quantity: 30_000 })], [sheet('S', 2440, 1220)]), message: /at most 20000/ },
+    {
+      label: 'an offcut without a count',
+      req: request([part('p', 500, 400)], [{ ...sheet('O', 800, 400), kind: 'offcut' as const }]),
+      message: /offcut/,
+    },
+    {
+      label: 'more part instances than one Nest takes',
+      req: request([part('p', 50, 40, { quantity: 30_000 })], [sheet('S', 2440, 1220)]),
+      message: /at most 20000/,
+    },
   ])('refuses $label with a clear message', async ({ req, message }) => {
     await expect(optimize(req)).rejects.toThrow(message);
   });

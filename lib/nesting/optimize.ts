@@ -147,7 +147,12 @@ interface Measure {
   cost: number;
 }
 const NOTHING: Measure = { pieces: 0, stockArea: 0, partArea: 0, cost: 0 };
-const addMeasures = (a: Measure, b: Measure): Measure => ({ pieces: a.pieces + b.pieces, stockArea: a.stockArea + b.stockArea, partArea: a.partArea + b.partArea, cost: a.cost + b.cost });
+const addMeasures = (a: Measure, b: Measure): Measure => ({
+  pieces: a.pieces + b.pieces,
+  stockArea: a.stockArea + b.stockArea,
+  partArea: a.partArea + b.partArea,
+  cost: a.cost + b.cost,
+});
 
 /** Stock area, part area and cost of packed bins, for progress. */
 function measure(group: Group, result: PackResult): Measure {
@@ -172,7 +177,12 @@ const packStyle = (rule: StageRule): CuttingStyle => (rule.maxStages === Infinit
 const transposeRect = <R extends { x: number; y: number; w: number; h: number }>(r: R): R => ({ ...r, x: r.y, y: r.x, w: r.h, h: r.w });
 function transposeTree(node: CutNode): CutNode {
   if (node.type !== 'cut') return { ...node, rect: transposeRect(node.rect) };
-  return { ...node, rect: transposeRect(node.rect), axis: node.axis === 'x' ? 'y' : 'x', children: node.children.map(transposeTree) as [CutNode] | [CutNode, CutNode] };
+  return {
+    ...node,
+    rect: transposeRect(node.rect),
+    axis: node.axis === 'x' ? 'y' : 'x',
+    children: node.children.map(transposeTree) as [CutNode] | [CutNode, CutNode],
+  };
 }
 
 /**

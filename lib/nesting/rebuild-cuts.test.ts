@@ -10,7 +10,19 @@ describe('rebuildCuts', () => {
     await fc.assert(
       fc.asyncProperty(requestArb, async (req) => {
         const plan = await optimize(req);
-        const bare = { ...plan, pieces: plan.pieces.map(({ stockId, kind, length, width, thickness, material, trim, placements }) => ({ stockId, kind, length, width, thickness, material, trim, placements })) };
+        const bare = {
+          ...plan,
+          pieces: plan.pieces.map(({ stockId, kind, length, width, thickness, material, trim, placements }) => ({
+            stockId,
+            kind,
+            length,
+            width,
+            thickness,
+            material,
+            trim,
+            placements,
+          })),
+        };
         expect(validatePlan(req, bare)).toEqual([]);
         const rebuilt = rebuildCuts(req, bare);
         expect(validatePlan(req, rebuilt)).toEqual([]);

@@ -6,8 +6,16 @@ import { validatePlan } from '@/lib/nesting/validate-plan';
 import { at, handPlan, part, request, requestArb, sheet } from '@/lib/nesting/test-support';
 import { DEFAULT_MIN_FENCE_WIDTH } from '@/shared/schemas/nesting';
 
-const brief = (s: { n: number; kind: string; piece: string; reference: string; fence: number; length: number; trim: boolean; produces: { name: string; role: string }[] }) =>
-  [s.n, s.kind, s.piece, s.reference, +s.fence.toFixed(6), s.length, s.trim, s.produces.map((p) => `${p.name}:${p.role}`).join(' ')];
+const brief = (s: {
+  n: number;
+  kind: string;
+  piece: string;
+  reference: string;
+  fence: number;
+  length: number;
+  trim: boolean;
+  produces: { name: string; role: string }[];
+}) => [s.n, s.kind, s.piece, s.reference, +s.fence.toFixed(6), s.length, s.trim, s.produces.map((p) => `${p.name}:${p.role}`).join(' ')];
 
 describe('piece names', () => {
   test.each([
@@ -28,11 +36,11 @@ describe('piece names', () => {
 describe('saw order from a layout', () => {
   // Hand-checked layout (kerf 3, no trim) on a 1000 × 500 panel: a 600 × 300 and a 300 × 300 side by side in a
   // 300 strip, a 1000 × 150 strip above them. Fence = width of the piece between blade and fence.
-  const req = request(
-    [part('a', 600, 300), part('b', 300, 300), part('c', 1000, 150)],
-    [sheet('S', 1000, 500)],
-    { kerf: 3, minOffcutLength: 300, minOffcutWidth: 100 },
-  );
+  const req = request([part('a', 600, 300), part('b', 300, 300), part('c', 1000, 150)], [sheet('S', 1000, 500)], {
+    kerf: 3,
+    minOffcutLength: 300,
+    minOffcutWidth: 100,
+  });
   const plan = handPlan(req, 'S', [at('a', 0, 0, 600, 300), at('b', 603, 0, 300, 300), at('c', 0, 303, 1000, 150)]);
 
   test('rips the strips first, then crosscuts each strip, measured from the fence (hand-checked, [derived])', () => {
@@ -81,7 +89,13 @@ describe('saw order from a layout', () => {
 
   test('a trim rip on a board never sets the fence to the trim strip: the sliver falls free (common practice, no source)', () => {
     // A 150 mm board, 10 mm trim (kerf 3 inside it) and 1″ (25.4 mm) the least between blade and fence.
-    const board = request([part('p', 800, 130)], [sheet('B', 1000, 150, { kind: 'board' })], { kerf: 3, trim: 10, minOffcutLength: 300, minOffcutWidth: 100, minFenceWidth: 25.4 });
+    const board = request([part('p', 800, 130)], [sheet('B', 1000, 150, { kind: 'board' })], {
+      kerf: 3,
+      trim: 10,
+      minOffcutLength: 300,
+      minOffcutWidth: 100,
+      minFenceWidth: 25.4,
+    });
     const steps = handPlan(board, 'B', [at('p', 10, 10, 800, 130)]).pieces[0].sawOrder!;
     for (const step of steps.filter((st) => st.kind === 'rip')) {
       expect(step.fence, `step ${step.n}`).toBeGreaterThanOrEqual(25.4);
@@ -91,7 +105,12 @@ describe('saw order from a layout', () => {
 
   test('a strip narrower than 1″ is ripped with it on the free side: the fence measures the wide side', () => {
     // 1000 × 200 sheet, one 20 mm strip along the low edge, kerf 3: fence 200 − 20 − 3 = 177 mm from the high edge.
-    const strip = request([part('s', 1000, 20)], [sheet('S', 1000, 200)], { kerf: 3, minOffcutLength: 300, minOffcutWidth: 100, minFenceWidth: 25.4 });
+    const strip = request([part('s', 1000, 20)], [sheet('S', 1000, 200)], {
+      kerf: 3,
+      minOffcutLength: 300,
+      minOffcutWidth: 100,
+      minFenceWidth: 25.4,
+    });
     const [first] = handPlan(strip, 'S', [at('s', 0, 0, 1000, 20)]).pieces[0].sawOrder!;
     expect(brief(first)).toEqual([1, 'rip', 'A', 'high', 177, 1000, false, 'A1:part A2:offcut']);
     // Without the rule (0) the strip itself sat between blade and fence.
@@ -100,7 +119,12 @@ describe('saw order from a layout', () => {
   });
 
   test('validatePlan refuses a saw order with a strip under the safe minimum between blade and fence', () => {
-    const strip = request([part('s', 1000, 20)], [sheet('S', 1000, 200)], { kerf: 3, minOffcutLength: 300, minOffcutWidth: 100, minFenceWidth: 25.4 });
+    const strip = request([part('s', 1000, 20)], [sheet('S', 1000, 200)], {
+      kerf: 3,
+      minOffcutLength: 300,
+      minOffcutWidth: 100,
+      minFenceWidth: 25.4,
+    });
     const plan = handPlan(strip, 'S', [at('s', 0, 0, 1000, 20)]);
     expect(validatePlan(strip, plan)).toEqual([]);
     const [first, ...rest] = plan.pieces[0].sawOrder!;
@@ -111,7 +135,12 @@ describe('saw order from a layout', () => {
 
   test('a rip with both sides under 1″ is marked for a sled, track saw or band saw, and still replays', () => {
     // A 40 mm wide piece split into 18 and 19 mm with a 3 mm kerf: no fence setting leaves 25.4 mm at the fence.
-    const both = request([part('a', 1000, 18), part('b', 1000, 19)], [sheet('S', 1000, 40)], { kerf: 3, minOffcutLength: 300, minOffcutWidth: 100, minFenceWidth: 25.4 });
+    const both = request([part('a', 1000, 18), part('b', 1000, 19)], [sheet('S', 1000, 40)], {
+      kerf: 3,
+      minOffcutLength: 300,
+      minOffcutWidth: 100,
+      minFenceWidth: 25.4,
+    });
     const steps = handPlan(both, 'S', [at('a', 0, 0, 1000, 18), at('b', 0, 21, 1000, 19)]).pieces[0].sawOrder!;
     expect(steps).toHaveLength(1);
     expect(steps[0]).toMatchObject({ kind: 'rip', narrow: true });

@@ -50,7 +50,13 @@ export const isKeepable = (r: Rect, minLength: number, minWidth: number) =>
 function describe(rect: Rect, node: CutNode | null, ctx: SawContext, name: string): SawPiece {
   const parts = ctx.placements.filter((p) => contains(rect, p, EPS)).map((p) => ({ partId: p.partId, instance: p.instance }));
   const role: SawPiece['role'] =
-    node?.type === 'item' ? 'part' : node?.type === 'leftover' ? (isKeepable(rect, ctx.minOffcutLength, ctx.minOffcutWidth) ? 'offcut' : 'waste') : 'piece';
+    node?.type === 'item'
+      ? 'part'
+      : node?.type === 'leftover'
+        ? isKeepable(rect, ctx.minOffcutLength, ctx.minOffcutWidth)
+          ? 'offcut'
+          : 'waste'
+        : 'piece';
   return { name, x: rect.x, y: rect.y, w: rect.w, h: rect.h, role, parts };
 }
 
@@ -128,7 +134,8 @@ export function sawOrderFromTree(tree: CutNode, rootName: string, ctx: SawContex
           const first = choose(sw.minFenceWidthMm).reference;
           return [...new Set<SawStep['reference']>([first, preferred, turned])].filter(exists).map((r) => ({ sw, reference: r, narrow: noSafeSide }));
         });
-        const ok = tries.find((t) => cutProblems(t.sw, { kind, fence: fenceFor(t.reference), length, narrow: t.narrow }, cur).length === 0) ?? tries[0];
+        const ok =
+          tries.find((t) => cutProblems(t.sw, { kind, fence: fenceFor(t.reference), length, narrow: t.narrow }, cur).length === 0) ?? tries[0];
         if (ok) ({ reference, narrow } = ok);
         saw = (ok?.sw ?? ctx.saws[0]).name;
       }
@@ -188,13 +195,14 @@ export function replaySawOrder(steps: readonly SawStep[], stock: Rect, rootName:
       return;
     }
     if (Math.abs(step.length - extent(cur, other(axis))) > EPS) {
-      problems.push({ step: n, message: `step ${n}: a through-cut of piece "${step.piece}" is ${extent(cur, other(axis))} mm long, not ${step.length}` });
+      problems.push({
+        step: n,
+        message: `step ${n}: a through-cut of piece "${step.piece}" is ${extent(cur, other(axis))} mm long, not ${step.length}`,
+      });
     }
     const sides = [slice(cur, axis, a0, Math.max(a0, pos)), slice(cur, axis, Math.min(a1, pos + kerf), a1)].filter(nonEmpty);
     const said = step.produces;
-    const matches =
-      said.length === sides.length &&
-      sides.every((s, j) => sameRect(s, said[j], EPS));
+    const matches = said.length === sides.length && sides.every((s, j) => sameRect(s, said[j], EPS));
     if (!matches) problems.push({ step: n, message: `step ${n}: the pieces it lists are not what this cut leaves` });
     pieces.delete(step.piece);
     sides.forEach((s, j) => {

@@ -18,26 +18,28 @@ const base = {
  * longer than any stock, its capacities may be anything, since the track saw makes what it cannot.
  */
 const secondSaw = (alone: boolean): fc.Arbitrary<NestSaw> =>
-  fc.record({
-    maxStages: fc.constantFrom(2 as const, 3 as const, 4 as const, null),
-    firstStage: fc.constantFrom('rip' as const, 'crosscut' as const),
-    minFenceWidthMm: fc.constantFrom(0, 25.4),
-    rip: alone ? fc.constant(null) : fc.option(fc.integer({ min: 100, max: 1300 }), { nil: null }),
-    cross: alone ? fc.option(fc.integer({ min: 1220, max: 3000 }), { nil: null }) : fc.option(fc.integer({ min: 200, max: 3000 }), { nil: null }),
-    piece: alone ? fc.constant(null) : fc.option(fc.integer({ min: 400, max: 2440 }), { nil: null }),
-  }).map((s) => ({
-    ...base,
-    kind: 'table-saw',
-    name: 'Table saw',
-    kerfMm: 3.2,
-    ripCapacityMm: s.rip,
-    crosscutCapacityMm: s.cross,
-    maxPieceLengthMm: s.piece,
-    maxPieceWidthMm: s.piece === null ? null : Math.min(s.piece, 1220),
-    maxStages: s.maxStages,
-    firstStage: s.firstStage,
-    minFenceWidthMm: s.minFenceWidthMm,
-  }));
+  fc
+    .record({
+      maxStages: fc.constantFrom(2 as const, 3 as const, 4 as const, null),
+      firstStage: fc.constantFrom('rip' as const, 'crosscut' as const),
+      minFenceWidthMm: fc.constantFrom(0, 25.4),
+      rip: alone ? fc.constant(null) : fc.option(fc.integer({ min: 100, max: 1300 }), { nil: null }),
+      cross: alone ? fc.option(fc.integer({ min: 1220, max: 3000 }), { nil: null }) : fc.option(fc.integer({ min: 200, max: 3000 }), { nil: null }),
+      piece: alone ? fc.constant(null) : fc.option(fc.integer({ min: 400, max: 2440 }), { nil: null }),
+    })
+    .map((s) => ({
+      ...base,
+      kind: 'table-saw',
+      name: 'Table saw',
+      kerfMm: 3.2,
+      ripCapacityMm: s.rip,
+      crosscutCapacityMm: s.cross,
+      maxPieceLengthMm: s.piece,
+      maxPieceWidthMm: s.piece === null ? null : Math.min(s.piece, 1220),
+      maxStages: s.maxStages,
+      firstStage: s.firstStage,
+      minFenceWidthMm: s.minFenceWidthMm,
+    }));
 
 const trackSaw: NestSaw = {
   ...base,
@@ -51,12 +53,14 @@ const trackSaw: NestSaw = {
   minFenceWidthMm: 0,
 };
 
-const withSaws = fc
-  .tuple(requestArb, fc.boolean())
-  .chain(([req, breakdown]) => secondSaw(!breakdown).map((saw): NestRequestInput => ({
-    ...req,
-    settings: { ...req.settings, kerf: 3.2, saw, ...(breakdown ? { breakdownSaw: trackSaw } : {}) },
-  })));
+const withSaws = fc.tuple(requestArb, fc.boolean()).chain(([req, breakdown]) =>
+  secondSaw(!breakdown).map(
+    (saw): NestRequestInput => ({
+      ...req,
+      settings: { ...req.settings, kerf: 3.2, saw, ...(breakdown ? { breakdownSaw: trackSaw } : {}) },
+    }),
+  ),
+);
 
 describe('the engine keeps to the saw (fast-check, seeded)', () => {
   test('every plan the engine returns for a saw, or a breakdown saw and a second saw, passes validatePlan for them', async () => {
@@ -72,14 +76,31 @@ describe('the engine keeps to the saw (fast-check, seeded)', () => {
   });
 
   test('a table saw alone with a 610 mm sled, 762 mm rip capacity and 10 mm trim: the strips’ ends are trimmed on the strips', async () => {
-    const tableSaw: NestSaw = { ...base, kind: 'table-saw', name: 'Table saw', kerfMm: 3.2, ripCapacityMm: 762, crosscutCapacityMm: 610, maxStages: 3, firstStage: 'rip', minFenceWidthMm: 25.4 };
+    const tableSaw: NestSaw = {
+      ...base,
+      kind: 'table-saw',
+      name: 'Table saw',
+      kerfMm: 3.2,
+      ripCapacityMm: 762,
+      crosscutCapacityMm: 610,
+      maxStages: 3,
+      firstStage: 'rip',
+      minFenceWidthMm: 25.4,
+    };
     // Parts no wider than the sled, so every crosscut of a strip fits it (common practice, no source: a 24″ sled).
-    const fitting = requestArb.map((r): NestRequestInput => ({
-      ...r,
-      parts: r.parts.map((p) => ({ ...p, width: Math.min(p.width, 600), length: Math.max(p.length, Math.min(p.width, 600)), grain: 'along-length' as const })),
-      stock: r.stock.map((s) => ({ ...s, grain: 'along-length' as const })),
-      settings: { ...r.settings, kerf: 3.2, trim: 10, saw: tableSaw },
-    }));
+    const fitting = requestArb.map(
+      (r): NestRequestInput => ({
+        ...r,
+        parts: r.parts.map((p) => ({
+          ...p,
+          width: Math.min(p.width, 600),
+          length: Math.max(p.length, Math.min(p.width, 600)),
+          grain: 'along-length' as const,
+        })),
+        stock: r.stock.map((s) => ({ ...s, grain: 'along-length' as const })),
+        settings: { ...r.settings, kerf: 3.2, trim: 10, saw: tableSaw },
+      }),
+    );
     await fc.assert(
       fc.asyncProperty(fitting, async (req) => {
         const plan = await optimize(req);

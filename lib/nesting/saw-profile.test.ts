@@ -155,7 +155,10 @@ describe('the engine on a saw used with 2 stages (worked by hand)', () => {
     expect(plan.pieces).toHaveLength(1);
     const at = (id: string, k = 1) => plan.pieces[0].placements.find((p) => p.partId === id && p.instance === k)!;
     // Strip 1: y 0–200, parts at x = 0 and 400 + 3 = 403. Strip 2 starts one kerf above: y = 203.
-    expect([at('a', 1), at('a', 2)].map((p) => [p.x, p.y]).sort((u, v) => u[0] - v[0])).toEqual([[0, 0], [403, 0]]);
+    expect([at('a', 1), at('a', 2)].map((p) => [p.x, p.y]).sort((u, v) => u[0] - v[0])).toEqual([
+      [0, 0],
+      [403, 0],
+    ]);
     expect([at('b').x, at('b').y]).toEqual([0, 203]);
     const steps = plan.pieces[0].sawOrder!;
     expect(Math.max(...stepStages(steps, 'A', [saw({ maxStages: 2 })]))).toBe(2);

@@ -45,7 +45,9 @@ export function requestSaws(settings: Pick<NestSettings, 'saw' | 'breakdownSaw'>
 export function pieceFits(saw: NestSaw, piece: Pick<Rect, 'w' | 'h'>): boolean {
   const long = Math.max(piece.w, piece.h);
   const short = Math.min(piece.w, piece.h);
-  return (saw.maxPieceLengthMm === null || long <= saw.maxPieceLengthMm + EPS) && (saw.maxPieceWidthMm === null || short <= saw.maxPieceWidthMm + EPS);
+  return (
+    (saw.maxPieceLengthMm === null || long <= saw.maxPieceLengthMm + EPS) && (saw.maxPieceWidthMm === null || short <= saw.maxPieceWidthMm + EPS)
+  );
 }
 
 /** The longest cut of this kind the saw makes (Infinity: no limit): a track saw's track bounds every cut. */
@@ -65,17 +67,29 @@ const mmText = (mm: number) => `${Math.round(mm * 10) / 10} mm`;
 export function cutProblems(saw: NestSaw, step: Pick<SawStep, 'kind' | 'fence' | 'length' | 'narrow'>, piece: Pick<Rect, 'w' | 'h'>): CutProblem[] {
   const out: CutProblem[] = [];
   if (!pieceFits(saw, piece)) {
-    out.push({ code: 'saw-piece-too-large', message: `a ${mmText(Math.max(piece.w, piece.h))} × ${mmText(Math.min(piece.w, piece.h))} piece is larger than ${saw.name} takes` });
+    out.push({
+      code: 'saw-piece-too-large',
+      message: `a ${mmText(Math.max(piece.w, piece.h))} × ${mmText(Math.min(piece.w, piece.h))} piece is larger than ${saw.name} takes`,
+    });
   }
   if (step.kind === 'rip' && saw.ripCapacityMm !== null && step.fence > saw.ripCapacityMm + EPS) {
-    out.push({ code: 'rip-capacity', message: `a fence setting of ${mmText(step.fence)} is beyond ${saw.name}’s ${mmText(saw.ripCapacityMm)} rip capacity` });
+    out.push({
+      code: 'rip-capacity',
+      message: `a fence setting of ${mmText(step.fence)} is beyond ${saw.name}’s ${mmText(saw.ripCapacityMm)} rip capacity`,
+    });
   }
   const limit = cutLengthLimit(saw, step.kind);
   if (step.length > limit + EPS) {
-    out.push({ code: 'crosscut-capacity', message: `a ${mmText(step.length)} ${step.kind} is longer than ${saw.name}’s ${mmText(limit)} ${saw.kind === 'track-saw' ? 'track' : 'crosscut capacity'}` });
+    out.push({
+      code: 'crosscut-capacity',
+      message: `a ${mmText(step.length)} ${step.kind} is longer than ${saw.name}’s ${mmText(limit)} ${saw.kind === 'track-saw' ? 'track' : 'crosscut capacity'}`,
+    });
   }
   if (step.kind === 'rip' && !step.narrow && step.fence < saw.minFenceWidthMm - EPS) {
-    out.push({ code: 'unsafe-fence', message: `${mmText(step.fence)} between blade and fence is under ${saw.name}’s ${mmText(saw.minFenceWidthMm)} safe minimum` });
+    out.push({
+      code: 'unsafe-fence',
+      message: `${mmText(step.fence)} between blade and fence is under ${saw.name}’s ${mmText(saw.minFenceWidthMm)} safe minimum`,
+    });
   }
   return out;
 }

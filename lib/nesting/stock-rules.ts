@@ -41,8 +41,7 @@ export function groupParts(parts: readonly NestPart[]): NestPart[][] {
 }
 
 /** May this placement be turned a quarter on this stock? */
-export const rotationAllowed = (part: Pick<NestPart, 'grain'>, stock: Pick<NestStock, 'grain'>) =>
-  part.grain === 'any' || stock.grain === 'none';
+export const rotationAllowed = (part: Pick<NestPart, 'grain'>, stock: Pick<NestStock, 'grain'>) => part.grain === 'any' || stock.grain === 'none';
 
 /**
  * May the part turn when packed on this group of stock? The packing core takes one flag per part, so a grain-locked

@@ -97,7 +97,15 @@ export const requestArb: fc.Arbitrary<NestRequestInput> = fc
     seed: fc.integer({ min: 1, max: 1000 }),
   })
   .map((r) => ({
-    parts: r.parts.map((p, i) => ({ id: `p${i}`, label: `part ${i}`, quantity: p.quantity, length: p.length, width: p.width, grain: p.grain, ...MATERIALS[p.m] })),
+    parts: r.parts.map((p, i) => ({
+      id: `p${i}`,
+      label: `part ${i}`,
+      quantity: p.quantity,
+      length: p.length,
+      width: p.width,
+      grain: p.grain,
+      ...MATERIALS[p.m],
+    })),
     stock: r.stock.map((s, i) => ({
       id: `s${i}`,
       kind: s.kind,

@@ -19,7 +19,8 @@ export const packTwoStage: PackFn = async (items, bins, options) => {
   const result: PackResult = { bins: [], unplaced: [] };
   const left = new Map(bins.map((b) => [b.id, b.count]));
   const order = [...bins].sort((a, b) => a.priority - b.priority || a.cost / (a.w * a.h) - b.cost / (b.w * b.h) || b.w * b.h - a.w * a.h);
-  const fitsBin = (it: PackItem, b: (typeof bins)[number], rotated: boolean) => (rotated ? it.h <= b.w + EPS && it.w <= b.h + EPS : it.w <= b.w + EPS && it.h <= b.h + EPS);
+  const fitsBin = (it: PackItem, b: (typeof bins)[number], rotated: boolean) =>
+    rotated ? it.h <= b.w + EPS && it.w <= b.h + EPS : it.w <= b.w + EPS && it.h <= b.h + EPS;
   let rest: PackItem[] = [];
   for (const it of items) {
     const straight = bins.some((b) => fitsBin(it, b, false));
@@ -37,7 +38,13 @@ export const packTwoStage: PackFn = async (items, bins, options) => {
     if (count !== null && count !== undefined) left.set(bin.id, count - 1);
     // Each part as it lies: straight when it fits so, else turned.
     const oriented: Oriented[] = rest
-      .map((item) => (fitsBin(item, bin, false) ? { item, w: item.w, h: item.h, rotated: false } : item.canRotate && fitsBin(item, bin, true) ? { item, w: item.h, h: item.w, rotated: true } : null))
+      .map((item) =>
+        fitsBin(item, bin, false)
+          ? { item, w: item.w, h: item.h, rotated: false }
+          : item.canRotate && fitsBin(item, bin, true)
+            ? { item, w: item.h, h: item.w, rotated: true }
+            : null,
+      )
       .filter((o): o is Oriented => o !== null)
       .sort((a, b) => b.h - a.h || b.w - a.w);
     const placed: PackedItem[] = [];
@@ -55,7 +62,13 @@ export const packTwoStage: PackFn = async (items, bins, options) => {
       }
       y += stripH + kerf;
     }
-    const tree = findGuillotineTree({ x: 0, y: 0, w: bin.w, h: bin.h }, placed.map((p) => ({ ...p.rect, itemId: p.itemId, rotated: p.rotated })), kerf, 2, 'y');
+    const tree = findGuillotineTree(
+      { x: 0, y: 0, w: bin.w, h: bin.h },
+      placed.map((p) => ({ ...p.rect, itemId: p.itemId, rotated: p.rotated })),
+      kerf,
+      2,
+      'y',
+    );
     if (!tree || placed.length === 0) throw new Error('two-stage packing made a layout it cannot cut');
     result.bins.push({ binTypeId: bin.id, items: placed, tree });
     rest = rest.filter((it) => !used.has(it.id));

@@ -6,16 +6,10 @@ import type { Plan } from '@/shared/schemas/nesting';
 const codes = (v: { code: string }[]) => [...new Set(v.map((x) => x.code))].sort();
 const clone = (p: Plan): Plan => structuredClone(p);
 
-const req = request(
-  [part('a', 600, 300), part('b', 300, 300, { quantity: 2 }), part('c', 1000, 150)],
-  [sheet('S', 1000, 500, { count: 1 })],
-  { kerf: 3 },
-);
-const good = handPlan(req, 'S', [
-  at('a', 0, 0, 600, 300),
-  at('b', 603, 0, 300, 300),
-  at('c', 0, 303, 1000, 150),
-]);
+const req = request([part('a', 600, 300), part('b', 300, 300, { quantity: 2 }), part('c', 1000, 150)], [sheet('S', 1000, 500, { count: 1 })], {
+  kerf: 3,
+});
+const good = handPlan(req, 'S', [at('a', 0, 0, 600, 300), at('b', 603, 0, 300, 300), at('c', 0, 303, 1000, 150)]);
 good.unplaced.push({ partId: 'b', instance: 2, label: 'b', reason: 'no-stock-left', message: 'not enough stock' });
 
 describe('validatePlan', () => {

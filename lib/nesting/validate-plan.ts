@@ -70,7 +70,6 @@ export interface Violation {
   step?: number;
 }
 
-
 const name = (part: NestPart | undefined, p: { partId: string; instance: number }) => `"${part?.label || p.partId}" #${p.instance}`;
 
 function zodViolations(code: ViolationCode, issues: { path: PropertyKey[]; message: string }[]): Violation[] {
@@ -97,7 +96,12 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
       Math.abs(stock.width - piece.width) <= EPS &&
       sameStock(stock, piece) &&
       Math.abs(trimFor(stock, settings) - piece.trim) <= EPS;
-    if (!same) out.push({ code: 'stock-mismatch', message: `piece ${index + 1} does not match stock "${stock.id}" (kind, size, material, thickness or trim)`, ...at });
+    if (!same)
+      out.push({
+        code: 'stock-mismatch',
+        message: `piece ${index + 1} does not match stock "${stock.id}" (kind, size, material, thickness or trim)`,
+        ...at,
+      });
   }
   const trim = stock ? trimFor(stock, settings) : piece.trim;
   const usable = usableRect(piece, trim);
@@ -108,18 +112,30 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
     if (part) {
       const [w, h] = p.rotated ? [part.width, part.length] : [part.length, part.width];
       if (Math.abs(p.w - w) > EPS || Math.abs(p.h - h) > EPS) {
-        out.push({ code: 'size-mismatch', message: `${name(part, p)} is placed as ${p.w} × ${p.h} mm but is ${w} × ${h} mm${p.rotated ? ' turned' : ''}`, ...where });
+        out.push({
+          code: 'size-mismatch',
+          message: `${name(part, p)} is placed as ${p.w} × ${p.h} mm but is ${w} × ${h} mm${p.rotated ? ' turned' : ''}`,
+          ...where,
+        });
         geometryOk = false;
       }
       if (!sameStock(part, piece)) {
-        out.push({ code: 'material-mismatch', message: `${name(part, p)} is ${part.thickness} mm ${part.material}, placed on ${piece.thickness} mm ${piece.material}`, ...where });
+        out.push({
+          code: 'material-mismatch',
+          message: `${name(part, p)} is ${part.thickness} mm ${part.material}, placed on ${piece.thickness} mm ${piece.material}`,
+          ...where,
+        });
       }
       if (p.rotated && !rotationAllowed(part, { grain: stock?.grain ?? 'along-length' })) {
         out.push({ code: 'grain', message: `${name(part, p)} is turned across the grain, but its grain must run along its length`, ...where });
       }
     }
     if (!contains(usable, p, EPS)) {
-      out.push({ code: 'outside-stock', message: `${name(part, p)} lies outside the usable area of piece ${index + 1} (after ${trim} mm trim)`, ...where });
+      out.push({
+        code: 'outside-stock',
+        message: `${name(part, p)} lies outside the usable area of piece ${index + 1} (after ${trim} mm trim)`,
+        ...where,
+      });
       geometryOk = false;
     }
   }
@@ -130,7 +146,13 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
       const gap = clearance(a, b);
       if (gap >= settings.kerf - EPS) continue;
       const what = gap < -EPS ? 'overlap' : `are ${Math.max(0, gap).toFixed(2)} mm apart, closer than one kerf (${settings.kerf} mm)`;
-      out.push({ code: 'overlap', message: `${name(parts.get(a.partId), a)} and ${name(parts.get(b.partId), b)} ${what}`, ...at, partId: b.partId, instance: b.instance });
+      out.push({
+        code: 'overlap',
+        message: `${name(parts.get(a.partId), a)} and ${name(parts.get(b.partId), b)} ${what}`,
+        ...at,
+        partId: b.partId,
+        instance: b.instance,
+      });
       geometryOk = false;
     }
   }
@@ -142,14 +164,23 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
     const tree = findGuillotineTree(usable, piece.placements, settings.kerf, rule.maxStages, rule.firstAxis);
     if (!tree) {
       const anyTree = rule.maxStages !== Infinity && findGuillotineTree(usable, piece.placements, settings.kerf);
-      const otherWay = anyTree && rule.firstAxis && findGuillotineTree(usable, piece.placements, settings.kerf, rule.maxStages, rule.firstAxis === 'y' ? 'x' : 'y');
+      const otherWay =
+        anyTree && rule.firstAxis && findGuillotineTree(usable, piece.placements, settings.kerf, rule.maxStages, rule.firstAxis === 'y' ? 'x' : 'y');
       const who = settings.saw ? settings.saw.name : 'strip cutting';
       const first = rule.firstAxis === 'y' ? 'rips' : 'crosscuts';
       out.push(
         otherWay
-          ? { code: 'first-stage', message: `piece ${index + 1} can be cut in ${rule.maxStages} stages only with ${first === 'rips' ? 'crosscuts' : 'rips'} first, but ${who} starts with ${first}`, ...at }
+          ? {
+              code: 'first-stage',
+              message: `piece ${index + 1} can be cut in ${rule.maxStages} stages only with ${first === 'rips' ? 'crosscuts' : 'rips'} first, but ${who} starts with ${first}`,
+              ...at,
+            }
           : anyTree
-            ? { code: 'too-many-stages', message: `piece ${index + 1} needs more than ${rule.maxStages} stages of cuts (${first} first) for ${who}`, ...at }
+            ? {
+                code: 'too-many-stages',
+                message: `piece ${index + 1} needs more than ${rule.maxStages} stages of cuts (${first} first) for ${who}`,
+                ...at,
+              }
             : { code: 'not-guillotine', message: `piece ${index + 1} cannot be cut apart with straight through-cuts`, ...at },
       );
     }
@@ -166,27 +197,47 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
       const where = { ...at, step: step.n };
       if (!saws.length) {
         if (step.kind === 'rip' && !step.narrow && step.fence < settings.minFenceWidth - EPS) {
-          out.push({ code: 'unsafe-fence', message: `piece ${index + 1}, step ${step.n}: a rip with ${step.fence} mm between blade and fence, under the ${settings.minFenceWidth} mm safe minimum`, ...where });
+          out.push({
+            code: 'unsafe-fence',
+            message: `piece ${index + 1}, step ${step.n}: a rip with ${step.fence} mm between blade and fence, under the ${settings.minFenceWidth} mm safe minimum`,
+            ...where,
+          });
         }
         return;
       }
       const saw = saws.find((s) => s.name === step.saw);
       if (!saw) {
-        out.push({ code: 'unknown-saw', message: `piece ${index + 1}, step ${step.n}: ${step.saw ? `“${step.saw}” is not a saw of this nest` : 'the step does not say which saw makes it'}`, ...where });
+        out.push({
+          code: 'unknown-saw',
+          message: `piece ${index + 1}, step ${step.n}: ${step.saw ? `“${step.saw}” is not a saw of this nest` : 'the step does not say which saw makes it'}`,
+          ...where,
+        });
         return;
       }
       const from = cutFrom[i];
-      if (from) for (const pr of cutProblems(saw, step, from)) out.push({ code: pr.code, message: `piece ${index + 1}, step ${step.n}: ${pr.message}`, ...where });
+      if (from)
+        for (const pr of cutProblems(saw, step, from))
+          out.push({ code: pr.code, message: `piece ${index + 1}, step ${step.n}: ${pr.message}`, ...where });
       const limit = sawStageRule(saw).maxStages;
       if (stages[i] > limit) {
-        out.push({ code: 'too-many-stages', message: `piece ${index + 1}, step ${step.n}: stage ${stages[i]} of cuts on ${saw.name}, which is used with at most ${limit}`, ...where });
+        out.push({
+          code: 'too-many-stages',
+          message: `piece ${index + 1}, step ${step.n}: stage ${stages[i]} of cuts on ${saw.name}, which is used with at most ${limit}`,
+          ...where,
+        });
       }
     });
     const finals = [...pieces.values()];
     for (const p of piece.placements) {
       const hits = finals.filter((f) => sameRect(f, p, EPS)).length;
       if (hits !== 1) {
-        out.push({ code: 'saw-order', message: `piece ${index + 1}: the saw order does not cut ${name(parts.get(p.partId), p)} free at its place`, ...at, partId: p.partId, instance: p.instance });
+        out.push({
+          code: 'saw-order',
+          message: `piece ${index + 1}: the saw order does not cut ${name(parts.get(p.partId), p)} free at its place`,
+          ...at,
+          partId: p.partId,
+          instance: p.instance,
+        });
       }
     }
   }
@@ -240,7 +291,8 @@ export function validatePlan(requestInput: NestRequestInput, planInput: unknown)
     const part = parts.get(p.partId);
     const where = { partId: p.partId, instance: p.instance, ...(pieceIndex === undefined ? {} : { piece: pieceIndex }) };
     if (!part) out.push({ code: 'unknown-part', message: `part "${p.partId}" is not in the request`, ...where });
-    else if (p.instance > part.quantity) out.push({ code: 'extra-part', message: `${name(part, p)} is more than the ${part.quantity} asked for`, ...where });
+    else if (p.instance > part.quantity)
+      out.push({ code: 'extra-part', message: `${name(part, p)} is more than the ${part.quantity} asked for`, ...where });
     else seen.set(`${p.partId}\u0000${p.instance}`, (seen.get(`${p.partId}\u0000${p.instance}`) ?? 0) + 1);
   };
   plan.pieces.forEach((piece, i) => piece.placements.forEach((p) => tally(p, i)));
@@ -250,7 +302,13 @@ export function validatePlan(requestInput: NestRequestInput, planInput: unknown)
   for (const u of plan.unplaced) {
     const part = parts.get(u.partId);
     const problem = part && unplacedReasonProblem(u, part, request, used);
-    if (problem) out.push({ code: 'unplaced-reason', message: `${name(part, u)} is reported ${u.reason}, but ${problem}`, partId: u.partId, instance: u.instance });
+    if (problem)
+      out.push({
+        code: 'unplaced-reason',
+        message: `${name(part, u)} is reported ${u.reason}, but ${problem}`,
+        partId: u.partId,
+        instance: u.instance,
+      });
   }
   for (const part of request.parts) {
     for (let k = 1; k <= part.quantity; k++) {
@@ -268,7 +326,8 @@ export function validatePlan(requestInput: NestRequestInput, planInput: unknown)
   }
   for (const s of request.stock) {
     const n = used.get(s.id) ?? 0;
-    if (s.count !== null && n > s.count) out.push({ code: 'stock-count', message: `the plan uses ${n} of stock "${s.id}" but only ${s.count} are on hand` });
+    if (s.count !== null && n > s.count)
+      out.push({ code: 'stock-count', message: `the plan uses ${n} of stock "${s.id}" but only ${s.count} are on hand` });
   }
   return out;
 }

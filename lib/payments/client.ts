@@ -7,7 +7,9 @@ import { FAKE_SECRET_KEY, paymentsConfig, type PaymentsConfig } from './config';
 import { startPaymentsFake, type PaymentsFake } from './fake';
 import { appBaseUrl } from '@/lib/mail/config';
 
-const holder = globalThis as typeof globalThis & { __kerfwisePayments?: Promise<{ stripe: Stripe; webhookSecret: string; fake: PaymentsFake | null }> };
+const holder = globalThis as typeof globalThis & {
+  __kerfwisePayments?: Promise<{ stripe: Stripe; webhookSecret: string; fake: PaymentsFake | null }>;
+};
 
 /** An SDK client for the fake at `url` (tests use it too). */
 export function fakeClient(url: string): Stripe {
@@ -16,7 +18,8 @@ export function fakeClient(url: string): Stripe {
 }
 
 async function connect(config: PaymentsConfig, webhookUrl: string) {
-  if (config.mode === 'hosted') return { stripe: new Stripe(config.secretKey, { maxNetworkRetries: 2 }), webhookSecret: config.webhookSecret, fake: null };
+  if (config.mode === 'hosted')
+    return { stripe: new Stripe(config.secretKey, { maxNetworkRetries: 2 }), webhookSecret: config.webhookSecret, fake: null };
   if (config.url) return { stripe: fakeClient(config.url), webhookSecret: config.webhookSecret, fake: null };
   const fake = await startPaymentsFake({ webhookUrl, webhookSecret: config.webhookSecret, unref: true });
   console.log(`Payments: no STRIPE_SECRET_KEY, so deposits are paid on a local test checkout (${fake.url}); no card is charged.`);

@@ -18,11 +18,13 @@ export type PaymentsConfig =
 
 export function paymentsConfig(env: Env = process.env): PaymentsConfig {
   if (env.STRIPE_SECRET_KEY) {
-    if (!env.STRIPE_WEBHOOK_SECRET) throw new Error('STRIPE_SECRET_KEY is set but STRIPE_WEBHOOK_SECRET is not: the webhook could not check what the payments service sends.');
+    if (!env.STRIPE_WEBHOOK_SECRET)
+      throw new Error('STRIPE_SECRET_KEY is set but STRIPE_WEBHOOK_SECRET is not: the webhook could not check what the payments service sends.');
     return { mode: 'hosted', secretKey: env.STRIPE_SECRET_KEY, webhookSecret: env.STRIPE_WEBHOOK_SECRET };
   }
   const url = env.KERFWISE_PAYMENTS_URL?.replace(/\/+$/, '') || null;
-  if (url && !/^http:\/\/(127\.0\.0\.1|localhost)(:\d+)?$/.test(url)) throw new Error('KERFWISE_PAYMENTS_URL names the local payments fake, like http://127.0.0.1:4242.');
+  if (url && !/^http:\/\/(127\.0\.0\.1|localhost)(:\d+)?$/.test(url))
+    throw new Error('KERFWISE_PAYMENTS_URL names the local payments fake, like http://127.0.0.1:4242.');
   if (url && !env.KERFWISE_PAYMENTS_WEBHOOK_SECRET) throw new Error('KERFWISE_PAYMENTS_URL is set but KERFWISE_PAYMENTS_WEBHOOK_SECRET is not.');
   return { mode: 'fake', url, secretKey: FAKE_SECRET_KEY, webhookSecret: env.KERFWISE_PAYMENTS_WEBHOOK_SECRET || newWebhookSecret() };
 }

@@ -105,11 +105,15 @@ button{margin-top:16px;width:100%;font-size:16px;padding:12px;border:0;border-ra
 <span class="badge">Test mode · no card is charged</span>
 <h1>${escape(s.description)}</h1>
 <div class="amount" data-testid="checkout-amount">${escape(money(s.amount_total, s.currency))}</div>
-${s.status === 'open' ? `<form method="post" action="/checkout/${escape(s.id)}">
+${
+  s.status === 'open'
+    ? `<form method="post" action="/checkout/${escape(s.id)}">
 <label for="card">Card number</label>
 <input id="card" name="card" inputmode="numeric" autocomplete="cc-number" placeholder="4242 4242 4242 4242" required>
 <button type="submit">Pay ${escape(money(s.amount_total, s.currency))}</button>
-</form>` : `<p class="msg">This checkout is ${s.status === 'complete' ? 'paid' : 'closed'}.</p>`}
+</form>`
+    : `<p class="msg">This checkout is ${s.status === 'complete' ? 'paid' : 'closed'}.</p>`
+}
 ${message ? `<p class="msg" role="alert">${escape(message.text)}</p>` : ''}
 <p class="small">Test cards: 4242 4242 4242 4242 pays; 4000 0000 0000 0002 is declined.</p>
 <p class="small"><a href="${escape(s.cancel_url)}">Cancel and go back</a></p>
@@ -117,7 +121,12 @@ ${message ? `<p class="msg" role="alert">${escape(message.text)}</p>` : ''}
 }
 
 /** `unref`: the fake does not keep the process alive by itself (when a server process starts its own). */
-export async function startPaymentsFake(options: { webhookUrl: string; webhookSecret: string; port?: number; unref?: boolean }): Promise<PaymentsFake> {
+export async function startPaymentsFake(options: {
+  webhookUrl: string;
+  webhookSecret: string;
+  port?: number;
+  unref?: boolean;
+}): Promise<PaymentsFake> {
   const sessions = new Map<string, FakeSession>();
   const deliveries: FakeDelivery[] = [];
   const signer = new Stripe(FAKE_SECRET_KEY);
@@ -131,7 +140,12 @@ export async function startPaymentsFake(options: { webhookUrl: string; webhookSe
       const header = signer.webhooks.generateTestHeaderString({ payload, secret: options.webhookSecret });
       let status: number | null = null;
       try {
-        const res = await fetch(options.webhookUrl, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': header }, body: payload, signal: AbortSignal.timeout(15_000) });
+        const res = await fetch(options.webhookUrl, {
+          method: 'POST',
+          headers: { 'content-type': 'application/json', 'stripe-signature': header },
+          body: payload,
+          signal: AbortSignal.timeout(15_000),
+        });
         status = res.status;
         await res.body?.cancel();
       } catch {
@@ -208,7 +222,15 @@ export async function startPaymentsFake(options: { webhookUrl: string; webhookSe
       if (!s) return apiError(res, 404, `No such payment_intent: '${intent}'`);
       const amount = f.has('amount') ? Number(f.get('amount')) : s.amount_total;
       const refund = { id: id('re'), object: 'refund', amount, currency: s.currency, payment_intent: intent, status: 'succeeded' };
-      const charge = { id: id('ch'), object: 'charge', amount: s.amount_total, amount_refunded: amount, currency: s.currency, payment_intent: intent, refunded: amount >= s.amount_total };
+      const charge = {
+        id: id('ch'),
+        object: 'charge',
+        amount: s.amount_total,
+        amount_refunded: amount,
+        currency: s.currency,
+        payment_intent: intent,
+        refunded: amount >= s.amount_total,
+      };
       await deliver('charge.refunded', charge);
       return json(res, refund);
     }
@@ -248,7 +270,11 @@ export async function startPaymentsFake(options: { webhookUrl: string; webhookSe
       return res.end();
     }
     const page = /^\/checkout\/([\w-]+)$/.exec(path);
-    const work = page ? checkout(req, res, page[1]) : path.startsWith('/v1/') ? api(req, res, path) : Promise.resolve(apiError(res, 404, 'Not found.'));
+    const work = page
+      ? checkout(req, res, page[1])
+      : path.startsWith('/v1/')
+        ? api(req, res, path)
+        : Promise.resolve(apiError(res, 404, 'Not found.'));
     work.catch((error: unknown) => {
       if (!res.headersSent) apiError(res, 500, error instanceof Error ? error.message : 'Fake failed.', 'api_error');
       else res.end();

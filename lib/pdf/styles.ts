@@ -18,5 +18,14 @@ export const PDF_BASE_STYLES = {
   amount: { width: 80, textAlign: 'right' },
   strong: { fontWeight: 600 },
   block: { marginTop: 16 },
-  footer: { position: 'absolute', bottom: 24, left: 40, right: 40, fontSize: 8, color: PDF_MUTE, flexDirection: 'row', justifyContent: 'space-between' },
+  footer: {
+    position: 'absolute',
+    bottom: 24,
+    left: 40,
+    right: 40,
+    fontSize: 8,
+    color: PDF_MUTE,
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+  },
 } as const;

@@ -5,8 +5,23 @@ import { quoteNumberText, revisionLetter } from '@/shared/schemas/quote';
 import { buildQuoteLines, slidePrice } from './build-lines';
 
 const sheet = (over: Partial<TakeoffLine>): TakeoffLine => ({
-  stockId: 's1', source: 'stock', kind: 'sheet', material: 'Maple ply', nominalThickness: '3/4', thicknessMm: 18.3, lengthMm: 2438.4, widthMm: 1219.2, count: 3, costEachCents: 6840,
-  free: 10, heldByPlan: 0, boardFeet: null, areaMm2: 3 * 2438.4 * 1219.2, costCents: 3 * 6840, covered: true, ...over,
+  stockId: 's1',
+  source: 'stock',
+  kind: 'sheet',
+  material: 'Maple ply',
+  nominalThickness: '3/4',
+  thicknessMm: 18.3,
+  lengthMm: 2438.4,
+  widthMm: 1219.2,
+  count: 3,
+  costEachCents: 6840,
+  free: 10,
+  heldByPlan: 0,
+  boardFeet: null,
+  areaMm2: 3 * 2438.4 * 1219.2,
+  costCents: 3 * 6840,
+  covered: true,
+  ...over,
 });
 const HARDWARE = [
   { id: 'h1', name: 'Side-mount slides, 18″, full extension', unit: 'pair', priceMinor: 1495 },
@@ -20,8 +35,15 @@ describe('a new quote’s lines (the Alder & Finch figures of lib/costing/RULES.
   test('material at cost, offcuts at area cost or free, the allowance once, slides as pairs priced from the list, labour hours', () => {
     const src = {
       ...base,
-      takeoff: { lines: [sheet({}), sheet({ stockId: 'o1', source: 'offcut', kind: 'offcut', count: 1, costEachCents: 937 })], allowancePercent: 15, allowanceCents: 3219 },
-      slides: [{ kind: 'Side-mount slides', lengthMm: 457.2, lengthText: '18″', pairs: 4 }, { kind: 'Side-mount slides', lengthMm: 558.8, lengthText: '22″', pairs: 2 }],
+      takeoff: {
+        lines: [sheet({}), sheet({ stockId: 'o1', source: 'offcut', kind: 'offcut', count: 1, costEachCents: 937 })],
+        allowancePercent: 15,
+        allowanceCents: 3219,
+      },
+      slides: [
+        { kind: 'Side-mount slides', lengthMm: 457.2, lengthText: '18″', pairs: 4 },
+        { kind: 'Side-mount slides', lengthMm: 558.8, lengthText: '22″', pairs: 2 },
+      ],
       pricing: { ...DEFAULT_PRICING, finishingMinutesPerM2: 9 },
     };
     const lines = buildQuoteLines(src);

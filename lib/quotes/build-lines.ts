@@ -25,8 +25,10 @@ export interface QuoteSources {
 }
 
 const LABOUR_TEXT = {
-  saw: (c: LabourCounts) => `Saw time: ${c.cuts} cut${c.cuts === 1 ? '' : 's'}, ${c.piecesHandled} stock piece${c.piecesHandled === 1 ? '' : 's'} handled`,
-  machining: (c: LabourCounts) => `Machining: ${c.setupCards} setup${c.setupCards === 1 ? '' : 's'}, ${c.jointCorners} joint corner${c.jointCorners === 1 ? '' : 's'}`,
+  saw: (c: LabourCounts) =>
+    `Saw time: ${c.cuts} cut${c.cuts === 1 ? '' : 's'}, ${c.piecesHandled} stock piece${c.piecesHandled === 1 ? '' : 's'} handled`,
+  machining: (c: LabourCounts) =>
+    `Machining: ${c.setupCards} setup${c.setupCards === 1 ? '' : 's'}, ${c.jointCorners} joint corner${c.jointCorners === 1 ? '' : 's'}`,
   assembly: (c: LabourCounts) => `Assembly: ${c.drawerBoxes} drawer box${c.drawerBoxes === 1 ? '' : 'es'}`,
   finishing: () => 'Finishing',
 } as const;
@@ -34,7 +36,9 @@ const LABOUR_TEXT = {
 /** The price-list item for slides of a length: a "pair" item whose name holds the length as the shop writes it. */
 export function slidePrice(need: SlideNeed, hardware: readonly HardwareItem[]): HardwareItem | undefined {
   const needle = need.lengthText.replace(/\s+/g, '').toLowerCase();
-  return hardware.find((h) => h.unit.trim().toLowerCase() === 'pair' && /slide/i.test(h.name) && h.name.replace(/\s+/g, '').toLowerCase().includes(needle));
+  return hardware.find(
+    (h) => h.unit.trim().toLowerCase() === 'pair' && /slide/i.test(h.name) && h.name.replace(/\s+/g, '').toLowerCase().includes(needle),
+  );
 }
 
 /**

@@ -28,7 +28,14 @@ export function customerCopy(lines: QuoteLine[], totals: QuoteTotals): { lines: 
   return {
     lines: lines.map((l, i) => {
       const labour = l.kind === 'labour';
-      return { id: l.id, description: l.description, quantity: labour ? null : l.quantity, unit: labour ? '' : l.unit, unitPriceMinor: labour ? null : totals.lines[i].unitPriceMinor, priceMinor: totals.lines[i].priceMinor };
+      return {
+        id: l.id,
+        description: l.description,
+        quantity: labour ? null : l.quantity,
+        unit: labour ? '' : l.unit,
+        unitPriceMinor: labour ? null : totals.lines[i].unitPriceMinor,
+        priceMinor: totals.lines[i].priceMinor,
+      };
     }),
     totals: {
       subtotalMinor: totals.subtotalMinor,

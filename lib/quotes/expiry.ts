@@ -11,7 +11,8 @@ const holder = globalThis as typeof globalThis & { __kerfwiseExpiry?: NodeJS.Tim
 
 export function startQuoteExpiry(db: Db): void {
   if (holder.__kerfwiseExpiry) return;
-  const round = () => void expireQuotes(db).catch((error: unknown) => console.error(`Quote expiry round failed: ${error instanceof Error ? error.message : error}`));
+  const round = () =>
+    void expireQuotes(db).catch((error: unknown) => console.error(`Quote expiry round failed: ${error instanceof Error ? error.message : error}`));
   round();
   holder.__kerfwiseExpiry = setInterval(round, EVERY_MS);
   holder.__kerfwiseExpiry.unref();

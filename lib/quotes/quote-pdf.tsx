@@ -11,7 +11,6 @@ import { PDF_BASE_STYLES, PDF_INK } from '@/lib/pdf/styles';
 import type { QuoteTotals } from '@/lib/costing/quote-totals';
 import type { QuoteLine } from '@/shared/schemas/quote';
 
-
 export interface QuotePdfInput {
   shop: { name: string };
   title: string;
@@ -55,7 +54,9 @@ function QuoteDocument({ q, qr }: { q: QuotePdfInput; qr: string | null }) {
           <View>
             <Text style={s.title}>{q.title}</Text>
             <Text style={[s.muted, { textAlign: 'right' }]}>Issued {q.issued}</Text>
-            <Text style={[s.muted, { textAlign: 'right' }]}>{q.validUntil ? `Valid until ${q.validUntil}` : `Valid ${q.validityDays} days from sending`}</Text>
+            <Text style={[s.muted, { textAlign: 'right' }]}>
+              {q.validUntil ? `Valid until ${q.validUntil}` : `Valid ${q.validityDays} days from sending`}
+            </Text>
           </View>
         </View>
         {c && (
@@ -93,12 +94,34 @@ function QuoteDocument({ q, qr }: { q: QuotePdfInput; qr: string | null }) {
           </View>
         ))}
         <View style={s.totals} wrap={false}>
-          <View style={s.totalRow}><Text>Subtotal</Text><Text>{money(t.subtotalMinor)}</Text></View>
-          {t.discountMinor > 0 ? <View style={s.totalRow}><Text>Discount</Text><Text>−{money(t.discountMinor)}</Text></View> : null}
-          {q.taxPercent > 0 ? <View style={s.totalRow}><Text>Sales tax ({q.taxPercent} %)</Text><Text>{money(t.taxMinor)}</Text></View> : null}
-          <View style={[s.totalRow, { borderTopWidth: 0.75, borderTopColor: ink, marginTop: 2, paddingTop: 4 }]}><Text style={s.strong}>Total</Text><Text style={s.strong}>{money(t.totalMinor)}</Text></View>
-          <View style={s.totalRow}><Text>Deposit on acceptance ({q.depositPercent} %)</Text><Text>{money(t.depositMinor)}</Text></View>
-          <View style={s.totalRow}><Text>Balance</Text><Text>{money(t.balanceMinor)}</Text></View>
+          <View style={s.totalRow}>
+            <Text>Subtotal</Text>
+            <Text>{money(t.subtotalMinor)}</Text>
+          </View>
+          {t.discountMinor > 0 ? (
+            <View style={s.totalRow}>
+              <Text>Discount</Text>
+              <Text>−{money(t.discountMinor)}</Text>
+            </View>
+          ) : null}
+          {q.taxPercent > 0 ? (
+            <View style={s.totalRow}>
+              <Text>Sales tax ({q.taxPercent} %)</Text>
+              <Text>{money(t.taxMinor)}</Text>
+            </View>
+          ) : null}
+          <View style={[s.totalRow, { borderTopWidth: 0.75, borderTopColor: ink, marginTop: 2, paddingTop: 4 }]}>
+            <Text style={s.strong}>Total</Text>
+            <Text style={s.strong}>{money(t.totalMinor)}</Text>
+          </View>
+          <View style={s.totalRow}>
+            <Text>Deposit on acceptance ({q.depositPercent} %)</Text>
+            <Text>{money(t.depositMinor)}</Text>
+          </View>
+          <View style={s.totalRow}>
+            <Text>Balance</Text>
+            <Text>{money(t.balanceMinor)}</Text>
+          </View>
         </View>
         {q.terms ? (
           <View style={s.block} wrap={false}>
@@ -116,7 +139,9 @@ function QuoteDocument({ q, qr }: { q: QuotePdfInput; qr: string | null }) {
           </View>
         ) : null}
         <View style={s.footer} fixed>
-          <Text>{q.shop.name} · {q.title}</Text>
+          <Text>
+            {q.shop.name} · {q.title}
+          </Text>
           <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
         </View>
       </Page>

@@ -2,12 +2,34 @@ import { describe, expect, test } from 'vitest';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
 import { DEFAULT_RECUT_REASON, finishFigures, recutLabel, recutNestParts, type RecutPart } from './recuts';
 
-const side: RecutPart = { id: '5d1f7b0e-4a8e-4f43-9d3f-0c6f3b1d2a11', label: 'Base side', instance: 3, quantity: 1, lengthMm: 876.3, widthMm: 584.2, thicknessMm: 18.26, material: 'Maple ply', grain: 'along-length', jointAllowanceMm: 0, reason: 'Tear-out' };
+const side: RecutPart = {
+  id: '5d1f7b0e-4a8e-4f43-9d3f-0c6f3b1d2a11',
+  label: 'Base side',
+  instance: 3,
+  quantity: 1,
+  lengthMm: 876.3,
+  widthMm: 584.2,
+  thicknessMm: 18.26,
+  material: 'Maple ply',
+  grain: 'along-length',
+  jointAllowanceMm: 0,
+  reason: 'Tear-out',
+};
 
 describe('re-cuts as parts of a Nest', () => {
   test('keep the re-cut id, the part label with "#n", the size, material, thickness and grain', () => {
     const [part] = recutNestParts([side]);
-    expect(part).toMatchObject({ id: side.id, label: 'Base side #3 · re-cut', quantity: 1, length: 876.3, width: 584.2, thickness: 18.26, material: 'Maple ply', grain: 'along-length', notes: 'Re-cut: Tear-out' });
+    expect(part).toMatchObject({
+      id: side.id,
+      label: 'Base side #3 · re-cut',
+      quantity: 1,
+      length: 876.3,
+      width: 584.2,
+      thickness: 18.26,
+      material: 'Maple ply',
+      grain: 'along-length',
+      notes: 'Re-cut: Tear-out',
+    });
     expect(nestRequestSchema.safeParse({ parts: [part], stock: [] }).success).toBe(true);
   });
 
@@ -31,7 +53,17 @@ describe('figures of a finished plan with a spoiled part', () => {
   });
 
   test('nothing damaged: the yield is the parts, and no stock means no figures rather than NaN', () => {
-    expect(finishFigures({ stockArea: 1000, partArea: 800, keptOffcutArea: 100, spoiledArea: 0 })).toEqual({ yieldRatio: 0.8, wasteRatio: 0.1, spoiledRatio: 0, sawWasteRatio: 0.1 });
-    expect(finishFigures({ stockArea: 0, partArea: 0, keptOffcutArea: 0, spoiledArea: 0 })).toEqual({ yieldRatio: 0, wasteRatio: 0, spoiledRatio: 0, sawWasteRatio: 0 });
+    expect(finishFigures({ stockArea: 1000, partArea: 800, keptOffcutArea: 100, spoiledArea: 0 })).toEqual({
+      yieldRatio: 0.8,
+      wasteRatio: 0.1,
+      spoiledRatio: 0,
+      sawWasteRatio: 0.1,
+    });
+    expect(finishFigures({ stockArea: 0, partArea: 0, keptOffcutArea: 0, spoiledArea: 0 })).toEqual({
+      yieldRatio: 0,
+      wasteRatio: 0,
+      spoiledRatio: 0,
+      sawWasteRatio: 0,
+    });
   });
 });

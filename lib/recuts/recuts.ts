@@ -20,7 +20,14 @@ export interface RecutPart {
 export const DEFAULT_RECUT_REASON = 'Damaged at the saw';
 
 /** Common ways a part is spoiled at the saw, offered (not imposed) when the cutter records one. */
-export const RECUT_REASONS = ['Tear-out', 'Chipped edge', 'Cut undersize', 'Cut to the wrong size', 'Dropped or dented', 'Defect in the sheet'] as const;
+export const RECUT_REASONS = [
+  'Tear-out',
+  'Chipped edge',
+  'Cut undersize',
+  'Cut to the wrong size',
+  'Dropped or dented',
+  'Defect in the sheet',
+] as const;
 
 /** "Side #3": the part's label with the piece that was damaged. */
 export const recutLabel = (r: Pick<RecutPart, 'label' | 'instance'>) => `${r.label || 'Part'} #${r.instance}`;
@@ -52,10 +59,25 @@ export function recutNestParts(recuts: RecutPart[]): NestPart[] {
  * yield = (part area − spoiled) / stock; waste = (stock − (part area − spoiled) − kept offcuts) / stock;
  * spoiled = spoiled / stock; saw waste = waste − spoiled.
  */
-export function finishFigures({ stockArea, partArea, keptOffcutArea, spoiledArea }: { stockArea: number; partArea: number; keptOffcutArea: number; spoiledArea: number }) {
+export function finishFigures({
+  stockArea,
+  partArea,
+  keptOffcutArea,
+  spoiledArea,
+}: {
+  stockArea: number;
+  partArea: number;
+  keptOffcutArea: number;
+  spoiledArea: number;
+}) {
   if (!(stockArea > 0)) return { yieldRatio: 0, wasteRatio: 0, spoiledRatio: 0, sawWasteRatio: 0 };
   const spoiled = Math.min(Math.max(0, spoiledArea), partArea);
   const good = Math.max(0, partArea - spoiled);
   const waste = Math.max(0, stockArea - good - keptOffcutArea);
-  return { yieldRatio: good / stockArea, wasteRatio: waste / stockArea, spoiledRatio: spoiled / stockArea, sawWasteRatio: Math.max(0, waste - spoiled) / stockArea };
+  return {
+    yieldRatio: good / stockArea,
+    wasteRatio: waste / stockArea,
+    spoiledRatio: spoiled / stockArea,
+    sawWasteRatio: Math.max(0, waste - spoiled) / stockArea,
+  };
 }

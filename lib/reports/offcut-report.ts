@@ -24,10 +24,32 @@ export const rackShare = (r: OffcutUseFigures) => {
 export function offcutUseCsv(rows: readonly OffcutUseFigures[], units: ShopUnits): string {
   const unit = units.system === 'metric' ? 'm²' : 'ft²';
   const area = (mm2: number) => (units.system === 'metric' ? mm2 / 1e6 : mm2 / (304.8 * 304.8)).toFixed(3);
-  const fields = ['Period from', `Cut from offcuts (${unit})`, `Cut from new stock (${unit})`, 'From offcuts (%)', 'Offcuts racked', `Racked (${unit})`, 'Offcuts used', `Used (${unit})`, 'Offcuts scrapped', `Scrapped (${unit})`];
+  const fields = [
+    'Period from',
+    `Cut from offcuts (${unit})`,
+    `Cut from new stock (${unit})`,
+    'From offcuts (%)',
+    'Offcuts racked',
+    `Racked (${unit})`,
+    'Offcuts used',
+    `Used (${unit})`,
+    'Offcuts scrapped',
+    `Scrapped (${unit})`,
+  ];
   const data = rows.map((r) => {
     const s = rackShare(r);
-    return [r.period, area(r.fromRackArea), area(r.fromNewStockArea), s === null ? '' : (s * 100).toFixed(1), String(r.racked), area(r.rackedArea), String(r.used), area(r.usedArea), String(r.scrapped), area(r.scrappedArea)];
+    return [
+      r.period,
+      area(r.fromRackArea),
+      area(r.fromNewStockArea),
+      s === null ? '' : (s * 100).toFixed(1),
+      String(r.racked),
+      area(r.rackedArea),
+      String(r.used),
+      area(r.usedArea),
+      String(r.scrapped),
+      area(r.scrappedArea),
+    ];
   });
   return Papa.unparse({ fields, data }, { escapeFormulae: FORMULA_START, newline: '\r\n' });
 }

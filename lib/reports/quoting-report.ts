@@ -25,7 +25,16 @@ export function quotingCsv(rows: readonly QuotingFigures[], currency: string): s
   const fields = ['Period from', 'Sent', 'Accepted', 'Declined', 'Expired', 'Won (%)', `Value won (${currency})`, `Deposits collected (${currency})`];
   const data = rows.map((r) => {
     const rate = winRate(r);
-    return [r.period, String(r.sent), String(r.accepted), String(r.declined), String(r.expired), rate === null ? '' : (rate * 100).toFixed(1), money(r.wonMinor), money(r.depositsMinor)];
+    return [
+      r.period,
+      String(r.sent),
+      String(r.accepted),
+      String(r.declined),
+      String(r.expired),
+      rate === null ? '' : (rate * 100).toFixed(1),
+      money(r.wonMinor),
+      money(r.depositsMinor),
+    ];
   });
   return Papa.unparse({ fields, data }, { escapeFormulae: FORMULA_START, newline: '\r\n' });
 }

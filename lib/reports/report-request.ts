@@ -10,7 +10,10 @@ export async function reportFilterFor(db: Db, shopId: string, query: ReportQuery
   if (!settings) throw notFound('The shop');
   const range = reportRange(query, settings.timeZone, now);
   if ('error' in range) throw new HttpError(422, range.error, { from: [range.error] });
-  return { settings, filter: { shopId, timeZone: settings.timeZone, material: query.material, customerId: query.customer, jobId: query.job, ...range } };
+  return {
+    settings,
+    filter: { shopId, timeZone: settings.timeZone, material: query.material, customerId: query.customer, jobId: query.job, ...range },
+  };
 }
 
 /** A CSV download: a byte-order mark so spreadsheets read ″ and ² as UTF-8. */

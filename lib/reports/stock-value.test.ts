@@ -39,6 +39,9 @@ test('the CSV writes money in the currency’s own decimals: cents for USD, none
   const { stockValueCsv } = await import('./stock-value');
   const unparse = (rows: { fields: string[]; data: string[][] }) => Papa.unparse(rows, { newline: '\r\n' });
   const points = [{ period: '2026-11-01', onHandCents: 49_050, reservedCents: 0, byMaterial: { 'Baltic birch': 49_050 } }];
-  expect(stockValueCsv(points, 'USD', unparse).split('\r\n')).toEqual(['Period from,On hand (USD),Reserved (USD),Baltic birch on hand (USD)', '2026-11-01,490.50,0.00,490.50']);
+  expect(stockValueCsv(points, 'USD', unparse).split('\r\n')).toEqual([
+    'Period from,On hand (USD),Reserved (USD),Baltic birch on hand (USD)',
+    '2026-11-01,490.50,0.00,490.50',
+  ]);
   expect(stockValueCsv(points, 'JPY', unparse).split('\r\n')[1]).toBe('2026-11-01,49050,0,49050');
 });

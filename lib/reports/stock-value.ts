@@ -31,7 +31,11 @@ export interface StockValuePoint {
  * opening balance; changes after the last are ignored. A piece the ledger names but `pieces` lacks is reported,
  * never silently valued at zero.
  */
-export function stockValueOverTime(periods: readonly string[], changes: readonly LedgerChange[], pieces: readonly ValuedPiece[]): { points: StockValuePoint[]; unknownPieces: string[] } {
+export function stockValueOverTime(
+  periods: readonly string[],
+  changes: readonly LedgerChange[],
+  pieces: readonly ValuedPiece[],
+): { points: StockValuePoint[]; unknownPieces: string[] } {
   const byId = new Map(pieces.map((p) => [p.id, p]));
   const unknown = new Set<string>();
   const sorted = [...changes].sort((a, b) => a.period.localeCompare(b.period));
@@ -61,10 +65,17 @@ export function stockValueOverTime(periods: readonly string[], changes: readonly
 }
 
 /** The stock value report's CSV: one line per period, then one column per material (on hand). */
-export function stockValueCsv(points: readonly StockValuePoint[], currency: string, unparse: (rows: { fields: string[]; data: string[][] }) => string): string {
+export function stockValueCsv(
+  points: readonly StockValuePoint[],
+  currency: string,
+  unparse: (rows: { fields: string[]; data: string[][] }) => string,
+): string {
   const decimals = new Intl.NumberFormat('en-US', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
   const money = (minor: number) => (minor / 10 ** decimals).toFixed(decimals);
   const materials = [...new Set(points.flatMap((p) => Object.keys(p.byMaterial)))].sort();
   const fields = ['Period from', `On hand (${currency})`, `Reserved (${currency})`, ...materials.map((m) => `${m} on hand (${currency})`)];
-  return unparse({ fields, data: points.map((p) => [p.period, money(p.onHandCents), money(p.reservedCents), ...materials.map((m) => money(p.byMaterial[m] ?? 0))]) });
+  return unparse({
+    fields,
+    data: points.map((p) => [p.period, money(p.onHandCents), money(p.reservedCents), ...materials.map((m) => money(p.byMaterial[m] ?? 0))]),
+  });
 }

@@ -4,7 +4,15 @@ import { overall, percentText, periodTotals, shares, yieldCsv } from './yield-re
 
 const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
 const row = (period: string, material: string, stockArea: number, partArea: number, spoiledArea = 0, keptArea = 0) => ({
-  period, material, thicknessMm: 18, plans: 1, stockArea, partArea, spoiledArea, keptArea, sawWasteArea: stockArea - partArea - spoiledArea - keptArea,
+  period,
+  material,
+  thicknessMm: 18,
+  plans: 1,
+  stockArea,
+  partArea,
+  spoiledArea,
+  keptArea,
+  sawWasteArea: stockArea - partArea - spoiledArea - keptArea,
 });
 
 describe('the yield report’s figures (worked by hand)', () => {
@@ -32,7 +40,20 @@ describe('the yield report’s figures (worked by hand)', () => {
   test('the CSV: one line per period and material, areas in ft² (1 ft² = 92,903.04 mm², NIST), formula-looking names neutralised', () => {
     const csv = yieldCsv([row('2026-11-01', '=HYPERLINK("x")', 92_903.04 * 10, 92_903.04 * 4)], IMPERIAL);
     const [head, line] = Papa.parse<string[]>(csv.trim()).data;
-    expect(head).toEqual(['Period from', 'Material', 'Thickness (mm)', 'Plans', 'Stock (ft²)', 'Parts (ft²)', 'Kept offcuts (ft²)', 'Saw waste (ft²)', 'Spoiled (ft²)', 'Yield (%)', 'Saw waste (%)', 'Spoiled (%)']);
+    expect(head).toEqual([
+      'Period from',
+      'Material',
+      'Thickness (mm)',
+      'Plans',
+      'Stock (ft²)',
+      'Parts (ft²)',
+      'Kept offcuts (ft²)',
+      'Saw waste (ft²)',
+      'Spoiled (ft²)',
+      'Yield (%)',
+      'Saw waste (%)',
+      'Spoiled (%)',
+    ]);
     expect(line).toEqual(['2026-11-01', `'=HYPERLINK("x")`, '18', '1', '10.000', '4.000', '0.000', '6.000', '0.000', '40.0', '60.0', '0.0']);
   });
 });
@@ -40,7 +61,17 @@ describe('the yield report’s figures (worked by hand)', () => {
 describe('the offcut report’s CSV', async () => {
   const { offcutUseCsv, rackShare } = await import('./offcut-report');
   test('the rack’s share of what was cut: 500,000 from offcuts and 1,500,000 new is 25 % (worked by hand), in m² for a metric shop', () => {
-    const r = { period: '2026-12-01', fromRackArea: 500_000, fromNewStockArea: 1_500_000, racked: 2, rackedArea: 450_000, used: 1, usedArea: 500_000, scrapped: 0, scrappedArea: 0 };
+    const r = {
+      period: '2026-12-01',
+      fromRackArea: 500_000,
+      fromNewStockArea: 1_500_000,
+      racked: 2,
+      rackedArea: 450_000,
+      used: 1,
+      usedArea: 500_000,
+      scrapped: 0,
+      scrappedArea: 0,
+    };
     expect(rackShare(r)).toBe(0.25);
     const [, line] = Papa.parse<string[]>(offcutUseCsv([r], { system: 'metric', precision: 1, feet: false }).trim()).data;
     expect(line).toEqual(['2026-12-01', '0.500', '1.500', '25.0', '2', '0.450', '1', '0.500', '0', '0.000']);

@@ -24,7 +24,12 @@ export interface YieldShares {
 
 export const shares = (f: YieldFigures): YieldShares =>
   f.stockArea > 0
-    ? { yield: f.partArea / f.stockArea, sawWaste: f.sawWasteArea / f.stockArea, spoiled: f.spoiledArea / f.stockArea, kept: f.keptArea / f.stockArea }
+    ? {
+        yield: f.partArea / f.stockArea,
+        sawWaste: f.sawWasteArea / f.stockArea,
+        spoiled: f.spoiledArea / f.stockArea,
+        kept: f.keptArea / f.stockArea,
+      }
     : { yield: null, sawWaste: null, spoiled: null, kept: null };
 
 const add = (a: YieldFigures, b: YieldFigures): YieldFigures => ({
@@ -54,13 +59,42 @@ export const percentText = (share: number | null) => (share === null || !Number.
 /** Square metres or square feet to 3 decimals, as a plain number a spreadsheet reads. */
 const areaNumber = (mm2: number, units: ShopUnits) => (units.system === 'metric' ? mm2 / 1e6 : mm2 / (304.8 * 304.8)).toFixed(3);
 
-export function yieldCsv(rows: readonly (YieldFigures & { period: string; material: string; thicknessMm: number; plans: number })[], units: ShopUnits): string {
+export function yieldCsv(
+  rows: readonly (YieldFigures & { period: string; material: string; thicknessMm: number; plans: number })[],
+  units: ShopUnits,
+): string {
   const unit = units.system === 'metric' ? 'm²' : 'ft²';
-  const fields = ['Period from', 'Material', 'Thickness (mm)', 'Plans', `Stock (${unit})`, `Parts (${unit})`, `Kept offcuts (${unit})`, `Saw waste (${unit})`, `Spoiled (${unit})`, 'Yield (%)', 'Saw waste (%)', 'Spoiled (%)'];
+  const fields = [
+    'Period from',
+    'Material',
+    'Thickness (mm)',
+    'Plans',
+    `Stock (${unit})`,
+    `Parts (${unit})`,
+    `Kept offcuts (${unit})`,
+    `Saw waste (${unit})`,
+    `Spoiled (${unit})`,
+    'Yield (%)',
+    'Saw waste (%)',
+    'Spoiled (%)',
+  ];
   const pct = (s: number | null) => (s === null ? '' : (s * 100).toFixed(1));
   const data = rows.map((r) => {
     const s = shares(r);
-    return [r.period, r.material, String(r.thicknessMm), String(r.plans), areaNumber(r.stockArea, units), areaNumber(r.partArea, units), areaNumber(r.keptArea, units), areaNumber(r.sawWasteArea, units), areaNumber(r.spoiledArea, units), pct(s.yield), pct(s.sawWaste), pct(s.spoiled)];
+    return [
+      r.period,
+      r.material,
+      String(r.thicknessMm),
+      String(r.plans),
+      areaNumber(r.stockArea, units),
+      areaNumber(r.partArea, units),
+      areaNumber(r.keptArea, units),
+      areaNumber(r.sawWasteArea, units),
+      areaNumber(r.spoiledArea, units),
+      pct(s.yield),
+      pct(s.sawWaste),
+      pct(s.spoiled),
+    ];
   });
   return Papa.unparse({ fields, data }, { escapeFormulae: FORMULA_START, newline: '\r\n' });
 }

@@ -22,7 +22,17 @@ describe('saw-order step descriptions', () => {
   });
 
   test('a rip too narrow for the fence says so, and where to cut it instead (common practice, no source)', () => {
-    const step = { n: 3, kind: 'rip' as const, piece: 'A2', reference: 'low' as const, fence: 19, length: 1000, trim: false, narrow: true, produces: [{ name: 'A2a', x: 0, y: 0, w: 1000, h: 19, role: 'part' as const, parts: [] }] };
+    const step = {
+      n: 3,
+      kind: 'rip' as const,
+      piece: 'A2',
+      reference: 'low' as const,
+      fence: 19,
+      length: 1000,
+      trim: false,
+      narrow: true,
+      produces: [{ name: 'A2a', x: 0, y: 0, w: 1000, h: 19, role: 'part' as const, parts: [] }],
+    };
     const text = describeStep(step, new Map(), mm);
     expect(text.narrow).toBe(true);
     expect(text.summary).toBe('3. Rip A2 19 mm wide on a sled, with a track saw or on the band saw: too narrow to rip between blade and fence');

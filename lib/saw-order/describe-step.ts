@@ -69,7 +69,8 @@ export function describeStep(step: SawStep, labels: Map<string, string>, units: 
     trim: step.trim,
     narrow,
     ...(step.saw ? { saw: step.saw } : {}),
-    summary: (narrow ? `${step.n}. ${what} ${fence} wide ${NARROW_HOW}` : `${step.n}. ${what}, fence at ${fence}`) + (step.saw ? ` (on ${step.saw})` : ''),
+    summary:
+      (narrow ? `${step.n}. ${what} ${fence} wide ${NARROW_HOW}` : `${step.n}. ${what}, fence at ${fence}`) + (step.saw ? ` (on ${step.saw})` : ''),
     frees: produced.filter((p) => p.role === 'part').map((p) => p.part),
     produced,
   };

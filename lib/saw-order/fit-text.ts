@@ -54,7 +54,14 @@ export function wrapToFit(text: string, measure: Measure, size: number, width: n
  * A name with a suffix that must stay whole (" #3", or a thickness): first the font shrinks, down to `min`; if the
  * whole still does not fit, the name is abbreviated with "..." before the suffix. The suffix is never touched.
  */
-export function fitNameWithSuffix(name: string, suffix: string, measure: Measure, size: number, width: number, min: number): { text: string; size: number } {
+export function fitNameWithSuffix(
+  name: string,
+  suffix: string,
+  measure: Measure,
+  size: number,
+  width: number,
+  min: number,
+): { text: string; size: number } {
   const whole = `${name}${suffix}`;
   const s = shrinkToFit(whole, measure, size, width, min);
   if (measure(whole, s) <= width) return { text: whole, size: s };

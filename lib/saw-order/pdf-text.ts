@@ -27,7 +27,13 @@ export function pdfText(s: string): string {
 }
 
 /** A file name any system accepts: letters, digits and dashes. */
-export const pdfFileName = (s: string) => s.normalize('NFKD').replace(/\p{M}/gu, '').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'plan';
+export const pdfFileName = (s: string) =>
+  s
+    .normalize('NFKD')
+    .replace(/\p{M}/gu, '')
+    .replace(/[^A-Za-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '')
+    .slice(0, 60) || 'plan';
 
 /** A new PDF titled for Kerfwise with Helvetica and Helvetica Bold (standard fonts: nothing to embed). */
 export async function newPdf(title: string) {

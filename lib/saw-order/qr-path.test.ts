@@ -15,7 +15,10 @@ function paintedModules(d: string): Set<string> {
 describe('QR codes for part tags', () => {
   test.each([
     ['a short part link', 'https://kerfwise.example/parts/abc?plan=1&instance=2'],
-    ['a long part link with uuids', 'http://localhost:3000/parts/fc720cab-c126-4993-8e96-59ff81d0d82b?plan=58575a7f-ff10-4c30-a7b1-a5948bb8418b&instance=12'],
+    [
+      'a long part link with uuids',
+      'http://localhost:3000/parts/fc720cab-c126-4993-8e96-59ff81d0d82b?plan=58575a7f-ff10-4c30-a7b1-a5948bb8418b&instance=12',
+    ],
   ])('%s paints exactly the dark modules the qrcode package encodes, inside a 4-module quiet zone (ISO/IEC 18004)', (_label, url) => {
     const { modules } = QRCode.create(url, { errorCorrectionLevel: 'M' });
     const { size, d } = qrPath(url);

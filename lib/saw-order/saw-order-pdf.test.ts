@@ -27,7 +27,9 @@ describe('the saw-order PDF', () => {
 
   test('prints on A4 when asked (210 × 297 mm = 595.28 × 841.89 pt, ISO 216)', async () => {
     const { plan } = await nest(carcassRequest());
-    const doc = await PDFDocument.load(await sawOrderPdf({ title: 'A4', subtitle: '', units, kerf: inches(1 / 8), pieces: plan.pieces, pageSize: 'a4' }));
+    const doc = await PDFDocument.load(
+      await sawOrderPdf({ title: 'A4', subtitle: '', units, kerf: inches(1 / 8), pieces: plan.pieces, pageSize: 'a4' }),
+    );
     const { width, height } = doc.getPage(0).getSize();
     expect(width).toBeCloseTo((210 / 25.4) * 72, 1);
     expect(height).toBeCloseTo((297 / 25.4) * 72, 1);
@@ -36,7 +38,9 @@ describe('the saw-order PDF', () => {
 
   test('a piece with more steps than fit one page goes on to a continuation page, never dropping a step', async () => {
     // Forty small blocks on one sheet need far more cuts than one page holds.
-    const { plan } = await nest(request([part('block', 100, 60, { quantity: 40, label: 'Block' })], [sheet('s', 1220, 610, { count: 1 })], { kerf: 3 }));
+    const { plan } = await nest(
+      request([part('block', 100, 60, { quantity: 40, label: 'Block' })], [sheet('s', 1220, 610, { count: 1 })], { kerf: 3 }),
+    );
     expect(plan.pieces).toHaveLength(1);
     const steps = plan.pieces[0].sawOrder!.length;
     expect(steps).toBeGreaterThan(26);
@@ -59,7 +63,13 @@ describe('the saw-order PDF’s text', () => {
     // One rip marked too narrow for the fence, as the saw order marks it: its heading is the longest a step has.
     const rip = plan.pieces[0].sawOrder!.find((s) => s.kind === 'rip')!;
     rip.narrow = true;
-    const bytes = await sawOrderPdf({ title: 'Hollis kitchen', subtitle: 'Carcasses and backs · 2 stock pieces', units, kerf: inches(1 / 8), pieces: plan.pieces });
+    const bytes = await sawOrderPdf({
+      title: 'Hollis kitchen',
+      subtitle: 'Carcasses and backs · 2 stock pieces',
+      units,
+      kerf: inches(1 / 8),
+      pieces: plan.pieces,
+    });
     const runs = await pdfTextRuns(bytes);
     const fonts = await helveticaPair();
     const [pw] = PAGE_SIZES.letter;
@@ -87,9 +97,20 @@ describe('the saw-order PDF’s text', () => {
 
   test('a long name and a crowded step wrap instead of being cut: "…; waste falls off" stays', async () => {
     const { plan } = await nest(
-      request([part('p', 400, 250, { label: 'Upper cabinet left-hand side panel with shelf-pin holes', quantity: 3 })], [sheet('s', 1220, 610)], { kerf: 3, trim: 6 }),
+      request([part('p', 400, 250, { label: 'Upper cabinet left-hand side panel with shelf-pin holes', quantity: 3 })], [sheet('s', 1220, 610)], {
+        kerf: 3,
+        trim: 6,
+      }),
     );
-    const runs = await pdfTextRuns(await sawOrderPdf({ title: 'A very long job name for a customer with a long name indeed', subtitle: 'Plan 1', units, kerf: 3, pieces: plan.pieces }));
+    const runs = await pdfTextRuns(
+      await sawOrderPdf({
+        title: 'A very long job name for a customer with a long name indeed',
+        subtitle: 'Plan 1',
+        units,
+        kerf: 3,
+        pieces: plan.pieces,
+      }),
+    );
     const drawn = plain(runs.map((r) => r.text).join(' '));
     expect(drawn).not.toMatch(/\.\.\./);
     for (const n of [1, 2, 3]) expect(drawn).toContain(`Upper cabinet left-hand side panel with shelf-pin holes #${n}`);

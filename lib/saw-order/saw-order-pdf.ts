@@ -63,7 +63,18 @@ interface Line {
 const measureWith = (font: PDFFont) => (s: string, size: number) => font.widthOfTextAtSize(s, size);
 
 /** Wrapped lines from `top` down, `lead` apart. */
-function block(text: string, font: PDFFont, size: number, width: number, x: number, top: number, lead: number, color: Line['color'], maxLines = 3, min = 5.5): Line[] {
+function block(
+  text: string,
+  font: PDFFont,
+  size: number,
+  width: number,
+  x: number,
+  top: number,
+  lead: number,
+  color: Line['color'],
+  maxLines = 3,
+  min = 5.5,
+): Line[] {
   const fitted = wrapToFit(pdfText(text), measureWith(font), size, width, maxLines, min);
   return fitted.lines.map((line, i) => ({ text: line, font, size: fitted.size, x, y: top - i * lead * (fitted.size / size), color }));
 }
@@ -96,7 +107,17 @@ export async function sawOrderPdf(input: SawOrderPdfInput): Promise<Uint8Array> 
         ...block(input.subtitle, regular, 9, pw / 2 - MARGIN, pw / 2, y - 8, 10, mute, 2),
       ];
       const infoTop = Math.min(y - 18, lines.at(-1)!.y - 12);
-      const info = block(`${title.detail} - kerf ${kerf} - ${texts.length} cuts - fence = width between blade and fence`, regular, 9, width, MARGIN, infoTop, 10.5, mute, 3);
+      const info = block(
+        `${title.detail} - kerf ${kerf} - ${texts.length} cuts - fence = width between blade and fence`,
+        regular,
+        9,
+        width,
+        MARGIN,
+        infoTop,
+        10.5,
+        mute,
+        3,
+      );
       return { lines: [...lines, ...info], bottom: info.at(-1)!.y - 10 };
     };
 
@@ -130,7 +151,13 @@ export async function sawOrderPdf(input: SawOrderPdfInput): Promise<Uint8Array> 
       const head = header(pg > 0);
       for (const l of head.lines) page.drawText(l.text, { x: l.x, y: l.y, size: l.size, font: l.font, color: l.color });
       if (texts.length === 0) {
-        page.drawText('No saw order for this piece yet: save the plan to rebuild its cuts.', { x: MARGIN, y: head.bottom - 24, size: 11, font: regular, color: ink });
+        page.drawText('No saw order for this piece yet: save the plan to rebuild its cuts.', {
+          x: MARGIN,
+          y: head.bottom - 24,
+          size: 11,
+          font: regular,
+          color: ink,
+        });
       }
       for (const p of placed) {
         page.drawLine({ start: { x: p.x, y: p.top - 1 }, end: { x: p.x + cellW - 8, y: p.top - 1 }, thickness: 0.4, color: faint });
@@ -167,10 +194,21 @@ export function stepLines(text: StepText, cellW: number, fonts: Fonts): { lines:
     ...heading,
     { text: fence, font: bold, size: shrinkToFit(fence, measureWith(bold), 12, tw, 6), x: tx, y: fenceY, color: ink },
   ];
-  const detail = block(text.frees.length ? `Frees: ${text.frees.map(numbered).join(', ')}` : describeRest(text), regular, DETAIL_SIZE, tw, tx, fenceY - 11, DETAIL_LEAD, ink, 3);
+  const detail = block(
+    text.frees.length ? `Frees: ${text.frees.map(numbered).join(', ')}` : describeRest(text),
+    regular,
+    DETAIL_SIZE,
+    tw,
+    tx,
+    fenceY - 11,
+    DETAIL_LEAD,
+    ink,
+    3,
+  );
   lines.push(...detail);
   const offcut = text.produced.find((p) => p.role === 'offcut');
-  if (offcut && text.frees.length) lines.push(...block(`Keep offcut ${whole(offcut.size)}`, regular, DETAIL_SIZE, tw, tx, lines.at(-1)!.y - DETAIL_LEAD, DETAIL_LEAD, mute, 2));
+  if (offcut && text.frees.length)
+    lines.push(...block(`Keep offcut ${whole(offcut.size)}`, regular, DETAIL_SIZE, tw, tx, lines.at(-1)!.y - DETAIL_LEAD, DETAIL_LEAD, mute, 2));
   const bottom = Math.min(...lines.map((l) => l.y)) - 5;
   return { lines, h: Math.max(MIN_STEP_H, -bottom) };
 }

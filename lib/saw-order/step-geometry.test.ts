@@ -31,7 +31,8 @@ function expectGeometryMatchesPlan(plan: Plan, kerf: number) {
       // What the cut leaves lies inside the piece and clear of the blade.
       for (const p of g.produces) {
         expect(contains(g.piece, p, EPS)).toBe(true);
-        const clear = p.x + p.w <= g.kerf.x + EPS || g.kerf.x + g.kerf.w <= p.x + EPS || p.y + p.h <= g.kerf.y + EPS || g.kerf.y + g.kerf.h <= p.y + EPS;
+        const clear =
+          p.x + p.w <= g.kerf.x + EPS || g.kerf.x + g.kerf.w <= p.x + EPS || p.y + p.h <= g.kerf.y + EPS || g.kerf.y + g.kerf.h <= p.y + EPS;
         expect(clear).toBe(true);
       }
     }

@@ -45,7 +45,13 @@ export async function tagsPdf(input: TagsPdfInput): Promise<Uint8Array> {
       const tw = (at.x + sheet.label.width - 2) * PT_PER_MM - tx;
       const mid = top - h / 2;
       for (const line of tagLines(tag, input, { regular, bold }, tw)) {
-        page.drawText(line.text, { x: tx + (line.right ? tw - line.font.widthOfTextAtSize(line.text, line.size) : (line.dx ?? 0)), y: mid + line.dy, size: line.size, font: line.font, color: line.mute ? mute : ink });
+        page.drawText(line.text, {
+          x: tx + (line.right ? tw - line.font.widthOfTextAtSize(line.text, line.size) : (line.dx ?? 0)),
+          y: mid + line.dy,
+          size: line.size,
+          font: line.font,
+          color: line.mute ? mute : ink,
+        });
       }
       if (tag.grain) {
         const y = mid - 19;
@@ -75,7 +81,12 @@ export interface TagLine {
  * "#n" (the name shrinks, then is abbreviated; the number never), the size (shrinks, never cut), the material with
  * its thickness (the material abbreviated first), then grain and stock piece.
  */
-export function tagLines(tag: PartTag, input: Pick<TagsPdfInput, 'jobName' | 'units'>, fonts: { regular: PDFFont; bold: PDFFont }, width: number): TagLine[] {
+export function tagLines(
+  tag: PartTag,
+  input: Pick<TagsPdfInput, 'jobName' | 'units'>,
+  fonts: { regular: PDFFont; bold: PDFFont },
+  width: number,
+): TagLine[] {
   const { regular, bold } = fonts;
   const text = tagText(tag, input.units, 'ascii');
   const measure = (font: PDFFont) => (s: string, size: number) => font.widthOfTextAtSize(pdfText(s), size);

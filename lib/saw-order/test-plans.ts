@@ -11,7 +11,9 @@ export async function nest(input: NestRequestInput) {
 
 /** Strip count (derived, lib/nesting/RULES.md): a 48″ sheet, strips 11-7/8″ wide, 1/8″ kerf → 4 full-length strips. */
 export const stripsRequest = () =>
-  request([part('strip', inches(96), inches(11 + 7 / 8), { label: 'Shelf', quantity: 4 })], [sheet('s', inches(96), inches(48))], { kerf: inches(1 / 8) });
+  request([part('strip', inches(96), inches(11 + 7 / 8), { label: 'Shelf', quantity: 4 })], [sheet('s', inches(96), inches(48))], {
+    kerf: inches(1 / 8),
+  });
 
 /** An invented small carcass on two 4 × 8 sheets, with trim, so trim cuts, crosscuts and offcuts all appear. */
 export const carcassRequest = () =>

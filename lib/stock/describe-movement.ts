@@ -37,7 +37,11 @@ export function describeMovement(m: MovementCounts): MovementWords {
       return { what: 'Reservation given back', ...counts, meaning: `${pieces(m.reservedChange)} free again; nothing left the rack.` };
     case 'consumed':
       return m.reservedChange !== 0
-        ? { what: 'Cut (was reserved)', ...counts, meaning: `${pieces(m.quantity)} cut for the plan that reserved ${Math.abs(m.quantity) === 1 ? 'it' : 'them'}: off the rack, and the reservation ends.` }
+        ? {
+            what: 'Cut (was reserved)',
+            ...counts,
+            meaning: `${pieces(m.quantity)} cut for the plan that reserved ${Math.abs(m.quantity) === 1 ? 'it' : 'them'}: off the rack, and the reservation ends.`,
+          }
         : { what: 'Cut', ...counts, meaning: `${pieces(m.quantity)} cut and taken off the rack.` };
     case 'offcut-created':
       return { what: 'Offcut racked', ...counts, meaning: 'An offcut put on the rack.' };

@@ -27,14 +27,32 @@ const plan: Plan = {
   stockToBuy: [],
   cancelled: false,
 } as Plan;
-const request = { stock: [{ id: 's1', grain: 'along-length', costEach: 5000 }], settings: { minOffcutLength: 300, minOffcutWidth: 100 } } as unknown as NestRequest;
+const request = {
+  stock: [{ id: 's1', grain: 'along-length', costEach: 5000 }],
+  settings: { minOffcutLength: 300, minOffcutWidth: 100 },
+} as unknown as NestRequest;
 const min = minOffcutFor(request, { minOffcutLengthMm: 9999, minOffcutWidthMm: 9999 });
 
 describe('finishing a plan (figures worked by hand)', () => {
   test('the keepable offcut goes on the rack at its share of the sheet’s cost; a damaged part counts as spoiled', () => {
-    const out = finishOutcome(plan, request, min, { offcuts: [{ piece: 0, index: 0, keep: true, location: 'Bin 3' }], damaged: [{ piece: 0, partId: 'B', instance: 1, what: 'tear-out' }] } as never);
+    const out = finishOutcome(plan, request, min, {
+      offcuts: [{ piece: 0, index: 0, keep: true, location: 'Bin 3' }],
+      damaged: [{ piece: 0, partId: 'B', instance: 1, what: 'tear-out' }],
+    } as never);
     // 400 × 300 of 1000 × 500 is 24 % of $50.00 = $12.00.
-    expect(out.rack).toEqual([{ piece: 0, index: 0, material: 'Baltic birch', thicknessMm: 18, lengthMm: 400, widthMm: 300, grain: 'along-length', location: 'Bin 3', costCents: 1200 }]);
+    expect(out.rack).toEqual([
+      {
+        piece: 0,
+        index: 0,
+        material: 'Baltic birch',
+        thicknessMm: 18,
+        lengthMm: 400,
+        widthMm: 300,
+        grain: 'along-length',
+        location: 'Bin 3',
+        costCents: 1200,
+      },
+    ]);
     expect(out.damaged).toEqual([{ piece: 0, partId: 'B', instance: 1, x: 600, y: 0 }]);
     // Stock 500,000 mm²: good parts 300,000 (60 %), spoiled 80,000 (16 %), kept 120,000, waste 80,000 (16 %).
     expect(out).toMatchObject({ keptArea: 120_000, damagedArea: 80_000, yieldRatio: 0.6, wasteRatio: 0.16, spoiledRatio: 0.16 });

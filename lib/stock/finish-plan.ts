@@ -23,7 +23,9 @@ export interface MinOffcut {
  * the stored request cannot be read, the shop's settings now. The finish page and the server both ask here.
  */
 export function minOffcutFor(request: NestRequest | null, shop: { minOffcutLengthMm: Mm; minOffcutWidthMm: Mm }): MinOffcut {
-  return request ? { minLength: request.settings.minOffcutLength, minWidth: request.settings.minOffcutWidth } : { minLength: shop.minOffcutLengthMm, minWidth: shop.minOffcutWidthMm };
+  return request
+    ? { minLength: request.settings.minOffcutLength, minWidth: request.settings.minOffcutWidth }
+    : { minLength: shop.minOffcutLengthMm, minWidth: shop.minOffcutWidthMm };
 }
 
 /** Stock area, part area and cost of a plan, from its totals or, for an edited plan without totals, its pieces. */
@@ -77,7 +79,12 @@ export interface FinishOutcome {
  * Every keepable offcut goes on the rack unless the cutter discards it; every part marked damaged must lie on the
  * plan, once. Damaged parts count as spoiled, not yield; racked offcuts as kept, not waste.
  */
-export function finishOutcome(plan: Plan, request: NestRequest | null, min: MinOffcut, choices: Pick<FinishPlanChoices, 'offcuts' | 'damaged'>): FinishOutcome {
+export function finishOutcome(
+  plan: Plan,
+  request: NestRequest | null,
+  min: MinOffcut,
+  choices: Pick<FinishPlanChoices, 'offcuts' | 'damaged'>,
+): FinishOutcome {
   const chosen = new Map(choices.offcuts.map((o) => [`${o.piece}:${o.index}`, o]));
   for (const o of choices.offcuts) {
     if (!plan.pieces[o.piece]?.offcuts?.[o.index]) throw new FinishChoiceError(`Piece ${o.piece + 1} has no offcut ${o.index + 1}.`);
@@ -121,5 +128,14 @@ export function finishOutcome(plan: Plan, request: NestRequest | null, min: MinO
 
   const figures = planFigures(plan);
   const ratios = finishFigures({ stockArea: figures.stockArea, partArea: figures.partArea, keptOffcutArea: keptArea, spoiledArea: damagedArea });
-  return { rack, damaged, keptArea, damagedArea, yieldRatio: ratios.yieldRatio, wasteRatio: ratios.wasteRatio, spoiledRatio: ratios.spoiledRatio, costCents: Math.round(figures.cost) };
+  return {
+    rack,
+    damaged,
+    keptArea,
+    damagedArea,
+    yieldRatio: ratios.yieldRatio,
+    wasteRatio: ratios.wasteRatio,
+    spoiledRatio: ratios.spoiledRatio,
+    costCents: Math.round(figures.cost),
+  };
 }

@@ -24,11 +24,16 @@ describe("an offcut's share of its sheet's cost", () => {
 
   test('is never more than the sheet and never negative', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1, max: 3000, noNaN: true }), fc.double({ min: 1, max: 3000, noNaN: true }), fc.integer({ min: 0, max: 1e6 }), (w, h, cost) => {
-        const share = offcutCostCents({ w, h }, { w: 3000, h: 3000 }, cost);
-        expect(share).toBeGreaterThanOrEqual(0);
-        expect(share).toBeLessThanOrEqual(cost);
-      }),
+      fc.property(
+        fc.double({ min: 1, max: 3000, noNaN: true }),
+        fc.double({ min: 1, max: 3000, noNaN: true }),
+        fc.integer({ min: 0, max: 1e6 }),
+        (w, h, cost) => {
+          const share = offcutCostCents({ w, h }, { w: 3000, h: 3000 }, cost);
+          expect(share).toBeGreaterThanOrEqual(0);
+          expect(share).toBeLessThanOrEqual(cost);
+        },
+      ),
     );
   });
 });

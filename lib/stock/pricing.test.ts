@@ -2,7 +2,14 @@ import { describe, expect, test } from 'vitest';
 import { inches } from '@/lib/units/length';
 import { costEachCents, pieceBoardFeet } from './pricing';
 
-const board = (nominalThickness: string, widthIn: number, lengthIn: number, costCents: number, thicknessMm = inches(13 / 16)) => ({ kind: 'board' as const, nominalThickness, thicknessMm, widthMm: inches(widthIn), lengthMm: inches(lengthIn), costCents });
+const board = (nominalThickness: string, widthIn: number, lengthIn: number, costCents: number, thicknessMm = inches(13 / 16)) => ({
+  kind: 'board' as const,
+  nominalThickness,
+  thicknessMm,
+  widthMm: inches(widthIn),
+  lengthMm: inches(lengthIn),
+  costCents,
+});
 
 describe('the cost of a piece of stock', () => {
   test.each([

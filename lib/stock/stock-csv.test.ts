@@ -6,17 +6,39 @@ const HEADER = 'Kind,Material,Thickness,Length,Width,Quantity,Cost,Actual thickn
 
 describe('reading a stock file', () => {
   test('reads sheets and boards with lengths in any form the shop writes them', () => {
-    const csv = HEADER + 'sheet,Maple ply,3/4",96,48,10,$94.00,23/32,Cedar Run,Rack B1,\n' + 'board,White oak,4/4,8\',6 1/2,30,9.25,,Millbrook,Lumber 1,S2S\n';
+    const csv =
+      HEADER + 'sheet,Maple ply,3/4",96,48,10,$94.00,23/32,Cedar Run,Rack B1,\n' + "board,White oak,4/4,8',6 1/2,30,9.25,,Millbrook,Lumber 1,S2S\n";
     const { rows, errors, fileErrors } = parseStockCsv(csv, 'in');
     expect(fileErrors).toEqual([]);
     expect(errors).toEqual([]);
-    expect(rows[0]).toMatchObject({ line: 2, item: { kind: 'sheet', lengthMm: expect.closeTo(inches(96), 9), thicknessMm: expect.closeTo(inches(23 / 32), 9), onHand: 10, costCents: 9400, location: 'Rack B1' } });
+    expect(rows[0]).toMatchObject({
+      line: 2,
+      item: {
+        kind: 'sheet',
+        lengthMm: expect.closeTo(inches(96), 9),
+        thicknessMm: expect.closeTo(inches(23 / 32), 9),
+        onHand: 10,
+        costCents: 9400,
+        location: 'Rack B1',
+      },
+    });
     // 4/4 with no actual thickness is taken at its nominal inch (AHEC: 4/4 = 1″).
-    expect(rows[1]).toMatchObject({ line: 3, item: { kind: 'board', lengthMm: expect.closeTo(inches(96), 9), widthMm: expect.closeTo(inches(6.5), 9), thicknessMm: expect.closeTo(25.4, 9), costCents: 925, surfacing: 'S2S' } });
+    expect(rows[1]).toMatchObject({
+      line: 3,
+      item: {
+        kind: 'board',
+        lengthMm: expect.closeTo(inches(96), 9),
+        widthMm: expect.closeTo(inches(6.5), 9),
+        thicknessMm: expect.closeTo(25.4, 9),
+        costCents: 925,
+        surfacing: 'S2S',
+      },
+    });
   });
 
   test('names every bad row with its line and every reason, and keeps the good rows apart', () => {
-    const csv = HEADER + 'sheet,MDF,18 mm,2440 mm,1220 mm,5,46,,,,\n' + 'plank,,3/4,abc,48,-2,free,,,,\n' + 'sheet,MDF,18 mm,2440 mm,1220 mm,2.5,46,,,,\n';
+    const csv =
+      HEADER + 'sheet,MDF,18 mm,2440 mm,1220 mm,5,46,,,,\n' + 'plank,,3/4,abc,48,-2,free,,,,\n' + 'sheet,MDF,18 mm,2440 mm,1220 mm,2.5,46,,,,\n';
     const { rows, errors } = parseStockCsv(csv, 'mm');
     expect(rows.map((r) => r.line)).toEqual([2]);
     expect(errors.map((e) => e.line)).toEqual([3, 4]);

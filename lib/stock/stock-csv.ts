@@ -10,7 +10,23 @@ import { stockItemSchema, type StockItemValues } from '@/shared/schemas/stock';
  * nothing is guessed: a row with any bad field is not imported. Header names are matched loosely (case, spaces,
  * a few common words) so a supplier's export can be used as it is.
  */
-export const STOCK_CSV_COLUMNS = ['kind', 'material', 'thickness', 'length', 'width', 'quantity', 'cost', 'actual thickness', 'grain', 'surfacing', 'grade', 'supplier', 'location', 'low stock at', 'buyable'] as const;
+export const STOCK_CSV_COLUMNS = [
+  'kind',
+  'material',
+  'thickness',
+  'length',
+  'width',
+  'quantity',
+  'cost',
+  'actual thickness',
+  'grain',
+  'surfacing',
+  'grade',
+  'supplier',
+  'location',
+  'low stock at',
+  'buyable',
+] as const;
 type Column = (typeof STOCK_CSV_COLUMNS)[number];
 
 const ALIASES: Record<string, Column> = {
@@ -25,7 +41,7 @@ const ALIASES: Record<string, Column> = {
   price: 'cost',
   'cost each': 'cost',
   'cost per bf': 'cost',
-  'actual': 'actual thickness',
+  actual: 'actual thickness',
   'actual thickness mm': 'actual thickness',
   rack: 'location',
   'low stock': 'low stock at',
@@ -50,7 +66,13 @@ export interface StockCsvResult {
   fileErrors: string[];
 }
 
-const normalise = (h: string) => h.trim().toLowerCase().replace(/[_\-.]+/g, ' ').replace(/\s+/g, ' ').replace(/\s*\(.*\)$/, '');
+const normalise = (h: string) =>
+  h
+    .trim()
+    .toLowerCase()
+    .replace(/[_\-.]+/g, ' ')
+    .replace(/\s+/g, ' ')
+    .replace(/\s*\(.*\)$/, '');
 const column = (h: string): Column | undefined => {
   const n = normalise(h);
   return (STOCK_CSV_COLUMNS as readonly string[]).includes(n) ? (n as Column) : ALIASES[n];
@@ -99,7 +121,9 @@ function tableOf(data: string[][]): StockTable {
   const missing = REQUIRED.filter((c) => !columns.includes(c));
   if (!body.length && !header.length) return { fileErrors: ['The file has no rows.'] };
   if (missing.length) {
-    return { fileErrors: [`Missing column${missing.length > 1 ? 's' : ''}: ${missing.join(', ')}. Expected a header row naming ${REQUIRED.join(', ')}.`] };
+    return {
+      fileErrors: [`Missing column${missing.length > 1 ? 's' : ''}: ${missing.join(', ')}. Expected a header row naming ${REQUIRED.join(', ')}.`],
+    };
   }
   return { columns, body };
 }
@@ -159,7 +183,12 @@ function checkRow(cells: string[], columns: (Column | undefined)[], unit: Length
   if (costCents === null) note('cost', `"${costText}" is not an amount of money`);
   const grainText = cell('grain').toLowerCase();
   // Safe default: grained, so a part is never turned across the grain unless the file says the stock has none.
-  const grain = !grainText || ['along-length', 'length', 'long', 'yes'].includes(grainText) ? 'along-length' : ['none', 'no', 'any'].includes(grainText) ? 'none' : null;
+  const grain =
+    !grainText || ['along-length', 'length', 'long', 'yes'].includes(grainText)
+      ? 'along-length'
+      : ['none', 'no', 'any'].includes(grainText)
+        ? 'none'
+        : null;
   if (!grain) note('grain', `"${cell('grain')}" is not along-length or none`);
   const buyableText = cell('buyable').toLowerCase();
   if (!YES.has(buyableText) && !NO.has(buyableText)) note('buyable', `"${cell('buyable')}" is not yes or no`);

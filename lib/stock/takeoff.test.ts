@@ -22,8 +22,16 @@ const board = (over: Partial<TakeoffSize> = {}): TakeoffSize => ({
 describe('board feet of a stock board', () => {
   test.each([
     ['AHEC "Measurement": 4/4 × 6″ × 8′ = 4.0 BF (on the nominal inch, not the surfaced 13/16″)', board(), 4],
-    ['AHEC "Measurement", arithmetic from the definition: 8/4 × 7″ × 10′ = 11.667 BF', board({ nominalThickness: '8/4', widthMm: inches(7), lengthMm: inches(120) }), 11.667],
-    ['[derived]: a board given in mm is measured on its actual thickness: 25.4 × 152.4 × 2438.4 mm = 4.0 BF', board({ nominalThickness: '25.4 mm', thicknessMm: 25.4 }), 4],
+    [
+      'AHEC "Measurement", arithmetic from the definition: 8/4 × 7″ × 10′ = 11.667 BF',
+      board({ nominalThickness: '8/4', widthMm: inches(7), lengthMm: inches(120) }),
+      11.667,
+    ],
+    [
+      '[derived]: a board given in mm is measured on its actual thickness: 25.4 × 152.4 × 2438.4 mm = 4.0 BF',
+      board({ nominalThickness: '25.4 mm', thicknessMm: 25.4 }),
+      4,
+    ],
   ])('%s', (_label, size, bf) => {
     expect(pieceBoardFeet(size)).toBeCloseTo(bf, 3);
   });
@@ -51,20 +59,51 @@ describe('the takeoff', () => {
     expect(allowances.map((a) => a.allowanceCents)).toEqual([1335, 1028, 585]);
     expect(totals).toMatchObject({ costCents: 19650, allowanceCents: 2948, costWithAllowanceCents: 22598, covered: true });
     // 0.15 of a sheet more is still a whole sheet to have on hand; the 6 mm rack has only one free.
-    expect(allowances.map((a) => [a.pieces, a.piecesReady, a.coveredReady])).toEqual([[1, 2, true], [1, 2, true], [1, 2, false]]);
+    expect(allowances.map((a) => [a.pieces, a.piecesReady, a.coveredReady])).toEqual([
+      [1, 2, true],
+      [1, 2, true],
+      [1, 2, false],
+    ]);
     expect(totals.coveredReady).toBe(false);
   });
 
   test('by hand: the allowance is taken once per material, over every size and offcut of it (3 × 32 ft² + a 4 ft² offcut)', () => {
-    const big = sheet({ stockId: 'stock:ply', material: 'Maple ply', lengthMm: inches(96), widthMm: inches(48), count: 3, costEachCents: 9400, free: 3 });
-    const offcut = sheet({ stockId: 'offcut:1', source: 'offcut', kind: 'offcut', material: 'maple ply', nominalThickness: '', lengthMm: inches(24), widthMm: inches(24), count: 1, costEachCents: 800, free: 1 });
+    const big = sheet({
+      stockId: 'stock:ply',
+      material: 'Maple ply',
+      lengthMm: inches(96),
+      widthMm: inches(48),
+      count: 3,
+      costEachCents: 9400,
+      free: 3,
+    });
+    const offcut = sheet({
+      stockId: 'offcut:1',
+      source: 'offcut',
+      kind: 'offcut',
+      material: 'maple ply',
+      nominalThickness: '',
+      lengthMm: inches(24),
+      widthMm: inches(24),
+      count: 1,
+      costEachCents: 800,
+      free: 1,
+    });
     const { allowances, totals } = takeoff([big, offcut], 15);
     expect(allowances).toHaveLength(1);
     const [a] = allowances;
     // 100 ft² of maple ply; 15 % is 15 ft², under half a 32 ft² sheet: 3 + 1 = 4 sheets ready, and only 3 are free.
     expect(a.amount / FT2).toBeCloseTo(100, 9);
     expect(a.allowance / FT2).toBeCloseTo(15, 9);
-    expect(a).toMatchObject({ measure: 'area', stockId: 'stock:ply', pieces: 3, piecesReady: 4, coveredReady: false, costCents: 29000, allowanceCents: 4350 });
+    expect(a).toMatchObject({
+      measure: 'area',
+      stockId: 'stock:ply',
+      pieces: 3,
+      piecesReady: 4,
+      coveredReady: false,
+      costCents: 29000,
+      allowanceCents: 4350,
+    });
     expect(totals.areaMm2 / FT2).toBeCloseTo(100, 9);
   });
 
@@ -88,7 +127,10 @@ describe('the takeoff', () => {
   test('the priced allowance is the stated share of the cost, to the cent, and never fewer pieces than the plan uses', () => {
     fc.assert(
       fc.property(
-        fc.array(fc.record({ count: fc.integer({ min: 1, max: 60 }), cents: fc.integer({ min: 0, max: 100_000 }), thick: fc.constantFrom(6, 12, 18) }), { minLength: 1, maxLength: 6 }),
+        fc.array(
+          fc.record({ count: fc.integer({ min: 1, max: 60 }), cents: fc.integer({ min: 0, max: 100_000 }), thick: fc.constantFrom(6, 12, 18) }),
+          { minLength: 1, maxLength: 6 },
+        ),
         fc.integer({ min: 0, max: 90 }),
         (rows, pct) => {
           const sizes = rows.map((r, i) => sheet({ stockId: `stock:${i}`, thicknessMm: r.thick, count: r.count, costEachCents: r.cents }));

@@ -58,9 +58,16 @@ export interface MaterialAllowance {
 export interface Takeoff {
   lines: TakeoffLine[];
   allowances: MaterialAllowance[];
-  totals: { costCents: number; allowanceCents: number; costWithAllowanceCents: number; boardFeet: number; areaMm2: number; covered: boolean; coveredReady: boolean };
+  totals: {
+    costCents: number;
+    allowanceCents: number;
+    costWithAllowanceCents: number;
+    boardFeet: number;
+    areaMm2: number;
+    covered: boolean;
+    coveredReady: boolean;
+  };
 }
-
 
 /** Whole pieces, with float crumbs (2.0000000001) not rounded up to another piece. */
 const wholePiecesUp = (pieces: number) => Math.ceil(pieces - 1e-9);
@@ -98,13 +105,15 @@ function allowanceFor(group: TakeoffLine[], fraction: number): MaterialAllowance
  */
 export function takeoff(sizes: TakeoffSize[], allowancePercent: number): Takeoff {
   const fraction = allowancePercent / 100;
-  const lines = sizes.map((s): TakeoffLine => ({
-    ...s,
-    boardFeet: s.kind === 'board' ? pieceBoardFeet(s) * s.count : null,
-    areaMm2: s.lengthMm * s.widthMm * s.count,
-    costCents: s.costEachCents * s.count,
-    covered: s.free + s.heldByPlan >= s.count,
-  }));
+  const lines = sizes.map(
+    (s): TakeoffLine => ({
+      ...s,
+      boardFeet: s.kind === 'board' ? pieceBoardFeet(s) * s.count : null,
+      areaMm2: s.lengthMm * s.widthMm * s.count,
+      costCents: s.costEachCents * s.count,
+      covered: s.free + s.heldByPlan >= s.count,
+    }),
+  );
   const groups = new Map<string, TakeoffLine[]>();
   for (const l of lines) {
     const key = `${l.material.trim().toLowerCase()}|${Math.round(l.thicknessMm * 100)}`;

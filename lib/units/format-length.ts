@@ -14,7 +14,8 @@ export const MAX_SHOWN_LENGTH_MM = 1e9;
 export type LengthStyle = 'hyphen' | 'unicode' | 'ascii';
 
 /** The smallest step a shop's lengths are shown in, in mm. */
-export const precisionStepMm = (units: ShopUnits): Mm => (checkShopUnits(units).system === 'imperial' ? MM_PER_INCH / units.precision : units.precision);
+export const precisionStepMm = (units: ShopUnits): Mm =>
+  checkShopUnits(units).system === 'imperial' ? MM_PER_INCH / units.precision : units.precision;
 
 /**
  * Shows a length in the shop's unit and precision. A rounded value is marked "≈" so nobody saws to a
@@ -22,9 +23,11 @@ export const precisionStepMm = (units: ShopUnits): Mm => (checkShopUnits(units).
  */
 export function formatLength(mm: Mm, units: ShopUnits, { style = 'hyphen' }: { style?: LengthStyle } = {}): string {
   if (typeof mm !== 'number' || !Number.isFinite(mm)) throw new RangeError(`Cannot show ${String(mm)} as a length.`);
-  if (Math.abs(mm) > MAX_SHOWN_LENGTH_MM) throw new RangeError(`${mm} mm is past ${MAX_SHOWN_LENGTH_MM / 1e6} km: not a length to show (a slipped unit?).`);
+  if (Math.abs(mm) > MAX_SHOWN_LENGTH_MM)
+    throw new RangeError(`${mm} mm is past ${MAX_SHOWN_LENGTH_MM / 1e6} km: not a length to show (a slipped unit?).`);
   checkShopUnits(units);
-  if (style !== 'hyphen' && style !== 'unicode' && style !== 'ascii') throw new RangeError(`Unknown length style "${String(style)}": hyphen, unicode or ascii.`);
+  if (style !== 'hyphen' && style !== 'unicode' && style !== 'ascii')
+    throw new RangeError(`Unknown length style "${String(style)}": hyphen, unicode or ascii.`);
   const ascii = style === 'ascii';
   if (units.system === 'metric') {
     const { value, exact } = roundToPrecision(mm, units.precision);

@@ -24,11 +24,27 @@ const MM_PER: Record<Unit, readonly [number, number]> = {
 };
 
 const UNIT_WORDS: Record<string, Unit> = {
-  in: 'in', inch: 'in', inches: 'in',
-  ft: 'ft', foot: 'ft', feet: 'ft',
-  mm: 'mm', millimetre: 'mm', millimetres: 'mm', millimeter: 'mm', millimeters: 'mm',
-  cm: 'cm', centimetre: 'cm', centimetres: 'cm', centimeter: 'cm', centimeters: 'cm',
-  m: 'm', metre: 'm', metres: 'm', meter: 'm', meters: 'm',
+  in: 'in',
+  inch: 'in',
+  inches: 'in',
+  ft: 'ft',
+  foot: 'ft',
+  feet: 'ft',
+  mm: 'mm',
+  millimetre: 'mm',
+  millimetres: 'mm',
+  millimeter: 'mm',
+  millimeters: 'mm',
+  cm: 'cm',
+  centimetre: 'cm',
+  centimetres: 'cm',
+  centimeter: 'cm',
+  centimeters: 'cm',
+  m: 'm',
+  metre: 'm',
+  metres: 'm',
+  meter: 'm',
+  meters: 'm',
 };
 
 const UNIT_HINT = 'in, ″, ft, ′, mm, cm or m';
@@ -92,7 +108,8 @@ function checkUnit(unit: LengthUnit) {
 
 function checkRange(mm: Mm): ParsedLength {
   if (!(mm > 0)) return { ok: false, error: 'A length must be greater than zero.' };
-  if (mm < MIN_LENGTH_MM) return { ok: false, error: `That is under ${MIN_LENGTH_MM} mm — almost always a typing slip: check the number and its unit.` };
+  if (mm < MIN_LENGTH_MM)
+    return { ok: false, error: `That is under ${MIN_LENGTH_MM} mm — almost always a typing slip: check the number and its unit.` };
   if (mm > MAX_LENGTH_MM) return { ok: false, error: `That is longer than ${MAX_LENGTH_MM / 1000} m — check the unit.` };
   return { ok: true, mm };
 }
@@ -138,7 +155,8 @@ function tokenize(chars: string[]): Token[] {
     } else if (SUPERSCRIPT_DIGITS.includes(c)) {
       let num = '';
       while (i < chars.length && SUPERSCRIPT_DIGITS.includes(chars[i])) num += SUPERSCRIPT_DIGITS.indexOf(chars[i++]);
-      if (!SLASHES.has(chars[i] ?? '')) throw new LengthError(`Expected ${quote(FRACTION_SLASH)} after the raised numerator at character ${i + 1}.`, i + 1);
+      if (!SLASHES.has(chars[i] ?? ''))
+        throw new LengthError(`Expected ${quote(FRACTION_SLASH)} after the raised numerator at character ${i + 1}.`, i + 1);
       i++;
       let den = '';
       while (i < chars.length && SUBSCRIPT_DIGITS.includes(chars[i])) den += SUBSCRIPT_DIGITS.indexOf(chars[i++]);
@@ -196,7 +214,9 @@ class Parser {
     const first = this.quantity();
     const unit = this.unit();
     if (unit?.unit === 'ft' && this.peek()) return this.feetAndInches(first);
-    this.expectEnd(unit ? `after ${quote(this.text(unit))} the length is complete` : `expected a fraction (like 3/4), a unit (${UNIT_HINT}) or the end`);
+    this.expectEnd(
+      unit ? `after ${quote(this.text(unit))} the length is complete` : `expected a fraction (like 3/4), a unit (${UNIT_HINT}) or the end`,
+    );
 
     const resolved = unit?.unit ?? this.shopUnit;
     if (first.shape === 'fraction' && resolved !== 'in' && resolved !== 'ft') {
@@ -208,7 +228,10 @@ class Parser {
     }
     if (first.thousandsDot && resolved === 'mm') {
       const [whole, part] = first.thousandsDot.split('.');
-      throw new LengthError(`${quote(first.thousandsDot)} could be ${Number(first.thousandsDot)} mm or ${whole}${part} mm: write ${Number(first.thousandsDot)} or ${whole}${part}.`, 1);
+      throw new LengthError(
+        `${quote(first.thousandsDot)} could be ${Number(first.thousandsDot)} mm or ${whole}${part} mm: write ${Number(first.thousandsDot)} or ${whole}${part}.`,
+        1,
+      );
     }
     return toMm(first, resolved);
   }
@@ -217,7 +240,8 @@ class Parser {
     if (this.peek()?.kind === 'dash') this.i++; // 1′-7″, the architects' way
     const inches = this.quantity();
     const mark = this.unit();
-    if (mark && mark.unit !== 'in') throw new LengthError(`After feet only inches may follow, not ${quote(this.text(mark))} (character ${mark.start + 1}).`, mark.start + 1);
+    if (mark && mark.unit !== 'in')
+      throw new LengthError(`After feet only inches may follow, not ${quote(this.text(mark))} (character ${mark.start + 1}).`, mark.start + 1);
     this.expectEnd(mark ? 'the length is complete after the inches' : 'expected ″ or the end after the inches');
     if (feet.shape !== 'whole') throw new LengthError('Write whole feet before the inches (like 1′ 7-3/4″), or give it all in inches.');
     if (inches.n >= 12 * inches.d) throw new LengthError('The inches after the feet must be less than 12.');
@@ -235,10 +259,12 @@ class Parser {
       this.i++;
       const fraction = this.fractionFrom(t);
       const extra = this.peek();
-      if (extra?.kind === 'slash') throw new LengthError(`Only one fraction bar is allowed (a second at character ${extra.start + 1}).`, extra.start + 1);
+      if (extra?.kind === 'slash')
+        throw new LengthError(`Only one fraction bar is allowed (a second at character ${extra.start + 1}).`, extra.start + 1);
       return fraction;
     }
-    const startsFraction = (k: Token | undefined, n: Token | undefined) => k?.kind === 'glyph-fraction' || (k?.kind === 'number' && n?.kind === 'slash');
+    const startsFraction = (k: Token | undefined, n: Token | undefined) =>
+      k?.kind === 'glyph-fraction' || (k?.kind === 'number' && n?.kind === 'slash');
     if (after?.kind === 'dash' || startsFraction(after, this.peek(1))) {
       if (after?.kind === 'dash') {
         this.i++;
@@ -267,7 +293,8 @@ class Parser {
   private fractionFrom(numerator: Token & { kind: 'number' }): Quantity {
     const den = this.next('expected the denominator of the fraction');
     if (den.kind !== 'number') throw this.unexpected(den, 'expected the denominator of the fraction');
-    if (!numerator.whole || !den.whole) throw new LengthError('A fraction needs whole numbers above and below the bar (like 3/4).', (numerator.whole ? den : numerator).start + 1);
+    if (!numerator.whole || !den.whole)
+      throw new LengthError('A fraction needs whole numbers above and below the bar (like 3/4).', (numerator.whole ? den : numerator).start + 1);
     if (den.value.n === 0) throw new LengthError(`Division by zero: the denominator at character ${den.start + 1} is 0.`, den.start + 1);
     return { n: numerator.value.n, d: den.value.n, shape: 'fraction' };
   }
@@ -282,7 +309,8 @@ class Parser {
   private expectEnd(expected: string) {
     const t = this.peek();
     if (!t) return;
-    if (t.kind === 'unit') throw new LengthError(`Unexpected ${quote(this.text(t))} at character ${t.start + 1}: the length already has its unit.`, t.start + 1);
+    if (t.kind === 'unit')
+      throw new LengthError(`Unexpected ${quote(this.text(t))} at character ${t.start + 1}: the length already has its unit.`, t.start + 1);
     throw this.unexpected(t, expected);
   }
 

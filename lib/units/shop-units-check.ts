@@ -7,7 +7,8 @@ import type { ShopUnits } from '@/shared/schemas/units';
 export function checkShopUnits(units: ShopUnits): ShopUnits {
   const ok =
     units &&
-    ((units.system === 'imperial' && (units.precision === 16 || units.precision === 32)) || (units.system === 'metric' && (units.precision === 0.5 || units.precision === 1)));
+    ((units.system === 'imperial' && (units.precision === 16 || units.precision === 32)) ||
+      (units.system === 'metric' && (units.precision === 0.5 || units.precision === 1)));
   if (!ok) throw new RangeError(`Unknown unit setting ${JSON.stringify(units)}: imperial to 1/16 or 1/32″, or metric to 0.5 or 1 mm.`);
   return units;
 }

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { text as freeText } from './text';
 
-const text = (what: string, max: number, multiline = false) => freeText({ multiline }).max(max, `Keep ${what} under ${max.toLocaleString('en-US')} characters.`);
+const text = (what: string, max: number, multiline = false) =>
+  freeText({ multiline }).max(max, `Keep ${what} under ${max.toLocaleString('en-US')} characters.`);
 
 /** A shop's customer, checked the same on the server and in the forms. */
 export const customerInputSchema = z.object({

@@ -43,7 +43,8 @@ const uploadShape = z.object({
 
 function requireColumns(body: { columns: CutListField[] }, ctx: z.RefinementCtx) {
   const missing = REQUIRED_CUT_LIST_FIELDS.filter((f) => !body.columns.includes(f));
-  if (missing.length) ctx.addIssue({ code: 'custom', path: ['columns'], message: `Map a column to ${missing.map((f) => CUT_LIST_FIELD_LABELS[f]).join(', ')}.` });
+  if (missing.length)
+    ctx.addIssue({ code: 'custom', path: ['columns'], message: `Map a column to ${missing.map((f) => CUT_LIST_FIELD_LABELS[f]).join(', ')}.` });
 }
 
 export const cutListUploadSchema = uploadShape.superRefine(requireColumns);

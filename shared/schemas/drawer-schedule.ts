@@ -16,9 +16,17 @@ const MAX = { size: MAX_SCHEDULE_LENGTH_MM, clearance: 300, small: 100 } as cons
 const tooBig = (what: string, max: number) => ({ error: `${what} over ${max >= 1000 ? `${max / 1000} m` : `${max} mm`} looks like a slipped unit` });
 
 const positiveMm = (what: string, max: number = MAX.size) =>
-  z.number({ error: `${what} must be a length in mm` }).finite({ error: `${what} must be a finite length` }).positive({ error: `${what} must be more than 0 mm` }).max(max, tooBig(what, max));
+  z
+    .number({ error: `${what} must be a length in mm` })
+    .finite({ error: `${what} must be a finite length` })
+    .positive({ error: `${what} must be more than 0 mm` })
+    .max(max, tooBig(what, max));
 const nonNegativeMm = (what: string, max: number = MAX.size) =>
-  z.number({ error: `${what} must be a length in mm` }).finite({ error: `${what} must be a finite length` }).min(0, { error: `${what} cannot be negative` }).max(max, tooBig(what, max));
+  z
+    .number({ error: `${what} must be a length in mm` })
+    .finite({ error: `${what} must be a finite length` })
+    .min(0, { error: `${what} cannot be negative` })
+    .max(max, tooBig(what, max));
 
 export const JOINT_METHODS = [
   'lock-rabbet',
@@ -308,10 +316,18 @@ function fillDependentDefaults(s: ParsedShape, ctx: z.RefinementCtx) {
 export const drawerScheduleSchema = drawerScheduleShape
   .superRefine((s, ctx) => {
     if (s.front.style === 'lipped' && (s.front.fit ?? (s.front.lipMm !== undefined ? 'lip' : 'overlay')) === 'lip' && s.front.lipMm === undefined)
-      ctx.addIssue({ code: 'custom', path: ['front', 'lipMm'], message: 'Give the lip past each side of the box, or choose an overlay or a reveal.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['front', 'lipMm'],
+        message: 'Give the lip past each side of the box, or choose an overlay or a reveal.',
+      });
     const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
     if (model && model.kind !== s.slide.type)
-      ctx.addIssue({ code: 'custom', path: ['slide', 'model', 'kind'], message: `${model.name} is a ${model.kind} slide, not ${s.slide.type}: choose it with ${model.kind} slides.` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['slide', 'model', 'kind'],
+        message: `${model.name} is a ${model.kind} slide, not ${s.slide.type}: choose it with ${model.kind} slides.`,
+      });
   })
   .transform(fillDependentDefaults);
 

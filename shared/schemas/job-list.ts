@@ -26,7 +26,14 @@ const SIZE_MESSAGE = `A page holds ${JOB_PAGE_SIZES.slice(0, -1).join(', ')} or 
 /** A whole number from the URL, with its message for anything else; blank or missing is `fallback`. */
 const wholeNumber = (message: string, range: z.ZodType<number, number>, fallback: number) =>
   z
-    .preprocess(blankIsDefault, z.coerce.number({ error: message }).refine((n) => Number.isSafeInteger(n), message).pipe(range).optional())
+    .preprocess(
+      blankIsDefault,
+      z.coerce
+        .number({ error: message })
+        .refine((n) => Number.isSafeInteger(n), message)
+        .pipe(range)
+        .optional(),
+    )
     .transform((n) => n ?? fallback);
 
 /**
@@ -34,10 +41,28 @@ const wholeNumber = (message: string, range: z.ZodType<number, number>, fallback
  * and customer. Every one is optional, so a bare `/jobs` is the first page of open jobs, latest change first.
  */
 export const jobListQuerySchema = z.object({
-  page: wholeNumber(PAGE_MESSAGE, z.number().min(1, PAGE_MESSAGE).max(MAX_JOB_PAGE, `The page is at most ${MAX_JOB_PAGE.toLocaleString('en-US')}.`), 1),
-  size: wholeNumber(SIZE_MESSAGE, z.number().refine((n) => (JOB_PAGE_SIZES as readonly number[]).includes(n), SIZE_MESSAGE), DEFAULT_JOB_PAGE_SIZE),
+  page: wholeNumber(
+    PAGE_MESSAGE,
+    z
+      .number()
+      .min(1, PAGE_MESSAGE)
+      .max(MAX_JOB_PAGE, `The page is at most ${MAX_JOB_PAGE.toLocaleString('en-US')}.`),
+    1,
+  ),
+  size: wholeNumber(
+    SIZE_MESSAGE,
+    z.number().refine((n) => (JOB_PAGE_SIZES as readonly number[]).includes(n), SIZE_MESSAGE),
+    DEFAULT_JOB_PAGE_SIZE,
+  ),
   sort: z
-    .preprocess(blankIsDefault, z.enum(JOB_SORTS as unknown as [JobSort, ...JobSort[]], { error: `Sort by ${JOB_SORT_COLUMNS.join(', ')}, each .asc or .desc (say updated.desc).` }).optional())
+    .preprocess(
+      blankIsDefault,
+      z
+        .enum(JOB_SORTS as unknown as [JobSort, ...JobSort[]], {
+          error: `Sort by ${JOB_SORT_COLUMNS.join(', ')}, each .asc or .desc (say updated.desc).`,
+        })
+        .optional(),
+    )
     .transform((s): JobSort => s ?? DEFAULT_JOB_SORT),
   q: text({ max: 120, maxMessage: 'Search for at most 120 characters.' }).default(''),
   status: z.enum(JOB_LIST_STATUSES, { error: `Status is one of ${JOB_STATUSES.join(', ')} or all.` }).default(''),

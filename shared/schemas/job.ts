@@ -24,12 +24,15 @@ export const jobFields = {
    * a plain string is read as a name), or null / an empty name for none.
    */
   customer: z
-    .union([
-      z.object({ id: z.uuid({ error: 'Pick one of the shop’s customers.' }) }),
-      z.object({ name: text().max(120, 'Keep the customer’s name under 120 characters.') }),
-      text().max(120, 'Keep the customer’s name under 120 characters.'),
-      z.null(),
-    ], { error: 'Pick a customer or type a new one’s name.' })
+    .union(
+      [
+        z.object({ id: z.uuid({ error: 'Pick one of the shop’s customers.' }) }),
+        z.object({ name: text().max(120, 'Keep the customer’s name under 120 characters.') }),
+        text().max(120, 'Keep the customer’s name under 120 characters.'),
+        z.null(),
+      ],
+      { error: 'Pick a customer or type a new one’s name.' },
+    )
     .transform((v): { id: string } | { name: string } | null => {
       const named = typeof v === 'string' ? { name: v } : v;
       return named && 'name' in named && !named.name ? null : named;

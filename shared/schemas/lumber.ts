@@ -4,7 +4,10 @@ import type { LengthUnit } from '@/lib/units/parse-length';
 import { lengthInput } from './units';
 
 const positiveMm = (what: string) =>
-  z.number({ error: `${what} must be a number of mm.` }).finite(`${what} must be finite.`).positive(`${what} must be greater than zero.`);
+  z
+    .number({ error: `${what} must be a number of mm.` })
+    .finite(`${what} must be finite.`)
+    .positive(`${what} must be greater than zero.`);
 
 /**
  * Rough hardwood is sold by quarters of an inch (4/4 = 1″, 5/4 = 1¼″, 8/4 = 2″); surfaced or metric
@@ -25,7 +28,11 @@ const QUARTERS = /^\s*(\d+)\s*\/\s*4\s*$/;
 export const thicknessInput = (unit: LengthUnit) =>
   z.union([z.string(), z.number()], { error: 'Enter a thickness.' }).transform((value, ctx): Thickness => {
     const quarters = typeof value === 'string' ? QUARTERS.exec(value) : null;
-    const parsed = quarters ? thicknessSchema.safeParse({ quarters: Number(quarters[1]) }) : lengthInput(unit).transform((mm) => ({ mm })).safeParse(value);
+    const parsed = quarters
+      ? thicknessSchema.safeParse({ quarters: Number(quarters[1]) })
+      : lengthInput(unit)
+          .transform((mm) => ({ mm }))
+          .safeParse(value);
     if (parsed.success) return parsed.data;
     for (const issue of parsed.error.issues) ctx.addIssue({ code: 'custom', message: issue.message, input: value });
     return z.NEVER;

@@ -91,9 +91,14 @@ export const nestSettingsObjectSchema = z.object({
 });
 
 export const nestSettingsSchema = nestSettingsObjectSchema.superRefine((s, ctx) => {
-  if (s.breakdownSaw && !s.saw) ctx.addIssue({ code: 'custom', message: 'a breakdown saw needs a second saw for the rest of the cuts', path: ['breakdownSaw'] });
+  if (s.breakdownSaw && !s.saw)
+    ctx.addIssue({ code: 'custom', message: 'a breakdown saw needs a second saw for the rest of the cuts', path: ['breakdownSaw'] });
   if (s.breakdownSaw && s.saw && s.breakdownSaw.name.toLowerCase() === s.saw.name.toLowerCase()) {
-    ctx.addIssue({ code: 'custom', message: 'the breakdown saw and the second saw need different names (the saw order names them)', path: ['breakdownSaw', 'name'] });
+    ctx.addIssue({
+      code: 'custom',
+      message: 'the breakdown saw and the second saw need different names (the saw order names them)',
+      path: ['breakdownSaw', 'name'],
+    });
   }
 });
 export type NestSettings = z.infer<typeof nestSettingsSchema>;
@@ -152,7 +157,14 @@ export type Placement = z.infer<typeof placementSchema>;
 export type PlanCutNode =
   | { type: 'item'; rect: z.infer<typeof rectSchema>; itemId: number; rotated: boolean }
   | { type: 'leftover'; rect: z.infer<typeof rectSchema> }
-  | { type: 'cut'; rect: z.infer<typeof rectSchema>; axis: 'x' | 'y'; pos: number; kerf: number; children: [PlanCutNode] | [PlanCutNode, PlanCutNode] };
+  | {
+      type: 'cut';
+      rect: z.infer<typeof rectSchema>;
+      axis: 'x' | 'y';
+      pos: number;
+      kerf: number;
+      children: [PlanCutNode] | [PlanCutNode, PlanCutNode];
+    };
 
 export const cutNodeSchema: z.ZodType<PlanCutNode> = z.lazy(() =>
   z.discriminatedUnion('type', [
@@ -251,9 +263,7 @@ export const unplacedSchema = z.object({
 export type Unplaced = z.infer<typeof unplacedSchema>;
 
 export const planTotalsSchema = z.object({
-  byMaterial: z.array(
-    z.object({ material: text(), thickness: mm, kind: stockKindSchema, pieces: z.number().int().min(0) }),
-  ),
+  byMaterial: z.array(z.object({ material: text(), thickness: mm, kind: stockKindSchema, pieces: z.number().int().min(0) })),
   pieces: z.number().int().min(0),
   stockArea: mm.min(0),
   partArea: mm.min(0),

@@ -50,4 +50,3 @@ export const planUpdateSchema = z.object({
   baseUpdatedAt: z.iso.datetime({ offset: true }).optional(),
 });
 export type PlanUpdate = z.infer<typeof planUpdateSchema>;
-

@@ -18,7 +18,11 @@ const percent = (what: string, max: number) =>
     .refine((v) => Math.abs(Math.round(v * 100) - v * 100) < 1e-6, `${what} takes at most two decimals.`);
 /** An hourly rate or a price in the currency's minor units (cents): whole, not negative, under ten million. */
 export const minorAmount = (what: string) =>
-  z.number({ error: `${what} is an amount.` }).int(`${what} is counted in whole cents.`).min(0, `${what} cannot be negative.`).max(1_000_000_000, `${what} looks like a slipped digit.`);
+  z
+    .number({ error: `${what} is an amount.` })
+    .int(`${what} is counted in whole cents.`)
+    .min(0, `${what} cannot be negative.`)
+    .max(1_000_000_000, `${what} looks like a slipped digit.`);
 
 /** What a shop charges and how it counts labour: the defaults every new quote starts from (Shop settings → Pricing). */
 export const pricingSettingsSchema = z.object({
@@ -40,7 +44,11 @@ export const pricingSettingsSchema = z.object({
   /** Which kinds of line are taxable by default; the estimator may change it per line. */
   taxable: z.object({ material: z.boolean(), hardware: z.boolean(), labour: z.boolean() }),
   depositPercent: percent('The deposit', 100),
-  validityDays: z.number({ error: 'Validity is a number of days.' }).int('Validity is whole days.').min(1, 'A quote is valid at least a day.').max(365, 'Validity over a year looks like a typo.'),
+  validityDays: z
+    .number({ error: 'Validity is a number of days.' })
+    .int('Validity is whole days.')
+    .min(1, 'A quote is valid at least a day.')
+    .max(365, 'Validity over a year looks like a typo.'),
   terms: text({ multiline: true }).max(4000, 'Keep the terms under 4,000 characters.'),
   offcutValuation: z.enum(OFFCUT_VALUATIONS, { error: 'Offcuts are valued at area cost or free.' }),
 });
@@ -63,7 +71,8 @@ export const DEFAULT_PRICING: PricingSettings = {
   taxable: { material: true, hardware: true, labour: false },
   depositPercent: 50,
   validityDays: 30,
-  terms: 'Prices are valid for the days shown. A deposit is due on acceptance; work is scheduled once it is received. The balance is due on delivery. Changes after acceptance are quoted separately.',
+  terms:
+    'Prices are valid for the days shown. A deposit is due on acceptance; work is scheduled once it is received. The balance is due on delivery. Changes after acceptance are quoted separately.',
   offcutValuation: 'area-cost',
 };
 

@@ -5,7 +5,11 @@ import { text } from './text';
 const email = z.union([z.literal(''), z.email('Type the supplier’s e-mail address (name@example.com).').max(320)]);
 
 const count = (what: string) =>
-  z.number({ error: `${what} must be a whole number.` }).int(`${what} must be a whole number.`).min(0, `${what} cannot be negative.`).max(100_000, `${what} above 100,000 looks like a typo.`);
+  z
+    .number({ error: `${what} must be a whole number.` })
+    .int(`${what} must be a whole number.`)
+    .min(0, `${what} cannot be negative.`)
+    .max(100_000, `${what} above 100,000 looks like a typo.`);
 
 /** Make purchase orders: from a plan's stock to buy, from the sizes running low, or an empty one for a supplier. */
 export const createPurchaseOrdersSchema = z.discriminatedUnion('from', [

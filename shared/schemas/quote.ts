@@ -14,7 +14,11 @@ export const quoteLineSchema = z.object({
   id: z.string().min(1).max(40),
   kind: z.enum(LINE_KINDS, { error: 'A line is material, hardware, labour or other.' }),
   description: text().min(1, 'Describe the line.').max(200, 'Keep the description under 200 characters.'),
-  quantity: z.number({ error: 'The quantity is a number.' }).min(0, 'The quantity cannot be negative.').max(1_000_000, 'That quantity looks like a typo.').refine(decimals(3), 'The quantity takes at most three decimals.'),
+  quantity: z
+    .number({ error: 'The quantity is a number.' })
+    .min(0, 'The quantity cannot be negative.')
+    .max(1_000_000, 'That quantity looks like a typo.')
+    .refine(decimals(3), 'The quantity takes at most three decimals.'),
   unit: text().max(20, 'Keep the unit under 20 characters.'),
   /** Cost of one unit in minor units (labour: the hourly rate). */
   unitCostMinor: minorAmount('The unit cost'),
@@ -25,12 +29,24 @@ export const quoteLineSchema = z.object({
 export type QuoteLine = z.infer<typeof quoteLineSchema>;
 
 export const quoteDiscountSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('percent'), percent: z.number().min(0, 'A discount cannot be negative.').max(100, 'A discount is at most 100 %.').refine(decimals(2), 'At most two decimals.') }),
+  z.object({
+    kind: z.literal('percent'),
+    percent: z
+      .number()
+      .min(0, 'A discount cannot be negative.')
+      .max(100, 'A discount is at most 100 %.')
+      .refine(decimals(2), 'At most two decimals.'),
+  }),
   z.object({ kind: z.literal('amount'), minor: minorAmount('The discount') }),
 ]);
 export type QuoteDiscount = z.infer<typeof quoteDiscountSchema>;
 
-const percent = (what: string, max: number) => z.number({ error: `${what} is a percent.` }).min(0, `${what} cannot be negative.`).max(max, `${what} over ${max} % looks like a typo.`).refine(decimals(2), `${what} takes at most two decimals.`);
+const percent = (what: string, max: number) =>
+  z
+    .number({ error: `${what} is a percent.` })
+    .min(0, `${what} cannot be negative.`)
+    .max(max, `${what} over ${max} % looks like a typo.`)
+    .refine(decimals(2), `${what} takes at most two decimals.`);
 
 /** What the estimator changes on a draft revision. */
 export const quoteRevisionPatchSchema = z.strictObject({

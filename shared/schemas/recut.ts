@@ -14,7 +14,9 @@ export const RECUT_STATUS_LABELS: Record<RecutStatus, string> = {
 };
 
 export const cancelRecutSchema = z.strictObject({
-  reason: text({ multiline: true }).min(1, 'Say why this re-cut is not needed (made from scrap, customer changed it…).').max(500, 'At most 500 characters.'),
+  reason: text({ multiline: true })
+    .min(1, 'Say why this re-cut is not needed (made from scrap, customer changed it…).')
+    .max(500, 'At most 500 characters.'),
 });
 
 /** Which parts a Nest takes: the job's cut list, or only its open re-cuts. */

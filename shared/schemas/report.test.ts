@@ -20,7 +20,9 @@ describe('a report’s filters from its URL', () => {
     expect(reportQuerySchema.safeParse({ from: '2026-02-30' }).error?.issues[0].message).toBe('That day is not on the calendar.');
     expect(reportQuerySchema.safeParse({ to: '30/11/2026' }).error?.issues[0].message).toMatch(/YYYY-MM-DD/);
     expect(reportQuerySchema.safeParse({ by: 'year' }).success).toBe(false);
-    expect(reportRange(reportQuerySchema.parse({ from: '2026-12-01', to: '2026-11-01' }), 'UTC', NOW)).toEqual({ error: 'The range runs backwards: 2026-12-01 is after 2026-11-01.' });
+    expect(reportRange(reportQuerySchema.parse({ from: '2026-12-01', to: '2026-11-01' }), 'UTC', NOW)).toEqual({
+      error: 'The range runs backwards: 2026-12-01 is after 2026-11-01.',
+    });
     expect(reportQuerySchema.parse({ from: '', to: '', material: '' })).toEqual({ by: 'month', from: undefined, to: undefined, material: undefined });
   });
 });

@@ -5,17 +5,31 @@ const day = z
   .string()
   .trim()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Write the day as YYYY-MM-DD, such as 2026-11-30.')
-  .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().slice(0, 10) === d, 'That day is not on the calendar.');
+  .refine(
+    (d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().slice(0, 10) === d,
+    'That day is not on the calendar.',
+  );
 
 /** A report's filters as they stand in its URL: every one optional, so a bare URL shows the last twelve months. */
 export const reportQuerySchema = z.object({
   from: day.optional().or(z.literal('').transform(() => undefined)),
   to: day.optional().or(z.literal('').transform(() => undefined)),
   by: z.enum(REPORT_PERIODS, { error: 'Group by week or month.' }).default('month'),
-  material: z.string().trim().max(200).optional().transform((m) => m || undefined),
+  material: z
+    .string()
+    .trim()
+    .max(200)
+    .optional()
+    .transform((m) => m || undefined),
   /** One customer's work, or one job's (by id). */
-  customer: z.uuid({ error: 'Pick a customer from the list.' }).optional().or(z.literal('').transform(() => undefined)),
-  job: z.uuid({ error: 'Pick a job from the list.' }).optional().or(z.literal('').transform(() => undefined)),
+  customer: z
+    .uuid({ error: 'Pick a customer from the list.' })
+    .optional()
+    .or(z.literal('').transform(() => undefined)),
+  job: z
+    .uuid({ error: 'Pick a job from the list.' })
+    .optional()
+    .or(z.literal('').transform(() => undefined)),
 });
 export type ReportQuery = z.infer<typeof reportQuerySchema>;
 
@@ -26,7 +40,11 @@ const MAX_RANGE_DAYS = 3660;
  * The filter's days, with the defaults filled in on the shop's clock: up to today, from the start of the month
  * eleven months back (by month) or of the week twelve weeks back (by week). Refuses a range that runs backwards.
  */
-export function reportRange(q: ReportQuery, timeZone: string, now = new Date()): { from: string; to: string; by: ReportQuery['by'] } | { error: string } {
+export function reportRange(
+  q: ReportQuery,
+  timeZone: string,
+  now = new Date(),
+): { from: string; to: string; by: ReportQuery['by'] } | { error: string } {
   const to = q.to ?? shopDay(now, timeZone);
   let from = q.from;
   if (!from) {

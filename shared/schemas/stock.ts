@@ -7,9 +7,17 @@ import { text as freeText } from './text';
 
 const text = (max: number) => freeText({ max });
 const mm = (what: string) =>
-  z.number({ error: `${what} must be a number of mm.` }).finite().positive(`${what} must be greater than zero.`).max(100_000, `${what} above 100 m looks like a typo.`);
+  z
+    .number({ error: `${what} must be a number of mm.` })
+    .finite()
+    .positive(`${what} must be greater than zero.`)
+    .max(100_000, `${what} above 100 m looks like a typo.`);
 const count = (what: string) => z.number({ error: `${what} must be a number.` }).int(`${what} must be a whole number.`);
-const cents = z.number({ error: 'A price must be a number of cents.' }).int('A price is whole cents.').min(0, 'A price cannot be negative.').max(100_000_000);
+const cents = z
+  .number({ error: 'A price must be a number of cents.' })
+  .int('A price is whole cents.')
+  .min(0, 'A price cannot be negative.')
+  .max(100_000_000);
 const reason = text(500);
 
 export const stockKindSchema = z.enum(['sheet', 'board'], { error: 'Kind is "sheet" or "board".' });
@@ -68,7 +76,17 @@ export const stockItemPatchSchema = z.strictObject({
 });
 export type StockItemPatch = z.infer<typeof stockItemPatchSchema>;
 /** The fields a patch may change, in the order people read them. */
-export const STOCK_DETAIL_FIELDS = ['material', 'nominalThickness', 'surfacing', 'grade', 'costCents', 'supplier', 'location', 'lowStockAt', 'buyable'] as const;
+export const STOCK_DETAIL_FIELDS = [
+  'material',
+  'nominalThickness',
+  'surfacing',
+  'grade',
+  'costCents',
+  'supplier',
+  'location',
+  'lowStockAt',
+  'buyable',
+] as const;
 export type StockDetailField = (typeof STOCK_DETAIL_FIELDS)[number];
 
 export const receiveStockSchema = z.strictObject({
@@ -124,7 +142,9 @@ export const finishPlanSchema = z.strictObject({
     .default([]),
   /** Each damaged part goes on the job's re-cut list with its reason (a default one when none is given). */
   damaged: z
-    .array(z.strictObject({ piece: count('Piece').min(0), partId: text(100).min(1), instance: count('Instance').min(1), reason: text(200).default('') }))
+    .array(
+      z.strictObject({ piece: count('Piece').min(0), partId: text(100).min(1), instance: count('Instance').min(1), reason: text(200).default('') }),
+    )
     .max(5000)
     .default([]),
 });

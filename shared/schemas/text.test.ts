@@ -45,9 +45,17 @@ describe('text()', () => {
 
 describe('fields that use it', () => {
   test('an e-mail with spaces around it is trimmed before it is checked', () => {
-    const parsed = teamMemberInputSchema.parse({ name: 'Tomas Reyes', email: '  Tomas@Larkspur.example ', role: 'cutter', password: 'a-long-enough-password' });
+    const parsed = teamMemberInputSchema.parse({
+      name: 'Tomas Reyes',
+      email: '  Tomas@Larkspur.example ',
+      role: 'cutter',
+      password: 'a-long-enough-password',
+    });
     expect(parsed.email).toBe('tomas@larkspur.example');
-    expect(teamMemberInputSchema.safeParse({ name: 'T', email: 'not an address', role: 'cutter', password: 'a-long-enough-password' }).error?.issues[0].message).toBe('Enter a valid e-mail address.');
+    expect(
+      teamMemberInputSchema.safeParse({ name: 'T', email: 'not an address', role: 'cutter', password: 'a-long-enough-password' }).error?.issues[0]
+        .message,
+    ).toBe('Enter a valid e-mail address.');
   });
 
   test('a part length of 5e-324 mm (or anything under half a millimetre) is refused; 0.5 mm is taken', () => {

@@ -13,7 +13,12 @@ const password = z
 export const teamMemberInputSchema = z.object({
   name: text().min(1, 'Enter the person’s name.').max(120),
   // Trimmed and lower-cased before it is checked: a pasted address with spaces around it is fine.
-  email: z.string({ error: 'Enter a valid e-mail address.' }).trim().toLowerCase().max(320, 'Keep the e-mail under 320 characters.').pipe(z.email('Enter a valid e-mail address.')),
+  email: z
+    .string({ error: 'Enter a valid e-mail address.' })
+    .trim()
+    .toLowerCase()
+    .max(320, 'Keep the e-mail under 320 characters.')
+    .pipe(z.email('Enter a valid e-mail address.')),
   role: z.enum(ROLES, { error: 'Pick owner, estimator or cutter.' }),
   password: password.optional(),
 });

@@ -21,7 +21,9 @@ test('the bench keeps drawing while a part is dragged among 340 parts', async ({
   await signIn(page, 'estimator');
   const job = await (await page.request.post('/api/jobs', { data: { name: `Frame-rate drawer run ${Date.now()}` } })).json();
   for (const row of ROWS) {
-    const res = await page.request.post(`/api/jobs/${job.id}/parts`, { data: { ...row, thicknessMm: MAPLE_23_32, material: 'Maple ply', grain: 'any' } });
+    const res = await page.request.post(`/api/jobs/${job.id}/parts`, {
+      data: { ...row, thicknessMm: MAPLE_23_32, material: 'Maple ply', grain: 'any' },
+    });
     expect(res.status(), await res.text()).toBe(201);
   }
 
@@ -82,7 +84,10 @@ test('the bench keeps drawing while a part is dragged among 340 parts', async ({
   await shot(page, 'bench-fps-after-drag');
 
   const dragTimes = times.filter((t) => t < upAt);
-  const gaps = dragTimes.slice(1).map((t, i) => t - dragTimes[i]).sort((x, y) => x - y);
+  const gaps = dragTimes
+    .slice(1)
+    .map((t, i) => t - dragTimes[i])
+    .sort((x, y) => x - y);
   const spanMs = dragTimes.at(-1)! - dragTimes[0];
   expect(afterDrop.length, 'frames kept coming after the drop').toBeGreaterThan(5);
   const result = {

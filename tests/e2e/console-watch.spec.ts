@@ -28,9 +28,11 @@ test.describe('a test whose page', () => {
 
   test('throws an uncaught error fails', async ({ page }) => {
     await page.goto('/sign-in');
-    await page.evaluate(() => setTimeout(() => {
-      throw new Error('uncaught');
-    }, 0));
+    await page.evaluate(() =>
+      setTimeout(() => {
+        throw new Error('uncaught');
+      }, 0),
+    );
     await page.waitForTimeout(100);
   });
 });

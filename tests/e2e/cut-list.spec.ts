@@ -108,8 +108,24 @@ test('an estimator builds a cut list by keyboard, upload and drawer schedule, th
   // Export.
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export CSV' }).click()]);
   expect(download.suggestedFilename()).toBe('arden-books-wall-units-cut-list.csv');
-  const csv = Papa.parse<string[]>(fs.readFileSync((await download.path())!, 'utf8').replace(/^\uFEFF/, '').trim()).data;
-  expect(csv[0]).toEqual(['Part', 'Quantity', 'Length (in)', 'Width (in)', 'Thickness (in)', 'Material', 'Grain', 'Joint allowance (in)', 'Notes', 'Drawer schedule']);
+  const csv = Papa.parse<string[]>(
+    fs
+      .readFileSync((await download.path())!, 'utf8')
+      .replace(/^\uFEFF/, '')
+      .trim(),
+  ).data;
+  expect(csv[0]).toEqual([
+    'Part',
+    'Quantity',
+    'Length (in)',
+    'Width (in)',
+    'Thickness (in)',
+    'Material',
+    'Grain',
+    'Joint allowance (in)',
+    'Notes',
+    'Drawer schedule',
+  ]);
   // 3/4 MDF was typed; the shop's 3/4″ MDF is 18 mm, written in the column's inches (18 / 25.4 = 0.7087″, NIST).
   expect(csv.find((r) => r[0] === 'Toe kick')).toEqual(['Toe kick', '1', '30-1/2"', '4"', '0.7087"', 'MDF', 'along', '', '', '']);
   // Lock rabbet on the default 18 mm front: face left = 9 mm − ⅛″ = 0.2293″, so a 20″ box's side is
@@ -125,7 +141,10 @@ test('a cutter sees the cut list read-only and can open the setup cards', async 
   await expect(page.getByLabel('New part: Part')).toHaveCount(0);
   await expect(page.getByRole('button', { name: 'Upload CSV or Excel' })).toHaveCount(0);
   await shot(page, 'cut-list-08-cutter');
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Setup cards/ }).click();
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: /^Setup cards/ })
+    .click();
   await expect(page.getByRole('heading', { level: 1, name: 'Setup cards' })).toBeVisible();
   await expect(page.getByRole('complementary', { name: 'Router table cautions' })).toBeVisible();
   await shot(page, 'cut-list-09-setup-cards');
@@ -160,7 +179,13 @@ test('a deleted row comes back where it was, with Undo or Ctrl+Z', async ({ page
   const rows = page.getByRole('table', { name: 'Cut list' }).getByTestId('cut-list-row');
   for (const name of ['Top', 'Bottom', 'Shelf']) {
     await page.getByLabel('New part: Part').fill(name);
-    for (const [label, value] of [['Length', '30'], ['Width', '12'], ['Thickness', '3/4'], ['Material', 'Maple ply']]) await page.getByLabel(`New part: ${label}`).fill(value);
+    for (const [label, value] of [
+      ['Length', '30'],
+      ['Width', '12'],
+      ['Thickness', '3/4'],
+      ['Material', 'Maple ply'],
+    ])
+      await page.getByLabel(`New part: ${label}`).fill(value);
     await page.getByLabel('New part: Part').press('Enter');
   }
   await expect(rows).toHaveCount(3);

@@ -49,7 +49,10 @@ test('the owner keeps the shop’s slide models in Shop settings: the demo’s t
   await expect(added).toContainText('12″, 15″, 18″ · 1/2″ behind');
 
   await added.getByRole('button', { name: `Edit ${name}` }).click();
-  await page.getByRole('form', { name: `Edit ${name}` }).getByLabel('Width deduction').fill('3/4');
+  await page
+    .getByRole('form', { name: `Edit ${name}` })
+    .getByLabel('Width deduction')
+    .fill('3/4');
   await page.getByRole('button', { name: 'Save changes' }).click();
   await expect(added).toContainText('Box width = opening − 3/4″');
   await page.setViewportSize({ width: 390, height: 844 });
@@ -93,7 +96,9 @@ test('an estimator sizes drawers on an undermount model with a lipped front, and
   // Sides thicker than a model takes are refused on the side thickness.
   await page.getByLabel('Slide model').selectOption({ label: 'Tessel T-16 soft close' });
   await page.getByLabel('Side thickness').selectOption({ label: '3/4″ sheet · 18 mm actual' });
-  await expect(page.getByText('The Tessel T-16 soft close takes sides up to 16 mm; these are 18 mm: use thinner sides or another slide').first()).toBeVisible();
+  await expect(
+    page.getByText('The Tessel T-16 soft close takes sides up to 16 mm; these are 18 mm: use thinner sides or another slide').first(),
+  ).toBeVisible();
   await page.getByLabel('Side thickness').selectOption({ label: '1/2″ sheet · 12 mm actual' });
   await page.getByLabel('Slide model').selectOption({ label: 'Halbrook UM-58 full extension' });
 
@@ -123,7 +128,11 @@ test('a metric shop’s drawer schedule starts on metric slides: a 564 mm openin
     await expect(page.getByLabel('Slide series')).toHaveValue('metric');
     await expect(page.getByText('Box 539 mm wide = opening 564 mm − 2 × 12.5 mm metric side-mount slide clearance.')).toBeVisible();
     await expect(page.getByText('Box 500 mm deep to suit the longest standard metric slide that fits the opening (250 mm–650 mm).')).toBeVisible();
-    await expect(page.getByRole('img', { name: 'Box 539 mm wide, 187.5 mm high, 500 mm deep' }).or(page.getByRole('img', { name: /^Box 539 mm wide, ≈188 mm high, 500 mm deep$/ }))).toBeVisible();
+    await expect(
+      page
+        .getByRole('img', { name: 'Box 539 mm wide, 187.5 mm high, 500 mm deep' })
+        .or(page.getByRole('img', { name: /^Box 539 mm wide, ≈188 mm high, 500 mm deep$/ })),
+    ).toBeVisible();
     await shot(page, 'slide-models-04-metric-shop');
     await page.setViewportSize({ width: 390, height: 844 });
     await shot(page, 'slide-models-05-metric-shop-phone');

@@ -2,7 +2,10 @@ import { shot, signIn } from './support/session';
 import { expect, test } from './support/test';
 import { mailFor } from './support/mail';
 
-test('the owner invites a new cutter; the link in the e-mail lets them choose a password, sign in, and see the shop floor', async ({ page, browser }) => {
+test('the owner invites a new cutter; the link in the e-mail lets them choose a password, sign in, and see the shop floor', async ({
+  page,
+  browser,
+}) => {
   await page.setViewportSize({ width: 1440, height: 900 });
   await signIn(page, 'owner');
   await page.goto('/team');
@@ -42,7 +45,9 @@ test('the owner invites a new cutter; the link in the e-mail lets them choose a 
   await shot(page, 'sent-mail-390');
   // A full-page capture leaves a frame blank in headless Chromium; the mail's HTML as a phone shows it:
   await article.locator('iframe').scrollIntoViewIfNeeded();
-  await article.locator('iframe').screenshot({ path: `test-results/screens${process.env.E2E_PORT ? '-' + process.env.E2E_PORT : ''}/sent-mail-html-390.png` });
+  await article
+    .locator('iframe')
+    .screenshot({ path: `test-results/screens${process.env.E2E_PORT ? '-' + process.env.E2E_PORT : ''}/sent-mail-html-390.png` });
   await page.goto('/outbox');
   await expect(page.getByRole('listitem').filter({ hasText: email }).getByText('Sent', { exact: true })).toBeVisible();
   await shot(page, 'outbox-390');
@@ -77,7 +82,9 @@ test('the owner invites a new cutter; the link in the e-mail lets them choose a 
   await expect(phone2).toHaveURL(/\/shop-floor$/);
   await expect(phone2.getByTestId('signed-in-as')).toHaveText('Juno Ashby');
   await phone2.goto(link!);
-  await expect(phone2.getByRole('alert').filter({ hasText: 'This link has already been used. Sign in with your password, or ask for a new link.' })).toBeVisible();
+  await expect(
+    phone2.getByRole('alert').filter({ hasText: 'This link has already been used. Sign in with your password, or ask for a new link.' }),
+  ).toBeVisible();
   await again.close();
 
   await page.setViewportSize({ width: 1440, height: 900 });

@@ -8,7 +8,10 @@ import { expect, test } from './support/test';
 // The server is killed with kill -9 after the mail server has stored a message and before the app hears "accepted"
 // (so before it can mark the message sent). After a restart the message goes out once more, with the same
 // Message-ID, and is then marked sent.
-test('kill -9 between sending and marking: after the restart the invite is resent once, with the same Message-ID', async ({ page, consoleErrors }) => {
+test('kill -9 between sending and marking: after the restart the invite is resent once, with the same Message-ID', async ({
+  page,
+  consoleErrors,
+}) => {
   test.setTimeout(150_000);
   // The server goes away on purpose (killed, then restarted): the open page's prefetches fail meanwhile.
   consoleErrors.allow(/Failed to load resource: net::ERR_(CONNECTION_RESET|CONNECTION_REFUSED|EMPTY_RESPONSE|INCOMPLETE_CHUNKED_ENCODING)/);

@@ -3,7 +3,9 @@ import { dragPart, pickMove, savedPlan } from './support/bench';
 import { shot, signIn } from './support/session';
 import { jobId } from './support/plans';
 
-test('an estimator nests a job with progress, saves a draft, drags a part on the bench, saves, and the change survives a reload', async ({ page }) => {
+test('an estimator nests a job with progress, saves a draft, drags a part on the bench, saves, and the change survives a reload', async ({
+  page,
+}) => {
   test.setTimeout(120_000);
   await signIn(page, 'estimator');
   await page.goto('/jobs?q=Hollis%20kitchen');
@@ -63,7 +65,10 @@ test('an overlapping drop is shown on the bench and saving is refused until undo
   await expect(page.getByTestId('bench-status')).toContainText('straight through-cuts');
   const { pieces } = await savedPlan(page, draft!.id);
   // On the largest piece with two parts (a small offcut is drawn too small to aim at): the smaller part onto the larger.
-  const i = pieces.reduce((best, p, k) => (p.placements.length >= 2 && (best < 0 || p.length * p.width > pieces[best].length * pieces[best].width) ? k : best), -1);
+  const i = pieces.reduce(
+    (best, p, k) => (p.placements.length >= 2 && (best < 0 || p.length * p.width > pieces[best].length * pieces[best].width) ? k : best),
+    -1,
+  );
   const [a, b] = [...pieces[i].placements].sort((p, q) => q.w * q.h - p.w * p.h);
   // Right on top of its neighbour: no spot within snapping reach is clear, so the drop overlaps.
   const grabbed = await dragPart(page, pieces, i, b, a.x + (a.w - b.w) / 2, a.y + (a.h - b.h) / 2);
@@ -77,7 +82,12 @@ test('an overlapping drop is shown on the bench and saving is refused until undo
 
   // Lock one part and re-nest the rest around it in the worker.
   await page.mouse.click(grabbed.x, grabbed.y);
-  await expect(page.getByRole('definition').filter({ hasText: `#${b.instance}` }).first()).toBeVisible();
+  await expect(
+    page
+      .getByRole('definition')
+      .filter({ hasText: `#${b.instance}` })
+      .first(),
+  ).toBeVisible();
   await page.keyboard.press('l');
   await expect(page.getByText('1 locked.')).toBeVisible();
   await page.getByRole('button', { name: 'Re-nest unlocked' }).click();

@@ -3,9 +3,13 @@ import { shot, signIn } from './support/session';
 import { expect, test, type Page } from './support/test';
 import { mailFor } from './support/mail';
 
-const noSideScroll = async (page: Page) => expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
+const noSideScroll = async (page: Page) =>
+  expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
 
-test('the owner orders the demo’s low stock, sends the order to the supplier, receives part of it, then the rest, and the stock room shows the pieces', async ({ page, consoleErrors }) => {
+test('the owner orders the demo’s low stock, sends the order to the supplier, receives part of it, then the rest, and the stock room shows the pieces', async ({
+  page,
+  consoleErrors,
+}) => {
   test.setTimeout(120_000);
   await page.setViewportSize({ width: 1440, height: 900 });
   await signIn(page, 'owner');
@@ -13,7 +17,10 @@ test('the owner orders the demo’s low stock, sends the order to the supplier, 
   await page.goto('/stock?material=MDF');
   const before = Number(await page.getByRole('row').filter({ hasText: 'Rack C2' }).getByTestId('on-hand').innerText());
   await page.goto('/jobs');
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Purchase orders/ }).click();
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: /^Purchase orders/ })
+    .click();
   await expect(page.getByRole('heading', { name: 'Purchase orders', level: 1 })).toBeVisible();
 
   // The demo's ½″ MDF runs low (2 on hand against a mark of 3 as seeded): the order brings it to twice its mark,
@@ -75,7 +82,9 @@ test('the owner orders the demo’s low stock, sends the order to the supplier, 
   consoleErrors.allow(/status of 409 \(Conflict\).*\/receive/);
   await sentLine.getByLabel(/pieces received now/).fill('4');
   await page.getByRole('button', { name: 'Receive', exact: true }).click();
-  await expect(page.getByRole('alert').filter({ hasText: 'ordered' })).toHaveText('MDF ½″: 5 ordered and 2 already received, so 3 more can come in, not 4. Record extra pieces as a receipt in the stock room.');
+  await expect(page.getByRole('alert').filter({ hasText: 'ordered' })).toHaveText(
+    'MDF ½″: 5 ordered and 2 already received, so 3 more can come in, not 4. Record extra pieces as a receipt in the stock room.',
+  );
   await shot(page, 'po-part-received-1440');
 
   // The rest, taking the order's price into the stock room.
@@ -114,11 +123,15 @@ test('the estimator makes the purchase order for what a plan must buy from its t
   await signIn(page, 'estimator');
   // Ten near-full sheets of ¾″ MDF: more than the rack holds, so the plan buys the rest.
   const job = await (await page.request.post('/api/jobs', { data: { name: `Buying check ${Date.now()}` } })).json();
-  const part = await page.request.post(`/api/jobs/${job.id}/parts`, { data: { label: 'Panel', quantity: 10, lengthMm: 2300, widthMm: 1150, thicknessMm: 18, material: 'MDF', grain: 'any' } });
+  const part = await page.request.post(`/api/jobs/${job.id}/parts`, {
+    data: { label: 'Panel', quantity: 10, lengthMm: 2300, widthMm: 1150, thicknessMm: 18, material: 'MDF', grain: 'any' },
+  });
   expect(part.status(), await part.text()).toBe(201);
   const planId = await saveDraftPlan(page, job.name, 'Panels to buy');
   const { document } = await (await page.request.get(`/api/plans/${planId}`)).json();
-  const { items: stock }: { items: { id: string; material: string; nominalThickness: string; onHand: number; reserved: number }[] } = await (await page.request.get('/api/stock')).json();
+  const { items: stock }: { items: { id: string; material: string; nominalThickness: string; onHand: number; reserved: number }[] } = await (
+    await page.request.get('/api/stock')
+  ).json();
   const mdf = stock.find((s) => s.material === 'MDF' && s.nominalThickness === '3/4"')!;
   const ids: string[] = document.pieces.map((p: { stockId: string }) => p.stockId);
   const bought = ids.filter((id) => id === `buy:${mdf.id}`).length;

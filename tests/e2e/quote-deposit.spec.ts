@@ -8,7 +8,17 @@ const WIDTHS = [1440, 820, 390] as const;
 
 /** A job of its own for a new customer with an e-mail address, with a small cut list in the demo's ¾″ Baltic birch. */
 async function jobForNewCustomer(page: Page, name: string, email: string) {
-  const customer = await page.request.post('/api/customers', { data: { name: 'Ruth Calloway', email, phone: '(555) 014-3300', billingAddress: '9 Fenwick Road, Millbrook', siteAddress: '', company: '', notes: '' } });
+  const customer = await page.request.post('/api/customers', {
+    data: {
+      name: 'Ruth Calloway',
+      email,
+      phone: '(555) 014-3300',
+      billingAddress: '9 Fenwick Road, Millbrook',
+      siteAddress: '',
+      company: '',
+      notes: '',
+    },
+  });
   expect(customer.status(), await customer.text()).toBe(201);
   const job = await page.request.post('/api/jobs', { data: { name, customer: { id: (await customer.json()).id } } });
   expect(job.status(), await job.text()).toBe(201);
@@ -16,11 +26,15 @@ async function jobForNewCustomer(page: Page, name: string, email: string) {
   for (const part of [
     { label: 'Side', quantity: 2, lengthMm: 610, widthMm: 406, thicknessMm: 18, material: 'Baltic birch' },
     { label: 'Shelf', quantity: 3, lengthMm: 762, widthMm: 381, thicknessMm: 18, material: 'Baltic birch' },
-  ]) expect((await page.request.post(`/api/jobs/${id}/parts`, { data: part })).status()).toBe(201);
+  ])
+    expect((await page.request.post(`/api/jobs/${id}/parts`, { data: part })).status()).toBe(201);
   return id;
 }
 
-test('the estimator e-mails a quote; the customer opens the link, accepts, is declined a card, pays the deposit with the test card; the shop sees deposit paid and a receipt goes out', async ({ page, browser }) => {
+test('the estimator e-mails a quote; the customer opens the link, accepts, is declined a card, pays the deposit with the test card; the shop sees deposit paid and a receipt goes out', async ({
+  page,
+  browser,
+}) => {
   await signIn(page, 'estimator');
   const stamp = Date.now();
   const email = `ruth.${stamp}@example.com`;
@@ -118,7 +132,13 @@ test('a customer declines with a reason; the job shows declined and the link can
   const jobName = `Calloway window seat ${stamp}`;
   const jobId = await jobForNewCustomer(page, jobName, email);
   const quote = await (await page.request.post(`/api/jobs/${jobId}/quotes`, { data: { planId: null } })).json();
-  await page.request.patch(`/api/quotes/${quote.id}`, { data: { lines: [{ id: 'o-1', kind: 'other', description: 'Window seat, built in', quantity: 1, unit: 'each', unitCostMinor: 64000, taxable: true, note: '' }] } });
+  await page.request.patch(`/api/quotes/${quote.id}`, {
+    data: {
+      lines: [
+        { id: 'o-1', kind: 'other', description: 'Window seat, built in', quantity: 1, unit: 'each', unitCostMinor: 64000, taxable: true, note: '' },
+      ],
+    },
+  });
   expect((await page.request.post(`/api/quotes/${quote.id}/send`)).status()).toBe(200);
   const link = /https?:\/\/\S+\/q\/[A-Za-z0-9_-]{43}/.exec((await mailFor(email, /your quote/)).text ?? '')![0];
 

@@ -10,7 +10,9 @@ async function kitchenId(page: Page) {
   return jobIdByName(page, 'Hollis kitchen');
 }
 
-test('the estimator builds a quote from the demo kitchen’s nested plan with the defaults, reads the customer’s copy, downloads the PDF and marks it sent', async ({ page }) => {
+test('the estimator builds a quote from the demo kitchen’s nested plan with the defaults, reads the customer’s copy, downloads the PDF and marks it sent', async ({
+  page,
+}) => {
   await signIn(page, 'estimator');
   const jobId = await kitchenId(page);
   await page.goto(`/jobs/${jobId}`);
@@ -24,7 +26,10 @@ test('the estimator builds a quote from the demo kitchen’s nested plan with th
   // The demo plan's sheets at cost (¾″ as on screen), the spoilage allowance once, and saw time with its hours.
   await expect(lines.first().getByLabel(/description$/)).toHaveValue(/^Maple ply ¾″, /);
   const described = await descriptions();
-  expect(described.some((d) => /^Maple ply ¾″, 96″ × 48″ \(/.test(d)), described.join(' | ')).toBe(true);
+  expect(
+    described.some((d) => /^Maple ply ¾″, 96″ × 48″ \(/.test(d)),
+    described.join(' | '),
+  ).toBe(true);
   expect(described.filter((d) => d.startsWith('Spoilage allowance'))).toHaveLength(1);
   expect(described.filter((d) => /^Saw time: \d+ cuts, \d+ stock pieces? handled$/.test(d))).toHaveLength(1);
   await expect(page.getByRole('region', { name: 'Totals' })).toContainText('Margin');

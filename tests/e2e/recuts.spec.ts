@@ -41,7 +41,17 @@ test('a damaged part goes on the re-cut list, is nested on an offcut and cut, an
   const owner = await browser.newPage({ viewport: DESK });
   await signIn(owner, 'owner');
   const stock = await owner.request.post('/api/stock', {
-    data: { kind: 'sheet', material, nominalThickness: '3/4"', thicknessMm: 18, lengthMm: inch(96), widthMm: inch(48), onHand: 3, costCents: 8800, location: 'Rack D1' },
+    data: {
+      kind: 'sheet',
+      material,
+      nominalThickness: '3/4"',
+      thicknessMm: 18,
+      lengthMm: inch(96),
+      widthMm: inch(48),
+      onHand: 3,
+      costCents: 8800,
+      location: 'Rack D1',
+    },
   });
   expect(stock.status()).toBe(201);
   const sheetId = (await stock.json()).id as string;

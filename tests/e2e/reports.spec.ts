@@ -14,7 +14,10 @@ const RANGE = '?from=2026-06-01&to=2026-11-30';
 test('the owner reads yield and offcut use by month, then by week for one material, and downloads the same figures', async ({ page }) => {
   await page.setViewportSize({ width: 1440, height: 900 });
   await signIn(page, 'owner');
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Reports/ }).click();
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: /^Reports/ })
+    .click();
   await expect(page.getByRole('heading', { level: 1, name: 'Reports' })).toBeVisible();
   await page.goto(`/reports${RANGE}`);
 
@@ -73,7 +76,10 @@ test('the owner reads yield and offcut use by month, then by week for one materi
 test('the estimator sees only the quoting report; the cutter no report; the CSVs refuse them alike', async ({ browser }) => {
   const estimator = await browser.newPage();
   await signIn(estimator, 'estimator');
-  await estimator.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Reports/ }).click();
+  await estimator
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: /^Reports/ })
+    .click();
   await expect(estimator.getByRole('heading', { level: 2, name: 'Quoting' })).toBeVisible();
   await expect(estimator.getByRole('heading', { level: 2, name: 'Yield over time' })).toHaveCount(0);
   await expect(estimator.getByRole('heading', { level: 2, name: 'Stock value' })).toHaveCount(0);
@@ -90,7 +96,9 @@ test('the estimator sees only the quoting report; the cutter no report; the CSVs
   await cutter.close();
 });
 
-test('the owner reads the quoting report of the demo’s past quotes: counts by month, value won, deposits, and material quoted against used', async ({ page }) => {
+test('the owner reads the quoting report of the demo’s past quotes: counts by month, value won, deposits, and material quoted against used', async ({
+  page,
+}) => {
   await page.setViewportSize({ width: 1440, height: 900 });
   await signIn(page, 'owner');
   await page.goto(`/reports${RANGE}`);

@@ -75,7 +75,11 @@ for (const role of roles) {
   });
 }
 
-test('a draft plan is not there for a cutter: every plan page answers 404 like the API and shows nothing of it', async ({ page, browser, consoleErrors }) => {
+test('a draft plan is not there for a cutter: every plan page answers 404 like the API and shows nothing of it', async ({
+  page,
+  browser,
+  consoleErrors,
+}) => {
   test.setTimeout(90_000);
   await signIn(page, 'estimator');
   const name = `Vanity draft ${Date.now()}`;
@@ -90,7 +94,13 @@ test('a draft plan is not there for a cutter: every plan page answers 404 like t
   expect((await cutter.request.get(`/api/plans/${draftId}`)).status()).toBe(404);
   // The browser reports each 404 document in its console; these are the answers this test asks for.
   consoleErrors.allow(/status of 404/);
-  for (const path of [`/plans/${draftId}/finish`, `/plans/${draftId}/saw-order`, `/plans/${draftId}/tags`, `/shop-floor/${draftId}`, `/jobs/${vanity}/plan/${draftId}`]) {
+  for (const path of [
+    `/plans/${draftId}/finish`,
+    `/plans/${draftId}/saw-order`,
+    `/plans/${draftId}/tags`,
+    `/shop-floor/${draftId}`,
+    `/jobs/${vanity}/plan/${draftId}`,
+  ]) {
     const res = await cutter.goto(path);
     expect(res?.status(), path).toBe(404);
     await expect(cutter.locator('body'), path).not.toContainText(name);

@@ -109,7 +109,10 @@ test('part tags print one per part on a chosen label sheet, and a tag leads to i
   const tagsPdf = await PDFDocument.load(fs.readFileSync(await download.path()));
   expect(tagsPdf.getPageCount()).toBe(Math.ceil(placed / 24));
 
-  const qr = await page.getByRole('img', { name: /^QR code: / }).first().getAttribute('aria-label');
+  const qr = await page
+    .getByRole('img', { name: /^QR code: / })
+    .first()
+    .getAttribute('aria-label');
   const url = new URL(qr!.replace('QR code: ', ''));
   expect(url.pathname).toMatch(/^\/parts\/[0-9a-f-]{36}$/);
   await page.goto(url.pathname + url.search);
@@ -118,7 +121,9 @@ test('part tags print one per part on a chosen label sheet, and a tag leads to i
   await shot(page, 'part-page');
 });
 
-test('the estimator nests the kitchen on the shop’s saws (track saw breaking down, cabinet saw after) and the saw order names the saw of every cut', async ({ page }) => {
+test('the estimator nests the kitchen on the shop’s saws (track saw breaking down, cabinet saw after) and the saw order names the saw of every cut', async ({
+  page,
+}) => {
   test.setTimeout(120_000);
   await signIn(page, 'estimator');
   await page.goto(`/jobs/${await jobId(page, 'Hollis kitchen')}/plan`);
@@ -149,17 +154,28 @@ test('the estimator nests the kitchen on the shop’s saws (track saw breaking d
   await expect(page.getByTestId('step-saw').filter({ hasText: 'Cabinet saw' }).first()).toBeVisible();
   await expect(page.getByTestId('saw-order-piece').first()).toContainText('on ');
   await shot(page, 'saw-order-saws');
-  await page.getByTestId('saw-order-piece').nth(1).screenshot({ path: `test-results/screens-${process.env.E2E_PORT ?? 'main'}/saw-order-saws-piece.png` });
+  await page
+    .getByTestId('saw-order-piece')
+    .nth(1)
+    .screenshot({ path: `test-results/screens-${process.env.E2E_PORT ?? 'main'}/saw-order-saws-piece.png` });
   await page.setViewportSize({ width: 390, height: 844 });
   await expect(page.getByTestId('step-saw').first()).toBeVisible();
   // Nothing of a step card runs off a phone's screen.
-  const overflow = await page.getByTestId('saw-step').first().evaluate((el) => el.scrollWidth - el.clientWidth);
+  const overflow = await page
+    .getByTestId('saw-step')
+    .first()
+    .evaluate((el) => el.scrollWidth - el.clientWidth);
   expect(overflow).toBeLessThanOrEqual(0);
   await shot(page, 'saw-order-saws-390');
-  await page.getByTestId('saw-step').nth(1).screenshot({ path: `test-results/screens-${process.env.E2E_PORT ?? 'main'}/saw-order-saws-390-step.png` });
+  await page
+    .getByTestId('saw-step')
+    .nth(1)
+    .screenshot({ path: `test-results/screens-${process.env.E2E_PORT ?? 'main'}/saw-order-saws-390-step.png` });
 });
 
-test('the owner keeps the shop’s saws in Shop settings: the demo’s two, a new one in inches, and the caution at the fence minimum', async ({ page }) => {
+test('the owner keeps the shop’s saws in Shop settings: the demo’s two, a new one in inches, and the caution at the fence minimum', async ({
+  page,
+}) => {
   await signIn(page, 'owner');
   await page.goto('/settings');
   const section = page.getByRole('region', { name: 'Saws' });

@@ -80,7 +80,13 @@ for (const vp of [
         const style = getComputedStyle(el);
         const range = document.createRange();
         range.selectNodeContents(el);
-        return { lines: range.getClientRects().length, fontSize: parseFloat(style.fontSize), scroll: el.scrollWidth, client: el.clientWidth, text: el.textContent ?? '' };
+        return {
+          lines: range.getClientRects().length,
+          fontSize: parseFloat(style.fontSize),
+          scroll: el.scrollWidth,
+          client: el.clientWidth,
+          text: el.textContent ?? '',
+        };
       });
       expect(f.lines, `"${f.text}" on one line`).toBe(1);
       expect(f.scroll).toBeLessThanOrEqual(f.client + 1);
@@ -100,7 +106,9 @@ for (const vp of [
 
       expect(await pageOverflow(page)).toBeNull();
       expect(await clippedText(page)).toEqual([]);
-      await page.screenshot({ path: `test-results/screens${process.env.E2E_PORT ? '-' + process.env.E2E_PORT : ''}/cutting-first-screen-${vp.width}.png` });
+      await page.screenshot({
+        path: `test-results/screens${process.env.E2E_PORT ? '-' + process.env.E2E_PORT : ''}/cutting-first-screen-${vp.width}.png`,
+      });
     });
   });
 }

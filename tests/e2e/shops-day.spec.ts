@@ -38,7 +38,9 @@ async function noSidewaysScroll(page: Page, where: string) {
   expect(await pageOverflow(page), `${where} scrolls sideways at ${page.viewportSize()?.width} px`).toBeNull();
 }
 
-test('the shop’s day with the defaults: job → drawer schedule → CSV → Nest → bench → takeoff → release → the cutter on a phone → a re-cut, the owner watching', async ({ browser }) => {
+test('the shop’s day with the defaults: job → drawer schedule → CSV → Nest → bench → takeoff → release → the cutter on a phone → a re-cut, the owner watching', async ({
+  browser,
+}) => {
   test.setTimeout(300_000);
   const stamp = Date.now();
   const jobName = `Larkspur entry cubbies ${stamp}`;
@@ -115,7 +117,9 @@ test('the shop’s day with the defaults: job → drawer schedule → CSV → Ne
   const nested = await savedPlan(estimator, planId);
   const placed = nested.pieces.reduce((n, p) => n + p.placements.length, 0);
   expect(placed, 'every part is on a sheet').toBe(partCount);
-  expect(new Set(nested.pieces.map((p) => `${p.material} ${p.thickness}`))).toEqual(new Set(['Baltic birch 18', 'Baltic birch 12', 'Baltic birch 6']));
+  expect(new Set(nested.pieces.map((p) => `${p.material} ${p.thickness}`))).toEqual(
+    new Set(['Baltic birch 18', 'Baltic birch 12', 'Baltic birch 6']),
+  );
 
   // A part dragged into an offcut on the bench, and saved.
   const move = pickMove(nested.pieces);

@@ -79,7 +79,10 @@ for (const vp of VIEWPORTS) {
           await page.goto(p.path(ids));
           await settle(page, p.heading);
           const overflow = await pageOverflow(page);
-          if (overflow) problems.push(`${p.slug}: the page is ${overflow.scrollWidth} px wide in a ${overflow.innerWidth} px window (widest: ${overflow.culprits.join('; ')})`);
+          if (overflow)
+            problems.push(
+              `${p.slug}: the page is ${overflow.scrollWidth} px wide in a ${overflow.innerWidth} px window (widest: ${overflow.culprits.join('; ')})`,
+            );
           for (const c of await clippedText(page)) problems.push(`${p.slug}: clipped text ${c}`);
           await shot(page, `walk-${vp.width}-${role}-${p.slug}`);
         }

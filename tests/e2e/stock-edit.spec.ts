@@ -1,12 +1,27 @@
 import { expect, test } from './support/test';
 import { shot, signIn } from './support/session';
 
-test('the owner edits a size’s location and cost, sees them in the table and the change in its history; an estimator sees no Edit action', async ({ page, browser }) => {
+test('the owner edits a size’s location and cost, sees them in the table and the change in its history; an estimator sees no Edit action', async ({
+  page,
+  browser,
+}) => {
   await signIn(page, 'owner');
   // A size of this spec's own, so the seeded sizes other specs count on stay as they were.
   const material = `Sapele ${Date.now().toString(36)}`;
   const created = await page.request.post('/api/stock', {
-    data: { kind: 'board', material, nominalThickness: '4/4', thicknessMm: 21, lengthMm: 2438, widthMm: 165, onHand: 6, costCents: 1150, supplier: 'Millbrook Hardwoods', location: 'Lumber rack 5', surfacing: 'S2S' },
+    data: {
+      kind: 'board',
+      material,
+      nominalThickness: '4/4',
+      thicknessMm: 21,
+      lengthMm: 2438,
+      widthMm: 165,
+      onHand: 6,
+      costCents: 1150,
+      supplier: 'Millbrook Hardwoods',
+      location: 'Lumber rack 5',
+      surfacing: 'S2S',
+    },
   });
   expect(created.status()).toBe(201);
 

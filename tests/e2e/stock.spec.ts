@@ -12,13 +12,17 @@ test('the owner receives stock, adjusts a count with a reason, scraps an offcut,
   await shot(page, 'stock-owner');
 
   await expect(quarterPly(page).getByTestId('on-hand')).toHaveText('9');
-  await quarterPly(page).getByRole('button', { name: /^Receive / }).click();
+  await quarterPly(page)
+    .getByRole('button', { name: /^Receive / })
+    .click();
   await page.getByLabel('Pieces received').fill('3');
   await page.getByLabel('Note (delivery, supplier)').fill('Cedar Run delivery 4471');
   await page.getByRole('button', { name: 'Receive', exact: true }).click();
   await expect(quarterPly(page).getByTestId('on-hand')).toHaveText('12');
 
-  await quarterPly(page).getByRole('button', { name: /^Adjust count/ }).click();
+  await quarterPly(page)
+    .getByRole('button', { name: /^Adjust count/ })
+    .click();
   await page.getByLabel(/Counted on the rack/).fill('11');
   await page.getByRole('button', { name: 'Save count' }).click();
   await expect(page.getByText('Say why the count changed (counted, damaged, found…).')).toBeVisible();
@@ -101,7 +105,7 @@ test('the estimator reads the takeoff for the kitchen; a cutter may not', async 
   await cutter.close();
 });
 
-test("the cutter finishes the seeded released plan and its offcuts appear on the rack where they were put", async ({ page }) => {
+test('the cutter finishes the seeded released plan and its offcuts appear on the rack where they were put', async ({ page }) => {
   await signIn(page, 'cutter');
   await page.goto('/shop-floor');
   // The seeded plan by name: other specs may have released plans of their own.

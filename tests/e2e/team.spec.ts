@@ -1,7 +1,9 @@
 import { expect, test } from './support/test';
 import { shot, signIn } from './support/session';
 
-test('the owner adds a cutter with a first password of their own, who can sign in; after deactivation their next request is refused', async ({ browser }) => {
+test('the owner adds a cutter with a first password of their own, who can sign in; after deactivation their next request is refused', async ({
+  browser,
+}) => {
   const ownerCtx = await browser.newContext();
   const owner = await ownerCtx.newPage();
   await signIn(owner, 'owner');

@@ -69,7 +69,9 @@ test('two releases racing for the last sheet, one on each server: exactly one wi
   });
   expect(stock.status(), await stock.text()).toBe(201);
   const job = await (await onA.post('/api/jobs', { data: { name: `Race job ${material}` } })).json();
-  const part = await onA.post(`/api/jobs/${job.id}/parts`, { data: { label: 'Side', quantity: 1, lengthMm: 700, widthMm: 500, thicknessMm: 18, material } });
+  const part = await onA.post(`/api/jobs/${job.id}/parts`, {
+    data: { label: 'Side', quantity: 1, lengthMm: 700, widthMm: 500, thicknessMm: 18, material },
+  });
   expect(part.status(), await part.text()).toBe(201);
   const asPage = { request: onA } as unknown as Page;
   const first = await saveDraftPlan(asPage, job.name, 'Race plan one');

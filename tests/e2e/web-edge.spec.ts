@@ -25,14 +25,20 @@ test.describe('requests from another site', () => {
     await signIn(page, 'owner');
     const cutter = await teamMember(page.request, person('cutter').email);
 
-    const promote = await page.request.patch(`/api/team/${cutter.id}`, { headers: { ...EVIL, 'content-type': 'text/plain' }, data: JSON.stringify({ role: 'owner' }) });
+    const promote = await page.request.patch(`/api/team/${cutter.id}`, {
+      headers: { ...EVIL, 'content-type': 'text/plain' },
+      data: JSON.stringify({ role: 'owner' }),
+    });
     expect(promote.status()).toBe(403);
     const promoteJson = await page.request.patch(`/api/team/${cutter.id}`, { headers: EVIL, data: { role: 'owner' } });
     expect(promoteJson.status()).toBe(403);
     expect((await teamMember(page.request, person('cutter').email)).role).toBe('cutter');
 
     const email = `mallory.${Date.now()}@evil.example`;
-    const made = await page.request.post('/api/team', { headers: EVIL, data: { name: 'Mallory', email, role: 'owner', password: 'a-long-enough-password' } });
+    const made = await page.request.post('/api/team', {
+      headers: EVIL,
+      data: { name: 'Mallory', email, role: 'owner', password: 'a-long-enough-password' },
+    });
     expect(made.status()).toBe(403);
     const plain = await page.request.post('/api/team', {
       headers: { 'content-type': 'text/plain' },
@@ -63,7 +69,13 @@ test.describe('a huge chunked body', () => {
       let sent = 0;
       let answered = false;
       const req = http.request(
-        { host: '127.0.0.1', port: E2E_PORT, path: '/api/offcuts', method: 'POST', headers: { cookie, origin: E2E_URL, 'content-type': 'application/json', 'transfer-encoding': 'chunked' } },
+        {
+          host: '127.0.0.1',
+          port: E2E_PORT,
+          path: '/api/offcuts',
+          method: 'POST',
+          headers: { cookie, origin: E2E_URL, 'content-type': 'application/json', 'transfer-encoding': 'chunked' },
+        },
         (res) => {
           answered = true;
           resolve(res.statusCode ?? 0);
@@ -96,10 +108,17 @@ test.describe('sign-in throttle', () => {
   /** Posts the credentials as next-auth's client does, from a client address of the test's own. */
   async function attempt(request: APIRequestContext, email: string, password: string, address: string) {
     const { csrfToken } = await (await request.get('/api/auth/csrf')).json();
-    return request.post('/api/auth/callback/credentials', { form: { email, password, csrfToken, json: 'true' }, headers: { 'x-forwarded-for': address } });
+    return request.post('/api/auth/callback/credentials', {
+      form: { email, password, csrfToken, json: 'true' },
+      headers: { 'x-forwarded-for': address },
+    });
   }
 
-  test('ten wrong passwords, then the right one is refused (429, Retry-After), the same for an unknown e-mail; the form says so', async ({ page, browser, consoleErrors }) => {
+  test('ten wrong passwords, then the right one is refused (429, Retry-After), the same for an unknown e-mail; the form says so', async ({
+    page,
+    browser,
+    consoleErrors,
+  }) => {
     test.setTimeout(120_000);
     await signIn(page, 'owner');
     const email = `throttled.${Date.now()}@larkspur.example`;
@@ -212,7 +231,9 @@ test.describe('big inputs off the event loop', () => {
     expect(body.valid).toBeGreaterThan(10_000);
     expect(body.imported).toBe(0);
     const worst = Math.max(...waits);
-    console.log(`stock check of ${csv.length} bytes took ${Math.round(importMs)} ms; /api/health answered ${waits.length} times, worst ${Math.round(worst)} ms`);
+    console.log(
+      `stock check of ${csv.length} bytes took ${Math.round(importMs)} ms; /api/health answered ${waits.length} times, worst ${Math.round(worst)} ms`,
+    );
     expect(waits.length).toBeGreaterThan(3);
     // The target is 100 ms; the margin is for a shared, busy test machine (before: 4.6 s behind one check).
     expect(worst).toBeLessThan(1_000);
@@ -233,7 +254,9 @@ test.describe('a workbook that unpacks to far too much', () => {
     await page.goto('/jobs?q=Pemberton%20vanity');
     await page.getByRole('link', { name: 'Pemberton vanity' }).click();
     await page.getByRole('button', { name: 'Upload CSV or Excel' }).click();
-    await page.getByLabel('File').setInputFiles({ name: 'huge.xlsx', mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', buffer: bomb });
+    await page
+      .getByLabel('File')
+      .setInputFiles({ name: 'huge.xlsx', mimeType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', buffer: bomb });
     // While the worker reads, the page still answers.
     expect(await page.evaluate(() => 6 * 7)).toBe(42);
     await expect(page.getByText(/unpacks to more than 40 MB/)).toBeVisible({ timeout: 30_000 });

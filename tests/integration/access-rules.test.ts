@@ -26,7 +26,10 @@ describe('every shop is a tenant', () => {
   });
 
   test("another shop's job id is a 404, the same as a missing one, and it is left unchanged", async () => {
-    const res = await jobRoute.PATCH(await request(`/api/jobs/${fx.theirJob.id}`, { method: 'PATCH', body: { name: 'Taken over' }, user: fx.owner }), withId(fx.theirJob.id));
+    const res = await jobRoute.PATCH(
+      await request(`/api/jobs/${fx.theirJob.id}`, { method: 'PATCH', body: { name: 'Taken over' }, user: fx.owner }),
+      withId(fx.theirJob.id),
+    );
     expect(res.status).toBe(404);
     const still = await (await jobRoute.GET(await request(`/api/jobs/${fx.theirJob.id}`, { user: fx.otherOwner }), withId(fx.theirJob.id))).json();
     expect(still.name).toBe('Elm Street library');
@@ -41,7 +44,10 @@ describe('every shop is a tenant', () => {
 describe('bad input', () => {
   test('gets a 422 with a message on each bad field, and nothing is written', async () => {
     const before = (await (await jobsRoute.GET(await request('/api/jobs?status=all', { user: fx.owner }), noParams)).json()).total;
-    const res = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', body: { name: '', dueDate: '31/01/2027' }, user: fx.owner }), noParams);
+    const res = await jobsRoute.POST(
+      await request('/api/jobs', { method: 'POST', body: { name: '', dueDate: '31/01/2027' }, user: fx.owner }),
+      noParams,
+    );
     expect(res.status).toBe(422);
     const body = await res.json();
     expect(body.fields.name).toEqual(['Give the job a name.']);
@@ -58,7 +64,8 @@ describe('bad input', () => {
 
   test('settings saved with nothing changed answer the settings as they are, and write no audit entry', async () => {
     const before = await (await settingsRoute.GET(await request('/api/settings', { user: fx.owner }), noParams)).json();
-    const audits = async () => (await handle.db.select().from(auditEvents)).filter((e) => e.entity === 'shop-settings' && e.shopId === fx.mine.id).length;
+    const audits = async () =>
+      (await handle.db.select().from(auditEvents)).filter((e) => e.entity === 'shop-settings' && e.shopId === fx.mine.id).length;
     const logged = await audits();
     const res = await settingsRoute.PATCH(await request('/api/settings', { method: 'PATCH', body: {}, user: fx.owner }), noParams);
     expect(res.status).toBe(200);
@@ -82,7 +89,10 @@ describe('role changes take effect on the next request', () => {
     const session = { id: victim.id, shopId: victim.shopId, role: victim.role, tokenVersion: victim.tokenVersion };
     expect((await jobsRoute.GET(await request('/api/jobs', { user: session }), noParams)).status).toBe(200);
 
-    const res = await teamMemberRoute.PATCH(await request(`/api/team/${victim.id}`, { method: 'PATCH', body: { role: 'cutter' }, user: fx.owner }), withId(victim.id));
+    const res = await teamMemberRoute.PATCH(
+      await request(`/api/team/${victim.id}`, { method: 'PATCH', body: { role: 'cutter' }, user: fx.owner }),
+      withId(victim.id),
+    );
     expect(res.status).toBe(200);
     expect((await res.json()).role).toBe('cutter');
 
@@ -93,7 +103,10 @@ describe('role changes take effect on the next request', () => {
 
   test('the last active owner cannot be demoted or deactivated', async () => {
     for (const body of [{ role: 'estimator' }, { active: false }]) {
-      const res = await teamMemberRoute.PATCH(await request(`/api/team/${fx.owner.id}`, { method: 'PATCH', body, user: fx.owner }), withId(fx.owner.id));
+      const res = await teamMemberRoute.PATCH(
+        await request(`/api/team/${fx.owner.id}`, { method: 'PATCH', body, user: fx.owner }),
+        withId(fx.owner.id),
+      );
       expect(res.status).toBe(409);
       expect((await res.json()).error).toMatch(/at least one active owner/);
     }

@@ -26,7 +26,8 @@ function routeFiles(dir = API_DIR): string[] {
 }
 
 type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
-const loadRoute = (route: string) => import(/* @vite-ignore */ path.join(API_DIR, route.slice('/api'.length), 'route.ts')) as Promise<Record<string, Handler>>;
+const loadRoute = (route: string) =>
+  import(/* @vite-ignore */ path.join(API_DIR, route.slice('/api'.length), 'route.ts')) as Promise<Record<string, Handler>>;
 
 let handle: DbHandle;
 let fx: AuthzFixtures;
@@ -58,7 +59,9 @@ describe('the authorization matrix', () => {
   const cases = TABLE.flatMap((row) => (Object.keys(row.expect) as Actor[]).map((actor) => ({ ...row, actor, status: row.expect[actor] })));
 
   test.each(cases)('$method $route as $actor → $status', async ({ route, method, body, target, actor, status }) => {
-    const user: TestUser | undefined = { anonymous: undefined, owner: fx.owner, estimator: fx.estimator, cutter: fx.cutter, other: fx.otherOwner }[actor];
+    const user: TestUser | undefined = { anonymous: undefined, owner: fx.owner, estimator: fx.estimator, cutter: fx.cutter, other: fx.otherOwner }[
+      actor
+    ];
     // Each call gets its own target in the first shop, so deletions and role changes never affect later rows.
     const params = target ? await target(fx) : {};
     const url = Object.entries(params).reduce((u, [k, v]) => u.replace(`[${k}]`, v), route);

@@ -17,7 +17,9 @@ import { createTestDatabase } from '../support/test-db';
 
 /** Every table of the schema with all its rows, in a fixed order (rows sorted by their JSON text). */
 async function everyTable(db: Db): Promise<Record<string, string[]>> {
-  const tables = (await db.execute(sql`select table_name from information_schema.tables where table_schema = 'public' and table_type = 'BASE TABLE' order by table_name`)) as unknown as { rows: { table_name: string }[] };
+  const tables = (await db.execute(
+    sql`select table_name from information_schema.tables where table_schema = 'public' and table_type = 'BASE TABLE' order by table_name`,
+  )) as unknown as { rows: { table_name: string }[] };
   const out: Record<string, string[]> = {};
   for (const { table_name } of tables.rows) {
     const rows = (await db.execute(sql.raw(`select row_to_json(t)::text as r from "${table_name}" t`))) as unknown as { rows: { r: string }[] };
@@ -104,7 +106,10 @@ describe('backups', () => {
     const restored = await openDatabase({ dataDir: restoredDir, migrate: false });
     const live = await openDatabase({ dataDir: dir, migrate: false });
     try {
-      const writesIn = async (db: Db) => (await db.select({ name: jobs.name }).from(jobs).where(like(jobs.name, 'Live write %'))).map((j) => Number(j.name.split(' ')[2])).sort((a, b) => a - b);
+      const writesIn = async (db: Db) =>
+        (await db.select({ name: jobs.name }).from(jobs).where(like(jobs.name, 'Live write %')))
+          .map((j) => Number(j.name.split(' ')[2]))
+          .sort((a, b) => a - b);
       const kept = await writesIn(restored.db);
       const k = kept.length;
       // A prefix of the writes: everything committed up to the dump (at least what was acknowledged before it was
@@ -115,7 +120,9 @@ describe('backups', () => {
       expect((await writesIn(live.db)).length).toBe(done);
       expect(done).toBeGreaterThan(k);
       // Every restored write is whole: its three parts and its last update.
-      const restoredParts = (await restored.db.execute(sql`select count(*)::int as n from parts p join jobs j on j.id = p.job_id where j.name like 'Live write %' and j.notes = 'three parts'`)) as unknown as { rows: { n: number }[] };
+      const restoredParts = (await restored.db.execute(
+        sql`select count(*)::int as n from parts p join jobs j on j.id = p.job_id where j.name like 'Live write %' and j.notes = 'three parts'`,
+      )) as unknown as { rows: { n: number }[] };
       expect(restoredParts.rows[0].n).toBe(3 * k);
 
       // The live database without the writes after the dump is, table by table and row by row, the restored copy.
@@ -137,7 +144,9 @@ describe('backups', () => {
       holder.stdout.on('data', (d) => String(d).includes('ready') && resolve());
       holder.on('exit', (code) => reject(new Error(`holder exited early (${code})`)));
     });
-    await expect(backupEmbedded(dir, path.join(root, 'b.tar.gz'))).rejects.toThrow(new RegExp(`in use by process ${holder.pid}[^]*Stop the server, then back it up`));
+    await expect(backupEmbedded(dir, path.join(root, 'b.tar.gz'))).rejects.toThrow(
+      new RegExp(`in use by process ${holder.pid}[^]*Stop the server, then back it up`),
+    );
     expect(fs.existsSync(path.join(root, 'b.tar.gz'))).toBe(false);
     holder.stdin.end();
     await new Promise((resolve) => holder.on('exit', resolve));

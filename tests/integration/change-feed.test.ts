@@ -23,7 +23,10 @@ useTwoShopDatabase((app) => ({ handle, fx } = app));
 const claimsOf = (u: { id: string; shopId: string; tokenVersion: number }) => ({ userId: u.id, shopId: u.shopId, tokenVersion: u.tokenVersion });
 
 async function newEstimator(email: string) {
-  const [u] = await handle.db.insert(users).values({ shopId: fx.mine.id, email, name: 'Feed Estimator', role: 'estimator', passwordHash: 'x' }).returning();
+  const [u] = await handle.db
+    .insert(users)
+    .values({ shopId: fx.mine.id, email, name: 'Feed Estimator', role: 'estimator', passwordHash: 'x' })
+    .returning();
   return u;
 }
 
@@ -75,7 +78,10 @@ describe('the change feed', () => {
     expect((await readShopSettings(handle, fx.mine.id))?.name).not.toBe('changed by a caller');
     await updateShopSettings(handle.db, fx.mine.id, fx.owner.id, { timeZone: 'America/Chicago' });
     expect((await readShopSettings(handle, fx.mine.id))?.timeZone).toBe('America/Chicago');
-    await handle.db.update(shops).set({ name: sql`${shops.name} || ' & Sons'` }).where(eq(shops.id, fx.mine.id));
+    await handle.db
+      .update(shops)
+      .set({ name: sql`${shops.name} || ' & Sons'` })
+      .where(eq(shops.id, fx.mine.id));
     expect((await readShopSettings(handle, fx.mine.id))?.name).toMatch(/ & Sons$/);
     // The other shop's settings are its own.
     expect((await readShopSettings(handle, fx.theirs.id))?.name).not.toMatch(/ & Sons$/);

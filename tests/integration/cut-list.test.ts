@@ -54,7 +54,12 @@ describe('typing rows into the cut list', () => {
     expect(added.status).toBe(201);
     expect(added.json).toMatchObject({ label: 'Shelf', quantity: 2, grain: 'any', drawerScheduleId: null, notes: '' });
 
-    const changed = await call(partRoute.PATCH, '/api/jobs/x/parts/y', { ...jobParams(), partId: added.json.id }, { method: 'PATCH', body: { quantity: 3, notes: 'edge band one long edge' } });
+    const changed = await call(
+      partRoute.PATCH,
+      '/api/jobs/x/parts/y',
+      { ...jobParams(), partId: added.json.id },
+      { method: 'PATCH', body: { quantity: 3, notes: 'edge band one long edge' } },
+    );
     expect(changed.json).toMatchObject({ quantity: 3, notes: 'edge band one long edge', lengthMm: inches(30) });
 
     const list = await call(partsRoute.GET, '/api/jobs/x/parts', jobParams());
@@ -65,8 +70,16 @@ describe('typing rows into the cut list', () => {
   });
 
   test('a bad cell is refused with its field named, and nothing changes', async () => {
-    const added = await call(partsRoute.POST, '/api/jobs/x/parts', jobParams(), { method: 'POST', body: { label: 'Rail', quantity: 1, lengthMm: 500, widthMm: 80, thicknessMm: 18, material: 'MDF' } });
-    const bad = await call(partRoute.PATCH, '/api/jobs/x/parts/y', { ...jobParams(), partId: added.json.id }, { method: 'PATCH', body: { quantity: 0, widthMm: -3 } });
+    const added = await call(partsRoute.POST, '/api/jobs/x/parts', jobParams(), {
+      method: 'POST',
+      body: { label: 'Rail', quantity: 1, lengthMm: 500, widthMm: 80, thicknessMm: 18, material: 'MDF' },
+    });
+    const bad = await call(
+      partRoute.PATCH,
+      '/api/jobs/x/parts/y',
+      { ...jobParams(), partId: added.json.id },
+      { method: 'PATCH', body: { quantity: 0, widthMm: -3 } },
+    );
     expect(bad.status).toBe(422);
     expect(Object.keys(bad.json.fields).sort()).toEqual(['quantity', 'widthMm']);
     const [row] = await handle.db.select().from(parts).where(eq(parts.id, added.json.id));
@@ -74,7 +87,12 @@ describe('typing rows into the cut list', () => {
   });
 
   test("another shop's job and parts do not exist from here", async () => {
-    const res = await call(partsRoute.POST, '/api/jobs/x/parts', { id: fx.theirJob.id }, { method: 'POST', body: { label: 'x', quantity: 1, lengthMm: 1, widthMm: 1, thicknessMm: 1, material: 'MDF' } });
+    const res = await call(
+      partsRoute.POST,
+      '/api/jobs/x/parts',
+      { id: fx.theirJob.id },
+      { method: 'POST', body: { label: 'x', quantity: 1, lengthMm: 1, widthMm: 1, thicknessMm: 1, material: 'MDF' } },
+    );
     expect(res.status).toBe(404);
     expect(await countParts(fx.theirJob.id)).toBe(0);
   });
@@ -101,7 +119,10 @@ describe('uploading a cut list', () => {
 
   test('importing a file with a bad row writes nothing and names the row', async () => {
     const before = await countParts();
-    const res = await call(importRoute.POST, '/api/jobs/x/cut-list/import', jobParams(), { method: 'POST', body: { ...UPLOAD([GOOD, BAD]), mode: 'all' } });
+    const res = await call(importRoute.POST, '/api/jobs/x/cut-list/import', jobParams(), {
+      method: 'POST',
+      body: { ...UPLOAD([GOOD, BAD]), mode: 'all' },
+    });
     expect(res.status).toBe(422);
     expect(res.json.error).toContain('1 of 2 rows have problems, so nothing was imported');
     expect(res.json.fields).toEqual({ 'rows.3': ['Quantity: Quantity “two” is not a whole number.'] });
@@ -110,20 +131,29 @@ describe('uploading a cut list', () => {
 
   test('importing only the valid rows writes them all in one go and reports the skipped lines', async () => {
     const before = await countParts();
-    const res = await call(importRoute.POST, '/api/jobs/x/cut-list/import', jobParams(), { method: 'POST', body: { ...UPLOAD([GOOD, BAD, GOOD]), mode: 'valid-only' } });
+    const res = await call(importRoute.POST, '/api/jobs/x/cut-list/import', jobParams(), {
+      method: 'POST',
+      body: { ...UPLOAD([GOOD, BAD, GOOD]), mode: 'valid-only' },
+    });
     expect(res.status).toBe(201);
     expect(res.json).toEqual({ imported: 2, skipped: 1, skippedLines: [3] });
     expect(await countParts()).toBe(before + 2);
   });
 
   test('an upload over the row limit is refused whole', async () => {
-    const res = await call(importRoute.POST, '/api/jobs/x/cut-list/import', jobParams(), { method: 'POST', body: UPLOAD(Array.from({ length: 1001 }, () => GOOD)) });
+    const res = await call(importRoute.POST, '/api/jobs/x/cut-list/import', jobParams(), {
+      method: 'POST',
+      body: UPLOAD(Array.from({ length: 1001 }, () => GOOD)),
+    });
     expect(res.status).toBe(422);
     expect(res.json.fields.rows[0]).toContain('At most 1,000 rows');
   });
 
   test('an upload missing a required column is refused, naming the column', async () => {
-    const res = await call(previewRoute.POST, '/api/jobs/x/cut-list/preview', jobParams(), { method: 'POST', body: { columns: ['label', 'quantity'], rows: [{ line: 2, cells: ['a', '1'] }], unit: 'mm' } });
+    const res = await call(previewRoute.POST, '/api/jobs/x/cut-list/preview', jobParams(), {
+      method: 'POST',
+      body: { columns: ['label', 'quantity'], rows: [{ line: 2, cells: ['a', '1'] }], unit: 'mm' },
+    });
     expect(res.status).toBe(422);
     expect(res.json.fields.columns[0]).toBe('Map a column to Length, Width, Thickness, Material.');
   });
@@ -131,7 +161,17 @@ describe('uploading a cut list', () => {
 
 describe('exporting the cut list', () => {
   test('the CSV download is in the shop’s unit with formula-looking cells neutralised (OWASP CSV Injection)', async () => {
-    await call(partsRoute.POST, '/api/jobs/x/parts', jobParams(), { method: 'POST', body: { label: '=HYPERLINK("http://example.invalid")', quantity: 1, lengthMm: inches(19.75), widthMm: inches(4), thicknessMm: inches(0.5), material: 'MDF' } });
+    await call(partsRoute.POST, '/api/jobs/x/parts', jobParams(), {
+      method: 'POST',
+      body: {
+        label: '=HYPERLINK("http://example.invalid")',
+        quantity: 1,
+        lengthMm: inches(19.75),
+        widthMm: inches(4),
+        thicknessMm: inches(0.5),
+        material: 'MDF',
+      },
+    });
     const res = await call(exportRoute.GET, '/api/jobs/x/cut-list/export', jobParams(), { user: fx.cutter });
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toBe('text/csv; charset=utf-8');

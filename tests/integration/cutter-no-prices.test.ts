@@ -37,13 +37,18 @@ describe('nothing a cutter may call answers with a price', () => {
 
   test('the cutter may call enough routes for this to mean something', () => {
     expect(cutterRoutes.length).toBeGreaterThan(8);
-    expect(cutterRoutes.map((r) => `${r.method} ${r.route}`)).toEqual(expect.arrayContaining(['POST /api/offcuts', 'POST /api/offcuts/[id]/scrap', 'GET /api/stock']));
+    expect(cutterRoutes.map((r) => `${r.method} ${r.route}`)).toEqual(
+      expect.arrayContaining(['POST /api/offcuts', 'POST /api/offcuts/[id]/scrap', 'GET /api/stock']),
+    );
   });
 
   test.each(cutterRoutes)('$method $route as the cutter: no money-like key in the answer', async ({ route, method, body, target }) => {
     const params = target ? await target({ ...fx, db: handle.db }) : {};
     const url = Object.entries(params).reduce((u, [k, v]) => u.replace(`[${k}]`, v), route);
-    const mod = (await import(/* @vite-ignore */ path.resolve('app/api', route.slice('/api/'.length), 'route.ts'))) as Record<string, (req: Request, ctx: unknown) => Promise<Response>>;
+    const mod = (await import(/* @vite-ignore */ path.resolve('app/api', route.slice('/api/'.length), 'route.ts'))) as Record<
+      string,
+      (req: Request, ctx: unknown) => Promise<Response>
+    >;
     const payload = body === undefined ? undefined : JSON.parse(JSON.stringify(body).replace('EMAIL', uniqueEmail('cutter')));
     const res = await mod[method](await request(url, { method, body: payload, user: fx.cutter }), { params: Promise.resolve(params) });
     expect(res.status).toBeLessThan(300);

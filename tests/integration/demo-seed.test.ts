@@ -74,7 +74,9 @@ describe('the demo shop', () => {
     ]);
     const [kitchen] = await handle.db.select().from(jobs).where(eq(jobs.name, 'Hollis kitchen'));
     const [table, track] = list;
-    const request = nestRequestSchema.parse(await buildNestRequest(handle.db, first.shopId, kitchen.id, { timeBudgetMs: 0, sawId: table.id, breakdownSawId: track.id }));
+    const request = nestRequestSchema.parse(
+      await buildNestRequest(handle.db, first.shopId, kitchen.id, { timeBudgetMs: 0, sawId: table.id, breakdownSawId: track.id }),
+    );
     expect(request.settings.saw?.name).toBe('Cabinet saw');
     const plan = await optimize(request);
     expect(plan.pieces.length).toBeGreaterThan(0);
@@ -97,7 +99,13 @@ describe('the demo shop', () => {
     const size = (name: string, opening: { widthMm: number; heightMm: number; depthMm: number }) => {
       const { id, updatedAt, ...rule } = models.find((m) => m.name === name)!;
       void updatedAt;
-      const sized = sizeDrawerSchedule({ label: 'Demo', quantity: 1, size: { from: 'opening', ...opening }, slide: { type: 'undermount', model: { ...rule, id } }, thickness: { frontMm: 12, sideMm: 12 } });
+      const sized = sizeDrawerSchedule({
+        label: 'Demo',
+        quantity: 1,
+        size: { from: 'opening', ...opening },
+        slide: { type: 'undermount', model: { ...rule, id } },
+        thickness: { frontMm: 12, sideMm: 12 },
+      });
       if (!sized.ok) throw new Error(JSON.stringify(sized.errors));
       return sized.box;
     };
@@ -108,7 +116,11 @@ describe('the demo shop', () => {
       depthMm: expect.closeTo(inches(21), 9),
     });
     // Outside rule: 564 − 10 = 554 mm; 540 − 10 = 530 mm of room takes the 500 mm slide.
-    expect(size('Tessel T-16 soft close', { widthMm: 564, heightMm: 180, depthMm: 540 })).toMatchObject({ widthMm: 554, heightMm: 160, depthMm: 500 });
+    expect(size('Tessel T-16 soft close', { widthMm: 564, heightMm: 180, depthMm: 540 })).toMatchObject({
+      widthMm: 554,
+      heightMm: 160,
+      depthMm: 500,
+    });
   });
 
   test('is seeded only into an empty database', async () => {
@@ -132,11 +144,25 @@ describe('the demo shop', () => {
     expect(months.filter((r) => r.spoiledArea > 0).map((r) => r.period)).toEqual(['2026-08-01']);
     for (const r of months) expect(r.partArea + r.spoiledArea + r.keptArea + r.sawWasteArea).toBeCloseTo(r.stockArea, 3);
     // Finishing wrote each piece's part and damaged area, equal to its placements' (what the reports read).
-    const pieces = await db.select().from(planPieces).where(inArray(planPieces.planId, done.map((p) => p.id)));
+    const pieces = await db
+      .select()
+      .from(planPieces)
+      .where(
+        inArray(
+          planPieces.planId,
+          done.map((p) => p.id),
+        ),
+      );
     for (const piece of pieces) {
       const on = await db.select().from(placements).where(eq(placements.planPieceId, piece.id));
-      expect(piece.partAreaMm2).toBeCloseTo(on.filter((p) => !p.damaged).reduce((n, p) => n + p.lengthMm * p.widthMm, 0), 6);
-      expect(piece.spoiledAreaMm2).toBeCloseTo(on.filter((p) => p.damaged).reduce((n, p) => n + p.lengthMm * p.widthMm, 0), 6);
+      expect(piece.partAreaMm2).toBeCloseTo(
+        on.filter((p) => !p.damaged).reduce((n, p) => n + p.lengthMm * p.widthMm, 0),
+        6,
+      );
+      expect(piece.spoiledAreaMm2).toBeCloseTo(
+        on.filter((p) => p.damaged).reduce((n, p) => n + p.lengthMm * p.widthMm, 0),
+        6,
+      );
     }
     expect(pieces.some((p) => (p.spoiledAreaMm2 ?? 0) > 0)).toBe(true);
     const use = await offcutUse(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'month', from: '2026-06-01', to: '2026-11-30' });
@@ -146,7 +172,13 @@ describe('the demo shop', () => {
     const old = await oldOffcuts(db, { shopId: first.shopId, timeZone: 'America/Chicago', months: 1, now: new Date('2026-12-03T12:00:00Z') });
     expect(old.map((o) => o.location)).toEqual([HISTORY_BIN]);
     // The rack's opening counts came before the past jobs, so its value never runs below zero in their months.
-    const value = await stockValueReport(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'month', from: '2026-06-01', to: '2026-11-30' });
+    const value = await stockValueReport(db, {
+      shopId: first.shopId,
+      timeZone: 'America/Chicago',
+      by: 'month',
+      from: '2026-06-01',
+      to: '2026-11-30',
+    });
     expect(value.points).toHaveLength(6);
     for (const p of value.points) expect(p.onHandCents, p.period).toBeGreaterThan(0);
     // Each past job was won by a quote accepted online with its deposit paid; one more was declined and one ran out.

@@ -51,7 +51,11 @@ describe('drawer schedules feed the cut list', () => {
   test('changing the schedule replaces its rows in place — never duplicated — and keeps them in step', async () => {
     const created = await call(schedulesRoute.POST, { id: fx.myJob.id }, { method: 'POST', body: { ...schedule(20), label: 'Desk drawers' } });
     const before = await rowsOf(created.json.id);
-    const updated = await call(scheduleRoute.PUT, { id: fx.myJob.id, scheduleId: created.json.id }, { method: 'PUT', body: { ...schedule(22), label: 'Desk drawers' } });
+    const updated = await call(
+      scheduleRoute.PUT,
+      { id: fx.myJob.id, scheduleId: created.json.id },
+      { method: 'PUT', body: { ...schedule(22), label: 'Desk drawers' } },
+    );
     expect(updated.status).toBe(200);
     const after = await rowsOf(created.json.id);
     expect(after).toHaveLength(before.length);
@@ -72,17 +76,25 @@ describe('drawer schedules feed the cut list', () => {
 
   test('an impossible box is refused field by field and writes nothing', async () => {
     const before = (await handle.db.select().from(drawerSchedules)).length;
-    const res = await call(schedulesRoute.POST, { id: fx.myJob.id }, {
-      method: 'POST',
-      body: { ...schedule(20), size: { from: 'box', widthMm: 20, heightMm: inches(5), depthMm: inches(20) } },
-    });
+    const res = await call(
+      schedulesRoute.POST,
+      { id: fx.myJob.id },
+      {
+        method: 'POST',
+        body: { ...schedule(20), size: { from: 'box', widthMm: 20, heightMm: inches(5), depthMm: inches(20) } },
+      },
+    );
     expect(res.status).toBe(422);
     expect(Object.keys(res.json.fields)).toContain('thickness.sideMm');
     expect((await handle.db.select().from(drawerSchedules)).length).toBe(before);
   });
 
   test('deleting a schedule removes its rows from the cut list and leaves the typed rows', async () => {
-    await call(partsRoute.POST, { id: fx.myJob.id }, { method: 'POST', body: { label: 'Typed shelf', quantity: 1, lengthMm: 500, widthMm: 300, thicknessMm: 18, material: 'MDF' } });
+    await call(
+      partsRoute.POST,
+      { id: fx.myJob.id },
+      { method: 'POST', body: { label: 'Typed shelf', quantity: 1, lengthMm: 500, widthMm: 300, thicknessMm: 18, material: 'MDF' } },
+    );
     const created = await call(schedulesRoute.POST, { id: fx.myJob.id }, { method: 'POST', body: { ...schedule(16), label: 'Bath drawers' } });
     expect((await call(scheduleRoute.DELETE, { id: fx.myJob.id, scheduleId: created.json.id }, { method: 'DELETE' })).status).toBe(200);
     expect(await rowsOf(created.json.id)).toHaveLength(0);
@@ -101,7 +113,12 @@ describe('drawer schedules feed the cut list', () => {
 });
 
 describe('setup cards', () => {
-  const card = { joint: 'lock-rabbet', stockThicknessMm: inches(0.5), fields: [{ key: 'bit-height', label: 'Bit height', value: inches(3 / 8), unit: 'mm' }], note: 'Test in scrap first.' };
+  const card = {
+    joint: 'lock-rabbet',
+    stockThicknessMm: inches(0.5),
+    fields: [{ key: 'bit-height', label: 'Bit height', value: inches(3 / 8), unit: 'mm' }],
+    note: 'Test in scrap first.',
+  };
 
   test('a card is saved, listed, changed and deleted; a second card for the same joint and thickness is refused', async () => {
     const created = await call(cardsRoute.POST, {}, { method: 'POST', body: card });
@@ -116,7 +133,11 @@ describe('setup cards', () => {
   });
 
   test('a card with a malformed field is refused with the field named', async () => {
-    const res = await call(cardsRoute.POST, {}, { method: 'POST', body: { ...card, fields: [{ key: 'Bit Height', label: '', value: 'high', unit: 'mm' }] } });
+    const res = await call(
+      cardsRoute.POST,
+      {},
+      { method: 'POST', body: { ...card, fields: [{ key: 'Bit Height', label: '', value: 'high', unit: 'mm' }] } },
+    );
     expect(res.status).toBe(422);
     expect(Object.keys(res.json.fields).sort()).toEqual(['fields.0.key', 'fields.0.label', 'fields.0.value']);
   });

@@ -34,9 +34,15 @@ describe('a job’s status follows its plans', () => {
     expect((await editJob(fx.estimator, j.id, { status: 'archived' })).status).toBe(200);
     expect(await jobStatus(fx.estimator, j.id)).toBe('archived');
 
-    const moves = await db.select().from(auditEvents).where(and(eq(auditEvents.entityId, j.id), eq(auditEvents.action, 'status')));
+    const moves = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.entityId, j.id), eq(auditEvents.action, 'status')));
     expect(moves.map((m) => m.data)).toEqual(
-      expect.arrayContaining([expect.objectContaining({ from: 'accepted', to: 'cutting' }), expect.objectContaining({ from: 'cutting', to: 'done' })]),
+      expect.arrayContaining([
+        expect.objectContaining({ from: 'accepted', to: 'cutting' }),
+        expect.objectContaining({ from: 'cutting', to: 'done' }),
+      ]),
     );
   });
 
@@ -53,7 +59,10 @@ describe('a job’s status follows its plans', () => {
   test('a cancelled plan does not leave the job in cutting: a accepted job goes back to accepted, a quote back to quoting', async () => {
     const accepted = (await job({ parts: cabinet, status: 'accepted', acceptedAt: new Date() })).job;
     const quote = (await job()).job;
-    for (const [j, before] of [[accepted, 'accepted'], [quote, 'quoting']] as const) {
+    for (const [j, before] of [
+      [accepted, 'accepted'],
+      [quote, 'quoting'],
+    ] as const) {
       const { id: planId } = await nestAndSave(fx.estimator, j.id);
       await release(fx.estimator, planId);
       expect(await jobStatus(fx.estimator, j.id)).toBe('cutting');
@@ -103,13 +112,30 @@ describe('a job’s status follows its plans', () => {
 describe('editing a job by hand', () => {
   test('the estimator changes name, customer, due date and notes; only the fields sent change, each audited from → to', async () => {
     const [ashby] = await db.insert(customers).values({ shopId: fx.mine.id, name: 'R. Ashby' }).returning();
-    const [j] = await db.insert(jobs).values({ shopId: fx.mine.id, name: 'Ashby pantry', customerId: ashby.id, dueDate: '2027-03-01', notes: 'Paint grade' }).returning();
+    const [j] = await db
+      .insert(jobs)
+      .values({ shopId: fx.mine.id, name: 'Ashby pantry', customerId: ashby.id, dueDate: '2027-03-01', notes: 'Paint grade' })
+      .returning();
     const renamed = await editJob(fx.estimator, j.id, { name: 'Ashby pantry and mudroom', dueDate: '2027-03-15' });
     expect(renamed.status).toBe(200);
-    expect(renamed.body).toMatchObject({ name: 'Ashby pantry and mudroom', customer: 'R. Ashby', dueDate: '2027-03-15', notes: 'Paint grade', status: 'quoting' });
+    expect(renamed.body).toMatchObject({
+      name: 'Ashby pantry and mudroom',
+      customer: 'R. Ashby',
+      dueDate: '2027-03-15',
+      notes: 'Paint grade',
+      status: 'quoting',
+    });
     // Changing the status alone leaves the rest as it was.
-    expect((await editJob(fx.estimator, j.id, { status: 'accepted' })).body).toMatchObject({ customer: 'R. Ashby', dueDate: '2027-03-15', notes: 'Paint grade', status: 'accepted' });
-    const edits = await db.select().from(auditEvents).where(and(eq(auditEvents.entityId, j.id), eq(auditEvents.action, 'update')));
+    expect((await editJob(fx.estimator, j.id, { status: 'accepted' })).body).toMatchObject({
+      customer: 'R. Ashby',
+      dueDate: '2027-03-15',
+      notes: 'Paint grade',
+      status: 'accepted',
+    });
+    const edits = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.entityId, j.id), eq(auditEvents.action, 'update')));
     expect(edits.map((e) => e.data)).toEqual([
       { changes: { name: { from: 'Ashby pantry', to: 'Ashby pantry and mudroom' }, dueDate: { from: '2027-03-01', to: '2027-03-15' } } },
       { changes: { status: { from: 'quoting', to: 'accepted' } } },
@@ -130,7 +156,9 @@ describe('editing a job by hand', () => {
     const [j] = await db.insert(jobs).values({ shopId: fx.mine.id, name: 'Override job' }).returning();
     const refused = await editJob(fx.estimator, j.id, { status: 'cutting' });
     expect(refused.status).toBe(403);
-    expect(refused.body.error).toBe('A quoting job cannot be set to Cutting by hand: cutting starts when a plan is released or a saw-order step is ticked. Only the owner can override that.');
+    expect(refused.body.error).toBe(
+      'A quoting job cannot be set to Cutting by hand: cutting starts when a plan is released or a saw-order step is ticked. Only the owner can override that.',
+    );
     expect((await editJob(fx.estimator, j.id, { status: 'done' })).status).toBe(403);
     expect(await jobStatus(fx.estimator, j.id)).toBe('quoting');
     for (const status of ['cutting', 'done', 'quoting', 'archived', 'accepted'] as const) {
@@ -160,10 +188,16 @@ describe('editing a job by hand', () => {
   test('a new job is a quote or already accepted, never cutting: that follows its plans', async () => {
     const noParams = { params: Promise.resolve({}) };
     const { request } = await import('../support/fixtures');
-    const accepted = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', user: fx.estimator, body: { name: 'Agreed job', status: 'accepted' } }), noParams);
+    const accepted = await jobsRoute.POST(
+      await request('/api/jobs', { method: 'POST', user: fx.estimator, body: { name: 'Agreed job', status: 'accepted' } }),
+      noParams,
+    );
     expect(accepted.status).toBe(201);
     expect(await accepted.json()).toMatchObject({ status: 'accepted', acceptedAt: expect.any(String) });
-    const cutting = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', user: fx.estimator, body: { name: 'Early job', status: 'cutting' } }), noParams);
+    const cutting = await jobsRoute.POST(
+      await request('/api/jobs', { method: 'POST', user: fx.estimator, body: { name: 'Early job', status: 'cutting' } }),
+      noParams,
+    );
     expect(cutting.status).toBe(422);
     expect((await cutting.json()).fields.status).toEqual(['A new job is quoting or accepted; cutting and done follow its plans.']);
   });
@@ -195,7 +229,8 @@ describe('deleting or archiving a job', () => {
 
   test('archived jobs leave the default jobs list, and the Archived and Any filters list them, marked archived', async () => {
     const [j] = await db.insert(jobs).values({ shopId: fx.mine.id, name: 'Filed away', status: 'archived' }).returning();
-    const listed = async (status: string) => (await call(jobsRoute.GET, `/api/jobs?q=Filed+away${status}`, '', fx.estimator)).body.jobs.find((x: { id: string }) => x.id === j.id);
+    const listed = async (status: string) =>
+      (await call(jobsRoute.GET, `/api/jobs?q=Filed+away${status}`, '', fx.estimator)).body.jobs.find((x: { id: string }) => x.id === j.id);
     expect(await listed('')).toBeUndefined();
     expect(await listed('&status=archived')).toMatchObject({ status: 'archived' });
     expect(await listed('&status=all')).toMatchObject({ status: 'archived' });

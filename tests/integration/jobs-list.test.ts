@@ -23,7 +23,13 @@ async function list(query: string, user: TestUser = fx.estimator): Promise<JobLi
 
 /** A job of our own with rows in two materials, and one with none. */
 async function seedJobs() {
-  const [ada, bo] = await handle.db.insert(customers).values([{ shopId: fx.mine.id, name: 'Ada Ash' }, { shopId: fx.mine.id, name: 'Bo Birch' }]).returning();
+  const [ada, bo] = await handle.db
+    .insert(customers)
+    .values([
+      { shopId: fx.mine.id, name: 'Ada Ash' },
+      { shopId: fx.mine.id, name: 'Bo Birch' },
+    ])
+    .returning();
   const [withParts, empty] = await handle.db
     .insert(jobs)
     .values([
@@ -44,7 +50,13 @@ async function seedJobs() {
  * one without a due date, one without a customer, part counts that are not the name order.
  */
 async function seedSorters() {
-  const [cy, di] = await handle.db.insert(customers).values([{ shopId: fx.mine.id, name: 'cy Cherry' }, { shopId: fx.mine.id, name: 'Di Douglas' }]).returning();
+  const [cy, di] = await handle.db
+    .insert(customers)
+    .values([
+      { shopId: fx.mine.id, name: 'cy Cherry' },
+      { shopId: fx.mine.id, name: 'Di Douglas' },
+    ])
+    .returning();
   const at = (day: number) => new Date(Date.UTC(2026, 10, day, 15));
   const rows = await handle.db
     .insert(jobs)
@@ -57,14 +69,27 @@ async function seedSorters() {
     ])
     .returning();
   const byName = Object.fromEntries(rows.map((r) => [r.name.toLowerCase().split(' ')[1], r]));
-  const piece = (jobId: string, quantity: number) => ({ shopId: fx.mine.id, jobId, label: 'Panel', quantity, lengthMm: 500, widthMm: 300, thicknessMm: 18, material: 'Birch ply' });
+  const piece = (jobId: string, quantity: number) => ({
+    shopId: fx.mine.id,
+    jobId,
+    label: 'Panel',
+    quantity,
+    lengthMm: 500,
+    widthMm: 300,
+    thicknessMm: 18,
+    material: 'Birch ply',
+  });
   // Pieces: alpha 2, bravo 7 (3 + 4), charlie 5, delta 0, echo 1.
-  await handle.db.insert(parts).values([piece(byName.alpha.id, 2), piece(byName.bravo.id, 3), piece(byName.bravo.id, 4), piece(byName.charlie.id, 5), piece(byName.echo.id, 1)]);
+  await handle.db
+    .insert(parts)
+    .values([piece(byName.alpha.id, 2), piece(byName.bravo.id, 3), piece(byName.bravo.id, 4), piece(byName.charlie.id, 5), piece(byName.echo.id, 1)]);
 }
 
 /** 60 jobs made in one statement, so they share one `updated_at`: only the tie-break keeps pages apart. */
 async function seedMany() {
-  await handle.db.insert(jobs).values(Array.from({ length: 60 }, (_, i) => ({ shopId: fx.mine.id, name: `Batch cabinet ${String(i + 1).padStart(2, '0')}` })));
+  await handle.db
+    .insert(jobs)
+    .values(Array.from({ length: 60 }, (_, i) => ({ shopId: fx.mine.id, name: `Batch cabinet ${String(i + 1).padStart(2, '0')}` })));
 }
 
 let seeded: Awaited<ReturnType<typeof seedJobs>>;
@@ -84,7 +109,9 @@ describe('the jobs list', () => {
     expect([...counted.materials].sort()).toEqual(['Maple ply', 'White oak']);
     expect(page.jobs.find((j) => j.id === empty.id)).toMatchObject({ partCount: 0, materials: [] });
 
-    const one: JobSummary = await (await jobRoute.GET(await request(`/api/jobs/${withParts.id}`, { user: fx.estimator }), { params: Promise.resolve({ id: withParts.id }) })).json();
+    const one: JobSummary = await (
+      await jobRoute.GET(await request(`/api/jobs/${withParts.id}`, { user: fx.estimator }), { params: Promise.resolve({ id: withParts.id }) })
+    ).json();
     expect(one).toMatchObject({ partCount: 9 });
   });
 
@@ -136,10 +163,16 @@ describe('the jobs list', () => {
   test('pages: 60 jobs at 25 a page are 25 + 25 + 10, each exactly once, and a page past the end is empty with the count', async () => {
     const pages = await Promise.all([1, 2, 3].map((p) => list(`?q=batch%20cabinet&page=${p}`)));
     expect(pages.map((p) => p.jobs.length)).toEqual([25, 25, 10]);
-    expect(pages.map((p) => [p.page, p.pageSize, p.total, p.pageCount])).toEqual([[1, 25, 60, 3], [2, 25, 60, 3], [3, 25, 60, 3]]);
+    expect(pages.map((p) => [p.page, p.pageSize, p.total, p.pageCount])).toEqual([
+      [1, 25, 60, 3],
+      [2, 25, 60, 3],
+      [3, 25, 60, 3],
+    ]);
     const ids = pages.flatMap((p) => p.jobs.map((j) => j.id));
     expect(new Set(ids).size).toBe(60);
-    expect(pages.flatMap((p) => p.jobs.map((j) => j.name)).sort()).toEqual(Array.from({ length: 60 }, (_, i) => `Batch cabinet ${String(i + 1).padStart(2, '0')}`));
+    expect(pages.flatMap((p) => p.jobs.map((j) => j.name)).sort()).toEqual(
+      Array.from({ length: 60 }, (_, i) => `Batch cabinet ${String(i + 1).padStart(2, '0')}`),
+    );
     const past = await list('?q=batch%20cabinet&page=4');
     expect(past).toMatchObject({ jobs: [], total: 60, page: 4, pageCount: 3 });
     const big = await list('?q=batch%20cabinet&size=50&page=2&sort=name.asc');
@@ -230,7 +263,9 @@ describe("a job's pieces and materials, kept on the job by the trigger on parts"
     // A rolled-back insert leaves the figures as they were.
     await handle.db
       .transaction(async (tx) => {
-        await tx.insert(parts).values({ shopId: fx.mine.id, jobId: b.id, label: 'Leg', quantity: 4, lengthMm: 450, widthMm: 45, thicknessMm: 45, material: 'Ash' });
+        await tx
+          .insert(parts)
+          .values({ shopId: fx.mine.id, jobId: b.id, label: 'Leg', quantity: 4, lengthMm: 450, widthMm: 45, thicknessMm: 45, material: 'Ash' });
         tx.rollback();
       })
       .catch(() => undefined);

@@ -71,7 +71,9 @@ describe(`the outbox (${process.env.TEST_DATABASE_URL ? 'PostgreSQL' : 'PGlite'}
       db.transaction((tx) => enqueueMail(tx, { shopId: fx.mine.id, kind: 'invite', to: 'not an address', subject: 'x', text: 'x' })),
     ).rejects.toThrow('The recipient’s e-mail address is not valid.');
     await expect(
-      db.transaction((tx) => enqueueMail(tx, { shopId: fx.mine.id, kind: 'invite', to: 'a@example.com', subject: 'Two\r\nBcc: x@example.com', text: 'x' })),
+      db.transaction((tx) =>
+        enqueueMail(tx, { shopId: fx.mine.id, kind: 'invite', to: 'a@example.com', subject: 'Two\r\nBcc: x@example.com', text: 'x' }),
+      ),
     ).rejects.toThrow('A subject is one line.');
   });
 
@@ -180,7 +182,10 @@ describe(`the outbox (${process.env.TEST_DATABASE_URL ? 'PostgreSQL' : 'PGlite'}
     await Promise.all([a.stop(), b.stop()]);
     const caught = await listCaughtMail(dir, 1000);
     for (const m of queued) {
-      expect(caught.filter((c) => c.messageId === m.messageId), m.subject).toHaveLength(1);
+      expect(
+        caught.filter((c) => c.messageId === m.messageId),
+        m.subject,
+      ).toHaveLength(1);
       expect((await row(m.id)).status).toBe('sent');
     }
     expect(sentA + sentB).toBeGreaterThanOrEqual(queued.length);
@@ -190,7 +195,12 @@ describe(`the outbox (${process.env.TEST_DATABASE_URL ? 'PostgreSQL' : 'PGlite'}
     const m = await queue();
     const clock = manualClock();
     class Crash extends Error {}
-    const crashing = sender(clock, { claimMs: 60_000, afterSend: () => { throw new Crash('the server stopped'); } });
+    const crashing = sender(clock, {
+      claimMs: 60_000,
+      afterSend: () => {
+        throw new Crash('the server stopped');
+      },
+    });
     await expect(crashing.runOnce()).rejects.toBeInstanceOf(Crash);
     await crashing.stop();
     expect((await row(m.id)).status).toBe('sending');
@@ -211,7 +221,12 @@ describe(`the outbox (${process.env.TEST_DATABASE_URL ? 'PostgreSQL' : 'PGlite'}
 
     // A message whose resend is also cut short is not sent a third time: it is failed as uncertain.
     const n = await queue();
-    const crashTwice = sender(clock, { claimMs: 60_000, afterSend: () => { throw new Crash('stopped again'); } });
+    const crashTwice = sender(clock, {
+      claimMs: 60_000,
+      afterSend: () => {
+        throw new Crash('stopped again');
+      },
+    });
     await expect(crashTwice.runOnce()).rejects.toBeInstanceOf(Crash);
     clock.advance(60_000);
     await expect(crashTwice.runOnce()).rejects.toBeInstanceOf(Crash);

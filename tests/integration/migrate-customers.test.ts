@@ -19,7 +19,9 @@ beforeAll(async () => {
   handle = await createTestDatabase({ migrate: false });
   older = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-migrations-'));
   journal = JSON.parse(fs.readFileSync(path.join(MIGRATIONS_FOLDER, 'meta/_journal.json'), 'utf8'));
-  index = journal.entries.findIndex((e) => fs.readFileSync(path.join(MIGRATIONS_FOLDER, `${e.tag}.sql`), 'utf8').includes('CREATE TABLE "customers"'));
+  index = journal.entries.findIndex((e) =>
+    fs.readFileSync(path.join(MIGRATIONS_FOLDER, `${e.tag}.sql`), 'utf8').includes('CREATE TABLE "customers"'),
+  );
   if (index < 1) throw new Error('No migration creates customers.');
   fs.mkdirSync(path.join(older, 'meta'));
   fs.writeFileSync(path.join(older, 'meta/_journal.json'), JSON.stringify({ ...journal, entries: journal.entries.slice(0, index) }));
@@ -31,14 +33,15 @@ afterAll(async () => {
   await handle?.close();
 });
 
-const rows = async <T,>(query: ReturnType<typeof sql>) => ((await handle.db.execute(query)) as unknown as { rows: T[] }).rows;
+const rows = async <T>(query: ReturnType<typeof sql>) => ((await handle.db.execute(query)) as unknown as { rows: T[] }).rows;
 
 describe('the customers migration on jobs with free-text customers', () => {
   test('one customer per distinct name of a shop (spaces and case aside); each job points at its own; blank names get none', async () => {
     const shop = async (name: string) => (await rows<{ id: string }>(sql`insert into shops (name) values (${name}) returning id`))[0].id;
     const a = await shop('Old shop A');
     const b = await shop('Old shop B');
-    const job = async (shopId: string, name: string, customer: string) => (await rows<{ id: string }>(sql`insert into jobs (shop_id, name, customer) values (${shopId}, ${name}, ${customer}) returning id`))[0].id;
+    const job = async (shopId: string, name: string, customer: string) =>
+      (await rows<{ id: string }>(sql`insert into jobs (shop_id, name, customer) values (${shopId}, ${name}, ${customer}) returning id`))[0].id;
     const kitchen = await job(a, 'Kitchen', 'Priya Hollis');
     const pantry = await job(a, 'Pantry', '  priya   hollis ');
     const vanity = await job(a, 'Vanity', 'Gail Pemberton');
@@ -48,9 +51,16 @@ describe('the customers migration on jobs with free-text customers', () => {
     await runMigrations(handle, MIGRATIONS_FOLDER);
 
     const customers = await rows<{ id: string; shop_id: string; name: string }>(sql`select id, shop_id, name from customers order by shop_id, name`);
-    expect(customers.filter((c) => c.shop_id === a).map((c) => c.name).sort()).toEqual(['Gail Pemberton', 'Priya Hollis']);
+    expect(
+      customers
+        .filter((c) => c.shop_id === a)
+        .map((c) => c.name)
+        .sort(),
+    ).toEqual(['Gail Pemberton', 'Priya Hollis']);
     expect(customers.filter((c) => c.shop_id === b).map((c) => c.name)).toEqual(['Priya Hollis']);
-    const jobs = new Map((await rows<{ id: string; customer_id: string | null }>(sql`select id, customer_id from jobs`)).map((j) => [j.id, j.customer_id]));
+    const jobs = new Map(
+      (await rows<{ id: string; customer_id: string | null }>(sql`select id, customer_id from jobs`)).map((j) => [j.id, j.customer_id]),
+    );
     const named = (shopId: string, name: string) => customers.find((c) => c.shop_id === shopId && c.name === name)!.id;
     expect(jobs.get(kitchen)).toBe(named(a, 'Priya Hollis'));
     expect(jobs.get(pantry)).toBe(named(a, 'Priya Hollis'));

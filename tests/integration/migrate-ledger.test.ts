@@ -19,7 +19,9 @@ beforeAll(async () => {
   handle = await createTestDatabase({ migrate: false });
   older = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-migrations-'));
   const journal = JSON.parse(fs.readFileSync(path.join(MIGRATIONS_FOLDER, 'meta/_journal.json'), 'utf8'));
-  const index = journal.entries.findIndex((e: { tag: string }) => fs.readFileSync(path.join(MIGRATIONS_FOLDER, `${e.tag}.sql`), 'utf8').includes('ADD COLUMN "reserved_change"'));
+  const index = journal.entries.findIndex((e: { tag: string }) =>
+    fs.readFileSync(path.join(MIGRATIONS_FOLDER, `${e.tag}.sql`), 'utf8').includes('ADD COLUMN "reserved_change"'),
+  );
   if (index < 1) throw new Error('No migration adds stock_movements.reserved_change.');
   fs.mkdirSync(path.join(older, 'meta'));
   fs.writeFileSync(path.join(older, 'meta/_journal.json'), JSON.stringify({ ...journal, entries: journal.entries.slice(0, index) }));
@@ -31,21 +33,32 @@ afterAll(async () => {
   await handle?.close();
 });
 
-const rows = async <T,>(query: ReturnType<typeof sql>) => ((await handle.db.execute(query)) as unknown as { rows: T[] }).rows;
+const rows = async <T>(query: ReturnType<typeof sql>) => ((await handle.db.execute(query)) as unknown as { rows: T[] }).rows;
 
 describe('the ledger migration on a ledger written the old way', () => {
   test('keeps every count, merges each finish’s release-and-cut pair into one cut, and moves job statuses along', async () => {
     const db = handle.db;
     const [shop] = await rows<{ id: string }>(sql`insert into shops (name) values ('Old ledger shop') returning id`);
-    const job = async (name: string, status: string) => (await rows<{ id: string }>(sql`insert into jobs (shop_id, name, status) values (${shop.id}, ${name}, ${status}::job_status) returning id`))[0].id;
+    const job = async (name: string, status: string) =>
+      (await rows<{ id: string }>(sql`insert into jobs (shop_id, name, status) values (${shop.id}, ${name}, ${status}::job_status) returning id`))[0]
+        .id;
     const [released, finished] = [await job('Released job', 'won'), await job('Finished job', 'quoting')];
     await job('Plain quote', 'quoting');
-    const plan = async (jobId: string, status: string) => (await rows<{ id: string }>(sql`insert into plans (shop_id, job_id, name, status, request, document) values (${shop.id}, ${jobId}, 'P', ${status}::plan_status, '{}', '{}') returning id`))[0].id;
+    const plan = async (jobId: string, status: string) =>
+      (
+        await rows<{ id: string }>(
+          sql`insert into plans (shop_id, job_id, name, status, request, document) values (${shop.id}, ${jobId}, 'P', ${status}::plan_status, '{}', '{}') returning id`,
+        )
+      )[0].id;
     const [open, done, cancelled] = [await plan(released, 'released'), await plan(finished, 'done'), await plan(finished, 'cancelled')];
     // Five sheets: 2 reserved and cut by the done plan, 1 reserved by the open plan, 1 reserved then given back.
-    const [item] = await rows<{ id: string }>(sql`insert into stock_items (shop_id, kind, material, nominal_thickness, thickness_mm, length_mm, width_mm, on_hand, reserved) values (${shop.id}, 'sheet', 'Old ply', '18 mm', 18, 2440, 1220, 3, 1) returning id`);
+    const [item] = await rows<{ id: string }>(
+      sql`insert into stock_items (shop_id, kind, material, nominal_thickness, thickness_mm, length_mm, width_mm, on_hand, reserved) values (${shop.id}, 'sheet', 'Old ply', '18 mm', 18, 2440, 1220, 3, 1) returning id`,
+    );
     const move = (kind: string, quantity: number, planId: string | null, reason: string, at: string) =>
-      db.execute(sql`insert into stock_movements (shop_id, kind, stock_item_id, quantity, plan_id, reason, created_at) values (${shop.id}, ${kind}::movement_kind, ${item.id}, ${quantity}, ${planId}, ${reason}, ${at}::timestamptz)`);
+      db.execute(
+        sql`insert into stock_movements (shop_id, kind, stock_item_id, quantity, plan_id, reason, created_at) values (${shop.id}, ${kind}::movement_kind, ${item.id}, ${quantity}, ${planId}, ${reason}, ${at}::timestamptz)`,
+      );
     await move('received', 5, null, 'Opening count', '2026-10-01T08:00:00Z');
     await move('reserved', 2, done, 'Reserved for plan “P”', '2026-10-02T08:00:00Z');
     await move('released', -2, done, 'Cut for plan “P”', '2026-10-03T08:00:00Z');
@@ -56,7 +69,9 @@ describe('the ledger migration on a ledger written the old way', () => {
 
     await runMigrations(handle);
 
-    const ledger = await rows<{ kind: string; quantity: number; reserved_change: number }>(sql`select kind, quantity, reserved_change from stock_movements where shop_id = ${shop.id} order by created_at`);
+    const ledger = await rows<{ kind: string; quantity: number; reserved_change: number }>(
+      sql`select kind, quantity, reserved_change from stock_movements where shop_id = ${shop.id} order by created_at`,
+    );
     expect(ledger.map((m) => [m.kind, m.quantity, m.reserved_change])).toEqual([
       ['received', 5, 0],
       ['reserved', 0, 2],
@@ -67,7 +82,9 @@ describe('the ledger migration on a ledger written the old way', () => {
     ]);
     expect(await ledgerMismatches(db, shop.id)).toEqual([]);
 
-    const jobs = await rows<{ name: string; status: string; accepted_at: Date | null }>(sql`select name, status, accepted_at from jobs where shop_id = ${shop.id} order by name`);
+    const jobs = await rows<{ name: string; status: string; accepted_at: Date | null }>(
+      sql`select name, status, accepted_at from jobs where shop_id = ${shop.id} order by name`,
+    );
     expect(jobs.map((j) => [j.name, j.status, j.accepted_at !== null])).toEqual([
       ['Finished job', 'done', false],
       ['Plain quote', 'quoting', false],

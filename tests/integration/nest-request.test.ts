@@ -37,7 +37,16 @@ describe('a nesting request built from the database', () => {
     const length = nominal === '8/4' ? inches(120) : inches(96);
     const [board] = await handle.db
       .insert(stockItems)
-      .values({ shopId, kind: 'board', material: 'Cherry', nominalThickness: nominal, thicknessMm: inches(1), lengthMm: length, widthMm: width, costCents: perBf })
+      .values({
+        shopId,
+        kind: 'board',
+        material: 'Cherry',
+        nominalThickness: nominal,
+        thicknessMm: inches(1),
+        lengthMm: length,
+        widthMm: width,
+        costCents: perBf,
+      })
       .returning();
     expect(costEachCents(board)).toBe(expected);
   });

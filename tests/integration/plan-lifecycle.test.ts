@@ -20,11 +20,23 @@ useTwoShopDatabase((app) => ({ handle, db, fx } = app));
 
 /** A draft plan nested by the real engine (no time budget: the same plan every run), stored as the Nest screen would. */
 async function draftPlan(request: NestRequestInput, name = 'Test plan') {
-  const parsed = nestRequestSchema.parse({ ...request, settings: { minOffcutLength: 300, minOffcutWidth: 100, ...request.settings, timeBudgetMs: 0 } });
+  const parsed = nestRequestSchema.parse({
+    ...request,
+    settings: { minOffcutLength: 300, minOffcutWidth: 100, ...request.settings, timeBudgetMs: 0 },
+  });
   const document = await optimize(parsed);
   const [row] = await db
     .insert(plans)
-    .values({ shopId: fx.mine.id, jobId: fx.myJob.id, name, status: 'draft', request: parsed, document, yieldRatio: document.totals?.yield ?? null, costCents: Math.round(document.totals?.cost ?? 0) })
+    .values({
+      shopId: fx.mine.id,
+      jobId: fx.myJob.id,
+      name,
+      status: 'draft',
+      request: parsed,
+      document,
+      yieldRatio: document.totals?.yield ?? null,
+      costCents: Math.round(document.totals?.cost ?? 0),
+    })
     .returning();
   return { ...row, document };
 }
@@ -32,10 +44,24 @@ async function draftPlan(request: NestRequestInput, name = 'Test plan') {
 async function sheet(values: Partial<typeof stockItems.$inferInsert> = {}) {
   const [item] = await db
     .insert(stockItems)
-    .values({ shopId: fx.mine.id, kind: 'sheet', material: 'Birch ply', nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand: 1, costCents: 6000, ...values })
+    .values({
+      shopId: fx.mine.id,
+      kind: 'sheet',
+      material: 'Birch ply',
+      nominalThickness: '18 mm',
+      thicknessMm: 18,
+      lengthMm: 2440,
+      widthMm: 1220,
+      onHand: 1,
+      costCents: 6000,
+      ...values,
+    })
     .returning();
   // The opening count goes through the ledger like any receipt.
-  if (item.onHand) await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'received', stockItemId: item.id, quantity: item.onHand, reason: 'Opening count' });
+  if (item.onHand)
+    await db
+      .insert(stockMovements)
+      .values({ shopId: fx.mine.id, kind: 'received', stockItemId: item.id, quantity: item.onHand, reason: 'Opening count' });
   return item;
 }
 
@@ -51,7 +77,16 @@ const asStock = (item: typeof stockItems.$inferSelect) => ({
   costEach: item.costCents,
 });
 
-const part = (id: string, length: number, width: number, quantity = 1, material = 'Birch ply', thickness = 18) => ({ id, label: id, quantity, length, width, thickness, material, grain: 'any' as const });
+const part = (id: string, length: number, width: number, quantity = 1, material = 'Birch ply', thickness = 18) => ({
+  id,
+  label: id,
+  quantity,
+  length,
+  width,
+  thickness,
+  material,
+  grain: 'any' as const,
+});
 
 async function expectLedgerMatchesCounts() {
   expect(await ledgerMismatches(db, fx.mine.id)).toEqual([]);
@@ -64,9 +99,12 @@ describe('releasing plans that race for the same stock', () => {
     const last = await sheet({ material: 'Race ply', onHand: 3, reserved: 0 });
     // Two sheets already belong to someone else: one is free.
     await db.update(stockItems).set({ reserved: 2 }).where(eq(stockItems.id, last.id));
-    await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'reserved', stockItemId: last.id, quantity: 0, reservedChange: 2, reason: 'Earlier plan' });
+    await db
+      .insert(stockMovements)
+      .values({ shopId: fx.mine.id, kind: 'reserved', stockItemId: last.id, quantity: 0, reservedChange: 2, reason: 'Earlier plan' });
     const drafts = [];
-    for (let i = 0; i < 8; i++) drafts.push(await draftPlan({ parts: [part(`race-${i}`, 2000, 1000, 1, 'Race ply')], stock: [{ ...asStock(last), count: 1 }] }, `Race ${i}`));
+    for (let i = 0; i < 8; i++)
+      drafts.push(await draftPlan({ parts: [part(`race-${i}`, 2000, 1000, 1, 'Race ply')], stock: [{ ...asStock(last), count: 1 }] }, `Race ${i}`));
 
     const results = await Promise.allSettled(drafts.map((p) => releasePlan(db, { ...who(), planId: p.id })));
     const won = results.filter((r) => r.status === 'fulfilled');
@@ -79,15 +117,22 @@ describe('releasing plans that race for the same stock', () => {
     }
     const [after] = await db.select().from(stockItems).where(eq(stockItems.id, last.id));
     expect(after).toMatchObject({ onHand: 3, reserved: 3 });
-    const statuses = (await db.select({ status: plans.status }).from(plans).where(eq(plans.jobId, fx.myJob.id))).filter((p) => p.status === 'released');
+    const statuses = (await db.select({ status: plans.status }).from(plans).where(eq(plans.jobId, fx.myJob.id))).filter(
+      (p) => p.status === 'released',
+    );
     expect(statuses).toHaveLength(1);
     await expectLedgerMatchesCounts();
   });
 
   test('six plans racing for the same offcut: one wins, the others are told it is gone', async () => {
-    const [o] = await db.insert(offcuts).values({ shopId: fx.mine.id, material: 'Offcut ply', thicknessMm: 18, lengthMm: 800, widthMm: 400, costCents: 500 }).returning();
+    const [o] = await db
+      .insert(offcuts)
+      .values({ shopId: fx.mine.id, material: 'Offcut ply', thicknessMm: 18, lengthMm: 800, widthMm: 400, costCents: 500 })
+      .returning();
     await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'offcut-created', offcutId: o.id, quantity: 1, reason: 'Opening count' });
-    const stock = [{ id: stockRef.offcut(o.id), kind: 'offcut' as const, length: 800, width: 400, thickness: 18, material: 'Offcut ply', count: 1, costEach: 500 }];
+    const stock = [
+      { id: stockRef.offcut(o.id), kind: 'offcut' as const, length: 800, width: 400, thickness: 18, material: 'Offcut ply', count: 1, costEach: 500 },
+    ];
     const drafts = [];
     for (let i = 0; i < 6; i++) drafts.push(await draftPlan({ parts: [part(`oc-${i}`, 500, 300, 1, 'Offcut ply')], stock }));
     const results = await Promise.allSettled(drafts.map((p) => releasePlan(db, { ...who(), planId: p.id })));
@@ -112,7 +157,10 @@ describe('releasing plans that race for the same stock', () => {
   test('a plan whose pieces are partly gone reserves nothing at all', async () => {
     const a = await sheet({ material: 'Part ply A', onHand: 2 });
     const b = await sheet({ material: 'Part ply B', onHand: 2 });
-    const plan = await draftPlan({ parts: [part('pa', 2000, 1000, 1, 'Part ply A'), part('pb', 2000, 1000, 1, 'Part ply B')], stock: [asStock(a), asStock(b)] });
+    const plan = await draftPlan({
+      parts: [part('pa', 2000, 1000, 1, 'Part ply A'), part('pb', 2000, 1000, 1, 'Part ply B')],
+      stock: [asStock(a), asStock(b)],
+    });
     await db.update(stockItems).set({ onHand: 0 }).where(eq(stockItems.id, b.id)); // counted and found none
     await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'adjusted', stockItemId: b.id, quantity: -2, reason: 'Counted' });
     await expect(releasePlan(db, { ...who(), planId: plan.id })).rejects.toBeInstanceOf(StockShortage);
@@ -133,14 +181,19 @@ describe('a plan from release to done', () => {
     expect((await db.select().from(stockItems).where(eq(stockItems.id, item.id)))[0]).toMatchObject({ onHand: 5, reserved: pieces });
     expect(await db.select().from(planPieces).where(eq(planPieces.planId, plan.id))).toHaveLength(pieces);
 
-    const expected = plan.document.pieces.flatMap((p, pi) => (p.offcuts ?? []).map((r, i) => ({ pi, i, r }))).filter(({ r }) => isKeepableOffcut(r, { minLength: 300, minWidth: 100 }));
+    const expected = plan.document.pieces
+      .flatMap((p, pi) => (p.offcuts ?? []).map((r, i) => ({ pi, i, r })))
+      .filter(({ r }) => isKeepableOffcut(r, { minLength: 300, minWidth: 100 }));
     expect(expected.length).toBeGreaterThan(0);
     const [firstPlaced] = plan.document.pieces[0].placements;
     const result = await finishPlan(db, {
       shopId: fx.mine.id,
       userId: fx.cutter.id,
       planId: plan.id,
-      body: { offcuts: expected.map(({ pi, i }) => ({ piece: pi, index: i, keep: true, location: 'Bin 7' })), damaged: [{ piece: 0, partId: firstPlaced.partId, instance: firstPlaced.instance }] },
+      body: {
+        offcuts: expected.map(({ pi, i }) => ({ piece: pi, index: i, keep: true, location: 'Bin 7' })),
+        damaged: [{ piece: 0, partId: firstPlaced.partId, instance: firstPlaced.instance }],
+      },
     });
 
     expect((await db.select().from(stockItems).where(eq(stockItems.id, item.id)))[0]).toMatchObject({ onHand: 5 - pieces, reserved: 0 });
@@ -150,7 +203,9 @@ describe('a plan from release to done', () => {
     expect(rack.map((o) => o.lengthMm * o.widthMm).sort()).toEqual(expected.map(({ r }) => r.w * r.h).sort());
 
     // One row per physical change: the reservation, then the cut that ends it (no separate release).
-    const kinds = (await db.select().from(stockMovements).where(eq(stockMovements.planId, plan.id))).map((m) => `${m.kind} ${m.quantity}/${m.reservedChange}`).sort();
+    const kinds = (await db.select().from(stockMovements).where(eq(stockMovements.planId, plan.id)))
+      .map((m) => `${m.kind} ${m.quantity}/${m.reservedChange}`)
+      .sort();
     expect(kinds).toEqual([`consumed -${pieces}/-${pieces}`, ...expected.map(() => 'offcut-created 1/0'), `reserved 0/${pieces}`].sort());
 
     const totals = plan.document.totals!;
@@ -159,7 +214,11 @@ describe('a plan from release to done', () => {
     const [saved] = await db.select().from(plans).where(eq(plans.id, plan.id));
     expect(saved).toMatchObject({ status: 'done', costCents: Math.round(totals.cost), finishedBy: fx.cutter.id });
     expect(saved.wasteRatio).toBeCloseTo(result.wasteRatio, 9);
-    const damaged = await db.select().from(placements).innerJoin(planPieces, eq(planPieces.id, placements.planPieceId)).where(and(eq(planPieces.planId, plan.id), eq(placements.damaged, true)));
+    const damaged = await db
+      .select()
+      .from(placements)
+      .innerJoin(planPieces, eq(planPieces.id, placements.planPieceId))
+      .where(and(eq(planPieces.planId, plan.id), eq(placements.damaged, true)));
     expect(damaged).toHaveLength(1);
     await expectLedgerMatchesCounts();
   });
@@ -181,16 +240,24 @@ describe('a plan from release to done', () => {
 
   test('cancel gives back every reservation: stock is as it was before release', async () => {
     const item = await sheet({ material: 'Cancel ply', onHand: 3 });
-    const [o] = await db.insert(offcuts).values({ shopId: fx.mine.id, material: 'Cancel ply', thicknessMm: 18, lengthMm: 900, widthMm: 500 }).returning();
+    const [o] = await db
+      .insert(offcuts)
+      .values({ shopId: fx.mine.id, material: 'Cancel ply', thicknessMm: 18, lengthMm: 900, widthMm: 500 })
+      .returning();
     await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'offcut-created', offcutId: o.id, quantity: 1, reason: 'Opening count' });
-    const plan = await draftPlan({ parts: [part('c1', 2000, 1000, 2, 'Cancel ply'), part('c2', 800, 450, 1, 'Cancel ply')], stock: [asStock(item), { id: stockRef.offcut(o.id), kind: 'offcut', length: 900, width: 500, thickness: 18, material: 'Cancel ply', count: 1 }] });
+    const plan = await draftPlan({
+      parts: [part('c1', 2000, 1000, 2, 'Cancel ply'), part('c2', 800, 450, 1, 'Cancel ply')],
+      stock: [asStock(item), { id: stockRef.offcut(o.id), kind: 'offcut', length: 900, width: 500, thickness: 18, material: 'Cancel ply', count: 1 }],
+    });
     const before = await listStock(db, fx.mine.id, { material: 'Cancel ply' });
     await releasePlan(db, { ...who(), planId: plan.id });
     expect((await db.select().from(offcuts).where(eq(offcuts.id, o.id)))[0].status).toBe('reserved');
     await cancelPlan(db, { ...who(), planId: plan.id });
     expect(await listStock(db, fx.mine.id, { material: 'Cancel ply' })).toEqual(before);
     expect((await db.select().from(offcuts).where(eq(offcuts.id, o.id)))[0].status).toBe('available');
-    await expect(finishPlan(db, { shopId: fx.mine.id, userId: fx.cutter.id, planId: plan.id, body: { offcuts: [], damaged: [] } })).rejects.toMatchObject({ status: 409 });
+    await expect(
+      finishPlan(db, { shopId: fx.mine.id, userId: fx.cutter.id, planId: plan.id, body: { offcuts: [], damaged: [] } }),
+    ).rejects.toMatchObject({ status: 409 });
     await expectLedgerMatchesCounts();
   });
 
@@ -212,7 +279,9 @@ describe('a plan from release to done', () => {
   test("another shop can neither release this shop's plan nor see its stock", async () => {
     const item = await sheet({ material: 'Private ply', onHand: 2 });
     const plan = await draftPlan({ parts: [part('p', 1000, 500, 1, 'Private ply')], stock: [asStock(item)] });
-    await expect(releasePlan(db, { shopId: fx.theirs.id, userId: fx.otherOwner.id, planId: plan.id })).rejects.toSatisfy((e) => e instanceof PlanStateError && e.status === 404);
+    await expect(releasePlan(db, { shopId: fx.theirs.id, userId: fx.otherOwner.id, planId: plan.id })).rejects.toSatisfy(
+      (e) => e instanceof PlanStateError && e.status === 404,
+    );
     expect(await listStock(db, fx.theirs.id)).toEqual([]);
     expect(await listOffcuts(db, fx.theirs.id)).toEqual([]);
   });
@@ -226,7 +295,9 @@ describe('the plan routes', () => {
     const item = await sheet({ material: 'Gone ply', onHand: 1 });
     const plan = await draftPlan({ parts: [part('g', 2000, 1000, 1, 'Gone ply')], stock: [asStock(item)] });
     await db.update(stockItems).set({ reserved: 1 }).where(eq(stockItems.id, item.id));
-    await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'reserved', stockItemId: item.id, quantity: 0, reservedChange: 1, reason: 'Elsewhere' });
+    await db
+      .insert(stockMovements)
+      .values({ shopId: fx.mine.id, kind: 'reserved', stockItemId: item.id, quantity: 0, reservedChange: 1, reason: 'Elsewhere' });
     const res = await call(releaseRoute, plan.id, fx.estimator);
     expect(res.status).toBe(409);
     const body = await res.json();

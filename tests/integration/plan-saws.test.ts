@@ -43,7 +43,10 @@ describe('a plan nested on the shop’s saws', () => {
     const stockIds = offered.stock.map((s: { id: string }) => s.id);
     const { updatedAt: _a, ...saw } = table;
     const { updatedAt: _b, ...breakdownSaw } = track;
-    const req = { ...offered, settings: { ...offered.settings, timeBudgetMs: 0, saw, breakdownSaw, kerf: Math.max(offered.settings.kerf, saw.kerfMm) } };
+    const req = {
+      ...offered,
+      settings: { ...offered.settings, timeBudgetMs: 0, saw, breakdownSaw, kerf: Math.max(offered.settings.kerf, saw.kerfMm) },
+    };
     const plan = await optimize(req);
     expect(validatePlan(req, plan)).toEqual([]);
     const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, {
@@ -63,9 +66,15 @@ describe('a plan nested on the shop’s saws', () => {
     const stockIds = offered.stock.map((s: { id: string }) => s.id);
     const { updatedAt: _a, ...saw } = table;
     const { updatedAt: _b, ...breakdownSaw } = track;
-    const plan = await optimize({ ...offered, settings: { ...offered.settings, timeBudgetMs: 0, saw, breakdownSaw, kerf: Math.max(offered.settings.kerf, saw.kerfMm) } });
+    const plan = await optimize({
+      ...offered,
+      settings: { ...offered.settings, timeBudgetMs: 0, saw, breakdownSaw, kerf: Math.max(offered.settings.kerf, saw.kerfMm) },
+    });
     // Saved as if for the cabinet saw alone: its steps on the track saw name a saw this nest does not have.
-    const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, { method: 'POST', body: { settings: { timeBudgetMs: 0, sawId: table.id }, stockIds, plan } });
+    const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, {
+      method: 'POST',
+      body: { settings: { timeBudgetMs: 0, sawId: table.id }, stockIds, plan },
+    });
     expect(res.status).toBe(422);
     expect(res.body.fields.plan.join(' ')).toContain('is not a saw of this nest');
   });
@@ -79,7 +88,10 @@ describe('a plan nested on the shop’s saws', () => {
     const { body: offered } = await call(nestRequestRoute.GET, `/api/jobs/${jobId}/nest-request`, jobId, estimator);
     const stockIds = offered.stock.map((s: { id: string }) => s.id);
     const plan = await optimize({ ...offered, settings: { ...offered.settings, timeBudgetMs: 0 } });
-    const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, { method: 'POST', body: { settings: { timeBudgetMs: 0, sawId: foreign.id }, stockIds, plan } });
+    const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, {
+      method: 'POST',
+      body: { settings: { timeBudgetMs: 0, sawId: foreign.id }, stockIds, plan },
+    });
     expect(res.status).toBe(422);
     expect(res.body.fields).toHaveProperty('sawId');
   });

@@ -38,7 +38,10 @@ beforeAll(async () => {
   };
   [estimator, cutter] = [as('estimator'), as('cutter')];
   // The demo kitchen by name (not the first row the database happens to return).
-  [{ id: jobId }] = await handle.db.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.name, 'Hollis kitchen')));
+  [{ id: jobId }] = await handle.db
+    .select({ id: jobs.id })
+    .from(jobs)
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.name, 'Hollis kitchen')));
 });
 afterAll(() => handle.close());
 
@@ -52,7 +55,10 @@ async function nest(): Promise<{ request: NestRequestInput; plan: Plan; stockIds
 
 async function saveDraft() {
   const { plan, stockIds } = await nest();
-  const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, { method: 'POST', body: { name: 'Bench test', settings: { timeBudgetMs: 0 }, stockIds, plan } });
+  const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, {
+    method: 'POST',
+    body: { name: 'Bench test', settings: { timeBudgetMs: 0 }, stockIds, plan },
+  });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return { id: res.body.id as string, updatedAt: res.body.updatedAt as string, plan };
 }
@@ -75,19 +81,28 @@ describe('plan routes', () => {
     const tampered = structuredClone(plan);
     const [a, b] = tampered.pieces[0].placements;
     Object.assign(b, { x: a.x, y: a.y }); // two parts on the same spot
-    const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, { method: 'POST', body: { settings: { timeBudgetMs: 0 }, stockIds, plan: tampered } });
+    const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, {
+      method: 'POST',
+      body: { settings: { timeBudgetMs: 0 }, stockIds, plan: tampered },
+    });
     expect(res.status).toBe(422);
     expect(res.body.fields.plan.join('\n')).toMatch(/overlap/);
     const dropped = structuredClone(plan);
     dropped.pieces[0].placements.pop();
-    const missing = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, { method: 'POST', body: { settings: { timeBudgetMs: 0 }, stockIds, plan: dropped } });
+    const missing = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, {
+      method: 'POST',
+      body: { settings: { timeBudgetMs: 0 }, stockIds, plan: dropped },
+    });
     expect(missing.status).toBe(422);
     expect(missing.body.fields.plan.join('\n')).toMatch(/neither placed nor reported/);
   });
 
   test('stock that is not on offer is refused by name', async () => {
     const { plan } = await nest();
-    const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, { method: 'POST', body: { stockIds: ['stock:00000000-0000-4000-8000-000000000000'], plan } });
+    const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, {
+      method: 'POST',
+      body: { stockIds: ['stock:00000000-0000-4000-8000-000000000000'], plan },
+    });
     expect(res.status).toBe(422);
     expect(res.body.fields.stockIds[0]).toMatch(/not on offer/);
   });
@@ -101,14 +116,26 @@ describe('plan routes', () => {
     const buy = req.stock.find((s) => s.count === null && sameStock(s, edited.pieces[0]) && s.length >= moved.w && s.width >= moved.h)!;
     const trim = req.settings.trim;
     const u = usableRect(buy, trim);
-    edited.pieces.push({ stockId: buy.id, kind: buy.kind, length: buy.length, width: buy.width, thickness: buy.thickness, material: buy.material, trim, placements: [{ ...moved, x: u.x, y: u.y }] });
+    edited.pieces.push({
+      stockId: buy.id,
+      kind: buy.kind,
+      length: buy.length,
+      width: buy.width,
+      thickness: buy.thickness,
+      material: buy.material,
+      trim,
+      placements: [{ ...moved, x: u.x, y: u.y }],
+    });
     // The bench sends bare placements; the server rebuilds tree and saw order.
-    for (const p of edited.pieces) delete p.tree, delete p.sawOrder;
+    for (const p of edited.pieces) (delete p.tree, delete p.sawOrder);
 
     const overlap = structuredClone(edited);
     const [a, b] = overlap.pieces[0].placements;
     Object.assign(b, { x: a.x + 1, y: a.y + 1 });
-    const refused = await call(planRoute.PUT, `/api/plans/${id}`, id, estimator, { method: 'PUT', body: { plan: overlap, baseUpdatedAt: updatedAt } });
+    const refused = await call(planRoute.PUT, `/api/plans/${id}`, id, estimator, {
+      method: 'PUT',
+      body: { plan: overlap, baseUpdatedAt: updatedAt },
+    });
     expect(refused.status).toBe(422);
     expect(refused.body.fields.plan.some((m: string) => /overlap/.test(m))).toBe(true);
 

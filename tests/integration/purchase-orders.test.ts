@@ -3,7 +3,15 @@ import { and, eq } from 'drizzle-orm';
 import { describe, expect, test } from 'vitest';
 import type { Db } from '@/db/open';
 import { auditEvents, mailOutbox, plans, purchaseOrderLines, purchaseOrders, shops, stockItems, stockMovements, users } from '@/db/schema';
-import { cancelPurchaseOrder, createFromLowStock, createFromPlan, getPurchaseOrder, onOrderQuantities, receivePurchaseOrder, updateDraft } from '@/db/queries/purchase-orders';
+import {
+  cancelPurchaseOrder,
+  createFromLowStock,
+  createFromPlan,
+  getPurchaseOrder,
+  onOrderQuantities,
+  receivePurchaseOrder,
+  updateDraft,
+} from '@/db/queries/purchase-orders';
 import { ledgerMismatches } from '@/db/queries/stock';
 import { sendPurchaseOrder } from '@/lib/buying/send';
 import { readPlan } from '@/lib/nesting';
@@ -22,7 +30,16 @@ useTwoShopDatabase((app) => ({ db, fx } = app));
 /** A shop of its own for one test (its low stock is only what the test puts there), with an owner. */
 async function freshShop(name = `Test shop ${nextNumber()}`) {
   const [shop] = await db.insert(shops).values({ name, timeZone: 'America/Chicago' }).returning();
-  const [u] = await db.insert(users).values({ shopId: shop.id, email: `owner-${nextNumber()}@shop.example`, name: 'Rowan Ash', role: 'owner', passwordHash: await bcrypt.hash('x', 4) }).returning();
+  const [u] = await db
+    .insert(users)
+    .values({
+      shopId: shop.id,
+      email: `owner-${nextNumber()}@shop.example`,
+      name: 'Rowan Ash',
+      role: 'owner',
+      passwordHash: await bcrypt.hash('x', 4),
+    })
+    .returning();
   const owner: TestUser = { id: u.id, shopId: shop.id, role: 'owner', tokenVersion: u.tokenVersion };
   return { shop, owner };
 }
@@ -31,9 +48,21 @@ type Size = Partial<typeof stockItems.$inferInsert>;
 async function size(shopId: string, over: Size) {
   const [item] = await db
     .insert(stockItems)
-    .values({ shopId, kind: 'sheet', material: `Ply ${nextNumber()}`, nominalThickness: '3/4"', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand: 0, costCents: 5000, ...over })
+    .values({
+      shopId,
+      kind: 'sheet',
+      material: `Ply ${nextNumber()}`,
+      nominalThickness: '3/4"',
+      thicknessMm: 18,
+      lengthMm: 2440,
+      widthMm: 1220,
+      onHand: 0,
+      costCents: 5000,
+      ...over,
+    })
     .returning();
-  if (item.onHand) await db.insert(stockMovements).values({ shopId, kind: 'received', stockItemId: item.id, quantity: item.onHand, reason: 'Opening count' });
+  if (item.onHand)
+    await db.insert(stockMovements).values({ shopId, kind: 'received', stockItemId: item.id, quantity: item.onHand, reason: 'Opening count' });
   return item;
 }
 
@@ -76,7 +105,10 @@ describe('purchase orders from the low stock', () => {
   test('the list route is the shop’s own; a cutter is refused', async () => {
     const mineList = await call(listRoute.GET, '/api/purchase-orders', '', fx.owner);
     expect(mineList.status).toBe(200);
-    const made = await call(listRoute.POST, '/api/purchase-orders', '', fx.estimator, { method: 'POST', body: { from: 'manual', supplier: 'Matrix Supply' } });
+    const made = await call(listRoute.POST, '/api/purchase-orders', '', fx.estimator, {
+      method: 'POST',
+      body: { from: 'manual', supplier: 'Matrix Supply' },
+    });
     expect(made.status).toBe(201);
     const theirs = await call(listRoute.GET, '/api/purchase-orders', '', fx.otherOwner);
     expect(theirs.body.map((o: { id: string }) => o.id)).not.toContain(made.body.orders[0].id);
@@ -109,21 +141,44 @@ describe('a draft, sent, received', () => {
   async function draftFor(over: Size = {}) {
     const { shop, owner } = await freshShop();
     const sheet = await size(shop.id, { supplier: 'Cedar Run Plywood', onHand: 1, lowStockAt: 3, costCents: 8900, ...over });
-    const board = await size(shop.id, { kind: 'board', material: 'White oak', nominalThickness: '4/4', thicknessMm: 20.6, lengthMm: 2438.4, widthMm: 165.1, supplier: 'Cedar Run Plywood', onHand: 0, lowStockAt: 0, costCents: 925 });
+    const board = await size(shop.id, {
+      kind: 'board',
+      material: 'White oak',
+      nominalThickness: '4/4',
+      thicknessMm: 20.6,
+      lengthMm: 2438.4,
+      widthMm: 165.1,
+      supplier: 'Cedar Run Plywood',
+      onHand: 0,
+      lowStockAt: 0,
+      costCents: 925,
+    });
     const [id] = await createFromLowStock(db, shop.id, owner.id);
     return { shop, owner, sheet, board, id };
   }
 
   test('lines are edited while a draft (a board priced by the board foot), then kept as sent', async () => {
     const { shop, owner, sheet, board, id } = await draftFor();
-    const po = await updateDraft(db, shop.id, owner.id, id, { supplierEmail: 'orders@cedarrun.example', note: 'Back door', lines: [{ stockItemId: sheet.id, quantity: 6, unitCostCents: 8500 }, { stockItemId: board.id, quantity: 10, unitCostCents: 925 }] });
+    const po = await updateDraft(db, shop.id, owner.id, id, {
+      supplierEmail: 'orders@cedarrun.example',
+      note: 'Back door',
+      lines: [
+        { stockItemId: sheet.id, quantity: 6, unitCostCents: 8500 },
+        { stockItemId: board.id, quantity: 10, unitCostCents: 925 },
+      ],
+    });
     // By hand: 6 × $85.00 = $510.00; a 4/4 board 96″ × 6½″ is 4.33 bd ft → $40.08 each (AHEC, "Measurement"), 10 = $400.80.
-    expect(po.lines.map((l) => [l.quantity, l.costEachCents, l.totalCents])).toEqual([[6, 8500, 51000], [10, 4008, 40080]]);
+    expect(po.lines.map((l) => [l.quantity, l.costEachCents, l.totalCents])).toEqual([
+      [6, 8500, 51000],
+      [10, 4008, 40080],
+    ]);
     expect(po.totalCents).toBe(91080);
     // A size of another shop is refused, naming the line.
     const { shop: other } = await freshShop();
     const foreign = await size(other.id, {});
-    await expect(updateDraft(db, shop.id, owner.id, id, { lines: [{ stockItemId: foreign.id, quantity: 1, unitCostCents: 1 }] })).rejects.toMatchObject({ status: 422 });
+    await expect(
+      updateDraft(db, shop.id, owner.id, id, { lines: [{ stockItemId: foreign.id, quantity: 1, unitCostCents: 1 }] }),
+    ).rejects.toMatchObject({ status: 422 });
     await sendPurchaseOrder(db, shop.id, owner.id, id);
     await expect(updateDraft(db, shop.id, owner.id, id, { note: 'Changed' })).rejects.toMatchObject({ status: 409 });
   });
@@ -154,7 +209,9 @@ describe('a draft, sent, received', () => {
     const { shop, owner, sheet, id } = await draftFor();
     await updateDraft(db, shop.id, owner.id, id, { supplierEmail: 'orders@cedarrun.example' });
     // A draft is not received against.
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({ status: 409 });
+    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({
+      status: 409,
+    });
     const sent = await sendPurchaseOrder(db, shop.id, owner.id, id);
     const line = sent.lines[0];
     expect(line.quantity).toBe(5); // 2 × 3 − 1
@@ -163,7 +220,9 @@ describe('a draft, sent, received', () => {
     expect(part.lines[0].received).toBe(2);
     expect((await count(sheet.id)).onHand).toBe(3);
     // More than is still to come is refused, with the figures; nothing is written.
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: line.id, quantity: 4 }], updateCosts: false })).rejects.toMatchObject({ status: 409, message: expect.stringContaining('5 ordered and 2 already received, so 3 more can come in, not 4') });
+    await expect(
+      receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: line.id, quantity: 4 }], updateCosts: false }),
+    ).rejects.toMatchObject({ status: 409, message: expect.stringContaining('5 ordered and 2 already received, so 3 more can come in, not 4') });
     expect((await count(sheet.id)).onHand).toBe(3);
     // A part-received order is not cancelled.
     await expect(cancelPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ status: 409 });
@@ -171,21 +230,40 @@ describe('a draft, sent, received', () => {
     expect(done.status).toBe('received');
     expect(done.receivedAt).not.toBeNull();
     expect((await count(sheet.id)).onHand).toBe(6);
-    const moves = await db.select().from(stockMovements).where(and(eq(stockMovements.stockItemId, sheet.id), eq(stockMovements.purchaseOrderId, id)));
+    const moves = await db
+      .select()
+      .from(stockMovements)
+      .where(and(eq(stockMovements.stockItemId, sheet.id), eq(stockMovements.purchaseOrderId, id)));
     expect(moves.map((m) => [m.kind, m.quantity, m.reason]).sort()).toEqual([
       ['received', 2, 'Received on PO-0001'],
       ['received', 3, 'Received on PO-0001'],
     ]);
     expect(await ledgerMismatches(db, shop.id)).toEqual([]);
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({ status: 409 });
+    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({
+      status: 409,
+    });
   });
 
   test('all or nothing: a receipt with one line too many writes no line, count or movement', async () => {
     const { shop, owner, sheet, board, id } = await draftFor();
-    await updateDraft(db, shop.id, owner.id, id, { supplierEmail: 'o@cedarrun.example', lines: [{ stockItemId: sheet.id, quantity: 5, unitCostCents: 8900 }, { stockItemId: board.id, quantity: 2, unitCostCents: 925 }] });
+    await updateDraft(db, shop.id, owner.id, id, {
+      supplierEmail: 'o@cedarrun.example',
+      lines: [
+        { stockItemId: sheet.id, quantity: 5, unitCostCents: 8900 },
+        { stockItemId: board.id, quantity: 2, unitCostCents: 925 },
+      ],
+    });
     const sent = await sendPurchaseOrder(db, shop.id, owner.id, id);
     const [l1, l2] = sent.lines;
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: l1.id, quantity: 5 }, { lineId: l2.id, quantity: 3 }], updateCosts: true })).rejects.toMatchObject({ status: 409 });
+    await expect(
+      receivePurchaseOrder(db, shop.id, owner.id, id, {
+        lines: [
+          { lineId: l1.id, quantity: 5 },
+          { lineId: l2.id, quantity: 3 },
+        ],
+        updateCosts: true,
+      }),
+    ).rejects.toMatchObject({ status: 409 });
     expect((await count(sheet.id)).onHand).toBe(1);
     expect((await db.select().from(purchaseOrderLines).where(eq(purchaseOrderLines.purchaseOrderId, id))).map((l) => l.received)).toEqual([0, 0]);
     expect(await db.select().from(stockMovements).where(eq(stockMovements.purchaseOrderId, id))).toEqual([]);
@@ -194,13 +272,19 @@ describe('a draft, sent, received', () => {
 
   test('“update the cost” takes the order’s price into the stock room, with the change in the audit log; without it the cost stays', async () => {
     const { shop, owner, sheet, id } = await draftFor({ costCents: 8900 });
-    const draft = await updateDraft(db, shop.id, owner.id, id, { supplierEmail: 'o@cedarrun.example', lines: [{ stockItemId: sheet.id, quantity: 4, unitCostCents: 9350 }] });
+    const draft = await updateDraft(db, shop.id, owner.id, id, {
+      supplierEmail: 'o@cedarrun.example',
+      lines: [{ stockItemId: sheet.id, quantity: 4, unitCostCents: 9350 }],
+    });
     await sendPurchaseOrder(db, shop.id, owner.id, id);
     await receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: draft.lines[0].id, quantity: 1 }], updateCosts: false });
     expect((await count(sheet.id)).costCents).toBe(8900);
     await receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: draft.lines[0].id, quantity: 3 }], updateCosts: true });
     expect((await count(sheet.id)).costCents).toBe(9350);
-    const audit = await db.select().from(auditEvents).where(and(eq(auditEvents.shopId, shop.id), eq(auditEvents.entity, 'stock-item'), eq(auditEvents.entityId, sheet.id)));
+    const audit = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.shopId, shop.id), eq(auditEvents.entity, 'stock-item'), eq(auditEvents.entityId, sheet.id)));
     expect(audit.map((a) => a.data)).toEqual([expect.objectContaining({ changes: { costCents: { from: 8900, to: 9350 } }, purchaseOrderId: id })]);
   });
 
@@ -214,12 +298,19 @@ describe('a draft, sent, received', () => {
   });
 
   test('through the routes: the estimator may not receive (stock:write); another shop’s owner gets 404; bad input is 422', async () => {
-    const [po] = (await call(listRoute.POST, '/api/purchase-orders', '', fx.owner, { method: 'POST', body: { from: 'manual', supplier: 'Route Supply' } })).body.orders;
+    const [po] = (
+      await call(listRoute.POST, '/api/purchase-orders', '', fx.owner, { method: 'POST', body: { from: 'manual', supplier: 'Route Supply' } })
+    ).body.orders;
     const item = await size(fx.mine.id, { supplier: 'Route Supply' });
-    const patched = await call(orderRoute.PATCH, `/api/purchase-orders/${po.id}`, po.id, fx.estimator, { method: 'PATCH', body: { lines: [{ stockItemId: item.id, quantity: 0, unitCostCents: 100 }] } });
+    const patched = await call(orderRoute.PATCH, `/api/purchase-orders/${po.id}`, po.id, fx.estimator, {
+      method: 'PATCH',
+      body: { lines: [{ stockItemId: item.id, quantity: 0, unitCostCents: 100 }] },
+    });
     expect(patched.status).toBe(422);
     expect(JSON.stringify(patched.body)).toContain('Order at least 1');
     expect((await call(orderRoute.GET, `/api/purchase-orders/${po.id}`, po.id, fx.otherOwner)).status).toBe(404);
-    expect((await call(receiveRoute.POST, `/api/purchase-orders/${po.id}/receive`, po.id, fx.estimator, { method: 'POST', body: { all: true } })).status).toBe(403);
+    expect(
+      (await call(receiveRoute.POST, `/api/purchase-orders/${po.id}/receive`, po.id, fx.estimator, { method: 'POST', body: { all: true } })).status,
+    ).toBe(403);
   });
 });

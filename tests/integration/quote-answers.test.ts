@@ -45,13 +45,20 @@ beforeAll(async () => {
     for await (const chunk of req) body += chunk;
     const headers = new Headers();
     for (const [k, v] of Object.entries(req.headers)) if (typeof v === 'string') headers.set(k, v);
-    const answer = await (webhookRoute.POST as Handler)(new NextRequest('http://localhost/api/payments/webhook', { method: 'POST', headers, body }), { params: Promise.resolve({}) });
+    const answer = await (webhookRoute.POST as Handler)(new NextRequest('http://localhost/api/payments/webhook', { method: 'POST', headers, body }), {
+      params: Promise.resolve({}),
+    });
     res.writeHead(answer.status, { 'content-type': 'application/json' });
     res.end(await answer.text());
   });
   await new Promise<void>((r) => bridge.listen(0, '127.0.0.1', r));
   fake = await startPaymentsFake({ webhookUrl: `http://127.0.0.1:${(bridge.address() as AddressInfo).port}/`, webhookSecret });
-  Object.assign(process.env, { KERFWISE_PAYMENTS_URL: fake.url, KERFWISE_PAYMENTS_WEBHOOK_SECRET: webhookSecret, STRIPE_SECRET_KEY: '', NEXTAUTH_URL: 'http://localhost' });
+  Object.assign(process.env, {
+    KERFWISE_PAYMENTS_URL: fake.url,
+    KERFWISE_PAYMENTS_WEBHOOK_SECRET: webhookSecret,
+    STRIPE_SECRET_KEY: '',
+    NEXTAUTH_URL: 'http://localhost',
+  });
   (globalThis as { __kerfwisePayments?: unknown }).__kerfwisePayments = undefined;
   stripe = fakeClient(fake.url);
 });
@@ -89,7 +96,11 @@ const jobStatus = async (jobId: string) => (await handle.db.select({ status: job
 describe('sending a quote', () => {
   test('e-mails the customer the PDF and a link to their page; the token is kept only as its SHA-256', async () => {
     const { revision, customer, token, mail } = await sentQuote();
-    expect(mail).toMatchObject({ kind: 'quote', status: 'pending', subject: expect.stringMatching(/^.+: your quote Q-\d{4,} rev A for Quoted job \d+$/) });
+    expect(mail).toMatchObject({
+      kind: 'quote',
+      status: 'pending',
+      subject: expect.stringMatching(/^.+: your quote Q-\d{4,} rev A for Quoted job \d+$/),
+    });
     expect(token).toMatch(/^[A-Za-z0-9_-]{43}$/);
     // 75.00 of delivery, no markup on an "other" line, no tax (the fixture's line): $75.00 in all, deposit 50 % = $37.50 (by hand).
     expect(mail.textBody).toContain('$75.00 in all');
@@ -135,7 +146,10 @@ describe('sending a quote', () => {
     expect(second.textBody).toContain('This quote replaces rev A; its link no longer works.');
     expect((await customerQuote(handle.db, first.token)).state).toBe('replaced');
     const refused = await asCustomer(answerRoute.POST, first.token, 'answer', { answer: 'accept', fullName: 'Dana Whitfield', agree: true });
-    expect(refused).toMatchObject({ status: 409, body: { error: 'This quote was replaced by a newer one: use the link in the shop’s latest e-mail.' } });
+    expect(refused).toMatchObject({
+      status: 409,
+      body: { error: 'This quote was replaced by a newer one: use the link in the shop’s latest e-mail.' },
+    });
     expect((await customerQuote(handle.db, tokenIn(second.textBody)!)).state).toBe('open');
   });
 });
@@ -143,7 +157,16 @@ describe('sending a quote', () => {
 describe('the customer’s page', () => {
   test('shows prices only: no cost, markup, margin or hours anywhere in what it is given', async () => {
     const { token } = await sentQuote([
-      { id: 'm-1', kind: 'material', description: 'Baltic birch 18 mm', quantity: 2, unit: 'sheet', unitCostMinor: 8800, taxable: true, note: 'supplier price' },
+      {
+        id: 'm-1',
+        kind: 'material',
+        description: 'Baltic birch 18 mm',
+        quantity: 2,
+        unit: 'sheet',
+        unitCostMinor: 8800,
+        taxable: true,
+        note: 'supplier price',
+      },
       { id: 'l-1', kind: 'labour', description: 'Saw time', quantity: 1.5, unit: 'h', unitCostMinor: 6500, taxable: false, note: '' },
     ]);
     const page = await customerQuote(handle.db, token);
@@ -161,7 +184,8 @@ describe('the customer’s page', () => {
     const bad = 'A'.repeat(43);
     const address = '203.0.113.77';
     const statuses: number[] = [];
-    for (let i = 0; i < 12; i++) statuses.push((await asCustomer(answerRoute.POST, bad, 'answer', { answer: 'decline', reason: '' }, address)).status);
+    for (let i = 0; i < 12; i++)
+      statuses.push((await asCustomer(answerRoute.POST, bad, 'answer', { answer: 'decline', reason: '' }, address)).status);
     // Ten failed tries in 15 minutes are allowed (lib/api/limit.ts), the rest refused.
     expect(statuses.slice(0, 10)).toEqual(Array(10).fill(404));
     expect(statuses.slice(10)).toEqual([429, 429]);
@@ -176,17 +200,35 @@ describe('the customer’s answer', () => {
     const unagreed = await asCustomer(answerRoute.POST, token, 'answer', { answer: 'accept', fullName: 'Dana Whitfield', agree: false });
     expect(unagreed).toMatchObject({ status: 422, body: { fields: { agree: ['Tick the box to agree to the terms.'] } } });
 
-    const accepted = await asCustomer(answerRoute.POST, token, 'answer', { answer: 'accept', fullName: '  Dana Whitfield ', agree: true }, '192.0.2.44');
+    const accepted = await asCustomer(
+      answerRoute.POST,
+      token,
+      'answer',
+      { answer: 'accept', fullName: '  Dana Whitfield ', agree: true },
+      '192.0.2.44',
+    );
     expect(accepted.status).toBe(200);
-    expect(accepted.body).toEqual({ state: 'accepted', paymentClosed: null, acceptedName: 'Dana Whitfield', declineReason: null, answeredAt: expect.any(String) });
-    const [row] = await handle.db.select().from(quoteRevisions).where(eq(quoteRevisions.linkTokenHash, createHash('sha256').update(token).digest('hex')));
+    expect(accepted.body).toEqual({
+      state: 'accepted',
+      paymentClosed: null,
+      acceptedName: 'Dana Whitfield',
+      declineReason: null,
+      answeredAt: expect.any(String),
+    });
+    const [row] = await handle.db
+      .select()
+      .from(quoteRevisions)
+      .where(eq(quoteRevisions.linkTokenHash, createHash('sha256').update(token).digest('hex')));
     expect(row).toMatchObject({ status: 'accepted', acceptedName: 'Dana Whitfield', answeredFrom: '192.0.2.44', answeredAt: expect.any(Date) });
     expect(await jobStatus(job.id)).toBe('accepted');
     const confirmation = (await mailsTo(customer.email)).find((m) => m.kind === 'quote-accepted')!;
     expect(confirmation.textBody).toContain('was accepted by Dana Whitfield on');
     expect(confirmation.textBody).toContain('The next step is the deposit of $37.50');
 
-    expect(await asCustomer(answerRoute.POST, token, 'answer', { answer: 'decline', reason: 'changed my mind' })).toMatchObject({ status: 409, body: { error: 'You have already accepted this quote.' } });
+    expect(await asCustomer(answerRoute.POST, token, 'answer', { answer: 'decline', reason: 'changed my mind' })).toMatchObject({
+      status: 409,
+      body: { error: 'You have already accepted this quote.' },
+    });
     // What they agreed to stays as it was: no new revision of an accepted quote.
     expect((await call(revisionsRoute.POST, `/api/quotes/${row.id}/revisions`, row.id, fx.estimator, { method: 'POST' })).status).toBe(409);
   });
@@ -196,7 +238,10 @@ describe('the customer’s answer', () => {
     const declined = await asCustomer(answerRoute.POST, token, 'answer', { answer: 'decline', reason: 'Went with a simpler design.' });
     expect(declined.body).toMatchObject({ state: 'declined', declineReason: 'Went with a simpler design.' });
     expect(await jobStatus(job.id)).toBe('declined');
-    expect(await asCustomer(checkoutRoute.POST, token, 'checkout', {})).toMatchObject({ status: 409, body: { error: 'You declined this quote. Ask the shop if you would like a new one.' } });
+    expect(await asCustomer(checkoutRoute.POST, token, 'checkout', {})).toMatchObject({
+      status: 409,
+      body: { error: 'You declined this quote. Ask the shop if you would like a new one.' },
+    });
     const revB = await call(revisionsRoute.POST, `/api/quotes/${revision.id}/revisions`, revision.id, fx.estimator, { method: 'POST' });
     await call(sendRoute.POST, `/api/quotes/${revB.body.id}/send`, revB.body.id, fx.estimator, { method: 'POST' });
     expect(await jobStatus(job.id)).toBe('quoted');
@@ -214,7 +259,10 @@ describe('the customer’s answer', () => {
     expect((await handle.db.select().from(quoteRevisions).where(eq(quoteRevisions.id, revision.id)))[0].status).toBe('expired');
     expect(await jobStatus(job.id)).toBe('expired');
     expect(await expireQuotes(handle.db, dayAfter)).toBe(0);
-    expect(await asCustomer(answerRoute.POST, token, 'answer', { answer: 'accept', fullName: 'Dana Whitfield', agree: true })).toMatchObject({ status: 410, body: { error: 'This quote has expired. Ask the shop for a new one.' } });
+    expect(await asCustomer(answerRoute.POST, token, 'answer', { answer: 'accept', fullName: 'Dana Whitfield', agree: true })).toMatchObject({
+      status: 410,
+      body: { error: 'This quote has expired. Ask the shop for a new one.' },
+    });
   });
 });
 
@@ -224,12 +272,21 @@ describe('the deposit, through the payments SDK and the local fake', () => {
     expect((await asCustomer(answerRoute.POST, q.token, 'answer', { answer: 'accept', fullName: 'Dana Whitfield', agree: true })).status).toBe(200);
     return q;
   }
-  const cardOn = (url: string, card: string) => fetch(url, { method: 'POST', headers: { 'content-type': 'application/x-www-form-urlencoded' }, body: new URLSearchParams({ card }), redirect: 'manual' });
+  const cardOn = (url: string, card: string) =>
+    fetch(url, {
+      method: 'POST',
+      headers: { 'content-type': 'application/x-www-form-urlencoded' },
+      body: new URLSearchParams({ card }),
+      redirect: 'manual',
+    });
   const paymentsOf = (revisionId: string) => handle.db.select().from(quotePayments).where(eq(quotePayments.revisionId, revisionId));
 
   test('cannot be paid before the quote is accepted', async () => {
     const { token } = await sentQuote();
-    expect(await asCustomer(checkoutRoute.POST, token, 'checkout', {})).toMatchObject({ status: 409, body: { error: 'Accept the quote first; then you can pay the deposit.' } });
+    expect(await asCustomer(checkoutRoute.POST, token, 'checkout', {})).toMatchObject({
+      status: 409,
+      body: { error: 'Accept the quote first; then you can pay the deposit.' },
+    });
   });
 
   test('the test card pays the server’s deposit: a signed webhook marks it paid, the job deposit paid, and a receipt is mailed once', async () => {
@@ -258,7 +315,10 @@ describe('the deposit, through the payments SDK and the local fake', () => {
     expect(receipts).toHaveLength(1);
     expect(receipts[0].textBody).toContain('We received your deposit of $37.50');
     expect(receipts[0].textBody).toContain('balance still to pay $37.50');
-    expect(await asCustomer(checkoutRoute.POST, token, 'checkout', {})).toMatchObject({ status: 409, body: { error: 'The deposit is already paid. Thank you.' } });
+    expect(await asCustomer(checkoutRoute.POST, token, 'checkout', {})).toMatchObject({
+      status: 409,
+      body: { error: 'The deposit is already paid. Thank you.' },
+    });
 
     // A refund from the payments service puts the job back to accepted (the deposit is no longer held).
     await stripe.refunds.create({ payment_intent: payment.paymentIntentId! });
@@ -270,13 +330,29 @@ describe('the deposit, through the payments SDK and the local fake', () => {
     const { revision, customer, token } = await acceptedQuote();
     const checkout = await asCustomer(checkoutRoute.POST, token, 'checkout', {});
     const sessionId: string = checkout.body.url.split('/').pop();
-    const event = { id: `evt_test_replay_${revision.id}`, object: 'event', type: 'checkout.session.completed', data: { object: { id: sessionId, object: 'checkout.session', payment_status: 'paid', amount_total: 3750, currency: 'usd', payment_intent: 'pi_test_replayed' } } };
+    const event = {
+      id: `evt_test_replay_${revision.id}`,
+      object: 'event',
+      type: 'checkout.session.completed',
+      data: {
+        object: {
+          id: sessionId,
+          object: 'checkout.session',
+          payment_status: 'paid',
+          amount_total: 3750,
+          currency: 'usd',
+          payment_intent: 'pi_test_replayed',
+        },
+      },
+    };
     const payload = JSON.stringify(event);
     const signer = new Stripe(FAKE_SECRET_KEY);
     const post = async (signature: string | null, body = payload) => {
       const headers: Record<string, string> = { 'content-type': 'application/json' };
       if (signature) headers['stripe-signature'] = signature;
-      const res = await (webhookRoute.POST as Handler)(new NextRequest('http://localhost/api/payments/webhook', { method: 'POST', headers, body }), { params: Promise.resolve({}) });
+      const res = await (webhookRoute.POST as Handler)(new NextRequest('http://localhost/api/payments/webhook', { method: 'POST', headers, body }), {
+        params: Promise.resolve({}),
+      });
       return { status: res.status, body: await res.json() };
     };
     expect((await post(null)).status).toBe(400);
@@ -290,7 +366,10 @@ describe('the deposit, through the payments SDK and the local fake', () => {
     expect((await paymentsOf(revision.id))[0].status).toBe('open');
 
     expect((await post(signed)).body).toMatchObject({ received: true, outcome: 'paid', replay: false });
-    expect((await post(signer.webhooks.generateTestHeaderString({ payload, secret: webhookSecret }))).body).toMatchObject({ outcome: 'paid', replay: true });
+    expect((await post(signer.webhooks.generateTestHeaderString({ payload, secret: webhookSecret }))).body).toMatchObject({
+      outcome: 'paid',
+      replay: true,
+    });
     expect((await mailsTo(customer.email)).filter((m) => m.kind === 'deposit-receipt')).toHaveLength(1);
     expect(await handle.db.select().from(paymentEvents).where(eq(paymentEvents.id, event.id))).toHaveLength(1);
   });
@@ -300,17 +379,48 @@ describe('the deposit, through the payments SDK and the local fake', () => {
     const checkout = await asCustomer(checkoutRoute.POST, token, 'checkout', {});
     const sessionId: string = checkout.body.url.split('/').pop();
     const signer = new Stripe(FAKE_SECRET_KEY);
-    for (const [amount, currency] of [[100, 'usd'], [3750, 'eur']] as const) {
-      const payload = JSON.stringify({ id: `evt_test_amount_${amount}_${currency}_${revision.id}`, object: 'event', type: 'checkout.session.completed', data: { object: { id: sessionId, object: 'checkout.session', payment_status: 'paid', amount_total: amount, currency, payment_intent: 'pi_test_short' } } });
+    for (const [amount, currency] of [
+      [100, 'usd'],
+      [3750, 'eur'],
+    ] as const) {
+      const payload = JSON.stringify({
+        id: `evt_test_amount_${amount}_${currency}_${revision.id}`,
+        object: 'event',
+        type: 'checkout.session.completed',
+        data: {
+          object: {
+            id: sessionId,
+            object: 'checkout.session',
+            payment_status: 'paid',
+            amount_total: amount,
+            currency,
+            payment_intent: 'pi_test_short',
+          },
+        },
+      });
       const res = await (webhookRoute.POST as Handler)(
-        new NextRequest('http://localhost/api/payments/webhook', { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': signer.webhooks.generateTestHeaderString({ payload, secret: webhookSecret }) }, body: payload }),
+        new NextRequest('http://localhost/api/payments/webhook', {
+          method: 'POST',
+          headers: {
+            'content-type': 'application/json',
+            'stripe-signature': signer.webhooks.generateTestHeaderString({ payload, secret: webhookSecret }),
+          },
+          body: payload,
+        }),
         { params: Promise.resolve({}) },
       );
       expect(res.status).toBe(422);
-      expect((await res.json()).error).toBe(`The payment (${amount} ${currency}) does not match the quote's deposit (3750 usd), so it was not recorded.`);
+      expect((await res.json()).error).toBe(
+        `The payment (${amount} ${currency}) does not match the quote's deposit (3750 usd), so it was not recorded.`,
+      );
     }
     expect((await paymentsOf(revision.id))[0].status).toBe('open');
     expect(await jobStatus(job.id)).toBe('accepted');
-    expect(await handle.db.select().from(paymentEvents).where(and(eq(paymentEvents.type, 'checkout.session.completed'), eq(paymentEvents.paymentId, (await paymentsOf(revision.id))[0].id)))).toEqual([]);
+    expect(
+      await handle.db
+        .select()
+        .from(paymentEvents)
+        .where(and(eq(paymentEvents.type, 'checkout.session.completed'), eq(paymentEvents.paymentId, (await paymentsOf(revision.id))[0].id))),
+    ).toEqual([]);
   });
 });

@@ -32,7 +32,9 @@ describe('a quote built from a job and its plan', () => {
 
     const takeoff = (await call(takeoffRoute.GET, `/api/jobs/${job.id}/takeoff?planId=${planId}`, job.id, fx.estimator)).body;
     const material = lines.filter((l) => l.kind === 'material' && !l.description.startsWith('Spoilage'));
-    expect(material.map((l) => [l.quantity, l.unitCostMinor])).toEqual([...takeoff.pull, ...takeoff.buy].map((t: { count: number; costEachCents: number }) => [t.count, t.costEachCents]));
+    expect(material.map((l) => [l.quantity, l.unitCostMinor])).toEqual(
+      [...takeoff.pull, ...takeoff.buy].map((t: { count: number; costEachCents: number }) => [t.count, t.costEachCents]),
+    );
     const allowance = lines.filter((l) => l.description.startsWith('Spoilage'));
     expect(allowance).toHaveLength(1);
     expect(allowance[0].unitCostMinor).toBe(takeoff.totals.allowanceCents);
@@ -58,19 +60,36 @@ describe('a quote built from a job and its plan', () => {
     const second = (await call(jobQuotes.POST, `/api/jobs/${job.id}/quotes`, job.id, fx.estimator, { method: 'POST', body: { planId: null } })).body;
     expect(Number(second.number.slice(2))).toBe(Number(first.number.slice(2)) + 1);
 
-    const line: QuoteLine = { id: 'o-1', kind: 'other', description: 'Delivery and install', quantity: 1, unit: 'trip', unitCostMinor: 12500, taxable: false, note: '' };
-    const edited = await call(quoteRoute.PATCH, `/api/quotes/${first.id}`, first.id, fx.estimator, { method: 'PATCH', body: { lines: [line], discount: { kind: 'amount', minor: 500 } } });
+    const line: QuoteLine = {
+      id: 'o-1',
+      kind: 'other',
+      description: 'Delivery and install',
+      quantity: 1,
+      unit: 'trip',
+      unitCostMinor: 12500,
+      taxable: false,
+      note: '',
+    };
+    const edited = await call(quoteRoute.PATCH, `/api/quotes/${first.id}`, first.id, fx.estimator, {
+      method: 'PATCH',
+      body: { lines: [line], discount: { kind: 'amount', minor: 500 } },
+    });
     expect(edited.status).toBe(200);
     // 125.00 − 5.00 = 120.00; deposit 60.00 (by hand).
     expect(edited.body.totals).toMatchObject({ subtotalMinor: 12500, discountMinor: 500, totalMinor: 12000, depositMinor: 6000, balanceMinor: 6000 });
-    const tooMuch = await call(quoteRoute.PATCH, `/api/quotes/${first.id}`, first.id, fx.estimator, { method: 'PATCH', body: { discount: { kind: 'amount', minor: 99999 } } });
+    const tooMuch = await call(quoteRoute.PATCH, `/api/quotes/${first.id}`, first.id, fx.estimator, {
+      method: 'PATCH',
+      body: { discount: { kind: 'amount', minor: 99999 } },
+    });
     expect(tooMuch.status).toBe(422);
     expect(tooMuch.body.error).toMatch(/more than the subtotal/);
 
     const sent = await call(sendRoute.POST, `/api/quotes/${first.id}/send`, first.id, fx.estimator, { method: 'POST' });
     expect(sent.body).toMatchObject({ status: 'sent', validUntil: expect.stringMatching(/^\d{4}-\d{2}-\d{2}$/) });
     expect((await call(jobRoute.GET, `/api/jobs/${job.id}`, job.id, fx.estimator)).body.status).toBe('quoted');
-    expect((await call(quoteRoute.PATCH, `/api/quotes/${first.id}`, first.id, fx.estimator, { method: 'PATCH', body: { taxPercent: 5 } })).status).toBe(409);
+    expect(
+      (await call(quoteRoute.PATCH, `/api/quotes/${first.id}`, first.id, fx.estimator, { method: 'PATCH', body: { taxPercent: 5 } })).status,
+    ).toBe(409);
 
     const revB = await call(revisionsRoute.POST, `/api/quotes/${first.id}/revisions`, first.id, fx.estimator, { method: 'POST' });
     expect(revB.status).toBe(201);
@@ -105,8 +124,15 @@ describe('hardware and labour from the drawer schedules', () => {
       joint: { method: 'lock-rabbet' },
       thickness: { frontMm: inches(0.5), sideMm: inches(0.5) },
     });
-    for (const [label, n, from] of [['Kitchen bank', 3, 'opening'], ['Island bank', 2, 'opening'], ['Loose box', 1, 'box']] as const) {
-      const res = await call(schedulesRoute.POST, `/api/jobs/${job.id}/drawer-schedules`, job.id, fx.estimator, { method: 'POST', body: bank(label, n, from) });
+    for (const [label, n, from] of [
+      ['Kitchen bank', 3, 'opening'],
+      ['Island bank', 2, 'opening'],
+      ['Loose box', 1, 'box'],
+    ] as const) {
+      const res = await call(schedulesRoute.POST, `/api/jobs/${job.id}/drawer-schedules`, job.id, fx.estimator, {
+        method: 'POST',
+        body: bank(label, n, from),
+      });
       expect(res.status, JSON.stringify(res.body)).toBe(201);
     }
     const made = await call(jobQuotes.POST, `/api/jobs/${job.id}/quotes`, job.id, fx.estimator, { method: 'POST', body: { planId: null } });
@@ -119,11 +145,17 @@ describe('hardware and labour from the drawer schedules', () => {
     // By hand with the default minutes: 6 boxes × 12 min = 72 min = 1.20 h; one setup card (½″ stock throughout)
     // × 20 min + 6 × 4 corners × 1.5 min = 56 min → 0.93 h.
     expect(lines.find((l) => l.description.startsWith('Assembly'))).toMatchObject({ description: 'Assembly: 6 drawer boxes', quantity: 1.2 });
-    expect(lines.find((l) => l.description.startsWith('Machining'))).toMatchObject({ description: 'Machining: 1 setup, 24 joint corners', quantity: 0.93 });
+    expect(lines.find((l) => l.description.startsWith('Machining'))).toMatchObject({
+      description: 'Machining: 1 setup, 24 joint corners',
+      quantity: 0.93,
+    });
 
     // With the slide on the price list, a new quote prices it from there.
     const name = `Side-mount slides, ${slides[0].description.split(', ')[1]}, zinc`;
-    expect((await call(hardwareRoute.POST, '/api/settings/hardware', '', fx.owner, { method: 'POST', body: { name, unit: 'pair', priceMinor: 1595 } })).status).toBe(201);
+    expect(
+      (await call(hardwareRoute.POST, '/api/settings/hardware', '', fx.owner, { method: 'POST', body: { name, unit: 'pair', priceMinor: 1595 } }))
+        .status,
+    ).toBe(201);
     const again = (await call(jobQuotes.POST, `/api/jobs/${job.id}/quotes`, job.id, fx.estimator, { method: 'POST', body: { planId: null } })).body;
     expect(again.lines.find((l: QuoteLine) => l.kind === 'hardware')).toMatchObject({ description: name, unitCostMinor: 1595, quantity: 5 });
   });

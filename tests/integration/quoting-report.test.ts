@@ -29,7 +29,13 @@ describe('the quoting report', () => {
     await quote(shop, { status: 'declined', sentAt: at('2026-10-05T10:00:00'), validUntil: '2026-11-04', answeredAt: at('2026-10-07T16:00:00') });
     const won = await quote(
       shop,
-      { status: 'accepted', sentAt: at('2026-10-20T09:00:00'), validUntil: '2026-11-19', answeredAt: at('2026-11-02T18:30:00'), acceptedName: 'Lena Marsh' },
+      {
+        status: 'accepted',
+        sentAt: at('2026-10-20T09:00:00'),
+        validUntil: '2026-11-19',
+        answeredAt: at('2026-11-02T18:30:00'),
+        acceptedName: 'Lena Marsh',
+      },
       [
         { id: 'm-1', kind: 'material', description: 'Maple ply ¾″', quantity: 2, unit: 'sheet', unitCostMinor: 2000, taxable: false, note: '' },
         { id: 'o-1', kind: 'other', description: 'Delivery', quantity: 1, unit: 'trip', unitCostMinor: 7500, taxable: false, note: '' },
@@ -38,10 +44,37 @@ describe('the quoting report', () => {
     await quote(shop, { status: 'expired', sentAt: at('2026-11-10T09:00:00'), validUntil: '2026-11-20' });
     await quote(shop, { status: 'sent', sentAt: at('2026-11-25T09:00:00'), validUntil: '2026-12-25' });
     // Another shop's quote in the same months counts for that shop only.
-    await quote(fx.theirs.id, { status: 'accepted', sentAt: at('2026-11-01T09:00:00'), validUntil: '2026-12-01', answeredAt: at('2026-11-03T09:00:00') });
+    await quote(fx.theirs.id, {
+      status: 'accepted',
+      sentAt: at('2026-11-01T09:00:00'),
+      validUntil: '2026-12-01',
+      answeredAt: at('2026-11-03T09:00:00'),
+    });
     // By hand: material 2 × 20.00 = 40.00, +30 % = 52.00; delivery 75.00; total 127.00; deposit 50 % = 63.50.
-    await handle.db.insert(quotePayments).values({ shopId: shop, revisionId: won.revision.id, jobId: won.job.id, checkoutSessionId: `cs_test_report_${won.revision.id}`, amountMinor: 6350, currency: 'USD', status: 'paid', paidAt: at('2026-11-03T12:00:00') });
-    await handle.db.insert(plans).values({ shopId: shop, jobId: won.job.id, name: 'Cut', status: 'done', request: {}, document: {}, costCents: 5000, finishedAt: at('2026-11-20T15:00:00') } as typeof plans.$inferInsert);
+    await handle.db
+      .insert(quotePayments)
+      .values({
+        shopId: shop,
+        revisionId: won.revision.id,
+        jobId: won.job.id,
+        checkoutSessionId: `cs_test_report_${won.revision.id}`,
+        amountMinor: 6350,
+        currency: 'USD',
+        status: 'paid',
+        paidAt: at('2026-11-03T12:00:00'),
+      });
+    await handle.db
+      .insert(plans)
+      .values({
+        shopId: shop,
+        jobId: won.job.id,
+        name: 'Cut',
+        status: 'done',
+        request: {},
+        document: {},
+        costCents: 5000,
+        finishedAt: at('2026-11-20T15:00:00'),
+      } as typeof plans.$inferInsert);
 
     const report = await quotingReport(handle.db, { shopId: shop, timeZone: 'UTC', by: 'month', from: '2026-10-01', to: '2026-11-30' });
     expect(report.periods).toEqual([
@@ -50,20 +83,43 @@ describe('the quoting report', () => {
       { period: '2026-11-01', sent: 2, accepted: 1, declined: 0, expired: 1, wonMinor: 12700, depositsMinor: 6350 },
     ]);
     expect(report.jobs).toEqual([
-      { jobId: won.job.id, jobName: won.job.name, title: expect.stringMatching(/^Q-\d+ rev A$/), acceptedOn: '2026-11-02', quotedMaterialMinor: 4000, usedMaterialMinor: 5000, finishedPlans: 1 },
+      {
+        jobId: won.job.id,
+        jobName: won.job.name,
+        title: expect.stringMatching(/^Q-\d+ rev A$/),
+        acceptedOn: '2026-11-02',
+        quotedMaterialMinor: 4000,
+        usedMaterialMinor: 5000,
+        finishedPlans: 1,
+      },
     ]);
 
     // One customer's work only: the won job's quote, sent in October, accepted and paid in November.
-    const theirs = await quotingReport(handle.db, { shopId: shop, timeZone: 'UTC', by: 'month', from: '2026-10-01', to: '2026-11-30', customerId: won.customer.id });
+    const theirs = await quotingReport(handle.db, {
+      shopId: shop,
+      timeZone: 'UTC',
+      by: 'month',
+      from: '2026-10-01',
+      to: '2026-11-30',
+      customerId: won.customer.id,
+    });
     expect(theirs.periods).toEqual([
       { period: '2026-10-01', sent: 1, accepted: 0, declined: 0, expired: 0, wonMinor: 0, depositsMinor: 0 },
       { period: '2026-11-01', sent: 0, accepted: 1, declined: 0, expired: 0, wonMinor: 12700, depositsMinor: 6350 },
     ]);
-    expect((await quotingReport(handle.db, { shopId: shop, timeZone: 'UTC', by: 'month', from: '2026-10-01', to: '2026-11-30', jobId: fx.myJob.id })).periods).toEqual([]);
+    expect(
+      (await quotingReport(handle.db, { shopId: shop, timeZone: 'UTC', by: 'month', from: '2026-10-01', to: '2026-11-30', jobId: fx.myJob.id }))
+        .periods,
+    ).toEqual([]);
 
     // The CSV carries the same figures, won as a share of those answered or run out (1 of 2 = 50 % in November: one accepted, one expired).
-    const res = await quotingRoute.GET(await request('/api/reports/quoting?from=2026-10-01&to=2026-11-30', { user: fx.estimator }), { params: Promise.resolve({}) });
-    const csv = (await res.text()).replace(/^\uFEFF/, '').trim().split('\r\n');
+    const res = await quotingRoute.GET(await request('/api/reports/quoting?from=2026-10-01&to=2026-11-30', { user: fx.estimator }), {
+      params: Promise.resolve({}),
+    });
+    const csv = (await res.text())
+      .replace(/^\uFEFF/, '')
+      .trim()
+      .split('\r\n');
     expect(csv).toEqual([
       'Period from,Sent,Accepted,Declined,Expired,Won (%),Value won (USD),Deposits collected (USD)',
       '2026-10-01,2,0,1,0,0.0,0.00,0.00',

@@ -28,12 +28,16 @@ async function cutWithOneDamaged(reason = 'Tear-out') {
   const first = await nestAndSave(fx.estimator, job.id, { name: 'Carcass' });
   await release(fx.estimator, first.id);
   const damaged = firstPart(first.plan);
-  const done = await finish(fx.cutter, first.id, { offcuts: [], damaged: [{ piece: damaged.piece, partId: damaged.partId, instance: damaged.instance, reason }] });
+  const done = await finish(fx.cutter, first.id, {
+    offcuts: [],
+    damaged: [{ piece: damaged.piece, partId: damaged.partId, instance: damaged.instance, reason }],
+  });
   expect(done.status).toBe(200);
   return { job, sheet, material, first, damaged, done: done.body };
 }
 
-const nestRequestFor = (user: typeof fx.owner, jobId: string) => call<NestRequestInput>(nestRequestRoute.GET, `/api/jobs/${jobId}/nest-request?for=recuts`, jobId, user);
+const nestRequestFor = (user: typeof fx.owner, jobId: string) =>
+  call<NestRequestInput>(nestRequestRoute.GET, `/api/jobs/${jobId}/nest-request?for=recuts`, jobId, user);
 
 describe('a part damaged at the saw', () => {
   test('goes on its job’s re-cut list with quantity, reason, size, material, thickness, grain and "#n"; the job stays cutting', async () => {
@@ -95,9 +99,21 @@ describe('nesting and cutting the re-cuts', () => {
     const { job, sheet, damaged, first } = await cutWithOneDamaged();
     const [recut] = (await recutList(fx.estimator, job.id)).body;
     const offered = await nestRequestFor(fx.estimator, job.id);
-    expect(offered.body.parts).toEqual([expect.objectContaining({ id: recut.id, label: `${recut.label} #${recut.instance} · re-cut`, quantity: 1, length: recut.lengthMm, width: recut.widthMm, thickness: 18 })]);
+    expect(offered.body.parts).toEqual([
+      expect.objectContaining({
+        id: recut.id,
+        label: `${recut.label} #${recut.instance} · re-cut`,
+        quantity: 1,
+        length: recut.lengthMm,
+        width: recut.widthMm,
+        thickness: 18,
+      }),
+    ]);
     // The first plan put its offcuts on the rack; one of them takes a side.
-    const rack = await db.select().from(offcuts).where(and(eq(offcuts.sourcePlanId, first.id), eq(offcuts.status, 'available')));
+    const rack = await db
+      .select()
+      .from(offcuts)
+      .where(and(eq(offcuts.sourcePlanId, first.id), eq(offcuts.status, 'available')));
     expect(rack.some((o) => o.lengthMm >= damaged.w && o.widthMm >= damaged.h)).toBe(true);
 
     const sheetsBefore = await counts(db, sheet.id);
@@ -129,7 +145,10 @@ describe('nesting and cutting the re-cuts', () => {
     const placed = firstPart(again.plan);
     expect(partTagPath(again.id, placed)).toBe(`/parts/${recut.id}?plan=${again.id}&instance=1`);
     const page = await getPartPage(db, fx.mine.id, recut.id, { drafts: false });
-    expect(page).toMatchObject({ recutOf: `${recut.label} #${recut.instance}`, part: { lengthMm: recut.lengthMm, widthMm: recut.widthMm, material: recut.material } });
+    expect(page).toMatchObject({
+      recutOf: `${recut.label} #${recut.instance}`,
+      part: { lengthMm: recut.lengthMm, widthMm: recut.widthMm, material: recut.material },
+    });
     expect(page!.plans.find((p) => p.id === again.id)!.places).toEqual([expect.objectContaining({ pieceIndex: 0, instance: 1 })]);
   });
 
@@ -156,7 +175,9 @@ describe('nesting and cutting the re-cuts', () => {
     const again = await nestAndSave(fx.estimator, job.id, { for: 'recuts' });
     await release(fx.estimator, again.id);
     const d = firstPart(again.plan);
-    const done = await finish(fx.cutter, again.id, { damaged: [{ ...d, reason: 'Chipped edge' }].map(({ piece, partId, instance, reason }) => ({ piece, partId, instance, reason })) });
+    const done = await finish(fx.cutter, again.id, {
+      damaged: [{ ...d, reason: 'Chipped edge' }].map(({ piece, partId, instance, reason }) => ({ piece, partId, instance, reason })),
+    });
     expect(done.body).toMatchObject({ recutsAdded: 1, recutsClosed: 0, jobStatus: 'cutting' });
     const list = (await recutList(fx.estimator, job.id)).body;
     expect(list.map((r) => [r.status, r.reason])).toEqual([
@@ -180,8 +201,13 @@ describe('nesting and cutting the re-cuts', () => {
 
   test('saving a Nest of re-cuts when none is open is refused', async () => {
     const { job } = await jobWithSheet(db, fx.mine.id, { parts: carcass });
-    const sheetIds = (await call<NestRequestInput>(nestRequestRoute.GET, `/api/jobs/${job.id}/nest-request?for=recuts`, job.id, fx.estimator)).body.stock.map((s) => s.id);
-    const res = await call(jobPlans.POST, `/api/jobs/${job.id}/plans`, job.id, fx.estimator, { method: 'POST', body: { name: 'Nothing', stockIds: sheetIds, for: 'recuts', plan: { version: 1, pieces: [], unplaced: [] } } });
+    const sheetIds = (
+      await call<NestRequestInput>(nestRequestRoute.GET, `/api/jobs/${job.id}/nest-request?for=recuts`, job.id, fx.estimator)
+    ).body.stock.map((s) => s.id);
+    const res = await call(jobPlans.POST, `/api/jobs/${job.id}/plans`, job.id, fx.estimator, {
+      method: 'POST',
+      body: { name: 'Nothing', stockIds: sheetIds, for: 'recuts', plan: { version: 1, pieces: [], unplaced: [] } },
+    });
     expect(res.status).toBe(409);
     expect(res.body.error).toBe('This job has no open re-cuts to nest; nothing was saved.');
   });
@@ -196,7 +222,11 @@ describe('cancelling a re-cut', () => {
     expect(noReason.body.fields.reason).toEqual(['Say why this re-cut is not needed (made from scrap, customer changed it…).']);
     const ok = await cancelRecut(fx.estimator, recut.id, 'Customer dropped the cabinet');
     expect(ok.body).toMatchObject({ status: 'cancelled', jobStatus: 'done' });
-    expect((await recutList(fx.cutter, job.id)).body[0]).toMatchObject({ status: 'cancelled', cancelReason: 'Customer dropped the cabinet', closedBy: 'Esme Birch' });
+    expect((await recutList(fx.cutter, job.id)).body[0]).toMatchObject({
+      status: 'cancelled',
+      cancelReason: 'Customer dropped the cabinet',
+      closedBy: 'Esme Birch',
+    });
     expect((await cancelRecut(fx.owner, recut.id, 'Twice')).status).toBe(409);
   });
 
@@ -216,7 +246,10 @@ describe('who may do what with re-cuts', () => {
     const { job } = await cutWithOneDamaged();
     const [recut] = (await recutList(fx.cutter, job.id)).body;
     expect((await nestRequestFor(fx.cutter, job.id)).status).toBe(403);
-    const save = await call(jobPlans.POST, `/api/jobs/${job.id}/plans`, job.id, fx.cutter, { method: 'POST', body: { stockIds: ['x'], for: 'recuts', plan: {} } });
+    const save = await call(jobPlans.POST, `/api/jobs/${job.id}/plans`, job.id, fx.cutter, {
+      method: 'POST',
+      body: { stockIds: ['x'], for: 'recuts', plan: {} },
+    });
     expect(save.status).toBe(403);
     const again = await nestAndSave(fx.estimator, job.id, { for: 'recuts' });
     expect((await release(fx.cutter, again.id)).status).toBe(403);

@@ -29,12 +29,24 @@ describe('request log', () => {
   test('a new person added: one JSON line with method, route, status, ms, shop, user and request id; no password, no cookie', async () => {
     const lines = captureLog();
     const password = 'a-secret-nobody-logs-42';
-    const req = await request('/api/team', { method: 'POST', body: { name: 'Tomas Reyes', email: uniqueEmail('log'), role: 'cutter', password }, user: fx.owner });
+    const req = await request('/api/team', {
+      method: 'POST',
+      body: { name: 'Tomas Reyes', email: uniqueEmail('log'), role: 'cutter', password },
+      user: fx.owner,
+    });
     const res = await teamRoute.POST(req, noParams);
     expect(res.status).toBe(201);
     expect(lines).toHaveLength(1);
     const line = JSON.parse(lines[0]);
-    expect(line).toMatchObject({ msg: 'api request', method: 'POST', route: '/api/team', status: 201, shopId: fx.owner.shopId, userId: fx.owner.id, requestId: res.headers.get('x-request-id') });
+    expect(line).toMatchObject({
+      msg: 'api request',
+      method: 'POST',
+      route: '/api/team',
+      status: 201,
+      shopId: fx.owner.shopId,
+      userId: fx.owner.id,
+      requestId: res.headers.get('x-request-id'),
+    });
     expect(typeof line.ms).toBe('number');
     const cookie = await sessionCookie(fx.owner);
     expect(lines[0]).not.toContain(password);

@@ -37,7 +37,10 @@ describe('ticking saw-order steps', () => {
     expect(Date.parse(res.body.ticks[0].doneAt)).toBeGreaterThanOrEqual(before - 5000);
     const [row] = await handle.db.select({ status: plans.status }).from(plans).where(eq(plans.id, id));
     expect(row.status).toBe('cutting');
-    const audit = await handle.db.select().from(auditEvents).where(and(eq(auditEvents.entityId, id), eq(auditEvents.action, 'tick')));
+    const audit = await handle.db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.entityId, id), eq(auditEvents.action, 'tick')));
     expect(audit).toHaveLength(1);
   });
 

@@ -34,11 +34,22 @@ describe('saws in Shop settings', () => {
   test('the owner adds saws; estimators and cutters read them in the order added; the other shop sees none', async () => {
     const a = await call(sawsRoute.POST, {}, { method: 'POST', body: TABLE_SAW });
     expect(a.status).toBe(201);
-    expect(a.json).toMatchObject({ name: 'Cabinet saw', ripCapacityMm: 762, maxStages: 3, firstStage: 'rip', maxPieceLengthMm: null, kindName: null });
-    const b = await call(sawsRoute.POST, {}, {
-      method: 'POST',
-      body: { kind: 'track-saw', name: 'Track saw, 2.7 m rail', kerfMm: 2.2, crosscutCapacityMm: 2700, maxStages: null, minFenceWidthMm: 0 },
+    expect(a.json).toMatchObject({
+      name: 'Cabinet saw',
+      ripCapacityMm: 762,
+      maxStages: 3,
+      firstStage: 'rip',
+      maxPieceLengthMm: null,
+      kindName: null,
     });
+    const b = await call(
+      sawsRoute.POST,
+      {},
+      {
+        method: 'POST',
+        body: { kind: 'track-saw', name: 'Track saw, 2.7 m rail', kerfMm: 2.2, crosscutCapacityMm: 2700, maxStages: null, minFenceWidthMm: 0 },
+      },
+    );
     expect(b.status).toBe(201);
     for (const user of [fx.estimator, fx.cutter]) {
       const list = await call(sawsRoute.GET, {}, { user });
@@ -55,8 +66,12 @@ describe('saws in Shop settings', () => {
   test('an estimator cannot add, change or delete a saw (403), and the other shop cannot reach this one’s (404)', async () => {
     const { json: saw } = await call(sawsRoute.POST, {}, { method: 'POST', body: { ...TABLE_SAW, name: 'Guarded saw' } });
     expect((await call(sawsRoute.POST, {}, { method: 'POST', body: { ...TABLE_SAW, name: 'Not mine' }, user: fx.estimator })).status).toBe(403);
-    expect((await call(sawRoute.PUT, { id: saw.id }, { method: 'PUT', body: { ...TABLE_SAW, name: 'Renamed' }, user: fx.estimator })).status).toBe(403);
-    expect((await call(sawRoute.PUT, { id: saw.id }, { method: 'PUT', body: { ...TABLE_SAW, name: 'Renamed' }, user: fx.otherOwner })).status).toBe(404);
+    expect((await call(sawRoute.PUT, { id: saw.id }, { method: 'PUT', body: { ...TABLE_SAW, name: 'Renamed' }, user: fx.estimator })).status).toBe(
+      403,
+    );
+    expect((await call(sawRoute.PUT, { id: saw.id }, { method: 'PUT', body: { ...TABLE_SAW, name: 'Renamed' }, user: fx.otherOwner })).status).toBe(
+      404,
+    );
     expect((await call(sawRoute.DELETE, { id: saw.id }, { method: 'DELETE', user: fx.otherOwner })).status).toBe(404);
     const list = (await call(sawsRoute.GET, {})).json;
     expect(list.find((s: { id: string }) => s.id === saw.id)).toMatchObject({ name: 'Guarded saw' });
@@ -64,7 +79,11 @@ describe('saws in Shop settings', () => {
 
   test('the owner changes and deletes a saw', async () => {
     const { json: saw } = await call(sawsRoute.POST, {}, { method: 'POST', body: { ...TABLE_SAW, name: 'To change' } });
-    const changed = await call(sawRoute.PUT, { id: saw.id }, { method: 'PUT', body: { ...TABLE_SAW, name: 'To change', ripCapacityMm: 1270, maxStages: null } });
+    const changed = await call(
+      sawRoute.PUT,
+      { id: saw.id },
+      { method: 'PUT', body: { ...TABLE_SAW, name: 'To change', ripCapacityMm: 1270, maxStages: null } },
+    );
     expect(changed.status).toBe(200);
     expect(changed.json).toMatchObject({ ripCapacityMm: 1270, maxStages: null });
     expect((await call(sawRoute.DELETE, { id: saw.id }, { method: 'DELETE' })).status).toBe(200);
@@ -79,13 +98,21 @@ describe('saws in Shop settings', () => {
   });
 
   test('bad values are refused per field (422): 5 stages, a negative kerf, a shop kind with no name, a width above the length', async () => {
-    const res = await call(sawsRoute.POST, {}, {
-      method: 'POST',
-      body: { ...TABLE_SAW, name: 'Bad', maxStages: 5, kerfMm: -1, kind: 'other', maxPieceLengthMm: 1000, maxPieceWidthMm: 1200 },
-    });
+    const res = await call(
+      sawsRoute.POST,
+      {},
+      {
+        method: 'POST',
+        body: { ...TABLE_SAW, name: 'Bad', maxStages: 5, kerfMm: -1, kind: 'other', maxPieceLengthMm: 1000, maxPieceWidthMm: 1200 },
+      },
+    );
     expect(res.status).toBe(422);
     expect(Object.keys(res.json.fields).sort()).toEqual(['kerfMm', 'maxStages']);
-    const other = await call(sawsRoute.POST, {}, { method: 'POST', body: { ...TABLE_SAW, name: 'Bad 2', kind: 'other', maxPieceLengthMm: 1000, maxPieceWidthMm: 1200 } });
+    const other = await call(
+      sawsRoute.POST,
+      {},
+      { method: 'POST', body: { ...TABLE_SAW, name: 'Bad 2', kind: 'other', maxPieceLengthMm: 1000, maxPieceWidthMm: 1200 } },
+    );
     expect(other.status).toBe(422);
     expect(Object.keys(other.json.fields).sort()).toEqual(['kindName', 'maxPieceWidthMm']);
   });

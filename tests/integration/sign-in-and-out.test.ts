@@ -81,7 +81,9 @@ describe('sign-in throttle', () => {
       for (let i = 0; i <= LIMITS['sign-in:account'].points; i++) {
         const res = await signIn(email, 'not-the-password', address);
         const body = (await res.json()) as { url?: string; error?: string };
-        out.push(`${res.status} ${body.error ?? ''} ${body.url?.replace(/TooManyAttempts%3A\d+/, 'TooManyAttempts:N') ?? ''} ${res.headers.has('retry-after')}`);
+        out.push(
+          `${res.status} ${body.error ?? ''} ${body.url?.replace(/TooManyAttempts%3A\d+/, 'TooManyAttempts:N') ?? ''} ${res.headers.has('retry-after')}`,
+        );
       }
       return out;
     };
@@ -160,7 +162,10 @@ describe('sign-out', () => {
     const noParams = { params: Promise.resolve({}) };
     expect((await jobsRoute.GET(await request('/api/jobs', { user: session }), noParams)).status).toBe(200);
 
-    await authOptions().events!.signOut!({ token: { userId: row.id, shopId: row.shopId, role: row.role, tokenVersion: row.tokenVersion }, session: undefined as never });
+    await authOptions().events!.signOut!({
+      token: { userId: row.id, shopId: row.shopId, role: row.role, tokenVersion: row.tokenVersion },
+      session: undefined as never,
+    });
 
     expect((await jobsRoute.GET(await request('/api/jobs', { user: session }), noParams)).status).toBe(401);
     const [after] = await handle.db.select().from(users).where(eq(users.id, row.id));

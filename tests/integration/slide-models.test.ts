@@ -55,7 +55,11 @@ describe('slide models in Shop settings', () => {
   });
 
   test('bad values are refused per field (422): no lengths, a negative deduction, an unknown kind', async () => {
-    const res = await call(modelsRoute.POST, {}, { method: 'POST', body: { ...MODEL, name: 'Bad', lengthsMm: [], widthDeductionMm: -1, kind: 'wooden' } });
+    const res = await call(
+      modelsRoute.POST,
+      {},
+      { method: 'POST', body: { ...MODEL, name: 'Bad', lengthsMm: [], widthDeductionMm: -1, kind: 'wooden' } },
+    );
     expect(res.status).toBe(422);
     expect(Object.keys(res.json.fields).sort()).toEqual(['kind', 'lengthsMm', 'widthDeductionMm']);
   });
@@ -94,11 +98,23 @@ describe('slide models in Shop settings', () => {
     const res = await call(
       schedulesRoute.POST,
       { id: fx.myJob.id },
-      { method: 'POST', user: fx.estimator, body: { label: 'Too thick', quantity: 1, size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 }, slide: { type: 'undermount', model: { ...rule, id } }, thickness: { frontMm: 18, sideMm: 18 } } },
+      {
+        method: 'POST',
+        user: fx.estimator,
+        body: {
+          label: 'Too thick',
+          quantity: 1,
+          size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 },
+          slide: { type: 'undermount', model: { ...rule, id } },
+          thickness: { frontMm: 18, sideMm: 18 },
+        },
+      },
     );
     expect(res.status).toBe(422);
     // A rule's figures are written exactly, even in an inch shop: 16 mm is no whole number of 32nds.
-    expect(res.json.fields['thickness.sideMm'][0]).toBe('The Thin sides only takes sides up to 16 mm; these are 18 mm: use thinner sides or another slide');
+    expect(res.json.fields['thickness.sideMm'][0]).toBe(
+      'The Thin sides only takes sides up to 16 mm; these are 18 mm: use thinner sides or another slide',
+    );
   });
 
   test('another shop’s model cannot be changed or deleted (404)', async () => {

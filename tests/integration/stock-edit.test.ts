@@ -18,7 +18,22 @@ const newBoard = () =>
     db,
     fx.mine.id,
     fx.owner.id,
-    stockItemSchema.parse({ kind: 'board', material: 'Cherry', nominalThickness: '4/4', thicknessMm: 21, lengthMm: 2438, widthMm: 152, onHand: 12, lowStockAt: 4, costCents: 795, supplier: 'Millbrook', location: 'Lumber rack 3', grade: 'FAS', surfacing: 'S2S', buyable: true }),
+    stockItemSchema.parse({
+      kind: 'board',
+      material: 'Cherry',
+      nominalThickness: '4/4',
+      thicknessMm: 21,
+      lengthMm: 2438,
+      widthMm: 152,
+      onHand: 12,
+      lowStockAt: 4,
+      costCents: 795,
+      supplier: 'Millbrook',
+      location: 'Lumber rack 3',
+      grade: 'FAS',
+      surfacing: 'S2S',
+      buyable: true,
+    }),
   );
 
 async function patch(id: string, body: unknown, user: TestUser) {
@@ -41,7 +56,10 @@ describe('PATCH /api/stock/:id', () => {
   test('writes one audit row saying what changed from what, and no stock movement (no count moved)', async () => {
     const board = await newBoard();
     await patch(board.id, { costCents: 850, location: 'Lumber rack 4', supplier: 'Millbrook' }, fx.owner);
-    const audit = await db.select().from(auditEvents).where(and(eq(auditEvents.entityId, board.id), eq(auditEvents.action, 'update')));
+    const audit = await db
+      .select()
+      .from(auditEvents)
+      .where(and(eq(auditEvents.entityId, board.id), eq(auditEvents.action, 'update')));
     expect(audit).toHaveLength(1);
     expect(audit[0]).toMatchObject({ shopId: fx.mine.id, userId: fx.owner.id, entity: 'stock-item' });
     // The supplier was sent unchanged, so only cost and location are recorded.

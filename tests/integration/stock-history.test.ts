@@ -69,7 +69,10 @@ describe('the stock history of a plan: one row per physical change, saying reser
     const rows = await db.select().from(stockMovements).where(eq(stockMovements.planId, id));
     // One reservation and one cut for the sheets; one row per offcut racked.
     expect(rows.filter((r) => r.stockItemId === sheet.id).map((r) => [r.kind, r.quantity, r.reservedChange])).toEqual(
-      expect.arrayContaining([['reserved', 0, used], ['consumed', -used, -used]]),
+      expect.arrayContaining([
+        ['reserved', 0, used],
+        ['consumed', -used, -used],
+      ]),
     );
     expect(rows.filter((r) => r.stockItemId === sheet.id)).toHaveLength(2);
     expect(rows.filter((r) => r.kind === 'offcut-created')).toHaveLength(racked.length);

@@ -3,7 +3,18 @@ import { and, eq } from 'drizzle-orm';
 import type { Db, DbHandle } from '@/db/open';
 import { useDatabase } from '@/db/client';
 import { offcuts, plans, stockItems } from '@/db/schema';
-import { adjustStock, createStockItem, ledgerMismatches, listMovements, listOffcuts, listStock, receiveStock, recordOffcut, scrapOffcut, stockValue } from '@/db/queries/stock';
+import {
+  adjustStock,
+  createStockItem,
+  ledgerMismatches,
+  listMovements,
+  listOffcuts,
+  listStock,
+  receiveStock,
+  recordOffcut,
+  scrapOffcut,
+  stockValue,
+} from '@/db/queries/stock';
 import { finishPlan } from '@/db/queries/plan-lifecycle';
 import { listYieldLedger } from '@/db/queries/stock-yield';
 import { seedDemoShop } from '@/seeds/demo-shop';
@@ -35,7 +46,22 @@ async function expectLedgerMatches(shopId: string) {
 }
 
 const newSheet = (over: Partial<Parameters<typeof stockItemSchema.parse>[0]> = {}) =>
-  createStockItem(db, fx.mine.id, fx.owner.id, stockItemSchema.parse({ kind: 'sheet', material: 'Test ply', nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand: 4, costCents: 5000, ...over }));
+  createStockItem(
+    db,
+    fx.mine.id,
+    fx.owner.id,
+    stockItemSchema.parse({
+      kind: 'sheet',
+      material: 'Test ply',
+      nominalThickness: '18 mm',
+      thicknessMm: 18,
+      lengthMm: 2440,
+      widthMm: 1220,
+      onHand: 4,
+      costCents: 5000,
+      ...over,
+    }),
+  );
 
 describe('the demo shop ledger', () => {
   test('sums to the counts after seeding and releasing the kitchen plan', async () => {
@@ -43,7 +69,10 @@ describe('the demo shop ledger', () => {
   });
 
   test('still sums after the cutter finishes the kitchen plan, whose offcuts land on the rack', async () => {
-    const [plan] = await db.select().from(plans).where(and(eq(plans.shopId, demoShop), eq(plans.status, 'released')));
+    const [plan] = await db
+      .select()
+      .from(plans)
+      .where(and(eq(plans.shopId, demoShop), eq(plans.status, 'released')));
     const document = readPlan(plan.document);
     const result = await finishPlan(db, { shopId: demoShop, userId: plan.createdBy!, planId: plan.id, body: { offcuts: [], damaged: [] } });
     expect(result.offcuts.length).toBe(document.pieces.reduce((n, p) => n + (p.offcuts?.length ?? 0), 0));
@@ -51,7 +80,9 @@ describe('the demo shop ledger', () => {
     await expectLedgerMatches(demoShop);
     const ledger = await listYieldLedger(db, demoShop);
     // The ledger also holds the demo's past jobs; the kitchen plan is the one finished now, so the newest.
-    expect(ledger.plans.filter((p) => p.id === plan.id)).toEqual([expect.objectContaining({ offcutsRacked: result.offcuts.length, yieldRatio: expect.closeTo(document.totals!.yield, 9) })]);
+    expect(ledger.plans.filter((p) => p.id === plan.id)).toEqual([
+      expect.objectContaining({ offcutsRacked: result.offcuts.length, yieldRatio: expect.closeTo(document.totals!.yield, 9) }),
+    ]);
     expect(ledger.plans[0].id).toBe(plan.id);
     // Yield + kept offcuts + waste account for the whole stock area.
     const keptArea = result.offcuts.reduce((n, o) => n + o.lengthMm * o.widthMm, 0);
@@ -64,7 +95,9 @@ describe('counts in the stock room', () => {
     const item = await newSheet({ material: 'Sneaky ply', onHand: 3 });
     expect(await ledgerMismatches(db, fx.mine.id)).toEqual([]);
     await db.update(stockItems).set({ onHand: 5 }).where(eq(stockItems.id, item.id));
-    expect(await ledgerMismatches(db, fx.mine.id)).toEqual([expect.objectContaining({ stored: { onHand: 5, reserved: 0 }, ledger: { onHand: 3, reserved: 0 } })]);
+    expect(await ledgerMismatches(db, fx.mine.id)).toEqual([
+      expect.objectContaining({ stored: { onHand: 5, reserved: 0 }, ledger: { onHand: 3, reserved: 0 } }),
+    ]);
     await db.update(stockItems).set({ onHand: 3 }).where(eq(stockItems.id, item.id));
   });
 
@@ -95,7 +128,14 @@ describe('counts in the stock room', () => {
   });
 
   test('an offcut recorded at the saw can be scrapped once, and by no other shop', async () => {
-    const o = await recordOffcut(db, fx.mine.id, fx.cutter.id, { material: 'Test ply', thicknessMm: 18, lengthMm: 700, widthMm: 300, grain: 'along-length', location: 'Bin 2' });
+    const o = await recordOffcut(db, fx.mine.id, fx.cutter.id, {
+      material: 'Test ply',
+      thicknessMm: 18,
+      lengthMm: 700,
+      widthMm: 300,
+      grain: 'along-length',
+      location: 'Bin 2',
+    });
     await scrapOffcut(db, fx.mine.id, fx.cutter.id, o.id, 'Delaminated');
     await expect(scrapOffcut(db, fx.mine.id, fx.cutter.id, o.id, 'again')).rejects.toMatchObject({ status: 409 });
     expect(await scrapOffcut(db, fx.theirs.id, fx.otherOwner.id, o.id, 'not theirs')).toBeNull();
@@ -104,16 +144,46 @@ describe('counts in the stock room', () => {
 
   test('stock value counts sheets each and boards by the board foot (AHEC: 4/4 × 6″ × 8′ = 4 BF, at $9.25/bf = $37.00)', async () => {
     const { shopId } = { shopId: fx.theirs.id };
-    await createStockItem(db, shopId, fx.otherOwner.id, stockItemSchema.parse({ kind: 'board', material: 'White oak', nominalThickness: '4/4', thicknessMm: inches(13 / 16), lengthMm: inches(96), widthMm: inches(6), onHand: 10, costCents: 925 }));
-    await createStockItem(db, shopId, fx.otherOwner.id, stockItemSchema.parse({ kind: 'sheet', material: 'Maple ply', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: inches(96), widthMm: inches(48), onHand: 2, costCents: 9400 }));
+    await createStockItem(
+      db,
+      shopId,
+      fx.otherOwner.id,
+      stockItemSchema.parse({
+        kind: 'board',
+        material: 'White oak',
+        nominalThickness: '4/4',
+        thicknessMm: inches(13 / 16),
+        lengthMm: inches(96),
+        widthMm: inches(6),
+        onHand: 10,
+        costCents: 925,
+      }),
+    );
+    await createStockItem(
+      db,
+      shopId,
+      fx.otherOwner.id,
+      stockItemSchema.parse({
+        kind: 'sheet',
+        material: 'Maple ply',
+        nominalThickness: '3/4"',
+        thicknessMm: 18,
+        lengthMm: inches(96),
+        widthMm: inches(48),
+        onHand: 2,
+        costCents: 9400,
+      }),
+    );
     expect((await stockValue(db, shopId)).stockCents).toBe(10 * 3700 + 2 * 9400);
     expect((await listStock(db, fx.mine.id)).some((i) => i.material === 'White oak')).toBe(false);
   });
 });
 
 describe('importing stock from CSV', () => {
-  const csv = 'kind,material,thickness,length,width,quantity,cost\nsheet,Import MDF,18 mm,2440 mm,1220 mm,3,46\nsheet,,18 mm,two metres,1220 mm,3,46\n';
-  const post = async (commit: string) => importRoute(await httpRequest('/api/stock/import', { method: 'POST', user: fx.owner, body: { csv, commit } }), { params: Promise.resolve({}) });
+  const csv =
+    'kind,material,thickness,length,width,quantity,cost\nsheet,Import MDF,18 mm,2440 mm,1220 mm,3,46\nsheet,,18 mm,two metres,1220 mm,3,46\n';
+  const post = async (commit: string) =>
+    importRoute(await httpRequest('/api/stock/import', { method: 'POST', user: fx.owner, body: { csv, commit } }), { params: Promise.resolve({}) });
 
   test('lists every bad row and writes nothing when asked for all rows', async () => {
     const res = await post('all');
@@ -138,4 +208,3 @@ describe('importing stock from CSV', () => {
     expect(JSON.stringify(body)).not.toMatch(/cost|value/i);
   });
 });
-

@@ -100,7 +100,11 @@ describe('team invites by link', () => {
 
   test('the owner may still hand over a first password: no invite, no mail', async () => {
     const email = uniqueEmail('handed');
-    const res = await call(teamRoute.POST, {}, { user: fx.owner, body: { name: 'Hal Handed', email, role: 'estimator', password: 'given-in-person-123' } });
+    const res = await call(
+      teamRoute.POST,
+      {},
+      { user: fx.owner, body: { name: 'Hal Handed', email, role: 'estimator', password: 'given-in-person-123' } },
+    );
     expect(res.status).toBe(201);
     expect(res.json.invited).toBe(false);
     expect(await mailsTo(email)).toEqual([]);

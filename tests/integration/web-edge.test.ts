@@ -65,19 +65,43 @@ describe('requests from another site are refused before anything happens', () =>
   });
 
   test('a request with neither Origin nor Sec-Fetch-Site is refused; same-origin alone, or an Origin naming the host it came to, is let through', async () => {
-    const none = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', body: { name: 'No headers' }, user: fx.owner, headers: { origin: null, 'sec-fetch-site': null } }), noParams);
+    const none = await jobsRoute.POST(
+      await request('/api/jobs', { method: 'POST', body: { name: 'No headers' }, user: fx.owner, headers: { origin: null, 'sec-fetch-site': null } }),
+      noParams,
+    );
     expect(none.status).toBe(403);
-    const sameSite = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', body: { name: 'Same site' }, user: fx.owner, headers: { origin: null, 'sec-fetch-site': 'same-site' } }), noParams);
+    const sameSite = await jobsRoute.POST(
+      await request('/api/jobs', {
+        method: 'POST',
+        body: { name: 'Same site' },
+        user: fx.owner,
+        headers: { origin: null, 'sec-fetch-site': 'same-site' },
+      }),
+      noParams,
+    );
     expect(sameSite.status).toBe(403);
-    const fetchOnly = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', body: { name: 'Fetch metadata' }, user: fx.owner, headers: { origin: null } }), noParams);
+    const fetchOnly = await jobsRoute.POST(
+      await request('/api/jobs', { method: 'POST', body: { name: 'Fetch metadata' }, user: fx.owner, headers: { origin: null } }),
+      noParams,
+    );
     expect(fetchOnly.status).toBe(201);
     const byHost = await jobsRoute.POST(
-      await request('/api/jobs', { method: 'POST', body: { name: 'By host' }, user: fx.owner, headers: { origin: 'http://shop.local:3000', host: 'shop.local:3000', 'sec-fetch-site': null } }),
+      await request('/api/jobs', {
+        method: 'POST',
+        body: { name: 'By host' },
+        user: fx.owner,
+        headers: { origin: 'http://shop.local:3000', host: 'shop.local:3000', 'sec-fetch-site': null },
+      }),
       noParams,
     );
     expect(byHost.status).toBe(201);
     const lookalike = await jobsRoute.POST(
-      await request('/api/jobs', { method: 'POST', body: { name: 'Look-alike' }, user: fx.owner, headers: { origin: 'http://shop.local.evil.example:3000', host: 'shop.local:3000' } }),
+      await request('/api/jobs', {
+        method: 'POST',
+        body: { name: 'Look-alike' },
+        user: fx.owner,
+        headers: { origin: 'http://shop.local.evil.example:3000', host: 'shop.local:3000' },
+      }),
       noParams,
     );
     expect(lookalike.status).toBe(403);
@@ -94,20 +118,37 @@ describe('requests from another site are refused before anything happens', () =>
   test.each(writes)('$method $route from another site → 403, with a plain-text body → 415', async ({ route, method, body, target }) => {
     const params = target ? await target({ ...fx, db: handle.db }) : {};
     const url = Object.entries(params).reduce((u, [k, v]) => u.replace(`[${k}]`, v), route);
-    const mod = (await import(/* @vite-ignore */ path.resolve('app/api', route.slice('/api/'.length), 'route.ts'))) as Record<string, typeof jobsRoute.POST>;
+    const mod = (await import(/* @vite-ignore */ path.resolve('app/api', route.slice('/api/'.length), 'route.ts'))) as Record<
+      string,
+      typeof jobsRoute.POST
+    >;
     const payload = JSON.stringify(body ?? {}).replace('EMAIL', uniqueEmail('edge'));
-    const cross = await mod[method](await request(url, { method, rawBody: payload, user: fx.owner, headers: EVIL }), { params: Promise.resolve(params) } as never);
+    const cross = await mod[method](await request(url, { method, rawBody: payload, user: fx.owner, headers: EVIL }), {
+      params: Promise.resolve(params),
+    } as never);
     expect(cross.status).toBe(403);
-    const plain = await mod[method](await request(url, { method, rawBody: payload, user: fx.owner, headers: { 'content-type': 'text/plain;charset=UTF-8' } }), { params: Promise.resolve(params) } as never);
+    const plain = await mod[method](
+      await request(url, { method, rawBody: payload, user: fx.owner, headers: { 'content-type': 'text/plain;charset=UTF-8' } }),
+      { params: Promise.resolve(params) } as never,
+    );
     expect(plain.status).toBe(415);
   });
 
-  test.each(SIGNED_BY_SERVICE)('%s comes from a service, not a browser: with a browser’s cookie and another site’s headers, it still wants the signature (400)', async (route) => {
-    const mod = (await import(/* @vite-ignore */ path.resolve('app/api', route.slice('/api/'.length), 'route.ts'))) as Record<string, typeof jobsRoute.POST>;
-    const res = await mod.POST(await request(route, { method: 'POST', rawBody: '{"id":"evt_forged","type":"checkout.session.completed"}', user: fx.owner, headers: EVIL }), noParams);
-    expect(res.status).toBe(400);
-    expect((await res.json()).error).toMatch(/signed by the payments service/);
-  });
+  test.each(SIGNED_BY_SERVICE)(
+    '%s comes from a service, not a browser: with a browser’s cookie and another site’s headers, it still wants the signature (400)',
+    async (route) => {
+      const mod = (await import(/* @vite-ignore */ path.resolve('app/api', route.slice('/api/'.length), 'route.ts'))) as Record<
+        string,
+        typeof jobsRoute.POST
+      >;
+      const res = await mod.POST(
+        await request(route, { method: 'POST', rawBody: '{"id":"evt_forged","type":"checkout.session.completed"}', user: fx.owner, headers: EVIL }),
+        noParams,
+      );
+      expect(res.status).toBe(400);
+      expect((await res.json()).error).toMatch(/signed by the payments service/);
+    },
+  );
 });
 
 describe('a body over the limit is stopped while it streams', () => {
@@ -140,21 +181,34 @@ describe('a body over the limit is stopped while it streams', () => {
   });
 
   test('a declared Content-Length over the limit is refused without reading', async () => {
-    const res = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', body: { name: 'x' }, user: fx.owner, headers: { 'content-length': String(MAX_BODY_BYTES + 1) } }), noParams);
+    const res = await jobsRoute.POST(
+      await request('/api/jobs', { method: 'POST', body: { name: 'x' }, user: fx.owner, headers: { 'content-length': String(MAX_BODY_BYTES + 1) } }),
+      noParams,
+    );
     expect(res.status).toBe(413);
   });
 });
 
 describe('control characters in text', () => {
   test('a job name with NUL is a 422 with the field message (it was a 500 from PostgreSQL)', async () => {
-    const res = await jobsRoute.POST(await request('/api/jobs', { method: 'POST', body: { name: 'Pantry\u0000', notes: 'ok' }, user: fx.owner }), noParams);
+    const res = await jobsRoute.POST(
+      await request('/api/jobs', { method: 'POST', body: { name: 'Pantry\u0000', notes: 'ok' }, user: fx.owner }),
+      noParams,
+    );
     expect(res.status).toBe(422);
     expect((await res.json()).fields.name).toEqual(['Remove the control character (an invisible character such as NUL) from this text.']);
   });
 
   test('a new person’s e-mail with spaces around it is trimmed, not refused', async () => {
     const email = uniqueEmail('spaced');
-    const res = await teamRoute.POST(await request('/api/team', { method: 'POST', body: { name: 'Tomas Reyes', email: `  ${email.toUpperCase()} `, role: 'cutter', password: 'a-long-enough-password' }, user: fx.owner }), noParams);
+    const res = await teamRoute.POST(
+      await request('/api/team', {
+        method: 'POST',
+        body: { name: 'Tomas Reyes', email: `  ${email.toUpperCase()} `, role: 'cutter', password: 'a-long-enough-password' },
+        user: fx.owner,
+      }),
+      noParams,
+    );
     expect(res.status).toBe(201);
     expect((await res.json()).email).toBe(email.toLowerCase());
   });
@@ -170,12 +224,23 @@ describe('control characters in text', () => {
     return value;
   };
   const countStrings = (value: unknown): number =>
-    typeof value === 'string' ? 1 : Array.isArray(value) ? value.reduce((n: number, v) => n + countStrings(v), 0) : value && typeof value === 'object' ? Object.values(value).reduce((n: number, v) => n + countStrings(v), 0) : 0;
-  const cases = TABLE.filter((r) => r.method !== 'GET' && countStrings(r.body) > 0).flatMap((r) => Array.from({ length: countStrings(r.body) }, (_, at) => ({ ...r, at })));
+    typeof value === 'string'
+      ? 1
+      : Array.isArray(value)
+        ? value.reduce((n: number, v) => n + countStrings(v), 0)
+        : value && typeof value === 'object'
+          ? Object.values(value).reduce((n: number, v) => n + countStrings(v), 0)
+          : 0;
+  const cases = TABLE.filter((r) => r.method !== 'GET' && countStrings(r.body) > 0).flatMap((r) =>
+    Array.from({ length: countStrings(r.body) }, (_, at) => ({ ...r, at })),
+  );
   test.each(cases)('$method $route with NUL in string #$at → never 500', async ({ route, method, body, target, at }) => {
     const params = target ? await target({ ...fx, db: handle.db }) : {};
     const url = Object.entries(params).reduce((u, [k, v]) => u.replace(`[${k}]`, v), route);
-    const mod = (await import(/* @vite-ignore */ path.resolve('app/api', route.slice('/api/'.length), 'route.ts'))) as Record<string, typeof jobsRoute.POST>;
+    const mod = (await import(/* @vite-ignore */ path.resolve('app/api', route.slice('/api/'.length), 'route.ts'))) as Record<
+      string,
+      typeof jobsRoute.POST
+    >;
     const payload = JSON.parse(JSON.stringify(withNul(body, at)).replace('EMAIL', uniqueEmail('nul')));
     const res = await mod[method](await request(url, { method, body: payload, user: fx.owner }), { params: Promise.resolve(params) } as never);
     expect(res.status, await res.clone().text()).toBeLessThan(500);

@@ -18,7 +18,10 @@ export interface TestUser {
 /** Two shops: "mine" with one person per role, and "theirs" with an owner, each with a job. */
 export async function twoShops(db: Db) {
   const hash = await bcrypt.hash(TEST_PASSWORD, 4);
-  const [mine, theirs] = await db.insert(shops).values([{ name: 'Birchwood Joinery' }, { name: 'Elm Street Millwork' }]).returning();
+  const [mine, theirs] = await db
+    .insert(shops)
+    .values([{ name: 'Birchwood Joinery' }, { name: 'Elm Street Millwork' }])
+    .returning();
   const people = await db
     .insert(users)
     .values([

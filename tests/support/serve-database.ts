@@ -19,8 +19,24 @@ let n = 0;
 while (!stop) {
   n += 1;
   await handle.db.transaction(async (tx) => {
-    const [job] = await tx.insert(jobs).values({ shopId: shop.id, name: `Live write ${n}` }).returning({ id: jobs.id });
-    await tx.insert(parts).values([1, 2, 3].map((k) => ({ shopId: shop.id, jobId: job.id, label: `Part ${k}`, quantity: k, lengthMm: 600, widthMm: 300, thicknessMm: 18, material: 'Birch ply' })));
+    const [job] = await tx
+      .insert(jobs)
+      .values({ shopId: shop.id, name: `Live write ${n}` })
+      .returning({ id: jobs.id });
+    await tx
+      .insert(parts)
+      .values(
+        [1, 2, 3].map((k) => ({
+          shopId: shop.id,
+          jobId: job.id,
+          label: `Part ${k}`,
+          quantity: k,
+          lengthMm: 600,
+          widthMm: 300,
+          thicknessMm: 18,
+          material: 'Birch ply',
+        })),
+      );
     await tx.update(jobs).set({ notes: 'three parts' }).where(eq(jobs.id, job.id));
   });
   process.stdout.write(`wrote ${n}\n`);

@@ -32,8 +32,16 @@ export interface Answer<T = any> {
 }
 
 /** Calls a route handler as `user`, with `id` as the path parameter. */
-export async function call<T = any>(handler: unknown, url: string, id: string, user: TestUser, init: { method?: string; body?: unknown } = {}): Promise<Answer<T>> {
-  const res = await (handler as Handler)(await request(url, { method: init.method ?? 'GET', body: init.body, user }), { params: Promise.resolve({ id }) });
+export async function call<T = any>(
+  handler: unknown,
+  url: string,
+  id: string,
+  user: TestUser,
+  init: { method?: string; body?: unknown } = {},
+): Promise<Answer<T>> {
+  const res = await (handler as Handler)(await request(url, { method: init.method ?? 'GET', body: init.body, user }), {
+    params: Promise.resolve({ id }),
+  });
   return { status: res.status, body: await res.json() };
 }
 
@@ -52,12 +60,41 @@ export interface PartRow {
 export async function jobWithSheet(
   db: Db,
   shopId: string,
-  { parts: rows, onHand = 4, status = 'quoting' as JobStatus, acceptedAt = null as Date | null, customerEmail = null as string | null }: { parts: PartRow[]; onHand?: number; status?: JobStatus; acceptedAt?: Date | null; customerEmail?: string | null },
+  {
+    parts: rows,
+    onHand = 4,
+    status = 'quoting' as JobStatus,
+    acceptedAt = null as Date | null,
+    customerEmail = null as string | null,
+  }: { parts: PartRow[]; onHand?: number; status?: JobStatus; acceptedAt?: Date | null; customerEmail?: string | null },
 ) {
   const material = `Day ply ${nextNumber()}`;
-  const [customer] = customerEmail ? await db.insert(customers).values({ shopId, name: `Customer for ${material}`, email: customerEmail }).returning() : [];
-  const [job] = await db.insert(jobs).values({ shopId, name: `Job in ${material}`, status, acceptedAt, customerId: customer?.id ?? null }).returning();
-  await db.insert(parts).values(rows.map((p, i) => ({ shopId, jobId: job.id, label: p.label, quantity: p.quantity, lengthMm: p.lengthMm, widthMm: p.widthMm, thicknessMm: 18, material, grain: p.grain ?? 'along-length', sort: i })));
+  const [customer] = customerEmail
+    ? await db
+        .insert(customers)
+        .values({ shopId, name: `Customer for ${material}`, email: customerEmail })
+        .returning()
+    : [];
+  const [job] = await db
+    .insert(jobs)
+    .values({ shopId, name: `Job in ${material}`, status, acceptedAt, customerId: customer?.id ?? null })
+    .returning();
+  await db
+    .insert(parts)
+    .values(
+      rows.map((p, i) => ({
+        shopId,
+        jobId: job.id,
+        label: p.label,
+        quantity: p.quantity,
+        lengthMm: p.lengthMm,
+        widthMm: p.widthMm,
+        thicknessMm: 18,
+        material,
+        grain: p.grain ?? 'along-length',
+        sort: i,
+      })),
+    );
   const [sheet] = await db
     .insert(stockItems)
     .values({ shopId, kind: 'sheet', material, nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand, costCents: 6000 })
@@ -67,7 +104,11 @@ export async function jobWithSheet(
 }
 
 /** What the Nest screen does: reads the request, nests it in the engine, saves the result as a draft. */
-export async function nestAndSave(user: TestUser, jobId: string, { for: nestFor = 'cut-list', name = 'Plan' }: { for?: 'cut-list' | 'recuts'; name?: string } = {}) {
+export async function nestAndSave(
+  user: TestUser,
+  jobId: string,
+  { for: nestFor = 'cut-list', name = 'Plan' }: { for?: 'cut-list' | 'recuts'; name?: string } = {},
+) {
   const offered = await call<NestRequestInput>(nestRequestRoute.GET, `/api/jobs/${jobId}/nest-request?for=${nestFor}`, jobId, user);
   if (offered.status !== 200) throw new Error(`nest request: ${offered.status} ${JSON.stringify(offered.body)}`);
   const settings = { timeBudgetMs: 0, preferOffcuts: true };
@@ -82,12 +123,16 @@ export async function nestAndSave(user: TestUser, jobId: string, { for: nestFor 
 
 export const release = (user: TestUser, planId: string) => call(releaseRoute.POST, `/api/plans/${planId}/release`, planId, user, { method: 'POST' });
 export const cancel = (user: TestUser, planId: string) => call(cancelRoute.POST, `/api/plans/${planId}/cancel`, planId, user, { method: 'POST' });
-export const finish = (user: TestUser, planId: string, body: FinishPlanInput = {}) => call(doneRoute.POST, `/api/plans/${planId}/done`, planId, user, { method: 'POST', body });
-export const tick = (user: TestUser, planId: string, step: { piece: number; step: number }) => call(stepsRoute.POST, `/api/plans/${planId}/steps`, planId, user, { method: 'POST', body: step });
-export const editJob = (user: TestUser, jobId: string, body: unknown) => call(jobRoute.PATCH, `/api/jobs/${jobId}`, jobId, user, { method: 'PATCH', body });
+export const finish = (user: TestUser, planId: string, body: FinishPlanInput = {}) =>
+  call(doneRoute.POST, `/api/plans/${planId}/done`, planId, user, { method: 'POST', body });
+export const tick = (user: TestUser, planId: string, step: { piece: number; step: number }) =>
+  call(stepsRoute.POST, `/api/plans/${planId}/steps`, planId, user, { method: 'POST', body: step });
+export const editJob = (user: TestUser, jobId: string, body: unknown) =>
+  call(jobRoute.PATCH, `/api/jobs/${jobId}`, jobId, user, { method: 'PATCH', body });
 export const deleteJob = (user: TestUser, jobId: string) => call(jobRoute.DELETE, `/api/jobs/${jobId}`, jobId, user, { method: 'DELETE' });
 export const recutList = (user: TestUser, jobId: string) => call<RecutView[]>(recutsRoute.GET, `/api/jobs/${jobId}/recuts`, jobId, user);
-export const cancelRecut = (user: TestUser, recutId: string, reason: string) => call(cancelRecutRoute.POST, `/api/recuts/${recutId}/cancel`, recutId, user, { method: 'POST', body: { reason } });
+export const cancelRecut = (user: TestUser, recutId: string, reason: string) =>
+  call(cancelRecutRoute.POST, `/api/recuts/${recutId}/cancel`, recutId, user, { method: 'POST', body: { reason } });
 
 /** The job's status as its page reads it. */
 export async function jobStatus(user: TestUser, jobId: string): Promise<JobStatus> {

@@ -26,9 +26,13 @@ export default async function JobsPage({ searchParams }: { searchParams: Promise
         <div role="alert" className="rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">
           <p>This link’s view of the jobs list does not work:</p>
           <ul className="ml-5 list-disc">
-            {Object.entries(zodFieldErrors(parsed.error)).map(([field, messages]) => <li key={field}>{messages.join(' ')}</li>)}
+            {Object.entries(zodFieldErrors(parsed.error)).map(([field, messages]) => (
+              <li key={field}>{messages.join(' ')}</li>
+            ))}
           </ul>
-          <Link href="/jobs" className="underline">Show the jobs list</Link>
+          <Link href="/jobs" className="underline">
+            Show the jobs list
+          </Link>
         </div>
       </>
     );

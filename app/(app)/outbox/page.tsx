@@ -23,11 +23,18 @@ export default async function OutboxPage() {
       <PageHeader
         title="Outbox"
         lead="Every mail Kerfwise sends for the shop — invites, password resets, quotes — and how its delivery went. A mail the server could not deliver waits and is tried again; one the receiving server refused is marked failed with its reason."
-        actions={demo ? <Link href="/sent-mail" className="btn-quiet">Sent mail (demo)</Link> : undefined}
+        actions={
+          demo ? (
+            <Link href="/sent-mail" className="btn-quiet">
+              Sent mail (demo)
+            </Link>
+          ) : undefined
+        }
       />
       {failed.length > 0 && (
         <p role="alert" className="mb-4 rounded-md bg-brick-wash px-3 py-2 text-sm text-brick">
-          {failed.length === 1 ? '1 mail could not be delivered.' : `${failed.length} mails could not be delivered.`} Check the address, then try again.
+          {failed.length === 1 ? '1 mail could not be delivered.' : `${failed.length} mails could not be delivered.`} Check the address, then try
+          again.
         </p>
       )}
       {entries.length === 0 ? (
@@ -44,7 +51,9 @@ export default async function OutboxPage() {
                 </p>
                 {e.status !== 'sent' && e.lastError && (
                   <p className={`mt-1 text-xs ${e.status === 'failed' ? 'text-brick' : 'text-graphite-mute'}`}>
-                    {e.status === 'pending' ? `Attempt ${e.attempts} did not go through (${e.lastError}); next try ${when(e.nextAttemptAt)}.` : e.lastError}
+                    {e.status === 'pending'
+                      ? `Attempt ${e.attempts} did not go through (${e.lastError}); next try ${when(e.nextAttemptAt)}.`
+                      : e.lastError}
                   </p>
                 )}
               </div>

@@ -22,7 +22,12 @@ const SOURCE = { plan: 'plan', 'low-stock': 'low stock', manual: 'by hand' } as 
 export default async function PurchaseOrdersPage() {
   const user = await requirePageUser('purchasing:read');
   const db = await getDb();
-  const [settings, buying, orders, low] = await Promise.all([getShopSettings(db, user.shopId), getBuyingSettings(db, user.shopId), listPurchaseOrders(db, user.shopId), lowStockWithOrders(db, user.shopId)]);
+  const [settings, buying, orders, low] = await Promise.all([
+    getShopSettings(db, user.shopId),
+    getBuyingSettings(db, user.shopId),
+    listPurchaseOrders(db, user.shopId),
+    lowStockWithOrders(db, user.shopId),
+  ]);
   if (!settings || !buying) return null;
   const money = (m: number) => formatMoney(m, settings.currency);
   const when = (iso: string) => formatShopDateTime(new Date(iso), settings.timeZone);
@@ -35,14 +40,21 @@ export default async function PurchaseOrdersPage() {
       <PageHeader
         title="Purchase orders"
         lead="What the shop orders from its suppliers: made from a plan’s stock to buy (on its Takeoff) or from the sizes running low, one draft per supplier. Edit a draft, send it to the supplier by e-mail with its PDF, then receive the delivery into the stock room."
-        actions={<Link href="/stock" className="btn-quiet">Stock room</Link>}
+        actions={
+          <Link href="/stock" className="btn-quiet">
+            Stock room
+          </Link>
+        }
       />
 
       <section aria-label="Running low" className="mb-6">
         <div className="mb-2 flex flex-wrap items-end justify-between gap-3">
           <div>
             <h2>Running low</h2>
-            <p className="max-w-2xl text-sm text-graphite-mute">Sizes whose free count is at or below their low mark. An order brings each back up to twice its mark, less what open orders already bring.</p>
+            <p className="max-w-2xl text-sm text-graphite-mute">
+              Sizes whose free count is at or below their low mark. An order brings each back up to twice its mark, less what open orders already
+              bring.
+            </p>
           </div>
           {canWrite && <OrderLowStockButton disabled={toOrder.length === 0} />}
         </div>
@@ -52,7 +64,14 @@ export default async function PurchaseOrdersPage() {
           <div className="card overflow-x-auto">
             <table className="data-table min-w-[36rem]" aria-label="Sizes running low">
               <thead>
-                <tr><th>Stock size</th><th>Supplier</th><th className="num">Free</th><th className="num">Mark</th><th className="num">On order</th><th className="num">To order</th></tr>
+                <tr>
+                  <th>Stock size</th>
+                  <th>Supplier</th>
+                  <th className="num">Free</th>
+                  <th className="num">Mark</th>
+                  <th className="num">On order</th>
+                  <th className="num">To order</th>
+                </tr>
               </thead>
               <tbody>
                 {low.map((i) => (
@@ -82,14 +101,26 @@ export default async function PurchaseOrdersPage() {
           <div className="card overflow-x-auto">
             <table className="data-table min-w-[44rem]" aria-label="Purchase orders">
               <thead>
-                <tr><th>Order</th><th>Supplier</th><th>Status</th><th className="num">Lines</th><th className="num">Total</th><th>From</th><th>Made</th></tr>
+                <tr>
+                  <th>Order</th>
+                  <th>Supplier</th>
+                  <th>Status</th>
+                  <th className="num">Lines</th>
+                  <th className="num">Total</th>
+                  <th>From</th>
+                  <th>Made</th>
+                </tr>
               </thead>
               <tbody>
                 {orders.map((o) => (
                   <tr key={o.id}>
-                    <td className="whitespace-nowrap font-medium"><Link href={`/purchase-orders/${o.id}`}>{o.title}</Link></td>
+                    <td className="whitespace-nowrap font-medium">
+                      <Link href={`/purchase-orders/${o.id}`}>{o.title}</Link>
+                    </td>
                     <td>{o.supplier}</td>
-                    <td><PoStatusBadge status={o.status} /></td>
+                    <td>
+                      <PoStatusBadge status={o.status} />
+                    </td>
                     <td className="num">{o.lines.length}</td>
                     <td className="num">{money(o.totalCents)}</td>
                     <td className="text-sm">{o.source === 'plan' && o.planName ? <>plan “{o.planName}”</> : SOURCE[o.source]}</td>

@@ -12,7 +12,8 @@ import { mailConfig } from '@/lib/mail/config';
 
 export const metadata: Metadata = { title: 'Sent mail' };
 
-const when = (iso: string | null) => (iso ? new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC' : '—');
+const when = (iso: string | null) =>
+  iso ? new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC' : '—';
 const size = (bytes: number) => (bytes < 1024 ? `${bytes} B` : `${(bytes / 1024).toFixed(1)} KB`);
 
 /**
@@ -35,7 +36,11 @@ export default async function SentMailPage({ searchParams }: { searchParams: Pro
       <PageHeader
         title="Sent mail"
         lead="The demo delivers nothing: every mail is caught on this machine and kept here, exactly as a recipient would receive it."
-        actions={<Link href="/outbox" className="btn-quiet">Outbox</Link>}
+        actions={
+          <Link href="/outbox" className="btn-quiet">
+            Outbox
+          </Link>
+        }
       />
       {!open ? (
         <EmptyState title="No mail caught yet.">Invite someone on the Team page: the invite lands here.</EmptyState>
@@ -86,7 +91,12 @@ export default async function SentMailPage({ searchParams }: { searchParams: Pro
               <h3 className="mb-2 text-xs font-semibold uppercase tracking-wide text-graphite-mute">HTML</h3>
               {open.html ? (
                 // Sandboxed without scripts, forms or same-origin access: the mail's HTML can only be looked at.
-                <iframe aria-label={`HTML part of “${open.subject}”`} sandbox="" srcDoc={open.html} className="h-[32rem] w-full rounded border border-paper-edge bg-white" />
+                <iframe
+                  aria-label={`HTML part of “${open.subject}”`}
+                  sandbox=""
+                  srcDoc={open.html}
+                  className="h-[32rem] w-full rounded border border-paper-edge bg-white"
+                />
               ) : (
                 <p className="text-sm text-graphite-mute">This mail has no HTML part.</p>
               )}

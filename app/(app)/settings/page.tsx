@@ -12,7 +12,10 @@ export default async function SettingsPage() {
   await requirePageUser('settings:write');
   return (
     <>
-      <PageHeader title="Shop settings" lead="Units everyone sees, the cutting defaults every new nest starts from, the saws plans are cut on, the drawer slides boxes are sized on, and the pricing quotes start from." />
+      <PageHeader
+        title="Shop settings"
+        lead="Units everyone sees, the cutting defaults every new nest starts from, the saws plans are cut on, the drawer slides boxes are sized on, and the pricing quotes start from."
+      />
       <SettingsForm />
       <SawsSection />
       <SlideModelsSection />

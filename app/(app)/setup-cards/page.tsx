@@ -15,7 +15,10 @@ export default async function SetupCardsPage() {
   if (!settings) notFound();
   return (
     <>
-      <PageHeader title="Setup cards" lead="The machine settings that cut a good joint, saved per joint and stock thickness. Drawer schedules show the cards they need. Always make a test cut in scrap first." />
+      <PageHeader
+        title="Setup cards"
+        lead="The machine settings that cut a good joint, saved per joint and stock thickness. Drawer schedules show the cards they need. Always make a test cut in scrap first."
+      />
       <SetupCardsManager units={settings.units} canWrite={can(user.role, 'cutlist:write')} />
     </>
   );

@@ -17,7 +17,11 @@ export default async function ShopFloorPage() {
   const user = await requirePageUser('sawsteps:tick');
   const db = await getDb();
   const plans = await listPlansByStatus(db, user.shopId, ['released', 'cutting']);
-  const ticks = await countStepTicks(db, user.shopId, plans.map((p) => p.id));
+  const ticks = await countStepTicks(
+    db,
+    user.shopId,
+    plans.map((p) => p.id),
+  );
   // Oldest released work first: the list comes newest-changed first.
   const queue = await Promise.all(
     [...plans].reverse().map(async (p) => {
@@ -36,7 +40,11 @@ export default async function ShopFloorPage() {
         <ul className="grid gap-4 md:grid-cols-2" aria-label="Plans to cut">
           {queue.map((p) => (
             <li key={p.id}>
-              <Link href={`/shop-floor/${p.id}`} className="card block p-5 no-underline transition hover:border-oak hover:shadow-sm" data-testid="queue-plan">
+              <Link
+                href={`/shop-floor/${p.id}`}
+                className="card block p-5 no-underline transition hover:border-oak hover:shadow-sm"
+                data-testid="queue-plan"
+              >
                 <div className="flex items-start justify-between gap-3">
                   <div>
                     <div className="text-xl font-semibold text-graphite">{p.jobName}</div>

@@ -55,10 +55,18 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
 
   return (
     <>
-      <PageHeader title="Stock room" lead="Sheets, boards and offcuts on the rack. Released plans reserve what they use; finished plans take it and rack their offcuts." />
+      <PageHeader
+        title="Stock room"
+        lead="Sheets, boards and offcuts on the rack. Released plans reserve what they use; finished plans take it and rack their offcuts."
+      />
       <div className="mb-5 grid gap-3 sm:grid-cols-3">
         {value && money && (
-          <FigureCard label="Stock value at cost" value={money(value.totalCents)} detail={`${money(value.stockCents)} in sheets and boards · ${money(value.offcutCents)} in offcuts`} testId="stock-value" />
+          <FigureCard
+            label="Stock value at cost"
+            value={money(value.totalCents)}
+            detail={`${money(value.stockCents)} in sheets and boards · ${money(value.offcutCents)} in offcuts`}
+            testId="stock-value"
+          />
         )}
         <FigureCard label="Sizes running low" value={lowCount} tone={lowCount ? 'text-amber' : ''} detail="free count at or below the size’s mark" />
       </div>
@@ -82,7 +90,9 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
 
       {view === 'stock' &&
         (items.length === 0 ? (
-          <EmptyState title={allItems.length ? 'Nothing matches these filters.' : 'The rack is empty.'}>{allItems.length ? 'Clear a filter to see more.' : 'Add a stock size or import a CSV to start.'}</EmptyState>
+          <EmptyState title={allItems.length ? 'Nothing matches these filters.' : 'The rack is empty.'}>
+            {allItems.length ? 'Clear a filter to see more.' : 'Add a stock size or import a CSV to start.'}
+          </EmptyState>
         ) : (
           <StockTable items={items} len={len} thick={thick} money={money} currency={settings.currency} canWrite={can(user.role, 'stock:write')} />
         ))}
@@ -97,7 +107,12 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
           History of one size. <Link href="/stock?view=history">Show every movement</Link>
         </p>
       )}
-      {view === 'history' && (movements.length + changes.length === 0 ? <EmptyState title="No stock has moved yet." /> : <MovementHistory movements={movements} changes={changes} money={money} timeZone={settings.timeZone} />)}
+      {view === 'history' &&
+        (movements.length + changes.length === 0 ? (
+          <EmptyState title="No stock has moved yet." />
+        ) : (
+          <MovementHistory movements={movements} changes={changes} money={money} timeZone={settings.timeZone} />
+        ))}
     </>
   );
 }

@@ -19,11 +19,21 @@ export default async function YieldPage() {
   if (!settings) return null;
   return (
     <>
-      <PageHeader title="Yield ledger" lead={`How much of the stock each finished plan turned into parts, what went back on the rack as offcuts, what the saw wasted (trim, kerf, scraps too small to keep), what was spoiled in parts damaged at the saw, and what the material cost. Dates are on the shop’s clock (${settings.timeZone.replace(/_/g, ' ')}).`} />
+      <PageHeader
+        title="Yield ledger"
+        lead={`How much of the stock each finished plan turned into parts, what went back on the rack as offcuts, what the saw wasted (trim, kerf, scraps too small to keep), what was spoiled in parts damaged at the saw, and what the material cost. Dates are on the shop’s clock (${settings.timeZone.replace(/_/g, ' ')}).`}
+      />
       {ledger.plans.length === 0 ? (
-        <EmptyState title="No finished plans yet.">A plan’s yield, waste and material cost are recorded here when the cutter marks it done.</EmptyState>
+        <EmptyState title="No finished plans yet.">
+          A plan’s yield, waste and material cost are recorded here when the cutter marks it done.
+        </EmptyState>
       ) : (
-        <YieldLedger ledger={ledger} money={(c) => formatMoney(c, settings.currency)} area={(a) => formatArea(a, settings.units)} day={(at) => shopDay(at, settings.timeZone)} />
+        <YieldLedger
+          ledger={ledger}
+          money={(c) => formatMoney(c, settings.currency)}
+          area={(a) => formatArea(a, settings.units)}
+          day={(at) => shopDay(at, settings.timeZone)}
+        />
       )}
     </>
   );

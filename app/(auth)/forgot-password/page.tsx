@@ -10,7 +10,11 @@ export default function ForgotPasswordPage() {
       <h1 className="mb-1 text-xl">Forgot your password?</h1>
       <p className="mb-5 text-sm text-graphite-mute">Enter the address you sign in with. We mail you a link to choose a new password.</p>
       <ForgotPasswordForm />
-      <p className="mt-5 text-sm"><Link href="/sign-in" className="underline">Back to sign in</Link></p>
+      <p className="mt-5 text-sm">
+        <Link href="/sign-in" className="underline">
+          Back to sign in
+        </Link>
+      </p>
     </div>
   );
 }

@@ -10,7 +10,11 @@ export default function SignInPage() {
       <h1 className="mb-1 text-xl">Sign in</h1>
       <p className="mb-5 text-sm text-graphite-mute">Cut lists, nesting and saw orders for your shop.</p>
       <SignInForm />
-      <p className="mt-5 text-sm"><Link href="/forgot-password" className="underline">Forgot your password?</Link></p>
+      <p className="mt-5 text-sm">
+        <Link href="/forgot-password" className="underline">
+          Forgot your password?
+        </Link>
+      </p>
     </div>
   );
 }

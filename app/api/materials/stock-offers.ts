@@ -7,4 +7,3 @@ export async function stockOffers(db: Db, shopId: string): Promise<StockOffer[]>
   const [items, offcuts] = await Promise.all([listStock(db, shopId), listOffcuts(db, shopId)]);
   return toStockOffers(items, offcuts);
 }
-

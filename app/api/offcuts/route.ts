@@ -11,4 +11,6 @@ export const GET = route({ permission: 'stock:read', query: stockFilterSchema },
 });
 
 // POST /api/offcuts – record an offcut put on the rack at the saw
-export const POST = route({ permission: 'offcuts:record', body: recordOffcutSchema, status: 201 }, async ({ db, user, body }) => recordOffcut(db, user.shopId, user.id, body));
+export const POST = route({ permission: 'offcuts:record', body: recordOffcutSchema, status: 201 }, async ({ db, user, body }) =>
+  recordOffcut(db, user.shopId, user.id, body),
+);

@@ -6,4 +6,6 @@ import { sawSchema } from '@/shared/schemas/saw';
 export const GET = route({ permission: 'settings:read' }, async ({ db, user }) => listSaws(db, user.shopId));
 
 // POST /api/saws – add a saw (owner); refuses a second saw of the same name (409)
-export const POST = route({ permission: 'settings:write', body: sawSchema, status: 201 }, async ({ db, user, body }) => createSaw(db, user.shopId, user.id, body));
+export const POST = route({ permission: 'settings:write', body: sawSchema, status: 201 }, async ({ db, user, body }) =>
+  createSaw(db, user.shopId, user.id, body),
+);

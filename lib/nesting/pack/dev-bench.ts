@@ -23,16 +23,21 @@ for (let k = 0; k < instances.length; k += Number(every)) {
   const bin = { id: 0, w: inst.bin.w, h: inst.bin.h, count: null, cost: 1, priority: 1 };
   let first = -1;
   const iterations = process.env.PK_ITERS ? Number(process.env.PK_ITERS) : undefined;
-  const r = await packWithLimits(items, [bin], {
-    kerf: 0,
-    style: style as 'panel',
-    objective: 'pieces',
-    timeBudgetMs: Number(ms),
-    seed: 1,
-    onProgress: (p) => {
-      if (first < 0) first = p.binsUsed;
+  const r = await packWithLimits(
+    items,
+    [bin],
+    {
+      kerf: 0,
+      style: style as 'panel',
+      objective: 'pieces',
+      timeBudgetMs: Number(ms),
+      seed: 1,
+      onProgress: (p) => {
+        if (first < 0) first = p.binsUsed;
+      },
     },
-  }, { maxIterations: iterations });
+    { maxIterations: iterations },
+  );
   const lb = lowerBound(inst.items, inst.bin, rotation);
   const c = perClass.get(inst.cls!) ?? { bins: 0, lb: 0, first: 0 };
   c.bins += r.bins.length;

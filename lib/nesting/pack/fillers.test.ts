@@ -14,7 +14,13 @@ function fillOne(kind: FillerKind, bin: [number, number], parts: [number, number
   const f = kind.create(parts.length, kerf);
   const items = table(parts);
   f.reset(bin[0], bin[1], Math.min(...parts.flat().filter((v): v is number => typeof v === 'number')));
-  f.fill(items, parts.map((_, i) => i), parts.length, rule, Math.min(...items.area));
+  f.fill(
+    items,
+    parts.map((_, i) => i),
+    parts.length,
+    rule,
+    Math.min(...items.area),
+  );
   return { f, ...f.finish(parts.map((_, i) => 100 + i)) };
 }
 
@@ -48,7 +54,15 @@ describe('kerf in the cut tree [derived from the contract: each cut removes exac
   });
 
   test('two parts side by side are exactly a kerf apart', () => {
-    const { items } = fillOne(panelFiller, [1000, 500], [[400, 500, false], [400, 500, false]], 3.2);
+    const { items } = fillOne(
+      panelFiller,
+      [1000, 500],
+      [
+        [400, 500, false],
+        [400, 500, false],
+      ],
+      3.2,
+    );
     const xs = items.map((p) => p.rect.x).sort((a, b) => a - b);
     expect(xs[1] - (xs[0] + 400)).toBeCloseTo(3.2, 9);
   });
@@ -61,7 +75,15 @@ describe('kerf in the cut tree [derived from the contract: each cut removes exac
 
 describe('strips', () => {
   test('parts lower than their strip get one trim rip; the strip rip runs the full length', () => {
-    const { tree, items } = fillOne(stripFiller, [1000, 500], [[300, 200, false], [300, 150, false]], 3);
+    const { tree, items } = fillOne(
+      stripFiller,
+      [1000, 500],
+      [
+        [300, 200, false],
+        [300, 150, false],
+      ],
+      3,
+    );
     expect(items.map((p) => p.rect)).toEqual([
       { x: 0, y: 0, w: 300, h: 200 },
       { x: 303, y: 0, w: 300, h: 150 },
@@ -71,7 +93,15 @@ describe('strips', () => {
     const strip = tree.type === 'cut' ? tree.children[0] : tree;
     expect(strip).toMatchObject({ type: 'cut', axis: 'x', pos: 300, children: [{ type: 'item' }, { type: 'cut', axis: 'x', pos: 603 }] });
     const second = strip.type === 'cut' && strip.children[1]?.type === 'cut' ? strip.children[1].children[0] : null;
-    expect(second).toMatchObject({ type: 'cut', axis: 'y', pos: 150, children: [{ type: 'item', itemId: 101 }, { type: 'leftover', rect: { y: 153, h: 47 } }] });
+    expect(second).toMatchObject({
+      type: 'cut',
+      axis: 'y',
+      pos: 150,
+      children: [
+        { type: 'item', itemId: 101 },
+        { type: 'leftover', rect: { y: 153, h: 47 } },
+      ],
+    });
   });
 
   test('a part that opens a strip lies flat when it may turn (rule 0) and stands up under rule 1', () => {

@@ -125,7 +125,8 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
       continue;
     }
     // One bin type with enough stock and a bin-count objective: eliminate bins; otherwise improve the mix.
-    if (!pooled && p.types.length === 1 && p.objective !== 'cuts' && b.noStock.length === 0 && b.bins.length > 1) pooled = new PoolSearch(p, b, orderKeys);
+    if (!pooled && p.types.length === 1 && p.objective !== 'cuts' && b.noStock.length === 0 && b.bins.length > 1)
+      pooled = new PoolSearch(p, b, orderKeys);
     if (pooled) {
       const fewer = pooled.step(f, rng, ATTEMPTS_PER_BIN, scratch, mark);
       if (fewer) offer(fewer);
@@ -170,7 +171,14 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
 
 const fill = (p: Problem, bin: Solution['bins'][number]) => bin.used / (p.types[bin.type].w * p.types[bin.type].h);
 
-function report(p: Problem, f: BinFiller, s: Solution, prior: PackResult['unplaced'], onProgress: NonNullable<PackOptions['onProgress']>, elapsed: number) {
+function report(
+  p: Problem,
+  f: BinFiller,
+  s: Solution,
+  prior: PackResult['unplaced'],
+  onProgress: NonNullable<PackOptions['onProgress']>,
+  elapsed: number,
+) {
   onProgress(progressOf(p, toResult(p, s, f, prior), s, elapsed));
 }
 
@@ -224,7 +232,14 @@ function binLowerBound(p: Problem): number | null {
   if (p.n > STRONG_BOUND_MAX_PARTS) return lb;
   const sizes = Array.from({ length: p.n }, (_, i) => ({ w: p.w[i], h: p.h[i] }));
   try {
-    lb = Math.max(lb, lowerBound(sizes, bin, p.canRotate.some((r) => r === 1)));
+    lb = Math.max(
+      lb,
+      lowerBound(
+        sizes,
+        bin,
+        p.canRotate.some((r) => r === 1),
+      ),
+    );
   } catch {
     // The shared bound refuses odd input (e.g. float sizes it cannot handle): the continuous bound still holds.
   }

@@ -8,7 +8,8 @@ import type { BinType, PackItem, PackOptions } from './types';
 const opts = (o: Partial<PackOptions> = {}): PackOptions => ({ kerf: 0, style: 'panel', objective: 'cost', timeBudgetMs: 60_000, seed: 7, ...o });
 const sheet = (w: number, h: number, o: Partial<BinType> = {}): BinType => ({ id: 1, w, h, count: null, cost: 1, priority: 1, ...o });
 const run = (items: PackItem[], stock: BinType[], o: PackOptions) => packWithLimits(items, stock, o, { maxIterations: 30 });
-const parts = (n: number, w: number, h: number, canRotate = true, from = 0): PackItem[] => Array.from({ length: n }, (_, i) => ({ id: from + i, w, h, canRotate }));
+const parts = (n: number, w: number, h: number, canRotate = true, from = 0): PackItem[] =>
+  Array.from({ length: n }, (_, i) => ({ id: from + i, w, h, canRotate }));
 
 describe('worked examples', () => {
   test.each([
@@ -26,8 +27,20 @@ describe('worked examples', () => {
   });
 
   test.each([
-    { label: 'strip count, derived: 48″ wide, 11⅞″ strips, ⅛″ kerf → ⌊(48 + ⅛)/(11⅞ + ⅛)⌋ = 4', width: inches(48), strip: inches(11.875), kerf: inches(0.125), expected: 4 },
-    { label: 'strip count, derived: ¼″ edge trim on both sides leaves 47.5″ → 3', width: inches(47.5), strip: inches(11.875), kerf: inches(0.125), expected: 3 },
+    {
+      label: 'strip count, derived: 48″ wide, 11⅞″ strips, ⅛″ kerf → ⌊(48 + ⅛)/(11⅞ + ⅛)⌋ = 4',
+      width: inches(48),
+      strip: inches(11.875),
+      kerf: inches(0.125),
+      expected: 4,
+    },
+    {
+      label: 'strip count, derived: ¼″ edge trim on both sides leaves 47.5″ → 3',
+      width: inches(47.5),
+      strip: inches(11.875),
+      kerf: inches(0.125),
+      expected: 3,
+    },
     { label: 'strip count, derived: 2440 − 2 × 10 mm trim, 600 mm strips, 3.2 mm kerf → 4', width: 2420, strip: 600, kerf: 3.2, expected: 4 },
   ])('$label', async ({ width, strip, kerf, expected }) => {
     expect(Math.floor((width + kerf) / (strip + kerf) + 1e-9)).toBe(expected);
@@ -86,12 +99,21 @@ describe('worked examples', () => {
 
   test('bad input is refused with a message naming the entry', async () => {
     await expect(packGuillotine([{ id: 1, w: -5, h: 10, canRotate: true }], [sheet(100, 100)], opts())).rejects.toThrow(/items\.0\.w/);
-    await expect(packGuillotine(parts(2, 5, 5).map((p) => ({ ...p, id: 1 })), [sheet(100, 100)], opts())).rejects.toThrow(/used twice/);
+    await expect(
+      packGuillotine(
+        parts(2, 5, 5).map((p) => ({ ...p, id: 1 })),
+        [sheet(100, 100)],
+        opts(),
+      ),
+    ).rejects.toThrow(/used twice/);
   });
 });
 
 // Whole units, or sixteenths of an inch in mm, so float positions and kerf meet.
-const lengthArb = fc.oneof(fc.integer({ min: 1, max: 120 }), fc.integer({ min: 16, max: 16 * 4 }).map((n) => inches(n / 16)));
+const lengthArb = fc.oneof(
+  fc.integer({ min: 1, max: 120 }),
+  fc.integer({ min: 16, max: 16 * 4 }).map((n) => inches(n / 16)),
+);
 const itemArb = fc.record({ w: lengthArb, h: lengthArb, canRotate: fc.boolean() });
 const binArb = fc.record({
   w: fc.integer({ min: 40, max: 200 }),
@@ -228,11 +250,18 @@ describe('search control', () => {
     const seen: number[] = [];
     const ac = new AbortController();
     setTimeout(() => ac.abort(), 600);
-    await packGuillotine(items, stock, opts({ signal: ac.signal, onProgress: (p) => {
-      expect(checkPackResult(items, stock, { kerf: 0, style: 'panel' }, p.best)).toEqual([]);
-      expect(p.fill).toBeLessThanOrEqual(1);
-      seen.push(p.binsUsed);
-    } }));
+    await packGuillotine(
+      items,
+      stock,
+      opts({
+        signal: ac.signal,
+        onProgress: (p) => {
+          expect(checkPackResult(items, stock, { kerf: 0, style: 'panel' }, p.best)).toEqual([]);
+          expect(p.fill).toBeLessThanOrEqual(1);
+          seen.push(p.binsUsed);
+        },
+      }),
+    );
     expect(seen.length).toBeGreaterThan(0);
     for (let i = 1; i < seen.length; i++) expect(seen[i]).toBeLessThanOrEqual(seen[i - 1]);
   });

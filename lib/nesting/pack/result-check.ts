@@ -3,7 +3,8 @@ import type { Rect } from '@/lib/geometry/rect';
 import type { BinType, CutNode, PackItem, PackOptions, PackResult } from './types';
 
 const TOL = 1e-6;
-const same = (a: Rect, b: Rect) => Math.abs(a.x - b.x) <= TOL && Math.abs(a.y - b.y) <= TOL && Math.abs(a.w - b.w) <= TOL && Math.abs(a.h - b.h) <= TOL;
+const same = (a: Rect, b: Rect) =>
+  Math.abs(a.x - b.x) <= TOL && Math.abs(a.y - b.y) <= TOL && Math.abs(a.w - b.w) <= TOL && Math.abs(a.h - b.h) <= TOL;
 const show = (r: Rect) => `(${r.x}, ${r.y}, ${r.w} × ${r.h})`;
 
 /**
@@ -33,7 +34,8 @@ export function checkPackResult(items: PackItem[], binTypes: BinType[], options:
       }
       if (p.rotated && !it.canRotate) problems.push(`bin ${b}: item ${it.id} rotated though it may not be`);
       const [w, h] = p.rotated ? [it.h, it.w] : [it.w, it.h];
-      if (Math.abs(p.rect.w - w) > TOL || Math.abs(p.rect.h - h) > TOL) problems.push(`bin ${b}: item ${it.id} footprint ${show(p.rect)} is not ${w} × ${h}`);
+      if (Math.abs(p.rect.w - w) > TOL || Math.abs(p.rect.h - h) > TOL)
+        problems.push(`bin ${b}: item ${it.id} footprint ${show(p.rect)} is not ${w} × ${h}`);
       if (!contains(binRect, p.rect, TOL)) problems.push(`bin ${b}: item ${it.id} ${show(p.rect)} is outside the bin`);
       area += w * h;
     }
@@ -53,7 +55,8 @@ export function checkPackResult(items: PackItem[], binTypes: BinType[], options:
       if (node.type === 'item') {
         if (leaves.has(node.itemId)) problems.push(`bin ${b}: item ${node.itemId} twice in the tree`);
         leaves.set(node.itemId, node.rect);
-        if (options.style === 'strips' && !/^y*x*y?$/.test(path)) problems.push(`bin ${b}: item ${node.itemId} reached by cuts ${path}, not 3-stage strips`);
+        if (options.style === 'strips' && !/^y*x*y?$/.test(path))
+          problems.push(`bin ${b}: item ${node.itemId} reached by cuts ${path}, not 3-stage strips`);
         return;
       }
       if (node.type === 'leftover') return;
@@ -63,11 +66,13 @@ export function checkPackResult(items: PackItem[], binTypes: BinType[], options:
       if (!(node.pos > lo + TOL && node.pos < end - TOL)) problems.push(`bin ${b}: cut ${node.axis} = ${node.pos} is not inside ${show(r)}`);
       if (Math.abs(node.kerf - k) > TOL) problems.push(`bin ${b}: cut takes ${node.kerf}, not the kerf ${k}`);
       const first = node.axis === 'x' ? { x: r.x, y: r.y, w: node.pos - r.x, h: r.h } : { x: r.x, y: r.y, w: r.w, h: node.pos - r.y };
-      if (!same(node.children[0].rect, first)) problems.push(`bin ${b}: first child ${show(node.children[0].rect)} of cut ${node.axis} = ${node.pos} should be ${show(first)}`);
+      if (!same(node.children[0].rect, first))
+        problems.push(`bin ${b}: first child ${show(node.children[0].rect)} of cut ${node.axis} = ${node.pos} should be ${show(first)}`);
       const rest = end - node.pos - k;
       if (node.children.length === 2) {
         const second = node.axis === 'x' ? { x: node.pos + k, y: r.y, w: rest, h: r.h } : { x: r.x, y: node.pos + k, w: r.w, h: rest };
-        if (!(rest > 0) || !same(node.children[1].rect, second)) problems.push(`bin ${b}: second child of cut ${node.axis} = ${node.pos} should be ${show(second)}`);
+        if (!(rest > 0) || !same(node.children[1].rect, second))
+          problems.push(`bin ${b}: second child of cut ${node.axis} = ${node.pos} should be ${show(second)}`);
       } else if (rest > TOL) problems.push(`bin ${b}: cut ${node.axis} = ${node.pos} drops ${rest} of material`);
       // Strips: every rip before the first crosscut runs the bin's full length.
       if (options.style === 'strips' && node.axis === 'y' && !path.includes('x') && (Math.abs(r.x) > TOL || Math.abs(r.w - type.w) > TOL))
@@ -88,6 +93,7 @@ export function checkPackResult(items: PackItem[], binTypes: BinType[], options:
     const n = seen.get(it.id) ?? 0;
     if (n !== 1) problems.push(`item ${it.id} appears ${n} times (placed or unplaced)`);
   }
-  for (const t of binTypes) if (t.count !== null && (used.get(t.id) ?? 0) > t.count) problems.push(`bin type ${t.id} used ${used.get(t.id)} times, only ${t.count} in stock`);
+  for (const t of binTypes)
+    if (t.count !== null && (used.get(t.id) ?? 0) > t.count) problems.push(`bin type ${t.id} used ${used.get(t.id)} times, only ${t.count} in stock`);
   return problems;
 }

@@ -37,4 +37,3 @@ export async function dragPart(page: Page, pieces: Piece[], i: number, part: Rec
   await page.mouse.up();
   return { x: box.x + from.x, y: box.y + from.y };
 }
-

@@ -13,7 +13,12 @@ const isRoot = process.getuid?.() === 0;
 
 function postgresBin(): string {
   const root = '/usr/lib/postgresql';
-  const versions = fs.existsSync(root) ? fs.readdirSync(root).filter((v) => fs.existsSync(path.join(root, v, 'bin/pg_ctl'))).sort((a, b) => Number(b) - Number(a)) : [];
+  const versions = fs.existsSync(root)
+    ? fs
+        .readdirSync(root)
+        .filter((v) => fs.existsSync(path.join(root, v, 'bin/pg_ctl')))
+        .sort((a, b) => Number(b) - Number(a))
+    : [];
   if (!versions.length) throw new Error("Debian's postgresql is not installed: run `apt-get install -y postgresql`.");
   return path.join(root, versions[0], 'bin');
 }
@@ -39,7 +44,9 @@ export async function startPostgres(): Promise<Cluster> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-pg-'));
   const port = String(await freePort());
   const asPg = (cmd: string, args: string[]) =>
-    isRoot ? spawnSync('runuser', ['-u', 'postgres', '--', path.join(bin, cmd), ...args], { stdio: 'pipe' }) : spawnSync(path.join(bin, cmd), args, { stdio: 'pipe' });
+    isRoot
+      ? spawnSync('runuser', ['-u', 'postgres', '--', path.join(bin, cmd), ...args], { stdio: 'pipe' })
+      : spawnSync(path.join(bin, cmd), args, { stdio: 'pipe' });
   if (isRoot) spawnSync('chown', ['postgres:postgres', dir]);
   const data = path.join(dir, 'data');
   const init = asPg('initdb', ['-D', data, '-U', 'postgres', '--auth=trust', '--no-sync', '-E', 'UTF8']);

@@ -30,7 +30,8 @@ export async function pageOverflow(page: Page) {
     for (const el of document.querySelectorAll('body *')) {
       const pos = getComputedStyle(el).position;
       const r = el.getBoundingClientRect();
-      if ((pos === 'absolute' || pos === 'fixed') && r.right > innerWidth + 0.5 && culprits.length < 6) culprits.push(`positioned ${describe(el)} → ${Math.round(r.right)} px`);
+      if ((pos === 'absolute' || pos === 'fixed') && r.right > innerWidth + 0.5 && culprits.length < 6)
+        culprits.push(`positioned ${describe(el)} → ${Math.round(r.right)} px`);
     }
     return { scrollWidth: root.scrollWidth, innerWidth, culprits };
   });
@@ -60,12 +61,17 @@ export async function clippedText(scope: Page | Locator): Promise<string[]> {
       const hidesY = s.overflowY === 'hidden' || s.overflowY === 'clip';
       const overX = hidesX && el.scrollWidth > el.clientWidth + 1;
       const overY = hidesY && el.scrollHeight > el.clientHeight + 1 && !el.matches('[aria-hidden="true"], .sr-only');
-      if (overX || overY) found.push(`"${(el.textContent ?? '').trim().slice(0, 60)}" in <${el.tagName.toLowerCase()} class="${el.className}"> (${el.scrollWidth}×${el.scrollHeight} in ${el.clientWidth}×${el.clientHeight})`);
+      if (overX || overY)
+        found.push(
+          `"${(el.textContent ?? '').trim().slice(0, 60)}" in <${el.tagName.toLowerCase()} class="${el.className}"> (${el.scrollWidth}×${el.scrollHeight} in ${el.clientWidth}×${el.clientHeight})`,
+        );
     }
     // A text box hides what does not fit inside it: its value must fit (a length keeps its ″).
     for (const input of root.querySelectorAll<HTMLInputElement>('input:not([type]), input[type="text"], input[type="search"]')) {
       if (visible(input) && input.value && input.scrollWidth > input.clientWidth + 1) {
-        found.push(`value "${input.value}" of the field ${input.getAttribute('aria-label') ?? input.name ?? input.id} (${input.scrollWidth} in ${input.clientWidth})`);
+        found.push(
+          `value "${input.value}" of the field ${input.getAttribute('aria-label') ?? input.name ?? input.id} (${input.scrollWidth} in ${input.clientWidth})`,
+        );
       }
     }
     for (const text of root.querySelectorAll<SVGTextElement>('svg text')) {
@@ -75,7 +81,9 @@ export async function clippedText(scope: Page | Locator): Promise<string[]> {
       const t = text.getBoundingClientRect();
       const box = svg.getBoundingClientRect();
       if (t.left < box.left - 0.5 || t.right > box.right + 0.5 || t.top < box.top - 0.5 || t.bottom > box.bottom + 0.5) {
-        found.push(`SVG text "${text.textContent}" reaches outside its drawing (${Math.round(t.left)}–${Math.round(t.right)} × ${Math.round(t.top)}–${Math.round(t.bottom)} in ${Math.round(box.left)}–${Math.round(box.right)} × ${Math.round(box.top)}–${Math.round(box.bottom)})`);
+        found.push(
+          `SVG text "${text.textContent}" reaches outside its drawing (${Math.round(t.left)}–${Math.round(t.right)} × ${Math.round(t.top)}–${Math.round(t.bottom)} in ${Math.round(box.left)}–${Math.round(box.right)} × ${Math.round(box.top)}–${Math.round(box.bottom)})`,
+        );
       }
     }
     return found;

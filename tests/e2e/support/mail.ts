@@ -6,10 +6,13 @@ import { E2E_MAIL } from './server';
 export async function mailFor(to: string, subject?: RegExp): Promise<CaughtMail> {
   let found: CaughtMail | undefined;
   await expect
-    .poll(async () => {
-      found = (await listCaughtMail(E2E_MAIL)).find((m) => m.to.includes(to) && (!subject || subject.test(m.subject)));
-      return Boolean(found);
-    }, { message: `a mail to ${to}${subject ? ` matching ${subject}` : ''} in ${E2E_MAIL}`, timeout: 20_000 })
+    .poll(
+      async () => {
+        found = (await listCaughtMail(E2E_MAIL)).find((m) => m.to.includes(to) && (!subject || subject.test(m.subject)));
+        return Boolean(found);
+      },
+      { message: `a mail to ${to}${subject ? ` matching ${subject}` : ''} in ${E2E_MAIL}`, timeout: 20_000 },
+    )
     .toBe(true);
   return found!;
 }

@@ -4,7 +4,9 @@ import { nestRequestSchema } from '@/shared/schemas/nesting';
 
 export async function jobId(page: Page, name: string): Promise<string> {
   // The list is paged: search for the name (archived jobs too), then take the exact match.
-  const { jobs }: { jobs: { id: string; name: string }[] } = await (await page.request.get(`/api/jobs?status=all&size=100&q=${encodeURIComponent(name)}`)).json();
+  const { jobs }: { jobs: { id: string; name: string }[] } = await (
+    await page.request.get(`/api/jobs?status=all&size=100&q=${encodeURIComponent(name)}`)
+  ).json();
   const job = jobs.find((j) => j.name === name);
   if (!job) throw new Error(`No job named ${name}`);
   return job.id;

@@ -23,7 +23,12 @@ export const PAYMENTS_FILE = path.join(E2E_DIR, 'payments-fake.json');
 
 function paymentsEnv(): Record<string, string> {
   const fake = fs.existsSync(PAYMENTS_FILE) ? (JSON.parse(fs.readFileSync(PAYMENTS_FILE, 'utf8')) as { url: string; webhookSecret: string }) : null;
-  return { STRIPE_SECRET_KEY: '', STRIPE_WEBHOOK_SECRET: '', KERFWISE_PAYMENTS_URL: fake?.url ?? '', KERFWISE_PAYMENTS_WEBHOOK_SECRET: fake?.webhookSecret ?? '' };
+  return {
+    STRIPE_SECRET_KEY: '',
+    STRIPE_WEBHOOK_SECRET: '',
+    KERFWISE_PAYMENTS_URL: fake?.url ?? '',
+    KERFWISE_PAYMENTS_WEBHOOK_SECRET: fake?.webhookSecret ?? '',
+  };
 }
 
 function secret(): string {

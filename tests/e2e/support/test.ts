@@ -51,7 +51,10 @@ export const test = base.extend<{ consoleErrors: ConsoleErrors }>({
       });
       restore();
       expect(violations, 'Content-Security-Policy violations in the console').toEqual([]);
-      expect(errors.filter((e) => !allowed.some((a) => a.test(e))), 'The browser console must stay clean').toEqual([]);
+      expect(
+        errors.filter((e) => !allowed.some((a) => a.test(e))),
+        'The browser console must stay clean',
+      ).toEqual([]);
     },
     { auto: true },
   ],

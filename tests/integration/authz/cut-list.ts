@@ -25,13 +25,25 @@ const freshSchedule = async (fx: AuthzFixtures) => {
 };
 
 const freshCard = async ({ db, mine }: AuthzFixtures) => {
-  const [c] = await db.insert(setupCards).values({ shopId: mine.id, joint: 'box-joint', stockThicknessMm: uniqueThicknessMm(), fields: {}, note: '' }).returning();
+  const [c] = await db
+    .insert(setupCards)
+    .values({ shopId: mine.id, joint: 'box-joint', stockThicknessMm: uniqueThicknessMm(), fields: {}, note: '' })
+    .returning();
   return { id: c.id };
 };
 
-const UPLOAD = { columns: ['label', 'quantity', 'length', 'width', 'thickness', 'material'], rows: [{ line: 2, cells: ['Shelf', '1', '600', '300', '18', 'MDF'] }], unit: 'mm' };
+const UPLOAD = {
+  columns: ['label', 'quantity', 'length', 'width', 'thickness', 'material'],
+  rows: [{ line: 2, cells: ['Shelf', '1', '600', '300', '18', 'MDF'] }],
+  unit: 'mm',
+};
 const PART = { label: 'Shelf', quantity: 1, lengthMm: 600, widthMm: 300, thicknessMm: 18, material: 'MDF' };
-const CARD = () => ({ joint: 'rabbet-and-dado', stockThicknessMm: uniqueThicknessMm(), fields: [{ key: 'dado-depth', label: 'Dado depth', value: 6.35, unit: 'mm' }], note: '' });
+const CARD = () => ({
+  joint: 'rabbet-and-dado',
+  stockThicknessMm: uniqueThicknessMm(),
+  fields: [{ key: 'dado-depth', label: 'Dado depth', value: 6.35, unit: 'mm' }],
+  note: '',
+});
 
 const read = { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 404 };
 const write = { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 };
@@ -51,8 +63,23 @@ export const rows: AuthzRow[] = [
   { route: '/api/jobs/[id]/drawer-schedules/[scheduleId]', method: 'DELETE', target: freshSchedule, expect: write },
   { route: '/api/setup-cards', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 200 } },
   // A getter: each actor's call gets its own thickness, since a shop keeps one card per joint and thickness.
-  { route: '/api/setup-cards', method: 'POST', get body() { return CARD(); }, expect: { anonymous: 401, owner: 201, estimator: 201, cutter: 403, other: 201 } },
-  { route: '/api/setup-cards/[id]', method: 'PUT', target: freshCard, get body() { return CARD(); }, expect: write },
+  {
+    route: '/api/setup-cards',
+    method: 'POST',
+    get body() {
+      return CARD();
+    },
+    expect: { anonymous: 401, owner: 201, estimator: 201, cutter: 403, other: 201 },
+  },
+  {
+    route: '/api/setup-cards/[id]',
+    method: 'PUT',
+    target: freshCard,
+    get body() {
+      return CARD();
+    },
+    expect: write,
+  },
   { route: '/api/setup-cards/[id]', method: 'DELETE', target: freshCard, expect: write },
   { route: '/api/materials', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 200 } },
 ];

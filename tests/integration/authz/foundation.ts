@@ -17,9 +17,20 @@ const freshPerson = async ({ db, mine }: AuthzFixtures) => {
 
 export const rows: AuthzRow[] = [
   { route: '/api/jobs', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 200 } },
-  { route: '/api/jobs', method: 'POST', body: { name: 'Matrix test job' }, expect: { anonymous: 401, owner: 201, estimator: 201, cutter: 403, other: 201 } },
+  {
+    route: '/api/jobs',
+    method: 'POST',
+    body: { name: 'Matrix test job' },
+    expect: { anonymous: 401, owner: 201, estimator: 201, cutter: 403, other: 201 },
+  },
   { route: '/api/jobs/[id]', method: 'GET', target: freshJob, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 404 } },
-  { route: '/api/jobs/[id]', method: 'PATCH', target: freshJob, body: { status: 'accepted' }, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
+  {
+    route: '/api/jobs/[id]',
+    method: 'PATCH',
+    target: freshJob,
+    body: { status: 'accepted' },
+    expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 },
+  },
   { route: '/api/jobs/[id]', method: 'DELETE', target: freshJob, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
   { route: '/api/team', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 403, other: 200 } },
   {
@@ -28,7 +39,18 @@ export const rows: AuthzRow[] = [
     body: { name: 'Matrix Person', email: 'EMAIL', role: 'cutter', password: 'long-enough-password' },
     expect: { anonymous: 401, owner: 201, estimator: 403, cutter: 403, other: 201 },
   },
-  { route: '/api/team/[id]', method: 'PATCH', target: freshPerson, body: { role: 'estimator' }, expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 403, other: 404 } },
+  {
+    route: '/api/team/[id]',
+    method: 'PATCH',
+    target: freshPerson,
+    body: { role: 'estimator' },
+    expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 403, other: 404 },
+  },
   { route: '/api/settings', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 200 } },
-  { route: '/api/settings', method: 'PATCH', body: { wastePercent: 12 }, expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 403, other: 200 } },
+  {
+    route: '/api/settings',
+    method: 'PATCH',
+    body: { wastePercent: 12 },
+    expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 403, other: 200 },
+  },
 ];

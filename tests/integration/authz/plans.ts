@@ -8,7 +8,18 @@ const freshJob = async ({ db, mine }: AuthzFixtures) => {
   const [job] = await db.insert(jobs).values({ shopId: mine.id, name: 'Plan target job' }).returning();
   await db
     .insert(stockItems)
-    .values({ id: SHEET_ID, shopId: mine.id, kind: 'sheet', material: 'Birch ply', nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, buyable: true, costCents: 6400 })
+    .values({
+      id: SHEET_ID,
+      shopId: mine.id,
+      kind: 'sheet',
+      material: 'Birch ply',
+      nominalThickness: '18 mm',
+      thicknessMm: 18,
+      lengthMm: 2440,
+      widthMm: 1220,
+      buyable: true,
+      costCents: 6400,
+    })
     .onConflictDoNothing();
   return { id: job.id };
 };
@@ -25,7 +36,12 @@ const freshDraft = async (fx: AuthzFixtures) => {
 };
 
 export const rows: AuthzRow[] = [
-  { route: '/api/jobs/[id]/nest-request', method: 'GET', target: freshJob, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
+  {
+    route: '/api/jobs/[id]/nest-request',
+    method: 'GET',
+    target: freshJob,
+    expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 },
+  },
   { route: '/api/jobs/[id]/plans', method: 'GET', target: freshJob, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 404 } },
   {
     route: '/api/jobs/[id]/plans',
@@ -36,5 +52,11 @@ export const rows: AuthzRow[] = [
   },
   // A cutter reads released plans only: a draft does not exist for them.
   { route: '/api/plans/[id]', method: 'GET', target: freshDraft, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 404, other: 404 } },
-  { route: '/api/plans/[id]', method: 'PUT', target: freshDraft, body: { plan: EMPTY_PLAN }, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
+  {
+    route: '/api/plans/[id]',
+    method: 'PUT',
+    target: freshDraft,
+    body: { plan: EMPTY_PLAN },
+    expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 },
+  },
 ];

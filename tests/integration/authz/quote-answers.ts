@@ -6,15 +6,23 @@ import { nextNumber } from '../../support/unique';
 import type { AuthzFixtures, AuthzRow } from './types';
 
 /** A quote sent to its customer with a link of the real shape (distinct per call, no randomness), and its token. */
-const sentWithLink = (status: 'sent' | 'accepted') => async ({ db, mine }: AuthzFixtures) => {
-  const { revision } = await jobWithDraftQuote(db, mine.id);
-  const token = `kq${String(nextNumber()).padStart(41, '0')}`;
-  await db
-    .update(quoteRevisions)
-    .set({ status, sentAt: new Date(), validUntil: '2099-12-31', linkTokenHash: hashQuoteToken(token), ...(status === 'accepted' ? { answeredAt: new Date(), acceptedName: 'Matrix Customer' } : {}) })
-    .where(eq(quoteRevisions.id, revision.id));
-  return { token };
-};
+const sentWithLink =
+  (status: 'sent' | 'accepted') =>
+  async ({ db, mine }: AuthzFixtures) => {
+    const { revision } = await jobWithDraftQuote(db, mine.id);
+    const token = `kq${String(nextNumber()).padStart(41, '0')}`;
+    await db
+      .update(quoteRevisions)
+      .set({
+        status,
+        sentAt: new Date(),
+        validUntil: '2099-12-31',
+        linkTokenHash: hashQuoteToken(token),
+        ...(status === 'accepted' ? { answeredAt: new Date(), acceptedName: 'Matrix Customer' } : {}),
+      })
+      .where(eq(quoteRevisions.id, revision.id));
+    return { token };
+  };
 
 const everyone = (status: number) => ({ anonymous: status, owner: status, estimator: status, cutter: status, other: status });
 

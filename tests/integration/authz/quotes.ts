@@ -4,7 +4,10 @@ import { nextNumber } from '../../support/unique';
 import type { AuthzFixtures, AuthzRow } from './types';
 
 const freshJob = async ({ db, mine }: AuthzFixtures) => {
-  const [j] = await db.insert(jobs).values({ shopId: mine.id, name: `Matrix quote job ${nextNumber()}` }).returning();
+  const [j] = await db
+    .insert(jobs)
+    .values({ shopId: mine.id, name: `Matrix quote job ${nextNumber()}` })
+    .returning();
   return { id: j.id };
 };
 const freshDraft = async ({ db, mine }: AuthzFixtures) => ({ id: (await jobWithDraftQuote(db, mine.id)).revision.id });

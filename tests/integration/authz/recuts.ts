@@ -6,7 +6,17 @@ const freshRecut = async ({ db, mine }: AuthzFixtures) => {
   const [job] = await db.insert(jobs).values({ shopId: mine.id, name: 'Re-cut target job', status: 'cutting' }).returning();
   const [r] = await db
     .insert(recuts)
-    .values({ shopId: mine.id, jobId: job.id, label: 'Side', instance: 2, lengthMm: 700, widthMm: 560, thicknessMm: 18, material: 'Birch ply', reason: 'Tear-out' })
+    .values({
+      shopId: mine.id,
+      jobId: job.id,
+      label: 'Side',
+      instance: 2,
+      lengthMm: 700,
+      widthMm: 560,
+      thicknessMm: 18,
+      material: 'Birch ply',
+      reason: 'Tear-out',
+    })
     .returning();
   return { recutId: r.id, jobId: job.id };
 };
@@ -17,7 +27,12 @@ const openRecut = async (fx: AuthzFixtures) => ({ id: (await freshRecut(fx)).rec
 // The cutter records damaged parts when finishing (plans:finish, in stock.ts) and reads the re-cut list; nesting,
 // releasing and cancelling re-cuts are the estimator's and owner's (the nest and release rows are in plans.ts and stock.ts).
 export const rows: AuthzRow[] = [
-  { route: '/api/jobs/[id]/recuts', method: 'GET', target: jobWithRecut, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 404 } },
+  {
+    route: '/api/jobs/[id]/recuts',
+    method: 'GET',
+    target: jobWithRecut,
+    expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 404 },
+  },
   {
     route: '/api/recuts/[id]/cancel',
     method: 'POST',

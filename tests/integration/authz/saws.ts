@@ -17,7 +17,10 @@ const SAW = () => ({
 });
 
 const freshSaw = async ({ db, mine }: AuthzFixtures) => {
-  const [s] = await db.insert(saws).values({ shopId: mine.id, ...SAW() }).returning();
+  const [s] = await db
+    .insert(saws)
+    .values({ shopId: mine.id, ...SAW() })
+    .returning();
   return { id: s.id };
 };
 
@@ -26,7 +29,22 @@ const ownerWrites = { anonymous: 401, owner: 200, estimator: 403, cutter: 403, o
 
 export const rows: AuthzRow[] = [
   { route: '/api/saws', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 200 } },
-  { route: '/api/saws', method: 'POST', get body() { return SAW(); }, expect: { anonymous: 401, owner: 201, estimator: 403, cutter: 403, other: 201 } },
-  { route: '/api/saws/[id]', method: 'PUT', target: freshSaw, get body() { return SAW(); }, expect: ownerWrites },
+  {
+    route: '/api/saws',
+    method: 'POST',
+    get body() {
+      return SAW();
+    },
+    expect: { anonymous: 401, owner: 201, estimator: 403, cutter: 403, other: 201 },
+  },
+  {
+    route: '/api/saws/[id]',
+    method: 'PUT',
+    target: freshSaw,
+    get body() {
+      return SAW();
+    },
+    expect: ownerWrites,
+  },
   { route: '/api/saws/[id]', method: 'DELETE', target: freshSaw, expect: ownerWrites },
 ];

@@ -16,7 +16,10 @@ const MODEL = () => ({
 });
 
 const freshModel = async ({ db, mine }: AuthzFixtures) => {
-  const [m] = await db.insert(slideModels).values({ shopId: mine.id, ...MODEL() }).returning();
+  const [m] = await db
+    .insert(slideModels)
+    .values({ shopId: mine.id, ...MODEL() })
+    .returning();
   return { id: m.id };
 };
 
@@ -25,7 +28,22 @@ const ownerWrites = { anonymous: 401, owner: 200, estimator: 403, cutter: 403, o
 
 export const rows: AuthzRow[] = [
   { route: '/api/slide-models', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 200, other: 200 } },
-  { route: '/api/slide-models', method: 'POST', get body() { return MODEL(); }, expect: { anonymous: 401, owner: 201, estimator: 403, cutter: 403, other: 201 } },
-  { route: '/api/slide-models/[id]', method: 'PUT', target: freshModel, get body() { return MODEL(); }, expect: ownerWrites },
+  {
+    route: '/api/slide-models',
+    method: 'POST',
+    get body() {
+      return MODEL();
+    },
+    expect: { anonymous: 401, owner: 201, estimator: 403, cutter: 403, other: 201 },
+  },
+  {
+    route: '/api/slide-models/[id]',
+    method: 'PUT',
+    target: freshModel,
+    get body() {
+      return MODEL();
+    },
+    expect: ownerWrites,
+  },
   { route: '/api/slide-models/[id]', method: 'DELETE', target: freshModel, expect: ownerWrites },
 ];

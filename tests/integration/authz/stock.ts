@@ -4,7 +4,16 @@ import type { AuthzFixtures, AuthzRow } from './types';
 const freshItem = async ({ db, mine }: AuthzFixtures) => {
   const [item] = await db
     .insert(stockItems)
-    .values({ shopId: mine.id, kind: 'sheet', material: 'Matrix ply', nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand: 2 })
+    .values({
+      shopId: mine.id,
+      kind: 'sheet',
+      material: 'Matrix ply',
+      nominalThickness: '18 mm',
+      thicknessMm: 18,
+      lengthMm: 2440,
+      widthMm: 1220,
+      onHand: 2,
+    })
     .returning();
   return { id: item.id };
 };
@@ -15,19 +24,21 @@ const freshOffcut = async ({ db, mine }: AuthzFixtures) => {
 };
 
 /** A plan that uses no stock: enough to judge access to each step of its life. */
-const freshPlan = (status: 'draft' | 'released') => async ({ db, mine, myJob }: AuthzFixtures) => {
-  const [p] = await db
-    .insert(plans)
-    .values({
-      shopId: mine.id,
-      jobId: myJob.id,
-      status,
-      request: { parts: [], stock: [], settings: {} },
-      document: { version: 1, pieces: [], unplaced: [], stockToPull: [], stockToBuy: [], cancelled: false },
-    })
-    .returning();
-  return { id: p.id };
-};
+const freshPlan =
+  (status: 'draft' | 'released') =>
+  async ({ db, mine, myJob }: AuthzFixtures) => {
+    const [p] = await db
+      .insert(plans)
+      .values({
+        shopId: mine.id,
+        jobId: myJob.id,
+        status,
+        request: { parts: [], stock: [], settings: {} },
+        document: { version: 1, pieces: [], unplaced: [], stockToPull: [], stockToBuy: [], cancelled: false },
+      })
+      .returning();
+    return { id: p.id };
+  };
 
 const jobWithPlan = async (fx: AuthzFixtures) => {
   await freshPlan('draft')(fx);
@@ -46,7 +57,13 @@ export const rows: AuthzRow[] = [
   },
   { route: '/api/stock/[id]', method: 'PATCH', target: freshItem, body: { location: 'Rack Z' }, expect: { ...owner(200), other: 404 } },
   { route: '/api/stock/[id]/receive', method: 'POST', target: freshItem, body: { quantity: 2 }, expect: { ...owner(200), other: 404 } },
-  { route: '/api/stock/[id]/adjust', method: 'POST', target: freshItem, body: { count: 1, reason: 'Counted' }, expect: { ...owner(200), other: 404 } },
+  {
+    route: '/api/stock/[id]/adjust',
+    method: 'POST',
+    target: freshItem,
+    body: { count: 1, reason: 'Counted' },
+    expect: { ...owner(200), other: 404 },
+  },
   {
     route: '/api/stock/import',
     method: 'POST',
@@ -61,10 +78,37 @@ export const rows: AuthzRow[] = [
     body: { material: 'Matrix ply', thicknessMm: 18, lengthMm: 700, widthMm: 200, location: 'Bin 1' },
     expect: { anonymous: 401, owner: 201, estimator: 403, cutter: 201, other: 201 },
   },
-  { route: '/api/offcuts/[id]/scrap', method: 'POST', target: freshOffcut, body: { reason: 'Split' }, expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 200, other: 404 } },
-  { route: '/api/plans/[id]/release', method: 'POST', target: freshPlan('draft'), expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
-  { route: '/api/plans/[id]/done', method: 'POST', target: freshPlan('released'), body: {}, expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 200, other: 404 } },
-  { route: '/api/plans/[id]/cancel', method: 'POST', target: freshPlan('released'), expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
+  {
+    route: '/api/offcuts/[id]/scrap',
+    method: 'POST',
+    target: freshOffcut,
+    body: { reason: 'Split' },
+    expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 200, other: 404 },
+  },
+  {
+    route: '/api/plans/[id]/release',
+    method: 'POST',
+    target: freshPlan('draft'),
+    expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 },
+  },
+  {
+    route: '/api/plans/[id]/done',
+    method: 'POST',
+    target: freshPlan('released'),
+    body: {},
+    expect: { anonymous: 401, owner: 200, estimator: 403, cutter: 200, other: 404 },
+  },
+  {
+    route: '/api/plans/[id]/cancel',
+    method: 'POST',
+    target: freshPlan('released'),
+    expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 },
+  },
   { route: '/api/catalogue', method: 'GET', expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 200 } },
-  { route: '/api/jobs/[id]/takeoff', method: 'GET', target: jobWithPlan, expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 } },
+  {
+    route: '/api/jobs/[id]/takeoff',
+    method: 'GET',
+    target: jobWithPlan,
+    expect: { anonymous: 401, owner: 200, estimator: 200, cutter: 403, other: 404 },
+  },
 ];

@@ -34,7 +34,9 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
   ];
   return (
     <div>
-      <Link href="/customers" className="text-sm text-graphite-mute">← Customers</Link>
+      <Link href="/customers" className="text-sm text-graphite-mute">
+        ← Customers
+      </Link>
       <header className="mb-4 mt-2 flex flex-wrap items-start justify-between gap-3">
         <h1>{customer.name}</h1>
         {can(user.role, 'customers:write') && <CustomerFormToggle customer={details} label="Edit customer" />}
@@ -53,12 +55,24 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
       ) : (
         <div className="card overflow-x-auto">
           <table className="data-table" aria-label="The customer’s jobs">
-            <thead><tr><th>Job</th><th>Status</th><th>Due</th></tr></thead>
+            <thead>
+              <tr>
+                <th>Job</th>
+                <th>Status</th>
+                <th>Due</th>
+              </tr>
+            </thead>
             <tbody>
               {jobs.map((j) => (
                 <tr key={j.id} className="hover:bg-paper">
-                  <td><Link href={`/jobs/${j.id}`} className="font-medium underline-offset-2 hover:underline">{j.name}</Link></td>
-                  <td><JobStatusBadge status={j.status} /></td>
+                  <td>
+                    <Link href={`/jobs/${j.id}`} className="font-medium underline-offset-2 hover:underline">
+                      {j.name}
+                    </Link>
+                  </td>
+                  <td>
+                    <JobStatusBadge status={j.status} />
+                  </td>
                   <td className="whitespace-nowrap">{j.dueDate ?? 'not set'}</td>
                 </tr>
               ))}
@@ -72,13 +86,26 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
       ) : (
         <div className="card overflow-x-auto">
           <table className="data-table" aria-label="The customer’s quotes">
-            <thead><tr><th>Quote</th><th>Job</th><th>Status</th><th className="num">Total</th></tr></thead>
+            <thead>
+              <tr>
+                <th>Quote</th>
+                <th>Job</th>
+                <th>Status</th>
+                <th className="num">Total</th>
+              </tr>
+            </thead>
             <tbody>
               {quotes.map((q) => (
                 <tr key={q.id} className="hover:bg-paper">
-                  <td><Link href={`/jobs/${q.jobId}/quotes/${q.id}`} className="font-medium underline-offset-2 hover:underline">{q.title}</Link></td>
+                  <td>
+                    <Link href={`/jobs/${q.jobId}/quotes/${q.id}`} className="font-medium underline-offset-2 hover:underline">
+                      {q.title}
+                    </Link>
+                  </td>
                   <td>{q.jobName}</td>
-                  <td><QuoteStatusBadge status={q.status} /></td>
+                  <td>
+                    <QuoteStatusBadge status={q.status} />
+                  </td>
                   <td className="num">{formatMoney(q.totals.totalMinor, q.currency)}</td>
                 </tr>
               ))}

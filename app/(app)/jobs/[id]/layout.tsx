@@ -23,14 +23,26 @@ export default async function JobLayout({ children, params }: { children: ReactN
   const edit = can(user.role, 'jobs:write') ? await jobEditOptions(db, user.shopId, job.id, user.role) : null;
   return (
     <div>
-      <Link href="/jobs" className="text-sm text-graphite-mute print:hidden">← Jobs</Link>
+      <Link href="/jobs" className="text-sm text-graphite-mute print:hidden">
+        ← Jobs
+      </Link>
       <header className="mb-4 mt-2 flex flex-wrap items-start justify-between gap-3">
         <div className="min-w-0">
           <h1 className="flex flex-wrap items-center gap-x-3 gap-y-1">
-            {job.name} <span data-testid="job-status"><JobStatusBadge status={job.status} /></span>
+            {job.name}{' '}
+            <span data-testid="job-status">
+              <JobStatusBadge status={job.status} />
+            </span>
           </h1>
           <p className="mt-1 text-sm text-graphite-mute">
-            {job.customerId && can(user.role, 'customers:read') ? <Link href={`/customers/${job.customerId}`} className="underline-offset-2 hover:underline">{job.customer}</Link> : job.customer || 'No customer yet'} · due {job.dueDate ?? 'not set'}
+            {job.customerId && can(user.role, 'customers:read') ? (
+              <Link href={`/customers/${job.customerId}`} className="underline-offset-2 hover:underline">
+                {job.customer}
+              </Link>
+            ) : (
+              job.customer || 'No customer yet'
+            )}{' '}
+            · due {job.dueDate ?? 'not set'}
           </p>
           {job.notes && <p className="mt-2 max-w-3xl whitespace-pre-line text-sm text-graphite-soft">{job.notes}</p>}
         </div>

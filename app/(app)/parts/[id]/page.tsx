@@ -21,7 +21,10 @@ export default async function PartPage({ params, searchParams }: { params: Promi
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
   const db = await getDb();
-  const [data, settings] = await Promise.all([getPartPage(db, user.shopId, id.data, { drafts: can(user.role, 'plans:write') }), getShopSettings(db, user.shopId)]);
+  const [data, settings] = await Promise.all([
+    getPartPage(db, user.shopId, id.data, { drafts: can(user.role, 'plans:write') }),
+    getShopSettings(db, user.shopId),
+  ]);
   if (!data || !settings) notFound();
   const { plan: planId, instance } = query.parse(await searchParams);
   const { part, job, plans } = data;
@@ -41,7 +44,8 @@ export default async function PartPage({ params, searchParams }: { params: Promi
           {instance && <span className="ml-2 font-normal text-graphite-mute">#{instance}</span>}
         </h1>
         <p className="mt-1 text-sm text-graphite-soft">
-          {job ? `${job.name}${job.customer ? ` · ${job.customer}` : ''}` : 'Job'} · {data.recutOf ? `a re-cut of ${data.recutOf}, damaged at the saw` : `${part.quantity} in the cut list`}
+          {job ? `${job.name}${job.customer ? ` · ${job.customer}` : ''}` : 'Job'} ·{' '}
+          {data.recutOf ? `a re-cut of ${data.recutOf}, damaged at the saw` : `${part.quantity} in the cut list`}
         </p>
       </header>
 
@@ -88,7 +92,10 @@ export default async function PartPage({ params, searchParams }: { params: Promi
                 </div>
                 <ul className="flex flex-wrap gap-2 text-sm">
                   {p.places.map((pl) => (
-                    <li key={pl.instance} className={`rounded border px-2 py-0.5 ${p.id === planId && pl.instance === instance ? 'border-oak bg-oak-wash' : 'border-paper-edge'}`}>
+                    <li
+                      key={pl.instance}
+                      className={`rounded border px-2 py-0.5 ${p.id === planId && pl.instance === instance ? 'border-oak bg-oak-wash' : 'border-paper-edge'}`}
+                    >
                       #{pl.instance} on piece <Link href={`/plans/${p.id}/saw-order#piece-${pl.pieceName}`}>{pl.pieceName}</Link>
                     </li>
                   ))}

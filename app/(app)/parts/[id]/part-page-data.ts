@@ -12,13 +12,23 @@ import { stockPieceName } from '@/lib/nesting/saw-order';
  * a re-cut plan carries the re-cut's id: its page is the re-cut, sized as the damaged part was.
  */
 export async function getPartPage(db: Db, shopId: string, partId: string, { drafts }: { drafts: boolean }) {
-  const [part] = await db.select().from(parts).where(and(eq(parts.shopId, shopId), eq(parts.id, partId)));
+  const [part] = await db
+    .select()
+    .from(parts)
+    .where(and(eq(parts.shopId, shopId), eq(parts.id, partId)));
   const recut = part ? null : await recutAsPart(db, shopId, partId);
-  return part ? partPage(db, shopId, part, { drafts, recutOf: null }) : recut ? partPage(db, shopId, recut.part, { drafts, recutOf: recut.of }) : null;
+  return part
+    ? partPage(db, shopId, part, { drafts, recutOf: null })
+    : recut
+      ? partPage(db, shopId, recut.part, { drafts, recutOf: recut.of })
+      : null;
 }
 
 async function recutAsPart(db: Db, shopId: string, id: string) {
-  const [r] = await db.select().from(recuts).where(and(eq(recuts.shopId, shopId), eq(recuts.id, id)));
+  const [r] = await db
+    .select()
+    .from(recuts)
+    .where(and(eq(recuts.shopId, shopId), eq(recuts.id, id)));
   if (!r) return null;
   const part: typeof parts.$inferSelect = {
     id: r.id,
@@ -44,7 +54,11 @@ async function recutAsPart(db: Db, shopId: string, id: string) {
 
 async function partPage(db: Db, shopId: string, part: typeof parts.$inferSelect, { drafts, recutOf }: { drafts: boolean; recutOf: string | null }) {
   const partId = part.id;
-  const [job] = await db.select({ id: jobs.id, name: jobs.name, customer: sql<string>`coalesce(${customers.name}, '')` }).from(jobs).leftJoin(customers, eq(customers.id, jobs.customerId)).where(and(eq(jobs.shopId, shopId), eq(jobs.id, part.jobId)));
+  const [job] = await db
+    .select({ id: jobs.id, name: jobs.name, customer: sql<string>`coalesce(${customers.name}, '')` })
+    .from(jobs)
+    .leftJoin(customers, eq(customers.id, jobs.customerId))
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.id, part.jobId)));
   const rows = await db
     .select({ id: plans.id, name: plans.name, status: plans.status, document: plans.document, updatedAt: plans.updatedAt })
     .from(plans)
@@ -55,7 +69,9 @@ async function partPage(db: Db, shopId: string, part: typeof parts.$inferSelect,
     .map((r) => {
       const doc = readPlan(r.document);
       const places = doc.pieces.flatMap((piece, index) =>
-        piece.placements.filter((p) => p.partId === partId).map((p) => ({ pieceIndex: index, pieceName: stockPieceName(index), instance: p.instance, piece })),
+        piece.placements
+          .filter((p) => p.partId === partId)
+          .map((p) => ({ pieceIndex: index, pieceName: stockPieceName(index), instance: p.instance, piece })),
       );
       const unplaced = doc.unplaced.filter((u) => u.partId === partId);
       return { id: r.id, name: r.name, status: r.status, places, unplaced };

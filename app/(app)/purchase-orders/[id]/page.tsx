@@ -25,11 +25,22 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
   const [settings, order, items] = await Promise.all([
     getShopSettings(db, user.shopId),
     getPurchaseOrder(db, user.shopId, id.data),
-    db.select().from(stockItems).where(eq(stockItems.shopId, user.shopId)).orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
+    db
+      .select()
+      .from(stockItems)
+      .where(eq(stockItems.shopId, user.shopId))
+      .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
   ]);
   if (!order || !settings) notFound();
   const when = (iso: string) => formatShopDateTime(new Date(iso), settings.timeZone);
-  const sizes = items.map((i) => ({ id: i.id, description: describeSize(i, settings.units), supplier: i.supplier, kind: i.kind, costCents: i.costCents, boardFeetEach: i.kind === 'board' ? pieceBoardFeet(i) : null }));
+  const sizes = items.map((i) => ({
+    id: i.id,
+    description: describeSize(i, settings.units),
+    supplier: i.supplier,
+    kind: i.kind,
+    costCents: i.costCents,
+    boardFeetEach: i.kind === 'board' ? pieceBoardFeet(i) : null,
+  }));
   const history = [
     `Made ${when(order.createdAt)}${order.source === 'plan' && order.planName ? ` from plan “${order.planName}”` : order.source === 'low-stock' ? ' from the low stock' : ''}`,
     order.sentAt && `sent ${when(order.sentAt)} to ${order.supplierEmail}`,
@@ -39,16 +50,24 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
 
   return (
     <>
-      <p className="mb-2 text-sm"><Link href="/purchase-orders">← Purchase orders</Link></p>
+      <p className="mb-2 text-sm">
+        <Link href="/purchase-orders">← Purchase orders</Link>
+      </p>
       <header className="mb-5 flex flex-wrap items-start justify-between gap-3">
         <div>
           <h1 className="flex flex-wrap items-center gap-2">
             {order.title} <span className="font-normal text-graphite-soft">· {order.supplier}</span> <PoStatusBadge status={order.status} />
           </h1>
           <p className="mt-1 text-sm text-graphite-mute">{history.join('; ')}.</p>
-          {order.jobId && order.planName && <p className="text-sm"><Link href={`/jobs/${order.jobId}/takeoff?plan=${order.planId}`}>The plan’s takeoff</Link></p>}
+          {order.jobId && order.planName && (
+            <p className="text-sm">
+              <Link href={`/jobs/${order.jobId}/takeoff?plan=${order.planId}`}>The plan’s takeoff</Link>
+            </p>
+          )}
         </div>
-        <a className="btn-quiet" href={`/api/purchase-orders/${order.id}/pdf`} download>Download PDF</a>
+        <a className="btn-quiet" href={`/api/purchase-orders/${order.id}/pdf`} download>
+          Download PDF
+        </a>
       </header>
       <PurchaseOrderEditor order={order} sizes={sizes} canWrite={can(user.role, 'purchasing:write')} canReceive={can(user.role, 'stock:write')} />
     </>

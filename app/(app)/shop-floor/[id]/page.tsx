@@ -44,7 +44,12 @@ export default async function CuttingPage({ params }: { params: Promise<{ id: st
         Guard on, push stick ready: <a href="#saw-safety">the cautions</a> are below.
       </p>
       {atTheSaw ? (
-        <CuttingView planId={order.id} views={pieceViews(order.document.pieces, order.units, order.kerf)} initial={ticks} canFinish={can(user.role, 'plans:finish')} />
+        <CuttingView
+          planId={order.id}
+          views={pieceViews(order.document.pieces, order.units, order.kerf)}
+          initial={ticks}
+          canFinish={can(user.role, 'plans:finish')}
+        />
       ) : (
         <p className="card px-4 py-6">This plan is {order.status}: there is nothing left to cut on it.</p>
       )}

@@ -41,13 +41,28 @@ export const PUT = route({ permission: 'plans:write', params: idParams, body: pl
   if (saved.status !== 'draft') throw conflict(`This plan is ${saved.status}; only a draft can be edited.`);
   const request = nestRequestSchema.parse(saved.request);
   const judged = judgePlan(request, body.plan);
-  if (!judged.ok) throw new HttpError(422, 'The layout breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
+  if (!judged.ok)
+    throw new HttpError(422, 'The layout breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
   // Tree, saw order, leftovers and figures are made afresh here, whatever the bench sent.
   const plan = planSchema.parse(rebuildCuts(request, judged.plan));
-  const result = await updateDraftPlan(db, { shopId: user.shopId, planId: params.id, userId: user.id, plan, name: body.name, baseUpdatedAt: body.baseUpdatedAt });
+  const result = await updateDraftPlan(db, {
+    shopId: user.shopId,
+    planId: params.id,
+    userId: user.id,
+    plan,
+    name: body.name,
+    baseUpdatedAt: body.baseUpdatedAt,
+  });
   if (!result.ok) {
     if (result.reason === 'not-found') throw notFound('That plan');
-    throw conflict(result.reason === 'stale' ? 'Someone saved this plan after you opened it; reload to see their changes.' : 'Only a draft plan can be edited.');
+    throw conflict(
+      result.reason === 'stale' ? 'Someone saved this plan after you opened it; reload to see their changes.' : 'Only a draft plan can be edited.',
+    );
   }
-  return { id: params.id, updatedAt: result.updatedAt.toISOString(), yieldRatio: plan.totals?.yield ?? null, costCents: plan.totals ? Math.round(plan.totals.cost) : null };
+  return {
+    id: params.id,
+    updatedAt: result.updatedAt.toISOString(),
+    yieldRatio: plan.totals?.yield ?? null,
+    costCents: plan.totals ? Math.round(plan.totals.cost) : null,
+  };
 });

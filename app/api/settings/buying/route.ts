@@ -9,4 +9,6 @@ export const GET = route({ permission: 'purchasing:read' }, async ({ db, user })
 });
 
 // PATCH /api/settings/buying – change them (the digest's time is on the shop's clock; '' sends none)
-export const PATCH = route({ permission: 'settings:write', body: buyingSettingsPatchSchema }, async ({ db, user, body }) => updateBuyingSettings(db, user.shopId, user.id, body));
+export const PATCH = route({ permission: 'settings:write', body: buyingSettingsPatchSchema }, async ({ db, user, body }) =>
+  updateBuyingSettings(db, user.shopId, user.id, body),
+);

@@ -14,10 +14,19 @@ export const POST = route({ permission: 'stock:write', body: importStockSchema }
   const summary = { valid: result.rows.length, errors: result.errors, rows: result.rows };
   if (body.commit === 'none') return { ...summary, imported: 0 };
   if (body.commit === 'all' && result.errors.length) {
-    throw new HttpError(422, `${result.errors.length} row${result.errors.length === 1 ? ' has' : 's have'} problems; nothing was imported. Fix them, or import only the valid rows.`, {
-      csv: result.errors.map((e) => `Line ${e.line}: ${e.messages.join('; ')}`),
-    });
+    throw new HttpError(
+      422,
+      `${result.errors.length} row${result.errors.length === 1 ? ' has' : 's have'} problems; nothing was imported. Fix them, or import only the valid rows.`,
+      {
+        csv: result.errors.map((e) => `Line ${e.line}: ${e.messages.join('; ')}`),
+      },
+    );
   }
-  const written = await importStock(db, user.shopId, user.id, result.rows.map((r) => r.item));
+  const written = await importStock(
+    db,
+    user.shopId,
+    user.id,
+    result.rows.map((r) => r.item),
+  );
   return { ...summary, imported: written.length };
 });

@@ -16,23 +16,29 @@ export default async function JobPlanPage({ params, searchParams }: { params: Pr
   return (
     <div className="space-y-8">
       <section aria-labelledby="plans">
-        <h2 id="plans" className="mb-3">Plans</h2>
+        <h2 id="plans" className="mb-3">
+          Plans
+        </h2>
         <PlanList jobId={jobId} currency={shop.currency} showPrices={showPrices} timeZone={shop.timeZone} />
       </section>
       {can(user.role, 'recuts:read') && (
         <section id="recuts" aria-labelledby="recuts-heading">
-          <h2 id="recuts-heading" className="mb-1">Re-cuts</h2>
+          <h2 id="recuts-heading" className="mb-1">
+            Re-cuts
+          </h2>
           <p className="mb-3 max-w-3xl text-sm text-graphite-mute">Parts that came off the saw damaged. The job is not done while one is open.</p>
           <RecutList jobId={jobId} units={shop.units} canNest={can(user.role, 'nest:run')} canCancel={can(user.role, 'recuts:cancel')} />
         </section>
       )}
       {can(user.role, 'nest:run') && (
         <section id="nest" aria-labelledby="nest-heading">
-          <h2 id="nest-heading" className="mb-1">{nestFor === 'recuts' ? 'Nest the re-cuts' : 'Nest'}</h2>
+          <h2 id="nest-heading" className="mb-1">
+            {nestFor === 'recuts' ? 'Nest the re-cuts' : 'Nest'}
+          </h2>
           {nestFor === 'recuts' ? (
             <p className="mb-3 max-w-3xl text-sm text-graphite-mute">
-              Only the open re-cuts, nothing else of the cut list, laid on offcuts first, then on sheets and boards. Release the plan like any other: its
-              re-cuts are closed when it is finished. <Link href={`/jobs/${jobId}/plan#nest`}>Nest the cut list instead</Link>
+              Only the open re-cuts, nothing else of the cut list, laid on offcuts first, then on sheets and boards. Release the plan like any other:
+              its re-cuts are closed when it is finished. <Link href={`/jobs/${jobId}/plan#nest`}>Nest the cut list instead</Link>
             </p>
           ) : (
             <p className="mb-3 max-w-3xl text-sm text-graphite-mute">

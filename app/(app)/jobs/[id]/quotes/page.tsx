@@ -19,20 +19,37 @@ export default async function JobQuotesPage({ params }: { params: Promise<{ id: 
   return (
     <div>
       <p className="mb-4 max-w-3xl text-sm text-graphite-mute">
-        A quote is built from the job: material from a plan’s takeoff with the spoilage allowance, slides from the drawer schedules, labour from the plan and the joinery at Shop settings’ rates. Every line can be changed before it is sent; after that, a new revision.
+        A quote is built from the job: material from a plan’s takeoff with the spoilage allowance, slides from the drawer schedules, labour from the
+        plan and the joinery at Shop settings’ rates. Every line can be changed before it is sent; after that, a new revision.
       </p>
       {can(user.role, 'quotes:write') && <NewQuoteForm jobId={jobId} plans={plans} />}
       {revisions.length === 0 ? (
-        <EmptyState title="No quote yet.">{plans.length ? 'Build one from a plan above.' : 'Nest the job first to quote its material, or build one without a plan.'}</EmptyState>
+        <EmptyState title="No quote yet.">
+          {plans.length ? 'Build one from a plan above.' : 'Nest the job first to quote its material, or build one without a plan.'}
+        </EmptyState>
       ) : (
         <div className="card overflow-x-auto">
           <table className="data-table" aria-label="Quotes">
-            <thead><tr><th>Quote</th><th>Status</th><th className="num">Total</th><th className="num">Margin</th><th>Sent</th></tr></thead>
+            <thead>
+              <tr>
+                <th>Quote</th>
+                <th>Status</th>
+                <th className="num">Total</th>
+                <th className="num">Margin</th>
+                <th>Sent</th>
+              </tr>
+            </thead>
             <tbody>
               {revisions.map((r) => (
                 <tr key={r.id} className="hover:bg-paper">
-                  <td><Link href={`/jobs/${jobId}/quotes/${r.id}`} className="font-medium underline-offset-2 hover:underline">{r.title}</Link></td>
-                  <td><QuoteStatusBadge status={r.status} /></td>
+                  <td>
+                    <Link href={`/jobs/${jobId}/quotes/${r.id}`} className="font-medium underline-offset-2 hover:underline">
+                      {r.title}
+                    </Link>
+                  </td>
+                  <td>
+                    <QuoteStatusBadge status={r.status} />
+                  </td>
                   <td className="num">{formatMoney(r.totals.totalMinor, r.currency)}</td>
                   <td className="num text-graphite-mute">{r.totals.marginPercent !== null ? `${r.totals.marginPercent.toFixed(1)} %` : '—'}</td>
                   <td className="whitespace-nowrap">{r.sentAt?.slice(0, 10) ?? '—'}</td>

@@ -38,14 +38,25 @@ export default async function FinishPlanPage({ params }: { params: Promise<{ id:
     index,
     title: `Piece ${index + 1} · ${p.material} ${exactLengthText(p.thickness, settings.units)} · ${len(p.length)} × ${len(p.width)}${p.kind === 'offcut' ? ' (offcut)' : ''}`,
     offcuts: (p.offcuts ?? []).map((r, i) => ({ index: i, w: r.w, h: r.h, keepable: isKeepableOffcut(r, min) })),
-    parts: p.placements.map((pl) => ({ partId: pl.partId, instance: pl.instance, label: pl.label || labels.get(pl.partId) || pl.partId, w: pl.w, h: pl.h })),
+    parts: p.placements.map((pl) => ({
+      partId: pl.partId,
+      instance: pl.instance,
+      label: pl.label || labels.get(pl.partId) || pl.partId,
+      w: pl.w,
+      h: pl.h,
+    })),
   }));
 
   const open = plan.status === 'released' || plan.status === 'cutting';
   return (
     <>
-      <Link href={`/plans/${plan.id}/saw-order`} className="text-sm text-graphite-mute">← Saw order</Link>
-      <PageHeader title={`Finish: ${plan.name}`} lead={`${job?.name ?? ''} · when the last cut is made, put the offcuts on the rack and record any damaged parts. The stock the plan reserved is taken off the count.`} />
+      <Link href={`/plans/${plan.id}/saw-order`} className="text-sm text-graphite-mute">
+        ← Saw order
+      </Link>
+      <PageHeader
+        title={`Finish: ${plan.name}`}
+        lead={`${job?.name ?? ''} · when the last cut is made, put the offcuts on the rack and record any damaged parts. The stock the plan reserved is taken off the count.`}
+      />
       {open ? (
         <FinishPlanForm planId={plan.id} pieces={pieces} units={settings.units} defaultLocation="" />
       ) : (

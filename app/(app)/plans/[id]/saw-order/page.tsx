@@ -34,15 +34,18 @@ export default async function SawOrderPage({ params }: { params: Promise<{ id: s
       <header className="mb-4 mt-2 flex flex-wrap items-end justify-between gap-4 print:mb-2 print:mt-0">
         <div>
           <h1 className="flex items-center gap-3 print:text-xl">
-            Saw order <span className="print:hidden"><PlanStatusBadge status={order.status} /></span>
+            Saw order{' '}
+            <span className="print:hidden">
+              <PlanStatusBadge status={order.status} />
+            </span>
           </h1>
           <p className="mt-1 text-sm text-graphite-soft">
-            <span className="font-medium text-graphite">{order.job.name}</span> · {order.name} · {views.length} stock piece{views.length === 1 ? '' : 's'} ·{' '}
-            {cuts} cuts · kerf {formatLength(order.kerf, order.units)}
+            <span className="font-medium text-graphite">{order.job.name}</span> · {order.name} · {views.length} stock piece
+            {views.length === 1 ? '' : 's'} · {cuts} cuts · kerf {formatLength(order.kerf, order.units)}
           </p>
           <p className="mt-1 max-w-3xl text-xs text-graphite-mute">
-            Fence = the width between blade and fence, measured from the edge drawn as a heavy bar. The brick line is the cut; green pieces are
-            the parts it frees, amber offcuts go on the rack.
+            Fence = the width between blade and fence, measured from the edge drawn as a heavy bar. The brick line is the cut; green pieces are the
+            parts it frees, amber offcuts go on the rack.
           </p>
         </div>
         <div className="flex flex-wrap gap-2 print:hidden">

@@ -40,8 +40,14 @@ export default async function PartTagsPage({ params, searchParams }: { params: P
           <div>
             <h1>Part tags</h1>
             <p className="mt-1 text-sm text-graphite-soft">
-              <span className="font-medium text-graphite">{order.job.name}</span> · {order.name} · {items.length} tag{items.length === 1 ? '' : 's'}, one per part
-              {unplaced > 0 && <span className="text-brick"> · {unplaced} part{unplaced === 1 ? '' : 's'} not placed get no tag</span>}
+              <span className="font-medium text-graphite">{order.job.name}</span> · {order.name} · {items.length} tag{items.length === 1 ? '' : 's'},
+              one per part
+              {unplaced > 0 && (
+                <span className="text-brick">
+                  {' '}
+                  · {unplaced} part{unplaced === 1 ? '' : 's'} not placed get no tag
+                </span>
+              )}
             </p>
           </div>
           <div className="flex gap-2">
@@ -65,7 +71,8 @@ export default async function PartTagsPage({ params, searchParams }: { params: P
           ))}
         </nav>
         <p className="mb-4 max-w-3xl text-xs text-graphite-mute">
-          Print at 100 % (no “fit to page”) so the tags land on the labels, or download the PDF, which is made to the sheet’s exact size. Each QR code opens the part’s page: its job, plan and the piece it is cut from.
+          Print at 100 % (no “fit to page”) so the tags land on the labels, or download the PDF, which is made to the sheet’s exact size. Each QR code
+          opens the part’s page: its job, plan and the piece it is cut from.
         </p>
       </div>
       {items.length === 0 ? (

@@ -12,7 +12,10 @@ export const GET = route({ permission: 'jobs:read', params: idParams }, async ({
 });
 
 // POST /api/jobs/:id/drawer-schedules – add a schedule and its parts to the cut list, in one transaction
-export const POST = route({ permission: 'cutlist:write', params: idParams, body: drawerScheduleSchema, status: 201 }, async ({ db, user, params, body }) => {
-  const parts = await sizeOrThrow(db, user.shopId, body);
-  return (await saveDrawerSchedule(db, user.shopId, user.id, params.id, null, body, parts)) ?? Promise.reject(notFound('That job'));
-});
+export const POST = route(
+  { permission: 'cutlist:write', params: idParams, body: drawerScheduleSchema, status: 201 },
+  async ({ db, user, params, body }) => {
+    const parts = await sizeOrThrow(db, user.shopId, body);
+    return (await saveDrawerSchedule(db, user.shopId, user.id, params.id, null, body, parts)) ?? Promise.reject(notFound('That job'));
+  },
+);

@@ -13,7 +13,10 @@ import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
  */
 export async function sizeOrThrow(db: Db, shopId: string, schedule: DrawerSchedule): Promise<DrawerPart[]> {
   const shop = await getShopSettings(db, shopId);
-  const sized = sizeDrawerSchedule(schedule, shop ? { lengthText: (mm) => formatLength(mm, shop.units), exactText: (mm) => exactLengthText(mm, shop.units) } : {});
+  const sized = sizeDrawerSchedule(
+    schedule,
+    shop ? { lengthText: (mm) => formatLength(mm, shop.units), exactText: (mm) => exactLengthText(mm, shop.units) } : {},
+  );
   if (sized.ok) return sized.parts;
   const fields: Record<string, string[]> = {};
   for (const e of sized.errors) (fields[e.path || '_'] ??= []).push(e.message);

@@ -10,8 +10,11 @@ export const GET = route({ permission: 'jobs:read', params: idParams }, async ({
 });
 
 // POST /api/jobs/:id/parts – add one row at the end of the cut list, or back at its place (undoing a delete)
-export const POST = route({ permission: 'cutlist:write', params: idParams, body: partInputSchema, status: 201 }, async ({ db, user, params, body }) => {
-  const added = await addParts(db, user.shopId, user.id, params.id, [body], 'typed');
-  if (!added) throw notFound('That job');
-  return added[0];
-});
+export const POST = route(
+  { permission: 'cutlist:write', params: idParams, body: partInputSchema, status: 201 },
+  async ({ db, user, params, body }) => {
+    const added = await addParts(db, user.shopId, user.id, params.id, [body], 'typed');
+    if (!added) throw notFound('That job');
+    return added[0];
+  },
+);

@@ -14,6 +14,12 @@ export const POST = route(
     const quote = await countingFailedLinks(req, () => answerQuote(db, params.token, body, clientAddress(req.headers)));
     wakeMailSender();
     // What changed, not the quote again: the page reloads to show it.
-    return { state: quote.state, answeredAt: quote.answeredAt, acceptedName: quote.revision.acceptedName, declineReason: quote.revision.declineReason, paymentClosed: quote.paymentClosed };
+    return {
+      state: quote.state,
+      answeredAt: quote.answeredAt,
+      acceptedName: quote.revision.acceptedName,
+      declineReason: quote.revision.declineReason,
+      paymentClosed: quote.paymentClosed,
+    };
   },
 );

@@ -30,20 +30,33 @@ export default async function PlanPage({ params: raw }: { params: Promise<{ id: 
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-center gap-3">
-        <Link href={`/jobs/${plan.jobId}/plan`} className="text-sm text-graphite-mute">← Plans</Link>
+        <Link href={`/jobs/${plan.jobId}/plan`} className="text-sm text-graphite-mute">
+          ← Plans
+        </Link>
         <h2 className="flex items-center gap-2">
           {plan.name} <StatusBadge tone={plan.status === 'draft' ? 'neutral' : 'accent'}>{plan.status}</StatusBadge>
           {plan.recutPlan && <StatusBadge tone="warn">Re-cuts</StatusBadge>}
         </h2>
-        {plan.status !== 'draft' && <Link href={`/plans/${plan.id}/saw-order`} className="btn-quiet ml-auto">Saw order</Link>}
+        {plan.status !== 'draft' && (
+          <Link href={`/plans/${plan.id}/saw-order`} className="btn-quiet ml-auto">
+            Saw order
+          </Link>
+        )}
         {plan.status === 'draft' && can(user.role, 'plans:release') && (
           <div className="ml-auto">
             <ReleasePlanButton planId={plan.id} />
           </div>
         )}
       </div>
-      {plan.status === 'draft' && mayEdit && <p className="text-sm text-graphite-mute">A draft: change the layout below, then save it. Once released the layout is fixed.</p>}
-      <PlanSummary plan={showPrices ? plan.document : withoutPrices(plan.document)} units={shop.units} currency={shop.currency} showPrices={showPrices} />
+      {plan.status === 'draft' && mayEdit && (
+        <p className="text-sm text-graphite-mute">A draft: change the layout below, then save it. Once released the layout is fixed.</p>
+      )}
+      <PlanSummary
+        plan={showPrices ? plan.document : withoutPrices(plan.document)}
+        units={shop.units}
+        currency={shop.currency}
+        showPrices={showPrices}
+      />
       <LayoutBench planId={plan.id} editable={mayEdit && plan.status === 'draft'} units={shop.units} />
     </div>
   );

@@ -21,25 +21,59 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   const quoteId = z.uuid().safeParse((await params).quoteId);
   if (!quoteId.success) notFound();
   const db = await getDb();
-  const [revision, job, hardware] = await Promise.all([getRevision(db, user.shopId, quoteId.data), getJob(db, user.shopId, jobId), listHardware(db, user.shopId)]);
+  const [revision, job, hardware] = await Promise.all([
+    getRevision(db, user.shopId, quoteId.data),
+    getJob(db, user.shopId, jobId),
+    listHardware(db, user.shopId),
+  ]);
   if (!revision || !job || revision.jobId !== jobId) notFound();
-  const [customer] = job.customerId ? await db.select({ id: customers.id, name: customers.name, email: customers.email }).from(customers).where(and(eq(customers.shopId, user.shopId), eq(customers.id, job.customerId))) : [];
+  const [customer] = job.customerId
+    ? await db
+        .select({ id: customers.id, name: customers.name, email: customers.email })
+        .from(customers)
+        .where(and(eq(customers.shopId, user.shopId), eq(customers.id, job.customerId)))
+    : [];
   const when = (iso: string | null) => (iso ? formatShopDateTime(new Date(iso), shop.timeZone) : '');
   return (
     <div>
-      <Link href={`/jobs/${jobId}/quotes`} className="text-sm text-graphite-mute">← Quotes</Link>
-      <h2 className="mb-1 mt-2 flex flex-wrap items-center gap-2">{revision.title} <QuoteStatusBadge status={revision.status} depositPaid={revision.depositPaidAt !== null} /></h2>
+      <Link href={`/jobs/${jobId}/quotes`} className="text-sm text-graphite-mute">
+        ← Quotes
+      </Link>
+      <h2 className="mb-1 mt-2 flex flex-wrap items-center gap-2">
+        {revision.title} <QuoteStatusBadge status={revision.status} depositPaid={revision.depositPaidAt !== null} />
+      </h2>
       <div className="mb-4 text-sm text-graphite-mute" data-testid="quote-history">
         <p>
-          {revision.sentAt ? `Sent ${when(revision.sentAt)}; valid until ${revision.validUntil}.` : 'A draft: change any line, then send it to the customer.'}
+          {revision.sentAt
+            ? `Sent ${when(revision.sentAt)}; valid until ${revision.validUntil}.`
+            : 'A draft: change any line, then send it to the customer.'}
           {!revision.latest && ' A newer revision replaces this one.'}
         </p>
-        {revision.status === 'accepted' && <p>Accepted online by {revision.acceptedName} on {when(revision.answeredAt)}.</p>}
-        {revision.status === 'declined' && <p>Declined online on {when(revision.answeredAt)}{revision.declineReason ? `: “${revision.declineReason}”` : ' (no reason given)'}.</p>}
+        {revision.status === 'accepted' && (
+          <p>
+            Accepted online by {revision.acceptedName} on {when(revision.answeredAt)}.
+          </p>
+        )}
+        {revision.status === 'declined' && (
+          <p>
+            Declined online on {when(revision.answeredAt)}
+            {revision.declineReason ? `: “${revision.declineReason}”` : ' (no reason given)'}.
+          </p>
+        )}
         {revision.status === 'expired' && <p>Expired unanswered after {revision.validUntil}.</p>}
-        {revision.depositPaidAt && <p>Deposit of {formatMoney(revision.totals.depositMinor, revision.currency)} paid on {when(revision.depositPaidAt)}.</p>}
+        {revision.depositPaidAt && (
+          <p>
+            Deposit of {formatMoney(revision.totals.depositMinor, revision.currency)} paid on {when(revision.depositPaidAt)}.
+          </p>
+        )}
       </div>
-      <QuoteEditor key={revision.id} revision={revision} hardware={hardware} customer={{ shopName: shop.name, customer: job.customer, jobName: job.name }} sendTo={customer ?? null} />
+      <QuoteEditor
+        key={revision.id}
+        revision={revision}
+        hardware={hardware}
+        customer={{ shopName: shop.name, customer: job.customer, jobName: job.name }}
+        sendTo={customer ?? null}
+      />
     </div>
   );
 }

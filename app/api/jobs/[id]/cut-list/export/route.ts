@@ -6,7 +6,13 @@ import { notFound } from '@/lib/api/errors';
 import { idParams, route } from '@/lib/api/route';
 
 /** A file name from the job's name: letters, digits and dashes only. */
-const fileName = (job: string) => `${job.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'job'}-cut-list.csv`;
+const fileName = (job: string) =>
+  `${
+    job
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-|-$/g, '') || 'job'
+  }-cut-list.csv`;
 
 // GET /api/jobs/:id/cut-list/export – the cut list as a CSV file in the shop's unit
 export const GET = route({ permission: 'jobs:read', params: idParams }, async ({ db, user, params }) => {
