@@ -1,8 +1,10 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import { sql } from 'drizzle-orm';
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
 import * as schema from './schema';
 import { acquireDirectoryLock } from './lock';
+import { ChangeFeed, CHANGES_CHANNEL, WATCHED_TABLES } from './changes';
 
 export type Schema = typeof schema;
 /** The one database type the app codes against: PGlite and node-postgres both satisfy it. */
@@ -16,6 +18,13 @@ export interface DbHandle {
   close(): Promise<void>;
   /** An embedded database on disk: a gzipped tar of its directory, made between queries (db/live-backup.ts). */
   dump?: () => Promise<Blob>;
+  /**
+   * The embedded database's change feed (db/changes.ts), once its triggers are there; never for PostgreSQL, whose
+   * server other app servers share.
+   */
+  changes?: ChangeFeed;
+  /** Embedded only: subscribes to a notification channel (LISTEN). */
+  listen?: (channel: string, onNotice: (payload: string) => void) => Promise<unknown>;
 }
 
 export interface OpenOptions {
@@ -39,7 +48,24 @@ export async function openDatabase(options: OpenOptions = {}): Promise<DbHandle>
       throw error;
     }
   }
+  if (handle.listen) await startChangeFeed(handle);
   return handle;
+}
+
+/**
+ * Listens for the change triggers' notices, if the triggers are there (a database not yet migrated that far gets no
+ * feed, so nothing is kept between requests). Safe to call again after a late migration.
+ */
+export async function startChangeFeed(handle: DbHandle): Promise<void> {
+  if (handle.changes || !handle.listen) return;
+  const names = WATCHED_TABLES.map((t) => `kerfwise_changes_${t}`);
+  const found = (await handle.db.execute(sql`select count(*)::int as n from pg_trigger where tgname in ${names}`)) as unknown as {
+    rows: { n: number }[];
+  };
+  if (Number(found.rows[0].n) !== names.length) return;
+  const feed = new ChangeFeed();
+  await handle.listen(CHANGES_CHANNEL, (table) => feed.changed(table));
+  handle.changes = feed;
 }
 
 async function openPglite(dataDir: string): Promise<DbHandle> {
@@ -48,7 +74,12 @@ async function openPglite(dataDir: string): Promise<DbHandle> {
   if (dataDir === 'memory://') {
     const client = new PGlite();
     await client.waitReady;
-    return { db: drizzle({ client, schema }) as unknown as Db, kind: 'pglite', close: () => client.close() };
+    return {
+      db: drizzle({ client, schema }) as unknown as Db,
+      kind: 'pglite',
+      close: () => client.close(),
+      listen: (channel, onNotice) => client.listen(channel, onNotice),
+    };
   }
   const dir = path.resolve(dataDir);
   // PGlite creates only the last path segment.
@@ -60,6 +91,7 @@ async function openPglite(dataDir: string): Promise<DbHandle> {
     return {
       db: drizzle({ client, schema }) as unknown as Db,
       kind: 'pglite',
+      listen: (channel, onNotice) => client.listen(channel, onNotice),
       close: async () => {
         await client.close();
         release();

@@ -1,8 +1,5 @@
 import type { ReactNode } from 'react';
-import { eq } from 'drizzle-orm';
-import { getDb } from '@/db/client';
-import { shops } from '@/db/schema';
-import { requirePageUser } from '@/server/auth/session';
+import { currentShopSettings, requirePageUser } from '@/server/auth/session';
 import { ROLE_LABELS } from '@/lib/auth/permissions';
 import { navFor } from '@/lib/nav';
 import { Logo } from '@/components/shell/logo';
@@ -14,7 +11,7 @@ export const dynamic = 'force-dynamic';
 
 export default async function AppLayout({ children }: { children: ReactNode }) {
   const user = await requirePageUser();
-  const [shop] = await (await getDb()).select({ name: shops.name }).from(shops).where(eq(shops.id, user.shopId));
+  const shop = await currentShopSettings(user.shopId);
   const brand = (
     <div className="flex min-w-0 items-center gap-2">
       <Logo />

@@ -1,5 +1,6 @@
 import { eq } from 'drizzle-orm';
-import type { Db } from '../open';
+import type { Db, DbHandle } from '../open';
+import { ReadCache } from '../changes';
 import { shops } from '../schema';
 import type { ShopSettings } from '@/shared/schemas/shop';
 import { recordAudit } from './audit';
@@ -23,6 +24,19 @@ export async function getShopSettings(db: Db, shopId: string): Promise<ShopSetti
     .from(shops)
     .where(eq(shops.id, shopId));
   return (row as ShopSettings | undefined) ?? null;
+}
+
+/** Embedded database only (db/changes.ts): each shop's settings as last read, until a statement on shops commits. */
+const keptSettings = new ReadCache<ShopSettings | null>(['shops']);
+
+/**
+ * The shop's settings for a page render: on the embedded database kept until the shops table changes (a saved
+ * settings form is seen on the very next request); on PostgreSQL read each time. A copy, so no caller can change
+ * the kept one.
+ */
+export async function readShopSettings(handle: Pick<DbHandle, 'db' | 'changes'>, shopId: string): Promise<ShopSettings | null> {
+  const settings = await keptSettings.get(handle.changes, shopId, () => getShopSettings(handle.db, shopId));
+  return settings && { ...settings };
 }
 
 export async function updateShopSettings(db: Db, shopId: string, userId: string, patch: Partial<ShopSettings>) {

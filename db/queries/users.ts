@@ -1,5 +1,6 @@
 import { and, asc, eq, sql } from 'drizzle-orm';
-import type { Db } from '../open';
+import type { Db, DbHandle } from '../open';
+import { ReadCache } from '../changes';
 import { users } from '../schema';
 import type { Role } from '@/lib/auth/permissions';
 
@@ -21,24 +22,37 @@ export async function findActiveUserByEmail(db: Db, email: string) {
   return row ?? null;
 }
 
+type SessionRow = SessionUser & { active: boolean };
+
+/** Embedded database only (db/changes.ts): each user's row as last read, until a statement on users commits. */
+const sessionRows = new ReadCache<SessionRow | null>(['users']);
+
 /**
  * The user a session claims to be, as the database has them now. A session minted before a change of role,
- * password or status (older token version) or for another shop no longer counts.
+ * password or status (older token version) or for another shop no longer counts. On the embedded database the row
+ * is kept until any statement on users commits (sign-out, a role or password change, deactivation: the very next
+ * request reads again); on PostgreSQL it is read on every request, as other app servers may have changed it.
  */
-export async function loadSessionUser(db: Db, claims: { userId: string; shopId: string; tokenVersion: number }): Promise<SessionUser | null> {
-  const [row] = await db
-    .select({
-      id: users.id,
-      shopId: users.shopId,
-      role: users.role,
-      name: users.name,
-      email: users.email,
-      tokenVersion: users.tokenVersion,
-      active: users.active,
-    })
-    .from(users)
-    .where(and(eq(users.id, claims.userId), eq(users.shopId, claims.shopId)))
-    .limit(1);
+export async function loadSessionUser(
+  handle: Pick<DbHandle, 'db' | 'changes'>,
+  claims: { userId: string; shopId: string; tokenVersion: number },
+): Promise<SessionUser | null> {
+  const row = await sessionRows.get(handle.changes, `${claims.userId}|${claims.shopId}`, async () => {
+    const [found] = await handle.db
+      .select({
+        id: users.id,
+        shopId: users.shopId,
+        role: users.role,
+        name: users.name,
+        email: users.email,
+        tokenVersion: users.tokenVersion,
+        active: users.active,
+      })
+      .from(users)
+      .where(and(eq(users.id, claims.userId), eq(users.shopId, claims.shopId)))
+      .limit(1);
+    return found ?? null;
+  });
   if (!row || !row.active || row.tokenVersion !== claims.tokenVersion) return null;
   const { active: _active, ...user } = row;
   return user;

@@ -1,4 +1,5 @@
-import { date, index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import { date, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { jobStatusEnum } from './enums';
 import { shopIdColumn } from './columns';
 import { users } from './users';
@@ -20,6 +21,16 @@ export const jobs = pgTable(
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    /**
+     * The job's pieces (its parts' quantities summed) and its parts' materials, once each: kept by a trigger on parts
+     * in the same statement as every insert, change or delete of a part (migration 0014), so the jobs list reads
+     * them off the job instead of adding up its parts on every request. Never written by the app.
+     */
+    partPieces: integer('part_pieces').notNull().default(0),
+    partMaterials: text('part_materials')
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
   },
   (t) => [
     index('jobs_shop_idx').on(t.shopId),

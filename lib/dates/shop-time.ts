@@ -20,16 +20,37 @@ export function timeZoneChoices(): string[] {
   return ['UTC', ...listed.filter((z) => z !== 'UTC')];
 }
 
+/**
+ * One formatter per locale, zone and style, made once: making an Intl.DateTimeFormat costs a hundred times what
+ * formatting with it does (a list of 25 rows made 25 of them on every render).
+ */
+const formatters = new Map<string, Intl.DateTimeFormat>();
+function formatter(locale: string, zone: string, style: 'day' | 'date-time'): Intl.DateTimeFormat {
+  const key = `${locale}|${zone}|${style}`;
+  let f = formatters.get(key);
+  if (!f) {
+    // en-CA writes dates as YYYY-MM-DD.
+    const options: Intl.DateTimeFormatOptions =
+      style === 'day'
+        ? { timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit' }
+        : { timeZone: zone, dateStyle: 'medium', timeStyle: 'short' };
+    f = new Intl.DateTimeFormat(locale, options);
+    // Only formatters that were made (a zone the runtime knows) are kept; a few hundred zones at most.
+    if (formatters.size >= 500) formatters.clear();
+    formatters.set(key, f);
+  }
+  return f;
+}
+
 /** The calendar day of `at` in `zone`, as `YYYY-MM-DD`. */
 export function shopDay(at: Date, zone: string): string {
   if (Number.isNaN(at.getTime())) throw new RangeError('shopDay needs a valid date.');
-  // en-CA writes dates as YYYY-MM-DD.
-  return new Intl.DateTimeFormat('en-CA', { timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(at);
+  return formatter('en-CA', zone, 'day').format(at);
 }
 
 /** A date and time as the shop reads it: "Dec 3, 2026, 5:30 PM" in its zone. */
 export function formatShopDateTime(at: Date, zone: string, locale = 'en-US'): string {
-  return new Intl.DateTimeFormat(locale, { timeZone: zone, dateStyle: 'medium', timeStyle: 'short' }).format(at);
+  return formatter(locale, zone, 'date-time').format(at);
 }
 
 /** Periods the reports group by. Weeks start on Monday (ISO 8601), as PostgreSQL's date_trunc('week') does. */

@@ -1,7 +1,7 @@
 import 'server-only';
 import { NextResponse, type NextRequest } from 'next/server';
 import { z, type ZodType } from 'zod';
-import { getDb } from '@/db/client';
+import { getDbHandle } from '@/db/client';
 import type { Db } from '@/db/open';
 import { userFromRequest, type SessionUser } from '@/server/auth/session';
 import { can, type Permission } from '@/lib/auth/permissions';
@@ -91,8 +91,9 @@ export function route<P = undefined, B = undefined, Q = undefined>(
         checkSameOrigin(req);
         checkJsonBody(req);
       }
-      const db = await getDb();
-      const user = await userFromRequest(req, db);
+      const handle = await getDbHandle();
+      const db = handle.db;
+      const user = await userFromRequest(req, handle);
       if (spec.permission !== ANYONE) {
         if (!user) throw unauthorized();
         if (!can(user.role, spec.permission)) throw forbidden();

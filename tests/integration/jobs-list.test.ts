@@ -1,3 +1,4 @@
+import { eq } from 'drizzle-orm';
 import { beforeAll, describe, expect, test } from 'vitest';
 import type { DbHandle } from '@/db/open';
 import { customers, jobs, parts } from '@/db/schema';
@@ -212,5 +213,62 @@ describe('the jobs list', () => {
     expect(theirs).toMatchObject({ total: 1, shopJobs: 1, archived: 0 });
     expect(theirs.customers).not.toContain('Ada Ash');
     expect((await list('?q=maple', fx.otherOwner)).total).toBe(0);
+  });
+});
+
+describe("a job's pieces and materials, kept on the job by the trigger on parts", () => {
+  /** The figures counted from the parts themselves, to hold the kept ones against. */
+  async function counted(jobId: string) {
+    const rows = await handle.db.select({ quantity: parts.quantity, material: parts.material }).from(parts).where(eq(parts.jobId, jobId));
+    return { partCount: rows.reduce((n, r) => n + r.quantity, 0), materials: [...new Set(rows.map((r) => r.material))].sort() };
+  }
+  async function listed(name: string) {
+    const page = await list(`?q=${encodeURIComponent(name)}&status=all`);
+    const job = page.jobs.find((j) => j.name === name)!;
+    return { partCount: job.partCount, materials: job.materials };
+  }
+
+  test('follow every insert, change, move and delete of a part, in the statement that makes it', async () => {
+    const [a, b] = await handle.db
+      .insert(jobs)
+      .values([
+        { shopId: fx.mine.id, name: 'Kept figures hutch' },
+        { shopId: fx.mine.id, name: 'Kept figures bench' },
+      ])
+      .returning();
+    expect(await listed(a.name)).toEqual({ partCount: 0, materials: [] });
+    const [side, top] = await handle.db
+      .insert(parts)
+      .values([
+        { shopId: fx.mine.id, jobId: a.id, label: 'Side', quantity: 2, lengthMm: 900, widthMm: 400, thicknessMm: 18, material: 'Walnut ply' },
+        { shopId: fx.mine.id, jobId: a.id, label: 'Top', quantity: 1, lengthMm: 1200, widthMm: 420, thicknessMm: 25, material: 'White oak' },
+        { shopId: fx.mine.id, jobId: a.id, label: 'Shelf', quantity: 3, lengthMm: 1150, widthMm: 380, thicknessMm: 18, material: 'Walnut ply' },
+      ])
+      .returning();
+    expect(await listed(a.name)).toEqual({ partCount: 6, materials: ['Walnut ply', 'White oak'] });
+    expect(await listed(a.name)).toEqual(await counted(a.id));
+
+    await handle.db.update(parts).set({ quantity: 5, material: 'Cherry' }).where(eq(parts.id, side.id));
+    expect(await listed(a.name)).toEqual({ partCount: 9, materials: ['Cherry', 'Walnut ply', 'White oak'] });
+
+    // Moved to the other job: both jobs' figures change.
+    await handle.db.update(parts).set({ jobId: b.id }).where(eq(parts.id, top.id));
+    expect(await listed(a.name)).toEqual({ partCount: 8, materials: ['Cherry', 'Walnut ply'] });
+    expect(await listed(b.name)).toEqual({ partCount: 1, materials: ['White oak'] });
+
+    await handle.db.delete(parts).where(eq(parts.jobId, a.id));
+    expect(await listed(a.name)).toEqual({ partCount: 0, materials: [] });
+    expect(await listed(b.name)).toEqual(await counted(b.id));
+
+    // A rolled-back insert leaves the figures as they were.
+    await handle.db
+      .transaction(async (tx) => {
+        await tx
+          .insert(parts)
+          .values({ shopId: fx.mine.id, jobId: b.id, label: 'Leg', quantity: 4, lengthMm: 450, widthMm: 45, thicknessMm: 45, material: 'Ash' });
+        tx.rollback();
+      })
+      .catch(() => undefined);
+    expect(await listed(b.name)).toEqual({ partCount: 1, materials: ['White oak'] });
   });
 });

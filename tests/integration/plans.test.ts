@@ -71,6 +71,8 @@ describe('plan routes', () => {
     const got = await call(planRoute.GET, `/api/plans/${id}`, id, estimator);
     expect(got.status).toBe(200);
     expect(readPlan(got.body.document)).toEqual(plan);
+    // Sent as stored (it was checked when saved): the same document without going through readPlan.
+    expect(got.body.document).toEqual(plan);
     expect(validatePlan(got.body.request, got.body.document)).toEqual([]);
   });
 

@@ -3,11 +3,10 @@ import Link from 'next/link';
 import { Suspense } from 'react';
 import { JobsBoard } from '@/components/jobs/jobs-board';
 import { PageHeader } from '@/components/ui/page-header';
-import { requirePageUser } from '@/server/auth/session';
+import { currentShopSettings, requirePageUser } from '@/server/auth/session';
 import { can } from '@/lib/auth/permissions';
 import { getDb } from '@/db/client';
 import { listJobsPage } from '@/db/queries/jobs';
-import { getShopSettings } from '@/db/queries/shops';
 import { jobListQuerySchema } from '@/shared/schemas/job-list';
 import { zodFieldErrors } from '@/server/api/errors';
 
@@ -39,7 +38,7 @@ export default async function JobsPage({ searchParams }: { searchParams: Promise
     );
   }
   const db = await getDb();
-  const [settings, initial] = await Promise.all([getShopSettings(db, user.shopId), listJobsPage(db, user.shopId, parsed.data)]);
+  const [settings, initial] = await Promise.all([currentShopSettings(user.shopId), listJobsPage(db, user.shopId, parsed.data)]);
   return (
     <>
       <PageHeader title="Jobs" lead={LEAD} />
