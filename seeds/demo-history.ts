@@ -132,6 +132,7 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
         name: past.plan,
         status: 'draft',
         request,
+        version: document.version,
         document,
         yieldRatio: document.totals?.yield ?? null,
         costCents: Math.round(document.totals?.cost ?? 0),

@@ -472,6 +472,7 @@ async function seedReleasedPlan(db: Db, shopId: string, jobId: string, userId: s
       jobId,
       name: 'Carcasses and backs',
       status: 'draft',
+      version: plan.version,
       request,
       document: plan,
       yieldRatio: plan.totals?.yield ?? null,

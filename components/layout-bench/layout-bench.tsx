@@ -27,7 +27,8 @@ const BenchCanvas = dynamic(() => import('./bench-canvas'), {
   loading: () => <p className="p-4 text-sm text-graphite-mute">Setting out the bench…</p>,
 });
 
-interface PlanResponse {
+/** A plan as GET /api/plans/:id answers it (and as the page hands it over, read on the server). */
+export interface PlanResponse {
   id: string;
   status: string;
   updatedAt: string;
@@ -36,8 +37,9 @@ interface PlanResponse {
 }
 
 /** The Layout bench for a saved plan: every Sheet map and Board map at once, editable while the plan is a draft. */
-export function LayoutBench({ planId, editable, units }: { planId: string; editable: boolean; units: ShopUnits }) {
-  const plan = useQuery({ queryKey: ['plan', planId], queryFn: () => api<PlanResponse>(`/api/plans/${planId}`) });
+export function LayoutBench({ planId, initial, editable, units }: { planId: string; initial?: PlanResponse; editable: boolean; units: ShopUnits }) {
+  // The page read the plan already: the bench starts from it, and asks again only after a save.
+  const plan = useQuery({ queryKey: ['plan', planId], queryFn: () => api<PlanResponse>(`/api/plans/${planId}`), initialData: initial });
   if (plan.isPending) return <p className="text-sm text-graphite-mute">Loading the plan…</p>;
   if (plan.isError)
     return (

@@ -1,12 +1,12 @@
 import { and, eq, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { plans } from '../schema';
-import { readPlan } from '@/lib/nesting';
+import { readStoredPlan } from '@/lib/nesting/read-plan';
 import { PLAN_VERSION } from '@/shared/schemas/nesting';
 
 /**
- * A saved plan with its document read through `readPlan` (older versions migrated forward, unknown ones refused),
- * scoped to the shop. The document is the single source of truth for placements and saw order; the
+ * A saved plan read through `readStoredPlan`: its document (older versions migrated forward, unknown ones refused)
+ * and its request (null when it no longer parses), scoped to the shop. The document is the single source of truth for placements and saw order; the
  * plan_pieces / placements / saw_steps rows are written from it when a plan is released.
  */
 export async function getPlan(db: Db, shopId: string, planId: string) {
@@ -15,7 +15,7 @@ export async function getPlan(db: Db, shopId: string, planId: string) {
     .from(plans)
     .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!row) return null;
-  return { ...row, document: readPlan(row.document) };
+  return { ...row, ...readStoredPlan(row) };
 }
 
 /**
@@ -36,14 +36,14 @@ export async function getPlanAsJson(db: Db, shopId: string, planId: string): Pro
       costCents: plans.costCents,
       createdAt: plans.createdAt,
       updatedAt: plans.updatedAt,
-      version: sql<unknown>`${plans.document} -> 'version'`,
+      version: plans.version,
       request: sql<string>`${plans.request}::text`,
       document: sql<string>`${plans.document}::text`,
     })
     .from(plans)
     .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!row) return null;
-  if (Number(row.version) !== PLAN_VERSION) return 'older';
+  if (row.version !== PLAN_VERSION) return 'older';
   const head = JSON.stringify({
     id: row.id,
     jobId: row.jobId,

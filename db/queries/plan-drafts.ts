@@ -14,7 +14,12 @@ const stamp = () => {
   return { createdAt: now, updatedAt: now };
 };
 
-const figures = (plan: Plan) => ({ yieldRatio: plan.totals?.yield ?? null, costCents: plan.totals ? Math.round(plan.totals.cost) : null });
+/** The columns kept beside a document: its version (so a read knows without opening it), yield and cost. */
+const figures = (plan: Plan) => ({
+  version: plan.version,
+  yieldRatio: plan.totals?.yield ?? null,
+  costCents: plan.totals ? Math.round(plan.totals.cost) : null,
+});
 
 export async function listJobPlans(db: Db, shopId: string, jobId: string): Promise<JobPlanSummary[]> {
   const rows = await db

@@ -1,9 +1,9 @@
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { offcuts, placements, planPieces, plans, stockItems, stockMovements } from '../schema';
-import { readPlan } from '@/lib/nesting';
+import { readPlan, readStoredPlan } from '@/lib/nesting/read-plan';
 import { FinishChoiceError, finishOutcome, minOffcutFor, type FinishOutcome } from '@/lib/stock/finish-plan';
-import { nestRequestSchema, type NestRequest, type Plan, type PlanPiece } from '@/shared/schemas/nesting';
+import { type NestRequest, type Plan, type PlanPiece } from '@/shared/schemas/nesting';
 import { finishPlanSchema, type FinishPlanChoices, type FinishPlanInput, type MissingPiece } from '@/shared/schemas/stock';
 import { stockRef } from './nest-request';
 import { recordAudit } from './audit';
@@ -312,9 +312,7 @@ export async function finishPlan(
       { status: 'done', finishedAt: new Date(), finishedBy: userId },
       'marked done',
     );
-    const plan = readPlan(row.document);
-    const parsed = nestRequestSchema.safeParse(row.request);
-    const request = parsed.success ? parsed.data : null;
+    const { document: plan, request } = readStoredPlan(row);
     const outcome = await decideFinish(tx, shopId, plan, request, body);
     const reason = `Cut for plan “${row.name}”`;
 

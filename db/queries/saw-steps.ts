@@ -2,7 +2,6 @@ import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, plans, sawSteps, users } from '../schema';
 import { readPlan } from '@/lib/nesting';
-import { nestRequestSchema, nestSettingsSchema } from '@/shared/schemas/nesting';
 import { recordAudit } from './audit';
 import { syncJobStatus } from './job-status';
 import { getPlan } from './plan-document';
@@ -111,9 +110,7 @@ export async function getSawOrder(db: Db, shopId: string, planId: string, { draf
     .from(jobs)
     .leftJoin(customers, eq(customers.id, jobs.customerId))
     .where(and(eq(jobs.shopId, shopId), eq(jobs.id, plan.jobId)));
-  const request = nestRequestSchema.safeParse(plan.request);
-  const requestSettings = (plan.request as { settings?: unknown } | null)?.settings;
-  const kerf = request.success ? request.data.settings.kerf : (nestSettingsSchema.safeParse(requestSettings ?? {}).data?.kerf ?? settings.kerfMm);
+  const kerf = plan.request?.settings.kerf ?? settings.kerfMm;
   return {
     id: plan.id,
     name: plan.name,
@@ -121,7 +118,7 @@ export async function getSawOrder(db: Db, shopId: string, planId: string, { draf
     document: plan.document,
     job: job ?? { id: plan.jobId, name: 'Job', customer: '' },
     kerf,
-    parts: request.success ? request.data.parts : [],
+    parts: plan.request?.parts ?? [],
     units: settings.units,
   };
 }

@@ -1,5 +1,5 @@
 /** Reading a saved plan: migrated forward to the current version, never silently misread. */
-import { PLAN_VERSION, planSchema, type Plan } from '@/shared/schemas/nesting';
+import { nestRequestSchema, PLAN_VERSION, planSchema, type NestRequest, type Plan } from '@/shared/schemas/nesting';
 
 export class PlanVersionError extends Error {
   constructor(readonly found: unknown) {
@@ -26,4 +26,14 @@ export function readPlan(saved: unknown): Plan {
   if (typeof version !== 'number' || !Number.isInteger(version) || version < 1 || version > PLAN_VERSION) throw new PlanVersionError(version);
   for (let v = version; v < PLAN_VERSION; v++) plan = { ...MIGRATIONS[v](plan), version: v + 1 };
   return planSchema.parse(plan);
+}
+
+/**
+ * A stored plan's two halves, read the one way everything reads them: the document through `readPlan` (migrated
+ * forward, or an error: a plan is never misread), and the request it was nested from, or null when it no longer
+ * parses — then every rule that needs it (the kerf, the minimum offcut, the parts' names) takes the shop's settings.
+ */
+export function readStoredPlan(stored: { document: unknown; request: unknown }): { document: Plan; request: NestRequest | null } {
+  const request = nestRequestSchema.safeParse(stored.request);
+  return { document: readPlan(stored.document), request: request.success ? request.data : null };
 }

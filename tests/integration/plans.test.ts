@@ -74,6 +74,9 @@ describe('plan routes', () => {
     // Sent as stored (it was checked when saved): the same document without going through readPlan.
     expect(got.body.document).toEqual(plan);
     expect(validatePlan(got.body.request, got.body.document)).toEqual([]);
+    // The version column says what the document says, so a read knows it without opening the document.
+    const [row] = await handle.db.select({ version: plans.version }).from(plans).where(eq(plans.id, id));
+    expect(row.version).toBe(plan.version);
   });
 
   test('a tampered plan is refused with its violations, and nothing is stored', async () => {

@@ -16,7 +16,6 @@ import { requirePageUser } from '@/server/auth/session';
 import { minOffcutFor } from '@/lib/stock/finish-plan';
 import { isKeepableOffcut } from '@/lib/stock/offcut-rules';
 import { formatLength } from '@/lib/units/format-length';
-import { nestRequestSchema } from '@/shared/schemas/nesting';
 
 export const metadata: Metadata = { title: 'Finish plan' };
 
@@ -30,9 +29,8 @@ export default async function FinishPlanPage({ params }: { params: Promise<{ id:
   if (!plan || !settings || (plan.status === 'draft' && !can(user.role, 'plans:write'))) notFound();
   const [job] = await db.select({ name: jobs.name }).from(jobs).where(eq(jobs.id, plan.jobId));
   const len = (mm: number) => formatLength(mm, settings.units);
-  const request = nestRequestSchema.safeParse(plan.request);
-  const min = minOffcutFor(request.success ? request.data : null, settings);
-  const labels = new Map((request.success ? request.data.parts : []).map((p) => [p.id, p.label || p.id]));
+  const min = minOffcutFor(plan.request, settings);
+  const labels = new Map((plan.request?.parts ?? []).map((p) => [p.id, p.label || p.id]));
 
   const pieces: FinishPiece[] = plan.document.pieces.map((p, index) => ({
     index,
