@@ -3,25 +3,16 @@ import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { formatLength } from '@/lib/units/format-length';
 import { shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
 import { partPatchSchema, type Part, type PartInput } from '@/shared/schemas/part';
+import { LENGTH_KEYS, PART_FIELDS, PART_KEYS, type PartKey } from '@/shared/part-fields';
 
 /** The editable columns of the cut list, in keyboard order. */
-export const COLUMNS = ['label', 'quantity', 'lengthMm', 'widthMm', 'thicknessMm', 'material', 'grain', 'jointAllowanceMm', 'notes'] as const;
-export type Column = (typeof COLUMNS)[number];
+export const COLUMNS = PART_KEYS;
+export type Column = PartKey;
 export type TextColumn = Exclude<Column, 'grain'>;
 
-export const COLUMN_TITLES: Record<Column, string> = {
-  label: 'Part',
-  quantity: 'Qty',
-  lengthMm: 'Length',
-  widthMm: 'Width',
-  thicknessMm: 'Thickness',
-  material: 'Material',
-  grain: 'Grain',
-  jointAllowanceMm: 'Joint allow.',
-  notes: 'Notes',
-};
+export const COLUMN_TITLES = Object.fromEntries(PART_FIELDS.map((f) => [f.key, f.title])) as Record<Column, string>;
 
-const LENGTH_COLUMNS = new Set<Column>(['lengthMm', 'widthMm', 'thicknessMm', 'jointAllowanceMm']);
+const LENGTH_COLUMNS = new Set<Column>(LENGTH_KEYS);
 export const isLengthColumn = (c: Column) => LENGTH_COLUMNS.has(c);
 
 /** What a cell shows for a stored value. */

@@ -1,4 +1,5 @@
 import { CUT_LIST_FIELDS, type CutListField } from '@/shared/schemas/cut-list-upload';
+import { UPLOAD_FIELDS } from '@/shared/part-fields';
 
 /** Header words shops use for each field (lower case, punctuation dropped). */
 const SYNONYMS: Record<CutListField, readonly string[]> = {
@@ -46,14 +47,4 @@ export function looksLikeHeader(row: readonly string[]): boolean {
 }
 
 /** The mapping a file without a header most likely has: the template's column order. */
-export const TEMPLATE_COLUMNS: readonly CutListField[] = [
-  'label',
-  'quantity',
-  'length',
-  'width',
-  'thickness',
-  'material',
-  'grain',
-  'jointAllowance',
-  'notes',
-];
+export const TEMPLATE_COLUMNS: readonly CutListField[] = UPLOAD_FIELDS;

@@ -2,6 +2,7 @@ import Papa from 'papaparse';
 import type { ShopUnits } from '@/shared/schemas/units';
 import type { GrainRule } from '@/shared/schemas/drawer-schedule';
 import { exactLengthText } from './exact-length';
+import { PART_FIELDS, type PartFieldRow } from '@/shared/part-fields';
 
 /**
  * Cells a spreadsheet would run as a formula: those starting with = + - @, tab or carriage return (OWASP,
@@ -42,29 +43,14 @@ export function csvLength(mm: number, units: ShopUnits): string {
 export function cutListCsv(parts: readonly ExportPart[], units: ShopUnits): string {
   const unit = units.system === 'imperial' ? 'in' : 'mm';
   const len = (mm: number) => csvLength(mm, units);
-  const fields = [
-    'Part',
-    'Quantity',
-    `Length (${unit})`,
-    `Width (${unit})`,
-    `Thickness (${unit})`,
-    'Material',
-    'Grain',
-    `Joint allowance (${unit})`,
-    'Notes',
-    'Drawer schedule',
-  ];
-  const data = parts.map((p) => [
-    p.label,
-    p.quantity,
-    len(p.lengthMm),
-    len(p.widthMm),
-    len(p.thicknessMm),
-    p.material,
-    p.grain === 'along-length' ? 'along' : 'any',
-    p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '',
-    p.notes,
-    p.schedule ?? '',
-  ]);
+  // One column per part field, in the table's order (shared/part-fields.ts), then the schedule a row comes from.
+  const fields = [...PART_FIELDS.map((f) => (f.kind === 'length' ? `${f.csv} (${unit})` : f.csv)), 'Drawer schedule'];
+  const cell = (p: ExportPart, f: PartFieldRow): string | number => {
+    if (f.key === 'grain') return p.grain === 'along-length' ? 'along' : 'any';
+    if (f.key === 'jointAllowanceMm') return p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '';
+    if (f.kind === 'length') return len(p[f.key] as number);
+    return p[f.key];
+  };
+  const data = parts.map((p) => [...PART_FIELDS.map((f) => cell(p, f)), p.schedule ?? '']);
   return Papa.unparse({ fields, data }, { escapeFormulae: FORMULA_START, newline: '\r\n' });
 }

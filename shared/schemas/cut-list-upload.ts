@@ -1,25 +1,16 @@
 import { z } from 'zod';
 import { UPLOAD_LIMITS } from '@/lib/cut-list/limits';
 import { lengthUnitSchema } from './units';
+import { PART_FIELDS, REQUIRED_UPLOAD_FIELDS, UPLOAD_FIELDS, type UploadField } from '@/shared/part-fields';
 
 /** What a column of an uploaded cut list can hold. */
-export const CUT_LIST_FIELDS = ['label', 'quantity', 'length', 'width', 'thickness', 'material', 'grain', 'jointAllowance', 'notes'] as const;
-export type CutListField = (typeof CUT_LIST_FIELDS)[number];
+export const CUT_LIST_FIELDS = UPLOAD_FIELDS as readonly UploadField[] as unknown as readonly [UploadField, ...UploadField[]];
+export type CutListField = UploadField;
 
 /** A row cannot become a part without these. */
-export const REQUIRED_CUT_LIST_FIELDS: readonly CutListField[] = ['label', 'quantity', 'length', 'width', 'thickness', 'material'];
+export const REQUIRED_CUT_LIST_FIELDS: readonly CutListField[] = REQUIRED_UPLOAD_FIELDS;
 
-export const CUT_LIST_FIELD_LABELS: Record<CutListField, string> = {
-  label: 'Part',
-  quantity: 'Quantity',
-  length: 'Length',
-  width: 'Width',
-  thickness: 'Thickness',
-  material: 'Material',
-  grain: 'Grain',
-  jointAllowance: 'Joint allowance',
-  notes: 'Notes',
-};
+export const CUT_LIST_FIELD_LABELS = Object.fromEntries(PART_FIELDS.map((f) => [f.field, f.csv])) as Record<CutListField, string>;
 
 const cell = z.string().max(UPLOAD_LIMITS.maxCellLength * 4, 'A cell is far longer than any cut list needs.');
 

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { text } from './text';
 import { MAX_LENGTH_MM } from '@/lib/units/parse-length';
 import { grainRuleSchema } from './drawer-schedule';
+import { PART_FIELDS, SCHEDULE_OWNED_KEYS, type PartKey } from '@/shared/part-fields';
 
 /** One cut-list row. Lengths are mm (the client parses what a person typed with `lib/units` first). */
 
@@ -52,19 +53,10 @@ export const partPatchSchema = z.object(partShape).partial();
 export type PartPatch = z.output<typeof partPatchSchema>;
 
 /** Fields a drawer schedule owns on its rows: change the schedule, not the row. */
-export const SCHEDULE_OWNED_FIELDS = ['label', 'quantity', 'lengthMm', 'widthMm', 'thicknessMm', 'material', 'grain', 'jointAllowanceMm'] as const;
+export const SCHEDULE_OWNED_FIELDS = SCHEDULE_OWNED_KEYS;
 
-export const PART_FIELD_NAMES: Record<(typeof SCHEDULE_OWNED_FIELDS)[number] | 'notes', string> = {
-  label: 'name',
-  quantity: 'quantity',
-  lengthMm: 'length',
-  widthMm: 'width',
-  thicknessMm: 'thickness',
-  material: 'material',
-  grain: 'grain',
-  jointAllowanceMm: 'joint allowance',
-  notes: 'notes',
-};
+/** How a message names each field ("change its length in the schedule"). */
+export const PART_FIELD_NAMES = Object.fromEntries(PART_FIELDS.map((f) => [f.key, f.spoken])) as Record<PartKey, string>;
 
 export const partParams = z.object({ id: z.uuid(), partId: z.uuid() });
 
