@@ -13,8 +13,7 @@
  * Flags: --port N (default 3460 or PORT), --drops N (default 6, the first one on a freshly opened bench), --modes worker,page, --keep (leave the data
  * directory), --no-write. KERFWISE_DIST_DIR picks the build, as for `next start`; CHROMIUM_PATH the browser.
  */
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { randomBytes } from 'node:crypto';
+import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -24,6 +23,7 @@ import { openDatabase } from '@/db/open';
 import { fitView, layoutPieces, toScreen } from '@/lib/layout-bench/world';
 import { pickMove, type Piece, type Placement } from '@/tests/e2e/support/bench';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoShop } from '@/seeds/demo-shop';
+import { startServer, waitForHealth } from './serve';
 
 const log = (s = '') => process.stdout.write(`${s}\n`);
 const MAPLE_23_32 = (23 / 32) * 25.4; // ≈3/4″ maple ply as the demo rack stocks it
@@ -90,39 +90,6 @@ async function seed(dataDir: string) {
   } finally {
     await handle.close();
   }
-}
-
-function startServer(dataDir: string, port: number): { child: ChildProcess; url: string } {
-  const url = `http://127.0.0.1:${port}`;
-  const out = fs.openSync(path.join(dataDir, 'server.log'), 'a');
-  const child = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
-    detached: true,
-    stdio: ['ignore', out, out],
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      NEXTAUTH_SECRET: randomBytes(32).toString('base64url'),
-      NEXTAUTH_URL: url,
-      KERFWISE_DATA_DIR: dataDir,
-      DATABASE_URL: '',
-      SMTP_URL: '',
-      NEXT_TELEMETRY_DISABLED: '1',
-    },
-  });
-  return { child, url };
-}
-
-async function waitForHealth(url: string) {
-  const until = Date.now() + 90_000;
-  while (Date.now() < until) {
-    try {
-      if ((await fetch(`${url}/api/health`)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error('the server did not answer /api/health within 90 s');
 }
 
 async function signIn(page: Page, url: string) {

@@ -10,8 +10,7 @@
  * directory). BENCH_DATA_DIR picks the data directory (default: a new one in the system's temp directory);
  * KERFWISE_DIST_DIR the build, as for `next start`.
  */
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { randomBytes } from 'node:crypto';
+import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -21,6 +20,7 @@ import { z } from 'zod';
 import { openDatabase } from '@/db/open';
 import { jobs, parts, plans, users } from '@/db/schema';
 import { DEMO_PASSWORD, seedDemoShop } from '@/seeds/demo-shop';
+import { startServer, waitForHealth } from './serve';
 
 const JOBS = 500;
 const PARTS = 20_000;
@@ -129,39 +129,6 @@ async function seed(dataDir: string) {
   } finally {
     await handle.close();
   }
-}
-
-function startServer(dataDir: string, port: number): { child: ChildProcess; url: string } {
-  const url = `http://127.0.0.1:${port}`;
-  const out = fs.openSync(path.join(dataDir, 'server.log'), 'a');
-  const child = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
-    detached: true,
-    stdio: ['ignore', out, out],
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      NEXTAUTH_SECRET: randomBytes(32).toString('base64url'),
-      NEXTAUTH_URL: url,
-      KERFWISE_DATA_DIR: dataDir,
-      DATABASE_URL: '',
-      SMTP_URL: '',
-      NEXT_TELEMETRY_DISABLED: '1',
-    },
-  });
-  return { child, url };
-}
-
-async function waitForHealth(url: string) {
-  const until = Date.now() + 60_000;
-  while (Date.now() < until) {
-    try {
-      if ((await fetch(`${url}/api/health`)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error('the server did not answer /api/health within 60 s');
 }
 
 /** Signs in as a browser does (CSRF token, then the credentials callback) and returns the session cookie. */
