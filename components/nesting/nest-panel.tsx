@@ -310,12 +310,12 @@ function NestForm({
           The Nest could not run: {failure}
         </p>
       )}
-      {result && <NestOutcome jobId={jobId} result={result} shop={shop} showPrices={showPrices} nestFor={nestFor} />}
+      {result && <NestResultCard jobId={jobId} result={result} shop={shop} showPrices={showPrices} nestFor={nestFor} />}
     </div>
   );
 }
 
-function NestOutcome({
+function NestResultCard({
   jobId,
   result,
   shop,

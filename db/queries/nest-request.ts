@@ -12,20 +12,9 @@ import { listSaws } from './saws';
 import type { NestSaw } from '@/shared/schemas/saw';
 import { invalid } from '@/lib/errors';
 import { requestForChoice } from '@/lib/nesting/request-for-choice';
+import { stockRef } from '@/lib/stock/stock-ref';
 
-/**
- * Stock ids in a nesting request name where the piece comes from, so a plan can be traced back to the rack:
- * `stock:<stock item id>` (on hand), `buy:<stock item id>` (more of that size, bought), `offcut:<offcut id>`.
- */
-export const stockRef = {
-  onHand: (id: string) => `stock:${id}`,
-  buy: (id: string) => `buy:${id}`,
-  offcut: (id: string) => `offcut:${id}`,
-  parse(ref: string): { source: 'stock' | 'buy' | 'offcut'; id: string } | null {
-    const m = /^(stock|buy|offcut):([0-9a-f-]{36})$/.exec(ref);
-    return m ? { source: m[1] as 'stock' | 'buy' | 'offcut', id: m[2] } : null;
-  },
-};
+export { stockRef };
 
 /** Sheets cost each; boards by the board foot (lib/stock/pricing). Kept here for the queries that import it. */
 export const costEachCents = (item: typeof stockItems.$inferSelect): number => priceEach(item);
