@@ -13,7 +13,6 @@
  * Flags: --port N (default 3460 or PORT), --drops N (default 6, the first one on a freshly opened bench), --modes worker,page, --keep (leave the data
  * directory), --no-write. KERFWISE_DIST_DIR picks the build, as for `next start`; CHROMIUM_PATH the browser.
  */
-import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -23,7 +22,7 @@ import { openDatabase } from '@/db/open';
 import { fitView, layoutPieces, toScreen } from '@/lib/layout-bench/world';
 import { pickMove, type Piece, type Placement } from '@/tests/e2e/support/bench';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemoShop } from '@/seeds/demo-shop';
-import { startServer, waitForHealth } from './serve';
+import { buildIfNeeded, startServer, waitForHealth } from './serve';
 
 const log = (s = '') => process.stdout.write(`${s}\n`);
 const MAPLE_23_32 = (23 / 32) * 25.4; // ≈3/4″ maple ply as the demo rack stocks it
@@ -69,18 +68,6 @@ function parseFlags(argv: string[]): Record<string, unknown> {
     else out[flag[1]] = argv[++i];
   }
   return out;
-}
-
-const distDir = process.env.KERFWISE_DIST_DIR || '.next';
-
-function buildIfNeeded() {
-  if (fs.existsSync(path.join(distDir, 'BUILD_ID'))) return;
-  log(`No build in ${distDir}: building…`);
-  const build = spawnSync(process.execPath, ['node_modules/next/dist/bin/next', 'build'], {
-    stdio: 'inherit',
-    env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' },
-  });
-  if (build.status !== 0) throw new Error('next build failed');
 }
 
 async function seed(dataDir: string) {
@@ -287,7 +274,7 @@ function summary(mode: Mode, drops: DropFigures[]) {
 }
 
 async function main() {
-  buildIfNeeded();
+  buildIfNeeded(log);
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-bench-layout-'));
   log(
     `Layout bench frames, ${os.cpus().length} cores, load average ${os

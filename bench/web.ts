@@ -10,7 +10,6 @@
  * directory). BENCH_DATA_DIR picks the data directory (default: a new one in the system's temp directory);
  * KERFWISE_DIST_DIR the build, as for `next start`.
  */
-import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -20,7 +19,7 @@ import { z } from 'zod';
 import { openDatabase } from '@/db/open';
 import { jobs, parts, plans, users } from '@/db/schema';
 import { DEMO_PASSWORD, seedDemoShop } from '@/seeds/demo-shop';
-import { startServer, waitForHealth } from './serve';
+import { buildIfNeeded, startServer, waitForHealth } from './serve';
 
 const JOBS = 500;
 const PARTS = 20_000;
@@ -49,18 +48,6 @@ function parseFlags(argv: string[]): Record<string, unknown> {
     else out[flag[1]] = argv[++i];
   }
   return out;
-}
-
-const distDir = process.env.KERFWISE_DIST_DIR || '.next';
-
-function buildIfNeeded() {
-  if (fs.existsSync(path.join(distDir, 'BUILD_ID'))) return;
-  log(`No build in ${distDir}: building…`);
-  const build = spawnSync(process.execPath, ['node_modules/next/dist/bin/next', 'build'], {
-    stdio: 'inherit',
-    env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' },
-  });
-  if (build.status !== 0) throw new Error('next build failed');
 }
 
 /**
@@ -207,7 +194,7 @@ function table(rows: Row[]) {
 }
 
 async function main() {
-  buildIfNeeded();
+  buildIfNeeded(log);
   const dataDir = process.env.BENCH_DATA_DIR ? path.resolve(process.env.BENCH_DATA_DIR) : fs.mkdtempSync(path.join(os.tmpdir(), 'kw-bench-web-'));
   if (fs.existsSync(path.join(dataDir, 'pglite')))
     throw new Error(`${dataDir} already holds a database: the benchmark seeds a fresh one (remove it or pick another BENCH_DATA_DIR)`);
