@@ -120,7 +120,7 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
     // Bought for the job, or cut from what earlier past jobs racked: today's rack and counts are not touched.
     // Only offcuts of a good size were kept in those days (at least 24″ × 12″), so the rack did not fill with scraps.
     const built = nestRequestSchema.parse(
-      await buildNestRequest(db, shopId, job.id, { timeBudgetMs: 0, minOffcutLength: inches(24), minOffcutWidth: inches(12) }),
+      await buildNestRequest({ db, shopId }, job.id, { timeBudgetMs: 0, minOffcutLength: inches(24), minOffcutWidth: inches(12) }),
     );
     const request = { ...built, stock: built.stock.filter((s) => s.count === null || racked.some((id) => s.id === stockRef.offcut(id))) };
     const document = await optimize(request);
@@ -150,7 +150,7 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
       sentAt: new Date(acceptedAt.getTime() - 4 * 86_400_000),
       answer: { status: 'accepted', at: acceptedAt, by: past.customer },
     });
-    await releasePlan(db, { shopId, userId: estimatorId, planId: plan.id });
+    await releasePlan({ db, shopId, userId: estimatorId }, plan.id);
 
     const damagedLabel = 'damaged' in past ? past.damaged : undefined;
     const damaged = damagedLabel
@@ -162,7 +162,7 @@ export async function seedDemoHistory(db: Db, { shopId, estimatorId, cutterId }:
           )
           .slice(0, 1)
       : [];
-    await finishPlan(db, { shopId, userId: cutterId, planId: plan.id, body: { damaged } });
+    await finishPlan({ db, shopId, userId: cutterId }, plan.id, { damaged });
 
     // Dated back to the day it was cut.
     await db
@@ -269,7 +269,7 @@ async function pastQuote(
     line?: { description: string; unitCostMinor: number };
   },
 ) {
-  const made = await createQuote(db, q.shopId, q.userId, q.jobId, q.planId);
+  const made = await createQuote({ db, shopId: q.shopId, userId: q.userId }, q.jobId, q.planId);
   const lines = q.line
     ? [
         {

@@ -462,8 +462,8 @@ async function seedReleasedPlan(db: Db, shopId: string, jobId: string, userId: s
     location: 'Rack C2',
     buyable: true,
   });
-  await recordOpeningCounts(db, shopId, null);
-  const request = nestRequestSchema.parse(await buildNestRequest(db, shopId, jobId, { timeBudgetMs: 0 }));
+  await recordOpeningCounts({ db, shopId, userId: null });
+  const request = nestRequestSchema.parse(await buildNestRequest({ db, shopId }, jobId, { timeBudgetMs: 0 }));
   const plan = await optimize(request);
   const [row] = await db
     .insert(plans)
@@ -480,5 +480,5 @@ async function seedReleasedPlan(db: Db, shopId: string, jobId: string, userId: s
       createdBy: userId,
     })
     .returning({ id: plans.id });
-  await releasePlan(db, { shopId, userId, planId: row.id });
+  await releasePlan({ db, shopId, userId }, row.id);
 }

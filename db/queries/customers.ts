@@ -1,5 +1,5 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, asc, desc, eq, ilike, or, sql } from 'drizzle-orm';
-import type { Db } from '../open';
 import { customers, jobs } from '../schema';
 import type { Customer, CustomerInput, CustomerPatch } from '@/shared/schemas/customer';
 import type { JobStatus } from '@/shared/schemas/job';
@@ -29,7 +29,7 @@ const jobCount = sql<number>`(select count(*)::int from "jobs" as j where j."cus
 const likeText = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 
 /** The shop's customers by name; a search matches name, company, e-mail or phone (any case). */
-export async function listCustomers(db: Db, shopId: string, search = ''): Promise<Customer[]> {
+export async function listCustomers({ db, shopId }: ShopScope, search = ''): Promise<Customer[]> {
   const text = search.trim();
   const match = text ? or(...[customers.name, customers.company, customers.email, customers.phone].map((c) => ilike(c, likeText(text)))) : undefined;
   const rows = await db
@@ -48,7 +48,7 @@ export interface CustomerJob {
   updatedAt: string;
 }
 
-export async function getCustomer(db: Db, shopId: string, id: string): Promise<(Customer & { jobs: CustomerJob[] }) | null> {
+export async function getCustomer({ db, shopId }: ShopScope, id: string): Promise<(Customer & { jobs: CustomerJob[] }) | null> {
   const [found] = await db
     .select({ row: customers, jobCount })
     .from(customers)
@@ -62,7 +62,7 @@ export async function getCustomer(db: Db, shopId: string, id: string): Promise<(
   return { ...toCustomer(found.row, Number(found.jobCount)), jobs: jobRows.map((j) => ({ ...j, updatedAt: j.updatedAt.toISOString() })) };
 }
 
-export async function createCustomer(db: Db, shopId: string, userId: string, input: CustomerInput): Promise<Customer> {
+export async function createCustomer({ db, shopId, userId }: Scope, input: CustomerInput): Promise<Customer> {
   const row = await db.transaction(async (tx) => {
     const [created] = await tx
       .insert(customers)
@@ -74,7 +74,7 @@ export async function createCustomer(db: Db, shopId: string, userId: string, inp
   return toCustomer(row, 0);
 }
 
-export async function updateCustomer(db: Db, shopId: string, userId: string, id: string, patch: CustomerPatch): Promise<Customer | null> {
+export async function updateCustomer({ db, shopId, userId }: Scope, id: string, patch: CustomerPatch): Promise<Customer | null> {
   const done = await db.transaction(async (tx) => {
     const [current] = await tx
       .select()
@@ -96,14 +96,14 @@ export async function updateCustomer(db: Db, shopId: string, userId: string, id:
     return true;
   });
   if (!done) return null;
-  const found = await getCustomer(db, shopId, id);
+  const found = await getCustomer({ db, shopId }, id);
   if (!found) return null;
   const { jobs: _jobs, ...customer } = found;
   return customer;
 }
 
 /** Deletes a customer no job belongs to; one with jobs is kept (409), so no job loses who it is for. */
-export async function deleteCustomer(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
+export async function deleteCustomer({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
     const [current] = await tx
       .select()
@@ -129,12 +129,7 @@ export const tidyName = (name: string) => name.trim().replace(/\s+/g, ' ');
  * The customer a job form picked: an existing one by id (of this shop, or 422), or by name — the shop's customer of
  * that name (letter case ignored) or a new one. Runs inside the job's transaction.
  */
-export async function resolveCustomer(
-  tx: Db,
-  shopId: string,
-  userId: string,
-  choice: { id: string } | { name: string } | null,
-): Promise<string | null> {
+export async function resolveCustomer({ db: tx, shopId, userId }: Scope, choice: { id: string } | { name: string } | null): Promise<string | null> {
   if (choice === null) return null;
   if ('id' in choice) {
     const [found] = await tx

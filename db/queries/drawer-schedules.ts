@@ -1,5 +1,5 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, asc, count, eq, isNotNull, min, sql } from 'drizzle-orm';
-import type { Db } from '../open';
 import { drawerSchedules, parts } from '../schema';
 import type { DrawerPart } from '@/lib/joinery/types';
 import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
@@ -38,7 +38,7 @@ export const drawerPartRow = (p: DrawerPart) => ({
   machining: p.machining,
 });
 
-export async function listDrawerSchedules(db: Db, shopId: string, jobId: string): Promise<SavedDrawerSchedule[]> {
+export async function listDrawerSchedules({ db, shopId }: ShopScope, jobId: string): Promise<SavedDrawerSchedule[]> {
   const rows = await db
     .select({
       id: drawerSchedules.id,
@@ -64,16 +64,14 @@ export async function listDrawerSchedules(db: Db, shopId: string, jobId: string)
  * replaced where they stood in the list, never added twice. Null when the job (or the schedule) is not this shop's.
  */
 export async function saveDrawerSchedule(
-  db: Db,
-  shopId: string,
-  userId: string,
+  { db, shopId, userId }: Scope,
   jobId: string,
   scheduleId: string | null,
   input: DrawerSchedule,
   sized: readonly DrawerPart[],
 ): Promise<SavedDrawerSchedule | null> {
   const id = await db.transaction(async (tx) => {
-    if (!(await jobInShop(tx, shopId, jobId))) return null;
+    if (!(await jobInShop({ db: tx, shopId }, jobId))) return null;
     let id = scheduleId;
     let sort: number;
     if (id) {
@@ -87,12 +85,12 @@ export async function saveDrawerSchedule(
         .select({ sort: min(parts.sort) })
         .from(parts)
         .where(eq(parts.drawerScheduleId, id));
-      sort = first?.sort ?? (await nextSort(tx, shopId, jobId));
+      sort = first?.sort ?? (await nextSort({ db: tx, shopId }, jobId));
       await tx.delete(parts).where(and(eq(parts.shopId, shopId), eq(parts.drawerScheduleId, id)));
     } else {
       const [row] = await tx.insert(drawerSchedules).values({ shopId, jobId, label: input.label, input }).returning({ id: drawerSchedules.id });
       id = row.id;
-      sort = await nextSort(tx, shopId, jobId);
+      sort = await nextSort({ db: tx, shopId }, jobId);
     }
     // Rows after the schedule's place make room when it now has more parts than before.
     if (scheduleId)
@@ -101,7 +99,7 @@ export async function saveDrawerSchedule(
         .set({ sort: sql`${parts.sort} + ${sized.length}` })
         .where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId), sql`${parts.sort} >= ${sort}`));
     await tx.insert(parts).values(sized.map((p, i) => ({ ...drawerPartRow(p), shopId, jobId, drawerScheduleId: id, sort: sort + i })));
-    await touchJob(tx, shopId, jobId);
+    await touchJob({ db: tx, shopId }, jobId);
     await recordAudit(tx, {
       shopId,
       userId,
@@ -113,18 +111,18 @@ export async function saveDrawerSchedule(
     return id;
   });
   if (!id) return null;
-  return (await listDrawerSchedules(db, shopId, jobId)).find((s) => s.id === id) ?? null;
+  return (await listDrawerSchedules({ db, shopId }, jobId)).find((s) => s.id === id) ?? null;
 }
 
 /** Deletes a schedule and every cut-list row it made. */
-export async function deleteDrawerSchedule(db: Db, shopId: string, userId: string, jobId: string, scheduleId: string): Promise<boolean> {
+export async function deleteDrawerSchedule({ db, shopId, userId }: Scope, jobId: string, scheduleId: string): Promise<boolean> {
   return db.transaction(async (tx) => {
     const where = and(eq(drawerSchedules.shopId, shopId), eq(drawerSchedules.jobId, jobId), eq(drawerSchedules.id, scheduleId));
     const [row] = await tx.select({ label: drawerSchedules.label }).from(drawerSchedules).where(where);
     if (!row) return false;
     await tx.delete(parts).where(and(eq(parts.shopId, shopId), eq(parts.drawerScheduleId, scheduleId)));
     await tx.delete(drawerSchedules).where(where);
-    await touchJob(tx, shopId, jobId);
+    await touchJob({ db: tx, shopId }, jobId);
     await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'drawer-schedule', entityId: scheduleId, data: row });
     return true;
   });

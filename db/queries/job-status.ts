@@ -1,5 +1,5 @@
+import type { ShopScope, SystemScope } from '../scope';
 import { and, eq, inArray, sql } from 'drizzle-orm';
-import type { Db } from '../open';
 import { jobs, plans, quotePayments, quoteRevisions, recuts } from '../schema';
 import type { Role } from '@/lib/auth/permissions';
 import { followPlans, manualStatusChoices, type JobFacts } from '@/lib/jobs/status';
@@ -7,7 +7,7 @@ import type { JobStatus } from '@/shared/schemas/job';
 import { recordAudit } from './audit';
 
 /** What a job's plans and re-cuts say about it, read inside the caller's transaction. */
-export async function jobFacts(tx: Db, shopId: string, jobId: string, acceptedAt: Date | null): Promise<JobFacts> {
+export async function jobFacts({ db: tx, shopId }: ShopScope, jobId: string, acceptedAt: Date | null): Promise<JobFacts> {
   const [counts] = await tx
     .select({
       activePlans: sql<number>`count(*) filter (where ${plans.status} in ('released', 'cutting'))`.mapWith(Number),
@@ -49,17 +49,14 @@ export async function jobFacts(tx: Db, shopId: string, jobId: string, acceptedAt
  * released, ticked, cancelled or finished, a re-cut cancelled, a quote sent, answered or expired, or a deposit paid. Call it inside that change's transaction, after the change. The
  * job row is locked first so two plans finishing at once settle on one answer.
  */
-export async function syncJobStatus(
-  tx: Db,
-  { shopId, jobId, userId, cause }: { shopId: string; jobId: string; userId: string | null; cause: string },
-): Promise<JobStatus | null> {
+export async function syncJobStatus({ db: tx, shopId, userId }: SystemScope, jobId: string, cause: string): Promise<JobStatus | null> {
   const [job] = await tx
     .select({ status: jobs.status, acceptedAt: jobs.acceptedAt })
     .from(jobs)
     .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)))
     .for('update');
   if (!job) return null;
-  const next = followPlans(job.status, await jobFacts(tx, shopId, jobId, job.acceptedAt));
+  const next = followPlans(job.status, await jobFacts({ db: tx, shopId }, jobId, job.acceptedAt));
   if (next === job.status) return next;
   await tx.update(jobs).set({ status: next, updatedAt: new Date() }).where(eq(jobs.id, jobId));
   await recordAudit(tx, { shopId, userId, action: 'status', entity: 'job', entityId: jobId, data: { from: job.status, to: next, cause } });
@@ -70,14 +67,14 @@ export async function syncJobStatus(
  * What the job's page needs to offer edits: the statuses this person may pick by hand, and whether the job has
  * history (then it is archived, not deleted).
  */
-export async function jobEditOptions(db: Db, shopId: string, jobId: string, role: Role) {
+export async function jobEditOptions({ db, shopId }: ShopScope, jobId: string, role: Role) {
   const [job] = await db
     .select({ status: jobs.status, acceptedAt: jobs.acceptedAt })
     .from(jobs)
     .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
   if (!job) return null;
   const [facts, [history]] = await Promise.all([
-    jobFacts(db, shopId, jobId, job.acceptedAt),
+    jobFacts({ db, shopId }, jobId, job.acceptedAt),
     db
       .select({
         released: sql<number>`count(*) filter (where ${plans.releasedAt} is not null or ${plans.status} in ('released', 'cutting', 'done'))`.mapWith(

@@ -1,3 +1,4 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, asc, desc, eq, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, parts, plans, stockMovements } from '../schema';
@@ -78,7 +79,7 @@ const SORT_KEYS: Record<JobSortColumn, SQL> = {
  * customer, searched in the job's name, its customer's name and its parts' materials (any case), sorted on the
  * server (ties by id, so pages never overlap), with the counts the list's controls need, in one statement.
  */
-export async function listJobsPage(db: Db, shopId: string, q: JobListQuery): Promise<JobListPage> {
+export async function listJobsPage({ db, shopId }: ShopScope, q: JobListQuery): Promise<JobListPage> {
   const filters: SQL[] = [eq(jobs.shopId, shopId)];
   if (q.status === '') filters.push(sql`${jobs.status} <> 'archived'`);
   else if (q.status !== 'all') filters.push(eq(jobs.status, q.status));
@@ -164,15 +165,15 @@ export async function listJobsPage(db: Db, shopId: string, q: JobListQuery): Pro
   };
 }
 
-export async function getJob(db: Db, shopId: string, id: string): Promise<JobSummary | null> {
+export async function getJob({ db, shopId }: ShopScope, id: string): Promise<JobSummary | null> {
   const [row] = await selectSummaries(db, shopId).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
   return row ? toSummary(row) : null;
 }
 
-export async function createJob(db: Db, shopId: string, userId: string, input: JobInput): Promise<JobSummary> {
+export async function createJob({ db, shopId, userId }: Scope, input: JobInput): Promise<JobSummary> {
   const id = await db.transaction(async (tx) => {
     const { customer, ...fields } = input;
-    const customerId = await resolveCustomer(tx, shopId, userId, customer);
+    const customerId = await resolveCustomer({ db: tx, shopId, userId }, customer);
     const [row] = await tx
       .insert(jobs)
       .values({ ...fields, customerId, acceptedAt: input.status === 'accepted' ? new Date() : null, shopId, createdBy: userId })
@@ -180,7 +181,7 @@ export async function createJob(db: Db, shopId: string, userId: string, input: J
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'job', entityId: row.id, data: { name: input.name } });
     return row.id;
   });
-  return (await getJob(db, shopId, id))!;
+  return (await getJob({ db, shopId }, id))!;
 }
 
 /** Who is changing a job: the status rules depend on the role. */
@@ -193,7 +194,7 @@ export interface JobEditor {
  * Changes what the patch sends (only fields whose value differs are written; the audit keeps each as from → to). A
  * status set by hand follows the rules of lib/jobs/status.ts for the person's role; marking a job accepted records when.
  */
-export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: string, patch: JobPatch) {
+export async function updateJob({ db, shopId }: ShopScope, editor: JobEditor, id: string, patch: JobPatch) {
   const updated = await db.transaction(async (tx) => {
     const [job] = await tx
       .select()
@@ -207,13 +208,13 @@ export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: s
       if (to !== undefined && to !== job[field]) changes[field] = { from: job[field], to };
     }
     if (customer !== undefined) {
-      const customerId = await resolveCustomer(tx, shopId, editor.id, customer);
+      const customerId = await resolveCustomer({ db: tx, shopId, userId: editor.id }, customer);
       if (customerId !== job.customerId) changes.customerId = { from: job.customerId, to: customerId };
     }
     if (!Object.keys(changes).length) return true;
     const set: Partial<typeof jobs.$inferInsert> = Object.fromEntries(Object.entries(changes).map(([f, c]) => [f, c.to]));
     if (patch.status && changes.status) {
-      const refused = refuseManualStatus(editor.role, job.status, patch.status, await jobFacts(tx, shopId, id, job.acceptedAt));
+      const refused = refuseManualStatus(editor.role, job.status, patch.status, await jobFacts({ db: tx, shopId }, id, job.acceptedAt));
       if (refused) throw forbidden(refused);
       set.acceptedAt = acceptedAtAfter(patch.status, job.acceptedAt, new Date());
     }
@@ -224,7 +225,7 @@ export async function updateJob(db: Db, shopId: string, editor: JobEditor, id: s
     await recordAudit(tx, { shopId, userId: editor.id, action: 'update', entity: 'job', entityId: id, data: { changes } });
     return true;
   });
-  return updated ? getJob(db, shopId, id) : null;
+  return updated ? getJob({ db, shopId }, id) : null;
 }
 
 /** A job with history — a plan that was ever released, or stock moved for one of its plans — is archived, not deleted. */
@@ -238,7 +239,7 @@ export class JobHasHistory extends DomainError {
 }
 
 /** Deletes a job with its cut list and draft plans; refuses one with history (JobHasHistory), in the same statement. */
-export async function deleteJob(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
+export async function deleteJob({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
     const rows = await tx
       .delete(jobs)

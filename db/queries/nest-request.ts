@@ -1,5 +1,5 @@
+import type { ShopScope } from '../scope';
 import { and, eq } from 'drizzle-orm';
-import type { Db } from '../open';
 import { offcuts, stockItems } from '../schema';
 import { costEachCents as priceEach } from '@/lib/stock/pricing';
 import { recutNestParts } from '@/lib/recuts/recuts';
@@ -24,22 +24,21 @@ export const costEachCents = (item: typeof stockItems.$inferSelect): number => p
  * `for: 'recuts'` the parts are only the job's open re-cuts (each with its re-cut's id), nothing of the cut list.
  */
 export async function buildNestRequest(
-  db: Db,
-  shopId: string,
+  { db, shopId }: ShopScope,
   jobId: string,
   choice: Partial<NestSettings> & { sawId?: string; breakdownSawId?: string } = {},
   nestFor: NestFor = 'cut-list',
 ): Promise<NestRequestInput> {
   const { sawId, breakdownSawId, ...settings } = choice;
   const [shop, parts, items, rack, shopSaws] = await Promise.all([
-    getShopSettings(db, shopId),
-    nestFor === 'recuts' ? openRecuts(db, shopId, jobId).then(recutNestParts) : listParts(db, shopId, jobId).then(cutListParts),
+    getShopSettings({ db, shopId }),
+    nestFor === 'recuts' ? openRecuts({ db, shopId }, jobId).then(recutNestParts) : listParts({ db, shopId }, jobId).then(cutListParts),
     db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
     db
       .select()
       .from(offcuts)
       .where(and(eq(offcuts.shopId, shopId), eq(offcuts.status, 'available'))),
-    sawId || breakdownSawId ? listSaws(db, shopId) : Promise.resolve([]),
+    sawId || breakdownSawId ? listSaws({ db, shopId }) : Promise.resolve([]),
   ]);
   if (!shop) throw new Error('shop not found');
   // The chosen saws' whole profiles go into the request (a saved plan keeps them), and the plan allows each cut the

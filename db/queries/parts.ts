@@ -1,3 +1,4 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, asc, eq, max } from 'drizzle-orm';
 import type { Db } from '../open';
 import { drawerSchedules, jobs, parts } from '../schema';
@@ -7,7 +8,7 @@ import { conflict } from '@/lib/errors';
 
 type PartRow = typeof parts.$inferSelect;
 
-export async function listParts(db: Db, shopId: string, jobId: string) {
+export async function listParts({ db, shopId }: ShopScope, jobId: string) {
   return db
     .select()
     .from(parts)
@@ -34,7 +35,7 @@ export const toPart = (row: PartRow): Part => ({
 });
 
 /** The job's cut list as the API shows it, with the label of the drawer schedule each derived row comes from. */
-export async function listJobParts(db: Db, shopId: string, jobId: string): Promise<(Part & { schedule: string | null })[]> {
+export async function listJobParts({ db, shopId }: ShopScope, jobId: string): Promise<(Part & { schedule: string | null })[]> {
   const rows = await db
     .select({ part: parts, schedule: drawerSchedules.label })
     .from(parts)
@@ -45,7 +46,7 @@ export async function listJobParts(db: Db, shopId: string, jobId: string): Promi
 }
 
 /** True when the job exists in this shop (another shop's job does not, from here). */
-export async function jobInShop(db: Db, shopId: string, jobId: string): Promise<boolean> {
+export async function jobInShop({ db, shopId }: ShopScope, jobId: string): Promise<boolean> {
   const [row] = await db
     .select({ id: jobs.id })
     .from(jobs)
@@ -54,7 +55,7 @@ export async function jobInShop(db: Db, shopId: string, jobId: string): Promise<
 }
 
 /** The next free sort position at the end of a job's cut list. */
-export async function nextSort(db: Db, shopId: string, jobId: string): Promise<number> {
+export async function nextSort({ db, shopId }: ShopScope, jobId: string): Promise<number> {
   const [row] = await db
     .select({ last: max(parts.sort) })
     .from(parts)
@@ -63,7 +64,7 @@ export async function nextSort(db: Db, shopId: string, jobId: string): Promise<n
 }
 
 /** Marks the job as changed, so the jobs list shows what was worked on last. */
-export async function touchJob(db: Db, shopId: string, jobId: string) {
+export async function touchJob({ db, shopId }: ShopScope, jobId: string) {
   await db
     .update(jobs)
     .set({ updatedAt: new Date() })
@@ -72,22 +73,20 @@ export async function touchJob(db: Db, shopId: string, jobId: string) {
 
 /** Adds typed or uploaded rows at the end of the cut list (or at a given place: undo), all or none. Null when the job is not this shop's. */
 export async function addParts(
-  db: Db,
-  shopId: string,
-  userId: string,
+  { db, shopId, userId }: Scope,
   jobId: string,
   inputs: readonly PartInput[],
   source: 'typed' | 'upload',
 ): Promise<Part[] | null> {
   return db.transaction(async (tx) => {
-    if (!(await jobInShop(tx, shopId, jobId))) return null;
+    if (!(await jobInShop({ db: tx, shopId }, jobId))) return null;
     if (inputs.length === 0) return [];
-    const start = await nextSort(tx, shopId, jobId);
+    const start = await nextSort({ db: tx, shopId }, jobId);
     const rows = await tx
       .insert(parts)
       .values(inputs.map((p, i) => ({ ...p, shopId, jobId, sort: p.sort ?? start + i })))
       .returning();
-    await touchJob(tx, shopId, jobId);
+    await touchJob({ db: tx, shopId }, jobId);
     await recordAudit(tx, {
       shopId,
       userId,
@@ -112,7 +111,7 @@ async function findPart(db: Db, shopId: string, jobId: string, partId: string) {
  * Changes one row. A drawer schedule's row keeps its sizes, material and count in step with the schedule: only its
  * notes may change here (409 otherwise, naming the fields).
  */
-export async function updatePart(db: Db, shopId: string, userId: string, jobId: string, partId: string, patch: PartPatch): Promise<Part | null> {
+export async function updatePart({ db, shopId, userId }: Scope, jobId: string, partId: string, patch: PartPatch): Promise<Part | null> {
   return db.transaction(async (tx) => {
     const row = await findPart(tx, shopId, jobId, partId);
     if (!row) return null;
@@ -124,20 +123,20 @@ export async function updatePart(db: Db, shopId: string, userId: string, jobId: 
         );
     }
     const [updated] = await tx.update(parts).set(patch).where(eq(parts.id, partId)).returning();
-    await touchJob(tx, shopId, jobId);
+    await touchJob({ db: tx, shopId }, jobId);
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'part', entityId: partId, data: patch });
     return toPart(updated);
   });
 }
 
 /** Deletes one typed or uploaded row; a drawer schedule's rows go with their schedule (409). */
-export async function deletePart(db: Db, shopId: string, userId: string, jobId: string, partId: string): Promise<boolean> {
+export async function deletePart({ db, shopId, userId }: Scope, jobId: string, partId: string): Promise<boolean> {
   return db.transaction(async (tx) => {
     const row = await findPart(tx, shopId, jobId, partId);
     if (!row) return false;
     if (row.drawerScheduleId) throw conflict('This row comes from a drawer schedule: delete or change the schedule instead.');
     await tx.delete(parts).where(eq(parts.id, partId));
-    await touchJob(tx, shopId, jobId);
+    await touchJob({ db: tx, shopId }, jobId);
     await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'part', entityId: partId, data: { label: row.label, jobId } });
     return true;
   });

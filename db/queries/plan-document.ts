@@ -1,5 +1,5 @@
+import type { ShopScope } from '../scope';
 import { and, eq, sql } from 'drizzle-orm';
-import type { Db } from '../open';
 import { plans } from '../schema';
 import { readStoredPlan } from '@/lib/nesting/read-plan';
 import { PLAN_VERSION } from '@/shared/schemas/nesting';
@@ -9,7 +9,7 @@ import { PLAN_VERSION } from '@/shared/schemas/nesting';
  * and its request (null when it no longer parses), scoped to the shop. The document is the single source of truth for placements and saw order; the
  * plan_pieces / placements / saw_steps rows are written from it when a plan is released.
  */
-export async function getPlan(db: Db, shopId: string, planId: string) {
+export async function getPlan({ db, shopId }: ShopScope, planId: string) {
   const [row] = await db
     .select()
     .from(plans)
@@ -25,7 +25,7 @@ export async function getPlan(db: Db, shopId: string, planId: string) {
  * migration; a 61 kB document cost about 13 ms to parse, check and write out again on each read. `older` for a
  * document of an earlier version (the caller reads it through `getPlan`, which migrates it), null for none.
  */
-export async function getPlanAsJson(db: Db, shopId: string, planId: string): Promise<{ status: string; json: string } | 'older' | null> {
+export async function getPlanAsJson({ db, shopId }: ShopScope, planId: string): Promise<{ status: string; json: string } | 'older' | null> {
   const [row] = await db
     .select({
       id: plans.id,

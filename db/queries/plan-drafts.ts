@@ -1,5 +1,5 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, desc, eq } from 'drizzle-orm';
-import type { Db } from '../open';
 import { plans } from '../schema';
 import type { NestRequest, Plan } from '@/shared/schemas/nesting';
 import { recordAudit } from './audit';
@@ -21,7 +21,7 @@ const figures = (plan: Plan) => ({
   costCents: plan.totals ? Math.round(plan.totals.cost) : null,
 });
 
-export async function listJobPlans(db: Db, shopId: string, jobId: string): Promise<JobPlanSummary[]> {
+export async function listJobPlans({ db, shopId }: ShopScope, jobId: string): Promise<JobPlanSummary[]> {
   const rows = await db
     .select()
     .from(plans)
@@ -46,32 +46,33 @@ export async function listJobPlans(db: Db, shopId: string, jobId: string): Promi
 
 /** A new draft plan with the request it was nested from (already judged valid by the caller). */
 export async function createDraftPlan(
-  db: Db,
-  input: { shopId: string; jobId: string; userId: string; name: string; request: NestRequest; plan: Plan; recutPlan?: boolean },
+  { db, shopId, userId }: Scope,
+  jobId: string,
+  input: { name: string; request: NestRequest; plan: Plan; recutPlan?: boolean },
 ) {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(plans)
       .values({
-        shopId: input.shopId,
-        jobId: input.jobId,
+        shopId: shopId,
+        jobId: jobId,
         name: input.name,
         status: 'draft',
         recutPlan: input.recutPlan ?? false,
         request: input.request,
         document: input.plan,
         ...figures(input.plan),
-        createdBy: input.userId,
+        createdBy: userId,
         ...stamp(),
       })
       .returning({ id: plans.id, updatedAt: plans.updatedAt });
     await recordAudit(tx, {
-      shopId: input.shopId,
-      userId: input.userId,
+      shopId: shopId,
+      userId: userId,
       action: 'create',
       entity: 'plan',
       entityId: row.id,
-      data: { jobId: input.jobId, name: input.name, recutPlan: input.recutPlan ?? false },
+      data: { jobId: jobId, name: input.name, recutPlan: input.recutPlan ?? false },
     });
     return row;
   });
@@ -84,14 +85,15 @@ export type DraftUpdateResult = { ok: true; updatedAt: Date } | { ok: false; rea
  * longer a draft, or when `baseUpdatedAt` is given and someone saved since.
  */
 export async function updateDraftPlan(
-  db: Db,
-  input: { shopId: string; planId: string; userId: string; plan: Plan; name?: string; baseUpdatedAt?: string },
+  { db, shopId, userId }: Scope,
+  planId: string,
+  input: { plan: Plan; name?: string; baseUpdatedAt?: string },
 ): Promise<DraftUpdateResult> {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .select({ status: plans.status, updatedAt: plans.updatedAt })
       .from(plans)
-      .where(and(eq(plans.shopId, input.shopId), eq(plans.id, input.planId)));
+      .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
     if (!row) return { ok: false, reason: 'not-found' } as const;
     if (row.status !== 'draft') return { ok: false, reason: 'not-draft' } as const;
     if (input.baseUpdatedAt && new Date(input.baseUpdatedAt).getTime() !== row.updatedAt.getTime()) return { ok: false, reason: 'stale' } as const;
@@ -99,13 +101,13 @@ export async function updateDraftPlan(
     await tx
       .update(plans)
       .set({ document: input.plan, ...figures(input.plan), ...(input.name ? { name: input.name } : {}), updatedAt })
-      .where(and(eq(plans.shopId, input.shopId), eq(plans.id, input.planId), eq(plans.status, 'draft')));
+      .where(and(eq(plans.shopId, shopId), eq(plans.id, planId), eq(plans.status, 'draft')));
     await recordAudit(tx, {
-      shopId: input.shopId,
-      userId: input.userId,
+      shopId: shopId,
+      userId: userId,
       action: 'update',
       entity: 'plan',
-      entityId: input.planId,
+      entityId: planId,
       data: { edited: true },
     });
     return { ok: true, updatedAt } as const;

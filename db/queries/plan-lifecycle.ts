@@ -1,3 +1,4 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { offcuts, placements, planPieces, plans, stockItems, stockMovements } from '../schema';
@@ -141,7 +142,7 @@ export interface ReleaseResult {
 }
 
 /** Reserves exactly the pieces the plan uses, all or nothing. Throws StockShortage naming every piece that is gone. */
-export async function releasePlan(db: Db, { shopId, userId, planId }: { shopId: string; userId: string; planId: string }): Promise<ReleaseResult> {
+export async function releasePlan({ db, shopId, userId }: Scope, planId: string): Promise<ReleaseResult> {
   return db.transaction(async (tx) => {
     const row = await moveStatus(tx, shopId, planId, ['draft'], { status: 'released', releasedAt: new Date(), releasedBy: userId }, 'released');
     const plan = readPlan(row.document);
@@ -195,16 +196,21 @@ export async function releasePlan(db: Db, { shopId, userId, planId }: { shopId: 
       };
     });
     if (moves.length) await tx.insert(stockMovements).values(moves);
-    if (row.recutPlan) await holdRecutsForPlan(tx, { shopId, planId, recutIds: plan.pieces.flatMap((p) => p.placements.map((pl) => pl.partId)) });
+    if (row.recutPlan)
+      await holdRecutsForPlan(
+        { db: tx, shopId },
+        planId,
+        plan.pieces.flatMap((p) => p.placements.map((pl) => pl.partId)),
+      );
     await writePieceRows(tx, shopId, planId, plan);
     await recordAudit(tx, { shopId, userId, action: 'release', entity: 'plan', entityId: planId, data: { reserved, toBuy } });
-    const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: `plan “${row.name}” released` });
+    const jobStatus = await syncJobStatus({ db: tx, shopId, userId }, row.jobId, `plan “${row.name}” released`);
     return { planId, reserved, toBuy, jobStatus };
   });
 }
 
 /** What the plan still holds: net reserved per stock item and per offcut, from its own movement rows. */
-export async function heldBy(tx: Tx, shopId: string, planId: string) {
+export async function heldBy({ db: tx, shopId }: ShopScope, planId: string) {
   const rows = await tx
     .select({
       stockItemId: stockMovements.stockItemId,
@@ -231,7 +237,7 @@ export async function heldBy(tx: Tx, shopId: string, planId: string) {
  * (done: −n on hand and −n reserved in one `consumed` row, since the same pieces leave the rack).
  */
 async function giveBack(tx: Tx, shopId: string, planId: string, userId: string, reason: string, then: 'available' | 'used') {
-  const held = await heldBy(tx, shopId, planId);
+  const held = await heldBy({ db: tx, shopId }, planId);
   const consume = then === 'used';
   const kind = consume ? ('consumed' as const) : ('released' as const);
   for (const item of held.items) {
@@ -261,13 +267,13 @@ async function giveBack(tx: Tx, shopId: string, planId: string, userId: string, 
 }
 
 /** Gives back every reservation the plan holds; a draft plan simply closes. */
-export async function cancelPlan(db: Db, { shopId, userId, planId }: { shopId: string; userId: string; planId: string }) {
+export async function cancelPlan({ db, shopId, userId }: Scope, planId: string) {
   return db.transaction(async (tx) => {
     const row = await moveStatus(tx, shopId, planId, ['draft', 'released', 'cutting'], { status: 'cancelled' }, 'cancelled');
     const held = await giveBack(tx, shopId, planId, userId, `Plan “${row.name}” cancelled: reservation given back`, 'available');
-    if (row.recutPlan) await reopenRecuts(tx, { shopId, planId });
+    if (row.recutPlan) await reopenRecuts({ db: tx, shopId }, planId);
     await recordAudit(tx, { shopId, userId, action: 'cancel', entity: 'plan', entityId: planId, data: held });
-    const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: `plan “${row.name}” cancelled` });
+    const jobStatus = await syncJobStatus({ db: tx, shopId, userId }, row.jobId, `plan “${row.name}” cancelled`);
     return { planId, released: held, jobStatus };
   });
 }
@@ -298,10 +304,7 @@ export interface FinishResult {
  * cutter says), marks damaged parts and puts them on the job's re-cut list, closes the re-cuts a re-cut plan cut,
  * and records yield, waste (spoiled parts apart) and cost computed here from the plan itself.
  */
-export async function finishPlan(
-  db: Db,
-  { shopId, userId, planId, body: input }: { shopId: string; userId: string; planId: string; body: FinishPlanBody },
-): Promise<FinishResult> {
+export async function finishPlan({ db, shopId, userId }: Scope, planId: string, input: FinishPlanBody): Promise<FinishResult> {
   const body = finishPlanSchema.parse(input);
   return db.transaction(async (tx) => {
     const row = await moveStatus(
@@ -320,8 +323,8 @@ export async function finishPlan(
     await consumeBoughtPieces(tx, { shopId, planId, userId, planName: row.name, reason }, plan);
     const created = await rackOffcuts(tx, { shopId, planId, userId, planName: row.name }, outcome.rack);
     await markDamagedPlacements(tx, shopId, planId, plan, outcome.damaged);
-    const added = await recordDamagedPieces(tx, { shopId, userId, plan: row, request, damaged: body.damaged });
-    const closed = row.recutPlan ? await closeRecuts(tx, { shopId, planId, userId }) : [];
+    const added = await recordDamagedPieces({ db: tx, shopId, userId }, { plan: row, request, damaged: body.damaged });
+    const closed = row.recutPlan ? await closeRecuts({ db: tx, shopId, userId }, planId) : [];
 
     const { yieldRatio, wasteRatio, spoiledRatio, costCents } = outcome;
     await tx.update(plans).set({ yieldRatio, wasteRatio, spoiledRatio, costCents }).where(eq(plans.id, planId));
@@ -333,7 +336,7 @@ export async function finishPlan(
       entityId: planId,
       data: { offcuts: created.length, damaged: body.damaged.length, recutsClosed: closed.length },
     });
-    const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: `plan “${row.name}” finished` });
+    const jobStatus = await syncJobStatus({ db: tx, shopId, userId }, row.jobId, `plan “${row.name}” finished`);
     return {
       planId,
       jobId: row.jobId,
@@ -359,7 +362,7 @@ interface FinishScope {
 
 /** The shop's rules decide what is racked, what is spoiled and the figures (lib/stock/finish-plan.ts). */
 async function decideFinish(tx: Tx, shopId: string, plan: Plan, request: NestRequest | null, body: FinishPlanChoices): Promise<FinishOutcome> {
-  const shop = await getShopSettings(tx, shopId);
+  const shop = await getShopSettings({ db: tx, shopId });
   if (!shop) throw notFoundBecause('The shop was not found.');
   try {
     return finishOutcome(plan, request, minOffcutFor(request, shop), body);

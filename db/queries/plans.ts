@@ -1,5 +1,5 @@
+import type { ShopScope } from '../scope';
 import { and, desc, eq, inArray } from 'drizzle-orm';
-import type { Db } from '../open';
 import { jobs, plans } from '../schema';
 
 const planRow = {
@@ -13,7 +13,7 @@ const planRow = {
   jobName: jobs.name,
 };
 
-export async function listPlansByStatus(db: Db, shopId: string, statuses: ('draft' | 'released' | 'cutting' | 'done' | 'cancelled')[]) {
+export async function listPlansByStatus({ db, shopId }: ShopScope, statuses: ('draft' | 'released' | 'cutting' | 'done' | 'cancelled')[]) {
   return db
     .select(planRow)
     .from(plans)

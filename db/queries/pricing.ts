@@ -1,5 +1,5 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, asc, eq } from 'drizzle-orm';
-import type { Db } from '../open';
 import { hardwareItems, shops } from '../schema';
 import { DEFAULT_PRICING, pricingSettingsSchema, type HardwareItem, type HardwareItemInput, type PricingSettings } from '@/shared/schemas/pricing';
 import { recordAudit } from './audit';
@@ -11,24 +11,24 @@ export interface PricingView {
 }
 
 /** The shop's pricing settings; a stored value missing a field (written before it existed) takes the default. */
-export async function getPricing(db: Db, shopId: string): Promise<PricingView | null> {
+export async function getPricing({ db, shopId }: ShopScope): Promise<PricingView | null> {
   const [row] = await db.select({ currency: shops.currency, pricing: shops.pricing }).from(shops).where(eq(shops.id, shopId));
   if (!row) return null;
   const merged = pricingSettingsSchema.safeParse({ ...DEFAULT_PRICING, ...row.pricing });
   return { currency: row.currency, pricing: merged.success ? merged.data : DEFAULT_PRICING };
 }
 
-export async function setPricing(db: Db, shopId: string, userId: string, pricing: PricingSettings): Promise<PricingView | null> {
+export async function setPricing({ db, shopId, userId }: Scope, pricing: PricingSettings): Promise<PricingView | null> {
   await db.transaction(async (tx) => {
     await tx.update(shops).set({ pricing }).where(eq(shops.id, shopId));
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'pricing-settings', entityId: shopId, data: pricing });
   });
-  return getPricing(db, shopId);
+  return getPricing({ db, shopId });
 }
 
 const toItem = (row: typeof hardwareItems.$inferSelect): HardwareItem => ({ id: row.id, name: row.name, unit: row.unit, priceMinor: row.priceMinor });
 
-export async function listHardware(db: Db, shopId: string): Promise<HardwareItem[]> {
+export async function listHardware({ db, shopId }: ShopScope): Promise<HardwareItem[]> {
   return (await db.select().from(hardwareItems).where(eq(hardwareItems.shopId, shopId)).orderBy(asc(hardwareItems.name))).map(toItem);
 }
 
@@ -36,7 +36,7 @@ const sameName = (name: string) => conflict(`The price list already has “${nam
 const isUniqueViolation = (e: unknown) =>
   (e as { code?: string; cause?: { code?: string } })?.code === '23505' || (e as { cause?: { code?: string } })?.cause?.code === '23505';
 
-export async function createHardware(db: Db, shopId: string, userId: string, input: HardwareItemInput): Promise<HardwareItem> {
+export async function createHardware({ db, shopId, userId }: Scope, input: HardwareItemInput): Promise<HardwareItem> {
   try {
     return await db.transaction(async (tx) => {
       const [row] = await tx
@@ -52,7 +52,7 @@ export async function createHardware(db: Db, shopId: string, userId: string, inp
   }
 }
 
-export async function updateHardware(db: Db, shopId: string, userId: string, id: string, input: HardwareItemInput): Promise<HardwareItem | null> {
+export async function updateHardware({ db, shopId, userId }: Scope, id: string, input: HardwareItemInput): Promise<HardwareItem | null> {
   try {
     return await db.transaction(async (tx) => {
       const [row] = await tx
@@ -70,7 +70,7 @@ export async function updateHardware(db: Db, shopId: string, userId: string, id:
   }
 }
 
-export async function deleteHardware(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
+export async function deleteHardware({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
     const rows = await tx
       .delete(hardwareItems)

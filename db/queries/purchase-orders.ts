@@ -1,3 +1,4 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { plans, purchaseOrderLines, purchaseOrders, shops, stockItems, stockMovements, suppliers } from '../schema';
@@ -119,7 +120,7 @@ function toView(row: OrderRow, lines: PurchaseOrderLineView[]): PurchaseOrderVie
 const orderColumns = { order: purchaseOrders, planName: plans.name, jobId: plans.jobId };
 
 /** The shop's purchase orders, newest first, with their lines. */
-export async function listPurchaseOrders(db: Db, shopId: string): Promise<PurchaseOrderView[]> {
+export async function listPurchaseOrders({ db, shopId }: ShopScope): Promise<PurchaseOrderView[]> {
   const rows = await db
     .select(orderColumns)
     .from(purchaseOrders)
@@ -134,7 +135,7 @@ export async function listPurchaseOrders(db: Db, shopId: string): Promise<Purcha
   return rows.map((r) => toView({ ...r.order, planName: r.planName, jobId: r.jobId }, lines.get(r.order.id) ?? []));
 }
 
-export async function getPurchaseOrder(db: Db, shopId: string, id: string): Promise<PurchaseOrderView | null> {
+export async function getPurchaseOrder({ db, shopId }: ShopScope, id: string): Promise<PurchaseOrderView | null> {
   const [r] = await db
     .select(orderColumns)
     .from(purchaseOrders)
@@ -146,7 +147,7 @@ export async function getPurchaseOrder(db: Db, shopId: string, id: string): Prom
 }
 
 /** Pieces per stock size still to come in on open orders (ordered less received). */
-export async function onOrderQuantities(db: Db, shopId: string): Promise<Map<string, number>> {
+export async function onOrderQuantities({ db, shopId }: ShopScope): Promise<Map<string, number>> {
   const rows = await db
     .select({
       stockItemId: purchaseOrderLines.stockItemId,
@@ -160,14 +161,14 @@ export async function onOrderQuantities(db: Db, shopId: string): Promise<Map<str
 }
 
 /** The stock sizes running low, each with what open orders bring of it. */
-export async function lowStockWithOrders(db: Db, shopId: string) {
+export async function lowStockWithOrders({ db, shopId }: ShopScope) {
   const [items, onOrder] = await Promise.all([
     db
       .select()
       .from(stockItems)
       .where(eq(stockItems.shopId, shopId))
       .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
-    onOrderQuantities(db, shopId),
+    onOrderQuantities({ db, shopId }),
   ]);
   return items.filter(isLowStock).map((i) => ({ ...i, free: i.onHand - i.reserved, onOrder: onOrder.get(i.id) ?? 0 }));
 }
@@ -236,14 +237,14 @@ async function insertOrders(
 }
 
 /** One draft per supplier for the sizes running low (up to twice their mark, less what open orders bring). */
-export async function createFromLowStock(db: Db, shopId: string, userId: string): Promise<string[]> {
+export async function createFromLowStock({ db, shopId, userId }: Scope): Promise<string[]> {
   const [items, onOrder] = await Promise.all([
     db
       .select()
       .from(stockItems)
       .where(eq(stockItems.shopId, shopId))
       .orderBy(asc(stockItems.material), asc(stockItems.thicknessMm), asc(stockItems.lengthMm)),
-    onOrderQuantities(db, shopId),
+    onOrderQuantities({ db, shopId }),
   ]);
   const orders = lowStockOrders(items, onOrder);
   if (!orders.length) throw conflict('Nothing is running low that open orders do not already bring: no order to make.');
@@ -251,14 +252,14 @@ export async function createFromLowStock(db: Db, shopId: string, userId: string)
 }
 
 /** One draft per supplier for a plan's stock to buy (sizes it buys, and what the rack is short of for the rest). */
-export async function createFromPlan(db: Db, shopId: string, userId: string, planId: string): Promise<string[]> {
+export async function createFromPlan({ db, shopId, userId }: Scope, planId: string): Promise<string[]> {
   const [plan] = await db
     .select({ jobId: plans.jobId, status: plans.status })
     .from(plans)
     .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!plan) throw notFound('That plan');
   if (plan.status === 'cancelled') throw conflict('That plan was cancelled: nothing to buy for it.');
-  const takeoff = await getTakeoff(db, shopId, plan.jobId, planId);
+  const takeoff = await getTakeoff({ db, shopId }, plan.jobId, planId);
   if (!takeoff) throw notFound('That plan');
   const lines = [...takeoff.pull, ...takeoff.buy].map((l) => ({
     source: l.source,
@@ -278,7 +279,7 @@ export async function createFromPlan(db: Db, shopId: string, userId: string, pla
 }
 
 /** An empty draft for one supplier, to fill by hand. */
-export async function createManual(db: Db, shopId: string, userId: string, supplier: string): Promise<string[]> {
+export async function createManual({ db, shopId, userId }: Scope, supplier: string): Promise<string[]> {
   return insertOrders(db, shopId, userId, [{ supplier, lines: [] }], 'manual', null);
 }
 
@@ -293,7 +294,7 @@ async function lockOrder(tx: Db, shopId: string, id: string) {
 }
 
 /** Changes a draft (supplier, address, note, lines); a sent order stays as the supplier has it (409). */
-export async function updateDraft(db: Db, shopId: string, userId: string, id: string, patch: PurchaseOrderPatch): Promise<PurchaseOrderView> {
+export async function updateDraft({ db, shopId, userId }: Scope, id: string, patch: PurchaseOrderPatch): Promise<PurchaseOrderView> {
   await db.transaction(async (tx) => {
     const row = await lockOrder(tx, shopId, id);
     if (row.status !== 'draft') throw conflict(`${poNumber(row.number)} was sent and stays as the supplier has it; only a draft can be changed.`);
@@ -329,7 +330,7 @@ export async function updateDraft(db: Db, shopId: string, userId: string, id: st
       data: { fields: Object.keys(patch), lines: patch.lines?.length },
     });
   });
-  return (await getPurchaseOrder(db, shopId, id))!;
+  return (await getPurchaseOrder({ db, shopId }, id))!;
 }
 
 /**
@@ -337,14 +338,7 @@ export async function updateDraft(db: Db, shopId: string, userId: string, id: st
  * is no longer a draft, has no lines or no address, or changed since the caller read it (`seenUpdatedAt`): the PDF
  * attached must be the order as sent.
  */
-export async function markSent(
-  db: Db,
-  shopId: string,
-  userId: string,
-  id: string,
-  seenUpdatedAt: string,
-  enqueue: (tx: Db) => Promise<{ id: string }>,
-) {
+export async function markSent({ db, shopId, userId }: Scope, id: string, seenUpdatedAt: string, enqueue: (tx: Db) => Promise<{ id: string }>) {
   return db.transaction(async (tx) => {
     const row = await lockOrder(tx, shopId, id);
     if (row.status !== 'draft') throw conflict(`${poNumber(row.number)} was already sent.`);
@@ -372,7 +366,7 @@ export async function markSent(
 }
 
 /** Cancels an order nothing has arrived on (draft or sent); one with pieces received is kept. */
-export async function cancelPurchaseOrder(db: Db, shopId: string, userId: string, id: string): Promise<PurchaseOrderView> {
+export async function cancelPurchaseOrder({ db, shopId, userId }: Scope, id: string): Promise<PurchaseOrderView> {
   await db.transaction(async (tx) => {
     const row = await lockOrder(tx, shopId, id);
     if (row.status !== 'draft' && row.status !== 'sent')
@@ -382,7 +376,7 @@ export async function cancelPurchaseOrder(db: Db, shopId: string, userId: string
     await tx.update(purchaseOrders).set({ status: 'cancelled', cancelledAt: new Date(), updatedAt: new Date() }).where(eq(purchaseOrders.id, id));
     await recordAudit(tx, { shopId, userId, action: 'cancel', entity: 'purchase-order', entityId: id });
   });
-  return (await getPurchaseOrder(db, shopId, id))!;
+  return (await getPurchaseOrder({ db, shopId }, id))!;
 }
 
 /**
@@ -393,9 +387,7 @@ export async function cancelPurchaseOrder(db: Db, shopId: string, userId: string
  * With `updateCosts`, each received size's cost in the stock room becomes this order's unit cost.
  */
 export async function receivePurchaseOrder(
-  db: Db,
-  shopId: string,
-  userId: string,
+  { db, shopId, userId }: Scope,
   id: string,
   input: Pick<ReceivePurchaseOrder, 'lines' | 'updateCosts'> & Partial<Pick<ReceivePurchaseOrder, 'all' | 'note'>>,
 ): Promise<PurchaseOrderView> {
@@ -466,11 +458,11 @@ export async function receivePurchaseOrder(
       data: { lines: wanted, updateCosts: input.updateCosts },
     });
   });
-  return (await getPurchaseOrder(db, shopId, id))!;
+  return (await getPurchaseOrder({ db, shopId }, id))!;
 }
 
 /** The buying settings kept on the shop. */
-export async function getBuyingSettings(db: Db, shopId: string) {
+export async function getBuyingSettings({ db, shopId }: ShopScope) {
   const [row] = await db
     .select({ purchaseOrderDetails: shops.purchaseOrderDetails, lowStockDigestTime: shops.lowStockDigestTime })
     .from(shops)
@@ -478,17 +470,12 @@ export async function getBuyingSettings(db: Db, shopId: string) {
   return row ?? null;
 }
 
-export async function updateBuyingSettings(
-  db: Db,
-  shopId: string,
-  userId: string,
-  patch: { purchaseOrderDetails?: string; lowStockDigestTime?: string },
-) {
+export async function updateBuyingSettings({ db, shopId, userId }: Scope, patch: { purchaseOrderDetails?: string; lowStockDigestTime?: string }) {
   if (Object.keys(patch).length) {
     await db.transaction(async (tx) => {
       await tx.update(shops).set(patch).where(eq(shops.id, shopId));
       await recordAudit(tx, { shopId, userId, action: 'update', entity: 'shop-settings', entityId: shopId, data: patch });
     });
   }
-  return getBuyingSettings(db, shopId);
+  return getBuyingSettings({ db, shopId });
 }

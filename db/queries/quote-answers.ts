@@ -172,12 +172,11 @@ export async function answerQuote(db: Db, token: string, answer: QuoteAnswer, fr
       entityId: f.r.id,
       data: accepted ? { by: answer.fullName, from } : { reason: answer.reason, from },
     });
-    await syncJobStatus(tx, {
-      shopId: f.shop.id,
-      jobId: f.job.id,
-      userId: null,
-      cause: accepted ? 'quote accepted by the customer' : 'quote declined by the customer',
-    });
+    await syncJobStatus(
+      { db: tx, shopId: f.shop.id, userId: null },
+      f.job.id,
+      accepted ? 'quote accepted by the customer' : 'quote declined by the customer',
+    );
     if (accepted && f.customer?.email) {
       const mail = quoteAcceptedMail({
         ...mailFacts(f, appBaseUrl() + quoteLinkPath(token)),
@@ -274,7 +273,7 @@ async function recordPaid(tx: Db, session: SessionFacts, now: Date): Promise<{ o
     entityId: revision.id,
     data: { amountMinor: payment.amountMinor, currency: payment.currency, session: session.id },
   });
-  await syncJobStatus(tx, { shopId: payment.shopId, jobId: payment.jobId, userId: null, cause: 'deposit paid' });
+  await syncJobStatus({ db: tx, shopId: payment.shopId, userId: null }, payment.jobId, 'deposit paid');
   await queueReceipt(tx, payment, revision, now);
   return { outcome: 'paid', paymentId: payment.id };
 }
@@ -336,7 +335,7 @@ export async function applyPaymentEvent(db: Db, event: Stripe.Event, now = new D
           entityId: payment.revisionId,
           data: { amountMinor: charge.amount_refunded },
         });
-        await syncJobStatus(tx, { shopId: payment.shopId, jobId: payment.jobId, userId: null, cause: 'deposit refunded' });
+        await syncJobStatus({ db: tx, shopId: payment.shopId, userId: null }, payment.jobId, 'deposit refunded');
         result = { outcome: 'refunded', paymentId: payment.id };
       } else {
         // Part of the deposit went back: the job keeps its deposit; the audit keeps the refund.
@@ -417,7 +416,7 @@ export async function expireQuotes(db: Db, now = new Date()): Promise<number> {
       });
     for (const jobId of new Set(due.map((d) => d.jobId))) {
       const shopId = due.find((d) => d.jobId === jobId)!.shopId;
-      await syncJobStatus(tx, { shopId, jobId, userId: null, cause: 'quote expired' });
+      await syncJobStatus({ db: tx, shopId, userId: null }, jobId, 'quote expired');
     }
     return due.length;
   });

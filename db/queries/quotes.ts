@@ -1,3 +1,4 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, desc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, parts, plans, quoteRevisions, quotes, shops } from '../schema';
@@ -122,7 +123,7 @@ const latestOf = (tx: Db, quoteId: string) =>
     .from(quoteRevisions)
     .where(eq(quoteRevisions.quoteId, quoteId));
 
-export async function getRevision(db: Db, shopId: string, revisionId: string): Promise<QuoteRevisionView | null> {
+export async function getRevision({ db, shopId }: ShopScope, revisionId: string): Promise<QuoteRevisionView | null> {
   const [row] = await db
     .select({ r: quoteRevisions, number: quotes.number, paidAt: depositPaidAt })
     .from(quoteRevisions)
@@ -134,7 +135,7 @@ export async function getRevision(db: Db, shopId: string, revisionId: string): P
 }
 
 /** Every revision of a job's quotes, newest quote first and its latest revision first. */
-export async function listJobQuotes(db: Db, shopId: string, jobId: string): Promise<QuoteRevisionView[]> {
+export async function listJobQuotes({ db, shopId }: ShopScope, jobId: string): Promise<QuoteRevisionView[]> {
   const rows = await db
     .select({ r: quoteRevisions, number: quotes.number, paidAt: depositPaidAt })
     .from(quoteRevisions)
@@ -147,7 +148,7 @@ export async function listJobQuotes(db: Db, shopId: string, jobId: string): Prom
 }
 
 /** The customer's quotes: the latest revision of each quote on any of their jobs. */
-export async function listCustomerQuotes(db: Db, shopId: string, customerId: string) {
+export async function listCustomerQuotes({ db, shopId }: ShopScope, customerId: string) {
   const rows = await db
     .select({ r: quoteRevisions, number: quotes.number, jobName: jobs.name, paidAt: depositPaidAt })
     .from(quoteRevisions)
@@ -166,7 +167,7 @@ export async function listCustomerQuotes(db: Db, shopId: string, customerId: str
 
 /** Pairs of slides by kind and length, setup cards, boxes and joint corners from the job's drawer schedules. */
 async function drawerFacts(db: Db, shopId: string, jobId: string, describe: (mm: number) => string) {
-  const schedules = await listDrawerSchedules(db, shopId, jobId);
+  const schedules = await listDrawerSchedules({ db, shopId }, jobId);
   const slides = new Map<string, SlideNeed>();
   const cards: { joint: string; stockThicknessMm: number }[] = [];
   let boxes = 0;
@@ -191,7 +192,7 @@ async function drawerFacts(db: Db, shopId: string, jobId: string, describe: (mm:
 }
 
 /** Makes a job's new quote (the shop's next number, rev A) with lines built from the job and, if named, one of its plans. */
-export async function createQuote(db: Db, shopId: string, userId: string, jobId: string, planId: string | null): Promise<QuoteRevisionView> {
+export async function createQuote({ db, shopId, userId }: Scope, jobId: string, planId: string | null): Promise<QuoteRevisionView> {
   const [job] = await db
     .select({ id: jobs.id })
     .from(jobs)
@@ -204,12 +205,12 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
       .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), eq(plans.id, planId), ne(plans.status, 'cancelled')));
     if (!plan) throw invalid('That plan is not one of this job’s (or it was cancelled).', { planId: ['Pick one of the job’s plans.'] });
   }
-  const [settings, priced, hardware] = await Promise.all([getShopSettings(db, shopId), getPricing(db, shopId), listHardware(db, shopId)]);
+  const [settings, priced, hardware] = await Promise.all([getShopSettings({ db, shopId }), getPricing({ db, shopId }), listHardware({ db, shopId })]);
   if (!settings || !priced) throw notFound('The shop');
   const { pricing, currency } = priced;
   const describe = (mm: number) => quoteLength(mm, settings.units);
   const [takeoff, drawers, [faces]] = await Promise.all([
-    planId ? getTakeoff(db, shopId, jobId, planId) : null,
+    planId ? getTakeoff({ db, shopId }, jobId, planId) : null,
     drawerFacts(db, shopId, jobId, describe),
     db
       .select({ mm2: sql<number>`coalesce(sum(2 * ${parts.lengthMm} * ${parts.widthMm} * ${parts.quantity}), 0)`.mapWith(Number) })
@@ -282,7 +283,7 @@ export async function createQuote(db: Db, shopId: string, userId: string, jobId:
     });
     return rev.id;
   });
-  return (await getRevision(db, shopId, id))!;
+  return (await getRevision({ db, shopId }, id))!;
 }
 
 /** Locks a revision of this shop for a change. */
@@ -297,13 +298,7 @@ async function lockRevision(tx: Db, shopId: string, revisionId: string) {
 }
 
 /** Changes a draft's lines and figures; a sent or replaced revision is kept as it was sent (409: make a new revision). */
-export async function updateRevision(
-  db: Db,
-  shopId: string,
-  userId: string,
-  revisionId: string,
-  patch: QuoteRevisionPatch,
-): Promise<QuoteRevisionView> {
+export async function updateRevision({ db, shopId, userId }: Scope, revisionId: string, patch: QuoteRevisionPatch): Promise<QuoteRevisionView> {
   await db.transaction(async (tx) => {
     const row = await lockRevision(tx, shopId, revisionId);
     if (row.status !== 'draft') throw conflict('This revision was sent and stays as the customer has it: make a new revision to change it.');
@@ -322,11 +317,11 @@ export async function updateRevision(
       .where(eq(quoteRevisions.id, revisionId));
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'quote-revision', entityId: revisionId, data: { fields: Object.keys(patch) } });
   });
-  return (await getRevision(db, shopId, revisionId))!;
+  return (await getRevision({ db, shopId }, revisionId))!;
 }
 
 /** A new revision (B after A…) copied from the latest one, as a draft; refused while the latest is still a draft. */
-export async function newRevision(db: Db, shopId: string, userId: string, quoteId: string): Promise<QuoteRevisionView> {
+export async function newRevision({ db, shopId, userId }: Scope, quoteId: string): Promise<QuoteRevisionView> {
   const id = await db.transaction(async (tx) => {
     const [quote] = await tx
       .select()
@@ -370,7 +365,7 @@ export async function newRevision(db: Db, shopId: string, userId: string, quoteI
     });
     return rev.id;
   });
-  return (await getRevision(db, shopId, id))!;
+  return (await getRevision({ db, shopId }, id))!;
 }
 
 /**
@@ -379,10 +374,10 @@ export async function newRevision(db: Db, shopId: string, userId: string, quoteI
  * and a job still quoting becomes quoted. Only the latest revision can be sent, only once, and only to a customer
  * with an e-mail address. The caller wakes the mail sender.
  */
-export async function sendRevision(db: Db, shopId: string, userId: string, revisionId: string, now = new Date()): Promise<QuoteRevisionView> {
-  const revision = await getRevision(db, shopId, revisionId);
+export async function sendRevision({ db, shopId, userId }: Scope, revisionId: string, now = new Date()): Promise<QuoteRevisionView> {
+  const revision = await getRevision({ db, shopId }, revisionId);
   if (!revision) throw notFound('That quote');
-  const [job, settings] = await Promise.all([getJob(db, shopId, revision.jobId), getShopSettings(db, shopId)]);
+  const [job, settings] = await Promise.all([getJob({ db, shopId }, revision.jobId), getShopSettings({ db, shopId })]);
   if (!job || !settings) throw notFound('That quote');
   const [customer] = job.customerId
     ? await db
@@ -451,9 +446,9 @@ export async function sendRevision(db: Db, shopId: string, userId: string, revis
       entityId: revisionId,
       data: { total: t.totalMinor, to: customer.email, validUntil },
     });
-    await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: 'quote sent' });
+    await syncJobStatus({ db: tx, shopId, userId }, row.jobId, 'quote sent');
   });
-  return (await getRevision(db, shopId, revisionId))!;
+  return (await getRevision({ db, shopId }, revisionId))!;
 }
 
 /** What the quote PDF prints for a revision (the customer's copy: prices only). */

@@ -1,5 +1,5 @@
+import type { Scope, ShopScope } from '../scope';
 import { aliasedTable, and, asc, eq, inArray, sql } from 'drizzle-orm';
-import type { Db } from '../open';
 import { parts, plans, recuts, users } from '../schema';
 import { DEFAULT_RECUT_REASON, recutLabel, type RecutPart } from '@/lib/recuts/recuts';
 import type { NestRequest } from '@/shared/schemas/nesting';
@@ -13,7 +13,7 @@ const recutPlans = aliasedTable(plans, 'recut_plans');
 const closers = aliasedTable(users, 'closers');
 
 /** The job's re-cut list: open ones first (oldest first, the order they were damaged), then the closed ones, newest first. */
-export async function listRecuts(db: Db, shopId: string, jobId: string): Promise<RecutView[]> {
+export async function listRecuts({ db, shopId }: ShopScope, jobId: string): Promise<RecutView[]> {
   const rows = await db
     .select({
       r: recuts,
@@ -59,7 +59,7 @@ export async function listRecuts(db: Db, shopId: string, jobId: string): Promise
 }
 
 /** The job's re-cuts still to nest (open, not in a released plan), oldest first. */
-export async function openRecuts(db: Db, shopId: string, jobId: string): Promise<RecutPart[]> {
+export async function openRecuts({ db, shopId }: ShopScope, jobId: string): Promise<RecutPart[]> {
   return db
     .select({
       id: recuts.id,
@@ -93,8 +93,8 @@ type PlanRow = typeof plans.$inferSelect;
  * and replaced by a new open one. Returns the new re-cuts' ids.
  */
 export async function recordDamagedPieces(
-  tx: Db,
-  { shopId, userId, plan, request, damaged }: { shopId: string; userId: string; plan: PlanRow; request: NestRequest | null; damaged: DamagedPiece[] },
+  { db: tx, shopId, userId }: Scope,
+  { plan, request, damaged }: { plan: PlanRow; request: NestRequest | null; damaged: DamagedPiece[] },
 ): Promise<string[]> {
   if (!damaged.length) return [];
   const heldRecuts = plan.recutPlan
@@ -166,7 +166,7 @@ export async function recordDamagedPieces(
  * At release of a re-cut plan: the re-cuts it places become planned (held by this plan), all or none. A re-cut
  * cancelled, or taken by another plan, since the Nest refuses the release with its name.
  */
-export async function holdRecutsForPlan(tx: Db, { shopId, planId, recutIds }: { shopId: string; planId: string; recutIds: string[] }) {
+export async function holdRecutsForPlan({ db: tx, shopId }: ShopScope, planId: string, recutIds: string[]) {
   const ids = [...new Set(recutIds)].filter(isUuid).sort();
   if (!ids.length) return;
   const held = await tx
@@ -194,7 +194,7 @@ export async function holdRecutsForPlan(tx: Db, { shopId, planId, recutIds }: { 
 }
 
 /** At cancel of a re-cut plan: what it held goes back on the list to nest again. */
-export async function reopenRecuts(tx: Db, { shopId, planId }: { shopId: string; planId: string }) {
+export async function reopenRecuts({ db: tx, shopId }: ShopScope, planId: string) {
   await tx
     .update(recuts)
     .set({ status: 'open', recutPlanId: null })
@@ -202,7 +202,7 @@ export async function reopenRecuts(tx: Db, { shopId, planId }: { shopId: string;
 }
 
 /** At done of a re-cut plan: what it held (and was not damaged again) is cut. */
-export async function closeRecuts(tx: Db, { shopId, planId, userId }: { shopId: string; planId: string; userId: string }) {
+export async function closeRecuts({ db: tx, shopId, userId }: Scope, planId: string) {
   return tx
     .update(recuts)
     .set({ status: 'cut', closedAt: new Date(), closedBy: userId })
@@ -211,7 +211,7 @@ export async function closeRecuts(tx: Db, { shopId, planId, userId }: { shopId: 
 }
 
 /** The estimator or owner takes a re-cut off the list, with the reason; one in a released plan is refused. */
-export async function cancelRecut(db: Db, { shopId, userId, id, reason }: { shopId: string; userId: string; id: string; reason: string }) {
+export async function cancelRecut({ db, shopId, userId }: Scope, id: string, reason: string) {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .update(recuts)
@@ -230,7 +230,7 @@ export async function cancelRecut(db: Db, { shopId, userId, id, reason }: { shop
       throw conflict(`This re-cut is already ${existing.status}.`);
     }
     await recordAudit(tx, { shopId, userId, action: 'cancel', entity: 'recut', entityId: id, data: { label: recutLabel(row), reason } });
-    const jobStatus = await syncJobStatus(tx, { shopId, jobId: row.jobId, userId, cause: 're-cut cancelled' });
+    const jobStatus = await syncJobStatus({ db: tx, shopId, userId }, row.jobId, 're-cut cancelled');
     return { id: row.id, status: row.status, jobStatus };
   });
 }

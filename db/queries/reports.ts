@@ -1,3 +1,4 @@
+import type { ShopScope } from '../scope';
 import { eq, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { stockItems } from '../schema';
@@ -207,10 +208,10 @@ export async function oldOffcuts(
 }
 
 /** The customers and jobs the filters offer: those with a finished plan or a quote sent (at most 300 jobs, newest first). */
-export async function reportSubjects(
-  db: Db,
-  shopId: string,
-): Promise<{ customers: { id: string; name: string }[]; jobs: { id: string; name: string }[] }> {
+export async function reportSubjects({
+  db,
+  shopId,
+}: ShopScope): Promise<{ customers: { id: string; name: string }[]; jobs: { id: string; name: string }[] }> {
   const [c, j] = await Promise.all([
     db.execute(sql`select c.id, c.name from customers c where c.shop_id = ${shopId} order by lower(c.name), c.id`),
     db.execute(sql`
@@ -223,7 +224,7 @@ export async function reportSubjects(
 }
 
 /** The materials a shop has finished plans or offcuts in, for the report's filter. */
-export async function reportMaterials(db: Db, shopId: string): Promise<string[]> {
+export async function reportMaterials({ db, shopId }: ShopScope): Promise<string[]> {
   const result = await db.execute(sql`
     select material from (
       select distinct pp.material from plan_pieces pp where pp.shop_id = ${shopId}

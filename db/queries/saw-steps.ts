@@ -1,3 +1,4 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { customers, jobs, plans, sawSteps, users } from '../schema';
@@ -12,7 +13,7 @@ import type { PlanTicks, StepRef, StepTick } from '@/shared/wire/plans';
 /** Plans the saw works on; ticks are refused on drafts, finished and cancelled plans. */
 const CUTTABLE = ['released', 'cutting'] as const;
 
-export async function listStepTicks(db: Db, shopId: string, planId: string): Promise<StepTick[]> {
+export async function listStepTicks({ db, shopId }: ShopScope, planId: string): Promise<StepTick[]> {
   const rows = await db
     .select({ piece: sawSteps.pieceIndex, step: sawSteps.seq, doneAt: sawSteps.doneAt, doneBy: users.name })
     .from(sawSteps)
@@ -43,7 +44,7 @@ async function checkStep(db: Db, shopId: string, planId: string, ref: StepRef) {
  * Ticks a step done. Idempotent and safe for several cutters at once: insert-or-ignore on the step's unique key,
  * so a second tick keeps the first one's who and when. The first tick on a released plan moves it to `cutting`.
  */
-export async function tickStep(db: Db, shopId: string, userId: string, planId: string, ref: StepRef): Promise<PlanTicks> {
+export async function tickStep({ db, shopId, userId }: Scope, planId: string, ref: StepRef): Promise<PlanTicks> {
   await checkStep(db, shopId, planId, ref);
   await db.transaction(async (tx) => {
     const inserted = await tx
@@ -57,14 +58,14 @@ export async function tickStep(db: Db, shopId: string, userId: string, planId: s
       .where(and(eq(plans.shopId, shopId), eq(plans.id, planId), eq(plans.status, 'released')))
       .returning({ jobId: plans.jobId, name: plans.name });
     // The first tick starts the saw on this plan: the job is being cut, whatever it said before.
-    if (started.length) await syncJobStatus(tx, { shopId, jobId: started[0].jobId, userId, cause: `first step of plan “${started[0].name}” ticked` });
+    if (started.length) await syncJobStatus({ db: tx, shopId, userId }, started[0].jobId, `first step of plan “${started[0].name}” ticked`);
     if (inserted.length) await recordAudit(tx, { shopId, userId, action: 'tick', entity: 'saw-step', entityId: planId, data: ref });
   });
-  return (await getStepTicks(db, shopId, planId))!;
+  return (await getStepTicks({ db, shopId }, planId))!;
 }
 
 /** Takes a tick back (a step ticked by mistake). Untouched when it was not ticked; the plan stays `cutting`. */
-export async function untickStep(db: Db, shopId: string, userId: string, planId: string, ref: StepRef): Promise<PlanTicks> {
+export async function untickStep({ db, shopId, userId }: Scope, planId: string, ref: StepRef): Promise<PlanTicks> {
   await checkStep(db, shopId, planId, ref);
   await db.transaction(async (tx) => {
     const removed = await tx
@@ -73,11 +74,11 @@ export async function untickStep(db: Db, shopId: string, userId: string, planId:
       .returning({ id: sawSteps.id });
     if (removed.length) await recordAudit(tx, { shopId, userId, action: 'untick', entity: 'saw-step', entityId: planId, data: ref });
   });
-  return (await getStepTicks(db, shopId, planId))!;
+  return (await getStepTicks({ db, shopId }, planId))!;
 }
 
 /** Ticked steps per plan, for the shop-floor queue. */
-export async function countStepTicks(db: Db, shopId: string, planIds: string[]): Promise<Map<string, number>> {
+export async function countStepTicks({ db, shopId }: ShopScope, planIds: string[]): Promise<Map<string, number>> {
   if (planIds.length === 0) return new Map();
   const rows = await db
     .select({ planId: sawSteps.planId, n: sql<number>`count(*)::int` })
@@ -88,13 +89,13 @@ export async function countStepTicks(db: Db, shopId: string, planIds: string[]):
 }
 
 /** A plan's status and ticks together, or null when the shop has no such plan. */
-export async function getStepTicks(db: Db, shopId: string, planId: string): Promise<PlanTicks | null> {
+export async function getStepTicks({ db, shopId }: ShopScope, planId: string): Promise<PlanTicks | null> {
   const [row] = await db
     .select({ status: plans.status })
     .from(plans)
     .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
   if (!row) return null;
-  return { status: row.status, ticks: await listStepTicks(db, shopId, planId) };
+  return { status: row.status, ticks: await listStepTicks({ db, shopId }, planId) };
 }
 
 /**
@@ -102,8 +103,8 @@ export async function getStepTicks(db: Db, shopId: string, planId: string): Prom
  * was nested with, its parts' grain rules, and the shop's units. Null when the shop has no such plan, or when it is
  * a draft and drafts are not to be shown (people who cannot edit plans see only released work).
  */
-export async function getSawOrder(db: Db, shopId: string, planId: string, { drafts }: { drafts: boolean }) {
-  const [plan, settings] = await Promise.all([getPlan(db, shopId, planId), getShopSettings(db, shopId)]);
+export async function getSawOrder({ db, shopId }: ShopScope, planId: string, { drafts }: { drafts: boolean }) {
+  const [plan, settings] = await Promise.all([getPlan({ db, shopId }, planId), getShopSettings({ db, shopId })]);
   if (!plan || !settings || (plan.status === 'draft' && !drafts)) return null;
   const [job] = await db
     .select({ id: jobs.id, name: jobs.name, customer: sql<string>`coalesce(${customers.name}, '')` })

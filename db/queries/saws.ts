@@ -1,3 +1,4 @@
+import type { Scope, ShopScope, SystemScope } from '../scope';
 import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { saws } from '../schema';
@@ -29,7 +30,7 @@ const toSaw = (r: Row): SavedSaw => ({
 });
 
 /** The shop's saws in the order they were added: the first is the nest's default. */
-export async function listSaws(db: Db, shopId: string): Promise<SavedSaw[]> {
+export async function listSaws({ db, shopId }: ShopScope): Promise<SavedSaw[]> {
   const rows = await db.select().from(saws).where(eq(saws.shopId, shopId)).orderBy(asc(saws.position), asc(saws.createdAt), asc(saws.id));
   return rows.map(toSaw);
 }
@@ -57,7 +58,7 @@ const columns = (s: Saw) => ({
   minFenceWidthMm: s.minFenceWidthMm,
 });
 
-export async function createSaw(db: Db, shopId: string, userId: string | null, saw: Saw): Promise<SavedSaw> {
+export async function createSaw({ db, shopId, userId }: SystemScope, saw: Saw): Promise<SavedSaw> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, saw.name);
     const [{ next }] = await tx
@@ -74,7 +75,7 @@ export async function createSaw(db: Db, shopId: string, userId: string | null, s
 }
 
 /** Null when the saw is not this shop's. Saved plans keep the profile they were nested with. */
-export async function updateSaw(db: Db, shopId: string, userId: string, id: string, saw: Saw): Promise<SavedSaw | null> {
+export async function updateSaw({ db, shopId, userId }: Scope, id: string, saw: Saw): Promise<SavedSaw | null> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, saw.name, id);
     const [row] = await tx
@@ -88,7 +89,7 @@ export async function updateSaw(db: Db, shopId: string, userId: string, id: stri
   });
 }
 
-export async function deleteSaw(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
+export async function deleteSaw({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
     const rows = await tx
       .delete(saws)

@@ -1,3 +1,4 @@
+import type { Scope, ShopScope } from '../scope';
 import { and, asc, eq } from 'drizzle-orm';
 import type { Db } from '../open';
 import { setupCards } from '../schema';
@@ -24,7 +25,7 @@ const toCard = (r: Row): SavedSetupCard => ({
 });
 const fieldsColumn = (fields: SetupCardField[]) => fields as unknown as Row['fields'];
 
-export async function listSetupCards(db: Db, shopId: string): Promise<SavedSetupCard[]> {
+export async function listSetupCards({ db, shopId }: ShopScope): Promise<SavedSetupCard[]> {
   const rows = await db
     .select()
     .from(setupCards)
@@ -35,13 +36,13 @@ export async function listSetupCards(db: Db, shopId: string): Promise<SavedSetup
 
 /** One card per joint and stock thickness: a second card for the same pair is refused (409), naming the first. */
 async function refuseDuplicate(db: Db, shopId: string, card: SetupCard, exceptId?: string) {
-  const same = (await listSetupCards(db, shopId)).find(
+  const same = (await listSetupCards({ db, shopId })).find(
     (c) => c.id !== exceptId && c.joint === card.joint && Math.abs(c.stockThicknessMm - card.stockThicknessMm) <= SETUP_CARD_TOLERANCE_MM,
   );
   if (same) throw conflict('The shop already has a setup card for this joint and stock thickness: edit that one.');
 }
 
-export async function createSetupCard(db: Db, shopId: string, userId: string, card: SetupCard): Promise<SavedSetupCard> {
+export async function createSetupCard({ db, shopId, userId }: Scope, card: SetupCard): Promise<SavedSetupCard> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, card);
     const [row] = await tx
@@ -53,7 +54,7 @@ export async function createSetupCard(db: Db, shopId: string, userId: string, ca
   });
 }
 
-export async function updateSetupCard(db: Db, shopId: string, userId: string, id: string, card: SetupCard): Promise<SavedSetupCard | null> {
+export async function updateSetupCard({ db, shopId, userId }: Scope, id: string, card: SetupCard): Promise<SavedSetupCard | null> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, card, id);
     const [row] = await tx
@@ -67,7 +68,7 @@ export async function updateSetupCard(db: Db, shopId: string, userId: string, id
   });
 }
 
-export async function deleteSetupCard(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
+export async function deleteSetupCard({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
     const rows = await tx
       .delete(setupCards)

@@ -1,11 +1,12 @@
+import type { Scope, ShopScope } from '../scope';
 import { eq } from 'drizzle-orm';
-import type { Db, DbHandle } from '../open';
+import type { DbHandle } from '../open';
 import { ReadCache } from '../changes';
 import { shops } from '../schema';
 import type { ShopSettings } from '@/shared/schemas/shop';
 import { recordAudit } from './audit';
 
-export async function getShopSettings(db: Db, shopId: string): Promise<ShopSettings | null> {
+export async function getShopSettings({ db, shopId }: ShopScope): Promise<ShopSettings | null> {
   const [row] = await db
     .select({
       name: shops.name,
@@ -35,16 +36,16 @@ const keptSettings = new ReadCache<ShopSettings | null>(['shops']);
  * the kept one.
  */
 export async function readShopSettings(handle: Pick<DbHandle, 'db' | 'changes'>, shopId: string): Promise<ShopSettings | null> {
-  const settings = await keptSettings.get(handle.changes, shopId, () => getShopSettings(handle.db, shopId));
+  const settings = await keptSettings.get(handle.changes, shopId, () => getShopSettings({ db: handle.db, shopId }));
   return settings && { ...settings };
 }
 
-export async function updateShopSettings(db: Db, shopId: string, userId: string, patch: Partial<ShopSettings>) {
+export async function updateShopSettings({ db, shopId, userId }: Scope, patch: Partial<ShopSettings>) {
   // Saving an untouched form sends nothing: nothing to write, nothing to audit.
-  if (Object.keys(patch).length === 0) return getShopSettings(db, shopId);
+  if (Object.keys(patch).length === 0) return getShopSettings({ db, shopId });
   await db.transaction(async (tx) => {
     await tx.update(shops).set(patch).where(eq(shops.id, shopId));
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'shop-settings', entityId: shopId, data: patch });
   });
-  return getShopSettings(db, shopId);
+  return getShopSettings({ db, shopId });
 }

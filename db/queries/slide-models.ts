@@ -1,3 +1,4 @@
+import type { Scope, ShopScope, SystemScope } from '../scope';
 import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { slideModels } from '../schema';
@@ -27,7 +28,7 @@ const toModel = (r: Row): SavedSlideModel => ({
 });
 
 /** The shop's slide models, undermount first, by name. */
-export async function listSlideModels(db: Db, shopId: string): Promise<SavedSlideModel[]> {
+export async function listSlideModels({ db, shopId }: ShopScope): Promise<SavedSlideModel[]> {
   const rows = await db
     .select()
     .from(slideModels)
@@ -59,7 +60,7 @@ const columns = (m: SlideModel) => ({
   rearClearanceMm: m.rearClearanceMm,
 });
 
-export async function createSlideModel(db: Db, shopId: string, userId: string | null, model: SlideModel): Promise<SavedSlideModel> {
+export async function createSlideModel({ db, shopId, userId }: SystemScope, model: SlideModel): Promise<SavedSlideModel> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, model.name);
     const [row] = await tx
@@ -72,7 +73,7 @@ export async function createSlideModel(db: Db, shopId: string, userId: string | 
 }
 
 /** Null when the model is not this shop's. Saved drawer schedules keep the rule they were sized by. */
-export async function updateSlideModel(db: Db, shopId: string, userId: string, id: string, model: SlideModel): Promise<SavedSlideModel | null> {
+export async function updateSlideModel({ db, shopId, userId }: Scope, id: string, model: SlideModel): Promise<SavedSlideModel | null> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, model.name, id);
     const [row] = await tx
@@ -86,7 +87,7 @@ export async function updateSlideModel(db: Db, shopId: string, userId: string, i
   });
 }
 
-export async function deleteSlideModel(db: Db, shopId: string, userId: string, id: string): Promise<boolean> {
+export async function deleteSlideModel({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
   return db.transaction(async (tx) => {
     const rows = await tx
       .delete(slideModels)

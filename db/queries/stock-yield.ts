@@ -1,5 +1,5 @@
+import type { ShopScope } from '../scope';
 import { and, desc, eq, sql } from 'drizzle-orm';
-import type { Db } from '../open';
 import { jobs, offcuts, plans, users } from '../schema';
 import { readPlan } from '@/lib/nesting';
 import { planFigures } from '@/lib/stock/finish-plan';
@@ -9,7 +9,7 @@ import type { YieldLedger } from '@/shared/wire/plans';
  * Finished plans for the yield ledger: yield, waste and cost recorded at done, with the stock area that weighs them.
  * Waste is split into the saw's (trim, kerf, pieces too small to keep) and parts spoiled at the saw (re-cuts).
  */
-export async function listYieldLedger(db: Db, shopId: string): Promise<YieldLedger> {
+export async function listYieldLedger({ db, shopId }: ShopScope): Promise<YieldLedger> {
   const rows = await db
     .select({
       id: plans.id,

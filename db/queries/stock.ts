@@ -1,5 +1,5 @@
+import type { Scope, ShopScope, SystemScope } from '../scope';
 import { and, asc, desc, eq, ilike, inArray, ne, sql, type SQL } from 'drizzle-orm';
-import type { Db } from '../open';
 import { auditEvents, offcuts, plans, stockItems, stockMovements, users } from '../schema';
 import {
   STOCK_DETAIL_FIELDS,
@@ -27,7 +27,7 @@ const like = (v: string) => `%${v.replace(/[%_\\]/g, (c) => `\\${c}`)}%`;
 
 export type { DetailChange, MovementRow, OffcutRow, StockDetailChanges, StockItemRow } from '@/shared/wire/stock';
 
-export async function listStock(db: Db, shopId: string, filter: StockFilter = {}): Promise<StockItemRow[]> {
+export async function listStock({ db, shopId }: ShopScope, filter: StockFilter = {}): Promise<StockItemRow[]> {
   const where: SQL[] = [eq(stockItems.shopId, shopId)];
   if (filter.kind) where.push(eq(stockItems.kind, filter.kind));
   if (filter.material) where.push(ilike(stockItems.material, like(filter.material)));
@@ -42,7 +42,7 @@ export async function listStock(db: Db, shopId: string, filter: StockFilter = {}
 }
 
 /** The rack. Used offcuts are history (shown only when asked for by status). */
-export async function listOffcuts(db: Db, shopId: string, filter: StockFilter = {}): Promise<OffcutRow[]> {
+export async function listOffcuts({ db, shopId }: ShopScope, filter: StockFilter = {}): Promise<OffcutRow[]> {
   const where: SQL[] = [eq(offcuts.shopId, shopId)];
   where.push(filter.status ? eq(offcuts.status, filter.status) : ne(offcuts.status, 'used'));
   if (!filter.status) where.push(ne(offcuts.status, 'scrapped'));
@@ -58,7 +58,7 @@ export async function listOffcuts(db: Db, shopId: string, filter: StockFilter = 
 }
 
 /** A new size on the rack; its opening count is a receipt in the ledger. */
-export async function createStockItem(db: Db, shopId: string, userId: string, values: StockItemValues) {
+export async function createStockItem({ db, shopId, userId }: Scope, values: StockItemValues) {
   return db.transaction(async (tx) => {
     const [item] = await tx
       .insert(stockItems)
@@ -79,7 +79,7 @@ export async function createStockItem(db: Db, shopId: string, userId: string, va
  * Changes a size's details (never its counts or dimensions). Only fields whose value differs are written, and the
  * audit log keeps each as from → to, so the history can say what changed; a patch that changes nothing writes nothing.
  */
-export async function updateStockItem(db: Db, shopId: string, userId: string, id: string, patch: StockItemPatch) {
+export async function updateStockItem({ db, shopId, userId }: Scope, id: string, patch: StockItemPatch) {
   return db.transaction(async (tx) => {
     const [current] = await tx
       .select()
@@ -104,7 +104,7 @@ export async function updateStockItem(db: Db, shopId: string, userId: string, id
   });
 }
 
-export async function receiveStock(db: Db, shopId: string, userId: string, id: string, { quantity, reason }: { quantity: number; reason: string }) {
+export async function receiveStock({ db, shopId, userId }: Scope, id: string, { quantity, reason }: { quantity: number; reason: string }) {
   return db.transaction(async (tx) => {
     const [item] = await tx
       .update(stockItems)
@@ -121,7 +121,7 @@ export async function receiveStock(db: Db, shopId: string, userId: string, id: s
  * A counted figure replaces the book count. The row is locked while the difference is worked out, and the
  * database refuses a count below what released plans hold.
  */
-export async function adjustStock(db: Db, shopId: string, userId: string, id: string, { count, reason }: { count: number; reason: string }) {
+export async function adjustStock({ db, shopId, userId }: Scope, id: string, { count, reason }: { count: number; reason: string }) {
   return db.transaction(async (tx) => {
     const [current] = await tx
       .select()
@@ -142,7 +142,7 @@ export async function adjustStock(db: Db, shopId: string, userId: string, id: st
   });
 }
 
-export async function recordOffcut(db: Db, shopId: string, userId: string, values: z.infer<typeof recordOffcutSchema>) {
+export async function recordOffcut({ db, shopId, userId }: Scope, values: z.infer<typeof recordOffcutSchema>) {
   return db.transaction(async (tx) => {
     const [o] = await tx
       .insert(offcuts)
@@ -154,7 +154,7 @@ export async function recordOffcut(db: Db, shopId: string, userId: string, value
 }
 
 /** Only an offcut on the rack (not one a released plan holds) can be scrapped. */
-export async function scrapOffcut(db: Db, shopId: string, userId: string, id: string, reason: string) {
+export async function scrapOffcut({ db, shopId, userId }: Scope, id: string, reason: string) {
   return db.transaction(async (tx) => {
     const [o] = await tx
       .update(offcuts)
@@ -175,7 +175,7 @@ export async function scrapOffcut(db: Db, shopId: string, userId: string, id: st
 }
 
 /** Imported rows are new sizes; all in one transaction, each with its opening receipt. */
-export async function importStock(db: Db, shopId: string, userId: string, items: StockItemValues[]) {
+export async function importStock({ db, shopId, userId }: Scope, items: StockItemValues[]) {
   if (!items.length) return [];
   return db.transaction(async (tx) => {
     const rows = await tx
@@ -192,8 +192,7 @@ export async function importStock(db: Db, shopId: string, userId: string, items:
 }
 
 export async function listMovements(
-  db: Db,
-  shopId: string,
+  { db, shopId }: ShopScope,
   { stockItemId, offcutId, limit = 200 }: { stockItemId?: string; offcutId?: string; limit?: number } = {},
 ): Promise<MovementRow[]> {
   const where: SQL[] = [eq(stockMovements.shopId, shopId)];
@@ -235,8 +234,7 @@ function readDetailChanges(data: unknown): StockDetailChanges {
 
 /** Changes to sizes' details (no count moved), newest first, for the history beside the ledger. */
 export async function listDetailChanges(
-  db: Db,
-  shopId: string,
+  { db, shopId }: ShopScope,
   { stockItemId, limit = 200 }: { stockItemId?: string; limit?: number } = {},
 ): Promise<DetailChange[]> {
   const where: SQL[] = [eq(auditEvents.shopId, shopId), eq(auditEvents.entity, 'stock-item'), eq(auditEvents.action, 'update')];
@@ -265,7 +263,7 @@ export async function listDetailChanges(
  * consumption at done that cut reserved pieces). Equal to the stored counts for every item when nothing bypassed
  * the ledger.
  */
-export async function ledgerCounts(db: Db, shopId: string) {
+export async function ledgerCounts({ db, shopId }: ShopScope) {
   const rows = await db
     .select({
       stockItemId: stockMovements.stockItemId,
@@ -280,7 +278,7 @@ export async function ledgerCounts(db: Db, shopId: string) {
 }
 
 /** Rack value at cost: sheets each, boards by their board feet, offcuts at their carried share. */
-export async function stockValue(db: Db, shopId: string) {
+export async function stockValue({ db, shopId }: ShopScope) {
   const [items, rack] = await Promise.all([
     db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
     db
@@ -296,7 +294,7 @@ export async function stockValue(db: Db, shopId: string) {
  * Opening counts for stock that reached the database without a ledger row (a seeded or migrated rack): one receipt
  * per size and one "offcut created" per offcut, so the ledger sums to the counts from then on.
  */
-export async function recordOpeningCounts(db: Db, shopId: string, userId: string | null) {
+export async function recordOpeningCounts({ db, shopId, userId }: SystemScope) {
   await db.transaction(async (tx) => {
     const booked = await tx
       .select({ stockItemId: stockMovements.stockItemId, offcutId: stockMovements.offcutId })
@@ -324,7 +322,7 @@ export async function recordOpeningCounts(db: Db, shopId: string, userId: string
  * The catalogue is the stock sizes marked buyable (on hand or not): one row per size keeps a single price per size,
  * and the nesting request already offers each as `buy:<id>`. Adding a size to buy is a new stock size with 0 on hand.
  */
-export async function listCatalogue(db: Db, shopId: string) {
+export async function listCatalogue({ db, shopId }: ShopScope) {
   const rows = await db
     .select()
     .from(stockItems)
@@ -349,9 +347,9 @@ export async function listCatalogue(db: Db, shopId: string) {
  * Every stock size and offcut whose stored counts differ from what its ledger rows add up to (empty when the ledger
  * and the counts agree). An offcut on the rack counts 1 on hand, and 1 reserved while a released plan holds it.
  */
-export async function ledgerMismatches(db: Db, shopId: string) {
+export async function ledgerMismatches({ db, shopId }: ShopScope) {
   const [ledger, items, rack] = await Promise.all([
-    ledgerCounts(db, shopId),
+    ledgerCounts({ db, shopId }),
     db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
     db.select().from(offcuts).where(eq(offcuts.shopId, shopId)),
   ]);

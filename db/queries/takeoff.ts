@@ -1,5 +1,5 @@
+import type { ShopScope } from '../scope';
 import { and, desc, eq, inArray, ne, sql } from 'drizzle-orm';
-import type { Db } from '../open';
 import { offcuts, plans, stockItems, stockMovements } from '../schema';
 import { readPlan } from '@/lib/nesting';
 import { takeoff, type TakeoffSize } from '@/lib/stock/takeoff';
@@ -7,7 +7,7 @@ import { costEachCents, stockRef } from './nest-request';
 import { getShopSettings } from './shops';
 
 /** The job's plans a takeoff can be read from (cancelled ones aside), newest first. */
-export async function takeoffPlans(db: Db, shopId: string, jobId: string) {
+export async function takeoffPlans({ db, shopId }: ShopScope, jobId: string) {
   return db
     .select({ id: plans.id, name: plans.name, status: plans.status })
     .from(plans)
@@ -20,7 +20,7 @@ export async function takeoffPlans(db: Db, shopId: string, jobId: string) {
  * aside): what to pull, what to buy, board feet or area, cost, the spoilage allowance once per material, whether
  * the stock room covers it now, and any part not placed.
  */
-export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?: string) {
+export async function getTakeoff({ db, shopId }: ShopScope, jobId: string, planId?: string) {
   const [row] = await db
     .select()
     .from(plans)
@@ -29,7 +29,7 @@ export async function getTakeoff(db: Db, shopId: string, jobId: string, planId?:
     .limit(1);
   if (!row) return null;
   const plan = readPlan(row.document);
-  const settings = await getShopSettings(db, shopId);
+  const settings = await getShopSettings({ db, shopId });
 
   const counts = new Map<string, number>();
   for (const p of plan.pieces) counts.set(p.stockId, (counts.get(p.stockId) ?? 0) + 1);

@@ -1,3 +1,4 @@
+import type { Scope, ShopScope } from '../scope';
 import bcrypt from 'bcryptjs';
 import { and, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
@@ -28,15 +29,15 @@ const member = (u: {
 
 export const BCRYPT_ROUNDS = 10;
 
-export async function teamOf(db: Db, shopId: string): Promise<TeamMember[]> {
-  return (await listTeam(db, shopId)).map(member);
+export async function teamOf({ db, shopId }: ShopScope): Promise<TeamMember[]> {
+  return (await listTeam({ db, shopId })).map(member);
 }
 
 /**
  * Adds a person. Without a password they are invited: a single-use link to choose one is mailed to them, queued in
  * the same transaction as their row.
  */
-export async function addTeamMember(db: Db, shopId: string, actorId: string, input: TeamMemberInput): Promise<TeamMember> {
+export async function addTeamMember({ db, shopId, userId: actorId }: Scope, input: TeamMemberInput): Promise<TeamMember> {
   const passwordHash = input.password === undefined ? NO_PASSWORD_YET : await bcrypt.hash(input.password, BCRYPT_ROUNDS);
   try {
     return await db.transaction(async (tx) => {
@@ -62,7 +63,7 @@ export async function addTeamMember(db: Db, shopId: string, actorId: string, inp
  * Changes a person's role, name, password or status. Any change but the name bumps their token version so the
  * change takes effect on their next request. The shop always keeps at least one active owner.
  */
-export async function updateTeamMember(db: Db, shopId: string, actorId: string, id: string, patch: TeamMemberPatch) {
+export async function updateTeamMember({ db, shopId, userId: actorId }: Scope, id: string, patch: TeamMemberPatch) {
   return db.transaction(async (tx) => {
     const [current] = await tx
       .select()
@@ -106,7 +107,7 @@ export async function updateTeamMember(db: Db, shopId: string, actorId: string, 
 }
 
 /** Sends a fresh invite (voiding the earlier link) to someone who has not chosen a password yet. */
-export async function resendInvite(db: Db, shopId: string, actorId: string, id: string): Promise<TeamMember> {
+export async function resendInvite({ db, shopId, userId: actorId }: Scope, id: string): Promise<TeamMember> {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .select()

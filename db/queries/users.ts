@@ -1,3 +1,4 @@
+import type { ShopScope } from '../scope';
 import { and, asc, eq, sql } from 'drizzle-orm';
 import type { Db, DbHandle } from '../open';
 import { ReadCache } from '../changes';
@@ -69,7 +70,7 @@ export async function revokeSessions(db: Db, claims: { userId: string; shopId: s
     .where(and(eq(users.id, claims.userId), eq(users.shopId, claims.shopId)));
 }
 
-export async function listTeam(db: Db, shopId: string) {
+export async function listTeam({ db, shopId }: ShopScope) {
   return db
     .select({
       id: users.id,

@@ -3,6 +3,7 @@ import { NextResponse, type NextRequest } from 'next/server';
 import { z, type ZodType } from 'zod';
 import { getDbHandle } from '@/db/client';
 import type { Db } from '@/db/open';
+import { scopeOf, type Scope } from '@/db/scope';
 import { userFromRequest, type SessionUser } from '@/server/auth/session';
 import { can, type Permission } from '@/lib/auth/permissions';
 import { forbidden, notFound, setErrorReporter, toErrorResponse, unauthorized } from './errors';
@@ -17,6 +18,8 @@ export interface RouteContext<P, B, Q, U = SessionUser> {
   rawBody: string;
   db: Db;
   user: U;
+  /** The database, the user's shop and the user, for `db/queries` (a public route's signed-out caller has none). */
+  scope: U extends SessionUser ? Scope : Scope | null;
   params: P;
   body: B;
   query: Q;
@@ -110,7 +113,8 @@ export function route<P = undefined, B = undefined, Q = undefined>(
       const rawBody = spec.signedByService ? await readTextBody(req) : '';
       const body = (spec.body ? spec.body.parse(await readJsonBody(req)) : undefined) as B;
 
-      const result = await handler({ req, rawBody, db, user: user as never, params, body, query });
+      const scope = user ? scopeOf(db, user) : null;
+      const result = await handler({ req, rawBody, db, user: user as never, scope: scope as never, params, body, query });
       if (result instanceof Response) return result;
       // A role that may not see prices gets none, whatever the handler returned (a write's echo included).
       const shown = user && !can(user.role, 'prices:read') ? withoutPrices(result) : result;

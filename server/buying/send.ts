@@ -15,7 +15,7 @@ import { purchaseOrderPdf } from '@/lib/buying/po-pdf';
 
 /** The order's PDF as the supplier gets it, and its file name. */
 export async function renderPurchaseOrder(db: Db, shopId: string, po: PurchaseOrderView) {
-  const [shop, buying] = await Promise.all([getShopSettings(db, shopId), getBuyingSettings(db, shopId)]);
+  const [shop, buying] = await Promise.all([getShopSettings({ db, shopId }), getBuyingSettings({ db, shopId })]);
   if (!shop || !buying) throw notFound('The shop');
   const lines = po.lines.map((l) => ({
     description: describeSize(l, shop.units),
@@ -44,9 +44,10 @@ export async function renderPurchaseOrder(db: Db, shopId: string, po: PurchaseOr
  * queues the mail with the PDF attached and marks it sent. A new address given here is saved on the draft first.
  */
 export async function sendPurchaseOrder(db: Db, shopId: string, userId: string, id: string, supplierEmail?: string): Promise<PurchaseOrderView> {
-  let po = await getPurchaseOrder(db, shopId, id);
+  let po = await getPurchaseOrder({ db, shopId }, id);
   if (!po) throw notFound('That purchase order');
-  if (supplierEmail && supplierEmail !== po.supplierEmail && po.status === 'draft') po = await updateDraft(db, shopId, userId, id, { supplierEmail });
+  if (supplierEmail && supplierEmail !== po.supplierEmail && po.status === 'draft')
+    po = await updateDraft({ db, shopId, userId }, id, { supplierEmail });
   const { bytes, filename, lines, shop, buying } = await renderPurchaseOrder(db, shopId, po);
   const mail = purchaseOrderMail({
     shopName: shop.name,
@@ -58,7 +59,7 @@ export async function sendPurchaseOrder(db: Db, shopId: string, userId: string, 
     note: po.note,
   });
   const to = po.supplierEmail;
-  await markSent(db, shopId, userId, id, po.updatedAt, (tx) =>
+  await markSent({ db, shopId, userId }, id, po.updatedAt, (tx) =>
     enqueueMail(tx, {
       shopId,
       kind: 'purchase-order',
@@ -70,5 +71,5 @@ export async function sendPurchaseOrder(db: Db, shopId: string, userId: string, 
     }),
   );
   wakeMailSender();
-  return (await getPurchaseOrder(db, shopId, id))!;
+  return (await getPurchaseOrder({ db, shopId }, id))!;
 }

@@ -76,7 +76,7 @@ describe('the change feed', () => {
     expect(before?.timeZone).toBeTruthy();
     before!.name = 'changed by a caller';
     expect((await readShopSettings(handle, fx.mine.id))?.name).not.toBe('changed by a caller');
-    await updateShopSettings(handle.db, fx.mine.id, fx.owner.id, { timeZone: 'America/Chicago' });
+    await updateShopSettings({ db: handle.db, shopId: fx.mine.id, userId: fx.owner.id }, { timeZone: 'America/Chicago' });
     expect((await readShopSettings(handle, fx.mine.id))?.timeZone).toBe('America/Chicago');
     await handle.db
       .update(shops)

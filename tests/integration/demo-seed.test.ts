@@ -66,7 +66,7 @@ describe('the demo shop', () => {
   });
 
   test('keeps a table saw (3 stages rip first, 30″ = 762 mm rip capacity, ⅛″ kerf) and a track saw, and nests the kitchen within both', async () => {
-    const list = await listSaws(handle.db, first.shopId);
+    const list = await listSaws({ db: handle.db, shopId: first.shopId });
     // 30″ × 25.4 = 762 mm and ⅛″ = 3.175 mm (1 in = 25.4 mm exactly).
     expect(list.map((s) => [s.kind, s.ripCapacityMm, s.maxStages, s.firstStage, s.kerfMm])).toEqual([
       ['table-saw', 762, 3, 'rip', 3.175],
@@ -75,7 +75,7 @@ describe('the demo shop', () => {
     const [kitchen] = await handle.db.select().from(jobs).where(eq(jobs.name, 'Hollis kitchen'));
     const [table, track] = list;
     const request = nestRequestSchema.parse(
-      await buildNestRequest(handle.db, first.shopId, kitchen.id, { timeBudgetMs: 0, sawId: table.id, breakdownSawId: track.id }),
+      await buildNestRequest({ db: handle.db, shopId: first.shopId }, kitchen.id, { timeBudgetMs: 0, sawId: table.id, breakdownSawId: track.id }),
     );
     expect(request.settings.saw?.name).toBe('Cabinet saw');
     const plan = await optimize(request);
@@ -84,13 +84,15 @@ describe('the demo shop', () => {
     const used = new Set(plan.pieces.flatMap((p) => p.sawOrder!.map((s) => s.saw)));
     expect([...used].sort()).toEqual(['Cabinet saw', 'Track saw']);
     // The table saw alone cannot crosscut the 34″ (863.6 mm) wide parts' strips on its 24″ sled: validatePlan says so.
-    const alone = nestRequestSchema.parse(await buildNestRequest(handle.db, first.shopId, kitchen.id, { timeBudgetMs: 0, sawId: table.id }));
+    const alone = nestRequestSchema.parse(
+      await buildNestRequest({ db: handle.db, shopId: first.shopId }, kitchen.id, { timeBudgetMs: 0, sawId: table.id }),
+    );
     const problems = validatePlan(alone, await optimize(alone));
     expect(problems.some((p) => p.code === 'crosscut-capacity' && p.message.includes('863.6 mm crosscut'))).toBe(true);
   });
 
   test('keeps two invented undermount slide models, each sizing a box the way its rule says (worked by hand)', async () => {
-    const models = await listSlideModels(handle.db, first.shopId);
+    const models = await listSlideModels({ db: handle.db, shopId: first.shopId });
     expect(models.map((m) => [m.name, m.widthRule])).toEqual([
       ['Halbrook UM-58 full extension', 'inside'],
       ['Tessel T-16 soft close', 'outside'],
@@ -135,7 +137,7 @@ describe('the demo shop', () => {
     expect(done).toHaveLength(6);
     for (const p of done) expect(validatePlan(nestRequestSchema.parse(p.request), readPlan(p.document)), p.name).toEqual([]);
     // Cut from the rack or bought for each job: the stock room's counts and its ledger agree.
-    expect(await ledgerMismatches(db, first.shopId)).toEqual([]);
+    expect(await ledgerMismatches({ db, shopId: first.shopId })).toEqual([]);
     const months = await yieldOverTime(db, { shopId: first.shopId, timeZone: 'America/Chicago', by: 'month', from: '2026-06-01', to: '2026-11-30' });
     expect([...new Set(months.map((r) => r.period))]).toEqual(['2026-06-01', '2026-07-01', '2026-08-01', '2026-09-01', '2026-10-01', '2026-11-01']);
     // The last job ended at 23:30 on 19 November in Chicago (05:30 UTC on the 20th): the 19th's week, Monday the 16th.

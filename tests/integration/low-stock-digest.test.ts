@@ -96,13 +96,13 @@ describe('the low-stock digest', () => {
   test('sizes on an open order are left out; nothing low sends nothing (and the day is still done)', async () => {
     const { shop, owners } = await chicagoShop();
     const s = await sheet(shop.id, { onHand: 1, lowStockAt: 3 });
-    const [poId] = await createFromLowStock(db, shop.id, owners[0].id);
+    const [poId] = await createFromLowStock({ db, shopId: shop.id, userId: owners[0].id });
     expect(mine(shop.id, await runLowStockDigests(db, new Date('2026-12-06T13:00:00Z')))).toEqual([
       { shopId: shop.id, day: '2026-12-06', sizes: 0, mails: 0 },
     ]);
     expect(await mails(shop.id)).toEqual([]);
     // Cancel the order: the size is listed again, the next day.
-    await cancelPurchaseOrder(db, shop.id, owners[0].id, poId);
+    await cancelPurchaseOrder({ db, shopId: shop.id, userId: owners[0].id }, poId);
     expect((await db.select().from(purchaseOrders).where(eq(purchaseOrders.id, poId)))[0].status).toBe('cancelled');
     expect(mine(shop.id, await runLowStockDigests(db, new Date('2026-12-07T13:00:00Z')))).toEqual([
       { shopId: shop.id, day: '2026-12-07', sizes: 1, mails: 2 },

@@ -80,7 +80,7 @@ describe('the ledger migration on a ledger written the old way', () => {
       ['released', 0, -1],
       ['reserved', 0, 1],
     ]);
-    expect(await ledgerMismatches(db, shop.id)).toEqual([]);
+    expect(await ledgerMismatches({ db, shopId: shop.id })).toEqual([]);
 
     const jobs = await rows<{ name: string; status: string; accepted_at: Date | null }>(
       sql`select name, status, accepted_at from jobs where shop_id = ${shop.id} order by name`,

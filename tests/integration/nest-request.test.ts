@@ -20,7 +20,7 @@ afterAll(() => handle.close());
 describe('a nesting request built from the database', () => {
   test("holds the job's parts and the rack's free stock, buyable sizes and offcuts, and nests to a valid plan", async () => {
     const [kitchen] = await handle.db.select().from(jobs).where(eq(jobs.name, 'Hollis kitchen'));
-    const request = nestRequestSchema.parse(await buildNestRequest(handle.db, shopId, kitchen.id, { timeBudgetMs: 0 }));
+    const request = nestRequestSchema.parse(await buildNestRequest({ db: handle.db, shopId }, kitchen.id, { timeBudgetMs: 0 }));
     expect(request.parts.length).toBeGreaterThan(0);
     const sources = new Set(request.stock.map((s) => stockRef.parse(s.id)?.source));
     expect(sources).toEqual(new Set(['stock', 'buy', 'offcut']));

@@ -89,7 +89,7 @@ const part = (id: string, length: number, width: number, quantity = 1, material 
 });
 
 async function expectLedgerMatchesCounts() {
-  expect(await ledgerMismatches(db, fx.mine.id)).toEqual([]);
+  expect(await ledgerMismatches({ db, shopId: fx.mine.id })).toEqual([]);
 }
 
 const who = () => ({ shopId: fx.mine.id, userId: fx.owner.id });
@@ -106,7 +106,7 @@ describe('releasing plans that race for the same stock', () => {
     for (let i = 0; i < 8; i++)
       drafts.push(await draftPlan({ parts: [part(`race-${i}`, 2000, 1000, 1, 'Race ply')], stock: [{ ...asStock(last), count: 1 }] }, `Race ${i}`));
 
-    const results = await Promise.allSettled(drafts.map((p) => releasePlan(db, { ...who(), planId: p.id })));
+    const results = await Promise.allSettled(drafts.map((p) => releasePlan({ db, ...who() }, p.id)));
     const won = results.filter((r) => r.status === 'fulfilled');
     const refused = results.flatMap((r) => (r.status === 'rejected' ? [r.reason] : []));
     expect(won).toHaveLength(1);
@@ -135,7 +135,7 @@ describe('releasing plans that race for the same stock', () => {
     ];
     const drafts = [];
     for (let i = 0; i < 6; i++) drafts.push(await draftPlan({ parts: [part(`oc-${i}`, 500, 300, 1, 'Offcut ply')], stock }));
-    const results = await Promise.allSettled(drafts.map((p) => releasePlan(db, { ...who(), planId: p.id })));
+    const results = await Promise.allSettled(drafts.map((p) => releasePlan({ db, ...who() }, p.id)));
     expect(results.filter((r) => r.status === 'fulfilled')).toHaveLength(1);
     const refused = results.flatMap((r) => (r.status === 'rejected' ? [r.reason] : []));
     expect(refused.every((e) => e instanceof StockShortage && e.missing[0].kind === 'offcut')).toBe(true);
@@ -147,7 +147,7 @@ describe('releasing plans that race for the same stock', () => {
   test('the same plan released five times at once is released once; the others hear it is already released', async () => {
     const item = await sheet({ material: 'Twice ply', onHand: 4 });
     const plan = await draftPlan({ parts: [part('twice', 1000, 500, 2, 'Twice ply')], stock: [asStock(item)] });
-    const results = await Promise.allSettled(Array.from({ length: 5 }, () => releasePlan(db, { ...who(), planId: plan.id })));
+    const results = await Promise.allSettled(Array.from({ length: 5 }, () => releasePlan({ db, ...who() }, plan.id)));
     expect(results.filter((r) => r.status === 'fulfilled')).toHaveLength(1);
     for (const r of results)
       if (r.status === 'rejected') expect(r.reason).toMatchObject({ kind: 'conflict', message: expect.stringMatching(/released/) });
@@ -164,7 +164,7 @@ describe('releasing plans that race for the same stock', () => {
     });
     await db.update(stockItems).set({ onHand: 0 }).where(eq(stockItems.id, b.id)); // counted and found none
     await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'adjusted', stockItemId: b.id, quantity: -2, reason: 'Counted' });
-    await expect(releasePlan(db, { ...who(), planId: plan.id })).rejects.toBeInstanceOf(StockShortage);
+    await expect(releasePlan({ db, ...who() }, plan.id)).rejects.toBeInstanceOf(StockShortage);
     const [afterA] = await db.select().from(stockItems).where(eq(stockItems.id, a.id));
     expect(afterA.reserved).toBe(0);
     const [p] = await db.select().from(plans).where(eq(plans.id, plan.id));
@@ -178,7 +178,7 @@ describe('a plan from release to done', () => {
     const plan = await draftPlan({ parts: [part('side', 1800, 600, 3, 'Done ply')], stock: [asStock(item)] }, 'Done plan');
     const pieces = plan.document.pieces.length;
     expect(pieces).toBeGreaterThan(0);
-    await releasePlan(db, { ...who(), planId: plan.id });
+    await releasePlan({ db, ...who() }, plan.id);
     expect((await db.select().from(stockItems).where(eq(stockItems.id, item.id)))[0]).toMatchObject({ onHand: 5, reserved: pieces });
     expect(await db.select().from(planPieces).where(eq(planPieces.planId, plan.id))).toHaveLength(pieces);
 
@@ -187,18 +187,13 @@ describe('a plan from release to done', () => {
       .filter(({ r }) => isKeepableOffcut(r, { minLength: 300, minWidth: 100 }));
     expect(expected.length).toBeGreaterThan(0);
     const [firstPlaced] = plan.document.pieces[0].placements;
-    const result = await finishPlan(db, {
-      shopId: fx.mine.id,
-      userId: fx.cutter.id,
-      planId: plan.id,
-      body: {
-        offcuts: expected.map(({ pi, i }) => ({ piece: pi, index: i, keep: true, location: 'Bin 7' })),
-        damaged: [{ piece: 0, partId: firstPlaced.partId, instance: firstPlaced.instance }],
-      },
+    const result = await finishPlan({ db, shopId: fx.mine.id, userId: fx.cutter.id }, plan.id, {
+      offcuts: expected.map(({ pi, i }) => ({ piece: pi, index: i, keep: true, location: 'Bin 7' })),
+      damaged: [{ piece: 0, partId: firstPlaced.partId, instance: firstPlaced.instance }],
     });
 
     expect((await db.select().from(stockItems).where(eq(stockItems.id, item.id)))[0]).toMatchObject({ onHand: 5 - pieces, reserved: 0 });
-    const rack = (await listOffcuts(db, fx.mine.id)).filter((o) => o.sourcePlanId === plan.id);
+    const rack = (await listOffcuts({ db, shopId: fx.mine.id })).filter((o) => o.sourcePlanId === plan.id);
     expect(rack).toHaveLength(expected.length);
     expect(rack.every((o) => o.status === 'available' && o.location === 'Bin 7' && o.material === 'Done ply')).toBe(true);
     expect(rack.map((o) => o.lengthMm * o.widthMm).sort()).toEqual(expected.map(({ r }) => r.w * r.h).sort());
@@ -229,12 +224,12 @@ describe('a plan from release to done', () => {
     const request = { parts: [part('buy', 2000, 1000, 2, 'Buy ply')], stock: [{ ...asStock(item), id: stockRef.buy(item.id), count: null }] };
     const plan = await draftPlan(request);
     expect(plan.document.stockToBuy[0]?.count).toBe(2);
-    const released = await releasePlan(db, { ...who(), planId: plan.id });
+    const released = await releasePlan({ db, ...who() }, plan.id);
     expect(released.toBuy).toEqual([{ stockId: stockRef.buy(item.id), count: 2 }]);
     // One of the two arrives before the saw.
     await db.update(stockItems).set({ onHand: 1 }).where(eq(stockItems.id, item.id));
     await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'received', stockItemId: item.id, quantity: 1, reason: 'Delivery' });
-    await finishPlan(db, { shopId: fx.mine.id, userId: fx.cutter.id, planId: plan.id, body: { offcuts: [], damaged: [] } });
+    await finishPlan({ db, shopId: fx.mine.id, userId: fx.cutter.id }, plan.id, { offcuts: [], damaged: [] });
     expect((await db.select().from(stockItems).where(eq(stockItems.id, item.id)))[0]).toMatchObject({ onHand: 0, reserved: 0 });
     await expectLedgerMatchesCounts();
   });
@@ -250,26 +245,26 @@ describe('a plan from release to done', () => {
       parts: [part('c1', 2000, 1000, 2, 'Cancel ply'), part('c2', 800, 450, 1, 'Cancel ply')],
       stock: [asStock(item), { id: stockRef.offcut(o.id), kind: 'offcut', length: 900, width: 500, thickness: 18, material: 'Cancel ply', count: 1 }],
     });
-    const before = await listStock(db, fx.mine.id, { material: 'Cancel ply' });
-    await releasePlan(db, { ...who(), planId: plan.id });
+    const before = await listStock({ db, shopId: fx.mine.id }, { material: 'Cancel ply' });
+    await releasePlan({ db, ...who() }, plan.id);
     expect((await db.select().from(offcuts).where(eq(offcuts.id, o.id)))[0].status).toBe('reserved');
-    await cancelPlan(db, { ...who(), planId: plan.id });
-    expect(await listStock(db, fx.mine.id, { material: 'Cancel ply' })).toEqual(before);
+    await cancelPlan({ db, ...who() }, plan.id);
+    expect(await listStock({ db, shopId: fx.mine.id }, { material: 'Cancel ply' })).toEqual(before);
     expect((await db.select().from(offcuts).where(eq(offcuts.id, o.id)))[0].status).toBe('available');
-    await expect(
-      finishPlan(db, { shopId: fx.mine.id, userId: fx.cutter.id, planId: plan.id, body: { offcuts: [], damaged: [] } }),
-    ).rejects.toMatchObject({ kind: 'conflict' });
+    await expect(finishPlan({ db, shopId: fx.mine.id, userId: fx.cutter.id }, plan.id, { offcuts: [], damaged: [] })).rejects.toMatchObject({
+      kind: 'conflict',
+    });
     await expectLedgerMatchesCounts();
   });
 
   test('done and cancel racing on one plan: exactly one happens, and the counts match it', async () => {
     const item = await sheet({ material: 'Both ply', onHand: 4 });
     const plan = await draftPlan({ parts: [part('both', 2000, 1000, 2, 'Both ply')], stock: [asStock(item)] });
-    await releasePlan(db, { ...who(), planId: plan.id });
+    await releasePlan({ db, ...who() }, plan.id);
     const used = plan.document.pieces.length;
     const [done, cancelled] = await Promise.allSettled([
-      finishPlan(db, { shopId: fx.mine.id, userId: fx.cutter.id, planId: plan.id, body: { offcuts: [], damaged: [] } }),
-      cancelPlan(db, { ...who(), planId: plan.id }),
+      finishPlan({ db, shopId: fx.mine.id, userId: fx.cutter.id }, plan.id, { offcuts: [], damaged: [] }),
+      cancelPlan({ db, ...who() }, plan.id),
     ]);
     expect([done.status, cancelled.status].filter((s) => s === 'fulfilled')).toHaveLength(1);
     const [after] = await db.select().from(stockItems).where(eq(stockItems.id, item.id));
@@ -280,11 +275,11 @@ describe('a plan from release to done', () => {
   test("another shop can neither release this shop's plan nor see its stock", async () => {
     const item = await sheet({ material: 'Private ply', onHand: 2 });
     const plan = await draftPlan({ parts: [part('p', 1000, 500, 1, 'Private ply')], stock: [asStock(item)] });
-    await expect(releasePlan(db, { shopId: fx.theirs.id, userId: fx.otherOwner.id, planId: plan.id })).rejects.toSatisfy(
+    await expect(releasePlan({ db, shopId: fx.theirs.id, userId: fx.otherOwner.id }, plan.id)).rejects.toSatisfy(
       (e) => e instanceof DomainError && e.kind === 'not-found',
     );
-    expect(await listStock(db, fx.theirs.id)).toEqual([]);
-    expect(await listOffcuts(db, fx.theirs.id)).toEqual([]);
+    expect(await listStock({ db, shopId: fx.theirs.id })).toEqual([]);
+    expect(await listOffcuts({ db, shopId: fx.theirs.id })).toEqual([]);
   });
 });
 
@@ -309,7 +304,7 @@ describe('the plan routes', () => {
   test('a cutter finishing a plan cannot set its cost: the field is refused and the cost stays the plan’s own', async () => {
     const item = await sheet({ material: 'Cost ply', onHand: 2, costCents: 7000 });
     const plan = await draftPlan({ parts: [part('k', 1000, 500, 1, 'Cost ply')], stock: [asStock(item)] });
-    await releasePlan(db, { ...who(), planId: plan.id });
+    await releasePlan({ db, ...who() }, plan.id);
     const refused = await call(doneRoute, plan.id, fx.cutter, { costCents: 1, offcuts: [], damaged: [] });
     expect(refused.status).toBe(422);
     const ok = await call(doneRoute, plan.id, fx.cutter, { offcuts: [], damaged: [] });

@@ -38,7 +38,7 @@ afterAll(() => handle.close());
 
 describe('a plan nested on the shop’s saws', () => {
   test('is judged against the saws’ profiles and keeps them: every step names the saw it is made on', async () => {
-    const [table, track] = await listSaws(handle.db, shopId);
+    const [table, track] = await listSaws({ db: handle.db, shopId });
     const { body: offered } = await call(nestRequestRoute.GET, `/api/jobs/${jobId}/nest-request`, jobId, estimator);
     const stockIds = offered.stock.map((s: { id: string }) => s.id);
     const { updatedAt: _a, ...saw } = table;
@@ -61,7 +61,7 @@ describe('a plan nested on the shop’s saws', () => {
   });
 
   test('a plan nested without the breakdown saw is refused for the saw alone when it asks more than the saw can do (422)', async () => {
-    const [table, track] = await listSaws(handle.db, shopId);
+    const [table, track] = await listSaws({ db: handle.db, shopId });
     const { body: offered } = await call(nestRequestRoute.GET, `/api/jobs/${jobId}/nest-request`, jobId, estimator);
     const stockIds = offered.stock.map((s: { id: string }) => s.id);
     const { updatedAt: _a, ...saw } = table;

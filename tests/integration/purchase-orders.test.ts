@@ -74,8 +74,8 @@ describe('purchase orders from the low stock', () => {
     const mdf = await size(shop.id, { supplier: 'Hollow Creek Supply', onHand: 2, lowStockAt: 3, costCents: 3400 }); // 6 − 2 = 4
     const birch = await size(shop.id, { supplier: 'Cedar Run Plywood', onHand: 8, reserved: 6, lowStockAt: 3, costCents: 8900 }); // 2 free → 6 − 2 = 4
     await size(shop.id, { supplier: 'Cedar Run Plywood', onHand: 9, lowStockAt: 3 }); // not low
-    const ids = await createFromLowStock(db, shop.id, owner.id);
-    const orders = await Promise.all(ids.map((id) => getPurchaseOrder(db, shop.id, id)));
+    const ids = await createFromLowStock({ db, shopId: shop.id, userId: owner.id });
+    const orders = await Promise.all(ids.map((id) => getPurchaseOrder({ db, shopId: shop.id }, id)));
     expect(orders.map((o) => [o!.title, o!.supplier, o!.status, o!.source])).toEqual([
       ['PO-0001', 'Cedar Run Plywood', 'draft', 'low-stock'],
       ['PO-0002', 'Hollow Creek Supply', 'draft', 'low-stock'],
@@ -84,8 +84,8 @@ describe('purchase orders from the low stock', () => {
     expect(orders[1]!.lines.map((l) => [l.stockItemId, l.quantity, l.totalCents])).toEqual([[mdf.id, 4, 13600]]);
     expect(orders[1]!.totalCents).toBe(13600);
     // Now both are on order: nothing more to order, and the stock room says what is coming.
-    expect(Object.fromEntries(await onOrderQuantities(db, shop.id))).toEqual({ [mdf.id]: 4, [birch.id]: 4 });
-    await expect(createFromLowStock(db, shop.id, owner.id)).rejects.toMatchObject({ kind: 'conflict' });
+    expect(Object.fromEntries(await onOrderQuantities({ db, shopId: shop.id }))).toEqual({ [mdf.id]: 4, [birch.id]: 4 });
+    await expect(createFromLowStock({ db, shopId: shop.id, userId: owner.id })).rejects.toMatchObject({ kind: 'conflict' });
   });
 
   test('numbers are per shop: another shop’s first order is PO-0001 too, and never holds this shop’s sizes', async () => {
@@ -93,13 +93,13 @@ describe('purchase orders from the low stock', () => {
     const b = await freshShop();
     const mine = await size(a.shop.id, { supplier: 'Cedar Run Plywood', onHand: 0, lowStockAt: 2 });
     const theirs = await size(b.shop.id, { supplier: 'Cedar Run Plywood', onHand: 1, lowStockAt: 2 });
-    const [pa] = await createFromLowStock(db, a.shop.id, a.owner.id);
-    const [pb] = await createFromLowStock(db, b.shop.id, b.owner.id);
-    const [oa, ob] = [await getPurchaseOrder(db, a.shop.id, pa), await getPurchaseOrder(db, b.shop.id, pb)];
+    const [pa] = await createFromLowStock({ db, shopId: a.shop.id, userId: a.owner.id });
+    const [pb] = await createFromLowStock({ db, shopId: b.shop.id, userId: b.owner.id });
+    const [oa, ob] = [await getPurchaseOrder({ db, shopId: a.shop.id }, pa), await getPurchaseOrder({ db, shopId: b.shop.id }, pb)];
     expect([oa!.title, ob!.title]).toEqual(['PO-0001', 'PO-0001']);
     expect(oa!.lines.map((l) => l.stockItemId)).toEqual([mine.id]);
     expect(ob!.lines.map((l) => [l.stockItemId, l.quantity])).toEqual([[theirs.id, 3]]);
-    expect(await getPurchaseOrder(db, b.shop.id, pa)).toBeNull();
+    expect(await getPurchaseOrder({ db, shopId: b.shop.id }, pa)).toBeNull();
   });
 
   test('the list route is the shop’s own; a cutter is refused', async () => {
@@ -127,13 +127,13 @@ describe('purchase orders from a plan’s stock to buy', () => {
     const bought = pieces.filter((p) => p.stockId === `buy:${sheet.id}`).length;
     const pulled = pieces.filter((p) => p.stockId === `stock:${sheet.id}`).length;
     expect(bought).toBeGreaterThan(0);
-    const [poId] = await createFromPlan(db, fx.mine.id, fx.estimator.id, planId);
-    const po = await getPurchaseOrder(db, fx.mine.id, poId);
+    const [poId] = await createFromPlan({ db, shopId: fx.mine.id, userId: fx.estimator.id }, planId);
+    const po = await getPurchaseOrder({ db, shopId: fx.mine.id }, poId);
     // The 1 free sheet covers the pulled piece; every bought piece is ordered.
     expect(po!.lines.map((l) => [l.stockItemId, l.quantity, l.unitCostCents])).toEqual([[sheet.id, bought + Math.max(0, pulled - 1), 6000]]);
     expect([po!.supplier, po!.source, po!.planId, po!.planName]).toEqual(['Cedar Run Plywood', 'plan', planId, 'Plan']);
     // Another shop cannot order from this plan.
-    await expect(createFromPlan(db, fx.theirs.id, fx.otherOwner.id, planId)).rejects.toMatchObject({ kind: 'not-found' });
+    await expect(createFromPlan({ db, shopId: fx.theirs.id, userId: fx.otherOwner.id }, planId)).rejects.toMatchObject({ kind: 'not-found' });
   });
 });
 
@@ -153,13 +153,13 @@ describe('a draft, sent, received', () => {
       lowStockAt: 0,
       costCents: 925,
     });
-    const [id] = await createFromLowStock(db, shop.id, owner.id);
+    const [id] = await createFromLowStock({ db, shopId: shop.id, userId: owner.id });
     return { shop, owner, sheet, board, id };
   }
 
   test('lines are edited while a draft (a board priced by the board foot), then kept as sent', async () => {
     const { shop, owner, sheet, board, id } = await draftFor();
-    const po = await updateDraft(db, shop.id, owner.id, id, {
+    const po = await updateDraft({ db, shopId: shop.id, userId: owner.id }, id, {
       supplierEmail: 'orders@cedarrun.example',
       note: 'Back door',
       lines: [
@@ -177,10 +177,10 @@ describe('a draft, sent, received', () => {
     const { shop: other } = await freshShop();
     const foreign = await size(other.id, {});
     await expect(
-      updateDraft(db, shop.id, owner.id, id, { lines: [{ stockItemId: foreign.id, quantity: 1, unitCostCents: 1 }] }),
+      updateDraft({ db, shopId: shop.id, userId: owner.id }, id, { lines: [{ stockItemId: foreign.id, quantity: 1, unitCostCents: 1 }] }),
     ).rejects.toMatchObject({ kind: 'invalid' });
     await sendPurchaseOrder(db, shop.id, owner.id, id);
-    await expect(updateDraft(db, shop.id, owner.id, id, { note: 'Changed' })).rejects.toMatchObject({ kind: 'conflict' });
+    await expect(updateDraft({ db, shopId: shop.id, userId: owner.id }, id, { note: 'Changed' })).rejects.toMatchObject({ kind: 'conflict' });
   });
 
   test('sending queues the mail with the PDF and marks it sent in one transaction; a bad address sends nothing and keeps the draft', async () => {
@@ -188,7 +188,7 @@ describe('a draft, sent, received', () => {
     // An address the outbox refuses (written behind the form's back): the whole send rolls back.
     await db.update(purchaseOrders).set({ supplierEmail: 'not an address' }).where(eq(purchaseOrders.id, id));
     await expect(sendPurchaseOrder(db, shop.id, owner.id, id)).rejects.toThrow();
-    expect((await getPurchaseOrder(db, shop.id, id))!.status).toBe('draft');
+    expect((await getPurchaseOrder({ db, shopId: shop.id }, id))!.status).toBe('draft');
     expect(await db.select().from(mailOutbox).where(eq(mailOutbox.shopId, shop.id))).toEqual([]);
 
     const sent = await sendPurchaseOrder(db, shop.id, owner.id, id, 'orders@cedarrun.example');
@@ -201,32 +201,37 @@ describe('a draft, sent, received', () => {
     expect(Buffer.from(mail.attachments[0].content, 'base64').subarray(0, 5).toString()).toBe('%PDF-');
     // Sent once only; the address is kept for the supplier's next order.
     await expect(sendPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ kind: 'conflict' });
-    const [again] = await createFromLowStock(db, shop.id, owner.id).catch(() => [null]);
+    const [again] = await createFromLowStock({ db, shopId: shop.id, userId: owner.id }).catch(() => [null]);
     expect(again).toBeNull(); // nothing more to order: the sheet is on this order
   });
 
   test('receiving part, then the rest: counts, movements naming the order, statuses, and the ledger still sums', async () => {
     const { shop, owner, sheet, id } = await draftFor();
-    await updateDraft(db, shop.id, owner.id, id, { supplierEmail: 'orders@cedarrun.example' });
+    await updateDraft({ db, shopId: shop.id, userId: owner.id }, id, { supplierEmail: 'orders@cedarrun.example' });
     // A draft is not received against.
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({
+    await expect(
+      receivePurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id, { lines: [], all: true, updateCosts: false }),
+    ).rejects.toMatchObject({
       kind: 'conflict',
     });
     const sent = await sendPurchaseOrder(db, shop.id, owner.id, id);
     const line = sent.lines[0];
     expect(line.quantity).toBe(5); // 2 × 3 − 1
-    const part = await receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: line.id, quantity: 2 }], updateCosts: false });
+    const part = await receivePurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id, {
+      lines: [{ lineId: line.id, quantity: 2 }],
+      updateCosts: false,
+    });
     expect(part.status).toBe('part-received');
     expect(part.lines[0].received).toBe(2);
     expect((await count(sheet.id)).onHand).toBe(3);
     // More than is still to come is refused, with the figures; nothing is written.
     await expect(
-      receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: line.id, quantity: 4 }], updateCosts: false }),
+      receivePurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id, { lines: [{ lineId: line.id, quantity: 4 }], updateCosts: false }),
     ).rejects.toMatchObject({ kind: 'conflict', message: expect.stringContaining('5 ordered and 2 already received, so 3 more can come in, not 4') });
     expect((await count(sheet.id)).onHand).toBe(3);
     // A part-received order is not cancelled.
-    await expect(cancelPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ kind: 'conflict' });
-    const done = await receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false });
+    await expect(cancelPurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id)).rejects.toMatchObject({ kind: 'conflict' });
+    const done = await receivePurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id, { lines: [], all: true, updateCosts: false });
     expect(done.status).toBe('received');
     expect(done.receivedAt).not.toBeNull();
     expect((await count(sheet.id)).onHand).toBe(6);
@@ -238,15 +243,17 @@ describe('a draft, sent, received', () => {
       ['received', 2, 'Received on PO-0001'],
       ['received', 3, 'Received on PO-0001'],
     ]);
-    expect(await ledgerMismatches(db, shop.id)).toEqual([]);
-    await expect(receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [], all: true, updateCosts: false })).rejects.toMatchObject({
+    expect(await ledgerMismatches({ db, shopId: shop.id })).toEqual([]);
+    await expect(
+      receivePurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id, { lines: [], all: true, updateCosts: false }),
+    ).rejects.toMatchObject({
       kind: 'conflict',
     });
   });
 
   test('all or nothing: a receipt with one line too many writes no line, count or movement', async () => {
     const { shop, owner, sheet, board, id } = await draftFor();
-    await updateDraft(db, shop.id, owner.id, id, {
+    await updateDraft({ db, shopId: shop.id, userId: owner.id }, id, {
       supplierEmail: 'o@cedarrun.example',
       lines: [
         { stockItemId: sheet.id, quantity: 5, unitCostCents: 8900 },
@@ -256,7 +263,7 @@ describe('a draft, sent, received', () => {
     const sent = await sendPurchaseOrder(db, shop.id, owner.id, id);
     const [l1, l2] = sent.lines;
     await expect(
-      receivePurchaseOrder(db, shop.id, owner.id, id, {
+      receivePurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id, {
         lines: [
           { lineId: l1.id, quantity: 5 },
           { lineId: l2.id, quantity: 3 },
@@ -267,19 +274,25 @@ describe('a draft, sent, received', () => {
     expect((await count(sheet.id)).onHand).toBe(1);
     expect((await db.select().from(purchaseOrderLines).where(eq(purchaseOrderLines.purchaseOrderId, id))).map((l) => l.received)).toEqual([0, 0]);
     expect(await db.select().from(stockMovements).where(eq(stockMovements.purchaseOrderId, id))).toEqual([]);
-    expect((await getPurchaseOrder(db, shop.id, id))!.status).toBe('sent');
+    expect((await getPurchaseOrder({ db, shopId: shop.id }, id))!.status).toBe('sent');
   });
 
   test('“update the cost” takes the order’s price into the stock room, with the change in the audit log; without it the cost stays', async () => {
     const { shop, owner, sheet, id } = await draftFor({ costCents: 8900 });
-    const draft = await updateDraft(db, shop.id, owner.id, id, {
+    const draft = await updateDraft({ db, shopId: shop.id, userId: owner.id }, id, {
       supplierEmail: 'o@cedarrun.example',
       lines: [{ stockItemId: sheet.id, quantity: 4, unitCostCents: 9350 }],
     });
     await sendPurchaseOrder(db, shop.id, owner.id, id);
-    await receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: draft.lines[0].id, quantity: 1 }], updateCosts: false });
+    await receivePurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id, {
+      lines: [{ lineId: draft.lines[0].id, quantity: 1 }],
+      updateCosts: false,
+    });
     expect((await count(sheet.id)).costCents).toBe(8900);
-    await receivePurchaseOrder(db, shop.id, owner.id, id, { lines: [{ lineId: draft.lines[0].id, quantity: 3 }], updateCosts: true });
+    await receivePurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id, {
+      lines: [{ lineId: draft.lines[0].id, quantity: 3 }],
+      updateCosts: true,
+    });
     expect((await count(sheet.id)).costCents).toBe(9350);
     const audit = await db
       .select()
@@ -290,11 +303,11 @@ describe('a draft, sent, received', () => {
 
   test('a draft or a sent order is cancelled; it then leaves what is on order', async () => {
     const { shop, owner, sheet, id } = await draftFor();
-    expect((await onOrderQuantities(db, shop.id)).get(sheet.id)).toBe(5);
-    const cancelled = await cancelPurchaseOrder(db, shop.id, owner.id, id);
+    expect((await onOrderQuantities({ db, shopId: shop.id })).get(sheet.id)).toBe(5);
+    const cancelled = await cancelPurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id);
     expect(cancelled.status).toBe('cancelled');
-    expect((await onOrderQuantities(db, shop.id)).get(sheet.id)).toBeUndefined();
-    await expect(cancelPurchaseOrder(db, shop.id, owner.id, id)).rejects.toMatchObject({ kind: 'conflict' });
+    expect((await onOrderQuantities({ db, shopId: shop.id })).get(sheet.id)).toBeUndefined();
+    await expect(cancelPurchaseOrder({ db, shopId: shop.id, userId: owner.id }, id)).rejects.toMatchObject({ kind: 'conflict' });
   });
 
   test('through the routes: the estimator may not receive (stock:write); another shop’s owner gets 404; bad input is 422', async () => {

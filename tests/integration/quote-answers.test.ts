@@ -120,7 +120,7 @@ describe('sending a quote', () => {
     try {
       const { revision } = await jobWithDraftQuote(handle.db, fx.mine.id);
       // 2026-12-04 03:30 UTC is 2026-12-03 21:30 CST (UTC−6); 30 days after Dec 3 is Jan 2 (Dec has 31 days: by hand).
-      const sent = await sendRevision(handle.db, fx.mine.id, fx.estimator.id, revision.id, new Date('2026-12-04T03:30:00Z'));
+      const sent = await sendRevision({ db: handle.db, shopId: fx.mine.id, userId: fx.estimator.id }, revision.id, new Date('2026-12-04T03:30:00Z'));
       expect(sent.validUntil).toBe('2027-01-02');
     } finally {
       await handle.db.update(shops).set({ timeZone: 'UTC' }).where(eq(shops.id, fx.mine.id));

@@ -72,7 +72,7 @@ describe('a part damaged at the saw', () => {
 
   test('counts as waste in the yield ledger, shown apart from the saw’s own waste', async () => {
     const { first, damaged } = await cutWithOneDamaged();
-    const ledger = await listYieldLedger(db, fx.mine.id);
+    const ledger = await listYieldLedger({ db, shopId: fx.mine.id });
     const row = ledger.plans.find((p) => p.id === first.id)!;
     const stockArea = first.plan.totals!.stockArea;
     const spoiled = damaged.w * damaged.h;

@@ -188,7 +188,7 @@ describe('yield over time', () => {
   test('another shop’s plans never show, and the materials filter lists only this shop’s', async () => {
     const theirs = await yieldOverTime(db, filter({ shopId: fx.theirs.id }));
     expect(theirs).toEqual([expect.objectContaining({ period: '2026-11-01', stockArea: 2440 * 1220, partArea: 1_000_000 })]);
-    expect(await reportMaterials(db, fx.mine.id)).toEqual(['Birch ply', 'MDF']);
+    expect(await reportMaterials({ db, shopId: fx.mine.id })).toEqual(['Birch ply', 'MDF']);
   });
 });
 

@@ -14,9 +14,7 @@ setUpTwoShopDatabase((app) => ({ db, fx } = app));
 
 const newBoard = () =>
   createStockItem(
-    db,
-    fx.mine.id,
-    fx.owner.id,
+    { db, shopId: fx.mine.id, userId: fx.owner.id },
     stockItemSchema.parse({
       kind: 'board',
       material: 'Cherry',
@@ -65,16 +63,16 @@ describe('PATCH /api/stock/:id', () => {
     expect(audit[0].data).toEqual({ changes: { costCents: { from: 795, to: 850 }, location: { from: 'Lumber rack 3', to: 'Lumber rack 4' } } });
     const moves = await db.select().from(stockMovements).where(eq(stockMovements.stockItemId, board.id));
     expect(moves.map((m) => m.kind)).toEqual(['received']); // the opening count only
-    expect(await ledgerMismatches(db, fx.mine.id)).toEqual([]);
+    expect(await ledgerMismatches({ db, shopId: fx.mine.id })).toEqual([]);
 
-    const [history] = await listDetailChanges(db, fx.mine.id, { stockItemId: board.id });
+    const [history] = await listDetailChanges({ db, shopId: fx.mine.id }, { stockItemId: board.id });
     expect(history).toMatchObject({ who: 'Olu Birch', item: 'Cherry 4/4', changes: { costCents: { from: 795, to: 850 } } });
   });
 
   test('a patch that changes nothing writes no audit row', async () => {
     const board = await newBoard();
     expect((await patch(board.id, { location: 'Lumber rack 3' }, fx.owner)).status).toBe(200);
-    expect(await listDetailChanges(db, fx.mine.id, { stockItemId: board.id })).toEqual([]);
+    expect(await listDetailChanges({ db, shopId: fx.mine.id }, { stockItemId: board.id })).toEqual([]);
   });
 
   test.each([

@@ -16,7 +16,7 @@ const oneSheetEach = (quantity: number) => [{ label: 'Panel', quantity, lengthMm
 
 /** The plan's ledger rows in words, oldest first, as the Stock room's history reads them. */
 async function historyOf(planId: string) {
-  const rows = (await listMovements(db, fx.mine.id)).filter((m) => m.planId === planId).reverse();
+  const rows = (await listMovements({ db, shopId: fx.mine.id })).filter((m) => m.planId === planId).reverse();
   return rows.map((m) => ({ ...describeMovement(m), item: m.stockItemId ? 'sheet' : 'offcut' }));
 }
 
@@ -39,7 +39,7 @@ describe('the stock history of a plan: one row per physical change, saying reser
       expect.objectContaining({ what: 'Cut (was reserved)', onHand: '−1', reserved: '−1' }),
     ]);
     expect(history.some((h) => h.what === 'Reservation given back')).toBe(false);
-    expect(await ledgerMismatches(db, fx.mine.id)).toEqual([]);
+    expect(await ledgerMismatches({ db, shopId: fx.mine.id })).toEqual([]);
   });
 
   test('a cancel gives the reservation back in one row: on hand as it was, free again', async () => {
@@ -53,7 +53,7 @@ describe('the stock history of a plan: one row per physical change, saying reser
       expect.objectContaining({ what: 'Reserved', onHand: '—', reserved: '+2' }),
       expect.objectContaining({ what: 'Reservation given back', onHand: '—', reserved: '−2' }),
     ]);
-    expect(await ledgerMismatches(db, fx.mine.id)).toEqual([]);
+    expect(await ledgerMismatches({ db, shopId: fx.mine.id })).toEqual([]);
   });
 
   test('release, finish and the offcuts it racks keep on hand, reserved and free right, and the ledger sums to them', async () => {
@@ -76,6 +76,6 @@ describe('the stock history of a plan: one row per physical change, saying reser
     );
     expect(rows.filter((r) => r.stockItemId === sheet.id)).toHaveLength(2);
     expect(rows.filter((r) => r.kind === 'offcut-created')).toHaveLength(racked.length);
-    expect(await ledgerMismatches(db, fx.mine.id)).toEqual([]);
+    expect(await ledgerMismatches({ db, shopId: fx.mine.id })).toEqual([]);
   });
 });

@@ -42,14 +42,12 @@ beforeAll(async () => {
 afterAll(() => handle.close());
 
 async function expectLedgerMatches(shopId: string) {
-  expect(await ledgerMismatches(db, shopId)).toEqual([]);
+  expect(await ledgerMismatches({ db, shopId })).toEqual([]);
 }
 
 const newSheet = (over: Partial<Parameters<typeof stockItemSchema.parse>[0]> = {}) =>
   createStockItem(
-    db,
-    fx.mine.id,
-    fx.owner.id,
+    { db, shopId: fx.mine.id, userId: fx.owner.id },
     stockItemSchema.parse({
       kind: 'sheet',
       material: 'Test ply',
@@ -74,11 +72,11 @@ describe('the demo shop ledger', () => {
       .from(plans)
       .where(and(eq(plans.shopId, demoShop), eq(plans.status, 'released')));
     const document = readPlan(plan.document);
-    const result = await finishPlan(db, { shopId: demoShop, userId: plan.createdBy!, planId: plan.id, body: { offcuts: [], damaged: [] } });
+    const result = await finishPlan({ db, shopId: demoShop, userId: plan.createdBy! }, plan.id, { offcuts: [], damaged: [] });
     expect(result.offcuts.length).toBe(document.pieces.reduce((n, p) => n + (p.offcuts?.length ?? 0), 0));
-    expect((await listOffcuts(db, demoShop)).filter((o) => o.sourcePlanId === plan.id)).toHaveLength(result.offcuts.length);
+    expect((await listOffcuts({ db, shopId: demoShop })).filter((o) => o.sourcePlanId === plan.id)).toHaveLength(result.offcuts.length);
     await expectLedgerMatches(demoShop);
-    const ledger = await listYieldLedger(db, demoShop);
+    const ledger = await listYieldLedger({ db, shopId: demoShop });
     // The ledger also holds the demo's past jobs; the kitchen plan is the one finished now, so the newest.
     expect(ledger.plans.filter((p) => p.id === plan.id)).toEqual([
       expect.objectContaining({ offcutsRacked: result.offcuts.length, yieldRatio: expect.closeTo(document.totals!.yield, 9) }),
@@ -93,9 +91,9 @@ describe('the demo shop ledger', () => {
 describe('counts in the stock room', () => {
   test('a count changed behind the ledger’s back is reported as a mismatch', async () => {
     const item = await newSheet({ material: 'Sneaky ply', onHand: 3 });
-    expect(await ledgerMismatches(db, fx.mine.id)).toEqual([]);
+    expect(await ledgerMismatches({ db, shopId: fx.mine.id })).toEqual([]);
     await db.update(stockItems).set({ onHand: 5 }).where(eq(stockItems.id, item.id));
-    expect(await ledgerMismatches(db, fx.mine.id)).toEqual([
+    expect(await ledgerMismatches({ db, shopId: fx.mine.id })).toEqual([
       expect.objectContaining({ stored: { onHand: 5, reserved: 0 }, ledger: { onHand: 3, reserved: 0 } }),
     ]);
     await db.update(stockItems).set({ onHand: 3 }).where(eq(stockItems.id, item.id));
@@ -103,17 +101,17 @@ describe('counts in the stock room', () => {
 
   test('receiving adds to the count and books a receipt with who did it', async () => {
     const item = await newSheet();
-    await receiveStock(db, fx.mine.id, fx.owner.id, item.id, { quantity: 6, reason: 'Delivery 1182' });
+    await receiveStock({ db, shopId: fx.mine.id, userId: fx.owner.id }, item.id, { quantity: 6, reason: 'Delivery 1182' });
     expect((await db.select().from(stockItems).where(eq(stockItems.id, item.id)))[0].onHand).toBe(10);
-    const [latest] = await listMovements(db, fx.mine.id, { stockItemId: item.id });
+    const [latest] = await listMovements({ db, shopId: fx.mine.id }, { stockItemId: item.id });
     expect(latest).toMatchObject({ kind: 'received', quantity: 6, reason: 'Delivery 1182', who: 'Olu Birch' });
     await expectLedgerMatches(fx.mine.id);
   });
 
   test('an adjustment sets the counted figure and records the difference with its reason', async () => {
     const item = await newSheet({ onHand: 7 });
-    await adjustStock(db, fx.mine.id, fx.owner.id, item.id, { count: 5, reason: 'Counted: two water-damaged' });
-    const [latest] = await listMovements(db, fx.mine.id, { stockItemId: item.id });
+    await adjustStock({ db, shopId: fx.mine.id, userId: fx.owner.id }, item.id, { count: 5, reason: 'Counted: two water-damaged' });
+    const [latest] = await listMovements({ db, shopId: fx.mine.id }, { stockItemId: item.id });
     expect(latest).toMatchObject({ kind: 'adjusted', quantity: -2, reason: 'Counted: two water-damaged' });
     await expectLedgerMatches(fx.mine.id);
   });
@@ -121,33 +119,36 @@ describe('counts in the stock room', () => {
   test('a count below what released plans hold is refused, and the database refuses it too', async () => {
     const item = await newSheet({ onHand: 3 });
     await db.update(stockItems).set({ reserved: 2 }).where(eq(stockItems.id, item.id));
-    await expect(adjustStock(db, fx.mine.id, fx.owner.id, item.id, { count: 1, reason: 'Counted' })).rejects.toMatchObject({ kind: 'conflict' });
+    await expect(adjustStock({ db, shopId: fx.mine.id, userId: fx.owner.id }, item.id, { count: 1, reason: 'Counted' })).rejects.toMatchObject({
+      kind: 'conflict',
+    });
     await expect(db.update(stockItems).set({ onHand: 1 }).where(eq(stockItems.id, item.id))).rejects.toThrow();
     await expect(db.update(stockItems).set({ onHand: -1, reserved: 0 }).where(eq(stockItems.id, item.id))).rejects.toThrow();
     await db.update(stockItems).set({ reserved: 0 }).where(eq(stockItems.id, item.id));
   });
 
   test('an offcut recorded at the saw can be scrapped once, and by no other shop', async () => {
-    const o = await recordOffcut(db, fx.mine.id, fx.cutter.id, {
-      material: 'Test ply',
-      thicknessMm: 18,
-      lengthMm: 700,
-      widthMm: 300,
-      grain: 'along-length',
-      location: 'Bin 2',
-    });
-    await scrapOffcut(db, fx.mine.id, fx.cutter.id, o.id, 'Delaminated');
-    await expect(scrapOffcut(db, fx.mine.id, fx.cutter.id, o.id, 'again')).rejects.toMatchObject({ kind: 'conflict' });
-    expect(await scrapOffcut(db, fx.theirs.id, fx.otherOwner.id, o.id, 'not theirs')).toBeNull();
+    const o = await recordOffcut(
+      { db, shopId: fx.mine.id, userId: fx.cutter.id },
+      {
+        material: 'Test ply',
+        thicknessMm: 18,
+        lengthMm: 700,
+        widthMm: 300,
+        grain: 'along-length',
+        location: 'Bin 2',
+      },
+    );
+    await scrapOffcut({ db, shopId: fx.mine.id, userId: fx.cutter.id }, o.id, 'Delaminated');
+    await expect(scrapOffcut({ db, shopId: fx.mine.id, userId: fx.cutter.id }, o.id, 'again')).rejects.toMatchObject({ kind: 'conflict' });
+    expect(await scrapOffcut({ db, shopId: fx.theirs.id, userId: fx.otherOwner.id }, o.id, 'not theirs')).toBeNull();
     await expectLedgerMatches(fx.mine.id);
   });
 
   test('stock value counts sheets each and boards by the board foot (AHEC: 4/4 × 6″ × 8′ = 4 BF, at $9.25/bf = $37.00)', async () => {
     const { shopId } = { shopId: fx.theirs.id };
     await createStockItem(
-      db,
-      shopId,
-      fx.otherOwner.id,
+      { db, shopId, userId: fx.otherOwner.id },
       stockItemSchema.parse({
         kind: 'board',
         material: 'White oak',
@@ -160,9 +161,7 @@ describe('counts in the stock room', () => {
       }),
     );
     await createStockItem(
-      db,
-      shopId,
-      fx.otherOwner.id,
+      { db, shopId, userId: fx.otherOwner.id },
       stockItemSchema.parse({
         kind: 'sheet',
         material: 'Maple ply',
@@ -174,8 +173,8 @@ describe('counts in the stock room', () => {
         costCents: 9400,
       }),
     );
-    expect((await stockValue(db, shopId)).stockCents).toBe(10 * 3700 + 2 * 9400);
-    expect((await listStock(db, fx.mine.id)).some((i) => i.material === 'White oak')).toBe(false);
+    expect((await stockValue({ db, shopId })).stockCents).toBe(10 * 3700 + 2 * 9400);
+    expect((await listStock({ db, shopId: fx.mine.id })).some((i) => i.material === 'White oak')).toBe(false);
   });
 });
 
@@ -189,14 +188,14 @@ describe('importing stock from CSV', () => {
     const res = await post('all');
     expect(res.status).toBe(422);
     expect((await res.json()).fields.csv[0]).toMatch(/^Line 3: .*material: is empty.*length/);
-    expect(await listStock(db, fx.mine.id, { material: 'Import MDF' })).toEqual([]);
+    expect(await listStock({ db, shopId: fx.mine.id }, { material: 'Import MDF' })).toEqual([]);
   });
 
   test('writes only the valid rows when the user chooses them, each with its opening receipt', async () => {
     const res = await post('valid');
     expect(res.status).toBe(200);
     expect(await res.json()).toMatchObject({ imported: 1, valid: 1, errors: [{ line: 3 }] });
-    const [item] = await listStock(db, fx.mine.id, { material: 'Import MDF' });
+    const [item] = await listStock({ db, shopId: fx.mine.id }, { material: 'Import MDF' });
     expect(item).toMatchObject({ onHand: 3, costCents: 4600 });
     await expectLedgerMatches(fx.mine.id);
   });

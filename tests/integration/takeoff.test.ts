@@ -23,7 +23,7 @@ afterAll(() => handle.close());
 describe('the takeoff', () => {
   test("for the demo kitchen: sheets to pull, their cost, the shop's 15 % allowance once per material, and whether the rack covers it", async () => {
     const [kitchen] = await db.select().from(plans).where(eq(plans.shopId, demoShop));
-    const takeoff = (await getTakeoff(db, demoShop, kitchen.jobId))!;
+    const takeoff = (await getTakeoff({ db, shopId: demoShop }, kitchen.jobId))!;
     expect(takeoff.allowancePercent).toBe(15);
     const lines = [...takeoff.pull, ...takeoff.buy];
     expect(lines.length).toBeGreaterThan(0);
@@ -32,13 +32,13 @@ describe('the takeoff', () => {
     for (const a of takeoff.allowances) expect(a.allowanceCents).toBe(Math.round(a.costCents * 0.15));
     expect(takeoff.totals.costWithAllowanceCents).toBe(takeoff.totals.costCents + takeoff.allowances.reduce((n, a) => n + a.allowanceCents, 0));
     expect(takeoff.totals.costWithAllowanceCents).toBeLessThanOrEqual(Math.round(takeoff.totals.costCents * 1.15) + takeoff.allowances.length);
-    expect(await getTakeoff(db, fx.mine.id, kitchen.jobId)).toBeNull();
+    expect(await getTakeoff({ db, shopId: fx.mine.id }, kitchen.jobId)).toBeNull();
   });
 
   test('each size’s free count is the stock room’s own (on hand − reserved); the plan’s own reservation counts toward cover', async () => {
     const [kitchen] = await db.select().from(plans).where(eq(plans.shopId, demoShop));
-    const takeoff = (await getTakeoff(db, demoShop, kitchen.jobId))!;
-    const rack = await listStock(db, demoShop);
+    const takeoff = (await getTakeoff({ db, shopId: demoShop }, kitchen.jobId))!;
+    const rack = await listStock({ db, shopId: demoShop });
     const sheets = takeoff.pull.filter((l) => l.kind === 'sheet');
     expect(sheets.length).toBeGreaterThan(0);
     for (const line of sheets) {

@@ -14,7 +14,7 @@ export default async function CustomersPage({ searchParams }: { searchParams: Pr
   const user = await requirePageUser('customers:read');
   const raw = (await searchParams).q;
   const q = (Array.isArray(raw) ? raw[0] : (raw ?? '')).slice(0, 120);
-  const customers = await listCustomers(await getDb(), user.shopId, q);
+  const customers = await listCustomers({ db: await getDb(), shopId: user.shopId }, q);
   return (
     <>
       <PageHeader title="Customers" lead="The people and firms your jobs are for, with their jobs and quotes." />

@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { Suspense } from 'react';
@@ -38,7 +39,8 @@ export default async function JobsPage({ searchParams }: { searchParams: Promise
     );
   }
   const db = await getDb();
-  const [settings, initial] = await Promise.all([currentShopSettings(user.shopId), listJobsPage(db, user.shopId, parsed.data)]);
+  const scope = scopeOf(db, user);
+  const [settings, initial] = await Promise.all([currentShopSettings(user.shopId), listJobsPage(scope, parsed.data)]);
   return (
     <>
       <PageHeader title="Jobs" lead={LEAD} />

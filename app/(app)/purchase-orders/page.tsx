@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getDb } from '@/db/client';
@@ -22,11 +23,12 @@ const SOURCE = { plan: 'plan', 'low-stock': 'low stock', manual: 'by hand' } as 
 export default async function PurchaseOrdersPage() {
   const user = await requirePageUser('purchasing:read');
   const db = await getDb();
+  const scope = scopeOf(db, user);
   const [settings, buying, orders, low] = await Promise.all([
-    getShopSettings(db, user.shopId),
-    getBuyingSettings(db, user.shopId),
-    listPurchaseOrders(db, user.shopId),
-    lowStockWithOrders(db, user.shopId),
+    getShopSettings(scope),
+    getBuyingSettings(scope),
+    listPurchaseOrders(scope),
+    lowStockWithOrders(scope),
   ]);
   if (!settings || !buying) return null;
   const money = (m: number) => formatMoney(m, settings.currency);

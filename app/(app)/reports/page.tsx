@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import { getDb } from '@/db/client';
 import { offcutUse, oldOffcuts, reportMaterials, reportSubjects, stockValueReport, yieldOverTime } from '@/db/queries/reports';
@@ -28,7 +29,8 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
   const user = await requirePageUser('quotes:read');
   const seesStock = can(user.role, 'yield:read');
   const db = await getDb();
-  const settings = await getShopSettings(db, user.shopId);
+  const scope = scopeOf(db, user);
+  const settings = await getShopSettings(scope);
   if (!settings) return null;
   const raw = Object.fromEntries(Object.entries(await searchParams).map(([k, v]) => [k, first(v)]));
   const parsed = reportQuerySchema.safeParse(raw);
@@ -48,8 +50,8 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
 
   const none = Promise.resolve([] as never[]);
   const [subjects, materials, yields, offcuts, old, value, quoting] = await Promise.all([
-    reportSubjects(db, user.shopId),
-    seesStock ? reportMaterials(db, user.shopId) : none,
+    reportSubjects(scope),
+    seesStock ? reportMaterials(scope) : none,
     seesStock ? yieldOverTime(db, filter) : none,
     seesStock ? offcutUse(db, filter) : none,
     seesStock

@@ -11,7 +11,7 @@ export const metadata: Metadata = { title: 'Setup cards' };
 
 export default async function SetupCardsPage() {
   const user = await requirePageUser('jobs:read');
-  const settings = await getShopSettings(await getDb(), user.shopId);
+  const settings = await getShopSettings({ db: await getDb(), shopId: user.shopId });
   if (!settings) notFound();
   return (
     <>

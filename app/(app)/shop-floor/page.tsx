@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getDb } from '@/db/client';
@@ -16,16 +17,16 @@ export const metadata: Metadata = { title: 'Shop floor' };
 export default async function ShopFloorPage() {
   const user = await requirePageUser('sawsteps:tick');
   const db = await getDb();
-  const plans = await listPlansByStatus(db, user.shopId, ['released', 'cutting']);
+  const scope = scopeOf(db, user);
+  const plans = await listPlansByStatus(scope, ['released', 'cutting']);
   const ticks = await countStepTicks(
-    db,
-    user.shopId,
+    scope,
     plans.map((p) => p.id),
   );
   // Oldest released work first: the list comes newest-changed first.
   const queue = await Promise.all(
     [...plans].reverse().map(async (p) => {
-      const doc = (await getPlan(db, user.shopId, p.id))?.document;
+      const doc = (await getPlan(scope, p.id))?.document;
       const total = doc?.pieces.reduce((n, piece) => n + (piece.sawOrder?.length ?? 0), 0) ?? 0;
       return { ...p, pieces: doc?.pieces.length ?? 0, total, done: ticks.get(p.id) ?? 0 };
     }),

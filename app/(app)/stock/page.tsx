@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import Link from 'next/link';
@@ -35,15 +36,16 @@ export default async function StockPage({ searchParams }: { searchParams: Promis
   // One size's history: /stock?view=history&item=<id>
   const historyItem = typeof raw.item === 'string' && /^[0-9a-f-]{36}$/.test(raw.item) ? raw.item : undefined;
   const db = await getDb();
+  const scope = scopeOf(db, user);
   const showPrices = can(user.role, 'prices:read');
   const [settings, allItems, items, rack, movements, changes, value] = await Promise.all([
-    getShopSettings(db, user.shopId),
-    listStock(db, user.shopId),
-    view === 'stock' ? listStock(db, user.shopId, filter) : [],
-    view === 'rack' ? listOffcuts(db, user.shopId, filter) : [],
-    view === 'history' ? listMovements(db, user.shopId, { stockItemId: historyItem }) : [],
-    view === 'history' ? listDetailChanges(db, user.shopId, { stockItemId: historyItem }) : [],
-    showPrices ? stockValue(db, user.shopId) : null,
+    getShopSettings(scope),
+    listStock(scope),
+    view === 'stock' ? listStock(scope, filter) : [],
+    view === 'rack' ? listOffcuts(scope, filter) : [],
+    view === 'history' ? listMovements(scope, { stockItemId: historyItem }) : [],
+    view === 'history' ? listDetailChanges(scope, { stockItemId: historyItem }) : [],
+    showPrices ? stockValue(scope) : null,
   ]);
   if (!settings) return null;
   const len = (mm: number) => formatLength(mm, settings.units);

@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import { getDb } from '@/db/client';
 import { getShopSettings } from '@/db/queries/shops';
@@ -15,7 +16,8 @@ export const metadata: Metadata = { title: 'Yield ledger' };
 export default async function YieldPage() {
   const user = await requirePageUser('yield:read');
   const db = await getDb();
-  const [settings, ledger] = await Promise.all([getShopSettings(db, user.shopId), listYieldLedger(db, user.shopId)]);
+  const scope = scopeOf(db, user);
+  const [settings, ledger] = await Promise.all([getShopSettings(scope), listYieldLedger(scope)]);
   if (!settings) return null;
   return (
     <>

@@ -4,11 +4,11 @@ import { route } from '@/server/api/route';
 import { customerInputSchema } from '@/shared/schemas/customer';
 
 // GET /api/customers – the shop's customers by name; ?q= searches name, company, e-mail and phone
-export const GET = route({ permission: 'customers:read', query: z.object({ q: z.string().max(120).default('') }) }, async ({ db, user, query }) =>
-  listCustomers(db, user.shopId, query.q),
+export const GET = route({ permission: 'customers:read', query: z.object({ q: z.string().max(120).default('') }) }, async ({ scope, query }) =>
+  listCustomers(scope, query.q),
 );
 
 // POST /api/customers – add a customer
-export const POST = route({ permission: 'customers:write', body: customerInputSchema, status: 201 }, async ({ db, user, body }) =>
-  createCustomer(db, user.shopId, user.id, body),
+export const POST = route({ permission: 'customers:write', body: customerInputSchema, status: 201 }, async ({ scope, body }) =>
+  createCustomer(scope, body),
 );

@@ -3,16 +3,16 @@ import { route } from '@/server/api/route';
 import { createPurchaseOrdersSchema } from '@/shared/schemas/purchase-order';
 
 // GET /api/purchase-orders – the shop's purchase orders, newest first, with their lines and totals
-export const GET = route({ permission: 'purchasing:read' }, async ({ db, user }) => listPurchaseOrders(db, user.shopId));
+export const GET = route({ permission: 'purchasing:read' }, async ({ scope }) => listPurchaseOrders(scope));
 
 // POST /api/purchase-orders – drafts from a plan's stock to buy or from the sizes running low (one per supplier), or an empty one
-export const POST = route({ permission: 'purchasing:write', body: createPurchaseOrdersSchema, status: 201 }, async ({ db, user, body }) => {
+export const POST = route({ permission: 'purchasing:write', body: createPurchaseOrdersSchema, status: 201 }, async ({ scope, body }) => {
   const ids =
     body.from === 'plan'
-      ? await createFromPlan(db, user.shopId, user.id, body.planId)
+      ? await createFromPlan(scope, body.planId)
       : body.from === 'low-stock'
-        ? await createFromLowStock(db, user.shopId, user.id)
-        : await createManual(db, user.shopId, user.id, body.supplier);
-  const orders = await Promise.all(ids.map((id) => getPurchaseOrder(db, user.shopId, id)));
+        ? await createFromLowStock(scope)
+        : await createManual(scope, body.supplier);
+  const orders = await Promise.all(ids.map((id) => getPurchaseOrder(scope, id)));
   return { orders };
 });

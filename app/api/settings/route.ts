@@ -4,11 +4,11 @@ import { route } from '@/server/api/route';
 import { shopSettingsPatchSchema } from '@/shared/schemas/shop';
 
 // GET /api/settings – the shop's units and cutting defaults
-export const GET = route({ permission: 'settings:read' }, async ({ db, user }) => {
-  return (await getShopSettings(db, user.shopId)) ?? Promise.reject(notFound('The shop'));
+export const GET = route({ permission: 'settings:read' }, async ({ scope }) => {
+  return (await getShopSettings(scope)) ?? Promise.reject(notFound('The shop'));
 });
 
 // PATCH /api/settings – change units, kerf, trim, minimum offcut, waste allowance
-export const PATCH = route({ permission: 'settings:write', body: shopSettingsPatchSchema }, async ({ db, user, body }) =>
-  updateShopSettings(db, user.shopId, user.id, body),
+export const PATCH = route({ permission: 'settings:write', body: shopSettingsPatchSchema }, async ({ scope, body }) =>
+  updateShopSettings(scope, body),
 );

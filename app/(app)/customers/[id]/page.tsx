@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
@@ -20,9 +21,10 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
   const db = await getDb();
-  const customer = await getCustomer(db, user.shopId, id.data);
+  const scope = scopeOf(db, user);
+  const customer = await getCustomer(scope, id.data);
   if (!customer) notFound();
-  const quotes = can(user.role, 'quotes:read') ? await listCustomerQuotes(db, user.shopId, customer.id) : [];
+  const quotes = can(user.role, 'quotes:read') ? await listCustomerQuotes(scope, customer.id) : [];
   const { jobs, ...details } = customer;
   const lines: [string, string][] = [
     ['Company', customer.company],

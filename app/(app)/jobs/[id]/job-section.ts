@@ -13,7 +13,7 @@ export async function jobSection(params: Promise<{ id: string }>, permission: Pe
   const user = await requirePageUser(permission);
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const shop = await getShopSettings(await getDb(), user.shopId);
+  const shop = await getShopSettings({ db: await getDb(), shopId: user.shopId });
   if (!shop) notFound();
   return { user, jobId: id.data, shop };
 }

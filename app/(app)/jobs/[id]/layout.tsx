@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import type { ReactNode } from 'react';
@@ -18,9 +19,10 @@ export default async function JobLayout({ children, params }: { children: ReactN
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
   const db = await getDb();
-  const job = await getJob(db, user.shopId, id.data);
+  const scope = scopeOf(db, user);
+  const job = await getJob(scope, id.data);
   if (!job) notFound();
-  const edit = can(user.role, 'jobs:write') ? await jobEditOptions(db, user.shopId, job.id, user.role) : null;
+  const edit = can(user.role, 'jobs:write') ? await jobEditOptions(scope, job.id, user.role) : null;
   return (
     <div>
       <Link href="/jobs" className="text-sm text-graphite-mute print:hidden">

@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import Link from 'next/link';
@@ -21,9 +22,10 @@ export default async function PartPage({ params, searchParams }: { params: Promi
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
   const db = await getDb();
+  const scope = scopeOf(db, user);
   const [data, settings] = await Promise.all([
     getPartPage(db, user.shopId, id.data, { drafts: can(user.role, 'plans:write') }),
-    getShopSettings(db, user.shopId),
+    getShopSettings(scope),
   ]);
   if (!data || !settings) notFound();
   const { plan: planId, instance } = query.parse(await searchParams);

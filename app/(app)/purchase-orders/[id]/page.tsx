@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
@@ -22,9 +23,10 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
   const db = await getDb();
+  const scope = scopeOf(db, user);
   const [settings, order, items] = await Promise.all([
-    getShopSettings(db, user.shopId),
-    getPurchaseOrder(db, user.shopId, id.data),
+    getShopSettings(scope),
+    getPurchaseOrder(scope, id.data),
     db
       .select()
       .from(stockItems)

@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
@@ -18,8 +19,9 @@ export default async function CuttingPage({ params }: { params: Promise<{ id: st
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
   const db = await getDb();
+  const scope = scopeOf(db, user);
   // The shop floor shows released work only, whoever is looking.
-  const [order, ticks] = await Promise.all([getSawOrder(db, user.shopId, id.data, { drafts: false }), getStepTicks(db, user.shopId, id.data)]);
+  const [order, ticks] = await Promise.all([getSawOrder(scope, id.data, { drafts: false }), getStepTicks(scope, id.data)]);
   if (!order || !ticks) notFound();
   const atTheSaw = order.status === 'released' || order.status === 'cutting';
 

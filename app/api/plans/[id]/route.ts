@@ -10,15 +10,15 @@ import { planSchema } from '@/shared/schemas/nesting';
 import { planUpdateSchema } from '@/shared/schemas/plan-save';
 
 // GET /api/plans/:id – a plan with its request and document (drafts only for those who may edit; prices only for those allowed)
-export const GET = route({ permission: 'plans:read', params: idParams }, async ({ db, user, params }) => {
+export const GET = route({ permission: 'plans:read', params: idParams }, async ({ scope, user, params }) => {
   // Those who see prices get the stored JSON as it is (checked when it was written); the rest, and a document of an
   // older version, go the long way: read, migrated, checked, prices taken out.
   if (can(user.role, 'prices:read')) {
-    const stored = await getPlanAsJson(db, user.shopId, params.id);
+    const stored = await getPlanAsJson(scope, params.id);
     if (!stored || (stored !== 'older' && stored.status === 'draft' && !can(user.role, 'plans:write'))) throw notFound('That plan');
     if (stored !== 'older') return new Response(stored.json, { headers: { 'content-type': 'application/json' } });
   }
-  const plan = await getPlan(db, user.shopId, params.id);
+  const plan = await getPlan(scope, params.id);
   if (!plan || (plan.status === 'draft' && !can(user.role, 'plans:write'))) throw notFound('That plan');
   const body = {
     id: plan.id,
@@ -36,8 +36,8 @@ export const GET = route({ permission: 'plans:read', params: idParams }, async (
 });
 
 // PUT /api/plans/:id – store an edited draft: judged with validatePlan, then its cuts rebuilt with rebuildCuts
-export const PUT = route({ permission: 'plans:write', params: idParams, body: planUpdateSchema }, async ({ db, user, params, body }) => {
-  const saved = await getPlan(db, user.shopId, params.id);
+export const PUT = route({ permission: 'plans:write', params: idParams, body: planUpdateSchema }, async ({ scope, db, user, params, body }) => {
+  const saved = await getPlan(scope, params.id);
   if (!saved) throw notFound('That plan');
   if (saved.status !== 'draft') throw conflict(`This plan is ${saved.status}; only a draft can be edited.`);
   const request = saved.request;
@@ -46,10 +46,7 @@ export const PUT = route({ permission: 'plans:write', params: idParams, body: pl
   if (!judged.ok) throw invalid('The layout breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
   // Tree, saw order, leftovers and figures are made afresh here, whatever the bench sent.
   const plan = planSchema.parse(rebuildCuts(request, judged.plan));
-  const result = await updateDraftPlan(db, {
-    shopId: user.shopId,
-    planId: params.id,
-    userId: user.id,
+  const result = await updateDraftPlan({ db, shopId: user.shopId, userId: user.id }, params.id, {
     plan,
     name: body.name,
     baseUpdatedAt: body.baseUpdatedAt,

@@ -4,11 +4,11 @@ import { idParams, route } from '@/server/api/route';
 import { purchaseOrderPatchSchema } from '@/shared/schemas/purchase-order';
 
 // GET /api/purchase-orders/:id – one purchase order with its lines, what has arrived and its total
-export const GET = route({ permission: 'purchasing:read', params: idParams }, async ({ db, user, params }) => {
-  return (await getPurchaseOrder(db, user.shopId, params.id)) ?? Promise.reject(notFound('That purchase order'));
+export const GET = route({ permission: 'purchasing:read', params: idParams }, async ({ scope, params }) => {
+  return (await getPurchaseOrder(scope, params.id)) ?? Promise.reject(notFound('That purchase order'));
 });
 
 // PATCH /api/purchase-orders/:id – change a draft: supplier, its e-mail address, the note, the lines
-export const PATCH = route({ permission: 'purchasing:write', params: idParams, body: purchaseOrderPatchSchema }, async ({ db, user, params, body }) =>
-  updateDraft(db, user.shopId, user.id, params.id, body),
+export const PATCH = route({ permission: 'purchasing:write', params: idParams, body: purchaseOrderPatchSchema }, async ({ scope, params, body }) =>
+  updateDraft(scope, params.id, body),
 );

@@ -4,12 +4,12 @@ import { idParams, route } from '@/server/api/route';
 import { sawSchema } from '@/shared/schemas/saw';
 
 // PUT /api/saws/:id – change a saw (owner); saved plans keep the profile they were nested with
-export const PUT = route({ permission: 'settings:write', params: idParams, body: sawSchema }, async ({ db, user, params, body }) => {
-  return (await updateSaw(db, user.shopId, user.id, params.id, body)) ?? Promise.reject(notFound('That saw'));
+export const PUT = route({ permission: 'settings:write', params: idParams, body: sawSchema }, async ({ scope, params, body }) => {
+  return (await updateSaw(scope, params.id, body)) ?? Promise.reject(notFound('That saw'));
 });
 
 // DELETE /api/saws/:id – delete a saw (owner); saved plans keep its profile
-export const DELETE = route({ permission: 'settings:write', params: idParams }, async ({ db, user, params }) => {
-  if (!(await deleteSaw(db, user.shopId, user.id, params.id))) throw notFound('That saw');
+export const DELETE = route({ permission: 'settings:write', params: idParams }, async ({ scope, params }) => {
+  if (!(await deleteSaw(scope, params.id))) throw notFound('That saw');
   return { ok: true };
 });

@@ -4,11 +4,11 @@ import { route } from '@/server/api/route';
 import { pricingSettingsSchema } from '@/shared/schemas/pricing';
 
 // GET /api/settings/pricing – hourly rates, labour minutes, markups, tax, deposit, validity, terms, offcut valuation (prices: never the cutter)
-export const GET = route({ permission: 'prices:read' }, async ({ db, user }) => {
-  return (await getPricing(db, user.shopId)) ?? Promise.reject(notFound('The shop'));
+export const GET = route({ permission: 'prices:read' }, async ({ scope }) => {
+  return (await getPricing(scope)) ?? Promise.reject(notFound('The shop'));
 });
 
 // PUT /api/settings/pricing – replace the shop's pricing settings (owner)
-export const PUT = route({ permission: 'settings:write', body: pricingSettingsSchema }, async ({ db, user, body }) => {
-  return (await setPricing(db, user.shopId, user.id, body)) ?? Promise.reject(notFound('The shop'));
+export const PUT = route({ permission: 'settings:write', body: pricingSettingsSchema }, async ({ scope, body }) => {
+  return (await setPricing(scope, body)) ?? Promise.reject(notFound('The shop'));
 });

@@ -7,8 +7,8 @@ import { importStockSchema } from '@/shared/schemas/stock';
 import { shopLengthUnit } from '@/shared/schemas/units';
 
 // POST /api/stock/import – check a stock CSV row by row; write all rows (only if every one is valid) or only the valid ones
-export const POST = route({ permission: 'stock:write', body: importStockSchema }, async ({ db, user, body }) => {
-  const settings = await getShopSettings(db, user.shopId);
+export const POST = route({ permission: 'stock:write', body: importStockSchema }, async ({ scope, body }) => {
+  const settings = await getShopSettings(scope);
   const result = await checkStockCsv(body.csv, settings ? shopLengthUnit(settings.units) : 'mm');
   if (result.fileErrors.length) throw invalid(result.fileErrors.join(' '), { csv: result.fileErrors });
   const summary = { valid: result.rows.length, errors: result.errors, rows: result.rows };
@@ -22,9 +22,7 @@ export const POST = route({ permission: 'stock:write', body: importStockSchema }
     );
   }
   const written = await importStock(
-    db,
-    user.shopId,
-    user.id,
+    scope,
     result.rows.map((r) => r.item),
   );
   return { ...summary, imported: written.length };

@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getDb } from '@/db/client';
@@ -15,7 +16,8 @@ export const metadata: Metadata = { title: 'Quotes' };
 export default async function JobQuotesPage({ params }: { params: Promise<{ id: string }> }) {
   const { user, jobId } = await jobSection(params, 'quotes:read');
   const db = await getDb();
-  const [revisions, plans] = await Promise.all([listJobQuotes(db, user.shopId, jobId), takeoffPlans(db, user.shopId, jobId)]);
+  const scope = scopeOf(db, user);
+  const [revisions, plans] = await Promise.all([listJobQuotes(scope, jobId), takeoffPlans(scope, jobId)]);
   return (
     <div>
       <p className="mb-4 max-w-3xl text-sm text-graphite-mute">

@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { OrderFromPlanButton } from '@/components/buying/make-orders';
@@ -26,10 +27,11 @@ export default async function TakeoffPage({ params, searchParams }: { params: Pr
   if (!id.success) notFound();
   const chosen = z.uuid().safeParse((await searchParams).plan);
   const db = await getDb();
+  const scope = scopeOf(db, user);
   const [takeoff, settings, choices] = await Promise.all([
-    getTakeoff(db, user.shopId, id.data, chosen.success ? chosen.data : undefined),
-    getShopSettings(db, user.shopId),
-    takeoffPlans(db, user.shopId, id.data),
+    getTakeoff(scope, id.data, chosen.success ? chosen.data : undefined),
+    getShopSettings(scope),
+    takeoffPlans(scope, id.data),
   ]);
   if (!settings) notFound();
   if (!takeoff) {

@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import Link from 'next/link';
@@ -24,7 +25,8 @@ export default async function FinishPlanPage({ params }: { params: Promise<{ id:
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
   const db = await getDb();
-  const [plan, settings] = await Promise.all([getPlan(db, user.shopId, id.data), getShopSettings(db, user.shopId)]);
+  const scope = scopeOf(db, user);
+  const [plan, settings] = await Promise.all([getPlan(scope, id.data), getShopSettings(scope)]);
   // Drafts exist only for people who may edit plans, as in the API (GET /api/plans/:id).
   if (!plan || !settings || (plan.status === 'draft' && !can(user.role, 'plans:write'))) notFound();
   const [job] = await db.select({ name: jobs.name }).from(jobs).where(eq(jobs.id, plan.jobId));

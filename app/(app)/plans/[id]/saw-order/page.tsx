@@ -19,7 +19,7 @@ export default async function SawOrderPage({ params }: { params: Promise<{ id: s
   const user = await requirePageUser('plans:read');
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const order = await getSawOrder(await getDb(), user.shopId, id.data, { drafts: can(user.role, 'plans:write') });
+  const order = await getSawOrder({ db: await getDb(), shopId: user.shopId }, id.data, { drafts: can(user.role, 'plans:write') });
   if (!order) notFound();
   const views = pieceViews(order.document.pieces, order.units, order.kerf);
   const cuts = views.reduce((n, v) => n + v.steps.length, 0);

@@ -20,7 +20,7 @@ export default async function PartTagsPage({ params, searchParams }: { params: P
   const user = await requirePageUser('plans:read');
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const order = await getSawOrder(await getDb(), user.shopId, id.data, { drafts: can(user.role, 'plans:write') });
+  const order = await getSawOrder({ db: await getDb(), shopId: user.shopId }, id.data, { drafts: can(user.role, 'plans:write') });
   if (!order) notFound();
   const sheet = labelSheet((await searchParams).sheet);
   const origin = siteOrigin(await headers(), process.env.NEXTAUTH_URL);

@@ -6,16 +6,16 @@ import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { sizeOrThrow } from './size-or-throw';
 
 // GET /api/jobs/:id/drawer-schedules – the job's drawer schedules with their inputs
-export const GET = route({ permission: 'jobs:read', params: idParams }, async ({ db, user, params }) => {
-  if (!(await jobInShop(db, user.shopId, params.id))) throw notFound('That job');
-  return listDrawerSchedules(db, user.shopId, params.id);
+export const GET = route({ permission: 'jobs:read', params: idParams }, async ({ scope, params }) => {
+  if (!(await jobInShop(scope, params.id))) throw notFound('That job');
+  return listDrawerSchedules(scope, params.id);
 });
 
 // POST /api/jobs/:id/drawer-schedules – add a schedule and its parts to the cut list, in one transaction
 export const POST = route(
   { permission: 'cutlist:write', params: idParams, body: drawerScheduleSchema, status: 201 },
-  async ({ db, user, params, body }) => {
+  async ({ scope, db, user, params, body }) => {
     const parts = await sizeOrThrow(db, user.shopId, body);
-    return (await saveDrawerSchedule(db, user.shopId, user.id, params.id, null, body, parts)) ?? Promise.reject(notFound('That job'));
+    return (await saveDrawerSchedule(scope, params.id, null, body, parts)) ?? Promise.reject(notFound('That job'));
   },
 );

@@ -12,7 +12,7 @@ import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
  * impossible.
  */
 export async function sizeOrThrow(db: Db, shopId: string, schedule: DrawerSchedule): Promise<DrawerPart[]> {
-  const shop = await getShopSettings(db, shopId);
+  const shop = await getShopSettings({ db, shopId });
   const sized = sizeDrawerSchedule(
     schedule,
     shop ? { lengthText: (mm) => formatLength(mm, shop.units), exactText: (mm) => exactLengthText(mm, shop.units) } : {},

@@ -8,7 +8,7 @@ import { z } from 'zod';
 const query = z.object({ for: nestForSchema.default('cut-list') });
 
 // GET /api/jobs/:id/nest-request – the job's parts (or, with ?for=recuts, only its open re-cuts) and the stock on offer, with the shop's settings, for the worker
-export const GET = route({ permission: 'nest:run', params: idParams, query }, async ({ db, user, params, query }) => {
-  if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
-  return buildNestRequest(db, user.shopId, params.id, {}, query.for);
+export const GET = route({ permission: 'nest:run', params: idParams, query }, async ({ scope, params, query }) => {
+  if (!(await getJob(scope, params.id))) throw notFound('That job');
+  return buildNestRequest(scope, params.id, {}, query.for);
 });

@@ -11,9 +11,9 @@ import { planCreateSchema } from '@/shared/schemas/plan-save';
 import { requestForChoice } from '@/lib/nesting/request-for-choice';
 
 // GET /api/jobs/:id/plans – the job's plans with status, yield and cost (drafts and prices only for those allowed)
-export const GET = route({ permission: 'plans:read', params: idParams }, async ({ db, user, params }) => {
-  if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
-  const all = await listJobPlans(db, user.shopId, params.id);
+export const GET = route({ permission: 'plans:read', params: idParams }, async ({ scope, user, params }) => {
+  if (!(await getJob(scope, params.id))) throw notFound('That job');
+  const all = await listJobPlans(scope, params.id);
   const shown = can(user.role, 'plans:write') ? all : all.filter((p) => p.status !== 'draft');
   return can(user.role, 'prices:read') ? shown : withoutPrices(shown);
 });
@@ -21,17 +21,14 @@ export const GET = route({ permission: 'plans:read', params: idParams }, async (
 // POST /api/jobs/:id/plans – save a Nest's plan (of the cut list or of the open re-cuts) as a draft, judged against the request rebuilt from the database
 export const POST = route(
   { permission: 'plans:write', params: idParams, body: planCreateSchema, status: 201 },
-  async ({ db, user, params, body }) => {
-    if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
-    const offered = await buildNestRequest(db, user.shopId, params.id, body.settings, body.for);
+  async ({ scope, db, user, params, body }) => {
+    if (!(await getJob(scope, params.id))) throw notFound('That job');
+    const offered = await buildNestRequest(scope, params.id, body.settings, body.for);
     const request = nestRequestSchema.parse(requestForChoice(offered, { stockIds: body.stockIds }));
     const judged = judgePlan(request, body.plan);
     if (!judged.ok) throw invalid('The plan breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
     if (body.for === 'recuts' && !request.parts.length) throw conflict('This job has no open re-cuts to nest; nothing was saved.');
-    const row = await createDraftPlan(db, {
-      shopId: user.shopId,
-      jobId: params.id,
-      userId: user.id,
+    const row = await createDraftPlan({ db, shopId: user.shopId, userId: user.id }, params.id, {
       name: body.name,
       request,
       plan: judged.plan,

@@ -5,12 +5,12 @@ import { idParams, route } from '@/server/api/route';
 import { newQuoteSchema } from '@/shared/schemas/quote';
 
 // GET /api/jobs/:id/quotes – every revision of the job's quotes, with totals, cost and margin (estimator's view)
-export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ db, user, params }) => {
-  if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
-  return listJobQuotes(db, user.shopId, params.id);
+export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ scope, params }) => {
+  if (!(await getJob(scope, params.id))) throw notFound('That job');
+  return listJobQuotes(scope, params.id);
 });
 
 // POST /api/jobs/:id/quotes – a new quote (next number, rev A) built from the job and one of its plans
-export const POST = route({ permission: 'quotes:write', params: idParams, body: newQuoteSchema, status: 201 }, async ({ db, user, params, body }) =>
-  createQuote(db, user.shopId, user.id, params.id, body.planId),
+export const POST = route({ permission: 'quotes:write', params: idParams, body: newQuoteSchema, status: 201 }, async ({ scope, params, body }) =>
+  createQuote(scope, params.id, body.planId),
 );

@@ -4,7 +4,7 @@ import { notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 
 // GET /api/jobs/:id/recuts – the job's re-cut list: parts damaged at the saw, open ones first, then those cut or cancelled
-export const GET = route({ permission: 'recuts:read', params: idParams }, async ({ db, user, params }) => {
-  if (!(await getJob(db, user.shopId, params.id))) throw notFound('That job');
-  return listRecuts(db, user.shopId, params.id);
+export const GET = route({ permission: 'recuts:read', params: idParams }, async ({ scope, params }) => {
+  if (!(await getJob(scope, params.id))) throw notFound('That job');
+  return listRecuts(scope, params.id);
 });

@@ -4,8 +4,8 @@ import { scrapOffcut } from '@/db/queries/stock';
 import { scrapOffcutSchema } from '@/shared/schemas/stock';
 
 // POST /api/offcuts/:id/scrap – take an available offcut off the rack for good
-export const POST = route({ permission: 'offcuts:record', params: idParams, body: scrapOffcutSchema }, async ({ db, user, params, body }) => {
-  const offcut = await scrapOffcut(db, user.shopId, user.id, params.id, body.reason);
+export const POST = route({ permission: 'offcuts:record', params: idParams, body: scrapOffcutSchema }, async ({ scope, params, body }) => {
+  const offcut = await scrapOffcut(scope, params.id, body.reason);
   if (!offcut) throw notFound('That offcut');
   return offcut;
 });

@@ -6,7 +6,7 @@ import { finishPlanSchema } from '@/shared/schemas/stock';
 
 // POST /api/plans/:id/done – consume the plan's stock, put its offcuts on the rack, record yield, waste and cost
 export const POST = route({ permission: 'plans:finish', params: idParams, body: finishPlanSchema }, async ({ db, user, params, body }) => {
-  const result = await finishPlan(db, { shopId: user.shopId, userId: user.id, planId: params.id, body });
+  const result = await finishPlan({ db, shopId: user.shopId, userId: user.id }, params.id, body);
   // The cost is recorded for the owner's ledger; a cutter's answer leaves it out.
   return can(user.role, 'prices:read') ? result : withoutPrices({ ...result });
 });

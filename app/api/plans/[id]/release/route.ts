@@ -3,5 +3,5 @@ import { releasePlan } from '@/db/queries/plan-lifecycle';
 
 // POST /api/plans/:id/release – reserve exactly the stock the plan uses, all or nothing (409 with the pieces that are gone)
 export const POST = route({ permission: 'plans:release', params: idParams }, async ({ db, user, params }) =>
-  releasePlan(db, { shopId: user.shopId, userId: user.id, planId: params.id }),
+  releasePlan({ db, shopId: user.shopId, userId: user.id }, params.id),
 );

@@ -9,8 +9,8 @@ import { z } from 'zod';
 const pdfQuery = z.object({ page: z.enum(['letter', 'a4']).optional() });
 
 // GET /api/plans/:id/saw-order-pdf?page=letter|a4 – the saw order as a PDF, one page per stock piece
-export const GET = route({ permission: 'plans:read', params: idParams, query: pdfQuery }, async ({ db, user, params, query }) => {
-  const order = await getSawOrder(db, user.shopId, params.id, { drafts: can(user.role, 'plans:write') });
+export const GET = route({ permission: 'plans:read', params: idParams, query: pdfQuery }, async ({ scope, user, params, query }) => {
+  const order = await getSawOrder(scope, params.id, { drafts: can(user.role, 'plans:write') });
   if (!order) throw notFound('That plan');
   const bytes = await sawOrderPdf({
     title: order.job.name,

@@ -5,19 +5,19 @@ import { can } from '@/lib/auth/permissions';
 import { stepRefSchema } from '@/lib/saw-order/step-ref';
 
 // GET /api/plans/:id/steps – the plan's status and its ticked saw-order steps (who and when)
-export const GET = route({ permission: 'plans:read', params: idParams }, async ({ db, user, params }) => {
-  const ticks = await getStepTicks(db, user.shopId, params.id);
+export const GET = route({ permission: 'plans:read', params: idParams }, async ({ scope, user, params }) => {
+  const ticks = await getStepTicks(scope, params.id);
   // Drafts exist only for people who may edit plans, as everywhere else.
   if (!ticks || (ticks.status === 'draft' && !can(user.role, 'plans:write'))) throw notFound('That plan');
   return ticks;
 });
 
 // POST /api/plans/:id/steps – tick a step done (idempotent; the first tick moves a released plan to cutting)
-export const POST = route({ permission: 'sawsteps:tick', params: idParams, body: stepRefSchema }, async ({ db, user, params, body }) => {
-  return tickStep(db, user.shopId, user.id, params.id, body);
+export const POST = route({ permission: 'sawsteps:tick', params: idParams, body: stepRefSchema }, async ({ scope, params, body }) => {
+  return tickStep(scope, params.id, body);
 });
 
 // DELETE /api/plans/:id/steps – take a tick back (body: which piece and step)
-export const DELETE = route({ permission: 'sawsteps:tick', params: idParams, body: stepRefSchema }, async ({ db, user, params, body }) => {
-  return untickStep(db, user.shopId, user.id, params.id, body);
+export const DELETE = route({ permission: 'sawsteps:tick', params: idParams, body: stepRefSchema }, async ({ scope, params, body }) => {
+  return untickStep(scope, params.id, body);
 });

@@ -13,8 +13,8 @@ const sheetIds = LABEL_SHEETS.map((s) => s.id) as [string, ...string[]];
 const tagsQuery = z.object({ sheet: z.enum(sheetIds, { error: `The label sheet is one of: ${sheetIds.join(', ')}.` }).optional() });
 
 // GET /api/plans/:id/tags-pdf?sheet= – part tags as a PDF on a label sheet, one tag per placed part
-export const GET = route({ permission: 'plans:read', params: idParams, query: tagsQuery }, async ({ req, db, user, params, query }) => {
-  const order = await getSawOrder(db, user.shopId, params.id, { drafts: can(user.role, 'plans:write') });
+export const GET = route({ permission: 'plans:read', params: idParams, query: tagsQuery }, async ({ scope, req, user, params, query }) => {
+  const order = await getSawOrder(scope, params.id, { drafts: can(user.role, 'plans:write') });
   if (!order) throw notFound('That plan');
   const origin = siteOrigin(req.headers, process.env.NEXTAUTH_URL);
   const bytes = await tagsPdf({

@@ -2,6 +2,4 @@ import { cancelPurchaseOrder } from '@/db/queries/purchase-orders';
 import { idParams, route } from '@/server/api/route';
 
 // POST /api/purchase-orders/:id/cancel – cancel a draft or a sent order nothing has arrived on
-export const POST = route({ permission: 'purchasing:write', params: idParams }, async ({ db, user, params }) =>
-  cancelPurchaseOrder(db, user.shopId, user.id, params.id),
-);
+export const POST = route({ permission: 'purchasing:write', params: idParams }, async ({ scope, params }) => cancelPurchaseOrder(scope, params.id));

@@ -4,8 +4,8 @@ import { idParams, route } from '@/server/api/route';
 import { renderPurchaseOrder } from '@/server/buying/send';
 
 // GET /api/purchase-orders/:id/pdf – the purchase order as the supplier gets it, as a PDF
-export const GET = route({ permission: 'purchasing:read', params: idParams }, async ({ db, user, params }) => {
-  const po = await getPurchaseOrder(db, user.shopId, params.id);
+export const GET = route({ permission: 'purchasing:read', params: idParams }, async ({ scope, db, user, params }) => {
+  const po = await getPurchaseOrder(scope, params.id);
   if (!po) throw notFound('That purchase order');
   const { bytes, filename } = await renderPurchaseOrder(db, user.shopId, po);
   return new Response(new Uint8Array(bytes), {

@@ -3,6 +3,6 @@ import { idParams, route } from '@/server/api/route';
 import { receivePurchaseOrderSchema } from '@/shared/schemas/purchase-order';
 
 // POST /api/purchase-orders/:id/receive – pieces that arrived go into the stock room (movements name the order); optionally take its prices
-export const POST = route({ permission: 'stock:write', params: idParams, body: receivePurchaseOrderSchema }, async ({ db, user, params, body }) =>
-  receivePurchaseOrder(db, user.shopId, user.id, params.id, body),
+export const POST = route({ permission: 'stock:write', params: idParams, body: receivePurchaseOrderSchema }, async ({ scope, params, body }) =>
+  receivePurchaseOrder(scope, params.id, body),
 );

@@ -9,10 +9,10 @@ import { quotePdf } from '@/lib/quotes/quote-pdf';
 import { pdfFileName } from '@/lib/saw-order/pdf-text';
 
 // GET /api/quotes/:id/pdf – the customer's copy of a quote revision as a PDF (prices only: no cost, margin or hours)
-export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ db, user, params }) => {
-  const revision = await getRevision(db, user.shopId, params.id);
+export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ scope, db, params }) => {
+  const revision = await getRevision(scope, params.id);
   if (!revision) throw notFound('That quote');
-  const [job, shop] = await Promise.all([getJob(db, user.shopId, revision.jobId), getShopSettings(db, user.shopId)]);
+  const [job, shop] = await Promise.all([getJob(scope, revision.jobId), getShopSettings(scope)]);
   if (!job || !shop) throw notFound('That quote');
   const [customer] = job.customerId ? await db.select().from(customers).where(eq(customers.id, job.customerId)) : [];
   const bytes = await quotePdf(quotePdfInput(revision, job, customer ?? null, shop));

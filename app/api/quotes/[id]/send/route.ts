@@ -4,8 +4,8 @@ import { wakeMailSender } from '@/server/mail/service';
 
 // POST /api/quotes/:id/send – e-mail the latest revision to the job's customer (PDF and link to their page), replacing
 // an earlier sent one; the job becomes quoted
-export const POST = route({ permission: 'quotes:write', params: idParams }, async ({ db, user, params }) => {
-  const sent = await sendRevision(db, user.shopId, user.id, params.id);
+export const POST = route({ permission: 'quotes:write', params: idParams }, async ({ scope, params }) => {
+  const sent = await sendRevision(scope, params.id);
   wakeMailSender();
   return sent;
 });

@@ -4,5 +4,5 @@ import { cancelRecutSchema } from '@/shared/schemas/recut';
 
 // POST /api/recuts/:id/cancel – take an open re-cut off its job's list, with the reason (409 for one in a released plan or already closed)
 export const POST = route({ permission: 'recuts:cancel', params: idParams, body: cancelRecutSchema }, async ({ db, user, params, body }) =>
-  cancelRecut(db, { shopId: user.shopId, userId: user.id, id: params.id, reason: body.reason }),
+  cancelRecut({ db, shopId: user.shopId, userId: user.id }, params.id, body.reason),
 );

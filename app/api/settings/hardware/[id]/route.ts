@@ -4,12 +4,12 @@ import { idParams, route } from '@/server/api/route';
 import { hardwareItemSchema } from '@/shared/schemas/pricing';
 
 // PUT /api/settings/hardware/:id – change an item of the price list (owner)
-export const PUT = route({ permission: 'settings:write', params: idParams, body: hardwareItemSchema }, async ({ db, user, params, body }) => {
-  return (await updateHardware(db, user.shopId, user.id, params.id, body)) ?? Promise.reject(notFound('That item'));
+export const PUT = route({ permission: 'settings:write', params: idParams, body: hardwareItemSchema }, async ({ scope, params, body }) => {
+  return (await updateHardware(scope, params.id, body)) ?? Promise.reject(notFound('That item'));
 });
 
 // DELETE /api/settings/hardware/:id – take an item off the price list (owner); quotes keep their copied lines
-export const DELETE = route({ permission: 'settings:write', params: idParams }, async ({ db, user, params }) => {
-  if (!(await deleteHardware(db, user.shopId, user.id, params.id))) throw notFound('That item');
+export const DELETE = route({ permission: 'settings:write', params: idParams }, async ({ scope, params }) => {
+  if (!(await deleteHardware(scope, params.id))) throw notFound('That item');
   return { ok: true };
 });

@@ -4,8 +4,8 @@ import { adjustStock } from '@/db/queries/stock';
 import { adjustStockSchema } from '@/shared/schemas/stock';
 
 // POST /api/stock/:id/adjust – replace the book count with a counted one, with the reason in the ledger
-export const POST = route({ permission: 'stock:write', params: idParams, body: adjustStockSchema }, async ({ db, user, params, body }) => {
-  const item = await adjustStock(db, user.shopId, user.id, params.id, body);
+export const POST = route({ permission: 'stock:write', params: idParams, body: adjustStockSchema }, async ({ scope, params, body }) => {
+  const item = await adjustStock(scope, params.id, body);
   if (!item) throw notFound('That stock item');
   return item;
 });

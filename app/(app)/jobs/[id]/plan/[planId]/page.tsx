@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
@@ -23,7 +24,8 @@ export default async function PlanPage({ params: raw }: { params: Promise<{ id: 
   const parsed = params.safeParse(await raw);
   if (!parsed.success) notFound();
   const db = await getDb();
-  const [plan, shop] = await Promise.all([getPlan(db, user.shopId, parsed.data.planId), getShopSettings(db, user.shopId)]);
+  const scope = scopeOf(db, user);
+  const [plan, shop] = await Promise.all([getPlan(scope, parsed.data.planId), getShopSettings(scope)]);
   const mayEdit = can(user.role, 'plans:write');
   if (!plan || !shop || plan.jobId !== parsed.data.id || (plan.status === 'draft' && !mayEdit)) notFound();
   const showPrices = can(user.role, 'prices:read');

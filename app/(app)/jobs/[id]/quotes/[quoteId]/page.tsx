@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
@@ -21,11 +22,8 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   const quoteId = z.uuid().safeParse((await params).quoteId);
   if (!quoteId.success) notFound();
   const db = await getDb();
-  const [revision, job, hardware] = await Promise.all([
-    getRevision(db, user.shopId, quoteId.data),
-    getJob(db, user.shopId, jobId),
-    listHardware(db, user.shopId),
-  ]);
+  const scope = scopeOf(db, user);
+  const [revision, job, hardware] = await Promise.all([getRevision(scope, quoteId.data), getJob(scope, jobId), listHardware(scope)]);
   if (!revision || !job || revision.jobId !== jobId) notFound();
   const [customer] = job.customerId
     ? await db

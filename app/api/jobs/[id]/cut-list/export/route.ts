@@ -15,10 +15,10 @@ const fileName = (job: string) =>
   }-cut-list.csv`;
 
 // GET /api/jobs/:id/cut-list/export – the cut list as a CSV file in the shop's unit
-export const GET = route({ permission: 'jobs:read', params: idParams }, async ({ db, user, params }) => {
-  const [job, settings] = await Promise.all([getJob(db, user.shopId, params.id), getShopSettings(db, user.shopId)]);
+export const GET = route({ permission: 'jobs:read', params: idParams }, async ({ scope, params }) => {
+  const [job, settings] = await Promise.all([getJob(scope, params.id), getShopSettings(scope)]);
   if (!job || !settings) throw notFound('That job');
-  const csv = cutListCsv(await listJobParts(db, user.shopId, job.id), settings.units);
+  const csv = cutListCsv(await listJobParts(scope, job.id), settings.units);
   // A byte-order mark so spreadsheets open the inch and fraction marks as UTF-8.
   return new Response(`\uFEFF${csv}\r\n`, {
     headers: {

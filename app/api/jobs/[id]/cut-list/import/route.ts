@@ -9,7 +9,7 @@ import { stockOffers } from '@/app/api/materials/stock-offers';
 // POST /api/jobs/:id/cut-list/import – add an upload's rows in one transaction: all of them, or only the valid ones when asked
 export const POST = route(
   { permission: 'cutlist:write', params: idParams, body: cutListImportSchema, status: 201 },
-  async ({ db, user, params, body }) => {
+  async ({ scope, db, user, params, body }) => {
     const report = snapReport(validateUploadRows(body), await stockOffers(db, user.shopId));
     if (report.invalidCount > 0 && body.mode === 'all') {
       const fields: Record<string, string[]> = {};
@@ -23,9 +23,7 @@ export const POST = route(
       );
     }
     const added = await addParts(
-      db,
-      user.shopId,
-      user.id,
+      scope,
       params.id,
       report.valid.map((v) => v.part),
       'upload',

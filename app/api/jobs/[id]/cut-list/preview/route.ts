@@ -8,9 +8,9 @@ import { cutListUploadSchema } from '@/shared/schemas/cut-list-upload';
 import { stockOffers } from '@/app/api/materials/stock-offers';
 
 // POST /api/jobs/:id/cut-list/preview – check every row of an upload and what the stock room has for it; writes nothing
-export const POST = route({ permission: 'cutlist:write', params: idParams, body: cutListUploadSchema }, async ({ db, user, params, body }) => {
-  if (!(await jobInShop(db, user.shopId, params.id))) throw notFound('That job');
-  const [settings, offers] = await Promise.all([getShopSettings(db, user.shopId), stockOffers(db, user.shopId)]);
+export const POST = route({ permission: 'cutlist:write', params: idParams, body: cutListUploadSchema }, async ({ scope, db, user, params, body }) => {
+  if (!(await jobInShop(scope, params.id))) throw notFound('That job');
+  const [settings, offers] = await Promise.all([getShopSettings(scope), stockOffers(db, user.shopId)]);
   if (!settings) throw notFound('The shop');
   const report = snapReport(validateUploadRows(body), offers);
   const warnings = report.valid.flatMap(({ line, part }) => {
