@@ -4,7 +4,7 @@ import { customers, jobs } from '../schema';
 import type { Customer, CustomerInput, CustomerPatch } from '@/shared/schemas/customer';
 import type { JobStatus } from '@/shared/schemas/job';
 import { recordAudit } from './audit';
-import { invalid, conflict } from '@/lib/errors';
+import { invalid, conflict, notFound } from '@/lib/errors';
 
 type CustomerRow = typeof customers.$inferSelect;
 
@@ -48,12 +48,12 @@ export interface CustomerJob {
   updatedAt: string;
 }
 
-export async function getCustomer({ db, shopId }: ShopScope, id: string): Promise<(Customer & { jobs: CustomerJob[] }) | null> {
+export async function getCustomer({ db, shopId }: ShopScope, id: string): Promise<Customer & { jobs: CustomerJob[] }> {
   const [found] = await db
     .select({ row: customers, jobCount })
     .from(customers)
     .where(and(eq(customers.shopId, shopId), eq(customers.id, id)));
-  if (!found) return null;
+  if (!found) throw notFound('That customer');
   const jobRows = await db
     .select({ id: jobs.id, name: jobs.name, status: jobs.status, dueDate: jobs.dueDate, updatedAt: jobs.updatedAt })
     .from(jobs)
@@ -74,43 +74,39 @@ export async function createCustomer({ db, shopId, userId }: Scope, input: Custo
   return toCustomer(row, 0);
 }
 
-export async function updateCustomer({ db, shopId, userId }: Scope, id: string, patch: CustomerPatch): Promise<Customer | null> {
-  const done = await db.transaction(async (tx) => {
+export async function updateCustomer({ db, shopId, userId }: Scope, id: string, patch: CustomerPatch): Promise<Customer> {
+  await db.transaction(async (tx) => {
     const [current] = await tx
       .select()
       .from(customers)
       .where(and(eq(customers.shopId, shopId), eq(customers.id, id)))
       .for('update');
-    if (!current) return false;
+    if (!current) throw notFound('That customer');
     const changes = Object.fromEntries(
       Object.entries(patch)
         .filter(([k, v]) => v !== undefined && v !== current[k as keyof CustomerRow])
         .map(([k, v]) => [k, { from: current[k as keyof CustomerRow], to: v }]),
     );
-    if (!Object.keys(changes).length) return true;
+    if (!Object.keys(changes).length) return;
     await tx
       .update(customers)
       .set({ ...Object.fromEntries(Object.entries(changes).map(([k, c]) => [k, c.to])), updatedAt: new Date() })
       .where(eq(customers.id, id));
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'customer', entityId: id, data: { changes } });
-    return true;
   });
-  if (!done) return null;
-  const found = await getCustomer({ db, shopId }, id);
-  if (!found) return null;
-  const { jobs: _jobs, ...customer } = found;
+  const { jobs: _jobs, ...customer } = await getCustomer({ db, shopId }, id);
   return customer;
 }
 
 /** Deletes a customer no job belongs to; one with jobs is kept (409), so no job loses who it is for. */
-export async function deleteCustomer({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
-  return db.transaction(async (tx) => {
+export async function deleteCustomer({ db, shopId, userId }: Scope, id: string): Promise<void> {
+  await db.transaction(async (tx) => {
     const [current] = await tx
       .select()
       .from(customers)
       .where(and(eq(customers.shopId, shopId), eq(customers.id, id)))
       .for('update');
-    if (!current) return false;
+    if (!current) throw notFound('That customer');
     const [{ n }] = await tx
       .select({ n: sql<number>`count(*)::int` })
       .from(jobs)
@@ -118,7 +114,6 @@ export async function deleteCustomer({ db, shopId, userId }: Scope, id: string):
     if (Number(n) > 0) throw conflict(`${current.name} has ${n} job${Number(n) === 1 ? '' : 's'}: move them to another customer first.`);
     await tx.delete(customers).where(eq(customers.id, id));
     await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'customer', entityId: id, data: { name: current.name } });
-    return true;
   });
 }
 

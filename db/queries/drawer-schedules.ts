@@ -1,10 +1,11 @@
 import type { Scope, ShopScope } from '../scope';
+import { notFound } from '@/lib/errors';
 import { and, asc, count, eq, isNotNull, min, sql } from 'drizzle-orm';
 import { drawerSchedules, parts } from '../schema';
 import type { DrawerPart } from '@/lib/joinery/types';
 import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import { recordAudit } from './audit';
-import { jobInShop, nextSort, touchJob } from './parts';
+import { nextSort, requireJob, touchJob } from './parts';
 
 export interface SavedDrawerSchedule {
   id: string;
@@ -61,7 +62,7 @@ export async function listDrawerSchedules({ db, shopId }: ShopScope, jobId: stri
 
 /**
  * Saves a sized schedule and replaces its cut-list rows in one transaction: the rows of a changed schedule are
- * replaced where they stood in the list, never added twice. Null when the job (or the schedule) is not this shop's.
+ * replaced where they stood in the list, never added twice. Not found when the job (or the schedule) is not this shop's.
  */
 export async function saveDrawerSchedule(
   { db, shopId, userId }: Scope,
@@ -69,9 +70,9 @@ export async function saveDrawerSchedule(
   scheduleId: string | null,
   input: DrawerSchedule,
   sized: readonly DrawerPart[],
-): Promise<SavedDrawerSchedule | null> {
+): Promise<SavedDrawerSchedule> {
   const id = await db.transaction(async (tx) => {
-    if (!(await jobInShop({ db: tx, shopId }, jobId))) return null;
+    await requireJob({ db: tx, shopId }, jobId);
     let id = scheduleId;
     let sort: number;
     if (id) {
@@ -80,7 +81,7 @@ export async function saveDrawerSchedule(
         .set({ label: input.label, input, updatedAt: new Date() })
         .where(and(eq(drawerSchedules.shopId, shopId), eq(drawerSchedules.jobId, jobId), eq(drawerSchedules.id, id)))
         .returning({ id: drawerSchedules.id });
-      if (!updated.length) return null;
+      if (!updated.length) throw notFound('That drawer schedule');
       const [first] = await tx
         .select({ sort: min(parts.sort) })
         .from(parts)
@@ -110,20 +111,20 @@ export async function saveDrawerSchedule(
     });
     return id;
   });
-  if (!id) return null;
-  return (await listDrawerSchedules({ db, shopId }, jobId)).find((s) => s.id === id) ?? null;
+  const saved = (await listDrawerSchedules({ db, shopId }, jobId)).find((s) => s.id === id);
+  if (!saved) throw notFound('That drawer schedule');
+  return saved;
 }
 
 /** Deletes a schedule and every cut-list row it made. */
-export async function deleteDrawerSchedule({ db, shopId, userId }: Scope, jobId: string, scheduleId: string): Promise<boolean> {
-  return db.transaction(async (tx) => {
+export async function deleteDrawerSchedule({ db, shopId, userId }: Scope, jobId: string, scheduleId: string): Promise<void> {
+  await db.transaction(async (tx) => {
     const where = and(eq(drawerSchedules.shopId, shopId), eq(drawerSchedules.jobId, jobId), eq(drawerSchedules.id, scheduleId));
     const [row] = await tx.select({ label: drawerSchedules.label }).from(drawerSchedules).where(where);
-    if (!row) return false;
+    if (!row) throw notFound('That drawer schedule');
     await tx.delete(parts).where(and(eq(parts.shopId, shopId), eq(parts.drawerScheduleId, scheduleId)));
     await tx.delete(drawerSchedules).where(where);
     await touchJob({ db: tx, shopId }, jobId);
     await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'drawer-schedule', entityId: scheduleId, data: row });
-    return true;
   });
 }

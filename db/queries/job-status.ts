@@ -1,5 +1,6 @@
 import type { ShopScope, SystemScope } from '../scope';
 import { and, eq, inArray, sql } from 'drizzle-orm';
+import { notFound } from '@/lib/errors';
 import { jobs, plans, quotePayments, quoteRevisions, recuts } from '../schema';
 import type { Role } from '@/lib/auth/permissions';
 import { followPlans, manualStatusChoices, type JobFacts } from '@/lib/jobs/status';
@@ -49,13 +50,13 @@ export async function jobFacts({ db: tx, shopId }: ShopScope, jobId: string, acc
  * released, ticked, cancelled or finished, a re-cut cancelled, a quote sent, answered or expired, or a deposit paid. Call it inside that change's transaction, after the change. The
  * job row is locked first so two plans finishing at once settle on one answer.
  */
-export async function syncJobStatus({ db: tx, shopId, userId }: SystemScope, jobId: string, cause: string): Promise<JobStatus | null> {
+export async function syncJobStatus({ db: tx, shopId, userId }: SystemScope, jobId: string, cause: string): Promise<JobStatus> {
   const [job] = await tx
     .select({ status: jobs.status, acceptedAt: jobs.acceptedAt })
     .from(jobs)
     .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)))
     .for('update');
-  if (!job) return null;
+  if (!job) throw notFound('That job');
   const next = followPlans(job.status, await jobFacts({ db: tx, shopId }, jobId, job.acceptedAt));
   if (next === job.status) return next;
   await tx.update(jobs).set({ status: next, updatedAt: new Date() }).where(eq(jobs.id, jobId));
@@ -72,7 +73,7 @@ export async function jobEditOptions({ db, shopId }: ShopScope, jobId: string, r
     .select({ status: jobs.status, acceptedAt: jobs.acceptedAt })
     .from(jobs)
     .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
-  if (!job) return null;
+  if (!job) throw notFound('That job');
   const [facts, [history]] = await Promise.all([
     jobFacts({ db, shopId }, jobId, job.acceptedAt),
     db

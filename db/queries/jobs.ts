@@ -9,7 +9,7 @@ import type { JobListPage, JobListQuery, JobSortColumn } from '@/shared/schemas/
 import { recordAudit } from './audit';
 import { resolveCustomer } from './customers';
 import { jobFacts } from './job-status';
-import { DomainError, forbidden } from '@/lib/errors';
+import { DomainError, forbidden, notFound } from '@/lib/errors';
 
 /** Per job: its pieces (quantities summed) and its materials, once each. */
 const partStats = (db: Db, shopId: string) =>
@@ -165,9 +165,10 @@ export async function listJobsPage({ db, shopId }: ShopScope, q: JobListQuery): 
   };
 }
 
-export async function getJob({ db, shopId }: ShopScope, id: string): Promise<JobSummary | null> {
+export async function getJob({ db, shopId }: ShopScope, id: string): Promise<JobSummary> {
   const [row] = await selectSummaries(db, shopId).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
-  return row ? toSummary(row) : null;
+  if (!row) throw notFound('That job');
+  return toSummary(row);
 }
 
 export async function createJob({ db, shopId, userId }: Scope, input: JobInput): Promise<JobSummary> {
@@ -181,7 +182,7 @@ export async function createJob({ db, shopId, userId }: Scope, input: JobInput):
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'job', entityId: row.id, data: { name: input.name } });
     return row.id;
   });
-  return (await getJob({ db, shopId }, id))!;
+  return getJob({ db, shopId }, id);
 }
 
 /** Who is changing a job: the status rules depend on the role. */
@@ -194,14 +195,14 @@ export interface JobEditor {
  * Changes what the patch sends (only fields whose value differs are written; the audit keeps each as from → to). A
  * status set by hand follows the rules of lib/jobs/status.ts for the person's role; marking a job accepted records when.
  */
-export async function updateJob({ db, shopId }: ShopScope, editor: JobEditor, id: string, patch: JobPatch) {
-  const updated = await db.transaction(async (tx) => {
+export async function updateJob({ db, shopId }: ShopScope, editor: JobEditor, id: string, patch: JobPatch): Promise<JobSummary> {
+  await db.transaction(async (tx) => {
     const [job] = await tx
       .select()
       .from(jobs)
       .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)))
       .for('update');
-    if (!job) return false;
+    if (!job) throw notFound('That job');
     const changes: Record<string, { from: unknown; to: unknown }> = {};
     const { customer, ...fields } = patch;
     for (const [field, to] of Object.entries(fields) as [Exclude<keyof JobPatch, 'customer'>, unknown][]) {
@@ -211,7 +212,7 @@ export async function updateJob({ db, shopId }: ShopScope, editor: JobEditor, id
       const customerId = await resolveCustomer({ db: tx, shopId, userId: editor.id }, customer);
       if (customerId !== job.customerId) changes.customerId = { from: job.customerId, to: customerId };
     }
-    if (!Object.keys(changes).length) return true;
+    if (!Object.keys(changes).length) return;
     const set: Partial<typeof jobs.$inferInsert> = Object.fromEntries(Object.entries(changes).map(([f, c]) => [f, c.to]));
     if (patch.status && changes.status) {
       const refused = refuseManualStatus(editor.role, job.status, patch.status, await jobFacts({ db: tx, shopId }, id, job.acceptedAt));
@@ -223,9 +224,8 @@ export async function updateJob({ db, shopId }: ShopScope, editor: JobEditor, id
       .set({ ...set, updatedAt: new Date() })
       .where(eq(jobs.id, id));
     await recordAudit(tx, { shopId, userId: editor.id, action: 'update', entity: 'job', entityId: id, data: { changes } });
-    return true;
   });
-  return updated ? getJob({ db, shopId }, id) : null;
+  return getJob({ db, shopId }, id);
 }
 
 /** A job with history — a plan that was ever released, or stock moved for one of its plans — is archived, not deleted. */
@@ -239,8 +239,8 @@ export class JobHasHistory extends DomainError {
 }
 
 /** Deletes a job with its cut list and draft plans; refuses one with history (JobHasHistory), in the same statement. */
-export async function deleteJob({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
-  return db.transaction(async (tx) => {
+export async function deleteJob({ db, shopId, userId }: Scope, id: string): Promise<void> {
+  await db.transaction(async (tx) => {
     const rows = await tx
       .delete(jobs)
       .where(
@@ -254,13 +254,13 @@ export async function deleteJob({ db, shopId, userId }: Scope, id: string): Prom
       .returning({ name: jobs.name });
     if (rows.length) {
       await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'job', entityId: id, data: rows[0] });
-      return true;
+      return;
     }
     const [kept] = await tx
       .select({ name: jobs.name })
       .from(jobs)
       .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
     if (kept) throw new JobHasHistory(kept.name);
-    return false;
+    throw notFound('That job');
   });
 }

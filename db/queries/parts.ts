@@ -4,7 +4,7 @@ import type { Db } from '../open';
 import { drawerSchedules, jobs, parts } from '../schema';
 import { PART_FIELD_NAMES, SCHEDULE_OWNED_FIELDS, type Part, type PartInput, type PartPatch } from '@/shared/schemas/part';
 import { recordAudit } from './audit';
-import { conflict } from '@/lib/errors';
+import { conflict, notFound } from '@/lib/errors';
 
 type PartRow = typeof parts.$inferSelect;
 
@@ -45,13 +45,13 @@ export async function listJobParts({ db, shopId }: ShopScope, jobId: string): Pr
   return rows.map((r) => ({ ...toPart(r.part), schedule: r.schedule }));
 }
 
-/** True when the job exists in this shop (another shop's job does not, from here). */
-export async function jobInShop({ db, shopId }: ShopScope, jobId: string): Promise<boolean> {
+/** Refuses (not found) a job that is not this shop's: another shop's job does not exist, from here. */
+export async function requireJob({ db, shopId }: ShopScope, jobId: string): Promise<void> {
   const [row] = await db
     .select({ id: jobs.id })
     .from(jobs)
     .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
-  return Boolean(row);
+  if (!row) throw notFound('That job');
 }
 
 /** The next free sort position at the end of a job's cut list. */
@@ -71,15 +71,15 @@ export async function touchJob({ db, shopId }: ShopScope, jobId: string) {
     .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
 }
 
-/** Adds typed or uploaded rows at the end of the cut list (or at a given place: undo), all or none. Null when the job is not this shop's. */
+/** Adds typed or uploaded rows at the end of the cut list (or at a given place: undo), all or none. */
 export async function addParts(
   { db, shopId, userId }: Scope,
   jobId: string,
   inputs: readonly PartInput[],
   source: 'typed' | 'upload',
-): Promise<Part[] | null> {
+): Promise<Part[]> {
   return db.transaction(async (tx) => {
-    if (!(await jobInShop({ db: tx, shopId }, jobId))) return null;
+    await requireJob({ db: tx, shopId }, jobId);
     if (inputs.length === 0) return [];
     const start = await nextSort({ db: tx, shopId }, jobId);
     const rows = await tx
@@ -111,10 +111,10 @@ async function findPart(db: Db, shopId: string, jobId: string, partId: string) {
  * Changes one row. A drawer schedule's row keeps its sizes, material and count in step with the schedule: only its
  * notes may change here (409 otherwise, naming the fields).
  */
-export async function updatePart({ db, shopId, userId }: Scope, jobId: string, partId: string, patch: PartPatch): Promise<Part | null> {
+export async function updatePart({ db, shopId, userId }: Scope, jobId: string, partId: string, patch: PartPatch): Promise<Part> {
   return db.transaction(async (tx) => {
     const row = await findPart(tx, shopId, jobId, partId);
-    if (!row) return null;
+    if (!row) throw notFound('That part');
     if (row.drawerScheduleId) {
       const owned = SCHEDULE_OWNED_FIELDS.filter((f) => patch[f] !== undefined && patch[f] !== row[f]);
       if (owned.length)
@@ -130,14 +130,13 @@ export async function updatePart({ db, shopId, userId }: Scope, jobId: string, p
 }
 
 /** Deletes one typed or uploaded row; a drawer schedule's rows go with their schedule (409). */
-export async function deletePart({ db, shopId, userId }: Scope, jobId: string, partId: string): Promise<boolean> {
-  return db.transaction(async (tx) => {
+export async function deletePart({ db, shopId, userId }: Scope, jobId: string, partId: string): Promise<void> {
+  await db.transaction(async (tx) => {
     const row = await findPart(tx, shopId, jobId, partId);
-    if (!row) return false;
+    if (!row) throw notFound('That part');
     if (row.drawerScheduleId) throw conflict('This row comes from a drawer schedule: delete or change the schedule instead.');
     await tx.delete(parts).where(eq(parts.id, partId));
     await touchJob({ db: tx, shopId }, jobId);
     await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'part', entityId: partId, data: { label: row.label, jobId } });
-    return true;
   });
 }

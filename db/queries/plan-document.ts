@@ -1,6 +1,7 @@
 import type { ShopScope } from '../scope';
 import { and, eq, sql } from 'drizzle-orm';
 import { plans } from '../schema';
+import { notFound } from '@/lib/errors';
 import { readStoredPlan } from '@/lib/nesting/read-plan';
 import { PLAN_VERSION } from '@/shared/schemas/nesting';
 
@@ -14,7 +15,7 @@ export async function getPlan({ db, shopId }: ShopScope, planId: string) {
     .select()
     .from(plans)
     .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
-  if (!row) return null;
+  if (!row) throw notFound('That plan');
   return { ...row, ...readStoredPlan(row) };
 }
 
@@ -23,9 +24,9 @@ export async function getPlan({ db, shopId }: ShopScope, planId: string) {
  * request and document go out as the database holds them, neither parsed nor checked again. Every write checked them
  * against their schemas first (judgePlan, PUT's planSchema.parse), and a document of the current version needs no
  * migration; a 61 kB document cost about 13 ms to parse, check and write out again on each read. `older` for a
- * document of an earlier version (the caller reads it through `getPlan`, which migrates it), null for none.
+ * document of an earlier version (the caller reads it through `getPlan`, which migrates it).
  */
-export async function getPlanAsJson({ db, shopId }: ShopScope, planId: string): Promise<{ status: string; json: string } | 'older' | null> {
+export async function getPlanAsJson({ db, shopId }: ShopScope, planId: string): Promise<{ status: string; json: string } | 'older'> {
   const [row] = await db
     .select({
       id: plans.id,
@@ -42,7 +43,7 @@ export async function getPlanAsJson({ db, shopId }: ShopScope, planId: string): 
     })
     .from(plans)
     .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
-  if (!row) return null;
+  if (!row) throw notFound('That plan');
   if (row.version !== PLAN_VERSION) return 'older';
   const head = JSON.stringify({
     id: row.id,

@@ -3,6 +3,7 @@ import { and, desc, eq } from 'drizzle-orm';
 import { plans } from '../schema';
 import type { NestRequest, Plan } from '@/shared/schemas/nesting';
 import { recordAudit } from './audit';
+import { conflict, notFound } from '@/lib/errors';
 import type { JobPlanSummary } from '@/shared/wire/plans';
 
 /** What a list of a job's plans shows. */
@@ -78,38 +79,37 @@ export async function createDraftPlan(
   });
 }
 
-export type DraftUpdateResult = { ok: true; updatedAt: Date } | { ok: false; reason: 'not-found' | 'not-draft' | 'stale' };
-
 /**
- * Stores an edited document on a draft plan (already judged valid by the caller). Refused when the plan is no
- * longer a draft, or when `baseUpdatedAt` is given and someone saved since.
+ * Stores an edited document on a draft plan (already judged valid by the caller) and answers when. Refused (409)
+ * when the plan is no longer a draft, or when `baseUpdatedAt` is given and someone saved since.
  */
 export async function updateDraftPlan(
   { db, shopId, userId }: Scope,
   planId: string,
   input: { plan: Plan; name?: string; baseUpdatedAt?: string },
-): Promise<DraftUpdateResult> {
+): Promise<{ updatedAt: Date }> {
   return db.transaction(async (tx) => {
     const [row] = await tx
       .select({ status: plans.status, updatedAt: plans.updatedAt })
       .from(plans)
       .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
-    if (!row) return { ok: false, reason: 'not-found' } as const;
-    if (row.status !== 'draft') return { ok: false, reason: 'not-draft' } as const;
-    if (input.baseUpdatedAt && new Date(input.baseUpdatedAt).getTime() !== row.updatedAt.getTime()) return { ok: false, reason: 'stale' } as const;
+    if (!row) throw notFound('That plan');
+    if (row.status !== 'draft') throw conflict('Only a draft plan can be edited.');
+    if (input.baseUpdatedAt && new Date(input.baseUpdatedAt).getTime() !== row.updatedAt.getTime())
+      throw conflict('Someone saved this plan after you opened it; reload to see their changes.');
     const updatedAt = new Date();
     await tx
       .update(plans)
       .set({ document: input.plan, ...figures(input.plan), ...(input.name ? { name: input.name } : {}), updatedAt })
       .where(and(eq(plans.shopId, shopId), eq(plans.id, planId), eq(plans.status, 'draft')));
     await recordAudit(tx, {
-      shopId: shopId,
-      userId: userId,
+      shopId,
+      userId,
       action: 'update',
       entity: 'plan',
       entityId: planId,
       data: { edited: true },
     });
-    return { ok: true, updatedAt } as const;
+    return { updatedAt };
   });
 }

@@ -3,7 +3,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import { hardwareItems, shops } from '../schema';
 import { DEFAULT_PRICING, pricingSettingsSchema, type HardwareItem, type HardwareItemInput, type PricingSettings } from '@/shared/schemas/pricing';
 import { recordAudit } from './audit';
-import { conflict } from '@/lib/errors';
+import { conflict, notFound } from '@/lib/errors';
 
 export interface PricingView {
   currency: string;
@@ -11,14 +11,14 @@ export interface PricingView {
 }
 
 /** The shop's pricing settings; a stored value missing a field (written before it existed) takes the default. */
-export async function getPricing({ db, shopId }: ShopScope): Promise<PricingView | null> {
+export async function getPricing({ db, shopId }: ShopScope): Promise<PricingView> {
   const [row] = await db.select({ currency: shops.currency, pricing: shops.pricing }).from(shops).where(eq(shops.id, shopId));
-  if (!row) return null;
+  if (!row) throw notFound('The shop');
   const merged = pricingSettingsSchema.safeParse({ ...DEFAULT_PRICING, ...row.pricing });
   return { currency: row.currency, pricing: merged.success ? merged.data : DEFAULT_PRICING };
 }
 
-export async function setPricing({ db, shopId, userId }: Scope, pricing: PricingSettings): Promise<PricingView | null> {
+export async function setPricing({ db, shopId, userId }: Scope, pricing: PricingSettings): Promise<PricingView> {
   await db.transaction(async (tx) => {
     await tx.update(shops).set({ pricing }).where(eq(shops.id, shopId));
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'pricing-settings', entityId: shopId, data: pricing });
@@ -52,7 +52,7 @@ export async function createHardware({ db, shopId, userId }: Scope, input: Hardw
   }
 }
 
-export async function updateHardware({ db, shopId, userId }: Scope, id: string, input: HardwareItemInput): Promise<HardwareItem | null> {
+export async function updateHardware({ db, shopId, userId }: Scope, id: string, input: HardwareItemInput): Promise<HardwareItem> {
   try {
     return await db.transaction(async (tx) => {
       const [row] = await tx
@@ -60,7 +60,7 @@ export async function updateHardware({ db, shopId, userId }: Scope, id: string, 
         .set(input)
         .where(and(eq(hardwareItems.shopId, shopId), eq(hardwareItems.id, id)))
         .returning();
-      if (!row) return null;
+      if (!row) throw notFound('That item');
       await recordAudit(tx, { shopId, userId, action: 'update', entity: 'hardware-item', entityId: id, data: input });
       return toItem(row);
     });
@@ -70,13 +70,13 @@ export async function updateHardware({ db, shopId, userId }: Scope, id: string, 
   }
 }
 
-export async function deleteHardware({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
-  return db.transaction(async (tx) => {
+export async function deleteHardware({ db, shopId, userId }: Scope, id: string): Promise<void> {
+  await db.transaction(async (tx) => {
     const rows = await tx
       .delete(hardwareItems)
       .where(and(eq(hardwareItems.shopId, shopId), eq(hardwareItems.id, id)))
       .returning({ name: hardwareItems.name });
-    if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'hardware-item', entityId: id, data: rows[0] });
-    return rows.length > 0;
+    if (!rows.length) throw notFound('That item');
+    await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'hardware-item', entityId: id, data: rows[0] });
   });
 }

@@ -135,13 +135,13 @@ export async function listPurchaseOrders({ db, shopId }: ShopScope): Promise<Pur
   return rows.map((r) => toView({ ...r.order, planName: r.planName, jobId: r.jobId }, lines.get(r.order.id) ?? []));
 }
 
-export async function getPurchaseOrder({ db, shopId }: ShopScope, id: string): Promise<PurchaseOrderView | null> {
+export async function getPurchaseOrder({ db, shopId }: ShopScope, id: string): Promise<PurchaseOrderView> {
   const [r] = await db
     .select(orderColumns)
     .from(purchaseOrders)
     .leftJoin(plans, eq(plans.id, purchaseOrders.planId))
     .where(and(eq(purchaseOrders.shopId, shopId), eq(purchaseOrders.id, id)));
-  if (!r) return null;
+  if (!r) throw notFound('That purchase order');
   const lines = await linesOf(db, shopId, [id]);
   return toView({ ...r.order, planName: r.planName, jobId: r.jobId }, lines.get(id) ?? []);
 }
@@ -330,7 +330,7 @@ export async function updateDraft({ db, shopId, userId }: Scope, id: string, pat
       data: { fields: Object.keys(patch), lines: patch.lines?.length },
     });
   });
-  return (await getPurchaseOrder({ db, shopId }, id))!;
+  return getPurchaseOrder({ db, shopId }, id);
 }
 
 /**
@@ -376,7 +376,7 @@ export async function cancelPurchaseOrder({ db, shopId, userId }: Scope, id: str
     await tx.update(purchaseOrders).set({ status: 'cancelled', cancelledAt: new Date(), updatedAt: new Date() }).where(eq(purchaseOrders.id, id));
     await recordAudit(tx, { shopId, userId, action: 'cancel', entity: 'purchase-order', entityId: id });
   });
-  return (await getPurchaseOrder({ db, shopId }, id))!;
+  return getPurchaseOrder({ db, shopId }, id);
 }
 
 /**
@@ -458,7 +458,7 @@ export async function receivePurchaseOrder(
       data: { lines: wanted, updateCosts: input.updateCosts },
     });
   });
-  return (await getPurchaseOrder({ db, shopId }, id))!;
+  return getPurchaseOrder({ db, shopId }, id);
 }
 
 /** The buying settings kept on the shop. */
@@ -467,7 +467,8 @@ export async function getBuyingSettings({ db, shopId }: ShopScope) {
     .select({ purchaseOrderDetails: shops.purchaseOrderDetails, lowStockDigestTime: shops.lowStockDigestTime })
     .from(shops)
     .where(eq(shops.id, shopId));
-  return row ?? null;
+  if (!row) throw notFound('The shop');
+  return row;
 }
 
 export async function updateBuyingSettings({ db, shopId, userId }: Scope, patch: { purchaseOrderDetails?: string; lowStockDigestTime?: string }) {

@@ -123,13 +123,13 @@ const latestOf = (tx: Db, quoteId: string) =>
     .from(quoteRevisions)
     .where(eq(quoteRevisions.quoteId, quoteId));
 
-export async function getRevision({ db, shopId }: ShopScope, revisionId: string): Promise<QuoteRevisionView | null> {
+export async function getRevision({ db, shopId }: ShopScope, revisionId: string): Promise<QuoteRevisionView> {
   const [row] = await db
     .select({ r: quoteRevisions, number: quotes.number, paidAt: depositPaidAt })
     .from(quoteRevisions)
     .innerJoin(quotes, eq(quotes.id, quoteRevisions.quoteId))
     .where(and(eq(quoteRevisions.shopId, shopId), eq(quoteRevisions.id, revisionId)));
-  if (!row) return null;
+  if (!row) throw notFound('That quote');
   const [latest] = await latestOf(db, row.r.quoteId);
   return toView(row.r, row.number, latest.n, row.paidAt);
 }
@@ -283,7 +283,7 @@ export async function createQuote({ db, shopId, userId }: Scope, jobId: string, 
     });
     return rev.id;
   });
-  return (await getRevision({ db, shopId }, id))!;
+  return getRevision({ db, shopId }, id);
 }
 
 /** Locks a revision of this shop for a change. */
@@ -317,7 +317,7 @@ export async function updateRevision({ db, shopId, userId }: Scope, revisionId: 
       .where(eq(quoteRevisions.id, revisionId));
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'quote-revision', entityId: revisionId, data: { fields: Object.keys(patch) } });
   });
-  return (await getRevision({ db, shopId }, revisionId))!;
+  return getRevision({ db, shopId }, revisionId);
 }
 
 /** A new revision (B after A…) copied from the latest one, as a draft; refused while the latest is still a draft. */
@@ -365,7 +365,7 @@ export async function newRevision({ db, shopId, userId }: Scope, quoteId: string
     });
     return rev.id;
   });
-  return (await getRevision({ db, shopId }, id))!;
+  return getRevision({ db, shopId }, id);
 }
 
 /**
@@ -448,7 +448,7 @@ export async function sendRevision({ db, shopId, userId }: Scope, revisionId: st
     });
     await syncJobStatus({ db: tx, shopId, userId }, row.jobId, 'quote sent');
   });
-  return (await getRevision({ db, shopId }, revisionId))!;
+  return getRevision({ db, shopId }, revisionId);
 }
 
 /** What the quote PDF prints for a revision (the customer's copy: prices only). */

@@ -61,7 +61,7 @@ export async function tickStep({ db, shopId, userId }: Scope, planId: string, re
     if (started.length) await syncJobStatus({ db: tx, shopId, userId }, started[0].jobId, `first step of plan “${started[0].name}” ticked`);
     if (inserted.length) await recordAudit(tx, { shopId, userId, action: 'tick', entity: 'saw-step', entityId: planId, data: ref });
   });
-  return (await getStepTicks({ db, shopId }, planId))!;
+  return getStepTicks({ db, shopId }, planId);
 }
 
 /** Takes a tick back (a step ticked by mistake). Untouched when it was not ticked; the plan stays `cutting`. */
@@ -74,7 +74,7 @@ export async function untickStep({ db, shopId, userId }: Scope, planId: string, 
       .returning({ id: sawSteps.id });
     if (removed.length) await recordAudit(tx, { shopId, userId, action: 'untick', entity: 'saw-step', entityId: planId, data: ref });
   });
-  return (await getStepTicks({ db, shopId }, planId))!;
+  return getStepTicks({ db, shopId }, planId);
 }
 
 /** Ticked steps per plan, for the shop-floor queue. */
@@ -88,24 +88,24 @@ export async function countStepTicks({ db, shopId }: ShopScope, planIds: string[
   return new Map(rows.map((r) => [r.planId, Number(r.n)]));
 }
 
-/** A plan's status and ticks together, or null when the shop has no such plan. */
-export async function getStepTicks({ db, shopId }: ShopScope, planId: string): Promise<PlanTicks | null> {
+/** A plan's status and ticks together (not found when the shop has no such plan). */
+export async function getStepTicks({ db, shopId }: ShopScope, planId: string): Promise<PlanTicks> {
   const [row] = await db
     .select({ status: plans.status })
     .from(plans)
     .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
-  if (!row) return null;
+  if (!row) throw notFound('That plan');
   return { status: row.status, ticks: await listStepTicks({ db, shopId }, planId) };
 }
 
 /**
  * Everything the saw-order pages, part tags, shop floor and PDF show for one plan: the document, its job, the kerf it
- * was nested with, its parts' grain rules, and the shop's units. Null when the shop has no such plan, or when it is
- * a draft and drafts are not to be shown (people who cannot edit plans see only released work).
+ * was nested with, its parts' grain rules, and the shop's units. Not found when the shop has no such plan, or when
+ * it is a draft and drafts are not to be shown (people who cannot edit plans see only released work).
  */
 export async function getSawOrder({ db, shopId }: ShopScope, planId: string, { drafts }: { drafts: boolean }) {
   const [plan, settings] = await Promise.all([getPlan({ db, shopId }, planId), getShopSettings({ db, shopId })]);
-  if (!plan || !settings || (plan.status === 'draft' && !drafts)) return null;
+  if (plan.status === 'draft' && !drafts) throw notFound('That plan');
   const [job] = await db
     .select({ id: jobs.id, name: jobs.name, customer: sql<string>`coalesce(${customers.name}, '')` })
     .from(jobs)

@@ -4,7 +4,7 @@ import type { Db } from '../open';
 import { saws } from '../schema';
 import type { Saw, SawKind } from '@/shared/schemas/saw';
 import { recordAudit } from './audit';
-import { conflict } from '@/lib/errors';
+import { conflict, notFound } from '@/lib/errors';
 
 export interface SavedSaw extends Saw {
   id: string;
@@ -75,7 +75,7 @@ export async function createSaw({ db, shopId, userId }: SystemScope, saw: Saw): 
 }
 
 /** Null when the saw is not this shop's. Saved plans keep the profile they were nested with. */
-export async function updateSaw({ db, shopId, userId }: Scope, id: string, saw: Saw): Promise<SavedSaw | null> {
+export async function updateSaw({ db, shopId, userId }: Scope, id: string, saw: Saw): Promise<SavedSaw> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, saw.name, id);
     const [row] = await tx
@@ -83,19 +83,19 @@ export async function updateSaw({ db, shopId, userId }: Scope, id: string, saw: 
       .set({ ...columns(saw), updatedAt: new Date() })
       .where(and(eq(saws.shopId, shopId), eq(saws.id, id)))
       .returning();
-    if (!row) return null;
+    if (!row) throw notFound('That saw');
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'saw', entityId: id, data: saw });
     return toSaw(row);
   });
 }
 
-export async function deleteSaw({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
-  return db.transaction(async (tx) => {
+export async function deleteSaw({ db, shopId, userId }: Scope, id: string): Promise<void> {
+  await db.transaction(async (tx) => {
     const rows = await tx
       .delete(saws)
       .where(and(eq(saws.shopId, shopId), eq(saws.id, id)))
       .returning({ name: saws.name });
-    if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'saw', entityId: id, data: rows[0] });
-    return rows.length > 0;
+    if (!rows.length) throw notFound('That saw');
+    await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'saw', entityId: id, data: rows[0] });
   });
 }

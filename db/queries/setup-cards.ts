@@ -5,7 +5,7 @@ import { setupCards } from '../schema';
 import { SETUP_CARD_TOLERANCE_MM } from '@/lib/joinery/setup-cards';
 import type { SetupCard, SetupCardField } from '@/shared/schemas/setup-card';
 import { recordAudit } from './audit';
-import { conflict } from '@/lib/errors';
+import { conflict, notFound } from '@/lib/errors';
 
 export interface SavedSetupCard extends SetupCard {
   id: string;
@@ -54,7 +54,7 @@ export async function createSetupCard({ db, shopId, userId }: Scope, card: Setup
   });
 }
 
-export async function updateSetupCard({ db, shopId, userId }: Scope, id: string, card: SetupCard): Promise<SavedSetupCard | null> {
+export async function updateSetupCard({ db, shopId, userId }: Scope, id: string, card: SetupCard): Promise<SavedSetupCard> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, card, id);
     const [row] = await tx
@@ -62,19 +62,19 @@ export async function updateSetupCard({ db, shopId, userId }: Scope, id: string,
       .set({ joint: card.joint, stockThicknessMm: card.stockThicknessMm, fields: fieldsColumn(card.fields), note: card.note, updatedAt: new Date() })
       .where(and(eq(setupCards.shopId, shopId), eq(setupCards.id, id)))
       .returning();
-    if (!row) return null;
+    if (!row) throw notFound('That setup card');
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'setup-card', entityId: id, data: card });
     return toCard(row);
   });
 }
 
-export async function deleteSetupCard({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
-  return db.transaction(async (tx) => {
+export async function deleteSetupCard({ db, shopId, userId }: Scope, id: string): Promise<void> {
+  await db.transaction(async (tx) => {
     const rows = await tx
       .delete(setupCards)
       .where(and(eq(setupCards.shopId, shopId), eq(setupCards.id, id)))
       .returning({ joint: setupCards.joint });
-    if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'setup-card', entityId: id, data: rows[0] });
-    return rows.length > 0;
+    if (!rows.length) throw notFound('That setup card');
+    await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'setup-card', entityId: id, data: rows[0] });
   });
 }

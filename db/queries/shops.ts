@@ -5,8 +5,9 @@ import { ReadCache } from '../changes';
 import { shops } from '../schema';
 import type { ShopSettings } from '@/shared/schemas/shop';
 import { recordAudit } from './audit';
+import { notFound } from '@/lib/errors';
 
-export async function getShopSettings({ db, shopId }: ShopScope): Promise<ShopSettings | null> {
+export async function getShopSettings({ db, shopId }: ShopScope): Promise<ShopSettings> {
   const [row] = await db
     .select({
       name: shops.name,
@@ -24,20 +25,21 @@ export async function getShopSettings({ db, shopId }: ShopScope): Promise<ShopSe
     })
     .from(shops)
     .where(eq(shops.id, shopId));
-  return (row as ShopSettings | undefined) ?? null;
+  if (!row) throw notFound('The shop');
+  return row as ShopSettings;
 }
 
 /** Embedded database only (db/changes.ts): each shop's settings as last read, until a statement on shops commits. */
-const keptSettings = new ReadCache<ShopSettings | null>(['shops']);
+const keptSettings = new ReadCache<ShopSettings>(['shops']);
 
 /**
  * The shop's settings for a page render: on the embedded database kept until the shops table changes (a saved
  * settings form is seen on the very next request); on PostgreSQL read each time. A copy, so no caller can change
  * the kept one.
  */
-export async function readShopSettings(handle: Pick<DbHandle, 'db' | 'changes'>, shopId: string): Promise<ShopSettings | null> {
+export async function readShopSettings(handle: Pick<DbHandle, 'db' | 'changes'>, shopId: string): Promise<ShopSettings> {
   const settings = await keptSettings.get(handle.changes, shopId, () => getShopSettings({ db: handle.db, shopId }));
-  return settings && { ...settings };
+  return { ...settings };
 }
 
 export async function updateShopSettings({ db, shopId, userId }: Scope, patch: Partial<ShopSettings>) {

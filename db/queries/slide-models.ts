@@ -4,7 +4,7 @@ import type { Db } from '../open';
 import { slideModels } from '../schema';
 import type { SlideModel, SlideModelKind, SlideWidthRule } from '@/shared/schemas/slide-model';
 import { recordAudit } from './audit';
-import { conflict } from '@/lib/errors';
+import { conflict, notFound } from '@/lib/errors';
 
 export interface SavedSlideModel extends SlideModel {
   id: string;
@@ -73,7 +73,7 @@ export async function createSlideModel({ db, shopId, userId }: SystemScope, mode
 }
 
 /** Null when the model is not this shop's. Saved drawer schedules keep the rule they were sized by. */
-export async function updateSlideModel({ db, shopId, userId }: Scope, id: string, model: SlideModel): Promise<SavedSlideModel | null> {
+export async function updateSlideModel({ db, shopId, userId }: Scope, id: string, model: SlideModel): Promise<SavedSlideModel> {
   return db.transaction(async (tx) => {
     await refuseDuplicate(tx, shopId, model.name, id);
     const [row] = await tx
@@ -81,19 +81,19 @@ export async function updateSlideModel({ db, shopId, userId }: Scope, id: string
       .set({ ...columns(model), updatedAt: new Date() })
       .where(and(eq(slideModels.shopId, shopId), eq(slideModels.id, id)))
       .returning();
-    if (!row) return null;
+    if (!row) throw notFound('That slide model');
     await recordAudit(tx, { shopId, userId, action: 'update', entity: 'slide-model', entityId: id, data: model });
     return toModel(row);
   });
 }
 
-export async function deleteSlideModel({ db, shopId, userId }: Scope, id: string): Promise<boolean> {
-  return db.transaction(async (tx) => {
+export async function deleteSlideModel({ db, shopId, userId }: Scope, id: string): Promise<void> {
+  await db.transaction(async (tx) => {
     const rows = await tx
       .delete(slideModels)
       .where(and(eq(slideModels.shopId, shopId), eq(slideModels.id, id)))
       .returning({ name: slideModels.name });
-    if (rows.length) await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'slide-model', entityId: id, data: rows[0] });
-    return rows.length > 0;
+    if (!rows.length) throw notFound('That slide model');
+    await recordAudit(tx, { shopId, userId, action: 'delete', entity: 'slide-model', entityId: id, data: rows[0] });
   });
 }

@@ -13,7 +13,7 @@ import { z } from 'zod';
 import { isLowStock } from '@/lib/stock/low-stock';
 import { costEachCents } from './nest-request';
 import { recordAudit } from './audit';
-import { DomainError } from '@/lib/errors';
+import { DomainError, notFound } from '@/lib/errors';
 import type { DetailChange, MovementRow, OffcutRow, StockDetailChanges, StockItemRow } from '@/shared/wire/stock';
 
 /** A stock-room request that cannot be done as asked (a conflict), with a message safe to show. */
@@ -86,7 +86,7 @@ export async function updateStockItem({ db, shopId, userId }: Scope, id: string,
       .from(stockItems)
       .where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id)))
       .for('update');
-    if (!current) return null;
+    if (!current) throw notFound('That stock item');
     const changes: StockDetailChanges = {};
     for (const field of STOCK_DETAIL_FIELDS) {
       const to = patch[field];
@@ -111,7 +111,7 @@ export async function receiveStock({ db, shopId, userId }: Scope, id: string, { 
       .set({ onHand: sql`${stockItems.onHand} + ${quantity}` })
       .where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id)))
       .returning();
-    if (!item) return null;
+    if (!item) throw notFound('That stock item');
     await tx.insert(stockMovements).values({ shopId, kind: 'received', stockItemId: id, quantity, userId, reason: reason || 'Received' });
     return item;
   });
@@ -128,7 +128,7 @@ export async function adjustStock({ db, shopId, userId }: Scope, id: string, { c
       .from(stockItems)
       .where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, id)))
       .for('update');
-    if (!current) return null;
+    if (!current) throw notFound('That stock item');
     if (count < current.reserved) {
       throw new StockConflict(
         `${current.reserved} of these are reserved by released plans; a count of ${count} would leave them short. Cancel or re-nest those plans first.`,
@@ -166,7 +166,7 @@ export async function scrapOffcut({ db, shopId, userId }: Scope, id: string, rea
         .select({ status: offcuts.status })
         .from(offcuts)
         .where(and(eq(offcuts.shopId, shopId), eq(offcuts.id, id)));
-      if (!existing) return null;
+      if (!existing) throw notFound('That offcut');
       throw new StockConflict(`This offcut is ${existing.status}; only an available offcut can be scrapped.`);
     }
     await tx.insert(stockMovements).values({ shopId, kind: 'scrapped', offcutId: id, quantity: -1, userId, reason: reason || 'Scrapped' });

@@ -18,7 +18,8 @@ export async function takeoffPlans({ db, shopId }: ShopScope, jobId: string) {
 /**
  * The material check before a quote, for one of a job's plans (the latest unless one is named; cancelled ones
  * aside): what to pull, what to buy, board feet or area, cost, the spoilage allowance once per material, whether
- * the stock room covers it now, and any part not placed.
+ * the stock room covers it now, and any part not placed. Null while the job has no plan: the page says so, as a
+ * state of the job rather than a refusal.
  */
 export async function getTakeoff({ db, shopId }: ShopScope, jobId: string, planId?: string) {
   const [row] = await db

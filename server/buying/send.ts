@@ -2,7 +2,6 @@ import 'server-only';
 import type { Db } from '@/db/open';
 import { getShopSettings } from '@/db/queries/shops';
 import { getBuyingSettings, getPurchaseOrder, markSent, updateDraft, type PurchaseOrderView } from '@/db/queries/purchase-orders';
-import { notFound } from '@/server/api/errors';
 import { formatMoney } from '@/lib/costing/money';
 import { enqueueMail } from '@/server/mail/outbox';
 import { wakeMailSender } from '@/server/mail/service';
@@ -16,7 +15,6 @@ import { purchaseOrderPdf } from '@/lib/buying/po-pdf';
 /** The order's PDF as the supplier gets it, and its file name. */
 export async function renderPurchaseOrder(db: Db, shopId: string, po: PurchaseOrderView) {
   const [shop, buying] = await Promise.all([getShopSettings({ db, shopId }), getBuyingSettings({ db, shopId })]);
-  if (!shop || !buying) throw notFound('The shop');
   const lines = po.lines.map((l) => ({
     description: describeSize(l, shop.units),
     quantity: l.quantity,
@@ -45,7 +43,6 @@ export async function renderPurchaseOrder(db: Db, shopId: string, po: PurchaseOr
  */
 export async function sendPurchaseOrder(db: Db, shopId: string, userId: string, id: string, supplierEmail?: string): Promise<PurchaseOrderView> {
   let po = await getPurchaseOrder({ db, shopId }, id);
-  if (!po) throw notFound('That purchase order');
   if (supplierEmail && supplierEmail !== po.supplierEmail && po.status === 'draft')
     po = await updateDraft({ db, shopId, userId }, id, { supplierEmail });
   const { bytes, filename, lines, shop, buying } = await renderPurchaseOrder(db, shopId, po);
@@ -71,5 +68,5 @@ export async function sendPurchaseOrder(db: Db, shopId: string, userId: string, 
     }),
   );
   wakeMailSender();
-  return (await getPurchaseOrder({ db, shopId }, id))!;
+  return getPurchaseOrder({ db, shopId }, id);
 }

@@ -1,13 +1,12 @@
 import 'server-only';
 import type { Db } from '@/db/open';
 import { getShopSettings } from '@/db/queries/shops';
-import { invalid, notFound } from '@/server/api/errors';
+import { invalid } from '@/server/api/errors';
 import { reportRange, type ReportQuery } from '@/shared/schemas/report';
 
 /** A report's filter for the signed-in person's shop: its time zone and units, the range with defaults filled in. */
 export async function reportFilterFor(db: Db, shopId: string, query: ReportQuery, now = new Date()) {
   const settings = await getShopSettings({ db, shopId });
-  if (!settings) throw notFound('The shop');
   const range = reportRange(query, settings.timeZone, now);
   if ('error' in range) throw invalid(range.error, { from: [range.error] });
   return {

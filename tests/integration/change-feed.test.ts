@@ -73,17 +73,17 @@ describe('the change feed', () => {
 
   test("the shop's settings: a saved change (and a bare UPDATE) is read back at once; callers get copies", async () => {
     const before = await readShopSettings(handle, fx.mine.id);
-    expect(before?.timeZone).toBeTruthy();
+    expect(before.timeZone).toBeTruthy();
     before!.name = 'changed by a caller';
-    expect((await readShopSettings(handle, fx.mine.id))?.name).not.toBe('changed by a caller');
+    expect((await readShopSettings(handle, fx.mine.id)).name).not.toBe('changed by a caller');
     await updateShopSettings({ db: handle.db, shopId: fx.mine.id, userId: fx.owner.id }, { timeZone: 'America/Chicago' });
-    expect((await readShopSettings(handle, fx.mine.id))?.timeZone).toBe('America/Chicago');
+    expect((await readShopSettings(handle, fx.mine.id)).timeZone).toBe('America/Chicago');
     await handle.db
       .update(shops)
       .set({ name: sql`${shops.name} || ' & Sons'` })
       .where(eq(shops.id, fx.mine.id));
-    expect((await readShopSettings(handle, fx.mine.id))?.name).toMatch(/ & Sons$/);
+    expect((await readShopSettings(handle, fx.mine.id)).name).toMatch(/ & Sons$/);
     // The other shop's settings are its own.
-    expect((await readShopSettings(handle, fx.theirs.id))?.name).not.toMatch(/ & Sons$/);
+    expect((await readShopSettings(handle, fx.theirs.id)).name).not.toMatch(/ & Sons$/);
   });
 });

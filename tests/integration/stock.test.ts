@@ -141,7 +141,9 @@ describe('counts in the stock room', () => {
     );
     await scrapOffcut({ db, shopId: fx.mine.id, userId: fx.cutter.id }, o.id, 'Delaminated');
     await expect(scrapOffcut({ db, shopId: fx.mine.id, userId: fx.cutter.id }, o.id, 'again')).rejects.toMatchObject({ kind: 'conflict' });
-    expect(await scrapOffcut({ db, shopId: fx.theirs.id, userId: fx.otherOwner.id }, o.id, 'not theirs')).toBeNull();
+    await expect(scrapOffcut({ db, shopId: fx.theirs.id, userId: fx.otherOwner.id }, o.id, 'not theirs')).rejects.toMatchObject({
+      kind: 'not-found',
+    });
     await expectLedgerMatches(fx.mine.id);
   });
 

@@ -30,7 +30,6 @@ export default async function PurchaseOrdersPage() {
     listPurchaseOrders(scope),
     lowStockWithOrders(scope),
   ]);
-  if (!settings || !buying) return null;
   const money = (m: number) => formatMoney(m, settings.currency);
   const when = (iso: string) => formatShopDateTime(new Date(iso), settings.timeZone);
   const canWrite = can(user.role, 'purchasing:write');

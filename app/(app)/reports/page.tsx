@@ -31,7 +31,6 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
   const db = await getDb();
   const scope = scopeOf(db, user);
   const settings = await getShopSettings(scope);
-  if (!settings) return null;
   const raw = Object.fromEntries(Object.entries(await searchParams).map(([k, v]) => [k, first(v)]));
   const parsed = reportQuerySchema.safeParse(raw);
   const query = parsed.success ? parsed.data : reportQuerySchema.parse({});

@@ -1,5 +1,5 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
 import { getDb } from '@/db/client';
 import { getShopSettings } from '@/db/queries/shops';
 import { SetupCardsManager } from '@/components/setup-cards/setup-cards-manager';
@@ -11,8 +11,7 @@ export const metadata: Metadata = { title: 'Setup cards' };
 
 export default async function SetupCardsPage() {
   const user = await requirePageUser('jobs:read');
-  const settings = await getShopSettings({ db: await getDb(), shopId: user.shopId });
-  if (!settings) notFound();
+  const settings = await getShopSettings(scopeOf(await getDb(), user));
   return (
     <>
       <PageHeader

@@ -26,7 +26,7 @@ export default async function ShopFloorPage() {
   // Oldest released work first: the list comes newest-changed first.
   const queue = await Promise.all(
     [...plans].reverse().map(async (p) => {
-      const doc = (await getPlan(scope, p.id))?.document;
+      const doc = (await getPlan(scope, p.id)).document;
       const total = doc?.pieces.reduce((n, piece) => n + (piece.sawOrder?.length ?? 0), 0) ?? 0;
       return { ...p, pieces: doc?.pieces.length ?? 0, total, done: ticks.get(p.id) ?? 0 };
     }),

@@ -18,7 +18,6 @@ export default async function YieldPage() {
   const db = await getDb();
   const scope = scopeOf(db, user);
   const [settings, ledger] = await Promise.all([getShopSettings(scope), listYieldLedger(scope)]);
-  if (!settings) return null;
   return (
     <>
       <PageHeader

@@ -1,3 +1,4 @@
+import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
@@ -22,8 +23,7 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
   if (!id.success) notFound();
   const db = await getDb();
   const scope = scopeOf(db, user);
-  const customer = await getCustomer(scope, id.data);
-  if (!customer) notFound();
+  const customer = await found(getCustomer(scope, id.data));
   const quotes = can(user.role, 'quotes:read') ? await listCustomerQuotes(scope, customer.id) : [];
   const { jobs, ...details } = customer;
   const lines: [string, string][] = [

@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
@@ -13,7 +14,6 @@ export async function jobSection(params: Promise<{ id: string }>, permission: Pe
   const user = await requirePageUser(permission);
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const shop = await getShopSettings({ db: await getDb(), shopId: user.shopId });
-  if (!shop) notFound();
+  const shop = await getShopSettings(scopeOf(await getDb(), user));
   return { user, jobId: id.data, shop };
 }

@@ -1,3 +1,4 @@
+import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
@@ -20,8 +21,7 @@ export default async function JobLayout({ children, params }: { children: ReactN
   if (!id.success) notFound();
   const db = await getDb();
   const scope = scopeOf(db, user);
-  const job = await getJob(scope, id.data);
-  if (!job) notFound();
+  const job = await found(getJob(scope, id.data));
   const edit = can(user.role, 'jobs:write') ? await jobEditOptions(scope, job.id, user.role) : null;
   return (
     <div>

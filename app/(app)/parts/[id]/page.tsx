@@ -27,7 +27,7 @@ export default async function PartPage({ params, searchParams }: { params: Promi
     getPartPage(db, user.shopId, id.data, { drafts: can(user.role, 'plans:write') }),
     getShopSettings(scope),
   ]);
-  if (!data || !settings) notFound();
+  if (!data) notFound();
   const { plan: planId, instance } = query.parse(await searchParams);
   const { part, job, plans } = data;
   const len = (mm: number) => formatLength(mm, settings.units);

@@ -1,3 +1,4 @@
+import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
@@ -24,16 +25,17 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
   if (!id.success) notFound();
   const db = await getDb();
   const scope = scopeOf(db, user);
-  const [settings, order, items] = await Promise.all([
-    getShopSettings(scope),
-    getPurchaseOrder(scope, id.data),
-    db
-      .select()
-      .from(stockItems)
-      .where(eq(stockItems.shopId, user.shopId))
-      .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
-  ]);
-  if (!order || !settings) notFound();
+  const [settings, order, items] = await found(
+    Promise.all([
+      getShopSettings(scope),
+      getPurchaseOrder(scope, id.data),
+      db
+        .select()
+        .from(stockItems)
+        .where(eq(stockItems.shopId, user.shopId))
+        .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
+    ]),
+  );
   const when = (iso: string) => formatShopDateTime(new Date(iso), settings.timeZone);
   const sizes = items.map((i) => ({
     id: i.id,

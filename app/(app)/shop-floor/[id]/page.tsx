@@ -1,3 +1,4 @@
+import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
@@ -21,8 +22,7 @@ export default async function CuttingPage({ params }: { params: Promise<{ id: st
   const db = await getDb();
   const scope = scopeOf(db, user);
   // The shop floor shows released work only, whoever is looking.
-  const [order, ticks] = await Promise.all([getSawOrder(scope, id.data, { drafts: false }), getStepTicks(scope, id.data)]);
-  if (!order || !ticks) notFound();
+  const [order, ticks] = await found(Promise.all([getSawOrder(scope, id.data, { drafts: false }), getStepTicks(scope, id.data)]));
   const atTheSaw = order.status === 'released' || order.status === 'cutting';
 
   return (

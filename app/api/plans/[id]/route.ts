@@ -15,11 +15,11 @@ export const GET = route({ permission: 'plans:read', params: idParams }, async (
   // older version, go the long way: read, migrated, checked, prices taken out.
   if (can(user.role, 'prices:read')) {
     const stored = await getPlanAsJson(scope, params.id);
-    if (!stored || (stored !== 'older' && stored.status === 'draft' && !can(user.role, 'plans:write'))) throw notFound('That plan');
+    if (stored !== 'older' && stored.status === 'draft' && !can(user.role, 'plans:write')) throw notFound('That plan');
     if (stored !== 'older') return new Response(stored.json, { headers: { 'content-type': 'application/json' } });
   }
   const plan = await getPlan(scope, params.id);
-  if (!plan || (plan.status === 'draft' && !can(user.role, 'plans:write'))) throw notFound('That plan');
+  if (plan.status === 'draft' && !can(user.role, 'plans:write')) throw notFound('That plan');
   const body = {
     id: plan.id,
     jobId: plan.jobId,
@@ -36,9 +36,8 @@ export const GET = route({ permission: 'plans:read', params: idParams }, async (
 });
 
 // PUT /api/plans/:id – store an edited draft: judged with validatePlan, then its cuts rebuilt with rebuildCuts
-export const PUT = route({ permission: 'plans:write', params: idParams, body: planUpdateSchema }, async ({ scope, db, user, params, body }) => {
+export const PUT = route({ permission: 'plans:write', params: idParams, body: planUpdateSchema }, async ({ scope, params, body }) => {
   const saved = await getPlan(scope, params.id);
-  if (!saved) throw notFound('That plan');
   if (saved.status !== 'draft') throw conflict(`This plan is ${saved.status}; only a draft can be edited.`);
   const request = saved.request;
   if (!request) throw conflict('This plan’s nesting request can no longer be read, so its layout cannot be checked: nest the job again.');
@@ -46,20 +45,14 @@ export const PUT = route({ permission: 'plans:write', params: idParams, body: pl
   if (!judged.ok) throw invalid('The layout breaks the cutting rules; nothing was saved.', { plan: judged.violations.map((v) => v.message) });
   // Tree, saw order, leftovers and figures are made afresh here, whatever the bench sent.
   const plan = planSchema.parse(rebuildCuts(request, judged.plan));
-  const result = await updateDraftPlan({ db, shopId: user.shopId, userId: user.id }, params.id, {
+  const { updatedAt } = await updateDraftPlan(scope, params.id, {
     plan,
     name: body.name,
     baseUpdatedAt: body.baseUpdatedAt,
   });
-  if (!result.ok) {
-    if (result.reason === 'not-found') throw notFound('That plan');
-    throw conflict(
-      result.reason === 'stale' ? 'Someone saved this plan after you opened it; reload to see their changes.' : 'Only a draft plan can be edited.',
-    );
-  }
   return {
     id: params.id,
-    updatedAt: result.updatedAt.toISOString(),
+    updatedAt: updatedAt.toISOString(),
     yieldRatio: plan.totals?.yield ?? null,
     costCents: plan.totals ? Math.round(plan.totals.cost) : null,
   };

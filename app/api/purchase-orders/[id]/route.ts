@@ -1,11 +1,10 @@
 import { getPurchaseOrder, updateDraft } from '@/db/queries/purchase-orders';
-import { notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { purchaseOrderPatchSchema } from '@/shared/schemas/purchase-order';
 
 // GET /api/purchase-orders/:id – one purchase order with its lines, what has arrived and its total
 export const GET = route({ permission: 'purchasing:read', params: idParams }, async ({ scope, params }) => {
-  return (await getPurchaseOrder(scope, params.id)) ?? Promise.reject(notFound('That purchase order'));
+  return getPurchaseOrder(scope, params.id);
 });
 
 // PATCH /api/purchase-orders/:id – change a draft: supplier, its e-mail address, the note, the lines

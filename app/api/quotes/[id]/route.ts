@@ -1,11 +1,10 @@
 import { getRevision, updateRevision } from '@/db/queries/quotes';
-import { notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { quoteRevisionPatchSchema } from '@/shared/schemas/quote';
 
 // GET /api/quotes/:id – one quote revision with its lines and totals (estimator's view: cost, margin, hours)
 export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ scope, params }) => {
-  return (await getRevision(scope, params.id)) ?? Promise.reject(notFound('That quote'));
+  return getRevision(scope, params.id);
 });
 
 // PATCH /api/quotes/:id – change a draft revision's lines, markups, discount, tax, deposit, validity or terms (409 once sent)

@@ -1,14 +1,13 @@
 import { getPricing, setPricing } from '@/db/queries/pricing';
-import { notFound } from '@/server/api/errors';
 import { route } from '@/server/api/route';
 import { pricingSettingsSchema } from '@/shared/schemas/pricing';
 
 // GET /api/settings/pricing – hourly rates, labour minutes, markups, tax, deposit, validity, terms, offcut valuation (prices: never the cutter)
 export const GET = route({ permission: 'prices:read' }, async ({ scope }) => {
-  return (await getPricing(scope)) ?? Promise.reject(notFound('The shop'));
+  return getPricing(scope);
 });
 
 // PUT /api/settings/pricing – replace the shop's pricing settings (owner)
 export const PUT = route({ permission: 'settings:write', body: pricingSettingsSchema }, async ({ scope, body }) => {
-  return (await setPricing(scope, body)) ?? Promise.reject(notFound('The shop'));
+  return setPricing(scope, body);
 });

@@ -33,7 +33,6 @@ export default async function TakeoffPage({ params, searchParams }: { params: Pr
     getShopSettings(scope),
     takeoffPlans(scope, id.data),
   ]);
-  if (!settings) notFound();
   if (!takeoff) {
     return (
       <EmptyState title="No plan yet.">

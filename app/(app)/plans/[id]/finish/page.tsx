@@ -1,3 +1,4 @@
+import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
@@ -26,9 +27,9 @@ export default async function FinishPlanPage({ params }: { params: Promise<{ id:
   if (!id.success) notFound();
   const db = await getDb();
   const scope = scopeOf(db, user);
-  const [plan, settings] = await Promise.all([getPlan(scope, id.data), getShopSettings(scope)]);
+  const [plan, settings] = await found(Promise.all([getPlan(scope, id.data), getShopSettings(scope)]));
   // Drafts exist only for people who may edit plans, as in the API (GET /api/plans/:id).
-  if (!plan || !settings || (plan.status === 'draft' && !can(user.role, 'plans:write'))) notFound();
+  if (plan.status === 'draft' && !can(user.role, 'plans:write')) notFound();
   const [job] = await db.select({ name: jobs.name }).from(jobs).where(eq(jobs.id, plan.jobId));
   const len = (mm: number) => formatLength(mm, settings.units);
   const min = minOffcutFor(plan.request, settings);

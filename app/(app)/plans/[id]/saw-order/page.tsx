@@ -1,3 +1,5 @@
+import { scopeOf } from '@/db/scope';
+import { found } from '@/server/page-data';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
@@ -19,8 +21,7 @@ export default async function SawOrderPage({ params }: { params: Promise<{ id: s
   const user = await requirePageUser('plans:read');
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const order = await getSawOrder({ db: await getDb(), shopId: user.shopId }, id.data, { drafts: can(user.role, 'plans:write') });
-  if (!order) notFound();
+  const order = await found(getSawOrder(scopeOf(await getDb(), user), id.data, { drafts: can(user.role, 'plans:write') }));
   const views = pieceViews(order.document.pieces, order.units, order.kerf);
   const cuts = views.reduce((n, v) => n + v.steps.length, 0);
   const atTheSaw = order.status === 'released' || order.status === 'cutting';

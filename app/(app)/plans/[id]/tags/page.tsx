@@ -1,3 +1,5 @@
+import { scopeOf } from '@/db/scope';
+import { found } from '@/server/page-data';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { headers } from 'next/headers';
@@ -20,8 +22,7 @@ export default async function PartTagsPage({ params, searchParams }: { params: P
   const user = await requirePageUser('plans:read');
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const order = await getSawOrder({ db: await getDb(), shopId: user.shopId }, id.data, { drafts: can(user.role, 'plans:write') });
-  if (!order) notFound();
+  const order = await found(getSawOrder(scopeOf(await getDb(), user), id.data, { drafts: can(user.role, 'plans:write') }));
   const sheet = labelSheet((await searchParams).sheet);
   const origin = siteOrigin(await headers(), process.env.NEXTAUTH_URL);
   const items = partTags(order.document, order.parts).map((tag) => {

@@ -1,13 +1,12 @@
 import { listDrawerSchedules, saveDrawerSchedule } from '@/db/queries/drawer-schedules';
-import { jobInShop } from '@/db/queries/parts';
-import { notFound } from '@/server/api/errors';
+import { requireJob } from '@/db/queries/parts';
 import { idParams, route } from '@/server/api/route';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { sizeOrThrow } from './size-or-throw';
 
 // GET /api/jobs/:id/drawer-schedules – the job's drawer schedules with their inputs
 export const GET = route({ permission: 'jobs:read', params: idParams }, async ({ scope, params }) => {
-  if (!(await jobInShop(scope, params.id))) throw notFound('That job');
+  await requireJob(scope, params.id);
   return listDrawerSchedules(scope, params.id);
 });
 
@@ -16,6 +15,6 @@ export const POST = route(
   { permission: 'cutlist:write', params: idParams, body: drawerScheduleSchema, status: 201 },
   async ({ scope, db, user, params, body }) => {
     const parts = await sizeOrThrow(db, user.shopId, body);
-    return (await saveDrawerSchedule(scope, params.id, null, body, parts)) ?? Promise.reject(notFound('That job'));
+    return saveDrawerSchedule(scope, params.id, null, body, parts);
   },
 );

@@ -1,12 +1,11 @@
-import { getJob } from '@/db/queries/jobs';
+import { requireJob } from '@/db/queries/parts';
 import { createQuote, listJobQuotes } from '@/db/queries/quotes';
-import { notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { newQuoteSchema } from '@/shared/schemas/quote';
 
 // GET /api/jobs/:id/quotes – every revision of the job's quotes, with totals, cost and margin (estimator's view)
 export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ scope, params }) => {
-  if (!(await getJob(scope, params.id))) throw notFound('That job');
+  await requireJob(scope, params.id);
   return listJobQuotes(scope, params.id);
 });
 

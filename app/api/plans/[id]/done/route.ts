@@ -5,8 +5,8 @@ import { withoutPrices } from '@/lib/stock/without-prices';
 import { finishPlanSchema } from '@/shared/schemas/stock';
 
 // POST /api/plans/:id/done – consume the plan's stock, put its offcuts on the rack, record yield, waste and cost
-export const POST = route({ permission: 'plans:finish', params: idParams, body: finishPlanSchema }, async ({ db, user, params, body }) => {
-  const result = await finishPlan({ db, shopId: user.shopId, userId: user.id }, params.id, body);
+export const POST = route({ permission: 'plans:finish', params: idParams, body: finishPlanSchema }, async ({ scope, user, params, body }) => {
+  const result = await finishPlan(scope, params.id, body);
   // The cost is recorded for the owner's ledger; a cutter's answer leaves it out.
   return can(user.role, 'prices:read') ? result : withoutPrices({ ...result });
 });

@@ -1,5 +1,4 @@
 import { getSawOrder } from '@/db/queries/saw-steps';
-import { notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { pdfFileName } from '@/lib/saw-order/pdf-text';
@@ -11,7 +10,6 @@ const pdfQuery = z.object({ page: z.enum(['letter', 'a4']).optional() });
 // GET /api/plans/:id/saw-order-pdf?page=letter|a4 – the saw order as a PDF, one page per stock piece
 export const GET = route({ permission: 'plans:read', params: idParams, query: pdfQuery }, async ({ scope, user, params, query }) => {
   const order = await getSawOrder(scope, params.id, { drafts: can(user.role, 'plans:write') });
-  if (!order) throw notFound('That plan');
   const bytes = await sawOrderPdf({
     title: order.job.name,
     subtitle: `${order.name} · ${order.document.pieces.length} stock piece${order.document.pieces.length === 1 ? '' : 's'}`,

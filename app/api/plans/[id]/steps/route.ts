@@ -8,7 +8,7 @@ import { stepRefSchema } from '@/lib/saw-order/step-ref';
 export const GET = route({ permission: 'plans:read', params: idParams }, async ({ scope, user, params }) => {
   const ticks = await getStepTicks(scope, params.id);
   // Drafts exist only for people who may edit plans, as everywhere else.
-  if (!ticks || (ticks.status === 'draft' && !can(user.role, 'plans:write'))) throw notFound('That plan');
+  if (ticks.status === 'draft' && !can(user.role, 'plans:write')) throw notFound('That plan');
   return ticks;
 });
 

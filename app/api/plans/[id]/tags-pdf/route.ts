@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { getSawOrder } from '@/db/queries/saw-steps';
-import { notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { can } from '@/lib/auth/permissions';
 import { LABEL_SHEETS, labelSheet } from '@/lib/saw-order/label-sheets';
@@ -15,7 +14,6 @@ const tagsQuery = z.object({ sheet: z.enum(sheetIds, { error: `The label sheet i
 // GET /api/plans/:id/tags-pdf?sheet= – part tags as a PDF on a label sheet, one tag per placed part
 export const GET = route({ permission: 'plans:read', params: idParams, query: tagsQuery }, async ({ scope, req, user, params, query }) => {
   const order = await getSawOrder(scope, params.id, { drafts: can(user.role, 'plans:write') });
-  if (!order) throw notFound('That plan');
   const origin = siteOrigin(req.headers, process.env.NEXTAUTH_URL);
   const bytes = await tagsPdf({
     jobName: order.job.name,

@@ -3,7 +3,6 @@ import { customers } from '@/db/schema';
 import { getJob } from '@/db/queries/jobs';
 import { getRevision, quotePdfInput } from '@/db/queries/quotes';
 import { getShopSettings } from '@/db/queries/shops';
-import { notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { quotePdf } from '@/lib/quotes/quote-pdf';
 import { pdfFileName } from '@/lib/saw-order/pdf-text';
@@ -11,9 +10,7 @@ import { pdfFileName } from '@/lib/saw-order/pdf-text';
 // GET /api/quotes/:id/pdf – the customer's copy of a quote revision as a PDF (prices only: no cost, margin or hours)
 export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ scope, db, params }) => {
   const revision = await getRevision(scope, params.id);
-  if (!revision) throw notFound('That quote');
   const [job, shop] = await Promise.all([getJob(scope, revision.jobId), getShopSettings(scope)]);
-  if (!job || !shop) throw notFound('That quote');
   const [customer] = job.customerId ? await db.select().from(customers).where(eq(customers.id, job.customerId)) : [];
   const bytes = await quotePdf(quotePdfInput(revision, job, customer ?? null, shop));
   return new Response(new Uint8Array(bytes), {

@@ -1,11 +1,8 @@
 import { idParams, route } from '@/server/api/route';
-import { notFound } from '@/server/api/errors';
 import { adjustStock } from '@/db/queries/stock';
 import { adjustStockSchema } from '@/shared/schemas/stock';
 
 // POST /api/stock/:id/adjust – replace the book count with a counted one, with the reason in the ledger
 export const POST = route({ permission: 'stock:write', params: idParams, body: adjustStockSchema }, async ({ scope, params, body }) => {
-  const item = await adjustStock(scope, params.id, body);
-  if (!item) throw notFound('That stock item');
-  return item;
+  return adjustStock(scope, params.id, body);
 });

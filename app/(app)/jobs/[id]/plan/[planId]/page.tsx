@@ -1,3 +1,4 @@
+import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
@@ -25,9 +26,9 @@ export default async function PlanPage({ params: raw }: { params: Promise<{ id: 
   if (!parsed.success) notFound();
   const db = await getDb();
   const scope = scopeOf(db, user);
-  const [plan, shop] = await Promise.all([getPlan(scope, parsed.data.planId), getShopSettings(scope)]);
+  const [plan, shop] = await found(Promise.all([getPlan(scope, parsed.data.planId), getShopSettings(scope)]));
   const mayEdit = can(user.role, 'plans:write');
-  if (!plan || !shop || plan.jobId !== parsed.data.id || (plan.status === 'draft' && !mayEdit)) notFound();
+  if (plan.jobId !== parsed.data.id || (plan.status === 'draft' && !mayEdit)) notFound();
   const showPrices = can(user.role, 'prices:read');
   // What GET /api/plans/:id would answer, prices out for those who may not see them: the bench needs no second read.
   const read = { id: plan.id, status: plan.status, updatedAt: plan.updatedAt.toISOString(), request: plan.request, document: plan.document };

@@ -1,3 +1,4 @@
+import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
@@ -23,8 +24,8 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   if (!quoteId.success) notFound();
   const db = await getDb();
   const scope = scopeOf(db, user);
-  const [revision, job, hardware] = await Promise.all([getRevision(scope, quoteId.data), getJob(scope, jobId), listHardware(scope)]);
-  if (!revision || !job || revision.jobId !== jobId) notFound();
+  const [revision, job, hardware] = await found(Promise.all([getRevision(scope, quoteId.data), getJob(scope, jobId), listHardware(scope)]));
+  if (revision.jobId !== jobId) notFound();
   const [customer] = job.customerId
     ? await db
         .select({ id: customers.id, name: customers.name, email: customers.email })

@@ -2,7 +2,6 @@ import { getJob } from '@/db/queries/jobs';
 import { listJobParts } from '@/db/queries/parts';
 import { getShopSettings } from '@/db/queries/shops';
 import { cutListCsv } from '@/lib/cut-list/export-csv';
-import { notFound } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 
 /** A file name from the job's name: letters, digits and dashes only. */
@@ -17,7 +16,6 @@ const fileName = (job: string) =>
 // GET /api/jobs/:id/cut-list/export – the cut list as a CSV file in the shop's unit
 export const GET = route({ permission: 'jobs:read', params: idParams }, async ({ scope, params }) => {
   const [job, settings] = await Promise.all([getJob(scope, params.id), getShopSettings(scope)]);
-  if (!job || !settings) throw notFound('That job');
   const csv = cutListCsv(await listJobParts(scope, job.id), settings.units);
   // A byte-order mark so spreadsheets open the inch and fraction marks as UTF-8.
   return new Response(`\uFEFF${csv}\r\n`, {

@@ -1,7 +1,7 @@
 import { addParts } from '@/db/queries/parts';
 import { validateUploadRows } from '@/lib/cut-list/validate-rows';
 import { snapReport } from '@/lib/cut-list/stock-match';
-import { invalid, notFound } from '@/server/api/errors';
+import { invalid } from '@/server/api/errors';
 import { idParams, route } from '@/server/api/route';
 import { CUT_LIST_FIELD_LABELS, cutListImportSchema } from '@/shared/schemas/cut-list-upload';
 import { stockOffers } from '@/app/api/materials/stock-offers';
@@ -28,7 +28,6 @@ export const POST = route(
       report.valid.map((v) => v.part),
       'upload',
     );
-    if (!added) throw notFound('That job');
     return { imported: added.length, skipped: report.invalidCount, skippedLines: report.rows.filter((r) => !r.ok).map((r) => r.line) };
   },
 );
