@@ -117,6 +117,16 @@ export async function deleteCustomer({ db, shopId, userId }: Scope, id: string):
   });
 }
 
+/** The customer a job is for, as its quote and e-mail need them; null for a job that has none. */
+export async function customerOfJob({ db, shopId }: ShopScope, job: { customerId: string | null }): Promise<CustomerRow | null> {
+  if (!job.customerId) return null;
+  const [row] = await db
+    .select()
+    .from(customers)
+    .where(and(eq(customers.shopId, shopId), eq(customers.id, job.customerId)));
+  return row ?? null;
+}
+
 /** Name spelled the way the migration compares them: trimmed, runs of spaces made one. */
 export const tidyName = (name: string) => name.trim().replace(/\s+/g, ' ');
 

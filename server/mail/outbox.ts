@@ -1,3 +1,5 @@
+import type { ShopScope } from '@/db/scope';
+import { notFound } from '@/lib/errors';
 /**
  * The outbox: how any feature sends mail. Call `enqueueMail(tx, message)` inside the transaction that makes the
  * change the mail reports (an invite, a reset link, a quote sent), so the mail exists exactly when the change does;
@@ -97,7 +99,7 @@ export interface OutboxEntry {
 }
 
 /** A shop's recent outbox, newest first (the Outbox page); `failedOnly` for what needs the owner's eye. */
-export async function shopOutbox(db: Db, shopId: string, { failedOnly = false, limit = 100 } = {}): Promise<OutboxEntry[]> {
+export async function shopOutbox({ db, shopId }: ShopScope, { failedOnly = false, limit = 100 } = {}): Promise<OutboxEntry[]> {
   const rows = await db
     .select()
     .from(mailOutbox)
@@ -118,12 +120,18 @@ export async function shopOutbox(db: Db, shopId: string, { failedOnly = false, l
   }));
 }
 
+/** The Message-IDs of every mail the shop sent (the demo's Sent mail page shows only the shop's own). */
+export async function shopMessageIds({ db, shopId }: ShopScope): Promise<Set<string>> {
+  const rows = await db.select({ id: mailOutbox.messageId }).from(mailOutbox).where(eq(mailOutbox.shopId, shopId));
+  return new Set(rows.map((r) => r.id));
+}
+
 /** Puts a failed message back in the queue (the owner's "Try again"), keeping its Message-ID. */
-export async function retryFailedMail(db: Db, shopId: string, id: string): Promise<boolean> {
+export async function retryFailedMail({ db, shopId }: ShopScope, id: string): Promise<void> {
   const rows = await db
     .update(mailOutbox)
     .set({ status: 'pending', attempts: 0, staleClaims: 0, nextAttemptAt: new Date(), lastError: null, claimedUntil: null })
     .where(and(eq(mailOutbox.shopId, shopId), eq(mailOutbox.id, id), eq(mailOutbox.status, 'failed')))
     .returning({ id: mailOutbox.id });
-  return rows.length === 1;
+  if (rows.length !== 1) throw notFound('That failed message');
 }

@@ -101,6 +101,13 @@ const RULES: Rule[] = [
     why: 'the database code reads and writes rows; HTTP and screens are above it (it speaks lib/errors.ts, not HTTP statuses)',
   },
   {
+    layer: 'app',
+    files: 'code',
+    refusedLayers: ['bench', 'seeds', 'scripts', 'tests'],
+    refusedPackages: ['drizzle-orm', '@electric-sql/pglite', 'pg', 'postgres'],
+    why: 'pages and route handlers read and write through db/queries (and server/), never with SQL of their own',
+  },
+  {
     layer: 'server',
     files: 'code',
     refusedLayers: ['app', 'client', 'components', 'workers', 'bench', 'tests'],
@@ -112,6 +119,7 @@ const RULES: Rule[] = [
 /** Modules that db/ may not import even inside server/ — HTTP lives above the database code. */
 const REFUSED_MODULES: { layer: Layer; module: string; why: string }[] = [
   { layer: 'db', module: 'server/api', why: 'queries throw lib/errors.ts refusals; server/api/errors.ts maps them to HTTP' },
+  { layer: 'app', module: 'db/schema', why: 'a page or a route asks db/queries for what it needs; the tables are the queries’ business' },
 ];
 
 function filesOf(dir: string): string[] {

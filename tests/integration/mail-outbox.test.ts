@@ -157,9 +157,9 @@ describe(`the outbox (${process.env.TEST_DATABASE_URL ? 'PostgreSQL' : 'PGlite'}
     const r = await row(m.id);
     expect(r).toMatchObject({ status: 'failed', attempts: 1 });
     expect(r.lastError).toMatch(/^Refused by the mail server: 550.*No such mailbox here/);
-    const failed = await shopOutbox(db, fx.mine.id, { failedOnly: true });
+    const failed = await shopOutbox({ db, shopId: fx.mine.id }, { failedOnly: true });
     expect(failed.find((f) => f.id === m.id)).toMatchObject({ subject: 'Goes nowhere', status: 'failed' });
-    expect(await shopOutbox(db, fx.theirs.id)).toEqual([]);
+    expect(await shopOutbox({ db, shopId: fx.theirs.id })).toEqual([]);
     expect(await caughtWith(m.messageId)).toEqual([]);
   });
 

@@ -6,7 +6,7 @@ import { listYieldLedger } from '@/db/queries/stock-yield';
 import * as jobPlans from '@/app/api/jobs/[id]/plans/route';
 import * as nestRequestRoute from '@/app/api/jobs/[id]/nest-request/route';
 import type { JobPlanSummary } from '@/db/queries/plan-drafts';
-import { getPartPage } from '@/app/(app)/parts/[id]/part-page-data';
+import { getPartPage } from '@/db/queries/part-page';
 import { partTagPath } from '@/lib/saw-order/part-tags';
 import type { NestRequestInput } from '@/shared/schemas/nesting';
 import { setUpTwoShopDatabase, type TwoShops } from '../support/two-shop-database';
@@ -144,7 +144,7 @@ describe('nesting and cutting the re-cuts', () => {
     const [recut] = (await recutList(fx.cutter, job.id)).body;
     const placed = firstPart(again.plan);
     expect(partTagPath(again.id, placed)).toBe(`/parts/${recut.id}?plan=${again.id}&instance=1`);
-    const page = await getPartPage(db, fx.mine.id, recut.id, { drafts: false });
+    const page = await getPartPage({ db, shopId: fx.mine.id }, recut.id, { drafts: false });
     expect(page).toMatchObject({
       recutOf: `${recut.label} #${recut.instance}`,
       part: { lengthMm: recut.lengthMm, widthMm: recut.widthMm, material: recut.material },

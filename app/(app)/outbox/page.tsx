@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getDb } from '@/db/client';
@@ -15,7 +16,7 @@ const when = (iso: string) => new Date(iso).toLocaleString('en-GB', { dateStyle:
 
 export default async function OutboxPage() {
   const user = await requirePageUser('mail:manage');
-  const entries = await shopOutbox(await getDb(), user.shopId);
+  const entries = await shopOutbox(scopeOf(await getDb(), user));
   const failed = entries.filter((e) => e.status === 'failed');
   const demo = mailConfig().mode === 'catcher';
   return (

@@ -1,13 +1,13 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { eq } from 'drizzle-orm';
 import { getDb } from '@/db/client';
-import { mailOutbox } from '@/db/schema';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/server/auth/session';
 import { listCaughtMail } from '@/server/mail/caught';
+import { shopMessageIds } from '@/server/mail/outbox';
 import { mailConfig } from '@/lib/mail/config';
 
 export const metadata: Metadata = { title: 'Sent mail' };
@@ -26,7 +26,7 @@ export default async function SentMailPage({ searchParams }: { searchParams: Pro
   if (config.mode !== 'catcher') notFound();
   const db = await getDb();
   // The catcher holds every shop's mail; show only this shop's.
-  const mine = new Set((await db.select({ id: mailOutbox.messageId }).from(mailOutbox).where(eq(mailOutbox.shopId, user.shopId))).map((r) => r.id));
+  const mine = await shopMessageIds(scopeOf(db, user));
   const mails = (await listCaughtMail(config.dir)).filter((m) => m.messageId && mine.has(m.messageId));
   const { m } = await searchParams;
   const open = mails.find((mail) => mail.id === m) ?? mails[0];

@@ -1,3 +1,4 @@
+import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { getDb } from '@/db/client';
@@ -10,7 +11,7 @@ export const metadata: Metadata = { title: 'Team' };
 
 export default async function TeamPage() {
   const user = await requirePageUser('team:manage');
-  const failed = (await shopOutbox(await getDb(), user.shopId, { failedOnly: true, limit: 20 })).filter(
+  const failed = (await shopOutbox(scopeOf(await getDb(), user), { failedOnly: true, limit: 20 })).filter(
     (m) => m.kind === 'invite' || m.kind === 'password-reset',
   );
   return (

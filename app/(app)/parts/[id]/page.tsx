@@ -11,7 +11,8 @@ import { PlanStatusBadge } from '@/components/saw-order/plan-status-badge';
 import { can } from '@/lib/auth/permissions';
 import { requirePageUser } from '@/server/auth/session';
 import { formatLength } from '@/lib/units/format-length';
-import { getPartPage } from './part-page-data';
+import { getPartPage } from '@/db/queries/part-page';
+import { found } from '@/server/page-data';
 
 export const metadata: Metadata = { title: 'Part' };
 
@@ -23,11 +24,7 @@ export default async function PartPage({ params, searchParams }: { params: Promi
   if (!id.success) notFound();
   const db = await getDb();
   const scope = scopeOf(db, user);
-  const [data, settings] = await Promise.all([
-    getPartPage(db, user.shopId, id.data, { drafts: can(user.role, 'plans:write') }),
-    getShopSettings(scope),
-  ]);
-  if (!data) notFound();
+  const [data, settings] = await found(Promise.all([getPartPage(scope, id.data, { drafts: can(user.role, 'plans:write') }), getShopSettings(scope)]));
   const { plan: planId, instance } = query.parse(await searchParams);
   const { part, job, plans } = data;
   const len = (mm: number) => formatLength(mm, settings.units);

@@ -1,12 +1,11 @@
+import { listStock } from '@/db/queries/stock';
 import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { asc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { getDb } from '@/db/client';
-import { stockItems } from '@/db/schema';
 import { getPurchaseOrder } from '@/db/queries/purchase-orders';
 import { getShopSettings } from '@/db/queries/shops';
 import { PurchaseOrderEditor } from '@/components/buying/purchase-order-editor';
@@ -25,17 +24,7 @@ export default async function PurchaseOrderPage({ params }: { params: Promise<{ 
   if (!id.success) notFound();
   const db = await getDb();
   const scope = scopeOf(db, user);
-  const [settings, order, items] = await found(
-    Promise.all([
-      getShopSettings(scope),
-      getPurchaseOrder(scope, id.data),
-      db
-        .select()
-        .from(stockItems)
-        .where(eq(stockItems.shopId, user.shopId))
-        .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
-    ]),
-  );
+  const [settings, order, items] = await found(Promise.all([getShopSettings(scope), getPurchaseOrder(scope, id.data), listStock(scope)]));
   const when = (iso: string) => formatShopDateTime(new Date(iso), settings.timeZone);
   const sizes = items.map((i) => ({
     id: i.id,

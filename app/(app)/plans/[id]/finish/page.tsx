@@ -1,3 +1,4 @@
+import { getJob } from '@/db/queries/jobs';
 import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
@@ -5,9 +6,7 @@ import { exactLengthText } from '@/lib/cut-list/exact-length';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { eq } from 'drizzle-orm';
 import { getDb } from '@/db/client';
-import { jobs } from '@/db/schema';
 import { getPlan } from '@/db/queries/plan-document';
 import { getShopSettings } from '@/db/queries/shops';
 import { FinishPlanForm, type FinishPiece } from '@/components/stock/finish-plan-form';
@@ -30,7 +29,7 @@ export default async function FinishPlanPage({ params }: { params: Promise<{ id:
   const [plan, settings] = await found(Promise.all([getPlan(scope, id.data), getShopSettings(scope)]));
   // Drafts exist only for people who may edit plans, as in the API (GET /api/plans/:id).
   if (plan.status === 'draft' && !can(user.role, 'plans:write')) notFound();
-  const [job] = await db.select({ name: jobs.name }).from(jobs).where(eq(jobs.id, plan.jobId));
+  const job = await getJob(scope, plan.jobId);
   const len = (mm: number) => formatLength(mm, settings.units);
   const min = minOffcutFor(plan.request, settings);
   const labels = new Map((plan.request?.parts ?? []).map((p) => [p.id, p.label || p.id]));
@@ -56,7 +55,7 @@ export default async function FinishPlanPage({ params }: { params: Promise<{ id:
       </Link>
       <PageHeader
         title={`Finish: ${plan.name}`}
-        lead={`${job?.name ?? ''} · when the last cut is made, put the offcuts on the rack and record any damaged parts. The stock the plan reserved is taken off the count.`}
+        lead={`${job.name} · when the last cut is made, put the offcuts on the rack and record any damaged parts. The stock the plan reserved is taken off the count.`}
       />
       {open ? (
         <FinishPlanForm planId={plan.id} pieces={pieces} units={settings.units} defaultLocation="" />

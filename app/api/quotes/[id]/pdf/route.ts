@@ -1,5 +1,4 @@
-import { eq } from 'drizzle-orm';
-import { customers } from '@/db/schema';
+import { customerOfJob } from '@/db/queries/customers';
 import { getJob } from '@/db/queries/jobs';
 import { getRevision, quotePdfInput } from '@/db/queries/quotes';
 import { getShopSettings } from '@/db/queries/shops';
@@ -8,11 +7,11 @@ import { quotePdf } from '@/lib/quotes/quote-pdf';
 import { pdfFileName } from '@/lib/saw-order/pdf-text';
 
 // GET /api/quotes/:id/pdf – the customer's copy of a quote revision as a PDF (prices only: no cost, margin or hours)
-export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ scope, db, params }) => {
+export const GET = route({ permission: 'quotes:read', params: idParams }, async ({ scope, params }) => {
   const revision = await getRevision(scope, params.id);
   const [job, shop] = await Promise.all([getJob(scope, revision.jobId), getShopSettings(scope)]);
-  const [customer] = job.customerId ? await db.select().from(customers).where(eq(customers.id, job.customerId)) : [];
-  const bytes = await quotePdf(quotePdfInput(revision, job, customer ?? null, shop));
+  const customer = await customerOfJob(scope, job);
+  const bytes = await quotePdf(quotePdfInput(revision, job, customer, shop));
   return new Response(new Uint8Array(bytes), {
     headers: {
       'content-type': 'application/pdf',

@@ -1,12 +1,11 @@
+import { customerOfJob } from '@/db/queries/customers';
 import { found } from '@/server/page-data';
 import { scopeOf } from '@/db/scope';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { and, eq } from 'drizzle-orm';
 import { getDb } from '@/db/client';
-import { customers } from '@/db/schema';
 import { formatMoney } from '@/lib/costing/money';
 import { formatShopDateTime } from '@/lib/dates/shop-time';
 import { getJob } from '@/db/queries/jobs';
@@ -26,12 +25,7 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
   const scope = scopeOf(db, user);
   const [revision, job, hardware] = await found(Promise.all([getRevision(scope, quoteId.data), getJob(scope, jobId), listHardware(scope)]));
   if (revision.jobId !== jobId) notFound();
-  const [customer] = job.customerId
-    ? await db
-        .select({ id: customers.id, name: customers.name, email: customers.email })
-        .from(customers)
-        .where(and(eq(customers.shopId, user.shopId), eq(customers.id, job.customerId)))
-    : [];
+  const customer = await customerOfJob(scope, job);
   const when = (iso: string | null) => (iso ? formatShopDateTime(new Date(iso), shop.timeZone) : '');
   return (
     <div>
@@ -71,7 +65,7 @@ export default async function QuotePage({ params }: { params: Promise<{ id: stri
         revision={revision}
         hardware={hardware}
         customer={{ shopName: shop.name, customer: job.customer, jobName: job.name }}
-        sendTo={customer ?? null}
+        sendTo={customer && { id: customer.id, name: customer.name, email: customer.email }}
       />
     </div>
   );

@@ -1,7 +1,9 @@
 import 'server-only';
 import { and, desc, eq, ne, sql } from 'drizzle-orm';
-import type { Db } from '@/db/open';
-import { customers, jobs, parts, plans, recuts } from '@/db/schema';
+import type { Db } from '../open';
+import type { ShopScope } from '../scope';
+import { notFound } from '@/lib/errors';
+import { customers, jobs, parts, plans, recuts } from '../schema';
 import { readPlan } from '@/lib/nesting';
 import { recutLabel } from '@/lib/recuts/recuts';
 import { stockPieceName } from '@/lib/nesting/saw-order';
@@ -11,7 +13,7 @@ import { stockPieceName } from '@/lib/nesting/saw-order';
  * piece each instance is cut from. Drafts only for people who may edit plans; cancelled plans are left out. A tag of
  * a re-cut plan carries the re-cut's id: its page is the re-cut, sized as the damaged part was.
  */
-export async function getPartPage(db: Db, shopId: string, partId: string, { drafts }: { drafts: boolean }) {
+export async function getPartPage({ db, shopId }: ShopScope, partId: string, { drafts }: { drafts: boolean }) {
   const [part] = await db
     .select()
     .from(parts)
@@ -21,7 +23,7 @@ export async function getPartPage(db: Db, shopId: string, partId: string, { draf
     ? partPage(db, shopId, part, { drafts, recutOf: null })
     : recut
       ? partPage(db, shopId, recut.part, { drafts, recutOf: recut.of })
-      : null;
+      : Promise.reject(notFound('That part'));
 }
 
 async function recutAsPart(db: Db, shopId: string, id: string) {
