@@ -10,7 +10,7 @@ import { readPlan } from '@/lib/nesting';
 import { buildQuoteLines, type SlideNeed } from '@/lib/quotes/build-lines';
 import { quoteLength, quoteNominal } from '@/lib/quotes/quote-text';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
-import { quoteNumberText, revisionLetter, type QuoteRevisionPatch } from '@/shared/schemas/quote';
+import { quoteNumberText, revisionLetter, type QuoteLine, type QuoteRevisionPatch } from '@/shared/schemas/quote';
 import { formatMoney } from '@/lib/costing/money';
 import { shopDay } from '@/lib/dates/shop-time';
 import { enqueueMail } from '@/server/mail/outbox';
@@ -23,7 +23,7 @@ import { getJob } from './jobs';
 import { newQuoteLink, refuseNewRevisionAfter } from './quote-answers';
 import { listDrawerSchedules } from './drawer-schedules';
 import { syncJobStatus } from './job-status';
-import { getPricing, listHardware } from './pricing';
+import { getPricing, listHardware, type PricingView } from './pricing';
 import { getShopSettings } from './shops';
 import { getTakeoff } from './takeoff';
 import { invalid, notFound, conflict } from '@/lib/errors';
@@ -192,39 +192,43 @@ async function drawerFacts(db: Db, shopId: string, jobId: string, describe: (mm:
 }
 
 /** Makes a job's new quote (the shop's next number, rev A) with lines built from the job and, if named, one of its plans. */
-export async function createQuote({ db, shopId, userId }: Scope, jobId: string, planId: string | null): Promise<QuoteRevisionView> {
+export async function createQuote(scope: Scope, jobId: string, planId: string | null): Promise<QuoteRevisionView> {
+  await refuseForeignPlan(scope, jobId, planId);
+  const [{ lines }, priced] = await Promise.all([draftQuoteLines(scope, jobId, planId), getPricing(scope)]);
+  const id = await insertQuote(scope, { jobId, planId, lines, ...priced });
+  return getRevision(scope, id);
+}
+
+/** A quote is for a job of the shop, priced from one of that job's plans (not a cancelled one), or from none. */
+async function refuseForeignPlan({ db, shopId }: ShopScope, jobId: string, planId: string | null) {
   const [job] = await db
     .select({ id: jobs.id })
     .from(jobs)
     .where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)));
   if (!job) throw notFound('That job');
-  if (planId) {
-    const [plan] = await db
-      .select({ id: plans.id })
-      .from(plans)
-      .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), eq(plans.id, planId), ne(plans.status, 'cancelled')));
-    if (!plan) throw invalid('That plan is not one of this job’s (or it was cancelled).', { planId: ['Pick one of the job’s plans.'] });
-  }
-  const [settings, priced, hardware] = await Promise.all([getShopSettings({ db, shopId }), getPricing({ db, shopId }), listHardware({ db, shopId })]);
-  if (!settings || !priced) throw notFound('The shop');
-  const { pricing, currency } = priced;
+  if (!planId) return;
+  const [plan] = await db
+    .select({ id: plans.id })
+    .from(plans)
+    .where(and(eq(plans.shopId, shopId), eq(plans.jobId, jobId), eq(plans.id, planId), ne(plans.status, 'cancelled')));
+  if (!plan) throw invalid('That plan is not one of this job’s (or it was cancelled).', { planId: ['Pick one of the job’s plans.'] });
+}
+
+/** The first draft's lines: the plan's takeoff, the drawer schedules' hardware and labour counts, at the shop's prices. */
+async function draftQuoteLines(scope: ShopScope, jobId: string, planId: string | null) {
+  const { db, shopId } = scope;
+  const [settings, { pricing }, hardware] = await Promise.all([getShopSettings(scope), getPricing(scope), listHardware(scope)]);
   const describe = (mm: number) => quoteLength(mm, settings.units);
-  const [takeoff, drawers, [faces]] = await Promise.all([
-    planId ? getTakeoff({ db, shopId }, jobId, planId) : null,
+  const [takeoff, drawers, [faces], plan] = await Promise.all([
+    planId ? getTakeoff(scope, jobId, planId) : null,
     drawerFacts(db, shopId, jobId, describe),
     db
       .select({ mm2: sql<number>`coalesce(sum(2 * ${parts.lengthMm} * ${parts.widthMm} * ${parts.quantity}), 0)`.mapWith(Number) })
       .from(parts)
       .where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId))),
+    planId ? db.select({ document: plans.document }).from(plans).where(eq(plans.id, planId)) : [],
   ]);
-  let cuts = 0;
-  let piecesHandled = 0;
-  if (planId) {
-    const [row] = await db.select({ document: plans.document }).from(plans).where(eq(plans.id, planId));
-    const totals = planTotals(readPlan(row.document).pieces);
-    cuts = totals.cuts;
-    piecesHandled = totals.pieces;
-  }
+  const { cuts, pieces: piecesHandled } = plan[0] ? planTotals(readPlan(plan[0].document).pieces) : { cuts: 0, pieces: 0 };
   const lines = buildQuoteLines({
     takeoff: takeoff
       ? { lines: [...takeoff.pull, ...takeoff.buy], allowancePercent: takeoff.allowancePercent, allowanceCents: takeoff.totals.allowanceCents }
@@ -244,8 +248,15 @@ export async function createQuote({ db, shopId, userId }: Scope, jobId: string, 
     describeSize: (t) =>
       `${t.material} ${t.nominalThickness ? quoteNominal(t.nominalThickness) : describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
   });
+  return { lines };
+}
 
-  const id = await db.transaction(async (tx) => {
+/** Numbers the quote (the next of the shop's) and stores its revision 0 with the shop's current terms. */
+async function insertQuote(
+  { db, shopId, userId }: Scope,
+  { jobId, planId, lines, pricing, currency }: { jobId: string; planId: string | null; lines: QuoteLine[] } & PricingView,
+): Promise<string> {
+  return db.transaction(async (tx) => {
     // The shop row is locked so two quotes made at once never take one number.
     await tx.select({ id: shops.id }).from(shops).where(eq(shops.id, shopId)).for('update');
     const [{ next }] = await tx
@@ -283,7 +294,6 @@ export async function createQuote({ db, shopId, userId }: Scope, jobId: string, 
     });
     return rev.id;
   });
-  return getRevision({ db, shopId }, id);
 }
 
 /** Locks a revision of this shop for a change. */
