@@ -43,44 +43,84 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
     return { bins: [], unplaced: [...prior, ...Array.from(p.ids, (itemId) => ({ itemId, reason: 'no-stock-left' as const }))] };
   }
   const f = p.filler.create(p.n, p.kerf);
-  const stock = p.types.map((t) => (t.count === null ? Infinity : t.count));
-  const scratch = new Int32Array(p.n);
-  const mark = new Uint8Array(p.n);
+  const search: Search = {
+    p,
+    f,
+    stock: p.types.map((t) => (t.count === null ? Infinity : t.count)),
+    scratch: new Int32Array(p.n),
+    mark: new Uint8Array(p.n),
+    keeper: bestKeeper(p, f, prior, onProgress, t0),
+    orderKeys: options.style === 'strips' ? STRIP_ORDER_KEYS : PANEL_ORDER_KEYS,
+    signal,
+  };
+  const constructions = constructor(search);
+  await constructPhase(search, constructions);
+  await improvePhase(search, constructions, options, limits, t0);
+
+  const result = toResult(p, search.keeper.best!, search.f, prior);
+  if (onProgress) onProgress(progressOf(p, result, search.keeper.best!, now() - t0));
+  return result;
+}
+
+/** What one packing run works with: the problem, its filler and scratch space, the stock left, the best so far. */
+interface Search {
+  p: Problem;
+  f: ReturnType<Problem['filler']['create']>;
+  stock: number[];
+  scratch: Int32Array;
+  mark: Uint8Array;
+  keeper: ReturnType<typeof bestKeeper>;
+  orderKeys: readonly OrderKey[];
+  signal?: AbortSignal;
+}
+
+/**
+ * The constructive heuristics as numbered combinations of part order × placement rule (× closing policy with several
+ * bin types); `run(c)` packs combination c from scratch and offers the result to the keeper.
+ */
+function constructor({ p, f, stock, scratch, mark, keeper, orderKeys, signal }: Search) {
   const all = Int32Array.from({ length: p.n }, (_, i) => i);
-
-  const keeper = bestKeeper(p, f, prior, onProgress, t0);
-  const { offer, breathe } = keeper;
-
-  // Constructive phase: as many order × rule combinations as the job size allows (never the clock), so the first
-  // plan is the same under any load and comes fast even for thousands of parts.
-  const orderKeys = options.style === 'strips' ? STRIP_ORDER_KEYS : PANEL_ORDER_KEYS;
   const orders = orderKeys.map((k) => sortedOrder(p, all, k));
   // With several bin types, each combination runs with and without closing on the cheapest bin that takes all.
   const policies = p.types.length > 1 ? 2 : 1;
-  const combos = orderKeys.length * p.filler.rules * policies;
-  const construct = async (c: number) => {
+  const count = orderKeys.length * p.filler.rules * policies;
+  const run = async (c: number) => {
     // Rules vary fastest, so a short run still mixes them; the classic area order comes first.
     const order = orders[Math.floor(c / (p.filler.rules * policies)) % orders.length];
     const rule = Math.floor(c / policies) % p.filler.rules;
     const steps = packPoolSteps(p, f, order, stock.slice(), rule, null, 1, scratch, mark, c % policies === 0);
     for (;;) {
       const s = steps.next();
-      if (s.done) return void offer({ bins: s.value.bins, noStock: s.value.left });
-      await breathe();
+      if (s.done) return void keeper.offer({ bins: s.value.bins, noStock: s.value.left });
+      await keeper.breathe();
       // A cancel drops this construction unless it is the first (a plan must come back).
       if (signal?.aborted && keeper.best) return;
     }
   };
-  let nextCombo = 0;
-  const firstCombos = Math.max(1, Math.min(combos, Math.floor(CONSTRUCT_WORK / (p.n * p.types.length))));
-  while (nextCombo < firstCombos) {
-    await construct(nextCombo++);
+  return { count, run, next: 0 };
+}
+
+/**
+ * Constructive phase: as many combinations as the job size allows (never the clock), so the first plan is the same
+ * under any load and comes fast even for thousands of parts.
+ */
+async function constructPhase({ p, keeper, signal }: Search, constructions: ReturnType<typeof constructor>) {
+  const first = Math.max(1, Math.min(constructions.count, Math.floor(CONSTRUCT_WORK / (p.n * p.types.length))));
+  while (constructions.next < first) {
+    await constructions.run(constructions.next++);
     if (signal?.aborted) break;
-    await breathe();
+    await keeper.breathe();
   }
   keeper.reportNow();
+}
 
-  // Improvement phase, on the clock: the remaining combinations, then re-packing.
+/**
+ * Improvement phase, on the clock: the remaining combinations, then re-packing — eliminating bins when there is one
+ * bin type with enough stock and a bin-count objective, improving the mix otherwise — until the budget, a cancel or
+ * the lower bound.
+ */
+async function improvePhase(search: Search, constructions: ReturnType<typeof constructor>, options: PackOptions, limits: PackLimits, t0: number) {
+  const { p, f, stock, scratch, mark, keeper, orderKeys, signal } = search;
   let lb: number | null | undefined; // computed on the first iteration: a zero budget never pays for it
   const rng = mulberry32(options.seed);
   let cur: Solution = keeper.best!;
@@ -93,20 +133,19 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
     const b: Solution = keeper.best!;
     if (lb === undefined) lb = binLowerBound(p);
     if (lb !== null && b.noStock.length === 0 && b.bins.length <= lb && p.objective !== 'cuts') break;
-    if (nextCombo < combos) {
-      await construct(nextCombo++);
+    if (constructions.next < constructions.count) {
+      await constructions.run(constructions.next++);
       cur = keeper.best!;
       curScore = keeper.bestScore!;
-      await breathe();
+      await keeper.breathe();
       continue;
     }
-    // One bin type with enough stock and a bin-count objective: eliminate bins; otherwise improve the mix.
     if (!pooled && p.types.length === 1 && p.objective !== 'cuts' && b.noStock.length === 0 && b.bins.length > 1)
       pooled = new PoolSearch(p, b, orderKeys);
     if (pooled) {
       const fewer = pooled.step(f, rng, ATTEMPTS_PER_BIN, scratch, mark);
-      if (fewer) offer(fewer);
-      await breathe();
+      if (fewer) keeper.offer(fewer);
+      await keeper.breathe();
       continue;
     }
     if (cur.bins.length === 0) break;
@@ -115,14 +154,10 @@ export async function packWithLimits(items: PackItem[], bins: BinType[], options
     if (compareScores(p.objective, candScore, curScore) < 0) {
       cur = cand;
       curScore = candScore;
-      offer(cand);
+      keeper.offer(cand);
     }
-    await breathe();
+    await keeper.breathe();
   }
-
-  const result = toResult(p, keeper.best!, f, prior);
-  if (onProgress) onProgress(progressOf(p, result, keeper.best!, now() - t0));
-  return result;
 }
 
 /**
