@@ -11,7 +11,8 @@ import type { ShopUnits } from '@/shared/schemas/units';
 import type { GrainRule } from '@/shared/schemas/drawer-schedule';
 import { SCHEDULE_OWNED_FIELDS, type PartInput, type PartPatch } from '@/shared/schemas/part';
 import { cellText, COLUMN_TITLES, COLUMNS, isLengthColumn, parseCell, type Column, type TextColumn } from './cell-parsers';
-import { PENDING_ROW, usePartMutations, type ListedPart } from './use-parts';
+import { PENDING_ROW, usePartMutations } from './use-parts';
+import type { ListedPart } from '@/shared/wire/jobs';
 
 type CellErrors = Record<string, string>;
 const errorKey = (rowId: string, column: Column) => `${rowId}:${column}`;

@@ -2,14 +2,10 @@ import { parseLength, type LengthUnit } from '@/lib/units/parse-length';
 import { CUT_LIST_FIELD_LABELS, type CutListField, type CutListUpload } from '@/shared/schemas/cut-list-upload';
 import { partInputSchema, type PartInput } from '@/shared/schemas/part';
 import type { GrainRule } from '@/shared/schemas/drawer-schedule';
+import type { RowProblem, UploadRowResult } from '@/shared/wire/jobs';
 import { UPLOAD_LIMITS } from './limits';
 
-export interface RowProblem {
-  field: CutListField | 'row';
-  message: string;
-}
-
-export type UploadRowResult = { line: number; ok: true; part: PartInput } | { line: number; ok: false; problems: RowProblem[] };
+export type { RowProblem, UploadRowResult };
 
 export interface UploadReport {
   rows: UploadRowResult[];

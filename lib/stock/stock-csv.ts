@@ -4,6 +4,7 @@ import { lengthInput } from '@/shared/schemas/units';
 import { thicknessInput } from '@/shared/schemas/lumber';
 import { thicknessMm } from '@/lib/lumber/thickness';
 import { stockItemSchema, type StockItemValues } from '@/shared/schemas/stock';
+import type { StockCsvError } from '@/shared/wire/stock';
 
 /**
  * Reading a stock file: one sheet or board size per row. Every bad row is named with its line and reasons, and
@@ -55,10 +56,7 @@ export interface StockCsvRow {
   line: number;
   item: StockItemValues;
 }
-export interface StockCsvError {
-  line: number;
-  messages: string[];
-}
+export type { StockCsvError };
 export interface StockCsvResult {
   rows: StockCsvRow[];
   errors: StockCsvError[];
