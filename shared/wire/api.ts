@@ -7,10 +7,10 @@
  * Path parameters come from the key itself (`:id` → `params: { id }`), named as the route's folders are.
  */
 import type { z } from 'zod';
-import type { customerInputSchema, customerPatchSchema } from '@/shared/schemas/customer';
+import type { Customer, customerInputSchema, customerPatchSchema } from '@/shared/schemas/customer';
 import type { cutListImportSchema, cutListUploadSchema } from '@/shared/schemas/cut-list-upload';
 import type { DrawerScheduleInput } from '@/shared/schemas/drawer-schedule';
-import type { jobInputSchema, jobPatchSchema, JobSummary } from '@/shared/schemas/job';
+import type { jobInputSchema, jobPatchSchema, JobStatus, JobSummary } from '@/shared/schemas/job';
 import type { JobListPage, JobListQuery } from '@/shared/schemas/job-list';
 import type { NestRequestInput } from '@/shared/schemas/nesting';
 import type { Part, partInputSchema, partPatchSchema } from '@/shared/schemas/part';
@@ -41,8 +41,6 @@ import type {
   stockItemPatchSchema,
   stockItemSchema,
 } from '@/shared/schemas/stock';
-import type { Customer } from '@/shared/schemas/customer';
-import type { JobStatus } from '@/shared/schemas/job';
 import type { TeamMember, teamMemberInputSchema, teamMemberPatchSchema } from '@/shared/schemas/user';
 import type { PurchaseOrdersMade, PurchaseOrderView } from './buying';
 import type { CutListImported, CutListPreview, ListedPart, SavedDrawerSchedule } from './jobs';
