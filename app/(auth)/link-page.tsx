@@ -32,11 +32,7 @@ export async function LinkPage({ purpose, token }: { purpose: LinkPurpose; token
         {invite ? `${state.name}, choose the password you will sign in with as ` : 'For '}
         <span className="break-all font-medium text-graphite">{state.email}</span>.
       </p>
-      <SetPasswordForm
-        endpoint={invite ? `/api/invites/${token}` : `/api/password-resets/${token}`}
-        email={state.email}
-        submitLabel={invite ? 'Set password and sign in' : 'Save and sign in'}
-      />
+      <SetPasswordForm link={{ purpose, token }} email={state.email} submitLabel={invite ? 'Set password and sign in' : 'Save and sign in'} />
     </div>
   );
 }

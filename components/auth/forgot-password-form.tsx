@@ -1,6 +1,7 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
+import { ApiError, call } from '@/client/api';
 
 export function ForgotPasswordForm() {
   const [done, setDone] = useState<string | null>(null);
@@ -12,15 +13,12 @@ export function ForgotPasswordForm() {
     const email = String(new FormData(event.currentTarget).get('email') ?? '');
     setPending(true);
     setError(null);
-    const res = await fetch('/api/password-resets', {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ email }),
-    });
-    const data = await res.json().catch(() => ({}));
+    try {
+      setDone((await call('POST /api/password-resets', { body: { email } })).message);
+    } catch (e) {
+      setError(e instanceof ApiError ? (e.fields.email?.[0] ?? e.message) : 'That did not work. Check the connection and try again.');
+    }
     setPending(false);
-    if (!res.ok) setError(data.fields?.email?.[0] ?? data.error ?? `That did not work (${res.status}).`);
-    else setDone(data.message);
   }
 
   if (done)

@@ -2,9 +2,16 @@
 
 import { signIn } from 'next-auth/react';
 import { useState, type FormEvent } from 'react';
+import { ApiError, call } from '@/client/api';
+
+/** Which single-use link the page opened: an invite, or a reset of a forgotten password. */
+export interface PasswordLink {
+  purpose: 'invite' | 'password-reset';
+  token: string;
+}
 
 /** Chooses a password through a single-use link, then signs in with it. */
-export function SetPasswordForm({ endpoint, email, submitLabel }: { endpoint: string; email: string; submitLabel: string }) {
+export function SetPasswordForm({ link, email, submitLabel }: { link: PasswordLink; email: string; submitLabel: string }) {
   const [error, setError] = useState<string | null>(null);
   const [pending, setPending] = useState(false);
 
@@ -18,10 +25,11 @@ export function SetPasswordForm({ endpoint, email, submitLabel }: { endpoint: st
     }
     setPending(true);
     setError(null);
-    const res = await fetch(endpoint, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ password }) });
-    const data = await res.json().catch(() => ({}));
-    if (!res.ok) {
-      setError(data.fields?.password?.[0] ?? data.error ?? `That did not work (${res.status}).`);
+    try {
+      const init = { params: { token: link.token }, body: { password } };
+      await (link.purpose === 'invite' ? call('POST /api/invites/:token', init) : call('POST /api/password-resets/:token', init));
+    } catch (e) {
+      setError(e instanceof ApiError ? (e.fields.password?.[0] ?? e.message) : 'That did not work. Check the connection and try again.');
       setPending(false);
       return;
     }

@@ -3,7 +3,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 
 export function BuyingSettingsForm({
   initial,
@@ -17,7 +17,7 @@ export function BuyingSettingsForm({
   const [on, setOn] = useState(initial.lowStockDigestTime !== '');
   const [time, setTime] = useState(initial.lowStockDigestTime || '07:00');
   const save = useMutation({
-    mutationFn: () => api('/api/settings/buying', { method: 'PATCH', body: { purchaseOrderDetails: details, lowStockDigestTime: on ? time : '' } }),
+    mutationFn: () => call('PATCH /api/settings/buying', { body: { purchaseOrderDetails: details, lowStockDigestTime: on ? time : '' } }),
     onSuccess: () => router.refresh(),
   });
   const fields = save.error instanceof ApiError ? save.error.fields : {};

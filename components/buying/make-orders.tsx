@@ -4,17 +4,14 @@ import Link from 'next/link';
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { api } from '@/client/api';
-
-interface Made {
-  orders: { id: string; title: string; supplier: string }[];
-}
+import { call } from '@/client/api';
+import type { ApiBody } from '@/shared/wire/api';
 
 /** Makes drafts (one per supplier) from the low-stock sizes, a plan's stock to buy, or an empty one; then opens them. */
 export function useMakeOrders() {
   const router = useRouter();
   return useMutation({
-    mutationFn: (body: unknown) => api<Made>('/api/purchase-orders', { method: 'POST', body }),
+    mutationFn: (body: ApiBody<'POST /api/purchase-orders'>) => call('POST /api/purchase-orders', { body }),
     onSuccess: ({ orders }) => {
       if (orders.length === 1) router.push(`/purchase-orders/${orders[0].id}`);
       else router.refresh();

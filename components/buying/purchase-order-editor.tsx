@@ -3,7 +3,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { formatMoney, toMinorUnits, minorPerMajor } from '@/lib/costing/money';
 
 export interface EditorSize {
@@ -97,27 +97,31 @@ export function PurchaseOrderEditor({
     supplier,
     supplierEmail: email.trim(),
     note,
-    lines: parsed.map((p) => ({ stockItemId: p.stockItemId, quantity: p.quantity, unitCostCents: p.unitCostCents })),
+    // Save and Send are enabled only when every row reads (rowsOk).
+    lines: parsed.map(({ stockItemId, quantity, unitCostCents }) => {
+      if (quantity === null || unitCostCents === null) throw new Error('Every line needs a whole quantity and a cost.');
+      return { stockItemId, quantity, unitCostCents };
+    }),
   });
   const save = useMutation({
-    mutationFn: () => api(`/api/purchase-orders/${order.id}`, { method: 'PATCH', body: patchBody() }),
+    mutationFn: () => call('PATCH /api/purchase-orders/:id', { params: { id: order.id }, body: patchBody() }),
     onSuccess: () => router.refresh(),
   });
   const send = useMutation({
     mutationFn: async () => {
-      if (dirty) await api(`/api/purchase-orders/${order.id}`, { method: 'PATCH', body: patchBody() });
-      return api(`/api/purchase-orders/${order.id}/send`, { method: 'POST', body: { supplierEmail: email.trim() } });
+      if (dirty) await call('PATCH /api/purchase-orders/:id', { params: { id: order.id }, body: patchBody() });
+      return call('POST /api/purchase-orders/:id/send', { params: { id: order.id }, body: { supplierEmail: email.trim() } });
     },
     onSuccess: () => router.refresh(),
   });
   const cancel = useMutation({
-    mutationFn: () => api(`/api/purchase-orders/${order.id}/cancel`, { method: 'POST' }),
+    mutationFn: () => call('POST /api/purchase-orders/:id/cancel', { params: { id: order.id } }),
     onSuccess: () => router.refresh(),
   });
   const receive = useMutation({
     mutationFn: () =>
-      api(`/api/purchase-orders/${order.id}/receive`, {
-        method: 'POST',
+      call('POST /api/purchase-orders/:id/receive', {
+        params: { id: order.id },
         body: {
           updateCosts,
           lines: order.lines.filter((l) => (receiving[l.id] ?? '').trim() !== '').map((l) => ({ lineId: l.id, quantity: Number(receiving[l.id]) })),

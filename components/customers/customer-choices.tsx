@@ -1,15 +1,14 @@
 'use client';
 
 import { useQuery } from '@tanstack/react-query';
-import { api } from '@/client/api';
-import type { Customer } from '@/shared/schemas/customer';
+import { call } from '@/client/api';
 
 /**
  * The shop's customers as choices for a customer field (`list` on the input): typing a name picks the customer of that
  * name, and a new name adds a customer when the job is saved.
  */
 export function CustomerChoices({ id }: { id: string }) {
-  const customers = useQuery({ queryKey: ['customers', ''], queryFn: () => api<Customer[]>('/api/customers') });
+  const customers = useQuery({ queryKey: ['customers', ''], queryFn: () => call('GET /api/customers') });
   return (
     <datalist id={id}>
       {(customers.data ?? []).map((c) => (

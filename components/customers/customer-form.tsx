@@ -3,7 +3,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import type { Customer } from '@/shared/schemas/customer';
 
 const FIELDS = [
@@ -16,6 +16,11 @@ const FIELDS = [
   ['notes', 'Notes', 'textarea'],
 ] as const;
 type Key = (typeof FIELDS)[number][0];
+type Values = Record<Key, string>;
+
+/** Only the fields that differ from the customer as saved. */
+const changesOf = (values: Values, customer: Customer): Partial<Values> =>
+  Object.fromEntries(Object.entries(values).filter(([k, v]) => v !== customer[k as Key]));
 
 /** Adds a customer (no `customer`) or edits one: only the fields changed are sent. */
 export function CustomerForm({ customer, onDone }: { customer?: Customer; onDone?: () => void }) {
@@ -23,10 +28,10 @@ export function CustomerForm({ customer, onDone }: { customer?: Customer; onDone
   const queryClient = useQueryClient();
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const save = useMutation({
-    mutationFn: (body: Partial<Record<Key, string>>) =>
+    mutationFn: (values: Values) =>
       customer
-        ? api<Customer>(`/api/customers/${customer.id}`, { method: 'PATCH', body })
-        : api<Customer>('/api/customers', { method: 'POST', body }),
+        ? call('PATCH /api/customers/:id', { params: { id: customer.id }, body: changesOf(values, customer) })
+        : call('POST /api/customers', { body: values }),
     onSuccess: (saved) => {
       void queryClient.invalidateQueries({ queryKey: ['customers'] });
       setFields({});
@@ -40,10 +45,9 @@ export function CustomerForm({ customer, onDone }: { customer?: Customer; onDone
   function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const form = new FormData(event.currentTarget);
-    const values = Object.fromEntries(FIELDS.map(([k]) => [k, String(form.get(k) ?? '').trim()])) as Record<Key, string>;
-    const body = customer ? Object.fromEntries(Object.entries(values).filter(([k, v]) => v !== customer[k as Key])) : values;
-    if (customer && !Object.keys(body).length) return onDone?.();
-    save.mutate(body);
+    const values = Object.fromEntries(FIELDS.map(([k]) => [k, String(form.get(k) ?? '').trim()])) as Values;
+    if (customer && !Object.keys(changesOf(values, customer)).length) return onDone?.();
+    save.mutate(values);
   }
 
   const prefix = customer ? 'edit-customer' : 'new-customer';

@@ -2,7 +2,7 @@
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { guessMapping, looksLikeHeader, TEMPLATE_COLUMNS } from '@/lib/cut-list/column-mapping';
 import { detectUnit } from '@/lib/cut-list/detect-unit';
 import { UPLOAD_LIMITS } from '@/lib/cut-list/limits';
@@ -14,13 +14,6 @@ import type { UploadRowResult } from '@/lib/cut-list/validate-rows';
 import type { LengthUnit } from '@/lib/units/parse-length';
 import { CUT_LIST_FIELD_LABELS, CUT_LIST_FIELDS, type CutListField } from '@/shared/schemas/cut-list-upload';
 import { partsKey } from './use-parts';
-
-interface Preview {
-  rows: UploadRowResult[];
-  validCount: number;
-  invalidCount: number;
-  warnings: { line: number; message: string }[];
-}
 
 const PREVIEW_ROWS_SHOWN = 8;
 
@@ -80,18 +73,19 @@ export function UploadPanel({
 
   const preview = useQuery({
     queryKey: ['cut-list-preview', jobId, body],
-    queryFn: () => api<Preview>(`/api/jobs/${jobId}/cut-list/preview`, { method: 'POST', body }),
+    // Enabled only once a file is read.
+    queryFn: () =>
+      body ? call('POST /api/jobs/:id/cut-list/preview', { params: { id: jobId }, body }) : Promise.reject(new Error('Choose a file first.')),
     enabled: Boolean(body && body.rows.length),
     retry: false,
     staleTime: Infinity,
   });
 
   const importRows = useMutation({
-    mutationFn: (mode: 'all' | 'valid-only') =>
-      api<{ imported: number; skipped: number; skippedLines: number[] }>(`/api/jobs/${jobId}/cut-list/import`, {
-        method: 'POST',
-        body: { ...body, mode },
-      }),
+    mutationFn: (mode: 'all' | 'valid-only') => {
+      if (!body) throw new Error('Choose a file first.');
+      return call('POST /api/jobs/:id/cut-list/import', { params: { id: jobId }, body: { ...body, mode } });
+    },
     onSuccess: (res) => {
       qc.invalidateQueries({ queryKey: partsKey(jobId) });
       onImported(importSummary(res, file?.name ?? 'the file'));

@@ -1,11 +1,9 @@
 'use client';
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from '@/client/api';
-import type { StockOffer } from '@/lib/cut-list/stock-match';
-import type { Part, PartInput, PartPatch } from '@/shared/schemas/part';
-
-export type ListedPart = Part & { schedule: string | null };
+import { call } from '@/client/api';
+import type { PartInput, PartPatch } from '@/shared/schemas/part';
+import type { ListedPart } from '@/shared/wire/jobs';
 
 export const partsKey = (jobId: string) => ['parts', jobId] as const;
 
@@ -14,11 +12,11 @@ export const PENDING_ROW = 'pending-';
 let pendingRows = 0;
 
 export function useParts(jobId: string) {
-  return useQuery({ queryKey: partsKey(jobId), queryFn: () => api<ListedPart[]>(`/api/jobs/${jobId}/parts`) });
+  return useQuery({ queryKey: partsKey(jobId), queryFn: () => call('GET /api/jobs/:id/parts', { params: { id: jobId } }) });
 }
 
 export function useMaterials() {
-  return useQuery({ queryKey: ['materials'], queryFn: () => api<StockOffer[]>('/api/materials'), staleTime: 60_000 });
+  return useQuery({ queryKey: ['materials'], queryFn: () => call('GET /api/materials'), staleTime: 60_000 });
 }
 
 /**
@@ -36,7 +34,8 @@ export function usePartMutations(jobId: string) {
   const settle = () => qc.invalidateQueries({ queryKey: key });
 
   const update = useMutation({
-    mutationFn: ({ id, patch }: { id: string; patch: PartPatch }) => api<Part>(`/api/jobs/${jobId}/parts/${id}`, { method: 'PATCH', body: patch }),
+    mutationFn: ({ id, patch }: { id: string; patch: PartPatch }) =>
+      call('PATCH /api/jobs/:id/parts/:partId', { params: { id: jobId, partId: id }, body: patch }),
     onMutate: async ({ id, patch }) => {
       const context = await snapshot();
       qc.setQueryData<ListedPart[]>(key, (list) => list?.map((p) => (p.id === id ? { ...p, ...patch } : p)));
@@ -47,7 +46,7 @@ export function usePartMutations(jobId: string) {
   });
 
   const add = useMutation({
-    mutationFn: (input: PartInput) => api<Part>(`/api/jobs/${jobId}/parts`, { method: 'POST', body: input }),
+    mutationFn: (input: PartInput) => call('POST /api/jobs/:id/parts', { params: { id: jobId }, body: input }),
     onMutate: async (input) => {
       const context = await snapshot();
       const temp: ListedPart = {
@@ -69,7 +68,7 @@ export function usePartMutations(jobId: string) {
   });
 
   const remove = useMutation({
-    mutationFn: (id: string) => api(`/api/jobs/${jobId}/parts/${id}`, { method: 'DELETE' }),
+    mutationFn: (id: string) => call('DELETE /api/jobs/:id/parts/:partId', { params: { id: jobId, partId: id } }),
     onMutate: async (id) => {
       const context = await snapshot();
       qc.setQueryData<ListedPart[]>(key, (list) => list?.filter((p) => p.id !== id));

@@ -4,32 +4,26 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
 import { partsKey, useMaterials } from '@/components/cut-list/use-parts';
-import { api } from '@/client/api';
+import { call } from '@/client/api';
 import { JOINT_NAMES } from '@/lib/joinery';
 import { formatLength } from '@/lib/units/format-length';
-import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
-import type { SetupCard } from '@/shared/schemas/setup-card';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { ScheduleForm } from './schedule-form';
-import type { SlideModelChoice } from './schedule-form-values';
-
-interface SavedSchedule {
-  id: string;
-  label: string;
-  input: DrawerSchedule;
-  partRows: number;
-}
+import type { SavedDrawerSchedule } from '@/shared/wire/jobs';
 
 /** The job's Drawer schedules section: saved schedules, and the form that adds or changes one. */
 export function DrawerSchedulesSection({ jobId, units, canWrite }: { jobId: string; units: ShopUnits; canWrite: boolean }) {
   const qc = useQueryClient();
-  const schedules = useQuery({ queryKey: ['drawer-schedules', jobId], queryFn: () => api<SavedSchedule[]>(`/api/jobs/${jobId}/drawer-schedules`) });
-  const cards = useQuery({ queryKey: ['setup-cards'], queryFn: () => api<SetupCard[]>('/api/setup-cards') });
+  const schedules = useQuery({
+    queryKey: ['drawer-schedules', jobId],
+    queryFn: () => call('GET /api/jobs/:id/drawer-schedules', { params: { id: jobId } }),
+  });
+  const cards = useQuery({ queryKey: ['setup-cards'], queryFn: () => call('GET /api/setup-cards') });
   const materials = useMaterials();
-  const slideModels = useQuery({ queryKey: ['slide-models'], queryFn: () => api<SlideModelChoice[]>('/api/slide-models') });
-  const [editing, setEditing] = useState<SavedSchedule | 'new' | null>(null);
+  const slideModels = useQuery({ queryKey: ['slide-models'], queryFn: () => call('GET /api/slide-models') });
+  const [editing, setEditing] = useState<SavedDrawerSchedule | 'new' | null>(null);
   const remove = useMutation({
-    mutationFn: (id: string) => api(`/api/jobs/${jobId}/drawer-schedules/${id}`, { method: 'DELETE' }),
+    mutationFn: (id: string) => call('DELETE /api/jobs/:id/drawer-schedules/:scheduleId', { params: { id: jobId, scheduleId: id } }),
     onSuccess: () => {
       qc.invalidateQueries({ queryKey: ['drawer-schedules', jobId] });
       qc.invalidateQueries({ queryKey: partsKey(jobId) });

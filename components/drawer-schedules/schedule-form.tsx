@@ -5,7 +5,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import Link from 'next/link';
 import { useEffect, useMemo, useRef } from 'react';
 import { useForm, useWatch, type Path } from 'react-hook-form';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { defaultSetupCard, DRAWER_DEFAULTS, findSetupCard, JOINT_NAMES, sizeDrawerSchedule } from '@/lib/joinery';
 import { formatLength } from '@/lib/units/format-length';
 import { drawerScheduleSchema, JOINT_METHODS, type DrawerSchedule } from '@/shared/schemas/drawer-schedule';
@@ -116,11 +116,12 @@ export function ScheduleForm({
     for (const e of live.sized.errors) if (!liveErrors.has(fieldOfPath(e.path))) liveErrors.set(fieldOfPath(e.path), e.message);
 
   const save = useMutation({
-    mutationFn: (v: ScheduleFormValues) =>
-      api(editing ? `/api/jobs/${jobId}/drawer-schedules/${editing.id}` : `/api/jobs/${jobId}/drawer-schedules`, {
-        method: editing ? 'PUT' : 'POST',
-        body: toScheduleInput(v, models, unit),
-      }),
+    mutationFn: (v: ScheduleFormValues) => {
+      const body = toScheduleInput(v, models, unit);
+      return editing
+        ? call('PUT /api/jobs/:id/drawer-schedules/:scheduleId', { params: { id: jobId, scheduleId: editing.id }, body })
+        : call('POST /api/jobs/:id/drawer-schedules', { params: { id: jobId }, body });
+    },
     onSuccess: () => {
       qc.invalidateQueries({ queryKey: ['drawer-schedules', jobId] });
       qc.invalidateQueries({ queryKey: partsKey(jobId) });

@@ -7,7 +7,7 @@ import { useEffect, useRef, type FormEvent } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { ActionError, Field } from '@/components/ui/field';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { CUSTOMER_FIELD_HINT, CustomerChoices } from '@/components/customers/customer-choices';
 import { JOB_STATUS_LABELS, jobFields, type JobPatch, type JobStatus, type JobSummary } from '@/shared/schemas/job';
 
@@ -60,7 +60,7 @@ export function EditJobForm({
     defaultValues: { name: job.name, customer: job.customer, dueDate: job.dueDate ?? '', notes: job.notes, status: job.status },
   });
   const save = useMutation({
-    mutationFn: (body: JobPatch) => api<JobSummary>(`/api/jobs/${job.id}`, { method: 'PATCH', body }),
+    mutationFn: (body: JobPatch) => call('PATCH /api/jobs/:id', { params: { id: job.id }, body }),
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: ['jobs'] });
       router.refresh();

@@ -4,7 +4,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { ActionError } from '@/components/ui/field';
-import { api } from '@/client/api';
+import { call } from '@/client/api';
 import type { JobStatus, JobSummary } from '@/shared/schemas/job';
 import { EditJobForm } from './edit-job-form';
 
@@ -31,9 +31,12 @@ export function JobActions({
     void queryClient.invalidateQueries({ queryKey: ['jobs'] });
     router.refresh();
   };
-  const archive = useMutation({ mutationFn: () => api(`/api/jobs/${job.id}`, { method: 'PATCH', body: { status: 'archived' } }), onSuccess: done });
+  const archive = useMutation({
+    mutationFn: () => call('PATCH /api/jobs/:id', { params: { id: job.id }, body: { status: 'archived' } }),
+    onSuccess: done,
+  });
   const remove = useMutation({
-    mutationFn: () => api(`/api/jobs/${job.id}`, { method: 'DELETE' }),
+    mutationFn: () => call('DELETE /api/jobs/:id', { params: { id: job.id } }),
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: ['jobs'] });
       router.push('/jobs');

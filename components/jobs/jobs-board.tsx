@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { usePathname, useSearchParams } from 'next/navigation';
 import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
-import { api } from '@/client/api';
+import { call } from '@/client/api';
 import { JOB_STATUS_FILTERS } from '@/lib/jobs/status-filter';
 import type { JobSummary } from '@/shared/schemas/job';
 import {
@@ -55,8 +55,6 @@ const COLUMNS: Column[] = [
   },
 ];
 
-const apiUrl = (search: string) => `/api/jobs${search ? `?${search}` : ''}`;
-
 /**
  * Jobs as a table, one page at a time: search, filters, sort, page and page size live in the URL (so a link keeps the
  * view) and are applied on the server. The server renders the first view; later ones come from the API.
@@ -83,7 +81,7 @@ export function JobsBoard({
   const [creating, setCreating] = useState(false);
   const jobs = useQuery({
     queryKey: ['jobs', search],
-    queryFn: () => api<JobListPage>(apiUrl(search)),
+    queryFn: () => call('GET /api/jobs', { query }),
     initialData: search === initialSearch ? initial : undefined,
     // The page stays on screen while the next one loads.
     placeholderData: keepPreviousData,

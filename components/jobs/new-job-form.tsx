@@ -3,16 +3,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
-import { api, ApiError } from '@/client/api';
-import type { JobSummary } from '@/shared/schemas/job';
+import { ApiError, call } from '@/client/api';
 import { CUSTOMER_FIELD_HINT, CustomerChoices } from '@/components/customers/customer-choices';
+import type { ApiBody } from '@/shared/wire/api';
 
 export function NewJobForm({ onDone }: { onDone: () => void }) {
   const queryClient = useQueryClient();
   const router = useRouter();
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const create = useMutation({
-    mutationFn: (body: Record<string, unknown>) => api<JobSummary>('/api/jobs', { method: 'POST', body }),
+    mutationFn: (body: ApiBody<'POST /api/jobs'>) => call('POST /api/jobs', { body }),
     onSuccess: (job) => {
       queryClient.invalidateQueries({ queryKey: ['jobs'] });
       queryClient.invalidateQueries({ queryKey: ['customers'] });
@@ -25,13 +25,9 @@ export function NewJobForm({ onDone }: { onDone: () => void }) {
   function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const form = new FormData(event.currentTarget);
+    const text = (name: string) => String(form.get(name) ?? '');
     setFields({});
-    create.mutate({
-      name: form.get('name'),
-      customer: form.get('customer'),
-      dueDate: form.get('dueDate') || null,
-      notes: form.get('notes'),
-    });
+    create.mutate({ name: text('name'), customer: text('customer'), dueDate: text('dueDate') || null, notes: text('notes') });
   }
 
   return (

@@ -7,7 +7,7 @@ import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent }
 import { useStore } from 'zustand';
 import { NestProgressBar } from '@/components/nesting/nest-progress';
 import { useNestingWorker } from '@/components/nesting/use-nesting-worker';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { docToPlan, planToDoc, type PartInfo } from '@/lib/layout-bench/document';
 import { prepareRenest } from '@/lib/layout-bench/renest';
 import { ariaKeys, commandsFor, keyHints, pressKey, type CommandHost } from '@/components/layout-bench/commands';
@@ -21,25 +21,17 @@ import { nestRequestSchema, type NestRequest } from '@/shared/schemas/nesting';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { useLiveCheck } from './use-live-check';
 import { PIECE_KIND_LABELS } from '@/shared/schemas/nesting';
+import type { PlanForBench } from '@/shared/wire/plans';
 
 const BenchCanvas = dynamic(() => import('./bench-canvas'), {
   ssr: false,
   loading: () => <p className="p-4 text-sm text-graphite-mute">Setting out the bench…</p>,
 });
 
-/** A plan as GET /api/plans/:id answers it (and as the page hands it over, read on the server). */
-export interface PlanResponse {
-  id: string;
-  status: string;
-  updatedAt: string;
-  request: unknown;
-  document: unknown;
-}
-
 /** The Layout bench for a saved plan: every Sheet map and Board map at once, editable while the plan is a draft. */
-export function LayoutBench({ planId, initial, editable, units }: { planId: string; initial?: PlanResponse; editable: boolean; units: ShopUnits }) {
+export function LayoutBench({ planId, initial, editable, units }: { planId: string; initial?: PlanForBench; editable: boolean; units: ShopUnits }) {
   // The page read the plan already: the bench starts from it, and asks again only after a save.
-  const plan = useQuery({ queryKey: ['plan', planId], queryFn: () => api<PlanResponse>(`/api/plans/${planId}`), initialData: initial });
+  const plan = useQuery({ queryKey: ['plan', planId], queryFn: () => call('GET /api/plans/:id', { params: { id: planId } }), initialData: initial });
   if (plan.isPending) return <p className="text-sm text-graphite-mute">Loading the plan…</p>;
   if (plan.isError)
     return (
@@ -50,7 +42,7 @@ export function LayoutBench({ planId, initial, editable, units }: { planId: stri
   return <BenchEditor key={plan.data.updatedAt} data={plan.data} editable={editable && plan.data.status === 'draft'} units={units} />;
 }
 
-function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: boolean; units: ShopUnits }) {
+function BenchEditor({ data, editable, units }: { data: PlanForBench; editable: boolean; units: ShopUnits }) {
   const queryClient = useQueryClient();
   const router = useRouter();
   const request = useMemo(() => nestRequestSchema.parse(data.request), [data.request]);
@@ -101,8 +93,8 @@ function BenchEditor({ data, editable, units }: { data: PlanResponse; editable: 
 
   const save = useMutation({
     mutationFn: () =>
-      api<{ updatedAt: string }>(`/api/plans/${data.id}`, {
-        method: 'PUT',
+      call('PUT /api/plans/:id', {
+        params: { id: data.id },
         body: { plan: rebuildCuts(request, docToPlan(store.getState().doc)), baseUpdatedAt: base },
       }),
     onSuccess: (res) => {

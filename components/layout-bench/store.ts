@@ -102,117 +102,139 @@ export type BenchStore = StoreApi<BenchState>;
 export const hasUnsavedChanges = (s: Pick<BenchState, 'past' | 'savedAt'>) => (s.past.at(-1) ?? null) !== s.savedAt;
 
 export function createBenchStore(doc: BenchDoc, context: BenchContext, camera: Camera = { x: 24, y: 24, scale: 0.1 }): BenchStore {
-  return createStore<BenchState>()((set, get) => {
-    /** Records and applies the changes `edit` makes to some placements (unchanged ones are not recorded). */
-    const commit = (changes: [string, BenchPlacement][]) => {
-      const { doc } = get();
-      const placements = changes.map(([key, after]) => ({ key, before: doc.placements[key], after })).filter((c) => !same(c.before, c.after));
-      if (placements.length === 0) return;
-      const step: Step = { placements };
-      set({ doc: apply(doc, step, 'after'), past: [...get().past, step], future: [] });
-    };
-    const movable = (keys: readonly string[]) => keys.filter((k) => get().doc.placements[k] && !get().doc.placements[k].locked);
+  return createStore<BenchState>()((set, get) => ({
+    doc,
+    past: [],
+    future: [],
+    savedAt: null,
+    view: { selection: [], camera, drag: null },
+    context,
+    ...editActions(set, get),
+    ...historyActions(set, get),
+    ...viewActions(set, get),
+  }));
+}
 
-    return {
-      doc,
-      past: [],
-      future: [],
-      savedAt: null,
-      view: { selection: [], camera, drag: null },
-      context,
-      move(key, piece, x, y) {
-        const { doc, context } = get();
-        const p = doc.placements[key];
-        const target = doc.pieces[piece];
-        if (!p || p.locked || !target) return;
-        // A turned part whose grain must run along its length may not go onto grained stock.
-        const part = context.parts.get(p.partId);
-        if (p.rotated && (!part || !rotationAllowed(part, target))) return;
-        commit([[key, { ...p, piece, x, y }]]);
-      },
-      nudge(keys, dx, dy) {
-        commit(
-          movable(keys).map((k) => {
-            const p = get().doc.placements[k];
-            return [k, { ...p, x: p.x + dx, y: p.y + dy }];
-          }),
-        );
-      },
-      rotate(keys) {
-        const { doc, context } = get();
-        const ok = keys.filter((k) => mayRotate(doc, context, k));
-        commit(
-          ok.map((k) => {
-            const p = doc.placements[k];
-            return [k, { ...p, w: p.h, h: p.w, rotated: !p.rotated }];
-          }),
-        );
-        return keys.filter((k) => !ok.includes(k));
-      },
-      setLocked(keys, locked) {
-        commit(keys.filter((k) => get().doc.placements[k]).map((k) => [k, { ...get().doc.placements[k], locked }]));
-      },
-      replaceDoc(next) {
-        const { doc } = get();
-        const keys = new Set([...Object.keys(doc.placements), ...Object.keys(next.placements)]);
-        const step: Step = {
-          placements: [...keys]
-            .map((key) => ({ key, before: doc.placements[key], after: next.placements[key] }))
-            .filter((c) => !same(c.before, c.after)),
-          pieces: { before: doc.pieces, after: next.pieces },
-          unplaced: { before: doc.unplaced, after: next.unplaced },
-        };
-        set({ doc: apply(doc, step, 'after'), past: [...get().past, step], future: [], view: { ...get().view, selection: [] } });
-      },
-      markSaved() {
-        set({ savedAt: get().past.at(-1) ?? null });
-      },
-      undo() {
-        const { past, future, doc } = get();
-        const step = past.at(-1);
-        if (!step) return;
-        set({ doc: apply(doc, step, 'before'), past: past.slice(0, -1), future: [...future, step], view: { ...get().view, drag: null } });
-      },
-      redo() {
-        const { past, future, doc } = get();
-        const step = future.at(-1);
-        if (!step) return;
-        set({ doc: apply(doc, step, 'after'), past: [...past, step], future: future.slice(0, -1), view: { ...get().view, drag: null } });
-      },
-      select(keys) {
-        set({ view: { ...get().view, selection: keys.filter((k) => get().doc.placements[k]) } });
-      },
-      setCamera(camera) {
-        set({ view: { ...get().view, camera } });
-      },
-      beginDrag(key) {
-        const p = get().doc.placements[key];
-        if (!p || p.locked) return false;
-        set({ view: { ...get().view, drag: { key, piece: p.piece, x: p.x, y: p.y, snappedX: null, snappedY: null } } });
-        return true;
-      },
-      dragTo(piece, x, y, threshold) {
-        const { doc, view, context } = get();
-        const drag = view.drag;
-        const p = drag && doc.placements[drag.key];
-        const target = doc.pieces[piece];
-        if (!drag || !p || !target) return;
-        const others = Object.entries(doc.placements)
-          .filter(([k, o]) => k !== drag.key && o.piece === piece)
-          .map(([, o]) => o);
-        const snapped = snapRect({ x, y, w: p.w, h: p.h }, usableRect(target, target.trim), others, context.kerf, threshold);
-        set({
-          view: { ...view, drag: { key: drag.key, piece, x: snapped.x, y: snapped.y, snappedX: snapped.snappedX, snappedY: snapped.snappedY } },
-        });
-      },
-      endDrag() {
-        const drag = get().view.drag;
-        set({ view: { ...get().view, drag: null } });
-        if (drag) get().move(drag.key, drag.piece, drag.x, drag.y);
-      },
-      cancelDrag() {
-        set({ view: { ...get().view, drag: null } });
-      },
-    };
-  });
+type SetState = StoreApi<BenchState>['setState'];
+type GetState = StoreApi<BenchState>['getState'];
+
+/** Edits of the document: each one undo step, recording only the placements it changes. */
+function editActions(set: SetState, get: GetState): Pick<BenchState, 'move' | 'nudge' | 'rotate' | 'setLocked' | 'replaceDoc'> {
+  const record = (step: Step, view?: Partial<BenchView>) =>
+    set({ doc: apply(get().doc, step, 'after'), past: [...get().past, step], future: [], ...(view ? { view: { ...get().view, ...view } } : {}) });
+  /** Records and applies these new placements (unchanged ones are not recorded; no change, no step). */
+  const commit = (changes: [string, BenchPlacement][]) => {
+    const { doc } = get();
+    const placements = changes.map(([key, after]) => ({ key, before: doc.placements[key], after })).filter((c) => !same(c.before, c.after));
+    if (placements.length > 0) record({ placements });
+  };
+  const movable = (keys: readonly string[]) => keys.filter((k) => get().doc.placements[k] && !get().doc.placements[k].locked);
+
+  return {
+    move(key, piece, x, y) {
+      const { doc, context } = get();
+      const p = doc.placements[key];
+      const target = doc.pieces[piece];
+      if (!p || p.locked || !target) return;
+      // A turned part whose grain must run along its length may not go onto grained stock.
+      const part = context.parts.get(p.partId);
+      if (p.rotated && (!part || !rotationAllowed(part, target))) return;
+      commit([[key, { ...p, piece, x, y }]]);
+    },
+    nudge(keys, dx, dy) {
+      commit(
+        movable(keys).map((k) => {
+          const p = get().doc.placements[k];
+          return [k, { ...p, x: p.x + dx, y: p.y + dy }];
+        }),
+      );
+    },
+    rotate(keys) {
+      const { doc, context } = get();
+      const ok = keys.filter((k) => mayRotate(doc, context, k));
+      commit(
+        ok.map((k) => {
+          const p = doc.placements[k];
+          return [k, { ...p, w: p.h, h: p.w, rotated: !p.rotated }];
+        }),
+      );
+      return keys.filter((k) => !ok.includes(k));
+    },
+    setLocked(keys, locked) {
+      commit(keys.filter((k) => get().doc.placements[k]).map((k) => [k, { ...get().doc.placements[k], locked }]));
+    },
+    replaceDoc(next) {
+      record(replacingStep(get().doc, next), { selection: [] });
+    },
+  };
+}
+
+/** The step from one document to another (a re-nest): every placement that differs, the pieces and the unplaced. */
+function replacingStep(doc: BenchDoc, next: BenchDoc): Step {
+  const keys = new Set([...Object.keys(doc.placements), ...Object.keys(next.placements)]);
+  return {
+    placements: [...keys].map((key) => ({ key, before: doc.placements[key], after: next.placements[key] })).filter((c) => !same(c.before, c.after)),
+    pieces: { before: doc.pieces, after: next.pieces },
+    unplaced: { before: doc.unplaced, after: next.unplaced },
+  };
+}
+
+/** Undo and redo walk the recorded steps (a drag in progress is dropped); the saved plan is the step it ends with. */
+function historyActions(set: SetState, get: GetState): Pick<BenchState, 'undo' | 'redo' | 'markSaved'> {
+  return {
+    markSaved() {
+      set({ savedAt: get().past.at(-1) ?? null });
+    },
+    undo() {
+      const { past, future, doc } = get();
+      const step = past.at(-1);
+      if (!step) return;
+      set({ doc: apply(doc, step, 'before'), past: past.slice(0, -1), future: [...future, step], view: { ...get().view, drag: null } });
+    },
+    redo() {
+      const { past, future, doc } = get();
+      const step = future.at(-1);
+      if (!step) return;
+      set({ doc: apply(doc, step, 'after'), past: [...past, step], future: future.slice(0, -1), view: { ...get().view, drag: null } });
+    },
+  };
+}
+
+/** The view: selection, camera, and a drag, which stays in the view (snapped as it goes) until it is dropped. */
+function viewActions(set: SetState, get: GetState): Pick<BenchState, 'select' | 'setCamera' | 'beginDrag' | 'dragTo' | 'endDrag' | 'cancelDrag'> {
+  const setView = (view: Partial<BenchView>) => set({ view: { ...get().view, ...view } });
+  return {
+    select(keys) {
+      setView({ selection: keys.filter((k) => get().doc.placements[k]) });
+    },
+    setCamera(camera) {
+      setView({ camera });
+    },
+    beginDrag(key) {
+      const p = get().doc.placements[key];
+      if (!p || p.locked) return false;
+      setView({ drag: { key, piece: p.piece, x: p.x, y: p.y, snappedX: null, snappedY: null } });
+      return true;
+    },
+    dragTo(piece, x, y, threshold) {
+      const { doc, view, context } = get();
+      const drag = view.drag;
+      const p = drag && doc.placements[drag.key];
+      const target = doc.pieces[piece];
+      if (!drag || !p || !target) return;
+      const others = Object.entries(doc.placements)
+        .filter(([k, o]) => k !== drag.key && o.piece === piece)
+        .map(([, o]) => o);
+      const snapped = snapRect({ x, y, w: p.w, h: p.h }, usableRect(target, target.trim), others, context.kerf, threshold);
+      setView({ drag: { key: drag.key, piece, x: snapped.x, y: snapped.y, snappedX: snapped.snappedX, snappedY: snapped.snappedY } });
+    },
+    endDrag() {
+      const drag = get().view.drag;
+      setView({ drag: null });
+      if (drag) get().move(drag.key, drag.piece, drag.x, drag.y);
+    },
+    cancelDrag() {
+      setView({ drag: null });
+    },
+  };
 }

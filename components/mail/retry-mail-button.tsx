@@ -2,7 +2,7 @@
 
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { api } from '@/client/api';
+import { call } from '@/client/api';
 
 export function RetryMailButton({ id, subject }: { id: string; subject: string }) {
   const router = useRouter();
@@ -19,7 +19,7 @@ export function RetryMailButton({ id, subject }: { id: string; subject: string }
           setPending(true);
           setError(null);
           try {
-            await api(`/api/outbox/${id}/retry`, { method: 'POST' });
+            await call('POST /api/outbox/:id/retry', { params: { id } });
             router.refresh();
           } catch (e) {
             setError((e as Error).message);

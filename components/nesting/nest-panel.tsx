@@ -7,7 +7,7 @@ import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { formatMoney } from '@/lib/money';
 import { formatLength } from '@/lib/units/format-length';
 import { cuttingStyleSchema, objectiveSchema, type NestRequestInput, type NestStock, type Plan } from '@/shared/schemas/nesting';
@@ -15,7 +15,7 @@ import type { NestSettingsOverride } from '@/shared/schemas/plan-save';
 import type { NestFor } from '@/shared/schemas/recut';
 import type { ShopSettings } from '@/shared/schemas/shop';
 import { sawKindText, type NestSaw } from '@/shared/schemas/saw';
-import type { SavedSaw } from '@/components/settings/saws-section';
+import type { SavedSaw } from '@/shared/wire/settings';
 import { lengthInput, shopLengthUnit } from '@/shared/schemas/units';
 import { NestProgressBar } from './nest-progress';
 import { PlanSummary } from './plan-summary';
@@ -63,9 +63,9 @@ export function NestPanel({
 }) {
   const offered = useQuery({
     queryKey: ['nest-request', jobId, nestFor],
-    queryFn: () => api<NestRequestInput>(`/api/jobs/${jobId}/nest-request?for=${nestFor}`),
+    queryFn: () => call('GET /api/jobs/:id/nest-request', { params: { id: jobId }, query: { for: nestFor } }),
   });
-  const saws = useQuery({ queryKey: ['saws'], queryFn: () => api<SavedSaw[]>('/api/saws') });
+  const saws = useQuery({ queryKey: ['saws'], queryFn: () => call('GET /api/saws') });
   if (offered.isPending || saws.isPending) return <p className="text-sm text-graphite-mute">Loading the stock on offer…</p>;
   if (offered.isError)
     return (
@@ -333,8 +333,8 @@ function NestResultCard({
   const [name, setName] = useState(`${nestFor === 'recuts' ? 'Re-cuts' : 'Plan'} ${new Date().toLocaleDateString()}`);
   const save = useMutation({
     mutationFn: () =>
-      api<{ id: string }>(`/api/jobs/${jobId}/plans`, {
-        method: 'POST',
+      call('POST /api/jobs/:id/plans', {
+        params: { id: jobId },
         body: { name, settings: result.settings, stockIds: result.stockIds, for: nestFor, plan: result.plan },
       }),
     onSuccess: ({ id }) => {

@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { EmptyState } from '@/components/ui/empty-state';
 import { StatusBadge, type Tone } from '@/components/ui/status-badge';
-import { api } from '@/client/api';
+import { call } from '@/client/api';
 import { formatMoney } from '@/lib/money';
 import type { JobPlanSummary } from '@/shared/wire/plans';
 import { formatShopDateTime } from '@/lib/dates/shop-time';
@@ -20,7 +20,7 @@ const LABEL: Record<JobPlanSummary['status'], string> = {
 
 /** The job's plans, newest first, with status, yield and (for those allowed) cost. */
 export function PlanList({ jobId, currency, showPrices, timeZone }: { jobId: string; currency: string; showPrices: boolean; timeZone: string }) {
-  const plans = useQuery({ queryKey: ['plans', jobId], queryFn: () => api<JobPlanSummary[]>(`/api/jobs/${jobId}/plans`) });
+  const plans = useQuery({ queryKey: ['plans', jobId], queryFn: () => call('GET /api/jobs/:id/plans', { params: { id: jobId } }) });
   if (plans.isPending) return <p className="text-sm text-graphite-mute">Loading plans…</p>;
   if (plans.isError)
     return (

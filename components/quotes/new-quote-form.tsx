@@ -3,14 +3,14 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { api } from '@/client/api';
+import { call } from '@/client/api';
 
 /** Makes a new quote from one of the job's plans (material and saw time) or from none. */
 export function NewQuoteForm({ jobId, plans }: { jobId: string; plans: { id: string; name: string; status: string }[] }) {
   const router = useRouter();
   const [planId, setPlanId] = useState(plans[0]?.id ?? '');
   const create = useMutation({
-    mutationFn: () => api<{ id: string }>(`/api/jobs/${jobId}/quotes`, { method: 'POST', body: { planId: planId || null } }),
+    mutationFn: () => call('POST /api/jobs/:id/quotes', { params: { id: jobId }, body: { planId: planId || null } }),
     onSuccess: (q) => router.push(`/jobs/${jobId}/quotes/${q.id}`),
   });
   return (

@@ -2,14 +2,17 @@
 
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
+import { ApiError, call } from '@/client/api';
 import type { QuoteAnswerInput } from '@/shared/schemas/quote-answer';
 
-async function post(url: string, body: unknown): Promise<{ ok: true; data: Record<string, unknown> } | { ok: false; error: string }> {
-  const res = await fetch(url, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
-  const data = await res.json().catch(() => ({}));
-  if (res.ok) return { ok: true, data };
-  const field = data.fields ? (Object.values(data.fields as Record<string, string[]>)[0]?.[0] ?? null) : null;
-  return { ok: false, error: field ?? data.error ?? `That did not work (${res.status}). Try again.` };
+/** The call's answer, or the first thing the server said was wrong with it. */
+async function attempt<T>(request: Promise<T>): Promise<{ ok: true; data: T } | { ok: false; error: string }> {
+  try {
+    return { ok: true, data: await request };
+  } catch (e) {
+    if (!(e instanceof ApiError)) return { ok: false, error: 'That did not work. Check the connection and try again.' };
+    return { ok: false, error: Object.values(e.fields)[0]?.[0] ?? e.message };
+  }
 }
 
 function Alert({ error }: { error: string | null }) {
@@ -29,7 +32,7 @@ export function QuoteAnswerForms({ token, shopName, deposit }: { token: string; 
 
   async function send(answer: QuoteAnswerInput, fail: (e: string) => void) {
     setPending(answer.answer);
-    const result = await post(`/api/q/${token}/answer`, answer);
+    const result = await attempt(call('POST /api/q/:token/answer', { params: { token }, body: answer }));
     setPending(null);
     if (!result.ok) return fail(result.error);
     router.refresh();
@@ -99,12 +102,12 @@ export function PayDepositButton({ token, deposit }: { token: string; deposit: s
   async function pay() {
     setPending(true);
     setError(null);
-    const result = await post(`/api/q/${token}/checkout`, {});
+    const result = await attempt(call('POST /api/q/:token/checkout', { params: { token } }));
     if (!result.ok) {
       setPending(false);
       return setError(result.error);
     }
-    window.location.assign(String(result.data.url));
+    window.location.assign(result.data.url);
   }
   return (
     <div className="flex flex-col gap-2">

@@ -3,7 +3,7 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { formatMoney, toMinorUnits } from '@/lib/costing/money';
 import { quoteTotals, type QuoteTotals } from '@/lib/costing/quote-totals';
 import { moneyText } from '@/components/settings/pricing-form-values';
@@ -123,7 +123,7 @@ export function QuoteEditor({
 
   const [serverError, setServerError] = useState<string | null>(null);
   const save = useMutation({
-    mutationFn: () => api(`/api/quotes/${revision.id}`, { method: 'PATCH', body: read.patch }),
+    mutationFn: () => call('PATCH /api/quotes/:id', { params: { id: revision.id }, body: read.patch }),
     onSuccess: () => {
       setServerError(null);
       router.refresh();
@@ -133,14 +133,14 @@ export function QuoteEditor({
   });
   const send = useMutation({
     mutationFn: async () => {
-      if (editable) await api(`/api/quotes/${revision.id}`, { method: 'PATCH', body: read.patch });
-      return api(`/api/quotes/${revision.id}/send`, { method: 'POST' });
+      if (editable) await call('PATCH /api/quotes/:id', { params: { id: revision.id }, body: read.patch });
+      return call('POST /api/quotes/:id/send', { params: { id: revision.id } });
     },
     onSuccess: () => router.refresh(),
     onError: (e) => setServerError(e.message),
   });
   const revise = useMutation({
-    mutationFn: () => api<{ id: string }>(`/api/quotes/${revision.id}/revisions`, { method: 'POST' }),
+    mutationFn: () => call('POST /api/quotes/:id/revisions', { params: { id: revision.id } }),
     onSuccess: (rev) => router.push(`./${rev.id}`),
     onError: (e) => setServerError(e.message),
   });

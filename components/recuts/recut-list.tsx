@@ -7,7 +7,7 @@ import { useState } from 'react';
 import { ActionError } from '@/components/ui/field';
 import { EmptyState } from '@/components/ui/empty-state';
 import { StatusBadge, type Tone } from '@/components/ui/status-badge';
-import { api } from '@/client/api';
+import { call } from '@/client/api';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { recutLabel } from '@/lib/recuts/recuts';
 import { formatLength } from '@/lib/units/format-length';
@@ -21,7 +21,7 @@ const TONE: Record<RecutStatus, Tone> = { open: 'warn', planned: 'accent', cut: 
  * ones first. Those who nest may nest the open ones (offcuts first) or cancel one with a reason.
  */
 export function RecutList({ jobId, units, canNest, canCancel }: { jobId: string; units: ShopUnits; canNest: boolean; canCancel: boolean }) {
-  const recuts = useQuery({ queryKey: ['recuts', jobId], queryFn: () => api<RecutView[]>(`/api/jobs/${jobId}/recuts`) });
+  const recuts = useQuery({ queryKey: ['recuts', jobId], queryFn: () => call('GET /api/jobs/:id/recuts', { params: { id: jobId } }) });
   const len = (mm: number) => formatLength(mm, units);
   // Stock is named by its exact thickness (18 mm, not ≈11/16″), as everywhere else.
   const thick = (mm: number) => exactLengthText(mm, units);
@@ -94,7 +94,7 @@ function RecutRow({
   const queryClient = useQueryClient();
   const router = useRouter();
   const cancel = useMutation({
-    mutationFn: () => api(`/api/recuts/${r.id}/cancel`, { method: 'POST', body: { reason } }),
+    mutationFn: () => call('POST /api/recuts/:id/cancel', { params: { id: r.id }, body: { reason } }),
     onSuccess: () => {
       setCancelling(false);
       void queryClient.invalidateQueries({ queryKey: ['recuts', jobId] });

@@ -3,22 +3,21 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { formatMoney, toMinorUnits } from '@/lib/costing/money';
 import type { HardwareItem, PricingSettings } from '@/shared/schemas/pricing';
 import { moneyText, PRICING_FIELDS, pricingFormText, readPricingForm, type PricingFormText } from './pricing-form-values';
 
-type PricingView = { currency: string; pricing: PricingSettings };
 export const PRICING_KEY = ['pricing'] as const;
 export const HARDWARE_KEY = ['hardware'] as const;
 
 /** Shop settings → Pricing: what every new quote starts from. */
 export function PricingSection() {
   const qc = useQueryClient();
-  const view = useQuery({ queryKey: PRICING_KEY, queryFn: () => api<PricingView>('/api/settings/pricing') });
+  const view = useQuery({ queryKey: PRICING_KEY, queryFn: () => call('GET /api/settings/pricing') });
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const save = useMutation({
-    mutationFn: (body: PricingSettings) => api<PricingView>('/api/settings/pricing', { method: 'PUT', body }),
+    mutationFn: (body: PricingSettings) => call('PUT /api/settings/pricing', { body }),
     onSuccess: (data) => qc.setQueryData(PRICING_KEY, data),
     onError: (e) => setFields(e instanceof ApiError ? e.fields : {}),
   });
@@ -145,10 +144,10 @@ export function PricingSection() {
 /** The hardware price list: name, unit, price; quotes pick hardware lines from it. */
 function HardwareList({ currency }: { currency: string }) {
   const qc = useQueryClient();
-  const items = useQuery({ queryKey: HARDWARE_KEY, queryFn: () => api<HardwareItem[]>('/api/settings/hardware') });
+  const items = useQuery({ queryKey: HARDWARE_KEY, queryFn: () => call('GET /api/settings/hardware') });
   const [editing, setEditing] = useState<HardwareItem | 'new' | null>(null);
   const remove = useMutation({
-    mutationFn: (id: string) => api(`/api/settings/hardware/${id}`, { method: 'DELETE' }),
+    mutationFn: (id: string) => call('DELETE /api/settings/hardware/:id', { params: { id } }),
     onSuccess: () => qc.invalidateQueries({ queryKey: HARDWARE_KEY }),
   });
   return (
@@ -232,7 +231,7 @@ function HardwareForm({ item, currency, onDone }: { item: HardwareItem | null; c
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const save = useMutation({
     mutationFn: (body: Omit<HardwareItem, 'id'>) =>
-      item ? api(`/api/settings/hardware/${item.id}`, { method: 'PUT', body }) : api('/api/settings/hardware', { method: 'POST', body }),
+      item ? call('PUT /api/settings/hardware/:id', { params: { id: item.id }, body }) : call('POST /api/settings/hardware', { body }),
     onSuccess: () => {
       void qc.invalidateQueries({ queryKey: HARDWARE_KEY });
       onDone();

@@ -3,8 +3,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
-import { api, ApiError } from '@/client/api';
-import type { ShopSettings } from '@/shared/schemas/shop';
+import { ApiError, call } from '@/client/api';
 import type { Saw } from '@/shared/schemas/saw';
 import type { ShopUnits } from '@/shared/schemas/units';
 import {
@@ -18,8 +17,8 @@ import {
   sawText,
   type SawFormText,
 } from './saw-form-values';
+import type { SavedSaw } from '@/shared/wire/settings';
 
-export type SavedSaw = Saw & { id: string };
 export const SAWS_KEY = ['saws'] as const;
 
 /** The caution beside the safe minimum: the figure is the shop's, the saw's manual decides. */
@@ -29,11 +28,11 @@ export const FENCE_CAUTION =
 /** Shop settings → Saws: what each saw can cut; every nest keeps to the saw (or saws) it is cut on. */
 export function SawsSection() {
   const qc = useQueryClient();
-  const settings = useQuery({ queryKey: ['settings'], queryFn: () => api<ShopSettings>('/api/settings') });
-  const saws = useQuery({ queryKey: SAWS_KEY, queryFn: () => api<SavedSaw[]>('/api/saws') });
+  const settings = useQuery({ queryKey: ['settings'], queryFn: () => call('GET /api/settings') });
+  const saws = useQuery({ queryKey: SAWS_KEY, queryFn: () => call('GET /api/saws') });
   const [editing, setEditing] = useState<SavedSaw | 'new' | null>(null);
   const remove = useMutation({
-    mutationFn: (id: string) => api(`/api/saws/${id}`, { method: 'DELETE' }),
+    mutationFn: (id: string) => call('DELETE /api/saws/:id', { params: { id } }),
     onSuccess: () => qc.invalidateQueries({ queryKey: SAWS_KEY }),
   });
   const units = settings.data?.units;
@@ -125,7 +124,8 @@ function SawForm({ editing, units, onDone }: { editing: SavedSaw | null; units: 
   const [kind, setKind] = useState(initial.kind);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const save = useMutation({
-    mutationFn: (saw: Saw) => api<SavedSaw>(editing ? `/api/saws/${editing.id}` : '/api/saws', { method: editing ? 'PUT' : 'POST', body: saw }),
+    mutationFn: (saw: Saw) =>
+      editing ? call('PUT /api/saws/:id', { params: { id: editing.id }, body: saw }) : call('POST /api/saws', { body: saw }),
     onSuccess: () => {
       qc.invalidateQueries({ queryKey: SAWS_KEY });
       onDone();

@@ -2,17 +2,17 @@
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import type { ShopSettings } from '@/shared/schemas/shop';
 import { timeZoneChoices } from '@/lib/dates/shop-time';
 import { LENGTH_FIELDS, readSettingsForm, settingsFormText, UNIT_CHOICES, type SettingsFormText } from './settings-form-values';
 
 export function SettingsForm() {
   const queryClient = useQueryClient();
-  const settings = useQuery({ queryKey: ['settings'], queryFn: () => api<ShopSettings>('/api/settings') });
+  const settings = useQuery({ queryKey: ['settings'], queryFn: () => call('GET /api/settings') });
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const save = useMutation({
-    mutationFn: (body: Partial<ShopSettings>) => api<ShopSettings>('/api/settings', { method: 'PATCH', body }),
+    mutationFn: (body: Partial<ShopSettings>) => call('PATCH /api/settings', { body }),
     onSuccess: (data) => queryClient.setQueryData(['settings'], data),
     onError: (e) => setFields(e instanceof ApiError ? e.fields : {}),
   });

@@ -1,6 +1,6 @@
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { formatLength } from '@/lib/units/format-length';
-import { parseLength } from '@/lib/units/parse-length';
+import { parseLength, type LengthUnit } from '@/lib/units/parse-length';
 import { slideModelSchema, SLIDE_MODEL_KINDS, SLIDE_WIDTH_RULES, type SlideModel } from '@/shared/schemas/slide-model';
 import { shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
 
@@ -62,11 +62,43 @@ export function readSlideModelForm(
 ): { ok: true; model: SlideModel } | { ok: false; errors: Record<string, string> } {
   const unit = shopLengthUnit(units);
   const errors: Record<string, string> = {};
-  const length = (
-    field: keyof SlideModelFormText,
-    value: string,
-    opts: { zero?: boolean; blank?: 'zero' | 'null' } = {},
-  ): number | null | undefined => {
+  const length = lengthReader(unit, errors);
+  const candidate = {
+    kind: text.kind,
+    name: text.name,
+    lengthsMm: readLengths(text.lengths, unit, errors),
+    widthRule: text.widthRule,
+    widthDeductionMm: length('widthDeduction', text.widthDeduction, { zero: true }),
+    maxSideThicknessMm: length('maxSideThickness', text.maxSideThickness, { blank: 'null' }),
+    bottomRecessMm: length('bottomRecess', text.bottomRecess, { zero: true, blank: 'zero' }),
+    heightClearanceMm: length('heightClearance', text.heightClearance, { zero: true }),
+    rearClearanceMm: length('rearClearance', text.rearClearance, { zero: true, blank: 'zero' }),
+  };
+  const parsed = slideModelSchema.safeParse(candidate);
+  if (!parsed.success)
+    for (const issue of parsed.error.issues) {
+      const key = FORM_FIELD_OF[String(issue.path[0])] ?? 'name';
+      errors[key] ??= issue.message;
+    }
+  return Object.keys(errors).length || !parsed.success ? { ok: false, errors } : { ok: true, model: parsed.data };
+}
+
+/** The form's field for each of the model's (where the schema's message goes). */
+const FORM_FIELD_OF: Record<string, keyof SlideModelFormText> = {
+  kind: 'kind',
+  name: 'name',
+  lengthsMm: 'lengths',
+  widthRule: 'widthRule',
+  widthDeductionMm: 'widthDeduction',
+  maxSideThicknessMm: 'maxSideThickness',
+  bottomRecessMm: 'bottomRecess',
+  heightClearanceMm: 'heightClearance',
+  rearClearanceMm: 'rearClearance',
+};
+
+/** A length field read in the shop's unit: a blank is an error, 0 or null as `blank` says; `zero` accepts 0 written out. */
+function lengthReader(unit: LengthUnit, errors: Record<string, string>) {
+  return (field: keyof SlideModelFormText, value: string, opts: { zero?: boolean; blank?: 'zero' | 'null' } = {}): number | null | undefined => {
     if (value.trim() === '') {
       if (opts.blank === 'zero') return 0;
       if (opts.blank === 'null') return null;
@@ -79,8 +111,11 @@ export function readSlideModelForm(
     errors[field] = parsed.error;
     return undefined;
   };
+}
 
-  const pieces = text.lengths
+/** The lengths the slide is made in, as a list ("12, 15, 18"); the first that does not read is the message. */
+function readLengths(text: string, unit: LengthUnit, errors: Record<string, string>): number[] {
+  const pieces = text
     .split(LIST_SEPARATOR)
     .map((p) => p.trim())
     .filter(Boolean);
@@ -91,37 +126,7 @@ export function readSlideModelForm(
     else errors.lengths ??= `“${piece}”: ${parsed.error} Separate lengths with a comma and a space, or a semicolon.`;
   }
   if (pieces.length === 0) errors.lengths = 'Give the lengths the slide is made in, such as 12, 15, 18, 21.';
-
-  const candidate = {
-    kind: text.kind,
-    name: text.name,
-    lengthsMm,
-    widthRule: text.widthRule,
-    widthDeductionMm: length('widthDeduction', text.widthDeduction, { zero: true }),
-    maxSideThicknessMm: length('maxSideThickness', text.maxSideThickness, { blank: 'null' }),
-    bottomRecessMm: length('bottomRecess', text.bottomRecess, { zero: true, blank: 'zero' }),
-    heightClearanceMm: length('heightClearance', text.heightClearance, { zero: true }),
-    rearClearanceMm: length('rearClearance', text.rearClearance, { zero: true, blank: 'zero' }),
-  };
-  const parsed = slideModelSchema.safeParse(candidate);
-  if (!parsed.success) {
-    const field: Record<string, keyof SlideModelFormText> = {
-      kind: 'kind',
-      name: 'name',
-      lengthsMm: 'lengths',
-      widthRule: 'widthRule',
-      widthDeductionMm: 'widthDeduction',
-      maxSideThicknessMm: 'maxSideThickness',
-      bottomRecessMm: 'bottomRecess',
-      heightClearanceMm: 'heightClearance',
-      rearClearanceMm: 'rearClearance',
-    };
-    for (const issue of parsed.error.issues) {
-      const key = field[String(issue.path[0])] ?? 'name';
-      errors[key] ??= issue.message;
-    }
-  }
-  return Object.keys(errors).length || !parsed.success ? { ok: false, errors } : { ok: true, model: parsed.data };
+  return lengthsMm;
 }
 
 /** The model's rule in one line, in the shop's unit: "Inside width = opening − 1-5/8″". */

@@ -3,10 +3,9 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { formatLength } from '@/lib/units/format-length';
-import type { ShopSettings } from '@/shared/schemas/shop';
 import type { SlideModel } from '@/shared/schemas/slide-model';
 import type { ShopUnits } from '@/shared/schemas/units';
 import {
@@ -20,18 +19,18 @@ import {
   widthRuleText,
   type SlideModelFormText,
 } from './slide-model-form-values';
+import type { SavedSlideModel } from '@/shared/wire/settings';
 
-export type SavedSlideModel = SlideModel & { id: string };
 export const SLIDE_MODELS_KEY = ['slide-models'] as const;
 
 /** Shop settings → Drawer slides: the slide models drawer schedules size boxes from, as their makers specify them. */
 export function SlideModelsSection() {
   const qc = useQueryClient();
-  const settings = useQuery({ queryKey: ['settings'], queryFn: () => api<ShopSettings>('/api/settings') });
-  const models = useQuery({ queryKey: SLIDE_MODELS_KEY, queryFn: () => api<SavedSlideModel[]>('/api/slide-models') });
+  const settings = useQuery({ queryKey: ['settings'], queryFn: () => call('GET /api/settings') });
+  const models = useQuery({ queryKey: SLIDE_MODELS_KEY, queryFn: () => call('GET /api/slide-models') });
   const [editing, setEditing] = useState<SavedSlideModel | 'new' | null>(null);
   const remove = useMutation({
-    mutationFn: (id: string) => api(`/api/slide-models/${id}`, { method: 'DELETE' }),
+    mutationFn: (id: string) => call('DELETE /api/slide-models/:id', { params: { id } }),
     onSuccess: () => qc.invalidateQueries({ queryKey: SLIDE_MODELS_KEY }),
   });
   const units = settings.data?.units;
@@ -139,7 +138,7 @@ function SlideModelForm({ editing, units, onDone }: { editing: SavedSlideModel |
   const [errors, setErrors] = useState<Record<string, string>>({});
   const save = useMutation({
     mutationFn: (model: SlideModel) =>
-      api<SavedSlideModel>(editing ? `/api/slide-models/${editing.id}` : '/api/slide-models', { method: editing ? 'PUT' : 'POST', body: model }),
+      editing ? call('PUT /api/slide-models/:id', { params: { id: editing.id }, body: model }) : call('POST /api/slide-models', { body: model }),
     onSuccess: () => {
       qc.invalidateQueries({ queryKey: SLIDE_MODELS_KEY });
       onDone();

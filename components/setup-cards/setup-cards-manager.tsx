@@ -5,7 +5,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { useFieldArray, useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { api, ApiError } from '@/client/api';
+import { ApiError, call } from '@/client/api';
 import { DEFAULT_LOCK_RABBET_CARDS, findSetupCard, JOINT_NAMES } from '@/lib/joinery';
 import { exactLengthText } from '@/lib/cut-list/exact-length';
 import { parseLength } from '@/lib/units/parse-length';
@@ -14,8 +14,6 @@ import type { SetupCard } from '@/shared/schemas/setup-card';
 import { lengthInput, shopLengthUnit, type ShopUnits } from '@/shared/schemas/units';
 import { EmptyState } from '@/components/ui/empty-state';
 import { RouterCautions, SetupCardView } from './setup-card-view';
-
-type Saved = SetupCard & { id: string };
 
 const cardForm = (units: ShopUnits) =>
   z.object({
@@ -64,10 +62,10 @@ const toText = (card: SetupCard, units: ShopUnits): FormText => ({
 /** Setup cards: the shop's saved machine settings per joint and stock thickness, with the starting cards offered. */
 export function SetupCardsManager({ units, canWrite }: { units: ShopUnits; canWrite: boolean }) {
   const qc = useQueryClient();
-  const cards = useQuery({ queryKey: ['setup-cards'], queryFn: () => api<Saved[]>('/api/setup-cards') });
+  const cards = useQuery({ queryKey: ['setup-cards'], queryFn: () => call('GET /api/setup-cards') });
   const [editing, setEditing] = useState<{ id: string | null; card: SetupCard } | null>(null);
   const remove = useMutation({
-    mutationFn: (id: string) => api(`/api/setup-cards/${id}`, { method: 'DELETE' }),
+    mutationFn: (id: string) => call('DELETE /api/setup-cards/:id', { params: { id } }),
     onSuccess: () => qc.invalidateQueries({ queryKey: ['setup-cards'] }),
   });
   const unsavedDefaults = DEFAULT_LOCK_RABBET_CARDS.filter((d) => !findSetupCard(cards.data ?? [], d));
@@ -162,11 +160,10 @@ function CardForm({ id, card, units, onDone }: { id: string | null; card: SetupC
   });
   const rows = useFieldArray({ control, name: 'fields' });
   const save = useMutation({
-    mutationFn: (v: FormValues) =>
-      api(id ? `/api/setup-cards/${id}` : '/api/setup-cards', {
-        method: id ? 'PUT' : 'POST',
-        body: { joint: v.joint, stockThicknessMm: v.stockThickness, fields: v.fields, note: v.note },
-      }),
+    mutationFn: (v: FormValues) => {
+      const body = { joint: v.joint, stockThicknessMm: v.stockThickness, fields: v.fields, note: v.note };
+      return id ? call('PUT /api/setup-cards/:id', { params: { id }, body }) : call('POST /api/setup-cards', { body });
+    },
     onSuccess: () => {
       qc.invalidateQueries({ queryKey: ['setup-cards'] });
       onDone();

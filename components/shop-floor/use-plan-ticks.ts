@@ -1,7 +1,7 @@
 'use client';
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { api } from '@/client/api';
+import { call } from '@/client/api';
 import type { PlanTicks, StepRef } from '@/shared/wire/plans';
 
 export type Toggle = StepRef & { done: boolean };
@@ -16,14 +16,14 @@ export function usePlanTicks(planId: string, initial: PlanTicks) {
   const client = useQueryClient();
   const ticksQuery = useQuery({
     queryKey: key,
-    queryFn: () => api<PlanTicks>(`/api/plans/${planId}/steps`),
+    queryFn: () => call('GET /api/plans/:id/steps', { params: { id: planId } }),
     initialData: initial,
     refetchInterval: 10_000,
   });
 
   const toggle = useMutation({
     mutationFn: ({ piece, step, done }: Toggle) =>
-      api<PlanTicks>(`/api/plans/${planId}/steps`, { method: done ? 'POST' : 'DELETE', body: { piece, step } }),
+      call(done ? 'POST /api/plans/:id/steps' : 'DELETE /api/plans/:id/steps', { params: { id: planId }, body: { piece, step } }),
     onMutate: async ({ piece, step, done }) => {
       await client.cancelQueries({ queryKey: key });
       const before = client.getQueryData<PlanTicks>(key);

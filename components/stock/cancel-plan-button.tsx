@@ -7,12 +7,12 @@ import { useStockAction } from './use-stock-action';
 /** Cancel a released plan after a second click: every sheet, board and offcut it reserved goes back to free stock. */
 export function CancelPlanButton({ planId }: { planId: string }) {
   const [confirming, setConfirming] = useState(false);
-  const cancel = useStockAction(`/api/plans/${planId}/cancel`, 'POST', () => setConfirming(false));
+  const cancel = useStockAction('POST /api/plans/:id/cancel', { params: { id: planId }, onDone: () => setConfirming(false) });
   return (
     <div className="space-y-2">
       {confirming ? (
         <div className="flex gap-2">
-          <button type="button" className="btn-danger" disabled={cancel.isPending} onClick={() => cancel.mutate({})}>
+          <button type="button" className="btn-danger" disabled={cancel.isPending} onClick={() => cancel.mutate(undefined)}>
             Cancel the plan and free its stock
           </button>
           <button type="button" className="btn-quiet" onClick={() => setConfirming(false)}>

@@ -60,7 +60,7 @@ export function EditStockDialog({ item, label, currency, onDone }: { item: Edita
     resolver: zodResolver(formSchema),
     defaultValues: { ...item, costCents: centsForInput(item.costCents), lowStockAt: String(item.lowStockAt) },
   });
-  const action = useStockAction(`/api/stock/${item.id}`, 'PATCH', onDone);
+  const action = useStockAction('PATCH /api/stock/:id', { params: { id: item.id }, onDone });
   const e = form.formState.errors;
   const board = item.kind === 'board';
   const id = (field: StockDetailField) => `es-${field}-${item.id}`;

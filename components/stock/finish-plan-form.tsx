@@ -3,30 +3,20 @@
 import Link from 'next/link';
 import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
-import { api } from '@/client/api';
+import { call } from '@/client/api';
 import { RECUT_REASONS } from '@/lib/recuts/recuts';
 import { formatLength } from '@/lib/units/format-length';
-import { JOB_STATUS_LABELS, type JobStatus } from '@/shared/schemas/job';
+import { JOB_STATUS_LABELS } from '@/shared/schemas/job';
 import type { ShopUnits } from '@/shared/schemas/units';
 import { ActionError } from '@/components/ui/field';
+import type { FinishResult } from '@/shared/wire/plans';
+import type { FinishPlanInput } from '@/shared/schemas/stock';
 
 export interface FinishPiece {
   index: number;
   title: string;
   offcuts: { index: number; w: number; h: number; keepable: boolean }[];
   parts: { partId: string; instance: number; label: string; w: number; h: number }[];
-}
-
-interface FinishResult {
-  jobId: string;
-  yieldRatio: number;
-  wasteRatio: number;
-  spoiledRatio: number;
-  offcuts: { id: string; lengthMm: number; widthMm: number; location: string }[];
-  damaged: number;
-  recutsAdded: number;
-  recutsClosed: number;
-  jobStatus: JobStatus | null;
 }
 
 const pct = (r: number) => `${(r * 100).toFixed(1)} %`;
@@ -56,7 +46,7 @@ export function FinishPlanForm({
   const [result, setResult] = useState<FinishResult | null>(null);
   // No page refresh on success: the page would re-render as a done plan and hide this summary.
   const done = useMutation({
-    mutationFn: (body: unknown) => api<FinishResult>(`/api/plans/${planId}/done`, { method: 'POST', body }),
+    mutationFn: (body: FinishPlanInput) => call('POST /api/plans/:id/done', { params: { id: planId }, body }),
     onSuccess: setResult,
   });
   const toggle = (set: Set<string>, key: string, update: (s: Set<string>) => void) => {

@@ -1,15 +1,10 @@
 'use client';
 
 import { useState } from 'react';
-import { STOCK_CSV_COLUMNS, type StockCsvError } from '@/lib/stock/stock-csv';
+import { STOCK_CSV_COLUMNS } from '@/lib/stock/stock-csv';
+import type { StockImportResult } from '@/shared/wire/stock';
 import { ActionError } from '@/components/ui/field';
 import { useStockAction } from './use-stock-action';
-
-interface ImportResult {
-  valid: number;
-  imported: number;
-  errors: StockCsvError[];
-}
 
 /**
  * Import a stock CSV: the server checks every row first and lists each bad one with its reasons. Nothing is written
@@ -18,10 +13,10 @@ interface ImportResult {
 export function ImportStockPanel({ onDone }: { onDone: () => void }) {
   const [csv, setCsv] = useState<string | null>(null);
   const [fileName, setFileName] = useState('');
-  const [check, setCheck] = useState<ImportResult | null>(null);
+  const [check, setCheck] = useState<StockImportResult | null>(null);
   const [done, setDone] = useState<number | null>(null);
-  const checking = useStockAction<ImportResult>('/api/stock/import', 'POST', setCheck);
-  const writing = useStockAction<ImportResult>('/api/stock/import', 'POST', (r) => setDone(r.imported));
+  const checking = useStockAction('POST /api/stock/import', { onDone: setCheck });
+  const writing = useStockAction('POST /api/stock/import', { onDone: (r) => setDone(r.imported) });
 
   async function choose(file: File | undefined) {
     setCheck(null);
@@ -75,12 +70,17 @@ export function ImportStockPanel({ onDone }: { onDone: () => void }) {
               type="button"
               className="btn-accent"
               disabled={!csv || check.errors.length > 0 || check.valid === 0 || writing.isPending}
-              onClick={() => writing.mutate({ csv, commit: 'all' })}
+              onClick={() => csv && writing.mutate({ csv, commit: 'all' })}
             >
               Import all rows
             </button>
             {check.errors.length > 0 && check.valid > 0 && (
-              <button type="button" className="btn-quiet" disabled={writing.isPending} onClick={() => writing.mutate({ csv, commit: 'valid' })}>
+              <button
+                type="button"
+                className="btn-quiet"
+                disabled={writing.isPending}
+                onClick={() => csv && writing.mutate({ csv, commit: 'valid' })}
+              >
                 Import only the {check.valid} valid row{check.valid === 1 ? '' : 's'}
               </button>
             )}

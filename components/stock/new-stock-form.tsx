@@ -43,7 +43,7 @@ export function NewStockForm({ units, onDone }: { units: ShopUnits; onDone: () =
       buyable: true,
     },
   });
-  const action = useStockAction('/api/stock', 'POST', onDone);
+  const action = useStockAction('POST /api/stock', { onDone });
   const e = form.formState.errors;
   const board = form.watch('kind') === 'board';
   return (

@@ -19,7 +19,7 @@ export function RecordOffcutForm({ units, onDone }: { units: ShopUnits; onDone: 
     resolver: zodResolver(schema),
     defaultValues: { material: '', thicknessMm: '', lengthMm: '', widthMm: '', grain: 'along-length', location: '' },
   });
-  const action = useStockAction('/api/offcuts', 'POST', onDone);
+  const action = useStockAction('POST /api/offcuts', { onDone });
   const e = form.formState.errors;
   return (
     <form

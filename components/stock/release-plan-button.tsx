@@ -3,8 +3,8 @@
 import Link from 'next/link';
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
-import { ApiError } from '@/client/api';
-import type { MissingPiece as Missing } from '@/shared/schemas/stock';
+import { ApiError, call } from '@/client/api';
+import type { StockShortage } from '@/shared/wire/plans';
 
 /**
  * Release a draft plan: its stock is reserved all at once. When a piece is gone, nothing is reserved and the
@@ -14,11 +14,14 @@ export function ReleasePlanButton({ planId, describe }: { planId: string; descri
   const router = useRouter();
   const release = useMutation({
     mutationFn: async () => {
-      const res = await fetch(`/api/plans/${planId}/release`, { method: 'POST' });
-      const body = await res.json().catch(() => ({}));
-      if (res.status === 409 && body.missing) return { refused: body as { error: string; missing: Missing[]; renest: string } };
-      if (!res.ok) throw new ApiError(res.status, body.error ?? `Release failed (${res.status}).`, body.fields);
-      return { refused: null };
+      try {
+        await call('POST /api/plans/:id/release', { params: { id: planId } });
+        return { refused: null };
+      } catch (e) {
+        // A 409 that names the pieces gone is an answer to show, not an error.
+        if (e instanceof ApiError && e.status === 409 && e.details.missing) return { refused: e.details as unknown as StockShortage };
+        throw e;
+      }
     },
     onSuccess: (r) => {
       if (!r.refused) router.refresh();

@@ -8,7 +8,7 @@ import { useStockAction } from './use-stock-action';
 export function ScrapOffcutButton({ id, label }: { id: string; label: string }) {
   const [confirming, setConfirming] = useState(false);
   const [reason, setReason] = useState('');
-  const action = useStockAction(`/api/offcuts/${id}/scrap`, 'POST', () => setConfirming(false));
+  const action = useStockAction('POST /api/offcuts/:id/scrap', { params: { id }, onDone: () => setConfirming(false) });
   if (!confirming) {
     return (
       <button type="button" className="btn-danger px-2 py-1 text-xs" onClick={() => setConfirming(true)} aria-label={`Scrap ${label}`}>

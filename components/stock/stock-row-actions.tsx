@@ -51,7 +51,7 @@ function ReceiveForm({ id, label, onDone }: { id: string; label: string; onDone:
     resolver: zodResolver(receiveForm),
     defaultValues: { quantity: '', reason: '' },
   });
-  const action = useStockAction(`/api/stock/${id}/receive`, 'POST', onDone);
+  const action = useStockAction('POST /api/stock/:id/receive', { params: { id }, onDone });
   const e = form.formState.errors;
   return (
     <form
@@ -79,7 +79,7 @@ function AdjustForm({ id, label, onHand, onDone }: { id: string; label: string; 
     resolver: zodResolver(adjustForm),
     defaultValues: { count: String(onHand), reason: '' },
   });
-  const action = useStockAction(`/api/stock/${id}/adjust`, 'POST', onDone);
+  const action = useStockAction('POST /api/stock/:id/adjust', { params: { id }, onDone });
   const e = form.formState.errors;
   return (
     <form

@@ -2,13 +2,17 @@
 
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
-import { api } from '@/client/api';
+import { call, type Answer, type CallInit } from '@/client/api';
+import type { ApiBody, ApiRoute, PathParams } from '@/shared/wire/api';
 
-/** A stock-room change: POST/PATCH to the API, then re-render the server page so counts and history are fresh. */
-export function useStockAction<T = unknown>(url: string, method: 'POST' | 'PATCH' = 'POST', onDone?: (result: T) => void) {
+/** A stock-room change: a call to the API, then re-render the server page so counts and history are fresh. */
+export function useStockAction<K extends ApiRoute>(
+  key: K,
+  { params, onDone }: { params?: PathParams<K>; onDone?: (result: Answer<K>) => void } = {},
+) {
   const router = useRouter();
   return useMutation({
-    mutationFn: (body: unknown) => api<T>(url, { method, body }),
+    mutationFn: (body: ApiBody<K>) => call(key, ...([{ params, body }] as [CallInit<K>])),
     onSuccess: (result) => {
       onDone?.(result);
       router.refresh();

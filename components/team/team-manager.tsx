@@ -4,23 +4,23 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState, type FormEvent } from 'react';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { ROLE_LABELS, ROLES, type Role } from '@/lib/auth/permissions';
-import { api, ApiError } from '@/client/api';
-import type { TeamMember } from '@/shared/schemas/user';
+import { ApiError, call } from '@/client/api';
+import type { ApiBody } from '@/shared/wire/api';
 
 export function TeamManager({ selfId }: { selfId: string }) {
   const queryClient = useQueryClient();
-  const team = useQuery({ queryKey: ['team'], queryFn: () => api<TeamMember[]>('/api/team') });
+  const team = useQuery({ queryKey: ['team'], queryFn: () => call('GET /api/team') });
   const [fields, setFields] = useState<Record<string, string[]>>({});
   const [rowError, setRowError] = useState<string | null>(null);
 
   const add = useMutation({
-    mutationFn: (body: Record<string, unknown>) => api<TeamMember>('/api/team', { method: 'POST', body }),
+    mutationFn: (body: ApiBody<'POST /api/team'>) => call('POST /api/team', { body }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['team'] }),
     onError: (e) => setFields(e instanceof ApiError ? e.fields : {}),
   });
   const [withPassword, setWithPassword] = useState(false);
   const resend = useMutation({
-    mutationFn: (id: string) => api<TeamMember>(`/api/team/${id}/invite`, { method: 'POST' }),
+    mutationFn: (id: string) => call('POST /api/team/:id/invite', { params: { id } }),
     onSuccess: (m) => {
       setRowError(null);
       setNotice(`A new invite is on its way to ${m.email}; the earlier link no longer works.`);
@@ -29,7 +29,7 @@ export function TeamManager({ selfId }: { selfId: string }) {
   });
   const [notice, setNotice] = useState<string | null>(null);
   const change = useMutation({
-    mutationFn: ({ id, ...body }: { id: string; role?: Role; active?: boolean }) => api<TeamMember>(`/api/team/${id}`, { method: 'PATCH', body }),
+    mutationFn: ({ id, ...body }: { id: string; role?: Role; active?: boolean }) => call('PATCH /api/team/:id', { params: { id }, body }),
     onSuccess: () => {
       setRowError(null);
       queryClient.invalidateQueries({ queryKey: ['team'] });
@@ -41,9 +41,11 @@ export function TeamManager({ selfId }: { selfId: string }) {
     event.preventDefault();
     const formEl = event.currentTarget;
     const form = new FormData(formEl);
+    const text = (name: string) => String(form.get(name) ?? '');
     setFields({});
     add.mutate(
-      { name: form.get('name'), email: form.get('email'), role: form.get('role'), ...(withPassword ? { password: form.get('password') } : {}) },
+      // The select offers only the roles; the server checks the value all the same.
+      { name: text('name'), email: text('email'), role: text('role') as Role, ...(withPassword ? { password: text('password') } : {}) },
       { onSuccess: () => formEl.reset() },
     );
   }

@@ -2,15 +2,10 @@ import { exactLengthText } from './exact-length';
 import { parseLength } from '@/lib/units/parse-length';
 import type { UploadReport } from './validate-rows';
 import type { ShopUnits } from '@/shared/schemas/units';
+import type { StockOffer } from '@/shared/wire/stock';
 
 /** What the stock room offers in one material and thickness (sheets, boards or offcuts). */
-export interface StockOffer {
-  material: string;
-  kind: 'sheet' | 'board' | 'offcut';
-  thicknessMm: number;
-  /** What the shop calls the thickness ("3/4\"", "4/4"); empty for offcuts. */
-  nominal: string;
-}
+export type { StockOffer };
 
 /** Thicknesses this close are the same stock, as the nesting engine matches them (lib/nesting/stock-rules.ts). */
 export const THICKNESS_MATCH_TOLERANCE_MM = 0.01;

@@ -2,14 +2,10 @@ import { parseLength, type LengthUnit } from '@/lib/units/parse-length';
 import { CUT_LIST_FIELD_LABELS, type CutListField, type CutListUpload } from '@/shared/schemas/cut-list-upload';
 import { partInputSchema, type PartInput } from '@/shared/schemas/part';
 import type { GrainRule } from '@/shared/schemas/drawer-schedule';
+import type { RowProblem, UploadRowResult } from '@/shared/wire/jobs';
 import { UPLOAD_LIMITS } from './limits';
 
-export interface RowProblem {
-  field: CutListField | 'row';
-  message: string;
-}
-
-export type UploadRowResult = { line: number; ok: true; part: PartInput } | { line: number; ok: false; problems: RowProblem[] };
+export type { RowProblem, UploadRowResult };
 
 export interface UploadReport {
   rows: UploadRowResult[];
@@ -58,8 +54,25 @@ export function validateUploadRows(upload: Pick<CutListUpload, 'columns' | 'rows
 }
 
 function validateRow(line: number, columns: readonly CutListField[], cells: readonly string[], unit: LengthUnit): UploadRowResult {
+  const { raw, problems } = readCells(columns, cells);
+  const values = readPart(raw, unit, problems);
+  if (problems.length) return { line, ok: false, problems };
+  // The same schema the editor and API use decides the rest (name length, quantity range, size range).
+  const parsed = partInputSchema.safeParse({ ...values, notes: raw.notes ?? '' });
+  if (parsed.success) return { line, ok: true, part: parsed.data };
+  return {
+    line,
+    ok: false,
+    problems: parsed.error.issues.map((issue) => ({ field: schemaFieldToColumn(String(issue.path[0] ?? '')), message: issue.message })),
+  };
+}
+
+type RawCells = Partial<Record<CutListField, string>>;
+
+/** Each cell trimmed, or a problem: longer than the limit, or holding control characters. */
+function readCells(columns: readonly CutListField[], cells: readonly string[]): { raw: RawCells; problems: RowProblem[] } {
   const problems: RowProblem[] = [];
-  const raw = {} as Partial<Record<CutListField, string>>;
+  const raw: RawCells = {};
   columns.forEach((field, i) => {
     const value = (cells[i] ?? '').trim();
     const label = CUT_LIST_FIELD_LABELS[field];
@@ -68,6 +81,11 @@ function validateRow(line: number, columns: readonly CutListField[], cells: read
     else if (CONTROL.test(value)) problems.push({ field, message: `${label} contains control characters.` });
     else raw[field] = value;
   });
+  return { raw, problems };
+}
+
+/** The part's values read from its cells, adding a problem for each that is missing or does not read. */
+function readPart(raw: RawCells, unit: LengthUnit, problems: RowProblem[]) {
   const bad = new Set(problems.map((p) => p.field));
   const need = (field: CutListField): string | undefined => {
     if (bad.has(field)) return undefined;
@@ -99,37 +117,20 @@ function validateRow(line: number, columns: readonly CutListField[], cells: read
       message: `Thickness “${raw.thickness}” reads as ${thicknessMm} mm — thinner than any stock. If it is inches, choose inches or write ${raw.thickness}″.`,
     });
   const material = need('material');
-
-  let grain: GrainRule = 'along-length';
-  if (!bad.has('grain') && raw.grain !== undefined) {
-    const word = GRAIN_WORDS[raw.grain.toLowerCase()];
-    if (word) grain = word;
-    else problems.push({ field: 'grain', message: `Grain “${raw.grain}” is not understood: write “along” (grain runs along the length) or “any”.` });
-  }
+  const grain = bad.has('grain') ? 'along-length' : readGrain(raw.grain, problems);
   const jointAllowanceMm = raw.jointAllowance ? length('jointAllowance', raw.jointAllowance) : 0;
   if (jointAllowanceMm !== undefined && lengthMm !== undefined && jointAllowanceMm >= lengthMm)
     problems.push({ field: 'jointAllowance', message: 'Joint allowance is part of the length, so it must be shorter than the length.' });
+  return { label, quantity, lengthMm, widthMm, thicknessMm, material, grain, jointAllowanceMm };
+}
 
-  if (problems.length) return { line, ok: false, problems };
-
-  // The same schema the editor and API use decides the rest (name length, quantity range, size range).
-  const parsed = partInputSchema.safeParse({
-    label,
-    quantity,
-    lengthMm,
-    widthMm,
-    thicknessMm,
-    material,
-    grain,
-    jointAllowanceMm,
-    notes: raw.notes ?? '',
-  });
-  if (parsed.success) return { line, ok: true, part: parsed.data };
-  return {
-    line,
-    ok: false,
-    problems: parsed.error.issues.map((issue) => ({ field: schemaFieldToColumn(String(issue.path[0] ?? '')), message: issue.message })),
-  };
+/** Along the length unless the cell says otherwise in words the shop uses. */
+function readGrain(text: string | undefined, problems: RowProblem[]): GrainRule {
+  if (text === undefined) return 'along-length';
+  const word = GRAIN_WORDS[text.toLowerCase()];
+  if (word) return word;
+  problems.push({ field: 'grain', message: `Grain “${text}” is not understood: write “along” (grain runs along the length) or “any”.` });
+  return 'along-length';
 }
 
 const COLUMN_OF: Record<string, CutListField> = {

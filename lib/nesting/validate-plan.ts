@@ -85,32 +85,59 @@ function clearance(a: Placement, b: Placement): number {
   return Math.max(gx, gy);
 }
 
+/** A stock piece of the plan judged alone: the stock it claims, where its parts lie, its cuts and its saw order. */
 function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts: Map<string, NestPart>): Violation[] {
-  const out: Violation[] = [];
   const { settings } = request;
-  const at = { piece: index };
   const stock = request.stock.find((s) => s.id === piece.stockId);
-  if (!stock) out.push({ code: 'unknown-stock', message: `piece ${index + 1} uses stock "${piece.stockId}", which is not in the request`, ...at });
-  else {
-    const same =
-      stock.kind === piece.kind &&
-      Math.abs(stock.length - piece.length) <= EPS &&
-      Math.abs(stock.width - piece.width) <= EPS &&
-      sameStock(stock, piece) &&
-      Math.abs(trimFor(stock, settings) - piece.trim) <= EPS;
-    if (!same)
-      out.push({
-        code: 'stock-mismatch',
-        message: `piece ${index + 1} does not match stock "${stock.id}" (kind, size, material, thickness or trim)`,
-        ...at,
-      });
-  }
   const trim = stock ? trimFor(stock, settings) : piece.trim;
   const usable = usableRect(piece, trim);
+  const placed = placementProblems(piece, index, parts, stock, usable, trim);
+  const spacing = spacingProblems(piece, index, parts, settings.kerf);
+  // The cuts are judged only on a piece whose parts lie inside it, at their size and apart.
+  const geometryOk = placed.geometryOk && spacing.length === 0;
+  return [
+    ...stockProblems(piece, index, stock, settings),
+    ...placed.violations,
+    ...spacing,
+    ...(geometryOk ? stageProblems(piece, index, usable, settings) : []),
+    ...treeProblems(piece, index),
+    ...(piece.sawOrder ? sawOrderProblems(piece, piece.sawOrder, index, parts, settings) : []),
+  ];
+}
+
+type Stock = NestRequest['stock'][number];
+type Settings = NestRequest['settings'];
+
+/** The piece is the request's stock it names: same kind, size, material, thickness and trim. */
+function stockProblems(piece: PlanPiece, index: number, stock: Stock | undefined, settings: Settings): Violation[] {
+  const at = { piece: index };
+  if (!stock) return [{ code: 'unknown-stock', message: `piece ${index + 1} uses stock "${piece.stockId}", which is not in the request`, ...at }];
+  const same =
+    stock.kind === piece.kind &&
+    Math.abs(stock.length - piece.length) <= EPS &&
+    Math.abs(stock.width - piece.width) <= EPS &&
+    sameStock(stock, piece) &&
+    Math.abs(trimFor(stock, settings) - piece.trim) <= EPS;
+  if (same) return [];
+  return [
+    { code: 'stock-mismatch', message: `piece ${index + 1} does not match stock "${stock.id}" (kind, size, material, thickness or trim)`, ...at },
+  ];
+}
+
+/** Each part at its own size, on its material, turned only where its grain allows, inside the trimmed piece. */
+function placementProblems(
+  piece: PlanPiece,
+  index: number,
+  parts: Map<string, NestPart>,
+  stock: Stock | undefined,
+  usable: ReturnType<typeof usableRect>,
+  trim: number,
+): { violations: Violation[]; geometryOk: boolean } {
+  const out: Violation[] = [];
   let geometryOk = true;
   for (const p of piece.placements) {
     const part = parts.get(p.partId);
-    const where = { ...at, partId: p.partId, instance: p.instance };
+    const where = { piece: index, partId: p.partId, instance: p.instance };
     if (part) {
       const [w, h] = p.rotated ? [part.width, part.length] : [part.length, part.width];
       if (Math.abs(p.w - w) > EPS || Math.abs(p.h - h) > EPS) {
@@ -141,109 +168,137 @@ function checkPiece(piece: PlanPiece, index: number, request: NestRequest, parts
       geometryOk = false;
     }
   }
+  return { violations: out, geometryOk };
+}
+
+/** Every two parts at least one kerf apart along x or y (a sweep along x finds the pairs close enough to judge). */
+function spacingProblems(piece: PlanPiece, index: number, parts: Map<string, NestPart>, kerf: number): Violation[] {
+  const out: Violation[] = [];
   const byX = [...piece.placements].sort((a, b) => a.x - b.x);
   for (let i = 0; i < byX.length; i++) {
-    for (let j = i + 1; j < byX.length && byX[j].x < byX[i].x + byX[i].w + settings.kerf - EPS; j++) {
+    for (let j = i + 1; j < byX.length && byX[j].x < byX[i].x + byX[i].w + kerf - EPS; j++) {
       const [a, b] = [byX[i], byX[j]];
       const gap = clearance(a, b);
-      if (gap >= settings.kerf - EPS) continue;
-      const what = gap < -EPS ? 'overlap' : `are ${Math.max(0, gap).toFixed(2)} mm apart, closer than one kerf (${settings.kerf} mm)`;
+      if (gap >= kerf - EPS) continue;
+      const what = gap < -EPS ? 'overlap' : `are ${Math.max(0, gap).toFixed(2)} mm apart, closer than one kerf (${kerf} mm)`;
       out.push({
         code: 'overlap',
         message: `${name(parts.get(a.partId), a)} and ${name(parts.get(b.partId), b)} ${what}`,
-        ...at,
+        piece: index,
         partId: b.partId,
         instance: b.instance,
         other: { partId: a.partId, instance: a.instance },
       });
-      geometryOk = false;
     }
   }
+  return out;
+}
+
+/**
+ * The layout comes apart with straight through-cuts, in as many stages as the saw takes and starting the way it
+ * does. With a breakdown saw the stages are judged on the saw order (each saw's own, from the piece it is handed);
+ * with one saw or none, on the canonical tree of the bare placements.
+ */
+function stageProblems(piece: PlanPiece, index: number, usable: ReturnType<typeof usableRect>, settings: Settings): Violation[] {
+  const at = { piece: index };
+  const rule = settings.breakdownSaw ? { maxStages: Infinity } : stageRule(settings);
+  if (findGuillotineTree(usable, piece.placements, settings.kerf, rule.maxStages, rule.firstAxis)) return [];
+  const anyTree = rule.maxStages !== Infinity && findGuillotineTree(usable, piece.placements, settings.kerf);
+  const otherWay =
+    anyTree && rule.firstAxis && findGuillotineTree(usable, piece.placements, settings.kerf, rule.maxStages, rule.firstAxis === 'y' ? 'x' : 'y');
+  const who = settings.saw ? settings.saw.name : 'strip cutting';
+  const first = rule.firstAxis === 'y' ? 'rips' : 'crosscuts';
+  if (otherWay)
+    return [
+      {
+        code: 'first-stage',
+        message: `piece ${index + 1} can be cut in ${rule.maxStages} stages only with ${first === 'rips' ? 'crosscuts' : 'rips'} first, but ${who} starts with ${first}`,
+        ...at,
+      },
+    ];
+  if (anyTree)
+    return [
+      { code: 'too-many-stages', message: `piece ${index + 1} needs more than ${rule.maxStages} stages of cuts (${first} first) for ${who}`, ...at },
+    ];
+  return [{ code: 'not-guillotine', message: `piece ${index + 1} cannot be cut apart with straight through-cuts`, ...at }];
+}
+
+/** The cut tree, when the plan carries one, is well formed over the whole piece. */
+function treeProblems(piece: PlanPiece, index: number): Violation[] {
+  if (!piece.tree) return [];
+  return checkTree(piece.tree, stockRect(piece), piece.placements).map((t) => ({
+    code: 'tree',
+    message: `piece ${index + 1}: ${t.message}`,
+    piece: index,
+  }));
+}
+
+type SawOrder = NonNullable<PlanPiece['sawOrder']>;
+
+/** The saw order, replayed from the whole piece: each step one its saw can make, and every part cut free exactly once. */
+function sawOrderProblems(piece: PlanPiece, sawOrder: SawOrder, index: number, parts: Map<string, NestPart>, settings: Settings): Violation[] {
+  const at = { piece: index };
+  const { pieces, problems, cutFrom } = replaySawOrder(sawOrder, stockRect(piece), stockPieceName(index), settings.kerf);
+  const out: Violation[] = problems.map((pr) => ({ code: 'saw-order', message: `piece ${index + 1}: ${pr.message}`, ...at, step: pr.step }));
+  out.push(...stepProblems(sawOrder, index, cutFrom, settings));
+  const finals = [...pieces.values()];
+  for (const p of piece.placements) {
+    const hits = finals.filter((f) => sameRect(f, p, EPS)).length;
+    if (hits !== 1) {
+      out.push({
+        code: 'saw-order',
+        message: `piece ${index + 1}: the saw order does not cut ${name(parts.get(p.partId), p)} free at its place`,
+        ...at,
+        partId: p.partId,
+        instance: p.instance,
+      });
+    }
+  }
+  return out;
+}
+
+/**
+ * Each step on its saw: without saws in the request, a rip keeps the shop's safe fence width; with them, the step
+ * names one, that saw can make it from the piece it is handed, and in no more stages than the saw is used with.
+ */
+function stepProblems(sawOrder: SawOrder, index: number, cutFrom: ReturnType<typeof replaySawOrder>['cutFrom'], settings: Settings): Violation[] {
+  const out: Violation[] = [];
   const saws = requestSaws(settings);
-  if (geometryOk) {
-    // With a breakdown saw the stages are judged on the saw order (each saw's own, from the piece it is handed);
-    // with one saw or none, on the canonical tree of the bare placements.
-    const rule = settings.breakdownSaw ? { maxStages: Infinity } : stageRule(settings);
-    const tree = findGuillotineTree(usable, piece.placements, settings.kerf, rule.maxStages, rule.firstAxis);
-    if (!tree) {
-      const anyTree = rule.maxStages !== Infinity && findGuillotineTree(usable, piece.placements, settings.kerf);
-      const otherWay =
-        anyTree && rule.firstAxis && findGuillotineTree(usable, piece.placements, settings.kerf, rule.maxStages, rule.firstAxis === 'y' ? 'x' : 'y');
-      const who = settings.saw ? settings.saw.name : 'strip cutting';
-      const first = rule.firstAxis === 'y' ? 'rips' : 'crosscuts';
-      out.push(
-        otherWay
-          ? {
-              code: 'first-stage',
-              message: `piece ${index + 1} can be cut in ${rule.maxStages} stages only with ${first === 'rips' ? 'crosscuts' : 'rips'} first, but ${who} starts with ${first}`,
-              ...at,
-            }
-          : anyTree
-            ? {
-                code: 'too-many-stages',
-                message: `piece ${index + 1} needs more than ${rule.maxStages} stages of cuts (${first} first) for ${who}`,
-                ...at,
-              }
-            : { code: 'not-guillotine', message: `piece ${index + 1} cannot be cut apart with straight through-cuts`, ...at },
-      );
-    }
-  }
-  const whole = stockRect(piece);
-  if (piece.tree) {
-    for (const t of checkTree(piece.tree, whole, piece.placements)) out.push({ code: 'tree', message: `piece ${index + 1}: ${t.message}`, ...at });
-  }
-  if (piece.sawOrder) {
-    const { pieces, problems, cutFrom } = replaySawOrder(piece.sawOrder, whole, stockPieceName(index), settings.kerf);
-    for (const pr of problems) out.push({ code: 'saw-order', message: `piece ${index + 1}: ${pr.message}`, ...at, step: pr.step });
-    const stages = saws.length ? stepStages(piece.sawOrder, stockPieceName(index), saws) : [];
-    piece.sawOrder.forEach((step, i) => {
-      const where = { ...at, step: step.n };
-      if (!saws.length) {
-        if (step.kind === 'rip' && !step.narrow && step.fence < settings.minFenceWidth - EPS) {
-          out.push({
-            code: 'unsafe-fence',
-            message: `piece ${index + 1}, step ${step.n}: a rip with ${step.fence} mm between blade and fence, under the ${settings.minFenceWidth} mm safe minimum`,
-            ...where,
-          });
-        }
-        return;
-      }
-      const saw = saws.find((s) => s.name === step.saw);
-      if (!saw) {
+  const stages = saws.length ? stepStages(sawOrder, stockPieceName(index), saws) : [];
+  sawOrder.forEach((step, i) => {
+    const where = { piece: index, step: step.n };
+    if (!saws.length) {
+      if (step.kind === 'rip' && !step.narrow && step.fence < settings.minFenceWidth - EPS) {
         out.push({
-          code: 'unknown-saw',
-          message: `piece ${index + 1}, step ${step.n}: ${step.saw ? `“${step.saw}” is not a saw of this nest` : 'the step does not say which saw makes it'}`,
-          ...where,
-        });
-        return;
-      }
-      const from = cutFrom[i];
-      if (from)
-        for (const pr of cutProblems(saw, step, from))
-          out.push({ code: pr.code, message: `piece ${index + 1}, step ${step.n}: ${pr.message}`, ...where });
-      const limit = sawStageRule(saw).maxStages;
-      if (stages[i] > limit) {
-        out.push({
-          code: 'too-many-stages',
-          message: `piece ${index + 1}, step ${step.n}: stage ${stages[i]} of cuts on ${saw.name}, which is used with at most ${limit}`,
+          code: 'unsafe-fence',
+          message: `piece ${index + 1}, step ${step.n}: a rip with ${step.fence} mm between blade and fence, under the ${settings.minFenceWidth} mm safe minimum`,
           ...where,
         });
       }
-    });
-    const finals = [...pieces.values()];
-    for (const p of piece.placements) {
-      const hits = finals.filter((f) => sameRect(f, p, EPS)).length;
-      if (hits !== 1) {
-        out.push({
-          code: 'saw-order',
-          message: `piece ${index + 1}: the saw order does not cut ${name(parts.get(p.partId), p)} free at its place`,
-          ...at,
-          partId: p.partId,
-          instance: p.instance,
-        });
-      }
+      return;
     }
-  }
+    const saw = saws.find((s) => s.name === step.saw);
+    if (!saw) {
+      out.push({
+        code: 'unknown-saw',
+        message: `piece ${index + 1}, step ${step.n}: ${step.saw ? `“${step.saw}” is not a saw of this nest` : 'the step does not say which saw makes it'}`,
+        ...where,
+      });
+      return;
+    }
+    const from = cutFrom[i];
+    if (from)
+      for (const pr of cutProblems(saw, step, from))
+        out.push({ code: pr.code, message: `piece ${index + 1}, step ${step.n}: ${pr.message}`, ...where });
+    const limit = sawStageRule(saw).maxStages;
+    if (stages[i] > limit) {
+      out.push({
+        code: 'too-many-stages',
+        message: `piece ${index + 1}, step ${step.n}: stage ${stages[i]} of cuts on ${saw.name}, which is used with at most ${limit}`,
+        ...where,
+      });
+    }
+  });
   return out;
 }
 

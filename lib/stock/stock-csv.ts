@@ -4,6 +4,7 @@ import { lengthInput } from '@/shared/schemas/units';
 import { thicknessInput } from '@/shared/schemas/lumber';
 import { thicknessMm } from '@/lib/lumber/thickness';
 import { stockItemSchema, type StockItemValues } from '@/shared/schemas/stock';
+import type { StockCsvError } from '@/shared/wire/stock';
 
 /**
  * Reading a stock file: one sheet or board size per row. Every bad row is named with its line and reasons, and
@@ -55,10 +56,7 @@ export interface StockCsvRow {
   line: number;
   item: StockItemValues;
 }
-export interface StockCsvError {
-  line: number;
-  messages: string[];
-}
+export type { StockCsvError };
 export interface StockCsvResult {
   rows: StockCsvRow[];
   errors: StockCsvError[];
@@ -138,21 +136,52 @@ function parsersFor(unit: LengthUnit) {
   return p;
 }
 
+type Cell = (c: Column) => string;
+type Note = (field: string, msg: string) => void;
+
 /** One row checked: its item, or every reason it cannot be imported. */
 function checkRow(cells: string[], columns: (Column | undefined)[], unit: LengthUnit, line: number): RowResult {
-  const parse = parsersFor(unit);
-  const cell = (c: Column) => {
+  const cell: Cell = (c) => {
     const at = columns.indexOf(c);
     return at < 0 ? '' : (cells[at] ?? '').trim();
   };
   const messages: string[] = [];
-  const note = (field: string, msg: string) => messages.push(`${field}: ${msg}`);
+  const note: Note = (field, msg) => messages.push(`${field}: ${msg}`);
 
   if (!cell('material')) note('material', 'is empty');
-  const kindText = cell('kind').toLowerCase();
-  const kind = kindText.startsWith('sheet') ? 'sheet' : kindText.startsWith('board') || kindText === 'lumber' ? 'board' : null;
-  if (!kind) note('kind', `"${cell('kind')}" is not sheet or board`);
+  const kind = readKind(cell, note);
+  const sizes = readSizes(cell, note, unit);
+  const counts = readCounts(cell, note);
+  const { grain, surfacing, buyable } = readDetails(cell, note);
 
+  if (messages.length) return { ok: false, error: { line, messages } };
+  const item = stockItemSchema.safeParse({
+    kind,
+    material: cell('material'),
+    nominalThickness: cell('thickness'),
+    ...sizes,
+    grain,
+    surfacing: kind === 'sheet' ? '' : surfacing,
+    grade: cell('grade'),
+    ...counts,
+    supplier: cell('supplier'),
+    location: cell('location'),
+    buyable,
+  });
+  if (!item.success) return { ok: false, error: { line, messages: item.error.issues.map((is) => `${String(is.path[0] ?? 'row')}: ${is.message}`) } };
+  return { ok: true, row: { line, item: item.data } };
+}
+
+function readKind(cell: Cell, note: Note): 'sheet' | 'board' | null {
+  const text = cell('kind').toLowerCase();
+  const kind = text.startsWith('sheet') ? 'sheet' : text.startsWith('board') || text === 'lumber' ? 'board' : null;
+  if (!kind) note('kind', `"${cell('kind')}" is not sheet or board`);
+  return kind;
+}
+
+/** Thickness (nominal, or the actual one when given), length and width, in the file's unit. */
+function readSizes(cell: Cell, note: Note, unit: LengthUnit) {
+  const parse = parsersFor(unit);
   const thickness = parse.thickness.safeParse(cell('thickness'));
   if (!thickness.success) note('thickness', thickness.error.issues[0].message);
   let actualMm = thickness.success ? thicknessMm(thickness.data) : NaN;
@@ -165,7 +194,11 @@ function checkRow(cells: string[], columns: (Column | undefined)[], unit: Length
   if (!length.success) note('length', length.error.issues[0].message);
   const width = parse.length.safeParse(cell('width'));
   if (!width.success) note('width', width.error.issues[0].message);
+  return { thicknessMm: actualMm, lengthMm: length.data, widthMm: width.data };
+}
 
+/** The count on hand (required), the low-stock mark and the cost. */
+function readCounts(cell: Cell, note: Note) {
   const whole = (c: Column, fallback: number) => {
     const v = cell(c);
     if (!v) return fallback;
@@ -181,6 +214,11 @@ function checkRow(cells: string[], columns: (Column | undefined)[], unit: Length
   const costText = cell('cost');
   const costCents = costText ? parseMoneyCents(costText) : 0;
   if (costCents === null) note('cost', `"${costText}" is not an amount of money`);
+  return { onHand, lowStockAt, costCents };
+}
+
+/** Grain (grained unless the file says none), whether it can be bought, and a board's surfacing. */
+function readDetails(cell: Cell, note: Note) {
   const grainText = cell('grain').toLowerCase();
   // Safe default: grained, so a part is never turned across the grain unless the file says the stock has none.
   const grain =
@@ -195,27 +233,7 @@ function checkRow(cells: string[], columns: (Column | undefined)[], unit: Length
   const surfacingText = cell('surfacing');
   const surfacing = ({ '': '', rough: 'rough', s2s: 'S2S', s4s: 'S4S' } as Record<string, string>)[surfacingText.toLowerCase()];
   if (surfacing === undefined) note('surfacing', `"${surfacingText}" is not rough, S2S or S4S`);
-
-  if (messages.length) return { ok: false, error: { line, messages } };
-  const item = stockItemSchema.safeParse({
-    kind,
-    material: cell('material'),
-    nominalThickness: cell('thickness'),
-    thicknessMm: actualMm,
-    lengthMm: length.data,
-    widthMm: width.data,
-    grain,
-    surfacing: kind === 'sheet' ? '' : surfacing,
-    grade: cell('grade'),
-    onHand,
-    lowStockAt,
-    costCents,
-    supplier: cell('supplier'),
-    location: cell('location'),
-    buyable: YES.has(buyableText),
-  });
-  if (!item.success) return { ok: false, error: { line, messages: item.error.issues.map((is) => `${String(is.path[0] ?? 'row')}: ${is.message}`) } };
-  return { ok: true, row: { line, item: item.data } };
+  return { grain, surfacing, buyable: YES.has(buyableText) };
 }
 
 /** Checks a stock file row by row, all at once (small files, tests). */

@@ -28,13 +28,13 @@ export interface RouteContext<P, B, Q, U = SessionUser> {
 /** Routes for people who cannot sign in yet (accepting an invite, resetting a forgotten password). */
 export const ANYONE = 'anyone';
 
-interface RouteSpec<P, B, Q> {
+interface RouteSpec<P, B, Q, BI = B, QI = Q> {
   /** What the caller must be allowed; `ANYONE` for the few public routes (signed in or not: `user` may be null). */
   permission: Permission | typeof ANYONE;
   /** Path parameters; a value that does not parse (say, not a uuid) is a 404, not a 422. */
   params?: ZodType<P>;
-  body?: ZodType<B>;
-  query?: ZodType<Q>;
+  body?: ZodType<B, BI>;
+  query?: ZodType<Q, QI>;
   /** Status of a successful response (201 for creations). */
   status?: number;
   /**
@@ -48,21 +48,40 @@ setErrorReporter((error, requestId) => log().error({ err: error, requestId }, 'u
 
 type NextRouteContext = { params: Promise<Record<string, string | string[]>> };
 
+declare const wire: unique symbol;
+
+/**
+ * What `route()` gives Next.js: the request handler, carrying (as a type only, nothing at run time) what it answers
+ * and what it reads, so `tests/house-rules/api-contract.ts` holds it to the table of `shared/wire/api.ts`.
+ * `Result` is the handler's resolved value, `Body` and `Query` what the zod schemas accept (`z.input`).
+ */
+export type RouteHandler<Result, Body = undefined, Query = undefined> = ((req: NextRequest, context: NextRouteContext) => Promise<Response>) & {
+  readonly [wire]?: { result: Result; body: Body; query: Query };
+};
+
+/** What a route answers in JSON: its handler's value, `{ ok: true }` for none; a `Response` it builds is not JSON. */
+export type RouteResult<H> = H extends RouteHandler<infer R, unknown, unknown> ? JsonAnswer<Exclude<R, Response>> : never;
+/** What a route's body schema accepts (`undefined` for none). */
+export type RouteBody<H> = H extends { readonly [wire]?: { body: infer B } } ? B : never;
+/** What a route's query schema accepts (`undefined` for none). */
+export type RouteQuery<H> = H extends { readonly [wire]?: { query: infer Q } } ? Q : never;
+type JsonAnswer<R> = [R] extends [never] ? never : R extends null | undefined | void ? { ok: true } : R;
+
 /**
  * Every API route handler is built with this: authenticate → check the permission → parse params, query and body
  * with zod → act → respond. The proxy only redirects pages; this is where access is decided. Before anything
  * else, a state-changing request must come from the app's own pages (403) and carry JSON if it has a body (415).
  */
+export function route<R, P = undefined, B = undefined, Q = undefined, BI = undefined, QI = undefined>(
+  spec: RouteSpec<P, B, Q, BI, QI> & { permission: typeof ANYONE },
+  handler: (ctx: RouteContext<P, B, Q, SessionUser | null>) => Promise<R>,
+): RouteHandler<R, BI, QI>;
+export function route<R, P = undefined, B = undefined, Q = undefined, BI = undefined, QI = undefined>(
+  spec: RouteSpec<P, B, Q, BI, QI> & { permission: Permission },
+  handler: (ctx: RouteContext<P, B, Q>) => Promise<R>,
+): RouteHandler<R, BI, QI>;
 export function route<P = undefined, B = undefined, Q = undefined>(
-  spec: RouteSpec<P, B, Q> & { permission: typeof ANYONE },
-  handler: (ctx: RouteContext<P, B, Q, SessionUser | null>) => Promise<unknown>,
-): (req: NextRequest, context: NextRouteContext) => Promise<Response>;
-export function route<P = undefined, B = undefined, Q = undefined>(
-  spec: RouteSpec<P, B, Q> & { permission: Permission },
-  handler: (ctx: RouteContext<P, B, Q>) => Promise<unknown>,
-): (req: NextRequest, context: NextRouteContext) => Promise<Response>;
-export function route<P = undefined, B = undefined, Q = undefined>(
-  spec: RouteSpec<P, B, Q>,
+  spec: RouteSpec<P, B, Q, unknown, unknown>,
   handler: (ctx: RouteContext<P, B, Q, never>) => Promise<unknown>,
 ) {
   return async (req: NextRequest, context: NextRouteContext): Promise<Response> => {

@@ -56,114 +56,44 @@ function reason(error: unknown): string {
   return (e.responseCode ? text : e.code && !text.includes(e.code) ? `${e.code}: ${text}` : text).slice(0, 500);
 }
 
+/** The sender's options with their defaults filled in, and its transport. */
+interface Sender {
+  db: Db;
+  from: string;
+  now: () => Date;
+  batchSize: number;
+  claimMs: number;
+  maxAttempts: number;
+  backoffMs: (attempt: number) => number;
+  transport: Transporter;
+  afterSend?: SenderOptions['afterSend'];
+}
+
+function senderOf(options: SenderOptions): Sender {
+  return {
+    db: options.db,
+    from: options.from,
+    now: options.now ?? (() => new Date()),
+    batchSize: options.batchSize ?? 10,
+    claimMs: options.claimMs ?? 5 * 60_000,
+    maxAttempts: options.maxAttempts ?? 8,
+    backoffMs: options.backoffMs ?? defaultBackoffMs,
+    transport:
+      typeof options.transport === 'string'
+        ? nodemailer.createTransport(options.transport, { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 60_000 } as never)
+        : options.transport,
+    afterSend: options.afterSend,
+  };
+}
+
 export function createMailSender(options: SenderOptions) {
-  const { db, from } = options;
-  const now = options.now ?? (() => new Date());
-  const batchSize = options.batchSize ?? 10;
-  const claimMs = options.claimMs ?? 5 * 60_000;
-  const maxAttempts = options.maxAttempts ?? 8;
-  const backoffMs = options.backoffMs ?? defaultBackoffMs;
-  const transport: Transporter =
-    typeof options.transport === 'string'
-      ? nodemailer.createTransport(options.transport, { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 60_000 } as never)
-      : options.transport;
-
-  /** Takes the due rows (and rows whose sender stopped) for this sender, in one short transaction. */
-  async function claim(): Promise<OutboxRow[]> {
-    const at = now();
-    return db.transaction(async (tx) => {
-      const due = await tx
-        .select()
-        .from(mailOutbox)
-        .where(
-          or(
-            and(eq(mailOutbox.status, 'pending'), lte(mailOutbox.nextAttemptAt, at)),
-            and(eq(mailOutbox.status, 'sending'), lte(mailOutbox.claimedUntil, at)),
-          ),
-        )
-        .orderBy(mailOutbox.nextAttemptAt, mailOutbox.id)
-        .limit(batchSize)
-        .for('update', { skipLocked: true });
-      if (!due.length) return [];
-
-      const uncertain = due.filter((r) => r.status === 'sending' && r.staleClaims >= 1);
-      if (uncertain.length) {
-        await tx
-          .update(mailOutbox)
-          .set({
-            status: 'failed',
-            claimedUntil: null,
-            lastError: 'Sending stopped twice before this could be marked sent; it may have arrived. Check with the recipient before trying again.',
-          })
-          .where(
-            inArray(
-              mailOutbox.id,
-              uncertain.map((r) => r.id),
-            ),
-          );
-      }
-      const taken = due.filter((r) => !uncertain.includes(r));
-      const claimed: OutboxRow[] = [];
-      for (const r of taken) {
-        const [row] = await tx
-          .update(mailOutbox)
-          .set({
-            status: 'sending',
-            attempts: r.attempts + 1,
-            claimedUntil: new Date(at.getTime() + claimMs),
-            staleClaims: r.status === 'sending' ? r.staleClaims + 1 : r.staleClaims,
-          })
-          .where(eq(mailOutbox.id, r.id))
-          .returning();
-        claimed.push(row);
-      }
-      return claimed;
-    });
-  }
-
-  async function deliver(row: OutboxRow): Promise<'sent' | 'retrying' | 'failed'> {
-    try {
-      await transport.sendMail({
-        from,
-        to: row.toAddress,
-        subject: row.subject,
-        text: row.textBody,
-        ...(row.htmlBody ? { html: row.htmlBody } : {}),
-        messageId: row.messageId,
-        headers: { 'Auto-Submitted': 'auto-generated' },
-        attachments: row.attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, content: a.content, encoding: 'base64' })),
-      });
-    } catch (error) {
-      const permanent = isPermanent(error);
-      const giveUp = permanent || row.attempts >= maxAttempts;
-      const why = reason(error);
-      await db
-        .update(mailOutbox)
-        .set(
-          giveUp
-            ? {
-                status: 'failed',
-                claimedUntil: null,
-                lastError: permanent ? `Refused by the mail server: ${why}` : `Gave up after ${row.attempts} attempts: ${why}`,
-              }
-            : { status: 'pending', claimedUntil: null, lastError: why, nextAttemptAt: new Date(now().getTime() + backoffMs(row.attempts)) },
-        )
-        .where(and(eq(mailOutbox.id, row.id), eq(mailOutbox.status, 'sending')));
-      return giveUp ? 'failed' : 'retrying';
-    }
-    await options.afterSend?.(row);
-    await db
-      .update(mailOutbox)
-      .set({ status: 'sent', sentAt: now(), claimedUntil: null, lastError: null })
-      .where(and(eq(mailOutbox.id, row.id), eq(mailOutbox.status, 'sending')));
-    return 'sent';
-  }
+  const sender = senderOf(options);
 
   /** One round: claim what is due and deliver it. */
   async function runOnce(): Promise<RoundResult> {
-    const rows = await claim();
+    const rows = await claim(sender);
     const result: RoundResult = { claimed: rows.length, sent: 0, retrying: 0, failed: 0 };
-    for (const row of rows) result[await deliver(row)]++;
+    for (const row of rows) result[await deliver(sender, row)]++;
     return result;
   }
 
@@ -174,7 +104,7 @@ export function createMailSender(options: SenderOptions) {
   async function drain() {
     for (let i = 0; i < 100; i++) {
       const r = await runOnce();
-      if (r.claimed < batchSize) return;
+      if (r.claimed < sender.batchSize) return;
     }
   }
 
@@ -200,9 +130,110 @@ export function createMailSender(options: SenderOptions) {
       if (timer) clearInterval(timer);
       timer = undefined;
       await running;
-      transport.close();
+      sender.transport.close();
     },
   };
+}
+
+/** Takes the due rows (and rows whose sender stopped) for this sender, in one short transaction. */
+async function claim({ db, now, batchSize, claimMs }: Sender): Promise<OutboxRow[]> {
+  const at = now();
+  return db.transaction(async (tx) => {
+    const due = await tx
+      .select()
+      .from(mailOutbox)
+      .where(
+        or(
+          and(eq(mailOutbox.status, 'pending'), lte(mailOutbox.nextAttemptAt, at)),
+          and(eq(mailOutbox.status, 'sending'), lte(mailOutbox.claimedUntil, at)),
+        ),
+      )
+      .orderBy(mailOutbox.nextAttemptAt, mailOutbox.id)
+      .limit(batchSize)
+      .for('update', { skipLocked: true });
+    if (!due.length) return [];
+    const uncertain = due.filter((r) => r.status === 'sending' && r.staleClaims >= 1);
+    if (uncertain.length) await failUncertain(tx, uncertain);
+    const claimed: OutboxRow[] = [];
+    for (const r of due.filter((r) => !uncertain.includes(r))) {
+      const [row] = await tx
+        .update(mailOutbox)
+        .set({
+          status: 'sending',
+          attempts: r.attempts + 1,
+          claimedUntil: new Date(at.getTime() + claimMs),
+          staleClaims: r.status === 'sending' ? r.staleClaims + 1 : r.staleClaims,
+        })
+        .where(eq(mailOutbox.id, r.id))
+        .returning();
+      claimed.push(row);
+    }
+    return claimed;
+  });
+}
+
+type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
+
+/** Rows whose sending stopped twice: they may have arrived, so they are not sent a third time. */
+async function failUncertain(tx: Tx, rows: OutboxRow[]) {
+  await tx
+    .update(mailOutbox)
+    .set({
+      status: 'failed',
+      claimedUntil: null,
+      lastError: 'Sending stopped twice before this could be marked sent; it may have arrived. Check with the recipient before trying again.',
+    })
+    .where(
+      inArray(
+        mailOutbox.id,
+        rows.map((r) => r.id),
+      ),
+    );
+}
+
+/** Sends one claimed row and marks what came of it. */
+async function deliver(sender: Sender, row: OutboxRow): Promise<'sent' | 'retrying' | 'failed'> {
+  const { db, now } = sender;
+  try {
+    await sender.transport.sendMail({
+      from: sender.from,
+      to: row.toAddress,
+      subject: row.subject,
+      text: row.textBody,
+      ...(row.htmlBody ? { html: row.htmlBody } : {}),
+      messageId: row.messageId,
+      headers: { 'Auto-Submitted': 'auto-generated' },
+      attachments: row.attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, content: a.content, encoding: 'base64' })),
+    });
+  } catch (error) {
+    return markRefused(sender, row, error);
+  }
+  await sender.afterSend?.(row);
+  await db
+    .update(mailOutbox)
+    .set({ status: 'sent', sentAt: now(), claimedUntil: null, lastError: null })
+    .where(and(eq(mailOutbox.id, row.id), eq(mailOutbox.status, 'sending')));
+  return 'sent';
+}
+
+/** A send that did not go: failed for good on a 5xx or after the last attempt, else pending again after the backoff. */
+async function markRefused({ db, now, maxAttempts, backoffMs }: Sender, row: OutboxRow, error: unknown): Promise<'retrying' | 'failed'> {
+  const permanent = isPermanent(error);
+  const giveUp = permanent || row.attempts >= maxAttempts;
+  const why = reason(error);
+  await db
+    .update(mailOutbox)
+    .set(
+      giveUp
+        ? {
+            status: 'failed',
+            claimedUntil: null,
+            lastError: permanent ? `Refused by the mail server: ${why}` : `Gave up after ${row.attempts} attempts: ${why}`,
+          }
+        : { status: 'pending', claimedUntil: null, lastError: why, nextAttemptAt: new Date(now().getTime() + backoffMs(row.attempts)) },
+    )
+    .where(and(eq(mailOutbox.id, row.id), eq(mailOutbox.status, 'sending')));
+  return giveUp ? 'failed' : 'retrying';
 }
 
 export type MailSender = ReturnType<typeof createMailSender>;

@@ -120,6 +120,17 @@ ${message ? `<p class="msg" role="alert">${escape(message.text)}</p>` : ''}
 </div></main></body></html>`;
 }
 
+/** What the fake holds while it runs: its sessions, the events it sent, and where the app listens for them. */
+interface FakeState {
+  sessions: Map<string, FakeSession>;
+  deliveries: FakeDelivery[];
+  signer: Stripe;
+  webhookUrl: string;
+  webhookSecret: string;
+  /** The fake's own address, once it listens (checkout pages link to it). */
+  base: string;
+}
+
 /** `unref`: the fake does not keep the process alive by itself (when a server process starts its own). */
 export async function startPaymentsFake(options: {
   webhookUrl: string;
@@ -127,165 +138,179 @@ export async function startPaymentsFake(options: {
   port?: number;
   unref?: boolean;
 }): Promise<PaymentsFake> {
-  const sessions = new Map<string, FakeSession>();
-  const deliveries: FakeDelivery[] = [];
-  const signer = new Stripe(FAKE_SECRET_KEY);
-  let base = '';
-
-  /** Posts an event to the app, signed; retried a few times with backoff like the hosted service (shortened). */
-  async function deliver(type: string, object: unknown): Promise<void> {
-    const event = { id: id('evt'), object: 'event', api_version: Stripe.API_VERSION, created: now(), livemode: false, type, data: { object } };
-    const payload = JSON.stringify(event);
-    for (let attempt = 0; attempt < 4; attempt++) {
-      const header = signer.webhooks.generateTestHeaderString({ payload, secret: options.webhookSecret });
-      let status: number | null = null;
-      try {
-        const res = await fetch(options.webhookUrl, {
-          method: 'POST',
-          headers: { 'content-type': 'application/json', 'stripe-signature': header },
-          body: payload,
-          signal: AbortSignal.timeout(15_000),
-        });
-        status = res.status;
-        await res.body?.cancel();
-      } catch {
-        status = null;
-      }
-      deliveries.push({ type, eventId: event.id, status });
-      if (status !== null && status >= 200 && status < 300) return;
-      await new Promise((r) => setTimeout(r, 250 * 2 ** attempt));
-    }
-  }
-
-  async function api(req: http.IncomingMessage, res: http.ServerResponse, path: string) {
-    if (req.headers.authorization !== `Bearer ${FAKE_SECRET_KEY}`) return apiError(res, 401, 'Invalid API key provided.', 'authentication_error');
-    if (req.method === 'POST' && path === '/v1/checkout/sessions') {
-      const f = await readBody(req);
-      const unit = Number(f.get('line_items[0][price_data][unit_amount]'));
-      const quantity = Number(f.get('line_items[0][quantity]') ?? '1');
-      const currency = f.get('line_items[0][price_data][currency]') ?? '';
-      if (f.get('mode') !== 'payment') return apiError(res, 400, 'The fake takes payment-mode sessions only.');
-      if (!Number.isSafeInteger(unit) || unit < 1 || !Number.isSafeInteger(quantity) || quantity < 1) return apiError(res, 400, 'Invalid amount.');
-      if (!/^[a-z]{3}$/.test(currency)) return apiError(res, 400, 'Invalid currency.');
-      const successUrl = f.get('success_url');
-      const cancelUrl = f.get('cancel_url');
-      if (!successUrl || !cancelUrl) return apiError(res, 400, 'success_url and cancel_url are required.');
-      const metadata: Record<string, string> = {};
-      for (const [k, v] of f) {
-        const m = /^metadata\[(.+)\]$/.exec(k);
-        if (m) metadata[m[1]] = v;
-      }
-      const sid = id('cs');
-      const session: FakeSession = {
-        id: sid,
-        object: 'checkout.session',
-        mode: 'payment',
-        status: 'open',
-        payment_status: 'unpaid',
-        amount_total: unit * quantity,
-        currency,
-        client_reference_id: f.get('client_reference_id'),
-        customer_email: f.get('customer_email'),
-        metadata,
-        payment_intent: null,
-        success_url: successUrl,
-        cancel_url: cancelUrl,
-        url: `${base}/checkout/${sid}`,
-        created: now(),
-        expires_at: now() + 24 * 3600,
-        livemode: false,
-        description: f.get('line_items[0][price_data][product_data][name]') ?? 'Payment',
-      };
-      sessions.set(sid, session);
-      return json(res, publicSession(session));
-    }
-    const read = /^\/v1\/checkout\/sessions\/([\w-]+)$/.exec(path);
-    if (req.method === 'GET' && read) {
-      const s = sessions.get(read[1]);
-      return s ? json(res, publicSession(s)) : apiError(res, 404, `No such checkout.session: '${read[1]}'`);
-    }
-    const expire = /^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/.exec(path);
-    if (req.method === 'POST' && expire) {
-      const s = sessions.get(expire[1]);
-      if (!s) return apiError(res, 404, `No such checkout.session: '${expire[1]}'`);
-      if (s.status !== 'open') return apiError(res, 400, 'Only an open session can be expired.');
-      s.status = 'expired';
-      s.url = null;
-      // The event goes before the answer (the hosted service sends it on its own time), so a test sees it applied.
-      await deliver('checkout.session.expired', publicSession(s));
-      return json(res, publicSession(s));
-    }
-    if (req.method === 'POST' && path === '/v1/refunds') {
-      const f = await readBody(req);
-      const intent = f.get('payment_intent');
-      const s = [...sessions.values()].find((x) => x.payment_intent !== null && x.payment_intent === intent);
-      if (!s) return apiError(res, 404, `No such payment_intent: '${intent}'`);
-      const amount = f.has('amount') ? Number(f.get('amount')) : s.amount_total;
-      const refund = { id: id('re'), object: 'refund', amount, currency: s.currency, payment_intent: intent, status: 'succeeded' };
-      const charge = {
-        id: id('ch'),
-        object: 'charge',
-        amount: s.amount_total,
-        amount_refunded: amount,
-        currency: s.currency,
-        payment_intent: intent,
-        refunded: amount >= s.amount_total,
-      };
-      await deliver('charge.refunded', charge);
-      return json(res, refund);
-    }
-    apiError(res, 404, `Unrecognized request URL (${req.method}: ${path}).`);
-  }
-
-  async function checkout(req: http.IncomingMessage, res: http.ServerResponse, sid: string) {
-    const s = sessions.get(sid);
-    if (!s) {
-      res.writeHead(404, { 'content-type': 'text/plain; charset=utf-8' });
-      return res.end('No such checkout.');
-    }
-    const page = (status: number, message: Parameters<typeof checkoutPage>[1]) => {
-      res.writeHead(status, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' });
-      res.end(checkoutPage(s, message));
-    };
-    if (req.method !== 'POST') return page(200, null);
-    if (s.status !== 'open') return page(409, { text: 'This checkout is no longer open.', tone: 'bad' });
-    const card = ((await readBody(req)).get('card') ?? '').replace(/[\s-]/g, '');
-    if (card === TEST_CARD_DECLINED) return page(200, { text: 'Your card was declined. Nothing was charged; try another card.', tone: 'bad' });
-    if (card !== TEST_CARD_PAYS) return page(200, { text: 'This is a test checkout: use the test card 4242 4242 4242 4242.', tone: 'bad' });
-    s.status = 'complete';
-    s.payment_status = 'paid';
-    s.payment_intent = id('pi');
-    s.url = null;
-    // The hosted service sends the event and redirects independently; here the event goes first, so a test that
-    // follows the redirect finds it delivered (the app copes with either order).
-    await deliver('checkout.session.completed', publicSession(s));
-    res.writeHead(303, { location: s.success_url.replace('{CHECKOUT_SESSION_ID}', s.id) });
-    res.end();
-  }
-
-  const server = http.createServer((req, res) => {
-    const path = new URL(req.url ?? '/', 'http://fake').pathname;
-    if (path === '/favicon.ico') {
-      res.writeHead(204);
-      return res.end();
-    }
-    const page = /^\/checkout\/([\w-]+)$/.exec(path);
-    const work = page
-      ? checkout(req, res, page[1])
-      : path.startsWith('/v1/')
-        ? api(req, res, path)
-        : Promise.resolve(apiError(res, 404, 'Not found.'));
-    work.catch((error: unknown) => {
-      if (!res.headersSent) apiError(res, 500, error instanceof Error ? error.message : 'Fake failed.', 'api_error');
-      else res.end();
-    });
-  });
+  const state: FakeState = {
+    sessions: new Map(),
+    deliveries: [],
+    signer: new Stripe(FAKE_SECRET_KEY),
+    webhookUrl: options.webhookUrl,
+    webhookSecret: options.webhookSecret,
+    base: '',
+  };
+  const server = http.createServer((req, res) => route(state, req, res));
   await new Promise<void>((resolve) => server.listen(options.port ?? 0, '127.0.0.1', resolve));
   if (options.unref) server.unref();
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  state.base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   return {
-    url: base,
-    deliveries,
+    url: state.base,
+    deliveries: state.deliveries,
     close: () => new Promise<void>((resolve) => server.close(() => resolve())),
   };
+}
+
+/** A request to the fake: a checkout page, the API (`/v1/…`), or nothing it knows. */
+function route(state: FakeState, req: http.IncomingMessage, res: http.ServerResponse) {
+  const path = new URL(req.url ?? '/', 'http://fake').pathname;
+  if (path === '/favicon.ico') {
+    res.writeHead(204);
+    return res.end();
+  }
+  const page = /^\/checkout\/([\w-]+)$/.exec(path);
+  const work = page
+    ? checkout(state, req, res, page[1])
+    : path.startsWith('/v1/')
+      ? api(state, req, res, path)
+      : Promise.resolve(apiError(res, 404, 'Not found.'));
+  work.catch((error: unknown) => {
+    if (!res.headersSent) apiError(res, 500, error instanceof Error ? error.message : 'Fake failed.', 'api_error');
+    else res.end();
+  });
+}
+
+/** Posts an event to the app, signed; retried a few times with backoff like the hosted service (shortened). */
+async function deliver(state: FakeState, type: string, object: unknown): Promise<void> {
+  const event = { id: id('evt'), object: 'event', api_version: Stripe.API_VERSION, created: now(), livemode: false, type, data: { object } };
+  const payload = JSON.stringify(event);
+  for (let attempt = 0; attempt < 4; attempt++) {
+    const header = state.signer.webhooks.generateTestHeaderString({ payload, secret: state.webhookSecret });
+    let status: number | null = null;
+    try {
+      const res = await fetch(state.webhookUrl, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json', 'stripe-signature': header },
+        body: payload,
+        signal: AbortSignal.timeout(15_000),
+      });
+      status = res.status;
+      await res.body?.cancel();
+    } catch {
+      status = null;
+    }
+    state.deliveries.push({ type, eventId: event.id, status });
+    if (status !== null && status >= 200 && status < 300) return;
+    await new Promise((r) => setTimeout(r, 250 * 2 ** attempt));
+  }
+}
+
+/** The API the SDK calls: create, read and expire checkout sessions, refund a payment. */
+async function api(state: FakeState, req: http.IncomingMessage, res: http.ServerResponse, path: string) {
+  if (req.headers.authorization !== `Bearer ${FAKE_SECRET_KEY}`) return apiError(res, 401, 'Invalid API key provided.', 'authentication_error');
+  if (req.method === 'POST' && path === '/v1/checkout/sessions') return createSession(state, res, await readBody(req));
+  const read = /^\/v1\/checkout\/sessions\/([\w-]+)$/.exec(path);
+  if (req.method === 'GET' && read) {
+    const s = state.sessions.get(read[1]);
+    return s ? json(res, publicSession(s)) : apiError(res, 404, `No such checkout.session: '${read[1]}'`);
+  }
+  const expire = /^\/v1\/checkout\/sessions\/([\w-]+)\/expire$/.exec(path);
+  if (req.method === 'POST' && expire) return expireSession(state, res, expire[1]);
+  if (req.method === 'POST' && path === '/v1/refunds') return refund(state, res, await readBody(req));
+  apiError(res, 404, `Unrecognized request URL (${req.method}: ${path}).`);
+}
+
+/** A payment-mode checkout session for one line, open for a day. */
+function createSession(state: FakeState, res: http.ServerResponse, f: URLSearchParams) {
+  const unit = Number(f.get('line_items[0][price_data][unit_amount]'));
+  const quantity = Number(f.get('line_items[0][quantity]') ?? '1');
+  const currency = f.get('line_items[0][price_data][currency]') ?? '';
+  if (f.get('mode') !== 'payment') return apiError(res, 400, 'The fake takes payment-mode sessions only.');
+  if (!Number.isSafeInteger(unit) || unit < 1 || !Number.isSafeInteger(quantity) || quantity < 1) return apiError(res, 400, 'Invalid amount.');
+  if (!/^[a-z]{3}$/.test(currency)) return apiError(res, 400, 'Invalid currency.');
+  const successUrl = f.get('success_url');
+  const cancelUrl = f.get('cancel_url');
+  if (!successUrl || !cancelUrl) return apiError(res, 400, 'success_url and cancel_url are required.');
+  const metadata: Record<string, string> = {};
+  for (const [k, v] of f) {
+    const m = /^metadata\[(.+)\]$/.exec(k);
+    if (m) metadata[m[1]] = v;
+  }
+  const sid = id('cs');
+  const session: FakeSession = {
+    id: sid,
+    object: 'checkout.session',
+    mode: 'payment',
+    status: 'open',
+    payment_status: 'unpaid',
+    amount_total: unit * quantity,
+    currency,
+    client_reference_id: f.get('client_reference_id'),
+    customer_email: f.get('customer_email'),
+    metadata,
+    payment_intent: null,
+    success_url: successUrl,
+    cancel_url: cancelUrl,
+    url: `${state.base}/checkout/${sid}`,
+    created: now(),
+    expires_at: now() + 24 * 3600,
+    livemode: false,
+    description: f.get('line_items[0][price_data][product_data][name]') ?? 'Payment',
+  };
+  state.sessions.set(sid, session);
+  return json(res, publicSession(session));
+}
+
+async function expireSession(state: FakeState, res: http.ServerResponse, sid: string) {
+  const s = state.sessions.get(sid);
+  if (!s) return apiError(res, 404, `No such checkout.session: '${sid}'`);
+  if (s.status !== 'open') return apiError(res, 400, 'Only an open session can be expired.');
+  s.status = 'expired';
+  s.url = null;
+  // The event goes before the answer (the hosted service sends it on its own time), so a test sees it applied.
+  await deliver(state, 'checkout.session.expired', publicSession(s));
+  return json(res, publicSession(s));
+}
+
+/** A refund of a paid session's payment (all of it, or `amount`), and the charge.refunded event. */
+async function refund(state: FakeState, res: http.ServerResponse, f: URLSearchParams) {
+  const intent = f.get('payment_intent');
+  const s = [...state.sessions.values()].find((x) => x.payment_intent !== null && x.payment_intent === intent);
+  if (!s) return apiError(res, 404, `No such payment_intent: '${intent}'`);
+  const amount = f.has('amount') ? Number(f.get('amount')) : s.amount_total;
+  const refunded = { id: id('re'), object: 'refund', amount, currency: s.currency, payment_intent: intent, status: 'succeeded' };
+  const charge = {
+    id: id('ch'),
+    object: 'charge',
+    amount: s.amount_total,
+    amount_refunded: amount,
+    currency: s.currency,
+    payment_intent: intent,
+    refunded: amount >= s.amount_total,
+  };
+  await deliver(state, 'charge.refunded', charge);
+  return json(res, refunded);
+}
+
+/** The hosted checkout page: the form, and the test cards' outcomes (paid → event, then back to the app). */
+async function checkout(state: FakeState, req: http.IncomingMessage, res: http.ServerResponse, sid: string) {
+  const s = state.sessions.get(sid);
+  if (!s) {
+    res.writeHead(404, { 'content-type': 'text/plain; charset=utf-8' });
+    return res.end('No such checkout.');
+  }
+  const page = (status: number, message: Parameters<typeof checkoutPage>[1]) => {
+    res.writeHead(status, { 'content-type': 'text/html; charset=utf-8', 'cache-control': 'no-store' });
+    res.end(checkoutPage(s, message));
+  };
+  if (req.method !== 'POST') return page(200, null);
+  if (s.status !== 'open') return page(409, { text: 'This checkout is no longer open.', tone: 'bad' });
+  const card = ((await readBody(req)).get('card') ?? '').replace(/[\s-]/g, '');
+  if (card === TEST_CARD_DECLINED) return page(200, { text: 'Your card was declined. Nothing was charged; try another card.', tone: 'bad' });
+  if (card !== TEST_CARD_PAYS) return page(200, { text: 'This is a test checkout: use the test card 4242 4242 4242 4242.', tone: 'bad' });
+  s.status = 'complete';
+  s.payment_status = 'paid';
+  s.payment_intent = id('pi');
+  s.url = null;
+  // The hosted service sends the event and redirects independently; here the event goes first, so a test that
+  // follows the redirect finds it delivered (the app copes with either order).
+  await deliver(state, 'checkout.session.completed', publicSession(s));
+  res.writeHead(303, { location: s.success_url.replace('{CHECKOUT_SESSION_ID}', s.id) });
+  res.end();
 }

@@ -1,3 +1,6 @@
+import type { JobStatus } from '@/shared/schemas/job';
+import type { MissingPiece } from '@/shared/schemas/stock';
+
 export type PlanStatus = 'draft' | 'released' | 'cutting' | 'done' | 'cancelled';
 
 /** A plan in its job's list. */
@@ -62,4 +65,75 @@ export interface YieldLedger {
     spoiledRatio: number | null;
     costCents: number;
   };
+}
+
+/** A saved plan as `GET /api/plans/:id` answers it (and as the bench's page hands it over): read by `lib/nesting` on arrival. */
+export interface PlanDetail {
+  id: string;
+  jobId: string;
+  name: string;
+  status: PlanStatus;
+  yieldRatio: number | null;
+  costCents: number | null;
+  createdAt: string;
+  updatedAt: string;
+  /** The `NestRequest` it was nested from and the `Plan` document, parsed by the screen with their schemas. */
+  request: unknown;
+  document: unknown;
+}
+
+/** What the Layout bench needs of a saved plan (the page reads it on the server; the bench asks again after a save). */
+export type PlanForBench = Pick<PlanDetail, 'id' | 'status' | 'updatedAt' | 'request' | 'document'>;
+
+/** A plan written: its id and the moment it was stored (a later save sends it back to refuse a stale edit). */
+export interface PlanSaved {
+  id: string;
+  updatedAt: string;
+}
+
+/** An edited draft stored, with its figures worked out again. */
+export interface PlanUpdated extends PlanSaved {
+  yieldRatio: number | null;
+  costCents: number | null;
+}
+
+/** A plan released: the stock it reserved, and what must be bought first. */
+export interface ReleaseResult {
+  planId: string;
+  reserved: { stockId: string; count: number }[];
+  toBuy: { stockId: string; count: number }[];
+  jobStatus: JobStatus | null;
+}
+
+/** A release refused (409): the pieces that are gone, and the Nest screen to plan again against what is left. */
+export interface StockShortage {
+  error: string;
+  missing: MissingPiece[];
+  renest: string;
+}
+
+/** A plan cancelled: the reservations it gave back. */
+export interface PlanCancelled {
+  planId: string;
+  released: { items: { id: string; count: number }[]; offcuts: string[] };
+  jobStatus: JobStatus | null;
+}
+
+/** A plan finished at the saw: offcuts racked, yield and waste, re-cuts for damaged parts. */
+export interface FinishResult {
+  planId: string;
+  jobId: string;
+  yieldRatio: number;
+  /** All waste, spoiled parts included. */
+  wasteRatio: number;
+  /** Of which parts damaged at the saw. */
+  spoiledRatio: number;
+  costCents: number;
+  offcuts: { id: string; lengthMm: number; widthMm: number; location: string }[];
+  damaged: number;
+  /** Re-cuts put on the job's list for the damaged parts. */
+  recutsAdded: number;
+  /** Re-cuts this (re-cut) plan cut. */
+  recutsClosed: number;
+  jobStatus: JobStatus | null;
 }

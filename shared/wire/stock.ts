@@ -75,3 +75,37 @@ export interface DetailChange {
   item: string | null;
   changes: StockDetailChanges;
 }
+
+/** A size as stored (no figures worked out): what a write of one answers. */
+export type StockItemRecord = Omit<StockItemRow, 'free' | 'low' | 'valueCents'>;
+
+/** An offcut as stored: what a write of one answers. */
+export type OffcutRecord = Omit<OffcutRow, 'planName'>;
+
+/** A material and thickness the stock room offers (sheets, boards, available offcuts), for pickers; no prices. */
+export interface StockOffer {
+  material: string;
+  kind: 'sheet' | 'board' | 'offcut';
+  thicknessMm: number;
+  /** What the shop calls the thickness ("3/4\"", "4/4"); empty for offcuts. */
+  nominal: string;
+}
+
+/** A line of a stock CSV that cannot be read, with every reason. */
+export interface StockCsvError {
+  line: number;
+  messages: string[];
+}
+
+/** A stock CSV checked (and written, when asked): how many rows are valid, how many went in, what is wrong. */
+export interface StockImportResult {
+  valid: number;
+  imported: number;
+  errors: StockCsvError[];
+}
+
+/** The sheets and boards on the rack; their value only for those who may see prices. */
+export interface StockList {
+  items: StockItemRow[];
+  value?: { stockCents: number; offcutCents: number; totalCents: number };
+}

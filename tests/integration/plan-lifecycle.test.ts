@@ -284,7 +284,7 @@ describe('a plan from release to done', () => {
 });
 
 describe('the plan routes', () => {
-  const call = async (route: typeof releaseRoute, id: string, user: typeof fx.owner, body?: unknown) =>
+  const call = async (route: typeof releaseRoute | typeof doneRoute, id: string, user: typeof fx.owner, body?: unknown) =>
     route(await httpRequest(`/api/plans/${id}/x`, { method: 'POST', user, body }), { params: Promise.resolve({ id }) });
 
   test('a refused release is a 409 naming each missing piece, with the way back to the Nest screen', async () => {

@@ -8,7 +8,8 @@ import { getDb } from '@/db/client';
 import { getPlan } from '@/db/queries/plan-document';
 import { withoutPrices } from '@/lib/stock/without-prices';
 import { getShopSettings } from '@/db/queries/shops';
-import { LayoutBench, type PlanResponse } from '@/components/layout-bench/layout-bench';
+import { LayoutBench } from '@/components/layout-bench/layout-bench';
+import type { PlanForBench } from '@/shared/wire/plans';
 import { PlanSummary } from '@/components/nesting/plan-summary';
 import { ReleasePlanButton } from '@/components/stock/release-plan-button';
 import { StatusBadge } from '@/components/ui/status-badge';
@@ -32,7 +33,7 @@ export default async function PlanPage({ params: raw }: { params: Promise<{ id: 
   const showPrices = can(user.role, 'prices:read');
   // What GET /api/plans/:id would answer, prices out for those who may not see them: the bench needs no second read.
   const read = { id: plan.id, status: plan.status, updatedAt: plan.updatedAt.toISOString(), request: plan.request, document: plan.document };
-  const benchData: PlanResponse = showPrices ? read : withoutPrices(read);
+  const benchData: PlanForBench = showPrices ? read : withoutPrices(read);
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-center gap-3">
