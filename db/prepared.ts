@@ -57,33 +57,43 @@ function isPool(client: unknown): client is Pool {
   );
 }
 
-/** The statements each embedded database has prepared (a test process may open several). */
-const preparedOn = new WeakMap<PGlite, Set<string>>();
+/**
+ * The statements each embedded database has prepared (a test process may open several). On globalThis: Next.js
+ * bundles this module once per route, page and proxy, and all of them share the one database of the process.
+ */
+const holder = globalThis as typeof globalThis & { __kerfwisePrepared?: WeakMap<PGlite, Set<string>> };
 
 let protocol: typeof import('@electric-sql/pglite') | undefined;
 
 async function runOnPglite(client: PGlite, statement: PreparedRead<never>, params: unknown[]): Promise<Record<string, unknown>[]> {
   protocol ??= await import('@electric-sql/pglite');
   const { serialize } = protocol.protocol;
-  // The same locks, in the same order, as PGlite's own query: no statement of ours lands inside an open transaction.
-  return client._runExclusiveTransaction(() =>
-    client._runExclusiveQuery(async () => {
-      let prepared = preparedOn.get(client);
-      if (!prepared) preparedOn.set(client, (prepared = new Set()));
-      const known = prepared.has(statement.name);
-      const parts = [
-        ...(known ? [] : [serialize.parse({ name: statement.name, text: statement.text, types: [] })]),
+  const preparedOn = (holder.__kerfwisePrepared ??= new WeakMap());
+  let prepared = preparedOn.get(client);
+  if (!prepared) preparedOn.set(client, (prepared = new Set()));
+  const run = async (parse: boolean) => {
+    const { messages } = await client.execProtocol(
+      concat([
+        ...(parse ? [serialize.parse({ name: statement.name, text: statement.text, types: [] })] : []),
         serialize.bind({ statement: statement.name, values: params.map(toText) }),
         serialize.describe({ type: 'P' }),
         serialize.execute({}),
         serialize.sync(),
-      ];
+      ]),
+      {},
+    );
+    prepared.add(statement.name);
+    return protocol!.parse.parseResults(messages, client.parsers)[0]?.rows ?? [];
+  };
+  // The same locks, in the same order, as PGlite's own query: no statement of ours lands inside an open transaction.
+  return client._runExclusiveTransaction(() =>
+    client._runExclusiveQuery(async () => {
       try {
-        const { messages } = await client.execProtocol(concat(parts), {});
-        prepared.add(statement.name);
-        return protocol!.parse.parseResults(messages, client.parsers)[0]?.rows ?? [];
+        return await run(!prepared.has(statement.name));
       } catch (error) {
-        // Whatever failed (the parse, or a run that invalidated the statement), start again from the text next time.
+        // Prepared already (by a copy of this module that did not tell us): run it.
+        if ((error as { code?: string }).code === '42P05') return run(false);
+        // Whatever else failed (the parse, or a run that invalidated the statement), start from the text next time.
         prepared.delete(statement.name);
         await client.execProtocol(concat([serialize.close({ type: 'S', name: statement.name }), serialize.sync()]), { throwOnError: false });
         throw error;

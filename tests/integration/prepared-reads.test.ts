@@ -23,7 +23,7 @@ let fx: TwoShops;
 setUpTwoShopDatabase((app) => ({ handle, fx } = app));
 
 const noParams = { params: Promise.resolve({}) };
-const view = (raw: Record<string, string> = {}) => jobListQuerySchema.parse(raw);
+const view = (raw: Partial<Record<string, string>> = {}) => jobListQuerySchema.parse(raw);
 
 /** A request carrying exactly this cookie (a browser sends the same one again and again). */
 function withCookie(cookie: string, init: { method?: string; body?: unknown } = {}) {
@@ -107,6 +107,15 @@ describe('prepared reads', () => {
     expect(await ratio.rows(handle.db, { by: 3 })).toEqual([{ q: 4 }]);
     const [{ n }] = await handle.db.select({ n: sql<number>`count(*)::int` }).from(users);
     expect(n).toBeGreaterThan(0);
+  });
+
+  test('a statement another copy of the module prepared (Next.js bundles it per route and page) still runs', async () => {
+    const q = view({ sort: 'name.desc' });
+    const first = await listJobsPage(handle.db, fx.mine.id, q);
+    // What a second bundle sees: no record of what this database has prepared.
+    delete (globalThis as { __kerfwisePrepared?: unknown }).__kerfwisePrepared;
+    expect(await listJobsPage(handle.db, fx.mine.id, q)).toEqual(first);
+    expect(await listJobsPage(handle.db, fx.mine.id, q)).toEqual(first);
   });
 
   test('on the embedded database a prepared read waits for an open transaction: it sees the commit, never a rollback', async () => {
