@@ -1,6 +1,7 @@
 import { withAuth, type NextRequestWithAuth } from 'next-auth/middleware';
 import { NextResponse, type NextFetchEvent, type NextRequest } from 'next/server';
 import { contentSecurityPolicy, isHttps, newNonce, securityHeaders } from '@/lib/security-headers';
+import { decodeSessionToken } from '@/server/auth/token';
 
 /**
  * Every page gets a Content-Security-Policy with a nonce of its own (Next.js's documented proxy pattern: the nonce
@@ -20,7 +21,7 @@ function withHeaders(req: NextRequest): NextResponse {
   return res;
 }
 
-const signedIn = withAuth((req: NextRequestWithAuth) => withHeaders(req), { pages: { signIn: '/sign-in' } });
+const signedIn = withAuth((req: NextRequestWithAuth) => withHeaders(req), { pages: { signIn: '/sign-in' }, jwt: { decode: decodeSessionToken } });
 
 // The sign-in page, the pages single-use links open (invite, password reset) and a customer's quote page (/q/<token>)
 // are for the signed-out.

@@ -10,6 +10,7 @@ import { recordAudit } from './audit';
 import { resolveCustomer } from './customers';
 import { jobFacts } from './job-status';
 import { DomainError, forbidden, notFound } from '@/lib/errors';
+import { isoText, PreparedRead } from '../prepared';
 
 /** Per job: its pieces (quantities summed) and its materials, once each. */
 const partStats = (db: Db, shopId: string) =>
@@ -74,86 +75,98 @@ const SORT_KEYS: Record<JobSortColumn, SQL> = {
   updated: sql`${jobs.updatedAt}`,
 };
 
+/** What a jobs-list statement binds; each view's shape (filters present, sort) is one prepared statement. */
+type JobListValues = { shopId: string; status: string; customer: string; like: string; size: number; offset: number };
+
+/**
+ * The statement of one shape of view: which filters it has and how it sorts (at most 3 × 2 × 2 × 12 shapes, made
+ * once each). One statement: the page's jobs with their customer as JSON (sorted on the server, ties by id, so pages
+ * never overlap; the default order reads jobs_shop_updated_idx and stops after the page), the counts the list's
+ * controls need, and the customers' names. A job's pieces and materials are kept on the job by a trigger on parts
+ * (migration 0014).
+ */
+function jobListStatement(q: Pick<JobListQuery, 'status' | 'customer' | 'q' | 'sort'>): PreparedRead<JobListValues> {
+  const statusKind = q.status === '' ? 'open' : q.status === 'all' ? 'all' : 'one';
+  const key = `${statusKind}|${q.customer ? 'c' : ''}|${q.q ? 'q' : ''}|${q.sort}`;
+  let statement = jobListStatements.get(key);
+  if (statement) return statement;
+  statement = new PreparedRead<JobListValues>((v) => {
+    const filters: SQL[] = [sql`${jobs.shopId} = ${v('shopId')}`];
+    if (statusKind === 'open') filters.push(sql`${jobs.status} <> 'archived'`);
+    else if (statusKind === 'one') filters.push(sql`${jobs.status} = ${v('status')}`);
+    if (q.customer) filters.push(sql`lower(${customers.name}) = lower(${v('customer')})`);
+    if (q.q) {
+      const like = v('like');
+      filters.push(
+        sql`(${jobs.name} ilike ${like} or ${customers.name} ilike ${like} or exists (select 1 from unnest(${jobs.partMaterials}) m where m ilike ${like}))`,
+      );
+    }
+    const where = and(...filters)!;
+    const needsCustomer = Boolean(q.customer || q.q) || q.sort.startsWith('customer.');
+    const [column, dir] = q.sort.split('.') as [JobSortColumn, 'asc' | 'desc'];
+    const sortKey = SORT_KEYS[column];
+    // Empty values (no customer, no due date) go last either way round; ties by id the same way round.
+    const order =
+      column === 'updated' // never empty: plain, so the index serves it
+        ? dir === 'asc'
+          ? [asc(jobs.updatedAt), asc(jobs.id)]
+          : [desc(jobs.updatedAt), desc(jobs.id)]
+        : dir === 'asc'
+          ? [sql`${sortKey} asc nulls last`, asc(jobs.id)]
+          : [sql`${sortKey} desc nulls last`, desc(jobs.id)];
+    const orderBy = sql.join(order, sql`, `);
+    const customerJoin = needsCustomer ? sql`left join ${customers} on ${customers.id} = ${jobs.customerId}` : sql``;
+    // The page's rows sorted in the statement (a top-N sort keeps only the page) and numbered, so their JSON keeps
+    // the order.
+    return sql`
+      select (select coalesce(json_agg(page order by page.ord), '[]'::json) from (
+                select row_number() over (order by ${orderBy}) as ord, ${jobs.id} as "id", ${jobs.name} as "name",
+                       coalesce(${customers.name}, '') as "customer", ${jobs.customerId} as "customerId", ${jobs.status} as "status",
+                       ${jobs.dueDate} as "dueDate", ${jobs.notes} as "notes", ${isoText(jobs.acceptedAt)} as "acceptedAt",
+                       ${isoText(jobs.createdAt)} as "createdAt", ${isoText(jobs.updatedAt)} as "updatedAt",
+                       ${jobs.partPieces} as "partCount", ${jobs.partMaterials} as "materials"
+                  from ${jobs} left join ${customers} on ${customers.id} = ${jobs.customerId}
+                 where ${where}
+                 order by ${orderBy}
+                 limit ${v('size')} offset ${v('offset')}) page) as jobs,
+             counts.total, counts.shop_jobs, counts.archived,
+             (select coalesce(json_agg(c.name), '[]'::json) from ${customers} c
+               where c.shop_id = ${v('shopId')} and exists (select 1 from ${jobs} j where j.customer_id = c.id)) as customers
+        from (select count(*) filter (where ${where})::int as total, count(*)::int as shop_jobs,
+                     count(*) filter (where ${jobs.status} = 'archived')::int as archived
+                from ${jobs} ${customerJoin}
+               where ${jobs.shopId} = ${v('shopId')}) counts`;
+  });
+  jobListStatements.set(key, statement);
+  return statement;
+}
+
+const jobListStatements = new Map<string, PreparedRead<JobListValues>>();
+
+/** Customers' names in the order people read them (one collator: making one per comparison cost more than the sort). */
+const byName = new Intl.Collator('en', { sensitivity: 'base' });
+
+/** A json column as the driver hands it: text from the embedded database's protocol, parsed already by others. */
+const fromJson = <T>(value: unknown): T => (typeof value === 'string' ? JSON.parse(value) : value) as T;
+
 /**
  * One page of a shop's jobs as the jobs list shows them: filtered by status (archived left out unless asked for) and
  * customer, searched in the job's name, its customer's name and its parts' materials (any case), sorted on the
- * server (ties by id, so pages never overlap), with the counts the list's controls need, in one statement.
+ * server (ties by id, so pages never overlap), with the counts the list's controls need, in one prepared statement.
  */
 export async function listJobsPage({ db, shopId }: ShopScope, q: JobListQuery): Promise<JobListPage> {
-  const filters: SQL[] = [eq(jobs.shopId, shopId)];
-  if (q.status === '') filters.push(sql`${jobs.status} <> 'archived'`);
-  else if (q.status !== 'all') filters.push(eq(jobs.status, q.status));
-  if (q.customer) filters.push(sql`lower(${customers.name}) = lower(${q.customer})`);
-  if (q.q) {
-    const like = containing(q.q);
-    filters.push(
-      sql`(${jobs.name} ilike ${like} or ${customers.name} ilike ${like} or exists (select 1 from unnest(${jobs.partMaterials}) m where m ilike ${like}))`,
-    );
-  }
-  const where = and(...filters)!;
-  const needsCustomer = Boolean(q.customer || q.q) || q.sort.startsWith('customer.');
-  const [column, dir] = q.sort.split('.') as [JobSortColumn, 'asc' | 'desc'];
-  const key = SORT_KEYS[column];
-  // Empty values (no customer, no due date) go last either way round; ties by id the same way round.
-  const order =
-    column === 'updated' // never empty: plain, so the index serves it
-      ? dir === 'asc'
-        ? [asc(jobs.updatedAt), asc(jobs.id)]
-        : [desc(jobs.updatedAt), desc(jobs.id)]
-      : dir === 'asc'
-        ? [sql`${key} asc nulls last`, asc(jobs.id)]
-        : [sql`${key} desc nulls last`, desc(jobs.id)];
-
-  const customerJoin = needsCustomer ? sql`left join ${customers} on ${customers.id} = ${jobs.customerId}` : sql``;
-  const orderBy = sql.join(order, sql`, `);
-
-  // One statement (each round trip to the embedded database costs about as much as the work itself): the page's
-  // ids in order (narrow rows, so sorting a big shop stays cheap; the default order reads jobs_shop_updated_idx and
-  // stops after the page), those jobs with their customer, and the counts. A job's pieces and materials are kept on
-  // the job by a trigger on parts (migration 0014): adding up 25 jobs' parts here was a quarter of the statement.
-  const result = (await db.execute(sql`
-    with page_ids as (
-      select ${jobs.id} as id, row_number() over (order by ${orderBy}) as ord
-        from ${jobs} ${customerJoin}
-       where ${where}
-       order by ${orderBy}
-       limit ${q.size} offset ${(q.page - 1) * q.size}
-    ),
-    page_rows as (
-      select page_ids.ord, ${jobs.id} as "id", ${jobs.name} as "name", coalesce(${customers.name}, '') as "customer",
-             ${jobs.customerId} as "customerId", ${jobs.status} as "status", ${jobs.dueDate} as "dueDate", ${jobs.notes} as "notes",
-             ${jobs.acceptedAt} as "acceptedAt", ${jobs.createdAt} as "createdAt", ${jobs.updatedAt} as "updatedAt",
-             ${jobs.partPieces} as "partCount", ${jobs.partMaterials} as "materials"
-        from page_ids
-        join ${jobs} on ${jobs.id} = page_ids.id
-        left join ${customers} on ${customers.id} = ${jobs.customerId}
-    ),
-    counts as (
-      select count(*) filter (where ${where})::int as total, count(*)::int as shop_jobs,
-             count(*) filter (where ${jobs.status} = 'archived')::int as archived
-        from ${jobs} ${customerJoin}
-       where ${jobs.shopId} = ${shopId}
-    )
-    select (select coalesce(json_agg(page_rows order by ord), '[]'::json) from page_rows) as jobs,
-           counts.total, counts.shop_jobs, counts.archived,
-           (select coalesce(array_agg(c.name), '{}') from ${customers} c where c.shop_id = ${shopId} and exists (select 1 from ${jobs} j where j.customer_id = c.id)) as customers
-      from counts`)) as unknown as {
-    rows: { jobs: (Record<string, unknown> & { ord: number })[] | string; total: number; shop_jobs: number; archived: number; customers: string[] }[];
-  };
-  const [row] = result.rows;
-  // JSON from the database: timestamps as text, to the app's ISO form.
-  const rows = (typeof row.jobs === 'string' ? JSON.parse(row.jobs) : row.jobs) as Record<string, unknown>[];
-  const iso = (v: unknown) => (v == null ? null : new Date(String(v)).toISOString());
+  const [row] = await jobListStatement(q).rows(db, {
+    shopId,
+    status: q.status,
+    customer: q.customer,
+    like: containing(q.q),
+    size: q.size,
+    offset: (q.page - 1) * q.size,
+  });
+  const rows = fromJson<(JobSummary & { ord?: number })[]>(row.jobs);
   const total = Number(row.total);
   return {
-    jobs: rows.map(({ ord: _ord, ...j }) => ({
-      ...(j as unknown as JobSummary),
-      partCount: Number(j.partCount),
-      materials: [...new Set(j.materials as string[])].sort(),
-      acceptedAt: iso(j.acceptedAt),
-      createdAt: iso(j.createdAt)!,
-      updatedAt: iso(j.updatedAt)!,
-    })),
+    jobs: rows.map(({ ord: _ord, ...j }) => ({ ...j, partCount: Number(j.partCount), materials: [...new Set(j.materials)].sort() })),
     total,
     page: q.page,
     pageSize: q.size,
@@ -161,7 +174,7 @@ export async function listJobsPage({ db, shopId }: ShopScope, q: JobListQuery): 
     sort: q.sort,
     shopJobs: Number(row.shop_jobs),
     archived: Number(row.archived),
-    customers: [...row.customers].sort((a, b) => a.localeCompare(b, 'en', { sensitivity: 'base' })),
+    customers: fromJson<string[]>(row.customers).sort(byName.compare),
   };
 }
 

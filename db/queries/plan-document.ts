@@ -1,5 +1,6 @@
 import type { ShopScope } from '../scope';
 import { and, eq, sql } from 'drizzle-orm';
+import { isoText, PreparedRead } from '../prepared';
 import { plans } from '../schema';
 import { notFound } from '@/lib/errors';
 import { readStoredPlan } from '@/lib/nesting/read-plan';
@@ -27,33 +28,41 @@ export async function getPlan({ db, shopId }: ShopScope, planId: string) {
  * document of an earlier version (the caller reads it through `getPlan`, which migrates it).
  */
 export async function getPlanAsJson({ db, shopId }: ShopScope, planId: string): Promise<{ status: string; json: string } | 'older'> {
-  const [row] = await db
-    .select({
-      id: plans.id,
-      jobId: plans.jobId,
-      name: plans.name,
-      status: plans.status,
-      yieldRatio: plans.yieldRatio,
-      costCents: plans.costCents,
-      createdAt: plans.createdAt,
-      updatedAt: plans.updatedAt,
-      version: plans.version,
-      request: sql<string>`${plans.request}::text`,
-      document: sql<string>`${plans.document}::text`,
-    })
-    .from(plans)
-    .where(and(eq(plans.shopId, shopId), eq(plans.id, planId)));
+  const [row] = (await planAsJson.rows(db, { shopId, planId })) as {
+    id: string;
+    jobId: string;
+    name: string;
+    status: string;
+    yieldRatio: number | null;
+    costCents: number | null;
+    createdAt: string;
+    updatedAt: string;
+    version: number;
+    request: string;
+    document: string;
+  }[];
   if (!row) throw notFound('That plan');
-  if (row.version !== PLAN_VERSION) return 'older';
+  if (Number(row.version) !== PLAN_VERSION) return 'older';
   const head = JSON.stringify({
     id: row.id,
     jobId: row.jobId,
     name: row.name,
     status: row.status,
-    yieldRatio: row.yieldRatio,
-    costCents: row.costCents,
-    createdAt: row.createdAt.toISOString(),
-    updatedAt: row.updatedAt.toISOString(),
+    yieldRatio: row.yieldRatio == null ? null : Number(row.yieldRatio),
+    costCents: row.costCents == null ? null : Number(row.costCents),
+    createdAt: row.createdAt,
+    updatedAt: row.updatedAt,
   });
   return { status: row.status, json: `${head.slice(0, -1)},"request":${row.request},"document":${row.document}}` };
 }
+
+/** Prepared once (db/prepared.ts): every plan view runs it. */
+const planAsJson = new PreparedRead<{ shopId: string; planId: string }>(
+  (v) => sql`
+    select ${plans.id} as "id", ${plans.jobId} as "jobId", ${plans.name} as "name", ${plans.status}::text as "status",
+           ${plans.yieldRatio} as "yieldRatio", ${plans.costCents} as "costCents", ${isoText(plans.createdAt)} as "createdAt",
+           ${isoText(plans.updatedAt)} as "updatedAt", ${plans.version} as "version", ${plans.request}::text as "request",
+           ${plans.document}::text as "document"
+      from ${plans}
+     where ${plans.shopId} = ${v('shopId')} and ${plans.id} = ${v('planId')}`,
+);

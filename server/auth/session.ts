@@ -11,13 +11,14 @@ import type { DbHandle } from '@/db/open';
 import { serverEnv } from '@/lib/env';
 import { claimsFromToken } from '@/lib/auth/claims';
 import { secureCookies } from './options';
+import { decodeSessionToken } from './token';
 import { can, type Permission } from '@/lib/auth/permissions';
 
 export type { SessionUser };
 
 /** The signed-in user of an API request, checked against the database, or null. */
 export async function userFromRequest(req: NextRequest, handle: Pick<DbHandle, 'db' | 'changes'>): Promise<SessionUser | null> {
-  const token = await getToken({ req, secret: serverEnv().NEXTAUTH_SECRET, secureCookie: secureCookies() });
+  const token = await getToken({ req, secret: serverEnv().NEXTAUTH_SECRET, secureCookie: secureCookies(), decode: decodeSessionToken });
   const claims = claimsFromToken(token);
   return claims ? loadSessionUser(handle, claims) : null;
 }
@@ -34,6 +35,7 @@ export const currentUser = cache(async (): Promise<SessionUser | null> => {
     req: { cookies: cookieStore, headers: headerList } as unknown as NextRequest,
     secret: serverEnv().NEXTAUTH_SECRET,
     secureCookie: secureCookies(),
+    decode: decodeSessionToken,
   });
   const claims = claimsFromToken(token);
   return claims ? loadSessionUser(await getDbHandle(), claims) : null;
