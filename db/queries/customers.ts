@@ -1,8 +1,8 @@
+import type { CustomerJob } from '@/shared/wire/jobs';
 import type { Scope, ShopScope } from '../scope';
 import { and, asc, desc, eq, ilike, or, sql } from 'drizzle-orm';
 import { customers, jobs } from '../schema';
 import type { Customer, CustomerInput, CustomerPatch } from '@/shared/schemas/customer';
-import type { JobStatus } from '@/shared/schemas/job';
 import { recordAudit } from './audit';
 import { invalid, conflict, notFound } from '@/lib/errors';
 
@@ -40,13 +40,7 @@ export async function listCustomers({ db, shopId }: ShopScope, search = ''): Pro
   return rows.map((r) => toCustomer(r.row, Number(r.jobCount)));
 }
 
-export interface CustomerJob {
-  id: string;
-  name: string;
-  status: JobStatus;
-  dueDate: string | null;
-  updatedAt: string;
-}
+export type { CustomerJob } from '@/shared/wire/jobs';
 
 export async function getCustomer({ db, shopId }: ShopScope, id: string): Promise<Customer & { jobs: CustomerJob[] }> {
   const [found] = await db

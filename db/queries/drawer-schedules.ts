@@ -1,3 +1,4 @@
+import type { SavedDrawerSchedule } from '@/shared/wire/jobs';
 import type { Scope, ShopScope } from '../scope';
 import { notFound } from '@/lib/errors';
 import { and, asc, count, eq, isNotNull, min, sql } from 'drizzle-orm';
@@ -7,15 +8,7 @@ import type { DrawerSchedule } from '@/shared/schemas/drawer-schedule';
 import { recordAudit } from './audit';
 import { nextSort, requireJob, touchJob } from './parts';
 
-export interface SavedDrawerSchedule {
-  id: string;
-  jobId: string;
-  label: string;
-  input: DrawerSchedule;
-  /** Cut-list rows it holds now. */
-  partRows: number;
-  updatedAt: string;
-}
+export type { SavedDrawerSchedule } from '@/shared/wire/jobs';
 
 export const DRAWER_ROLE_NAMES: Record<DrawerPart['role'], string> = {
   front: 'front',

@@ -1,3 +1,5 @@
+import type { ReleaseResult } from '@/shared/wire/plans';
+import type { FinishResult } from '@/shared/wire/plans';
 import type { Scope, ShopScope } from '../scope';
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
@@ -11,7 +13,6 @@ import { recordAudit } from './audit';
 import { syncJobStatus } from './job-status';
 import { getShopSettings } from './shops';
 import { closeRecuts, holdRecutsForPlan, recordDamagedPieces, reopenRecuts } from './recuts';
-import type { JobStatus } from '@/shared/schemas/job';
 import { DomainError, invalid, notFoundBecause, conflict } from '@/lib/errors';
 
 /**
@@ -134,12 +135,7 @@ async function writePieceRows(tx: Tx, shopId: string, planId: string, plan: Plan
   if (values.length) await tx.insert(placements).values(values);
 }
 
-export interface ReleaseResult {
-  planId: string;
-  reserved: { stockId: string; count: number }[];
-  toBuy: { stockId: string; count: number }[];
-  jobStatus: JobStatus | null;
-}
+export type { ReleaseResult } from '@/shared/wire/plans';
 
 /** Reserves exactly the pieces the plan uses, all or nothing. Throws StockShortage naming every piece that is gone. */
 export async function releasePlan({ db, shopId, userId }: Scope, planId: string): Promise<ReleaseResult> {
@@ -281,23 +277,7 @@ export async function cancelPlan({ db, shopId, userId }: Scope, planId: string) 
 /** What the cutter sends at done (parsed again here, so every caller gets the same defaults and checks). */
 export type FinishPlanBody = FinishPlanInput;
 
-export interface FinishResult {
-  planId: string;
-  jobId: string;
-  yieldRatio: number;
-  /** All waste, spoiled parts included. */
-  wasteRatio: number;
-  /** Of which parts damaged at the saw. */
-  spoiledRatio: number;
-  costCents: number;
-  offcuts: { id: string; lengthMm: number; widthMm: number; location: string }[];
-  damaged: number;
-  /** Re-cuts put on the job's list for the damaged parts. */
-  recutsAdded: number;
-  /** Re-cuts this (re-cut) plan cut. */
-  recutsClosed: number;
-  jobStatus: JobStatus | null;
-}
+export type { FinishResult } from '@/shared/wire/plans';
 
 /**
  * Done: consumes what the plan reserved, takes its bought pieces, puts its keepable offcuts on the rack (where the

@@ -1,3 +1,4 @@
+import type { PricingView } from '@/shared/wire/settings';
 import type { Scope, ShopScope } from '../scope';
 import { and, asc, eq } from 'drizzle-orm';
 import { hardwareItems, shops } from '../schema';
@@ -5,10 +6,7 @@ import { DEFAULT_PRICING, pricingSettingsSchema, type HardwareItem, type Hardwar
 import { recordAudit } from './audit';
 import { conflict, notFound } from '@/lib/errors';
 
-export interface PricingView {
-  currency: string;
-  pricing: PricingSettings;
-}
+export type { PricingView } from '@/shared/wire/settings';
 
 /** The shop's pricing settings; a stored value missing a field (written before it existed) takes the default. */
 export async function getPricing({ db, shopId }: ShopScope): Promise<PricingView> {

@@ -1,3 +1,4 @@
+import type { SavedSaw } from '@/shared/wire/settings';
 import type { Scope, ShopScope, SystemScope } from '../scope';
 import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
@@ -6,10 +7,7 @@ import type { Saw, SawKind } from '@/shared/schemas/saw';
 import { recordAudit } from './audit';
 import { conflict, notFound } from '@/lib/errors';
 
-export interface SavedSaw extends Saw {
-  id: string;
-  updatedAt: string;
-}
+export type { SavedSaw } from '@/shared/wire/settings';
 
 type Row = typeof saws.$inferSelect;
 

@@ -1,3 +1,4 @@
+import type { SavedSetupCard } from '@/shared/wire/settings';
 import type { Scope, ShopScope } from '../scope';
 import { and, asc, eq } from 'drizzle-orm';
 import type { Db } from '../open';
@@ -7,10 +8,7 @@ import type { SetupCard, SetupCardField } from '@/shared/schemas/setup-card';
 import { recordAudit } from './audit';
 import { conflict, notFound } from '@/lib/errors';
 
-export interface SavedSetupCard extends SetupCard {
-  id: string;
-  updatedAt: string;
-}
+export type { SavedSetupCard } from '@/shared/wire/settings';
 
 type Row = typeof setupCards.$inferSelect;
 

@@ -1,3 +1,4 @@
+import type { SavedSlideModel } from '@/shared/wire/settings';
 import type { Scope, ShopScope, SystemScope } from '../scope';
 import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
@@ -6,10 +7,7 @@ import type { SlideModel, SlideModelKind, SlideWidthRule } from '@/shared/schema
 import { recordAudit } from './audit';
 import { conflict, notFound } from '@/lib/errors';
 
-export interface SavedSlideModel extends SlideModel {
-  id: string;
-  updatedAt: string;
-}
+export type { SavedSlideModel } from '@/shared/wire/settings';
 
 type Row = typeof slideModels.$inferSelect;
 
