@@ -53,15 +53,8 @@ function readableIssue(issue: { code: string; path: PropertyKey[]; message: stri
 function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
   const outside = boxFromOpening(s);
   if (!outside.ok) return outside;
-  const { box: size, notes } = outside;
-
   const t: BoxThickness = { front: s.thickness.frontMm, back: s.thickness.backMm ?? s.thickness.frontMm, side: s.thickness.sideMm };
-  const box: SizedBox = {
-    ...size,
-    insideWidthMm: size.widthMm - 2 * t.side,
-    insideDepthMm: size.depthMm - t.front - t.back,
-    wallHeightMm: size.heightMm - (s.bottom.mount === 'applied' ? s.bottom.thicknessMm : 0),
-  };
+  const box = sizedBox(s, outside.box, t);
   const corners = jointCorners(s.joint, t);
   const lip = lipPastBox(s, box);
   const lipMm = lip.ok ? lip.lipMm : 0;
@@ -76,14 +69,87 @@ function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
   ];
   if (errors.length > 0) return { ok: false, errors };
 
-  const wallPart = (
-    role: 'front' | 'back' | 'side',
-    lengthMm: Mm,
-    endEngagementMm: Mm[],
-    thicknessMm: Mm,
-    material: string,
-    overhangMm = 0,
-  ): DrawerPart => ({
+  const parts: DrawerPart[] = [...wallParts({ s, box, t, corners, lipMm }), bottomPart(s, box, t)];
+  const applied = appliedFrontPart(s);
+  if (applied) parts.push(applied);
+  const face = drawerFace(s, box, applied ?? parts[0]);
+
+  return {
+    ok: true,
+    parts,
+    box,
+    face,
+    setupCardKeys: requiredSetupCards(s),
+    notes: [...outside.notes, ...scheduleNotes(s, t)],
+    warnings: faceWarnings(face),
+  };
+}
+
+/** The box's inside sizes and wall height from its outside sizes, wall thicknesses and how the bottom is held. */
+function sizedBox(s: DrawerSchedule, size: Extract<ReturnType<typeof boxFromOpening>, { ok: true }>['box'], t: BoxThickness): SizedBox {
+  return {
+    ...size,
+    insideWidthMm: size.widthMm - 2 * t.side,
+    insideDepthMm: size.depthMm - t.front - t.back,
+    wallHeightMm: size.heightMm - (s.bottom.mount === 'applied' ? s.bottom.thicknessMm : 0),
+  };
+}
+
+interface WallContext {
+  s: DrawerSchedule;
+  box: SizedBox;
+  t: BoxThickness;
+  corners: ReturnType<typeof jointCorners>;
+  /** How far a front that hides the slides reaches past the box at each end (0 for a plain front). */
+  lipMm: Mm;
+}
+
+/**
+ * The four walls: front and back at the box's full width (plus what the joint engages at each end, and the lip of a
+ * front that hides the slides), two sides at the inside depth plus their engagement at the front and the back.
+ */
+function wallParts(c: WallContext): DrawerPart[] {
+  const { s, box, t, corners, lipMm } = c;
+  const frontMaterial = s.materials.front ?? s.materials.sides;
+  return [
+    wallPart(
+      c,
+      'front',
+      box.insideWidthMm + 2 * corners.front.panelEngagementMm + 2 * lipMm,
+      [corners.front.panelEngagementMm, corners.front.panelEngagementMm],
+      t.front,
+      frontMaterial,
+      lipMm,
+    ),
+    wallPart(
+      c,
+      'back',
+      box.insideWidthMm + 2 * corners.back.panelEngagementMm,
+      [corners.back.panelEngagementMm, corners.back.panelEngagementMm],
+      t.back,
+      s.materials.back ?? frontMaterial,
+    ),
+    wallPart(
+      c,
+      'side',
+      box.insideDepthMm + corners.front.sideEngagementMm + corners.back.sideEngagementMm,
+      [corners.front.sideEngagementMm, corners.back.sideEngagementMm],
+      t.side,
+      s.materials.sides,
+    ),
+  ];
+}
+
+function wallPart(
+  { s, box, t, corners, lipMm }: WallContext,
+  role: 'front' | 'back' | 'side',
+  lengthMm: Mm,
+  endEngagementMm: Mm[],
+  thicknessMm: Mm,
+  material: string,
+  overhangMm = 0,
+): DrawerPart {
+  return {
     ...partBase(s, role, role === 'side' ? 2 : 1),
     lengthMm,
     widthMm: box.wallHeightMm,
@@ -98,46 +164,6 @@ function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
       ...jointMachining(s.joint, role, corners, t, lipMm),
       ...grooveMachining(s, role),
     ],
-  });
-
-  const frontMaterial = s.materials.front ?? s.materials.sides;
-  const parts: DrawerPart[] = [
-    wallPart(
-      'front',
-      box.insideWidthMm + 2 * corners.front.panelEngagementMm + 2 * lipMm,
-      [corners.front.panelEngagementMm, corners.front.panelEngagementMm],
-      t.front,
-      frontMaterial,
-      lipMm,
-    ),
-    wallPart(
-      'back',
-      box.insideWidthMm + 2 * corners.back.panelEngagementMm,
-      [corners.back.panelEngagementMm, corners.back.panelEngagementMm],
-      t.back,
-      s.materials.back ?? frontMaterial,
-    ),
-    wallPart(
-      'side',
-      box.insideDepthMm + corners.front.sideEngagementMm + corners.back.sideEngagementMm,
-      [corners.front.sideEngagementMm, corners.back.sideEngagementMm],
-      t.side,
-      s.materials.sides,
-    ),
-    bottomPart(s, box, t),
-  ];
-  const applied = appliedFrontPart(s);
-  if (applied) parts.push(applied);
-  const face = drawerFace(s, box, applied ?? parts[0]);
-
-  return {
-    ok: true,
-    parts,
-    box,
-    face,
-    setupCardKeys: requiredSetupCards(s),
-    notes: [...notes, ...scheduleNotes(s, t)],
-    warnings: faceWarnings(face),
   };
 }
 
