@@ -1,7 +1,7 @@
 import type { Scope, ShopScope } from '../scope';
 import { and, desc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
-import { customers, jobs, parts, plans, quoteRevisions, quotes, shops } from '../schema';
+import { jobs, parts, plans, quoteRevisions, quotes, shops } from '../schema';
 import { quoteTotals, type QuoteTotals } from '@/lib/costing/quote-totals';
 import { boxFromOpening } from '@/lib/joinery/box-from-opening';
 import { requiredSetupCards, SETUP_CARD_TOLERANCE_MM } from '@/lib/joinery/setup-cards';
@@ -19,6 +19,7 @@ import { lastValidDay } from '@/lib/quotes/answer';
 import { quotePdf, type QuotePdfInput } from '@/lib/quotes/quote-pdf';
 import { pdfFileName } from '@/lib/saw-order/pdf-text';
 import { recordAudit } from './audit';
+import { customerOfJob } from './customers';
 import { getJob } from './jobs';
 import { newQuoteLink, refuseNewRevisionAfter } from './quote-answers';
 import { listDrawerSchedules } from './drawer-schedules';
@@ -384,23 +385,11 @@ export async function newRevision({ db, shopId, userId }: Scope, quoteId: string
  * and a job still quoting becomes quoted. Only the latest revision can be sent, only once, and only to a customer
  * with an e-mail address. The caller wakes the mail sender.
  */
-export async function sendRevision({ db, shopId, userId }: Scope, revisionId: string, now = new Date()): Promise<QuoteRevisionView> {
-  const revision = await getRevision({ db, shopId }, revisionId);
-  if (!revision) throw notFound('That quote');
-  const [job, settings] = await Promise.all([getJob({ db, shopId }, revision.jobId), getShopSettings({ db, shopId })]);
-  if (!job || !settings) throw notFound('That quote');
-  const [customer] = job.customerId
-    ? await db
-        .select()
-        .from(customers)
-        .where(and(eq(customers.shopId, shopId), eq(customers.id, job.customerId)))
-    : [];
-  if (!customer)
-    throw invalid('The job has no customer to send the quote to: pick one on the job first.', { customer: ['Pick the customer this quote is for.'] });
-  if (!customer.email)
-    throw invalid(`${customer.name} has no e-mail address: add it on their customer page, then send.`, {
-      email: [`Add ${customer.name}’s e-mail address.`],
-    });
+export async function sendRevision(scope: Scope, revisionId: string, now = new Date()): Promise<QuoteRevisionView> {
+  const { db, shopId, userId } = scope;
+  const revision = await getRevision(scope, revisionId);
+  const [job, settings] = await Promise.all([getJob(scope, revision.jobId), getShopSettings(scope)]);
+  const customer = await quoteRecipient(scope, job);
   const link = newQuoteLink();
   const sentDay = shopDay(now, settings.timeZone);
   const validUntil = lastValidDay(sentDay, revision.validityDays);
@@ -408,15 +397,7 @@ export async function sendRevision({ db, shopId, userId }: Scope, revisionId: st
 
   await db.transaction(async (tx) => {
     const row = await lockRevision(tx, shopId, revisionId);
-    const [latest] = await latestOf(tx, row.quoteId);
-    if (row.revision !== latest.n)
-      throw conflict(
-        `Only the latest revision can be sent: this is rev ${revisionLetter(row.revision)}, the latest is rev ${revisionLetter(latest.n)}.`,
-      );
-    if (row.status !== 'draft') throw conflict('This revision was already sent.');
-    if (row.updatedAt.toISOString() !== revision.updatedAt)
-      throw conflict('This revision changed while it was being sent: look it over and send it again.');
-    if (row.lines.length === 0) throw invalid('A quote with no lines cannot be sent.');
+    await refuseUnsendable(tx, row, revision);
     const replaced = await tx
       .update(quoteRevisions)
       .set({ status: 'replaced', updatedAt: now })
@@ -426,39 +407,56 @@ export async function sendRevision({ db, shopId, userId }: Scope, revisionId: st
       .update(quoteRevisions)
       .set({ status: 'sent', sentAt: now, validUntil, linkTokenHash: link.hash, updatedAt: now })
       .where(eq(quoteRevisions.id, revisionId));
-    const t = revision.totals;
     const mail = quoteMail({
       shopName: settings.name,
       customerName: customer.name,
       title: revision.title,
       jobName: job.name,
-      total: formatMoney(t.totalMinor, revision.currency),
-      deposit: formatMoney(t.depositMinor, revision.currency),
-      noDeposit: t.depositMinor === 0,
+      total: formatMoney(revision.totals.totalMinor, revision.currency),
+      deposit: formatMoney(revision.totals.depositMinor, revision.currency),
+      noDeposit: revision.totals.depositMinor === 0,
       validUntil,
       link: link.link,
       replaces: replaced.length ? replaced.map((r) => `rev ${revisionLetter(r.revision)}`).join(', ') : null,
     });
+    const filename = `${pdfFileName(`${revision.title} ${job.name}`)}.pdf`;
     await enqueueMail(tx, {
       shopId,
       kind: 'quote',
       to: customer.email,
       ...mail,
-      attachments: [
-        { filename: `${pdfFileName(`${revision.title} ${job.name}`)}.pdf`, contentType: 'application/pdf', content: pdf.toString('base64') },
-      ],
+      attachments: [{ filename, contentType: 'application/pdf', content: pdf.toString('base64') }],
     });
-    await recordAudit(tx, {
-      shopId,
-      userId,
-      action: 'send',
-      entity: 'quote-revision',
-      entityId: revisionId,
-      data: { total: t.totalMinor, to: customer.email, validUntil },
-    });
+    const data = { total: revision.totals.totalMinor, to: customer.email, validUntil };
+    await recordAudit(tx, { shopId, userId, action: 'send', entity: 'quote-revision', entityId: revisionId, data });
     await syncJobStatus({ db: tx, shopId, userId }, row.jobId, 'quote sent');
   });
-  return getRevision({ db, shopId }, revisionId);
+  return getRevision(scope, revisionId);
+}
+
+/** The customer a quote goes to: the job's, with an e-mail address (422 naming what to add otherwise). */
+async function quoteRecipient(scope: ShopScope, job: { customerId: string | null }) {
+  const customer = await customerOfJob(scope, job);
+  if (!customer)
+    throw invalid('The job has no customer to send the quote to: pick one on the job first.', { customer: ['Pick the customer this quote is for.'] });
+  if (!customer.email)
+    throw invalid(`${customer.name} has no e-mail address: add it on their customer page, then send.`, {
+      email: [`Add ${customer.name}’s e-mail address.`],
+    });
+  return customer;
+}
+
+/** Only the latest revision, still a draft, unchanged since it was read, with at least one line, can be sent. */
+async function refuseUnsendable(tx: Db, row: RevisionRow, read: QuoteRevisionView) {
+  const [latest] = await latestOf(tx, row.quoteId);
+  if (row.revision !== latest.n)
+    throw conflict(
+      `Only the latest revision can be sent: this is rev ${revisionLetter(row.revision)}, the latest is rev ${revisionLetter(latest.n)}.`,
+    );
+  if (row.status !== 'draft') throw conflict('This revision was already sent.');
+  if (row.updatedAt.toISOString() !== read.updatedAt)
+    throw conflict('This revision changed while it was being sent: look it over and send it again.');
+  if (row.lines.length === 0) throw invalid('A quote with no lines cannot be sent.');
 }
 
 /** What the quote PDF prints for a revision (the customer's copy: prices only). */
