@@ -1,3 +1,4 @@
+import type { SavedSaw } from '@/shared/wire/settings';
 import type { ShopScope } from '../scope';
 import { and, eq } from 'drizzle-orm';
 import { offcuts, stockItems } from '../schema';
@@ -24,35 +25,60 @@ export const costEachCents = (item: typeof stockItems.$inferSelect): number => p
  * `for: 'recuts'` the parts are only the job's open re-cuts (each with its re-cut's id), nothing of the cut list.
  */
 export async function buildNestRequest(
-  { db, shopId }: ShopScope,
+  scope: ShopScope,
   jobId: string,
   choice: Partial<NestSettings> & { sawId?: string; breakdownSawId?: string } = {},
   nestFor: NestFor = 'cut-list',
 ): Promise<NestRequestInput> {
+  const { db, shopId } = scope;
   const { sawId, breakdownSawId, ...settings } = choice;
   const [shop, parts, items, rack, shopSaws] = await Promise.all([
-    getShopSettings({ db, shopId }),
-    nestFor === 'recuts' ? openRecuts({ db, shopId }, jobId).then(recutNestParts) : listParts({ db, shopId }, jobId).then(cutListParts),
+    getShopSettings(scope),
+    nestFor === 'recuts' ? openRecuts(scope, jobId).then(recutNestParts) : listParts(scope, jobId).then(cutListParts),
     db.select().from(stockItems).where(eq(stockItems.shopId, shopId)),
     db
       .select()
       .from(offcuts)
       .where(and(eq(offcuts.shopId, shopId), eq(offcuts.status, 'available'))),
-    sawId || breakdownSawId ? listSaws({ db, shopId }) : Promise.resolve([]),
+    sawId || breakdownSawId ? listSaws(scope) : Promise.resolve([]),
   ]);
-  if (!shop) throw new Error('shop not found');
-  // The chosen saws' whole profiles go into the request (a saved plan keeps them), and the plan allows each cut the
-  // widest of their kerfs.
-  const sawFor = (id: string | undefined, field: string): NestSaw | undefined => {
-    if (!id) return undefined;
-    const found = shopSaws.find((s) => s.id === id);
-    if (!found) throw invalid('That saw is not in Shop settings any more; choose another.', { [field]: ['not a saw of this shop'] });
-    const { updatedAt: _u, ...profile } = found;
-    return profile;
+  const stock = nestStock(items, rack);
+  const offered: NestRequestInput = {
+    parts,
+    stock,
+    settings: {
+      kerf: shop.kerfMm,
+      trim: shop.edgeTrimMm,
+      minOffcutLength: shop.minOffcutLengthMm,
+      minOffcutWidth: shop.minOffcutWidthMm,
+      minFenceWidth: shop.minFenceWidthMm,
+    },
   };
-  const saw = sawFor(sawId, 'sawId');
-  const breakdownSaw = sawFor(breakdownSawId, 'breakdownSawId');
+  return requestForChoice(offered, {
+    stockIds: stock.map((s) => s.id),
+    settings,
+    saw: chosenSaw(shopSaws, sawId, 'sawId'),
+    breakdownSaw: chosenSaw(shopSaws, breakdownSawId, 'breakdownSawId'),
+  });
+}
 
+/**
+ * A chosen saw's whole profile goes into the request (a saved plan keeps it), and the plan allows each cut the widest
+ * of the chosen saws' kerfs. A saw no longer in the shop's settings is refused on its field.
+ */
+function chosenSaw(shopSaws: SavedSaw[], id: string | undefined, field: string): NestSaw | undefined {
+  if (!id) return undefined;
+  const found = shopSaws.find((s) => s.id === id);
+  if (!found) throw invalid('That saw is not in Shop settings any more; choose another.', { [field]: ['not a saw of this shop'] });
+  const { updatedAt: _u, ...profile } = found;
+  return profile;
+}
+
+/**
+ * What the stock room offers a nest: each size's free count (on hand less reserved), more of it to buy where it can
+ * be bought, and every offcut on the rack (already trimmed).
+ */
+function nestStock(items: (typeof stockItems.$inferSelect)[], rack: (typeof offcuts.$inferSelect)[]): NestStock[] {
   const stock: NestStock[] = [];
   for (const item of items) {
     const base = {
@@ -84,19 +110,7 @@ export async function buildNestRequest(
       source: o.location || undefined,
     });
   }
-
-  const offered: NestRequestInput = {
-    parts,
-    stock,
-    settings: {
-      kerf: shop.kerfMm,
-      trim: shop.edgeTrimMm,
-      minOffcutLength: shop.minOffcutLengthMm,
-      minOffcutWidth: shop.minOffcutWidthMm,
-      minFenceWidth: shop.minFenceWidthMm,
-    },
-  };
-  return requestForChoice(offered, { stockIds: stock.map((s) => s.id), settings, saw, breakdownSaw });
+  return stock;
 }
 
 const cutListParts = (parts: Awaited<ReturnType<typeof listParts>>): NestPart[] =>
