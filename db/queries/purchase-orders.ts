@@ -387,10 +387,11 @@ export async function cancelPurchaseOrder({ db, shopId, userId }: Scope, id: str
  * With `updateCosts`, each received size's cost in the stock room becomes this order's unit cost.
  */
 export async function receivePurchaseOrder(
-  { db, shopId, userId }: Scope,
+  scope: Scope,
   id: string,
   input: Pick<ReceivePurchaseOrder, 'lines' | 'updateCosts'> & Partial<Pick<ReceivePurchaseOrder, 'all' | 'note'>>,
 ): Promise<PurchaseOrderView> {
+  const { db, shopId, userId } = scope;
   await db.transaction(async (tx) => {
     const row = await lockOrder(tx, shopId, id);
     const title = poNumber(row.number);
@@ -402,49 +403,11 @@ export async function receivePurchaseOrder(
       .innerJoin(stockItems, eq(stockItems.id, purchaseOrderLines.stockItemId))
       .where(eq(purchaseOrderLines.purchaseOrderId, id))
       .for('update');
-    const wanted = input.all
-      ? lines.filter((l) => l.line.quantity > l.line.received).map((l) => ({ lineId: l.line.id, quantity: l.line.quantity - l.line.received }))
-      : input.lines.filter((l) => l.quantity > 0);
-    if (!wanted.length) throw invalid('Say how many pieces came on at least one line.');
-    for (const w of input.lines) if (!lines.some((l) => l.line.id === w.lineId)) throw invalid(`A line named is not on ${title}.`);
-    for (const w of wanted) {
-      const { line, item } = lines.find((l) => l.line.id === w.lineId)!;
-      const open = line.quantity - line.received;
-      if (w.quantity > open) {
-        throw conflict(
-          `${item.material} ${quoteNominal(item.nominalThickness)}: ${line.quantity} ordered and ${line.received} already received, so ${open} more can come in, not ${w.quantity}. Record extra pieces as a receipt in the stock room.`,
-        );
-      }
-    }
+    const wanted = arrivals(lines, input, title);
     const reason = `Received on ${title}${input.note ? ` — ${input.note}` : ''}`;
-    for (const w of wanted) {
-      const { line, item } = lines.find((l) => l.line.id === w.lineId)!;
-      await tx
-        .update(purchaseOrderLines)
-        .set({ received: line.received + w.quantity })
-        .where(eq(purchaseOrderLines.id, line.id));
-      const set: Partial<typeof stockItems.$inferInsert> = { onHand: sql`${stockItems.onHand} + ${w.quantity}` as never };
-      if (input.updateCosts && line.unitCostCents !== item.costCents) set.costCents = line.unitCostCents;
-      await tx
-        .update(stockItems)
-        .set(set)
-        .where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, item.id)));
-      await tx
-        .insert(stockMovements)
-        .values({ shopId, kind: 'received', stockItemId: item.id, quantity: w.quantity, userId, reason, purchaseOrderId: id });
-      if (set.costCents !== undefined) {
-        await recordAudit(tx, {
-          shopId,
-          userId,
-          action: 'update',
-          entity: 'stock-item',
-          entityId: item.id,
-          data: { changes: { costCents: { from: item.costCents, to: line.unitCostCents } }, purchaseOrderId: id },
-        });
-      }
-    }
-    const after = lines.map(({ line }) => line.received + (wanted.find((w) => w.lineId === line.id)?.quantity ?? 0) >= line.quantity);
-    const done = after.every(Boolean);
+    for (const w of wanted)
+      await receiveLine({ ...scope, db: tx }, id, lines.find((l) => l.line.id === w.lineId)!, w.quantity, { reason, updateCosts: input.updateCosts });
+    const done = lines.every(({ line }) => line.received + (wanted.find((w) => w.lineId === line.id)?.quantity ?? 0) >= line.quantity);
     await tx
       .update(purchaseOrders)
       .set({ status: done ? 'received' : 'part-received', receivedAt: done ? new Date() : null, updatedAt: new Date() })
@@ -458,7 +421,62 @@ export async function receivePurchaseOrder(
       data: { lines: wanted, updateCosts: input.updateCosts },
     });
   });
-  return getPurchaseOrder({ db, shopId }, id);
+  return getPurchaseOrder(scope, id);
+}
+
+type LockedLine = { line: typeof purchaseOrderLines.$inferSelect; item: typeof stockItems.$inferSelect };
+
+/**
+ * What came in, line by line: every open quantity for "all", else the lines the receiver counted. Refuses a line not
+ * on the order, nothing at all, and more than a line still has open (extra pieces are a receipt in the stock room).
+ */
+function arrivals(lines: LockedLine[], input: Pick<ReceivePurchaseOrder, 'lines'> & { all?: boolean }, title: string) {
+  const wanted = input.all
+    ? lines.filter((l) => l.line.quantity > l.line.received).map((l) => ({ lineId: l.line.id, quantity: l.line.quantity - l.line.received }))
+    : input.lines.filter((l) => l.quantity > 0);
+  if (!wanted.length) throw invalid('Say how many pieces came on at least one line.');
+  for (const w of input.lines) if (!lines.some((l) => l.line.id === w.lineId)) throw invalid(`A line named is not on ${title}.`);
+  for (const w of wanted) {
+    const { line, item } = lines.find((l) => l.line.id === w.lineId)!;
+    const open = line.quantity - line.received;
+    if (w.quantity > open) {
+      throw conflict(
+        `${item.material} ${quoteNominal(item.nominalThickness)}: ${line.quantity} ordered and ${line.received} already received, so ${open} more can come in, not ${w.quantity}. Record extra pieces as a receipt in the stock room.`,
+      );
+    }
+  }
+  return wanted;
+}
+
+/** One line's arrival: the line's received count, the size's count (and cost, when asked), a movement naming the order. */
+async function receiveLine(
+  { db: tx, shopId, userId }: Scope,
+  orderId: string,
+  { line, item }: LockedLine,
+  quantity: number,
+  { reason, updateCosts }: { reason: string; updateCosts: boolean },
+) {
+  await tx
+    .update(purchaseOrderLines)
+    .set({ received: line.received + quantity })
+    .where(eq(purchaseOrderLines.id, line.id));
+  const set: Partial<typeof stockItems.$inferInsert> = { onHand: sql`${stockItems.onHand} + ${quantity}` as never };
+  if (updateCosts && line.unitCostCents !== item.costCents) set.costCents = line.unitCostCents;
+  await tx
+    .update(stockItems)
+    .set(set)
+    .where(and(eq(stockItems.shopId, shopId), eq(stockItems.id, item.id)));
+  await tx.insert(stockMovements).values({ shopId, kind: 'received', stockItemId: item.id, quantity, userId, reason, purchaseOrderId: orderId });
+  if (set.costCents !== undefined) {
+    await recordAudit(tx, {
+      shopId,
+      userId,
+      action: 'update',
+      entity: 'stock-item',
+      entityId: item.id,
+      data: { changes: { costCents: { from: item.costCents, to: line.unitCostCents } }, purchaseOrderId: orderId },
+    });
+  }
 }
 
 /** The buying settings kept on the shop. */
