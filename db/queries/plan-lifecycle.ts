@@ -142,55 +142,11 @@ export async function releasePlan({ db, shopId, userId }: Scope, planId: string)
   return db.transaction(async (tx) => {
     const row = await moveStatus(tx, shopId, planId, ['draft'], { status: 'released', releasedAt: new Date(), releasedBy: userId }, 'released');
     const plan = readPlan(row.document);
-    const groups = groupPieces(plan);
-    const missing: MissingPiece[] = [];
-    const reserved: ReleaseResult['reserved'] = [];
-    const toBuy: ReleaseResult['toBuy'] = [];
-
-    for (const g of groups) {
-      if (g.ref.source === 'buy') {
-        toBuy.push({ stockId: g.stockId, count: g.count });
-      } else if (g.ref.source === 'stock') {
-        const done = await tx
-          .update(stockItems)
-          .set({ reserved: sql`${stockItems.reserved} + ${g.count}` })
-          .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId), sql`${stockItems.onHand} - ${stockItems.reserved} >= ${g.count}`))
-          .returning({ id: stockItems.id });
-        if (done.length) reserved.push({ stockId: g.stockId, count: g.count });
-        else {
-          const [now] = await tx
-            .select({ free: sql<number>`${stockItems.onHand} - ${stockItems.reserved}` })
-            .from(stockItems)
-            .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId)));
-          missing.push(missingFrom(g, Math.max(0, Number(now?.free ?? 0))));
-        }
-      } else {
-        const done = await tx
-          .update(offcuts)
-          .set({ status: 'reserved' })
-          .where(and(eq(offcuts.id, g.ref.id), eq(offcuts.shopId, shopId), eq(offcuts.status, 'available')))
-          .returning({ id: offcuts.id });
-        if (done.length) reserved.push({ stockId: g.stockId, count: 1 });
-        else missing.push(missingFrom(g, 0));
-      }
-    }
+    const { reserved, toBuy, missing } = await reservePieces(tx, shopId, groupPieces(plan));
     // Throwing rolls the whole transaction back: the status change and every reservation made above.
     if (missing.length) throw new StockShortage(row.jobId, missing);
 
-    const reason = `Reserved for plan “${row.name}”`;
-    const moves = reserved.map((r) => {
-      const ref = stockRef.parse(r.stockId)!;
-      return {
-        shopId,
-        kind: 'reserved' as const,
-        quantity: 0,
-        reservedChange: r.count,
-        planId,
-        userId,
-        reason,
-        ...(ref.source === 'offcut' ? { offcutId: ref.id } : { stockItemId: ref.id }),
-      };
-    });
+    const moves = reservationMoves({ db: tx, shopId, userId }, planId, reserved, `Reserved for plan “${row.name}”`);
     if (moves.length) await tx.insert(stockMovements).values(moves);
     if (row.recutPlan)
       await holdRecutsForPlan(
@@ -202,6 +158,61 @@ export async function releasePlan({ db, shopId, userId }: Scope, planId: string)
     await recordAudit(tx, { shopId, userId, action: 'release', entity: 'plan', entityId: planId, data: { reserved, toBuy } });
     const jobStatus = await syncJobStatus({ db: tx, shopId, userId }, row.jobId, `plan “${row.name}” released`);
     return { planId, reserved, toBuy, jobStatus };
+  });
+}
+
+/**
+ * Reserves each group of the plan's pieces with a conditional update (stock: only while enough is free; an offcut:
+ * only while it is on the rack), and names every group that could not be had; pieces to buy are listed, not held.
+ */
+async function reservePieces(tx: Tx, shopId: string, groups: ReturnType<typeof groupPieces>) {
+  const missing: MissingPiece[] = [];
+  const reserved: ReleaseResult['reserved'] = [];
+  const toBuy: ReleaseResult['toBuy'] = [];
+  for (const g of groups) {
+    if (g.ref.source === 'buy') {
+      toBuy.push({ stockId: g.stockId, count: g.count });
+    } else if (g.ref.source === 'stock') {
+      const done = await tx
+        .update(stockItems)
+        .set({ reserved: sql`${stockItems.reserved} + ${g.count}` })
+        .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId), sql`${stockItems.onHand} - ${stockItems.reserved} >= ${g.count}`))
+        .returning({ id: stockItems.id });
+      if (done.length) reserved.push({ stockId: g.stockId, count: g.count });
+      else {
+        const [now] = await tx
+          .select({ free: sql<number>`${stockItems.onHand} - ${stockItems.reserved}` })
+          .from(stockItems)
+          .where(and(eq(stockItems.id, g.ref.id), eq(stockItems.shopId, shopId)));
+        missing.push(missingFrom(g, Math.max(0, Number(now?.free ?? 0))));
+      }
+    } else {
+      const done = await tx
+        .update(offcuts)
+        .set({ status: 'reserved' })
+        .where(and(eq(offcuts.id, g.ref.id), eq(offcuts.shopId, shopId), eq(offcuts.status, 'available')))
+        .returning({ id: offcuts.id });
+      if (done.length) reserved.push({ stockId: g.stockId, count: 1 });
+      else missing.push(missingFrom(g, 0));
+    }
+  }
+  return { reserved, toBuy, missing };
+}
+
+/** The ledger's rows for what a release reserved: the counts do not change, what is held does. */
+function reservationMoves({ shopId, userId }: Scope, planId: string, reserved: ReleaseResult['reserved'], reason: string) {
+  return reserved.map((r) => {
+    const ref = stockRef.parse(r.stockId)!;
+    return {
+      shopId,
+      kind: 'reserved' as const,
+      quantity: 0,
+      reservedChange: r.count,
+      planId,
+      userId,
+      reason,
+      ...(ref.source === 'offcut' ? { offcutId: ref.id } : { stockItemId: ref.id }),
+    };
   });
 }
 

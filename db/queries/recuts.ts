@@ -116,6 +116,34 @@ export async function recordDamagedPieces(
         )
       : new Set<string>();
 
+  const { rows, spoiled } = recutRows({ shopId, userId, plan, request, damaged }, heldRecuts, jobParts);
+  if (spoiled.length) {
+    await tx
+      .update(recuts)
+      .set({ status: 'spoiled', closedAt: new Date(), closedBy: userId })
+      .where(and(eq(recuts.shopId, shopId), inArray(recuts.id, spoiled)));
+  }
+  const created = await tx.insert(recuts).values(rows).returning({ id: recuts.id, label: recuts.label, instance: recuts.instance });
+  await recordAudit(tx, {
+    shopId,
+    userId,
+    action: 'damaged',
+    entity: 'plan',
+    entityId: plan.id,
+    data: { recuts: created.map((r) => recutLabel(r)) },
+  });
+  return created.map((r) => r.id);
+}
+
+/**
+ * One re-cut row per damaged piece, sized as the part was: a piece of a re-cut plan repeats its re-cut (which is
+ * then spoiled); any other is read from the plan's request, linked to its cut-list row while that row exists.
+ */
+function recutRows(
+  { shopId, userId, plan, request, damaged }: { shopId: string; userId: string; plan: PlanRow; request: NestRequest | null; damaged: DamagedPiece[] },
+  heldRecuts: (typeof recuts.$inferSelect)[],
+  jobParts: Set<string>,
+) {
   const rows: (typeof recuts.$inferInsert)[] = [];
   const spoiled: string[] = [];
   for (const d of damaged) {
@@ -144,22 +172,7 @@ export async function recordDamagedPieces(
       jointAllowanceMm: part.jointAllowance,
     });
   }
-  if (spoiled.length) {
-    await tx
-      .update(recuts)
-      .set({ status: 'spoiled', closedAt: new Date(), closedBy: userId })
-      .where(and(eq(recuts.shopId, shopId), inArray(recuts.id, spoiled)));
-  }
-  const created = await tx.insert(recuts).values(rows).returning({ id: recuts.id, label: recuts.label, instance: recuts.instance });
-  await recordAudit(tx, {
-    shopId,
-    userId,
-    action: 'damaged',
-    entity: 'plan',
-    entityId: plan.id,
-    data: { recuts: created.map((r) => recutLabel(r)) },
-  });
-  return created.map((r) => r.id);
+  return { rows, spoiled };
 }
 
 /**
