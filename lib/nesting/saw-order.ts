@@ -83,77 +83,8 @@ export function sawOrderFromTree(tree: CutNode, rootName: string, ctx: SawContex
   const steps: SawStep[] = [];
   const visit = (node: CutNode, name: string) => {
     if (node.type !== 'cut') return;
-    const axis = node.axis;
     const { leaves, cuts } = flattenRun(node);
-    const names: (string | null)[] = [];
-    let k = 0;
-    let cur = node.rect;
-    cuts.forEach((pos, i) => {
-      const a1 = highEdge(cur, axis);
-      const low = slice(cur, axis, lowEdge(cur, axis), Math.max(lowEdge(cur, axis), pos));
-      const high = slice(cur, axis, Math.min(a1, pos + ctx.kerf), a1);
-      const isLast = i === cuts.length - 1;
-      const lowName = nonEmpty(low) ? childName(name, ++k) : null;
-      names[i] = lowName;
-      const highLeaf = isLast ? (leaves[i + 1] ?? null) : null;
-      const highName = !nonEmpty(high) ? null : isLast ? childName(name, ++k) : name;
-      if (isLast) names[i + 1] = highName;
-      const produces: SawPiece[] = [];
-      if (lowName) produces.push(describe(low, leaves[i], ctx, lowName));
-      if (highName) produces.push(describe(high, isLast ? highLeaf : null, ctx, highName));
-      if (produces.length === 0) return; // a blade wider than the piece: nothing to do
-      const lowIsWaste = lowName !== null && produces[0].role === 'waste';
-      const fenceFor = (ref: SawStep['reference']) => (ref === 'low' ? pos - lowEdge(cur, axis) : a1 - (pos + ctx.kerf));
-      const preferred: SawStep['reference'] = !lowName || (lowIsWaste && highName) ? 'high' : 'low';
-      const turned: SawStep['reference'] = preferred === 'low' ? 'high' : 'low';
-      const turnedExists = turned === 'low' ? lowName !== null : highName !== null;
-      const kind: SawStep['kind'] = axis === 'y' ? 'rip' : 'crosscut';
-      const length = extent(cur, other(axis));
-      // A rip never traps a strip narrower than the safe minimum between blade and fence: the piece is turned so
-      // the narrow side falls free (safety before the rule that waste does not ride the fence), or, when both sides
-      // are narrow, the step is one for a sled, a track saw or a band saw.
-      const choose = (minFence: number) => {
-        let reference = preferred;
-        let narrow = false;
-        if (axis === 'y' && fenceFor(reference) < minFence - EPS) {
-          if (turnedExists && fenceFor(turned) >= minFence - EPS) reference = turned;
-          else narrow = true;
-        }
-        return { reference, narrow };
-      };
-      let { reference, narrow } = choose(ctx.minFenceWidth);
-      let saw: string | undefined;
-      if (ctx.saws?.length) {
-        // The first saw (and way round) that can make the cut: the second saw before the breakdown saw, the
-        // preferred edge on the fence before the other. When none can, the first saw's choice stands (validatePlan
-        // reports it).
-        const exists = (r: SawStep['reference']) => (r === 'low' ? lowName !== null : highName !== null);
-        const tries = ctx.saws.flatMap((sw) => {
-          const safe = (r: SawStep['reference']) => exists(r) && fenceFor(r) >= sw.minFenceWidthMm - EPS;
-          const noSafeSide = axis === 'y' && !safe('low') && !safe('high');
-          const first = choose(sw.minFenceWidthMm).reference;
-          return [...new Set<SawStep['reference']>([first, preferred, turned])].filter(exists).map((r) => ({ sw, reference: r, narrow: noSafeSide }));
-        });
-        const ok =
-          tries.find((t) => cutProblems(t.sw, { kind, fence: fenceFor(t.reference), length, narrow: t.narrow }, cur).length === 0) ?? tries[0];
-        if (ok) ({ reference, narrow } = ok);
-        saw = (ok?.sw ?? ctx.saws[0]).name;
-      }
-      const trim = pos + ctx.kerf <= lowEdge(ctx.usable, axis) + EPS || pos >= highEdge(ctx.usable, axis) - EPS;
-      steps.push({
-        n: steps.length + 1,
-        kind,
-        piece: name,
-        reference,
-        fence: fenceFor(reference),
-        length,
-        trim,
-        ...(narrow ? { narrow } : {}),
-        ...(saw ? { saw } : {}),
-        produces,
-      });
-      cur = high;
-    });
+    const names = cutRun(node, name, leaves, cuts, ctx, steps);
     leaves.forEach((leaf, i) => {
       const leafName = names[i];
       if (leafName) visit(leaf, leafName);
@@ -161,6 +92,126 @@ export function sawOrderFromTree(tree: CutNode, rootName: string, ctx: SawContex
   };
   visit(tree, rootName);
   return steps;
+}
+
+/** One cut of a run on the piece `cur`: where the blade goes and the named sides it leaves. */
+interface RunCut {
+  axis: Axis;
+  pos: number;
+  cur: Rect;
+  lowName: string | null;
+  highName: string | null;
+  produces: SawPiece[];
+}
+
+type Reference = SawStep['reference'];
+
+/**
+ * Steps for one run of same-direction cuts on piece `name`, pushed onto `steps`; returns the names of the run's
+ * leaves (null for a side the blade takes whole). The piece cut down keeps its name until the run's last cut.
+ */
+function cutRun(
+  node: Extract<CutNode, { type: 'cut' }>,
+  name: string,
+  leaves: CutNode[],
+  cuts: number[],
+  ctx: SawContext,
+  steps: SawStep[],
+): (string | null)[] {
+  const axis = node.axis;
+  const names: (string | null)[] = [];
+  let k = 0;
+  let cur = node.rect;
+  cuts.forEach((pos, i) => {
+    const a1 = highEdge(cur, axis);
+    const low = slice(cur, axis, lowEdge(cur, axis), Math.max(lowEdge(cur, axis), pos));
+    const high = slice(cur, axis, Math.min(a1, pos + ctx.kerf), a1);
+    const isLast = i === cuts.length - 1;
+    const lowName = nonEmpty(low) ? childName(name, ++k) : null;
+    names[i] = lowName;
+    const highLeaf = isLast ? (leaves[i + 1] ?? null) : null;
+    const highName = !nonEmpty(high) ? null : isLast ? childName(name, ++k) : name;
+    if (isLast) names[i + 1] = highName;
+    const produces: SawPiece[] = [];
+    if (lowName) produces.push(describe(low, leaves[i], ctx, lowName));
+    if (highName) produces.push(describe(high, isLast ? highLeaf : null, ctx, highName));
+    if (produces.length === 0) return; // a blade wider than the piece: nothing to do
+    steps.push(sawStep({ axis, pos, cur, lowName, highName, produces }, name, steps.length + 1, ctx));
+    cur = high;
+  });
+  return names;
+}
+
+/** Step `n`: the cut `c` of piece `name`, with the side on the fence, the saw it is made on and whether it is trim. */
+function sawStep(c: RunCut, name: string, n: number, ctx: SawContext): SawStep {
+  const kind: SawStep['kind'] = c.axis === 'y' ? 'rip' : 'crosscut';
+  const length = extent(c.cur, other(c.axis));
+  const preferred = preferredReference(c);
+  const { reference, narrow, saw } = ctx.saws?.length
+    ? onFirstAbleSaw(c, ctx, ctx.saws, preferred, kind, length)
+    : { ...fenceSide(c, ctx.kerf, preferred, ctx.minFenceWidth), saw: undefined };
+  const trim = c.pos + ctx.kerf <= lowEdge(ctx.usable, c.axis) + EPS || c.pos >= highEdge(ctx.usable, c.axis) - EPS;
+  return {
+    n,
+    kind,
+    piece: name,
+    reference,
+    fence: fenceFor(c, ctx.kerf, reference),
+    length,
+    trim,
+    ...(narrow ? { narrow } : {}),
+    ...(saw ? { saw } : {}),
+    produces: c.produces,
+  };
+}
+
+/** The width between blade and fence with side `ref` against the fence. */
+const fenceFor = (c: RunCut, kerf: number, ref: Reference) =>
+  ref === 'low' ? c.pos - lowEdge(c.cur, c.axis) : highEdge(c.cur, c.axis) - (c.pos + kerf);
+
+const sideExists = (c: RunCut, ref: Reference) => (ref === 'low' ? c.lowName !== null : c.highName !== null);
+
+const turnedFrom = (ref: Reference): Reference => (ref === 'low' ? 'high' : 'low');
+
+/** The side that rides the fence when safety allows: the low side, unless it is missing or waste (waste falls free). */
+function preferredReference(c: RunCut): Reference {
+  const lowIsWaste = c.lowName !== null && c.produces[0].role === 'waste';
+  return !c.lowName || (lowIsWaste && c.highName) ? 'high' : 'low';
+}
+
+/**
+ * The side on the fence for a saw whose safe minimum is `minFence`. A rip never traps a strip narrower than that
+ * between blade and fence: the piece is turned so the narrow side falls free (safety before the rule that waste does
+ * not ride the fence), or, when both sides are narrow, the step is one for a sled, a track saw or a band saw.
+ */
+function fenceSide(c: RunCut, kerf: number, preferred: Reference, minFence: number) {
+  const turned = turnedFrom(preferred);
+  let reference = preferred;
+  let narrow = false;
+  if (c.axis === 'y' && fenceFor(c, kerf, reference) < minFence - EPS) {
+    if (sideExists(c, turned) && fenceFor(c, kerf, turned) >= minFence - EPS) reference = turned;
+    else narrow = true;
+  }
+  return { reference, narrow };
+}
+
+/**
+ * The first saw (and way round) that can make the cut: the second saw before the breakdown saw, the preferred edge
+ * on the fence before the other. When none can, the first saw's choice stands (validatePlan reports it).
+ */
+function onFirstAbleSaw(c: RunCut, ctx: SawContext, saws: readonly NestSaw[], preferred: Reference, kind: SawStep['kind'], length: number) {
+  const turned = turnedFrom(preferred);
+  const tries = saws.flatMap((sw) => {
+    const safe = (r: Reference) => sideExists(c, r) && fenceFor(c, ctx.kerf, r) >= sw.minFenceWidthMm - EPS;
+    const noSafeSide = c.axis === 'y' && !safe('low') && !safe('high');
+    const first = fenceSide(c, ctx.kerf, preferred, sw.minFenceWidthMm).reference;
+    return [...new Set<Reference>([first, preferred, turned])].filter((r) => sideExists(c, r)).map((r) => ({ sw, reference: r, narrow: noSafeSide }));
+  });
+  const ok =
+    tries.find((t) => cutProblems(t.sw, { kind, fence: fenceFor(c, ctx.kerf, t.reference), length, narrow: t.narrow }, c.cur).length === 0) ??
+    tries[0];
+  const { reference, narrow } = ok ?? fenceSide(c, ctx.kerf, preferred, ctx.minFenceWidth);
+  return { reference, narrow, saw: (ok?.sw ?? saws[0]).name };
 }
 
 export interface ReplayProblem {

@@ -116,83 +116,107 @@ function checkRange(mm: Mm): ParsedLength {
 
 const quote = (s: string) => `"${s}"`;
 
+/** The text split into numbers, fractions, units and marks; a character that is none of these is refused where it is. */
 function tokenize(chars: string[]): Token[] {
   const tokens: Token[] = [];
   let i = 0;
-  const isDigit = (c: string | undefined) => c !== undefined && c >= '0' && c <= '9';
   while (i < chars.length) {
     const c = chars[i];
     const start = i;
     if (/\s/.test(c)) {
       i++;
-    } else if (isDigit(c) || (c === '.' && isDigit(chars[i + 1]))) {
-      let digits = '';
-      while (isDigit(chars[i])) digits += chars[i++];
-      let decimals = '';
-      const sep = chars[i];
-      if (sep === '.' || sep === ',') {
-        if (!isDigit(chars[i + 1])) {
-          // "in." style abbreviations never follow a bare number, so a dangling separator is a typo.
-          throw new LengthError(`Expected a digit after ${quote(sep)} at character ${i + 2}.`, i + 2);
-        }
-        i++;
-        while (isDigit(chars[i])) decimals += chars[i++];
-        // "1,200" could be twelve hundred or 1.2; "0,502" and "1200,5" can only be decimals.
-        if (sep === ',' && decimals.length === 3 && digits.length <= 3 && Number(digits) > 0) {
-          throw new LengthError(
-            `The comma at character ${start + digits.length + 1} is ambiguous (thousands or decimals?): write ${digits}${decimals} or ${Number(`${digits}.${decimals}`)}.`,
-            start + digits.length + 1,
-          );
-        }
-      }
-      const scale = 10 ** decimals.length;
-      // "1.200" may be 1.2 or twelve hundred, written the European way; in millimetres it is refused as ambiguous.
-      const thousandsDot = sep === '.' && decimals.length === 3 && digits.length >= 1 && digits.length <= 3 && Number(digits) > 0;
-      tokens.push({ kind: 'number', start, end: i, whole: decimals === '', thousandsDot, value: { n: Number(digits + decimals), d: scale } });
+      continue;
+    }
+    let token: Token;
+    if (isDigit(c) || (c === '.' && isDigit(chars[i + 1]))) {
+      token = readNumber(chars, start);
     } else if (c in VULGAR_FRACTIONS) {
       const [n, d] = VULGAR_FRACTIONS[c];
-      tokens.push({ kind: 'glyph-fraction', start, end: ++i, value: { n, d } });
+      token = { kind: 'glyph-fraction', start, end: start + 1, value: { n, d } };
     } else if (SUPERSCRIPT_DIGITS.includes(c)) {
-      let num = '';
-      while (i < chars.length && SUPERSCRIPT_DIGITS.includes(chars[i])) num += SUPERSCRIPT_DIGITS.indexOf(chars[i++]);
-      if (!SLASHES.has(chars[i] ?? ''))
-        throw new LengthError(`Expected ${quote(FRACTION_SLASH)} after the raised numerator at character ${i + 1}.`, i + 1);
-      i++;
-      let den = '';
-      while (i < chars.length && SUBSCRIPT_DIGITS.includes(chars[i])) den += SUBSCRIPT_DIGITS.indexOf(chars[i++]);
-      if (den === '') throw new LengthError(`Expected a lowered denominator (like ₁₆) at character ${i + 1}.`, i + 1);
-      tokens.push({ kind: 'glyph-fraction', start, end: i, value: { n: Number(num), d: Number(den) } });
+      token = readRaisedFraction(chars, start);
     } else if (/[a-z]/i.test(c)) {
-      let word = '';
-      while (i < chars.length && /[a-z]/i.test(chars[i])) word += chars[i++];
-      const unit = UNIT_WORDS[word.toLowerCase()];
-      if (!unit) {
-        const first = tokens.every((t) => t.kind === 'approx');
-        throw new LengthError(
-          first
-            ? `${quote(word)} is not a length: start with a number, like 19 3/4, 1′ 7-3/4″ or 502 mm.`
-            : `${quote(word)} is not a unit Kerfwise reads (at character ${start + 1}): use ${UNIT_HINT}.`,
-          start + 1,
-        );
-      }
-      if (chars[i] === '.' && (unit === 'in' || unit === 'ft') && !isDigit(chars[i + 1])) i++; // "in." / "ft."
-      tokens.push({ kind: 'unit', unit, start, end: i });
+      token = readUnitWord(chars, start, tokens);
     } else if (FOOT_MARKS.has(c) && FOOT_MARKS.has(chars[i + 1] ?? '')) {
-      i += 2; // two primes typed for a double prime: inches
-      tokens.push({ kind: 'unit', unit: 'in', start, end: i });
+      token = { kind: 'unit', unit: 'in', start, end: start + 2 }; // two primes typed for a double prime: inches
     } else if (FOOT_MARKS.has(c) || INCH_MARKS.has(c)) {
-      tokens.push({ kind: 'unit', unit: FOOT_MARKS.has(c) ? 'ft' : 'in', start, end: ++i });
+      token = { kind: 'unit', unit: FOOT_MARKS.has(c) ? 'ft' : 'in', start, end: start + 1 };
     } else if (SLASHES.has(c)) {
-      tokens.push({ kind: 'slash', start, end: ++i });
+      token = { kind: 'slash', start, end: start + 1 };
     } else if (DASHES.has(c)) {
-      tokens.push({ kind: 'dash', start, end: ++i });
+      token = { kind: 'dash', start, end: start + 1 };
     } else if (APPROX_MARKS.has(c)) {
-      tokens.push({ kind: 'approx', start, end: ++i });
+      token = { kind: 'approx', start, end: start + 1 };
     } else {
       throw new LengthError(`Unexpected ${quote(c)} at character ${i + 1}: a length has digits, fractions and a unit (${UNIT_HINT}).`, i + 1);
     }
+    tokens.push(token);
+    i = token.end;
   }
   return tokens;
+}
+
+const isDigit = (c: string | undefined) => c !== undefined && c >= '0' && c <= '9';
+
+/** A decimal number from `start`: its digits and decimals, refusing a dangling separator and an ambiguous comma. */
+function readNumber(chars: string[], start: number): Token {
+  let i = start;
+  let digits = '';
+  while (isDigit(chars[i])) digits += chars[i++];
+  let decimals = '';
+  const sep = chars[i];
+  if (sep === '.' || sep === ',') {
+    if (!isDigit(chars[i + 1])) {
+      // "in." style abbreviations never follow a bare number, so a dangling separator is a typo.
+      throw new LengthError(`Expected a digit after ${quote(sep)} at character ${i + 2}.`, i + 2);
+    }
+    i++;
+    while (isDigit(chars[i])) decimals += chars[i++];
+    // "1,200" could be twelve hundred or 1.2; "0,502" and "1200,5" can only be decimals.
+    if (sep === ',' && decimals.length === 3 && digits.length <= 3 && Number(digits) > 0) {
+      throw new LengthError(
+        `The comma at character ${start + digits.length + 1} is ambiguous (thousands or decimals?): write ${digits}${decimals} or ${Number(`${digits}.${decimals}`)}.`,
+        start + digits.length + 1,
+      );
+    }
+  }
+  const scale = 10 ** decimals.length;
+  // "1.200" may be 1.2 or twelve hundred, written the European way; in millimetres it is refused as ambiguous.
+  const thousandsDot = sep === '.' && decimals.length === 3 && digits.length >= 1 && digits.length <= 3 && Number(digits) > 0;
+  return { kind: 'number', start, end: i, whole: decimals === '', thousandsDot, value: { n: Number(digits + decimals), d: scale } };
+}
+
+/** A fraction typed as raised digits, a fraction slash and lowered digits (like ³⁄₁₆). */
+function readRaisedFraction(chars: string[], start: number): Token {
+  let i = start;
+  let num = '';
+  while (i < chars.length && SUPERSCRIPT_DIGITS.includes(chars[i])) num += SUPERSCRIPT_DIGITS.indexOf(chars[i++]);
+  if (!SLASHES.has(chars[i] ?? ''))
+    throw new LengthError(`Expected ${quote(FRACTION_SLASH)} after the raised numerator at character ${i + 1}.`, i + 1);
+  i++;
+  let den = '';
+  while (i < chars.length && SUBSCRIPT_DIGITS.includes(chars[i])) den += SUBSCRIPT_DIGITS.indexOf(chars[i++]);
+  if (den === '') throw new LengthError(`Expected a lowered denominator (like ₁₆) at character ${i + 1}.`, i + 1);
+  return { kind: 'glyph-fraction', start, end: i, value: { n: Number(num), d: Number(den) } };
+}
+
+/** A unit written as a word (`in`, `inches`, `ft.`, `mm`…); any other word is refused, as not a length when it comes first. */
+function readUnitWord(chars: string[], start: number, before: readonly Token[]): Token {
+  let i = start;
+  let word = '';
+  while (i < chars.length && /[a-z]/i.test(chars[i])) word += chars[i++];
+  const unit = UNIT_WORDS[word.toLowerCase()];
+  if (!unit) {
+    const first = before.every((t) => t.kind === 'approx');
+    throw new LengthError(
+      first
+        ? `${quote(word)} is not a length: start with a number, like 19 3/4, 1′ 7-3/4″ or 502 mm.`
+        : `${quote(word)} is not a unit Kerfwise reads (at character ${start + 1}): use ${UNIT_HINT}.`,
+      start + 1,
+    );
+  }
+  if (chars[i] === '.' && (unit === 'in' || unit === 'ft') && !isDigit(chars[i + 1])) i++; // "in." / "ft."
+  return { kind: 'unit', unit, start, end: i };
 }
 
 type Quantity = Ratio & { shape: 'decimal' | 'whole' | 'fraction'; thousandsDot?: string };

@@ -105,65 +105,96 @@ export function* packPoolSteps(
   mark: Uint8Array,
   closeFirst = true,
 ): Generator<void, PoolPacking, void> {
+  const run: PoolRun = { p, f, avail, rule, rng, attempts, scratch, closeFirst };
   let remaining = order.slice();
   let len = remaining.length;
   const bins: Bin[] = [];
-  const rules = p.filler.rules;
   while (len > 0) {
-    let minArea = Infinity;
-    for (let j = 0; j < len; j++) if (p.area[remaining[j]] < minArea) minArea = p.area[remaining[j]];
-    let best: Candidate | null = null;
-    for (let t = 0; t < p.types.length; t++) {
-      if (avail[t] <= 0) continue;
-      const bt = p.types[t];
-      for (let a = 0; a < (rng ? attempts : 1); a++) {
-        let ord: Int32Array = remaining;
-        let r = rule;
-        if (rng && a > 0) {
-          perturb(rng, remaining, len, scratch, 0.1 + 0.4 * rng());
-          ord = scratch;
-          r = randInt(rng, rules);
-        }
-        fillBin(p, f, t, r, ord, len, minArea);
-        if (f.count === 0) break; // nothing fits this type: no order will change that
-        const c: Candidate = { bin: null as unknown as Bin, all: f.count === len, cost: bt.cost, priority: bt.priority, area: bt.w * bt.h };
-        if (!best || better(p, f.used, c, best)) {
-          c.bin = binFromFiller(f, t);
-          best = c;
-        }
-        if (c.all) break; // every remaining item fits: other orders cannot do better in this type
-      }
-    }
+    const best = bestNextBin(run, remaining, len);
     if (!best) break;
     bins.push(best.bin);
     avail[best.bin.type]--;
-    for (const i of best.bin.seq) mark[i] = 1;
-    let m = 0;
-    for (let j = 0; j < len; j++) {
-      const i = remaining[j];
-      if (mark[i]) mark[i] = 0;
-      else remaining[m++] = i;
-    }
-    len = m;
+    len = dropPacked(remaining, len, best.bin.seq, mark);
     remaining = remaining.subarray(0, len);
     yield;
   }
   return { bins, left: Array.from(remaining.subarray(0, len)) };
+}
 
-  function better(p: Problem, used: number, c: Candidate, b: Candidate): boolean {
-    // Closing the job: the cheapest bin that takes everything left.
-    if (closeFirst && c.all !== b.all) return c.all;
-    if (c.all && b.all) return c.cost !== b.cost ? c.cost < b.cost : c.priority !== b.priority ? c.priority < b.priority : c.area < b.area - EPS;
-    const bu = b.bin.used;
-    if (p.objective === 'cost') {
-      // Cost per area of parts placed; free offcuts win outright.
-      const rc = c.cost * bu;
-      const rb = b.cost * used;
-      if (Math.abs(rc - rb) > 1e-9 * Math.max(1, rc, rb)) return rc < rb;
-      if (c.priority !== b.priority) return c.priority < b.priority;
-      return used > bu + EPS;
+/** What every bin of one pool packing is chosen with (`packPoolSteps`' arguments). */
+interface PoolRun {
+  p: Problem;
+  f: BinFiller;
+  avail: number[];
+  rule: number;
+  rng: Rng | null;
+  attempts: number;
+  scratch: Int32Array;
+  closeFirst: boolean;
+}
+
+/** The next bin: every bin type with stock left, each filled in the given order (and perturbed ones), the best kept. */
+function bestNextBin({ p, f, avail, rule, rng, attempts, scratch, closeFirst }: PoolRun, remaining: Int32Array, len: number): Candidate | null {
+  const rules = p.filler.rules;
+  const minArea = smallestArea(p, remaining, len);
+  let best: Candidate | null = null;
+  for (let t = 0; t < p.types.length; t++) {
+    if (avail[t] <= 0) continue;
+    const bt = p.types[t];
+    for (let a = 0; a < (rng ? attempts : 1); a++) {
+      let ord: Int32Array = remaining;
+      let r = rule;
+      if (rng && a > 0) {
+        perturb(rng, remaining, len, scratch, 0.1 + 0.4 * rng());
+        ord = scratch;
+        r = randInt(rng, rules);
+      }
+      fillBin(p, f, t, r, ord, len, minArea);
+      if (f.count === 0) break; // nothing fits this type: no order will change that
+      const c: Candidate = { bin: null as unknown as Bin, all: f.count === len, cost: bt.cost, priority: bt.priority, area: bt.w * bt.h };
+      if (!best || better(p, f.used, c, best, closeFirst)) {
+        c.bin = binFromFiller(f, t);
+        best = c;
+      }
+      if (c.all) break; // every remaining item fits: other orders cannot do better in this type
     }
-    if (Math.abs(used - bu) > EPS) return used > bu;
-    return c.cost !== b.cost ? c.cost < b.cost : c.priority < b.priority;
   }
+  return best;
+}
+
+/** The area of the smallest of the first `len` items of `remaining`. */
+function smallestArea(p: Problem, remaining: Int32Array, len: number): number {
+  let minArea = Infinity;
+  for (let j = 0; j < len; j++) if (p.area[remaining[j]] < minArea) minArea = p.area[remaining[j]];
+  return minArea;
+}
+
+/** Removes the items of `seq` from the first `len` of `remaining` in place, keeping the order; returns how many are left. */
+function dropPacked(remaining: Int32Array, len: number, seq: Int32Array, mark: Uint8Array): number {
+  for (let j = 0; j < seq.length; j++) mark[seq[j]] = 1;
+  let m = 0;
+  for (let j = 0; j < len; j++) {
+    const i = remaining[j];
+    if (mark[i]) mark[i] = 0;
+    else remaining[m++] = i;
+  }
+  return m;
+}
+
+/** Is candidate `c` (its filler having placed `used`) a better next bin than `b`? */
+function better(p: Problem, used: number, c: Candidate, b: Candidate, closeFirst: boolean): boolean {
+  // Closing the job: the cheapest bin that takes everything left.
+  if (closeFirst && c.all !== b.all) return c.all;
+  if (c.all && b.all) return c.cost !== b.cost ? c.cost < b.cost : c.priority !== b.priority ? c.priority < b.priority : c.area < b.area - EPS;
+  const bu = b.bin.used;
+  if (p.objective === 'cost') {
+    // Cost per area of parts placed; free offcuts win outright.
+    const rc = c.cost * bu;
+    const rb = b.cost * used;
+    if (Math.abs(rc - rb) > 1e-9 * Math.max(1, rc, rb)) return rc < rb;
+    if (c.priority !== b.priority) return c.priority < b.priority;
+    return used > bu + EPS;
+  }
+  if (Math.abs(used - bu) > EPS) return used > bu;
+  return c.cost !== b.cost ? c.cost < b.cost : c.priority < b.priority;
 }
