@@ -47,48 +47,7 @@ type AcceptedRow = {
 };
 
 export async function quotingReport(db: Db, f: ReportFilter): Promise<{ periods: QuotingPeriod[]; jobs: QuotedAgainstUsed[] }> {
-  const at = sql.raw('e.at');
-  const [events, deposits, accepted] = await Promise.all([
-    db.execute(sql`
-      select ${periodOf(at, f)} as period, e.kind, count(*)::int as n
-        from (
-          select r.sent_at as at, 'sent' as kind from quote_revisions r where r.shop_id = ${f.shopId} and r.sent_at is not null ${jobIs(sql.raw('r.job_id'), f)}
-          union all
-          select r.answered_at, r.status::text from quote_revisions r where r.shop_id = ${f.shopId} and r.status in ('accepted', 'declined') ${jobIs(sql.raw('r.job_id'), f)}
-          union all
-          -- A quote expires at the start of the day after its last valid day, on the shop's clock.
-          select ((r.valid_until + 1)::timestamp at time zone ${f.timeZone}), 'expired' from quote_revisions r where r.shop_id = ${f.shopId} and r.status = 'expired' ${jobIs(sql.raw('r.job_id'), f)}
-        ) e
-       where ${inRange(at, f)}
-       group by 1, 2`),
-    db.execute(sql`
-      select ${periodOf(at, f)} as period, sum(e.amount)::bigint as minor
-        from (
-          select p.paid_at as at, p.amount_minor as amount from quote_payments p where p.shop_id = ${f.shopId} and p.paid_at is not null ${jobIs(sql.raw('p.job_id'), f)}
-          union all
-          select p.refunded_at, -p.amount_minor from quote_payments p where p.shop_id = ${f.shopId} and p.refunded_at is not null ${jobIs(sql.raw('p.job_id'), f)}
-        ) e
-       where ${inRange(at, f)}
-       group by 1`),
-    // Each job's finished plans summed once (a job may have many plans and several accepted quotes).
-    db.execute(sql`
-      with accepted as (
-        select ${periodOf(sql.raw('r.answered_at'), f)} as period, j.id as job_id, j.name as job_name, q.number, r.revision, r.answered_at,
-               to_char(r.answered_at at time zone ${f.timeZone}, 'YYYY-MM-DD') as accepted_on, r.currency, r.lines,
-               r.markup_material_percent, r.markup_hardware_percent, r.discount, r.tax_percent, r.deposit_percent
-          from quote_revisions r join quotes q on q.id = r.quote_id join jobs j on j.id = r.job_id
-         where r.shop_id = ${f.shopId} and r.status = 'accepted' and ${inRange(sql.raw('r.answered_at'), f)} ${jobIs(sql.raw('r.job_id'), f)}
-      ),
-      used as (
-        select p.job_id, sum(p.cost_cents)::bigint as used, count(*)::int as finished
-          from plans p
-         where p.shop_id = ${f.shopId} and p.status = 'done' and p.job_id in (select job_id from accepted)
-         group by p.job_id
-      )
-      select a.*, u.used, coalesce(u.finished, 0) as finished
-        from accepted a left join used u on u.job_id = a.job_id
-       order by a.answered_at`),
-  ]);
+  const [events, deposits, accepted] = await Promise.all([quoteEvents(db, f), depositsByPeriod(db, f), acceptedQuotes(db, f)]);
 
   const periods = new Map<string, QuotingPeriod>();
   const period = (p: string) =>
@@ -119,4 +78,56 @@ export async function quotingReport(db: Db, f: ReportFilter): Promise<{ periods:
     });
   }
   return { periods: [...periods.values()].sort((a, b) => a.period.localeCompare(b.period)), jobs };
+}
+
+/** Revisions sent, answered and expired, counted per period of the shop's clock. */
+function quoteEvents(db: Db, f: ReportFilter) {
+  const at = sql.raw('e.at');
+  return db.execute(sql`
+    select ${periodOf(at, f)} as period, e.kind, count(*)::int as n
+      from (
+        select r.sent_at as at, 'sent' as kind from quote_revisions r where r.shop_id = ${f.shopId} and r.sent_at is not null ${jobIs(sql.raw('r.job_id'), f)}
+        union all
+        select r.answered_at, r.status::text from quote_revisions r where r.shop_id = ${f.shopId} and r.status in ('accepted', 'declined') ${jobIs(sql.raw('r.job_id'), f)}
+        union all
+        -- A quote expires at the start of the day after its last valid day, on the shop's clock.
+        select ((r.valid_until + 1)::timestamp at time zone ${f.timeZone}), 'expired' from quote_revisions r where r.shop_id = ${f.shopId} and r.status = 'expired' ${jobIs(sql.raw('r.job_id'), f)}
+      ) e
+     where ${inRange(at, f)}
+     group by 1, 2`);
+}
+
+/** Deposits paid less deposits refunded, per period. */
+function depositsByPeriod(db: Db, f: ReportFilter) {
+  const at = sql.raw('e.at');
+  return db.execute(sql`
+    select ${periodOf(at, f)} as period, sum(e.amount)::bigint as minor
+      from (
+        select p.paid_at as at, p.amount_minor as amount from quote_payments p where p.shop_id = ${f.shopId} and p.paid_at is not null ${jobIs(sql.raw('p.job_id'), f)}
+        union all
+        select p.refunded_at, -p.amount_minor from quote_payments p where p.shop_id = ${f.shopId} and p.refunded_at is not null ${jobIs(sql.raw('p.job_id'), f)}
+      ) e
+     where ${inRange(at, f)}
+     group by 1`);
+}
+
+/** The quotes accepted in the range with their jobs, and each job's finished plans summed once (a job may have many plans and several accepted quotes). */
+function acceptedQuotes(db: Db, f: ReportFilter) {
+  return db.execute(sql`
+    with accepted as (
+      select ${periodOf(sql.raw('r.answered_at'), f)} as period, j.id as job_id, j.name as job_name, q.number, r.revision, r.answered_at,
+             to_char(r.answered_at at time zone ${f.timeZone}, 'YYYY-MM-DD') as accepted_on, r.currency, r.lines,
+             r.markup_material_percent, r.markup_hardware_percent, r.discount, r.tax_percent, r.deposit_percent
+        from quote_revisions r join quotes q on q.id = r.quote_id join jobs j on j.id = r.job_id
+       where r.shop_id = ${f.shopId} and r.status = 'accepted' and ${inRange(sql.raw('r.answered_at'), f)} ${jobIs(sql.raw('r.job_id'), f)}
+    ),
+    used as (
+      select p.job_id, sum(p.cost_cents)::bigint as used, count(*)::int as finished
+        from plans p
+       where p.shop_id = ${f.shopId} and p.status = 'done' and p.job_id in (select job_id from accepted)
+       group by p.job_id
+    )
+    select a.*, u.used, coalesce(u.finished, 0) as finished
+      from accepted a left join used u on u.job_id = a.job_id
+     order by a.answered_at`);
 }
