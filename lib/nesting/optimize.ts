@@ -230,15 +230,7 @@ export async function optimize(requestInput: NestRequestInput, options: Optimize
     }
   }
   const done = { ...NOTHING };
-  const report = (current: number, best: Measure = NOTHING) => {
-    const whole = [done, best, ...estimates.slice(current + 1)].reduce(addMeasures, NOTHING);
-    options.onProgress?.({
-      elapsedMs: performance.now() - t0,
-      piecesUsed: whole.pieces,
-      yield: whole.stockArea > 0 ? whole.partArea / whole.stockArea : 0,
-      cost: whole.cost,
-    });
-  };
+  const report = progressReporter(options.onProgress, t0, done, estimates);
 
   const pieces: PlanPiece[] = [];
   const notPlaced: Unplaced[] = [];
@@ -269,4 +261,20 @@ export async function optimize(requestInput: NestRequestInput, options: Optimize
     report(g);
   }
   return assemblePlan(request, pieces, notPlaced, options.signal?.aborted ?? false);
+}
+
+/**
+ * Progress for the whole plan: the groups done, the best so far of the group being searched, and the first-plan
+ * estimate of every group still to come.
+ */
+function progressReporter(onProgress: OptimizeOptions['onProgress'], t0: number, done: Measure, estimates: Measure[]) {
+  return (current: number, best: Measure = NOTHING) => {
+    const whole = [done, best, ...estimates.slice(current + 1)].reduce(addMeasures, NOTHING);
+    onProgress?.({
+      elapsedMs: performance.now() - t0,
+      piecesUsed: whole.pieces,
+      yield: whole.stockArea > 0 ? whole.partArea / whole.stockArea : 0,
+      cost: whole.cost,
+    });
+  };
 }
