@@ -91,19 +91,7 @@ export function route<P = undefined, B = undefined, Q = undefined>(
     const res = await handle(req, context, who, requestId);
     for (const [k, v] of Object.entries(securityHeaders(isHttps(req)))) if (!res.headers.has(k)) res.headers.set(k, v);
     res.headers.set('X-Request-Id', requestId);
-    // One line per request: who and what, never a body, a header or a cookie.
-    log().info(
-      {
-        requestId,
-        method: req.method,
-        route: routeOf(req.nextUrl.pathname),
-        status: res.status,
-        ms: Math.round((performance.now() - started) * 10) / 10,
-        shopId: who.user?.shopId ?? null,
-        userId: who.user?.id ?? null,
-      },
-      'api request',
-    );
+    logRequest(req, res, requestId, started, who.user);
     return res;
   };
 
@@ -143,6 +131,22 @@ export function route<P = undefined, B = undefined, Q = undefined>(
       return NextResponse.json(body, { status, headers });
     }
   }
+}
+
+/** One line per request: who and what, never a body, a header or a cookie. */
+function logRequest(req: NextRequest, res: Response, requestId: string, started: number, user: SessionUser | undefined) {
+  log().info(
+    {
+      requestId,
+      method: req.method,
+      route: routeOf(req.nextUrl.pathname),
+      status: res.status,
+      ms: Math.round((performance.now() - started) * 10) / 10,
+      shopId: user?.shopId ?? null,
+      userId: user?.id ?? null,
+    },
+    'api request',
+  );
 }
 
 export const idParams = z.object({ id: z.uuid() });
