@@ -1,5 +1,5 @@
 import type { ShopScope } from '../scope';
-import { eq, sql } from 'drizzle-orm';
+import { eq, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../open';
 import { stockItems } from '../schema';
 import { periodsBetween, type ReportPeriod } from '@/lib/dates/shop-time';
@@ -246,29 +246,7 @@ export async function stockValueReport(db: Db, f: ReportFilter) {
     starts.map((d) => dayStart(d, f.timeZone)),
     sql`, `,
   )}])`;
-  const [changes, items] = await Promise.all([
-    // Each movement put in its period by comparing its time with the periods' starts on the shop's clock
-    // (width_bucket: 0 before the range, the opening balance; k for the k-th period), not by converting every row.
-    // Sheets and boards by piece (their cost each is worked out below); offcuts, each with a cost of its own, valued
-    // here and summed by material, so the shop's whole rack history is never read into memory.
-    db.execute(sql`
-      select width_bucket(m.created_at, ${bounds}) as bucket, m.stock_item_id as item, o.material as offcut_material,
-             sum(m.quantity)::int as on_hand, sum(m.reserved_change)::int as reserved,
-             coalesce(sum(m.quantity * o.cost_cents), 0)::float8 as offcut_value, coalesce(sum(m.reserved_change * o.cost_cents), 0)::float8 as offcut_reserved
-        from stock_movements m left join offcuts o on o.id = m.offcut_id
-       where m.shop_id = ${f.shopId} and m.created_at < ${dayStart(f.to, f.timeZone)} + interval '1 day'
-       group by 1, 2, 3`),
-    db.select().from(stockItems).where(eq(stockItems.shopId, f.shopId)),
-  ]);
-  const rows = rowsOf<{
-    bucket: number;
-    item: string | null;
-    offcut_material: string | null;
-    on_hand: number;
-    reserved: number;
-    offcut_value: number;
-    offcut_reserved: number;
-  }>(changes);
+  const [rows, items] = await Promise.all([movementsByPeriod(db, f, bounds), db.select().from(stockItems).where(eq(stockItems.shopId, f.shopId))]);
   // Offcuts enter the ledger as one piece per material whose "count" is already in minor units (cost each 1).
   const offcutKey = (material: string) => `offcuts\u0000${material}`;
   const offcutMaterials = [...new Set(rows.flatMap((r) => (r.offcut_material === null ? [] : [r.offcut_material])))];
@@ -286,8 +264,38 @@ export async function stockValueReport(db: Db, f: ReportFilter) {
     })
     .filter((r) => wanted.has(r.pieceId));
   const { points, unknownPieces } = stockValueOverTime(periods, ledger, pieces);
-  // Low on the rack now: free count at or under the size's low mark.
-  const low = items
+  return { points, unknownPieces, low: lowNow(items, f) };
+}
+
+/**
+ * Each movement put in its period by comparing its time with the periods' starts on the shop's clock
+ * (width_bucket: 0 before the range, the opening balance; k for the k-th period), not by converting every row.
+ * Sheets and boards by piece (their cost each is worked out below); offcuts, each with a cost of its own, valued
+ * here and summed by material, so the shop's whole rack history is never read into memory.
+ */
+async function movementsByPeriod(db: Db, f: ReportFilter, bounds: SQL) {
+  return rowsOf<{
+    bucket: number;
+    item: string | null;
+    offcut_material: string | null;
+    on_hand: number;
+    reserved: number;
+    offcut_value: number;
+    offcut_reserved: number;
+  }>(
+    await db.execute(sql`
+    select width_bucket(m.created_at, ${bounds}) as bucket, m.stock_item_id as item, o.material as offcut_material,
+           sum(m.quantity)::int as on_hand, sum(m.reserved_change)::int as reserved,
+           coalesce(sum(m.quantity * o.cost_cents), 0)::float8 as offcut_value, coalesce(sum(m.reserved_change * o.cost_cents), 0)::float8 as offcut_reserved
+      from stock_movements m left join offcuts o on o.id = m.offcut_id
+     where m.shop_id = ${f.shopId} and m.created_at < ${dayStart(f.to, f.timeZone)} + interval '1 day'
+     group by 1, 2, 3`),
+  );
+}
+
+/** Sizes low on the rack now: free count at or under the size's low mark. */
+function lowNow(items: (typeof stockItems.$inferSelect)[], f: ReportFilter) {
+  return items
     .filter((i) => (!f.material || i.material === f.material) && i.lowStockAt > 0 && i.onHand - i.reserved <= i.lowStockAt)
     .map((i) => ({
       id: i.id,
@@ -301,5 +309,4 @@ export async function stockValueReport(db: Db, f: ReportFilter) {
       lowStockAt: i.lowStockAt,
     }))
     .sort((a, b) => a.material.localeCompare(b.material) || a.thicknessMm - b.thicknessMm);
-  return { points, unknownPieces, low };
 }
