@@ -19,8 +19,6 @@ export const packTwoStage: PackFn = async (items, bins, options) => {
   const result: PackResult = { bins: [], unplaced: [] };
   const left = new Map(bins.map((b) => [b.id, b.count]));
   const order = [...bins].sort((a, b) => a.priority - b.priority || a.cost / (a.w * a.h) - b.cost / (b.w * b.h) || b.w * b.h - a.w * a.h);
-  const fitsBin = (it: PackItem, b: (typeof bins)[number], rotated: boolean) =>
-    rotated ? it.h <= b.w + EPS && it.w <= b.h + EPS : it.w <= b.w + EPS && it.h <= b.h + EPS;
   let rest: PackItem[] = [];
   for (const it of items) {
     const straight = bins.some((b) => fitsBin(it, b, false));
@@ -36,32 +34,7 @@ export const packTwoStage: PackFn = async (items, bins, options) => {
     }
     const count = left.get(bin.id);
     if (count !== null && count !== undefined) left.set(bin.id, count - 1);
-    // Each part as it lies: straight when it fits so, else turned.
-    const oriented: Oriented[] = rest
-      .map((item) =>
-        fitsBin(item, bin, false)
-          ? { item, w: item.w, h: item.h, rotated: false }
-          : item.canRotate && fitsBin(item, bin, true)
-            ? { item, w: item.h, h: item.w, rotated: true }
-            : null,
-      )
-      .filter((o): o is Oriented => o !== null)
-      .sort((a, b) => b.h - a.h || b.w - a.w);
-    const placed: PackedItem[] = [];
-    const used = new Set<number>();
-    let y = 0;
-    for (const first of oriented) {
-      if (used.has(first.item.id) || y + first.h > bin.h + EPS) continue;
-      const stripH = first.h;
-      let x = 0;
-      for (const o of oriented) {
-        if (used.has(o.item.id) || Math.abs(o.h - stripH) > EPS || x + o.w > bin.w + EPS) continue;
-        placed.push({ itemId: o.item.id, rect: { x, y, w: o.w, h: o.h }, rotated: o.rotated });
-        used.add(o.item.id);
-        x += o.w + kerf;
-      }
-      y += stripH + kerf;
-    }
+    const { placed, used } = stripsInBin(orientedFor(rest, bin), bin, kerf);
     const tree = findGuillotineTree(
       { x: 0, y: 0, w: bin.w, h: bin.h },
       placed.map((p) => ({ ...p.rect, itemId: p.itemId, rotated: p.rotated })),
@@ -75,3 +48,42 @@ export const packTwoStage: PackFn = async (items, bins, options) => {
   }
   return result;
 };
+
+type Bin = Parameters<PackFn>[1][number];
+
+const fitsBin = (it: PackItem, b: Bin, rotated: boolean) =>
+  rotated ? it.h <= b.w + EPS && it.w <= b.h + EPS : it.w <= b.w + EPS && it.h <= b.h + EPS;
+
+/** Each part as it lies in this bin: straight when it fits so, else turned (where grain allows); tallest first. */
+function orientedFor(rest: PackItem[], bin: Bin): Oriented[] {
+  return rest
+    .map((item) =>
+      fitsBin(item, bin, false)
+        ? { item, w: item.w, h: item.h, rotated: false }
+        : item.canRotate && fitsBin(item, bin, true)
+          ? { item, w: item.h, h: item.w, rotated: true }
+          : null,
+    )
+    .filter((o): o is Oriented => o !== null)
+    .sort((a, b) => b.h - a.h || b.w - a.w);
+}
+
+/** Full-length strips, each opened by the tallest part left and filled with parts of exactly its width, first fit. */
+function stripsInBin(oriented: Oriented[], bin: Bin, kerf: number) {
+  const placed: PackedItem[] = [];
+  const used = new Set<number>();
+  let y = 0;
+  for (const first of oriented) {
+    if (used.has(first.item.id) || y + first.h > bin.h + EPS) continue;
+    const stripH = first.h;
+    let x = 0;
+    for (const o of oriented) {
+      if (used.has(o.item.id) || Math.abs(o.h - stripH) > EPS || x + o.w > bin.w + EPS) continue;
+      placed.push({ itemId: o.item.id, rect: { x, y, w: o.w, h: o.h }, rotated: o.rotated });
+      used.add(o.item.id);
+      x += o.w + kerf;
+    }
+    y += stripH + kerf;
+  }
+  return { placed, used };
+}
