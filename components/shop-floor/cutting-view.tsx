@@ -1,7 +1,7 @@
 'use client';
 
 import Link from 'next/link';
-import { useEffect, useEffectEvent, useMemo, useState } from 'react';
+import { useEffect, useEffectEvent, useMemo, useState, useSyncExternalStore } from 'react';
 import { ApiError } from '@/client/api';
 import { NARROW_HOW } from '@/lib/saw-order/describe-step';
 import type { PieceView } from '@/lib/saw-order/piece-views';
@@ -50,6 +50,12 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
   const onDoneKey = useEffectEvent(() => {
     if (current && !tickOf(pieceIndex, current.text.n)) set(current.text.n, true);
   });
+  // The hint offers Space only once the key works: in the browser after hydration, not in the page's first HTML.
+  const spaceWorks = useSyncExternalStore(
+    noSubscription,
+    () => true,
+    () => false,
+  );
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {
       if (e.code !== 'Space' || e.repeat || e.altKey || e.ctrlKey || e.metaKey || e.shiftKey) return;
@@ -188,7 +194,7 @@ export function CuttingView({ planId, views, initial, canFinish }: Props) {
                 </button>
               )}
               <p className="text-sm text-graphite-mute" data-testid="cutting-hints">
-                {!currentTick && (
+                {!currentTick && spaceWorks && (
                   <>
                     Or press <kbd className="rounded border border-paper-edge bg-paper px-1.5 font-mono text-graphite">Space</kbd> for Done.{' '}
                   </>
@@ -297,3 +303,6 @@ function WakeNote({ state }: { state: WakeState }) {
   if (state === 'unsupported') return <span data-testid="wake-state">This browser cannot keep the screen awake: set its screen timeout longer.</span>;
   return null;
 }
+
+/** Nothing to listen to: whether the page runs in the browser does not change. */
+const noSubscription = () => () => {};

@@ -119,6 +119,8 @@ test('Space ticks the cut on screen, once, and says so; a focused control keeps 
   await page.goto(`/shop-floor/${await kitchenPlanId(page)}`);
   const done = page.getByRole('button', { name: /^Done — cut \d+$/ });
   const n = Number((await done.textContent())!.match(/\d+/)![0]);
+  // The hint offers Space once the key is live (the page's script has taken over from its first HTML).
+  await expect(page.getByTestId('cutting-hints')).toContainText('Space');
   await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
   const saved = page.waitForResponse((r) => r.url().includes('/steps') && r.request().method() === 'POST' && r.status() === 200);
   await page.keyboard.press('Space');
