@@ -1,5 +1,6 @@
 'use client';
 
+import { PART_KEYS } from '@/shared/part-fields';
 import { useState } from 'react';
 import { ApiError } from '@/client/api';
 import { snapThickness, type StockOffer } from '@/lib/cut-list/stock-match';
@@ -131,17 +132,7 @@ export function useUndoableDeletes(add: ReturnType<typeof usePartMutations>['add
   return { deleted, lastDeleted, deleteRow, undoDelete, forget: () => setDeleted([]) };
 }
 
-/** A row's values, to add again (a copy, or a deleted row put back). */
+/** A row's values, to add again (a copy, or a deleted row put back): every field of the part table, nothing else. */
 export function duplicateOf(p: ListedPart): PartInput {
-  return {
-    label: p.label,
-    quantity: p.quantity,
-    lengthMm: p.lengthMm,
-    widthMm: p.widthMm,
-    thicknessMm: p.thicknessMm,
-    material: p.material,
-    grain: p.grain,
-    jointAllowanceMm: p.jointAllowanceMm,
-    notes: p.notes,
-  };
+  return Object.fromEntries(PART_KEYS.map((k) => [k, p[k]])) as PartInput;
 }

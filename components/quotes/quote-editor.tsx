@@ -8,26 +8,29 @@ import { formatMoney, toMinorUnits } from '@/lib/costing/money';
 import { quoteTotals, type QuoteTotals } from '@/lib/costing/quote-totals';
 import { moneyText } from '@/components/settings/pricing-form-values';
 import type { HardwareItem } from '@/shared/schemas/pricing';
-import type { QuoteDiscount, QuoteLine, QuoteRevisionStatus } from '@/shared/schemas/quote';
+import type { QuoteDiscount, QuoteLine } from '@/shared/schemas/quote';
+import type { QuoteRevisionView } from '@/shared/wire/quotes';
 import { customerCopy } from '@/lib/quotes/customer-copy';
 import { CustomerQuoteView, type CustomerQuoteProps } from './customer-quote-view';
 
-export interface EditorRevision {
-  id: string;
-  title: string;
-  status: QuoteRevisionStatus;
-  latest: boolean;
-  currency: string;
-  lines: QuoteLine[];
-  markupMaterialPercent: number;
-  markupHardwarePercent: number;
-  discount: QuoteDiscount;
-  taxPercent: number;
-  depositPercent: number;
-  validityDays: number;
-  terms: string;
-  validUntil: string | null;
-}
+/** What the editor shows and edits of a revision. */
+export type EditorRevision = Pick<
+  QuoteRevisionView,
+  | 'id'
+  | 'title'
+  | 'status'
+  | 'latest'
+  | 'currency'
+  | 'lines'
+  | 'markupMaterialPercent'
+  | 'markupHardwarePercent'
+  | 'discount'
+  | 'taxPercent'
+  | 'depositPercent'
+  | 'validityDays'
+  | 'terms'
+  | 'validUntil'
+>;
 
 type Row = QuoteLine & { qtyText: string; costText: string };
 const KIND_LABEL = { material: 'Material', hardware: 'Hardware', labour: 'Labour', other: 'Other' } as const;

@@ -6,6 +6,7 @@ import { notFound } from '@/lib/errors';
 import { customers, jobs, parts, plans, recuts } from '../schema';
 import { readPlan } from '@/lib/nesting';
 import { recutLabel } from '@/lib/recuts/recuts';
+import { recutSize } from './recuts';
 import { stockPieceName } from '@/lib/nesting/saw-order';
 
 /**
@@ -37,12 +38,7 @@ async function recutAsPart(db: Db, shopId: string, id: string) {
     shopId: r.shopId,
     jobId: r.jobId,
     label: `${recutLabel(r)} · re-cut`,
-    quantity: r.quantity,
-    lengthMm: r.lengthMm,
-    widthMm: r.widthMm,
-    thicknessMm: r.thicknessMm,
-    material: r.material,
-    grain: r.grain,
+    ...recutSize(r),
     jointAllowanceMm: r.jointAllowanceMm,
     notes: r.reason,
     drawerScheduleId: null,

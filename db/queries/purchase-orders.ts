@@ -1,9 +1,10 @@
 import type { Scope, ShopScope } from '../scope';
+import type { PurchaseOrderLineView, PurchaseOrderView } from '@/shared/wire/buying';
 import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { plans, purchaseOrderLines, purchaseOrders, shops, stockItems, stockMovements, suppliers } from '../schema';
 import { groupBySupplier, lowStockOrders, piecesToBuy, type SupplierOrder } from '@/lib/buying/order-lines';
-import { poNumber, type DescribedSize, type PoStatus } from '@/lib/buying/describe';
+import { poNumber, type PoStatus } from '@/lib/buying/describe';
 import { costEachCents } from '@/lib/stock/pricing';
 import { quoteNominal } from '@/lib/quotes/quote-text';
 import { isLowStock } from '@/lib/stock/low-stock';
@@ -15,43 +16,7 @@ import { invalid, notFound, conflict } from '@/lib/errors';
 /** Statuses of an order still to come in: its sizes are "on order". */
 export const OPEN_STATUSES = ['draft', 'sent', 'part-received'] as const satisfies readonly PoStatus[];
 
-/** A line of an order: the stock size it is for (as `describeSize` reads it) and its figures. */
-export interface PurchaseOrderLineView extends DescribedSize {
-  id: string;
-  stockItemId: string;
-  /** The stock room's cost now (each, or per board foot), to compare with the order's. */
-  stockCostCents: number;
-  onHand: number;
-  quantity: number;
-  /** Each sheet, or per board foot for boards. */
-  unitCostCents: number;
-  /** One piece at this order's unit cost (a board: its board feet × the price). */
-  costEachCents: number;
-  totalCents: number;
-  received: number;
-}
-
-export interface PurchaseOrderView {
-  id: string;
-  number: number;
-  title: string;
-  supplier: string;
-  supplierEmail: string;
-  status: PoStatus;
-  source: 'plan' | 'low-stock' | 'manual';
-  planId: string | null;
-  planName: string | null;
-  jobId: string | null;
-  currency: string;
-  note: string;
-  sentAt: string | null;
-  receivedAt: string | null;
-  cancelledAt: string | null;
-  createdAt: string;
-  updatedAt: string;
-  lines: PurchaseOrderLineView[];
-  totalCents: number;
-}
+export type { PurchaseOrderLineView, PurchaseOrderView };
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 

@@ -1,4 +1,5 @@
 import type { Scope, ShopScope } from '../scope';
+import type { QuoteRevisionView } from '@/shared/wire/quotes';
 import { and, desc, eq, ne, sql } from 'drizzle-orm';
 import type { Db } from '../open';
 import { jobs, parts, plans, quoteRevisions, quotes, shops } from '../schema';
@@ -31,40 +32,7 @@ import { invalid, notFound, conflict } from '@/lib/errors';
 
 type RevisionRow = typeof quoteRevisions.$inferSelect;
 
-export interface QuoteRevisionView {
-  id: string;
-  quoteId: string;
-  jobId: string;
-  /** Q-0007 rev B */
-  title: string;
-  number: string;
-  revision: string;
-  status: RevisionRow['status'];
-  latest: boolean;
-  planId: string | null;
-  currency: string;
-  lines: RevisionRow['lines'];
-  markupMaterialPercent: number;
-  markupHardwarePercent: number;
-  discount: RevisionRow['discount'];
-  taxPercent: number;
-  depositPercent: number;
-  validityDays: number;
-  terms: string;
-  sentAt: string | null;
-  /** The last day the quote holds (the sending day in the shop's zone + validity), once sent. */
-  validUntil: string | null;
-  createdAt: string;
-  /** The revision's state as its row was read (so an edit can be refused if it changed meanwhile). */
-  updatedAt: string;
-  /** The customer's answer on their page: when, and the name typed to accept or the reason given to decline. */
-  answeredAt: string | null;
-  acceptedName: string | null;
-  declineReason: string | null;
-  /** When the deposit was paid (null while unpaid, or refunded). */
-  depositPaidAt: string | null;
-  totals: QuoteTotals;
-}
+export type { QuoteRevisionView };
 
 /** A revision's totals, by the rules of lib/costing/RULES.md. */
 export function revisionTotals(
@@ -195,7 +163,7 @@ async function drawerFacts(db: Db, shopId: string, jobId: string, describe: (mm:
 /** Makes a job's new quote (the shop's next number, rev A) with lines built from the job and, if named, one of its plans. */
 export async function createQuote(scope: Scope, jobId: string, planId: string | null): Promise<QuoteRevisionView> {
   await refuseForeignPlan(scope, jobId, planId);
-  const [{ lines }, priced] = await Promise.all([draftQuoteLines(scope, jobId, planId), getPricing(scope)]);
+  const { lines, priced } = await draftQuoteLines(scope, jobId, planId);
   const id = await insertQuote(scope, { jobId, planId, lines, ...priced });
   return getRevision(scope, id);
 }
@@ -215,10 +183,11 @@ async function refuseForeignPlan({ db, shopId }: ShopScope, jobId: string, planI
   if (!plan) throw invalid('That plan is not one of this job’s (or it was cancelled).', { planId: ['Pick one of the job’s plans.'] });
 }
 
-/** The first draft's lines: the plan's takeoff, the drawer schedules' hardware and labour counts, at the shop's prices. */
+/** The first draft's lines (the plan's takeoff, the drawer schedules' hardware and labour counts) and the shop's prices they use. */
 async function draftQuoteLines(scope: ShopScope, jobId: string, planId: string | null) {
   const { db, shopId } = scope;
-  const [settings, { pricing }, hardware] = await Promise.all([getShopSettings(scope), getPricing(scope), listHardware(scope)]);
+  const [settings, priced, hardware] = await Promise.all([getShopSettings(scope), getPricing(scope), listHardware(scope)]);
+  const { pricing } = priced;
   const describe = (mm: number) => quoteLength(mm, settings.units);
   const [takeoff, drawers, [faces], plan] = await Promise.all([
     planId ? getTakeoff(scope, jobId, planId) : null,
@@ -249,7 +218,7 @@ async function draftQuoteLines(scope: ShopScope, jobId: string, planId: string |
     describeSize: (t) =>
       `${t.material} ${t.nominalThickness ? quoteNominal(t.nominalThickness) : describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
   });
-  return { lines };
+  return { lines, priced };
 }
 
 /** Numbers the quote (the next of the shop's) and stores its revision 0 with the shop's current terms. */

@@ -12,6 +12,16 @@ const sourcePlans = aliasedTable(plans, 'source_plans');
 const recutPlans = aliasedTable(plans, 'recut_plans');
 const closers = aliasedTable(users, 'closers');
 
+/** A re-cut's size and material, as the damaged part had them. */
+export const recutSize = (r: typeof recuts.$inferSelect) => ({
+  quantity: r.quantity,
+  lengthMm: r.lengthMm,
+  widthMm: r.widthMm,
+  thicknessMm: r.thicknessMm,
+  material: r.material,
+  grain: r.grain,
+});
+
 /** The job's re-cut list: open ones first (oldest first, the order they were damaged), then the closed ones, newest first. */
 export async function listRecuts({ db, shopId }: ShopScope, jobId: string): Promise<RecutView[]> {
   const rows = await db
@@ -40,12 +50,7 @@ export async function listRecuts({ db, shopId }: ShopScope, jobId: string): Prom
     id: r.id,
     label: r.label,
     instance: r.instance,
-    quantity: r.quantity,
-    lengthMm: r.lengthMm,
-    widthMm: r.widthMm,
-    thicknessMm: r.thicknessMm,
-    material: r.material,
-    grain: r.grain,
+    ...recutSize(r),
     reason: r.reason,
     status: r.status,
     sourcePlan: r.sourcePlanId && sourceName ? { id: r.sourcePlanId, name: sourceName } : null,

@@ -1,16 +1,8 @@
 import { quoteLength, quoteNominal } from '@/lib/quotes/quote-text';
 import type { ShopUnits } from '@/shared/schemas/units';
+import type { DescribedSize, PurchaseOrderStatus } from '@/shared/wire/buying';
 
-export interface DescribedSize {
-  kind: 'sheet' | 'board';
-  material: string;
-  nominalThickness: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
-  surfacing: string;
-  grade: string;
-}
+export type { DescribedSize };
 
 /**
  * A stock size as a purchase order writes it, in the shop's unit with quarters as glyphs (the screen and the PDF's
@@ -35,5 +27,5 @@ export const PO_STATUS_LABELS = {
   'part-received': 'Part received',
   received: 'Received',
   cancelled: 'Cancelled',
-} as const;
-export type PoStatus = keyof typeof PO_STATUS_LABELS;
+} as const satisfies Record<PurchaseOrderStatus, string>;
+export type PoStatus = PurchaseOrderStatus;

@@ -2,10 +2,8 @@ import type { StockKind } from './stock';
 
 export type PurchaseOrderStatus = 'draft' | 'sent' | 'part-received' | 'received' | 'cancelled';
 
-/** A line of an order: the stock size it is for and its figures. */
-export interface PurchaseOrderLineView {
-  id: string;
-  stockItemId: string;
+/** A stock size as a purchase order names it (lib/buying/describe.ts writes it out in the shop's unit). */
+export interface DescribedSize {
   kind: StockKind;
   material: string;
   nominalThickness: string;
@@ -14,6 +12,12 @@ export interface PurchaseOrderLineView {
   widthMm: number;
   surfacing: string;
   grade: string;
+}
+
+/** A line of an order: the stock size it is for and its figures. */
+export interface PurchaseOrderLineView extends DescribedSize {
+  id: string;
+  stockItemId: string;
   /** The stock room's cost now (each, or per board foot), to compare with the order's. */
   stockCostCents: number;
   onHand: number;
