@@ -143,53 +143,76 @@ export function PurchaseOrderEditor({
   const receiveRows = order.lines.filter((l) => (receiving[l.id] ?? '').trim() !== '');
   const receiveOk = receiveRows.length > 0 && receiveRows.every((l) => /^\s*\d+\s*$/.test(receiving[l.id]));
 
+  // A phone shows a finished order's lines without the unit cost, so each line fits; the PDF and wider screens have it.
+  const unitCostCell = editable || receivable ? '' : 'hidden sm:table-cell';
+
   return (
     <div className="grid gap-4">
-      <fieldset className="card grid gap-3 p-4 sm:grid-cols-2" disabled={!editable}>
-        <legend className="sr-only">Supplier</legend>
-        <div>
-          <label htmlFor="po-supplier" className="field-label">
-            Supplier
-          </label>
-          <input id="po-supplier" className="field-input" value={supplier} onChange={(e) => setSupplier(e.target.value)} />
-          {fields.supplier && <p className="field-error">{fields.supplier[0]}</p>}
-        </div>
-        <div>
-          <label htmlFor="po-email" className="field-label">
-            Supplier’s e-mail
-          </label>
-          <input
-            id="po-email"
-            type="email"
-            className="field-input"
-            value={email}
-            onChange={(e) => setEmail(e.target.value)}
-            placeholder={editable ? 'orders@supplier.example' : ''}
-          />
-          {fields.supplierEmail && <p className="field-error">{fields.supplierEmail[0]}</p>}
-        </div>
-        <div className="sm:col-span-2">
-          <label htmlFor="po-note" className="field-label">
-            Note for the supplier
-          </label>
-          <textarea
-            id="po-note"
-            rows={2}
-            className="field-input"
-            value={note}
-            onChange={(e) => setNote(e.target.value)}
-            placeholder={editable ? 'Delivery by Friday, please' : ''}
-          />
-        </div>
-      </fieldset>
+      {editable ? (
+        <fieldset className="card grid gap-3 p-4 sm:grid-cols-2">
+          <legend className="sr-only">Supplier</legend>
+          <div>
+            <label htmlFor="po-supplier" className="field-label">
+              Supplier
+            </label>
+            <input id="po-supplier" className="field-input" value={supplier} onChange={(e) => setSupplier(e.target.value)} />
+            {fields.supplier && <p className="field-error">{fields.supplier[0]}</p>}
+          </div>
+          <div>
+            <label htmlFor="po-email" className="field-label">
+              Supplier’s e-mail
+            </label>
+            <input
+              id="po-email"
+              type="email"
+              className="field-input"
+              value={email}
+              onChange={(e) => setEmail(e.target.value)}
+              placeholder={editable ? 'orders@supplier.example' : ''}
+            />
+            {fields.supplierEmail && <p className="field-error">{fields.supplierEmail[0]}</p>}
+          </div>
+          <div className="sm:col-span-2">
+            <label htmlFor="po-note" className="field-label">
+              Note for the supplier
+            </label>
+            <textarea
+              id="po-note"
+              rows={2}
+              className="field-input"
+              value={note}
+              onChange={(e) => setNote(e.target.value)}
+              placeholder={editable ? 'Delivery by Friday, please' : ''}
+            />
+          </div>
+        </fieldset>
+      ) : (
+        // A sent, received or cancelled order's supplier details are what went out: shown, not offered for editing.
+        <dl className="card grid gap-3 p-4 sm:grid-cols-2">
+          <div>
+            <dt className="field-label">Supplier</dt>
+            <dd>{order.supplier}</dd>
+          </div>
+          <div>
+            <dt className="field-label">Supplier’s e-mail</dt>
+            <dd className="break-all">{order.supplierEmail || '—'}</dd>
+          </div>
+          {order.note && (
+            <div className="sm:col-span-2">
+              <dt className="field-label">Note for the supplier</dt>
+              <dd className="whitespace-pre-line">{order.note}</dd>
+            </div>
+          )}
+        </dl>
+      )}
 
       <div className="card overflow-x-auto">
-        <table className="data-table min-w-[40rem]" aria-label="Order lines">
+        <table className={`data-table ${editable || receivable ? 'min-w-[40rem]' : ''}`} aria-label="Order lines">
           <thead>
             <tr>
               <th>Stock size</th>
               <th className="num">Qty</th>
-              <th className="num">Unit cost</th>
+              <th className={`num ${unitCostCell}`}>Unit cost</th>
               <th className="num">Amount</th>
               {order.status !== 'draft' && <th className="num">Received</th>}
               {receivable && <th className="num">Receiving now</th>}
@@ -254,9 +277,9 @@ export function PurchaseOrderEditor({
                   const open = l.quantity - l.received;
                   return (
                     <tr key={l.id}>
-                      <td className="min-w-[16rem]">{s?.description}</td>
+                      <td className={receivable ? 'min-w-[16rem]' : ''}>{s?.description}</td>
                       <td className="num">{l.quantity}</td>
-                      <td className="num">
+                      <td className={`num ${unitCostCell}`}>
                         {money(l.unitCostCents)} <span className="text-xs text-graphite-mute">/ {s?.kind === 'board' ? 'bd ft' : 'sheet'}</span>
                       </td>
                       <td className="num">{money(l.totalCents)}</td>
@@ -296,7 +319,7 @@ export function PurchaseOrderEditor({
             <tr>
               <td className="font-medium">Total</td>
               <td />
-              <td />
+              <td className={unitCostCell} />
               <td className="num font-semibold" data-testid="po-total">
                 {money(editable ? draftTotal : order.totalCents)}
               </td>

@@ -93,7 +93,7 @@ export function PartRow({
         );
       })}
       {canWrite && (
-        <td className="whitespace-nowrap">
+        <td className="whitespace-nowrap px-1">
           <button
             type="button"
             className="px-1 text-xs text-graphite-mute hover:text-graphite"
@@ -203,7 +203,7 @@ export function NewPartRow({
           </td>
         );
       })}
-      <td>
+      <td className="px-1">
         <button type="button" className="px-1 text-xs font-medium text-oak-deep" onClick={onAdd}>
           Add
         </button>
@@ -222,7 +222,7 @@ const CELL_CH: Record<Column, number> = {
   material: 11,
   grain: 8,
   jointAllowanceMm: 6,
-  notes: 10,
+  notes: 9,
 };
 
 /**

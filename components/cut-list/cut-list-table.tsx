@@ -88,7 +88,7 @@ export function CutListTable({
               </th>
             ))}
             {canWrite && (
-              <th>
+              <th className="px-1">
                 <span className="sr-only">Row actions</span>
               </th>
             )}
