@@ -27,9 +27,9 @@ import { buildIfNeeded, startServer, waitForHealth } from './serve';
 const log = (s = '') => process.stdout.write(`${s}\n`);
 const MAPLE_23_32 = (23 / 32) * 25.4; // ≈3/4″ maple ply as the demo rack stocks it
 const ROWS = [
-  { label: 'Drawer side', quantity: 160, lengthMm: 400, widthMm: 120 },
-  { label: 'Drawer front', quantity: 100, lengthMm: 380, widthMm: 110 },
-  { label: 'Shelf cleat', quantity: 80, lengthMm: 300, widthMm: 60 },
+  { label: 'Drawer side', quantity: 160, length: 400, width: 120 },
+  { label: 'Drawer front', quantity: 100, length: 380, width: 110 },
+  { label: 'Shelf cleat', quantity: 80, length: 300, width: 60 },
 ];
 const MOVES = 120;
 /** In the page: the live check has answered for the layout as it stands. */
@@ -95,7 +95,7 @@ async function makePlan(page: Page, url: string): Promise<{ planId: string; plan
   for (const row of ROWS) {
     const res = await page.request.post(`${url}/api/jobs/${job.id}/parts`, {
       headers,
-      data: { ...row, thicknessMm: MAPLE_23_32, material: 'Maple ply', grain: 'any' },
+      data: { ...row, thickness: MAPLE_23_32, material: 'Maple ply', grain: 'any' },
     });
     if (res.status() !== 201) throw new Error(`adding parts failed: ${res.status()} ${await res.text()}`);
   }

@@ -16,21 +16,21 @@ import { optimize } from '@/lib/nesting';
 import { inches } from '@/lib/units/length';
 import { nestRequestSchema } from '@/shared/schemas/nesting';
 
-const MAPLE = { material: 'Maple ply', thicknessMm: inches(23 / 32) };
-const BIRCH_12 = { material: 'Baltic birch', thicknessMm: 12 };
-const BIRCH_6 = { material: 'Baltic birch', thicknessMm: 6 };
+const MAPLE = { material: 'Maple ply', thickness: inches(23 / 32) };
+const BIRCH_12 = { material: 'Baltic birch', thickness: 12 };
+const BIRCH_6 = { material: 'Baltic birch', thickness: 6 };
 const part = (
   label: string,
   quantity: number,
   l: number,
   w: number,
-  stock: { material: string; thicknessMm: number },
+  stock: { material: string; thickness: number },
   grain: 'along-length' | 'any' = 'along-length',
 ) => ({
   label,
   quantity,
-  lengthMm: inches(l),
-  widthMm: inches(w),
+  length: inches(l),
+  width: inches(w),
   ...stock,
   grain,
 });

@@ -5,13 +5,12 @@
  * its column in the schema).
  */
 export const PART_FIELDS = [
-  { key: 'label', field: 'label', title: 'Part', csv: 'Part', spoken: 'name', kind: 'text', required: true, scheduleOwned: true },
-  { key: 'quantity', field: 'quantity', title: 'Qty', csv: 'Quantity', spoken: 'quantity', kind: 'count', required: true, scheduleOwned: true },
-  { key: 'lengthMm', field: 'length', title: 'Length', csv: 'Length', spoken: 'length', kind: 'length', required: true, scheduleOwned: true },
-  { key: 'widthMm', field: 'width', title: 'Width', csv: 'Width', spoken: 'width', kind: 'length', required: true, scheduleOwned: true },
+  { key: 'label', title: 'Part', csv: 'Part', spoken: 'name', kind: 'text', required: true, scheduleOwned: true },
+  { key: 'quantity', title: 'Qty', csv: 'Quantity', spoken: 'quantity', kind: 'count', required: true, scheduleOwned: true },
+  { key: 'length', title: 'Length', csv: 'Length', spoken: 'length', kind: 'length', required: true, scheduleOwned: true },
+  { key: 'width', title: 'Width', csv: 'Width', spoken: 'width', kind: 'length', required: true, scheduleOwned: true },
   {
-    key: 'thicknessMm',
-    field: 'thickness',
+    key: 'thickness',
     title: 'Thickness',
     csv: 'Thickness',
     spoken: 'thickness',
@@ -19,11 +18,10 @@ export const PART_FIELDS = [
     required: true,
     scheduleOwned: true,
   },
-  { key: 'material', field: 'material', title: 'Material', csv: 'Material', spoken: 'material', kind: 'text', required: true, scheduleOwned: true },
-  { key: 'grain', field: 'grain', title: 'Grain', csv: 'Grain', spoken: 'grain', kind: 'grain', required: false, scheduleOwned: true },
+  { key: 'material', title: 'Material', csv: 'Material', spoken: 'material', kind: 'text', required: true, scheduleOwned: true },
+  { key: 'grain', title: 'Grain', csv: 'Grain', spoken: 'grain', kind: 'grain', required: false, scheduleOwned: true },
   {
-    key: 'jointAllowanceMm',
-    field: 'jointAllowance',
+    key: 'jointAllowance',
     title: 'Joint allow.',
     csv: 'Joint allowance',
     spoken: 'joint allowance',
@@ -31,14 +29,14 @@ export const PART_FIELDS = [
     required: false,
     scheduleOwned: true,
   },
-  { key: 'notes', field: 'notes', title: 'Notes', csv: 'Notes', spoken: 'notes', kind: 'text', required: false, scheduleOwned: false },
+  { key: 'notes', title: 'Notes', csv: 'Notes', spoken: 'notes', kind: 'text', required: false, scheduleOwned: false },
 ] as const;
 
 export type PartFieldRow = (typeof PART_FIELDS)[number];
-/** A part's property (`lengthMm`), as the grid and the database name it. */
+/** A part's property (`length`), as the grid, the upload and the database name it. */
 export type PartKey = PartFieldRow['key'];
-/** An uploaded column's field (`length`: the unit is the file's, not always mm). */
-export type UploadField = PartFieldRow['field'];
+/** An uploaded column's field: a part's property (an uploaded length is in the file's unit until it is read). */
+export type UploadField = PartKey;
 
 type FieldOf<K extends keyof PartFieldRow, Where> = Extract<PartFieldRow, Where>[K];
 const keysWhere = <W extends Partial<PartFieldRow>>(where: W) =>
@@ -51,11 +49,9 @@ export const SCHEDULE_OWNED_KEYS = keysWhere({ scheduleOwned: true }) as readonl
 /** Fields held as lengths (typed in any unit, stored in mm). */
 export const LENGTH_KEYS = keysWhere({ kind: 'length' }) as readonly PartKey[];
 /** The upload's fields, in the template's order (a file without a header is read in this order). */
-export const UPLOAD_FIELDS = PART_FIELDS.map((f) => f.field) as readonly UploadField[];
+export const UPLOAD_FIELDS = PART_KEYS;
 /** An uploaded row cannot become a part without these. */
-export const REQUIRED_UPLOAD_FIELDS = PART_FIELDS.filter((f) => f.required).map((f) => f.field) as readonly UploadField[];
+export const REQUIRED_UPLOAD_FIELDS = PART_FIELDS.filter((f) => f.required).map((f) => f.key) as readonly UploadField[];
 
 const byKey = new Map<string, PartFieldRow>(PART_FIELDS.map((f) => [f.key, f]));
-const byField = new Map<string, PartFieldRow>(PART_FIELDS.map((f) => [f.field, f]));
 export const partField = (key: PartKey): PartFieldRow => byKey.get(key)!;
-export const uploadField = (field: UploadField): PartFieldRow => byField.get(field)!;

@@ -7,11 +7,11 @@ const METRIC = { system: 'metric', precision: 1, feet: false } as const;
 
 describe('a cut list cell reads what was typed in the shop’s unit', () => {
   test.each([
-    ['lengthMm', '19 3/4', IMPERIAL, inches(19.75)],
-    ['lengthMm', '1\' 7-3/4"', IMPERIAL, inches(19.75)],
-    ['lengthMm', '502 mm', IMPERIAL, 502],
-    ['widthMm', '50.2cm', METRIC, 502],
-    ['jointAllowanceMm', '', IMPERIAL, 0],
+    ['length', '19 3/4', IMPERIAL, inches(19.75)],
+    ['length', '1\' 7-3/4"', IMPERIAL, inches(19.75)],
+    ['length', '502 mm', IMPERIAL, 502],
+    ['width', '50.2cm', METRIC, 502],
+    ['jointAllowance', '', IMPERIAL, 0],
     ['quantity', ' 12 ', METRIC, 12],
     ['material', '  Maple ply ', METRIC, 'Maple ply'],
   ] as const)('%s “%s” → %s (25.4 mm to the inch, NIST SP 811)', (column, text, units, value) => {
@@ -24,8 +24,8 @@ describe('a cut list cell reads what was typed in the shop’s unit', () => {
   test.each([
     ['quantity', '2.5', 'whole number'],
     ['quantity', '0', 'at least 1'],
-    ['lengthMm', 'three', '"three" is not a length'],
-    ['lengthMm', '0', 'greater than zero'],
+    ['length', 'three', '"three" is not a length'],
+    ['length', '0', 'greater than zero'],
     ['label', '   ', 'Give the part a name'],
   ] as const)('%s “%s” is refused on the cell: %s', (column, text, message) => {
     const parsed = parseCell(column, text, METRIC);
@@ -34,8 +34,8 @@ describe('a cut list cell reads what was typed in the shop’s unit', () => {
   });
 
   test('a stock thickness shows exactly; a joint allowance of zero shows empty', () => {
-    const part = { label: 'x', quantity: 1, lengthMm: 500, widthMm: 300, thicknessMm: 18, material: 'MDF', jointAllowanceMm: 0, notes: '' };
-    expect(cellText(part, 'thicknessMm', IMPERIAL)).toBe('18 mm');
-    expect(cellText(part, 'jointAllowanceMm', IMPERIAL)).toBe('');
+    const part = { label: 'x', quantity: 1, length: 500, width: 300, thickness: 18, material: 'MDF', jointAllowance: 0, notes: '' };
+    expect(cellText(part, 'thickness', IMPERIAL)).toBe('18 mm');
+    expect(cellText(part, 'jointAllowance', IMPERIAL)).toBe('');
   });
 });

@@ -18,9 +18,9 @@ export const isLengthColumn = (c: Column) => LENGTH_COLUMNS.has(c);
 /** What a cell shows for a stored value. */
 export function cellText(part: Pick<Part, TextColumn>, column: TextColumn, units: ShopUnits): string {
   const value = part[column];
-  if (column === 'jointAllowanceMm') return (value as number) > 0 ? formatLength(value as number, units) : '';
+  if (column === 'jointAllowance') return (value as number) > 0 ? formatLength(value as number, units) : '';
   // Thickness comes from the stock room (18 mm, 23/32″): shown exactly, never as a rounded fraction.
-  if (column === 'thicknessMm') return exactLengthText(value as number, units);
+  if (column === 'thickness') return exactLengthText(value as number, units);
   if (isLengthColumn(column)) return formatLength(value as number, units);
   return String(value);
 }
@@ -37,7 +37,7 @@ export function parseCell(column: TextColumn, text: string, units: ShopUnits): C
     if (!/^\d+$/.test(text.trim())) return { ok: false, error: 'Quantity must be a whole number.' };
     value = Number(text.trim());
   } else if (isLengthColumn(column)) {
-    if (column === 'jointAllowanceMm' && text.trim() === '') value = 0;
+    if (column === 'jointAllowance' && text.trim() === '') value = 0;
     else {
       const parsed = parseLength(text, { unit: shopLengthUnit(units) });
       if (!parsed.ok) return { ok: false, error: parsed.error };

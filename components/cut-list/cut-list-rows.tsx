@@ -21,7 +21,7 @@ const isNumeric = (column: Column) => isLengthColumn(column) || column === 'quan
 
 /** The datalist a cell suggests from: the stock room's materials, or the thicknesses it has of the row's material. */
 const listOf = (column: Column, material: string) =>
-  column === 'material' ? 'cut-list-materials' : column === 'thicknessMm' ? `cut-list-thickness-${slug(material)}` : undefined;
+  column === 'material' ? 'cut-list-materials' : column === 'thickness' ? `cut-list-thickness-${slug(material)}` : undefined;
 
 export const slug = (s: string) =>
   s
@@ -216,12 +216,12 @@ export function NewPartRow({
 const CELL_CH: Record<Column, number> = {
   label: 12,
   quantity: 3,
-  lengthMm: 8,
-  widthMm: 8,
-  thicknessMm: 8,
+  length: 8,
+  width: 8,
+  thickness: 8,
   material: 11,
   grain: 8,
-  jointAllowanceMm: 6,
+  jointAllowance: 6,
   notes: 9,
 };
 

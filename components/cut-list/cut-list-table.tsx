@@ -73,7 +73,7 @@ export function CutListTable({
       </datalist>
       {materials.map((m) => (
         <datalist key={m} id={`cut-list-thickness-${slug(m)}`}>
-          {[...new Map(offersOf(offers, m).map((o) => [exactLengthText(o.thicknessMm, units), o])).entries()].map(([value, o]) => (
+          {[...new Map(offersOf(offers, m).map((o) => [exactLengthText(o.thickness, units), o])).entries()].map(([value, o]) => (
             <option key={value} value={value} label={`${o.nominal || value} ${o.kind}`} />
           ))}
         </datalist>

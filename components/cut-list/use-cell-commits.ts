@@ -22,12 +22,12 @@ export type Draft = Record<TextColumn, string> & { grain: GrainRule };
 export const emptyDraft = (carry?: Partial<Draft>): Draft => ({
   label: '',
   quantity: '1',
-  lengthMm: '',
-  widthMm: '',
-  thicknessMm: carry?.thicknessMm ?? '',
+  length: '',
+  width: '',
+  thickness: carry?.thickness ?? '',
   material: carry?.material ?? '',
   grain: carry?.grain ?? 'along-length',
-  jointAllowanceMm: '',
+  jointAllowance: '',
   notes: '',
 });
 
@@ -70,7 +70,7 @@ export function useCellCommits(jobId: string, offers: StockOffer[], units: ShopU
     const values = readDraft(draft, units, setError);
     if (!values) return false;
     add.mutate(
-      { ...values, thicknessMm: snapThickness(values.material, values.thicknessMm, offers) },
+      { ...values, thickness: snapThickness(values.material, values.thickness, offers) },
       { onError: (e) => setError(errorKey(DRAFT, 'label'), e instanceof ApiError ? (Object.values(e.fields).flat()[0] ?? e.message) : NOT_SAVED) },
     );
     // Material, thickness and grain carry over: rows of one material are usually typed together.
@@ -83,8 +83,8 @@ export function useCellCommits(jobId: string, offers: StockOffer[], units: ShopU
 
 /** A cell's new value as a patch; a nominal thickness ("3/4") becomes the stock's actual one, so the part nests on it. */
 function patchOf(part: ListedPart, column: TextColumn, value: unknown, offers: StockOffer[]): PartPatch {
-  if (column === 'thicknessMm') return { thicknessMm: snapThickness(part.material, value as number, offers) };
-  if (column === 'material') return { material: value as string, thicknessMm: snapThickness(value as string, part.thicknessMm, offers) };
+  if (column === 'thickness') return { thickness: snapThickness(part.material, value as number, offers) };
+  if (column === 'material') return { material: value as string, thickness: snapThickness(value as string, part.thickness, offers) };
   return { [column]: value };
 }
 
@@ -95,7 +95,7 @@ function readDraft(draft: Draft, units: ShopUnits, setError: (key: string, messa
   for (const column of COLUMNS) {
     if (column === 'grain') continue;
     const text = draft[column];
-    if ((column === 'notes' || column === 'jointAllowanceMm') && text.trim() === '') {
+    if ((column === 'notes' || column === 'jointAllowance') && text.trim() === '') {
       setError(errorKey(DRAFT, column), null);
       continue;
     }

@@ -8,7 +8,7 @@ const schedule = (bottom: object) =>
   drawerScheduleSchema.parse({
     label: 'Test',
     quantity: 1,
-    size: { from: 'box', widthMm: inches(14), heightMm: inches(5), depthMm: inches(20) },
+    size: { from: 'box', width: inches(14), height: inches(5), depth: inches(20) },
     bottom,
   });
 
@@ -27,7 +27,7 @@ describe('solid-wood drawer bottoms', () => {
 
   // FPL Wood Handbook eq. 13-2 with C_T = 0.00365 (white oak, table 13-5): 20″ × 0.00365 × 6 % ≈ 0.44″, far past a 1/16″ groove play.
   test('a 20″ flatsawn white oak bottom in a groove is warned about (FPL Wood Handbook, eq. 13-2)', () => {
-    const warning = bottomMovementWarning(schedule({ mount: 'groove', material: 'White oak', thicknessMm: inches(1 / 4) }), inches(20), UNITS);
+    const warning = bottomMovementWarning(schedule({ mount: 'groove', material: 'White oak', thickness: inches(1 / 4) }), inches(20), UNITS);
     expect(warning).toContain('white oak');
     expect(warning).toContain('0.438″');
   });

@@ -32,19 +32,19 @@ export function speciesOf(material: string): { species: SpeciesId; cut: SawnCut 
  * grooved one has only its clearance to move in. The bottom's grain runs side to side, so it moves front to back
  * across its width (the part's width).
  */
-export function bottomMovementWarning(schedule: DrawerSchedule, bottomWidthMm: number, units: ShopUnits): string | null {
+export function bottomMovementWarning(schedule: DrawerSchedule, bottomWidth: number, units: ShopUnits): string | null {
   const solid = speciesOf(schedule.bottom.material);
   if (!solid) return null;
-  const play = schedule.bottom.mount === 'groove' ? schedule.bottom.groove.clearanceMm : 0;
+  const play = schedule.bottom.mount === 'groove' ? schedule.bottom.groove.clearance : 0;
   return movementWarning(
     {
       species: solid.species,
       cut: solid.cut,
-      widthMm: bottomWidthMm,
+      width: bottomWidth,
       mcFrom: INDOOR_MC.from,
       mcTo: INDOOR_MC.to,
       fixedAcrossWidth: true,
-      ...(play > 0 ? { thresholdMm: play } : {}),
+      ...(play > 0 ? { threshold: play } : {}),
     },
     units,
   );

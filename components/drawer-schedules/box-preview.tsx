@@ -14,12 +14,12 @@ const labelWidth = (text: string) => [...text].length * LABEL * 0.62;
 export function BoxPreview({ box, t, units }: { box: SizedBox; t: { front: number; back: number; side: number }; units: ShopUnits }) {
   const len = (mm: number) => formatLength(mm, units);
   const pad = 28;
-  const scale = 220 / Math.max(box.widthMm, box.depthMm, box.heightMm);
-  const W = box.widthMm * scale;
-  const D = box.depthMm * scale;
-  const H = box.heightMm * scale;
-  const wall = box.heightMm - box.wallHeightMm;
-  const [width, depth, height] = [len(box.widthMm), len(box.depthMm), len(box.heightMm)];
+  const scale = 220 / Math.max(box.width, box.depth, box.height);
+  const W = box.width * scale;
+  const D = box.depth * scale;
+  const H = box.height * scale;
+  const wall = box.height - box.wallHeight;
+  const [width, depth, height] = [len(box.width), len(box.depth), len(box.height)];
   // Bottom labels are centred under the views: a view narrower than its label gets room either side.
   const side = Math.max(0, (labelWidth(width) - W) / 2);
   const gap = Math.max(pad * 2, labelWidth(depth) + 16 + side * 2);

@@ -91,8 +91,8 @@ export function DrawerSchedulesSection({ jobId, units, canWrite }: { jobId: stri
               <div className="mr-auto">
                 <p className="font-semibold">{s.label}</p>
                 <p className="text-sm text-graphite-mute">
-                  {s.input.quantity} × {s.input.size.from === 'opening' ? 'opening' : 'box'} {len(s.input.size.widthMm)} ×{' '}
-                  {len(s.input.size.heightMm)} × {len(s.input.size.depthMm)} · {JOINT_NAMES[s.input.joint.method]} · {s.partRows} rows in the cut list
+                  {s.input.quantity} × {s.input.size.from === 'opening' ? 'opening' : 'box'} {len(s.input.size.width)} × {len(s.input.size.height)} ×{' '}
+                  {len(s.input.size.depth)} · {JOINT_NAMES[s.input.joint.method]} · {s.partRows} rows in the cut list
                 </p>
               </div>
               {canWrite && (

@@ -10,9 +10,9 @@ const METRIC = { system: 'metric', precision: 1, feet: false } as const;
 
 /** Baltic birch as it is sold: metric sheets named by the nearest inch size (common practice, no source). */
 const BALTIC_BIRCH: StockOffer[] = [
-  { material: 'Baltic birch', kind: 'sheet', thicknessMm: 18, nominal: '3/4"' },
-  { material: 'Baltic birch', kind: 'sheet', thicknessMm: 12, nominal: '1/2"' },
-  { material: 'Baltic birch', kind: 'sheet', thicknessMm: 6, nominal: '1/4"' },
+  { material: 'Baltic birch', kind: 'sheet', thickness: 18, nominal: '3/4"' },
+  { material: 'Baltic birch', kind: 'sheet', thickness: 12, nominal: '1/2"' },
+  { material: 'Baltic birch', kind: 'sheet', thickness: 6, nominal: '1/4"' },
 ];
 
 function sizeDefaults(offers: StockOffer[]) {
@@ -27,7 +27,7 @@ describe('a new drawer schedule with the form’s defaults', () => {
   test('takes ¾″, ½″ and ¼″ Baltic birch as the stock room’s 18, 12 and 6 mm sheets, so every part has stock', () => {
     const { text, sized } = sizeDefaults(BALTIC_BIRCH);
     expect([text.frontThickness, text.sideThickness, text.bottomThickness]).toEqual(['18 mm', '12 mm', '6 mm']);
-    expect(new Set(sized.parts.map((p) => p.thicknessMm))).toEqual(new Set([18, 12, 6]));
+    expect(new Set(sized.parts.map((p) => p.thickness))).toEqual(new Set([18, 12, 6]));
     for (const part of sized.parts) expect(stockMatchWarning(part, BALTIC_BIRCH, IMPERIAL)).toBeNull();
   });
 
@@ -37,10 +37,10 @@ describe('a new drawer schedule with the form’s defaults', () => {
     const bottom = sized.parts.find((p) => p.role === 'bottom')!;
     // Opening 22″ deep → the longest standard slide that fits behind ½″ clearance is 20″ (RULES.md), and the lock
     // rabbet leaves face left = t/2 − ⅛″ of each 18 mm front (RULES.md; ⅛″ on ½″, ¼″ on ¾″ stock): side = 20″ − 2 × 5.825 mm.
-    expect(side.lengthMm).toBeCloseTo(inches(20) - 2 * (18 / 2 - inches(1 / 8)), 9);
+    expect(side.length).toBeCloseTo(inches(20) - 2 * (18 / 2 - inches(1 / 8)), 9);
     // Inside width = box width − 2 × 12 mm; the bottom is inside + 2 × ¼″ groove depth − 1/16″ (RULES.md, bottom).
     const boxWidth = inches(14) - 2 * inches(1 / 2);
-    expect(bottom.lengthMm).toBeCloseTo(boxWidth - 2 * 12 + 2 * inches(1 / 4) - inches(1 / 16), 9);
+    expect(bottom.length).toBeCloseTo(boxWidth - 2 * 12 + 2 * inches(1 / 4) - inches(1 / 16), 9);
   });
 
   test('keeps the nominal thicknesses when the stock room has none of the material', () => {
@@ -62,16 +62,16 @@ describe('one carcass sized in a metric shop and an imperial shop', () => {
   test('a metric shop gets metric slides by default: 12.5 mm per side and a 500 mm slide, so the box is 539 mm wide and 500 mm long (derived from common practice; metric lengths from memory)', () => {
     const { text, sized } = size(METRIC, { width: '564', height: '200', depth: '560' });
     expect(text.slideSeries).toBe('metric');
-    expect(sized.box.widthMm).toBeCloseTo(539, 9);
-    expect(sized.box.depthMm).toBeCloseTo(500, 9);
-    expect(sized.parts.find((p) => p.role === 'side')!.lengthMm).toBeLessThanOrEqual(500);
+    expect(sized.box.width).toBeCloseTo(539, 9);
+    expect(sized.box.depth).toBeCloseTo(500, 9);
+    expect(sized.parts.find((p) => p.role === 'side')!.length).toBeLessThanOrEqual(500);
   });
 
   test('an imperial shop gets imperial slides by default: ½″ per side and a 20″ slide for the same carcass (common practice, no source)', () => {
     const { text, sized } = size(IMPERIAL, { width: '564 mm', height: '200 mm', depth: '560 mm' });
     expect(text.slideSeries).toBe('imperial');
-    expect(sized.box.widthMm).toBeCloseTo(564 - 2 * inches(1 / 2), 9);
-    expect(sized.box.depthMm).toBeCloseTo(inches(20), 9);
+    expect(sized.box.width).toBeCloseTo(564 - 2 * inches(1 / 2), 9);
+    expect(sized.box.depth).toBeCloseTo(inches(20), 9);
   });
 
   test('a metric slide can be chosen in an imperial shop, and the choice is what is saved', () => {
@@ -86,7 +86,7 @@ describe('one carcass sized in a metric shop and an imperial shop', () => {
     const input = toScheduleInput(scheduleFormSchema('in').parse(text));
     expect(input.slide).toEqual({ type: 'side-mount', series: 'metric' });
     const sized = sizeDrawerSchedule(drawerScheduleSchema.parse(input));
-    expect(sized.ok && sized.box.depthMm).toBeCloseTo(500, 9);
+    expect(sized.ok && sized.box.depth).toBeCloseTo(500, 9);
   });
 });
 
@@ -96,13 +96,13 @@ describe('slide models in the schedule form', () => {
     id: '7d0c4f1e-2a3b-4c5d-8e9f-0a1b2c3d4e5f',
     kind: 'undermount' as const,
     name: 'Halbrook UM-58',
-    lengthsMm: [12, 15, 18, 21].map(inches),
+    lengths: [12, 15, 18, 21].map(inches),
     widthRule: 'inside' as const,
-    widthDeductionMm: inches(1 + 5 / 8),
-    maxSideThicknessMm: inches(5 / 8),
-    bottomRecessMm: inches(1 / 2),
-    heightClearanceMm: inches(3 / 4),
-    rearClearanceMm: inches(5 / 8),
+    widthDeduction: inches(1 + 5 / 8),
+    maxSideThickness: inches(5 / 8),
+    bottomRecess: inches(1 / 2),
+    heightClearance: inches(3 / 4),
+    rearClearance: inches(5 / 8),
   };
   const text = {
     ...emptySchedule(IMPERIAL),
@@ -132,15 +132,15 @@ describe('slide models in the schedule form', () => {
     expect(input.slide).toEqual({ type: 'undermount', model: MODEL });
     const sized = sizeDrawerSchedule(drawerScheduleSchema.parse(input));
     if (!sized.ok) throw new Error(JSON.stringify(sized.errors));
-    expect(sized.box.widthMm).toBeCloseTo(inches(14 + 3 / 8), 9);
-    expect(sized.box.depthMm).toBeCloseTo(inches(21), 9);
+    expect(sized.box.width).toBeCloseTo(inches(14 + 3 / 8), 9);
+    expect(sized.box.depth).toBeCloseTo(inches(21), 9);
   });
 
   test('a schedule whose model was deleted since still offers the rule it was saved with', () => {
     const saved = drawerScheduleSchema.parse({
       label: 'Old',
       quantity: 1,
-      size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 560 },
+      size: { from: 'opening', width: 400, height: 150, depth: 560 },
       slide: { type: 'undermount', model: MODEL },
     });
     const choices = slideModelChoices([], saved);
@@ -158,13 +158,13 @@ describe('lipped fronts in the schedule form', () => {
       [],
       'in',
     );
-    expect(inch.front).toEqual({ style: 'lipped', fit: 'overlay', overlayMm: inches(3 / 8) });
+    expect(inch.front).toEqual({ style: 'lipped', fit: 'overlay', overlay: inches(3 / 8) });
     const mm = toScheduleInput(
       scheduleFormSchema('mm').parse({ ...emptySchedule(METRIC), label: 'L', width: '564', height: '200', depth: '560', frontStyle: 'lipped' }),
       [],
       'mm',
     );
-    expect(mm.front).toEqual({ style: 'lipped', fit: 'overlay', overlayMm: 10 });
+    expect(mm.front).toEqual({ style: 'lipped', fit: 'overlay', overlay: 10 });
   });
 
   test('a reveal typed in is kept, and a saved lipped front reads back into the same fields', () => {
@@ -179,7 +179,7 @@ describe('lipped fronts in the schedule form', () => {
       frontLipAmount: '1/8',
     };
     const saved = drawerScheduleSchema.parse(toScheduleInput(scheduleFormSchema('in').parse(text), [], 'in'));
-    expect(saved.front).toEqual({ style: 'lipped', fit: 'reveal', revealMm: inches(1 / 8) });
+    expect(saved.front).toEqual({ style: 'lipped', fit: 'reveal', reveal: inches(1 / 8) });
     expect(fromSchedule(saved, IMPERIAL)).toMatchObject({ frontStyle: 'lipped', frontFit: 'reveal', frontLipAmount: '1/8″' });
   });
 
@@ -187,10 +187,10 @@ describe('lipped fronts in the schedule form', () => {
     const old = drawerScheduleSchema.parse({
       label: 'Old',
       quantity: 1,
-      size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) },
-      front: { style: 'lipped', lipMm: inches(1 / 2) },
+      size: { from: 'opening', width: inches(15), height: inches(7), depth: inches(22) },
+      front: { style: 'lipped', lip: inches(1 / 2) },
     });
-    expect(old.front).toEqual({ style: 'lipped', fit: 'lip', lipMm: inches(1 / 2) });
+    expect(old.front).toEqual({ style: 'lipped', fit: 'lip', lip: inches(1 / 2) });
     expect(fromSchedule(old, IMPERIAL)).toMatchObject({ frontFit: 'lip', frontLipAmount: '1/2″' });
   });
 });

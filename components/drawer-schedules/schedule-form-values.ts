@@ -22,17 +22,17 @@ import { lengthInput, type ShopUnits } from '@/shared/schemas/units';
  * nested schedule `lib/joinery` sizes, and `FIELD_OF_PATH` puts the sizing errors back on the field that caused them.
  */
 export const JOINT_PARAM: Partial<
-  Record<JointMethod, { key: string; label: string; defaultMm: number; byFront?: { mm: (frontMm: number) => number; rule: string } }>
+  Record<JointMethod, { key: string; label: string; defaultValue: number; byFront?: { mm: (front: number) => number; rule: string } }>
 > = {
   'lock-rabbet': {
-    key: 'faceLeftMm',
+    key: 'faceLeft',
     label: 'Face left outside the tongue',
-    defaultMm: D.lockRabbetFaceLeft,
+    defaultValue: D.lockRabbetFaceLeft,
     byFront: { mm: lockRabbetFaceLeft, rule: 'half the front’s thickness less ⅛″' },
   },
-  'rabbet-and-dado': { key: 'dadoDepthMm', label: 'Dado depth', defaultMm: D.dadoDepth },
-  'half-blind-dovetail': { key: 'lapMm', label: 'Lap', defaultMm: D.dovetailLap },
-  'box-joint': { key: 'fingerWidthMm', label: 'Finger width', defaultMm: D.boxJointFinger },
+  'rabbet-and-dado': { key: 'dadoDepth', label: 'Dado depth', defaultValue: D.dadoDepth },
+  'half-blind-dovetail': { key: 'lap', label: 'Lap', defaultValue: D.dovetailLap },
+  'box-joint': { key: 'fingerWidth', label: 'Finger width', defaultValue: D.boxJointFinger },
 };
 
 const optionalLength = (unit: LengthUnit) => z.union([z.literal(''), lengthInput(unit)]).transform((v) => (v === '' ? undefined : v));
@@ -97,8 +97,8 @@ export type ScheduleFormValues = z.output<ReturnType<typeof scheduleFormSchema>>
 
 /** The rule the schedule keeps: the model's fields as Shop settings holds them, nothing of the form's. */
 function ruleOf(choice: SlideModelChoice): SlideModelRule {
-  const { id, kind, name, lengthsMm, widthRule, widthDeductionMm, maxSideThicknessMm, bottomRecessMm, heightClearanceMm, rearClearanceMm } = choice;
-  return { id, kind, name, lengthsMm, widthRule, widthDeductionMm, maxSideThicknessMm, bottomRecessMm, heightClearanceMm, rearClearanceMm };
+  const { id, kind, name, lengths, widthRule, widthDeduction, maxSideThickness, bottomRecess, heightClearance, rearClearance } = choice;
+  return { id, kind, name, lengths, widthRule, widthDeduction, maxSideThickness, bottomRecess, heightClearance, rearClearance };
 }
 
 /** The slide the schedule is sized on: a model carries its whole rule into the schedule. */
@@ -111,12 +111,12 @@ function slideInput(v: ScheduleFormValues, models: readonly SlideModelChoice[]):
 
 /** A lipped front's default overlay or reveal, in the shop's own system (⅜″ / 10 mm overlay, 1/16″ / 1.5 mm reveal). */
 export const lipDefaultMm = (fit: 'overlay' | 'reveal', unit: LengthUnit) =>
-  LIPPED_FRONT_DEFAULTS[unit === 'mm' ? 'metric' : 'imperial'][fit === 'overlay' ? 'overlayMm' : 'revealMm'];
+  LIPPED_FRONT_DEFAULTS[unit === 'mm' ? 'metric' : 'imperial'][fit === 'overlay' ? 'overlay' : 'reveal'];
 
 function lippedInput(v: ScheduleFormValues, unit: LengthUnit): DrawerScheduleInput['front'] {
-  if (v.frontFit === 'lip') return { style: 'lipped', fit: 'lip', ...(v.frontLipAmount !== undefined ? { lipMm: v.frontLipAmount } : {}) };
+  if (v.frontFit === 'lip') return { style: 'lipped', fit: 'lip', ...(v.frontLipAmount !== undefined ? { lip: v.frontLipAmount } : {}) };
   const amount = v.frontLipAmount ?? lipDefaultMm(v.frontFit, unit);
-  return v.frontFit === 'overlay' ? { style: 'lipped', fit: 'overlay', overlayMm: amount } : { style: 'lipped', fit: 'reveal', revealMm: amount };
+  return v.frontFit === 'overlay' ? { style: 'lipped', fit: 'overlay', overlay: amount } : { style: 'lipped', fit: 'reveal', reveal: amount };
 }
 
 export function toScheduleInput(v: ScheduleFormValues, models: readonly SlideModelChoice[] = [], unit: LengthUnit = 'in'): DrawerScheduleInput {
@@ -124,12 +124,12 @@ export function toScheduleInput(v: ScheduleFormValues, models: readonly SlideMod
   return {
     label: v.label,
     quantity: v.quantity,
-    size: { from: v.sizeFrom, widthMm: v.width, heightMm: v.height, depthMm: v.depth },
+    size: { from: v.sizeFrom, width: v.width, height: v.height, depth: v.depth },
     slide: slideInput(v, models),
     joint: { method: v.jointMethod, ...(param && v.jointParam !== undefined ? { [param.key]: v.jointParam } : {}) } as DrawerScheduleInput['joint'],
-    thickness: { frontMm: v.frontThickness, sideMm: v.sideThickness, ...(v.backThickness !== undefined ? { backMm: v.backThickness } : {}) },
+    thickness: { front: v.frontThickness, side: v.sideThickness, ...(v.backThickness !== undefined ? { back: v.backThickness } : {}) },
     front: v.frontStyle === 'lipped' ? lippedInput(v, unit) : { style: v.frontStyle },
-    bottom: { mount: v.bottomMount, thicknessMm: v.bottomThickness, material: v.bottomMaterial },
+    bottom: { mount: v.bottomMount, thickness: v.bottomThickness, material: v.bottomMaterial },
     materials: { sides: v.sidesMaterial, ...(v.frontMaterial ? { front: v.frontMaterial } : {}) },
   };
 }
@@ -142,25 +142,23 @@ export function fromSchedule(s: DrawerSchedule, units: ShopUnits): ScheduleFormT
     label: s.label,
     quantity: String(s.quantity),
     sizeFrom: s.size.from,
-    width: len(s.size.widthMm),
-    height: len(s.size.heightMm),
-    depth: len(s.size.depthMm),
+    width: len(s.size.width),
+    height: len(s.size.height),
+    depth: len(s.size.depth),
     slideType: s.slide.type,
     slideSeries: s.slide.type === 'side-mount' ? s.slide.series : shopSlideSeries(units),
     slideModel: (s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model?.id : undefined) ?? '',
     jointMethod: s.joint.method,
     jointParam: param ? len((s.joint as Record<string, unknown>)[param.key] as number | undefined) : '',
-    frontThickness: len(s.thickness.frontMm),
-    sideThickness: len(s.thickness.sideMm),
-    backThickness: len(s.thickness.backMm),
+    frontThickness: len(s.thickness.front),
+    sideThickness: len(s.thickness.side),
+    backThickness: len(s.thickness.back),
     frontStyle: s.front.style,
     frontFit: s.front.style === 'lipped' ? s.front.fit : 'overlay',
     frontLipAmount:
-      s.front.style === 'lipped'
-        ? len(s.front.fit === 'overlay' ? s.front.overlayMm : s.front.fit === 'reveal' ? s.front.revealMm : s.front.lipMm)
-        : '',
+      s.front.style === 'lipped' ? len(s.front.fit === 'overlay' ? s.front.overlay : s.front.fit === 'reveal' ? s.front.reveal : s.front.lip) : '',
     bottomMount: s.bottom.mount,
-    bottomThickness: len(s.bottom.thicknessMm),
+    bottomThickness: len(s.bottom.thickness),
     bottomMaterial: s.bottom.material,
     sidesMaterial: s.materials.sides,
     frontMaterial: s.materials.front ?? '',
@@ -233,22 +231,22 @@ export function fieldOfPath(path: string): keyof ScheduleFormText {
   const table: Record<string, keyof ScheduleFormText> = {
     label: 'label',
     quantity: 'quantity',
-    'size.widthMm': 'width',
-    'size.heightMm': 'height',
-    'size.depthMm': 'depth',
+    'size.width': 'width',
+    'size.height': 'height',
+    'size.depth': 'depth',
     'size.depthRule': 'depth',
-    'thickness.frontMm': 'frontThickness',
-    'thickness.sideMm': 'sideThickness',
-    'thickness.backMm': 'backThickness',
+    'thickness.front': 'frontThickness',
+    'thickness.side': 'sideThickness',
+    'thickness.back': 'backThickness',
     'front.style': 'frontStyle',
     'front.fit': 'frontFit',
-    'front.overlayMm': 'frontLipAmount',
-    'front.revealMm': 'frontLipAmount',
-    'front.lipMm': 'frontLipAmount',
+    'front.overlay': 'frontLipAmount',
+    'front.reveal': 'frontLipAmount',
+    'front.lip': 'frontLipAmount',
     'slide.series': 'slideSeries',
     'slide.model': 'slideModel',
     'bottom.mount': 'bottomMount',
-    'bottom.thicknessMm': 'bottomThickness',
+    'bottom.thickness': 'bottomThickness',
     'bottom.material': 'bottomMaterial',
     'materials.sides': 'sidesMaterial',
     'materials.front': 'frontMaterial',

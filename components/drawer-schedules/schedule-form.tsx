@@ -222,13 +222,13 @@ export function ScheduleForm({
           }
         })()
       : undefined;
-  const paramDefault = byFront ?? param?.defaultMm;
+  const paramDefault = byFront ?? param?.defaultValue;
   const paramHint =
     param && paramDefault !== undefined
       ? `Blank: ${len(paramDefault)}${byFront !== undefined && front.ok ? ` for a ${exactLengthText(front.mm, units)} front (${param.byFront!.rule})` : ''}.`
       : undefined;
   const depthHint = chosenModel
-    ? `Box depth: the longest ${chosenModel.name} that fits ${exactLengthText(chosenModel.rearClearanceMm, units)} from the back; the box is as long as its slide.`
+    ? `Box depth: the longest ${chosenModel.name} that fits ${exactLengthText(chosenModel.rearClearance, units)} from the back; the box is as long as its slide.`
     : values.slideType === 'side-mount'
       ? `Box depth: the longest ${values.slideSeries ?? 'imperial'} slide that fits.`
       : values.slideType === 'undermount'
@@ -245,7 +245,7 @@ export function ScheduleForm({
         : 'For a box given by its size: how far the front runs past each side.';
   const sized = live?.sized.ok ? live.sized : null;
   const bottom = sized?.parts.find((p) => p.role === 'bottom');
-  const movement = live?.schedule && bottom ? bottomMovementWarning(live.schedule, bottom.widthMm, units) : null;
+  const movement = live?.schedule && bottom ? bottomMovementWarning(live.schedule, bottom.width, units) : null;
   const cardKeys = sized?.setupCardKeys ?? [];
   // Joints are sized on the thickness given: stock of another actual thickness would not fit them.
   const stockWarnings = sized && offers.length ? [...new Set(sized.parts.flatMap((p) => stockMatchWarning(p, offers, units) ?? []))] : [];
@@ -281,8 +281,8 @@ export function ScheduleForm({
                 <p className="field-error">{modelMessage}</p>
               ) : chosenModel ? (
                 <p className="mt-1 text-xs text-graphite-mute">
-                  {widthRuleText(chosenModel, units, exact)}; height − {exact(chosenModel.heightClearanceMm)};{' '}
-                  {chosenModel.maxSideThicknessMm === null ? 'any sides' : `sides up to ${exact(chosenModel.maxSideThicknessMm)}`}.
+                  {widthRuleText(chosenModel, units, exact)}; height − {exact(chosenModel.heightClearance)};{' '}
+                  {chosenModel.maxSideThickness === null ? 'any sides' : `sides up to ${exact(chosenModel.maxSideThickness)}`}.
                 </p>
               ) : null}
               {values.slideType === 'undermount' && kindModels.length === 0 && (
@@ -299,7 +299,7 @@ export function ScheduleForm({
           {field('height', values.sizeFrom === 'box' ? 'Box height' : 'Opening height')}
           {field('depth', values.sizeFrom === 'box' ? 'Box depth' : 'Opening depth', { hint: values.sizeFrom === 'opening' ? depthHint : undefined })}
           {select('jointMethod', 'Joint', Object.fromEntries(JOINT_METHODS.map((m) => [m, JOINT_NAMES[m]])))}
-          {param ? field('jointParam', param.label, { placeholder: len(paramDefault ?? param.defaultMm), hint: paramHint }) : <div />}
+          {param ? field('jointParam', param.label, { placeholder: len(paramDefault ?? param.defaultValue), hint: paramHint }) : <div />}
           {select('frontStyle', 'Box front', {
             flush: 'Flush (the box front is the face)',
             lipped: 'Lipped (hides the slides)',
@@ -352,9 +352,9 @@ export function ScheduleForm({
               <BoxPreview
                 box={sized.box}
                 t={{
-                  front: live.schedule.thickness.frontMm,
-                  back: live.schedule.thickness.backMm ?? live.schedule.thickness.frontMm,
-                  side: live.schedule.thickness.sideMm,
+                  front: live.schedule.thickness.front,
+                  back: live.schedule.thickness.back ?? live.schedule.thickness.front,
+                  side: live.schedule.thickness.side,
                 }}
                 units={units}
               />
@@ -377,11 +377,11 @@ export function ScheduleForm({
                       <tr key={p.role}>
                         <td>{ROLE_NAMES[p.role]}</td>
                         <td className="num">{p.quantity}</td>
-                        <td className="num whitespace-nowrap">{len(p.lengthMm)}</td>
-                        <td className="num whitespace-nowrap">{len(p.widthMm)}</td>
-                        <td className="num whitespace-nowrap">{exactLengthText(p.thicknessMm, units)}</td>
+                        <td className="num whitespace-nowrap">{len(p.length)}</td>
+                        <td className="num whitespace-nowrap">{len(p.width)}</td>
+                        <td className="num whitespace-nowrap">{exactLengthText(p.thickness, units)}</td>
                         <td>{p.material}</td>
-                        <td className="num">{p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '—'}</td>
+                        <td className="num">{p.jointAllowance > 0 ? len(p.jointAllowance) : '—'}</td>
                       </tr>
                     ))}
                   </tbody>
@@ -442,7 +442,7 @@ export function ScheduleForm({
                   const card = saved ?? fallback ?? { ...key, fields: [], note: 'Save the settings for this joint on the Setup cards page.' };
                   return (
                     <SetupCardView
-                      key={`${key.joint}-${key.stockThicknessMm}`}
+                      key={`${key.joint}-${key.stockThickness}`}
                       card={card}
                       units={units}
                       source={saved ? 'saved' : fallback ? 'default' : 'missing'}

@@ -35,7 +35,7 @@ export function ThicknessPicker({
   error?: string;
 }) {
   const parsed = value.trim() ? parseLength(value, { unit }) : null;
-  const chosen = parsed?.ok ? choices.find((c) => Math.abs(c.thicknessMm - parsed.mm) <= THICKNESS_MATCH_TOLERANCE_MM) : undefined;
+  const chosen = parsed?.ok ? choices.find((c) => Math.abs(c.thickness - parsed.mm) <= THICKNESS_MATCH_TOLERANCE_MM) : undefined;
   const [typing, setTyping] = useState(false);
   const selected = sameAs && !value.trim() && !typing ? SAME : chosen && !typing ? chosen.text : OTHER;
   const showInput = choices.length === 0 || selected === OTHER;

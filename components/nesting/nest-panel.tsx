@@ -117,10 +117,10 @@ function NestForm({
   const thick = (mm: number) => exactLengthText(mm, shop.units);
   const s = offered.settings ?? {};
   const shopDefaults = {
-    kerf: s.kerf ?? shop.kerfMm,
-    trim: s.trim ?? shop.edgeTrimMm,
-    minOffcutLength: s.minOffcutLength ?? shop.minOffcutLengthMm,
-    minOffcutWidth: s.minOffcutWidth ?? shop.minOffcutWidthMm,
+    kerf: s.kerf ?? shop.kerf,
+    trim: s.trim ?? shop.edgeTrim,
+    minOffcutLength: s.minOffcutLength ?? shop.minOffcutLength,
+    minOffcutWidth: s.minOffcutWidth ?? shop.minOffcutWidth,
   };
   const form = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
     resolver: zodResolver(schema),

@@ -108,13 +108,13 @@ function RecutRow({
       <td className="min-w-36">
         <span className="font-medium whitespace-nowrap">{recutLabel(r)}</span>
         <span className="block text-xs text-graphite-mute">
-          {thick(r.thicknessMm)} {r.material}
+          {thick(r.thickness)} {r.material}
         </span>
       </td>
       <td className="num">{r.quantity}</td>
       <td className="num">
         <span className="whitespace-nowrap">
-          {len(r.lengthMm)} × {len(r.widthMm)}
+          {len(r.length)} × {len(r.width)}
         </span>
         <span className="block font-sans text-xs text-graphite-mute">{r.grain === 'any' ? 'may turn' : 'grain along the length'}</span>
       </td>

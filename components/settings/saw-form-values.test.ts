@@ -12,14 +12,14 @@ describe('the saw form', () => {
     expect(read).toEqual({
       ok: true,
       saw: expect.objectContaining({
-        kerfMm: 3.175,
-        ripCapacityMm: 762,
-        crosscutCapacityMm: 609.6,
-        maxPieceLengthMm: null,
-        maxPieceWidthMm: null,
+        kerf: 3.175,
+        ripCapacity: 762,
+        crosscutCapacity: 609.6,
+        maxPieceLength: null,
+        maxPieceWidth: null,
         maxStages: 3,
         firstStage: 'rip',
-        minFenceWidthMm: 25.4,
+        minFenceWidth: 25.4,
       }),
     });
     if (read.ok) expect(readSawForm(sawText(read.saw, IMPERIAL), IMPERIAL)).toEqual(read);
@@ -32,7 +32,7 @@ describe('the saw form', () => {
     );
     expect(read.ok).toBe(true);
     if (!read.ok) return;
-    expect(read.saw.kerfMm).toBeCloseTo(2.38125, 9);
+    expect(read.saw.kerf).toBeCloseTo(2.38125, 9);
     const facts = Object.fromEntries(sawFacts(read.saw, IMPERIAL).map((f) => [f.label, f.value]));
     expect(facts.Kerf).toBe('3/32″');
     expect(facts['Track length']).toBe('110″');

@@ -40,14 +40,14 @@ export function sawText(s: Saw, units: ShopUnits): SawFormText {
     kind: s.kind,
     kindName: s.kindName ?? '',
     name: s.name,
-    kerf: len(s.kerfMm),
-    ripCapacity: len(s.ripCapacityMm),
-    crosscutCapacity: len(s.crosscutCapacityMm),
-    maxPieceLength: len(s.maxPieceLengthMm),
-    maxPieceWidth: len(s.maxPieceWidthMm),
+    kerf: len(s.kerf),
+    ripCapacity: len(s.ripCapacity),
+    crosscutCapacity: len(s.crosscutCapacity),
+    maxPieceLength: len(s.maxPieceLength),
+    maxPieceWidth: len(s.maxPieceWidth),
     maxStages: s.maxStages === null ? 'any' : String(s.maxStages),
     firstStage: s.firstStage,
-    minFenceWidth: len(s.minFenceWidthMm),
+    minFenceWidth: len(s.minFenceWidth),
   };
 }
 
@@ -55,14 +55,14 @@ const FIELD: Record<string, keyof SawFormText> = {
   kind: 'kind',
   kindName: 'kindName',
   name: 'name',
-  kerfMm: 'kerf',
-  ripCapacityMm: 'ripCapacity',
-  crosscutCapacityMm: 'crosscutCapacity',
-  maxPieceLengthMm: 'maxPieceLength',
-  maxPieceWidthMm: 'maxPieceWidth',
+  kerf: 'kerf',
+  ripCapacity: 'ripCapacity',
+  crosscutCapacity: 'crosscutCapacity',
+  maxPieceLength: 'maxPieceLength',
+  maxPieceWidth: 'maxPieceWidth',
   maxStages: 'maxStages',
   firstStage: 'firstStage',
-  minFenceWidthMm: 'minFenceWidth',
+  minFenceWidth: 'minFenceWidth',
 };
 /** The form field an API field message belongs to. */
 export const sawFormField = (apiField: string): keyof SawFormText => FIELD[apiField] ?? 'name';
@@ -88,14 +88,14 @@ export function readSawForm(text: SawFormText, units: ShopUnits): { ok: true; sa
     kind: text.kind,
     kindName: text.kind === 'other' ? text.kindName.trim() || null : null,
     name: text.name,
-    kerfMm: length('kerf', { zero: true }),
-    ripCapacityMm: length('ripCapacity', { blank: 'null' }),
-    crosscutCapacityMm: length('crosscutCapacity', { blank: 'null' }),
-    maxPieceLengthMm: length('maxPieceLength', { blank: 'null' }),
-    maxPieceWidthMm: length('maxPieceWidth', { blank: 'null' }),
+    kerf: length('kerf', { zero: true }),
+    ripCapacity: length('ripCapacity', { blank: 'null' }),
+    crosscutCapacity: length('crosscutCapacity', { blank: 'null' }),
+    maxPieceLength: length('maxPieceLength', { blank: 'null' }),
+    maxPieceWidth: length('maxPieceWidth', { blank: 'null' }),
     maxStages: text.maxStages === 'any' ? null : Number(text.maxStages),
     firstStage: text.firstStage,
-    minFenceWidthMm: length('minFenceWidth', { zero: true }),
+    minFenceWidth: length('minFenceWidth', { zero: true }),
   };
   if (text.kind === 'other' && !text.kindName.trim()) errors.kindName = 'Say what kind of saw it is.';
   const parsed = sawSchema.safeParse(candidate);
@@ -109,21 +109,21 @@ export function sawFacts(s: Saw, units: ShopUnits): { label: string; value: stri
   const len = (mm: number) => exactLengthText(mm, units);
   const limit = (mm: number | null, none: string) => (mm === null ? none : len(mm));
   return [
-    { label: 'Kerf', value: len(s.kerfMm) },
-    { label: 'Rip capacity', value: limit(s.ripCapacityMm, s.kind === 'track-saw' ? 'no fence' : 'no limit') },
-    { label: s.kind === 'track-saw' ? 'Track length' : 'Crosscut capacity', value: limit(s.crosscutCapacityMm, 'no limit') },
+    { label: 'Kerf', value: len(s.kerf) },
+    { label: 'Rip capacity', value: limit(s.ripCapacity, s.kind === 'track-saw' ? 'no fence' : 'no limit') },
+    { label: s.kind === 'track-saw' ? 'Track length' : 'Crosscut capacity', value: limit(s.crosscutCapacity, 'no limit') },
     {
       label: 'Largest piece',
       value:
-        s.maxPieceLengthMm === null && s.maxPieceWidthMm === null
+        s.maxPieceLength === null && s.maxPieceWidth === null
           ? 'any'
-          : `${limit(s.maxPieceLengthMm, 'any length')} × ${limit(s.maxPieceWidthMm, 'any width')}`,
+          : `${limit(s.maxPieceLength, 'any length')} × ${limit(s.maxPieceWidth, 'any width')}`,
     },
     {
       label: 'Stages',
       value: `${s.maxStages === null ? 'any number' : `at most ${s.maxStages}`}, ${s.firstStage === 'rip' ? 'rips' : 'crosscuts'} first`,
     },
-    { label: 'Narrowest rip at the fence', value: s.minFenceWidthMm === 0 ? 'no minimum set' : len(s.minFenceWidthMm) },
+    { label: 'Narrowest rip at the fence', value: s.minFenceWidth === 0 ? 'no minimum set' : len(s.minFenceWidth) },
   ];
 }
 

@@ -8,11 +8,11 @@ const DEMO: ShopSettings = {
   name: 'Larkspur Cabinet Works',
   units: { system: 'imperial', precision: 16, feet: false },
   currency: 'USD',
-  kerfMm: inches(1 / 8),
-  edgeTrimMm: 6,
-  minOffcutLengthMm: inches(12),
-  minOffcutWidthMm: inches(4),
-  minFenceWidthMm: inches(1),
+  kerf: inches(1 / 8),
+  edgeTrim: 6,
+  minOffcutLength: inches(12),
+  minOffcutWidth: inches(4),
+  minFenceWidth: inches(1),
   wastePercent: 15,
   timeZone: 'America/Chicago',
   yieldTargetPercent: 75,
@@ -22,7 +22,7 @@ const DEMO: ShopSettings = {
 describe('the Shop settings form', () => {
   test('saving it untouched changes nothing: 6 mm edge trim in an inch shop stays 6 mm, not ¼″', () => {
     const text = settingsFormText(DEMO);
-    expect(text.edgeTrimMm).toBe('6 mm');
+    expect(text.edgeTrim).toBe('6 mm');
     expect(readSettingsForm(DEMO, text)).toEqual({ ok: true, patch: {} });
   });
 
@@ -50,13 +50,13 @@ describe('the Shop settings form', () => {
 
   test('even a field retyped to the same text it showed reads back to the exact stored value', () => {
     fc.assert(
-      fc.property(fc.constantFrom(...UNIT_CHOICES.map((c) => c.units)), fc.double({ min: 0.01, max: 3000, noNaN: true }), (units, edgeTrimMm) => {
-        const current = { ...DEMO, units, edgeTrimMm };
+      fc.property(fc.constantFrom(...UNIT_CHOICES.map((c) => c.units)), fc.double({ min: 0.01, max: 3000, noNaN: true }), (units, edgeTrim) => {
+        const current = { ...DEMO, units, edgeTrim };
         const text = settingsFormText(current);
         // Typed again with a space: not what was shown, so it is read as typed.
-        const read = readSettingsForm(current, { ...text, edgeTrimMm: ` ${text.edgeTrimMm} x` });
+        const read = readSettingsForm(current, { ...text, edgeTrim: ` ${text.edgeTrim} x` });
         expect(read.ok).toBe(false);
-        const same = readSettingsForm(current, { ...text, edgeTrimMm: `${text.edgeTrimMm} ` });
+        const same = readSettingsForm(current, { ...text, edgeTrim: `${text.edgeTrim} ` });
         expect(same).toEqual({ ok: true, patch: {} });
       }),
       { seed: 20261203, numRuns: 100 },
@@ -75,13 +75,13 @@ describe('the Shop settings form', () => {
   });
 
   test('sends what a person changed, read in the shop’s unit (3/32″ kerf → 2.38125 mm, NIST 25.4 mm/in)', () => {
-    const read = readSettingsForm(DEMO, { ...settingsFormText(DEMO), kerfMm: '3/32', wastePercent: '10', name: 'Larkspur Works ' });
-    expect(read).toEqual({ ok: true, patch: { kerfMm: 2.38125, wastePercent: 10, name: 'Larkspur Works' } });
+    const read = readSettingsForm(DEMO, { ...settingsFormText(DEMO), kerf: '3/32', wastePercent: '10', name: 'Larkspur Works ' });
+    expect(read).toEqual({ ok: true, patch: { kerf: 2.38125, wastePercent: 10, name: 'Larkspur Works' } });
   });
 
   test('names the field a person typed wrong and sends nothing', () => {
-    const read = readSettingsForm(DEMO, { ...settingsFormText(DEMO), edgeTrimMm: 'abc', wastePercent: '' });
+    const read = readSettingsForm(DEMO, { ...settingsFormText(DEMO), edgeTrim: 'abc', wastePercent: '' });
     expect(read.ok).toBe(false);
-    if (!read.ok) expect(Object.keys(read.errors).sort()).toEqual(['edgeTrimMm', 'wastePercent']);
+    if (!read.ok) expect(Object.keys(read.errors).sort()).toEqual(['edgeTrim', 'wastePercent']);
   });
 });

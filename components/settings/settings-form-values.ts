@@ -12,12 +12,12 @@ export const UNIT_CHOICES: { key: string; label: string; units: ShopUnits }[] = 
 ];
 
 export const LENGTH_FIELDS = [
-  ['kerfMm', 'Saw kerf', 'Width of material the blade removes.'],
-  ['edgeTrimMm', 'Edge trim', 'Taken off each factory edge of sheets and boards.'],
-  ['minOffcutLengthMm', 'Keep offcuts at least this long', ''],
-  ['minOffcutWidthMm', '… and at least this wide', ''],
+  ['kerf', 'Saw kerf', 'Width of material the blade removes.'],
+  ['edgeTrim', 'Edge trim', 'Taken off each factory edge of sheets and boards.'],
+  ['minOffcutLength', 'Keep offcuts at least this long', ''],
+  ['minOffcutWidth', '… and at least this wide', ''],
   [
-    'minFenceWidthMm',
+    'minFenceWidth',
     'Narrowest rip at the fence',
     'A saw order never leaves a strip narrower than this between blade and fence: it turns the piece, or sends the cut to a sled, track saw or band saw. Your saw’s manual decides.',
   ],

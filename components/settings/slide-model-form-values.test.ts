@@ -22,9 +22,9 @@ describe('the slide model form', () => {
     expect(read).toMatchObject({
       ok: true,
       model: {
-        lengthsMm: [12, 15, 18, 21].map((l) => expect.closeTo(inches(l), 9)),
-        widthDeductionMm: expect.closeTo(inches(1.625), 9),
-        maxSideThicknessMm: expect.closeTo(inches(5 / 8), 9),
+        lengths: [12, 15, 18, 21].map((l) => expect.closeTo(inches(l), 9)),
+        widthDeduction: expect.closeTo(inches(1.625), 9),
+        maxSideThickness: expect.closeTo(inches(5 / 8), 9),
       },
     });
   });
@@ -44,7 +44,7 @@ describe('the slide model form', () => {
     );
     expect(read).toMatchObject({
       ok: true,
-      model: { lengthsMm: [250, 300.5, 350], maxSideThicknessMm: null, bottomRecessMm: 0, rearClearanceMm: 0 },
+      model: { lengths: [250, 300.5, 350], maxSideThickness: null, bottomRecess: 0, rearClearance: 0 },
     });
   });
 
@@ -66,12 +66,12 @@ describe('the slide model form', () => {
     expect(readSlideModelForm(slideModelText(read.model, IMPERIAL), IMPERIAL)).toEqual(read);
     const metric = readSlideModelForm(slideModelText(read.model, METRIC), METRIC);
     if (!metric.ok) throw new Error(JSON.stringify(metric.errors));
-    metric.model.lengthsMm.forEach((l, i) => expect(Math.abs(l - read.model.lengthsMm[i])).toBeLessThanOrEqual(0.005 + 1e-9));
-    expect(Math.abs(metric.model.widthDeductionMm - read.model.widthDeductionMm)).toBeLessThanOrEqual(0.005 + 1e-9);
+    metric.model.lengths.forEach((l, i) => expect(Math.abs(l - read.model.lengths[i])).toBeLessThanOrEqual(0.005 + 1e-9));
+    expect(Math.abs(metric.model.widthDeduction - read.model.widthDeduction)).toBeLessThanOrEqual(0.005 + 1e-9);
   });
 
   test('says the rule in the shop’s unit', () => {
-    expect(widthRuleText({ widthRule: 'inside', widthDeductionMm: inches(1.625) }, IMPERIAL)).toBe('Inside width = opening − 1-5/8″');
-    expect(widthRuleText({ widthRule: 'outside', widthDeductionMm: 10 }, METRIC)).toBe('Box width = opening − 10 mm');
+    expect(widthRuleText({ widthRule: 'inside', widthDeduction: inches(1.625) }, IMPERIAL)).toBe('Inside width = opening − 1-5/8″');
+    expect(widthRuleText({ widthRule: 'outside', widthDeduction: 10 }, METRIC)).toBe('Box width = opening − 10 mm');
   });
 });

@@ -45,13 +45,13 @@ export function slideModelText(m: SlideModel, units: ShopUnits): SlideModelFormT
   return {
     kind: m.kind,
     name: m.name,
-    lengths: m.lengthsMm.map(len).join(', '),
+    lengths: m.lengths.map(len).join(', '),
     widthRule: m.widthRule,
-    widthDeduction: len(m.widthDeductionMm),
-    maxSideThickness: m.maxSideThicknessMm === null ? '' : len(m.maxSideThicknessMm),
-    bottomRecess: len(m.bottomRecessMm),
-    heightClearance: len(m.heightClearanceMm),
-    rearClearance: len(m.rearClearanceMm),
+    widthDeduction: len(m.widthDeduction),
+    maxSideThickness: m.maxSideThickness === null ? '' : len(m.maxSideThickness),
+    bottomRecess: len(m.bottomRecess),
+    heightClearance: len(m.heightClearance),
+    rearClearance: len(m.rearClearance),
   };
 }
 
@@ -66,13 +66,13 @@ export function readSlideModelForm(
   const candidate = {
     kind: text.kind,
     name: text.name,
-    lengthsMm: readLengths(text.lengths, unit, errors),
+    lengths: readLengths(text.lengths, unit, errors),
     widthRule: text.widthRule,
-    widthDeductionMm: length('widthDeduction', text.widthDeduction, { zero: true }),
-    maxSideThicknessMm: length('maxSideThickness', text.maxSideThickness, { blank: 'null' }),
-    bottomRecessMm: length('bottomRecess', text.bottomRecess, { zero: true, blank: 'zero' }),
-    heightClearanceMm: length('heightClearance', text.heightClearance, { zero: true }),
-    rearClearanceMm: length('rearClearance', text.rearClearance, { zero: true, blank: 'zero' }),
+    widthDeduction: length('widthDeduction', text.widthDeduction, { zero: true }),
+    maxSideThickness: length('maxSideThickness', text.maxSideThickness, { blank: 'null' }),
+    bottomRecess: length('bottomRecess', text.bottomRecess, { zero: true, blank: 'zero' }),
+    heightClearance: length('heightClearance', text.heightClearance, { zero: true }),
+    rearClearance: length('rearClearance', text.rearClearance, { zero: true, blank: 'zero' }),
   };
   const parsed = slideModelSchema.safeParse(candidate);
   if (!parsed.success)
@@ -87,13 +87,13 @@ export function readSlideModelForm(
 const FORM_FIELD_OF: Record<string, keyof SlideModelFormText> = {
   kind: 'kind',
   name: 'name',
-  lengthsMm: 'lengths',
+  lengths: 'lengths',
   widthRule: 'widthRule',
-  widthDeductionMm: 'widthDeduction',
-  maxSideThicknessMm: 'maxSideThickness',
-  bottomRecessMm: 'bottomRecess',
-  heightClearanceMm: 'heightClearance',
-  rearClearanceMm: 'rearClearance',
+  widthDeduction: 'widthDeduction',
+  maxSideThickness: 'maxSideThickness',
+  bottomRecess: 'bottomRecess',
+  heightClearance: 'heightClearance',
+  rearClearance: 'rearClearance',
 };
 
 /** A length field read in the shop's unit: a blank is an error, 0 or null as `blank` says; `zero` accepts 0 written out. */
@@ -119,23 +119,23 @@ function readLengths(text: string, unit: LengthUnit, errors: Record<string, stri
     .split(LIST_SEPARATOR)
     .map((p) => p.trim())
     .filter(Boolean);
-  const lengthsMm: number[] = [];
+  const lengths: number[] = [];
   for (const piece of pieces) {
     const parsed = parseLength(piece, { unit });
-    if (parsed.ok) lengthsMm.push(parsed.mm);
+    if (parsed.ok) lengths.push(parsed.mm);
     else errors.lengths ??= `“${piece}”: ${parsed.error} Separate lengths with a comma and a space, or a semicolon.`;
   }
   if (pieces.length === 0) errors.lengths = 'Give the lengths the slide is made in, such as 12, 15, 18, 21.';
-  return lengthsMm;
+  return lengths;
 }
 
 /** The model's rule in one line, in the shop's unit: "Inside width = opening − 1-5/8″". */
 export function widthRuleText(
-  m: Pick<SlideModel, 'widthRule' | 'widthDeductionMm'>,
+  m: Pick<SlideModel, 'widthRule' | 'widthDeduction'>,
   units: ShopUnits,
   len: (mm: number) => string = (mm) => formatLength(mm, units),
 ): string {
-  return `${m.widthRule === 'inside' ? 'Inside width' : 'Box width'} = opening − ${len(m.widthDeductionMm)}`;
+  return `${m.widthRule === 'inside' ? 'Inside width' : 'Box width'} = opening − ${len(m.widthDeduction)}`;
 }
 
 export { SLIDE_MODEL_KINDS, SLIDE_WIDTH_RULES };

@@ -117,15 +117,15 @@ export function ModelFacts({ model: m, units }: { model: SlideModel; units: Shop
       <dt className="text-graphite-mute">Width</dt>
       <dd>{widthRuleText(m, units, len)}</dd>
       <dt className="text-graphite-mute">Height</dt>
-      <dd>Box = opening − {len(m.heightClearanceMm)}</dd>
+      <dd>Box = opening − {len(m.heightClearance)}</dd>
       <dt className="text-graphite-mute">Lengths</dt>
       <dd>
-        {m.lengthsMm.map(len).join(', ')} · {len(m.rearClearanceMm)} behind
+        {m.lengths.map(len).join(', ')} · {len(m.rearClearance)} behind
       </dd>
       <dt className="text-graphite-mute">Sides</dt>
       <dd>
-        {m.maxSideThicknessMm === null ? 'any thickness' : `up to ${len(m.maxSideThicknessMm)}`}
-        {m.kind === 'undermount' ? ` · bottom at least ${len(m.bottomRecessMm)} up` : ''}
+        {m.maxSideThickness === null ? 'any thickness' : `up to ${len(m.maxSideThickness)}`}
+        {m.kind === 'undermount' ? ` · bottom at least ${len(m.bottomRecess)} up` : ''}
       </dd>
     </dl>
   );
@@ -146,12 +146,12 @@ function SlideModelForm({ editing, units, onDone }: { editing: SavedSlideModel |
     onError: (e) => {
       if (e instanceof ApiError && Object.keys(e.fields).length) {
         const back: Record<string, keyof SlideModelFormText> = {
-          lengthsMm: 'lengths',
-          widthDeductionMm: 'widthDeduction',
-          maxSideThicknessMm: 'maxSideThickness',
-          bottomRecessMm: 'bottomRecess',
-          heightClearanceMm: 'heightClearance',
-          rearClearanceMm: 'rearClearance',
+          lengths: 'lengths',
+          widthDeduction: 'widthDeduction',
+          maxSideThickness: 'maxSideThickness',
+          bottomRecess: 'bottomRecess',
+          heightClearance: 'heightClearance',
+          rearClearance: 'rearClearance',
         };
         setErrors(Object.fromEntries(Object.entries(e.fields).map(([k, v]) => [back[k] ?? k, v[0]])));
       }

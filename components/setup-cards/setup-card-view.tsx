@@ -13,7 +13,7 @@ export function SetupCardView({ card, units, source }: { card: SetupCard; units:
   return (
     <div className="rounded-md border border-paper-edge bg-paper p-3 text-sm">
       <p className="font-medium">
-        {JOINT_NAMES[card.joint]} in {exactLengthText(card.stockThicknessMm, units)} stock{' '}
+        {JOINT_NAMES[card.joint]} in {exactLengthText(card.stockThickness, units)} stock{' '}
         <span className="text-xs font-normal text-graphite-mute">
           {source === 'saved' ? '· the shop’s card' : source === 'default' ? '· starting values (not saved yet)' : '· no card saved yet'}
         </span>

@@ -54,7 +54,7 @@ type FormValues = z.output<ReturnType<typeof cardForm>>;
 
 const toText = (card: SetupCard, units: ShopUnits): FormText => ({
   joint: card.joint,
-  stockThickness: exactLengthText(card.stockThicknessMm, units),
+  stockThickness: exactLengthText(card.stockThickness, units),
   fields: card.fields.map((f) => ({ label: f.label, value: f.unit === 'mm' ? exactLengthText(f.value, units) : String(f.value), unit: f.unit })),
   note: card.note,
 });
@@ -71,7 +71,7 @@ export function SetupCardsManager({ units, canWrite }: { units: ShopUnits; canWr
   const unsavedDefaults = DEFAULT_LOCK_RABBET_CARDS.filter((d) => !findSetupCard(cards.data ?? [], d));
   const blank: SetupCard = {
     joint: 'lock-rabbet',
-    stockThicknessMm: 12.7,
+    stockThickness: 12.7,
     fields: [{ key: 'bit-height', label: 'Bit height', value: 9.525, unit: 'mm' }],
     note: '',
   };
@@ -133,7 +133,7 @@ export function SetupCardsManager({ units, canWrite }: { units: ShopUnits; canWr
             <h2 className="mb-2 text-base">Starting values</h2>
             <ul className="grid gap-3 md:grid-cols-2">
               {unsavedDefaults.map((d) => (
-                <li key={d.stockThicknessMm} className="space-y-2">
+                <li key={d.stockThickness} className="space-y-2">
                   <SetupCardView card={d} units={units} source="default" />
                   {canWrite && (
                     <button type="button" className="btn-quiet" onClick={() => setEditing({ id: null, card: d })}>
@@ -161,7 +161,7 @@ function CardForm({ id, card, units, onDone }: { id: string | null; card: SetupC
   const rows = useFieldArray({ control, name: 'fields' });
   const save = useMutation({
     mutationFn: (v: FormValues) => {
-      const body = { joint: v.joint, stockThicknessMm: v.stockThickness, fields: v.fields, note: v.note };
+      const body = { joint: v.joint, stockThickness: v.stockThickness, fields: v.fields, note: v.note };
       return id ? call('PUT /api/setup-cards/:id', { params: { id }, body }) : call('POST /api/setup-cards', { body });
     },
     onSuccess: () => {
@@ -169,7 +169,7 @@ function CardForm({ id, card, units, onDone }: { id: string | null; card: SetupC
       onDone();
     },
     onError: (e) => {
-      if (e instanceof ApiError && e.fields.stockThicknessMm) setError('stockThickness', { message: e.fields.stockThicknessMm[0] });
+      if (e instanceof ApiError && e.fields.stockThickness) setError('stockThickness', { message: e.fields.stockThickness[0] });
     },
   });
   const err = formState.errors;

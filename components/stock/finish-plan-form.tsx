@@ -79,7 +79,7 @@ export function FinishPlanForm({
         <ul className="text-sm text-graphite-soft">
           {result.offcuts.map((o) => (
             <li key={o.id}>
-              {len(o.lengthMm)} × {len(o.widthMm)} → {o.location || 'no location'}
+              {len(o.length)} × {len(o.width)} → {o.location || 'no location'}
             </li>
           ))}
         </ul>

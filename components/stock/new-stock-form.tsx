@@ -12,9 +12,9 @@ import { useStockAction } from './use-stock-action';
 
 const formSchema = (unit: 'in' | 'mm') =>
   stockItemSchema.extend({
-    thicknessMm: lengthInput(unit),
-    lengthMm: lengthInput(unit),
-    widthMm: lengthInput(unit),
+    thickness: lengthInput(unit),
+    length: lengthInput(unit),
+    width: lengthInput(unit),
     onHand: wholeInput(0),
     lowStockAt: wholeInput(0),
     costCents: moneyInput,
@@ -29,9 +29,9 @@ export function NewStockForm({ units, onDone }: { units: ShopUnits; onDone: () =
       kind: 'sheet',
       material: '',
       nominalThickness: '',
-      thicknessMm: '',
-      lengthMm: '',
-      widthMm: '',
+      thickness: '',
+      length: '',
+      width: '',
       grain: 'along-length',
       surfacing: '',
       grade: '',
@@ -65,14 +65,14 @@ export function NewStockForm({ units, onDone }: { units: ShopUnits; onDone: () =
       <Field id="ns-nominal" label="Thickness as you say it" error={e.nominalThickness?.message}>
         <input id="ns-nominal" className="field-input" placeholder={board ? '4/4' : '3/4"'} {...form.register('nominalThickness')} />
       </Field>
-      <Field id="ns-thickness" label="Actual thickness" error={e.thicknessMm?.message}>
-        <input id="ns-thickness" className="field-input" placeholder={board ? '13/16' : '23/32'} {...form.register('thicknessMm')} />
+      <Field id="ns-thickness" label="Actual thickness" error={e.thickness?.message}>
+        <input id="ns-thickness" className="field-input" placeholder={board ? '13/16' : '23/32'} {...form.register('thickness')} />
       </Field>
-      <Field id="ns-length" label="Length" error={e.lengthMm?.message}>
-        <input id="ns-length" className="field-input" {...form.register('lengthMm')} />
+      <Field id="ns-length" label="Length" error={e.length?.message}>
+        <input id="ns-length" className="field-input" {...form.register('length')} />
       </Field>
-      <Field id="ns-width" label="Width" error={e.widthMm?.message}>
-        <input id="ns-width" className="field-input" {...form.register('widthMm')} />
+      <Field id="ns-width" label="Width" error={e.width?.message}>
+        <input id="ns-width" className="field-input" {...form.register('width')} />
       </Field>
       <Field id="ns-onhand" label="On hand" error={e.onHand?.message}>
         <input id="ns-onhand" className="field-input" inputMode="numeric" {...form.register('onHand')} />

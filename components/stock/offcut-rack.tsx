@@ -25,13 +25,13 @@ export function OffcutRack({
 }) {
   const shelves = new Map<string, Offcut[]>();
   for (const o of rack) {
-    const key = `${o.material} · ${thick(o.thicknessMm)}`;
+    const key = `${o.material} · ${thick(o.thickness)}`;
     shelves.set(key, [...(shelves.get(key) ?? []), o]);
   }
   return (
     <div className="space-y-5">
       {[...shelves.entries()].map(([shelf, pieces]) => {
-        const longest = Math.max(...pieces.map((p) => p.lengthMm));
+        const longest = Math.max(...pieces.map((p) => p.length));
         return (
           <section key={shelf} aria-label={`Shelf ${shelf}`}>
             <h3 className="mb-2 text-sm font-semibold text-graphite-soft">
@@ -39,18 +39,18 @@ export function OffcutRack({
             </h3>
             <ul className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3">
               {pieces.map((o) => {
-                const label = `${o.material} offcut ${len(o.lengthMm)} × ${len(o.widthMm)}`;
+                const label = `${o.material} offcut ${len(o.length)} × ${len(o.width)}`;
                 return (
                   <li key={o.id} className="card flex gap-3 p-3" data-testid="offcut" data-status={o.status}>
                     <div className="flex h-16 w-28 shrink-0 items-center justify-start rounded bg-paper-deep p-1" aria-hidden>
                       <div
                         className={`rounded-sm border ${o.grain === 'none' ? 'border-graphite-faint bg-paper-edge' : 'border-oak bg-oak-light'}`}
-                        style={{ width: Math.max(6, o.lengthMm * (104 / longest)), height: Math.max(4, Math.min(56, o.widthMm * (104 / longest))) }}
+                        style={{ width: Math.max(6, o.length * (104 / longest)), height: Math.max(4, Math.min(56, o.width * (104 / longest))) }}
                       />
                     </div>
                     <div className="min-w-0 flex-1 text-sm">
                       <div className="num whitespace-nowrap text-left font-medium">
-                        {len(o.lengthMm)} × {len(o.widthMm)}
+                        {len(o.length)} × {len(o.width)}
                       </div>
                       <div className="text-xs text-graphite-mute">
                         {o.location || 'no location'}

@@ -10,14 +10,14 @@ import { ActionError, Field } from '@/components/ui/field';
 import { useStockAction } from './use-stock-action';
 
 const formSchema = (unit: 'in' | 'mm') =>
-  recordOffcutSchema.extend({ thicknessMm: lengthInput(unit), lengthMm: lengthInput(unit), widthMm: lengthInput(unit) });
+  recordOffcutSchema.extend({ thickness: lengthInput(unit), length: lengthInput(unit), width: lengthInput(unit) });
 
 /** A cutter (or owner) puts an offcut on the rack that no plan recorded: sizes typed as the shop writes them. */
 export function RecordOffcutForm({ units, onDone }: { units: ShopUnits; onDone: () => void }) {
   const schema = useMemo(() => formSchema(shopLengthUnit(units)), [units]);
   const form = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
     resolver: zodResolver(schema),
-    defaultValues: { material: '', thicknessMm: '', lengthMm: '', widthMm: '', grain: 'along-length', location: '' },
+    defaultValues: { material: '', thickness: '', length: '', width: '', grain: 'along-length', location: '' },
   });
   const action = useStockAction('POST /api/offcuts', { onDone });
   const e = form.formState.errors;
@@ -31,17 +31,17 @@ export function RecordOffcutForm({ units, onDone }: { units: ShopUnits; onDone: 
       <Field id="ro-material" label="Material" error={e.material?.message}>
         <input id="ro-material" className="field-input" {...form.register('material')} />
       </Field>
-      <Field id="ro-thickness" label="Thickness" error={e.thicknessMm?.message}>
-        <input id="ro-thickness" className="field-input" {...form.register('thicknessMm')} />
+      <Field id="ro-thickness" label="Thickness" error={e.thickness?.message}>
+        <input id="ro-thickness" className="field-input" {...form.register('thickness')} />
       </Field>
       <Field id="ro-location" label="Location" error={e.location?.message}>
         <input id="ro-location" className="field-input" {...form.register('location')} />
       </Field>
-      <Field id="ro-length" label="Length (along the grain)" error={e.lengthMm?.message}>
-        <input id="ro-length" className="field-input" {...form.register('lengthMm')} />
+      <Field id="ro-length" label="Length (along the grain)" error={e.length?.message}>
+        <input id="ro-length" className="field-input" {...form.register('length')} />
       </Field>
-      <Field id="ro-width" label="Width" error={e.widthMm?.message}>
-        <input id="ro-width" className="field-input" {...form.register('widthMm')} />
+      <Field id="ro-width" label="Width" error={e.width?.message}>
+        <input id="ro-width" className="field-input" {...form.register('width')} />
       </Field>
       <Field id="ro-grain" label="Grain" error={e.grain?.message}>
         <select id="ro-grain" className="field-input" {...form.register('grain')}>

@@ -62,7 +62,7 @@ export function StockTable({
         </thead>
         <tbody>
           {items.map((s) => {
-            const label = `${s.material} ${s.nominalThickness} ${len(s.lengthMm)} × ${len(s.widthMm)}`;
+            const label = `${s.material} ${s.nominalThickness} ${len(s.length)} × ${len(s.width)}`;
             return (
               <tr key={s.id} data-testid="stock-row" data-material={s.material}>
                 <td>
@@ -78,10 +78,10 @@ export function StockTable({
                 </td>
                 <td>
                   {s.nominalThickness}
-                  <span className="ml-1 whitespace-nowrap text-xs text-graphite-mute">({thick(s.thicknessMm)})</span>
+                  <span className="ml-1 whitespace-nowrap text-xs text-graphite-mute">({thick(s.thickness)})</span>
                 </td>
                 <td className="num whitespace-nowrap">
-                  {len(s.lengthMm)} × {len(s.widthMm)}
+                  {len(s.length)} × {len(s.width)}
                 </td>
                 <td className="num" data-testid="on-hand">
                   {s.onHand}

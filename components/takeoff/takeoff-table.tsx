@@ -43,11 +43,11 @@ export function TakeoffTable({ title, lines, len, area, money }: { title: string
             {lines.map((l) => (
               <tr key={l.stockId} data-testid="takeoff-line">
                 <td className="font-medium">
-                  {l.material} {l.nominalThickness ? typesetNominal(l.nominalThickness) : len(l.thicknessMm)}
+                  {l.material} {l.nominalThickness ? typesetNominal(l.nominalThickness) : len(l.thickness)}
                   <span className="ml-1 text-xs text-graphite-mute">{l.kind}</span>
                 </td>
                 <td className="num whitespace-nowrap">
-                  {len(l.lengthMm)} × {len(l.widthMm)}
+                  {len(l.length)} × {len(l.width)}
                 </td>
                 <td className="num">{l.count}</td>
                 <td className="num whitespace-nowrap">{l.boardFeet !== null ? `${l.boardFeet.toFixed(2)} bf` : area(l.areaMm2)}</td>
@@ -94,9 +94,9 @@ export function AllowanceTable({
               const main = lines.find((l) => l.stockId === a.stockId);
               const unit = main?.kind === 'board' ? 'boards' : 'sheets';
               return (
-                <tr key={`${a.material}|${a.thicknessMm}`} data-testid="allowance-line">
+                <tr key={`${a.material}|${a.thickness}`} data-testid="allowance-line">
                   <td className="font-medium">
-                    {a.material} {main?.nominalThickness ? typesetNominal(main.nominalThickness) : len(a.thicknessMm)}
+                    {a.material} {main?.nominalThickness ? typesetNominal(main.nominalThickness) : len(a.thickness)}
                   </td>
                   <td className="num whitespace-nowrap">{amount(a, a.amount)}</td>
                   <td className="num whitespace-nowrap">{amount(a, a.allowance)}</td>

@@ -22,12 +22,12 @@ export const DRAWER_ROLE_NAMES: Record<DrawerPart['role'], string> = {
 export const drawerPartRow = (p: DrawerPart) => ({
   label: `${p.schedule} · ${DRAWER_ROLE_NAMES[p.role]}`,
   quantity: p.quantity,
-  lengthMm: p.lengthMm,
-  widthMm: p.widthMm,
-  thicknessMm: p.thicknessMm,
+  length: p.length,
+  width: p.width,
+  thickness: p.thickness,
   material: p.material,
   grain: p.grain,
-  jointAllowanceMm: p.jointAllowanceMm,
+  jointAllowance: p.jointAllowance,
   role: p.role,
   machining: p.machining,
 });

@@ -71,7 +71,7 @@ async function lowSizesAndOwners(tx: Db, shopId: string) {
       .select()
       .from(stockItems)
       .where(eq(stockItems.shopId, shopId))
-      .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
+      .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thickness)),
     tx
       .selectDistinct({ stockItemId: purchaseOrderLines.stockItemId })
       .from(purchaseOrderLines)

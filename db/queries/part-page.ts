@@ -39,7 +39,7 @@ async function recutAsPart(db: Db, shopId: string, id: string) {
     jobId: r.jobId,
     label: `${recutLabel(r)} · re-cut`,
     ...recutSize(r),
-    jointAllowanceMm: r.jointAllowanceMm,
+    jointAllowance: r.jointAllowance,
     notes: r.reason,
     drawerScheduleId: null,
     role: null,

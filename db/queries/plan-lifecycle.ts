@@ -88,9 +88,9 @@ const missingFrom = (g: PieceGroup, free: number): MissingPiece => ({
   stockId: g.stockId,
   kind: g.piece.kind,
   material: g.piece.material,
-  thicknessMm: g.piece.thickness,
-  lengthMm: g.piece.length,
-  widthMm: g.piece.width,
+  thickness: g.piece.thickness,
+  length: g.piece.length,
+  width: g.piece.width,
   needed: g.count,
   free,
 });
@@ -111,9 +111,9 @@ async function writePieceRows(tx: Tx, shopId: string, planId: string, plan: Plan
           stockItemId: ref && ref.source !== 'offcut' ? ref.id : null,
           offcutId: ref?.source === 'offcut' ? ref.id : null,
           material: p.material,
-          thicknessMm: p.thickness,
-          lengthMm: p.length,
-          widthMm: p.width,
+          thickness: p.thickness,
+          length: p.length,
+          width: p.width,
           toBuy: ref?.source === 'buy',
         };
       }),
@@ -125,10 +125,10 @@ async function writePieceRows(tx: Tx, shopId: string, planId: string, plan: Plan
       planPieceId: r.id,
       partId: /^[0-9a-f-]{36}$/.test(pl.partId) ? pl.partId : null,
       instance: pl.instance,
-      xMm: pl.x,
-      yMm: pl.y,
-      lengthMm: pl.w,
-      widthMm: pl.h,
+      x: pl.x,
+      y: pl.y,
+      length: pl.w,
+      width: pl.h,
       rotated: pl.rotated,
     })),
   );
@@ -412,9 +412,9 @@ async function rackOffcuts(tx: Tx, scope: FinishScope, rack: FinishOutcome['rack
       .values({
         shopId,
         material: o.material,
-        thicknessMm: o.thicknessMm,
-        lengthMm: o.lengthMm,
-        widthMm: o.widthMm,
+        thickness: o.thickness,
+        length: o.length,
+        width: o.width,
         grain: o.grain,
         status: 'available',
         location: o.location,
@@ -432,7 +432,7 @@ async function rackOffcuts(tx: Tx, scope: FinishScope, rack: FinishOutcome['rack
       userId,
       reason: `From piece ${o.piece + 1} of plan “${planName}”`,
     });
-    created.push({ id: row.id, lengthMm: o.lengthMm, widthMm: o.widthMm, location: o.location });
+    created.push({ id: row.id, length: o.length, width: o.width, location: o.location });
   }
   return created;
 }
@@ -453,7 +453,7 @@ async function markDamagedPlacements(tx: Tx, shopId: string, planId: string, pla
       await tx
         .update(placements)
         .set({ damaged: true })
-        .where(and(eq(placements.planPieceId, pieceRow.id), eq(placements.instance, d.instance), eq(placements.xMm, d.x), eq(placements.yMm, d.y)));
+        .where(and(eq(placements.planPieceId, pieceRow.id), eq(placements.instance, d.instance), eq(placements.x, d.x), eq(placements.y, d.y)));
     }
   }
   await tx.execute(sql`

@@ -28,7 +28,7 @@ async function linesOf(db: Db, shopId: string, orderIds: string[]): Promise<Map<
     .from(purchaseOrderLines)
     .innerJoin(stockItems, eq(stockItems.id, purchaseOrderLines.stockItemId))
     .where(and(eq(purchaseOrderLines.shopId, shopId), inArray(purchaseOrderLines.purchaseOrderId, orderIds)))
-    .orderBy(asc(purchaseOrderLines.position), asc(stockItems.material), asc(stockItems.thicknessMm));
+    .orderBy(asc(purchaseOrderLines.position), asc(stockItems.material), asc(stockItems.thickness));
   for (const { line, item } of rows) {
     const each = costEachCents({ ...item, costCents: line.unitCostCents });
     const list = out.get(line.purchaseOrderId) ?? [];
@@ -38,9 +38,9 @@ async function linesOf(db: Db, shopId: string, orderIds: string[]): Promise<Map<
       kind: item.kind,
       material: item.material,
       nominalThickness: item.nominalThickness,
-      thicknessMm: item.thicknessMm,
-      lengthMm: item.lengthMm,
-      widthMm: item.widthMm,
+      thickness: item.thickness,
+      length: item.length,
+      width: item.width,
       surfacing: item.surfacing,
       grade: item.grade,
       stockCostCents: item.costCents,
@@ -132,7 +132,7 @@ export async function lowStockWithOrders({ db, shopId }: ShopScope) {
       .select()
       .from(stockItems)
       .where(eq(stockItems.shopId, shopId))
-      .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm)),
+      .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thickness)),
     onOrderQuantities({ db, shopId }),
   ]);
   return items.filter(isLowStock).map((i) => ({ ...i, free: i.onHand - i.reserved, onOrder: onOrder.get(i.id) ?? 0 }));
@@ -208,7 +208,7 @@ export async function createFromLowStock({ db, shopId, userId }: Scope): Promise
       .select()
       .from(stockItems)
       .where(eq(stockItems.shopId, shopId))
-      .orderBy(asc(stockItems.material), asc(stockItems.thicknessMm), asc(stockItems.lengthMm)),
+      .orderBy(asc(stockItems.material), asc(stockItems.thickness), asc(stockItems.length)),
     onOrderQuantities({ db, shopId }),
   ]);
   const orders = lowStockOrders(items, onOrder);
@@ -239,7 +239,7 @@ export async function createFromPlan({ db, shopId, userId }: Scope, planId: stri
     .select()
     .from(stockItems)
     .where(and(eq(stockItems.shopId, shopId), inArray(stockItems.id, [...wanted.keys()])))
-    .orderBy(asc(stockItems.material), asc(stockItems.thicknessMm));
+    .orderBy(asc(stockItems.material), asc(stockItems.thickness));
   return insertOrders(db, shopId, userId, groupBySupplier(wanted, items), 'plan', planId);
 }
 

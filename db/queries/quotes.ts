@@ -138,21 +138,20 @@ export async function listCustomerQuotes({ db, shopId }: ShopScope, customerId: 
 async function drawerFacts(db: Db, shopId: string, jobId: string, describe: (mm: number) => string) {
   const schedules = await listDrawerSchedules({ db, shopId }, jobId);
   const slides = new Map<string, SlideNeed>();
-  const cards: { joint: string; stockThicknessMm: number }[] = [];
+  const cards: { joint: string; stockThickness: number }[] = [];
   let boxes = 0;
   for (const saved of schedules) {
     const s = drawerScheduleSchema.safeParse(saved.input);
     if (!s.success) continue;
     boxes += s.data.quantity;
     for (const key of requiredSetupCards(s.data)) {
-      if (!cards.some((c) => c.joint === key.joint && Math.abs(c.stockThicknessMm - key.stockThicknessMm) <= SETUP_CARD_TOLERANCE_MM))
-        cards.push(key);
+      if (!cards.some((c) => c.joint === key.joint && Math.abs(c.stockThickness - key.stockThickness) <= SETUP_CARD_TOLERANCE_MM)) cards.push(key);
     }
     const box = boxFromOpening(s.data);
-    if (!box.ok || box.slideLengthMm === null || s.data.slide.type === 'none' || s.data.slide.type === 'wooden-runners') continue;
+    if (!box.ok || box.slideLength === null || s.data.slide.type === 'none' || s.data.slide.type === 'wooden-runners') continue;
     const kind = s.data.slide.model?.name ?? (s.data.slide.type === 'side-mount' ? 'Side-mount slides' : 'Undermount slides');
-    const key = `${kind}|${box.slideLengthMm}`;
-    const need = slides.get(key) ?? { kind, lengthMm: box.slideLengthMm, lengthText: describe(box.slideLengthMm), pairs: 0 };
+    const key = `${kind}|${box.slideLength}`;
+    const need = slides.get(key) ?? { kind, length: box.slideLength, lengthText: describe(box.slideLength), pairs: 0 };
     need.pairs += s.data.quantity;
     slides.set(key, need);
   }
@@ -193,7 +192,7 @@ async function draftQuoteLines(scope: ShopScope, jobId: string, planId: string |
     planId ? getTakeoff(scope, jobId, planId) : null,
     drawerFacts(db, shopId, jobId, describe),
     db
-      .select({ mm2: sql<number>`coalesce(sum(2 * ${parts.lengthMm} * ${parts.widthMm} * ${parts.quantity}), 0)`.mapWith(Number) })
+      .select({ mm2: sql<number>`coalesce(sum(2 * ${parts.length} * ${parts.width} * ${parts.quantity}), 0)`.mapWith(Number) })
       .from(parts)
       .where(and(eq(parts.shopId, shopId), eq(parts.jobId, jobId))),
     planId ? db.select({ document: plans.document }).from(plans).where(eq(plans.id, planId)) : [],
@@ -216,7 +215,7 @@ async function draftQuoteLines(scope: ShopScope, jobId: string, planId: string |
     pricing,
     hardware,
     describeSize: (t) =>
-      `${t.material} ${t.nominalThickness ? quoteNominal(t.nominalThickness) : describe(t.thicknessMm)}, ${describe(t.lengthMm)} × ${describe(t.widthMm)}`,
+      `${t.material} ${t.nominalThickness ? quoteNominal(t.nominalThickness) : describe(t.thickness)}, ${describe(t.length)} × ${describe(t.width)}`,
   });
   return { lines, priced };
 }

@@ -15,9 +15,9 @@ const closers = aliasedTable(users, 'closers');
 /** A re-cut's size and material, as the damaged part had them. */
 export const recutSize = (r: typeof recuts.$inferSelect) => ({
   quantity: r.quantity,
-  lengthMm: r.lengthMm,
-  widthMm: r.widthMm,
-  thicknessMm: r.thicknessMm,
+  length: r.length,
+  width: r.width,
+  thickness: r.thickness,
   material: r.material,
   grain: r.grain,
 });
@@ -71,12 +71,12 @@ export async function openRecuts({ db, shopId }: ShopScope, jobId: string): Prom
       label: recuts.label,
       instance: recuts.instance,
       quantity: recuts.quantity,
-      lengthMm: recuts.lengthMm,
-      widthMm: recuts.widthMm,
-      thicknessMm: recuts.thicknessMm,
+      length: recuts.length,
+      width: recuts.width,
+      thickness: recuts.thickness,
       material: recuts.material,
       grain: recuts.grain,
-      jointAllowanceMm: recuts.jointAllowanceMm,
+      jointAllowance: recuts.jointAllowance,
       reason: recuts.reason,
     })
     .from(recuts)
@@ -157,8 +157,8 @@ function recutRows(
     const held = heldRecuts.find((r) => r.id === d.partId);
     if (held) {
       spoiled.push(held.id);
-      const { partId, label, instance, quantity, lengthMm, widthMm, thicknessMm, material, grain, jointAllowanceMm } = held;
-      rows.push({ ...base, partId, label, instance, quantity, lengthMm, widthMm, thicknessMm, material, grain, jointAllowanceMm });
+      const { partId, label, instance, quantity, length, width, thickness, material, grain, jointAllowance } = held;
+      rows.push({ ...base, partId, label, instance, quantity, length, width, thickness, material, grain, jointAllowance });
       continue;
     }
     const part = request?.parts.find((p) => p.id === d.partId);
@@ -169,12 +169,12 @@ function recutRows(
       label: part.label || part.id,
       instance: d.instance,
       quantity: 1,
-      lengthMm: part.length,
-      widthMm: part.width,
-      thicknessMm: part.thickness,
+      length: part.length,
+      width: part.width,
+      thickness: part.thickness,
       material: part.material,
       grain: part.grain,
-      jointAllowanceMm: part.jointAllowance,
+      jointAllowance: part.jointAllowance,
     });
   }
   return { rows, spoiled };

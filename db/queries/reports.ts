@@ -32,7 +32,7 @@ export interface ReportFilter {
 export interface YieldRow {
   period: string;
   material: string;
-  thicknessMm: number;
+  thickness: number;
   plans: number;
   stockArea: number;
   partArea: number;
@@ -95,7 +95,7 @@ export async function yieldOverTime(db: Db, f: ReportFilter): Promise<YieldRow[]
     rows.set(key(r), {
       period: r.period,
       material: r.material,
-      thicknessMm: Number(r.thickness),
+      thickness: Number(r.thickness),
       plans: Number(r.plans),
       stockArea: Number(r.area),
       partArea: Number(r.parts),
@@ -109,7 +109,7 @@ export async function yieldOverTime(db: Db, f: ReportFilter): Promise<YieldRow[]
     if (row) row.keptArea = Number(r.area);
   }
   for (const row of rows.values()) row.sawWasteArea = Math.max(0, row.stockArea - row.partArea - row.spoiledArea - row.keptArea);
-  return [...rows.values()].sort((a, b) => a.period.localeCompare(b.period) || a.material.localeCompare(b.material) || a.thicknessMm - b.thicknessMm);
+  return [...rows.values()].sort((a, b) => a.period.localeCompare(b.period) || a.material.localeCompare(b.material) || a.thickness - b.thickness);
 }
 
 /** One period of the rack: what plans took from offcuts against new stock, and what went on, off and out of it. */
@@ -164,9 +164,9 @@ export async function offcutUse(db: Db, f: ReportFilter): Promise<OffcutUseRow[]
 export interface OldOffcut {
   id: string;
   material: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
+  thickness: number;
+  length: number;
+  width: number;
   location: string;
   rackedOn: string;
   ageDays: number;
@@ -198,9 +198,9 @@ export async function oldOffcuts(
   }>(result).map((r) => ({
     id: r.id,
     material: r.material,
-    thicknessMm: Number(r.thickness_mm),
-    lengthMm: Number(r.length_mm),
-    widthMm: Number(r.width_mm),
+    thickness: Number(r.thickness_mm),
+    length: Number(r.length_mm),
+    width: Number(r.width_mm),
     location: r.location,
     rackedOn: r.racked_on,
     ageDays: Number(r.age_days),
@@ -301,12 +301,12 @@ function lowNow(items: (typeof stockItems.$inferSelect)[], f: ReportFilter) {
       id: i.id,
       material: i.material,
       nominalThickness: i.nominalThickness,
-      thicknessMm: i.thicknessMm,
-      lengthMm: i.lengthMm,
-      widthMm: i.widthMm,
+      thickness: i.thickness,
+      length: i.length,
+      width: i.width,
       kind: i.kind,
       free: i.onHand - i.reserved,
       lowStockAt: i.lowStockAt,
     }))
-    .sort((a, b) => a.material.localeCompare(b.material) || a.thicknessMm - b.thicknessMm);
+    .sort((a, b) => a.material.localeCompare(b.material) || a.thickness - b.thickness);
 }

@@ -111,7 +111,7 @@ export async function getSawOrder({ db, shopId }: ShopScope, planId: string, { d
     .from(jobs)
     .leftJoin(customers, eq(customers.id, jobs.customerId))
     .where(and(eq(jobs.shopId, shopId), eq(jobs.id, plan.jobId)));
-  const kerf = plan.request?.settings.kerf ?? settings.kerfMm;
+  const kerf = plan.request?.settings.kerf ?? settings.kerf;
   return {
     id: plan.id,
     name: plan.name,

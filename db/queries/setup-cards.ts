@@ -16,7 +16,7 @@ type Row = typeof setupCards.$inferSelect;
 const toCard = (r: Row): SavedSetupCard => ({
   id: r.id,
   joint: r.joint as SetupCard['joint'],
-  stockThicknessMm: r.stockThicknessMm,
+  stockThickness: r.stockThickness,
   fields: (Array.isArray(r.fields) ? r.fields : []) as SetupCardField[],
   note: r.note,
   updatedAt: r.updatedAt.toISOString(),
@@ -24,18 +24,14 @@ const toCard = (r: Row): SavedSetupCard => ({
 const fieldsColumn = (fields: SetupCardField[]) => fields as unknown as Row['fields'];
 
 export async function listSetupCards({ db, shopId }: ShopScope): Promise<SavedSetupCard[]> {
-  const rows = await db
-    .select()
-    .from(setupCards)
-    .where(eq(setupCards.shopId, shopId))
-    .orderBy(asc(setupCards.joint), asc(setupCards.stockThicknessMm));
+  const rows = await db.select().from(setupCards).where(eq(setupCards.shopId, shopId)).orderBy(asc(setupCards.joint), asc(setupCards.stockThickness));
   return rows.map(toCard);
 }
 
 /** One card per joint and stock thickness: a second card for the same pair is refused (409), naming the first. */
 async function refuseDuplicate(db: Db, shopId: string, card: SetupCard, exceptId?: string) {
   const same = (await listSetupCards({ db, shopId })).find(
-    (c) => c.id !== exceptId && c.joint === card.joint && Math.abs(c.stockThicknessMm - card.stockThicknessMm) <= SETUP_CARD_TOLERANCE_MM,
+    (c) => c.id !== exceptId && c.joint === card.joint && Math.abs(c.stockThickness - card.stockThickness) <= SETUP_CARD_TOLERANCE_MM,
   );
   if (same) throw conflict('The shop already has a setup card for this joint and stock thickness: edit that one.');
 }
@@ -45,7 +41,7 @@ export async function createSetupCard({ db, shopId, userId }: Scope, card: Setup
     await refuseDuplicate(tx, shopId, card);
     const [row] = await tx
       .insert(setupCards)
-      .values({ shopId, joint: card.joint, stockThicknessMm: card.stockThicknessMm, fields: fieldsColumn(card.fields), note: card.note })
+      .values({ shopId, joint: card.joint, stockThickness: card.stockThickness, fields: fieldsColumn(card.fields), note: card.note })
       .returning();
     await recordAudit(tx, { shopId, userId, action: 'create', entity: 'setup-card', entityId: row.id, data: card });
     return toCard(row);
@@ -57,7 +53,7 @@ export async function updateSetupCard({ db, shopId, userId }: Scope, id: string,
     await refuseDuplicate(tx, shopId, card, id);
     const [row] = await tx
       .update(setupCards)
-      .set({ joint: card.joint, stockThicknessMm: card.stockThicknessMm, fields: fieldsColumn(card.fields), note: card.note, updatedAt: new Date() })
+      .set({ joint: card.joint, stockThickness: card.stockThickness, fields: fieldsColumn(card.fields), note: card.note, updatedAt: new Date() })
       .where(and(eq(setupCards.shopId, shopId), eq(setupCards.id, id)))
       .returning();
     if (!row) throw notFound('That setup card');

@@ -15,13 +15,13 @@ const toModel = (r: Row): SavedSlideModel => ({
   id: r.id,
   kind: r.kind as SlideModelKind,
   name: r.name,
-  lengthsMm: r.lengthsMm,
+  lengths: r.lengths,
   widthRule: r.widthRule as SlideWidthRule,
-  widthDeductionMm: r.widthDeductionMm,
-  maxSideThicknessMm: r.maxSideThicknessMm,
-  bottomRecessMm: r.bottomRecessMm,
-  heightClearanceMm: r.heightClearanceMm,
-  rearClearanceMm: r.rearClearanceMm,
+  widthDeduction: r.widthDeduction,
+  maxSideThickness: r.maxSideThickness,
+  bottomRecess: r.bottomRecess,
+  heightClearance: r.heightClearance,
+  rearClearance: r.rearClearance,
   updatedAt: r.updatedAt.toISOString(),
 });
 
@@ -49,13 +49,13 @@ async function refuseDuplicate(db: Db, shopId: string, name: string, exceptId?: 
 const columns = (m: SlideModel) => ({
   kind: m.kind,
   name: m.name,
-  lengthsMm: m.lengthsMm,
+  lengths: m.lengths,
   widthRule: m.widthRule,
-  widthDeductionMm: m.widthDeductionMm,
-  maxSideThicknessMm: m.maxSideThicknessMm,
-  bottomRecessMm: m.bottomRecessMm,
-  heightClearanceMm: m.heightClearanceMm,
-  rearClearanceMm: m.rearClearanceMm,
+  widthDeduction: m.widthDeduction,
+  maxSideThickness: m.maxSideThickness,
+  bottomRecess: m.bottomRecess,
+  heightClearance: m.heightClearance,
+  rearClearance: m.rearClearance,
 });
 
 export async function createSlideModel({ db, shopId, userId }: SystemScope, model: SlideModel): Promise<SavedSlideModel> {

@@ -37,7 +37,7 @@ export async function listStock({ db, shopId }: ShopScope, filter: StockFilter =
     .select()
     .from(stockItems)
     .where(and(...where))
-    .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm), asc(stockItems.lengthMm));
+    .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thickness), asc(stockItems.length));
   return rows.map((r) => ({ ...r, free: r.onHand - r.reserved, low: isLowStock(r), valueCents: r.onHand * costEachCents(r) }));
 }
 
@@ -53,7 +53,7 @@ export async function listOffcuts({ db, shopId }: ShopScope, filter: StockFilter
     .from(offcuts)
     .leftJoin(plans, eq(plans.id, offcuts.sourcePlanId))
     .where(and(...where))
-    .orderBy(asc(offcuts.material), asc(offcuts.thicknessMm), desc(offcuts.lengthMm))
+    .orderBy(asc(offcuts.material), asc(offcuts.thickness), desc(offcuts.length))
     .then((rows) => rows.map((r) => ({ ...r.offcut, planName: r.planName })));
 }
 
@@ -327,15 +327,15 @@ export async function listCatalogue({ db, shopId }: ShopScope) {
     .select()
     .from(stockItems)
     .where(and(eq(stockItems.shopId, shopId), eq(stockItems.buyable, true)))
-    .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thicknessMm));
+    .orderBy(asc(stockItems.kind), asc(stockItems.material), asc(stockItems.thickness));
   return rows.map((r) => ({
     id: r.id,
     kind: r.kind,
     material: r.material,
     nominalThickness: r.nominalThickness,
-    thicknessMm: r.thicknessMm,
-    lengthMm: r.lengthMm,
-    widthMm: r.widthMm,
+    thickness: r.thickness,
+    length: r.length,
+    width: r.width,
     grain: r.grain,
     supplier: r.supplier,
     costCents: r.costCents,

@@ -28,12 +28,12 @@ export const parts = pgTable(
     label: text('label').notNull(),
     quantity: integer('quantity').notNull(),
     /** Along the grain, joint allowance included. */
-    lengthMm: doublePrecision('length_mm').notNull(),
-    widthMm: doublePrecision('width_mm').notNull(),
-    thicknessMm: doublePrecision('thickness_mm').notNull(),
+    length: doublePrecision('length_mm').notNull(),
+    width: doublePrecision('width_mm').notNull(),
+    thickness: doublePrecision('thickness_mm').notNull(),
     material: text('material').notNull(),
     grain: grainRuleEnum('grain').notNull().default('along-length'),
-    jointAllowanceMm: doublePrecision('joint_allowance_mm').notNull().default(0),
+    jointAllowance: doublePrecision('joint_allowance_mm').notNull().default(0),
     notes: text('notes').notNull().default(''),
     /** Set when the row was derived from a drawer schedule (kept in step with it). */
     drawerScheduleId: uuid('drawer_schedule_id').references(() => drawerSchedules.id, { onDelete: 'cascade' }),
@@ -45,7 +45,7 @@ export const parts = pgTable(
   (t) => [
     index('parts_job_idx').on(t.shopId, t.jobId),
     check('parts_quantity_positive', sql`${t.quantity} > 0`),
-    check('parts_sizes_positive', sql`${t.lengthMm} > 0 and ${t.widthMm} > 0 and ${t.thicknessMm} > 0`),
+    check('parts_sizes_positive', sql`${t.length} > 0 and ${t.width} > 0 and ${t.thickness} > 0`),
   ],
 );
 
@@ -55,7 +55,7 @@ export const setupCards = pgTable(
     id: uuid('id').primaryKey().defaultRandom(),
     shopId: shopIdColumn(),
     joint: text('joint').notNull(),
-    stockThicknessMm: doublePrecision('stock_thickness_mm').notNull(),
+    stockThickness: doublePrecision('stock_thickness_mm').notNull(),
     fields: jsonb('fields').$type<Record<string, number | string>>().notNull(),
     note: text('note').notNull().default(''),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),

@@ -24,12 +24,12 @@ export const recuts = pgTable(
     instance: integer('instance').notNull(),
     quantity: integer('quantity').notNull().default(1),
     /** Along the grain, joint allowance included (as the part). */
-    lengthMm: doublePrecision('length_mm').notNull(),
-    widthMm: doublePrecision('width_mm').notNull(),
-    thicknessMm: doublePrecision('thickness_mm').notNull(),
+    length: doublePrecision('length_mm').notNull(),
+    width: doublePrecision('width_mm').notNull(),
+    thickness: doublePrecision('thickness_mm').notNull(),
     material: text('material').notNull(),
     grain: grainRuleEnum('grain').notNull().default('along-length'),
-    jointAllowanceMm: doublePrecision('joint_allowance_mm').notNull().default(0),
+    jointAllowance: doublePrecision('joint_allowance_mm').notNull().default(0),
     reason: text('reason').notNull().default(''),
     status: recutStatusEnum('status').notNull().default('open'),
     /** The plan at whose finish the damage was recorded. */
@@ -45,6 +45,6 @@ export const recuts = pgTable(
   (t) => [
     index('recuts_job_idx').on(t.shopId, t.jobId, t.status),
     check('recuts_quantity_positive', sql`${t.quantity} > 0`),
-    check('recuts_sizes_positive', sql`${t.lengthMm} > 0 and ${t.widthMm} > 0 and ${t.thicknessMm} > 0`),
+    check('recuts_sizes_positive', sql`${t.length} > 0 and ${t.width} > 0 and ${t.thickness} > 0`),
   ],
 );

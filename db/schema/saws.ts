@@ -15,16 +15,16 @@ export const saws = pgTable(
     kind: text('kind').notNull(),
     kindName: text('kind_name'),
     name: text('name').notNull(),
-    kerfMm: doublePrecision('kerf_mm').notNull(),
-    ripCapacityMm: doublePrecision('rip_capacity_mm'),
-    crosscutCapacityMm: doublePrecision('crosscut_capacity_mm'),
-    maxPieceLengthMm: doublePrecision('max_piece_length_mm'),
-    maxPieceWidthMm: doublePrecision('max_piece_width_mm'),
+    kerf: doublePrecision('kerf_mm').notNull(),
+    ripCapacity: doublePrecision('rip_capacity_mm'),
+    crosscutCapacity: doublePrecision('crosscut_capacity_mm'),
+    maxPieceLength: doublePrecision('max_piece_length_mm'),
+    maxPieceWidth: doublePrecision('max_piece_width_mm'),
     /** 2, 3 or 4; null: any. */
     maxStages: integer('max_stages'),
     /** `rip` or `crosscut`. */
     firstStage: text('first_stage').notNull().default('rip'),
-    minFenceWidthMm: doublePrecision('min_fence_width_mm').notNull(),
+    minFenceWidth: doublePrecision('min_fence_width_mm').notNull(),
     /** The order the shop lists them in: the first is the nest's default. */
     position: integer('position').notNull().default(0),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

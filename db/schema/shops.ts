@@ -7,12 +7,12 @@ export const shops = pgTable('shops', {
   name: text('name').notNull(),
   units: jsonb('units').$type<ShopUnits>().notNull().default({ system: 'imperial', precision: 16, feet: false }),
   currency: text('currency').notNull().default('USD'),
-  kerfMm: doublePrecision('kerf_mm').notNull().default(3.2),
-  edgeTrimMm: doublePrecision('edge_trim_mm').notNull().default(10),
-  minOffcutLengthMm: doublePrecision('min_offcut_length_mm').notNull().default(300),
-  minOffcutWidthMm: doublePrecision('min_offcut_width_mm').notNull().default(100),
+  kerf: doublePrecision('kerf_mm').notNull().default(3.2),
+  edgeTrim: doublePrecision('edge_trim_mm').notNull().default(10),
+  minOffcutLength: doublePrecision('min_offcut_length_mm').notNull().default(300),
+  minOffcutWidth: doublePrecision('min_offcut_width_mm').notNull().default(100),
   /** The narrowest strip a rip may leave between blade and fence (1″ by default, common practice, no source). */
-  minFenceWidthMm: doublePrecision('min_fence_width_mm').notNull().default(25.4),
+  minFenceWidth: doublePrecision('min_fence_width_mm').notNull().default(25.4),
   /** Waste allowance used by takeoffs, in whole percent. */
   wastePercent: integer('waste_percent').notNull().default(15),
   /** IANA time zone: every date shown, grouped and exported is in the shop's own zone. */

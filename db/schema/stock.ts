@@ -15,9 +15,9 @@ export const stockItems = pgTable(
     material: text('material').notNull(),
     /** What the shop calls the thickness: "3/4", "18 mm", "4/4". */
     nominalThickness: text('nominal_thickness').notNull(),
-    thicknessMm: doublePrecision('thickness_mm').notNull(),
-    lengthMm: doublePrecision('length_mm').notNull(),
-    widthMm: doublePrecision('width_mm').notNull(),
+    thickness: doublePrecision('thickness_mm').notNull(),
+    length: doublePrecision('length_mm').notNull(),
+    width: doublePrecision('width_mm').notNull(),
     grain: stockGrainEnum('grain').notNull().default('along-length'),
     /** Boards: rough, S2S, S4S. Empty for sheets. */
     surfacing: text('surfacing').notNull().default(''),
@@ -37,7 +37,7 @@ export const stockItems = pgTable(
     index('stock_items_shop_idx').on(t.shopId),
     check('stock_on_hand_nonnegative', sql`${t.onHand} >= 0`),
     check('stock_reserved_within_on_hand', sql`${t.reserved} >= 0 and ${t.reserved} <= ${t.onHand}`),
-    check('stock_sizes_positive', sql`${t.lengthMm} > 0 and ${t.widthMm} > 0 and ${t.thicknessMm} > 0`),
+    check('stock_sizes_positive', sql`${t.length} > 0 and ${t.width} > 0 and ${t.thickness} > 0`),
   ],
 );
 
@@ -47,9 +47,9 @@ export const offcuts = pgTable(
     id: uuid('id').primaryKey().defaultRandom(),
     shopId: shopIdColumn(),
     material: text('material').notNull(),
-    thicknessMm: doublePrecision('thickness_mm').notNull(),
-    lengthMm: doublePrecision('length_mm').notNull(),
-    widthMm: doublePrecision('width_mm').notNull(),
+    thickness: doublePrecision('thickness_mm').notNull(),
+    length: doublePrecision('length_mm').notNull(),
+    width: doublePrecision('width_mm').notNull(),
     grain: stockGrainEnum('grain').notNull().default('along-length'),
     status: offcutStatusEnum('status').notNull().default('available'),
     location: text('location').notNull().default(''),
@@ -61,7 +61,7 @@ export const offcuts = pgTable(
   },
   (t) => [
     index('offcuts_shop_idx').on(t.shopId, t.status),
-    check('offcut_sizes_positive', sql`${t.lengthMm} > 0 and ${t.widthMm} > 0 and ${t.thicknessMm} > 0`),
+    check('offcut_sizes_positive', sql`${t.length} > 0 and ${t.width} > 0 and ${t.thickness} > 0`),
     check('offcut_cost_nonnegative', sql`${t.costCents} >= 0`),
   ],
 );

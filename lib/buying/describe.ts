@@ -10,9 +10,9 @@ export type { DescribedSize };
  */
 export function describeSize(s: DescribedSize, units: ShopUnits): string {
   const len = (mm: number) => quoteLength(mm, units);
-  const thick = s.nominalThickness ? quoteNominal(s.nominalThickness) : len(s.thicknessMm);
+  const thick = s.nominalThickness ? quoteNominal(s.nominalThickness) : len(s.thickness);
   const board = s.kind === 'board' ? [s.surfacing, s.grade].filter(Boolean).join(' ') : '';
-  return `${s.material} ${thick}${board ? ` ${board}` : ''}, ${len(s.lengthMm)} × ${len(s.widthMm)}`;
+  return `${s.material} ${thick}${board ? ` ${board}` : ''}, ${len(s.length)} × ${len(s.width)}`;
 }
 
 /** The unit a line's cost is per: each sheet or board, or per board foot for boards. */

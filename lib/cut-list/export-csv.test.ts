@@ -13,12 +13,12 @@ const METRIC: ShopUnits = { system: 'metric', precision: 1, feet: false };
 const part = (over: Partial<ExportPart> = {}): ExportPart => ({
   label: 'Drawer side',
   quantity: 8,
-  lengthMm: inches(19.75),
-  widthMm: inches(5.5),
-  thicknessMm: inches(0.5),
+  length: inches(19.75),
+  width: inches(5.5),
+  thickness: inches(0.5),
   material: 'Baltic birch',
   grain: 'along-length',
-  jointAllowanceMm: 0,
+  jointAllowance: 0,
   notes: '',
   ...over,
 });
@@ -26,7 +26,7 @@ const cells = (csv: string) => Papa.parse<string[]>(csv.trim()).data;
 
 describe('exporting the cut list to CSV', () => {
   test('lengths are in the shop’s unit with plain quotes, one row per part, with the header words the upload reads', () => {
-    const rows = cells(cutListCsv([part({ schedule: 'Kitchen drawers', jointAllowanceMm: inches(0.25) })], IMPERIAL));
+    const rows = cells(cutListCsv([part({ schedule: 'Kitchen drawers', jointAllowance: inches(0.25) })], IMPERIAL));
     expect(rows[0]).toEqual([
       'Part',
       'Quantity',
@@ -43,7 +43,7 @@ describe('exporting the cut list to CSV', () => {
   });
 
   test('every length is in its column’s unit: off the 1/32″ grid an inch shop gets decimal inches, not mm (355.41 mm = 13.9925″, NIST 25.4 mm/in)', () => {
-    const rows = cells(cutListCsv([part({ lengthMm: 355.41, widthMm: 18, thicknessMm: 12, jointAllowanceMm: 4.7625 })], IMPERIAL));
+    const rows = cells(cutListCsv([part({ length: 355.41, width: 18, thickness: 12, jointAllowance: 4.7625 })], IMPERIAL));
     expect(rows[0].slice(2, 5)).toEqual(['Length (in)', 'Width (in)', 'Thickness (in)']);
     expect(rows[1].slice(2, 5)).toEqual(['13.9925"', '0.7087"', '0.4724"']);
     // 4.7625 mm is exactly 3/16″.
@@ -52,7 +52,7 @@ describe('exporting the cut list to CSV', () => {
   });
 
   test('a metric shop’s columns hold millimetres', () => {
-    const rows = cells(cutListCsv([part({ lengthMm: 355.41, widthMm: inches(0.5) })], METRIC));
+    const rows = cells(cutListCsv([part({ length: 355.41, width: inches(0.5) })], METRIC));
     expect(rows[0][2]).toBe('Length (mm)');
     expect(rows[1].slice(2, 4)).toEqual(['355.41 mm', '12.7 mm']);
   });
@@ -81,9 +81,9 @@ describe('exporting the cut list to CSV', () => {
               .string({ minLength: 1, maxLength: 20 })
               .filter((s) => s.trim() === s && s.length > 0 && !/^[=+\-@\t\r]/.test(s) && !/[\u0000-\u001F\u007F]/.test(s)),
             quantity: fc.integer({ min: 1, max: 50 }),
-            lengthMm: fc.integer({ min: 20, max: 2400 }),
-            widthMm: fc.integer({ min: 20, max: 1200 }),
-            thicknessMm: fc.constantFrom(6, 12, 18, 25),
+            length: fc.integer({ min: 20, max: 2400 }),
+            width: fc.integer({ min: 20, max: 1200 }),
+            thickness: fc.constantFrom(6, 12, 18, 25),
             grain: fc.constantFrom('along-length' as const, 'any' as const),
           }),
           { minLength: 1, maxLength: 8 },
@@ -97,7 +97,7 @@ describe('exporting the cut list to CSV', () => {
           const upload = toUploadRows(grid, guessMapping(grid[0]), { hasHeader: true });
           const report = validateUploadRows({ ...upload, unit: 'mm' });
           expect(report.invalidCount).toBe(0);
-          expect(report.valid.map((v) => v.part)).toEqual(parts.map((p) => ({ ...p, material: 'MDF', jointAllowanceMm: 0, notes: '' })));
+          expect(report.valid.map((v) => v.part)).toEqual(parts.map((p) => ({ ...p, material: 'MDF', jointAllowance: 0, notes: '' })));
         },
       ),
     );

@@ -14,12 +14,12 @@ export const FORMULA_START = /^[=+\-@\t\r]/;
 export interface ExportPart {
   label: string;
   quantity: number;
-  lengthMm: number;
-  widthMm: number;
-  thicknessMm: number;
+  length: number;
+  width: number;
+  thickness: number;
   material: string;
   grain: GrainRule;
-  jointAllowanceMm: number;
+  jointAllowance: number;
   notes: string;
   /** The drawer schedule a row comes from, if any. */
   schedule?: string | null;
@@ -47,7 +47,7 @@ export function cutListCsv(parts: readonly ExportPart[], units: ShopUnits): stri
   const fields = [...PART_FIELDS.map((f) => (f.kind === 'length' ? `${f.csv} (${unit})` : f.csv)), 'Drawer schedule'];
   const cell = (p: ExportPart, f: PartFieldRow): string | number => {
     if (f.key === 'grain') return p.grain === 'along-length' ? 'along' : 'any';
-    if (f.key === 'jointAllowanceMm') return p.jointAllowanceMm > 0 ? len(p.jointAllowanceMm) : '';
+    if (f.key === 'jointAllowance') return p.jointAllowance > 0 ? len(p.jointAllowance) : '';
     if (f.kind === 'length') return len(p[f.key] as number);
     return p[f.key];
   };

@@ -31,19 +31,19 @@ const nominalMm = (nominal: string): number | null => {
  * The stock room's actual thickness for a part typed with the nominal or a near value, so the part nests on that
  * stock; the typed thickness when no stock of the material is near it.
  */
-export function snapThickness(material: string, thicknessMm: number, offers: readonly StockOffer[]): number {
+export function snapThickness(material: string, thickness: number, offers: readonly StockOffer[]): number {
   let best: { mm: number; off: number } | null = null;
   for (const o of offersOf(offers, material)) {
     const nominal = nominalMm(o.nominal);
-    const off = Math.min(Math.abs(o.thicknessMm - thicknessMm), nominal === null ? Infinity : Math.abs(nominal - thicknessMm));
-    if (off <= THICKNESS_SNAP_MM && (!best || off < best.off)) best = { mm: o.thicknessMm, off };
+    const off = Math.min(Math.abs(o.thickness - thickness), nominal === null ? Infinity : Math.abs(nominal - thickness));
+    if (off <= THICKNESS_SNAP_MM && (!best || off < best.off)) best = { mm: o.thickness, off };
   }
-  return best ? best.mm : thicknessMm;
+  return best ? best.mm : thickness;
 }
 
 /** One thickness the stock room has in a material, as a picker offers it. */
 export interface ThicknessChoice {
-  thicknessMm: number;
+  thickness: number;
   /** Text that reads back to exactly this thickness (for a length field). */
   text: string;
   /** "3/4″ sheet · 18 mm actual", "4/4 board · 13/16″ actual", "offcuts · 6 mm". */
@@ -63,17 +63,17 @@ export const typesetNominal = (nominal: string) => nominal.trim().replace(/"/g, 
 export function thicknessChoices(material: string, offers: readonly StockOffer[], units: ShopUnits): ThicknessChoice[] {
   const byThickness = new Map<number, StockOffer[]>();
   for (const o of offersOf(offers, material)) {
-    const key = [...byThickness.keys()].find((t) => Math.abs(t - o.thicknessMm) <= THICKNESS_MATCH_TOLERANCE_MM) ?? o.thicknessMm;
+    const key = [...byThickness.keys()].find((t) => Math.abs(t - o.thickness) <= THICKNESS_MATCH_TOLERANCE_MM) ?? o.thickness;
     byThickness.set(key, [...(byThickness.get(key) ?? []), o]);
   }
   return [...byThickness.entries()]
     .sort(([a], [b]) => a - b)
-    .map(([thicknessMm, group]) => {
-      const text = exactLengthText(thicknessMm, units);
+    .map(([thickness, group]) => {
+      const text = exactLengthText(thickness, units);
       const bought = group.filter((o) => o.kind !== 'offcut');
       const names = [...new Set(bought.map((o) => (o.nominal.trim() ? `${typesetNominal(o.nominal)} ${KIND_NAMES[o.kind]}` : KIND_NAMES[o.kind])))];
       const label = names.length ? `${names.join(', ')} · ${text} actual` : `offcuts · ${text}`;
-      return { thicknessMm, text, label };
+      return { thickness, text, label };
     });
 }
 
@@ -81,13 +81,13 @@ export function thicknessChoices(material: string, offers: readonly StockOffer[]
  * A warning when nothing in the stock room matches the part's material and thickness, naming what it does have;
  * null when something matches (the nesting engine's 0.01 mm).
  */
-export function stockMatchWarning(part: { material: string; thicknessMm: number }, offers: readonly StockOffer[], units: ShopUnits): string | null {
+export function stockMatchWarning(part: { material: string; thickness: number }, offers: readonly StockOffer[], units: ShopUnits): string | null {
   const name = part.material.trim();
   const choices = thicknessChoices(name, offers, units);
   if (choices.length === 0) return `The stock room has no ${name} at all: add it there before nesting, or pick a material it has.`;
-  if (choices.some((c) => Math.abs(c.thicknessMm - part.thicknessMm) <= THICKNESS_MATCH_TOLERANCE_MM)) return null;
+  if (choices.some((c) => Math.abs(c.thickness - part.thickness) <= THICKNESS_MATCH_TOLERANCE_MM)) return null;
   const have = choices.map((c) => c.label).join('; ');
-  return `The stock room has no ${name} ${exactLengthText(part.thicknessMm, units)} thick. It has: ${have}. Pick one of those, or add this thickness to the stock room before nesting.`;
+  return `The stock room has no ${name} ${exactLengthText(part.thickness, units)} thick. It has: ${have}. Pick one of those, or add this thickness to the stock room before nesting.`;
 }
 
 /** Solid wood is what the stock room holds as boards (sold by the board foot). */
@@ -95,27 +95,27 @@ export const isSolidWood = (material: string, offers: readonly StockOffer[]) => 
 
 /** The stock room's sheets and boards (any count: a size the shop keeps can be bought) and its available offcuts. */
 export function toStockOffers(
-  items: readonly { material: string; kind: 'sheet' | 'board'; thicknessMm: number; nominalThickness: string }[],
-  offcuts: readonly { material: string; thicknessMm: number; status: string }[],
+  items: readonly { material: string; kind: 'sheet' | 'board'; thickness: number; nominalThickness: string }[],
+  offcuts: readonly { material: string; thickness: number; status: string }[],
 ): StockOffer[] {
   const all: StockOffer[] = [
-    ...items.map((i) => ({ material: i.material, kind: i.kind, thicknessMm: i.thicknessMm, nominal: i.nominalThickness })),
+    ...items.map((i) => ({ material: i.material, kind: i.kind, thickness: i.thickness, nominal: i.nominalThickness })),
     ...offcuts
       .filter((o) => o.status === 'available')
-      .map((o) => ({ material: o.material, kind: 'offcut' as const, thicknessMm: o.thicknessMm, nominal: '' })),
+      .map((o) => ({ material: o.material, kind: 'offcut' as const, thickness: o.thickness, nominal: '' })),
   ];
   // One offer per material, kind and thickness: a picker lists each once.
   const seen = new Map<string, StockOffer>();
   for (const o of all)
-    seen.set(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`, seen.get(`${o.material.toLowerCase()}|${o.kind}|${o.thicknessMm}`) ?? o);
+    seen.set(`${o.material.toLowerCase()}|${o.kind}|${o.thickness}`, seen.get(`${o.material.toLowerCase()}|${o.kind}|${o.thickness}`) ?? o);
   return [...seen.values()];
 }
 
 /** Uploaded thicknesses written as the nominal ("3/4") become the stock's actual thickness, as in the editor. */
 export function snapReport(report: UploadReport, offers: readonly StockOffer[]): UploadReport {
-  const snap = <T extends { part: { material: string; thicknessMm: number } }>(r: T): T => ({
+  const snap = <T extends { part: { material: string; thickness: number } }>(r: T): T => ({
     ...r,
-    part: { ...r.part, thicknessMm: snapThickness(r.part.material, r.part.thicknessMm, offers) },
+    part: { ...r.part, thickness: snapThickness(r.part.material, r.part.thickness, offers) },
   });
   return { ...report, valid: report.valid.map(snap), rows: report.rows.map((r) => (r.ok ? snap(r) : r)) };
 }

@@ -4,16 +4,16 @@ import { snapThickness, stockMatchWarning, thicknessChoices, type StockOffer } f
 import { cutListTotals } from './totals';
 
 const OFFERS: StockOffer[] = [
-  { material: 'White oak', kind: 'board', thicknessMm: inches(13 / 16), nominal: '4/4' },
-  { material: 'Maple ply', kind: 'sheet', thicknessMm: inches(23 / 32), nominal: '3/4"' },
-  { material: 'Maple ply', kind: 'offcut', thicknessMm: 6, nominal: '' },
-  { material: 'MDF', kind: 'sheet', thicknessMm: 18, nominal: '3/4"' },
+  { material: 'White oak', kind: 'board', thickness: inches(13 / 16), nominal: '4/4' },
+  { material: 'Maple ply', kind: 'sheet', thickness: inches(23 / 32), nominal: '3/4"' },
+  { material: 'Maple ply', kind: 'offcut', thickness: 6, nominal: '' },
+  { material: 'MDF', kind: 'sheet', thickness: 18, nominal: '3/4"' },
 ];
 const UNITS = { system: 'imperial', precision: 16, feet: false } as const;
 
 describe('cut list totals', () => {
   test('a 1″ × 12″ × 12″ solid piece is one board foot (AHEC, "Measurement": 144 in³)', () => {
-    const t = cutListTotals([{ quantity: 1, lengthMm: inches(12), widthMm: inches(12), thicknessMm: inches(1), material: 'white oak' }], OFFERS);
+    const t = cutListTotals([{ quantity: 1, length: inches(12), width: inches(12), thickness: inches(1), material: 'white oak' }], OFFERS);
     expect(t.boardFeet).toBeCloseTo(1, 12);
     expect(t.solidPieces).toBe(1);
   });
@@ -21,8 +21,8 @@ describe('cut list totals', () => {
   test('pieces and area count every quantity; sheet parts add no board feet', () => {
     const t = cutListTotals(
       [
-        { quantity: 4, lengthMm: 1000, widthMm: 500, thicknessMm: 18, material: 'Maple ply' },
-        { quantity: 2, lengthMm: inches(24), widthMm: inches(6), thicknessMm: inches(1), material: 'White oak' },
+        { quantity: 4, length: 1000, width: 500, thickness: 18, material: 'Maple ply' },
+        { quantity: 2, length: inches(24), width: inches(6), thickness: inches(1), material: 'White oak' },
       ],
       OFFERS,
     );
@@ -40,16 +40,16 @@ describe('matching a part to the stock room', () => {
     ['Maple ply', inches(3 / 4), 'The stock room has no Maple ply 3/4″ thick. It has: offcuts · 6 mm; 3/4″ sheet · 23/32″ actual.'],
     ['Maple ply', 12, 'The stock room has no Maple ply 12 mm thick. It has: offcuts · 6 mm; 3/4″ sheet · 23/32″ actual.'],
     ['Walnut', 19, 'The stock room has no Walnut at all'],
-  ] as const)('%s at %f mm → %s (the nesting engine’s 0.01 mm match)', (material, thicknessMm, warning) => {
-    const result = stockMatchWarning({ material, thicknessMm }, OFFERS, UNITS);
+  ] as const)('%s at %f mm → %s (the nesting engine’s 0.01 mm match)', (material, thickness, warning) => {
+    const result = stockMatchWarning({ material, thickness }, OFFERS, UNITS);
     if (warning === null) expect(result).toBeNull();
     else expect(result).toContain(warning);
   });
 
   test('the warning never says the stock room has a thickness it says the part is not (a rounded ≈ size)', () => {
     // Stock at 12 mm and a part at ½″ (12.7 mm): both would show as ≈1/2″ to the sixteenth.
-    const offers: StockOffer[] = [{ material: 'Baltic birch', kind: 'sheet', thicknessMm: 12, nominal: '1/2"' }];
-    const warning = stockMatchWarning({ material: 'Baltic birch', thicknessMm: inches(1 / 2) }, offers, UNITS)!;
+    const offers: StockOffer[] = [{ material: 'Baltic birch', kind: 'sheet', thickness: 12, nominal: '1/2"' }];
+    const warning = stockMatchWarning({ material: 'Baltic birch', thickness: inches(1 / 2) }, offers, UNITS)!;
     expect(warning).toContain('no Baltic birch 1/2″ thick');
     expect(warning).toContain('1/2″ sheet · 12 mm actual');
     expect(warning).not.toContain('≈');
@@ -59,16 +59,16 @@ describe('matching a part to the stock room', () => {
 describe('the thicknesses a picker offers', () => {
   test('one choice per actual thickness, thinnest first, named by nominal thickness and kind, with the actual size', () => {
     const offers: StockOffer[] = [
-      { material: 'Baltic birch', kind: 'sheet', thicknessMm: 18, nominal: '3/4"' },
-      { material: 'Baltic birch', kind: 'sheet', thicknessMm: 12, nominal: '1/2"' },
-      { material: 'baltic birch', kind: 'offcut', thicknessMm: 12, nominal: '' },
-      { material: 'Baltic birch', kind: 'offcut', thicknessMm: 9, nominal: '' },
-      { material: 'Maple ply', kind: 'sheet', thicknessMm: 6, nominal: '1/4"' },
+      { material: 'Baltic birch', kind: 'sheet', thickness: 18, nominal: '3/4"' },
+      { material: 'Baltic birch', kind: 'sheet', thickness: 12, nominal: '1/2"' },
+      { material: 'baltic birch', kind: 'offcut', thickness: 12, nominal: '' },
+      { material: 'Baltic birch', kind: 'offcut', thickness: 9, nominal: '' },
+      { material: 'Maple ply', kind: 'sheet', thickness: 6, nominal: '1/4"' },
     ];
     expect(thicknessChoices('Baltic birch', offers, UNITS)).toEqual([
-      { thicknessMm: 9, text: '9 mm', label: 'offcuts · 9 mm' },
-      { thicknessMm: 12, text: '12 mm', label: '1/2″ sheet · 12 mm actual' },
-      { thicknessMm: 18, text: '18 mm', label: '3/4″ sheet · 18 mm actual' },
+      { thickness: 9, text: '9 mm', label: 'offcuts · 9 mm' },
+      { thickness: 12, text: '12 mm', label: '1/2″ sheet · 12 mm actual' },
+      { thickness: 18, text: '18 mm', label: '3/4″ sheet · 18 mm actual' },
     ]);
     // 23/32″ is on the 1/32″ grid, so an imperial shop reads it as a fraction (common practice, no source).
     expect(thicknessChoices('Maple ply', OFFERS, UNITS).map((c) => c.text)).toEqual(['6 mm', '23/32″']);

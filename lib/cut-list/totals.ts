@@ -13,16 +13,16 @@ export interface CutListTotals {
 }
 
 export function cutListTotals(
-  parts: readonly { quantity: number; lengthMm: number; widthMm: number; thicknessMm: number; material: string }[],
+  parts: readonly { quantity: number; length: number; width: number; thickness: number; material: string }[],
   offers: readonly StockOffer[],
 ): CutListTotals {
   const totals: CutListTotals = { pieces: 0, rows: parts.length, areaMm2: 0, boardFeet: 0, solidPieces: 0 };
   for (const p of parts) {
     totals.pieces += p.quantity;
-    totals.areaMm2 += p.lengthMm * p.widthMm * p.quantity;
+    totals.areaMm2 += p.length * p.width * p.quantity;
     if (isSolidWood(p.material, offers)) {
       totals.solidPieces += p.quantity;
-      totals.boardFeet += p.quantity * boardFeet({ thickness: { mm: p.thicknessMm }, widthMm: p.widthMm, lengthMm: p.lengthMm });
+      totals.boardFeet += p.quantity * boardFeet({ thickness: { mm: p.thickness }, width: p.width, length: p.length });
     }
   }
   return totals;

@@ -47,22 +47,20 @@ describe('reading a good file', () => {
     expect(report.invalidCount).toBe(0);
     const [side, bottom, stile] = report.valid.map((v) => v.part);
     expect(side).toMatchObject({ label: 'Drawer side', quantity: 8, material: 'Baltic birch', grain: 'along-length', notes: 'lock rabbet' });
-    expect(side.lengthMm).toBeCloseTo(inches(19.75), 9);
-    expect(side.widthMm).toBeCloseTo(inches(5.5), 9);
-    expect(side.thicknessMm).toBeCloseTo(12.7, 9);
-    expect(side.jointAllowanceMm).toBeCloseTo(6.35, 9);
+    expect(side.length).toBeCloseTo(inches(19.75), 9);
+    expect(side.width).toBeCloseTo(inches(5.5), 9);
+    expect(side.thickness).toBeCloseTo(12.7, 9);
+    expect(side.jointAllowance).toBeCloseTo(6.35, 9);
     expect(bottom.grain).toBe('any');
-    expect(bottom.lengthMm).toBeCloseTo(inches(13 + 7 / 16), 9);
-    expect(stile.lengthMm).toBeCloseTo(inches(21), 9);
+    expect(bottom.length).toBeCloseTo(inches(13 + 7 / 16), 9);
+    expect(stile.length).toBeCloseTo(inches(21), 9);
   });
 
   test('a metric XLSX reads the same way, numbers and text cells alike', async () => {
     const { report, guess } = await pipeline('vanity.xlsx', fixture('vanity-metric.xlsx'));
     expect(guess.unit).toBe('mm');
     expect(report.invalidCount).toBe(0);
-    expect(
-      report.valid.map((v) => [v.line, v.part.label, v.part.quantity, v.part.lengthMm, v.part.widthMm, v.part.thicknessMm, v.part.grain]),
-    ).toEqual([
+    expect(report.valid.map((v) => [v.line, v.part.label, v.part.quantity, v.part.length, v.part.width, v.part.thickness, v.part.grain])).toEqual([
       [2, 'Side', 2, 720, 560, 18, 'along-length'],
       [3, 'Shelf', 1, 764, 540, 18, 'any'],
       [4, 'Top rail', 1, 764, 100, 18, 'along-length'],
@@ -71,12 +69,12 @@ describe('reading a good file', () => {
 
   test('a semicolon-separated CSV with a byte-order mark and decimal commas, as European spreadsheets save it', async () => {
     const { report } = await pipeline('eu.csv', bytes('\uFEFFPart;Qty;Length;Width;Thickness;Material\nSide;2;"502,5 mm";300;18;MDF\n'));
-    expect(report.valid[0].part).toMatchObject({ label: 'Side', lengthMm: 502.5, widthMm: 300, thicknessMm: 18, material: 'MDF' });
+    expect(report.valid[0].part).toMatchObject({ label: 'Side', length: 502.5, width: 300, thickness: 18, material: 'MDF' });
   });
 
   test('a unit written in a cell wins over the unit chosen for bare numbers', async () => {
     const { report } = await pipeline('mixed.csv', bytes('Part,Qty,Length,Width,Thickness,Material\nShelf,1,600 mm,12",18mm,MDF\n'), 'in');
-    expect(report.valid[0].part).toMatchObject({ lengthMm: 600, widthMm: 304.8, thicknessMm: 18 });
+    expect(report.valid[0].part).toMatchObject({ length: 600, width: 304.8, thickness: 18 });
   });
 
   test('blank rows are skipped and counted, and line numbers still point at the file', async () => {

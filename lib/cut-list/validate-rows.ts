@@ -93,7 +93,7 @@ function readPart(raw: RawCells, unit: LengthUnit, problems: RowProblem[]) {
     if (!v) problems.push({ field, message: `${CUT_LIST_FIELD_LABELS[field]} is empty.` });
     return v || undefined;
   };
-  const length = (field: CutListField, text: string | undefined): number | undefined => {
+  const lengthIn = (field: CutListField, text: string | undefined): number | undefined => {
     if (text === undefined) return undefined;
     const parsed = parseLength(text, { unit });
     if (parsed.ok) return parsed.mm;
@@ -108,20 +108,20 @@ function readPart(raw: RawCells, unit: LengthUnit, problems: RowProblem[]) {
     if (/^\d+$/.test(quantityText)) quantity = Number(quantityText);
     else problems.push({ field: 'quantity', message: `Quantity “${quantityText}” is not a whole number.` });
   }
-  const lengthMm = length('length', need('length'));
-  const widthMm = length('width', need('width'));
-  const thicknessMm = length('thickness', need('thickness'));
-  if (thicknessMm !== undefined && thicknessMm < MIN_PART_THICKNESS_MM)
+  const length = lengthIn('length', need('length'));
+  const width = lengthIn('width', need('width'));
+  const thickness = lengthIn('thickness', need('thickness'));
+  if (thickness !== undefined && thickness < MIN_PART_THICKNESS_MM)
     problems.push({
       field: 'thickness',
-      message: `Thickness “${raw.thickness}” reads as ${thicknessMm} mm — thinner than any stock. If it is inches, choose inches or write ${raw.thickness}″.`,
+      message: `Thickness “${raw.thickness}” reads as ${thickness} mm — thinner than any stock. If it is inches, choose inches or write ${raw.thickness}″.`,
     });
   const material = need('material');
   const grain = bad.has('grain') ? 'along-length' : readGrain(raw.grain, problems);
-  const jointAllowanceMm = raw.jointAllowance ? length('jointAllowance', raw.jointAllowance) : 0;
-  if (jointAllowanceMm !== undefined && lengthMm !== undefined && jointAllowanceMm >= lengthMm)
+  const jointAllowance = raw.jointAllowance ? lengthIn('jointAllowance', raw.jointAllowance) : 0;
+  if (jointAllowance !== undefined && length !== undefined && jointAllowance >= length)
     problems.push({ field: 'jointAllowance', message: 'Joint allowance is part of the length, so it must be shorter than the length.' });
-  return { label, quantity, lengthMm, widthMm, thicknessMm, material, grain, jointAllowanceMm };
+  return { label, quantity, length, width, thickness, material, grain, jointAllowance };
 }
 
 /** Along the length unless the cell says otherwise in words the shop uses. */
@@ -136,12 +136,12 @@ function readGrain(text: string | undefined, problems: RowProblem[]): GrainRule 
 const COLUMN_OF: Record<string, CutListField> = {
   label: 'label',
   quantity: 'quantity',
-  lengthMm: 'length',
-  widthMm: 'width',
-  thicknessMm: 'thickness',
+  length: 'length',
+  width: 'width',
+  thickness: 'thickness',
   material: 'material',
   grain: 'grain',
-  jointAllowanceMm: 'jointAllowance',
+  jointAllowance: 'jointAllowance',
   notes: 'notes',
 };
 const schemaFieldToColumn = (key: string): CutListField | 'row' => COLUMN_OF[key] ?? 'row';

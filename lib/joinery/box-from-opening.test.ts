@@ -14,36 +14,36 @@ describe('box from the opening', () => {
   });
 
   test('a given box size is taken as it is', () => {
-    const result = boxFromOpening(parse({ size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 } }));
-    expect(result).toMatchObject({ ok: true, box: { widthMm: 400, heightMm: 150, depthMm: 500 }, slideLengthMm: null });
+    const result = boxFromOpening(parse({ size: { from: 'box', width: 400, height: 150, depth: 500 } }));
+    expect(result).toMatchObject({ ok: true, box: { width: 400, height: 150, depth: 500 }, slideLength: null });
   });
 
   test('side-mount slides: box height is the opening less ½″ (common practice, no source)', () => {
-    const result = boxFromOpening(parse({ size: { from: 'opening', widthMm: inches(15), heightMm: inches(6), depthMm: inches(24) } }));
+    const result = boxFromOpening(parse({ size: { from: 'opening', width: inches(15), height: inches(6), depth: inches(24) } }));
     if (!result.ok) throw new Error('refused');
-    expect(result.box.heightMm).toBeCloseTo(inches(5.5), 9);
-    expect(result.slideLengthMm).toBeCloseTo(inches(22), 9); // 24″ less ½″ back clearance fits a 22″ slide
+    expect(result.box.height).toBeCloseTo(inches(5.5), 9);
+    expect(result.slideLength).toBeCloseTo(inches(22), 9); // 24″ less ½″ back clearance fits a 22″ slide
   });
 
   test('undermount slides take the maker’s height deduction', () => {
     const result = boxFromOpening(
       parse({
-        size: { from: 'opening', widthMm: 500, heightMm: 200, depthMm: 560 },
-        slide: { type: 'undermount', heightDeductionMm: 25, widthDeductionMm: 16 },
+        size: { from: 'opening', width: 500, height: 200, depth: 560 },
+        slide: { type: 'undermount', heightDeduction: 25, widthDeduction: 16 },
       }),
     );
-    expect(result).toMatchObject({ ok: true, box: { widthMm: 484, heightMm: 175 } });
+    expect(result).toMatchObject({ ok: true, box: { width: 484, height: 175 } });
   });
 
   test('a chosen slide longer than the opening is deep is refused on that field', () => {
     const result = boxFromOpening(
-      parse({ size: { from: 'opening', widthMm: 500, heightMm: 200, depthMm: 400, depthRule: { rule: 'slide-length', slideLengthMm: 450 } } }),
+      parse({ size: { from: 'opening', width: 500, height: 200, depth: 400, depthRule: { rule: 'slide-length', slideLength: 450 } } }),
     );
-    expect(result).toMatchObject({ ok: false, errors: [{ path: 'size.depthRule.slideLengthMm' }] });
+    expect(result).toMatchObject({ ok: false, errors: [{ path: 'size.depthRule.slideLength' }] });
   });
 
   test('an opening lower than the height clearance is refused on its height', () => {
-    const result = boxFromOpening(parse({ size: { from: 'opening', widthMm: 500, heightMm: 10, depthMm: 560 } }));
-    expect(result).toMatchObject({ ok: false, errors: [{ path: 'size.heightMm' }] });
+    const result = boxFromOpening(parse({ size: { from: 'opening', width: 500, height: 10, depth: 560 } }));
+    expect(result).toMatchObject({ ok: false, errors: [{ path: 'size.height' }] });
   });
 });

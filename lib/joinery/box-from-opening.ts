@@ -13,30 +13,30 @@ type DepthRule = NonNullable<Opening['depthRule']>;
  * less a back clearance). Refuses, field by field, any length that is not a finite number from 0 to 3 m.
  */
 export function boxFromOpening(
-  schedule: Pick<DrawerSchedule, 'size' | 'slide'> & { thickness?: Pick<DrawerSchedule['thickness'], 'sideMm'> },
-): Result<{ box: BoxSize; slideLengthMm: Mm | null; notes: string[] }> {
+  schedule: Pick<DrawerSchedule, 'size' | 'slide'> & { thickness?: Pick<DrawerSchedule['thickness'], 'side'> },
+): Result<{ box: BoxSize; slideLength: Mm | null; notes: string[] }> {
   const { size, slide } = schedule;
   const unreadable = [...lengthErrors({ size, slide, thickness: schedule.thickness }), ...sizeErrors(size)];
   if (unreadable.length) return { ok: false, errors: unreadable };
   if (size.from === 'box') {
-    return { ok: true, box: { widthMm: size.widthMm, heightMm: size.heightMm, depthMm: size.depthMm }, slideLengthMm: null, notes: [] };
+    return { ok: true, box: { width: size.width, height: size.height, depth: size.depth }, slideLength: null, notes: [] };
   }
 
   const model = slide.type === 'side-mount' || slide.type === 'undermount' ? slide.model : undefined;
-  const width = model ? modelWidth(model, size.widthMm, schedule.thickness?.sideMm) : clearanceWidth(slide, size.widthMm);
-  const heightDeduction = model ? model.heightClearanceMm : slide.type === 'undermount' ? slide.heightDeductionMm : slide.heightClearanceMm;
-  const heightMm = size.heightMm - heightDeduction;
+  const width = model ? modelWidth(model, size.width, schedule.thickness?.side) : clearanceWidth(slide, size.width);
+  const heightDeduction = model ? model.heightClearance : slide.type === 'undermount' ? slide.heightDeduction : slide.heightClearance;
+  const height = size.height - heightDeduction;
   const errors: FieldError[] = [];
-  if (width.widthMm <= 0) {
+  if (width.width <= 0) {
     errors.push({
-      path: 'size.widthMm',
-      message: `The opening (${mmText(size.widthMm)}) is narrower than the slides take (${mmText(size.widthMm - width.widthMm)})`,
+      path: 'size.width',
+      message: `The opening (${mmText(size.width)}) is narrower than the slides take (${mmText(size.width - width.width)})`,
     });
   }
-  if (heightMm <= 0) {
+  if (height <= 0) {
     errors.push({
-      path: 'size.heightMm',
-      message: `The opening (${mmText(size.heightMm)}) is lower than the slides take (${mmText(heightDeduction)})`,
+      path: 'size.height',
+      message: `The opening (${mmText(size.height)}) is lower than the slides take (${mmText(heightDeduction)})`,
     });
   }
 
@@ -44,15 +44,15 @@ export function boxFromOpening(
   const rule: DepthRule =
     size.depthRule ??
     (slide.type === 'side-mount' || slide.type === 'undermount'
-      ? { rule: 'longest-standard-slide', series, backClearanceMm: DRAWER_DEFAULTS.backClearance }
-      : { rule: 'opening-less-clearance', backClearanceMm: DRAWER_DEFAULTS.backClearance });
-  const depth = model && rule.rule === 'longest-standard-slide' ? modelDepth(model, size.depthMm) : boxDepth(size.depthMm, rule);
+      ? { rule: 'longest-standard-slide', series, backClearance: DRAWER_DEFAULTS.backClearance }
+      : { rule: 'opening-less-clearance', backClearance: DRAWER_DEFAULTS.backClearance });
+  const depth = model && rule.rule === 'longest-standard-slide' ? modelDepth(model, size.depth) : boxDepth(size.depth, rule);
   if (!depth.ok) errors.push(...depth.errors);
   if (errors.length > 0 || !depth.ok) return { ok: false, errors };
 
-  const notes = [width.note(width.widthMm), ...depth.notes];
-  if (model) notes.push(`Box ${mmText(heightMm)} high = opening ${mmText(size.heightMm)} − ${specText(heightDeduction)} for the ${model.name}.`);
-  return { ok: true, box: { widthMm: width.widthMm, heightMm, depthMm: depth.depthMm }, slideLengthMm: depth.slideLengthMm, notes };
+  const notes = [width.note(width.width), ...depth.notes];
+  if (model) notes.push(`Box ${mmText(height)} high = opening ${mmText(size.height)} − ${specText(heightDeduction)} for the ${model.name}.`);
+  return { ok: true, box: { width: width.width, height, depth: depth.depth }, slideLength: depth.slideLength, notes };
 }
 
 type Model = NonNullable<Extract<DrawerSchedule['slide'], { type: 'undermount' }>['model']>;
@@ -60,17 +60,17 @@ type Model = NonNullable<Extract<DrawerSchedule['slide'], { type: 'undermount' }
 /** The box width by the series' or runners' clearance each side, or the generic undermount deduction. */
 function clearanceWidth(slide: DrawerSchedule['slide'], openingWidth: Mm) {
   if (slide.type === 'undermount') {
-    const widthMm = openingWidth - slide.widthDeductionMm;
+    const width = openingWidth - slide.widthDeduction;
     return {
-      widthMm,
+      width,
       note: (w: Mm) =>
-        `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(slide.widthDeductionMm)} undermount deduction; check the slide maker's spec.`,
+        `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(slide.widthDeduction)} undermount deduction; check the slide maker's spec.`,
     };
   }
-  const each = slide.sideClearanceMm;
+  const each = slide.sideClearance;
   const name = slide.type === 'side-mount' ? `${slide.series} side-mount slide` : slide.type;
   return {
-    widthMm: openingWidth - 2 * each,
+    width: openingWidth - 2 * each,
     note: (w: Mm) => `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − 2 × ${specText(each)} ${name} clearance.`,
   };
 }
@@ -79,52 +79,52 @@ function clearanceWidth(slide: DrawerSchedule['slide'], openingWidth: Mm) {
  * The maker's width rule: the box's outside width is the opening less the deduction, or its inside width is, and the
  * sides stand outside that (so the box is 2 × the side thickness wider).
  */
-function modelWidth(model: Model, openingWidth: Mm, sideMm: Mm | undefined) {
+function modelWidth(model: Model, openingWidth: Mm, givenSide: Mm | undefined) {
   if (model.widthRule === 'outside') {
     return {
-      widthMm: openingWidth - model.widthDeductionMm,
+      width: openingWidth - model.widthDeduction,
       note: (w: Mm) =>
-        `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(model.widthDeductionMm)}, the ${model.name}'s outside-width rule.`,
+        `Box ${mmText(w)} wide = opening ${mmText(openingWidth)} − ${specText(model.widthDeduction)}, the ${model.name}'s outside-width rule.`,
     };
   }
-  const side = sideMm ?? DRAWER_DEFAULTS.sideThickness;
-  const inside = openingWidth - model.widthDeductionMm;
+  const side = givenSide ?? DRAWER_DEFAULTS.sideThickness;
+  const inside = openingWidth - model.widthDeduction;
   return {
-    widthMm: inside + 2 * side,
+    width: inside + 2 * side,
     note: (w: Mm) =>
-      `Box ${mmText(w)} wide: inside ${mmText(inside)} = opening ${mmText(openingWidth)} − ${specText(model.widthDeductionMm)} (the ${model.name}'s inside-width rule), plus 2 × ${specText(side)} sides.`,
+      `Box ${mmText(w)} wide: inside ${mmText(inside)} = opening ${mmText(openingWidth)} − ${specText(model.widthDeduction)} (the ${model.name}'s inside-width rule), plus 2 × ${specText(side)} sides.`,
   };
 }
 
 /** The longest length the model is made in that fits the opening less its rear clearance; the box is that long. */
-function modelDepth(model: Model, openingDepth: Mm): Result<{ depthMm: Mm; slideLengthMm: Mm; notes: string[] }> {
-  const room = openingDepth - model.rearClearanceMm;
-  const fitting = model.lengthsMm.filter((l) => l <= room + 1e-9);
+function modelDepth(model: Model, openingDepth: Mm): Result<{ depth: Mm; slideLength: Mm; notes: string[] }> {
+  const room = openingDepth - model.rearClearance;
+  const fitting = model.lengths.filter((l) => l <= room + 1e-9);
   if (fitting.length === 0) {
     return {
       ok: false,
       errors: [
         {
-          path: 'size.depthMm',
-          message: `No ${model.name} fits: ${mmText(room)} of depth after its ${specText(model.rearClearanceMm)} rear clearance, and its shortest length is ${specText(model.lengthsMm[0])}`,
+          path: 'size.depth',
+          message: `No ${model.name} fits: ${mmText(room)} of depth after its ${specText(model.rearClearance)} rear clearance, and its shortest length is ${specText(model.lengths[0])}`,
         },
       ],
     };
   }
-  const slideLengthMm = Math.max(...fitting);
+  const slideLength = Math.max(...fitting);
   return {
     ok: true,
-    depthMm: slideLengthMm,
-    slideLengthMm,
+    depth: slideLength,
+    slideLength,
     notes: [
-      `Box ${mmText(slideLengthMm)} long, as long as its slide: the longest ${model.name} that fits ${mmText(openingDepth)} less ${specText(model.rearClearanceMm)} rear clearance.`,
+      `Box ${mmText(slideLength)} long, as long as its slide: the longest ${model.name} that fits ${mmText(openingDepth)} less ${specText(model.rearClearance)} rear clearance.`,
     ],
   };
 }
 
 /** An opening or a box has a size: under half a millimetre is a typing slip. */
 function sizeErrors(size: DrawerSchedule['size']): FieldError[] {
-  return (['widthMm', 'heightMm', 'depthMm'] as const)
+  return (['width', 'height', 'depth'] as const)
     .filter((k) => Number.isFinite(size[k]) && size[k] < 0.5)
     .map((k) => ({
       path: `size.${k}`,
@@ -147,58 +147,58 @@ function lengthErrors(value: unknown, path = ''): FieldError[] {
   return [];
 }
 
-function boxDepth(openingDepth: Mm, rule: DepthRule): Result<{ depthMm: Mm; slideLengthMm: Mm | null; notes: string[] }> {
+function boxDepth(openingDepth: Mm, rule: DepthRule): Result<{ depth: Mm; slideLength: Mm | null; notes: string[] }> {
   switch (rule.rule) {
     case 'longest-standard-slide': {
-      const room = openingDepth - rule.backClearanceMm;
-      const lengths = SLIDE_SERIES[rule.series].lengthsMm;
+      const room = openingDepth - rule.backClearance;
+      const lengths = SLIDE_SERIES[rule.series].lengths;
       const fitting = lengths.filter((l) => l <= room + 1e-9);
       if (fitting.length === 0) {
         return {
           ok: false,
           errors: [
             {
-              path: 'size.depthMm',
+              path: 'size.depth',
               message: `No standard ${rule.series} slide fits: ${mmText(room)} of depth after the back clearance, the shortest slide is ${specText(lengths[0])}`,
             },
           ],
         };
       }
-      const slideLengthMm = Math.max(...fitting);
+      const slideLength = Math.max(...fitting);
       return {
         ok: true,
-        depthMm: slideLengthMm,
-        slideLengthMm,
-        notes: [`Box ${mmText(slideLengthMm)} deep to suit the longest standard ${rule.series} slide that fits the opening (${rangeText(lengths)}).`],
+        depth: slideLength,
+        slideLength,
+        notes: [`Box ${mmText(slideLength)} deep to suit the longest standard ${rule.series} slide that fits the opening (${rangeText(lengths)}).`],
       };
     }
     case 'slide-length':
-      if (rule.slideLengthMm > openingDepth) {
+      if (rule.slideLength > openingDepth) {
         return {
           ok: false,
           errors: [
             {
-              path: 'size.depthRule.slideLengthMm',
-              message: `A ${mmText(rule.slideLengthMm)} slide is longer than the opening is deep (${mmText(openingDepth)})`,
+              path: 'size.depthRule.slideLength',
+              message: `A ${mmText(rule.slideLength)} slide is longer than the opening is deep (${mmText(openingDepth)})`,
             },
           ],
         };
       }
-      return { ok: true, depthMm: rule.slideLengthMm, slideLengthMm: rule.slideLengthMm, notes: [] };
+      return { ok: true, depth: rule.slideLength, slideLength: rule.slideLength, notes: [] };
     case 'opening-less-clearance': {
-      const depthMm = openingDepth - rule.backClearanceMm;
-      if (depthMm <= 0) {
+      const depth = openingDepth - rule.backClearance;
+      if (depth <= 0) {
         return {
           ok: false,
           errors: [
             {
-              path: 'size.depthRule.backClearanceMm',
-              message: `The back clearance (${mmText(rule.backClearanceMm)}) leaves no depth in a ${mmText(openingDepth)} opening`,
+              path: 'size.depthRule.backClearance',
+              message: `The back clearance (${mmText(rule.backClearance)}) leaves no depth in a ${mmText(openingDepth)} opening`,
             },
           ],
         };
       }
-      return { ok: true, depthMm, slideLengthMm: null, notes: [] };
+      return { ok: true, depth, slideLength: null, notes: [] };
     }
   }
 }

@@ -56,9 +56,9 @@ export const DRAWER_DEFAULTS = {
  * laps its face frame [CP] (10 mm in a metric shop), or a reveal of 1/16″ (1.5 mm metric, the frameless reveal) [CP].
  */
 export const LIPPED_FRONT_DEFAULTS = {
-  imperial: { overlayMm: inches(3 / 8), revealMm: inches(1 / 16) },
-  metric: { overlayMm: 10, revealMm: 1.5 },
-} as const satisfies Record<'imperial' | 'metric', { overlayMm: Mm; revealMm: Mm }>;
+  imperial: { overlay: inches(3 / 8), reveal: inches(1 / 16) },
+  metric: { overlay: 10, reveal: 1.5 },
+} as const satisfies Record<'imperial' | 'metric', { overlay: Mm; reveal: Mm }>;
 
 /** The most any length of a drawer schedule may be: no drawer box is over 3 m, so more is a slipped unit. */
 export const MAX_SCHEDULE_LENGTH_MM = 3000;
@@ -80,9 +80,9 @@ export const METRIC_SLIDE_LENGTHS: readonly Mm[] = [250, 300, 350, 400, 450, 500
  * lengths of 12–28″ [CP]; metric slides the metric half inch, 12.5 mm, in lengths of 250–650 mm [CP, from memory].
  */
 export const SLIDE_SERIES = {
-  imperial: { name: 'imperial', sideClearanceMm: inches(1 / 2), heightClearanceMm: inches(1 / 2), lengthsMm: IMPERIAL_SLIDE_LENGTHS },
-  metric: { name: 'metric', sideClearanceMm: 12.5, heightClearanceMm: 12.5, lengthsMm: METRIC_SLIDE_LENGTHS },
-} as const satisfies Record<'imperial' | 'metric', { name: string; sideClearanceMm: Mm; heightClearanceMm: Mm; lengthsMm: readonly Mm[] }>;
+  imperial: { name: 'imperial', sideClearance: inches(1 / 2), heightClearance: inches(1 / 2), lengths: IMPERIAL_SLIDE_LENGTHS },
+  metric: { name: 'metric', sideClearance: 12.5, heightClearance: 12.5, lengths: METRIC_SLIDE_LENGTHS },
+} as const satisfies Record<'imperial' | 'metric', { name: string; sideClearance: Mm; heightClearance: Mm; lengths: readonly Mm[] }>;
 
 /**
  * The lock rabbet's starting setup for a stock thickness t, with the bit height fixed at ⅜″: a ½″ front keeps ⅛″ of
@@ -90,16 +90,16 @@ export const SLIDE_SERIES = {
  * 5/16″ and 7/16″ back [CP]. One straight line runs through both: face left = t/2 − ⅛″, fence setback = t/2 + 1/16″
  * (so 12 mm stock gets 2.83 mm and 7.59 mm, 18 mm gets 5.83 and 10.59). Starting points, to check on scrap.
  */
-export function lockRabbetFaceLeft(frontMm: Mm): Mm {
-  requireStock('front', frontMm);
+export function lockRabbetFaceLeft(front: Mm): Mm {
+  requireStock('front', front);
   // ¼″ or thinner leaves no face at all: the ⅜″ cut would go through.
-  if (frontMm <= inches(1 / 4))
+  if (front <= inches(1 / 4))
     throw new RangeError(
-      `A ${frontMm} mm front is too thin for a lock rabbet's starting rule (it needs more than ¼″, 6.35 mm): give the face left outright, or use thicker stock.`,
+      `A ${front} mm front is too thin for a lock rabbet's starting rule (it needs more than ¼″, 6.35 mm): give the face left outright, or use thicker stock.`,
     );
-  return settle(frontMm / 2 - inches(1 / 8));
+  return settle(front / 2 - inches(1 / 8));
 }
-export const lockRabbetFenceSetback = (stockMm: Mm): Mm => settle(requireStock('stock', stockMm) / 2 + inches(1 / 16));
+export const lockRabbetFenceSetback = (stock: Mm): Mm => settle(requireStock('stock', stock) / 2 + inches(1 / 16));
 
 /** A stock thickness a rule can be figured for: finite, more than 0 and no more than 100 mm. */
 export function requireStock(what: string, mm: Mm): Mm {

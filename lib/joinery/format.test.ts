@@ -7,8 +7,8 @@ import { sizeDrawerSchedule } from './size-drawer-schedule';
 const schedule = {
   label: 'Desk drawers',
   quantity: 2,
-  size: { from: 'opening' as const, widthMm: inches(15), heightMm: inches(5.5), depthMm: inches(21) },
-  thickness: { frontMm: inches(3 / 4), sideMm: inches(1 / 2) },
+  size: { from: 'opening' as const, width: inches(15), height: inches(5.5), depth: inches(21) },
+  thickness: { front: inches(3 / 4), side: inches(1 / 2) },
 };
 const imperial = { system: 'imperial' as const, precision: 16 as const, feet: false };
 
@@ -16,7 +16,7 @@ describe('lengths in drawer notes', () => {
   test('a rule’s own figures are written exactly: a metric shop to the whole mm still reads 12.5 mm a side, not ≈13 (derived from common practice)', () => {
     const metric = { system: 'metric' as const, precision: 1 as const, feet: false };
     const result = sizeDrawerSchedule(
-      { ...schedule, size: { from: 'opening', widthMm: 564, heightMm: 200, depthMm: 560 }, slide: { type: 'side-mount', series: 'metric' } },
+      { ...schedule, size: { from: 'opening', width: 564, height: 200, depth: 560 }, slide: { type: 'side-mount', series: 'metric' } },
       { lengthText: (mm) => formatLength(mm, metric), exactText: (mm) => `${mm} mm` },
     );
     if (!result.ok) throw new Error(JSON.stringify(result.errors));

@@ -29,8 +29,8 @@ export interface BoxThickness {
  * the outside face (engagement = that part's thickness).
  */
 export interface Corner {
-  sideEngagementMm: Mm;
-  panelEngagementMm: Mm;
+  sideEngagement: Mm;
+  panelEngagement: Mm;
 }
 
 export interface JointCorners {
@@ -38,13 +38,13 @@ export interface JointCorners {
   back: Corner;
 }
 
-const sidesFullDepth = (panelThickness: Mm, panelEngagementMm: Mm): Corner => ({
-  sideEngagementMm: panelThickness,
-  panelEngagementMm,
+const sidesFullDepth = (panelThickness: Mm, panelEngagement: Mm): Corner => ({
+  sideEngagement: panelThickness,
+  panelEngagement,
 });
-const panelFullWidth = (sideThickness: Mm, sideEngagementMm: Mm): Corner => ({
-  sideEngagementMm,
-  panelEngagementMm: sideThickness,
+const panelFullWidth = (sideThickness: Mm, sideEngagement: Mm): Corner => ({
+  sideEngagement,
+  panelEngagement: sideThickness,
 });
 
 /**
@@ -68,12 +68,12 @@ export function jointCorners(joint: Joint, t: BoxThickness): JointCorners {
     case 'lock-rabbet':
       // Layout B: front and back run the full width; the side's tongue stops `faceLeft` short of their outside face.
       return {
-        front: panelFullWidth(t.side, t.front - joint.faceLeftMm),
-        back: panelFullWidth(t.side, t.back - joint.faceLeftMm),
+        front: panelFullWidth(t.side, t.front - joint.faceLeft),
+        back: panelFullWidth(t.side, t.back - joint.faceLeft),
       };
     case 'rabbet-and-dado':
       // Layout A: sides run the full depth; front and back tongues sit in dados `dadoDepth` into the sides.
-      return { front: sidesFullDepth(t.front, joint.dadoDepthMm), back: sidesFullDepth(t.back, joint.dadoDepthMm) };
+      return { front: sidesFullDepth(t.front, joint.dadoDepth), back: sidesFullDepth(t.back, joint.dadoDepth) };
     case 'butt-pocket-screw':
     case 'butt-loose-tenon':
       return joint.layout === 'sides-full-depth'
@@ -82,61 +82,61 @@ export function jointCorners(joint: Joint, t: BoxThickness): JointCorners {
     case 'half-blind-dovetail':
       // Half-blind at the front (the lap hides the tails), through dovetails at the back.
       return {
-        front: panelFullWidth(t.side, t.front - joint.lapMm),
-        back: { sideEngagementMm: t.back, panelEngagementMm: t.side },
+        front: panelFullWidth(t.side, t.front - joint.lap),
+        back: { sideEngagement: t.back, panelEngagement: t.side },
       };
     case 'through-dovetail':
     case 'box-joint':
       // Pins/fingers of each part run through the other: every part is cut to the full outside size.
       return {
-        front: { sideEngagementMm: t.front, panelEngagementMm: t.side },
-        back: { sideEngagementMm: t.back, panelEngagementMm: t.side },
+        front: { sideEngagement: t.front, panelEngagement: t.side },
+        back: { sideEngagement: t.back, panelEngagement: t.side },
       };
   }
 }
 
 /** Why a joint's parameters cannot make a box from this stock, per field; empty when they can. */
-export function jointErrors(joint: Joint, t: BoxThickness, wallHeightMm: Mm): FieldError[] {
+export function jointErrors(joint: Joint, t: BoxThickness, wallHeight: Mm): FieldError[] {
   checked(joint, t);
-  if (!Number.isFinite(wallHeightMm) || wallHeightMm <= 0) throw new RangeError(`The wall height must be a positive length (got ${wallHeightMm}).`);
+  if (!Number.isFinite(wallHeight) || wallHeight <= 0) throw new RangeError(`The wall height must be a positive length (got ${wallHeight}).`);
   const errors: FieldError[] = [];
   const thinnerPanel = Math.min(t.front, t.back);
   const push = (field: string, message: string) => errors.push({ path: `joint.${field}`, message });
   switch (joint.method) {
     case 'lock-rabbet':
-      if (joint.faceLeftMm <= 0) push('faceLeftMm', 'The face left outside the tongue must be more than 0 mm, or the cut goes through the front');
-      else if (joint.faceLeftMm >= thinnerPanel)
+      if (joint.faceLeft <= 0) push('faceLeft', 'The face left outside the tongue must be more than 0 mm, or the cut goes through the front');
+      else if (joint.faceLeft >= thinnerPanel)
         push(
-          'faceLeftMm',
-          `The face left (${mmText(joint.faceLeftMm)}) must be less than the front/back thickness (${mmText(thinnerPanel)}), or the side's tongue has nothing to enter`,
+          'faceLeft',
+          `The face left (${mmText(joint.faceLeft)}) must be less than the front/back thickness (${mmText(thinnerPanel)}), or the side's tongue has nothing to enter`,
         );
       break;
     case 'rabbet-and-dado':
-      if (joint.dadoDepthMm <= 0) push('dadoDepthMm', 'The dado depth must be more than 0 mm (for none, choose a butt joint)');
-      else if (joint.dadoDepthMm >= t.side)
-        push('dadoDepthMm', `The dado (${mmText(joint.dadoDepthMm)} deep) must be shallower than the side is thick (${mmText(t.side)})`);
-      if (joint.dadoWidthMm >= thinnerPanel)
-        push('dadoWidthMm', `The tongue (dado width ${mmText(joint.dadoWidthMm)}) must be thinner than the front/back (${mmText(thinnerPanel)})`);
+      if (joint.dadoDepth <= 0) push('dadoDepth', 'The dado depth must be more than 0 mm (for none, choose a butt joint)');
+      else if (joint.dadoDepth >= t.side)
+        push('dadoDepth', `The dado (${mmText(joint.dadoDepth)} deep) must be shallower than the side is thick (${mmText(t.side)})`);
+      if (joint.dadoWidth >= thinnerPanel)
+        push('dadoWidth', `The tongue (dado width ${mmText(joint.dadoWidth)}) must be thinner than the front/back (${mmText(thinnerPanel)})`);
       break;
     case 'butt-loose-tenon': {
       const faceThickness = joint.layout === 'sides-full-depth' ? t.side : thinnerPanel;
-      if (joint.mortiseDepthMm >= faceThickness)
+      if (joint.mortiseDepth >= faceThickness)
         push(
-          'mortiseDepthMm',
-          `The mortise in the face (${mmText(joint.mortiseDepthMm)} deep) must be shallower than that part is thick (${mmText(faceThickness)})`,
+          'mortiseDepth',
+          `The mortise in the face (${mmText(joint.mortiseDepth)} deep) must be shallower than that part is thick (${mmText(faceThickness)})`,
         );
       const thinnest = Math.min(t.side, thinnerPanel);
-      if (joint.tenonThicknessMm >= thinnest)
-        push('tenonThicknessMm', `The tenon (${mmText(joint.tenonThicknessMm)}) must be thinner than the thinnest part (${mmText(thinnest)})`);
+      if (joint.tenonThickness >= thinnest)
+        push('tenonThickness', `The tenon (${mmText(joint.tenonThickness)}) must be thinner than the thinnest part (${mmText(thinnest)})`);
       break;
     }
     case 'half-blind-dovetail':
-      if (joint.lapMm <= 0) push('lapMm', 'The lap must be more than 0 mm (for none, choose through dovetails)');
-      else if (joint.lapMm >= t.front) push('lapMm', `The lap (${mmText(joint.lapMm)}) must be less than the front thickness (${mmText(t.front)})`);
+      if (joint.lap <= 0) push('lap', 'The lap must be more than 0 mm (for none, choose through dovetails)');
+      else if (joint.lap >= t.front) push('lap', `The lap (${mmText(joint.lap)}) must be less than the front thickness (${mmText(t.front)})`);
       break;
     case 'box-joint':
-      if (joint.fingerWidthMm > wallHeightMm)
-        push('fingerWidthMm', `A ${mmText(joint.fingerWidthMm)} finger is wider than the box is tall (${mmText(wallHeightMm)})`);
+      if (joint.fingerWidth > wallHeight)
+        push('fingerWidth', `A ${mmText(joint.fingerWidth)} finger is wider than the box is tall (${mmText(wallHeight)})`);
       break;
     case 'butt-pocket-screw':
     case 'through-dovetail':
@@ -146,29 +146,29 @@ export function jointErrors(joint: Joint, t: BoxThickness, wallHeightMm: Mm): Fi
 }
 
 /**
- * What the saw or router must cut at the ends of a front, back or side for this joint. `setInMm` on the front
+ * What the saw or router must cut at the ends of a front, back or side for this joint. `setIn` on the front
  * and back is how far the joint sits from the end (the side engagement plus any lip).
  */
-export function jointMachining(joint: Joint, role: 'front' | 'back' | 'side', corners: JointCorners, t: BoxThickness, lipMm: Mm): string[] {
+export function jointMachining(joint: Joint, role: 'front' | 'back' | 'side', corners: JointCorners, t: BoxThickness, lip: Mm): string[] {
   checked(joint, t);
-  if (!Number.isFinite(lipMm) || lipMm < 0) throw new RangeError(`The lip must be zero or a positive length (got ${lipMm}).`);
+  if (!Number.isFinite(lip) || lip < 0) throw new RangeError(`The lip must be zero or a positive length (got ${lip}).`);
   const panel = role === 'front' ? corners.front : corners.back;
-  const setIn = panel.panelEngagementMm + (role === 'front' ? lipMm : 0);
-  const lipText = role === 'front' && lipMm > 0 ? ` (${mmText(t.side)} side + ${mmText(lipMm)} lip: the deeper cut for the overhang)` : '';
+  const setIn = panel.panelEngagement + (role === 'front' ? lip : 0);
+  const lipText = role === 'front' && lip > 0 ? ` (${mmText(t.side)} side + ${mmText(lip)} lip: the deeper cut for the overhang)` : '';
   switch (joint.method) {
     case 'lock-rabbet':
       return role === 'side'
         ? [
-            `Lock-rabbet tongue on both ends: enters the front ${mmText(corners.front.sideEngagementMm)} and the back ${mmText(corners.back.sideEngagementMm)}, leaving ${mmText(joint.faceLeftMm)} of their face outside.`,
+            `Lock-rabbet tongue on both ends: enters the front ${mmText(corners.front.sideEngagement)} and the back ${mmText(corners.back.sideEngagement)}, leaving ${mmText(joint.faceLeft)} of their face outside.`,
           ]
         : [`Lock-rabbet groove in the inside face at both ends, set ${mmText(setIn)} from the end${lipText}; measured to the side thickness.`];
     case 'rabbet-and-dado':
       return role === 'side'
         ? [
-            `Dado ${mmText(joint.dadoWidthMm)} wide × ${mmText(joint.dadoDepthMm)} deep across the inside face at both ends, its near edge ${mmText(t.front - joint.dadoWidthMm)} from the front end and ${mmText(t.back - joint.dadoWidthMm)} from the back end.`,
+            `Dado ${mmText(joint.dadoWidth)} wide × ${mmText(joint.dadoDepth)} deep across the inside face at both ends, its near edge ${mmText(t.front - joint.dadoWidth)} from the front end and ${mmText(t.back - joint.dadoWidth)} from the back end.`,
           ]
         : [
-            `Rabbet on the outside face of both ends, ${mmText(joint.dadoDepthMm)} long, leaving a ${mmText(joint.dadoWidthMm)} tongue at the inside face.`,
+            `Rabbet on the outside face of both ends, ${mmText(joint.dadoDepth)} long, leaving a ${mmText(joint.dadoWidth)} tongue at the inside face.`,
           ];
     case 'butt-pocket-screw': {
       const drilled = joint.layout === 'sides-full-depth' ? role !== 'side' : role === 'side';
@@ -180,24 +180,24 @@ export function jointMachining(joint: Joint, role: 'front' | 'back' | 'side', co
       const endGrain = joint.layout === 'sides-full-depth' ? role !== 'side' : role === 'side';
       return [
         endGrain
-          ? `${joint.tenonsPerCorner} mortise(s) ${mmText(joint.tenonThicknessMm)} wide in each end grain, ${mmText(joint.mortiseDepthMm)} deep.`
-          : `${joint.tenonsPerCorner} mortise(s) ${mmText(joint.tenonThicknessMm)} wide in the inside face at both ends, ${mmText(joint.mortiseDepthMm)} deep, centred on the mating part's thickness.`,
+          ? `${joint.tenonsPerCorner} mortise(s) ${mmText(joint.tenonThickness)} wide in each end grain, ${mmText(joint.mortiseDepth)} deep.`
+          : `${joint.tenonsPerCorner} mortise(s) ${mmText(joint.tenonThickness)} wide in the inside face at both ends, ${mmText(joint.mortiseDepth)} deep, centred on the mating part's thickness.`,
       ];
     }
     case 'half-blind-dovetail':
       if (role === 'front')
         return [
-          `Half-blind dovetail sockets at both ends, ${mmText(t.side)} deep, set ${mmText(setIn)} from the end${lipText}, leaving a ${mmText(joint.lapMm)} lap.`,
+          `Half-blind dovetail sockets at both ends, ${mmText(t.side)} deep, set ${mmText(setIn)} from the end${lipText}, leaving a ${mmText(joint.lap)} lap.`,
         ];
       if (role === 'back') return [`Through-dovetail pins at both ends, ${mmText(t.side)} long.`];
-      return [`Front end: half-blind tails ${mmText(corners.front.sideEngagementMm)} long. Back end: through tails ${mmText(t.back)} long.`];
+      return [`Front end: half-blind tails ${mmText(corners.front.sideEngagement)} long. Back end: through tails ${mmText(t.back)} long.`];
     case 'through-dovetail':
       return role === 'side'
         ? [`Through tails at both ends: ${mmText(t.front)} long at the front, ${mmText(t.back)} at the back.`]
         : [`Through pins at both ends, ${mmText(t.side)} long.`];
     case 'box-joint':
       return role === 'side'
-        ? [`Box-joint fingers ${mmText(joint.fingerWidthMm)} wide at both ends: ${mmText(t.front)} long at the front, ${mmText(t.back)} at the back.`]
-        : [`Box-joint fingers ${mmText(joint.fingerWidthMm)} wide at both ends, ${mmText(t.side)} long.`];
+        ? [`Box-joint fingers ${mmText(joint.fingerWidth)} wide at both ends: ${mmText(t.front)} long at the front, ${mmText(t.back)} at the back.`]
+        : [`Box-joint fingers ${mmText(joint.fingerWidth)} wide at both ends, ${mmText(t.side)} long.`];
   }
 }

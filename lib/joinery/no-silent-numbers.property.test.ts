@@ -21,13 +21,13 @@ const anyNumber = fc.oneof(
 const MODEL = {
   kind: 'undermount',
   name: 'Tessel T-16',
-  lengthsMm: [250, 300, 400, 500],
+  lengths: [250, 300, 400, 500],
   widthRule: 'outside',
-  widthDeductionMm: 10,
-  maxSideThicknessMm: 16,
-  bottomRecessMm: 13,
-  heightClearanceMm: 20,
-  rearClearanceMm: 10,
+  widthDeduction: 10,
+  maxSideThickness: 16,
+  bottomRecess: 13,
+  heightClearance: 20,
+  rearClearance: 10,
 };
 
 /** Schedules of every shape the form makes, each valid as written. */
@@ -35,33 +35,33 @@ const TEMPLATES = [
   {
     label: 'Metric bank',
     quantity: 3,
-    size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 },
+    size: { from: 'opening', width: 564, height: 180, depth: 540 },
     slide: { type: 'side-mount', series: 'metric' },
-    thickness: { frontMm: 18, sideMm: 12 },
-    front: { style: 'lipped', fit: 'reveal', revealMm: 1.5 },
+    thickness: { front: 18, side: 12 },
+    front: { style: 'lipped', fit: 'reveal', reveal: 1.5 },
   },
   {
     label: 'Model bank',
     quantity: 2,
-    size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 },
+    size: { from: 'opening', width: 564, height: 180, depth: 540 },
     slide: { type: 'undermount', model: MODEL },
-    thickness: { frontMm: 16, sideMm: 16 },
-    front: { style: 'applied', fit: 'inset', revealMm: 1.5 },
+    thickness: { front: 16, side: 16 },
+    front: { style: 'applied', fit: 'inset', reveal: 1.5 },
   },
   {
     label: 'Inch bank',
     quantity: 1,
-    size: { from: 'opening', widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) },
-    thickness: { frontMm: inches(3 / 4), sideMm: inches(1 / 2) },
+    size: { from: 'opening', width: inches(15), height: inches(7), depth: inches(22) },
+    thickness: { front: inches(3 / 4), side: inches(1 / 2) },
     front: { style: 'lipped' },
-    joint: { method: 'half-blind-dovetail', lapMm: inches(3 / 16) },
+    joint: { method: 'half-blind-dovetail', lap: inches(3 / 16) },
   },
   {
     label: 'Box size',
     quantity: 4,
-    size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 },
+    size: { from: 'box', width: 400, height: 150, depth: 500 },
     joint: { method: 'rabbet-and-dado' },
-    bottom: { mount: 'applied', thicknessMm: 6 },
+    bottom: { mount: 'applied', thickness: 6 },
   },
 ];
 /** Every number in a template, by its path. */
@@ -91,8 +91,8 @@ describe('no public function of lib/joinery returns a silent wrong number (seede
         expectSane(result);
         if (result.ok) {
           for (const p of result.parts) {
-            for (const n of [p.lengthMm, p.widthMm, p.thicknessMm]) expect(n > 0 && n <= MAX_SCHEDULE_LENGTH_MM + 200).toBe(true);
-            expect(p.jointAllowanceMm).toBeGreaterThanOrEqual(0);
+            for (const n of [p.length, p.width, p.thickness]) expect(n > 0 && n <= MAX_SCHEDULE_LENGTH_MM + 200).toBe(true);
+            expect(p.jointAllowance).toBeGreaterThanOrEqual(0);
           }
         } else {
           expect(result.errors.length).toBeGreaterThan(0);
@@ -107,7 +107,7 @@ describe('no public function of lib/joinery returns a silent wrong number (seede
     fc.assert(
       fc.property(fc.constantFrom(...TEMPLATES), anyNumber, anyNumber, (t, w, d) => {
         const s = drawerScheduleSchema.parse(t);
-        const result = boxFromOpening({ ...s, size: { ...s.size, widthMm: w, depthMm: d } as never });
+        const result = boxFromOpening({ ...s, size: { ...s.size, width: w, depth: d } as never });
         expectSane(result);
         if (result.ok) for (const n of Object.values(result.box)) expect(n).toBeGreaterThan(0);
       }),
@@ -127,16 +127,14 @@ describe('no public function of lib/joinery returns a silent wrong number (seede
           (v) => expect(v).toBeGreaterThan(0),
         );
         expectSaneOrRefused(() => lockRabbetCard(a));
-        expectSaneOrRefused(() => defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: a }));
-        expectSaneOrRefused(() => findSetupCard([], { joint: 'lock-rabbet', stockThicknessMm: a }));
+        expectSaneOrRefused(() => defaultSetupCard({ joint: 'lock-rabbet', stockThickness: a }));
+        expectSaneOrRefused(() => findSetupCard([], { joint: 'lock-rabbet', stockThickness: a }));
         expectSaneOrRefused(
           () => maxRouterSpeedRpm(a),
           (rpm) => expect(rpm === null || rpm >= 12_000).toBe(true),
         );
-        expectSaneOrRefused(() =>
-          requiredSetupCards({ joint: { method: 'box-joint', fingerWidthMm: 6 }, thickness: { frontMm: a, backMm: b, sideMm: c } }),
-        );
-        expectSaneOrRefused(() => jointCorners({ method: 'lock-rabbet', faceLeftMm: c }, { front: a, back: b, side: 12 }));
+        expectSaneOrRefused(() => requiredSetupCards({ joint: { method: 'box-joint', fingerWidth: 6 }, thickness: { front: a, back: b, side: c } }));
+        expectSaneOrRefused(() => jointCorners({ method: 'lock-rabbet', faceLeft: c }, { front: a, back: b, side: 12 }));
       }),
       { seed: SEED, numRuns: 1000 },
     );
@@ -145,40 +143,30 @@ describe('no public function of lib/joinery returns a silent wrong number (seede
 
 describe('refusals named in the issue, each on its field', () => {
   test.each([
-    [
-      'a drawer box over 3 m',
-      { size: { from: 'box', widthMm: 3500, heightMm: 150, depthMm: 500 } },
-      'size.widthMm',
-      /over 3 m looks like a slipped unit/,
-    ],
+    ['a drawer box over 3 m', { size: { from: 'box', width: 3500, height: 150, depth: 500 } }, 'size.width', /over 3 m looks like a slipped unit/],
     [
       'a lip of a kilometre',
-      { size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, front: { style: 'lipped', fit: 'lip', lipMm: 1_000_000 } },
-      'front.lipMm',
+      { size: { from: 'box', width: 400, height: 150, depth: 500 }, front: { style: 'lipped', fit: 'lip', lip: 1_000_000 } },
+      'front.lip',
       /over 100 mm looks like a slipped unit/,
     ],
-    [
-      'an infinite opening',
-      { size: { from: 'opening', widthMm: Number.POSITIVE_INFINITY, heightMm: 150, depthMm: 500 } },
-      'size.widthMm',
-      /Opening width/,
-    ],
+    ['an infinite opening', { size: { from: 'opening', width: Number.POSITIVE_INFINITY, height: 150, depth: 500 } }, 'size.width', /Opening width/],
     [
       'a NaN side thickness',
-      { size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, thickness: { sideMm: Number.NaN } },
-      'thickness.sideMm',
+      { size: { from: 'box', width: 400, height: 150, depth: 500 }, thickness: { side: Number.NaN } },
+      'thickness.side',
       /Side thickness/,
     ],
     [
       'a negative reveal',
-      { size: { from: 'opening', widthMm: 400, heightMm: 150, depthMm: 500 }, front: { style: 'lipped', fit: 'reveal', revealMm: -1 } },
-      'front.revealMm',
+      { size: { from: 'opening', width: 400, height: 150, depth: 500 }, front: { style: 'lipped', fit: 'reveal', reveal: -1 } },
+      'front.reveal',
       /cannot be negative/,
     ],
     [
       'a lock-rabbet front too thin for the starting rule',
-      { size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, thickness: { frontMm: 6, sideMm: 6 } },
-      'joint.faceLeftMm',
+      { size: { from: 'box', width: 400, height: 150, depth: 500 }, thickness: { front: 6, side: 6 } },
+      'joint.faceLeft',
       /too thin for a lock rabbet/,
     ],
   ])('%s', (_label, over, path, message) => {
@@ -190,7 +178,7 @@ describe('refusals named in the issue, each on its field', () => {
 
   test('a NaN reaching a rule directly is refused, never carried into a card', () => {
     expect(() => lockRabbetCard(Number.NaN)).toThrow(RangeError);
-    expect(() => defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: Number.NaN })).toThrow(RangeError);
+    expect(() => defaultSetupCard({ joint: 'lock-rabbet', stockThickness: Number.NaN })).toThrow(RangeError);
     expect(() => maxRouterSpeedRpm(Number.NaN)).toThrow(RangeError);
   });
 });

@@ -13,17 +13,17 @@ export const ROUTER_TABLE_CAUTIONS: readonly string[] = [
 ];
 
 /** Highest speed for a router bit of this diameter [CP]; null above 3½″, where the bit maker must say. */
-export function maxRouterSpeedRpm(bitDiameterMm: Mm): number | null {
+export function maxRouterSpeedRpm(bitDiameter: Mm): number | null {
   // NaN would fall through every row and read as "past 3½″"; a negative diameter as the fastest speed.
-  if (typeof bitDiameterMm !== 'number' || !Number.isFinite(bitDiameterMm) || bitDiameterMm <= 0)
-    throw new RangeError(`A bit diameter must be a positive length (got ${String(bitDiameterMm)}).`);
-  const row = ROUTER_BIT_SPEEDS.find((r) => bitDiameterMm <= r.upToDiameterMm + 1e-9);
+  if (typeof bitDiameter !== 'number' || !Number.isFinite(bitDiameter) || bitDiameter <= 0)
+    throw new RangeError(`A bit diameter must be a positive length (got ${String(bitDiameter)}).`);
+  const row = ROUTER_BIT_SPEEDS.find((r) => bitDiameter <= r.upToDiameter + 1e-9);
   return row ? row.maxRpm : null;
 }
 
 const ROUTER_BIT_SPEEDS = [
-  { upToDiameterMm: inches(1), maxRpm: 24_000 },
-  { upToDiameterMm: inches(2), maxRpm: 18_000 },
-  { upToDiameterMm: inches(2.5), maxRpm: 16_000 },
-  { upToDiameterMm: inches(3.5), maxRpm: 12_000 },
+  { upToDiameter: inches(1), maxRpm: 24_000 },
+  { upToDiameter: inches(2), maxRpm: 18_000 },
+  { upToDiameter: inches(2.5), maxRpm: 16_000 },
+  { upToDiameter: inches(3.5), maxRpm: 12_000 },
 ] as const;

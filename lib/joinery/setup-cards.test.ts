@@ -5,9 +5,9 @@ import { setupCardSchema } from '@/shared/schemas/setup-card';
 import { DEFAULT_LOCK_RABBET_CARDS, defaultSetupCard, findSetupCard, lockRabbetCard, requiredSetupCards } from '@/lib/joinery/setup-cards';
 
 const schedule = (over: object) =>
-  drawerScheduleSchema.parse({ label: 'S', quantity: 1, size: { from: 'box', widthMm: 400, heightMm: 150, depthMm: 500 }, ...over });
+  drawerScheduleSchema.parse({ label: 'S', quantity: 1, size: { from: 'box', width: 400, height: 150, depth: 500 }, ...over });
 const field = (stockIn: number, key: string) =>
-  DEFAULT_LOCK_RABBET_CARDS.find((c) => Math.abs(c.stockThicknessMm - inches(stockIn)) < 1e-9)!.fields.find((f) => f.key === key)!.value;
+  DEFAULT_LOCK_RABBET_CARDS.find((c) => Math.abs(c.stockThickness - inches(stockIn)) < 1e-9)!.fields.find((f) => f.key === key)!.value;
 
 describe('default lock-rabbet setup cards (common practice, no source)', () => {
   test('the bit height stays ⅜″ for every stock thickness', () => {
@@ -29,27 +29,27 @@ describe('default lock-rabbet setup cards (common practice, no source)', () => {
 
 describe('which setup cards a schedule needs', () => {
   test('a ¾″ front with ½″ sides needs a card for each thickness, thinnest first', () => {
-    expect(requiredSetupCards(schedule({ thickness: { frontMm: inches(3 / 4), sideMm: inches(1 / 2) } }))).toEqual([
-      { joint: 'lock-rabbet', stockThicknessMm: inches(1 / 2) },
-      { joint: 'lock-rabbet', stockThicknessMm: inches(3 / 4) },
+    expect(requiredSetupCards(schedule({ thickness: { front: inches(3 / 4), side: inches(1 / 2) } }))).toEqual([
+      { joint: 'lock-rabbet', stockThickness: inches(1 / 2) },
+      { joint: 'lock-rabbet', stockThickness: inches(3 / 4) },
     ]);
   });
 
   test('one stock thickness all round needs one card, for the schedule’s joint', () => {
-    expect(requiredSetupCards(schedule({ joint: { method: 'box-joint' }, thickness: { frontMm: 12, sideMm: 12 } }))).toEqual([
-      { joint: 'box-joint', stockThicknessMm: 12 },
+    expect(requiredSetupCards(schedule({ joint: { method: 'box-joint' }, thickness: { front: 12, side: 12 } }))).toEqual([
+      { joint: 'box-joint', stockThickness: 12 },
     ]);
   });
 
   test('a back thinner than the front adds its own card', () => {
-    expect(requiredSetupCards(schedule({ thickness: { frontMm: 19, backMm: 15, sideMm: 12 } })).map((k) => k.stockThicknessMm)).toEqual([12, 15, 19]);
+    expect(requiredSetupCards(schedule({ thickness: { front: 19, back: 15, side: 12 } })).map((k) => k.stockThickness)).toEqual([12, 15, 19]);
   });
 
   test('a saved card is found for stock within the tolerance, and not for another joint', () => {
     const cards = [lockRabbetCard(inches(1 / 2)), lockRabbetCard(inches(3 / 4))];
-    expect(findSetupCard(cards, { joint: 'lock-rabbet', stockThicknessMm: 12.75 })?.stockThicknessMm).toBeCloseTo(inches(1 / 2), 9);
-    expect(findSetupCard(cards, { joint: 'lock-rabbet', stockThicknessMm: 15 })).toBeUndefined();
-    expect(findSetupCard(cards, { joint: 'box-joint', stockThicknessMm: inches(1 / 2) })).toBeUndefined();
+    expect(findSetupCard(cards, { joint: 'lock-rabbet', stockThickness: 12.75 })?.stockThickness).toBeCloseTo(inches(1 / 2), 9);
+    expect(findSetupCard(cards, { joint: 'lock-rabbet', stockThickness: 15 })).toBeUndefined();
+    expect(findSetupCard(cards, { joint: 'box-joint', stockThickness: inches(1 / 2) })).toBeUndefined();
   });
 });
 
@@ -60,21 +60,21 @@ describe('the default card for stock the shop has no card for', () => {
     ['12 mm stock: 6 + 1.5875 = 7.5875 mm back, by the same rule (derived)', 12, 7.5875],
     ['15 mm stock: 7.5 + 1.5875 = 9.0875 mm back (derived)', 15, 9.0875],
   ])('the starting card for %s', (_label, stock, setback) => {
-    const card = defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: stock })!;
-    expect(card.stockThicknessMm).toBe(stock);
+    const card = defaultSetupCard({ joint: 'lock-rabbet', stockThickness: stock })!;
+    expect(card.stockThickness).toBe(stock);
     expect(card.fields.find((f) => f.key === 'fence-setback')!.value).toBeCloseTo(setback, 9);
     expect(card.fields.find((f) => f.key === 'bit-height')!.value).toBeCloseTo(inches(3 / 8), 9);
     expect(card.note).toMatch(/test cuts in scrap/);
   });
 
   test('stock no lock rabbet is cut in, or another joint, has no starting card', () => {
-    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 6 })).toBeUndefined();
-    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThicknessMm: 40 })).toBeUndefined();
-    expect(defaultSetupCard({ joint: 'box-joint', stockThicknessMm: 12 })).toBeUndefined();
+    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThickness: 6 })).toBeUndefined();
+    expect(defaultSetupCard({ joint: 'lock-rabbet', stockThickness: 40 })).toBeUndefined();
+    expect(defaultSetupCard({ joint: 'box-joint', stockThickness: 12 })).toBeUndefined();
   });
 
   test('the seeded starting cards cover ½″, ⅝″, ¾″ and 12, 15, 18 mm, thinnest first', () => {
-    expect(DEFAULT_LOCK_RABBET_CARDS.map((c) => c.stockThicknessMm)).toEqual(
+    expect(DEFAULT_LOCK_RABBET_CARDS.map((c) => c.stockThickness)).toEqual(
       [12, inches(1 / 2), 15, inches(5 / 8), 18, inches(3 / 4)].sort((a, b) => a - b),
     );
   });
@@ -82,12 +82,12 @@ describe('the default card for stock the shop has no card for', () => {
 
 describe('setup card schema', () => {
   test('rejects a card with no stock thickness, naming the field', () => {
-    const result = setupCardSchema.safeParse({ joint: 'lock-rabbet', stockThicknessMm: 0, fields: [] });
+    const result = setupCardSchema.safeParse({ joint: 'lock-rabbet', stockThickness: 0, fields: [] });
     expect(result.success).toBe(false);
-    expect(result.error?.issues[0].path).toEqual(['stockThicknessMm']);
+    expect(result.error?.issues[0].path).toEqual(['stockThickness']);
   });
 
   test('fills an empty note', () => {
-    expect(setupCardSchema.parse({ joint: 'through-dovetail', stockThicknessMm: 19, fields: [] }).note).toBe('');
+    expect(setupCardSchema.parse({ joint: 'through-dovetail', stockThickness: 19, fields: [] }).note).toBe('');
   });
 });

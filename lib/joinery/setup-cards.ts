@@ -12,18 +12,18 @@ export const SETUP_CARD_TOLERANCE_MM = 0.1;
 
 /** One card per joint and distinct stock thickness the schedule's joints are cut in, thinnest first. */
 export function requiredSetupCards(schedule: Pick<DrawerSchedule, 'joint' | 'thickness'>): SetupCardKey[] {
-  const { frontMm, sideMm } = schedule.thickness;
-  const thicknesses = [requireStock('front', frontMm), requireStock('back', schedule.thickness.backMm ?? frontMm), requireStock('side', sideMm)].sort(
+  const { front, side } = schedule.thickness;
+  const thicknesses = [requireStock('front', front), requireStock('back', schedule.thickness.back ?? front), requireStock('side', side)].sort(
     (a, b) => a - b,
   );
   const distinct = thicknesses.filter((t, i) => i === 0 || t - thicknesses[i - 1] > SETUP_CARD_TOLERANCE_MM);
-  return distinct.map((stockThicknessMm) => ({ joint: schedule.joint.method, stockThicknessMm }));
+  return distinct.map((stockThickness) => ({ joint: schedule.joint.method, stockThickness }));
 }
 
 /** The shop's card for a key, if it has saved one. */
 export function findSetupCard(cards: readonly SetupCard[], key: SetupCardKey): SetupCard | undefined {
-  requireStock('stock', key.stockThicknessMm);
-  return cards.find((c) => c.joint === key.joint && Math.abs(c.stockThicknessMm - key.stockThicknessMm) <= SETUP_CARD_TOLERANCE_MM);
+  requireStock('stock', key.stockThickness);
+  return cards.find((c) => c.joint === key.joint && Math.abs(c.stockThickness - key.stockThickness) <= SETUP_CARD_TOLERANCE_MM);
 }
 
 /** A lock-rabbet card for stock `t` by the starting rule (`lockRabbetFenceSetback`, RULES.md); ⅜″ to 1″ stock only. */
@@ -36,7 +36,7 @@ export function lockRabbetCard(stock: Mm): SetupCard {
 
 const lockRabbetCardFor = (stock: Mm): SetupCard => ({
   joint: 'lock-rabbet',
-  stockThicknessMm: stock,
+  stockThickness: stock,
   fields: [
     // The bit height stays the same for every stock thickness; the fence moves with it [CP].
     { key: 'bit-height', label: 'Bit height', value: inches(3 / 8), unit: 'mm' },
@@ -53,8 +53,8 @@ export const DEFAULT_LOCK_RABBET_CARDS: readonly SetupCard[] = [12, inches(1 / 2
 
 /** The starting card for a key when the shop has saved none: the lock rabbet's rule at the key's very thickness. */
 export function defaultSetupCard(key: SetupCardKey): SetupCard | undefined {
-  requireStock('stock', key.stockThicknessMm);
+  requireStock('stock', key.stockThickness);
   if (key.joint !== 'lock-rabbet') return undefined;
-  if (key.stockThicknessMm < LOCK_RABBET_STOCK.min || key.stockThicknessMm > LOCK_RABBET_STOCK.max) return undefined;
-  return lockRabbetCard(key.stockThicknessMm);
+  if (key.stockThickness < LOCK_RABBET_STOCK.min || key.stockThickness > LOCK_RABBET_STOCK.max) return undefined;
+  return lockRabbetCard(key.stockThickness);
 }

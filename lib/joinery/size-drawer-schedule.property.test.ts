@@ -17,8 +17,8 @@ interface Thickness {
 const jointFor = (t: Thickness) => {
   const panel = Math.min(t.front, t.back);
   return fc.oneof(
-    len(0.5, panel - 0.5).map((faceLeftMm) => ({ method: 'lock-rabbet' as const, faceLeftMm })),
-    fc.record({ method: fc.constant('rabbet-and-dado' as const), dadoDepthMm: len(0.5, t.side - 0.5), dadoWidthMm: len(1, panel - 0.5) }),
+    len(0.5, panel - 0.5).map((faceLeft) => ({ method: 'lock-rabbet' as const, faceLeft })),
+    fc.record({ method: fc.constant('rabbet-and-dado' as const), dadoDepth: len(0.5, t.side - 0.5), dadoWidth: len(1, panel - 0.5) }),
     fc.record({
       method: fc.constant('butt-pocket-screw' as const),
       layout: fc.constantFrom('sides-full-depth' as const, 'front-back-full-width' as const),
@@ -26,12 +26,12 @@ const jointFor = (t: Thickness) => {
     fc.record({
       method: fc.constant('butt-loose-tenon' as const),
       layout: fc.constantFrom('sides-full-depth' as const, 'front-back-full-width' as const),
-      tenonThicknessMm: len(1, Math.min(t.side, panel) - 0.5),
-      mortiseDepthMm: len(1, Math.min(t.side, panel) - 0.5),
+      tenonThickness: len(1, Math.min(t.side, panel) - 0.5),
+      mortiseDepth: len(1, Math.min(t.side, panel) - 0.5),
     }),
-    len(0.5, t.front - 0.5).map((lapMm) => ({ method: 'half-blind-dovetail' as const, lapMm })),
+    len(0.5, t.front - 0.5).map((lap) => ({ method: 'half-blind-dovetail' as const, lap })),
     fc.constant({ method: 'through-dovetail' as const }),
-    len(3, 20).map((fingerWidthMm) => ({ method: 'box-joint' as const, fingerWidthMm })),
+    len(3, 20).map((fingerWidth) => ({ method: 'box-joint' as const, fingerWidth })),
   );
 };
 type GenJoint = ReturnType<typeof jointFor> extends fc.Arbitrary<infer J> ? J : never;
@@ -44,14 +44,14 @@ function tradeEngagement(joint: GenJoint, t: Thickness, end: 'front' | 'back'): 
   const tp = end === 'front' ? t.front : t.back;
   switch (joint.method) {
     case 'lock-rabbet': // front/back cover the side's end; the side's tongue stops faceLeft short of their face
-      return { side: tp - joint.faceLeftMm, panel: t.side };
+      return { side: tp - joint.faceLeft, panel: t.side };
     case 'rabbet-and-dado': // sides run through; the front's tongue sits in a dado dadoDepth deep
-      return { side: tp, panel: joint.dadoDepthMm };
+      return { side: tp, panel: joint.dadoDepth };
     case 'butt-pocket-screw':
     case 'butt-loose-tenon': // one part's end grain meets the other's face
       return joint.layout === 'sides-full-depth' ? { side: tp, panel: 0 } : { side: 0, panel: t.side };
     case 'half-blind-dovetail': // tails stop at the lap at the front, run through at the back
-      return end === 'front' ? { side: tp - joint.lapMm, panel: t.side } : { side: tp, panel: t.side };
+      return end === 'front' ? { side: tp - joint.lap, panel: t.side } : { side: tp, panel: t.side };
     case 'through-dovetail':
     case 'box-joint':
       return { side: tp, panel: t.side };
@@ -69,24 +69,24 @@ const scheduleArb = fc
     fc.record({
       t: fc.constant(t),
       joint: jointFor(t),
-      box: fc.record({ widthMm: len(150, 1200), heightMm: len(60, 400), depthMm: len(150, 900) }),
+      box: fc.record({ width: len(150, 1200), height: len(60, 400), depth: len(150, 900) }),
       quantity: fc.integer({ min: 1, max: 50 }),
       lip: fc.option(len(1, 30), { nil: undefined }),
       bottom: fc.oneof(
         fc
           .record({
-            widthMm: len(3, 12),
-            depthMm: len(1, Math.min(t.front, t.back, t.side) - 0.5),
-            heightMm: len(0, 30),
+            width: len(3, 12),
+            depth: len(1, Math.min(t.front, t.back, t.side) - 0.5),
+            height: len(0, 30),
             clearanceFraction: fc.double({ min: 0, max: 0.95, noNaN: true }),
             bottomFraction: fc.double({ min: 0.3, max: 1, noNaN: true }),
           })
           .map((g) => ({
             mount: 'groove' as const,
-            thicknessMm: g.widthMm * g.bottomFraction,
-            groove: { widthMm: g.widthMm, depthMm: g.depthMm, heightMm: g.heightMm, clearanceMm: 2 * g.depthMm * g.clearanceFraction },
+            thickness: g.width * g.bottomFraction,
+            groove: { width: g.width, depth: g.depth, height: g.height, clearance: 2 * g.depth * g.clearanceFraction },
           })),
-        len(3, 19).map((thicknessMm) => ({ mount: 'applied' as const, thicknessMm })),
+        len(3, 19).map((thickness) => ({ mount: 'applied' as const, thickness })),
       ),
     }),
   )
@@ -100,9 +100,9 @@ const scheduleArb = fc
       label: 'Prop',
       quantity,
       size: { from: 'box', ...box },
-      thickness: { frontMm: t.front, backMm: t.back, sideMm: t.side },
+      thickness: { front: t.front, back: t.back, side: t.side },
       joint,
-      front: lip !== undefined && allowsLip(joint) ? { style: 'lipped', lipMm: lip } : { style: 'flush' },
+      front: lip !== undefined && allowsLip(joint) ? { style: 'lipped', lip: lip } : { style: 'flush' },
       bottom,
     } satisfies DrawerScheduleInput,
   }));
@@ -125,50 +125,50 @@ describe('drawer box properties', () => {
         for (const end of ['front', 'back'] as const) {
           const want = tradeEngagement(joint, t, end);
           const panel = end === 'front' ? front : back;
-          const sideEnd = side.endEngagementMm[end === 'front' ? 0 : 1];
+          const sideEnd = side.endEngagement[end === 'front' ? 0 : 1];
           expect(sideEnd).toBeCloseTo(want.side, 6);
-          expect(panel.endEngagementMm[0]).toBeCloseTo(want.panel, 6);
-          expect(panel.endEngagementMm[1]).toBeCloseTo(want.panel, 6);
+          expect(panel.endEngagement[0]).toBeCloseTo(want.panel, 6);
+          expect(panel.endEngagement[1]).toBeCloseTo(want.panel, 6);
           const tp = end === 'front' ? t.front : t.back;
-          expect(sideEnd >= tp - EPS || panel.endEngagementMm[0] >= t.side - EPS).toBe(true);
+          expect(sideEnd >= tp - EPS || panel.endEngagement[0] >= t.side - EPS).toBe(true);
           expect(sideEnd).toBeLessThanOrEqual(tp + EPS);
-          expect(panel.endEngagementMm[0]).toBeLessThanOrEqual(t.side + EPS);
+          expect(panel.endEngagement[0]).toBeLessThanOrEqual(t.side + EPS);
         }
 
         // Plan view, x across, y from the front face back. Left side at x ∈ [0, tₛ]; the front's end enters it.
-        const frontStartX = t.side - front.endEngagementMm[0] - front.overhangMm;
-        const frontEndX = frontStartX + front.lengthMm;
-        const rightInsideX = frontEndX - front.overhangMm - front.endEngagementMm[1];
-        const backStartX = t.side - back.endEngagementMm[0];
-        const backEndX = backStartX + back.lengthMm;
-        expect(backEndX - back.endEngagementMm[1]).toBeCloseTo(rightInsideX, 6); // the back fits the same sides
-        const sideStartY = t.front - side.endEngagementMm[0];
-        const sideEndY = sideStartY + side.lengthMm;
-        const backInsideY = sideEndY - side.endEngagementMm[1];
+        const frontStartX = t.side - front.endEngagement[0] - front.overhang;
+        const frontEndX = frontStartX + front.length;
+        const rightInsideX = frontEndX - front.overhang - front.endEngagement[1];
+        const backStartX = t.side - back.endEngagement[0];
+        const backEndX = backStartX + back.length;
+        expect(backEndX - back.endEngagement[1]).toBeCloseTo(rightInsideX, 6); // the back fits the same sides
+        const sideStartY = t.front - side.endEngagement[0];
+        const sideEndY = sideStartY + side.length;
+        const backInsideY = sideEndY - side.endEngagement[1];
 
-        const xs = [0, rightInsideX + t.side, backStartX, backEndX, frontStartX + front.overhangMm, frontEndX - front.overhangMm];
+        const xs = [0, rightInsideX + t.side, backStartX, backEndX, frontStartX + front.overhang, frontEndX - front.overhang];
         const ys = [0, t.front, sideStartY, sideEndY, backInsideY, backInsideY + t.back];
-        const wallHeights = new Set([front.widthMm, back.widthMm, side.widthMm].map((h) => h.toFixed(6)));
+        const wallHeights = new Set([front.width, back.width, side.width].map((h) => h.toFixed(6)));
         const bottomPart = byRole(result.parts, 'bottom');
-        const height = front.widthMm + (bottom.mount === 'applied' ? bottomPart.thicknessMm : 0);
+        const height = front.width + (bottom.mount === 'applied' ? bottomPart.thickness : 0);
 
-        expect(Math.max(...xs) - Math.min(...xs)).toBeCloseTo(box.widthMm, 6);
-        expect(Math.max(...ys) - Math.min(...ys)).toBeCloseTo(box.depthMm, 6);
+        expect(Math.max(...xs) - Math.min(...xs)).toBeCloseTo(box.width, 6);
+        expect(Math.max(...ys) - Math.min(...ys)).toBeCloseTo(box.depth, 6);
         expect(wallHeights.size).toBe(1);
-        expect(height).toBeCloseTo(box.heightMm, 6);
-        expect(front.overhangMm).toBeCloseTo(lip, 9);
+        expect(height).toBeCloseTo(box.height, 6);
+        expect(front.overhang).toBeCloseTo(lip, 9);
 
         // The bottom spans groove bottom to groove bottom less the clearance asked for, both ways.
         if (bottom.mount === 'groove') {
           const g = bottom.groove;
-          const acrossGrooves = rightInsideX + g.depthMm - (t.side - g.depthMm);
-          const frontToBack = backInsideY + g.depthMm - (t.front - g.depthMm);
-          expect(acrossGrooves - bottomPart.lengthMm).toBeCloseTo(g.clearanceMm, 6);
-          expect(frontToBack - bottomPart.widthMm).toBeCloseTo(g.clearanceMm, 6);
-          expect(bottomPart.thicknessMm).toBeLessThanOrEqual(g.widthMm + EPS);
+          const acrossGrooves = rightInsideX + g.depth - (t.side - g.depth);
+          const frontToBack = backInsideY + g.depth - (t.front - g.depth);
+          expect(acrossGrooves - bottomPart.length).toBeCloseTo(g.clearance, 6);
+          expect(frontToBack - bottomPart.width).toBeCloseTo(g.clearance, 6);
+          expect(bottomPart.thickness).toBeLessThanOrEqual(g.width + EPS);
         } else {
-          expect(bottomPart.lengthMm).toBeCloseTo(box.widthMm, 6);
-          expect(bottomPart.widthMm).toBeCloseTo(box.depthMm, 6);
+          expect(bottomPart.length).toBeCloseTo(box.width, 6);
+          expect(bottomPart.width).toBeCloseTo(box.depth, 6);
         }
       }),
       { numRuns: 300 },
@@ -183,8 +183,8 @@ describe('drawer box properties', () => {
         expect(result.parts.map((p) => p.role).sort()).toEqual(['back', 'bottom', 'front', 'side']);
         for (const p of result.parts) {
           expect(p.quantity).toBe(p.quantityPerBox * input.quantity);
-          expect(p.lengthMm).toBeGreaterThan(0);
-          expect(p.widthMm).toBeGreaterThan(0);
+          expect(p.length).toBeGreaterThan(0);
+          expect(p.width).toBeGreaterThan(0);
         }
       }),
       { numRuns: 100 },
@@ -207,22 +207,22 @@ describe('drawer box properties', () => {
         const broken: Record<string, unknown> = structuredClone(input);
         switch (breakage) {
           case 'engagement-through-front':
-            broken.joint = { method: 'half-blind-dovetail', lapMm: t.front + extra };
+            broken.joint = { method: 'half-blind-dovetail', lap: t.front + extra };
             break;
           case 'engagement-through-side':
-            broken.joint = { method: 'rabbet-and-dado', dadoDepthMm: t.side + extra };
+            broken.joint = { method: 'rabbet-and-dado', dadoDepth: t.side + extra };
             break;
           case 'bottom-thicker-than-groove':
-            broken.bottom = { mount: 'groove', thicknessMm: 6 + extra + 0.01, groove: { widthMm: 6 } };
+            broken.bottom = { mount: 'groove', thickness: 6 + extra + 0.01, groove: { width: 6 } };
             break;
           case 'negative-clearance':
-            broken.bottom = { mount: 'groove', groove: { clearanceMm: -(extra + 0.01) } };
+            broken.bottom = { mount: 'groove', groove: { clearance: -(extra + 0.01) } };
             break;
           case 'box-narrower-than-sides':
-            broken.size = { ...input.size, widthMm: 2 * t.side * (extra / 21) };
+            broken.size = { ...input.size, width: 2 * t.side * (extra / 21) };
             break;
           case 'negative-thickness':
-            broken.thickness = { ...input.thickness, sideMm: -extra };
+            broken.thickness = { ...input.thickness, side: -extra };
             break;
           case 'fractional-quantity':
             broken.quantity = input.quantity + 0.5;

@@ -53,23 +53,23 @@ function readableIssue(issue: { code: string; path: PropertyKey[]; message: stri
 function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
   const outside = boxFromOpening(s);
   if (!outside.ok) return outside;
-  const t: BoxThickness = { front: s.thickness.frontMm, back: s.thickness.backMm ?? s.thickness.frontMm, side: s.thickness.sideMm };
+  const t: BoxThickness = { front: s.thickness.front, back: s.thickness.back ?? s.thickness.front, side: s.thickness.side };
   const box = sizedBox(s, outside.box, t);
   const corners = jointCorners(s.joint, t);
-  const lip = lipPastBox(s, box);
-  const lipMm = lip.ok ? lip.lipMm : 0;
+  const lipCheck = lipPastBox(s, box);
+  const lip = lipCheck.ok ? lipCheck.lip : 0;
 
   const errors = [
-    ...(lip.ok ? [] : lip.errors),
+    ...(lipCheck.ok ? [] : lipCheck.errors),
     ...slideModelErrors(s, t),
     ...boxErrors(box, t),
-    ...jointErrors(s.joint, t, box.wallHeightMm),
+    ...jointErrors(s.joint, t, box.wallHeight),
     ...bottomErrors(s, box, t),
     ...frontStyleErrors(s, corners, t),
   ];
   if (errors.length > 0) return { ok: false, errors };
 
-  const parts: DrawerPart[] = [...wallParts({ s, box, t, corners, lipMm }), bottomPart(s, box, t)];
+  const parts: DrawerPart[] = [...wallParts({ s, box, t, corners, lip }), bottomPart(s, box, t)];
   const applied = appliedFrontPart(s);
   if (applied) parts.push(applied);
   const face = drawerFace(s, box, applied ?? parts[0]);
@@ -89,9 +89,9 @@ function sizeParsedSchedule(s: DrawerSchedule): SizeDrawerScheduleResult {
 function sizedBox(s: DrawerSchedule, size: Extract<ReturnType<typeof boxFromOpening>, { ok: true }>['box'], t: BoxThickness): SizedBox {
   return {
     ...size,
-    insideWidthMm: size.widthMm - 2 * t.side,
-    insideDepthMm: size.depthMm - t.front - t.back,
-    wallHeightMm: size.heightMm - (s.bottom.mount === 'applied' ? s.bottom.thicknessMm : 0),
+    insideWidth: size.width - 2 * t.side,
+    insideDepth: size.depth - t.front - t.back,
+    wallHeight: size.height - (s.bottom.mount === 'applied' ? s.bottom.thickness : 0),
   };
 }
 
@@ -101,7 +101,7 @@ interface WallContext {
   t: BoxThickness;
   corners: ReturnType<typeof jointCorners>;
   /** How far a front that hides the slides reaches past the box at each end (0 for a plain front). */
-  lipMm: Mm;
+  lip: Mm;
 }
 
 /**
@@ -109,31 +109,31 @@ interface WallContext {
  * front that hides the slides), two sides at the inside depth plus their engagement at the front and the back.
  */
 function wallParts(c: WallContext): DrawerPart[] {
-  const { s, box, t, corners, lipMm } = c;
+  const { s, box, t, corners, lip } = c;
   const frontMaterial = s.materials.front ?? s.materials.sides;
   return [
     wallPart(
       c,
       'front',
-      box.insideWidthMm + 2 * corners.front.panelEngagementMm + 2 * lipMm,
-      [corners.front.panelEngagementMm, corners.front.panelEngagementMm],
+      box.insideWidth + 2 * corners.front.panelEngagement + 2 * lip,
+      [corners.front.panelEngagement, corners.front.panelEngagement],
       t.front,
       frontMaterial,
-      lipMm,
+      lip,
     ),
     wallPart(
       c,
       'back',
-      box.insideWidthMm + 2 * corners.back.panelEngagementMm,
-      [corners.back.panelEngagementMm, corners.back.panelEngagementMm],
+      box.insideWidth + 2 * corners.back.panelEngagement,
+      [corners.back.panelEngagement, corners.back.panelEngagement],
       t.back,
       s.materials.back ?? frontMaterial,
     ),
     wallPart(
       c,
       'side',
-      box.insideDepthMm + corners.front.sideEngagementMm + corners.back.sideEngagementMm,
-      [corners.front.sideEngagementMm, corners.back.sideEngagementMm],
+      box.insideDepth + corners.front.sideEngagement + corners.back.sideEngagement,
+      [corners.front.sideEngagement, corners.back.sideEngagement],
       t.side,
       s.materials.sides,
     ),
@@ -141,27 +141,27 @@ function wallParts(c: WallContext): DrawerPart[] {
 }
 
 function wallPart(
-  { s, box, t, corners, lipMm }: WallContext,
+  { s, box, t, corners, lip }: WallContext,
   role: 'front' | 'back' | 'side',
-  lengthMm: Mm,
-  endEngagementMm: Mm[],
-  thicknessMm: Mm,
+  length: Mm,
+  endEngagement: Mm[],
+  thickness: Mm,
   material: string,
-  overhangMm = 0,
+  overhang = 0,
 ): DrawerPart {
   return {
     ...partBase(s, role, role === 'side' ? 2 : 1),
-    lengthMm,
-    widthMm: box.wallHeightMm,
-    thicknessMm,
+    length,
+    width: box.wallHeight,
+    thickness,
     material,
     grain: 'along-length',
-    jointAllowanceMm: endEngagementMm[0] + endEngagementMm[1],
-    endEngagementMm,
-    overhangMm,
+    jointAllowance: endEngagement[0] + endEngagement[1],
+    endEngagement,
+    overhang,
     machining: [
-      ...(overhangMm > 0 ? [`Overhangs the box ${mmText(overhangMm)} at each end to cover the slides.`] : []),
-      ...jointMachining(s.joint, role, corners, t, lipMm),
+      ...(overhang > 0 ? [`Overhangs the box ${mmText(overhang)} at each end to cover the slides.`] : []),
+      ...jointMachining(s.joint, role, corners, t, lip),
       ...grooveMachining(s, role),
     ],
   };
@@ -171,10 +171,10 @@ function wallPart(
  * How far a lipped front runs past each side of the box: what its overlay or reveal on the opening leaves after the
  * slides' gap, or the lip given outright. Flush and applied fronts have none.
  */
-function lipPastBox(s: DrawerSchedule, box: SizedBox): Result<{ lipMm: Mm }> {
+function lipPastBox(s: DrawerSchedule, box: SizedBox): Result<{ lip: Mm }> {
   const f = s.front;
-  if (f.style !== 'lipped') return { ok: true, lipMm: 0 };
-  if (f.fit === 'lip') return { ok: true, lipMm: f.lipMm! };
+  if (f.style !== 'lipped') return { ok: true, lip: 0 };
+  if (f.fit === 'lip') return { ok: true, lip: f.lip! };
   if (s.size.from !== 'opening')
     return {
       ok: false,
@@ -182,40 +182,40 @@ function lipPastBox(s: DrawerSchedule, box: SizedBox): Result<{ lipMm: Mm }> {
         { path: 'front.fit', message: 'A box given by its own size has no opening to lap or stop short of: give the lip past each side of the box' },
       ],
     };
-  const frontWidth = f.fit === 'overlay' ? s.size.widthMm + 2 * f.overlayMm! : s.size.widthMm - 2 * f.revealMm!;
-  const lipMm = (frontWidth - box.widthMm) / 2;
-  if (lipMm <= 0)
+  const frontWidth = f.fit === 'overlay' ? s.size.width + 2 * f.overlay! : s.size.width - 2 * f.reveal!;
+  const lip = (frontWidth - box.width) / 2;
+  if (lip <= 0)
     return {
       ok: false,
       errors: [
         {
-          path: 'front.revealMm',
-          message: `With ${specText(f.revealMm!)} reveals the front (${mmText(frontWidth)}) is no wider than the box (${mmText(box.widthMm)}), so it hides no slide: use a smaller reveal, or a flush front`,
+          path: 'front.reveal',
+          message: `With ${specText(f.reveal!)} reveals the front (${mmText(frontWidth)}) is no wider than the box (${mmText(box.width)}), so it hides no slide: use a smaller reveal, or a flush front`,
         },
       ],
     };
-  return { ok: true, lipMm };
+  return { ok: true, lip };
 }
 
 /** The drawer's face (its box front, or the applied front) against the opening it closes, when there is one. */
 function drawerFace(s: DrawerSchedule, box: SizedBox, facePart: DrawerPart): DrawerFace {
-  const opening = s.size.from === 'opening' ? { widthMm: s.size.widthMm, heightMm: s.size.heightMm } : null;
+  const opening = s.size.from === 'opening' ? { width: s.size.width, height: s.size.height } : null;
   const face = {
     role: facePart.role as DrawerFace['role'],
-    widthMm: facePart.lengthMm,
-    heightMm: facePart.role === 'applied-front' ? facePart.widthMm : box.heightMm,
+    width: facePart.length,
+    height: facePart.role === 'applied-front' ? facePart.width : box.height,
     opening,
   };
-  return { ...face, sideMarginMm: opening ? (opening.widthMm - face.widthMm) / 2 : null, lipped: s.front.style === 'lipped' };
+  return { ...face, sideMargin: opening ? (opening.width - face.width) / 2 : null, lipped: s.front.style === 'lipped' };
 }
 
 /** A front meant to sit inside its opening with less than a working gap each side will rub or bind. */
 function faceWarnings(face: DrawerFace): string[] {
-  if (!face.opening || face.sideMarginMm === null || face.sideMarginMm < -1e-9 || face.sideMarginMm >= MIN_FRONT_REVEAL_MM - 1e-9) return [];
+  if (!face.opening || face.sideMargin === null || face.sideMargin < -1e-9 || face.sideMargin >= MIN_FRONT_REVEAL_MM - 1e-9) return [];
   if (!face.lipped && face.role === 'front') return [];
-  const gap = Math.max(0, face.sideMarginMm);
+  const gap = Math.max(0, face.sideMargin);
   return [
-    `The ${face.role === 'applied-front' ? 'applied front' : 'lipped front'} (${mmText(face.widthMm)}) leaves ${gap === 0 ? 'no gap' : `only ${specText(gap)}`} each side of the ${mmText(face.opening.widthMm)} opening: it will rub or bind. Fronts inside an opening want about 1.5 mm each side; or lap the opening with an overlay.`,
+    `The ${face.role === 'applied-front' ? 'applied front' : 'lipped front'} (${mmText(face.width)}) leaves ${gap === 0 ? 'no gap' : `only ${specText(gap)}`} each side of the ${mmText(face.opening.width)} opening: it will rub or bind. Fronts inside an opening want about 1.5 mm each side; or lap the opening with an overlay.`,
   ];
 }
 
@@ -226,26 +226,26 @@ function partBase(s: DrawerSchedule, role: DrawerPart['role'], quantityPerBox: n
 /** Sides thicker than the chosen slide model is made for cannot be hung on it. */
 function slideModelErrors(s: DrawerSchedule, t: BoxThickness): FieldError[] {
   const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
-  if (!model || model.maxSideThicknessMm === null || t.side <= model.maxSideThicknessMm + SLIDE_SIDE_TOLERANCE_MM) return [];
+  if (!model || model.maxSideThickness === null || t.side <= model.maxSideThickness + SLIDE_SIDE_TOLERANCE_MM) return [];
   return [
     {
-      path: 'thickness.sideMm',
-      message: `The ${model.name} takes sides up to ${specText(model.maxSideThicknessMm)}; these are ${specText(t.side)}: use thinner sides or another slide`,
+      path: 'thickness.side',
+      message: `The ${model.name} takes sides up to ${specText(model.maxSideThickness)}; these are ${specText(t.side)}: use thinner sides or another slide`,
     },
   ];
 }
 
 function boxErrors(box: SizedBox, t: BoxThickness): FieldError[] {
   const errors: FieldError[] = [];
-  if (box.insideWidthMm <= 0)
-    errors.push({ path: 'thickness.sideMm', message: `Two ${mmText(t.side)} sides fill the whole box width (${mmText(box.widthMm)})` });
-  if (box.insideDepthMm <= 0)
+  if (box.insideWidth <= 0)
+    errors.push({ path: 'thickness.side', message: `Two ${mmText(t.side)} sides fill the whole box width (${mmText(box.width)})` });
+  if (box.insideDepth <= 0)
     errors.push({
-      path: 'thickness.frontMm',
-      message: `The front and back (${mmText(t.front + t.back)}) fill the whole box depth (${mmText(box.depthMm)})`,
+      path: 'thickness.front',
+      message: `The front and back (${mmText(t.front + t.back)}) fill the whole box depth (${mmText(box.depth)})`,
     });
-  if (box.wallHeightMm <= 0)
-    errors.push({ path: 'bottom.thicknessMm', message: `The applied bottom is as thick as the box is tall (${mmText(box.heightMm)})` });
+  if (box.wallHeight <= 0)
+    errors.push({ path: 'bottom.thickness', message: `The applied bottom is as thick as the box is tall (${mmText(box.height)})` });
   return errors;
 }
 
@@ -259,31 +259,31 @@ function bottomErrors(s: DrawerSchedule, box: SizedBox, t: BoxThickness): FieldE
   }
   const g = bottom.groove;
   const thinnest = Math.min(t.side, t.front, t.back);
-  if (g.depthMm >= thinnest)
+  if (g.depth >= thinnest)
     errors.push({
-      path: 'bottom.groove.depthMm',
-      message: `The groove (${mmText(g.depthMm)} deep) must be shallower than the thinnest wall (${mmText(thinnest)})`,
+      path: 'bottom.groove.depth',
+      message: `The groove (${mmText(g.depth)} deep) must be shallower than the thinnest wall (${mmText(thinnest)})`,
     });
-  if (bottom.thicknessMm > g.widthMm)
+  if (bottom.thickness > g.width)
     errors.push({
-      path: 'bottom.thicknessMm',
-      message: `The bottom (${mmText(bottom.thicknessMm)}) is thicker than its groove is wide (${mmText(g.widthMm)})`,
+      path: 'bottom.thickness',
+      message: `The bottom (${mmText(bottom.thickness)}) is thicker than its groove is wide (${mmText(g.width)})`,
     });
-  if (g.heightMm + g.widthMm >= box.wallHeightMm)
+  if (g.height + g.width >= box.wallHeight)
     errors.push({
-      path: 'bottom.groove.heightMm',
-      message: `The groove (${mmText(g.heightMm)} up, ${mmText(g.widthMm)} wide) does not fit in a ${mmText(box.wallHeightMm)} tall box`,
+      path: 'bottom.groove.height',
+      message: `The groove (${mmText(g.height)} up, ${mmText(g.width)} wide) does not fit in a ${mmText(box.wallHeight)} tall box`,
     });
-  if (g.clearanceMm >= 2 * g.depthMm)
+  if (g.clearance >= 2 * g.depth)
     errors.push({
-      path: 'bottom.groove.clearanceMm',
-      message: `With ${mmText(g.clearanceMm)} of clearance the bottom would not reach into ${mmText(g.depthMm)} deep grooves`,
+      path: 'bottom.groove.clearance',
+      message: `With ${mmText(g.clearance)} of clearance the bottom would not reach into ${mmText(g.depth)} deep grooves`,
     });
-  const recess = slide.type === 'undermount' ? (slide.model?.bottomRecessMm ?? slide.bottomRecessMm) : 0;
-  if (slide.type === 'undermount' && g.heightMm < recess - 1e-9)
+  const recess = slide.type === 'undermount' ? (slide.model?.bottomRecess ?? slide.bottomRecess) : 0;
+  if (slide.type === 'undermount' && g.height < recess - 1e-9)
     errors.push({
-      path: 'bottom.groove.heightMm',
-      message: `${slide.model ? `The ${slide.model.name}` : 'Undermount slides'} need the bottom at least ${specText(recess)} up; the groove is ${specText(g.heightMm)} up`,
+      path: 'bottom.groove.height',
+      message: `${slide.model ? `The ${slide.model.name}` : 'Undermount slides'} need the bottom at least ${specText(recess)} up; the groove is ${specText(g.height)} up`,
     });
   return errors;
 }
@@ -292,7 +292,7 @@ function frontStyleErrors(s: DrawerSchedule, corners: JointCorners, t: BoxThickn
   const f = s.front;
   if (f.style === 'lipped') {
     // A lip extends the front past the side; only a joint that hides the side's end behind the front allows it.
-    const frontCoversSide = corners.front.panelEngagementMm >= t.side && corners.front.sideEngagementMm < t.front;
+    const frontCoversSide = corners.front.panelEngagement >= t.side && corners.front.sideEngagement < t.front;
     return frontCoversSide
       ? []
       : [
@@ -304,16 +304,15 @@ function frontStyleErrors(s: DrawerSchedule, corners: JointCorners, t: BoxThickn
   }
   if (f.style === 'applied' && s.size.from === 'box') {
     const missing: FieldError[] = [];
-    if (f.widthMm === undefined)
-      missing.push({ path: 'front.widthMm', message: 'Give the applied front width, or size the schedule from its opening' });
-    if (f.heightMm === undefined)
-      missing.push({ path: 'front.heightMm', message: 'Give the applied front height, or size the schedule from its opening' });
+    if (f.width === undefined) missing.push({ path: 'front.width', message: 'Give the applied front width, or size the schedule from its opening' });
+    if (f.height === undefined)
+      missing.push({ path: 'front.height', message: 'Give the applied front height, or size the schedule from its opening' });
     return missing;
   }
   if (f.style === 'applied' && f.fit === 'inset' && s.size.from === 'opening') {
-    const smaller = Math.min(s.size.widthMm, s.size.heightMm);
-    if (2 * f.revealMm >= smaller)
-      return [{ path: 'front.revealMm', message: `Reveals of ${mmText(f.revealMm)} leave no front in a ${mmText(smaller)} opening` }];
+    const smaller = Math.min(s.size.width, s.size.height);
+    if (2 * f.reveal >= smaller)
+      return [{ path: 'front.reveal', message: `Reveals of ${mmText(f.reveal)} leave no front in a ${mmText(smaller)} opening` }];
   }
   return [];
 }
@@ -323,36 +322,36 @@ function grooveMachining(s: DrawerSchedule, role: 'front' | 'back' | 'side'): st
   const g = s.bottom.groove;
   const stopped = role === 'side' && s.joint.method !== 'lock-rabbet' && s.joint.method !== 'rabbet-and-dado';
   return [
-    `Bottom groove ${mmText(g.widthMm)} wide × ${mmText(g.depthMm)} deep along the inside face, its lower edge ${mmText(g.heightMm)} above the bottom edge${stopped ? '; stop it or hide it in a joint where it would show at the ends' : ''}.`,
+    `Bottom groove ${mmText(g.width)} wide × ${mmText(g.depth)} deep along the inside face, its lower edge ${mmText(g.height)} above the bottom edge${stopped ? '; stop it or hide it in a joint where it would show at the ends' : ''}.`,
   ];
 }
 
 function bottomPart(s: DrawerSchedule, box: SizedBox, t: BoxThickness): DrawerPart {
   const base = {
     ...partBase(s, 'bottom', 1),
-    thicknessMm: s.bottom.thicknessMm,
+    thickness: s.bottom.thickness,
     material: s.bottom.material,
     grain: s.bottom.grain,
-    endEngagementMm: [],
-    overhangMm: 0,
+    endEngagement: [],
+    overhang: 0,
   };
   if (s.bottom.mount === 'applied') {
     return {
       ...base,
-      lengthMm: box.widthMm,
-      widthMm: box.depthMm,
-      jointAllowanceMm: 2 * t.side,
+      length: box.width,
+      width: box.depth,
+      jointAllowance: 2 * t.side,
       machining: ['Applied under the box, flush with its outside faces; glue and fasten.'],
     };
   }
-  const reach = 2 * s.bottom.groove.depthMm - s.bottom.groove.clearanceMm;
+  const reach = 2 * s.bottom.groove.depth - s.bottom.groove.clearance;
   return {
     ...base,
     // Length runs side to side, so a solid-wood bottom moves front to back, where the grooves leave room.
-    lengthMm: box.insideWidthMm + reach,
-    widthMm: box.insideDepthMm + reach,
-    jointAllowanceMm: reach,
-    machining: [`Captured in the grooves on all four sides with ${mmText(s.bottom.groove.clearanceMm)} total play each way.`],
+    length: box.insideWidth + reach,
+    width: box.insideDepth + reach,
+    jointAllowance: reach,
+    machining: [`Captured in the grooves on all four sides with ${mmText(s.bottom.groove.clearance)} total play each way.`],
   };
 }
 
@@ -362,26 +361,26 @@ function appliedFrontPart(s: DrawerSchedule): DrawerPart | null {
   const opening: BoxSize | null = s.size.from === 'opening' ? s.size : null;
   const fromOpening = (o: BoxSize) =>
     f.fit === 'overlay'
-      ? { w: o.widthMm + 2 * f.overlayMm.side, h: o.heightMm + f.overlayMm.top + f.overlayMm.bottom }
-      : { w: o.widthMm - 2 * f.revealMm, h: o.heightMm - 2 * f.revealMm };
+      ? { w: o.width + 2 * f.overlay.side, h: o.height + f.overlay.top + f.overlay.bottom }
+      : { w: o.width - 2 * f.reveal, h: o.height - 2 * f.reveal };
   const derived = opening ? fromOpening(opening) : null;
   // frontStyleErrors has made sure an explicit size exists when there is no opening.
-  const lengthMm = f.widthMm ?? derived!.w;
-  const widthMm = f.heightMm ?? derived!.h;
+  const length = f.width ?? derived!.w;
+  const width = f.height ?? derived!.h;
   return {
     ...partBase(s, 'applied-front', 1),
-    lengthMm,
-    widthMm,
-    thicknessMm: f.thicknessMm,
+    length,
+    width,
+    thickness: f.thickness,
     material: f.material,
     grain: 'along-length',
-    jointAllowanceMm: 0,
-    endEngagementMm: [],
-    overhangMm: 0,
+    jointAllowance: 0,
+    endEngagement: [],
+    overhang: 0,
     machining: [
       f.fit === 'overlay'
-        ? `Overlay front: laps the opening ${mmText(f.overlayMm.side)} each side, ${mmText(f.overlayMm.top)} top, ${mmText(f.overlayMm.bottom)} bottom; screwed on from inside the box.`
-        : `Inset front: ${mmText(f.revealMm)} reveal on each edge; screwed on from inside the box.`,
+        ? `Overlay front: laps the opening ${mmText(f.overlay.side)} each side, ${mmText(f.overlay.top)} top, ${mmText(f.overlay.bottom)} bottom; screwed on from inside the box.`
+        : `Inset front: ${mmText(f.reveal)} reveal on each edge; screwed on from inside the box.`,
     ],
   };
 }
@@ -389,9 +388,9 @@ function appliedFrontPart(s: DrawerSchedule): DrawerPart | null {
 function scheduleNotes(s: DrawerSchedule, t: BoxThickness): string[] {
   const notes: string[] = [];
   const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;
-  if (model && s.size.from === 'box' && !model.lengthsMm.some((l) => Math.abs(l - s.size.depthMm) < 0.5))
+  if (model && s.size.from === 'box' && !model.lengths.some((l) => Math.abs(l - s.size.depth) < 0.5))
     notes.push(
-      `The box is ${mmText(s.size.depthMm)} long, and the ${model.name} comes ${model.lengthsMm.map(specText).join(', ')} long: a box on it is usually as long as its slide.`,
+      `The box is ${mmText(s.size.depth)} long, and the ${model.name} comes ${model.lengths.map(specText).join(', ')} long: a box on it is usually as long as its slide.`,
     );
   // Without a model there is no maker's limit to hold the sides to, only the usual one.
   if (s.slide.type === 'undermount' && !s.slide.model && t.side > UNDERMOUNT_MAX_SIDE + SLIDE_SIDE_TOLERANCE_MM)
@@ -403,7 +402,7 @@ function scheduleNotes(s: DrawerSchedule, t: BoxThickness): string[] {
   if (s.joint.method === 'butt-loose-tenon') {
     const tenons = 4 * s.joint.tenonsPerCorner * s.quantity;
     notes.push(
-      `${tenons} loose tenons ${mmText(s.joint.tenonThicknessMm)} thick, each ${mmText(2 * s.joint.mortiseDepthMm)} long, cut from tenon stock.`,
+      `${tenons} loose tenons ${mmText(s.joint.tenonThickness)} thick, each ${mmText(2 * s.joint.mortiseDepth)} long, cut from tenon stock.`,
     );
   }
   if (s.front.style === 'applied' && s.size.from === 'opening' && s.front.fit === 'overlay')

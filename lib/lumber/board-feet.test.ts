@@ -14,7 +14,7 @@ describe('board feet by exact volume', () => {
     ['AHEC "Measurement": 2″ × 6¼″ × 8′ is 8.33 BF by exact volume', { quarters: 8 }, 6.25, 8, 8.333],
     ['AHEC "Measurement": one board foot is 12″ × 12″ × 1″', { mm: inches(1) }, 12, 1, 1],
   ] as const)('%s', (_label, thickness: Thickness, widthIn, lengthFt, expected) => {
-    expect(boardFeet({ thickness, widthMm: inches(widthIn), lengthMm: ft(lengthFt) })).toBeCloseTo(expected, 3);
+    expect(boardFeet({ thickness, width: inches(widthIn), length: ft(lengthFt) })).toBeCloseTo(expected, 3);
   });
 
   test.each([
@@ -34,7 +34,7 @@ describe('board feet by exact volume', () => {
   });
 
   test('a 1 m × 1 m × 1 m block is one cubic metre and 423.776 BF', () => {
-    const block = { thickness: { mm: 1000 }, widthMm: 1000, lengthMm: 1000 };
+    const block = { thickness: { mm: 1000 }, width: 1000, length: 1000 };
     expect(cubicMetres(block)).toBeCloseTo(1, 12);
     expect(boardFeet(block)).toBeCloseTo(423.776, 3);
   });
@@ -42,12 +42,12 @@ describe('board feet by exact volume', () => {
   test.each([[{ quarters: 1.5 }], [{ quarters: -4 }], [{ quarters: 0 }], [{ mm: -3 }], [{ mm: Number.NaN }]])(
     'refuses the thickness %j',
     (thickness) => {
-      expect(() => boardFeet({ thickness, widthMm: inches(6), lengthMm: ft(8) })).toThrow(RangeError);
+      expect(() => boardFeet({ thickness, width: inches(6), length: ft(8) })).toThrow(RangeError);
     },
   );
 
   test('a board with no width is refused rather than counted as nothing', () => {
-    expect(() => boardFeet({ thickness: { quarters: 4 }, widthMm: 0, lengthMm: 100 })).toThrow(/width must be a positive/);
+    expect(() => boardFeet({ thickness: { quarters: 4 }, width: 0, length: 100 })).toThrow(/width must be a positive/);
   });
 
   test('board feet and cubic metres convert both ways without loss, and scale with each dimension', () => {
@@ -55,9 +55,9 @@ describe('board feet by exact volume', () => {
     const thick = fc.double({ min: 1, max: 1000, noNaN: true }); // past a metre a thickness is refused as a slipped unit
     fc.assert(
       fc.property(thick, dim, dim, fc.integer({ min: 1, max: 5 }), (t, w, l, k) => {
-        const board = { thickness: { mm: t }, widthMm: w, lengthMm: l };
+        const board = { thickness: { mm: t }, width: w, length: l };
         expect(boardFeetToCubicMetres(boardFeet(board))).toBeCloseTo(cubicMetres(board), 9);
-        expect(boardFeet({ ...board, lengthMm: l * k }) / boardFeet(board)).toBeCloseTo(k, 9);
+        expect(boardFeet({ ...board, length: l * k }) / boardFeet(board)).toBeCloseTo(k, 9);
       }),
       { seed: 20261202 },
     );

@@ -1,6 +1,6 @@
 import type { Board } from '@/shared/schemas/lumber';
 import { MM_PER_INCH } from '@/lib/units/length';
-import { thicknessMm } from './thickness';
+import { thicknessToMm } from './thickness';
 import { MAX_LENGTH_MM, MIN_LENGTH_MM } from '@/lib/units/parse-length';
 import { requireAtLeast, requireAtMost, requireNonNegative, requirePositive } from './require-positive';
 
@@ -11,16 +11,16 @@ const MM3_PER_CUBIC_METRE = 1e9;
 export const BOARD_FEET_PER_CUBIC_METRE = MM3_PER_CUBIC_METRE / MM3_PER_BOARD_FOOT;
 
 /** A board's width and length, each from 0.5 mm (below, a typing slip) to the 100 m past which a length is a slipped unit. */
-export function boardSides({ widthMm, lengthMm }: Pick<Board, 'widthMm' | 'lengthMm'>): { widthMm: number; lengthMm: number } {
+export function boardSides({ width, length }: Pick<Board, 'width' | 'length'>): { width: number; length: number } {
   const side = (what: string, mm: number) =>
     requireAtMost(what, requireAtLeast(what, requirePositive(what, mm), MIN_LENGTH_MM, 'mm'), MAX_LENGTH_MM, 'mm');
-  return { widthMm: side('width', widthMm), lengthMm: side('length', lengthMm) };
+  return { width: side('width', width), length: side('length', length) };
 }
 
 function volumeMm3(board: Board): number {
-  if (!board || typeof board !== 'object') throw new RangeError('Give the board as { thickness, widthMm, lengthMm }.');
-  const { widthMm, lengthMm } = boardSides(board);
-  return thicknessMm(board.thickness) * widthMm * lengthMm;
+  if (!board || typeof board !== 'object') throw new RangeError('Give the board as { thickness, width, length }.');
+  const { width, length } = boardSides(board);
+  return thicknessToMm(board.thickness) * width * length;
 }
 
 /** Exact volume in board feet: T(in) × W(in) × L(ft) / 12, on the nominal thickness for quartered stock. */

@@ -22,8 +22,8 @@ describe('lumber input schemas', () => {
   });
 
   test('a board needs positive width and length', () => {
-    expect(boardSchema.safeParse({ thickness: { quarters: 4 }, widthMm: 150, lengthMm: 2400 }).success).toBe(true);
-    expect(boardSchema.safeParse({ thickness: { quarters: 4 }, widthMm: -1, lengthMm: 2400 }).error?.issues[0].message).toMatch(
+    expect(boardSchema.safeParse({ thickness: { quarters: 4 }, width: 150, length: 2400 }).success).toBe(true);
+    expect(boardSchema.safeParse({ thickness: { quarters: 4 }, width: -1, length: 2400 }).error?.issues[0].message).toMatch(
       /width must be greater than zero/,
     );
   });
@@ -34,7 +34,7 @@ describe('lumber input schemas', () => {
   });
 
   test('movement input names a listed species, a cut and moisture contents up to fibre saturation', () => {
-    const ok = { species: 'red-oak', widthMm: 300, cut: 'flatsawn', mcFrom: 6, mcTo: 10, fixedAcrossWidth: true };
+    const ok = { species: 'red-oak', width: 300, cut: 'flatsawn', mcFrom: 6, mcTo: 10, fixedAcrossWidth: true };
     expect(movementInputSchema.safeParse(ok).success).toBe(true);
     expect(movementInputSchema.safeParse({ ...ok, species: 'balsa' }).error?.issues[0].message).toMatch(/one of: red-oak/);
     expect(movementInputSchema.safeParse({ ...ok, cut: 'rift' }).error?.issues[0].message).toMatch(/flatsawn.*quartersawn/);

@@ -6,7 +6,7 @@ import { boardFeet, boardFeetToCubicMetres, cubicMetres, cubicMetresToBoardFeet 
 import { buyQuantity } from './buy-quantity';
 import { SPECIES_IDS } from './species';
 import { tally } from './surface-measure';
-import { thicknessInches, thicknessMm } from './thickness';
+import { thicknessInches, thicknessToMm } from './thickness';
 import { dimensionalChange, movementWarning } from './wood-movement';
 
 const SEED = 20261202;
@@ -18,7 +18,7 @@ const anyNumber = fc.oneof(
 /** Mostly plausible sizes (so the arithmetic is exercised), with any number mixed in. */
 const size = fc.oneof(fc.double({ min: 1, max: 6000, noNaN: true }), anyNumber);
 const thickness = fc.oneof(fc.record({ quarters: fc.oneof(fc.integer({ min: -4, max: 60 }), anyNumber) }), fc.record({ mm: size }));
-const board = fc.record({ thickness, widthMm: size, lengthMm: size });
+const board = fc.record({ thickness, width: size, length: size });
 
 describe('no public function of lib/lumber returns a silent wrong number (seeded properties)', () => {
   test('board feet, cubic metres and the yard tally: finite and positive, or refused', () => {
@@ -32,7 +32,7 @@ describe('no public function of lib/lumber returns a silent wrong number (seeded
           (t) => expect(t.boardFeet >= 0 && Number.isInteger(t.surfaceMeasure) && Number.isInteger(t.lengthFt)).toBe(true),
         );
         expectSaneOrRefused(() => thicknessInches(b.thickness), positive);
-        expectSaneOrRefused(() => thicknessMm(b.thickness), positive);
+        expectSaneOrRefused(() => thicknessToMm(b.thickness), positive);
       }),
       { seed: SEED, numRuns: 1000 },
     );
@@ -80,8 +80,8 @@ describe('no public function of lib/lumber returns a silent wrong number (seeded
         fc.constantFrom('flatsawn', 'quartersawn', 'riftsawn', 'Quartersawn'),
         fc.oneof(fc.double({ min: 0, max: 30, noNaN: true }), anyNumber),
         fc.oneof(fc.double({ min: 0, max: 30, noNaN: true }), anyNumber),
-        (species, widthMm, cut, mcFrom, mcTo) => {
-          const input = { species, widthMm, cut, mcFrom, mcTo } as never;
+        (species, width, cut, mcFrom, mcTo) => {
+          const input = { species, width, cut, mcFrom, mcTo } as never;
           expectSaneOrRefused(() => dimensionalChange(input));
           expectSaneOrRefused(() => movementWarning({ ...(input as object), fixedAcrossWidth: true } as never));
         },
@@ -94,8 +94,8 @@ describe('no public function of lib/lumber returns a silent wrong number (seeded
 describe('refusals named in the issue, each with a clear message', () => {
   test.each([
     ['an infinite buying step (it gave NaN)', () => buyQuantity(100, 0.3, { step: Number.POSITIVE_INFINITY }), /buying step/],
-    ['a board a kilometre long', () => boardFeet({ thickness: { quarters: 4 }, widthMm: 150, lengthMm: 1_000_000 }), /length .* past 100000 mm/],
-    ['a board 2 m thick', () => boardFeet({ thickness: { mm: 2000 }, widthMm: 150, lengthMm: 2400 }), /thickness .* past/],
+    ['a board a kilometre long', () => boardFeet({ thickness: { quarters: 4 }, width: 150, length: 1_000_000 }), /length .* past 100000 mm/],
+    ['a board 2 m thick', () => boardFeet({ thickness: { mm: 2000 }, width: 150, length: 2400 }), /thickness .* past/],
     ['an infinite price', () => boardFootCost(10, Number.POSITIVE_INFINITY), /price per board foot must be zero or more/],
     ['negative board feet', () => boardFeetToCubicMetres(-5), /board feet must be zero or more/],
     ['a NaN price per m³', () => pricePerBoardFootFromCubicMetre(Number.NaN), /price per cubic metre/],

@@ -7,7 +7,7 @@ const ft = (n: number) => inches(12 * n);
 
 describe('the NHLA-style tally (AHEC "Measurement")', () => {
   test('AHEC: 2″ × 6¼″ × 8′ tallies SM 4 and 8 BF, against 8.33 BF exact', () => {
-    expect(tally({ thickness: { quarters: 8 }, widthMm: inches(6.25), lengthMm: ft(8) })).toEqual({
+    expect(tally({ thickness: { quarters: 8 }, width: inches(6.25), length: ft(8) })).toEqual({
       widthIn: 6.25,
       lengthFt: 8,
       surfaceMeasure: 4,
@@ -16,7 +16,7 @@ describe('the NHLA-style tally (AHEC "Measurement")', () => {
   });
 
   test('AHEC: 10″ × 13′ has surface measure 10.83, tallied as 11', () => {
-    expect(tally({ thickness: { quarters: 4 }, widthMm: inches(10), lengthMm: ft(13) }).surfaceMeasure).toBe(11);
+    expect(tally({ thickness: { quarters: 4 }, width: inches(10), length: ft(13) }).surfaceMeasure).toBe(11);
   });
 
   test.each([
@@ -27,7 +27,7 @@ describe('the NHLA-style tally (AHEC "Measurement")', () => {
     ['AHEC: SM 5.5 (11″ × 6′) rounds up on a single board', 11, 72, 6, 6],
     ['AHEC: SM 4.5 (4½″ × 12′) rounds up on a single board', 4.5, 144, 12, 5],
   ])('%s', (_label, widthIn, lengthIn, lengthFt, sm) => {
-    const t = tally({ thickness: { quarters: 4 }, widthMm: inches(widthIn), lengthMm: inches(lengthIn) });
+    const t = tally({ thickness: { quarters: 4 }, width: inches(widthIn), length: inches(lengthIn) });
     expect(t.lengthFt).toBe(lengthFt);
     expect(t.surfaceMeasure).toBe(sm);
   });
@@ -36,7 +36,7 @@ describe('the NHLA-style tally (AHEC "Measurement")', () => {
     fc.assert(
       fc.property(fc.integer({ min: 24, max: 96 }), fc.integer({ min: 8, max: 16 }), fc.constantFrom(4, 5, 6, 8, 12), (eighths, l, q) => {
         const w = eighths / 8;
-        const t = tally({ thickness: { quarters: q }, widthMm: inches(w), lengthMm: ft(l) });
+        const t = tally({ thickness: { quarters: q }, width: inches(w), length: ft(l) });
         // By hand in exact eighths: SM × 96 = w × 8 × l, so SM rounds half up as ⌊(8wl + 48) / 96⌋.
         expect(t.surfaceMeasure).toBe(Math.floor((eighths * l + 48) / 96));
         expect(t.boardFeet).toBeCloseTo(t.surfaceMeasure * (q / 4), 12);
@@ -52,6 +52,6 @@ describe('the NHLA-style tally (AHEC "Measurement")', () => {
     ['zero quarters', { quarters: 0 }],
     ['a thickness of no millimetres', { mm: 0 }],
   ])('refuses %s', (_label, thickness) => {
-    expect(() => tally({ thickness, widthMm: inches(6), lengthMm: ft(8) })).toThrow(RangeError);
+    expect(() => tally({ thickness, width: inches(6), length: ft(8) })).toThrow(RangeError);
   });
 });

@@ -24,11 +24,11 @@ const settle = (x: number) => Math.round(x * 1e6) / 1e6;
  * tallied 8 BF against 8.33 exact. Halves round up here; a yard tallying a whole pile alternates them up and down.
  */
 export function tally(board: Board): Tally {
-  if (!board || typeof board !== 'object') throw new RangeError('Give the board as { thickness, widthMm, lengthMm }.');
-  const { widthMm, lengthMm } = boardSides(board);
+  if (!board || typeof board !== 'object') throw new RangeError('Give the board as { thickness, width, length }.');
+  const { width, length } = boardSides(board);
   const { thickness } = board;
-  const widthIn = settle(widthMm / MM_PER_INCH);
-  const lengthFt = Math.floor(settle(lengthMm / (12 * MM_PER_INCH)));
+  const widthIn = settle(width / MM_PER_INCH);
+  const lengthFt = Math.floor(settle(length / (12 * MM_PER_INCH)));
   const surfaceMeasure = Math.floor(settle((widthIn * lengthFt) / 12) + 0.5);
   return { widthIn, lengthFt, surfaceMeasure, boardFeet: surfaceMeasure * thicknessInches(thickness) };
 }

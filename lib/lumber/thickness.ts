@@ -25,7 +25,7 @@ export const thicknessInches = (t: Thickness): number => {
   return 'quarters' in c ? c.quarters / 4 : c.mm / MM_PER_INCH;
 };
 
-export const thicknessMm = (t: Thickness): Mm => {
+export const thicknessToMm = (t: Thickness): Mm => {
   const c = checked(t);
   return 'quarters' in c ? (c.quarters / 4) * MM_PER_INCH : c.mm;
 };

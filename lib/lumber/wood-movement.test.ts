@@ -18,22 +18,22 @@ describe('dimensional change across the width', () => {
     [`${FPL}: 10″ flatsawn white oak, ΔMC 3 → 0.110″`, 'white-oak', 10, 'flatsawn', 8, 11, 0.11],
     [`${FPL}: 18″ flatsawn hard maple, 6→12 % → 0.381″`, 'hard-maple', 18, 'flatsawn', 6, 12, 0.381],
   ] as const)('%s', (_label, species, widthIn, cut, mcFrom, mcTo, expectedIn) => {
-    const { changeMm, withinValidRange } = dimensionalChange({ species, widthMm: inches(widthIn), cut, mcFrom, mcTo });
-    expectAsPrinted(toInches(changeMm), expectedIn, 3);
+    const { change, withinValidRange } = dimensionalChange({ species, width: inches(widthIn), cut, mcFrom, mcTo });
+    expectAsPrinted(toInches(change), expectedIn, 3);
     expect(withinValidRange).toBe(true);
   });
 
   test.each([
     [`${FPL}: 500 mm flatsawn black cherry, ΔMC 5 → 6.2 mm`, 'black-cherry', 500, 7, 12, 6.2, 1],
     [`${FPL}: 300 mm flatsawn black walnut, ΔMC 4 → 3.29 mm`, 'black-walnut', 300, 6, 10, 3.29, 2],
-  ] as const)('%s', (_label, species, widthMm, mcFrom, mcTo, expectedMm, decimals) => {
-    expectAsPrinted(dimensionalChange({ species, widthMm, cut: 'flatsawn', mcFrom, mcTo }).changeMm, expectedMm, decimals);
+  ] as const)('%s', (_label, species, width, mcFrom, mcTo, expected, decimals) => {
+    expectAsPrinted(dimensionalChange({ species, width, cut: 'flatsawn', mcFrom, mcTo }).change, expected, decimals);
   });
 
   test(`${FPL}: drying shrinks (a negative change) and outside 6–14 % the result is flagged as an estimate`, () => {
-    const dry = dimensionalChange({ species: 'red-oak', widthMm: inches(12), cut: 'flatsawn', mcFrom: 10, mcTo: 6 });
-    expect(toInches(dry.changeMm)).toBeCloseTo(-0.177, 3);
-    expect(dimensionalChange({ species: 'red-oak', widthMm: 300, cut: 'flatsawn', mcFrom: 4, mcTo: 10 }).withinValidRange).toBe(false);
+    const dry = dimensionalChange({ species: 'red-oak', width: inches(12), cut: 'flatsawn', mcFrom: 10, mcTo: 6 });
+    expect(toInches(dry.change)).toBeCloseTo(-0.177, 3);
+    expect(dimensionalChange({ species: 'red-oak', width: 300, cut: 'flatsawn', mcFrom: 4, mcTo: 10 }).withinValidRange).toBe(false);
   });
 
   test('quartersawn stock moves less than flatsawn for every listed species, in proportion to width and ΔMC', () => {
@@ -43,10 +43,10 @@ describe('dimensional change across the width', () => {
         fc.double({ min: 10, max: 1500, noNaN: true }),
         fc.integer({ min: 6, max: 13 }),
         (species: SpeciesId, w, mc) => {
-          const flat = dimensionalChange({ species, widthMm: w, cut: 'flatsawn', mcFrom: mc, mcTo: mc + 1 }).changeMm;
-          const quarter = dimensionalChange({ species, widthMm: w, cut: 'quartersawn', mcFrom: mc, mcTo: mc + 1 }).changeMm;
+          const flat = dimensionalChange({ species, width: w, cut: 'flatsawn', mcFrom: mc, mcTo: mc + 1 }).change;
+          const quarter = dimensionalChange({ species, width: w, cut: 'quartersawn', mcFrom: mc, mcTo: mc + 1 }).change;
           expect(quarter).toBeLessThan(flat);
-          expect(dimensionalChange({ species, widthMm: 2 * w, cut: 'flatsawn', mcFrom: mc, mcTo: mc + 1 }).changeMm).toBeCloseTo(2 * flat, 9);
+          expect(dimensionalChange({ species, width: 2 * w, cut: 'flatsawn', mcFrom: mc, mcTo: mc + 1 }).change).toBeCloseTo(2 * flat, 9);
         },
       ),
     );
@@ -54,7 +54,7 @@ describe('dimensional change across the width', () => {
 });
 
 describe('warning about a fixed panel', () => {
-  const panel = { species: 'red-oak', widthMm: inches(12), cut: 'flatsawn', mcFrom: 6, mcTo: 10, fixedAcrossWidth: true } as const;
+  const panel = { species: 'red-oak', width: inches(12), cut: 'flatsawn', mcFrom: 6, mcTo: 10, fixedAcrossWidth: true } as const;
 
   test('common practice, no source: the default threshold is 1/16″', () => {
     expect(MOVEMENT_WARNING_THRESHOLD_MM).toBeCloseTo(1.5875, 9);
@@ -70,14 +70,14 @@ describe('warning about a fixed panel', () => {
 
   test('a metric shop reads the warning in mm', () => {
     expect(
-      movementWarning({ ...panel, widthMm: 500, species: 'black-cherry', mcFrom: 7, mcTo: 12 }, { system: 'metric', precision: 1, feet: false }),
+      movementWarning({ ...panel, width: 500, species: 'black-cherry', mcFrom: 7, mcTo: 12 }, { system: 'metric', precision: 1, feet: false }),
     ).toMatch(/500 mm wide .* about 6\.2 mm/);
   });
 
   test('a panel free to move, or moving less than the threshold, gets no warning', () => {
     expect(movementWarning({ ...panel, fixedAcrossWidth: false })).toBeNull();
-    expect(movementWarning({ ...panel, widthMm: inches(2) })).toBeNull(); // 2″ × 0.00369 × 4 = 0.0295″ < 1/16″
-    expect(movementWarning({ ...panel, thresholdMm: inches(1 / 4) })).toBeNull();
+    expect(movementWarning({ ...panel, width: inches(2) })).toBeNull(); // 2″ × 0.00369 × 4 = 0.0295″ < 1/16″
+    expect(movementWarning({ ...panel, threshold: inches(1 / 4) })).toBeNull();
   });
 
   test('outside 6–14 % the warning says it is an estimate', () => {
@@ -86,15 +86,15 @@ describe('warning about a fixed panel', () => {
 });
 
 describe('refusing what the handbook cannot answer', () => {
-  const ok = { species: 'red-oak' as SpeciesId, widthMm: 300, cut: 'flatsawn' as const, mcFrom: 6, mcTo: 10 };
+  const ok = { species: 'red-oak' as SpeciesId, width: 300, cut: 'flatsawn' as const, mcFrom: 6, mcTo: 10 };
 
   test(`${FPL}: quartersawn and riftsawn use the radial coefficient, and say so (12″ red oak, 6→10 %: 0.076″)`, () => {
     for (const cut of ['quartersawn', 'riftsawn'] as const) {
-      const change = dimensionalChange({ ...ok, widthMm: inches(12), cut });
+      const change = dimensionalChange({ ...ok, width: inches(12), cut });
       expect(change.basis).toBe('radial');
-      expectAsPrinted(toInches(change.changeMm), 0.076, 3);
+      expectAsPrinted(toInches(change.change), 0.076, 3);
     }
-    expect(movementWarning({ ...ok, widthMm: 800, cut: 'riftsawn', fixedAcrossWidth: true })).toContain('radial (quartersawn) coefficient');
+    expect(movementWarning({ ...ok, width: 800, cut: 'riftsawn', fixedAcrossWidth: true })).toContain('radial (quartersawn) coefficient');
   });
 
   test.each([
@@ -105,8 +105,8 @@ describe('refusing what the handbook cannot answer', () => {
     ['a moisture content that is not a number', { mcTo: Number.NaN }],
     ['a moisture content past fibre saturation', { mcTo: 200 }],
     ['a negative moisture content', { mcFrom: -2 }],
-    ['an infinite width', { widthMm: Number.POSITIVE_INFINITY }],
-    ['a panel a kilometre wide', { widthMm: 1_000_000 }],
+    ['an infinite width', { width: Number.POSITIVE_INFINITY }],
+    ['a panel a kilometre wide', { width: 1_000_000 }],
   ])('refuses %s with a clear error', (_label, bad) => {
     expect(() => dimensionalChange({ ...ok, ...(bad as object) } as never)).toThrow(RangeError);
   });
@@ -119,10 +119,10 @@ describe('refusing what the handbook cannot answer', () => {
         fc.constantFrom('flatsawn' as const, 'quartersawn' as const, 'riftsawn' as const),
         fc.double({ min: 0, max: 30, noNaN: true }),
         fc.double({ min: 0, max: 30, noNaN: true }),
-        (species, widthMm, cut, mcFrom, mcTo) => {
-          const warning = movementWarning({ species, widthMm, cut, mcFrom, mcTo, fixedAcrossWidth: true });
+        (species, width, cut, mcFrom, mcTo) => {
+          const warning = movementWarning({ species, width, cut, mcFrom, mcTo, fixedAcrossWidth: true });
           if (warning !== null) expect(warning).not.toMatch(/NaN|Infinity/);
-          expect(Number.isFinite(dimensionalChange({ species, widthMm, cut, mcFrom, mcTo }).changeMm)).toBe(true);
+          expect(Number.isFinite(dimensionalChange({ species, width, cut, mcFrom, mcTo }).change)).toBe(true);
         },
       ),
       { seed: 20261202 },

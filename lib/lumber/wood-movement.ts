@@ -16,7 +16,7 @@ export const MOVEMENT_WARNING_THRESHOLD_MM: Mm = inches(1 / 16);
 
 export interface DimensionalChange {
   /** Positive when the board swells, negative when it shrinks. */
-  changeMm: Mm;
+  change: Mm;
   /** Shrinkage coefficient used: per 1 % moisture content. */
   coefficient: number;
   /** False when either moisture content is outside 6–14 %, where the result is only an estimate. */
@@ -42,20 +42,20 @@ function moisture(what: string, mc: number): number {
 /** ΔW = W × C × (MC_to − MC_from), USDA FPL Wood Handbook (FPL-GTR-190, 2010), ch. 13, eq. 13-2. */
 export function dimensionalChange({
   species,
-  widthMm,
+  width: givenWidth,
   cut,
   mcFrom,
   mcTo,
 }: {
   species: SpeciesId;
-  widthMm: Mm;
+  width: Mm;
   cut: SawnCut;
   mcFrom: number;
   mcTo: number;
 }): DimensionalChange & { basis: 'radial' | 'tangential' } {
   if (!Object.hasOwn(SPECIES, species)) throw new RangeError(`Unknown species "${species}": use one of ${Object.keys(SPECIES).join(', ')}.`);
   if (!Object.hasOwn(COEFFICIENT_FOR_CUT, cut)) throw new RangeError(`Unknown cut "${cut}": use flatsawn, quartersawn or riftsawn.`);
-  const width = requirePositive('width', widthMm);
+  const width = requirePositive('width', givenWidth);
   if (width > MAX_PANEL_WIDTH_MM) throw new RangeError(`A panel ${width} mm wide is past ${MAX_PANEL_WIDTH_MM} mm: check the unit.`);
   const s = SPECIES[species];
   const basis = COEFFICIENT_FOR_CUT[cut];
@@ -63,22 +63,22 @@ export function dimensionalChange({
   const inRange = (mc: number) => mc >= MOVEMENT_VALID_MC.min && mc <= MOVEMENT_VALID_MC.max;
   const from = moisture('starting', mcFrom);
   const to = moisture('final', mcTo);
-  return { changeMm: width * coefficient * (to - from), coefficient, basis, withinValidRange: inRange(from) && inRange(to) };
+  return { change: width * coefficient * (to - from), coefficient, basis, withinValidRange: inRange(from) && inRange(to) };
 }
 
 const DEFAULT_UNITS: ShopUnits = { system: 'imperial', precision: 16, feet: false };
 
 /**
  * A warning for a solid-wood bottom or panel fixed across its width that will move more than
- * `thresholdMm` between the two moisture contents; null when it may move freely or moves too little to matter.
+ * `threshold` between the two moisture contents; null when it may move freely or moves too little to matter.
  */
 export function movementWarning(input: MovementInput, units: ShopUnits = DEFAULT_UNITS): string | null {
-  const { species, widthMm, cut, mcFrom, mcTo, fixedAcrossWidth, thresholdMm = MOVEMENT_WARNING_THRESHOLD_MM } = input;
+  const { species, width, cut, mcFrom, mcTo, fixedAcrossWidth, threshold = MOVEMENT_WARNING_THRESHOLD_MM } = input;
   if (!fixedAcrossWidth) return null;
-  const { changeMm, withinValidRange, basis } = dimensionalChange({ species, widthMm, cut, mcFrom, mcTo });
-  requirePositive('threshold', thresholdMm);
-  const amount = Math.abs(changeMm);
-  if (amount <= thresholdMm) return null;
+  const { change, withinValidRange, basis } = dimensionalChange({ species, width, cut, mcFrom, mcTo });
+  requirePositive('threshold', threshold);
+  const amount = Math.abs(change);
+  if (amount <= threshold) return null;
 
   const moved = units.system === 'metric' ? `${amount.toFixed(1)} mm` : `${(amount / MM_PER_INCH).toFixed(3)}″ (${amount.toFixed(1)} mm)`;
   const remedy =
@@ -91,8 +91,8 @@ export function movementWarning(input: MovementInput, units: ShopUnits = DEFAULT
       : ` This is only an estimate: the handbook's coefficients hold between ${MOVEMENT_VALID_MC.min} % and ${MOVEMENT_VALID_MC.max} % moisture content.`) +
     (cut === 'riftsawn' ? ` Figured with the ${basis} (quartersawn) coefficient: rift moves a little more.` : '');
   return (
-    `A ${formatLength(widthMm, units)} wide ${cut} ${SPECIES[species].name} panel fixed across its width will ` +
-    `${changeMm > 0 ? 'swell' : 'shrink'} about ${moved} going from ${mcFrom} % to ${mcTo} % moisture content — more than the ` +
-    `${formatLength(thresholdMm, units)} it can take without cracking or bowing: ${remedy}.${caveat}`
+    `A ${formatLength(width, units)} wide ${cut} ${SPECIES[species].name} panel fixed across its width will ` +
+    `${change > 0 ? 'swell' : 'shrink'} about ${moved} going from ${mcFrom} % to ${mcTo} % moisture content — more than the ` +
+    `${formatLength(threshold, units)} it can take without cracking or bowing: ${remedy}.${caveat}`
   );
 }

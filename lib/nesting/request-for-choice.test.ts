@@ -36,20 +36,20 @@ const offered: NestRequestInput = {
 const tableSaw = nestSawSchema.parse({
   kind: 'table-saw',
   name: 'Cabinet saw',
-  kerfMm: 4,
-  ripCapacityMm: 762,
-  crosscutCapacityMm: 610,
+  kerf: 4,
+  ripCapacity: 762,
+  crosscutCapacity: 610,
   maxStages: 3,
   firstStage: 'rip',
-  minFenceWidthMm: 25.4,
+  minFenceWidth: 25.4,
 });
 const trackSaw = nestSawSchema.parse({
   kind: 'track-saw',
   name: 'Track saw',
-  kerfMm: 2.2,
-  ripCapacityMm: null,
-  crosscutCapacityMm: 2800,
-  minFenceWidthMm: 0,
+  kerf: 2.2,
+  ripCapacity: null,
+  crosscutCapacity: 2800,
+  minFenceWidth: 0,
 });
 
 describe('the request a Nest choice makes', () => {

@@ -28,7 +28,7 @@ export function requestForChoice(offered: NestRequestInput, choice: NestChoice):
     throw invalid('A breakdown saw needs a second saw for the rest of the cuts.', { breakdownSawId: ['choose the second saw too'] });
   const chosen = new Set(choice.stockIds);
   const settings = { ...offered.settings, ...choice.settings };
-  const sawKerf = Math.max(0, ...[choice.saw, choice.breakdownSaw].map((s) => s?.kerfMm ?? 0));
+  const sawKerf = Math.max(0, ...[choice.saw, choice.breakdownSaw].map((s) => s?.kerf ?? 0));
   return {
     parts: offered.parts,
     stock: offered.stock.filter((s) => chosen.has(s.id)),

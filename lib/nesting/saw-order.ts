@@ -202,9 +202,9 @@ function fenceSide(c: RunCut, kerf: number, preferred: Reference, minFence: numb
 function onFirstAbleSaw(c: RunCut, ctx: SawContext, saws: readonly NestSaw[], preferred: Reference, kind: SawStep['kind'], length: number) {
   const turned = turnedFrom(preferred);
   const tries = saws.flatMap((sw) => {
-    const safe = (r: Reference) => sideExists(c, r) && fenceFor(c, ctx.kerf, r) >= sw.minFenceWidthMm - EPS;
+    const safe = (r: Reference) => sideExists(c, r) && fenceFor(c, ctx.kerf, r) >= sw.minFenceWidth - EPS;
     const noSafeSide = c.axis === 'y' && !safe('low') && !safe('high');
-    const first = fenceSide(c, ctx.kerf, preferred, sw.minFenceWidthMm).reference;
+    const first = fenceSide(c, ctx.kerf, preferred, sw.minFenceWidth).reference;
     return [...new Set<Reference>([first, preferred, turned])].filter((r) => sideExists(c, r)).map((r) => ({ sw, reference: r, narrow: noSafeSide }));
   });
   const ok =

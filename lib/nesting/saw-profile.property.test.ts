@@ -8,8 +8,8 @@ import type { NestSaw } from '@/shared/schemas/saw';
 
 const base = {
   kindName: null,
-  maxPieceLengthMm: null,
-  maxPieceWidthMm: null,
+  maxPieceLength: null,
+  maxPieceWidth: null,
 } as const;
 
 /**
@@ -22,7 +22,7 @@ const secondSaw = (alone: boolean): fc.Arbitrary<NestSaw> =>
     .record({
       maxStages: fc.constantFrom(2 as const, 3 as const, 4 as const, null),
       firstStage: fc.constantFrom('rip' as const, 'crosscut' as const),
-      minFenceWidthMm: fc.constantFrom(0, 25.4),
+      minFenceWidth: fc.constantFrom(0, 25.4),
       rip: alone ? fc.constant(null) : fc.option(fc.integer({ min: 100, max: 1300 }), { nil: null }),
       cross: alone ? fc.option(fc.integer({ min: 1220, max: 3000 }), { nil: null }) : fc.option(fc.integer({ min: 200, max: 3000 }), { nil: null }),
       piece: alone ? fc.constant(null) : fc.option(fc.integer({ min: 400, max: 2440 }), { nil: null }),
@@ -31,26 +31,26 @@ const secondSaw = (alone: boolean): fc.Arbitrary<NestSaw> =>
       ...base,
       kind: 'table-saw',
       name: 'Table saw',
-      kerfMm: 3.2,
-      ripCapacityMm: s.rip,
-      crosscutCapacityMm: s.cross,
-      maxPieceLengthMm: s.piece,
-      maxPieceWidthMm: s.piece === null ? null : Math.min(s.piece, 1220),
+      kerf: 3.2,
+      ripCapacity: s.rip,
+      crosscutCapacity: s.cross,
+      maxPieceLength: s.piece,
+      maxPieceWidth: s.piece === null ? null : Math.min(s.piece, 1220),
       maxStages: s.maxStages,
       firstStage: s.firstStage,
-      minFenceWidthMm: s.minFenceWidthMm,
+      minFenceWidth: s.minFenceWidth,
     }));
 
 const trackSaw: NestSaw = {
   ...base,
   kind: 'track-saw',
   name: 'Track saw',
-  kerfMm: 2.4,
-  ripCapacityMm: null,
-  crosscutCapacityMm: 2800,
+  kerf: 2.4,
+  ripCapacity: null,
+  crosscutCapacity: 2800,
   maxStages: null,
   firstStage: 'rip',
-  minFenceWidthMm: 0,
+  minFenceWidth: 0,
 };
 
 const withSaws = fc.tuple(requestArb, fc.boolean()).chain(([req, breakdown]) =>
@@ -80,12 +80,12 @@ describe('the engine keeps to the saw (fast-check, seeded)', () => {
       ...base,
       kind: 'table-saw',
       name: 'Table saw',
-      kerfMm: 3.2,
-      ripCapacityMm: 762,
-      crosscutCapacityMm: 610,
+      kerf: 3.2,
+      ripCapacity: 762,
+      crosscutCapacity: 610,
       maxStages: 3,
       firstStage: 'rip',
-      minFenceWidthMm: 25.4,
+      minFenceWidth: 25.4,
     };
     // Parts no wider than the sled, so every crosscut of a strip fits it (common practice, no source: a 24″ sled).
     const fitting = requestArb.map(

@@ -10,17 +10,17 @@ const saw = (more: Partial<NestSaw> = {}): NestSaw => ({
   kind: 'table-saw',
   kindName: null,
   name: 'Table saw',
-  kerfMm: 3,
-  ripCapacityMm: null,
-  crosscutCapacityMm: null,
-  maxPieceLengthMm: null,
-  maxPieceWidthMm: null,
+  kerf: 3,
+  ripCapacity: null,
+  crosscutCapacity: null,
+  maxPieceLength: null,
+  maxPieceWidth: null,
   maxStages: null,
   firstStage: 'rip',
-  minFenceWidthMm: 25.4,
+  minFenceWidth: 25.4,
   ...more,
 });
-const track = (more: Partial<NestSaw> = {}): NestSaw => saw({ kind: 'track-saw', name: 'Track saw', minFenceWidthMm: 0, ...more });
+const track = (more: Partial<NestSaw> = {}): NestSaw => saw({ kind: 'track-saw', name: 'Track saw', minFenceWidth: 0, ...more });
 
 // Every layout below is on a 1000 × 500 mm sheet (x along its length), kerf 3 mm, no trim, and worked by hand.
 const S = () => sheet('S', 1000, 500);
@@ -31,11 +31,11 @@ describe('validatePlan checks the saw (worked by hand)', () => {
 
   test('rip capacity: a fence setting of 250 or 247 mm is beyond a 200 mm capacity; 250 mm is within its own', () => {
     const { parts, layout } = twoStrips();
-    const narrowSaw = request(parts, [S()], { saw: saw({ ripCapacityMm: 200 }) });
+    const narrowSaw = request(parts, [S()], { saw: saw({ ripCapacity: 200 }) });
     const v = validatePlan(narrowSaw, handPlan(narrowSaw, 'S', layout));
     expect(codes(v)).toEqual(['rip-capacity']);
     expect(v[0]).toMatchObject({ piece: 0, step: 1 });
-    const enough = request(parts, [S()], { saw: saw({ ripCapacityMm: 250 }) });
+    const enough = request(parts, [S()], { saw: saw({ ripCapacity: 250 }) });
     const plan = handPlan(enough, 'S', layout);
     expect(validatePlan(enough, plan)).toEqual([]);
     expect(plan.pieces[0].sawOrder![0]).toMatchObject({ kind: 'rip', fence: 250, saw: 'Table saw' });
@@ -43,7 +43,7 @@ describe('validatePlan checks the saw (worked by hand)', () => {
 
   test('rip capacity: the piece is turned so the side within the capacity rides the fence (247 mm on a 248 mm saw)', () => {
     const { parts, layout } = twoStrips();
-    const r = request(parts, [S()], { saw: saw({ ripCapacityMm: 248 }) });
+    const r = request(parts, [S()], { saw: saw({ ripCapacity: 248 }) });
     const plan = handPlan(r, 'S', layout);
     expect(plan.pieces[0].sawOrder![0]).toMatchObject({ reference: 'high', fence: 247 });
     expect(validatePlan(r, plan)).toEqual([]);
@@ -51,12 +51,12 @@ describe('validatePlan checks the saw (worked by hand)', () => {
 
   test('a breakdown track saw makes the rip the table saw cannot, and the saw order says so', () => {
     const { parts, layout } = twoStrips();
-    const r = request(parts, [S()], { saw: saw({ ripCapacityMm: 200 }), breakdownSaw: track({ crosscutCapacityMm: 1400 }) });
+    const r = request(parts, [S()], { saw: saw({ ripCapacity: 200 }), breakdownSaw: track({ crosscutCapacity: 1400 }) });
     const plan = handPlan(r, 'S', layout);
     expect(plan.pieces[0].sawOrder!.map((s) => s.saw)).toEqual(['Track saw']);
     expect(validatePlan(r, plan)).toEqual([]);
     // A 900 mm track is shorter than the 1000 mm rip: neither saw can make it.
-    const short = request(parts, [S()], { saw: saw({ ripCapacityMm: 200 }), breakdownSaw: track({ crosscutCapacityMm: 900 }) });
+    const short = request(parts, [S()], { saw: saw({ ripCapacity: 200 }), breakdownSaw: track({ crosscutCapacity: 900 }) });
     expect(codes(validatePlan(short, handPlan(short, 'S', layout)))).toEqual(['rip-capacity']);
   });
 
@@ -64,28 +64,28 @@ describe('validatePlan checks the saw (worked by hand)', () => {
   const twoBlocks = { parts: [part('c', 600, 500), part('d', 397, 500)], layout: [at('c', 0, 0, 600, 500), at('d', 603, 0, 397, 500)] };
 
   test('crosscut capacity: a 500 mm crosscut is longer than a 450 mm sled takes, not than a 500 mm one', () => {
-    const short = request(twoBlocks.parts, [S()], { saw: saw({ crosscutCapacityMm: 450 }) });
+    const short = request(twoBlocks.parts, [S()], { saw: saw({ crosscutCapacity: 450 }) });
     const v = validatePlan(short, handPlan(short, 'S', twoBlocks.layout));
     expect(codes(v)).toEqual(['crosscut-capacity']);
     expect(v[0].message).toContain('500 mm crosscut');
-    const enough = request(twoBlocks.parts, [S()], { saw: saw({ crosscutCapacityMm: 500 }) });
+    const enough = request(twoBlocks.parts, [S()], { saw: saw({ crosscutCapacity: 500 }) });
     expect(validatePlan(enough, handPlan(enough, 'S', twoBlocks.layout))).toEqual([]);
   });
 
   test('crosscut capacity bounds a table saw’s crosscuts only, but every cut of a track saw (its track)', () => {
     const { parts, layout } = twoStrips();
     // The rip is 1000 mm long: no sled limit applies to a rip on a table saw …
-    const table = request(parts, [S()], { saw: saw({ crosscutCapacityMm: 450 }) });
+    const table = request(parts, [S()], { saw: saw({ crosscutCapacity: 450 }) });
     expect(validatePlan(table, handPlan(table, 'S', layout))).toEqual([]);
     // … but a 950 mm track cannot make a 1000 mm cut.
-    const rail = request(parts, [S()], { saw: track({ crosscutCapacityMm: 950 }) });
+    const rail = request(parts, [S()], { saw: track({ crosscutCapacity: 950 }) });
     expect(codes(validatePlan(rail, handPlan(rail, 'S', layout)))).toEqual(['crosscut-capacity']);
   });
 
   test('largest piece: a 1000 × 500 sheet is too large for a saw that takes 800 × 500, until a track saw breaks it down', () => {
-    const only = request(twoBlocks.parts, [S()], { saw: saw({ maxPieceLengthMm: 800, maxPieceWidthMm: 500 }) });
+    const only = request(twoBlocks.parts, [S()], { saw: saw({ maxPieceLength: 800, maxPieceWidth: 500 }) });
     expect(codes(validatePlan(only, handPlan(only, 'S', twoBlocks.layout)))).toEqual(['saw-piece-too-large']);
-    const both = request(twoBlocks.parts, [S()], { saw: saw({ maxPieceLengthMm: 800, maxPieceWidthMm: 500 }), breakdownSaw: track() });
+    const both = request(twoBlocks.parts, [S()], { saw: saw({ maxPieceLength: 800, maxPieceWidth: 500 }), breakdownSaw: track() });
     const plan = handPlan(both, 'S', twoBlocks.layout);
     expect(plan.pieces[0].sawOrder!.map((s) => s.saw)).toEqual(['Track saw']);
     expect(validatePlan(both, plan)).toEqual([]);
@@ -137,7 +137,7 @@ describe('validatePlan checks the saw (worked by hand)', () => {
 
   test('the plan’s kerf is at least each saw’s, and every step names one of the nest’s saws', () => {
     const { parts, layout } = twoStrips();
-    const thin = request(parts, [S()], { kerf: 3, saw: saw({ kerfMm: 3.2 }) });
+    const thin = request(parts, [S()], { kerf: 3, saw: saw({ kerf: 3.2 }) });
     expect(codes(validatePlan(thin, handPlan(thin, 'S', layout)))).toEqual(['saw-kerf']);
     const r = request(parts, [S()], { saw: saw() });
     const plan = handPlan(r, 'S', layout);

@@ -45,15 +45,13 @@ export function requestSaws(settings: Pick<NestSettings, 'saw' | 'breakdownSaw'>
 export function pieceFits(saw: NestSaw, piece: Pick<Rect, 'w' | 'h'>): boolean {
   const long = Math.max(piece.w, piece.h);
   const short = Math.min(piece.w, piece.h);
-  return (
-    (saw.maxPieceLengthMm === null || long <= saw.maxPieceLengthMm + EPS) && (saw.maxPieceWidthMm === null || short <= saw.maxPieceWidthMm + EPS)
-  );
+  return (saw.maxPieceLength === null || long <= saw.maxPieceLength + EPS) && (saw.maxPieceWidth === null || short <= saw.maxPieceWidth + EPS);
 }
 
 /** The longest cut of this kind the saw makes (Infinity: no limit): a track saw's track bounds every cut. */
 export function cutLengthLimit(saw: NestSaw, kind: SawStep['kind']): number {
-  if (saw.crosscutCapacityMm === null) return Infinity;
-  return kind === 'crosscut' || saw.kind === 'track-saw' ? saw.crosscutCapacityMm : Infinity;
+  if (saw.crosscutCapacity === null) return Infinity;
+  return kind === 'crosscut' || saw.kind === 'track-saw' ? saw.crosscutCapacity : Infinity;
 }
 
 export interface CutProblem {
@@ -72,10 +70,10 @@ export function cutProblems(saw: NestSaw, step: Pick<SawStep, 'kind' | 'fence' |
       message: `a ${mmText(Math.max(piece.w, piece.h))} × ${mmText(Math.min(piece.w, piece.h))} piece is larger than ${saw.name} takes`,
     });
   }
-  if (step.kind === 'rip' && saw.ripCapacityMm !== null && step.fence > saw.ripCapacityMm + EPS) {
+  if (step.kind === 'rip' && saw.ripCapacity !== null && step.fence > saw.ripCapacity + EPS) {
     out.push({
       code: 'rip-capacity',
-      message: `a fence setting of ${mmText(step.fence)} is beyond ${saw.name}’s ${mmText(saw.ripCapacityMm)} rip capacity`,
+      message: `a fence setting of ${mmText(step.fence)} is beyond ${saw.name}’s ${mmText(saw.ripCapacity)} rip capacity`,
     });
   }
   const limit = cutLengthLimit(saw, step.kind);
@@ -85,10 +83,10 @@ export function cutProblems(saw: NestSaw, step: Pick<SawStep, 'kind' | 'fence' |
       message: `a ${mmText(step.length)} ${step.kind} is longer than ${saw.name}’s ${mmText(limit)} ${saw.kind === 'track-saw' ? 'track' : 'crosscut capacity'}`,
     });
   }
-  if (step.kind === 'rip' && !step.narrow && step.fence < saw.minFenceWidthMm - EPS) {
+  if (step.kind === 'rip' && !step.narrow && step.fence < saw.minFenceWidth - EPS) {
     out.push({
       code: 'unsafe-fence',
-      message: `${mmText(step.fence)} between blade and fence is under ${saw.name}’s ${mmText(saw.minFenceWidthMm)} safe minimum`,
+      message: `${mmText(step.fence)} between blade and fence is under ${saw.name}’s ${mmText(saw.minFenceWidth)} safe minimum`,
     });
   }
   return out;

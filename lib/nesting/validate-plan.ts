@@ -378,8 +378,8 @@ export function validatePlan(requestInput: NestRequestInput, planInput: unknown)
   }
 
   for (const saw of requestSaws(request.settings)) {
-    if (request.settings.kerf < saw.kerfMm - EPS) {
-      out.push({ code: 'saw-kerf', message: `the plan allows ${request.settings.kerf} mm per cut, but ${saw.name}’s kerf is ${saw.kerfMm} mm` });
+    if (request.settings.kerf < saw.kerf - EPS) {
+      out.push({ code: 'saw-kerf', message: `the plan allows ${request.settings.kerf} mm per cut, but ${saw.name}’s kerf is ${saw.kerf} mm` });
     }
   }
   for (const s of request.stock) {

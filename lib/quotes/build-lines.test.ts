@@ -10,9 +10,9 @@ const sheet = (over: Partial<TakeoffLine>): TakeoffLine => ({
   kind: 'sheet',
   material: 'Maple ply',
   nominalThickness: '3/4',
-  thicknessMm: 18.3,
-  lengthMm: 2438.4,
-  widthMm: 1219.2,
+  thickness: 18.3,
+  length: 2438.4,
+  width: 1219.2,
   count: 3,
   costEachCents: 6840,
   free: 10,
@@ -41,8 +41,8 @@ describe('a new quote’s lines (the Alder & Finch figures of lib/costing/RULES.
         allowanceCents: 3219,
       },
       slides: [
-        { kind: 'Side-mount slides', lengthMm: 457.2, lengthText: '18″', pairs: 4 },
-        { kind: 'Side-mount slides', lengthMm: 558.8, lengthText: '22″', pairs: 2 },
+        { kind: 'Side-mount slides', length: 457.2, lengthText: '18″', pairs: 4 },
+        { kind: 'Side-mount slides', length: 558.8, lengthText: '22″', pairs: 2 },
       ],
       pricing: { ...DEFAULT_PRICING, finishingMinutesPerM2: 9 },
     };
@@ -66,8 +66,8 @@ describe('a new quote’s lines (the Alder & Finch figures of lib/costing/RULES.
   });
 
   test('a slide is matched by its length and a pair unit, never by another item that names the length', () => {
-    expect(slidePrice({ kind: 'Side-mount slides', lengthMm: 457.2, lengthText: '18″', pairs: 1 }, HARDWARE)?.id).toBe('h1');
-    expect(slidePrice({ kind: 'Side-mount slides', lengthMm: 457.2, lengthText: '18″', pairs: 1 }, [HARDWARE[2]])).toBeUndefined();
+    expect(slidePrice({ kind: 'Side-mount slides', length: 457.2, lengthText: '18″', pairs: 1 }, HARDWARE)?.id).toBe('h1');
+    expect(slidePrice({ kind: 'Side-mount slides', length: 457.2, lengthText: '18″', pairs: 1 }, [HARDWARE[2]])).toBeUndefined();
   });
 
   test('quote numbers and revision letters', () => {

@@ -7,7 +7,7 @@ import type { QuoteLine } from '@/shared/schemas/quote';
 export interface SlideNeed {
   /** "Side-mount slides" or the model's name. */
   kind: string;
-  lengthMm: number;
+  length: number;
   /** The length as the shop reads it (18″, 450 mm). */
   lengthText: string;
   pairs: number;
@@ -77,7 +77,7 @@ export function buildQuoteLines(src: QuoteSources): QuoteLine[] {
       note: 'From the takeoff: extra material for parts spoiled at the saw and for defects.',
     });
   }
-  for (const s of [...src.slides].sort((a, b) => a.kind.localeCompare(b.kind) || a.lengthMm - b.lengthMm)) {
+  for (const s of [...src.slides].sort((a, b) => a.kind.localeCompare(b.kind) || a.length - b.length)) {
     const item = slidePrice(s, src.hardware);
     lines.push({
       id: id('h'),

@@ -7,12 +7,12 @@ const side: RecutPart = {
   label: 'Base side',
   instance: 3,
   quantity: 1,
-  lengthMm: 876.3,
-  widthMm: 584.2,
-  thicknessMm: 18.26,
+  length: 876.3,
+  width: 584.2,
+  thickness: 18.26,
   material: 'Maple ply',
   grain: 'along-length',
-  jointAllowanceMm: 0,
+  jointAllowance: 0,
   reason: 'Tear-out',
 };
 

@@ -7,12 +7,12 @@ export interface RecutPart {
   /** Which piece of the part was damaged: "Side #3". */
   instance: number;
   quantity: number;
-  lengthMm: number;
-  widthMm: number;
-  thicknessMm: number;
+  length: number;
+  width: number;
+  thickness: number;
   material: string;
   grain: GrainRule;
-  jointAllowanceMm: number;
+  jointAllowance: number;
   reason: string;
 }
 
@@ -42,12 +42,12 @@ export function recutNestParts(recuts: RecutPart[]): NestPart[] {
     id: r.id,
     label: `${recutLabel(r)} · re-cut`,
     quantity: r.quantity,
-    length: r.lengthMm,
-    width: r.widthMm,
-    thickness: r.thicknessMm,
+    length: r.length,
+    width: r.width,
+    thickness: r.thickness,
     material: r.material,
     grain: r.grain,
-    jointAllowance: r.jointAllowanceMm,
+    jointAllowance: r.jointAllowance,
     group: 'recuts',
     notes: `Re-cut: ${r.reason || DEFAULT_RECUT_REASON}`,
   }));

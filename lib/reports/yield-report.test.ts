@@ -6,7 +6,7 @@ const IMPERIAL = { system: 'imperial', precision: 16, feet: false } as const;
 const row = (period: string, material: string, stockArea: number, partArea: number, spoiledArea = 0, keptArea = 0) => ({
   period,
   material,
-  thicknessMm: 18,
+  thickness: 18,
   plans: 1,
   stockArea,
   partArea,

@@ -60,7 +60,7 @@ export const percentText = (share: number | null) => (share === null || !Number.
 const areaNumber = (mm2: number, units: ShopUnits) => (units.system === 'metric' ? mm2 / 1e6 : mm2 / (304.8 * 304.8)).toFixed(3);
 
 export function yieldCsv(
-  rows: readonly (YieldFigures & { period: string; material: string; thicknessMm: number; plans: number })[],
+  rows: readonly (YieldFigures & { period: string; material: string; thickness: number; plans: number })[],
   units: ShopUnits,
 ): string {
   const unit = units.system === 'metric' ? 'm²' : 'ft²';
@@ -84,7 +84,7 @@ export function yieldCsv(
     return [
       r.period,
       r.material,
-      String(r.thicknessMm),
+      String(r.thickness),
       String(r.plans),
       areaNumber(r.stockArea, units),
       areaNumber(r.partArea, units),

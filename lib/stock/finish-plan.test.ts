@@ -31,7 +31,7 @@ const request = {
   stock: [{ id: 's1', grain: 'along-length', costEach: 5000 }],
   settings: { minOffcutLength: 300, minOffcutWidth: 100 },
 } as unknown as NestRequest;
-const min = minOffcutFor(request, { minOffcutLengthMm: 9999, minOffcutWidthMm: 9999 });
+const min = minOffcutFor(request, { minOffcutLength: 9999, minOffcutWidth: 9999 });
 
 describe('finishing a plan (figures worked by hand)', () => {
   test('the keepable offcut goes on the rack at its share of the sheet’s cost; a damaged part counts as spoiled', () => {
@@ -45,9 +45,9 @@ describe('finishing a plan (figures worked by hand)', () => {
         piece: 0,
         index: 0,
         material: 'Baltic birch',
-        thicknessMm: 18,
-        lengthMm: 400,
-        widthMm: 300,
+        thickness: 18,
+        length: 400,
+        width: 300,
         grain: 'along-length',
         location: 'Bin 3',
         costCents: 1200,
@@ -65,7 +65,7 @@ describe('finishing a plan (figures worked by hand)', () => {
 
   test('the minimum is the plan’s own, or the shop’s when the stored request cannot be read', () => {
     expect(min).toEqual({ minLength: 300, minWidth: 100 });
-    expect(minOffcutFor(null, { minOffcutLengthMm: 305, minOffcutWidthMm: 102 })).toEqual({ minLength: 305, minWidth: 102 });
+    expect(minOffcutFor(null, { minOffcutLength: 305, minOffcutWidth: 102 })).toEqual({ minLength: 305, minWidth: 102 });
   });
 
   test('a choice naming no offcut or part of the plan, or a part twice, is refused with the reason', () => {

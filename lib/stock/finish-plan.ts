@@ -22,10 +22,10 @@ export interface MinOffcut {
  * The smallest offcut worth racking for this plan: the one it was nested with (its request's settings), or, when
  * the stored request cannot be read, the shop's settings now. The finish page and the server both ask here.
  */
-export function minOffcutFor(request: NestRequest | null, shop: { minOffcutLengthMm: Mm; minOffcutWidthMm: Mm }): MinOffcut {
+export function minOffcutFor(request: NestRequest | null, shop: { minOffcutLength: Mm; minOffcutWidth: Mm }): MinOffcut {
   return request
     ? { minLength: request.settings.minOffcutLength, minWidth: request.settings.minOffcutWidth }
-    : { minLength: shop.minOffcutLengthMm, minWidth: shop.minOffcutWidthMm };
+    : { minLength: shop.minOffcutLength, minWidth: shop.minOffcutWidth };
 }
 
 /** Stock area, part area and cost of a plan, from its totals or, for an edited plan without totals, its pieces. */
@@ -46,9 +46,9 @@ export interface RackedOffcut {
   piece: number;
   index: number;
   material: string;
-  thicknessMm: Mm;
-  lengthMm: Mm;
-  widthMm: Mm;
+  thickness: Mm;
+  length: Mm;
+  width: Mm;
   grain: 'along-length' | 'none';
   location: string;
   /** Its share of the piece's cost, by area. */
@@ -103,7 +103,7 @@ export function finishOutcome(
         piece: p,
         index: i,
         material: piece.material,
-        thicknessMm: piece.thickness,
+        thickness: piece.thickness,
         ...offcutSize(rect, grain),
         grain,
         location: choice?.location ?? '',

@@ -40,8 +40,8 @@ describe("an offcut's share of its sheet's cost", () => {
 
 describe('offcut size and low stock', () => {
   test('a grained offcut keeps its length along the grain; a grainless one is measured long side first', () => {
-    expect(offcutSize({ w: 200, h: 600 }, 'along-length')).toEqual({ lengthMm: 200, widthMm: 600 });
-    expect(offcutSize({ w: 200, h: 600 }, 'none')).toEqual({ lengthMm: 600, widthMm: 200 });
+    expect(offcutSize({ w: 200, h: 600 }, 'along-length')).toEqual({ length: 200, width: 600 });
+    expect(offcutSize({ w: 200, h: 600 }, 'none')).toEqual({ length: 600, width: 200 });
   });
 
   test.each([

@@ -23,7 +23,7 @@ export function offcutCostCents(offcut: Rect, piece: Rect, pieceCostCents: numbe
 }
 
 /** Offcut length runs along the stock's length (x); a grainless offcut is measured long side first. */
-export function offcutSize(rect: Rect, grain: 'along-length' | 'none'): { lengthMm: Mm; widthMm: Mm } {
-  if (grain === 'none') return { lengthMm: Math.max(rect.w, rect.h), widthMm: Math.min(rect.w, rect.h) };
-  return { lengthMm: rect.w, widthMm: rect.h };
+export function offcutSize(rect: Rect, grain: 'along-length' | 'none'): { length: Mm; width: Mm } {
+  if (grain === 'none') return { length: Math.max(rect.w, rect.h), width: Math.min(rect.w, rect.h) };
+  return { length: rect.w, width: rect.h };
 }

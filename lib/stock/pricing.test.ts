@@ -2,12 +2,12 @@ import { describe, expect, test } from 'vitest';
 import { inches } from '@/lib/units/length';
 import { costEachCents, pieceBoardFeet } from './pricing';
 
-const board = (nominalThickness: string, widthIn: number, lengthIn: number, costCents: number, thicknessMm = inches(13 / 16)) => ({
+const board = (nominalThickness: string, widthIn: number, lengthIn: number, costCents: number, thickness = inches(13 / 16)) => ({
   kind: 'board' as const,
   nominalThickness,
-  thicknessMm,
-  widthMm: inches(widthIn),
-  lengthMm: inches(lengthIn),
+  thickness,
+  width: inches(widthIn),
+  length: inches(lengthIn),
   costCents,
 });
 
@@ -27,6 +27,6 @@ describe('the cost of a piece of stock', () => {
   });
 
   test('a sheet costs its price each', () => {
-    expect(costEachCents({ kind: 'sheet', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, costCents: 8900 })).toBe(8900);
+    expect(costEachCents({ kind: 'sheet', nominalThickness: '3/4"', thickness: 18, length: 2440, width: 1220, costCents: 8900 })).toBe(8900);
   });
 });

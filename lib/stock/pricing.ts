@@ -9,17 +9,17 @@ const QUARTERS = /^\s*(\d+)\s*\/\s*4\s*$/;
 export interface PricedSize {
   kind: 'sheet' | 'board';
   nominalThickness: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
+  thickness: number;
+  length: number;
+  width: number;
   /** Per sheet, or per board foot for boards, in minor units. */
   costCents: number;
 }
 
 /** Board feet of one board: quartered stock on its nominal thickness, anything else on its actual one. */
-export function pieceBoardFeet(size: Pick<PricedSize, 'nominalThickness' | 'thicknessMm' | 'lengthMm' | 'widthMm'>): number {
+export function pieceBoardFeet(size: Pick<PricedSize, 'nominalThickness' | 'thickness' | 'length' | 'width'>): number {
   const q = QUARTERS.exec(size.nominalThickness);
-  return boardFeet({ thickness: q ? { quarters: Number(q[1]) } : { mm: size.thicknessMm }, widthMm: size.widthMm, lengthMm: size.lengthMm });
+  return boardFeet({ thickness: q ? { quarters: Number(q[1]) } : { mm: size.thickness }, width: size.width, length: size.length });
 }
 
 /** The cost of one piece in minor units, rounded to the unit. */

@@ -15,8 +15,8 @@ describe('reading a stock file', () => {
       line: 2,
       item: {
         kind: 'sheet',
-        lengthMm: expect.closeTo(inches(96), 9),
-        thicknessMm: expect.closeTo(inches(23 / 32), 9),
+        length: expect.closeTo(inches(96), 9),
+        thickness: expect.closeTo(inches(23 / 32), 9),
         onHand: 10,
         costCents: 9400,
         location: 'Rack B1',
@@ -27,9 +27,9 @@ describe('reading a stock file', () => {
       line: 3,
       item: {
         kind: 'board',
-        lengthMm: expect.closeTo(inches(96), 9),
-        widthMm: expect.closeTo(inches(6.5), 9),
-        thicknessMm: expect.closeTo(25.4, 9),
+        length: expect.closeTo(inches(96), 9),
+        width: expect.closeTo(inches(6.5), 9),
+        thickness: expect.closeTo(25.4, 9),
         costCents: 925,
         surfacing: 'S2S',
       },

@@ -2,7 +2,7 @@ import Papa from 'papaparse';
 import type { LengthUnit } from '@/lib/units/parse-length';
 import { lengthInput } from '@/shared/schemas/units';
 import { thicknessInput } from '@/shared/schemas/lumber';
-import { thicknessMm } from '@/lib/lumber/thickness';
+import { thicknessToMm } from '@/lib/lumber/thickness';
 import { stockItemSchema, type StockItemValues } from '@/shared/schemas/stock';
 import type { StockCsvError } from '@/shared/wire/stock';
 
@@ -184,17 +184,17 @@ function readSizes(cell: Cell, note: Note, unit: LengthUnit) {
   const parse = parsersFor(unit);
   const thickness = parse.thickness.safeParse(cell('thickness'));
   if (!thickness.success) note('thickness', thickness.error.issues[0].message);
-  let actualMm = thickness.success ? thicknessMm(thickness.data) : NaN;
+  let measured = thickness.success ? thicknessToMm(thickness.data) : NaN;
   if (cell('actual thickness')) {
     const actual = parse.length.safeParse(cell('actual thickness'));
-    if (actual.success) actualMm = actual.data;
+    if (actual.success) measured = actual.data;
     else note('actual thickness', actual.error.issues[0].message);
   }
   const length = parse.length.safeParse(cell('length'));
   if (!length.success) note('length', length.error.issues[0].message);
   const width = parse.length.safeParse(cell('width'));
   if (!width.success) note('width', width.error.issues[0].message);
-  return { thicknessMm: actualMm, lengthMm: length.data, widthMm: width.data };
+  return { thickness: measured, length: length.data, width: width.data };
 }
 
 /** The count on hand (required), the low-stock mark and the cost. */

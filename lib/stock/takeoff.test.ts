@@ -9,9 +9,9 @@ const board = (over: Partial<TakeoffSize> = {}): TakeoffSize => ({
   kind: 'board',
   material: 'White oak',
   nominalThickness: '4/4',
-  thicknessMm: inches(13 / 16),
-  lengthMm: inches(96),
-  widthMm: inches(6),
+  thickness: inches(13 / 16),
+  length: inches(96),
+  width: inches(6),
   count: 1,
   costEachCents: 0,
   free: 0,
@@ -24,12 +24,12 @@ describe('board feet of a stock board', () => {
     ['AHEC "Measurement": 4/4 × 6″ × 8′ = 4.0 BF (on the nominal inch, not the surfaced 13/16″)', board(), 4],
     [
       'AHEC "Measurement", arithmetic from the definition: 8/4 × 7″ × 10′ = 11.667 BF',
-      board({ nominalThickness: '8/4', widthMm: inches(7), lengthMm: inches(120) }),
+      board({ nominalThickness: '8/4', width: inches(7), length: inches(120) }),
       11.667,
     ],
     [
       '[derived]: a board given in mm is measured on its actual thickness: 25.4 × 152.4 × 2438.4 mm = 4.0 BF',
-      board({ nominalThickness: '25.4 mm', thicknessMm: 25.4 }),
+      board({ nominalThickness: '25.4 mm', thickness: 25.4 }),
       4,
     ],
   ])('%s', (_label, size, bf) => {
@@ -38,7 +38,7 @@ describe('board feet of a stock board', () => {
 });
 
 const sheet = (over: Partial<TakeoffSize> = {}): TakeoffSize =>
-  board({ kind: 'sheet', material: 'Baltic birch', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: 1525, widthMm: 1525, ...over });
+  board({ kind: 'sheet', material: 'Baltic birch', nominalThickness: '3/4"', thickness: 18, length: 1525, width: 1525, ...over });
 const FT2 = inches(12) ** 2;
 
 describe('the takeoff', () => {
@@ -51,8 +51,8 @@ describe('the takeoff', () => {
   test('by hand: three materials of one sheet each at 15 % cost 15 % more ($196.50 → $225.98), not twice as much; two of each to have ready', () => {
     const sizes = [
       sheet({ stockId: 'stock:18', count: 1, costEachCents: 8900, free: 8 }),
-      sheet({ stockId: 'stock:12', thicknessMm: 12, nominalThickness: '1/2"', count: 1, costEachCents: 6850, free: 14 }),
-      sheet({ stockId: 'stock:6', thicknessMm: 6, nominalThickness: '1/4"', count: 1, costEachCents: 3900, free: 1 }),
+      sheet({ stockId: 'stock:12', thickness: 12, nominalThickness: '1/2"', count: 1, costEachCents: 6850, free: 14 }),
+      sheet({ stockId: 'stock:6', thickness: 6, nominalThickness: '1/4"', count: 1, costEachCents: 3900, free: 1 }),
     ];
     const { allowances, totals } = takeoff(sizes, 15);
     // 8900 × 0.15 = 1335; 6850 × 0.15 = 1027.5 → 1028; 3900 × 0.15 = 585: 2948 in all.
@@ -71,8 +71,8 @@ describe('the takeoff', () => {
     const big = sheet({
       stockId: 'stock:ply',
       material: 'Maple ply',
-      lengthMm: inches(96),
-      widthMm: inches(48),
+      length: inches(96),
+      width: inches(48),
       count: 3,
       costEachCents: 9400,
       free: 3,
@@ -83,8 +83,8 @@ describe('the takeoff', () => {
       kind: 'offcut',
       material: 'maple ply',
       nominalThickness: '',
-      lengthMm: inches(24),
-      widthMm: inches(24),
+      length: inches(24),
+      width: inches(24),
       count: 1,
       costEachCents: 800,
       free: 1,
@@ -133,7 +133,7 @@ describe('the takeoff', () => {
         ),
         fc.integer({ min: 0, max: 90 }),
         (rows, pct) => {
-          const sizes = rows.map((r, i) => sheet({ stockId: `stock:${i}`, thicknessMm: r.thick, count: r.count, costEachCents: r.cents }));
+          const sizes = rows.map((r, i) => sheet({ stockId: `stock:${i}`, thickness: r.thick, count: r.count, costEachCents: r.cents }));
           const t = takeoff(sizes, pct);
           const exact = (t.totals.costCents * pct) / 100;
           expect(Math.abs(t.totals.allowanceCents - exact)).toBeLessThanOrEqual(0.5 * t.allowances.length);

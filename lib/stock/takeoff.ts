@@ -9,9 +9,9 @@ export interface TakeoffSize {
   kind: 'sheet' | 'board' | 'offcut';
   material: string;
   nominalThickness: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
+  thickness: number;
+  length: number;
+  width: number;
   /** Pieces the plan lays parts on. */
   count: number;
   costEachCents: number;
@@ -36,7 +36,7 @@ export interface TakeoffLine extends TakeoffSize {
  */
 export interface MaterialAllowance {
   material: string;
-  thicknessMm: number;
+  thickness: number;
   /** 'area' for sheet goods (mm²), 'boardFeet' for lumber. */
   measure: 'area' | 'boardFeet';
   /** The plan's material of this kind: stock pieces and offcuts. */
@@ -83,7 +83,7 @@ function allowanceFor(group: TakeoffLine[], fraction: number): MaterialAllowance
   const piecesReady = main ? main.count + wholePiecesUp(allowance / perPiece) : 0;
   return {
     material: group[0].material,
-    thicknessMm: group[0].thicknessMm,
+    thickness: group[0].thickness,
     measure,
     amount,
     allowance,
@@ -109,14 +109,14 @@ export function takeoff(sizes: TakeoffSize[], allowancePercent: number): Takeoff
     (s): TakeoffLine => ({
       ...s,
       boardFeet: s.kind === 'board' ? pieceBoardFeet(s) * s.count : null,
-      areaMm2: s.lengthMm * s.widthMm * s.count,
+      areaMm2: s.length * s.width * s.count,
       costCents: s.costEachCents * s.count,
       covered: s.free + s.heldByPlan >= s.count,
     }),
   );
   const groups = new Map<string, TakeoffLine[]>();
   for (const l of lines) {
-    const key = `${l.material.trim().toLowerCase()}|${Math.round(l.thicknessMm * 100)}`;
+    const key = `${l.material.trim().toLowerCase()}|${Math.round(l.thickness * 100)}`;
     groups.set(key, [...(groups.get(key) ?? []), l]);
   }
   const allowances = [...groups.values()].map((g) => allowanceFor(g, fraction));

@@ -48,13 +48,13 @@ describe('showing a length in the shop’s unit', () => {
 
 const shops: ShopUnits[] = [sixteenths, thirtySeconds, feet16, { system: 'imperial', precision: 32, feet: true }, wholeMm, halfMm];
 const styles: LengthStyle[] = ['hyphen', 'unicode', 'ascii'];
-const lengthMm = fc.double({ min: 2, max: 50_000, noNaN: true });
+const length = fc.double({ min: 2, max: 50_000, noNaN: true });
 const withoutApprox = (s: string) => s.replace(/^[≈~]/, '');
 
 describe('properties', () => {
   test('reading a formatted length back lands within half a precision step of the original', () => {
     fc.assert(
-      fc.property(lengthMm, fc.constantFrom(...shops), fc.constantFrom(...styles), (mm, units, style) => {
+      fc.property(length, fc.constantFrom(...shops), fc.constantFrom(...styles), (mm, units, style) => {
         const parsed = parseLength(formatLength(mm, units, { style }), { unit: shopLengthUnit(units) });
         expect(parsed.ok).toBe(true);
         if (parsed.ok) expect(Math.abs(parsed.mm - mm)).toBeLessThanOrEqual(precisionStepMm(units) / 2 + 1e-9);
@@ -64,7 +64,7 @@ describe('properties', () => {
 
   test('formatting is idempotent and the ≈ mark disappears once the value is exact', () => {
     fc.assert(
-      fc.property(lengthMm, fc.constantFrom(...shops), fc.constantFrom(...styles), (mm, units, style) => {
+      fc.property(length, fc.constantFrom(...shops), fc.constantFrom(...styles), (mm, units, style) => {
         const once = formatLength(mm, units, { style });
         const parsed = parseLength(once, { unit: shopLengthUnit(units) });
         if (!parsed.ok) throw new Error(parsed.error);

@@ -10,7 +10,7 @@ export type CutListField = UploadField;
 /** A row cannot become a part without these. */
 export const REQUIRED_CUT_LIST_FIELDS: readonly CutListField[] = REQUIRED_UPLOAD_FIELDS;
 
-export const CUT_LIST_FIELD_LABELS = Object.fromEntries(PART_FIELDS.map((f) => [f.field, f.csv])) as Record<CutListField, string>;
+export const CUT_LIST_FIELD_LABELS = Object.fromEntries(PART_FIELDS.map((f) => [f.key, f.csv])) as Record<CutListField, string>;
 
 const cell = z.string().max(UPLOAD_LIMITS.maxCellLength * 4, 'A cell is far longer than any cut list needs.');
 

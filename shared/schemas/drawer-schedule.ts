@@ -50,12 +50,12 @@ export const jointSchema = z.discriminatedUnion('method', [
      * Front/back thickness left outside the side's tongue (published articles call it the lip). Left out: it follows
      * the front's thickness (`lockRabbetFaceLeft`: ⅛″ on a ½″ front, ¼″ on a ¾″ one).
      */
-    faceLeftMm: nonNegativeMm('Face left outside the tongue', MAX.small).optional(),
+    faceLeft: nonNegativeMm('Face left outside the tongue', MAX.small).optional(),
   }),
   z.object({
     method: z.literal('rabbet-and-dado'),
-    dadoDepthMm: nonNegativeMm('Dado depth', MAX.small).default(D.dadoDepth),
-    dadoWidthMm: positiveMm('Dado width', MAX.small).default(D.dadoWidth),
+    dadoDepth: nonNegativeMm('Dado depth', MAX.small).default(D.dadoDepth),
+    dadoWidth: positiveMm('Dado width', MAX.small).default(D.dadoWidth),
   }),
   z.object({
     method: z.literal('butt-pocket-screw'),
@@ -64,18 +64,18 @@ export const jointSchema = z.discriminatedUnion('method', [
   z.object({
     method: z.literal('butt-loose-tenon'),
     layout: buttLayoutSchema.default('sides-full-depth'),
-    tenonThicknessMm: positiveMm('Tenon thickness', MAX.small).default(D.tenonThickness),
-    mortiseDepthMm: positiveMm('Mortise depth', MAX.small).default(D.mortiseDepth),
+    tenonThickness: positiveMm('Tenon thickness', MAX.small).default(D.tenonThickness),
+    mortiseDepth: positiveMm('Mortise depth', MAX.small).default(D.mortiseDepth),
     tenonsPerCorner: z.int().min(1).max(6).default(D.tenonsPerCorner),
   }),
   z.object({
     method: z.literal('half-blind-dovetail'),
-    lapMm: nonNegativeMm('Lap', MAX.small).default(D.dovetailLap),
+    lap: nonNegativeMm('Lap', MAX.small).default(D.dovetailLap),
   }),
   z.object({ method: z.literal('through-dovetail') }),
   z.object({
     method: z.literal('box-joint'),
-    fingerWidthMm: positiveMm('Finger width', MAX.small).default(D.boxJointFinger),
+    fingerWidth: positiveMm('Finger width', MAX.small).default(D.boxJointFinger),
   }),
 ]);
 
@@ -90,11 +90,11 @@ export const slideSeriesSchema = z.enum(SLIDE_SERIES_IDS, { error: 'The slide se
 export type SlideSeries = z.infer<typeof slideSeriesSchema>;
 
 /** Slides that need a running clearance on each side and above the box. */
-const clearanceSlide = <T extends 'wooden-runners' | 'none'>(type: T, sideMm: number, heightMm: number) =>
+const clearanceSlide = <T extends 'wooden-runners' | 'none'>(type: T, side: number, height: number) =>
   z.object({
     type: z.literal(type),
-    sideClearanceMm: nonNegativeMm('Side clearance', MAX.clearance).default(sideMm),
-    heightClearanceMm: nonNegativeMm('Height clearance', MAX.clearance).default(heightMm),
+    sideClearance: nonNegativeMm('Side clearance', MAX.clearance).default(side),
+    heightClearance: nonNegativeMm('Height clearance', MAX.clearance).default(height),
   });
 
 export const slideSchema = z.discriminatedUnion('type', [
@@ -102,8 +102,8 @@ export const slideSchema = z.discriminatedUnion('type', [
     type: z.literal('side-mount'),
     series: slideSeriesSchema.default('imperial'),
     /** Left out: the series' clearance (½″ imperial, 12.5 mm metric). */
-    sideClearanceMm: nonNegativeMm('Side clearance', MAX.clearance).optional(),
-    heightClearanceMm: nonNegativeMm('Height clearance', MAX.clearance).optional(),
+    sideClearance: nonNegativeMm('Side clearance', MAX.clearance).optional(),
+    heightClearance: nonNegativeMm('Height clearance', MAX.clearance).optional(),
     /** A slide model from Shop settings: when given, its rule sizes the box instead of the series. */
     model: slideModelRuleSchema.optional(),
   }),
@@ -112,9 +112,9 @@ export const slideSchema = z.discriminatedUnion('type', [
     /** A slide model from Shop settings, as the maker specifies it; when given, it sizes the box (the fields below do not). */
     model: slideModelRuleSchema.optional(),
     // Without a model (schedules saved before models existed): one deduction for every side thickness.
-    widthDeductionMm: nonNegativeMm('Width deduction', MAX.clearance).default(D.undermountWidthDeduction),
-    heightDeductionMm: nonNegativeMm('Height deduction', MAX.clearance).default(D.undermountHeightDeduction),
-    bottomRecessMm: nonNegativeMm('Bottom recess', MAX.clearance).default(D.undermountBottomRecess),
+    widthDeduction: nonNegativeMm('Width deduction', MAX.clearance).default(D.undermountWidthDeduction),
+    heightDeduction: nonNegativeMm('Height deduction', MAX.clearance).default(D.undermountHeightDeduction),
+    bottomRecess: nonNegativeMm('Bottom recess', MAX.clearance).default(D.undermountBottomRecess),
   }),
   clearanceSlide('wooden-runners', D.runnerSideClearance, D.runnerHeightClearance),
   clearanceSlide('none', 0, 0),
@@ -129,28 +129,28 @@ export const depthRuleSchema = z.discriminatedUnion('rule', [
     rule: z.literal('longest-standard-slide'),
     /** Left out: the side-mount slide's series (imperial for other slides). */
     series: slideSeriesSchema.optional(),
-    backClearanceMm: nonNegativeMm('Back clearance', MAX.clearance).default(D.backClearance),
+    backClearance: nonNegativeMm('Back clearance', MAX.clearance).default(D.backClearance),
   }),
-  z.object({ rule: z.literal('slide-length'), slideLengthMm: positiveMm('Slide length') }),
+  z.object({ rule: z.literal('slide-length'), slideLength: positiveMm('Slide length') }),
   z.object({
     rule: z.literal('opening-less-clearance'),
-    backClearanceMm: nonNegativeMm('Back clearance', MAX.clearance).default(D.backClearance),
+    backClearance: nonNegativeMm('Back clearance', MAX.clearance).default(D.backClearance),
   }),
 ]);
 
 export const drawerSizeSchema = z.discriminatedUnion('from', [
   z.object({
     from: z.literal('opening'),
-    widthMm: positiveMm('Opening width'),
-    heightMm: positiveMm('Opening height'),
-    depthMm: positiveMm('Opening depth'),
+    width: positiveMm('Opening width'),
+    height: positiveMm('Opening height'),
+    depth: positiveMm('Opening depth'),
     depthRule: depthRuleSchema.optional(),
   }),
   z.object({
     from: z.literal('box'),
-    widthMm: positiveMm('Box width'),
-    heightMm: positiveMm('Box height'),
-    depthMm: positiveMm('Box depth'),
+    width: positiveMm('Box width'),
+    height: positiveMm('Box height'),
+    depth: positiveMm('Box depth'),
   }),
 ]);
 
@@ -162,21 +162,21 @@ export const frontStyleSchema = z.discriminatedUnion('style', [
   z.object({
     style: z.literal('lipped'),
     /**
-     * How the lipped front meets the opening: `overlay` laps past it by `overlayMm` on each side (⅜″ by default, the
-     * classic lipped drawer), `reveal` stops `revealMm` inside it on each side (1/16″ by default); `lip` gives the lip past each side of
-     * the box outright (a box-size schedule, or one saved before fits existed). Left out: `lip` when `lipMm` is given,
+     * How the lipped front meets the opening: `overlay` laps past it by `overlay` on each side (⅜″ by default, the
+     * classic lipped drawer), `reveal` stops `reveal` inside it on each side (1/16″ by default); `lip` gives the lip past each side of
+     * the box outright (a box-size schedule, or one saved before fits existed). Left out: `lip` when `lip` is given,
      * else `overlay`.
      */
     fit: z.enum(LIP_FITS).optional(),
-    overlayMm: nonNegativeMm('Overlay', MAX.small).optional(),
-    revealMm: nonNegativeMm('Reveal', MAX.small).optional(),
-    lipMm: positiveMm('Lip', MAX.small).optional(),
+    overlay: nonNegativeMm('Overlay', MAX.small).optional(),
+    reveal: nonNegativeMm('Reveal', MAX.small).optional(),
+    lip: positiveMm('Lip', MAX.small).optional(),
   }),
   z.object({
     style: z.literal('applied'),
     fit: z.enum(['overlay', 'inset']).default('overlay'),
     /** Overlay: how far the front laps past the opening on each edge. */
-    overlayMm: z
+    overlay: z
       .object({
         side: nonNegativeMm('Side overlay', MAX.small).default(D.fullOverlayOn18mmCarcass),
         top: nonNegativeMm('Top overlay', MAX.small).default(D.fullOverlayOn18mmCarcass),
@@ -184,12 +184,12 @@ export const frontStyleSchema = z.discriminatedUnion('style', [
       })
       .prefault({}),
     /** Inset: gap between the front and the opening on each edge. */
-    revealMm: nonNegativeMm('Reveal', MAX.small).default(D.frontReveal),
-    thicknessMm: positiveMm('Applied front thickness', MAX.small).default(D.appliedFrontThickness),
+    reveal: nonNegativeMm('Reveal', MAX.small).default(D.frontReveal),
+    thickness: positiveMm('Applied front thickness', MAX.small).default(D.appliedFrontThickness),
     material: text().min(1).max(120).default(D.appliedFrontMaterial),
     /** Explicit size; wins over the opening (and is needed when the schedule gives the box size). */
-    widthMm: positiveMm('Applied front width').optional(),
-    heightMm: positiveMm('Applied front height').optional(),
+    width: positiveMm('Applied front width').optional(),
+    height: positiveMm('Applied front height').optional(),
   }),
 ]);
 
@@ -198,17 +198,17 @@ export const grainRuleSchema = z.enum(['along-length', 'any']);
 export const bottomSchema = z.discriminatedUnion('mount', [
   z.object({
     mount: z.literal('groove'),
-    thicknessMm: positiveMm('Bottom thickness', MAX.small).default(D.bottomThickness),
+    thickness: positiveMm('Bottom thickness', MAX.small).default(D.bottomThickness),
     material: text().min(1).max(120).default(D.bottomMaterial),
     grain: grainRuleSchema.default('any'),
     groove: z
       .object({
-        widthMm: positiveMm('Groove width', MAX.small).default(D.grooveWidth),
-        depthMm: positiveMm('Groove depth', MAX.small).default(D.grooveDepth),
+        width: positiveMm('Groove width', MAX.small).default(D.grooveWidth),
+        depth: positiveMm('Groove depth', MAX.small).default(D.grooveDepth),
         /** From the box's bottom edge to the groove's lower edge. Left out: ½″, or the undermount slide's bottom recess if more. */
-        heightMm: nonNegativeMm('Groove height', MAX.clearance).optional(),
+        height: nonNegativeMm('Groove height', MAX.clearance).optional(),
         /** Total play across the bottom, split between the two grooves it spans. */
-        clearanceMm: z
+        clearance: z
           .number({ error: 'Bottom clearance must be a length in mm' })
           .finite()
           .min(0, { error: 'Bottom clearance cannot be negative: the bottom would be wider than its grooves allow' })
@@ -219,7 +219,7 @@ export const bottomSchema = z.discriminatedUnion('mount', [
   }),
   z.object({
     mount: z.literal('applied'),
-    thicknessMm: positiveMm('Bottom thickness', MAX.small).default(D.bottomThickness),
+    thickness: positiveMm('Bottom thickness', MAX.small).default(D.bottomThickness),
     material: text().min(1).max(120).default(D.bottomMaterial),
     grain: grainRuleSchema.default('any'),
   }),
@@ -233,10 +233,10 @@ const drawerScheduleShape = z.object({
   joint: jointSchema.prefault({ method: 'lock-rabbet' }),
   thickness: z
     .object({
-      frontMm: positiveMm('Front thickness', MAX.small).default(D.frontThickness),
+      front: positiveMm('Front thickness', MAX.small).default(D.frontThickness),
       /** Left out: same as the front. */
-      backMm: positiveMm('Back thickness', MAX.small).optional(),
-      sideMm: positiveMm('Side thickness', MAX.small).default(D.sideThickness),
+      back: positiveMm('Back thickness', MAX.small).optional(),
+      side: positiveMm('Side thickness', MAX.small).default(D.sideThickness),
     })
     .prefault({}),
   front: frontStyleSchema.prefault({ style: 'flush' }),
@@ -253,19 +253,19 @@ const drawerScheduleShape = z.object({
 });
 
 type ParsedShape = z.output<typeof drawerScheduleShape>;
-type Filled<J> = J extends { method: 'lock-rabbet' } ? J & { faceLeftMm: number } : J;
-type FilledSlide<S> = S extends { type: 'side-mount' } ? S & { sideClearanceMm: number; heightClearanceMm: number } : S;
+type Filled<J> = J extends { method: 'lock-rabbet' } ? J & { faceLeft: number } : J;
+type FilledSlide<S> = S extends { type: 'side-mount' } ? S & { sideClearance: number; heightClearance: number } : S;
 type FilledFront<F> = F extends { style: 'lipped' } ? F & { fit: LipFit } : F;
-type FilledBottom<B> = B extends { mount: 'groove'; groove: infer G } ? Omit<B, 'groove'> & { groove: G & { heightMm: number } } : B;
+type FilledBottom<B> = B extends { mount: 'groove'; groove: infer G } ? Omit<B, 'groove'> & { groove: G & { height: number } } : B;
 type FilledSize<Z> = Z extends { from: 'opening'; depthRule?: infer R }
   ? Omit<Z, 'depthRule'> & { depthRule?: R extends { rule: 'longest-standard-slide' } ? R & { series: SlideSeries } : R }
   : Z;
 
 /** A lipped front's fit, and the one amount it uses, filled. */
 function fillLip(f: Extract<ParsedShape['front'], { style: 'lipped' }>) {
-  const fit: LipFit = f.fit ?? (f.lipMm !== undefined ? 'lip' : 'overlay');
-  if (fit === 'overlay') return { ...f, fit, overlayMm: f.overlayMm ?? LIPPED_FRONT_DEFAULTS.imperial.overlayMm };
-  if (fit === 'reveal') return { ...f, fit, revealMm: f.revealMm ?? LIPPED_FRONT_DEFAULTS.imperial.revealMm };
+  const fit: LipFit = f.fit ?? (f.lip !== undefined ? 'lip' : 'overlay');
+  if (fit === 'overlay') return { ...f, fit, overlay: f.overlay ?? LIPPED_FRONT_DEFAULTS.imperial.overlay };
+  if (fit === 'reveal') return { ...f, fit, reveal: f.reveal ?? LIPPED_FRONT_DEFAULTS.imperial.reveal };
   return { ...f, fit };
 }
 
@@ -275,11 +275,11 @@ function fillLip(f: Extract<ParsedShape['front'], { style: 'lipped' }>) {
  */
 function fillDependentDefaults(s: ParsedShape, ctx: z.RefinementCtx) {
   let joint = s.joint;
-  if (s.joint.method === 'lock-rabbet' && s.joint.faceLeftMm === undefined) {
+  if (s.joint.method === 'lock-rabbet' && s.joint.faceLeft === undefined) {
     try {
-      joint = { ...s.joint, faceLeftMm: lockRabbetFaceLeft(s.thickness.frontMm) };
+      joint = { ...s.joint, faceLeft: lockRabbetFaceLeft(s.thickness.front) };
     } catch (e) {
-      ctx.addIssue({ code: 'custom', path: ['joint', 'faceLeftMm'], message: (e as Error).message });
+      ctx.addIssue({ code: 'custom', path: ['joint', 'faceLeft'], message: (e as Error).message });
       return z.NEVER;
     }
   }
@@ -287,8 +287,8 @@ function fillDependentDefaults(s: ParsedShape, ctx: z.RefinementCtx) {
     s.slide.type === 'side-mount'
       ? {
           ...s.slide,
-          sideClearanceMm: s.slide.sideClearanceMm ?? SLIDE_SERIES[s.slide.series].sideClearanceMm,
-          heightClearanceMm: s.slide.heightClearanceMm ?? SLIDE_SERIES[s.slide.series].heightClearanceMm,
+          sideClearance: s.slide.sideClearance ?? SLIDE_SERIES[s.slide.series].sideClearance,
+          heightClearance: s.slide.heightClearance ?? SLIDE_SERIES[s.slide.series].heightClearance,
         }
       : s.slide;
   const seriesOfSlide: SlideSeries = s.slide.type === 'side-mount' ? s.slide.series : 'imperial';
@@ -297,10 +297,10 @@ function fillDependentDefaults(s: ParsedShape, ctx: z.RefinementCtx) {
       ? { ...s.size, depthRule: { ...s.size.depthRule, series: seriesOfSlide } }
       : s.size;
   // An undermount slide's fixings sit under the bottom: the groove goes at least as high as its bottom recess.
-  const recess = s.slide.type === 'undermount' ? (s.slide.model?.bottomRecessMm ?? s.slide.bottomRecessMm) : 0;
+  const recess = s.slide.type === 'undermount' ? (s.slide.model?.bottomRecess ?? s.slide.bottomRecess) : 0;
   const bottom =
-    s.bottom.mount === 'groove' && s.bottom.groove.heightMm === undefined
-      ? { ...s.bottom, groove: { ...s.bottom.groove, heightMm: Math.max(D.grooveHeight, recess) } }
+    s.bottom.mount === 'groove' && s.bottom.groove.height === undefined
+      ? { ...s.bottom, groove: { ...s.bottom.groove, height: Math.max(D.grooveHeight, recess) } }
       : s.bottom;
   const front = s.front.style === 'lipped' ? fillLip(s.front) : s.front;
   return {
@@ -315,10 +315,10 @@ function fillDependentDefaults(s: ParsedShape, ctx: z.RefinementCtx) {
 
 export const drawerScheduleSchema = drawerScheduleShape
   .superRefine((s, ctx) => {
-    if (s.front.style === 'lipped' && (s.front.fit ?? (s.front.lipMm !== undefined ? 'lip' : 'overlay')) === 'lip' && s.front.lipMm === undefined)
+    if (s.front.style === 'lipped' && (s.front.fit ?? (s.front.lip !== undefined ? 'lip' : 'overlay')) === 'lip' && s.front.lip === undefined)
       ctx.addIssue({
         code: 'custom',
-        path: ['front', 'lipMm'],
+        path: ['front', 'lip'],
         message: 'Give the lip past each side of the box, or choose an overlay or a reveal.',
       });
     const model = s.slide.type === 'side-mount' || s.slide.type === 'undermount' ? s.slide.model : undefined;

@@ -40,8 +40,8 @@ export const thicknessInput = (unit: LengthUnit) =>
 
 export const boardSchema = z.object({
   thickness: thicknessSchema,
-  widthMm: positiveMm('The width'),
-  lengthMm: positiveMm('The length'),
+  width: positiveMm('The width'),
+  length: positiveMm('The length'),
 });
 export type Board = z.infer<typeof boardSchema>;
 
@@ -82,12 +82,12 @@ export const moistureContentSchema = z
 
 export const movementInputSchema = z.object({
   species: speciesIdSchema,
-  widthMm: positiveMm('The width'),
+  width: positiveMm('The width'),
   cut: sawnCutSchema,
   mcFrom: moistureContentSchema,
   mcTo: moistureContentSchema,
   /** Glued or screwed across its width (a bottom nailed on all sides, a glued-in panel): it cannot move freely. */
   fixedAcrossWidth: z.boolean(),
-  thresholdMm: positiveMm('The threshold').optional(),
+  threshold: positiveMm('The threshold').optional(),
 });
 export type MovementInput = z.infer<typeof movementInputSchema>;

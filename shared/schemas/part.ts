@@ -28,20 +28,20 @@ const partShape = {
     .min(1, 'Quantity must be at least 1.')
     .max(MAX_PART_QUANTITY, `Quantity above ${MAX_PART_QUANTITY.toLocaleString('en-US')} looks like a typo.`),
   /** Along the grain when `grain` is `along-length`; the joint allowance is part of it. */
-  lengthMm: sizeMm('Length'),
-  widthMm: sizeMm('Width'),
-  thicknessMm: sizeMm('Thickness'),
+  length: sizeMm('Length'),
+  width: sizeMm('Width'),
+  thickness: sizeMm('Thickness'),
   material: text().min(1, 'Pick or type a material.').max(MAX_PART_MATERIAL, `Keep the material under ${MAX_PART_MATERIAL} characters.`),
   grain: grainRuleSchema,
-  /** Extra length the part's joints need; informational, already inside `lengthMm`. */
-  jointAllowanceMm: z.number().finite().min(0, 'Joint allowance cannot be negative.').max(MAX_LENGTH_MM),
+  /** Extra length the part's joints need; informational, already inside `length`. */
+  jointAllowance: z.number().finite().min(0, 'Joint allowance cannot be negative.').max(MAX_LENGTH_MM),
   notes: text({ multiline: true }).max(MAX_PART_NOTES, `Keep notes under ${MAX_PART_NOTES} characters.`),
 };
 
 export const partInputSchema = z.object({
   ...partShape,
   grain: partShape.grain.default('along-length'),
-  jointAllowanceMm: partShape.jointAllowanceMm.default(0),
+  jointAllowance: partShape.jointAllowance.default(0),
   notes: partShape.notes.default(''),
   /** The row's place in the list, to put a deleted row back where it was (undo); new rows go to the end. */
   sort: z.int().min(0).max(1_000_000).optional(),

@@ -29,9 +29,9 @@ export interface RecutView {
   label: string;
   instance: number;
   quantity: number;
-  lengthMm: number;
-  widthMm: number;
-  thicknessMm: number;
+  length: number;
+  width: number;
+  thickness: number;
   material: string;
   grain: 'along-length' | 'any';
   reason: string;

@@ -35,17 +35,17 @@ const sawObject = z.object({
   /** With kind `other`: what the shop calls it (a band saw, a beam saw…). */
   kindName: text().max(60, 'At most 60 characters.').nullable().default(null),
   name: text().min(1, 'Name the saw.').max(80, 'At most 80 characters.'),
-  kerfMm: mm('The kerf', 0, 20),
+  kerf: mm('The kerf', 0, 20),
   /** The widest fence setting, blade to fence; null when the saw has no fence to set (a track saw). */
-  ripCapacityMm: capacity('The rip capacity'),
+  ripCapacity: capacity('The rip capacity'),
   /**
    * The longest cut on the sled or carriage; a track saw's is its track's length and bounds every cut it makes.
    * Null: no limit the shop needs to keep to.
    */
-  crosscutCapacityMm: capacity('The crosscut capacity'),
+  crosscutCapacity: capacity('The crosscut capacity'),
   /** The largest piece the saw takes (its longer and its shorter side); null: any. */
-  maxPieceLengthMm: capacity('The largest piece’s length'),
-  maxPieceWidthMm: capacity('The largest piece’s width'),
+  maxPieceLength: capacity('The largest piece’s length'),
+  maxPieceWidth: capacity('The largest piece’s width'),
   /** The most stages of cuts (a stage: the cuts of one direction on a piece); null: any number. */
   maxStages: z
     .union([z.literal(2), z.literal(3), z.literal(4)], { error: 'The stages are 2, 3, 4, or any.' })
@@ -54,13 +54,13 @@ const sawObject = z.object({
   /** `rip`: the first stage cuts along the stock's length (strips); `crosscut`: across it. */
   firstStage: z.enum(['rip', 'crosscut'], { error: 'The first stage is rips or crosscuts.' }).default('rip'),
   /** The narrowest strip left between blade and fence for a safe rip (the saw's manual decides). 0: no rule. */
-  minFenceWidthMm: mm('The minimum width between blade and fence', 0, 300),
+  minFenceWidth: mm('The minimum width between blade and fence', 0, 300),
 });
 
 function checkSaw(s: z.output<typeof sawObject>, ctx: z.RefinementCtx) {
   if (s.kind === 'other' && !s.kindName) ctx.addIssue({ code: 'custom', message: 'Say what kind of saw it is.', path: ['kindName'] });
-  if (s.maxPieceLengthMm !== null && s.maxPieceWidthMm !== null && s.maxPieceWidthMm > s.maxPieceLengthMm + 1e-6) {
-    ctx.addIssue({ code: 'custom', message: 'Give the largest piece’s longer side as its length.', path: ['maxPieceWidthMm'] });
+  if (s.maxPieceLength !== null && s.maxPieceWidth !== null && s.maxPieceWidth > s.maxPieceLength + 1e-6) {
+    ctx.addIssue({ code: 'custom', message: 'Give the largest piece’s longer side as its length.', path: ['maxPieceWidth'] });
   }
 }
 

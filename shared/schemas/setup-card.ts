@@ -13,7 +13,7 @@ export const setupCardFieldSchema = z.object({
 /** A shop's saved machine setup for one joint in one stock thickness. */
 export const setupCardSchema = z.object({
   joint: jointMethodSchema,
-  stockThicknessMm: z.number().finite().positive({ error: 'Stock thickness must be more than 0 mm' }),
+  stockThickness: z.number().finite().positive({ error: 'Stock thickness must be more than 0 mm' }),
   fields: z.array(setupCardFieldSchema).max(20),
   note: text({ multiline: true }).max(2000).default(''),
 });

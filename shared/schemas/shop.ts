@@ -18,11 +18,11 @@ export const shopSettingsSchema = z.object({
     .string()
     .trim()
     .regex(/^[A-Z]{3}$/, 'Use a three-letter currency code such as USD or EUR.'),
-  kerfMm: positiveMm('Kerf', 10).refine((v) => v > 0, 'Kerf must be more than zero.'),
-  edgeTrimMm: positiveMm('Edge trim', 50),
-  minOffcutLengthMm: positiveMm('Minimum offcut length', 3000),
-  minOffcutWidthMm: positiveMm('Minimum offcut width', 3000),
-  minFenceWidthMm: positiveMm('The narrowest rip at the fence', 300),
+  kerf: positiveMm('Kerf', 10).refine((v) => v > 0, 'Kerf must be more than zero.'),
+  edgeTrim: positiveMm('Edge trim', 50),
+  minOffcutLength: positiveMm('Minimum offcut length', 3000),
+  minOffcutWidth: positiveMm('Minimum offcut width', 3000),
+  minFenceWidth: positiveMm('The narrowest rip at the fence', 300),
   wastePercent: z.number().int('Use a whole percent.').min(0).max(90, 'Waste above 90 % looks like a typo.'),
   timeZone: z.string().trim().refine(isTimeZone, 'Pick the shop’s time zone from the list (a name such as America/Chicago).'),
   yieldTargetPercent: z

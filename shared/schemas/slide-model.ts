@@ -30,7 +30,7 @@ export const slideModelSchema = z.object({
   kind: z.enum(SLIDE_MODEL_KINDS, { error: 'The kind is "undermount" or "side-mount".' }),
   name: text().min(1, 'Name the slide model.').max(80, 'At most 80 characters.'),
   /** The lengths the slide is made in; a box on it is as long as its slide. */
-  lengthsMm: z
+  lengths: z
     .array(mm('A slide length', 100, 1500))
     .min(1, 'Give at least one length the slide is made in.')
     .max(30, 'At most 30 lengths.')
@@ -38,15 +38,15 @@ export const slideModelSchema = z.object({
     .refine((lengths) => lengths.every((l, i) => i === 0 || l - lengths[i - 1] > 0.01), 'Give each length once.'),
   widthRule: z.enum(SLIDE_WIDTH_RULES, { error: 'The width rule is "inside" or "outside".' }),
   /** Inside rule: inside width = opening − this. Outside rule: box width = opening − this. */
-  widthDeductionMm: mm('The width deduction', 0, 150),
+  widthDeduction: mm('The width deduction', 0, 150),
   /** The thickest drawer side the slide is made for; null when the maker sets none. */
-  maxSideThicknessMm: mm('The thickest side', 3, 50).nullable().default(null),
+  maxSideThickness: mm('The thickest side', 3, 50).nullable().default(null),
   /** Undermount: how far the bottom's underside sits above the sides' bottom edge, at least. */
-  bottomRecessMm: mm('The bottom recess', 0, 50).default(0),
+  bottomRecess: mm('The bottom recess', 0, 50).default(0),
   /** Opening height − box height. */
-  heightClearanceMm: mm('The height clearance', 0, 150),
+  heightClearance: mm('The height clearance', 0, 150),
   /** Room the slide needs behind its length: it fits when its length ≤ opening depth − this. */
-  rearClearanceMm: mm('The rear clearance', 0, 150),
+  rearClearance: mm('The rear clearance', 0, 150),
 });
 
 export type SlideModel = z.output<typeof slideModelSchema>;

@@ -30,9 +30,9 @@ export const stockItemSchema = z.object({
   kind: stockKindSchema,
   material: text(200).min(1, 'Material is required.'),
   nominalThickness: text(40).min(1, 'Say what the shop calls the thickness (3/4", 18 mm, 4/4).'),
-  thicknessMm: mm('Thickness'),
-  lengthMm: mm('Length'),
-  widthMm: mm('Width'),
+  thickness: mm('Thickness'),
+  length: mm('Length'),
+  width: mm('Width'),
   grain: stockGrainSchema.default('along-length'),
   surfacing: surfacingSchema.default(''),
   grade: text(60).default(''),
@@ -69,9 +69,9 @@ export const stockItemPatchSchema = z.strictObject({
   buyable: z.boolean().optional(),
   kind: fixed('A sheet stays a sheet and a board a board; add a new size instead.'),
   onHand: fixed('Counts change by receiving or adjusting, so the history behind them stays whole.'),
-  thicknessMm: sizeIsFixed,
-  lengthMm: sizeIsFixed,
-  widthMm: sizeIsFixed,
+  thickness: sizeIsFixed,
+  length: sizeIsFixed,
+  width: sizeIsFixed,
   grain: sizeIsFixed,
 });
 export type StockItemPatch = z.infer<typeof stockItemPatchSchema>;
@@ -102,9 +102,9 @@ export const adjustStockSchema = z.strictObject({
 
 export const recordOffcutSchema = z.strictObject({
   material: text(200).min(1, 'Material is required.'),
-  thicknessMm: mm('Thickness'),
-  lengthMm: mm('Length'),
-  widthMm: mm('Width'),
+  thickness: mm('Thickness'),
+  length: mm('Length'),
+  width: mm('Width'),
   grain: stockGrainSchema.default('along-length'),
   location: text(120).default(''),
 });
@@ -156,9 +156,9 @@ export interface MissingPiece {
   stockId: string;
   kind: 'sheet' | 'board' | 'offcut';
   material: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
+  thickness: number;
+  length: number;
+  width: number;
   needed: number;
   free: number;
 }

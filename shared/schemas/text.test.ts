@@ -59,9 +59,9 @@ describe('fields that use it', () => {
   });
 
   test('a part length of 5e-324 mm (or anything under half a millimetre) is refused; 0.5 mm is taken', () => {
-    const part = { label: 'Shim', quantity: 1, lengthMm: 5e-324, widthMm: 20, thicknessMm: 3, material: 'Maple' };
+    const part = { label: 'Shim', quantity: 1, length: 5e-324, width: 20, thickness: 3, material: 'Maple' };
     expect(partInputSchema.safeParse(part).error?.issues.map((i) => i.message)).toEqual(['Length must be at least 0.5 mm.']);
-    expect(partInputSchema.safeParse({ ...part, lengthMm: 0.49 }).success).toBe(false);
-    expect(partInputSchema.parse({ ...part, lengthMm: 0.5 }).lengthMm).toBe(0.5);
+    expect(partInputSchema.safeParse({ ...part, length: 0.49 }).success).toBe(false);
+    expect(partInputSchema.parse({ ...part, length: 0.5 }).length).toBe(0.5);
   });
 });

@@ -7,9 +7,9 @@ export interface DescribedSize {
   kind: StockKind;
   material: string;
   nominalThickness: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
+  thickness: number;
+  length: number;
+  width: number;
   surfacing: string;
   grade: string;
 }

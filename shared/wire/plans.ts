@@ -129,7 +129,7 @@ export interface FinishResult {
   /** Of which parts damaged at the saw. */
   spoiledRatio: number;
   costCents: number;
-  offcuts: { id: string; lengthMm: number; widthMm: number; location: string }[];
+  offcuts: { id: string; length: number; width: number; location: string }[];
   damaged: number;
   /** Re-cuts put on the job's list for the damaged parts. */
   recutsAdded: number;

@@ -12,9 +12,9 @@ export interface StockItemRow {
   kind: StockKind;
   material: string;
   nominalThickness: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
+  thickness: number;
+  length: number;
+  width: number;
   grain: StockGrain;
   surfacing: string;
   grade: string;
@@ -36,9 +36,9 @@ export interface OffcutRow {
   id: string;
   shopId: string;
   material: string;
-  thicknessMm: number;
-  lengthMm: number;
-  widthMm: number;
+  thickness: number;
+  length: number;
+  width: number;
   grain: StockGrain;
   status: OffcutStatus;
   location: string;
@@ -86,7 +86,7 @@ export type OffcutRecord = Omit<OffcutRow, 'planName'>;
 export interface StockOffer {
   material: string;
   kind: 'sheet' | 'board' | 'offcut';
-  thicknessMm: number;
+  thickness: number;
   /** What the shop calls the thickness ("3/4\"", "4/4"); empty for offcuts. */
   nominal: string;
 }

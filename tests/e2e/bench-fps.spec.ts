@@ -10,9 +10,9 @@ import { shot, signIn } from './support/session';
 
 const MAPLE_23_32 = (23 / 32) * 25.4; // ≈3/4″ maple ply as the demo rack stocks it
 const ROWS = [
-  { label: 'Drawer side', quantity: 160, lengthMm: 400, widthMm: 120 },
-  { label: 'Drawer front', quantity: 100, lengthMm: 380, widthMm: 110 },
-  { label: 'Shelf cleat', quantity: 80, lengthMm: 300, widthMm: 60 },
+  { label: 'Drawer side', quantity: 160, length: 400, width: 120 },
+  { label: 'Drawer front', quantity: 100, length: 380, width: 110 },
+  { label: 'Shelf cleat', quantity: 80, length: 300, width: 60 },
 ];
 const MOVES = 120;
 
@@ -22,7 +22,7 @@ test('a part dragged among 340 parts is checked in the worker when dropped, and 
   const job = await (await page.request.post('/api/jobs', { data: { name: `Frame-rate drawer run ${Date.now()}` } })).json();
   for (const row of ROWS) {
     const res = await page.request.post(`/api/jobs/${job.id}/parts`, {
-      data: { ...row, thicknessMm: MAPLE_23_32, material: 'Maple ply', grain: 'any' },
+      data: { ...row, thickness: MAPLE_23_32, material: 'Maple ply', grain: 'any' },
     });
     expect(res.status(), await res.text()).toBe(201);
   }

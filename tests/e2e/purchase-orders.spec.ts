@@ -124,7 +124,7 @@ test('the estimator makes the purchase order for what a plan must buy from its t
   // Ten near-full sheets of ¾″ MDF: more than the rack holds, so the plan buys the rest.
   const job = await (await page.request.post('/api/jobs', { data: { name: `Buying check ${Date.now()}` } })).json();
   const part = await page.request.post(`/api/jobs/${job.id}/parts`, {
-    data: { label: 'Panel', quantity: 10, lengthMm: 2300, widthMm: 1150, thicknessMm: 18, material: 'MDF', grain: 'any' },
+    data: { label: 'Panel', quantity: 10, length: 2300, width: 1150, thickness: 18, material: 'MDF', grain: 'any' },
   });
   expect(part.status(), await part.text()).toBe(201);
   const planId = await saveDraftPlan(page, job.name, 'Panels to buy');

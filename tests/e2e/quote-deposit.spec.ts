@@ -24,8 +24,8 @@ async function jobForNewCustomer(page: Page, name: string, email: string) {
   expect(job.status(), await job.text()).toBe(201);
   const id: string = (await job.json()).id;
   for (const part of [
-    { label: 'Side', quantity: 2, lengthMm: 610, widthMm: 406, thicknessMm: 18, material: 'Baltic birch' },
-    { label: 'Shelf', quantity: 3, lengthMm: 762, widthMm: 381, thicknessMm: 18, material: 'Baltic birch' },
+    { label: 'Side', quantity: 2, length: 610, width: 406, thickness: 18, material: 'Baltic birch' },
+    { label: 'Shelf', quantity: 3, length: 762, width: 381, thickness: 18, material: 'Baltic birch' },
   ])
     expect((await page.request.post(`/api/jobs/${id}/parts`, { data: part })).status()).toBe(201);
   return id;

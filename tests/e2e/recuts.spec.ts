@@ -45,9 +45,9 @@ test('a damaged part goes on the re-cut list, is nested on an offcut and cut, an
       kind: 'sheet',
       material,
       nominalThickness: '3/4"',
-      thicknessMm: 18,
-      lengthMm: inch(96),
-      widthMm: inch(48),
+      thickness: 18,
+      length: inch(96),
+      width: inch(48),
       onHand: 3,
       costCents: 8800,
       location: 'Rack D1',
@@ -68,10 +68,10 @@ test('a damaged part goes on the re-cut list, is nested on an offcut and cut, an
   const jobId = estimator.url().split('/').pop()!;
   await expect(statusOf(estimator)).toHaveText('Quoting');
   for (const part of [
-    { label: 'Side', quantity: 2, lengthMm: inch(30), widthMm: inch(22) },
-    { label: 'Shelf', quantity: 3, lengthMm: inch(22), widthMm: inch(12), grain: 'any' },
+    { label: 'Side', quantity: 2, length: inch(30), width: inch(22) },
+    { label: 'Shelf', quantity: 3, length: inch(22), width: inch(12), grain: 'any' },
   ]) {
-    const res = await estimator.request.post(`/api/jobs/${jobId}/parts`, { data: { ...part, thicknessMm: 18, material } });
+    const res = await estimator.request.post(`/api/jobs/${jobId}/parts`, { data: { ...part, thickness: 18, material } });
     expect(res.status()).toBe(201);
   }
 

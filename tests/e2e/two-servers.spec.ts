@@ -65,12 +65,12 @@ test('two releases racing for the last sheet, one on each server: exactly one wi
   await signInOn(onB, person('owner').email, DEMO_PASSWORD);
   const material = `Race ply ${Date.now().toString(36)}`;
   const stock = await onA.post('/api/stock', {
-    data: { kind: 'sheet', material, nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand: 1, costCents: 5000 },
+    data: { kind: 'sheet', material, nominalThickness: '18 mm', thickness: 18, length: 2440, width: 1220, onHand: 1, costCents: 5000 },
   });
   expect(stock.status(), await stock.text()).toBe(201);
   const job = await (await onA.post('/api/jobs', { data: { name: `Race job ${material}` } })).json();
   const part = await onA.post(`/api/jobs/${job.id}/parts`, {
-    data: { label: 'Side', quantity: 1, lengthMm: 700, widthMm: 500, thicknessMm: 18, material },
+    data: { label: 'Side', quantity: 1, length: 700, width: 500, thickness: 18, material },
   });
   expect(part.status(), await part.text()).toBe(201);
   const asPage = { request: onA } as unknown as Page;

@@ -74,9 +74,9 @@ describe('bad input', () => {
   });
 
   test('settings refuse a zero kerf with the reason', async () => {
-    const res = await settingsRoute.PATCH(await request('/api/settings', { method: 'PATCH', body: { kerfMm: 0 }, user: fx.owner }), noParams);
+    const res = await settingsRoute.PATCH(await request('/api/settings', { method: 'PATCH', body: { kerf: 0 }, user: fx.owner }), noParams);
     expect(res.status).toBe(422);
-    expect((await res.json()).fields.kerfMm).toEqual(['Kerf must be more than zero.']);
+    expect((await res.json()).fields.kerf).toEqual(['Kerf must be more than zero.']);
   });
 });
 

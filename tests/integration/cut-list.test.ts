@@ -19,8 +19,8 @@ let fx: TwoShops;
 setUpTwoShopDatabase((app) => ({ handle, fx } = app));
 beforeAll(async () => {
   await handle.db.insert(stockItems).values([
-    { shopId: fx.mine.id, kind: 'sheet', material: 'MDF', nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand: 3 },
-    { shopId: fx.theirs.id, kind: 'sheet', material: 'Secret walnut ply', nominalThickness: '3/4"', thicknessMm: 19, lengthMm: 2440, widthMm: 1220 },
+    { shopId: fx.mine.id, kind: 'sheet', material: 'MDF', nominalThickness: '18 mm', thickness: 18, length: 2440, width: 1220, onHand: 3 },
+    { shopId: fx.theirs.id, kind: 'sheet', material: 'Secret walnut ply', nominalThickness: '3/4"', thickness: 19, length: 2440, width: 1220 },
   ]);
 });
 
@@ -49,7 +49,7 @@ describe('typing rows into the cut list', () => {
   test('a row is added, changed, listed in order and deleted, with the sizes kept in mm', async () => {
     const added = await call(partsRoute.POST, '/api/jobs/x/parts', jobParams(), {
       method: 'POST',
-      body: { label: 'Shelf', quantity: 2, lengthMm: inches(30), widthMm: inches(11.25), thicknessMm: 18, material: 'MDF', grain: 'any' },
+      body: { label: 'Shelf', quantity: 2, length: inches(30), width: inches(11.25), thickness: 18, material: 'MDF', grain: 'any' },
     });
     expect(added.status).toBe(201);
     expect(added.json).toMatchObject({ label: 'Shelf', quantity: 2, grain: 'any', drawerScheduleId: null, notes: '' });
@@ -60,7 +60,7 @@ describe('typing rows into the cut list', () => {
       { ...jobParams(), partId: added.json.id },
       { method: 'PATCH', body: { quantity: 3, notes: 'edge band one long edge' } },
     );
-    expect(changed.json).toMatchObject({ quantity: 3, notes: 'edge band one long edge', lengthMm: inches(30) });
+    expect(changed.json).toMatchObject({ quantity: 3, notes: 'edge band one long edge', length: inches(30) });
 
     const list = await call(partsRoute.GET, '/api/jobs/x/parts', jobParams());
     expect(list.json.map((p: { label: string }) => p.label)).toContain('Shelf');
@@ -72,18 +72,18 @@ describe('typing rows into the cut list', () => {
   test('a bad cell is refused with its field named, and nothing changes', async () => {
     const added = await call(partsRoute.POST, '/api/jobs/x/parts', jobParams(), {
       method: 'POST',
-      body: { label: 'Rail', quantity: 1, lengthMm: 500, widthMm: 80, thicknessMm: 18, material: 'MDF' },
+      body: { label: 'Rail', quantity: 1, length: 500, width: 80, thickness: 18, material: 'MDF' },
     });
     const bad = await call(
       partRoute.PATCH,
       '/api/jobs/x/parts/y',
       { ...jobParams(), partId: added.json.id },
-      { method: 'PATCH', body: { quantity: 0, widthMm: -3 } },
+      { method: 'PATCH', body: { quantity: 0, width: -3 } },
     );
     expect(bad.status).toBe(422);
-    expect(Object.keys(bad.json.fields).sort()).toEqual(['quantity', 'widthMm']);
+    expect(Object.keys(bad.json.fields).sort()).toEqual(['quantity', 'width']);
     const [row] = await handle.db.select().from(parts).where(eq(parts.id, added.json.id));
-    expect(row).toMatchObject({ quantity: 1, widthMm: 80 });
+    expect(row).toMatchObject({ quantity: 1, width: 80 });
   });
 
   test("another shop's job and parts do not exist from here", async () => {
@@ -91,7 +91,7 @@ describe('typing rows into the cut list', () => {
       partsRoute.POST,
       '/api/jobs/x/parts',
       { id: fx.theirJob.id },
-      { method: 'POST', body: { label: 'x', quantity: 1, lengthMm: 1, widthMm: 1, thicknessMm: 1, material: 'MDF' } },
+      { method: 'POST', body: { label: 'x', quantity: 1, length: 1, width: 1, thickness: 1, material: 'MDF' } },
     );
     expect(res.status).toBe(404);
     expect(await countParts(fx.theirJob.id)).toBe(0);
@@ -112,7 +112,7 @@ describe('uploading a cut list', () => {
     expect(res.json).toMatchObject({ validCount: 2, invalidCount: 1 });
     expect(res.json.rows[1]).toEqual({ line: 3, ok: false, problems: [{ field: 'quantity', message: 'Quantity “two” is not a whole number.' }] });
     // 3/4″ MDF is the shop's 18 mm sheet (nominal and actual differ); another shop's stock is invisible.
-    expect(res.json.rows[0].part.thicknessMm).toBe(18);
+    expect(res.json.rows[0].part.thickness).toBe(18);
     expect(res.json.warnings).toEqual([{ line: 4, message: expect.stringContaining('The stock room has no Secret walnut ply at all') }]);
     expect(await countParts()).toBe(before);
   });
@@ -166,9 +166,9 @@ describe('exporting the cut list', () => {
       body: {
         label: '=HYPERLINK("http://example.invalid")',
         quantity: 1,
-        lengthMm: inches(19.75),
-        widthMm: inches(4),
-        thicknessMm: inches(0.5),
+        length: inches(19.75),
+        width: inches(4),
+        thickness: inches(0.5),
         material: 'MDF',
       },
     });
@@ -186,6 +186,6 @@ describe('exporting the cut list', () => {
 describe('materials for pickers', () => {
   test("lists this shop's stock materials and thicknesses, never another shop's, and no prices", async () => {
     const res = await call(materialsRoute.GET, '/api/materials', {}, { user: fx.cutter });
-    expect(res.json).toEqual([{ material: 'MDF', kind: 'sheet', thicknessMm: 18, nominal: '18 mm' }]);
+    expect(res.json).toEqual([{ material: 'MDF', kind: 'sheet', thickness: 18, nominal: '18 mm' }]);
   });
 });

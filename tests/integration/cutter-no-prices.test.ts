@@ -32,7 +32,7 @@ const cutterRoutes = TABLE.filter((r) => r.expect.cutter >= 200 && r.expect.cutt
 
 describe('nothing a cutter may call answers with a price', () => {
   test('the walker finds money at any depth (it is not blind)', () => {
-    expect(moneyPaths({ a: [{ b: { costCents: 1 } }], priceEach: 2, lengthMm: 3 })).toEqual(['$.a[0].b.costCents', '$.priceEach']);
+    expect(moneyPaths({ a: [{ b: { costCents: 1 } }], priceEach: 2, length: 3 })).toEqual(['$.a[0].b.costCents', '$.priceEach']);
   });
 
   test('the cutter may call enough routes for this to mean something', () => {

@@ -68,7 +68,7 @@ describe('the demo shop', () => {
   test('keeps a table saw (3 stages rip first, 30″ = 762 mm rip capacity, ⅛″ kerf) and a track saw, and nests the kitchen within both', async () => {
     const list = await listSaws({ db: handle.db, shopId: first.shopId });
     // 30″ × 25.4 = 762 mm and ⅛″ = 3.175 mm (1 in = 25.4 mm exactly).
-    expect(list.map((s) => [s.kind, s.ripCapacityMm, s.maxStages, s.firstStage, s.kerfMm])).toEqual([
+    expect(list.map((s) => [s.kind, s.ripCapacity, s.maxStages, s.firstStage, s.kerf])).toEqual([
       ['table-saw', 762, 3, 'rip', 3.175],
       ['track-saw', null, null, 'rip', inches(3 / 32)],
     ]);
@@ -98,7 +98,7 @@ describe('the demo shop', () => {
       ['Tessel T-16 soft close', 'outside'],
     ]);
     expect((await handle.db.select().from(slideModels)).length).toBe(2);
-    const size = (name: string, opening: { widthMm: number; heightMm: number; depthMm: number }) => {
+    const size = (name: string, opening: { width: number; height: number; depth: number }) => {
       const { id, updatedAt, ...rule } = models.find((m) => m.name === name)!;
       void updatedAt;
       const sized = sizeDrawerSchedule({
@@ -106,22 +106,22 @@ describe('the demo shop', () => {
         quantity: 1,
         size: { from: 'opening', ...opening },
         slide: { type: 'undermount', model: { ...rule, id } },
-        thickness: { frontMm: 12, sideMm: 12 },
+        thickness: { front: 12, side: 12 },
       });
       if (!sized.ok) throw new Error(JSON.stringify(sized.errors));
       return sized.box;
     };
     // Inside rule: 15″ − 1-5/8″ = 13-3/8″ inside + 2 × 12 mm sides; 22″ − ⅝″ = 21-3/8″ of room takes the 21″ slide.
-    expect(size('Halbrook UM-58 full extension', { widthMm: inches(15), heightMm: inches(7), depthMm: inches(22) })).toMatchObject({
-      widthMm: expect.closeTo(inches(13 + 3 / 8) + 24, 9),
-      heightMm: expect.closeTo(inches(6.25), 9),
-      depthMm: expect.closeTo(inches(21), 9),
+    expect(size('Halbrook UM-58 full extension', { width: inches(15), height: inches(7), depth: inches(22) })).toMatchObject({
+      width: expect.closeTo(inches(13 + 3 / 8) + 24, 9),
+      height: expect.closeTo(inches(6.25), 9),
+      depth: expect.closeTo(inches(21), 9),
     });
     // Outside rule: 564 − 10 = 554 mm; 540 − 10 = 530 mm of room takes the 500 mm slide.
-    expect(size('Tessel T-16 soft close', { widthMm: 564, heightMm: 180, depthMm: 540 })).toMatchObject({
-      widthMm: 554,
-      heightMm: 160,
-      depthMm: 500,
+    expect(size('Tessel T-16 soft close', { width: 564, height: 180, depth: 540 })).toMatchObject({
+      width: 554,
+      height: 160,
+      depth: 500,
     });
   });
 
@@ -158,11 +158,11 @@ describe('the demo shop', () => {
     for (const piece of pieces) {
       const on = await db.select().from(placements).where(eq(placements.planPieceId, piece.id));
       expect(piece.partAreaMm2).toBeCloseTo(
-        on.filter((p) => !p.damaged).reduce((n, p) => n + p.lengthMm * p.widthMm, 0),
+        on.filter((p) => !p.damaged).reduce((n, p) => n + p.length * p.width, 0),
         6,
       );
       expect(piece.spoiledAreaMm2).toBeCloseTo(
-        on.filter((p) => p.damaged).reduce((n, p) => n + p.lengthMm * p.widthMm, 0),
+        on.filter((p) => p.damaged).reduce((n, p) => n + p.length * p.width, 0),
         6,
       );
     }

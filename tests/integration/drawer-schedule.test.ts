@@ -27,9 +27,9 @@ async function call(handler: Handler, params: Record<string, string>, opts: { me
 const schedule = (depthIn: number) => ({
   label: 'Pantry drawers',
   quantity: 3,
-  size: { from: 'box', widthMm: inches(14), heightMm: inches(5), depthMm: inches(depthIn) },
+  size: { from: 'box', width: inches(14), height: inches(5), depth: inches(depthIn) },
   joint: { method: 'lock-rabbet' },
-  thickness: { frontMm: inches(0.5), sideMm: inches(0.5) },
+  thickness: { front: inches(0.5), side: inches(0.5) },
   materials: { sides: 'Baltic birch' },
 });
 const rowsOf = (scheduleId: string) => handle.db.select().from(parts).where(eq(parts.drawerScheduleId, scheduleId));
@@ -41,7 +41,7 @@ describe('drawer schedules feed the cut list', () => {
     expect(res.json).toMatchObject({ label: 'Pantry drawers', partRows: 4 });
     const rows = await rowsOf(res.json.id);
     const side = rows.find((r) => r.role === 'side')!;
-    expect(side.lengthMm).toBeCloseTo(inches(19.75), 9);
+    expect(side.length).toBeCloseTo(inches(19.75), 9);
     expect(side.quantity).toBe(6);
     expect(side.label).toBe('Pantry drawers · side');
     expect(side.machining?.length).toBeGreaterThan(0);
@@ -59,7 +59,7 @@ describe('drawer schedules feed the cut list', () => {
     expect(updated.status).toBe(200);
     const after = await rowsOf(created.json.id);
     expect(after).toHaveLength(before.length);
-    expect(after.find((r) => r.role === 'side')!.lengthMm).toBeCloseTo(inches(21.75), 9);
+    expect(after.find((r) => r.role === 'side')!.length).toBeCloseTo(inches(21.75), 9);
     expect(Math.min(...after.map((r) => r.sort))).toBe(Math.min(...before.map((r) => r.sort)));
   });
 
@@ -67,7 +67,7 @@ describe('drawer schedules feed the cut list', () => {
     const created = await call(schedulesRoute.POST, { id: fx.myJob.id }, { method: 'POST', body: { ...schedule(18), label: 'Hall drawers' } });
     const [row] = await rowsOf(created.json.id);
     const params = { id: fx.myJob.id, partId: row.id };
-    const refused = await call(partRoute.PATCH, params, { method: 'PATCH', body: { lengthMm: 100 } });
+    const refused = await call(partRoute.PATCH, params, { method: 'PATCH', body: { length: 100 } });
     expect(refused.status).toBe(409);
     expect(refused.json.error).toBe('This row comes from a drawer schedule: change its length in the schedule instead.');
     expect((await call(partRoute.PATCH, params, { method: 'PATCH', body: { notes: 'pull from rack 2' } })).json.notes).toBe('pull from rack 2');
@@ -81,11 +81,11 @@ describe('drawer schedules feed the cut list', () => {
       { id: fx.myJob.id },
       {
         method: 'POST',
-        body: { ...schedule(20), size: { from: 'box', widthMm: 20, heightMm: inches(5), depthMm: inches(20) } },
+        body: { ...schedule(20), size: { from: 'box', width: 20, height: inches(5), depth: inches(20) } },
       },
     );
     expect(res.status).toBe(422);
-    expect(Object.keys(res.json.fields)).toContain('thickness.sideMm');
+    expect(Object.keys(res.json.fields)).toContain('thickness.side');
     expect((await handle.db.select().from(drawerSchedules)).length).toBe(before);
   });
 
@@ -93,7 +93,7 @@ describe('drawer schedules feed the cut list', () => {
     await call(
       partsRoute.POST,
       { id: fx.myJob.id },
-      { method: 'POST', body: { label: 'Typed shelf', quantity: 1, lengthMm: 500, widthMm: 300, thicknessMm: 18, material: 'MDF' } },
+      { method: 'POST', body: { label: 'Typed shelf', quantity: 1, length: 500, width: 300, thickness: 18, material: 'MDF' } },
     );
     const created = await call(schedulesRoute.POST, { id: fx.myJob.id }, { method: 'POST', body: { ...schedule(16), label: 'Bath drawers' } });
     expect((await call(scheduleRoute.DELETE, { id: fx.myJob.id, scheduleId: created.json.id }, { method: 'DELETE' })).status).toBe(200);
@@ -115,7 +115,7 @@ describe('drawer schedules feed the cut list', () => {
 describe('setup cards', () => {
   const card = {
     joint: 'lock-rabbet',
-    stockThicknessMm: inches(0.5),
+    stockThickness: inches(0.5),
     fields: [{ key: 'bit-height', label: 'Bit height', value: inches(3 / 8), unit: 'mm' }],
     note: 'Test in scrap first.',
   };
@@ -124,7 +124,7 @@ describe('setup cards', () => {
     const created = await call(cardsRoute.POST, {}, { method: 'POST', body: card });
     expect(created.status).toBe(201);
     expect(created.json).toMatchObject({ joint: 'lock-rabbet', fields: card.fields });
-    expect((await call(cardsRoute.POST, {}, { method: 'POST', body: { ...card, stockThicknessMm: inches(0.5) + 0.05 } })).status).toBe(409);
+    expect((await call(cardsRoute.POST, {}, { method: 'POST', body: { ...card, stockThickness: inches(0.5) + 0.05 } })).status).toBe(409);
     const changed = await call(cardRoute.PUT, { id: created.json.id }, { method: 'PUT', body: { ...card, note: 'Bit raised after test cut.' } });
     expect(changed.json.note).toBe('Bit raised after test cut.');
     expect((await call(cardsRoute.GET, {}, { user: fx.cutter })).json).toHaveLength(1);

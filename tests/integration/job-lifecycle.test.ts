@@ -12,8 +12,8 @@ setUpTwoShopDatabase((app) => ({ db, fx } = app));
 
 // A shop's job, as the trade runs it (common practice, no source): quoted, accepted, cut, done, filed away.
 const cabinet = [
-  { label: 'Side', quantity: 2, lengthMm: 720, widthMm: 560 },
-  { label: 'Shelf', quantity: 2, lengthMm: 560, widthMm: 300, grain: 'any' as const },
+  { label: 'Side', quantity: 2, length: 720, width: 560 },
+  { label: 'Shelf', quantity: 2, length: 560, width: 300, grain: 'any' as const },
 ];
 
 const job = (values: Parameters<typeof jobWithSheet>[2] = { parts: cabinet }) => jobWithSheet(db, fx.mine.id, values);

@@ -38,9 +38,9 @@ async function seedJobs() {
     ])
     .returning();
   await handle.db.insert(parts).values([
-    { shopId: fx.mine.id, jobId: withParts.id, label: 'Side', quantity: 4, lengthMm: 700, widthMm: 560, thicknessMm: 18, material: 'Maple ply' },
-    { shopId: fx.mine.id, jobId: withParts.id, label: 'Shelf', quantity: 3, lengthMm: 560, widthMm: 300, thicknessMm: 18, material: 'Maple ply' },
-    { shopId: fx.mine.id, jobId: withParts.id, label: 'Face frame', quantity: 2, lengthMm: 700, widthMm: 38, thicknessMm: 19, material: 'White oak' },
+    { shopId: fx.mine.id, jobId: withParts.id, label: 'Side', quantity: 4, length: 700, width: 560, thickness: 18, material: 'Maple ply' },
+    { shopId: fx.mine.id, jobId: withParts.id, label: 'Shelf', quantity: 3, length: 560, width: 300, thickness: 18, material: 'Maple ply' },
+    { shopId: fx.mine.id, jobId: withParts.id, label: 'Face frame', quantity: 2, length: 700, width: 38, thickness: 19, material: 'White oak' },
   ]);
   return { withParts, empty };
 }
@@ -74,9 +74,9 @@ async function seedSorters() {
     jobId,
     label: 'Panel',
     quantity,
-    lengthMm: 500,
-    widthMm: 300,
-    thicknessMm: 18,
+    length: 500,
+    width: 300,
+    thickness: 18,
     material: 'Birch ply',
   });
   // Pieces: alpha 2, bravo 7 (3 + 4), charlie 5, delta 0, echo 1.
@@ -240,9 +240,9 @@ describe("a job's pieces and materials, kept on the job by the trigger on parts"
     const [side, top] = await handle.db
       .insert(parts)
       .values([
-        { shopId: fx.mine.id, jobId: a.id, label: 'Side', quantity: 2, lengthMm: 900, widthMm: 400, thicknessMm: 18, material: 'Walnut ply' },
-        { shopId: fx.mine.id, jobId: a.id, label: 'Top', quantity: 1, lengthMm: 1200, widthMm: 420, thicknessMm: 25, material: 'White oak' },
-        { shopId: fx.mine.id, jobId: a.id, label: 'Shelf', quantity: 3, lengthMm: 1150, widthMm: 380, thicknessMm: 18, material: 'Walnut ply' },
+        { shopId: fx.mine.id, jobId: a.id, label: 'Side', quantity: 2, length: 900, width: 400, thickness: 18, material: 'Walnut ply' },
+        { shopId: fx.mine.id, jobId: a.id, label: 'Top', quantity: 1, length: 1200, width: 420, thickness: 25, material: 'White oak' },
+        { shopId: fx.mine.id, jobId: a.id, label: 'Shelf', quantity: 3, length: 1150, width: 380, thickness: 18, material: 'Walnut ply' },
       ])
       .returning();
     expect(await listed(a.name)).toEqual({ partCount: 6, materials: ['Walnut ply', 'White oak'] });
@@ -265,7 +265,7 @@ describe("a job's pieces and materials, kept on the job by the trigger on parts"
       .transaction(async (tx) => {
         await tx
           .insert(parts)
-          .values({ shopId: fx.mine.id, jobId: b.id, label: 'Leg', quantity: 4, lengthMm: 450, widthMm: 45, thicknessMm: 45, material: 'Ash' });
+          .values({ shopId: fx.mine.id, jobId: b.id, label: 'Leg', quantity: 4, length: 450, width: 45, thickness: 45, material: 'Ash' });
         tx.rollback();
       })
       .catch(() => undefined);

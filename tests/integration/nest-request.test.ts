@@ -42,9 +42,9 @@ describe('a nesting request built from the database', () => {
         kind: 'board',
         material: 'Cherry',
         nominalThickness: nominal,
-        thicknessMm: inches(1),
-        lengthMm: length,
-        widthMm: width,
+        thickness: inches(1),
+        length: length,
+        width: width,
         costCents: perBf,
       })
       .returning();

@@ -49,9 +49,9 @@ async function sheet(values: Partial<typeof stockItems.$inferInsert> = {}) {
       kind: 'sheet',
       material: 'Birch ply',
       nominalThickness: '18 mm',
-      thicknessMm: 18,
-      lengthMm: 2440,
-      widthMm: 1220,
+      thickness: 18,
+      length: 2440,
+      width: 1220,
       onHand: 1,
       costCents: 6000,
       ...values,
@@ -68,9 +68,9 @@ async function sheet(values: Partial<typeof stockItems.$inferInsert> = {}) {
 const asStock = (item: typeof stockItems.$inferSelect) => ({
   id: stockRef.onHand(item.id),
   kind: item.kind,
-  length: item.lengthMm,
-  width: item.widthMm,
-  thickness: item.thicknessMm,
+  length: item.length,
+  width: item.width,
+  thickness: item.thickness,
   material: item.material,
   grain: item.grain,
   count: item.onHand - item.reserved,
@@ -127,7 +127,7 @@ describe('releasing plans that race for the same stock', () => {
   test('six plans racing for the same offcut: one wins, the others are told it is gone', async () => {
     const [o] = await db
       .insert(offcuts)
-      .values({ shopId: fx.mine.id, material: 'Offcut ply', thicknessMm: 18, lengthMm: 800, widthMm: 400, costCents: 500 })
+      .values({ shopId: fx.mine.id, material: 'Offcut ply', thickness: 18, length: 800, width: 400, costCents: 500 })
       .returning();
     await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'offcut-created', offcutId: o.id, quantity: 1, reason: 'Opening count' });
     const stock = [
@@ -196,7 +196,7 @@ describe('a plan from release to done', () => {
     const rack = (await listOffcuts({ db, shopId: fx.mine.id })).filter((o) => o.sourcePlanId === plan.id);
     expect(rack).toHaveLength(expected.length);
     expect(rack.every((o) => o.status === 'available' && o.location === 'Bin 7' && o.material === 'Done ply')).toBe(true);
-    expect(rack.map((o) => o.lengthMm * o.widthMm).sort()).toEqual(expected.map(({ r }) => r.w * r.h).sort());
+    expect(rack.map((o) => o.length * o.width).sort()).toEqual(expected.map(({ r }) => r.w * r.h).sort());
 
     // One row per physical change: the reservation, then the cut that ends it (no separate release).
     const kinds = (await db.select().from(stockMovements).where(eq(stockMovements.planId, plan.id)))
@@ -236,10 +236,7 @@ describe('a plan from release to done', () => {
 
   test('cancel gives back every reservation: stock is as it was before release', async () => {
     const item = await sheet({ material: 'Cancel ply', onHand: 3 });
-    const [o] = await db
-      .insert(offcuts)
-      .values({ shopId: fx.mine.id, material: 'Cancel ply', thicknessMm: 18, lengthMm: 900, widthMm: 500 })
-      .returning();
+    const [o] = await db.insert(offcuts).values({ shopId: fx.mine.id, material: 'Cancel ply', thickness: 18, length: 900, width: 500 }).returning();
     await db.insert(stockMovements).values({ shopId: fx.mine.id, kind: 'offcut-created', offcutId: o.id, quantity: 1, reason: 'Opening count' });
     const plan = await draftPlan({
       parts: [part('c1', 2000, 1000, 2, 'Cancel ply'), part('c2', 800, 450, 1, 'Cancel ply')],

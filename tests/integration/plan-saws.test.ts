@@ -45,7 +45,7 @@ describe('a plan nested on the shop’s saws', () => {
     const { updatedAt: _b, ...breakdownSaw } = track;
     const req = {
       ...offered,
-      settings: { ...offered.settings, timeBudgetMs: 0, saw, breakdownSaw, kerf: Math.max(offered.settings.kerf, saw.kerfMm) },
+      settings: { ...offered.settings, timeBudgetMs: 0, saw, breakdownSaw, kerf: Math.max(offered.settings.kerf, saw.kerf) },
     };
     const plan = await optimize(req);
     expect(validatePlan(req, plan)).toEqual([]);
@@ -55,7 +55,7 @@ describe('a plan nested on the shop’s saws', () => {
     });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     const got = await call(planRoute.GET, `/api/plans/${res.body.id}`, res.body.id, estimator);
-    expect(got.body.request.settings).toMatchObject({ saw: { name: 'Cabinet saw', ripCapacityMm: 762 }, breakdownSaw: { name: 'Track saw' } });
+    expect(got.body.request.settings).toMatchObject({ saw: { name: 'Cabinet saw', ripCapacity: 762 }, breakdownSaw: { name: 'Track saw' } });
     const named = new Set(got.body.document.pieces.flatMap((p: { sawOrder: { saw: string }[] }) => p.sawOrder.map((s) => s.saw)));
     expect([...named].sort()).toEqual(['Cabinet saw', 'Track saw']);
   });
@@ -68,7 +68,7 @@ describe('a plan nested on the shop’s saws', () => {
     const { updatedAt: _b, ...breakdownSaw } = track;
     const plan = await optimize({
       ...offered,
-      settings: { ...offered.settings, timeBudgetMs: 0, saw, breakdownSaw, kerf: Math.max(offered.settings.kerf, saw.kerfMm) },
+      settings: { ...offered.settings, timeBudgetMs: 0, saw, breakdownSaw, kerf: Math.max(offered.settings.kerf, saw.kerf) },
     });
     // Saved as if for the cabinet saw alone: its steps on the track saw name a saw this nest does not have.
     const res = await call(jobPlans.POST, `/api/jobs/${jobId}/plans`, jobId, estimator, {
@@ -83,7 +83,7 @@ describe('a plan nested on the shop’s saws', () => {
     const [other] = await handle.db.insert(shops).values({ name: 'Elsewhere Joinery' }).returning();
     const [foreign] = await handle.db
       .insert(saws)
-      .values({ shopId: other.id, kind: 'table-saw', name: 'Their saw', kerfMm: 3, minFenceWidthMm: 25.4 })
+      .values({ shopId: other.id, kind: 'table-saw', name: 'Their saw', kerf: 3, minFenceWidth: 25.4 })
       .returning();
     const { body: offered } = await call(nestRequestRoute.GET, `/api/jobs/${jobId}/nest-request`, jobId, estimator);
     const stockIds = offered.stock.map((s: { id: string }) => s.id);

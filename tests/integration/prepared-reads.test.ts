@@ -49,8 +49,8 @@ describe('prepared reads', () => {
       ])
       .returning();
     await handle.db.insert(parts).values([
-      { shopId: fx.mine.id, jobId: made[0].id, label: 'Side', quantity: 2, lengthMm: 700, widthMm: 560, thicknessMm: 18, material: 'Walnut ply' },
-      { shopId: fx.mine.id, jobId: made[0].id, label: 'Top', quantity: 1, lengthMm: 900, widthMm: 560, thicknessMm: 18, material: 'Birch ply' },
+      { shopId: fx.mine.id, jobId: made[0].id, label: 'Side', quantity: 2, length: 700, width: 560, thickness: 18, material: 'Walnut ply' },
+      { shopId: fx.mine.id, jobId: made[0].id, label: 'Top', quantity: 1, length: 900, width: 560, thickness: 18, material: 'Birch ply' },
     ]);
     const views = [
       {},

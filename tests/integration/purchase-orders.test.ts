@@ -53,9 +53,9 @@ async function size(shopId: string, over: Size) {
       kind: 'sheet',
       material: `Ply ${nextNumber()}`,
       nominalThickness: '3/4"',
-      thicknessMm: 18,
-      lengthMm: 2440,
-      widthMm: 1220,
+      thickness: 18,
+      length: 2440,
+      width: 1220,
       onHand: 0,
       costCents: 5000,
       ...over,
@@ -119,7 +119,7 @@ describe('purchase orders from the low stock', () => {
 describe('purchase orders from a plan’s stock to buy', () => {
   test('every piece the plan buys, and what the rack is short of, on one draft for the size’s supplier', async () => {
     // 12 parts of 1000 × 500 on 2440 × 1220 sheets: more sheets than the 1 on the rack.
-    const { job, sheet } = await jobWithSheet(db, fx.mine.id, { parts: [{ label: 'Shelf', quantity: 12, lengthMm: 1000, widthMm: 500 }], onHand: 1 });
+    const { job, sheet } = await jobWithSheet(db, fx.mine.id, { parts: [{ label: 'Shelf', quantity: 12, length: 1000, width: 500 }], onHand: 1 });
     await db.update(stockItems).set({ buyable: true, supplier: 'Cedar Run Plywood', costCents: 6000 }).where(eq(stockItems.id, sheet.id));
     const { id: planId } = await nestAndSave(fx.estimator, job.id);
     const [row] = await db.select().from(plans).where(eq(plans.id, planId));
@@ -145,9 +145,9 @@ describe('a draft, sent, received', () => {
       kind: 'board',
       material: 'White oak',
       nominalThickness: '4/4',
-      thicknessMm: 20.6,
-      lengthMm: 2438.4,
-      widthMm: 165.1,
+      thickness: 20.6,
+      length: 2438.4,
+      width: 165.1,
       supplier: 'Cedar Run Plywood',
       onHand: 0,
       lowStockAt: 0,

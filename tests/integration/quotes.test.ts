@@ -17,8 +17,8 @@ let fx: TwoShops;
 setUpTwoShopDatabase((app) => ({ handle, fx } = app));
 
 const PARTS = [
-  { label: 'Side', quantity: 4, lengthMm: 720, widthMm: 560 },
-  { label: 'Shelf', quantity: 6, lengthMm: 760, widthMm: 300 },
+  { label: 'Side', quantity: 4, length: 720, width: 560 },
+  { label: 'Shelf', quantity: 6, length: 760, width: 300 },
 ];
 
 describe('a quote built from a job and its plan', () => {
@@ -119,10 +119,10 @@ describe('hardware and labour from the drawer schedules', () => {
     const bank = (label: string, quantity: number, from: 'opening' | 'box') => ({
       label,
       quantity,
-      size: { from, widthMm: inches(15), heightMm: inches(6), depthMm: inches(22.5) },
+      size: { from, width: inches(15), height: inches(6), depth: inches(22.5) },
       slide: { type: 'side-mount', series: 'imperial' },
       joint: { method: 'lock-rabbet' },
-      thickness: { frontMm: inches(0.5), sideMm: inches(0.5) },
+      thickness: { front: inches(0.5), side: inches(0.5) },
     });
     for (const [label, n, from] of [
       ['Kitchen bank', 3, 'opening'],

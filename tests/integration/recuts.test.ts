@@ -18,8 +18,8 @@ setUpTwoShopDatabase((app) => ({ db, fx } = app));
 
 // A base cabinet's carcass parts: the sides leave a large offcut on the sheet, big enough for a side again.
 const carcass = [
-  { label: 'Side', quantity: 2, lengthMm: 720, widthMm: 560 },
-  { label: 'Shelf', quantity: 3, lengthMm: 560, widthMm: 300, grain: 'any' as const },
+  { label: 'Side', quantity: 2, length: 720, width: 560 },
+  { label: 'Shelf', quantity: 3, length: 560, width: 300, grain: 'any' as const },
 ];
 
 /** A accepted job whose first plan was cut with one part damaged: the plan, the damaged part, the job and its sheet. */
@@ -51,9 +51,9 @@ describe('a part damaged at the saw', () => {
         label: part.label,
         instance: damaged.instance,
         quantity: 1,
-        lengthMm: part.length,
-        widthMm: part.width,
-        thicknessMm: 18,
+        length: part.length,
+        width: part.width,
+        thickness: 18,
         material,
         grain: part.grain,
         reason: 'Tear-out',
@@ -104,8 +104,8 @@ describe('nesting and cutting the re-cuts', () => {
         id: recut.id,
         label: `${recut.label} #${recut.instance} · re-cut`,
         quantity: 1,
-        length: recut.lengthMm,
-        width: recut.widthMm,
+        length: recut.length,
+        width: recut.width,
         thickness: 18,
       }),
     ]);
@@ -114,7 +114,7 @@ describe('nesting and cutting the re-cuts', () => {
       .select()
       .from(offcuts)
       .where(and(eq(offcuts.sourcePlanId, first.id), eq(offcuts.status, 'available')));
-    expect(rack.some((o) => o.lengthMm >= damaged.w && o.widthMm >= damaged.h)).toBe(true);
+    expect(rack.some((o) => o.length >= damaged.w && o.width >= damaged.h)).toBe(true);
 
     const sheetsBefore = await counts(db, sheet.id);
     const again = await nestAndSave(fx.estimator, job.id, { for: 'recuts', name: 'Re-cuts' });
@@ -147,7 +147,7 @@ describe('nesting and cutting the re-cuts', () => {
     const page = await getPartPage({ db, shopId: fx.mine.id }, recut.id, { drafts: false });
     expect(page).toMatchObject({
       recutOf: `${recut.label} #${recut.instance}`,
-      part: { lengthMm: recut.lengthMm, widthMm: recut.widthMm, material: recut.material },
+      part: { length: recut.length, width: recut.width, material: recut.material },
     });
     expect(page!.plans.find((p) => p.id === again.id)!.places).toEqual([expect.objectContaining({ pieceIndex: 0, instance: 1 })]);
   });
@@ -184,7 +184,7 @@ describe('nesting and cutting the re-cuts', () => {
       ['open', 'Chipped edge'],
       ['spoiled', 'Tear-out'],
     ]);
-    expect(list[0]).toMatchObject({ label: list[1].label, instance: list[1].instance, lengthMm: list[1].lengthMm, sourcePlan: { id: again.id } });
+    expect(list[0]).toMatchObject({ label: list[1].label, instance: list[1].instance, length: list[1].length, sourcePlan: { id: again.id } });
   });
 
   test('a re-cut plan whose re-cut was cancelled since the Nest is refused at release, naming it, and reserves nothing', async () => {

@@ -33,9 +33,9 @@ async function plan(
         planId: p.id,
         index,
         material: piece.material,
-        thicknessMm: piece.thickness,
-        lengthMm: piece.l,
-        widthMm: piece.w,
+        thickness: piece.thickness,
+        length: piece.l,
+        width: piece.w,
         offcutId: piece.offcutId ?? null,
       })
       .returning();
@@ -45,10 +45,10 @@ async function plan(
           shopId,
           planPieceId: row.id,
           instance: i + 1,
-          xMm: 0,
-          yMm: 0,
-          lengthMm: part.l,
-          widthMm: part.w,
+          x: 0,
+          y: 0,
+          length: part.l,
+          width: part.w,
           damaged: part.damaged ?? false,
         })),
       );
@@ -57,10 +57,10 @@ async function plan(
   return p;
 }
 
-async function offcut(values: Partial<typeof offcuts.$inferInsert> & { createdAt: Date; lengthMm: number; widthMm: number }) {
+async function offcut(values: Partial<typeof offcuts.$inferInsert> & { createdAt: Date; length: number; width: number }) {
   const [o] = await db
     .insert(offcuts)
-    .values({ shopId: fx.mine.id, material: 'Birch ply', thicknessMm: 18, ...values })
+    .values({ shopId: fx.mine.id, material: 'Birch ply', thickness: 18, ...values })
     .returning();
   return o;
 }
@@ -76,7 +76,7 @@ const filter = (over: Partial<ReportFilter> = {}): ReportFilter => ({
 
 beforeAll(async () => {
   // An offcut racked in May, cut up by plan B in December.
-  const used = await offcut({ lengthMm: 1000, widthMm: 500, status: 'used', createdAt: new Date('2026-05-01T15:00:00Z') });
+  const used = await offcut({ length: 1000, width: 500, status: 'used', createdAt: new Date('2026-05-01T15:00:00Z') });
   // Plan A, finished Sunday 29 November at 23:30 in Chicago (05:30 UTC on Monday 30 November).
   const a = await plan(fx.mine.id, fx.myJob.id, 'done', '2026-11-30T05:30:00Z', [
     {
@@ -90,7 +90,7 @@ beforeAll(async () => {
       ],
     },
   ]);
-  await offcut({ lengthMm: 900, widthMm: 500, sourcePlanId: a.id, createdAt: new Date('2026-11-30T05:31:00Z') });
+  await offcut({ length: 900, width: 500, sourcePlanId: a.id, createdAt: new Date('2026-11-30T05:31:00Z') });
   // Plan B, Tuesday 1 December at noon in Chicago: the May offcut and an MDF sheet.
   const b = await plan(fx.mine.id, fx.myJob.id, 'done', '2026-12-01T18:00:00Z', [
     { material: 'Birch ply', thickness: 18, l: 1000, w: 500, offcutId: used.id, parts: [{ l: 900, w: 450 }] },
@@ -100,12 +100,12 @@ beforeAll(async () => {
     .insert(stockMovements)
     .values({ shopId: fx.mine.id, kind: 'consumed', offcutId: used.id, quantity: -1, planId: b.id, createdAt: new Date('2026-12-01T18:00:00Z') });
   // A scrap thrown out at 21:00 on 1 December in Chicago (03:00 UTC on the 2nd).
-  const scrap = await offcut({ lengthMm: 300, widthMm: 200, status: 'scrapped', createdAt: new Date('2026-06-01T12:00:00Z') });
+  const scrap = await offcut({ length: 300, width: 200, status: 'scrapped', createdAt: new Date('2026-06-01T12:00:00Z') });
   await db
     .insert(stockMovements)
     .values({ shopId: fx.mine.id, kind: 'scrapped', offcutId: scrap.id, quantity: -1, createdAt: new Date('2026-12-02T03:00:00Z') });
   // Still on the rack since March: older than six months on 3 December.
-  await offcut({ lengthMm: 700, widthMm: 300, location: 'Bin 3', createdAt: new Date('2026-03-15T16:00:00Z') });
+  await offcut({ length: 700, width: 300, location: 'Bin 3', createdAt: new Date('2026-03-15T16:00:00Z') });
   // Not counted: a plan still being cut, and another shop's finished plan.
   await plan(fx.mine.id, fx.myJob.id, 'cutting', null, [{ material: 'Birch ply', thickness: 18, l: 2000, w: 1000, parts: [{ l: 1000, w: 1000 }] }]);
   await plan(fx.theirs.id, fx.theirJob.id, 'done', '2026-11-15T18:00:00Z', [
@@ -122,7 +122,7 @@ describe('yield over time', () => {
       {
         period: '2026-11-01',
         material: 'Birch ply',
-        thicknessMm: 18,
+        thickness: 18,
         plans: 1,
         stockArea: 2_000_000,
         partArea: 800_000,
@@ -133,7 +133,7 @@ describe('yield over time', () => {
       {
         period: '2026-12-01',
         material: 'Birch ply',
-        thicknessMm: 18,
+        thickness: 18,
         plans: 1,
         stockArea: 500_000,
         partArea: 405_000,
@@ -144,7 +144,7 @@ describe('yield over time', () => {
       {
         period: '2026-12-01',
         material: 'MDF',
-        thicknessMm: 12,
+        thickness: 12,
         plans: 1,
         stockArea: 1_000_000,
         partArea: 300_000,
@@ -225,7 +225,7 @@ describe('offcut use', () => {
   test('offcuts on the rack longer than six months are listed to use or scrap; used and scrapped ones are not', async () => {
     const old = await oldOffcuts(db, { shopId: fx.mine.id, timeZone: ZONE, months: 6, now: new Date('2026-12-03T12:00:00Z') });
     expect(old).toEqual([
-      expect.objectContaining({ material: 'Birch ply', lengthMm: 700, widthMm: 300, location: 'Bin 3', rackedOn: '2026-03-15', ageDays: 262 }),
+      expect.objectContaining({ material: 'Birch ply', length: 700, width: 300, location: 'Bin 3', rackedOn: '2026-03-15', ageDays: 262 }),
     ]);
     expect(await oldOffcuts(db, { shopId: fx.mine.id, timeZone: ZONE, months: 9, now: new Date('2026-12-03T12:00:00Z') })).toEqual([]);
   });
@@ -242,9 +242,9 @@ describe('stock value over time, rebuilt from the ledger', () => {
         kind: 'sheet',
         material: 'Baltic birch',
         nominalThickness: '1/2"',
-        thicknessMm: 12,
-        lengthMm: 1525,
-        widthMm: 1525,
+        thickness: 12,
+        length: 1525,
+        width: 1525,
         onHand: 7,
         lowStockAt: 8,
         costCents: 6850,
@@ -255,9 +255,9 @@ describe('stock value over time, rebuilt from the ledger', () => {
       .values({
         shopId,
         material: 'Baltic birch',
-        thicknessMm: 12,
-        lengthMm: 600,
-        widthMm: 400,
+        thickness: 12,
+        length: 600,
+        width: 400,
         costCents: 1100,
         createdAt: new Date('2026-11-20T16:00:00Z'),
       })

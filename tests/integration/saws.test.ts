@@ -22,12 +22,12 @@ async function call(handler: Handler, params: Record<string, string>, opts: { me
 const TABLE_SAW = {
   kind: 'table-saw',
   name: 'Cabinet saw',
-  kerfMm: 3.175,
-  ripCapacityMm: 762,
-  crosscutCapacityMm: 610,
+  kerf: 3.175,
+  ripCapacity: 762,
+  crosscutCapacity: 610,
   maxStages: 3,
   firstStage: 'rip',
-  minFenceWidthMm: 25.4,
+  minFenceWidth: 25.4,
 };
 
 describe('saws in Shop settings', () => {
@@ -36,10 +36,10 @@ describe('saws in Shop settings', () => {
     expect(a.status).toBe(201);
     expect(a.json).toMatchObject({
       name: 'Cabinet saw',
-      ripCapacityMm: 762,
+      ripCapacity: 762,
       maxStages: 3,
       firstStage: 'rip',
-      maxPieceLengthMm: null,
+      maxPieceLength: null,
       kindName: null,
     });
     const b = await call(
@@ -47,7 +47,7 @@ describe('saws in Shop settings', () => {
       {},
       {
         method: 'POST',
-        body: { kind: 'track-saw', name: 'Track saw, 2.7 m rail', kerfMm: 2.2, crosscutCapacityMm: 2700, maxStages: null, minFenceWidthMm: 0 },
+        body: { kind: 'track-saw', name: 'Track saw, 2.7 m rail', kerf: 2.2, crosscutCapacity: 2700, maxStages: null, minFenceWidth: 0 },
       },
     );
     expect(b.status).toBe(201);
@@ -82,10 +82,10 @@ describe('saws in Shop settings', () => {
     const changed = await call(
       sawRoute.PUT,
       { id: saw.id },
-      { method: 'PUT', body: { ...TABLE_SAW, name: 'To change', ripCapacityMm: 1270, maxStages: null } },
+      { method: 'PUT', body: { ...TABLE_SAW, name: 'To change', ripCapacity: 1270, maxStages: null } },
     );
     expect(changed.status).toBe(200);
-    expect(changed.json).toMatchObject({ ripCapacityMm: 1270, maxStages: null });
+    expect(changed.json).toMatchObject({ ripCapacity: 1270, maxStages: null });
     expect((await call(sawRoute.DELETE, { id: saw.id }, { method: 'DELETE' })).status).toBe(200);
     expect((await call(sawsRoute.GET, {})).json.map((s: { id: string }) => s.id)).not.toContain(saw.id);
     expect((await call(sawRoute.DELETE, { id: saw.id }, { method: 'DELETE' })).status).toBe(404);
@@ -103,17 +103,17 @@ describe('saws in Shop settings', () => {
       {},
       {
         method: 'POST',
-        body: { ...TABLE_SAW, name: 'Bad', maxStages: 5, kerfMm: -1, kind: 'other', maxPieceLengthMm: 1000, maxPieceWidthMm: 1200 },
+        body: { ...TABLE_SAW, name: 'Bad', maxStages: 5, kerf: -1, kind: 'other', maxPieceLength: 1000, maxPieceWidth: 1200 },
       },
     );
     expect(res.status).toBe(422);
-    expect(Object.keys(res.json.fields).sort()).toEqual(['kerfMm', 'maxStages']);
+    expect(Object.keys(res.json.fields).sort()).toEqual(['kerf', 'maxStages']);
     const other = await call(
       sawsRoute.POST,
       {},
-      { method: 'POST', body: { ...TABLE_SAW, name: 'Bad 2', kind: 'other', maxPieceLengthMm: 1000, maxPieceWidthMm: 1200 } },
+      { method: 'POST', body: { ...TABLE_SAW, name: 'Bad 2', kind: 'other', maxPieceLength: 1000, maxPieceWidth: 1200 } },
     );
     expect(other.status).toBe(422);
-    expect(Object.keys(other.json.fields).sort()).toEqual(['kindName', 'maxPieceWidthMm']);
+    expect(Object.keys(other.json.fields).sort()).toEqual(['kindName', 'maxPieceWidth']);
   });
 });

@@ -23,20 +23,20 @@ async function call(handler: Handler, params: Record<string, string>, opts: { me
 const MODEL = {
   kind: 'undermount',
   name: 'Tessel T-16',
-  lengthsMm: [550, 250, 300, 350, 400, 450, 500],
+  lengths: [550, 250, 300, 350, 400, 450, 500],
   widthRule: 'outside',
-  widthDeductionMm: 10,
-  maxSideThicknessMm: 16,
-  bottomRecessMm: 13,
-  heightClearanceMm: 20,
-  rearClearanceMm: 10,
+  widthDeduction: 10,
+  maxSideThickness: 16,
+  bottomRecess: 13,
+  heightClearance: 20,
+  rearClearance: 10,
 };
 
 describe('slide models in Shop settings', () => {
   test('the owner adds a model; everyone in the shop reads it, lengths shortest first; the other shop sees none', async () => {
     const created = await call(modelsRoute.POST, {}, { method: 'POST', body: MODEL });
     expect(created.status).toBe(201);
-    expect(created.json).toMatchObject({ name: 'Tessel T-16', lengthsMm: [250, 300, 350, 400, 450, 500, 550], maxSideThicknessMm: 16 });
+    expect(created.json).toMatchObject({ name: 'Tessel T-16', lengths: [250, 300, 350, 400, 450, 500, 550], maxSideThickness: 16 });
     for (const user of [fx.estimator, fx.cutter]) {
       const list = await call(modelsRoute.GET, {}, { user });
       expect(list.json.map((m: { id: string }) => m.id)).toContain(created.json.id);
@@ -58,10 +58,10 @@ describe('slide models in Shop settings', () => {
     const res = await call(
       modelsRoute.POST,
       {},
-      { method: 'POST', body: { ...MODEL, name: 'Bad', lengthsMm: [], widthDeductionMm: -1, kind: 'wooden' } },
+      { method: 'POST', body: { ...MODEL, name: 'Bad', lengths: [], widthDeduction: -1, kind: 'wooden' } },
     );
     expect(res.status).toBe(422);
-    expect(Object.keys(res.json.fields).sort()).toEqual(['kind', 'lengthsMm', 'widthDeductionMm']);
+    expect(Object.keys(res.json.fields).sort()).toEqual(['kind', 'lengths', 'widthDeduction']);
   });
 
   test('a schedule sized on a model keeps its parts after the model is changed and deleted', async () => {
@@ -71,24 +71,24 @@ describe('slide models in Shop settings', () => {
     const schedule = {
       label: 'On the kept rule',
       quantity: 1,
-      size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 },
+      size: { from: 'opening', width: 564, height: 180, depth: 540 },
       slide: { type: 'undermount', model: { ...rule, id } },
-      thickness: { frontMm: 16, sideMm: 16 },
+      thickness: { front: 16, side: 16 },
     };
     const saved = await call(schedulesRoute.POST, { id: fx.myJob.id }, { method: 'POST', body: schedule, user: fx.estimator });
     expect(saved.status).toBe(201);
     // 564 − 10 = 554 mm wide; 540 − 10 = 530 mm of room → the 500 mm slide, and the box is as long.
-    expect(saved.json.input.slide.model).toMatchObject({ id, widthDeductionMm: 10 });
+    expect(saved.json.input.slide.model).toMatchObject({ id, widthDeduction: 10 });
 
-    expect((await call(modelRoute.PUT, { id }, { method: 'PUT', body: { ...MODEL, name: 'Kept rule', widthDeductionMm: 30 } })).status).toBe(200);
+    expect((await call(modelRoute.PUT, { id }, { method: 'PUT', body: { ...MODEL, name: 'Kept rule', widthDeduction: 30 } })).status).toBe(200);
     expect((await call(modelRoute.DELETE, { id }, { method: 'DELETE' })).status).toBe(200);
     expect((await call(modelRoute.DELETE, { id }, { method: 'DELETE' })).status).toBe(404);
 
     const list = (await call(schedulesRoute.GET, { id: fx.myJob.id }, { user: fx.estimator })).json;
     const again = list.find((s: { id: string }) => s.id === saved.json.id);
-    expect(again.input.slide.model.widthDeductionMm).toBe(10);
+    expect(again.input.slide.model.widthDeduction).toBe(10);
     const rows = await handle.db.select().from(parts).where(eq(parts.drawerScheduleId, saved.json.id));
-    expect(rows.find((r) => r.role === 'back')!.lengthMm).toBeCloseTo(554, 9); // the lock rabbet's back runs the full width
+    expect(rows.find((r) => r.role === 'back')!.length).toBeCloseTo(554, 9); // the lock rabbet's back runs the full width
   });
 
   test('sides thicker than the model takes are refused on the side thickness (422)', async () => {
@@ -104,15 +104,15 @@ describe('slide models in Shop settings', () => {
         body: {
           label: 'Too thick',
           quantity: 1,
-          size: { from: 'opening', widthMm: 564, heightMm: 180, depthMm: 540 },
+          size: { from: 'opening', width: 564, height: 180, depth: 540 },
           slide: { type: 'undermount', model: { ...rule, id } },
-          thickness: { frontMm: 18, sideMm: 18 },
+          thickness: { front: 18, side: 18 },
         },
       },
     );
     expect(res.status).toBe(422);
     // A rule's figures are written exactly, even in an inch shop: 16 mm is no whole number of 32nds.
-    expect(res.json.fields['thickness.sideMm'][0]).toBe(
+    expect(res.json.fields['thickness.side'][0]).toBe(
       'The Thin sides only takes sides up to 16 mm; these are 18 mm: use thinner sides or another slide',
     );
   });

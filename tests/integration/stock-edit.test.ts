@@ -19,9 +19,9 @@ const newBoard = () =>
       kind: 'board',
       material: 'Cherry',
       nominalThickness: '4/4',
-      thicknessMm: 21,
-      lengthMm: 2438,
-      widthMm: 152,
+      thickness: 21,
+      length: 2438,
+      width: 152,
       onHand: 12,
       lowStockAt: 4,
       costCents: 795,
@@ -100,8 +100,8 @@ describe('PATCH /api/stock/:id', () => {
   });
 
   test.each([
-    ['lengthMm', { lengthMm: 3000 }],
-    ['thicknessMm', { thicknessMm: 19 }],
+    ['length', { length: 3000 }],
+    ['thickness', { thickness: 19 }],
     ['grain', { grain: 'none' }],
     ['onHand', { onHand: 50 }],
     ['kind', { kind: 'sheet' }],

@@ -12,7 +12,7 @@ let fx: TwoShops;
 setUpTwoShopDatabase((app) => ({ db, fx } = app));
 
 /** A part as large as one 2440 × 1220 sheet allows after trim: one part takes one sheet. */
-const oneSheetEach = (quantity: number) => [{ label: 'Panel', quantity, lengthMm: 2000, widthMm: 1000 }];
+const oneSheetEach = (quantity: number) => [{ label: 'Panel', quantity, length: 2000, width: 1000 }];
 
 /** The plan's ledger rows in words, oldest first, as the Stock room's history reads them. */
 async function historyOf(planId: string) {
@@ -57,7 +57,7 @@ describe('the stock history of a plan: one row per physical change, saying reser
   });
 
   test('release, finish and the offcuts it racks keep on hand, reserved and free right, and the ledger sums to them', async () => {
-    const { job, sheet } = await jobWithSheet(db, fx.mine.id, { parts: [{ label: 'Side', quantity: 3, lengthMm: 1800, widthMm: 600 }], onHand: 6 });
+    const { job, sheet } = await jobWithSheet(db, fx.mine.id, { parts: [{ label: 'Side', quantity: 3, length: 1800, width: 600 }], onHand: 6 });
     const { id, plan } = await nestAndSave(fx.estimator, job.id);
     const used = plan.pieces.length;
     await release(fx.estimator, id);

@@ -52,9 +52,9 @@ const newSheet = (over: Partial<Parameters<typeof stockItemSchema.parse>[0]> = {
       kind: 'sheet',
       material: 'Test ply',
       nominalThickness: '18 mm',
-      thicknessMm: 18,
-      lengthMm: 2440,
-      widthMm: 1220,
+      thickness: 18,
+      length: 2440,
+      width: 1220,
       onHand: 4,
       costCents: 5000,
       ...over,
@@ -83,7 +83,7 @@ describe('the demo shop ledger', () => {
     ]);
     expect(ledger.plans[0].id).toBe(plan.id);
     // Yield + kept offcuts + waste account for the whole stock area.
-    const keptArea = result.offcuts.reduce((n, o) => n + o.lengthMm * o.widthMm, 0);
+    const keptArea = result.offcuts.reduce((n, o) => n + o.length * o.width, 0);
     expect(result.yieldRatio + keptArea / document.totals!.stockArea + result.wasteRatio).toBeCloseTo(1, 9);
   });
 });
@@ -132,9 +132,9 @@ describe('counts in the stock room', () => {
       { db, shopId: fx.mine.id, userId: fx.cutter.id },
       {
         material: 'Test ply',
-        thicknessMm: 18,
-        lengthMm: 700,
-        widthMm: 300,
+        thickness: 18,
+        length: 700,
+        width: 300,
         grain: 'along-length',
         location: 'Bin 2',
       },
@@ -155,9 +155,9 @@ describe('counts in the stock room', () => {
         kind: 'board',
         material: 'White oak',
         nominalThickness: '4/4',
-        thicknessMm: inches(13 / 16),
-        lengthMm: inches(96),
-        widthMm: inches(6),
+        thickness: inches(13 / 16),
+        length: inches(96),
+        width: inches(6),
         onHand: 10,
         costCents: 925,
       }),
@@ -168,9 +168,9 @@ describe('counts in the stock room', () => {
         kind: 'sheet',
         material: 'Maple ply',
         nominalThickness: '3/4"',
-        thicknessMm: 18,
-        lengthMm: inches(96),
-        widthMm: inches(48),
+        thickness: 18,
+        length: inches(96),
+        width: inches(48),
         onHand: 2,
         costCents: 9400,
       }),

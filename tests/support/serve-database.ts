@@ -29,9 +29,9 @@ while (!stop) {
         jobId: job.id,
         label: `Part ${k}`,
         quantity: k,
-        lengthMm: 600,
-        widthMm: 300,
-        thicknessMm: 18,
+        length: 600,
+        width: 300,
+        thickness: 18,
         material: 'Birch ply',
       })),
     );

@@ -51,8 +51,8 @@ export async function call<T = any>(
 export interface PartRow {
   label: string;
   quantity: number;
-  lengthMm: number;
-  widthMm: number;
+  length: number;
+  width: number;
   grain?: 'along-length' | 'any';
 }
 
@@ -88,9 +88,9 @@ export async function jobWithSheet(
       jobId: job.id,
       label: p.label,
       quantity: p.quantity,
-      lengthMm: p.lengthMm,
-      widthMm: p.widthMm,
-      thicknessMm: 18,
+      length: p.length,
+      width: p.width,
+      thickness: 18,
       material,
       grain: p.grain ?? 'along-length',
       sort: i,
@@ -98,7 +98,7 @@ export async function jobWithSheet(
   );
   const [sheet] = await db
     .insert(stockItems)
-    .values({ shopId, kind: 'sheet', material, nominalThickness: '18 mm', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand, costCents: 6000 })
+    .values({ shopId, kind: 'sheet', material, nominalThickness: '18 mm', thickness: 18, length: 2440, width: 1220, onHand, costCents: 6000 })
     .returning();
   if (onHand) await db.insert(stockMovements).values({ shopId, kind: 'received', stockItemId: sheet.id, quantity: onHand, reason: 'Opening count' });
   return { job, sheet, material };

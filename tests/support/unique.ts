@@ -12,4 +12,4 @@ export const uniqueEmail = (prefix = 'person') => `${prefix}-${nextNumber()}@exa
 
 /** A stock thickness in mm that no other fixture of this process uses, each a whole millimetre apart (far beyond
  *  the setup-card tolerance of 0.1 mm). */
-export const uniqueThicknessMm = () => 5 + nextNumber();
+export const uniqueThickness = () => 5 + nextNumber();

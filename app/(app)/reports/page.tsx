@@ -221,10 +221,10 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
                         const s = shares(r);
                         const low = s.yield !== null && s.yield * 100 < settings.yieldTargetPercent;
                         return (
-                          <tr key={`${r.period}-${r.material}-${r.thicknessMm}`} data-testid="yield-row">
+                          <tr key={`${r.period}-${r.material}-${r.thickness}`} data-testid="yield-row">
                             <td className="whitespace-nowrap">{periodLabel(r.period, shown.by)}</td>
                             <td className="min-w-36">
-                              {exactLengthText(r.thicknessMm, settings.units)} {r.material}
+                              {exactLengthText(r.thickness, settings.units)} {r.material}
                             </td>
                             <td className={`num whitespace-nowrap ${low ? 'text-brick' : 'text-sage'}`}>{percentText(s.yield)}</td>
                             <td className="num whitespace-nowrap">{percentText(s.sawWaste)}</td>
@@ -317,10 +317,10 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
                     {old.map((o) => (
                       <tr key={o.id} data-testid="old-offcut">
                         <td className="min-w-36">
-                          {exactLengthText(o.thicknessMm, settings.units)} {o.material}
+                          {exactLengthText(o.thickness, settings.units)} {o.material}
                         </td>
                         <td className="num whitespace-nowrap">
-                          {len(o.lengthMm)} × {len(o.widthMm)}
+                          {len(o.length)} × {len(o.width)}
                         </td>
                         <td>{o.location || '—'}</td>
                         <td className="whitespace-nowrap">{o.rackedOn}</td>
@@ -411,7 +411,7 @@ export default async function ReportsPage({ searchParams }: { searchParams: Prom
                           {l.material} {l.nominalThickness} <span className="text-xs font-normal text-graphite-mute">{l.kind}</span>
                         </td>
                         <td className="num whitespace-nowrap">
-                          {len(l.lengthMm)} × {len(l.widthMm)}
+                          {len(l.length)} × {len(l.width)}
                         </td>
                         <td className="num text-brick">{l.free}</td>
                         <td className="num">{l.lowStockAt}</td>

@@ -1,5 +1,5 @@
 import { drawerSchedules, jobs, parts, setupCards } from '@/db/schema';
-import { uniqueThicknessMm } from '../../support/unique';
+import { uniqueThickness } from '../../support/unique';
 import type { AuthzFixtures, AuthzRow } from './types';
 
 const freshJob = async ({ db, mine }: AuthzFixtures) => {
@@ -11,12 +11,12 @@ const freshPart = async (fx: AuthzFixtures) => {
   const { id } = await freshJob(fx);
   const [part] = await fx.db
     .insert(parts)
-    .values({ shopId: fx.mine.id, jobId: id, label: 'Shelf', quantity: 1, lengthMm: 600, widthMm: 300, thicknessMm: 18, material: 'MDF' })
+    .values({ shopId: fx.mine.id, jobId: id, label: 'Shelf', quantity: 1, length: 600, width: 300, thickness: 18, material: 'MDF' })
     .returning();
   return { id, partId: part.id };
 };
 
-const SCHEDULE = { label: 'Matrix drawers', quantity: 2, size: { from: 'box', widthMm: 400, heightMm: 120, depthMm: 500 } };
+const SCHEDULE = { label: 'Matrix drawers', quantity: 2, size: { from: 'box', width: 400, height: 120, depth: 500 } };
 
 const freshSchedule = async (fx: AuthzFixtures) => {
   const { id } = await freshJob(fx);
@@ -27,7 +27,7 @@ const freshSchedule = async (fx: AuthzFixtures) => {
 const freshCard = async ({ db, mine }: AuthzFixtures) => {
   const [c] = await db
     .insert(setupCards)
-    .values({ shopId: mine.id, joint: 'box-joint', stockThicknessMm: uniqueThicknessMm(), fields: {}, note: '' })
+    .values({ shopId: mine.id, joint: 'box-joint', stockThickness: uniqueThickness(), fields: {}, note: '' })
     .returning();
   return { id: c.id };
 };
@@ -37,10 +37,10 @@ const UPLOAD = {
   rows: [{ line: 2, cells: ['Shelf', '1', '600', '300', '18', 'MDF'] }],
   unit: 'mm',
 };
-const PART = { label: 'Shelf', quantity: 1, lengthMm: 600, widthMm: 300, thicknessMm: 18, material: 'MDF' };
+const PART = { label: 'Shelf', quantity: 1, length: 600, width: 300, thickness: 18, material: 'MDF' };
 const CARD = () => ({
   joint: 'rabbet-and-dado',
-  stockThicknessMm: uniqueThicknessMm(),
+  stockThickness: uniqueThickness(),
   fields: [{ key: 'dado-depth', label: 'Dado depth', value: 6.35, unit: 'mm' }],
   note: '',
 });

@@ -14,9 +14,9 @@ const freshJob = async ({ db, mine }: AuthzFixtures) => {
       kind: 'sheet',
       material: 'Birch ply',
       nominalThickness: '18 mm',
-      thicknessMm: 18,
-      lengthMm: 2440,
-      widthMm: 1220,
+      thickness: 18,
+      length: 2440,
+      width: 1220,
       buyable: true,
       costCents: 6400,
     })

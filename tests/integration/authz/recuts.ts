@@ -11,9 +11,9 @@ const freshRecut = async ({ db, mine }: AuthzFixtures) => {
       jobId: job.id,
       label: 'Side',
       instance: 2,
-      lengthMm: 700,
-      widthMm: 560,
-      thicknessMm: 18,
+      length: 700,
+      width: 560,
+      thickness: 18,
       material: 'Birch ply',
       reason: 'Tear-out',
     })

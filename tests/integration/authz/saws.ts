@@ -6,14 +6,14 @@ import type { AuthzFixtures, AuthzRow } from './types';
 const SAW = () => ({
   kind: 'table-saw',
   name: `Matrix saw ${nextNumber()}`,
-  kerfMm: 3.2,
-  ripCapacityMm: 762,
-  crosscutCapacityMm: 610,
-  maxPieceLengthMm: null,
-  maxPieceWidthMm: null,
+  kerf: 3.2,
+  ripCapacity: 762,
+  crosscutCapacity: 610,
+  maxPieceLength: null,
+  maxPieceWidth: null,
   maxStages: 3,
   firstStage: 'rip',
-  minFenceWidthMm: 25.4,
+  minFenceWidth: 25.4,
 });
 
 const freshSaw = async ({ db, mine }: AuthzFixtures) => {

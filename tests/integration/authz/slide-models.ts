@@ -6,13 +6,13 @@ import type { AuthzFixtures, AuthzRow } from './types';
 const MODEL = () => ({
   kind: 'undermount',
   name: `Matrix slide ${nextNumber()}`,
-  lengthsMm: [300, 400, 500],
+  lengths: [300, 400, 500],
   widthRule: 'outside',
-  widthDeductionMm: 10,
-  maxSideThicknessMm: 16,
-  bottomRecessMm: 13,
-  heightClearanceMm: 20,
-  rearClearanceMm: 10,
+  widthDeduction: 10,
+  maxSideThickness: 16,
+  bottomRecess: 13,
+  heightClearance: 20,
+  rearClearance: 10,
 });
 
 const freshModel = async ({ db, mine }: AuthzFixtures) => {

@@ -9,9 +9,9 @@ const freshItem = async ({ db, mine }: AuthzFixtures) => {
       kind: 'sheet',
       material: 'Matrix ply',
       nominalThickness: '18 mm',
-      thicknessMm: 18,
-      lengthMm: 2440,
-      widthMm: 1220,
+      thickness: 18,
+      length: 2440,
+      width: 1220,
       onHand: 2,
     })
     .returning();
@@ -19,7 +19,7 @@ const freshItem = async ({ db, mine }: AuthzFixtures) => {
 };
 
 const freshOffcut = async ({ db, mine }: AuthzFixtures) => {
-  const [o] = await db.insert(offcuts).values({ shopId: mine.id, material: 'Matrix ply', thicknessMm: 18, lengthMm: 600, widthMm: 300 }).returning();
+  const [o] = await db.insert(offcuts).values({ shopId: mine.id, material: 'Matrix ply', thickness: 18, length: 600, width: 300 }).returning();
   return { id: o.id };
 };
 
@@ -52,7 +52,7 @@ export const rows: AuthzRow[] = [
   {
     route: '/api/stock',
     method: 'POST',
-    body: { kind: 'sheet', material: 'Matrix MDF', nominalThickness: '3/4"', thicknessMm: 18, lengthMm: 2440, widthMm: 1220, onHand: 3 },
+    body: { kind: 'sheet', material: 'Matrix MDF', nominalThickness: '3/4"', thickness: 18, length: 2440, width: 1220, onHand: 3 },
     expect: { ...owner(201), other: 201 },
   },
   { route: '/api/stock/[id]', method: 'PATCH', target: freshItem, body: { location: 'Rack Z' }, expect: { ...owner(200), other: 404 } },
@@ -75,7 +75,7 @@ export const rows: AuthzRow[] = [
   {
     route: '/api/offcuts',
     method: 'POST',
-    body: { material: 'Matrix ply', thicknessMm: 18, lengthMm: 700, widthMm: 200, location: 'Bin 1' },
+    body: { material: 'Matrix ply', thickness: 18, length: 700, width: 200, location: 'Bin 1' },
     expect: { anonymous: 401, owner: 201, estimator: 403, cutter: 201, other: 201 },
   },
   {

@@ -49,12 +49,12 @@ export default async function PartPage({ params, searchParams }: { params: Promi
       </header>
 
       <dl className="card mb-6 grid grid-cols-2 gap-x-6 gap-y-3 p-5 sm:grid-cols-4">
-        <Fact label="Length (along the grain)" value={len(part.lengthMm)} mono />
-        <Fact label="Width" value={len(part.widthMm)} mono />
-        <Fact label="Thickness" value={exactLengthText(part.thicknessMm, settings.units)} mono />
+        <Fact label="Length (along the grain)" value={len(part.length)} mono />
+        <Fact label="Width" value={len(part.width)} mono />
+        <Fact label="Thickness" value={exactLengthText(part.thickness, settings.units)} mono />
         <Fact label="Material" value={part.material} />
         <Fact label="Grain" value={part.grain === 'along-length' ? 'Along the length' : 'Either way'} />
-        {part.jointAllowanceMm > 0 && <Fact label="Joint allowance (in the length)" value={len(part.jointAllowanceMm)} mono />}
+        {part.jointAllowance > 0 && <Fact label="Joint allowance (in the length)" value={len(part.jointAllowance)} mono />}
         {part.notes && <Fact label="Notes" value={part.notes} wide />}
       </dl>
 

@@ -46,7 +46,7 @@ export default async function TakeoffPage({ params, searchParams }: { params: Pr
   const describe = Object.fromEntries(
     [...takeoff.pull, ...takeoff.buy].map((l) => [
       l.stockId,
-      `${l.material} ${l.nominalThickness || len(l.thicknessMm)} ${len(l.lengthMm)} × ${len(l.widthMm)}`,
+      `${l.material} ${l.nominalThickness || len(l.thickness)} ${len(l.length)} × ${len(l.width)}`,
     ]),
   );
   const { totals } = takeoff;
