@@ -19,8 +19,8 @@ export default {
         amber: { DEFAULT: '#85601f', wash: '#f8edd3' },
       },
       fontFamily: {
-        sans: ['var(--font-plex-sans)', 'system-ui', 'sans-serif'],
-        mono: ['var(--font-plex-mono)', 'ui-monospace', 'monospace'],
+        sans: ['var(--font-plex-sans)', 'var(--font-plex-sans-symbols)', 'system-ui', 'sans-serif'],
+        mono: ['var(--font-plex-mono)', 'var(--font-plex-mono-symbols)', 'ui-monospace', 'monospace'],
       },
     },
   },

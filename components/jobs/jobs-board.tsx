@@ -26,8 +26,13 @@ interface Column {
   /** The server's sort key; none for a column that does not sort. */
   sort?: JobSortColumn;
   numeric?: boolean;
+  /** Narrower screens leave the column out (a phone shows the job, its customer under it, its status and due day). */
+  from?: 'sm' | 'md';
   cell: (job: JobSummary, timeZone: string) => ReactNode;
 }
+
+const SHOWN_FROM = { sm: 'hidden sm:table-cell', md: 'hidden md:table-cell' } as const;
+const cellClass = (c: Column) => [c.numeric ? 'num' : '', c.from ? SHOWN_FROM[c.from] : ''].filter(Boolean).join(' ') || undefined;
 
 const COLUMNS: Column[] = [
   {
@@ -35,22 +40,26 @@ const COLUMNS: Column[] = [
     header: 'Job',
     sort: 'name',
     cell: (j) => (
-      <Link href={`/jobs/${j.id}`} className="font-medium text-graphite">
-        {j.name}
-      </Link>
+      <>
+        <Link href={`/jobs/${j.id}`} className="font-medium text-graphite">
+          {j.name}
+        </Link>
+        {j.customer && <span className="block text-xs text-graphite-mute sm:hidden">{j.customer}</span>}
+      </>
     ),
   },
-  { id: 'customer', header: 'Customer', sort: 'customer', cell: (j) => j.customer },
+  { id: 'customer', header: 'Customer', sort: 'customer', from: 'sm', cell: (j) => j.customer },
   // Work order, not alphabetical: quoting → quoted → accepted → deposit paid → cutting → done → declined → expired → archived.
   { id: 'status', header: 'Status', sort: 'status', cell: (j) => <JobStatusBadge status={j.status} /> },
   { id: 'due', header: 'Due', sort: 'due', cell: (j) => <span className="whitespace-nowrap">{j.dueDate ?? '—'}</span> },
-  { id: 'parts', header: 'Parts', sort: 'parts', numeric: true, cell: (j) => j.partCount },
-  { id: 'materials', header: 'Materials', cell: (j) => <span className="text-graphite-soft">{j.materials.join(', ') || '—'}</span> },
+  { id: 'parts', header: 'Parts', sort: 'parts', numeric: true, from: 'sm', cell: (j) => j.partCount },
+  { id: 'materials', header: 'Materials', from: 'md', cell: (j) => <span className="text-graphite-soft">{j.materials.join(', ') || '—'}</span> },
   // The day on the shop's clock (a US shop's evening is not tomorrow).
   {
     id: 'updated',
     header: 'Changed',
     sort: 'updated',
+    from: 'md',
     cell: (j, timeZone) => <span className="whitespace-nowrap text-graphite-mute">{shopDay(new Date(j.updatedAt), timeZone)}</span>,
   },
 ];
@@ -218,11 +227,7 @@ export function JobsBoard({
                 {COLUMNS.map((c) => {
                   const sorted = c.sort && sortColumn === c.sort ? sortDir : undefined;
                   return (
-                    <th
-                      key={c.id}
-                      className={c.numeric ? 'num' : undefined}
-                      aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
-                    >
+                    <th key={c.id} className={cellClass(c)} aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}>
                       {c.sort ? (
                         <button type="button" className="uppercase tracking-wide hover:text-graphite" onClick={() => toggleSort(c.sort!)}>
                           {c.header}
@@ -242,7 +247,7 @@ export function JobsBoard({
               {rows.map((job) => (
                 <tr key={job.id} className="hover:bg-paper">
                   {COLUMNS.map((c) => (
-                    <td key={c.id} className={c.numeric ? 'num' : undefined}>
+                    <td key={c.id} className={cellClass(c)}>
                       {c.cell(job, timeZone)}
                     </td>
                   ))}

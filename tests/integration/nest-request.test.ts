@@ -43,8 +43,8 @@ describe('a nesting request built from the database', () => {
         material: 'Cherry',
         nominalThickness: nominal,
         thickness: inches(1),
-        length: length,
-        width: width,
+        length,
+        width,
         costCents: perBf,
       })
       .returning();
