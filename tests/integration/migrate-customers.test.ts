@@ -1,35 +1,18 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { MIGRATIONS_FOLDER, runMigrations, type DbHandle } from '@/db/open';
-import { createTestDatabase } from '../support/test-db';
+import { runMigrations, type DbHandle } from '@/db/open';
+import { databaseBefore } from '../support/database-before';
 
 /**
  * The migration that adds customers turns each job's free-text customer into a customer row (its hand-written SQL at
  * the end of the file). Jobs are written as the code before it wrote them, then the rest of the migrations run.
  */
 let handle: DbHandle;
-let older: string;
-let journal: { entries: { tag: string }[] };
-let index: number;
 
 beforeAll(async () => {
-  handle = await createTestDatabase({ migrate: false });
-  older = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-migrations-'));
-  journal = JSON.parse(fs.readFileSync(path.join(MIGRATIONS_FOLDER, 'meta/_journal.json'), 'utf8'));
-  index = journal.entries.findIndex((e) =>
-    fs.readFileSync(path.join(MIGRATIONS_FOLDER, `${e.tag}.sql`), 'utf8').includes('CREATE TABLE "customers"'),
-  );
-  if (index < 1) throw new Error('No migration creates customers.');
-  fs.mkdirSync(path.join(older, 'meta'));
-  fs.writeFileSync(path.join(older, 'meta/_journal.json'), JSON.stringify({ ...journal, entries: journal.entries.slice(0, index) }));
-  for (const e of journal.entries.slice(0, index)) fs.copyFileSync(path.join(MIGRATIONS_FOLDER, `${e.tag}.sql`), path.join(older, `${e.tag}.sql`));
-  await runMigrations(handle, older);
+  handle = await databaseBefore((_tag, sql) => sql.includes('CREATE TABLE "customers"'), 'creates customers');
 });
 afterAll(async () => {
-  fs.rmSync(older, { recursive: true, force: true });
   await handle?.close();
 });
 
@@ -48,7 +31,7 @@ describe('the customers migration on jobs with free-text customers', () => {
     const shelf = await job(a, 'Shelf', '   ');
     const other = await job(b, 'Their kitchen', 'Priya Hollis');
 
-    await runMigrations(handle, MIGRATIONS_FOLDER);
+    await runMigrations(handle);
 
     const customers = await rows<{ id: string; shop_id: string; name: string }>(sql`select id, shop_id, name from customers order by shop_id, name`);
     expect(

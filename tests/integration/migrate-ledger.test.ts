@@ -1,11 +1,8 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { MIGRATIONS_FOLDER, runMigrations, type DbHandle } from '@/db/open';
+import { runMigrations, type DbHandle } from '@/db/open';
 import { ledgerMismatches } from '@/db/queries/stock';
-import { createTestDatabase } from '../support/test-db';
+import { databaseBefore } from '../support/database-before';
 
 /**
  * The migration that adds `reserved_change` moves existing data to the new shape: the reserved count leaves `quantity` for `reserved_change`,
@@ -13,23 +10,11 @@ import { createTestDatabase } from '../support/test-db';
  * the code before it wrote them, then the migration runs over them.
  */
 let handle: DbHandle;
-let older: string;
 
 beforeAll(async () => {
-  handle = await createTestDatabase({ migrate: false });
-  older = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-migrations-'));
-  const journal = JSON.parse(fs.readFileSync(path.join(MIGRATIONS_FOLDER, 'meta/_journal.json'), 'utf8'));
-  const index = journal.entries.findIndex((e: { tag: string }) =>
-    fs.readFileSync(path.join(MIGRATIONS_FOLDER, `${e.tag}.sql`), 'utf8').includes('ADD COLUMN "reserved_change"'),
-  );
-  if (index < 1) throw new Error('No migration adds stock_movements.reserved_change.');
-  fs.mkdirSync(path.join(older, 'meta'));
-  fs.writeFileSync(path.join(older, 'meta/_journal.json'), JSON.stringify({ ...journal, entries: journal.entries.slice(0, index) }));
-  for (const e of journal.entries.slice(0, index)) fs.copyFileSync(path.join(MIGRATIONS_FOLDER, `${e.tag}.sql`), path.join(older, `${e.tag}.sql`));
-  await runMigrations(handle, older);
+  handle = await databaseBefore((_tag, sql) => sql.includes('ADD COLUMN "reserved_change"'), 'adds stock_movements.reserved_change');
 });
 afterAll(async () => {
-  fs.rmSync(older, { recursive: true, force: true });
   await handle?.close();
 });
 

@@ -1,13 +1,10 @@
-import fs from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
 import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { MIGRATIONS_FOLDER, runMigrations, type DbHandle } from '@/db/open';
+import { runMigrations, type DbHandle } from '@/db/open';
 import { drawerScheduleSchema } from '@/shared/schemas/drawer-schedule';
 import { nestSawSchema } from '@/shared/schemas/saw';
 import { inches } from '@/lib/units/length';
-import { createTestDatabase } from '../support/test-db';
+import { databaseBefore } from '../support/database-before';
 
 /**
  * Lengths lost their `Mm` suffix (every length is mm). The migration renames the keys of the JSON stored the old way —
@@ -15,21 +12,11 @@ import { createTestDatabase } from '../support/test-db';
  * written as the code before it wrote them, then the migration runs over them.
  */
 let handle: DbHandle;
-let older: string;
 
 beforeAll(async () => {
-  handle = await createTestDatabase({ migrate: false });
-  older = fs.mkdtempSync(path.join(os.tmpdir(), 'kerfwise-migrations-'));
-  const journal = JSON.parse(fs.readFileSync(path.join(MIGRATIONS_FOLDER, 'meta/_journal.json'), 'utf8'));
-  const index = journal.entries.findIndex((e: { tag: string }) => e.tag.endsWith('_lengths-without-unit'));
-  if (index < 1) throw new Error('No migration renames the lengths stored in JSON.');
-  fs.mkdirSync(path.join(older, 'meta'));
-  fs.writeFileSync(path.join(older, 'meta/_journal.json'), JSON.stringify({ ...journal, entries: journal.entries.slice(0, index) }));
-  for (const e of journal.entries.slice(0, index)) fs.copyFileSync(path.join(MIGRATIONS_FOLDER, `${e.tag}.sql`), path.join(older, `${e.tag}.sql`));
-  await runMigrations(handle, older);
+  handle = await databaseBefore((tag) => tag.endsWith('_lengths-without-unit'), 'renames the lengths stored in JSON');
 });
 afterAll(async () => {
-  fs.rmSync(older, { recursive: true, force: true });
   await handle?.close();
 });
 
